@@ -1,0 +1,3 @@
+"""shopbeam: beam checks for fabrication shops."""
+
+__version__ = "0.1.0"

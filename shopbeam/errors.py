@@ -1,0 +1,67 @@
+"""Errors a user can act on: what is wrong, where (file, key path, line) and what to do.
+
+Everything a user typed or saved that shopbeam cannot use raises `InputError` (or a list of
+them in `InputErrors`); the CLI prints them as one block and exits 2, never a traceback.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+
+@dataclass
+class Problem:
+    """One problem with the input, located as precisely as the input allows."""
+
+    message: str
+    key: str = ""
+    file: str = ""
+    line: int | None = None
+    warning: bool = False
+
+    def located(self) -> str:
+        where = self.file or ""
+        if self.line is not None and where:
+            where += f":{self.line}"
+        elif self.line is not None:
+            where = f"line {self.line}"
+        parts = [p for p in (where, self.key) if p]
+        prefix = ": ".join(parts)
+        kind = "warning: " if self.warning else ""
+        return f"{prefix}: {kind}{self.message}" if prefix else f"{kind}{self.message}"
+
+
+class InputError(Exception):
+    """A single problem with user input (job file, designation, command-line value)."""
+
+    def __init__(self, message: str, key: str = "", file: str = "", line: int | None = None):
+        super().__init__(message)
+        self.problem = Problem(message, key, file, line)
+
+    def __str__(self) -> str:
+        return self.problem.located()
+
+
+class InputErrors(Exception):
+    """Several problems found in one pass over a job file."""
+
+    def __init__(self, problems: list[Problem]):
+        super().__init__("; ".join(p.located() for p in problems))
+        self.problems = problems
+
+    def __str__(self) -> str:
+        n = len(self.problems)
+        head = f"{n} problem{'s' if n != 1 else ''} in the job:"
+        return "\n".join([head] + ["  " + p.located() for p in self.problems])
+
+
+class UnstableBeam(Exception):
+    """The supports and hinges let the beam move as a rigid body or a mechanism."""
+
+    def __init__(self, message: str, file: str = ""):
+        super().__init__(message)
+        self.file = file
+
+    def __str__(self) -> str:
+        msg = super().__str__()
+        return f"{self.file}: unstable beam: {msg}" if self.file else f"unstable beam: {msg}"

@@ -1,0 +1,291 @@
+"""Units: the one pint registry of the process, shop-notation parsing, and display.
+
+Every dimensional input is a string with its unit. `parse(text, kind)` turns it into an SI
+float (m, N, N/m, N*m, Pa, ...) and understands shop notation that pint alone reads wrong:
+mixed fractions (``1-1/2 in``, ``1 1/2 in``), feet and inches (``10 ft 6 in``, ``10' 6"``,
+``10'-6 1/2"``). A bare number, a wrong dimension or a value that is not finite raises
+`InputError`. Inside shopbeam everything is SI floats; display conversion uses fixed factors
+(`fmt`) so reports never need the registry.
+"""
+
+from __future__ import annotations
+
+import math
+import re
+from fractions import Fraction
+from functools import lru_cache
+
+from shopbeam.errors import InputError
+
+G0 = 9.80665  # standard gravity, m/s^2 (exact by definition, CGPM 1901)
+
+# Exact conversion factors (international foot and pound, 1959; lbf from g0).
+FT = 0.3048
+IN = 0.0254
+LBF = 4.4482216152605
+LB = 0.45359237
+KIP = 1000 * LBF
+PSI = LBF / IN**2
+KSI = 1000 * PSI
+
+_REGISTRY = None
+
+_EXTRA_DEFINITIONS = (
+    "plf = force_pound / foot",
+    "klf = kip / foot",
+    "psf = force_pound / foot ** 2",
+    "ksf = kip / foot ** 2",
+    "pcf = pound / foot ** 3",
+)
+
+
+def ureg():
+    """The process's single pint registry, created on first use (it costs ~0.3 s)."""
+    global _REGISTRY
+    if _REGISTRY is None:
+        import pint
+
+        try:
+            reg = pint.UnitRegistry(cache_folder=":auto:")
+        except Exception:  # an unwritable cache folder must not stop the tool
+            reg = pint.UnitRegistry()
+        for line in _EXTRA_DEFINITIONS:
+            reg.define(line)
+        _REGISTRY = reg
+    return _REGISTRY
+
+
+# kind -> (SI reference unit, words for messages, example)
+KINDS: dict[str, tuple[str, str, str]] = {
+    "length": ("m", "a length", '"8 ft" or "2.4 m"'),
+    "force": ("N", "a force", '"-300 lbf" or "-1.2 kN"'),
+    "line_load": ("N/m", "a load per length", '"-25 lbf/ft" or "-0.4 kN/m"'),
+    "area_load": ("Pa", "a load per area", '"-125 psf" or "-6 kPa"'),
+    "moment": ("N*m", "a moment", '"150 lbf*ft" or "0.2 kN*m"'),
+    "stiffness": ("N/m", "a spring stiffness (force per length)", '"2000 lbf/in"'),
+    "rot_stiffness": ("N*m", "a rotational stiffness (moment per radian)", '"50000 lbf*ft/rad"'),
+    "stress": ("Pa", "a stress", '"36 ksi" or "250 MPa"'),
+    "area": ("m^2", "an area", '"3.37 in^2"'),
+    "inertia": ("m^4", "a second moment of area", '"7.80 in^4"'),
+    "modulus": ("m^3", "a section modulus", '"3.90 in^3"'),
+    "density": ("kg/m^3", "a density", '"490 lb/ft^3" or "7850 kg/m^3"'),
+    "mass_per_length": ("kg/m", "a weight per length", '"12.2 lb/ft" or "18 kg/m"'),
+}
+
+# Kinds where a weight (mass) unit is read as the force of that mass under standard gravity:
+# shop people say "500 lb" and "200 kg" for loads.
+_WEIGHT_OK = {"force": "kg", "line_load": "kg/m", "area_load": "kg/m^2", "moment": "kg*m"}
+# Kinds where a force unit is read as mass under standard gravity (lbf/ft^3 for density).
+_MASS_FROM_FORCE = {"density": "N/m^3", "mass_per_length": "N/m"}
+
+_NUM = r"(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?"
+_TERM = re.compile(
+    r"\s*(?:(?P<whole>\d+)(?:\s+|-)(?P<n>\d+)\s*/\s*(?P<d>\d+)"  # 1-1/2, 1 1/2
+    r"|(?P<fn>\d+)\s*/\s*(?P<fd>\d+)"  # 3/16
+    rf"|(?P<dec>{_NUM}))"  # 2.5, 3e4
+    r"\s*(?P<unit>[^\d\s+\-.][^\s]*(?:\s+(?![\d.+\-])[^\s]+)*)?"
+)
+_SEP = re.compile(r"\s*-?\s*")
+_UNICODE = {
+    "\u2032": "'", "\u2033": '"', "\u2019": "'", "\u201d": '"', "\u201c": '"',
+    "\u00b7": "*", "\u22c5": "*", "\u00d7": "*", "\u2212": "-", "\u2013": "-",
+    "\u00b2": "^2", "\u00b3": "^3", "\u2074": "^4", "\u00b5": "u", "\u03bc": "u",
+}
+
+
+def _normalise(text: str) -> str:
+    for a, b in _UNICODE.items():
+        text = text.replace(a, b)
+    text = text.replace("''", '"')
+    # feet and inch marks become words; a mark is only a mark right after a number or space
+    text = re.sub(r"(?<=[\d\s])'", " ft ", text)
+    text = re.sub(r'(?<=[\d\s])"', " in ", text)
+    return text.strip()
+
+
+def _terms(text: str) -> tuple[int, list[tuple[Fraction | float, str]]] | None:
+    """Split shop notation into (sign, [(number, unit text), ...]); None if it does not scan."""
+    s = _normalise(text)
+    sign = 1
+    if s[:1] in "+-":
+        sign = -1 if s[0] == "-" else 1
+        s = s[1:]
+    pos, out = 0, []
+    while pos < len(s):
+        if out:
+            m = _SEP.match(s, pos)
+            pos = m.end()
+        m = _TERM.match(s, pos)
+        if not m or m.end() == pos:
+            return None
+        if m.group("whole") is not None:
+            d = int(m.group("d"))
+            if d == 0:
+                return None
+            num: Fraction | float = int(m.group("whole")) + Fraction(int(m.group("n")), d)
+        elif m.group("fn") is not None:
+            d = int(m.group("fd"))
+            if d == 0:
+                return None
+            num = Fraction(int(m.group("fn")), d)
+        else:
+            dec = m.group("dec")
+            try:
+                num = Fraction(dec) if "e" not in dec.lower() else float(dec)
+            except (ValueError, ZeroDivisionError):
+                num = float(dec)
+        out.append((num, (m.group("unit") or "").strip()))
+        pos = m.end()
+    return (sign, out) if out else None
+
+
+@lru_cache(maxsize=512)
+def _unit(text: str):
+    reg = ureg()
+    return reg.parse_units(text.replace("^", "**"))
+
+
+def quantity(text: str, key: str = ""):
+    """Parse shop notation to a pint Quantity (sum of compound terms). Raises InputError."""
+    if not isinstance(text, str):
+        raise InputError(
+            f"expected a value with its unit in quotes, found {text!r}", key)
+    if len(text) > 200:
+        raise InputError("value is too long (more than 200 characters)", key)
+    scanned = _terms(text)
+    if scanned is None:
+        raise InputError(f"cannot read {text!r} as a number with a unit "
+                         "(write e.g. \"8 ft\", \"1-1/2 in\", \"10' 6\\\"\")", key)
+    sign, terms = scanned
+    if any(not unit for _, unit in terms):
+        raise InputError(f"{text!r} has a bare number: give its unit (e.g. \"{terms[0][0]} ft\"); "
+                         "shopbeam never guesses a unit", key)
+    reg = ureg()
+    total = None
+    for num, unit in terms:
+        try:
+            u = _unit(unit)
+        except Exception:
+            raise InputError(f"unknown unit {unit!r} in {text!r}", key) from None
+        q = reg.Quantity(float(num), u)
+        if total is None:
+            total = q
+        elif q.dimensionality != total.dimensionality:
+            raise InputError(f"cannot add {unit!r} to {terms[0][1]!r} in {text!r}", key)
+        else:
+            total = total + q.to(total.units)
+    value = sign * total
+    if not math.isfinite(float(value.magnitude)):
+        raise InputError(f"{text!r} is not a finite number", key)
+    return value
+
+
+@lru_cache(maxsize=64)
+def _dim(ref: str):
+    return _unit(ref).dimensionality
+
+
+def describe_dimension(q) -> str:
+    for kind, (ref, words, _) in KINDS.items():
+        if kind in ("stiffness",):
+            continue
+        if q.dimensionality == _dim(ref):
+            return words
+    if q.dimensionality == _dim("kg"):
+        return "a mass"
+    if not q.dimensionality:
+        return "a plain number"
+    return f"a quantity in {q.units:~}"
+
+
+def parse(text, kind: str, key: str = "", *, positive: bool = False,
+          nonnegative: bool = False) -> float:
+    """Parse `text` as a `kind` (see KINDS) and return the SI value as a float."""
+    ref, words, example = KINDS[kind]
+    q = quantity(text, key)
+    if q.dimensionality == _dim(ref):
+        value = float(q.to(ref).magnitude)
+    elif kind in _WEIGHT_OK and q.dimensionality == _dim(_WEIGHT_OK[kind]):
+        value = float(q.to(_WEIGHT_OK[kind]).magnitude) * G0
+    elif kind in _MASS_FROM_FORCE and q.dimensionality == _dim(_MASS_FROM_FORCE[kind]):
+        value = float(q.to(_MASS_FROM_FORCE[kind]).magnitude) / G0
+    else:
+        raise InputError(f"{text!r} is {describe_dimension(q)}, but {words} is expected here "
+                         f"(e.g. {example})", key)
+    if not math.isfinite(value):
+        raise InputError(f"{text!r} is out of range", key)
+    if positive and value <= 0:
+        raise InputError(f"{text!r} must be greater than zero", key)
+    if nonnegative and value < 0:
+        raise InputError(f"{text!r} must not be negative", key)
+    return value
+
+
+# ---------------------------------------------------------------- display
+# (factor from SI, label) per display system and kind
+DISPLAY: dict[str, dict[str, tuple[float, str]]] = {
+    "us": {
+        "length": (1 / FT, "ft"),
+        "small_length": (1 / IN, "in"),
+        "force": (1 / LBF, "lbf"),
+        "line_load": (FT / LBF, "lbf/ft"),
+        "area_load": (FT**2 / LBF, "psf"),
+        "moment": (1 / (LBF * FT), "lbf*ft"),
+        "stiffness": (IN / LBF, "lbf/in"),
+        "rot_stiffness": (1 / (LBF * FT), "lbf*ft/rad"),
+        "stress": (1 / KSI, "ksi"),
+        "area": (1 / IN**2, "in^2"),
+        "inertia": (1 / IN**4, "in^4"),
+        "modulus": (1 / IN**3, "in^3"),
+        "density": (FT**3 / LB, "lb/ft^3"),
+        "mass_per_length": (FT / LB, "lb/ft"),
+        "slope": (1.0, "rad"),
+        "ei": (1 / (LBF * IN**2), "lbf*in^2"),
+    },
+    "si": {
+        "length": (1.0, "m"),
+        "small_length": (1000.0, "mm"),
+        "force": (1e-3, "kN"),
+        "line_load": (1e-3, "kN/m"),
+        "area_load": (1e-3, "kPa"),
+        "moment": (1e-3, "kN*m"),
+        "stiffness": (1e-3, "kN/m"),
+        "rot_stiffness": (1e-3, "kN*m/rad"),
+        "stress": (1e-6, "MPa"),
+        "area": (1e6, "mm^2"),
+        "inertia": (1e12, "mm^4"),
+        "modulus": (1e9, "mm^3"),
+        "density": (1.0, "kg/m^3"),
+        "mass_per_length": (1.0, "kg/m"),
+        "slope": (1.0, "rad"),
+        "ei": (1e-3, "kN*m^2"),
+    },
+}
+
+
+def to_display(value: float, kind: str, system: str = "us") -> float:
+    return value * DISPLAY[system][kind][0]
+
+
+def unit_label(kind: str, system: str = "us") -> str:
+    return DISPLAY[system][kind][1]
+
+
+def num(value: float, sig: int = 4) -> str:
+    """A number to `sig` significant figures, without exponent for shop-sized values."""
+    if value == 0 or not math.isfinite(value):
+        return "0" if value == 0 else str(value)
+    mag = math.floor(math.log10(abs(value)))
+    if mag >= 7 or mag <= -5:
+        return f"{value:.{sig - 1}e}"
+    decimals = max(sig - 1 - mag, 0)
+    text = f"{value:.{decimals}f}"
+    if "." in text:
+        text = text.rstrip("0").rstrip(".")
+    return "0" if text in ("-0", "") else text
+
+
+def fmt(value: float, kind: str, system: str = "us", sig: int = 4) -> str:
+    """Format an SI value in the display system: fmt(3.6576, 'length') -> '12 ft'."""
+    factor, label = DISPLAY[system][kind]
+    return f"{num(value * factor, sig)} {label}"
