@@ -1,0 +1,82 @@
+"""One job in, one answer out: solve, check, and gather the cautions.
+
+`analyze(job)` is what the CLI report, the JSON, the rating label and the text UI all render.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+from shopbeam import units
+from shopbeam.cautions import cautions_for
+from shopbeam.checks import Check, governing, run_checks
+from shopbeam.jobfile import Job
+from shopbeam.solver import Solution, solve
+
+
+@dataclass(frozen=True)
+class Result:
+    job: Job
+    solution: Solution
+    checks: tuple[Check, ...]
+    cautions: tuple[str, ...]
+
+    @property
+    def governing(self) -> Check:
+        return governing(list(self.checks))
+
+    @property
+    def ok(self) -> bool:
+        return all(c.ok for c in self.checks)
+
+
+def length_formatter(system: str):
+    return lambda x: units.fmt(x, "length", system)
+
+
+def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
+    out = cautions_for(job.tags)
+    out.extend(getattr(job.section, "warnings", ()) or ())
+    if job.members > 1:
+        out.append(f"Loads are shared by {job.members} identical members: each is checked for "
+                   f"1/{job.members} of the entered loads. Make sure the load really divides "
+                   "evenly (stiff deck, centred loads).")
+    if sol is not None:
+        bad = [d.name for d in sol.diagnostics if not d.ok]
+        if bad:
+            out.append("A self-check did not pass (" + ", ".join(bad) + "): do not rely on "
+                       "these numbers until the job is reviewed.")
+    return out
+
+
+def analyze(job: Job) -> Result:
+    """Solve the job's member and run its checks. Raises UnstableBeam."""
+    sol = solve(job.beam(), length_fmt=length_formatter(job.units))
+    checks = run_checks(job, sol)
+    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol)))
+
+
+def to_json(result: Result) -> dict:
+    """The contract's JSON (SI units throughout)."""
+    job, sol = result.job, result.solution
+    ex = sol.extremes()
+    return {
+        "schema": 1,
+        "title": job.title,
+        "length": job.length,
+        "reactions": [
+            {"at": r.at, "type": r.kind, "force": r.force, "moment": r.moment}
+            for r in sol.reactions
+        ],
+        "extremes": {name: e.as_dict() for name, e in ex.items()},
+        "checks": [c.as_dict() for c in result.checks],
+        "governing": result.governing.name,
+        "diagnostics": [{"name": d.name, "ok": d.ok, "detail": d.detail} for d in sol.diagnostics],
+        "cautions": list(result.cautions),
+        "members": job.members,
+        "section": getattr(job.section, "designation", ""),
+        "material": getattr(job.material, "key", ""),
+        "ei": job.ei,
+        "self_weight": (-job.self_weight_load().w1 if job.self_weight else 0.0),
+        "units": "SI (m, N, N*m, Pa, rad)",
+    }

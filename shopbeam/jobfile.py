@@ -1,0 +1,591 @@
+"""Job files (TOML, schema 1) in, validated `Job` records out.
+
+Validation reports every problem in one pass, each with the file, the key path
+(``loads[2].at``, counted from 0 like the file's own order, with the ordinal in words) and the
+line where the text gives one. Unknown keys are warnings that name the nearest known key, so a
+typo never silently drops a load. A file with a newer schema is refused; schema 1 stays
+readable. Nothing in a job file is ever evaluated as code.
+"""
+
+from __future__ import annotations
+
+import difflib
+import math
+import re
+import tomllib
+from dataclasses import dataclass, field, replace
+from pathlib import Path
+
+from shopbeam import units
+from shopbeam.errors import InputError, InputErrors, Problem
+from shopbeam.model import Beam, Load, Support
+
+SCHEMA = 1
+MAX_FILE_BYTES = 1_000_000
+MAX_LOADS = 1000
+MAX_SUPPORTS = 200
+
+# Known keys per table. Other modules may add their own keys here at import time.
+KNOWN_KEYS: dict[str, set[str]] = {
+    "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria"},
+    "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded"},
+    "supports": {"at", "type", "stiffness", "label"},
+    "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
+              "patterned"},
+    "criteria": {"deflection", "safety_factor"},
+}
+
+
+@dataclass(frozen=True)
+class Criteria:
+    """What the member is checked against."""
+
+    deflection: str = "L/240"  # as written
+    deflection_ratio: float | None = 240.0  # n in L/n
+    deflection_abs: float | None = None  # m
+    safety_factor: float = 1.67
+    extra: dict = field(default_factory=dict)  # further criteria keys, as written
+
+
+@dataclass(frozen=True)
+class Job:
+    """A validated job: what the member is, how it is held, what it carries (SI)."""
+
+    title: str
+    length: float
+    section: object  # shopbeam.sections.Section
+    material: object  # shopbeam.materials.Material
+    supports: tuple[Support, ...]
+    loads: tuple[Load, ...]  # as entered, per job (before sharing between members)
+    criteria: Criteria = field(default_factory=Criteria)
+    notes: str = ""
+    units: str = "us"
+    tags: tuple[str, ...] = ()
+    self_weight: bool = True
+    members: int = 1
+    welded: bool = False
+    path: str = ""
+    data: dict = field(default_factory=dict, repr=False)
+    warnings: tuple[Problem, ...] = ()
+    conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
+
+    @property
+    def lifting(self) -> bool:
+        return any(t.lower() == "lifting" for t in self.tags)
+
+    @property
+    def ei(self) -> float:
+        return self.material.e * self.section.ix
+
+    def self_weight_load(self) -> Load | None:
+        if not self.self_weight:
+            return None
+        w = self.section.weight_per_length(self.material.density) * units.G0
+        return Load("uniform", start=0.0, end=self.length, w1=-w, label="self-weight",
+                    case="dead", key="beam.self_weight")
+
+    def member_loads(self, live_factor: float = 1.0, dead_factor: float = 1.0) -> tuple[Load, ...]:
+        """The loads one member carries: its share of the entered loads plus its own weight."""
+        share = 1.0 / self.members
+        out = []
+        for ld in self.loads:
+            k = share * (live_factor if ld.case == "live" else dead_factor)
+            out.append(ld.scaled(k) if k != 1.0 else ld)
+        sw = self.self_weight_load()
+        if sw is not None:
+            out.append(sw.scaled(dead_factor) if dead_factor != 1.0 else sw)
+        return tuple(out)
+
+    def beam(self, live_factor: float = 1.0, dead_factor: float = 1.0) -> Beam:
+        return Beam(self.length, self.ei, self.supports,
+                    self.member_loads(live_factor, dead_factor))
+
+    def with_changes(self, **kw) -> "Job":
+        return replace(self, **kw)
+
+
+# ------------------------------------------------------------------ line locator
+_HEADER = re.compile(r"^\s*(\[\[?)\s*([A-Za-z0-9_.\-\" ]+?)\s*\]\]?\s*(#.*)?$")
+_KEYLINE = re.compile(r"^\s*([A-Za-z0-9_\-]+|\"[^\"]*\")\s*=")
+
+
+def key_lines(text: str) -> dict[str, int]:
+    """Map key paths (``beam.length``, ``loads[2].at``, ``loads[2]``) to 1-based lines."""
+    lines: dict[str, int] = {}
+    counts: dict[str, int] = {}
+    table = ""
+    for n, raw in enumerate(text.splitlines(), start=1):
+        m = _HEADER.match(raw)
+        if m and not _KEYLINE.match(raw):
+            name = m.group(2).replace('"', "").replace(" ", "")
+            if m.group(1) == "[[":
+                idx = counts.get(name, 0)
+                counts[name] = idx + 1
+                table = f"{name}[{idx}]"
+            else:
+                parts = name.split(".")
+                # a sub-table of the latest array entry, e.g. [loads.extra]
+                if parts[0] in counts:
+                    parts[0] = f"{parts[0]}[{counts[parts[0]] - 1}]"
+                table = ".".join(parts)
+            lines.setdefault(table, n)
+            continue
+        m = _KEYLINE.match(raw)
+        if m:
+            key = m.group(1).strip('"')
+            path = f"{table}.{key}" if table else key
+            lines.setdefault(path, n)
+    return lines
+
+
+# ------------------------------------------------------------------ reading
+def _ordinal(i: int) -> str:
+    n = i + 1
+    suffix = "th" if 10 <= n % 100 <= 20 else {1: "st", 2: "nd", 3: "rd"}.get(n % 10, "th")
+    return f"{n}{suffix}"
+
+
+class _Reader:
+    """Collects every problem while reading one job."""
+
+    def __init__(self, filename: str, text: str | None):
+        self.file = filename
+        self.lines = key_lines(text) if text else {}
+        self.problems: list[Problem] = []
+
+    def line_for(self, key: str) -> int | None:
+        k = key
+        while k:
+            if k in self.lines:
+                return self.lines[k]
+            if k.endswith("]"):
+                k = k[: k.rfind("[")]
+            elif "." in k:
+                k = k.rsplit(".", 1)[0]
+            else:
+                k = ""
+        return None
+
+    def error(self, message: str, key: str = ""):
+        self.problems.append(Problem(message, key, self.file, self.line_for(key)))
+
+    def warn(self, message: str, key: str = ""):
+        self.problems.append(Problem(message, key, self.file, self.line_for(key), warning=True))
+
+    def take(self, exc: InputError, key: str = ""):
+        p = exc.problem
+        k = p.key or key
+        self.problems.append(Problem(p.message, k, self.file, self.line_for(k)))
+
+    def parse(self, table: dict, name: str, kind: str, key: str, required=True, **kw):
+        if name not in table:
+            if required:
+                self.error(f"missing {name!r} ({units.KINDS[kind][1]}, e.g. {units.KINDS[kind][2]})", key)
+            return None
+        try:
+            return units.parse(table[name], kind, key, **kw)
+        except InputError as e:
+            self.take(e, key)
+            return None
+
+    def unknown_keys(self, table: dict, known: set[str], prefix: str, label: str):
+        for k in table:
+            if k in known:
+                continue
+            near = difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.6)
+            hint = f"; did you mean {near[0]!r}?" if near else f"; known keys: {', '.join(sorted(known))}"
+            path = f"{prefix}.{k}" if prefix else k
+            self.warn(f"unknown key {k!r} in {label} is ignored{hint}", path)
+
+    @property
+    def errors(self) -> list[Problem]:
+        return [p for p in self.problems if not p.warning]
+
+
+def _is_table(v) -> bool:
+    return isinstance(v, dict)
+
+
+def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | None]:
+    key = "criteria.deflection"
+    if not isinstance(text, str):
+        r.error(f"expected a limit like \"L/240\" or \"0.25 in\", found {text!r}", key)
+        return "L/240", 240.0, None
+    m = re.fullmatch(r"\s*[Ll]\s*/\s*(\d+(?:\.\d+)?)\s*", text)
+    if m:
+        n = float(m.group(1))
+        if n <= 0:
+            r.error(f"{text!r}: n in L/n must be positive", key)
+            return text, None, None
+        return text, n, None
+    try:
+        return text, None, units.parse(text, "length", key, positive=True)
+    except InputError:
+        r.error(f"cannot read {text!r} as a deflection limit: write \"L/240\" (span over 240) "
+                "or an absolute limit such as \"0.25 in\"", key)
+        return text, None, None
+
+
+def _position(r: _Reader, table: dict, name: str, key: str, length: float | None,
+              default: float | None = None) -> float | None:
+    if name not in table and default is not None:
+        return default
+    x = r.parse(table, name, "length", f"{key}.{name}", nonnegative=True)
+    if x is None:
+        return None
+    if length is not None and x > length * (1 + 1e-9):
+        r.error(f"{units.fmt(x, 'length')} is beyond the end of the beam "
+                f"({units.fmt(length, 'length')}): positions run from 0 at the left end", f"{key}.{name}")
+        return None
+    return min(x, length) if length is not None else x
+
+
+def _read_support(r: _Reader, i: int, s, length) -> Support | None:
+    key = f"supports[{i}]"
+    if not _is_table(s):
+        r.error(f"the {_ordinal(i)} support must be a table ([[supports]])", key)
+        return None
+    r.unknown_keys(s, KNOWN_KEYS["supports"], key, f"the {_ordinal(i)} support")
+    kind = s.get("type")
+    kinds = ("fixed", "pin", "roller", "spring", "hinge")
+    if kind not in kinds:
+        near = difflib.get_close_matches(str(kind), kinds, n=1)
+        hint = f" (did you mean {near[0]!r}?)" if near else ""
+        r.error(f"type {kind!r} is not a support type{hint}; use one of {', '.join(kinds)}",
+                f"{key}.type")
+        kind = None
+    at = _position(r, s, "at", key, length)
+    stiffness = 0.0
+    if kind == "spring":
+        stiffness = r.parse(s, "stiffness", "stiffness", f"{key}.stiffness", positive=True)
+    elif "stiffness" in s:
+        r.warn(f"stiffness is only used by a spring; this {kind} support ignores it", f"{key}.stiffness")
+    if kind is None or at is None or stiffness is None:
+        return None
+    return Support(at, kind, stiffness or 0.0, key)
+
+
+def _line_load(r: _Reader, ld: dict, raw, key: str, width_needed: list) -> float | None:
+    """A load per length, or a load per area times the tributary width."""
+    try:
+        return units.parse(raw, "line_load", key)
+    except InputError as first:
+        try:
+            p = units.parse(raw, "area_load", key)
+        except InputError:
+            r.take(first, key)
+            return None
+        width_needed.append((raw, p))
+        return p  # multiplied by the width by the caller
+
+
+def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None:
+    key = f"loads[{i}]"
+    where = f"the {_ordinal(i)} load"
+    if not _is_table(ld):
+        r.error(f"{where} must be a table ([[loads]])", key)
+        return None
+    r.unknown_keys(ld, KNOWN_KEYS["loads"], key, where)
+    kind = ld.get("type")
+    kinds = ("point", "moment", "uniform", "linear")
+    if kind not in kinds:
+        near = difflib.get_close_matches(str(kind), kinds + ("couple", "distributed"), n=1)
+        hint = f" (did you mean {near[0]!r}?)" if near else ""
+        r.error(f"type {kind!r} is not a load type{hint}; use one of {', '.join(kinds)}", f"{key}.type")
+        return None
+    case = ld.get("case", "live")
+    if case not in ("live", "dead"):
+        r.error(f"case {case!r} must be \"live\" or \"dead\"", f"{key}.case")
+        case = "live"
+    label = ld.get("label", "")
+    if not isinstance(label, str):
+        r.error("label must be text in quotes", f"{key}.label")
+        label = ""
+    patterned = ld.get("patterned", False)
+    if not isinstance(patterned, bool):
+        r.error("patterned must be true or false", f"{key}.patterned")
+        patterned = False
+    common = dict(label=label, case=case, key=key, patterned=patterned)
+    if kind in ("point", "moment"):
+        at = _position(r, ld, "at", key, length)
+        if kind == "point":
+            v = r.parse(ld, "value", "force", f"{key}.value")
+        else:
+            v = r.parse(ld, "value", "moment", f"{key}.value")
+        if at is None or v is None:
+            return None
+        return Load(kind, at=at, value=v, **common)
+    start = _position(r, ld, "start", key, length, default=0.0)
+    end = _position(r, ld, "end", key, length, default=length if length is not None else None)
+    if start is None or end is None:
+        return None
+    if not end > start:
+        r.error(f"end ({units.fmt(end, 'length')}) must be beyond start ({units.fmt(start, 'length')})",
+                f"{key}.end")
+        return None
+    area: list = []
+    if kind == "uniform":
+        if "total" in ld and "value" in ld:
+            r.error("give either value (load per length) or total (the whole load), not both",
+                    f"{key}.total")
+            return None
+        if "total" in ld:
+            total = r.parse(ld, "total", "force", f"{key}.total")
+            if total is None:
+                return None
+            w = total / (end - start)
+            conversions.append((key, f"total {ld['total']} over {units.fmt(end - start, 'length')}",
+                                w))
+        else:
+            w = _line_load(r, ld, ld.get("value"), f"{key}.value", area) if "value" in ld else None
+            if "value" not in ld:
+                r.error("missing 'value' (a load per length such as \"-25 lbf/ft\", a load per "
+                        "area with a width, or give 'total')", f"{key}.value")
+                return None
+            if w is None:
+                return None
+        w1 = w2 = w
+    else:
+        vals = ld.get("value")
+        if not (isinstance(vals, list) and len(vals) == 2):
+            r.error("a linear load needs value = [\"start intensity\", \"end intensity\"], "
+                    "e.g. [\"0 lbf/ft\", \"-60 lbf/ft\"]", f"{key}.value")
+            return None
+        w1 = _line_load(r, ld, vals[0], f"{key}.value[0]", area)
+        w2 = _line_load(r, ld, vals[1], f"{key}.value[1]", area)
+        if w1 is None or w2 is None:
+            return None
+        if len(area) not in (0, 2):
+            r.error("give both intensities per length or both per area", f"{key}.value")
+            return None
+    if area:
+        width = r.parse(ld, "width", "length", f"{key}.width", positive=True)
+        if "width" not in ld:
+            r.problems[-1] = Problem(
+                "a load per area needs the tributary width it acts over (width = \"16 in\", "
+                "e.g. the spacing of joists)", f"{key}.width", r.file, r.line_for(f"{key}.width"))
+        if width is None:
+            return None
+        w1, w2 = w1 * width, w2 * width
+        raw = ld["value"] if kind == "uniform" else " to ".join(ld["value"])
+        conversions.append((key, f"{raw} x {ld['width']} tributary width", w1 if kind == "uniform" else None))
+    elif "width" in ld:
+        r.warn("width is only used with a load per area (psf, kPa); ignored", f"{key}.width")
+    return Load(kind, start=start, end=end, w1=w1, w2=w2, **common)
+
+
+def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
+    try:
+        if kind == "section":
+            from shopbeam.sections import resolve_section
+
+            return resolve_section(spec, key, **kw)
+        from shopbeam.materials import resolve_material
+
+        return resolve_material(spec, key)
+    except InputError as e:
+        r.take(e, key)
+        return None
+
+
+def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> Job:
+    """Validate parsed TOML data. Raises InputErrors with every problem found."""
+    r = _Reader(filename, text)
+    if not isinstance(data, dict):
+        raise InputErrors([Problem("the job file must be a TOML document", "", filename)])
+    r.unknown_keys(data, KNOWN_KEYS[""], "", "the job file")
+    schema = data.get("schema")
+    if schema is None:
+        r.error("missing 'schema = 1' (the job-file format version) at the top of the file", "schema")
+    elif not isinstance(schema, int) or isinstance(schema, bool):
+        r.error(f"schema must be a whole number, found {schema!r}", "schema")
+    elif schema > SCHEMA:
+        raise InputErrors([Problem(
+            f"this job file is schema {schema}, written by a newer shopbeam; this version reads "
+            f"schema {SCHEMA}: upgrade shopbeam to open it (the file was not changed)",
+            "schema", filename, r.line_for("schema"))])
+    elif schema < 1:
+        r.error(f"schema {schema} is not a job-file version; use schema = 1", "schema")
+    title = data.get("title")
+    if not isinstance(title, str) or not title.strip():
+        r.error("missing 'title' (a name for the job, e.g. title = \"Lumber rack arm, bay 3\")", "title")
+        title = ""
+    notes = data.get("notes", "")
+    if not isinstance(notes, str):
+        r.error("notes must be text in quotes", "notes")
+        notes = ""
+    system = data.get("units", "us")
+    if system not in ("us", "si"):
+        r.error(f"units {system!r} must be \"us\" or \"si\"", "units")
+        system = "us"
+    tags = data.get("tags", [])
+    if not (isinstance(tags, list) and all(isinstance(t, str) for t in tags)):
+        r.error("tags must be a list of words, e.g. tags = [\"rack\", \"shelf\"]", "tags")
+        tags = []
+
+    beam = data.get("beam")
+    length = section = material = None
+    self_weight, members, welded = True, 1, False
+    if not _is_table(beam):
+        r.error("missing the [beam] table (length, section, material)", "beam")
+        beam = {}
+    else:
+        r.unknown_keys(beam, KNOWN_KEYS["beam"], "beam", "[beam]")
+        length = r.parse(beam, "length", "length", "beam.length", positive=True)
+        if length is not None and not (1e-4 <= length <= 1e4):
+            r.error(f"{beam['length']!r} is not a member length shopbeam can check "
+                    "(0.1 mm to 10 km)", "beam.length")
+            length = None
+        axis = beam.get("axis")
+        if axis is not None and axis not in ("strong", "weak"):
+            r.error(f"axis {axis!r} must be \"strong\" or \"weak\"", "beam.axis")
+            axis = None
+        if "section" not in beam:
+            r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
+                    "[beam.section] table)", "beam.section")
+        else:
+            section = _resolve("section", beam["section"], "beam.section", r, axis=axis)
+        if "material" not in beam:
+            r.error("missing 'material' (a key such as \"A500-C\", or a [beam.material] table)",
+                    "beam.material")
+        else:
+            material = _resolve("material", beam["material"], "beam.material", r)
+        self_weight = beam.get("self_weight", True)
+        if not isinstance(self_weight, bool):
+            r.error("self_weight must be true or false", "beam.self_weight")
+            self_weight = True
+        members = beam.get("members", 1)
+        if not isinstance(members, int) or isinstance(members, bool) or not 1 <= members <= 100:
+            r.error("members must be a whole number from 1 to 100 (identical members sharing "
+                    "the loads)", "beam.members")
+            members = 1
+        welded = beam.get("welded", False)
+        if not isinstance(welded, bool):
+            r.error("welded must be true or false (welded near the point of largest moment)",
+                    "beam.welded")
+            welded = False
+
+    sups = data.get("supports", [])
+    supports: list[Support] = []
+    if not isinstance(sups, list) or not sups:
+        r.error("no supports: add [[supports]] tables (at least two, or one fixed end)", "supports")
+        sups = []
+    if len(sups) > MAX_SUPPORTS:
+        r.error(f"{len(sups)} supports is more than shopbeam takes ({MAX_SUPPORTS})", "supports")
+        sups = []
+    for i, s in enumerate(sups):
+        sup = _read_support(r, i, s, length)
+        if sup is not None:
+            supports.append(sup)
+    tol = 1e-9 * (length or 1.0)
+    for a_i, a in enumerate(supports):
+        for b in supports[a_i + 1:]:
+            same = abs(a.at - b.at) <= tol
+            if same and (a.kind == "hinge") == (b.kind == "hinge"):
+                r.error(f"{a.key} and {b.key} are both at {units.fmt(a.at, 'length', system)}; keep one",
+                        f"{b.key}.at")
+            elif same and "fixed" in (a.kind, b.kind):
+                r.error("a hinge at a fixed support makes it a pin; use type = \"pin\"", f"{b.key}.at")
+        if a.kind == "hinge" and length is not None and (a.at <= tol or a.at >= length - tol):
+            r.error("a hinge at the end of the beam releases nothing; put it inside the span "
+                    "or remove it", f"{a.key}.at")
+
+    raw_loads = data.get("loads", [])
+    loads: list[Load] = []
+    conv: list = []
+    if not isinstance(raw_loads, list):
+        r.error("loads must be [[loads]] tables", "loads")
+        raw_loads = []
+    if len(raw_loads) > MAX_LOADS:
+        r.error(f"{len(raw_loads)} loads is more than shopbeam takes ({MAX_LOADS}); "
+                "combine loads or split the job", "loads")
+        raw_loads = []
+    for i, ld in enumerate(raw_loads):
+        got = _read_load(r, i, ld, length, conv)
+        if got is not None:
+            loads.append(got)
+    for ld in loads:
+        if ld.kind == "moment":
+            for h in (s for s in supports if s.kind == "hinge"):
+                if abs(ld.at - h.at) <= tol:
+                    r.error("a couple exactly at a hinge is ambiguous; apply it a little to one "
+                            "side", f"{ld.key}.at")
+
+    crit = data.get("criteria", {})
+    criteria = Criteria()
+    if not _is_table(crit):
+        r.error("criteria must be a table ([criteria])", "criteria")
+    else:
+        r.unknown_keys(crit, KNOWN_KEYS["criteria"], "criteria", "[criteria]")
+        text, ratio, absolute = ("L/240", 240.0, None)
+        if "deflection" in crit:
+            text, ratio, absolute = _deflection_criterion(crit["deflection"], r)
+        sf = crit.get("safety_factor", 1.67)
+        if isinstance(sf, bool) or not isinstance(sf, (int, float)) or not math.isfinite(sf) or sf <= 0:
+            r.error(f"safety_factor must be a positive number such as 1.67, found {sf!r}",
+                    "criteria.safety_factor")
+            sf = 1.67
+        elif sf < 1:
+            r.warn(f"safety_factor {sf} is below 1: the check allows more than yield", "criteria.safety_factor")
+        extra = {k: v for k, v in crit.items() if k not in ("deflection", "safety_factor")}
+        criteria = Criteria(text, ratio, absolute, float(sf), extra)
+
+    if r.errors:
+        raise InputErrors(sorted(r.problems, key=lambda p: (p.warning, p.line or 0)))
+    conversions = []
+    for key, what, w in conv:
+        if w is not None:
+            conversions.append(f"{key}: {what} = {units.fmt(w, 'line_load', system)}")
+        else:
+            conversions.append(f"{key}: {what}")
+    return Job(
+        title=title.strip(), length=length, section=section, material=material,
+        supports=tuple(sorted(supports, key=lambda s: s.at)), loads=tuple(loads),
+        criteria=criteria, notes=notes, units=system, tags=tuple(tags),
+        self_weight=self_weight, members=members, welded=welded, path=filename, data=data,
+        warnings=tuple(r.problems), conversions=tuple(conversions),
+    )
+
+
+def parse_job_text(text: str, filename: str = "<job>") -> Job:
+    """Parse and validate job-file text. Raises InputErrors."""
+    if len(text.encode("utf-8", "surrogatepass")) > MAX_FILE_BYTES:
+        raise InputErrors([Problem(f"the file is larger than {MAX_FILE_BYTES // 1000} kB; a job "
+                                   "file is a few kB", "", filename)])
+    try:
+        data = tomllib.loads(text)
+    except tomllib.TOMLDecodeError as e:
+        msg = str(e)
+        m = re.search(r"\(at line (\d+), column (\d+)\)", msg)
+        line = int(m.group(1)) if m else None
+        msg = re.sub(r"\s*\(at line \d+, column \d+\)", "", msg)
+        if m:
+            msg += f" (column {m.group(2)})"
+        raise InputErrors([Problem(f"not valid TOML: {msg}. Check quotes, brackets and "
+                                   "'key = value' lines", "", filename, line)]) from None
+    except RecursionError:
+        raise InputErrors([Problem("not valid TOML: nested too deeply", "", filename)]) from None
+    return parse_job_data(data, filename, text)
+
+
+def load_job(path) -> Job:
+    """Read and validate a job file. Raises InputErrors (with the file named)."""
+    p = Path(path)
+    name = str(path)
+    try:
+        raw = p.read_bytes()
+    except FileNotFoundError:
+        raise InputErrors([Problem("no such job file; check the name and folder", "", name)]) from None
+    except IsADirectoryError:
+        raise InputErrors([Problem("this is a folder, not a job file", "", name)]) from None
+    except OSError as e:
+        raise InputErrors([Problem(f"cannot read the file ({e.strerror})", "", name)]) from None
+    if len(raw) > MAX_FILE_BYTES:
+        raise InputErrors([Problem(f"the file is larger than {MAX_FILE_BYTES // 1000} kB; a job "
+                                   "file is a few kB", "", name)])
+    try:
+        text = raw.decode("utf-8")
+    except UnicodeDecodeError as e:
+        line = raw[: e.start].count(b"\n") + 1
+        raise InputErrors([Problem("the file is not UTF-8 text; save it as UTF-8", "", name, line)]) from None
+    return parse_job_text(text, name)

@@ -1,0 +1,168 @@
+"""Piecewise polynomials: fast vectorised evaluation and exact extremes.
+
+A `Piecewise` holds, for each piece between consecutive breaks, the polynomial coefficients
+in the local coordinate t = x - breaks[j] (ascending powers). Extremes are exact: the
+candidates are both one-sided values at every break plus the real roots of the derivative
+inside each piece (eigenvalues of the companion matrix, batched over pieces, then polished
+by Newton steps). Nothing is sampled on a grid.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from functools import cached_property
+
+import numpy as np
+
+
+@dataclass(frozen=True)
+class Extreme:
+    """Largest and smallest value of a function over an interval, with where they occur."""
+
+    max: float
+    max_at: float
+    min: float
+    min_at: float
+
+    @property
+    def abs_max(self) -> float:
+        return max(abs(self.max), abs(self.min))
+
+    @property
+    def abs_max_at(self) -> float:
+        return self.max_at if abs(self.max) >= abs(self.min) else self.min_at
+
+    def as_dict(self) -> dict:
+        return {"max": self.max, "max_at": self.max_at, "min": self.min, "min_at": self.min_at}
+
+
+def _horner(coeffs: np.ndarray, t: np.ndarray) -> np.ndarray:
+    """Evaluate rows of ascending coefficients (N, d+1) at t (N,)."""
+    out = np.zeros_like(t, dtype=float)
+    for m in range(coeffs.shape[1] - 1, -1, -1):
+        out = out * t + coeffs[:, m]
+    return out
+
+
+def _derivative(coeffs: np.ndarray) -> np.ndarray:
+    d = coeffs.shape[1] - 1
+    if d == 0:
+        return np.zeros((coeffs.shape[0], 1))
+    return coeffs[:, 1:] * np.arange(1, d + 1)
+
+
+def _roots_in_pieces(coeffs: np.ndarray, h: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Real roots of each row's polynomial with 0 < t < h[row]: (row indices, t)."""
+    n, width = coeffs.shape
+    if n == 0 or width < 2:
+        return np.zeros(0, int), np.zeros(0)
+    # work in tau = t / h so that every piece is [0, 1]: well scaled companion matrices
+    powers = h[:, None] ** np.arange(width)
+    scaled = coeffs * powers
+    size = np.abs(scaled)
+    top = size.max(axis=1)
+    rel = size > 1e-12 * top[:, None]
+    live = top > 0
+    degree = np.where(live, width - 1 - np.argmax(rel[:, ::-1], axis=1), 0)
+    rows_out, tau_out = [], []
+    for d in range(1, width):
+        rows = np.nonzero(degree == d)[0]
+        if rows.size == 0:
+            continue
+        c = scaled[rows, : d + 1]
+        lead = c[:, d]
+        if d == 1:
+            tau = (-c[:, 0] / lead)[:, None]
+        else:
+            comp = np.zeros((rows.size, d, d))
+            comp[:, 1:, :-1] = np.eye(d - 1)
+            comp[:, :, -1] = -c[:, :d] / lead[:, None]
+            eig = np.linalg.eigvals(comp)
+            real = np.abs(eig.imag) <= 1e-7 * np.maximum(1.0, np.abs(eig.real))
+            tau = np.where(real, eig.real, np.nan)
+        rr = np.repeat(rows, tau.shape[1])
+        tt = tau.ravel()
+        keep = np.isfinite(tt) & (tt > -1e-9) & (tt < 1 + 1e-9)
+        rows_out.append(rr[keep])
+        tau_out.append(np.clip(tt[keep], 0.0, 1.0))
+    if not rows_out:
+        return np.zeros(0, int), np.zeros(0)
+    rows = np.concatenate(rows_out)
+    tau = np.concatenate(tau_out)
+    # two Newton steps on the unscaled polynomial polish the eigenvalue roots
+    t = tau * h[rows]
+    c = coeffs[rows]
+    dc = _derivative(c)
+    for _ in range(2):
+        f = _horner(c, t)
+        df = _horner(dc, t)
+        step = np.divide(f, df, out=np.zeros_like(f), where=np.abs(df) > 0)
+        t_new = t - step
+        t = np.where((t_new >= 0) & (t_new <= h[rows]), t_new, t)
+    return rows, t
+
+
+@dataclass(frozen=True)
+class Piecewise:
+    """A piecewise polynomial on [breaks[0], breaks[-1]] (local ascending coefficients)."""
+
+    breaks: np.ndarray  # (P + 1,)
+    coeffs: np.ndarray  # (P, degree + 1)
+
+    @property
+    def h(self) -> np.ndarray:
+        return np.diff(self.breaks)
+
+    def __call__(self, x, side: str = "right"):
+        """Evaluate at x (scalar or array). At a break, `side` picks the one-sided value."""
+        xa = np.atleast_1d(np.asarray(x, dtype=float))
+        b = self.breaks
+        p = len(b) - 1
+        tol = 1e-9 * (b[-1] - b[0])  # positions this close to a break are at the break
+        if side == "right":
+            j = np.searchsorted(b, xa + tol, side="right") - 1
+        else:
+            j = np.searchsorted(b, xa - tol, side="left") - 1
+        j = np.clip(j, 0, p - 1)
+        t = np.clip(xa, b[0], b[-1]) - b[j]
+        out = _horner(self.coeffs[j], t)
+        return out if np.ndim(x) else float(out[0])
+
+    def derivative(self) -> "Piecewise":
+        return Piecewise(self.breaks, _derivative(self.coeffs))
+
+    def scaled(self, k: float) -> "Piecewise":
+        return Piecewise(self.breaks, self.coeffs * k)
+
+    def at_ends(self) -> tuple[np.ndarray, np.ndarray]:
+        """Values at the left (t=0) and right (t=h) end of every piece."""
+        left = self.coeffs[:, 0].copy()
+        right = _horner(self.coeffs, self.h)
+        return left, right
+
+    @cached_property
+    def _candidates(self) -> tuple[np.ndarray, np.ndarray]:
+        """Positions and values of every candidate extreme (sorted by position)."""
+        left, right = self.at_ends()
+        b = self.breaks
+        rows, t = _roots_in_pieces(_derivative(self.coeffs), self.h)
+        xs = np.concatenate([b[:-1], b[1:], b[rows] + t])
+        vs = np.concatenate([left, right, _horner(self.coeffs[rows], t)])
+        order = np.argsort(xs, kind="stable")
+        return xs[order], vs[order]
+
+    def extremes(self, lo: float | None = None, hi: float | None = None) -> Extreme:
+        """Exact max and min over [lo, hi] (default: the whole domain)."""
+        xs, vs = self._candidates
+        if lo is not None or hi is not None:
+            lo = self.breaks[0] if lo is None else lo
+            hi = self.breaks[-1] if hi is None else hi
+            tol = 1e-12 * max(1.0, abs(self.breaks[-1]))
+            mask = (xs >= lo - tol) & (xs <= hi + tol)
+            extra_x = np.array([lo, hi])
+            extra_v = np.array([self(lo, "right"), self(hi, "left")])
+            xs = np.concatenate([xs[mask], extra_x])
+            vs = np.concatenate([vs[mask], extra_v])
+        imax = int(np.argmax(vs))
+        imin = int(np.argmin(vs))
+        return Extreme(float(vs[imax]), float(xs[imax]), float(vs[imin]), float(xs[imin]))

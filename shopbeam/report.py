@@ -1,0 +1,135 @@
+"""The plain-text report of `shopbeam solve`: readable in a terminal, an e-mail or a job folder.
+
+Everything is shown in the job's display units; the safety caution is always on it.
+"""
+
+from __future__ import annotations
+
+import textwrap
+
+from shopbeam import units
+from shopbeam.analysis import Result
+
+WIDTH = 78
+
+CHECK_KINDS = {"Pa": "stress", "m": "small_length", "N": "force", "N*m": "moment"}
+
+
+def _wrap(text: str, indent: str = "  ", width: int = WIDTH) -> list[str]:
+    return textwrap.wrap(text, width=width, initial_indent=indent, subsequent_indent=indent) or [indent]
+
+
+def fmt_pos(x: float, system: str) -> str:
+    return units.fmt(x, "length", system)
+
+
+def describe_load(ld, system: str) -> str:
+    f = lambda v, k: units.fmt(v, k, system)  # noqa: E731
+    lab = f" ({ld.label})" if ld.label else ""
+    case = "" if ld.case == "live" else f" [{ld.case}]"
+    if ld.kind == "point":
+        return f"point {f(ld.value, 'force')} at {fmt_pos(ld.at, system)}{lab}{case}"
+    if ld.kind == "moment":
+        return f"couple {f(ld.value, 'moment')} (+ ccw) at {fmt_pos(ld.at, system)}{lab}{case}"
+    span = f"from {fmt_pos(ld.start, system)} to {fmt_pos(ld.end, system)}"
+    if ld.kind == "uniform":
+        return f"uniform {f(ld.w1, 'line_load')} {span}{lab}{case}"
+    return f"linear {f(ld.w1, 'line_load')} to {f(ld.w2, 'line_load')} {span}{lab}{case}"
+
+
+def describe_support(s, system: str) -> str:
+    extra = f", k = {units.fmt(s.stiffness, 'stiffness', system)}" if s.kind == "spring" else ""
+    return f"{s.kind} at {fmt_pos(s.at, system)}{extra}"
+
+
+def check_value(value: float, unit: str, system: str) -> str:
+    kind = CHECK_KINDS.get(unit)
+    return units.fmt(value, kind, system) if kind else f"{units.num(value)} {unit}"
+
+
+def caution_block(cautions) -> list[str]:
+    out = []
+    for c in cautions:
+        out += _wrap(c, "!! ", WIDTH)
+    return out
+
+
+def render(result: Result) -> str:
+    job, sol = result.job, result.solution
+    sy = job.units
+    f = lambda v, k, sig=4: units.fmt(v, k, sy, sig)  # noqa: E731
+    lines = [f"shopbeam report: {job.title}"]
+    if job.path:
+        lines.append(f"job file: {job.path}")
+    lines.append("=" * WIDTH)
+    lines += caution_block(result.cautions[:1])
+    lines.append("")
+    sec, mat = job.section, job.material
+    lines.append("MEMBER")
+    lines.append(f"  span     {f(job.length, 'length')}")
+    lines.append(f"  section  {sec.designation} ({sec.shape}, {sec.axis} axis): "
+                 f"I = {f(sec.ix, 'inertia')}, S = {f(sec.sx, 'modulus')}, "
+                 f"A = {f(sec.area, 'area')}")
+    lines.append(f"  material {mat.name}: E = {f(mat.e, 'stress', 5)}, Fy = {f(mat.fy, 'stress')}")
+    if job.self_weight:
+        sw = job.self_weight_load()
+        lines.append(f"  self-weight {f(-sw.w1, 'line_load')} (included, dead load)")
+    else:
+        lines.append("  self-weight not included (self_weight = false)")
+    if job.members > 1:
+        lines.append(f"  {job.members} identical members share the loads: each carries 1/{job.members}")
+    lines.append(f"  supports {'; '.join(describe_support(s, sy) for s in job.supports)}")
+    lines.append("  loads (+ up; gravity loads are negative)")
+    if not job.loads:
+        lines.append("    none entered")
+    for ld in job.loads:
+        lines.append(f"    {describe_load(ld, sy)}")
+    for c in job.conversions:
+        lines.append(f"    read as {c}")
+    lines.append("")
+
+    lines.append("REACTIONS (what each support does to the beam: + up, + counterclockwise)")
+    for r in sol.reactions:
+        mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
+        lines.append(f"  {r.kind:<7} at {fmt_pos(r.at, sy):<12} force {f(r.force, 'force'):<14}{mom}")
+    lines.append("")
+
+    lines.append("EXTREMES (exact, with where they occur)")
+    kinds = {"shear": "force", "moment": "moment", "slope": "slope", "deflection": "small_length"}
+    for name, e in sol.extremes().items():
+        k = kinds[name]
+        lines.append(f"  {name:<10} max {f(e.max, k):<16} at {fmt_pos(e.max_at, sy):<10}"
+                     f" min {f(e.min, k):<16} at {fmt_pos(e.min_at, sy)}")
+    lines.append("")
+
+    lines.append("CHECKS")
+    for c in result.checks:
+        verdict = "PASS" if c.ok else "FAIL"
+        where = f" at {fmt_pos(c.at, sy)}" if c.at is not None else ""
+        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, sy)} vs limit "
+                     f"{check_value(c.limit, c.unit, sy)}{where}: ratio {c.ratio:.3f}  {verdict}")
+        lines += _wrap(c.formula, "      ")
+        for s in c.extra.get("spans", []) if len(c.extra.get("spans", [])) > 1 else []:
+            lines.append(f"      {s['kind']} {fmt_pos(s['start'], sy)}-{fmt_pos(s['end'], sy)}: "
+                         f"{f(s['demand'], 'small_length')} vs {f(s['limit'], 'small_length')}")
+    g = result.governing
+    lines.append(f"  governing: {g.name}, ratio {g.ratio:.3f} -> "
+                 + ("all checks PASS" if result.ok else "the member FAILS this check"))
+    lines.append("")
+
+    lines.append("SELF-CHECKS (run on every solve)")
+    for d in sol.diagnostics:
+        lines += _wrap(f"[{'pass' if d.ok else 'WARN'}] {d.name}: {d.detail}", "  ")[:2]
+    if sol.condition > 1e10:
+        lines.append(f"  [WARN] the equations are ill-conditioned (condition {sol.condition:.2g}): "
+                     "check supports very close together or extreme spring stiffnesses")
+    warns = [p for p in job.warnings if p.warning]
+    if warns:
+        lines.append("")
+        lines.append("INPUT WARNINGS")
+        for p in warns:
+            lines += _wrap(p.located(), "  ")
+    lines.append("")
+    lines.append("CAUTIONS")
+    lines += caution_block(result.cautions)
+    return "\n".join(lines) + "\n"

@@ -1,0 +1,152 @@
+"""Self-checks run on every solve: the checks an engineer makes on an answer before trusting it.
+
+Each returns a `SelfCheck` with pass/warn and its figures. Exact checks (equilibrium,
+boundary conditions, jumps, curvature) hold to rounding for a correct solve; the magnitude
+checks are rules of thumb of the trade (common practice, no source) that catch unit slips.
+"""
+
+from __future__ import annotations
+
+import numpy as np
+
+from shopbeam.solver import SelfCheck, Solution, segments
+
+REL = 1e-8  # relative tolerance for the exact checks
+
+
+def _applied_totals(loads) -> tuple[float, float, float, float]:
+    """(sum of forces, sum of moments about x = 0, sum |forces|, sum |couples|)."""
+    fy = mz = fabs = cabs = 0.0
+    for ld in loads:
+        if ld.kind == "point":
+            fy += ld.value
+            mz += ld.value * ld.at
+            fabs += abs(ld.value)
+        elif ld.kind == "moment":
+            mz += ld.value
+            cabs += abs(ld.value)
+        else:
+            s, l = ld.start, ld.end - ld.start
+            w1 = ld.w1
+            w2 = ld.w1 if ld.kind == "uniform" else ld.w2
+            f = 0.5 * (w1 + w2) * l
+            fy += f
+            mz += l * (w1 * (s + l / 2) + (w2 - w1) * (s / 2 + l / 3))
+            fabs += 0.5 * (abs(w1) + abs(w2)) * l
+    return fy, mz, fabs, cabs
+
+
+def _tol(scale: float) -> float:
+    return REL * scale + 1e-300
+
+
+def self_checks(sol: Solution) -> list[SelfCheck]:
+    beam = sol.beam
+    L, ei = beam.length, beam.ei
+    fy, mz, fabs, cabs = _applied_totals(beam.loads)
+    rf = sum(r.force for r in sol.reactions)
+    rm = sum(r.force * r.at + r.moment for r in sol.reactions)
+    fscale = fabs + sum(abs(r.force) for r in sol.reactions)
+    mscale = fscale * L + cabs + sum(abs(r.moment) for r in sol.reactions)
+    out = []
+
+    res_f, res_m = fy + rf, mz + rm
+    ok = abs(res_f) <= _tol(fscale) and abs(res_m) <= _tol(mscale)
+    out.append(SelfCheck(
+        "equilibrium", ok,
+        f"sum of vertical forces {res_f:.3g} N, sum of moments about x = 0 {res_m:.3g} N*m "
+        f"(loads and reactions total {fscale:.4g} N)",
+        {"sum_force": res_f, "sum_moment": res_m, "force_scale": fscale}))
+
+    ex = sol.extremes()
+    umax, tmax, mmax, vmax = (ex["deflection"].abs_max, ex["slope"].abs_max,
+                              ex["moment"].abs_max, ex["shear"].abs_max)
+    worst = 0.0
+    notes = []
+    for s in beam.supports:
+        if s.stops_deflection:
+            u = sol.deflection(s.at)
+            worst = max(worst, abs(u) / (umax or 1.0))
+            notes.append(f"u({s.at:.4g} m) = {u:.2g}")
+        if s.kind == "fixed":
+            t = sol.slope(s.at)
+            worst = max(worst, abs(t) / (tmax or 1.0))
+            notes.append(f"slope({s.at:.4g} m) = {t:.2g}")
+        if s.kind == "hinge":
+            m = sol.moment(s.at)
+            worst = max(worst, abs(m) / (mmax or 1.0))
+            notes.append(f"M({s.at:.4g} m) = {m:.2g}")
+        if s.kind == "spring":
+            r = next(r for r in sol.reactions if r.at == s.at and r.kind == "spring")
+            gap = r.force + s.stiffness * sol.deflection(s.at)
+            worst = max(worst, abs(gap) / (abs(r.force) or fscale or 1.0))
+            notes.append(f"spring R + k*u = {gap:.2g}")
+    out.append(SelfCheck(
+        "boundary conditions", worst <= REL,
+        ("met at every support and hinge: " + ", ".join(notes)) if notes else "no conditions",
+        {"worst_relative": worst}))
+
+    # jumps: shear by each force (loads and reactions), moment by each couple
+    forces: dict[float, float] = {}
+    couples: dict[float, float] = {}
+    for ld in beam.loads:
+        if ld.kind == "point":
+            forces[ld.at] = forces.get(ld.at, 0.0) + ld.value
+        elif ld.kind == "moment":
+            couples[ld.at] = couples.get(ld.at, 0.0) - ld.value
+    for r in sol.reactions:
+        forces[r.at] = forces.get(r.at, 0.0) + r.force
+        if r.moment:
+            couples[r.at] = couples.get(r.at, 0.0) - r.moment
+    for name, fn, items, scale in (("shear jumps", sol.shear, forces, fscale),
+                                   ("moment jumps", sol.moment, couples, mscale / max(L, 1e-12))):
+        worst_gap, count = 0.0, 0
+        for x, expect in items.items():
+            left = fn(x, "left") if x > 0 else 0.0
+            right = fn(x, "right") if x < L else 0.0
+            worst_gap = max(worst_gap, abs((right - left) - expect))
+            count += 1
+        if name == "moment jumps":
+            what = f"moment steps down by each counterclockwise couple ({count} places)"
+        else:
+            what = f"shear steps by each point load and reaction ({count} places)"
+        out.append(SelfCheck(name, worst_gap <= _tol(scale),
+                             f"{what}; largest mismatch {worst_gap:.2g}",
+                             {"worst": worst_gap}))
+
+    # curvature: u'' = M / EI everywhere, so the shape curves the way the moment says
+    curv = sol.deflection.derivative().derivative()
+    mid = 0.5 * (sol.moment.breaks[:-1] + sol.moment.breaks[1:])
+    xs = np.concatenate([mid, [ex["moment"].max_at, ex["moment"].min_at]])
+    gap = np.max(np.abs(curv(xs) * ei - sol.moment(xs))) if xs.size else 0.0
+    signs_ok = True
+    mvals = sol.moment(xs)
+    big = np.abs(mvals) > 1e-6 * (mmax or 1.0)
+    if np.any(big):
+        signs_ok = bool(np.all(np.sign(curv(xs)[big]) == np.sign(mvals[big])))
+    out.append(SelfCheck(
+        "curvature", signs_ok and gap <= _tol(mmax),
+        "sags where the moment is positive and hogs where it is negative (EI u'' = M)",
+        {"worst": float(gap)}))
+
+    # Magnitudes: rules of thumb of the trade (common practice, no source). The lever arm is
+    # the longest span or overhang; the deflection scale adds a spring's own give.
+    lref = max(b - a for a, b, _ in segments(beam))
+    fref = fabs + cabs / max(lref, 1e-12)
+    springs = [s.stiffness for s in beam.supports if s.kind == "spring"]
+    uref = fref * lref**3 / ei + (fref / min(springs) if springs else 0.0)
+    if fref > 0:
+        rv, rm_, ru = vmax / fref, mmax / (fref * lref), umax / uref
+        ok_v, ok_m, ok_u = rv <= 1.5, rm_ <= 1.5, ru <= 1.0
+        out.append(SelfCheck(
+            "shear magnitude", ok_v,
+            f"largest shear is {rv:.3g} x the total applied force (expect about 1 or less)",
+            {"ratio": rv}))
+        out.append(SelfCheck(
+            "moment magnitude", ok_m,
+            f"largest moment is {rm_:.3g} x force x longest span or overhang "
+            "(expect 1 or less)", {"ratio": rm_}))
+        out.append(SelfCheck(
+            "deflection magnitude", ok_u,
+            f"EI x largest deflection is {ru:.3g} x P L^3 (expect 1 or less)", {"ratio": ru}))
+    return out

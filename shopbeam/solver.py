@@ -1,0 +1,453 @@
+"""The beam engine: singularity functions (Macaulay brackets) solved as one linear system.
+
+The load intensity q(x) is a sum of bracket terms c<x-a>^n: point forces are n = -1, couples
+n = -2, uniform loads start and stop with n = 0, linearly varying loads add n = 1 ramps.
+Integrating four times gives V, M, EI*slope and EI*deflection. The unknowns are bracket terms
+too: each support force (n = -1), each fixed-end moment (n = -2), each hinge's rotation jump
+(n = -3, a step in EI*slope) and the two integration constants (EI*slope(0), n = -3 at 0, and
+EI*deflection(0), n = -4 at 0). They are fixed by global equilibrium just past the end
+(V(L+) = 0, M(L+) = 0) and one condition of each conjugate pair at every support and hinge:
+u = 0 (pin, roller, fixed), slope = 0 (fixed), R = -k u (spring), M = 0 (hinge). The same
+system solves determinate and indeterminate beams; a beam that can move without straining
+(rigid-body motion or a mechanism) is found by a kinematic check first and described in words.
+
+Integration is done by marching across the breaks: on each piece the state
+[q', q, V, M, EI*slope, EI*deflection] is a Taylor polynomial, and every bracket term adds a
+jump of one state entry where it starts. One pass carries the known loads and every unknown
+side by side, so building the system, and then every piece polynomial, costs time linear in
+the number of loads and supports.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, field
+from functools import cached_property
+
+import numpy as np
+
+from shopbeam.errors import UnstableBeam
+from shopbeam.model import Beam, Load, Support
+from shopbeam.piecewise import Extreme, Piecewise
+
+# state entries, by integration level: q' (-1), q (0), V (1), M (2), EI*slope (3), EI*u (4)
+_NLEV = 6
+_IDX = {"dq": 0, "q": 1, "V": 2, "M": 3, "EIt": 4, "EIu": 5}
+
+
+@dataclass(frozen=True)
+class Reaction:
+    """What a support does to the beam: force + up, moment + counterclockwise."""
+
+    at: float
+    kind: str
+    force: float
+    moment: float = 0.0
+    key: str = ""
+
+
+@dataclass(frozen=True)
+class SelfCheck:
+    """One of the checks run on every answer: `ok` False means look harder (a warning)."""
+
+    name: str
+    ok: bool
+    detail: str
+    figures: dict = field(default_factory=dict)
+
+
+@dataclass(frozen=True)
+class Solution:
+    """Everything the solve found, in SI. Renderers (report, JSON, UI) only read this."""
+
+    beam: Beam
+    reactions: tuple[Reaction, ...]
+    hinge_rotations: tuple[tuple[float, float], ...]  # (at, rotation jump in rad)
+    ei_slope_0: float  # integration constant C1 = EI * slope(0)
+    ei_deflection_0: float  # integration constant C2 = EI * deflection(0)
+    load: Piecewise
+    shear: Piecewise
+    moment: Piecewise
+    slope: Piecewise
+    deflection: Piecewise
+    condition: float  # condition number of the (equilibrated) linear system
+
+    @cached_property
+    def diagnostics(self) -> tuple[SelfCheck, ...]:
+        """The self-checks, computed on first use (every report and screen shows them)."""
+        from shopbeam.selfcheck import self_checks
+
+        return tuple(self_checks(self))
+
+    @cached_property
+    def _extremes(self) -> dict[str, Extreme]:
+        return {name: _chop(self.function(name).extremes())
+                for name in ("shear", "moment", "slope", "deflection")}
+
+    @property
+    def length(self) -> float:
+        return self.beam.length
+
+    def extremes(self) -> dict[str, Extreme]:
+        """Exact extremes of shear, moment, slope and deflection over the whole beam."""
+        return dict(self._extremes)
+
+    def function(self, name: str) -> Piecewise:
+        return {"load": self.load, "shear": self.shear, "moment": self.moment,
+                "slope": self.slope, "deflection": self.deflection}[name]
+
+
+def _chop(e: Extreme) -> Extreme:
+    """Rounding residue (|v| below 1e-10 of the largest value) is reported as exactly 0."""
+    tiny = 1e-10 * max(abs(e.max), abs(e.min))
+    mx = 0.0 if abs(e.max) <= tiny else e.max
+    mn = 0.0 if abs(e.min) <= tiny else e.min
+    return Extreme(mx, e.max_at, mn, e.min_at)
+
+
+# ------------------------------------------------------------------ bracket terms
+def load_terms(loads) -> list[tuple[float, float, int]]:
+    """The applied loads as bracket terms (coefficient, position, power) of q(x)."""
+    terms: list[tuple[float, float, int]] = []
+    for ld in loads:
+        if ld.kind == "point":
+            terms.append((ld.value, ld.at, -1))
+        elif ld.kind == "moment":
+            # a counterclockwise couple C makes M step down by C (M sagging +, V = dM/dx)
+            terms.append((-ld.value, ld.at, -2))
+        elif ld.kind in ("uniform", "linear"):
+            w1 = ld.w1
+            w2 = ld.w1 if ld.kind == "uniform" else ld.w2
+            span = ld.end - ld.start
+            slope = (w2 - w1) / span if span > 0 else 0.0
+            terms.append((w1, ld.start, 0))
+            terms.append((-w2, ld.end, 0))
+            if slope != 0.0:
+                terms.append((slope, ld.start, 1))
+                terms.append((-slope, ld.end, 1))
+        else:  # pragma: no cover - the job reader only makes the four kinds
+            raise ValueError(f"unknown load kind {ld.kind!r}")
+    return terms
+
+
+@dataclass(frozen=True)
+class _Unknown:
+    kind: str  # force | moment | hinge | c1 | c2
+    at: float
+    power: int
+    coef: float  # sign of the bracket term per unit unknown
+    support: int = -1
+
+
+def _unknowns(beam: Beam) -> list[_Unknown]:
+    out = []
+    for i, s in enumerate(beam.supports):
+        if s.takes_force:
+            out.append(_Unknown("force", s.at, -1, 1.0, i))
+        if s.takes_moment:
+            out.append(_Unknown("moment", s.at, -2, -1.0, i))
+        if s.kind == "hinge":
+            out.append(_Unknown("hinge", s.at, -3, 1.0, i))
+    out.append(_Unknown("c1", 0.0, -3, 1.0))
+    out.append(_Unknown("c2", 0.0, -4, 1.0))
+    return out
+
+
+# ------------------------------------------------------------------ stability
+def _fmt_len(x: float) -> str:
+    ft = x / 0.3048
+    whole = int(ft + 1e-9)
+    inch = (ft - whole) * 12
+    if abs(inch) < 0.005:
+        return f"{whole} ft"
+    if abs(inch - 12) < 0.005:
+        return f"{whole + 1} ft"
+    if whole == 0:
+        return f"{inch:.3g} in"
+    return f"{whole} ft {inch:.3g} in"
+
+
+def stability_problem(beam: Beam, fmt=None) -> str | None:
+    """Words for the rigid-body motion or mechanism the beam allows, or None if stable."""
+    fmt = fmt or _fmt_len
+    L = beam.length
+    restraints = [s for s in beam.supports if s.kind != "hinge"]
+    hinges = sorted(s.at for s in beam.supports if s.kind == "hinge")
+    if not restraints:
+        return "the beam has no supports, so nothing holds it up: add supports (at least two, or one fixed end)"
+    bounds = [0.0] + hinges + [L]
+    nseg = len(bounds) - 1
+    rows = []
+
+    def seg_of(x):
+        for s in range(nseg):
+            if x <= bounds[s + 1] + 1e-12 * L:
+                return s
+        return nseg - 1
+
+    for sup in restraints:
+        s = seg_of(sup.at)
+        r = np.zeros(2 * nseg)
+        r[2 * s] = 1.0
+        r[2 * s + 1] = (sup.at - bounds[s]) / L
+        rows.append(r)
+        if sup.kind == "fixed":
+            r = np.zeros(2 * nseg)
+            r[2 * s + 1] = 1.0
+            rows.append(r)
+    for s in range(nseg - 1):  # deflection is continuous through each hinge
+        r = np.zeros(2 * nseg)
+        r[2 * s] = 1.0
+        r[2 * s + 1] = (bounds[s + 1] - bounds[s]) / L
+        r[2 * (s + 1)] = -1.0
+        rows.append(r)
+    a = np.array(rows)
+    _, sv, vt = np.linalg.svd(a)
+    rank = int(np.sum(sv > 1e-10 * sv[0])) if sv.size else 0
+    if rank >= 2 * nseg:
+        return None
+    null = vt[-1]
+    null = null / np.max(np.abs(null))
+    moving = [s for s in range(nseg) if max(abs(null[2 * s]), abs(null[2 * s + 1])) > 1e-6]
+
+    def unsupported(s):
+        return 0 < s < nseg - 1 and not any(
+            bounds[s] - 1e-12 * L <= sp.at <= bounds[s + 1] + 1e-12 * L for sp in restraints)
+
+    s = next((s for s in moving if unsupported(s)), moving[0])
+    a0, b0 = bounds[s], bounds[s + 1]
+    w, r = null[2 * s], null[2 * s + 1] / L
+    if nseg == 1:
+        if len(restraints) == 1 and restraints[0].kind != "fixed":
+            sup = restraints[0]
+            return (f"the beam can rotate about its only support at {fmt(sup.at)}: "
+                    "add a support or fix one end")
+        return "the supports do not hold the beam: add a support or fix one end"
+    inside = [sp for sp in restraints if a0 - 1e-12 * L <= sp.at <= b0 + 1e-12 * L]
+    part = f"the part of the beam from {fmt(a0)} to {fmt(b0)}"
+    if not inside and 0 < s < nseg - 1:
+        return (f"the hinges at {fmt(a0)} and {fmt(b0)} are in one span with no support "
+                f"between them, so {part} can drop: add a support between them or remove a hinge")
+    if abs(r) > 1e-12:
+        pivot = a0 - w / r
+        near = [x for x in [sp.at for sp in inside] + [a0, b0] if abs(x - pivot) < 1e-6 * L]
+        what = "hinge" if near and any(abs(h - pivot) < 1e-6 * L for h in hinges) else "support"
+        where = f"about the {what} at {fmt(near[0])}" if near else f"about a point at {fmt(pivot)}"
+        return (f"{part} can swing {where}: add a support between {fmt(a0)} and {fmt(b0)}, "
+                "fix a support, or remove a hinge")
+    return f"{part} can move up and down freely: add a support between {fmt(a0)} and {fmt(b0)}"
+
+
+def validate_geometry(beam: Beam) -> list[str]:
+    """Problems with where supports, hinges and loads sit (empty if none)."""
+    L = beam.length
+    tol = 1e-9 * L
+    out = []
+    if not (L > 0 and math.isfinite(L)):
+        out.append("the beam length must be a positive finite length")
+        return out
+    if not (beam.ei > 0 and math.isfinite(beam.ei)):
+        out.append("EI (stiffness of the section) must be positive")
+    seen: dict[str, list[float]] = {}
+    for s in beam.supports:
+        if s.at < -tol or s.at > L + tol:
+            out.append(f"{s.key or 'support'}: at {_fmt_len(s.at)} is outside the beam (0 to {_fmt_len(L)})")
+        if s.kind == "hinge" and (s.at <= tol or s.at >= L - tol):
+            out.append(f"{s.key or 'hinge'}: a hinge at the end of the beam releases nothing; "
+                       "put it inside the span or remove it")
+        if s.kind == "spring" and not (s.stiffness > 0 and math.isfinite(s.stiffness)):
+            out.append(f"{s.key or 'spring'}: a spring needs a positive stiffness")
+        group = "hinge" if s.kind == "hinge" else "support"
+        for other in seen.get(group, []):
+            if abs(other - s.at) <= tol:
+                out.append(f"{s.key or s.kind}: two {group}s at {_fmt_len(s.at)}; keep one")
+        seen.setdefault(group, []).append(s.at)
+    for h in (s for s in beam.supports if s.kind == "hinge"):
+        for f in (s for s in beam.supports if s.kind == "fixed"):
+            if abs(f.at - h.at) <= tol:
+                out.append(f"{h.key or 'hinge'}: a hinge at a fixed support makes it a pin; use type = \"pin\"")
+        for ld in beam.loads:
+            if ld.kind == "moment" and abs(ld.at - h.at) <= tol:
+                out.append(f"{ld.key or 'couple'}: a couple exactly at the hinge at {_fmt_len(h.at)} "
+                           "is ambiguous; apply it a little to one side")
+    for ld in beam.loads:
+        pos = ld.describe_position()
+        if any(p < -tol or p > L + tol for p in pos):
+            out.append(f"{ld.key or 'load'}: lies outside the beam (0 to {_fmt_len(L)})")
+        if ld.kind in ("uniform", "linear") and not ld.end > ld.start:
+            out.append(f"{ld.key or 'load'}: end must be beyond start")
+    return out
+
+
+# ------------------------------------------------------------------ marching
+def _snap(positions: np.ndarray, L: float) -> np.ndarray:
+    """Merge positions closer than 1e-9 L (e.g. "4 ft" and "48 in")."""
+    return np.round(positions / (L * 1e-9)) * (L * 1e-9)
+
+
+def _taylor(h: np.ndarray) -> np.ndarray:
+    """Transfer matrices (P, 6, 6) carrying the state across pieces of length h."""
+    p = h.shape[0]
+    t = np.zeros((p, _NLEV, _NLEV))
+    for k in range(_NLEV):  # level row k gets sum_m state[k - m] h^m / m!
+        for m in range(k + 1):
+            t[:, k, k - m] = h**m / math.factorial(m)
+    return t
+
+
+def _march(breaks: np.ndarray, jumps: np.ndarray) -> np.ndarray:
+    """States just right of every break: (P + 1, 6, ncol)."""
+    h = np.diff(breaks)
+    tm = _taylor(h)
+    states = np.empty_like(jumps)
+    s = jumps[0]
+    states[0] = s
+    for j in range(len(h)):
+        s = tm[j] @ s + jumps[j + 1]
+        states[j + 1] = s
+    return states
+
+
+def _piece_coeffs(states: np.ndarray, level: int) -> np.ndarray:
+    """Local Taylor coefficients of one level on each piece from right-limit states."""
+    k = level + 1  # state index
+    cols = [states[:-1, k - m] / math.factorial(m) for m in range(k + 1)]
+    return np.stack(cols, axis=1)
+
+
+def solve(beam: Beam, length_fmt=None) -> Solution:
+    """Solve the beam. Raises UnstableBeam for rigid-body motion or a mechanism.
+
+    `length_fmt` formats positions in messages (default: feet and inches).
+    """
+    problems = validate_geometry(beam)
+    if problems:
+        from shopbeam.errors import InputError
+
+        raise InputError("; ".join(problems))
+    why = stability_problem(beam, length_fmt)
+    if why:
+        raise UnstableBeam(why)
+    L, ei = beam.length, beam.ei
+    unknowns = _unknowns(beam)
+    nz = len(unknowns)
+    terms = load_terms(beam.loads)
+    t_coef = np.array([t[0] for t in terms] + [u.coef for u in unknowns], dtype=float)
+    t_pos = np.array([t[1] for t in terms] + [u.at for u in unknowns], dtype=float)
+    t_pow = np.array([t[2] for t in terms] + [u.power for u in unknowns], dtype=int)
+    t_col = np.concatenate([np.zeros(len(terms), int), np.arange(1, nz + 1)])
+    allpos = _snap(np.concatenate([[0.0, L], t_pos]), L)
+    allpos = np.clip(allpos, allpos[0], allpos[1])
+    breaks, where = np.unique(allpos, return_inverse=True)
+    where = where[2:]
+    jumps = np.zeros((len(breaks), _NLEV, nz + 1))
+    # each term c<x-a>^n jumps state level -n by c (ramps n = 1 jump q' by c)
+    np.add.at(jumps, (where, -t_pow + 1, t_col), t_coef)
+    states = _march(breaks, jumps)
+
+    def at(x: float) -> int:
+        return int(np.searchsorted(breaks, _snap(np.array([x]), L)[0]))
+
+    # ---- the linear system: one row per condition, in unknown order
+    rows, rhs = [], []
+
+    def cond(vec: np.ndarray):
+        rows.append(vec[1:])
+        rhs.append(-vec[0])
+
+    end = states[-1]
+    cond(end[_IDX["V"]])  # V(L+) = 0
+    cond(end[_IDX["M"]])  # M(L+) = 0
+    for u in unknowns:
+        if u.kind == "c1" or u.kind == "c2":
+            continue
+        sup = beam.supports[u.support]
+        st = states[at(sup.at)]
+        if u.kind == "force":
+            if sup.kind == "spring":
+                vec = st[_IDX["EIu"]] * (sup.stiffness / ei)
+                vec = vec.copy()
+                vec[1 + unknowns.index(u)] += 1.0  # R + k u = 0
+                cond(vec)
+            else:
+                cond(st[_IDX["EIu"]])
+        elif u.kind == "moment":
+            cond(st[_IDX["EIt"]])
+        elif u.kind == "hinge":
+            cond(st[_IDX["M"]])
+    a = np.array(rows)
+    b = np.array(rhs)
+    # equilibrate rows and columns before solving (units differ: N, N*m, N*m^2, N*m^3)
+    rs = np.max(np.abs(a), axis=1)
+    rs[rs == 0] = 1.0
+    a1 = a / rs[:, None]
+    cs = np.max(np.abs(a1), axis=0)
+    cs[cs == 0] = 1.0
+    a2 = a1 / cs[None, :]
+    try:
+        y = np.linalg.solve(a2, b / rs)
+        condition = float(np.linalg.cond(a2))
+    except np.linalg.LinAlgError:
+        raise UnstableBeam("the supports and hinges leave the beam free to move: "
+                           "add a support or fix one end") from None
+    if not math.isfinite(condition) or condition > 1e14:
+        raise UnstableBeam("the beam is on the edge of being a mechanism (the equations are "
+                           "singular to working precision): check supports and hinges")
+    z = y / cs
+    w = np.concatenate([[1.0], z])
+    final = states @ w  # (P + 1, 6)
+
+    def pw(level: int, scale: float = 1.0) -> Piecewise:
+        return Piecewise(breaks, _piece_coeffs(final, level) * scale)
+
+    reactions = []
+    hinge_rot = []
+    by_support: dict[int, dict[str, float]] = {}
+    for u, val in zip(unknowns, z):
+        if u.kind in ("force", "moment"):
+            by_support.setdefault(u.support, {})[u.kind] = float(val)
+        elif u.kind == "hinge":
+            hinge_rot.append((u.at, float(val) / ei))
+    for i, s in enumerate(beam.supports):
+        if s.kind == "hinge":
+            continue
+        got = by_support.get(i, {})
+        reactions.append(Reaction(s.at, s.kind, got.get("force", 0.0), got.get("moment", 0.0), s.key))
+    reactions.sort(key=lambda r: r.at)
+    c1 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c1"][0]])
+    c2 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c2"][0]])
+    return Solution(
+        beam=beam,
+        reactions=tuple(reactions),
+        hinge_rotations=tuple(hinge_rot),
+        ei_slope_0=c1,
+        ei_deflection_0=c2,
+        load=pw(0),
+        shear=pw(1),
+        moment=pw(2),
+        slope=pw(3, 1.0 / ei),
+        deflection=pw(4, 1.0 / ei),
+        condition=condition,
+    )
+
+
+def segments(beam: Beam) -> list[tuple[float, float, str]]:
+    """Spans between deflection supports and overhangs beyond them: (start, end, kind).
+
+    kind is "span" between two supports, "overhang" beyond the outermost support, or
+    "cantilever" when a fixed end carries it. Springs count as supports here.
+    """
+    L = beam.length
+    pts = sorted({s.at for s in beam.supports if s.takes_force})
+    out: list[tuple[float, float, str]] = []
+    if not pts:
+        return [(0.0, L, "span")]
+    tol = 1e-9 * L
+    fixed = {s.at for s in beam.supports if s.kind == "fixed"}
+    if pts[0] > tol:
+        out.append((0.0, pts[0], "cantilever" if pts[0] in fixed else "overhang"))
+    for a, b in zip(pts, pts[1:]):
+        out.append((a, b, "span"))
+    if pts[-1] < L - tol:
+        out.append((pts[-1], L, "cantilever" if pts[-1] in fixed else "overhang"))
+    return out
