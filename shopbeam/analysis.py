@@ -65,13 +65,13 @@ def to_json(result: Result) -> dict:
         "title": job.title,
         "length": job.length,
         "reactions": [
-            {"at": r.at, "type": r.kind, "force": r.force, "moment": r.moment}
+            {"at": float(r.at), "type": r.kind, "force": float(r.force), "moment": float(r.moment)}
             for r in sol.reactions
         ],
         "extremes": {name: e.as_dict() for name, e in ex.items()},
         "checks": [c.as_dict() for c in result.checks],
         "governing": result.governing.name,
-        "diagnostics": [{"name": d.name, "ok": d.ok, "detail": d.detail} for d in sol.diagnostics],
+        "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),
         "members": job.members,
         "section": getattr(job.section, "designation", ""),

@@ -35,9 +35,10 @@ class Check:
         return self.ratio <= 1.0
 
     def as_dict(self) -> dict:
-        return {"name": self.name, "demand": self.demand, "limit": self.limit,
-                "ratio": self.ratio, "ok": self.ok, "unit": self.unit,
-                "formula": self.formula, "at": self.at, "detail": self.detail}
+        return {"name": self.name, "demand": float(self.demand), "limit": float(self.limit),
+                "ratio": float(self.ratio), "ok": bool(self.ok), "unit": self.unit,
+                "formula": self.formula, "at": None if self.at is None else float(self.at),
+                "detail": self.detail}
 
 
 def deflection_limits(job, sol: Solution) -> list[dict]:
