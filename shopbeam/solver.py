@@ -281,8 +281,19 @@ def validate_geometry(beam: Beam) -> list[str]:
 
 # ------------------------------------------------------------------ marching
 def _snap(positions: np.ndarray, L: float) -> np.ndarray:
-    """Merge positions closer than 1e-9 L (e.g. "4 ft" and "48 in")."""
-    return np.round(positions / (L * 1e-9)) * (L * 1e-9)
+    """Merge positions closer than 1e-9 L (e.g. "4 ft" and "48 in").
+
+    Each cluster of near-equal positions takes the value of its earliest entry (so 0 and L,
+    given first, stay exact); a lone position is never moved.
+    """
+    order = np.argsort(positions, kind="stable")
+    p = positions[order]
+    starts = np.concatenate([[True], np.diff(p) > 1e-9 * L])
+    first = np.flatnonzero(starts)
+    reps = positions[np.minimum.reduceat(order, first)]
+    out = np.empty_like(positions)
+    out[order] = reps[np.cumsum(starts) - 1]
+    return out
 
 
 def _taylor(h: np.ndarray) -> np.ndarray:
@@ -336,8 +347,7 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
     t_pos = np.array([t[1] for t in terms] + [u.at for u in unknowns], dtype=float)
     t_pow = np.array([t[2] for t in terms] + [u.power for u in unknowns], dtype=int)
     t_col = np.concatenate([np.zeros(len(terms), int), np.arange(1, nz + 1)])
-    allpos = _snap(np.concatenate([[0.0, L], t_pos]), L)
-    allpos = np.clip(allpos, allpos[0], allpos[1])
+    allpos = _snap(np.clip(np.concatenate([[0.0, L], t_pos]), 0.0, L), L)
     breaks, where = np.unique(allpos, return_inverse=True)
     where = where[2:]
     jumps = np.zeros((len(breaks), _NLEV, nz + 1))
@@ -346,7 +356,7 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
     states = _march(breaks, jumps)
 
     def at(x: float) -> int:
-        return int(np.searchsorted(breaks, _snap(np.array([x]), L)[0]))
+        return int(np.argmin(np.abs(breaks - x)))
 
     # ---- the linear system: one row per condition, in unknown order
     rows, rhs = [], []
