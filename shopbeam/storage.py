@@ -218,10 +218,11 @@ def lock_path(path: str | os.PathLike) -> Path:
 
 
 @contextmanager
-def locked(path: str | os.PathLike, timeout: float = LOCK_TIMEOUT):
+def locked(path: str | os.PathLike, timeout: float | None = None):
     """Hold the write lock for `path` (a `.NAME.lock` file beside it) while inside."""
     from filelock import FileLock, Timeout
 
+    timeout = LOCK_TIMEOUT if timeout is None else timeout
     lp = lock_path(path)
     lock = FileLock(str(lp), timeout=timeout)
     try:
