@@ -1,0 +1,710 @@
+"""Catalog: the standard shapes and stock sizes shopbeam knows by name.
+
+- AISC shapes (W, M, S, HP, C, MC, L, WT, MT, ST, HSS, Pipe) with their tabulated
+  properties from ``data/aisc-shapes-v15.csv`` (AISC Shapes Database v15.0, trimmed),
+  read once on first use.
+- Flat, square and round bar in common US stock sizes, computed from dimensions.
+- Metric sections by their standard dimensions, computed from dimensions: SHS/RHS/CHS
+  (EN 10219-2 cold-formed hollow sections, corner radius per EN 10219-2), IPE, HEA, HEB
+  and UPN (EN 10365). These dimension tables are recalled from memory of the standards'
+  tables and the tests check them against properties recalled from the same tables.
+
+Look-up is spelling tolerant: case, spaces, ``x``/``X``/``*``, decimal or fraction walls
+(``HSS4x4x1/4`` = ``hss 4 x 4 x .250``), mixed numbers (``L3-1/2x3x1/4`` = ``L 3 1/2 x 3 x
+1/4``) and the EDI names (``Pipe2SCH40``). Shop descriptions such as ``rect-tube 2 x 1 x
+14ga``, ``round-tube 1.5 x 0.065``, ``flat-bar 3 x 1/4`` or ``round-bar 1`` are computed on
+the spot; bare numbers there are inches like the AISC designations (or millimetres when
+the text says ``mm``), and a wall may be a gauge. A near miss gets "did you mean ...".
+"""
+
+from __future__ import annotations
+
+import csv
+import difflib
+import math
+import re
+from dataclasses import replace
+from fractions import Fraction
+from functools import lru_cache
+from importlib import resources
+
+from shopbeam import sections as S
+from shopbeam.errors import InputError
+from shopbeam.sections import Section
+
+IN = 0.0254
+MM = 0.001
+LB_FT = 0.45359237 / 0.3048  # kg/m per lb/ft
+AISC_SOURCE = "AISC Shapes Database v15.0"
+
+# ----------------------------------------------------------------- designation keys
+_MIXED = re.compile(r"(\d+)\s*[- ]\s*(\d+)\s*/\s*(\d+)")
+
+
+_MIXED_NUM = re.compile(r"(\d+)-(\d+)/(\d+)")
+_FRACTION = re.compile(r"(\d+)/(\d+)")
+_DECIMAL = re.compile(r"\d*\.?\d+|\d+\.")
+
+
+def _number(tok: str) -> float | None:
+    """A size token: "4", ".250", "1/4", "1-1/2" -> float; None if it is not one."""
+    tok = tok.strip()
+    if _DECIMAL.fullmatch(tok):
+        return float(tok)
+    try:
+        m = _FRACTION.fullmatch(tok)
+        if m:
+            return int(m.group(1)) / int(m.group(2))
+        m = _MIXED_NUM.fullmatch(tok)
+        if m:
+            return int(m.group(1)) + int(m.group(2)) / int(m.group(3))
+    except ZeroDivisionError:
+        return None
+    return None
+
+
+def _prep(text: str) -> str:
+    s = text.upper().replace("\u00d7", "X").replace("*", "X").replace('"', "").replace("''", "")
+    s = _MIXED.sub(lambda m: f"{m.group(1)}-{m.group(2)}/{m.group(3)}", s)
+    s = re.sub(r"\s*/\s*", "/", s)
+    s = re.sub(r"\s+", "", s)
+    return s
+
+
+_PIPE = re.compile(r"^PIPE(?P<n>[\d./-]+)(?P<w>STD|XXS|XS|SCH\d+)$")
+_HE = re.compile(r"^HE(?P<n>\d+)(?P<s>[AB])$")
+
+
+def canon(text: str) -> str | None:
+    """The canonical key of a designation ("HSS|4|4|0.25"), or None if it does not scan."""
+    s = _prep(text)
+    if not s:
+        return None
+    m = _PIPE.match(s)
+    if m:
+        n = _number(m.group("n"))
+        return None if n is None else f"PIPE|{n:g}|{m.group('w')}"
+    m = _HE.match(s)
+    if m:
+        s = f"HE{m.group('s')}{m.group('n')}"
+    m = re.match(r"^([A-Z]+)(.*)$", s)
+    if not m or not m.group(2):
+        return None
+    prefix, rest = m.groups()
+    nums = []
+    for tok in rest.split("X"):
+        v = _number(tok)
+        if v is None:
+            return None
+        nums.append(v)
+    if prefix == "SHS" and len(nums) == 2:
+        nums = [nums[0], nums[0], nums[1]]
+    return "|".join([prefix] + [f"{round(v, 4):g}" for v in nums])
+
+
+# ----------------------------------------------------------------- AISC rows
+_FLOAT_COLS = ("W", "A", "d", "Ht", "OD", "bf", "B", "b", "t", "tw", "tf", "tnom", "tdes",
+               "kdes", "x", "y", "Ix", "Zx", "Sx", "rx", "Iy", "Zy", "Sy", "ry", "Iz", "rz",
+               "Sz", "tan(a)", "J", "Cw", "rts", "ho", "h/tw", "bf/2tf", "b/t", "b/tdes",
+               "h/tdes", "D/t")
+
+
+@lru_cache(maxsize=1)
+def _aisc_rows() -> tuple[dict, ...]:
+    text = resources.files("shopbeam").joinpath("data/aisc-shapes-v15.csv").read_text("utf-8")
+    lines = [ln for ln in text.splitlines() if ln and not ln.startswith("#")]
+    out = []
+    for r in csv.DictReader(lines):
+        row = {"Type": r["Type"], "label": r["AISC_Manual_Label"],
+               "edi": r["EDI_Std_Nomenclature"]}
+        for c in _FLOAT_COLS:
+            v = r.get(c, "")
+            row[c] = float(v) if v else None
+        out.append(row)
+    return tuple(out)
+
+
+def _f(row, c, unit):
+    v = row[c]
+    return None if v is None else v * unit
+
+
+def _from_aisc(row) -> Section:
+    """A Section (strong axis) from one AISC row; tabulated values, converted exactly."""
+    typ, label = row["Type"], row["label"]
+    a = row["A"] * IN**2
+    ix, iy = row["Ix"] * IN**4, row["Iy"] * IN**4
+    sx, sy = row["Sx"] * IN**3, row["Sy"] * IN**3
+    zx, zy = _f(row, "Zx", IN**3), _f(row, "Zy", IN**3)
+    rx, ry = _f(row, "rx", IN), _f(row, "ry", IN)
+    j, cw = _f(row, "J", IN**4), _f(row, "Cw", IN**6)
+    mass = row["W"] * LB_FT if row["W"] else None
+    src = AISC_SOURCE
+    warnings: tuple[str, ...] = ()
+    if typ == "HSS" and row["OD"] is None:
+        h, b, tn, td = row["Ht"] * IN, row["B"] * IN, row["tnom"] * IN, row["tdes"] * IN
+        hf, bf = h - 3 * td, b - 3 * td
+        dims = {"h": h, "b": b, "t_nom": tn, "t_des": td, "r_out": 2 * td, "h_flat": hf,
+                "b_flat": bf, "h_t": row["h/tdes"], "b_t": row["b/tdes"]}
+        shape, s_top, s_bot, shear, depth, axis = "rect-tube", sx, sx, 2 * hf * td, h, "strong"
+        src += " (design wall 0.93 x nominal, ERW HSS, AISC 360 B4.2)"
+        cw = None
+    elif typ in ("HSS", "PIPE"):
+        od, tn, td = row["OD"] * IN, row["tnom"] * IN, row["tdes"] * IN
+        dims = {"od": od, "t_nom": tn, "t_des": td, "D_t": row["D/t"]}
+        shape = "round-tube" if typ == "HSS" else "pipe"
+        s_top = s_bot = sx
+        shear, depth, axis, cw = a / 2, od, "n/a", None
+        src += " (design wall 0.93 x nominal, AISC 360 B4.2)"
+    elif typ in ("W", "M", "S", "HP", "C", "MC"):
+        d, bf, tf, tw = (row[k] * IN for k in ("d", "bf", "tf", "tw"))
+        kdes = row["kdes"] * IN
+        dims = {"d": d, "bf": bf, "tf": tf, "tw": tw, "kdes": kdes,
+                "ho": _f(row, "ho", IN) or d - tf, "h_tw": row["h/tw"]}
+        if row["rts"] is not None:
+            dims["rts"] = row["rts"] * IN
+        if typ in ("C", "MC"):
+            shape = "channel"
+            dims["x"] = row["x"] * IN
+            dims["b_t"] = row["b/t"] if row["b/t"] is not None else bf / tf
+        else:
+            shape = "i-beam"
+            dims["bf_2tf"] = row["bf/2tf"]
+        s_top = s_bot = sx
+        shear, depth, axis = d * tw, d, "strong"
+    elif typ == "L":
+        # the database's Ix is about the axis across the longer leg (longer leg vertical),
+        # y measured from the heel along that leg
+        legs = [float(v) for v in _label_nums(label)]
+        dl, bs, t = legs[0] * IN, legs[1] * IN, row["t"] * IN
+        y, x = row["y"] * IN, row["x"] * IN
+        dims = {"d": dl, "b": bs, "t": t, "y": y, "x": x, "b_t": row["b/t"],
+                "iz": row["Iz"] * IN**4, "rz": row["rz"] * IN, "tan_alpha": row["tan(a)"],
+                "kdes": row["kdes"] * IN}
+        shape, axis = "angle", "geometric"
+        s_top, s_bot = ix / (dl - y), ix / y  # horizontal leg at the bottom
+        shear, depth = dl * t, dl
+        warnings = (S.ANGLE_WARNING,)
+    elif typ in ("WT", "MT", "ST"):
+        d, bf, tf, tw = (row[k] * IN for k in ("d", "bf", "tf", "tw"))
+        y = row["y"] * IN
+        dims = {"d": d, "bf": bf, "tf": tf, "tw": tw, "kdes": row["kdes"] * IN, "y": y,
+                "d_tw": d / tw, "bf_2tf": row["bf/2tf"] or bf / (2 * tf)}
+        shape, axis = "tee", "strong"
+        s_top, s_bot = ix / y, ix / (d - y)  # flange on top
+        shear, depth = d * tw, d
+    else:  # pragma: no cover - the data file holds only the types above
+        raise ValueError(typ)
+    return Section(label, shape, a, ix, s_top, s_bot, zx, iy, sy, zy, rx, ry, j, cw, shear,
+                   depth, axis, dims, src, warnings, mass)
+
+
+def _label_nums(label: str) -> list[float]:
+    key = canon(label) or ""
+    return [float(v) for v in key.split("|")[1:]]
+
+
+# ----------------------------------------------------------------- generated stock
+# US bar stock sizes (common practice: what steel service centres list), inches.
+_FB_WIDTHS = ("1/2", "3/4", "1", "1-1/4", "1-1/2", "1-3/4", "2", "2-1/2", "3", "3-1/2", "4",
+              "4-1/2", "5", "6", "7", "8", "10", "12")
+_FB_THICK = ("1/8", "3/16", "1/4", "5/16", "3/8", "1/2", "5/8", "3/4", "1")
+_RB_SIZES = ("1/4", "5/16", "3/8", "1/2", "5/8", "3/4", "7/8", "1", "1-1/8", "1-1/4", "1-3/8",
+             "1-1/2", "1-3/4", "2", "2-1/4", "2-1/2", "3", "3-1/2", "4")
+_SQ_SIZES = ("1/4", "3/8", "1/2", "5/8", "3/4", "1", "1-1/4", "1-1/2", "2", "2-1/2", "3")
+
+# EN 10365 hot-rolled sections, mm, from memory: (h, b, tw, tf, r)
+IPE = {
+    80: (80, 46, 3.8, 5.2, 5), 100: (100, 55, 4.1, 5.7, 7), 120: (120, 64, 4.4, 6.3, 7),
+    140: (140, 73, 4.7, 6.9, 7), 160: (160, 82, 5.0, 7.4, 9), 180: (180, 91, 5.3, 8.0, 9),
+    200: (200, 100, 5.6, 8.5, 12), 220: (220, 110, 5.9, 9.2, 12), 240: (240, 120, 6.2, 9.8, 15),
+    270: (270, 135, 6.6, 10.2, 15), 300: (300, 150, 7.1, 10.7, 15),
+    330: (330, 160, 7.5, 11.5, 18), 360: (360, 170, 8.0, 12.7, 18),
+    400: (400, 180, 8.6, 13.5, 21), 450: (450, 190, 9.4, 14.6, 21),
+    500: (500, 200, 10.2, 16.0, 21), 550: (550, 210, 11.1, 17.2, 24),
+    600: (600, 220, 12.0, 19.0, 24),
+}
+HEA = {
+    100: (96, 100, 5, 8, 12), 120: (114, 120, 5, 8, 12), 140: (133, 140, 5.5, 8.5, 12),
+    160: (152, 160, 6, 9, 15), 180: (171, 180, 6, 9.5, 15), 200: (190, 200, 6.5, 10, 18),
+    220: (210, 220, 7, 11, 18), 240: (230, 240, 7.5, 12, 21), 260: (250, 260, 7.5, 12.5, 24),
+    280: (270, 280, 8, 13, 24), 300: (290, 300, 8.5, 14, 27), 320: (310, 300, 9, 15.5, 27),
+    340: (330, 300, 9.5, 16.5, 27), 360: (350, 300, 10, 17.5, 27), 400: (390, 300, 11, 19, 27),
+    450: (440, 300, 11.5, 21, 27), 500: (490, 300, 12, 23, 27),
+}
+HEB = {
+    100: (100, 100, 6, 10, 12), 120: (120, 120, 6.5, 11, 12), 140: (140, 140, 7, 12, 12),
+    160: (160, 160, 8, 13, 15), 180: (180, 180, 8.5, 14, 15), 200: (200, 200, 9, 15, 18),
+    220: (220, 220, 9.5, 16, 18), 240: (240, 240, 10, 17, 21), 260: (260, 260, 10, 17.5, 24),
+    280: (280, 280, 10.5, 18, 24), 300: (300, 300, 11, 19, 27), 320: (320, 300, 11.5, 20.5, 27),
+    340: (340, 300, 12, 21.5, 27), 360: (360, 300, 12.5, 22.5, 27),
+    400: (400, 300, 13.5, 24, 27), 450: (450, 300, 14, 26, 27), 500: (500, 300, 14.5, 28, 27),
+}
+# UPN (taper-flange channels; tf at mid-flange, r = root radius), mm, from memory
+UPN = {
+    80: (80, 45, 6, 8, 8), 100: (100, 50, 6, 8.5, 8.5), 120: (120, 55, 7, 9, 9),
+    140: (140, 60, 7, 10, 10), 160: (160, 65, 7.5, 10.5, 10.5), 180: (180, 70, 8, 11, 11),
+    200: (200, 75, 8.5, 11.5, 11.5), 220: (220, 80, 9, 12.5, 12.5), 240: (240, 85, 9.5, 13, 13),
+    260: (260, 90, 10, 14, 14), 280: (280, 95, 10, 15, 15), 300: (300, 100, 10, 16, 16),
+}
+# EN 10219-2 cold-formed hollow sections commonly stocked, mm
+SHS = {20: (2,), 25: (2, 2.5, 3), 30: (2, 2.5, 3), 40: (2, 2.5, 3, 4), 50: (2, 2.5, 3, 4, 5),
+       60: (2.5, 3, 4, 5), 70: (3, 4, 5), 80: (3, 4, 5, 6), 90: (4, 5, 6),
+       100: (3, 4, 5, 6, 8), 120: (4, 5, 6, 8, 10), 140: (5, 6, 8, 10), 150: (5, 6, 8, 10),
+       160: (5, 6, 8, 10), 180: (6, 8, 10), 200: (6, 8, 10, 12.5), 250: (8, 10, 12.5),
+       300: (8, 10, 12.5)}
+RHS = {(40, 20): (2, 2.5, 3), (50, 25): (2, 2.5, 3), (50, 30): (2, 3, 4),
+       (60, 30): (2.5, 3, 4), (60, 40): (2.5, 3, 4), (70, 50): (3, 4), (80, 40): (3, 4, 5),
+       (80, 60): (3, 4, 5), (100, 50): (3, 4, 5, 6), (100, 60): (3, 4, 5, 6),
+       (120, 60): (4, 5, 6), (120, 80): (4, 5, 6, 8), (140, 80): (4, 5, 6, 8),
+       (150, 100): (5, 6, 8, 10), (160, 80): (5, 6, 8), (200, 100): (5, 6, 8, 10),
+       (250, 150): (6, 8, 10), (300, 200): (8, 10, 12.5)}
+CHS = {21.3: (2, 2.6, 3.2), 26.9: (2, 2.6, 3.2), 33.7: (2.6, 3.2, 4), 42.4: (2.6, 3.2, 4),
+       48.3: (2.6, 3.2, 4, 5), 60.3: (2.9, 3.2, 4, 5), 76.1: (3.2, 4, 5),
+       88.9: (3.2, 4, 5, 6.3), 114.3: (3.6, 4, 5, 6.3), 139.7: (4, 5, 6.3, 8),
+       168.3: (4.5, 5, 6.3, 8, 10), 219.1: (5, 6.3, 8, 10), 273: (6.3, 8, 10),
+       323.9: (6.3, 8, 10)}
+
+EN10219 = "EN 10219-2 dimensions (from memory), properties computed from dimensions"
+EN10365 = "EN 10365 dimensions (from memory), properties computed from dimensions"
+
+
+def en10219_corner_radius(t_mm: float) -> float:
+    """Outside corner radius used for EN 10219-2 section properties, mm (from memory):
+    2 t up to 6 mm, 2.5 t over 6 to 10 mm, 3 t over 10 mm."""
+    return (2.0 if t_mm <= 6 else 2.5 if t_mm <= 10 else 3.0) * t_mm
+
+
+def _mm(v: float) -> str:
+    return f"{v:g}"
+
+
+def _generated() -> list[tuple[str, str, object]]:
+    """(kind, designation, builder) for the stock that is computed from dimensions."""
+    out: list[tuple[str, str, object]] = []
+    for w in _FB_WIDTHS:
+        wv = _number(w)
+        for t in _FB_THICK:
+            tv = _number(t)
+            if tv < wv:
+                des = f"FB{w}x{t}"
+                out.append(("flat-bar", des, lambda w=wv, t=tv, des=des: S.rect_bar(
+                    w * IN, t * IN, designation=des,
+                    source="flat bar stock size, computed from dimensions")))
+    for s in _SQ_SIZES:
+        sv = _number(s)
+        des = f"SQ{s}"
+        out.append(("square-bar", des, lambda s=sv, des=des: S.rect_bar(
+            s * IN, s * IN, designation=des,
+            source="square bar stock size, computed from dimensions")))
+    for s in _RB_SIZES:
+        sv = _number(s)
+        des = f"RB{s}"
+        out.append(("round-bar", des, lambda s=sv, des=des: S.round_bar(
+            s * IN, designation=des, source="round bar stock size, computed from dimensions")))
+    for size, ts in SHS.items():
+        for t in ts:
+            des = f"SHS{size}x{size}x{_mm(t)}"
+            out.append(("SHS", des, lambda a=size, t=t, des=des: S.rect_tube(
+                a * MM, a * MM, t * MM, r_out=en10219_corner_radius(t) * MM, designation=des,
+                source=EN10219)))
+    for (h, b), ts in RHS.items():
+        for t in ts:
+            des = f"RHS{h}x{b}x{_mm(t)}"
+            out.append(("RHS", des, lambda h=h, b=b, t=t, des=des: S.rect_tube(
+                h * MM, b * MM, t * MM, r_out=en10219_corner_radius(t) * MM, designation=des,
+                source=EN10219)))
+    for od, ts in CHS.items():
+        for t in ts:
+            des = f"CHS{_mm(od)}x{_mm(t)}"
+            out.append(("CHS", des, lambda od=od, t=t, des=des: S.round_tube(
+                od * MM, t * MM, designation=des, source=EN10219)))
+    for name, table in (("IPE", IPE), ("HEA", HEA), ("HEB", HEB)):
+        for n, (h, b, tw, tf, r) in table.items():
+            des = f"{name}{n}"
+            out.append((name, des, lambda h=h, b=b, tw=tw, tf=tf, r=r, des=des: S.i_shape(
+                h * MM, b * MM, tf * MM, tw * MM, r=r * MM, designation=des, source=EN10365)))
+    for n, (h, b, tw, tf, r) in UPN.items():
+        des = f"UPN{n}"
+        out.append(("UPN", des, lambda h=h, b=b, tw=tw, tf=tf, r=r, des=des: S.channel(
+            h * MM, b * MM, tf * MM, tw * MM, r=r * MM, designation=des,
+            source=EN10365 + " (taper flanges taken parallel at the mean thickness)")))
+    return out
+
+
+# ----------------------------------------------------------------- the index
+_KIND_OF_TYPE = {"HSS": "HSS", "PIPE": "PIPE"}
+KIND_INFO = {
+    "HSS": "AISC hollow structural sections, rectangular, square and round",
+    "HSS-rect": "AISC rectangular and square HSS", "HSS-round": "AISC round HSS",
+    "PIPE": "AISC Pipe STD / XS / XXS", "W": "AISC W shapes", "M": "AISC M shapes",
+    "S": "AISC S shapes (American standard beams)", "HP": "AISC HP bearing piles",
+    "C": "AISC C channels", "MC": "AISC MC channels", "L": "AISC angles",
+    "WT": "AISC WT tees (cut from W)", "MT": "AISC MT tees", "ST": "AISC ST tees",
+    "flat-bar": "flat bar, US stock sizes (FBwidth x thickness)",
+    "square-bar": "square bar, US stock sizes", "round-bar": "round bar, US stock sizes",
+    "SHS": "EN 10219 square hollow sections", "RHS": "EN 10219 rectangular hollow sections",
+    "CHS": "EN 10219 circular hollow sections", "IPE": "EN 10365 IPE beams",
+    "HEA": "EN 10365 HEA wide-flange beams", "HEB": "EN 10365 HEB wide-flange beams",
+    "UPN": "EN 10365 UPN channels",
+}
+_SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS"), "round-tube": ("HSS-round", "CHS"),
+                "pipe": ("PIPE",), "i-beam": ("W", "M", "S", "HP", "IPE", "HEA", "HEB"),
+                "channel": ("C", "MC", "UPN"), "angle": ("L",), "tee": ("WT", "MT", "ST"),
+                "rect-bar": ("flat-bar", "square-bar"), "round-bar": ("round-bar",)}
+
+
+class _Entry:
+    __slots__ = ("kind", "designation", "key", "row", "builder", "_sec")
+
+    def __init__(self, kind, designation, key, row=None, builder=None):
+        self.kind, self.designation, self.key = kind, designation, key
+        self.row, self.builder, self._sec = row, builder, None
+
+    def section(self) -> Section:
+        if self._sec is None:
+            self._sec = _from_aisc(self.row) if self.row is not None else self.builder()
+        return self._sec
+
+
+@lru_cache(maxsize=1)
+def _index() -> tuple[dict[str, _Entry], dict[str, list[_Entry]]]:
+    by_key: dict[str, _Entry] = {}
+    by_kind: dict[str, list[_Entry]] = {k: [] for k in KIND_INFO}
+    for row in _aisc_rows():
+        typ = row["Type"]
+        kind = typ if typ != "HSS" else ("HSS-round" if row["OD"] is not None else "HSS-rect")
+        e = _Entry(kind, row["label"], canon(row["label"]), row=row)
+        by_kind[kind].append(e)
+        if typ == "HSS":
+            by_kind["HSS"].append(e)
+        if e.key:
+            by_key.setdefault(e.key, e)
+        if row["edi"] != row["label"]:
+            k = canon(row["edi"])
+            if k:
+                by_key.setdefault(k, e)
+    for kind, des, builder in _generated():
+        e = _Entry(kind, des, canon(des), builder=builder)
+        by_kind[kind].append(e)
+        by_key.setdefault(e.key, e)
+    return by_key, by_kind
+
+
+def kinds() -> list[str]:
+    """The kinds `list_sections` takes (plus shape names such as "rect-tube")."""
+    return list(KIND_INFO)
+
+
+def _kind_names(kind: str) -> tuple[str, ...]:
+    k = kind.strip()
+    for name in KIND_INFO:
+        if name.lower() == k.lower():
+            return (name,)
+    low = k.lower().replace("_", "-")
+    low = {"hss-rectangular": "rect-tube", "rect": "rect-tube", "square-tube": "rect-tube",
+           "round": "round-tube", "flat": "flat-bar", "channel": "channel",
+           "angles": "angle", "beam": "i-beam", "w-shape": "W"}.get(low, low)
+    if low in _SHAPE_KINDS:
+        return _SHAPE_KINDS[low]
+    if low in ("w",):
+        return ("W",)
+    close = difflib.get_close_matches(k, list(KIND_INFO) + list(_SHAPE_KINDS), n=1, cutoff=0.5)
+    hint = f" (did you mean {close[0]!r}?)" if close else ""
+    raise InputError(f"unknown kind {kind!r}{hint}; kinds are {', '.join(KIND_INFO)} or a "
+                     f"shape ({', '.join(_SHAPE_KINDS)})", "--kind")
+
+
+def list_sections(kind: str | None = None, filter: str | None = None) -> list[Section]:
+    """Catalog sections of a kind (all when None), optionally filtered by a piece of the
+    designation ("4x4", "x1/4"; spelling tolerant like look-up). Sections are built once."""
+    by_key, by_kind = _index()
+    names = _kind_names(kind) if kind else tuple(k for k in KIND_INFO if k != "HSS")
+    entries = [e for n in names for e in by_kind[n]]
+    if filter:
+        pieces = [_filter_piece(w) for w in filter.split(",") if _prep(w)]
+        entries = [e for e in entries if all(_matches(e, p) for p in pieces)]
+    return [e.section() for e in entries]
+
+
+def _filter_piece(word: str) -> tuple[str, str | None]:
+    """(raw fragment, canonical numeric fragment or None): "x1/4" -> ("X1/4", "|0.25|")."""
+    w = _prep(word)
+    nums = [_number(p) for p in w.split("X") if p]
+    if nums and all(v is not None for v in nums):
+        return w, "|" + "|".join(f"{round(v, 4):g}" for v in nums) + "|"
+    return w, None
+
+
+def _matches(e: _Entry, piece: tuple[str, str | None]) -> bool:
+    raw, num = piece
+    if raw in _prep(e.designation):
+        return True
+    return num is not None and num in f"|{e.key}|"
+
+
+# ----------------------------------------------------------------- look-up
+_DESCRIBED = re.compile(
+    r"^\s*(?P<shape>rect(?:angular)?[- ]tube|square[- ]tube|round[- ]tube|tube|"
+    r"flat[- ]bar|rect[- ]bar|square[- ]bar|round[- ]bar|pipe)\s+(?P<dims>.*\d.*)$",
+    re.IGNORECASE,
+)
+
+
+def lookup(designation: str, key: str = "beam.section", material=None) -> Section:
+    """The catalog section for a designation (strong axis), spelling tolerant.
+
+    Also builds shop descriptions ("rect-tube 2 x 1 x 14ga") from their dimensions; `material`
+    then settles the design wall (0.93 x nominal for A500, nominal for A513; see sections).
+    """
+    if not isinstance(designation, str) or not designation.strip():
+        raise InputError("give a section designation such as \"HSS4x4x1/4\" or \"W8x31\"", key)
+    m = _DESCRIBED.match(designation)
+    if m and not _PIPE.match(_prep(designation)):
+        return _described(m.group("shape"), m.group("dims"), designation, key, material)
+    k = canon(designation)
+    by_key, _ = _index()
+    if k and k in by_key:
+        return by_key[k].section()
+    raise InputError(_not_found(designation, k), key)
+
+
+def _not_found(designation: str, k: str | None) -> str:
+    sugg = suggestions(designation)
+    hint = f"did you mean {', '.join(sugg)}? " if sugg else ""
+    return (f"unknown section {designation!r}: {hint}"
+            "`shopbeam shapes --kind HSS` lists the catalog, or describe the section "
+            "(e.g. \"rect-tube 2 x 1 x 14ga\") or give a [beam.section] table")
+
+
+def suggestions(designation: str, n: int = 3) -> list[str]:
+    """Near misses for an unknown designation: same family and nearest sizes first, then
+    the closest spellings."""
+    by_key, by_kind = _index()
+    k = canon(designation)
+    out: list[str] = []
+    if k:
+        prefix, *nums = k.split("|")
+        try:
+            vals = [float(v) for v in nums]
+        except ValueError:
+            vals = []
+        if vals:
+            cands = []
+            for e in by_key.values():
+                if not e.key:
+                    continue
+                p2, *n2 = e.key.split("|")
+                if p2 != prefix or len(n2) != len(vals):
+                    continue
+                try:
+                    v2 = [float(v) for v in n2]
+                except ValueError:
+                    continue
+                if any(a <= 0 or b <= 0 for a, b in zip(vals, v2)):
+                    continue
+                dist = sum(abs(math.log(a / b)) for a, b in zip(vals, v2))
+                cands.append((dist, e.designation))
+            cands.sort()
+            for _, des in cands[:n]:
+                if des not in out:
+                    out.append(des)
+    if len(out) < n:
+        labels = {_prep(e.designation): e.designation for e in by_key.values()}
+        for c in difflib.get_close_matches(_prep(designation), list(labels), n=n, cutoff=0.6):
+            if labels[c] not in out:
+                out.append(labels[c])
+    return out[:n]
+
+
+def _described(shape_word: str, dims_text: str, designation: str, key: str,
+               material) -> Section:
+    """Sections described as 'rect-tube 2 x 1 x 14ga' (inches unless a unit is written)."""
+    from shopbeam import gauges
+    from shopbeam.units import parse
+
+    shape = shape_word.lower().replace(" ", "-").replace("rectangular", "rect")
+    if shape == "tube":
+        shape = "rect-tube"
+    default_unit = "mm" if re.search(r"\bmm\b|\dmm", dims_text, re.IGNORECASE) else "in"
+    toks = [t.strip() for t in re.split(r"\s*[xX\u00d7*]\s*", dims_text.strip()) if t.strip()]
+    toks = [re.sub(r"(?i)\s*mm$", "", t) if default_unit == "mm" else t for t in toks]
+
+    def length(tok):
+        if re.search(r"[a-zA-Z\"']", tok):
+            return parse(tok, "length", key, positive=True)
+        v = _number(_MIXED.sub(lambda m: f"{m.group(1)}-{m.group(2)}/{m.group(3)}", tok))
+        if v is None or v <= 0:
+            raise InputError(f"cannot read {tok!r} in {designation!r} as a size", key)
+        return v * (MM if default_unit == "mm" else IN)
+
+    def wall(tok):
+        if gauges.gauge_number(tok) is not None:
+            return gauges.parse_wall(tok, key, "tube")
+        return length(tok), ""
+
+    need = {"rect-tube": 3, "square-tube": 2, "round-tube": 2, "pipe": 2, "flat-bar": 2,
+            "rect-bar": 2, "square-bar": 1, "round-bar": 1}[shape]
+    if len(toks) != need:
+        form = {"rect-tube": "rect-tube DEPTH x WIDTH x WALL (e.g. 2 x 1 x 14ga)",
+                "square-tube": "square-tube SIZE x WALL", "round-tube": "round-tube OD x WALL",
+                "pipe": "pipe OD x WALL", "flat-bar": "flat-bar WIDTH x THICKNESS",
+                "rect-bar": "rect-bar DEPTH x WIDTH", "square-bar": "square-bar SIZE",
+                "round-bar": "round-bar DIAMETER"}[shape]
+        raise InputError(f"{designation!r}: write it as {form}", key)
+    unit_note = "sizes in inches" if default_unit == "in" else "sizes in mm"
+    try:
+        if shape in ("rect-tube", "square-tube", "round-tube", "pipe"):
+            t, note = wall(toks[-1])
+            spec = {}
+            f, rule = S._wall_factor(spec, key, material, shape)
+            src = "computed from dimensions (" + "; ".join(
+                x for x in (unit_note, note, rule) if x) + ")"
+            if shape in ("round-tube", "pipe"):
+                return S.round_tube(length(toks[0]), t, t_des=f * t, shape=shape,
+                                    designation=designation.strip(), source=src)
+            h = length(toks[0])
+            b = h if shape == "square-tube" else length(toks[1])
+            sec = S.rect_tube(h, b, t, t_des=f * t, designation=designation.strip(),
+                              source=src[:-1] + "; outside corner radius 2 x design wall)")
+            return sec
+        if shape == "round-bar":
+            return S.round_bar(length(toks[0]), designation=designation.strip())
+        h = length(toks[0])
+        b = h if shape == "square-bar" else length(toks[1])
+        return S.rect_bar(h, b, designation=designation.strip())
+    except ValueError as exc:
+        raise InputError(f"{designation!r}: {exc}", key) from None
+
+
+# ----------------------------------------------------------------- output
+_PROPS = (  # (json key, label, display kind)
+    ("area", "Area A", "area"), ("ix", "Ix (bending axis)", "inertia"),
+    ("sx_top", "Sx top fibre", "modulus"), ("sx_bot", "Sx bottom fibre", "modulus"),
+    ("zx", "Zx plastic", "modulus"), ("rx", "rx", "small_length"),
+    ("iy", "Iy (other axis)", "inertia"), ("sy", "Sy", "modulus"), ("zy", "Zy", "modulus"),
+    ("ry", "ry", "small_length"), ("j", "J torsion", "inertia"),
+    ("shear_area", "Shear area", "area"), ("depth", "Depth", "small_length"),
+)
+
+
+def _cw_text(cw: float, system: str) -> str:
+    from shopbeam.units import num
+
+    return f"{num(cw / IN**6)} in^6" if system == "us" else f"{num(cw * 1e18)} mm^6"
+
+
+def section_report(sec: Section, system: str = "us") -> str:
+    """The text `shopbeam section X` prints: properties in the display system."""
+    from shopbeam.cautions import SHORT
+    from shopbeam.units import fmt
+
+    lines = [f"{sec.designation}  ({sec.shape}, {_axis_words(sec)})", f"source: {sec.source}"]
+    for k, label, kind in _PROPS:
+        v = getattr(sec, k)
+        if v is None:
+            continue
+        if k == "sx_top" and abs(sec.sx_top - sec.sx_bot) <= 1e-9 * sec.sx_top:
+            lines.append(f"  {'Sx':<20} {fmt(v, kind, system)}")
+            continue
+        if k == "sx_bot" and abs(sec.sx_top - sec.sx_bot) <= 1e-9 * sec.sx_top:
+            continue
+        lines.append(f"  {label:<20} {fmt(v, kind, system)}")
+    if sec.cw:
+        lines.append(f"  {'Cw warping':<20} {_cw_text(sec.cw, system)}")
+    if sec.mass_per_length:
+        lines.append(f"  {'Weight':<20} {fmt(sec.mass_per_length, 'mass_per_length', system)}"
+                     " (tabulated)")
+    else:
+        lines.append(f"  {'Weight':<20} {fmt(sec.area * 7850.0, 'mass_per_length', system)}"
+                     " (steel at 7850 kg/m^3; the job's material sets it)")
+    dim_lines = []
+    for k, v in sec.dims.items():
+        if k in ("h_t", "b_t", "D_t", "h_tw", "bf_2tf", "d_tw", "tan_alpha"):
+            dim_lines.append(f"{k} {v:.3g}")
+        elif k in ("iz",):
+            dim_lines.append(f"{k} {fmt(v, 'inertia', system)}")
+        elif k == "weak_shear_area":
+            continue
+        else:
+            dim_lines.append(f"{k} {fmt(v, 'small_length', system)}")
+    if dim_lines:
+        lines.append("  dimensions: " + ", ".join(dim_lines))
+    for w in sec.warnings:
+        lines.append(f"warning: {w}")
+    lines.append(SHORT)
+    return "\n".join(lines)
+
+
+def _axis_words(sec: Section) -> str:
+    return {"strong": "bending about the strong axis", "weak": "bending about the weak axis",
+            "geometric": "bending about a geometric axis", "n/a": "round: any axis"}.get(
+        sec.axis, sec.axis)
+
+
+def section_json(sec: Section) -> dict:
+    """The `section --json` object: SI base units (m, m^2, m^3, m^4, m^6, kg/m)."""
+    from shopbeam.cautions import SHORT
+
+    return {
+        "designation": sec.designation, "shape": sec.shape, "axis": sec.axis,
+        "area": sec.area, "ix": sec.ix, "sx": sec.sx, "sx_top": sec.sx_top,
+        "sx_bot": sec.sx_bot, "zx": sec.zx, "iy": sec.iy, "sy": sec.sy, "zy": sec.zy,
+        "rx": sec.rx, "ry": sec.ry, "j": sec.j, "cw": sec.cw, "shear_area": sec.shear_area,
+        "depth": sec.depth, "mass_per_length": sec.mass_per_length,
+        "dims": {k: v for k, v in sec.dims.items()}, "source": sec.source,
+        "warnings": list(sec.warnings), "cautions": [SHORT],
+    }
+
+
+def _system(args) -> str:
+    s = getattr(args, "units", None) or getattr(args, "system", None) or "us"
+    return s if s in ("us", "si") else "us"
+
+
+def cmd_section(args) -> int:
+    """`shopbeam section DESIGNATION [--json] [--axis weak]`."""
+    import json
+    import sys
+
+    try:
+        axis = getattr(args, "axis", None) or "strong"
+        sec = S.resolve_section(args.designation, key="section", axis=axis)
+    except InputError as exc:
+        print(f"shopbeam section: {exc}", file=sys.stderr)
+        return 2
+    if getattr(args, "json", False):
+        print(json.dumps(section_json(sec), indent=2))
+    else:
+        print(section_report(sec, _system(args)))
+    return 0
+
+
+def cmd_shapes(args) -> int:
+    """`shopbeam shapes [--kind HSS] [--filter 4x4] [--json]`: list catalog sections."""
+    import json
+    import sys
+
+    from shopbeam.units import fmt
+
+    try:
+        secs = list_sections(getattr(args, "kind", None), getattr(args, "filter", None))
+    except InputError as exc:
+        print(f"shopbeam shapes: {exc}", file=sys.stderr)
+        return 2
+    if getattr(args, "json", False):
+        print(json.dumps([section_json(s) for s in secs], indent=2))
+        return 0
+    system = _system(args)
+    if not getattr(args, "kind", None) and not getattr(args, "filter", None):
+        print("kinds: " + ", ".join(f"{k} ({KIND_INFO[k]})" for k in KIND_INFO))
+    print(f"{'designation':<22}{'weight':>14}{'A':>14}{'Ix':>14}{'Sx':>14}{'Iy':>14}")
+    for s in secs:
+        wt = fmt(s.mass_per_length, "mass_per_length", system) if s.mass_per_length else "-"
+        print(f"{s.designation:<22}{wt:>14}{fmt(s.area, 'area', system):>14}"
+              f"{fmt(s.ix, 'inertia', system):>14}{fmt(s.sx, 'modulus', system):>14}"
+              f"{fmt(s.iy, 'inertia', system) if s.iy else '-':>14}")
+    from shopbeam.cautions import SHORT
+
+    print(f"{len(secs)} section{'s' if len(secs) != 1 else ''}. {SHORT}")
+    return 0

@@ -1,0 +1,274 @@
+"""Materials: the grades a fabrication shop buys, with the source of every value beside it.
+
+Values are specified minimums (yield, tensile) and nominal moduli and densities, entered in
+the units the standard states them in and converted exactly to SI. Look-up is tolerant
+(``"A500 Gr C"``, ``"a500c"``, ``"ASTM A500 grade C"`` all find ``A500-C``). An inline
+material in a job file is a table with ``e``, ``fy`` and ``density`` (plus optional
+``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fb``, ``fv``).
+
+Design wall of tube (``hss_wall_factor``): 0.93 x nominal for A500 and A53 (ERW tube,
+AISC 360-16 B4.2), nominal (1.0) for A513 mechanical tubing and for stainless/aluminium
+tube; None where the grade is not a tube grade.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass, field
+from functools import lru_cache
+from typing import Mapping
+
+from shopbeam.errors import InputError
+
+KSI = 6.894757293168361e6  # Pa (lbf/in^2 x 1000, exact from the international pound and inch)
+PSI = KSI / 1000
+LB_FT3 = 16.018463373960138  # kg/m^3 per lb/ft^3
+MPA = 1e6
+
+KINDS = ("steel", "stainless", "aluminum", "lumber", "custom")
+
+
+@dataclass(frozen=True)
+class Material:
+    key: str
+    name: str
+    kind: str
+    e: float
+    fy: float
+    density: float
+    fu: float | None = None
+    g: float | None = None
+    fy_welded: float | None = None
+    fb: float | None = None
+    fv: float | None = None
+    source: str = ""
+    notes: tuple[str, ...] = ()
+    fu_welded: float | None = None
+    hss_wall_factor: float | None = None
+    aliases: tuple[str, ...] = field(default=(), compare=False)
+
+
+# Steel common values: E = 29,000 ksi and G = 11,200 ksi (AISC 360-16 Section B and its
+# Glossary / User Note); density 490 lb/ft^3 (AISC Manual, weight of steel).
+_E_STEEL, _G_STEEL, _RHO_STEEL = 29000 * KSI, 11200 * KSI, 490 * LB_FT3
+_STEEL_SRC = "E 29,000 ksi, G 11,200 ksi: AISC 360-16; density 490 lb/ft^3: AISC Manual"
+
+
+def _lumber_density(g: float, mc: float = 15.0) -> float:
+    """kg/m^3 of wood of specific gravity g (oven-dry weight, volume at mc %) at mc % moisture:
+    62.4 [G / (1 + G x 0.009 x mc)] (1 + mc / 100) lb/ft^3 (NDS Supplement, from memory)."""
+    return 62.4 * (g / (1 + g * 0.009 * mc)) * (1 + mc / 100) * LB_FT3
+
+
+def _steel(key, name, fy_ksi, fu_ksi, spec, notes=(), aliases=(), wall=None):
+    return Material(key, name, "steel", _E_STEEL, fy_ksi * KSI, _RHO_STEEL, fu=fu_ksi * KSI,
+                    g=_G_STEEL, source=f"Fy {fy_ksi:g} ksi, Fu {fu_ksi:g} ksi: {spec}; "
+                    f"{_STEEL_SRC}", notes=tuple(notes), aliases=tuple(aliases),
+                    hss_wall_factor=wall)
+
+
+_A500_NOTE = ("ASTM A500 editions before 2018 gave round tube a lower yield than shaped "
+              "(square/rectangular) tube (Gr B 42 vs 46 ksi, Gr C 46 vs 50 ksi); from A500-18 "
+              "on round and shaped tube share one yield. Old stock or an old mill cert: use "
+              "the -round key for round tube.")
+_A513_NOTE = ("ASTM A513 mechanical tubing: strength depends on the type (as-welded, DOM), "
+              "the steel grade and the mill's processing; the figure here is the specified "
+              "minimum recalled from memory for the condition named. Use the mill cert when "
+              "you have one. Design wall = nominal wall (the 0.93 factor is for A500 only).")
+_LUMBER_NOTE = ("reference design values for visually graded dimension lumber 2-4 in thick "
+                "(NDS Supplement 2018, Table 4A, from memory); no adjustment factors applied "
+                "(load duration CD = 1.0, dry service, size factor CF taken as 1.0, which is "
+                "conservative for 2x4 to 2x12), allowable stress design")
+
+_MATERIALS: tuple[Material, ...] = (
+    _steel("A36", "ASTM A36 carbon steel (plate, bar, shapes)", 36, 58, "ASTM A36/A36M",
+           aliases=("a36", "astm a36")),
+    _steel("A572-50", "ASTM A572 Grade 50 HSLA steel", 50, 65, "ASTM A572/A572M Gr 50",
+           aliases=("a572", "a57250", "a572gr50", "a572grade50")),
+    _steel("A992", "ASTM A992 structural steel (W shapes)", 50, 65, "ASTM A992/A992M",
+           notes=("A992 also limits yield to 65 ksi max and Fy/Fu to 0.85",)),
+    _steel("A500-B", "ASTM A500 Grade B structural tube, square/rectangular", 46, 58,
+           "ASTM A500/A500M Gr B (shaped)", notes=(_A500_NOTE,),
+           aliases=("a500b", "a500grb", "a500gradeb", "a500bshaped", "a500brect"), wall=0.93),
+    _steel("A500-B-round", "ASTM A500 Grade B structural tube, round (pre-2018 editions)", 42,
+           58, "ASTM A500/A500M-13 Gr B (round)", notes=(_A500_NOTE,),
+           aliases=("a500bround", "a500grbround"), wall=0.93),
+    _steel("A500-C", "ASTM A500 Grade C structural tube, square/rectangular", 50, 62,
+           "ASTM A500/A500M Gr C (shaped)", notes=(_A500_NOTE,),
+           aliases=("a500c", "a500grc", "a500gradec", "a500", "a500crect", "a500cshaped"),
+           wall=0.93),
+    _steel("A500-C-round", "ASTM A500 Grade C structural tube, round (pre-2018 editions)", 46,
+           62, "ASTM A500/A500M-13 Gr C (round)", notes=(_A500_NOTE,),
+           aliases=("a500cround", "a500grcround"), wall=0.93),
+    _steel("A53-B", "ASTM A53 Grade B pipe (ERW or seamless)", 35, 60, "ASTM A53/A53M Gr B",
+           aliases=("a53b", "a53grb", "a53", "a53gradeb"), wall=0.93),
+    _steel("A513", "ASTM A513 Type 1/2 ERW mechanical tube, 1008/1010 as-welded", 30, 42,
+           "ASTM A513 (Type 1/2, grade 1008, as welded), from memory", notes=(_A513_NOTE,),
+           aliases=("a513", "a5131008", "a513type1", "a513type2", "mechanicaltube"), wall=1.0),
+    _steel("A513-1020", "ASTM A513 ERW mechanical tube, 1020 as-welded", 38, 52,
+           "ASTM A513 (grade 1020, as welded), from memory", notes=(_A513_NOTE,),
+           aliases=("a5131020",), wall=1.0),
+    _steel("A513-DOM", "ASTM A513 Type 5 DOM mechanical tube, 1020 stress relieved", 60, 70,
+           "ASTM A513 (Type 5 DOM, 1020, stress relieved), from memory", notes=(_A513_NOTE,),
+           aliases=("a513dom", "dom", "a513type5", "dom1020"), wall=1.0),
+    # Stainless: E 193 GPa (28,000 ksi), density 8000 kg/m^3 (ASTM A240 / producer data,
+    # from memory); G 77 GPa.
+    Material("304", "Type 304 stainless steel (annealed)", "stainless", 193e9, 205 * MPA,
+             8000.0, fu=515 * MPA, g=77e9,
+             source="Fy 205 MPa (30 ksi), Fu 515 MPa (75 ksi): ASTM A240/A554 annealed "
+             "minimums; E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             notes=("welding does not lower the annealed strength; cold-worked tube may be "
+                    "stronger but is not credited",),
+             aliases=("ss304", "304ss", "stainless304", "aisi304", "s30400"), hss_wall_factor=1.0),
+    Material("304L", "Type 304L stainless steel (annealed)", "stainless", 193e9, 170 * MPA,
+             8000.0, fu=485 * MPA, g=77e9,
+             source="Fy 170 MPa (25 ksi), Fu 485 MPa (70 ksi): ASTM A240 annealed minimums; "
+             "E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             aliases=("ss304l", "304lss", "stainless304l", "s30403"), hss_wall_factor=1.0),
+    Material("316", "Type 316 stainless steel (annealed)", "stainless", 193e9, 205 * MPA,
+             8000.0, fu=515 * MPA, g=77e9,
+             source="Fy 205 MPa (30 ksi), Fu 515 MPa (75 ksi): ASTM A240 annealed minimums; "
+             "E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             aliases=("ss316", "316ss", "stainless316", "s31600"), hss_wall_factor=1.0),
+    Material("316L", "Type 316L stainless steel (annealed)", "stainless", 193e9, 170 * MPA,
+             8000.0, fu=485 * MPA, g=77e9,
+             source="Fy 170 MPa (25 ksi), Fu 485 MPa (70 ksi): ASTM A240 annealed minimums; "
+             "E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             aliases=("ss316l", "316lss", "s31603"), hss_wall_factor=1.0),
+    # Aluminium: Aluminum Design Manual 2015, Part A Tables A.3.3/A.3.4 (unwelded minimums,
+    # extrusions) and A.3.5 (welded, heat-affected zone), from memory. E 10,100 ksi
+    # (compression modulus), density 0.098 lb/in^3 (ADM / Aluminum Association, from memory).
+    Material("6061-T6", "Aluminium 6061-T6 extrusion / tube", "aluminum", 10100 * KSI,
+             35 * KSI, 0.098 * 1728 * LB_FT3, fu=38 * KSI, g=3800 * KSI,
+             fy_welded=15 * KSI, fu_welded=24 * KSI,
+             source="Fty 35 ksi, Ftu 38 ksi; welded Ftyw 15 ksi, Ftuw 24 ksi; E 10,100 ksi; "
+             "G 3,800 ksi; density 0.098 lb/in^3: Aluminum Design Manual 2015, from memory",
+             notes=("welding within 1 in of a point lowers the strength there to the welded "
+                    "(heat-affected zone) value",),
+             aliases=("6061", "6061t6", "al6061", "6061t6511", "aluminum6061", "aluminium6061"),
+             hss_wall_factor=1.0),
+    Material("6063-T5", "Aluminium 6063-T5 extrusion", "aluminum", 10100 * KSI, 16 * KSI,
+             0.097 * 1728 * LB_FT3, fu=22 * KSI, g=3800 * KSI, fy_welded=8 * KSI,
+             fu_welded=17 * KSI,
+             source="Fty 16 ksi, Ftu 22 ksi (up to 0.5 in thick); welded Ftyw 8 ksi, Ftuw "
+             "17 ksi; E 10,100 ksi; density 0.097 lb/in^3: Aluminum Design Manual 2015, "
+             "from memory",
+             aliases=("6063t5", "al6063t5"), hss_wall_factor=1.0),
+    Material("6063-T6", "Aluminium 6063-T6 extrusion / pipe", "aluminum", 10100 * KSI,
+             25 * KSI, 0.097 * 1728 * LB_FT3, fu=30 * KSI, g=3800 * KSI, fy_welded=8 * KSI,
+             fu_welded=17 * KSI,
+             source="Fty 25 ksi, Ftu 30 ksi; welded Ftyw 8 ksi, Ftuw 17 ksi; E 10,100 ksi; "
+             "density 0.097 lb/in^3: Aluminum Design Manual 2015, from memory",
+             aliases=("6063", "6063t6", "al6063", "al6063t6"), hss_wall_factor=1.0),
+    # Lumber: NDS Supplement 2018 Table 4A reference values; density from specific gravity
+    # (SPF G = 0.42, DF-L G = 0.50, NDS Table 12.3.3A) at about 15 % moisture, from memory.
+    Material("SPF-2", "Spruce-Pine-Fir No.1/No.2 dimension lumber", "lumber",
+             1_400_000 * PSI, 875 * PSI, _lumber_density(0.42), fb=875 * PSI, fv=135 * PSI,
+             source="Fb 875 psi, Fv 135 psi, E 1,400,000 psi: NDS Supplement 2018 Table 4A "
+             "(SPF No.1/No.2), from memory; density from G = 0.42 at 15 % moisture",
+             notes=(_LUMBER_NOTE,),
+             aliases=("spf", "spf2", "spfno2", "sprucepinefir", "spfno1no2", "spf1/2")),
+    Material("DF-L-2", "Douglas Fir-Larch No.2 dimension lumber", "lumber", 1_600_000 * PSI,
+             900 * PSI, _lumber_density(0.50), fb=900 * PSI, fv=180 * PSI,
+             source="Fb 900 psi, Fv 180 psi, E 1,600,000 psi: NDS Supplement 2018 Table 4A "
+             "(DF-L No.2), from memory; density from G = 0.50 at 15 % moisture",
+             notes=(_LUMBER_NOTE,),
+             aliases=("dfl", "dfl2", "dflno2", "douglasfir", "douglasfirlarch", "df2", "df")),
+)
+
+
+def _norm(text: str) -> str:
+    t = text.strip().lower()
+    t = re.sub(r"\bastm\b", "", t)
+    t = re.sub(r"\b(grade|gr\.?)\b", "", t)
+    t = re.sub(r"\btype\b", "", t)
+    t = re.sub(r"[\s\-_.]+", "", t)
+    t = t.replace("no.", "no")
+    return t
+
+
+@lru_cache(maxsize=1)
+def _index() -> dict[str, Material]:
+    idx: dict[str, Material] = {}
+    for m in _MATERIALS:
+        for name in (m.key, *m.aliases):
+            idx.setdefault(_norm(name), m)
+    return idx
+
+
+def list_materials() -> list[Material]:
+    """The built-in materials, in the order above (steel, stainless, aluminium, lumber)."""
+    return list(_MATERIALS)
+
+
+def get(key: str) -> Material | None:
+    return _index().get(_norm(key))
+
+
+def resolve_material(spec, key: str = "beam.material") -> Material:
+    """A Material from a built-in key (spelling tolerant) or an inline table."""
+    if isinstance(spec, str):
+        m = get(spec)
+        if m is not None:
+            return m
+        import difflib
+
+        keys = [x.key for x in _MATERIALS]
+        norm = {_norm(k): k for k in keys} | {a: m.key for a, m in _index().items()}
+        close = difflib.get_close_matches(_norm(spec), list(norm), n=3, cutoff=0.5)
+        seen = []
+        for c in close:
+            if norm[c] not in seen:
+                seen.append(norm[c])
+        hint = f"did you mean {' or '.join(repr(s) for s in seen)}? " if seen else ""
+        raise InputError(f"unknown material {spec!r}; {hint}built-in materials are "
+                         f"{', '.join(keys)} (or give a table with e, fy and density)", key)
+    if isinstance(spec, Mapping):
+        return _inline(spec, key)
+    raise InputError(f"material must be a name such as \"A36\" or a table with e, fy and "
+                     f"density, not {spec!r}", key)
+
+
+_INLINE_KEYS = {"e": "stress", "fy": "stress", "density": "density", "fu": "stress",
+                "g": "stress", "fy_welded": "stress", "fb": "stress", "fv": "stress"}
+
+
+def _inline(spec: Mapping, key: str) -> Material:
+    from shopbeam.units import parse
+
+    allowed = set(_INLINE_KEYS) | {"name", "kind", "key", "source"}
+    for k in spec:
+        if k not in allowed:
+            import difflib
+
+            close = difflib.get_close_matches(k, list(allowed), n=1)
+            hint = f" (did you mean {close[0]!r}?)" if close else ""
+            raise InputError(f"unknown key {k!r} in the material table{hint}; keys are "
+                             f"{', '.join(sorted(allowed))}", f"{key}.{k}")
+    kind = spec.get("kind", "custom")
+    if kind not in KINDS:
+        raise InputError(f"kind must be one of {', '.join(KINDS)}, not {kind!r}", f"{key}.kind")
+    vals = {}
+    for k, unit_kind in _INLINE_KEYS.items():
+        if k in spec:
+            vals[k] = parse(spec[k], unit_kind, f"{key}.{k}", positive=True)
+    if "fy" not in vals and "fb" in vals:
+        vals["fy"] = vals["fb"]
+    for k in ("e", "fy", "density"):
+        if k not in vals:
+            what = {"e": "the elastic modulus e (e.g. \"29000 ksi\")",
+                    "fy": "the yield strength fy (e.g. \"36 ksi\"; for lumber fb)",
+                    "density": "the density (e.g. \"490 lb/ft^3\")"}[k]
+            raise InputError(f"an inline material needs {what}", f"{key}.{k}")
+    if vals["e"] < 1e8 or vals["e"] > 1e13:
+        raise InputError(f"e = {spec['e']!r} is not a plausible elastic modulus (steel is "
+                         "29000 ksi, aluminium 10100 ksi, lumber about 1600 ksi)", f"{key}.e")
+    if vals["fy"] >= vals["e"]:
+        raise InputError("fy is not less than e: check the units", f"{key}.fy")
+    if "fu" in vals and vals["fu"] < vals["fy"]:
+        raise InputError("fu is less than fy", f"{key}.fu")
+    name = spec.get("name", "custom material")
+    if not isinstance(name, str):
+        raise InputError("name must be text", f"{key}.name")
+    return Material(key=spec.get("key", "custom"), name=name, kind=kind, source="typed in",
+                    **vals)
