@@ -40,6 +40,10 @@ def _quote(text: str) -> str:
     return tomlkit.string(str(text)).as_string()
 
 
+def _pad(code: str, comment: str, col: int = 32) -> str:
+    return code.ljust(col - 1) + " " + comment
+
+
 def new_job_text(title: str, *, length: str = "8 ft", section: str = "HSS4x4x1/4",
                  material: str = "A500-C", tags=(), units: str = "us",
                  notes: str = "") -> str:
@@ -54,12 +58,12 @@ def new_job_text(title: str, *, length: str = "8 ft", section: str = "HSS4x4x1/4
         "schema = 1",
         f"title = {_quote(title)}",
         f"notes = {_quote(notes)}" if notes else '# notes = "free text: where, who, why"',
-        f"units = {_quote(units)}                   # display units: \"us\" or \"si\"",
-        f"tags = {tags_text}                     # e.g. [\"rack\"]; \"lifting\" for hoists",
+        _pad(f"units = {_quote(units)}", '# display units: "us" or "si"'),
+        _pad(f"tags = {tags_text}", '# e.g. ["rack"]; "lifting" marks a lifting device'),
         "",
         "[beam]",
         f"length = {_quote(length)}",
-        f"section = {_quote(section)}      # a catalog designation: shopbeam section NAME",
+        _pad(f"section = {_quote(section)}", "# a catalog designation: shopbeam section NAME"),
         f"material = {_quote(material)}",
         "self_weight = true              # the member's own weight, downward, whole length",
         "",
