@@ -150,11 +150,19 @@ class JobDoc:
 
         Saving back to the file it came from uses the fingerprint taken when it was opened;
         saving to any other path is a new file (refused if it exists, unless `overwrite`).
+        A bundled preset is never written: it is saved as a copy in the user library.
         """
         target = Path(path) if path is not None else self.path
         if target is None:
             raise InputError("this job has no file yet; give a name or path to save it as")
         self._ensure_schema()
+        from shopbeam import library
+
+        if library.is_bundled(target):
+            # bundled presets are read-only: "save" means "save a copy" to the user library
+            self.opened = library.save_job(self.text(), path=target, overwrite=overwrite)
+            self.path = self.opened.path
+            return self.path
         same = (self.opened is not None and self.opened.path is not None
                 and Path(target).resolve() == Path(self.opened.path).resolve())
         base = self.opened if same else None

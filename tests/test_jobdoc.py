@@ -187,3 +187,18 @@ def test_template_reads_with_the_job_reader():
     assert [s.kind for s in job.supports] == ["pin", "roller"]
     assert job.loads[0].w1 == pytest.approx(-50 * 4.4482216152605 / 0.3048)
     assert not job.warnings
+
+
+def test_saving_a_bundled_preset_saves_a_copy_to_user(tmp_path, monkeypatch):
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(tmp_path / "user"))
+    src = PRESETS[0]
+    before = src.read_bytes()
+    doc = jobdoc.load(src)
+    doc.set_title("my copy")
+    saved = doc.save()
+    assert src.read_bytes() == before
+    assert saved == (tmp_path / "user" / src.name).resolve()
+    assert tomllib.loads(saved.read_text(encoding="utf-8"))["title"] == "my copy"
+    doc.set_title("my copy, again")
+    doc.save()  # now it is the user's own file: a normal save
+    assert "again" in saved.read_text(encoding="utf-8") and src.read_bytes() == before

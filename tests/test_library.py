@@ -1,0 +1,249 @@
+"""The preset library: three places in order, shown with their origin; copies and saves that
+never overwrite silently and never write the bundled presets; the library and new commands."""
+
+from __future__ import annotations
+
+import argparse
+import subprocess
+import sys
+import tomllib
+from pathlib import Path
+
+import pytest
+
+from shopbeam import library, storage
+from shopbeam.errors import InputError
+
+BUNDLED = Path(__file__).resolve().parent.parent / "presets"
+
+
+@pytest.fixture
+def places(tmp_path, monkeypatch):
+    """A shop folder and a user folder in tmp; the environment points at them."""
+    shop, user = tmp_path / "shop", tmp_path / "user"
+    shop.mkdir()
+    monkeypatch.setenv(library.ENV_USER, str(user))
+    monkeypatch.delenv(library.ENV_SHOP, raising=False)
+    return shop, user
+
+
+def _job(title: str, tags=("shelf",)) -> str:
+    tag_text = ", ".join(f'"{t}"' for t in tags)
+    return f'schema = 1\ntitle = "{title}"\ntags = [{tag_text}]\n'
+
+
+def test_places_in_order_with_origin(places, monkeypatch):
+    shop, user = places
+    assert [p.origin for p in library.places()] == ["user", "bundled"]
+    got = library.places(shop)
+    assert [(p.origin, p.folder, p.writable) for p in got] == [
+        ("shop", shop, True), ("user", user, True), ("bundled", BUNDLED, False)]
+    monkeypatch.setenv(library.ENV_SHOP, str(shop))
+    assert library.places()[0] == library.Place("shop", shop, True)
+
+
+def test_user_dir_defaults_to_platform_data_dir(monkeypatch):
+    import platformdirs
+
+    monkeypatch.delenv(library.ENV_USER, raising=False)
+    assert library.user_dir() == Path(platformdirs.user_data_dir("shopbeam")) / "jobs"
+
+
+def test_bundled_presets_are_listed_with_titles_and_tags(places):
+    got = library.entries()
+    names = {e.name for e in got}
+    assert len(got) >= 12 and all(e.origin == "bundled" and e.read_only for e in got)
+    assert {"demo", "monorail-hoist-beam", "jib-arm"} <= names
+    assert all(e.title and not e.problem for e in got)
+    jib = library.find("jib-arm")
+    assert "lifting" in jib.tags and jib.path == BUNDLED / "jib-arm.toml"
+
+
+def test_shop_first_then_user_then_bundled(places):
+    shop, user = places
+    user.mkdir()
+    (shop / "jib-arm.toml").write_text(_job("shop's jib"), encoding="utf-8")
+    (user / "jib-arm.toml").write_text(_job("my jib"), encoding="utf-8")
+    assert library.find("jib-arm", shop).title == "shop's jib"
+    assert library.find("jib-arm").title == "my jib"  # no shop library given
+    assert library.find("user:jib-arm", shop).title == "my jib"
+    assert library.find("bundled:jib-arm", shop).origin == "bundled"
+    same = [e for e in library.entries(shop) if e.name == "jib-arm"]
+    assert [(e.origin, e.shadowed_by) for e in same] == [
+        ("shop", ""), ("user", "shop"), ("bundled", "shop")]
+
+
+def test_search_and_tag_filters(places):
+    shop, _ = places
+    (shop / "bay-9.toml").write_text(_job("Bay 9 rack beam", ("rack", "bay9")) +
+                                     'notes = "painted orange"\n', encoding="utf-8")
+    assert [e.name for e in library.entries(shop, tag="BAY9")] == ["bay-9"]
+    assert [e.name for e in library.entries(shop, search="orange")] == ["bay-9"]
+    lifting = {e.name for e in library.entries(shop, tag="lifting")}
+    assert lifting == {"jib-arm", "monorail-hoist-beam"}
+    assert {e.name for e in library.entries(shop, search="snow drift")} == {"awning-bracket"}
+    assert library.entries(shop, search="no such words anywhere") == []
+
+
+def test_broken_files_are_listed_with_their_problem_and_temps_are_skipped(places):
+    shop, _ = places
+    (shop / "broken.toml").write_text('title = "unterminated\n', encoding="utf-8")
+    (shop / ".arm.toml.x1.saving").write_text("half a file", encoding="utf-8")
+    (shop / "notes.txt").write_text("not a job", encoding="utf-8")
+    mine = [e for e in library.entries(shop) if e.origin == "shop"]
+    assert [e.name for e in mine] == ["broken"]
+    assert mine[0].problem and mine[0].title == "(not valid TOML)"
+
+
+def test_find_suggests_near_names(places):
+    with pytest.raises(InputError) as info:
+        library.find("jib-ram")
+    assert "did you mean 'jib-arm'" in str(info.value)
+    with pytest.raises(InputError, match="'pallet-rack-beam-pair'"):
+        library.find("pallet")
+    with pytest.raises(InputError, match="library list"):
+        library.find("zzzzzz")
+    with pytest.raises(InputError, match=r"'\.\.'"):
+        library.find("../../etc/passwd")
+
+
+def test_copy_to_user_and_shop(places):
+    shop, user = places
+    path = library.copy("jib-arm")
+    assert path == (user / "jib-arm.toml").resolve()
+    assert path.read_text(encoding="utf-8") == (BUNDLED / "jib-arm.toml").read_text(
+        encoding="utf-8")  # exact text, comments and all
+    with pytest.raises(InputError, match="already in the user library"):
+        library.copy("jib-arm")  # finds the user's own copy first
+    with pytest.raises(storage.NameTaken):
+        library.copy("bundled:jib-arm")  # the name is taken in user: never silently replaced
+    library.copy("bundled:jib-arm", overwrite=True)
+    p2 = library.copy("jib-arm", to="shop", library_dir=shop, new_name="jib-bay2")
+    assert p2 == (shop / "jib-bay2.toml").resolve()
+    with pytest.raises(InputError, match="no shop library is set"):
+        library.copy("jib-arm", to="shop")
+    with pytest.raises(InputError, match="separator"):
+        library.copy("jib-arm", new_name="sub/jib")
+
+
+def test_save_on_a_bundled_preset_saves_a_copy_to_user(places):
+    _, user = places
+    src = BUNDLED / "sign-bracket.toml"
+    before = src.read_bytes()
+    opened = library.save_job(src.read_text(encoding="utf-8").replace("-75 lbf", "-90 lbf"),
+                              path=src)
+    assert src.read_bytes() == before  # bundled presets are never written
+    assert opened.path == (user / "sign-bracket.toml").resolve()
+    assert opened.text.count("-90 lbf") == 2
+    with pytest.raises(storage.NameTaken):
+        library.save_job("x", path=src)  # a second "save copy" would replace the first
+
+
+def test_save_job_by_name_and_conflicts(places):
+    shop, _ = places
+    first = library.save_job(_job("bay 2"), name="bay-2", to="shop", library_dir=shop)
+    with pytest.raises(storage.NameTaken):
+        library.save_job(_job("other bay 2"), name="bay-2", to="shop", library_dir=shop)
+    # someone else edits it on the server, then we save over our opened copy
+    storage.atomic_write(first.path, _job("bay 2, edited"))
+    with pytest.raises(storage.SaveConflict) as info:
+        library.save_job(_job("bay 2, mine"), path=first.path, base=first)
+    assert '+title = "bay 2, edited"' in info.value.diff
+    library.save_job(_job("bay 2, mine"), path=first.path, base=first, overwrite=True)
+    assert tomllib.loads(first.path.read_text(encoding="utf-8"))["title"] == "bay 2, mine"
+    with pytest.raises(InputError, match="absolute path"):
+        library.save_job("x", name="/etc/cron.d/x")
+
+
+# ------------------------------------------------------------------ command line
+
+def _parser():
+    p = argparse.ArgumentParser(prog="shopbeam")
+    sub = p.add_subparsers(dest="command")
+    library.add_parsers(sub)
+    return p
+
+
+def _run(argv, capsys):
+    args = _parser().parse_args(argv)
+    rc = args.func(args)
+    out, err = capsys.readouterr()
+    return rc, out, err
+
+
+def test_cli_library_list_show_copy(places, capsys):
+    shop, user = places
+    rc, out, err = _run(["library", "list", "--library", str(shop)], capsys)
+    assert rc == 0 and not err
+    assert "NAME" in out and "ORIGIN" in out and "bundled" in out and "jib-arm" in out
+    assert out.splitlines()[0].startswith("shop") and str(shop) in out
+    assert "Screening check only" in out
+    rc, out, _ = _run(["library", "list", "--tag", "lifting"], capsys)
+    assert rc == 0 and "LIFTING DEVICE" in out and "pallet-rack" not in out
+    rc, out, _ = _run(["library", "show", "demo"], capsys)
+    assert rc == 0 and out.startswith("# bundled:demo") and "[[loads]]" in out
+    rc, out, _ = _run(["library", "copy", "demo", "--as", "loft"], capsys)
+    assert rc == 0 and (user / "loft.toml").exists()
+    rc, out, err = _run(["library", "copy", "demo", "--as", "loft"], capsys)
+    assert rc == 2 and "already exists" in err and "--overwrite" in err and not out
+    rc, out, err = _run(["library", "show", "lofty"], capsys)
+    assert rc == 2 and "did you mean 'loft'" in err
+    rc, _, err = _run(["library", "copy", "demo", "--to", "shop"], capsys)
+    assert rc == 2 and "SHOPBEAM_LIBRARY" in err
+    rc, _, err = _run(["library"], capsys)
+    assert rc == 2 and "list" in err
+
+
+def test_cli_new_writes_a_template_and_never_overwrites(places, capsys, tmp_path):
+    shop, user = places
+    rc, out, err = _run(["new", "bay3-arm", "--title", "Bay 3 arm", "--tags", "rack,arm"], capsys)
+    assert rc == 0, err
+    data = tomllib.loads((user / "bay3-arm.toml").read_text(encoding="utf-8"))
+    assert data["schema"] == 1 and data["title"] == "Bay 3 arm" and data["tags"] == ["rack", "arm"]
+    rc, _, err = _run(["new", "bay3-arm"], capsys)
+    assert rc == 2 and "already exists" in err
+    assert tomllib.loads((user / "bay3-arm.toml").read_text(encoding="utf-8"))["title"] == \
+        "Bay 3 arm"
+    rc, _, _ = _run(["new", "shared", "--to", "shop", "--library", str(shop)], capsys)
+    assert rc == 0 and (shop / "shared.toml").exists()
+    target = tmp_path / "elsewhere.toml"
+    rc, _, _ = _run(["new", "x", "--to", str(target)], capsys)
+    assert rc == 0 and target.exists()
+    for bad in ("../escape", "/etc/x", "a b"):
+        rc, _, err = _run(["new", bad], capsys)
+        assert rc == 2 and "use letters, digits" in err
+    assert not (tmp_path / "escape.toml").exists()
+    rc, _, err = _run(["new", "x", "--to", "somewhere"], capsys)
+    assert rc == 2 and "ending in .toml" in err
+
+
+def test_cli_check_reports_every_problem_with_line(places, capsys, tmp_path):
+    bad = tmp_path / "bad.toml"
+    bad.write_text('schema = 1\ntitle = "bad"\n\n[beam]\nlength = "8"\nsection = "HSS4x4x1/4"\n'
+                   'material = "A500-C"\n\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n\n'
+                   '[[loads]]\ntype = "point"\nat = "20 ft"\nvalue = "-300 lbf"\nlabl = "x"\n',
+                   encoding="utf-8")
+    args = argparse.Namespace(job=str(bad))
+    rc = library.cmd_check(args)
+    out, err = capsys.readouterr()
+    assert rc == 2 and not out
+    assert "beam.length" in err and ":5" in err  # bare number, with its line
+    assert "label" in err  # the typo's nearest known key
+    good = tmp_path / "good.toml"
+    good.write_text((BUNDLED / "jib-arm.toml").read_text(encoding="utf-8"), encoding="utf-8")
+    rc = library.cmd_check(argparse.Namespace(job=str(good)))
+    out, err = capsys.readouterr()
+    assert rc == 0 and out.startswith("OK") and "LIFTING DEVICE" in out
+    rc = library.cmd_check(argparse.Namespace(job="jib-arm"))  # a library name works too
+    assert rc == 0
+
+
+def test_real_cli_library_commands(places, tmp_path):
+    """Through the installed entry point: exit codes and no traceback."""
+    env_run = dict(capture_output=True, text=True, timeout=60)
+    ok = subprocess.run([sys.executable, "-m", "shopbeam", "library", "list", "--tag", "rack"],
+                        **env_run)
+    assert ok.returncode == 0 and "pallet-rack-beam-pair" in ok.stdout, ok.stderr
+    bad = subprocess.run([sys.executable, "-m", "shopbeam", "library", "show", "../../etc/passwd"],
+                         **env_run)
+    assert bad.returncode == 2 and "Traceback" not in bad.stderr and "'..'" in bad.stderr
