@@ -28,7 +28,7 @@ import numpy as np
 
 from shopbeam.errors import UnstableBeam
 from shopbeam.model import Beam, Load, Support
-from shopbeam.piecewise import Extreme, Piecewise
+from shopbeam.piecewise import Extreme, Piecewise, find_candidates
 
 # state entries, by integration level: q' (-1), q (0), V (1), M (2), EI*slope (3), EI*u (4)
 _NLEV = 6
@@ -81,8 +81,9 @@ class Solution:
 
     @cached_property
     def _extremes(self) -> dict[str, Extreme]:
-        return {name: _chop(self.function(name).extremes())
-                for name in ("shear", "moment", "slope", "deflection")}
+        names = ("shear", "moment", "slope", "deflection")
+        find_candidates([self.function(name) for name in names])  # one batched pass
+        return {name: _chop(self.function(name).extremes()) for name in names}
 
     @property
     def length(self) -> float:
@@ -298,12 +299,14 @@ def _snap(positions: np.ndarray, L: float) -> np.ndarray:
 
 def _taylor(h: np.ndarray) -> np.ndarray:
     """Transfer matrices (P, 6, 6) carrying the state across pieces of length h."""
-    p = h.shape[0]
-    t = np.zeros((p, _NLEV, _NLEV))
-    for k in range(_NLEV):  # level row k gets sum_m state[k - m] h^m / m!
-        for m in range(k + 1):
-            t[:, k, k - m] = h**m / math.factorial(m)
+    t = np.zeros((h.shape[0], _NLEV, _NLEV))
+    # level row k gets sum_m state[k - m] h^m / m!, set in one indexed assignment
+    t[:, _TK, _TK - _TM] = h[:, None] ** _TM / _FACT[_TM]
     return t
+
+
+_TK, _TM = (np.array(v) for v in zip(*[(k, m) for k in range(_NLEV) for m in range(k + 1)]))
+_FACT = np.array([math.factorial(m) for m in range(_NLEV)], dtype=float)
 
 
 def _march(breaks: np.ndarray, jumps: np.ndarray) -> np.ndarray:
@@ -322,8 +325,7 @@ def _march(breaks: np.ndarray, jumps: np.ndarray) -> np.ndarray:
 def _piece_coeffs(states: np.ndarray, level: int) -> np.ndarray:
     """Local Taylor coefficients of one level on each piece from right-limit states."""
     k = level + 1  # state index
-    cols = [states[:-1, k - m] / math.factorial(m) for m in range(k + 1)]
-    return np.stack(cols, axis=1)
+    return states[:-1, k::-1] / _FACT[: k + 1]  # column m is state[k - m] / m!
 
 
 def solve(beam: Beam, length_fmt=None) -> Solution:
