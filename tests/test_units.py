@@ -1,0 +1,83 @@
+"""Shop notation and unit handling at the input boundary.
+
+Conversion factors are exact by definition: 1 ft = 0.3048 m and 1 in = 0.0254 m
+(international yard and pound agreement, 1959); 1 lbf = 4.4482216152605 N (standard gravity
+9.80665 m/s^2, CGPM 1901).
+"""
+
+from __future__ import annotations
+
+import pytest
+
+from shopbeam import units
+from shopbeam.errors import InputError
+
+IN, FT, LBF = 0.0254, 0.3048, 4.4482216152605
+
+
+@pytest.mark.parametrize("text, inches", [
+    ("1-1/2 in", 1.5),
+    ("1 1/2 in", 1.5),      # pint alone reads this as 0.5 in
+    ("10 ft 6 in", 126.0),  # pint alone reads this as an area
+    ("10' 6\"", 126.0),
+    ("10'-6 1/2\"", 126.5),
+    ("3/16 in", 0.1875),
+    ("12 ft", 144.0),
+    ("0.25 in", 0.25),
+    ("6 mm", 6 / 25.4),
+    ("2.4 m", 2400 / 25.4),
+    ("10\u2032 6\u2033", 126.0),  # typographic feet and inch marks
+    ("-1-1/2 in", -1.5),
+])
+def test_shop_lengths(text, inches):
+    assert units.parse(text, "length") == pytest.approx(inches * IN, rel=1e-12)
+
+
+@pytest.mark.parametrize("text, kind, si", [
+    ("-300 lbf", "force", -300 * LBF),
+    ("-500 lb", "force", -500 * LBF),  # shop people say lb for a weight
+    ("-1.2 kN", "force", -1200.0),
+    ("-25 lbf/ft", "line_load", -25 * LBF / FT),
+    ("-25 plf", "line_load", -25 * LBF / FT),
+    ("150 lbf*ft", "moment", 150 * LBF * FT),
+    ("125 psf", "area_load", 125 * LBF / FT**2),
+    ("36 ksi", "stress", 36e3 * LBF / IN**2),
+    ("490 lb/ft^3", "density", 490 * 0.45359237 / FT**3),
+    ("7.80 in^4", "inertia", 7.80 * IN**4),
+    ("2000 lbf/in", "stiffness", 2000 * LBF / IN),
+])
+def test_other_kinds(text, kind, si):
+    assert units.parse(text, kind) == pytest.approx(si, rel=1e-12)
+
+
+@pytest.mark.parametrize("text, kind, words", [
+    ("12", "length", "bare number"),
+    ("300 lbf", "length", "a force"),
+    ("8 ft", "force", "a length"),
+    ("nan ft", "length", "cannot read"),
+    ("1e400 ft", "length", "not a finite"),
+    ("10 ft 6 lbf", "length", "cannot add"),
+    ("3 furlongz", "length", "unknown unit"),
+    ("1/0 in", "length", "cannot read"),
+])
+def test_bad_values_say_what_is_wrong(text, kind, words):
+    with pytest.raises(InputError) as e:
+        units.parse(text, kind, "beam.length")
+    assert words in str(e.value) and "beam.length" in str(e.value)
+
+
+def test_non_string_is_refused():
+    with pytest.raises(InputError, match="in quotes"):
+        units.parse(12, "length")
+
+
+def test_positive_and_display():
+    with pytest.raises(InputError, match="greater than zero"):
+        units.parse("0 ft", "length", positive=True)
+    assert units.fmt(3.6576, "length", "us") == "12 ft"
+    assert units.fmt(0.0254, "small_length", "us") == "1 in"
+    assert units.fmt(1000.0, "force", "si") == "1 kN"
+
+
+def test_one_registry_for_the_process():
+    assert units.ureg() is units.ureg()
