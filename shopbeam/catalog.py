@@ -247,6 +247,7 @@ UPN = {
     200: (200, 75, 8.5, 11.5, 11.5), 220: (220, 80, 9, 12.5, 12.5), 240: (240, 85, 9.5, 13, 13),
     260: (260, 90, 10, 14, 14), 280: (280, 95, 10, 15, 15), 300: (300, 100, 10, 16, 16),
 }
+UPN_SLOPE = 0.08  # inner flange slope of UPN channels up to 300 mm (from memory)
 # EN 10219-2 cold-formed hollow sections commonly stocked, mm
 SHS = {20: (2,), 25: (2, 2.5, 3), 30: (2, 2.5, 3), 40: (2, 2.5, 3, 4), 50: (2, 2.5, 3, 4, 5),
        60: (2.5, 3, 4, 5), 70: (3, 4, 5), 80: (3, 4, 5, 6), 90: (4, 5, 6),
@@ -327,8 +328,8 @@ def _generated() -> list[tuple[str, str, object]]:
     for n, (h, b, tw, tf, r) in UPN.items():
         des = f"UPN{n}"
         out.append(("UPN", des, lambda h=h, b=b, tw=tw, tf=tf, r=r, des=des: S.channel(
-            h * MM, b * MM, tf * MM, tw * MM, r=r * MM, designation=des,
-            source=EN10365 + " (taper flanges taken parallel at the mean thickness)")))
+            h * MM, b * MM, tf * MM, tw * MM, r=r * MM, slope=UPN_SLOPE, designation=des,
+            source=EN10365 + " (8 % flange slope; toe rounding left out)")))
     return out
 
 
@@ -438,9 +439,9 @@ def _filter_piece(word: str) -> tuple[str, str | None]:
 
 def _matches(e: _Entry, piece: tuple[str, str | None]) -> bool:
     raw, num = piece
-    if raw in _prep(e.designation):
-        return True
-    return num is not None and num in f"|{e.key}|"
+    if num is not None:
+        return num in f"|{e.key}|"
+    return raw in _prep(e.designation)
 
 
 # ----------------------------------------------------------------- look-up

@@ -260,7 +260,7 @@ def _inline(spec: Mapping, key: str) -> Material:
                     "fy": "the yield strength fy (e.g. \"36 ksi\"; for lumber fb)",
                     "density": "the density (e.g. \"490 lb/ft^3\")"}[k]
             raise InputError(f"an inline material needs {what}", f"{key}.{k}")
-    if vals["e"] < 1e8 or vals["e"] > 1e13:
+    if vals["e"] < 1e9 or vals["e"] > 1e12:
         raise InputError(f"e = {spec['e']!r} is not a plausible elastic modulus (steel is "
                          "29000 ksi, aluminium 10100 ksi, lumber about 1600 ksi)", f"{key}.e")
     if vals["fy"] >= vals["e"]:

@@ -124,8 +124,9 @@ class Section:
 # ------------------------------------------------------------------ geometry engine
 @dataclass(frozen=True)
 class Part:
-    """A rectangle (z0..z1, y0..y1) or a quarter disc (centre zc, yc; radius r; quadrant
-    signs sz, sy) with sign +1 (material) or -1 (cut out). y is up (the bending plane)."""
+    """A rectangle (z0..z1, y0..y1), a quarter disc (centre zc, yc; radius r; quadrant
+    signs sz, sy) or a convex polygon (``pts``, (z, y) pairs counter-clockwise), with sign
+    +1 (material) or -1 (cut out). y is up (the bending plane)."""
 
     kind: str
     a: float
@@ -135,37 +136,70 @@ class Part:
     sign: float = 1.0
     sz: float = 1.0
     sy: float = 1.0
+    pts: tuple[tuple[float, float], ...] = ()
 
     def t(self) -> "Part":
         """The same part with y and z swapped (for the other axis)."""
         if self.kind == "rect":
             return Part("rect", self.c, self.d, self.a, self.b, self.sign)
+        if self.kind == "poly":
+            return poly([(y, z) for z, y in self.pts], self.sign)
         return Part("qdisk", self.b, self.a, self.c, 0.0, self.sign, self.sy, self.sz)
+
+    def _poly_sums(self):
+        """(A, Qz, Qy, Iyy_origin, Izz_origin, Izy_origin) of the polygon about the origin."""
+        a = qy = qz = iy = iz = izy = 0.0
+        pts = self.pts
+        for k in range(len(pts)):
+            z0, y0 = pts[k]
+            z1, y1 = pts[(k + 1) % len(pts)]
+            cr = z0 * y1 - z1 * y0
+            a += cr
+            qy += (y0 + y1) * cr
+            qz += (z0 + z1) * cr
+            iy += (y0 * y0 + y0 * y1 + y1 * y1) * cr
+            iz += (z0 * z0 + z0 * z1 + z1 * z1) * cr
+            izy += (z0 * y1 + 2 * z0 * y0 + 2 * z1 * y1 + z1 * y0) * cr
+        return a / 2, qz / 6, qy / 6, iy / 12, iz / 12, izy / 24
 
     def area(self) -> float:
         if self.kind == "rect":
             return self.sign * (self.b - self.a) * (self.d - self.c)
+        if self.kind == "poly":
+            return self.sign * self._poly_sums()[0]
         return self.sign * math.pi * self.c**2 / 4
 
     def cy(self) -> float:
         if self.kind == "rect":
             return (self.c + self.d) / 2
+        if self.kind == "poly":
+            s = self._poly_sums()
+            return s[2] / s[0]
         return self.b + self.sy * 4 * self.c / (3 * math.pi)
 
     def cz(self) -> float:
         if self.kind == "rect":
             return (self.a + self.b) / 2
+        if self.kind == "poly":
+            s = self._poly_sums()
+            return s[1] / s[0]
         return self.a + self.sz * 4 * self.c / (3 * math.pi)
 
     def i_own(self) -> float:
         """Second moment about its own centroid, horizontal axis (signed)."""
         if self.kind == "rect":
             return self.sign * (self.b - self.a) * (self.d - self.c) ** 3 / 12
+        if self.kind == "poly":
+            a, qz, qy, iy, iz, izy = self._poly_sums()
+            return self.sign * (iy - qy * qy / a)
         return self.sign * (math.pi / 16 - 4 / (9 * math.pi)) * self.c**4
 
     def ixy_own(self) -> float:
         if self.kind == "rect":
             return 0.0
+        if self.kind == "poly":
+            a, qz, qy, iy, iz, izy = self._poly_sums()
+            return self.sign * (izy - qz * qy / a)
         r = self.c
         a = math.pi * r * r / 4
         e = 4 * r / (3 * math.pi)
@@ -174,6 +208,9 @@ class Part:
     def y_range(self) -> tuple[float, float]:
         if self.kind == "rect":
             return self.c, self.d
+        if self.kind == "poly":
+            ys = [y for _, y in self.pts]
+            return min(ys), max(ys)
         return (self.b, self.b + self.c) if self.sy > 0 else (self.b - self.c, self.b)
 
     def integrals(self, lo: float, hi: float) -> tuple[float, float]:
@@ -185,6 +222,12 @@ class Part:
         if self.kind == "rect":
             w = self.b - self.a
             return self.sign * w * (hi - lo), self.sign * w * (hi * hi - lo * lo) / 2
+        if self.kind == "poly":
+            clipped = _clip(_clip(list(self.pts), lo, 1.0), hi, -1.0)
+            if len(clipped) < 3:
+                return 0.0, 0.0
+            a, _, qy, *_ = Part("poly", 0, 0, 0, 0, pts=tuple(clipped))._poly_sums()
+            return self.sign * a, self.sign * qy
         r, yc = self.c, self.b
         # v = distance from the centre line along the quadrant's y direction
         v0, v1 = sorted(((lo - yc) * self.sy, (hi - yc) * self.sy))
@@ -201,6 +244,30 @@ class Part:
         mv = fm(v1) - fm(v0)
         moment = yc * area + self.sy * mv  # y = yc + sy * v
         return self.sign * area, self.sign * moment
+
+
+def poly(pts, sign: float = 1.0) -> Part:
+    """A convex polygon part; the points are put counter-clockwise."""
+    pts = tuple((float(z), float(y)) for z, y in pts)
+    probe = Part("poly", 0, 0, 0, 0, pts=pts)._poly_sums()[0]
+    if probe < 0:
+        pts = pts[::-1]
+    return Part("poly", 0.0, 0.0, 0.0, 0.0, sign, pts=pts)
+
+
+def _clip(pts, level: float, keep: float):
+    """Clip a polygon to y >= level (keep=+1) or y <= level (keep=-1)."""
+    out = []
+    n = len(pts)
+    for k in range(n):
+        p, q = pts[k], pts[(k + 1) % n]
+        dp, dq = keep * (p[1] - level), keep * (q[1] - level)
+        if dp >= 0:
+            out.append(p)
+        if (dp >= 0) != (dq >= 0) and dp != dq:
+            f = dp / (dp - dq)
+            out.append((p[0] + f * (q[0] - p[0]), level))
+    return out
 
 
 @dataclass(frozen=True)
@@ -389,18 +456,29 @@ def rect_bar(h: float, b: float, *, designation: str = "", source: str = "",
                    source or "computed from dimensions", (), mass)
 
 
-def i_parts(d, bf, tf, tw, r):
-    parts = [rect(-bf / 2, bf / 2, d / 2 - tf, d / 2), rect(-bf / 2, bf / 2, -d / 2, -d / 2 + tf),
-             rect(-tw / 2, tw / 2, -d / 2 + tf, d / 2 - tf)]
+def i_parts(d, bf, tf, tw, r, slope=0.0):
+    """I-shape centred on the origin; `slope` is the inner flange surface's slope (0 for
+    parallel flanges, 1/6 for American standard S beams), tf the mean flange thickness."""
+    q = (bf - tw) / 4  # half of one flange half's projection
+    t_web, t_toe = tf + slope * q, tf - slope * q
+    parts = []
+    for sy in (1, -1):
+        o = sy * d / 2
+        parts.append(poly([(-bf / 2, o), (-bf / 2, o - sy * t_toe), (-tw / 2, o - sy * t_web),
+                           (tw / 2, o - sy * t_web), (bf / 2, o - sy * t_toe), (bf / 2, o)]))
+    parts.append(rect(-tw / 2, tw / 2, -d / 2 + t_web, d / 2 - t_web))
     for sz in (1, -1):
-        parts += fillet(sz * tw / 2, d / 2 - tf, r, sz, -1)
-        parts += fillet(sz * tw / 2, -d / 2 + tf, r, sz, 1)
+        parts += fillet(sz * tw / 2, d / 2 - t_web, r, sz, -1)
+        parts += fillet(sz * tw / 2, -d / 2 + t_web, r, sz, 1)
     return parts
 
 
 def i_shape(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: str = "strong",
-            designation: str = "", source: str = "", mass: float | None = None) -> Section:
-    """Doubly symmetric I-shape with web-to-flange fillets of radius r (kdes - tf).
+            slope: float = 0.0, designation: str = "", source: str = "",
+            mass: float | None = None) -> Section:
+    """Doubly symmetric I-shape with web-to-flange fillets of radius r (kdes - tf for
+    parallel flanges). `slope`: inner flange slope of a tapered flange (1/6 for S shapes),
+    tf then being the mean flange thickness.
 
     J = (2 bf tf^3 + (d - tf) tw^3) / 3 (open thin-walled, fillets ignored);
     Cw = Iy ho^2 / 4 with ho = d - tf.
@@ -408,12 +486,12 @@ def i_shape(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: 
     _check_pos(depth=d, flange_width=bf, flange_thickness=tf, web_thickness=tw)
     if 2 * tf >= d or tw >= bf:
         raise ValueError("flanges or web too thick for the depth / flange width")
-    parts = i_parts(d, bf, tf, tw, r)
+    parts = i_parts(d, bf, tf, tw, r, slope)
     ho = d - tf
     j = (2 * bf * tf**3 + ho * tw**3) / 3
     py = axis_props(transpose(parts))
     cw = py.i * ho * ho / 4
-    kdes = tf + r
+    kdes = tf + slope * (bf - tw) / 4 + r
     dims = {"d": d, "bf": bf, "tf": tf, "tw": tw, "kdes": kdes, "ho": ho,
             "h_tw": (d - 2 * kdes) / tw, "bf_2tf": bf / (2 * tf)}
     sec = _sec(designation or f"i-beam {_in(d)} x {_in(bf)}", "i-beam", parts, axis="strong",
@@ -422,27 +500,35 @@ def i_shape(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: 
     return turn(sec, "weak") if axis == "weak" else sec
 
 
-def channel_parts(d, bf, tf, tw, r):
-    """Channel with its web's back on z = 0 and toes toward +z, centred on y = 0."""
-    parts = [rect(0, bf, d / 2 - tf, d / 2), rect(0, bf, -d / 2, -d / 2 + tf),
-             rect(0, tw, -d / 2 + tf, d / 2 - tf)]
-    parts += fillet(tw, d / 2 - tf, r, 1, -1) + fillet(tw, -d / 2 + tf, r, 1, 1)
+def channel_parts(d, bf, tf, tw, r, slope=0.0):
+    """Channel with its web's back on z = 0 and toes toward +z, centred on y = 0; `slope`
+    is the inner flange slope (1/6 for American standard C), tf the mean thickness."""
+    q = (bf - tw) / 2
+    t_web, t_toe = tf + slope * q, tf - slope * q
+    parts = []
+    for sy in (1, -1):
+        o = sy * d / 2
+        parts.append(poly([(0, o), (0, o - sy * t_web), (tw, o - sy * t_web),
+                           (bf, o - sy * t_toe), (bf, o)]))
+    parts.append(rect(0, tw, -d / 2 + t_web, d / 2 - t_web))
+    parts += fillet(tw, d / 2 - t_web, r, 1, -1) + fillet(tw, -d / 2 + t_web, r, 1, 1)
     return parts
 
 
 def channel(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: str = "strong",
-            toes: str = "down", designation: str = "", source: str = "",
+            toes: str = "down", slope: float = 0.0, designation: str = "", source: str = "",
             mass: float | None = None) -> Section:
-    """Channel with parallel flanges (tf = average flange thickness for tapered flanges)."""
+    """Channel; `slope` is the inner flange slope of a tapered flange (1/6 for C shapes,
+    0.08 for UPN), tf then the mean flange thickness; r the root fillet radius."""
     _check_pos(depth=d, flange_width=bf, flange_thickness=tf, web_thickness=tw)
     if 2 * tf >= d or tw >= bf:
         raise ValueError("flanges or web too thick for the depth / flange width")
-    parts = channel_parts(d, bf, tf, tw, r)
+    parts = channel_parts(d, bf, tf, tw, r, slope)
     ho = d - tf
     j = (2 * (bf - tw / 2) * tf**3 + ho * tw**3) / 3
     pz = axis_props(transpose(parts))
     x = pz.c_bot  # back of web to centroid (z from 0)
-    kdes = tf + r
+    kdes = tf + slope * (bf - tw) / 2 + r
     # Cw of a channel (thin-walled, mid-line): tf b^3 h^2 / 12 * (3 b tf + 2 h tw)/(6 b tf + h tw)
     bm = bf - tw / 2
     cw = tf * bm**3 * ho**2 / 12 * (3 * bm * tf + 2 * ho * tw) / (6 * bm * tf + ho * tw)
@@ -450,7 +536,8 @@ def channel(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: 
             "h_tw": (d - 2 * kdes) / tw, "b_t": bf / tf}
     sec = _sec(designation or f"channel {_in(d)} x {_in(bf)}", "channel", parts,
                axis="strong", shear_area=d * tw, dims=dims, j=j, cw=cw, mass=mass,
-               source=source or "computed from dimensions (parallel flanges)")
+               source=source or ("computed from dimensions" + (
+                   f" (flange slope {slope:.3g})" if slope else "")))
     return turn(sec, "weak", toes=toes) if axis == "weak" else sec
 
 
@@ -514,6 +601,8 @@ def turn(sec: Section, axis: str, *, toes: str = "down", leg: str = "bottom",
         raise ValueError(f"axis must be 'strong' or 'weak', not {axis!r}")
     if sec.shape in ("round-tube", "pipe", "round-bar", "custom") or axis == "strong":
         return sec
+    if sec.shape in ("rect-tube", "rect-bar") and sec.dims["h"] == sec.dims["b"]:
+        return sec  # square: both axes alike
     if sec.iy is None or sec.sy is None:
         raise ValueError("this section has no weak-axis properties")
     dm = dict(sec.dims)
@@ -552,10 +641,15 @@ def turn(sec: Section, axis: str, *, toes: str = "down", leg: str = "bottom",
         shear = sec.dims.get("weak_shear_area", sec.shear_area)
     else:
         raise ValueError(f"cannot turn a {sec.shape}")
+    if sec.shape == "angle":
+        label = "geometric"
+    elif sec.shape in ("rect-tube", "rect-bar"):
+        label = "strong" if dm["h"] >= dm["b"] else "weak"
+    else:
+        label = "weak"
     return replace(sec, ix=iy, iy=sec.ix, sx_top=s_top, sx_bot=s_bot, zx=sec.zy, zy=sec.zx,
                    sy=min(sec.sx_top, sec.sx_bot), rx=sec.ry, ry=sec.rx, shear_area=shear,
-                   depth=depth, axis="geometric" if sec.shape == "angle" else "weak",
-                   dims=dm, warnings=warnings)
+                   depth=depth, axis=label, dims=dm, warnings=warnings)
 
 
 def double_channel(ch: Section, arrangement: str = "back-to-back", gap: float = 0.0,

@@ -1,0 +1,141 @@
+"""Built-in materials: values against their named standards, tolerant names, inline tables."""
+
+from __future__ import annotations
+
+import pytest
+
+from shopbeam.errors import InputError
+from shopbeam.materials import Material, list_materials, resolve_material
+
+KSI = 6894757.293168361  # Pa, exact from the international inch and pound-force
+PSI = KSI / 1000
+
+
+# (key, Fy ksi, Fu ksi) - specified minimums, each named by its standard
+@pytest.mark.parametrize("key, fy, fu", [
+    ("A36", 36, 58),          # ASTM A36
+    ("A572-50", 50, 65),      # ASTM A572 Gr 50
+    ("A992", 50, 65),         # ASTM A992
+    ("A500-B", 46, 58),       # ASTM A500 Gr B, shaped tube
+    ("A500-B-round", 42, 58),  # ASTM A500-13 Gr B, round tube
+    ("A500-C", 50, 62),       # ASTM A500 Gr C, shaped tube
+    ("A500-C-round", 46, 62),  # ASTM A500-13 Gr C, round tube
+    ("A53-B", 35, 60),        # ASTM A53 Gr B
+    ("6061-T6", 35, 38),      # Aluminum Design Manual, from memory
+    ("6063-T6", 25, 30),      # Aluminum Design Manual, from memory
+    ("6063-T5", 16, 22),      # Aluminum Design Manual, from memory
+])
+def test_strengths(key, fy, fu):
+    m = resolve_material(key)
+    assert m.fy == pytest.approx(fy * KSI)
+    assert m.fu == pytest.approx(fu * KSI)
+    assert m.source
+
+
+def test_steel_moduli_and_density():
+    # AISC 360-16: E = 29,000 ksi, G = 11,200 ksi; AISC Manual: 490 lb/ft^3
+    m = resolve_material("A36")
+    assert m.e == pytest.approx(199.948e9, rel=1e-5)
+    assert m.g == pytest.approx(11200 * KSI)
+    assert m.density == pytest.approx(7849.05, rel=1e-5)
+
+
+def test_stainless_metric_minimums():
+    # ASTM A240 annealed: 304/316 205 MPa yield, 515 MPa tensile; L grades 170 / 485 MPa
+    assert resolve_material("304").fy == pytest.approx(205e6)
+    assert resolve_material("316").fu == pytest.approx(515e6)
+    assert resolve_material("304L").fy == pytest.approx(170e6)
+    assert resolve_material("304").kind == "stainless"
+
+
+def test_aluminium_welded_strengths():
+    # Aluminum Design Manual (from memory): 6061-T6 welded Ftyw 15 ksi; 6063 welded 8 ksi
+    assert resolve_material("6061-T6").fy_welded == pytest.approx(15 * KSI)
+    assert resolve_material("6063-T6").fy_welded == pytest.approx(8 * KSI)
+    assert resolve_material("6063-T5").fy_welded == pytest.approx(8 * KSI)
+    for m in list_materials():
+        if m.kind == "aluminum":
+            assert m.fy_welded < m.fy
+            assert m.e == pytest.approx(10100 * KSI)
+
+
+def test_lumber_reference_values():
+    # NDS Supplement 2018 Table 4A (from memory)
+    spf, dfl = resolve_material("SPF No.2"), resolve_material("DF-L No.2")
+    assert spf.fb == pytest.approx(875 * PSI) and spf.fv == pytest.approx(135 * PSI)
+    assert spf.e == pytest.approx(1.4e6 * PSI)
+    assert dfl.fb == pytest.approx(900 * PSI) and dfl.fv == pytest.approx(180 * PSI)
+    assert dfl.e == pytest.approx(1.6e6 * PSI)
+    assert spf.fy == spf.fb
+    # density from specific gravity at 15 % moisture: about 28-29 lb/ft^3 for SPF and
+    # 33-34 for DF-L (common practice)
+    assert 28 < spf.density / 16.018 < 29.5
+    assert 33 < dfl.density / 16.018 < 35
+
+
+def test_tube_wall_rules():
+    # AISC 360-16 B4.2: 0.93 x nominal for ERW A500 (and A53 pipe); A513 uses nominal
+    assert resolve_material("A500-C").hss_wall_factor == 0.93
+    assert resolve_material("A53-B").hss_wall_factor == 0.93
+    assert resolve_material("A513").hss_wall_factor == 1.0
+    assert resolve_material("A36").hss_wall_factor is None
+
+
+def test_every_material_has_a_source_and_sane_values():
+    seen = set()
+    for m in list_materials():
+        assert m.key not in seen
+        seen.add(m.key)
+        assert m.source and m.name
+        assert 5e9 < m.e < 250e9 and 1e6 < m.fy < 500e6 and 300 < m.density < 9000
+        assert resolve_material(m.key) is m
+        assert m.kind in ("steel", "stainless", "aluminum", "lumber")
+    assert len(seen) >= 18
+
+
+@pytest.mark.parametrize("text, key", [
+    ("A500 Gr C", "A500-C"), ("a500c", "A500-C"), ("ASTM A500 grade C", "A500-C"),
+    ("A500 Gr. B", "A500-B"), ("astm a36", "A36"), ("A572 Gr 50", "A572-50"),
+    ("a572-50", "A572-50"), ("6061 T6", "6061-T6"), ("6061-t6", "6061-T6"),
+    ("304 SS", "304"), ("spf", "SPF-2"), ("DF-L #2".replace("#", "No."), "DF-L-2"),
+    ("A513 DOM", "A513-DOM"), ("A53 Gr B", "A53-B"),
+])
+def test_tolerant_names(text, key):
+    assert resolve_material(text).key == key
+
+
+def test_unknown_material_suggests():
+    with pytest.raises(InputError) as exc:
+        resolve_material("A500-D")
+    p = exc.value.problem
+    assert p.key == "beam.material"
+    assert "did you mean" in p.message and "A500" in p.message
+
+
+def test_inline_material():
+    m = resolve_material({"e": "29000 ksi", "fy": "36 ksi", "density": "490 lb/ft^3",
+                          "name": "mystery plate", "fu": "58 ksi"})
+    assert isinstance(m, Material)
+    assert m.e == pytest.approx(29000 * KSI) and m.fy == pytest.approx(36 * KSI)
+    assert m.density == pytest.approx(7849.05, rel=1e-5)
+    assert m.kind == "custom" and m.source == "typed in" and m.name == "mystery plate"
+    si = resolve_material({"e": "200 GPa", "fy": "250 MPa", "density": "7850 kg/m^3"})
+    assert si.fy == pytest.approx(250e6)
+
+
+@pytest.mark.parametrize("spec, key, words", [
+    ({"e": "29000 ksi", "fy": "36 ksi"}, "beam.material.density", "density"),
+    ({"e": "29000 ksi", "fy": "36", "density": "490 lb/ft^3"}, "beam.material.fy", "unit"),
+    ({"e": "29000 ksi", "fy": "36 ksi", "density": "490 lb/ft^3", "fyy": "1 ksi"},
+     "beam.material.fyy", "did you mean 'fy'"),
+    ({"e": "29000 psi", "fy": "36 ksi", "density": "490 lb/ft^3"}, "beam.material.e",
+     "plausible"),
+    ({"e": "29000 ksi", "fy": "36 ft", "density": "490 lb/ft^3"}, "beam.material.fy",
+     "stress"),
+    (42, "beam.material", "table"),
+])
+def test_inline_errors(spec, key, words):
+    with pytest.raises(InputError) as exc:
+        resolve_material(spec)
+    assert exc.value.problem.key == key
+    assert words in exc.value.problem.message
