@@ -11,6 +11,7 @@ from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.checks import Check, governing, run_checks
 from shopbeam.jobfile import Job
+from shopbeam.errors import UnstableBeam
 from shopbeam.solver import Solution, solve
 
 
@@ -51,7 +52,10 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
 
 def analyze(job: Job) -> Result:
     """Solve the job's member and run its checks. Raises UnstableBeam."""
-    sol = solve(job.beam(), length_fmt=length_formatter(job.units))
+    try:
+        sol = solve(job.beam(), length_fmt=length_formatter(job.units))
+    except UnstableBeam as e:
+        raise UnstableBeam(e.args[0], file=job.path or "") from None
     checks = run_checks(job, sol)
     return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol)))
 

@@ -64,4 +64,5 @@ class UnstableBeam(Exception):
 
     def __str__(self) -> str:
         msg = super().__str__()
-        return f"{self.file}: unstable beam: {msg}" if self.file else f"unstable beam: {msg}"
+        where = f"{self.file}: supports: " if self.file else ""
+        return f"{where}unstable beam: {msg}"
