@@ -1,0 +1,129 @@
+"""The real command line on good and bad jobs: exit codes, one clear message, no traceback."""
+
+from __future__ import annotations
+
+import json
+import subprocess
+import sys
+from pathlib import Path
+
+import pytest
+
+DATA = Path(__file__).resolve().parent / "data"
+GOOD = (DATA / "cantilever_arm.toml").read_text()
+
+
+def run(*args, cwd=None):
+    return subprocess.run([sys.executable, "-m", "shopbeam", *args], capture_output=True,
+                          text=True, cwd=cwd, timeout=120)
+
+
+def write(tmp_path, text, name="job.toml"):
+    p = tmp_path / name
+    p.write_text(text)
+    return p
+
+
+def test_solve_prints_a_full_report_with_the_caution():
+    r = run("solve", str(DATA / "cantilever_arm.toml"))
+    assert r.returncode == 0, r.stderr
+    for part in ("REACTIONS", "EXTREMES", "CHECKS", "SELF-CHECKS", "SCREENING CHECK ONLY",
+                 "licensed", "PASS"):
+        assert part in r.stdout
+
+
+def test_json_follows_the_contract():
+    r = run("solve", str(DATA / "cantilever_arm.toml"), "--json")
+    assert r.returncode == 0, r.stderr
+    d = json.loads(r.stdout)
+    for key in ("schema", "title", "length", "reactions", "extremes", "checks", "governing",
+                "diagnostics", "cautions"):
+        assert key in d
+    assert d["schema"] == 1 and d["length"] == pytest.approx(4 * 0.3048)
+    assert {c["name"] for c in d["checks"]} >= {"bending", "shear", "deflection"}
+    for c in d["checks"]:
+        assert c["ratio"] == pytest.approx(c["demand"] / c["limit"])
+    for f in ("shear", "moment", "slope", "deflection"):
+        assert set(d["extremes"][f]) == {"max", "max_at", "min", "min_at"}
+    r0 = d["reactions"][0]
+    assert r0["type"] == "fixed" and r0["at"] == 0.0
+    # hand statics (common practice): the fixed end carries every downward load
+    assert r0["force"] > 0 and r0["moment"] > 0
+    assert all(x["ok"] for x in d["diagnostics"])
+
+
+def test_calc_sheet_prints_exact_reactions():
+    r = run("solve", str(DATA / "cantilever_arm.toml"), "--calc")
+    assert r.returncode == 0, r.stderr
+    assert "R1 =" in r.stdout and "<x - 7/2>" in r.stdout
+    assert "Numeric engine agrees with this sheet: yes" in r.stdout
+
+
+BAD = [
+    ("force where a length belongs", ('at = "3 ft 6 in"', 'at = "300 lbf"'), "loads[0].at", "a force"),
+    ("bare number", ('length = "4 ft"', 'length = "4"'), "beam.length", "bare number"),
+    ("negative length", ('length = "4 ft"', 'length = "-4 ft"'), "beam.length", "greater than zero"),
+    ("zero length", ('length = "4 ft"', 'length = "0 ft"'), "beam.length", "greater than zero"),
+    ("load beyond the end", ('at = "3 ft 6 in"', 'at = "6 ft"'), "loads[0].at", "beyond the end"),
+    ("support beyond the end", ('at = "0 ft"\ntype = "fixed"', 'at = "9 ft"\ntype = "fixed"'),
+     "supports[0].at", "beyond the end"),
+    ("unknown support type", ('type = "fixed"', 'type = "clamp"'), "supports[0].type", "not a support type"),
+    ("bad TOML", ('title = "Test', 'title = Test'), "", "not valid TOML"),
+    ("newer schema", ("schema = 1", "schema = 7"), "schema", "newer shopbeam"),
+    ("unstable", ('type = "fixed"', 'type = "roller"'), "", "can rotate about its only support"),
+]
+
+
+@pytest.mark.parametrize("what, change, key, words", BAD, ids=[b[0] for b in BAD])
+def test_bad_input_exits_2_with_one_clear_message(tmp_path, what, change, key, words):
+    old, new = change
+    assert old in GOOD
+    p = write(tmp_path, GOOD.replace(old, new, 1))
+    r = run("solve", str(p))
+    assert r.returncode == 2
+    assert "Traceback" not in r.stderr and r.stdout == ""
+    assert words in r.stderr
+    assert str(p) in r.stderr
+    if key:
+        assert key in r.stderr
+
+
+def test_line_numbers_are_given(tmp_path):
+    p = write(tmp_path, GOOD.replace('at = "3 ft 6 in"', 'at = "300 lbf"'))
+    r = run("solve", str(p))
+    line = next(i for i, t in enumerate(p.read_text().splitlines(), 1) if '"300 lbf"' in t)
+    assert f"{p}:{line}: loads[0].at" in r.stderr
+
+
+def test_every_problem_in_one_pass(tmp_path):
+    text = GOOD.replace('length = "4 ft"', 'length = "4"').replace('value = "-300 lbf"', 'value = "-300 ft"')
+    r = run("check", str(write(tmp_path, text)))
+    assert r.returncode == 2
+    assert "beam.length" in r.stderr and "loads[0].value" in r.stderr
+    assert "2 problems" in r.stderr
+
+
+def test_typo_in_a_key_warns_with_the_nearest_key(tmp_path):
+    text = GOOD.replace('label = "bundle"', 'lable = "bundle"')
+    r = run("check", str(write(tmp_path, text)))
+    assert r.returncode == 0
+    assert "unknown key 'lable'" in r.stderr and "did you mean 'label'" in r.stderr
+
+
+def test_missing_file_and_two_hinges_in_one_span(tmp_path):
+    r = run("solve", str(tmp_path / "nope.toml"))
+    assert r.returncode == 2 and "no such job file" in r.stderr
+    text = GOOD.replace('[[supports]]\nat = "0 ft"\ntype = "fixed"',
+                        '[[supports]]\nat = "0 ft"\ntype = "pin"\n\n[[supports]]\nat = "4 ft"\n'
+                        'type = "roller"\n\n[[supports]]\nat = "1 ft"\ntype = "hinge"\n\n'
+                        '[[supports]]\nat = "2 ft"\ntype = "hinge"')
+    r = run("solve", str(write(tmp_path, text)))
+    assert r.returncode == 2 and "Traceback" not in r.stderr
+    assert "hinges at 1 ft and 2 ft are in one span" in r.stderr
+
+
+def test_help_lists_the_commands():
+    r = run("--help")
+    assert r.returncode == 0
+    for cmd in ("solve", "check", "capacity", "rating", "size", "section", "shapes"):
+        assert cmd in r.stdout
