@@ -1,16 +1,58 @@
 """Strength and stiffness checks of a solved member: demand, limit, ratio, PASS/FAIL.
 
-Basic basis (first yield with a safety factor): bending stress M/S against Fy / SF, shear
-stress V/Av against 0.6 Fy / SF on the shear area, and deflection per span against the
-criterion (a cantilever or overhang is judged on twice its length). Each check says the
-formula it used.
+The basis is stated in every check's formula:
+
+- ``asd`` (default for steel and stainless): AISC 360-16 allowable strength design. Bending
+  per chapter F with Omega_b = 1.67: F2 (compact I-shapes and channels, yielding and
+  lateral-torsional buckling with Lp, Lr and Cb from the moment diagram), F3 (flange local
+  buckling), F6 (I-shapes and channels about the weak axis), F7 (rectangular HSS: flange and
+  web local buckling, effective width for slender flanges, lateral-torsional buckling),
+  F8 (round HSS and pipe), F11 (solid bars). Tees, angles, built-up and typed-in sections
+  get first yield (My / Omega_b) with a warning that LTB and local buckling are not covered.
+  Shear per chapter G: G2 (webs of I-shapes and channels, Omega_v = 1.50 or 1.67), G4
+  (rectangular HSS), G5 (round HSS), G6 (weak-axis flanges), G3 (tee stems, angle legs).
+- ``first-yield``: M / S against Fy / SF and V / Av against 0.6 Fy / SF (SF from the job).
+- aluminium (always its own basis): Aluminum Design Manual 2015 ASD yielding,
+  Mn = Z Fty <= 1.5 S Fty and Vn = 0.6 Fty Av with Omega = 1.65, with the welded
+  (heat-affected zone) strengths when the beam is welded. Element local buckling and
+  lateral-torsional buckling are not covered (a warning says so).
+- lumber (always its own basis): NDS 2018 allowable stress, fb = M / S <= Fb' and
+  fv = 1.5 V / A <= Fv' with the adjustment factors taken as 1.0 (stated).
+
+Deflection is checked per span and per overhang (a cantilever or overhang on twice its
+length) against L/n, an absolute limit or a named preset.
+
+`Flexure` keeps the bending strength in the form every caller needs: Mn = min(cap, Cb x
+ltb1(Lb)), linear in Cb until capped, so the capacity search and the sizing sweep can use it
+without re-deriving anything.
 """
 
 from __future__ import annotations
 
+import math
 from dataclasses import dataclass, field
 
 from shopbeam.solver import Solution, segments
+
+OMEGA_B = 1.67  # AISC 360-16 F1
+OMEGA_V = 1.67  # AISC 360-16 G1
+OMEGA_V_ROLLED_I = 1.50  # AISC 360-16 G2.1(a)
+OMEGA_ADM = 1.65  # Aluminum Design Manual 2015, yielding (from memory)
+CB_MAX = 3.0  # AISC 360-16 F1: Cb need not exceed 3.0 (upper bound used here)
+
+# name -> (n in L/n, where the figure comes from)
+DEFLECTION_PRESETS: dict[str, tuple[float, str]] = {
+    "rack": (180.0, "pallet-rack beams L/180 (ANSI MH16.1, from memory)"),
+    "shelf": (180.0, "storage shelves L/180 (as rack beams; common practice)"),
+    "floor": (360.0, "floor members L/360 (IBC Table 1604.3, live load, from memory; "
+              "checked here under the total load, which is stricter)"),
+    "roof": (240.0, "roof members L/240 (IBC Table 1604.3, from memory)"),
+    "hoist": (450.0, "hoist beams and monorails L/450 (common practice)"),
+    "monorail": (450.0, "hoist beams and monorails L/450 (common practice)"),
+    "jib": (225.0, "jib booms L/225 on twice the reach (common practice)"),
+}
+LIFTING_DEFAULT_RATIO = 450.0  # tighter default for jobs tagged lifting (common practice)
+DEFAULT_IMPACT = 0.15  # slow powered hoists (common practice)
 
 
 @dataclass(frozen=True)
@@ -41,59 +83,571 @@ class Check:
                 "detail": self.detail}
 
 
-def deflection_limits(job, sol: Solution) -> list[dict]:
-    """Each span and overhang with its largest deflection and its limit."""
+# ------------------------------------------------------------------ job options
+def _criteria_extra(job) -> dict:
+    return dict(getattr(job.criteria, "extra", {}) or {})
+
+
+def basis_of(job) -> str:
+    """"asd", "first-yield", "aluminum" or "lumber" (the material decides the last two)."""
+    kind = getattr(job.material, "kind", "custom")
+    if kind == "lumber":
+        return "lumber"
+    asked = str(_criteria_extra(job).get("basis", "")).strip().lower()
+    if kind == "aluminum":
+        return "first-yield" if asked == "first-yield" else "aluminum"
+    if asked in ("asd", "first-yield"):
+        return asked
+    return "asd" if kind in ("steel", "stainless") else "first-yield"
+
+
+BASIS_WORDS = {
+    "asd": "AISC 360-16 allowable strength design (ASD)",
+    "first-yield": "first yield with a safety factor",
+    "aluminum": "Aluminum Design Manual 2015 ASD, yielding (from memory)",
+    "lumber": "NDS 2018 allowable stress design, adjustment factors 1.0 (from memory)",
+}
+
+
+def impact_of(job) -> float:
+    """Impact allowance on live loads: default 15 % for jobs tagged lifting, else 0."""
+    raw = _criteria_extra(job).get("impact")
+    if raw is None:
+        return DEFAULT_IMPACT if job.lifting else 0.0
+    return parse_fraction(raw, "criteria.impact")
+
+
+def parse_fraction(raw, key: str) -> float:
+    from shopbeam.errors import InputError
+
+    if isinstance(raw, bool):
+        raise InputError("expected a fraction such as 0.15 or \"15%\"", key)
+    if isinstance(raw, (int, float)):
+        v = float(raw)
+    elif isinstance(raw, str) and raw.strip().endswith("%"):
+        try:
+            v = float(raw.strip()[:-1]) / 100
+        except ValueError:
+            raise InputError(f"cannot read {raw!r} as a percentage (write \"15%\")", key) from None
+    else:
+        raise InputError(f"cannot read {raw!r}: write a fraction such as 0.15 or \"15%\"", key)
+    if not (0 <= v <= 2):
+        raise InputError(f"{raw!r} is outside 0 to 200 %", key)
+    return v
+
+
+def deflection_rule(job) -> tuple[float | None, float | None, str]:
+    """(n of L/n or None, absolute limit or None, words) for this job."""
     c = job.criteria
+    written = (job.data.get("criteria", {}) or {}).get("deflection") if job.data else None
+    preset = str(written).strip().lower() if isinstance(written, str) else ""
+    if preset in DEFLECTION_PRESETS:
+        n, why = DEFLECTION_PRESETS[preset]
+        return n, None, f"L/{n:g}: {why}"
+    if written is None and job.lifting:
+        return LIFTING_DEFAULT_RATIO, None, (f"L/{LIFTING_DEFAULT_RATIO:g}: default for lifting "
+                                              "devices (common practice)")
+    if c.deflection_abs is not None:
+        return None, c.deflection_abs, c.deflection
+    return c.deflection_ratio or 240.0, None, c.deflection
+
+
+def brace_points(job) -> tuple[bool, list[float]]:
+    """(continuously braced?, lateral brace positions) from beam.braced / beam.braces."""
+    from shopbeam import units
+    from shopbeam.errors import InputError
+
+    beam = (job.data.get("beam", {}) or {}) if job.data else {}
+    braced = beam.get("braced", False)
+    if not isinstance(braced, bool):
+        raise InputError("braced must be true or false (compression flange braced all along)",
+                         "beam.braced")
+    raw = beam.get("braces", [])
+    if not isinstance(raw, list):
+        raise InputError("braces must be a list of positions, e.g. braces = [\"4 ft\", \"8 ft\"]",
+                         "beam.braces")
+    pts = []
+    for i, r in enumerate(raw):
+        x = units.parse(r, "length", f"beam.braces[{i}]", nonnegative=True)
+        if x > job.length * (1 + 1e-9):
+            raise InputError("brace point beyond the end of the beam", f"beam.braces[{i}]")
+        pts.append(min(x, job.length))
+    return braced, sorted(pts)
+
+
+def unbraced_segments(job, beam) -> list[tuple[float, float, bool]]:
+    """(start, end, free end?) of every laterally unbraced length."""
+    braced, pts = brace_points(job)
+    L = beam.length
+    sup = sorted({s.at for s in beam.supports if s.takes_force})
+    if braced:
+        return [(0.0, L, False)]
+    stops = sorted(set([0.0, L] + sup + pts))
+    held = set(sup) | set(pts)
+    tol = 1e-9 * L
+    out = []
+    for a, b in zip(stops, stops[1:]):
+        if b - a <= tol:
+            continue
+        free = (a <= tol and not any(abs(h) <= tol for h in held)) or (
+            b >= L - tol and not any(abs(h - L) <= tol for h in held))
+        out.append((a, b, free))
+    return out
+
+
+# ------------------------------------------------------------------ flexure
+@dataclass(frozen=True)
+class Flexure:
+    """Nominal bending strength Mn = min(cap, Cb x ltb1(Lb)) and its safety factor."""
+
+    cap: float  # N*m: yielding / local buckling (no LTB)
+    omega: float
+    cap_text: str
+    ltb: tuple | None = None  # (kind, params) for ltb1, None when LTB does not apply
+    stress_s: float | None = None  # show as stress on this S (first-yield, lumber)
+    warnings: tuple[str, ...] = ()
+
+    def ltb1(self, lb: float) -> tuple[float, str]:
+        """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern)."""
+        if self.ltb is None or lb <= 0:
+            return math.inf, ""
+        kind, p = self.ltb
+        if kind == "F2":
+            mp, sx, e, fy, rts, jc, ho, lp, lr = p
+            if lb <= lp:
+                return math.inf, ""
+            if lb <= lr:
+                return (mp - (mp - 0.7 * fy * sx) * (lb - lp) / (lr - lp),
+                        f"F2-2 inelastic LTB, Lp {lp / 0.0254:.3g} in < Lb {lb / 0.0254:.4g} in "
+                        f"<= Lr {lr / 0.0254:.4g} in")
+            x = (lb / rts) ** 2
+            fcr = math.pi**2 * e / x * math.sqrt(1 + 0.078 * jc / (sx * ho) * x)
+            return fcr * sx, (f"F2-3/F2-4 elastic LTB, Lb {lb / 0.0254:.4g} in > Lr "
+                              f"{lr / 0.0254:.4g} in")
+        if kind == "F7":
+            mp, sx, e, fy, ry, ja, lp, lr = p
+            if lb <= lp:
+                return math.inf, ""
+            if lb <= lr:
+                return (mp - (mp - 0.7 * fy * sx) * (lb - lp) / (lr - lp),
+                        f"F7-10 HSS LTB, Lp {lp / 0.0254:.4g} in < Lb <= Lr {lr / 0.0254:.4g} in")
+            return 2 * e * ja / (lb / ry), "F7-11 HSS elastic LTB"
+        if kind == "F11":
+            my, mp, e, fy, d, t = p
+            r = lb * d / t**2
+            if r <= 0.08 * e / fy:
+                return math.inf, ""
+            if r <= 1.9 * e / fy:
+                return (1.52 - 0.274 * r * fy / e) * my, "F11-2 bar LTB, Lb d/t^2 = %.4g" % r
+            return 1.9 * e / r * (my / fy), "F11-3/F11-4 bar elastic LTB, Lb d/t^2 = %.4g" % r
+        return math.inf, ""  # pragma: no cover
+
+    def mn(self, cb: float, lb: float) -> tuple[float, str]:
+        l1, why = self.ltb1(lb)
+        if cb * l1 < self.cap:
+            return cb * l1, f"{why}, Cb {cb:.3f}"
+        return self.cap, self.cap_text
+
+
+def _fy_e(mat, basis: str, welded: bool) -> tuple[float, float]:
+    fy = mat.fy
+    if basis == "aluminum" and welded and mat.fy_welded:
+        fy = mat.fy_welded
+    return fy, mat.e
+
+
+def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Flexure:
+    """Bending strength of the section (SI) on the given basis."""
+    s = min(sec.sx_top, sec.sx_bot)
+    if basis == "lumber":
+        fb = mat.fb or mat.fy
+        return Flexure(fb * s, 1.0, "NDS 3.3: fb = M / S <= Fb' = Fb (CD, CM, Ct, CL, CF, Cfu, "
+                       "Ci, Cr = 1.0; laterally supported)", stress_s=s)
+    if basis == "first-yield":
+        return Flexure(mat.fy * s, sf, f"f = M / S <= Fy / SF = Fy / {sf:g} (first yield)",
+                       stress_s=s)
+    fy, e = _fy_e(mat, basis, welded)
+    z = sec.zx
+    if basis == "aluminum":
+        mp = min(z * fy, 1.5 * s * fy) if z else s * fy
+        what = "welded Ftyw" if (welded and mat.fy_welded) else "Fty"
+        return Flexure(mp, OMEGA_ADM, f"ADM F.2: Mn = Z {what} <= 1.5 S {what}, Omega 1.65",
+                       warnings=("aluminium: element local buckling (ADM B.5) and lateral-"
+                                 "torsional buckling (ADM F.4) are not checked; thin walls and "
+                                 "long unbraced open sections need an engineer's check",))
+    d = sec.dims
+    shape, axis = sec.shape, sec.axis
+    if shape in ("i-beam", "channel") and axis == "strong" and z:
+        return _f2_f3(sec, fy, e)
+    if shape in ("i-beam", "channel") and axis == "weak" and z:
+        return _f6(sec, fy, e)
+    if shape == "rect-tube" and z:
+        return _f7(sec, fy, e)
+    if shape in ("round-tube", "pipe") and z:
+        dt = d["od"] / d["t_des"]
+        lp, lr = 0.07 * e / fy, 0.31 * e / fy
+        warn = ()
+        if dt > 0.45 * e / fy:
+            warn = (f"round tube D/t = {dt:.3g} exceeds 0.45 E/Fy: outside AISC 360 F8",)
+        if dt <= lp:
+            return Flexure(fy * z, OMEGA_B, f"F8-1 yielding Mn = Fy Z (compact, D/t {dt:.3g})",
+                           warnings=warn)
+        if dt <= lr:
+            return Flexure(min(fy * z, (0.021 * e / dt + fy) * s), OMEGA_B,
+                           f"F8-2 local buckling, noncompact wall (D/t {dt:.3g})", warnings=warn)
+        return Flexure(0.33 * e / dt * s, OMEGA_B, f"F8-4 local buckling, slender wall "
+                       f"(D/t {dt:.3g})", warnings=warn)
+    if shape == "round-bar":
+        return Flexure(min(fy * z, 1.6 * fy * s), OMEGA_B, "F11-1 Mn = Fy Z <= 1.6 Fy S")
+    if shape == "rect-bar":
+        mp = min(fy * z, 1.6 * fy * s)
+        h, b = d["h"], d["b"]
+        ltb = ("F11", (fy * s, mp, e, fy, h, b)) if h > b else None
+        return Flexure(mp, OMEGA_B, "F11-1 yielding Mn = Fy Z <= 1.6 Fy S", ltb=ltb)
+    warn = {"tee": "tee: AISC 360 F9 lateral-torsional and flange/stem local buckling are NOT "
+                   "checked; first yield only",
+            "angle": "angle: AISC 360 F10 lateral-torsional and leg local buckling are NOT "
+                     "checked; first yield only"}.get(
+        shape, f"{shape} section: lateral-torsional and local buckling are not checked; first "
+               "yield only")
+    return Flexure(fy * s, OMEGA_B, "first yield My = Fy S, Omega 1.67 (F9/F10 limit states "
+                   "not covered)", warnings=(warn,))
+
+
+def _f2_f3(sec, fy, e) -> Flexure:
+    d = sec.dims
+    sx, z = min(sec.sx_top, sec.sx_bot), sec.zx
+    mp = fy * z
+    root = math.sqrt(e / fy)
+    lam = d.get("bf_2tf") if sec.shape == "i-beam" else d.get("b_t")
+    if lam is None:
+        lam = d["bf"] / (2 * d["tf"]) if sec.shape == "i-beam" else d["bf"] / d["tf"]
+    lpf, lrf = 0.38 * root, 1.0 * root
+    h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
+    warnings = []
+    cap, text = mp, f"F2-1 yielding Mn = Mp = Fy Zx (compact flanges, bf/2tf {lam:.3g})"
+    if h_tw > 3.76 * root:
+        cap = fy * sx
+        text = "noncompact web (h/tw %.3g > 3.76 sqrt(E/Fy)): Mn = Fy Sx (lower bound of F4)" % h_tw
+        warnings.append("noncompact or slender web: bending taken as first yield Fy Sx; "
+                        "AISC 360 F4/F5 not applied")
+    if lam > lpf:
+        if lam <= lrf:
+            m = mp - (mp - 0.7 * fy * sx) * (lam - lpf) / (lrf - lpf)
+            t = f"F3-1 flange local buckling (noncompact, lambda {lam:.3g})"
+        else:
+            kc = min(max(4 / math.sqrt(h_tw), 0.35), 0.76)
+            m = 0.9 * e * kc * sx / lam**2
+            t = f"F3-2 flange local buckling (slender, lambda {lam:.3g})"
+        if m < cap:
+            cap, text = m, t
+    iy, cw, j, ho = sec.iy, sec.cw, sec.j, d.get("ho") or (d["d"] - d["tf"])
+    if not (iy and j and sec.ry):
+        return Flexure(cap, OMEGA_B, text, warnings=tuple(warnings + [
+            "no torsion properties: lateral-torsional buckling not checked"]))
+    rts = d.get("rts")
+    if not rts and cw:
+        rts = math.sqrt(math.sqrt(iy * cw) / sx)
+    if not rts:
+        rts = d["bf"] / math.sqrt(12 * (1 + d["d"] * d["tw"] / (6 * d["bf"] * d["tf"])))
+    c = 1.0
+    if sec.shape == "channel" and cw:
+        c = ho / 2 * math.sqrt(iy / cw)
+    jc = j * c
+    lp = 1.76 * sec.ry * root
+    a = jc / (sx * ho)
+    lr = 1.95 * rts * e / (0.7 * fy) * math.sqrt(a + math.sqrt(a * a + 6.76 * (0.7 * fy / e) ** 2))
+    return Flexure(cap, OMEGA_B, text, ltb=("F2", (mp, sx, e, fy, rts, jc, ho, lp, lr)),
+                   warnings=tuple(warnings))
+
+
+def _f6(sec, fy, e) -> Flexure:
+    d = sec.dims
+    sy, zy = min(sec.sx_top, sec.sx_bot), sec.zx
+    mp = min(fy * zy, 1.6 * fy * sy)
+    lam = d["bf"] / (2 * d["tf"]) if sec.shape == "i-beam" else d["bf"] / d["tf"]
+    root = math.sqrt(e / fy)
+    lpf, lrf = 0.38 * root, 1.0 * root
+    if lam <= lpf:
+        return Flexure(mp, OMEGA_B, "F6-1 weak-axis yielding Mn = Fy Zy <= 1.6 Fy Sy")
+    if lam <= lrf:
+        return Flexure(mp - (mp - 0.7 * fy * sy) * (lam - lpf) / (lrf - lpf), OMEGA_B,
+                       f"F6-2 weak-axis flange local buckling (noncompact, lambda {lam:.3g})")
+    return Flexure(0.69 * e / lam**2 * sy, OMEGA_B,
+                   f"F6-3/F6-4 weak-axis flange local buckling (slender, lambda {lam:.3g})")
+
+
+def _f7(sec, fy, e) -> Flexure:
+    d = sec.dims
+    s, z = min(sec.sx_top, sec.sx_bot), sec.zx
+    mp = fy * z
+    root = math.sqrt(e / fy)
+    t = d["t_des"]
+    bt, ht = d["b_flat"] / t, d["h_flat"] / t
+    cap, text = mp, f"F7-1 yielding Mn = Fy Z (compact walls, b/t {bt:.3g}, h/t {ht:.3g})"
+    warnings = []
+    if bt > 1.12 * root:
+        if bt <= 1.40 * root:
+            m = min(mp, mp - (mp - fy * s) * (3.57 * bt / root - 4.0))
+            tx = f"F7-2 flange local buckling (noncompact, b/t {bt:.3g})"
+        else:
+            be = min(1.92 * t * root * (1 - 0.38 / bt * root), d["b_flat"])
+            m = fy * _hss_se(sec, be)
+            tx = f"F7-3 flange local buckling (slender, b/t {bt:.3g}, effective width " \
+                 f"{be / 0.0254:.3g} in)"
+        if m < cap:
+            cap, text = m, tx
+    if ht > 2.42 * root:
+        if ht <= 5.70 * root:
+            m = min(mp, mp - (mp - fy * s) * (0.305 * ht / root - 0.738))
+            tx = f"F7-6 web local buckling (noncompact, h/t {ht:.3g})"
+        else:
+            m = fy * s * 0.9
+            tx = f"slender web (h/t {ht:.3g}): 0.9 Fy S used (F7-7 not applied)"
+            warnings.append("slender HSS web: AISC 360 F7.3(c) not applied; have it checked")
+        if m < cap:
+            cap, text = m, tx
+    ltb = None
+    if sec.axis == "strong" and d["h"] > d["b"] and sec.j and sec.ry:
+        ja = math.sqrt(sec.j * sec.area)
+        lp = 0.13 * e * sec.ry * ja / mp
+        lr = 2 * e * sec.ry * ja / (0.7 * fy * s)
+        ltb = ("F7", (mp, s, e, fy, sec.ry, ja, lp, lr))
+    return Flexure(cap, OMEGA_B, text, ltb=ltb, warnings=tuple(warnings))
+
+
+def _hss_se(sec, be: float) -> float:
+    """Effective section modulus of a rectangular HSS with the compression flange's flat
+    width reduced to be (thin-wall: the lost strip sits at the flange mid-thickness)."""
+    d = sec.dims
+    t, h = d["t_des"], d["h"]
+    lost = (d["b_flat"] - be) * t
+    y = h / 2 - t / 2  # strip centroid above the centroid
+    a = sec.area - lost
+    ybar = -lost * y / a
+    i = sec.ix + sec.area * ybar**2 - lost * (y - ybar) ** 2
+    c = max(h / 2 - ybar, h / 2 + ybar)
+    return i / c
+
+
+# ------------------------------------------------------------------ shear
+@dataclass(frozen=True)
+class ShearStrength:
+    vn: float  # N
+    omega: float
+    text: str
+    area: float  # the area the stress is shown on (first-yield, lumber)
+    stress: bool = False
+
+
+def _cv2(ratio: float, kv: float, e: float, fy: float) -> float:
+    a = 1.10 * math.sqrt(kv * e / fy)
+    if ratio <= a:
+        return 1.0
+    if ratio <= 1.37 * math.sqrt(kv * e / fy):
+        return a / ratio
+    return 1.51 * kv * e / (ratio**2 * fy)
+
+
+def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> ShearStrength:
+    av = sec.shear_area
+    if basis == "lumber":
+        fv = mat.fv or 0.6 * mat.fy
+        return ShearStrength(fv * av, 1.0, "NDS 3.4: fv = V / Av (= 1.5 V / A for a rectangle) "
+                             "<= Fv' = Fv (adjustment factors 1.0)", av, True)
+    if basis == "first-yield":
+        return ShearStrength(0.6 * mat.fy * av, sf, f"fv = V / Av <= 0.6 Fy / SF = 0.6 Fy / "
+                             f"{sf:g} (average shear on the shear area)", av, True)
+    fy, e = _fy_e(mat, basis, welded)
+    if basis == "aluminum":
+        return ShearStrength(0.6 * fy * av, OMEGA_ADM, "ADM G: Vn = Fsy Av = 0.6 Fty Av, Omega "
+                             "1.65 (shear buckling of thin webs not checked)", av)
+    d, shape, axis = sec.dims, sec.shape, sec.axis
+    if shape in ("i-beam", "channel") and axis == "strong":
+        h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
+        aw = d["d"] * d["tw"]
+        if shape == "i-beam" and h_tw <= 2.24 * math.sqrt(e / fy):
+            return ShearStrength(0.6 * fy * aw, OMEGA_V_ROLLED_I, f"G2-1 web yielding Vn = 0.6 "
+                                 f"Fy Aw, Cv1 = 1.0 (h/tw {h_tw:.3g} <= 2.24 sqrt(E/Fy)), "
+                                 "Omega 1.50", aw)
+        kv = 5.34
+        lim = 1.10 * math.sqrt(kv * e / fy)
+        cv1 = 1.0 if h_tw <= lim else lim / h_tw
+        return ShearStrength(0.6 * fy * aw * cv1, OMEGA_V, f"G2-1 Vn = 0.6 Fy Aw Cv1, Cv1 = "
+                             f"{cv1:.3g} (h/tw {h_tw:.3g}, kv 5.34), Omega 1.67", aw)
+    if shape in ("i-beam", "channel") and axis == "weak":
+        b = d["bf"] / 2 if shape == "i-beam" else d["bf"]
+        cv2 = _cv2(b / d["tf"], 1.2, e, fy)
+        return ShearStrength(0.6 * fy * av * cv2, OMEGA_V, f"G6-1 weak-axis shear of the "
+                             f"flanges Vn = 0.6 Fy bf tf Cv2 (each), Cv2 = {cv2:.3g}", av)
+    if shape == "rect-tube":
+        ht = d["h_flat"] / d["t_des"]
+        cv2 = _cv2(ht, 5.0, e, fy)
+        return ShearStrength(0.6 * fy * av * cv2, OMEGA_V, f"G4-1 HSS webs Vn = 0.6 Fy Aw Cv2, "
+                             f"Aw = 2 h t, Cv2 = {cv2:.3g} (h/t {ht:.3g}, kv 5)", av)
+    if shape in ("round-tube", "pipe"):
+        dt = d["od"] / d["t_des"]
+        fcr = min(0.78 * e / dt**1.5, 0.6 * fy)
+        return ShearStrength(fcr * sec.area / 2, OMEGA_V, f"G5-1 round HSS Vn = Fcr Ag / 2, "
+                             f"Fcr = min(0.78 E/(D/t)^1.5, 0.6 Fy) = {fcr / 6.894757e6:.4g} ksi "
+                             "(the Lv term of G5-2a left out: conservative)", sec.area / 2)
+    if shape in ("tee", "angle"):
+        ratio = d["d"] / (d["tw"] if shape == "tee" else d["t"])
+        cv2 = _cv2(ratio, 1.2, e, fy)
+        return ShearStrength(0.6 * fy * av * cv2, OMEGA_V, f"G3-1 Vn = 0.6 Fy b t Cv2 "
+                             f"(kv 1.2), Cv2 = {cv2:.3g}", av)
+    if shape in ("rect-bar", "round-bar"):
+        return ShearStrength(0.6 * fy * av, OMEGA_V, "Vn = 0.6 Fy on the peak shear stress "
+                             "(Av = 2A/3 rectangle, 3A/4 round; chapter G gives no bar rule: "
+                             "common practice), Omega 1.67", av)
+    return ShearStrength(0.6 * fy * av, OMEGA_V, "Vn = 0.6 Fy Av (shear yielding), Omega 1.67",
+                         av)
+
+
+# ------------------------------------------------------------------ the member's strengths
+@dataclass(frozen=True)
+class Strengths:
+    """Everything about the member's resistance that does not depend on the loads."""
+
+    basis: str
+    flexure: Flexure
+    shear: ShearStrength
+    ltb_segments: tuple  # (start, end, free end?, ltb1 at Cb=1, why)
+    defl_ratio: float | None
+    defl_abs: float | None
+    defl_words: str
+
+
+def strengths(job, sec=None, beam=None) -> Strengths:
+    sec = sec or job.section
+    beam = beam or job.beam()
+    b = basis_of(job)
+    sf = job.criteria.safety_factor
+    fl = flexure(sec, job.material, b, sf, job.welded)
+    sh = shear_strength(sec, job.material, b, sf, job.welded)
+    segs = []
+    for a, bb, free in unbraced_segments(job, beam):
+        l1, why = fl.ltb1(bb - a)
+        segs.append((a, bb, free, l1, why))
+    n, absolute, words = deflection_rule(job)
+    return Strengths(b, fl, sh, tuple(segs), n, absolute, words)
+
+
+def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
+    """AISC 360-16 F1-1 (Rm = 1): Cb = 12.5 Mmax / (2.5 Mmax + 3 MA + 4 MB + 3 MC) <= 3."""
+    den = 2.5 * mmax + 3 * ma + 4 * mb + 3 * mc
+    if den <= 0:
+        return 1.0
+    return min(12.5 * mmax / den, CB_MAX)
+
+
+def deflection_limits(job, sol: Solution, st: Strengths | None = None) -> list[dict]:
+    """Each span and overhang with its largest deflection and its limit."""
+    st = st or strengths(job, beam=sol.beam)
     out = []
     for a, b, kind in segments(sol.beam):
         length = b - a
         judged = 2 * length if kind in ("cantilever", "overhang") else length
-        if c.deflection_abs is not None:
-            limit = c.deflection_abs
-            rule = c.deflection
+        if st.defl_abs is not None:
+            limit, rule = st.defl_abs, st.defl_words
         else:
-            limit = judged / c.deflection_ratio
-            rule = f"{'2 x ' if judged != length else ''}{kind} length / {c.deflection_ratio:g}"
+            limit = judged / st.defl_ratio
+            rule = f"{'2 x ' if judged != length else ''}{kind} length / {st.defl_ratio:g}"
         ex = sol.deflection.extremes(a, b)
-        demand = ex.abs_max
-        out.append({"start": a, "end": b, "kind": kind, "demand": demand, "limit": limit,
+        out.append({"start": a, "end": b, "kind": kind, "demand": ex.abs_max, "limit": limit,
                     "at": ex.abs_max_at, "rule": rule})
     return out
 
 
+def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[Check]:
+    """The three contract checks of one solved load state."""
+    fl, sh = st.flexure, st.shear
+    basis = BASIS_WORDS[st.basis]
+    m = sol.moment
+    worst = None
+    for a, b, free, l1, why in st.ltb_segments:
+        ex = m.extremes(a, b)
+        mmax = ex.abs_max
+        if l1 == math.inf or cb_one or free:
+            cb = 1.0
+        else:
+            q = [abs(float(m(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
+            cb = cb_factor(mmax, *q)
+        if cb * l1 < fl.cap:
+            mn, text = cb * l1, f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
+        else:
+            mn, text = fl.cap, fl.cap_text
+        allow = mn / fl.omega
+        r = mmax / allow if allow > 0 else math.inf
+        if worst is None or r > worst[0]:
+            worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb)
+    r, mmax, allow, at, text, (a, b), cb = worst
+    seg_words = "" if len(st.ltb_segments) == 1 else \
+        f"; unbraced length {a:.4g}-{b:.4g} m governs"
+    if fl.stress_s:
+        s = fl.stress_s
+        bend = Check("bending", mmax / s, allow / s, "Pa", f"{basis}: {text}", at,
+                     detail=seg_words.lstrip("; "))
+    else:
+        bend = Check("bending", mmax, allow, "N*m",
+                     f"{basis}: M <= Mn / Omega_b, Mn by {text}, Omega_b {fl.omega:g}", at,
+                     detail=seg_words.lstrip("; "), extra={"cb": cb})
+    v = sol.shear.extremes()
+    allow_v = sh.vn / sh.omega
+    if sh.stress:
+        shear = Check("shear", v.abs_max / sh.area, allow_v / sh.area, "Pa",
+                      f"{basis}: {sh.text}", v.abs_max_at)
+    else:
+        shear = Check("shear", v.abs_max, allow_v, "N",
+                      f"{basis}: V <= Vn / Omega_v, {sh.text}", v.abs_max_at)
+    spans = deflection_limits(job, sol, st)
+    w = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
+    defl = Check("deflection", w["demand"], w["limit"], "m",
+                 f"largest deflection in each span against {st.defl_words} "
+                 "(cantilevers and overhangs on twice their length)", w["at"],
+                 detail=f"{w['kind']} {w['start']:.4g}-{w['end']:.4g} m ({w['rule']})",
+                 extra={"spans": spans})
+    return [bend, shear, defl]
+
+
+def warnings_for(job, st: Strengths | None = None) -> list[str]:
+    """Words the report must carry about what the checks do not cover."""
+    st = st or strengths(job)
+    out = list(st.flexure.warnings)
+    out.append(f"Checks on the basis of {BASIS_WORDS[st.basis]}.")
+    return out
+
+
 def basic_checks(job, sol: Solution) -> list[Check]:
-    sec, mat, sf = job.section, job.material, job.criteria.safety_factor
-    ex = sol.extremes()
-    m = ex["moment"]
-    # top fibre in compression under sagging moment, bottom under hogging
-    stress_pos = max(m.max, 0.0) / min(sec.sx_top, sec.sx_bot)
-    stress_neg = max(-m.min, 0.0) / min(sec.sx_top, sec.sx_bot)
-    bend_at = m.max_at if stress_pos >= stress_neg else m.min_at
-    fy = mat.fy
-    checks = [Check(
-        "bending", max(stress_pos, stress_neg), fy / sf, "Pa",
-        f"f = |M|max / S against Fy / SF = Fy / {sf:g} (first yield with a safety factor)",
-        bend_at)]
-    v = ex["shear"]
-    checks.append(Check(
-        "shear", v.abs_max / sec.shear_area, 0.6 * fy / sf, "Pa",
-        f"fv = |V|max / Av against 0.6 Fy / SF = 0.6 Fy / {sf:g} (average shear on the shear area)",
-        v.abs_max_at))
-    spans = deflection_limits(job, sol)
-    worst = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
-    checks.append(Check(
-        "deflection", worst["demand"], worst["limit"], "m",
-        f"largest deflection in each span against {job.criteria.deflection} "
-        "(cantilevers and overhangs on twice their length)",
-        worst["at"], detail=f"{worst['kind']} {worst['start']:.4g}-{worst['end']:.4g} m ({worst['rule']})",
-        extra={"spans": spans}))
-    return checks
+    """The checks of one solved state (no patterns, no moving loads)."""
+    return checks_for(job, sol, strengths(job, beam=sol.beam))
 
 
 def run_checks(job, sol: Solution) -> list[Check]:
-    """All checks for the job (the basic set)."""
+    """All checks for the job. Jobs with patterned or moving loads (or an impact allowance)
+    are checked over every load state (see `shopbeam.loading`); `sol` is then only the
+    all-loaded picture."""
+    from shopbeam import loading
+
+    if loading.needs_states(job):
+        return list(loading.evaluate(job, 1.0).checks)
     return basic_checks(job, sol)
 
 
 def governing(checks: list[Check]) -> Check:
     return max(checks, key=lambda c: c.ratio)
+
+
+def check_notes(job) -> list[str]:
+    """What the report must say about the basis, what is not covered, and the allowances."""
+    st = strengths(job)
+    out = [f"Strength basis: {BASIS_WORDS[st.basis]}; deflection limit {st.defl_words}."]
+    out += list(st.flexure.warnings)
+    imp = impact_of(job)
+    if imp:
+        out.append(f"Impact allowance {imp:.0%} on the live loads (common practice for slow "
+                   "powered hoists) is included in the checks.")
+    if job.lifting:
+        out.append("Enter the hoist and trolley weight as its own load (case = \"dead\", or "
+                   "dead = [...] on a [[moving]] wheel set) so it is not rated as payload.")
+    return out
