@@ -57,7 +57,9 @@ def analyze(job: Job) -> Result:
     except UnstableBeam as e:
         raise UnstableBeam(e.args[0], file=job.path or "") from None
     checks = run_checks(job, sol)
-    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol)))
+    from shopbeam.checks import check_notes
+
+    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol) + check_notes(job)))
 
 
 def to_json(result: Result) -> dict:

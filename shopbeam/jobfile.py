@@ -27,12 +27,14 @@ MAX_SUPPORTS = 200
 
 # Known keys per table. Other modules may add their own keys here at import time.
 KNOWN_KEYS: dict[str, set[str]] = {
-    "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria"},
-    "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded"},
+    "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
+         "moving"},
+    "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded",
+             "braces", "braced"},
     "supports": {"at", "type", "stiffness", "label"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned"},
-    "criteria": {"deflection", "safety_factor"},
+    "criteria": {"deflection", "safety_factor", "basis", "impact"},
 }
 
 
@@ -211,6 +213,11 @@ def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | 
     if not isinstance(text, str):
         r.error(f"expected a limit like \"L/240\" or \"0.25 in\", found {text!r}", key)
         return "L/240", 240.0, None
+    from shopbeam.checks import DEFLECTION_PRESETS
+
+    if text.strip().lower() in DEFLECTION_PRESETS:  # named presets such as "rack", "hoist"
+        n = DEFLECTION_PRESETS[text.strip().lower()][0]
+        return text, n, None
     m = re.fullmatch(r"\s*[Ll]\s*/\s*(\d+(?:\.\d+)?)\s*", text)
     if m:
         n = float(m.group(1))
