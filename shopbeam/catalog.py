@@ -36,6 +36,7 @@ IN = 0.0254
 MM = 0.001
 LB_FT = 0.45359237 / 0.3048  # kg/m per lb/ft
 AISC_SOURCE = "AISC Shapes Database v15.0"
+STEEL_DENSITY = 490 * 0.45359237 / 0.3048**3  # 490 lb/ft^3, the basis of the AISC weights
 
 # ----------------------------------------------------------------- designation keys
 _MIXED = re.compile(r"(\d+)\s*[- ]\s*(\d+)\s*/\s*(\d+)")
@@ -196,7 +197,7 @@ def _from_aisc(row) -> Section:
     else:  # pragma: no cover - the data file holds only the types above
         raise ValueError(typ)
     return Section(label, shape, a, ix, s_top, s_bot, zx, iy, sy, zy, rx, ry, j, cw, shear,
-                   depth, axis, dims, src, warnings, mass)
+                   depth, axis, dims, src, warnings, mass, STEEL_DENSITY if mass else None)
 
 
 def _label_nums(label: str) -> list[float]:
@@ -212,6 +213,23 @@ _FB_THICK = ("1/8", "3/16", "1/4", "5/16", "3/8", "1/2", "5/8", "3/4", "1")
 _RB_SIZES = ("1/4", "5/16", "3/8", "1/2", "5/8", "3/4", "7/8", "1", "1-1/8", "1-1/4", "1-3/8",
              "1-1/2", "1-3/4", "2", "2-1/4", "2-1/2", "3", "3-1/2", "4")
 _SQ_SIZES = ("1/4", "3/8", "1/2", "5/8", "3/4", "1", "1-1/4", "1-1/2", "2", "2-1/2", "3")
+
+# Dressed sizes of sawn lumber, inches, by nominal size (NDS Supplement Table 1B, from
+# memory): 2 -> 1-1/2, 3 -> 2-1/2, 4 -> 3-1/2, 6 -> 5-1/2, 8 -> 7-1/4, 10 -> 9-1/4,
+# 12 -> 11-1/4.
+DRESSED = {2: 1.5, 3: 2.5, 4: 3.5, 6: 5.5, 8: 7.25, 10: 9.25, 12: 11.25}
+LUMBER_SIZES = ((2, 2), (2, 3), (2, 4), (2, 6), (2, 8), (2, 10), (2, 12), (4, 4), (4, 6),
+                (4, 8), (4, 10), (4, 12), (6, 6), (6, 8))
+_LUMBER = re.compile(r"^\s*(\d{1,2})\s*[xX\u00d7*]\s*(\d{1,2})\s*(?:lumber|sawn|wood|timber)?\s*$",
+                     re.IGNORECASE)
+
+
+def _lumber(thick: int, wide: int, designation: str) -> Section:
+    """A sawn lumber member on edge: nominal `thick` x `wide`, dressed sizes."""
+    return S.rect_bar(DRESSED[wide] * IN, DRESSED[thick] * IN, designation=designation,
+                      source=f"dressed lumber size {DRESSED[thick]:g} x {DRESSED[wide]:g} in "
+                      "(NDS Supplement Table 1B, from memory), computed from dimensions")
+
 
 # EN 10365 hot-rolled sections, mm, from memory: (h, b, tw, tf, r)
 IPE = {
@@ -303,6 +321,9 @@ def _generated() -> list[tuple[str, str, object]]:
         des = f"RB{s}"
         out.append(("round-bar", des, lambda s=sv, des=des: S.round_bar(
             s * IN, designation=des, source="round bar stock size, computed from dimensions")))
+    for th, wi in LUMBER_SIZES:
+        des = f"{th}x{wi}"
+        out.append(("lumber", des, lambda th=th, wi=wi, des=des: _lumber(th, wi, des)))
     for size, ts in SHS.items():
         for t in ts:
             des = f"SHS{size}x{size}x{_mm(t)}"
@@ -327,8 +348,11 @@ def _generated() -> list[tuple[str, str, object]]:
                 h * MM, b * MM, tf * MM, tw * MM, r=r * MM, designation=des, source=EN10365)))
     for n, (h, b, tw, tf, r) in UPN.items():
         des = f"UPN{n}"
+        # the flange thickness of a UPN is given at half the flange width b/2 from the back
+        # of the web; the calculator wants it at the middle of the projection (b + tw)/2
         out.append(("UPN", des, lambda h=h, b=b, tw=tw, tf=tf, r=r, des=des: S.channel(
-            h * MM, b * MM, tf * MM, tw * MM, r=r * MM, slope=UPN_SLOPE, designation=des,
+            h * MM, b * MM, (tf - UPN_SLOPE * tw / 2) * MM, tw * MM, r=r * MM,
+            slope=UPN_SLOPE, designation=des,
             source=EN10365 + " (8 % flange slope; toe rounding left out)")))
     return out
 
@@ -344,6 +368,7 @@ KIND_INFO = {
     "WT": "AISC WT tees (cut from W)", "MT": "AISC MT tees", "ST": "AISC ST tees",
     "flat-bar": "flat bar, US stock sizes (FBwidth x thickness)",
     "square-bar": "square bar, US stock sizes", "round-bar": "round bar, US stock sizes",
+    "lumber": "sawn lumber on edge, dressed sizes (2x4 = 1-1/2 x 3-1/2 in)",
     "SHS": "EN 10219 square hollow sections", "RHS": "EN 10219 rectangular hollow sections",
     "CHS": "EN 10219 circular hollow sections", "IPE": "EN 10365 IPE beams",
     "HEA": "EN 10365 HEA wide-flange beams", "HEB": "EN 10365 HEB wide-flange beams",
@@ -352,7 +377,7 @@ KIND_INFO = {
 _SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS"), "round-tube": ("HSS-round", "CHS"),
                 "pipe": ("PIPE",), "i-beam": ("W", "M", "S", "HP", "IPE", "HEA", "HEB"),
                 "channel": ("C", "MC", "UPN"), "angle": ("L",), "tee": ("WT", "MT", "ST"),
-                "rect-bar": ("flat-bar", "square-bar"), "round-bar": ("round-bar",)}
+                "rect-bar": ("flat-bar", "square-bar", "lumber"), "round-bar": ("round-bar",)}
 
 
 class _Entry:
@@ -386,7 +411,8 @@ def _index() -> tuple[dict[str, _Entry], dict[str, list[_Entry]]]:
             if k:
                 by_key.setdefault(k, e)
     for kind, des, builder in _generated():
-        e = _Entry(kind, des, canon(des), builder=builder)
+        key = canon(des) if kind != "lumber" else "LUMBER|" + des.replace("x", "|")
+        e = _Entry(kind, des, key, builder=builder)
         by_kind[kind].append(e)
         by_key.setdefault(e.key, e)
     return by_key, by_kind
@@ -460,6 +486,13 @@ def lookup(designation: str, key: str = "beam.section", material=None) -> Sectio
     """
     if not isinstance(designation, str) or not designation.strip():
         raise InputError("give a section designation such as \"HSS4x4x1/4\" or \"W8x31\"", key)
+    lm = _LUMBER.match(designation)
+    if lm:
+        th, wi = sorted((int(lm.group(1)), int(lm.group(2))))
+        if th in DRESSED and wi in DRESSED:
+            return _lumber(th, wi, f"{th}x{wi}")
+        raise InputError(f"{designation!r}: nominal lumber sizes are "
+                         f"{', '.join(str(n) for n in DRESSED)} in (e.g. \"2x6\")", key)
     m = _DESCRIBED.match(designation)
     if m and not _PIPE.match(_prep(designation)):
         return _described(m.group("shape"), m.group("dims"), designation, key, material)

@@ -19,6 +19,7 @@ rect-tube          ``depth``, ``width`` (outside), ``wall``; optional ``corner_r
                    material known, 0.93 (the lower, safer figure). ``square-tube``: ``size``.
 round-tube, pipe   ``od``, ``wall``; optional ``design_wall`` as above.
 rect-bar           ``depth``, ``width`` (``flat-bar`` is the same; ``square-bar``: ``size``).
+                   Sawn lumber is a rect-bar too; the catalog knows ``"2x6"`` etc.
 round-bar          ``diameter``.
 angle              ``depth`` (leg in the bending plane), ``width`` (the other leg), ``thickness``;
                    optional ``fillet_radius`` (root), ``leg`` = ``"bottom"`` (default: the
@@ -34,8 +35,8 @@ double-channel     ``channel`` (a catalog designation, e.g. ``"C6x8.2"``), ``arr
                    backs or the toes; default 0).
 cover-plated       ``base`` (a catalog W/S/M/HP or rectangular HSS designation),
                    ``plate_width``, ``plate_thickness``, ``plate`` = ``"top"`` | ``"bottom"``
-                   | ``"both"`` (default ``"bottom"``, as under a hoist-beam flange... or a
-                   plate welded on the tension side of a shelf beam).
+                   | ``"both"`` (default ``"bottom"``: a plate on the tension side of a
+                   beam sagging under its load).
 custom             ``area``, ``ix``, and ``sx`` or ``depth`` (or ``sx_top`` and ``sx_bot``);
                    optional ``shear_area`` (default: area / 2, stated in the report), ``zx``,
                    ``iy``, ``sy``, ``zy``, ``j``, ``cw``, ``weight`` (e.g. ``"12 lb/ft"``).
@@ -109,15 +110,19 @@ class Section:
     source: str
     warnings: tuple[str, ...] = ()
     mass_per_length: float | None = None
+    mass_density: float | None = None  # density a tabulated weight assumes (steel tables)
 
     @property
     def sx(self) -> float:
         return min(self.sx_top, self.sx_bot)
 
     def weight_per_length(self, density: float) -> float:
-        """kg/m: the tabulated or typed-in weight when there is one, else area x density."""
+        """kg/m: the typed-in weight; or the tabulated weight, scaled when the job's material
+        is not the one the table assumes (an AISC shape in aluminium); else area x density."""
         if self.mass_per_length is not None:
-            return self.mass_per_length
+            if self.mass_density is None or abs(density / self.mass_density - 1) < 0.02:
+                return self.mass_per_length
+            return self.mass_per_length * density / self.mass_density
         return self.area * density
 
 
@@ -295,17 +300,20 @@ def axis_props(parts: list[Part]) -> AxisProps:
     def below(y):
         return sum(p.integrals(bot - 1.0, y)[0] for p in parts)
 
-    lo, hi = bot, top
     half = area / 2
-    for _ in range(200):
-        mid = (lo + hi) / 2
-        if below(mid) < half:
-            lo = mid
-        else:
-            hi = mid
-        if hi - lo < 1e-12 * max(top - bot, 1e-9):
-            break
-    pna = (lo + hi) / 2
+    if abs(below(ybar) - half) <= 1e-12 * area:
+        pna = ybar  # symmetric about the axis: the plastic axis is the centroid
+    else:
+        lo, hi = bot, top
+        for _ in range(200):
+            mid = (lo + hi) / 2
+            if below(mid) < half:
+                lo = mid
+            else:
+                hi = mid
+            if hi - lo < 1e-11 * (top - bot):
+                break
+        pna = (lo + hi) / 2
     z = 0.0
     for p in parts:
         a_up, m_up = p.integrals(pna, top + 1.0)
@@ -680,7 +688,7 @@ def double_channel(ch: Section, arrangement: str = "back-to-back", gap: float = 
         iy / (width / 2), 2 * a * off, ch.rx, math.sqrt(iy / (2 * a)), j, None,
         2 * ch.shear_area, ch.depth, "strong", dims,
         f"{ch.source}; pair by parallel axes ({arrangement}, gap {_in(gap, 3)} in)",
-        (), mass)
+        (), mass, ch.mass_density if mass else None)
 
 
 def cover_plated(base: Section, plate_b: float, plate_t: float, plate: str = "bottom",

@@ -253,3 +253,87 @@ def test_cli_section_w8x31_report():
         assert text in p.stdout
     bad = _cli("section", "W8x32")
     assert bad.returncode == 2 and "Traceback" not in bad.stderr and "W8X31" in bad.stderr
+
+
+# Metric sections are built from their standard dimensions (EN 10365 for IPE/HEA/HEB/UPN,
+# EN 10219-2 for SHS/CHS; dimensions from memory). Checked against the tabulated properties
+# of the same standards' tables, also from memory: A cm^2, Iy cm^4, Wel cm^3, Wpl cm^3,
+# Iz cm^4 (None: not recalled).
+EN_FROM_MEMORY = {
+    "IPE100": (10.3, 171, 34.2, 39.4, 15.9), "IPE200": (28.5, 1943, 194, 221, 142),
+    "IPE300": (53.8, 8356, 557, 628, 604), "HEA200": (53.8, 3692, 389, 430, 1336),
+    "HEA300": (112.5, 18260, 1260, 1383, 6310), "HEB200": (78.1, 5696, 570, 643, 2003),
+    "HEB300": (149, 25170, 1678, 1869, 8563), "SHS100x100x5": (18.4, 271, 54.2, 64.6, 271),
+    "SHS50x50x3": (5.41, 19.5, 7.79, None, 19.5), "CHS60.3x3.2": (5.74, 23.5, None, None, 23.5),
+    "CHS114.3x5": (17.2, 257, None, None, 257),
+}
+
+
+@pytest.mark.parametrize("des", sorted(EN_FROM_MEMORY))
+def test_metric_sections_against_recalled_tables(des):
+    a, i, wel, wpl, iz = EN_FROM_MEMORY[des]
+    s = catalog.lookup(des)
+    tol = 0.006  # the tables' own rounding (3-4 figures) and radii
+    assert s.area * 1e4 == pytest.approx(a, rel=tol)
+    assert s.ix * 1e8 == pytest.approx(i, rel=tol)
+    assert s.iy * 1e8 == pytest.approx(iz, rel=tol)
+    if wel:
+        assert s.sx * 1e6 == pytest.approx(wel, rel=tol)
+    if wpl:
+        assert s.zx * 1e6 == pytest.approx(wpl, rel=tol)
+    assert "from memory" in s.source
+
+
+# UPN channels (EN 10365, from memory): A cm^2, Iy cm^4, Wel cm^3, Iz cm^4. The calculator
+# keeps the toes square (rolled toes are rounded), so it runs up to 1.5 % high on A and Iy and
+# up to 3 % high on Iz.
+@pytest.mark.parametrize("des, vals", [("UPN80", (11.0, 106, 26.5, 19.4)),
+                                       ("UPN100", (13.5, 206, 41.2, 29.3)),
+                                       ("UPN200", (32.2, 1910, 191, 148)),
+                                       ("UPN300", (58.8, 8030, 535, 495))])
+def test_upn_against_recalled_tables(des, vals):
+    a, i, wel, iz = vals
+    s = catalog.lookup(des)
+    for got, want, tol in ((s.area * 1e4, a, 0.015), (s.ix * 1e8, i, 0.015),
+                           (s.sx * 1e6, wel, 0.015), (s.iy * 1e8, iz, 0.03)):
+        assert want <= got * 1.001 and got == pytest.approx(want, rel=tol)
+
+
+def test_en10219_corner_radius_rule():
+    # EN 10219-2 (from memory): outside radius 2t up to 6 mm, 2.5t to 10 mm, 3t above
+    assert catalog.en10219_corner_radius(5) == 10
+    assert catalog.en10219_corner_radius(8) == 20
+    assert catalog.en10219_corner_radius(12.5) == 37.5
+    s = catalog.lookup("RHS200x100x10")
+    assert s.dims["r_out"] == pytest.approx(0.025)
+    assert s.dims["t_des"] == s.dims["t_nom"]  # EN hollow sections: nominal wall
+
+
+def test_lumber_dressed_sizes():
+    # dressed sizes of sawn lumber (NDS Supplement Table 1B, from memory)
+    s = catalog.lookup("2x6")
+    assert s.dims["h"] == pytest.approx(5.5 * IN) and s.dims["b"] == pytest.approx(1.5 * IN)
+    assert s.sx == pytest.approx(1.5 * 5.5**2 / 6 * IN**3)  # 7.56 in^3 (NDS Table 1B)
+    assert catalog.lookup("2 x 10").dims["h"] == pytest.approx(9.25 * IN)
+    assert catalog.lookup("4x4").area == pytest.approx(12.25 * IN**2)
+    assert len(catalog.list_sections("lumber")) >= 10
+    with pytest.raises(InputError):
+        catalog.lookup("2x5")
+
+
+def test_bar_stock():
+    fb = catalog.lookup("FB2x1/4")
+    assert fb.area == pytest.approx(0.5 * IN**2) and fb.axis == "strong"
+    flat = S.resolve_section("FB2x1/4", axis="weak")  # laid flat
+    assert flat.ix == pytest.approx(2 * 0.25**3 / 12 * IN**4) and flat.axis == "weak"
+    rb = catalog.lookup("RB1")
+    assert rb.ix == pytest.approx(math.pi / 64 * IN**4)
+    assert catalog.lookup("SQ1").zx == pytest.approx(IN**3 / 4)
+
+
+def test_tabulated_weight_follows_the_material():
+    # AISC weights assume steel at 490 lb/ft^3; an aluminium HSS weighs by its own density
+    s = catalog.lookup("HSS4x4x1/4")
+    assert s.weight_per_length(7849.05) == pytest.approx(12.21 * 0.45359237 / 0.3048)
+    assert s.weight_per_length(2712.6) == pytest.approx(
+        12.21 * 0.45359237 / 0.3048 * 2712.6 / 7849.05, rel=1e-6)
