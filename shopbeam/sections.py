@@ -43,7 +43,8 @@ custom             ``area``, ``ix``, and ``sx`` or ``depth`` (or ``sx_top`` and 
 =================  =============================================================================
 
 Every shape also takes ``axis`` = ``"strong"`` (default) | ``"weak"`` and an optional
-``name``. The ``dims`` mapping of a `Section` holds what the strength checks need, in SI:
+``name``. A catalog section can be oriented with a table too: ``designation`` plus
+``axis``, and ``leg`` (angles), ``toes`` (channels, weak axis) or ``flange`` (tees). The ``dims`` mapping of a `Section` holds what the strength checks need, in SI:
 
 - rect-tube: ``h``, ``b`` (outside, h in the bending plane), ``t_nom``, ``t_des``, ``r_out``,
   ``h_flat``, ``b_flat`` (h - 3 t_des, b - 3 t_des, AISC 360 B4.1b), ``h_t``, ``b_t``.
@@ -55,8 +56,9 @@ Every shape also takes ``axis`` = ``"strong"`` (default) | ``"weak"`` and an opt
   ``bf_2tf``.
 - angle: ``d`` (leg in the bending plane), ``b``, ``t``, ``y`` (heel to centroid along d),
   ``x``, ``b_t``, ``iz``, ``rz`` (minor principal axis), ``tan_alpha``.
-- double-channel: the channel's keys plus ``gap``; cover-plated: the base's keys plus
-  ``plate_b``, ``plate_t``.
+- double-channel: the channel's keys plus ``gap``, ``width`` (overall); cover-plated: the
+  base's keys plus ``plate_b``, ``plate_t``, ``width``. Both also carry
+  ``weak_shear_area`` (used when turned).
 """
 
 from __future__ import annotations
@@ -856,6 +858,8 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
     if not isinstance(spec, Mapping):
         raise InputError(f"section must be a designation such as \"HSS4x4x1/4\" or a table "
                          f"with a shape, not {spec!r}", key)
+    if "designation" in spec and "shape" not in spec:
+        return _catalog_table(spec, key, axis, material)
     raw_shape = spec.get("shape")
     if not isinstance(raw_shape, str) or not raw_shape.strip():
         raise InputError("the section table needs shape = one of " + ", ".join(SHAPES), 
@@ -892,6 +896,44 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
     if name:
         sec = replace(sec, designation=name)
     return _orient(sec, ax, spec, key)
+
+
+_ORIENT_KEYS = {"designation", "axis", "leg", "toes", "flange", "name"}
+
+
+def _catalog_table(spec, key, axis, material) -> Section:
+    """``{designation = "L2x2x3/16", leg = "top"}``: a catalog section, oriented."""
+    from shopbeam import catalog
+
+    for k in spec:
+        if k not in _ORIENT_KEYS:
+            raise InputError(f"unknown key {k!r} beside a designation{_suggest(k, _ORIENT_KEYS)};"
+                             f" keys are {', '.join(sorted(_ORIENT_KEYS))} (or give shape = "
+                             "... with dimensions instead)", f"{key}.{k}")
+    sec = catalog.lookup(_text(spec, "designation", key), key=f"{key}.designation",
+                         material=material)
+    if "leg" in spec and sec.shape != "angle":
+        raise InputError("leg applies to angles only", f"{key}.leg")
+    if "toes" in spec and sec.shape != "channel":
+        raise InputError("toes applies to channels only", f"{key}.toes")
+    if "flange" in spec and sec.shape != "tee":
+        raise InputError("flange applies to tees only", f"{key}.flange")
+    ax = _choice(spec, "axis", ("strong", "weak"), "strong", key) if "axis" in spec else (
+        axis or "strong")
+    flip = False
+    if sec.shape == "angle" and ax == "strong":
+        flip = _choice(spec, "leg", ("bottom", "top"), "bottom", key) == "top"
+    if sec.shape == "tee" and ax == "strong":
+        flip = _choice(spec, "flange", ("top", "bottom"), "top", key) == "bottom"
+    if flip:
+        sec = replace(sec, sx_top=sec.sx_bot, sx_bot=sec.sx_top)
+    sec = _orient(sec, ax, spec, key)
+    name = spec.get("name")
+    if name is not None:
+        if not isinstance(name, str):
+            raise InputError("name must be text", f"{key}.name")
+        sec = replace(sec, designation=name)
+    return sec
 
 
 def _orient(sec: Section, ax: str, spec, key) -> Section:

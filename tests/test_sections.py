@@ -310,3 +310,43 @@ def test_polygon_part_matches_rectangle():
     t = S.axis_props(tri)
     assert t.i == pytest.approx(3 * 27 / 36) and t.c_bot == pytest.approx(1.0)
     assert S.product_of_inertia(tri) == pytest.approx(-(9 * 9) / 72)  # -b^2 h^2 / 72
+
+
+def test_catalog_table_orients_angle_channel_tee():
+    # AISC Shapes Database v15.0 L4X3X1/4: Ix 2.75, y 1.22 in (heel to centroid), Sx 0.988;
+    # Iy 1.33, x 0.725, Sy 0.585
+    bottom = resolve_section("L4x3x1/4")
+    top = resolve_section({"designation": "L4x3x1/4", "leg": "top"})
+    assert bottom.sx_top == pytest.approx(0.988 * IN**3, rel=0.003)
+    assert bottom.sx_bot == pytest.approx(2.75 / 1.22 * IN**3, rel=1e-9)
+    assert top.sx_top == bottom.sx_bot and top.sx_bot == bottom.sx_top
+    weak = resolve_section({"designation": "L4x3x1/4", "axis": "weak"})
+    assert weak.ix == pytest.approx(1.33 * IN**4) and weak.depth == pytest.approx(3 * IN)
+    assert weak.sx == pytest.approx(0.585 * IN**3, rel=0.003) and weak.warnings
+    # C6X8.2 weak axis: Iy 0.687, x 0.512, bf 1.92
+    down = resolve_section({"designation": "C6x8.2", "axis": "weak"})
+    up = resolve_section({"designation": "C6x8.2", "axis": "weak", "toes": "up"})
+    assert down.sx_top == pytest.approx(0.687 / 0.512 * IN**3)
+    assert down.sx_bot == pytest.approx(0.687 / (1.92 - 0.512) * IN**3)
+    assert up.sx_top == down.sx_bot
+    assert down.shear_area == pytest.approx(2 * 1.92 * 0.343 * IN**2)
+    # WT4X9 stem up (flange at the bottom): Sx 1.05 in^3 to the stem tip is now on top
+    wt = resolve_section({"designation": "WT4x9", "flange": "bottom"})
+    assert wt.sx_top == pytest.approx(1.05 * IN**3, rel=0.005)
+    with pytest.raises(InputError) as exc:
+        resolve_section({"designation": "W8x31", "leg": "top"})
+    assert exc.value.problem.key == "beam.section.leg"
+    with pytest.raises(InputError) as exc:
+        resolve_section({"designation": "W8x31", "wall": "1 in"})
+    assert exc.value.problem.key == "beam.section.wall"
+
+
+def test_weak_axis_of_every_kind_swaps_the_tabulated_axes():
+    # AISC Shapes Database v15.0: the weak-axis section uses the tabulated Iy, Zy
+    for des in ("W8X31", "HSS6X4X1/4", "C6X8.2", "WT4X9", "S8X18.4", "HSS2X1X1/8"):
+        strong, weak = resolve_section(des), resolve_section(des, axis="weak")
+        assert weak.ix == strong.iy and weak.zx == strong.zy and weak.iy == strong.ix
+        assert weak.axis == "weak"
+        assert weak.depth <= strong.depth  # W8X31 is as wide as it is deep
+    rnd = resolve_section("HSS4.000X0.250", axis="weak")
+    assert rnd.axis == "n/a" and rnd.ix == resolve_section("HSS4.000X0.250").ix
