@@ -1,0 +1,336 @@
+"""Screens over the job screen: help, the library, save as, unsaved changes, save conflicts.
+
+Dialogs return their answer with `dismiss(value)`; the job screen decides what to do.
+"""
+
+from __future__ import annotations
+
+from rich.text import Text
+from textual.app import ComposeResult
+from textual.binding import Binding
+from textual.containers import Horizontal, Vertical, VerticalScroll
+from textual.screen import ModalScreen, Screen
+from textual.widgets import Button, Footer, Input, OptionList, Static
+from textual.widgets.option_list import Option
+
+from shopbeam.tui.widgets import Banner, Choice, Field
+
+KEYS = [
+    ("Anywhere", [
+        ("F1 or ?", "this help"),
+        ("ctrl+n / ctrl+p", "next / previous view"),
+        ("1 to 6", "input views: job, span, loads, section, material, criteria"),
+        ("7 8 9 0 s", "results, plots, calc sheet, rating, sizing"),
+        ("esc", "leave the field (then the view keys above work)"),
+        ("tab / shift+tab", "next / previous field"),
+        ("ctrl+o or l", "library: open, duplicate, new"),
+        ("ctrl+s", "save (a bundled preset is saved as your own copy)"),
+        ("ctrl+d", "save as a new name"),
+        ("ctrl+q", "quit (asks first when there are unsaved changes)"),
+    ]),
+    ("In a field", [
+        ("type", "the value with its unit: 12 ft, 10' 6\", 1-1/2 in, -300 lbf, -25 lbf/ft"),
+        ("enter", "next field"),
+        ("right arrow", "accept the grey completion (section designations)"),
+    ]),
+    ("On a choice  [like] this", [
+        ("left / right / space", "change it"),
+        ("first letter", "jump to that choice"),
+    ]),
+    ("Supports and loads lists", [
+        ("up / down", "pick the one to edit below"),
+        ("a", "add one (or use the + buttons)"),
+        ("x or delete", "remove the picked one"),
+    ]),
+    ("Sizing", [("r", "sweep the chosen kind"), ("enter", "use the picked section")]),
+    ("Library", [
+        ("type", "search titles, tags, names (e.g. rack, lifting)"),
+        ("up / down, enter", "pick, open"),
+        ("ctrl+d", "duplicate the picked job into your library"),
+        ("ctrl+n", "new job"),
+        ("esc", "back to the job"),
+    ]),
+]
+
+
+def help_text() -> str:
+    out = ["shopbeam keys", ""]
+    for group, keys in KEYS:
+        out.append(group)
+        for k, what in keys:
+            out.append(f"  {k:<22} {what}")
+        out.append("")
+    out.append("Signs: forces + up (gravity loads negative), couples + counterclockwise,")
+    out.append("moment + sagging, deflection + up (sag is negative).")
+    return "\n".join(out)
+
+
+class HelpScreen(ModalScreen):
+    BINDINGS = [Binding("escape,q,f1,question_mark", "close", "close")]
+
+    def compose(self) -> ComposeResult:
+        with VerticalScroll(classes="dialog", id="help"):
+            yield Static(help_text(), markup=False)
+            yield Static("esc closes this help.", markup=False)
+        yield Footer()
+
+    def action_close(self) -> None:
+        self.dismiss(None)
+
+
+class ConfirmScreen(ModalScreen[str]):
+    """Unsaved changes: save, discard, or go back. Dismisses "save", "discard" or "cancel"."""
+
+    BINDINGS = [Binding("escape", "answer('cancel')", "keep editing"),
+                Binding("s", "answer('save')", "save"),
+                Binding("d", "answer('discard')", "discard")]
+
+    def __init__(self, what: str, doing: str) -> None:
+        super().__init__()
+        self.what = what
+        self.doing = doing
+
+    def compose(self) -> ComposeResult:
+        with Vertical(classes="dialog", id="confirm"):
+            yield Static(f"{self.what} has unsaved changes.", markup=False)
+            yield Static(f"Save them before you {self.doing}?", markup=False)
+            with Horizontal(classes="buttons"):
+                yield Button("s  Save", id="save", compact=True)
+                yield Button(f"d  Discard and {self.doing}", id="discard", compact=True)
+                yield Button("esc  Keep editing", id="cancel", compact=True)
+        yield Footer()
+
+    def on_button_pressed(self, event: Button.Pressed) -> None:
+        self.dismiss(event.button.id)
+
+    def action_answer(self, answer: str) -> None:
+        self.dismiss(answer)
+
+
+class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
+    """Name and library place for a save as. Dismisses (name, place) or None."""
+
+    BINDINGS = [Binding("escape", "cancel", "cancel")]
+
+    def __init__(self, name: str, places: list[str], note: str = "") -> None:
+        super().__init__()
+        self.default_name = name
+        self.places = places
+        self.note = note
+
+    def compose(self) -> ComposeResult:
+        with Vertical(classes="dialog", id="saveas"):
+            yield Static("Save as", classes="view-title", markup=False)
+            if self.note:
+                yield Static(self.note, markup=False)
+            yield Field("Name", "saveas.name", value=self.default_name,
+                        placeholder="letters, digits, - and _")
+            yield Choice("Library", self.places, key="saveas.place")
+            yield Static("enter saves, esc cancels. The file is NAME.toml in that library.",
+                         markup=False)
+        yield Footer()
+
+    def on_mount(self) -> None:
+        self.query_one(Field).input.focus()
+
+    def on_field_edited(self, event: Field.Edited) -> None:
+        event.stop()
+        from shopbeam import storage
+        from shopbeam.errors import InputError
+
+        try:
+            storage.safe_name(event.value)
+            event.field.show("")
+        except InputError as exc:
+            event.field.show(exc.problem.message, error=True)
+
+    def on_input_submitted(self, event: Input.Submitted) -> None:
+        event.stop()
+        self._submit()
+
+    def _submit(self) -> None:
+        name = self.query_one(Field).value.strip()
+        from shopbeam import storage
+        from shopbeam.errors import InputError
+
+        try:
+            storage.safe_name(name)
+        except InputError as exc:
+            self.query_one(Field).show(exc.problem.message, error=True)
+            return
+        self.dismiss((name, self.query_one(Choice).value))
+
+    def action_cancel(self) -> None:
+        self.dismiss(None)
+
+
+class ConflictScreen(ModalScreen[str]):
+    """A save was refused: show what changed on disk; save as new name, overwrite, or cancel."""
+
+    BINDINGS = [Binding("escape", "answer('cancel')", "cancel"),
+                Binding("n", "answer('new')", "save as new name"),
+                Binding("o", "answer('overwrite')", "overwrite")]
+
+    def __init__(self, conflict) -> None:
+        super().__init__()
+        self.conflict = conflict
+
+    def compose(self) -> ComposeResult:
+        c = self.conflict
+        with Vertical(classes="dialog", id="conflict"):
+            yield Static(f"Not saved: {c.message()}", markup=False)
+            yield Static("What is in the file on disk now, against what you opened:",
+                         markup=False)
+            with VerticalScroll(id="conflict-diff"):
+                yield Static(c.diff or "(no differences to show)", markup=False)
+            with Horizontal(classes="buttons"):
+                yield Button("n  Save as a new name", id="new", compact=True)
+                yield Button("o  Overwrite with mine", id="overwrite", compact=True)
+                yield Button("esc  Cancel", id="cancel", compact=True)
+        yield Footer()
+
+    def on_button_pressed(self, event: Button.Pressed) -> None:
+        self.dismiss(event.button.id)
+
+    def action_answer(self, answer: str) -> None:
+        self.dismiss(answer)
+
+
+class LibraryScreen(Screen[object]):
+    """The three library places with the origin of every job; search, open, duplicate, new.
+
+    Dismisses ("open", path) or ("new", None) or None (back)."""
+
+    BINDINGS = [
+        Binding("escape", "back", "back to the job"),
+        Binding("ctrl+d", "duplicate", "duplicate", priority=True),
+        Binding("ctrl+n", "new", "new job", priority=True),
+        Binding("f1", "app.help", "help"),
+    ]
+
+    def __init__(self, library_dir=None, tags=(), highlight=None) -> None:
+        super().__init__()
+        self.highlight = highlight
+        self.library_dir = library_dir
+        self.tags = tags
+        self.found = []
+
+    def compose(self) -> ComposeResult:
+        yield Banner(id="banner")
+        yield Static("Library: shop (shared) first, then yours, then the bundled presets.",
+                     classes="view-title", markup=False)
+        yield Field("Search", "library.search", placeholder="title, tag or name words")
+        yield OptionList(id="lib-list")
+        yield Static("", id="lib-detail", markup=False)
+        yield Footer()
+
+    def on_mount(self) -> None:
+        self.query_one(Banner).show(self.tags)
+        self.fill("")
+        self.query_one("#lib-list", OptionList).focus()
+
+    def fill(self, search: str) -> None:
+        from shopbeam import library
+
+        lst = self.query_one("#lib-list", OptionList)
+        try:
+            self.found = library.entries(self.library_dir, search=search or None)
+        except Exception as exc:  # noqa: BLE001
+            self.found = []
+            self.query_one("#lib-detail", Static).update(Text(f"cannot read the library: {exc}"))
+        lst.clear_options()
+        opts = []
+        for e in self.found:
+            tags = f" [{', '.join(e.tags)}]" if e.tags else ""
+            shadow = f" (hidden by the {e.shadowed_by} copy)" if e.shadowed_by else ""
+            bad = " (PROBLEM)" if e.problem else ""
+            line = f"{e.origin:<8} {e.name:<24} {e.title}{tags}{shadow}{bad}"
+            width = max(40, (self.size.width or 80) - 4)
+            if len(line) > width:
+                line = line[: width - 3] + "..."
+            opts.append(Option(Text(line, no_wrap=True)))
+        lst.add_options(opts)
+        places = ", ".join(f"{p.origin}" for p in library.places(self.library_dir))
+        n = len(self.found)
+        if not self.found:
+            self.query_one("#lib-detail", Static).update(Text(
+                f"No job matches. Places searched: {places}."))
+        else:
+            lst.highlighted = 0
+            if self.highlight is not None:
+                from pathlib import Path
+
+                for i, e in enumerate(self.found):
+                    if Path(e.path).resolve() == Path(self.highlight).resolve():
+                        lst.highlighted = i
+                        break
+            self.query_one("#lib-list", OptionList).border_subtitle = f"{n} jobs"
+
+    def on_field_edited(self, event: Field.Edited) -> None:
+        event.stop()
+        self.fill(event.value)
+
+    def on_input_submitted(self, event: Input.Submitted) -> None:
+        event.stop()
+        self.query_one("#lib-list", OptionList).focus()
+
+    def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
+        if 0 <= event.option_index < len(self.found):
+            e = self.found[event.option_index]
+            lines = [f"{e.label}: {e.title}"]
+            if e.notes:
+                lines.append(e.notes[:200])
+            if e.read_only:
+                lines.append("bundled preset: read-only; saving it makes your own copy.")
+            if e.shadowed_by:
+                lines.append(f"A {e.shadowed_by} job of the same name comes first.")
+            if e.problem:
+                lines.append(f"problem: {e.problem}")
+            self.query_one("#lib-detail", Static).update(Text("\n".join(lines)))
+
+    def on_option_list_option_selected(self, event: OptionList.OptionSelected) -> None:
+        event.stop()
+        if 0 <= event.option_index < len(self.found):
+            e = self.found[event.option_index]
+            if e.problem:
+                self.notify(f"{e.label} cannot be opened: {e.problem}", severity="error")
+                return
+            self.dismiss(("open", e.path))
+
+    def action_back(self) -> None:
+        self.dismiss(None)
+
+    def action_new(self) -> None:
+        self.dismiss(("new", None))
+
+    def action_duplicate(self) -> None:
+        lst = self.query_one("#lib-list", OptionList)
+        i = lst.highlighted
+        if i is None or not (0 <= i < len(self.found)):
+            return
+        e = self.found[i]
+        from shopbeam import library
+
+        places = [p.origin for p in library.places(self.library_dir) if p.writable]
+        places = ["user"] + [p for p in places if p != "user"]
+
+        def done(answer) -> None:
+            if not answer:
+                return
+            name, to = answer
+            from shopbeam import storage
+            from shopbeam.errors import InputError
+
+            try:
+                library.copy(e.label, to=to, library_dir=self.library_dir, new_name=name)
+            except storage.SaveConflict as exc:
+                self.notify(f"not copied: {exc.message()}", severity="error", timeout=8)
+                return
+            except InputError as exc:
+                self.notify(f"not copied: {exc}", severity="error", timeout=8)
+                return
+            self.notify(f"copied {e.label} to {to}:{name}")
+            self.fill(self.query_one(Field).value)
+
+        self.app.push_screen(SaveAsScreen(f"{e.name}-copy", places,
+                                          note=f"Duplicate {e.label} as:"), done)

@@ -1,0 +1,211 @@
+"""The job being edited in the text UI: a comment-preserving document plus its latest answer.
+
+`Session` holds the `JobDoc` (the file as the user will save it), remembers what was last
+saved so the UI can guard unsaved changes, and `evaluate()`s the document into either a
+solved `Result` or a list of problems, each keyed like the job file (``loads[1].at``) so the
+form can show it beside the field. No textual import here: the tests drive it directly.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from pathlib import Path
+
+from shopbeam.errors import InputError, InputErrors, Problem, UnstableBeam
+
+
+@dataclass
+class Evaluation:
+    """What the current document means: a job and its result, or why not."""
+
+    job: object | None = None  # shopbeam.jobfile.Job
+    result: object | None = None  # shopbeam.analysis.Result
+    problems: list[Problem] = field(default_factory=list)  # errors, then warnings
+    unstable: str = ""
+
+    @property
+    def errors(self) -> list[Problem]:
+        return [p for p in self.problems if not p.warning]
+
+    @property
+    def ok(self) -> bool:
+        return self.result is not None
+
+    def message_for(self, key: str) -> str:
+        """The first error (or warning) for exactly this key, in words."""
+        for warning in (False, True):
+            for p in self.problems:
+                if p.key == key and p.warning == warning:
+                    return ("warning: " if warning else "") + p.message
+        return ""
+
+    def messages_under(self, prefix: str) -> list[Problem]:
+        return [p for p in self.problems if p.key == prefix or p.key.startswith(prefix + ".")
+                or p.key.startswith(prefix + "[")]
+
+
+def evaluate_doc(doc, filename: str = "") -> Evaluation:
+    """Validate and solve a JobDoc. Never raises for anything the user typed."""
+    from shopbeam.jobfile import parse_job_data
+
+    try:
+        text = doc.text()
+        job = parse_job_data(doc.plain(), filename, text)
+    except InputErrors as exc:
+        return Evaluation(problems=list(exc.problems))
+    except InputError as exc:
+        return Evaluation(problems=[exc.problem])
+    except Exception as exc:  # noqa: BLE001 - a half-typed job must never crash the screen
+        return Evaluation(problems=[Problem(f"cannot read the job: {type(exc).__name__}: {exc}")])
+    try:
+        from shopbeam.analysis import analyze
+
+        result = analyze(job)
+    except UnstableBeam as exc:
+        msg = str(exc).removeprefix("unstable beam: ")
+        return Evaluation(job=job, unstable=msg, problems=[
+            Problem(f"the beam is unstable: {msg}", "supports")] + list(job.warnings))
+    except InputError as exc:
+        return Evaluation(job=job, problems=[exc.problem] + list(job.warnings))
+    except Exception as exc:  # noqa: BLE001
+        return Evaluation(job=job, problems=[Problem(
+            f"the solve failed ({type(exc).__name__}: {exc}); this is a bug in shopbeam")])
+    return Evaluation(job=job, result=result, problems=list(job.warnings))
+
+
+class Session:
+    """One open job: its document, where it lives, and whether it has unsaved changes."""
+
+    def __init__(self, doc, path: Path | None = None, origin: str = "", name: str = "",
+                 library_dir=None):
+        self.doc = doc
+        self.path = Path(path) if path is not None else None
+        self.origin = origin  # "shop" | "user" | "bundled" | "" (a file given on the command line)
+        self.name = name or (self.path.stem if self.path else "")
+        self.library_dir = library_dir
+        self.saved_text = doc.text() if self.path is not None else None
+        self.evaluation = Evaluation()
+        self.evaluate()
+
+    # ------------------------------------------------------------------ opening
+    @classmethod
+    def open(cls, path, library_dir=None) -> "Session":
+        """Open a job file (raises InputError when it is not valid TOML)."""
+        from shopbeam import jobdoc, library
+
+        doc = jobdoc.load(path)
+        origin = ""
+        try:
+            p = Path(path).resolve()
+            for pl in library.places(library_dir):
+                try:
+                    p.relative_to(pl.folder.resolve())
+                    origin = pl.origin
+                    break
+                except ValueError:
+                    continue
+        except OSError:
+            pass
+        return cls(doc, Path(path), origin=origin, library_dir=library_dir)
+
+    @classmethod
+    def new(cls, title: str = "New job", library_dir=None) -> "Session":
+        from shopbeam import jobdoc
+
+        return cls(jobdoc.JobDoc.new(title), None, library_dir=library_dir)
+
+    # ------------------------------------------------------------------ state
+    @property
+    def label(self) -> str:
+        """How the job is named on screen (no machine-specific folders)."""
+        if self.origin and self.name:
+            return f"{self.origin}:{self.name}"
+        if self.path is not None:
+            return str(self.path)
+        return "(not saved yet)"
+
+    @property
+    def dirty(self) -> bool:
+        return self.saved_text is None or self.doc.text() != self.saved_text
+
+    @property
+    def read_only(self) -> bool:
+        return self.origin == "bundled"
+
+    def evaluate(self) -> Evaluation:
+        self.evaluation = evaluate_doc(self.doc, str(self.path) if self.path else "")
+        return self.evaluation
+
+    # ------------------------------------------------------------------ edits
+    def set(self, dotted: str, value) -> Evaluation:
+        """Set a key (None removes it) and re-evaluate."""
+        try:
+            self.doc.set_value(dotted, value)
+        except InputError as exc:
+            self.evaluate()
+            self.evaluation.problems.insert(0, exc.problem)
+            return self.evaluation
+        return self.evaluate()
+
+    def set_row(self, table: str, index: int, key: str, value) -> Evaluation:
+        setter = self.doc.set_load if table == "loads" else self.doc.set_support
+        try:
+            setter(index, **{key: value})
+        except InputError as exc:
+            self.evaluate()
+            self.evaluation.problems.insert(0, exc.problem)
+            return self.evaluation
+        return self.evaluate()
+
+    def rows(self, table: str) -> list[dict]:
+        return self.doc.loads() if table == "loads" else self.doc.supports()
+
+    def add_row(self, table: str, **fields) -> int:
+        if table == "loads":
+            i = self.doc.add_load(**fields)
+        else:
+            i = self.doc.add_support(**fields)
+        self.evaluate()
+        return i
+
+    def remove_row(self, table: str, index: int) -> None:
+        if table == "loads":
+            self.doc.remove_load(index)
+        else:
+            self.doc.remove_support(index)
+        self.evaluate()
+
+    # ------------------------------------------------------------------ saving
+    def save(self, *, overwrite: bool = False):
+        """Save where it came from (a bundled preset is saved as a user copy).
+
+        Raises storage.SaveConflict (someone changed the file), InputError (no file yet).
+        """
+        from shopbeam import library
+
+        if self.path is None:
+            raise InputError("this job has no file yet: use Save as")
+        if self.read_only:
+            return self.save_as(self.name, "user", overwrite=overwrite)
+        base = self.doc.opened
+        opened = library.save_job(self.doc.text(), path=self.path, base=base,
+                                  overwrite=overwrite)
+        self._saved(opened, self.origin)
+        return opened.path
+
+    def save_as(self, name: str, to: str = "user", *, overwrite: bool = False):
+        from shopbeam import library
+
+        opened = library.save_job(self.doc.text(), name=name, to=to,
+                                  library_dir=self.library_dir, overwrite=overwrite)
+        self._saved(opened, to)
+        self.name = Path(opened.path).stem
+        return opened.path
+
+    def _saved(self, opened, origin: str) -> None:
+        self.doc.opened = opened
+        self.doc.path = Path(opened.path)
+        self.path = Path(opened.path)
+        self.origin = origin
+        self.name = self.path.stem
+        self.saved_text = opened.text

@@ -1,0 +1,713 @@
+"""The views of the job screen: the six input steps and the result views.
+
+Each view shows the session it is given (`show(session)`) and posts messages about edits;
+the job screen applies them to the document, re-solves, and calls `show` again. Input views
+write exactly what was typed into the document, so a half-typed entry is kept and its
+problem is shown beside the field in words, never lost and never a crash.
+"""
+
+from __future__ import annotations
+
+from rich.text import Text
+from textual.app import ComposeResult
+from textual.binding import Binding
+from textual.containers import Horizontal, Vertical, VerticalScroll
+from textual.message import Message
+from textual.widgets import Button, OptionList, Static
+from textual.widgets.option_list import Option
+
+from shopbeam import units
+from shopbeam.tui import drawing
+from shopbeam.tui.widgets import Choice, Field
+
+
+def _text(s: str) -> Text:
+    return Text(s)
+
+
+class View(VerticalScroll):
+    """Base of every view: a scrolling column that can show a session."""
+
+    title = ""
+
+    def show(self, session) -> None:  # pragma: no cover - overridden
+        pass
+
+    def show_field_messages(self, ev, fields: dict[str, str], session=None) -> None:
+        """Put each field's problem (by job-file key) or how it was read beside it."""
+        for f in self.query(Field):
+            key = fields.get(f.key)
+            if key is None:
+                continue
+            msg = ev.message_for(key)
+            if msg and not msg.startswith("warning: "):
+                f.show(msg, error=True)
+            elif msg:
+                f.show(msg)
+            else:
+                f.show(self.reading(f, ev))
+
+    def reading(self, field: Field, ev) -> str:
+        return ""
+
+
+# Every dimensional field: how to read it back for the "as read" echo.
+def echo(text: str, kind: str, system: str) -> str:
+    try:
+        v = units.parse(text, kind)
+    except Exception:  # noqa: BLE001 - the document check reports the problem itself
+        return ""
+    return "= " + units.fmt(v, kind, system)
+
+
+class JobView(View):
+    title = "Job"
+
+    def compose(self) -> ComposeResult:
+        yield Static("Job: what it is and how it is shown.", classes="view-title")
+        yield Field("Title", "title", placeholder="e.g. Lumber rack arm, bay 3", classes="-wide")
+        yield Field("Notes", "notes", placeholder="free text: where, who, why", classes="-wide")
+        yield Field("Tags", "tags", placeholder="comma separated, e.g. rack, shelf",
+                    classes="-wide")
+        yield Choice("Units", ["us", "si"], key="units")
+        yield Static("Tag a hoist beam, monorail or jib \"lifting\" for the lifting "
+                     "cautions.", classes="hint", markup=False)
+
+    def show(self, session) -> None:
+        doc = session.doc
+        for f in self.query(Field):
+            if f.key == "title":
+                f.set_value(doc.get("title", ""))
+            elif f.key == "notes":
+                f.set_value(doc.get("notes", ""))
+            elif f.key == "tags":
+                tags = doc.get("tags", [])
+                f.set_value(", ".join(tags) if isinstance(tags, list) else str(tags))
+        self.query_one(Choice).set(doc.get("units", "us"))
+        self.show_field_messages(session.evaluation,
+                                 {"title": "title", "notes": "notes", "tags": "tags"})
+
+
+class RowList(OptionList):
+    """The supports or loads of the job, one line each; the highlighted one is edited below."""
+
+    BINDINGS = [
+        Binding("a", "add", "add"),
+        Binding("delete,x", "remove", "remove"),
+    ]
+
+    class Add(Message):
+        pass
+
+    class Remove(Message):
+        pass
+
+    def action_add(self) -> None:
+        self.post_message(self.Add())
+
+    def action_remove(self) -> None:
+        self.post_message(self.Remove())
+
+
+class RowsView(View):
+    """Shared by supports and loads: a list, add/remove buttons, and a form for one row."""
+
+    table = ""  # "supports" | "loads"
+    selected = 0
+
+    class RowAdd(Message):
+        def __init__(self, table: str, kind: str) -> None:
+            super().__init__()
+            self.table = table
+            self.kind = kind
+
+    class RowRemove(Message):
+        def __init__(self, table: str, index: int) -> None:
+            super().__init__()
+            self.table = table
+            self.index = index
+
+    def row_text(self, i: int, row: dict, session) -> str:
+        return str(row)
+
+    def fill_rows(self, session) -> None:
+        rows = session.rows(self.table)
+        lst = self.query_one(RowList)
+        ev = session.evaluation
+        opts = []
+        for i, row in enumerate(rows):
+            bad = [p for p in ev.messages_under(f"{self.table}[{i}]") if not p.warning]
+            mark = "  <- problem" if bad else ""
+            opts.append(Option(_text(f"{i + 1}. {self.row_text(i, row, session)}{mark}")))
+        hl = lst.highlighted
+        lst.clear_options()
+        lst.add_options(opts)
+        if rows:
+            self.selected = min(self.selected, len(rows) - 1)
+            lst.highlighted = self.selected if hl is None or hl != self.selected else hl
+        self.query_one(".row-form").display = bool(rows)
+
+    def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
+        if isinstance(event.option_list, RowList) and event.option_index != self.selected:
+            self.selected = event.option_index
+            self.show_form(self.app_session())
+
+    def on_row_list_remove(self, event: RowList.Remove) -> None:
+        event.stop()
+        self.post_message(self.RowRemove(self.table, self.selected))
+
+    def app_session(self):
+        return self.screen.session
+
+    def show(self, session) -> None:
+        self.fill_rows(session)
+        self.show_form(session)
+
+    def show_form(self, session) -> None:
+        pass
+
+
+def _load_words(row: dict) -> str:
+    kind = row.get("type", "?")
+    lab = f" ({row['label']})" if row.get("label") else ""
+    case = " [dead]" if row.get("case") == "dead" else ""
+    if kind in ("point", "moment"):
+        return f"{'couple' if kind == 'moment' else 'point'} {row.get('value', '?')} at {row.get('at', '?')}{lab}{case}"
+    v = row.get("value", "?")
+    if isinstance(v, list):
+        v = " to ".join(str(x) for x in v)
+    return f"{kind} {v} from {row.get('start', 'start')} to {row.get('end', 'end')}{lab}{case}"
+
+
+class SpanView(RowsView):
+    title = "Span"
+    table = "supports"
+
+    def compose(self) -> ComposeResult:
+        yield Static("Span and supports: x runs from the left end (0) to the length.",
+                     classes="view-title")
+        yield Field("Length", "beam.length", placeholder="e.g. 12 ft or 10' 6\"")
+        yield Choice("Self-weight", ["included", "left out"], key="beam.self_weight")
+        yield Field("Members", "beam.members", placeholder="1 (identical members sharing)")
+        yield Static("Supports (a add, x remove, up/down pick):", classes="sub-title")
+        yield RowList(id="support-list", classes="rows")
+        with Horizontal(classes="buttons"):
+            yield Button("+ pin", id="add-pin", compact=True)
+            yield Button("+ roller", id="add-roller", compact=True)
+            yield Button("+ fixed", id="add-fixed", compact=True)
+            yield Button("+ spring", id="add-spring", compact=True)
+            yield Button("+ hinge", id="add-hinge", compact=True)
+            yield Button("remove", id="remove-row", compact=True)
+        with Vertical(classes="row-form"):
+            yield Choice("Type", ["fixed", "pin", "roller", "spring", "hinge"], key="support.type")
+            yield Field("At", "support.at", placeholder="e.g. 0 ft")
+            yield Field("Stiffness", "support.stiffness", placeholder="e.g. 2000 lbf/in")
+
+    def row_text(self, i, row, session) -> str:
+        k = f", k = {row['stiffness']}" if row.get("type") == "spring" and "stiffness" in row else ""
+        return f"{row.get('type', '?')} at {row.get('at', '?')}{k}"
+
+    def on_button_pressed(self, event: Button.Pressed) -> None:
+        bid = event.button.id or ""
+        event.stop()
+        if bid.startswith("add-"):
+            self.post_message(self.RowAdd(self.table, bid[4:]))
+        elif bid == "remove-row":
+            self.post_message(self.RowRemove(self.table, self.selected))
+
+    def on_row_list_add(self, event: RowList.Add) -> None:
+        event.stop()
+        self.post_message(self.RowAdd(self.table, "pin"))
+
+    def show(self, session) -> None:
+        doc = session.doc
+        for f in self.query(Field):
+            if f.key == "beam.length":
+                f.set_value(doc.get("beam.length", ""))
+            elif f.key == "beam.members":
+                f.set_value(str(doc.get("beam.members", 1)))
+        sw = doc.get("beam.self_weight", True)
+        self.query_one("Choice", Choice).set("left out" if sw is False else "included")
+        super().show(session)
+        self.show_field_messages(session.evaluation,
+                                 {"beam.length": "beam.length", "beam.members": "beam.members"})
+
+    def show_form(self, session) -> None:
+        rows = session.rows(self.table)
+        if not rows:
+            return
+        i = self.selected
+        row = rows[i]
+        kind = row.get("type", "pin")
+        for c in self.query(Choice):
+            if c.key == "support.type":
+                c.set(kind)
+        for f in self.query(Field):
+            if f.key == "support.at":
+                f.set_value(row.get("at", ""))
+            elif f.key == "support.stiffness":
+                f.set_value(row.get("stiffness", ""))
+                f.display = kind == "spring"
+        self.show_field_messages(session.evaluation, {
+            "support.at": f"supports[{i}].at", "support.stiffness": f"supports[{i}].stiffness"})
+        for f in self.query(Field):
+            if f.key == "support.type":
+                pass
+        tmsg = session.evaluation.message_for(f"supports[{i}].type")
+        if tmsg:
+            self.app.notify(tmsg, severity="error")
+
+    def reading(self, field, ev) -> str:
+        system = ev.job.units if ev.job is not None else "us"
+        kinds = {"beam.length": "length", "support.at": "length", "support.stiffness": "stiffness"}
+        k = kinds.get(field.key)
+        if k and field.value:
+            return echo(field.value, k, system)
+        if field.key == "beam.members" and ev.job is not None and ev.job.members > 1:
+            return f"each member carries 1/{ev.job.members} of the loads"
+        return ""
+
+
+class LoadsView(RowsView):
+    title = "Loads"
+    table = "loads"
+
+    def compose(self) -> ComposeResult:
+        yield Static("Loads: forces + up, so gravity loads are negative (-300 lbf).",
+                     classes="view-title")
+        yield RowList(id="load-list", classes="rows")
+        with Horizontal(classes="buttons"):
+            yield Button("+ point", id="add-point", compact=True)
+            yield Button("+ uniform", id="add-uniform", compact=True)
+            yield Button("+ linear", id="add-linear", compact=True)
+            yield Button("+ couple", id="add-moment", compact=True)
+            yield Button("remove", id="remove-row", compact=True)
+        with Vertical(classes="row-form"):
+            yield Choice("Type", ["point", "uniform", "linear", "moment"], key="load.type")
+            yield Field("At", "load.at", placeholder="e.g. 4 ft")
+            yield Field("Start", "load.start", placeholder="e.g. 0 ft")
+            yield Field("End", "load.end", placeholder="e.g. 12 ft")
+            yield Field("Value", "load.value", placeholder="e.g. -300 lbf")
+            yield Field("Value at end", "load.value2", placeholder="e.g. -60 lbf/ft")
+            yield Field("Label", "load.label", placeholder="what it is")
+            yield Choice("Case", ["live", "dead"], key="load.case")
+
+    def row_text(self, i, row, session) -> str:
+        return _load_words(row)
+
+    def on_button_pressed(self, event: Button.Pressed) -> None:
+        bid = event.button.id or ""
+        event.stop()
+        if bid.startswith("add-"):
+            self.post_message(self.RowAdd(self.table, bid[4:]))
+        elif bid == "remove-row":
+            self.post_message(self.RowRemove(self.table, self.selected))
+
+    def on_row_list_add(self, event: RowList.Add) -> None:
+        event.stop()
+        self.post_message(self.RowAdd(self.table, "point"))
+
+    def show_form(self, session) -> None:
+        rows = session.rows(self.table)
+        if not rows:
+            return
+        i = self.selected
+        row = rows[i]
+        kind = row.get("type", "point")
+        for c in self.query(Choice):
+            if c.key == "load.type":
+                c.set(kind)
+            elif c.key == "load.case":
+                c.set(row.get("case", "live"))
+        v = row.get("value", "")
+        v1, v2 = (v + ["", ""])[:2] if isinstance(v, list) else (v, "")
+        values = {"load.at": row.get("at", ""), "load.start": row.get("start", ""),
+                  "load.end": row.get("end", ""), "load.value": v1, "load.value2": v2,
+                  "load.label": row.get("label", "")}
+        shown = {"load.at": kind in ("point", "moment"),
+                 "load.start": kind in ("uniform", "linear"),
+                 "load.end": kind in ("uniform", "linear"), "load.value2": kind == "linear"}
+        for f in self.query(Field):
+            if f.key in values:
+                f.set_value(values[f.key])
+                f.display = shown.get(f.key, True)
+                if f.key == "load.value":
+                    f.query_one(".field-label").update(
+                        "Value at start" if kind == "linear" else "Value")
+        self.show_field_messages(session.evaluation, {
+            "load.at": f"loads[{i}].at", "load.start": f"loads[{i}].start",
+            "load.end": f"loads[{i}].end",
+            "load.value": f"loads[{i}].value" + ("[0]" if kind == "linear" else ""),
+            "load.value2": f"loads[{i}].value[1]", "load.label": f"loads[{i}].label"})
+        # a problem with the whole value list of a linear load goes beside the first value
+        if kind == "linear":
+            msg = session.evaluation.message_for(f"loads[{i}].value")
+            if msg:
+                for f in self.query(Field):
+                    if f.key == "load.value":
+                        f.show(msg, error=True)
+
+    def reading(self, field, ev) -> str:
+        system = ev.job.units if ev.job is not None else "us"
+        rows = self.app_session().rows("loads")
+        kind = rows[self.selected].get("type") if rows else "point"
+        value_kind = {"point": "force", "moment": "moment"}.get(kind, "line_load")
+        kinds = {"load.at": "length", "load.start": "length", "load.end": "length",
+                 "load.value": value_kind, "load.value2": "line_load"}
+        k = kinds.get(field.key)
+        if k and field.value:
+            got = echo(field.value, k, system)
+            if field.key == "load.value" and got and kind == "point":
+                try:
+                    got += " (down)" if units.parse(field.value, "force") < 0 else " (UP)"
+                except Exception:  # noqa: BLE001
+                    pass
+            return got
+        return ""
+
+
+class SectionView(View):
+    title = "Section"
+
+    class Pick(Message):
+        def __init__(self, designation: str) -> None:
+            super().__init__()
+            self.designation = designation
+
+    MODES = ["catalog", "dimensions", "custom"]
+    SHAPES = ["rect-tube", "square-tube", "round-tube", "pipe", "rect-bar", "flat-bar",
+              "square-bar", "round-bar", "angle", "channel", "i-beam", "tee"]
+    CUSTOM = [("area", "Area", "area", "e.g. 3.37 in^2"),
+              ("ix", "I (bending)", "inertia", "e.g. 7.80 in^4"),
+              ("sx", "S (modulus)", "modulus", "e.g. 3.90 in^3"),
+              ("depth", "Depth", "length", "or S from I and depth"),
+              ("shear_area", "Shear area", "area", "optional")]
+
+    def compose(self) -> ComposeResult:
+        yield Static("Section: by catalog designation, by dimensions, or custom properties.",
+                     classes="view-title")
+        yield Choice("Give it by", self.MODES, key="section.mode")
+        with Vertical(id="sec-catalog"):
+            yield Field("Designation", "section.designation",
+                        placeholder="type: W8x18, HSS4x4x1/4, L3x3x1/4")
+            yield Static("", id="sec-matches-note", markup=False)
+            yield OptionList(id="sec-matches")
+        with Vertical(id="sec-dims"):
+            yield Choice("Shape", self.SHAPES, key="section.shape")
+            for k in sorted({k for ks in self._dim_keys().values() for k in ks}):
+                yield Field(k.replace("_", " ").capitalize(), f"dim.{k}", placeholder="e.g. 4 in")
+        with Vertical(id="sec-custom"):
+            for k, label, _kind, ph in self.CUSTOM:
+                yield Field(label, f"custom.{k}", placeholder=ph)
+        yield Static("", id="sec-props", markup=False)
+
+    @staticmethod
+    def _dim_keys() -> dict[str, tuple[str, ...]]:
+        try:
+            from shopbeam.sections import _KEYS, _REQUIRED  # the shapes' own key lists
+        except ImportError:  # pragma: no cover
+            return {}
+        out = {}
+        for shape in SectionView.SHAPES:
+            req = tuple(_REQUIRED.get(shape, ()))
+            opt = tuple(sorted(k for k in _KEYS.get(shape, ()) if k not in req
+                               and k in ("corner_radius", "fillet_radius")))
+            out[shape] = req + opt
+        return out
+
+    def mode_of(self, session) -> str:
+        sec = session.doc.get("beam.section")
+        if isinstance(sec, dict):
+            return "custom" if str(sec.get("shape", "")).lower() == "custom" else "dimensions"
+        return "catalog"
+
+    def show(self, session) -> None:
+        doc, ev = session.doc, session.evaluation
+        mode = self.mode_of(session)
+        sec = doc.get("beam.section")
+        for c in self.query(Choice):
+            if c.key == "section.mode":
+                c.set(mode)
+            elif c.key == "section.shape" and isinstance(sec, dict):
+                c.set(str(sec.get("shape", "")).lower())
+        self.query_one("#sec-catalog").display = mode == "catalog"
+        self.query_one("#sec-dims").display = mode == "dimensions"
+        self.query_one("#sec-custom").display = mode == "custom"
+        dims = self._dim_keys()
+        shape = str(sec.get("shape", "")).lower() if isinstance(sec, dict) else ""
+        for f in self.query(Field):
+            if f.key == "section.designation":
+                f.set_value(sec if isinstance(sec, str) else "")
+            elif f.key.startswith("dim."):
+                k = f.key[4:]
+                f.display = k in dims.get(shape, ())
+                if isinstance(sec, dict):
+                    f.set_value(str(sec.get(k, "")))
+            elif f.key.startswith("custom.") and isinstance(sec, dict):
+                f.set_value(str(sec.get(f.key[7:], "")))
+        keys = {"section.designation": "beam.section"}
+        for f in self.query(Field):
+            if f.key.startswith("dim.") or f.key.startswith("custom."):
+                keys[f.key] = "beam.section." + f.key.split(".", 1)[1]
+        self.show_field_messages(ev, keys)
+        if mode == "catalog":
+            self.fill_matches(sec if isinstance(sec, str) else "")
+        # the section as shopbeam reads it
+        props = self.query_one("#sec-props", Static)
+        job = ev.job
+        if job is not None and job.section is not None:
+            s, sy = job.section, job.units
+            f = lambda v, k: units.fmt(v, k, sy)  # noqa: E731
+            wt = ""
+            if job.material is not None:
+                wt = f"  weight {f(s.weight_per_length(job.material.density), 'mass_per_length')}"
+            lines = [f"Read as: {s.designation} ({s.shape}, {s.axis} axis)",
+                     f"  A {f(s.area, 'area')}  I {f(s.ix, 'inertia')}  "
+                     f"S {f(min(s.sx_top, s.sx_bot), 'modulus')}",
+                     f"  depth {f(s.depth, 'small_length')}  shear area "
+                     f"{f(s.shear_area, 'area')}{wt}"]
+            lines += [f"  note: {w}" for w in (getattr(s, "warnings", ()) or ())]
+            props.update(_text("\n".join(lines)))
+        else:
+            props.update(_text("Read as: (not readable yet - see the problem above)"))
+
+    def fill_matches(self, text: str) -> None:
+        lst = self.query_one("#sec-matches", OptionList)
+        note = self.query_one("#sec-matches-note", Static)
+        try:
+            from shopbeam import catalog
+        except ImportError:
+            note.update(_text("The catalog is not available yet; give dimensions or custom."))
+            lst.display = False
+            return
+        text = (text or "").strip()
+        if len(text) < 1:
+            note.update(_text("Type part of a designation to see matches."))
+            lst.clear_options()
+            lst.display = False
+            return
+        try:
+            found = catalog.list_sections(None, text)
+        except Exception:  # noqa: BLE001 - a half-typed filter
+            found = []
+        if not found:
+            # the kind prefix alone, e.g. "W8" matches "W8X..."
+            note.update(_text(f"No catalog section matches {text!r}."))
+            lst.clear_options()
+            lst.display = False
+            return
+        shown = found[:60]
+        more = f" (first {len(shown)} of {len(found)})" if len(found) > len(shown) else ""
+        note.update(_text(f"{len(found)} matches{more}: down to pick, enter to use."))
+        lst.display = True
+        lst.clear_options()
+        lst.add_options([Option(_text(
+            f"{s.designation:<18} {units.fmt(s.ix, 'inertia', 'us'):>12} "
+            f"{units.fmt(min(s.sx_top, s.sx_bot), 'modulus', 'us'):>11}"), id=s.designation)
+            for s in shown])
+
+    def on_option_list_option_selected(self, event: OptionList.OptionSelected) -> None:
+        if event.option_list.id == "sec-matches":
+            event.stop()
+            self.post_message(self.Pick(event.option.id))
+
+    def reading(self, field, ev) -> str:
+        system = ev.job.units if ev.job is not None else "us"
+        if field.key.startswith("dim."):
+            return echo(field.value, "length", system) if field.value else ""
+        for k, _label, kind, _ph in self.CUSTOM:
+            if field.key == f"custom.{k}" and field.value:
+                return echo(field.value, kind, system)
+        return ""
+
+
+class MaterialView(View):
+    title = "Material"
+
+    class Pick(Message):
+        def __init__(self, key: str) -> None:
+            super().__init__()
+            self.key = key
+
+    CUSTOM = [("e", "E (modulus)", "stress", "e.g. 29000 ksi"),
+              ("fy", "Fy (yield)", "stress", "e.g. 36 ksi"),
+              ("density", "Density", "density", "e.g. 490 lb/ft^3")]
+
+    def compose(self) -> ComposeResult:
+        yield Static("Material: a built-in grade, or your own values.", classes="view-title")
+        yield Choice("Give it by", ["built-in", "custom"], key="material.mode")
+        with Vertical(id="mat-builtin"):
+            yield OptionList(id="mat-list")
+        with Vertical(id="mat-custom"):
+            for k, label, _kind, ph in self.CUSTOM:
+                yield Field(label, f"mat.{k}", placeholder=ph)
+        yield Static("", id="mat-props", markup=False)
+
+    def on_mount(self) -> None:
+        from shopbeam.materials import list_materials
+
+        lst = self.query_one("#mat-list", OptionList)
+        lst.add_options([Option(_text(f"{m.key:<13} {m.name}"), id=m.key)
+                         for m in list_materials()])
+
+    def show(self, session) -> None:
+        doc, ev = session.doc, session.evaluation
+        mat = doc.get("beam.material")
+        mode = "custom" if isinstance(mat, dict) else "built-in"
+        self.query_one(Choice).set(mode)
+        self.query_one("#mat-builtin").display = mode == "built-in"
+        self.query_one("#mat-custom").display = mode == "custom"
+        if mode == "built-in" and isinstance(mat, str):
+            lst = self.query_one("#mat-list", OptionList)
+            job = ev.job
+            want = job.material.key if job is not None and job.material is not None else mat
+            for i in range(lst.option_count):
+                if lst.get_option_at_index(i).id == want:
+                    if lst.highlighted != i:
+                        lst.highlighted = i
+                    break
+        for f in self.query(Field):
+            if isinstance(mat, dict):
+                f.set_value(str(mat.get(f.key[4:], "")))
+        self.show_field_messages(ev, {f"mat.{k}": f"beam.material.{k}" for k, *_ in self.CUSTOM})
+        props = self.query_one("#mat-props", Static)
+        msg = ev.message_for("beam.material")
+        if ev.job is not None and ev.job.material is not None:
+            m, sy = ev.job.material, ev.job.units
+            lines = [f"In use: {m.key} - {m.name}",
+                     f"  E {units.fmt(m.e, 'stress', sy, 5)}  Fy {units.fmt(m.fy, 'stress', sy)}"
+                     f"  density {units.fmt(m.density, 'density', sy)}"]
+            if m.source:
+                lines.append(f"  values: {m.source}")
+            props.update(_text("\n".join(lines)))
+        else:
+            props.update(_text(f"problem: {msg}" if msg else "In use: (not readable yet)"))
+
+    def on_option_list_option_selected(self, event: OptionList.OptionSelected) -> None:
+        if event.option_list.id == "mat-list":
+            event.stop()
+            self.post_message(self.Pick(event.option.id))
+
+    def reading(self, field, ev) -> str:
+        system = ev.job.units if ev.job is not None else "us"
+        for k, _label, kind, _ph in self.CUSTOM:
+            if field.key == f"mat.{k}" and field.value:
+                return echo(field.value, kind, system)
+        return ""
+
+
+class CriteriaView(View):
+    title = "Criteria"
+
+    def compose(self) -> ComposeResult:
+        yield Static("Criteria: what the member is checked against.", classes="view-title")
+        yield Field("Deflection", "criteria.deflection", placeholder="L/240 or 0.25 in")
+        yield Field("Safety factor", "criteria.safety_factor", placeholder="1.67")
+        yield Static("Deflection \"L/n\" applies per span; a cantilever or overhang is judged "
+                     "on twice its length. The safety factor divides the yield strength "
+                     "in bending and shear.", classes="hint", markup=False)
+
+    def show(self, session) -> None:
+        doc = session.doc
+        for f in self.query(Field):
+            v = doc.get(f.key, "")
+            if f.key == "criteria.safety_factor" and v == "":
+                v = ""
+            f.set_value("" if v is None else str(v))
+        self.show_field_messages(session.evaluation, {
+            "criteria.deflection": "criteria.deflection",
+            "criteria.safety_factor": "criteria.safety_factor"})
+
+    def reading(self, field, ev) -> str:
+        if ev.job is None:
+            return ""
+        c = ev.job.criteria
+        if field.key == "criteria.deflection":
+            if c.deflection_abs is not None:
+                return f"= {units.fmt(c.deflection_abs, 'small_length', ev.job.units)} in every span"
+            if c.deflection_ratio:
+                return f"= span / {c.deflection_ratio:g}"
+        if field.key == "criteria.safety_factor":
+            m = ev.job.material
+            if m is not None:
+                return (f"allowable bending {units.fmt(m.fy / c.safety_factor, 'stress', ev.job.units)}"
+                        f" = Fy / {c.safety_factor:g}")
+        return ""
+
+
+# ---------------------------------------------------------------------- results
+
+def problems_text(ev) -> str:
+    lines = []
+    errs = ev.errors
+    if errs:
+        lines.append(f"The job has {len(errs)} problem{'s' if len(errs) != 1 else ''}; "
+                     "no results until they are fixed:")
+        for p in errs:
+            lines.append(f"  - {p.key + ': ' if p.key else ''}{p.message}")
+    return "\n".join(lines)
+
+
+class ResultsView(View):
+    title = "Results"
+
+    def compose(self) -> ComposeResult:
+        yield Static("", id="res-problems", markup=False)
+        yield Static("", id="res-elevation", markup=False, classes="drawing")
+        yield Static("", id="res-verdict", markup=False, classes="verdict")
+        yield Static("", id="res-checks", markup=False)
+        yield Static("", id="res-reactions", markup=False)
+        yield Static("", id="res-extremes", markup=False)
+        yield Static("", id="res-self", markup=False)
+        yield Static("", id="res-cautions", markup=False)
+
+    def show(self, session) -> None:
+        ev = session.evaluation
+        width = max(40, self.app.size.width - 6)
+        q = lambda i: self.query_one(i, Static)  # noqa: E731
+        q("#res-problems").update(_text(problems_text(ev)))
+        q("#res-problems").display = bool(ev.errors)
+        r = ev.result
+        for i in ("#res-elevation", "#res-verdict", "#res-checks", "#res-reactions",
+                  "#res-extremes", "#res-self"):
+            q(i).display = r is not None
+        if r is not None:
+            q("#res-elevation").update(Text(drawing.elevation(r.job, width), no_wrap=True,
+                                            overflow="crop"))
+            q("#res-verdict").update(_text(drawing.verdict_line(r)))
+            q("#res-verdict").set_class(not r.ok, "-fail")
+            q("#res-checks").update(_text("CHECKS\n" + drawing.checks_table(r)))
+            q("#res-reactions").update(_text(
+                "REACTIONS (what each support does to the beam)\n" + drawing.reactions_table(r)))
+            q("#res-extremes").update(_text("EXTREMES (exact)\n" + drawing.extremes_table(r)))
+            q("#res-self").update(_text("SELF-CHECKS\n" + drawing.selfchecks_text(r)))
+            cautions = list(r.cautions)
+        else:
+            from shopbeam.cautions import cautions_for
+
+            cautions = cautions_for(ev.job.tags if ev.job is not None else ())
+        warns = [p for p in ev.problems if p.warning]
+        extra = ["INPUT WARNINGS"] + [f"  {p.key}: {p.message}" for p in warns] if warns else []
+        q("#res-cautions").update(_text("\n".join(extra + ["CAUTIONS"] + [f"!! {c}" for c in cautions])))
+
+
+class PlotsView(View):
+    title = "Plots"
+
+    def compose(self) -> ComposeResult:
+        yield Static("", id="plot-problems", markup=False)
+        for name in drawing.PLOT_KINDS:
+            yield Static("", id=f"plot-{name}", markup=False, classes="plot")
+
+    def show(self, session) -> None:
+        ev = session.evaluation
+        width = max(40, self.app.size.width - 6)
+        height = 12 if self.app.size.height < 30 else 14
+        self.query_one("#plot-problems", Static).update(_text(problems_text(ev)))
+        self.query_one("#plot-problems", Static).display = ev.result is None
+        for name in drawing.PLOT_KINDS:
+            st = self.query_one(f"#plot-{name}", Static)
+            st.display = ev.result is not None
+            if ev.result is not None:
+                st.update(Text(drawing.plot(ev.result, name, width, height), no_wrap=True,
+                               overflow="crop"))

@@ -1,0 +1,214 @@
+"""Small reusable widgets of the text UI: a labelled field that says what is wrong beside it,
+a one-line choice, the view bar and the safety banner.
+
+Widgets here only show what they are given and post messages about what the user did; the
+job screen owns the state (attributes down, messages up).
+"""
+
+from __future__ import annotations
+
+from rich.text import Text
+from textual.app import ComposeResult
+from textual.binding import Binding
+from textual.containers import Horizontal
+from textual.message import Message
+from textual.reactive import reactive
+from textual.widget import Widget
+from textual.widgets import Input, Label, Static
+
+
+class Field(Horizontal):
+    """Label, one-line input and a message in words beside it (how the entry was read, or
+    what is wrong with it)."""
+
+    DEFAULT_CSS = """
+    Field { height: auto; min-height: 1; margin: 0 0 0 0; }
+    Field > Label.field-label { width: 14; height: 1; }
+    Field > Input { width: 24; height: 1; }
+    Field > Static.field-msg { width: 1fr; height: auto; padding: 0 0 0 1; }
+    Field:focus-within > Label.field-label { text-style: bold reverse; }
+    Field.-wide > Input { width: 1fr; }
+    Field.-wide > Static.field-msg { width: auto; max-width: 40; }
+    """
+
+    class Edited(Message):
+        """The user changed the text of a field."""
+
+        def __init__(self, field: "Field", value: str) -> None:
+            super().__init__()
+            self.field = field
+            self.value = value
+
+        @property
+        def control(self) -> "Field":
+            return self.field
+
+    def __init__(self, label: str, key: str, *, placeholder: str = "", value: str = "",
+                 suggester=None, id: str | None = None, classes: str | None = None) -> None:
+        super().__init__(id=id, classes=classes)
+        self.label = label
+        self.key = key  # what it edits, e.g. "beam.length" or "load.at"
+        self._placeholder = placeholder
+        self._value = value
+        self._suggester = suggester
+
+    def compose(self) -> ComposeResult:
+        yield Label(self.label, classes="field-label")
+        inp = Input(self._value, placeholder=self._placeholder, compact=True,
+                    suggester=self._suggester, select_on_focus=False)
+        inp.cursor_blink = getattr(self.app, "cursor_blink", True)
+        yield inp
+        yield Static("", classes="field-msg", markup=False)
+
+    @property
+    def input(self) -> Input:
+        return self.query_one(Input)
+
+    @property
+    def value(self) -> str:
+        return self.input.value
+
+    def set_value(self, value: str) -> None:
+        """Show a value from the document without it counting as an edit."""
+        value = "" if value is None else str(value)
+        if self.input.value != value:
+            self._quiet = value
+            self.input.value = value
+
+    def show(self, message: str = "", error: bool = False) -> None:
+        msg = self.query_one(".field-msg", Static)
+        if error:
+            msg.update(Text("problem: " + message))
+            self.add_class("-error")
+        else:
+            msg.update(Text(message))
+            self.remove_class("-error")
+
+    def on_input_changed(self, event: Input.Changed) -> None:
+        event.stop()
+        if getattr(self, "_quiet", None) == event.value:
+            self._quiet = None
+            return
+        self._quiet = None
+        self.post_message(self.Edited(self, event.value))
+
+    def on_input_submitted(self, event: Input.Submitted) -> None:
+        event.stop()
+        self.screen.focus_next()
+
+
+class Choice(Widget, can_focus=True):
+    """One of a few words, chosen with left/right (or the first letter); the chosen one is
+    shown in [brackets] so it reads without colour."""
+
+    DEFAULT_CSS = """
+    Choice { height: 1; width: 1fr; }
+    Choice:focus { text-style: bold; }
+    """
+
+    BINDINGS = [
+        Binding("left", "move(-1)", "previous", show=False),
+        Binding("right", "move(1)", "next", show=False),
+        Binding("space", "move(1)", "next", show=False),
+    ]
+
+    value: reactive[str] = reactive("")
+
+    class Changed(Message):
+        def __init__(self, choice: "Choice", value: str) -> None:
+            super().__init__()
+            self.choice = choice
+            self.value = value
+
+        @property
+        def control(self) -> "Choice":
+            return self.choice
+
+    def __init__(self, label: str, options: list[str], value: str | None = None, *,
+                 key: str = "", id: str | None = None, classes: str | None = None) -> None:
+        super().__init__(id=id, classes=classes)
+        self.label = label
+        self.options = list(options)
+        self.key = key
+        self.set_reactive(Choice.value, value if value in self.options else self.options[0])
+
+    def render(self) -> Text:
+        t = Text()
+        focus = self.has_focus
+        t.append(f"{self.label:<14}", style="bold reverse" if focus else "")
+        for opt in self.options:
+            if opt == self.value:
+                t.append(f"[{opt}]", style="bold reverse" if focus else "bold")
+            else:
+                t.append(f" {opt} ")
+            t.append(" ")
+        if focus:
+            t.append("  <- ->", style="dim")
+        return t
+
+    def set(self, value: str) -> None:
+        """Show a value from the document (no Changed message)."""
+        if value in self.options:
+            self.set_reactive(Choice.value, value)
+            self.refresh()
+
+    def action_move(self, step: int) -> None:
+        i = (self.options.index(self.value) + step) % len(self.options)
+        self.value = self.options[i]
+        self.post_message(self.Changed(self, self.value))
+
+    def on_key(self, event) -> None:
+        ch = (event.character or "").lower()
+        if ch and ch.isalpha():
+            for opt in self.options:
+                if opt.lower().startswith(ch) and opt != self.value:
+                    event.stop()
+                    self.value = opt
+                    self.post_message(self.Changed(self, self.value))
+                    return
+
+    def on_focus(self) -> None:
+        self.refresh()
+
+    def on_blur(self) -> None:
+        self.refresh()
+
+
+class ViewBar(Static):
+    """The row of views with their keys; the current one in [brackets]."""
+
+    DEFAULT_CSS = "ViewBar { height: 1; }"
+
+    def __init__(self, views: list[tuple[str, str, str]], **kw) -> None:
+        super().__init__("", markup=False, **kw)
+        self.views = views  # (id, key, short name)
+        self.current = views[0][0]
+        self.compact = False
+
+    def show(self, current: str) -> None:
+        self.current = current
+        t = Text()
+        pad = "" if self.compact else " "
+        for vid, key, name in self.views:
+            if vid == self.current:
+                t.append(f"[{key} {name}]", style="bold reverse")
+            else:
+                t.append(f"{pad}{key} {name}{pad}")
+            t.append(" " if self.compact else "")
+        self.update(t)
+
+
+class Banner(Static):
+    """The safety caution, always on screen; the lifting one is louder."""
+
+    DEFAULT_CSS = "Banner { height: auto; }"
+
+    def show(self, tags) -> None:
+        from shopbeam.cautions import SHORT, SHORT_LIFTING, is_lifting
+
+        if is_lifting(tags):
+            self.add_class("-lifting")
+            self.update(Text("!! " + SHORT_LIFTING + " !!\n!  " + SHORT))
+        else:
+            self.remove_class("-lifting")
+            self.update(Text(SHORT))
