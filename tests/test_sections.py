@@ -350,3 +350,74 @@ def test_weak_axis_of_every_kind_swaps_the_tabulated_axes():
         assert weak.depth == pytest.approx(strong.dims.get("bf", strong.dims.get("b")))
     rnd = resolve_section("HSS4.000X0.250", axis="weak")
     assert rnd.axis == "n/a" and rnd.ix == resolve_section("HSS4.000X0.250").ix
+
+
+# ------------------------------------------------------------- exact forms (common practice)
+from hypothesis import given, settings, strategies as st  # noqa: E402
+
+dims = st.floats(min_value=0.01, max_value=0.5)
+
+
+@settings(max_examples=60, deadline=None)
+@given(dims, dims, st.floats(min_value=0.02, max_value=0.45))
+def test_sharp_cornered_tube_is_box_minus_box(h, b, frac):
+    t = frac * min(h, b)
+    s = S.rect_tube(h, b, t, r_out=0.0)
+    hi, bi = h - 2 * t, b - 2 * t
+    assert s.area == pytest.approx(b * h - bi * hi, rel=1e-9)
+    assert s.ix == pytest.approx((b * h**3 - bi * hi**3) / 12, rel=1e-9)
+    assert s.zx == pytest.approx((b * h**2 - bi * hi**2) / 4, rel=1e-9)
+    assert s.iy == pytest.approx((h * b**3 - hi * bi**3) / 12, rel=1e-9)
+    assert s.sx_top == pytest.approx(s.ix / (h / 2), rel=1e-9)
+
+
+@settings(max_examples=60, deadline=None)
+@given(dims, dims, st.floats(0.02, 0.3), st.floats(0.02, 0.5))
+def test_i_shape_without_fillets_is_three_plates(d, bf, ftf, ftw):
+    tf, tw = ftf * d, ftw * bf
+    s = S.i_shape(d, bf, tf, tw)
+    hw = d - 2 * tf
+    assert s.area == pytest.approx(2 * bf * tf + hw * tw, rel=1e-9)
+    assert s.ix == pytest.approx((bf * d**3 - (bf - tw) * hw**3) / 12, rel=1e-9)
+    assert s.zx == pytest.approx(bf * tf * (d - tf) + tw * hw**2 / 4, rel=1e-9)
+    assert s.iy == pytest.approx((2 * tf * bf**3 + hw * tw**3) / 12, rel=1e-9)
+
+
+@settings(max_examples=60, deadline=None)
+@given(dims, dims, st.floats(0.02, 0.45))
+def test_angle_centroid_and_principal_axes(d, b, frac):
+    t = frac * min(d, b)
+    s = S.angle(d, b, t)
+    a1, a2 = d * t, (b - t) * t
+    y = (a1 * d / 2 + a2 * t / 2) / (a1 + a2)
+    x = (a1 * t / 2 + a2 * (t + (b - t) / 2)) / (a1 + a2)
+    assert s.dims["y"] == pytest.approx(y, rel=1e-9)
+    assert s.dims["x"] == pytest.approx(x, rel=1e-9)
+    # the minor principal moment is below both geometric ones
+    assert s.dims["iz"] <= min(s.ix, s.iy) * (1 + 1e-12)
+    assert s.dims["iz"] > 0
+
+
+@settings(max_examples=40, deadline=None)
+@given(dims, dims, st.floats(0.02, 0.45))
+def test_turning_twice_is_the_same_section(h, b, frac):
+    s = S.rect_tube(h, b, frac * min(h, b))
+    back = S.turn(S.turn(s, "weak"), "weak")
+    for k in ("area", "ix", "sx_top", "sx_bot", "zx", "iy", "shear_area", "depth"):
+        assert getattr(back, k) == pytest.approx(getattr(s, k), rel=1e-12)
+    assert back.dims["h"] == s.dims["h"]
+
+
+def test_metric_table_input():
+    s = resolve_section({"shape": "round-tube", "od": "48.3 mm", "wall": "3.2 mm",
+                         "design_wall": "nominal"})
+    # CHS 48.3 x 3.2: A = pi (D - t) t = 4.534 cm^2 (exact ring formula)
+    assert s.area == pytest.approx(math.pi * (0.0483 - 0.0032) * 0.0032, rel=1e-12)
+    b = resolve_section({"shape": "rect-bar", "depth": "100 mm", "width": "10 mm",
+                         "axis": "weak"})
+    assert b.ix == pytest.approx(0.1 * 0.01**3 / 12) and b.depth == pytest.approx(0.01)
+    sq = resolve_section({"shape": "square-tube", "size": "2 in", "wall": "11 ga",
+                          "design_wall": "0.93"})
+    assert sq.dims["t_des"] == pytest.approx(0.93 * 0.120 * IN)
+    rb = resolve_section({"shape": "round-bar", "diameter": "1-1/4 in"})
+    assert rb.dims["od"] == pytest.approx(1.25 * IN)
