@@ -54,8 +54,8 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
     ok = abs(res_f) <= _tol(fscale) and abs(res_m) <= _tol(mscale)
     out.append(SelfCheck(
         "equilibrium", ok,
-        f"sum of vertical forces {res_f:.3g} N, sum of moments about x = 0 {res_m:.3g} N*m "
-        f"(loads and reactions total {fscale:.4g} N)",
+        f"vertical forces balance to {abs(res_f) / (fscale or 1.0):.1e} and moments about the "
+        f"left end to {abs(res_m) / (mscale or 1.0):.1e} of the loads and reactions",
         {"sum_force": res_f, "sum_moment": res_m, "force_scale": fscale}))
 
     ex = sol.extremes()
@@ -69,28 +69,26 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
     t_scale = max(tmax, f_all * lref**2 / ei)
     m_scale = max(mmax, mscale)
     worst = 0.0
-    notes = []
+    counts = {"no deflection": 0, "no slope": 0, "no moment at a hinge": 0, "R = -k u": 0}
     for s in beam.supports:
         if s.stops_deflection:
-            u = sol.deflection(s.at)
-            worst = max(worst, abs(u) / (u_scale or 1.0))
-            notes.append(f"u({s.at:.4g} m) = {u:.2g}")
+            worst = max(worst, abs(sol.deflection(s.at)) / (u_scale or 1.0))
+            counts["no deflection"] += 1
         if s.kind == "fixed":
-            t = sol.slope(s.at)
-            worst = max(worst, abs(t) / (t_scale or 1.0))
-            notes.append(f"slope({s.at:.4g} m) = {t:.2g}")
+            worst = max(worst, abs(sol.slope(s.at)) / (t_scale or 1.0))
+            counts["no slope"] += 1
         if s.kind == "hinge":
-            m = sol.moment(s.at)
-            worst = max(worst, abs(m) / (m_scale or 1.0))
-            notes.append(f"M({s.at:.4g} m) = {m:.2g}")
+            worst = max(worst, abs(sol.moment(s.at)) / (m_scale or 1.0))
+            counts["no moment at a hinge"] += 1
         if s.kind == "spring":
             r = next(r for r in sol.reactions if r.at == s.at and r.kind == "spring")
             gap = r.force + s.stiffness * sol.deflection(s.at)
             worst = max(worst, abs(gap) / (abs(r.force) or fscale or 1.0))
-            notes.append(f"spring R + k*u = {gap:.2g}")
+            counts["R = -k u"] += 1
+    met = ", ".join(f"{k} ({n})" for k, n in counts.items() if n)
     out.append(SelfCheck(
         "boundary conditions", worst <= REL,
-        ("met at every support and hinge: " + ", ".join(notes)) if notes else "no conditions",
+        f"{met}: met to {worst:.1e} of the answer's size" if met else "no conditions",
         {"worst_relative": worst}))
 
     # jumps: shear by each force (loads and reactions), moment by each couple
@@ -120,12 +118,15 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
             right = fn(x, "right") if x < breaks[-1] else 0.0
             worst_gap = max(worst_gap, abs((right - left) - expect))
             count += 1
+        places = f"{count} place{'s' if count != 1 else ''}"
         if name == "moment jumps":
-            what = f"moment steps down by each counterclockwise couple ({count} places)"
+            what = (f"moment steps down by each counterclockwise couple and end moment ({places})"
+                    if count else "no couples or end moments, so no moment steps")
         else:
-            what = f"shear steps by each point load and reaction ({count} places)"
+            what = f"shear steps by each point load and reaction ({places})"
+        rel = worst_gap / (scale or 1.0)
         out.append(SelfCheck(name, worst_gap <= _tol(scale),
-                             f"{what}; largest mismatch {worst_gap:.2g}",
+                             f"{what}, to within {rel:.1e}" if count else what,
                              {"worst": worst_gap}))
 
     # curvature: u'' = M / EI everywhere, so the shape curves the way the moment says
