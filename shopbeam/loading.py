@@ -471,7 +471,10 @@ def candidate_positions(job, ss: StateSet, static_loads, k: float, cache=None) -
             if p_lo < x - s < p_hi:
                 pb.add(x - s)
     pb = sorted(pb)
-    cands = set(pb)
+    # a wheel on a support or a load edge: the worst shear is the limit as it comes near,
+    # so the positions just either side of every p-break are candidates too
+    nudge = 1e-8 * L
+    cands = set(pb) | {p + d for p in pb for d in (-nudge, nudge)}
     if p_hi - p_lo <= tol:
         return [p_lo]
     static = solve(replace(ss.beam, loads=tuple(static_loads)))
@@ -546,7 +549,7 @@ def candidate_positions(job, ss: StateSet, static_loads, k: float, cache=None) -
     out = sorted(p for p in cands if p_lo - tol <= p <= p_hi + tol)
     dedup = []
     for p in out:
-        if not dedup or p - dedup[-1] > tol:
+        if not dedup or p - dedup[-1] > 1e-10 * L:
             dedup.append(min(max(p, p_lo), p_hi))
     return dedup
 

@@ -1,0 +1,351 @@
+"""Capacity and rating: the largest multiplier k of the live loads with every check passing.
+
+Dead loads and self-weight stay fixed; every live load (patterned and moving ones too, with
+the impact allowance on top) is multiplied by k. Each load state is the superposition
+fixed + k x live of solutions solved once, so a check's demand is exact at any k. When
+nothing is fixed every ratio is proportional to k (Cb does not change when the whole diagram
+scales) and k = 1 / ratio(1) in closed form. Otherwise the governing ratio g(k) is found
+equal to 1 by a bracketed root search (Brent's method, written here): bracket [0, k_hi]
+with g(0) <= 1 < g(k_hi), then converge to working precision, keeping the side that passes.
+Cb changes with the shape of the moment diagram, so g is not linear in k; the bracket makes
+the answer safe anyway.
+
+`cmd_capacity` prints it (or the contract JSON with "factor"); `cmd_rating` prints a plain
+label that fits 40 columns and an A4 or letter page.
+"""
+
+from __future__ import annotations
+
+import datetime as _dt
+import json
+import math
+import textwrap
+from dataclasses import dataclass
+
+from shopbeam import units
+from shopbeam.cautions import banner, cautions_for
+from shopbeam.checks import BASIS_WORDS, Check, basis_of, governing, strengths
+from shopbeam.loading import Evaluation, evaluate, state_set
+
+
+# ------------------------------------------------------------------ root finding
+def brent(f, a: float, b: float, fa: float | None = None, fb: float | None = None,
+          xtol: float = 0.0, rtol: float = 4e-16, maxiter: int = 200) -> tuple[float, float, float, float]:
+    """Zero of f in [a, b] where f(a) and f(b) differ in sign (Brent 1973).
+
+    Returns the final bracket (x1, f1, x2, f2), f1 and f2 of opposite sign (or one of them
+    zero): the caller picks the side it needs.
+    """
+    fa = f(a) if fa is None else fa
+    fb = f(b) if fb is None else fb
+    if fa == 0:
+        return a, fa, a, fa
+    if fb == 0:
+        return b, fb, b, fb
+    if fa * fb > 0:
+        raise ValueError("brent: the interval does not bracket a root")
+    c, fc = a, fa
+    d = e = b - a
+    for _ in range(maxiter):
+        if fb * fc > 0:
+            c, fc = a, fa
+            d = e = b - a
+        if abs(fc) < abs(fb):
+            a, b, c = b, c, b
+            fa, fb, fc = fb, fc, fb
+        tol = 2 * rtol * abs(b) + 0.5 * xtol
+        m = 0.5 * (c - b)
+        if abs(m) <= tol or fb == 0:
+            break
+        if abs(e) >= tol and abs(fa) > abs(fb):
+            s = fb / fa
+            if a == c:
+                p, q = 2 * m * s, 1 - s
+            else:
+                q, r = fa / fc, fb / fc
+                p = s * (2 * m * q * (q - r) - (b - a) * (r - 1))
+                q = (q - 1) * (r - 1) * (s - 1)
+            if p > 0:
+                q = -q
+            p = abs(p)
+            if 2 * p < min(3 * m * q - abs(tol * q), abs(e * q)):
+                e, d = d, p / q
+            else:
+                d = e = m
+        else:
+            d = e = m
+        a, fa = b, fb
+        b += d if abs(d) > tol else math.copysign(tol, m)
+        fb = f(b)
+    return (b, fb, c, fc)
+
+
+# ------------------------------------------------------------------ capacity
+@dataclass(frozen=True)
+class CapacityResult:
+    job: object
+    factor: float  # k; inf when there are no live loads; 0 when the fixed loads fail alone
+    evaluation: Evaluation | None
+    method: str
+    note: str = ""
+
+    @property
+    def checks(self) -> tuple[Check, ...]:
+        return self.evaluation.checks if self.evaluation else ()
+
+    @property
+    def governing(self) -> Check | None:
+        return governing(list(self.checks)) if self.checks else None
+
+
+def _has_live(ss) -> bool:
+    p = ss.parts
+    return bool(p.live or p.patterned or (p.moving and any(p.moving[0].live)))
+
+
+def _fixed_is_zero(ss) -> bool:
+    p = ss.parts
+    dead = [ld for ld in p.fixed if ld.total_force != 0 or ld.kind == "moment" and ld.value]
+    return not dead and not (p.moving and any(p.moving[0].dead))
+
+
+def capacity(job, section=None, ss=None) -> CapacityResult:
+    """The largest live-load multiplier k with every check passing (exact, see module doc)."""
+    ss = ss or state_set(job, section)
+    st = strengths(job, sec=section, beam=ss.beam)
+    cache: dict = {}
+
+    def ev(k):
+        return evaluate(job, k, section, ss, st, cache)
+
+    def g(k):
+        return max(c.ratio for c in ev(k).checks)
+
+    if not _has_live(ss):
+        return CapacityResult(job, math.inf, ev(1.0), "no live loads",
+                              "the job has no live loads to scale: enter the load to rate "
+                              "as a live load")
+    e0 = ev(0.0)
+    g0 = max(c.ratio for c in e0.checks)
+    if g0 > 1:
+        return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
+                              "the member fails under its own weight and the dead loads alone")
+    if _fixed_is_zero(ss):
+        e1 = ev(1.0)
+        g1 = max(c.ratio for c in e1.checks)
+        if g1 <= 0:
+            return CapacityResult(job, math.inf, e1, "no demand",
+                                  "the live loads cause no demand on any check")
+        k = 1.0 / g1
+        e = ev(k)
+        # rounding can leave the ratio a hair above 1: step down to the passing side
+        while max(c.ratio for c in e.checks) > 1.0:
+            k = math.nextafter(k, 0.0)
+            e = ev(k)
+        return CapacityResult(job, k, e, "closed form: every ratio is proportional to k")
+    k_lo, h_lo = 0.0, g0 - 1.0
+    k_hi = 1.0
+    h_hi = g(k_hi) - 1.0
+    n = 0
+    while h_hi <= 0:
+        k_lo, h_lo = k_hi, h_hi
+        k_hi *= 4.0
+        h_hi = g(k_hi) - 1.0
+        n += 1
+        if n > 60:
+            return CapacityResult(job, math.inf, ev(k_lo), "unbounded",
+                                  "no multiplier of the live loads makes a check fail")
+    a, fa, b, fb = brent(lambda k: g(k) - 1.0, k_lo, k_hi, h_lo, h_hi)
+    k = a if fa <= 0 else b
+    e = ev(k)
+    while max(c.ratio for c in e.checks) > 1.0:  # stay on the passing side
+        k = math.nextafter(k, 0.0)
+        e = ev(k)
+    return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1")
+
+
+# ------------------------------------------------------------------ what to post
+def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
+    """(label, value) pairs in the job's units: the load a user would post."""
+    job, k = res.job, res.factor
+    sy = job.units
+    live = [ld for ld in job.loads if ld.case == "live"]
+    from shopbeam.loading import read_moving
+
+    mv = read_moving(job)
+    if not math.isfinite(k):
+        return [("max load", "no live load entered")]
+    out = []
+    if not mv and len(live) == 1 and live[0].kind == "uniform":
+        w = abs(live[0].w1) * k
+        out.append(("max uniform load", _floor_fmt(w, "line_load", sy)))
+        out.append(("over", f"{units.fmt(live[0].start, 'length', sy)} to "
+                             f"{units.fmt(live[0].end, 'length', sy)}"))
+        out.append(("total", _floor_fmt(abs(live[0].total_force) * k, "force", sy)))
+    elif not mv and len(live) == 1 and live[0].kind == "point":
+        out.append(("max point load", _floor_fmt(abs(live[0].value) * k, "force", sy)))
+        out.append(("at", units.fmt(live[0].at, "length", sy)))
+    else:
+        out.append(("max load", f"{k:.3f} x the entered live loads"))
+        tot = sum(abs(ld.total_force) for ld in live)
+        if mv:
+            from shopbeam.units import parse
+
+            wheels = [parse(x, "force") for x in (job.data["moving"][0]["loads"]
+                                                   if isinstance(job.data["moving"][0]["loads"], list)
+                                                   else [job.data["moving"][0]["loads"]])]
+            out.append(("moving", _floor_fmt(sum(abs(w) for w in wheels) * k, "force", sy)
+                        + f" ({mv[0].label})"))
+        if tot:
+            out.append(("static live", _floor_fmt(tot * k, "force", sy) + " total"))
+    if job.members > 1:
+        out.append(("shared by", f"{job.members} identical members"))
+    from shopbeam.checks import impact_of
+
+    if impact_of(job):
+        out.append(("impact", f"{impact_of(job):.0%} allowance included"))
+    return out
+
+
+def _floor_fmt(value: float, kind: str, system: str) -> str:
+    """Format rounded DOWN to 3 significant figures (a posted load must not round up)."""
+    disp = units.to_display(value, kind, system)
+    if disp <= 0:
+        return units.fmt(0.0, kind, system)
+    e = math.floor(math.log10(disp)) - 2
+    down = math.floor(disp / 10**e * (1 + 1e-12)) * 10**e
+    return units.fmt(value * down / disp, kind, system, 3)
+
+
+# ------------------------------------------------------------------ output
+def to_json(res: CapacityResult) -> dict:
+    from shopbeam.analysis import analyze
+    from shopbeam.analysis import to_json as base_json
+
+    out = base_json(analyze(res.job))
+    k = res.factor
+    out["factor"] = float(k) if math.isfinite(k) else None
+    out["checks"] = [c.as_dict() for c in res.checks]
+    out["governing"] = res.governing.name if res.governing else None
+    out["capacity"] = {"method": res.method, "note": res.note,
+                       "basis": BASIS_WORDS[basis_of(res.job)],
+                       "max_load": dict(max_load_lines(res)),
+                       "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
+                       if res.evaluation else {}}
+    return out
+
+
+def render(res: CapacityResult) -> str:
+    job = res.job
+    lines = [f"shopbeam capacity: {job.title}", "=" * 78]
+    lines += textwrap.wrap(banner(job.tags), 78)
+    lines.append("")
+    k = res.factor
+    if math.isfinite(k):
+        lines.append(f"CAPACITY FACTOR k = {k:.6g} on the live loads "
+                     "(dead loads and self-weight fixed)")
+    else:
+        lines.append("CAPACITY FACTOR: unlimited (" + res.note + ")")
+    if res.note and math.isfinite(k):
+        lines.append(f"  {res.note}")
+    lines.append(f"  method: {res.method}")
+    lines.append(f"  basis: {BASIS_WORDS[basis_of(job)]}")
+    for label, value in max_load_lines(res):
+        lines.append(f"  {label:<16} {value}")
+    lines.append("")
+    lines.append("CHECKS AT k")
+    from shopbeam.report import check_value
+
+    for c in res.checks:
+        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, job.units)} vs "
+                     f"{check_value(c.limit, c.unit, job.units)}: ratio {c.ratio:.6f}")
+        for w in textwrap.wrap(c.formula + (f" [{c.detail}]" if c.detail else ""), 72):
+            lines.append("      " + w)
+    if res.governing:
+        lines.append(f"  governing: {res.governing.name}")
+    lines.append("")
+    lines.append("CAUTIONS")
+    for c in cautions_for(job.tags):
+        lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
+    return "\n".join(lines) + "\n"
+
+
+def cmd_capacity(args) -> int:
+    from shopbeam.jobfile import load_job
+
+    job = load_job(args.job)
+    res = capacity(job)
+    if args.json:
+        print(json.dumps(to_json(res), indent=2))
+    else:
+        print(render(res), end="")
+    return 0
+
+
+def rating_label(res: CapacityResult, width: int = 40, date: _dt.date | None = None) -> str:
+    """A plain-text label no wider than `width` columns (30 at least)."""
+    from shopbeam.errors import InputError
+
+    if width < 30 or width > 200:
+        raise InputError("a label is 30 to 200 characters wide", "--width")
+    job = res.job
+    sy = job.units
+    date = date or _dt.date.today()
+    inner = width - 4
+    out = []
+
+    def rule(ch="="):
+        out.append("+" + ch * (width - 2) + "+")
+
+    def row(text=""):
+        for piece in (textwrap.wrap(text, inner) or [""]):
+            out.append("| " + piece.ljust(inner) + " |")
+
+    def pair(label, value):
+        text = f"{label}: {value}"
+        row(text)
+
+    rule()
+    row("LOAD RATING".center(inner))
+    rule("-")
+    row(job.title)
+    row("")
+    pair("Member", f"{job.section.designation}, {job.material.key}")
+    sups = sorted({s.at for s in job.supports if s.kind != "hinge"})
+    pair("Span", units.fmt(job.length, "length", sy) + " (supports at "
+         + ", ".join(units.fmt(x, "length", sy) for x in sups) + ")")
+    rule("-")
+    k = res.factor
+    if math.isfinite(k) and k > 0:
+        for label, value in max_load_lines(res):
+            pair(label.upper() if label.startswith("max") else label, value)
+    elif k == 0:
+        row("DO NOT LOAD: fails under its own weight and dead loads")
+    else:
+        row("No live load entered: nothing to rate")
+    if res.governing:
+        pair("Governing check", res.governing.name)
+    pair("Basis", {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
+                   "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}[basis_of(job)])
+    pair("Date", date.isoformat())
+    rule("-")
+    from shopbeam.cautions import is_lifting
+
+    if is_lifting(job.tags):
+        row("LIFTING DEVICE: rated with impact allowance; proof load test and marking "
+            "by a qualified engineer required before use")
+    else:
+        row("NOT FOR LIFTING")
+    rule("-")
+    for c in cautions_for(job.tags):
+        row(c)
+    rule()
+    return "\n".join(out) + "\n"
+
+
+def cmd_rating(args) -> int:
+    from shopbeam.jobfile import load_job
+
+    job = load_job(args.job)
+    print(rating_label(capacity(job), getattr(args, "width", 40)), end="")
+    return 0
