@@ -84,7 +84,7 @@ _MATERIALS: tuple[Material, ...] = (
     _steel("A36", "ASTM A36 carbon steel (plate, bar, shapes)", 36, 58, "ASTM A36/A36M",
            aliases=("a36", "astm a36")),
     _steel("A572-50", "ASTM A572 Grade 50 HSLA steel", 50, 65, "ASTM A572/A572M Gr 50",
-           aliases=("a572", "a57250", "a572gr50", "a572grade50")),
+           aliases=("a57250", "a572gr50", "a572grade50")),
     _steel("A992", "ASTM A992 structural steel (W shapes)", 50, 65, "ASTM A992/A992M",
            notes=("A992 also limits yield to 65 ksi max and Fy/Fu to 0.85",)),
     _steel("A500-B", "ASTM A500 Grade B structural tube, square/rectangular", 46, 58,
@@ -95,7 +95,7 @@ _MATERIALS: tuple[Material, ...] = (
            aliases=("a500bround", "a500grbround"), wall=0.93),
     _steel("A500-C", "ASTM A500 Grade C structural tube, square/rectangular", 50, 62,
            "ASTM A500/A500M Gr C (shaped)", notes=(_A500_NOTE,),
-           aliases=("a500c", "a500grc", "a500gradec", "a500", "a500crect", "a500cshaped"),
+           aliases=("a500c", "a500grc", "a500gradec", "a500crect", "a500cshaped"),
            wall=0.93),
     _steel("A500-C-round", "ASTM A500 Grade C structural tube, round (pre-2018 editions)", 46,
            62, "ASTM A500/A500M-13 Gr C (round)", notes=(_A500_NOTE,),
@@ -116,28 +116,28 @@ _MATERIALS: tuple[Material, ...] = (
     Material("304", "Type 304 stainless steel (annealed)", "stainless", 193e9, 205 * MPA,
              8000.0, fu=515 * MPA, g=77e9,
              source="Fy 205 MPa (30 ksi), Fu 515 MPa (75 ksi): ASTM A240/A554 annealed "
-             "minimums; E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             "minimums; E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
              notes=("welding does not lower the annealed strength; cold-worked tube may be "
                     "stronger but is not credited",),
              aliases=("ss304", "304ss", "stainless304", "aisi304", "s30400"), hss_wall_factor=1.0),
     Material("304L", "Type 304L stainless steel (annealed)", "stainless", 193e9, 170 * MPA,
              8000.0, fu=485 * MPA, g=77e9,
              source="Fy 170 MPa (25 ksi), Fu 485 MPa (70 ksi): ASTM A240 annealed minimums; "
-             "E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             "E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
              aliases=("ss304l", "304lss", "stainless304l", "s30403"), hss_wall_factor=1.0),
     Material("316", "Type 316 stainless steel (annealed)", "stainless", 193e9, 205 * MPA,
              8000.0, fu=515 * MPA, g=77e9,
              source="Fy 205 MPa (30 ksi), Fu 515 MPa (75 ksi): ASTM A240 annealed minimums; "
-             "E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             "E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
              aliases=("ss316", "316ss", "stainless316", "s31600"), hss_wall_factor=1.0),
     Material("316L", "Type 316L stainless steel (annealed)", "stainless", 193e9, 170 * MPA,
              8000.0, fu=485 * MPA, g=77e9,
              source="Fy 170 MPa (25 ksi), Fu 485 MPa (70 ksi): ASTM A240 annealed minimums; "
-             "E 193 GPa, density 8000 kg/m^3: producer data, from memory",
+             "E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
              aliases=("ss316l", "316lss", "s31603"), hss_wall_factor=1.0),
-    # Aluminium: Aluminum Design Manual 2015, Part A Tables A.3.3/A.3.4 (unwelded minimums,
-    # extrusions) and A.3.5 (welded, heat-affected zone), from memory. E 10,100 ksi
-    # (compression modulus), density 0.098 lb/in^3 (ADM / Aluminum Association, from memory).
+    # Aluminium: Aluminum Design Manual 2015, Part A, minimum mechanical properties of
+    # extrusions, unwelded and welded (heat-affected zone), from memory. E 10,100 ksi
+    # (compression modulus), density 0.098 lb/in^3 (6061) and 0.097 (6063), from memory.
     Material("6061-T6", "Aluminium 6061-T6 extrusion / tube", "aluminum", 10100 * KSI,
              35 * KSI, 0.098 * 1728 * LB_FT3, fu=38 * KSI, g=3800 * KSI,
              fy_welded=15 * KSI, fu_welded=24 * KSI,
@@ -201,16 +201,49 @@ def list_materials() -> list[Material]:
     return list(_MATERIALS)
 
 
+def cmd_materials(args) -> int:
+    """`shopbeam materials [--json]`: the built-in materials with their sources."""
+    import json
+
+    from shopbeam.units import fmt
+
+    mats = list_materials()
+    if getattr(args, "json", False):
+        print(json.dumps([{"key": m.key, "name": m.name, "kind": m.kind, "e": m.e, "fy": m.fy,
+                           "fu": m.fu, "density": m.density, "fy_welded": m.fy_welded,
+                           "fb": m.fb, "fv": m.fv, "source": m.source,
+                           "notes": list(m.notes)} for m in mats], indent=2))
+        return 0
+    system = getattr(args, "units", None) or "us"
+    print(f"{'key':<14}{'E':>14}{'Fy (Fb)':>12}{'welded':>10}{'density':>16}  name")
+    for m in mats:
+        fy = fmt(m.fb if m.kind == "lumber" else m.fy, "stress", system)
+        welded = fmt(m.fy_welded, "stress", system) if m.fy_welded else "-"
+        print(f"{m.key:<14}{fmt(m.e, 'stress', system):>14}{fy:>12}{welded:>10}"
+              f"{fmt(m.density, 'density', system):>16}  {m.name}")
+    print("Sources: each material's source is in `--json`. Specified minimums; use the mill "
+          "certificate where you have one.")
+    return 0
+
+
 def get(key: str) -> Material | None:
     return _index().get(_norm(key))
 
 
 def resolve_material(spec, key: str = "beam.material") -> Material:
-    """A Material from a built-in key (spelling tolerant) or an inline table."""
+    """A Material from a built-in key (spelling tolerant) or an inline table.
+
+    A bare specification with several grades ("A500", "A572") is not guessed: the message
+    names the grades to choose from."""
     if isinstance(spec, str):
         m = get(spec)
         if m is not None:
             return m
+        grades = [x.key for x in _MATERIALS if _norm(x.key).startswith(_norm(spec))
+                  and _norm(spec)]
+        if len(grades) > 1 or (grades and len(_norm(spec)) >= 3):
+            raise InputError(f"{spec!r} names a specification with grades: say which, "
+                             f"{' or '.join(repr(g) for g in grades)}", key)
         import difflib
 
         keys = [x.key for x in _MATERIALS]

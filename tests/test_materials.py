@@ -139,3 +139,25 @@ def test_inline_errors(spec, key, words):
         resolve_material(spec)
     assert exc.value.problem.key == key
     assert words in exc.value.problem.message
+
+
+def test_bare_specification_is_not_guessed():
+    # A500 has grades B and C with different yields: shopbeam asks instead of guessing
+    with pytest.raises(InputError) as exc:
+        resolve_material("A500")
+    assert "'A500-B'" in exc.value.problem.message and "'A500-C'" in exc.value.problem.message
+
+
+def test_cmd_materials_lists_every_material(capsys):
+    import argparse
+    import json
+
+    from shopbeam.materials import cmd_materials
+
+    assert cmd_materials(argparse.Namespace(json=True)) == 0
+    rows = json.loads(capsys.readouterr().out)
+    assert [r["key"] for r in rows] == [m.key for m in list_materials()]
+    assert all(r["source"] for r in rows)
+    assert cmd_materials(argparse.Namespace(json=False, units="si")) == 0
+    out = capsys.readouterr().out
+    assert "248.2 MPa" in out  # A36: 36 ksi = 248.2 MPa
