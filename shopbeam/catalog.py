@@ -506,8 +506,11 @@ def lookup(designation: str, key: str = "beam.section", material=None) -> Sectio
 def _not_found(designation: str, k: str | None) -> str:
     sugg = suggestions(designation)
     hint = f"did you mean {', '.join(sugg)}? " if sugg else ""
-    return (f"unknown section {designation!r}: {hint}"
-            "`shopbeam shapes --kind HSS` lists the catalog, or describe the section "
+    prefix = (k or "").split("|")[0]
+    kind = next((n for n in KIND_INFO if n.upper() == prefix), None) or (
+        "HSS" if prefix == "HSS" else None)
+    listing = f"`shopbeam shapes --kind {kind or 'HSS'}` lists {'them' if kind else 'the catalog'}"
+    return (f"unknown section {designation!r}: {hint}{listing}, or describe the section "
             "(e.g. \"rect-tube 2 x 1 x 14ga\") or give a [beam.section] table")
 
 
@@ -705,7 +708,7 @@ def cmd_section(args) -> int:
         axis = getattr(args, "axis", None) or "strong"
         sec = S.resolve_section(args.designation, key="section", axis=axis)
     except InputError as exc:
-        print(f"shopbeam section: {exc}", file=sys.stderr)
+        print(f"shopbeam section: {exc.problem.message}", file=sys.stderr)
         return 2
     if getattr(args, "json", False):
         print(json.dumps(section_json(sec), indent=2))
@@ -724,7 +727,7 @@ def cmd_shapes(args) -> int:
     try:
         secs = list_sections(getattr(args, "kind", None), getattr(args, "filter", None))
     except InputError as exc:
-        print(f"shopbeam shapes: {exc}", file=sys.stderr)
+        print(f"shopbeam shapes: {exc.problem.message}", file=sys.stderr)
         return 2
     if getattr(args, "json", False):
         print(json.dumps([section_json(s) for s in secs], indent=2))
