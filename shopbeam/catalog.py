@@ -608,8 +608,15 @@ def _described(shape_word: str, dims_text: str, designation: str, key: str,
         if shape == "round-bar":
             return S.round_bar(length(toks[0]), designation=designation.strip())
         h = length(toks[0])
-        b = h if shape == "square-bar" else length(toks[1])
-        return S.rect_bar(h, b, designation=designation.strip())
+        note = ""
+        if shape == "square-bar":
+            b = h
+        elif gauges.gauge_number(toks[1]) is not None:  # strip sheared from sheet
+            b, note = gauges.parse_wall(toks[1], key, "plate")
+        else:
+            b = length(toks[1])
+        return S.rect_bar(h, b, designation=designation.strip(), source=(
+            "computed from dimensions (" + "; ".join(x for x in (unit_note, note) if x) + ")"))
     except ValueError as exc:
         raise InputError(f"{designation!r}: {exc}", key) from None
 

@@ -836,6 +836,14 @@ def _len(spec, name, key, *, positive=True, default=None):
                  nonnegative=not positive)
 
 
+def _sheet(spec, name, key):
+    """A plate or bar thickness: a length, or a gauge read in the Manufacturers' Standard
+    Gauge for sheet steel -> (metres, note)."""
+    from shopbeam import gauges
+
+    return gauges.parse_wall(spec.get(name), f"{key}.{name}", "plate")
+
+
 def _wall(spec, key, shape):
     from shopbeam import gauges
 
@@ -984,9 +992,12 @@ def _build(shape, spec, key, material, mass) -> Section:
     if shape in ("rect-bar", "flat-bar", "square-bar"):
         if shape == "square-bar":
             h = b = L("size")
+            notes = []
         else:
-            h, b = L("depth"), L("width")
-        return rect_bar(h, b, mass=mass)
+            (h, n1), (b, n2) = _sheet(spec, "depth", key), _sheet(spec, "width", key)
+            notes = [n for n in (n1, n2) if n]
+        src = "computed from dimensions" + (f" ({'; '.join(notes)})" if notes else "")
+        return rect_bar(h, b, mass=mass, source=src)
     if shape == "round-bar":
         return round_bar(L("diameter"), mass=mass)
     r = L("fillet_radius", positive=False) or 0.0
@@ -1021,7 +1032,9 @@ def _build(shape, spec, key, material, mass) -> Section:
             raise InputError(f"{spec['base']!r} is a {base.shape}; a cover plate goes on an "
                              "I-shape (W, S, M, HP) or a rectangular HSS", f"{key}.base")
         pl = _choice(spec, "plate", ("top", "bottom", "both"), "bottom", key)
-        return cover_plated(base, L("plate_width"), L("plate_thickness"), pl)
+        tp, note = _sheet(spec, "plate_thickness", key)
+        sec = cover_plated(base, L("plate_width"), tp, pl)
+        return replace(sec, source=sec.source + (f" ({note})" if note else ""))
     if shape == "custom":
         return _custom(spec, key, mass, parse)
     raise InputError(f"unknown shape {shape!r}", f"{key}.shape")

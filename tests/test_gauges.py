@@ -84,3 +84,21 @@ def test_bad_walls(text, words):
         gauges.parse_wall(text, "beam.section.wall", "tube")
     assert words in exc.value.problem.message
     assert exc.value.problem.key == "beam.section.wall"
+
+
+def test_plate_and_strip_gauges_use_the_sheet_table():
+    from shopbeam import catalog
+    from shopbeam.sections import resolve_section
+
+    # Manufacturers' Standard Gauge (from memory): 11 ga = 0.1196 in, 3 ga = 0.2391 in
+    strip = resolve_section({"shape": "flat-bar", "depth": "2 in", "width": "11 ga"})
+    assert strip.dims["b"] == pytest.approx(0.1196 * IN)
+    assert "Manufacturers' Standard Gauge" in strip.source
+    plated = resolve_section({"shape": "cover-plated", "base": "W8x31",
+                              "plate_width": "8 in", "plate_thickness": "3 ga"})
+    assert plated.dims["plate_t"] == pytest.approx(0.2391 * IN)
+    described = catalog.lookup("flat-bar 2 x 11ga")
+    assert described.dims["b"] == pytest.approx(0.1196 * IN)
+    # while tube walls in the same words use the Birmingham gauge: 11 ga = 0.120 in
+    tube = catalog.lookup("rect-tube 2 x 1 x 11ga")
+    assert tube.dims["t_nom"] == pytest.approx(0.120 * IN)
