@@ -28,6 +28,7 @@ from fractions import Fraction
 from functools import lru_cache
 from importlib import resources
 
+from shopbeam import gauges
 from shopbeam import sections as S
 from shopbeam.errors import InputError
 from shopbeam.sections import Section
@@ -214,6 +215,23 @@ _RB_SIZES = ("1/4", "5/16", "3/8", "1/2", "5/8", "3/4", "7/8", "1", "1-1/8", "1-
              "1-1/2", "1-3/4", "2", "2-1/4", "2-1/2", "3", "3-1/2", "4")
 _SQ_SIZES = ("1/4", "3/8", "1/2", "5/8", "3/4", "1", "1-1/4", "1-1/2", "2", "2-1/2", "3")
 
+# ASTM A513 mechanical tube commonly stocked by service centres (common practice), inches
+# and Birmingham gauge walls (16 ga 0.065, 14 ga 0.083, 11 ga 0.120, 7 ga 0.180 in).
+MECH_RECT = {
+    ("1/2", "1/2"): (18, 16), ("3/4", "3/4"): (16, 14), ("1", "1"): (16, 14, 11),
+    ("1-1/4", "1-1/4"): (16, 14, 11), ("1-1/2", "1-1/2"): (16, 14, 11),
+    ("1-3/4", "1-3/4"): (14, 11), ("2", "2"): (16, 14, 11, 7), ("2-1/2", "2-1/2"): (14, 11, 7),
+    ("3", "3"): (14, 11, 7), ("4", "4"): (11, 7), ("1", "1/2"): (16,), ("1-1/2", "1"): (16, 14),
+    ("1-1/2", "3/4"): (16, 14), ("2", "1"): (16, 14, 11), ("3", "1"): (16, 14, 11),
+    ("3", "1-1/2"): (14, 11), ("3", "2"): (14, 11, 7), ("4", "2"): (14, 11, 7),
+    ("4", "3"): (11, 7), ("5", "2"): (11, 7), ("6", "2"): (11, 7), ("6", "4"): (11, 7),
+}
+MECH_ROUND = {
+    "1/2": (18, 16), "5/8": (16, 14), "3/4": (16, 14), "7/8": (16, 14), "1": (16, 14, 11),
+    "1-1/4": (16, 14, 11), "1-1/2": (16, 14, 11), "1-3/4": (16, 14, 11), "2": (16, 14, 11),
+    "2-1/2": (14, 11), "3": (14, 11),
+}
+
 # Dressed sizes of sawn lumber, inches, by nominal size (NDS Supplement Table 1B, from
 # memory): 2 -> 1-1/2, 3 -> 2-1/2, 4 -> 3-1/2, 6 -> 5-1/2, 8 -> 7-1/4, 10 -> 9-1/4,
 # 12 -> 11-1/4.
@@ -321,6 +339,23 @@ def _generated() -> list[tuple[str, str, object]]:
         des = f"RB{s}"
         out.append(("round-bar", des, lambda s=sv, des=des: S.round_bar(
             s * IN, designation=des, source="round bar stock size, computed from dimensions")))
+    mech = ("design wall = nominal (ASTM A513 mechanical tube: the 0.93 factor is for A500 "
+            "only); outside corner radius 2 x wall")
+    for (h, b), gs in MECH_RECT.items():
+        for g in gs:
+            des = f"rect-tube {h} x {b} x {g}ga" if h != b else f"square-tube {h} x {g}ga"
+            out.append(("mech-tube", des, lambda h=h, b=b, g=g, des=des: S.rect_tube(
+                _number(h) * IN, _number(b) * IN, gauges.BWG[g] * IN, designation=des,
+                source=f"mechanical tube stock size, computed from dimensions ({g} ga = "
+                f"{gauges.BWG[g]:g} in, Birmingham wire gauge; {mech})")))
+    for od, gs in MECH_ROUND.items():
+        for g in gs:
+            des = f"round-tube {od} x {g}ga"
+            out.append(("mech-round", des, lambda od=od, g=g, des=des: S.round_tube(
+                _number(od) * IN, gauges.BWG[g] * IN, designation=des,
+                source=f"mechanical tube stock size, computed from dimensions ({g} ga = "
+                f"{gauges.BWG[g]:g} in, Birmingham wire gauge; design wall = nominal, "
+                "ASTM A513)")))
     for th, wi in LUMBER_SIZES:
         des = f"{th}x{wi}"
         out.append(("lumber", des, lambda th=th, wi=wi, des=des: _lumber(th, wi, des)))
@@ -369,12 +404,15 @@ KIND_INFO = {
     "flat-bar": "flat bar, US stock sizes (FBwidth x thickness)",
     "square-bar": "square bar, US stock sizes", "round-bar": "round bar, US stock sizes",
     "lumber": "sawn lumber on edge, dressed sizes (2x4 = 1-1/2 x 3-1/2 in)",
+    "mech-tube": "A513 mechanical square/rectangular tube by gauge (nominal wall)",
+    "mech-round": "A513 mechanical round tube by gauge (nominal wall)",
     "SHS": "EN 10219 square hollow sections", "RHS": "EN 10219 rectangular hollow sections",
     "CHS": "EN 10219 circular hollow sections", "IPE": "EN 10365 IPE beams",
     "HEA": "EN 10365 HEA wide-flange beams", "HEB": "EN 10365 HEB wide-flange beams",
     "UPN": "EN 10365 UPN channels",
 }
-_SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS"), "round-tube": ("HSS-round", "CHS"),
+_SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS", "mech-tube"),
+                "round-tube": ("HSS-round", "CHS", "mech-round"),
                 "pipe": ("PIPE",), "i-beam": ("W", "M", "S", "HP", "IPE", "HEA", "HEB"),
                 "channel": ("C", "MC", "UPN"), "angle": ("L",), "tee": ("WT", "MT", "ST"),
                 "rect-bar": ("flat-bar", "square-bar", "lumber"), "round-bar": ("round-bar",)}
@@ -411,7 +449,14 @@ def _index() -> tuple[dict[str, _Entry], dict[str, list[_Entry]]]:
             if k:
                 by_key.setdefault(k, e)
     for kind, des, builder in _generated():
-        key = canon(des) if kind != "lumber" else "LUMBER|" + des.replace("x", "|")
+        if kind == "lumber":
+            key = "LUMBER|" + des.replace("x", "|")
+        elif kind in ("mech-tube", "mech-round"):
+            head, _, rest = des.partition(" ")
+            key = "|".join([head.upper()] + [f"{_number(v.strip()) or 0:g}" if "ga" not in v
+                                              else v.strip().upper() for v in rest.split(" x ")])
+        else:
+            key = canon(des)
         e = _Entry(kind, des, key, builder=builder)
         by_kind[kind].append(e)
         by_key.setdefault(e.key, e)

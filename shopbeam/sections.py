@@ -402,7 +402,6 @@ def rect_tube(h: float, b: float, t_nom: float, *, t_des: float | None = None,
     r = 2 * t if r_out is None else r_out
     r = min(r, min(h, b) / 2)
     ri = max(r - t, 0.0)
-    parts = rounded_rect(b, h, r) + rounded_rect(b - 2 * t, h - 2 * t, ri, -1.0)
     rm = max(r - t / 2, 0.0)
     ap = (h - t) * (b - t) - (4 - math.pi) * rm * rm
     p = 2 * (h - t) + 2 * (b - t) - (8 - 2 * math.pi) * rm
@@ -412,10 +411,34 @@ def rect_tube(h: float, b: float, t_nom: float, *, t_des: float | None = None,
             "b_flat": b_flat, "h_t": h_flat / t, "b_t": b_flat / t}
     if not designation:
         designation = f"rect-tube {_in(h)} x {_in(b)} x {_in(t_nom, 3)}"
-    return _sec(designation, "rect-tube", parts, axis="strong" if h >= b else "weak",
-                shear_area=2 * h_flat * t, dims=dims, j=j, mass=mass,
-                source=source or "computed from dimensions (outside corner radius "
-                f"{_in(r, 3)} in)")
+    # closed form (fast: the catalog builds hundreds of these); the parts engine gives the
+    # same numbers (tests/test_sections.py compares them)
+    ao, ixo, zxo = _rounded_rect_props(b, h, r)
+    ai, ixi, zxi = _rounded_rect_props(b - 2 * t, h - 2 * t, ri)
+    _, iyo, zyo = _rounded_rect_props(h, b, r)
+    _, iyi, zyi = _rounded_rect_props(h - 2 * t, b - 2 * t, ri)
+    a, ix, zx, iy, zy = ao - ai, ixo - ixi, zxo - zxi, iyo - iyi, zyo - zyi
+    return Section(
+        designation, "rect-tube", a, ix, ix / (h / 2), ix / (h / 2), zx, iy, iy / (b / 2), zy,
+        math.sqrt(ix / a), math.sqrt(iy / a), j, None, 2 * h_flat * t, h,
+        "strong" if h >= b else "weak", dims,
+        source or f"computed from dimensions (outside corner radius {_in(r, 3)} in)", (), mass)
+
+
+def _rounded_rect_props(b: float, h: float, r: float) -> tuple[float, float, float]:
+    """(A, I, Z) about the horizontal centroidal axis of a solid b x h rectangle with corner
+    radius r: the rectangle less four corner squares, plus four quarter discs."""
+    if b <= 0 or h <= 0:
+        return 0.0, 0.0, 0.0
+    r = max(0.0, min(r, b / 2, h / 2))
+    qa = math.pi * r * r / 4
+    e = 4 * r / (3 * math.pi)
+    i_q = (math.pi / 16 - 4 / (9 * math.pi)) * r**4
+    ys, yq = h / 2 - r / 2, h / 2 - r + e  # centroid heights of a corner square, quarter disc
+    a = b * h - (4 - math.pi) * r * r
+    i = b * h**3 / 12 - 4 * ((r**4 / 12 + r * r * ys * ys) - (i_q + qa * yq * yq))
+    z = 2 * (b * h * h / 8 - 2 * (r * r * ys - qa * yq))
+    return a, i, z
 
 
 def round_tube(od: float, t_nom: float, *, t_des: float | None = None, shape: str = "round-tube",

@@ -421,3 +421,16 @@ def test_metric_table_input():
     assert sq.dims["t_des"] == pytest.approx(0.93 * 0.120 * IN)
     rb = resolve_section({"shape": "round-bar", "diameter": "1-1/4 in"})
     assert rb.dims["od"] == pytest.approx(1.25 * IN)
+
+
+@settings(max_examples=60, deadline=None)
+@given(dims, dims, st.floats(0.02, 0.45), st.floats(0.0, 3.0))
+def test_rect_tube_closed_form_equals_parts_engine(h, b, frac, rfac):
+    t = frac * min(h, b)
+    r = rfac * t
+    s = S.rect_tube(h, b, t, r_out=r)
+    r = min(r, min(h, b) / 2)
+    parts = S.rounded_rect(b, h, r) + S.rounded_rect(b - 2 * t, h - 2 * t, max(r - t, 0), -1.0)
+    px, py = S.axis_props(parts), S.axis_props(S.transpose(parts))
+    assert (s.area, s.ix, s.zx) == pytest.approx((px.area, px.i, px.z), rel=1e-9)
+    assert (s.iy, s.zy) == pytest.approx((py.i, py.z), rel=1e-9)
