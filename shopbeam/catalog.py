@@ -415,7 +415,7 @@ _SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS", "mech-tube"),
                 "round-tube": ("HSS-round", "CHS", "mech-round"),
                 "pipe": ("PIPE",), "i-beam": ("W", "M", "S", "HP", "IPE", "HEA", "HEB"),
                 "channel": ("C", "MC", "UPN"), "angle": ("L",), "tee": ("WT", "MT", "ST"),
-                "rect-bar": ("flat-bar", "square-bar", "lumber"), "round-bar": ("round-bar",)}
+                "rect-bar": ("flat-bar", "square-bar"), "round-bar": ("round-bar",)}
 
 
 class _Entry:
@@ -461,6 +461,19 @@ def _index() -> tuple[dict[str, _Entry], dict[str, list[_Entry]]]:
         by_kind[kind].append(e)
         by_key.setdefault(e.key, e)
     return by_key, by_kind
+
+
+def kind_of(sec: Section) -> str:
+    """The catalog kind a section belongs to ("HSS-rect", "W", "lumber", "mech-tube" ...),
+    or its shape for sections made from dimensions: the natural set to size it against."""
+    by_key, by_kind = _index()
+    for kind, entries in by_kind.items():
+        if kind == "HSS":
+            continue
+        for e in entries:
+            if e.designation == sec.designation:
+                return kind
+    return sec.shape
 
 
 def kinds() -> list[str]:

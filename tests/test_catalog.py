@@ -359,3 +359,13 @@ def test_mechanical_tube_kinds_use_the_nominal_wall():
     # the shape kind gathers HSS, EN and mechanical tube
     kinds = {x.source.split(" ")[0] for x in catalog.list_sections("rect-tube")}
     assert {"AISC", "EN", "mechanical"} <= kinds
+
+
+@pytest.mark.parametrize("des, kind", [
+    ("HSS4x4x1/4", "HSS-rect"), ("HSS4.000x0.250", "HSS-round"), ("W8x31", "W"),
+    ("2x6", "lumber"), ("FB3x1/4", "flat-bar"), ("IPE200", "IPE"), ("L4x4x1/4", "L"),
+    ("rect-tube 2 x 1 x 14ga", "mech-tube"), ("rect-tube 2.2 x 1 x 14ga", "rect-tube"),
+])
+def test_kind_of(des, kind):
+    assert catalog.kind_of(catalog.lookup(des)) == kind
+    assert kind in catalog.kinds() or kind in ("rect-tube",)
