@@ -286,6 +286,22 @@ def _line_load(r: _Reader, ld: dict, raw, key: str, width_needed: list) -> float
         return p  # multiplied by the width by the caller
 
 
+# Loads beyond these (SI) are typing slips, not shop loads, and would overflow the checks:
+# 1e9 N is about 100,000 tonnes.
+LOAD_LIMITS = {"point": (1e9, "force"), "moment": (1e10, "moment"),
+               "uniform": (1e9, "line_load"), "linear": (1e9, "line_load")}
+
+
+def _plausible_load(r: _Reader, ld: Load) -> bool:
+    limit, kind = LOAD_LIMITS[ld.kind]
+    size = abs(ld.value) if ld.kind in ("point", "moment") else max(abs(ld.w1), abs(ld.w2))
+    if size <= limit:
+        return True
+    r.error(f"{units.fmt(size, kind)} is far beyond any shop load (the limit is "
+            f"{units.fmt(limit, kind)}): check the number and its unit", f"{ld.key}.value")
+    return False
+
+
 def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None:
     key = f"loads[{i}]"
     where = f"the {_ordinal(i)} load"
@@ -509,7 +525,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         raw_loads = []
     for i, ld in enumerate(raw_loads):
         got = _read_load(r, i, ld, length, conv)
-        if got is not None:
+        if got is not None and _plausible_load(r, got):
             loads.append(got)
     for ld in loads:
         if ld.kind == "moment":

@@ -107,7 +107,7 @@ def _terms(text: str) -> tuple[int, list[tuple[Fraction | float, str]]] | None:
     """Split shop notation into (sign, [(number, unit text), ...]); None if it does not scan."""
     s = _normalise(text)
     sign = 1
-    if s[:1] in "+-":
+    if s and s[0] in "+-":  # (note "" in "+-" is True)
         sign = -1 if s[0] == "-" else 1
         s = s[1:]
     pos, out = 0, []
@@ -162,19 +162,26 @@ def quantity(text: str, key: str = ""):
                          "shopbeam never guesses a unit", key)
     reg = ureg()
     total = None
-    for num, unit in terms:
-        try:
-            u = _unit(unit)
-        except Exception:
-            raise InputError(f"unknown unit {unit!r} in {text!r}", key) from None
-        q = reg.Quantity(float(num), u)
-        if total is None:
-            total = q
-        elif q.dimensionality != total.dimensionality:
-            raise InputError(f"cannot add {unit!r} to {terms[0][1]!r} in {text!r}", key)
-        else:
-            total = total + q.to(total.units)
-    value = sign * total
+    try:
+        for num, unit in terms:
+            try:
+                u = _unit(unit)
+            except Exception:
+                raise InputError(f"unknown unit {unit!r} in {text!r}", key) from None
+            q = reg.Quantity(float(num), u)
+            if total is None:
+                total = q
+            elif q.dimensionality != total.dimensionality:
+                raise InputError(f"cannot add {unit!r} to {terms[0][1]!r} in {text!r}", key)
+            else:
+                total = total + q.to(total.units)
+        value = sign * total
+    except InputError:
+        raise
+    except Exception:  # pint refuses arithmetic on offset units (degC, degF) and the like
+        raise InputError(f"cannot use the unit in {text!r} here: temperatures and other offset "
+                         "units have no place in a beam job (e.g. \"8 ft\", \"-300 lbf\")",
+                         key) from None
     if not math.isfinite(float(value.magnitude)):
         raise InputError(f"{text!r} is not a finite number", key)
     return value

@@ -37,3 +37,82 @@ def test_positions_a_rounding_apart_still_merge():
     # the load sits on the middle support, so it takes it all
     assert sol.reactions[1].force == pytest.approx(1000.0, rel=1e-9)
     assert abs(sol.reactions[0].force) < 1e-6 and abs(sol.reactions[2].force) < 1e-6
+
+
+# ------------------------------------------------------------------ through the CLI
+def _cli(tmp_path, text, *args):
+    import contextlib
+    import io
+
+    from shopbeam.cli import main
+
+    p = tmp_path / "job.toml"
+    p.write_text(text, encoding="utf-8")
+    out, err = io.StringIO(), io.StringIO()
+    with contextlib.redirect_stdout(out), contextlib.redirect_stderr(err):
+        rc = main(["solve", str(p), *args])
+    return rc, out.getvalue(), err.getvalue(), p
+
+
+_JOB = """\
+schema = 1
+title = "regression"
+[beam]
+length = "10 ft"
+[beam.section]
+shape = "custom"
+area = "3.37 in^2"
+ix = "7.80 in^4"
+sx = "3.90 in^3"
+[beam.material]
+e = "29000 ksi"
+fy = "46 ksi"
+density = "490 lb/ft^3"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "8 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "4 ft"
+value = "-300 lbf"
+"""
+
+
+@pytest.mark.parametrize("text", ["4 degC", "4 degF", "-3 degC*ft", "1 ft + 4 degC"])
+def test_temperature_unit_in_a_length_is_an_input_error_not_a_crash(tmp_path, text):
+    # pint's offset units (degC, degF) raised OffsetUnitCalculusError out of the parser,
+    # which the CLI reported as an internal error (exit 1) instead of bad input.
+    rc, out, err, p = _cli(tmp_path, _JOB.replace('at = "4 ft"', f'at = "{text}"'))
+    assert rc == 2, err
+    assert "internal error" not in err and str(p) in err and "loads[0].at" in err
+
+
+@pytest.mark.parametrize("value", ["-1e305 lbf", "-1e200 kip", "1e300 lbf*ft"])
+def test_absurd_load_magnitude_is_refused_not_printed_as_infinity(tmp_path, value):
+    # A load of 1e305 lbf overflowed the stress checks to inf, and --json printed the
+    # non-JSON token Infinity (exit 0). Results that overflow must be refused as bad input.
+    import json
+
+    kind = "point" if "lbf*ft" not in value else "moment"
+    job = _JOB.replace('type = "point"', f'type = "{kind}"').replace('"-300 lbf"', f'"{value}"')
+    rc, out, err, p = _cli(tmp_path, job, "--json")
+    if rc == 0:  # an answer is allowed only if it is strict JSON with finite numbers
+        def bad(tok):
+            raise AssertionError(f"non-finite number {tok} in the JSON")
+        json.loads(out, parse_constant=bad)
+    else:
+        assert rc == 2, err
+        assert "internal error" not in err and str(p) in err
+        assert out == ""
+
+
+@pytest.mark.parametrize("text", ["", " ", "\u2032", "''"])
+def test_empty_value_string_is_an_input_error_not_an_index_error(tmp_path, text):
+    # `"" in "+-"` is True in Python, so an empty (or all-space) value read s[0] of an
+    # empty string: IndexError, reported as an internal error instead of bad input.
+    rc, out, err, p = _cli(tmp_path, _JOB.replace('length = "10 ft"', f'length = "{text}"'))
+    assert rc == 2, err
+    assert "internal error" not in err and "beam.length" in err
