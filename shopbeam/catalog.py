@@ -23,8 +23,6 @@ import csv
 import difflib
 import math
 import re
-from dataclasses import replace
-from fractions import Fraction
 from functools import lru_cache
 from importlib import resources
 
@@ -393,7 +391,6 @@ def _generated() -> list[tuple[str, str, object]]:
 
 
 # ----------------------------------------------------------------- the index
-_KIND_OF_TYPE = {"HSS": "HSS", "PIPE": "PIPE"}
 KIND_INFO = {
     "HSS": "AISC hollow structural sections, rectangular, square and round",
     "HSS-rect": "AISC rectangular and square HSS", "HSS-round": "AISC round HSS",

@@ -64,7 +64,7 @@ Every shape also takes ``axis`` = ``"strong"`` (default) | ``"weak"`` and an opt
 from __future__ import annotations
 
 import math
-from dataclasses import dataclass, field, replace
+from dataclasses import dataclass, replace
 from typing import Mapping
 
 from shopbeam.errors import InputError
@@ -806,6 +806,10 @@ _ALIASES = {"rectangular-tube": "rect-tube", "rhs": "rect-tube", "shs": "square-
             "w": "i-beam", "beam": "i-beam", "l": "angle", "c": "channel", "t": "tee"}
 
 
+def _a(word: str) -> str:
+    return ("an " if word[:1] in "aeiou" else "a ") + word
+
+
 def _suggest(word: str, choices) -> str:
     import difflib
 
@@ -898,16 +902,26 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
     shape = raw_shape.strip().lower().replace("_", "-").replace(" ", "-")
     shape = _ALIASES.get(shape, shape)
     if shape not in _KEYS:
-        raise InputError(f"unknown shape {raw_shape!r}{_suggest(shape, _KEYS)}; shapes are "
+        hint = _suggest(shape, _KEYS)
+        if not hint:
+            from shopbeam import catalog
+
+            try:
+                found = catalog.lookup(raw_shape).designation
+                hint = (f" ({found!r} is a catalog section: write section = \"{found}\", or "
+                        f"designation = \"{found}\" in this table)")
+            except InputError:
+                pass
+        raise InputError(f"unknown shape {raw_shape!r}{hint}; shapes are "
                          + ", ".join(SHAPES), f"{key}.shape")
     allowed = _KEYS[shape] | _COMMON
     for k in spec:
         if k not in allowed:
-            raise InputError(f"unknown key {k!r} for a {shape}{_suggest(k, allowed)}; "
+            raise InputError(f"unknown key {k!r} for {_a(shape)}{_suggest(k, allowed)}; "
                              f"keys are {', '.join(sorted(allowed))}", f"{key}.{k}")
     for k in _REQUIRED[shape]:
         if k not in spec:
-            raise InputError(f"a {shape} needs {k}", f"{key}.{k}")
+            raise InputError(f"{_a(shape)} needs {k}", f"{key}.{k}")
     if "axis" in spec:
         ax = _choice(spec, "axis", ("strong", "weak"), "strong", key)
     else:
