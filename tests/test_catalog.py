@@ -369,3 +369,15 @@ def test_mechanical_tube_kinds_use_the_nominal_wall():
 def test_kind_of(des, kind):
     assert catalog.kind_of(catalog.lookup(des)) == kind
     assert kind in catalog.kinds() or kind in ("rect-tube",)
+
+
+@pytest.mark.skipif(not (MAIN / "shopbeam" / "cli.py").exists(), reason="CLI not yet built")
+def test_cli_gauge_tube_report_names_table_and_wall_rule():
+    p = _cli("section", "rect-tube 2 x 1 x 14ga")
+    assert p.returncode == 0, p.stderr
+    assert "14 ga = 0.083 in, Birmingham wire gauge" in p.stdout
+    assert "0.93 x nominal" in p.stdout  # no material on the command line: the lower wall
+    s = _cli("shapes", "--kind", "HSS", "--filter", "2x1")
+    assert s.returncode == 0 and "HSS2X1X1/8" in s.stdout and "HSS3X1" not in s.stdout
+    bad = _cli("shapes", "--kind", "HZZ")
+    assert bad.returncode == 2 and bad.stderr.count("\n") == 1
