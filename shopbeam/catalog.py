@@ -103,9 +103,9 @@ def canon(text: str) -> str | None:
 
 
 # ----------------------------------------------------------------- AISC rows
-_FLOAT_COLS = ("W", "A", "d", "Ht", "OD", "bf", "B", "b", "t", "tw", "tf", "tnom", "tdes",
+_FLOAT_COLS = ("W", "A", "d", "Ht", "OD", "bf", "B", "t", "tw", "tf", "tnom", "tdes",
                "kdes", "x", "y", "Ix", "Zx", "Sx", "rx", "Iy", "Zy", "Sy", "ry", "Iz", "rz",
-               "Sz", "tan(a)", "J", "Cw", "rts", "ho", "h/tw", "bf/2tf", "b/t", "b/tdes",
+               "tan(a)", "J", "Cw", "rts", "ho", "h/tw", "bf/2tf", "b/t", "b/tdes",
                "h/tdes", "D/t")
 
 
