@@ -526,8 +526,9 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     fl = flexure(sec, job.material, b, sf, job.welded)
     sh = shear_strength(sec, job.material, b, sf, job.welded)
     segs = []
+    braced = brace_points(job)[0]
     for a, bb, free in unbraced_segments(job, beam):
-        l1, why = fl.ltb1(bb - a)
+        l1, why = fl.ltb1(0.0 if braced else bb - a)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words)

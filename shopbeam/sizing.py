@@ -251,7 +251,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     sw_unit = Load("uniform", start=0.0, end=L, w1=-1.0, label="self-weight", case="dead")
     from shopbeam.checks import brace_points
 
-    _, braces = brace_points(job)
+    braced, braces = brace_points(job)
     # brace points become breaks (zero loads), so unbraced lengths are whole pieces
     extra = tuple(Load("point", at=x, value=0.0) for x in braces)
     parts = replace(parts, fixed=parts.fixed + (sw_unit,) + extra)
@@ -294,7 +294,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         except (KeyError, TypeError, ValueError, ZeroDivisionError) as exc:
             skipped.append(f"{des}: {exc}")
             continue
-        seg = [(min(fl.cap, math.inf), fl.ltb1(bb - a)[0], free) for a, bb, free in ltb_segs]
+        seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
         rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
                    fl.omega, seg, sh.vn / sh.omega, mat.e * sec.ix, fl.cap))
     if not rs:

@@ -1,0 +1,296 @@
+"""Strength and stiffness checks against published worked examples and hand calculations.
+
+Each check names its source. AISC Design Examples values are from memory (marked so);
+section properties come from the catalog (AISC Shapes Database v15.0).
+"""
+
+from __future__ import annotations
+
+import math
+
+import pytest
+
+from shopbeam import catalog
+from shopbeam.analysis import analyze
+from shopbeam.checks import (cb_factor, flexure, run_checks, shear_strength, strengths)
+from shopbeam.jobfile import parse_job_text
+from shopbeam.materials import get as material
+
+KIP, FT, IN = 4448.2216152605, 0.3048, 0.0254
+KIPFT = KIP * FT
+KSI = 6.894757293168361e6
+
+
+def job_text(section, material_key, length="35 ft", loads="", extra_beam="", criteria="",
+             supports=None, tags="[]"):
+    sup = supports or f"""
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "{length}"
+type = "roller"
+"""
+    return f"""schema = 1
+title = "test"
+tags = {tags}
+[beam]
+length = "{length}"
+section = {section}
+material = "{material_key}"
+self_weight = false
+{extra_beam}
+{sup}
+{loads}
+[criteria]
+deflection = "L/240"
+{criteria}
+"""
+
+
+UNIFORM = """
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "{L}"
+value = "{w}"
+"""
+
+
+# ------------------------------------------------------------------ flexure, AISC 360-16 F2
+def test_w18x50_compact_braced_f2_1():
+    # AISC Design Examples F.1-1A (ASD), W18x50 A992 continuously braced: Mn/Omega = 252
+    # kip-ft (from memory); Mn = Fy Zx = 50 ksi x 101 in^3
+    fl = flexure(catalog.lookup("W18x50"), material("A992"), "asd")
+    assert fl.cap / KIPFT == pytest.approx(420.8, rel=2e-3)
+    assert fl.cap / fl.omega / KIPFT == pytest.approx(252, rel=3e-3)
+    assert "F2-1" in fl.cap_text
+
+
+def test_w18x50_lp_lr_and_inelastic_ltb():
+    # AISC Manual Table 3-2 (from memory): W18x50 Lp = 5.83 ft, Lr = 16.9 ft;
+    # AISC Design Examples F.1-2A (ASD, from memory): Lb = 10 ft, Cb = 1.0 -> Mn/Omega ~ 216 kip-ft
+    fl = flexure(catalog.lookup("W18x50"), material("A992"), "asd")
+    kind, p = fl.ltb
+    lp, lr = p[-2], p[-1]
+    assert kind == "F2"
+    assert lp / FT == pytest.approx(5.83, rel=5e-3)
+    assert lr / FT == pytest.approx(16.9, rel=1e-2)
+    m, why = fl.ltb1(10 * FT)
+    assert "F2-2" in why
+    assert m / fl.omega / KIPFT == pytest.approx(216, rel=1e-2)
+
+
+def test_w18x50_elastic_ltb_braced_at_midspan_job():
+    # AISC Design Examples F.1-3A (ASD, from memory): W18x50, 35 ft simple span, uniform
+    # load, braced at midspan: Cb = 1.30, Lb = 17.5 ft > Lr, Fcr = 43.2 ksi
+    text = job_text('"W18x50"', "A992", loads=UNIFORM.format(L="35 ft", w="-1 kip/ft"),
+                    extra_beam='braces = ["17.5 ft"]')
+    job = parse_job_text(text)
+    res = analyze(job)
+    bend = next(c for c in res.checks if c.name == "bending")
+    assert bend.extra["cb"] == pytest.approx(1.30, abs=5e-3)
+    fcr = bend.limit * 1.67 / (88.9 * IN**3)
+    assert fcr / KSI == pytest.approx(43.2, rel=1e-2)
+    assert "elastic LTB" in bend.formula
+    # demand wL^2/8 (hand)
+    assert bend.demand == pytest.approx(KIP / FT * (35 * FT) ** 2 / 8, rel=1e-9)
+
+
+def test_cb_uniform_load_textbook_values():
+    # AISC 360-16 Commentary Table C-F1.1 / common practice: simply supported, uniform load,
+    # unbraced over the span Cb = 1.14; braced at midspan Cb = 1.30 (hand, from F1-1)
+    q = [0.75 * 0.25 / 2, 0.5 * 0.5 / 2, 0.25 * 0.75 / 2]
+    assert cb_factor(0.125, *q) == pytest.approx(1.136, abs=1e-3)
+    assert cb_factor(1.0, 1.0, 1.0, 1.0) == pytest.approx(1.0)
+
+
+def test_unbraced_simple_span_cb_from_the_diagram():
+    # common practice: Cb = 1.14 for a uniformly loaded simple span unbraced between supports
+    job = parse_job_text(job_text('"W18x50"', "A992", length="20 ft",
+                                  loads=UNIFORM.format(L="20 ft", w="-1 kip/ft")))
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    assert bend.extra["cb"] == pytest.approx(1.136, abs=1e-3)
+
+
+def test_cantilever_free_end_takes_cb_one():
+    # AISC 360-16 Commentary F1 (from memory): Cb = 1.0 for a cantilever with an unbraced tip
+    sup = '\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+    loads = '\n[[loads]]\ntype = "point"\nat = "10 ft"\nvalue = "-1 kip"\n'
+    job = parse_job_text(job_text('"W8x18"', "A992", length="10 ft", supports=sup, loads=loads))
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    assert bend.extra["cb"] == 1.0
+    assert "free end" in bend.formula
+
+
+def test_braced_continuously_gives_plastic_moment():
+    job = parse_job_text(job_text('"W18x50"', "A992", loads=UNIFORM.format(L="35 ft", w="-1 kip/ft"),
+                                  extra_beam="braced = true"))
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    assert bend.limit * 1.67 == pytest.approx(50 * KSI * 101 * IN**3, rel=2e-3)  # F2-1
+
+
+# ------------------------------------------------------------------ flexure, HSS and others
+def test_hss_flange_classes_follow_f7_limits():
+    # AISC 360-16 Table B4.1b case 17: compact b/t <= 1.12 sqrt(E/Fy), noncompact <= 1.40
+    mat = material("A500-C")
+    root = math.sqrt(mat.e / mat.fy)
+    for sec in catalog.list_sections("HSS-rect"):
+        if sec.axis != "strong" or sec.dims["h"] != sec.dims["b"]:
+            continue
+        fl = flexure(sec, mat, "asd")
+        bt = sec.dims["b_t"]
+        if bt <= 1.12 * root and sec.dims["h_t"] <= 2.42 * root:
+            assert fl.cap == pytest.approx(mat.fy * sec.zx, rel=1e-12)
+        elif bt > 1.40 * root:
+            assert fl.cap < mat.fy * sec.sx  # effective width below first yield
+            assert "slender" in fl.cap_text
+
+
+def test_hss_noncompact_flange_formula_is_continuous():
+    # AISC 360-16 F7-2 meets Mp at lambda_p and (nearly: 3.57 x 1.40 - 4.0 = 0.998) Fy S at
+    # lambda_r (property of the formula)
+    from shopbeam.sections import rect_tube
+
+    mat = material("A500-C")
+    root = math.sqrt(mat.e / mat.fy)
+    t = 0.125 * IN
+    for lam, expect in ((1.12 * root + 1e-6, "mp"), (1.40 * root - 1e-6, "fys")):
+        b = lam * t + 3 * t
+        sec = rect_tube(6 * IN, b, t)
+        fl = flexure(sec, mat, "asd")
+        target = mat.fy * sec.zx if expect == "mp" else mat.fy * sec.sx
+        assert fl.cap == pytest.approx(target, rel=1e-3)
+        assert "F7-2" in fl.cap_text
+
+
+def test_round_hss_compact_is_plastic():
+    # AISC 360-16 F8-1: D/t <= 0.07 E/Fy -> Mn = Fy Z
+    sec = catalog.lookup("HSS6.000x0.250")
+    mat = material("A500-C")
+    fl = flexure(sec, mat, "asd")
+    assert sec.dims["D_t"] < 0.07 * mat.e / mat.fy
+    assert fl.cap == pytest.approx(mat.fy * sec.zx)
+
+
+def test_angle_and_tee_get_a_clear_warning():
+    for des in ("L2x2x3/16", "WT6x20"):
+        fl = flexure(catalog.lookup(des), material("A36"), "asd")
+        assert any("NOT" in w and "checked" in w for w in fl.warnings)
+        assert fl.cap == pytest.approx(material("A36").fy * catalog.lookup(des).sx)
+
+
+# ------------------------------------------------------------------ shear, chapter G
+def test_w24x62_web_shear_g2():
+    # AISC Design Examples G.1A (ASD, from memory) / Manual Table 3-2: W24x62 A992,
+    # Vn/Omega_v = 204 kips (Cv1 = 1.0, Omega_v = 1.50)
+    sh = shear_strength(catalog.lookup("W24x62"), material("A992"), "asd")
+    assert sh.omega == 1.50
+    assert sh.vn / sh.omega / KIP == pytest.approx(204, rel=5e-3)
+
+
+def test_hss6x4x1_4_shear_g4():
+    # AISC Design Examples G.? rectangular HSS shear (ASD, from memory): HSS6x4x1/4 A500 Gr B
+    # (46 ksi), h = 6 - 3(0.233) = 5.30 in, Aw = 2ht = 2.47 in^2, Cv2 = 1.0,
+    # Vn = 0.6 Fy Aw = 68.2 kips, Vn/Omega = 40.8 kips
+    sh = shear_strength(catalog.lookup("HSS6x4x1/4"), material("A500-B"), "asd")
+    assert sh.vn / KIP == pytest.approx(68.2, rel=5e-3)
+    assert sh.vn / sh.omega / KIP == pytest.approx(40.8, rel=5e-3)
+
+
+def test_shear_check_in_a_job_uses_the_end_shear():
+    # hand: simple span, uniform w: V = wL/2 at the supports
+    job = parse_job_text(job_text('"W24x62"', "A992", length="30 ft",
+                                  loads=UNIFORM.format(L="30 ft", w="-2 kip/ft")))
+    sh = next(c for c in analyze(job).checks if c.name == "shear")
+    assert sh.demand == pytest.approx(30 * KIP, rel=1e-9)
+    assert sh.limit / KIP == pytest.approx(204, rel=5e-3)
+
+
+# ------------------------------------------------------------------ other bases
+RECT_LUMBER = '{ shape = "rect-bar", depth = "7.25 in", width = "1.5 in" }'
+
+
+def test_lumber_allowable_stress_hand():
+    # NDS 2018 (from memory) with factors 1.0; hand: 2x8 (1.5 x 7.25 in), S = 13.14 in^3,
+    # DF-L No.2 Fb = 900 psi; 10 ft span, 50 lbf/ft: M = wL^2/8 = 625 lbf*ft = 7500 lbf*in,
+    # fb = 7500 / 13.14 = 570.8 psi; fv = 1.5 V / A = 1.5 x 250 / 10.875 = 34.5 psi
+    job = parse_job_text(job_text(RECT_LUMBER, "DF-L-2", length="10 ft",
+                                  loads=UNIFORM.format(L="10 ft", w="-50 lbf/ft")))
+    res = analyze(job)
+    b = next(c for c in res.checks if c.name == "bending")
+    v = next(c for c in res.checks if c.name == "shear")
+    psi = KSI / 1000
+    assert b.unit == "Pa" and "NDS" in b.formula
+    assert b.demand / psi == pytest.approx(570.8, rel=1e-3)
+    assert b.limit / psi == pytest.approx(900, rel=1e-9)
+    assert v.demand / psi == pytest.approx(34.48, rel=1e-3)
+    assert v.limit / psi == pytest.approx(180, rel=1e-9)
+
+
+def test_aluminium_uses_adm_yield_and_welded_strength():
+    # Aluminum Design Manual 2015 (from memory): Mn = Z Fty <= 1.5 S Fty, Omega 1.65; welded
+    # 6061-T6 Ftyw = 15 ksi. Rectangle Z = 1.5 S, so Mn = 1.5 S Fty (hand).
+    sec = '{ shape = "rect-bar", depth = "2 in", width = "1 in" }'
+    s = 1 * 2**2 / 6 * IN**3
+    for welded, fty in (("false", 35), ("true", 15)):
+        job = parse_job_text(job_text(sec, "6061-T6", length="3 ft",
+                                      loads=UNIFORM.format(L="3 ft", w="-10 lbf/ft"),
+                                      extra_beam=f"welded = {welded}"))
+        st = strengths(job)
+        assert st.basis == "aluminum"
+        assert st.flexure.cap / st.flexure.omega == pytest.approx(1.5 * s * fty * KSI / 1.65,
+                                                                   rel=1e-9)
+        assert any("ADM" in c or "Aluminum" in c for c in analyze(job).cautions)
+
+
+def test_first_yield_basis_on_request():
+    # hand: first yield M/S against Fy/SF
+    job = parse_job_text(job_text('"W18x50"', "A992", loads=UNIFORM.format(L="35 ft", w="-1 kip/ft"),
+                                  criteria='basis = "first-yield"\nsafety_factor = 2.0'))
+    b = next(c for c in analyze(job).checks if c.name == "bending")
+    assert b.unit == "Pa"
+    assert b.limit == pytest.approx(50 * KSI / 2.0)
+    assert b.demand == pytest.approx(KIP / FT * (35 * FT) ** 2 / 8 / (88.9 * IN**3), rel=1e-9)
+
+
+def test_basis_stated_in_every_check_and_report():
+    job = parse_job_text(job_text('"W18x50"', "A992", loads=UNIFORM.format(L="35 ft", w="-1 kip/ft")))
+    res = analyze(job)
+    for c in res.checks[:2]:
+        assert "AISC 360-16" in c.formula
+    assert any("Strength basis" in c for c in res.cautions)
+
+
+# ------------------------------------------------------------------ deflection
+def test_deflection_presets_and_lifting_default():
+    # presets: racks L/180, hoists L/450 (common practice); a lifting job without a limit gets L/450
+    base = job_text('"W8x18"', "A992", length="12 ft", loads=UNIFORM.format(L="12 ft", w="-0.2 kip/ft"))
+    rack = parse_job_text(base.replace('deflection = "L/240"', 'deflection = "rack"'))
+    assert strengths(rack).defl_ratio == 180
+    lift = parse_job_text(base.replace('deflection = "L/240"\n', "").replace('tags = []', 'tags = ["lifting"]'))
+    assert strengths(lift).defl_ratio == 450
+    d = next(c for c in analyze(lift).checks if c.name == "deflection")
+    assert d.limit == pytest.approx(12 * FT / 450)
+
+
+def test_cantilever_deflection_on_twice_the_length():
+    # contract: a cantilever is judged on twice its length; hand: PL^3/3EI vs 2L/240
+    sup = '\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+    loads = '\n[[loads]]\ntype = "point"\nat = "6 ft"\nvalue = "-1 kip"\n'
+    job = parse_job_text(job_text('"W8x18"', "A992", length="6 ft", supports=sup, loads=loads))
+    d = next(c for c in run_checks(job, analyze(job).solution) if c.name == "deflection")
+    ei = 29000 * KSI * 61.9 * IN**4
+    assert d.demand == pytest.approx(KIP * (6 * FT) ** 3 / (3 * ei), rel=2e-3)
+    assert d.limit == pytest.approx(2 * 6 * FT / 240)
+
+
+def test_impact_allowance_on_lifting_live_loads():
+    # common practice: 15 % impact on the live load of a lifting device; hand: PL/4 x 1.15
+    loads = '\n[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-2 kip"\n'
+    text = job_text('"S8x18.4"', "A36", length="16 ft", loads=loads, tags='["lifting"]')
+    b = next(c for c in analyze(parse_job_text(text)).checks if c.name == "bending")
+    assert b.demand == pytest.approx(2 * KIP * 1.15 * 16 * FT / 4, rel=1e-9)
+    b0 = next(c for c in analyze(parse_job_text(text.replace('[criteria]', '[criteria]\nimpact = "0%"'))).checks
+              if c.name == "bending")
+    assert b0.demand == pytest.approx(2 * KIP * 16 * FT / 4, rel=1e-9)
