@@ -1,0 +1,52 @@
+"""The exact calc sheet: sympy's general SingularityFunction solve gives exact rationals.
+
+Closed forms: AISC Manual Table 3-23, cases 12 and 29 (from memory, standard formulas).
+"""
+
+from __future__ import annotations
+
+import sympy as sp
+
+from shopbeam.calcsheet import brackets, exact_solve
+from shopbeam.model import Beam, Load, Support
+
+
+def test_propped_cantilever_reactions_are_exact_rationals():
+    # AISC Manual Table 3-23, case 12: prop takes 3wL/8, fixed end 5wL/8, M = wL^2/8
+    L, w = 8.0, -100.0
+    beam = Beam(L, 1e6, (Support(0.0, "roller"), Support(L, "fixed")),
+                (Load("uniform", start=0.0, end=L, w1=w),))
+    ex = exact_solve(beam)
+    R1, R2, M1 = ex.unknowns[:3]
+    assert ex.solution[R1] == sp.Rational(3, 8) * 100 * 8
+    assert ex.solution[R2] == sp.Rational(5, 8) * 100 * 8
+    # the fixed end at the right turns clockwise: its counterclockwise moment is -wL^2/8
+    assert ex.solution[M1] == -sp.Rational(1, 8) * 100 * 64
+
+
+def test_two_span_reactions_exact_and_independent_of_ei():
+    # AISC Manual Table 3-23, case 29: 3wl/8, 10wl/8, 3wl/8
+    beam = Beam(6.0, 3.3e5, (Support(0.0, "pin"), Support(3.0, "roller"), Support(6.0, "roller")),
+                (Load("uniform", start=0.0, end=6.0, w1=-8.0),))
+    ex = exact_solve(beam)
+    got = [ex.solution[s] for s in ex.unknowns[:3]]
+    assert got == [9, 30, 9]
+    assert all(not v.free_symbols for v in got)
+
+
+def test_spring_reactions_keep_ei_as_a_symbol():
+    # hand-derived: cantilever propped by a spring, R = (w L^4 / 8EI) / (1/k + L^3/3EI)
+    L, w, k = 2.0, -3.0, 5.0
+    beam = Beam(L, 1e3, (Support(0.0, "fixed"), Support(L, "spring", k)),
+                (Load("uniform", start=0.0, end=L, w1=w),))
+    ex = exact_solve(beam)
+    R = ex.unknowns[2]  # fixed force R1, fixed moment M1, spring force R2
+    EI = ex.ei
+    expect = (3 * sp.Integer(2) ** 4 / (8 * EI)) / (sp.Rational(1, 5) + sp.Integer(8) / (3 * EI))
+    assert sp.simplify(ex.solution[R] - expect) == 0
+
+
+def test_brackets_print_as_text():
+    x = sp.Symbol("x", real=True)
+    e = 3 * sp.SingularityFunction(x, 0, 1) - sp.Rational(1, 2) * sp.SingularityFunction(x, sp.Rational(7, 2), 2)
+    assert brackets(e, x) == "3 <x>^1 - 1/2 <x - 7/2>^2"
