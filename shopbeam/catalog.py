@@ -555,7 +555,34 @@ def lookup(designation: str, key: str = "beam.section", material=None) -> Sectio
     by_key, _ = _index()
     if k and k in by_key:
         return by_key[k].section()
+    near = _rounded_match(k) if k else None
+    if near is not None:
+        return near.section()
     raise InputError(_not_found(designation, k), key)
+
+
+def _rounded_match(k: str):
+    """The one entry whose sizes match a designation typed with rounded decimals
+    ("HSS12x2x.312" or ".313" for 5/16, ".19" for 3/16), or None."""
+    prefix, *nums = k.split("|")
+    try:
+        vals = [float(v) for v in nums]
+    except ValueError:
+        return None
+    found = []
+    for e in _index()[0].values():
+        if not e.key or not e.key.startswith(prefix + "|"):
+            continue
+        p2, *n2 = e.key.split("|")
+        if p2 != prefix or len(n2) != len(vals):
+            continue
+        try:
+            if all(abs(float(a) - b) <= 0.0026 for a, b in zip(n2, vals)):
+                found.append(e)
+        except ValueError:
+            continue
+    unique = {id(e): e for e in found}
+    return next(iter(unique.values())) if len(unique) == 1 else None
 
 
 def _not_found(designation: str, k: str | None) -> str:

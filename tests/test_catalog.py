@@ -381,3 +381,46 @@ def test_cli_gauge_tube_report_names_table_and_wall_rule():
     assert s.returncode == 0 and "HSS2X1X1/8" in s.stdout and "HSS3X1" not in s.stdout
     bad = _cli("shapes", "--kind", "HZZ")
     assert bad.returncode == 2 and bad.stderr.count("\n") == 1
+
+
+from hypothesis import given, settings, strategies as st  # noqa: E402
+
+_LABELS = [s.designation for k in ("HSS", "W", "L", "C", "MC", "WT", "S", "PIPE")
+           for s in catalog.list_sections(k)]
+
+
+def _respell(label: str, data) -> str:
+    """The label as a person might type it: case, spaces around x, decimals for fractions."""
+    import re
+    from fractions import Fraction
+
+    out = label
+    if data.draw(st.booleans()):
+        out = out.lower()
+    if data.draw(st.booleans()):
+        def dec(m):
+            whole = int(m.group(1)) if m.group(1) else 0
+            v = whole + Fraction(int(m.group(2)), int(m.group(3)))
+            return f"{float(v):.3f}".rstrip("0").rstrip(".")
+        out = re.sub(r"(?:(\d+)-)?(\d+)/(\d+)", dec, out)
+    sep = data.draw(st.sampled_from(["x", " x ", "X", " X", "*"]))
+    out = re.sub(r"(?<=[\d./])[xX](?=[\d.])", sep, out)
+    if data.draw(st.booleans()):
+        out = re.sub(r"^([A-Za-z]+)(?=\d)", r"\1 ", out)
+    return out
+
+
+@settings(max_examples=150, deadline=None)
+@given(st.data())
+def test_respelled_designations_find_the_same_section(data):
+    label = data.draw(st.sampled_from(_LABELS))
+    typed = _respell(label, data)
+    assert catalog.lookup(typed).designation == label, typed
+
+
+@pytest.mark.parametrize("typed, label", [("HSS12x2x0.312", "HSS12X2X5/16"),
+                                          ("HSS12x2x.313", "HSS12X2X5/16"),
+                                          ("hss4x4x.19", "HSS4X4X3/16")])
+def test_rounded_decimal_walls(typed, label):
+    # found by the respelling test: 5/16 in is typed .312 or .313, 3/16 as .19
+    assert catalog.lookup(typed).designation == label
