@@ -75,13 +75,13 @@ class JobScreen(Screen):
     """The open job: input views, result views, the live answer and the safety banner."""
 
     BINDINGS = [
-        Binding("f1", "app.help", "help", priority=True),
-        Binding("question_mark", "app.help", "help", show=False),
-        Binding("ctrl+n", "step(1)", "next view", priority=True),
-        Binding("ctrl+p", "step(-1)", "prev view", priority=True),
         Binding("ctrl+s", "save", "save", priority=True),
         Binding("ctrl+d", "save_as", "save as", priority=True),
         Binding("ctrl+o", "library", "library", priority=True),
+        Binding("ctrl+n", "step(1)", "next view", priority=True),
+        Binding("ctrl+p", "step(-1)", "prev view", priority=True, show=False),
+        Binding("f1", "app.help", "help", priority=True),
+        Binding("question_mark", "app.help", "help", show=False),
         Binding("l", "library", "library", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
     ] + [Binding(f"{key},alt+{key}", f"view('{vid}')", name, show=False)
@@ -500,6 +500,7 @@ class JobScreen(Screen):
         self.session = session
         for v in self.query(RowsView):
             v.selected = 0
+        self.query_one("#sizing", SizingView)._kind_set = False
         self.refresh_all()
 
 
@@ -513,8 +514,9 @@ class ShopbeamApp(App):
                 Binding("ctrl+c", "quit", "quit", show=False, priority=True)]
 
     def __init__(self, session: Session, *, show_library: bool = False,
-                 cursor_blink: bool = True) -> None:
+                 cursor_blink: bool = True, label_date=None) -> None:
         super().__init__()
+        self.label_date = label_date  # the date printed on rating labels (None: today)
         self.first_session = session
         self.show_library = show_library
         self.cursor_blink = cursor_blink
@@ -547,11 +549,17 @@ def _demo_path() -> Path | None:
         return here if here.is_file() else None
 
 
-def make_app(job_path=None, library=None, *, cursor_blink: bool = True) -> ShopbeamApp:
-    """The text UI on a job file, or (no file) on the library with the bundled demo ready."""
+def make_app(job_path=None, library=None, *, cursor_blink: bool = True,
+             label_date=None) -> ShopbeamApp:
+    """The text UI on a job file, or (no file) on the library with the bundled demo ready.
+
+    `cursor_blink=False` and a fixed `label_date` make the screens reproducible (tests,
+    screenshots).
+    """
+    kw = dict(cursor_blink=cursor_blink, label_date=label_date)
     if job_path is not None:
         session = Session.open(job_path, library_dir=library)
-        return ShopbeamApp(session, cursor_blink=cursor_blink)
+        return ShopbeamApp(session, **kw)
     demo = _demo_path()
     session = Session.open(demo, library_dir=library) if demo else Session.new(library_dir=library)
-    return ShopbeamApp(session, show_library=True, cursor_blink=cursor_blink)
+    return ShopbeamApp(session, show_library=True, **kw)

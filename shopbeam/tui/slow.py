@@ -12,6 +12,7 @@ import importlib
 from rich.text import Text
 from textual import work
 from textual.app import ComposeResult
+from textual.binding import Binding
 from textual.message import Message
 from textual.widgets import Button, OptionList, Static
 from textual.widgets.option_list import Option
@@ -34,7 +35,7 @@ class CalcView(View):
     title = "Calc sheet"
 
     def compose(self) -> ComposeResult:
-        yield Static("", id="calc-body", markup=False)
+        yield Static("", id="calc-body", markup=False, classes="wide-text")
 
     def show(self, session) -> None:
         ev = session.evaluation
@@ -51,7 +52,7 @@ class CalcView(View):
                          "you can keep editing)..."))
         self.make(ev.job, ev.result, text)
 
-    @work(thread=True, exclusive=True, group="calc")
+    @work(thread=True, exclusive=True, group="calc", exit_on_error=False)
     def make(self, job, result, text: str) -> None:
         mod = _module("shopbeam.calcsheet")
         if mod is None:
@@ -74,7 +75,7 @@ class RatingView(View):
     title = "Rating"
 
     def compose(self) -> ComposeResult:
-        yield Static("", id="rating-body", markup=False)
+        yield Static("", id="rating-body", markup=False, classes="wide-text")
 
     def show(self, session) -> None:
         ev = session.evaluation
@@ -90,9 +91,9 @@ class RatingView(View):
         body.update(Text("Working out the capacity..."))
         self.make(ev.job, text)
 
-    @work(thread=True, exclusive=True, group="rating")
+    @work(thread=True, exclusive=True, group="rating", exit_on_error=False)
     def make(self, job, text: str) -> None:
-        out = rating_text(job)
+        out = rating_text(job, date=getattr(self.app, "label_date", None))
         self.app.call_from_thread(self._done, text, out)
 
     def _done(self, text: str, out: str) -> None:
@@ -100,52 +101,23 @@ class RatingView(View):
             self.query_one("#rating-body", Static).update(Text(out))
 
 
-def rating_text(job, width: int = 40) -> str:
+def rating_text(job, width: int = 40, date=None) -> str:
+    """The capacity report and the printable rating label, or why they are not there."""
     mod = _module("shopbeam.capacity")
     if mod is None or not hasattr(mod, "capacity"):
         return ("Capacity and the rating label are not available yet in this build of "
                 "shopbeam.\n(The checks on the Results view are.)")
     try:
-        cap = mod.capacity(job)
-    except Exception as exc:  # noqa: BLE001
+        res = mod.capacity(job)
+        text = mod.render(res) if hasattr(mod, "render") else f"capacity factor {res.factor:.4g}"
+    except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
-    lines = []
-    for name in ("summary", "describe", "text"):
-        fn = getattr(mod, name, None) if not hasattr(cap, name) else getattr(cap, name)
-        if callable(fn):
-            try:
-                lines.append(str(fn() if hasattr(cap, name) else fn(cap)))
-                break
-            except Exception:  # noqa: BLE001
-                continue
-    if not lines:
-        k = getattr(cap, "factor", cap)
-        try:
-            lines.append(f"Capacity: the live loads can be multiplied by {float(k):.3g} "
-                         "before the first check fails.")
-        except (TypeError, ValueError):
-            lines.append(f"Capacity: {cap}")
-    label = None
-    for name in ("rating_label", "label", "label_text"):
-        fn = getattr(mod, name, None)
-        if callable(fn):
-            try:
-                label = fn(job, cap, width=width)
-            except TypeError:
-                try:
-                    label = fn(job, width=width)
-                except Exception:  # noqa: BLE001
-                    label = None
-            except Exception:  # noqa: BLE001
-                label = None
-            if label:
-                break
-    lines.append("")
-    if label:
-        lines.append("RATING LABEL (print it: shopbeam rating JOB.toml)")
-        lines.append(str(label))
-    else:
-        lines.append("The printable rating label is not available yet in this build.")
+    lines = [text.rstrip(), ""]
+    try:
+        label = mod.rating_label(res, width=width, date=date)
+        lines += ["RATING LABEL (to print: shopbeam rating JOB.toml > label.txt)", label.rstrip()]
+    except Exception as exc:  # noqa: BLE001
+        lines.append(f"The rating label could not be made: {type(exc).__name__}: {exc}")
     return "\n".join(lines)
 
 
@@ -171,15 +143,32 @@ class SizingView(View):
         yield Static("", id="size-note", markup=False)
         yield OptionList(id="size-list")
 
+    SHAPE_KIND = {"i-beam": "W", "rect-tube": "HSS-rect", "round-tube": "HSS-round",
+                  "pipe": "PIPE", "channel": "C", "angle": "L", "rect-bar": "flat-bar"}
+
     def show(self, session) -> None:
         self._session = session
+        job = session.evaluation.job
+        if job is not None and not getattr(self, "_kind_set", False):
+            self._kind_set = True
+            kind = self.SHAPE_KIND.get(getattr(job.section, "shape", ""), None)
+            sizing = _module("shopbeam.sizing")
+            try:
+                kind = sizing.default_kind(job) if sizing is not None else kind
+            except Exception:  # noqa: BLE001
+                pass
+            choice = self.query_one(Choice)
+            if kind and kind not in choice.options:
+                choice.options.append(kind)
+            if kind:
+                choice.set(kind)
         note = self.query_one("#size-note", Static)
         if session.evaluation.result is None:
             note.update(Text(problems_text(session.evaluation)))
         elif not getattr(self, "_ran", False):
             note.update(Text("Choose a kind, then press the button (or r)."))
 
-    BINDINGS = [("r", "run", "sweep")]
+    BINDINGS = [Binding("r", "run", "sweep", priority=True)]
 
     def on_button_pressed(self, event: Button.Pressed) -> None:
         if event.button.id == "size-run":
@@ -198,7 +187,7 @@ class SizingView(View):
         self.query_one("#size-list", OptionList).clear_options()
         self.sweep(ev.job, kind)
 
-    @work(thread=True, exclusive=True, group="sizing")
+    @work(thread=True, exclusive=True, group="sizing", exit_on_error=False)
     def sweep(self, job, kind: str) -> None:
         rows, note = size_rows(job, kind)
         self.app.call_from_thread(self._done, rows, note)
@@ -219,29 +208,29 @@ class SizingView(View):
 
 def size_rows(job, kind: str, top: int = 40) -> tuple[list[tuple[str, str]], str]:
     """(designation, line) for sections of `kind` that pass, lightest first; and a note."""
+    try:
+        return _size_rows(job, kind, top)
+    except Exception as exc:  # noqa: BLE001 - a failed sweep is shown, never a crash
+        return [], f"The sweep failed: {type(exc).__name__}: {exc}"
+
+
+def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
     sizing = _module("shopbeam.sizing")
     sy = job.units
     if sizing is not None and hasattr(sizing, "size"):
-        try:
-            found = sizing.size(job, kind=kind)
-        except Exception as exc:  # noqa: BLE001
-            return [], f"The sweep failed: {type(exc).__name__}: {exc}"
+        res = sizing.size(job, kind=kind)
+        passing = list(res.passing)
         rows = []
-        for item in list(found)[:top]:
-            sec = getattr(item, "section", item)
-            des = getattr(sec, "designation", str(sec))
-            ratio = getattr(item, "ratio", None)
-            gov = getattr(item, "governing", "")
-            gov = getattr(gov, "name", gov)
-            w = getattr(item, "weight", None)
-            text = f"{des:<18}"
-            if w is not None:
-                text += f" {units.fmt(w, 'mass_per_length', sy):>11}"
-            if ratio is not None:
-                text += f"  ratio {ratio:.2f} {gov}"
-            rows.append((des, text))
-        return rows, (f"{len(rows)} sections of {kind} pass." if rows else
-                      f"No {kind} section passes every check.")
+        for r in passing[:top]:
+            k = "unlimited" if r.factor == float("inf") else f"{r.factor:.2f}"
+            rows.append((r.designation,
+                         f"{r.designation:<16} {units.fmt(r.weight, 'mass_per_length', sy):>11}"
+                         f"  ratio {r.ratio:.2f} {r.governing:<10} capacity x{k}"))
+        n = len(res.rows)
+        note = (f"{len(passing)} of {n} {res.kind} sections pass; lightest first"
+                + (f" (first {top} shown)" if len(passing) > top else "") + "."
+                if passing else f"None of the {n} {res.kind} sections passes every check.")
+        return rows, note
     # Without the sizing module: the same sweep done here with the public analysis.
     catalog = _module("shopbeam.catalog")
     if catalog is None:
@@ -251,10 +240,7 @@ def size_rows(job, kind: str, top: int = 40) -> tuple[list[tuple[str, str]], str
     from shopbeam.analysis import analyze
 
     passing = []
-    try:
-        secs = catalog.list_sections(kind)
-    except Exception as exc:  # noqa: BLE001
-        return [], f"Cannot list {kind}: {exc}"
+    secs = catalog.list_sections(kind)
     for sec in secs:
         try:
             r = analyze(replace(job, section=sec))

@@ -498,7 +498,8 @@ class SectionView(View):
             return
         shown = found[:60]
         more = f" (first {len(shown)} of {len(found)})" if len(found) > len(shown) else ""
-        note.update(_text(f"{len(found)} matches{more}: down to pick, enter to use."))
+        n = len(found)
+        note.update(_text(f"{n} match{'es' if n != 1 else ''}{more}: down to pick, enter to use."))
         lst.display = True
         lst.clear_options()
         lst.add_options([Option(_text(

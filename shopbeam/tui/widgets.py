@@ -136,6 +136,15 @@ class Choice(Widget, can_focus=True):
         t = Text()
         focus = self.has_focus
         t.append(f"{self.label:<14}", style="bold reverse" if focus else "")
+        full = sum(len(o) + 3 for o in self.options) + 14
+        width = self.size.width or 80
+        if full > width:
+            i = self.options.index(self.value)
+            t.append(f"< [{self.value}] >", style="bold reverse" if focus else "bold")
+            t.append(f"  {i + 1} of {len(self.options)}")
+            if focus:
+                t.append("  <- ->", style="dim")
+            return t
         for opt in self.options:
             if opt == self.value:
                 t.append(f"[{opt}]", style="bold reverse" if focus else "bold")
@@ -208,7 +217,7 @@ class Banner(Static):
 
         if is_lifting(tags):
             self.add_class("-lifting")
-            self.update(Text("!! " + SHORT_LIFTING + " !!\n!  " + SHORT))
+            self.update(Text("!! " + SHORT_LIFTING + "\n" + SHORT))
         else:
             self.remove_class("-lifting")
             self.update(Text(SHORT))

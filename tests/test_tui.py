@@ -1,0 +1,326 @@
+"""The text UI driven as a user would, with Pilot: type a job in, edit, save, reopen.
+
+Reference values for the two-span shelf: AISC Manual Table 3-23, case 29 (continuous beam,
+two equal spans, uniform load): end reactions 3wl/8, middle reaction 10wl/8 (from memory).
+"""
+
+from __future__ import annotations
+
+import asyncio
+import functools
+import shutil
+from pathlib import Path
+
+import pytest
+
+pytest.importorskip("textual")
+
+from shopbeam.tui.app import JobScreen, make_app  # noqa: E402
+from shopbeam.tui.screens import ConfirmScreen, ConflictScreen, LibraryScreen  # noqa: E402
+from shopbeam.tui.widgets import Field  # noqa: E402
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+SIZE = (100, 32)
+
+
+@pytest.fixture(autouse=True)
+def _own_library(tmp_path, monkeypatch):
+    user = tmp_path / "user"
+    user.mkdir()
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+    return user
+
+
+def sync(fn):
+    """Run an async test body in its own event loop (no async plugin needed)."""
+
+    @functools.wraps(fn)
+    def run(*args, **kwargs):
+        return asyncio.run(fn(*args, **kwargs))
+
+    return run
+
+
+def job_screen(app) -> JobScreen:
+    return app.job_screen
+
+
+def field(app, view: str, key: str) -> Field:
+    for f in job_screen(app).query_one(f"#{view}").query(Field):
+        if f.key == key:
+            return f
+    raise LookupError(key)
+
+
+def text_of(app, selector: str) -> str:
+    return str(job_screen(app).query_one(selector).content)
+
+
+def message_of(f: Field) -> str:
+    return str(f.query_one(".field-msg").content)
+
+
+async def type_into(pilot, app, view: str, key: str, text: str) -> None:
+    """Replace a field's text (as a paste would: one change)."""
+    f = field(app, view, key)
+    f.input.focus()
+    await pilot.pause()
+    f.input.value = text
+    await pilot.pause()
+
+
+async def type_keys(pilot, app, view: str, key: str, text: str, clear: bool = True) -> None:
+    """Type into a field key by key (cleared first unless clear=False)."""
+    f = field(app, view, key)
+    f.input.focus()
+    if clear:
+        f.input.value = ""
+    else:
+        f.input.cursor_position = len(f.input.value)
+    await pilot.pause()
+    await pilot.press(*[{" ": "space"}.get(c, c) for c in text])
+    await pilot.pause()
+
+
+async def goto(pilot, key: str) -> None:
+    await pilot.press("escape", key)
+    await pilot.pause()
+
+
+@sync
+async def test_start_shows_library_over_the_demo():
+    app = make_app(cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        assert isinstance(app.screen, LibraryScreen)
+        lst = app.screen.query_one("#lib-list")
+        highlighted = app.screen.found[lst.highlighted]
+        assert highlighted.name == "demo" and highlighted.origin == "bundled"
+        await pilot.press("escape")
+        await pilot.pause()
+        assert isinstance(app.screen, JobScreen)
+        assert app.job_screen.session.evaluation.ok
+        assert "Screening check only" in str(app.screen.query_one("#banner").content)
+
+
+@sync
+async def test_two_span_shelf_from_scratch_reads_its_reactions():
+    app = make_app(cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await pilot.press("ctrl+n")  # new job from the library
+        await pilot.pause()
+        s = app.job_screen.session
+        assert s.path is None and s.dirty
+        await type_into(pilot, app, "job", "title", "Two-span shelf")
+        await goto(pilot, "2")
+        await type_into(pilot, app, "span", "beam.length", "10 ft")
+        # self-weight left out so the reactions are the entered load alone
+        sw = [c for c in app.job_screen.query("#span Choice") if c.key == "beam.self_weight"][0]
+        sw.focus()
+        await pilot.press("right")
+        await pilot.pause()
+        # the template has pin at 0 and roller at the end: add a roller and put it mid-span
+        app.job_screen.query_one("#span #add-roller").focus()
+        await pilot.press("enter")
+        await pilot.pause()
+        assert len(s.rows("supports")) == 3
+        await type_into(pilot, app, "span", "support.at", "5 ft")
+        # the template's second support still says 8 ft: move it to the new end
+        lst = app.job_screen.query_one("#support-list")
+        lst.focus()
+        lst.highlighted = 1
+        await pilot.pause()
+        await type_into(pilot, app, "span", "support.at", "10 ft")
+        await goto(pilot, "3")
+        lst = app.job_screen.query_one("#load-list")
+        lst.focus()
+        lst.highlighted = 0
+        await pilot.pause()
+        await type_into(pilot, app, "loads", "load.end", "10 ft")
+        await type_into(pilot, app, "loads", "load.value", "-100 lbf/ft")
+        await goto(pilot, "7")
+        ev = s.evaluation
+        assert ev.ok, ev.problems
+        reactions = text_of(app, "#res-reactions")
+        # w = 100 lbf/ft, l = 5 ft: ends 3wl/8 = 187.5 lbf, middle 10wl/8 = 625 lbf
+        assert reactions.count("187.5 lbf") == 2
+        assert "625 lbf" in reactions
+        forces = sorted(round(r.force / 4.4482216152605, 3) for r in ev.result.solution.reactions)
+        assert forces == [187.5, 187.5, 625.0]
+        assert "PASS" in text_of(app, "#res-checks") or "FAIL" in text_of(app, "#res-checks")
+
+
+@sync
+async def test_editing_a_load_changes_the_moment_plot():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await goto(pilot, "8")
+        before = text_of(app, "#plot-moment")
+        assert "max" in before and "min" in before
+        await goto(pilot, "3")
+        lst = app.job_screen.query_one("#load-list")
+        lst.focus()
+        lst.highlighted = 3  # the stair point load at the end of the overhang
+        await pilot.pause()
+        assert field(app, "loads", "load.value").value == "-1200 lbf"
+        await type_into(pilot, app, "loads", "load.value", "-2400 lbf")
+        assert "down" in message_of(field(app, "loads", "load.value"))
+        await goto(pilot, "8")
+        after = text_of(app, "#plot-moment")
+        assert after != before
+        # hogging over the post doubles its overhang part: 2400 lbf x 3 ft plus the rest
+        mins = [ln for ln in after.splitlines() if " min " in ln]
+        assert mins and "at x = 12 ft" in mins[0]
+        assert app.job_screen.session.dirty
+
+
+@sync
+async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await goto(pilot, "2")
+        await type_keys(pilot, app, "span", "beam.length", "12")
+        f = field(app, "span", "beam.length")
+        msg = message_of(f)
+        assert msg.startswith("problem:") and "unit" in msg
+        assert "problem" in text_of(app, "#summary")
+        s = app.job_screen.session
+        assert not s.evaluation.ok
+        assert len(s.rows("loads")) == 4  # the rest of the job is still there
+        await type_keys(pilot, app, "span", "beam.length", " ft", clear=False)
+        assert message_of(f) == "= 12 ft"
+        # the overhang loads now lie beyond the end: each says so, by its own key
+        assert any(p.key.startswith("loads[") for p in s.evaluation.errors)
+        await type_into(pilot, app, "span", "beam.length", "15 ft")
+        assert s.evaluation.ok
+
+
+@sync
+async def test_save_reopen_gives_the_identical_job(tmp_path):
+    path = tmp_path / "shelf.toml"
+    shutil.copy(PRESETS / "continuous-shelf.toml", path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await type_into(pilot, app, "job", "title", "Shelf, bay 7")
+        await goto(pilot, "2")
+        await type_into(pilot, app, "span", "beam.length", "10 ft 6 in")
+        s = app.job_screen.session
+        assert s.dirty
+        first = s.evaluation.result
+        await pilot.press("ctrl+s")
+        await pilot.pause()
+        assert not s.dirty
+        saved = path.read_text(encoding="utf-8")
+        assert saved == s.doc.text()
+        assert 'length = "10 ft 6 in"' in saved
+    app2 = make_app(path, cursor_blink=False)
+    async with app2.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        s2 = app2.job_screen.session
+        assert s2.doc.text() == saved and not s2.dirty
+        again = s2.evaluation.result
+        assert again.job.title == "Shelf, bay 7"
+        assert [round(r.force, 6) for r in again.solution.reactions] == \
+            [round(r.force, 6) for r in first.solution.reactions]
+        # comments of the original file survive the edit
+        assert saved.splitlines()[0] == (PRESETS / "continuous-shelf.toml").read_text(
+            encoding="utf-8").splitlines()[0]
+
+
+@sync
+async def test_save_conflict_shows_the_diff_and_can_overwrite(tmp_path):
+    path = tmp_path / "arm.toml"
+    shutil.copy(PRESETS / "lumber-rack-arm.toml", path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await type_into(pilot, app, "job", "title", "Mine")
+        path.write_text(path.read_text(encoding="utf-8").replace("title =", "# theirs\ntitle ="),
+                        encoding="utf-8")
+        await pilot.press("ctrl+s")
+        await pilot.pause()
+        assert isinstance(app.screen, ConflictScreen)
+        assert "# theirs" in app.screen.conflict.diff
+        await pilot.press("o")
+        await pilot.pause()
+        assert isinstance(app.screen, JobScreen)
+        assert 'title = "Mine"' in path.read_text(encoding="utf-8")
+
+
+@sync
+async def test_saving_a_bundled_preset_makes_a_user_copy(_own_library):
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await type_into(pilot, app, "job", "title", "Our loft beam")
+        await pilot.press("ctrl+s")
+        await pilot.pause()
+        copy = _own_library / "demo.toml"
+        assert copy.is_file() and 'title = "Our loft beam"' in copy.read_text(encoding="utf-8")
+        assert app.job_screen.session.origin == "user"
+        assert "Loft beam over the saw bay" in (PRESETS / "demo.toml").read_text(encoding="utf-8")
+
+
+@sync
+async def test_quit_with_unsaved_changes_asks_first():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await type_into(pilot, app, "job", "title", "Changed")
+        await pilot.press("ctrl+q")
+        await pilot.pause()
+        assert isinstance(app.screen, ConfirmScreen)
+        await pilot.press("escape")
+        await pilot.pause()
+        assert isinstance(app.screen, JobScreen) and app.is_running
+        await pilot.press("ctrl+q")
+        await pilot.pause()
+        await pilot.press("d")
+        await pilot.pause()
+    assert app.return_code == 0 or app.return_code is None
+
+
+@sync
+async def test_lifting_job_has_the_stronger_banner():
+    app = make_app(PRESETS / "jib-arm.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        banner = app.job_screen.query_one("#banner")
+        assert "LIFTING DEVICE" in str(banner.content)
+        assert banner.has_class("-lifting")
+
+
+@sync
+async def test_calc_sheet_is_made_in_a_worker():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await goto(pilot, "9")
+        await app.workers.wait_for_complete()
+        await pilot.pause()
+        text = text_of(app, "#calc-body")
+        assert "calc sheet" in text.lower()
+
+
+@sync
+async def test_picking_a_catalog_section_from_type_ahead():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await goto(pilot, "4")
+        await type_into(pilot, app, "section", "section.designation", "W10x")
+        lst = app.job_screen.query_one("#sec-matches")
+        assert lst.option_count > 3
+        lst.focus()
+        lst.highlighted = 0
+        await pilot.press("enter")
+        await pilot.pause()
+        s = app.job_screen.session
+        des = s.doc.get("beam.section")
+        assert des.upper().startswith("W10X")
+        assert s.evaluation.ok and s.evaluation.job.section.designation.upper() == des.upper()
