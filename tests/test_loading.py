@@ -1,0 +1,212 @@
+"""Load states: pattern loading on continuous beams and moving point loads."""
+
+from __future__ import annotations
+
+import numpy as np
+import pytest
+
+from shopbeam.capacity import capacity
+from shopbeam.errors import InputError
+from shopbeam.jobfile import parse_job_text
+from shopbeam.loading import (candidate_positions, envelope_bruteforce, evaluate, read_moving,
+                              state_set)
+from shopbeam.solver import solve
+
+LBF, FT = 4.4482216152605, 0.3048
+
+THREE_SPANS = """schema = 1
+title = "Three-span shelf rail"
+[beam]
+length = "30 ft"
+section = "HSS4x4x1/4"
+material = "A500-C"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[supports]]
+at = "20 ft"
+type = "roller"
+[[supports]]
+at = "30 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "30 ft"
+value = "-100 lbf/ft"
+patterned = true
+"""
+
+
+def _span_max(sol, a, b):
+    return sol.moment.extremes(a, b).max
+
+
+def test_three_span_patterns_match_the_known_worst_cases():
+    # common practice (continuous-beam coefficient tables, from memory): equal spans L,
+    # patterned uniform w: support moment worst with the two adjacent spans loaded,
+    # -0.1167 wL^2 (all loaded: -0.100); end-span moment worst with alternate spans (1 and 3)
+    # loaded, +0.1013 wL^2 (all loaded: +0.080); centre span worst with only it loaded, +0.075
+    job = parse_job_text(THREE_SPANS)
+    ss = state_set(job)
+    w, L = 100 * LBF / FT, 10 * FT
+    assert len(ss.patterns) == 8
+    mb = {p: ss.state(1.0, p).moment(L) for p in ss.patterns}
+    worst_b = min(mb, key=mb.get)
+    assert set(worst_b) == {0, 1}
+    assert mb[worst_b] / (w * L**2) == pytest.approx(-0.11667, abs=2e-4)
+    assert mb[(0, 1, 2)] / (w * L**2) == pytest.approx(-0.100, abs=1e-9)
+    m1 = {p: _span_max(ss.state(1.0, p), 0, L) for p in ss.patterns}
+    worst_1 = max(m1, key=m1.get)
+    assert worst_1 == (0, 2)
+    assert m1[worst_1] / (w * L**2) == pytest.approx(0.10125, abs=2e-4)
+    assert m1[(0, 1, 2)] / (w * L**2) == pytest.approx(0.080, abs=2e-4)
+    m2 = {p: _span_max(ss.state(1.0, p), L, 2 * L) for p in ss.patterns}
+    assert max(m2, key=m2.get) == (1,)
+    assert m2[(1,)] / (w * L**2) == pytest.approx(0.075, abs=2e-4)
+
+
+def test_pattern_states_equal_a_direct_solve():
+    # superposition check: a pattern state equals the beam solved with only those spans loaded
+    job = parse_job_text(THREE_SPANS)
+    ss = state_set(job)
+    st = ss.state(1.7, (0, 2))
+    from dataclasses import replace
+
+    from shopbeam.model import Load
+
+    w = -100 * LBF / FT * 1.7
+    loads = (Load("uniform", start=0, end=10 * FT, w1=w), Load("uniform", start=20 * FT, end=30 * FT, w1=w))
+    direct = solve(replace(ss.beam, loads=loads))
+    xs = np.linspace(0, 30 * FT, 301)
+    for name in ("shear", "moment", "deflection"):
+        a, b = st.function(name)(xs), direct.function(name)(xs)
+        assert np.max(np.abs(a - b)) <= 1e-9 * np.max(np.abs(b))
+
+
+def test_evaluation_reports_the_worst_pattern_per_check():
+    job = parse_job_text(THREE_SPANS)
+    ev = evaluate(job)
+    bend = next(c for c in ev.checks if c.name == "bending")
+    assert set(ev.worst["bending"]["pattern"]) in ({0, 1}, {1, 2})
+    assert "worst state" in bend.detail
+    w, L = 100 * LBF / FT, 10 * FT
+    assert bend.demand == pytest.approx(0.11667 * w * L**2, rel=2e-3)
+
+
+MOVING = """schema = 1
+title = "Monorail with overhang"
+tags = ["lifting"]
+[beam]
+length = "20 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "{b} ft"
+type = "roller"
+{more}
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "20 ft"
+value = "-30 lbf/ft"
+case = "dead"
+[[moving]]
+label = "trolley"
+loads = ["-1000 lbf", "-1000 lbf"]
+dead = ["-60 lbf", "-60 lbf"]
+spacing = ["{s}"]
+"""
+
+
+@pytest.mark.parametrize("b, more, s", [
+    (20, "", "18 in"),
+    (14, "", "18 in"),
+    (9, '[[supports]]\nat = "20 ft"\ntype = "roller"', "5 ft"),
+])
+def test_moving_envelope_matches_a_fine_resolve(b, more, s):
+    # test oracle only: the same checks re-solved at 601 evenly spaced trolley positions;
+    # the exact envelope may only be (slightly) worse, never better; then re-solved on a
+    # fine local grid around the exact worst position, where it must agree closely
+    job = parse_job_text(MOVING.format(b=b, more=more, s=s))
+    ev = evaluate(job)
+    bf = envelope_bruteforce(job, 1.0, 601)
+    for c in ev.checks:
+        ref = bf[c.name][0]
+        assert c.demand >= ref * (1 - 1e-12)
+        assert c.demand <= ref * (1 + 3e-3)
+    from dataclasses import replace
+
+    from shopbeam.checks import checks_for, strengths
+    from shopbeam.model import Load
+
+    ss = state_set(job)
+    st = strengths(job, beam=ss.beam)
+    mv = ss.parts.moving[0]
+    lo, hi = mv.p_range
+    for c in ev.checks:
+        p0 = ev.worst[c.name]["position"]
+        best = 0.0
+        for p in np.clip(np.linspace(p0 - 0.01, p0 + 0.01, 81), lo, hi):
+            wheels = tuple(Load("point", at=p + o, value=d + 1.15 * f)
+                           for o, f, d in zip(mv.offsets, mv.live, mv.dead))
+            sol = solve(replace(ss.beam, loads=tuple(ss.static_loads(1.0, ())) + wheels))
+            best = max(best, next(x for x in checks_for(job, sol, st, cb_one=True)
+                                  if x.name == c.name).demand)
+        assert c.demand >= best * (1 - 1e-12)
+        assert c.demand <= best * (1 + 2e-4)
+
+
+def test_two_wheels_on_a_simple_span_classic_result():
+    # common practice (classic moving-load result): two equal loads P at spacing a on a simple
+    # span L (a < 0.586 L): absolute max moment P (L - a/2)^2 / (2 L), under a wheel placed
+    # a/4 from midspan; one load alone: PL/4
+    text = MOVING.format(b=20, more="", s="4 ft").replace('value = "-30 lbf/ft"', 'value = "0 lbf/ft"')
+    text = text.replace('tags = ["lifting"]', "tags = []").replace('dead = ["-60 lbf", "-60 lbf"]', "")
+    text = text.replace("[beam]", "[beam]\nself_weight = false")
+    job = parse_job_text(text)
+    ev = evaluate(job)
+    P, L, a = 1000 * LBF, 20 * FT, 4 * FT
+    bend = next(c for c in ev.checks if c.name == "bending")
+    assert bend.demand == pytest.approx(P * (L - a / 2) ** 2 / (2 * L), rel=1e-9)
+    assert bend.at == pytest.approx(L / 2 - a / 4, abs=1e-6) or bend.at == pytest.approx(L / 2 + a / 4, abs=1e-6)
+
+
+def test_moving_candidates_are_few_and_inside_the_travel():
+    job = parse_job_text(MOVING.format(b=14, more="", s="18 in"))
+    ss = state_set(job)
+    cands = candidate_positions(job, ss, ss.static_loads(1.0, ()), 1.0)
+    lo, hi = ss.parts.moving[0].p_range
+    assert all(lo - 1e-12 <= p <= hi + 1e-12 for p in cands)
+    assert len(cands) < 400
+
+
+def test_capacity_with_a_moving_load_is_exact():
+    job = parse_job_text(MOVING.format(b=14, more="", s="18 in"))
+    res = capacity(job)
+    assert max(c.ratio for c in res.checks) == pytest.approx(1.0, abs=1e-9)
+    assert all(c.ratio <= 1.0 for c in res.checks)
+
+
+@pytest.mark.parametrize("bad, key", [
+    ('spacing = ["18 in", "2 ft"]', "moving[0].spacing"),
+    ('travel = ["0 ft", "30 ft"]', "moving[0].travel"),
+    ('wheels = 2', "moving[0].wheels"),
+])
+def test_moving_table_errors_name_the_key(bad, key):
+    text = MOVING.format(b=14, more="", s="18 in")
+    if bad.startswith("spacing"):
+        text = text.replace('spacing = ["18 in"]', bad)
+    else:
+        text = text.replace('spacing = ["18 in"]', 'spacing = ["18 in"]\n' + bad)
+    job = parse_job_text(text)
+    with pytest.raises(InputError) as e:
+        read_moving(job)
+    assert e.value.problem.key == key
