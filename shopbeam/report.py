@@ -109,6 +109,8 @@ def render(result: Result) -> str:
         lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, sy)} vs limit "
                      f"{check_value(c.limit, c.unit, sy)}{where}: ratio {c.ratio:.3f}  {verdict}")
         lines += _wrap(c.formula, "      ")
+        if "worst state" in c.detail:  # pattern or moving-load position that governs
+            lines += _wrap(c.detail[c.detail.index("worst state"):], "      ")
         for s in c.extra.get("spans", []) if len(c.extra.get("spans", [])) > 1 else []:
             lines.append(f"      {s['kind']} {fmt_pos(s['start'], sy)}-{fmt_pos(s['end'], sy)}: "
                          f"{f(s['demand'], 'small_length')} vs {f(s['limit'], 'small_length')}")
