@@ -315,7 +315,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
     for name, (c, pattern, p, words, sol) in best.items():
         if words:
             c = replace(c, detail="; ".join(x for x in (c.detail, "worst state: " + words) if x))
-        if ss.parts.moving:
+        if ss.parts.moving and name == "bending":
             c = replace(c, formula=c.formula + " (moving loads: Cb = 1.0)")
         checks.append(c)
         worst[name] = {"pattern": pattern, "position": p, "words": words}
