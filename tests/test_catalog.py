@@ -130,16 +130,17 @@ def test_list_sections_kinds_and_filters():
 
 
 def test_catalog_is_fast_and_pint_free():
-    code = ("import time, sys; t = time.perf_counter(); from shopbeam import catalog;"
-            "s = catalog.list_sections('HSS'); a = time.perf_counter() - t;"
-            "t = time.perf_counter(); s = catalog.list_sections('HSS');"
-            "catalog.lookup('HSS4x4x1/4'); b = time.perf_counter() - t;"
+    # CPU time of this process, so a busy machine (parallel tests) does not skew it
+    code = ("import time, sys; t = time.process_time(); from shopbeam import catalog;"
+            "s = catalog.list_sections('HSS'); a = time.process_time() - t;"
+            "t = time.process_time(); s = catalog.list_sections('HSS');"
+            "catalog.lookup('HSS4x4x1/4'); b = time.process_time() - t;"
             "print(a, b, 'pint' in sys.modules)")
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True,
                          check=True, cwd=MAIN).stdout.split()
     first, again, pint_loaded = float(out[0]), float(out[1]), out[2]
     assert first < 0.5, first       # import + parse the whole catalog once
-    assert again < 0.01, again      # cached afterwards
+    assert again < 0.02, again      # cached afterwards
     assert pint_loaded == "False"   # no units registry in the look-up path
 
 
