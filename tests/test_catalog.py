@@ -425,3 +425,24 @@ def test_respelled_designations_find_the_same_section(data):
 def test_rounded_decimal_walls(typed, label):
     # found by the respelling test: 5/16 in is typed .312 or .313, 3/16 as .19
     assert catalog.lookup(typed).designation == label
+
+
+@pytest.mark.skipif(not (MAIN / "shopbeam" / "cli.py").exists(), reason="CLI not yet built")
+def test_job_naming_a_catalog_section_and_material_solves_with_self_weight(tmp_path):
+    job = tmp_path / "hss.toml"
+    job.write_text('schema = 1\ntitle = "catalog check"\n[beam]\nlength = "12 ft"\n'
+                   'section = "HSS 4 x 4 x .250"\nmaterial = "A500 Gr C"\n'
+                   '[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+                   '[[supports]]\nat = "12 ft"\ntype = "roller"\n'
+                   '[[loads]]\ntype = "point"\nat = "6 ft"\nvalue = "-1000 lbf"\n')
+    p = _cli("solve", str(job), "--json")
+    assert p.returncode == 0, p.stderr
+    out = json.loads(p.stdout)
+    # hand check: simple span, midspan load P L^3 / 48 EI plus the tabulated self-weight
+    # 12.21 lb/ft (AISC Shapes Database v15.0) as 5 w L^4 / 384 EI; E 29,000 ksi, I 7.80 in^4
+    P, L, E, I, w = 1000.0, 144.0, 29.0e6, 7.80, 12.21 / 12
+    sag = P * L**3 / (48 * E * I) + 5 * w * L**4 / (384 * E * I)
+    assert out["extremes"]["deflection"]["min"] == pytest.approx(-sag * IN, rel=1e-3)
+    total = 1000.0 + 12.21 * 12
+    assert sum(r["force"] for r in out["reactions"]) == pytest.approx(total * 4.4482216152605,
+                                                                      rel=1e-6)
