@@ -116,7 +116,13 @@ def build_parser() -> argparse.ArgumentParser:
     s.add_argument("designation")
     s.add_argument("--json", action="store_true")
     s.add_argument("--units", choices=("us", "si"), default="us")
+    s.add_argument("--axis", choices=("strong", "weak"), default=None,
+                   help="bending axis (default strong; weak turns the section)")
     s.set_defaults(func=_lazy("shopbeam.catalog", "cmd_section"))
+
+    s = sub.add_parser("materials", help="list the built-in materials with their sources")
+    s.add_argument("--json", action="store_true")
+    s.set_defaults(func=_lazy("shopbeam.materials", "cmd_materials"))
 
     s = sub.add_parser("shapes", help="list catalog sections")
     s.add_argument("--kind", default=None)

@@ -463,16 +463,18 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if axis is not None and axis not in ("strong", "weak"):
             r.error(f"axis {axis!r} must be \"strong\" or \"weak\"", "beam.axis")
             axis = None
-        if "section" not in beam:
-            r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
-                    "[beam.section] table)", "beam.section")
-        else:
-            section = _resolve("section", beam["section"], "beam.section", r, axis=axis)
+        # the material first: it decides the design wall of tube (0.93 x nominal for A500)
         if "material" not in beam:
             r.error("missing 'material' (a key such as \"A500-C\", or a [beam.material] table)",
                     "beam.material")
         else:
             material = _resolve("material", beam["material"], "beam.material", r)
+        if "section" not in beam:
+            r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
+                    "[beam.section] table)", "beam.section")
+        else:
+            section = _resolve("section", beam["section"], "beam.section", r, axis=axis,
+                               material=material)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
             r.error("self_weight must be true or false", "beam.self_weight")

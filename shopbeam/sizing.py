@@ -182,7 +182,7 @@ def default_kind(job) -> str:
     m = re.match(r"[A-Za-z]+", job.section.designation or "")
     if m and m.group(0).upper() in {k.upper() for k in catalog.kinds()}:
         return next(k for k in catalog.kinds() if k.upper() == m.group(0).upper())
-    return job.section.shape
+    return catalog.kind_of(job.section) or job.section.shape
 
 
 def _candidates(job, kind, max_depth, stock):
