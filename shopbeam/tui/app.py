@@ -97,8 +97,7 @@ class JobScreen(Screen):
         yield Static("", id="titlebar", markup=False)
         yield ViewBar([(v[0], v[1], v[2]) for v in VIEWS], id="viewbar")
         with ContentSwitcher(initial="job", id="views"):
-            for vid, _key, _name, _short, cls in VIEWS:
-                yield cls(id=vid)
+            yield JobView(id="job")  # the other views are built when first shown
         yield Static("", id="summary", markup=False)
         yield Footer()
 
@@ -152,9 +151,13 @@ class JobScreen(Screen):
         self.refresh_all()
 
     # ------------------------------------------------------------------ navigation
-    def action_view(self, vid: str) -> None:
+    async def action_view(self, vid: str) -> None:
+        switcher = self.query_one(ContentSwitcher)
+        if not switcher.query(f"#{vid}"):
+            cls = next(v[4] for v in VIEWS if v[0] == vid)
+            await switcher.mount(cls(id=vid))
         self.current = vid
-        self.query_one(ContentSwitcher).current = vid
+        switcher.current = vid
         self.refresh_all()
         view = self.query_one(f"#{vid}")
         self.call_after_refresh(self._focus_first, view)
@@ -167,9 +170,9 @@ class JobScreen(Screen):
                 return
         view.focus()
 
-    def action_step(self, step: int) -> None:
+    async def action_step(self, step: int) -> None:
         ids = [v[0] for v in VIEWS]
-        self.action_view(ids[(ids.index(self.current) + step) % len(ids)])
+        await self.action_view(ids[(ids.index(self.current) + step) % len(ids)])
 
     def action_leave_field(self) -> None:
         self.set_focus(None)
@@ -494,13 +497,14 @@ class JobScreen(Screen):
 
     def new_job(self) -> None:
         self.set_session(Session.new(library_dir=self.session.library_dir))
-        self.action_view("job")
+        self.call_later(self.action_view, "job")
 
     def set_session(self, session: Session) -> None:
         self.session = session
         for v in self.query(RowsView):
             v.selected = 0
-        self.query_one("#sizing", SizingView)._kind_set = False
+        for v in self.query(SizingView):
+            v._kind_set = False
         self.refresh_all()
 
 

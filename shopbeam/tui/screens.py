@@ -21,7 +21,8 @@ KEYS = [
         ("ctrl+n / ctrl+p", "next / previous view"),
         ("1 to 6", "input views: job, span, loads, section, material, criteria"),
         ("7 8 9 0 s", "results, plots, calc sheet, rating, sizing"),
-        ("esc", "leave the field (then the view keys above work)"),
+        ("esc", "leave the field, so the view keys above work"),
+        ("alt+1 ... alt+s", "the same views from inside a field"),
         ("tab / shift+tab", "next / previous field"),
         ("ctrl+o or l", "library: open, duplicate, new"),
         ("ctrl+s", "save (a bundled preset is saved as your own copy)"),
@@ -53,12 +54,17 @@ KEYS = [
 ]
 
 
-def help_text() -> str:
+def help_text(width: int = 74) -> str:
+    import textwrap
+
     out = ["shopbeam keys", ""]
+    col = 20
     for group, keys in KEYS:
         out.append(group)
         for k, what in keys:
-            out.append(f"  {k:<22} {what}")
+            lines = textwrap.wrap(what, max(20, width - col - 2)) or [""]
+            out.append(f"  {k:<{col - 2}}{lines[0]}")
+            out += [" " * col + ln for ln in lines[1:]]
         out.append("")
     out.append("Signs: forces + up (gravity loads negative), couples + counterclockwise,")
     out.append("moment + sagging, deflection + up (sag is negative).")
@@ -69,8 +75,9 @@ class HelpScreen(ModalScreen):
     BINDINGS = [Binding("escape,q,f1,question_mark", "close", "close")]
 
     def compose(self) -> ComposeResult:
+        width = min(96, self.app.size.width) - 8
         with VerticalScroll(classes="dialog", id="help"):
-            yield Static(help_text(), markup=False)
+            yield Static(help_text(width), markup=False)
             yield Static("esc closes this help.", markup=False)
         yield Footer()
 
@@ -217,7 +224,7 @@ class LibraryScreen(Screen[object]):
 
     def compose(self) -> ComposeResult:
         yield Banner(id="banner")
-        yield Static("Library: shop (shared) first, then yours, then the bundled presets.",
+        yield Static("Library: shop, user and bundled jobs. Type to search; enter opens.",
                      classes="view-title", markup=False)
         yield Field("Search", "library.search", placeholder="title, tag or name words")
         yield OptionList(id="lib-list")
@@ -269,6 +276,16 @@ class LibraryScreen(Screen[object]):
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
         self.fill(event.value)
+
+    def on_key(self, event) -> None:
+        """Typing on the list goes to the search field."""
+        lst = self.query_one("#lib-list", OptionList)
+        if lst.has_focus and event.is_printable and event.character and event.character != " ":
+            inp = self.query_one(Field).input
+            inp.focus()
+            inp.insert_text_at_cursor(event.character)
+            event.stop()
+            event.prevent_default()
 
     def on_input_submitted(self, event: Input.Submitted) -> None:
         event.stop()
