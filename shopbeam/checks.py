@@ -402,9 +402,14 @@ def _f7(sec, fy, e) -> Flexure:
             m = min(mp, mp - (mp - fy * s) * (0.305 * ht / root - 0.738))
             tx = f"F7-6 web local buckling (noncompact, h/t {ht:.3g})"
         else:
-            m = fy * s * 0.9
-            tx = f"slender web (h/t {ht:.3g}): 0.9 Fy S used (F7-7 not applied)"
-            warnings.append("slender HSS web: AISC 360 F7.3(c) not applied; have it checked")
+            # AISC 360-16 F7.3(c), recalled from memory: Mn = Rpg Fy S (compression flange
+            # yielding) with Rpg per F5-6 and aw = 2 h tw / (b tf) <= 10 (= 2 h / b for a tube)
+            aw = min(2 * d["h_flat"] / d["b_flat"], 10.0)
+            rpg = min(1.0, 1 - aw / (1200 + 300 * aw) * (ht - 5.7 * root))
+            m = rpg * fy * s
+            tx = f"F7.3(c) slender web (h/t {ht:.3g}): Mn = Rpg Fy S, Rpg {rpg:.3g}"
+            warnings.append("slender HSS web: AISC 360 F7.3(c) applied from memory; "
+                            "have the section checked by an engineer")
         if m < cap:
             cap, text = m, tx
     ltb = None
