@@ -83,7 +83,7 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
         if s.kind == "spring":
             r = next(r for r in sol.reactions if r.at == s.at and r.kind == "spring")
             gap = r.force + s.stiffness * sol.deflection(s.at)
-            worst = max(worst, abs(gap) / (fscale or 1.0))
+            worst = max(worst, abs(gap) / (f_all or 1.0))  # couples count too
             counts["R = -k u"] += 1
     met = ", ".join(f"{k} ({n})" for k, n in counts.items() if n)
     out.append(SelfCheck(
@@ -145,16 +145,23 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
         {"worst": float(gap)}))
 
     # Magnitudes: rules of thumb of the trade (common practice, no source). The lever arm is
-    # the longest span or overhang; the deflection scale adds a spring's own give.
-    fref = fabs + cabs / max(lref, 1e-12)
+    # the longest span or overhang; the deflection scale adds a spring's own give. The forces
+    # on the beam are its loads and its reactions: two close supports under a long overhang
+    # (bolts of a bracket) carry many times the load, and so does the shear between them.
+    fref = (fabs + sum(abs(r.force) for r in sol.reactions)
+            + (cabs + sum(abs(r.moment) for r in sol.reactions)) / max(lref, 1e-12))
     springs = [s.stiffness for s in beam.supports if s.kind == "spring"]
-    uref = fref * lref**3 / ei + (fref / min(springs) if springs else 0.0)
+    # deflection is levered up where the beam tips about a support or hinge close to another
+    # (a spring's give, or the bending beyond a hinge, carried out to a long overhang)
+    pts = np.unique([s.at for s in beam.supports])
+    lever = max(1.0, L / float(np.min(np.diff(pts)))) if pts.size > 1 else 1.0
+    uref = lever * (fref * lref**3 / ei + (fref / min(springs) if springs else 0.0))
     if fref > 0:
         rv, rm_, ru = vmax / fref, mmax / (fref * lref), umax / uref
         ok_v, ok_m, ok_u = rv <= 1.5, rm_ <= 1.5, ru <= 1.0
         out.append(SelfCheck(
             "shear magnitude", ok_v,
-            f"largest shear is {rv:.3g} x the total applied force (expect about 1 or less)",
+            f"largest shear is {rv:.3g} x the total of loads and reactions (expect 1 or less)",
             {"ratio": rv}))
         out.append(SelfCheck(
             "moment magnitude", ok_m,

@@ -116,3 +116,60 @@ def test_empty_value_string_is_an_input_error_not_an_index_error(tmp_path, text)
     rc, out, err, p = _cli(tmp_path, _JOB.replace('length = "10 ft"', f'length = "{text}"'))
     assert rc == 2, err
     assert "internal error" not in err and "beam.length" in err
+
+
+# ------------------------------------------------------------------ self-check false alarms
+def _failed(sol):
+    return [(d.name, d.detail) for d in sol.diagnostics if not d.ok]
+
+
+def test_shear_between_close_bolts_under_an_overhang_is_not_a_warning():
+    # A bracket: two supports 1 in apart, load 12 in out. Statics: the support nearer the
+    # load takes P (a + b) / b = 13 P, the other 12 P, so the shear between them is 12 P
+    # (hand statics). The "largest shear vs total applied force" rule used to flag this
+    # correct answer; the forces on the beam include the reactions.
+    inch, P = 0.0254, 500.0
+    beam = Beam(13 * inch, 1e5, (Support(0.0, "pin"), Support(inch, "roller")),
+                (Load("point", at=13 * inch, value=-P),))
+    sol = solve(beam)
+    assert sol.reactions[0].force == pytest.approx(-12 * P, rel=1e-12)
+    assert sol.reactions[1].force == pytest.approx(13 * P, rel=1e-12)
+    assert not _failed(sol)
+
+
+def test_spring_give_levered_by_a_close_pin_is_not_a_warning():
+    # Load on a soft spring at x = 0 with a pin 1/48 of the length away: the beam tips about
+    # the pin, so the far end moves about 47 x the spring's give (hand statics: R_spring = P,
+    # u(0) = -P/k). The deflection rule of thumb used to flag it.
+    L, k, P = 1.0, 1000.0, 7.0
+    beam = Beam(L, 2e4, (Support(0.0, "spring", stiffness=k), Support(L / 48, "pin")),
+                (Load("point", at=0.0, value=-P),))
+    sol = solve(beam)
+    assert sol.deflection(0.0) == pytest.approx(-P / k, rel=1e-9)
+    assert not _failed(sol)
+
+
+def test_spring_condition_judged_against_couples_when_there_are_no_forces():
+    # Only a couple, at a fixed end, with a spring nearby: every force is ~1e-20 N of
+    # rounding, and the spring's R + k u was judged against that, so rounding looked like
+    # a 15 % miss. The couple sets the scale (hand statics: the fixed end takes it all).
+    beam = Beam(1.0, 2e4, (Support(0.0, "fixed"), Support(1 / 48, "spring", stiffness=1e3),
+                           Support(2 / 48, "fixed")),
+                (Load("moment", at=0.0, value=7.0),))
+    sol = solve(beam)
+    assert sol.reactions[0].moment == pytest.approx(-7.0, rel=1e-12)
+    assert not _failed(sol)
+
+
+def test_overhang_levered_by_a_hinge_next_to_a_pin_is_not_a_warning():
+    # A short overhang on a pin with a hinge just past it: the overhang piece tips about the
+    # pin as the beam beyond the hinge bends, so its tip moves ~3 x the hinge's deflection.
+    # The "EI x deflection vs P L^3" rule used to flag this correct answer.
+    sups = (Support(0.0625, "pin"), Support(1 / 12, "hinge"), Support(0.1875, "pin"),
+            Support(0.2083333, "hinge"), Support(0.4375, "fixed"), Support(0.5, "fixed"),
+            Support(0.75, "fixed"))
+    sol = solve(Beam(1.0, 2e4, sups, (Load("point", at=0.0, value=7.0),)))
+    # hand statics on the overhang piece [0, 1/12]: moments about the pin give the hinge
+    # force 7 * 0.0625 / (1/12 - 0.0625) = 21 N, so the pin takes 7 + 21 = 28 N downward
+    assert sol.reactions[0].force == pytest.approx(-28.0, rel=1e-9)
+    assert not _failed(sol)
