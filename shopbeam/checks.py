@@ -33,6 +33,7 @@ import math
 from dataclasses import dataclass, field
 
 from shopbeam.solver import Solution, segments
+from shopbeam.units import fmt
 
 OMEGA_B = 1.67  # AISC 360-16 F1
 OMEGA_V = 1.67  # AISC 360-16 G1
@@ -588,8 +589,9 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
         if worst is None or r > worst[0]:
             worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb)
     r, mmax, allow, at, text, (a, b), cb = worst
+    pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     seg_words = "" if len(st.ltb_segments) == 1 else \
-        f"; unbraced length {a:.4g}-{b:.4g} m governs"
+        f"; unbraced length {pos(a)} to {pos(b)} governs"
     if fl.stress_s:
         s = fl.stress_s
         bend = Check("bending", mmax / s, allow / s, "Pa", f"{basis}: {text}", at,
@@ -611,7 +613,7 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     defl = Check("deflection", w["demand"], w["limit"], "m",
                  f"largest deflection in each span against {st.defl_words} "
                  "(cantilevers and overhangs on twice their length)", w["at"],
-                 detail=f"{w['kind']} {w['start']:.4g}-{w['end']:.4g} m ({w['rule']})",
+                 detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} ({w['rule']})",
                  extra={"spans": spans})
     return [bend, shear, defl]
 
