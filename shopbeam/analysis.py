@@ -21,6 +21,7 @@ class Result:
     solution: Solution
     checks: tuple[Check, ...]
     cautions: tuple[str, ...]
+    shown_state: str = ""  # which load state the reactions and diagrams show, if not the only one
 
     @property
     def governing(self) -> Check:
@@ -56,10 +57,33 @@ def analyze(job: Job) -> Result:
         sol = solve(job.beam(), length_fmt=length_formatter(job.units))
     except UnstableBeam as e:
         raise UnstableBeam(e.args[0], file=job.path or "") from None
-    checks = run_checks(job, sol)
-    from shopbeam.checks import check_notes
+    from shopbeam import loading
+    from shopbeam.checks import check_notes, impact_of
 
-    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol) + check_notes(job)))
+    shown = ""
+    if loading.needs_states(job):
+        # patterns, moving loads or impact: the checks cover every load state. The numbers
+        # shown are the loads as entered, except with moving loads (the entered loads do
+        # not include them): then the state that governs is shown
+        ev = loading.evaluate(job, 1.0)
+        checks = list(ev.checks)
+        gov = max(checks, key=lambda c: c.ratio)
+        words = ev.worst.get(gov.name, {}).get("words", "")
+        extra = [f"{ev.states} load state{'s' if ev.states != 1 else ''} checked"]
+        if impact_of(job):
+            extra.append(f"checks include the {impact_of(job):.0%} impact allowance on live loads")
+        if loading.read_moving(job) and ev.solution is not None:
+            sol = ev.solution
+            extra.append(f"reactions, extremes and diagrams are for the state that governs "
+                         f"{gov.name}" + (f" ({words})" if words else "")
+                         + (", impact included" if impact_of(job) else ""))
+        else:
+            extra.append("reactions, extremes and diagrams are for the loads as entered"
+                         + (" (all patterned loads on)" if any(ld.patterned for ld in job.loads) else ""))
+        shown = "; ".join(extra)
+    else:
+        checks = run_checks(job, sol)
+    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol) + check_notes(job)), shown)
 
 
 def to_json(result: Result) -> dict:
@@ -85,4 +109,5 @@ def to_json(result: Result) -> dict:
         "ei": job.ei,
         "self_weight": (-job.self_weight_load().w1 if job.self_weight else 0.0),
         "units": "SI (m, N, N*m, Pa, rad)",
+        "shown_state": result.shown_state,
     }

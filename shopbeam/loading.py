@@ -303,7 +303,8 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
             static = ss.static_loads(k, pattern)
             for p, sol in moving_states(job, ss, static, k, st, moving_cache):
                 count += 1
-                where = f"{mv.label} first wheel at {fmt(p)}"
+                shown = round(p / (job.length * 1e-6)) * job.length * 1e-6  # no 1e-7 ft noise
+                where = f"{mv.label} first wheel at {fmt(shown)}"
                 for c in checks_for(job, sol, st, cb_one=True):
                     _keep(best, c, pattern, p, "; ".join(x for x in (words, where) if x), sol)
         else:

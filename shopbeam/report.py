@@ -88,6 +88,9 @@ def render(result: Result) -> str:
         lines.append(f"    read as {c}")
     lines.append("")
 
+    if result.shown_state:
+        lines += _wrap("Note: " + result.shown_state + ".", "")
+        lines.append("")
     lines.append("REACTIONS (what each support does to the beam: + up, + counterclockwise)")
     for r in sol.reactions:
         mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
