@@ -83,7 +83,9 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
         if s.kind == "spring":
             r = next(r for r in sol.reactions if r.at == s.at and r.kind == "spring")
             gap = r.force + s.stiffness * sol.deflection(s.at)
-            worst = max(worst, abs(gap) / (f_all or 1.0))  # couples count too
+            # judged against its two terms: the forces (couples count too) and k times the
+            # deflection scale, which carries rounding k-fold for a very stiff spring
+            worst = max(worst, abs(gap) / (max(f_all, s.stiffness * u_scale) or 1.0))
             counts["R = -k u"] += 1
     met = ", ".join(f"{k} ({n})" for k, n in counts.items() if n)
     out.append(SelfCheck(
@@ -170,4 +172,14 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
         out.append(SelfCheck(
             "deflection magnitude", ok_u,
             f"EI x largest deflection is {ru:.3g} x P L^3 (expect 1 or less)", {"ratio": ru}))
+    # Conditioning: rounding grows with the condition number of the solved equations, so the
+    # answer is good to about eps x condition (supports or hinges very close together on a
+    # long beam). Warn when that could reach the 4th significant figure the report shows.
+    est = 2.2e-16 * sol.condition
+    out.append(SelfCheck(
+        "conditioning", est <= 1e-4,
+        f"results good to about {est:.0e} relative (condition number {sol.condition:.1e})"
+        + ("" if est <= 1e-4 else ": supports or hinges are very close together for the "
+           "length; merge them or move them apart"),
+        {"condition": sol.condition, "relative_accuracy": est}))
     return out

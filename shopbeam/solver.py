@@ -403,8 +403,22 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
         raise UnstableBeam("the supports and hinges leave the beam free to move: "
                            "add a support or fix one end") from None
     if not math.isfinite(condition) or condition > 1e14:
-        raise UnstableBeam("the beam is on the edge of being a mechanism (the equations are "
-                           "singular to working precision): check supports and hinges")
+        # the kinematic check passed, so the beam holds; its supports and hinges are only
+        # too close together for its length to solve in double precision
+        from shopbeam.errors import InputError
+
+        fmt = length_fmt or _fmt_len
+        xs = sorted(s.at for s in beam.supports)
+        gaps = [(b - a, a, b) for a, b in zip(xs, xs[1:]) if b > a]
+        near = ""
+        if gaps:
+            g, a, b = min(gaps)
+            near = (f" (the closest are at {fmt(a)} and {fmt(b)}, "
+                    f"{g / L:.1e} of the length apart)")
+        raise InputError("the equations cannot be solved accurately: supports or hinges are "
+                         f"far too close together for a beam this long{near}, or the beam is "
+                         "on the edge of being a mechanism. Merge supports that close, or "
+                         "check the supports and hinges")
     z = y / cs
     w = np.concatenate([[1.0], z])
     final = states @ w  # (P + 1, 6)

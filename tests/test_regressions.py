@@ -173,3 +173,33 @@ def test_overhang_levered_by_a_hinge_next_to_a_pin_is_not_a_warning():
     # force 7 * 0.0625 / (1/12 - 0.0625) = 21 N, so the pin takes 7 + 21 = 28 N downward
     assert sol.reactions[0].force == pytest.approx(-28.0, rel=1e-9)
     assert not _failed(sol)
+
+
+def test_very_stiff_spring_is_not_a_boundary_condition_warning():
+    # k = 1e18 N/m acts as a rigid support: R + k u was judged against the forces alone,
+    # but k carries the rounding of u (1e-18 m) up to ~1 N, so a right answer was flagged.
+    # Rigid-support value: two equal spans, a point load P at the centre of each, middle
+    # reaction 11P/8 (AISC Manual Table 3-23, two equal spans, concentrated load at the
+    # centre of each span; case number from memory not given).
+    beam = Beam(2.0, 6.5e5, (Support(0.0, "pin"), Support(1.0, "spring", stiffness=1e18),
+                             Support(2.0, "roller")),
+                (Load("point", at=0.5, value=-1000.0), Load("point", at=1.5, value=-1000.0)))
+    sol = solve(beam)
+    assert sol.reactions[1].force == pytest.approx(1000.0 * 11 / 8, rel=1e-9)
+    assert not _failed(sol)
+
+
+def test_supports_too_close_for_double_precision_are_not_called_a_mechanism():
+    # Two supports 0.01 mm apart on a 2000 ft beam: the kinematic check finds it stable,
+    # but the equations are singular to working precision. It used to say "unstable beam:
+    # on the edge of being a mechanism"; it is bad input with the two supports named.
+    from shopbeam.errors import InputError, UnstableBeam
+
+    L = 2000 * 0.3048
+    beam = Beam(L, 6.5e5, (Support(0.0, "pin"), Support(L / 2, "roller"),
+                           Support(L / 2 + 1e-5, "roller"), Support(L, "roller")),
+                (Load("point", at=0.3 * L, value=-1000.0),))
+    with pytest.raises(InputError) as err:
+        solve(beam)
+    assert not isinstance(err.value, UnstableBeam)
+    assert "too close together" in str(err.value) and "1000 ft" in str(err.value)
