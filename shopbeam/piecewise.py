@@ -117,12 +117,23 @@ class Piecewise:
 
     def __call__(self, x, side: str = "right"):
         """Evaluate at x (scalar or array). At a break, `side` picks the one-sided value."""
-        xa = np.atleast_1d(np.asarray(x, dtype=float))
         b = self.breaks
         p = len(b) - 1
         # positions this close to a break are at the break (the solver merges positions
-        # on a grid of 1e-9 of the length; this is a quarter of that grid)
+        # closer than 1e-9 of the length; this is a quarter of that)
         tol = 2.5e-10 * (b[-1] - b[0])
+        if isinstance(x, (int, float)):  # one point: the same steps in plain Python, ~10x faster
+            xf = float(x)
+            j = int(b.searchsorted(xf + tol, "right") if side == "right"
+                    else b.searchsorted(xf - tol, "left")) - 1
+            j = min(max(j, 0), p - 1)
+            t = min(max(xf, float(b[0])), float(b[-1])) - float(b[j])
+            row = self.coeffs[j].tolist()
+            out = row[-1]
+            for c in row[-2::-1]:
+                out = out * t + c
+            return out
+        xa = np.atleast_1d(np.asarray(x, dtype=float))
         if side == "right":
             j = np.searchsorted(b, xa + tol, side="right") - 1
         else:

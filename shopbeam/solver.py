@@ -442,6 +442,8 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
     reactions.sort(key=lambda r: r.at)
     c1 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c1"][0]])
     c2 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c2"][0]])
+    funcs = dict(shear=pw(1), moment=pw(2), slope=pw(3, 1.0 / ei), deflection=pw(4, 1.0 / ei))
+    find_candidates(list(funcs.values()))  # every renderer and check asks for extremes
     return Solution(
         beam=beam,
         reactions=tuple(reactions),
@@ -449,11 +451,8 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
         ei_slope_0=c1,
         ei_deflection_0=c2,
         load=pw(0),
-        shear=pw(1),
-        moment=pw(2),
-        slope=pw(3, 1.0 / ei),
-        deflection=pw(4, 1.0 / ei),
         condition=condition,
+        **funcs,
     )
 
 
