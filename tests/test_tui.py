@@ -193,10 +193,16 @@ async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
         assert len(s.rows("loads")) == 4  # the rest of the job is still there
         await type_keys(pilot, app, "span", "beam.length", " ft", clear=False)
         assert message_of(f) == "= 12 ft"
-        # the overhang loads now lie beyond the end: each says so, by its own key
-        assert any(p.key.startswith("loads[") for p in s.evaluation.errors)
-        await type_into(pilot, app, "span", "beam.length", "15 ft")
+        # what sat at the old end (15 ft: the stair load, the deck's end) followed the end;
+        # the post at 12 ft did not move
+        loads = s.rows("loads")
+        assert loads[3]["at"] == "12 ft" and loads[0]["end"] == "12 ft"
+        assert [r["at"] for r in s.rows("supports")] == ["0 ft", "12 ft"]
         assert s.evaluation.ok
+        # a position beyond the end is a problem named by its own row
+        await type_into(pilot, app, "span", "support.at", "20 ft")
+        msg = message_of(field(app, "span", "support.at"))
+        assert msg.startswith("problem:") and "beyond the end" in msg
 
 
 @sync

@@ -110,6 +110,8 @@ class JobScreen(Screen):
     # ------------------------------------------------------------------ showing
     def refresh_all(self) -> None:
         s, ev = self.session, self.session.evaluation
+        if ev.job is not None:
+            self._last_length = ev.job.length
         tags = ev.job.tags if ev.job is not None else (s.doc.get("tags") or [])
         if not isinstance(tags, list) and not isinstance(tags, tuple):
             tags = []
@@ -163,11 +165,8 @@ class JobScreen(Screen):
         self.call_after_refresh(self._focus_first, view)
 
     def _focus_first(self, view) -> None:
-        for w in view.query("*"):
-            if w.focusable and w.display and all(a.display for a in w.ancestors_with_self
-                                                 if hasattr(a, "display")):
-                w.focus()
-                return
+        """The view itself takes the focus, not its first field: a view key pressed next
+        must switch views, never land in a field. Tab goes into the fields."""
         view.focus()
 
     async def action_step(self, step: int) -> None:
@@ -178,6 +177,11 @@ class JobScreen(Screen):
         self.set_focus(None)
 
     # ------------------------------------------------------------------ edits
+    def on_input_submitted(self, event) -> None:
+        """Enter in a field moves to the next one."""
+        event.stop()
+        self.focus_next()
+
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
         s, key, value = self.session, event.field.key, event.value
@@ -188,7 +192,10 @@ class JobScreen(Screen):
             s.set("notes", value or None)
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])
-        elif key in ("beam.length", "criteria.deflection"):
+        elif key == "beam.length":
+            s.set(key, raw or None)
+            self.follow_the_end(getattr(self, "_last_length", None), raw)
+        elif key == "criteria.deflection":
             s.set(key, raw or None)
         elif key in ("beam.members", "criteria.safety_factor"):
             s.set(key, _number_or_text(raw))
@@ -220,6 +227,36 @@ class JobScreen(Screen):
         else:
             return
         self.changed()
+
+    def follow_the_end(self, old: float | None, new_text: str) -> None:
+        """Supports and load ends that sat at the old end of the beam move to the new end,
+        so lengthening a span does not leave its end support behind as an overhang."""
+        s = self.session
+        if old is None:
+            return
+        try:
+            new = units.parse(new_text, "length", positive=True)
+        except Exception:  # noqa: BLE001 - not a length yet: nothing follows
+            return
+        if abs(new - old) <= 1e-9 * old:
+            return
+
+        def at_old_end(text) -> bool:
+            try:
+                return abs(units.parse(text, "length") - old) <= 1e-9 * old
+            except Exception:  # noqa: BLE001
+                return False
+
+        moved = 0
+        for table, keys in (("supports", ("at",)), ("loads", ("at", "end"))):
+            for i, row in enumerate(s.rows(table)):
+                for k in keys:
+                    if k in row and isinstance(row[k], str) and at_old_end(row[k]):
+                        (s.doc.set_support if table == "supports" else s.doc.set_load)(
+                            i, **{k: new_text.strip()})
+                        moved += 1
+        if moved:
+            s.evaluate()
 
     def on_choice_changed(self, event: Choice.Changed) -> None:
         event.stop()
@@ -358,7 +395,7 @@ class JobScreen(Screen):
         self.call_after_refresh(self._focus_row_field, view)
 
     def _focus_row_field(self, view) -> None:
-        for f in view.query(Field):
+        for f in view.query(".row-form Field"):
             if f.display:
                 f.input.focus()
                 return
@@ -415,7 +452,7 @@ class JobScreen(Screen):
 
         from shopbeam import storage
 
-        name = s.name or storage.suggest_name(s.doc.text())
+        name = s.name or storage.suggest_name(str(s.doc.get("title") or "job"))
         self.app.push_screen(SaveAsScreen(name, self._writable_places()), got)
 
     def _try_save(self, do, then=None) -> None:
@@ -501,6 +538,7 @@ class JobScreen(Screen):
 
     def set_session(self, session: Session) -> None:
         self.session = session
+        self._last_length = None
         for v in self.query(RowsView):
             v.selected = 0
         for v in self.query(SizingView):

@@ -146,7 +146,7 @@ def elevation(job, width: int = 76) -> str:
         if s.kind not in kinds:
             kinds.append(s.kind)
     legend = "  ".join(f"{SUPPORT_SYMBOL[k]} {SUPPORT_WORDS[k]}" for k in kinds)
-    lines.append(f"key: {legend}  v load down  ^ load up  @ couple")
+    lines.append(f"below the beam: {legend} | above: v load down  ^ load up  @ couple")
     return "\n".join(lines)
 
 

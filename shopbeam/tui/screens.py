@@ -22,7 +22,6 @@ KEYS = [
         ("1 to 6", "input views: job, span, loads, section, material, criteria"),
         ("7 8 9 0 s", "results, plots, calc sheet, rating, sizing"),
         ("esc", "leave the field, so the view keys above work"),
-        ("alt+1 ... alt+s", "the same views from inside a field"),
         ("tab / shift+tab", "next / previous field"),
         ("ctrl+o or l", "library: open, duplicate, new"),
         ("ctrl+s", "save (a bundled preset is saved as your own copy)"),
@@ -131,7 +130,7 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
             if self.note:
                 yield Static(self.note, markup=False)
             yield Field("Name", "saveas.name", value=self.default_name,
-                        placeholder="letters, digits, - and _")
+                        placeholder="letters, digits, - and _", classes="-wide")
             yield Choice("Library", self.places, key="saveas.place")
             yield Static("enter saves, esc cancels. The file is NAME.toml in that library.",
                          markup=False)

@@ -8,6 +8,8 @@ problem is shown beside the field in words, never lost and never a crash.
 
 from __future__ import annotations
 
+import re
+
 from rich.text import Text
 from textual.app import ComposeResult
 from textual.binding import Binding
@@ -25,6 +27,15 @@ def _text(s: str) -> Text:
     return Text(s)
 
 
+_ROW_KEY = re.compile(r"\b(supports|loads)\[(\d+)\]")
+
+
+def in_words(text: str) -> str:
+    """'supports[1].at' -> 'support 2 at': rows counted from 1 as the lists show them."""
+    text = _ROW_KEY.sub(lambda m: f"{m.group(1)[:-1]} {int(m.group(2)) + 1}", text)
+    return re.sub(r"\b(support|load) (\d+)\.(\w+)", r"\1 \2 \3", text)
+
+
 class View(VerticalScroll):
     """Base of every view: a scrolling column that can show a session."""
 
@@ -39,7 +50,7 @@ class View(VerticalScroll):
             key = fields.get(f.key)
             if key is None:
                 continue
-            msg = ev.message_for(key)
+            msg = in_words(ev.message_for(key))
             if msg and not msg.startswith("warning: "):
                 f.show(msg, error=True)
             elif msg:
@@ -645,7 +656,7 @@ def problems_text(ev) -> str:
         lines.append(f"The job has {len(errs)} problem{'s' if len(errs) != 1 else ''}; "
                      "no results until they are fixed:")
         for p in errs:
-            lines.append(f"  - {p.key + ': ' if p.key else ''}{p.message}")
+            lines.append(in_words(f"  - {p.key + ': ' if p.key else ''}{p.message}"))
     return "\n".join(lines)
 
 
@@ -688,7 +699,8 @@ class ResultsView(View):
 
             cautions = cautions_for(ev.job.tags if ev.job is not None else ())
         warns = [p for p in ev.problems if p.warning]
-        extra = ["INPUT WARNINGS"] + [f"  {p.key}: {p.message}" for p in warns] if warns else []
+        extra = ["INPUT WARNINGS"] + [in_words(f"  {p.key}: {p.message}") for p in warns] \
+            if warns else []
         q("#res-cautions").update(_text("\n".join(extra + ["CAUTIONS"] + [f"!! {c}" for c in cautions])))
 
 

@@ -51,11 +51,12 @@ class Field(Horizontal):
         self._placeholder = placeholder
         self._value = value
         self._suggester = suggester
+        self._typed = False
 
     def compose(self) -> ComposeResult:
         yield Label(self.label, classes="field-label")
         inp = Input(self._value, placeholder=self._placeholder, compact=True,
-                    suggester=self._suggester, select_on_focus=False)
+                    suggester=self._suggester, select_on_focus=True)
         inp.cursor_blink = getattr(self.app, "cursor_blink", True)
         yield inp
         yield Static("", classes="field-msg", markup=False)
@@ -71,6 +72,8 @@ class Field(Horizontal):
     def set_value(self, value: str) -> None:
         """Show a value from the document without it counting as an edit."""
         value = "" if value is None else str(value)
+        if self.input.has_focus and self._typed:
+            return  # never overwrite what the user is typing (the document lags the keys)
         if self.input.value != value:
             self._quiet = value
             self.input.value = value
@@ -90,11 +93,11 @@ class Field(Horizontal):
             self._quiet = None
             return
         self._quiet = None
+        self._typed = True
         self.post_message(self.Edited(self, event.value))
 
-    def on_input_submitted(self, event: Input.Submitted) -> None:
-        event.stop()
-        self.screen.focus_next()
+    def on_descendant_blur(self, event) -> None:
+        self._typed = False
 
 
 class Choice(Widget, can_focus=True):
