@@ -34,7 +34,8 @@ VIEWS = {
     "sizing": ("demo", ["escape", "s", "r"]),
     "help": ("demo", ["f1"]),
     "lifting": ("jib-arm", ["escape", "7"]),
-    "bad-entry": ("demo", ["escape", "2", "end", "backspace", "backspace", "backspace"]),
+    "bad-entry": ("demo", ["escape", "2", "tab", "end", "backspace",
+                                "backspace", "backspace"]),
 }
 SIZES = {"100x32": (100, 32), "80x24": (80, 24)}
 

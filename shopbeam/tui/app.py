@@ -81,6 +81,7 @@ class JobScreen(Screen):
         Binding("ctrl+n", "step(1)", "next view", priority=True),
         Binding("ctrl+p", "step(-1)", "prev view", priority=True, show=False),
         Binding("f1", "app.help", "help", priority=True),
+        Binding("tab", "app.focus_next", "fields", show=True),
         Binding("question_mark", "app.help", "help", show=False),
         Binding("l", "library", "library", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
