@@ -199,16 +199,20 @@ def find_candidates(pieces) -> None:
     c = np.zeros((offsets[-1], width))
     for p, o in zip(pieces, offsets):
         c[o:o + p.coeffs.shape[0], : p.coeffs.shape[1]] = p.coeffs
-    h = np.concatenate([p.h for p in pieces])
+    left_x = np.concatenate([p.breaks[:-1] for p in pieces])
+    right_x = np.concatenate([p.breaks[1:] for p in pieces])
+    h = right_x - left_x
     rows, t = _roots_in_pieces(_derivative(c), h)
     right = _horner(c, h)
     at_root = _horner(c[rows], t)
-    owner = np.searchsorted(offsets, rows, side="right") - 1
-    for k, p in enumerate(pieces):
-        lo, hi = offsets[k], offsets[k + 1]
-        sel = owner == k
-        b = p.breaks
-        xs = np.concatenate([b[:-1], b[1:], b[rows[sel] - lo] + t[sel]])
-        vs = np.concatenate([c[lo:hi, 0], right[lo:hi], at_root[sel]])
-        order = np.argsort(xs, kind="stable")
-        p.__dict__["_candidates"] = (xs[order], vs[order])
+    piece_of = np.repeat(np.arange(len(pieces)), sizes)
+    # all candidates at once, sorted by (function, position); lexsort is stable, so ties keep
+    # the order left ends, right ends, roots, as each function's own extremes() would
+    xs = np.concatenate([left_x, right_x, left_x[rows] + t])
+    vs = np.concatenate([c[:, 0], right, at_root])
+    own = np.concatenate([piece_of, piece_of, piece_of[rows]])
+    order = np.lexsort((xs, own))
+    xs, vs = xs[order], vs[order]
+    ends = np.cumsum(2 * np.asarray(sizes) + np.bincount(piece_of[rows], minlength=len(pieces)))
+    for p, lo, hi in zip(pieces, np.concatenate([[0], ends[:-1]]), ends):
+        p.__dict__["_candidates"] = (xs[lo:hi], vs[lo:hi])
