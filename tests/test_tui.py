@@ -330,3 +330,33 @@ async def test_picking_a_catalog_section_from_type_ahead():
         des = s.doc.get("beam.section")
         assert des.upper().startswith("W10X")
         assert s.evaluation.ok and s.evaluation.job.section.designation.upper() == des.upper()
+
+
+@sync
+async def test_library_search_and_the_guard_on_opening_another_job():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await type_into(pilot, app, "job", "title", "Edited demo")
+        await pilot.press("ctrl+o")
+        await pilot.pause()
+        lib = app.screen
+        assert isinstance(lib, LibraryScreen)
+        every = len(lib.found)
+        lib.query_one("#lib-list").focus()
+        await pilot.press("l", "i", "f", "t", "i", "n", "g")  # typing on the list searches
+        await pilot.pause()
+        assert 0 < len(lib.found) < every
+        assert all("lifting" in (e.title + " ".join(e.tags) + e.text).lower() for e in lib.found)
+        names = [e.name for e in lib.found]
+        lst = lib.query_one("#lib-list")
+        lst.focus()
+        lst.highlighted = names.index("jib-arm")
+        await pilot.press("enter")
+        await pilot.pause()
+        assert isinstance(app.screen, ConfirmScreen)  # unsaved changes: asked first
+        await pilot.press("d")
+        await pilot.pause()
+        s = app.job_screen.session
+        assert s.name == "jib-arm" and not s.dirty
+        assert "LIFTING DEVICE" in str(app.job_screen.query_one("#banner").content)

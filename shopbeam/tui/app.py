@@ -126,7 +126,7 @@ class JobScreen(Screen):
         bar = f"{title} | {s.label}" + (" | " + "; ".join(flags) if flags else "")
         self.query_one("#titlebar", Static).update(Text(bar))
         vb = self.query_one(ViewBar)
-        if self.size.width and self.size.width < 96:
+        if self.size.width and self.size.width < 112:
             vb.views = [(v[0], v[1], v[3]) for v in VIEWS]
             vb.compact = True
         else:

@@ -1,0 +1,62 @@
+"""The text pictures of the UI (elevation to scale, plots, tables), without a screen."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+from shopbeam.jobfile import load_job
+from shopbeam.analysis import analyze
+from shopbeam.tui import drawing
+from shopbeam.tui.session import Session
+from shopbeam.tui.views import in_words
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+
+
+def test_elevation_puts_supports_to_scale():
+    job = load_job(PRESETS / "demo.toml")  # 15 ft, pin at 0, roller at 12 ft
+    lines = drawing.elevation(job, width=76).splitlines()
+    beam = next(i for i, ln in enumerate(lines) if set(ln) == {"="})
+    supports = lines[beam + 1]
+    assert supports[0] == "^" and supports.index("o") == round(12 / 15 * 75)
+    dims = lines[beam + 2]
+    assert "12 ft" in dims and "3 ft" in dims
+    # the stair load (a point load at the free end) is drawn as a downward arrow at the end
+    assert any(ln.endswith("v") and len(ln) == 76 for ln in lines[:beam])
+
+
+def test_plot_marks_and_labels_the_exact_extremes():
+    result = analyze(load_job(PRESETS / "demo.toml"))
+    text = drawing.plot(result, "moment", width=70, height=12)
+    ex = result.solution.extremes()["moment"]
+    assert "O" in text and "X" in text
+    assert f"at x = {drawing._f(ex.max_at, 'length', 'us')}" in text
+    assert all(len(ln) <= 72 for ln in text.splitlines())
+
+
+def test_nice_ticks_are_round_and_include_zero():
+    ticks = drawing.nice_ticks(-3300.0, 2800.0, 5)
+    assert 0.0 in ticks and all(t % 1000 == 0 for t in ticks)
+    assert ticks[0] >= -3300 and ticks[-1] <= 2800
+
+
+def test_checks_say_pass_or_fail_in_words():
+    result = analyze(load_job(PRESETS / "demo.toml"))
+    table = drawing.checks_table(result)
+    for c in result.checks:
+        assert ("PASS" if c.ok else "FAIL") in next(ln for ln in table.splitlines()
+                                                    if ln.startswith(c.name))
+
+
+def test_a_half_typed_job_gives_problems_not_an_exception():
+    s = Session.open(PRESETS / "demo.toml")
+    s.set("beam.length", "15")  # a bare number
+    assert not s.evaluation.ok
+    assert "unit" in s.evaluation.message_for("beam.length")
+    s.set("beam.length", "15 ft")
+    assert s.evaluation.ok
+
+
+def test_row_keys_read_as_the_lists_number_them():
+    assert in_words("supports[1].at: supports[0] and supports[1] clash") == \
+        "support 2 at: support 1 and support 2 clash"
