@@ -176,6 +176,10 @@ def stability_problem(beam: Beam, fmt=None) -> str | None:
     hinges = sorted(s.at for s in beam.supports if s.kind == "hinge")
     if not restraints:
         return "the beam has no supports, so nothing holds it up: add supports (at least two, or one fixed end)"
+    if not hinges:  # one rigid body: held by a fixed support or two supports well apart
+        at = [s.at for s in restraints]
+        if any(s.kind == "fixed" for s in restraints) or max(at) - min(at) > 1e-6 * L:
+            return None
     bounds = [0.0] + hinges + [L]
     nseg = len(bounds) - 1
     rows = []
