@@ -64,8 +64,9 @@ class View(VerticalScroll):
 
 # Every dimensional field: how to read it back for the "as read" echo.
 def echo(text: str, kind: str, system: str) -> str:
+    parse_kind = "length" if kind == "small_length" else kind  # small_length: display only
     try:
-        v = units.parse(text, kind)
+        v = units.parse(text, parse_kind)
     except Exception:  # noqa: BLE001 - the document check reports the problem itself
         return ""
     return "= " + units.fmt(v, kind, system)
@@ -388,10 +389,13 @@ class SectionView(View):
     MODES = ["catalog", "dimensions", "custom"]
     SHAPES = ["rect-tube", "square-tube", "round-tube", "pipe", "rect-bar", "flat-bar",
               "square-bar", "round-bar", "angle", "channel", "i-beam", "tee"]
+    DIM_ORDER = ["depth", "width", "size", "od", "diameter", "wall", "thickness",
+                 "flange_width", "flange_thickness", "web_thickness", "stem_thickness",
+                 "corner_radius", "fillet_radius"]
     CUSTOM = [("area", "Area", "area", "e.g. 3.37 in^2"),
               ("ix", "I (bending)", "inertia", "e.g. 7.80 in^4"),
               ("sx", "S (modulus)", "modulus", "e.g. 3.90 in^3"),
-              ("depth", "Depth", "length", "or S from I and depth"),
+              ("depth", "Depth", "small_length", "or S from I and depth"),
               ("shear_area", "Shear area", "area", "optional")]
 
     def compose(self) -> ComposeResult:
@@ -405,7 +409,9 @@ class SectionView(View):
             yield OptionList(id="sec-matches")
         with Vertical(id="sec-dims"):
             yield Choice("Shape", self.SHAPES, key="section.shape")
-            for k in sorted({k for ks in self._dim_keys().values() for k in ks}):
+            keys = {k for ks in self._dim_keys().values() for k in ks}
+            for k in sorted(keys, key=lambda k: (self.DIM_ORDER.index(k)
+                                                 if k in self.DIM_ORDER else 99, k)):
                 yield Field(k.replace("_", " ").capitalize(), f"dim.{k}", placeholder="e.g. 4 in")
         with Vertical(id="sec-custom"):
             for k, label, _kind, ph in self.CUSTOM:
@@ -526,7 +532,7 @@ class SectionView(View):
     def reading(self, field, ev) -> str:
         system = ev.job.units if ev.job is not None else "us"
         if field.key.startswith("dim."):
-            return echo(field.value, "length", system) if field.value else ""
+            return echo(field.value, "small_length", system) if field.value else ""
         for k, _label, kind, _ph in self.CUSTOM:
             if field.key == f"custom.{k}" and field.value:
                 return echo(field.value, kind, system)
