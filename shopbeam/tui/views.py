@@ -692,7 +692,8 @@ class ResultsView(View):
         if r is not None:
             q("#res-elevation").update(Text(drawing.elevation(r.job, width), no_wrap=True,
                                             overflow="crop"))
-            q("#res-verdict").update(_text(drawing.verdict_line(r)))
+            note = f"\nNote: {r.shown_state}." if r.shown_state else ""
+            q("#res-verdict").update(_text(drawing.verdict_line(r) + note))
             q("#res-verdict").set_class(not r.ok, "-fail")
             q("#res-checks").update(_text("CHECKS\n" + drawing.checks_table(r)))
             q("#res-reactions").update(_text(
