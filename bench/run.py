@@ -337,6 +337,11 @@ def bench_cold_start(quick: bool, job: Path) -> dict:
 
 MEM_SOLVE = """
 import resource, sys, tracemalloc, json
+def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
+    for line in open("/proc/self/status"):
+        if line.startswith("VmHWM:"):
+            return int(line.split()[1]) * 1024
+    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
 tracemalloc.start()
 from shopbeam.jobfile import load_job
 from shopbeam.analysis import analyze, to_json
@@ -345,21 +350,31 @@ res = analyze(job)
 json.dumps(to_json(res))
 cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
-                  "maxrss": resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024}))
+                  "maxrss": peak_rss()}))
 """
 
 MEM_FLOOR = """
 import resource, json, tracemalloc
+def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
+    for line in open("/proc/self/status"):
+        if line.startswith("VmHWM:"):
+            return int(line.split()[1]) * 1024
+    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
 tracemalloc.start()
 import numpy, pint
 pint.UnitRegistry(cache_folder=':auto:')
 cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
-                  "maxrss": resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024}))
+                  "maxrss": peak_rss()}))
 """
 
 MEM_BIG = """
 import resource, sys, json, tracemalloc
+def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
+    for line in open("/proc/self/status"):
+        if line.startswith("VmHWM:"):
+            return int(line.split()[1]) * 1024
+    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
 sys.path.insert(0, sys.argv[1])
 from bench.run import make_beam, solve_full
 beam = make_beam(10, 200, seed=10200)
@@ -368,11 +383,16 @@ tracemalloc.start()
 solve_full(beam)
 cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
-                  "maxrss": resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024}))
+                  "maxrss": peak_rss()}))
 """
 
 MEM_TUI = """
 import asyncio, resource, sys, json, tracemalloc
+def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
+    for line in open("/proc/self/status"):
+        if line.startswith("VmHWM:"):
+            return int(line.split()[1]) * 1024
+    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
 tracemalloc.start()
 from shopbeam.tui.app import make_app
 app = make_app(job_path=sys.argv[1])
@@ -382,7 +402,7 @@ async def main():
 asyncio.run(main())
 cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
-                  "maxrss": resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024}))
+                  "maxrss": peak_rss()}))
 """
 
 

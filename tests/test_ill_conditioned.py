@@ -225,3 +225,61 @@ def test_very_soft_and_very_stiff_springs_in_one_beam():
 def test_extreme_flexural_rigidity(ei):
     # reactions of an indeterminate beam do not depend on EI; deflections scale as 1/EI
     check(3.0, [1.2], [(0.5, 1000.0), (2.5, 200.0)], w=30.0, ei=ei)
+
+
+# ------------------------------------------------------------------ through the job file
+@pytest.mark.parametrize("span, unit", [("0.1", "in"), ("1000", "ft")])
+def test_extreme_spans_through_the_cli(tmp_path, span, unit):
+    import contextlib
+    import io
+    import json
+
+    from shopbeam.cli import main
+
+    job = f"""schema = 1
+title = "three spans of {span} {unit}"
+[beam]
+length = "{3 * float(span):g} {unit}"
+self_weight = false
+[beam.section]
+shape = "custom"
+area = "3.37 in^2"
+ix = "7.80 in^4"
+sx = "3.90 in^3"
+[beam.material]
+e = "29000 ksi"
+fy = "46 ksi"
+density = "490 lb/ft^3"
+[[supports]]
+at = "0 {unit}"
+type = "pin"
+[[supports]]
+at = "{span} {unit}"
+type = "roller"
+[[supports]]
+at = "{2 * float(span):g} {unit}"
+type = "roller"
+[[supports]]
+at = "{3 * float(span):g} {unit}"
+type = "roller"
+[[loads]]
+type = "point"
+at = "{0.5 * float(span):g} {unit}"
+value = "-1000 N"
+"""
+    p = tmp_path / "job.toml"
+    p.write_text(job, encoding="utf-8")
+    out, err = io.StringIO(), io.StringIO()
+    with contextlib.redirect_stdout(out), contextlib.redirect_stderr(err):
+        rc = main(["solve", str(p), "--json"])
+    assert rc == 0, err.getvalue()
+    data = json.loads(out.getvalue())
+    s = float(span) * (IN if unit == "in" else FT)
+    ref, _ = reference(3 * s, [s, 2 * s], [(0.5 * s, 1000.0)])
+    got = [r["force"] for r in data["reactions"]]
+    want = [float(ref[k]) for k in sorted(ref)]
+    assert got == pytest.approx(want, rel=1e-9, abs=1e-9 * 1000)
+    # three equal spans, load at the middle of the first: 0.4 P, 0.725 P, -0.15 P, 0.025 P
+    # (the flexibility solve by hand, the same in any span length)
+    assert want == pytest.approx([400.0, 725.0, -150.0, 25.0], rel=1e-12)
+    assert all(d["ok"] for d in data["diagnostics"]), data["diagnostics"]
