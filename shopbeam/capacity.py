@@ -17,7 +17,6 @@ label that fits 40 columns and an A4 or letter page.
 from __future__ import annotations
 
 import datetime as _dt
-import json
 import math
 import textwrap
 from dataclasses import dataclass
@@ -276,7 +275,9 @@ def cmd_capacity(args) -> int:
     job = load_job(args.job)
     res = capacity(job)
     if args.json:
-        print(json.dumps(to_json(res), indent=2))
+        from shopbeam.cli import dumps_finite
+
+        print(dumps_finite(to_json(res), args.job))
     else:
         print(render(res), end="")
     return 0

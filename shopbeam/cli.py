@@ -40,7 +40,7 @@ def cmd_solve(args) -> int:
     job = _load(args.job)
     result = analyze(job)
     if args.json:
-        print(json.dumps(to_json(result), indent=2))
+        print(dumps_finite(to_json(result), args.job))
         return EXIT_OK
     if args.calc:
         from shopbeam.calcsheet import calc_sheet
@@ -51,6 +51,17 @@ def cmd_solve(args) -> int:
 
     print(render(result), end="")
     return EXIT_OK
+
+
+def dumps_finite(data, job_path="") -> str:
+    """JSON text; a number that overflowed is bad input, never the non-JSON token Infinity."""
+    try:
+        return json.dumps(data, indent=2, allow_nan=False)
+    except ValueError:
+        from shopbeam.errors import InputError
+
+        raise InputError("the answer has numbers too large to be real (an overflow): check the "
+                         "section properties, loads and their units", file=str(job_path)) from None
 
 
 def cmd_check(args) -> int:
@@ -74,7 +85,13 @@ def _lazy(module: str, func: str):
     return run
 
 
-def build_parser() -> argparse.ArgumentParser:
+LIBRARY_COMMANDS = {"library": "list, show and copy saved and bundled jobs",
+                    "new": "start a job file from a commented template"}
+
+
+def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
+    """The argument parser. `with_library=False` registers `library` and `new` by name only,
+    so commands that do not need the library (solve, check, ...) start without importing it."""
     p = argparse.ArgumentParser(
         prog="shopbeam", description=DESCRIPTION,
         formatter_class=argparse.RawDescriptionHelpFormatter)
@@ -130,12 +147,13 @@ def build_parser() -> argparse.ArgumentParser:
     s.add_argument("--json", action="store_true")
     s.set_defaults(func=_lazy("shopbeam.catalog", "cmd_shapes"))
 
-    try:
+    if with_library:
         from shopbeam import library
-    except ImportError:  # pragma: no cover - during development only
-        library = None
-    if library is not None and hasattr(library, "add_parsers"):
+
         library.add_parsers(sub)
+    else:
+        for name, words in LIBRARY_COMMANDS.items():
+            sub.add_parser(name, help=words)
 
     s = sub.add_parser("ui", help="open the text UI (same as giving no command)")
     s.add_argument("job", nargs="?")
@@ -165,7 +183,9 @@ def _report_error(exc: BaseException) -> int:
 
 def main(argv: list[str] | None = None) -> int:
     argv = list(sys.argv[1:] if argv is None else argv)
-    parser = build_parser()
+    light = bool(argv) and argv[0] in {"solve", "check", "capacity", "rating", "size",
+                                       "section", "shapes", "materials"}
+    parser = build_parser(with_library=not light)
     commands = {a for a in parser._subparsers._group_actions[0].choices}  # noqa: SLF001
     if not argv or (argv[0] not in commands and not argv[0].startswith("-")):
         argv = ["ui"] + argv

@@ -411,6 +411,23 @@ def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
         return None
 
 
+# Smallest section properties a real member can have (a 0.1 mm wire is ~1e-8 m^2): below
+# these the numbers are a typing slip, and the stresses would overflow.
+_SECTION_FLOORS = {"area": (1e-10, "area"), "ix": (1e-20, "ix"), "sx_top": (1e-15, "sx"),
+                   "sx_bot": (1e-15, "sx"), "shear_area": (1e-10, "shear_area")}
+
+
+def _plausible_section(sec, r: _Reader) -> None:
+    for attr, (floor, key) in _SECTION_FLOORS.items():
+        v = getattr(sec, attr, None)
+        if v is None:
+            continue
+        if not (math.isfinite(v) and v >= floor):
+            r.error(f"the section's {key} ({v:.3g} in SI units) is too small or not a number "
+                    "for a real member: check the value and its unit", f"beam.section.{key}")
+            return
+
+
 def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> Job:
     """Validate parsed TOML data. Raises InputErrors with every problem found."""
     r = _Reader(filename, text)
@@ -475,6 +492,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         else:
             section = _resolve("section", beam["section"], "beam.section", r, axis=axis,
                                material=material)
+        if section is not None:
+            _plausible_section(section, r)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
             r.error("self_weight must be true or false", "beam.self_weight")

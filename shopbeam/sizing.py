@@ -15,7 +15,6 @@ Ranking: by weight per length, lightest first; with a priced stock list also by 
 
 from __future__ import annotations
 
-import json
 import math
 import re
 import time
@@ -24,7 +23,7 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from shopbeam import units
-from shopbeam.checks import (BASIS_WORDS, basis_of, cb_factor, deflection_rule, flexure,
+from shopbeam.checks import (BASIS_WORDS, basis_of, deflection_rule, flexure,
                              shear_strength, unbraced_segments)
 from shopbeam.model import Beam, Load
 from shopbeam.piecewise import _horner, _roots_in_pieces
@@ -500,7 +499,9 @@ def cmd_size(args) -> int:
         stock = load_stock(args.stock)
     res = size(job, args.kind, md, stock)
     if args.json:
-        print(json.dumps(to_json(res, args.top), indent=2))
+        from shopbeam.cli import dumps_finite
+
+        print(dumps_finite(to_json(res, args.top), args.job))
     else:
         print(render(res, args.top), end="")
     return 0

@@ -27,7 +27,7 @@ from functools import cached_property
 import numpy as np
 
 from shopbeam.errors import UnstableBeam
-from shopbeam.model import Beam, Load, Support
+from shopbeam.model import Beam
 from shopbeam.piecewise import Extreme, Piecewise, find_candidates
 
 # state entries, by integration level: q' (-1), q (0), V (1), M (2), EI*slope (3), EI*u (4)

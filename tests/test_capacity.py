@@ -6,12 +6,10 @@ import json
 import math
 import subprocess
 import sys
-from dataclasses import replace
 
 import pytest
 
 from shopbeam.capacity import brent, capacity, rating_label
-from shopbeam.checks import checks_for, strengths
 from shopbeam.jobfile import parse_job_text
 from shopbeam.loading import evaluate
 

@@ -205,8 +205,6 @@ def test_supports_too_close_for_double_precision_are_not_called_a_mechanism():
     assert "too close together" in str(err.value) and "1000 ft" in str(err.value)
 
 
-@pytest.mark.xfail(strict=True, reason="open: custom section properties have no plausibility "
-                   "bounds (sections.py); reported to the lead. Remove this mark when fixed.")
 def test_absurd_custom_section_modulus_never_prints_infinity_in_the_json(tmp_path):
     # sx = 1e-310 in^3 (a subnormal float) passes the reader, the bending stress M/S
     # overflows to inf and --json prints the non-JSON token Infinity with exit 0.

@@ -460,7 +460,6 @@ class JobScreen(Screen):
         from shopbeam import storage
         from shopbeam.errors import InputError
 
-        s = self.session
         try:
             path = do(False)
         except storage.SaveConflict as exc:
