@@ -342,9 +342,6 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
         from shopbeam.errors import InputError
 
         raise InputError("; ".join(problems))
-    why = stability_problem(beam, length_fmt)
-    if why:
-        raise UnstableBeam(why)
     L, ei = beam.length, beam.ei
     unknowns = _unknowns(beam)
     nz = len(unknowns)
@@ -404,9 +401,16 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
         y = np.linalg.solve(a2, b / rs)
         condition = float(np.linalg.cond(a2))
     except np.linalg.LinAlgError:
-        raise UnstableBeam("the supports and hinges leave the beam free to move: "
-                           "add a support or fix one end") from None
+        y, condition = None, math.inf
     if not math.isfinite(condition) or condition > 1e14:
+        # A mechanism or rigid-body motion makes this system singular, and only then is
+        # the kinematic check (which says in words what can move) worth its cost.
+        why = stability_problem(beam, length_fmt)
+        if why:
+            raise UnstableBeam(why)
+        if y is None:
+            raise UnstableBeam("the supports and hinges leave the beam free to move: "
+                               "add a support or fix one end")
         # the kinematic check passed, so the beam holds; its supports and hinges are only
         # too close together for its length to solve in double precision
         from shopbeam.errors import InputError
