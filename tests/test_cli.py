@@ -127,3 +127,17 @@ def test_help_lists_the_commands():
     assert r.returncode == 0
     for cmd in ("solve", "check", "capacity", "rating", "size", "section", "shapes"):
         assert cmd in r.stdout
+
+
+def test_size_from_the_bundled_stock_list_ranks_by_weight_and_price():
+    root = Path(__file__).resolve().parents[1]
+    r = run("size", str(root / "presets" / "pallet-rack-beam-pair.toml"),
+            "--stock", str(root / "presets" / "stock" / "quillhaven-stock.csv"), "--json")
+    assert r.returncode == 0, r.stderr
+    d = json.loads(r.stdout)
+    assert d["swept"] == 13 and d["passing"]
+    # the lightest passing row is the lightest of all passing rows; the cheapest likewise
+    rows = d["passing"]
+    assert d["lightest"] == min(rows, key=lambda x: x["mass_per_length"])["designation"]
+    priced = [x for x in rows if x.get("price_per_m") is not None]
+    assert d["cheapest"] == min(priced, key=lambda x: x["price_per_m"] * 1.0)["designation"]
