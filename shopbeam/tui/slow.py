@@ -2,12 +2,10 @@
 
 Each computes in an exclusive thread worker and hands the text back to the UI thread with
 `call_from_thread`; a newer request cancels the older one, and the view says "working"
-until the answer comes. Where a part of shopbeam is not there yet, the view says so.
+until the answer comes; an error is shown in the view, never a crash.
 """
 
 from __future__ import annotations
-
-import importlib
 
 from rich.text import Text
 from textual import work
@@ -22,24 +20,19 @@ from shopbeam.tui.views import View, problems_text
 from shopbeam.tui.widgets import Choice
 
 
-def _module(name: str):
-    try:
-        return importlib.import_module(name)
-    except ImportError:
-        return None
+class _SheetView(View):
+    """A view of one slow text (calc sheet, capacity): made in a worker for the job as it
+    stands, so the screen never waits; a result for an older version of the job is dropped."""
 
-
-class CalcView(View):
-    """The exact calc sheet (sympy), made in a worker so the screen never waits."""
-
-    title = "Calc sheet"
+    body_id = ""
+    busy = "Working..."
 
     def compose(self) -> ComposeResult:
-        yield Static("", id="calc-body", markup=False, classes="wide-text")
+        yield Static("", id=self.body_id, markup=False, classes="wide-text")
 
     def show(self, session) -> None:
         ev = session.evaluation
-        body = self.query_one("#calc-body", Static)
+        body = self.query_one(f"#{self.body_id}", Static)
         if ev.result is None:
             body.update(Text(problems_text(ev)))
             self._for = None
@@ -48,68 +41,57 @@ class CalcView(View):
         if getattr(self, "_for", None) == text:
             return
         self._for = text
-        body.update(Text("Working out the exact calc sheet (this takes a few seconds; "
-                         "you can keep editing)..."))
+        body.update(Text(self.busy))
         self.make(ev.job, ev.result, text)
 
-    @work(thread=True, exclusive=True, group="calc", exit_on_error=False)
+    def produce(self, job, result) -> str:  # pragma: no cover - each view has its own
+        raise NotImplementedError
+
+    @work(thread=True, exclusive=True, group="sheet", exit_on_error=False)
     def make(self, job, result, text: str) -> None:
-        mod = _module("shopbeam.calcsheet")
-        if mod is None:
-            out = "The calc sheet is not available yet in this build of shopbeam."
-        else:
-            try:
-                out = mod.calc_sheet(job, result)
-            except Exception as exc:  # noqa: BLE001 - show it, do not crash the screen
-                out = f"The calc sheet could not be made: {type(exc).__name__}: {exc}"
+        try:
+            out = self.produce(job, result)
+        except Exception as exc:  # noqa: BLE001 - show it, do not crash the screen
+            out = f"This could not be worked out: {type(exc).__name__}: {exc}"
         self.app.call_from_thread(self._done, text, out)
 
     def _done(self, text: str, out: str) -> None:
         if getattr(self, "_for", None) == text:
-            self.query_one("#calc-body", Static).update(Text(out))
+            self.query_one(f"#{self.body_id}", Static).update(Text(out))
 
 
-class RatingView(View):
+class CalcView(_SheetView):
+    """The exact calc sheet (sympy)."""
+
+    title = "Calc sheet"
+    body_id = "calc-body"
+    busy = ("Working out the exact calc sheet (this takes a few seconds; you can keep "
+            "editing)...")
+
+    def produce(self, job, result) -> str:
+        from shopbeam.calcsheet import calc_sheet
+
+        return calc_sheet(job, result)
+
+
+class RatingView(_SheetView):
     """Capacity (largest multiple of the live loads that passes) and the rating label."""
 
     title = "Rating"
+    body_id = "rating-body"
+    busy = "Working out the capacity..."
 
-    def compose(self) -> ComposeResult:
-        yield Static("", id="rating-body", markup=False, classes="wide-text")
-
-    def show(self, session) -> None:
-        ev = session.evaluation
-        body = self.query_one("#rating-body", Static)
-        if ev.result is None:
-            body.update(Text(problems_text(ev)))
-            self._for = None
-            return
-        text = session.doc.text()
-        if getattr(self, "_for", None) == text:
-            return
-        self._for = text
-        body.update(Text("Working out the capacity..."))
-        self.make(ev.job, text)
-
-    @work(thread=True, exclusive=True, group="rating", exit_on_error=False)
-    def make(self, job, text: str) -> None:
-        out = rating_text(job, date=getattr(self.app, "label_date", None))
-        self.app.call_from_thread(self._done, text, out)
-
-    def _done(self, text: str, out: str) -> None:
-        if getattr(self, "_for", None) == text:
-            self.query_one("#rating-body", Static).update(Text(out))
+    def produce(self, job, result) -> str:
+        return rating_text(job, date=getattr(self.app, "label_date", None))
 
 
 def rating_text(job, width: int = 40, date=None) -> str:
     """The capacity report and the printable rating label, or why they are not there."""
-    mod = _module("shopbeam.capacity")
-    if mod is None or not hasattr(mod, "capacity"):
-        return ("Capacity and the rating label are not available yet in this build of "
-                "shopbeam.\n(The checks on the Results view are.)")
+    from shopbeam import capacity as mod
+
     try:
         res = mod.capacity(job)
-        text = mod.render(res) if hasattr(mod, "render") else f"capacity factor {res.factor:.4g}"
+        text = mod.render(res)
     except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
@@ -152,10 +134,11 @@ class SizingView(View):
         if job is not None and not getattr(self, "_kind_set", False):
             self._kind_set = True
             kind = self.SHAPE_KIND.get(getattr(job.section, "shape", ""), None)
-            sizing = _module("shopbeam.sizing")
+            from shopbeam import sizing
+
             try:
-                kind = sizing.default_kind(job) if sizing is not None else kind
-            except Exception:  # noqa: BLE001
+                kind = sizing.default_kind(job)
+            except Exception:  # noqa: BLE001 - keep the shape's own kind
                 pass
             choice = self.query_one(Choice)
             if kind and kind not in choice.options:
@@ -215,43 +198,19 @@ def size_rows(job, kind: str, top: int = 40) -> tuple[list[tuple[str, str]], str
 
 
 def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
-    sizing = _module("shopbeam.sizing")
+    from shopbeam import sizing
+
     sy = job.units
-    if sizing is not None and hasattr(sizing, "size"):
-        res = sizing.size(job, kind=kind)
-        passing = list(res.passing)
-        rows = []
-        for r in passing[:top]:
-            k = "unlimited" if r.factor == float("inf") else f"{r.factor:.2f}"
-            rows.append((r.designation,
-                         f"{r.designation:<16} {units.fmt(r.weight, 'mass_per_length', sy):>11}"
-                         f"  ratio {r.ratio:.2f} {r.governing:<10} capacity x{k}"))
-        n = len(res.rows)
-        note = (f"{len(passing)} of {n} {res.kind} sections pass; lightest first"
-                + (f" (first {top} shown)" if len(passing) > top else "") + "."
-                if passing else f"None of the {n} {res.kind} sections passes every check.")
-        return rows, note
-    # Without the sizing module: the same sweep done here with the public analysis.
-    catalog = _module("shopbeam.catalog")
-    if catalog is None:
-        return [], "Sizing is not available yet (no catalog in this build)."
-    from dataclasses import replace
-
-    from shopbeam.analysis import analyze
-
-    passing = []
-    secs = catalog.list_sections(kind)
-    for sec in secs:
-        try:
-            r = analyze(replace(job, section=sec))
-        except Exception:  # noqa: BLE001 - a section the beam cannot use is just skipped
-            continue
-        if r.ok:
-            passing.append((sec.weight_per_length(job.material.density), sec, r.governing))
-    passing.sort(key=lambda t: t[0])
-    rows = [(s.designation, f"{s.designation:<18} {units.fmt(w, 'mass_per_length', sy):>11}  "
-             f"ratio {g.ratio:.2f} {g.name}") for w, s, g in passing[:top]]
-    note = (f"{len(passing)} of {len(secs)} {kind} sections pass; lightest first"
-            + (f" (first {top})" if len(passing) > top else "") + "."
-            if passing else f"None of the {len(secs)} {kind} sections passes every check.")
+    res = sizing.size(job, kind=kind)
+    passing = list(res.passing)
+    rows = []
+    for r in passing[:top]:
+        k = "unlimited" if r.factor == float("inf") else f"{r.factor:.2f}"
+        rows.append((r.designation,
+                     f"{r.designation:<16} {units.fmt(r.weight, 'mass_per_length', sy):>11}"
+                     f"  ratio {r.ratio:.2f} {r.governing:<10} capacity x{k}"))
+    n = len(res.rows)
+    note = (f"{len(passing)} of {n} {res.kind} sections pass; lightest first"
+            + (f" (first {top} shown)" if len(passing) > top else "") + "."
+            if passing else f"None of the {n} {res.kind} sections passes every check.")
     return rows, note
