@@ -125,7 +125,20 @@ class RowsView(View):
     """Shared by supports and loads: a list, add/remove buttons, and a form for one row."""
 
     table = ""  # "supports" | "loads"
+    new_kind = ""  # the type a plain "add" (a key on the list) makes
     selected = 0
+
+    def on_button_pressed(self, event: Button.Pressed) -> None:
+        bid = event.button.id or ""
+        event.stop()
+        if bid.startswith("add-"):
+            self.post_message(self.RowAdd(self.table, bid[4:]))
+        elif bid == "remove-row":
+            self.post_message(self.RowRemove(self.table, self.selected))
+
+    def on_row_list_add(self, event: RowList.Add) -> None:
+        event.stop()
+        self.post_message(self.RowAdd(self.table, self.new_kind))
 
     class RowAdd(Message):
         def __init__(self, table: str, kind: str) -> None:
@@ -194,6 +207,7 @@ def _load_words(row: dict) -> str:
 class SpanView(RowsView):
     title = "Span"
     table = "supports"
+    new_kind = "pin"
 
     def compose(self) -> ComposeResult:
         yield Static("Span and supports: x runs from the left end (0) to the length.",
@@ -219,17 +233,6 @@ class SpanView(RowsView):
         k = f", k = {row['stiffness']}" if row.get("type") == "spring" and "stiffness" in row else ""
         return f"{row.get('type', '?')} at {row.get('at', '?')}{k}"
 
-    def on_button_pressed(self, event: Button.Pressed) -> None:
-        bid = event.button.id or ""
-        event.stop()
-        if bid.startswith("add-"):
-            self.post_message(self.RowAdd(self.table, bid[4:]))
-        elif bid == "remove-row":
-            self.post_message(self.RowRemove(self.table, self.selected))
-
-    def on_row_list_add(self, event: RowList.Add) -> None:
-        event.stop()
-        self.post_message(self.RowAdd(self.table, "pin"))
 
     def show(self, session) -> None:
         doc = session.doc
@@ -283,6 +286,7 @@ class SpanView(RowsView):
 class LoadsView(RowsView):
     title = "Loads"
     table = "loads"
+    new_kind = "point"
 
     def compose(self) -> ComposeResult:
         yield Static("Loads: forces + up, so gravity loads are negative (-300 lbf).",
@@ -307,17 +311,6 @@ class LoadsView(RowsView):
     def row_text(self, i, row, session) -> str:
         return _load_words(row)
 
-    def on_button_pressed(self, event: Button.Pressed) -> None:
-        bid = event.button.id or ""
-        event.stop()
-        if bid.startswith("add-"):
-            self.post_message(self.RowAdd(self.table, bid[4:]))
-        elif bid == "remove-row":
-            self.post_message(self.RowRemove(self.table, self.selected))
-
-    def on_row_list_add(self, event: RowList.Add) -> None:
-        event.stop()
-        self.post_message(self.RowAdd(self.table, "point"))
 
     def show_form(self, session) -> None:
         rows = session.rows(self.table)
