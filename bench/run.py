@@ -335,14 +335,17 @@ def bench_cold_start(quick: bool, job: Path) -> dict:
             "tui_present": tui, "failed": sorted(failed)}
 
 
-MEM_SOLVE = """
-import resource, sys, tracemalloc, json
-def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
+# Each memory probe runs in a fresh interpreter; this helper is pasted into each one.
+PEAK_RSS = '''def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
     for line in open("/proc/self/status"):
         if line.startswith("VmHWM:"):
             return int(line.split()[1]) * 1024
     return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
-tracemalloc.start()
+'''
+
+MEM_SOLVE = """
+import resource, sys, tracemalloc, json
+{PEAK_RSS}tracemalloc.start()
 from shopbeam.jobfile import load_job
 from shopbeam.analysis import analyze, to_json
 job = load_job(sys.argv[1])
@@ -352,30 +355,22 @@ cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
                   "maxrss": peak_rss()}))
 """
+MEM_SOLVE = MEM_SOLVE.replace("{PEAK_RSS}", PEAK_RSS)
 
 MEM_FLOOR = """
 import resource, json, tracemalloc
-def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
-    for line in open("/proc/self/status"):
-        if line.startswith("VmHWM:"):
-            return int(line.split()[1]) * 1024
-    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
-tracemalloc.start()
+{PEAK_RSS}tracemalloc.start()
 import numpy, pint
 pint.UnitRegistry(cache_folder=':auto:')
 cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
                   "maxrss": peak_rss()}))
 """
+MEM_FLOOR = MEM_FLOOR.replace("{PEAK_RSS}", PEAK_RSS)
 
 MEM_BIG = """
 import resource, sys, json, tracemalloc
-def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
-    for line in open("/proc/self/status"):
-        if line.startswith("VmHWM:"):
-            return int(line.split()[1]) * 1024
-    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
-sys.path.insert(0, sys.argv[1])
+{PEAK_RSS}sys.path.insert(0, sys.argv[1])
 from bench.run import make_beam, solve_full
 beam = make_beam(10, 200, seed=10200)
 solve_full(beam)
@@ -385,15 +380,11 @@ cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
                   "maxrss": peak_rss()}))
 """
+MEM_BIG = MEM_BIG.replace("{PEAK_RSS}", PEAK_RSS)
 
 MEM_TUI = """
 import asyncio, resource, sys, json, tracemalloc
-def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would carry the parent's over exec)
-    for line in open("/proc/self/status"):
-        if line.startswith("VmHWM:"):
-            return int(line.split()[1]) * 1024
-    return resource.getrusage(resource.RUSAGE_SELF).ru_maxrss * 1024
-tracemalloc.start()
+{PEAK_RSS}tracemalloc.start()
 from shopbeam.tui.app import make_app
 app = make_app(job_path=sys.argv[1])
 async def main():
@@ -404,6 +395,7 @@ cur, peak = tracemalloc.get_traced_memory()
 print(json.dumps({"tracemalloc_peak": peak,
                   "maxrss": peak_rss()}))
 """
+MEM_TUI = MEM_TUI.replace("{PEAK_RSS}", PEAK_RSS)
 
 
 def bench_memory(job: Path) -> dict:
