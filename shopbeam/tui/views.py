@@ -484,12 +484,8 @@ class SectionView(View):
     def fill_matches(self, text: str) -> None:
         lst = self.query_one("#sec-matches", OptionList)
         note = self.query_one("#sec-matches-note", Static)
-        try:
-            from shopbeam import catalog
-        except ImportError:
-            note.update(_text("The catalog is not available yet; give dimensions or custom."))
-            lst.display = False
-            return
+        from shopbeam import catalog
+
         text = (text or "").strip()
         if len(text) < 1:
             note.update(_text("Type part of a designation to see matches."))
