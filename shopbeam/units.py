@@ -145,7 +145,7 @@ def _unit(text: str):
     return reg.parse_units(text.replace("^", "**"))
 
 
-def quantity(text: str, key: str = ""):
+def quantity(text: str, key: str = "", unit_hint: str = "ft"):
     """Parse shop notation to a pint Quantity (sum of compound terms). Raises InputError."""
     if not isinstance(text, str):
         raise InputError(
@@ -158,7 +158,9 @@ def quantity(text: str, key: str = ""):
                          "(write e.g. \"8 ft\", \"1-1/2 in\", \"10' 6\\\"\")", key)
     sign, terms = scanned
     if any(not unit for _, unit in terms):
-        raise InputError(f"{text!r} has a bare number: give its unit (e.g. \"{terms[0][0]} ft\"); "
+        # all numbers: suggest the whole text with a unit; else the first bare number
+        shown = text.strip() if all(not u for _, u in terms) else str(terms[0][0])
+        raise InputError(f"{text!r} has a bare number: give its unit (e.g. \"{shown} {unit_hint}\"); "
                          "shopbeam never guesses a unit", key)
     reg = ureg()
     total = None
@@ -209,7 +211,8 @@ def parse(text, kind: str, key: str = "", *, positive: bool = False,
           nonnegative: bool = False) -> float:
     """Parse `text` as a `kind` (see KINDS) and return the SI value as a float."""
     ref, words, example = KINDS[kind]
-    q = quantity(text, key)
+    hint = re.search(r'"[-\d.]+ ([^"]+)"', example)
+    q = quantity(text, key, hint.group(1) if hint else "ft")
     if q.dimensionality == _dim(ref):
         value = float(q.to(ref).magnitude)
     elif kind in _WEIGHT_OK and q.dimensionality == _dim(_WEIGHT_OK[kind]):
