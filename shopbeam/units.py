@@ -159,7 +159,8 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft"):
     sign, terms = scanned
     if any(not unit for _, unit in terms):
         # all numbers: suggest the whole text with a unit; else the first bare number
-        shown = text.strip() if all(not u for _, u in terms) else str(terms[0][0])
+        shown = text.strip() if all(not u for _, u in terms) else \
+            next(str(n) for n, u in terms if not u)
         raise InputError(f"{text!r} has a bare number: give its unit (e.g. \"{shown} {unit_hint}\"); "
                          "shopbeam never guesses a unit", key)
     reg = ureg()
