@@ -218,3 +218,18 @@ def test_absurd_custom_section_modulus_never_prints_infinity_in_the_json(tmp_pat
         json.loads(out, parse_constant=bad)
     else:
         assert rc == 2 and "internal error" not in err and str(p) in err
+
+
+def test_calc_sheet_agreement_uses_the_loads_as_entered_when_a_trolley_moves():
+    # the sheet compared its exact reactions with the governing moving-load state and said
+    # "NO - report this" on a correct answer; it must compare with the same loads it solved
+    from pathlib import Path
+
+    from shopbeam.analysis import analyze
+    from shopbeam.calcsheet import calc_sheet
+    from shopbeam.jobfile import load_job
+
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
+    sheet = calc_sheet(job, analyze(job))
+    assert "Numeric engine agrees with this sheet: yes" in sheet
+    assert "no moving" in sheet  # and it says which loads it solved
