@@ -360,3 +360,26 @@ async def test_library_search_and_the_guard_on_opening_another_job():
         s = app.job_screen.session
         assert s.name == "jib-arm" and not s.dirty
         assert "LIFTING DEVICE" in str(app.job_screen.query_one("#banner").content)
+
+
+@sync
+async def test_area_load_with_a_tributary_width_typed_in_the_loads_form():
+    # worked by hand: 50 psf over a 16 in wide strip is 66.67 lbf/ft; on the demo's first
+    # load row (0 to 15 ft, pin at 0, roller at 12 ft) the row's total is 66.67 x 15 = 1000 lbf
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await goto(pilot, "3")
+        s = app.job_screen.session
+        before = sum(r.force for r in s.evaluation.result.solution.reactions)
+        old_w = -90 * 15  # the row as shipped: -90 lbf/ft over 15 ft
+        await type_into(pilot, app, "loads", "load.value", "-50 psf")
+        # without a width the job is refused, and the width field says why
+        assert not s.evaluation.ok
+        assert "width" in message_of(field(app, "loads", "load.width"))
+        await type_into(pilot, app, "loads", "load.width", "16 in")
+        assert s.evaluation.ok, s.evaluation.problems
+        assert "16 in" in message_of(field(app, "loads", "load.width"))
+        after = sum(r.force for r in s.evaluation.result.solution.reactions)
+        assert (after - before) / 4.4482216152605 == pytest.approx(-(-1000 - old_w), rel=1e-9)
+        assert 'width = "16 in"' in s.doc.text()  # plain in the job file too

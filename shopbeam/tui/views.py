@@ -198,9 +198,11 @@ def _load_words(row: dict) -> str:
     case = " [dead]" if row.get("case") == "dead" else ""
     if kind in ("point", "moment"):
         return f"{'couple' if kind == 'moment' else 'point'} {row.get('value', '?')} at {row.get('at', '?')}{lab}{case}"
-    v = row.get("value", "?")
+    v = row.get("value", row.get("total") and f"total {row['total']}" or "?")
     if isinstance(v, list):
         v = " to ".join(str(x) for x in v)
+    if row.get("width"):
+        v = f"{v} x {row['width']} wide"
     return f"{kind} {v} from {row.get('start', 'start')} to {row.get('end', 'end')}{lab}{case}"
 
 
@@ -305,6 +307,8 @@ class LoadsView(RowsView):
             yield Field("End", "load.end", placeholder="e.g. 12 ft")
             yield Field("Value", "load.value", placeholder="e.g. -300 lbf")
             yield Field("Value at end", "load.value2", placeholder="e.g. -60 lbf/ft")
+            yield Field("Width", "load.width", placeholder="psf width, e.g. 16 in")
+            yield Field("Total", "load.total", placeholder="e.g. -700 lbf in all")
             yield Field("Label", "load.label", placeholder="what it is")
             yield Choice("Case", ["live", "dead"], key="load.case")
 
@@ -328,10 +332,12 @@ class LoadsView(RowsView):
         v1, v2 = (v + ["", ""])[:2] if isinstance(v, list) else (v, "")
         values = {"load.at": row.get("at", ""), "load.start": row.get("start", ""),
                   "load.end": row.get("end", ""), "load.value": v1, "load.value2": v2,
+                  "load.width": row.get("width", ""), "load.total": row.get("total", ""),
                   "load.label": row.get("label", "")}
         shown = {"load.at": kind in ("point", "moment"),
                  "load.start": kind in ("uniform", "linear"),
-                 "load.end": kind in ("uniform", "linear"), "load.value2": kind == "linear"}
+                 "load.end": kind in ("uniform", "linear"), "load.value2": kind == "linear",
+                 "load.width": kind in ("uniform", "linear"), "load.total": kind == "uniform"}
         for f in self.query(Field):
             if f.key in values:
                 f.set_value(values[f.key])
@@ -343,7 +349,8 @@ class LoadsView(RowsView):
             "load.at": f"loads[{i}].at", "load.start": f"loads[{i}].start",
             "load.end": f"loads[{i}].end",
             "load.value": f"loads[{i}].value" + ("[0]" if kind == "linear" else ""),
-            "load.value2": f"loads[{i}].value[1]", "load.label": f"loads[{i}].label"})
+            "load.value2": f"loads[{i}].value[1]", "load.width": f"loads[{i}].width",
+            "load.total": f"loads[{i}].total", "load.label": f"loads[{i}].label"})
         # a problem with the whole value list of a linear load goes beside the first value
         if kind == "linear":
             msg = session.evaluation.message_for(f"loads[{i}].value")
@@ -358,10 +365,13 @@ class LoadsView(RowsView):
         kind = rows[self.selected].get("type") if rows else "point"
         value_kind = {"point": "force", "moment": "moment"}.get(kind, "line_load")
         kinds = {"load.at": "length", "load.start": "length", "load.end": "length",
-                 "load.value": value_kind, "load.value2": "line_load"}
+                 "load.value": value_kind, "load.value2": "line_load", "load.width": "small_length",
+                 "load.total": "force"}
         k = kinds.get(field.key)
         if k and field.value:
             got = echo(field.value, k, system)
+            if not got and k == "line_load":  # a load per area (psf, kPa) with a width
+                got = echo(field.value, "area_load", system)
             if field.key == "load.value" and got and kind == "point":
                 try:
                     got += " (down)" if units.parse(field.value, "force") < 0 else " (UP)"
