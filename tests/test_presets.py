@@ -99,12 +99,10 @@ def test_lifting_devices_are_tagged_lifting():
 # ------------------------------------------------------------------ solving
 
 
-def _solver_or_skip():
-    try:
-        from shopbeam.analysis import analyze
-        from shopbeam.jobfile import load_job
-    except ImportError as exc:  # only while the solver is being written
-        pytest.skip(f"solver not importable yet ({exc}); presets checked as TOML only")
+def _solver():
+    from shopbeam.analysis import analyze
+    from shopbeam.jobfile import load_job
+
     return load_job, analyze
 
 
@@ -132,7 +130,7 @@ HAND_TOTALS = {
 
 @pytest.mark.parametrize("path", PRESETS, ids=lambda p: p.stem)
 def test_preset_solves_cleanly_and_matches_hand_statics(path):
-    load_job, analyze = _solver_or_skip()
+    load_job, analyze = _solver()
     job = load_job(path)
     assert not job.warnings, [w.located() for w in job.warnings]
     result = analyze(job)
@@ -150,7 +148,7 @@ def test_preset_solves_cleanly_and_matches_hand_statics(path):
 
 
 def _analyzed(name):
-    load_job, analyze = _solver_or_skip()
+    load_job, analyze = _solver()
     return analyze(load_job(PRESET_DIR / f"{name}.toml"))
 
 
@@ -214,7 +212,7 @@ def test_demo_post_reaction_by_hand():
 
 
 def test_every_preset_through_the_cli_json(capsys):
-    _solver_or_skip()
+    _solver()
     from shopbeam.cli import main
 
     for path in PRESETS:
