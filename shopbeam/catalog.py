@@ -110,18 +110,37 @@ _FLOAT_COLS = ("W", "A", "d", "Ht", "OD", "bf", "B", "t", "tw", "tf", "tnom", "t
 
 
 @lru_cache(maxsize=1)
-def _aisc_rows() -> tuple[dict, ...]:
+def _aisc_lines() -> tuple[str, ...]:
+    """The shipped AISC table's header and data lines (comments dropped)."""
     text = resources.files("shopbeam").joinpath("data/aisc-shapes-v15.csv").read_text("utf-8")
-    lines = [ln for ln in text.splitlines() if ln and not ln.startswith("#")]
-    out = []
-    for r in csv.DictReader(lines):
-        row = {"Type": r["Type"], "label": r["AISC_Manual_Label"],
-               "edi": r["EDI_Std_Nomenclature"]}
-        for c in _FLOAT_COLS:
-            v = r.get(c, "")
-            row[c] = float(v) if v else None
-        out.append(row)
-    return tuple(out)
+    return tuple(ln for ln in text.splitlines() if ln and not ln.startswith("#"))
+
+
+def _row(r: dict) -> dict:
+    row = {"Type": r["Type"], "label": r["AISC_Manual_Label"], "edi": r["EDI_Std_Nomenclature"]}
+    for c in _FLOAT_COLS:
+        v = r.get(c, "")
+        row[c] = float(v) if v else None
+    return row
+
+
+@lru_cache(maxsize=1)
+def _aisc_rows() -> tuple[dict, ...]:
+    return tuple(_row(r) for r in csv.DictReader(_aisc_lines()))
+
+
+def _quick_aisc(k: str) -> Section | None:
+    """One AISC section by its canonical key, without building the whole index: a job names
+    one section, and a cold `shopbeam solve` should not pay for all 1,450 (None: not found
+    this way; the index decides)."""
+    prefix = k.split("|", 1)[0]
+    lines = _aisc_lines()
+    for line in lines[1:]:
+        label = line.split(",", 2)[1]
+        up = label.upper()
+        if up.startswith(prefix) and up[len(prefix):len(prefix) + 1].isdigit() and canon(label) == k:
+            return _from_aisc(_row(next(csv.DictReader([lines[0], line]))))
+    return None
 
 
 def _f(row, c, unit):
@@ -552,6 +571,10 @@ def lookup(designation: str, key: str = "beam.section", material=None) -> Sectio
     if m and not _PIPE.match(_prep(designation)):
         return _described(m.group("shape"), m.group("dims"), designation, key, material)
     k = canon(designation)
+    if k and _index.cache_info().currsize == 0:  # the index is not built yet: try one row
+        quick = _quick_aisc(k)
+        if quick is not None:
+            return quick
     by_key, _ = _index()
     if k and k in by_key:
         return by_key[k].section()

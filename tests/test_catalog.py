@@ -446,3 +446,21 @@ def test_job_naming_a_catalog_section_and_material_solves_with_self_weight(tmp_p
     total = 1000.0 + 12.21 * 12
     assert sum(r["force"] for r in out["reactions"]) == pytest.approx(total * 4.4482216152605,
                                                                       rel=1e-6)
+
+
+def test_quick_single_row_lookup_matches_the_full_index():
+    # the cold-start path (one row found without the index) must give exactly what the
+    # index gives, for every kind of AISC shape (AISC Shapes Database v15.0 labels)
+    import random
+
+    from shopbeam import catalog as cat
+
+    rows = cat._aisc_rows()
+    by_key = cat._index()[0]
+    labels = [r["label"] for r in random.Random(7).sample(rows, 80)]
+    labels += ["HSS4X4X1/4", "W8X31", "Pipe3STD", "C6X8.2", "L3X3X1/4", "WT6X20", "S8X18.4"]
+    for label in labels:
+        k = cat.canon(label)
+        quick = cat._quick_aisc(k)
+        assert quick is not None, label
+        assert quick == by_key[k].section(), label
