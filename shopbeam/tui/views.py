@@ -140,6 +140,11 @@ class RowsView(View):
         event.stop()
         self.post_message(self.RowAdd(self.table, self.new_kind))
 
+    def selected_row(self, session) -> tuple[int, dict | None]:
+        """The picked row of this view's table and its index (None when there are none)."""
+        rows = session.rows(self.table)
+        return (self.selected, rows[self.selected]) if rows else (self.selected, None)
+
     class RowAdd(Message):
         def __init__(self, table: str, kind: str) -> None:
             super().__init__()
@@ -250,12 +255,10 @@ class SpanView(RowsView):
                                  {"beam.length": "beam.length", "beam.members": "beam.members"})
 
     def show_form(self, session) -> None:
-        rows = session.rows(self.table)
-        if not rows:
+        i, row = self.selected_row(session)
+        if row is None:
             return
-        i = self.selected
-        row = rows[i]
-        kind = row.get("type", "pin")
+        kind = row.get("type", self.new_kind)
         for c in self.query(Choice):
             if c.key == "support.type":
                 c.set(kind)
@@ -315,14 +318,11 @@ class LoadsView(RowsView):
     def row_text(self, i, row, session) -> str:
         return _load_words(row)
 
-
     def show_form(self, session) -> None:
-        rows = session.rows(self.table)
-        if not rows:
+        i, row = self.selected_row(session)
+        if row is None:
             return
-        i = self.selected
-        row = rows[i]
-        kind = row.get("type", "point")
+        kind = row.get("type", self.new_kind)
         for c in self.query(Choice):
             if c.key == "load.type":
                 c.set(kind)
