@@ -22,6 +22,9 @@ class Result:
     checks: tuple[Check, ...]
     cautions: tuple[str, ...]
     shown_state: str = ""  # which load state the reactions and diagrams show, if not the only one
+    # with patterned loads: the load state that governs, for drawing (None: `solution` is it)
+    state_solution: Solution | None = None
+    state_words: str = ""
 
     @property
     def governing(self) -> Check:
@@ -60,7 +63,7 @@ def analyze(job: Job) -> Result:
     from shopbeam import loading
     from shopbeam.checks import check_notes, impact_of
 
-    shown = ""
+    shown, state_sol, state_words = "", None, ""
     if loading.needs_states(job):
         # patterns, moving loads or impact: the checks cover every load state. The numbers
         # shown are the loads as entered, except with moving loads (the entered loads do
@@ -78,12 +81,17 @@ def analyze(job: Job) -> Result:
                          f"{gov.name}" + (f" ({words})" if words else "")
                          + (", impact included" if impact_of(job) else ""))
         else:
-            extra.append("reactions, extremes and diagrams are for the loads as entered"
-                         + (" (all patterned loads on)" if any(ld.patterned for ld in job.loads) else ""))
+            patterned = any(ld.patterned for ld in job.loads)
+            extra.append("reactions and extremes are for the loads as entered"
+                         + (" (all patterned loads on)" if patterned else ""))
+            if patterned and ev.solution is not None and words:
+                state_sol = ev.solution
+                state_words = f"the load state that governs {gov.name}: {words}"
         shown = "; ".join(extra)
     else:
         checks = run_checks(job, sol)
-    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol) + check_notes(job)), shown)
+    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol) + check_notes(job)), shown,
+                  state_sol, state_words)
 
 
 def to_json(result: Result) -> dict:

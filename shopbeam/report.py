@@ -95,6 +95,12 @@ def render(result: Result) -> str:
     for r in sol.reactions:
         mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
         lines.append(f"  {r.kind:<7} at {fmt_pos(r.at, sy):<12} force {f(r.force, 'force'):<14}{mom}")
+    if result.state_solution is not None:
+        lines += _wrap(f"In {result.state_words}:", "  ")
+        for r in result.state_solution.reactions:
+            mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
+            up = "  (pulls down: uplift)" if r.force < 0 else ""
+            lines.append(f"    {r.kind:<7} at {fmt_pos(r.at, sy):<12} force {f(r.force, 'force')}{mom}{up}")
     lines.append("")
 
     lines.append("EXTREMES (exact, with where they occur)")

@@ -141,3 +141,17 @@ def test_size_from_the_bundled_stock_list_ranks_by_weight_and_price():
     assert d["lightest"] == min(rows, key=lambda x: x["mass_per_length"])["designation"]
     priced = [x for x in rows if x.get("price_per_m") is not None]
     assert d["cheapest"] == min(priced, key=lambda x: x["price_per_m"] * 1.0)["designation"]
+
+
+def test_patterned_shelf_reports_the_uplift_of_the_governing_pattern():
+    # AISC Manual Table 3-23, case 30 (two equal spans, uniform load on one span; from
+    # memory): the far end of the empty span pulls down by wl/16. The preset: 100 psf x 18 in
+    # = 150 lbf/ft on two rails (75 lbf/ft each), l = 5 ft, plus the rail's own 2.2 lb/ft on
+    # both spans (case 29: 3wl/8 up at the end): -75 x 5/16 + 3 x 2.2 x 5/8 = -19.31 lbf
+    root = Path(__file__).resolve().parents[1]
+    r = run("solve", str(root / "presets" / "continuous-shelf.toml"))
+    assert r.returncode == 0, r.stderr
+    text = r.stdout
+    assert "patterned loads on span 5 ft-10 ft" in text
+    line = next(ln for ln in text.splitlines() if "uplift" in ln)
+    assert "at 0 ft" in line and "-19.31 lbf" in line

@@ -383,3 +383,19 @@ async def test_area_load_with_a_tributary_width_typed_in_the_loads_form():
         after = sum(r.force for r in s.evaluation.result.solution.reactions)
         assert (after - before) / 4.4482216152605 == pytest.approx(-(-1000 - old_w), rel=1e-9)
         assert 'width = "16 in"' in s.doc.text()  # plain in the job file too
+
+
+@sync
+async def test_plots_of_a_patterned_job_draw_the_governing_pattern():
+    app = make_app(PRESETS / "continuous-shelf.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        await goto(pilot, "8")
+        head = text_of(app, "#plot-problems")
+        assert "Diagrams of the load state that governs" in head
+        assert "patterned loads on span 5 ft-10 ft" in head
+        # one bay loaded: the deflection plot's largest sag is in that bay (5 to 10 ft)
+        defl = text_of(app, "#plot-deflection")
+        mins = [ln for ln in defl.splitlines() if " min " in ln]
+        at = float(mins[0].split("at x = ")[1].split()[0])
+        assert 5.0 < at < 10.0

@@ -722,11 +722,20 @@ class PlotsView(View):
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         height = 12 if self.app.size.height < 30 else 14
-        self.query_one("#plot-problems", Static).update(_text(problems_text(ev)))
-        self.query_one("#plot-problems", Static).display = ev.result is None
+        r = ev.result
+        head = self.query_one("#plot-problems", Static)
+        if r is not None and r.state_solution is not None:
+            # patterned loads: draw the pattern that governs, and say which it is
+            from dataclasses import replace
+
+            head.update(_text(f"Diagrams of {r.state_words}."))
+            r = replace(r, solution=r.state_solution)
+        else:
+            head.update(_text(problems_text(ev)))
+        head.display = r is None or ev.result.state_solution is not None
         for name in drawing.PLOT_KINDS:
             st = self.query_one(f"#plot-{name}", Static)
-            st.display = ev.result is not None
-            if ev.result is not None:
-                st.update(Text(drawing.plot(ev.result, name, width, height), no_wrap=True,
+            st.display = r is not None
+            if r is not None:
+                st.update(Text(drawing.plot(r, name, width, height), no_wrap=True,
                                overflow="crop"))
