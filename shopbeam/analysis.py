@@ -118,4 +118,10 @@ def to_json(result: Result) -> dict:
         "self_weight": (-job.self_weight_load().w1 if job.self_weight else 0.0),
         "units": "SI (m, N, N*m, Pa, rad)",
         "shown_state": result.shown_state,
+        "governing_state": None if result.state_solution is None else {
+            "words": result.state_words,
+            "reactions": [{"at": float(r.at), "type": r.kind, "force": float(r.force),
+                           "moment": float(r.moment)} for r in result.state_solution.reactions],
+            "extremes": {n: e.as_dict() for n, e in result.state_solution.extremes().items()},
+        },
     }

@@ -155,3 +155,16 @@ def test_patterned_shelf_reports_the_uplift_of_the_governing_pattern():
     assert "patterned loads on span 5 ft-10 ft" in text
     line = next(ln for ln in text.splitlines() if "uplift" in ln)
     assert "at 0 ft" in line and "-19.31 lbf" in line
+
+
+def test_json_of_a_patterned_job_carries_the_governing_state():
+    # same case as above (AISC Manual Table 3-23, case 30, from memory): uplift wl/16 at the
+    # end of the empty span, less the rail's own weight; in SI for the JSON
+    root = Path(__file__).resolve().parents[1]
+    r = run("solve", str(root / "presets" / "continuous-shelf.toml"), "--json")
+    d = json.loads(r.stdout)
+    g = d["governing_state"]
+    assert "patterned loads on" in g["words"]
+    assert g["reactions"][0]["force"] == pytest.approx(-19.31 * 4.4482216152605, rel=2e-3)
+    # the loads as entered (all spans loaded) stay the contract's reactions: no uplift there
+    assert d["reactions"][0]["force"] > 0
