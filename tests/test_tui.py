@@ -399,3 +399,20 @@ async def test_plots_of_a_patterned_job_draw_the_governing_pattern():
         mins = [ln for ln in defl.splitlines() if " min " in ln]
         at = float(mins[0].split("at x = ")[1].split()[0])
         assert 5.0 < at < 10.0
+
+
+@sync
+async def test_esc_then_digit_typed_fast_in_a_field_changes_view_and_types_nothing():
+    # over SSH and in tmux, Esc followed at once by 7 arrives as one key, the Option-layer
+    # character of 7 (pilcrow sign): it must not land in the field
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await pilot.pause()
+        title = field(app, "job", "title")
+        before = title.value
+        title.input.focus()
+        await pilot.pause()
+        await pilot.press("pilcrow_sign")
+        await pilot.pause()
+        assert app.job_screen.current == "results"
+        assert field(app, "job", "title").value == before

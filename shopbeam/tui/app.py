@@ -24,7 +24,7 @@ from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowsView, SectionView, SpanView, problems_text)
-from shopbeam.tui.widgets import Banner, Choice, Field, ViewBar
+from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, ViewBar
 
 # (id, key, name, short name, class); the first six are the input steps in order
 VIEWS = [
@@ -71,6 +71,8 @@ def _number_or_text(text: str):
         return t
 
 
+
+
 class JobScreen(Screen):
     """The open job: input views, result views, the live answer and the safety banner."""
 
@@ -85,7 +87,9 @@ class JobScreen(Screen):
         Binding("question_mark", "app.help", "help", show=False),
         Binding("l", "library", "library", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
-    ] + [Binding(f"{key},alt+{key}", f"view('{vid}')", name, show=False)
+    ] + [Binding(",".join([key, f"alt+{key}"] + ([OPTION_DIGITS[key]] if key in OPTION_DIGITS
+                                                  else [])),
+                 f"view('{vid}')", name, show=False)
          for vid, key, name, _s, _c in VIEWS]
 
     def __init__(self, session: Session) -> None:

@@ -17,6 +17,34 @@ from textual.widget import Widget
 from textual.widgets import Input, Label, Static
 
 
+
+# Esc typed quickly before a digit (or alt+digit) reaches the app as the character a Mac
+# keyboard's Option layer puts on that digit; over SSH and in tmux that is how "Esc 7" arrives.
+# The view keys accept these too, and a field hands them on instead of typing them.
+OPTION_DIGITS = {"1": "inverted_exclamation_mark", "2": "trade_mark_sign", "3": "pound_sign",
+                 "4": "cent_sign", "5": "infinity", "6": "section_sign", "7": "pilcrow_sign",
+                 "8": "bullet", "9": "ª", "0": "º"}
+_DIGIT_OF = {name: digit for digit, name in OPTION_DIGITS.items()}
+
+
+class FieldInput(Input):
+    """A field's text box: Esc-then-digit typed fast leaves the field and changes view."""
+
+    async def _on_key(self, event) -> None:
+        digit = _DIGIT_OF.get(event.key)
+        if digit is None:
+            await super()._on_key(event)
+            return
+        event.stop()
+        event.prevent_default()
+        from shopbeam.tui.app import VIEWS
+
+        vid = next((v[0] for v in VIEWS if v[1] == digit), None)
+        self.screen.set_focus(None)
+        if vid is not None:
+            await self.screen.run_action(f"view('{vid}')")
+
+
 class Field(Horizontal):
     """Label, one-line input and a message in words beside it (how the entry was read, or
     what is wrong with it)."""
@@ -55,7 +83,7 @@ class Field(Horizontal):
 
     def compose(self) -> ComposeResult:
         yield Label(self.label, classes="field-label")
-        inp = Input(self._value, placeholder=self._placeholder, compact=True,
+        inp = FieldInput(self._value, placeholder=self._placeholder, compact=True,
                     suggester=self._suggester, select_on_focus=True)
         inp.cursor_blink = getattr(self.app, "cursor_blink", True)
         yield inp
