@@ -23,6 +23,7 @@ from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
 
 from shopbeam.cli import main
+from jobtext import CUSTOM_MEMBER
 
 SETTINGS = dict(deadline=None, suppress_health_check=[HealthCheck.too_slow])
 SLOW_LIMIT = 10.0  # seconds: an example taking longer than this counts as a hang
@@ -37,17 +38,7 @@ tags = ["rack"]
 length = "10 ft"
 self_weight = true
 
-[beam.section]
-shape = "custom"
-area = "3.37 in^2"
-ix = "7.80 in^4"
-sx = "3.90 in^3"
-
-[beam.material]
-e = "29000 ksi"
-fy = "46 ksi"
-density = "490 lb/ft^3"
-
+""" + CUSTOM_MEMBER + """
 [[supports]]
 at = "0 ft"
 type = "pin"

@@ -17,6 +17,7 @@ import pytest
 
 from shopbeam.model import Beam, Load, Support
 from shopbeam.solver import solve
+from jobtext import CUSTOM_MEMBER
 
 IN, FT = 0.0254, 0.3048
 EI = 6.5e5  # N*m^2
@@ -241,16 +242,7 @@ title = "three spans of {span} {unit}"
 [beam]
 length = "{3 * float(span):g} {unit}"
 self_weight = false
-[beam.section]
-shape = "custom"
-area = "3.37 in^2"
-ix = "7.80 in^4"
-sx = "3.90 in^3"
-[beam.material]
-e = "29000 ksi"
-fy = "46 ksi"
-density = "490 lb/ft^3"
-[[supports]]
+{CUSTOM_MEMBER}[[supports]]
 at = "0 {unit}"
 type = "pin"
 [[supports]]

@@ -24,6 +24,7 @@ from hypothesis import strategies as st
 from shopbeam.errors import UnstableBeam
 from shopbeam.model import Beam, Load, Support
 from shopbeam.solver import solve
+from jobtext import CUSTOM_MEMBER
 
 SETTINGS = dict(deadline=None, suppress_health_check=[HealthCheck.too_slow,
                                                        HealthCheck.filter_too_much])
@@ -247,16 +248,7 @@ title = "random beam"
 [beam]
 length = "4 m"
 self_weight = false
-[beam.section]
-shape = "custom"
-area = "3.37 in^2"
-ix = "7.80 in^4"
-sx = "3.90 in^3"
-[beam.material]
-e = "29000 ksi"
-fy = "46 ksi"
-density = "490 lb/ft^3"
-{sups}
+{CUSTOM_MEMBER}{sups}
 [[loads]]
 type = "point"
 at = "1.5 m"
