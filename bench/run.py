@@ -30,8 +30,8 @@ sys.path.insert(0, str(ROOT))
 
 import numpy as np  # noqa: E402
 
-from shopbeam.model import Beam, Load, Support  # noqa: E402
-from shopbeam.solver import solve, stability_problem  # noqa: E402
+from shopbeam.engine.model import Beam, Load, Support  # noqa: E402
+from shopbeam.engine.solver import solve, stability_problem  # noqa: E402
 
 EI = 650_000.0  # N*m^2, about an HSS4x4x1/4 in steel
 SPAN = 1.8  # m
@@ -208,8 +208,8 @@ def bench_growth(quick: bool) -> dict:
 def exact_reactions(beam: Beam) -> tuple[list[float], str]:
     """Reactions by the straightforward symbolic solve, in the solver's reaction order."""
     try:
-        from shopbeam.calcsheet import exact_solve, exact_number
-        how = "shopbeam.calcsheet.exact_solve"
+        from shopbeam.output.calcsheet import exact_solve, exact_number
+        how = "shopbeam.output.calcsheet.exact_solve"
     except ImportError:  # pragma: no cover - the calc sheet not there yet
         from bench.symbolic import exact_solve, exact_number  # type: ignore
         how = "bench/symbolic.py"
@@ -346,8 +346,8 @@ PEAK_RSS = '''def peak_rss():  # VmHWM: this process's own peak (ru_maxrss would
 MEM_SOLVE = """
 import resource, sys, tracemalloc, json
 {PEAK_RSS}tracemalloc.start()
-from shopbeam.jobfile import load_job
-from shopbeam.analysis import analyze, to_json
+from shopbeam.jobs.jobfile import load_job
+from shopbeam.design.analysis import analyze, to_json
 job = load_job(sys.argv[1])
 res = analyze(job)
 json.dumps(to_json(res))
@@ -416,18 +416,18 @@ def bench_memory(job: Path) -> dict:
 
 def bench_sizing(job: Path, quick: bool) -> dict:
     out: dict = {}
-    from shopbeam.jobfile import load_job
+    from shopbeam.jobs.jobfile import load_job
 
     try:
         jb = load_job(job)
     except Exception as e:  # noqa: BLE001
         return {"error": f"cannot load {job}: {e}"}
     try:
-        from shopbeam import sizing
+        from shopbeam.design import sizing
     except ImportError as e:
-        out["sizing"] = {"error": f"shopbeam.sizing not available ({e})"}
+        out["sizing"] = {"error": f"shopbeam.design.sizing not available ({e})"}
     else:
-        from shopbeam import catalog
+        from shopbeam.members import catalog
 
         kind = sizing.default_kind(jb)
         n = len(catalog.list_sections(kind))
@@ -457,13 +457,13 @@ def bench_sizing(job: Path, quick: bool) -> dict:
         except InputError as e:
             out["sizing, section by section (a spring)"] = {"refused": str(e)}
     try:
-        from shopbeam import capacity as cap
+        from shopbeam.design import capacity as cap
     except ImportError as e:
-        out["capacity"] = {"error": f"shopbeam.capacity not available ({e})"}
+        out["capacity"] = {"error": f"shopbeam.design.capacity not available ({e})"}
     else:
         t = median_time(lambda: cap.capacity(jb), min_runs=5, min_seconds=0.3, max_runs=200)
         out["capacity"] = {"median_s": t}
-    from shopbeam.analysis import analyze
+    from shopbeam.design.analysis import analyze
 
     out["analyze JOB in-process (solve, checks, self-checks)"] = {
         "median_s": median_time(lambda: analyze(jb), min_seconds=0.3), "target": None}

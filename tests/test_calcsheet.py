@@ -7,8 +7,8 @@ from __future__ import annotations
 
 import sympy as sp
 
-from shopbeam.calcsheet import brackets, exact_solve
-from shopbeam.model import Beam, Load, Support
+from shopbeam.output.calcsheet import brackets, exact_solve
+from shopbeam.engine.model import Beam, Load, Support
 
 
 def test_propped_cantilever_reactions_are_exact_rationals():

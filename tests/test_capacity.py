@@ -9,9 +9,9 @@ import sys
 
 import pytest
 
-from shopbeam.capacity import brent, capacity, rating_label
-from shopbeam.jobfile import parse_job_text
-from shopbeam.loading import evaluate
+from shopbeam.design.capacity import brent, capacity, rating_label
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.design.loading import evaluate
 
 LBF, FT, IN = 4.4482216152605, 0.3048, 0.0254
 KSI = 6.894757293168361e6

@@ -13,8 +13,8 @@ from pathlib import Path
 
 import pytest
 
-from shopbeam import catalog
-from shopbeam import sections as S
+from shopbeam.members import catalog
+from shopbeam.members import sections as S
 from shopbeam.errors import InputError
 
 IN = 0.0254
@@ -131,7 +131,7 @@ def test_list_sections_kinds_and_filters():
 
 def test_catalog_is_fast_and_pint_free():
     # CPU time of this process, so a busy machine (parallel tests) does not skew it
-    code = ("import time, sys; t = time.process_time(); from shopbeam import catalog;"
+    code = ("import time, sys; t = time.process_time(); from shopbeam.members import catalog;"
             "s = catalog.list_sections('HSS'); a = time.process_time() - t;"
             "t = time.process_time(); s = catalog.list_sections('HSS');"
             "catalog.lookup('HSS4x4x1/4'); b = time.process_time() - t;"
@@ -341,7 +341,7 @@ def test_tabulated_weight_follows_the_material():
 
 
 def test_mechanical_tube_kinds_use_the_nominal_wall():
-    from shopbeam.materials import resolve_material
+    from shopbeam.members.materials import resolve_material
 
     listed = {s.designation: s for s in catalog.list_sections("mech-tube")}
     s = listed["rect-tube 2 x 1 x 14ga"]
@@ -453,7 +453,7 @@ def test_quick_single_row_lookup_matches_the_full_index():
     # index gives, for every kind of AISC shape (AISC Shapes Database v15.0 labels)
     import random
 
-    from shopbeam import catalog as cat
+    from shopbeam.members import catalog as cat
 
     rows = cat._aisc_rows()
     by_key = cat._index()[0]

@@ -10,11 +10,11 @@ import math
 
 import pytest
 
-from shopbeam import catalog
-from shopbeam.analysis import analyze
-from shopbeam.checks import (cb_factor, flexure, run_checks, shear_strength, strengths)
-from shopbeam.jobfile import parse_job_text
-from shopbeam.materials import get as material
+from shopbeam.members import catalog
+from shopbeam.design.analysis import analyze
+from shopbeam.design.checks import (cb_factor, flexure, run_checks, shear_strength, strengths)
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.members.materials import get as material
 
 KIP, FT, IN = 4448.2216152605, 0.3048, 0.0254
 KIPFT = KIP * FT
@@ -150,7 +150,7 @@ def test_hss_flange_classes_follow_f7_limits():
 def test_hss_noncompact_flange_formula_is_continuous():
     # AISC 360-16 F7-2 meets Mp at lambda_p and (nearly: 3.57 x 1.40 - 4.0 = 0.998) Fy S at
     # lambda_r (property of the formula)
-    from shopbeam.sections import rect_tube
+    from shopbeam.members.sections import rect_tube
 
     mat = material("A500-C")
     root = math.sqrt(mat.e / mat.fy)

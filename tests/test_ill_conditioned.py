@@ -15,8 +15,8 @@ from fractions import Fraction as F
 
 import pytest
 
-from shopbeam.model import Beam, Load, Support
-from shopbeam.solver import solve
+from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.engine.solver import solve
 from jobtext import CUSTOM_MEMBER
 
 IN, FT = 0.0254, 0.3048

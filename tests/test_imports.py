@@ -18,9 +18,11 @@ def _modules_after(code: str) -> set[str]:
 
 def test_solve_imports_neither_textual_nor_sympy():
     mods = _modules_after(
-        "from shopbeam.jobfile import load_job\n"
-        "from shopbeam.analysis import analyze, to_json\n"
-        "from shopbeam import report, cli, checks, units\n"
+        "from shopbeam.jobs.jobfile import load_job\n"
+        "from shopbeam.design.analysis import analyze, to_json\n"
+        "from shopbeam import cli, units\n"
+        "from shopbeam.output import report\n"
+        "from shopbeam.design import checks\n"
         f"r = analyze(load_job({str(PRESET)!r}))\n"
         "report.render(r); to_json(r); r.solution.diagnostics\n")
     assert "textual" not in mods
@@ -29,8 +31,8 @@ def test_solve_imports_neither_textual_nor_sympy():
 
 def test_calc_sheet_brings_sympy_but_not_textual():
     mods = _modules_after(
-        "from shopbeam.jobfile import load_job\n"
-        "from shopbeam.calcsheet import calc_sheet\n"
+        "from shopbeam.jobs.jobfile import load_job\n"
+        "from shopbeam.output.calcsheet import calc_sheet\n"
         f"calc_sheet(load_job({str(PRESET)!r}))\n")
     assert "sympy" in mods and "textual" not in mods
 

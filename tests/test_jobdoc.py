@@ -9,7 +9,7 @@ from pathlib import Path
 
 import pytest
 
-from shopbeam import jobdoc, storage
+from shopbeam.jobs import jobdoc, storage
 from shopbeam.errors import InputError
 
 PRESETS = sorted((Path(__file__).resolve().parent.parent / "presets").glob("*.toml"))
@@ -181,9 +181,9 @@ def test_template_is_valid_commented_and_states_the_signs():
 
 
 def test_template_reads_with_the_job_reader():
-    pytest.importorskip("shopbeam.catalog", reason="section catalog not built yet")
-    pytest.importorskip("shopbeam.materials", reason="materials library not built yet")
-    from shopbeam.jobfile import parse_job_text
+    pytest.importorskip("shopbeam.members.catalog", reason="section catalog not built yet")
+    pytest.importorskip("shopbeam.members.materials", reason="materials library not built yet")
+    from shopbeam.jobs.jobfile import parse_job_text
 
     job = parse_job_text(jobdoc.new_job_text("Template", length="10 ft"), "new.toml")
     assert job.length == pytest.approx(3.048)  # 10 ft, exact by definition

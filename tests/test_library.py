@@ -11,7 +11,7 @@ from pathlib import Path
 
 import pytest
 
-from shopbeam import library, storage
+from shopbeam.jobs import library, storage
 from shopbeam.errors import InputError
 
 BUNDLED = Path(__file__).resolve().parent.parent / "presets"

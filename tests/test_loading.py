@@ -5,12 +5,12 @@ from __future__ import annotations
 import numpy as np
 import pytest
 
-from shopbeam.capacity import capacity
+from shopbeam.design.capacity import capacity
 from shopbeam.errors import InputError
-from shopbeam.jobfile import parse_job_text
-from shopbeam.loading import (candidate_positions, envelope_bruteforce, evaluate, read_moving,
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.design.loading import (candidate_positions, envelope_bruteforce, evaluate, read_moving,
                               state_set)
-from shopbeam.solver import solve
+from shopbeam.engine.solver import solve
 
 LBF, FT = 4.4482216152605, 0.3048
 
@@ -77,7 +77,7 @@ def test_pattern_states_equal_a_direct_solve():
     st = ss.state(1.7, (0, 2))
     from dataclasses import replace
 
-    from shopbeam.model import Load
+    from shopbeam.engine.model import Load
 
     w = -100 * LBF / FT * 1.7
     loads = (Load("uniform", start=0, end=10 * FT, w1=w), Load("uniform", start=20 * FT, end=30 * FT, w1=w))
@@ -144,8 +144,8 @@ def test_moving_envelope_matches_a_fine_resolve(b, more, s):
         assert c.demand <= ref * (1 + 3e-3)
     from dataclasses import replace
 
-    from shopbeam.checks import checks_for, strengths
-    from shopbeam.model import Load
+    from shopbeam.design.checks import checks_for, strengths
+    from shopbeam.engine.model import Load
 
     ss = state_set(job)
     st = strengths(job, beam=ss.beam)

@@ -5,7 +5,7 @@ from __future__ import annotations
 import pytest
 
 from shopbeam.errors import InputError
-from shopbeam.materials import Material, list_materials, resolve_material
+from shopbeam.members.materials import Material, list_materials, resolve_material
 
 KSI = 6894757.293168361  # Pa, exact from the international inch and pound-force
 PSI = KSI / 1000
@@ -152,7 +152,7 @@ def test_cmd_materials_lists_every_material(capsys):
     import argparse
     import json
 
-    from shopbeam.materials import cmd_materials
+    from shopbeam.members.materials import cmd_materials
 
     assert cmd_materials(argparse.Namespace(json=True)) == 0
     rows = json.loads(capsys.readouterr().out)

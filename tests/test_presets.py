@@ -100,8 +100,8 @@ def test_lifting_devices_are_tagged_lifting():
 
 
 def _solver():
-    from shopbeam.analysis import analyze
-    from shopbeam.jobfile import load_job
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import load_job
 
     return load_job, analyze
 

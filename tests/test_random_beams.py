@@ -22,8 +22,8 @@ from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
 
 from shopbeam.errors import UnstableBeam
-from shopbeam.model import Beam, Load, Support
-from shopbeam.solver import solve
+from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.engine.solver import solve
 from jobtext import CUSTOM_MEMBER
 
 SETTINGS = dict(deadline=None, suppress_health_check=[HealthCheck.too_slow,

@@ -7,8 +7,8 @@ from __future__ import annotations
 
 import pytest
 
-from shopbeam.model import Beam, Load, Support
-from shopbeam.solver import solve
+from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.engine.solver import solve
 from jobtext import CUSTOM_MEMBER
 
 
@@ -217,9 +217,9 @@ def test_calc_sheet_agreement_uses_the_loads_as_entered_when_a_trolley_moves():
     # "NO - report this" on a correct answer; it must compare with the same loads it solved
     from pathlib import Path
 
-    from shopbeam.analysis import analyze
-    from shopbeam.calcsheet import calc_sheet
-    from shopbeam.jobfile import load_job
+    from shopbeam.design.analysis import analyze
+    from shopbeam.output.calcsheet import calc_sheet
+    from shopbeam.jobs.jobfile import load_job
 
     job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
     sheet = calc_sheet(job, analyze(job))

@@ -21,9 +21,9 @@ import math
 
 import pytest
 
-from shopbeam import catalog, sections as S
+from shopbeam.members import catalog, sections as S
 from shopbeam.errors import InputError
-from shopbeam.sections import resolve_section
+from shopbeam.members.sections import resolve_section
 
 IN = 0.0254
 
@@ -171,7 +171,7 @@ def test_resolve_custom_depth_gives_s():
 
 
 def test_resolve_rect_tube_gauge_and_wall_rule():
-    from shopbeam.materials import resolve_material
+    from shopbeam.members.materials import resolve_material
 
     a500 = resolve_section({"shape": "rect-tube", "depth": "2 in", "width": "1 in",
                             "wall": "14 ga"}, material=resolve_material("A500-C"))

@@ -11,8 +11,8 @@ import sys
 
 import pytest
 
-from shopbeam.analysis import analyze
-from shopbeam.jobfile import parse_job_text
+from shopbeam.design.analysis import analyze
+from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.errors import InputErrors
 
 LBF, FT = 4.4482216152605, 0.3048

@@ -11,11 +11,11 @@ from dataclasses import replace
 
 import pytest
 
-from shopbeam import catalog
-from shopbeam.capacity import capacity
-from shopbeam.jobfile import parse_job_text
-from shopbeam.loading import evaluate
-from shopbeam.sizing import size
+from shopbeam.members import catalog
+from shopbeam.design.capacity import capacity
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.design.loading import evaluate
+from shopbeam.design.sizing import size
 
 RACK = """schema = 1
 title = "Rack beam pair"
@@ -151,7 +151,7 @@ HSS4x4x1/8,7.95,A500-C,offcut price
 
 
 def test_stock_list_ranks_by_weight_and_by_price(tmp_path):
-    from shopbeam.stock import load_stock
+    from shopbeam.members.stock import load_stock
 
     p = tmp_path / "stock.csv"
     p.write_text(STOCK)

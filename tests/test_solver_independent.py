@@ -13,8 +13,8 @@ import pytest
 
 scipy_integrate = pytest.importorskip("scipy.integrate")
 
-from shopbeam.model import Beam, Load, Support  # noqa: E402
-from shopbeam.solver import solve  # noqa: E402
+from shopbeam.engine.model import Beam, Load, Support  # noqa: E402
+from shopbeam.engine.solver import solve  # noqa: E402
 
 EI = 1.5e6
 

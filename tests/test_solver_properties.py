@@ -12,8 +12,8 @@ import numpy as np
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
-from shopbeam.model import Beam, Load, Support
-from shopbeam.solver import solve
+from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.engine.solver import solve
 
 SETTINGS = settings(max_examples=60, deadline=None)
 

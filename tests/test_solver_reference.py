@@ -14,8 +14,8 @@ import math
 
 import pytest
 
-from shopbeam.model import Beam, Load, Support
-from shopbeam.solver import solve
+from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.engine.solver import solve
 
 EI = 2.0e6  # N*m^2 (a 4x4 tube is about 1.1e6); any positive value works
 REL = 1e-9

@@ -5,7 +5,7 @@ from __future__ import annotations
 import pytest
 
 from shopbeam.errors import InputError, InputErrors
-from shopbeam.stock import load_stock, parse_stock, rank
+from shopbeam.members.stock import load_stock, parse_stock, rank
 
 IN = 0.0254
 FT = 0.3048

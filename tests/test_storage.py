@@ -12,7 +12,7 @@ import time
 
 import pytest
 
-from shopbeam import storage
+from shopbeam.jobs import storage
 from shopbeam.errors import InputError
 
 OLD = 'schema = 1\ntitle = "old text"\n'
@@ -33,7 +33,7 @@ def _wait_ready(proc: subprocess.Popen, timeout: float = 20.0) -> None:
 
 KILL_MID_WRITE = """
     import os, sys, time
-    from shopbeam import storage
+    from shopbeam.jobs import storage
     real_write = os.write
     calls = []
     def slow_write(fd, data):
@@ -48,7 +48,7 @@ KILL_MID_WRITE = """
 
 KILL_BEFORE_RENAME = """
     import os, sys, time
-    from shopbeam import storage
+    from shopbeam.jobs import storage
     real_replace = os.replace
     def stalled_replace(src, dst):
         print("READY", flush=True)          # temp file written and fsynced, not yet renamed
@@ -171,7 +171,7 @@ def test_lock_held_elsewhere_gives_clear_message(tmp_path, monkeypatch):
     holder = _child("""
         import sys, time
         from filelock import FileLock
-        from shopbeam import storage
+        from shopbeam.jobs import storage
         with FileLock(str(storage.lock_path(sys.argv[1]))):
             print("READY", flush=True)
             time.sleep(30)
@@ -255,7 +255,7 @@ def test_symlink_out_of_the_folder_is_refused(tmp_path):
 
 COUNTER = """
     import sys
-    from shopbeam import storage
+    from shopbeam.jobs import storage
     path, n = sys.argv[1], int(sys.argv[2])
     def bump(text):
         return f"count = {int(text.split('=')[1]) + 1}\\n"
@@ -285,7 +285,7 @@ def test_two_processes_updating_the_shop_library_lose_nothing(tmp_path):
 
 WRITER = """
     import sys
-    from shopbeam import storage
+    from shopbeam.jobs import storage
     path, mark, n = sys.argv[1], sys.argv[2], int(sys.argv[3])
     body = (mark * 99 + "\\n") * 20000          # about 2 MB, so a write takes a while
     print("READY", flush=True)
@@ -324,7 +324,7 @@ def test_two_processes_saving_at_once_never_leave_a_torn_file(tmp_path):
 
 RACER = """
     import sys
-    from shopbeam import storage
+    from shopbeam.jobs import storage
     path, text = sys.argv[1], sys.argv[2]
     base = storage.open_text(path)
     print("READY", flush=True)

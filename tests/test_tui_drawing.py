@@ -4,8 +4,8 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from shopbeam.jobfile import load_job
-from shopbeam.analysis import analyze
+from shopbeam.jobs.jobfile import load_job
+from shopbeam.design.analysis import analyze
 from shopbeam.tui import drawing
 from shopbeam.tui.session import Session
 from shopbeam.tui.views import in_words

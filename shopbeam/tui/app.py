@@ -434,7 +434,7 @@ class JobScreen(Screen):
 
     # ------------------------------------------------------------------ saving
     def _writable_places(self) -> list[str]:
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         places = [p.origin for p in library.places(self.session.library_dir) if p.writable]
         return ["user"] + [p for p in places if p != "user"]
@@ -455,13 +455,13 @@ class JobScreen(Screen):
             name, to = answer
             self._try_save(lambda overwrite: s.save_as(name, to, overwrite=overwrite), then)
 
-        from shopbeam import storage
+        from shopbeam.jobs import storage
 
         name = s.name or storage.suggest_name(str(s.doc.get("title") or "job"))
         self.app.push_screen(SaveAsScreen(name, self._writable_places()), got)
 
     def _try_save(self, do, then=None) -> None:
-        from shopbeam import storage
+        from shopbeam.jobs import storage
         from shopbeam.errors import InputError
 
         try:
@@ -587,7 +587,7 @@ class ShopbeamApp(App):
 
 def _demo_path() -> Path | None:
     try:
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         return library.find("bundled:demo").path
     except Exception:  # noqa: BLE001 - no bundled presets: start on a new job

@@ -256,7 +256,7 @@ def extremes_table(result) -> str:
 
 
 def check_value(value: float, unit: str, system: str) -> str:
-    from shopbeam.report import check_value as cv
+    from shopbeam.output.report import check_value as cv
 
     return cv(value, unit, system)
 

@@ -141,7 +141,7 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
 
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
-        from shopbeam import storage
+        from shopbeam.jobs import storage
         from shopbeam.errors import InputError
 
         try:
@@ -156,7 +156,7 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
 
     def _submit(self) -> None:
         name = self.query_one(Field).value.strip()
-        from shopbeam import storage
+        from shopbeam.jobs import storage
         from shopbeam.errors import InputError
 
         try:
@@ -236,7 +236,7 @@ class LibraryScreen(Screen[object]):
         self.query_one("#lib-list", OptionList).focus()
 
     def fill(self, search: str) -> None:
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         lst = self.query_one("#lib-list", OptionList)
         try:
@@ -325,7 +325,7 @@ class LibraryScreen(Screen[object]):
         if i is None or not (0 <= i < len(self.found)):
             return
         e = self.found[i]
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         places = [p.origin for p in library.places(self.library_dir) if p.writable]
         places = ["user"] + [p for p in places if p != "user"]
@@ -334,7 +334,7 @@ class LibraryScreen(Screen[object]):
             if not answer:
                 return
             name, to = answer
-            from shopbeam import storage
+            from shopbeam.jobs import storage
             from shopbeam.errors import InputError
 
             try:

@@ -18,8 +18,8 @@ from shopbeam.errors import InputError, InputErrors, Problem, UnstableBeam
 class Evaluation:
     """What the current document means: a job and its result, or why not."""
 
-    job: object | None = None  # shopbeam.jobfile.Job
-    result: object | None = None  # shopbeam.analysis.Result
+    job: object | None = None  # shopbeam.jobs.jobfile.Job
+    result: object | None = None  # shopbeam.design.analysis.Result
     problems: list[Problem] = field(default_factory=list)  # errors, then warnings
     unstable: str = ""
 
@@ -46,7 +46,7 @@ class Evaluation:
 
 def evaluate_doc(doc, filename: str = "") -> Evaluation:
     """Validate and solve a JobDoc. Never raises for anything the user typed."""
-    from shopbeam.jobfile import parse_job_data
+    from shopbeam.jobs.jobfile import parse_job_data
 
     try:
         text = doc.text()
@@ -58,7 +58,7 @@ def evaluate_doc(doc, filename: str = "") -> Evaluation:
     except Exception as exc:  # noqa: BLE001 - a half-typed job must never crash the screen
         return Evaluation(problems=[Problem(f"cannot read the job: {type(exc).__name__}: {exc}")])
     try:
-        from shopbeam.analysis import analyze
+        from shopbeam.design.analysis import analyze
 
         result = analyze(job)
     except UnstableBeam as exc:
@@ -91,7 +91,7 @@ class Session:
     @classmethod
     def open(cls, path, library_dir=None) -> "Session":
         """Open a job file (raises InputError when it is not valid TOML)."""
-        from shopbeam import jobdoc, library
+        from shopbeam.jobs import jobdoc, library
 
         doc = jobdoc.load(path)
         origin = ""
@@ -110,7 +110,7 @@ class Session:
 
     @classmethod
     def new(cls, title: str = "New job", library_dir=None) -> "Session":
-        from shopbeam import jobdoc
+        from shopbeam.jobs import jobdoc
 
         return cls(jobdoc.JobDoc.new(title), None, library_dir=library_dir)
 
@@ -181,7 +181,7 @@ class Session:
 
         Raises storage.SaveConflict (someone changed the file), InputError (no file yet).
         """
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         if self.path is None:
             raise InputError("this job has no file yet: use Save as")
@@ -194,7 +194,7 @@ class Session:
         return opened.path
 
     def save_as(self, name: str, to: str = "user", *, overwrite: bool = False):
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         opened = library.save_job(self.doc.text(), name=name, to=to,
                                   library_dir=self.library_dir, overwrite=overwrite)

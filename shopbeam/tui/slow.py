@@ -69,7 +69,7 @@ class CalcView(_SheetView):
             "editing)...")
 
     def produce(self, job, result) -> str:
-        from shopbeam.calcsheet import calc_sheet
+        from shopbeam.output.calcsheet import calc_sheet
 
         return calc_sheet(job, result)
 
@@ -87,7 +87,7 @@ class RatingView(_SheetView):
 
 def rating_text(job, width: int = 40, date=None) -> str:
     """The capacity report and the printable rating label, or why they are not there."""
-    from shopbeam import capacity as mod
+    from shopbeam.design import capacity as mod
 
     try:
         res = mod.capacity(job)
@@ -134,7 +134,7 @@ class SizingView(View):
         if job is not None and not getattr(self, "_kind_set", False):
             self._kind_set = True
             kind = self.SHAPE_KIND.get(getattr(job.section, "shape", ""), None)
-            from shopbeam import sizing
+            from shopbeam.design import sizing
 
             try:
                 kind = sizing.default_kind(job)
@@ -198,7 +198,7 @@ def size_rows(job, kind: str, top: int = 40) -> tuple[list[tuple[str, str]], str
 
 
 def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
-    from shopbeam import sizing
+    from shopbeam.design import sizing
 
     sy = job.units
     res = sizing.size(job, kind=kind)

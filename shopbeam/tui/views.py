@@ -424,7 +424,7 @@ class SectionView(View):
     @staticmethod
     def _dim_keys() -> dict[str, tuple[str, ...]]:
         try:
-            from shopbeam.sections import _KEYS, _REQUIRED  # the shapes' own key lists
+            from shopbeam.members.sections import _KEYS, _REQUIRED  # the shapes' own key lists
         except ImportError:  # pragma: no cover
             return {}
         out = {}
@@ -494,7 +494,7 @@ class SectionView(View):
     def fill_matches(self, text: str) -> None:
         lst = self.query_one("#sec-matches", OptionList)
         note = self.query_one("#sec-matches-note", Static)
-        from shopbeam import catalog
+        from shopbeam.members import catalog
 
         text = (text or "").strip()
         if len(text) < 1:
@@ -561,7 +561,7 @@ class MaterialView(View):
         yield Static("", id="mat-props", markup=False)
 
     def on_mount(self) -> None:
-        from shopbeam.materials import list_materials
+        from shopbeam.members.materials import list_materials
 
         lst = self.query_one("#mat-list", OptionList)
         lst.add_options([Option(_text(f"{m.key:<13} {m.name}"), id=m.key)

@@ -18,7 +18,7 @@ from pathlib import Path
 
 from shopbeam import units
 from shopbeam.errors import InputError, InputErrors, Problem
-from shopbeam.model import Beam, Load, Support
+from shopbeam.engine.model import Beam, Load, Support
 
 SCHEMA = 1
 MAX_FILE_BYTES = 1_000_000
@@ -55,8 +55,8 @@ class Job:
 
     title: str
     length: float
-    section: object  # shopbeam.sections.Section
-    material: object  # shopbeam.materials.Material
+    section: object  # shopbeam.members.sections.Section
+    material: object  # shopbeam.members.materials.Material
     supports: tuple[Support, ...]
     loads: tuple[Load, ...]  # as entered, per job (before sharing between members)
     criteria: Criteria = field(default_factory=Criteria)
@@ -213,7 +213,7 @@ def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | 
     if not isinstance(text, str):
         r.error(f"expected a limit like \"L/240\" or \"0.25 in\", found {text!r}", key)
         return "L/240", 240.0, None
-    from shopbeam.checks import DEFLECTION_PRESETS
+    from shopbeam.design.checks import DEFLECTION_PRESETS
 
     if text.strip().lower() in DEFLECTION_PRESETS:  # named presets such as "rack", "hoist"
         n = DEFLECTION_PRESETS[text.strip().lower()][0]
@@ -400,10 +400,10 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
 def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
     try:
         if kind == "section":
-            from shopbeam.sections import resolve_section
+            from shopbeam.members.sections import resolve_section
 
             return resolve_section(spec, key, **kw)
-        from shopbeam.materials import resolve_material
+        from shopbeam.members.materials import resolve_material
 
         return resolve_material(spec, key)
     except InputError as e:

@@ -26,9 +26,9 @@ from dataclasses import dataclass, replace
 
 import numpy as np
 
-from shopbeam.model import Beam, Load
-from shopbeam.piecewise import Piecewise
-from shopbeam.solver import Reaction, Solution, segments, solve
+from shopbeam.engine.model import Beam, Load
+from shopbeam.engine.piecewise import Piecewise
+from shopbeam.engine.solver import Reaction, Solution, segments, solve
 
 MAX_PATTERN_SEGMENTS = 10  # 2^10 = 1024 states
 
@@ -131,7 +131,7 @@ class LoadParts:
 
 
 def load_parts(job, section=None) -> LoadParts:
-    from shopbeam.checks import impact_of
+    from shopbeam.design.checks import impact_of
 
     j = job if section is None else replace(job, section=section)
     loads = j.member_loads()
@@ -288,8 +288,8 @@ def _fmt_for(job):
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
              strengths=None, moving_cache: dict | None = None) -> Evaluation:
     """Every check at live-load factor k over every pattern and moving-load position."""
-    from shopbeam.checks import checks_for
-    from shopbeam.checks import strengths as strengths_of
+    from shopbeam.design.checks import checks_for
+    from shopbeam.design.checks import strengths as strengths_of
 
     ss = ss or state_set(job, section)
     st = strengths or strengths_of(job, sec=section, beam=ss.beam)
@@ -450,7 +450,7 @@ def _wheel_beam(beam: Beam, mv: MovingLoad, p: float, which: str) -> Beam:
 
 
 def fixed_breaks(job, ss: StateSet, static_loads) -> list[float]:
-    from shopbeam.checks import brace_points
+    from shopbeam.design.checks import brace_points
 
     L = job.length
     xs = {0.0, L} | {s.at for s in job.supports} | _positions(static_loads)
@@ -567,7 +567,7 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None):
 
 def envelope_bruteforce(job, k: float = 1.0, n: int = 2001):
     """Test oracle only: the checks re-solved at n evenly spaced positions."""
-    from shopbeam.checks import checks_for, strengths
+    from shopbeam.design.checks import checks_for, strengths
 
     ss = state_set(job)
     st = strengths(job, beam=ss.beam)

@@ -2,7 +2,7 @@
 
 A section is the cross-section of the member as the checks need it, about the bending axis
 the job chose (SI floats: m, m^2, m^3, m^4). Standard shapes come from the built-in catalog
-(`shopbeam.catalog`); everything else is computed here from the shop's dimensions by one
+(`shopbeam.members.catalog`); everything else is computed here from the shop's dimensions by one
 small engine: each shape is a list of rectangles and quarter discs (positive or cut out),
 and area, centroid, second moments, elastic and plastic moduli follow exactly from those
 parts. Torsion constants use the usual thin-wall formulas named beside each.
@@ -866,13 +866,13 @@ def _len(spec, name, key, *, positive=True, default=None):
 def _sheet(spec, name, key):
     """A plate or bar thickness: a length, or a gauge read in the Manufacturers' Standard
     Gauge for sheet steel -> (metres, note)."""
-    from shopbeam import gauges
+    from shopbeam.members import gauges
 
     return gauges.parse_wall(spec.get(name), f"{key}.{name}", "plate")
 
 
 def _wall(spec, key, shape):
-    from shopbeam import gauges
+    from shopbeam.members import gauges
 
     v = spec.get("wall")
     return gauges.parse_wall(v, f"{key}.wall", shape)
@@ -886,7 +886,7 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
     settles the design wall of tube given by dimensions (see the module docstring).
     """
     if isinstance(spec, str):
-        from shopbeam import catalog
+        from shopbeam.members import catalog
 
         sec = catalog.lookup(spec, key=key, material=material)
         return _orient(sec, axis or "strong", {}, key)
@@ -904,7 +904,7 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
     if shape not in _KEYS:
         hint = _suggest(shape, _KEYS)
         if not hint:
-            from shopbeam import catalog
+            from shopbeam.members import catalog
 
             try:
                 found = catalog.lookup(raw_shape).designation
@@ -948,7 +948,7 @@ _ORIENT_KEYS = {"designation", "axis", "leg", "toes", "flange", "name"}
 
 def _catalog_table(spec, key, axis, material) -> Section:
     """``{designation = "L2x2x3/16", leg = "top"}``: a catalog section, oriented."""
-    from shopbeam import catalog
+    from shopbeam.members import catalog
 
     for k in spec:
         if k not in _ORIENT_KEYS:
@@ -1052,7 +1052,7 @@ def _build(shape, spec, key, material, mass) -> Section:
         return tee(L("depth"), L("flange_width"), L("flange_thickness"), L("stem_thickness"),
                    r=r, flange=fl, mass=mass)
     if shape == "double-channel":
-        from shopbeam import catalog
+        from shopbeam.members import catalog
 
         ch = catalog.lookup(_text(spec, "channel", key), key=f"{key}.channel")
         if ch.shape != "channel":
@@ -1062,7 +1062,7 @@ def _build(shape, spec, key, material, mass) -> Section:
         gap = L("gap", positive=False) or 0.0
         return double_channel(ch, arr, gap)
     if shape == "cover-plated":
-        from shopbeam import catalog
+        from shopbeam.members import catalog
 
         base = catalog.lookup(_text(spec, "base", key), key=f"{key}.base")
         if base.shape not in ("i-beam", "rect-tube"):

@@ -32,7 +32,7 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass, field
 
-from shopbeam.solver import Solution, segments
+from shopbeam.engine.solver import Solution, segments
 from shopbeam.units import fmt
 
 OMEGA_B = 1.67  # AISC 360-16 F1
@@ -633,9 +633,9 @@ def basic_checks(job, sol: Solution) -> list[Check]:
 
 def run_checks(job, sol: Solution) -> list[Check]:
     """All checks for the job. Jobs with patterned or moving loads (or an impact allowance)
-    are checked over every load state (see `shopbeam.loading`); `sol` is then only the
+    are checked over every load state (see `shopbeam.design.loading`); `sol` is then only the
     all-loaded picture."""
-    from shopbeam import loading
+    from shopbeam.design import loading
 
     if loading.needs_states(job):
         return list(loading.evaluate(job, 1.0).checks)

@@ -26,10 +26,10 @@ import re
 from functools import lru_cache
 from importlib import resources
 
-from shopbeam import gauges
-from shopbeam import sections as S
+from shopbeam.members import gauges
+from shopbeam.members import sections as S
 from shopbeam.errors import InputError
-from shopbeam.sections import Section
+from shopbeam.members.sections import Section
 
 IN = 0.0254
 MM = 0.001
@@ -662,7 +662,7 @@ def suggestions(designation: str, n: int = 3) -> list[str]:
 def _described(shape_word: str, dims_text: str, designation: str, key: str,
                material) -> Section:
     """Sections described as 'rect-tube 2 x 1 x 14ga' (inches unless a unit is written)."""
-    from shopbeam import gauges
+    from shopbeam.members import gauges
     from shopbeam.units import parse
 
     shape = shape_word.lower().replace(" ", "-").replace("rectangular", "rect")

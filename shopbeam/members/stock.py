@@ -33,7 +33,7 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from shopbeam.errors import InputError, InputErrors, Problem
-from shopbeam.sections import Section
+from shopbeam.members.sections import Section
 
 FT = 0.3048
 _ITEM_KEYS = {"section", "price_per_ft", "price_per_m", "price", "material", "note", "axis"}
@@ -245,8 +245,8 @@ def _price(entry, key, file, line) -> float | None:
 
 
 def _item(entry: dict, key: str, file: str, line: int | None) -> StockItem:
-    from shopbeam.materials import resolve_material
-    from shopbeam.sections import resolve_section
+    from shopbeam.members.materials import resolve_material
+    from shopbeam.members.sections import resolve_section
 
     where = key
     for k in entry:

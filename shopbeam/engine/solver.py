@@ -27,8 +27,8 @@ from functools import cached_property
 import numpy as np
 
 from shopbeam.errors import UnstableBeam
-from shopbeam.model import Beam
-from shopbeam.piecewise import Extreme, Piecewise, find_candidates
+from shopbeam.engine.model import Beam
+from shopbeam.engine.piecewise import Extreme, Piecewise, find_candidates
 
 # state entries, by integration level: q' (-1), q (0), V (1), M (2), EI*slope (3), EI*u (4)
 _NLEV = 6
@@ -75,7 +75,7 @@ class Solution:
     @cached_property
     def diagnostics(self) -> tuple[SelfCheck, ...]:
         """The self-checks, computed on first use (every report and screen shows them)."""
-        from shopbeam.selfcheck import self_checks
+        from shopbeam.engine.selfcheck import self_checks
 
         return tuple(self_checks(self))
 

@@ -29,13 +29,13 @@ review by a licensed engineer, and local codes govern.
 
 
 def _load(path):
-    from shopbeam.jobfile import load_job
+    from shopbeam.jobs.jobfile import load_job
 
     return load_job(path)
 
 
 def cmd_solve(args) -> int:
-    from shopbeam.analysis import analyze, to_json
+    from shopbeam.design.analysis import analyze, to_json
 
     job = _load(args.job)
     result = analyze(job)
@@ -43,11 +43,11 @@ def cmd_solve(args) -> int:
         print(dumps_finite(to_json(result), args.job))
         return EXIT_OK
     if args.calc:
-        from shopbeam.calcsheet import calc_sheet
+        from shopbeam.output.calcsheet import calc_sheet
 
         print(calc_sheet(job, result), end="")
         return EXIT_OK
-    from shopbeam.report import render
+    from shopbeam.output.report import render
 
     print(render(result), end="")
     return EXIT_OK
@@ -66,7 +66,7 @@ def dumps_finite(data, job_path="") -> str:
 
 def cmd_check(args) -> int:
     job = _load(args.job)
-    from shopbeam.analysis import analyze
+    from shopbeam.design.analysis import analyze
 
     analyze(job)  # an unstable beam is an input problem too
     for p in job.warnings:
@@ -113,12 +113,12 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s = sub.add_parser("capacity", help="largest multiplier of the live loads that passes every check")
     s.add_argument("job")
     s.add_argument("--json", action="store_true")
-    s.set_defaults(func=_lazy("shopbeam.capacity", "cmd_capacity"))
+    s.set_defaults(func=_lazy("shopbeam.design.capacity", "cmd_capacity"))
 
     s = sub.add_parser("rating", help="print a rating label to post on the member")
     s.add_argument("job")
     s.add_argument("--width", type=int, default=40, help="label width in characters (default 40)")
-    s.set_defaults(func=_lazy("shopbeam.capacity", "cmd_rating"))
+    s.set_defaults(func=_lazy("shopbeam.design.capacity", "cmd_rating"))
 
     s = sub.add_parser("size", help="catalog sections that pass, lightest first")
     s.add_argument("job")
@@ -127,7 +127,7 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("--stock", default=None, help="shop stock list (TOML or CSV) to choose from")
     s.add_argument("--top", type=int, default=15, help="how many to list (default 15)")
     s.add_argument("--json", action="store_true")
-    s.set_defaults(func=_lazy("shopbeam.sizing", "cmd_size"))
+    s.set_defaults(func=_lazy("shopbeam.design.sizing", "cmd_size"))
 
     s = sub.add_parser("section", help="properties of one catalog section")
     s.add_argument("designation")
@@ -135,20 +135,20 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("--units", choices=("us", "si"), default="us")
     s.add_argument("--axis", choices=("strong", "weak"), default=None,
                    help="bending axis (default strong; weak turns the section)")
-    s.set_defaults(func=_lazy("shopbeam.catalog", "cmd_section"))
+    s.set_defaults(func=_lazy("shopbeam.members.catalog", "cmd_section"))
 
     s = sub.add_parser("materials", help="list the built-in materials with their sources")
     s.add_argument("--json", action="store_true")
-    s.set_defaults(func=_lazy("shopbeam.materials", "cmd_materials"))
+    s.set_defaults(func=_lazy("shopbeam.members.materials", "cmd_materials"))
 
     s = sub.add_parser("shapes", help="list catalog sections")
     s.add_argument("--kind", default=None)
     s.add_argument("--filter", default=None)
     s.add_argument("--json", action="store_true")
-    s.set_defaults(func=_lazy("shopbeam.catalog", "cmd_shapes"))
+    s.set_defaults(func=_lazy("shopbeam.members.catalog", "cmd_shapes"))
 
     if with_library:
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         library.add_parsers(sub)
     else:

@@ -9,10 +9,10 @@ from dataclasses import dataclass
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for
-from shopbeam.checks import Check, governing, run_checks
-from shopbeam.jobfile import Job
+from shopbeam.design.checks import Check, governing, run_checks
+from shopbeam.jobs.jobfile import Job
 from shopbeam.errors import UnstableBeam
-from shopbeam.solver import Solution, solve
+from shopbeam.engine.solver import Solution, solve
 
 
 @dataclass(frozen=True)
@@ -60,8 +60,8 @@ def analyze(job: Job) -> Result:
         sol = solve(job.beam(), length_fmt=length_formatter(job.units))
     except UnstableBeam as e:
         raise UnstableBeam(e.args[0], file=job.path or "") from None
-    from shopbeam import loading
-    from shopbeam.checks import check_notes, impact_of
+    from shopbeam.design import loading
+    from shopbeam.design.checks import check_notes, impact_of
 
     shown, state_sol, state_words = "", None, ""
     if loading.needs_states(job):

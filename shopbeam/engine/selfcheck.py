@@ -9,7 +9,7 @@ from __future__ import annotations
 
 import numpy as np
 
-from shopbeam.solver import SelfCheck, Solution, segments
+from shopbeam.engine.solver import SelfCheck, Solution, segments
 
 REL = 1e-7  # relative tolerance for the exact checks (rounding is ~1e-13)
 

@@ -8,7 +8,7 @@ from __future__ import annotations
 import textwrap
 
 from shopbeam import units
-from shopbeam.analysis import Result
+from shopbeam.design.analysis import Result
 
 WIDTH = 78
 

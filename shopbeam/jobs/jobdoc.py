@@ -1,6 +1,6 @@
 """Job files as editable text: comments, key order and layout survive an edit.
 
-The job reader (`shopbeam.jobfile`) turns a file into numbers for the solver; this module is
+The job reader (`shopbeam.jobs.jobfile`) turns a file into numbers for the solver; this module is
 the other side, for the text UI and the library: it keeps the file as a tomlkit document so
 that changing one load and saving changes exactly that line, and `git diff` shows one line.
 `new_job_text` writes the commented template that `shopbeam new` starts from. Writers here
@@ -16,7 +16,7 @@ import tomlkit
 from tomlkit.exceptions import ParseError
 from tomlkit.items import AoT, Array, InlineTable, Table
 
-from shopbeam import storage
+from shopbeam.jobs import storage
 from shopbeam.errors import InputError
 
 SCHEMA = 1
@@ -156,7 +156,7 @@ class JobDoc:
         if target is None:
             raise InputError("this job has no file yet; give a name or path to save it as")
         self._ensure_schema()
-        from shopbeam import library
+        from shopbeam.jobs import library
 
         if library.is_bundled(target):
             # bundled presets are read-only: "save" means "save a copy" to the user library

@@ -9,7 +9,7 @@ Three places, searched in this order and always shown with their origin:
 
 An entry is a job file by its name (the file name without ``.toml``). Reading an entry for
 the list uses only `tomllib` (data, never code); a file that does not parse is still listed,
-with its problem. Writes go through `shopbeam.storage` (atomic, locked, conflict-checked).
+with its problem. Writes go through `shopbeam.jobs.storage` (atomic, locked, conflict-checked).
 This module also holds the command-line handlers for ``library``, ``new`` and ``check``.
 """
 
@@ -22,7 +22,7 @@ import tomllib
 from dataclasses import dataclass, field
 from pathlib import Path
 
-from shopbeam import storage
+from shopbeam.jobs import storage
 from shopbeam.errors import InputError, InputErrors
 
 ORIGINS = ("shop", "user", "bundled")
@@ -56,7 +56,7 @@ def user_dir() -> Path:
 def bundled_dir() -> Path | None:
     """The bundled presets: the repository's top-level ``presets/`` (editable install), or a
     copy packaged as ``shopbeam/presets`` (a built wheel)."""
-    here = Path(__file__).resolve().parent
+    here = Path(__file__).resolve().parents[1]  # the shopbeam package
     for cand in (here.parent / "presets", here / "presets"):
         if cand.is_dir():
             return cand
@@ -375,7 +375,7 @@ def _looks_like_path(text: str) -> bool:
 
 
 def _new(args) -> int:
-    from shopbeam.jobdoc import new_job_text
+    from shopbeam.jobs.jobdoc import new_job_text
 
     lib = getattr(args, "library", None)
     name = args.name
@@ -408,7 +408,7 @@ def cmd_new(args) -> int:
 
 
 def _check(args) -> int:
-    from shopbeam.jobfile import load_job
+    from shopbeam.jobs.jobfile import load_job
 
     path = _resolve_job(args.job, getattr(args, "library", None))
     job = load_job(path)

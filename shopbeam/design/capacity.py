@@ -23,8 +23,8 @@ from dataclasses import dataclass
 
 from shopbeam import units
 from shopbeam.cautions import banner, cautions_for
-from shopbeam.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.loading import Evaluation, evaluate, state_set
+from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
+from shopbeam.design.loading import Evaluation, evaluate, state_set
 
 
 # ------------------------------------------------------------------ root finding
@@ -169,7 +169,7 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
     job, k = res.job, res.factor
     sy = job.units
     live = [ld for ld in job.loads if ld.case == "live"]
-    from shopbeam.loading import read_moving
+    from shopbeam.design.loading import read_moving
 
     mv = read_moving(job)
     if not math.isfinite(k):
@@ -199,7 +199,7 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
             out.append(("static live", _floor_fmt(tot * k, "force", sy) + " total"))
     if job.members > 1:
         out.append(("shared by", f"{job.members} identical members"))
-    from shopbeam.checks import impact_of
+    from shopbeam.design.checks import impact_of
 
     if impact_of(job):
         out.append(("impact", f"{impact_of(job):.0%} allowance included"))
@@ -218,8 +218,8 @@ def _floor_fmt(value: float, kind: str, system: str) -> str:
 
 # ------------------------------------------------------------------ output
 def to_json(res: CapacityResult) -> dict:
-    from shopbeam.analysis import analyze
-    from shopbeam.analysis import to_json as base_json
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.analysis import to_json as base_json
 
     out = base_json(analyze(res.job))
     k = res.factor
@@ -253,7 +253,7 @@ def render(res: CapacityResult) -> str:
         lines.append(f"  {label:<16} {value}")
     lines.append("")
     lines.append("CHECKS AT k")
-    from shopbeam.report import check_value
+    from shopbeam.output.report import check_value
 
     for c in res.checks:
         lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, job.units)} vs "
@@ -270,7 +270,7 @@ def render(res: CapacityResult) -> str:
 
 
 def cmd_capacity(args) -> int:
-    from shopbeam.jobfile import load_job
+    from shopbeam.jobs.jobfile import load_job
 
     job = load_job(args.job)
     res = capacity(job)
@@ -345,7 +345,7 @@ def rating_label(res: CapacityResult, width: int = 40, date: _dt.date | None = N
 
 
 def cmd_rating(args) -> int:
-    from shopbeam.jobfile import load_job
+    from shopbeam.jobs.jobfile import load_job
 
     job = load_job(args.job)
     print(rating_label(capacity(job), getattr(args, "width", 40)), end="")

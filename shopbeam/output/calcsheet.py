@@ -15,7 +15,7 @@ from fractions import Fraction
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for
-from shopbeam.model import Beam
+from shopbeam.engine.model import Beam
 
 # display scales per system: (length, force, label words)
 SCALES = {
@@ -276,7 +276,7 @@ def calc_sheet(job, result=None) -> str:
                          subsequent_indent="      ")
     out.append("")
     # the numeric engine on the very same beam must give the same reactions
-    from shopbeam.solver import solve
+    from shopbeam.engine.solver import solve
 
     numeric = solve(beam).reactions
     agree = []

@@ -23,11 +23,11 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from shopbeam import units
-from shopbeam.checks import (BASIS_WORDS, basis_of, deflection_rule, flexure,
+from shopbeam.design.checks import (BASIS_WORDS, basis_of, deflection_rule, flexure,
                              shear_strength, unbraced_segments)
-from shopbeam.model import Beam, Load
-from shopbeam.piecewise import _horner, _roots_in_pieces
-from shopbeam.solver import segments
+from shopbeam.engine.model import Beam, Load
+from shopbeam.engine.piecewise import _horner, _roots_in_pieces
+from shopbeam.engine.solver import segments
 
 SLOW_LIMIT = 80  # sections checked one by one at most (springs, moving loads)
 
@@ -176,7 +176,7 @@ def _value_at(co: np.ndarray, breaks: np.ndarray, x: float) -> np.ndarray:
 
 # ------------------------------------------------------------------ candidates
 def default_kind(job) -> str:
-    from shopbeam import catalog
+    from shopbeam.members import catalog
 
     m = re.match(r"[A-Za-z]+", job.section.designation or "")
     if m and m.group(0).upper() in {k.upper() for k in catalog.kinds()}:
@@ -186,19 +186,19 @@ def default_kind(job) -> str:
 
 def _candidates(job, kind, max_depth, stock):
     """[(designation, section, material, price_per_m, note)] to sweep."""
-    from shopbeam.sections import turn
+    from shopbeam.members.sections import turn
 
     weak = getattr(job.section, "axis", "strong") == "weak"
     out = []
     if stock is not None:
-        from shopbeam.materials import get as get_material
+        from shopbeam.members.materials import get as get_material
 
         for item in stock:
             mat = get_material(item.material) if item.material else job.material
             out.append((item.designation, item.section, mat or job.material, item.price_per_m,
                         item.note))
     else:
-        from shopbeam import catalog
+        from shopbeam.members import catalog
 
         for sec in catalog.list_sections(kind):
             out.append((sec.designation, sec, job.material, None, ""))
@@ -222,7 +222,7 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     t0 = time.perf_counter()
     kind = kind or default_kind(job)
     cands = _candidates(job, None if stock is not None else kind, max_depth, stock)
-    from shopbeam.loading import load_parts, state_set
+    from shopbeam.design.loading import load_parts, state_set
 
     base = replace(job, self_weight=False)
     parts = load_parts(base)
@@ -248,7 +248,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         return [], []
     L = job.length
     sw_unit = Load("uniform", start=0.0, end=L, w1=-1.0, label="self-weight", case="dead")
-    from shopbeam.checks import brace_points
+    from shopbeam.design.checks import brace_points
 
     braced, braces = brace_points(job)
     # brace points become breaks (zero loads), so unbraced lengths are whole pieces
@@ -261,8 +261,8 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     n_ratio, d_abs, _ = deflection_rule(job)
     imp = parts.impact
     # the self-weight solution alone: fixed = dead + sw_unit; split by solving sw alone
-    from shopbeam.loading import _dummies, _positions
-    from shopbeam.solver import solve
+    from shopbeam.design.loading import _dummies, _positions
+    from shopbeam.engine.solver import solve
 
     allpos = _positions(parts.fixed) | _positions(parts.live)
     for sl in ss.span_loads:
@@ -403,9 +403,9 @@ def _capacity_vector(ratios, R: int) -> np.ndarray:
 
 
 def _slow(job, cands):
-    from shopbeam.capacity import capacity
+    from shopbeam.design.capacity import capacity
     from shopbeam.errors import InputError
-    from shopbeam.loading import evaluate
+    from shopbeam.design.loading import evaluate
 
     if len(cands) > SLOW_LIMIT:
         raise InputError(f"{len(cands)} sections to check one by one (the job has springs or "
@@ -487,14 +487,14 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
 
 
 def cmd_size(args) -> int:
-    from shopbeam.jobfile import load_job
+    from shopbeam.jobs.jobfile import load_job
 
     job = load_job(args.job)
     md = units.parse(args.max_depth, "length", "--max-depth", positive=True) \
         if args.max_depth else None
     stock = None
     if args.stock:
-        from shopbeam.stock import load_stock
+        from shopbeam.members.stock import load_stock
 
         stock = load_stock(args.stock)
     res = size(job, args.kind, md, stock)

@@ -1,0 +1,1 @@
+"""Renderers of results: the text report and the exact calc sheet."""
