@@ -9,7 +9,7 @@ from dataclasses import dataclass
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for
-from shopbeam.design.checks import Check, governing, run_checks
+from shopbeam.design.checks import Check, Unchecked, governing, run_checks
 from shopbeam.jobs.jobfile import Job
 from shopbeam.errors import UnstableBeam
 from shopbeam.engine.solver import Solution, solve
@@ -25,6 +25,8 @@ class Result:
     # with patterned loads: the load state that governs, for drawing (None: `solution` is it)
     state_solution: Solution | None = None
     state_words: str = ""
+    # limit states the member calls for that were not checked (rating refuses on these)
+    unchecked: tuple[Unchecked, ...] = ()
 
     @property
     def governing(self) -> Check:
@@ -111,6 +113,7 @@ def to_json(result: Result) -> dict:
         "governing": result.governing.name,
         "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),
+        "unchecked": [u.as_dict() for u in result.unchecked],
         "members": job.members,
         "section": getattr(job.section, "designation", ""),
         "material": getattr(job.material, "key", ""),

@@ -58,6 +58,14 @@ DEFAULT_IMPACT = 0.15  # slow powered hoists (common practice)
 
 @dataclass(frozen=True)
 class Check:
+    """One limit state of one member: demand against limit, with where it comes from.
+
+    `clause` names the provision (e.g. "AISC 360-16 F2"), `source` the standard or handbook
+    (or "common practice"), `params` the numbers the check used (SI floats, e.g. Lb, Lp, Lr,
+    Cb) for renderers to format in the job's units, and `state` the load state that governs
+    (empty when the job has one state).
+    """
+
     name: str
     demand: float
     limit: float
@@ -66,6 +74,10 @@ class Check:
     at: float | None = None  # where the demand occurs (m)
     detail: str = ""
     extra: dict = field(default_factory=dict)
+    clause: str = ""
+    source: str = ""
+    params: dict = field(default_factory=dict)
+    state: str = ""
 
     @property
     def ratio(self) -> float:
@@ -81,7 +93,26 @@ class Check:
         return {"name": self.name, "demand": float(self.demand), "limit": float(self.limit),
                 "ratio": float(self.ratio), "ok": bool(self.ok), "unit": self.unit,
                 "formula": self.formula, "at": None if self.at is None else float(self.at),
-                "detail": self.detail}
+                "detail": self.detail, "clause": self.clause, "source": self.source,
+                "params": {k: float(v) for k, v in self.params.items()}, "state": self.state}
+
+
+@dataclass(frozen=True)
+class Unchecked:
+    """A limit state the member type calls for that shopbeam did not check, and why.
+
+    A capacity or rating never rests on a job with an unchecked limit state that could
+    govern: it says "not rated" with these reasons (or carries them as warnings).
+    """
+
+    name: str  # e.g. "lateral-torsional buckling"
+    reason: str  # what is missing or not implemented, and what to do
+    clause: str = ""  # the provision that would apply
+    blocks_rating: bool = True  # False: only a caution, the rating may stand
+
+    def as_dict(self) -> dict:
+        return {"name": self.name, "reason": self.reason, "clause": self.clause,
+                "blocks_rating": self.blocks_rating}
 
 
 # ------------------------------------------------------------------ job options
