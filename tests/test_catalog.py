@@ -18,7 +18,7 @@ from shopbeam.members import sections as S
 from shopbeam.errors import InputError
 
 IN = 0.0254
-SHARED = Path("/work/shared/data/aisc-shapes-v15.0")
+DATA = Path(__file__).resolve().parent / "data"
 MAIN = Path(__file__).resolve().parents[1]
 
 
@@ -129,28 +129,25 @@ def test_list_sections_kinds_and_filters():
     assert "did you mean" in exc.value.problem.message
 
 
-def test_catalog_is_fast_and_pint_free():
-    # CPU time of this process, so a busy machine (parallel tests) does not skew it
-    code = ("import time, sys; t = time.process_time(); from shopbeam.members import catalog;"
-            "s = catalog.list_sections('HSS'); a = time.process_time() - t;"
-            "t = time.process_time(); s = catalog.list_sections('HSS');"
-            "catalog.lookup('HSS4x4x1/4'); b = time.process_time() - t;"
-            "print(a, b, 'pint' in sys.modules)")
+def test_catalog_lookup_is_cached_and_pint_free():
+    # how fast the catalog loads is measured in bench/ (not here: no timing asserts); here:
+    # the index is built once and reused, and the look-up path never loads pint
+    code = ("import sys; from shopbeam.members import catalog;"
+            "a = catalog.list_sections('HSS'); b = catalog.list_sections('HSS');"
+            "s1 = catalog.lookup('HSS4x4x1/4'); s2 = catalog.lookup('hss4x4x1/4');"
+            "print(len(a) == len(b) > 500, s1 == s2, 'pint' in sys.modules)")
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True,
                          check=True, cwd=MAIN).stdout.split()
-    first, again, pint_loaded = float(out[0]), float(out[1]), out[2]
-    assert first < 0.5, first       # import + parse the whole catalog once
-    assert again < 0.02, again      # cached afterwards
-    assert pint_loaded == "False"   # no units registry in the look-up path
+    assert out == ["True", "True", "False"]  # same listing, same section, no units registry
 
 
-@pytest.mark.skipif(not (SHARED / "Shapes-SI.csv").exists(), reason="reference data absent")
 def test_si_values_match_the_databases_own_metric_table():
     # AISC Shapes Database v15.0 publishes a metric table too (mm^2, 10^6 mm^4, 10^3 mm^3, mm,
     # 10^3 mm^4 for J, 10^9 mm^6 for Cw, kg/m), row for row with the US one. Our SI floats come
     # from the US table by exact factors, so they must agree within the 3-figure rounding.
-    si = list(csv.DictReader(open(SHARED / "Shapes-SI.csv", encoding="utf-8-sig")))
-    us = list(csv.DictReader(open(SHARED / "Shapes-US.csv", encoding="utf-8-sig")))
+    # the twelve rows are shipped with the tests (tests/data/README.md)
+    si = list(csv.DictReader(open(DATA / "aisc-v15-rows-si.csv", encoding="utf-8")))
+    us = list(csv.DictReader(open(DATA / "aisc-v15-rows-us.csv", encoding="utf-8")))
     labels = [r["AISC_Manual_Label"] for r in us]
     scale = {"A": ("area", 1e-6), "Ix": ("ix", 1e-6), "Sx": ("sx", 1e-6), "Zx": ("zx", 1e-6),
              "Iy": ("iy", 1e-6), "Sy": ("sy", 1e-6), "Zy": ("zy", 1e-6), "rx": ("rx", 1e-3),
@@ -233,7 +230,6 @@ def _cli(*args):
                           text=True, cwd=MAIN, env=env, timeout=60)
 
 
-@pytest.mark.skipif(not (MAIN / "shopbeam" / "cli.py").exists(), reason="CLI not yet built")
 def test_cli_section_json_hss6x4():
     p = _cli("section", "HSS6x4x1/4", "--json")
     assert p.returncode == 0, p.stderr
@@ -245,7 +241,6 @@ def test_cli_section_json_hss6x4():
     assert js["iy"] == pytest.approx(11.1 * IN**4)
 
 
-@pytest.mark.skipif(not (MAIN / "shopbeam" / "cli.py").exists(), reason="CLI not yet built")
 def test_cli_section_w8x31_report():
     p = _cli("section", "W8x31")
     assert p.returncode == 0, p.stderr
@@ -372,7 +367,6 @@ def test_kind_of(des, kind):
     assert kind in catalog.kinds() or kind in ("rect-tube",)
 
 
-@pytest.mark.skipif(not (MAIN / "shopbeam" / "cli.py").exists(), reason="CLI not yet built")
 def test_cli_gauge_tube_report_names_table_and_wall_rule():
     p = _cli("section", "rect-tube 2 x 1 x 14ga")
     assert p.returncode == 0, p.stderr
@@ -427,7 +421,6 @@ def test_rounded_decimal_walls(typed, label):
     assert catalog.lookup(typed).designation == label
 
 
-@pytest.mark.skipif(not (MAIN / "shopbeam" / "cli.py").exists(), reason="CLI not yet built")
 def test_job_naming_a_catalog_section_and_material_solves_with_self_weight(tmp_path):
     job = tmp_path / "hss.toml"
     job.write_text('schema = 1\ntitle = "catalog check"\n[beam]\nlength = "12 ft"\n'

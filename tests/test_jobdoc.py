@@ -181,8 +181,6 @@ def test_template_is_valid_commented_and_states_the_signs():
 
 
 def test_template_reads_with_the_job_reader():
-    pytest.importorskip("shopbeam.members.catalog", reason="section catalog not built yet")
-    pytest.importorskip("shopbeam.members.materials", reason="materials library not built yet")
     from shopbeam.jobs.jobfile import parse_job_text
 
     job = parse_job_text(jobdoc.new_job_text("Template", length="10 ft"), "new.toml")

@@ -119,21 +119,17 @@ def test_self_weight_is_recomputed_per_section():
     assert heavy.ratio == pytest.approx(max(c.ratio for c in evaluate(j).checks), rel=1e-9)
 
 
-def test_whole_hss_catalog_sweep_is_fast():
-    # issue 4: a sweep of the whole catalog kind well under a second; here under 0.5 s with
-    # the capacity factor of every section (catalog already loaded, best of three)
+def test_whole_hss_catalog_sweep_rates_every_section():
+    # the sweep's speed is a bench/ figure; here: it covers the whole kind in one pass and its
+    # lightest passing section really passes when checked on its own
     job = parse_job_text(RACK)
-    catalog.list_sections("HSS")
-    size(job, "HSS")
-    best = min(_timed(lambda: size(job, "HSS")) for _ in range(3))
-    assert len(catalog.list_sections("HSS")) > 500
-    assert best < 0.5
-
-
-def _timed(f):
-    t = time.perf_counter()
-    f()
-    return time.perf_counter() - t
+    res = size(job, "HSS")
+    n = len(catalog.list_sections("HSS"))
+    assert n > 500
+    assert len(res.rows) + len(res.skipped) == n
+    light = res.lightest
+    assert light is not None and light.ok
+    assert all(r.weight >= light.weight for r in res.passing)
 
 
 def test_max_depth_filters():

@@ -11,7 +11,7 @@ from __future__ import annotations
 import numpy as np
 import pytest
 
-scipy_integrate = pytest.importorskip("scipy.integrate")
+import scipy.integrate as scipy_integrate  # noqa: E402
 
 from shopbeam.engine.model import Beam, Load, Support  # noqa: E402
 from shopbeam.engine.solver import solve  # noqa: E402

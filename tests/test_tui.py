@@ -13,7 +13,6 @@ from pathlib import Path
 
 import pytest
 
-pytest.importorskip("textual")
 
 from shopbeam.tui.app import JobScreen, make_app  # noqa: E402
 from shopbeam.tui.screens import ConfirmScreen, ConflictScreen, LibraryScreen  # noqa: E402

@@ -11,7 +11,6 @@ from pathlib import Path
 
 import pytest
 
-pytest.importorskip("pytest_textual_snapshot")
 
 from shopbeam.tui.app import make_app  # noqa: E402
 
