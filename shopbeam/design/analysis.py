@@ -114,6 +114,7 @@ def to_json(result: Result) -> dict:
         "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),
         "unchecked": [u.as_dict() for u in result.unchecked],
+        "warnings": [p.located() for p in job.warnings if p.warning],
         "members": job.members,
         "section": getattr(job.section, "designation", ""),
         "material": getattr(job.material, "key", ""),

@@ -262,6 +262,12 @@ def render(res: CapacityResult) -> str:
             lines.append("      " + w)
     if res.governing:
         lines.append(f"  governing: {res.governing.name}")
+    warns = [p for p in job.warnings if p.warning]
+    if warns:
+        lines.append("")
+        lines.append("INPUT WARNINGS")
+        for p in warns:
+            lines += textwrap.wrap(p.located(), 78, initial_indent="  ", subsequent_indent="  ")
     lines.append("")
     lines.append("CAUTIONS")
     for c in cautions_for(job.tags):
@@ -326,6 +332,8 @@ def rating_label(res: CapacityResult, width: int = 40, date: _dt.date | None = N
         row("No live load entered: nothing to rate")
     if res.governing:
         pair("Governing check", res.governing.name)
+    for p in (p for p in job.warnings if p.warning):
+        row(f"INPUT WARNING {p.key}: {p.message.split(':')[0]} (see shopbeam check)")
     pair("Basis", {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
                    "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}[basis_of(job)])
     pair("Date", date.isoformat())

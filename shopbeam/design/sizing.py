@@ -61,6 +61,7 @@ class SizeResult:
     method: str
     currency: str = ""
     skipped: tuple[str, ...] = ()
+    material_note: str = ""  # said when the sweep used another material than the job's
 
     @property
     def passing(self) -> list[SizeRow]:
@@ -184,6 +185,31 @@ def default_kind(job) -> str:
     return catalog.kind_of(job.section) or job.section.shape
 
 
+# The material a sweep of another family uses (stated in the output): the grade a shop
+# most often buys for that kind of stock (common practice).
+FAMILY_DEFAULTS = {"lumber": "DF-L-2", "W": "A992", "M": "A36", "S": "A36", "HP": "A572-50",
+                   "HSS": "A500-C", "HSS-rect": "A500-C", "HSS-round": "A500-C",
+                   "PIPE": "A53-B", "mech-tube": "A513", "mech-round": "A513"}
+
+
+def material_for_kind(job, kind: str):
+    """(job, note): a sweep of lumber on a metal job, or of metal stock on a lumber job,
+    switches to a stated default material of the swept family, never a lumber size in
+    steel or a steel shape in wood."""
+    from shopbeam.members.materials import get as get_material
+
+    mkind = getattr(job.material, "kind", "custom")
+    wants_wood = kind == "lumber"
+    if mkind == "custom" or wants_wood == (mkind == "lumber"):
+        return job, ""
+    key = FAMILY_DEFAULTS.get(kind, "A36")
+    mat = get_material(key)
+    note = (f"--kind {kind} is {'wood' if wants_wood else 'metal'} stock but the job's material "
+            f"{job.material.key} is {mkind}: swept in {mat.key} ({mat.name}) instead; give "
+            "beam.material in the job to choose another grade")
+    return replace(job, material=mat), note
+
+
 def _candidates(job, kind, max_depth, stock):
     """[(designation, section, material, price_per_m, note)] to sweep."""
     from shopbeam.members.sections import turn
@@ -221,6 +247,9 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     """Sweep sections for the job; rows sorted by weight per length, lightest first."""
     t0 = time.perf_counter()
     kind = kind or default_kind(job)
+    material_note = ""
+    if stock is None:
+        job, material_note = material_for_kind(job, kind)
     cands = _candidates(job, None if stock is not None else kind, max_depth, stock)
     from shopbeam.design.loading import load_parts, state_set
 
@@ -238,7 +267,7 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     return SizeResult(job, "stock list" if stock is not None else kind, tuple(rows),
                       time.perf_counter() - t0, method,
                       getattr(stock, "currency", "") if stock is not None else "",
-                      tuple(skipped))
+                      tuple(skipped), material_note)
 
 
 def _fast(job, base, parts, cands, state_set, with_capacity):
@@ -436,6 +465,8 @@ def render(res: SizeResult, top: int = 15) -> str:
     lines = [f"shopbeam size: {job.title}", "=" * 78]
     lines.append(f"swept {len(res.rows)} sections ({res.kind}) in {res.seconds * 1000:.0f} ms; "
                  f"{len(res.passing)} pass; {res.method}")
+    if res.material_note:
+        lines += textwrap.wrap("NOTE: " + res.material_note, 78, subsequent_indent="  ")
     lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; self-weight recomputed per section")
     if res.lightest:
         lines.append(f"lightest that passes: {res.lightest.designation} "
@@ -483,7 +514,9 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
             "passing": [row(r) for r in rows], "seconds": res.seconds, "method": res.method,
             "lightest": res.lightest.designation if res.lightest else None,
             "cheapest": res.cheapest.designation if res.cheapest else None,
-            "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags)}
+            "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags),
+            "material": getattr(res.job.material, "key", ""),
+            "material_note": res.material_note}
 
 
 def cmd_size(args) -> int:

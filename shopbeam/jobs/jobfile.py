@@ -33,7 +33,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
              "braces", "braced"},
     "supports": {"at", "type", "stiffness", "label"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
-              "patterned"},
+              "patterned", "uplift"},
     "criteria": {"deflection", "safety_factor", "basis", "impact"},
 }
 
@@ -328,6 +328,9 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
     if not isinstance(patterned, bool):
         r.error("patterned must be true or false", f"{key}.patterned")
         patterned = False
+    if not isinstance(ld.get("uplift", False), bool):
+        r.error("uplift must be true or false (true: this load is meant to push up)",
+                f"{key}.uplift")
     common = dict(label=label, case=case, key=key, patterned=patterned)
     if kind in ("point", "moment"):
         at = _position(r, ld, "at", key, length)
@@ -426,6 +429,70 @@ def _plausible_section(sec, r: _Reader) -> None:
             r.error(f"the section's {key} ({v:.3g} in SI units) is too small or not a number "
                     "for a real member: check the value and its unit", f"beam.section.{key}")
             return
+
+
+def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> None:
+    """A force load that pushes up is almost always a forgotten minus sign: name each one,
+    unless the load says ``uplift = true``."""
+    up = []
+    for ld in loads:
+        if ld.kind == "moment":
+            continue
+        i = int(ld.key[ld.key.index("[") + 1:-1])
+        raw = raw_loads[i] if i < len(raw_loads) and isinstance(raw_loads[i], dict) else {}
+        if raw.get("uplift") is True:
+            continue
+        if ld.kind == "point" and ld.value > 0:
+            shown = units.fmt(ld.value, "force", system)
+        elif ld.kind in ("uniform", "linear") and max(ld.w1, ld.w2) > 0:
+            shown = units.fmt(max(ld.w1, ld.w2), "line_load", system)
+        else:
+            continue
+        up.append((ld, shown))
+    for ld, shown in up:
+        name = f" ({ld.label})" if ld.label else ""
+        every = " Every force load of this job points up." if len(up) == sum(
+            1 for x in loads if x.kind != "moment") else ""
+        r.warn(f"this load{name} points UP (+{shown.lstrip('+')}): forces are + up, so a "
+               f"weight is negative (value = \"-{shown.lstrip('+')}\").{every} If the push up "
+               "is intended (uplift), add uplift = true to the load", f"{ld.key}.value")
+
+
+def _family_mismatch(r: _Reader, section, material) -> None:
+    """A lumber size in steel, or a steel shape in lumber, is refused: the checks and the
+    weight would be for a member that does not exist."""
+    if section is None or material is None:
+        return
+    from shopbeam.members.catalog import is_lumber_size
+
+    lumber_size = is_lumber_size(section)
+    mkind = getattr(material, "kind", "custom")
+    if lumber_size and mkind in ("steel", "stainless", "aluminum"):
+        r.error(f"section {section.designation!r} is a sawn lumber size but material "
+                f"{material.key!r} is {mkind}: give a wood material (e.g. material = "
+                "\"DF-L-2\") or a metal section (e.g. a flat bar \"FB4x1/2\", or "
+                "[beam.section] shape = \"rect-bar\" with its sizes)", "beam.section")
+    elif mkind == "lumber" and not lumber_size and section.shape not in ("rect-bar", "custom"):
+        r.error(f"section {section.designation!r} ({section.shape}) is a metal shape, not made "
+                f"in wood, but material {material.key!r} is lumber: give a lumber size such as "
+                "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
+                "material such as \"A992\"", "beam.section")
+
+
+def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
+    kind = getattr(material, "kind", "custom")
+    asked = str(basis or "").strip().lower()
+    if kind == "custom" or (asked == "first-yield" and kind != "lumber"):
+        return
+    uses = {"steel": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
+            "stainless": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
+            "aluminum": "the Aluminum Design Manual (Omega 1.65 on yield, 1.95 on rupture)",
+            "lumber": "the NDS allowable stresses (their safety is in the reference values)"}
+    todo = ("remove safety_factor (wood has no first-yield basis)" if kind == "lumber" else
+            "write basis = \"first-yield\" under [criteria] to check first yield with this "
+            "factor, or remove safety_factor")
+    r.warn(f"safety_factor = {sf:g} is NOT used: this {kind} member is checked by "
+           f"{uses[kind]}; {todo}", "criteria.safety_factor")
 
 
 def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> Job:
@@ -548,6 +615,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         got = _read_load(r, i, ld, length, conv)
         if got is not None and _plausible_load(r, got):
             loads.append(got)
+    _upward_loads(r, raw_loads, loads, system)
+    _family_mismatch(r, section, material)
     for ld in loads:
         if ld.kind == "moment":
             for h in (s for s in supports if s.kind == "hinge"):
@@ -571,6 +640,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             sf = 1.67
         elif sf < 1:
             r.warn(f"safety_factor {sf} is below 1: the check allows more than yield", "criteria.safety_factor")
+        if "safety_factor" in crit and sf != 1.67:
+            _unused_safety_factor(r, sf, material, crit.get("basis"))
         extra = {k: v for k, v in crit.items() if k not in ("deflection", "safety_factor")}
         criteria = Criteria(text, ratio, absolute, float(sf), extra)
 

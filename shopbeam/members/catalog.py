@@ -249,21 +249,49 @@ MECH_ROUND = {
     "2-1/2": (14, 11), "3": (14, 11),
 }
 
-# Dressed sizes of sawn lumber, inches, by nominal size (NDS Supplement Table 1B, from
-# memory): 2 -> 1-1/2, 3 -> 2-1/2, 4 -> 3-1/2, 6 -> 5-1/2, 8 -> 7-1/4, 10 -> 9-1/4,
-# 12 -> 11-1/4.
+# Dressed sizes of sawn lumber, inches, by nominal size (NDS Supplement 2018 Table 1A/1B,
+# dry dressed, from memory). Dimension lumber (2 to 4 in nominal thickness): 2 -> 1-1/2,
+# 3 -> 2-1/2, 4 -> 3-1/2, 6 -> 5-1/2, 8 -> 7-1/4, 10 -> 9-1/4, 12 -> 11-1/4. Timbers (5 in
+# nominal and thicker): 1/2 in less than nominal each way, so a 6x8 is 5-1/2 x 7-1/2.
 DRESSED = {2: 1.5, 3: 2.5, 4: 3.5, 6: 5.5, 8: 7.25, 10: 9.25, 12: 11.25}
 LUMBER_SIZES = ((2, 2), (2, 3), (2, 4), (2, 6), (2, 8), (2, 10), (2, 12), (4, 4), (4, 6),
-                (4, 8), (4, 10), (4, 12), (6, 6), (6, 8))
+                (4, 8), (4, 10), (4, 12), (6, 6), (6, 8), (6, 10), (6, 12), (8, 8), (8, 10),
+                (8, 12))
 _LUMBER = re.compile(r"^\s*(\d{1,2})\s*[xX\u00d7*]\s*(\d{1,2})\s*(?:lumber|sawn|wood|timber)?\s*$",
                      re.IGNORECASE)
 
 
+def dressed(thick: int, wide: int) -> tuple[float, float]:
+    """(thickness, width) in inches of a dressed (surfaced dry) size: dimension lumber by
+    DRESSED, timbers 5 in and thicker 1/2 in under nominal (NDS Supplement Table 1B)."""
+    if thick >= 5:
+        return thick - 0.5, wide - 0.5
+    return DRESSED[thick], DRESSED[wide]
+
+
 def _lumber(thick: int, wide: int, designation: str) -> Section:
     """A sawn lumber member on edge: nominal `thick` x `wide`, dressed sizes."""
-    return S.rect_bar(DRESSED[wide] * IN, DRESSED[thick] * IN, designation=designation,
-                      source=f"dressed lumber size {DRESSED[thick]:g} x {DRESSED[wide]:g} in "
-                      "(NDS Supplement Table 1B, from memory), computed from dimensions")
+    t, w = dressed(thick, wide)
+    what = "timber" if thick >= 5 else "dimension lumber"
+    return S.rect_bar(w * IN, t * IN, designation=designation,
+                      source=f"dressed lumber size {t:g} x {w:g} in ({what}, NDS Supplement "
+                      "Table 1B, from memory), computed from dimensions")
+
+
+def lumber_nominal(sec: Section) -> tuple[int, int] | None:
+    """(nominal thickness, nominal width) in inches of a catalog lumber size, else None."""
+    if sec.shape != "rect-bar" or "dressed lumber size" not in (sec.source or ""):
+        return None
+    m = _LUMBER.match(sec.designation or "")
+    if not m:
+        return None
+    th, wi = sorted((int(m.group(1)), int(m.group(2))))
+    return th, wi
+
+
+def is_lumber_size(sec: Section) -> bool:
+    """True for a sawn lumber size from the catalog ("2x10", "6x8")."""
+    return lumber_nominal(sec) is not None
 
 
 # EN 10365 hot-rolled sections, mm, from memory: (h, b, tw, tf, r)
@@ -563,10 +591,10 @@ def lookup(designation: str, key: str = "beam.section", material=None) -> Sectio
     lm = _LUMBER.match(designation)
     if lm:
         th, wi = sorted((int(lm.group(1)), int(lm.group(2))))
-        if th in DRESSED and wi in DRESSED:
+        if (th, wi) in LUMBER_SIZES:
             return _lumber(th, wi, f"{th}x{wi}")
-        raise InputError(f"{designation!r}: nominal lumber sizes are "
-                         f"{', '.join(str(n) for n in DRESSED)} in (e.g. \"2x6\")", key)
+        raise InputError(f"{designation!r}: lumber sizes in the catalog are "
+                         f"{', '.join(f'{a}x{b}' for a, b in LUMBER_SIZES)}", key)
     m = _DESCRIBED.match(designation)
     if m and not _PIPE.match(_prep(designation)):
         return _described(m.group("shape"), m.group("dims"), designation, key, material)

@@ -1,0 +1,169 @@
+"""Easy mistakes a shop makes become messages: a load that points up, a safety factor the
+basis does not use, a section family that cannot go with the material, and a sizing sweep of
+another family than the job's material."""
+
+from __future__ import annotations
+
+import json
+import subprocess
+import sys
+
+import pytest
+
+from shopbeam.design.sizing import size
+from shopbeam.errors import InputErrors
+from shopbeam.jobs.jobfile import parse_job_text
+
+
+def job_text(section="W8x18", material="A992", load='value = "-400 lb"', criteria="",
+             extra_load=""):
+    return f"""schema = 1
+title = "shelf"
+[beam]
+length = "6 ft"
+section = "{section}"
+material = "{material}"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "3 ft"
+label = "motor"
+{load}
+{extra_load}
+[criteria]
+{criteria}
+"""
+
+
+def warnings(job):
+    return [p for p in job.warnings if p.warning]
+
+
+def run(*args):
+    return subprocess.run([sys.executable, "-m", "shopbeam", *args], capture_output=True,
+                          text=True, timeout=120)
+
+
+# ------------------------------------------------------------------ loads that point up
+def test_a_load_written_positive_is_named_as_pointing_up():
+    job = parse_job_text(job_text(load='value = "400 lb"'))
+    w = [p for p in warnings(job) if "points UP" in p.message]
+    assert len(w) == 1
+    assert w[0].key == "loads[0].value"
+    assert "motor" in w[0].message and "-400 lbf" in w[0].message
+    assert "uplift = true" in w[0].message
+
+
+def test_a_downward_load_gives_no_warning():
+    job = parse_job_text(job_text())
+    assert not [p for p in warnings(job) if "points UP" in p.message]
+
+
+def test_intended_uplift_is_not_warned():
+    job = parse_job_text(job_text(load='value = "400 lb"\nuplift = true'))
+    assert not [p for p in warnings(job) if "points UP" in p.message]
+
+
+def test_uplift_must_be_true_or_false():
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(job_text(load='value = "400 lb"\nuplift = "yes"'))
+    assert "loads[0].uplift" in str(e.value)
+
+
+def test_uniform_load_pointing_up_is_warned_and_a_couple_is_not():
+    extra = ('[[loads]]\ntype = "uniform"\nvalue = "25 plf"\n'
+             '[[loads]]\ntype = "moment"\nat = "2 ft"\nvalue = "100 lbf*ft"')
+    job = parse_job_text(job_text(extra_load=extra))
+    keys = [p.key for p in warnings(job) if "points UP" in p.message]
+    assert keys == ["loads[1].value"]
+
+
+def test_upward_load_warning_shows_in_report_json_and_check(tmp_path):
+    p = tmp_path / "job.toml"
+    p.write_text(job_text(load='value = "400 lb"'))
+    r = run("solve", str(p), "--json")
+    assert r.returncode == 0, r.stderr
+    d = json.loads(r.stdout)
+    assert any("points UP" in w for w in d["warnings"])
+    assert "cautions" in d and "checks" in d  # the contract's fields stay
+    r = run("solve", str(p))
+    assert "INPUT WARNINGS" in r.stdout and "points UP" in r.stdout
+    r = run("check", str(p))
+    assert r.returncode == 0 and "points UP" in r.stderr
+    r = run("capacity", str(p))
+    assert "points UP" in r.stdout
+    r = run("rating", str(p))
+    assert "INPUT WARNING" in r.stdout
+
+
+# ------------------------------------------------------------------ a safety factor not used
+def test_safety_factor_on_steel_asd_is_a_warning_saying_what_to_write():
+    job = parse_job_text(job_text(criteria="safety_factor = 3.0"))
+    w = [p for p in warnings(job) if p.key == "criteria.safety_factor"]
+    assert len(w) == 1
+    assert "NOT used" in w[0].message and 'basis = "first-yield"' in w[0].message
+
+
+def test_safety_factor_with_first_yield_is_used_without_a_warning():
+    job = parse_job_text(job_text(criteria='safety_factor = 3.0\nbasis = "first-yield"'))
+    assert not [p for p in warnings(job) if p.key == "criteria.safety_factor"]
+    # and the check really uses it: allowable stress Fy / 3 (first yield)
+    from shopbeam.design.analysis import analyze
+
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    assert bend.limit == pytest.approx(job.material.fy / 3.0, rel=1e-9)
+
+
+def test_the_default_factor_written_out_on_steel_is_not_noise():
+    job = parse_job_text(job_text(criteria="safety_factor = 1.67"))
+    assert not [p for p in warnings(job) if p.key == "criteria.safety_factor"]
+
+
+def test_safety_factor_on_lumber_says_to_remove_it():
+    job = parse_job_text(job_text(section="2x10", material="DF-L-2",
+                                  criteria="safety_factor = 2.5"))
+    w = [p for p in warnings(job) if p.key == "criteria.safety_factor"]
+    assert w and "remove safety_factor" in w[0].message
+
+
+# ------------------------------------------------------------------ family and material
+def test_lumber_size_in_steel_is_refused_with_exit_2(tmp_path):
+    p = tmp_path / "job.toml"
+    p.write_text(job_text(section="2x2", material="A36"))
+    r = run("solve", str(p))
+    assert r.returncode == 2
+    assert "beam.section" in r.stderr and "lumber size" in r.stderr and "Traceback" not in r.stderr
+
+
+def test_steel_shape_in_lumber_is_refused():
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(job_text(section="W8x18", material="DF-L-2"))
+    assert "not made in wood" in str(e.value)
+
+
+def test_a_lumber_size_in_lumber_and_a_flat_bar_in_steel_are_fine():
+    parse_job_text(job_text(section="2x10", material="DF-L-2"))
+    parse_job_text(job_text(section="FB4x1/2", material="A36"))
+
+
+def test_size_lumber_on_a_steel_job_switches_to_a_stated_wood_material():
+    job = parse_job_text(job_text(section="FB4x1/2", material="A36"))
+    res = size(job, "lumber", with_capacity=False)
+    assert res.job.material.kind == "lumber"
+    assert all(r.material.kind == "lumber" for r in res.rows)
+    assert "A36" in res.material_note and res.job.material.key in res.material_note
+
+
+def test_size_steel_on_a_lumber_job_switches_to_steel(tmp_path):
+    p = tmp_path / "job.toml"
+    p.write_text(job_text(section="2x10", material="DF-L-2"))
+    r = run("size", str(p), "--kind", "W", "--json")
+    assert r.returncode == 0, r.stderr
+    d = json.loads(r.stdout)
+    assert d["material"] == "A992" and "DF-L-2" in d["material_note"]
+    assert all(row["material"] == "A992" for row in d["passing"])
