@@ -139,13 +139,71 @@ def _terms(text: str) -> tuple[int, list[tuple[Fraction | float, str]]] | None:
     return (sign, out) if out else None
 
 
+# Shop spellings of units, by lower-case word: capitals and plurals ("6 FT", "400 Lbs",
+# "Kips"), "#" for pounds, k for kip, Nm for newton-metres. A hyphen or a dot between two
+# unit words is a product ("ft-lb", "lb-ft", "kip-ft", "kN-m", "ft.lb").
+_SHOP_WORDS = {
+    "ft": "ft", "feet": "ft", "foot": "ft", "in": "inch", "inch": "inch", "inches": "inch",
+    "yd": "yd", "yard": "yd", "mm": "mm", "cm": "cm", "m": "m", "meter": "m", "metre": "m",
+    "lb": "lb", "#": "lb", "pound": "lb", "lbm": "lb", "lbf": "lbf", "kip": "kip", "k": "kip",
+    "kipf": "kip", "n": "N", "kn": "kN", "nm": "N*m", "knm": "kN*m", "nmm": "N*mm",
+    "pa": "Pa", "kpa": "kPa", "mpa": "MPa", "gpa": "GPa", "psi": "psi", "ksi": "ksi",
+    "psf": "psf", "ksf": "ksf", "plf": "plf", "klf": "klf", "pcf": "pcf", "kg": "kg",
+    "kgf": "kgf", "rad": "rad", "radian": "rad",
+}
+_UNIT_WORD = re.compile(r"[A-Za-z#]+")
+
+# What to write, per kind, when a unit is refused.
+SPELLINGS: dict[str, str] = {
+    "length": "ft, in, yd, mm, cm or m (also 10' 6\")",
+    "force": "lbf, lb (or #), kip (or k), N, kN or kg",
+    "line_load": "lbf/ft (plf), lb/ft, kip/ft (klf), N/m, kN/m or kg/m",
+    "area_load": "psf (lbf/ft^2), ksf, Pa, kPa or kN/m^2",
+    "moment": "lbf*ft (ft-lb, lb-ft), lbf*in (in-lb), kip*ft (k-ft), N*m (Nm, N-m) or kN*m "
+              "(kN-m)",
+    "stiffness": "lbf/in, kip/in, N/mm or kN/m",
+    "rot_stiffness": "lbf*ft/rad, kip*in/rad, N*m/rad or kN*m/rad",
+    "stress": "psi, ksi, Pa, kPa, MPa or GPa",
+    "area": "in^2, ft^2, mm^2 or m^2",
+    "inertia": "in^4 or mm^4",
+    "modulus": "in^3 or mm^3",
+    "density": "lb/ft^3 (pcf), lb/in^3 or kg/m^3",
+    "mass_per_length": "lb/ft or kg/m",
+}
+
+
+def _word(w: str) -> str:
+    low = w.lower()
+    if low in _SHOP_WORDS:
+        return _SHOP_WORDS[low]
+    if low.endswith("s") and low[:-1] in _SHOP_WORDS:  # plurals: lbs, kips, Kips, FTs
+        return _SHOP_WORDS[low[:-1]]
+    return w
+
+
+def shop_unit(text: str) -> str:
+    """A unit as a shop writes it, in pint's spelling: "ft-lb" -> "ft*lb", "400#" -> "lb",
+    "KIPS" -> "kip", "Nm" -> "N*m". Words it does not know pass through unchanged."""
+    out, pos = [], 0
+    words = list(_UNIT_WORD.finditer(text))
+    for i, m in enumerate(words):
+        between = text[pos:m.start()]
+        if i > 0 and between.strip() in ("-", ".", "\u00b7"):
+            between = "*"
+        out.append(between)
+        out.append(_word(m.group(0)))
+        pos = m.end()
+    out.append(text[pos:])
+    return "".join(out)
+
+
 @lru_cache(maxsize=512)
 def _unit(text: str):
     reg = ureg()
     return reg.parse_units(text.replace("^", "**"))
 
 
-def quantity(text: str, key: str = "", unit_hint: str = "ft"):
+def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None = None):
     """Parse shop notation to a pint Quantity (sum of compound terms). Raises InputError."""
     if not isinstance(text, str):
         raise InputError(
@@ -168,9 +226,13 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft"):
     try:
         for num, unit in terms:
             try:
-                u = _unit(unit)
+                u = _unit(shop_unit(unit))
             except Exception:
-                raise InputError(f"unknown unit {unit!r} in {text!r}", key) from None
+                what = (f"; for {KINDS[kind][1]} write {SPELLINGS[kind]}"
+                        if kind in SPELLINGS else "")
+                raise InputError(f"unknown unit {unit!r} in {text!r}{what} "
+                                 f"(e.g. {KINDS[kind][2] if kind in KINDS else chr(34) + '8 ft' + chr(34)})",
+                                 key) from None
             q = reg.Quantity(float(num), u)
             if total is None:
                 total = q
@@ -213,7 +275,7 @@ def parse(text, kind: str, key: str = "", *, positive: bool = False,
     """Parse `text` as a `kind` (see KINDS) and return the SI value as a float."""
     ref, words, example = KINDS[kind]
     hint = re.search(r'"[-\d.]+ ([^"]+)"', example)
-    q = quantity(text, key, hint.group(1) if hint else "ft")
+    q = quantity(text, key, hint.group(1) if hint else "ft", kind)
     if q.dimensionality == _dim(ref):
         value = float(q.to(ref).magnitude)
     elif kind in _WEIGHT_OK and q.dimensionality == _dim(_WEIGHT_OK[kind]):
@@ -221,8 +283,8 @@ def parse(text, kind: str, key: str = "", *, positive: bool = False,
     elif kind in _MASS_FROM_FORCE and q.dimensionality == _dim(_MASS_FROM_FORCE[kind]):
         value = float(q.to(_MASS_FROM_FORCE[kind]).magnitude) / G0
     else:
-        raise InputError(f"{text!r} is {describe_dimension(q)}, but {words} is expected here "
-                         f"(e.g. {example})", key)
+        raise InputError(f"{text!r} is {describe_dimension(q)}, but {words} is expected here: "
+                         f"write {SPELLINGS.get(kind, ref)} (e.g. {example})", key)
     if not math.isfinite(value):
         raise InputError(f"{text!r} is out of range", key)
     if positive and value <= 0:

@@ -1,0 +1,92 @@
+"""Unit spellings a shop writes: hyphenated moments, # for pounds, capitals and plurals, Nm.
+
+Expected values are exact conversions: 1 ft = 0.3048 m and 1 in = 0.0254 m (international
+foot and inch, 1959), 1 lb = 0.45359237 kg, 1 lbf = 0.45359237 kg x 9.80665 m/s^2
+(standard gravity, CGPM 1901), 1 kip = 1000 lbf."""
+
+from __future__ import annotations
+
+import pytest
+
+from shopbeam import units
+from shopbeam.errors import InputError
+
+LBF = 0.45359237 * 9.80665
+FT, IN = 0.3048, 0.0254
+
+
+@pytest.mark.parametrize("text, expected", [
+    ("150 ft-lb", 150 * LBF * FT),
+    ("150 lb-ft", 150 * LBF * FT),
+    ("150 lbf-ft", 150 * LBF * FT),
+    ("150 ft-lbs", 150 * LBF * FT),
+    ("150 in-lb", 150 * LBF * IN),
+    ("150 in-lbs", 150 * LBF * IN),
+    ("2 kip-ft", 2000 * LBF * FT),
+    ("2 k-ft", 2000 * LBF * FT),
+    ("2 ft-kips", 2000 * LBF * FT),
+    ("135 Nm", 135.0),
+    ("135 N-m", 135.0),
+    ("135 N.m", 135.0),
+    ("1.2 kN-m", 1200.0),
+    ("1.2 kNm", 1200.0),
+    ("-150 FT-LB", -150 * LBF * FT),
+])
+def test_moment_spellings(text, expected):
+    assert units.parse(text, "moment") == pytest.approx(expected, rel=1e-12)
+
+
+@pytest.mark.parametrize("text, expected", [
+    ("400#", 400 * LBF),
+    ("400 #", 400 * LBF),
+    ("-400#", -400 * LBF),
+    ("400 LB", 400 * LBF),
+    ("400 Lbs", 400 * LBF),
+    ("400 LBS", 400 * LBF),
+    ("400 LBF", 400 * LBF),
+    ("2 Kips", 2000 * LBF),
+    ("2 KIPS", 2000 * LBF),
+    ("2 k", 2000 * LBF),
+    ("3 KN", 3000.0),
+])
+def test_force_spellings(text, expected):
+    assert units.parse(text, "force") == pytest.approx(expected, rel=1e-12)
+
+
+@pytest.mark.parametrize("text, kind, expected", [
+    ("6 FT", "length", 6 * FT),
+    ("6 Ft", "length", 6 * FT),
+    ("6 feet", "length", 6 * FT),
+    ("10 IN", "length", 10 * IN),
+    ("10 Inches", "length", 10 * IN),
+    ("300 MM", "length", 0.3),
+    ("25 PLF", "line_load", 25 * LBF / FT),
+    ("25 #/ft", "line_load", 25 * LBF / FT),
+    ("2 K/FT", "line_load", 2000 * LBF / FT),
+    ("36 KSI", "stress", 36000 * LBF / IN**2),
+    ("40 PSF", "area_load", 40 * LBF / FT**2),
+])
+def test_capitals_plurals_and_pound_signs(text, kind, expected):
+    assert units.parse(text, kind) == pytest.approx(expected, rel=1e-12)
+
+
+def test_shop_notation_still_reads():
+    assert units.parse("10' 6 1/2\"", "length") == pytest.approx(10 * FT + 6.5 * IN)
+    assert units.parse("10 ft 6 in", "length") == pytest.approx(10 * FT + 6 * IN)
+    assert units.parse("1-1/2 in", "length") == pytest.approx(1.5 * IN)
+
+
+def test_a_refused_unit_lists_what_to_write():
+    with pytest.raises(InputError) as e:
+        units.parse("150 ft-lbz", "moment", "loads[0].value")
+    msg = str(e.value)
+    assert "unknown unit" in msg and "ft-lb" in msg and "kN*m" in msg and "Nm" in msg
+    with pytest.raises(InputError) as e:
+        units.parse("3 kg", "length")
+    assert "ft, in" in str(e.value)
+
+
+def test_a_moment_where_a_force_is_expected_is_still_refused():
+    with pytest.raises(InputError) as e:
+        units.parse("150 ft-lb", "force")
+    assert "a force is expected" in str(e.value)
