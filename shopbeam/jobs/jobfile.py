@@ -28,14 +28,20 @@ MAX_SUPPORTS = 200
 # Known keys per table. Other modules may add their own keys here at import time.
 KNOWN_KEYS: dict[str, set[str]] = {
     "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
-         "moving"},
+         "moving", "project"},
     "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded",
              "braces", "braced"},
     "supports": {"at", "type", "stiffness", "label"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned", "uplift"},
     "criteria": {"deflection", "safety_factor", "basis", "impact"},
+    "project": set(),  # filled from PROJECT_KEYS below
 }
+
+# Optional [project] table: the title block of a calc package (all text, all optional).
+PROJECT_KEYS = ("shop", "job", "member", "client", "location", "prepared_by", "checked_by",
+                "date", "revision")
+KNOWN_KEYS["project"] = set(PROJECT_KEYS)
 
 
 @dataclass(frozen=True)
@@ -70,6 +76,7 @@ class Job:
     data: dict = field(default_factory=dict, repr=False)
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
+    project: dict = field(default_factory=dict)  # [project] title-block fields, as text
 
     @property
     def lifting(self) -> bool:
@@ -495,6 +502,26 @@ def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
            f"{uses[kind]}; {todo}", "criteria.safety_factor")
 
 
+def _read_project(r: _Reader, table) -> dict:
+    """The optional [project] table: text fields for a calc package's title block."""
+    if table is None:
+        return {}
+    if not _is_table(table):
+        r.error("project must be a table, e.g. [project] with shop = \"...\"", "project")
+        return {}
+    r.unknown_keys(table, KNOWN_KEYS["project"], "project", "[project]")
+    out = {}
+    for k in PROJECT_KEYS:
+        v = table.get(k)
+        if v is None:
+            continue
+        if isinstance(v, (str, int)) and not isinstance(v, bool) or hasattr(v, "isoformat"):
+            out[k] = str(v).strip()
+        else:
+            r.error(f"project.{k} must be text in quotes", f"project.{k}")
+    return out
+
+
 def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> Job:
     """Validate parsed TOML data. Raises InputErrors with every problem found."""
     r = _Reader(filename, text)
@@ -529,6 +556,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if not (isinstance(tags, list) and all(isinstance(t, str) for t in tags)):
         r.error("tags must be a list of words, e.g. tags = [\"rack\", \"shelf\"]", "tags")
         tags = []
+
+    project = _read_project(r, data.get("project"))
 
     beam = data.get("beam")
     length = section = material = None
@@ -658,7 +687,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         supports=tuple(sorted(supports, key=lambda s: s.at)), loads=tuple(loads),
         criteria=criteria, notes=notes, units=system, tags=tuple(tags),
         self_weight=self_weight, members=members, welded=welded, path=filename, data=data,
-        warnings=tuple(r.problems), conversions=tuple(conversions),
+        warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
     )
 
 
