@@ -9,7 +9,12 @@ import sys
 
 import pytest
 
-from shopbeam.design.capacity import brent, capacity, rating_label
+from shopbeam.design.capacity import brent, capacity
+from shopbeam.output.label import label_text, rating
+
+
+def rating_label(res):
+    return label_text(rating(res))
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.design.loading import evaluate
 

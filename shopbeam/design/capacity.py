@@ -10,13 +10,12 @@ with g(0) <= 1 < g(k_hi), then converge to working precision, keeping the side t
 Cb changes with the shape of the moment diagram, so g is not linear in k; the bracket makes
 the answer safe anyway.
 
-`cmd_capacity` prints it (or the contract JSON with "factor"); `cmd_rating` prints a plain
-label that fits 40 columns and an A4 or letter page.
+`cmd_capacity` prints it (or the contract JSON with "factor"); the rating label and plaque in
+shop words are `shopbeam.output.label`.
 """
 
 from __future__ import annotations
 
-import datetime as _dt
 import math
 import textwrap
 from dataclasses import dataclass
@@ -87,6 +86,9 @@ class CapacityResult:
     evaluation: Evaluation | None
     method: str
     note: str = ""
+    # why no load may be posted (e.g. a limit state that could govern was not checked);
+    # when non-empty, labels and plaques say NOT RATED and these reasons instead of a number
+    not_rated: tuple[str, ...] = ()
 
     @property
     def checks(self) -> tuple[Check, ...]:
@@ -227,6 +229,7 @@ def to_json(res: CapacityResult) -> dict:
     out["checks"] = [c.as_dict() for c in res.checks]
     out["governing"] = res.governing.name if res.governing else None
     out["capacity"] = {"method": res.method, "note": res.note,
+                       "not_rated": list(res.not_rated),
                        "basis": BASIS_WORDS[basis_of(res.job)],
                        "max_load": dict(max_load_lines(res)),
                        "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
@@ -289,72 +292,13 @@ def cmd_capacity(args) -> int:
     return 0
 
 
-def rating_label(res: CapacityResult, width: int = 40, date: _dt.date | None = None) -> str:
-    """A plain-text label no wider than `width` columns (30 at least)."""
-    from shopbeam.errors import InputError
-
-    if width < 30 or width > 200:
-        raise InputError("a label is 30 to 200 characters wide", "--width")
-    job = res.job
-    sy = job.units
-    date = date or _dt.date.today()
-    inner = width - 4
-    out = []
-
-    def rule(ch="="):
-        out.append("+" + ch * (width - 2) + "+")
-
-    def row(text=""):
-        for piece in (textwrap.wrap(text, inner) or [""]):
-            out.append("| " + piece.ljust(inner) + " |")
-
-    def pair(label, value):
-        text = f"{label}: {value}"
-        row(text)
-
-    rule()
-    row("LOAD RATING".center(inner))
-    rule("-")
-    row(job.title)
-    row("")
-    pair("Member", f"{job.section.designation}, {job.material.key}")
-    sups = sorted({s.at for s in job.supports if s.kind != "hinge"})
-    pair("Span", units.fmt(job.length, "length", sy) + " (supports at "
-         + ", ".join(units.fmt(x, "length", sy) for x in sups) + ")")
-    rule("-")
-    k = res.factor
-    if math.isfinite(k) and k > 0:
-        for label, value in max_load_lines(res):
-            pair(label.upper() if label.startswith("max") else label, value)
-    elif k == 0:
-        row("DO NOT LOAD: fails under its own weight and dead loads")
-    else:
-        row("No live load entered: nothing to rate")
-    if res.governing:
-        pair("Governing check", res.governing.name)
-    for p in (p for p in job.warnings if p.warning):
-        row(f"INPUT WARNING {p.key}: {p.message.split(':')[0]} (see shopbeam check)")
-    pair("Basis", {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
-                   "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}[basis_of(job)])
-    pair("Date", date.isoformat())
-    rule("-")
-    from shopbeam.cautions import is_lifting
-
-    if is_lifting(job.tags):
-        row("LIFTING DEVICE: rated with impact allowance; proof load test and marking "
-            "by a qualified engineer required before use")
-    else:
-        row("NOT FOR LIFTING")
-    rule("-")
-    for c in cautions_for(job.tags):
-        row(c)
-    rule()
-    return "\n".join(out) + "\n"
-
-
 def cmd_rating(args) -> int:
     from shopbeam.jobs.jobfile import load_job
 
+    from shopbeam.design.analysis import analyze
+    from shopbeam.output import label
+
     job = load_job(args.job)
-    print(rating_label(capacity(job), getattr(args, "width", 40)), end="")
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    print(label.label_text(r, getattr(args, "width", 40)), end="")
     return 0

@@ -96,7 +96,10 @@ def rating_text(job, width: int = 40, date=None) -> str:
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
     try:
-        label = mod.rating_label(res, width=width, date=date)
+        from shopbeam.design.analysis import analyze
+        from shopbeam.output import label as labels
+
+        label = labels.label_text(labels.rating(res, analyze(job).unchecked, date=date), width)
         lines += ["RATING LABEL (to print: shopbeam rating JOB.toml > label.txt)", label.rstrip()]
     except Exception as exc:  # noqa: BLE001
         lines.append(f"The rating label could not be made: {type(exc).__name__}: {exc}")

@@ -1,0 +1,365 @@
+"""Rating labels and plaques in shop words: the load to post, as a person at the rack reads it.
+
+`rating(cap, unchecked)` turns a capacity (`design.capacity.CapacityResult`: the largest
+multiplier k of the live loads) into `Rating`: the figures to post in the job's units, each
+rounded DOWN to three significant figures and saying so when rounding changed it ("9420 lbf,
+rounded down from 9429"). The figures depend on the loads entered:
+
+- one uniform live load: the max uniform load (per length, over where it lies) and its total;
+- one point live load: the max point load and where it goes;
+- several live loads (pallets, bundles): each one's max load by its label, and the total;
+- a moving wheel set: the max load per wheel and for the set;
+- loads shared by identical members (`members = 2`: a pair of rack beams, a shelf's two
+  brackets): the figures are per level / per pair (the loads as entered) and per member; racks
+  and shelves also say what the total per bay depends on (the upright frames are not checked).
+
+When the capacity carries "not rated" reasons (`CapacityResult.not_rated`), or a limit state
+that blocks a rating was not checked, there is no number: the label says NOT RATED and why.
+Every label and plaque carries the cautions (the stronger lifting ones for lifting jobs) and
+every unchecked limit state. `label_text` is the 40-column label (`shopbeam rating JOB`);
+`plaque_text` and `plaque_html` are the full-page plaque (`shopbeam rating JOB --plaque`).
+"""
+
+from __future__ import annotations
+
+import datetime as _dt
+import math
+import textwrap
+from dataclasses import dataclass
+from html import escape
+
+from shopbeam import units
+from shopbeam.cautions import cautions_for, is_lifting
+
+RACK_TAGS = {"rack", "pallet", "shelf", "shelving", "storage"}
+BASIS_SHORT = {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
+               "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}
+
+
+@dataclass(frozen=True)
+class Figure:
+    """One posted figure: what it is for, the value (rounded down) and any note."""
+
+    label: str
+    value: str
+    note: str = ""  # e.g. "rounded down from 9429", "over 4 in to 44 in"
+    si: float = 0.0  # the posted value in SI (after rounding down)
+    exact: float = 0.0  # before rounding, SI
+    group: str = ""  # heading it sits under, e.g. "PER LEVEL (pair of beams)"
+
+
+@dataclass(frozen=True)
+class Rating:
+    title: str
+    member: str
+    span: str
+    factor: float
+    figures: tuple[Figure, ...]
+    not_rated: tuple[str, ...]
+    status: str  # "rated" | "not rated" | "do not load" | "nothing to rate"
+    governing: str
+    basis: str
+    date: str
+    lifting: bool
+    cautions: tuple[str, ...]
+    unchecked: tuple[str, ...]  # "name (clause): reason"
+    notes: tuple[str, ...]
+    warnings: tuple[str, ...] = ()  # input warnings, "key: what"
+
+
+# ------------------------------------------------------------------ rounding
+def floor_sig(value: float, sig: int = 3) -> float:
+    """`value` (> 0) rounded down to `sig` significant figures (a posted load never rounds up)."""
+    if value <= 0 or not math.isfinite(value):
+        return 0.0
+    e = math.floor(math.log10(value)) - (sig - 1)
+    step = 10.0 ** e
+    down = math.floor(value / step * (1 + 1e-12)) * step
+    if down > value:  # the 1e-12 nudge must never round up past the value itself
+        down = math.floor(value / step) * step
+    return round(down, max(0, -e))
+
+
+def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
+           group: str = "") -> Figure:
+    """A figure rounded down in display units, noting the unrounded value when they differ."""
+    disp = abs(units.to_display(si_value, kind, system))
+    down = floor_sig(disp)
+    factor = units.to_display(1.0, kind, system)
+    unit = units.unit_label(kind, system)
+    text = f"{units.num(down, 6)} {unit}"
+    notes = [note] if note else []
+    if down < disp * (1 - 1e-9):
+        whole = math.floor(disp)
+        notes.append(f"rounded down from {whole}" if disp >= 1000 and whole > down
+                     else f"rounded down from {units.num(disp, max(5, len(str(whole)) + 1))}")
+    return Figure(label, text, "; ".join(notes), down / factor, abs(si_value), group)
+
+
+# ------------------------------------------------------------------ the figures
+def _moving(job):
+    try:
+        from shopbeam.design.loading import read_moving
+
+        return read_moving(job)
+    except Exception:  # noqa: BLE001 - no wheel set is shown as no wheel set
+        return ()
+
+
+def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
+    sy = job.units
+    live = [ld for ld in job.loads if ld.case == "live"]
+    mv = _moving(job)
+    n = job.members
+    rack = bool(RACK_TAGS & {t.strip().lower() for t in job.tags})
+    figs: list[Figure] = []
+    notes: list[str] = []
+    where = ""
+    if n > 1:
+        where = (("PER LEVEL (pair of beams)" if n == 2 else f"PER LEVEL ({n} beams)")
+                 if rack else f"ALL {n} MEMBERS TOGETHER")
+
+    def pos(x):
+        return units.fmt(x, "length", sy)
+
+    if len(live) == 1 and not mv and live[0].kind == "uniform":
+        ld = live[0]
+        figs.append(posted("MAX UNIFORM LOAD", ld.w1 * k, "line_load", sy,
+                           f"over {pos(ld.start)} to {pos(ld.end)}", where))
+        figs.append(posted("TOTAL", ld.total_force * k, "force", sy, "spread evenly", where))
+    elif len(live) == 1 and not mv and live[0].kind == "point":
+        ld = live[0]
+        figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
+                           f"at {pos(ld.at)}", where))
+    else:
+        for i, ld in enumerate(live):
+            name = ld.label or f"load {i + 1}"
+            if ld.kind == "point":
+                figs.append(posted(f"max {name}", ld.value * k, "force", sy, f"at {pos(ld.at)}",
+                                   where))
+            elif ld.kind == "uniform":
+                figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
+                                   f"spread over {pos(ld.start)} to {pos(ld.end)}", where))
+            elif ld.kind == "linear":
+                figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
+                                   f"varying over {pos(ld.start)} to {pos(ld.end)}", where))
+            else:
+                figs.append(posted(f"max {name}", ld.value * k, "moment", sy, f"at {pos(ld.at)}",
+                                   where))
+        if mv:
+            m = mv[0]
+            wheels = [abs(w) * n * k for w in m.live]
+            if len(wheels) > 1:
+                figs.append(posted(f"MAX PER WHEEL ({m.label})", max(wheels), "force", sy,
+                                   f"{len(wheels)} wheels", where))
+            figs.append(posted(f"MAX MOVING LOAD ({m.label})", sum(wheels), "force", sy,
+                               "anywhere on its travel", where))
+        tot = sum(abs(ld.total_force) for ld in live)
+        if tot and len(live) > 1:
+            figs.append(posted("TOTAL", tot * k, "force", sy, "placed as listed above", where))
+        if live and any(ld.kind == "moment" for ld in live):
+            notes.append("applied couples are rated with the loads above, as entered")
+    if n > 1:
+        tot_all = sum(abs(ld.total_force) for ld in live)
+        if mv:
+            tot_all += sum(abs(w) for w in mv[0].live) * n
+        if tot_all:
+            each = "PER BEAM" if rack else "PER MEMBER"
+            figs.append(posted("TOTAL", tot_all * k / n, "force", sy,
+                               f"each of {n} identical members carries 1/{n}", each))
+        if rack:
+            notes.append("PER BAY: the levels added up, and no more than the upright frames "
+                         "are rated for (frames, anchors and beam connectors are not checked "
+                         "here).")
+    notes.append("Rated for the loads placed as in the job; other placements are not rated.")
+    return figs, notes
+
+
+def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
+    """The rating of a capacity result in shop words (see the module doc).
+
+    `unchecked` are the job's `design.checks.Unchecked` records (from `analyze(job).unchecked`).
+    """
+    from shopbeam.design.checks import basis_of
+
+    job = cap.job
+    sy = job.units
+    k = cap.factor
+    reasons = [str(r) for r in (getattr(cap, "not_rated", ()) or ())]
+    for u in unchecked:
+        if getattr(u, "blocks_rating", True):
+            why = f"{u.name} was not checked: {u.reason}"
+            if why not in reasons and not any(u.name in r for r in reasons):
+                reasons.append(why)
+    figs: list = []
+    notes: list = []
+    if reasons:
+        status = "not rated"
+    elif not math.isfinite(k):
+        status = "nothing to rate"
+        notes.append(cap.note or "no live load entered: enter the load to rate as a live load")
+    elif k <= 0:
+        status = "do not load"
+        notes.append(cap.note or "the member fails under its own weight and the dead loads")
+    else:
+        status = "rated"
+        figs, notes = _figures(job, k)
+        from shopbeam.design.checks import impact_of
+
+        imp = impact_of(job)
+        if imp:
+            notes.insert(0, f"Includes a {imp:.0%} impact allowance on the live loads.")
+    sups = sorted({s.at for s in job.supports if s.kind != "hinge"})
+    span = (units.fmt(job.length, "length", sy) + " (supports at "
+            + ", ".join(units.fmt(x, "length", sy) for x in sups) + ")")
+    gov = cap.governing
+    unch = tuple(f"{u.name}" + (f" ({u.clause})" if u.clause else "") + f": {u.reason}"
+                 for u in unchecked)
+    return Rating(
+        title=job.title, member=f"{job.section.designation}, {job.material.key}", span=span,
+        factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
+        governing=gov.name if gov is not None else "", basis=BASIS_SHORT[basis_of(job)],
+        date=(date or _dt.date.today()).isoformat(), lifting=is_lifting(job.tags),
+        cautions=tuple(cautions_for(job.tags)), unchecked=unch, notes=tuple(notes),
+        warnings=tuple(f"{p.key}: {p.message.split(':')[0]}" for p in job.warnings
+                       if getattr(p, "warning", False)))
+
+
+# ------------------------------------------------------------------ 40-column label
+def label_text(r: Rating, width: int = 40) -> str:
+    """A plain-text label no wider than `width` columns (30 to 200)."""
+    from shopbeam.errors import InputError
+
+    if width < 30 or width > 200:
+        raise InputError("a label is 30 to 200 characters wide", "--width")
+    inner = width - 4
+    out: list[str] = []
+
+    def rule(ch="="):
+        out.append("+" + ch * (width - 2) + "+")
+
+    def row(text="", indent=""):
+        for piece in (textwrap.wrap(text, inner, subsequent_indent=indent) or [""]):
+            out.append("| " + piece.ljust(inner) + " |")
+
+    rule()
+    row("LOAD RATING".center(inner))
+    rule("-")
+    row(r.title)
+    row("")
+    row(f"Member: {r.member}")
+    row(f"Span: {r.span}")
+    rule("-")
+    _body(r, row)
+    if r.governing and r.status == "rated":
+        row(f"Governing check: {r.governing}")
+    for w in r.warnings:
+        row(f"INPUT WARNING {w} (see shopbeam check)")
+    row(f"Basis: {r.basis}")
+    row(f"Date: {r.date}")
+    rule("-")
+    if r.lifting:
+        row("LIFTING DEVICE: rated with impact allowance; proof load test and marking by a "
+            "qualified engineer required before use")
+    else:
+        row("NOT FOR LIFTING")
+    if r.unchecked:
+        rule("-")
+        row("NOT CHECKED:")
+        for u in r.unchecked:
+            row("- " + u, "  ")
+    rule("-")
+    for c in r.cautions:
+        row(c)
+    rule()
+    return "\n".join(out) + "\n"
+
+
+def _body(r: Rating, row) -> None:
+    if r.status == "not rated":
+        row("NOT RATED")
+        for why in r.not_rated:
+            row("- " + why, "  ")
+        return
+    if r.status == "do not load":
+        row("DO NOT LOAD: " + "; ".join(r.notes))
+        return
+    if r.status == "nothing to rate":
+        row("No live load entered: nothing to rate")
+        return
+    group = ""
+    for f in r.figures:
+        if f.group != group:
+            group = f.group
+            row(group + ":")
+        ind = "  " if group else ""
+        row(f"{ind}{f.label}: {f.value}", ind + "  ")
+        if f.note:
+            row(f"{ind}  ({f.note})", ind + "   ")
+    for n in r.notes:
+        row(n)
+
+
+# ------------------------------------------------------------------ full-page plaque
+def plaque_text(r: Rating, width: int = 78) -> str:
+    """The full-page plaque as plain text (fits a letter or A4 page at 10 characters per inch)."""
+    return label_text(r, width)
+
+
+def plaque_html(r: Rating, paper: str = "letter") -> str:
+    """The full-page plaque as a self-contained printable HTML page (big type, one page)."""
+    e = escape
+    size = "A4" if paper.lower() == "a4" else "letter"
+    h = ["<!DOCTYPE html>", '<html lang="en"><head><meta charset="utf-8">',
+         f"<title>Load rating: {e(r.title)}</title><style>",
+         "@page{size:" + size + ";margin:14mm}"
+         "body{font-family:'DejaVu Sans','Liberation Sans',Arial,sans-serif;margin:0 auto;"
+         "max-width:182mm;color:#000}"
+         ".plaque{border:4pt solid #000;padding:8mm}"
+         "h1{font-size:30pt;text-align:center;margin:0 0 4mm;letter-spacing:2pt}"
+         ".title{font-size:15pt;text-align:center;margin-bottom:5mm}"
+         ".fig{font-size:20pt;font-weight:bold;margin:3mm 0 0}"
+         ".group{font-size:13pt;font-weight:bold;margin:4mm 0 0;border-bottom:1pt solid #000}"
+         ".note{font-size:10.5pt;margin:0 0 2mm 6mm}"
+         ".notrated{font-size:30pt;font-weight:bold;text-align:center;border:3pt solid #b00000;"
+         "color:#b00000;padding:3mm;margin:4mm 0}"
+         ".meta{font-size:11pt;margin:1mm 0}"
+         ".lift{font-size:13pt;font-weight:bold;border:2pt solid #000;padding:2mm;margin:4mm 0}"
+         ".caution{font-size:10pt;font-weight:bold;margin:2mm 0}"
+         "ul{margin:1mm 0 2mm 5mm;padding-left:4mm;font-size:10.5pt}"
+         ".plaque{break-inside:avoid}"
+         "</style></head><body><div class=plaque>",
+         "<h1>LOAD RATING</h1>", f'<div class="title">{e(r.title)}</div>']
+    if r.status == "not rated":
+        h.append('<div class="notrated">NOT RATED</div><ul>'
+                 + "".join(f"<li>{e(x)}</li>" for x in r.not_rated) + "</ul>")
+    elif r.status == "do not load":
+        h.append('<div class="notrated">DO NOT LOAD</div><p>' + e("; ".join(r.notes)) + "</p>")
+    elif r.status == "nothing to rate":
+        h.append('<div class="notrated">NOT RATED</div><p>No live load entered: nothing to '
+                 "rate.</p>")
+    else:
+        group = ""
+        for f in r.figures:
+            if f.group != group:
+                group = f.group
+                h.append(f'<p class="group">{e(group)}</p>')
+            h.append(f'<p class="fig">{e(f.label)}: {e(f.value)}</p>')
+            if f.note:
+                h.append(f'<p class="note">{e(f.note)}</p>')
+        h.append("<ul>" + "".join(f"<li>{e(n)}</li>" for n in r.notes) + "</ul>")
+    h.append(f'<p class="meta">Member: {e(r.member)}</p><p class="meta">Span: {e(r.span)}</p>')
+    if r.governing and r.status == "rated":
+        h.append(f'<p class="meta">Governing check: {e(r.governing)}</p>')
+    h += [f'<p class="meta"><b>INPUT WARNING</b> {e(w)} (see shopbeam check)</p>'
+          for w in r.warnings]
+    h.append(f'<p class="meta">Basis: {e(r.basis)} &nbsp; Date: {e(r.date)}</p>')
+    h.append('<div class="lift">' + ("LIFTING DEVICE: rated with impact allowance; proof load "
+                                     "test and marking by a qualified engineer required before "
+                                     "use" if r.lifting else "NOT FOR LIFTING") + "</div>")
+    if r.unchecked:
+        h.append("<p class=meta><b>Not checked:</b></p><ul>"
+                 + "".join(f"<li>{e(u)}</li>" for u in r.unchecked) + "</ul>")
+    h += [f'<p class="caution">{e(c)}</p>' for c in r.cautions]
+    h.append("</div></body></html>")
+    return "\n".join(h) + "\n"
