@@ -11,12 +11,12 @@ import pytest
 
 from shopbeam.design.capacity import brent, capacity
 from shopbeam.output.label import label_text, rating
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.design.loading import evaluate
 
 
 def rating_label(res):
     return label_text(rating(res))
-from shopbeam.jobs.jobfile import parse_job_text
-from shopbeam.design.loading import evaluate
 
 LBF, FT, IN = 4.4482216152605, 0.3048, 0.0254
 KSI = 6.894757293168361e6

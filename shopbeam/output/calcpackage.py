@@ -114,7 +114,7 @@ def _editions(result, basis: str) -> tuple[str, ...]:
     return tuple(seen)
 
 
-def _diagrams(sol, system: str) -> tuple[Diagram, ...]:
+def _diagrams(sol, system: str, state: str = "") -> tuple[Diagram, ...]:
     ex = sol.extremes()
     breaks = sorted({s.at for s in sol.beam.supports})
     out = []
@@ -124,7 +124,7 @@ def _diagrams(sol, system: str) -> tuple[Diagram, ...]:
             name, units.unit_label(kind, system),
             units.fmt(e.max, kind, system), units.fmt(e.max_at, "length", system),
             units.fmt(e.min, kind, system), units.fmt(e.min_at, "length", system),
-            svg.diagram(name, sol.function(name), e, sol.length, system, breaks)))
+            svg.diagram(name, sol.function(name), e, sol.length, system, breaks, state)))
     return tuple(out)
 
 
@@ -218,7 +218,7 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
         state_reactions=_reactions(st_sol, sy) if st_sol is not None else (),
         state_words=result.state_words if st_sol is not None else "",
         diagrams=_diagrams(sol, sy),
-        state_diagrams=_diagrams(st_sol, sy) if st_sol is not None else (),
+        state_diagrams=_diagrams(st_sol, sy, "governing") if st_sol is not None else (),
         checks=tuple(rows), governing=f"{g.name}, ratio {g.ratio:.3f}", verdict=verdict,
         self_checks=tuple(self_checks), cautions=tuple(result.cautions),
         not_checked=not_checked, program=f"shopbeam {__version__}",

@@ -207,11 +207,13 @@ def sample(pw, length: float, extra=(), n: int = 240) -> tuple[np.ndarray, np.nd
     return np.array(xs), np.array(ys)
 
 
-def diagram(name: str, pw, extreme, length: float, system: str, breaks_at=()) -> str:
+def diagram(name: str, pw, extreme, length: float, system: str, breaks_at=(),
+            state: str = "") -> str:
     """One diagram (shear, moment, slope or deflection) with its extremes labelled.
 
     `extreme` is the exact `Extreme` of the function; its max and min are marked and
-    labelled in the job's units (`data-si`, `data-at` hold the SI numbers).
+    labelled in the job's units (`data-si`, `data-at` hold the SI numbers). `state` names a
+    load state other than the one the report shows (`data-state="governing"`).
     """
     kind = DIAGRAM_KINDS[name]
     colour = COLOURS[name]
@@ -227,7 +229,8 @@ def diagram(name: str, pw, extreme, length: float, system: str, breaks_at=()) ->
         return bottom - (v - lo) / span * (bottom - top)
 
     unit = units.unit_label(kind, system)
-    parts = [f'<svg xmlns="http://www.w3.org/2000/svg" class="diagram" data-diagram="{name}" '
+    st = f' data-state="{escape(state)}"' if state else ""
+    parts = [f'<svg xmlns="http://www.w3.org/2000/svg" class="diagram" data-diagram="{name}"{st} '
              f'viewBox="0 0 {WIDTH} {h}" width="100%" role="img" aria-label="{name} diagram">',
              f'<title>{name} diagram ({unit})</title>']
     y0 = Y(0.0)
