@@ -1,0 +1,146 @@
+"""Rating labels and plaques in shop words: the figures, rounding down, NOT RATED, cautions."""
+
+from __future__ import annotations
+
+import math
+import re
+from dataclasses import replace
+from pathlib import Path
+
+import pytest
+
+from shopbeam.design.analysis import analyze
+from shopbeam.design.capacity import capacity
+from shopbeam.design.checks import Unchecked
+from shopbeam.jobs.jobfile import load_job, parse_job_text
+from shopbeam.output import label
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+LBF = 4.4482216152605
+
+
+def rack():
+    job = load_job(PRESETS / "pallet-rack-beam-pair.toml")
+    return job, capacity(job)
+
+
+def test_floor_sig_never_rounds_up_and_keeps_three_figures():
+    for v in (9429.0, 9420.0, 408.26, 0.012345, 1.0, 999.999, 1e6 + 1, 123456.7, 2.5e-7):
+        d = label.floor_sig(v)
+        assert d <= v and d > v * 0.99  # three significant figures lose under 1 %
+    assert label.floor_sig(9429.0) == 9420.0 and label.floor_sig(9420.0) == 9420.0
+
+
+def test_pallet_rack_gives_per_level_per_beam_and_rounds_down_saying_so():
+    job, cap = rack()
+    r = label.rating(cap)
+    k = cap.factor
+    # the level carries two pallets of 600 lbf/ft x 40 in = 2000 lbf each (the job's text)
+    level = 2 * 600 * 40 / 12 * k
+    tot = [f for f in r.figures if f.label == "TOTAL" and f.group.startswith("PER LEVEL")]
+    assert len(tot) == 1 and tot[0].group == "PER LEVEL (pair of beams)"
+    assert tot[0].value == f"{int(label.floor_sig(level))} lbf"
+    assert f"rounded down from {math.floor(level)}" in tot[0].note
+    beam = [f for f in r.figures if f.group == "PER BEAM"]
+    assert beam and beam[0].si * 2 <= level * LBF * (1 + 1e-12)
+    pallets = [f for f in r.figures if f.label.startswith("max pallet")]
+    assert len(pallets) == 2
+    text = label.label_text(r)
+    assert "PER BAY" in text and "upright frames" in text
+    assert "x the entered live loads" not in text
+
+
+def test_label_fits_40_columns_for_every_preset():
+    for path in sorted(PRESETS.glob("*.toml")):
+        job = load_job(path)
+        text = label.label_text(label.rating(capacity(job), analyze(job).unchecked))
+        assert max(len(x) for x in text.splitlines()) <= 40, path.name
+        assert "SCREENING CHECK ONLY" in text.replace("|", " ").replace("\n", " ") \
+            or "SCREENING CHECK" in text, path.name
+
+
+def test_not_rated_prints_no_number_and_says_why():
+    job, cap = rack()
+    cap = replace(cap, not_rated=("lateral-torsional buckling could govern: give the brace "
+                                  "spacing",))
+    r = label.rating(cap)
+    assert r.status == "not rated" and r.figures == ()
+    text = label.label_text(r)
+    flat = " ".join(x.strip("| ") for x in text.splitlines())
+    assert "NOT RATED" in flat and "brace spacing" in flat
+    assert "lbf" not in flat.split("Member")[1].split("NOT RATED")[1].split("Basis")[0]
+    html = label.plaque_html(r)
+    assert "NOT RATED" in html and "brace spacing" in html and "MAX" not in html
+
+
+def test_an_unchecked_limit_state_that_blocks_rating_means_not_rated():
+    job, cap = rack()
+    u = Unchecked("web crippling", "no bearing length given", "AISC 360-16 J10.3")
+    r = label.rating(cap, [u])
+    assert r.status == "not rated"
+    assert any("web crippling" in x for x in r.not_rated)
+    text = label.label_text(r)
+    assert "NOT CHECKED" in text and "J10.3" in text
+    soft = replace(u, blocks_rating=False)
+    r2 = label.rating(cap, [soft])
+    assert r2.status == "rated" and "web crippling" in label.label_text(r2)
+
+
+def test_single_point_load_gives_max_point_load():
+    job = load_job(PRESETS / "jib-arm.toml")
+    r = label.rating(capacity(job))
+    assert r.figures[0].label == "MAX POINT LOAD" and "at 9.5 ft" in r.figures[0].note
+    text = label.label_text(r)
+    assert "LIFTING DEVICE" in text and "NOT FOR LIFTING" not in text
+    assert "impact allowance" in text
+
+
+def test_moving_load_gives_per_wheel_and_set():
+    job = load_job(PRESETS / "monorail-trolley.toml")
+    r = label.rating(capacity(job))
+    labels = [f.label for f in r.figures]
+    assert any(x.startswith("MAX PER WHEEL") for x in labels)
+    assert any(x.startswith("MAX MOVING LOAD") for x in labels)
+
+
+def test_no_live_load_and_failing_dead_load_are_not_rated_numbers():
+    job = load_job(PRESETS / "sign-bracket.toml")
+    r = label.rating(capacity(job))
+    assert r.status == "nothing to rate" and r.figures == ()
+    text = """schema = 1
+title = "Overloaded"
+[beam]
+length = "10 ft"
+section = "HSS2x2x1/8"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "10 ft"
+value = "-5000 lbf/ft"
+case = "dead"
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-10 lbf"
+"""
+    r = label.rating(capacity(parse_job_text(text)))
+    assert r.status == "do not load" and "DO NOT LOAD" in label.label_text(r)
+
+
+def test_uniform_label_value_matches_the_capacity_rounded_down():
+    job = load_job(PRESETS / "storage-platform-beam.toml")
+    cap = capacity(job)
+    r = label.rating(cap)
+    f = r.figures[0]
+    assert f.label == "MAX UNIFORM LOAD"
+    live = [ld for ld in job.loads if ld.case == "live"][0]
+    exact = abs(live.w1) * cap.factor / (LBF / 0.3048)
+    shown = float(re.match(r"[\d.]+", f.value).group(0))
+    assert shown <= exact and shown > exact * 0.99
