@@ -11,8 +11,9 @@ from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design.checks import Check, Unchecked, governing, run_checks
 from shopbeam.jobs.jobfile import Job
-from shopbeam.errors import UnstableBeam
-from shopbeam.engine.solver import Solution, solve
+from shopbeam.errors import InputError, UnstableBeam
+from shopbeam.engine.selfcheck import sound_solve
+from shopbeam.engine.solver import Solution
 
 
 @dataclass(frozen=True)
@@ -59,9 +60,13 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
 def analyze(job: Job) -> Result:
     """Solve the job's member and run its checks. Raises UnstableBeam."""
     try:
-        sol = solve(job.beam(), length_fmt=length_formatter(job.units))
+        sol = sound_solve(job.beam(), length_formatter(job.units), file=job.path or "")
     except UnstableBeam as e:
         raise UnstableBeam(e.args[0], file=job.path or "") from None
+    except InputError as e:
+        if not e.problem.file:
+            e.problem.file = job.path or ""
+        raise
     from shopbeam.design import loading
     from shopbeam.design.checks import check_notes, impact_of
 

@@ -175,6 +175,13 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
     # Conditioning: rounding grows with the condition number of the solved equations, so the
     # answer is good to about eps x condition (supports or hinges very close together on a
     # long beam). Warn when that could reach the 4th significant figure the report shows.
+    if getattr(sol, "exact", False):
+        out.append(SelfCheck(
+            "conditioning", True,
+            f"the equations were solved in exact arithmetic (their condition number, "
+            f"{sol.condition:.1e}, is too large for floating point): results good to rounding",
+            {"condition": sol.condition, "relative_accuracy": 2.2e-16}))
+        return out
     est = 2.2e-16 * sol.condition
     out.append(SelfCheck(
         "conditioning", est <= 1e-4,
@@ -183,3 +190,38 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
            "length; merge them or move them apart"),
         {"condition": sol.condition, "relative_accuracy": est}))
     return out
+
+
+# the self-checks that hold to rounding for every correct solve; the magnitude checks are
+# rules of thumb (a warning to look again, not a sign of a wrong answer)
+EXACT_CHECKS = ("equilibrium", "boundary conditions", "shear jumps", "moment jumps",
+                "curvature", "conditioning")
+
+
+def failed_checks(sol: Solution) -> list[SelfCheck]:
+    return [d for d in sol.diagnostics if d.name in EXACT_CHECKS and not d.ok]
+
+
+def sound_solve(beam, length_fmt=None, file: str = "") -> Solution:
+    """`solve`, but never an answer whose exact self-checks fail: such a solve is done again
+    in exact arithmetic, and if that fails too (or the job is too large for it) the job is
+    refused with what to change (InputError naming the file)."""
+    from shopbeam.engine.solver import solve
+    from shopbeam.errors import InputError
+
+    sol = solve(beam, length_fmt)
+    bad = failed_checks(sol)
+    if bad and not sol.exact:
+        try:
+            sol = solve(beam, length_fmt, exact=True)
+            bad = failed_checks(sol)
+        except InputError:
+            pass
+    if bad:
+        what = "; ".join(f"{d.name}: {d.detail}" for d in bad)
+        raise InputError(
+            f"the answer failed its self-check ({what}), so it is not given. Look for loads, "
+            "supports or hinges very close together, or lengths, loads and stiffnesses many "
+            "orders of magnitude apart, and merge, move or correct them", key="supports",
+            file=file)
+    return sol

@@ -21,6 +21,7 @@ the number of loads and supports.
 from __future__ import annotations
 
 import math
+from fractions import Fraction
 from dataclasses import dataclass, field
 from functools import cached_property
 
@@ -32,6 +33,7 @@ from shopbeam.engine.piecewise import Extreme, Piecewise, find_candidates
 
 # state entries, by integration level: q' (-1), q (0), V (1), M (2), EI*slope (3), EI*u (4)
 _NLEV = 6
+SNAP = 1e-9  # positions closer than this fraction of the length share one break
 _IDX = {"dq": 0, "q": 1, "V": 2, "M": 3, "EIt": 4, "EIu": 5}
 
 
@@ -71,6 +73,7 @@ class Solution:
     slope: Piecewise
     deflection: Piecewise
     condition: float  # condition number of the (equilibrated) linear system
+    exact: bool = False  # the linear system was solved in rational arithmetic
 
     @cached_property
     def diagnostics(self) -> tuple[SelfCheck, ...]:
@@ -286,18 +289,60 @@ def validate_geometry(beam: Beam) -> list[str]:
 
 # ------------------------------------------------------------------ marching
 def _snap(positions: np.ndarray, L: float) -> np.ndarray:
-    """Merge positions closer than 1e-9 L (e.g. "4 ft" and "48 in").
+    """Merge positions closer than SNAP * L (e.g. "4 ft" and "48 in").
 
-    Each cluster of near-equal positions takes the value of its earliest entry (so 0 and L,
+    Sorted positions are cut into clusters no wider than SNAP * L, so no position moves
+    further than that; each cluster takes the value of its earliest entry (so 0 and L,
     given first, stay exact); a lone position is never moved.
     """
     order = np.argsort(positions, kind="stable")
     p = positions[order]
-    starts = np.concatenate([[True], np.diff(p) > 1e-9 * L])
+    tol = SNAP * L
+    starts = np.zeros(p.shape[0], bool)
+    if p.size:
+        starts[0] = True
+        gaps = np.flatnonzero(np.diff(p) > tol) + 1
+        if gaps.size == p.size - 1:  # every gap wide: nothing to merge
+            starts[1:] = True
+        else:
+            lead = p[0]
+            for i in range(1, p.size):  # a cluster is never wider than tol (no chains)
+                if p[i] - lead > tol:
+                    starts[i] = True
+                    lead = p[i]
     first = np.flatnonzero(starts)
     reps = positions[np.minimum.reduceat(order, first)]
     out = np.empty_like(positions)
     out[order] = reps[np.cumsum(starts) - 1]
+    return out
+
+
+def snap_loads(loads, where: dict[float, float]):
+    """The loads with their positions moved onto the merged breaks (`where` maps old to new).
+
+    A distributed load keeps its resultant force: over a merged length its intensities are
+    scaled by old length / new length, and one whose two ends merge becomes a point load of
+    its resultant. So moving a position by at most SNAP * L changes no total force and moves
+    no force further than that: the answer changes by about SNAP relative, far below the
+    4 significant figures shown and the self-checks' 1e-7.
+    """
+    from dataclasses import replace
+
+    out = []
+    for ld in loads:
+        if ld.kind in ("point", "moment"):
+            out.append(replace(ld, at=where[ld.at]))
+            continue
+        a, b = where[ld.start], where[ld.end]
+        w2 = ld.w1 if ld.kind == "uniform" else ld.w2
+        if a == ld.start and b == ld.end:
+            out.append(ld)
+        elif b > a:
+            k = (ld.end - ld.start) / (b - a)
+            out.append(replace(ld, start=a, end=b, w1=ld.w1 * k, w2=w2 * k))
+        else:  # both ends on one break: its resultant, a point load there
+            out.append(replace(ld, kind="point", at=a, value=ld.total_force, start=0.0,
+                               end=0.0, w1=0.0, w2=0.0))
     return out
 
 
@@ -332,70 +377,102 @@ def _piece_coeffs(states: np.ndarray, level: int) -> np.ndarray:
     return states[:-1, k::-1] / _FACT[: k + 1]  # column m is state[k - m] / m!
 
 
-def solve(beam: Beam, length_fmt=None) -> Solution:
+EXACT_BUDGET = 4000  # breaks x (unknowns + 1) up to which the exact fallback runs
+ILL = 1e10  # condition number past which float rounding could reach 2e-6 of the answer
+
+
+def solve(beam: Beam, length_fmt=None, exact: bool | None = None) -> Solution:
     """Solve the beam. Raises UnstableBeam for rigid-body motion or a mechanism.
 
-    `length_fmt` formats positions in messages (default: feet and inches).
+    `length_fmt` formats positions in messages (default: feet and inches). The linear system
+    is solved in floating point; when it is ill-conditioned (supports or hinges very close
+    together for the length, extreme springs) it is solved again in exact rational
+    arithmetic, so rounding never decides the answer. `exact=True` forces that path.
+    Raises InputError when the answer cannot be computed accurately.
     """
     problems = validate_geometry(beam)
     if problems:
         from shopbeam.errors import InputError
 
         raise InputError("; ".join(problems))
+    # numbers are checked for being finite below; numpy's own warnings would only reach the
+    # terminal as noise
+    with np.errstate(all="ignore"):
+        sol = _solve(beam, length_fmt, exact)
+        bad = not all(np.all(np.isfinite(f.coeffs)) for f in
+                      (sol.load, sol.shear, sol.moment, sol.slope, sol.deflection))
+        bad = bad or not all(math.isfinite(r.force) and math.isfinite(r.moment)
+                             for r in sol.reactions)
+    if bad:
+        from shopbeam.errors import InputError
+
+        raise InputError("the answer has numbers too large to be real (an overflow): check the "
+                         "loads, lengths, stiffnesses and their units")
+    return sol
+
+
+def _solve(beam: Beam, length_fmt, exact: bool | None) -> Solution:
     L, ei = beam.length, beam.ei
     unknowns = _unknowns(beam)
     nz = len(unknowns)
-    terms = load_terms(beam.loads)
+    index = {id(u): i for i, u in enumerate(unknowns)}
+    load_pos = [p for ld in beam.loads for p in ld.describe_position()]
+    raw = np.clip(np.array([0.0, L] + [s.at for s in beam.supports] + load_pos, float), 0.0, L)
+    snapped = _snap(raw, L)
+    moved = dict(zip(load_pos, snapped[2 + len(beam.supports):].tolist()))
+    terms = load_terms(snap_loads(beam.loads, moved))
+    sup_at = dict(zip(range(len(beam.supports)), snapped[2:2 + len(beam.supports)].tolist()))
     t_coef = np.array([t[0] for t in terms] + [u.coef for u in unknowns], dtype=float)
-    t_pos = np.array([t[1] for t in terms] + [u.at for u in unknowns], dtype=float)
+    t_pos = np.array([t[1] for t in terms]
+                     + [sup_at[u.support] if u.support >= 0 else u.at for u in unknowns], float)
     t_pow = np.array([t[2] for t in terms] + [u.power for u in unknowns], dtype=int)
     t_col = np.concatenate([np.zeros(len(terms), int), np.arange(1, nz + 1)])
-    allpos = _snap(np.clip(np.concatenate([[0.0, L], t_pos]), 0.0, L), L)
-    breaks, where = np.unique(allpos, return_inverse=True)
+    breaks, where = np.unique(np.concatenate([[0.0, L], t_pos]), return_inverse=True)
     where = where[2:]
     jumps = np.zeros((len(breaks), _NLEV, nz + 1))
     # each term c<x-a>^n jumps state level -n by c (ramps n = 1 jump q' by c)
     np.add.at(jumps, (where, -t_pow + 1, t_col), t_coef)
     states = _march(breaks, jumps)
+    sup_break = {i: int(np.searchsorted(breaks, x)) for i, x in sup_at.items()}
 
-    def at(x: float) -> int:
-        return int(np.argmin(np.abs(breaks - x)))
+    def system(states, one, ratio):
+        """Rows and right-hand side of the conditions, from the states (float or exact)."""
+        rows, rhs = [], []
 
-    # ---- the linear system: one row per condition, in unknown order
-    rows, rhs = [], []
+        def cond(vec):
+            rows.append(vec[1:])
+            rhs.append(-vec[0])
 
-    def cond(vec: np.ndarray):
-        rows.append(vec[1:])
-        rhs.append(-vec[0])
+        end = states[-1]
+        cond(end[_IDX["V"]])  # V(L+) = 0
+        cond(end[_IDX["M"]])  # M(L+) = 0
+        for u in unknowns:
+            if u.kind == "c1" or u.kind == "c2":
+                continue
+            sup = beam.supports[u.support]
+            st = states[sup_break[u.support]]
+            if u.kind == "force":
+                if sup.kind == "spring":
+                    vec = st[_IDX["EIu"]] * ratio(sup.stiffness, ei)
+                    vec[1 + index[id(u)]] += one  # R + k u = 0
+                    cond(vec)
+                else:
+                    cond(st[_IDX["EIu"]])
+            elif u.kind == "moment":
+                cond(st[_IDX["EIt"]])
+            elif u.kind == "hinge":
+                cond(st[_IDX["M"]])
+        return rows, rhs
 
-    end = states[-1]
-    cond(end[_IDX["V"]])  # V(L+) = 0
-    cond(end[_IDX["M"]])  # M(L+) = 0
-    for u in unknowns:
-        if u.kind == "c1" or u.kind == "c2":
-            continue
-        sup = beam.supports[u.support]
-        st = states[at(sup.at)]
-        if u.kind == "force":
-            if sup.kind == "spring":
-                vec = st[_IDX["EIu"]] * (sup.stiffness / ei)
-                vec = vec.copy()
-                vec[1 + unknowns.index(u)] += 1.0  # R + k u = 0
-                cond(vec)
-            else:
-                cond(st[_IDX["EIu"]])
-        elif u.kind == "moment":
-            cond(st[_IDX["EIt"]])
-        elif u.kind == "hinge":
-            cond(st[_IDX["M"]])
+    rows, rhs = system(states, 1.0, lambda k, e: k / e)
     a = np.array(rows)
     b = np.array(rhs)
     # equilibrate rows and columns before solving (units differ: N, N*m, N*m^2, N*m^3)
     rs = np.max(np.abs(a), axis=1)
-    rs[rs == 0] = 1.0
+    rs[~(rs > 0)] = 1.0
     a1 = a / rs[:, None]
     cs = np.max(np.abs(a1), axis=0)
-    cs[cs == 0] = 1.0
+    cs[~(cs > 0)] = 1.0
     a2 = a1 / cs[None, :]
     try:
         y = np.linalg.solve(a2, b / rs)
@@ -408,28 +485,96 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
         why = stability_problem(beam, length_fmt)
         if why:
             raise UnstableBeam(why)
-        if y is None:
+    budget = len(breaks) * (nz + 1) <= EXACT_BUDGET
+    if exact or (exact is None and not condition <= ILL):
+        if not budget:
+            _too_close(beam, L, length_fmt, "")
+        final, z = _exact_answer(breaks, where, t_pow, t_col, t_coef, nz, system)
+        if final is None:
             raise UnstableBeam("the supports and hinges leave the beam free to move: "
                                "add a support or fix one end")
-        # the kinematic check passed, so the beam holds; its supports and hinges are only
-        # too close together for its length to solve in double precision
-        from shopbeam.errors import InputError
-
-        fmt = length_fmt or _fmt_len
-        xs = sorted(s.at for s in beam.supports)
-        gaps = [(b - a, a, b) for a, b in zip(xs, xs[1:]) if b > a]
-        near = ""
-        if gaps:
-            g, a, b = min(gaps)
-            near = (f" (the closest are at {fmt(a)} and {fmt(b)}, "
-                    f"{g / L:.1e} of the length apart)")
-        raise InputError("the equations cannot be solved accurately: supports or hinges are "
-                         f"far too close together for a beam this long{near}, or the beam is "
-                         "on the edge of being a mechanism. Merge supports that close, or "
-                         "check the supports and hinges")
+        return _finish(beam, breaks, final, z, unknowns, condition, True)
     z = y / cs
     w = np.concatenate([[1.0], z])
     final = states @ w  # (P + 1, 6)
+    return _finish(beam, breaks, final, z, unknowns, condition, False)
+
+
+def _too_close(beam: Beam, L: float, length_fmt, extra: str):
+    from shopbeam.errors import InputError
+
+    fmt = length_fmt or _fmt_len
+    xs = sorted(s.at for s in beam.supports)
+    gaps = [(b - a, a, b) for a, b in zip(xs, xs[1:]) if b > a]
+    near = ""
+    if gaps:
+        g, a, b = min(gaps)
+        near = (f" (the closest are at {fmt(a)} and {fmt(b)}, "
+                f"{g / L:.1e} of the length apart)")
+    raise InputError("the equations cannot be solved accurately: supports or hinges are "
+                     f"far too close together for a beam this long{near}, or the beam is "
+                     "on the edge of being a mechanism, and the job is too large to solve in "
+                     f"exact arithmetic{extra}. Merge supports that close, move them apart, "
+                     "or check the supports and hinges")
+
+
+def _exact_answer(breaks, where, t_pow, t_col, t_coef, nz, system):
+    """The march and the linear system in exact rational arithmetic (Python fractions) on
+    exactly the floats the float path sees: (final states as floats, unknowns) or
+    (None, None) when the system is singular."""
+    zero = Fraction(0)
+    jumps = np.full((len(breaks), _NLEV, nz + 1), zero, dtype=object)
+    for w_, lev, col, c in zip(where.tolist(), (-t_pow + 1).tolist(), t_col.tolist(),
+                               t_coef.tolist()):
+        jumps[w_, lev, col] += Fraction(c)
+    fb = [Fraction(x) for x in breaks.tolist()]
+    states = np.empty_like(jumps)
+    s = jumps[0].copy()
+    states[0] = s
+    for j in range(len(fb) - 1):
+        h = fb[j + 1] - fb[j]
+        hp = [Fraction(1)]
+        for m in range(1, _NLEV):
+            hp.append(hp[-1] * h / m)
+        new = np.empty_like(s)
+        for k in range(_NLEV):  # level k gets sum_m state[k - m] h^m / m!
+            acc = s[k].copy()
+            for m in range(1, k + 1):
+                if any(v for v in s[k - m]):
+                    acc = acc + s[k - m] * hp[m]
+            new[k] = acc
+        s = new + jumps[j + 1]
+        states[j + 1] = s
+    rows, rhs = system(states, Fraction(1), lambda k, e: Fraction(k) / Fraction(e))
+    z = _gauss_exact([list(r) for r in rows], list(rhs))
+    if z is None:
+        return None, None
+    w = np.array([Fraction(1)] + z, dtype=object)
+    final = np.array((states @ w).tolist(), dtype=float)
+    return final, np.array([float(v) for v in z])
+
+
+def _gauss_exact(a: list[list[Fraction]], b: list[Fraction]) -> list[Fraction] | None:
+    n = len(b)
+    m = [row + [b[i]] for i, row in enumerate(a)]
+    for c in range(n):
+        p = next((i for i in range(c, n) if m[i][c] != 0), None)
+        if p is None:
+            return None
+        m[c], m[p] = m[p], m[c]
+        piv = m[c][c]
+        for i in range(c + 1, n):
+            if m[i][c] != 0:
+                f = m[i][c] / piv
+                m[i] = [x - f * y for x, y in zip(m[i], m[c])]
+    z = [Fraction(0)] * n
+    for i in range(n - 1, -1, -1):
+        z[i] = (m[i][n] - sum(m[i][j] * z[j] for j in range(i + 1, n))) / m[i][i]
+    return z
+
+
+def _finish(beam, breaks, final, z, unknowns, condition, exact) -> Solution:
+    ei = beam.ei
 
     def pw(level: int, scale: float = 1.0) -> Piecewise:
         return Piecewise(breaks, _piece_coeffs(final, level) * scale)
@@ -460,6 +605,7 @@ def solve(beam: Beam, length_fmt=None) -> Solution:
         ei_deflection_0=c2,
         load=pw(0),
         condition=condition,
+        exact=exact,
         **funcs,
     )
 

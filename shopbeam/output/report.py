@@ -131,7 +131,7 @@ def render(result: Result) -> str:
     lines.append("SELF-CHECKS (run on every solve)")
     for d in sol.diagnostics:
         lines += _wrap(f"[{'pass' if d.ok else 'WARN'}] {d.name}: {d.detail}", "  ")[:2]
-    if sol.condition > 1e10:
+    if sol.condition > 1e10 and not getattr(sol, "exact", False):
         lines.append(f"  [WARN] the equations are ill-conditioned (condition {sol.condition:.2g}): "
                      "check supports very close together or extreme spring stiffnesses")
     warns = [p for p in job.warnings if p.warning]
