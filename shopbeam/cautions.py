@@ -22,8 +22,14 @@ SHORT = "Screening check only - licensed engineer review required; local codes g
 SHORT_LIFTING = "LIFTING DEVICE - not for service without engineer design and load test."
 
 
+def normal_tag(tag) -> str:
+    """A tag as compared everywhere: ``"Lifting "`` and ``"lifting"`` are the same tag."""
+    return str(tag).strip().lower()
+
+
 def is_lifting(tags) -> bool:
-    return any(str(t).strip().lower() == "lifting" for t in (tags or ()))
+    """The one rule for a lifting device (the reader's `Job.lifting` uses it too)."""
+    return any(normal_tag(t) == "lifting" for t in (tags or ()))
 
 
 def cautions_for(tags) -> list[str]:

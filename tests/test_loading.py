@@ -6,9 +6,9 @@ import numpy as np
 import pytest
 
 from shopbeam.design.capacity import capacity
-from shopbeam.errors import InputError
+from shopbeam.errors import InputErrors
 from shopbeam.jobs.jobfile import parse_job_text
-from shopbeam.design.loading import (candidate_positions, envelope_bruteforce, evaluate, read_moving,
+from shopbeam.design.loading import (candidate_positions, envelope_bruteforce, evaluate,
                               state_set)
 from shopbeam.engine.solver import solve
 
@@ -206,7 +206,8 @@ def test_moving_table_errors_name_the_key(bad, key):
         text = text.replace('spacing = ["18 in"]', bad)
     else:
         text = text.replace('spacing = ["18 in"]', 'spacing = ["18 in"]\n' + bad)
-    job = parse_job_text(text)
-    with pytest.raises(InputError) as e:
-        read_moving(job)
-    assert e.value.problem.key == key
+    # the reader finds it with the rest of the file (line included), not the analysis later
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    assert [p.key for p in e.value.problems if not p.warning] == [key]
+    assert e.value.problems[0].line is not None

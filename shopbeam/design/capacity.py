@@ -190,11 +190,7 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
         out.append(("max load", f"{k:.3f} x the entered live loads"))
         tot = sum(abs(ld.total_force) for ld in live)
         if mv:
-            from shopbeam.units import parse
-
-            wheels = [parse(x, "force") for x in (job.data["moving"][0]["loads"]
-                                                   if isinstance(job.data["moving"][0]["loads"], list)
-                                                   else [job.data["moving"][0]["loads"]])]
+            wheels = job.moving[0].live
             out.append(("moving", _floor_fmt(sum(abs(w) for w in wheels) * k, "force", sy)
                         + f" ({mv[0].label})"))
         if tot:

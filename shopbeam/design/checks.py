@@ -33,6 +33,8 @@ import math
 from dataclasses import dataclass, field
 
 from shopbeam.engine.solver import Solution, segments
+from shopbeam.jobs.rules import (DEFAULT_IMPACT, DEFLECTION_PRESETS,  # noqa: F401 (re-exported)
+                                 LIFTING_DEFAULT_RATIO, Basis)
 from shopbeam.units import fmt
 
 OMEGA_B = 1.67  # AISC 360-16 F1
@@ -41,19 +43,6 @@ OMEGA_V_ROLLED_I = 1.50  # AISC 360-16 G2.1(a)
 OMEGA_ADM = 1.65  # Aluminum Design Manual 2015, yielding (from memory)
 CB_MAX = 3.0  # AISC 360-16 F1: Cb need not exceed 3.0 (upper bound used here)
 
-# name -> (n in L/n, where the figure comes from)
-DEFLECTION_PRESETS: dict[str, tuple[float, str]] = {
-    "rack": (180.0, "pallet-rack beams L/180 (ANSI MH16.1, from memory)"),
-    "shelf": (180.0, "storage shelves L/180 (as rack beams; common practice)"),
-    "floor": (360.0, "floor members L/360 (IBC Table 1604.3, live load, from memory; "
-              "checked here under the total load, which is stricter)"),
-    "roof": (240.0, "roof members L/240 (IBC Table 1604.3, from memory)"),
-    "hoist": (450.0, "hoist beams and monorails L/450 (common practice)"),
-    "monorail": (450.0, "hoist beams and monorails L/450 (common practice)"),
-    "jib": (225.0, "jib booms L/225 on twice the reach (common practice)"),
-}
-LIFTING_DEFAULT_RATIO = 450.0  # tighter default for jobs tagged lifting (common practice)
-DEFAULT_IMPACT = 0.15  # slow powered hoists (common practice)
 
 
 @dataclass(frozen=True)
@@ -116,20 +105,16 @@ class Unchecked:
 
 
 # ------------------------------------------------------------------ job options
-def _criteria_extra(job) -> dict:
-    return dict(getattr(job.criteria, "extra", {}) or {})
-
-
 def basis_of(job) -> str:
     """"asd", "first-yield", "aluminum" or "lumber" (the material decides the last two)."""
     kind = getattr(job.material, "kind", "custom")
     if kind == "lumber":
         return "lumber"
-    asked = str(_criteria_extra(job).get("basis", "")).strip().lower()
+    asked = job.criteria.basis
     if kind == "aluminum":
-        return "first-yield" if asked == "first-yield" else "aluminum"
-    if asked in ("asd", "first-yield"):
-        return asked
+        return "first-yield" if asked == Basis.FIRST_YIELD else "aluminum"
+    if asked != Basis.AUTO:
+        return asked.value
     return "asd" if kind in ("steel", "stainless") else "first-yield"
 
 
@@ -142,41 +127,19 @@ BASIS_WORDS = {
 
 
 def impact_of(job) -> float:
-    """Impact allowance on live loads: default 15 % for jobs tagged lifting, else 0."""
-    raw = _criteria_extra(job).get("impact")
-    if raw is None:
+    """Impact allowance on live loads: as written, else 15 % for lifting jobs, else 0."""
+    if job.criteria.impact is None:
         return DEFAULT_IMPACT if job.lifting else 0.0
-    return parse_fraction(raw, "criteria.impact")
-
-
-def parse_fraction(raw, key: str) -> float:
-    from shopbeam.errors import InputError
-
-    if isinstance(raw, bool):
-        raise InputError("expected a fraction such as 0.15 or \"15%\"", key)
-    if isinstance(raw, (int, float)):
-        v = float(raw)
-    elif isinstance(raw, str) and raw.strip().endswith("%"):
-        try:
-            v = float(raw.strip()[:-1]) / 100
-        except ValueError:
-            raise InputError(f"cannot read {raw!r} as a percentage (write \"15%\")", key) from None
-    else:
-        raise InputError(f"cannot read {raw!r}: write a fraction such as 0.15 or \"15%\"", key)
-    if not (0 <= v <= 2):
-        raise InputError(f"{raw!r} is outside 0 to 200 %", key)
-    return v
+    return job.criteria.impact
 
 
 def deflection_rule(job) -> tuple[float | None, float | None, str]:
     """(n of L/n or None, absolute limit or None, words) for this job."""
     c = job.criteria
-    written = (job.data.get("criteria", {}) or {}).get("deflection") if job.data else None
-    preset = str(written).strip().lower() if isinstance(written, str) else ""
-    if preset in DEFLECTION_PRESETS:
-        n, why = DEFLECTION_PRESETS[preset]
+    if c.deflection_preset:
+        n, why = DEFLECTION_PRESETS[c.deflection_preset]
         return n, None, f"L/{n:g}: {why}"
-    if written is None and job.lifting:
+    if not c.deflection_given and job.lifting:
         return LIFTING_DEFAULT_RATIO, None, (f"L/{LIFTING_DEFAULT_RATIO:g}: default for lifting "
                                               "devices (common practice)")
     if c.deflection_abs is not None:
@@ -186,25 +149,7 @@ def deflection_rule(job) -> tuple[float | None, float | None, str]:
 
 def brace_points(job) -> tuple[bool, list[float]]:
     """(continuously braced?, lateral brace positions) from beam.braced / beam.braces."""
-    from shopbeam import units
-    from shopbeam.errors import InputError
-
-    beam = (job.data.get("beam", {}) or {}) if job.data else {}
-    braced = beam.get("braced", False)
-    if not isinstance(braced, bool):
-        raise InputError("braced must be true or false (compression flange braced all along)",
-                         "beam.braced")
-    raw = beam.get("braces", [])
-    if not isinstance(raw, list):
-        raise InputError("braces must be a list of positions, e.g. braces = [\"4 ft\", \"8 ft\"]",
-                         "beam.braces")
-    pts = []
-    for i, r in enumerate(raw):
-        x = units.parse(r, "length", f"beam.braces[{i}]", nonnegative=True)
-        if x > job.length * (1 + 1e-9):
-            raise InputError("brace point beyond the end of the beam", f"beam.braces[{i}]")
-        pts.append(min(x, job.length))
-    return braced, sorted(pts)
+    return job.braced, list(job.braces)
 
 
 def unbraced_segments(job, beam) -> list[tuple[float, float, bool]]:

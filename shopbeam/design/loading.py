@@ -51,73 +51,11 @@ class MovingLoad:
 
 
 def read_moving(job) -> tuple[MovingLoad, ...]:
-    """The job's ``[[moving]]`` tables (at most one wheel set)."""
-    from shopbeam import units
-    from shopbeam.errors import InputError
-
-    raw = (job.data or {}).get("moving", [])
-    if raw in (None, []):
-        return ()
-    if not isinstance(raw, list) or not all(isinstance(r, dict) for r in raw):
-        raise InputError("moving loads are [[moving]] tables", "moving")
-    if len(raw) > 1:
-        raise InputError("only one [[moving]] wheel set per job: put all wheels that travel "
-                         "together in one table (loads = [...], spacing = [...])", "moving[1]")
-    t = raw[0]
-    key = "moving[0]"
-    allowed = {"label", "loads", "dead", "spacing", "travel", "case"}
-    for k in t:
-        if k not in allowed:
-            raise InputError(f"unknown key {k!r} in [[moving]]; keys are "
-                             f"{', '.join(sorted(allowed))}", f"{key}.{k}")
-    if t.get("case", "live") != "live":
-        raise InputError("a moving load is live; give its dead part (hoist and trolley "
-                         "weight) as dead = [...]", f"{key}.case")
-
-    def forces(name, required):
-        v = t.get(name)
-        if v is None:
-            if required:
-                raise InputError("a moving load needs loads = [\"-1000 lbf\", ...] (one force "
-                                 "per wheel, + up)", f"{key}.{name}")
-            return None
-        if isinstance(v, str):
-            v = [v]
-        if not isinstance(v, list) or not v:
-            raise InputError(f"{name} must be a list of forces", f"{key}.{name}")
-        return tuple(units.parse(x, "force", f"{key}.{name}[{i}]") for i, x in enumerate(v))
-
+    """The job's wheel sets as one member carries them (its share of the wheel loads)."""
     share = 1.0 / job.members
-    live = forces("loads", True)
-    dead = forces("dead", False) or tuple(0.0 for _ in live)
-    if len(dead) != len(live):
-        raise InputError(f"dead has {len(dead)} values for {len(live)} wheels", f"{key}.dead")
-    sp = t.get("spacing", [])
-    if isinstance(sp, str):
-        sp = [sp]
-    if not isinstance(sp, list) or len(sp) != len(live) - 1:
-        raise InputError(f"spacing needs {len(live) - 1} value(s) (one between each pair of "
-                         "wheels)", f"{key}.spacing")
-    gaps = [units.parse(x, "length", f"{key}.spacing[{i}]", positive=True)
-            for i, x in enumerate(sp)]
-    offsets = tuple(np.concatenate([[0.0], np.cumsum(gaps)]).tolist())
-    tr = t.get("travel", None)
-    if tr is None:
-        travel = (0.0, job.length)
-    else:
-        if not (isinstance(tr, list) and len(tr) == 2):
-            raise InputError("travel = [\"start\", \"end\"] (where the wheels may run)",
-                             f"{key}.travel")
-        travel = tuple(units.parse(x, "length", f"{key}.travel[{i}]", nonnegative=True)
-                       for i, x in enumerate(tr))
-        if travel[1] > job.length * (1 + 1e-9) or travel[1] <= travel[0]:
-            raise InputError("travel must run forward within the beam", f"{key}.travel")
-        travel = (travel[0], min(travel[1], job.length))
-    if travel[1] - travel[0] < offsets[-1] - 1e-12:
-        raise InputError("the wheel set is longer than its travel", f"{key}.travel")
-    label = t.get("label", "moving load")
-    return (MovingLoad(str(label), tuple(x * share for x in live),
-                       tuple(x * share for x in dead), offsets, travel, key),)
+    return tuple(MovingLoad(w.label, tuple(x * share for x in w.live),
+                            tuple(x * share for x in w.dead), w.offsets, w.travel, w.key)
+                 for w in job.moving)
 
 
 # ------------------------------------------------------------------ load parts

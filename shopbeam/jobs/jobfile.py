@@ -1,5 +1,9 @@
 """Job files (TOML, schema 1) in, validated `Job` records out.
 
+The reader is the only code that sees the raw TOML: it turns the file into a complete,
+frozen, typed `Job` (bracing, basis, impact, wheel sets, the deflection rule and lifting are
+real fields) and the design and output layers read those fields alone.
+
 Validation reports every problem in one pass, each with the file, the key path
 (``loads[2].at``, counted from 0 like the file's own order, with the ordinal in words) and the
 line where the text gives one. Unknown keys are warnings that name the nearest known key, so a
@@ -14,18 +18,25 @@ import math
 import re
 import tomllib
 from dataclasses import dataclass, field, replace
+from enum import StrEnum
 from pathlib import Path
 
 from shopbeam import units
+from shopbeam.cautions import is_lifting, normal_tag
+from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
 from shopbeam.errors import InputError, InputErrors, Problem
-from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.jobs.rules import (DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
+                                 LIFTING_DEFAULT_RATIO, Basis)
+from shopbeam.members.materials import resolve_material
+from shopbeam.members.sections import resolve_section
 
 SCHEMA = 1
 MAX_FILE_BYTES = 1_000_000
 MAX_LOADS = 1000
 MAX_SUPPORTS = 200
 
-# Known keys per table. Other modules may add their own keys here at import time.
+# Known keys per table (a key missing here is warned about as unknown). A new key is added
+# here, as a field of the table's record below, and read in the table's reader function.
 KNOWN_KEYS: dict[str, set[str]] = {
     "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
          "moving", "project"},
@@ -35,6 +46,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned", "uplift"},
     "criteria": {"deflection", "safety_factor", "basis", "impact"},
+    "moving": {"label", "loads", "dead", "spacing", "travel", "case"},
     "project": set(),  # filled from PROJECT_KEYS below
 }
 
@@ -46,13 +58,28 @@ KNOWN_KEYS["project"] = set(PROJECT_KEYS)
 
 @dataclass(frozen=True)
 class Criteria:
-    """What the member is checked against."""
+    """What the member is checked against ([criteria])."""
 
-    deflection: str = "L/240"  # as written
-    deflection_ratio: float | None = 240.0  # n in L/n
+    deflection: str = "L/240"  # as written ("L/240" when not written)
+    deflection_ratio: float | None = DEFAULT_DEFLECTION_RATIO  # n in L/n (lifting default 450)
     deflection_abs: float | None = None  # m
     safety_factor: float = 1.67
-    extra: dict = field(default_factory=dict)  # further criteria keys, as written
+    basis: Basis = Basis.AUTO
+    impact: float | None = None  # fraction as written; None: the default (15 % when lifting)
+    deflection_preset: str = ""  # the preset named ("rack", "hoist", ...), lower case
+    deflection_given: bool = False  # the file gives a deflection limit
+
+
+@dataclass(frozen=True)
+class WheelSet:
+    """One ``[[moving]]`` wheel set, per job (not yet shared between members), SI, + up."""
+
+    label: str
+    live: tuple[float, ...]  # N per wheel (loads = [...])
+    dead: tuple[float, ...]  # N per wheel (dead = [...]; zeros when not given)
+    offsets: tuple[float, ...]  # m from the first wheel (from spacing = [...])
+    travel: tuple[float, float]  # m, the range the whole set stays within
+    key: str = "moving[0]"
 
 
 @dataclass(frozen=True)
@@ -72,15 +99,17 @@ class Job:
     self_weight: bool = True
     members: int = 1
     welded: bool = False
+    braced: bool = False  # compression flange braced all along (beam.braced)
+    braces: tuple[float, ...] = ()  # lateral brace positions, m, sorted (beam.braces)
+    moving: tuple[WheelSet, ...] = ()  # at most one wheel set
     path: str = ""
-    data: dict = field(default_factory=dict, repr=False)
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
     project: dict = field(default_factory=dict)  # [project] title-block fields, as text
 
     @property
     def lifting(self) -> bool:
-        return any(t.lower() == "lifting" for t in self.tags)
+        return is_lifting(self.tags)
 
     @property
     def ei(self) -> float:
@@ -197,6 +226,61 @@ class _Reader:
             self.take(e, key)
             return None
 
+    # Typed readers: each returns the value (or `default` / None after recording a problem).
+    def boolean(self, table: dict, name: str, key: str, default: bool, message: str = "") -> bool:
+        v = table.get(name, default)
+        if isinstance(v, bool):
+            return v
+        self.error(message or f"{name} must be true or false", key)
+        return default
+
+    def choice(self, table: dict, name: str, key: str, allowed: type[StrEnum], default):
+        """A value of a closed set (case and surrounding spaces ignored)."""
+        if name not in table:
+            return default
+        v = table[name]
+        try:
+            return allowed(str(v).strip().lower()) if isinstance(v, str) else allowed(None)
+        except ValueError:
+            self.error(f"{name} {v!r} is not one of the allowed values: "
+                       + ", ".join(f'"{a.value}"' for a in allowed), key)
+            return default
+
+    def fraction(self, table: dict, name: str, key: str, lo: float = 0.0, hi: float = 2.0):
+        """A fraction written 0.15 or "15%" (None when not written or not readable)."""
+        if name not in table:
+            return None
+        raw = table[name]
+        v = None
+        if isinstance(raw, (int, float)) and not isinstance(raw, bool):
+            v = float(raw)
+        elif isinstance(raw, str) and raw.strip().endswith("%"):
+            try:
+                v = float(raw.strip()[:-1]) / 100
+            except ValueError:
+                self.error(f"cannot read {raw!r} as a percentage (write \"15%\")", key)
+                return None
+        if v is None:
+            self.error(f"cannot read {raw!r}: write a fraction such as 0.15 or \"15%\"", key)
+            return None
+        if not (lo <= v <= hi):
+            self.error(f"{raw!r} is outside {lo:.0%} to {hi:.0%}", key)
+            return None
+        return v
+
+    def quantities(self, table: dict, name: str, kind: str, key: str, empty_ok: bool = False,
+                   **kw) -> tuple[float, ...] | None:
+        """A list of values with units (one bare string is a list of one)."""
+        v = table.get(name, [])
+        if isinstance(v, str):
+            v = [v]
+        if not isinstance(v, list) or (not v and not empty_ok):
+            self.error(f"{name} must be a list of {units.KINDS[kind][1]}s, e.g. "
+                       f"[{units.KINDS[kind][2].split(' or ')[0]}]", key)
+            return None
+        out = [self.parse({name: x}, name, kind, f"{key}[{i}]", **kw) for i, x in enumerate(v)]
+        return None if any(x is None for x in out) else tuple(out)
+
     def unknown_keys(self, table: dict, known: set[str], prefix: str, label: str):
         for k in table:
             if k in known:
@@ -215,41 +299,151 @@ def _is_table(v) -> bool:
     return isinstance(v, dict)
 
 
-def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | None]:
+def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
+    """[criteria]: the deflection rule (presets resolved), safety factor, basis, impact."""
+    if not _is_table(crit):
+        r.error("criteria must be a table ([criteria])", "criteria")
+        crit = {}
+    r.unknown_keys(crit, KNOWN_KEYS["criteria"], "criteria", "[criteria]")
+    text, ratio, absolute, preset = "L/240", DEFAULT_DEFLECTION_RATIO, None, ""
+    given = "deflection" in crit
+    if given:
+        text, ratio, absolute, preset = _deflection_criterion(crit["deflection"], r)
+    elif lifting:
+        ratio = LIFTING_DEFAULT_RATIO
+    sf = crit.get("safety_factor", 1.67)
+    if isinstance(sf, bool) or not isinstance(sf, (int, float)) or not math.isfinite(sf) or sf <= 0:
+        r.error(f"safety_factor must be a positive number such as 1.67, found {sf!r}",
+                "criteria.safety_factor")
+        sf = 1.67
+    elif sf < 1:
+        r.warn(f"safety_factor {sf} is below 1: the check allows more than yield", "criteria.safety_factor")
+    basis = r.choice(crit, "basis", "criteria.basis", Basis, Basis.AUTO)
+    if "safety_factor" in crit and sf != 1.67:
+        _unused_safety_factor(r, sf, material, basis)
+    impact = r.fraction(crit, "impact", "criteria.impact")
+    return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given)
+
+
+def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | None, str]:
+    """(as written, n of L/n, absolute limit, preset name)."""
     key = "criteria.deflection"
     if not isinstance(text, str):
         r.error(f"expected a limit like \"L/240\" or \"0.25 in\", found {text!r}", key)
-        return "L/240", 240.0, None
-    from shopbeam.design.checks import DEFLECTION_PRESETS
-
-    if text.strip().lower() in DEFLECTION_PRESETS:  # named presets such as "rack", "hoist"
-        n = DEFLECTION_PRESETS[text.strip().lower()][0]
-        return text, n, None
+        return "L/240", DEFAULT_DEFLECTION_RATIO, None, ""
+    name = text.strip().lower()
+    if name in DEFLECTION_PRESETS:  # named presets such as "rack", "hoist"
+        return text, DEFLECTION_PRESETS[name][0], None, name
     m = re.fullmatch(r"\s*[Ll]\s*/\s*(\d+(?:\.\d+)?)\s*", text)
     if m:
         n = float(m.group(1))
         if n <= 0:
             r.error(f"{text!r}: n in L/n must be positive", key)
-            return text, None, None
-        return text, n, None
+            return text, None, None, ""
+        return text, n, None, ""
     try:
-        return text, None, units.parse(text, "length", key, positive=True)
+        return text, None, units.parse(text, "length", key, positive=True), ""
     except InputError:
-        r.error(f"cannot read {text!r} as a deflection limit: write \"L/240\" (span over 240) "
-                "or an absolute limit such as \"0.25 in\"", key)
-        return text, None, None
+        r.error(f"cannot read {text!r} as a deflection limit: write \"L/240\" (span over 240), "
+                "an absolute limit such as \"0.25 in\", or a preset ("
+                + ", ".join(DEFLECTION_PRESETS) + ")", key)
+        return text, None, None, ""
+
+
+def _read_bracing(r: _Reader, beam: dict, length) -> tuple[bool, tuple[float, ...]]:
+    """beam.braced and beam.braces (lateral brace points, sorted)."""
+    braced = r.boolean(beam, "braced", "beam.braced", False,
+                       "braced must be true or false (compression flange braced all along)")
+    raw = beam.get("braces", [])
+    if not isinstance(raw, list):
+        r.error("braces must be a list of positions, e.g. braces = [\"4 ft\", \"8 ft\"]",
+                "beam.braces")
+        return braced, ()
+    pts = []
+    for i in range(len(raw)):
+        x = _position(r, {"at": raw[i]}, "at", "", length, path=f"beam.braces[{i}]")
+        if x is not None:
+            pts.append(x)
+    return braced, tuple(sorted(pts))
+
+
+def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
+    """[[moving]]: at most one wheel set at fixed spacing over a travel range."""
+    if raw in (None, []):
+        return ()
+    if not isinstance(raw, list) or not all(_is_table(t) for t in raw):
+        r.error("moving loads are [[moving]] tables", "moving")
+        return ()
+    if len(raw) > 1:
+        r.error("only one [[moving]] wheel set per job: put all wheels that travel together in "
+                "one table (loads = [...], spacing = [...])", "moving[1]")
+        return ()
+    t, key = raw[0], "moving[0]"
+    allowed = KNOWN_KEYS["moving"]
+    for k in t:
+        if k not in allowed:  # an error, not a warning: a misspelt dead part would be lost
+            near = difflib.get_close_matches(k, sorted(allowed), n=1, cutoff=0.6)
+            hint = f" (did you mean {near[0]!r}?)" if near else ""
+            r.error(f"unknown key {k!r} in [[moving]]{hint}; keys are "
+                    f"{', '.join(sorted(allowed))}", f"{key}.{k}")
+    if t.get("case", "live") != "live":
+        r.error("a moving load is live; give its dead part (hoist and trolley weight) as "
+                "dead = [...]", f"{key}.case")
+    label = t.get("label", "moving load")
+    if not isinstance(label, str):
+        r.error("label must be text in quotes", f"{key}.label")
+        label = "moving load"
+    if "loads" not in t:
+        r.error("a moving load needs loads = [\"-1000 lbf\", ...] (one force per wheel, + up)",
+                f"{key}.loads")
+        return ()
+    live = r.quantities(t, "loads", "force", f"{key}.loads")
+    dead = r.quantities(t, "dead", "force", f"{key}.dead") if "dead" in t else ()
+    gaps = r.quantities(t, "spacing", "length", f"{key}.spacing", empty_ok=True, positive=True)
+    if live is None or dead is None or gaps is None or length is None:
+        return ()
+    if dead and len(dead) != len(live):
+        r.error(f"dead has {len(dead)} values for {len(live)} wheels", f"{key}.dead")
+        return ()
+    if gaps is not None and len(gaps) != len(live) - 1:
+        r.error(f"spacing needs {len(live) - 1} value(s) (one between each pair of wheels)",
+                f"{key}.spacing")
+        return ()
+    offsets = [0.0]
+    for g in gaps:
+        offsets.append(offsets[-1] + g)
+    tr = t.get("travel")
+    if tr is None:
+        travel = (0.0, length)
+    else:
+        if not (isinstance(tr, list) and len(tr) == 2):
+            r.error("travel = [\"start\", \"end\"] (where the wheels may run)", f"{key}.travel")
+            return ()
+        ends = r.quantities(t, "travel", "length", f"{key}.travel", nonnegative=True)
+        if ends is None:
+            return ()
+        if ends[1] > length * (1 + 1e-9) or ends[1] <= ends[0]:
+            r.error("travel must run forward within the beam", f"{key}.travel")
+            return ()
+        travel = (ends[0], min(ends[1], length))
+    if travel[1] - travel[0] < offsets[-1] - 1e-12:
+        r.error("the wheel set is longer than its travel", f"{key}.travel")
+        return ()
+    return (WheelSet(label, live, dead or tuple(0.0 for _ in live), tuple(offsets), travel,
+                     key),)
 
 
 def _position(r: _Reader, table: dict, name: str, key: str, length: float | None,
-              default: float | None = None) -> float | None:
+              default: float | None = None, *, path: str | None = None) -> float | None:
     if name not in table and default is not None:
         return default
-    x = r.parse(table, name, "length", f"{key}.{name}", nonnegative=True)
+    path = path if path is not None else f"{key}.{name}"
+    x = r.parse(table, name, "length", path, nonnegative=True)
     if x is None:
         return None
     if length is not None and x > length * (1 + 1e-9):
         r.error(f"{units.fmt(x, 'length')} is beyond the end of the beam "
-                f"({units.fmt(length, 'length')}): positions run from 0 at the left end", f"{key}.{name}")
+                f"({units.fmt(length, 'length')}): positions run from 0 at the left end", path)
         return None
     return min(x, length) if length is not None else x
 
@@ -261,7 +455,7 @@ def _read_support(r: _Reader, i: int, s, length) -> Support | None:
         return None
     r.unknown_keys(s, KNOWN_KEYS["supports"], key, f"the {_ordinal(i)} support")
     kind = s.get("type")
-    kinds = ("fixed", "pin", "roller", "spring", "hinge")
+    kinds = SUPPORT_KINDS
     if kind not in kinds:
         near = difflib.get_close_matches(str(kind), kinds, n=1)
         hint = f" (did you mean {near[0]!r}?)" if near else ""
@@ -317,7 +511,7 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         return None
     r.unknown_keys(ld, KNOWN_KEYS["loads"], key, where)
     kind = ld.get("type")
-    kinds = ("point", "moment", "uniform", "linear")
+    kinds = LOAD_KINDS
     if kind not in kinds:
         near = difflib.get_close_matches(str(kind), kinds + ("couple", "distributed"), n=1)
         hint = f" (did you mean {near[0]!r}?)" if near else ""
@@ -410,11 +604,7 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
 def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
     try:
         if kind == "section":
-            from shopbeam.members.sections import resolve_section
-
             return resolve_section(spec, key, **kw)
-        from shopbeam.members.materials import resolve_material
-
         return resolve_material(spec, key)
     except InputError as e:
         r.take(e, key)
@@ -488,8 +678,7 @@ def _family_mismatch(r: _Reader, section, material) -> None:
 
 def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
     kind = getattr(material, "kind", "custom")
-    asked = str(basis or "").strip().lower()
-    if kind == "custom" or (asked == "first-yield" and kind != "lumber"):
+    if kind == "custom" or (basis == Basis.FIRST_YIELD and kind != "lumber"):
         return
     uses = {"steel": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
             "stainless": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
@@ -556,12 +745,14 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if not (isinstance(tags, list) and all(isinstance(t, str) for t in tags)):
         r.error("tags must be a list of words, e.g. tags = [\"rack\", \"shelf\"]", "tags")
         tags = []
+    tags = tuple(dict.fromkeys(normal_tag(t) for t in tags if t.strip()))
 
     project = _read_project(r, data.get("project"))
 
     beam = data.get("beam")
     length = section = material = None
     self_weight, members, welded = True, 1, False
+    braced, braces = False, ()
     if not _is_table(beam):
         r.error("missing the [beam] table (length, section, material)", "beam")
         beam = {}
@@ -604,6 +795,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             r.error("welded must be true or false (welded near the point of largest moment)",
                     "beam.welded")
             welded = False
+        braced, braces = _read_bracing(r, beam, length)
 
     sups = data.get("supports", [])
     supports: list[Support] = []
@@ -653,26 +845,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     r.error("a couple exactly at a hinge is ambiguous; apply it a little to one "
                             "side", f"{ld.key}.at")
 
-    crit = data.get("criteria", {})
-    criteria = Criteria()
-    if not _is_table(crit):
-        r.error("criteria must be a table ([criteria])", "criteria")
-    else:
-        r.unknown_keys(crit, KNOWN_KEYS["criteria"], "criteria", "[criteria]")
-        text, ratio, absolute = ("L/240", 240.0, None)
-        if "deflection" in crit:
-            text, ratio, absolute = _deflection_criterion(crit["deflection"], r)
-        sf = crit.get("safety_factor", 1.67)
-        if isinstance(sf, bool) or not isinstance(sf, (int, float)) or not math.isfinite(sf) or sf <= 0:
-            r.error(f"safety_factor must be a positive number such as 1.67, found {sf!r}",
-                    "criteria.safety_factor")
-            sf = 1.67
-        elif sf < 1:
-            r.warn(f"safety_factor {sf} is below 1: the check allows more than yield", "criteria.safety_factor")
-        if "safety_factor" in crit and sf != 1.67:
-            _unused_safety_factor(r, sf, material, crit.get("basis"))
-        extra = {k: v for k, v in crit.items() if k not in ("deflection", "safety_factor")}
-        criteria = Criteria(text, ratio, absolute, float(sf), extra)
+    criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
+    moving = _read_moving(r, data.get("moving"), length)
 
     if r.errors:
         raise InputErrors(sorted(r.problems, key=lambda p: (p.warning, p.line or 0)))
@@ -685,8 +859,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     return Job(
         title=title.strip(), length=length, section=section, material=material,
         supports=tuple(sorted(supports, key=lambda s: s.at)), loads=tuple(loads),
-        criteria=criteria, notes=notes, units=system, tags=tuple(tags),
-        self_weight=self_weight, members=members, welded=welded, path=filename, data=data,
+        criteria=criteria, notes=notes, units=system, tags=tags,
+        self_weight=self_weight, members=members, welded=welded, braced=braced, braces=braces,
+        moving=moving, path=filename,
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
     )
 

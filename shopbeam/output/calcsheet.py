@@ -229,7 +229,7 @@ def calc_sheet(job, result=None) -> str:
         "force and <x - a>^-2 a couple (each integrates to the next power up).",
         "Signs: forces + up, couples + counterclockwise, M + sagging, V = dM/dx.",
     ]
-    if (job.data or {}).get("moving") or any(ld.patterned for ld in job.loads):
+    if job.moving or any(ld.patterned for ld in job.loads):
         out += textwrap.wrap("This sheet solves the loads as entered (all patterned loads on, "
                              "no moving wheel set); the load states the checks cover are solved "
                              "numerically by the same method.", width)
