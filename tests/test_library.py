@@ -209,9 +209,15 @@ def test_cli_new_writes_a_template_and_never_overwrites(places, capsys, tmp_path
     target = tmp_path / "elsewhere.toml"
     rc, _, _ = _run(["new", "x", "--to", str(target)], capsys)
     assert rc == 0 and target.exists()
-    for bad in ("../escape", "/etc/x", "a b"):
+    for bad in ("../escape", "/etc/x"):
         rc, _, err = _run(["new", bad], capsys)
         assert rc == 2 and "use letters, digits" in err
+    # a name with spaces is made safe, not refused, and the output says what was written
+    rc, out, err = _run(["new", "bay 4 arm"], capsys)
+    assert rc == 0, err
+    assert (user / "bay-4-arm.toml").exists() and str(user / "bay-4-arm.toml") in out
+    assert "bay-4-arm" in out and "made safe" in out
+    assert tomllib.loads((user / "bay-4-arm.toml").read_text())["title"] == "Bay 4 arm"
     assert not (tmp_path / "escape.toml").exists()
     rc, _, err = _run(["new", "x", "--to", "somewhere"], capsys)
     assert rc == 2 and "ending in .toml" in err
@@ -247,3 +253,36 @@ def test_real_cli_library_commands(places, tmp_path):
     bad = subprocess.run([sys.executable, "-m", "shopbeam", "library", "show", "../../etc/passwd"],
                          **env_run)
     assert bad.returncode == 2 and "Traceback" not in bad.stderr and "'..'" in bad.stderr
+
+
+# ------------------------------------------------------------------ one way to name a job
+def test_resolve_job_takes_paths_labels_and_bare_names(places, tmp_path, monkeypatch):
+    shop, user = places
+    user.mkdir()
+    (user / "bay-4-arm.toml").write_text(_job("user arm"), encoding="utf-8")
+    (shop / "bay-4-arm.toml").write_text(_job("shop arm"), encoding="utf-8")
+    lib = str(shop)
+    # the library order: shop first, then user, then bundled
+    assert library.resolve_job("bay-4-arm", lib) == shop / "bay-4-arm.toml"
+    assert library.resolve_job("user:bay-4-arm", lib) == user / "bay-4-arm.toml"
+    assert library.resolve_job("bay 4 arm", lib) == shop / "bay-4-arm.toml"
+    assert library.resolve_job("bundled:demo", lib).name == "demo.toml"
+    assert library.resolve_job("demo", lib).name == "demo.toml"
+    f = tmp_path / "mine.toml"
+    f.write_text("x", encoding="utf-8")
+    assert library.resolve_job(str(f), lib) == f
+
+
+def test_resolve_job_near_misses_say_did_you_mean(places, tmp_path, monkeypatch):
+    shop, user = places
+    with pytest.raises(InputError, match=r"did you mean 'demo'"):
+        library.resolve_job("dem", str(shop))
+    with pytest.raises(InputError, match=r"did you mean 'bundled:demo'"):
+        library.resolve_job("bundled:demoo", str(shop))
+    (tmp_path / "bay3-arm.toml").write_text("x", encoding="utf-8")
+    monkeypatch.chdir(tmp_path)
+    with pytest.raises(InputError) as e:
+        library.resolve_job("bay3-arn.toml", str(shop))
+    assert "no such job file" in str(e.value) and "bay3-arm.toml" in str(e.value)
+    with pytest.raises(InputError, match="outside the library folder"):
+        library.resolve_job("shop:../x", str(shop))

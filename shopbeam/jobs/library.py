@@ -194,25 +194,95 @@ def _split_label(name: str) -> tuple[str | None, str]:
     return None, name
 
 
+def safe_library_name(name: str, key: str = "name") -> str:
+    """A library name from what a person typed: spaces and odd characters become '-'
+    ("bay 4 arm" -> "bay-4-arm"); a path (separators, '..', a drive) is still refused."""
+    text = str(name if name is not None else "").strip()
+    try:
+        return storage.safe_name(text, key=key)
+    except InputError:
+        if (not text or "/" in text or "\\" in text or ".." in text or os.path.isabs(text)
+                or (len(text) > 1 and text[1] == ":")):
+            raise
+        made = storage.suggest_name(text)
+        return storage.safe_name(made, key=key)
+
+
+def _near(typed: str, names: list[str]) -> list[str]:
+    low = [n.lower() for n in names]
+    close = difflib.get_close_matches(typed.lower(), low, n=3, cutoff=0.5)
+    out = [n for n in names if n.lower() in close]
+    # also offer names that contain what was typed ("rack" -> "pallet-rack-beam")
+    out += [n for n in names if typed.lower() in n.lower() and n not in out]
+    return out[:3]
+
+
 def find(name: str, library_dir=None) -> Entry:
     """The job called `name` (first match: shop, user, bundled), or an InputError that
     suggests near names. ``user:NAME`` (or shop:, bundled:) picks one place."""
     origin, bare = _split_label(str(name).strip())
-    stem = storage.safe_name(bare, key="name")
+    stem = safe_library_name(bare, key="name")
     all_entries = entries(library_dir)
     for e in all_entries:
         if e.name.lower() == stem.lower() and (origin is None or e.origin == origin):
             return e
     names = sorted({e.name for e in all_entries if origin is None or e.origin == origin})
-    close = difflib.get_close_matches(stem.lower(), [n.lower() for n in names], n=3,
-                                      cutoff=0.5)
-    close = [n for n in names if n.lower() in close]
-    # also offer names that contain what was typed ("rack" -> "pallet-rack-beam")
-    close += [n for n in names if stem.lower() in n.lower() and n not in close][:3]
+    close = _near(stem, names)
+    if origin:
+        close = [f"{origin}:{c}" for c in close]
+        if not close:  # the name is in another place: say which
+            close = [e.label for e in all_entries if e.name.lower() == stem.lower()][:3]
     where = f"in the {origin} library" if origin else "in the shop, user or bundled library"
     hint = (f"; did you mean {', '.join(repr(c) for c in close[:3])}?" if close
             else "; list them with: shopbeam library list")
     raise InputError(f"no job named '{bare}' {where}{hint}")
+
+
+def _looks_like_path(text: str) -> bool:
+    """A path, not a library name: ends in .toml, or names a folder (/, \\, ~, ./, ../)."""
+    t = text.strip()
+    return (t.lower().endswith(storage.SUFFIX) or "/" in t or "\\" in t or t.startswith("~")
+            or t.startswith("."))
+
+
+def resolve_job(job, library_dir=None) -> Path:
+    """The file for a job named on the command line: one rule for every command.
+
+    A path to an existing file is that file. ``bundled:NAME``, ``shop:NAME`` and
+    ``user:NAME`` pick a library place; a bare name (no folder, no ``.toml``) is looked up
+    shop -> user -> bundled. A path that does not exist, or a name not in the library, is an
+    InputError with "did you mean" near names (files in that folder, or library names).
+    """
+    text = str(job)
+    origin, _ = _split_label(text.strip())
+    p = Path(text).expanduser()
+    if origin is None:
+        if p.is_file():
+            return p
+        if p.exists():
+            raise InputError("this is a folder, not a job file", file=text)
+        if _looks_like_path(text):
+            folder = p.parent if str(p.parent) else Path(".")
+            try:
+                files = sorted(x.name for x in folder.iterdir() if x.suffix == storage.SUFFIX)
+            except OSError:
+                files = []
+            near = [n if str(p.parent) in ("", ".") else str(folder / n)
+                    for n in _near(p.name, files)]
+            if not near and str(p.parent) in ("", ".") and p.stem:
+                try:
+                    names = sorted({e.name for e in entries(library_dir)})
+                    near = [f"{n} (library name)" for n in _near(p.stem, names)]
+                except (InputError, OSError):
+                    near = []
+            _missing(text, near)
+    return find(text, library_dir).path
+
+
+def _missing(text: str, near: list[str]):
+    hint = (f"; did you mean {', '.join(repr(n) for n in near)}?" if near
+            else "; check the name and folder, or give a library name (shopbeam library list)")
+    raise InputError("no such job file" + hint, file=text)
 
 
 # --------------------------------------------------------------------------- writing
@@ -370,27 +440,25 @@ def cmd_library(args) -> int:
     return _run(handlers[action], args)
 
 
-def _looks_like_path(text: str) -> bool:
-    return text.lower().endswith(storage.SUFFIX)
-
-
 def _new(args) -> int:
     from shopbeam.jobs.jobdoc import new_job_text
 
     lib = getattr(args, "library", None)
     name = args.name
     to = args.to
+    stem = None
     if to is not None and to not in ("user", "shop"):
-        if not _looks_like_path(to):
+        if not to.lower().endswith(storage.SUFFIX):
             raise InputError(f"--to {to!r}: give user, shop or a file path ending in .toml",
                              key="--to")
-        storage.safe_name(name)
+        safe_library_name(name)
         target = Path(to)
-    elif to is None and _looks_like_path(name):
+    elif to is None and name.lower().endswith(storage.SUFFIX):
         target = Path(name)  # a file the user names on their own disk: `shopbeam new arm.toml`
     else:
         dest = place(to or "user", lib)
-        target = storage.path_in(dest.folder, name)
+        stem = safe_library_name(name)
+        target = storage.path_in(dest.folder, stem)
         dest.folder.mkdir(parents=True, exist_ok=True)
     if not target.parent.is_dir():
         raise InputError(f"the folder {target.parent} does not exist", key="--to")
@@ -398,7 +466,15 @@ def _new(args) -> int:
     tags = [t.strip() for t in (args.tags or "").split(",") if t.strip()]
     storage.save_text(target, new_job_text(title, tags=tags), None, overwrite=args.overwrite)
     print(f"Wrote {target}")
-    print(f"Edit it, then: shopbeam check {target}   and   shopbeam solve {target}")
+    if stem is not None:
+        made = f" (made safe from {name.strip()!r})" if stem != name.strip() else ""
+        print(f"Library name: {stem}{made}")
+        print(f"Edit it, then: shopbeam check {stem}   and   shopbeam solve {stem}")
+    else:
+        import shlex
+
+        print(f"Edit it, then: shopbeam check {shlex.quote(str(target))}   and   "
+              f"shopbeam solve {shlex.quote(str(target))}")
     return 0
 
 
@@ -410,7 +486,7 @@ def cmd_new(args) -> int:
 def _check(args) -> int:
     from shopbeam.jobs.jobfile import load_job
 
-    path = _resolve_job(args.job, getattr(args, "library", None))
+    path = resolve_job(args.job, getattr(args, "library", None))
     job = load_job(path)
     warnings = list(getattr(job, "warnings", None) or ())
     for w in warnings:
@@ -419,14 +495,6 @@ def _check(args) -> int:
     print(f"OK: {path}" + (f" ({n} warning{'s' if n != 1 else ''})" if n else ""))
     print(_banner(getattr(job, "tags", ()) or ()))
     return 0
-
-
-def _resolve_job(job: str, library_dir=None) -> Path:
-    """A path to a job file, or a library name."""
-    p = Path(job)
-    if p.exists() or _looks_like_path(job):
-        return p
-    return find(job, library_dir).path
 
 
 def cmd_check(args) -> int:
