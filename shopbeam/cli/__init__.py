@@ -118,7 +118,22 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s = sub.add_parser("rating", help="print a rating label to post on the member")
     s.add_argument("job")
     s.add_argument("--width", type=int, default=40, help="label width in characters (default 40)")
-    s.set_defaults(func=_lazy("shopbeam.design.capacity", "cmd_rating"))
+    s.add_argument("--plaque", action="store_true", help="the full-page plaque instead of the label")
+    s.add_argument("-o", "--output", metavar="FILE", default=None,
+                   help="with --plaque: write it to FILE.html, FILE.pdf or FILE.txt")
+    s.add_argument("--paper", choices=("letter", "a4"), default=None)
+    s.add_argument("--overwrite", action="store_true")
+    s.set_defaults(func=_lazy("shopbeam.cli.proof", "cmd_rating"))
+
+    s = sub.add_parser("report", help="write the calc package (HTML, Markdown or PDF)")
+    s.add_argument("job")
+    s.add_argument("-o", "--output", metavar="FILE", default=None)
+    s.add_argument("--paper", choices=("letter", "a4"), default=None)
+    s.add_argument("--overwrite", action="store_true")
+    from shopbeam.cli.proof import add_title_options
+
+    add_title_options(s)
+    s.set_defaults(func=_lazy("shopbeam.cli.proof", "cmd_report"))
 
     s = sub.add_parser("size", help="catalog sections that pass, lightest first")
     s.add_argument("job")
@@ -172,6 +187,21 @@ def cmd_ui(args) -> int:
     return EXIT_OK
 
 
+def resolve_job_arg(args) -> None:
+    """One way to name a job for every command: `args.job` (a path, `bundled:NAME`,
+    `shop:NAME`, `user:NAME` or a bare library name) becomes the file's path."""
+    job = getattr(args, "job", None)
+    if not job:
+        return
+    from pathlib import Path
+
+    if Path(job).is_file():
+        return
+    from shopbeam.jobs.library import resolve_job
+
+    args.job = str(resolve_job(job, getattr(args, "library", None)))
+
+
 def _report_error(exc: BaseException) -> int:
     from shopbeam.errors import InputError, InputErrors, UnstableBeam
 
@@ -184,7 +214,7 @@ def _report_error(exc: BaseException) -> int:
 def main(argv: list[str] | None = None) -> int:
     argv = list(sys.argv[1:] if argv is None else argv)
     light = bool(argv) and argv[0] in {"solve", "check", "capacity", "rating", "size",
-                                       "section", "shapes", "materials"}
+                                       "section", "shapes", "materials", "report"}
     parser = build_parser(with_library=not light)
     commands = {a for a in parser._subparsers._group_actions[0].choices}  # noqa: SLF001
     if not argv or (argv[0] not in commands and not argv[0].startswith("-")):
@@ -194,6 +224,7 @@ def main(argv: list[str] | None = None) -> int:
         parser.print_help()
         return EXIT_INPUT
     try:
+        resolve_job_arg(args)
         return int(args.func(args) or 0)
     except KeyboardInterrupt:
         return 130

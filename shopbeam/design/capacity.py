@@ -286,15 +286,3 @@ def cmd_capacity(args) -> int:
     else:
         print(render(res), end="")
     return 0
-
-
-def cmd_rating(args) -> int:
-    from shopbeam.jobs.jobfile import load_job
-
-    from shopbeam.design.analysis import analyze
-    from shopbeam.output import label
-
-    job = load_job(args.job)
-    r = label.rating(capacity(job), analyze(job).unchecked)
-    print(label.label_text(r, getattr(args, "width", 40)), end="")
-    return 0

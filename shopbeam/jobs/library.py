@@ -208,9 +208,9 @@ def safe_library_name(name: str, key: str = "name") -> str:
         return storage.safe_name(made, key=key)
 
 
-def _near(typed: str, names: list[str]) -> list[str]:
+def _near(typed: str, names: list[str], cutoff: float = 0.5) -> list[str]:
     low = [n.lower() for n in names]
-    close = difflib.get_close_matches(typed.lower(), low, n=3, cutoff=0.5)
+    close = difflib.get_close_matches(typed.lower(), low, n=3, cutoff=cutoff)
     out = [n for n in names if n.lower() in close]
     # also offer names that contain what was typed ("rack" -> "pallet-rack-beam")
     out += [n for n in names if typed.lower() in n.lower() and n not in out]
@@ -268,7 +268,7 @@ def resolve_job(job, library_dir=None) -> Path:
             except OSError:
                 files = []
             near = [n if str(p.parent) in ("", ".") else str(folder / n)
-                    for n in _near(p.name, files)]
+                    for n in _near(p.name, files, 0.75)]
             if not near and str(p.parent) in ("", ".") and p.stem:
                 try:
                     names = sorted({e.name for e in entries(library_dir)})
@@ -432,7 +432,10 @@ def _library_copy(args) -> int:
 def cmd_library(args) -> int:
     """`shopbeam library list|show|copy ...`."""
     action = getattr(args, "library_cmd", None)
-    handlers = {"list": _library_list, "show": _library_show, "copy": _library_copy}
+    from shopbeam.cli.proof import cmd_library_check  # noqa: PLC0415 - temporary until cli/ owns it
+
+    handlers = {"list": _library_list, "show": _library_show, "copy": _library_copy,
+                "check": cmd_library_check}
     if action not in handlers:
         _err("shopbeam library: say what to do: list, show NAME or copy NAME "
              "(see shopbeam library --help)")
@@ -514,7 +517,7 @@ def add_parsers(subparsers) -> None:
                                 description="Jobs in the shop library, your own library and "
                                             "the bundled presets, searched in that order.")
     lib_opt(lib)
-    lsub = lib.add_subparsers(dest="library_cmd", metavar="{list,show,copy}")
+    lsub = lib.add_subparsers(dest="library_cmd", metavar="{list,show,copy,check}")
     p = lsub.add_parser("list", help="list jobs with their origin")
     lib_opt(p)
     p.add_argument("--tag", help="only jobs with this tag, e.g. rack or lifting")
@@ -523,6 +526,11 @@ def add_parsers(subparsers) -> None:
     p = lsub.add_parser("show", help="print a job file")
     lib_opt(p)
     p.add_argument("name", help="job name (user:NAME, shop:NAME or bundled:NAME to pick one)")
+    p = lsub.add_parser("check", help="re-check every job of a library: one line per job")
+    lib_opt(p)
+    p.add_argument("--from", dest="origin", choices=ORIGINS, default=None,
+                   help="only this library (default: all three, each name once)")
+    p.add_argument("--csv", action="store_true", help="print CSV for a spreadsheet")
     p = lsub.add_parser("copy", help="copy a job into your library or the shop library")
     lib_opt(p)
     p.add_argument("name")

@@ -1,0 +1,106 @@
+"""The command line for naming jobs, the calc package, the plaque and `library check`:
+real subprocess runs, exit codes and one clear message."""
+
+from __future__ import annotations
+
+import csv
+import io
+import json
+import os
+import subprocess
+import sys
+from pathlib import Path
+
+import pytest
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+
+
+@pytest.fixture
+def env(tmp_path):
+    e = dict(os.environ)
+    e["SHOPBEAM_USER_DIR"] = str(tmp_path / "user")
+    e.pop("SHOPBEAM_LIBRARY", None)
+    return e
+
+
+def run(env, *args, cwd=None):
+    return subprocess.run([sys.executable, "-m", "shopbeam", *args], capture_output=True,
+                          text=True, timeout=180, env=env, cwd=cwd)
+
+
+def test_every_command_takes_a_library_name(env, tmp_path):
+    want = json.loads(run(env, "solve", str(PRESETS / "demo.toml"), "--json").stdout)
+    for name in ("bundled:demo", "demo"):
+        r = run(env, "solve", name, "--json")
+        assert r.returncode == 0, r.stderr
+        assert json.loads(r.stdout)["reactions"] == want["reactions"]
+    for args in (("check", "bundled:demo"), ("capacity", "demo"), ("rating", "bundled:jib-arm"),
+                 ("size", "bundled:demo", "--top", "2"), ("report", "demo"),
+                 ("library", "show", "bundled:demo")):
+        r = run(env, *args)
+        assert r.returncode == 0, (args, r.stderr)
+
+
+def test_new_with_spaces_then_solve_by_name(env, tmp_path):
+    r = run(env, "new", "bay 4 arm")
+    assert r.returncode == 0, r.stderr
+    written = tmp_path / "user" / "bay-4-arm.toml"
+    assert written.exists() and str(written) in r.stdout
+    for name in ("bay-4-arm", "bay 4 arm", "user:bay-4-arm"):
+        r = run(env, "check", name)
+        assert r.returncode == 0, (name, r.stderr)
+
+
+def test_near_misses_say_did_you_mean_and_exit_2(env):
+    r = run(env, "solve", "bundled:dmeo")
+    assert r.returncode == 2 and "did you mean 'bundled:demo'" in r.stderr
+    assert "Traceback" not in r.stderr
+    r = run(env, "capacity", "jib-arn")
+    assert r.returncode == 2 and "'jib-arm'" in r.stderr
+
+
+def test_report_writes_html_and_markdown_and_refuses_to_overwrite(env, tmp_path):
+    out = tmp_path / "pkg.html"
+    r = run(env, "report", "bundled:demo", "-o", str(out), "--prepared-by", "R. Fitter",
+            "--revision", "B")
+    assert r.returncode == 0, r.stderr
+    html = out.read_text()
+    assert "R. Fitter" in html and "Calc package" in html and "SCREENING CHECK ONLY" in html
+    assert "Wrote" in r.stdout and "HTML" in r.stdout
+    r = run(env, "report", "bundled:demo", "-o", str(out))
+    assert r.returncode == 2 and "already exists" in r.stderr and out.read_text() == html
+    r = run(env, "report", "bundled:demo", "-o", str(tmp_path / "pkg.md"))
+    assert r.returncode == 0 and (tmp_path / "pkg.md").read_text().startswith("# Calc package")
+    r = run(env, "report", "bundled:demo", "-o", str(tmp_path / "pkg.docx"))
+    assert r.returncode == 2 and ".html, .md or .pdf" in r.stderr
+
+
+def test_pdf_without_a_browser_says_what_to_do(env, tmp_path):
+    env["SHOPBEAM_BROWSER"] = str(tmp_path / "no-such-browser")
+    out = tmp_path / "pkg.pdf"
+    r = run(env, "report", "bundled:demo", "-o", str(out))
+    assert r.returncode == 2 and "Traceback" not in r.stderr
+    assert "no Chromium" in r.stderr and "apt-get install chromium" in r.stderr
+    assert ".html" in r.stderr and not out.exists()
+
+
+def test_rating_plaque_to_html(env, tmp_path):
+    out = tmp_path / "plaque.html"
+    r = run(env, "rating", "bundled:pallet-rack-beam-pair", "--plaque", "-o", str(out))
+    assert r.returncode == 0, r.stderr
+    html = out.read_text()
+    assert "LOAD RATING" in html and "PER LEVEL (pair of beams)" in html
+    assert "rounded down from" in html and "SCREENING CHECK ONLY" in html
+    r = run(env, "rating", "bundled:pallet-rack-beam-pair", "-o", str(tmp_path / "x.html"))
+    assert r.returncode == 2 and "--plaque" in r.stderr
+
+
+def test_library_check_lines_and_csv(env):
+    r = run(env, "library", "check", "--from", "bundled")
+    assert r.returncode == 0, r.stderr
+    assert "bundled:demo" in r.stdout and "PASS" in r.stdout and "jobs:" in r.stdout
+    r = run(env, "library", "check", "--from", "bundled", "--csv")
+    rows = list(csv.DictReader(io.StringIO(r.stdout)))
+    assert len(rows) == len(list(PRESETS.glob("*.toml")))
+    assert {x["result"] for x in rows} <= {"PASS", "FAIL", "ERROR"}
