@@ -25,6 +25,10 @@ review by a licensed engineer, and local codes govern.
   shopbeam                      open the text UI on a demo job
   shopbeam JOB.toml             open a job in the text UI
   shopbeam solve JOB.toml       print the report (--json for scripts, --calc for the calc sheet)
+  shopbeam report JOB -o F.pdf  write the calc package to file (.html, .md or .pdf)
+  shopbeam rating JOB           print the rating label to post (--plaque for a full page)
+
+A JOB is a file or a library name: bundled:demo, shop:NAME, user:NAME, or a bare NAME.
 """
 
 
@@ -89,77 +93,192 @@ LIBRARY_COMMANDS = {"library": "list, show and copy saved and bundled jobs",
                     "new": "start a job file from a commented template"}
 
 
+JOB_HELP = ("the job: a file (bay3-arm.toml) or a library name (bundled:demo, shop:NAME, "
+            "user:NAME, or a bare NAME looked up shop -> user -> bundled)")
+
+
+def command(sub, name: str, summary: str, description: str, examples: list[str]):
+    """A subcommand whose --help says what it does and shows examples."""
+    import textwrap
+
+    epilog = "examples:\n" + "\n".join(f"  {e}" for e in examples)
+    return sub.add_parser(name, help=summary, description=textwrap.fill(description, 78),
+                          epilog=epilog,
+                          formatter_class=argparse.RawDescriptionHelpFormatter)
+
+
+def _with_kinds(parser) -> None:
+    """Append the catalog kinds and the shape kinds to a parser's --help (read from the
+    catalog only when help is asked for, so other commands start fast)."""
+    plain = parser.format_help
+
+    def format_help():
+        import textwrap
+
+        from shopbeam.members.catalog import KIND_INFO, SHAPE_KINDS
+        from shopbeam.members.sections import SHAPES
+
+        lines = ["", "catalog kinds (--kind):"]
+        lines += [f"  {k:<11} {words}" for k, words in KIND_INFO.items()]
+        lines += ["", "shape kinds (--kind also takes these; each stands for the catalog "
+                  "kinds listed):"]
+        lines += [f"  {k:<11} {', '.join(v)}" for k, v in SHAPE_KINDS.items()]
+        lines += ["", "shapes for a [beam.section] table in a job file (shape = ...):"]
+        lines += textwrap.wrap(", ".join(SHAPES), 78, initial_indent="  ",
+                               subsequent_indent="  ")
+        return plain() + "\n".join(lines) + "\n"
+
+    parser.format_help = format_help
+
+
 def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     """The argument parser. `with_library=False` registers `library` and `new` by name only,
     so commands that do not need the library (solve, check, ...) start without importing it."""
     p = argparse.ArgumentParser(
         prog="shopbeam", description=DESCRIPTION,
+        epilog="`shopbeam COMMAND --help` shows each command's options with examples.",
         formatter_class=argparse.RawDescriptionHelpFormatter)
     p.add_argument("--version", action="version", version=f"shopbeam {__version__}")
     sub = p.add_subparsers(dest="command", metavar="COMMAND")
 
-    s = sub.add_parser("solve", help="solve a job and print the report")
-    s.add_argument("job", help="job file (TOML)")
+    def lib_opt(s):
+        s.add_argument("--library", metavar="DIR", default=None,
+                       help="the shop library folder to look job names up in "
+                            "(default: $SHOPBEAM_LIBRARY)")
+
+    s = command(sub, "solve", "solve a job and print the report",
+                "Solve the member and print reactions, exact extremes of shear, moment, slope "
+                "and deflection, every check with its ratio, the self-checks and the cautions.",
+                ["shopbeam solve bay3-arm.toml", "shopbeam solve bundled:demo --json",
+                 "shopbeam solve demo --calc"])
+    s.add_argument("job", help=JOB_HELP)
+    lib_opt(s)
     g = s.add_mutually_exclusive_group()
     g.add_argument("--json", action="store_true", help="print the contract JSON (SI units)")
     g.add_argument("--calc", action="store_true",
                    help="print the exact calc sheet (bracket expressions, exact reactions)")
     s.set_defaults(func=cmd_solve)
 
-    s = sub.add_parser("check", help="validate a job file (and that the beam is stable)")
-    s.add_argument("job")
+    s = command(sub, "check", "validate a job file (and that the beam is stable)",
+                "Read a job and list every problem with its key and line (exit 2), or say OK; "
+                "input warnings go to stderr.",
+                ["shopbeam check bay3-arm.toml", "shopbeam check shop:bay3-arm"])
+    s.add_argument("job", help=JOB_HELP)
+    lib_opt(s)
     s.set_defaults(func=cmd_check)
 
-    s = sub.add_parser("capacity", help="largest multiplier of the live loads that passes every check")
-    s.add_argument("job")
-    s.add_argument("--json", action="store_true")
+    s = command(sub, "capacity", "largest multiplier of the live loads that passes every check",
+                "The largest factor k on the live loads (dead loads and self-weight fixed) with "
+                "every check passing, found exactly, and the load to post in the job's units.",
+                ["shopbeam capacity bundled:pallet-rack-beam-pair",
+                 "shopbeam capacity bay3-arm.toml --json"])
+    s.add_argument("job", help=JOB_HELP)
+    lib_opt(s)
+    s.add_argument("--json", action="store_true",
+                   help="print the JSON (the solve JSON at k, plus factor and capacity)")
     s.set_defaults(func=_lazy("shopbeam.design.capacity", "cmd_capacity"))
 
-    s = sub.add_parser("rating", help="print a rating label to post on the member")
-    s.add_argument("job")
-    s.add_argument("--width", type=int, default=40, help="label width in characters (default 40)")
-    s.add_argument("--plaque", action="store_true", help="the full-page plaque instead of the label")
+    s = command(sub, "rating", "print a rating label to post on the member",
+                "The load to post in shop words: max uniform or point load, per level and per "
+                "beam for racks and shelves, rounded down (and saying so), with every caution "
+                "and every limit state not checked; NOT RATED and why when a rating cannot "
+                "stand. A 40-column label, or a full-page plaque with --plaque.",
+                ["shopbeam rating bundled:pallet-rack-beam-pair",
+                 "shopbeam rating bay3-arm.toml --width 32 > label.txt",
+                 "shopbeam rating bay3-arm.toml --plaque -o bay3-plaque.pdf"])
+    s.add_argument("job", help=JOB_HELP)
+    lib_opt(s)
+    s.add_argument("--width", type=int, default=40, metavar="N",
+                   help="label width in characters, 30 to 200 (default 40)")
+    s.add_argument("--plaque", action="store_true",
+                   help="the full-page plaque instead of the label (printed, or written with -o)")
     s.add_argument("-o", "--output", metavar="FILE", default=None,
-                   help="with --plaque: write it to FILE.html, FILE.pdf or FILE.txt")
-    s.add_argument("--paper", choices=("letter", "a4"), default=None)
-    s.add_argument("--overwrite", action="store_true")
+                   help="with --plaque: write it to FILE.html, FILE.pdf (needs Chromium) or "
+                        "FILE.txt")
+    s.add_argument("--paper", choices=("letter", "a4"), default=None,
+                   help="paper size of the plaque (default: letter for US units, A4 for SI)")
+    s.add_argument("--overwrite", action="store_true",
+                   help="replace FILE if it exists (otherwise nothing is written)")
     s.set_defaults(func=_lazy("shopbeam.cli.proof", "cmd_rating"))
 
-    s = sub.add_parser("report", help="write the calc package (HTML, Markdown or PDF)")
-    s.add_argument("job")
-    s.add_argument("-o", "--output", metavar="FILE", default=None)
-    s.add_argument("--paper", choices=("letter", "a4"), default=None)
-    s.add_argument("--overwrite", action="store_true")
+    s = command(sub, "report", "write the calc package (HTML, Markdown or PDF)",
+                "The calc package to file with the job: title block, design basis with code "
+                "editions, a sketch of the member, load states, shear, moment, slope and "
+                "deflection diagrams, every check with its clause, the self-checks, the "
+                "cautions, what was not checked, and the program version with a SHA-256 of the "
+                "input (the HTML embeds the input). The file's suffix picks the format: .html "
+                "(self-contained, prints on letter or A4 with numbered sheets), .md (for diffs "
+                "and e-mail), .pdf (printed from the HTML by a headless Chromium; set "
+                "$SHOPBEAM_BROWSER to name one). Without -o the Markdown is printed.",
+                ["shopbeam report bay3-arm.toml -o bay3-arm.html",
+                 "shopbeam report bundled:demo -o demo.pdf --prepared-by \"R. Fitter\" "
+                 "--revision A",
+                 "shopbeam report shop:bay3-arm -o bay3-arm.md"])
+    s.add_argument("job", help=JOB_HELP)
+    lib_opt(s)
+    s.add_argument("-o", "--output", metavar="FILE", default=None,
+                   help="write the package to FILE.html, FILE.md or FILE.pdf")
+    s.add_argument("--paper", choices=("letter", "a4"), default=None,
+                   help="paper size (default: letter for US units, A4 for SI)")
+    s.add_argument("--overwrite", action="store_true",
+                   help="replace FILE if it exists (otherwise nothing is written)")
     from shopbeam.cli.proof import add_title_options
 
     add_title_options(s)
     s.set_defaults(func=_lazy("shopbeam.cli.proof", "cmd_report"))
 
-    s = sub.add_parser("size", help="catalog sections that pass, lightest first")
-    s.add_argument("job")
-    s.add_argument("--kind", default=None, help="catalog kind to sweep (default: the job's own)")
-    s.add_argument("--max-depth", default=None, help="deepest section allowed, e.g. \"6 in\"")
-    s.add_argument("--stock", default=None, help="shop stock list (TOML or CSV) to choose from")
-    s.add_argument("--top", type=int, default=15, help="how many to list (default 15)")
-    s.add_argument("--json", action="store_true")
+    s = command(sub, "size", "catalog sections that pass, lightest first",
+                "Sweep every section of one catalog kind (or a shop stock list) with the job's "
+                "supports and loads, and list those that pass every check, lightest first.",
+                ["shopbeam size bundled:storage-platform-beam --kind W",
+                 "shopbeam size bay3-arm.toml --kind HSS-rect --max-depth \"4 in\"",
+                 "shopbeam size bay3-arm.toml --stock presets/stock/quillhaven-stock.csv"])
+    s.add_argument("job", help=JOB_HELP)
+    lib_opt(s)
+    s.add_argument("--kind", default=None,
+                   help="catalog kind to sweep, e.g. W, HSS-rect, C, lumber (default: the "
+                        "job's own; see shopbeam shapes --help for the list)")
+    s.add_argument("--max-depth", default=None, metavar="LENGTH",
+                   help="deepest section allowed, e.g. \"6 in\"")
+    s.add_argument("--stock", default=None, metavar="FILE",
+                   help="shop stock list (TOML or CSV, see docs/stock-list.md) to choose from")
+    s.add_argument("--top", type=int, default=15, metavar="N", help="how many to list (default 15)")
+    s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
     s.set_defaults(func=_lazy("shopbeam.design.sizing", "cmd_size"))
 
-    s = sub.add_parser("section", help="properties of one catalog section")
-    s.add_argument("designation")
-    s.add_argument("--json", action="store_true")
-    s.add_argument("--units", choices=("us", "si"), default="us")
+    s = command(sub, "section", "properties of one catalog section",
+                "The published or computed properties of one catalog section (area, I, S, Z, "
+                "r, J, weight) with their source.",
+                ["shopbeam section HSS6x4x1/4", "shopbeam section W8x18 --axis weak",
+                 "shopbeam section \"rect-tube 2 x 1 x 14ga\" --units si --json"])
+    s.add_argument("designation",
+                   help="a catalog designation (HSS6x4x1/4, W8x18, C6x8.2, L2x2x3/16, 2x10) or "
+                        "a description such as \"rect-tube 2 x 1 x 14ga\"")
+    s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
+    s.add_argument("--units", choices=("us", "si"), default="us",
+                   help="display units (default us)")
     s.add_argument("--axis", choices=("strong", "weak"), default=None,
                    help="bending axis (default strong; weak turns the section)")
+    _with_kinds(s)
     s.set_defaults(func=_lazy("shopbeam.members.catalog", "cmd_section"))
 
-    s = sub.add_parser("materials", help="list the built-in materials with their sources")
-    s.add_argument("--json", action="store_true")
+    s = command(sub, "materials", "list the built-in materials with their sources",
+                "Every material key a job file may name, with E, Fy (or the wood stresses), "
+                "density and where the figures come from.",
+                ["shopbeam materials", "shopbeam materials --json"])
+    s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
     s.set_defaults(func=_lazy("shopbeam.members.materials", "cmd_materials"))
 
-    s = sub.add_parser("shapes", help="list catalog sections")
-    s.add_argument("--kind", default=None)
-    s.add_argument("--filter", default=None)
-    s.add_argument("--json", action="store_true")
+    s = command(sub, "shapes", "list catalog sections",
+                "The sections of the built-in catalog, by kind, optionally filtered by text.",
+                ["shopbeam shapes --kind HSS --filter 4x4", "shopbeam shapes --kind channel",
+                 "shopbeam shapes --kind lumber --json"])
+    s.add_argument("--kind", default=None,
+                   help="one catalog kind or shape kind (listed below; default: all)")
+    s.add_argument("--filter", default=None, metavar="TEXT",
+                   help="only designations containing TEXT, e.g. 4x4")
+    s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
+    _with_kinds(s)
     s.set_defaults(func=_lazy("shopbeam.members.catalog", "cmd_shapes"))
 
     if with_library:
@@ -170,9 +289,12 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
         for name, words in LIBRARY_COMMANDS.items():
             sub.add_parser(name, help=words)
 
-    s = sub.add_parser("ui", help="open the text UI (same as giving no command)")
-    s.add_argument("job", nargs="?")
-    s.add_argument("--library", default=None)
+    s = command(sub, "ui", "open the text UI (same as giving no command)",
+                "The keyboard-driven text UI: edit a job with its results following every "
+                "change. With no job it opens the library with the demo job.",
+                ["shopbeam ui", "shopbeam ui bay3-arm.toml", "shopbeam bundled:jib-arm"])
+    s.add_argument("job", nargs="?", help=JOB_HELP + " (default: the demo job)")
+    lib_opt(s)
     s.set_defaults(func=cmd_ui)
     return p
 

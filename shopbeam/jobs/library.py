@@ -509,43 +509,78 @@ def add_parsers(subparsers) -> None:
     """Register `library` and `new` (and `check`, unless the caller registered it)."""
     import argparse
 
+    def command(sub, name, summary, description, examples):
+        import textwrap
+
+        return sub.add_parser(name, help=summary, description=textwrap.fill(description, 78),
+                              epilog="examples:\n" + "\n".join(f"  {e}" for e in examples),
+                              formatter_class=argparse.RawDescriptionHelpFormatter)
+
     def lib_opt(p):
         p.add_argument("--library", metavar="DIR", default=argparse.SUPPRESS,
                        help=f"the shop library folder (default: ${ENV_SHOP})")
 
-    lib = subparsers.add_parser("library", help="list, show and copy saved and bundled jobs",
-                                description="Jobs in the shop library, your own library and "
-                                            "the bundled presets, searched in that order.")
+    lib = command(subparsers, "library", "list, show, copy and re-check saved and bundled jobs",
+                  "Jobs in the shop library (--library DIR or $SHOPBEAM_LIBRARY), your own "
+                  f"library (${ENV_USER} or the platform's user data folder) and the bundled "
+                  "presets, searched in that order. Name one as shop:NAME, user:NAME, "
+                  "bundled:NAME or a bare NAME (the first found).",
+                  ["shopbeam library list --tag rack", "shopbeam library show bundled:jib-arm",
+                   "shopbeam library copy bundled:pallet-rack-beam-pair --as bay-a-level-2",
+                   "shopbeam library check --from shop --csv > recheck.csv"])
     lib_opt(lib)
     lsub = lib.add_subparsers(dest="library_cmd", metavar="{list,show,copy,check}")
-    p = lsub.add_parser("list", help="list jobs with their origin")
+    p = command(lsub, "list", "list jobs with their origin",
+                "Every job of the three libraries with its origin, tags and title; a job "
+                "hidden by one of the same name found earlier is marked.",
+                ["shopbeam library list", "shopbeam library list --tag lifting",
+                 "shopbeam library list --search \"pallet 96\""])
     lib_opt(p)
     p.add_argument("--tag", help="only jobs with this tag, e.g. rack or lifting")
     p.add_argument("--search", metavar="TEXT", help="only jobs whose title, tags or text "
                                                     "contain every word of TEXT")
-    p = lsub.add_parser("show", help="print a job file")
+    p = command(lsub, "show", "print a job file",
+                "Print a job file exactly as it is saved, with where it is.",
+                ["shopbeam library show demo", "shopbeam library show user:bay-3-arm"])
     lib_opt(p)
     p.add_argument("name", help="job name (user:NAME, shop:NAME or bundled:NAME to pick one)")
-    p = lsub.add_parser("check", help="re-check every job of a library: one line per job")
+    p = command(lsub, "copy", "copy a job into your library or the shop library",
+                "Copy a job's file, comments and all, into your user library or the shop "
+                "library. An existing job of that name is never replaced without --overwrite.",
+                ["shopbeam library copy bundled:jib-arm",
+                 "shopbeam library copy demo --as loft-beam --to shop --library /srv/shopbeam"])
+    lib_opt(p)
+    p.add_argument("name", help="the job to copy (user:NAME, shop:NAME, bundled:NAME or NAME)")
+    p.add_argument("--to", choices=("user", "shop"), default="user",
+                   help="the library to copy into (default user)")
+    p.add_argument("--as", dest="as_name", metavar="NEWNAME", help="name of the copy")
+    p.add_argument("--overwrite", action="store_true",
+                   help="replace a job of that name that already exists there")
+    p = command(lsub, "check", "re-check every job of a library: one line per job",
+                "Read, solve, check and rate every job again and print one line per job: "
+                "title, governing check, ratio, PASS/FAIL and the rated load (or why it could "
+                "not be checked). What to run after a change of code, stock or presets.",
+                ["shopbeam library check", "shopbeam library check --from bundled",
+                 "shopbeam library check --from shop --library /srv/shopbeam --csv > jobs.csv"])
     lib_opt(p)
     p.add_argument("--from", dest="origin", choices=ORIGINS, default=None,
                    help="only this library (default: all three, each name once)")
     p.add_argument("--csv", action="store_true", help="print CSV for a spreadsheet")
-    p = lsub.add_parser("copy", help="copy a job into your library or the shop library")
-    lib_opt(p)
-    p.add_argument("name")
-    p.add_argument("--to", choices=("user", "shop"), default="user")
-    p.add_argument("--as", dest="as_name", metavar="NEWNAME", help="name of the copy")
-    p.add_argument("--overwrite", action="store_true",
-                   help="replace a job of that name that already exists there")
     lib.set_defaults(func=cmd_library)
 
-    new = subparsers.add_parser("new", help="start a job file from a commented template")
+    new = command(subparsers, "new", "start a job file from a commented template",
+                  "Write a commented template job to fill in. A name goes to your user "
+                  "library (or --to shop); spaces and odd characters are made safe "
+                  "(\"bay 4 arm\" -> bay-4-arm) and the file written is named. A name ending "
+                  "in .toml is a file in the current folder.",
+                  ["shopbeam new \"bay 4 arm\" --tags rack,arm",
+                   "shopbeam new shelf-2 --to shop --library /srv/shopbeam",
+                   "shopbeam new arm.toml --title \"Bay 3 arm\""])
     lib_opt(new)
     new.add_argument("name", help="a library name, or a path ending in .toml")
     new.add_argument("--to", metavar="user|shop|PATH.toml", default=None,
                      help="where to write it (default: your user library)")
-    new.add_argument("--title", help="the job's title")
+    new.add_argument("--title", help="the job's title (default: from the name)")
     new.add_argument("--tags", help="comma-separated tags, e.g. rack,shelf")
     new.add_argument("--overwrite", action="store_true",
                      help="replace an existing file of that name")

@@ -455,7 +455,7 @@ KIND_INFO = {
     "HEA": "EN 10365 HEA wide-flange beams", "HEB": "EN 10365 HEB wide-flange beams",
     "UPN": "EN 10365 UPN channels",
 }
-_SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS", "mech-tube"),
+SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS", "mech-tube"),
                 "round-tube": ("HSS-round", "CHS", "mech-round"),
                 "pipe": ("PIPE",), "i-beam": ("W", "M", "S", "HP", "IPE", "HEA", "HEB"),
                 "channel": ("C", "MC", "UPN"), "angle": ("L",), "tee": ("WT", "MT", "ST"),
@@ -534,14 +534,14 @@ def _kind_names(kind: str) -> tuple[str, ...]:
     low = {"hss-rectangular": "rect-tube", "rect": "rect-tube", "square-tube": "rect-tube",
            "round": "round-tube", "flat": "flat-bar", "channel": "channel",
            "angles": "angle", "beam": "i-beam", "w-shape": "W"}.get(low, low)
-    if low in _SHAPE_KINDS:
-        return _SHAPE_KINDS[low]
+    if low in SHAPE_KINDS:
+        return SHAPE_KINDS[low]
     if low in ("w",):
         return ("W",)
-    close = difflib.get_close_matches(k, list(KIND_INFO) + list(_SHAPE_KINDS), n=1, cutoff=0.5)
+    close = difflib.get_close_matches(k, list(KIND_INFO) + list(SHAPE_KINDS), n=1, cutoff=0.5)
     hint = f" (did you mean {close[0]!r}?)" if close else ""
     raise InputError(f"unknown kind {kind!r}{hint}; kinds are {', '.join(KIND_INFO)} or a "
-                     f"shape ({', '.join(_SHAPE_KINDS)})", "--kind")
+                     f"shape ({', '.join(SHAPE_KINDS)})", "--kind")
 
 
 def list_sections(kind: str | None = None, filter: str | None = None) -> list[Section]:
