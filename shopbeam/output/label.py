@@ -98,12 +98,9 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
 
 # ------------------------------------------------------------------ the figures
 def _moving(job):
-    try:
-        from shopbeam.design.loading import read_moving
+    from shopbeam.design.loading import read_moving
 
-        return read_moving(job)
-    except Exception:  # noqa: BLE001 - no wheel set is shown as no wheel set
-        return ()
+    return read_moving(job)
 
 
 def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
