@@ -104,3 +104,15 @@ def test_library_check_lines_and_csv(env):
     rows = list(csv.DictReader(io.StringIO(r.stdout)))
     assert len(rows) == len(list(PRESETS.glob("*.toml")))
     assert {x["result"] for x in rows} <= {"PASS", "FAIL", "ERROR"}
+
+
+def test_the_text_ui_takes_a_library_name_too(tmp_path, monkeypatch):
+    from shopbeam.cli import build_parser, resolve_job_arg
+
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(tmp_path / "user"))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+
+    for argv in (["ui", "bundled:jib-arm"], ["ui", "jib-arm"]):
+        args = build_parser().parse_args(argv)
+        resolve_job_arg(args)
+        assert args.job == str(PRESETS / "jib-arm.toml")

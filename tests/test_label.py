@@ -144,3 +144,11 @@ def test_uniform_label_value_matches_the_capacity_rounded_down():
     exact = abs(live.w1) * cap.factor / (LBF / 0.3048)
     shown = float(re.match(r"[\d.]+", f.value).group(0))
     assert shown <= exact and shown > exact * 0.99
+
+
+def test_shelf_speaks_per_shelf_and_per_member_without_a_bay():
+    job = load_job(PRESETS / "wall-shelf-brackets.toml")
+    r = label.rating(capacity(job))
+    groups = [f.group for f in r.figures]
+    assert "PER SHELF (2 members)" in groups and "PER MEMBER" in groups
+    assert "PER BAY" not in label.label_text(r)

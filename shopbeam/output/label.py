@@ -10,8 +10,9 @@ rounded down from 9429"). The figures depend on the loads entered:
 - several live loads (pallets, bundles): each one's max load by its label, and the total;
 - a moving wheel set: the max load per wheel and for the set;
 - loads shared by identical members (`members = 2`: a pair of rack beams, a shelf's two
-  brackets): the figures are per level / per pair (the loads as entered) and per member; racks
-  and shelves also say what the total per bay depends on (the upright frames are not checked).
+  rails): the figures are per level / pair of beams (tags rack, pallet) or per shelf (tag
+  shelf) for the loads as entered, and per beam or member; racks also say what the total per
+  bay depends on (the upright frames are not checked).
 
 When the capacity carries "not rated" reasons (`CapacityResult.not_rated`), or a limit state
 that blocks a rating was not checked, there is no number: the label says NOT RATED and why.
@@ -31,7 +32,8 @@ from html import escape
 from shopbeam import units
 from shopbeam.cautions import cautions_for, is_lifting
 
-RACK_TAGS = {"rack", "pallet", "shelf", "shelving", "storage"}
+RACK_TAGS = {"rack", "pallet", "racking"}  # members are the beams of one level
+SHELF_TAGS = {"shelf", "shelving"}  # members are the rails or brackets of one shelf
 BASIS_SHORT = {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
                "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}
 
@@ -108,13 +110,17 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     live = [ld for ld in job.loads if ld.case == "live"]
     mv = _moving(job)
     n = job.members
-    rack = bool(RACK_TAGS & {t.strip().lower() for t in job.tags})
+    tags = {t.strip().lower() for t in job.tags}
+    rack = bool(RACK_TAGS & tags)
+    shelf = bool(SHELF_TAGS & tags) and not rack
     figs: list[Figure] = []
     notes: list[str] = []
     where = ""
     if n > 1:
-        where = (("PER LEVEL (pair of beams)" if n == 2 else f"PER LEVEL ({n} beams)")
-                 if rack else f"ALL {n} MEMBERS TOGETHER")
+        if rack:
+            where = "PER LEVEL (pair of beams)" if n == 2 else f"PER LEVEL ({n} beams)"
+        else:
+            where = f"PER SHELF ({n} members)" if shelf else f"ALL {n} MEMBERS TOGETHER"
 
     def pos(x):
         return units.fmt(x, "length", sy)
