@@ -210,3 +210,10 @@ def test_project_table_problems_are_reported():
         parse_job_text(bad, "bad.toml")
     text = str(e.value)
     assert "project.revision" in text
+
+
+def test_a_wheel_set_is_listed_and_drawn():
+    path = PRESETS / "monorail-trolley.toml"
+    pkg = cp.build(analyze(load_job(path)), input_bytes=path.read_bytes())
+    assert any(x.startswith("moving hoist trolley: wheels") for x in pkg.loads)
+    assert "travel dashed" in pkg.sketch

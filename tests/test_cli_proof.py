@@ -63,9 +63,10 @@ def test_near_misses_say_did_you_mean_and_exit_2(env):
 def test_report_writes_html_and_markdown_and_refuses_to_overwrite(env, tmp_path):
     out = tmp_path / "pkg.html"
     r = run(env, "report", "bundled:demo", "-o", str(out), "--prepared-by", "R. Fitter",
-            "--revision", "B")
+            "--revision", "B", "--job-number", "Q-7")
     assert r.returncode == 0, r.stderr
     html = out.read_text()
+    assert '<span class="lab">Job</span><span class="val">Q-7</span>' in html
     assert "R. Fitter" in html and "Calc package" in html and "SCREENING CHECK ONLY" in html
     assert "Wrote" in r.stdout and "HTML" in r.stdout
     r = run(env, "report", "bundled:demo", "-o", str(out))

@@ -14,7 +14,7 @@ from pathlib import Path
 from shopbeam.errors import InputError
 
 TITLE_OPTIONS = (("shop", "--shop", "the shop's name"),
-                 ("job", "--job-number", "the job or work-order number"),
+                 ("job_number", "--job-number", "the job or work-order number"),
                  ("member", "--member", "which member this is (default: section and material)"),
                  ("client", "--client", "the client"),
                  ("location", "--location", "where the member is"),
@@ -55,7 +55,8 @@ def cmd_report(args) -> int:
     path, raw, job = _read(args)
     for w in job.warnings:
         print(w.located(), file=sys.stderr)
-    fields = {key: getattr(args, key, None) for key, _, _ in TITLE_OPTIONS}
+    fields = {("job" if key == "job_number" else key): getattr(args, key, None)
+              for key, _, _ in TITLE_OPTIONS}
     pkg = cp.build(analyze(job), input_bytes=raw, input_name=str(path), fields=fields,
                    paper=getattr(args, "paper", None))
     out = getattr(args, "output", None)

@@ -177,7 +177,17 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
     if job.members > 1:
         member.append(("Members", f"{job.members} identical members share the loads"))
 
-    loads = [describe_load(ld, sy) for ld in job.loads] or ["none entered"]
+    loads = [describe_load(ld, sy) for ld in job.loads]
+    for w in getattr(job, "moving", ()) or ():
+        wheels = ", ".join(units.fmt(v, "force", sy) for v in w.live)
+        dead = (" + dead " + ", ".join(units.fmt(v, "force", sy) for v in w.dead)
+                if any(w.dead) else "")
+        gaps = [b - a for a, b in zip(w.offsets, w.offsets[1:])]
+        spacing = (" spaced " + ", ".join(units.fmt(g, "length", sy) for g in gaps)) if gaps else ""
+        loads.append(f"moving {w.label}: wheels {wheels}{dead}{spacing}, travelling "
+                     f"{units.fmt(w.travel[0], 'length', sy)} to "
+                     f"{units.fmt(w.travel[1], 'length', sy)} (checked at its worst position)")
+    loads = loads or ["none entered"]
     loads += [f"read as {c}" for c in job.conversions]
     states = []
     if result.shown_state:
@@ -213,7 +223,7 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
         title=job.title, title_block=title_block, lifting=is_lifting(job.tags),
         basis=tuple(basis_lines), editions=_editions(result, basis), member=tuple(member),
         supports=tuple(describe_support(s, sy) for s in job.supports), loads=tuple(loads),
-        load_states=tuple(states), sketch=svg.member_sketch(job),
+        load_states=tuple(states), sketch=svg.member_sketch(job, moving=getattr(job, "moving", ())),
         reactions=_reactions(sol, sy),
         state_reactions=_reactions(st_sol, sy) if st_sol is not None else (),
         state_words=result.state_words if st_sol is not None else "",

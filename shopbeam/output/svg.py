@@ -79,10 +79,11 @@ def _support(s, x: float, y: float, length: float, sys_: str) -> str:
     return ""
 
 
-def member_sketch(job, loads=None) -> str:
+def member_sketch(job, loads=None, moving=()) -> str:
     """The member to scale along its length: supports, loads with values, span dimension.
 
     `loads` defaults to the job's entered loads; self-weight is noted under the sketch.
+    A wheel set in `moving` is drawn at the start of its travel, with the travel marked.
     """
     sy = job.units
     L = job.length
@@ -159,6 +160,17 @@ def member_sketch(job, loads=None) -> str:
                          f'<circle cx="{a1[0]:.1f}" cy="{a1[1]:.1f}" r="2.5" fill="{colour}"/>')
             parts.append(_t(x, y - 24, lab + units.fmt(ld.value, "moment", sy, 3)
                             + (" ccw" if ccw else " cw"), size=10))
+    for w in moving:
+        x0 = w.travel[0]
+        for off, v in zip(w.offsets, w.live):
+            xw = _x(x0 + off, L)
+            parts.append(_arrow_down(xw, y - 60, y - 3, "#a8321f"))
+        xa, xb = _x(w.travel[0], L), _x(w.travel[1], L)
+        parts.append(f'<line x1="{xa:.1f}" y1="{y - 66}" x2="{xb:.1f}" y2="{y - 66}" '
+                     f'stroke="#a8321f" stroke-width="1" stroke-dasharray="4,3"/>')
+        parts.append(_t((xa + xb) / 2, y - 70, f"{w.label}: "
+                        + ", ".join(units.fmt(v, "force", sy, 3) for v in w.live)
+                        + " moving (travel dashed)", size=10))
     # span dimension and support positions
     yd = 212
     parts.append(f'<line x1="{_x(0, L):.1f}" y1="{yd}" x2="{_x(L, L):.1f}" y2="{yd}" '
