@@ -106,7 +106,7 @@ def canon(text: str) -> str | None:
 _FLOAT_COLS = ("W", "A", "d", "Ht", "OD", "bf", "B", "t", "tw", "tf", "tnom", "tdes",
                "kdes", "x", "y", "Ix", "Zx", "Sx", "rx", "Iy", "Zy", "Sy", "ry", "Iz", "rz",
                "tan(a)", "J", "Cw", "rts", "ho", "h/tw", "bf/2tf", "b/t", "b/tdes",
-               "h/tdes", "D/t")
+               "h/tdes", "D/t", "Iw", "Sw", "Sz")
 
 
 @lru_cache(maxsize=1)
@@ -199,6 +199,7 @@ def _from_aisc(row) -> Section:
         y, x = row["y"] * IN, row["x"] * IN
         dims = {"d": dl, "b": bs, "t": t, "y": y, "x": x, "b_t": row["b/t"],
                 "iz": row["Iz"] * IN**4, "rz": row["rz"] * IN, "tan_alpha": row["tan(a)"],
+                "iw": row["Iw"] * IN**4, "sw": row["Sw"] * IN**3, "sz": row["Sz"] * IN**3,
                 "kdes": row["kdes"] * IN}
         shape, axis = "angle", "geometric"
         s_top, s_bot = ix / (dl - y), ix / y  # horizontal leg at the bottom

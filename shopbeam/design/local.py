@@ -1,0 +1,341 @@
+"""Local checks where a concentrated force enters the member: supports and point loads.
+
+Every support reaction and every point load (moving wheels too) is a concentrated force on a
+flange. For I-shapes and channels bent about the strong axis this module applies AISC 360-16
+section J10 without stiffeners:
+
+- J10.1 flange local bending, Rn = 6.25 Fyf tf^2 (J10-1), halved within 10 tf of the member
+  end, Omega 1.67, where the force pulls the flange away from the web (a load hung from the
+  bottom flange, an uplift reaction held down through the bottom flange);
+- J10.2 web local yielding, Rn = Fyw tw (5k + lb) (J10-2), or Fyw tw (2.5k + lb) within d of
+  the member end (J10-3), Omega 1.50, for forces of either sign;
+- J10.3 web crippling, Rn = 0.80 tw^2 [1 + 3 (lb/d)(tw/tf)^1.5] sqrt(E Fyw tf / tw) Qf
+  (J10-4), and within d/2 of the member end 0.40 tw^2 [...] (J10-5a, lb/d <= 0.2) or
+  0.40 tw^2 [1 + (4 lb/d - 0.2)(tw/tf)^1.5] ... (J10-5b), Qf = 1, Omega 2.00, for forces
+  that push the flange into the web.
+
+Rectangular HSS walls under a concentrated force bearing across the full width of the wall
+(a cap plate or saddle, beta = 1) get the two sidewall limit states of AISC 360-16 K2
+(Table K2.2, recalled from memory; the same provisions were 360-10 K1.3): sidewall local
+yielding Rn = 2 Fy t (5k + lb), k the outside corner radius (2.5k + lb within the depth of
+the member end, as J10-3), Omega 1.50; sidewall local crippling Rn = 1.6 t^2 [1 + 3 lb /
+(H - 3t)] sqrt(E Fy) Qf, Omega 2.00, with the end form taken as J10-5 for two walls (from
+memory). Qf = 1.3 - 0.4 U / beta <= 1 depends on the utilisation U of the tube; it is taken
+at its lower bound 1.3 - 0.4 Z/S, valid whenever the bending check passes (U = M Omega /
+(Fy S) <= Z / S), so the check stays linear in the loads.
+
+Bearing length lb comes from the job (``bearing`` on a support or a point load, ``beam.bearing``
+for all); when it is missing lb = 0 (a knife edge: the lowest strength, conservative) and the
+check says so. Every check is linear in the concentrated force, so the capacity search scales
+it exactly.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass
+
+from shopbeam.design.checks import Check, Unchecked
+
+OMEGA_FLB = 1.67  # AISC 360-16 J10.1
+OMEGA_WLY = 1.50  # AISC 360-16 J10.2
+OMEGA_WCR = 2.00  # AISC 360-16 J10.3
+SOURCE = "AISC 360-16"
+HSS_SOURCE = "AISC 360-16 (from memory)"
+ZERO = 1e-9  # N: smaller forces are not forces
+
+
+# ------------------------------------------------------------------ the formulas (SI)
+def web_local_yielding(fy: float, tw: float, k: float, lb: float, end: float,
+                       d: float) -> tuple[float, str]:
+    """AISC 360-16 J10.2: (Rn, equation). `end` is the distance from the member end."""
+    if end > d:
+        return fy * tw * (5 * k + lb), "J10-2"
+    return fy * tw * (2.5 * k + lb), "J10-3"
+
+
+def web_crippling(e: float, fy: float, tw: float, tf: float, d: float, lb: float,
+                  end: float, qf: float = 1.0) -> tuple[float, str]:
+    """AISC 360-16 J10.3: (Rn, equation)."""
+    root = math.sqrt(e * fy * tf / tw) * qf
+    r = (tw / tf) ** 1.5
+    if end >= d / 2:
+        return 0.80 * tw**2 * (1 + 3 * (lb / d) * r) * root, "J10-4"
+    if lb / d <= 0.2:
+        return 0.40 * tw**2 * (1 + 3 * (lb / d) * r) * root, "J10-5a"
+    return 0.40 * tw**2 * (1 + (4 * lb / d - 0.2) * r) * root, "J10-5b"
+
+
+def flange_local_bending(fy: float, tf: float, end: float) -> tuple[float, str]:
+    """AISC 360-16 J10.1: Rn = 6.25 Fyf tf^2, halved within 10 tf of the member end."""
+    rn = 6.25 * fy * tf**2
+    if end < 10 * tf:
+        return 0.5 * rn, "J10-1 (x0.5: within 10 tf of the end)"
+    return rn, "J10-1"
+
+
+def hss_wall_yielding(fy: float, t: float, k: float, lb: float, end: float,
+                      h: float) -> tuple[float, str]:
+    """AISC 360-16 Table K2.2 sidewall local yielding (both walls), from memory."""
+    if end > h:
+        return 2 * fy * t * (5 * k + lb), "K2.2 sidewall local yielding 2 Fy t (5k + lb)"
+    return 2 * fy * t * (2.5 * k + lb), "K2.2 sidewall local yielding 2 Fy t (2.5k + lb) (end)"
+
+
+def hss_wall_crippling(e: float, fy: float, t: float, h: float, lb: float, end: float,
+                       qf: float) -> tuple[float, str]:
+    """AISC 360-16 Table K2.2 sidewall local crippling (both walls), from memory."""
+    hw = h - 3 * t
+    root = math.sqrt(e * fy) * qf
+    if end >= h / 2:
+        return 1.6 * t**2 * (1 + 3 * lb / hw) * root, \
+            "K2.2 sidewall local crippling 1.6 t^2 (1 + 3 lb/(H - 3t)) sqrt(E Fy) Qf"
+    if lb / hw <= 0.2:
+        return 0.8 * t**2 * (1 + 3 * lb / hw) * root, "K2.2 sidewall crippling, end form as J10-5a"
+    return 0.8 * t**2 * (1 + (4 * lb / hw - 0.2)) * root, \
+        "K2.2 sidewall crippling, end form as J10-5b"
+
+
+def hss_qf_lower(sec) -> float:
+    """Lower bound of Qf = 1.3 - 0.4 U (beta = 1) while the bending check passes."""
+    s = min(sec.sx_top, sec.sx_bot)
+    z = sec.zx or s
+    return max(0.0, min(1.0, 1.3 - 0.4 * z / s))
+
+
+# ------------------------------------------------------------------ the forces of a state
+@dataclass(frozen=True)
+class Force:
+    """A concentrated force on the member: + up, entering through the top or bottom face."""
+
+    at: float
+    force: float
+    face: str  # "top" | "bottom"
+    bearing: float | None  # m; None: not given
+    what: str
+    moving: bool = False  # a wheel of a [[moving]] set
+
+    @property
+    def pulls(self) -> bool:
+        """True when the force pulls its flange away from the web (tension in the web)."""
+        return (self.face == "top" and self.force > 0) or (self.face == "bottom" and self.force < 0)
+
+
+def _table(data, name, i):
+    t = (data or {}).get(name, [])
+    if isinstance(t, list) and 0 <= i < len(t) and isinstance(t[i], dict):
+        return t[i]
+    return {}
+
+
+def _index(key: str, name: str) -> int | None:
+    if key.startswith(name + "["):
+        try:
+            return int(key[len(name) + 1:key.index("]")])
+        except ValueError:
+            return None
+    return None
+
+
+def _bearing(raw, key: str) -> float:
+    from shopbeam import units
+
+    return units.parse(raw, "length", key, nonnegative=True)
+
+
+def default_bearing(job) -> float | None:
+    beam = (job.data or {}).get("beam", {}) or {}
+    if "bearing" in beam:
+        return _bearing(beam["bearing"], "beam.bearing")
+    return None
+
+
+def face_of(job, key: str) -> str:
+    """The flange a point load enters through: `flange` on its [[loads]] entry (default top);
+    wheels of a [[moving]] set run on the bottom flange of a lifting job (a trolley)."""
+    from shopbeam.errors import InputError
+
+    i = _index(key, "loads")
+    if i is not None:
+        raw = _table(job.data, "loads", i).get("flange", "top")
+        if raw not in ("top", "bottom"):
+            raise InputError("flange must be \"top\" (the load bears on the top flange) or "
+                             "\"bottom\" (it hangs from the bottom flange)", f"{key}.flange")
+        return raw
+    if key.startswith("moving") and job.lifting:
+        return "bottom"
+    return "top"
+
+
+def forces_of(job, sol) -> list[Force]:
+    """Every concentrated force of one solved state: reactions (on the bottom face) and point
+    loads summed where they act together."""
+    from shopbeam import units
+
+    dflt = default_bearing(job)
+    fmt = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+    out = []
+    for n, r in enumerate(sol.reactions):
+        if abs(r.force) <= ZERO:
+            continue
+        i = _index(r.key or "", "supports")
+        lb = dflt
+        if i is not None:
+            t = _table(job.data, "supports", i)
+            if "bearing" in t:
+                lb = _bearing(t["bearing"], f"supports[{i}].bearing")
+        out.append(Force(r.at, r.force, "bottom", lb, f"{r.kind} support at {fmt(r.at)}"))
+    tol = 1e-9 * max(job.length, 1e-9)
+    groups: dict[tuple, list] = {}
+    for ld in sol.beam.loads:
+        if ld.kind != "point" or ld.value == 0:
+            continue
+        key = ld.key or ""
+        face = face_of(job, key)
+        lb = dflt
+        i = _index(key, "loads")
+        if i is not None:
+            t = _table(job.data, "loads", i)
+            if "bearing" in t:
+                lb = _bearing(t["bearing"], f"loads[{i}].bearing")
+        slot = (round(ld.at / tol), face)
+        groups.setdefault(slot, []).append((ld, lb))
+    for (_, face), items in groups.items():
+        total = sum(ld.value for ld, _ in items)
+        if abs(total) <= ZERO:
+            continue
+        bearings = [lb for _, lb in items]
+        lb = None if any(b is None for b in bearings) else min(bearings)
+        at = items[0][0].at
+        names = sorted({(ld.label or ld.key or "point load") for ld, _ in items})
+        mv = any((ld.key or "").startswith("moving") for ld, _ in items)
+        out.append(Force(at, total, face, lb, f"{', '.join(names)} at {fmt(at)}", mv))
+    return out
+
+
+# ------------------------------------------------------------------ checks of one state
+def applies(sec) -> str:
+    """"web" (I-shapes, channels and their built-up forms, strong axis), "hss" or ""."""
+    shape = sec.shape
+    if shape in ("i-beam", "channel", "double-channel") and sec.axis == "strong":
+        return "web"
+    if shape == "cover-plated" and "tw" in sec.dims:
+        return "web"
+    if shape == "rect-tube" or (shape == "cover-plated" and "t_des" in sec.dims):
+        return "hss"
+    return ""
+
+
+def local_checks(job, sol, sec=None) -> list[Check]:
+    """The worst of each local limit state over the concentrated forces of one state."""
+    sec = sec or job.section
+    kind = applies(sec)
+    if not kind or getattr(job.material, "kind", "") not in ("steel", "stainless"):
+        return []
+    forces = forces_of(job, sol)
+    if not forces:
+        return []
+    mat = job.material
+    fy, e = mat.fy, mat.e
+    d = sec.dims
+    length = job.length
+    worst: dict[str, tuple] = {}
+
+    def keep(name, f, rn, eq, omega, clause, extra):
+        demand = abs(f.force)
+        allow = rn / omega
+        ratio = demand / allow if allow > 0 else math.inf
+        old = worst.get(name)
+        if old is None or ratio > old[0]:
+            worst[name] = (ratio, f, rn, eq, omega, clause, extra)
+
+    webs = 2 if sec.shape == "double-channel" else 1
+    for f in forces:
+        end = max(0.0, min(f.at, length - f.at))
+        lb = f.bearing if f.bearing is not None else 0.0
+        if kind == "web":
+            tw, tf, dd, k = d["tw"], d["tf"], d["d"], d["kdes"]
+            rn, eq = web_local_yielding(fy, tw, k, lb, end, dd)
+            keep("web local yielding", f, webs * rn, eq, OMEGA_WLY, "AISC 360-16 J10.2",
+                 {"tw": tw, "k": k, "d": dd, "webs": webs})
+            if f.pulls:
+                rn, eq = flange_local_bending(fy, tf, end)
+                if not (job.lifting and f.moving):  # trolley wheels: see the wheel check
+                    keep("flange local bending", f, rn, eq, OMEGA_FLB, "AISC 360-16 J10.1",
+                         {"tf": tf})
+            else:
+                rn, eq = web_crippling(e, fy, tw, tf, dd, lb, end)
+                keep("web crippling", f, webs * rn, eq, OMEGA_WCR, "AISC 360-16 J10.3",
+                     {"tw": tw, "tf": tf, "d": dd, "webs": webs, "qf": 1.0})
+        else:
+            t, h = d["t_des"], d["h"]
+            k = d.get("r_out") or 1.5 * t
+            rn, eq = hss_wall_yielding(fy, t, k, lb, end, h)
+            keep("wall local yielding", f, rn, eq, OMEGA_WLY, "AISC 360-16 K2, Table K2.2",
+                 {"t": t, "k": k, "h": h})
+            if not f.pulls:
+                qf = hss_qf_lower(sec)
+                rn, eq = hss_wall_crippling(e, fy, t, h, lb, end, qf)
+                keep("wall crippling", f, rn, eq, OMEGA_WCR, "AISC 360-16 K2, Table K2.2",
+                     {"t": t, "h": h, "qf": qf})
+    return [_check(job, name, *w) for name, w in worst.items()]
+
+
+def _check(job, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
+    from shopbeam import units
+
+    lb = f.bearing if f.bearing is not None else 0.0
+    given = (f"bearing length {units.fmt(lb, 'length', job.units)} from the job"
+             if f.bearing is not None else
+             "bearing length not given: lb = 0 taken (a knife edge, conservative); give "
+             "bearing = \"...\" on the support or load, or beam.bearing")
+    src = HSS_SOURCE if clause.endswith("K2.2") else SOURCE
+    formula = {"web local yielding": "Ru <= Rn / 1.50, Rn = Fyw tw (5k + lb) (J10-2) or "
+                                     "Fyw tw (2.5k + lb) within d of the end (J10-3)",
+               "web crippling": "Ru <= Rn / 2.00, Rn = 0.80 tw^2 [1 + 3 (lb/d)(tw/tf)^1.5] "
+                                "sqrt(E Fyw tf / tw) Qf (J10-4; J10-5a/b within d/2 of the end)",
+               "flange local bending": "Ru <= Rn / 1.67, Rn = 6.25 Fyf tf^2 (J10-1; half within "
+                                       "10 tf of the end)",
+               "wall local yielding": "Ru <= Rn / 1.50, Rn = 2 Fy t (5k + lb), k = outside "
+                                      "corner radius (load across the full wall width)",
+               "wall crippling": "Ru <= Rn / 2.00, Rn = 1.6 t^2 [1 + 3 lb/(H - 3t)] sqrt(E Fy) "
+                                 "Qf, Qf = 1.3 - 0.4 Z/S (lower bound while bending passes)"}[name]
+    params = {"Rn": rn, "omega": omega, "lb": lb, "fy": job.material.fy,
+              "end_distance": max(0.0, min(f.at, job.length - f.at))}
+    params.update({k: float(v) for k, v in extra.items()})
+    sense = "pulls on" if f.pulls else "bears on"
+    return Check(name, abs(f.force), rn / omega, "N", f"{clause}: {formula}", f.at,
+                 detail=f"{f.what} ({sense} the {f.face} flange): {eq}; {given}",
+                 clause=clause, source=src, params=params)
+
+
+def local_unchecked(job, sec=None) -> list[Unchecked]:
+    """Concentrated-force limit states this module does not check, for shapes it does not
+    cover."""
+    sec = sec or job.section
+    if getattr(job.material, "kind", "") not in ("steel", "stainless"):
+        return []
+    kind = applies(sec)
+    out = []
+    if kind == "hss":
+        out.append(Unchecked(
+            "HSS top-wall plastification and punching under a narrow bearing",
+            "the wall checks assume the load bears across the full width of the tube (a cap "
+            "plate or saddle, beta = 1); a narrower plate, a bolt or a hanging lug needs the "
+            "other rows of Table K2.2", "AISC 360-16 K2, Table K2.2", blocks_rating=False))
+    elif sec.shape in ("i-beam", "channel") and sec.axis == "weak":
+        out.append(Unchecked("local bearing of the flanges (weak axis)",
+                             "concentrated forces on a member bent about its weak axis load "
+                             "the flange edges; no check is made", "AISC 360-16 J10",
+                             blocks_rating=False))
+    elif sec.shape in ("round-tube", "pipe"):
+        out.append(Unchecked("round HSS wall under a concentrated force",
+                             "local plastification of a round wall at supports and point "
+                             "loads is not checked (bear it on a saddle)",
+                             "AISC 360-16 K2, Table K2.1", blocks_rating=False))
+    elif sec.shape in ("tee", "angle"):
+        out.append(Unchecked("stem or leg local yielding under a concentrated force",
+                             "concentrated forces at supports and point loads of tees and "
+                             "angles are not checked locally", "AISC 360-16 J10",
+                             blocks_rating=False))
+    return out

@@ -1,0 +1,306 @@
+"""Bending of tees (AISC 360-16 F9) and single angles (F10), and loads off the shear centre.
+
+Tees (WT, MT, ST and typed-in tees) bent about the axis of symmetry, by the sign of the
+moment along each unbraced length (flange on top: a sagging moment puts the stem in tension,
+a hogging one, as on a cantilever loaded down, puts the stem in compression):
+
+- F9.1 yielding: stem in tension Mp = Fy Zx <= 1.6 My (F9-2), My = Fy Sx (F9-3, Sx to the
+  stem tip); stem in compression Mp = My (F9-4).
+- F9.2 lateral-torsional buckling: stem in tension, Lp = 1.76 ry sqrt(E/Fy) (F9-8), Lr per
+  F9-9, Mn = Mp - (Mp - My)(Lb - Lp)/(Lr - Lp) (F9-6), Mcr beyond Lr (F9-7);
+  Mcr = 1.95 E / Lb sqrt(Iy J) (B + sqrt(1 + B^2)) (F9-10), B = +2.3 (d/Lb) sqrt(Iy/J)
+  (F9-11); stem in compression anywhere along the unbraced length: B = -2.3 (d/Lb)
+  sqrt(Iy/J) (F9-12) and Mn = Mcr <= My (F9-13), used then for both signs (conservative).
+  Cb is taken 1.0 (F9 gives none; conservative).
+- F9.3 flange local buckling (flange in compression): noncompact Mn = Mp - (Mp - 0.7 Fy
+  Sxc)(lambda - lambda_pf)/(lambda_rf - lambda_pf) <= 1.6 My (F9-14), slender
+  Mn = 0.7 E Sxc / (bf/2tf)^2 (F9-15), lambda_pf = 0.38 sqrt(E/Fy), lambda_rf = 1.0 sqrt(E/Fy).
+- F9.4 stem local buckling (stem in compression): Mn = Fcr Sx (F9-16), Fcr = Fy for d/tw <=
+  0.84 sqrt(E/Fy) (F9-17), (1.43 - 0.515 (d/tw) sqrt(Fy/E)) Fy up to 1.52 sqrt(E/Fy) (F9-18),
+  1.52 E / (d/tw)^2 beyond (F9-19).
+
+Single angles, unless the job says the angle is restrained (``beam.restrained = true``: held
+against twist and sideways movement all along, so it bends about its geometric axis), bend
+about their principal axes: the vertical-plane moment M splits into Mw = M cos(alpha) about
+the major axis and Mz = M sin(alpha) about the minor axis (alpha between the geometric and
+principal axes, tan(alpha) from the AISC database or computed). Each is checked by F10 and
+the two are added by H2-1 (the ratios are added without their signs: conservative):
+
+- F10.1 yielding Mn = 1.5 My (F10-1), My = Fy S about that axis (S to the farthest point).
+- F10.2 lateral-torsional buckling (major axis only): Mcr = 9 E A rz t Cb / (8 Lb)
+  [sqrt(1 + (4.4 beta_w rz / (Lb t))^2) + 4.4 beta_w rz / (Lb t)] (F10-4), beta_w = 0 for
+  equal legs and -|beta_w| (long leg in compression: the lower value) for unequal legs,
+  Cb <= 1.5; Mn = (1.92 - 1.17 sqrt(My/Mcr)) My <= 1.5 My (F10-2) or (0.92 - 0.17 Mcr/My)
+  Mcr (F10-3).
+- F10.3 leg local buckling, b/t of the longer leg: noncompact Mn = Fy Sc (2.43 - 1.72 (b/t)
+  sqrt(Fy/E)) (F10-6), slender Mn = Fcr Sc, Fcr = 0.71 E / (b/t)^2 (F10-7, F10-8),
+  lambda_p = 0.54 sqrt(E/Fy), lambda_r = 0.91 sqrt(E/Fy); Sc to the toes.
+
+Vertical deflection of an unrestrained angle is the geometric figure times
+Ix (cos^2(alpha)/Iw + sin^2(alpha)/Iz) (curvatures about the two principal axes, projected
+back on the vertical plane); it also moves sideways by Ix sin(alpha) cos(alpha)
+(1/Iz - 1/Iw) times the geometric figure. Equation numbers and the Cb cap of F10 are recalled
+from memory of AISC 360-16.
+
+Channels, angles and tees loaded in the plane of the web are loaded off their shear centre:
+the load twists them. AISC 360 gives no beam check for that here; `torsion_note` quantifies
+it (torque per unit length or per load, and a rough St Venant shear stress t T / J, named as
+such) so it is never silent.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass
+
+from shopbeam.design.checks import OMEGA_B
+
+F9_SOURCE = "AISC 360-16 F9 (equation numbers from memory)"
+F10_SOURCE = "AISC 360-16 F10 (equation numbers and Cb cap from memory)"
+CB_MAX_ANGLE = 1.5  # AISC 360-16 F10.2 (from memory)
+
+
+# ------------------------------------------------------------------ F9 tees
+@dataclass(frozen=True)
+class TeeProps:
+    fy: float
+    e: float
+    d: float
+    bf: float
+    tf: float
+    tw: float
+    zx: float
+    sx: float  # to the stem tip (the smaller)
+    sxc: float  # to the flange (compression flange for F9.3)
+    iy: float
+    j: float
+    ry: float
+
+
+def tee_props(sec, fy: float, e: float) -> TeeProps:
+    d = sec.dims
+    s_small, s_big = min(sec.sx_top, sec.sx_bot), max(sec.sx_top, sec.sx_bot)
+    return TeeProps(fy, e, d["d"], d["bf"], d["tf"], d["tw"], sec.zx or s_small, s_small, s_big,
+                    sec.iy, sec.j, sec.ry)
+
+
+def flange_on_top(sec) -> bool:
+    """The flange side of a tee has the larger section modulus (centroid near the flange)."""
+    return sec.sx_top >= sec.sx_bot
+
+
+def f9_mcr(p: TeeProps, lb: float, stem_compression: bool) -> float:
+    """F9-10 with B from F9-11 (stem in tension) or F9-12 (stem in compression)."""
+    b = 2.3 * (p.d / lb) * math.sqrt(p.iy / p.j)
+    if stem_compression:
+        b = -b
+    return 1.95 * p.e / lb * math.sqrt(p.iy * p.j) * (b + math.sqrt(1 + b * b))
+
+
+def f9_stem_tension(p: TeeProps, lb: float | None) -> tuple[float, str]:
+    """Mn and the governing provision for a tee with its stem in tension (flange in
+    compression). lb None: continuously braced."""
+    my = p.fy * p.sx
+    mp = min(p.fy * p.zx, 1.6 * my)
+    out = [(mp, "F9-2 yielding Mp = Fy Zx <= 1.6 My")]
+    if lb is not None and lb > 0:
+        root = math.sqrt(p.e / p.fy)
+        lp = 1.76 * p.ry * root
+        lr = 1.95 * (p.e / p.fy) * math.sqrt(p.iy * p.j) / p.sx * math.sqrt(
+            2.36 * (p.fy / p.e) * p.d * p.sx / p.j + 1)
+        if lb > lp:
+            if lb <= lr:
+                out.append((mp - (mp - my) * (lb - lp) / (lr - lp),
+                            f"F9-6 LTB, stem in tension, Lp {lp / 0.0254:.3g} in < Lb "
+                            f"{lb / 0.0254:.4g} in <= Lr {lr / 0.0254:.4g} in"))
+            else:
+                out.append((f9_mcr(p, lb, False), f"F9-7/F9-10 LTB, stem in tension, Lb "
+                            f"{lb / 0.0254:.4g} in > Lr {lr / 0.0254:.4g} in"))
+    lam = p.bf / (2 * p.tf)
+    root = math.sqrt(p.e / p.fy)
+    lpf, lrf = 0.38 * root, 1.0 * root
+    if lam > lpf:
+        if lam <= lrf:
+            m = min(mp - (mp - 0.7 * p.fy * p.sxc) * (lam - lpf) / (lrf - lpf), 1.6 * my)
+            out.append((m, f"F9-14 flange local buckling (noncompact, bf/2tf {lam:.3g})"))
+        else:
+            out.append((0.7 * p.e * p.sxc / lam**2,
+                        f"F9-15 flange local buckling (slender, bf/2tf {lam:.3g})"))
+    return min(out, key=lambda t: t[0])
+
+
+def f9_stem_compression(p: TeeProps, lb: float | None) -> tuple[float, str]:
+    """Mn and the governing provision for a tee with its stem in compression."""
+    my = p.fy * p.sx
+    out = [(my, "F9-4 yielding Mp = My = Fy Sx (stem in compression)")]
+    if lb is not None and lb > 0:
+        mcr = f9_mcr(p, lb, True)
+        out.append((min(mcr, my), f"F9-13 LTB, stem in compression, Mcr by F9-10/F9-12 "
+                                  f"(Lb {lb / 0.0254:.4g} in)"))
+    dt = p.d / p.tw
+    root = math.sqrt(p.e / p.fy)
+    if dt <= 0.84 * root:
+        fcr, eq = p.fy, "F9-17"
+    elif dt <= 1.52 * root:
+        fcr, eq = (1.43 - 0.515 * dt / root) * p.fy, "F9-18"
+    else:
+        fcr, eq = 1.52 * p.e / dt**2, "F9-19"
+    out.append((fcr * p.sx, f"F9-16 stem local buckling, Fcr by {eq} (d/tw {dt:.3g})"))
+    return min(out, key=lambda t: t[0])
+
+
+def f9_ltb_with_compression(p: TeeProps, lb: float | None) -> tuple[float, str] | None:
+    """F9.2(b): the stem is in compression somewhere along Lb: Mn = Mcr (B negative) <= My,
+    applied to the stem-in-tension moments of the same length too."""
+    if lb is None or lb <= 0:
+        return None
+    return (min(f9_mcr(p, lb, True), p.fy * p.sx),
+            f"F9-13 LTB with the stem in compression along Lb {lb / 0.0254:.4g} in")
+
+
+# ------------------------------------------------------------------ F10 angles
+@dataclass(frozen=True)
+class AngleProps:
+    """Principal-axis properties of an angle (SI), the vertical leg d, horizontal leg b."""
+
+    d: float
+    b: float
+    t: float
+    area: float
+    ix: float  # geometric, the axis of bending
+    iy: float
+    iw: float  # major principal
+    iz: float  # minor principal
+    alpha: float  # angle between the geometric and principal axes (rad)
+    sw: float  # to the farthest point from the major axis
+    sz: float  # to the farthest point from the minor axis
+    sz_toe: float  # minor axis, to the farthest toe
+    rz: float
+    beta_w: float  # |beta_w|; 0 for equal legs
+
+
+def _corners(d, b, t):
+    return [(0.0, 0.0), (0.0, d), (t, d), (b, 0.0), (b, t)]
+
+
+def angle_props(sec) -> AngleProps:
+    """From the section's tabulated or computed properties: Ix, Iy, Iz and tan(alpha) with the
+    leg dimensions and the centroid (x from the back of the vertical leg, y from the heel).
+    Section moduli about the principal axes are taken to the outer corners of the legs
+    (computed angles) or from the AISC database (Sw, Sz, catalog angles)."""
+    dm = sec.dims
+    d, b, t = dm["d"], dm["b"], dm["t"]
+    xb, yb = dm["x"], dm["y"]
+    ix, iy = sec.ix, sec.iy
+    iz = dm["iz"]
+    iw = ix + iy - iz
+    # product of inertia about the centroid: legs along +x and +y from the heel, so negative
+    pxy = -math.sqrt(max((ix - iz) * (iy - iz), 0.0))
+    # direction (unit vector in x, y) of the major principal axis w: the eigenvector of the
+    # coordinate second-moment matrix [[Iy, Pxy], [Pxy, Ix]] with the smaller eigenvalue is
+    # the normal of the w axis
+    theta = 0.5 * math.atan2(2 * pxy, iy - ix)
+    # along u_big the coordinates spread most: it is the normal of the major axis w (bending
+    # about w stresses the section in proportion to r . u_big); u_small is the normal of the
+    # minor axis z and runs along w
+    u_big = (math.cos(theta), math.sin(theta))
+    u_small = (-math.sin(theta), math.cos(theta))
+    pts = [(px - xb, py - yb) for px, py in _corners(d, b, t)]
+
+    def far(u, which=None):
+        return max(abs(px * u[0] + py * u[1]) for px, py in (which or pts))
+
+    sw = iw / far(u_big)
+    sz = iz / far(u_small)
+    toes = [pts[1], pts[2], pts[3], pts[4]]
+    sz_toe = iz / far(u_small, toes)
+    alpha = math.acos(min(1.0, abs(u_small[0])))  # w axis against the geometric x axis
+    if dm.get("sw") and dm.get("sz"):  # tabulated (AISC Shapes Database v15.0)
+        iw = dm.get("iw") or iw
+        sw, sz = dm["sw"], dm["sz"]
+        sz_toe = max(sz_toe, sz)
+    beta = 0.0 if abs(d - b) <= 1e-9 * max(d, b) else abs(beta_w(d, b, t, xb, yb, iw, u_big))
+    return AngleProps(d, b, t, sec.area, ix, iy, iw, iz, alpha, sw, sz, sz_toe,
+                      math.sqrt(iz / sec.area), beta)
+
+
+def beta_w(d, b, t, xb, yb, iw, n_w, cells: int = 400) -> float:
+    """beta_w = (1/Iw) int z (w^2 + z^2) dA - 2 z0 (AISC 360-16 Commentary F10, from memory):
+    z the coordinate normal to the major axis, z0 the shear centre (the legs' crossing) on it.
+    Midpoint rule over the two legs (thin strips; fillets left out)."""
+    wdir = (n_w[1], -n_w[0])
+    tot = 0.0
+    for (x0, x1, y0, y1) in ((0.0, t, 0.0, d), (t, b, 0.0, t)):
+        nx, ny = (4, cells) if (y1 - y0) > (x1 - x0) else (cells, 4)
+        dx, dy = (x1 - x0) / nx, (y1 - y0) / ny
+        for i in range(nx):
+            cx = x0 + (i + 0.5) * dx - xb
+            for k in range(ny):
+                cy = y0 + (k + 0.5) * dy - yb
+                z = cx * n_w[0] + cy * n_w[1]
+                w = cx * wdir[0] + cy * wdir[1]
+                tot += z * (w * w + z * z) * dx * dy
+    z0 = (t / 2 - xb) * n_w[0] + (t / 2 - yb) * n_w[1]
+    return tot / iw - 2 * z0
+
+
+def f10_major(p: AngleProps, fy: float, e: float, lb: float | None, cb: float) -> tuple[float, str]:
+    my = fy * p.sw
+    out = [(1.5 * my, "F10-1 yielding 1.5 My (major axis)")]
+    if lb is not None and lb > 0:
+        cb = min(cb, CB_MAX_ANGLE)
+        g = 4.4 * (-p.beta_w) * p.rz / (lb * p.t)
+        mcr = 9 * e * p.area * p.rz * p.t * cb / (8 * lb) * (math.sqrt(1 + g * g) + g)
+        if my / mcr <= 1.0:
+            m = min((1.92 - 1.17 * math.sqrt(my / mcr)) * my, 1.5 * my)
+            eq = "F10-2"
+        else:
+            m = (0.92 - 0.17 * mcr / my) * mcr
+            eq = "F10-3"
+        out.append((m, f"{eq} LTB about the major axis, Mcr by F10-4 (Lb {lb / 0.0254:.4g} in, "
+                       f"Cb {cb:.2f}, beta_w {-p.beta_w / 0.0254:.3g} in)"))
+    llb = _leg_buckling(p, fy, e, p.sw)
+    if llb:
+        out.append(llb)
+    return min(out, key=lambda t: t[0])
+
+
+def f10_minor(p: AngleProps, fy: float, e: float) -> tuple[float, str]:
+    out = [(1.5 * fy * p.sz, "F10-1 yielding 1.5 My (minor axis)")]
+    llb = _leg_buckling(p, fy, e, p.sz_toe)
+    if llb:
+        out.append(llb)
+    return min(out, key=lambda t: t[0])
+
+
+def f10_geometric(p: AngleProps, fy: float, e: float, s_min: float) -> tuple[float, str]:
+    """Restrained angle bent about its geometric axis: F10.1 and F10.3 only."""
+    out = [(1.5 * fy * s_min, "F10-1 yielding 1.5 My (geometric axis, restrained)")]
+    llb = _leg_buckling(p, fy, e, s_min)
+    if llb:
+        out.append(llb)
+    return min(out, key=lambda t: t[0])
+
+
+def _leg_buckling(p: AngleProps, fy: float, e: float, sc: float):
+    lam = max(p.d, p.b) / p.t
+    root = math.sqrt(e / fy)
+    if lam <= 0.54 * root:
+        return None
+    if lam <= 0.91 * root:
+        return (fy * sc * (2.43 - 1.72 * lam / root),
+                f"F10-6 leg local buckling (noncompact, b/t {lam:.3g})")
+    return (0.71 * e / lam**2 * sc, f"F10-7/F10-8 leg local buckling (slender, b/t {lam:.3g})")
+
+
+def angle_deflection_factors(p: AngleProps) -> tuple[float, float]:
+    """(vertical, sideways) deflection of an unrestrained angle per unit geometric-axis
+    deflection (the same moment diagram; uniform member)."""
+    c, s = math.cos(p.alpha), math.sin(p.alpha)
+    v = p.ix * (c * c / p.iw + s * s / p.iz)
+    h = p.ix * s * c * abs(1 / p.iz - 1 / p.iw)
+    return v, h
+
+
+def omega() -> float:
+    return OMEGA_B
