@@ -139,6 +139,12 @@ def test_moving_envelope_matches_a_fine_resolve(b, more, s):
     ev = evaluate(job)
     bf = envelope_bruteforce(job, 1.0, 601)
     for c in ev.checks:
+        if c.name not in ("bending", "shear", "deflection"):
+            # local checks (J10 at supports and wheels): their limit depends on where the
+            # force acts, so compare the worst ratio
+            ref = bf[c.name][2]
+            assert ref * (1 - 1e-12) <= c.ratio <= ref * (1 + 3e-3)
+            continue
         ref = bf[c.name][0]
         assert c.demand >= ref * (1 - 1e-12)
         assert c.demand <= ref * (1 + 3e-3)

@@ -43,8 +43,14 @@ def length_formatter(system: str):
 
 
 def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
+    from shopbeam.design.open_shapes import replaces_angle_warning
+    from shopbeam.members.sections import ANGLE_WARNING
+
     out = cautions_for(job.tags)
-    out.extend(getattr(job.section, "warnings", ()) or ())
+    warns = list(getattr(job.section, "warnings", ()) or ())
+    if replaces_angle_warning(job):  # F10 checks the principal axes (or the job restrains it)
+        warns = [w for w in warns if w != ANGLE_WARNING]
+    out.extend(warns)
     if job.members > 1:
         out.append(f"Loads are shared by {job.members} identical members: each is checked for "
                    f"1/{job.members} of the entered loads. Make sure the load really divides "
@@ -97,12 +103,39 @@ def analyze(job: Job) -> Result:
         shown = "; ".join(extra)
     else:
         checks = run_checks(job, sol)
-    return Result(job, sol, tuple(checks), tuple(job_cautions(job, sol) + check_notes(job)), shown,
-                  state_sol, state_words)
+    from shopbeam.design.local import connection_notes
+
+    notes = connection_notes(job, sol) + member_notes(job)
+    return Result(job, sol, tuple(checks),
+                  tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
+                  state_sol, state_words, tuple(unchecked_for(job)))
+
+
+def member_notes(job: Job) -> list[str]:
+    """Cautions about what the member type does that the checks do not cover in numbers."""
+    from shopbeam.design.open_shapes import torsion_note
+
+    out = []
+    t = torsion_note(job, job.section)
+    if t:
+        out.append(t)
+    return out
+
+
+def unchecked_for(job: Job) -> list[Unchecked]:
+    """Limit states the member calls for that shopbeam does not check (see `Unchecked`)."""
+    from shopbeam.design.checks import strengths
+    from shopbeam.design.local import local_unchecked
+    from shopbeam.design.open_shapes import open_unchecked
+
+    st = strengths(job)
+    return local_unchecked(job) + open_unchecked(job, st)
 
 
 def to_json(result: Result) -> dict:
     """The contract's JSON (SI units throughout)."""
+    from shopbeam.design.local import fixed_end_moments, hinge_shears
+
     job, sol = result.job, result.solution
     ex = sol.extremes()
     return {
@@ -119,6 +152,9 @@ def to_json(result: Result) -> dict:
         "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),
         "unchecked": [u.as_dict() for u in result.unchecked],
+        "hinges": [{"at": h["at"], "shear": h["shear"]} for h in hinge_shears(job, sol)],
+        "fixed_ends": [{"at": f["at"], "moment": f["moment"], "shear": f["force"]}
+                       for f in fixed_end_moments(job, sol)],
         "warnings": [p.located() for p in job.warnings if p.warning],
         "members": job.members,
         "section": getattr(job.section, "designation", ""),

@@ -30,7 +30,7 @@ without re-deriving anything.
 from __future__ import annotations
 
 import math
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 
 from shopbeam.engine.solver import Solution, segments
 from shopbeam.jobs.rules import (DEFAULT_IMPACT, DEFLECTION_PRESETS,  # noqa: F401 (re-exported)
@@ -183,6 +183,7 @@ class Flexure:
     ltb: tuple | None = None  # (kind, params) for ltb1, None when LTB does not apply
     stress_s: float | None = None  # show as stress on this S (first-yield, lumber)
     warnings: tuple[str, ...] = ()
+    special: str = ""  # "F9" (tees) or "F10" (angles): checked by shopbeam.design.open_shapes
 
     def ltb1(self, lb: float) -> tuple[float, str]:
         """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern)."""
@@ -281,14 +282,21 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Fle
         h, b = d["h"], d["b"]
         ltb = ("F11", (fy * s, mp, e, fy, h, b)) if h > b else None
         return Flexure(mp, OMEGA_B, "F11-1 yielding Mn = Fy Z <= 1.6 Fy S", ltb=ltb)
-    warn = {"tee": "tee: AISC 360 F9 lateral-torsional and flange/stem local buckling are NOT "
-                   "checked; first yield only",
-            "angle": "angle: AISC 360 F10 lateral-torsional and leg local buckling are NOT "
-                     "checked; first yield only"}.get(
+    if (shape == "tee" and axis == "strong" and sec.iy and sec.j and sec.ry) or (
+            shape == "angle" and d.get("iz") and sec.iy):
+        # the bending check itself is F9 / F10 (shopbeam.design.open_shapes); this first-yield
+        # figure only ranks sections in the sizing sweep before they are checked in full
+        return Flexure(fy * s, OMEGA_B, "first yield My = Fy S, Omega 1.67 (sizing only)",
+                       special="F9" if shape == "tee" else "F10")
+    warn = {"tee": "tee bent about its weak axis: AISC 360 F9 covers the axis of symmetry "
+                   "only; first yield My = Fy S is checked, lateral-torsional and local "
+                   "buckling are not",
+            "angle": "angle without its principal-axis properties: AISC 360 F10 is not "
+                     "applied; first yield only"}.get(
         shape, f"{shape} section: lateral-torsional and local buckling are not checked; first "
                "yield only")
-    return Flexure(fy * s, OMEGA_B, "first yield My = Fy S, Omega 1.67 (F9/F10 limit states "
-                   "not covered)", warnings=(warn,))
+    return Flexure(fy * s, OMEGA_B, "first yield My = Fy S, Omega 1.67 (lateral-torsional "
+                   "and local buckling not covered)", warnings=(warn,))
 
 
 def _f2_f3(sec, fy, e) -> Flexure:
@@ -498,6 +506,7 @@ class Strengths:
     defl_ratio: float | None
     defl_abs: float | None
     defl_words: str
+    section: object = None  # the section these strengths are for
 
 
 def strengths(job, sec=None, beam=None) -> Strengths:
@@ -513,7 +522,7 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         l1, why = fl.ltb1(0.0 if braced else bb - a)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
-    return Strengths(b, fl, sh, tuple(segs), n, absolute, words)
+    return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec)
 
 
 def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
@@ -591,7 +600,15 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                  "(cantilevers and overhangs on twice their length)", w["at"],
                  detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} ({w['rule']})",
                  extra={"spans": spans})
-    return [bend, shear, defl]
+    from shopbeam.design import local, open_shapes
+
+    sec = st.section or job.section
+    if fl.special:
+        bend = open_shapes.bending_check(job, sol, st, sec, cb_one) or bend
+    angle_words = open_shapes.deflection_words(job, sec)
+    if angle_words:
+        defl = replace(defl, formula=f"{defl.formula}; {angle_words}")
+    return [bend, shear, defl] + local.local_checks(job, sol, sec)
 
 
 def warnings_for(job, st: Strengths | None = None) -> list[str]:

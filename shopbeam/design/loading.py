@@ -172,7 +172,10 @@ def state_set(job, section=None, parts: LoadParts | None = None, ei: float | Non
 
     parts = parts or load_parts(job, section)
     sec = section or job.section
-    ei = ei if ei is not None else job.material.e * sec.ix
+    if ei is None:
+        from shopbeam.members.sections import bending_ix
+
+        ei = job.material.e * bending_ix(sec, job.restrained)
     empty = Beam(job.length, ei, job.supports, ())
     segs = tuple(segments(empty))
     span_loads = []
@@ -504,7 +507,9 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None):
 
 
 def envelope_bruteforce(job, k: float = 1.0, n: int = 2001):
-    """Test oracle only: the checks re-solved at n evenly spaced positions."""
+    """Test oracle only: the checks re-solved at n evenly spaced positions: per check the
+    largest demand, where, and the largest ratio (local checks have a limit that depends on
+    where the force acts, so their worst is by ratio)."""
     from shopbeam.design.checks import checks_for, strengths
 
     ss = state_set(job)
@@ -519,8 +524,10 @@ def envelope_bruteforce(job, k: float = 1.0, n: int = 2001):
                   for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
         sol = solve(replace(ss.beam, loads=tuple(static) + tuple(wheels)))
         for c in checks_for(job, sol, st, cb_one=True):
-            if c.name not in worst or c.demand > worst[c.name][0]:
-                worst[c.name] = (c.demand, float(p))
+            d, at, r = worst.get(c.name, (-1.0, 0.0, -1.0))
+            if c.demand > d:
+                d, at = c.demand, float(p)
+            worst[c.name] = (d, at, max(r, c.ratio))
     return worst
 
 

@@ -168,15 +168,16 @@ def face_of(job, key: str) -> str:
 
 
 def forces_of(job, sol) -> list[Force]:
-    """Every concentrated force of one solved state: reactions (on the bottom face) and point
-    loads summed where they act together."""
+    """Every concentrated force of one solved state: reactions (on the bottom face; not at a
+    fixed end, which is a connection) and point loads summed where they act together."""
     from shopbeam import units
 
     dflt = default_bearing(job)
     fmt = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
     out = []
     for n, r in enumerate(sol.reactions):
-        if abs(r.force) <= ZERO:
+        # a fixed end is a connection (welded or bolted into a wall or column), not a bearing
+        if abs(r.force) <= ZERO or r.kind == "fixed":
             continue
         i = _index(r.key or "", "supports")
         lb = dflt
@@ -207,7 +208,8 @@ def forces_of(job, sol) -> list[Force]:
         bearings = [lb for _, lb in items]
         lb = None if any(b is None for b in bearings) else min(bearings)
         at = items[0][0].at
-        names = sorted({(ld.label or ld.key or "point load") for ld, _ in items})
+        names = sorted({(ld.label or (f"point load ({ld.key})" if ld.key else "point load"))
+                        for ld, _ in items})
         mv = any((ld.key or "").startswith("moving") for ld, _ in items)
         out.append(Force(at, total, face, lb, f"{', '.join(names)} at {fmt(at)}", mv))
     return out
@@ -226,66 +228,151 @@ def applies(sec) -> str:
     return ""
 
 
+def limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
+    """(name, Rn, equation, Omega, clause, params) of every local limit state that applies to
+    force f on this section (the direction decides: crippling only where the force bears on
+    the flange, flange local bending only where it pulls)."""
+    kind = applies(sec)
+    if not kind or getattr(mat, "kind", "") not in ("steel", "stainless"):
+        return []
+    fy, e = mat.fy, mat.e
+    d = sec.dims
+    end = max(0.0, min(f.at, length - f.at))
+    lb = f.bearing if f.bearing is not None else 0.0
+    out = []
+    if kind == "web":
+        webs = 2 if sec.shape == "double-channel" else 1
+        tw, tf, dd, k = d["tw"], d["tf"], d["d"], d["kdes"]
+        rn, eq = web_local_yielding(fy, tw, k, lb, end, dd)
+        out.append(("web local yielding", webs * rn, eq, OMEGA_WLY, "AISC 360-16 J10.2",
+                    {"tw": tw, "k": k, "d": dd, "webs": webs}))
+        if f.pulls:
+            if not (lifting and f.moving):  # trolley wheels: see the wheel-load check
+                rn, eq = flange_local_bending(fy, tf, end)
+                out.append(("flange local bending", rn, eq, OMEGA_FLB, "AISC 360-16 J10.1",
+                            {"tf": tf}))
+        else:
+            rn, eq = web_crippling(e, fy, tw, tf, dd, lb, end)
+            out.append(("web crippling", webs * rn, eq, OMEGA_WCR, "AISC 360-16 J10.3",
+                        {"tw": tw, "tf": tf, "d": dd, "webs": webs, "qf": 1.0}))
+    else:
+        t, h = d["t_des"], d["h"]
+        k = d.get("r_out") or 1.5 * t
+        rn, eq = hss_wall_yielding(fy, t, k, lb, end, h)
+        out.append(("wall local yielding", rn, eq, OMEGA_WLY, "AISC 360-16 K2, Table K2.2",
+                    {"t": t, "k": k, "h": h}))
+        if not f.pulls:
+            qf = hss_qf_lower(sec)
+            rn, eq = hss_wall_crippling(e, fy, t, h, lb, end, qf)
+            out.append(("wall crippling", rn, eq, OMEGA_WCR, "AISC 360-16 K2, Table K2.2",
+                        {"t": t, "h": h, "qf": qf}))
+    return out
+
+
 def local_checks(job, sol, sec=None) -> list[Check]:
     """The worst of each local limit state over the concentrated forces of one state."""
     sec = sec or job.section
-    kind = applies(sec)
-    if not kind or getattr(job.material, "kind", "") not in ("steel", "stainless"):
+    if not applies(sec) or getattr(job.material, "kind", "") not in ("steel", "stainless"):
         return []
-    forces = forces_of(job, sol)
-    if not forces:
-        return []
-    mat = job.material
-    fy, e = mat.fy, mat.e
-    d = sec.dims
-    length = job.length
     worst: dict[str, tuple] = {}
-
-    def keep(name, f, rn, eq, omega, clause, extra):
-        demand = abs(f.force)
-        allow = rn / omega
-        ratio = demand / allow if allow > 0 else math.inf
-        old = worst.get(name)
-        if old is None or ratio > old[0]:
-            worst[name] = (ratio, f, rn, eq, omega, clause, extra)
-
-    webs = 2 if sec.shape == "double-channel" else 1
-    for f in forces:
-        end = max(0.0, min(f.at, length - f.at))
-        lb = f.bearing if f.bearing is not None else 0.0
-        if kind == "web":
-            tw, tf, dd, k = d["tw"], d["tf"], d["d"], d["kdes"]
-            rn, eq = web_local_yielding(fy, tw, k, lb, end, dd)
-            keep("web local yielding", f, webs * rn, eq, OMEGA_WLY, "AISC 360-16 J10.2",
-                 {"tw": tw, "k": k, "d": dd, "webs": webs})
-            if f.pulls:
-                rn, eq = flange_local_bending(fy, tf, end)
-                if not (job.lifting and f.moving):  # trolley wheels: see the wheel check
-                    keep("flange local bending", f, rn, eq, OMEGA_FLB, "AISC 360-16 J10.1",
-                         {"tf": tf})
-            else:
-                rn, eq = web_crippling(e, fy, tw, tf, dd, lb, end)
-                keep("web crippling", f, webs * rn, eq, OMEGA_WCR, "AISC 360-16 J10.3",
-                     {"tw": tw, "tf": tf, "d": dd, "webs": webs, "qf": 1.0})
-        else:
-            t, h = d["t_des"], d["h"]
-            k = d.get("r_out") or 1.5 * t
-            rn, eq = hss_wall_yielding(fy, t, k, lb, end, h)
-            keep("wall local yielding", f, rn, eq, OMEGA_WLY, "AISC 360-16 K2, Table K2.2",
-                 {"t": t, "k": k, "h": h})
-            if not f.pulls:
-                qf = hss_qf_lower(sec)
-                rn, eq = hss_wall_crippling(e, fy, t, h, lb, end, qf)
-                keep("wall crippling", f, rn, eq, OMEGA_WCR, "AISC 360-16 K2, Table K2.2",
-                     {"t": t, "h": h, "qf": qf})
+    for f in forces_of(job, sol):
+        for name, rn, eq, omega, clause, extra in limit_states(sec, job.material, job.length,
+                                                               f, job.lifting):
+            allow = rn / omega
+            ratio = abs(f.force) / allow if allow > 0 else math.inf
+            old = worst.get(name)
+            if old is None or ratio > old[0]:
+                worst[name] = (ratio, f, rn, eq, omega, clause, extra)
     return [_check(job, name, *w) for name, w in worst.items()]
+
+
+def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
+    """The concentrated forces of a sizing sweep as (Force with force = +1 or -1 never used,
+    fixed part, self-weight part per unit weight, live part per state): every state's force
+    is fixed + w_self x sw + k (1 + impact) x live[state]. Reactions come from the unit
+    solutions; point loads from the load parts."""
+    import numpy as np
+
+    out = []
+    dflt = default_bearing(job)
+    for n, r in enumerate(ss.fixed.reactions):
+        if r.kind == "fixed":
+            continue
+        i = _index(r.key or "", "supports")
+        lb = dflt
+        if i is not None:
+            t = _table(job.data, "supports", i)
+            if "bearing" in t:
+                lb = _bearing(t["bearing"], f"supports[{i}].bearing")
+        a = r.force - sw_sol.reactions[n].force
+        s = sw_sol.reactions[n].force
+        lv = np.array([ss.live.reactions[n].force + sum(ss.spans[i].reactions[n].force
+                                                         for i in p) for p in pats])
+        out.append((r.at, "bottom", lb, False, a, s, lv))
+    tol = 1e-9 * max(job.length, 1e-9)
+    groups: dict = {}
+
+    def add(ld, part, p_index=None):
+        key = ld.key or ""
+        face = face_of(job, key)
+        lb = dflt
+        i = _index(key, "loads")
+        if i is not None:
+            t = _table(job.data, "loads", i)
+            if "bearing" in t:
+                lb = _bearing(t["bearing"], f"loads[{i}].bearing")
+        slot = (round(ld.at / tol), face)
+        g = groups.setdefault(slot, {"at": ld.at, "lb": [], "a": 0.0,
+                                     "lv": np.zeros(len(pats))})
+        g["lb"].append(lb)
+        if part == "fixed":
+            g["a"] += ld.value
+        elif part == "live":
+            g["lv"] += ld.value
+        else:
+            g["lv"] += np.array([ld.value if p_index in p else 0.0 for p in pats])
+
+    parts = ss.parts
+    for ld in parts.fixed:
+        if ld.kind == "point" and ld.value:
+            add(ld, "fixed")
+    for ld in parts.live:
+        if ld.kind == "point" and ld.value:
+            add(ld, "live")
+    for si, loads in enumerate(ss.span_loads):
+        for ld in loads:
+            if ld.kind == "point" and ld.value:
+                add(ld, "span", si)
+    for (_, face), g in groups.items():
+        lb = None if any(b is None for b in g["lb"]) else min(g["lb"])
+        out.append((g["at"], face, lb, False, g["a"], 0.0, g["lv"]))
+    return out
+
+
+def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
+    """Per item: (allowable, name) when the force pulls and when it bears (inf: none)."""
+    pull, bear = [], []
+    for at, face, lb, moving, *_ in items:
+        row = []
+        for sign in (1.0, -1.0):
+            f = Force(at, sign if face == "top" else -sign, face, lb, "", moving)
+            best = (math.inf, "")
+            for name, rn, _eq, omega, _c, _x in limit_states(sec, mat, job.length, f,
+                                                              job.lifting):
+                if rn / omega < best[0]:
+                    best = (rn / omega, name)
+            row.append(best)
+        pull.append(row[0])
+        bear.append(row[1])
+    return pull, bear
 
 
 def _check(job, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
     from shopbeam import units
 
     lb = f.bearing if f.bearing is not None else 0.0
-    given = (f"bearing length {units.fmt(lb, 'length', job.units)} from the job"
+    small = f"{lb / units.IN:.4g} in" if job.units == "us" else f"{lb * 1000:.4g} mm"
+    given = (f"bearing length {small} from the job"
              if f.bearing is not None else
              "bearing length not given: lb = 0 taken (a knife edge, conservative); give "
              "bearing = \"...\" on the support or load, or beam.bearing")
@@ -338,4 +425,79 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                              "concentrated forces at supports and point loads of tees and "
                              "angles are not checked locally", "AISC 360-16 J10",
                              blocks_rating=False))
+    return out
+
+
+# ------------------------------------------------------------------ hinges and fixed ends
+def _states(job, sol):
+    """The solved states whose hinge shears and end moments count: every pattern of a
+    patterned job, else the solution given (the governing state with moving loads)."""
+    from shopbeam.design import loading
+
+    try:
+        parts = loading.load_parts(job)
+        if parts.patterned and not parts.moving:
+            ss = loading.state_set(job)
+            return [ss.state(1.0, p) for p in ss.patterns], "over every load pattern"
+        if parts.impact and not parts.moving:
+            ss = loading.state_set(job)
+            return [ss.state(1.0, ())], "impact included"
+    except Exception:  # noqa: BLE001 - the job's own checks report bad input
+        pass
+    return [sol], ""
+
+
+def hinge_shears(job, sol) -> list[dict]:
+    """Shear carried through each internal hinge (N, + as the shear diagram): the force a
+    Gerber hinge's connection must pass. Largest magnitude over the load states."""
+    hinges = [s.at for s in sol.beam.supports if s.kind == "hinge"]
+    if not hinges:
+        return []
+    states, words = _states(job, sol)
+    out = []
+    for x in hinges:
+        best = None
+        for st in states:
+            for side in ("left", "right"):
+                v = float(st.shear(x, side))
+                if best is None or abs(v) > abs(best):
+                    best = v
+        out.append({"at": float(x), "shear": best, "over": words})
+    return out
+
+
+def fixed_end_moments(job, sol) -> list[dict]:
+    """Moment and shear at each fixed support (largest moment over the load states)."""
+    fixed = [i for i, r in enumerate(sol.reactions) if r.kind == "fixed"]
+    if not fixed:
+        return []
+    states, words = _states(job, sol)
+    out = []
+    for i in fixed:
+        best = max((st.reactions[i] for st in states), key=lambda r: abs(r.moment))
+        out.append({"at": float(best.at), "moment": float(best.moment),
+                    "force": float(best.force), "over": words})
+    return out
+
+
+def connection_notes(job, sol) -> list[str]:
+    """Words for the report: hinge shears, and what a fixed end's connection must develop."""
+    from shopbeam import units
+
+    sy = job.units
+    out = []
+    for h in hinge_shears(job, sol):
+        out.append(f"Hinge at {units.fmt(h['at'], 'length', sy)} carries a shear of "
+                   f"{units.fmt(abs(h['shear']), 'force', sy)}"
+                   + (f" ({h['over']})" if h["over"] else "")
+                   + ": its connection (bolts, pin, seat) must pass this force; it is not "
+                   "checked here.")
+    for f in fixed_end_moments(job, sol):
+        out.append(f"Fixed end at {units.fmt(f['at'], 'length', sy)}: the connection must "
+                   f"develop a moment of {units.fmt(abs(f['moment']), 'moment', sy)} with a "
+                   f"shear of {units.fmt(abs(f['force']), 'force', sy)}"
+                   + (f" ({f['over']})" if f["over"] else "")
+                   + " (moment connection: full-penetration or fillet-welded flanges, end "
+                   "plate, or a socket). A bolted shear tab or clip angle is a pin: then "
+                   "re-run with type = \"pin\". The connection is not checked here.")
     return out

@@ -257,8 +257,9 @@ def f10_major(p: AngleProps, fy: float, e: float, lb: float | None, cb: float) -
         else:
             m = (0.92 - 0.17 * mcr / my) * mcr
             eq = "F10-3"
+        bw = f", beta_w {-p.beta_w / 0.0254:.3g} in" if p.beta_w else ", equal legs beta_w 0"
         out.append((m, f"{eq} LTB about the major axis, Mcr by F10-4 (Lb {lb / 0.0254:.4g} in, "
-                       f"Cb {cb:.2f}, beta_w {-p.beta_w / 0.0254:.3g} in)"))
+                       f"Cb {cb:.2f}{bw})"))
     llb = _leg_buckling(p, fy, e, p.sw)
     if llb:
         out.append(llb)
@@ -304,3 +305,230 @@ def angle_deflection_factors(p: AngleProps) -> tuple[float, float]:
 
 def omega() -> float:
     return OMEGA_B
+
+
+# ------------------------------------------------------------------ the checks of one state
+def applies(sec, basis: str, material_kind: str) -> str:
+    """"F9", "F10" or "" for this section on this basis."""
+    if basis != "asd" or material_kind not in ("steel", "stainless"):
+        return ""
+    if sec.shape == "tee" and sec.axis == "strong" and sec.iy and sec.j and sec.ry:
+        return "F9"
+    if sec.shape == "angle" and sec.dims.get("iz") and sec.iy:
+        return "F10"
+    return ""
+
+
+def _segments(job, st):
+    from shopbeam.design.checks import brace_points
+
+    braced = brace_points(job)[0]
+    return braced, [(a, b, free) for a, b, free, *_ in st.ltb_segments]
+
+
+def _cb(m, a, b, mmax, free, cb_one) -> float:
+    from shopbeam.design.checks import cb_factor
+
+    if cb_one or free or mmax <= 0:
+        return 1.0
+    q = [abs(float(m(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
+    return cb_factor(mmax, *q)
+
+
+def bending_check(job, sol, st, sec, cb_one: bool = False):
+    """The F9 (tee) or F10 (angle) bending check of one solved state, or None."""
+    from shopbeam.design.checks import BASIS_WORDS, Check
+
+    kind = applies(sec, st.basis, getattr(job.material, "kind", ""))
+    if not kind:
+        return None
+    fy, e = job.material.fy, job.material.e
+    m = sol.moment
+    braced, segs = _segments(job, st)
+    worst = None
+    for a, b, free in segs:
+        lb = None if braced else b - a
+        ex = m.extremes(a, b)
+        if kind == "F9":
+            r = _f9_segment(sec, fy, e, lb, ex)
+        else:
+            mmax = ex.abs_max
+            cb = _cb(m, a, b, mmax, free, cb_one)
+            r = _f10_segment(job, sec, fy, e, lb, cb, ex)
+        if r and (worst is None or r[0] > worst[0]):
+            worst = r + ((a, b),)
+    ratio, demand, limit, at, text, params, (a, b) = worst
+    from shopbeam import units
+
+    pos = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+    seg = "" if len(segs) == 1 else f"unbraced length {pos(a)} to {pos(b)} governs"
+    if kind == "F9":
+        clause, src = "AISC 360-16 F9", F9_SOURCE
+        formula = (f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, Omega_b "
+                   f"{OMEGA_B:g} (F9 yielding, lateral-torsional buckling, flange and stem local "
+                   "buckling by the sign of the moment)")
+    else:
+        clause, src = "AISC 360-16 F10", F10_SOURCE
+        formula = f"{BASIS_WORDS[st.basis]}: {text}"
+    if braced:
+        seg = "; ".join(x for x in (seg, "continuously braced (beam.braced): no LTB") if x)
+    return Check("bending", demand, limit, "N*m", formula, at, detail=seg, clause=clause,
+                 source=src, params=params, extra={"cb": params.get("Cb", 1.0)})
+
+
+def _f9_segment(sec, fy, e, lb, ex):
+    p = tee_props(sec, fy, e)
+    top = flange_on_top(sec)
+    # sagging (M > 0) compresses the top fibres
+    m_stem_t = max(ex.max, 0.0) if top else max(-ex.min, 0.0)
+    m_stem_c = max(-ex.min, 0.0) if top else max(ex.max, 0.0)
+    at_t = ex.max_at if top else ex.min_at
+    at_c = ex.min_at if top else ex.max_at
+    mn_t, why_t = f9_stem_tension(p, lb)
+    mn_c, why_c = f9_stem_compression(p, lb)
+    if m_stem_c > 0:
+        both = f9_ltb_with_compression(p, lb)
+        if both and both[0] < mn_t:
+            mn_t, why_t = both
+    allow_t, allow_c = mn_t / OMEGA_B, mn_c / OMEGA_B
+    r_t = m_stem_t / allow_t if allow_t > 0 else math.inf
+    r_c = m_stem_c / allow_c if allow_c > 0 else math.inf
+    params = {"Lb": lb or 0.0, "Mn_stem_tension": mn_t, "Mn_stem_compression": mn_c,
+              "My": fy * p.sx, "Mp": min(fy * p.zx, 1.6 * fy * p.sx), "Cb": 1.0}
+    if r_c >= r_t and m_stem_c > 0:
+        return (r_c, m_stem_c, allow_c, at_c, f"{why_c} (stem in compression; Cb 1.0)", params)
+    return (r_t, m_stem_t, allow_t, at_t, f"{why_t} (stem in tension)", params)
+
+
+def _f10_segment(job, sec, fy, e, lb, cb, ex):
+    p = angle_props(sec)
+    mmax = ex.abs_max
+    at = ex.abs_max_at
+    if job.restrained:
+        mn, why = f10_geometric(p, fy, e, min(sec.sx_top, sec.sx_bot))
+        allow = mn / OMEGA_B
+        text = (f"restrained angle (beam.restrained) bent about its geometric axis: M <= Mn / "
+                f"Omega_b, Mn by {why}, Omega_b {OMEGA_B:g}")
+        return (mmax / allow if allow > 0 else math.inf, mmax, allow, at, text,
+                {"Lb": 0.0, "Mn": mn, "Cb": 1.0})
+    mnw, why_w = f10_major(p, fy, e, lb, cb)
+    mnz, why_z = f10_minor(p, fy, e)
+    c, s = math.cos(p.alpha), math.sin(p.alpha)
+    # H2-1: Mw / (Mnw / Omega) + Mz / (Mnz / Omega) <= 1 with Mw = M cos a, Mz = M sin a
+    inv = OMEGA_B * (c / mnw + s / mnz)
+    allow = 1 / inv
+    text = (f"angle not restrained: M resolved on the principal axes, Mw = M cos a, "
+            f"Mz = M sin a (a = {math.degrees(p.alpha):.1f} deg), combined by H2-1 as "
+            f"Mw Omega / Mnw + Mz Omega / Mnz <= 1 (signs ignored: conservative); major axis "
+            f"Mnw by {why_w}; minor axis Mnz by {why_z}; Omega_b {OMEGA_B:g}")
+    params = {"Lb": lb or 0.0, "Mnw": mnw, "Mnz": mnz, "alpha": p.alpha, "Cb": min(cb, CB_MAX_ANGLE),
+              "Mw": mmax * c, "Mz": mmax * s}
+    return (mmax / allow, mmax, allow, at, text, params)
+
+
+def deflection_words(job, sec) -> str:
+    """What the deflection check means for an angle."""
+    from shopbeam.members.sections import principal_factors
+
+    f = principal_factors(sec)
+    if f is None:
+        return ""
+    if job.restrained:
+        return "restrained angle: deflection about the geometric axis"
+    return (f"angle not restrained: deflection about its principal axes, vertical sag "
+            f"{f[0]:.3g} x the geometric-axis figure (shown), and it also moves sideways "
+            f"{f[1]:.3g} x that figure")
+
+
+def torsion_note(job, sec) -> str:
+    """A quantified caution for loads in the plane of the web of a channel, tee or angle:
+    the load acts off the shear centre and twists the member."""
+    from shopbeam import units
+
+    shape = sec.shape
+    d = sec.dims
+    if shape not in ("channel", "angle", "tee") or not sec.j:
+        return ""
+    if shape == "channel" and sec.axis == "strong":
+        # shear centre behind the web: e0 = 3 bf'^2 tf / (6 bf' tf + h tw) from the web
+        # mid-line (thin-walled channel, common practice), plus half the web
+        bm = d["bf"] - d["tw"] / 2
+        h = d["d"] - d["tf"]
+        e0 = 3 * bm**2 * d["tf"] / (6 * bm * d["tf"] + h * d["tw"]) + d["tw"] / 2
+        t_max = max(d["tf"], d["tw"])
+        where = "from the face of the web (load on the web's centre line)"
+    elif shape == "angle":
+        # shear centre at the heel (legs' crossing); a load through the centroid is off it
+        e0 = d["x"] - d["t"] / 2
+        t_max = d["t"]
+        where = "between the centroid and the heel (legs' crossing)"
+    else:
+        if sec.axis != "strong":
+            return ""
+        # a tee loaded in its plane of symmetry passes through the shear centre: no torsion
+        return ""
+    loads = [ld for ld in job.loads if ld.kind == "point"]
+    p = max((abs(ld.value) for ld in loads), default=0.0) / job.members
+    w = max((max(abs(ld.w1), abs(ld.w2)) for ld in job.loads
+             if ld.kind in ("uniform", "linear")), default=0.0) / job.members
+    sy = job.units
+    parts = []
+    if p:
+        t = p * e0
+        tau = t_max * t / sec.j
+        parts.append(f"the largest point load {units.fmt(p, 'force', sy)} gives a torque "
+                     f"{units.fmt(t, 'moment', sy)}, a rough St Venant shear stress "
+                     f"t T / J = {units.fmt(tau, 'stress', sy)} if the ends alone resist it")
+    if w:
+        per = "ft/ft" if sy == "us" else "m/m"
+        parts.append(f"the largest line load gives a torque of {units.fmt(w * e0, 'force', sy)}"
+                     f"*{per} along the member")
+    if not parts:
+        return ""
+    off = f"{e0 / units.IN:.3g} in" if sy == "us" else f"{e0 * 1000:.3g} mm"
+    return (f"{shape}: the loads act {off} off the shear centre "
+            f"({where}) and twist it; " + "; ".join(parts) + ". AISC 360 has no beam check for "
+            "this here (AISC Design Guide 9 covers torsion): load through the shear centre, "
+            "brace it against twist, or have it checked. Rough estimate, not a check.")
+
+
+def open_unchecked(job, st):
+    """Unchecked limit states of open shapes (see `shopbeam.design.checks.Unchecked`)."""
+    from shopbeam.design.checks import Unchecked
+
+    sec = st.section or job.section
+    out = []
+    steel = getattr(job.material, "kind", "") in ("steel", "stainless")
+    if sec.shape in ("channel", "angle") and steel and not (
+            sec.shape == "angle" and job.restrained):
+        out.append(Unchecked(
+            "torsion from loads off the shear centre",
+            "the loads act off the shear centre and twist the member; the cautions give a "
+            "rough figure, not a check (AISC Design Guide 9 method not applied)",
+            "AISC 360-16 H3 / Design Guide 9", blocks_rating=False))
+    if sec.shape == "tee" and sec.axis != "strong" and steel and st.basis == "asd":
+        out.append(Unchecked("lateral-torsional and local buckling of a tee bent about its "
+                             "weak axis", "F9 covers bending about the axis of symmetry only; "
+                             "first yield is checked", "AISC 360-16 F9", blocks_rating=True))
+    if sec.shape == "angle" and steel and st.basis == "asd" and not applies(
+            sec, st.basis, job.material.kind):
+        out.append(Unchecked("angle bending about the principal axes (F10)",
+                             "the section has no principal-axis properties", "AISC 360-16 F10",
+                             blocks_rating=True))
+    if sec.shape in ("tee", "angle") and steel and st.basis == "first-yield":
+        out.append(Unchecked("lateral-torsional and local buckling (F9/F10)",
+                             "basis = \"first-yield\" checks first yield only; use the AISC "
+                             "basis (the default) for F9/F10", "AISC 360-16 F9/F10",
+                             blocks_rating=True))
+    return out
+
+
+def replaces_angle_warning(job) -> bool:
+    """True when the angle is checked by F10 (principal axes, or restrained as the job says),
+    so the section's warning about geometric-axis bending no longer applies."""
+    from shopbeam.design.checks import basis_of
+
+    sec = job.section
+    if sec.shape != "angle":
+        return False
+    return bool(applies(sec, basis_of(job), getattr(job.material, "kind", "")))

@@ -28,6 +28,7 @@ from shopbeam.design.checks import (BASIS_WORDS, basis_of, deflection_rule, flex
 from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import segments
+from shopbeam.members.sections import bending_ix
 
 SLOW_LIMIT = 80  # sections checked one by one at most (springs, moving loads)
 
@@ -324,7 +325,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
             continue
         seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
         rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
-                   fl.omega, seg, sh.vn / sh.omega, mat.e * sec.ix, fl.cap))
+                   fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained), fl.cap))
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
@@ -340,6 +341,47 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     for a, bb, kind in spans:
         judged = 2 * (bb - a) if kind in ("cantilever", "overhang") else bb - a
         limits.append(d_abs if d_abs is not None else judged / n_ratio)
+    # local checks at supports and point loads (shopbeam.design.local): every force is
+    # fixed + w_self x sw + kk x live[state]; its allowable depends on its direction
+    from shopbeam.design import local as _local
+
+    items = _local.sizing_items(base, ss, sw_sol, pats)
+    n_it = len(items)
+    if n_it:
+        orient = np.array([1.0 if it[1] == "top" else -1.0 for it in items])  # + pulls
+        fa = np.array([it[4] for it in items])
+        fs = np.array([it[5] for it in items])
+        flv = np.array([it[6] for it in items]).T  # (S, n_it)
+        al_pull = np.empty((R, n_it))
+        al_bear = np.empty((R, n_it))
+        nm_pull, nm_bear = [], []
+        for i, r in enumerate(rs):
+            pu, be = _local.sizing_allowables(job, r[1], r[2], items)
+            al_pull[i] = [x[0] for x in pu]
+            al_bear[i] = [x[0] for x in be]
+            nm_pull.append([x[1] for x in pu])
+            nm_bear.append([x[1] for x in be])
+
+    def local_ratio(kk, want_name=False):
+        """(R,) worst local ratio over states and forces at factors kk."""
+        if not n_it:
+            return np.zeros(R), [""] * R
+        force = (fa[None, None, :] + wsw[:, None, None] * fs[None, None, :]
+                 + kk[:, None, None] * flv[None, :, :])  # (R, S, n_it)
+        pulls = orient[None, None, :] * force > 0
+        allow = np.where(pulls, al_pull[:, None, :], al_bear[:, None, :])
+        with np.errstate(divide="ignore", invalid="ignore"):
+            rr = np.where(np.isinf(allow), 0.0, np.abs(force) / allow)
+        flat = rr.reshape(R, -1)
+        worst = flat.max(axis=1)
+        if not want_name:
+            return worst, None
+        idx = flat.argmax(axis=1)
+        names = []
+        for i in range(R):
+            s_, j = divmod(int(idx[i]), n_it)
+            names.append(nm_pull[i][j] if pulls[i, s_, j] else nm_bear[i][j])
+        return worst, names
 
     def combo(arrs, kk):
         f, s, lv = arrs  # (P,w), (P,w), (S,P,w)
@@ -370,6 +412,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         for um, lim in zip(_absmax_many(uco, breaks, [(a, bb) for a, bb, _ in spans]), limits):
             defl = np.maximum(defl, um / eis / lim)
         allr = np.stack([bend, shear, defl]).reshape(3, R, S).max(axis=2)  # worst pattern
+        allr = np.vstack([allr, local_ratio(kk)[0][None, :]])
         return allr.max(axis=0), allr.argmax(axis=0)
 
     r1, gi = ratios(np.ones(R))
@@ -377,9 +420,27 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         k = _capacity_vector(ratios, R)
     else:
         k = np.full(R, np.nan)
+    local_names = local_ratio(np.ones(R) * (1 + imp), True)[1]
     names = ("bending", "shear", "deflection")
-    rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]), names[gi[i]], float(k[i]),
+    rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]),
+                    names[gi[i]] if gi[i] < 3 else local_names[i], float(k[i]),
                     r[3], r[4]) for i, r in enumerate(rs)]
+    # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
+    # each unbraced length, principal axes); those rows are checked one by one
+    special = [i for i, r in enumerate(rs) if flexure(
+        r[1], r[2], basis_of(replace(job, material=r[2])), job.criteria.safety_factor,
+        job.welded).special]
+    if special:
+        from shopbeam.design.capacity import capacity
+        from shopbeam.design.loading import evaluate
+
+        for i in special:
+            r = rs[i]
+            j = replace(job, section=r[1], material=r[2])
+            ev = evaluate(j, 1.0)
+            g = max(ev.checks, key=lambda c: c.ratio)
+            kf = capacity(j).factor if with_capacity else float("nan")
+            rows[i] = replace(rows[i], ratio=g.ratio, governing=g.name, factor=kf)
     return rows, skipped
 
 

@@ -41,10 +41,10 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
          "moving", "project"},
     "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded",
-             "braces", "braced"},
-    "supports": {"at", "type", "stiffness", "label"},
+             "braces", "braced", "bearing", "restrained"},
+    "supports": {"at", "type", "stiffness", "label", "bearing"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
-              "patterned", "uplift"},
+              "patterned", "uplift", "bearing", "flange"},
     "criteria": {"deflection", "safety_factor", "basis", "impact"},
     "moving": {"label", "loads", "dead", "spacing", "travel", "case"},
     "project": set(),  # filled from PROJECT_KEYS below
@@ -102,6 +102,10 @@ class Job:
     braced: bool = False  # compression flange braced all along (beam.braced)
     braces: tuple[float, ...] = ()  # lateral brace positions, m, sorted (beam.braces)
     moving: tuple[WheelSet, ...] = ()  # at most one wheel set
+    restrained: bool = False  # beam.restrained: held against twist and sideways movement
+    bearing: float | None = None  # m, beam.bearing: bearing length at supports and loads
+    bearings: dict = field(default_factory=dict)  # "supports[i]" / "loads[i]" -> bearing, m
+    hung: tuple[str, ...] = ()  # keys of point loads hung from the bottom flange
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -113,7 +117,11 @@ class Job:
 
     @property
     def ei(self) -> float:
-        return self.material.e * self.section.ix
+        """E times the I that gives the vertical deflection (for an angle that is not
+        restrained, about its principal axes: see `sections.bending_ix`)."""
+        from shopbeam.members.sections import bending_ix
+
+        return self.material.e * bending_ix(self.section, self.restrained)
 
     def self_weight_load(self) -> Load | None:
         if not self.self_weight:
@@ -533,6 +541,12 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         r.error("uplift must be true or false (true: this load is meant to push up)",
                 f"{key}.uplift")
     common = dict(label=label, case=case, key=key, patterned=patterned)
+    if kind != "point" and ("bearing" in ld or "flange" in ld):
+        r.warn("bearing and flange describe a point load where it meets the member; "
+               f"this {kind} load ignores them", f"{key}.{'bearing' if 'bearing' in ld else 'flange'}")
+    if ld.get("flange", "top") not in ("top", "bottom"):
+        r.error("flange must be \"top\" (the load bears on the top flange) or \"bottom\" (it "
+                "hangs from the bottom flange)", f"{key}.flange")
     if kind in ("point", "moment"):
         at = _position(r, ld, "at", key, length)
         if kind == "point":
@@ -753,6 +767,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     length = section = material = None
     self_weight, members, welded = True, 1, False
     braced, braces = False, ()
+    restrained, bearing, bearings, hung = False, None, {}, []
     if not _is_table(beam):
         r.error("missing the [beam] table (length, section, material)", "beam")
         beam = {}
@@ -796,6 +811,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     "beam.welded")
             welded = False
         braced, braces = _read_bracing(r, beam, length)
+        restrained = r.boolean(beam, "restrained", "beam.restrained", False,
+                               "restrained must be true or false (true: the member is held "
+                               "against twisting and sideways movement all along, so an "
+                               "angle bends about its geometric axis)")
+        if "bearing" in beam:
+            bearing = r.parse(beam, "bearing", "length", "beam.bearing", nonnegative=True)
 
     sups = data.get("supports", [])
     supports: list[Support] = []
@@ -809,6 +830,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         sup = _read_support(r, i, s, length)
         if sup is not None:
             supports.append(sup)
+        if _is_table(s) and "bearing" in s:  # bearing length for the local checks
+            b = r.parse(s, "bearing", "length", f"supports[{i}].bearing", nonnegative=True)
+            if b is not None:
+                bearings[f"supports[{i}]"] = b
     tol = 1e-9 * (length or 1.0)
     for a_i, a in enumerate(supports):
         for b in supports[a_i + 1:]:
@@ -836,6 +861,13 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         got = _read_load(r, i, ld, length, conv)
         if got is not None and _plausible_load(r, got):
             loads.append(got)
+        if _is_table(ld) and ld.get("type") == "point":  # where it meets the member
+            if "bearing" in ld:
+                b = r.parse(ld, "bearing", "length", f"loads[{i}].bearing", nonnegative=True)
+                if b is not None:
+                    bearings[f"loads[{i}]"] = b
+            if ld.get("flange") == "bottom":
+                hung.append(f"loads[{i}]")
     _upward_loads(r, raw_loads, loads, system)
     _family_mismatch(r, section, material)
     for ld in loads:
@@ -861,7 +893,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         supports=tuple(sorted(supports, key=lambda s: s.at)), loads=tuple(loads),
         criteria=criteria, notes=notes, units=system, tags=tags,
         self_weight=self_weight, members=members, welded=welded, braced=braced, braces=braces,
-        moving=moving, path=filename,
+        moving=moving, path=filename, restrained=restrained, bearing=bearing,
+        bearings=bearings, hung=tuple(hung),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
     )
 

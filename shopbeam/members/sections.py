@@ -128,6 +128,28 @@ class Section:
         return self.area * density
 
 
+def principal_factors(sec: Section) -> tuple[float, float] | None:
+    """An angle bent in the vertical plane without restraint curves about both principal
+    axes: (vertical, sideways) deflection per unit of the geometric-axis figure, from
+    Ix = Iw cos^2 a + Iz sin^2 a and Iw = Ix + Iy - Iz (mechanics of the principal axes).
+    None for other shapes."""
+    if sec.shape != "angle" or not sec.dims.get("iz") or not sec.iy:
+        return None
+    ix, iz = sec.ix, sec.dims["iz"]
+    iw = ix + sec.iy - iz
+    if iw - iz <= 0:
+        return None
+    c2, s2 = (ix - iz) / (iw - iz), (iw - ix) / (iw - iz)
+    return ix * (c2 / iw + s2 / iz), ix * math.sqrt(max(c2 * s2, 0.0)) * abs(1 / iz - 1 / iw)
+
+
+def bending_ix(sec: Section, restrained: bool = False) -> float:
+    """The I that gives the vertical deflection: Ix, except for an angle that is not
+    restrained, where Ix / (vertical factor of `principal_factors`)."""
+    f = None if restrained else principal_factors(sec)
+    return sec.ix / f[0] if f else sec.ix
+
+
 # ------------------------------------------------------------------ geometry engine
 @dataclass(frozen=True)
 class Part:

@@ -1,0 +1,198 @@
+"""Concentrated forces: AISC 360-16 J10 on webs and flanges, the HSS sidewall provisions, and
+hinge shear / fixed-end moment. Each figure below is a hand calculation in kips and inches
+from the formula of the named clause, with the section's values from the AISC Shapes
+Database v15.0 (W12x26: d 12.2, tw 0.230, tf 0.380, kdes 0.680 in)."""
+
+from __future__ import annotations
+
+import json
+import math
+import subprocess
+import sys
+
+import pytest
+
+from shopbeam.design import local
+from shopbeam.design.analysis import analyze, to_json
+from shopbeam.design.capacity import capacity
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.errors import InputErrors
+
+IN, KSI, KIP, LBF, FT = 0.0254, 6.894757293168361e6, 4448.2216152605, 4.4482216152605, 0.3048
+E, FY = 29000 * KSI, 50 * KSI
+W12 = dict(d=12.2 * IN, tw=0.230 * IN, tf=0.380 * IN, k=0.680 * IN)
+
+
+def test_web_local_yielding_end_and_interior_j10_2_and_j10_3():
+    # AISC 360-16 J10-3 (within d of the end): Rn = Fy tw (2.5k + lb)
+    #   = 50 x 0.23 x (2.5 x 0.68 + 4) = 65.55 kips
+    rn, eq = local.web_local_yielding(FY, W12["tw"], W12["k"], 4 * IN, 0.0, W12["d"])
+    assert eq == "J10-3" and rn / KIP == pytest.approx(65.55, rel=1e-9)
+    # J10-2 (farther than d): Rn = 50 x 0.23 x (5 x 0.68 + 4) = 85.1 kips
+    rn, eq = local.web_local_yielding(FY, W12["tw"], W12["k"], 4 * IN, 13 * IN, W12["d"])
+    assert eq == "J10-2" and rn / KIP == pytest.approx(85.1, rel=1e-9)
+
+
+def test_web_crippling_j10_4_and_j10_5b():
+    # J10-5b at the end, lb/d = 4/12.2 = 0.328 > 0.2:
+    # 0.40 x 0.23^2 x [1 + (4 x 0.3279 - 0.2)(0.23/0.38)^1.5] x sqrt(29000 x 50 x 0.38/0.23)
+    # = 0.02116 x 1.52338 x 1547.79 = 49.89 kips
+    rn, eq = local.web_crippling(E, FY, W12["tw"], W12["tf"], W12["d"], 4 * IN, 0.0)
+    assert eq == "J10-5b" and rn / KIP == pytest.approx(49.89, rel=2e-4)
+    # J10-4 inside: 0.80 x 0.0529 x (1 + 3 x 0.3279 x 0.47089) x 1547.79 = 95.84 kips
+    rn, eq = local.web_crippling(E, FY, W12["tw"], W12["tf"], W12["d"], 4 * IN, 60 * IN)
+    assert eq == "J10-4" and rn / KIP == pytest.approx(95.84, rel=2e-4)
+    # J10-5a: lb/d <= 0.2 (lb = 2 in): 0.02116 x (1 + 3 x 0.16393 x 0.47089) x 1547.79
+    # = 0.02116 x 1.23158 x 1547.79 = 40.34 kips
+    rn, eq = local.web_crippling(E, FY, W12["tw"], W12["tf"], W12["d"], 2 * IN, 1 * IN)
+    assert eq == "J10-5a" and rn / KIP == pytest.approx(40.34, rel=3e-4)
+
+
+def test_flange_local_bending_j10_1():
+    # 6.25 Fy tf^2 = 6.25 x 50 x 0.38^2 = 45.125 kips; half within 10 tf = 3.8 in of the end
+    rn, _ = local.flange_local_bending(FY, W12["tf"], 20 * IN)
+    assert rn / KIP == pytest.approx(45.125, rel=1e-9)
+    rn, _ = local.flange_local_bending(FY, W12["tf"], 3 * IN)
+    assert rn / KIP == pytest.approx(22.5625, rel=1e-9)
+
+
+def test_hss_sidewall_yielding_and_crippling_table_k2_2():
+    # HSS8x4x1/4 (t design 0.233 in, H 8 in, k = outside corner 2t = 0.466 in), lb 3 in,
+    # Fy 50 ksi, away from the ends. AISC 360-16 Table K2.2 (from memory):
+    # yielding 2 Fy t (5k + lb) = 2 x 50 x 0.233 x (2.33 + 3) = 124.19 kips
+    t, h, k = 0.233 * IN, 8 * IN, 0.466 * IN
+    rn, _ = local.hss_wall_yielding(FY, t, k, 3 * IN, 40 * IN, h)
+    assert rn / KIP == pytest.approx(124.189, rel=1e-5)
+    # crippling 1.6 t^2 (1 + 3 lb / (H - 3t)) sqrt(E Fy) Qf with Qf 0.7981:
+    # 0.0868624 x 2.232708 x 1204.159 x 0.798113 = 186.38 kips
+    rn, _ = local.hss_wall_crippling(E, FY, t, h, 3 * IN, 40 * IN, 0.798113)
+    assert rn / KIP == pytest.approx(186.38, rel=2e-4)
+
+
+def _job(extra_beam="", supports=None, loads=None, section="W12x26", length="2 ft",
+         material="A992"):
+    supports = supports or ['at = "0 ft"\ntype = "pin"', f'at = "{length}"\ntype = "roller"']
+    text = f'schema = 1\ntitle = "t"\n[beam]\nlength = "{length}"\nsection = "{section}"\n' \
+           f'material = "{material}"\n{extra_beam}\n'
+    for s in supports:
+        text += f"[[supports]]\n{s}\n"
+    for ld in loads or []:
+        text += f"[[loads]]\n{ld}\n"
+    return parse_job_text(text)
+
+
+def test_capacity_governed_by_web_local_yielding_under_the_load():
+    # W12x26 on 2 ft, point load at mid-span, no bearing given (lb = 0). The load is 12 in
+    # from each end, within d = 12.2 in, so J10-3: Rn = 50 x 0.23 x 2.5 x 0.68 = 19.55 kips,
+    # Rn / 1.50 = 13.033 kips. Bending (M = P L / 4) and shear are far below at that load.
+    job = _job(loads=['type = "point"\nat = "1 ft"\nvalue = "-10 kip"'])
+    res = capacity(job)
+    p_max = 10 * KIP * res.factor
+    assert p_max / KIP == pytest.approx(19.55 / 1.5, rel=1e-6)
+    assert res.governing.name == "web local yielding"
+    assert res.governing.clause == "AISC 360-16 J10.2"
+    assert "lb = 0 taken" in res.governing.detail
+
+
+def test_bearing_from_the_job_is_used_and_said():
+    # lb = 4 in at the supports: the end reactions (x = 0) use J10-3 with lb = 4 in, 65.55
+    # kips / 1.5, and web crippling J10-5b 49.89 kips / 2.00
+    job = _job(length="16 ft", extra_beam='bearing = "4 in"',
+               loads=['type = "point"\nat = "8 ft"\nvalue = "-20 kip"\nbearing = "6 in"'])
+    res = analyze(job)
+    by = {c.name: c for c in res.checks}
+    wcr = by["web crippling"]
+    # the governing crippling is at the supports (J10-5b 49.89 / 2 = 24.95 kips limit) or
+    # under the load (J10-4 with lb = 6 in: 0.0423 x (1 + 3 x 0.4918 x 0.4709) x 1547.79
+    # = 0.04232 x 1.69474 x 1547.79 = 111.01 kips, / 2 = 55.5 kips)
+    reaction = max(abs(r.force) for r in res.solution.reactions)
+    assert wcr.limit / KIP == pytest.approx(49.89 / 2, rel=2e-4)
+    assert wcr.demand == pytest.approx(reaction, rel=1e-12)
+    assert "4 in from the job" in wcr.detail
+    wly = by["web local yielding"]
+    assert "from the job" in wly.detail
+
+
+def test_hung_load_gets_flange_local_bending_and_no_crippling_there():
+    job = _job(length="10 ft", loads=['type = "point"\nat = "5 ft"\nvalue = "-8 kip"\n'
+                                      'flange = "bottom"'])
+    res = analyze(job)
+    by = {c.name: c for c in res.checks}
+    flb = by["flange local bending"]
+    assert flb.demand / KIP == pytest.approx(8.0, rel=1e-12)
+    assert flb.limit / KIP == pytest.approx(45.125 / 1.67, rel=1e-9)
+    assert flb.at == pytest.approx(5 * FT)
+    # the only crippling is at the supports (the hung load pulls on the web)
+    assert by["web crippling"].at in (0.0, pytest.approx(10 * FT))
+
+
+def test_local_checks_scale_with_the_load_in_capacity():
+    job = _job(length="3 ft", loads=['type = "point"\nat = "1.5 ft"\nvalue = "-1 kip"'])
+    res = capacity(job)
+    # at the capacity factor every check passes and the governing one sits at 1
+    assert max(c.ratio for c in res.checks) == pytest.approx(1.0, abs=1e-9)
+    assert all(c.ratio <= 1.0 for c in res.checks)
+
+
+def test_hss_wall_checks_appear_for_tube():
+    job = _job(section="HSS8x4x1/4", material="A500-C", length="3 ft",
+               loads=['type = "point"\nat = "1.5 ft"\nvalue = "-30 kip"\nbearing = "3 in"'])
+    res = analyze(job)
+    by = {c.name: c for c in res.checks}
+    assert "wall local yielding" in by and "wall crippling" in by
+    assert by["wall crippling"].source.endswith("(from memory)")
+    assert any("plastification" in u.name for u in res.unchecked)
+
+
+def test_fixed_end_is_not_a_bearing_and_gets_the_connection_caution():
+    job = _job(length="4 ft", supports=['at = "0 ft"\ntype = "fixed"'],
+               loads=['type = "point"\nat = "4 ft"\nvalue = "-2 kip"'],
+               extra_beam="self_weight = false")
+    res = analyze(job)
+    names = {c.name: c for c in res.checks}
+    # the only concentrated force on a flange is the tip load
+    assert names["web local yielding"].at == pytest.approx(4 * FT)
+    note = [c for c in res.cautions if c.startswith("Fixed end")]
+    assert note and "8000 lbf*ft" in note[0]  # 2 kip x 4 ft by hand
+    d = to_json(res)
+    assert d["fixed_ends"][0]["moment"] == pytest.approx(8 * KIP * FT, rel=1e-9)
+
+
+def test_gerber_hinge_shear_in_report_and_json():
+    # hinge at 12 ft of a 20 ft member fixed at 0 and pinned at 20; 1 kip at 16 ft. The part
+    # from the hinge to the pin is simply supported: the hinge carries 1 x 4 / 8 = 0.5 kip
+    job = _job(length="20 ft", extra_beam="self_weight = false",
+               supports=['at = "0 ft"\ntype = "fixed"', 'at = "12 ft"\ntype = "hinge"',
+                         'at = "20 ft"\ntype = "pin"'],
+               loads=['type = "point"\nat = "16 ft"\nvalue = "-1 kip"'])
+    res = analyze(job)
+    d = to_json(res)
+    assert len(d["hinges"]) == 1
+    assert abs(d["hinges"][0]["shear"]) / KIP == pytest.approx(0.5, rel=1e-9)
+    assert any(c.startswith("Hinge at 12 ft carries a shear of 500 lbf") for c in res.cautions)
+
+
+def test_bad_bearing_and_flange_are_one_clear_message():
+    with pytest.raises(InputErrors) as e:
+        _job(loads=['type = "point"\nat = "1 ft"\nvalue = "-1 kip"\nflange = "middle"'])
+    assert "loads[0].flange" in str(e.value)
+    with pytest.raises(InputErrors) as e:
+        _job(extra_beam='bearing = "4"')
+    assert "beam.bearing" in str(e.value)
+
+
+def test_cli_json_carries_the_local_checks(tmp_path):
+    p = tmp_path / "j.toml"
+    p.write_text('schema = 1\ntitle = "t"\n[beam]\nlength = "2 ft"\nsection = "W12x26"\n'
+                 'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+                 '[[supports]]\nat = "2 ft"\ntype = "roller"\n[[loads]]\ntype = "point"\n'
+                 'at = "1 ft"\nvalue = "-10 kip"\n')
+    out = subprocess.run([sys.executable, "-m", "shopbeam", "solve", "--json", str(p)],
+                         capture_output=True, text=True, check=True)
+    d = json.loads(out.stdout)
+    names = [c["name"] for c in d["checks"]]
+    assert {"web local yielding", "web crippling"} <= set(names)
+    wly = next(c for c in d["checks"] if c["name"] == "web local yielding")
+    # 10 kip against 13.033 kip at the load
+    assert wly["ratio"] == pytest.approx(10 / (19.55 / 1.5), rel=1e-6)
+    assert math.isclose(wly["params"]["Rn"] / KIP, 19.55, rel_tol=1e-9)
