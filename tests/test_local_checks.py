@@ -196,3 +196,18 @@ def test_cli_json_carries_the_local_checks(tmp_path):
     # 10 kip against 13.033 kip at the load
     assert wly["ratio"] == pytest.approx(10 / (19.55 / 1.5), rel=1e-6)
     assert math.isclose(wly["params"]["Rn"] / KIP, 19.55, rel_tol=1e-9)
+
+
+def test_typed_job_fields_for_the_local_checks():
+    job = _job(extra_beam='bearing = "3 in"\nrestrained = true',
+               supports=['at = "0 ft"\ntype = "pin"\nbearing = "4 in"',
+                         'at = "2 ft"\ntype = "roller"'],
+               loads=['type = "point"\nat = "1 ft"\nvalue = "-1 kip"\nflange = "bottom"\n'
+                      'bearing = "2 in"'])
+    assert job.bearing == pytest.approx(3 * IN)
+    assert job.bearings == {"supports[0]": pytest.approx(4 * IN), "loads[0]": pytest.approx(2 * IN)}
+    assert job.hung == ("loads[0]",)
+    assert job.restrained is True
+    with pytest.raises(InputErrors) as e:
+        _job(extra_beam='restrained = "yes"')
+    assert "beam.restrained" in str(e.value)

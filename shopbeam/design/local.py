@@ -121,47 +121,19 @@ class Force:
         return (self.face == "top" and self.force > 0) or (self.face == "bottom" and self.force < 0)
 
 
-def _table(data, name, i):
-    t = (data or {}).get(name, [])
-    if isinstance(t, list) and 0 <= i < len(t) and isinstance(t[i], dict):
-        return t[i]
-    return {}
-
-
-def _index(key: str, name: str) -> int | None:
-    if key.startswith(name + "["):
-        try:
-            return int(key[len(name) + 1:key.index("]")])
-        except ValueError:
-            return None
-    return None
-
-
-def _bearing(raw, key: str) -> float:
-    from shopbeam import units
-
-    return units.parse(raw, "length", key, nonnegative=True)
-
-
-def default_bearing(job) -> float | None:
-    beam = (job.data or {}).get("beam", {}) or {}
-    if "bearing" in beam:
-        return _bearing(beam["bearing"], "beam.bearing")
-    return None
+def bearing_of(job, key: str) -> float | None:
+    """Bearing length (m) of the support or point load with this key, else beam.bearing,
+    else None (not given)."""
+    got = (getattr(job, "bearings", None) or {}).get(key)
+    return got if got is not None else getattr(job, "bearing", None)
 
 
 def face_of(job, key: str) -> str:
-    """The flange a point load enters through: `flange` on its [[loads]] entry (default top);
-    wheels of a [[moving]] set run on the bottom flange of a lifting job (a trolley)."""
-    from shopbeam.errors import InputError
-
-    i = _index(key, "loads")
-    if i is not None:
-        raw = _table(job.data, "loads", i).get("flange", "top")
-        if raw not in ("top", "bottom"):
-            raise InputError("flange must be \"top\" (the load bears on the top flange) or "
-                             "\"bottom\" (it hangs from the bottom flange)", f"{key}.flange")
-        return raw
+    """The flange a point load enters through: ``flange = "bottom"`` on its [[loads]] entry
+    hangs it from the bottom flange (default top); wheels of a [[moving]] set run on the
+    bottom flange of a lifting job (a trolley)."""
+    if key in (getattr(job, "hung", ()) or ()):
+        return "bottom"
     if key.startswith("moving") and job.lifting:
         return "bottom"
     return "top"
@@ -172,19 +144,13 @@ def forces_of(job, sol) -> list[Force]:
     fixed end, which is a connection) and point loads summed where they act together."""
     from shopbeam import units
 
-    dflt = default_bearing(job)
     fmt = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
     out = []
     for n, r in enumerate(sol.reactions):
         # a fixed end is a connection (welded or bolted into a wall or column), not a bearing
         if abs(r.force) <= ZERO or r.kind == "fixed":
             continue
-        i = _index(r.key or "", "supports")
-        lb = dflt
-        if i is not None:
-            t = _table(job.data, "supports", i)
-            if "bearing" in t:
-                lb = _bearing(t["bearing"], f"supports[{i}].bearing")
+        lb = bearing_of(job, r.key or "")
         out.append(Force(r.at, r.force, "bottom", lb, f"{r.kind} support at {fmt(r.at)}"))
     tol = 1e-9 * max(job.length, 1e-9)
     groups: dict[tuple, list] = {}
@@ -193,12 +159,7 @@ def forces_of(job, sol) -> list[Force]:
             continue
         key = ld.key or ""
         face = face_of(job, key)
-        lb = dflt
-        i = _index(key, "loads")
-        if i is not None:
-            t = _table(job.data, "loads", i)
-            if "bearing" in t:
-                lb = _bearing(t["bearing"], f"loads[{i}].bearing")
+        lb = bearing_of(job, key)
         slot = (round(ld.at / tol), face)
         groups.setdefault(slot, []).append((ld, lb))
     for (_, face), items in groups.items():
@@ -294,16 +255,10 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
     import numpy as np
 
     out = []
-    dflt = default_bearing(job)
     for n, r in enumerate(ss.fixed.reactions):
         if r.kind == "fixed":
             continue
-        i = _index(r.key or "", "supports")
-        lb = dflt
-        if i is not None:
-            t = _table(job.data, "supports", i)
-            if "bearing" in t:
-                lb = _bearing(t["bearing"], f"supports[{i}].bearing")
+        lb = bearing_of(job, r.key or "")
         a = r.force - sw_sol.reactions[n].force
         s = sw_sol.reactions[n].force
         lv = np.array([ss.live.reactions[n].force + sum(ss.spans[i].reactions[n].force
@@ -315,12 +270,7 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
     def add(ld, part, p_index=None):
         key = ld.key or ""
         face = face_of(job, key)
-        lb = dflt
-        i = _index(key, "loads")
-        if i is not None:
-            t = _table(job.data, "loads", i)
-            if "bearing" in t:
-                lb = _bearing(t["bearing"], f"loads[{i}].bearing")
+        lb = bearing_of(job, key)
         slot = (round(ld.at / tol), face)
         g = groups.setdefault(slot, {"at": ld.at, "lb": [], "a": 0.0,
                                      "lv": np.zeros(len(pats))})
