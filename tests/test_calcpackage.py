@@ -217,3 +217,12 @@ def test_a_wheel_set_is_listed_and_drawn():
     pkg = cp.build(analyze(load_job(path)), input_bytes=path.read_bytes())
     assert any(x.startswith("moving hoist trolley: wheels") for x in pkg.loads)
     assert "travel dashed" in pkg.sketch
+
+
+def test_governing_pattern_names_uplift_like_the_report():
+    path = PRESETS / "continuous-shelf.toml"
+    result = analyze(load_job(path))
+    pkg = cp.build(result, input_bytes=path.read_bytes())
+    up = [r for r in pkg.state_reactions if "uplift" in r[2]]
+    down = [r for r in result.state_solution.reactions if r.force < 0]
+    assert len(up) == len(down) >= 1

@@ -128,8 +128,10 @@ def _diagrams(sol, system: str, state: str = "") -> tuple[Diagram, ...]:
     return tuple(out)
 
 
-def _reactions(sol, system: str):
-    return tuple((r.kind, units.fmt(r.at, "length", system), units.fmt(r.force, "force", system),
+def _reactions(sol, system: str, uplift: bool = False):
+    return tuple((r.kind, units.fmt(r.at, "length", system),
+                  units.fmt(r.force, "force", system)
+                  + (" (pulls down: uplift)" if uplift and r.force < 0 else ""),
                   units.fmt(r.moment, "moment", system) if r.kind == "fixed" else "-")
                  for r in sol.reactions)
 
@@ -225,7 +227,7 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
         supports=tuple(describe_support(s, sy) for s in job.supports), loads=tuple(loads),
         load_states=tuple(states), sketch=svg.member_sketch(job, moving=getattr(job, "moving", ())),
         reactions=_reactions(sol, sy),
-        state_reactions=_reactions(st_sol, sy) if st_sol is not None else (),
+        state_reactions=_reactions(st_sol, sy, uplift=True) if st_sol is not None else (),
         state_words=result.state_words if st_sol is not None else "",
         diagrams=_diagrams(sol, sy),
         state_diagrams=_diagrams(st_sol, sy, "governing") if st_sol is not None else (),
