@@ -286,3 +286,10 @@ def test_resolve_job_near_misses_say_did_you_mean(places, tmp_path, monkeypatch)
     assert "no such job file" in str(e.value) and "bay3-arm.toml" in str(e.value)
     with pytest.raises(InputError, match="outside the library folder"):
         library.resolve_job("shop:../x", str(shop))
+
+
+def test_copy_as_a_name_with_spaces_makes_it_safe(places):
+    shop, user = places
+    target = library.copy("bundled:demo", new_name="loft beam 2")
+    assert target.name == "loft-beam-2.toml" and target.parent.name == "user"
+    assert library.find("loft beam 2").origin == "user"

@@ -297,7 +297,8 @@ def copy(name: str, to: str = "user", library_dir=None, new_name: str | None = N
     dest = place(to, library_dir)
     if src.problem:
         raise InputError(f"cannot copy '{src.label}': {src.problem}", file=str(src.path))
-    target = storage.path_in(dest.folder, new_name or src.name, key="--as")
+    target = storage.path_in(dest.folder, safe_library_name(new_name or src.name, key="--as"),
+                             key="--as")
     if target.resolve() == src.path.resolve():
         raise InputError(f"'{src.label}' is already in the {to} library; give --as NEWNAME "
                          "to make a second copy", key="--as")
@@ -425,7 +426,7 @@ def _library_show(args) -> int:
 def _library_copy(args) -> int:
     target = copy(args.name, to=args.to, library_dir=getattr(args, "library", None),
                   new_name=args.as_name, overwrite=args.overwrite)
-    print(f"Copied to {target}")
+    print(f"Copied to {target} (library name {target.stem})")
     return 0
 
 
