@@ -426,7 +426,7 @@ def _library_show(args) -> int:
 def _library_copy(args) -> int:
     target = copy(args.name, to=args.to, library_dir=getattr(args, "library", None),
                   new_name=args.as_name, overwrite=args.overwrite)
-    print(f"Copied to {target} (library name {target.stem})")
+    print(f"Copied to {target}")
     return 0
 
 
