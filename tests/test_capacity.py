@@ -26,6 +26,7 @@ title = "Hand capacity case"
 [beam]
 length = "{L}"
 self_weight = false
+braced = true
 material = {{ e = "29000 ksi", fy = "36 ksi", density = "490 lb/ft^3" }}
 [beam.section]
 shape = "custom"

@@ -129,7 +129,7 @@ def unchecked_for(job: Job) -> list[Unchecked]:
     from shopbeam.design.open_shapes import open_unchecked
 
     st = strengths(job)
-    return local_unchecked(job) + open_unchecked(job, st)
+    return list(st.unchecked) + local_unchecked(job) + open_unchecked(job, st)
 
 
 def to_json(result: Result) -> dict:

@@ -18,7 +18,7 @@ from __future__ import annotations
 
 import math
 import textwrap
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.cautions import banner, cautions_for
@@ -86,9 +86,13 @@ class CapacityResult:
     evaluation: Evaluation | None
     method: str
     note: str = ""
-    # why no load may be posted (e.g. a limit state that could govern was not checked);
-    # when non-empty, labels and plaques say NOT RATED and these reasons instead of a number
+    # why no load may be posted although k is computed (a limit state not checked, a failed
+    # self-check); empty when the rating stands
     not_rated: tuple[str, ...] = ()
+
+    @property
+    def rated(self) -> bool:
+        return not self.not_rated
 
     @property
     def checks(self) -> tuple[Check, ...]:
@@ -110,10 +114,26 @@ def _fixed_is_zero(ss) -> bool:
     return not dead and not (p.moving and any(p.moving[0].dead))
 
 
+def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
+    """Why a capacity must not be posted: every limit state the member calls for that was not
+    checked and would block a rating, and any failed self-check of the solve."""
+    out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in st.unchecked
+           if u.blocks_rating]
+    bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
+    if bad:
+        out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
+    return tuple(out)
+
+
 def capacity(job, section=None, ss=None) -> CapacityResult:
     """The largest live-load multiplier k with every check passing (exact, see module doc)."""
     ss = ss or state_set(job, section)
     st = strengths(job, sec=section, beam=ss.beam)
+    reasons = not_rated_reasons(job, st, ss)
+    return replace(_capacity(job, section, ss, st), not_rated=reasons)
+
+
+def _capacity(job, section, ss, st) -> CapacityResult:
     cache: dict = {}
 
     def ev(k):
@@ -224,6 +244,8 @@ def to_json(res: CapacityResult) -> dict:
     out["factor"] = float(k) if math.isfinite(k) else None
     out["checks"] = [c.as_dict() for c in res.checks]
     out["governing"] = res.governing.name if res.governing else None
+    out["rated"] = res.rated
+    out["not_rated_reasons"] = list(res.not_rated)
     out["capacity"] = {"method": res.method, "note": res.note,
                        "not_rated": list(res.not_rated),
                        "basis": BASIS_WORDS[basis_of(res.job)],
@@ -248,8 +270,13 @@ def render(res: CapacityResult) -> str:
         lines.append(f"  {res.note}")
     lines.append(f"  method: {res.method}")
     lines.append(f"  basis: {BASIS_WORDS[basis_of(job)]}")
-    for label, value in max_load_lines(res):
-        lines.append(f"  {label:<16} {value}")
+    if res.not_rated:
+        lines.append("NOT RATED: do not post a load from this factor, because")
+        for r in res.not_rated:
+            lines += textwrap.wrap(r, 78, initial_indent="  - ", subsequent_indent="    ")
+    else:
+        for label, value in max_load_lines(res):
+            lines.append(f"  {label:<16} {value}")
     lines.append("")
     lines.append("CHECKS AT k")
     from shopbeam.output.report import check_value

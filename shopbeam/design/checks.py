@@ -152,11 +152,39 @@ def brace_points(job) -> tuple[bool, list[float]]:
     return job.braced, list(job.braces)
 
 
+# A bearing support (fixed, pin, roller) holds the section against twist where it sits
+# unless the job says brace = false: the usual assumption of AISC 360-16 F2, whose
+# unbraced length runs between points braced against twist (common practice). A spring is
+# a brace only when the job says brace = true; a hinge never is.
+BRACE_BY_DEFAULT = {"fixed": True, "pin": True, "roller": True, "spring": False, "hinge": False}
+
+
+def support_braces(job, supports) -> list[float]:
+    """Positions of the supports that brace the member against twist (see BRACE_BY_DEFAULT)."""
+    from shopbeam.errors import InputError
+
+    raw = (job.data.get("supports", []) if job.data else []) or []
+    out = []
+    for s in supports:
+        if not s.takes_force and s.kind != "hinge":
+            continue
+        said = None
+        m = re.fullmatch(r"supports\[(\d+)\]", s.key or "")
+        if m and int(m.group(1)) < len(raw) and isinstance(raw[int(m.group(1))], dict):
+            said = raw[int(m.group(1))].get("brace")
+        if said is not None and not isinstance(said, bool):
+            raise InputError("brace must be true or false (does this support hold the member "
+                             "against twist?)", f"{s.key}.brace")
+        if said if said is not None else BRACE_BY_DEFAULT.get(s.kind, False):
+            out.append(s.at)
+    return sorted(set(out))
+
+
 def unbraced_segments(job, beam) -> list[tuple[float, float, bool]]:
     """(start, end, free end?) of every laterally unbraced length."""
     braced, pts = brace_points(job)
     L = beam.length
-    sup = sorted({s.at for s in beam.supports if s.takes_force})
+    sup = support_braces(job, beam.supports)
     if braced:
         return [(0.0, L, False)]
     stops = sorted(set([0.0, L] + sup + pts))
@@ -184,6 +212,8 @@ class Flexure:
     stress_s: float | None = None  # show as stress on this S (first-yield, lumber)
     warnings: tuple[str, ...] = ()
     special: str = ""  # "F9" (tees) or "F10" (angles): checked by shopbeam.design.open_shapes
+    # limit states of this section this strength does not cover (the rating refuses on them)
+    unchecked: tuple = ()
 
     def ltb1(self, lb: float) -> tuple[float, str]:
         """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern)."""
@@ -234,6 +264,27 @@ def _fy_e(mat, basis: str, welded: bool) -> tuple[float, float]:
     return fy, mat.e
 
 
+def shape_solid(sec) -> bool:
+    """Solid round bar: no local buckling and no lateral-torsional buckling."""
+    return sec.shape == "round-bar"
+
+
+def _unchecked_shape(shape: str) -> Unchecked:
+    if shape == "tee":
+        return Unchecked("tee lateral-torsional and local buckling",
+                         "a tee is checked for first yield only; with the stem in compression "
+                         "lateral-torsional buckling can govern well below first yield",
+                         "AISC 360-16 F9")
+    if shape == "angle":
+        return Unchecked("angle principal-axis bending, lateral-torsional and leg local "
+                         "buckling", "an angle is checked about its geometric axis for first "
+                         "yield only; unrestrained it bends about its principal axes",
+                         "AISC 360-16 F10")
+    return Unchecked(f"{shape} section lateral-torsional and local buckling",
+                     "shopbeam has no chapter F rule for this section; it is checked for first "
+                     "yield only", "AISC 360-16 F1")
+
+
 def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Flexure:
     """Bending strength of the section (SI) on the given basis."""
     s = min(sec.sx_top, sec.sx_bot)
@@ -242,8 +293,22 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Fle
         return Flexure(fb * s, 1.0, "NDS 3.3: fb = M / S <= Fb' = Fb (CD, CM, Ct, CL, CF, Cfu, "
                        "Ci, Cr = 1.0; laterally supported)", stress_s=s)
     if basis == "first-yield":
+        unc = ()
+        steel = getattr(mat, "kind", "") in ("steel", "stainless")
+        if sec.shape not in ("round-bar", "rect-bar", "round-tube", "pipe", "rect-tube") and not (
+                steel and sec.shape in ("tee", "angle")):  # those: design.open_shapes
+            unc += (Unchecked("lateral-torsional buckling",
+                              "the first-yield basis checks yielding only; an open section "
+                              "unbraced over its length can buckle sideways below first yield "
+                              "(brace the compression flange all along and say braced = true, "
+                              "or use basis = \"asd\" with a catalog section)",
+                              "AISC 360-16 chapter F"),)
+        if sec.shape not in ("round-bar", "rect-bar"):
+            unc += (Unchecked("local buckling", "the first-yield basis does not check thin "
+                              "walls or flanges for local buckling", "AISC 360-16 B4, chapter F",
+                              blocks_rating=False),)
         return Flexure(mat.fy * s, sf, f"f = M / S <= Fy / SF = Fy / {sf:g} (first yield)",
-                       stress_s=s)
+                       stress_s=s, unchecked=unc)
     fy, e = _fy_e(mat, basis, welded)
     z = sec.zx
     if basis == "aluminum":
@@ -252,7 +317,12 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Fle
         return Flexure(mp, OMEGA_ADM, f"ADM F.2: Mn = Z {what} <= 1.5 S {what}, Omega 1.65",
                        warnings=("aluminium: element local buckling (ADM B.5) and lateral-"
                                  "torsional buckling (ADM F.4) are not checked; thin walls and "
-                                 "long unbraced open sections need an engineer's check",))
+                                 "long unbraced open sections need an engineer's check",),
+                       unchecked=() if shape_solid(sec) else (Unchecked(
+                           "aluminium local and lateral-torsional buckling",
+                           "only yielding is checked for aluminium; element local buckling and "
+                           "lateral-torsional buckling can govern thin walls and open sections: "
+                           "have the member checked by an engineer", "ADM 2015 B.5, F.4"),))
     d = sec.dims
     shape, axis = sec.shape, sec.axis
     if shape in ("i-beam", "channel") and axis == "strong" and z:
@@ -265,16 +335,20 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Fle
         dt = d["od"] / d["t_des"]
         lp, lr = 0.07 * e / fy, 0.31 * e / fy
         warn = ()
+        unc = ()
         if dt > 0.45 * e / fy:
             warn = (f"round tube D/t = {dt:.3g} exceeds 0.45 E/Fy: outside AISC 360 F8",)
+            unc = (Unchecked("round tube wall local buckling", f"D/t {dt:.3g} exceeds 0.45 E/Fy, "
+                             "outside the range of F8", "AISC 360-16 F8"),)
         if dt <= lp:
             return Flexure(fy * z, OMEGA_B, f"F8-1 yielding Mn = Fy Z (compact, D/t {dt:.3g})",
-                           warnings=warn)
+                           warnings=warn, unchecked=unc)
         if dt <= lr:
             return Flexure(min(fy * z, (0.021 * e / dt + fy) * s), OMEGA_B,
-                           f"F8-2 local buckling, noncompact wall (D/t {dt:.3g})", warnings=warn)
+                           f"F8-2 local buckling, noncompact wall (D/t {dt:.3g})", warnings=warn,
+                           unchecked=unc)
         return Flexure(0.33 * e / dt * s, OMEGA_B, f"F8-4 local buckling, slender wall "
-                       f"(D/t {dt:.3g})", warnings=warn)
+                       f"(D/t {dt:.3g})", warnings=warn, unchecked=unc)
     if shape == "round-bar":
         return Flexure(min(fy * z, 1.6 * fy * s), OMEGA_B, "F11-1 Mn = Fy Z <= 1.6 Fy S")
     if shape == "rect-bar":
@@ -296,7 +370,8 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Fle
         shape, f"{shape} section: lateral-torsional and local buckling are not checked; first "
                "yield only")
     return Flexure(fy * s, OMEGA_B, "first yield My = Fy S, Omega 1.67 (lateral-torsional "
-                   "and local buckling not covered)", warnings=(warn,))
+                   "and local buckling not covered)", warnings=(warn,),
+                   unchecked=() if shape in ("tee", "angle") else (_unchecked_shape(shape),))
 
 
 def _f2_f3(sec, fy, e) -> Flexure:
@@ -309,13 +384,20 @@ def _f2_f3(sec, fy, e) -> Flexure:
         lam = d["bf"] / (2 * d["tf"]) if sec.shape == "i-beam" else d["bf"] / d["tf"]
     lpf, lrf = 0.38 * root, 1.0 * root
     h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
-    warnings = []
+    warnings, unchecked = [], []
     cap, text = mp, f"F2-1 yielding Mn = Mp = Fy Zx (compact flanges, bf/2tf {lam:.3g})"
     if h_tw > 3.76 * root:
         cap = fy * sx
         text = "noncompact web (h/tw %.3g > 3.76 sqrt(E/Fy)): Mn = Fy Sx (lower bound of F4)" % h_tw
         warnings.append("noncompact or slender web: bending taken as first yield Fy Sx; "
                         "AISC 360 F4/F5 not applied")
+        slender = h_tw > 5.70 * root
+        unchecked.append(Unchecked(
+            "slender-web bending" if slender else "noncompact-web bending",
+            f"h/tw {h_tw:.3g} > 3.76 sqrt(E/Fy): bending taken as Fy Sx, not by "
+            + ("F5 (a slender web can fall below Fy Sx)" if slender else
+               "F4 (Fy Sx is a lower bound here)"), "AISC 360-16 F5" if slender else
+            "AISC 360-16 F4", blocks_rating=slender))
     if lam > lpf:
         if lam <= lrf:
             m = mp - (mp - 0.7 * fy * sx) * (lam - lpf) / (lrf - lpf)
@@ -329,7 +411,11 @@ def _f2_f3(sec, fy, e) -> Flexure:
     iy, cw, j, ho = sec.iy, sec.cw, sec.j, d.get("ho") or (d["d"] - d["tf"])
     if not (iy and j and sec.ry):
         return Flexure(cap, OMEGA_B, text, warnings=tuple(warnings + [
-            "no torsion properties: lateral-torsional buckling not checked"]))
+            "no torsion properties: lateral-torsional buckling not checked"]),
+            unchecked=tuple(unchecked) + (Unchecked(
+                "lateral-torsional buckling", "the section has no torsion properties (Iy, J); "
+                "give them, or brace the compression flange all along (braced = true)",
+                "AISC 360-16 F2", blocks_rating=True),))
     rts = d.get("rts")
     if not rts and cw:
         rts = math.sqrt(math.sqrt(iy * cw) / sx)
@@ -343,7 +429,7 @@ def _f2_f3(sec, fy, e) -> Flexure:
     a = jc / (sx * ho)
     lr = 1.95 * rts * e / (0.7 * fy) * math.sqrt(a + math.sqrt(a * a + 6.76 * (0.7 * fy / e) ** 2))
     return Flexure(cap, OMEGA_B, text, ltb=("F2", (mp, sx, e, fy, rts, jc, ho, lp, lr)),
-                   warnings=tuple(warnings))
+                   warnings=tuple(warnings), unchecked=tuple(unchecked))
 
 
 def _f6(sec, fy, e) -> Flexure:
@@ -507,6 +593,25 @@ class Strengths:
     defl_abs: float | None
     defl_words: str
     section: object = None  # the section these strengths are for
+    unchecked: tuple = ()  # Unchecked limit states of this member (see member_unchecked)
+
+
+def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
+    """The limit states this member calls for that the checks do not cover."""
+    braced = brace_points(job)[0]
+    out = [u for u in flex.unchecked
+           if not (braced and u.name == "lateral-torsional buckling")]
+    if basis_of(job) == "lumber" and sec.shape == "rect-bar":
+        d, b = sec.dims["h"], sec.dims["b"]
+        if d / b > 2 and not braced:
+            # NDS 2018 4.4.1.2 (from memory): d/b <= 2 needs no lateral support; deeper
+            # members need their ends held (d/b <= 4) or the compression edge held
+            out.append(Unchecked(
+                "beam stability factor CL", f"d/b = {d / b:.3g} > 2: CL is taken as 1.0, "
+                "which needs the lateral support of NDS 4.4.1.2 (ends held in position up to "
+                "d/b 4, the compression edge held beyond); say braced = true when it is",
+                "NDS 2018 3.3.3, 4.4.1", blocks_rating=d / b > 4))
+    return tuple(out)
 
 
 def strengths(job, sec=None, beam=None) -> Strengths:
@@ -522,7 +627,8 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         l1, why = fl.ltb1(0.0 if braced else bb - a)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
-    return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec)
+    return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
+                     member_unchecked(job, sec, fl))
 
 
 def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
@@ -644,6 +750,9 @@ def check_notes(job) -> list[str]:
     st = strengths(job)
     out = [f"Strength basis: {BASIS_WORDS[st.basis]}; deflection limit {st.defl_words}."]
     out += list(st.flexure.warnings)
+    for u in st.unchecked:
+        out.append(f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}"
+                   + ("; no rating is posted" if u.blocks_rating else ""))
     imp = impact_of(job)
     if imp:
         out.append(f"Impact allowance {imp:.0%} on the live loads (common practice for slow "

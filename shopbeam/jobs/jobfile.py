@@ -42,7 +42,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
          "moving", "project"},
     "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded",
              "braces", "braced", "bearing", "restrained"},
-    "supports": {"at", "type", "stiffness", "label", "bearing"},
+    "supports": {"at", "type", "stiffness", "label", "bearing", "brace"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned", "uplift", "bearing", "flange"},
     "criteria": {"deflection", "safety_factor", "basis", "impact"},
@@ -476,6 +476,12 @@ def _read_support(r: _Reader, i: int, s, length) -> Support | None:
         stiffness = r.parse(s, "stiffness", "stiffness", f"{key}.stiffness", positive=True)
     elif "stiffness" in s:
         r.warn(f"stiffness is only used by a spring; this {kind} support ignores it", f"{key}.stiffness")
+    if "brace" in s and not isinstance(s["brace"], bool):
+        r.error("brace must be true or false (true: this support holds the member against "
+                "twist and sideways movement)", f"{key}.brace")
+    elif s.get("brace") is True and kind == "hinge":
+        r.error("a hinge is not a support and cannot brace the member; put a brace point in "
+                "beam.braces instead", f"{key}.brace")
     if kind is None or at is None or stiffness is None:
         return None
     return Support(at, kind, stiffness or 0.0, key)
