@@ -161,22 +161,9 @@ BRACE_BY_DEFAULT = {"fixed": True, "pin": True, "roller": True, "spring": False,
 
 def support_braces(job, supports) -> list[float]:
     """Positions of the supports that brace the member against twist (see BRACE_BY_DEFAULT)."""
-    from shopbeam.errors import InputError
-
-    raw = (job.data.get("supports", []) if job.data else []) or []
-    out = []
-    for s in supports:
-        if not s.takes_force and s.kind != "hinge":
-            continue
-        said = None
-        m = re.fullmatch(r"supports\[(\d+)\]", s.key or "")
-        if m and int(m.group(1)) < len(raw) and isinstance(raw[int(m.group(1))], dict):
-            said = raw[int(m.group(1))].get("brace")
-        if said is not None and not isinstance(said, bool):
-            raise InputError("brace must be true or false (does this support hold the member "
-                             "against twist?)", f"{s.key}.brace")
-        if said if said is not None else BRACE_BY_DEFAULT.get(s.kind, False):
-            out.append(s.at)
+    out = [s.at for s in supports
+           if (s.brace if s.brace is not None else BRACE_BY_DEFAULT.get(s.kind, False))
+           and s.kind != "hinge"]
     return sorted(set(out))
 
 

@@ -25,6 +25,7 @@ class Support:
     kind: str
     stiffness: float = 0.0
     key: str = ""  # where it came from in the job file, e.g. "supports[1]"
+    brace: bool | None = None  # holds the member against twist? None: by kind (design layer)
 
     @property
     def takes_force(self) -> bool:

@@ -484,7 +484,8 @@ def _read_support(r: _Reader, i: int, s, length) -> Support | None:
                 "beam.braces instead", f"{key}.brace")
     if kind is None or at is None or stiffness is None:
         return None
-    return Support(at, kind, stiffness or 0.0, key)
+    brace = s.get("brace") if isinstance(s.get("brace"), bool) else None
+    return Support(at, kind, stiffness or 0.0, key, brace)
 
 
 def _line_load(r: _Reader, ld: dict, raw, key: str, width_needed: list) -> float | None:
