@@ -111,10 +111,11 @@ def test_brace_must_be_true_or_false(tmp_path):
 
 
 TEE = """schema = 1
-title = "WT6x7 bracket"
+title = "WT6x7 bracket bent about its weak axis"
 [beam]
 length = "4 ft"
 section = "WT6x7"
+axis = "weak"
 material = "A992"
 [[supports]]
 at = "0 ft"
@@ -129,6 +130,7 @@ value = "-850 lbf"
 def test_tee_bracket_is_not_rated_and_says_why():
     job = parse_job_text(TEE)
     res = capacity(job)
+    # AISC 360-16 F9 covers bending about the axis of symmetry only
     assert not res.rated and any("F9" in r for r in res.not_rated)
     label = rating_label(res)
     flat = " ".join(x.strip("| ") for x in label.splitlines())
@@ -138,6 +140,38 @@ def test_tee_bracket_is_not_rated_and_says_why():
     assert data["factor"] is not None and data["factor"] > 0  # the contract field stays
     sol = to_json(analyze(job))
     assert any(u["clause"] == "AISC 360-16 F9" and u["blocks_rating"] for u in sol["unchecked"])
+
+
+TYPED = """schema = 1
+title = "typed-in section in A36"
+[beam]
+length = "6 ft"
+material = "A36"
+self_weight = false
+[beam.section]
+shape = "custom"
+area = "2 in^2"
+ix = "10 in^4"
+sx = "3 in^3"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "3 ft"
+value = "-1000 lbf"
+"""
+
+
+def test_typed_in_section_is_not_rated():
+    res = capacity(parse_job_text(TYPED))
+    assert not res.rated
+    assert any("custom section" in r and "AISC 360-16 F1" in r for r in res.not_rated)
+    sol = to_json(analyze(parse_job_text(TYPED)))
+    assert any(u["blocks_rating"] for u in sol["unchecked"])
 
 
 def test_catalog_w_shape_is_rated():

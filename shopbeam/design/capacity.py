@@ -117,8 +117,11 @@ def _fixed_is_zero(ss) -> bool:
 def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     """Why a capacity must not be posted: every limit state the member calls for that was not
     checked and would block a rating, and any failed self-check of the solve."""
-    out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in st.unchecked
-           if u.blocks_rating]
+    from shopbeam.design.local import local_unchecked
+    from shopbeam.design.open_shapes import open_unchecked
+
+    every = list(st.unchecked) + local_unchecked(job, st.section) + open_unchecked(job, st)
+    out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in every if u.blocks_rating]
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
