@@ -55,7 +55,8 @@ Every shape also takes ``axis`` = ``"strong"`` (default) | ``"weak"`` and an opt
 - tee: ``d``, ``bf``, ``tf``, ``tw``, ``kdes``, ``y`` (flange outside to centroid), ``d_tw``,
   ``bf_2tf``.
 - angle: ``d`` (leg in the bending plane), ``b``, ``t``, ``y`` (heel to centroid along d),
-  ``x``, ``b_t``, ``iz``, ``rz`` (minor principal axis), ``tan_alpha``.
+  ``x``, ``b_t``, ``iz``, ``rz`` (minor principal axis), ``tan_alpha``; catalog angles also
+  ``iw``, ``sw``, ``sz`` (principal-axis values of the AISC Shapes Database v15.0).
 - double-channel: the channel's keys plus ``gap``, ``width`` (overall); cover-plated: the
   base's keys plus ``plate_b``, ``plate_t``, ``width``. Both also carry
   ``weak_shear_area`` (used when turned).
