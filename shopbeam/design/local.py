@@ -182,7 +182,7 @@ def applies(sec) -> str:
     shape = sec.shape
     if shape in ("i-beam", "channel", "double-channel") and sec.axis == "strong":
         return "web"
-    if shape == "cover-plated" and "tw" in sec.dims:
+    if shape == "cover-plated" and "tw" in sec.dims and sec.axis == "strong":
         return "web"
     if shape == "rect-tube" or (shape == "cover-plated" and "t_des" in sec.dims):
         return "hss"
@@ -341,7 +341,10 @@ def _check(job, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
               "end_distance": max(0.0, min(f.at, job.length - f.at))}
     params.update({k: float(v) for k, v in extra.items()})
     sense = "pulls on" if f.pulls else "bears on"
-    return Check(name, abs(f.force), rn / omega, "N", f"{clause}: {formula}", f.at,
+    short = (f"lb = {small} from the job" if f.bearing is not None else
+             "lb = 0: bearing length not given (conservative)")
+    return Check(name, abs(f.force), rn / omega, "N",
+                 f"{clause}: {formula}; {eq} at {f.what}, {short}", f.at,
                  detail=f"{f.what} ({sense} the {f.face} flange): {eq}; {given}",
                  clause=clause, source=src, params=params)
 
