@@ -167,3 +167,19 @@ def test_size_steel_on_a_lumber_job_switches_to_steel(tmp_path):
     d = json.loads(r.stdout)
     assert d["material"] == "A992" and "DF-L-2" in d["material_note"]
     assert all(row["material"] == "A992" for row in d["passing"])
+
+
+@pytest.mark.parametrize("section, material, basis", [
+    ("2x10", "DF-L-2", "first-yield"), ("2x10", "DF-L-2", "asd"),
+    ("FB4x1/2", "6061-T6", "asd")])
+def test_a_basis_the_material_does_not_use_is_warned(section, material, basis):
+    job = parse_job_text(job_text(section=section, material=material,
+                                  criteria=f'basis = "{basis}"'))
+    w = [p for p in warnings(job) if p.key == "criteria.basis"]
+    assert w and "does not apply" in w[0].message
+
+
+def test_first_yield_on_aluminium_is_used_without_a_warning():
+    job = parse_job_text(job_text(section="FB4x1/2", material="6061-T6",
+                                  criteria='basis = "first-yield"'))
+    assert not [p for p in warnings(job) if p.key == "criteria.basis"]

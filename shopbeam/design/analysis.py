@@ -105,7 +105,10 @@ def analyze(job: Job) -> Result:
         checks = run_checks(job, sol)
     from shopbeam.design.local import connection_notes
 
-    notes = connection_notes(job, sol) + member_notes(job)
+    from shopbeam.design.checks import aluminum_unchecked
+
+    notes = connection_notes(job, sol) + member_notes(job) + [
+        f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}." for u in aluminum_unchecked(job)]
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
                   state_sol, state_words, tuple(unchecked_for(job)))
@@ -129,7 +132,10 @@ def unchecked_for(job: Job) -> list[Unchecked]:
     from shopbeam.design.open_shapes import open_unchecked
 
     st = strengths(job)
-    return list(st.unchecked) + local_unchecked(job) + open_unchecked(job, st)
+    from shopbeam.design.checks import aluminum_unchecked
+
+    return list(st.unchecked) + local_unchecked(job) + open_unchecked(job, st) + \
+        aluminum_unchecked(job)
 
 
 def to_json(result: Result) -> dict:

@@ -285,8 +285,9 @@ def render(res: CapacityResult) -> str:
     from shopbeam.output.report import check_value
 
     for c in res.checks:
-        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, job.units)} vs "
-                     f"{check_value(c.limit, c.unit, job.units)}: ratio {c.ratio:.6f}")
+        wd = getattr(job.material, "kind", "") == "lumber"
+        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, job.units, wd)} vs "
+                     f"{check_value(c.limit, c.unit, job.units, wd)}: ratio {c.ratio:.6f}")
         for w in textwrap.wrap(c.formula + (f" [{c.detail}]" if c.detail else ""), 72):
             lines.append("      " + w)
     if res.governing:

@@ -41,6 +41,7 @@ OMEGA_B = 1.67  # AISC 360-16 F1
 OMEGA_V = 1.67  # AISC 360-16 G1
 OMEGA_V_ROLLED_I = 1.50  # AISC 360-16 G2.1(a)
 OMEGA_ADM = 1.65  # Aluminum Design Manual 2015, yielding (from memory)
+PSI_PA = 6894.757293168361
 CB_MAX = 3.0  # AISC 360-16 F1: Cb need not exceed 3.0 (upper bound used here)
 
 
@@ -121,8 +122,9 @@ def basis_of(job) -> str:
 BASIS_WORDS = {
     "asd": "AISC 360-16 allowable strength design (ASD)",
     "first-yield": "first yield with a safety factor",
-    "aluminum": "Aluminum Design Manual 2015 ASD, yielding (from memory)",
-    "lumber": "NDS 2018 allowable stress design, adjustment factors 1.0 (from memory)",
+    "aluminum": "Aluminum Design Manual 2015 ASD, yielding and rupture (from memory)",
+    "lumber": "NDS 2018 allowable stress design with the Table 4.3.1 adjustment factors "
+              "(reference values from memory)",
 }
 
 
@@ -201,12 +203,27 @@ class Flexure:
     special: str = ""  # "F9" (tees) or "F10" (angles): checked by shopbeam.design.open_shapes
     # limit states of this section this strength does not cover (the rating refuses on them)
     unchecked: tuple = ()
+    wood: object = None  # lumber.Factors for wood members
+    uses_cb: bool = True  # False: the stability rule has no Cb (NDS CL)
 
-    def ltb1(self, lb: float) -> tuple[float, str]:
-        """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern)."""
+    def ltb1(self, lb: float, case: str = "any") -> tuple[float, str]:
+        """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern);
+        `case` is the load arrangement of NDS Table 3.3.3 for wood."""
         if self.ltb is None or lb <= 0:
             return math.inf, ""
         kind, p = self.ltb
+        if kind == "NDS":
+            from shopbeam.design.lumber import effective_length, stability_factor
+
+            fb_star, s, emin, b, d = p
+            le, le_words = effective_length(lb, d, case)
+            cl, rb, fbe = stability_factor(fb_star, emin, b, d, le)
+            over = ("; RB over 50, beyond NDS 3.3.3.7: brace the member" if rb > 50 else "")
+            return cl * fb_star * s, (
+                f"CL {cl:.3f} by NDS 3.3.3: lu {lb / 0.0254:.4g} in, {le_words} = "
+                f"{le / 0.0254:.4g} in, RB = sqrt(le d / b^2) = {rb:.3g}, FbE = 1.20 Emin'/RB^2 "
+                f"= {fbe / PSI_PA:,.0f} psi, Fb* {fb_star / PSI_PA:,.0f} psi: Fb' = Fb* CL = "
+                f"{cl * fb_star / PSI_PA:,.0f} psi{over}")
         if kind == "F2":
             mp, sx, e, fy, rts, jc, ho, lp, lr = p
             if lb <= lp:
@@ -272,13 +289,13 @@ def _unchecked_shape(shape: str) -> Unchecked:
                      "yield only", "AISC 360-16 F1")
 
 
-def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Flexure:
-    """Bending strength of the section (SI) on the given basis."""
+def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
+            service=None) -> Flexure:
+    """Bending strength of the section (SI) on the given basis (`service`: the wood keys,
+    shopbeam.design.lumber.Service)."""
     s = min(sec.sx_top, sec.sx_bot)
     if basis == "lumber":
-        fb = mat.fb or mat.fy
-        return Flexure(fb * s, 1.0, "NDS 3.3: fb = M / S <= Fb' = Fb (CD, CM, Ct, CL, CF, Cfu, "
-                       "Ci, Cr = 1.0; laterally supported)", stress_s=s)
+        return _lumber_flexure(sec, mat, s, service)
     if basis == "first-yield":
         unc = ()
         steel = getattr(mat, "kind", "") in ("steel", "stainless")
@@ -299,17 +316,7 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> Fle
     fy, e = _fy_e(mat, basis, welded)
     z = sec.zx
     if basis == "aluminum":
-        mp = min(z * fy, 1.5 * s * fy) if z else s * fy
-        what = "welded Ftyw" if (welded and mat.fy_welded) else "Fty"
-        return Flexure(mp, OMEGA_ADM, f"ADM F.2: Mn = Z {what} <= 1.5 S {what}, Omega 1.65",
-                       warnings=("aluminium: element local buckling (ADM B.5) and lateral-"
-                                 "torsional buckling (ADM F.4) are not checked; thin walls and "
-                                 "long unbraced open sections need an engineer's check",),
-                       unchecked=() if shape_solid(sec) else (Unchecked(
-                           "aluminium local and lateral-torsional buckling",
-                           "only yielding is checked for aluminium; element local buckling and "
-                           "lateral-torsional buckling can govern thin walls and open sections: "
-                           "have the member checked by an engineer", "ADM 2015 B.5, F.4"),))
+        return _adm_flexure(sec, mat, s, z, welded)
     d = sec.dims
     shape, axis = sec.shape, sec.axis
     if shape in ("i-beam", "channel") and axis == "strong" and z:
@@ -419,6 +426,132 @@ def _f2_f3(sec, fy, e) -> Flexure:
                    warnings=tuple(warnings), unchecked=tuple(unchecked))
 
 
+OMEGA_ADM_RUPTURE = 1.95  # Aluminum Design Manual 2015, rupture (from memory)
+
+
+def _adm_flexure(sec, mat, s, z, welded) -> Flexure:
+    """ADM 2015 F.1 (from memory): the lesser of yielding Mnp = Z Fy <= 1.5 S Fy over
+    Omega 1.65 and rupture Mnu = Z Fu / kt over Omega 1.95 (kt 1.0 for 6xxx alloys, ADM
+    Table A.3.3), with the welded (heat-affected zone) strengths when the member is welded."""
+    w = bool(welded and mat.fy_welded)
+    fy = mat.fy_welded if w else mat.fy
+    fu = (mat.fu_welded if w and mat.fu_welded else mat.fu)
+    zz = z or s
+    mp = min(zz * fy, 1.5 * s * fy)
+    yname, uname = ("Ftyw (welded)", "Ftuw (welded)") if w else ("Fty", "Ftu")
+    ytext = (f"ADM 2015 F.1 yielding: Mn = Z {yname} <= 1.5 S {yname}, {yname.split()[0]} "
+             f"{fy / (PSI_PA * 1000):.3g} ksi, Omega 1.65")
+    if not fu:
+        return Flexure(mp, OMEGA_ADM, ytext + " (no tensile strength given: rupture not "
+                       "checked)", warnings=("aluminium rupture (Z Ftu / 1.95) not checked: the "
+                                             "material gives no fu",))
+    mu = zz * fu / 1.0
+    utext = (f"ADM 2015 F.1 rupture: Mn = Z {uname} / kt, {uname.split()[0]} "
+             f"{fu / (PSI_PA * 1000):.3g} ksi, kt 1.0, Omega 1.95")
+    if mu / OMEGA_ADM_RUPTURE < mp / OMEGA_ADM:
+        return Flexure(mu, OMEGA_ADM_RUPTURE, f"{utext} (governs over yielding Z {yname} / "
+                       "1.65)")
+    return Flexure(mp, OMEGA_ADM, f"{ytext} (governs over rupture Z {uname} / 1.95)")
+
+
+def adm_limits(fcy: float, e: float) -> dict[str, float]:
+    """Slenderness limits lambda1 below which an element reaches yield, ADM 2015 B.5.4 with
+    the buckling constants of Table B.4.2 (artificially aged tempers, from memory), ksi:
+    Bp = Fcy (1 + Fcy^(1/3) / 11.4), Dp = Bp / 10 sqrt(Bp / E); flat element supported on both
+    edges lambda1 = (Bp - Fcy) / (1.6 Dp) (B.5.4.2), on one edge (Bp - Fcy) / (5.0 Dp)
+    (B.5.4.1); curved element Bt = Fcy (1 + Fcy^(1/5) / 5.8), Dt = Bt / 3.7 (Bt / E)^(1/3),
+    Rb/t limit ((Bt - Fcy) / Dt)^2 (B.5.4.5)."""
+    f, ek = fcy / (PSI_PA * 1000), e / (PSI_PA * 1000)
+    bp = f * (1 + f ** (1 / 3) / 11.4)
+    dp = bp / 10 * math.sqrt(bp / ek)
+    bt = f * (1 + f ** 0.2 / 5.8)
+    dt = bt / 3.7 * (bt / ek) ** (1 / 3)
+    return {"both": (bp - f) / (1.6 * dp), "one": (bp - f) / (5.0 * dp),
+            "curved": ((bt - f) / dt) ** 2}
+
+
+def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
+    """The ADM limit states shopbeam does not compute, named only where they can govern:
+    local buckling of an element more slender than lambda1 (ADM B.5.4), shear buckling of such
+    a web (ADM G.2), lateral-torsional buckling of an unbraced open shape or deep bar (ADM F.4).
+    A compact element reaches yield first, so the yield and rupture checks cover it."""
+    sec = sec or job.section
+    mat = job.material
+    if getattr(mat, "kind", "") != "aluminum" or basis_of(job) != "aluminum":
+        return []
+    fcy = mat.fy_welded if (job.welded and mat.fy_welded) else mat.fy
+    lim = adm_limits(fcy, mat.e)
+    d, shape = sec.dims, sec.shape
+    elems = []  # (name, ratio, limit key, is web)
+    if shape == "rect-tube" and "t_des" in d:
+        elems += [("flange b/t", d["b_flat"] / d["t_des"], "both", False),
+                  ("web h/t", d["h_flat"] / d["t_des"], "both", True)]
+    elif shape in ("round-tube", "pipe") and "t_des" in d:
+        elems.append(("wall Rb/t", (d["od"] - d["t_des"]) / 2 / d["t_des"], "curved", False))
+    elif shape in ("i-beam", "channel") and "tf" in d:
+        out = (d["bf"] - d["tw"]) / 2 if shape == "i-beam" else d["bf"] - d["tw"]
+        h = d["d"] - 2 * d["tf"]
+        elems += [("flange outstand b/t", out / d["tf"], "one", False),
+                  ("web h/t", h / d["tw"], "both", True)]
+    elif shape in ("angle", "tee"):
+        t = d.get("t") or d.get("tw") or d.get("tf")
+        if t:
+            elems.append(("leg or stem b/t", max(d.get("d", 0), d.get("b", 0)) / t, "one", False))
+    out = []
+    for name, ratio, key, web in elems:
+        if ratio > lim[key]:
+            out.append(Unchecked(
+                "element local buckling",
+                f"{name} = {ratio:.3g} is over lambda1 = {lim[key]:.3g} (ADM 2015 B.5.4, from "
+                "memory): the element may buckle before it yields, and shopbeam does not compute "
+                "the buckled strength; have the section checked before rating it",
+                "ADM 2015 B.5.4, F.3"))
+            if web:
+                out.append(Unchecked(
+                    "web shear buckling", f"{name} = {ratio:.3g}: a web this slender may buckle "
+                    "in shear (ADM 2015 G.2); not computed", "ADM 2015 G.2"))
+    braced, _ = brace_points(job)
+    if not braced:
+        open_shape = shape in ("i-beam", "channel", "angle", "tee")
+        deep_bar = False
+        if shape == "rect-bar" and d["h"] > d["b"]:
+            lb = max((b - a for a, b, _ in unbraced_segments(job, job.beam())), default=0.0)
+            deep_bar = lb * d["h"] / d["b"] ** 2 > 0.08 * mat.e / fcy
+        if open_shape or deep_bar:
+            out.append(Unchecked(
+                "lateral-torsional buckling",
+                f"an unbraced {shape} in aluminium may buckle sideways (ADM 2015 F.4); "
+                "shopbeam does not compute it: brace the compression edge (braced = true, or "
+                "braces = [...]) or have it checked", "ADM 2015 F.4"))
+    return out
+
+
+def _lumber_flexure(sec, mat, s, service) -> Flexure:
+    from shopbeam.design import lumber
+
+    if sec.shape != "rect-bar":
+        fb = mat.fb or mat.fy
+        return Flexure(fb * s, 1.0, "NDS 3.3: fb = M / S <= Fb (a wood section that is not a "
+                       "rectangle: no adjustment factors applied)", stress_s=s, uses_cb=False,
+                       warnings=("wood section not rectangular: NDS adjustment factors and "
+                                 "beam stability are not applied",))
+    f = lumber.factors(sec, mat, service or lumber.Service())
+    fac = f.factors
+    text = (f"NDS 2018 Table 4.3.1: Fb' = Fb CD CM Ct CL CF Cfu Cr = "
+            f"{f.values.fb / PSI_PA:,.0f} psi x CD {fac['CD']:g} x CM {fac['CM_b']:g} x Ct "
+            f"{fac['Ct_b']:g} x CF {fac['CF']:.3g} x Cfu {fac['Cfu']:g} x Cr {fac['Cr']:g} = "
+            f"{f.fb_star * f.cfu / PSI_PA:,.0f} psi")
+    ltb = None
+    if f.flat:
+        text += " (flat use: CL = 1.0, NDS 3.3.3.3 d <= b)"
+    elif f.d / f.b <= 2.0:
+        text += f" (d/b = {f.d / f.b:.3g} <= 2: no lateral support needed, CL = 1.0, NDS 4.4.1.2)"
+    else:
+        ltb = ("NDS", (f.fb_star, s, f.emin, f.b, f.d))
+    return Flexure(f.fb_star * f.cfu * s, 1.0, text, ltb=ltb, stress_s=s, wood=f,
+                   uses_cb=False)
+
+
 def _f6(sec, fy, e) -> Flexure:
     d = sec.dims
     sy, zy = min(sec.sx_top, sec.sx_bot), sec.zx
@@ -512,19 +645,31 @@ def _cv2(ratio: float, kv: float, e: float, fy: float) -> float:
     return 1.51 * kv * e / (ratio**2 * fy)
 
 
-def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False) -> ShearStrength:
+def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
+                   service=None) -> ShearStrength:
     av = sec.shear_area
     if basis == "lumber":
+        if sec.shape == "rect-bar":
+            from shopbeam.design import lumber
+
+            f = lumber.factors(sec, mat, service or lumber.Service())
+            fac = f.factors
+            return ShearStrength(f.fv * av, 1.0, f"NDS 3.4.2: fv = 1.5 V / A <= Fv' = Fv CD CM "
+                                 f"Ct = {f.values.fv / PSI_PA:,.0f} psi x CD {fac['CD']:g} x CM "
+                                 f"{fac['CM_v']:g} x Ct {fac['Ct_b']:g} = {f.fv / PSI_PA:,.0f} "
+                                 "psi (NDS 2018 Table 4.3.1)", av, True)
         fv = mat.fv or 0.6 * mat.fy
-        return ShearStrength(fv * av, 1.0, "NDS 3.4: fv = V / Av (= 1.5 V / A for a rectangle) "
-                             "<= Fv' = Fv (adjustment factors 1.0)", av, True)
+        return ShearStrength(fv * av, 1.0, "NDS 3.4: fv = V / Av <= Fv (a wood section that is "
+                             "not a rectangle: adjustment factors not applied)", av, True)
     if basis == "first-yield":
         return ShearStrength(0.6 * mat.fy * av, sf, f"fv = V / Av <= 0.6 Fy / SF = 0.6 Fy / "
                              f"{sf:g} (average shear on the shear area)", av, True)
     fy, e = _fy_e(mat, basis, welded)
     if basis == "aluminum":
-        return ShearStrength(0.6 * fy * av, OMEGA_ADM, "ADM G: Vn = Fsy Av = 0.6 Fty Av, Omega "
-                             "1.65 (shear buckling of thin webs not checked)", av)
+        w = "Ftyw (welded)" if (welded and mat.fy_welded) else "Fty"
+        return ShearStrength(0.6 * fy * av, OMEGA_ADM, f"ADM 2015 G: Vn = Fsy Av = 0.6 {w} Av, "
+                             f"0.6 {w.split()[0]} = {0.6 * fy / (PSI_PA * 1000):.3g} ksi, Omega "
+                             "1.65", av)
     d, shape, axis = sec.dims, sec.shape, sec.axis
     if shape in ("i-beam", "channel") and axis == "strong":
         h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
@@ -581,6 +726,7 @@ class Strengths:
     defl_words: str
     section: object = None  # the section these strengths are for
     unchecked: tuple = ()  # Unchecked limit states of this member (see member_unchecked)
+    live_ratio: float | None = None  # n of L/n under live load alone (floors), or None
 
 
 def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
@@ -588,17 +734,13 @@ def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
     braced = brace_points(job)[0]
     out = [u for u in flex.unchecked
            if not (braced and u.name == "lateral-torsional buckling")]
-    if basis_of(job) == "lumber" and sec.shape == "rect-bar":
-        d, b = sec.dims["h"], sec.dims["b"]
-        if d / b > 2 and not braced:
-            # NDS 2018 4.4.1.2 (from memory): d/b <= 2 needs no lateral support; deeper
-            # members need their ends held (d/b <= 4) or the compression edge held
-            out.append(Unchecked(
-                "beam stability factor CL", f"d/b = {d / b:.3g} > 2: CL is taken as 1.0, "
-                "which needs the lateral support of NDS 4.4.1.2 (ends held in position up to "
-                "d/b 4, the compression edge held beyond); say braced = true when it is",
-                "NDS 2018 3.3.3, 4.4.1", blocks_rating=d / b > 4))
     return tuple(out)
+
+
+def live_deflection_ratio(job) -> float | None:
+    """L/n under live load alone: 360 for deflection = "floor" (IBC Table 1604.3), or
+    [criteria] live_deflection = "L/n" (the reader resolves both)."""
+    return job.criteria.live_deflection_ratio
 
 
 def strengths(job, sec=None, beam=None) -> Strengths:
@@ -606,16 +748,38 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     beam = beam or job.beam()
     b = basis_of(job)
     sf = job.criteria.safety_factor
-    fl = flexure(sec, job.material, b, sf, job.welded)
-    sh = shear_strength(sec, job.material, b, sf, job.welded)
+    service = None
+    if b == "lumber":
+        from shopbeam.design.lumber import service_of
+
+        service = service_of(job)
+    fl = flexure(sec, job.material, b, sf, job.welded, service=service)
+    sh = shear_strength(sec, job.material, b, sf, job.welded, service=service)
     segs = []
     braced = brace_points(job)[0]
     for a, bb, free in unbraced_segments(job, beam):
-        l1, why = fl.ltb1(0.0 if braced else bb - a)
+        case = "any"
+        if fl.ltb is not None and fl.ltb[0] == "NDS":
+            case = _wood_load_case(job, a, bb, free)
+        l1, why = fl.ltb1(0.0 if braced else bb - a, case)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
-                     member_unchecked(job, sec, fl))
+                     member_unchecked(job, sec, fl), live_ratio=live_deflection_ratio(job))
+
+
+def _wood_load_case(job, a: float, b: float, free: bool) -> str:
+    """NDS Table 3.3.3 row for the loads of the job on the unbraced length a..b."""
+    from shopbeam.design.lumber import load_case
+
+    if job.moving:
+        return "any"
+    tol = 1e-9 * job.length
+    held = [sp.at for sp in job.supports if sp.takes_force]
+    ends_held = [any(abs(x - h) <= tol for h in held) for x in (a, b)]
+    if not free and not all(ends_held):
+        return "any"  # a length ending at a brace: Table 3.3.3 footnote (general rows)
+    return load_case(job.member_loads(), a, b, free, free and b >= job.length * (1 - 1e-9))
 
 
 def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
@@ -626,18 +790,21 @@ def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
     return min(12.5 * mmax / den, CB_MAX)
 
 
-def deflection_limits(job, sol: Solution, st: Strengths | None = None) -> list[dict]:
-    """Each span and overhang with its largest deflection and its limit."""
+def deflection_limits(job, sol: Solution, st: Strengths | None = None,
+                      ratio: float | None = None) -> list[dict]:
+    """Each span and overhang with its largest deflection and its limit (L/`ratio` when
+    given, else the job's rule)."""
     st = st or strengths(job, beam=sol.beam)
     out = []
     for a, b, kind in segments(sol.beam):
         length = b - a
         judged = 2 * length if kind in ("cantilever", "overhang") else length
-        if st.defl_abs is not None:
+        if ratio is None and st.defl_abs is not None:
             limit, rule = st.defl_abs, st.defl_words
         else:
-            limit = judged / st.defl_ratio
-            rule = f"{'2 x ' if judged != length else ''}{kind} length / {st.defl_ratio:g}"
+            n = ratio or st.defl_ratio
+            limit = judged / n
+            rule = f"{'2 x ' if judged != length else ''}{kind} length / {n:g}"
         ex = sol.deflection.extremes(a, b)
         out.append({"start": a, "end": b, "kind": kind, "demand": ex.abs_max, "limit": limit,
                     "at": ex.abs_max_at, "rule": rule})
@@ -653,12 +820,14 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     for a, b, free, l1, why in st.ltb_segments:
         ex = m.extremes(a, b)
         mmax = ex.abs_max
-        if l1 == math.inf or cb_one or free:
+        if l1 == math.inf or cb_one or free or not fl.uses_cb:
             cb = 1.0
         else:
             q = [abs(float(m(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
             cb = cb_factor(mmax, *q)
-        if cb * l1 < fl.cap:
+        if cb * l1 < fl.cap and not fl.uses_cb:
+            mn, text = l1, f"{fl.cap_text}; {why}"
+        elif cb * l1 < fl.cap:
             mn, text = cb * l1, f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
         else:
             mn, text = fl.cap, fl.cap_text
@@ -672,8 +841,15 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
         f"; unbraced length {pos(a)} to {pos(b)} governs"
     if fl.stress_s:
         s = fl.stress_s
+        params = {}
+        if fl.wood is not None:
+            params = {k: float(v) for k, v in fl.wood.factors.items()}
+            params["CL"] = min(1.0, allow / (fl.wood.fb_star * fl.wood.cfu * s))
         bend = Check("bending", mmax / s, allow / s, "Pa", f"{basis}: {text}", at,
-                     detail=seg_words.lstrip("; "))
+                     detail=seg_words.lstrip("; "), params=params,
+                     clause="NDS 2018 3.3, 3.3.3, Table 4.3.1" if fl.wood is not None else "",
+                     source="NDS 2018 and Supplement (from memory)" if fl.wood is not None
+                     else "")
     else:
         bend = Check("bending", mmax, allow, "N*m",
                      f"{basis}: M <= Mn / Omega_b, Mn by {text}, Omega_b {fl.omega:g}", at,
@@ -686,13 +862,22 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     else:
         shear = Check("shear", v.abs_max, allow_v, "N",
                       f"{basis}: V <= Vn / Omega_v, {sh.text}", v.abs_max_at)
-    spans = deflection_limits(job, sol, st)
+    creep = ""
+    dsol = sol
+    if fl.wood is not None and any(ld.case == "dead" for ld in sol.beam.loads):
+        kcr = fl.wood.kcr
+        dsol = _solve_loads(sol, [ld.scaled(kcr) if ld.case == "dead" else ld
+                                  for ld in sol.beam.loads])
+        creep = (f"; long-term: Kcr {kcr:g} x the dead-load deflection + the live-load "
+                 f"deflection (NDS 2018 3.5.2, {'wet service' if kcr > 1.5 else 'seasoned, dry'})")
+    spans = deflection_limits(job, dsol, st)
     w = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
     defl = Check("deflection", w["demand"], w["limit"], "m",
                  f"largest deflection in each span against {st.defl_words} "
-                 "(cantilevers and overhangs on twice their length)", w["at"],
+                 f"(cantilevers and overhangs on twice their length){creep}", w["at"],
                  detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} ({w['rule']})",
-                 extra={"spans": spans})
+                 extra={"spans": spans},
+                 params={"Kcr": fl.wood.kcr} if creep else {})
     from shopbeam.design import local, open_shapes
 
     sec = st.section or job.section
@@ -701,7 +886,117 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     angle_words = open_shapes.deflection_words(job, sec)
     if angle_words:
         defl = replace(defl, formula=f"{defl.formula}; {angle_words}")
-    return [bend, shear, defl] + local.local_checks(job, sol, sec)
+    out = [bend, shear, defl] + local.local_checks(job, sol, sec)
+    if st.live_ratio:
+        lsol = _solve_loads(sol, [ld for ld in sol.beam.loads if ld.case != "dead"])
+        spans = deflection_limits(job, lsol, st, st.live_ratio)
+        w = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
+        out.append(Check("live deflection", w["demand"], w["limit"], "m",
+                         f"largest deflection under the live loads alone against L/"
+                         f"{st.live_ratio:g} (IBC 2018 Table 1604.3 floor members, from memory)",
+                         w["at"], detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} "
+                         f"({w['rule']})", extra={"spans": spans},
+                         clause="IBC 2018 Table 1604.3", source="IBC 2018 (from memory)"))
+    if fl.wood is not None:
+        out += bearing_checks(job, sol, fl.wood)
+        out += dead_load_checks(job, sol, st)
+    return out
+
+
+def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
+    """NDS 2018 2.3.2: the dead load alone is checked with CD = 0.9 (permanent) when the job's
+    duration is shorter; it governs when the dead load is a large part of the total."""
+    from dataclasses import replace as _replace
+
+    fl, sh = st.flexure, st.shear
+    wf = fl.wood
+    cd = wf.factors["CD"]
+    dead = [ld for ld in sol.beam.loads if ld.case == "dead"]
+    if cd <= 0.9 or not dead:
+        return []
+    r = 0.9 / cd
+    dsol = _solve_loads(sol, dead)
+    s = fl.stress_s
+    scaled = _replace(fl, cap=fl.cap * r, ltb=("NDS", (wf.fb_star * r,) + fl.ltb[1][1:])
+                      if fl.ltb else None)
+    braced = brace_points(job)[0]
+    worst = None
+    for a, b, free in ((x[0], x[1], x[2]) for x in st.ltb_segments):
+        l1, why = scaled.ltb1(0.0 if braced else b - a, _wood_load_case(job, a, b, free))
+        mn = min(scaled.cap, l1)
+        ex = dsol.moment.extremes(a, b)
+        if worst is None or ex.abs_max / mn > worst[0]:
+            worst = (ex.abs_max / mn, ex.abs_max, mn, ex.abs_max_at,
+                     why if l1 < scaled.cap else "")
+    _, mmax, mn, at, why = worst
+    words = "dead load alone with CD 0.9 (permanent, NDS 2018 2.3.2, Table 2.3.2)"
+    bend = Check("bending, dead load", mmax / s, mn / s, "Pa",
+                 f"{words}: Fb' = {fl.cap / s * r / PSI_PA:,.0f} psi (CL = 1)"
+                 + (f"; {why}" if why else ""), at,
+                 clause="NDS 2018 2.3.2, 3.3", source="NDS 2018 (from memory)",
+                 params={"CD": 0.9})
+    v = dsol.shear.extremes()
+    shear = Check("shear, dead load", v.abs_max / sh.area, sh.vn * r / sh.area, "Pa",
+                  f"{words}: Fv' = {sh.vn * r / sh.area / PSI_PA:,.0f} psi", v.abs_max_at,
+                  clause="NDS 2018 2.3.2, 3.4", source="NDS 2018 (from memory)",
+                  params={"CD": 0.9})
+    return [bend, shear]
+
+
+def _solve_loads(sol: Solution, loads) -> Solution:
+    """The same beam under other loads (creep and live-only deflection)."""
+    from dataclasses import replace as _replace
+
+    from shopbeam.engine.solver import solve
+
+    return solve(_replace(sol.beam, loads=tuple(loads)))
+
+
+def bearing_checks(job, sol: Solution, wf) -> list[Check]:
+    """Bearing perpendicular to grain at every pin, roller and spring support and every point
+    load (NDS 2018 3.10.2; a fixed end is a connection, not checked here):
+    fc_perp = R / (b lb) <= Fc_perp' = Fc_perp CM Ct Cb, lb the job's bearing length there
+    (``bearing`` on the support or load, else ``[beam] bearing``, else 1-1/2 in, stated)."""
+    from shopbeam.design.lumber import DEFAULT_BEARING, bearing_area_factor
+
+    if not wf.values.fc_perp:
+        return []
+    b = wf.b
+    bearings = getattr(job, "bearings", {}) or {}
+    common = getattr(job, "bearing", None)
+
+    def length_at(key):
+        lb = bearings.get(key) or common
+        if lb:
+            return lb, "as given"
+        return DEFAULT_BEARING, ("default 1-1/2 in, one 2x plate: give bearing under [beam] or "
+                                 "on the support or load (common practice)")
+
+    # a fixed end is a connection (its design is not a bearing check); pins, rollers and
+    # springs bear on what holds them
+    spots = [(r.at, abs(r.force), "support", r.key) for r in sol.reactions
+             if r.kind in ("pin", "roller", "spring")]
+    spots += [(ld.at, abs(ld.value), "point load", ld.key) for ld in sol.beam.loads
+              if ld.kind == "point" and ld.value != 0]
+    worst = None
+    for at, force, what, key in spots:
+        lb, stated = length_at(key)
+        end = min(at, sol.beam.length - at) / 0.0254
+        cb, cb_words = bearing_area_factor(lb / 0.0254, end)
+        demand, limit = force / (b * lb), wf.fc_perp * cb
+        if worst is None or demand / limit > worst[0]:
+            worst = (demand / limit, demand, limit, at, what, cb, cb_words, lb, stated)
+    if worst is None:
+        return []
+    _, demand, limit, at, what, cb, cb_words, lb, stated = worst
+    fac = wf.factors
+    return [Check("bearing", demand, limit, "Pa",
+                  f"NDS 2018 3.10.2: fc_perp = R / (b lb) <= Fc_perp' = Fc_perp CM Ct Cb = "
+                  f"{wf.values.fc_perp / PSI_PA:,.0f} psi x CM {fac['CM_cp']:g} x Ct "
+                  f"{fac['Ct_b']:g} x {cb_words} = {limit / PSI_PA:,.0f} psi; bearing length "
+                  f"lb {lb / 0.0254:.4g} in ({stated})", at, detail=f"{what} governs",
+                  clause="NDS 2018 3.10.2, 3.10.4", source="NDS 2018 (from memory)",
+                  params={"lb": lb, "Cb": cb})]
 
 
 def warnings_for(job, st: Strengths | None = None) -> list[str]:

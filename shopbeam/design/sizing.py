@@ -180,6 +180,8 @@ def _value_at(co: np.ndarray, breaks: np.ndarray, x: float) -> np.ndarray:
 def default_kind(job) -> str:
     from shopbeam.members import catalog
 
+    if getattr(job.material, "kind", "") == "lumber":
+        return "LVL" if job.material.key.startswith("LVL") else "lumber"
     m = re.match(r"[A-Za-z]+", job.section.designation or "")
     if m and m.group(0).upper() in {k.upper() for k in catalog.kinds()}:
         return next(k for k in catalog.kinds() if k.upper() == m.group(0).upper())
@@ -188,7 +190,7 @@ def default_kind(job) -> str:
 
 # The material a sweep of another family uses (stated in the output): the grade a shop
 # most often buys for that kind of stock (common practice).
-FAMILY_DEFAULTS = {"lumber": "DF-L-2", "W": "A992", "M": "A36", "S": "A36", "HP": "A572-50",
+FAMILY_DEFAULTS = {"lumber": "DF-L-2", "LVL": "LVL-2.0E", "W": "A992", "M": "A36", "S": "A36", "HP": "A572-50",
                    "HSS": "A500-C", "HSS-rect": "A500-C", "HSS-round": "A500-C",
                    "PIPE": "A53-B", "mech-tube": "A513", "mech-round": "A513"}
 
@@ -200,7 +202,7 @@ def material_for_kind(job, kind: str):
     from shopbeam.members.materials import get as get_material
 
     mkind = getattr(job.material, "kind", "custom")
-    wants_wood = kind == "lumber"
+    wants_wood = kind in ("lumber", "LVL")
     if mkind == "custom" or wants_wood == (mkind == "lumber"):
         return job, ""
     key = FAMILY_DEFAULTS.get(kind, "A36")
@@ -257,10 +259,12 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     base = replace(job, self_weight=False)
     parts = load_parts(base)
     springs = any(s.kind == "spring" for s in job.supports)
-    if springs or parts.moving:
-        rows, skipped = _slow(job, cands)
+    wood = any(getattr(c[2], "kind", "") == "lumber" for c in cands)
+    if springs or parts.moving or wood:
+        rows, skipped = _slow(job, _wood_values(job, cands) if wood else cands)
         method = ("section by section (the job has " + ("springs" if springs else
-                  "moving loads") + ")")
+                  "moving loads" if parts.moving else "wood members: NDS factors, bearing "
+                  "and creep per size") + ")")
     else:
         rows, skipped = _fast(job, base, parts, cands, state_set, with_capacity)
         method = "one layout solve, all sections batched"
@@ -337,10 +341,12 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     cap = np.array([r[10] for r in rs])
     ltb1 = np.array([[s[1] for s in r[7]] for r in rs])  # (R, nseg)
     free = [s[2] for s in rs[0][7]]
-    limits = []
+    limits, live_limits = [], []
+    live_n = job.criteria.live_deflection_ratio  # floors: L/360 under live load alone
     for a, bb, kind in spans:
         judged = 2 * (bb - a) if kind in ("cantilever", "overhang") else bb - a
         limits.append(d_abs if d_abs is not None else judged / n_ratio)
+        live_limits.append(judged / live_n if live_n else math.inf)
     # local checks at supports and point loads (shopbeam.design.local): every force is
     # fixed + w_self x sw + kk x live[state]; its allowable depends on its direction
     from shopbeam.design import local as _local
@@ -411,7 +417,14 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         eis = np.repeat(ei, S)
         for um, lim in zip(_absmax_many(uco, breaks, [(a, bb) for a, bb, _ in spans]), limits):
             defl = np.maximum(defl, um / eis / lim)
-        allr = np.stack([bend, shear, defl]).reshape(3, R, S).max(axis=2)  # worst pattern
+        ldef = np.zeros(R * S)
+        if live_n:
+            lv = U[2]
+            lco = (kk[:, None, None, None] * lv[None]).reshape(R * S, *lv.shape[1:])
+            for um, lim in zip(_absmax_many(lco, breaks, [(a, bb) for a, bb, _ in spans]),
+                               live_limits):
+                ldef = np.maximum(ldef, um / eis / lim)
+        allr = np.stack([bend, shear, defl, ldef]).reshape(4, R, S).max(axis=2)  # worst pattern
         allr = np.vstack([allr, local_ratio(kk)[0][None, :]])
         return allr.max(axis=0), allr.argmax(axis=0)
 
@@ -421,9 +434,9 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     else:
         k = np.full(R, np.nan)
     local_names = local_ratio(np.ones(R) * (1 + imp), True)[1]
-    names = ("bending", "shear", "deflection")
+    names = ("bending", "shear", "deflection", "live deflection")
     rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]),
-                    names[gi[i]] if gi[i] < 3 else local_names[i], float(k[i]),
+                    names[gi[i]] if gi[i] < 4 else local_names[i], float(k[i]),
                     r[3], r[4]) for i, r in enumerate(rs)]
     # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
     # each unbraced length, principal axes); those rows are checked one by one
@@ -490,6 +503,25 @@ def _capacity_vector(ratios, R: int) -> np.ndarray:
         side = np.where(up, 1, np.where(dn, -1, side))
     k = np.where(bounded, lo, np.where(live, np.inf, 0.0))
     return k
+
+
+def _wood_values(job, cands):
+    """Each wood candidate with the reference values of its own size class and E'."""
+    from shopbeam.design.lumber import service_of
+    from shopbeam.members import wood
+    from shopbeam.members.materials import get as get_material
+
+    svc = service_of(job)
+    out = []
+    for des, sec, mat, price, note in cands:
+        if getattr(mat, "kind", "") == "lumber":
+            base = get_material(mat.key) or mat
+            try:
+                mat = wood.adjusted_material(base, sec, svc.wet, svc.temperature)
+            except Exception:  # noqa: BLE001 - no table row: the sweep says it skipped it
+                continue
+        out.append((des, sec, mat, price, note))
+    return out
 
 
 def _slow(job, cands):

@@ -25,7 +25,7 @@ from shopbeam import units
 from shopbeam.cautions import is_lifting, normal_tag
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
 from shopbeam.errors import InputError, InputErrors, Problem
-from shopbeam.jobs.rules import (DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
+from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, Basis)
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.sections import resolve_section
@@ -41,11 +41,13 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
          "moving", "project"},
     "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded",
-             "braces", "braced", "bearing", "restrained"},
+             "braces", "braced", "bearing", "restrained", "wet_service", "temperature",
+             "repetitive"},
     "supports": {"at", "type", "stiffness", "label", "bearing", "brace"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned", "uplift", "bearing", "flange"},
-    "criteria": {"deflection", "safety_factor", "basis", "impact"},
+    "criteria": {"deflection", "safety_factor", "basis", "impact", "duration",
+                 "live_deflection"},
     "moving": {"label", "loads", "dead", "spacing", "travel", "case"},
     "project": set(),  # filled from PROJECT_KEYS below
 }
@@ -68,6 +70,7 @@ class Criteria:
     impact: float | None = None  # fraction as written; None: the default (15 % when lifting)
     deflection_preset: str = ""  # the preset named ("rack", "hoist", ...), lower case
     deflection_given: bool = False  # the file gives a deflection limit
+    live_deflection_ratio: float | None = None  # n of L/n under live load alone, or None
 
 
 @dataclass(frozen=True)
@@ -109,6 +112,7 @@ class Job:
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
+    wood: object = None  # shopbeam.members.wood.Service: the wood keys (wood members only)
     project: dict = field(default_factory=dict)  # [project] title-block fields, as text
 
     @property
@@ -329,8 +333,23 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
     basis = r.choice(crit, "basis", "criteria.basis", Basis, Basis.AUTO)
     if "safety_factor" in crit and sf != 1.67:
         _unused_safety_factor(r, sf, material, basis)
+    kind = getattr(material, "kind", "")
+    if (kind == "lumber" and basis != Basis.AUTO) or (kind == "aluminum" and basis == Basis.ASD):
+        own = "the NDS allowable stresses" if kind == "lumber" else \
+            "the Aluminum Design Manual (or write basis = \"first-yield\")"
+        r.warn(f"basis = \"{basis.value}\" does not apply to {kind}: this member is checked by "
+               f"{own}; remove basis", "criteria.basis")
     impact = r.fraction(crit, "impact", "criteria.impact")
-    return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given)
+    live = LIVE_DEFLECTION_PRESETS.get(preset)
+    ld = crit.get("live_deflection")
+    if ld is not None:
+        m = re.fullmatch(r"\s*[Ll]\s*/\s*(\d+(?:\.\d+)?)\s*", ld) if isinstance(ld, str) else None
+        if m and float(m.group(1)) > 0:
+            live = float(m.group(1))
+        else:
+            r.error(f"live_deflection must be a limit like \"L/360\" (checked under the live "
+                    f"loads alone), found {ld!r}", "criteria.live_deflection")
+    return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given, live)
 
 
 def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | None, str]:
@@ -681,12 +700,12 @@ def _family_mismatch(r: _Reader, section, material) -> None:
     weight would be for a member that does not exist."""
     if section is None or material is None:
         return
-    from shopbeam.members.catalog import is_lumber_size
+    from shopbeam.members.catalog import is_wood_size
 
-    lumber_size = is_lumber_size(section)
+    lumber_size = is_wood_size(section)
     mkind = getattr(material, "kind", "custom")
     if lumber_size and mkind in ("steel", "stainless", "aluminum"):
-        r.error(f"section {section.designation!r} is a sawn lumber size but material "
+        r.error(f"section {section.designation!r} is a lumber size (sawn or LVL) but material "
                 f"{material.key!r} is {mkind}: give a wood material (e.g. material = "
                 "\"DF-L-2\") or a metal section (e.g. a flat bar \"FB4x1/2\", or "
                 "[beam.section] shape = \"rect-bar\" with its sizes)", "beam.section")
@@ -695,6 +714,49 @@ def _family_mismatch(r: _Reader, section, material) -> None:
                 f"in wood, but material {material.key!r} is lumber: give a lumber size such as "
                 "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
                 "material such as \"A992\"", "beam.section")
+
+
+def _wood_keys(r: _Reader, beam: dict, crit, material, section):
+    """The wood member's service keys ([beam] wet_service, temperature, repetitive;
+    [criteria] duration); a wood material comes back with
+    the reference values of this member's size class and E' (see members.wood)."""
+    from shopbeam.members import wood
+
+    crit = crit if isinstance(crit, dict) else {}
+    wet = beam.get("wet_service", False)
+    if not isinstance(wet, bool):
+        r.error("wet_service must be true or false (true: moisture over 19 % in service, "
+                "NDS 4.1.4)", "beam.wet_service")
+        wet = False
+    temp = beam.get("temperature", "up-to-100F")
+    if not isinstance(temp, str) or temp not in wood.TEMPERATURES:
+        r.error(f"temperature {temp!r} must be one of {', '.join(wood.TEMPERATURES)} (the "
+                "sustained temperature range of NDS Table 2.3.3)", "beam.temperature")
+        temp = "up-to-100F"
+    rep = beam.get("repetitive", False)
+    if not isinstance(rep, bool):
+        r.error("repetitive must be true or false (true: three or more joists at 24 in or "
+                "less sharing the load, NDS 4.3.9)", "beam.repetitive")
+        rep = False
+    dur = crit.get("duration", "ten-years")
+    if not isinstance(dur, str) or dur not in wood.DURATIONS:
+        r.error(f"duration {dur!r} must be one of {', '.join(wood.DURATIONS)} (the load "
+                "duration of NDS Table 2.3.2)", "criteria.duration")
+        dur = "ten-years"
+    if material is None or getattr(material, "kind", "") != "lumber":
+        for k, where in (("wet_service", "beam"), ("temperature", "beam"),
+                         ("repetitive", "beam"),
+                         ("duration", "criteria")):
+            if k in (beam if where == "beam" else crit):
+                r.warn(f"{k} is for wood members (NDS); this material ignores it",
+                       f"{where}.{k}")
+        return material, None
+    service = wood.Service(dur, wet, temp, rep)
+    try:
+        return wood.adjusted_material(material, section, wet, temp), service
+    except InputError as e:
+        r.take(e, "beam.material")
+        return None, service
 
 
 def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
@@ -771,7 +833,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     project = _read_project(r, data.get("project"))
 
     beam = data.get("beam")
-    length = section = material = None
+    length = section = material = wood_service = None
     self_weight, members, welded = True, 1, False
     braced, braces = False, ()
     restrained, bearing, bearings, hung = False, None, {}, []
@@ -803,6 +865,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                material=material)
         if section is not None:
             _plausible_section(section, r)
+        material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
             r.error("self_weight must be true or false", "beam.self_weight")
@@ -903,6 +966,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, hung=tuple(hung),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
+        wood=wood_service,
     )
 
 

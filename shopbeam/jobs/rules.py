@@ -23,13 +23,15 @@ class Basis(StrEnum):
 DEFLECTION_PRESETS: dict[str, tuple[float, str]] = {
     "rack": (180.0, "pallet-rack beams L/180 (ANSI MH16.1, from memory)"),
     "shelf": (180.0, "storage shelves L/180 (as rack beams; common practice)"),
-    "floor": (360.0, "floor members L/360 (IBC Table 1604.3, live load, from memory; "
-              "checked here under the total load, which is stricter)"),
+    "floor": (240.0, "floor members L/240 under dead + live load, with L/360 under live load "
+              "alone (IBC 2018 Table 1604.3, from memory)"),
     "roof": (240.0, "roof members L/240 (IBC Table 1604.3, from memory)"),
     "hoist": (450.0, "hoist beams and monorails L/450 (common practice)"),
     "monorail": (450.0, "hoist beams and monorails L/450 (common practice)"),
     "jib": (225.0, "jib booms L/225 on twice the reach (common practice)"),
 }
+# presets that also check the deflection under live load alone: name -> n of L/n
+LIVE_DEFLECTION_PRESETS: dict[str, float] = {"floor": 360.0}
 DEFAULT_DEFLECTION_RATIO = 240.0
 LIFTING_DEFAULT_RATIO = 450.0  # tighter default for jobs tagged lifting (common practice)
 DEFAULT_IMPACT = 0.15  # slow powered hoists (common practice)

@@ -279,6 +279,24 @@ def _lumber(thick: int, wide: int, designation: str) -> Section:
                       "Table 1B, from memory), computed from dimensions")
 
 
+# LVL (laminated veneer lumber) stock: 1-3/4 in plies (and two plies, 3-1/2 in) in the
+# depths makers sell (common practice, from memory). Designation "LVL1-3/4x11-7/8".
+LVL_DEPTHS = ((5.5, "5-1/2"), (7.25, "7-1/4"), (9.25, "9-1/4"), (9.5, "9-1/2"),
+              (11.25, "11-1/4"), (11.875, "11-7/8"), (14.0, "14"), (16.0, "16"), (18.0, "18"))
+LVL_WIDTHS = ((1.75, "1-3/4"), (3.5, "3-1/2"))
+
+
+def _lvl(width: float, depth: float, designation: str) -> Section:
+    return S.rect_bar(depth * IN, width * IN, designation=designation,
+                      source=f"LVL size {width:g} x {depth:g} in (engineered wood, makers' stock "
+                      "sizes, from memory), computed from dimensions")
+
+
+def is_wood_size(sec: Section) -> bool:
+    """True for a catalog lumber or LVL size."""
+    return is_lumber_size(sec) or (sec.shape == "rect-bar" and "LVL size" in (sec.source or ""))
+
+
 def lumber_nominal(sec: Section) -> tuple[int, int] | None:
     """(nominal thickness, nominal width) in inches of a catalog lumber size, else None."""
     if sec.shape != "rect-bar" or "dressed lumber size" not in (sec.source or ""):
@@ -405,6 +423,10 @@ def _generated() -> list[tuple[str, str, object]]:
     for th, wi in LUMBER_SIZES:
         des = f"{th}x{wi}"
         out.append(("lumber", des, lambda th=th, wi=wi, des=des: _lumber(th, wi, des)))
+    for w, wt in LVL_WIDTHS:
+        for d, dt in LVL_DEPTHS:
+            des = f"LVL{wt}x{dt}"
+            out.append(("LVL", des, lambda w=w, d=d, des=des: _lvl(w, d, des)))
     for size, ts in SHS.items():
         for t in ts:
             des = f"SHS{size}x{size}x{_mm(t)}"
@@ -449,6 +471,7 @@ KIND_INFO = {
     "flat-bar": "flat bar, US stock sizes (FBwidth x thickness)",
     "square-bar": "square bar, US stock sizes", "round-bar": "round bar, US stock sizes",
     "lumber": "sawn lumber on edge, dressed sizes (2x4 = 1-1/2 x 3-1/2 in)",
+    "LVL": "LVL on edge, 1-3/4 in plies (LVL1-3/4x11-7/8; use with material LVL-2.0E)",
     "mech-tube": "A513 mechanical square/rectangular tube by gauge (nominal wall)",
     "mech-round": "A513 mechanical round tube by gauge (nominal wall)",
     "SHS": "EN 10219 square hollow sections", "RHS": "EN 10219 rectangular hollow sections",

@@ -46,6 +46,33 @@ class Material:
     fu_welded: float | None = None
     hss_wall_factor: float | None = None
     aliases: tuple[str, ...] = field(default=(), compare=False)
+    # the figures as the standard publishes them, (US text, SI text), when a conversion of
+    # the stored SI value would print an odd number (stainless 193 GPa is "28,000 ksi")
+    published: tuple[str, str] | None = field(default=None, compare=False)
+
+
+def figures(m: Material, system: str = "us") -> str:
+    """The material's strength and stiffness as its trade writes them: lumber in psi with E
+    in psi x 10^6 (Fb = 900 psi, E = 1.6e6 psi), stainless at its published round figures,
+    metals E and Fy in ksi (MPa and GPa in SI)."""
+    from shopbeam.units import fmt, num
+
+    if m.published:
+        return m.published[0 if system == "us" else 1]
+    if m.kind == "lumber":
+        fb = m.fb or m.fy
+        if system == "us":
+            text = f"Fb = {num(fb / PSI, 4)} psi"
+            if m.fv:
+                text += f", Fv = {num(m.fv / PSI, 4)} psi"
+            return text + f", E = {num(m.e / PSI / 1e6, 3)}e6 psi"
+        text = f"Fb = {num(fb / MPA, 3)} MPa"
+        if m.fv:
+            text += f", Fv = {num(m.fv / MPA, 3)} MPa"
+        return text + f", E = {num(m.e / 1e9, 3)} GPa"
+    if system == "si":
+        return f"E = {num(m.e / 1e9, 4)} GPa, Fy = {num(m.fy / MPA, 4)} MPa"
+    return f"E = {fmt(m.e, 'stress', system, 5)}, Fy = {fmt(m.fy, 'stress', system)}"
 
 
 # Steel common values: E = 29,000 ksi and G = 11,200 ksi (AISC 360-16 Section B and its
@@ -58,6 +85,14 @@ def _lumber_density(g: float, mc: float = 15.0) -> float:
     """kg/m^3 of wood of specific gravity g (oven-dry weight, volume at mc %) at mc % moisture:
     62.4 [G / (1 + G x 0.009 x mc)] (1 + mc / 100) lb/ft^3 (NDS Supplement, from memory)."""
     return 62.4 * (g / (1 + g * 0.009 * mc)) * (1 + mc / 100) * LB_FT3
+
+
+def _wood(key, name, e_psi, fb_psi, fv_psi, sg, table, aliases):
+    return Material(key, name, "lumber", e_psi * PSI, fb_psi * PSI, _lumber_density(sg),
+                    fb=fb_psi * PSI, fv=fv_psi * PSI,
+                    source=f"Fb {fb_psi:g} psi, Fv {fv_psi:g} psi, E {e_psi:,} psi: NDS "
+                    f"Supplement 2018 {table}, from memory; density from G = {sg:g} at 15 % "
+                    "moisture", notes=(_LUMBER_NOTE,), aliases=tuple(aliases))
 
 
 def _steel(key, name, fy_ksi, fu_ksi, spec, notes=(), aliases=(), wall=None):
@@ -76,9 +111,9 @@ _A513_NOTE = ("ASTM A513 mechanical tubing: strength depends on the type (as-wel
               "minimum recalled from memory for the condition named. Use the mill cert when "
               "you have one. Design wall = nominal wall (the 0.93 factor is for A500 only).")
 _LUMBER_NOTE = ("reference design values for visually graded dimension lumber 2-4 in thick "
-                "(NDS Supplement 2018, Table 4A, from memory); no adjustment factors applied "
-                "(load duration CD = 1.0, dry service, size factor CF taken as 1.0, which is "
-                "conservative for 2x4 to 2x12), allowable stress design")
+                "(NDS Supplement 2018, Table 4A/4B, from memory); timbers 5 in and thicker take "
+                "their Table 4D values; the checks apply the NDS 2018 adjustment factors "
+                "(CD, CM, Ct, CL, CF, Cfu, Cr, Cb) named in the report")
 
 _MATERIALS: tuple[Material, ...] = (
     _steel("A36", "ASTM A36 carbon steel (plate, bar, shapes)", 36, 58, "ASTM A36/A36M",
@@ -119,22 +154,26 @@ _MATERIALS: tuple[Material, ...] = (
              "minimums; E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
              notes=("welding does not lower the annealed strength; cold-worked tube may be "
                     "stronger but is not credited",),
-             aliases=("ss304", "304ss", "stainless304", "aisi304", "s30400"), hss_wall_factor=1.0),
+             aliases=("ss304", "304ss", "stainless304", "aisi304", "s30400"), hss_wall_factor=1.0,
+             published=("E = 28,000 ksi, Fy = 30 ksi, Fu = 75 ksi", "E = 193 GPa, Fy = 205 MPa, Fu = 515 MPa")),
     Material("304L", "Type 304L stainless steel (annealed)", "stainless", 193e9, 170 * MPA,
              8000.0, fu=485 * MPA, g=77e9,
              source="Fy 170 MPa (25 ksi), Fu 485 MPa (70 ksi): ASTM A240 annealed minimums; "
              "E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
-             aliases=("ss304l", "304lss", "stainless304l", "s30403"), hss_wall_factor=1.0),
+             aliases=("ss304l", "304lss", "stainless304l", "s30403"), hss_wall_factor=1.0,
+             published=("E = 28,000 ksi, Fy = 25 ksi, Fu = 70 ksi", "E = 193 GPa, Fy = 170 MPa, Fu = 485 MPa")),
     Material("316", "Type 316 stainless steel (annealed)", "stainless", 193e9, 205 * MPA,
              8000.0, fu=515 * MPA, g=77e9,
              source="Fy 205 MPa (30 ksi), Fu 515 MPa (75 ksi): ASTM A240 annealed minimums; "
              "E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
-             aliases=("ss316", "316ss", "stainless316", "s31600"), hss_wall_factor=1.0),
+             aliases=("ss316", "316ss", "stainless316", "s31600"), hss_wall_factor=1.0,
+             published=("E = 28,000 ksi, Fy = 30 ksi, Fu = 75 ksi", "E = 193 GPa, Fy = 205 MPa, Fu = 515 MPa")),
     Material("316L", "Type 316L stainless steel (annealed)", "stainless", 193e9, 170 * MPA,
              8000.0, fu=485 * MPA, g=77e9,
              source="Fy 170 MPa (25 ksi), Fu 485 MPa (70 ksi): ASTM A240 annealed minimums; "
              "E 193 GPa, G 77 GPa, density 8000 kg/m^3: producer data, from memory",
-             aliases=("ss316l", "316lss", "s31603"), hss_wall_factor=1.0),
+             aliases=("ss316l", "316lss", "s31603"), hss_wall_factor=1.0,
+             published=("E = 28,000 ksi, Fy = 25 ksi, Fu = 70 ksi", "E = 193 GPa, Fy = 170 MPa, Fu = 485 MPa")),
     # Aluminium: Aluminum Design Manual 2015, Part A, minimum mechanical properties of
     # extrusions, unwelded and welded (heat-affected zone), from memory. E 10,100 ksi
     # (compression modulus), density 0.098 lb/in^3 (6061) and 0.097 (6063), from memory.
@@ -160,20 +199,33 @@ _MATERIALS: tuple[Material, ...] = (
              source="Fty 25 ksi, Ftu 30 ksi; welded Ftyw 8 ksi, Ftuw 17 ksi; E 10,100 ksi; "
              "density 0.097 lb/in^3: Aluminum Design Manual 2015, from memory",
              aliases=("6063", "6063t6", "al6063", "al6063t6"), hss_wall_factor=1.0),
-    # Lumber: NDS Supplement 2018 Table 4A reference values; density from specific gravity
-    # (SPF G = 0.42, DF-L G = 0.50, NDS Table 12.3.3A) at about 15 % moisture, from memory.
-    Material("SPF-2", "Spruce-Pine-Fir No.1/No.2 dimension lumber", "lumber",
-             1_400_000 * PSI, 875 * PSI, _lumber_density(0.42), fb=875 * PSI, fv=135 * PSI,
-             source="Fb 875 psi, Fv 135 psi, E 1,400,000 psi: NDS Supplement 2018 Table 4A "
-             "(SPF No.1/No.2), from memory; density from G = 0.42 at 15 % moisture",
-             notes=(_LUMBER_NOTE,),
-             aliases=("spf", "spf2", "spfno2", "sprucepinefir", "spfno1no2", "spf1/2")),
-    Material("DF-L-2", "Douglas Fir-Larch No.2 dimension lumber", "lumber", 1_600_000 * PSI,
-             900 * PSI, _lumber_density(0.50), fb=900 * PSI, fv=180 * PSI,
-             source="Fb 900 psi, Fv 180 psi, E 1,600,000 psi: NDS Supplement 2018 Table 4A "
-             "(DF-L No.2), from memory; density from G = 0.50 at 15 % moisture",
-             notes=(_LUMBER_NOTE,),
-             aliases=("dfl", "dfl2", "dflno2", "douglasfir", "douglasfirlarch", "df2", "df")),
+    # Lumber: NDS Supplement 2018 Table 4A/4B reference values for dimension lumber (timber
+    # sizes take their Table 4D row, see shopbeam.members.wood); density from specific
+    # gravity (NDS Table 12.3.3A: DF-L 0.50, Hem-Fir 0.43, SPF 0.42, Southern Pine 0.55) at
+    # about 15 % moisture, from memory.
+    _wood("SPF-2", "Spruce-Pine-Fir No.1/No.2 dimension lumber", 1_400_000, 875, 135, 0.42,
+          "Table 4A (SPF No.1/No.2)",
+          ("spf", "spf2", "spfno2", "sprucepinefir", "spfno1no2", "spf1/2")),
+    _wood("DF-L-2", "Douglas Fir-Larch No.2 dimension lumber", 1_600_000, 900, 180, 0.50,
+          "Table 4A (DF-L No.2)",
+          ("dfl", "dfl2", "dflno2", "douglasfir", "douglasfirlarch", "df2", "df")),
+    _wood("DF-L-1", "Douglas Fir-Larch No.1 dimension lumber", 1_700_000, 1000, 180, 0.50,
+          "Table 4A (DF-L No.1)", ("dfl1", "dflno1", "df1")),
+    _wood("DF-L-SS", "Douglas Fir-Larch Select Structural dimension lumber", 1_900_000, 1500,
+          180, 0.50, "Table 4A (DF-L Select Structural)",
+          ("dflss", "dflselectstructural", "dfss")),
+    _wood("HF-2", "Hem-Fir No.2 dimension lumber", 1_300_000, 850, 150, 0.43,
+          "Table 4A (Hem-Fir No.2)", ("hemfir", "hemfir2", "hemfirno2", "hf", "hfno2")),
+    _wood("SP-2", "Southern Pine No.2 dimension lumber", 1_400_000, 1100, 175, 0.55,
+          "Table 4B (Southern Pine No.2, 2-4 in wide; narrower values for wider sizes)",
+          ("sp", "sp2", "spno2", "southernpine", "southernpine2", "syp", "syp2")),
+    Material("LVL-2.0E", "LVL 2.0E-2600Fb (laminated veneer lumber)", "lumber",
+             2_000_000 * PSI, 2600 * PSI, 42 * LB_FT3, fb=2600 * PSI, fv=285 * PSI,
+             source="Fb 2600 psi at 12 in depth, Fv 285 psi, E 2,000,000 psi: typical "
+             "manufacturer's values for 2.0E-2600Fb LVL, from memory (use the maker's "
+             "published values); density about 42 lb/ft^3, from memory",
+             notes=("LVL: dry service only; the depth factor (12/d)^0.136 applies to Fb",),
+             aliases=("lvl", "lvl2.0e", "lvl20e", "lvl2.0e2600fb", "lvl2600")),
 )
 
 
@@ -218,8 +270,15 @@ def cmd_materials(args) -> int:
     print(f"{'key':<14}{'E':>14}{'Fy (Fb)':>12}{'welded':>10}{'density':>16}  name")
     for m in mats:
         fy = fmt(m.fb if m.kind == "lumber" else m.fy, "stress", system)
+        if m.kind == "lumber" and system == "us":
+            fy = f"{m.fb / PSI:,.0f} psi"
         welded = fmt(m.fy_welded, "stress", system) if m.fy_welded else "-"
-        print(f"{m.key:<14}{fmt(m.e, 'stress', system):>14}{fy:>12}{welded:>10}"
+        e = fmt(m.e, 'stress', system)
+        if m.kind == "lumber" and system == "us":
+            e = f"{m.e / PSI / 1e6:.3g}e6 psi"
+        elif m.kind == "stainless":
+            e = "28,000 ksi" if system == "us" else "193 GPa"
+        print(f"{m.key:<14}{e:>14}{fy:>12}{welded:>10}"
               f"{fmt(m.density, 'density', system):>16}  {m.name}")
     print("Sources: each material's source is in `--json`. Specified minimums; use the mill "
           "certificate where you have one.")

@@ -233,10 +233,13 @@ def calc_sheet(job, result=None) -> str:
         out += textwrap.wrap("This sheet solves the loads as entered (all patterned loads on, "
                              "no moving wheel set); the load states the checks cover are solved "
                              "numerically by the same method.", width)
+    e_text = units.fmt(job.material.e, 'stress', job.units)
+    if getattr(job.material, "kind", "") == "lumber" and job.units == "us":
+        e_text = f"{units.num(job.material.e / units.PSI / 1e6, 3)}e6 psi"  # wood's own figure
     out += [
         "",
         f"Beam length L = {_coef(ex.length)} {lab['length']}; "
-        f"EI = {_num(ei_val)} {lab['ei']} (E = {units.fmt(job.material.e, 'stress', job.units)}, "
+        f"EI = {_num(ei_val)} {lab['ei']} (E = {e_text}, "
         f"I = {units.fmt(job.section.ix, 'inertia', job.units)})",
         "",
         "Unknowns:",

@@ -42,7 +42,11 @@ def describe_support(s, system: str) -> str:
     return f"{s.kind} at {fmt_pos(s.at, system)}{extra}"
 
 
-def check_value(value: float, unit: str, system: str) -> str:
+def check_value(value: float, unit: str, system: str, wood: bool = False) -> str:
+    """A check's demand or limit in the job's units (wood stresses in psi, as its trade
+    writes them)."""
+    if wood and unit == "Pa" and system == "us":
+        return f"{units.num(value / units.PSI)} psi"
     kind = CHECK_KINDS.get(unit)
     return units.fmt(value, kind, system) if kind else f"{units.num(value)} {unit}"
 
@@ -70,7 +74,9 @@ def render(result: Result) -> str:
     lines.append(f"  section  {sec.designation} ({sec.shape}, {sec.axis} axis): "
                  f"I = {f(sec.ix, 'inertia')}, S = {f(sec.sx, 'modulus')}, "
                  f"A = {f(sec.area, 'area')}")
-    lines.append(f"  material {mat.name}: E = {f(mat.e, 'stress', 5)}, Fy = {f(mat.fy, 'stress')}")
+    from shopbeam.members.materials import figures
+
+    lines.append(f"  material {mat.name}: {figures(mat, sy)}")
     if job.self_weight:
         sw = job.self_weight_load()
         lines.append(f"  self-weight {f(-sw.w1, 'line_load')} (included, dead load)")
@@ -115,8 +121,9 @@ def render(result: Result) -> str:
     for c in result.checks:
         verdict = "PASS" if c.ok else "FAIL"
         where = f" at {fmt_pos(c.at, sy)}" if c.at is not None else ""
-        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, sy)} vs limit "
-                     f"{check_value(c.limit, c.unit, sy)}{where}: ratio {c.ratio:.3f}  {verdict}")
+        wd = getattr(job.material, "kind", "") == "lumber"
+        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, sy, wd)} vs limit "
+                     f"{check_value(c.limit, c.unit, sy, wd)}{where}: ratio {c.ratio:.3f}  {verdict}")
         lines += _wrap(c.formula, "      ")
         if "worst state" in c.detail:  # pattern or moving-load position that governs
             lines += _wrap(c.detail[c.detail.index("worst state"):], "      ")

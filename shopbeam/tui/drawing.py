@@ -255,19 +255,20 @@ def extremes_table(result) -> str:
     return "\n".join(rows)
 
 
-def check_value(value: float, unit: str, system: str) -> str:
+def check_value(value: float, unit: str, system: str, wood: bool = False) -> str:
     from shopbeam.output.report import check_value as cv
 
-    return cv(value, unit, system)
+    return cv(value, unit, system, wood)
 
 
 def checks_table(result) -> str:
     sy = result.job.units
+    wd = getattr(result.job.material, "kind", "") == "lumber"
     rows = [f"{'check':<11} {'demand':>12} {'limit':>12} {'ratio':>6}  verdict   where"]
     for c in result.checks:
         where = _f(c.at, "length", sy) if c.at is not None else ""
-        rows.append(f"{c.name:<11} {check_value(c.demand, c.unit, sy):>12} "
-                    f"{check_value(c.limit, c.unit, sy):>12} {c.ratio:>6.2f}  "
+        rows.append(f"{c.name:<11} {check_value(c.demand, c.unit, sy, wd):>12} "
+                    f"{check_value(c.limit, c.unit, sy, wd):>12} {c.ratio:>6.2f}  "
                     f"{'PASS' if c.ok else 'FAIL':<8}  {where}")
     return "\n".join(rows)
 

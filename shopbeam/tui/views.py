@@ -591,9 +591,12 @@ class MaterialView(View):
         msg = ev.message_for("beam.material")
         if ev.job is not None and ev.job.material is not None:
             m, sy = ev.job.material, ev.job.units
+            from shopbeam.members.materials import figures
+
+            shown = figures(m, sy) if m.kind in ("lumber", "stainless") else \
+                f"E {units.fmt(m.e, 'stress', sy, 5)}  Fy {units.fmt(m.fy, 'stress', sy)}"
             lines = [f"In use: {m.key} - {m.name}",
-                     f"  E {units.fmt(m.e, 'stress', sy, 5)}  Fy {units.fmt(m.fy, 'stress', sy)}"
-                     f"  density {units.fmt(m.density, 'density', sy)}"]
+                     f"  {shown}  density {units.fmt(m.density, 'density', sy)}"]
             if m.source:
                 lines.append(f"  values: {m.source}")
             props.update(_text("\n".join(lines)))
