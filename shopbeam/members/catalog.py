@@ -689,7 +689,9 @@ def suggestions(designation: str, n: int = 3) -> list[str]:
                 if not e.key:
                     continue
                 p2, *n2 = e.key.split("|")
-                if p2 != prefix or len(n2) != len(vals):
+                # a half-typed designation ("HSS4x4") is the start of a longer one
+                # ("HSS4x4x1/4"): compare the sizes typed, not a shorter family's sizes
+                if p2 != prefix or len(n2) < len(vals):
                     continue
                 try:
                     v2 = [float(v) for v in n2]
@@ -698,9 +700,9 @@ def suggestions(designation: str, n: int = 3) -> list[str]:
                 if any(a <= 0 or b <= 0 for a, b in zip(vals, v2)):
                     continue
                 dist = sum(abs(math.log(a / b)) for a, b in zip(vals, v2))
-                cands.append((dist, e.designation))
+                cands.append((dist, len(n2) - len(vals), e.designation))
             cands.sort()
-            for _, des in cands[:n]:
+            for *_, des in cands[:n]:
                 if des not in out:
                     out.append(des)
     if len(out) < n:

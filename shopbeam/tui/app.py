@@ -11,11 +11,15 @@ from __future__ import annotations
 
 from pathlib import Path
 
+import time
+
 from rich.text import Text
+from textual import work
 from textual.app import App, ComposeResult
 from textual.binding import Binding
 from textual.screen import Screen
 from textual.widgets import ContentSwitcher, Footer, Static
+from textual.worker import get_current_worker
 
 from shopbeam import units
 from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, LibraryScreen,
@@ -41,6 +45,7 @@ VIEWS = [
     ("sizing", "s", "Size", "Size", SizingView),
 ]
 INPUT_VIEWS = {v[0] for v in VIEWS[:6]}
+SOLVE_DEBOUNCE = 0.03  # seconds: keys typed closer together than this cost one solve
 
 SHAPE_DEFAULTS = {
     "rect-tube": {"depth": "4 in", "width": "2 in", "wall": "1/8 in"},
@@ -94,6 +99,7 @@ class JobScreen(Screen):
 
     def __init__(self, session: Session) -> None:
         super().__init__()
+        session.deferred = True
         self.session = session
         self.current = "job"
 
@@ -155,7 +161,31 @@ class JobScreen(Screen):
         return drawing.summary_line(ev.result) + "   (7 results, 8 plots)"
 
     def changed(self) -> None:
+        """The document changed: show it now, solve it in a worker (latest edit wins)."""
         self.refresh_all()
+        self.solve_soon()
+
+    def solve_soon(self) -> None:
+        s = self.session
+        if s.stale:
+            self._solve(s, *s.snapshot())
+
+    @work(thread=True, exclusive=True, group="solve", exit_on_error=False)
+    def _solve(self, session: Session, version: int, data: dict, text: str, name: str) -> None:
+        """Solve a snapshot of the job off the UI thread. Waits a moment first, so a burst
+        of keys costs one solve; an answer for an older version of the job is dropped."""
+        time.sleep(SOLVE_DEBOUNCE)
+        if session.version != version or get_current_worker().is_cancelled:
+            return
+        from shopbeam.tui import session as session_mod
+
+        ev = session_mod.evaluate_data(data, text, name)
+        if session.version == version and not get_current_worker().is_cancelled:
+            self.app.call_from_thread(self._solved, session, version, ev)
+
+    def _solved(self, session: Session, version: int, ev) -> None:
+        if session is self.session and session.install(version, ev):
+            self.refresh_all()
 
     # ------------------------------------------------------------------ navigation
     async def action_view(self, vid: str) -> None:
@@ -167,12 +197,15 @@ class JobScreen(Screen):
         switcher.current = vid
         self.refresh_all()
         view = self.query_one(f"#{vid}")
-        self.call_after_refresh(self._focus_first, view)
+        self.set_focus(view)  # now, so the next key of a burst already goes to the new view
+        if self.focused is not view:
+            self.call_after_refresh(self._focus_first, view)
 
     def _focus_first(self, view) -> None:
         """The view itself takes the focus, not its first field: a view key pressed next
         must switch views, never land in a field. Tab goes into the fields."""
-        view.focus()
+        if self.focused is None or view not in self.focused.ancestors_with_self:
+            self.set_focus(view)
 
     async def action_step(self, step: int) -> None:
         ids = [v[0] for v in VIEWS]
@@ -189,7 +222,13 @@ class JobScreen(Screen):
 
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
-        s, key, value = self.session, event.field.key, event.value
+        try:
+            self.apply_edit(event.field.key, event.value, event.row)
+        finally:
+            event.field.taken(event.value)
+
+    def apply_edit(self, key: str, value: str, row: int = 0) -> None:
+        s = self.session
         raw = value.strip()
         if key == "title":
             s.set("title", value)
@@ -213,11 +252,13 @@ class JobScreen(Screen):
             if isinstance(s.doc.get("beam.material"), dict):
                 s.set("beam.material." + key[4:], raw or None)
         elif key.startswith("support."):
-            view = self.query_one("#span", SpanView)
-            s.set_row("supports", view.selected, key[8:], raw or None)
+            if row >= len(s.rows("supports")):
+                return
+            s.set_row("supports", row, key[8:], raw or None)
         elif key.startswith("load."):
-            view = self.query_one("#loads", LoadsView)
-            i = view.selected
+            if row >= len(s.rows("loads")):
+                return
+            i = row
             row = s.rows("loads")[i]
             field = key[5:]
             if field in ("value", "value2") and row.get("type") == "linear":
@@ -261,7 +302,7 @@ class JobScreen(Screen):
                             i, **{k: new_text.strip()})
                         moved += 1
         if moved:
-            s.evaluate()
+            s.touched()
 
     def on_choice_changed(self, event: Choice.Changed) -> None:
         event.stop()
@@ -323,7 +364,7 @@ class JobScreen(Screen):
             fields["value"] = line if kind == "uniform" else ["0 kN/m" if si else "0 lbf/ft", line]
         for k, v in fields.items():
             s.doc.set_load(i, **{k: v})
-        s.evaluate()
+        s.touched()
 
     def change_section_mode(self, mode: str) -> None:
         s = self.session
@@ -541,7 +582,11 @@ class JobScreen(Screen):
         self.call_later(self.action_view, "job")
 
     def set_session(self, session: Session) -> None:
+        session.deferred = True
         self.session = session
+        self.set_focus(None)
+        for f in self.query(Field):
+            f.forget_typing()
         self._last_length = None
         for v in self.query(RowsView):
             v.selected = 0

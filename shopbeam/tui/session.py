@@ -46,11 +46,21 @@ class Evaluation:
 
 def evaluate_doc(doc, filename: str = "") -> Evaluation:
     """Validate and solve a JobDoc. Never raises for anything the user typed."""
+    try:
+        text, data = doc.text(), doc.plain()
+    except Exception as exc:  # noqa: BLE001 - a half-typed job must never crash the screen
+        return Evaluation(problems=[Problem(f"cannot read the job: {type(exc).__name__}: {exc}")])
+    return evaluate_data(data, text, filename)
+
+
+def evaluate_data(data: dict, text: str, filename: str = "") -> Evaluation:
+    """Validate and solve a job given as plain data plus its text (for line numbers).
+
+    Pure: safe to run in a worker thread on a snapshot of the document."""
     from shopbeam.jobs.jobfile import parse_job_data
 
     try:
-        text = doc.text()
-        job = parse_job_data(doc.plain(), filename, text)
+        job = parse_job_data(data, filename, text)
     except InputErrors as exc:
         return Evaluation(problems=list(exc.problems))
     except InputError as exc:
@@ -85,6 +95,10 @@ class Session:
         self.library_dir = library_dir
         self.saved_text = doc.text() if self.path is not None else None
         self.evaluation = Evaluation()
+        # Deferred: edits only change the document and bump `version`; the text UI solves
+        # a snapshot in a worker and installs the answer if no newer edit came meanwhile.
+        self.deferred = False
+        self.version = 0
         self.evaluate()
 
     # ------------------------------------------------------------------ opening
@@ -134,7 +148,34 @@ class Session:
 
     def evaluate(self) -> Evaluation:
         self.evaluation = evaluate_doc(self.doc, str(self.path) if self.path else "")
+        self.evaluated_version = self.version
         return self.evaluation
+
+    def touched(self) -> Evaluation:
+        """The document was changed directly (through `doc`): note it like any edit."""
+        return self._edited()
+
+    def install(self, version: int, evaluation: Evaluation) -> bool:
+        """Take a worker's answer for `version`; refused (False) when the job moved on."""
+        if version != self.version:
+            return False
+        self.evaluation = evaluation
+        self.evaluated_version = version
+        return True
+
+    def _edited(self) -> Evaluation:
+        self.version += 1
+        return self.evaluation if self.deferred else self.evaluate()
+
+    def snapshot(self) -> tuple[int, dict, str, str]:
+        """(version, plain data, text, file name) of the document as it stands now."""
+        return (self.version, self.doc.plain(), self.doc.text(),
+                str(self.path) if self.path else "")
+
+    @property
+    def stale(self) -> bool:
+        """The shown evaluation is older than the document (a solve is on its way)."""
+        return self.evaluated_version != self.version
 
     # ------------------------------------------------------------------ edits
     def set(self, dotted: str, value) -> Evaluation:
@@ -145,7 +186,7 @@ class Session:
             self.evaluate()
             self.evaluation.problems.insert(0, exc.problem)
             return self.evaluation
-        return self.evaluate()
+        return self._edited()
 
     def set_row(self, table: str, index: int, key: str, value) -> Evaluation:
         setter = self.doc.set_load if table == "loads" else self.doc.set_support
@@ -155,7 +196,7 @@ class Session:
             self.evaluate()
             self.evaluation.problems.insert(0, exc.problem)
             return self.evaluation
-        return self.evaluate()
+        return self._edited()
 
     def rows(self, table: str) -> list[dict]:
         return self.doc.loads() if table == "loads" else self.doc.supports()
@@ -165,7 +206,7 @@ class Session:
             i = self.doc.add_load(**fields)
         else:
             i = self.doc.add_support(**fields)
-        self.evaluate()
+        self._edited()
         return i
 
     def remove_row(self, table: str, index: int) -> None:
@@ -173,7 +214,7 @@ class Session:
             self.doc.remove_load(index)
         else:
             self.doc.remove_support(index)
-        self.evaluate()
+        self._edited()
 
     # ------------------------------------------------------------------ saving
     def save(self, *, overwrite: bool = False):

@@ -264,9 +264,9 @@ class SpanView(RowsView):
                 c.set(kind)
         for f in self.query(Field):
             if f.key == "support.at":
-                f.set_value(row.get("at", ""))
+                f.show_row(i, row.get("at", ""))
             elif f.key == "support.stiffness":
-                f.set_value(row.get("stiffness", ""))
+                f.show_row(i, row.get("stiffness", ""))
                 f.display = kind == "spring"
         self.show_field_messages(session.evaluation, {
             "support.at": f"supports[{i}].at", "support.stiffness": f"supports[{i}].stiffness"})
@@ -340,7 +340,7 @@ class LoadsView(RowsView):
                  "load.width": kind in ("uniform", "linear"), "load.total": kind == "uniform"}
         for f in self.query(Field):
             if f.key in values:
-                f.set_value(values[f.key])
+                f.show_row(i, values[f.key])
                 f.display = shown.get(f.key, True)
                 if f.key == "load.value":
                     f.query_one(".field-label").update(

@@ -8,6 +8,7 @@ job screen owns the state (attributes down, messages up).
 from __future__ import annotations
 
 from rich.text import Text
+from textual import events
 from textual.app import ComposeResult
 from textual.binding import Binding
 from textual.containers import Horizontal
@@ -28,21 +29,54 @@ _DIGIT_OF = {name: digit for digit, name in OPTION_DIGITS.items()}
 
 
 class FieldInput(Input):
-    """A field's text box: Esc-then-digit typed fast leaves the field and changes view."""
+    """A field's text box that keeps keys in the order they were typed, at any speed.
+
+    Textual inserts a printable key as soon as the box receives it, but runs a key bound to
+    an action (backspace, delete, arrows, tab, ...) only after that key has bubbled up to the
+    app, behind any keys queued meanwhile: typed fast (a burst over SSH or tmux, or keys
+    queued while the screen was busy) "<backspace>x3 -250" came out as "2" or "". Here a
+    bound key runs at once, in its place; a key that arrives after an earlier key of the same
+    burst moved the focus away goes on to whatever has the focus now. Esc-then-digit typed
+    fast (the Option-layer character of that digit) changes view and types nothing.
+    """
 
     async def _on_key(self, event) -> None:
+        if self.screen.focused is not self:
+            # an earlier key of this burst (tab, enter, a view key) moved the focus on
+            event.stop()
+            event.prevent_default()
+            target = self.screen.focused or self.screen
+            if target is not self:
+                target.post_message(events.Key(event.key, event.character))
+            return
         digit = _DIGIT_OF.get(event.key)
-        if digit is None:
+        if digit is not None:
+            event.stop()
+            event.prevent_default()
+            from shopbeam.tui.app import VIEWS
+
+            vid = next((v[0] for v in VIEWS if v[1] == digit), None)
+            self.screen.set_focus(None)
+            if vid is not None:
+                await self.screen.run_action(f"view('{vid}')")
+            return
+        if event.is_printable:
             await super()._on_key(event)
             return
-        event.stop()
-        event.prevent_default()
-        from shopbeam.tui.app import VIEWS
+        if await self._run_binding_now(event.key):
+            event.stop()
+            event.prevent_default()
+            return
+        await super()._on_key(event)
 
-        vid = next((v[0] for v in VIEWS if v[1] == digit), None)
-        self.screen.set_focus(None)
-        if vid is not None:
-            await self.screen.run_action(f"view('{vid}')")
+    async def _run_binding_now(self, key: str) -> bool:
+        """Run the first non-priority binding of `key` from this box up to the app, now."""
+        for namespace, bindings in self.screen._modal_binding_chain:
+            for binding in bindings.key_to_bindings.get(key, ()):
+                if not binding.priority and await self.app.run_action(binding.action,
+                                                                      namespace):
+                    return True
+        return False
 
 
 class Field(Horizontal):
@@ -66,6 +100,7 @@ class Field(Horizontal):
             super().__init__()
             self.field = field
             self.value = value
+            self.row = field.row  # the supports/loads row shown when it was typed
 
         @property
         def control(self) -> "Field":
@@ -79,7 +114,8 @@ class Field(Horizontal):
         self._placeholder = placeholder
         self._value = value
         self._suggester = suggester
-        self._typed = False
+        self._typed = None  # the last text typed here that the screen has not taken yet
+        self.row = 0  # in a supports/loads form: the row this field shows
 
     def compose(self) -> ComposeResult:
         yield Label(self.label, classes="field-label")
@@ -98,13 +134,35 @@ class Field(Horizontal):
         return self.input.value
 
     def set_value(self, value: str) -> None:
-        """Show a value from the document without it counting as an edit."""
+        """Show a value from the document without it counting as an edit. A field that has
+        the focus, or typing the screen has not taken yet, is never rewritten."""
         value = "" if value is None else str(value)
-        if self.input.has_focus and self._typed:
-            return  # never overwrite what the user is typing (the document lags the keys)
+        if self.screen.focused is self.input or self._typed is not None:
+            return
         if self.input.value != value:
             self._quiet = value
             self.input.value = value
+
+    def show_row(self, row: int, value: str) -> None:
+        """Show row `row`'s value; another row's value replaces the text even with focus
+        (what was typed for the old row is already on its way, stamped with that row)."""
+        if row != self.row:
+            self.row = row
+            self._typed = None
+            value = "" if value is None else str(value)
+            if self.input.value != value:
+                self._quiet = value
+                self.input.value = value
+            return
+        self.set_value(value)
+
+    def taken(self, value: str) -> None:
+        """The screen wrote `value` (typed here) into the document."""
+        if self._typed == value:
+            self._typed = None
+
+    def forget_typing(self) -> None:
+        self._typed = None
 
     def show(self, message: str = "", error: bool = False) -> None:
         msg = self.query_one(".field-msg", Static)
@@ -121,11 +179,8 @@ class Field(Horizontal):
             self._quiet = None
             return
         self._quiet = None
-        self._typed = True
+        self._typed = event.value
         self.post_message(self.Edited(self, event.value))
-
-    def on_descendant_blur(self, event) -> None:
-        self._typed = False
 
 
 class Choice(Widget, can_focus=True):

@@ -1,0 +1,226 @@
+"""Keys typed at any speed give the same job as keys typed slowly.
+
+A terminal delivers keys typed fast (key repeat, a paste, tmux send-keys, or keys queued
+while the screen was busy) as one burst. These tests feed the bytes a terminal would send
+through Textual's own terminal parser and hand every key to the app at once, with no pause
+between them, and compare the job with the same bytes typed one key at a time with a pause
+after each; then again with a solver slowed down to 0.25 s a solve.
+"""
+
+from __future__ import annotations
+
+import asyncio
+import functools
+import os
+import shutil
+import subprocess
+import sys
+import time
+from pathlib import Path
+
+import pytest
+
+pytest.importorskip("textual")
+
+from textual._xterm_parser import XTermParser  # noqa: E402
+
+from shopbeam.tui import session as session_mod  # noqa: E402
+from shopbeam.tui.app import make_app  # noqa: E402
+from shopbeam.tui.widgets import Field  # noqa: E402
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+SIZE = (80, 24)
+BS = "\x7f"  # backspace as a terminal sends it
+HOME, END, DELETE, LEFT = "\x1b[H", "\x1b[F", "\x1b[3~", "\x1b[D"
+CTRL_U = "\x15"  # clear the field up to the cursor
+
+
+@pytest.fixture(autouse=True)
+def _own_library(tmp_path, monkeypatch):
+    user = tmp_path / "user"
+    user.mkdir()
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+    return user
+
+
+@pytest.fixture
+def slow_solver(monkeypatch):
+    real = session_mod.evaluate_data
+
+    def slow(*args, **kwargs):
+        time.sleep(0.25)
+        return real(*args, **kwargs)
+
+    monkeypatch.setattr(session_mod, "evaluate_data", slow)
+
+
+def sync(fn):
+    @functools.wraps(fn)
+    def run(*args, **kwargs):
+        return asyncio.run(fn(*args, **kwargs))
+
+    return run
+
+
+def events_of(data: str):
+    parser = XTermParser()
+    return [e for e in list(parser.feed(data)) + list(parser.feed("")) if hasattr(e, "key")]
+
+
+async def settle(pilot) -> None:
+    await pilot.pause()
+    await pilot.app.workers.wait_for_complete()
+    await pilot.pause()
+
+
+async def send(pilot, data: str, fast: bool) -> None:
+    """Type `data` (terminal bytes): all at once, or one key at a time with pauses."""
+    app = pilot.app
+    for event in events_of(data):
+        app._driver.send_message(event)
+        if not fast:
+            await settle(pilot)
+    await settle(pilot)
+
+
+def field(app, view: str, key: str) -> Field:
+    return next(f for f in app.job_screen.query_one(f"#{view}").query(Field) if f.key == key)
+
+
+async def typed_job(preset: str, view_key: str, start: tuple[str, str], data: str,
+                    fast: bool) -> tuple[str, object]:
+    """Open a preset, go to a view, put the cursor at the end of one field, type `data`;
+    return the job text and the last evaluation."""
+    app = make_app(PRESETS / f"{preset}.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("escape", view_key)
+        await settle(pilot)
+        f = field(app, *start)
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        await send(pilot, data, fast)
+        s = app.job_screen.session
+        assert not s.stale
+        return s.doc.text(), s.evaluation
+
+
+CASES = {
+    # the report: Value of the shelf's load cleared at key-repeat speed, then "-250 psf"
+    "minus-250-psf": ("continuous-shelf", "3", ("loads", "load.value"),
+                      BS * 12 + "-250 psf", {"value": "-250 psf"}),
+    "length-12-ft": ("demo", "2", ("span", "beam.length"), BS * 8 + "12 ft",
+                     {"length": "12 ft"}),
+    "cursor-keys": ("continuous-shelf", "3", ("loads", "load.value"),
+                    HOME + DELETE * 4 + "-250" + END + LEFT * 2 + BS + "p" + END,
+                    {"value": "-250 psf"}),
+    "tab-between-fields": ("demo", "3", ("loads", "load.start"),
+                           CTRL_U + "1 ft\t" + CTRL_U + "9 ft\t" + CTRL_U + "-80 lbf/ft",
+                           {"start": "1 ft", "end": "9 ft", "value": "-80 lbf/ft"}),
+}
+
+
+def _assert_has(text: str, expected: dict) -> None:
+    for k, v in expected.items():
+        assert f'{k} = "{v}"' in text, (k, v, text)
+
+
+@pytest.mark.parametrize("case", list(CASES))
+@sync
+async def test_fast_typing_gives_the_job_slow_typing_gives(case):
+    preset, view_key, start, data, expected = CASES[case]
+    slow_text, _ = await typed_job(preset, view_key, start, data, fast=False)
+    fast_text, _ = await typed_job(preset, view_key, start, data, fast=True)
+    _assert_has(slow_text, expected)
+    assert fast_text == slow_text
+
+
+@pytest.mark.parametrize("case", ["minus-250-psf", "tab-between-fields"])
+@sync
+async def test_fast_typing_with_a_slow_solver(case, slow_solver):
+    preset, view_key, start, data, expected = CASES[case]
+    fast_text, ev = await typed_job(preset, view_key, start, data, fast=True)
+    _assert_has(fast_text, expected)
+    assert ev.ok
+
+
+@sync
+async def test_minus_250_psf_pushes_down_after_a_fast_burst(slow_solver):
+    text, ev = await typed_job("continuous-shelf", "3", ("loads", "load.value"),
+                               BS * 12 + "-250 psf", fast=True)
+    # 250 psf over the 18 in shelf depth = 375 lbf/ft, downward (negative: forces + up)
+    load = ev.job.loads[0]
+    assert load.w1 == load.w2 == pytest.approx(-375 * 4.4482216152605 / 0.3048, rel=1e-9)
+
+
+@sync
+async def test_a_field_with_focus_is_never_rewritten_by_a_late_solve(slow_solver):
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("escape", "2")
+        await settle(pilot)
+        f = field(app, "span", "beam.length")
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        # type, and while the slow solve of the first key runs, keep typing
+        for data in (BS * 8, "1", "2", " f", "t"):
+            for event in events_of(data):
+                app._driver.send_message(event)
+            await pilot.pause(0.05)
+        assert f.value == "12 ft"
+        await settle(pilot)
+        assert f.value == "12 ft"
+        assert app.job_screen.session.doc.get("beam.length") == "12 ft"
+
+
+# ---------------------------------------------------------------------- a real terminal
+
+TMUX = shutil.which("tmux")
+
+
+def _tmux(*args: str) -> str:
+    return subprocess.run([TMUX, *args], check=True, capture_output=True, text=True).stdout
+
+
+def _wait_for(pred, timeout: float = 30.0) -> bool:
+    end = time.monotonic() + timeout
+    while time.monotonic() < end:
+        if pred():
+            return True
+        time.sleep(0.2)
+    return False
+
+
+@pytest.mark.skipif(TMUX is None, reason="tmux is not installed")
+def test_tmux_keys_sent_at_full_speed_reach_the_saved_job(tmp_path):
+    job = tmp_path / "shelf.toml"
+    shutil.copy(PRESETS / "continuous-shelf.toml", job)
+    sock = str(tmp_path / "tmux.sock")
+    env = dict(os.environ, SHOPBEAM_USER_DIR=str(tmp_path / "user"), TERM="xterm-256color")
+    env.pop("SHOPBEAM_LIBRARY", None)
+    cmd = f"{sys.executable} -m shopbeam ui {job}"
+    subprocess.run([TMUX, "-S", sock, "-f", os.devnull, "new-session", "-d", "-x", "80",
+                    "-y", "24", cmd], check=True, env=env)
+    try:
+        def screen() -> str:
+            return _tmux("-S", sock, "capture-pane", "-p")
+
+        assert _wait_for(lambda: "Screening check" in screen()), screen()
+        # to the loads view, into the first load's Value, cleared, retyped, saved: one burst
+        keys = "\x1b[14~"  # F4: the loads view from anywhere
+        _tmux("-S", sock, "send-keys", "-t", "0", "F4")
+        assert _wait_for(lambda: "Loads:" in screen()), screen()
+        original = job.read_text(encoding="utf-8")
+        _tmux("-S", sock, "send-keys", "-t", "0", "Tab", "Tab", "Tab", "Tab",
+              "End", *(["BSpace"] * 12), "-250 psf", "C-s")
+        assert _wait_for(lambda: job.read_text(encoding="utf-8") != original), screen()
+        saved = job.read_text(encoding="utf-8")
+        assert 'value = "-250 psf"' in saved, saved
+        assert "Saved" in screen() or "UNSAVED" not in screen()
+        del keys
+    finally:
+        subprocess.run([TMUX, "-S", sock, "kill-server"], capture_output=True)
