@@ -14,8 +14,10 @@ from pathlib import Path
 import pytest
 
 
+from tuipilot import settle  # noqa: E402
 from shopbeam.tui.app import JobScreen, make_app  # noqa: E402
-from shopbeam.tui.screens import ConfirmScreen, ConflictScreen, LibraryScreen  # noqa: E402
+from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, LengthScreen,  # noqa: E402
+                                  LibraryScreen)
 from shopbeam.tui.widgets import Field  # noqa: E402
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
@@ -66,7 +68,7 @@ async def type_into(pilot, app, view: str, key: str, text: str) -> None:
     f.input.focus()
     await pilot.pause()
     f.input.value = text
-    await pilot.pause()
+    await settle(pilot)
 
 
 async def type_keys(pilot, app, view: str, key: str, text: str, clear: bool = True) -> None:
@@ -79,12 +81,14 @@ async def type_keys(pilot, app, view: str, key: str, text: str, clear: bool = Tr
         f.input.cursor_position = len(f.input.value)
     await pilot.pause()
     await pilot.press(*[{" ": "space"}.get(c, c) for c in text])
-    await pilot.pause()
+    await settle(pilot)
 
 
 async def goto(pilot, key: str) -> None:
     await pilot.press("escape", key)
-    await pilot.pause()
+    await settle(pilot)
+
+
 
 
 @sync
@@ -115,28 +119,41 @@ async def test_two_span_shelf_from_scratch_reads_its_reactions():
         await type_into(pilot, app, "job", "title", "Two-span shelf")
         await goto(pilot, "2")
         await type_into(pilot, app, "span", "beam.length", "10 ft")
+        # a new length with supports placed along the beam: asked, and told to scale them
+        # (the template's roller at 8 ft goes to the new end, 10 ft)
+        await pilot.press("tab")
+        await settle(pilot)
+        assert isinstance(app.screen, LengthScreen)
+        await pilot.press("s")
+        await settle(pilot)
+        assert [r["at"] for r in s.rows("supports")] == ["0 ft", "10 ft"]
         # self-weight left out so the reactions are the entered load alone
         sw = [c for c in app.job_screen.query("#span Choice") if c.key == "beam.self_weight"][0]
         sw.focus()
         await pilot.press("right")
-        await pilot.pause()
-        # the template has pin at 0 and roller at the end: add a roller and put it mid-span
-        app.job_screen.query_one("#span #add-roller").focus()
-        await pilot.press("enter")
-        await pilot.pause()
+        await settle(pilot)
+        # add a support from a field (ctrl+t), make it a roller and put it mid-span
+        field(app, "span", "beam.members").input.focus()
+        await pilot.press("ctrl+t")
+        await settle(pilot)
         assert len(s.rows("supports")) == 3
+        kind = [c for c in app.job_screen.query("#span Choice") if c.key == "support.type"][0]
+        kind.focus()
+        await pilot.press("r")
+        await settle(pilot)
         await type_into(pilot, app, "span", "support.at", "5 ft")
-        # the template's second support still says 8 ft: move it to the new end
-        lst = app.job_screen.query_one("#support-list")
-        lst.focus()
-        lst.highlighted = 1
-        await pilot.pause()
-        await type_into(pilot, app, "span", "support.at", "10 ft")
+        assert [r["type"] for r in s.rows("supports")] == ["pin", "roller", "roller"]
+        # a new job has no loads nobody entered: add one and type it in
         await goto(pilot, "3")
-        lst = app.job_screen.query_one("#load-list")
-        lst.focus()
-        lst.highlighted = 0
-        await pilot.pause()
+        assert s.rows("loads") == []
+        await pilot.press("ctrl+t")
+        await settle(pilot)
+        kind = [c for c in app.job_screen.query("#loads Choice") if c.key == "load.type"][0]
+        kind.focus()
+        await pilot.press("u")
+        await settle(pilot)
+        assert s.rows("loads")[0].get("value") is None  # nothing made up
+        await type_into(pilot, app, "loads", "load.start", "0 ft")
         await type_into(pilot, app, "loads", "load.end", "10 ft")
         await type_into(pilot, app, "loads", "load.value", "-100 lbf/ft")
         await goto(pilot, "7")
@@ -192,8 +209,15 @@ async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
         assert len(s.rows("loads")) == 4  # the rest of the job is still there
         await type_keys(pilot, app, "span", "beam.length", " ft", clear=False)
         assert message_of(f) == "= 12 ft"
-        # what sat at the old end (15 ft: the stair load, the deck's end) followed the end;
-        # the post at 12 ft did not move
+        # leaving the field asks what happens to the positions; nothing moved before that
+        assert s.rows("loads")[3]["at"] == "15 ft"
+        await pilot.press("enter")
+        await settle(pilot)
+        assert isinstance(app.screen, LengthScreen)
+        await pilot.press("e")  # the ends stay at the ends
+        await settle(pilot)
+        # what sat at the old end (15 ft: the stair load, the deck's end) went to the new
+        # end; the post at 12 ft did not move
         loads = s.rows("loads")
         assert loads[3]["at"] == "12 ft" and loads[0]["end"] == "12 ft"
         assert [r["at"] for r in s.rows("supports")] == ["0 ft", "12 ft"]

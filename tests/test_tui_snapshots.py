@@ -13,6 +13,7 @@ import pytest
 
 
 from shopbeam.tui.app import make_app  # noqa: E402
+from tuipilot import settle  # noqa: E402
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
 DATE = datetime.date(2026, 1, 15)
@@ -50,9 +51,8 @@ def _keys_then_settle(keys):
         await pilot.pause()
         for k in keys:
             await pilot.press(k)
-            await pilot.pause()
-        await pilot.app.workers.wait_for_complete()
-        await pilot.pause()
+            await settle(pilot)
+        await settle(pilot)
 
     return run
 

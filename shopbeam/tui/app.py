@@ -14,20 +14,21 @@ from pathlib import Path
 import time
 
 from rich.text import Text
-from textual import work
+from textual import events, work
 from textual.app import App, ComposeResult
 from textual.binding import Binding
 from textual.screen import Screen
-from textual.widgets import ContentSwitcher, Footer, Static
+from textual.widgets import ContentSwitcher, Footer, Input, Static
 from textual.worker import get_current_worker
 
 from shopbeam import units
-from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, LibraryScreen,
-                                  SaveAsScreen)
+from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, LengthScreen,
+                                  LibraryScreen, SaveAsScreen)
 from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
-                                ResultsView, RowsView, SectionView, SpanView, problems_text)
+                                ResultsView, RowsView, SectionView, SpanView, load_warnings,
+                                problems_text)
 from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, ViewBar
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -45,6 +46,7 @@ VIEWS = [
     ("sizing", "s", "Size", "Size", SizingView),
 ]
 INPUT_VIEWS = {v[0] for v in VIEWS[:6]}
+VIEW_FKEYS = [f"f{n}" for n in range(2, 13)]  # F2 .. F12: the views in bar order, from anywhere
 SOLVE_DEBOUNCE = 0.03  # seconds: keys typed closer together than this cost one solve
 
 SHAPE_DEFAULTS = {
@@ -78,24 +80,42 @@ def _number_or_text(text: str):
 
 
 
+def title_bar(title: str, label: str, flags: str, width: int) -> str:
+    """Title | where | flags in `width` columns: the flags (UNSAVED CHANGES, read-only
+    preset) always whole; the place shortened to its file name, then the title cut."""
+    tail = f" | {flags}" if flags else ""
+    bar = f"{title} | {label}{tail}"
+    if len(bar) <= width:
+        return bar
+    if "/" in label or "\\" in label:
+        label = "..." + label.replace("\\", "/").rsplit("/", 1)[-1]
+    room = width - len(f" | {label}{tail}")
+    if room < 12:  # not even a short title fits beside the place: drop the place
+        label, room = "", width - len(tail)
+    if len(title) > room:
+        title = title[:max(1, room - 3)] + "..."
+    return f"{title}{' | ' + label if label else ''}{tail}"[:width]
+
+
 class JobScreen(Screen):
     """The open job: input views, result views, the live answer and the safety banner."""
 
+    # One key map for every screen (screens.KEYS says it in words; F1 shows it). Keys a
+    # text field never needs work from inside a field: F-keys and ctrl+letters.
     BINDINGS = [
         Binding("ctrl+s", "save", "save", priority=True),
         Binding("ctrl+d", "save_as", "save as", priority=True),
         Binding("ctrl+o", "library", "library", priority=True),
-        Binding("ctrl+n", "step(1)", "next view", priority=True),
-        Binding("ctrl+p", "step(-1)", "prev view", priority=True, show=False),
-        Binding("f1", "app.help", "help", priority=True),
-        Binding("tab", "app.focus_next", "fields", show=True),
-        Binding("question_mark", "app.help", "help", show=False),
-        Binding("l", "library", "library", show=False),
+        Binding("ctrl+n", "new", "new job", priority=True, show=False),
+        Binding("ctrl+r", "write_sheet", "write to file", priority=True, show=False),
+        Binding("ctrl+p", "print_sheet", "print", priority=True, show=False),
+        Binding("f1", "app.help", "keys", priority=True),
+        Binding("question_mark", "app.help", "keys", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
-    ] + [Binding(",".join([key, f"alt+{key}"] + ([OPTION_DIGITS[key]] if key in OPTION_DIGITS
-                                                  else [])),
-                 f"view('{vid}')", name, show=False)
-         for vid, key, name, _s, _c in VIEWS]
+    ] + [Binding(",".join([key, f"alt+{key}", fkey] + ([OPTION_DIGITS[key]]
+                                                      if key in OPTION_DIGITS else [])),
+                 f"view('{vid}')", name, show=False, priority=False)
+         for (vid, key, name, _s, _c), fkey in zip(VIEWS, VIEW_FKEYS)]
 
     def __init__(self, session: Session) -> None:
         super().__init__()
@@ -113,6 +133,7 @@ class JobScreen(Screen):
         yield Footer()
 
     def on_mount(self) -> None:
+        self._settled_length = self.session.doc.get("beam.length")
         self.refresh_all()
 
     def on_resize(self) -> None:
@@ -121,8 +142,6 @@ class JobScreen(Screen):
     # ------------------------------------------------------------------ showing
     def refresh_all(self) -> None:
         s, ev = self.session, self.session.evaluation
-        if ev.job is not None:
-            self._last_length = ev.job.length
         tags = ev.job.tags if ev.job is not None else (s.doc.get("tags") or [])
         if not isinstance(tags, list) and not isinstance(tags, tuple):
             tags = []
@@ -133,8 +152,8 @@ class JobScreen(Screen):
             flags.append("UNSAVED CHANGES")
         if s.read_only:
             flags.append("read-only preset")
-        bar = f"{title} | {s.label}" + (" | " + "; ".join(flags) if flags else "")
-        self.query_one("#titlebar", Static).update(Text(bar))
+        self.query_one("#titlebar", Static).update(Text(title_bar(
+            str(title), s.label, "; ".join(flags), (self.size.width or 80) - 2), no_wrap=True))
         vb = self.query_one(ViewBar)
         if self.size.width and self.size.width < 112:
             vb.views = [(v[0], v[1], v[3]) for v in VIEWS]
@@ -145,6 +164,9 @@ class JobScreen(Screen):
         vb.show(self.current)
         view = self.query_one(f"#{self.current}")
         view.show(s)
+        # lay the view out now: Tab order follows positions on screen, so a Tab typed right
+        # after a key that showed or hid fields must find them where they will be
+        self._refresh_layout()
         summary = self.query_one("#summary", Static)
         summary.display = self.current in INPUT_VIEWS
         if self.current in INPUT_VIEWS:
@@ -152,13 +174,13 @@ class JobScreen(Screen):
 
     def summary_text(self) -> str:
         ev = self.session.evaluation
+        warn = load_warnings(self.session)[:1]
         if ev.result is None:
-            text = problems_text(ev)
-            lines = text.splitlines()
+            lines = warn + problems_text(ev).splitlines()
             return "\n".join(lines[:3]) + ("\n  ... see 7 Results" if len(lines) > 3 else "")
         from shopbeam.tui import drawing
 
-        return drawing.summary_line(ev.result) + "   (7 results, 8 plots)"
+        return "\n".join(warn + [drawing.summary_line(ev.result) + "   (7 results, 8 plots)"])
 
     def changed(self) -> None:
         """The document changed: show it now, solve it in a worker (latest edit wins)."""
@@ -170,13 +192,13 @@ class JobScreen(Screen):
         if s.stale:
             self._solve(s, *s.snapshot())
 
-    @work(thread=True, exclusive=True, group="solve", exit_on_error=False)
+    @work(thread=True, group="solve", exit_on_error=False)
     def _solve(self, session: Session, version: int, data: dict, text: str, name: str) -> None:
         """Solve a snapshot of the job off the UI thread. Waits a moment first, so a burst
         of keys costs one solve; an answer for an older version of the job is dropped."""
         time.sleep(SOLVE_DEBOUNCE)
         if session.version != version or get_current_worker().is_cancelled:
-            return
+            return  # a newer edit came: its own worker solves it
         from shopbeam.tui import session as session_mod
 
         ev = session_mod.evaluate_data(data, text, name)
@@ -189,6 +211,7 @@ class JobScreen(Screen):
 
     # ------------------------------------------------------------------ navigation
     async def action_view(self, vid: str) -> None:
+        self.flush_typing()
         switcher = self.query_one(ContentSwitcher)
         if not switcher.query(f"#{vid}"):
             cls = next(v[4] for v in VIEWS if v[0] == vid)
@@ -211,21 +234,58 @@ class JobScreen(Screen):
         ids = [v[0] for v in VIEWS]
         await self.action_view(ids[(ids.index(self.current) + step) % len(ids)])
 
+    def action_new(self) -> None:
+        self.flush_typing()
+        self.guard("start a new job", self.new_job)
+
+    def action_write_sheet(self) -> None:
+        self.flush_typing()
+        view = self.query_one(f"#{self.current}")
+        if not hasattr(view, "write_file"):
+            self.notify("ctrl+r writes the calc sheet (9 Calc) or the rating label (0 Rating) "
+                        "to a file: go to one of those views first.", severity="warning")
+            return
+        view.write_file()
+
+    def action_print_sheet(self) -> None:
+        self.flush_typing()
+        view = self.query_one(f"#{self.current}")
+        if not hasattr(view, "print_sheet"):
+            self.notify("ctrl+p prints the calc sheet (9 Calc) or the rating label (0 Rating): "
+                        "go to one of those views first.", severity="warning")
+            return
+        view.print_sheet()
+
     def action_leave_field(self) -> None:
         self.set_focus(None)
 
     # ------------------------------------------------------------------ edits
+    ENTER_NEXT_FIELD = True  # enter in a field moves on (done by the field, in key order)
+
     def on_input_submitted(self, event) -> None:
-        """Enter in a field moves to the next one."""
         event.stop()
-        self.focus_next()
 
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
+        f = event.field
+        if event.value != f.input.value or f._typed is None:
+            return  # an older keystroke (a newer one follows), or already taken by a flush
         try:
-            self.apply_edit(event.field.key, event.value, event.row)
+            self.apply_edit(f.key, event.value, event.row)
         finally:
-            event.field.taken(event.value)
+            f.taken(event.value)
+
+    def flush_typing(self) -> None:
+        """Write what is typed in the fields into the job now, before a key that saves,
+        changes view or leaves the job acts on it (their messages may still be queued)."""
+        for f in self.query(Field):
+            if f._typed is not None:
+                value = f.input.value
+                try:
+                    self.apply_edit(f.key, value, f.row)
+                finally:
+                    f.taken(value)
+                    f.forget_typing()
 
     def apply_edit(self, key: str, value: str, row: int = 0) -> None:
         s = self.session
@@ -237,14 +297,17 @@ class JobScreen(Screen):
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])
         elif key == "beam.length":
-            s.set(key, raw or None)
-            self.follow_the_end(getattr(self, "_last_length", None), raw)
+            # an emptied required field stays in the file as "" (its place and comment
+            # kept, and a problem shown) until something is typed in it
+            s.set(key, raw)  # positions are asked about when the field is left
         elif key == "criteria.deflection":
             s.set(key, raw or None)
+        elif key == "beam.braces":
+            s.set(key, [t.strip() for t in value.split(",") if t.strip()] or None)
         elif key in ("beam.members", "criteria.safety_factor"):
             s.set(key, _number_or_text(raw))
         elif key == "section.designation":
-            s.set("beam.section", raw or None)
+            s.set("beam.section", raw)
         elif key.startswith("dim.") or key.startswith("custom."):
             if isinstance(s.doc.get("beam.section"), dict):
                 s.set("beam.section." + key.split(".", 1)[1], raw or None)
@@ -254,7 +317,7 @@ class JobScreen(Screen):
         elif key.startswith("support."):
             if row >= len(s.rows("supports")):
                 return
-            s.set_row("supports", row, key[8:], raw or None)
+            s.set_row("supports", row, key[8:], raw)
         elif key.startswith("load."):
             if row >= len(s.rows("loads")):
                 return
@@ -268,41 +331,81 @@ class JobScreen(Screen):
                 s.set_row("loads", i, "value", pair)
             elif field == "label":
                 s.set_row("loads", i, "label", value or None)
-            else:
+            elif field in ("width", "total"):  # optional: emptied means left out
                 s.set_row("loads", i, field, raw or None)
+            else:
+                s.set_row("loads", i, field, raw)
         else:
             return
         self.changed()
 
-    def follow_the_end(self, old: float | None, new_text: str) -> None:
-        """Supports and load ends that sat at the old end of the beam move to the new end,
-        so lengthening a span does not leave its end support behind as an overhang."""
+    def on_field_left(self, event: Field.Left) -> None:
+        event.stop()
+        if event.field.key == "beam.length":
+            self.length_settled()
+
+    def length_settled(self) -> None:
+        """The length field was left: if the length changed and supports or loads sit along
+        the beam, ask what to do with them. Nothing moves without an answer."""
         s = self.session
-        if old is None:
+        before, now = getattr(self, "_settled_length", None), s.doc.get("beam.length")
+        try:
+            new = units.parse(str(now), "length", positive=True)
+        except Exception:  # noqa: BLE001 - not a length yet: asked when it is one
             return
         try:
-            new = units.parse(new_text, "length", positive=True)
-        except Exception:  # noqa: BLE001 - not a length yet: nothing follows
+            old = units.parse(str(before), "length", positive=True)
+        except Exception:  # noqa: BLE001
+            old = None
+        self._settled_length = now
+        if old is None or abs(new - old) <= 1e-9 * old:
             return
-        if abs(new - old) <= 1e-9 * old:
-            return
-
-        def at_old_end(text) -> bool:
-            try:
-                return abs(units.parse(text, "length") - old) <= 1e-9 * old
-            except Exception:  # noqa: BLE001
-                return False
-
-        moved = 0
-        for table, keys in (("supports", ("at",)), ("loads", ("at", "end"))):
+        placed = []
+        for table, keys in (("supports", ("at",)), ("loads", ("at", "start", "end"))):
             for i, row in enumerate(s.rows(table)):
                 for k in keys:
-                    if k in row and isinstance(row[k], str) and at_old_end(row[k]):
-                        (s.doc.set_support if table == "supports" else s.doc.set_load)(
-                            i, **{k: new_text.strip()})
-                        moved += 1
+                    try:
+                        x = units.parse(str(row[k]), "length")
+                    except Exception:  # noqa: BLE001 - missing or not a length
+                        continue
+                    if x > 1e-12:
+                        placed.append((table, i, k, x))
+        if not placed:
+            return
+        lines = [f"  {t[:-1]} {i + 1} {k} {s.rows(t)[i][k]}" for t, i, k, _x in placed]
+        if len(lines) > 8:
+            lines = lines[:7] + [f"  ... and {len(lines) - 7} more"]
+
+        def answer(choice) -> None:
+            self.move_positions(choice or "keep", old, new, placed)
+
+        self.app.push_screen(LengthScreen(str(before), str(now), lines), answer)
+
+    def move_positions(self, how: str, old: float, new: float, placed) -> None:
+        s = self.session
+        system = s.doc.get("units") if s.doc.get("units") in ("us", "si") else "us"
+        moved = []
+        for table, i, k, x in placed:
+            if how == "scale":
+                to = units.fmt(x * new / old, "length", system)
+            elif how == "ends" and abs(x - old) <= 1e-9 * old:
+                to = str(s.doc.get("beam.length"))
+            else:
+                continue
+            (s.doc.set_support if table == "supports" else s.doc.set_load)(i, **{k: to})
+            moved.append(f"{table[:-1]} {i + 1} {k} {to}")
+        past = [f"{t[:-1]} {i + 1}" for t, i, k, x in placed
+                if x > new * (1 + 1e-9) and not (how == "scale" or
+                                                 (how == "ends" and abs(x - old) <= 1e-9 * old))]
         if moved:
             s.touched()
+            self.notify("Moved: " + "; ".join(moved[:6]) + (" ..." if len(moved) > 6 else ""),
+                        timeout=8)
+        elif how == "keep":
+            self.notify("Positions kept as typed." + (
+                f" Past the new end (errors until moved): {', '.join(sorted(set(past)))}."
+                if past else ""), severity="warning" if past else "information", timeout=8)
+        self.changed()
 
     def on_choice_changed(self, event: Choice.Changed) -> None:
         event.stop()
@@ -321,6 +424,13 @@ class JobScreen(Screen):
                 s.set_row("supports", i, "stiffness", None)
         elif key == "load.type":
             self.change_load_type(self.query_one("#loads", LoadsView).selected, value)
+        elif key == "beam.braced":
+            s.set("beam.braced", True if value == "all along" else None)
+        elif key == "criteria.basis":
+            s.set("criteria.basis", "first-yield" if value == "first-yield" else None)
+        elif key == "load.patterned":
+            i = self.query_one("#loads", LoadsView).selected
+            s.set_row("loads", i, "patterned", True if value == "yes" else None)
         elif key == "load.case":
             i = self.query_one("#loads", LoadsView).selected
             s.set_row("loads", i, "case", "dead" if value == "dead" else None)
@@ -351,17 +461,25 @@ class JobScreen(Screen):
             return
         si = s.doc.get("units") == "si"
         fields = {"type": kind}
+        # the value's unit changes with the kind (lbf, lbf*ft, lbf/ft): it is cleared, never
+        # made up, so the row says "value missing" until the user types one
         if kind in ("point", "moment"):
             fields["at"] = row.get("at") or row.get("start") or self._length_text(0.5)
-            fields.update(start=None, end=None)
-            fields["value"] = ("-1 kN" if si else "-200 lbf") if kind == "point" else \
-                ("0.5 kN*m" if si else "200 lbf*ft")
+            fields.update(start=None, end=None, width=None, total=None)
         else:
-            fields["start"] = row.get("start") or "0 ft" if not si else row.get("start") or "0 m"
+            fields["start"] = row.get("start") or ("0 m" if si else "0 ft")
             fields["end"] = row.get("end") or self._length_text(1.0)
             fields["at"] = None
-            line = "-1 kN/m" if si else "-50 lbf/ft"
-            fields["value"] = line if kind == "uniform" else ["0 kN/m" if si else "0 lbf/ft", line]
+            if kind != "uniform":
+                fields["total"] = None
+        same_unit = {old, kind} <= {"uniform", "linear"}
+        v = row.get("value")
+        if same_unit and kind == "linear" and isinstance(v, str):
+            fields["value"] = [v, v]
+        elif same_unit and kind == "uniform" and isinstance(v, list) and v:
+            fields["value"] = v[0]
+        elif not same_unit:
+            fields["value"] = None
         for k, v in fields.items():
             s.doc.set_load(i, **{k: v})
         s.touched()
@@ -425,15 +543,12 @@ class JobScreen(Screen):
             i = s.add_row("supports", **fields)
             view = self.query_one("#span", SpanView)
         else:
+            # no value nobody entered: the row says "value missing" until one is typed
             kind = event.kind
             if kind in ("point", "moment"):
-                value = ("-1 kN" if si else "-200 lbf") if kind == "point" else \
-                    ("0.5 kN*m" if si else "200 lbf*ft")
-                fields = {"type": kind, "at": self._length_text(0.5), "value": value}
+                fields = {"type": kind, "at": self._length_text(0.5)}
             else:
-                line = "-1 kN/m" if si else "-50 lbf/ft"
-                fields = {"type": kind, "start": zero, "end": self._length_text(1.0),
-                          "value": line if kind == "uniform" else ["0 kN/m" if si else "0 lbf/ft", line]}
+                fields = {"type": kind, "start": zero, "end": self._length_text(1.0)}
             i = s.add_row("loads", **fields)
             view = self.query_one("#loads", LoadsView)
         view.selected = i
@@ -481,6 +596,7 @@ class JobScreen(Screen):
         return ["user"] + [p for p in places if p != "user"]
 
     def action_save(self, then=None) -> None:
+        self.flush_typing()
         s = self.session
         if s.path is None:
             self.action_save_as(then)
@@ -488,6 +604,7 @@ class JobScreen(Screen):
         self._try_save(lambda overwrite: s.save(overwrite=overwrite), then)
 
     def action_save_as(self, then=None) -> None:
+        self.flush_typing()
         s = self.session
 
         def got(answer) -> None:
@@ -530,7 +647,10 @@ class JobScreen(Screen):
         s = self.session
         n = len(s.evaluation.errors)
         extra = f" - the job still has {n} problem{'s' if n != 1 else ''}" if n else ""
-        self.notify(f"Saved {s.label}{extra}", severity="warning" if n else "information")
+        where = str(Path(path).resolve() if path is not None else s.path)
+        name = f"{s.label} " if s.label != where else ""
+        self.notify(f"Saved {name}to {where}{extra}", severity="warning" if n else
+                    "information", timeout=8)
         self.refresh_all()
         if then is not None:
             then()
@@ -552,6 +672,7 @@ class JobScreen(Screen):
                                            doing), answer)
 
     def action_library(self, highlight=None) -> None:
+        self.flush_typing()
         tags = self.session.evaluation.job.tags if self.session.evaluation.job else ()
 
         def chosen(answer) -> None:
@@ -578,16 +699,22 @@ class JobScreen(Screen):
         self.notify(f"Opened {session.label}")
 
     def new_job(self) -> None:
-        self.set_session(Session.new(library_dir=self.session.library_dir))
+        session = Session.new(library_dir=self.session.library_dir)
+        # a new job starts with no loads: nothing on it that nobody entered
+        while session.doc.loads():
+            session.doc.remove_load(0)
+        session.touched()
+        self.set_session(session)
+        self.solve_soon()
         self.call_later(self.action_view, "job")
 
     def set_session(self, session: Session) -> None:
         session.deferred = True
         self.session = session
+        self._settled_length = session.doc.get("beam.length")
         self.set_focus(None)
         for f in self.query(Field):
             f.forget_typing()
-        self._last_length = None
         for v in self.query(RowsView):
             v.selected = 0
         for v in self.query(SizingView):
@@ -622,8 +749,33 @@ class ShopbeamApp(App):
         if not isinstance(self.screen, HelpScreen):
             self.push_screen(HelpScreen())
 
+    async def on_event(self, event) -> None:
+        """Every key is handled completely, in the order typed, before the next one.
+
+        Textual hands a key to the focused widget's queue and runs a key binding only when
+        the key has bubbled back up to the app, so keys typed fast (a burst over SSH, tmux,
+        key repeat, or keys queued while the screen was busy) could run out of order: a
+        backspace after the characters typed behind it, a character into the field a Tab
+        had already left. Here a bound key runs its action at once and a character for a
+        text field goes into it at once; only keys nothing is bound to are passed on."""
+        if isinstance(event, events.Key) and not event.is_forwarded:
+            self.app_focus = True
+            if await self._check_bindings(event.key, priority=True):
+                return
+            focused = self.focused
+            if isinstance(focused, Input) and event.is_printable:
+                await focused._on_key(event)  # typed into the field now, not queued
+                return
+            if await self._check_bindings(event.key):
+                return
+            (focused or self.screen)._forward_event(event)
+            return
+        await super().on_event(event)
+
     async def action_quit(self) -> None:
         js = getattr(self, "job_screen", None)
+        if js is not None:
+            js.flush_typing()
         if js is None or not js.session.dirty:
             self.exit()
             return

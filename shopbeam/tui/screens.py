@@ -16,38 +16,42 @@ from textual.widgets.option_list import Option
 from shopbeam.tui.widgets import Banner, Choice, Field
 
 KEYS = [
-    ("Anywhere", [
-        ("F1 or ?", "this help"),
-        ("ctrl+n / ctrl+p", "next / previous view"),
-        ("1 to 6", "input views: job, span, loads, section, material, criteria"),
-        ("7 8 9 0 s", "results, plots, calc sheet, rating, sizing"),
-        ("esc", "leave the field, so the view keys above work"),
-        ("tab / shift+tab", "next / previous field"),
-        ("ctrl+o or l", "library: open, duplicate, new"),
-        ("ctrl+s", "save (a bundled preset is saved as your own copy)"),
-        ("ctrl+d", "save as a new name"),
+    ("Anywhere, a text field included (the same on every screen)", [
+        ("F1", "these keys"),
+        ("F2 to F12", "views in the order of the bar: F2 job, F3 span, F4 loads, F5 section, "
+                      "F6 material, F7 criteria, F8 results, F9 plots, F10 calc sheet, "
+                      "F11 rating, F12 sizing (alt+digit works too)"),
+        ("ctrl+s", "save (a bundled preset is saved as your own copy; says where)"),
+        ("ctrl+d", "save as: this job, or in the library the picked job, under a new name"),
+        ("ctrl+o", "library: open a job"),
+        ("ctrl+n", "new job (asks first when there are unsaved changes)"),
+        ("ctrl+t / ctrl+x", "supports and loads views: add one / remove the picked one"),
+        ("ctrl+r / ctrl+p", "calc sheet and rating views: write it to a file / print it"),
+        ("tab / shift+tab", "next / previous field (only what is shown)"),
+        ("esc", "leave the field (then the digits and letters below work)"),
         ("ctrl+q", "quit (asks first when there are unsaved changes)"),
     ]),
-    ("In a field", [
+    ("Outside a text field", [
+        ("1 to 9, 0, s", "the views, as numbered in the bar"),
+        ("?", "these keys"),
+    ]),
+    ("In a text field", [
         ("type", "the value with its unit: 12 ft, 10' 6\", 1-1/2 in, -300 lbf, -25 lbf/ft"),
         ("enter", "next field"),
         ("right arrow", "accept the grey completion (section designations)"),
     ]),
     ("On a choice  [like] this", [
-        ("left / right / space", "change it"),
+        ("left / right", "change it (space too)"),
         ("first letter", "jump to that choice"),
     ]),
     ("Supports and loads lists", [
         ("up / down", "pick the one to edit below"),
-        ("a", "add one (or use the + buttons)"),
-        ("x or delete", "remove the picked one"),
+        ("a / x", "add one / remove the picked one (ctrl+t / ctrl+x anywhere)"),
     ]),
     ("Sizing", [("r", "sweep the chosen kind"), ("enter", "use the picked section")]),
     ("Library", [
         ("type", "search titles, tags, names (e.g. rack, lifting)"),
-        ("up / down, enter", "pick, open"),
-        ("ctrl+d", "duplicate the picked job into your library"),
-        ("ctrl+n", "new job"),
+        ("up / down, enter", "pick, open (enter in the search opens the picked job)"),
         ("esc", "back to the job"),
     ]),
 ]
@@ -57,11 +61,15 @@ def help_text(width: int = 74) -> str:
     import textwrap
 
     out = ["shopbeam keys", ""]
-    col = 20
+    col = min(22, max(len(k) for _g, keys in KEYS for k, _w in keys) + 2)
     for group, keys in KEYS:
         out.append(group)
         for k, what in keys:
             lines = textwrap.wrap(what, max(20, width - col - 2)) or [""]
+            if len(k) + 2 >= col:  # a long key gets its own line: never run into its words
+                out.append(f"  {k}")
+                out += [" " * col + ln for ln in lines]
+                continue
             out.append(f"  {k:<{col - 2}}{lines[0]}")
             out += [" " * col + ln for ln in lines[1:]]
         out.append("")
@@ -113,6 +121,36 @@ class ConfirmScreen(ModalScreen[str]):
         self.dismiss(answer)
 
 
+class LengthScreen(ModalScreen[str]):
+    """The length changed: what happens to the supports and loads? Dismisses "keep",
+    "scale" or "ends". Nothing moves unless the user says so (esc keeps the positions)."""
+
+    BINDINGS = [Binding("escape,k", "answer('keep')", "keep positions"),
+                Binding("s", "answer('scale')", "scale"),
+                Binding("e", "answer('ends')", "ends stay at the ends")]
+
+    def __init__(self, old: str, new: str, lines: list[str]) -> None:
+        super().__init__()
+        self.old, self.new, self.lines = old, new, lines
+
+    def compose(self) -> ComposeResult:
+        with VerticalScroll(classes="dialog", id="length"):
+            yield Static(f"The length changed from {self.old} to {self.new}.", markup=False,
+                         classes="view-title")
+            yield Static("Supports and loads placed along the beam:\n" + "\n".join(
+                self.lines), markup=False)
+            yield Static("What should happen to them?", markup=False)
+            yield Static("  k  keep every position as typed (esc); anything past the new end\n"
+                         "     is shown as an error until you move it\n"
+                         "  s  scale every position with the length\n"
+                         "  e  keep the ends at the ends: what sat at the old end moves to\n"
+                         "     the new end; everything else stays", markup=False)
+        yield Footer()
+
+    def action_answer(self, answer: str) -> None:
+        self.dismiss(answer)
+
+
 class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
     """Name and library place for a save as. Dismisses (name, place) or None."""
 
@@ -144,6 +182,7 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
         from shopbeam.jobs import storage
         from shopbeam.errors import InputError
 
+        event.field.taken(event.value)
         try:
             storage.safe_name(event.value)
             event.field.show("")
@@ -209,9 +248,13 @@ class LibraryScreen(Screen[object]):
 
     BINDINGS = [
         Binding("escape", "back", "back to the job"),
-        Binding("ctrl+d", "duplicate", "duplicate", priority=True),
+        Binding("ctrl+d", "duplicate", "save as (copy)", priority=True),
         Binding("ctrl+n", "new", "new job", priority=True),
-        Binding("f1", "app.help", "help"),
+        Binding("f1", "app.help", "keys", priority=True),
+        Binding("down", "move(1)", "next", show=False, priority=True),
+        Binding("up", "move(-1)", "previous", show=False, priority=True),
+        Binding("pagedown", "move(10)", "page down", show=False, priority=True),
+        Binding("pageup", "move(-10)", "page up", show=False, priority=True),
     ]
 
     def __init__(self, library_dir=None, tags=(), highlight=None) -> None:
@@ -233,17 +276,20 @@ class LibraryScreen(Screen[object]):
     def on_mount(self) -> None:
         self.query_one(Banner).show(self.tags)
         self.fill("")
-        self.query_one("#lib-list", OptionList).focus()
+        self.query_one(Field).input.focus()  # type to search at once; enter opens
 
-    def fill(self, search: str) -> None:
+    def fill(self, search: str, keep: bool = False) -> None:
         from shopbeam.jobs import library
 
         lst = self.query_one("#lib-list", OptionList)
-        try:
-            self.found = library.entries(self.library_dir, search=search or None)
-        except Exception as exc:  # noqa: BLE001
-            self.found = []
-            self.query_one("#lib-detail", Static).update(Text(f"cannot read the library: {exc}"))
+        was = lst.highlighted
+        if not keep:
+            try:
+                self.found = library.entries(self.library_dir, search=search or None)
+            except Exception as exc:  # noqa: BLE001
+                self.found = []
+                self.query_one("#lib-detail", Static).update(Text(
+                    f"cannot read the library: {exc}"))
         lst.clear_options()
         opts = []
         for e in self.found:
@@ -263,7 +309,9 @@ class LibraryScreen(Screen[object]):
                 f"No job matches. Places searched: {places}."))
         else:
             lst.highlighted = 0
-            if self.highlight is not None:
+            if keep and was is not None and was < n:
+                lst.highlighted = was
+            elif self.highlight is not None:
                 from pathlib import Path
 
                 for i, e in enumerate(self.found):
@@ -274,7 +322,9 @@ class LibraryScreen(Screen[object]):
 
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
+        self.highlight = None
         self.fill(event.value)
+        event.field.taken(event.value)
 
     def on_key(self, event) -> None:
         """Typing on the list goes to the search field."""
@@ -287,8 +337,24 @@ class LibraryScreen(Screen[object]):
             event.prevent_default()
 
     def on_input_submitted(self, event: Input.Submitted) -> None:
+        """Enter in the search opens the picked job: type, then one Enter."""
         event.stop()
-        self.query_one("#lib-list", OptionList).focus()
+        lst = self.query_one("#lib-list", OptionList)
+        if lst.highlighted is not None:
+            lst.action_select()
+
+    def action_move(self, step: int) -> None:
+        """Up, down, page up and page down pick in the list, from the search field too."""
+        lst = self.query_one("#lib-list", OptionList)
+        n = lst.option_count
+        if not n:
+            return
+        i = 0 if lst.highlighted is None else lst.highlighted
+        lst.highlighted = max(0, min(n - 1, i + step))
+
+    def on_resize(self) -> None:
+        if self.is_mounted and self.found is not None:
+            self.fill(self.query_one(Field).value, keep=True)
 
     def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
         if 0 <= event.option_index < len(self.found):

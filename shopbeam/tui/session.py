@@ -99,6 +99,8 @@ class Session:
         # a snapshot in a worker and installs the answer if no newer edit came meanwhile.
         self.deferred = False
         self.version = 0
+        # the loads as opened or last saved: a load that changes direction is named
+        self.baseline_loads = [dict(r) for r in doc.loads()]
         self.evaluate()
 
     # ------------------------------------------------------------------ opening
@@ -250,3 +252,4 @@ class Session:
         self.origin = origin
         self.name = self.path.stem
         self.saved_text = opened.text
+        self.baseline_loads = [dict(r) for r in self.doc.loads()]

@@ -121,8 +121,24 @@ class RowList(OptionList):
         self.post_message(self.Remove())
 
 
+class RowButton(Button, can_focus=False):
+    """An add/remove button: clicked, or its key (ctrl+t, ctrl+x); never a Tab stop."""
+
+
 class RowsView(View):
-    """Shared by supports and loads: a list, add/remove buttons, and a form for one row."""
+    """Shared by supports and loads: a list, add/remove buttons, and a form for one row.
+    ctrl+t adds and ctrl+x removes from anywhere in the view, a field included."""
+
+    BINDINGS = [
+        Binding("ctrl+t", "add_row", "add", priority=True),
+        Binding("ctrl+x", "remove_row", "remove", priority=True),
+    ]
+
+    def action_add_row(self) -> None:
+        self.post_message(self.RowAdd(self.table, self.new_kind))
+
+    def action_remove_row(self) -> None:
+        self.post_message(self.RowRemove(self.table, self.selected))
 
     table = ""  # "supports" | "loads"
     new_kind = ""  # the type a plain "add" (a key on the list) makes
@@ -197,18 +213,77 @@ class RowsView(View):
         pass
 
 
+def load_sign(row: dict) -> int | None:
+    """+1 (up or counterclockwise), -1 (down or clockwise), 0, or None (not readable yet);
+    a linear load whose ends differ in sign is 0 only when both are zero."""
+    kind = row.get("type")
+    v = row.get("value")
+    texts = v if isinstance(v, list) else [v]
+    kinds = ("moment",) if kind == "moment" else ("force", "line_load", "area_load")
+    signs = []
+    for t in texts:
+        if not isinstance(t, (str, int, float)) or str(t).strip() == "":
+            return None
+        for k in kinds:
+            try:
+                x = units.parse(str(t), k)
+                break
+            except Exception:  # noqa: BLE001 - not this kind (or not readable at all)
+                continue
+        else:
+            return None
+        signs.append((x > 0) - (x < 0))
+    if any(s > 0 for s in signs) and any(s < 0 for s in signs):
+        return 2  # both ways along a linear load
+    return max(signs, key=abs) if signs else None
+
+
+def direction_words(row: dict) -> str:
+    """The way a load acts, in words and an arrow: "down ↓", "UP ↑", "cw ↻", "ccw ↺"."""
+    sign = load_sign(row)
+    if sign is None:
+        return ""
+    if row.get("type") == "moment":
+        return {1: "ccw ↺", -1: "cw ↻", 0: "zero"}.get(sign, "")
+    return {1: "UP ↑", -1: "down ↓", 0: "zero", 2: "down ↓ and UP ↑"}[sign]
+
+
+def load_warnings(session) -> list[str]:
+    """Direction warnings for the loads as they stand: every force load points up, or a load
+    points the other way from when the job was opened or saved."""
+    rows = session.rows("loads")
+    out = []
+    forces = [(i, r, load_sign(r)) for i, r in enumerate(rows) if r.get("type") != "moment"]
+    if forces and all(sg is not None and sg > 0 and sg != 2 for _i, _r, sg in forces) \
+            and not all(r.get("uplift") is True for _i, r, _s in forces):
+        out.append("WARNING: every load points UP (forces are + up: a weight is negative, "
+                   "e.g. -300 lbf)")
+    base = getattr(session, "baseline_loads", [])
+    for i, r in enumerate(rows):
+        if i < len(base) and base[i].get("type") == r.get("type"):
+            was, now = load_sign(base[i]), load_sign(r)
+            if was in (-1, 1) and now in (-1, 1) and was != now:
+                lab = f" ({r['label']})" if r.get("label") else ""
+                out.append(f"WARNING: load {i + 1}{lab} changed direction: was "
+                           f"{direction_words(base[i])}, now {direction_words(r)}")
+    return out
+
+
 def _load_words(row: dict) -> str:
     kind = row.get("type", "?")
     lab = f" ({row['label']})" if row.get("label") else ""
     case = " [dead]" if row.get("case") == "dead" else ""
+    way = direction_words(row)
+    way = f" {way}" if way else ""
     if kind in ("point", "moment"):
-        return f"{'couple' if kind == 'moment' else 'point'} {row.get('value', '?')} at {row.get('at', '?')}{lab}{case}"
+        return (f"{'couple' if kind == 'moment' else 'point'} {row.get('value', '?')}{way} "
+                f"at {row.get('at', '?')}{lab}{case}")
     v = row.get("value", row.get("total") and f"total {row['total']}" or "?")
     if isinstance(v, list):
         v = " to ".join(str(x) for x in v)
     if row.get("width"):
         v = f"{v} x {row['width']} wide"
-    return f"{kind} {v} from {row.get('start', 'start')} to {row.get('end', 'end')}{lab}{case}"
+    return f"{kind} {v}{way} from {row.get('start', 'start')} to {row.get('end', 'end')}{lab}{case}"
 
 
 class SpanView(RowsView):
@@ -222,15 +297,18 @@ class SpanView(RowsView):
         yield Field("Length", "beam.length", placeholder="e.g. 12 ft or 10' 6\"")
         yield Choice("Self-weight", ["included", "left out"], key="beam.self_weight")
         yield Field("Members", "beam.members", placeholder="1 (identical members sharing)")
-        yield Static("Supports (a add, x remove, up/down pick):", classes="sub-title")
+        yield Choice("Braced", ["at supports", "all along"], key="beam.braced")
+        yield Field("Braces at", "beam.braces", placeholder="e.g. 4 ft, 8 ft")
+        yield Static("Supports (ctrl+t add, ctrl+x remove, up/down pick):",
+                     classes="sub-title")
         yield RowList(id="support-list", classes="rows")
         with Horizontal(classes="buttons"):
-            yield Button("+ pin", id="add-pin", compact=True)
-            yield Button("+ roller", id="add-roller", compact=True)
-            yield Button("+ fixed", id="add-fixed", compact=True)
-            yield Button("+ spring", id="add-spring", compact=True)
-            yield Button("+ hinge", id="add-hinge", compact=True)
-            yield Button("remove", id="remove-row", compact=True)
+            yield RowButton("+ pin", id="add-pin", compact=True)
+            yield RowButton("+ roller", id="add-roller", compact=True)
+            yield RowButton("+ fixed", id="add-fixed", compact=True)
+            yield RowButton("+ spring", id="add-spring", compact=True)
+            yield RowButton("+ hinge", id="add-hinge", compact=True)
+            yield RowButton("remove", id="remove-row", compact=True)
         with Vertical(classes="row-form"):
             yield Choice("Type", ["fixed", "pin", "roller", "spring", "hinge"], key="support.type")
             yield Field("At", "support.at", placeholder="e.g. 0 ft")
@@ -248,11 +326,20 @@ class SpanView(RowsView):
                 f.set_value(doc.get("beam.length", ""))
             elif f.key == "beam.members":
                 f.set_value(str(doc.get("beam.members", 1)))
+            elif f.key == "beam.braces":
+                b = doc.get("beam.braces", [])
+                f.set_value(", ".join(str(x) for x in b) if isinstance(b, list) else str(b))
+                f.display = doc.get("beam.braced", False) is not True
         sw = doc.get("beam.self_weight", True)
-        self.query_one("Choice", Choice).set("left out" if sw is False else "included")
+        for c in self.query(Choice):
+            if c.key == "beam.self_weight":
+                c.set("left out" if sw is False else "included")
+            elif c.key == "beam.braced":
+                c.set("all along" if doc.get("beam.braced", False) is True else "at supports")
         super().show(session)
         self.show_field_messages(session.evaluation,
-                                 {"beam.length": "beam.length", "beam.members": "beam.members"})
+                                 {"beam.length": "beam.length", "beam.members": "beam.members",
+                                  "beam.braces": "beam.braces"})
 
     def show_form(self, session) -> None:
         i, row = self.selected_row(session)
@@ -283,6 +370,10 @@ class SpanView(RowsView):
         k = kinds.get(field.key)
         if k and field.value:
             return echo(field.value, k, system)
+        if field.key == "beam.braces":
+            return ("compression flange braced against twisting at these points (and at "
+                    "the supports)" if field.value.strip() else
+                    "none between supports: lateral-torsional buckling over each span")
         if field.key == "beam.members" and ev.job is not None and ev.job.members > 1:
             return f"each member carries 1/{ev.job.members} of the loads"
         return ""
@@ -296,13 +387,15 @@ class LoadsView(RowsView):
     def compose(self) -> ComposeResult:
         yield Static("Loads: forces + up, so gravity loads are negative (-300 lbf).",
                      classes="view-title")
+        yield Static("ctrl+t add, ctrl+x remove, up/down pick:", classes="sub-title")
+        yield Static("", id="load-warnings", markup=False, classes="warning")
         yield RowList(id="load-list", classes="rows")
         with Horizontal(classes="buttons"):
-            yield Button("+ point", id="add-point", compact=True)
-            yield Button("+ uniform", id="add-uniform", compact=True)
-            yield Button("+ linear", id="add-linear", compact=True)
-            yield Button("+ couple", id="add-moment", compact=True)
-            yield Button("remove", id="remove-row", compact=True)
+            yield RowButton("+ point", id="add-point", compact=True)
+            yield RowButton("+ uniform", id="add-uniform", compact=True)
+            yield RowButton("+ linear", id="add-linear", compact=True)
+            yield RowButton("+ couple", id="add-moment", compact=True)
+            yield RowButton("remove", id="remove-row", compact=True)
         with Vertical(classes="row-form"):
             yield Choice("Type", ["point", "uniform", "linear", "moment"], key="load.type")
             yield Field("At", "load.at", placeholder="e.g. 4 ft")
@@ -314,9 +407,21 @@ class LoadsView(RowsView):
             yield Field("Total", "load.total", placeholder="e.g. -700 lbf in all")
             yield Field("Label", "load.label", placeholder="what it is")
             yield Choice("Case", ["live", "dead"], key="load.case")
+            yield Choice("Patterned", ["no", "yes"], key="load.patterned")
+            yield Static("Patterned: each span is checked loaded and empty in turn (parts "
+                         "taken off one bay at a time).", classes="hint", markup=False)
 
     def row_text(self, i, row, session) -> str:
         return _load_words(row)
+
+    def show(self, session) -> None:
+        warn = self.query_one("#load-warnings", Static)
+        lines = load_warnings(session)
+        if not session.rows("loads"):
+            lines.append("No loads yet: ctrl+t adds one (then pick its type), or use + below.")
+        warn.update(_text("\n".join(lines)))
+        warn.display = bool(lines)
+        super().show(session)
 
     def show_form(self, session) -> None:
         i, row = self.selected_row(session)
@@ -328,6 +433,9 @@ class LoadsView(RowsView):
                 c.set(kind)
             elif c.key == "load.case":
                 c.set(row.get("case", "live"))
+            elif c.key == "load.patterned":
+                c.set("yes" if row.get("patterned") is True else "no")
+                c.display = kind in ("uniform", "linear", "point")
         v = row.get("value", "")
         v1, v2 = (v + ["", ""])[:2] if isinstance(v, list) else (v, "")
         values = {"load.at": row.get("at", ""), "load.start": row.get("start", ""),
@@ -372,11 +480,9 @@ class LoadsView(RowsView):
             got = echo(field.value, k, system)
             if not got and k == "line_load":  # a load per area (psf, kPa) with a width
                 got = echo(field.value, "area_load", system)
-            if field.key == "load.value" and got and kind == "point":
-                try:
-                    got += " (down)" if units.parse(field.value, "force") < 0 else " (UP)"
-                except Exception:  # noqa: BLE001
-                    pass
+            if field.key in ("load.value", "load.value2") and got:
+                way = direction_words({"type": kind, "value": field.value})
+                got += f"  {way}" if way else ""
             return got
         return ""
 
@@ -622,10 +728,11 @@ class CriteriaView(View):
     def compose(self) -> ComposeResult:
         yield Static("Criteria: what the member is checked against.", classes="view-title")
         yield Field("Deflection", "criteria.deflection", placeholder="L/240 or 0.25 in")
+        yield Choice("Basis", ["code", "first-yield"], key="criteria.basis")
         yield Field("Safety factor", "criteria.safety_factor", placeholder="1.67")
+        yield Static("", id="crit-basis", markup=False)
         yield Static("Deflection \"L/n\" applies per span; a cantilever or overhang is judged "
-                     "on twice its length. The safety factor divides the yield strength "
-                     "in bending and shear.", classes="hint", markup=False)
+                     "on twice its length.", classes="hint", markup=False)
 
     def show(self, session) -> None:
         doc = session.doc
@@ -637,6 +744,9 @@ class CriteriaView(View):
         self.show_field_messages(session.evaluation, {
             "criteria.deflection": "criteria.deflection",
             "criteria.safety_factor": "criteria.safety_factor"})
+        basis = str(doc.get("criteria.basis", "") or "").strip().lower()
+        self.query_one(Choice).set("first-yield" if basis == "first-yield" else "code")
+        self.query_one("#crit-basis", Static).update(_text(basis_words(session.evaluation)))
 
     def reading(self, field, ev) -> str:
         if ev.job is None:
@@ -647,12 +757,31 @@ class CriteriaView(View):
                 return f"= {units.fmt(c.deflection_abs, 'small_length', ev.job.units)} in every span"
             if c.deflection_ratio:
                 return f"= span / {c.deflection_ratio:g}"
-        if field.key == "criteria.safety_factor":
-            m = ev.job.material
-            if m is not None:
-                return (f"allowable bending {units.fmt(m.fy / c.safety_factor, 'stress', ev.job.units)}"
-                        f" = Fy / {c.safety_factor:g}")
         return ""
+
+
+def basis_words(ev) -> str:
+    """How bending is judged, on the same basis as the results: the factor divides the
+    strength the results use (Fy Z for a compact steel section, Fy S at first yield), so
+    the criteria and the results never disagree without saying why."""
+    job = ev.job
+    if job is None or job.material is None:
+        return ""
+    from shopbeam.design.checks import BASIS_WORDS, basis_of
+
+    basis = basis_of(job)
+    sf = job.criteria.safety_factor
+    fy = units.fmt(job.material.fy / sf, "stress", job.units)
+    bend = next((c for c in (ev.result.checks if ev.result is not None else ())
+                 if c.name == "bending"), None)
+    how = f"\n  results use: {bend.formula}" if bend is not None else ""
+    if basis == "first-yield":
+        return (f"Bending on {BASIS_WORDS[basis]}: M <= Fy S / {sf:g}, a stress of "
+                f"Fy / {sf:g} = {fy} at the extreme fibre.{how}")
+    return (f"Bending by {BASIS_WORDS.get(basis, basis)}: the factor above is NOT used "
+            f"(it applies with basis first-yield: Fy S / factor). The code's own factor "
+            f"divides the nominal strength, e.g. Fy Zx / 1.67 for a compact steel section - "
+            f"a moment, not the stress Fy / 1.67.{how}")
 
 
 # ---------------------------------------------------------------------- results
@@ -685,8 +814,9 @@ class ResultsView(View):
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         q = lambda i: self.query_one(i, Static)  # noqa: E731
-        q("#res-problems").update(_text(problems_text(ev)))
-        q("#res-problems").display = bool(ev.errors)
+        top = "\n".join(load_warnings(session) + ([problems_text(ev)] if ev.errors else []))
+        q("#res-problems").update(_text(top))
+        q("#res-problems").display = bool(top)
         r = ev.result
         for i in ("#res-elevation", "#res-verdict", "#res-checks", "#res-reactions",
                   "#res-extremes", "#res-self"):

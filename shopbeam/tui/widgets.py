@@ -29,16 +29,10 @@ _DIGIT_OF = {name: digit for digit, name in OPTION_DIGITS.items()}
 
 
 class FieldInput(Input):
-    """A field's text box that keeps keys in the order they were typed, at any speed.
-
-    Textual inserts a printable key as soon as the box receives it, but runs a key bound to
-    an action (backspace, delete, arrows, tab, ...) only after that key has bubbled up to the
-    app, behind any keys queued meanwhile: typed fast (a burst over SSH or tmux, or keys
-    queued while the screen was busy) "<backspace>x3 -250" came out as "2" or "". Here a
-    bound key runs at once, in its place; a key that arrives after an earlier key of the same
-    burst moved the focus away goes on to whatever has the focus now. Esc-then-digit typed
-    fast (the Option-layer character of that digit) changes view and types nothing.
-    """
+    """A field's text box. Keys come in typing order (the app runs bound keys at once, see
+    `ShopbeamApp.on_event`); a key that still arrives after an earlier key of the same burst
+    moved the focus away goes on to whatever has the focus now. Esc-then-digit typed fast
+    (the Option-layer character of that digit) changes view and types nothing."""
 
     async def _on_key(self, event) -> None:
         if self.screen.focused is not self:
@@ -60,23 +54,19 @@ class FieldInput(Input):
             if vid is not None:
                 await self.screen.run_action(f"view('{vid}')")
             return
-        if event.is_printable:
-            await super()._on_key(event)
-            return
-        if await self._run_binding_now(event.key):
-            event.stop()
-            event.prevent_default()
-            return
         await super()._on_key(event)
 
-    async def _run_binding_now(self, key: str) -> bool:
-        """Run the first non-priority binding of `key` from this box up to the app, now."""
-        for namespace, bindings in self.screen._modal_binding_chain:
-            for binding in bindings.key_to_bindings.get(key, ()):
-                if not binding.priority and await self.app.run_action(binding.action,
-                                                                      namespace):
-                    return True
-        return False
+    def watch_value(self, value: str) -> None:
+        """Typing is noted at once (not when its message arrives), so a save or a view key
+        typed right behind it takes it along (`JobScreen.flush_typing`)."""
+        field = self.parent
+        if isinstance(field, Field) and value != getattr(field, "_quiet", None):
+            field._typed = value
+
+    async def action_submit(self) -> None:
+        if getattr(self.screen, "ENTER_NEXT_FIELD", False):
+            self.screen.focus_next()  # now, so the next key of a burst lands in that field
+        await super().action_submit()
 
 
 class Field(Horizontal):
@@ -106,6 +96,16 @@ class Field(Horizontal):
         def control(self) -> "Field":
             return self.field
 
+    class Left(Message):
+        """The focus left the field (tab, enter, a view key, a click elsewhere)."""
+
+        def __init__(self, field: "Field") -> None:
+            super().__init__()
+            self.field = field
+
+    def on_descendant_blur(self, event) -> None:
+        self.post_message(self.Left(self))
+
     def __init__(self, label: str, key: str, *, placeholder: str = "", value: str = "",
                  suggester=None, id: str | None = None, classes: str | None = None) -> None:
         super().__init__(id=id, classes=classes)
@@ -115,6 +115,7 @@ class Field(Horizontal):
         self._value = value
         self._suggester = suggester
         self._typed = None  # the last text typed here that the screen has not taken yet
+        self._quiet = None  # a value shown from the document (not typed)
         self.row = 0  # in a supports/loads form: the row this field shows
 
     def compose(self) -> ComposeResult:
@@ -179,7 +180,6 @@ class Field(Horizontal):
             self._quiet = None
             return
         self._quiet = None
-        self._typed = event.value
         self.post_message(self.Edited(self, event.value))
 
 
