@@ -321,6 +321,8 @@ value = "-50 lbf/ft"
     r = subprocess.run([sys.executable, "-m", "shopbeam", "materials"], capture_output=True,
                        text=True, timeout=120)
     assert "27992" not in r.stdout and "28,000 ksi" in r.stdout and "1.6e6 psi" in r.stdout
+    row304 = next(line for line in r.stdout.splitlines() if line.startswith("304 "))
+    assert "30 ksi" in row304 and "29.73" not in row304  # ASTM A240: 30 ksi (205 MPa)
 
 
 def test_capacity_of_a_wood_member_is_exact():

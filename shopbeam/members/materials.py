@@ -276,8 +276,9 @@ def cmd_materials(args) -> int:
         e = fmt(m.e, 'stress', system)
         if m.kind == "lumber" and system == "us":
             e = f"{m.e / PSI / 1e6:.3g}e6 psi"
-        elif m.kind == "stainless":
+        elif m.kind == "stainless":  # the published dual figures (ASTM A240), not conversions
             e = "28,000 ksi" if system == "us" else "193 GPa"
+            fy = f"{round(m.fy / KSI):g} ksi" if system == "us" else f"{m.fy / MPA:g} MPa"
         print(f"{m.key:<14}{e:>14}{fy:>12}{welded:>10}"
               f"{fmt(m.density, 'density', system):>16}  {m.name}")
     print("Sources: each material's source is in `--json`. Specified minimums; use the mill "
