@@ -90,7 +90,10 @@ async def shoot(name, job, keys, size, out: Path) -> Path:
 
 def main(argv=None) -> int:
     ap = argparse.ArgumentParser(description=__doc__.splitlines()[0])
-    ap.add_argument("--size", default="100x32", help="terminal size WxH (default 100x32)")
+    ap.add_argument("--size", default="100x32",
+                    help="terminal size WxH (default 100x32); 80x24 pictures go in "
+                         "screenshots/80x24 (python screenshots/make_screenshots.py --size "
+                         "80x24 --out screenshots/80x24)")
     ap.add_argument("--out", default=str(HERE), help="folder for the pictures")
     ap.add_argument("--only", default=None, help="comma-separated shot names")
     args = ap.parse_args(argv)

@@ -217,3 +217,48 @@ def test_tmux_keys_sent_at_full_speed_reach_the_saved_job(tmp_path):
         assert saved.replace('"-250 psf"', '"-100 psf"') == original
     finally:
         subprocess.run([TMUX, "-S", sock, "kill-server"], capture_output=True)
+
+
+# ---------------------------------------------------------------------- sheets to file / printer
+
+@sync
+async def test_rating_label_is_written_beside_the_job_and_printed(tmp_path, monkeypatch):
+    job = tmp_path / "shelf.toml"
+    shutil.copy(PRESETS / "continuous-shelf.toml", job)
+    printed = tmp_path / "printed.txt"
+    printer = tmp_path / "fakelp"
+    printer.write_text(f"#!/bin/sh\ncat > {printed}\n", encoding="utf-8")
+    printer.chmod(0o755)
+    monkeypatch.setenv("SHOPBEAM_PRINT", str(printer))
+    app = make_app(job, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f11")  # the rating view, from anywhere
+        await settle(pilot)
+        await pilot.press("ctrl+r")
+        await settle(pilot)
+        out = tmp_path / "shelf-rating.txt"
+        assert out.is_file()
+        text = out.read_text(encoding="utf-8")
+        assert "RATING LABEL" in text and "Screening check only" in text
+        await pilot.press("ctrl+r")  # never over the first file
+        await settle(pilot)
+        assert (tmp_path / "shelf-rating-2.txt").read_text(encoding="utf-8") == text
+        await pilot.press("ctrl+p")
+        await settle(pilot)
+        assert printed.read_text(encoding="utf-8") == text
+
+
+@sync
+async def test_a_missing_printer_command_says_what_to_do(tmp_path, monkeypatch):
+    monkeypatch.setenv("SHOPBEAM_PRINT", "no-such-printer-command-here")
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f11")
+        await settle(pilot)
+        await pilot.press("ctrl+p")
+        await settle(pilot)
+        notes = [str(n.message) for n in app._notifications]
+        assert any("no-such-printer-command-here" in n and "SHOPBEAM_PRINT" in n
+                   for n in notes), notes

@@ -57,11 +57,87 @@ class _SheetView(View):
 
     def _done(self, text: str, out: str) -> None:
         if getattr(self, "_for", None) == text:
+            self._out = out
             self.query_one(f"#{self.body_id}", Static).update(Text(out))
+
+    file_suffix = "sheet"
+
+    def printable(self) -> str | None:
+        """The text to write or print (None while it is being worked out)."""
+        if getattr(self, "_for", None) is None or getattr(self, "_out", None) is None:
+            return None
+        return self._out
+
+    def _not_ready(self) -> bool:
+        if self.printable() is None:
+            self.app.notify("Nothing to write yet: wait for the sheet (or fix the job's "
+                            "problems first).", severity="warning")
+            return True
+        return False
+
+    def write_file(self) -> None:
+        """Write the sheet beside the job (or in the user library for a job not saved yet,
+        or a read-only preset); never over an existing file; say the full path."""
+        if self._not_ready():
+            return
+        from shopbeam.jobs import library, storage
+
+        session = self.screen.session
+        if session.path is not None and not session.read_only:
+            folder, stem = session.path.parent, session.path.stem
+        else:
+            folder = library.user_dir()
+            stem = session.name or storage.suggest_name(str(session.doc.get("title") or "job"))
+        path = folder / f"{stem}-{self.file_suffix}.txt"
+        n = 2
+        while path.exists():
+            path = folder / f"{stem}-{self.file_suffix}-{n}.txt"
+            n += 1
+        try:
+            folder.mkdir(parents=True, exist_ok=True)
+            storage.atomic_write(path, self.printable())
+        except OSError as exc:
+            self.app.notify(f"not written: {exc}", severity="error", timeout=10)
+            return
+        self.app.notify(f"Written to {path.resolve()}", timeout=10)
+
+    def print_sheet(self) -> None:
+        """Send the sheet to the printer command (SHOPBEAM_PRINT, default "lp")."""
+        if self._not_ready():
+            return
+        import os
+        import shlex
+        import shutil
+
+        command = shlex.split(os.environ.get("SHOPBEAM_PRINT", "lp"))
+        if not command or shutil.which(command[0]) is None:
+            self.app.notify(f"No printer command {command[0] if command else ''!r} on this "
+                            "machine: set SHOPBEAM_PRINT (e.g. \"lpr -P shop\"), or write the "
+                            "sheet to a file with ctrl+r and print that.", severity="error",
+                            timeout=12)
+            return
+        self._print(command, self.printable())
+
+    @work(thread=True, group="print", exit_on_error=False)
+    def _print(self, command: list[str], text: str) -> None:
+        import subprocess
+
+        try:
+            r = subprocess.run(command, input=text, text=True, capture_output=True,
+                               timeout=60)
+            msg = (f"Sent to {' '.join(command)}" if r.returncode == 0 else
+                   f"{' '.join(command)} failed ({r.returncode}): "
+                   f"{(r.stderr or r.stdout).strip()[:200]}")
+            sev = "information" if r.returncode == 0 else "error"
+        except (OSError, subprocess.SubprocessError) as exc:
+            msg, sev = f"{' '.join(command)} failed: {exc}", "error"
+        self.app.call_from_thread(self.app.notify, msg, severity=sev, timeout=10)
 
 
 class CalcView(_SheetView):
     """The exact calc sheet (sympy)."""
+
+    file_suffix = "calc"
 
     title = "Calc sheet"
     body_id = "calc-body"
@@ -79,6 +155,7 @@ class RatingView(_SheetView):
 
     title = "Rating"
     body_id = "rating-body"
+    file_suffix = "rating"
     busy = "Working out the capacity..."
 
     def produce(self, job, result) -> str:
@@ -100,7 +177,8 @@ def rating_text(job, width: int = 40, date=None) -> str:
         from shopbeam.output import label as labels
 
         label = labels.label_text(labels.rating(res, analyze(job).unchecked, date=date), width)
-        lines += ["RATING LABEL (to print: shopbeam rating JOB.toml > label.txt)", label.rstrip()]
+        lines += ["RATING LABEL (ctrl+r writes this view to a file, ctrl+p prints it)",
+                  label.rstrip()]
     except Exception as exc:  # noqa: BLE001
         lines.append(f"The rating label could not be made: {type(exc).__name__}: {exc}")
     return "\n".join(lines)

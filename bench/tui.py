@@ -1,0 +1,202 @@
+"""Text UI measures, driven with Pilot: the first screen, and a typical edit until the answer
+and the plots are on screen again.
+
+    python bench/tui.py            # prints a table, writes bench/results/tui.json
+    python bench/tui.py --quick    # fewer repeats
+
+- first screen (cold): a fresh interpreter, from its start until the job screen of
+  presets/demo.toml is mounted and drawn (headless, 80x24): what a user waits for.
+- first screen (warm): the same inside one process (imports done), make_app to drawn.
+- per key on the UI thread: one edit of the length applied and the span view redrawn,
+  without the solve (the solve runs in a worker): what a typed key costs the screen.
+- edit -> answer: a key typed into the length ("15 ft" to "150 ft") until the answer is installed and
+  the screen redrawn (includes the 30 ms debounce of the worker).
+- results / plots redraw: the results view and the plots view drawn for the new answer.
+- solve (worker): the job read and solved, as the worker does it.
+Jobs: the demo, the monorail trolley (moving load), and an 8-span shelf (patterned).
+"""
+
+from __future__ import annotations
+
+import argparse
+import asyncio
+import json
+import os
+import statistics
+import subprocess
+import sys
+import tempfile
+import time
+from pathlib import Path
+
+HERE = Path(__file__).resolve().parent
+ROOT = HERE.parent
+sys.path.insert(0, str(ROOT))
+
+SHELF8 = """schema = 1
+title = "8-span shelf rail, patterned parts load"
+units = "us"
+[beam]
+length = "40 ft"
+section = "HSS3x2x1/8"
+material = "A500-C"
+{supports}
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "40 ft"
+value = "-60 lbf/ft"
+patterned = true
+[criteria]
+deflection = "L/240"
+"""
+
+
+def _shelf8(folder: Path) -> Path:
+    sup = "\n".join(f'[[supports]]\nat = "{5 * i} ft"\ntype = "{"pin" if i == 0 else "roller"}"'
+                    for i in range(9))
+    p = folder / "shelf8.toml"
+    p.write_text(SHELF8.format(supports=sup), encoding="utf-8")
+    return p
+
+
+COLD = r"""
+import time, asyncio, sys
+t0 = time.perf_counter()
+from shopbeam.tui.app import make_app
+async def main():
+    app = make_app(sys.argv[1], cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await pilot.pause()
+        print(time.perf_counter() - t0)
+asyncio.run(main())
+"""
+
+
+def cold_first_screen(job: Path, runs: int) -> list[float]:
+    out = []
+    for _ in range(runs):
+        start = time.perf_counter()
+        r = subprocess.run([sys.executable, "-c", COLD, str(job)], capture_output=True,
+                           text=True, cwd=ROOT, check=True)
+        total = time.perf_counter() - start  # interpreter start included
+        inside = float(r.stdout.strip().splitlines()[-1])
+        out.append((total, inside))
+    return out
+
+
+async def warm_and_edit(job: Path, runs: int) -> dict:
+    from textual._xterm_parser import XTermParser
+
+    from shopbeam.tui import session as session_mod
+    from shopbeam.tui.app import make_app
+    from shopbeam.tui.widgets import Field
+
+    res: dict = {"first_warm": [], "key_ui": [], "edit_answer": [], "results_draw": [],
+                 "plots_draw": [], "solve": []}
+    for _ in range(max(1, runs // 3)):
+        t = time.perf_counter()
+        app = make_app(job, cursor_blink=False)
+        async with app.run_test(size=(80, 24)) as pilot:
+            await pilot.pause()
+            res["first_warm"].append(time.perf_counter() - t)
+    app = make_app(job, cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await pilot.pause()
+        js = app.job_screen
+        await pilot.press("f3")
+        await pilot.pause()
+        f = next(f for f in js.query_one("#span").query(Field) if f.key == "beam.length")
+        f.input.focus()
+        await pilot.pause()
+        s = js.session
+        base = f.input.value  # e.g. "15 ft": a "0" typed after the digits gives "150 ft"
+        digits = len(base) - len(base.lstrip("0123456789."))
+        longer = base[:digits] + "0" + base[digits:]
+        for i in range(runs):
+            # the UI thread's share of one key: the edit applied, the view redrawn
+            t = time.perf_counter()
+            js.apply_edit("beam.length", longer if i % 2 == 0 else base, f.row)
+            res["key_ui"].append(time.perf_counter() - t)
+            await app.workers.wait_for_complete()
+            await pilot.pause()
+            f.input.value = base
+            f.forget_typing()
+            js.apply_edit("beam.length", base, f.row)
+            await app.workers.wait_for_complete()
+            await pilot.pause()
+            # a key typed ("0" after the digits, then backspace): until its answer is shown
+            f.input.cursor_position = digits
+            before = s.version
+            t = time.perf_counter()
+            for e in XTermParser().feed("0"):
+                app._driver.send_message(e)
+            while time.perf_counter() - t < 10:
+                await asyncio.sleep(0.001)
+                if s.version > before and not s.stale:
+                    break
+            res["edit_answer"].append(time.perf_counter() - t)
+            await app.workers.wait_for_complete()
+            await pilot.pause()
+            f.input.value = base
+            await app.workers.wait_for_complete()
+            await pilot.pause()
+        assert s.evaluation.ok, s.evaluation.problems
+        for name, key in (("results_draw", "f8"), ("plots_draw", "f9")):
+            await pilot.press(key)
+            await pilot.pause()
+            for _ in range(max(3, runs // 2)):
+                t = time.perf_counter()
+                js.refresh_all()
+                res[name].append(time.perf_counter() - t)
+        for _ in range(runs):
+            v, data, text, name = s.snapshot()
+            t = time.perf_counter()
+            session_mod.evaluate_data(data, text, name)
+            res["solve"].append(time.perf_counter() - t)
+    return res
+
+
+def ms(xs) -> str:
+    xs = sorted(xs)
+    med = statistics.median(xs) * 1000
+    return f"{med:.1f} ms (range {xs[0] * 1000:.1f}-{xs[-1] * 1000:.1f})"
+
+
+def main() -> None:
+    ap = argparse.ArgumentParser()
+    ap.add_argument("--quick", action="store_true")
+    args = ap.parse_args()
+    runs = 6 if args.quick else 15
+    tmp = Path(tempfile.mkdtemp())
+    os.environ["SHOPBEAM_USER_DIR"] = str(tmp / "user")
+    jobs = {"demo": ROOT / "presets" / "demo.toml",
+            "trolley": ROOT / "presets" / "monorail-trolley.toml",
+            "8-span shelf": _shelf8(tmp)}
+    table = []
+    cold = cold_first_screen(jobs["demo"], 3 if args.quick else 5)
+    table.append(("first screen, cold process (demo, 80x24)",
+                  ms([c[0] for c in cold]), "< 1 s"))
+    table.append(("  of which after interpreter start",
+                  ms([c[1] for c in cold]), ""))
+    out = {"cold_total": [c[0] for c in cold], "cold_inside": [c[1] for c in cold]}
+    for name, job in jobs.items():
+        r = asyncio.run(warm_and_edit(job, runs))
+        out[name] = r
+        table.append((f"{name}: first screen, warm", ms(r["first_warm"]), ""))
+        table.append((f"{name}: per key on the UI thread (no solve)", ms(r["key_ui"]), ""))
+        table.append((f"{name}: solve in the worker", ms(r["solve"]), ""))
+        table.append((f"{name}: key -> new answer on screen", ms(r["edit_answer"]),
+                      "< 50 ms"))
+        table.append((f"{name}: results view redraw", ms(r["results_draw"]), ""))
+        table.append((f"{name}: plots view redraw", ms(r["plots_draw"]), ""))
+        print(*table[-6:], sep="\n", flush=True)
+    w = max(len(t[0]) for t in table)
+    for name, fig, target in table:
+        print(f"{name:<{w}}  {fig:<32} {target}")
+    (HERE / "results").mkdir(exist_ok=True)
+    (HERE / "results" / "tui.json").write_text(json.dumps(out, indent=1), encoding="utf-8")
+
+
+if __name__ == "__main__":
+    main()
