@@ -294,19 +294,6 @@ def _leg_buckling(p: AngleProps, fy: float, e: float, sc: float):
     return (0.71 * e / lam**2 * sc, f"F10-7/F10-8 leg local buckling (slender, b/t {lam:.3g})")
 
 
-def angle_deflection_factors(p: AngleProps) -> tuple[float, float]:
-    """(vertical, sideways) deflection of an unrestrained angle per unit geometric-axis
-    deflection (the same moment diagram; uniform member)."""
-    c, s = math.cos(p.alpha), math.sin(p.alpha)
-    v = p.ix * (c * c / p.iw + s * s / p.iz)
-    h = p.ix * s * c * abs(1 / p.iz - 1 / p.iw)
-    return v, h
-
-
-def omega() -> float:
-    return OMEGA_B
-
-
 # ------------------------------------------------------------------ the checks of one state
 def applies(sec, basis: str, material_kind: str) -> str:
     """"F9", "F10" or "" for this section on this basis."""
