@@ -143,14 +143,18 @@ def test_moving_envelope_matches_a_fine_resolve(b, more, s):
             # local checks (J10 at supports and wheels): their limit depends on where the
             # force acts, so compare the worst ratio
             ref = bf[c.name][2]
-            assert ref * (1 - 1e-12) <= c.ratio <= ref * (1 + 3e-3)
+            # the lateral trolley force check (H1-1b, a sum of two moment ratios) is taken at
+            # the positions found for the vertical response; its own worst position can lie
+            # between them, within 2e-4 of its ratio here (stated in the report)
+            low = 2e-4 if c.name == "lateral trolley force" else 1e-12
+            assert ref * (1 - low) <= c.ratio <= ref * (1 + 3e-3)
             continue
         ref = bf[c.name][0]
         assert c.demand >= ref * (1 - 1e-12)
         assert c.demand <= ref * (1 + 3e-3)
     from dataclasses import replace
 
-    from shopbeam.design.checks import checks_for, strengths
+    from shopbeam.design.checks import checks_for, impact_of, strengths
     from shopbeam.engine.model import Load
 
     ss = state_set(job)
@@ -161,12 +165,14 @@ def test_moving_envelope_matches_a_fine_resolve(b, more, s):
         p0 = ev.worst[c.name]["position"]
         best = 0.0
         for p in np.clip(np.linspace(p0 - 0.01, p0 + 0.01, 81), lo, hi):
-            wheels = tuple(Load("point", at=p + o, value=d + 1.15 * f)
+            wheels = tuple(Load("point", at=p + o, value=d + (1 + impact_of(job)) * f,
+                                key=mv.key)
                            for o, f, d in zip(mv.offsets, mv.live, mv.dead))
             sol = solve(replace(ss.beam, loads=tuple(ss.static_loads(1.0, ())) + wheels))
             best = max(best, next(x for x in checks_for(job, sol, st, cb_one=True)
                                   if x.name == c.name).demand)
-        assert c.demand >= best * (1 - 1e-12)
+        low = 2e-4 if c.name == "lateral trolley force" else 1e-12
+        assert c.demand >= best * (1 - low)
         assert c.demand <= best * (1 + 2e-4)
 
 

@@ -138,6 +138,18 @@ def unchecked_for(job: Job) -> list[Unchecked]:
         aluminum_unchecked(job)
 
 
+def _lifting_json(job) -> dict | None:
+    from shopbeam.design.checks import impact_of
+    from shopbeam.design.lifting import profile_of
+
+    p = profile_of(job)
+    if p is None:
+        return None
+    return {"profile": p.name, "picked_from_tags": p.guessed, "impact": impact_of(job),
+            "profile_impact": p.impact, "lateral": p.lateral, "longitudinal": p.longitudinal,
+            "design_factor": p.nd, "deflection_ratio": p.deflection, "words": p.words}
+
+
 def to_json(result: Result) -> dict:
     """The contract's JSON (SI units throughout)."""
     from shopbeam.design.local import fixed_end_moments, hinge_shears
@@ -158,6 +170,7 @@ def to_json(result: Result) -> dict:
         "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),
         "unchecked": [u.as_dict() for u in result.unchecked],
+        "lifting": _lifting_json(job),
         "hinges": [{"at": h["at"], "shear": h["shear"]} for h in hinge_shears(job, sol)],
         "fixed_ends": [{"at": f["at"], "moment": f["moment"], "shear": f["force"]}
                        for f in fixed_end_moments(job, sol)],

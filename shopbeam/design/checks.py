@@ -33,6 +33,7 @@ import math
 from dataclasses import dataclass, field, replace
 
 from shopbeam.engine.solver import Solution, segments
+from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.jobs.rules import (DEFAULT_IMPACT, DEFLECTION_PRESETS,  # noqa: F401 (re-exported)
                                  LIFTING_DEFAULT_RATIO, Basis)
 from shopbeam.units import fmt
@@ -129,9 +130,12 @@ BASIS_WORDS = {
 
 
 def impact_of(job) -> float:
-    """Impact allowance on live loads: as written, else 15 % for lifting jobs, else 0."""
+    """Impact allowance on live loads: as written, else the lifting profile's, else 0."""
     if job.criteria.impact is None:
-        return DEFAULT_IMPACT if job.lifting else 0.0
+        from shopbeam.design.lifting import profile_of
+
+        prof = profile_of(job)
+        return prof.impact if prof else 0.0
     return job.criteria.impact
 
 
@@ -141,9 +145,12 @@ def deflection_rule(job) -> tuple[float | None, float | None, str]:
     if c.deflection_preset:
         n, why = DEFLECTION_PRESETS[c.deflection_preset]
         return n, None, f"L/{n:g}: {why}"
-    if not c.deflection_given and job.lifting:
-        return LIFTING_DEFAULT_RATIO, None, (f"L/{LIFTING_DEFAULT_RATIO:g}: default for lifting "
-                                              "devices (common practice)")
+    if not c.deflection_given and (job.lifting or getattr(c, "lifting", "")):
+        from shopbeam.design.lifting import profile_of
+
+        prof = profile_of(job)
+        src = LIFTING_PROFILES[prof.name]["deflection_source"]
+        return prof.deflection, None, f"L/{prof.deflection:g}: {src} ({prof.name})"
     if c.deflection_abs is not None:
         return None, c.deflection_abs, c.deflection
     return c.deflection_ratio or 240.0, None, c.deflection
@@ -731,9 +738,12 @@ class Strengths:
 
 def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
     """The limit states this member calls for that the checks do not cover."""
+    from shopbeam.design.lifting import lifting_unchecked
+
     braced = brace_points(job)[0]
     out = [u for u in flex.unchecked
            if not (braced and u.name == "lateral-torsional buckling")]
+    out += lifting_unchecked(job, sec)
     return tuple(out)
 
 
@@ -764,6 +774,7 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         l1, why = fl.ltb1(0.0 if braced else bb - a, case)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
+    fl, sh = _design_factor(job, sec, fl, sh)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
                      member_unchecked(job, sec, fl), live_ratio=live_deflection_ratio(job))
 
@@ -780,6 +791,24 @@ def _wood_load_case(job, a: float, b: float, free: bool) -> str:
     if not free and not all(ends_held):
         return "any"  # a length ending at a brace: Table 3.3.3 footnote (general rows)
     return load_case(job.member_loads(), a, b, free, free and b >= job.length * (1 - 1e-9))
+
+
+def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
+    """A below-the-hook beam: ASME BTH-1 design factor Nd in place of the AISC Omegas
+    (3-2.3.1: Fb = 1.10 Fy / Nd for compact sections, so Mn is capped at 1.10 Fy S; 3-2.2:
+    Fv = Fy / (Nd sqrt 3), i.e. Omega_v = 0.6 sqrt(3) Nd on Vn = 0.6 Fy Aw; from memory)."""
+    from shopbeam.design.lifting import profile_of
+
+    prof = profile_of(job)
+    if prof is None or prof.nd is None or fl.stress_s is not None or fl.omega != OMEGA_B:
+        return fl, sh
+    cap = min(fl.cap, 1.10 * job.material.fy * min(sec.sx_top, sec.sx_bot))
+    text = fl.cap_text + (" capped at 1.10 Fy S (ASME BTH-1 3-2.3.1)" if cap < fl.cap else "")
+    fl = replace(fl, cap=cap, omega=prof.nd, cap_text=text + f"; ASME BTH-1 design factor Nd "
+                 f"{prof.nd:g} in place of Omega_b")
+    sh = replace(sh, omega=0.6 * math.sqrt(3) * prof.nd,
+                 text=sh.text + f"; ASME BTH-1 Fv = Fy / (Nd sqrt 3), Nd {prof.nd:g}")
+    return fl, sh
 
 
 def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
@@ -900,6 +929,17 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     if fl.wood is not None:
         out += bearing_checks(job, sol, fl.wood)
         out += dead_load_checks(job, sol, st)
+    if job.lifting or getattr(job.criteria, "lifting", ""):
+        from shopbeam.design import lifting
+
+        wc = lifting.wheel_check(job, sol, sec, job.material)
+        if wc is not None:
+            out.append(wc)
+        if bend.unit == "N*m":
+            lc = lifting.lateral_check(job, sol, sec, job.material, lifting.profile_of(job),
+                                       impact_of(job), bend.limit)
+            if lc is not None:
+                out.append(lc)
     return out
 
 
@@ -1036,9 +1076,15 @@ def check_notes(job) -> list[str]:
         out.append(f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}"
                    + ("; no rating is posted" if u.blocks_rating else ""))
     imp = impact_of(job)
+    from shopbeam.design.lifting import lifting_notes, profile_of
+
+    prof = profile_of(job)
     if imp:
-        out.append(f"Impact allowance {imp:.0%} on the live loads (common practice for slow "
-                   "powered hoists) is included in the checks.")
+        why = ("as written in [criteria] impact" if job.criteria.impact is not None else
+               f"the {prof.name} profile" if prof else "")
+        out.append(f"Impact allowance {imp:.0%} on the live loads ({why}) is included in the "
+                   "checks.")
+    out += lifting_notes(job, prof)
     if job.lifting:
         out.append("Enter the hoist and trolley weight as its own load (case = \"dead\", or "
                    "dead = [...] on a [[moving]] wheel set) so it is not rated as payload.")

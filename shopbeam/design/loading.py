@@ -520,7 +520,7 @@ def envelope_bruteforce(job, k: float = 1.0, n: int = 2001):
     p_lo, p_hi = mv.p_range
     static = ss.static_loads(k, ())
     for p in np.linspace(p_lo, p_hi, n):
-        wheels = [Load("point", at=p + s, value=d + kk * f)
+        wheels = [Load("point", at=p + s, value=d + kk * f, key=mv.key)
                   for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
         sol = solve(replace(ss.beam, loads=tuple(static) + tuple(wheels)))
         for c in checks_for(job, sol, st, cb_one=True):

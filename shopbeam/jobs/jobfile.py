@@ -26,7 +26,7 @@ from shopbeam.cautions import is_lifting, normal_tag
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
-                                 LIFTING_DEFAULT_RATIO, Basis)
+                                 LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, Basis)
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.sections import resolve_section
 
@@ -47,8 +47,9 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned", "uplift", "bearing", "flange"},
     "criteria": {"deflection", "safety_factor", "basis", "impact", "duration",
-                 "live_deflection"},
-    "moving": {"label", "loads", "dead", "spacing", "travel", "case"},
+                 "live_deflection", "lifting", "category"},
+    "moving": {"label", "loads", "dead", "spacing", "travel", "case", "wheels_per_axle",
+               "wheel_edge"},
     "project": set(),  # filled from PROJECT_KEYS below
 }
 
@@ -71,6 +72,8 @@ class Criteria:
     deflection_preset: str = ""  # the preset named ("rack", "hoist", ...), lower case
     deflection_given: bool = False  # the file gives a deflection limit
     live_deflection_ratio: float | None = None  # n of L/n under live load alone, or None
+    lifting: str = ""  # lifting profile named (shopbeam.jobs.rules.LIFTING_PROFILES), lower case
+    category: str = ""  # ASME BTH-1 design category "A" or "B" (below-the-hook beams)
 
 
 @dataclass(frozen=True)
@@ -83,6 +86,8 @@ class WheelSet:
     offsets: tuple[float, ...]  # m from the first wheel (from spacing = [...])
     travel: tuple[float, float]  # m, the range the whole set stays within
     key: str = "moving[0]"
+    wheels_per_axle: int = 2  # each load is an axle; a monorail trolley runs a wheel each side
+    wheel_edge: float | None = None  # m, flange tip to wheel contact; None: the stated default
 
 
 @dataclass(frozen=True)
@@ -349,7 +354,38 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
         else:
             r.error(f"live_deflection must be a limit like \"L/360\" (checked under the live "
                     f"loads alone), found {ld!r}", "criteria.live_deflection")
-    return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given, live)
+    lift, cat = "", ""
+    if "lifting" in crit:
+        raw = crit["lifting"]
+        lift = raw.strip().lower() if isinstance(raw, str) else ""
+        if lift not in LIFTING_PROFILES:
+            r.error(f"lifting {raw!r} is not a lifting profile; use one of "
+                    + ", ".join(f'"{n}"' for n in LIFTING_PROFILES), "criteria.lifting")
+            lift = ""
+    if "category" in crit:
+        raw = crit["category"]
+        cat = raw.strip().upper() if isinstance(raw, str) else ""
+        if cat not in ("A", "B"):
+            r.error(f"category {raw!r}: the ASME BTH-1 design category is \"A\" or \"B\"",
+                    "criteria.category")
+            cat = ""
+        elif lift != "below-the-hook":
+            r.warn("category is the ASME BTH-1 design category of a below-the-hook lifting "
+                   "beam; it is used only with lifting = \"below-the-hook\"",
+                   "criteria.category")
+    if lift and not given:
+        ratio = LIFTING_PROFILES[lift]["deflection"]
+    if not lift and lifting and impact is not None and impact < 0.25:
+        r.warn(f"impact {impact:.0%} is below the 25% of a powered monorail or jib (ASCE 7-16 "
+               "4.9.3), the profile tags = [\"lifting\"] picks; name the device with "
+               "[criteria] lifting = \"hand-geared-monorail\" (0%) if that is what it is",
+               "criteria.impact")
+    if lift and impact is not None and impact < LIFTING_PROFILES[lift]["impact"]:
+        r.warn(f"impact {impact:.0%} is below the {LIFTING_PROFILES[lift]['impact']:.0%} of the "
+               f"{lift} profile ({LIFTING_PROFILES[lift]['impact_source']}); the checks use "
+               "the value written", "criteria.impact")
+    return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given,
+                    live_deflection_ratio=live, lifting=lift, category=cat)
 
 
 def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | None, str]:
@@ -456,8 +492,16 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
     if travel[1] - travel[0] < offsets[-1] - 1e-12:
         r.error("the wheel set is longer than its travel", f"{key}.travel")
         return ()
+    per_axle = t.get("wheels_per_axle", 2)
+    if isinstance(per_axle, bool) or per_axle not in (1, 2, 4):
+        r.error("wheels_per_axle is 1, 2 or 4 (each load is an axle; a monorail trolley runs a "
+                "wheel on each side of the web: 2)", f"{key}.wheels_per_axle")
+        per_axle = 2
+    edge = None
+    if "wheel_edge" in t:
+        edge = r.parse(t, "wheel_edge", "length", f"{key}.wheel_edge", nonnegative=True)
     return (WheelSet(label, live, dead or tuple(0.0 for _ in live), tuple(offsets), travel,
-                     key),)
+                     key, int(per_axle), edge),)
 
 
 def _position(r: _Reader, table: dict, name: str, key: str, length: float | None,

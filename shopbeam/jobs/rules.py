@@ -35,3 +35,39 @@ LIVE_DEFLECTION_PRESETS: dict[str, float] = {"floor": 360.0}
 DEFAULT_DEFLECTION_RATIO = 240.0
 LIFTING_DEFAULT_RATIO = 450.0  # tighter default for jobs tagged lifting (common practice)
 DEFAULT_IMPACT = 0.15  # slow powered hoists (common practice)
+
+# Lifting profiles ([criteria] lifting = "..."): what the standard sets for each kind of
+# lifting device. Impact on the live load, lateral force (fraction of rated load + hoist +
+# trolley, at the wheels), longitudinal force (fraction of the wheel loads), the design factor
+# (None: AISC 360 ASD Omega) and the deflection L/n. Values from memory, as named.
+_ASCE = "ASCE 7-16 4.9.3"
+LIFTING_PROFILES: dict[str, dict] = {
+    "powered-monorail": {
+        "impact": 0.25, "impact_source": f"{_ASCE}: powered monorail cranes 25 %",
+        "lateral": 0.20, "lateral_source": "ASCE 7-16 4.9.4: 20 % of rated load + hoist + "
+        "trolley for electrically powered trolleys",
+        "longitudinal": 0.10, "longitudinal_source": "ASCE 7-16 4.9.5: 10 % of the wheel loads",
+        "nd": None, "deflection": 450.0,
+        "deflection_source": "L/450 for monorails (common practice)"},
+    "hand-geared-monorail": {
+        "impact": 0.0, "impact_source": f"{_ASCE}: hand-geared bridge, trolley and hoist 0 %",
+        "lateral": 0.0, "lateral_source": "ASCE 7-16 4.9.4 applies to powered trolleys only",
+        "longitudinal": 0.10, "longitudinal_source": "ASCE 7-16 4.9.5: 10 % of the wheel loads",
+        "nd": None, "deflection": 450.0,
+        "deflection_source": "L/450 for monorails (common practice)"},
+    "jib-boom": {
+        "impact": 0.25, "impact_source": f"{_ASCE}: powered cranes 25 % (jibs taken as powered "
+        "monorail cranes, common practice)",
+        "lateral": 0.20, "lateral_source": "ASCE 7-16 4.9.4: 20 % for a powered trolley "
+        "(taken for jibs, common practice)",
+        "longitudinal": 0.10, "longitudinal_source": "ASCE 7-16 4.9.5: 10 % of the wheel loads",
+        "nd": None, "deflection": 225.0,
+        "deflection_source": "L/225 on twice the reach for jib booms (common practice)"},
+    "below-the-hook": {
+        "impact": 0.0, "impact_source": "ASME BTH-1: the design factor Nd covers impact "
+        "(Category A up to 50 % of the rated load, from memory)",
+        "lateral": 0.0, "lateral_source": "none (hangs from the hook)",
+        "longitudinal": 0.0, "longitudinal_source": "none",
+        "nd": {"A": 2.0, "B": 3.0}, "deflection": 450.0,
+        "deflection_source": "L/450 (common practice; ASME BTH-1 sets no limit)"},
+}

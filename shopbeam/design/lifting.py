@@ -1,0 +1,298 @@
+"""Lifting devices: the profile a job names (impact, lateral and longitudinal forces, design
+factor, deflection), bottom-flange local bending under trolley wheels, and the lateral
+trolley force on the runway.
+
+Profiles (`shopbeam.jobs.rules.LIFTING_PROFILES`) come from ``[criteria] lifting``. A job
+only tagged ``lifting`` gets the most demanding profile that fits: ``jib-boom`` when the
+member has a free end, else ``powered-monorail`` (25 % impact, 20 % lateral, 10 %
+longitudinal); a below-the-hook beam is never guessed (its design factor must be named).
+
+Wheel loads on the bottom flange of an I-shape (W, S, HP, M): the local flange stresses of
+CMAA 74 (2004) 70-3.3.2.2 / AISC Design Guide 7 (2nd ed.) 17, the same coefficients as
+EN 1993-6 5.7.2 Table 5.2, all from memory. With P the load of one wheel, tf the flange
+thickness at the wheel, lambda = 2 a / (bf - tw), a the distance from the flange tip to the
+wheel contact:
+
+    sigma_x,i = Cx_i P / tf^2 (along the beam),  sigma_y,i = Cy_i P / tf^2 (across)
+
+at point 0 (flange-to-web junction), 1 (under the wheel) and 2 (the flange tip), tension on
+the flange's underside positive. Parallel-flange (W) beams:
+    Cx0 = 0.050 - 0.580 lambda + 0.148 e^(3.015 lambda)
+    Cx1 = 2.230 - 1.490 lambda + 1.390 e^(-18.33 lambda)
+    Cx2 = 0.730 - 1.580 lambda + 2.910 e^(-6.000 lambda)
+    Cy0 = -2.110 + 1.977 lambda + 0.0076 e^(6.530 lambda)
+    Cy1 = 10.108 - 7.408 lambda - 10.108 e^(-1.364 lambda),  Cy2 = 0
+Tapered-flange (S) beams:
+    Cx0 = -0.981 - 1.479 lambda + 1.120 e^(1.322 lambda)
+    Cx1 = 1.810 - 1.150 lambda + 1.060 e^(-7.700 lambda)
+    Cx2 = 1.990 - 2.810 lambda + 0.840 e^(-4.690 lambda)
+    Cy0 = -1.096 + 1.095 lambda + 0.192 e^(-6.000 lambda)
+    Cy1 = 3.965 - 4.835 lambda - 3.965 e^(-2.675 lambda),  Cy2 = 0
+The longitudinal local stress adds to the global bending stress of the bottom fibre at the
+wheel; the two directions combine by von Mises, sqrt(sx^2 + sy^2 - sx sy), against
+Fy / Omega (Omega 1.67, i.e. 0.60 Fy, the allowable tension of AISC ASD).
+
+Lateral trolley force: the bottom flange alone carries it as a beam on the same supports
+(the flange-as-beam approach of AISC Design Guide 7 for runway girders; the torsion of a
+force at the flange is carried by this flange, so it covers the twist), combined with
+strong-axis bending by AISC 360-16 H1-1b (Pr = 0): Mrx / Mcx + Mry / Mcy <= 1.0, Mcy of the
+flange by F6 (flange Zf = tf bf^2 / 4).
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, replace
+
+from shopbeam.jobs.rules import LIFTING_PROFILES
+from shopbeam.units import fmt
+
+DEFAULT_WHEEL_EDGE = 0.25 * 0.0254  # m: wheel contact 1/4 in from the flange tip (stated)
+OMEGA_WHEEL = 1.67  # Fy / 1.67 = 0.60 Fy (AISC 360 ASD allowable tension)
+
+
+@dataclass(frozen=True)
+class Profile:
+    name: str
+    impact: float
+    lateral: float
+    longitudinal: float
+    nd: float | None  # ASME BTH-1 design factor, None: AISC ASD
+    deflection: float
+    words: str  # one line naming every value and its source
+    guessed: bool = False  # picked from tags = ["lifting"], not named
+
+
+def profile_of(job) -> Profile | None:
+    """The job's lifting profile (None for a job that is not a lifting device)."""
+    name = getattr(job.criteria, "lifting", "") or ""
+    guessed = False
+    if not name:
+        if not job.lifting:
+            return None
+        fixed = [s for s in job.supports if s.takes_force]
+        free_end = _has_free_end(job)
+        name = "jib-boom" if free_end and fixed else "powered-monorail"
+        guessed = True
+    p = LIFTING_PROFILES[name]
+    nd = None
+    cat = ""
+    if p["nd"]:
+        cat = getattr(job.criteria, "category", "") or "B"
+        nd = p["nd"][cat]
+    words = (f"lifting profile {name}" + (" (picked for tags = [\"lifting\"]: the most "
+                                          "demanding that fits)" if guessed else "")
+             + f": impact {p['impact']:.0%} ({p['impact_source']}); lateral "
+             f"{p['lateral']:.0%} ({p['lateral_source']}); longitudinal {p['longitudinal']:.0%} "
+             f"({p['longitudinal_source']}); "
+             + (f"design factor Nd {nd:g}, ASME BTH-1 Category {cat} (3-1.3, from memory)"
+                + (" (category not given: B, the stricter)"
+                   if not getattr(job.criteria, "category", "") else "")
+                if nd else "AISC 360-16 ASD safety factors")
+             + f"; deflection {p['deflection_source']}")
+    return Profile(name, p["impact"], p["lateral"], p["longitudinal"], nd, p["deflection"],
+                   words, guessed)
+
+
+def _has_free_end(job) -> bool:
+    tol = 1e-9 * job.length
+    held = [s.at for s in job.supports if s.takes_force]
+    return not held or min(held) > tol or max(held) < job.length - tol
+
+
+# ------------------------------------------------------------------ wheel loads on a flange
+def flange_coefficients(lam: float, tapered: bool) -> dict[str, float]:
+    """Cx0, Cx1, Cx2, Cy0, Cy1, Cy2 (see the module doc; CMAA 74 / EN 1993-6 Table 5.2)."""
+    e = math.exp
+    if tapered:
+        return {"cx0": -0.981 - 1.479 * lam + 1.120 * e(1.322 * lam),
+                "cx1": 1.810 - 1.150 * lam + 1.060 * e(-7.700 * lam),
+                "cx2": 1.990 - 2.810 * lam + 0.840 * e(-4.690 * lam),
+                "cy0": -1.096 + 1.095 * lam + 0.192 * e(-6.000 * lam),
+                "cy1": 3.965 - 4.835 * lam - 3.965 * e(-2.675 * lam),
+                "cy2": 0.0}
+    return {"cx0": 0.050 - 0.580 * lam + 0.148 * e(3.015 * lam),
+            "cx1": 2.230 - 1.490 * lam + 1.390 * e(-18.33 * lam),
+            "cx2": 0.730 - 1.580 * lam + 2.910 * e(-6.000 * lam),
+            "cy0": -2.110 + 1.977 * lam + 0.0076 * e(6.530 * lam),
+            "cy1": 10.108 - 7.408 * lam - 10.108 * e(-1.364 * lam),
+            "cy2": 0.0}
+
+
+def wheel_flange_stress(p: float, tf: float, bf: float, tw: float, a: float, tapered: bool,
+                        global_stress: float) -> tuple[float, str, dict]:
+    """Largest von Mises stress of the bottom flange at points 0, 1, 2 under one wheel load p
+    (N, magnitude) with the global bending stress of the bottom fibre there (Pa, tension +).
+    Returns (stress, point, numbers used)."""
+    lam = min(max(2 * a / (bf - tw), 0.0), 1.0)
+    c = flange_coefficients(lam, tapered)
+    q = p / tf**2
+    best = (-1.0, "", {})
+    for i in ("0", "1", "2"):
+        sx = c["cx" + i] * q + global_stress
+        sy = c["cy" + i] * q
+        vm = math.sqrt(sx * sx + sy * sy - sx * sy)
+        if vm > best[0]:
+            best = (vm, i, {"lambda": lam, "cx": c["cx" + i], "cy": c["cy" + i], "sx": sx,
+                            "sy": sy, "local_x": c["cx" + i] * q})
+    return best
+
+
+def flange_tf_at_wheel(sec, a: float) -> tuple[float, bool]:
+    """(flange thickness at the wheel, tapered?): S shapes have a 16.67 % (2 in 12) flange
+    slope, tf tabulated at mid-way between the web face and the tip (AISC Manual, common
+    practice)."""
+    d = sec.dims
+    tf = d["tf"]
+    tapered = str(getattr(sec, "designation", "")).upper().startswith("S")
+    if tapered:
+        half = (d["bf"] - d["tw"]) / 2
+        tf = tf - (half / 2 - a) / 6.0  # slope 1 in 6: thinner toward the tip
+    return max(tf, 0.3 * d["tf"]), tapered
+
+
+def wheel_check(job, sol, sec, mat, global_allow=None):
+    """The bottom-flange check under the worst wheel of the [[moving]] set in this state."""
+    from shopbeam.design.checks import Check
+
+    if not job.moving or sec.shape != "i-beam" or sec.axis != "strong":
+        return None
+    ws = job.moving[0]
+    wheels = [ld for ld in sol.beam.loads if (ld.key or "") == ws.key and ld.kind == "point"]
+    if not wheels:
+        return None
+    d = sec.dims
+    a = ws.wheel_edge if ws.wheel_edge is not None else DEFAULT_WHEEL_EDGE
+    tf, tapered = flange_tf_at_wheel(sec, a)
+    sbot = sec.sx_bot
+    best = None
+    for ld in wheels:
+        p = abs(ld.value) / ws.wheels_per_axle
+        m = float(sol.moment(ld.at))
+        sg = m / sbot  # sagging (+) puts the bottom fibre in tension
+        vm, point, used = wheel_flange_stress(p, tf, d["bf"], d["tw"], a, tapered, sg)
+        if best is None or vm > best[0]:
+            best = (vm, point, used, ld.at, p, sg)
+    vm, point, used, at, p, sg = best
+    allow = mat.fy / OMEGA_WHEEL
+    names = {"0": "flange-to-web junction", "1": "under the wheel", "2": "flange tip"}
+    edge_words = ("given" if ws.wheel_edge is not None else
+                  "default 1/4 in: give [[moving]] wheel_edge for the real trolley")
+    return Check(
+        "wheel flange bending", vm, allow, "Pa",
+        f"bottom-flange local bending under a trolley wheel, CMAA 74 70-3.3.2.2 / AISC "
+        f"Design Guide 7 17 (EN 1993-6 Table 5.2 coefficients, from memory): sigma = C P / "
+        f"tf^2 ({'tapered' if tapered else 'parallel'} flange, lambda = 2a/(bf - tw) = "
+        f"{used['lambda']:.3f}), plus the global bending stress, von Mises <= Fy / 1.67", at,
+        detail=f"point {point} ({names[point]}); wheel load P = axle / "
+               f"{ws.wheels_per_axle}; wheel {edge_words}",
+        clause="CMAA 74 70-3.3.2.2; AISC Design Guide 7 (2nd ed.) 17",
+        source="CMAA 74 / EN 1993-6 5.7.2 coefficients (from memory)",
+        params={"P": p, "tf": tf, "a": a, "lambda": used["lambda"], "Cx": used["cx"],
+                "Cy": used["cy"], "sigma_global": sg, "sigma_x": used["sx"],
+                "sigma_y": used["sy"]})
+
+
+# ------------------------------------------------------------------ lateral trolley force
+def flange_weak_strength(sec, mat) -> tuple[float, str]:
+    """Nominal weak-axis moment of one flange alone (AISC 360-16 F6 applied to the flange)."""
+    d = sec.dims
+    bf, tf = d["bf"], d["tf"]
+    fy, e = mat.fy, mat.e
+    zf, sf = tf * bf**2 / 4, tf * bf**2 / 6
+    mp = min(fy * zf, 1.6 * fy * sf)
+    lam = bf / (2 * tf)
+    root = math.sqrt(e / fy)
+    lp, lr = 0.38 * root, 1.0 * root
+    if lam <= lp:
+        return mp, "F6-1 Mn = Fy Zf, Zf = tf bf^2 / 4"
+    if lam <= lr:
+        return mp - (mp - 0.7 * fy * sf) * (lam - lp) / (lr - lp), "F6-2 (noncompact flange)"
+    return 0.69 * e / lam**2 * sf, "F6-3 (slender flange)"
+
+
+def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
+    """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
+    from shopbeam.design.checks import Check
+    from shopbeam.design.loading import read_moving
+    from shopbeam.engine.model import Load
+    from shopbeam.engine.solver import solve
+
+    if prof is None or not prof.lateral or not job.moving or sec.shape != "i-beam" \
+            or sec.axis != "strong":
+        return None
+    mv = read_moving(job)[0]
+    wheels = [ld for ld in sol.beam.loads if (ld.key or "") == mv.key and ld.kind == "point"]
+    if len(wheels) != len(mv.live):
+        return None
+    lat = []
+    for ld, f, dd in zip(wheels, mv.live, mv.dead):
+        # the wheel carries dd + k (1 + impact) f; the lateral force is 20 % of k f + dd
+        live = (ld.value - dd) / (1 + impact)
+        lat.append(Load("point", at=ld.at, value=prof.lateral * abs(live + dd)))
+    flange = solve(replace(sol.beam, ei=1.0, loads=tuple(lat)))
+    mny, how = flange_weak_strength(sec, mat)
+    mcy = mny / 1.67
+    best = None
+    for x in [ld.at for ld in wheels]:
+        mx, my = abs(float(sol.moment(x))), abs(float(flange.moment(x)))
+        r = mx / mcx + my / mcy
+        if best is None or r > best[0]:
+            best = (r, x, mx, my)
+    r, x, mx, my = best
+    return Check(
+        "lateral trolley force", r, 1.0, "",
+        f"AISC 360-16 H1-1b (Pr = 0): Mx / Mcx + My / Mcy <= 1.0; the lateral force "
+        f"{prof.lateral:.0%} of rated load + hoist + trolley ({prof.name}, ASCE 7-16 4.9.4) "
+        f"on the bottom flange alone (flange-as-beam, AISC Design Guide 7); Mcy by {how}, "
+        "Omega 1.67", x,
+        detail=f"Mx {fmt(mx, 'moment', job.units)} of Mcx {fmt(mcx, 'moment', job.units)}; "
+               f"My {fmt(my, 'moment', job.units)} of Mcy {fmt(mcy, 'moment', job.units)}",
+        clause="AISC 360-16 H1.1; ASCE 7-16 4.9.4", source="AISC 360-16; ASCE 7-16 (from "
+        "memory); AISC Design Guide 7 flange-as-beam",
+        params={"Mx": mx, "Mcx": mcx, "My": my, "Mcy": mcy})
+
+
+# ------------------------------------------------------------------ words
+def lifting_notes(job, prof: Profile | None) -> list[str]:
+    """The profile named in the report, and the longitudinal force as a quantified caution."""
+    if prof is None:
+        return []
+    out = [prof.words[0].upper() + prof.words[1:] + "."]
+    if prof.longitudinal and job.moving:
+        ws = job.moving[0]
+        per = max(abs(w + d) for w, d in zip(ws.live, ws.dead)) * (1 + prof.impact)
+        total = prof.longitudinal * per * len(ws.live)
+        out.append(f"Longitudinal force {prof.longitudinal:.0%} of the wheel loads (ASCE 7-16 "
+                   f"4.9.5, from memory): about {fmt(total, 'force', job.units)} at the "
+                   "entered loads, along the runway at the wheels; the hangers, end stops and "
+                   "their bracing must carry it (not checked on this member).")
+    if prof.lateral and job.moving and not _i_shape(job.section):
+        out.append(f"Lateral force {prof.lateral:.0%} of rated load + hoist + trolley (ASCE "
+                   "7-16 4.9.4): weak-axis bending and torsion of this section are not checked.")
+    return out
+
+
+def _i_shape(sec) -> bool:
+    return sec.shape == "i-beam" and sec.axis == "strong"
+
+
+def lifting_unchecked(job, sec) -> list:
+    """Trolley-wheel and lateral-force limit states of sections these checks do not cover."""
+    from shopbeam.design.checks import Unchecked
+
+    if not job.moving or not (job.lifting or getattr(job.criteria, "lifting", "")):
+        return []
+    if _i_shape(sec):
+        return []
+    out = [Unchecked("flange local bending under trolley wheels",
+                     f"trolley wheels on a {sec.shape} ({sec.axis} axis) are not covered by the "
+                     "CMAA 74 / Design Guide 7 method (I-shapes only)",
+                     "CMAA 74 70-3.3.2.2; AISC Design Guide 7", blocks_rating=True)]
+    prof = profile_of(job)
+    if prof and prof.lateral:
+        out.append(Unchecked("lateral trolley force (weak-axis bending and torsion)",
+                             f"{prof.lateral:.0%} of rated load + hoist + trolley at the wheels "
+                             "is not checked for this section", "ASCE 7-16 4.9.4; AISC 360-16 "
+                             "H1, H3", blocks_rating=True))
+    return out
