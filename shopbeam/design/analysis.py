@@ -107,7 +107,7 @@ def analyze(job: Job) -> Result:
 
     from shopbeam.design.checks import aluminum_unchecked
 
-    notes = connection_notes(job, sol) + member_notes(job) + [
+    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol) + [
         f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}." for u in aluminum_unchecked(job)]
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
@@ -122,6 +122,43 @@ def member_notes(job: Job) -> list[str]:
     t = torsion_note(job, job.section)
     if t:
         out.append(t)
+    return out
+
+
+def cantilever_notes(job: Job, sol: Solution) -> list[str]:
+    """A cantilever unbraced at its tip: Lb is its length with Cb = 1.0 (AISC 360-16 F1),
+    which assumes the load at the shear centre. Loads bearing on the top flange destabilise
+    it: the effective length factors for a tip free to twist are about 1.4 for a built-in
+    root and 2.5 for an overhang past a support (SSRC Guide / BS 5950-1 Table 14, from
+    memory); the ratio at that length is given as a caution."""
+    from shopbeam.design.checks import strengths
+
+    st = strengths(job, beam=sol.beam)
+    fl = st.flexure
+    if fl.ltb is None or fl.stress_s is not None or job.braced:
+        return []
+    out = []
+    tol = 1e-9 * job.length
+    for a, b, free, _l1, _why in st.ltb_segments:
+        if not free:
+            continue
+        held = [s.at for s in job.supports if s.takes_force]
+        root = a if any(abs(h - a) <= tol for h in held) else b
+        fixed = any(s.kind == "fixed" and abs(s.at - root) <= tol for s in job.supports)
+        k = 1.4 if fixed else 2.5
+        mmax = sol.moment.extremes(a, b).abs_max
+        now = min(fl.cap, _l1) / fl.omega
+        top = min(fl.cap, fl.ltb1(k * (b - a))[0]) / fl.omega
+        if mmax <= 0:
+            continue
+        out.append(f"Cantilever {units.fmt(a, 'length', job.units)} to "
+                   f"{units.fmt(b, 'length', job.units)} is unbraced at its tip: checked with "
+                   f"Lb = its length and Cb = 1.0 (AISC 360-16 F1), loads at the shear centre. "
+                   f"If the loads bear on the top flange (destabilising), the effective length "
+                   f"is about {k:g} x L ({'built-in' if fixed else 'over a support'} root, "
+                   f"SSRC Guide / BS 5950-1 Table 14, from memory): bending ratio "
+                   f"{mmax / top:.2f} instead of {mmax / now:.2f}. Brace the tip (beam.braces) "
+                   "or hang the load below the shear centre.")
     return out
 
 
