@@ -284,6 +284,7 @@ class LibraryScreen(Screen[object]):
         lst = self.query_one("#lib-list", OptionList)
         was = lst.highlighted
         if not keep:
+            self._filled_for = search
             try:
                 self.found = library.entries(self.library_dir, search=search or None)
             except Exception as exc:  # noqa: BLE001
@@ -339,9 +340,15 @@ class LibraryScreen(Screen[object]):
     def on_input_submitted(self, event: Input.Submitted) -> None:
         """Enter in the search opens the picked job: type, then one Enter."""
         event.stop()
+        search = self.query_one(Field).value
+        if search != getattr(self, "_filled_for", ""):  # typed fast: its search not run yet
+            self.highlight = None
+            self.fill(search)
         lst = self.query_one("#lib-list", OptionList)
-        if lst.highlighted is not None:
-            lst.action_select()
+        if lst.highlighted is not None and 0 <= lst.highlighted < len(self.found):
+            self.on_option_list_option_selected(
+                OptionList.OptionSelected(lst, lst.get_option_at_index(lst.highlighted),
+                                          lst.highlighted))
 
     def action_move(self, step: int) -> None:
         """Up, down, page up and page down pick in the list, from the search field too."""
