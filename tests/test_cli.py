@@ -152,9 +152,14 @@ def test_patterned_shelf_reports_the_uplift_of_the_governing_pattern():
     r = run("solve", str(root / "presets" / "continuous-shelf.toml"))
     assert r.returncode == 0, r.stderr
     text = r.stdout
-    assert "patterned loads on span 5 ft-10 ft" in text
+    # the two one-span patterns are mirror images: either may be named as governing
     line = next(ln for ln in text.splitlines() if "uplift" in ln)
-    assert "at 0 ft" in line and "-19.31 lbf" in line
+    assert "-19.31 lbf" in line
+    far, loaded = ("0 ft", "5 ft-10 ft") if "at 0 ft" in line else ("10 ft", "0 ft-5 ft")
+    assert f"at {far}" in line and f"patterned loads on span {loaded}" in text
+    # the reaction envelope: each end support's largest uplift over every pattern
+    env = text[text.index("REACTION ENVELOPE"):text.index("EXTREMES")]
+    assert env.count("largest down -19.31 lbf  (uplift)") == 2
 
 
 def test_json_of_a_patterned_job_carries_the_governing_state():
@@ -165,6 +170,13 @@ def test_json_of_a_patterned_job_carries_the_governing_state():
     d = json.loads(r.stdout)
     g = d["governing_state"]
     assert "patterned loads on" in g["words"]
-    assert g["reactions"][0]["force"] == pytest.approx(-19.31 * 4.4482216152605, rel=2e-3)
+    # (mirror patterns tie: the uplift is at whichever end the governing pattern leaves empty)
+    assert min(g["reactions"][0]["force"], g["reactions"][-1]["force"]) == pytest.approx(
+        -19.31 * 4.4482216152605, rel=2e-3)
+    env = d["reaction_envelope"]
+    assert [e["at"] for e in env] == [x["at"] for x in d["reactions"]]
+    for e in (env[0], env[-1]):
+        assert e["max_down"] == pytest.approx(-19.31 * 4.4482216152605, rel=2e-3)
+        assert "patterned loads on span" in e["max_down_state"]
     # the loads as entered (all spans loaded) stay the contract's reactions: no uplift there
     assert d["reactions"][0]["force"] > 0

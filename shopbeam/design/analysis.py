@@ -28,6 +28,9 @@ class Result:
     state_words: str = ""
     # limit states the member calls for that were not checked (rating refuses on these)
     unchecked: tuple[Unchecked, ...] = ()
+    # patterned or moving loads: per support the largest upward and downward reaction over
+    # every load state and the state that gives each (see loading.Evaluation.reactions)
+    reaction_envelope: tuple = ()
 
     @property
     def governing(self) -> Check:
@@ -76,16 +79,22 @@ def analyze(job: Job) -> Result:
     from shopbeam.design import loading
     from shopbeam.design.checks import check_notes, impact_of
 
-    shown, state_sol, state_words = "", None, ""
+    shown, state_sol, state_words, envelope = "", None, "", ()
     if loading.needs_states(job):
         # patterns, moving loads or impact: the checks cover every load state. The numbers
         # shown are the loads as entered, except with moving loads (the entered loads do
         # not include them): then the state that governs is shown
         ev = loading.evaluate(job, 1.0)
         checks = list(ev.checks)
+        envelope = ev.reactions
         gov = max(checks, key=lambda c: c.ratio)
         words = ev.worst.get(gov.name, {}).get("words", "")
-        extra = [f"{ev.states} load state{'s' if ev.states != 1 else ''} checked"]
+        npat = len(loading.segments(job.beam())) if any(ld.patterned for ld in job.loads) else 0
+        if npat and not loading.read_moving(job):
+            extra = [f"all {2 ** npat if npat < 64 else f'2^{npat}'} patterns of loaded and empty "
+                     f"spans covered by exact envelopes ({ev.states} solved)"]
+        else:
+            extra = [f"{ev.states} load state{'s' if ev.states != 1 else ''} checked"]
         if impact_of(job):
             extra.append(f"checks include the {impact_of(job):.0%} impact allowance on live loads")
         if loading.read_moving(job) and ev.solution is not None:
@@ -111,7 +120,8 @@ def analyze(job: Job) -> Result:
         f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}." for u in aluminum_unchecked(job)]
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
-                  state_sol, state_words, tuple(unchecked_for(job)))
+                  state_sol, state_words, tuple(unchecked_for(job)),
+                  reaction_envelope=tuple(envelope))
 
 
 def member_notes(job: Job) -> list[str]:
@@ -225,4 +235,7 @@ def to_json(result: Result) -> dict:
                            "moment": float(r.moment)} for r in result.state_solution.reactions],
             "extremes": {n: e.as_dict() for n, e in result.state_solution.extremes().items()},
         },
+        # per support over every load state (patterned or moving loads; else empty):
+        # max_up / max_down are the largest and smallest force (+ up), with their states
+        "reaction_envelope": [dict(r) for r in result.reaction_envelope],
     }

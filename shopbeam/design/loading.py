@@ -28,7 +28,8 @@ import numpy as np
 
 from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import Piecewise
-from shopbeam.engine.solver import Reaction, Solution, segments, solve
+from shopbeam.engine.piecewise import _horner, _roots_in_pieces
+from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
 
 MAX_PATTERN_SEGMENTS = 10  # 2^10 = 1024 states
 
@@ -180,22 +181,25 @@ def state_set(job, section=None, parts: LoadParts | None = None, ei: float | Non
     segs = tuple(segments(empty))
     span_loads = []
     if parts.patterned:
-        if len(segs) > MAX_PATTERN_SEGMENTS:
-            raise InputError(f"{len(segs)} spans and overhangs give 2^{len(segs)} patterns; "
-                             f"pattern loading takes up to {MAX_PATTERN_SEGMENTS}: split the "
-                             "job or drop patterned = true", "loads")
+        if parts.moving and len(segs) > MAX_PATTERN_SEGMENTS:
+            raise InputError(f"{len(segs)} spans and overhangs with a moving load give "
+                             f"2^{len(segs)} patterns at every wheel position; patterned and "
+                             f"moving loads together take up to {MAX_PATTERN_SEGMENTS} spans: "
+                             "split the job or drop patterned = true", "loads")
         for a, b, _ in segs:
             span_loads.append(tuple(c for c in (clip(ld, a, b) for ld in parts.patterned) if c))
     allpos = _positions(parts.fixed) | _positions(parts.live)
     for sl in span_loads:
         allpos |= _positions(sl)
-    dummies = _dummies(allpos)
+    if parts.patterned:  # unbraced lengths end on breaks, so envelopes split there exactly
+        from shopbeam.design.checks import brace_points
 
-    def sol(loads):
-        return solve(replace(empty, loads=tuple(loads) + tuple(dummies)), length_fmt)
-
-    return StateSet(empty, sol(parts.fixed), sol(parts.live), tuple(sol(s) for s in span_loads),
-                    segs, parts, tuple(span_loads))
+        allpos |= {x for x in brace_points(job)[1] if 0 < x < job.length}
+    dummies = tuple(_dummies(allpos))
+    # one pass for every unit solution: they share the breaks and the factorised system
+    sols = solve_many(empty, [tuple(parts.fixed) + dummies, tuple(parts.live) + dummies]
+                      + [tuple(sl) + dummies for sl in span_loads], length_fmt)
+    return StateSet(empty, sols[0], sols[1], tuple(sols[2:]), segs, parts, tuple(span_loads))
 
 
 def describe_pattern(ss: StateSet, pattern, fmt=None) -> str:
@@ -208,6 +212,274 @@ def describe_pattern(ss: StateSet, pattern, fmt=None) -> str:
     return "patterned loads on " + ", ".join(names)
 
 
+# ------------------------------------------------------------------ pattern envelopes
+# Every pattern state is fixed + kk (live + sum of the loaded spans' unit solutions), kk > 0.
+# At each x the worst pattern for a quantity takes span i where its unit solution S_i(x) adds
+# and leaves it where it relieves, so the upper envelope is F + kk (Lv + sum max(0, S_i)) and
+# the lower one F + kk (Lv + sum min(0, S_i)). Each S_i is a polynomial on every piece, so
+# its sign changes only at its roots there: the pieces are cut at every root of every S_i,
+# and on each cut piece the envelope is one polynomial (the sum over a fixed set of spans).
+# The envelope is then an ordinary piecewise polynomial whose extremes are exact, and the set
+# of spans on the cut piece where an extreme falls is the pattern that gives it.
+ENVELOPE_QUANTITIES = ("shear", "moment", "deflection")
+
+
+def _shift_rows(c: np.ndarray, d: np.ndarray) -> np.ndarray:
+    """Rows of ascending coefficients re-expanded about t = d (one offset per row)."""
+    w = c.shape[1]
+    out = np.zeros_like(c)
+    dp = d[:, None] ** np.arange(w)  # d^0 .. d^(w-1)
+    for m in range(w):
+        for i in range(m + 1):
+            out[:, i] += c[:, m] * (math.comb(m, i) * dp[:, m - i])
+    return out
+
+
+@dataclass(frozen=True)
+class PatternEnvelope:
+    """Upper and lower envelope of one quantity over every pattern, on cut pieces.
+
+    For each cut piece: the coefficients (local to the cut piece) of the fixed part, the
+    always-on live part, and the sums of the spans that raise (`up`) or lower (`down`) the
+    quantity there, with which spans those are (`up_on`, `down_on`: (pieces, spans) bools).
+    """
+
+    name: str
+    breaks: np.ndarray
+    fixed: np.ndarray
+    live: np.ndarray
+    up: np.ndarray
+    down: np.ndarray
+    up_on: np.ndarray
+    down_on: np.ndarray
+
+    def coeffs(self, kk: float, upper: bool) -> np.ndarray:
+        return self.fixed + kk * (self.live + (self.up if upper else self.down))
+
+    def pattern(self, row: int, upper: bool) -> tuple[int, ...]:
+        on = self.up_on[row] if upper else self.down_on[row]
+        return tuple(int(i) for i in np.flatnonzero(on))
+
+
+def build_envelope(ss: "StateSet", name: str) -> PatternEnvelope:
+    """The exact envelope of shear, moment or deflection over all 2^n patterns (n solves)."""
+    f0 = ss.fixed.function(name)
+    b = f0.breaks
+    h = np.diff(b)
+    npc = len(h)
+    fc, lc = f0.coeffs, ss.live.function(name).coeffs
+    n = len(ss.spans)
+    w = fc.shape[1]
+    S = (np.stack([s.function(name).coeffs for s in ss.spans]) if n
+         else np.zeros((0, npc, w)))
+    # rounding residue (a span that does not reach a piece at all) carries no sign
+    scale = np.abs(S * h[None, :, None] ** np.arange(w)).max(axis=2) if n else np.zeros((0, npc))
+    top = scale.max() if scale.size else 0.0
+    S = np.where((scale <= 1e-13 * top)[:, :, None], 0.0, S)
+    piece = np.arange(npc)
+    t0 = np.zeros(npc)
+    if n:
+        rows, t = _roots_in_pieces(S.reshape(n * npc, w), np.tile(h, n))
+        pc = rows % npc
+        inside = (t > 1e-11 * h[pc]) & (t < h[pc] * (1 - 1e-11))
+        piece = np.concatenate([piece, pc[inside]])
+        t0 = np.concatenate([t0, t[inside]])
+        order = np.lexsort((t0, piece))
+        piece, t0 = piece[order], t0[order]
+        keep = np.ones(len(piece), bool)  # drop cuts within 1e-11 of the piece of the last
+        same = piece[1:] == piece[:-1]
+        keep[1:] = ~(same & (t0[1:] - t0[:-1] <= 1e-11 * h[piece[1:]]))
+        piece, t0 = piece[keep], t0[keep]
+    x0 = b[piece] + t0
+    nb = np.concatenate([x0, [b[-1]]])
+    nb[0] = b[0]
+    t1 = np.where(np.concatenate([piece[1:] == piece[:-1], [False]]),
+                  np.concatenate([t0[1:], [0.0]]), h[piece])
+    tm = 0.5 * (t0 + t1)
+    if n:
+        Sp = S[:, piece, :]  # (n, cut pieces, w)
+        vals = np.stack([_horner(Sp[i], tm) for i in range(n)])  # (n, cut pieces)
+        up_on, down_on = (vals > 0).T, (vals < 0).T
+        up = np.einsum("sn,nsw->sw", up_on.astype(float), Sp)
+        down = np.einsum("sn,nsw->sw", down_on.astype(float), Sp)
+    else:
+        up_on = down_on = np.zeros((len(piece), 0), bool)
+        up = down = np.zeros((len(piece), w))
+    sh = lambda c: _shift_rows(c, t0)  # noqa: E731
+    return PatternEnvelope(name, nb, sh(fc[piece]), sh(lc[piece]), sh(up), sh(down),
+                           up_on, down_on)
+
+
+def _extreme_rows(breaks: np.ndarray, c: np.ndarray) -> tuple[np.ndarray, np.ndarray, np.ndarray]:
+    """(row, x, value) of every candidate extreme of a piecewise polynomial."""
+    h = np.diff(breaks)
+    npc = len(h)
+    d = c[:, 1:] * np.arange(1, c.shape[1]) if c.shape[1] > 1 else np.zeros((npc, 1))
+    rows, t = _roots_in_pieces(d, h)
+    r = np.concatenate([np.arange(npc), np.arange(npc), rows])
+    x = np.concatenate([breaks[:-1], breaks[1:], breaks[rows] + t])
+    v = np.concatenate([c[:, 0], _horner(c, h), _horner(c[rows], t)])
+    return r, x, v
+
+
+@dataclass(frozen=True)
+class EnvelopeExtreme:
+    value: float  # signed: the largest upward (upper) or downward (lower) value
+    at: float
+    pattern: tuple[int, ...]
+
+
+class Envelopes:
+    """The exact pattern envelopes of one state set at one live-load factor."""
+
+    def __init__(self, ss: "StateSet", k: float):
+        self.ss = ss
+        self.kk = k * (1 + ss.parts.impact)
+        cache = ss.__dict__.setdefault("_envelopes", {})
+        self.env = {}
+        self.cand = {}
+        for name in ENVELOPE_QUANTITIES:
+            if name not in cache:
+                cache[name] = build_envelope(ss, name)
+            e = cache[name]
+            self.env[name] = e
+            for upper in (True, False):
+                self.cand[name, upper] = _extreme_rows(e.breaks, e.coeffs(self.kk, upper))
+
+    def extreme(self, name: str, upper: bool, lo: float | None = None,
+                hi: float | None = None) -> EnvelopeExtreme:
+        """Largest (upper) or smallest (lower) value over all patterns in [lo, hi]."""
+        e = self.env[name]
+        r, x, v = self.cand[name, upper]
+        if lo is not None or hi is not None:
+            tol = 1e-9 * self.ss.beam.length
+            lo = e.breaks[0] if lo is None else lo
+            hi = e.breaks[-1] if hi is None else hi
+            m = (e.breaks[r] >= lo - tol) & (e.breaks[r + 1] <= hi + tol)
+            r, x, v = r[m], x[m], v[m]
+        i = int(np.argmax(v) if upper else np.argmin(v))
+        return EnvelopeExtreme(float(v[i]), float(x[i]), e.pattern(int(r[i]), upper))
+
+    def abs_extreme(self, name: str, lo=None, hi=None) -> EnvelopeExtreme:
+        a, b = self.extreme(name, True, lo, hi), self.extreme(name, False, lo, hi)
+        return a if abs(a.value) >= abs(b.value) else b
+
+    def reactions(self) -> list[dict]:
+        """Per support: the largest upward and downward force over all patterns."""
+        ss, kk = self.ss, self.kk
+        out = []
+        for j, r in enumerate(ss.fixed.reactions):
+            base = r.force + kk * ss.live.reactions[j].force
+            each = np.array([s.reactions[j].force for s in ss.spans]) * kk
+            top = max(abs(base), float(np.max(np.abs(each))) if each.size else 0.0)
+            each = np.where(np.abs(each) <= 1e-13 * top, 0.0, each)
+            up = tuple(int(i) for i in np.flatnonzero(each > 0))
+            down = tuple(int(i) for i in np.flatnonzero(each < 0))
+            out.append({"at": float(r.at), "type": r.kind,
+                        "max_up": float(base + each[each > 0].sum()), "max_up_pattern": up,
+                        "max_down": float(base + each[each < 0].sum()),
+                        "max_down_pattern": down})
+        return out
+
+
+def pattern_checks(job, ss: "StateSet", k: float, st):
+    """The checks over every pattern from the exact envelopes: (best per check, states run).
+
+    Shear and deflection: the envelope's extreme is the demand, and the pattern that gives it
+    is solved and checked. Bending: each unbraced length's largest moment over all patterns
+    is found the same way, and that length's governing pattern is checked with its own Cb
+    (AISC 360-16 F1-1 from that pattern's moment diagram); lengths are taken in order of the
+    bound their envelope moment gives at Cb = 1 and stop once no other can govern.
+    """
+    from shopbeam.design.checks import checks_for
+
+    env = Envelopes(ss, k)
+    fmt = _fmt_for(job)
+    L = ss.beam.length
+    wanted: list[tuple[int, ...]] = []
+
+    def want(p):
+        if p not in wanted:
+            wanted.append(p)
+
+    want(env.abs_extreme("shear").pattern)
+    worst_d, pat_d = -1.0, ()
+    for a, b, _ in ss.segs:
+        e = env.abs_extreme("deflection", a, b)
+        span = [x for x in deflection_spans(job, ss, st) if abs(x[0] - a) <= 1e-9 * L]
+        lim = span[0][1] if span else 1.0
+        r = abs(e.value) / lim if lim > 0 else math.inf
+        if r > worst_d:
+            worst_d, pat_d = r, e.pattern
+    want(pat_d)
+    fl = st.flexure
+    bounds = []
+    for a, b, free, l1, _ in st.ltb_segments:
+        e = env.abs_extreme("moment", a, b)
+        low_mn = min(fl.cap, l1)  # Cb >= 1
+        bounds.append((abs(e.value) / (low_mn / fl.omega) if low_mn > 0 else math.inf,
+                       e.pattern))
+    bounds.sort(key=lambda t: -t[0])
+    best: dict[str, tuple] = {}
+    done: dict[tuple, Solution] = {}
+
+    def run(p):
+        sol = ss.state(k, p)
+        done[p] = sol
+        for c in checks_for(job, sol, st):
+            _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
+
+    for p in wanted:
+        run(p)
+    for bound, p in bounds:
+        if p in done:
+            continue
+        if "bending" in best and bound <= best["bending"][0].ratio:
+            break
+        run(p)
+    # the span list of the deflection check: each span's worst over all patterns
+    c = best["deflection"][0]
+    spans = []
+    for (a, b, kind), (_, lim, rule) in zip(ss.segs, deflection_spans(job, ss, st)):
+        e = env.abs_extreme("deflection", a, b)
+        spans.append({"start": a, "end": b, "kind": kind, "demand": abs(e.value), "limit": lim,
+                      "at": e.at, "rule": rule,
+                      "state": describe_pattern(ss, e.pattern, fmt)})
+    best["deflection"] = (replace(c, extra={**c.extra, "spans": spans}),) + best["deflection"][1:]
+    return best, len(done), env
+
+
+def deflection_spans(job, ss: "StateSet", st) -> list[tuple[float, float, str]]:
+    """(start, limit, rule) of each span and overhang, as the deflection check judges them."""
+    cache = ss.__dict__.setdefault("_defl_spans", {})
+    if "v" not in cache:
+        out = []
+        for a, b, kind in ss.segs:
+            length = b - a
+            judged = 2 * length if kind in ("cantilever", "overhang") else length
+            if st.defl_abs is not None:
+                out.append((a, st.defl_abs, st.defl_words))
+            else:
+                rule = f"{'2 x ' if judged != length else ''}{kind} length / {st.defl_ratio:g}"
+                out.append((a, judged / st.defl_ratio, rule))
+        cache["v"] = out
+    return cache["v"]
+
+
+def walk_patterns(job, k: float = 1.0, ss: "StateSet | None" = None):
+    """Test oracle only: every check of every one of the 2^n pattern states."""
+    from shopbeam.design.checks import checks_for, strengths
+
+    ss = ss or state_set(job)
+    st = strengths(job, beam=ss.beam)
+    best: dict[str, tuple] = {}
+    for pattern in ss.patterns:
+        sol = ss.state(k, pattern)
+        for c in checks_for(job, sol, st):
+            _keep(best, c, pattern, None, "", sol)
+    return best
+
+
 # ------------------------------------------------------------------ evaluation
 @dataclass(frozen=True)
 class Evaluation:
@@ -218,6 +490,9 @@ class Evaluation:
     worst: dict  # check name -> {"pattern": (...), "position": p or None, "words": str}
     states: int
     solution: Solution | None = None  # the state governing the governing check
+    # per support: largest upward and downward reaction over every load state and the state
+    # that gives each ({"at", "type", "max_up", "max_up_state", "max_down", ...}; + up)
+    reactions: tuple = ()
 
 
 def _fmt_for(job):
@@ -237,7 +512,16 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
     fmt = _fmt_for(job)
     best: dict[str, tuple] = {}
     count = 0
-    for pattern in ss.patterns:
+    reactions: list[dict] = []
+    if ss.parts.patterned and not ss.parts.moving:
+        best, count, env = pattern_checks(job, ss, k, st)
+        for r in env.reactions():
+            reactions.append({"at": r["at"], "type": r["type"],
+                              "max_up": r["max_up"],
+                              "max_up_state": describe_pattern(ss, r["max_up_pattern"], fmt),
+                              "max_down": r["max_down"],
+                              "max_down_state": describe_pattern(ss, r["max_down_pattern"], fmt)})
+    for pattern in (() if reactions else ss.patterns):
         words = describe_pattern(ss, pattern, fmt)
         if ss.parts.moving:
             mv = ss.parts.moving[0]
@@ -246,13 +530,16 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
                 count += 1
                 shown = round(p / (job.length * 1e-6)) * job.length * 1e-6  # no 1e-7 ft noise
                 where = f"{mv.label} first wheel at {fmt(shown)}"
+                full = "; ".join(x for x in (words, where) if x)
                 for c in checks_for(job, sol, st, cb_one=True):
-                    _keep(best, c, pattern, p, "; ".join(x for x in (words, where) if x), sol)
+                    _keep(best, c, pattern, p, full, sol)
+                _keep_reactions(reactions, sol, full)
         else:
             sol = ss.state(k, pattern)
             count += 1
             for c in checks_for(job, sol, st):
                 _keep(best, c, pattern, None, words, sol)
+            _keep_reactions(reactions, sol, words)
     checks, worst = [], {}
     for name, (c, pattern, p, words, sol) in best.items():
         if words:
@@ -262,7 +549,18 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
         checks.append(c)
         worst[name] = {"pattern": pattern, "position": p, "words": words}
     gov = max(checks, key=lambda c: c.ratio)
-    return Evaluation(k, tuple(checks), worst, count, best[gov.name][4])
+    return Evaluation(k, tuple(checks), worst, count, best[gov.name][4], tuple(reactions))
+
+
+def _keep_reactions(out: list[dict], sol: Solution, words: str) -> None:
+    if not out:
+        out.extend({"at": float(r.at), "type": r.kind, "max_up": -math.inf, "max_up_state": "",
+                    "max_down": math.inf, "max_down_state": ""} for r in sol.reactions)
+    for d, r in zip(out, sol.reactions):
+        if r.force > d["max_up"]:
+            d["max_up"], d["max_up_state"] = float(r.force), words
+        if r.force < d["max_down"]:
+            d["max_down"], d["max_down_state"] = float(r.force), words
 
 
 def _keep(best, c, pattern, p, words, sol):

@@ -500,6 +500,118 @@ def _solve(beam: Beam, length_fmt, exact: bool | None) -> Solution:
     return _finish(beam, breaks, final, z, unknowns, condition, False)
 
 
+def solve_many(beam: Beam, cases, length_fmt=None) -> list[Solution]:
+    """One solution per load case (a list of loads each) on the same supports, in one pass.
+
+    Every case shares one set of breaks (the positions of all cases), so their piece
+    coefficients add term by term (superposition). The cases share one march and one
+    factorised system (a right-hand side each). If that system is ill-conditioned each case
+    is solved on its own by `solve` (which then answers in exact arithmetic). `beam.loads`
+    is ignored.
+    """
+    from dataclasses import replace
+
+    from shopbeam.engine.model import Load
+
+    cases = [tuple(c) for c in cases]
+    if not cases:
+        return []
+    everything = tuple(ld for c in cases for ld in c)
+    problems = validate_geometry(replace(beam, loads=everything))
+    if problems:
+        from shopbeam.errors import InputError
+
+        raise InputError("; ".join(problems))
+    L, ei = beam.length, beam.ei
+    unknowns = _unknowns(beam)
+    nz = len(unknowns)
+    m = len(cases)
+    index = {id(u): i for i, u in enumerate(unknowns)}
+    load_pos = [p for ld in everything for p in ld.describe_position()]
+    raw = np.clip(np.array([0.0, L] + [s.at for s in beam.supports] + load_pos, float), 0.0, L)
+    snapped = _snap(raw, L)
+    moved = dict(zip(load_pos, snapped[2 + len(beam.supports):].tolist()))
+    sup_at = dict(zip(range(len(beam.supports)), snapped[2:2 + len(beam.supports)].tolist()))
+
+    def one_by_one():
+        dummies = tuple(Load("point", at=x, value=0.0) for x in sorted(set(load_pos)))
+        return [solve(replace(beam, loads=c + dummies), length_fmt) for c in cases]
+
+    terms, cols = [], []
+    for c, loads in enumerate(cases):
+        tc = load_terms(snap_loads(loads, moved))
+        terms += tc
+        cols += [c] * len(tc)
+    t_coef = np.array([t[0] for t in terms] + [u.coef for u in unknowns], dtype=float)
+    t_pos = np.array([t[1] for t in terms]
+                     + [sup_at[u.support] if u.support >= 0 else u.at for u in unknowns]
+                     + snapped[2 + len(beam.supports):].tolist(), float)
+    t_pow = np.array([t[2] for t in terms] + [u.power for u in unknowns], dtype=int)
+    t_col = np.concatenate([np.array(cols, dtype=int), np.arange(m, m + nz)])
+    # every load position is a break of every case (zero terms keep them), as in one_by_one
+    breaks, where = np.unique(np.concatenate([[0.0, L], t_pos]), return_inverse=True)
+    where = where[2:2 + len(t_coef)]
+    jumps = np.zeros((len(breaks), _NLEV, nz + m))
+    np.add.at(jumps, (where, -t_pow + 1, t_col), t_coef)
+    with np.errstate(all="ignore"):
+        states = _march(breaks, jumps)
+    sup_break = {i: int(np.searchsorted(breaks, x)) for i, x in sup_at.items()}
+    rows, rhs = [], []
+
+    def cond(vec):
+        rows.append(vec[m:])
+        rhs.append(-vec[:m])
+
+    end = states[-1]
+    cond(end[_IDX["V"]])
+    cond(end[_IDX["M"]])
+    for u in unknowns:
+        if u.kind == "c1" or u.kind == "c2":
+            continue
+        sup = beam.supports[u.support]
+        st = states[sup_break[u.support]]
+        if u.kind == "force":
+            if sup.kind == "spring":
+                vec = st[_IDX["EIu"]] * (sup.stiffness / ei)
+                vec[m + index[id(u)]] += 1.0  # R + k u = 0
+                cond(vec)
+            else:
+                cond(st[_IDX["EIu"]])
+        elif u.kind == "moment":
+            cond(st[_IDX["EIt"]])
+        elif u.kind == "hinge":
+            cond(st[_IDX["M"]])
+    a = np.array(rows)
+    b = np.array(rhs)
+    rs = np.max(np.abs(a), axis=1)
+    rs[~(rs > 0)] = 1.0
+    a1 = a / rs[:, None]
+    cs = np.max(np.abs(a1), axis=0)
+    cs[~(cs > 0)] = 1.0
+    a2 = a1 / cs[None, :]
+    try:
+        with np.errstate(all="ignore"):
+            y = np.linalg.solve(a2, b / rs[:, None])
+            condition = float(np.linalg.cond(a2))
+    except np.linalg.LinAlgError:
+        return one_by_one()
+    if not condition <= ILL or not np.all(np.isfinite(y)):
+        return one_by_one()
+    zs = y / cs[:, None]
+    out = []
+    with np.errstate(all="ignore"):
+        for c in range(m):
+            w = np.zeros(m + nz)
+            w[c] = 1.0
+            w[m:] = zs[:, c]
+            final = states @ w
+            if not np.all(np.isfinite(final)):
+                return one_by_one()
+            out.append(_finish(replace(beam, loads=cases[c]), breaks, final, zs[:, c],
+                               unknowns, condition, False))
+    return out
+
+
 def _too_close(beam: Beam, L: float, length_fmt, extra: str):
     from shopbeam.errors import InputError
 

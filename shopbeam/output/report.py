@@ -107,6 +107,18 @@ def render(result: Result) -> str:
             mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
             up = "  (pulls down: uplift)" if r.force < 0 else ""
             lines.append(f"    {r.kind:<7} at {fmt_pos(r.at, sy):<12} force {f(r.force, 'force')}{mom}{up}")
+    if result.reaction_envelope:
+        lines.append("")
+        lines.append("REACTION ENVELOPE (each support over every load state: what a bracket or "
+                     "anchor must carry)")
+        for r in result.reaction_envelope:
+            lines.append(f"  {r['type']:<7} at {fmt_pos(r['at'], sy):<12} largest up "
+                         f"{f(r['max_up'], 'force'):<14} largest down "
+                         f"{f(r['max_down'], 'force')}"
+                         + ("  (uplift)" if r["max_down"] < 0 else ""))
+            for which, key in (("up", "max_up_state"), ("down", "max_down_state")):
+                if r.get(key):
+                    lines += _wrap(f"{which}: {r[key]}", "      ")
     lines.append("")
 
     lines.append("EXTREMES (exact, with where they occur)")
