@@ -252,6 +252,12 @@ class PatternEnvelope:
     down: np.ndarray
     up_on: np.ndarray
     down_on: np.ndarray
+    piece: np.ndarray  # the original piece each cut piece lies in
+    t0: np.ndarray  # where in it the cut piece starts
+
+    def carry(self, coeffs: np.ndarray) -> np.ndarray:
+        """Another function on the original pieces, re-expanded on the cut pieces."""
+        return _shift_rows(coeffs[self.piece], self.t0)
 
     def coeffs(self, kk: float, upper: bool) -> np.ndarray:
         return self.fixed + kk * (self.live + (self.up if upper else self.down))
@@ -307,7 +313,7 @@ def build_envelope(ss: "StateSet", name: str) -> PatternEnvelope:
         up = down = np.zeros((len(piece), w))
     sh = lambda c: _shift_rows(c, t0)  # noqa: E731
     return PatternEnvelope(name, nb, sh(fc[piece]), sh(lc[piece]), sh(up), sh(down),
-                           up_on, down_on)
+                           up_on, down_on, piece, t0)
 
 
 def _extreme_rows(breaks: np.ndarray, c: np.ndarray) -> tuple[np.ndarray, np.ndarray, np.ndarray]:
@@ -360,6 +366,13 @@ class Envelopes:
         i = int(np.argmax(v) if upper else np.argmin(v))
         return EnvelopeExtreme(float(v[i]), float(x[i]), e.pattern(int(r[i]), upper))
 
+    def abs_value(self, name: str, x: float) -> float:
+        """The largest |value| at x over all patterns (both envelopes)."""
+        e = self.env[name]
+        j = int(np.clip(np.searchsorted(e.breaks, x, side="right") - 1, 0, len(e.breaks) - 2))
+        t = np.array([x - e.breaks[j]])
+        return max(abs(float(_horner(e.coeffs(self.kk, u)[j:j + 1], t)[0])) for u in (True, False))
+
     def abs_extreme(self, name: str, lo=None, hi=None) -> EnvelopeExtreme:
         a, b = self.extreme(name, True, lo, hi), self.extreme(name, False, lo, hi)
         return a if abs(a.value) >= abs(b.value) else b
@@ -387,11 +400,14 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
 
     Shear and deflection: the envelope's extreme is the demand, and the pattern that gives it
     is solved and checked. Bending: each unbraced length's largest moment over all patterns
-    is found the same way, and that length's governing pattern is checked with its own Cb
-    (AISC 360-16 F1-1 from that pattern's moment diagram); lengths are taken in order of the
-    bound their envelope moment gives at Cb = 1 and stop once no other can govern.
+    comes from the envelope, and Cb (AISC 360-16 F1-1) is taken with Mmax, MA, MB and MC each
+    the largest over all patterns. Since M / (Cb Mn1) = (2.5 Mmax + 3 MA + 4 MB + 3 MC) / (12.5
+    Mn1), that ratio is never below any single pattern's own (conservative), and it is that
+    pattern's exactly whenever one pattern governs all four (the usual case) or Cb does not
+    matter (braced, short, or yielding governs). The governing length's pattern is solved and
+    checked for the words and fields of the check.
     """
-    from shopbeam.design.checks import checks_for
+    from shopbeam.design.checks import BASIS_WORDS, cb_factor, checks_for
 
     env = Envelopes(ss, k)
     fmt = _fmt_for(job)
@@ -413,30 +429,48 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
             worst_d, pat_d = r, e.pattern
     want(pat_d)
     fl = st.flexure
-    bounds = []
-    for a, b, free, l1, _ in st.ltb_segments:
+    segs = []
+    for idx, (a, b, free, l1, why) in enumerate(st.ltb_segments):
         e = env.abs_extreme("moment", a, b)
-        low_mn = min(fl.cap, l1)  # Cb >= 1
-        bounds.append((abs(e.value) / (low_mn / fl.omega) if low_mn > 0 else math.inf,
-                       e.pattern))
-    bounds.sort(key=lambda t: -t[0])
+        mmax = abs(e.value)
+        if l1 == math.inf or free:
+            cb = 1.0
+        else:
+            cb = cb_factor(mmax, *(env.abs_value("moment", a + f * (b - a))
+                                   for f in (0.25, 0.5, 0.75)))
+        if cb * l1 < fl.cap:
+            mn, text = cb * l1, f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
+        else:
+            mn, text = fl.cap, fl.cap_text
+        allow = mn / fl.omega
+        segs.append((mmax / allow if allow > 0 else math.inf, idx, e, cb, allow, text))
+    r_b, idx, e_b, cb, allow, text = max(segs, key=lambda t: t[0])
     best: dict[str, tuple] = {}
     done: dict[tuple, Solution] = {}
 
-    def run(p):
-        sol = ss.state(k, p)
-        done[p] = sol
-        for c in checks_for(job, sol, st):
-            _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
+    def get(p):
+        if p not in done:
+            done[p] = ss.state(k, p)
+        return done[p]
 
     for p in wanted:
-        run(p)
-    for bound, p in bounds:
-        if p in done:
-            continue
-        if "bending" in best and bound <= best["bending"][0].ratio:
-            break
-        run(p)
+        sol = get(p)
+        for c in checks_for(job, sol, st)[1:]:  # shear, deflection (and any added later)
+            _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
+    # bending: the governing length's pattern, checked on that length alone for the check's
+    # fields, with the envelope's demand, Cb and limit
+    p = e_b.pattern
+    sol = get(p)
+    a, b = st.ltb_segments[idx][:2]
+    c = checks_for(job, sol, replace(st, ltb_segments=(st.ltb_segments[idx],)))[0]
+    if not fl.stress_s:
+        c = replace(c, demand=abs(e_b.value), limit=allow, at=e_b.at,
+                    formula=f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, "
+                            f"Omega_b {fl.omega:g}", extra={**c.extra, "cb": cb})
+    if len(st.ltb_segments) > 1:
+        c = replace(c, detail="; ".join(x for x in (c.detail, f"unbraced length {fmt(a)} to "
+                                                    f"{fmt(b)} governs") if x))
+    best = {"bending": (c, p, None, describe_pattern(ss, p, fmt), sol), **best}
     # the span list of the deflection check: each span's worst over all patterns
     c = best["deflection"][0]
     spans = []

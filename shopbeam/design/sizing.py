@@ -302,15 +302,23 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     for sl in ss.span_loads:
         allpos |= _positions(sl)
     sw_sol = solve(replace(empty, loads=(sw_unit,) + tuple(_dummies(allpos))))
-    pats = ss.patterns
-    breaks = ss.fixed.moment.breaks
+    if sw_sol.moment.breaks.shape != ss.fixed.moment.breaks.shape:
+        raise ValueError("sizing: the self-weight solution does not share the layout's breaks")
+    from shopbeam.design.loading import build_envelope
 
     def stack(name):
-        f = getattr(ss.fixed, name).coeffs - getattr(sw_sol, name).coeffs  # dead only
-        s = getattr(sw_sol, name).coeffs
-        lv = np.array([getattr(ss.live, name).coeffs + sum(
-            (getattr(ss.spans[i], name).coeffs for i in p), np.zeros_like(f)) for p in pats])
-        return f, s, lv
+        """(dead, self-weight per unit, live states (S, P, w), breaks). Without patterns S = 1;
+        with them the S = 2 states are the exact upper and lower envelopes over all patterns
+        (see loading.build_envelope), the same for every section: the spans' signs do not
+        depend on EI or on the section's own weight."""
+        sw = getattr(sw_sol, name).coeffs
+        fx = getattr(ss.fixed, name).coeffs
+        lv = getattr(ss.live, name).coeffs
+        if not parts.patterned:
+            return fx - sw, sw, lv[None], ss.fixed.moment.breaks
+        e = build_envelope(ss, name)
+        s_ = e.carry(sw)
+        return e.fixed - s_, s_, np.stack([e.live + e.up, e.live + e.down]), e.breaks
 
     M = stack("moment")
     V = stack("shear")
@@ -333,7 +341,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
-    S = len(pats)
+    S = M[2].shape[0]
     wsw = np.array([r[5] for r in rs])
     ei = np.array([r[9] for r in rs])
     vallow = np.array([r[8] for r in rs])
@@ -351,7 +359,18 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     # fixed + w_self x sw + kk x live[state]; its allowable depends on its direction
     from shopbeam.design import local as _local
 
-    items = _local.sizing_items(base, ss, sw_sol, pats)
+    # live part per state of each force: with patterns, from each span's own part taken
+    # where it adds (upper) and where it relieves (lower), the same two states as above
+    if parts.patterned:
+        basis = [()] + [(i,) for i in range(len(ss.spans))]
+        items = []
+        for it in _local.sizing_items(base, ss, sw_sol, basis):
+            lv = np.asarray(it[6], float)
+            d = lv[1:] - lv[0]
+            items.append(it[:6] + (np.array([lv[0] + d[d > 0].sum(), lv[0] + d[d < 0].sum()]),)
+                         + tuple(it[7:]))
+    else:
+        items = _local.sizing_items(base, ss, sw_sol, [()])
     n_it = len(items)
     if n_it:
         orient = np.array([1.0 if it[1] == "top" else -1.0 for it in items])  # + pulls
@@ -390,7 +409,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         return worst, names
 
     def combo(arrs, kk):
-        f, s, lv = arrs  # (P,w), (P,w), (S,P,w)
+        f, s, lv, _ = arrs  # (P,w), (P,w), (S,P,w)
         base_ = f[None] + wsw[:, None, None] * s[None]  # (R,P,w)
         out = base_[:, None] + kk[:, None, None, None] * lv[None]  # (R,S,P,w)
         return out.reshape(R * S, *f.shape)
@@ -399,32 +418,36 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         """(R,) governing ratio and (R,) index of the governing check at factors k."""
         kk = k * (1 + imp)
         mco = combo(M, kk)
-        bend = np.zeros(R * S)
-        mmaxes = _absmax_many(mco, breaks, [(a, bb) for a, bb, _ in ltb_segs])
+        mb, vb, ub = M[3], V[3], U[3]
+        bend = np.zeros(R)
+        mmaxes = _absmax_many(mco, mb, [(a, bb) for a, bb, _ in ltb_segs])
         for si, (a, bb, _free) in enumerate(ltb_segs):
-            mmax = mmaxes[si]
+            # with patterns: Mmax, MA, MB, MC each the largest over both envelopes (the
+            # evaluation's rule, conservative against every single pattern)
+            mmax = mmaxes[si].reshape(R, S).max(axis=1)
             if np.all(np.isinf(ltb1[:, si])) or free[si]:
-                cb = np.ones(R * S)
+                cb = np.ones(R)
             else:
-                q = [np.abs(_value_at(mco, breaks, a + f_ * (bb - a))) for f_ in (0.25, 0.5, 0.75)]
+                q = [np.abs(_value_at(mco, mb, a + f_ * (bb - a))).reshape(R, S).max(axis=1)
+                     for f_ in (0.25, 0.5, 0.75)]
                 den = 2.5 * mmax + 3 * q[0] + 4 * q[1] + 3 * q[2]
                 cb = np.where(den > 0, np.minimum(12.5 * mmax / np.where(den > 0, den, 1), 3.0), 1.0)
-            mn = np.minimum(np.repeat(cap, S), cb * np.repeat(ltb1[:, si], S))
-            bend = np.maximum(bend, mmax * np.repeat(omega, S) / mn)
-        shear = _absmax_many(combo(V, kk), breaks, [(0.0, L)])[0] / np.repeat(vallow, S)
+            mn = np.minimum(cap, cb * ltb1[:, si])
+            bend = np.maximum(bend, mmax * omega / mn)
+        shear = (_absmax_many(combo(V, kk), vb, [(0.0, L)])[0].reshape(R, S).max(axis=1)
+                 / vallow)
         uco = combo(U, kk)
-        defl = np.zeros(R * S)
-        eis = np.repeat(ei, S)
-        for um, lim in zip(_absmax_many(uco, breaks, [(a, bb) for a, bb, _ in spans]), limits):
-            defl = np.maximum(defl, um / eis / lim)
-        ldef = np.zeros(R * S)
+        defl = np.zeros(R)
+        for um, lim in zip(_absmax_many(uco, ub, [(a, bb) for a, bb, _ in spans]), limits):
+            defl = np.maximum(defl, um.reshape(R, S).max(axis=1) / ei / lim)
+        ldef = np.zeros(R)
         if live_n:
             lv = U[2]
             lco = (kk[:, None, None, None] * lv[None]).reshape(R * S, *lv.shape[1:])
-            for um, lim in zip(_absmax_many(lco, breaks, [(a, bb) for a, bb, _ in spans]),
+            for um, lim in zip(_absmax_many(lco, ub, [(a, bb) for a, bb, _ in spans]),
                                live_limits):
-                ldef = np.maximum(ldef, um / eis / lim)
-        allr = np.stack([bend, shear, defl, ldef]).reshape(4, R, S).max(axis=2)  # worst pattern
+                ldef = np.maximum(ldef, um.reshape(R, S).max(axis=1) / ei / lim)
+        allr = np.stack([bend, shear, defl, ldef])
         allr = np.vstack([allr, local_ratio(kk)[0][None, :]])
         return allr.max(axis=0), allr.argmax(axis=0)
 
