@@ -270,9 +270,54 @@ def describe_dimension(q) -> str:
     return f"a quantity in {q.units:~}"
 
 
+# The plain quantities most jobs are made of ("12 ft", "-250 lbf", "10 ft 6 in"), read
+# without pint; anything else goes to the full parser below. SI factor per unit and kind.
+_PLAIN_UNITS: dict[str, dict[str, float]] = {
+    "length": {"ft": FT, "in": IN, "m": 1.0, "mm": 1e-3, "cm": 1e-2},
+    "force": {"lbf": LBF, "kip": KIP, "N": 1.0, "kN": 1e3},
+    "line_load": {"lbf/ft": LBF / FT, "lbf/in": LBF / IN, "N/m": 1.0, "kN/m": 1e3},
+    "moment": {"lbf*ft": LBF * FT, "lbf*in": LBF * IN, "N*m": 1.0, "kN*m": 1e3},
+    "stress": {"psi": PSI, "ksi": KSI, "MPa": 1e6},
+}
+_PLAIN = re.compile(r"\s*([+-]?)(\d+(?:\.\d*)?|\.\d+)\s+([A-Za-z*/]+)\s*")
+_FT_IN = re.compile(r"\s*([+-]?)(\d+)\s+ft\s+(\d+(?:\.\d*)?|\.\d+)\s+in\s*")
+
+
+def plain_value(text, kind: str) -> float | None:
+    """SI value of a plain shop quantity ("12 ft", "-250 lbf", "10 ft 6 in"), or None when
+    the text is anything else (then `parse` reads it with the full parser)."""
+    table = _PLAIN_UNITS.get(kind)
+    if table is None or not isinstance(text, str) or len(text) > 40:
+        return None
+    m = _PLAIN.fullmatch(text)
+    if m:
+        f = table.get(m.group(3))
+        if f is None:
+            return None
+        v = float(m.group(2)) * f
+        return -v if m.group(1) == "-" else v
+    if kind == "length":
+        m = _FT_IN.fullmatch(text)
+        if m:
+            v = (int(m.group(2)) + float(m.group(3)) / 12) * FT
+            return -v if m.group(1) == "-" else v
+    return None
+
+
 def parse(text, kind: str, key: str = "", *, positive: bool = False,
           nonnegative: bool = False) -> float:
     """Parse `text` as a `kind` (see KINDS) and return the SI value as a float."""
+    value = plain_value(text, kind)
+    if value is None:
+        value = _parse_full(text, kind, key)
+    if positive and value <= 0:
+        raise InputError(f"{text!r} must be greater than zero", key)
+    if nonnegative and value < 0:
+        raise InputError(f"{text!r} must not be negative", key)
+    return value
+
+
+def _parse_full(text, kind: str, key: str = "") -> float:
     ref, words, example = KINDS[kind]
     hint = re.search(r'"[-\d.]+ ([^"]+)"', example)
     q = quantity(text, key, hint.group(1) if hint else "ft", kind)
@@ -287,10 +332,6 @@ def parse(text, kind: str, key: str = "", *, positive: bool = False,
                          f"write {SPELLINGS.get(kind, ref)} (e.g. {example})", key)
     if not math.isfinite(value):
         raise InputError(f"{text!r} is out of range", key)
-    if positive and value <= 0:
-        raise InputError(f"{text!r} must be greater than zero", key)
-    if nonnegative and value < 0:
-        raise InputError(f"{text!r} must not be negative", key)
     return value
 
 

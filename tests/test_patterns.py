@@ -180,3 +180,54 @@ def test_sizing_a_twelve_span_unbraced_shelf_agrees_with_each_section_checked_al
     for r in picks:
         ev = evaluate(_replace(job, section=r.section))
         assert r.ratio == pytest.approx(max(c.ratio for c in ev.checks), rel=1e-9)
+
+
+MOVING3 = """schema = 1
+title = "Monorail over three hangers"
+[beam]
+length = "20 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "9 ft"
+type = "roller"
+[[supports]]
+at = "20 ft"
+type = "roller"
+[[moving]]
+label = "trolley"
+loads = ["-1000 lbf", "-1000 lbf"]
+dead = ["-60 lbf", "-60 lbf"]
+spacing = ["2 ft"]
+"""
+
+
+def test_moving_reaction_envelope_against_a_fine_resolve():
+    # test oracle: the reactions re-solved at 3001 evenly spaced trolley positions; the
+    # envelope may only be (slightly) worse, and agrees closely
+    from shopbeam.design.loading import read_moving
+
+    job = parse_job_text(MOVING3)
+    ev = evaluate(job)
+    ss = state_set(job)
+    mv = read_moving(job)[0]
+    lo, hi = mv.p_range
+    kk = 1.0 + ss.parts.impact
+    ups = np.full(3, -np.inf)
+    downs = np.full(3, np.inf)
+    for p in np.linspace(lo, hi, 3001):
+        wheels = tuple(Load("point", at=p + o, value=d + kk * f)
+                       for o, f, d in zip(mv.offsets, mv.live, mv.dead))
+        sol = solve(ss.beam.with_loads(tuple(ss.static_loads(1.0, ())) + wheels))
+        fr = np.array([r.force for r in sol.reactions])
+        ups, downs = np.maximum(ups, fr), np.minimum(downs, fr)
+    scale = float(np.max(np.abs(ups)))
+    for r, up, down in zip(ev.reactions, ups, downs):
+        assert r["max_up"] >= up - 1e-9 * scale and r["max_up"] <= up + 1e-4 * scale
+        assert r["max_down"] <= down + 1e-9 * scale and r["max_down"] >= down - 1e-4 * scale
+        assert "first wheel at" in r["max_up_state"]
+    # the end hanger of the short span is pulled down with the trolley in the long span
+    assert ev.reactions[0]["max_down"] < 0

@@ -23,6 +23,7 @@ from __future__ import annotations
 
 import math
 from dataclasses import dataclass, replace
+from functools import lru_cache
 
 import numpy as np
 
@@ -196,20 +197,27 @@ def state_set(job, section=None, parts: LoadParts | None = None, ei: float | Non
 
         allpos |= {x for x in brace_points(job)[1] if 0 < x < job.length}
     dummies = tuple(_dummies(allpos))
-    # one pass for every unit solution: they share the breaks and the factorised system
-    sols = solve_many(empty, [tuple(parts.fixed) + dummies, tuple(parts.live) + dummies]
-                      + [tuple(sl) + dummies for sl in span_loads], length_fmt)
+    # one pass for every unit solution: they share the breaks (every position of every case
+    # is a break of all) and the factorised system
+    sols = solve_many(empty, [tuple(parts.fixed) + dummies, tuple(parts.live)]
+                      + [tuple(sl) for sl in span_loads], length_fmt)
     return StateSet(empty, sols[0], sols[1], tuple(sols[2:]), segs, parts, tuple(span_loads))
 
 
 def describe_pattern(ss: StateSet, pattern, fmt=None) -> str:
     if not ss.parts.patterned:
         return ""
-    fmt = fmt or (lambda x: f"{x:.4g} m")
     if not pattern:
         return "patterned loads off everywhere"
-    names = [f"{ss.segs[i][2]} {fmt(ss.segs[i][0])}-{fmt(ss.segs[i][1])}" for i in pattern]
-    return "patterned loads on " + ", ".join(names)
+    cache = ss.__dict__.setdefault("_words", {})
+    key = (pattern, fmt)
+    if key not in cache:
+        names = cache.get(("names", fmt))
+        if names is None:
+            f = fmt or (lambda x: f"{x:.4g} m")
+            names = cache[("names", fmt)] = [f"{k} {f(a)}-{f(b)}" for a, b, k in ss.segs]
+        cache[key] = "patterned loads on " + ", ".join(names[i] for i in pattern)
+    return cache[key]
 
 
 # ------------------------------------------------------------------ pattern envelopes
@@ -530,9 +538,15 @@ class Evaluation:
 
 
 def _fmt_for(job):
+    return _length_fmt(job.units)
+
+
+@lru_cache(maxsize=8)
+def _length_fmt(system: str):
+    """One formatter per unit system (also the key of the pattern-words cache)."""
     from shopbeam import units
 
-    return lambda x: units.fmt(x, "length", job.units)
+    return lambda x: units.fmt(x, "length", system)
 
 
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
@@ -673,19 +687,14 @@ def _interior(static_c: np.ndarray, cm_fits: list, h: float, a: float, b: float)
     sc = np.zeros(ds + 1)
     sc[: len(static_c)] = static_c
     hp = h ** np.arange(ds + 1)
-    fs, gs = [], []
-    for r in rho:
-        cm = np.zeros(ds + 1)
-        dcm = np.zeros(ds + 1)
-        for m, fit in enumerate(cm_fits):
-            cm[m] = np.polynomial.chebyshev.chebval(r, fit)
-            dcm[m] = np.polynomial.chebyshev.chebval(r, np.polynomial.chebyshev.chebder(fit))
-        tot = (sc + cm) * hp  # in sigma = tau / h
-        fsig = tot[1:] * np.arange(1, ds + 1)  # d/dsigma, ascending
-        gp = dcm * hp
-        fs.append(fsig)
-        gs.append(gp)
-    fs, gs = np.array(fs), np.array(gs)
+    cm = np.zeros((n_nodes, ds + 1))
+    dcm = np.zeros((n_nodes, ds + 1))
+    for m, fit in enumerate(cm_fits):  # all nodes at once
+        cm[:, m] = np.polynomial.chebyshev.chebval(rho, fit)
+        dcm[:, m] = np.polynomial.chebyshev.chebval(rho, np.polynomial.chebyshev.chebder(fit))
+    tot = (sc[None, :] + cm) * hp  # in sigma = tau / h
+    fs = tot[:, 1:] * np.arange(1, ds + 1)  # d/dsigma, ascending
+    gs = dcm * hp
 
     def degree(arr):
         mag = np.max(np.abs(arr), axis=0)
@@ -754,19 +763,26 @@ def candidate_positions(job, ss: StateSet, static_loads, k: float, cache=None) -
     static = solve(replace(ss.beam, loads=tuple(static_loads)))
     cache = cache if cache is not None else {}
     has_dead = any(mv.dead)
+    # every sampling solve of every p-piece in one batched pass (only evaluated at points)
+    todo = [p for a, b in zip(pb, pb[1:]) if b - a > tol for p in _cheb_nodes(a, b, _NS)
+            if (round(p / tol), "l") not in cache]
+    if todo:
+        cases = [_wheel_beam(ss.beam, mv, p, "live").loads for p in todo]
+        if has_dead:
+            cases += [_wheel_beam(ss.beam, mv, p, "dead").loads for p in todo]
+        got = solve_many(ss.beam, cases, candidates=False)
+        for i, p in enumerate(todo):
+            cache[(round(p / tol), "l")] = got[i]
+            cache[(round(p / tol), "d")] = got[len(todo) + i] if has_dead else None
     for a, b in zip(pb, pb[1:]):
         if b - a <= tol:
             continue
         ps = _cheb_nodes(a, b, _NS)
-        sols = []
-        for p in ps:
-            key = (round(p / tol), "l")
-            if key not in cache:
-                cache[key] = solve(_wheel_beam(ss.beam, mv, p, "live"))
-                cache[(round(p / tol), "d")] = (solve(_wheel_beam(ss.beam, mv, p, "dead"))
-                                                if has_dead else None)
-            sl, sd = cache[key], cache[(round(p / tol), "d")]
-            sols.append((sl, sd))
+        sols = [(cache[(round(p / tol), "l")], cache[(round(p / tol), "d")]) for p in ps]
+        for j in range(len(sols[0][0].reactions)):  # each reaction's stationary points
+            f = np.array([kk * sl.reactions[j].force + (sd.reactions[j].force if sd else 0.0)
+                          for sl, sd in sols])
+            cands.update(_stationary(ps, f, a, b, 6))
 
         def mov(name, x, side, i):
             sl, sd = sols[i]

@@ -500,14 +500,15 @@ def _solve(beam: Beam, length_fmt, exact: bool | None) -> Solution:
     return _finish(beam, breaks, final, z, unknowns, condition, False)
 
 
-def solve_many(beam: Beam, cases, length_fmt=None) -> list[Solution]:
+def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> list[Solution]:
     """One solution per load case (a list of loads each) on the same supports, in one pass.
 
     Every case shares one set of breaks (the positions of all cases), so their piece
     coefficients add term by term (superposition). The cases share one march and one
     factorised system (a right-hand side each). If that system is ill-conditioned each case
     is solved on its own by `solve` (which then answers in exact arithmetic). `beam.loads`
-    is ignored.
+    is ignored. `candidates=False` skips finding the extreme candidates (for solutions that
+    are only evaluated at points); they are then found on first use.
     """
     from dataclasses import replace
 
@@ -608,7 +609,10 @@ def solve_many(beam: Beam, cases, length_fmt=None) -> list[Solution]:
             if not np.all(np.isfinite(final)):
                 return one_by_one()
             out.append(_finish(replace(beam, loads=cases[c]), breaks, final, zs[:, c],
-                               unknowns, condition, False))
+                               unknowns, condition, False, candidates=False))
+    if candidates:  # one batched pass for every case
+        find_candidates([s.function(n) for s in out
+                         for n in ("shear", "moment", "slope", "deflection")])
     return out
 
 
@@ -685,7 +689,7 @@ def _gauss_exact(a: list[list[Fraction]], b: list[Fraction]) -> list[Fraction] |
     return z
 
 
-def _finish(beam, breaks, final, z, unknowns, condition, exact) -> Solution:
+def _finish(beam, breaks, final, z, unknowns, condition, exact, candidates=True) -> Solution:
     ei = beam.ei
 
     def pw(level: int, scale: float = 1.0) -> Piecewise:
@@ -708,7 +712,8 @@ def _finish(beam, breaks, final, z, unknowns, condition, exact) -> Solution:
     c1 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c1"][0]])
     c2 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c2"][0]])
     funcs = dict(shear=pw(1), moment=pw(2), slope=pw(3, 1.0 / ei), deflection=pw(4, 1.0 / ei))
-    find_candidates(list(funcs.values()))  # every renderer and check asks for extremes
+    if candidates:
+        find_candidates(list(funcs.values()))  # every renderer and check asks for extremes
     return Solution(
         beam=beam,
         reactions=tuple(reactions),

@@ -129,18 +129,46 @@ def _aisc_rows() -> tuple[dict, ...]:
     return tuple(_row(r) for r in csv.DictReader(_aisc_lines()))
 
 
+AISC_KEYS_FILE = "data/aisc-keys.json"  # canonical key -> data line, built by aisc_key_index
+
+
+def aisc_key_index(lines: tuple[str, ...] | None = None) -> dict[str, int]:
+    """Canonical key of every AISC label -> its line in the shipped table (first one wins).
+
+    Shipped pre-built as data/aisc-keys.json (a test rebuilds it and compares), so a look-up
+    is a dictionary access instead of a scan of the table.
+    """
+    lines = lines or _aisc_lines()
+    out: dict[str, int] = {}
+    for i, line in enumerate(lines[1:], start=1):
+        k = canon(line.split(",", 2)[1])
+        if k is not None and k not in out:
+            out[k] = i
+    return out
+
+
+@lru_cache(maxsize=1)
+def _aisc_keys() -> dict[str, int]:
+    import json
+
+    try:
+        data = json.loads(resources.files("shopbeam").joinpath(AISC_KEYS_FILE).read_text("utf-8"))
+        if data.get("lines") == len(_aisc_lines()):
+            return data["keys"]
+    except (OSError, ValueError, KeyError, AttributeError):
+        pass
+    return aisc_key_index()  # missing or stale: build it (about 60 ms)
+
+
 def _quick_aisc(k: str) -> Section | None:
-    """One AISC section by its canonical key, without building the whole index: a job names
-    one section, and a cold `shopbeam solve` should not pay for all 1,450 (None: not found
-    this way; the index decides)."""
-    prefix = k.split("|", 1)[0]
+    """One AISC section by its canonical key from the pre-built key index: a job names one
+    section, and a cold `shopbeam solve` should not pay for all 1,450 (None: not found this
+    way; the index decides)."""
+    i = _aisc_keys().get(k)
+    if i is None:
+        return None
     lines = _aisc_lines()
-    for line in lines[1:]:
-        label = line.split(",", 2)[1]
-        up = label.upper()
-        if up.startswith(prefix) and up[len(prefix):len(prefix) + 1].isdigit() and canon(label) == k:
-            return _from_aisc(_row(next(csv.DictReader([lines[0], line]))))
-    return None
+    return _from_aisc(_row(next(csv.DictReader([lines[0], lines[i]]))))
 
 
 def _f(row, c, unit):
