@@ -236,10 +236,10 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("job", help=JOB_HELP)
     lib_opt(s)
     s.add_argument("--kind", default=None,
-                   help="catalog kind to sweep, e.g. W, HSS-rect, C, lumber, LVL (default: the "
-                        "job's own; see shopbeam shapes --help for the list); wood on a metal "
-                        "job, or metal on a wood job, sweeps a stated default material of that "
-                        "family")
+                   help="catalog kind to sweep, e.g. W, HSS-rect, C, lumber, LVL, or all (every "
+                        "kind of the job's material family) (default: the job's own; see "
+                        "shopbeam shapes --help for the list); wood on a metal job, or metal on "
+                        "a wood job, sweeps a stated default material of that family")
     s.add_argument("--max-depth", default=None, metavar="LENGTH",
                    help="deepest section allowed, e.g. \"6 in\"")
     s.add_argument("--stock", default=None, metavar="FILE",

@@ -247,8 +247,11 @@ def _candidates(job, kind, max_depth, stock):
 # ------------------------------------------------------------------ the sweep
 def size(job, kind: str | None = None, max_depth: float | None = None, stock=None,
          with_capacity: bool = True) -> SizeResult:
-    """Sweep sections for the job; rows sorted by weight per length, lightest first."""
+    """Sweep sections for the job; rows sorted by weight per length, lightest first.
+    `kind = "all"` sweeps every catalog kind of the job's material family (metal or wood)."""
     t0 = time.perf_counter()
+    if kind is not None and kind.lower() == "all" and stock is None:
+        return _size_all(job, max_depth, with_capacity, t0)
     kind = kind or default_kind(job)
     material_note = ""
     if stock is None:
@@ -273,6 +276,30 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
                       time.perf_counter() - t0, method,
                       getattr(stock, "currency", "") if stock is not None else "",
                       tuple(skipped), material_note)
+
+
+def _size_all(job, max_depth, with_capacity, t0) -> SizeResult:
+    from shopbeam.errors import InputError
+    from shopbeam.members import catalog
+
+    wood = getattr(job.material, "kind", "") in ("lumber", "lvl")
+    rows: dict[str, SizeRow] = {}
+    skipped, methods = [], set()
+    for k in catalog.kinds():
+        if (k.lower() in ("lumber", "lvl")) != wood:
+            continue
+        try:
+            res = size(job, k, max_depth, None, with_capacity)
+        except InputError as exc:  # e.g. a kind with no section under --max-depth
+            skipped.append(f"{k}: {exc.problem.message}")
+            continue
+        methods.add(res.method)
+        skipped += list(res.skipped)
+        for r in res.rows:  # kinds overlap (HSS is HSS-rect and HSS-round): one row each
+            rows.setdefault(r.designation, r)
+    out = sorted(rows.values(), key=lambda r: (r.weight, r.designation))
+    return SizeResult(job, "all", tuple(out), time.perf_counter() - t0,
+                      "every catalog kind: " + "; ".join(sorted(methods)), "", tuple(skipped))
 
 
 def _fast(job, base, parts, cands, state_set, with_capacity):

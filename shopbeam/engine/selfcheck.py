@@ -99,7 +99,10 @@ def self_checks(sol: Solution) -> list[SelfCheck]:
     breaks = sol.shear.breaks  # the solver merges positions within 1e-9 L onto one break
 
     def add(d, x, v):
-        j = int(np.argmin(np.abs(breaks - x)))
+        # the nearest break by bisection (log of the pieces per load, not all of them)
+        i = int(np.searchsorted(breaks, x))
+        j = i if i == 0 or (i < len(breaks) and breaks[i] - x < x - breaks[i - 1]) else i - 1
+        j = min(j, len(breaks) - 1)
         k = float(breaks[j]) if abs(breaks[j] - x) <= 1.01e-9 * L else x
         d[k] = d.get(k, 0.0) + v
 
