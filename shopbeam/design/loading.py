@@ -463,15 +463,34 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
 
     for p in wanted:
         sol = get(p)
-        for c in checks_for(job, sol, st)[1:]:  # shear, deflection (and any added later)
+        for c in checks_for(job, sol, st)[1:]:  # shear, deflection and the local checks
             _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
+    # local checks (concentrated forces at supports and point loads): each support's largest
+    # upward and downward reaction, and every patterned point load on at once
+    from shopbeam.design import local as _local
+
+    # (a local check reads only the reactions and the point loads, so one state with every
+    # support at its largest upward reaction and one at its largest downward reaction, all
+    # patterned point loads on, cover every pattern without solving one per support)
+    sec = getattr(st, "section", None) or job.section
+    reactions = env.reactions()
+    allon = tuple(range(len(ss.segs)))
+    base_sol = get(allon)
+    for c in _local.local_checks(job, base_sol, sec):
+        _keep(best, c, allon, None, describe_pattern(ss, allon, fmt), base_sol)
+    for key, which in (("max_up", "upward"), ("max_down", "downward")):
+        fake = replace(base_sol, reactions=tuple(
+            replace(r, force=e[key]) for r, e in zip(base_sol.reactions, reactions)))
+        for c in _local.local_checks(job, fake, sec):
+            _keep(best, c, allon, None, f"each support at its largest {which} reaction over "
+                  "all patterns (see the reaction envelope)", base_sol)
     # bending: the governing length's pattern, checked on that length alone for the check's
     # fields, with the envelope's demand, Cb and limit
     p = e_b.pattern
     sol = get(p)
     a, b = st.ltb_segments[idx][:2]
     c = checks_for(job, sol, replace(st, ltb_segments=(st.ltb_segments[idx],)))[0]
-    if not fl.stress_s:
+    if not fl.stress_s and not getattr(fl, "special", False):
         c = replace(c, demand=abs(e_b.value), limit=allow, at=e_b.at,
                     formula=f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, "
                             f"Omega_b {fl.omega:g}", extra={**c.extra, "cb": cb})
