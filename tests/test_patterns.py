@@ -234,3 +234,33 @@ def test_moving_reaction_envelope_against_a_fine_resolve():
         assert "first wheel at" in r["max_up_state"]
     # the end hanger of the short span is pulled down with the trolley in the long span
     assert ev.reactions[0]["max_down"] < 0
+
+
+def test_hinge_shear_and_fixed_end_moment_over_patterns_match_the_walk():
+    # a Gerber hinge in a 4-span shelf fixed at the left end: the connection states from the
+    # envelopes give the same extremes as every one of the 16 patterns
+    from shopbeam.design.local import fixed_end_moments, hinge_shears
+
+    text = shelf([6, 8, 8, 6], extra="", fixed_left=True)
+    text = text.replace('[[loads]]', '[[supports]]\nat = "10 ft"\ntype = "hinge"\n[[loads]]', 1)
+    job = parse_job_text(text)
+    ss = state_set(job)
+    states = [ss.state(1.0, p) for p in ss.patterns]
+    sol = ss.state(1.0, tuple(range(len(ss.segs))))
+    h = hinge_shears(job, sol)
+    assert len(h) == 1
+    walk = max((s.shear(10 * FT, side) for s in states for side in ("left", "right")), key=abs)
+    assert h[0]["shear"] == pytest.approx(walk, rel=1e-9)
+    f = fixed_end_moments(job, sol)
+    walk_m = max((s.reactions[0].moment for s in states), key=abs)
+    assert f[0]["moment"] == pytest.approx(walk_m, rel=1e-9)
+
+
+def test_governing_wheel_positions_are_plain_data():
+    job = parse_job_text(MOVING3)
+    ev = evaluate(job)
+    w = ev.worst["bending"]["wheels"]
+    p = ev.worst["bending"]["position"]
+    assert [x for x, _ in w] == pytest.approx([p, p + 2 * FT], abs=1e-12)
+    # 1000 lbf live x (1 + 0 impact: not a lifting job) + 60 lbf dead, down, per wheel
+    assert [f for _, f in w] == pytest.approx([-1060 * LBF] * 2, rel=1e-12)

@@ -2,10 +2,13 @@
 
 The job's member loads split into fixed loads (dead loads and self-weight, never scaled,
 never patterned), live loads (scaled by the capacity factor k and by the impact allowance)
-and patterned live loads, which are cut at the supports into one piece per span or overhang
-and applied in every combination of loaded and empty spans. Every state is a superposition
-of solutions solved once (each carries zero loads at every position any other carries, so
-all share one set of breaks and add coefficient by coefficient).
+and patterned live loads, which are cut at the supports into one piece per span or overhang.
+Every state is a superposition of solutions solved once, in one `solve_many` pass (they share
+one set of breaks and add coefficient by coefficient). The 2^n patterns of loaded and empty
+spans are never walked: the exact upper and lower envelopes over all of them (each span's
+unit solution taken where it adds and left off where it relieves, see `build_envelope`) give
+every extreme and name the pattern that gives it; only those patterns are solved and checked.
+`walk_patterns` keeps the walk as a test oracle.
 
 Moving point loads (``[[moving]]``: a wheel set at fixed spacing over a travel range) are
 found exactly. For a wheel set at position p the response at x is a piecewise polynomial in
@@ -15,7 +18,10 @@ break or at the end of its travel), at a stationary point in p of the response a
 break, at a stationary point in p of the response under a wheel, or at an interior critical
 point of a cell. The second and third kinds are polynomials in p, fitted exactly from solves
 at Chebyshev nodes; the fourth comes from the resultant of the two partial derivatives. The
-checks are run at every candidate position; the worst position of each check is reported.
+checks are run at every candidate position; the worst position of each check is reported,
+with its wheel positions and loads as plain data (`Evaluation.worst[name]["wheels"]`). The
+sampling solves all go in one batched pass; each reaction's stationary points in p are
+candidates too, so the reaction envelope is over the same exact positions.
 Under moving loads Cb is taken as 1.0 (conservative, stated).
 """
 
@@ -403,6 +409,32 @@ class Envelopes:
         return out
 
 
+def connection_states(job, k: float = 1.0, ss: "StateSet | None" = None) -> list[Solution]:
+    """The few pattern states that give, over every pattern, the largest and smallest shear
+    on each side of every hinge and reaction moment at every fixed support (the same
+    extremes a walk of all 2^n patterns finds; at most 4 per hinge and 2 per fixed end)."""
+    ss = ss or state_set(job)
+    env = Envelopes(ss, k)
+    e = env.env["shear"]
+    tol = 2.5e-10 * ss.beam.length
+    pats = set()
+    for s in ss.beam.supports:
+        if s.kind != "hinge":
+            continue
+        for side in ("left", "right"):
+            j = int(e.breaks.searchsorted(s.at + tol, "right") if side == "right"
+                    else e.breaks.searchsorted(s.at - tol, "left")) - 1
+            j = min(max(j, 0), len(e.breaks) - 2)
+            pats.update((e.pattern(j, True), e.pattern(j, False)))
+    for j, r in enumerate(ss.fixed.reactions):
+        if r.kind == "fixed":
+            each = [sp.reactions[j].moment for sp in ss.spans]
+            top = max([abs(v) for v in each] + [0.0])
+            pats.add(tuple(i for i, v in enumerate(each) if v > 1e-13 * top))
+            pats.add(tuple(i for i, v in enumerate(each) if v < -1e-13 * top))
+    return [ss.state(k, p) for p in sorted(pats)]
+
+
 def pattern_checks(job, ss: "StateSet", k: float, st):
     """The checks over every pattern from the exact envelopes: (best per check, states run).
 
@@ -615,8 +647,17 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
             c = replace(c, formula=c.formula + " (moving loads: Cb = 1.0)")
         checks.append(c)
         worst[name] = {"pattern": pattern, "position": p, "words": words}
+        if p is not None:  # plain data for checks under the wheels: (x, force + up) each
+            worst[name]["wheels"] = wheel_loads(ss.parts.moving[0], p,
+                                                k * (1 + ss.parts.impact))
     gov = max(checks, key=lambda c: c.ratio)
     return Evaluation(k, tuple(checks), worst, count, best[gov.name][4], tuple(reactions))
+
+
+def wheel_loads(mv: MovingLoad, p: float, kk: float) -> list[tuple[float, float]]:
+    """Where each wheel stands and what it carries (N, + up; live x kk plus dead) with the
+    first wheel at p: the governing wheel positions as plain data (`Evaluation.worst`)."""
+    return [(float(p + s), float(d + kk * f)) for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
 
 
 def _keep_reactions(out: list[dict], sol: Solution, words: str) -> None:

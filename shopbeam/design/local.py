@@ -389,9 +389,8 @@ def _states(job, sol):
 
     try:
         parts = loading.load_parts(job)
-        if parts.patterned and not parts.moving:
-            ss = loading.state_set(job)
-            return [ss.state(1.0, p) for p in ss.patterns], "over every load pattern"
+        if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
+            return loading.connection_states(job), "over every load pattern"
         if parts.impact and not parts.moving:
             ss = loading.state_set(job)
             return [ss.state(1.0, ())], "impact included"
