@@ -159,7 +159,10 @@ def patterned_jobs(draw):
     brace = ""
     if not braced and draw(st.booleans()):
         brace = f'braces = ["{L / 3!r} ft"]'
-    return shelf(spans, braced, brace, over, fixed_left, loads), braced
+    text = shelf(spans, braced, brace, over, fixed_left, loads)
+    if draw(st.booleans()):  # floors: deflection under the live loads alone too
+        text += '[criteria]\ndeflection = "floor"\n'
+    return text, braced
 
 
 @settings(max_examples=40, **SETTINGS)

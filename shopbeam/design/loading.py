@@ -468,6 +468,23 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
         if r > worst_d:
             worst_d, pat_d = r, e.pattern
     want(pat_d)
+    live_n = getattr(st, "live_ratio", None)
+    if live_n:  # deflection under the live loads alone (floors): its own worst pattern
+        e = env.env["deflection"]
+        tol = 1e-9 * L
+        top, pat_l = -1.0, ()
+        for upper in (True, False):
+            r_, x_, v_ = _extreme_rows(e.breaks, e.live + (e.up if upper else e.down))
+            for a, b, kind in ss.segs:
+                m = (e.breaks[r_] >= a - tol) & (e.breaks[r_ + 1] <= b + tol)
+                if not m.any():
+                    continue
+                i = int(np.argmax(np.where(m, np.abs(v_), -1.0)))
+                judged = 2 * (b - a) if kind in ("cantilever", "overhang") else b - a
+                ratio = abs(v_[i]) / (judged / live_n)
+                if ratio > top:
+                    top, pat_l = ratio, e.pattern(int(r_[i]), upper)
+        want(pat_l)
     fl = st.flexure
     segs = []
     for idx, (a, b, free, l1, why) in enumerate(st.ltb_segments):
