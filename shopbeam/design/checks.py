@@ -32,6 +32,8 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass, field, replace
 
+import numpy as np
+
 from shopbeam.engine.solver import Solution, segments
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.jobs.rules import (DEFAULT_IMPACT, DEFLECTION_PRESETS,  # noqa: F401 (re-exported)
@@ -811,12 +813,32 @@ def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
     return fl, sh
 
 
-def cb_factor(mmax: float, ma: float, mb: float, mc: float) -> float:
-    """AISC 360-16 F1-1 (Rm = 1): Cb = 12.5 Mmax / (2.5 Mmax + 3 MA + 4 MB + 3 MC) <= 3."""
+def cb_factor(mmax, ma, mb, mc):
+    """AISC 360-16 F1-1 (Rm = 1): Cb = 12.5 Mmax / (2.5 Mmax + 3 MA + 4 MB + 3 MC) <= 3.
+
+    Takes floats or numpy arrays (the sizing sweep passes one value per section and state)."""
     den = 2.5 * mmax + 3 * ma + 4 * mb + 3 * mc
-    if den <= 0:
-        return 1.0
-    return min(12.5 * mmax / den, CB_MAX)
+    if np.ndim(den) == 0:
+        return 1.0 if den <= 0 else min(12.5 * mmax / den, CB_MAX)
+    safe = np.where(den > 0, den, 1.0)
+    return np.where(den > 0, np.minimum(12.5 * mmax / safe, CB_MAX), 1.0)
+
+
+def nominal_moment(cap, ltb1, cb):
+    """Mn = min(cap, Cb x ltb1(Lb)) (floats or numpy arrays): see `Flexure`."""
+    return np.minimum(cap, cb * ltb1)
+
+
+def judged_length(a: float, b: float, kind: str) -> float:
+    """The length a span's deflection is judged on: cantilevers and overhangs on twice theirs
+    (contract; common practice)."""
+    return 2 * (b - a) if kind in ("cantilever", "overhang") else b - a
+
+
+def deflection_limit(a: float, b: float, kind: str, ratio: float | None,
+                     absolute: float | None) -> float:
+    """The deflection limit of one span or overhang: an absolute limit, or judged length / n."""
+    return absolute if absolute is not None else judged_length(a, b, kind) / ratio
 
 
 def deflection_limits(job, sol: Solution, st: Strengths | None = None,
@@ -827,12 +849,12 @@ def deflection_limits(job, sol: Solution, st: Strengths | None = None,
     out = []
     for a, b, kind in segments(sol.beam):
         length = b - a
-        judged = 2 * length if kind in ("cantilever", "overhang") else length
+        judged = judged_length(a, b, kind)
         if ratio is None and st.defl_abs is not None:
             limit, rule = st.defl_abs, st.defl_words
         else:
             n = ratio or st.defl_ratio
-            limit = judged / n
+            limit = deflection_limit(a, b, kind, n, None)
             rule = f"{'2 x ' if judged != length else ''}{kind} length / {n:g}"
         ex = sol.deflection.extremes(a, b)
         out.append({"start": a, "end": b, "kind": kind, "demand": ex.abs_max, "limit": limit,
@@ -857,7 +879,8 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
         if cb * l1 < fl.cap and not fl.uses_cb:
             mn, text = l1, f"{fl.cap_text}; {why}"
         elif cb * l1 < fl.cap:
-            mn, text = cb * l1, f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
+            mn = float(nominal_moment(fl.cap, l1, cb))
+            text = f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
         else:
             mn, text = fl.cap, fl.cap_text
         allow = mn / fl.omega

@@ -23,8 +23,9 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from shopbeam import units
-from shopbeam.design.checks import (BASIS_WORDS, basis_of, deflection_rule, flexure,
-                             shear_strength, unbraced_segments)
+from shopbeam.design.checks import (BASIS_WORDS, basis_of, cb_factor, deflection_limit,
+                                    deflection_rule, flexure, nominal_moment, shear_strength,
+                                    unbraced_segments)
 from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import segments
@@ -379,9 +380,8 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     limits, live_limits = [], []
     live_n = job.criteria.live_deflection_ratio  # floors: L/360 under live load alone
     for a, bb, kind in spans:
-        judged = 2 * (bb - a) if kind in ("cantilever", "overhang") else bb - a
-        limits.append(d_abs if d_abs is not None else judged / n_ratio)
-        live_limits.append(judged / live_n if live_n else math.inf)
+        limits.append(deflection_limit(a, bb, kind, n_ratio, d_abs))
+        live_limits.append(deflection_limit(a, bb, kind, live_n, None) if live_n else math.inf)
     # local checks at supports and point loads (shopbeam.design.local): every force is
     # fixed + w_self x sw + kk x live[state]; its allowable depends on its direction
     from shopbeam.design import local as _local
@@ -457,9 +457,8 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
             else:
                 q = [np.abs(_value_at(mco, mb, a + f_ * (bb - a))).reshape(R, S).max(axis=1)
                      for f_ in (0.25, 0.5, 0.75)]
-                den = 2.5 * mmax + 3 * q[0] + 4 * q[1] + 3 * q[2]
-                cb = np.where(den > 0, np.minimum(12.5 * mmax / np.where(den > 0, den, 1), 3.0), 1.0)
-            mn = np.minimum(cap, cb * ltb1[:, si])
+                cb = cb_factor(mmax, *q)
+            mn = nominal_moment(cap, ltb1[:, si], cb)
             bend = np.maximum(bend, mmax * omega / mn)
         shear = (_absmax_many(combo(V, kk), vb, [(0.0, L)])[0].reshape(R, S).max(axis=1)
                  / vallow)

@@ -10,7 +10,7 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 
 SUPPORT_KINDS = ("fixed", "pin", "roller", "spring", "hinge")
-LOAD_KINDS = ("point", "moment", "uniform", "linear")
+LOAD_KINDS = ("point", "uniform", "linear", "moment")
 
 
 @dataclass(frozen=True)

@@ -246,44 +246,62 @@ def stability_problem(beam: Beam, fmt=None) -> str | None:
     return f"{part} can move up and down freely: add a support between {fmt(a0)} and {fmt(b0)}"
 
 
-def validate_geometry(beam: Beam) -> list[str]:
-    """Problems with where supports, hinges and loads sit (empty if none)."""
-    L = beam.length
+def geometry_problems(length: float, supports, loads, fmt=None) -> list[tuple[str, str]]:
+    """(key path, message) for every support, hinge and load that sits where it cannot.
+
+    The one geometry rule: the job reader reports these with file and line, `solve` refuses a
+    beam that has any. `fmt` formats positions (default: feet and inches).
+    """
+    fmt = fmt or _fmt_len
+    L = length
     tol = 1e-9 * L
-    out = []
+    out: list[tuple[str, str]] = []
+
+    def at(obj, what):
+        return f"{obj.key}.at" if obj.key else what
+
+    for s in supports:
+        if s.at < -tol or s.at > L + tol:
+            out.append((at(s, "supports"), f"at {fmt(s.at)} is outside the beam (0 to {fmt(L)})"))
+        if s.kind == "hinge" and (s.at <= tol or s.at >= L - tol):
+            out.append((at(s, "hinge"), "a hinge at the end of the beam releases nothing; put it "
+                        "inside the span or remove it"))
+        if s.kind == "spring" and not (s.stiffness > 0 and math.isfinite(s.stiffness)):
+            out.append((f"{s.key}.stiffness" if s.key else "spring",
+                        "a spring needs a positive stiffness"))
+    ordered = list(supports)
+    for i, a in enumerate(ordered):
+        for b in ordered[i + 1:]:
+            if abs(a.at - b.at) > tol:
+                continue
+            if (a.kind == "hinge") == (b.kind == "hinge"):
+                names = " and ".join(x.key or x.kind for x in (a, b))
+                out.append((at(b, "supports"), f"{names} are both at {fmt(a.at)}; keep one"))
+            elif "fixed" in (a.kind, b.kind):
+                out.append((at(b, "hinge"), "a hinge at a fixed support makes it a pin; use "
+                            "type = \"pin\""))
+    hinges = [s for s in supports if s.kind == "hinge"]
+    for ld in loads:
+        if ld.kind == "moment" and any(abs(ld.at - h.at) <= tol for h in hinges):
+            out.append((at(ld, "couple"), "a couple exactly at a hinge is ambiguous; apply it a "
+                        "little to one side"))
+        if any(p < -tol or p > L + tol for p in ld.describe_position()):
+            out.append((ld.key or "loads", f"lies outside the beam (0 to {fmt(L)})"))
+        if ld.kind in ("uniform", "linear") and not ld.end > ld.start:
+            out.append((f"{ld.key}.end" if ld.key else "loads", "end must be beyond start"))
+    return out
+
+
+def validate_geometry(beam: Beam) -> list[str]:
+    """Problems with the beam's length, stiffness and where its supports, hinges and loads
+    sit, as "key: message" lines (empty if none)."""
+    L = beam.length
     if not (L > 0 and math.isfinite(L)):
-        out.append("the beam length must be a positive finite length")
-        return out
+        return ["the beam length must be a positive finite length"]
+    out = []
     if not (beam.ei > 0 and math.isfinite(beam.ei)):
         out.append("EI (stiffness of the section) must be positive")
-    seen: dict[str, list[float]] = {}
-    for s in beam.supports:
-        if s.at < -tol or s.at > L + tol:
-            out.append(f"{s.key or 'support'}: at {_fmt_len(s.at)} is outside the beam (0 to {_fmt_len(L)})")
-        if s.kind == "hinge" and (s.at <= tol or s.at >= L - tol):
-            out.append(f"{s.key or 'hinge'}: a hinge at the end of the beam releases nothing; "
-                       "put it inside the span or remove it")
-        if s.kind == "spring" and not (s.stiffness > 0 and math.isfinite(s.stiffness)):
-            out.append(f"{s.key or 'spring'}: a spring needs a positive stiffness")
-        group = "hinge" if s.kind == "hinge" else "support"
-        for other in seen.get(group, []):
-            if abs(other - s.at) <= tol:
-                out.append(f"{s.key or s.kind}: two {group}s at {_fmt_len(s.at)}; keep one")
-        seen.setdefault(group, []).append(s.at)
-    for h in (s for s in beam.supports if s.kind == "hinge"):
-        for f in (s for s in beam.supports if s.kind == "fixed"):
-            if abs(f.at - h.at) <= tol:
-                out.append(f"{h.key or 'hinge'}: a hinge at a fixed support makes it a pin; use type = \"pin\"")
-        for ld in beam.loads:
-            if ld.kind == "moment" and abs(ld.at - h.at) <= tol:
-                out.append(f"{ld.key or 'couple'}: a couple exactly at the hinge at {_fmt_len(h.at)} "
-                           "is ambiguous; apply it a little to one side")
-    for ld in beam.loads:
-        pos = ld.describe_position()
-        if any(p < -tol or p > L + tol for p in pos):
-            out.append(f"{ld.key or 'load'}: lies outside the beam (0 to {_fmt_len(L)})")
-        if ld.kind in ("uniform", "linear") and not ld.end > ld.start:
-            out.append(f"{ld.key or 'load'}: end must be beyond start")
+    out += [f"{key}: {msg}" for key, msg in geometry_problems(L, beam.supports, beam.loads)]
     return out
 
 

@@ -24,6 +24,7 @@ from pathlib import Path
 from shopbeam import units
 from shopbeam.cautions import is_lifting, normal_tag
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
+from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, Basis)
@@ -948,18 +949,6 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             b = r.parse(s, "bearing", "length", f"supports[{i}].bearing", nonnegative=True)
             if b is not None:
                 bearings[f"supports[{i}]"] = b
-    tol = 1e-9 * (length or 1.0)
-    for a_i, a in enumerate(supports):
-        for b in supports[a_i + 1:]:
-            same = abs(a.at - b.at) <= tol
-            if same and (a.kind == "hinge") == (b.kind == "hinge"):
-                r.error(f"{a.key} and {b.key} are both at {units.fmt(a.at, 'length', system)}; keep one",
-                        f"{b.key}.at")
-            elif same and "fixed" in (a.kind, b.kind):
-                r.error("a hinge at a fixed support makes it a pin; use type = \"pin\"", f"{b.key}.at")
-        if a.kind == "hinge" and length is not None and (a.at <= tol or a.at >= length - tol):
-            r.error("a hinge at the end of the beam releases nothing; put it inside the span "
-                    "or remove it", f"{a.key}.at")
 
     raw_loads = data.get("loads", [])
     loads: list[Load] = []
@@ -984,12 +973,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 hung.append(f"loads[{i}]")
     _upward_loads(r, raw_loads, loads, system)
     _family_mismatch(r, section, material)
-    for ld in loads:
-        if ld.kind == "moment":
-            for h in (s for s in supports if s.kind == "hinge"):
-                if abs(ld.at - h.at) <= tol:
-                    r.error("a couple exactly at a hinge is ambiguous; apply it a little to one "
-                            "side", f"{ld.key}.at")
+    if length is not None:
+        for key, message in geometry_problems(length, supports, loads,
+                                              lambda x: units.fmt(x, "length", system)):
+            r.error(message, key)
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)

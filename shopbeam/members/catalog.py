@@ -767,8 +767,7 @@ def _described(shape_word: str, dims_text: str, designation: str, key: str,
             return gauges.parse_wall(tok, key, "tube")
         return length(tok), ""
 
-    need = {"rect-tube": 3, "square-tube": 2, "round-tube": 2, "pipe": 2, "flat-bar": 2,
-            "rect-bar": 2, "square-bar": 1, "round-bar": 1}[shape]
+    need = len(S.shape_keys(shape)[0])
     if len(toks) != need:
         form = {"rect-tube": "rect-tube DEPTH x WIDTH x WALL (e.g. 2 x 1 x 14ga)",
                 "square-tube": "square-tube SIZE x WALL", "round-tube": "round-tube OD x WALL",

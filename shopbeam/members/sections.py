@@ -70,10 +70,6 @@ from typing import Mapping
 
 from shopbeam.errors import InputError
 
-SHAPES = (
-    "rect-tube", "round-tube", "pipe", "rect-bar", "round-bar", "angle", "channel", "i-beam",
-    "tee", "double-channel", "cover-plated", "custom",
-)
 ERW_FACTOR = 0.93  # AISC 360-16 B4.2: design wall of ERW HSS = 0.93 x nominal
 ANGLE_WARNING = (
     "angle bent about its geometric axis: an angle that is not braced against twisting and "
@@ -823,6 +819,20 @@ _REQUIRED = {
     "double-channel": ("channel",), "cover-plated": ("base", "plate_width", "plate_thickness"),
     "custom": ("area", "ix"),
 }
+
+# The one list of shapes: everything else (messages, the text UI's shape picker, described
+# stock such as "rect-tube 2 x 1 x 14ga") derives from _KEYS and _REQUIRED.
+SHAPES = tuple(_KEYS)
+DIMENSION_SHAPES = tuple(x for x in SHAPES if x not in ("double-channel", "cover-plated",
+                                                         "custom"))  # from dimensions alone
+STOCK_SHAPES = ("rect-tube", "square-tube", "round-tube", "pipe", "rect-bar", "flat-bar",
+                "square-bar", "round-bar")  # tube and bar: also written "SHAPE 2 x 1 x 14ga"
+
+
+def shape_keys(shape: str) -> tuple[tuple[str, ...], tuple[str, ...]]:
+    """(required, optional) dimension keys of a shape's [beam.section] table."""
+    req = tuple(_REQUIRED[shape])
+    return req, tuple(sorted(k for k in _KEYS[shape] if k not in req))
 _ALIASES = {"rectangular-tube": "rect-tube", "rhs": "rect-tube", "shs": "square-tube",
             "tube": "rect-tube", "round": "round-tube", "chs": "round-tube",
             "flat": "flat-bar", "bar": "rect-bar", "rod": "round-bar", "i": "i-beam",

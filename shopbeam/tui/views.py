@@ -19,6 +19,8 @@ from textual.widgets import Button, OptionList, Static
 from textual.widgets.option_list import Option
 
 from shopbeam import units
+from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
+from shopbeam.members.sections import DIMENSION_SHAPES, shape_keys
 from shopbeam.tui import drawing
 from shopbeam.tui.widgets import Choice, Field
 
@@ -310,7 +312,7 @@ class SpanView(RowsView):
             yield RowButton("+ hinge", id="add-hinge", compact=True)
             yield RowButton("remove", id="remove-row", compact=True)
         with Vertical(classes="row-form"):
-            yield Choice("Type", ["fixed", "pin", "roller", "spring", "hinge"], key="support.type")
+            yield Choice("Type", list(SUPPORT_KINDS), key="support.type")
             yield Field("At", "support.at", placeholder="e.g. 0 ft")
             yield Field("Stiffness", "support.stiffness", placeholder="e.g. 2000 lbf/in")
 
@@ -397,7 +399,7 @@ class LoadsView(RowsView):
             yield RowButton("+ couple", id="add-moment", compact=True)
             yield RowButton("remove", id="remove-row", compact=True)
         with Vertical(classes="row-form"):
-            yield Choice("Type", ["point", "uniform", "linear", "moment"], key="load.type")
+            yield Choice("Type", list(LOAD_KINDS), key="load.type")
             yield Field("At", "load.at", placeholder="e.g. 4 ft")
             yield Field("Start", "load.start", placeholder="e.g. 0 ft")
             yield Field("End", "load.end", placeholder="e.g. 12 ft")
@@ -496,8 +498,7 @@ class SectionView(View):
             self.designation = designation
 
     MODES = ["catalog", "dimensions", "custom"]
-    SHAPES = ["rect-tube", "square-tube", "round-tube", "pipe", "rect-bar", "flat-bar",
-              "square-bar", "round-bar", "angle", "channel", "i-beam", "tee"]
+    SHAPES = list(DIMENSION_SHAPES)
     DIM_ORDER = ["depth", "width", "size", "od", "diameter", "wall", "thickness",
                  "flange_width", "flange_thickness", "web_thickness", "stem_thickness",
                  "corner_radius", "fillet_radius"]
@@ -529,15 +530,10 @@ class SectionView(View):
 
     @staticmethod
     def _dim_keys() -> dict[str, tuple[str, ...]]:
-        try:
-            from shopbeam.members.sections import _KEYS, _REQUIRED  # the shapes' own key lists
-        except ImportError:  # pragma: no cover
-            return {}
         out = {}
         for shape in SectionView.SHAPES:
-            req = tuple(_REQUIRED.get(shape, ()))
-            opt = tuple(sorted(k for k in _KEYS.get(shape, ()) if k not in req
-                               and k in ("corner_radius", "fillet_radius")))
+            req, optional = shape_keys(shape)  # the shapes' own key lists
+            opt = tuple(k for k in optional if k in ("corner_radius", "fillet_radius"))
             out[shape] = req + opt
         return out
 
