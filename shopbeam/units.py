@@ -403,3 +403,16 @@ def fmt(value: float, kind: str, system: str = "us", sig: int = 4) -> str:
     """Format an SI value in the display system: fmt(3.6576, 'length') -> '12 ft'."""
     factor, label = DISPLAY[system][kind]
     return f"{num(value * factor, sig)} {label}"
+
+
+# SI unit of a check's demand and limit -> the display kind it is shown as
+CHECK_KINDS = {"Pa": "stress", "m": "small_length", "N": "force", "N*m": "moment"}
+
+
+def fmt_check(value: float, unit: str, system: str = "us", wood: bool = False) -> str:
+    """A check's demand or limit (SI, in `unit`) in the job's units (wood stresses in psi, as
+    its trade writes them)."""
+    if wood and unit == "Pa" and system == "us":
+        return f"{num(value / PSI)} psi"
+    kind = CHECK_KINDS.get(unit)
+    return fmt(value, kind, system) if kind else f"{num(value)} {unit}"

@@ -13,8 +13,10 @@ from pathlib import Path
 
 import pytest
 
+from shopbeam.cli import members as cli_members
 from shopbeam.members import catalog
 from shopbeam.members import sections as S
+from shopbeam.members.resolve import resolve_section
 from shopbeam.errors import InputError
 
 IN = 0.0254
@@ -212,16 +214,16 @@ def _ns(**kw):
 
 
 def test_cmd_section_and_shapes(capsys):
-    assert catalog.cmd_section(_ns(designation="HSS6x4x1/4", json=True)) == 0
+    assert cli_members.cmd_section(_ns(designation="HSS6x4x1/4", json=True)) == 0
     js = json.loads(capsys.readouterr().out)
     assert js["designation"] == "HSS6X4X1/4" and js["ix"] == pytest.approx(20.9 * IN**4)
-    assert catalog.cmd_section(_ns(designation="HSS4x4x3/4")) == 2
+    assert cli_members.cmd_section(_ns(designation="HSS4x4x3/4")) == 2
     err = capsys.readouterr().err
     assert err.count("\n") == 1 and "did you mean" in err
-    assert catalog.cmd_shapes(_ns(kind="HSS", filter="4x4")) == 0
+    assert cli_members.cmd_shapes(_ns(kind="HSS", filter="4x4")) == 0
     out = capsys.readouterr().out
     assert "HSS4X4X1/4" in out and "HSS6X4X1/4" not in out
-    assert catalog.cmd_shapes(_ns(kind="nope")) == 2
+    assert cli_members.cmd_shapes(_ns(kind="nope")) == 2
 
 
 def _cli(*args):
@@ -320,7 +322,7 @@ def test_lumber_dressed_sizes():
 def test_bar_stock():
     fb = catalog.lookup("FB2x1/4")
     assert fb.area == pytest.approx(0.5 * IN**2) and fb.axis == "strong"
-    flat = S.resolve_section("FB2x1/4", axis="weak")  # laid flat
+    flat = resolve_section("FB2x1/4", axis="weak")  # laid flat
     assert flat.ix == pytest.approx(2 * 0.25**3 / 12 * IN**4) and flat.axis == "weak"
     rb = catalog.lookup("RB1")
     assert rb.ix == pytest.approx(math.pi / 64 * IN**4)

@@ -12,7 +12,8 @@ import pytest
 
 from shopbeam.members import catalog
 from shopbeam.design.analysis import analyze
-from shopbeam.design.checks import (cb_factor, flexure, run_checks, shear_strength, strengths)
+from shopbeam.design.checks import cb_factor, flexure, shear_strength, strengths
+from shopbeam.design.loading import run_checks
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.members.materials import get as material
 

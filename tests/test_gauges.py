@@ -88,7 +88,7 @@ def test_bad_walls(text, words):
 
 def test_plate_and_strip_gauges_use_the_sheet_table():
     from shopbeam.members import catalog
-    from shopbeam.members.sections import resolve_section
+    from shopbeam.members.resolve import resolve_section
 
     # Manufacturers' Standard Gauge (from memory): 11 ga = 0.1196 in, 3 ga = 0.2391 in
     strip = resolve_section({"shape": "flat-bar", "depth": "2 in", "width": "11 ga"})

@@ -152,7 +152,7 @@ def test_cmd_materials_lists_every_material(capsys):
     import argparse
     import json
 
-    from shopbeam.members.materials import cmd_materials
+    from shopbeam.cli.members import cmd_materials
 
     assert cmd_materials(argparse.Namespace(json=True)) == 0
     rows = json.loads(capsys.readouterr().out)

@@ -23,7 +23,7 @@ import pytest
 
 from shopbeam.members import catalog, sections as S
 from shopbeam.errors import InputError
-from shopbeam.members.sections import resolve_section
+from shopbeam.members.resolve import resolve_section
 
 IN = 0.0254
 

@@ -8,13 +8,18 @@ never a traceback (set SHOPBEAM_DEBUG=1 to see one for an internal error).
 from __future__ import annotations
 
 import argparse
-import json
 import os
 import sys
+import textwrap
+
+from pathlib import Path
 
 from shopbeam import __version__
-
-EXIT_OK, EXIT_INTERNAL, EXIT_INPUT = 0, 1, 2
+from shopbeam.cli.proof import add_title_options
+from shopbeam.design.analysis import analyze, to_json
+from shopbeam.output.report import render
+from shopbeam.cli.common import EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, guarded, load, report_error
+from shopbeam.output.jsonout import dumps_finite  # noqa: F401 (the name other code knew)
 
 DESCRIPTION = """\
 Beam checks for fabrication shops: reactions, shear, moment, slope and deflection of a
@@ -32,46 +37,25 @@ A JOB is a file or a library name: bundled:demo, shop:NAME, user:NAME, or a bare
 """
 
 
-def _load(path):
-    from shopbeam.jobs.jobfile import load_job
-
-    return load_job(path)
-
-
+@guarded
 def cmd_solve(args) -> int:
-    from shopbeam.design.analysis import analyze, to_json
-
-    job = _load(args.job)
+    job = load(args.job)
     result = analyze(job)
     if args.json:
         print(dumps_finite(to_json(result), args.job))
         return EXIT_OK
     if args.calc:
-        from shopbeam.output.calcsheet import calc_sheet
+        from shopbeam.output.calcsheet import calc_sheet  # brings sympy: only when asked
 
         print(calc_sheet(job, result), end="")
         return EXIT_OK
-    from shopbeam.output.report import render
-
     print(render(result), end="")
     return EXIT_OK
 
 
-def dumps_finite(data, job_path="") -> str:
-    """JSON text; a number that overflowed is bad input, never the non-JSON token Infinity."""
-    try:
-        return json.dumps(data, indent=2, allow_nan=False)
-    except ValueError:
-        from shopbeam.errors import InputError
-
-        raise InputError("the answer has numbers too large to be real (an overflow): check the "
-                         "section properties, loads and their units", file=str(job_path)) from None
-
-
+@guarded
 def cmd_check(args) -> int:
-    job = _load(args.job)
-    from shopbeam.design.analysis import analyze
-
+    job = load(args.job)
     analyze(job)  # an unstable beam is an input problem too
     for p in job.warnings:
         print(p.located(), file=sys.stderr)
@@ -81,6 +65,8 @@ def cmd_check(args) -> int:
 
 
 def _lazy(module: str, func: str):
+    """The handler `func` of `module`, imported only when its command runs (start-up speed:
+    `solve` need not import the catalog, the sizing sweep or the library)."""
     def run(args):
         import importlib
 
@@ -99,8 +85,6 @@ JOB_HELP = ("the job: a file (bay3-arm.toml) or a library name (bundled:demo, sh
 
 def command(sub, name: str, summary: str, description: str, examples: list[str]):
     """A subcommand whose --help says what it does and shows examples."""
-    import textwrap
-
     epilog = "examples:\n" + "\n".join(f"  {e}" for e in examples)
     return sub.add_parser(name, help=summary, description=textwrap.fill(description, 78),
                           epilog=epilog,
@@ -113,9 +97,7 @@ def _with_kinds(parser) -> None:
     plain = parser.format_help
 
     def format_help():
-        import textwrap
-
-        from shopbeam.members.catalog import KIND_INFO, SHAPE_KINDS
+        from shopbeam.members.catalog import KIND_INFO, SHAPE_KINDS  # only for --help
         from shopbeam.members.sections import SHAPES
 
         lines = ["", "catalog kinds (--kind):"]
@@ -176,7 +158,7 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     lib_opt(s)
     s.add_argument("--json", action="store_true",
                    help="print the JSON (the solve JSON at k, plus factor and capacity)")
-    s.set_defaults(func=_lazy("shopbeam.design.capacity", "cmd_capacity"))
+    s.set_defaults(func=_lazy("shopbeam.cli.design", "cmd_capacity"))
 
     s = command(sub, "rating", "print a rating label to post on the member",
                 "The load to post in shop words: max uniform or point load, per level and per "
@@ -222,8 +204,6 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
                    help="paper size (default: letter for US units, A4 for SI)")
     s.add_argument("--overwrite", action="store_true",
                    help="replace FILE if it exists (otherwise nothing is written)")
-    from shopbeam.cli.proof import add_title_options
-
     add_title_options(s)
     s.set_defaults(func=_lazy("shopbeam.cli.proof", "cmd_report"))
 
@@ -246,7 +226,7 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
                    help="shop stock list (TOML or CSV, see docs/stock-list.md) to choose from")
     s.add_argument("--top", type=int, default=15, metavar="N", help="how many to list (default 15)")
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
-    s.set_defaults(func=_lazy("shopbeam.design.sizing", "cmd_size"))
+    s.set_defaults(func=_lazy("shopbeam.cli.design", "cmd_size"))
 
     s = command(sub, "section", "properties of one catalog section",
                 "The published or computed properties of one catalog section (area, I, S, Z, "
@@ -262,14 +242,14 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("--axis", choices=("strong", "weak"), default=None,
                    help="bending axis (default strong; weak turns the section)")
     _with_kinds(s)
-    s.set_defaults(func=_lazy("shopbeam.members.catalog", "cmd_section"))
+    s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_section"))
 
     s = command(sub, "materials", "list the built-in materials with their sources",
                 "Every material key a job file may name, with E, Fy (or the wood stresses), "
                 "density and where the figures come from.",
                 ["shopbeam materials", "shopbeam materials --json"])
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
-    s.set_defaults(func=_lazy("shopbeam.members.materials", "cmd_materials"))
+    s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_materials"))
 
     s = command(sub, "shapes", "list catalog sections",
                 "The sections of the built-in catalog, by kind, optionally filtered by text.",
@@ -281,10 +261,10 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
                    help="only designations containing TEXT, e.g. 4x4")
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
     _with_kinds(s)
-    s.set_defaults(func=_lazy("shopbeam.members.catalog", "cmd_shapes"))
+    s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_shapes"))
 
-    if with_library:
-        from shopbeam.jobs import library
+    if with_library:  # the library's commands import it (start-up speed: only when needed)
+        from shopbeam.cli import library
 
         library.add_parsers(sub)
     else:
@@ -301,10 +281,11 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     return p
 
 
+@guarded
 def cmd_ui(args) -> int:
     if args.job:
-        _load(args.job)  # refuse a broken file with a clear message before the screen opens
-    from shopbeam.tui.app import make_app
+        load(args.job)  # refuse a broken file with a clear message before the screen opens
+    from shopbeam.tui.app import make_app  # textual: only when the UI opens
 
     app = make_app(job_path=args.job, library=getattr(args, "library", None))
     app.run()
@@ -317,22 +298,11 @@ def resolve_job_arg(args) -> None:
     job = getattr(args, "job", None)
     if not job:
         return
-    from pathlib import Path
-
     if Path(job).is_file():
         return
-    from shopbeam.jobs.library import resolve_job
+    from shopbeam.jobs.library import resolve_job  # the library only for a library name
 
     args.job = str(resolve_job(job, getattr(args, "library", None)))
-
-
-def _report_error(exc: BaseException) -> int:
-    from shopbeam.errors import InputError, InputErrors, UnstableBeam
-
-    if isinstance(exc, (InputError, InputErrors, UnstableBeam)):
-        print(f"shopbeam: {exc}", file=sys.stderr)
-        return EXIT_INPUT
-    raise exc
 
 
 def main(argv: list[str] | None = None) -> int:
@@ -356,7 +326,7 @@ def main(argv: list[str] | None = None) -> int:
         return EXIT_OK
     except Exception as exc:  # noqa: BLE001 - the last line of defence against tracebacks
         try:
-            return _report_error(exc)
+            return report_error(exc)
         except Exception:
             if os.environ.get("SHOPBEAM_DEBUG"):
                 raise

@@ -9,11 +9,12 @@ from dataclasses import dataclass
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for
-from shopbeam.design.checks import Check, Unchecked, governing, run_checks
+from shopbeam.design import loading
+from shopbeam.design.checks import Check, Unchecked, check_notes, governing, impact_of
+from shopbeam.design.loading import run_checks
 from shopbeam.jobs.jobfile import Job
 from shopbeam.errors import InputError, UnstableBeam
-from shopbeam.engine.selfcheck import sound_solve
-from shopbeam.engine.solver import Solution
+from shopbeam.engine.solver import Solution, sound_solve
 
 
 @dataclass(frozen=True)
@@ -76,8 +77,6 @@ def analyze(job: Job) -> Result:
         if not e.problem.file:
             e.problem.file = job.path or ""
         raise
-    from shopbeam.design import loading
-    from shopbeam.design.checks import check_notes, impact_of
 
     shown, state_sol, state_words, envelope = "", None, "", ()
     if loading.needs_states(job):

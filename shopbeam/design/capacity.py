@@ -10,8 +10,8 @@ with g(0) <= 1 < g(k_hi), then converge to working precision, keeping the side t
 Cb changes with the shape of the moment diagram, so g is not linear in k; the bracket makes
 the answer safe anyway.
 
-`cmd_capacity` prints it (or the contract JSON with "factor"); the rating label and plaque in
-shop words are `shopbeam.output.label`.
+`shopbeam capacity` (cli/design.py) prints it (or the contract JSON with "factor"); the rating
+label and plaque in shop words are `shopbeam.output.label`.
 """
 
 from __future__ import annotations
@@ -282,12 +282,10 @@ def render(res: CapacityResult) -> str:
             lines.append(f"  {label:<16} {value}")
     lines.append("")
     lines.append("CHECKS AT k")
-    from shopbeam.output.report import check_value
-
     for c in res.checks:
         wd = getattr(job.material, "kind", "") == "lumber"
-        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, job.units, wd)} vs "
-                     f"{check_value(c.limit, c.unit, job.units, wd)}: ratio {c.ratio:.6f}")
+        lines.append(f"  {c.name:<11} {units.fmt_check(c.demand, c.unit, job.units, wd)} vs "
+                     f"{units.fmt_check(c.limit, c.unit, job.units, wd)}: ratio {c.ratio:.6f}")
         for w in textwrap.wrap(c.formula + (f" [{c.detail}]" if c.detail else ""), 72):
             lines.append("      " + w)
     if res.governing:
@@ -303,17 +301,3 @@ def render(res: CapacityResult) -> str:
     for c in cautions_for(job.tags):
         lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
     return "\n".join(lines) + "\n"
-
-
-def cmd_capacity(args) -> int:
-    from shopbeam.jobs.jobfile import load_job
-
-    job = load_job(args.job)
-    res = capacity(job)
-    if args.json:
-        from shopbeam.cli import dumps_finite
-
-        print(dumps_finite(to_json(res), args.job))
-    else:
-        print(render(res), end="")
-    return 0

@@ -1075,17 +1075,6 @@ def basic_checks(job, sol: Solution) -> list[Check]:
     return checks_for(job, sol, strengths(job, beam=sol.beam))
 
 
-def run_checks(job, sol: Solution) -> list[Check]:
-    """All checks for the job. Jobs with patterned or moving loads (or an impact allowance)
-    are checked over every load state (see `shopbeam.design.loading`); `sol` is then only the
-    all-loaded picture."""
-    from shopbeam.design import loading
-
-    if loading.needs_states(job):
-        return list(loading.evaluate(job, 1.0).checks)
-    return basic_checks(job, sol)
-
-
 def governing(checks: list[Check]) -> Check:
     return max(checks, key=lambda c: c.ratio)
 

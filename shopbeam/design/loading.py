@@ -33,7 +33,11 @@ from functools import lru_cache
 
 import numpy as np
 
+from shopbeam import units
+from shopbeam.design.checks import Check, basic_checks, brace_points, checks_for, impact_of
+from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
+from shopbeam.errors import InputError
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
@@ -77,8 +81,6 @@ class LoadParts:
 
 
 def load_parts(job, section=None) -> LoadParts:
-    from shopbeam.design.checks import impact_of
-
     j = job if section is None else replace(job, section=section)
     loads = j.member_loads()
     fixed = tuple(ld for ld in loads if ld.case != "live")
@@ -176,8 +178,6 @@ class StateSet:
 
 def state_set(job, section=None, parts: LoadParts | None = None, ei: float | None = None,
               length_fmt=None) -> StateSet:
-    from shopbeam.errors import InputError
-
     parts = parts or load_parts(job, section)
     sec = section or job.section
     if ei is None:
@@ -612,7 +612,6 @@ def _fmt_for(job):
 @lru_cache(maxsize=8)
 def _length_fmt(system: str):
     """One formatter per unit system (also the key of the pattern-words cache)."""
-    from shopbeam import units
 
     return lambda x: units.fmt(x, "length", system)
 
@@ -620,9 +619,6 @@ def _length_fmt(system: str):
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
              strengths=None, moving_cache: dict | None = None) -> Evaluation:
     """Every check at live-load factor k over every pattern and moving-load position."""
-    from shopbeam.design.checks import checks_for
-    from shopbeam.design.checks import strengths as strengths_of
-
     ss = ss or state_set(job, section)
     st = strengths or strengths_of(job, sec=section, beam=ss.beam)
     fmt = _fmt_for(job)
@@ -809,8 +805,6 @@ def _wheel_beam(beam: Beam, mv: MovingLoad, p: float, which: str) -> Beam:
 
 
 def fixed_breaks(job, ss: StateSet, static_loads) -> list[float]:
-    from shopbeam.design.checks import brace_points
-
     L = job.length
     xs = {0.0, L} | {s.at for s in job.supports} | _positions(static_loads)
     xs |= set(brace_points(job)[1])
@@ -931,14 +925,21 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None):
         yield p, solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
 
 
+def run_checks(job, sol: Solution) -> list[Check]:
+    """All checks for the job. Jobs with patterned or moving loads (or an impact allowance)
+    are checked over every load state (see this module); `sol` is then only the
+    all-loaded picture."""
+    if needs_states(job):
+        return list(evaluate(job, 1.0).checks)
+    return basic_checks(job, sol)
+
+
 def envelope_bruteforce(job, k: float = 1.0, n: int = 2001):
     """Test oracle only: the checks re-solved at n evenly spaced positions: per check the
     largest demand, where, and the largest ratio (local checks have a limit that depends on
     where the force acts, so their worst is by ratio)."""
-    from shopbeam.design.checks import checks_for, strengths
-
     ss = state_set(job)
-    st = strengths(job, beam=ss.beam)
+    st = strengths_of(job, beam=ss.beam)
     mv = ss.parts.moving[0]
     kk = k * (1 + ss.parts.impact)
     worst = {}
@@ -957,5 +958,5 @@ def envelope_bruteforce(job, k: float = 1.0, n: int = 2001):
 
 
 __all__ = ["MovingLoad", "LoadParts", "StateSet", "Evaluation", "read_moving", "load_parts",
-           "needs_states", "state_set", "evaluate", "combine", "clip", "candidate_positions",
+           "needs_states", "state_set", "evaluate", "run_checks", "combine", "clip", "candidate_positions",
            "envelope_bruteforce"]

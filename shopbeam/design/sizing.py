@@ -659,24 +659,3 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
             "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags),
             "material": getattr(res.job.material, "key", ""),
             "material_note": res.material_note}
-
-
-def cmd_size(args) -> int:
-    from shopbeam.jobs.jobfile import load_job
-
-    job = load_job(args.job)
-    md = units.parse(args.max_depth, "length", "--max-depth", positive=True) \
-        if args.max_depth else None
-    stock = None
-    if args.stock:
-        from shopbeam.members.stock import load_stock
-
-        stock = load_stock(args.stock)
-    res = size(job, args.kind, md, stock)
-    if args.json:
-        from shopbeam.cli import dumps_finite
-
-        print(dumps_finite(to_json(res, args.top), args.job))
-    else:
-        print(render(res, args.top), end="")
-    return 0

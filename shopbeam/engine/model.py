@@ -92,3 +92,25 @@ class Beam:
         from dataclasses import replace
 
         return replace(self, loads=tuple(loads))
+
+
+def segments(beam: Beam) -> list[tuple[float, float, str]]:
+    """Spans between deflection supports and overhangs beyond them: (start, end, kind).
+
+    kind is "span" between two supports, "overhang" beyond the outermost support, or
+    "cantilever" when a fixed end carries it. Springs count as supports here.
+    """
+    L = beam.length
+    pts = sorted({s.at for s in beam.supports if s.takes_force})
+    out: list[tuple[float, float, str]] = []
+    if not pts:
+        return [(0.0, L, "span")]
+    tol = 1e-9 * L
+    fixed = {s.at for s in beam.supports if s.kind == "fixed"}
+    if pts[0] > tol:
+        out.append((0.0, pts[0], "cantilever" if pts[0] in fixed else "overhang"))
+    for a, b in zip(pts, pts[1:]):
+        out.append((a, b, "span"))
+    if pts[-1] < L - tol:
+        out.append((pts[-1], L, "cantilever" if pts[-1] in fixed else "overhang"))
+    return out

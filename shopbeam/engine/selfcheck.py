@@ -9,7 +9,19 @@ from __future__ import annotations
 
 import numpy as np
 
-from shopbeam.engine.solver import SelfCheck, Solution, segments
+from dataclasses import dataclass, field
+
+from shopbeam.engine.model import segments
+
+
+@dataclass(frozen=True)
+class SelfCheck:
+    """One of the checks run on every answer: `ok` False means look harder (a warning)."""
+
+    name: str
+    ok: bool
+    detail: str
+    figures: dict = field(default_factory=dict)
 
 REL = 1e-7  # relative tolerance for the exact checks (rounding is ~1e-13)
 
@@ -40,7 +52,7 @@ def _tol(scale: float) -> float:
     return REL * scale + 1e-300
 
 
-def self_checks(sol: Solution) -> list[SelfCheck]:
+def self_checks(sol: "Solution") -> list[SelfCheck]:
     beam = sol.beam
     L, ei = beam.length, beam.ei
     fy, mz, fabs, cabs = _applied_totals(beam.loads)
@@ -201,30 +213,5 @@ EXACT_CHECKS = ("equilibrium", "boundary conditions", "shear jumps", "moment jum
                 "curvature", "conditioning")
 
 
-def failed_checks(sol: Solution) -> list[SelfCheck]:
+def failed_checks(sol: "Solution") -> list[SelfCheck]:
     return [d for d in sol.diagnostics if d.name in EXACT_CHECKS and not d.ok]
-
-
-def sound_solve(beam, length_fmt=None, file: str = "") -> Solution:
-    """`solve`, but never an answer whose exact self-checks fail: such a solve is done again
-    in exact arithmetic, and if that fails too (or the job is too large for it) the job is
-    refused with what to change (InputError naming the file)."""
-    from shopbeam.engine.solver import solve
-    from shopbeam.errors import InputError
-
-    sol = solve(beam, length_fmt)
-    bad = failed_checks(sol)
-    if bad and not sol.exact:
-        try:
-            sol = solve(beam, length_fmt, exact=True)
-            bad = failed_checks(sol)
-        except InputError:
-            pass
-    if bad:
-        what = "; ".join(f"{d.name}: {d.detail}" for d in bad)
-        raise InputError(
-            f"the answer failed its self-check ({what}), so it is not given. Look for loads, "
-            "supports or hinges very close together, or lengths, loads and stiffnesses many "
-            "orders of magnitude apart, and merge, move or correct them", key="supports",
-            file=file)
-    return sol

@@ -27,8 +27,9 @@ from functools import cached_property
 
 import numpy as np
 
-from shopbeam.errors import UnstableBeam
-from shopbeam.engine.model import Beam
+from shopbeam.engine.model import Beam, segments  # noqa: F401 (segments: re-exported)
+from shopbeam.engine.selfcheck import SelfCheck, failed_checks, self_checks
+from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.engine.piecewise import Extreme, Piecewise, find_candidates
 
 # state entries, by integration level: q' (-1), q (0), V (1), M (2), EI*slope (3), EI*u (4)
@@ -46,16 +47,6 @@ class Reaction:
     force: float
     moment: float = 0.0
     key: str = ""
-
-
-@dataclass(frozen=True)
-class SelfCheck:
-    """One of the checks run on every answer: `ok` False means look harder (a warning)."""
-
-    name: str
-    ok: bool
-    detail: str
-    figures: dict = field(default_factory=dict)
 
 
 @dataclass(frozen=True)
@@ -78,8 +69,6 @@ class Solution:
     @cached_property
     def diagnostics(self) -> tuple[SelfCheck, ...]:
         """The self-checks, computed on first use (every report and screen shows them)."""
-        from shopbeam.engine.selfcheck import self_checks
-
         return tuple(self_checks(self))
 
     @cached_property
@@ -410,7 +399,6 @@ def solve(beam: Beam, length_fmt=None, exact: bool | None = None) -> Solution:
     """
     problems = validate_geometry(beam)
     if problems:
-        from shopbeam.errors import InputError
 
         raise InputError("; ".join(problems))
     # numbers are checked for being finite below; numpy's own warnings would only reach the
@@ -422,7 +410,6 @@ def solve(beam: Beam, length_fmt=None, exact: bool | None = None) -> Solution:
         bad = bad or not all(math.isfinite(r.force) and math.isfinite(r.moment)
                              for r in sol.reactions)
     if bad:
-        from shopbeam.errors import InputError
 
         raise InputError("the answer has numbers too large to be real (an overflow): check the "
                          "loads, lengths, stiffnesses and their units")
@@ -635,7 +622,6 @@ def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> l
 
 
 def _too_close(beam: Beam, L: float, length_fmt, extra: str):
-    from shopbeam.errors import InputError
 
     fmt = length_fmt or _fmt_len
     xs = sorted(s.at for s in beam.supports)
@@ -745,23 +731,23 @@ def _finish(beam, breaks, final, z, unknowns, condition, exact, candidates=True)
     )
 
 
-def segments(beam: Beam) -> list[tuple[float, float, str]]:
-    """Spans between deflection supports and overhangs beyond them: (start, end, kind).
-
-    kind is "span" between two supports, "overhang" beyond the outermost support, or
-    "cantilever" when a fixed end carries it. Springs count as supports here.
-    """
-    L = beam.length
-    pts = sorted({s.at for s in beam.supports if s.takes_force})
-    out: list[tuple[float, float, str]] = []
-    if not pts:
-        return [(0.0, L, "span")]
-    tol = 1e-9 * L
-    fixed = {s.at for s in beam.supports if s.kind == "fixed"}
-    if pts[0] > tol:
-        out.append((0.0, pts[0], "cantilever" if pts[0] in fixed else "overhang"))
-    for a, b in zip(pts, pts[1:]):
-        out.append((a, b, "span"))
-    if pts[-1] < L - tol:
-        out.append((pts[-1], L, "cantilever" if pts[-1] in fixed else "overhang"))
-    return out
+def sound_solve(beam, length_fmt=None, file: str = "") -> Solution:
+    """`solve`, but never an answer whose exact self-checks fail: such a solve is done again
+    in exact arithmetic, and if that fails too (or the job is too large for it) the job is
+    refused with what to change (InputError naming the file)."""
+    sol = solve(beam, length_fmt)
+    bad = failed_checks(sol)
+    if bad and not sol.exact:
+        try:
+            sol = solve(beam, length_fmt, exact=True)
+            bad = failed_checks(sol)
+        except InputError:
+            pass
+    if bad:
+        what = "; ".join(f"{d.name}: {d.detail}" for d in bad)
+        raise InputError(
+            f"the answer failed its self-check ({what}), so it is not given. Look for loads, "
+            "supports or hinges very close together, or lengths, loads and stiffnesses many "
+            "orders of magnitude apart, and merge, move or correct them", key="supports",
+            file=file)
+    return sol

@@ -29,7 +29,7 @@ from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, Basis)
 from shopbeam.members.materials import resolve_material
-from shopbeam.members.sections import resolve_section
+from shopbeam.members.resolve import resolve_section
 
 SCHEMA = 1
 MAX_FILE_BYTES = 1_000_000

@@ -26,10 +26,12 @@ import re
 from functools import lru_cache
 from importlib import resources
 
+from shopbeam.cautions import SHORT
+from shopbeam.errors import InputError
 from shopbeam.members import gauges
 from shopbeam.members import sections as S
-from shopbeam.errors import InputError
 from shopbeam.members.sections import Section
+from shopbeam.units import fmt, num, parse
 
 IN = 0.0254
 MM = 0.001
@@ -744,9 +746,6 @@ def suggestions(designation: str, n: int = 3) -> list[str]:
 def _described(shape_word: str, dims_text: str, designation: str, key: str,
                material) -> Section:
     """Sections described as 'rect-tube 2 x 1 x 14ga' (inches unless a unit is written)."""
-    from shopbeam.members import gauges
-    from shopbeam.units import parse
-
     shape = shape_word.lower().replace(" ", "-").replace("rectangular", "rect")
     if shape == "tube":
         shape = "rect-tube"
@@ -819,16 +818,11 @@ _PROPS = (  # (json key, label, display kind)
 
 
 def _cw_text(cw: float, system: str) -> str:
-    from shopbeam.units import num
-
     return f"{num(cw / IN**6)} in^6" if system == "us" else f"{num(cw * 1e18)} mm^6"
 
 
 def section_report(sec: Section, system: str = "us") -> str:
     """The text `shopbeam section X` prints: properties in the display system."""
-    from shopbeam.cautions import SHORT
-    from shopbeam.units import fmt
-
     lines = [f"{sec.designation}  ({sec.shape}, {_axis_words(sec)})", f"source: {sec.source}"]
     for k, label, kind in _PROPS:
         v = getattr(sec, k)
@@ -874,8 +868,6 @@ def _axis_words(sec: Section) -> str:
 
 def section_json(sec: Section) -> dict:
     """The `section --json` object: SI base units (m, m^2, m^3, m^4, m^6, kg/m)."""
-    from shopbeam.cautions import SHORT
-
     return {
         "designation": sec.designation, "shape": sec.shape, "axis": sec.axis,
         "area": sec.area, "ix": sec.ix, "sx": sec.sx, "sx_top": sec.sx_top,
@@ -887,54 +879,3 @@ def section_json(sec: Section) -> dict:
     }
 
 
-def _system(args) -> str:
-    s = getattr(args, "units", None) or getattr(args, "system", None) or "us"
-    return s if s in ("us", "si") else "us"
-
-
-def cmd_section(args) -> int:
-    """`shopbeam section DESIGNATION [--json] [--axis weak]`."""
-    import json
-    import sys
-
-    try:
-        axis = getattr(args, "axis", None) or "strong"
-        sec = S.resolve_section(args.designation, key="section", axis=axis)
-    except InputError as exc:
-        print(f"shopbeam section: {exc.problem.message}", file=sys.stderr)
-        return 2
-    if getattr(args, "json", False):
-        print(json.dumps(section_json(sec), indent=2))
-    else:
-        print(section_report(sec, _system(args)))
-    return 0
-
-
-def cmd_shapes(args) -> int:
-    """`shopbeam shapes [--kind HSS] [--filter 4x4] [--json]`: list catalog sections."""
-    import json
-    import sys
-
-    from shopbeam.units import fmt
-
-    try:
-        secs = list_sections(getattr(args, "kind", None), getattr(args, "filter", None))
-    except InputError as exc:
-        print(f"shopbeam shapes: {exc.problem.message}", file=sys.stderr)
-        return 2
-    if getattr(args, "json", False):
-        print(json.dumps([section_json(s) for s in secs], indent=2))
-        return 0
-    system = _system(args)
-    if not getattr(args, "kind", None) and not getattr(args, "filter", None):
-        print("kinds: " + ", ".join(f"{k} ({KIND_INFO[k]})" for k in KIND_INFO))
-    print(f"{'designation':<22}{'weight':>14}{'A':>14}{'Ix':>14}{'Sx':>14}{'Iy':>14}")
-    for s in secs:
-        wt = fmt(s.mass_per_length, "mass_per_length", system) if s.mass_per_length else "-"
-        print(f"{s.designation:<22}{wt:>14}{fmt(s.area, 'area', system):>14}"
-              f"{fmt(s.ix, 'inertia', system):>14}{fmt(s.sx, 'modulus', system):>14}"
-              f"{fmt(s.iy, 'inertia', system) if s.iy else '-':>14}")
-    from shopbeam.cautions import SHORT
-
-    print(f"{len(secs)} section{'s' if len(secs) != 1 else ''}. {SHORT}")
-    return 0

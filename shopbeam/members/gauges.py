@@ -14,6 +14,7 @@ from __future__ import annotations
 import re
 
 from shopbeam.errors import InputError
+from shopbeam.units import parse
 
 IN = 0.0254
 
@@ -93,8 +94,6 @@ def parse_wall(value, key: str = "", shape: str = "tube") -> tuple[float, str]:
     The note is "" for a plain length and e.g. "14 ga = 0.083 in, Birmingham wire gauge
     (tube wall)" for a gauge.
     """
-    from shopbeam.units import parse
-
     if isinstance(value, str):
         g = gauge_number(value)
         if g is not None:

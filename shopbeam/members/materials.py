@@ -19,6 +19,7 @@ from functools import lru_cache
 from typing import Mapping
 
 from shopbeam.errors import InputError
+from shopbeam.units import parse
 
 KSI = 6.894757293168361e6  # Pa (lbf/in^2 x 1000, exact from the international pound and inch)
 PSI = KSI / 1000
@@ -253,39 +254,6 @@ def list_materials() -> list[Material]:
     return list(_MATERIALS)
 
 
-def cmd_materials(args) -> int:
-    """`shopbeam materials [--json]`: the built-in materials with their sources."""
-    import json
-
-    from shopbeam.units import fmt
-
-    mats = list_materials()
-    if getattr(args, "json", False):
-        print(json.dumps([{"key": m.key, "name": m.name, "kind": m.kind, "e": m.e, "fy": m.fy,
-                           "fu": m.fu, "density": m.density, "fy_welded": m.fy_welded,
-                           "fb": m.fb, "fv": m.fv, "source": m.source,
-                           "notes": list(m.notes)} for m in mats], indent=2))
-        return 0
-    system = getattr(args, "units", None) or "us"
-    print(f"{'key':<14}{'E':>14}{'Fy (Fb)':>12}{'welded':>10}{'density':>16}  name")
-    for m in mats:
-        fy = fmt(m.fb if m.kind == "lumber" else m.fy, "stress", system)
-        if m.kind == "lumber" and system == "us":
-            fy = f"{m.fb / PSI:,.0f} psi"
-        welded = fmt(m.fy_welded, "stress", system) if m.fy_welded else "-"
-        e = fmt(m.e, 'stress', system)
-        if m.kind == "lumber" and system == "us":
-            e = f"{m.e / PSI / 1e6:.3g}e6 psi"
-        elif m.kind == "stainless":  # the published dual figures (ASTM A240), not conversions
-            e = "28,000 ksi" if system == "us" else "193 GPa"
-            fy = f"{round(m.fy / KSI):g} ksi" if system == "us" else f"{m.fy / MPA:g} MPa"
-        print(f"{m.key:<14}{e:>14}{fy:>12}{welded:>10}"
-              f"{fmt(m.density, 'density', system):>16}  {m.name}")
-    print("Sources: each material's source is in `--json`. Specified minimums; use the mill "
-          "certificate where you have one.")
-    return 0
-
-
 def get(key: str) -> Material | None:
     return _index().get(_norm(key))
 
@@ -327,8 +295,6 @@ _INLINE_KEYS = {"e": "stress", "fy": "stress", "density": "density", "fu": "stre
 
 
 def _inline(spec: Mapping, key: str) -> Material:
-    from shopbeam.units import parse
-
     allowed = set(_INLINE_KEYS) | {"name", "kind", "key", "source"}
     for k in spec:
         if k not in allowed:

@@ -34,6 +34,8 @@ from pathlib import Path
 
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.members.sections import Section
+from shopbeam.members.materials import resolve_material
+from shopbeam.members.resolve import resolve_section
 
 FT = 0.3048
 _ITEM_KEYS = {"section", "price_per_ft", "price_per_m", "price", "material", "note", "axis"}
@@ -245,9 +247,6 @@ def _price(entry, key, file, line) -> float | None:
 
 
 def _item(entry: dict, key: str, file: str, line: int | None) -> StockItem:
-    from shopbeam.members.materials import resolve_material
-    from shopbeam.members.sections import resolve_section
-
     where = key
     for k in entry:
         if k not in _ITEM_KEYS:

@@ -12,7 +12,7 @@ from shopbeam.design.analysis import Result
 
 WIDTH = 78
 
-CHECK_KINDS = {"Pa": "stress", "m": "small_length", "N": "force", "N*m": "moment"}
+CHECK_KINDS = units.CHECK_KINDS
 
 
 def _wrap(text: str, indent: str = "  ", width: int = WIDTH) -> list[str]:
@@ -42,13 +42,7 @@ def describe_support(s, system: str) -> str:
     return f"{s.kind} at {fmt_pos(s.at, system)}{extra}"
 
 
-def check_value(value: float, unit: str, system: str, wood: bool = False) -> str:
-    """A check's demand or limit in the job's units (wood stresses in psi, as its trade
-    writes them)."""
-    if wood and unit == "Pa" and system == "us":
-        return f"{units.num(value / units.PSI)} psi"
-    kind = CHECK_KINDS.get(unit)
-    return units.fmt(value, kind, system) if kind else f"{units.num(value)} {unit}"
+check_value = units.fmt_check  # a check's demand or limit in the job's units
 
 
 def caution_block(cautions) -> list[str]:

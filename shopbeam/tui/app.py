@@ -210,6 +210,12 @@ class JobScreen(Screen):
             self.refresh_all()
 
     # ------------------------------------------------------------------ navigation
+    async def action_view_key(self, key: str) -> None:
+        """The view whose key is `key` (a field sends it for Esc-then-digit)."""
+        vid = next((v[0] for v in VIEWS if v[1] == key), None)
+        if vid is not None:
+            await self.action_view(vid)
+
     async def action_view(self, vid: str) -> None:
         self.flush_typing()
         switcher = self.query_one(ContentSwitcher)

@@ -47,12 +47,8 @@ class FieldInput(Input):
         if digit is not None:
             event.stop()
             event.prevent_default()
-            from shopbeam.tui.app import VIEWS
-
-            vid = next((v[0] for v in VIEWS if v[1] == digit), None)
             self.screen.set_focus(None)
-            if vid is not None:
-                await self.screen.run_action(f"view('{vid}')")
+            await self.screen.run_action(f"view_key('{digit}')")  # the screen knows its views
             return
         await super()._on_key(event)
 
