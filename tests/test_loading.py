@@ -93,7 +93,7 @@ def test_evaluation_reports_the_worst_pattern_per_check():
     ev = evaluate(job)
     bend = next(c for c in ev.checks if c.name == "bending")
     assert set(ev.worst["bending"]["pattern"]) in ({0, 1}, {1, 2})
-    assert "worst state" in bend.detail
+    assert bend.state and "worst state: " + bend.state in bend.as_dict()["detail"]
     w, L = 100 * LBF / FT, 10 * FT
     assert bend.demand == pytest.approx(0.11667 * w * L**2, rel=2e-3)
 

@@ -24,6 +24,10 @@ from shopbeam import units
 from shopbeam.cautions import banner, cautions_for
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Evaluation, evaluate, state_set
+from shopbeam.design.analysis import analyze
+from shopbeam.design.analysis import to_json as base_json
+from shopbeam.design.checks import impact_of
+from shopbeam.design.loading import read_moving
 
 
 # ------------------------------------------------------------------ root finding
@@ -194,8 +198,6 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
     job, k = res.job, res.factor
     sy = job.units
     live = [ld for ld in job.loads if ld.case == "live"]
-    from shopbeam.design.loading import read_moving
-
     mv = read_moving(job)
     if not math.isfinite(k):
         return [("max load", "no live load entered")]
@@ -220,8 +222,6 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
             out.append(("static live", _floor_fmt(tot * k, "force", sy) + " total"))
     if job.members > 1:
         out.append(("shared by", f"{job.members} identical members"))
-    from shopbeam.design.checks import impact_of
-
     if impact_of(job):
         out.append(("impact", f"{impact_of(job):.0%} allowance included"))
     return out
@@ -239,9 +239,6 @@ def _floor_fmt(value: float, kind: str, system: str) -> str:
 
 # ------------------------------------------------------------------ output
 def to_json(res: CapacityResult) -> dict:
-    from shopbeam.design.analysis import analyze
-    from shopbeam.design.analysis import to_json as base_json
-
     out = base_json(analyze(res.job))
     k = res.factor
     out["factor"] = float(k) if math.isfinite(k) else None
@@ -286,7 +283,7 @@ def render(res: CapacityResult) -> str:
         wd = getattr(job.material, "kind", "") == "lumber"
         lines.append(f"  {c.name:<11} {units.fmt_check(c.demand, c.unit, job.units, wd)} vs "
                      f"{units.fmt_check(c.limit, c.unit, job.units, wd)}: ratio {c.ratio:.6f}")
-        for w in textwrap.wrap(c.formula + (f" [{c.detail}]" if c.detail else ""), 72):
+        for w in textwrap.wrap(c.formula + (f" [{c.detail_text}]" if c.detail_text else ""), 72):
             lines.append("      " + w)
     if res.governing:
         lines.append(f"  governing: {res.governing.name}")

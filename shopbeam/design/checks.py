@@ -30,6 +30,7 @@ without re-deriving anything.
 from __future__ import annotations
 
 import math
+import re
 from dataclasses import dataclass, field, replace
 
 import numpy as np
@@ -82,11 +83,17 @@ class Check:
     def ok(self) -> bool:
         return self.ratio <= 1.0
 
+    @property
+    def detail_text(self) -> str:
+        """The detail with the governing load state, as the JSON's `detail` carries it."""
+        return "; ".join(x for x in (self.detail, self.state and "worst state: " + self.state)
+                         if x)
+
     def as_dict(self) -> dict:
         return {"name": self.name, "demand": float(self.demand), "limit": float(self.limit),
                 "ratio": float(self.ratio), "ok": bool(self.ok), "unit": self.unit,
                 "formula": self.formula, "at": None if self.at is None else float(self.at),
-                "detail": self.detail, "clause": self.clause, "source": self.source,
+                "detail": self.detail_text, "clause": self.clause, "source": self.source,
                 "params": {k: float(v) for k, v in self.params.items()}, "state": self.state}
 
 
@@ -215,12 +222,14 @@ class Flexure:
     wood: object = None  # lumber.Factors for wood members
     uses_cb: bool = True  # False: the stability rule has no Cb (NDS CL)
 
-    def ltb1(self, lb: float, case: str = "any") -> tuple[float, str]:
-        """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern);
-        `case` is the load arrangement of NDS Table 3.3.3 for wood."""
+    def ltb1(self, lb: float, case: str = "any", system: str = "us") -> tuple[float, str]:
+        """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern), and
+        the provision in words with its lengths in the display system; `case` is the load
+        arrangement of NDS Table 3.3.3 for wood."""
         if self.ltb is None or lb <= 0:
             return math.inf, ""
         kind, p = self.ltb
+        ln = lambda x, sig=4: fmt(x, "small_length", system, sig)  # noqa: E731
         if kind == "NDS":
             from shopbeam.design.lumber import effective_length, stability_factor
 
@@ -229,8 +238,8 @@ class Flexure:
             cl, rb, fbe = stability_factor(fb_star, emin, b, d, le)
             over = ("; RB over 50, beyond NDS 3.3.3.7: brace the member" if rb > 50 else "")
             return cl * fb_star * s, (
-                f"CL {cl:.3f} by NDS 3.3.3: lu {lb / 0.0254:.4g} in, {le_words} = "
-                f"{le / 0.0254:.4g} in, RB = sqrt(le d / b^2) = {rb:.3g}, FbE = 1.20 Emin'/RB^2 "
+                f"CL {cl:.3f} by NDS 3.3.3: lu {ln(lb)}, {le_words} = "
+                f"{ln(le)}, RB = sqrt(le d / b^2) = {rb:.3g}, FbE = 1.20 Emin'/RB^2 "
                 f"= {fbe / PSI_PA:,.0f} psi, Fb* {fb_star / PSI_PA:,.0f} psi: Fb' = Fb* CL = "
                 f"{cl * fb_star / PSI_PA:,.0f} psi{over}")
         if kind == "F2":
@@ -239,20 +248,18 @@ class Flexure:
                 return math.inf, ""
             if lb <= lr:
                 return (mp - (mp - 0.7 * fy * sx) * (lb - lp) / (lr - lp),
-                        f"F2-2 inelastic LTB, Lp {lp / 0.0254:.3g} in < Lb {lb / 0.0254:.4g} in "
-                        f"<= Lr {lr / 0.0254:.4g} in")
+                        f"F2-2 inelastic LTB, Lp {ln(lp)} < Lb {ln(lb)} <= Lr {ln(lr)}")
             x = (lb / rts) ** 2
             fcr = math.pi**2 * e / x * math.sqrt(1 + 0.078 * jc / (sx * ho) * x)
-            return fcr * sx, (f"F2-3/F2-4 elastic LTB, Lb {lb / 0.0254:.4g} in > Lr "
-                              f"{lr / 0.0254:.4g} in")
+            return fcr * sx, f"F2-3/F2-4 elastic LTB, Lb {ln(lb)} > Lr {ln(lr)}"
         if kind == "F7":
             mp, sx, e, fy, ry, ja, lp, lr = p
             if lb <= lp:
                 return math.inf, ""
             if lb <= lr:
                 return (mp - (mp - 0.7 * fy * sx) * (lb - lp) / (lr - lp),
-                        f"F7-10 HSS LTB, Lp {lp / 0.0254:.4g} in < Lb <= Lr {lr / 0.0254:.4g} in")
-            return 2 * e * ja / (lb / ry), "F7-11 HSS elastic LTB"
+                        f"F7-10 HSS LTB, Lp {ln(lp)} < Lb {ln(lb)} <= Lr {ln(lr)}")
+            return 2 * e * ja / (lb / ry), f"F7-11 HSS elastic LTB, Lb {ln(lb)} > Lr {ln(lr)}"
         if kind == "F11":
             my, mp, e, fy, d, t = p
             r = lb * d / t**2
@@ -263,8 +270,17 @@ class Flexure:
             return 1.9 * e / r * (my / fy), "F11-3/F11-4 bar elastic LTB, Lb d/t^2 = %.4g" % r
         return math.inf, ""  # pragma: no cover
 
-    def mn(self, cb: float, lb: float) -> tuple[float, str]:
-        l1, why = self.ltb1(lb)
+    def ltb_params(self, lb: float) -> dict:
+        """The lengths the LTB check used (SI): Lb, and Lp and Lr where the provision has them."""
+        if self.ltb is None:
+            return {}
+        kind, p = self.ltb
+        if kind in ("F2", "F7"):
+            return {"Lb": lb, "Lp": p[-2], "Lr": p[-1]}
+        return {"Lb": lb}
+
+    def mn(self, cb: float, lb: float, system: str = "us") -> tuple[float, str]:
+        l1, why = self.ltb1(lb, system)
         if cb * l1 < self.cap:
             return cb * l1, f"{why}, Cb {cb:.3f}"
         return self.cap, self.cap_text
@@ -299,7 +315,7 @@ def _unchecked_shape(shape: str) -> Unchecked:
 
 
 def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
-            service=None) -> Flexure:
+            service=None, system: str = "us") -> Flexure:
     """Bending strength of the section (SI) on the given basis (`service`: the wood keys,
     shopbeam.design.lumber.Service)."""
     s = min(sec.sx_top, sec.sx_bot)
@@ -333,7 +349,7 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     if shape in ("i-beam", "channel") and axis == "weak" and z:
         return _f6(sec, fy, e)
     if shape == "rect-tube" and z:
-        return _f7(sec, fy, e)
+        return _f7(sec, fy, e, system)
     if shape in ("round-tube", "pipe") and z:
         dt = d["od"] / d["t_des"]
         lp, lr = 0.07 * e / fy, 0.31 * e / fy
@@ -577,7 +593,7 @@ def _f6(sec, fy, e) -> Flexure:
                    f"F6-3/F6-4 weak-axis flange local buckling (slender, lambda {lam:.3g})")
 
 
-def _f7(sec, fy, e) -> Flexure:
+def _f7(sec, fy, e, system: str = "us") -> Flexure:
     d = sec.dims
     s, z = min(sec.sx_top, sec.sx_bot), sec.zx
     mp = fy * z
@@ -593,8 +609,8 @@ def _f7(sec, fy, e) -> Flexure:
         else:
             be = min(1.92 * t * root * (1 - 0.38 / bt * root), d["b_flat"])
             m = fy * _hss_se(sec, be)
-            tx = f"F7-3 flange local buckling (slender, b/t {bt:.3g}, effective width " \
-                 f"{be / 0.0254:.3g} in)"
+            tx = (f"F7-3 flange local buckling (slender, b/t {bt:.3g}, effective width "
+                  f"{fmt(be, 'small_length', system, 3)})")
         if m < cap:
             cap, text = m, tx
     if ht > 2.42 * root:
@@ -655,7 +671,7 @@ def _cv2(ratio: float, kv: float, e: float, fy: float) -> float:
 
 
 def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
-                   service=None) -> ShearStrength:
+                   service=None, system: str = "us") -> ShearStrength:
     av = sec.shear_area
     if basis == "lumber":
         if sec.shape == "rect-bar":
@@ -706,7 +722,7 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
         dt = d["od"] / d["t_des"]
         fcr = min(0.78 * e / dt**1.5, 0.6 * fy)
         return ShearStrength(fcr * sec.area / 2, OMEGA_V, f"G5-1 round HSS Vn = Fcr Ag / 2, "
-                             f"Fcr = min(0.78 E/(D/t)^1.5, 0.6 Fy) = {fcr / 6.894757e6:.4g} ksi "
+                             f"Fcr = min(0.78 E/(D/t)^1.5, 0.6 Fy) = {fmt(fcr, 'stress', system)} "
                              "(the Lv term of G5-2a left out: conservative)", sec.area / 2)
     if shape in ("tee", "angle"):
         ratio = d["d"] / (d["tw"] if shape == "tee" else d["t"])
@@ -765,15 +781,16 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         from shopbeam.design.lumber import service_of
 
         service = service_of(job)
-    fl = flexure(sec, job.material, b, sf, job.welded, service=service)
-    sh = shear_strength(sec, job.material, b, sf, job.welded, service=service)
+    fl = flexure(sec, job.material, b, sf, job.welded, service=service, system=job.units)
+    sh = shear_strength(sec, job.material, b, sf, job.welded, service=service,
+                        system=job.units)
     segs = []
     braced = brace_points(job)[0]
     for a, bb, free in unbraced_segments(job, beam):
         case = "any"
         if fl.ltb is not None and fl.ltb[0] == "NDS":
             case = _wood_load_case(job, a, bb, free)
-        l1, why = fl.ltb1(0.0 if braced else bb - a, case)
+        l1, why = fl.ltb1(0.0 if braced else bb - a, case, job.units)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
     fl, sh = _design_factor(job, sec, fl, sh)
@@ -886,8 +903,10 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
         allow = mn / fl.omega
         r = mmax / allow if allow > 0 else math.inf
         if worst is None or r > worst[0]:
-            worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb)
-    r, mmax, allow, at, text, (a, b), cb = worst
+            worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb, mn)
+    r, mmax, allow, at, text, (a, b), cb, mn = worst
+    lb = 0.0 if brace_points(job)[0] else b - a
+    bend_params = {"Mn": mn, "Omega": fl.omega, "Cb": cb, **fl.ltb_params(lb)}
     pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     seg_words = "" if len(st.ltb_segments) == 1 else \
         f"; unbraced length {pos(a)} to {pos(b)} governs"
@@ -898,22 +917,26 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
             params = {k: float(v) for k, v in fl.wood.factors.items()}
             params["CL"] = min(1.0, allow / (fl.wood.fb_star * fl.wood.cfu * s))
         bend = Check("bending", mmax / s, allow / s, "Pa", f"{basis}: {text}", at,
-                     detail=seg_words.lstrip("; "), params=params,
-                     clause="NDS 2018 3.3, 3.3.3, Table 4.3.1" if fl.wood is not None else "",
-                     source="NDS 2018 and Supplement (from memory)" if fl.wood is not None
-                     else "")
+                     detail=seg_words.lstrip("; "), params={**bend_params, **params, "S": s},
+                     **({"clause": "NDS 2018 3.3, 3.3.3, Table 4.3.1",
+                         "source": "NDS 2018 and Supplement (from memory)"}
+                        if fl.wood is not None else _provenance(st.basis, text, "bending")))
     else:
         bend = Check("bending", mmax, allow, "N*m",
                      f"{basis}: M <= Mn / Omega_b, Mn by {text}, Omega_b {fl.omega:g}", at,
-                     detail=seg_words.lstrip("; "), extra={"cb": cb})
+                     detail=seg_words.lstrip("; "), extra={"cb": cb}, params=bend_params,
+                     **_provenance(st.basis, text, "bending"))
     v = sol.shear.extremes()
     allow_v = sh.vn / sh.omega
+    shear_params = {"Vn": sh.vn, "Omega": sh.omega, "Av": sh.area}
     if sh.stress:
         shear = Check("shear", v.abs_max / sh.area, allow_v / sh.area, "Pa",
-                      f"{basis}: {sh.text}", v.abs_max_at)
+                      f"{basis}: {sh.text}", v.abs_max_at, params=shear_params,
+                      **_provenance(st.basis, sh.text, "shear"))
     else:
         shear = Check("shear", v.abs_max, allow_v, "N",
-                      f"{basis}: V <= Vn / Omega_v, {sh.text}", v.abs_max_at)
+                      f"{basis}: V <= Vn / Omega_v, {sh.text}", v.abs_max_at,
+                      params=shear_params, **_provenance(st.basis, sh.text, "shear"))
     creep = ""
     dsol = sol
     if fl.wood is not None and any(ld.case == "dead" for ld in sol.beam.loads):
@@ -929,7 +952,10 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                  f"(cantilevers and overhangs on twice their length){creep}", w["at"],
                  detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} ({w['rule']})",
                  extra={"spans": spans},
-                 params={"Kcr": fl.wood.kcr} if creep else {})
+                 params={"span_start": w["start"], "span_end": w["end"]}
+                 | ({"n": st.defl_ratio} if st.defl_abs is None else {"limit": st.defl_abs})
+                 | ({"Kcr": fl.wood.kcr} if creep else {}),
+                 clause="deflection limit per span", source=st.defl_words)
     from shopbeam.design import local, open_shapes
 
     sec = st.section or job.section
@@ -1060,6 +1086,26 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
                   f"lb {lb / 0.0254:.4g} in ({stated})", at, detail=f"{what} governs",
                   clause="NDS 2018 3.10.2, 3.10.4", source="NDS 2018 (from memory)",
                   params={"lb": lb, "Cb": cb})]
+
+
+_SOURCES = {"asd": "AISC 360-16", "first-yield": "first yield with a safety factor "
+            "(common practice)", "aluminum": "Aluminum Design Manual 2015 (from memory)",
+            "lumber": "NDS 2018 (from memory)"}
+
+
+def _provenance(basis: str, text: str, what: str) -> dict:
+    """clause and source of a strength check from its basis and the provision it used."""
+    if basis == "asd":
+        m = re.search(r"\b([FG]\d+)", text)
+        return {"clause": f"AISC 360-16 {m.group(1)}" if m else "AISC 360-16 chapter "
+                + ("F" if what == "bending" else "G"), "source": _SOURCES[basis]}
+    if basis == "aluminum":
+        return {"clause": "ADM 2015 " + ("F.2" if what == "bending" else "G"),
+                "source": _SOURCES[basis]}
+    if basis == "lumber":
+        return {"clause": "NDS 2018 " + ("3.3" if what == "bending" else "3.4"),
+                "source": _SOURCES[basis]}
+    return {"clause": "", "source": _SOURCES.get(basis, "")}
 
 
 def warnings_for(job, st: Strengths | None = None) -> list[str]:

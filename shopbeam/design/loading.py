@@ -596,7 +596,7 @@ class Evaluation:
     """The worst of every check over all load states at factor k."""
 
     k: float
-    checks: tuple  # Check, worst state per check (its detail says which state)
+    checks: tuple  # Check, worst state per check (its `state` says which state)
     worst: dict  # check name -> {"pattern": (...), "position": p or None, "words": str}
     states: int
     solution: Solution | None = None  # the state governing the governing check
@@ -655,7 +655,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
     checks, worst = [], {}
     for name, (c, pattern, p, words, sol) in best.items():
         if words:
-            c = replace(c, detail="; ".join(x for x in (c.detail, "worst state: " + words) if x))
+            c = replace(c, state=words)
         if ss.parts.moving and name == "bending":
             c = replace(c, formula=c.formula + " (moving loads: Cb = 1.0)")
         checks.append(c)

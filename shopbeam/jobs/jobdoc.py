@@ -16,8 +16,8 @@ import tomlkit
 from tomlkit.exceptions import ParseError
 from tomlkit.items import AoT, Array, InlineTable, Table
 
-from shopbeam.jobs import storage
 from shopbeam.errors import InputError
+from shopbeam.jobs import library, storage
 
 SCHEMA = 1
 
@@ -156,8 +156,6 @@ class JobDoc:
         if target is None:
             raise InputError("this job has no file yet; give a name or path to save it as")
         self._ensure_schema()
-        from shopbeam.jobs import library
-
         if library.is_bundled(target):
             # bundled presets are read-only: "save" means "save a copy" to the user library
             self.opened = library.save_job(self.text(), path=target, overwrite=overwrite)

@@ -28,6 +28,7 @@ from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, Basis)
+from shopbeam.members.catalog import is_wood_size
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.resolve import resolve_section
 
@@ -745,8 +746,6 @@ def _family_mismatch(r: _Reader, section, material) -> None:
     weight would be for a member that does not exist."""
     if section is None or material is None:
         return
-    from shopbeam.members.catalog import is_wood_size
-
     lumber_size = is_wood_size(section)
     mkind = getattr(material, "kind", "custom")
     if lumber_size and mkind in ("steel", "stainless", "aluminum"):

@@ -23,6 +23,9 @@ from html import escape
 
 from shopbeam import __version__, units
 from shopbeam.cautions import is_lifting
+from shopbeam.design.checks import BASIS_WORDS, basis_of
+from shopbeam.errors import InputError
+from shopbeam.jobs.storage import atomic_write
 from shopbeam.output import svg
 from shopbeam.output.report import check_value, describe_load, describe_support
 
@@ -144,8 +147,6 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
     `input_bytes` is the job file as read, hashed and embedded; `paper` is "letter" or "a4"
     (default: letter for US units, A4 for SI).
     """
-    from shopbeam.design.checks import BASIS_WORDS, basis_of
-
     job, sol = result.job, result.solution
     sy = job.units
     tb = dict(getattr(job, "project", {}) or {})
@@ -199,8 +200,6 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
     for c in result.checks:
         if c.state:
             states.append(f"{c.name}: governed by {c.state}.")
-        elif "worst state" in c.detail:
-            states.append(f"{c.name}: {c.detail[c.detail.index('worst state'):]}.")
 
     rows = []
     for c in result.checks:
@@ -490,8 +489,6 @@ def format_of(path) -> str:
     """"html", "markdown" or "pdf" by the file's suffix; InputError for anything else."""
     from pathlib import Path
 
-    from shopbeam.errors import InputError
-
     suffix = Path(path).suffix.lower()
     if suffix not in FORMATS:
         raise InputError(f"{str(path)!r}: the package is written as .html, .md or .pdf (by the "
@@ -505,7 +502,7 @@ def render_bytes(pkg: Package, kind: str) -> bytes:
         return to_markdown(pkg).encode("utf-8")
     html = to_html(pkg)
     if kind == "pdf":
-        from shopbeam.output.pdf import print_pdf
+        from shopbeam.output.pdf import print_pdf  # only when a PDF is asked for
 
         return print_pdf(html)
     return html.encode("utf-8")
@@ -517,9 +514,6 @@ def write(pkg: Package, path, *, overwrite: bool = False) -> str:
     An existing file is never replaced silently: InputError unless `overwrite`.
     """
     from pathlib import Path
-
-    from shopbeam.errors import InputError
-    from shopbeam.jobs.storage import atomic_write
 
     p = Path(path)
     kind = format_of(p)

@@ -16,6 +16,7 @@ from fractions import Fraction
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.engine.model import Beam
+from shopbeam.engine.solver import solve
 
 # display scales per system: (length, force, label words)
 SCALES = {
@@ -279,8 +280,6 @@ def calc_sheet(job, result=None) -> str:
                          subsequent_indent="      ")
     out.append("")
     # the numeric engine on the very same beam must give the same reactions
-    from shopbeam.engine.solver import solve
-
     numeric = solve(beam).reactions
     agree = []
     for r, sym in zip(numeric, [s for s in ex.unknowns if str(s).startswith("R")]):

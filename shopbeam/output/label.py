@@ -31,6 +31,9 @@ from html import escape
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for, is_lifting
+from shopbeam.design.checks import basis_of, impact_of
+from shopbeam.design.loading import read_moving
+from shopbeam.errors import InputError
 
 RACK_TAGS = {"rack", "pallet", "racking"}  # members are the beams of one level
 SHELF_TAGS = {"shelf", "shelving"}  # members are the rails or brackets of one shelf
@@ -100,8 +103,6 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
 
 # ------------------------------------------------------------------ the figures
 def _moving(job):
-    from shopbeam.design.loading import read_moving
-
     return read_moving(job)
 
 
@@ -183,8 +184,6 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
 
     `unchecked` are the job's `design.checks.Unchecked` records (from `analyze(job).unchecked`).
     """
-    from shopbeam.design.checks import basis_of
-
     job = cap.job
     sy = job.units
     k = cap.factor
@@ -207,8 +206,6 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
     else:
         status = "rated"
         figs, notes = _figures(job, k)
-        from shopbeam.design.checks import impact_of
-
         imp = impact_of(job)
         if imp:
             notes.insert(0, f"Includes a {imp:.0%} impact allowance on the live loads.")
@@ -231,8 +228,6 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
 # ------------------------------------------------------------------ 40-column label
 def label_text(r: Rating, width: int = 40) -> str:
     """A plain-text label no wider than `width` columns (30 to 200)."""
-    from shopbeam.errors import InputError
-
     if width < 30 or width > 200:
         raise InputError("a label is 30 to 200 characters wide", "--width")
     inner = width - 4

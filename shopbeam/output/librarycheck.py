@@ -13,7 +13,12 @@ import csv
 import io
 from dataclasses import dataclass
 
+from shopbeam.design.analysis import analyze
+from shopbeam.design.capacity import capacity
+from shopbeam.errors import InputError, InputErrors, UnstableBeam
 from shopbeam.jobs import library
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.output import label
 
 COLUMNS = ("job", "title", "governing", "ratio", "result", "rated_load", "problem")
 
@@ -51,12 +56,6 @@ def rated_words(r) -> str:
 
 
 def check_entry(entry) -> Row:
-    from shopbeam.design.analysis import analyze
-    from shopbeam.design.capacity import capacity
-    from shopbeam.errors import InputError, InputErrors, UnstableBeam
-    from shopbeam.jobs.jobfile import parse_job_text
-    from shopbeam.output import label
-
     base = Row(entry.label, entry.title, path=str(entry.path))
     if entry.problem:
         return _replace(base, result="ERROR", problem=entry.problem.splitlines()[0])

@@ -9,6 +9,7 @@ import textwrap
 
 from shopbeam import units
 from shopbeam.design.analysis import Result
+from shopbeam.output.present import present
 
 WIDTH = 78
 
@@ -55,6 +56,7 @@ def caution_block(cautions) -> list[str]:
 def render(result: Result) -> str:
     job, sol = result.job, result.solution
     sy = job.units
+    p = present(result)
     f = lambda v, k, sig=4: units.fmt(v, k, sy, sig)  # noqa: E731
     lines = [f"shopbeam report: {job.title}"]
     if job.path:
@@ -92,15 +94,15 @@ def render(result: Result) -> str:
         lines += _wrap("Note: " + result.shown_state + ".", "")
         lines.append("")
     lines.append("REACTIONS (what each support does to the beam: + up, + counterclockwise)")
-    for r in sol.reactions:
-        mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
-        lines.append(f"  {r.kind:<7} at {fmt_pos(r.at, sy):<12} force {f(r.force, 'force'):<14}{mom}")
-    if result.state_solution is not None:
-        lines += _wrap(f"In {result.state_words}:", "  ")
-        for r in result.state_solution.reactions:
-            mom = f"   moment {f(r.moment, 'moment')}" if r.kind == "fixed" else ""
-            up = "  (pulls down: uplift)" if r.force < 0 else ""
-            lines.append(f"    {r.kind:<7} at {fmt_pos(r.at, sy):<12} force {f(r.force, 'force')}{mom}{up}")
+    for r in p.reactions:
+        mom = f"   moment {r.moment}" if r.moment else ""
+        lines.append(f"  {r.kind:<7} at {r.at:<12} force {r.force:<14}{mom}")
+    if p.governing_state is not None:
+        lines += _wrap(f"In {p.governing_state.words}:", "  ")
+        for r in p.governing_state.reactions:
+            mom = f"   moment {r.moment}" if r.moment else ""
+            up = "  (pulls down: uplift)" if r.uplift else ""
+            lines.append(f"    {r.kind:<7} at {r.at:<12} force {r.force}{mom}{up}")
     if result.reaction_envelope:
         lines.append("")
         lines.append("REACTION ENVELOPE (each support over every load state: what a bracket or "
@@ -124,26 +126,23 @@ def render(result: Result) -> str:
     lines.append("")
 
     lines.append("CHECKS")
-    for c in result.checks:
-        verdict = "PASS" if c.ok else "FAIL"
-        where = f" at {fmt_pos(c.at, sy)}" if c.at is not None else ""
-        wd = getattr(job.material, "kind", "") == "lumber"
-        lines.append(f"  {c.name:<11} {check_value(c.demand, c.unit, sy, wd)} vs limit "
-                     f"{check_value(c.limit, c.unit, sy, wd)}{where}: ratio {c.ratio:.3f}  {verdict}")
+    for c in p.checks:
+        where = f" at {c.at}" if c.at else ""
+        lines.append(f"  {c.name:<11} {c.demand} vs limit {c.limit}{where}: ratio {c.ratio:.3f}  "
+                     f"{c.verdict}")
         lines += _wrap(c.formula, "      ")
-        if "worst state" in c.detail:  # pattern or moving-load position that governs
-            lines += _wrap(c.detail[c.detail.index("worst state"):], "      ")
-        for s in c.extra.get("spans", []) if len(c.extra.get("spans", [])) > 1 else []:
-            lines.append(f"      {s['kind']} {fmt_pos(s['start'], sy)}-{fmt_pos(s['end'], sy)}: "
-                         f"{f(s['demand'], 'small_length')} vs {f(s['limit'], 'small_length')}")
+        if c.state:  # pattern or moving-load position that governs
+            lines += _wrap(f"worst state: {c.state}", "      ")
+        for s in c.spans:
+            lines.append(f"      {s}")
     g = result.governing
     lines.append(f"  governing: {g.name}, ratio {g.ratio:.3f} -> "
                  + ("all checks PASS" if result.ok else "the member FAILS this check"))
     lines.append("")
 
     lines.append("SELF-CHECKS (run on every solve)")
-    for d in sol.diagnostics:
-        lines += _wrap(f"[{'pass' if d.ok else 'WARN'}] {d.name}: {d.detail}", "  ")[:2]
+    for d in p.self_checks:
+        lines += _wrap(d, "  ")[:2]
     if sol.condition > 1e10 and not getattr(sol, "exact", False):
         lines.append(f"  [WARN] the equations are ill-conditioned (condition {sol.condition:.2g}): "
                      "check supports very close together or extreme spring stiffnesses")

@@ -11,6 +11,7 @@ from __future__ import annotations
 import math
 
 from shopbeam import units
+from shopbeam.output.present import present
 
 PLOT_KINDS = {  # name -> (display kind, title)
     "shear": ("force", "Shear V"),
@@ -236,12 +237,19 @@ def plot(result, name: str, width: int = 76, height: int = 12) -> str:
 # ---------------------------------------------------------------------- tables
 
 def reactions_table(result) -> str:
-    sy = result.job.units
+    """The reactions, and with patterned loads those of the load state that governs (uplift
+    named): the same rows as the report (`output.present`)."""
+    p = present(result)
+
+    def row(r, indent=""):
+        up = "  uplift" if r.uplift else ""
+        return f"{indent}{r.kind:<8} {r.at:>10} {r.force:>16} {r.moment or '-':>18}{up}"
+
     rows = [f"{'support':<8} {'at':>10} {'force (+ up)':>16} {'moment (+ ccw)':>18}"]
-    for r in result.solution.reactions:
-        mom = _f(r.moment, "moment", sy) if r.kind == "fixed" else "-"
-        rows.append(f"{r.kind:<8} {_f(r.at, 'length', sy):>10} "
-                    f"{_f(r.force, 'force', sy):>16} {mom:>18}")
+    rows += [row(r) for r in p.reactions]
+    if p.governing_state is not None:
+        rows.append(f"In {p.governing_state.words}:")
+        rows += [row(r) for r in p.governing_state.reactions]
     return "\n".join(rows)
 
 
@@ -255,21 +263,18 @@ def extremes_table(result) -> str:
     return "\n".join(rows)
 
 
-def check_value(value: float, unit: str, system: str, wood: bool = False) -> str:
-    from shopbeam.output.report import check_value as cv
-
-    return cv(value, unit, system, wood)
+check_value = units.fmt_check  # a check's demand or limit in the job's units
 
 
 def checks_table(result) -> str:
-    sy = result.job.units
-    wd = getattr(result.job.material, "kind", "") == "lumber"
+    """Every check (as the report shows it, `output.present`), with the load state that
+    governs it when there is more than one."""
     rows = [f"{'check':<11} {'demand':>12} {'limit':>12} {'ratio':>6}  verdict   where"]
-    for c in result.checks:
-        where = _f(c.at, "length", sy) if c.at is not None else ""
-        rows.append(f"{c.name:<11} {check_value(c.demand, c.unit, sy, wd):>12} "
-                    f"{check_value(c.limit, c.unit, sy, wd):>12} {c.ratio:>6.2f}  "
-                    f"{'PASS' if c.ok else 'FAIL':<8}  {where}")
+    for c in present(result).checks:
+        rows.append(f"{c.name:<11} {c.demand:>12} {c.limit:>12} {c.ratio:>6.2f}  "
+                    f"{c.verdict:<8}  {c.at}")
+        if c.state:
+            rows.append(f"{'':<11} worst state: {c.state}")
     return "\n".join(rows)
 
 
