@@ -145,3 +145,15 @@ def test_no_module_outside_the_reader_reads_raw_toml():
                 if "tomllib" in names:
                     offenders.append(f"{rel}: imports tomllib")
     assert offenders == []
+
+
+def test_library_compares_tags_as_the_reader_does(tmp_path, monkeypatch):
+    from shopbeam.jobs import library
+
+    shop = tmp_path / "shop"
+    shop.mkdir()
+    monkeypatch.setenv(library.ENV_USER, str(tmp_path / "user"))
+    (shop / "hoist.toml").write_text(text(tags='["Lifting "]'), encoding="utf-8")
+    found = [e for e in library.entries(shop, tag="lifting") if e.origin == "shop"]
+    assert [e.name for e in found] == ["hoist"] and found[0].tags == ("lifting",)
+    assert parse_job_text(text(tags='["Lifting "]')).tags == found[0].tags

@@ -248,7 +248,7 @@ class Flexure:
                 return math.inf, ""
             if lb <= lr:
                 return (mp - (mp - 0.7 * fy * sx) * (lb - lp) / (lr - lp),
-                        f"F2-2 inelastic LTB, Lp {ln(lp)} < Lb {ln(lb)} <= Lr {ln(lr)}")
+                        f"F2-2 inelastic LTB, Lp {ln(lp, 3)} < Lb {ln(lb)} <= Lr {ln(lr)}")
             x = (lb / rts) ** 2
             fcr = math.pi**2 * e / x * math.sqrt(1 + 0.078 * jc / (sx * ho) * x)
             return fcr * sx, f"F2-3/F2-4 elastic LTB, Lb {ln(lb)} > Lr {ln(lr)}"

@@ -21,6 +21,7 @@ import tomllib
 from dataclasses import dataclass, field
 from pathlib import Path
 
+from shopbeam.cautions import normal_tag
 from shopbeam.jobs import storage
 from shopbeam.errors import InputError
 
@@ -130,7 +131,8 @@ def _read_entry(path: Path, origin: str) -> Entry:
                      text=text)
     title = data.get("title")
     tags = data.get("tags")
-    tags = tuple(str(t) for t in tags) if isinstance(tags, list) else ()
+    tags = tuple(dict.fromkeys(normal_tag(t) for t in tags if str(t).strip())) \
+        if isinstance(tags, list) else ()  # compared as the job reader does
     notes = data.get("notes") if isinstance(data.get("notes"), str) else ""
     return Entry(path.stem, str(title) if title is not None else "(no title)", tags, origin,
                  path, notes=notes, text=text)
@@ -167,8 +169,8 @@ def entries(library_dir=None, *, tag: str | None = None, search: str | None = No
                 seen[key] = pl.origin
             out.append(e)
     if tag:
-        t = tag.strip().lower()
-        out = [e for e in out if t in (x.lower() for x in e.tags)]
+        t = normal_tag(tag)
+        out = [e for e in out if t in e.tags]
     if search:
         words = search.lower().split()
         out = [e for e in out if all(w in _haystack(e) for w in words)]
