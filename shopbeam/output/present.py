@@ -88,14 +88,15 @@ def _reactions(sol, system: str) -> tuple[ReactionRow, ...]:
                  for r in sol.reactions)
 
 
-def _check_row(c, system: str) -> CheckRow:
+def _check_row(c, system: str, wood: bool = False) -> CheckRow:
     f = lambda v, k: units.fmt(v, k, system)  # noqa: E731
     spans = c.extra.get("spans", [])
     span_lines = tuple(f"{s['kind']} {f(s['start'], 'length')}-{f(s['end'], 'length')}: "
                        f"{f(s['demand'], 'small_length')} vs {f(s['limit'], 'small_length')}"
                        for s in spans) if len(spans) > 1 else ()
     return CheckRow(
-        c.name, units.fmt_check(c.demand, c.unit, system), units.fmt_check(c.limit, c.unit, system),
+        c.name, units.fmt_check(c.demand, c.unit, system, wood),
+        units.fmt_check(c.limit, c.unit, system, wood),
         f(c.at, "length") if c.at is not None else "", float(c.ratio), bool(c.ok), c.formula,
         c.state, c.clause, c.source,
         tuple((k, param_text(k, v, system)) for k, v in c.params.items()), span_lines)
@@ -114,7 +115,8 @@ def present(result: Result) -> Presentation:
     return Presentation(
         title=job.title, units=sy, note=result.shown_state,
         reactions=_reactions(result.solution, sy), governing_state=state,
-        checks=tuple(_check_row(c, sy) for c in result.checks),
+        checks=tuple(_check_row(c, sy, getattr(job.material, "kind", "") == "lumber")
+                     for c in result.checks),
         governing=f"{g.name}, ratio {g.ratio:.3f}",
         verdict="all checks PASS" if result.ok else "the member FAILS this check",
         unchecked=tuple(f"{u.name}: {u.reason}" + (f" ({u.clause})" if u.clause else "")
