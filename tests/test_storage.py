@@ -170,9 +170,8 @@ def test_lock_held_elsewhere_gives_clear_message(tmp_path, monkeypatch):
     monkeypatch.setattr(storage, "LOCK_TIMEOUT", 0.2)
     holder = _child("""
         import sys, time
-        from filelock import FileLock
         from shopbeam.jobs import storage
-        with FileLock(str(storage.lock_path(sys.argv[1]))):
+        with storage.locked(sys.argv[1]):
             print("READY", flush=True)
             time.sleep(30)
     """, str(target))

@@ -60,6 +60,8 @@ def _library_show(args) -> int:
     print(f"# {e.label}  ({e.path}){'  read-only' if e.read_only else ''}")
     if e.shadowed_by:
         print(f"# note: hidden by a job of the same name in the {e.shadowed_by} library")
+    if e.problem and not e.text:
+        raise InputError(f"cannot show '{e.label}': {e.problem}", file=str(e.path))
     text = e.text or storage.open_text(e.path).text
     print(text.rstrip("\n"))
     print()

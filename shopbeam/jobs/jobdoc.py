@@ -10,6 +10,8 @@ always write `schema = 1`. Nothing in a job file is ever evaluated as code.
 from __future__ import annotations
 
 import os
+import re
+from collections.abc import MutableMapping
 from pathlib import Path
 
 import tomlkit
@@ -115,27 +117,31 @@ class JobDoc:
     `[[supports]]` lists.
     """
 
-    def __init__(self, doc, path: Path | None = None, opened: storage.Opened | None = None):
+    def __init__(self, doc, path: Path | None = None, opened: storage.Opened | None = None,
+                 bom: bool = False):
         self.doc = doc
         self.path = Path(path) if path is not None else None
         self.opened = opened
+        self.bom = bom  # the file began with a UTF-8 byte-order mark: it is kept on save
 
     # ------------------------------------------------------------------ in and out
     @classmethod
     def load(cls, path: str | os.PathLike) -> "JobDoc":
         opened = storage.open_text(path)
-        return cls(_parse(opened.text, str(opened.path)), opened.path, opened)
+        body, bom = _split_bom(opened.text)
+        return cls(_parse(body, str(opened.path)), opened.path, opened, bom)
 
     @classmethod
     def parse(cls, text: str, filename: str = "") -> "JobDoc":
-        return cls(_parse(text, filename), Path(filename) if filename else None, None)
+        body, bom = _split_bom(text)
+        return cls(_parse(body, filename), Path(filename) if filename else None, None, bom)
 
     @classmethod
     def new(cls, title: str, **kw) -> "JobDoc":
         return cls.parse(new_job_text(title, **kw))
 
     def text(self) -> str:
-        return tomlkit.dumps(self.doc)
+        return (BOM if self.bom else "") + tomlkit.dumps(self.doc)
 
     def plain(self) -> dict:
         """The document as plain Python dicts, lists and strings."""
@@ -199,7 +205,7 @@ class JobDoc:
                     return
                 node[part] = _table()
             node = node[part]
-            if not isinstance(node, (Table, InlineTable)) and not hasattr(node, "body"):
+            if not isinstance(node, (Table, InlineTable, MutableMapping)):
                 raise InputError(f"'{part}' is not a table", key=dotted)
         _assign(node, parts[-1], value, dotted)
 
@@ -309,9 +315,69 @@ class JobDoc:
         return len(rows) - 1
 
     def _remove(self, name: str, index: int) -> None:
+        """Remove one row with its own comment (the comment lines right above its header);
+        the next row keeps its comment, and nothing else changes."""
         self._row(name, index)
         rows = self._list(name)
+        n = len(rows)
+        index = index % n
+        if isinstance(rows, AoT):
+            text = tomlkit.dumps(self.doc)
+            cut = _cut_row(text, name, index)
+            if cut is not None:
+                try:
+                    doc = tomlkit.parse(cut)
+                except ParseError:
+                    doc = None
+                before = [r.unwrap() for i, r in enumerate(rows) if i != index]
+                if doc is not None and name in doc and [r.unwrap() for r in doc[name]] == before \
+                        and _without(doc, name) == _without(self.doc, name):
+                    self.doc = doc
+                    return
         del rows[index]
+
+
+BOM = "\ufeff"
+
+
+def _split_bom(text: str) -> tuple[str, bool]:
+    return (text[1:], True) if text.startswith(BOM) else (text, False)
+
+
+def _without(doc, name: str) -> dict:
+    plain = doc.unwrap()
+    plain.pop(name, None)
+    return plain
+
+
+_ANY_HEADER = re.compile(r"^\s*\[")
+_COMMENT = re.compile(r"^\s*#")
+
+
+def _cut_row(text: str, name: str, index: int) -> str | None:
+    """The text without row `index` of the array of tables `name` and its own comment
+    block (comment lines directly above its header). None when the layout is not plain
+    enough to be sure (the caller then lets tomlkit remove it)."""
+    lines = text.splitlines(keepends=True)
+    own = re.compile(r"^\s*\[\[\s*" + re.escape(name) + r"\s*\]\]\s*(#.*)?$")
+    headers = [i for i, ln in enumerate(lines) if _ANY_HEADER.match(ln)
+               and re.match(r"^\s*\[\[?\s*[A-Za-z0-9_.\"' -]+\s*\]\]?\s*(#.*)?$", ln)]
+    mine = [i for i in headers if own.match(lines[i])]
+    if index >= len(mine):
+        return None
+
+    def comment_top(h: int) -> int:
+        j = h
+        while j > 0 and _COMMENT.match(lines[j - 1]):
+            j -= 1
+        return j
+
+    start = comment_top(mine[index])
+    after = [i for i in headers if i > mine[index]]
+    end = comment_top(after[0]) if after else len(lines)
+    if end <= mine[index]:
+        return None
+    return "".join(lines[:start] + lines[end:])
 
 
 def _end_with_blank_line(table) -> None:
@@ -352,8 +418,20 @@ def _assign(node, key: str, value, where: str) -> None:
             del node[key]
         return
     _check_value(key, value, where)
-    new = tomlkit.item(_item(value)) if not hasattr(value, "trivia") else value
     old = node.get(key) if hasattr(node, "get") else None
+    plain = value.unwrap() if hasattr(value, "unwrap") else value
+    if isinstance(plain, tuple):
+        plain = list(plain)
+    if old is not None and hasattr(old, "unwrap") and not isinstance(old, (Table, AoT)):
+        if type(old.unwrap()) is type(plain) and old.unwrap() == plain:
+            return  # unchanged: keep its layout and comments exactly
+        if isinstance(old, Array) and isinstance(plain, list) and len(old) == len(plain) \
+                and all(not isinstance(v, (list, dict)) for v in plain):
+            for i, v in enumerate(plain):  # item by item: comments inside the value stay
+                if old[i] != v:
+                    old[i] = v
+            return
+    new = tomlkit.item(_item(value)) if not hasattr(value, "trivia") else value
     if old is not None and hasattr(old, "trivia") and not isinstance(new, (Table, AoT)) \
             and not isinstance(old, (Table, AoT)):
         t, n = old.trivia, new.trivia

@@ -1006,7 +1006,7 @@ def parse_job_text(text: str, filename: str = "<job>") -> Job:
         raise InputErrors([Problem(f"the file is larger than {MAX_FILE_BYTES // 1000} kB; a job "
                                    "file is a few kB", "", filename)])
     try:
-        data = tomllib.loads(text)
+        data = tomllib.loads(text.removeprefix("\ufeff"))  # a byte-order mark is no key
     except tomllib.TOMLDecodeError as e:
         msg = str(e)
         m = re.search(r"\(at line (\d+), column (\d+)\)", msg)
@@ -1026,7 +1026,11 @@ def load_job(path) -> Job:
     p = Path(path)
     name = str(path)
     try:
-        raw = p.read_bytes()
+        from shopbeam.jobs.storage import read_bytes  # regular files only: a FIFO never hangs
+
+        raw = read_bytes(p)
+    except InputError as e:
+        raise InputErrors([Problem(e.problem.message, "", name)]) from None
     except FileNotFoundError:
         raise InputErrors([Problem("no such job file; check the name and folder", "", name)]) from None
     except IsADirectoryError:

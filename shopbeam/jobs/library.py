@@ -120,12 +120,17 @@ class Entry:
 
 
 def _read_entry(path: Path, origin: str) -> Entry:
+    outside = _outside_link(path)
+    if outside:
+        return Entry(path.stem, "(link not followed)", (), origin, path, problem=outside)
     try:
-        text = path.read_text(encoding="utf-8")
+        text = storage.read_bytes(path).decode("utf-8")
+    except InputError as exc:
+        return Entry(path.stem, "(unreadable)", (), origin, path, problem=exc.problem.message)
     except (OSError, UnicodeDecodeError) as exc:
         return Entry(path.stem, "(unreadable)", (), origin, path, problem=str(exc))
     try:
-        data = tomllib.loads(text)
+        data = tomllib.loads(text.removeprefix("\ufeff"))
     except tomllib.TOMLDecodeError as exc:
         return Entry(path.stem, "(not valid TOML)", (), origin, path, problem=str(exc),
                      text=text)
@@ -138,14 +143,39 @@ def _read_entry(path: Path, origin: str) -> Entry:
                  path, notes=notes, text=text)
 
 
+def _outside_link(path: Path) -> str:
+    """Why a library entry is not followed ("" when it is fine): a symbolic link whose
+    target is outside the library folder (or is not there) is never read or written."""
+    if not path.is_symlink():
+        return ""
+    real = Path(os.path.realpath(path))
+    if real.parent != Path(os.path.realpath(path.parent)):
+        return ("a symbolic link to a file outside the library folder; shopbeam does not "
+                "follow it (copy the file into the folder instead)")
+    if not real.is_file():
+        return "a symbolic link to something that is not a job file"
+    return ""
+
+
 def _files(folder: Path) -> list[Path]:
+    """Job files in a folder: regular files and links (checked when read), no dot files,
+    no FIFOs, devices or folders (lstat only: nothing is opened here)."""
+    import stat
+
     try:
-        files = [p for p in folder.iterdir()
-                 if p.suffix == storage.SUFFIX and not p.name.startswith(".") and p.is_file()]
-    except (FileNotFoundError, NotADirectoryError):
+        names = list(folder.iterdir())
+    except (FileNotFoundError, NotADirectoryError, PermissionError):
         return []
-    except PermissionError:
-        return []
+    files = []
+    for p in names:
+        if p.suffix != storage.SUFFIX or p.name.startswith("."):
+            continue
+        try:
+            mode = os.lstat(p).st_mode
+        except OSError:
+            continue
+        if stat.S_ISREG(mode) or stat.S_ISLNK(mode):
+            files.append(p)
     return sorted(files, key=lambda p: p.name.lower())
 
 
@@ -160,6 +190,11 @@ def entries(library_dir=None, *, tag: str | None = None, search: str | None = No
     out: list[Entry] = []
     seen: dict[str, str] = {}
     for pl in places(library_dir):
+        if pl.writable:
+            try:
+                storage.tidy(pl.folder)  # temps of saves killed earlier
+            except (OSError, InputError):
+                pass
         for path in _files(pl.folder):
             e = _read_entry(path, pl.origin)
             key = e.name.lower()

@@ -631,10 +631,12 @@ class JobScreen(Screen):
         try:
             path = do(False)
         except storage.SaveConflict as exc:
+            conflict = exc  # `exc` is cleared when this block ends; the answer comes later
+
             def answer(choice) -> None:
                 if choice == "overwrite":
                     try:
-                        p = do(True)
+                        p = do(conflict)  # only over the file the user was shown
                     except (storage.SaveConflict, InputError, OSError) as exc2:
                         self.notify(f"not saved: {exc2}", severity="error", timeout=10)
                         return
