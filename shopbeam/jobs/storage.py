@@ -181,14 +181,15 @@ def _regular(path: Path, st: os.stat_result) -> None:
 
 
 def read_bytes(path: str | os.PathLike) -> bytes:
-    """A job file's bytes: regular files only (InputError otherwise, never a hang)."""
+    """A job file's bytes: regular files only (InputError otherwise, never a hang).
+    Raises FileNotFoundError when there is no such file."""
     p = Path(path)
     try:
         got = _read(p)
     except PermissionError:
         raise InputError("cannot read the file (permission denied)", file=str(p)) from None
     if got is None:
-        raise InputError("no such file", file=str(p))
+        raise FileNotFoundError(2, "no such file", str(p))
     return got[0]
 
 
