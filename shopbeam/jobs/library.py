@@ -296,7 +296,8 @@ def resolve_job(job, library_dir=None) -> Path:
         if p.is_file():
             return p
         if p.exists():
-            raise InputError("this is a folder, not a job file", file=text)
+            storage.read_bytes(p)  # says what it is: a folder, a FIFO, a device
+            raise InputError("this is not a job file", file=text)
         if _looks_like_path(text):
             folder = p.parent if str(p.parent) else Path(".")
             try:
