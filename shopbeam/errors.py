@@ -28,7 +28,10 @@ class Problem:
         parts = [p for p in (where, self.key) if p]
         prefix = ": ".join(parts)
         kind = "warning: " if self.warning else ""
-        return f"{prefix}: {kind}{self.message}" if prefix else f"{kind}{self.message}"
+        from shopbeam.escapes import shown  # keys and values echoed from a file
+
+        text = f"{prefix}: {kind}{self.message}" if prefix else f"{kind}{self.message}"
+        return shown(text, keep="\n")
 
 
 class InputError(Exception):

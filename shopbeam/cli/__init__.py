@@ -317,6 +317,11 @@ def main(argv: list[str] | None = None) -> int:
     if not getattr(args, "func", None):
         parser.print_help()
         return EXIT_INPUT
+    from shopbeam.escapes import EscapingStream
+
+    saved = sys.stdout, sys.stderr
+    if args.func is not cmd_ui:  # the text UI draws with escapes; Rich strips the file's
+        sys.stdout, sys.stderr = EscapingStream(sys.stdout), EscapingStream(sys.stderr)
     try:
         resolve_job_arg(args)
         return int(args.func(args) or 0)
@@ -334,6 +339,8 @@ def main(argv: list[str] | None = None) -> int:
                   "shopbeam, not in your job; please report it with the job file "
                   "(SHOPBEAM_DEBUG=1 shows the details).", file=sys.stderr)
             return EXIT_INTERNAL
+    finally:
+        sys.stdout, sys.stderr = saved
 
 
 if __name__ == "__main__":  # pragma: no cover

@@ -12,6 +12,7 @@ from shopbeam import cautions
 from shopbeam.cli.common import guarded
 from shopbeam.cli.proof import cmd_library_check
 from shopbeam.errors import InputError
+from shopbeam.escapes import shown
 from shopbeam.jobs import storage
 from shopbeam.jobs.jobdoc import new_job_text
 from shopbeam.jobs.library import (ENV_SHOP, ENV_USER, ORIGINS, copy, entries, find, place,
@@ -48,7 +49,7 @@ def _library_list(args) -> int:
         for e in found:
             title = e.title + (f"  [hidden by {e.shadowed_by}]" if e.shadowed_by else "")
             title += f"  [problem: {e.problem.splitlines()[0]}]" if e.problem else ""
-            rows.append([e.name, e.origin, ",".join(e.tags), title])
+            rows.append([shown(e.name), e.origin, shown(",".join(e.tags)), shown(title)])
         print(_table(rows, ["NAME", "ORIGIN", "TAGS", "TITLE"]))
     print()
     print(_banner(tuple(t for e in found for t in e.tags)))
@@ -63,7 +64,7 @@ def _library_show(args) -> int:
     if e.problem and not e.text:
         raise InputError(f"cannot show '{e.label}': {e.problem}", file=str(e.path))
     text = e.text or storage.open_text(e.path).text
-    print(text.rstrip("\n"))
+    print(shown(text.rstrip("\n"), keep="\n\t"))
     print()
     print(f"# {_banner(e.tags)}")
     return 0

@@ -297,4 +297,6 @@ def render(res: CapacityResult) -> str:
     lines.append("CAUTIONS")
     for c in cautions_for(job.tags):
         lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
-    return "\n".join(lines) + "\n"
+    from shopbeam.escapes import shown  # noqa: PLC0415
+
+    return shown("\n".join(lines), keep="\n") + "\n"

@@ -288,4 +288,6 @@ def calc_sheet(job, result=None) -> str:
     out.append("Numeric engine agrees with this sheet: " + ("yes" if all(agree) else "NO - report this"))
     out.append("")
     out.append("CAUTION: " + cautions_for(job.tags)[-1])
-    return "\n".join(out) + "\n"
+    from shopbeam.escapes import shown
+
+    return shown("\n".join(out), keep="\n") + "\n"

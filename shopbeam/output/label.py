@@ -270,7 +270,9 @@ def label_text(r: Rating, width: int = 40) -> str:
     for c in r.cautions:
         row(c)
     rule()
-    return "\n".join(out) + "\n"
+    from shopbeam.escapes import shown
+
+    return shown("\n".join(out), keep="\n") + "\n"
 
 
 def _body(r: Rating, row) -> None:

@@ -155,4 +155,6 @@ def render(result: Result) -> str:
     lines.append("")
     lines.append("CAUTIONS")
     lines += caution_block(result.cautions)
-    return "\n".join(lines) + "\n"
+    from shopbeam.escapes import shown
+
+    return shown("\n".join(lines), keep="\n") + "\n"
