@@ -331,7 +331,7 @@ def main(argv: list[str] | None = None) -> int:
         return EXIT_OK
     except Exception as exc:  # noqa: BLE001 - the last line of defence against tracebacks
         try:
-            return report_error(exc)
+            return report_error(exc, getattr(args, "job", None))
         except Exception:
             if os.environ.get("SHOPBEAM_DEBUG"):
                 raise

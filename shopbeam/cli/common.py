@@ -11,7 +11,8 @@ import functools
 import sys
 
 from shopbeam.errors import InputError, InputErrors, UnstableBeam
-from shopbeam.jobs.storage import SaveConflict
+from shopbeam.jobs.jobfile import key_lines
+from shopbeam.jobs.storage import SaveConflict, read_bytes
 
 EXIT_OK, EXIT_INTERNAL, EXIT_INPUT = 0, 1, 2
 
@@ -20,9 +21,11 @@ def err(message: str) -> None:
     print(message, file=sys.stderr)
 
 
-def report_error(exc: BaseException) -> int:
-    """Print a problem with the input as one message and return exit 2; re-raise a bug."""
+def report_error(exc: BaseException, job=None) -> int:
+    """Print a problem with the input as one message and return exit 2; re-raise a bug.
+    `job` is the job file of the command, named in a refusal raised below the reader."""
     if isinstance(exc, (InputError, InputErrors, UnstableBeam)):
+        name_the_file(exc, job)
         err(f"shopbeam: {exc}")
         return EXIT_INPUT
     if isinstance(exc, SaveConflict):
@@ -39,6 +42,32 @@ def report_error(exc: BaseException) -> int:
     raise exc
 
 
+def name_the_file(exc: BaseException, job) -> None:
+    """A refusal raised below the reader (wheel sets, patterns, the solve) names the job
+    file, and the line of its key when the key is known."""
+    if not job:
+        return
+    probs = ([exc.problem] if isinstance(exc, InputError) else
+             exc.problems if isinstance(exc, InputErrors) else [])
+    if isinstance(exc, UnstableBeam) and not exc.file:
+        exc.file = str(job)
+    lines = None
+    for p in probs:
+        if p.file:
+            continue
+        p.file = str(job)
+        if p.key and p.line is None:
+            if lines is None:
+                try:
+                    lines = key_lines(read_bytes(job).decode("utf-8", "replace"))
+                except Exception:  # noqa: BLE001 - the line is a courtesy
+                    lines = {}
+            k = p.key
+            while k and k not in lines:
+                k = k[: k.rfind("[")] if k.endswith("]") else k.rsplit(".", 1)[0] if "." in k else ""
+            p.line = lines.get(k) if k else None
+
+
 def guarded(handler):
     """A command handler that reports bad input by `report_error` (exit 2)."""
 
@@ -47,7 +76,7 @@ def guarded(handler):
         try:
             return int(handler(args) or 0)
         except (InputError, InputErrors, UnstableBeam, SaveConflict) as exc:
-            return report_error(exc)
+            return report_error(exc, getattr(args, "job", None))
         except OSError as exc:
             if isinstance(exc, BrokenPipeError):
                 raise

@@ -979,6 +979,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
+    from shopbeam.jobs.limits import cost_problems  # bounded work: counts checked before solving
+
+    for msg, key in cost_problems(supports, loads, moving, braces):
+        r.error(msg, key)
 
     if r.errors:
         raise InputErrors(sorted(r.problems, key=lambda p: (p.warning, p.line or 0)))
@@ -1005,6 +1009,11 @@ def parse_job_text(text: str, filename: str = "<job>") -> Job:
     if len(text.encode("utf-8", "surrogatepass")) > MAX_FILE_BYTES:
         raise InputErrors([Problem(f"the file is larger than {MAX_FILE_BYTES // 1000} kB; a job "
                                    "file is a few kB", "", filename)])
+    from shopbeam.jobs.limits import prescan  # depth and key count, before the parser
+
+    shape = prescan(text)
+    if shape:
+        raise InputErrors([Problem(msg, "", filename, line) for msg, line in shape])
     try:
         data = tomllib.loads(text.removeprefix("\ufeff"))  # a byte-order mark is no key
     except tomllib.TOMLDecodeError as e:

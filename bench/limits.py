@@ -1,0 +1,63 @@
+"""Whole-process time of the worst jobs inside shopbeam's limits (shopbeam/jobs/limits.py)
+and of the adversarial jobs outside them (refused at once). One line per job:
+
+    python bench/limits.py
+
+Target: every job answers or is refused in under 2 s as a whole process (wall and CPU are
+both printed: a shared 2-core machine's wall time is noisy, its CPU time less so).
+"""
+
+from __future__ import annotations
+
+import os
+import resource
+import subprocess
+import sys
+import tempfile
+import time
+from pathlib import Path
+
+HERE = Path(__file__).resolve().parent
+sys.path.insert(0, str(HERE.parent / "tests"))
+
+from adversarial import CASES, hinged, springs, wheels  # noqa: E402
+
+INSIDE = {
+    "100 springs (limit)": springs(100),
+    "99 spans, 49 hinges": hinged(99),
+    "8 wheels on 2 supports": wheels(8),
+    "2 wheels, 2 springs (moving limit)": wheels(2, springs_n=2),
+    "1000 loads (limit)": springs(0) + "".join(
+        f'[[loads]]\ntype = "linear"\nstart = "{i / 10:.2f} ft"\nend = "{i / 10 + 0.07:.2f} ft"\n'
+        'value = ["-1 lbf/ft", "-3 lbf/ft"]\n' for i in range(999)),
+}
+
+
+def run(text: str, argv: list[str]) -> tuple[float, float, int]:
+    with tempfile.TemporaryDirectory() as d:
+        p = Path(d) / "job.toml"
+        p.write_text(text, encoding="utf-8")
+        before = resource.getrusage(resource.RUSAGE_CHILDREN)
+        t = time.perf_counter()
+        rc = subprocess.run([sys.executable, "-m", "shopbeam", *argv, str(p)],
+                            capture_output=True).returncode
+        wall = time.perf_counter() - t
+        after = resource.getrusage(resource.RUSAGE_CHILDREN)
+        cpu = (after.ru_utime - before.ru_utime) + (after.ru_stime - before.ru_stime)
+    return wall, cpu, rc
+
+
+def main() -> None:
+    print(f"{'job':40} {'command':14} {'wall s':>7} {'cpu s':>7} exit  (target < 2 s)")
+    for group, jobs in (("inside", INSIDE), ("adversarial", CASES)):
+        for name, text in jobs.items():
+            for argv in (["solve", "--json"], ["capacity"]):
+                wall, cpu, rc = run(text, argv)
+                flag = "" if wall < 2 else "  OVER"
+                print(f"{group[:3]} {name[:36]:36} {' '.join(argv):14} {wall:7.2f} {cpu:7.2f} "
+                      f"{rc:4}{flag}")
+
+
+if __name__ == "__main__":
+    os.environ.setdefault("PYTHONWARNINGS", "default")
+    main()

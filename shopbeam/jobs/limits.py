@@ -1,0 +1,102 @@
+"""Bounded work for every job: what a job may ask for, checked before any solving.
+
+Two gates. `prescan` looks at the raw text before the TOML parser sees it: the nesting depth
+(dotted keys, table headers, nested arrays and inline tables) and the number of keys, so a
+file of deeply dotted keys is refused in milliseconds instead of tying up the parser. The
+counts of what the solve will do (supports, springs, hinges, loads, wheels, and the moving-
+load search, whose work grows as wheels x fixed positions x (wheels + fixed positions)) are
+checked by the job reader with `cost_problems`. The limits are set so that any job inside
+them answers in under 2 s as a whole process on the development machine (bench/: the worst
+cases inside the limits); anything outside is refused at once, naming the limit, the file,
+the key and its line.
+"""
+
+from __future__ import annotations
+
+import re
+
+MAX_DEPTH = 6  # beam.section.x is 3; nothing in a job file needs more
+MAX_KEYS = 6000  # a job at its 1,000-load limit has about 5,000
+MAX_WHEELS = 8
+MAX_SPRINGS = 100
+MAX_HINGES = 100
+MOVING_WORK = 100
+MAX_WHEEL_FORCE = 1e9  # N, as for a point load (jobfile.LOAD_LIMITS)  # wheels x fixed positions x (wheels + fixed positions)
+
+_STRINGS = re.compile(r'"""[\s\S]*?"""|\'\'\'[\s\S]*?\'\'\'|"(?:[^"\\\n]|\\.)*"|\'[^\'\n]*\'')
+_COMMENT = re.compile(r"#[^\n]*")
+_KEYLINE = re.compile(r"^[ \t]*(\[\[?)?[ \t]*([^=\[\]\n]*?)[ \t]*(\]\]?[ \t]*$|=)", re.M)
+
+
+def prescan(text: str) -> list[tuple[str, int]]:
+    """Problems with the shape of the TOML text (message, line), found without parsing it."""
+    # strings and comments hold no structure: blank them out, keeping the line breaks
+    bare = _STRINGS.sub(lambda m: '""' + "\n" * m.group(0).count("\n"), text)
+    bare = _COMMENT.sub("", bare)
+    out: list[tuple[str, int]] = []
+    keys = bare.count("=")
+    if keys > MAX_KEYS:
+        out.append((f"the file has {keys:,} keys, more than a job file can have "
+                    f"({MAX_KEYS:,}); is it the right file?", 1))
+    for m in _KEYLINE.finditer(bare):
+        dots = m.group(2).count(".")
+        depth = dots + 1
+        if depth > MAX_DEPTH:
+            line = bare.count("\n", 0, m.start()) + 1
+            out.append((f"a key nested {depth} deep (the limit is {MAX_DEPTH}); a job file "
+                        "needs at most beam.section.key", line))
+            break
+    depth = worst = 0
+    worst_at = 0
+    for m in re.finditer(r"[\[\]{}]", bare):
+        depth += 1 if m.group(0) in "[{" else -1
+        if depth > worst:
+            worst, worst_at = depth, m.start()
+        if worst > MAX_DEPTH + 2:
+            break
+    if worst > MAX_DEPTH + 2:
+        out.append((f"brackets nested over {MAX_DEPTH + 2} deep; a job file needs 2 "
+                    "(a list of values)", bare.count("\n", 0, worst_at) + 1))
+    return out
+
+
+def moving_work(wheels: int, fixed: int) -> int:
+    return wheels * fixed * (wheels + fixed)
+
+
+def cost_problems(supports, loads, moving, braces=()) -> list[tuple[str, str]]:
+    """Counts beyond what shopbeam takes: (message, key path)."""
+    out = []
+    springs = sum(1 for s in supports if s.kind == "spring")
+    hinges = sum(1 for s in supports if s.kind == "hinge")
+    if springs > MAX_SPRINGS:
+        out.append((f"{springs} springs is more than shopbeam takes ({MAX_SPRINGS})", "supports"))
+    if hinges > MAX_HINGES:
+        out.append((f"{hinges} hinges is more than shopbeam takes ({MAX_HINGES})", "supports"))
+    for w in moving:
+        n = len(w.live)
+        key = getattr(w, "key", "moving[0]")
+        for name, values in (("loads", w.live), ("dead", w.dead)):
+            big = max((abs(v) for v in values), default=0.0)
+            if not big <= MAX_WHEEL_FORCE:  # the size limit a point load gets
+                from shopbeam import units
+
+                out.append((f"{units.fmt(big, 'force')} on a wheel is far beyond any shop load "
+                            f"(the limit is {units.fmt(MAX_WHEEL_FORCE, 'force')}): check the "
+                            "number and its unit", f"{key}.{name}"))
+        if n > MAX_WHEELS:
+            out.append((f"{n} wheels is more than shopbeam takes in one wheel set "
+                        f"({MAX_WHEELS}); model a long train of wheels as a uniform load",
+                        f"{key}.loads"))
+            continue
+        fixed = {0.0} | {s.at for s in supports} | set(braces)
+        for ld in loads:
+            fixed.update(ld.describe_position())
+        work = moving_work(n, len(fixed) + 1)
+        if work > MOVING_WORK:
+            out.append((f"a wheel set of {n} wheels over {len(fixed) + 1} fixed positions "
+                        f"(supports, load ends, braces) takes {work:,} units of search, more "
+                        f"than shopbeam takes ({MOVING_WORK:,} = wheels x positions x (wheels "
+                        "+ positions)); use fewer wheels, supports or loads, or split the job",
+                        f"{key}.loads"))
+    return out

@@ -1,0 +1,50 @@
+"""The adversarial shapes through the command line: each answered or refused, exit 0 or 2,
+nothing on stderr but the refusal (no warning, no traceback), the refusal naming the file,
+no answer with a failed self-check, no control character on the terminal. Fixed recipes
+(tests/adversarial.py), so every run is the same."""
+
+from __future__ import annotations
+
+import json
+import re
+import subprocess
+import sys
+
+import pytest
+
+from adversarial import CASES
+
+CONTROL = re.compile("[\x00-\x08\x0b-\x1f\x7f-\x9f]")
+
+
+@pytest.mark.parametrize("name", sorted(CASES))
+def test_adversarial_job_is_answered_soundly_or_refused(tmp_path, name):
+    p = tmp_path / "job.toml"
+    p.write_text(CASES[name], encoding="utf-8")
+    for argv in (["solve", "--json"], ["check"], ["solve"]):
+        r = subprocess.run([sys.executable, "-m", "shopbeam", *argv, str(p)],
+                           capture_output=True, text=True, timeout=120)
+        assert r.returncode in (0, 2), (name, argv, r.stderr[-2000:])
+        assert "Traceback" not in r.stderr and "Warning" not in r.stderr, (name, r.stderr)
+        assert not CONTROL.search(r.stdout + r.stderr), name
+        if r.returncode == 2:
+            assert str(p) in r.stderr, (name, r.stderr)
+        elif argv == ["solve", "--json"]:
+            data = json.loads(r.stdout)
+            bad = [d for d in data["diagnostics"] if not d["ok"] and "magnitude" not in d["name"]]
+            assert not bad, (name, bad)
+        else:
+            assert r.stderr == "" or argv == ["check"], (name, r.stderr)
+    codes = {a: subprocess.run([sys.executable, "-m", "shopbeam", a, str(p)],
+                               capture_output=True, timeout=120).returncode
+             for a in ("check", "solve")}
+    assert codes["check"] == codes["solve"], (name, codes)  # check and solve agree
+
+
+def test_the_ramp_a_hair_long_answers_the_right_reactions(tmp_path):
+    p = tmp_path / "job.toml"
+    p.write_text(CASES["ramp a hair long"])
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "solve", "--json", str(p)],
+                       capture_output=True, text=True)
+    forces = [x["force"] / 4.4482216152605 for x in json.loads(r.stdout)["reactions"]]
+    assert abs(forces[0] - 2107.5) < 0.01 and abs(forces[1] - 4312.5) < 0.01
