@@ -56,7 +56,7 @@ def sliver_span(gap_ft: float) -> str:
 
 CASES = {
     "deep dotted keys": HEAD + "x" + "".join(f".a{i}" for i in range(20000)) + " = 1\n",
-    "many keys": HEAD + "".join(f"k{i} = {i}\n" for i in range(12000)),
+    "many keys": HEAD + "".join(f"k{i} = {i}\n" for i in range(60000)),
     "nested brackets": HEAD + "x = " + "[" * 5000 + "]" * 5000 + "\n",
     "1000 wheels": wheels(1000),
     "10000 wheels": wheels(10000),
