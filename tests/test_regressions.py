@@ -5,11 +5,15 @@ Each test is named after what broke and fails on the code before its fix.
 
 from __future__ import annotations
 
+from pathlib import Path
+
 import pytest
 
 from shopbeam.engine.model import Beam, Load, Support
 from shopbeam.engine.solver import solve
 from jobtext import CUSTOM_MEMBER
+
+PRESETS = Path(__file__).resolve().parent.parent / "presets"
 
 
 def test_positions_not_rounded_to_a_grid_of_one_billionth_of_the_length():
@@ -305,3 +309,19 @@ def test_newton_metres_are_a_moment_not_nanometres():
     from shopbeam import units
 
     assert units.parse("135 Nm", "moment") == pytest.approx(135.0)
+
+
+def test_top_flange_cantilever_caution_quotes_the_checked_bending_ratio():
+    # The jib preset carries a 25 % impact allowance: the bending check's ratio includes
+    # it, and the top-flange caution once quoted the ratio without it ("0.49" beside a
+    # bending check of 0.591). The caution's "instead of" figure must be the check's ratio.
+    import re
+
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import load_job
+
+    res = analyze(load_job(PRESETS / "jib-arm.toml"))
+    bending = next(c for c in res.checks if c.name == "bending")
+    note = next(n for n in res.cautions if "destabilising" in n)
+    quoted = float(re.search(r"instead of ([0-9]+\.[0-9]+)", note).group(1))
+    assert quoted == pytest.approx(bending.ratio, abs=0.006)

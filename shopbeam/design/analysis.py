@@ -115,7 +115,7 @@ def analyze(job: Job) -> Result:
 
     from shopbeam.design.checks import aluminum_unchecked
 
-    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol) + [
+    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) + [
         f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}." for u in aluminum_unchecked(job)]
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
@@ -134,12 +134,13 @@ def member_notes(job: Job) -> list[str]:
     return out
 
 
-def cantilever_notes(job: Job, sol: Solution) -> list[str]:
+def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     """A cantilever unbraced at its tip: Lb is its length with Cb = 1.0 (AISC 360-16 F1),
     which assumes the load at the shear centre. Loads bearing on the top flange destabilise
     it: the effective length factors for a tip free to twist are about 1.4 for a built-in
     root and 2.5 for an overhang past a support (SSRC Guide / BS 5950-1 Table 14, from
-    memory); the ratio at that length is given as a caution."""
+    memory); the ratio at that length is given as a caution, from the same demand as the
+    bending check (impact and load states included) when that check falls in the span."""
     from shopbeam.design.checks import strengths
 
     st = strengths(job, beam=sol.beam)
@@ -156,6 +157,9 @@ def cantilever_notes(job: Job, sol: Solution) -> list[str]:
         fixed = any(s.kind == "fixed" and abs(s.at - root) <= tol for s in job.supports)
         k = 1.4 if fixed else 2.5
         mmax = sol.moment.extremes(a, b).abs_max
+        for c in checks:
+            if c.name == "bending" and c.at is not None and a - tol <= c.at <= b + tol:
+                mmax = max(mmax, c.demand)
         now = min(fl.cap, _l1) / fl.omega
         top = min(fl.cap, fl.ltb1(k * (b - a))[0]) / fl.omega
         if mmax <= 0:
