@@ -1,7 +1,9 @@
 """The safety wording every screen, report and rating label carries.
 
 One place for it, so the CLI report, the JSON, the calc sheet, the rating label and the text
-UI all say the same thing. Jobs tagged ``lifting`` get the stronger wording.
+UI all say the same thing. A lifting device gets the stronger wording: a job tagged
+``lifting`` or one that names a lifting profile (``[criteria] lifting = "..."``) without the
+tag; every caller passes both (``Job.lifting`` is that one rule).
 """
 
 from __future__ import annotations
@@ -27,20 +29,24 @@ def normal_tag(tag) -> str:
     return str(tag).strip().lower()
 
 
-def is_lifting(tags) -> bool:
-    """The one rule for a lifting device (the reader's `Job.lifting` uses it too)."""
+def is_lifting(tags, profile: str = "") -> bool:
+    """The one rule for a lifting device (the reader's `Job.lifting` uses it too): tagged
+    ``lifting``, or a lifting profile named in ``[criteria] lifting``."""
+    if profile:
+        return True
     return any(normal_tag(t) == "lifting" for t in (tags or ()))
 
 
-def cautions_for(tags) -> list[str]:
-    """The cautions for a job with these tags, strongest first."""
+def cautions_for(tags, lifting: bool = False) -> list[str]:
+    """The cautions for a job with these tags (``lifting``: a lifting device whatever the
+    tags say, e.g. `Job.lifting`), strongest first."""
     out = []
-    if is_lifting(tags):
+    if lifting or is_lifting(tags):
         out.append(LIFTING)
     out.append(SCREENING)
     return out
 
 
-def banner(tags) -> str:
+def banner(tags, lifting: bool = False) -> str:
     """One-line banner for narrow places (text UI header, label footers)."""
-    return (SHORT_LIFTING + " " + SHORT) if is_lifting(tags) else SHORT
+    return (SHORT_LIFTING + " " + SHORT) if lifting or is_lifting(tags) else SHORT

@@ -50,7 +50,7 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
     from shopbeam.design.open_shapes import replaces_angle_warning
     from shopbeam.members.sections import ANGLE_WARNING
 
-    out = cautions_for(job.tags)
+    out = cautions_for(job.tags, job.lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
     if replaces_angle_warning(job):  # F10 checks the principal axes (or the job restrains it)
         warns = [w for w in warns if w != ANGLE_WARNING]

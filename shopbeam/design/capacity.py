@@ -258,7 +258,7 @@ def to_json(res: CapacityResult) -> dict:
 def render(res: CapacityResult) -> str:
     job = res.job
     lines = [f"shopbeam capacity: {job.title}", "=" * 78]
-    lines += textwrap.wrap(banner(job.tags), 78)
+    lines += textwrap.wrap(banner(job.tags, job.lifting), 78)
     lines.append("")
     k = res.factor
     if math.isfinite(k):
@@ -295,7 +295,7 @@ def render(res: CapacityResult) -> str:
             lines += textwrap.wrap(p.located(), 78, initial_indent="  ", subsequent_indent="  ")
     lines.append("")
     lines.append("CAUTIONS")
-    for c in cautions_for(job.tags):
+    for c in cautions_for(job.tags, job.lifting):
         lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
     from shopbeam.escapes import shown  # noqa: PLC0415
 

@@ -633,7 +633,7 @@ def render(res: SizeResult, top: int = 15) -> str:
     for s in res.skipped[:5]:
         lines.append(f"  skipped {s}")
     lines.append("")
-    for c in cautions_for(job.tags):
+    for c in cautions_for(job.tags, job.lifting):
         lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
     return "\n".join(lines) + "\n"
 
@@ -656,6 +656,6 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
             "passing": [row(r) for r in rows], "seconds": res.seconds, "method": res.method,
             "lightest": res.lightest.designation if res.lightest else None,
             "cheapest": res.cheapest.designation if res.cheapest else None,
-            "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags),
+            "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags, res.job.lifting),
             "material": getattr(res.job.material, "key", ""),
             "material_note": res.material_note}

@@ -124,7 +124,8 @@ class Job:
 
     @property
     def lifting(self) -> bool:
-        return is_lifting(self.tags)
+        """A lifting device: tagged ``lifting`` or naming a ``[criteria] lifting`` profile."""
+        return is_lifting(self.tags, self.criteria.lifting)
 
     @property
     def ei(self) -> float:

@@ -22,7 +22,6 @@ from dataclasses import dataclass, field
 from html import escape
 
 from shopbeam import __version__, units
-from shopbeam.cautions import is_lifting
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.errors import InputError
 from shopbeam.jobs.storage import atomic_write
@@ -221,7 +220,7 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
     st_sol = result.state_solution
     text = input_bytes.decode("utf-8", "replace")
     return Package(
-        title=job.title, title_block=title_block, lifting=is_lifting(job.tags),
+        title=job.title, title_block=title_block, lifting=job.lifting,
         basis=tuple(basis_lines), editions=_editions(result, basis), member=tuple(member),
         supports=tuple(describe_support(s, sy) for s in job.supports), loads=tuple(loads),
         load_states=tuple(states), sketch=svg.member_sketch(job, moving=getattr(job, "moving", ())),

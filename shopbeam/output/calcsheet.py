@@ -220,7 +220,7 @@ def calc_sheet(job, result=None) -> str:
     ei_val = exact_number(beam.ei / (fu * lu * lu))
     width = 78
     out = [f"shopbeam calc sheet: {job.title}", "=" * width]
-    for c in cautions_for(job.tags):
+    for c in cautions_for(job.tags, job.lifting):
         out += textwrap.wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
     out += [
         "",
@@ -287,7 +287,7 @@ def calc_sheet(job, result=None) -> str:
         agree.append(abs(exact_val - r.force) <= 1e-9 * max(1.0, abs(r.force)))
     out.append("Numeric engine agrees with this sheet: " + ("yes" if all(agree) else "NO - report this"))
     out.append("")
-    out.append("CAUTION: " + cautions_for(job.tags)[-1])
+    out.append("CAUTION: " + cautions_for(job.tags, job.lifting)[-1])
     from shopbeam.escapes import shown
 
     return shown("\n".join(out), keep="\n") + "\n"

@@ -30,7 +30,7 @@ from dataclasses import dataclass
 from html import escape
 
 from shopbeam import units
-from shopbeam.cautions import cautions_for, is_lifting
+from shopbeam.cautions import cautions_for
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.errors import InputError
@@ -70,6 +70,7 @@ class Rating:
     unchecked: tuple[str, ...]  # "name (clause): reason"
     notes: tuple[str, ...]
     warnings: tuple[str, ...] = ()  # input warnings, "key: what"
+    lifting_profile: str = ""  # the lifting profile the rating used (design.lifting.profile_of)
 
 
 # ------------------------------------------------------------------ rounding
@@ -219,10 +220,24 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         title=job.title, member=f"{job.section.designation}, {job.material.key}", span=span,
         factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
         governing=gov.name if gov is not None else "", basis=BASIS_SHORT[basis_of(job)],
-        date=(date or _dt.date.today()).isoformat(), lifting=is_lifting(job.tags),
-        cautions=tuple(cautions_for(job.tags)), unchecked=unch, notes=tuple(notes),
+        date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,
+        cautions=tuple(cautions_for(job.tags, job.lifting)), unchecked=unch, notes=tuple(notes),
         warnings=tuple(f"{p.key}: {p.message.split(':')[0]}" for p in job.warnings
-                       if getattr(p, "warning", False)))
+                       if getattr(p, "warning", False)),
+        lifting_profile=_profile_name(job))
+
+
+def _profile_name(job) -> str:
+    from shopbeam.design.lifting import profile_of
+
+    prof = profile_of(job)
+    return prof.name if prof else ""
+
+
+def _lifting_words(r: Rating) -> str:
+    """The lifting line of a label: the profile the numbers used, and what must follow."""
+    return ("LIFTING DEVICE" + (f" ({r.lifting_profile} profile)" if r.lifting_profile else "")
+            + ": proof load test and marking by a qualified engineer required before use")
 
 
 # ------------------------------------------------------------------ 40-column label
@@ -257,8 +272,7 @@ def label_text(r: Rating, width: int = 40) -> str:
     row(f"Date: {r.date}")
     rule("-")
     if r.lifting:
-        row("LIFTING DEVICE: rated with impact allowance; proof load test and marking by a "
-            "qualified engineer required before use")
+        row(_lifting_words(r))
     else:
         row("NOT FOR LIFTING")
     if r.unchecked:
@@ -354,9 +368,8 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
     h += [f'<p class="meta"><b>INPUT WARNING</b> {e(w)} (see shopbeam check)</p>'
           for w in r.warnings]
     h.append(f'<p class="meta">Basis: {e(r.basis)} &nbsp; Date: {e(r.date)}</p>')
-    h.append('<div class="lift">' + ("LIFTING DEVICE: rated with impact allowance; proof load "
-                                     "test and marking by a qualified engineer required before "
-                                     "use" if r.lifting else "NOT FOR LIFTING") + "</div>")
+    h.append('<div class="lift">' + e(_lifting_words(r) if r.lifting else "NOT FOR LIFTING")
+             + "</div>")
     if r.unchecked:
         h.append("<p class=meta><b>Not checked:</b></p><ul>"
                  + "".join(f"<li>{e(u)}</li>" for u in r.unchecked) + "</ul>")

@@ -145,7 +145,9 @@ class JobScreen(Screen):
         tags = ev.job.tags if ev.job is not None else (s.doc.get("tags") or [])
         if not isinstance(tags, list) and not isinstance(tags, tuple):
             tags = []
-        self.query_one(Banner).show(tags)
+        prof = s.doc.get("criteria.lifting")
+        lifting = ev.job.lifting if ev.job is not None else isinstance(prof, str) and bool(prof)
+        self.query_one(Banner).show(tags, lifting)
         title = s.doc.get("title") or "(no title)"
         flags = []
         if s.dirty:

@@ -832,7 +832,8 @@ class ResultsView(View):
         else:
             from shopbeam.cautions import cautions_for
 
-            cautions = cautions_for(ev.job.tags if ev.job is not None else ())
+            cautions = cautions_for(ev.job.tags if ev.job is not None else (),
+                                    ev.job is not None and ev.job.lifting)
         warns = [p for p in ev.problems if p.warning]
         extra = ["INPUT WARNINGS"] + [in_words(f"  {p.key}: {p.message}") for p in warns] \
             if warns else []

@@ -294,10 +294,11 @@ class Banner(Static):
 
     DEFAULT_CSS = "Banner { height: auto; }"
 
-    def show(self, tags) -> None:
+    def show(self, tags, lifting: bool = False) -> None:
+        """`lifting`: a lifting device whatever the tags say (a named lifting profile)."""
         from shopbeam.cautions import SHORT, SHORT_LIFTING, is_lifting
 
-        if is_lifting(tags):
+        if lifting or is_lifting(tags):
             self.add_class("-lifting")
             self.update(Text("!! " + SHORT_LIFTING + "\n" + SHORT))
         else:
