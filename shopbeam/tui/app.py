@@ -308,8 +308,9 @@ class JobScreen(Screen):
             # an emptied required field stays in the file as "" (its place and comment
             # kept, and a problem shown) until something is typed in it
             s.set(key, raw)  # positions are asked about when the field is left
-        elif key == "criteria.deflection":
-            s.set(key, raw or None)
+        elif key in ("criteria.deflection", "criteria.live_deflection", "criteria.impact",
+                     "beam.bearing"):
+            s.set(key, raw or None)  # optional: emptied means left out
         elif key == "beam.braces":
             s.set(key, [t.strip() for t in value.split(",") if t.strip()] or None)
         elif key in ("beam.members", "criteria.safety_factor"):
@@ -325,7 +326,8 @@ class JobScreen(Screen):
         elif key.startswith("support."):
             if row >= len(s.rows("supports")):
                 return
-            s.set_row("supports", row, key[8:], raw)
+            # bearing is optional: emptied means left out (beam.bearing applies)
+            s.set_row("supports", row, key[8:], (raw or None) if key == "support.bearing" else raw)
         elif key.startswith("load."):
             if row >= len(s.rows("loads")):
                 return
@@ -339,7 +341,7 @@ class JobScreen(Screen):
                 s.set_row("loads", i, "value", pair)
             elif field == "label":
                 s.set_row("loads", i, "label", value or None)
-            elif field in ("width", "total"):  # optional: emptied means left out
+            elif field in ("width", "total", "bearing"):  # optional: emptied means left out
                 s.set_row("loads", i, field, raw or None)
             else:
                 s.set_row("loads", i, field, raw)
@@ -442,6 +444,20 @@ class JobScreen(Screen):
         elif key == "load.case":
             i = self.query_one("#loads", LoadsView).selected
             s.set_row("loads", i, "case", "dead" if value == "dead" else None)
+        elif key == "load.flange":
+            i = self.query_one("#loads", LoadsView).selected
+            s.set_row("loads", i, "flange", "bottom" if value == "bottom" else None)
+        elif key == "support.brace":
+            i = self.query_one("#span", SpanView).selected
+            s.set_row("supports", i, "brace", {"yes": True, "no": False}.get(value))
+        elif key == "criteria.lifting":
+            self.change_lifting(value)
+        elif key == "criteria.category":
+            s.set(key, value)
+        elif key in ("criteria.duration", "beam.temperature"):
+            s.set(key, None if value == MaterialView.WOOD_KEYS[key] else value)
+        elif key in ("beam.wet_service", "beam.repetitive"):
+            s.set(key, True if value == "yes" else None)
         elif key == "section.mode":
             self.change_section_mode(value)
         elif key == "section.shape":
@@ -451,6 +467,17 @@ class JobScreen(Screen):
         else:
             return
         self.changed()
+
+    def change_lifting(self, value: str) -> None:
+        """A lifting profile chosen (or "none"): written to [criteria] lifting (a job that
+        names a profile is a lifting device: the stronger cautions on every screen)."""
+        s = self.session
+        s.set("criteria.lifting", None if value == "none" else value)
+        cat = s.doc.get("criteria.category")
+        if value != "below-the-hook" and cat is not None:
+            s.set("criteria.category", None)
+            self.notify(f"category {cat} removed: it is used only with below-the-hook.",
+                        severity="warning", timeout=6)
 
     def _length_text(self, fraction: float) -> str:
         ev, s = self.session.evaluation, self.session

@@ -63,6 +63,26 @@ class View(VerticalScroll):
     def reading(self, field: Field, ev) -> str:
         return ""
 
+    def show_choice_messages(self, ev, keys: dict[str, str]) -> None:
+        """Under each choice (by its key): the reader's problem or warning on the job-file
+        key it edits, else what the chosen word means (`choice_reading`)."""
+        for c in self.query(Choice):
+            key = keys.get(c.key)
+            if key is None:
+                continue
+            msg = in_words(ev.message_for(key))
+            if msg and not msg.startswith("warning: "):
+                c.show(msg, error=True)
+            else:
+                c.show(msg or self.choice_reading(c, ev))
+
+    def choice_reading(self, choice: Choice, ev) -> str:
+        return ""
+
+
+def _given(value) -> bool:
+    return value is not None and value != ""
+
 
 # Every dimensional field: how to read it back for the "as read" echo.
 def echo(text: str, kind: str, system: str) -> str:
@@ -301,6 +321,7 @@ class SpanView(RowsView):
         yield Field("Members", "beam.members", placeholder="1 (identical members sharing)")
         yield Choice("Braced", ["at supports", "all along"], key="beam.braced")
         yield Field("Braces at", "beam.braces", placeholder="e.g. 4 ft, 8 ft")
+        yield Field("Bearing", "beam.bearing", placeholder="e.g. 4 in (all supports)")
         yield Static("Supports (ctrl+t add, ctrl+x remove, up/down pick):",
                      classes="sub-title")
         yield RowList(id="support-list", classes="rows")
@@ -315,6 +336,8 @@ class SpanView(RowsView):
             yield Choice("Type", list(SUPPORT_KINDS), key="support.type")
             yield Field("At", "support.at", placeholder="e.g. 0 ft")
             yield Field("Stiffness", "support.stiffness", placeholder="e.g. 2000 lbf/in")
+            yield Choice("Brace", ["default", "yes", "no"], key="support.brace")
+            yield Field("Bearing", "support.bearing", placeholder="e.g. 4 in (this one)")
 
     def row_text(self, i, row, session) -> str:
         k = f", k = {row['stiffness']}" if row.get("type") == "spring" and "stiffness" in row else ""
@@ -332,6 +355,8 @@ class SpanView(RowsView):
                 b = doc.get("beam.braces", [])
                 f.set_value(", ".join(str(x) for x in b) if isinstance(b, list) else str(b))
                 f.display = doc.get("beam.braced", False) is not True
+            elif f.key == "beam.bearing":
+                f.set_value(str(doc.get("beam.bearing", "")))
         sw = doc.get("beam.self_weight", True)
         for c in self.query(Choice):
             if c.key == "beam.self_weight":
@@ -341,27 +366,37 @@ class SpanView(RowsView):
         super().show(session)
         self.show_field_messages(session.evaluation,
                                  {"beam.length": "beam.length", "beam.members": "beam.members",
-                                  "beam.braces": "beam.braces"})
+                                  "beam.braces": "beam.braces", "beam.bearing": "beam.bearing"})
+        self.show_choice_messages(session.evaluation, {"beam.braced": "beam.braced"})
 
     def show_form(self, session) -> None:
         i, row = self.selected_row(session)
         if row is None:
             return
         kind = row.get("type", self.new_kind)
+        brace = row.get("brace")
         for c in self.query(Choice):
             if c.key == "support.type":
                 c.set(kind)
+            elif c.key == "support.brace":
+                c.set({True: "yes", False: "no"}.get(brace, "default")
+                      if brace is None or isinstance(brace, bool) else "default")
+                c.display = kind != "hinge" or "brace" in row
         for f in self.query(Field):
             if f.key == "support.at":
                 f.show_row(i, row.get("at", ""))
             elif f.key == "support.stiffness":
                 f.show_row(i, row.get("stiffness", ""))
                 f.display = kind == "spring"
-        self.show_field_messages(session.evaluation, {
-            "support.at": f"supports[{i}].at", "support.stiffness": f"supports[{i}].stiffness"})
-        for f in self.query(Field):
-            if f.key == "support.type":
-                pass
+            elif f.key == "support.bearing":
+                f.show_row(i, row.get("bearing", ""))
+                f.display = kind != "hinge" or "bearing" in row
+        ev = session.evaluation
+        self.show_field_messages(ev, {
+            "support.at": f"supports[{i}].at", "support.stiffness": f"supports[{i}].stiffness",
+            "support.bearing": f"supports[{i}].bearing"})
+        self._row_kind = kind
+        self.show_choice_messages(ev, {"support.brace": f"supports[{i}].brace"})
         tmsg = session.evaluation.message_for(f"supports[{i}].type")
         if tmsg:
             self.app.notify(tmsg, severity="error")
@@ -373,11 +408,25 @@ class SpanView(RowsView):
         if k and field.value:
             return echo(field.value, k, system)
         if field.key == "beam.braces":
-            return ("compression flange braced against twisting at these points (and at "
-                    "the supports)" if field.value.strip() else
-                    "none between supports: lateral-torsional buckling over each span")
+            return ("braced at these points and the supports" if field.value.strip() else
+                    "none: buckling over each whole span")
         if field.key == "beam.members" and ev.job is not None and ev.job.members > 1:
             return f"each member carries 1/{ev.job.members} of the loads"
+        if field.key in ("beam.bearing", "support.bearing"):
+            if field.value.strip():
+                return echo(field.value, "small_length", system) + " for the local checks"
+            return ("none: knife edge (local checks)"
+                    if field.key == "beam.bearing" else "none: the beam's bearing applies")
+        return ""
+
+    def choice_reading(self, choice, ev) -> str:
+        if choice.key == "support.brace" and choice.value == "default":
+            kind = getattr(self, "_row_kind", "")
+            return ("default: a spring does not brace it" if kind == "spring" else
+                    "default: braces it (stops twist and sway)")
+        if choice.key == "support.brace":
+            return ("braces it (stops twist and sway)" if choice.value == "yes"
+                    else "does not brace it")
         return ""
 
 
@@ -410,6 +459,8 @@ class LoadsView(RowsView):
             yield Field("Label", "load.label", placeholder="what it is")
             yield Choice("Case", ["live", "dead"], key="load.case")
             yield Choice("Patterned", ["no", "yes"], key="load.patterned")
+            yield Field("Bearing", "load.bearing", placeholder="e.g. 6 in")
+            yield Choice("Flange", ["top", "bottom"], key="load.flange")
             yield Static("Patterned: each span is checked loaded and empty in turn (parts "
                          "taken off one bay at a time).", classes="hint", markup=False)
 
@@ -438,13 +489,17 @@ class LoadsView(RowsView):
             elif c.key == "load.patterned":
                 c.set("yes" if row.get("patterned") is True else "no")
                 c.display = kind in ("uniform", "linear", "point")
+            elif c.key == "load.flange":
+                c.set("bottom" if row.get("flange") == "bottom" else "top")
+                c.display = kind == "point" or "flange" in row
         v = row.get("value", "")
         v1, v2 = (v + ["", ""])[:2] if isinstance(v, list) else (v, "")
         values = {"load.at": row.get("at", ""), "load.start": row.get("start", ""),
                   "load.end": row.get("end", ""), "load.value": v1, "load.value2": v2,
                   "load.width": row.get("width", ""), "load.total": row.get("total", ""),
-                  "load.label": row.get("label", "")}
+                  "load.label": row.get("label", ""), "load.bearing": row.get("bearing", "")}
         shown = {"load.at": kind in ("point", "moment"),
+                 "load.bearing": kind == "point" or "bearing" in row,
                  "load.start": kind in ("uniform", "linear"),
                  "load.end": kind in ("uniform", "linear"), "load.value2": kind == "linear",
                  "load.width": kind in ("uniform", "linear"), "load.total": kind == "uniform"}
@@ -460,7 +515,11 @@ class LoadsView(RowsView):
             "load.end": f"loads[{i}].end",
             "load.value": f"loads[{i}].value" + ("[0]" if kind == "linear" else ""),
             "load.value2": f"loads[{i}].value[1]", "load.width": f"loads[{i}].width",
-            "load.total": f"loads[{i}].total", "load.label": f"loads[{i}].label"})
+            "load.total": f"loads[{i}].total", "load.label": f"loads[{i}].label",
+            "load.bearing": f"loads[{i}].bearing"})
+        self.show_choice_messages(session.evaluation, {
+            "load.flange": f"loads[{i}].flange", "load.patterned": f"loads[{i}].patterned",
+            "load.case": f"loads[{i}].case"})
         # a problem with the whole value list of a linear load goes beside the first value
         if kind == "linear":
             msg = session.evaluation.message_for(f"loads[{i}].value")
@@ -476,7 +535,7 @@ class LoadsView(RowsView):
         value_kind = {"point": "force", "moment": "moment"}.get(kind, "line_load")
         kinds = {"load.at": "length", "load.start": "length", "load.end": "length",
                  "load.value": value_kind, "load.value2": "line_load", "load.width": "small_length",
-                 "load.total": "force"}
+                 "load.total": "force", "load.bearing": "small_length"}
         k = kinds.get(field.key)
         if k and field.value:
             got = echo(field.value, k, system)
@@ -485,7 +544,18 @@ class LoadsView(RowsView):
             if field.key in ("load.value", "load.value2") and got:
                 way = direction_words({"type": kind, "value": field.value})
                 got += f"  {way}" if way else ""
+            if field.key == "load.bearing" and got:
+                got += " along the flange (local checks)"
             return got
+        if field.key == "load.bearing":
+            return "none: the beam's bearing applies"
+        return ""
+
+    def choice_reading(self, choice, ev) -> str:
+        if choice.key == "load.flange":
+            return ("hangs from the bottom flange: flange bending (J10.1)"
+                    if choice.value == "bottom" else
+                    "bears on the top flange: web checks (J10.2, J10.3)")
         return ""
 
 
@@ -661,6 +731,14 @@ class MaterialView(View):
             for k, label, _kind, ph in self.CUSTOM:
                 yield Field(label, f"mat.{k}", placeholder=ph)
         yield Static("", id="mat-props", markup=False)
+        from shopbeam.members.wood import DURATIONS, TEMPERATURES
+
+        with Vertical(id="mat-wood"):
+            yield Static("Wood in service (NDS 2018):", classes="sub-title")
+            yield Choice("Duration", list(DURATIONS), key="criteria.duration")
+            yield Choice("Wet service", ["no", "yes"], key="beam.wet_service")
+            yield Choice("Temperature", list(TEMPERATURES), key="beam.temperature")
+            yield Choice("Repetitive", ["no", "yes"], key="beam.repetitive")
 
     def on_mount(self) -> None:
         from shopbeam.members.materials import list_materials
@@ -673,7 +751,9 @@ class MaterialView(View):
         doc, ev = session.doc, session.evaluation
         mat = doc.get("beam.material")
         mode = "custom" if isinstance(mat, dict) else "built-in"
-        self.query_one(Choice).set(mode)
+        for c in self.query(Choice):
+            if c.key == "material.mode":
+                c.set(mode)
         self.query_one("#mat-builtin").display = mode == "built-in"
         self.query_one("#mat-custom").display = mode == "custom"
         if mode == "built-in" and isinstance(mat, str):
@@ -686,7 +766,7 @@ class MaterialView(View):
                         lst.highlighted = i
                     break
         for f in self.query(Field):
-            if isinstance(mat, dict):
+            if isinstance(mat, dict) and f.key.startswith("mat."):
                 f.set_value(str(mat.get(f.key[4:], "")))
         self.show_field_messages(ev, {f"mat.{k}": f"beam.material.{k}" for k, *_ in self.CUSTOM})
         props = self.query_one("#mat-props", Static)
@@ -704,6 +784,42 @@ class MaterialView(View):
             props.update(_text("\n".join(lines)))
         else:
             props.update(_text(f"problem: {msg}" if msg else "In use: (not readable yet)"))
+        self.show_wood(doc, ev)
+
+    WOOD_KEYS = {"criteria.duration": "ten-years", "beam.wet_service": False,
+                 "beam.temperature": "up-to-100F", "beam.repetitive": False}
+
+    def show_wood(self, doc, ev) -> None:
+        """The wood keys: shown for a wood member, or when the file has one (so a warning
+        that the material ignores it can be seen and the key set back)."""
+        m = ev.job.material if ev.job is not None else None
+        wood = getattr(m, "kind", "") == "lumber" or any(
+            doc.get(k) is not None for k in self.WOOD_KEYS)
+        self.query_one("#mat-wood").display = wood
+        if not wood:
+            return
+        for c in self.query("#mat-wood Choice").results(Choice):
+            v = doc.get(c.key, self.WOOD_KEYS[c.key])
+            if isinstance(v, bool):
+                v = "yes" if v else "no"
+            c.set(str(v))
+        self.show_choice_messages(ev, {k: k for k in self.WOOD_KEYS})
+
+    def choice_reading(self, choice, ev) -> str:
+        from shopbeam.members.wood import DURATIONS
+
+        if choice.key == "criteria.duration":
+            cd, words = DURATIONS[choice.value]
+            return f"CD {cd:g}: {words} (NDS Table 2.3.2)"
+        if choice.key == "beam.wet_service":
+            return ("wet: CM factors, creep Kcr 2.0 (NDS Supp. 4A/4D)"
+                    if choice.value == "yes" else "dry: moisture 19 % or less in service")
+        if choice.key == "beam.temperature":
+            return "Ct 1.0" if choice.value == "up-to-100F" else "Ct below 1 (NDS Table 2.3.3)"
+        if choice.key == "beam.repetitive":
+            return ("Cr 1.15: 3+ joists at 24 in or less (NDS 4.3.9)"
+                    if choice.value == "yes" else "Cr 1.0: one member alone")
+        return ""
 
     def on_option_list_option_selected(self, event: OptionList.OptionSelected) -> None:
         if event.option_list.id == "mat-list":
@@ -722,11 +838,20 @@ class CriteriaView(View):
     title = "Criteria"
 
     def compose(self) -> ComposeResult:
+        from shopbeam.jobs.rules import LIFTING_PROFILES
+
         yield Static("Criteria: what the member is checked against.", classes="view-title")
         yield Field("Deflection", "criteria.deflection", placeholder="L/240 or 0.25 in")
+        yield Field("Live defl.", "criteria.live_deflection",
+                    placeholder="e.g. L/360 (live only)")
         yield Choice("Basis", ["code", "first-yield"], key="criteria.basis")
         yield Field("Safety factor", "criteria.safety_factor", placeholder="1.67")
         yield Static("", id="crit-basis", markup=False)
+        yield Static("Lifting device (hoist beam, monorail, jib, lifting beam):",
+                     classes="sub-title")
+        yield Choice("Lifting", ["none", *LIFTING_PROFILES], key="criteria.lifting")
+        yield Choice("Category", ["B", "A"], key="criteria.category")
+        yield Field("Impact", "criteria.impact", placeholder="e.g. 25%")
         yield Static("Deflection \"L/n\" applies per span; a cantilever or overhang is judged "
                      "on twice its length.", classes="hint", markup=False)
 
@@ -734,15 +859,28 @@ class CriteriaView(View):
         doc = session.doc
         for f in self.query(Field):
             v = doc.get(f.key, "")
-            if f.key == "criteria.safety_factor" and v == "":
-                v = ""
             f.set_value("" if v is None else str(v))
-        self.show_field_messages(session.evaluation, {
+        ev = session.evaluation
+        self.show_field_messages(ev, {
             "criteria.deflection": "criteria.deflection",
-            "criteria.safety_factor": "criteria.safety_factor"})
+            "criteria.live_deflection": "criteria.live_deflection",
+            "criteria.safety_factor": "criteria.safety_factor",
+            "criteria.impact": "criteria.impact"})
         basis = str(doc.get("criteria.basis", "") or "").strip().lower()
-        self.query_one(Choice).set("first-yield" if basis == "first-yield" else "code")
-        self.query_one("#crit-basis", Static).update(_text(basis_words(session.evaluation)))
+        lift = doc.get("criteria.lifting")
+        cat = doc.get("criteria.category")
+        for c in self.query(Choice):
+            if c.key == "criteria.basis":
+                c.set("first-yield" if basis == "first-yield" else "code")
+            elif c.key == "criteria.lifting":
+                c.set(lift.strip().lower() if isinstance(lift, str) else "none")
+            elif c.key == "criteria.category":
+                c.set(cat.strip().upper() if isinstance(cat, str) else "B")
+                c.display = lift == "below-the-hook" or cat is not None
+        self.show_choice_messages(ev, {"criteria.basis": "criteria.basis",
+                                       "criteria.lifting": "criteria.lifting",
+                                       "criteria.category": "criteria.category"})
+        self.query_one("#crit-basis", Static).update(_text(basis_words(ev)))
 
     def reading(self, field, ev) -> str:
         if ev.job is None:
@@ -753,6 +891,37 @@ class CriteriaView(View):
                 return f"= {units.fmt(c.deflection_abs, 'small_length', ev.job.units)} in every span"
             if c.deflection_ratio:
                 return f"= span / {c.deflection_ratio:g}"
+        if field.key == "criteria.live_deflection":
+            n = getattr(c, "live_deflection_ratio", None)
+            return f"= span / {n:g} under the live loads alone" if n else "not checked"
+        if field.key == "criteria.impact":
+            if c.impact is not None:
+                return f"= {c.impact:.0%} on the live loads"
+            from shopbeam.design.lifting import profile_of
+
+            prof = profile_of(ev.job)
+            return f"default: {prof.impact:.0%} ({prof.name})" if prof else "default: none"
+        return ""
+
+    def choice_reading(self, choice, ev) -> str:
+        from shopbeam.jobs.rules import LIFTING_PROFILES
+
+        if choice.key == "criteria.lifting":
+            p = LIFTING_PROFILES.get(choice.value)
+            if p is None:
+                from shopbeam.design.lifting import profile_of
+
+                prof = profile_of(ev.job) if ev.job is not None else None
+                return (f"tagged lifting: taken as {prof.name} (the strictest fit)"
+                        if prof else "not a lifting device")
+            if p["nd"]:
+                return (f"ASME BTH-1 design factor Nd {p['nd']['A']:g} (A) / "
+                        f"{p['nd']['B']:g} (B); L/{p['deflection']:g}")
+            return (f"impact {p['impact']:.0%}, lateral {p['lateral']:.0%}, long. "
+                    f"{p['longitudinal']:.0%}, L/{p['deflection']:g} (ASCE 7-16 4.9)")
+        if choice.key == "criteria.category":
+            return ("Nd 2.0: predictable loads, mild service (BTH-1, from memory)"
+                    if choice.value == "A" else "Nd 3.0: the default (ASME BTH-1)")
         return ""
 
 

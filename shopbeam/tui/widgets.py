@@ -184,7 +184,7 @@ class Choice(Widget, can_focus=True):
     shown in [brackets] so it reads without colour."""
 
     DEFAULT_CSS = """
-    Choice { height: 1; width: 1fr; }
+    Choice { height: auto; min-height: 1; width: 1fr; }
     Choice:focus { text-style: bold; }
     """
 
@@ -213,8 +213,25 @@ class Choice(Widget, can_focus=True):
         self.options = list(options)
         self.key = key
         self.set_reactive(Choice.value, value if value in self.options else self.options[0])
+        self.message = ""  # what the reader says about this key, shown under the choice
+
+    def show(self, message: str = "", error: bool = False) -> None:
+        """Put the reader's word on this key (a problem, a warning, or what it means) on
+        the line under the choice; "" clears it."""
+        text = ("problem: " + message) if error and message else message
+        if text != self.message:
+            self.message = text
+            self.set_class(error and bool(message), "-error")
+            self.refresh(layout=True)
 
     def render(self) -> Text:
+        t = self._render_choice()
+        if self.message:
+            t.append("\n" + " " * 14)
+            t.append(self.message, style="bold" if self.has_class("-error") else "")
+        return t
+
+    def _render_choice(self) -> Text:
         t = Text()
         focus = self.has_focus
         t.append(f"{self.label:<14}", style="bold reverse" if focus else "")
