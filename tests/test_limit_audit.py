@@ -119,3 +119,84 @@ def test_untagged_lifting_profile_has_the_lifting_banner_in_the_text_ui(tmp_path
 
     content, loud = asyncio.run(body())
     assert "LIFTING DEVICE" in content and loud
+
+
+# ------------------------------------------------------------------ bearing length defaults
+# AISC 360-16 J10.2 defines lb as the length of bearing, "not less than k for end beam
+# reactions" (from memory): an end reaction with no bearing given takes lb = k, not a knife
+# edge; interior supports and loads keep lb = 0; a trolley wheel bears at a point (lb = 0).
+# W12x26 (AISC Shapes Database v15.0): d 12.2, tw 0.230, tf 0.380, kdes 0.680 in; A992 Fy 50.
+def simple_w12(supports=None, length="16 ft", extra=""):
+    supports = supports or ['at = "0 ft"\ntype = "pin"', f'at = "{length}"\ntype = "roller"']
+    sup = "".join(f"[[supports]]\n{s}\n" for s in supports)
+    return parse_job_text(f"""schema = 1
+title = "Shop crane-bay beam"
+[beam]
+length = "{length}"
+section = "W12x26"
+material = "A992"
+self_weight = false
+{extra}
+{sup}
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "{length}"
+value = "-1.25 kip/ft"
+""")
+
+
+def _named(res, name):
+    return next(c for c in res.checks if c.name == name)
+
+
+def test_end_reaction_without_bearing_takes_lb_equal_k():
+    res = analyze(simple_w12())
+    wly = _named(res, "web local yielding")
+    # J10-3 (within d of the end): Rn = Fy tw (2.5k + lb) = 50 x 0.230 x (2.5 x 0.680 + 0.680)
+    #   = 27.37 kip; Rn / 1.50 = 18.247 kip; the end reaction 1.25 x 16 / 2 = 10 kip -> 0.5480
+    assert wly.limit / LBF == pytest.approx(18247, rel=2e-3)
+    assert wly.ratio == pytest.approx(0.5480, abs=1e-3)
+    assert wly.params["lb"] / IN == pytest.approx(0.680, rel=1e-3)
+    assert "lb = k" in wly.formula and "J10.2" in wly.detail
+    wcr = _named(res, "web crippling")
+    # J10-5a (lb/d = 0.0557 <= 0.2): Rn = 0.40 tw^2 [1 + 3 (lb/d)(tw/tf)^1.5] sqrt(E Fy tf/tw)
+    #   = 0.40 x 0.0529 x [1 + 3 x 0.05574 x 0.47088] x sqrt(29000 x 50 x 0.380 / 0.230)
+    #   = 0.02116 x 1.07874 x 1547.8 = 35.33 kip; / 2.00 = 17.665 kip
+    assert wcr.limit / LBF == pytest.approx(17665, rel=2e-3)
+
+
+def test_interior_support_and_given_bearing_keep_their_length():
+    # two spans of 8 ft: the middle support is not an end reaction -> lb = 0 (knife edge),
+    # J10-2: Rn = Fy tw 5k = 50 x 0.230 x 3.40 = 39.10 kip; / 1.50 = 26.07 kip
+    job = simple_w12(supports=['at = "0 ft"\ntype = "pin"', 'at = "8 ft"\ntype = "roller"',
+                              'at = "16 ft"\ntype = "roller"'])
+    from shopbeam.design.local import forces_of, limit_states
+
+    res = analyze(job)
+    mid = next(f for f in forces_of(job, res.solution) if f.support and abs(f.at - 8 * FT) < 1e-6)
+    wly = next(x for x in limit_states(job.section, job.material, job.length, mid)
+               if x[0] == "web local yielding")
+    assert wly[1] / 1.5 / LBF == pytest.approx(26067, rel=2e-3)
+    # a bearing written in the job wins over the default: lb = 4 in at the ends,
+    # J10-3: 50 x 0.230 x (1.70 + 4) = 65.55 kip; / 1.50 = 43.70 kip
+    given = analyze(simple_w12(extra='bearing = "4 in"'))
+    assert _named(given, "web local yielding").limit / LBF == pytest.approx(43700, rel=2e-3)
+
+
+def test_overhang_support_is_not_an_end_reaction():
+    # support 2 ft in from the end of a W12 (24 in > d = 12.2 in): lb = 0, J10-2
+    job = simple_w12(supports=['at = "2 ft"\ntype = "pin"', 'at = "14 ft"\ntype = "roller"'])
+    wly = _named(analyze(job), "web local yielding")
+    assert wly.limit / LBF == pytest.approx(26067, rel=2e-3)
+    assert "lb = 0" in wly.formula
+
+
+def test_monorail_states_its_bearing_assumptions():
+    res = analyze(parse_job_text(monorail()))
+    wly = _named(res, "web local yielding")
+    # end reaction 5052 lbf (two 2000 lbf axles + 25 % impact + self-weight, trolley at the
+    # end) against 18,247 lbf (lb = k, above): ratio 0.277, below the wheel check
+    assert wly.ratio == pytest.approx(5052 / 18247, abs=2e-3)
+    assert "lb = k" in wly.formula
+    assert res.governing.name == "wheel flange bending"

@@ -25,8 +25,11 @@ at its lower bound 1.3 - 0.4 Z/S, valid whenever the bending check passes (U = M
 (Fy S) <= Z / S), so the check stays linear in the loads.
 
 Bearing length lb comes from the job (``bearing`` on a support or a point load, ``beam.bearing``
-for all); when it is missing lb = 0 (a knife edge: the lowest strength, conservative) and the
-check says so. Every check is linear in the concentrated force, so the capacity search scales
+for all). When it is missing: a support reaction within d of the member end of an I-shape or
+channel takes lb = k (kdes), the least AISC 360-16 J10.2 lets an end beam reaction take ("lb
+not less than k for end beam reactions", from memory); a trolley wheel bears at a point,
+lb = 0; every other force takes lb = 0 (a knife edge: the lowest strength, conservative).
+The check says which. Every check is linear in the concentrated force, so the capacity search scales
 it exactly.
 """
 
@@ -114,6 +117,7 @@ class Force:
     bearing: float | None  # m; None: not given
     what: str
     moving: bool = False  # a wheel of a [[moving]] set
+    support: bool = False  # a support reaction (not a load)
 
     @property
     def pulls(self) -> bool:
@@ -151,7 +155,8 @@ def forces_of(job, sol) -> list[Force]:
         if abs(r.force) <= ZERO or r.kind == "fixed":
             continue
         lb = bearing_of(job, r.key or "")
-        out.append(Force(r.at, r.force, "bottom", lb, f"{r.kind} support at {fmt(r.at)}"))
+        out.append(Force(r.at, r.force, "bottom", lb, f"{r.kind} support at {fmt(r.at)}",
+                         support=True))
     tol = 1e-9 * max(job.length, 1e-9)
     groups: dict[tuple, list] = {}
     for ld in sol.beam.loads:
@@ -189,6 +194,12 @@ def applies(sec) -> str:
     return ""
 
 
+def end_reaction_default(f: Force, end: float, d: float) -> bool:
+    """True when lb is not given and f is an end beam reaction (a support within d of the
+    member end): lb = k then (AISC 360-16 J10.2, from memory)."""
+    return f.bearing is None and f.support and end <= d
+
+
 def limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
     """(name, Rn, equation, Omega, clause, params) of every local limit state that applies to
     force f on this section (the direction decides: crippling only where the force bears on
@@ -204,6 +215,8 @@ def limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
     if kind == "web":
         webs = 2 if sec.shape == "double-channel" else 1
         tw, tf, dd, k = d["tw"], d["tf"], d["d"], d["kdes"]
+        if end_reaction_default(f, end, dd):
+            lb = k  # AISC 360-16 J10.2: lb not less than k for end beam reactions
         rn, eq = web_local_yielding(fy, tw, k, lb, end, dd)
         out.append(("web local yielding", webs * rn, eq, OMEGA_WLY, "AISC 360-16 J10.2",
                     {"tw": tw, "k": k, "d": dd, "webs": webs}))
@@ -244,7 +257,7 @@ def local_checks(job, sol, sec=None) -> list[Check]:
             old = worst.get(name)
             if old is None or ratio > old[0]:
                 worst[name] = (ratio, f, rn, eq, omega, clause, extra)
-    return [_check(job, name, *w) for name, w in worst.items()]
+    return [_check(job, sec, name, *w) for name, w in worst.items()]
 
 
 def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
@@ -263,7 +276,7 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
         s = sw_sol.reactions[n].force
         lv = np.array([ss.live.reactions[n].force + sum(ss.spans[i].reactions[n].force
                                                          for i in p) for p in pats])
-        out.append((r.at, "bottom", lb, False, a, s, lv))
+        out.append((r.at, "bottom", lb, False, a, s, lv, True))
     tol = 1e-9 * max(job.length, 1e-9)
     groups: dict = {}
 
@@ -302,10 +315,12 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
 def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
     """Per item: (allowable, name) when the force pulls and when it bears (inf: none)."""
     pull, bear = [], []
-    for at, face, lb, moving, *_ in items:
+    for it in items:
+        at, face, lb, moving = it[:4]
+        support = len(it) > 7 and bool(it[7])
         row = []
         for sign in (1.0, -1.0):
-            f = Force(at, sign if face == "top" else -sign, face, lb, "", moving)
+            f = Force(at, sign if face == "top" else -sign, face, lb, "", moving, support)
             best = (math.inf, "")
             for name, rn, _eq, omega, _c, _x in limit_states(sec, mat, job.length, f,
                                                               job.lifting):
@@ -317,15 +332,30 @@ def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
     return pull, bear
 
 
-def _check(job, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
+def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
     from shopbeam import units
 
-    lb = f.bearing if f.bearing is not None else 0.0
-    small = f"{lb / units.IN:.4g} in" if job.units == "us" else f"{lb * 1000:.4g} mm"
-    given = (f"bearing length {small} from the job"
-             if f.bearing is not None else
-             "bearing length not given: lb = 0 taken (a knife edge, conservative); give "
-             "bearing = \"...\" on the support or load, or beam.bearing")
+    params_lb = f.bearing if f.bearing is not None else 0.0
+    end = max(0.0, min(f.at, job.length - f.at))
+    k_end = (applies(sec) == "web" and end_reaction_default(f, end, sec.dims["d"]))
+    if k_end:
+        params_lb = sec.dims["kdes"]
+    small = (f"{params_lb / units.IN:.4g} in" if job.units == "us"
+             else f"{params_lb * 1000:.4g} mm")
+    give = "give bearing = \"...\" on the support or load, or beam.bearing"
+    if f.bearing is not None:
+        given = short = f"bearing length lb = {small} from the job"
+    elif k_end:
+        given = (f"bearing length not given: lb = k = {small}, the least AISC 360-16 J10.2 "
+                 f"allows for an end beam reaction (from memory); {give}")
+        short = f"lb = k = {small}: end reaction, bearing length not given"
+    elif f.moving:
+        given = ("a trolley wheel bears at a point: lb = 0 (the force spreads through the "
+                 "flange over 5k, or 2.5k near the end)")
+        short = "lb = 0: a wheel bears at a point"
+    else:
+        given = f"bearing length not given: lb = 0 taken (a knife edge, conservative); {give}"
+        short = "lb = 0: bearing length not given (conservative)"
     src = HSS_SOURCE if clause.endswith("K2.2") else SOURCE
     formula = {"web local yielding": "Ru <= Rn / 1.50, Rn = Fyw tw (5k + lb) (J10-2) or "
                                      "Fyw tw (2.5k + lb) within d of the end (J10-3)",
@@ -337,12 +367,10 @@ def _check(job, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
                                       "corner radius (load across the full wall width)",
                "wall crippling": "Ru <= Rn / 2.00, Rn = 1.6 t^2 [1 + 3 lb/(H - 3t)] sqrt(E Fy) "
                                  "Qf, Qf = 1.3 - 0.4 Z/S (lower bound while bending passes)"}[name]
-    params = {"Rn": rn, "omega": omega, "lb": lb, "fy": job.material.fy,
+    params = {"Rn": rn, "omega": omega, "lb": params_lb, "fy": job.material.fy,
               "end_distance": max(0.0, min(f.at, job.length - f.at))}
     params.update({k: float(v) for k, v in extra.items()})
     sense = "pulls on" if f.pulls else "bears on"
-    short = (f"lb = {small} from the job" if f.bearing is not None else
-             "lb = 0: bearing length not given (conservative)")
     return Check(name, abs(f.force), rn / omega, "N",
                  f"{clause}: {formula}; {eq} at {f.what}, {short}", f.at,
                  detail=f"{f.what} ({sense} the {f.face} flange): {eq}; {given}",
