@@ -200,3 +200,60 @@ def test_monorail_states_its_bearing_assumptions():
     assert wly.ratio == pytest.approx(5052 / 18247, abs=2e-3)
     assert "lb = k" in wly.formula
     assert res.governing.name == "wheel flange bending"
+
+
+# ------------------------------------------------------------------ below-the-hook design factor
+# ASME BTH-1 (from memory): design factor Nd 2.00 (Category A) or 3.00 (Category B) in place
+# of the AISC Omega 1.67; every strength check of a below-the-hook beam carries it, the local
+# J10 checks (Omega x Nd / 1.67) and the F9 / F10 bending of tees and angles included.
+def spreader(section="W8x31", lifting='lifting = "below-the-hook"\ncategory = "B"'):
+    return parse_job_text(f"""schema = 1
+title = "Spreader beam for the press-brake dies"
+[beam]
+length = "10 ft"
+section = "{section}"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "1 ft"
+type = "pin"
+[[supports]]
+at = "9 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "0 ft"
+value = "-3000 lbf"
+flange = "bottom"
+[[loads]]
+type = "point"
+at = "10 ft"
+value = "-3000 lbf"
+flange = "bottom"
+[criteria]
+{lifting}
+""")
+
+
+def test_below_the_hook_local_checks_carry_the_design_factor():
+    res = analyze(spreader())
+    flb = _named(res, "flange local bending")
+    # W8x31 tf 0.435 in: J10-1 Rn = 6.25 Fy tf^2 = 6.25 x 50 x 0.435^2 = 59.13 kip, halved at
+    # the end (the lug 0 in from the end < 10 tf) = 29.57 kip; / Nd 3.00 = 9.855 kip
+    assert flb.limit / LBF == pytest.approx(9855, rel=2e-3)
+    assert flb.ratio == pytest.approx(3000 / 9855, rel=2e-3)
+    assert "Nd 3" in flb.formula
+    aisc = _named(analyze(spreader(lifting="")), "flange local bending")
+    assert aisc.limit / LBF == pytest.approx(29566 / 1.67, rel=2e-3)
+    # capacity agrees with the checks: the governing ratio scales linearly (no dead load)
+    cap = capacity(spreader())
+    assert cap.factor == pytest.approx(1 / res.governing.ratio, rel=1e-3)
+
+
+def test_below_the_hook_tee_uses_the_design_factor():
+    # WT6x7 bent with its stem in compression (hogging between the lugs' supports): F9-13
+    # Mn = Mcr <= My is below 1.10 My, so Nd 3.00 in place of 1.67 scales the ratio by 3 / 1.67
+    bth = _named(analyze(spreader("WT6x7")), "bending")
+    aisc = _named(analyze(spreader("WT6x7", lifting="")), "bending")
+    assert bth.clause == aisc.clause == "AISC 360-16 F9"
+    assert bth.ratio / aisc.ratio == pytest.approx(3.0 / 1.67, rel=1e-6)

@@ -243,15 +243,27 @@ def limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
     return out
 
 
+def design_factor_scale(job) -> float:
+    """A below-the-hook beam (ASME BTH-1): the AISC Omegas of these checks times Nd / 1.67,
+    the ratio of its design factor to the AISC one (BTH-1 gives no local-force rules of its
+    own here; the same margin over AISC ASD as its bending check, from memory). Else 1."""
+    from shopbeam.design.lifting import profile_of
+
+    prof = profile_of(job)
+    return prof.nd / 1.67 if prof is not None and prof.nd else 1.0
+
+
 def local_checks(job, sol, sec=None) -> list[Check]:
     """The worst of each local limit state over the concentrated forces of one state."""
     sec = sec or job.section
     if not applies(sec) or getattr(job.material, "kind", "") not in ("steel", "stainless"):
         return []
+    scale = design_factor_scale(job)
     worst: dict[str, tuple] = {}
     for f in forces_of(job, sol):
         for name, rn, eq, omega, clause, extra in limit_states(sec, job.material, job.length,
                                                                f, job.lifting):
+            omega = omega * scale
             allow = rn / omega
             ratio = abs(f.force) / allow if allow > 0 else math.inf
             old = worst.get(name)
@@ -315,6 +327,7 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
 def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
     """Per item: (allowable, name) when the force pulls and when it bears (inf: none)."""
     pull, bear = [], []
+    scale = design_factor_scale(job)
     for it in items:
         at, face, lb, moving = it[:4]
         support = len(it) > 7 and bool(it[7])
@@ -324,8 +337,8 @@ def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
             best = (math.inf, "")
             for name, rn, _eq, omega, _c, _x in limit_states(sec, mat, job.length, f,
                                                               job.lifting):
-                if rn / omega < best[0]:
-                    best = (rn / omega, name)
+                if rn / (omega * scale) < best[0]:
+                    best = (rn / (omega * scale), name)
             row.append(best)
         pull.append(row[0])
         bear.append(row[1])
@@ -371,6 +384,10 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
               "end_distance": max(0.0, min(f.at, job.length - f.at))}
     params.update({k: float(v) for k, v in extra.items()})
     sense = "pulls on" if f.pulls else "bears on"
+    scale = design_factor_scale(job)
+    if scale != 1.0:
+        formula += (f"; below-the-hook: Omega x Nd / 1.67 = {omega:.3g} (ASME BTH-1 design "
+                    f"factor Nd {scale * 1.67:g} in place of the AISC 1.67)")
     return Check(name, abs(f.force), rn / omega, "N",
                  f"{clause}: {formula}; {eq} at {f.what}, {short}", f.at,
                  detail=f"{f.what} ({sense} the {f.face} flange): {eq}; {given}",

@@ -330,6 +330,9 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
     if not kind:
         return None
     fy, e = job.material.fy, job.material.e
+    # Omega_b, or a below-the-hook beam's ASME BTH-1 design factor Nd (checks._design_factor)
+    om = st.flexure.omega or OMEGA_B
+    bth = om != OMEGA_B  # Mn capped at 1.10 Fy S too (ASME BTH-1 3-2.3.1, from memory)
     m = sol.moment
     braced, segs = _segments(job, st)
     worst = None
@@ -337,11 +340,11 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
         lb = None if braced else b - a
         ex = m.extremes(a, b)
         if kind == "F9":
-            r = _f9_segment(sec, fy, e, lb, ex)
+            r = _f9_segment(sec, fy, e, lb, ex, om, bth)
         else:
             mmax = ex.abs_max
             cb = _cb(m, a, b, mmax, free, cb_one)
-            r = _f10_segment(job, sec, fy, e, lb, cb, ex)
+            r = _f10_segment(job, sec, fy, e, lb, cb, ex, om, bth)
         if r and (worst is None or r[0] > worst[0]):
             worst = r + ((a, b),)
     ratio, demand, limit, at, text, params, (a, b) = worst
@@ -352,7 +355,7 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
     if kind == "F9":
         clause, src = "AISC 360-16 F9", F9_SOURCE
         formula = (f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, Omega_b "
-                   f"{OMEGA_B:g} (F9 yielding, lateral-torsional buckling, flange and stem local "
+                   f"{om:g} (F9 yielding, lateral-torsional buckling, flange and stem local "
                    "buckling by the sign of the moment)")
     else:
         clause, src = "AISC 360-16 F10", F10_SOURCE
@@ -363,7 +366,7 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
                  source=src, params=params, extra={"cb": params.get("Cb", 1.0)})
 
 
-def _f9_segment(sec, fy, e, lb, ex):
+def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False):
     p = tee_props(sec, fy, e)
     top = flange_on_top(sec)
     # sagging (M > 0) compresses the top fibres
@@ -377,7 +380,10 @@ def _f9_segment(sec, fy, e, lb, ex):
         both = f9_ltb_with_compression(p, lb)
         if both and both[0] < mn_t:
             mn_t, why_t = both
-    allow_t, allow_c = mn_t / OMEGA_B, mn_c / OMEGA_B
+    if bth:
+        mn_t, why_t = _bth_cap(mn_t, why_t, fy * p.sx)
+        mn_c, why_c = _bth_cap(mn_c, why_c, fy * p.sx)
+    allow_t, allow_c = mn_t / omega, mn_c / omega
     r_t = m_stem_t / allow_t if allow_t > 0 else math.inf
     r_c = m_stem_c / allow_c if allow_c > 0 else math.inf
     params = {"Lb": lb or 0.0, "Mn_stem_tension": mn_t, "Mn_stem_compression": mn_c,
@@ -387,27 +393,39 @@ def _f9_segment(sec, fy, e, lb, ex):
     return (r_t, m_stem_t, allow_t, at_t, f"{why_t} (stem in tension)", params)
 
 
-def _f10_segment(job, sec, fy, e, lb, cb, ex):
+def _bth_cap(mn, why, my):
+    """ASME BTH-1 3-2.3.1 (from memory): Fb = 1.10 Fy / Nd at most, i.e. Mn <= 1.10 My."""
+    if mn > 1.10 * my:
+        return 1.10 * my, why + " capped at 1.10 Fy S (ASME BTH-1 3-2.3.1)"
+    return mn, why
+
+
+def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
     p = angle_props(sec)
     mmax = ex.abs_max
     at = ex.abs_max_at
     if job.restrained:
         mn, why = f10_geometric(p, fy, e, min(sec.sx_top, sec.sx_bot))
-        allow = mn / OMEGA_B
+        if bth:
+            mn, why = _bth_cap(mn, why, fy * min(sec.sx_top, sec.sx_bot))
+        allow = mn / omega
         text = (f"restrained angle (beam.restrained) bent about its geometric axis: M <= Mn / "
-                f"Omega_b, Mn by {why}, Omega_b {OMEGA_B:g}")
+                f"Omega_b, Mn by {why}, Omega_b {omega:g}")
         return (mmax / allow if allow > 0 else math.inf, mmax, allow, at, text,
                 {"Lb": 0.0, "Mn": mn, "Cb": 1.0})
     mnw, why_w = f10_major(p, fy, e, lb, cb)
     mnz, why_z = f10_minor(p, fy, e)
+    if bth:
+        mnw, why_w = _bth_cap(mnw, why_w, fy * p.sw)
+        mnz, why_z = _bth_cap(mnz, why_z, fy * p.sz)
     c, s = math.cos(p.alpha), math.sin(p.alpha)
     # H2-1: Mw / (Mnw / Omega) + Mz / (Mnz / Omega) <= 1 with Mw = M cos a, Mz = M sin a
-    inv = OMEGA_B * (c / mnw + s / mnz)
+    inv = omega * (c / mnw + s / mnz)
     allow = 1 / inv
     text = (f"angle not restrained: M resolved on the principal axes, Mw = M cos a, "
             f"Mz = M sin a (a = {math.degrees(p.alpha):.1f} deg), combined by H2-1 as "
             f"Mw Omega / Mnw + Mz Omega / Mnz <= 1 (signs ignored: conservative); major axis "
-            f"Mnw by {why_w}; minor axis Mnz by {why_z}; Omega_b {OMEGA_B:g}")
+            f"Mnw by {why_w}; minor axis Mnz by {why_z}; Omega_b {omega:g}")
     params = {"Lb": lb or 0.0, "Mnw": mnw, "Mnz": mnz, "alpha": p.alpha, "Cb": min(cb, CB_MAX_ANGLE),
               "Mw": mmax * c, "Mz": mmax * s}
     return (mmax / allow, mmax, allow, at, text, params)
