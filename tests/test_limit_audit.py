@@ -257,3 +257,43 @@ def test_below_the_hook_tee_uses_the_design_factor():
     aisc = _named(analyze(spreader("WT6x7", lifting="")), "bending")
     assert bth.clause == aisc.clause == "AISC 360-16 F9"
     assert bth.ratio / aisc.ratio == pytest.approx(3.0 / 1.67, rel=1e-6)
+
+
+# ------------------------------------------------------------------ lateral force on a jib
+def test_lateral_trolley_force_on_a_jib_is_taken_at_the_root():
+    # W8x18 wall jib, 10 ft, 1000 lbf hoist at the tip, jib-boom profile named without the tag
+    # (25 % impact, 20 % lateral, ASCE 7-16 4.9.3 / 4.9.4, from memory). The moments peak at the
+    # fixed root, not under the wheel (where both are zero), so AISC 360-16 H1-1b is taken there:
+    #   Mx = 1.25 x 1000 x 120 + 18 lbf/ft x 10^2 / 2 x 12 = 160,800 lbf*in
+    #   My = 0.20 x 1000 x 120 = 24,000 lbf*in on the bottom flange alone
+    #   Mcy = Fy Zf / 1.67, Zf = tf bf^2 / 4 = 0.330 x 5.25^2 / 4 = 2.274 in^3 (bf/2tf 7.95 <
+    #   0.38 sqrt(E/Fy) = 9.15: F6-1) -> 50 x 2.274 / 1.67 = 68.08 kip*in
+    #   ratio = Mx / Mcx + 24.0 / 68.08 = Mx / Mcx + 0.3525
+    job = parse_job_text("""schema = 1
+title = "Wall jib at the welding bay"
+[beam]
+length = "10 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[moving]]
+loads = ["-1000 lbf"]
+[criteria]
+lifting = "jib-boom"
+""")
+    res = analyze(job)
+    lat = _named(res, "lateral trolley force")
+    assert lat.at == pytest.approx(0.0, abs=1e-9)
+    assert lat.params["Mx"] / (LBF * IN) == pytest.approx(160800, rel=2e-3)
+    assert lat.params["My"] / (LBF * IN) == pytest.approx(24000, rel=2e-3)
+    assert lat.params["Mcy"] / (LBF * IN) == pytest.approx(68080, rel=2e-3)
+    mcx = lat.params["Mcx"]
+    assert lat.ratio == pytest.approx(160800 * LBF * IN / mcx + 0.3525, abs=2e-3)
+    assert lat.ratio > _named(res, "bending").ratio
+    # capacity and solve agree: at k the interaction is exactly 1 and governs
+    cap = capacity(job)
+    assert cap.governing.name == "lateral trolley force"
+    mx_k = (1.25 * 1000 * 120 * cap.factor + 10800) * LBF * IN
+    assert mx_k / mcx + 24000 * cap.factor / 68080 == pytest.approx(1.0, abs=3e-3)

@@ -233,8 +233,13 @@ def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
     flange = solve(replace(sol.beam, ei=1.0, loads=tuple(lat)))
     mny, how = flange_weak_strength(sec, mat)
     mcy = mny / 1.67
+    # the sum |Mx| / Mcx + |My| / Mcy peaks at a wheel, a support (a cantilever's root, a
+    # continuous beam's interior support) or where either moment peaks
+    ex, ey = sol.moment.extremes(), flange.moment.extremes()
+    spots = ([ld.at for ld in wheels] + [sp.at for sp in sol.beam.supports]
+             + [ex.max_at, ex.min_at, ey.max_at, ey.min_at])
     best = None
-    for x in [ld.at for ld in wheels]:
+    for x in spots:
         mx, my = abs(float(sol.moment(x))), abs(float(flange.moment(x)))
         r = mx / mcx + my / mcy
         if best is None or r > best[0]:
