@@ -297,3 +297,50 @@ lifting = "jib-boom"
     assert cap.governing.name == "lateral trolley force"
     mx_k = (1.25 * 1000 * 120 * cap.factor + 10800) * LBF * IN
     assert mx_k / mcx + 24000 * cap.factor / 68080 == pytest.approx(1.0, abs=3e-3)
+
+
+# ------------------------------------------------------------------ channels and the shear centre
+def chan(extra="", axis=""):
+    return parse_job_text(f"""schema = 1
+title = "C6x8.2 wall bracket at the glazing bench"
+[beam]
+length = "30 in"
+section = "C6x8.2"
+material = "A36"
+{extra}
+{axis}
+[[supports]]
+at = "0 in"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "30 in"
+value = "-900 lbf"
+""")
+
+
+def test_channel_loaded_in_the_plane_of_its_web_twists():
+    # thin-walled channel (common practice): shear centre e = 3 b'^2 tf / (6 b' tf + h tw)
+    # behind the web mid-line, b' = bf - tw/2 = 1.82, h = d - tf = 5.657 in (C6x8.2, AISC
+    # Shapes Database v15.0) -> e = 3.4085 / 4.8770 = 0.699 in, + tw/2 = 0.799 in to the inside
+    # face; torque 900 x 0.799 = 719 lbf*in = 59.9 lbf*ft
+    res = analyze(chan())
+    assert [u.name for u in res.unchecked] == ["torsion from loads off the shear centre"]
+    assert not res.unchecked[0].blocks_rating  # a quantified caution; the rating stands
+    note = next(c for c in res.cautions if c.startswith("channel"))
+    assert "0.799 in" in note and "59.9" in note
+    bend = _named(res, "bending")
+    assert bend.clause == "AISC 360-16 F2"
+
+
+def test_channel_held_against_twist_or_bent_on_its_back_has_no_torsion_gap():
+    held = analyze(chan(extra="restrained = true"))
+    assert not [u for u in held.unchecked if "torsion" in u.name]
+    note = next(c for c in held.cautions if c.startswith("channel"))
+    assert "restraint" in note and "59.9" in note
+    # bent about its weak axis the load runs along the axis of symmetry, through the shear
+    # centre: no twist, and no torsion entry
+    weak = analyze(chan(axis='axis = "weak"'))
+    assert not [u for u in weak.unchecked if "torsion" in u.name]
+    assert not [c for c in weak.cautions if c.startswith("channel")]
+    assert _named(weak, "bending").clause == "AISC 360-16 F6"

@@ -461,7 +461,8 @@ def torsion_note(job, sec) -> str:
         h = d["d"] - d["tf"]
         e0 = 3 * bm**2 * d["tf"] / (6 * bm * d["tf"] + h * d["tw"]) + d["tw"] / 2
         t_max = max(d["tf"], d["tw"])
-        where = "from the face of the web (load on the web's centre line)"
+        where = ("the shear centre lies behind the web; measured to the web's inside face, "
+                 "conservative for a load on the web's centre line")
     elif shape == "angle":
         # shear centre at the heel (legs' crossing); a load through the centroid is off it
         e0 = d["x"] - d["t"] / 2
@@ -491,6 +492,10 @@ def torsion_note(job, sec) -> str:
     if not parts:
         return ""
     off = f"{e0 / units.IN:.3g} in" if sy == "us" else f"{e0 * 1000:.3g} mm"
+    if job.restrained:  # held against twist all along: the restraint takes the torque
+        return (f"{shape} held against twist (beam.restrained): the loads act {off} off the "
+                f"shear centre ({where}), so the restraint and its fastenings carry the torque: "
+                + "; ".join(p.split(", a rough")[0] for p in parts) + " (not checked here).")
     return (f"{shape}: the loads act {off} off the shear centre "
             f"({where}) and twist it; " + "; ".join(parts) + ". AISC 360 has no beam check for "
             "this here (AISC Design Guide 9 covers torsion): load through the shear centre, "
@@ -504,8 +509,10 @@ def open_unchecked(job, st):
     sec = st.section or job.section
     out = []
     steel = getattr(job.material, "kind", "") in ("steel", "stainless")
-    if sec.shape in ("channel", "angle") and steel and not (
-            sec.shape == "angle" and job.restrained):
+    # a channel bent about its weak axis is loaded along its axis of symmetry, which holds
+    # the shear centre: no twist; a restrained member (beam.restrained) is held against it
+    if sec.shape in ("channel", "angle") and steel and not job.restrained and not (
+            sec.shape == "channel" and sec.axis != "strong"):
         out.append(Unchecked(
             "torsion from loads off the shear centre",
             "the loads act off the shear centre and twist the member; the cautions give a "
