@@ -344,3 +344,41 @@ def test_channel_held_against_twist_or_bent_on_its_back_has_no_torsion_gap():
     assert not [u for u in weak.unchecked if "torsion" in u.name]
     assert not [c for c in weak.cautions if c.startswith("channel")]
     assert _named(weak, "bending").clause == "AISC 360-16 F6"
+
+
+# ------------------------------------------------------------------ a load hung from a tube
+def test_load_hung_from_a_tube_wall_is_not_rated():
+    # AISC 360-16 K2 / Table K2.2 (from memory): the sidewall checks assume a bearing across the
+    # full width of the tube; a load hung from the bottom wall pulls on it through a lug or
+    # clamp, where wall plastification can govern and is not checked -> no rating
+    text = """schema = 1
+title = "Chain-fall point on an HSS6x4 (metric)"
+units = "si"
+[beam]
+length = "3 m"
+section = "HSS6x4x1/4"
+material = "A500-C"
+[[supports]]
+at = "0 m"
+type = "pin"
+[[supports]]
+at = "3 m"
+type = "roller"
+[[loads]]
+type = "point"
+at = "1.5 m"
+value = "-5 kN"
+FLANGE
+[criteria]
+lifting = "powered-monorail"
+"""
+    hung = parse_job_text(text.replace("FLANGE", 'flange = "bottom"'))
+    res = analyze(hung)
+    wall = [u for u in res.unchecked if "plastification" in u.name]
+    assert wall and wall[0].blocks_rating and "loads[0]" in wall[0].reason
+    r = rating(capacity(hung), res.unchecked)
+    assert r.status == "not rated"
+    on_top = parse_job_text(text.replace("FLANGE", ""))
+    res2 = analyze(on_top)
+    assert not any(u.blocks_rating for u in res2.unchecked)
+    assert rating(capacity(on_top), res2.unchecked).status == "rated"

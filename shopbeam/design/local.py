@@ -403,11 +403,17 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
     kind = applies(sec)
     out = []
     if kind == "hss":
+        hung = [k for k in (getattr(job, "hung", ()) or ()) if k.startswith("loads")]
         out.append(Unchecked(
-            "HSS top-wall plastification and punching under a narrow bearing",
+            "HSS wall plastification and punching under a narrow bearing",
             "the wall checks assume the load bears across the full width of the tube (a cap "
             "plate or saddle, beta = 1); a narrower plate, a bolt or a hanging lug needs the "
-            "other rows of Table K2.2", "AISC 360-16 K2, Table K2.2", blocks_rating=False))
+            "other rows of Table K2.2"
+            + (f"; {', '.join(hung)} hang from the bottom wall (flange = \"bottom\"): a lug or "
+               "clamp pulls on the wall there and its plastification can govern, so no rating "
+               "is posted (bear the load on a full-width saddle, or have the wall checked)"
+               if hung else ""),
+            "AISC 360-16 K2, Table K2.2", blocks_rating=bool(hung)))
     elif sec.shape in ("i-beam", "channel") and sec.axis == "weak":
         out.append(Unchecked("local bearing of the flanges (weak axis)",
                              "concentrated forces on a member bent about its weak axis load "
