@@ -20,8 +20,8 @@ from shopbeam.jobs.library import (ENV_SHOP, ENV_USER, ORIGINS, copy, entries, f
 
 
 
-def _banner(tags=()) -> str:
-    return cautions.banner(tags)
+def _banner(tags=(), lifting: bool = False) -> str:
+    return cautions.banner(tags, lifting)
 
 
 def _table(rows: list[list[str]], headers: list[str]) -> str:
@@ -52,7 +52,7 @@ def _library_list(args) -> int:
             rows.append([shown(e.name), e.origin, shown(",".join(e.tags)), shown(title)])
         print(_table(rows, ["NAME", "ORIGIN", "TAGS", "TITLE"]))
     print()
-    print(_banner(tuple(t for e in found for t in e.tags)))
+    print(_banner(tuple(t for e in found for t in e.tags), any(e.lifting for e in found)))
     return 0
 
 
@@ -66,7 +66,7 @@ def _library_show(args) -> int:
     text = e.text or storage.open_text(e.path).text
     print(shown(text.rstrip("\n"), keep="\n\t"))
     print()
-    print(f"# {_banner(e.tags)}")
+    print(f"# {_banner(e.tags, e.lifting)}")
     return 0
 
 

@@ -21,7 +21,7 @@ import tomllib
 from dataclasses import dataclass, field
 from pathlib import Path
 
-from shopbeam.cautions import normal_tag
+from shopbeam.cautions import is_lifting, normal_tag
 from shopbeam.jobs import storage
 from shopbeam.errors import InputError
 
@@ -109,6 +109,7 @@ class Entry:
     problem: str = ""                 # set when the file cannot be read as TOML
     shadowed_by: str = ""             # origin of an entry of the same name found earlier
     text: str = field(default="", repr=False, compare=False)
+    lifting: bool = False  # tagged lifting or naming a [criteria] lifting profile
 
     @property
     def label(self) -> str:
@@ -139,8 +140,11 @@ def _read_entry(path: Path, origin: str) -> Entry:
     tags = tuple(dict.fromkeys(normal_tag(t) for t in tags if str(t).strip())) \
         if isinstance(tags, list) else ()  # compared as the job reader does
     notes = data.get("notes") if isinstance(data.get("notes"), str) else ""
+    crit = data.get("criteria")
+    prof = crit.get("lifting") if isinstance(crit, dict) else None
+    lifting = is_lifting(tags, prof.strip() if isinstance(prof, str) else "")
     return Entry(path.stem, str(title) if title is not None else "(no title)", tags, origin,
-                 path, notes=notes, text=text)
+                 path, notes=notes, text=text, lifting=lifting)
 
 
 def _outside_link(path: Path) -> str:
