@@ -429,3 +429,45 @@ def test_library_shows_an_untagged_lifting_job_with_the_lifting_banner(tmp_path)
                            capture_output=True, text=True, timeout=120, env=env)
         assert r.returncode == 0, r.stderr
         assert "LIFTING DEVICE" in r.stdout, args
+
+
+# ------------------------------------------------------------------ hoist on a beam clamp
+def test_hoist_hung_from_the_bottom_flange_gets_the_flange_check():
+    # A 1-ton chain hoist on a beam clamp at mid-span of a W12x26 (tagged lifting ->
+    # powered-monorail, 25 % impact, ASCE 7-16 4.9.3, from memory). The clamp bears on both
+    # flange tips like a parked trolley: CMAA 74 / EN 1993-6 Table 5.2 (from memory) with
+    # P = 1.25 x 2000 / 2 = 1250 lbf, a = 1/4 in: tip Cx2 = 2.4058 -> 20,826 psi local;
+    # global M = 2500 x 16 / 4 + 26 x 16^2 / 8 = 10,832 lbf*ft -> 3,892 psi; total 24,718 psi
+    # against 29,940 psi: 0.8256. AISC 360-16 J10.1 alone (6.25 Fy tf^2 / 1.67 = 27.0 kip)
+    # would show 0.09 and post a load the flange tips cannot carry.
+    job = parse_job_text("""schema = 1
+title = "Die-cart hoist point"
+tags = ["lifting"]
+[beam]
+length = "16 ft"
+section = "W12x26"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "16 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "8 ft"
+value = "-2000 lbf"
+flange = "bottom"
+label = "hoist"
+""")
+    res = analyze(job)
+    w = _named(res, "wheel flange bending")
+    assert w.demand / KSI == pytest.approx(24.718, rel=2e-3)
+    assert w.ratio == pytest.approx(0.8256, abs=2e-3)
+    assert "beam clamp" in w.detail
+    assert _named(res, "flange local bending").ratio == pytest.approx(2500 / 27021, rel=3e-3)
+    assert res.governing.name == "wheel flange bending"
+    cap = capacity(job)
+    assert cap.governing.name == "wheel flange bending"
+    # (20,826 + 3,592) k + 299 = 29,940 (self-weight 832 lbf*ft -> 299 psi) -> k = 1.2139
+    assert cap.factor == pytest.approx(1.2139, abs=2e-3)

@@ -155,37 +155,51 @@ def wheel_check(job, sol, sec, mat, global_allow=None):
     """The bottom-flange check under the worst wheel of the [[moving]] set in this state."""
     from shopbeam.design.checks import Check
 
-    if not job.moving or sec.shape != "i-beam" or sec.axis != "strong":
+    if sec.shape != "i-beam" or sec.axis != "strong":
         return None
-    ws = job.moving[0]
-    wheels = [ld for ld in sol.beam.loads if (ld.key or "") == ws.key and ld.kind == "point"]
-    if not wheels:
+    ws = job.moving[0] if job.moving else None
+    # (load, contacts, flange tip to contact, words): the trolley's wheels, and on a lifting
+    # job every point load hung from the bottom flange (a hoist on a beam clamp or a parked
+    # trolley: two contacts at the flange tips, the most demanding fit; a lug welded under
+    # the web is lighter on the flange and is J10.1's case, checked too)
+    contacts = []
+    if ws is not None:
+        a_w = ws.wheel_edge if ws.wheel_edge is not None else DEFAULT_WHEEL_EDGE
+        contacts += [(ld, ws.wheels_per_axle, a_w,
+                      f"wheel load P = axle / {ws.wheels_per_axle}; wheel "
+                      + ("given" if ws.wheel_edge is not None else
+                         "default 1/4 in: give [[moving]] wheel_edge for the real trolley"))
+                     for ld in sol.beam.loads
+                     if (ld.key or "") == ws.key and ld.kind == "point"]
+    hung = set(getattr(job, "hung", ()) or ())
+    contacts += [(ld, 2, DEFAULT_WHEEL_EDGE,
+                  "point load hung from the bottom flange, taken as a beam clamp or trolley "
+                  "bearing on both flange tips 1/4 in in (P = load / 2)")
+                 for ld in sol.beam.loads
+                 if ld.kind == "point" and ld.value and (ld.key or "") in hung]
+    if not contacts:
         return None
     d = sec.dims
-    a = ws.wheel_edge if ws.wheel_edge is not None else DEFAULT_WHEEL_EDGE
-    tf, tapered = flange_tf_at_wheel(sec, a)
     sbot = sec.sx_bot
     best = None
-    for ld in wheels:
-        p = abs(ld.value) / ws.wheels_per_axle
+    for ld, per, a, words in contacts:
+        tf, tapered = flange_tf_at_wheel(sec, a)
+        p = abs(ld.value) / per
         m = float(sol.moment(ld.at))
         sg = m / sbot  # sagging (+) puts the bottom fibre in tension
         vm, point, used = wheel_flange_stress(p, tf, d["bf"], d["tw"], a, tapered, sg)
         if best is None or vm > best[0]:
-            best = (vm, point, used, ld.at, p, sg)
-    vm, point, used, at, p, sg = best
+            best = (vm, point, used, ld.at, p, sg, a, tf, tapered, per, words)
+    vm, point, used, at, p, sg, a, tf, tapered, per, words = best
     allow = mat.fy / OMEGA_WHEEL
     names = {"0": "flange-to-web junction", "1": "under the wheel", "2": "flange tip"}
-    edge_words = ("given" if ws.wheel_edge is not None else
-                  "default 1/4 in: give [[moving]] wheel_edge for the real trolley")
     return Check(
         "wheel flange bending", vm, allow, "Pa",
         f"bottom-flange local bending under a trolley wheel, CMAA 74 70-3.3.2.2 / AISC "
         f"Design Guide 7 17 (EN 1993-6 Table 5.2 coefficients, from memory): sigma = C P / "
         f"tf^2 ({'tapered' if tapered else 'parallel'} flange, lambda = 2a/(bf - tw) = "
         f"{used['lambda']:.3f}), plus the global bending stress, von Mises <= Fy / 1.67", at,
-        detail=f"point {point} ({names[point]}); wheel load P = axle / "
-               f"{ws.wheels_per_axle}; wheel {edge_words}",
+        detail=f"point {point} ({names[point]}); {words}",
         clause="CMAA 74 70-3.3.2.2; AISC Design Guide 7 (2nd ed.) 17",
         source="CMAA 74 / EN 1993-6 5.7.2 coefficients (from memory)",
         params={"P": p, "tf": tf, "a": a, "lambda": used["lambda"], "Cx": used["cx"],
