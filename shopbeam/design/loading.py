@@ -38,6 +38,8 @@ from shopbeam.design.checks import Check, basic_checks, brace_points, checks_for
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
+from shopbeam.engine.influence import (candidates, cell_polys, influence, reaction_candidates,
+                                       wheel_cells)
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
@@ -625,6 +627,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
     best: dict[str, tuple] = {}
     count = 0
     reactions: list[dict] = []
+    envs: list = []
     if ss.parts.patterned and not ss.parts.moving:
         best, count, env = pattern_checks(job, ss, k, st)
         for r in env.reactions():
@@ -638,7 +641,9 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
         if ss.parts.moving:
             mv = ss.parts.moving[0]
             static = ss.static_loads(k, pattern)
-            for p, sol in moving_states(job, ss, static, k, st, moving_cache):
+            env = moving_envelope(job, ss, static, k, st)
+            envs.append((pattern, env))
+            for p, sol in moving_states(job, ss, static, k, st, positions=env.positions):
                 count += 1
                 shown = round(p / (job.length * 1e-6)) * job.length * 1e-6  # no 1e-7 ft noise
                 where = f"{mv.label} first wheel at {fmt(shown)}"
@@ -654,6 +659,8 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
             _keep_reactions(reactions, sol, words)
     checks, worst = [], {}
     for name, (c, pattern, p, words, sol) in best.items():
+        if name == "shear" and p is not None:
+            c = _limit_shear(c, sol, [e for pat, e in envs if pat == pattern])
         if words:
             c = replace(c, state=words)
         if ss.parts.moving and name == "bending":
@@ -690,236 +697,177 @@ def _keep(best, c, pattern, p, words, sol):
         best[c.name] = (c, pattern, p, words, sol)
 
 
-# ------------------------------------------------------------------ moving-load candidates
-_NS = 14  # samples per p-piece (fits of degree <= 10 are exact to rounding)
+# ------------------------------------------------------------------ moving-load envelopes
+@dataclass(frozen=True)
+class MovingEnvelope:
+    """The exact extremes of one static state plus the wheel set over its whole travel
+    (see `moving_envelope`)."""
+
+    positions: tuple[float, ...]  # every first-wheel position where some check is worst
+    # (combination, quantity, region, "max" | "min") -> (value, x, first-wheel position);
+    # regions are (start, end) of an unbraced length (moment), a span (deflection), the
+    # whole beam (shear), or ("wheel", i) for the line under wheel i (moment)
+    extremes: dict
+    reactions: tuple  # per reaction (solution order): (largest, its p, smallest, its p)
 
 
-def _cheb_nodes(a: float, b: float, n: int) -> np.ndarray:
-    j = np.arange(n)
-    return 0.5 * (a + b) + 0.5 * (b - a) * np.cos(np.pi * (j + 0.5) / n)[::-1]
+NUDGE = 4e-9  # of the length: just past the solver's merging of positions (1e-9)
 
 
-def _stationary(pvals: np.ndarray, fvals: np.ndarray, a: float, b: float, deg: int) -> list[float]:
-    """Stationary points in (a, b) of the polynomial through (pvals, fvals)."""
-    if b - a <= 0:
-        return []
-    rho = (2 * pvals - (a + b)) / (b - a)
-    c = np.polynomial.chebyshev.chebfit(rho, fvals, deg)
-    scale = np.max(np.abs(c)) if c.size else 0.0
-    if scale == 0:
-        return []
-    c[np.abs(c) < 1e-13 * scale] = 0.0
-    dc = np.polynomial.chebyshev.chebder(c)
-    if not np.any(dc):
-        return []
-    while dc.size > 1 and dc[-1] == 0:
-        dc = dc[:-1]
-    if dc.size < 2:
-        return []
-    r = np.polynomial.chebyshev.chebroots(dc)
-    r = r[np.abs(r.imag) < 1e-7].real
-    r = r[(r > -1) & (r < 1)]
-    return list(0.5 * (a + b) + 0.5 * (b - a) * r)
+def beam_influence(ss: StateSet):
+    """The exact influence data of the state set's bare beam (cached on it)."""
+    cache = ss.__dict__.setdefault("_influence", {})
+    if "v" not in cache:
+        cache["v"] = influence(ss.beam)
+    return cache["v"]
 
 
-def _shift(c: np.ndarray, d: float) -> np.ndarray:
-    """Ascending coefficients of p(t) -> those of q(tau) = p(tau + d)."""
-    n = len(c)
-    out = np.zeros(n)
-    for m in range(n):
-        for i in range(m + 1):
-            out[i] += c[m] * math.comb(m, i) * d ** (m - i)
-    return out
+def wheel_forces(mv: MovingLoad, kk: float) -> np.ndarray:
+    return np.array([d + kk * f for f, d in zip(mv.live, mv.dead)])
 
 
-def _piece(pw: Piecewise, x: float) -> tuple[float, np.ndarray]:
-    j = int(np.clip(np.searchsorted(pw.breaks, x, side="right") - 1, 0, len(pw.breaks) - 2))
-    return float(pw.breaks[j]), pw.coeffs[j]
-
-
-def _sylvester_det(f: np.ndarray, g: np.ndarray) -> float:
-    """Resultant of two polynomials (descending coefficients) by the Sylvester matrix."""
-    m, n = len(f) - 1, len(g) - 1
-    size = m + n
-    if size == 0:
-        return 1.0
-    s = np.zeros((size, size))
-    for i in range(n):
-        s[i, i:i + m + 1] = f
-    for i in range(m):
-        s[n + i, i:i + n + 1] = g
-    return float(np.linalg.det(s))
-
-
-def _interior(static_c: np.ndarray, cm_fits: list, h: float, a: float, b: float) -> list[float]:
-    """p in (a, b) where d/dx and d/dp of static(tau) + sum C_m(p) tau^m vanish together."""
-    n_nodes = 40
-    rho = np.cos(np.pi * (np.arange(n_nodes) + 0.5) / n_nodes)
-    dm = len(cm_fits) - 1
-    ds = max(len(static_c) - 1, dm)
-    sc = np.zeros(ds + 1)
-    sc[: len(static_c)] = static_c
-    hp = h ** np.arange(ds + 1)
-    cm = np.zeros((n_nodes, ds + 1))
-    dcm = np.zeros((n_nodes, ds + 1))
-    for m, fit in enumerate(cm_fits):  # all nodes at once
-        cm[:, m] = np.polynomial.chebyshev.chebval(rho, fit)
-        dcm[:, m] = np.polynomial.chebyshev.chebval(rho, np.polynomial.chebyshev.chebder(fit))
-    tot = (sc[None, :] + cm) * hp  # in sigma = tau / h
-    fs = tot[:, 1:] * np.arange(1, ds + 1)  # d/dsigma, ascending
-    gs = dcm * hp
-
-    def degree(arr):
-        mag = np.max(np.abs(arr), axis=0)
-        top = mag.max() if mag.size else 0.0
-        if top == 0:
-            return -1
-        idx = np.nonzero(mag > 1e-11 * top)[0]
-        return int(idx[-1])
-
-    df, dg = degree(fs), degree(gs)
-    if df < 1 or dg < 0:  # f independent of x in the cell, or of p: edges cover it
-        return []
-    dets = np.array([_sylvester_det(fs[i, : df + 1][::-1], gs[i, : dg + 1][::-1])
-                     for i in range(n_nodes)])
-    top = np.max(np.abs(dets))
-    if not np.isfinite(top) or top == 0:
-        return []
-    c = np.polynomial.chebyshev.chebfit(rho, dets / top, n_nodes - 1)
-    c[np.abs(c) < 1e-12] = 0.0
-    while c.size > 1 and c[-1] == 0:
-        c = c[:-1]
-    if c.size < 2:
-        return []
-    r = np.polynomial.chebyshev.chebroots(c)
-    r = r[np.abs(r.imag) < 1e-6].real
-    r = r[(r > -1) & (r < 1)]
-    return list(0.5 * (a + b) + 0.5 * (b - a) * r)
-
-
-def _wheel_beam(beam: Beam, mv: MovingLoad, p: float, which: str) -> Beam:
-    forces = mv.live if which == "live" else mv.dead
-    loads = tuple(Load("point", at=p + s, value=f, label=mv.label)
-                  for s, f in zip(mv.offsets, forces))
-    return replace(beam, loads=loads)
-
-
-def fixed_breaks(job, ss: StateSet, static_loads) -> list[float]:
-    L = job.length
-    xs = {0.0, L} | {s.at for s in job.supports} | _positions(static_loads)
-    xs |= set(brace_points(job)[1])
-    return sorted(x for x in xs if -1e-12 <= x <= L * (1 + 1e-12))
-
-
-def candidate_positions(job, ss: StateSet, static_loads, k: float, cache=None) -> list[float]:
-    """Every first-wheel position where some check can reach its worst (see module doc)."""
+def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> MovingEnvelope:
+    """Exact extremes of shear, moment (each unbraced length, and under each wheel),
+    deflection (each span) and every reaction over the whole travel of the wheel set, on top
+    of the static loads, from the beam's influence lines (engine/influence.py): every
+    candidate (x, p) is a cell corner, a stationary point along a cell edge or a common root
+    of both partial derivatives, evaluated exactly. `positions` holds the first-wheel
+    positions where any of them is reached, the ends of the travel (a wheel nearest each end
+    of the member), each wheel on a static point load (their forces add), and for lifting
+    jobs the worst position of Mx / Mcx + My / Mcy under each wheel."""
     mv = ss.parts.moving[0]
     kk = k * (1 + ss.parts.impact)
     L = job.length
-    tol = 1e-9 * L
+    tol = 1e-10 * L
     p_lo, p_hi = mv.p_range
-    X = fixed_breaks(job, ss, static_loads)
-    pb = {p_lo, p_hi}
-    for x in X:
-        for s in mv.offsets:
-            if p_lo < x - s < p_hi:
-                pb.add(x - s)
-    pb = sorted(pb)
-    # a wheel on a support or a load edge: the worst shear is the limit as it comes near,
-    # so the positions just either side of every p-break are candidates too
-    nudge = 1e-8 * L
-    cands = set(pb) | {p + d for p in pb for d in (-nudge, nudge)}
-    if p_hi - p_lo <= tol:
-        return [p_lo]
+    st = st or strengths_of(job, beam=ss.beam)
     static = solve(replace(ss.beam, loads=tuple(static_loads)))
-    cache = cache if cache is not None else {}
-    has_dead = any(mv.dead)
-    # every sampling solve of every p-piece in one batched pass (only evaluated at points)
-    todo = [p for a, b in zip(pb, pb[1:]) if b - a > tol for p in _cheb_nodes(a, b, _NS)
-            if (round(p / tol), "l") not in cache]
-    if todo:
-        cases = [_wheel_beam(ss.beam, mv, p, "live").loads for p in todo]
-        if has_dead:
-            cases += [_wheel_beam(ss.beam, mv, p, "dead").loads for p in todo]
-        got = solve_many(ss.beam, cases, candidates=False)
-        for i, p in enumerate(todo):
-            cache[(round(p / tol), "l")] = got[i]
-            cache[(round(p / tol), "d")] = got[len(todo) + i] if has_dead else None
-    for a, b in zip(pb, pb[1:]):
-        if b - a <= tol:
-            continue
-        ps = _cheb_nodes(a, b, _NS)
-        sols = [(cache[(round(p / tol), "l")], cache[(round(p / tol), "d")]) for p in ps]
-        for j in range(len(sols[0][0].reactions)):  # each reaction's stationary points
-            f = np.array([kk * sl.reactions[j].force + (sd.reactions[j].force if sd else 0.0)
-                          for sl, sd in sols])
-            cands.update(_stationary(ps, f, a, b, 6))
+    inf = beam_influence(ss)
+    P = wheel_forces(mv, kk)
+    ltb = [(float(s[0]), float(s[1])) for s in st.ltb_segments]
+    spans = [(float(a), float(b)) for a, b, _ in ss.segs]
+    xs = set(static.moment.breaks.tolist()) | {x for r in ltb + spans for x in r}
+    xs |= {x for x in brace_points(job)[1] if 0 <= x <= L}
+    cells = wheel_cells(inf, sorted(xs), mv.offsets, p_lo, p_hi)
+    ext: dict = {}
+    pos = {p_lo, p_hi}
+    regions = {"shear": [(0.0, L)], "moment": ltb, "deflection": spans}
 
-        def mov(name, x, side, i):
-            sl, sd = sols[i]
-            v = kk * sl.function(name)(x, side)
-            if sd is not None:
-                v += sd.function(name)(x, side)
-            return v
+    def keep(key, c, m):
+        if not m.any():
+            return
+        for how, pick in (("max", np.argmax), ("min", np.argmin)):
+            i = int(pick(np.where(m, c.value, -np.inf if how == "max" else np.inf)))
+            ext[key + (how,)] = (float(c.value[i]), float(c.x[i]), float(c.p[i]))
+            pos.add(float(c.p[i]))
 
-        mid = 0.5 * (a + b)
-        for name, deg_fixed, deg_line in (("shear", 6, 8), ("moment", 6, 8),
-                                          ("deflection", 6, 10)):
-            spw = static.function(name)
-            for x in X:  # (a) at fixed breaks
-                for side in ("left", "right"):
-                    f = np.array([mov(name, x, side, i) for i in range(_NS)])
-                    cands.update(_stationary(ps, f, a, b, deg_fixed))
-            for s in mv.offsets:  # (b) under each wheel
-                for side in ("left", "right"):
-                    f = np.array([spw(p + s, side) + mov(name, p + s, side, i)
-                                  for i, p in enumerate(ps)])
-                    cands.update(_stationary(ps, f, a, b, deg_line))
-            if name == "shear":
-                continue  # V is stationary in x only where the static load crosses zero
-            # (c) interior critical points of each cell
-            pts_mid = sorted(set(X) | {mid + s for s in mv.offsets})
-            for lo, hi in zip(pts_mid, pts_mid[1:]):
-                if hi - lo <= tol:
-                    continue
-                xm_mid = 0.5 * (lo + hi)
-                bref, sc = _piece(spw, xm_mid)
-                rows = []
-                for i, p in enumerate(ps):
-                    # the same cell at this p: between the same fixed break / wheel
-                    lo_p = lo if any(abs(lo - x) <= tol for x in X) else lo - mid + p
-                    hi_p = hi if any(abs(hi - x) <= tol for x in X) else hi - mid + p
-                    if hi_p <= lo_p:
-                        rows = None
-                        break
-                    xm = 0.5 * (lo_p + hi_p)
-                    sl, sd = sols[i]
-                    r0, cl = _piece(sl.function(name), xm)
-                    c = kk * cl
-                    if sd is not None:
-                        c = c + _piece(sd.function(name), xm)[1]
-                    rows.append(_shift(c, bref - r0))
-                if rows is None:
-                    continue
-                rows = np.array(rows)
-                dm = 1 if name == "moment" else 3
-                rho = (2 * ps - (a + b)) / (b - a)
-                fits = [np.polynomial.chebyshev.chebfit(rho, rows[:, m], 6)
-                        for m in range(dm + 1)]
-                cands.update(_interior(sc, fits, hi - lo, a, b))
-    out = sorted(p for p in cands if p_lo - tol <= p <= p_hi + tol)
-    dedup = []
-    for p in out:
-        if not dedup or p - dedup[-1] > 1e-10 * L:
-            dedup.append(min(max(p, p_lo), p_hi))
-    return dedup
+    polys = {}
+    for tag, name, spw, loads in _combinations(job, ss, static, static_loads, st, mv, kk, P):
+        F = cell_polys(inf, cells, name, spw, loads)
+        polys[tag, name] = F
+        c = candidates(cells, F)
+        for a, b in regions[name]:
+            keep((tag, name, (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
+        if name == "moment" and tag == "total":  # under each wheel (wheel flange bending)
+            for i in range(len(P)):
+                keep((tag, name, ("wheel", i)), c, c.wheel == i)
+    lat = _lateral(job, ss, st, mv, k, static_loads)
+    if lat is not None:  # Mx / Mcx + My / Mcy under each wheel: max over the four signs
+        lat_loads, ratio = lat
+        inf_f = influence(replace(ss.beam, ei=1.0))  # the flange-as-beam of the check
+        Fy = cell_polys(inf_f, cells, "moment", None, lat_loads)
+        for s in (1.0, -1.0):
+            c = candidates(cells, polys["total", "moment"] + s * ratio * Fy, lines_only=True)
+            for i in range(len(P)):
+                keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
+    reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,
+                                          [r.force for r in static.reactions], P))
+    for r in reactions:
+        pos.update((r[1], r[3]))
+    for ld in static_loads:
+        if ld.kind == "point" and ld.value:
+            pos.update(ld.at - s for s in mv.offsets if p_lo - tol <= ld.at - s <= p_hi + tol)
+    # a wheel on a support or a load edge: the worst shear there is the limit as the wheel
+    # comes near (on the break itself its force goes straight in), so just inside too
+    fixed = np.array(sorted(xs))
+    nudge = NUDGE * L
+    for p in list(pos):
+        at = p + np.asarray(mv.offsets)
+        j = np.clip(np.searchsorted(fixed, at), 1, len(fixed) - 1)
+        if np.any(np.minimum(np.abs(fixed[j] - at), np.abs(fixed[j - 1] - at)) <= tol):
+            pos.update((p - nudge, p + nudge))
+    out = []
+    for p in sorted(pos):
+        p = min(max(p, p_lo), p_hi)
+        if not out or p - out[-1] > tol:
+            out.append(p)
+    return MovingEnvelope(tuple(out), ext, reactions)
 
 
-def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None):
+def _combinations(job, ss, static, static_loads, st, mv, kk, P):
+    """(tag, quantity, static response, wheel forces) of every load combination a check
+    reads: all loads; the live loads alone (floor live-load deflection); the dead loads
+    alone (wood: NDS 2018 2.3.2)."""
+    for name in ("shear", "moment", "deflection"):
+        yield "total", name, static.function(name), P
+    if st.live_ratio:
+        live = solve(replace(ss.beam, loads=tuple(ld for ld in static_loads if ld.case != "dead")))
+        yield "live", "deflection", live.function("deflection"), kk * np.array(mv.live)
+    if getattr(st.flexure, "wood", None) is not None:
+        dead = solve(replace(ss.beam, loads=tuple(ld for ld in static_loads if ld.case == "dead")))
+        for name in ("shear", "moment", "deflection"):
+            yield "dead", name, dead.function(name), np.array(mv.dead, float)
+
+
+def _lateral(job, ss, st, mv, k, static_loads):
+    """(lateral wheel forces, Mcx / Mcy) when the lateral trolley force check applies."""
+    from shopbeam.design import lifting
+
+    prof = lifting.profile_of(job) if (job.lifting or getattr(job.criteria, "lifting", "")) \
+        else None
+    sec = getattr(st, "section", None) or job.section
+    if prof is None or not prof.lateral or sec.shape != "i-beam" or sec.axis != "strong":
+        return None
+    # Mcx is the bending check's allowable strength (Cb = 1 under moving loads): read it
+    # from the checks of one state
+    wheels = [Load("point", at=mv.travel[0] + s, value=d + k * (1 + ss.parts.impact) * f,
+                   label=mv.label, key=mv.key) for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
+    sol = solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
+    bend = checks_for(job, sol, st, cb_one=True)[0]
+    if bend.unit != "N*m" or not bend.limit > 0:
+        return None
+    mny, _ = lifting.flange_weak_strength(sec, job.material)
+    loads = np.array([prof.lateral * abs(k * f + d) for f, d in zip(mv.live, mv.dead)])
+    return loads, bend.limit / (mny / 1.67)
+
+
+def candidate_positions(job, ss: StateSet, static_loads, k: float, cache=None,
+                        st=None) -> list[float]:
+    """Every first-wheel position where some check can reach its worst (`moving_envelope`)."""
+    return list(moving_envelope(job, ss, static_loads, k, st).positions)
+
+
+def _limit_shear(c: Check, sol: Solution, envs) -> Check:
+    """The shear check at its exact envelope value: with a wheel just inside a support the
+    solve stands NUDGE of the length away from the limit the envelope gives exactly."""
+    if not envs:
+        return c
+    e = envs[0].extremes
+    v = max(abs(e.get(("total", "shear", (0.0, sol.beam.length), h), (0.0,))[0])
+            for h in ("max", "min"))
+    got = sol.shear.extremes().abs_max
+    if got > 0 and 1.0 < v / got <= 1.0 + 1e-6:
+        c = replace(c, demand=c.demand * (v / got))
+    return c
+
+
+def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None, positions=None):
     """(first-wheel position, full solution) at every candidate position."""
     mv = ss.parts.moving[0]
     kk = k * (1 + ss.parts.impact)
-    for p in candidate_positions(job, ss, static_loads, k, cache):
+    if positions is None:
+        positions = candidate_positions(job, ss, static_loads, k, cache, st)
+    for p in positions:
         wheels = [Load("point", at=p + s, value=d + kk * f, label=mv.label, key=mv.key)
                   for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
         yield p, solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))

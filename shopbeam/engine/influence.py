@@ -1,0 +1,529 @@
+"""Exact influence lines and the worst positions of a moving set of point loads.
+
+For a solved (linear) beam the response at x to a unit upward point load at a is, between
+the breaks of the bare beam (ends, supports, springs, hinges) and on either side of x = a, a
+polynomial in (x, a): the unknowns of the solve (support forces and moments, hinge rotation
+jumps, the two integration constants) are cubic in a on each piece of the bare beam (the
+right-hand side of the linear system is cubic in a there, the matrix does not depend on a),
+and each unknown adds a bracket term <x - s>^n. `Influence` holds those cubic coefficients,
+found from unit solves at four positions per piece (a cubic through four points is the cubic
+itself: nothing is fitted), and the bracket terms in x in closed form, so
+
+    Q(x, a) = sum_u Phi_u(x) Z_u(a) + [x > a] (x - a)^n / n!
+
+is known exactly for shear (n = 0), moment (1), EI slope (2) and EI deflection (3).
+
+A wheel set (loads P_i at offsets d_i) with its first wheel at p adds sum_i P_i Q(x, p + d_i)
+to a static response S(x). Over the plane (x, p) that sum is one polynomial on each cell
+bounded by the fixed breaks (supports, load edges, region ends) and the wheels, and each
+p-range on which no wheel crosses a fixed break (`wheel_cells`). The largest and smallest
+value of a quantity over a region of x and the whole travel is therefore at a cell corner, at
+a stationary point along a cell edge (x at a fixed break: a cubic in p; x under a wheel; p at
+a break: a polynomial in x), or at an interior point where both partial derivatives vanish
+(the common roots of two polynomials: the real roots of their resultant in p, then x from
+the x-derivative at that p). Every candidate is evaluated exactly; none is sampled. The cost
+is proportional to the number of cells: (wheels x fixed breaks) p-ranges times (fixed
+breaks + wheels) x-cells, vectorised.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, replace
+
+import numpy as np
+
+from shopbeam.engine.model import Beam, Load
+from shopbeam.engine.piecewise import Piecewise, _horner, _roots_in_pieces
+
+LEVELS = {"shear": 1, "moment": 2, "slope": 3, "deflection": 4}
+NU = 6  # coefficients in x (static deflection of a linear load is degree 5)
+NV = 4  # coefficients in p (the unknowns are cubic in the load position)
+_FACT = [math.factorial(i) for i in range(12)]
+_BINOM = np.array([[math.comb(i, j) for j in range(12)] for i in range(12)], float)
+
+
+@dataclass(frozen=True)
+class Influence:
+    """The unit-load unknowns of a bare beam as cubics in the load position, per piece."""
+
+    beam: Beam
+    breaks: np.ndarray  # ends, supports, springs, hinges (sorted, unique)
+    z: np.ndarray  # (pieces, 4, unknowns): coefficients in tau = a - breaks[m]
+    kind: np.ndarray  # per unknown: 0 force, 1 moment, 2 hinge, 3 c1, 4 c2
+    at: np.ndarray  # per unknown: where it acts
+    reaction_cols: tuple[int, ...]  # the force unknown of each reaction (solution order)
+
+    # ------------------------------------------------------------------ x side
+    def phi(self, level: int) -> np.ndarray:
+        """(pieces, NU, unknowns): each unknown's term at `level` on each piece of x, in
+        t = x - breaks[k] (its bracket is on where the unknown acts at or left of the piece)."""
+        cache = self.__dict__.setdefault("_phi", {})
+        if level in cache:
+            return cache[level]
+        b = self.breaks
+        npc = len(b) - 1
+        nu = len(self.kind)
+        out = np.zeros((npc, NU, nu))
+        # power of (x - s) of each unknown kind at this level: force level-1, moment
+        # level-2, hinge and c1 level-3, c2 level-4 (negative: no term)
+        base = np.array([level - 1, level - 2, level - 3, level - 3, level - 4])[self.kind]
+        sign = np.where(self.kind == 1, -1.0, 1.0)  # a reaction couple steps M down
+        tol = 1e-12 * b[-1]
+        for u in range(nu):
+            n = int(base[u])
+            if n < 0:
+                continue
+            on = self.at[u] <= b[:-1] + tol
+            d = b[:-1] - self.at[u]
+            for i in range(n + 1):  # (t + d)^n / n!
+                out[:, i, u] = np.where(on, sign[u] * _BINOM[n, i] * d ** (n - i) / _FACT[n], 0.0)
+        cache[level] = out
+        return out
+
+    def bicubic(self, level: int) -> np.ndarray:
+        """(x pieces, a pieces, NU, NV): sum over unknowns of Phi_u(t) Z_u(tau)."""
+        cache = self.__dict__.setdefault("_bic", {})
+        if level not in cache:
+            cache[level] = np.einsum("kiu,mju->kmij", self.phi(level), self.z)
+        return cache[level]
+
+    def value(self, name: str, x: float, a: float, side: str = "right") -> float:
+        """Q(x, a) for a unit upward load at a (test and oracle use)."""
+        level = LEVELS[name]
+        b = self.breaks
+        tol = 2.5e-10 * b[-1]
+        k = int(np.clip((b.searchsorted(x + tol, "right") if side == "right"
+                         else b.searchsorted(x - tol, "left")) - 1, 0, len(b) - 2))
+        m = int(np.clip(b.searchsorted(a, "right") - 1, 0, len(b) - 2))
+        c = self.bicubic(level)[k, m]
+        t, tau = x - b[k], a - b[m]
+        v = float(sum(c[i, j] * t**i * tau**j for i in range(NU) for j in range(NV)))
+        n = level - 1
+        right = x > a + tol or (abs(x - a) <= tol and side == "right")
+        if right:
+            v += (x - a) ** n / _FACT[n]
+        return v / (self.beam.ei if level >= 3 else 1.0)
+
+
+def influence(beam: Beam) -> Influence:
+    """The exact influence data of the bare beam (its loads are ignored)."""
+    from shopbeam.engine.solver import solve_many
+
+    L = beam.length
+    sup = sorted(beam.supports, key=lambda s: s.at)
+    b = np.unique(np.array([0.0, L] + [s.at for s in sup]))
+    npc = len(b) - 1
+    h = np.diff(b)
+    frac = np.array([0.0, 1 / 3, 2 / 3, 1.0])
+    nodes = b[:-1, None] + h[:, None] * frac[None, :]  # (pieces, 4), ends shared
+    flat = np.unique(nodes)
+    empty = replace(beam, loads=())
+    sols = solve_many(empty, [(Load("point", at=float(a), value=1.0),) for a in flat],
+                      candidates=False)
+    # the unknowns as the solution reports them
+    kinds, ats, cols = [], [], []
+    s0 = sols[0]
+    for r in s0.reactions:
+        cols.append(len(kinds))
+        kinds.append(0)
+        ats.append(r.at)
+        if r.kind == "fixed":
+            kinds.append(1)
+            ats.append(r.at)
+    for h_at, _ in s0.hinge_rotations:
+        kinds.append(2)
+        ats.append(h_at)
+    kinds += [3, 4]
+    ats += [0.0, 0.0]
+
+    def zvec(s):
+        out = []
+        for r in s.reactions:
+            out.append(r.force)
+            if r.kind == "fixed":
+                out.append(r.moment)
+        out += [rot * beam.ei for _, rot in s.hinge_rotations]
+        out += [s.ei_slope_0, s.ei_deflection_0]
+        return out
+
+    zs = np.array([zvec(s) for s in sols])  # (nodes, unknowns)
+    idx = np.searchsorted(flat, nodes)
+    vals = zs[idx]  # (pieces, 4, unknowns)
+    # the cubic through the four values, in tau / h, then in tau
+    vinv = np.linalg.inv(frac[:, None] ** np.arange(4)[None, :])
+    cz = np.einsum("jn,mnu->mju", vinv, vals)
+    cz = cz / (h[:, None, None] ** np.arange(4)[None, :, None])
+    return Influence(beam, b, cz, np.array(kinds), np.array(ats, float), tuple(cols))
+
+
+# ------------------------------------------------------------------ polynomial helpers
+def _shift_matrix(d: np.ndarray, n: int) -> np.ndarray:
+    """(N, n, n): row i' -> column i of (s + d)^i' expanded in s."""
+    i = np.arange(n)
+    expo = i[:, None] - i[None, :]
+    mask = expo >= 0
+    with np.errstate(all="ignore"):
+        p = np.where(mask[None], d[:, None, None] ** np.where(mask, expo, 0)[None], 0.0)
+    return p * _BINOM[:n, :n][None]
+
+
+def _psi2d(c: np.ndarray, n: int) -> np.ndarray:
+    """(N, NU, NV): coefficients in (u, v) of (u - v + c)^n / n!."""
+    out = np.zeros((len(c), NU, NV))
+    for a in range(n + 1):
+        for bb in range(n + 1 - a):
+            r = n - a - bb
+            coef = _FACT[n] / (_FACT[a] * _FACT[bb] * _FACT[r]) * (-1) ** bb / _FACT[n]
+            out[:, a, bb] += coef * c**r
+    return out
+
+
+def _compose(F: np.ndarray, alpha: np.ndarray, beta: np.ndarray) -> np.ndarray:
+    """Coefficients in v of F(alpha + beta v, v) (F: (N, NU, NV))."""
+    n = F.shape[0]
+    T = np.zeros((n, NU, NU))  # (alpha + beta v)^i -> v^l
+    for i in range(NU):
+        for l_ in range(i + 1):
+            T[:, i, l_] = _BINOM[i, l_] * alpha ** (i - l_) * beta**l_
+    g = np.zeros((n, NU + NV - 1))
+    for j in range(NV):
+        g[:, j:j + NU] += np.einsum("ci,cil->cl", F[:, :, j], T)
+    return g
+
+
+def _eval2d(F: np.ndarray, u: np.ndarray, v: np.ndarray) -> np.ndarray:
+    """F[c] at (u[c], v[c])."""
+    cols = np.stack([_horner(F[:, :, j], u) for j in range(F.shape[2])], axis=1)
+    return _horner(cols, v)
+
+
+def _colleague_roots(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Real roots in [-1, 1] of rows of Chebyshev series: (row, root)."""
+    n, w = c.shape
+    top = np.abs(c).max(axis=1)
+    rel = np.abs(c) > 1e-11 * top[:, None]
+    deg = np.where(top > 0, w - 1 - np.argmax(rel[:, ::-1], axis=1), 0)
+    rows_out, r_out = [], []
+    for d in np.unique(deg):
+        if d < 1:
+            continue
+        sel = np.flatnonzero(deg == d)
+        cc = c[sel, : d + 1]
+        if d == 1:
+            r = -cc[:, 0] / cc[:, 1]
+            rows_out.append(sel)
+            r_out.append(r)
+            continue
+        mat = np.zeros((len(sel), d, d))
+        scl = np.array([1.0] + [math.sqrt(0.5)] * (d - 1))
+        sup = np.full(d - 1, 0.5)
+        sup[0] = math.sqrt(0.5)
+        ar = np.arange(d - 1)
+        mat[:, ar, ar + 1] = sup
+        mat[:, ar + 1, ar] = sup
+        mat[:, :, -1] -= (cc[:, :-1] / cc[:, -1:]) * (scl / scl[-1])[None, :] * 0.5
+        with np.errstate(all="ignore"):
+            eig = np.linalg.eigvals(mat)
+        real = np.abs(eig.imag) <= 1e-6
+        rr = np.repeat(sel, d).reshape(len(sel), d)
+        ok = real & (eig.real >= -1 - 1e-9) & (eig.real <= 1 + 1e-9) & np.isfinite(eig.real)
+        rows_out.append(rr[ok])
+        r_out.append(np.clip(eig.real[ok], -1.0, 1.0))
+    if not rows_out:
+        return np.zeros(0, int), np.zeros(0)
+    return np.concatenate(rows_out), np.concatenate(r_out)
+
+
+# ------------------------------------------------------------------ cells
+@dataclass(frozen=True)
+class Cells:
+    """The cells of the (x, p) plane for one wheel set on one beam (see module doc)."""
+
+    p0: np.ndarray  # (C,) start of the cell's p-range
+    wp: np.ndarray  # its width (0 for a travel of one position)
+    lo_fixed: np.ndarray  # bool: the cell's left side is a fixed break (else a wheel)
+    lo_idx: np.ndarray  # index into xs or wheels
+    hi_fixed: np.ndarray
+    hi_idx: np.ndarray
+    xr: np.ndarray  # x of the left side at p0 (the cell's origin in x)
+    wu: np.ndarray  # the cell's largest width in x
+    k: np.ndarray  # piece of the bare beam holding the cell
+    m: np.ndarray  # (C, wheels): piece of the bare beam under each wheel
+    left: np.ndarray  # (C, wheels): wheel left of the cell
+    xs: np.ndarray  # the fixed breaks
+    offsets: np.ndarray
+
+
+def wheel_cells(inf: Influence, xs, offsets, p_lo: float, p_hi: float) -> Cells:
+    L = inf.beam.length
+    tol = 1e-11 * L
+    xs = np.unique(np.concatenate([np.asarray(xs, float), inf.breaks]))
+    xs = xs[(xs >= -tol) & (xs <= L + tol)]
+    d = np.asarray(offsets, float)
+    pb = (xs[:, None] - d[None, :]).ravel()
+    pb = np.unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
+    if len(pb) > 1:
+        keep = np.concatenate([[True], np.diff(pb) > tol])
+        pb = pb[keep]
+        pb[-1] = p_hi
+    if len(pb) == 1:
+        p0s, wps = pb, np.zeros(1)
+    else:
+        p0s, wps = pb[:-1], np.diff(pb)
+    pm = p0s + 0.5 * wps
+    npp, nx, nw = len(p0s), len(xs), len(d)
+    pos = np.concatenate([np.broadcast_to(xs, (npp, nx)), pm[:, None] + d[None, :]], axis=1)
+    order = np.argsort(pos, axis=1, kind="stable")
+    is_fixed = order < nx
+    idx = np.where(is_fixed, order, order - nx)
+    spos = np.take_along_axis(pos, order, axis=1)
+    # consecutive pairs inside the beam
+    lo_f, hi_f = is_fixed[:, :-1], is_fixed[:, 1:]
+    lo_i, hi_i = idx[:, :-1], idx[:, 1:]
+    xm = 0.5 * (spos[:, :-1] + spos[:, 1:])
+    inside = (spos[:, 1:] - spos[:, :-1] > tol) & (xm > 0) & (xm < L)
+    P = np.broadcast_to(np.arange(npp)[:, None], lo_f.shape)
+    sel = np.nonzero(inside)
+    pc = P[sel]
+    lo_f, hi_f, lo_i, hi_i, xm = lo_f[sel], hi_f[sel], lo_i[sel], hi_i[sel], xm[sel]
+    p0, wp = p0s[pc], wps[pc]
+    def fx(fixed, i):
+        return xs[np.where(fixed, i, 0)]
+
+    def dw(fixed, i):
+        return d[np.where(fixed, 0, i)] if nw else 0.0
+
+    xr = np.where(lo_f, fx(lo_f, lo_i), p0 + dw(lo_f, lo_i))
+    x_hi0 = np.where(hi_f, fx(hi_f, hi_i), p0 + dw(hi_f, hi_i))
+    x_hi1 = np.where(hi_f, fx(hi_f, hi_i), p0 + wp + dw(hi_f, hi_i))
+    x_lo1 = np.where(lo_f, fx(lo_f, lo_i), p0 + wp + dw(lo_f, lo_i))
+    wu = np.maximum(x_hi0 - xr, x_hi1 - x_lo1)
+    wu = np.where(wu > 0, wu, tol)
+    b = inf.breaks
+    k = np.clip(np.searchsorted(b, xm, "right") - 1, 0, len(b) - 2)
+    a_mid = pm[pc][:, None] + d[None, :]
+    m = np.clip(np.searchsorted(b, a_mid, "right") - 1, 0, len(b) - 2)
+    left = a_mid < xm[:, None]
+    return Cells(p0, wp, lo_f, lo_i, hi_f, hi_i, xr, wu, k, m, left, xs, d)
+
+
+def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None,
+               loads) -> np.ndarray:
+    """(C, NU, NV): the quantity on each cell as a polynomial in (u, v), u = (x - xr) / wu,
+    v = (p - p0) / wp (v = 0 on a cell of zero width)."""
+    level = LEVELS[name]
+    n = len(cells.p0)
+    F = np.zeros((n, NU, NV))
+    u0 = cells.xr
+    if level >= 3:  # slope and deflection: the unknowns and brackets are EI times them
+        loads = np.asarray(loads, float) / inf.beam.ei
+    if static is not None:
+        sb = static.breaks
+        xin = np.minimum(cells.xr + 1e-9 * cells.wu, sb[-1])  # the static piece of the cell
+        j = np.clip(np.searchsorted(sb, xin, "right") - 1, 0, len(sb) - 2)
+        c = static.coeffs[j]
+        w = c.shape[1]
+        S = _shift_matrix(u0 - sb[j], w)
+        F[:, :w, 0] += np.einsum("ci,cil->cl", c, S)
+    bic = inf.bicubic(level)
+    b = inf.breaks
+    Sx = _shift_matrix(u0 - b[cells.k], NU)
+    npow = level - 1
+    for i, P in enumerate(loads):
+        if P == 0:
+            continue
+        mi = cells.m[:, i]
+        C = bic[cells.k, mi]  # (C, NU, NV)
+        Sv = _shift_matrix(cells.p0 + cells.offsets[i] - b[mi], NV)
+        F += P * np.einsum("cab,cai,cbj->cij", C, Sx, Sv)
+        lf = cells.left[:, i]
+        if lf.any():
+            cc = cells.xr - cells.p0 - cells.offsets[i]
+            F += P * lf[:, None, None] * _psi2d(cc, npow)
+    # a travel of one position: nothing depends on p
+    F[cells.wp <= 0, :, 1:] = 0.0
+    # to the unit square
+    su = cells.wu[:, None] ** np.arange(NU)[None, :]
+    sv = np.where(cells.wp > 0, cells.wp, 1.0)[:, None] ** np.arange(NV)[None, :]
+    return F * su[:, :, None] * sv[:, None, :]
+
+
+@dataclass(frozen=True)
+class Candidates:
+    """Every candidate extreme of one quantity: value, x, p, cell, and the wheel under
+    which it lies (-1 if not on a wheel line)."""
+
+    value: np.ndarray
+    x: np.ndarray
+    p: np.ndarray
+    cell: np.ndarray
+    wheel: np.ndarray
+
+
+def _bounds(cells: Cells):
+    """u of the cell's sides as alpha + beta v."""
+    wu = cells.wu
+    wp = cells.wp
+    xs, d = cells.xs, cells.offsets
+    nw = len(d)
+
+    def side(fixed, idx):
+        x0 = np.where(fixed, xs[np.where(fixed, idx, 0)],
+                      cells.p0 + (d[np.where(fixed, 0, idx)] if nw else 0.0))
+        alpha = (x0 - cells.xr) / wu
+        beta = np.where(fixed, 0.0, wp / wu)
+        return alpha, beta
+
+    return side(cells.lo_fixed, cells.lo_idx), side(cells.hi_fixed, cells.hi_idx)
+
+
+def candidates(cells: Cells, F: np.ndarray, interior: bool = True,
+               lines_only: bool = False) -> Candidates:
+    """Every point where the quantity F can reach its largest or smallest value."""
+    n = len(cells.p0)
+    (al, bl), (ah, bh) = _bounds(cells)
+    us, vs, cs, ws = [], [], [], []
+    cidx = np.arange(n)
+    # sides: x on a fixed break or under a wheel
+    for alpha, beta, fixed, idx in ((al, bl, cells.lo_fixed, cells.lo_idx),
+                                    (ah, bh, cells.hi_fixed, cells.hi_idx)):
+        wheel = np.where(fixed, -1, idx)
+        if lines_only:
+            sel = ~fixed
+            if not sel.any():
+                continue
+        else:
+            sel = np.ones(n, bool)
+        g = _compose(F[sel], alpha[sel], beta[sel])
+        rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, g.shape[1]), np.ones(sel.sum()))
+        sub = cidx[sel]
+        vv = np.concatenate([np.zeros(sel.sum()), np.ones(sel.sum()), t])
+        cc = np.concatenate([sub, sub, sub[rows]])
+        us.append(alpha[cc] + beta[cc] * vv)
+        vs.append(vv)
+        cs.append(cc)
+        ws.append(wheel[cc])
+    if not lines_only:
+        # bottom and top: p at a break, x along the cell
+        for v in (0.0, 1.0):
+            ulo, uhi = al + bl * v, ah + bh * v
+            g = F @ (v ** np.arange(NV))  # (n, NU): coefficients in u
+            dg = g[:, 1:] * np.arange(1, NU)
+            # shift to ulo and find roots inside (ulo, uhi)
+            S = _shift_matrix(ulo, NU - 1)
+            dgs = np.einsum("ci,cil->cl", dg, S)
+            width = np.maximum(uhi - ulo, 0.0)
+            rows, t = _roots_in_pieces(dgs, np.where(width > 0, width, 1e-300))
+            us.append(ulo[rows] + t)
+            vs.append(np.full(len(rows), v))
+            cs.append(cidx[rows])
+            ws.append(np.full(len(rows), -1))
+        if interior:
+            iu, iv, ic = _interior(F, al, bl, ah, bh)
+            us.append(iu)
+            vs.append(iv)
+            cs.append(ic)
+            ws.append(np.full(len(ic), -1))
+    u = np.concatenate(us)
+    v = np.concatenate(vs)
+    c = np.concatenate(cs).astype(int)
+    w = np.concatenate(ws).astype(int)
+    val = _eval2d(F[c], u, v)
+    x = cells.xr[c] + u * cells.wu[c]
+    p = cells.p0[c] + v * cells.wp[c]
+    return Candidates(val, x, p, c, w)
+
+
+_NR = 24  # Chebyshev nodes for a resultant (its degree in v is at most 3*3 + 2*4 = 17)
+_RHO = np.cos(np.pi * (np.arange(_NR) + 0.5) / _NR)
+_CHEB = np.polynomial.chebyshev.chebvander(_RHO, _NR - 1)
+_CHEB_INV = np.linalg.inv(_CHEB)
+
+
+def _interior(F, al, bl, ah, bh):
+    """Interior points of each cell where both partial derivatives vanish."""
+    n = F.shape[0]
+    top = np.abs(F).max(axis=(1, 2))
+    top = np.where(top > 0, top, 1.0)
+    Fu = F[:, 1:, :] * np.arange(1, NU)[None, :, None]  # (n, NU-1, NV)
+    Fv = F[:, :, 1:] * np.arange(1, NV)[None, None, :]  # (n, NU, NV-1)
+    tiny = 1e-11 * top[:, None]
+    mu = np.abs(Fu).max(axis=2) > tiny  # per power of u
+    mv = np.abs(Fv).max(axis=2) > tiny
+    du = np.where(mu.any(1), Fu.shape[1] - 1 - np.argmax(mu[:, ::-1], axis=1), -1)
+    dv = np.where(mv.any(1), Fv.shape[1] - 1 - np.argmax(mv[:, ::-1], axis=1), -1)
+    ok = (du >= 1) & (dv >= 0)
+    vnode = 0.5 * (_RHO + 1.0)
+    out_u, out_v, out_c = [], [], []
+    for a_deg, b_deg in {(int(a), int(b)) for a, b in zip(du[ok], dv[ok])}:
+        sel = np.flatnonzero(ok & (du == a_deg) & (dv == b_deg))
+        size = a_deg + b_deg
+        # f_u and f_v at each node: coefficients in u
+        fu = np.einsum("cij,nj->cni", Fu[sel, : a_deg + 1, :], vnode[:, None] ** np.arange(NV))
+        fv = np.einsum("cij,nj->cni", Fv[sel, : b_deg + 1, :],
+                       vnode[:, None] ** np.arange(NV - 1))
+        S = np.zeros((len(sel), _NR, size, size))
+        for r in range(b_deg):  # b_deg rows of f_u (descending powers)
+            S[:, :, r, r:r + a_deg + 1] = fu[:, :, ::-1]
+        for r in range(a_deg):
+            S[:, :, b_deg + r, r:r + b_deg + 1] = fv[:, :, ::-1]
+        if b_deg == 0:  # resultant = f_v^deg_u
+            dets = fv[:, :, 0] ** a_deg
+        else:
+            with np.errstate(all="ignore"):
+                dets = np.linalg.det(S)
+        scale = np.abs(dets).max(axis=1)
+        good = np.isfinite(scale) & (scale > 0)
+        if not good.any():
+            continue
+        sel, dets = sel[good], dets[good] / scale[good, None]
+        coef = dets @ _CHEB_INV.T
+        rows, rho = _colleague_roots(coef)
+        if not len(rows):
+            continue
+        cc = sel[rows]
+        v = 0.5 * (rho + 1.0)
+        # x from the x-derivative at that p
+        g = np.einsum("cij,cj->ci", Fu[cc], v[:, None] ** np.arange(NV))
+        ulo, uhi = al[cc] + bl[cc] * v, ah[cc] + bh[cc] * v
+        S2 = _shift_matrix(ulo, NU - 1)
+        gs = np.einsum("ci,cil->cl", g, S2)
+        width = np.maximum(uhi - ulo, 0.0)
+        r2, t2 = _roots_in_pieces(gs, np.where(width > 0, width, 1e-300))
+        out_u.append(ulo[r2] + t2)
+        out_v.append(v[r2])
+        out_c.append(cc[r2])
+    if not out_c:
+        return np.zeros(0), np.zeros(0), np.zeros(0, int)
+    return np.concatenate(out_u), np.concatenate(out_v), np.concatenate(out_c)
+
+
+# ------------------------------------------------------------------ reactions
+def reaction_candidates(inf: Influence, offsets, p_lo: float, p_hi: float, static_r,
+                        loads) -> list[tuple[float, float, float, float]]:
+    """Per reaction (solution order): (largest, its p, smallest, its p) over the travel."""
+    L = inf.beam.length
+    tol = 1e-11 * L
+    d = np.asarray(offsets, float)
+    b = inf.breaks
+    pb = (b[:, None] - d[None, :]).ravel()
+    pb = np.unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
+    p0s = pb[:-1] if len(pb) > 1 else pb
+    wps = np.diff(pb) if len(pb) > 1 else np.zeros(1)
+    pm = p0s + 0.5 * wps
+    m = np.clip(np.searchsorted(b, pm[:, None] + d[None, :], "right") - 1, 0, len(b) - 2)
+    out = []
+    for j, col in enumerate(inf.reaction_cols):
+        g = np.zeros((len(p0s), NV))
+        for i, P in enumerate(loads):
+            c = inf.z[m[:, i], :, col]
+            S = _shift_matrix(p0s + d[i] - b[m[:, i]], NV)
+            g += P * np.einsum("ci,cil->cl", c, S)
+        g[:, 0] += static_r[j]
+        rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, NV), np.where(wps > 0, wps, 1e-300))
+        ps = np.concatenate([p0s, p0s + wps, p0s[rows] + t])
+        vals = np.concatenate([g[:, 0], _horner(g, wps), _horner(g[rows], t)])
+        i1, i2 = int(np.argmax(vals)), int(np.argmin(vals))
+        out.append((float(vals[i1]), float(ps[i1]), float(vals[i2]), float(ps[i2])))
+    return out
