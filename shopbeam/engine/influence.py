@@ -212,8 +212,9 @@ def _colleague_roots(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
         cc = c[sel, : d + 1]
         if d == 1:
             r = -cc[:, 0] / cc[:, 1]
-            rows_out.append(sel)
-            r_out.append(r)
+            ok = (r >= -1.0) & (r <= 1.0)
+            rows_out.append(sel[ok])
+            r_out.append(r[ok])
             continue
         mat = np.zeros((len(sel), d, d))
         scl = np.array([1.0] + [math.sqrt(0.5)] * (d - 1))
@@ -441,6 +442,45 @@ _CHEB = np.polynomial.chebyshev.chebvander(_RHO, _NR - 1)
 _CHEB_INV = np.linalg.inv(_CHEB)
 
 
+def _newton(F, u, v, al, bl, ah, bh, steps: int = 3):
+    """Newton steps on F_u = F_v = 0 from the resultant's roots (a root of a resultant of
+    high degree can be a little off where the value is small), kept inside the cell."""
+    Fu = F[:, 1:, :] * np.arange(1, NU)[None, :, None]
+    Fv = F[:, :, 1:] * np.arange(1, NV)[None, None, :]
+    Fuu = Fu[:, 1:, :] * np.arange(1, NU - 1)[None, :, None]
+    Fuv = Fu[:, :, 1:] * np.arange(1, NV)[None, None, :]
+    Fvv = Fv[:, :, 1:] * np.arange(1, NV - 1)[None, None, :]
+    for _ in range(steps):
+        a, b = _eval2d(Fu, u, v), _eval2d(Fv, u, v)
+        h11, h12, h22 = _eval2d(Fuu, u, v), _eval2d(Fuv, u, v), _eval2d(Fvv, u, v)
+        det = h11 * h22 - h12 * h12
+        with np.errstate(all="ignore"):
+            du = np.where(det != 0, (h22 * a - h12 * b) / det, 0.0)
+            dv = np.where(det != 0, (h11 * b - h12 * a) / det, 0.0)
+        un, vn = u - du, v - dv
+        inside = np.isfinite(un) & np.isfinite(vn) & (vn >= 0) & (vn <= 1) & \
+            (un >= al + bl * vn) & (un <= ah + bh * vn)
+        u, v = np.where(inside, un, u), np.where(inside, vn, v)
+    return u, v
+
+
+def _strip(A: np.ndarray, axis: int, tiny: np.ndarray) -> np.ndarray:
+    """A divided by its lowest power along `axis` (1: u, 2: v) with a coefficient above tiny."""
+    mag = np.abs(A).max(axis=3 - axis) > tiny  # (n, powers along axis)
+    low = np.where(mag.any(1), np.argmax(mag, axis=1), 0)
+    if not low.any():
+        return A
+    size = A.shape[axis]
+    idx = np.arange(size)[None, :] + low[:, None]  # (n, size)
+    ok = idx < size
+    idx = np.minimum(idx, size - 1)
+    if axis == 1:
+        out = np.take_along_axis(A, idx[:, :, None], axis=1)
+        return out * ok[:, :, None]
+    out = np.take_along_axis(A, idx[:, None, :], axis=2)
+    return out * ok[:, None, :]
+
+
 def _interior(F, al, bl, ah, bh):
     """Interior points of each cell where both partial derivatives vanish."""
     n = F.shape[0]
@@ -449,6 +489,10 @@ def _interior(F, al, bl, ah, bh):
     Fu = F[:, 1:, :] * np.arange(1, NU)[None, :, None]  # (n, NU-1, NV)
     Fv = F[:, :, 1:] * np.arange(1, NV)[None, None, :]  # (n, NU, NV-1)
     tiny = 1e-11 * top[:, None]
+    # a factor u^k or v^k common to both (a fixed end at the cell's side: F = u^2 (...))
+    # would make the resultant vanish identically; its roots lie on the cell's sides, which
+    # the edges cover, so each derivative is divided by its own lowest powers of u and v
+    Fu, Fv = _strip(_strip(Fu, 1, tiny), 2, tiny), _strip(_strip(Fv, 1, tiny), 2, tiny)
     mu = np.abs(Fu).max(axis=2) > tiny  # per power of u
     mv = np.abs(Fv).max(axis=2) > tiny
     du = np.where(mu.any(1), Fu.shape[1] - 1 - np.argmax(mu[:, ::-1], axis=1), -1)
@@ -491,9 +535,14 @@ def _interior(F, al, bl, ah, bh):
         gs = np.einsum("ci,cil->cl", g, S2)
         width = np.maximum(uhi - ulo, 0.0)
         r2, t2 = _roots_in_pieces(gs, np.where(width > 0, width, 1e-300))
-        out_u.append(ulo[r2] + t2)
-        out_v.append(v[r2])
-        out_c.append(cc[r2])
+        uu, vv, c3 = ulo[r2] + t2, v[r2], cc[r2]
+        out_u.append(uu)
+        out_v.append(vv)
+        out_c.append(c3)
+        pu, pv = _newton(F[c3], uu, vv, al[c3], bl[c3], ah[c3], bh[c3])
+        out_u.append(pu)
+        out_v.append(pv)
+        out_c.append(c3)
     if not out_c:
         return np.zeros(0), np.zeros(0), np.zeros(0, int)
     return np.concatenate(out_u), np.concatenate(out_v), np.concatenate(out_c)
@@ -526,4 +575,29 @@ def reaction_candidates(inf: Influence, offsets, p_lo: float, p_hi: float, stati
         vals = np.concatenate([g[:, 0], _horner(g, wps), _horner(g[rows], t)])
         i1, i2 = int(np.argmax(vals)), int(np.argmin(vals))
         out.append((float(vals[i1]), float(ps[i1]), float(vals[i2]), float(ps[i2])))
+    return out
+
+
+def envelope(beam: Beam, offsets, loads, travel: tuple[float, float], name: str,
+             regions=None, inf: Influence | None = None, static=None) -> dict:
+    """The exact largest and smallest `name` over each region (start, end) of x and every
+    first-wheel position p in `travel`, with the wheel set (forces + up at offsets from the
+    first wheel) on top of the beam's own loads: {region: (max, x, p, min, x, p)}."""
+    from shopbeam.engine.solver import solve
+
+    inf = inf or influence(beam)
+    static = static or solve(beam)
+    L = beam.length
+    regions = regions or [(0.0, L)]
+    xs = set(static.moment.breaks.tolist()) | {x for r in regions for x in r}
+    cells = wheel_cells(inf, sorted(xs), offsets, travel[0], travel[1])
+    c = candidates(cells, cell_polys(inf, cells, name, static.function(name), loads))
+    tol = 1e-10 * L
+    out = {}
+    for a, b in regions:
+        m = (c.x >= a - tol) & (c.x <= b + tol)
+        i = int(np.argmax(np.where(m, c.value, -np.inf)))
+        j = int(np.argmin(np.where(m, c.value, np.inf)))
+        out[(a, b)] = (float(c.value[i]), float(c.x[i]), float(c.p[i]),
+                       float(c.value[j]), float(c.x[j]), float(c.p[j]))
     return out
