@@ -38,8 +38,8 @@ from shopbeam.design.checks import Check, basic_checks, brace_points, checks_for
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
-from shopbeam.engine.influence import (candidates, cell_polys, influence, reaction_candidates,
-                                       wheel_cells)
+from shopbeam.engine.influence import (candidates, cell_groups, cell_polys, influence,
+                                       reaction_candidates, wheel_cells)
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
@@ -651,6 +651,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
                 for c in checks_for(job, sol, st, cb_one=True):
                     _keep(best, c, pattern, p, full, sol)
                 _keep_reactions(reactions, sol, full)
+            _exact_reactions(reactions, env, words, mv, job, fmt)
         else:
             sol = ss.state(k, pattern)
             count += 1
@@ -678,6 +679,17 @@ def wheel_loads(mv: MovingLoad, p: float, kk: float) -> list[tuple[float, float]
     """Where each wheel stands and what it carries (N, + up; live x kk plus dead) with the
     first wheel at p: the governing wheel positions as plain data (`Evaluation.worst`)."""
     return [(float(p + s), float(d + kk * f)) for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
+
+
+def _exact_reactions(out: list[dict], env: "MovingEnvelope", words: str, mv, job, fmt) -> None:
+    """Each reaction at its exact extremes over the travel (`moving_envelope`)."""
+    for d, (hi, p_hi, lo, p_lo) in zip(out, env.reactions):
+        for value, p, key, better in ((hi, p_hi, "max_up", hi > d["max_up"]),
+                                      (lo, p_lo, "max_down", lo < d["max_down"])):
+            if better:
+                shown = round(p / (job.length * 1e-6)) * job.length * 1e-6
+                where = f"{mv.label} first wheel at {fmt(shown)}"
+                d[key], d[key + "_state"] = float(value), "; ".join(x for x in (words, where) if x)
 
 
 def _keep_reactions(out: list[dict], sol: Solution, words: str) -> None:
@@ -762,13 +774,18 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
             pos.add(float(c.p[i]))
 
     polys = {}
+    sec = getattr(st, "section", None) or job.section
+    lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
+    under = lifting and sec.shape == "i-beam" and sec.axis == "strong"  # wheel flange check
+    groups = {name: cell_groups(cells, regions[name]) for name in regions}
     for tag, name, spw, loads in _combinations(job, ss, static, static_loads, st, mv, kk, P):
         F = cell_polys(inf, cells, name, spw, loads)
         polys[tag, name] = F
-        c = candidates(cells, F)
+        lines = under and name == "moment" and tag == "total"
+        c = candidates(cells, F, groups=groups[name], lines=lines)
         for a, b in regions[name]:
             keep((tag, name, (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
-        if name == "moment" and tag == "total":  # under each wheel (wheel flange bending)
+        if lines:  # under each wheel (wheel flange bending)
             for i in range(len(P)):
                 keep((tag, name, ("wheel", i)), c, c.wheel == i)
     lat = _lateral(job, ss, st, mv, k, static_loads)
@@ -782,8 +799,12 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
                 keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
     reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,
                                           [r.force for r in static.reactions], P))
-    for r in reactions:
-        pos.update((r[1], r[3]))
+    from shopbeam.design import local as _local
+
+    if (_local.applies(sec) and getattr(job.material, "kind", "") in ("steel", "stainless")) \
+            or getattr(st.flexure, "wood", None) is not None:  # checks that read reactions
+        for r in reactions:
+            pos.update((r[1], r[3]))
     for ld in static_loads:
         if ld.kind == "point" and ld.value:
             pos.update(ld.at - s for s in mv.offsets if p_lo - tol <= ld.at - s <= p_hi + tol)

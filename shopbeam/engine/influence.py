@@ -188,7 +188,7 @@ def _compose(F: np.ndarray, alpha: np.ndarray, beta: np.ndarray) -> np.ndarray:
             T[:, i, l_] = _BINOM[i, l_] * alpha ** (i - l_) * beta**l_
     g = np.zeros((n, NU + NV - 1))
     for j in range(NV):
-        g[:, j:j + NU] += np.einsum("ci,cil->cl", F[:, :, j], T)
+        g[:, j:j + NU] += (F[:, None, :, j] @ T)[:, 0]
     return g
 
 
@@ -299,7 +299,8 @@ def wheel_cells(inf: Influence, xs, offsets, p_lo: float, p_hi: float) -> Cells:
     x_hi0 = np.where(hi_f, fx(hi_f, hi_i), p0 + dw(hi_f, hi_i))
     x_hi1 = np.where(hi_f, fx(hi_f, hi_i), p0 + wp + dw(hi_f, hi_i))
     x_lo1 = np.where(lo_f, fx(lo_f, lo_i), p0 + wp + dw(lo_f, lo_i))
-    wu = np.maximum(x_hi0 - xr, x_hi1 - x_lo1)
+    wu = np.maximum(x_hi0, x_hi1) - xr  # the cell lies in 0 <= u <= 1 (sides move right)
+    del x_lo1
     wu = np.where(wu > 0, wu, tol)
     b = inf.breaks
     k = np.clip(np.searchsorted(b, xm, "right") - 1, 0, len(b) - 2)
@@ -326,7 +327,7 @@ def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None
         c = static.coeffs[j]
         w = c.shape[1]
         S = _shift_matrix(u0 - sb[j], w)
-        F[:, :w, 0] += np.einsum("ci,cil->cl", c, S)
+        F[:, :w, 0] += (c[:, None, :] @ S)[:, 0]
     bic = inf.bicubic(level)
     b = inf.breaks
     Sx = _shift_matrix(u0 - b[cells.k], NU)
@@ -337,7 +338,7 @@ def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None
         mi = cells.m[:, i]
         C = bic[cells.k, mi]  # (C, NU, NV)
         Sv = _shift_matrix(cells.p0 + cells.offsets[i] - b[mi], NV)
-        F += P * np.einsum("cab,cai,cbj->cij", C, Sx, Sv)
+        F += P * (np.swapaxes(Sx, 1, 2) @ (C @ Sv))
         lf = cells.left[:, i]
         if lf.any():
             cc = cells.xr - cells.p0 - cells.offsets[i]
@@ -379,52 +380,119 @@ def _bounds(cells: Cells):
     return side(cells.lo_fixed, cells.lo_idx), side(cells.hi_fixed, cells.hi_idx)
 
 
+def _bernstein_matrix(n: int) -> np.ndarray:
+    """Power-to-Bernstein coefficients on [0, 1] for degree n - 1: b = M @ a."""
+    d = n - 1
+    M = np.zeros((n, n))
+    for k in range(n):
+        for i in range(k + 1):
+            M[k, i] = math.comb(k, i) / math.comb(d, i)
+    return M
+
+
+_MU, _MV = _bernstein_matrix(NU), _bernstein_matrix(NV)
+
+
+def cell_groups(cells: Cells, regions) -> np.ndarray:
+    """The region (index into `regions`, (start, end) of x) each cell lies in."""
+    (al, bl), (ah, bh) = _bounds(cells)
+    xm = cells.xr + cells.wu * 0.5 * (al + ah + 0.5 * (bl + bh))
+    g = np.full(len(xm), -1)
+    for i, (a, b) in enumerate(regions):
+        g[(g < 0) & (xm >= a) & (xm <= b)] = i
+    return np.maximum(g, 0)
+
+
 def candidates(cells: Cells, F: np.ndarray, interior: bool = True,
-               lines_only: bool = False) -> Candidates:
-    """Every point where the quantity F can reach its largest or smallest value."""
+               lines_only: bool = False, groups: np.ndarray | None = None,
+               lines: bool = True) -> Candidates:
+    """Every point where the quantity F can reach its largest or smallest value over each
+    group of cells (a region of x), and under each wheel when `lines`.
+
+    Cells are pruned by bounds: the largest and smallest Bernstein coefficient of a cell's
+    polynomial on the unit square bound it there, so a cell whose bounds lie within the
+    best values already found in its group (its corners first, then its sides) cannot hold
+    that group's extreme and is not searched further (its wheel-line sides are when
+    `lines`: they carry the extremes under each wheel)."""
     n = len(cells.p0)
     (al, bl), (ah, bh) = _bounds(cells)
+    groups = np.zeros(n, int) if groups is None else groups
+    ng = int(groups.max()) + 1 if n else 1
     us, vs, cs, ws = [], [], [], []
     cidx = np.arange(n)
+    # corners
+    cu = np.concatenate([al, ah, al + bl, ah + bh])
+    cv = np.concatenate([np.zeros(n), np.zeros(n), np.ones(n), np.ones(n)])
+    cc = np.tile(cidx, 4)
+    cw = np.concatenate([np.where(cells.lo_fixed, -1, cells.lo_idx),
+                         np.where(cells.hi_fixed, -1, cells.hi_idx)] * 2)
+    us.append(cu)
+    vs.append(cv)
+    cs.append(cc)
+    ws.append(cw)
+    bern = _MU[None] @ F @ _MV.T[None]
+    bmax, bmin = bern.max(axis=(1, 2)), bern.min(axis=(1, 2))
+    best_hi = np.full(ng, -np.inf)
+    best_lo = np.full(ng, np.inf)
+
+    def update(c, u, v):
+        val = _eval2d(F[c], u, v)
+        np.maximum.at(best_hi, groups[c], val)
+        np.minimum.at(best_lo, groups[c], val)
+
+    def alive():
+        return (bmax > best_hi[groups]) | (bmin < best_lo[groups])
+
+    if not lines_only:
+        update(cc, cu, cv)
+    live = alive() if not lines_only else np.zeros(n, bool)
     # sides: x on a fixed break or under a wheel
     for alpha, beta, fixed, idx in ((al, bl, cells.lo_fixed, cells.lo_idx),
                                     (ah, bh, cells.hi_fixed, cells.hi_idx)):
         wheel = np.where(fixed, -1, idx)
-        if lines_only:
-            sel = ~fixed
-            if not sel.any():
-                continue
-        else:
-            sel = np.ones(n, bool)
+        sel = live | (~fixed if (lines or lines_only) else False)
+        if not sel.any():
+            continue
         g = _compose(F[sel], alpha[sel], beta[sel])
         rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, g.shape[1]), np.ones(sel.sum()))
         sub = cidx[sel]
-        vv = np.concatenate([np.zeros(sel.sum()), np.ones(sel.sum()), t])
-        cc = np.concatenate([sub, sub, sub[rows]])
-        us.append(alpha[cc] + beta[cc] * vv)
-        vs.append(vv)
-        cs.append(cc)
-        ws.append(wheel[cc])
+        c2 = sub[rows]
+        u2 = alpha[c2] + beta[c2] * t
+        us.append(u2)
+        vs.append(t)
+        cs.append(c2)
+        ws.append(wheel[c2])
+        if not lines_only and len(c2):
+            update(c2, u2, t)
     if not lines_only:
+        live = alive()
         # bottom and top: p at a break, x along the cell
         for v in (0.0, 1.0):
-            ulo, uhi = al + bl * v, ah + bh * v
-            g = F @ (v ** np.arange(NV))  # (n, NU): coefficients in u
+            if not live.any():
+                break
+            sub = cidx[live]
+            ulo, uhi = al[sub] + bl[sub] * v, ah[sub] + bh[sub] * v
+            g = F[sub] @ (v ** np.arange(NV))  # coefficients in u
             dg = g[:, 1:] * np.arange(1, NU)
             # shift to ulo and find roots inside (ulo, uhi)
             S = _shift_matrix(ulo, NU - 1)
-            dgs = np.einsum("ci,cil->cl", dg, S)
+            dgs = (dg[:, None, :] @ S)[:, 0]
             width = np.maximum(uhi - ulo, 0.0)
             rows, t = _roots_in_pieces(dgs, np.where(width > 0, width, 1e-300))
+            c2 = sub[rows]
             us.append(ulo[rows] + t)
             vs.append(np.full(len(rows), v))
-            cs.append(cidx[rows])
+            cs.append(c2)
             ws.append(np.full(len(rows), -1))
-        if interior:
-            iu, iv, ic = _interior(F, al, bl, ah, bh)
+            if len(c2):
+                update(c2, us[-1], vs[-1])
+        live = alive()
+        if interior and live.any():
+            sub = cidx[live]
+            iu, iv, ic = _interior(F[sub], al[sub], bl[sub], ah[sub], bh[sub])
             us.append(iu)
             vs.append(iv)
-            cs.append(ic)
+            cs.append(sub[ic])
             ws.append(np.full(len(ic), -1))
     u = np.concatenate(us)
     v = np.concatenate(vs)
@@ -504,9 +572,9 @@ def _interior(F, al, bl, ah, bh):
         sel = np.flatnonzero(ok & (du == a_deg) & (dv == b_deg))
         size = a_deg + b_deg
         # f_u and f_v at each node: coefficients in u
-        fu = np.einsum("cij,nj->cni", Fu[sel, : a_deg + 1, :], vnode[:, None] ** np.arange(NV))
-        fv = np.einsum("cij,nj->cni", Fv[sel, : b_deg + 1, :],
-                       vnode[:, None] ** np.arange(NV - 1))
+        fu = np.swapaxes(Fu[sel, : a_deg + 1, :] @ (vnode[:, None] ** np.arange(NV)).T, 1, 2)
+        fv = np.swapaxes(Fv[sel, : b_deg + 1, :] @ (vnode[:, None] ** np.arange(NV - 1)).T,
+                         1, 2)
         S = np.zeros((len(sel), _NR, size, size))
         for r in range(b_deg):  # b_deg rows of f_u (descending powers)
             S[:, :, r, r:r + a_deg + 1] = fu[:, :, ::-1]
@@ -529,10 +597,10 @@ def _interior(F, al, bl, ah, bh):
         cc = sel[rows]
         v = 0.5 * (rho + 1.0)
         # x from the x-derivative at that p
-        g = np.einsum("cij,cj->ci", Fu[cc], v[:, None] ** np.arange(NV))
+        g = (Fu[cc] @ (v[:, None] ** np.arange(NV))[:, :, None])[:, :, 0]
         ulo, uhi = al[cc] + bl[cc] * v, ah[cc] + bh[cc] * v
         S2 = _shift_matrix(ulo, NU - 1)
-        gs = np.einsum("ci,cil->cl", g, S2)
+        gs = (g[:, None, :] @ S2)[:, 0]
         width = np.maximum(uhi - ulo, 0.0)
         r2, t2 = _roots_in_pieces(gs, np.where(width > 0, width, 1e-300))
         uu, vv, c3 = ulo[r2] + t2, v[r2], cc[r2]
@@ -568,7 +636,7 @@ def reaction_candidates(inf: Influence, offsets, p_lo: float, p_hi: float, stati
         for i, P in enumerate(loads):
             c = inf.z[m[:, i], :, col]
             S = _shift_matrix(p0s + d[i] - b[m[:, i]], NV)
-            g += P * np.einsum("ci,cil->cl", c, S)
+            g += P * (c[:, None, :] @ S)[:, 0]
         g[:, 0] += static_r[j]
         rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, NV), np.where(wps > 0, wps, 1e-300))
         ps = np.concatenate([p0s, p0s + wps, p0s[rows] + t])
@@ -591,7 +659,8 @@ def envelope(beam: Beam, offsets, loads, travel: tuple[float, float], name: str,
     regions = regions or [(0.0, L)]
     xs = set(static.moment.breaks.tolist()) | {x for r in regions for x in r}
     cells = wheel_cells(inf, sorted(xs), offsets, travel[0], travel[1])
-    c = candidates(cells, cell_polys(inf, cells, name, static.function(name), loads))
+    c = candidates(cells, cell_polys(inf, cells, name, static.function(name), loads),
+                   groups=cell_groups(cells, regions), lines=False)
     tol = 1e-10 * L
     out = {}
     for a, b in regions:
