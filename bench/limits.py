@@ -25,8 +25,9 @@ from adversarial import CASES, hinged, springs, wheels  # noqa: E402
 INSIDE = {
     "100 springs (limit)": springs(100),
     "99 spans, 49 hinges": hinged(99),
-    "8 wheels on 2 supports": wheels(8),
-    "2 wheels, 2 springs (moving limit)": wheels(2, springs_n=2),
+    "16 wheels on 2 supports": wheels(16),
+    "8 wheels, 14 springs (moving limit)": wheels(8, springs_n=14),
+    "4 wheels, 26 springs (moving limit)": wheels(4, springs_n=26),
     "1000 loads (limit)": springs(0) + "".join(
         f'[[loads]]\ntype = "linear"\nstart = "{i / 10:.2f} ft"\nend = "{i / 10 + 0.07:.2f} ft"\n'
         'value = ["-1 lbf/ft", "-3 lbf/ft"]\n' for i in range(999)),
@@ -51,7 +52,7 @@ def main() -> None:
     print(f"{'job':40} {'command':14} {'wall s':>7} {'cpu s':>7} exit  (target < 2 s)")
     for group, jobs in (("inside", INSIDE), ("adversarial", CASES)):
         for name, text in jobs.items():
-            for argv in (["solve", "--json"], ["capacity"]):
+            for argv in (["solve", "--json"], ["capacity"], ["rating"]):
                 wall, cpu, rc = run(text, argv)
                 flag = "" if wall < 2 else "  OVER"
                 print(f"{group[:3]} {name[:36]:36} {' '.join(argv):14} {wall:7.2f} {cpu:7.2f} "

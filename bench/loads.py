@@ -94,6 +94,20 @@ def main(argv=None) -> int:
     row("analyze, monorail-trolley preset", ms(median(lambda: analyze(trolley), n)), "< 5 ms")
     row("capacity, monorail-trolley preset", ms(median(lambda: capacity(trolley), max(3, n // 4))),
         "< 20 ms")
+    from shopbeam.design.loading import moving_envelope, state_set
+
+    ss = state_set(trolley)
+    row("exact moving envelope alone, monorail-trolley",
+        ms(median(lambda: moving_envelope(trolley, ss, ss.static_loads(1.0, ()), 1.0), n)))
+    sys.path.insert(0, str(ROOT / "tests"))
+    from adversarial import wheels  # noqa: E402
+
+    for name, text in (("16 wheels on 2 supports", wheels(16)),
+                       ("8 wheels, 14 springs (moving limit)", wheels(8, springs_n=14)),
+                       ("4 wheels, 26 springs (moving limit)", wheels(4, springs_n=26))):
+        j = parse_job_text(text)
+        row(f"analyze, {name}", ms(median(lambda: analyze(j), max(2, n // 10))))
+        row(f"capacity, {name}", ms(median(lambda: capacity(j), max(2, n // 10))))
     typical = load_job(HERE / "jobs" / "typical.toml")
     m = max(3, n // 4)
     row("size --kind HSS, typical plain job", ms(median(lambda: size(typical, "HSS"), m)),

@@ -163,6 +163,9 @@ def test_moving_envelope_matches_a_fine_resolve(b, more, s):
     lo, hi = mv.p_range
     for c in ev.checks:
         p0 = ev.worst[c.name]["position"]
+        if p0 is None:  # local checks at the supports: each reaction at its exact extremes
+            assert "reaction envelope" in ev.worst[c.name]["words"]
+            continue
         best = 0.0
         for p in np.clip(np.linspace(p0 - 0.01, p0 + 0.01, 81), lo, hi):
             wheels = tuple(Load("point", at=p + o, value=d + (1 + impact_of(job)) * f,

@@ -39,7 +39,8 @@ from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
 from shopbeam.engine.influence import (candidates, cell_groups, cell_polys, influence,
-                                       reaction_candidates, wheel_cells)
+                                       reaction_candidates, reaction_extremes, reaction_polys,
+                                       wheel_cells)
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
@@ -641,7 +642,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
         if ss.parts.moving:
             mv = ss.parts.moving[0]
             static = ss.static_loads(k, pattern)
-            env = moving_envelope(job, ss, static, k, st)
+            env = moving_envelope(job, ss, static, k, st, pattern=tuple(pattern))
             envs.append((pattern, env))
             for p, sol in moving_states(job, ss, static, k, st, positions=env.positions):
                 count += 1
@@ -652,6 +653,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
                     _keep(best, c, pattern, p, full, sol)
                 _keep_reactions(reactions, sol, full)
             _exact_reactions(reactions, env, words, mv, job, fmt)
+            _support_local_checks(job, best, sol, env, pattern, words)
         else:
             sol = ss.state(k, pattern)
             count += 1
@@ -679,6 +681,28 @@ def wheel_loads(mv: MovingLoad, p: float, kk: float) -> list[tuple[float, float]
     """Where each wheel stands and what it carries (N, + up; live x kk plus dead) with the
     first wheel at p: the governing wheel positions as plain data (`Evaluation.worst`)."""
     return [(float(p + s), float(d + kk * f)) for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
+
+
+def _support_local_checks(job, best, sol: Solution, env: "MovingEnvelope", pattern,
+                          words: str) -> None:
+    """The local checks at the supports (J10 at a bearing) with every support at its largest
+    upward and then its largest downward reaction over the whole travel (exact, from the
+    envelope), as for patterned loads: a local check reads only the forces, so two states
+    cover every trolley position without solving one per support."""
+    from shopbeam.design import local as _local
+
+    sec = job.section
+    if not _local.applies(sec):
+        return
+    for i, which in ((0, "upward"), (2, "downward")):
+        fake = replace(sol, beam=replace(sol.beam, loads=tuple(
+            ld for ld in sol.beam.loads if not (ld.key or "").startswith("moving"))),
+            reactions=tuple(replace(r, force=e[i]) for r, e in zip(sol.reactions,
+                                                                   env.reactions)))
+        text = "; ".join(x for x in (words, f"each support at its largest {which} reaction "
+                                     "over the travel (see the reaction envelope)") if x)
+        for c in _local.local_checks(job, fake, sec):
+            _keep(best, c, pattern, None, text, sol)
 
 
 def _exact_reactions(out: list[dict], env: "MovingEnvelope", words: str, mv, job, fmt) -> None:
@@ -738,7 +762,8 @@ def wheel_forces(mv: MovingLoad, kk: float) -> np.ndarray:
     return np.array([d + kk * f for f, d in zip(mv.live, mv.dead)])
 
 
-def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> MovingEnvelope:
+def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
+                    pattern: tuple | None = None) -> MovingEnvelope:
     """Exact extremes of shear, moment (each unbraced length, and under each wheel),
     deflection (each span) and every reaction over the whole travel of the wheel set, on top
     of the static loads, from the beam's influence lines (engine/influence.py): every
@@ -753,14 +778,26 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
     tol = 1e-10 * L
     p_lo, p_hi = mv.p_range
     st = st or strengths_of(job, beam=ss.beam)
-    static = solve(replace(ss.beam, loads=tuple(static_loads)))
     inf = beam_influence(ss)
     P = wheel_forces(mv, kk)
     ltb = [(float(s[0]), float(s[1])) for s in st.ltb_segments]
     spans = [(float(a), float(b)) for a, b, _ in ss.segs]
-    xs = set(static.moment.breaks.tolist()) | {x for r in ltb + spans for x in r}
-    xs |= {x for x in brace_points(job)[1] if 0 <= x <= L}
-    cells = wheel_cells(inf, sorted(xs), mv.offsets, p_lo, p_hi)
+    # every state at every factor k is fixed + kk live (the state set's unit solutions, which
+    # share their breaks), so the cells and each combination's two parts are found once
+    # per pattern and re-weighted for each k (capacity calls this ten times or so)
+    cache = ss.__dict__.setdefault("_moving", {}) if pattern is not None else {}
+    if pattern is not None:
+        live_sol = combine([(1.0, ss.live)] + [(1.0, ss.spans[i]) for i in pattern],
+                           ss.beam)
+        static = combine([(1.0, ss.fixed), (kk, live_sol)], ss.beam)
+    else:
+        static = solve(replace(ss.beam, loads=tuple(static_loads)))
+    if (pattern, "cells", id(st)) not in cache:
+        xs = set(static.moment.breaks.tolist()) | {x for r in ltb + spans for x in r}
+        xs |= {x for x in brace_points(job)[1] if 0 <= x <= L}
+        cache[pattern, "cells", id(st)] = (wheel_cells(inf, sorted(xs), mv.offsets, p_lo, p_hi),
+                                           sorted(xs))
+    cells, xs = cache[pattern, "cells", id(st)]
     ext: dict = {}
     pos = {p_lo, p_hi}
     regions = {"shear": [(0.0, L)], "moment": ltb, "deflection": spans}
@@ -771,7 +808,6 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
         for how, pick in (("max", np.argmax), ("min", np.argmin)):
             i = int(pick(np.where(m, c.value, -np.inf if how == "max" else np.inf)))
             ext[key + (how,)] = (float(c.value[i]), float(c.x[i]), float(c.p[i]))
-            pos.add(float(c.p[i]))
 
     polys = {}
     sec = getattr(st, "section", None) or job.section
@@ -779,7 +815,14 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
     under = lifting and sec.shape == "i-beam" and sec.axis == "strong"  # wheel flange check
     groups = {name: cell_groups(cells, regions[name]) for name in regions}
     for tag, name, spw, loads in _combinations(job, ss, static, static_loads, st, mv, kk, P):
-        F = cell_polys(inf, cells, name, spw, loads)
+        if pattern is None:
+            F = cell_polys(inf, cells, name, spw, loads)
+        else:
+            key = (pattern, tag, name, id(st))
+            if key not in cache:
+                cache[key] = _parts(inf, cells, ss, live_sol, mv, tag, name)
+            fd, fl_ = cache[key]
+            F = fd + kk * fl_
         polys[tag, name] = F
         lines = under and name == "moment" and tag == "total"
         c = candidates(cells, F, groups=groups[name], lines=lines)
@@ -797,12 +840,22 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
             c = candidates(cells, polys["total", "moment"] + s * ratio * Fy, lines_only=True)
             for i in range(len(P)):
                 keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
-    reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,
-                                          [r.force for r in static.reactions], P))
-    from shopbeam.design import local as _local
-
-    if (_local.applies(sec) and getattr(job.material, "kind", "") in ("steel", "stainless")) \
-            or getattr(st.flexure, "wood", None) is not None:  # checks that read reactions
+    _governing_positions(job, ss, st, ext, pos)
+    if pattern is None:
+        reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,
+                                              [r.force for r in static.reactions], P))
+    else:
+        key = (pattern, "reactions")
+        if key not in cache:
+            cache[key] = (reaction_polys(inf, mv.offsets, p_lo, p_hi,
+                                         [r.force for r in ss.fixed.reactions], mv.dead),
+                          reaction_polys(inf, mv.offsets, p_lo, p_hi,
+                                         [r.force for r in live_sol.reactions], mv.live))
+        (p0s, wps, gd), (_, _, gl) = cache[key]
+        reactions = tuple(reaction_extremes(p0s, wps, gd + kk * gl))
+    # the local checks at the supports read each reaction's extremes directly (evaluate);
+    # wood bearing checks are run on the solved states, so their positions are solved
+    if getattr(st.flexure, "wood", None) is not None:
         for r in reactions:
             pos.update((r[1], r[3]))
     for ld in static_loads:
@@ -823,6 +876,67 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None) -> Movin
         if not out or p - out[-1] > tol:
             out.append(p)
     return MovingEnvelope(tuple(out), ext, reactions)
+
+
+def _governing_positions(job, ss, st, ext: dict, pos: set) -> None:
+    """The positions to solve and check: for each check the position of its largest ratio.
+
+    Under moving loads Cb is 1.0, so each unbraced length's allowable moment and each span's
+    deflection limit do not depend on the loads: the bending check is worst where the largest
+    |M| / allowable over the lengths is, the deflection check where the largest |u| / limit
+    over the spans is, the shear check where the largest |V| is. Checks that read more than
+    one extreme (tees and angles, wood creep and dead-load checks, the live-load deflection
+    rule, the wheel flange check under each wheel) get every extreme's position."""
+    from shopbeam.design.checks import nominal_moment
+
+    fl = st.flexure
+    plain = not getattr(fl, "special", False) and fl.wood is None
+
+    def best_of(tag, name, weights):
+        top = None
+        for region, w in weights.items():
+            for how in ("max", "min"):
+                e = ext.get((tag, name, region, how))
+                if e is not None and (top is None or abs(e[0]) * w > top[0]):
+                    top = (abs(e[0]) * w, e[2])
+        if top is not None:
+            pos.add(top[1])
+
+    if plain:
+        weights = {}
+        for a, b, free, l1, why in st.ltb_segments:
+            if l1 < fl.cap and not fl.uses_cb:
+                mn = l1
+            elif l1 < fl.cap:
+                mn = float(nominal_moment(fl.cap, l1, 1.0))
+            else:
+                mn = fl.cap
+            weights[(float(a), float(b))] = fl.omega / mn if mn > 0 else math.inf
+        best_of("total", "moment", weights)
+        best_of("total", "shear", {(0.0, float(job.length)): 1.0})
+        best_of("total", "deflection", {
+            (float(a), float(b)): (1.0 / lim if lim > 0 else math.inf)
+            for (a, b, _), (_, lim, _) in zip(ss.segs, deflection_spans(job, ss, st))})
+    for key, e in ext.items():
+        if not plain or key[0] in ("live", "dead") or key[2][0] == "wheel" and key[0] == "total":
+            pos.add(e[2])
+    lat = [(abs(e[0]), e[2]) for key, e in ext.items() if key[0] == "lateral"]
+    if lat:
+        pos.add(max(lat)[1])
+
+
+def _parts(inf, cells, ss: StateSet, live_sol: Solution, mv, tag: str, name: str):
+    """The fixed part and the part per unit kk of one combination's cell polynomials."""
+    zero = np.zeros(len(mv.live))
+    dead, live = np.array(mv.dead, float), np.array(mv.live, float)
+    if tag == "total":
+        return (cell_polys(inf, cells, name, ss.fixed.function(name), dead),
+                cell_polys(inf, cells, name, live_sol.function(name), live))
+    if tag == "live":
+        return (cell_polys(inf, cells, name, None, zero),
+                cell_polys(inf, cells, name, live_sol.function(name), live))
+    return (cell_polys(inf, cells, name, ss.fixed.function(name), dead),
+            cell_polys(inf, cells, name, None, zero))
 
 
 def _combinations(job, ss, static, static_loads, st, mv, kk, P):

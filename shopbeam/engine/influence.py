@@ -617,9 +617,9 @@ def _interior(F, al, bl, ah, bh):
 
 
 # ------------------------------------------------------------------ reactions
-def reaction_candidates(inf: Influence, offsets, p_lo: float, p_hi: float, static_r,
-                        loads) -> list[tuple[float, float, float, float]]:
-    """Per reaction (solution order): (largest, its p, smallest, its p) over the travel."""
+def reaction_polys(inf: Influence, offsets, p_lo: float, p_hi: float, static_r, loads):
+    """Every reaction (solution order) as a cubic in p on each p-range where no wheel crosses
+    a break of the bare beam: (starts, widths, coefficients (reactions, ranges, 4))."""
     L = inf.beam.length
     tol = 1e-11 * L
     d = np.asarray(offsets, float)
@@ -630,20 +630,40 @@ def reaction_candidates(inf: Influence, offsets, p_lo: float, p_hi: float, stati
     wps = np.diff(pb) if len(pb) > 1 else np.zeros(1)
     pm = p0s + 0.5 * wps
     m = np.clip(np.searchsorted(b, pm[:, None] + d[None, :], "right") - 1, 0, len(b) - 2)
+    cols = np.array(inf.reaction_cols, int)
+    G = np.zeros((len(cols), len(p0s), NV))
+    for i, P in enumerate(loads):
+        if P == 0:
+            continue
+        c = inf.z[m[:, i]][:, :, cols]  # (ranges, NV, reactions)
+        S = _shift_matrix(p0s + d[i] - b[m[:, i]], NV)
+        G += P * np.transpose(np.swapaxes(S, 1, 2) @ c, (2, 0, 1))
+    G[:, :, 0] += np.asarray(static_r, float)[:, None]
+    return p0s, wps, G
+
+
+def reaction_extremes(p0s, wps, G) -> list[tuple[float, float, float, float]]:
+    """Per reaction: (largest, its p, smallest, its p) from `reaction_polys`."""
+    nr, npc, _ = G.shape
+    flat = G.reshape(nr * npc, NV)
+    w = np.tile(wps, nr)
+    p0 = np.tile(p0s, nr)
+    rows, t = _roots_in_pieces(flat[:, 1:] * np.arange(1, NV), np.where(w > 0, w, 1e-300))
+    own = np.concatenate([np.repeat(np.arange(nr), npc)] * 2 + [rows // npc])
+    ps = np.concatenate([p0, p0 + w, p0[rows] + t])
+    vals = np.concatenate([flat[:, 0], _horner(flat, w), _horner(flat[rows], t)])
     out = []
-    for j, col in enumerate(inf.reaction_cols):
-        g = np.zeros((len(p0s), NV))
-        for i, P in enumerate(loads):
-            c = inf.z[m[:, i], :, col]
-            S = _shift_matrix(p0s + d[i] - b[m[:, i]], NV)
-            g += P * (c[:, None, :] @ S)[:, 0]
-        g[:, 0] += static_r[j]
-        rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, NV), np.where(wps > 0, wps, 1e-300))
-        ps = np.concatenate([p0s, p0s + wps, p0s[rows] + t])
-        vals = np.concatenate([g[:, 0], _horner(g, wps), _horner(g[rows], t)])
-        i1, i2 = int(np.argmax(vals)), int(np.argmin(vals))
+    for j in range(nr):
+        sel = np.flatnonzero(own == j)
+        i1, i2 = sel[int(np.argmax(vals[sel]))], sel[int(np.argmin(vals[sel]))]
         out.append((float(vals[i1]), float(ps[i1]), float(vals[i2]), float(ps[i2])))
     return out
+
+
+def reaction_candidates(inf: Influence, offsets, p_lo: float, p_hi: float, static_r,
+                        loads) -> list[tuple[float, float, float, float]]:
+    """Per reaction (solution order): (largest, its p, smallest, its p) over the travel."""
+    return reaction_extremes(*reaction_polys(inf, offsets, p_lo, p_hi, static_r, loads))
 
 
 def envelope(beam: Beam, offsets, loads, travel: tuple[float, float], name: str,

@@ -4,7 +4,7 @@ Two gates. `prescan` looks at the raw text before the TOML parser sees it: the n
 (dotted keys, table headers, nested arrays and inline tables) and the number of keys, so a
 file of deeply dotted keys is refused in milliseconds instead of tying up the parser. The
 counts of what the solve will do (supports, springs, hinges, loads, wheels, and the moving-
-load search, whose work grows as wheels x fixed positions x (wheels + fixed positions)) are
+load search, whose cells number wheels x fixed positions x (wheels + fixed positions)) are
 checked by the job reader with `cost_problems`. The limits are set so that any job inside
 them answers in under 2 s as a whole process on the development machine (bench/: the worst
 cases inside the limits); anything outside is refused at once, naming the limit, the file,
@@ -17,11 +17,15 @@ import re
 
 MAX_DEPTH = 6  # beam.section.x is 3; nothing in a job file needs more
 MAX_KEYS = 50_000  # a job at its 1,000-load limit has about 5,000; the parser takes 50,000 fast
-MAX_WHEELS = 8
+MAX_WHEELS = 16
 MAX_SPRINGS = 100
 MAX_HINGES = 100
-MOVING_WORK = 100
-MAX_WHEEL_FORCE = 1e9  # N, as for a point load (jobfile.LOAD_LIMITS)  # wheels x fixed positions x (wheels + fixed positions)
+# wheels x fixed positions x (wheels + fixed positions): the number of (x, trolley position)
+# cells the exact moving-load envelope searches (design/loading.moving_envelope); 4,000 keeps
+# `capacity` and `rating` (about ten envelopes each) under 1.7 s of CPU on the development
+# machine (bench/README.md)
+MOVING_WORK = 4000
+MAX_WHEEL_FORCE = 1e9  # N, as for a point load (jobfile.LOAD_LIMITS)
 
 _STRINGS = re.compile(r'"""[\s\S]*?"""|\'\'\'[\s\S]*?\'\'\'|"(?:[^"\\\n]|\\.)*"|\'[^\'\n]*\'')
 _COMMENT = re.compile(r"#[^\n]*")
