@@ -836,8 +836,10 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         lat_loads, ratio = lat
         inf_f = influence(replace(ss.beam, ei=1.0))  # the flange-as-beam of the check
         Fy = cell_polys(inf_f, cells, "moment", None, lat_loads)
-        for s in (1.0, -1.0):
-            c = candidates(cells, polys["total", "moment"] + s * ratio * Fy, lines_only=True)
+        for s in (1.0, -1.0):  # the check takes the sum at the wheels, the supports and
+            # where either moment peaks: the whole beam and the line under each wheel
+            c = candidates(cells, polys["total", "moment"] + s * ratio * Fy, lines=True)
+            keep(("lateral", s, (0.0, L)), c, np.ones(len(c.x), bool))
             for i in range(len(P)):
                 keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
     _governing_positions(job, ss, st, ext, pos)
@@ -920,9 +922,7 @@ def _governing_positions(job, ss, st, ext: dict, pos: set) -> None:
     for key, e in ext.items():
         if not plain or key[0] in ("live", "dead") or key[2][0] == "wheel" and key[0] == "total":
             pos.add(e[2])
-    lat = [(abs(e[0]), e[2]) for key, e in ext.items() if key[0] == "lateral"]
-    if lat:
-        pos.add(max(lat)[1])
+    pos.update(e[2] for key, e in ext.items() if key[0] == "lateral")
 
 
 def _parts(inf, cells, ss: StateSet, live_sol: Solution, mv, tag: str, name: str):
