@@ -94,16 +94,66 @@ def test_slenderness_limits_of_6061_t6():
     assert lim["curved"] == pytest.approx(33.0, abs=0.2)
 
 
-def test_thin_tube_lists_local_buckling_as_not_checked():
+def test_thin_tube_flange_local_buckling_is_checked():
+    # ADM 2015 B.5.4.2 with Table B.4.2 constants (from memory), 6061-T6 Fcy 35 ksi,
+    # E 10,100 ksi: Bp 45.04, Dp 0.3008, lambda1 20.9, lambda2 = 0.35 Bp / (1.6 Dp) = 32.8.
+    # 4 x 4 x 0.083 tube, outside corner radius 2t: flat width b = 4 - 4 x 0.083 = 3.668 in,
+    # b/t = 44.2 > lambda2: Fc = k2 sqrt(Bp E) / (1.6 b/t) = 2.27 x 674.5 / 70.7 = 21.65 ksi.
+    # The web in flexure (B.5.5.1, Bbr 66.76, Dbr 0.6648, m 0.65): lambda1 33.0 < 44.2 <
+    # lambda2 77.3, Fb = Bbr - m Dbr b/t = 47.7 ksi: the flange is the limiting element
+    # (ADM 2015 F.8, from memory): Mnlb = Fc Sc over Omega 1.65
     thin = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.083 in" }'
     res = analyze(job(section=thin))
-    names = [u.name for u in res.unchecked]
-    assert "element local buckling" in names and "web shear buckling" in names
-    assert all(u.blocks_rating for u in res.unchecked)
-    assert any("NOT CHECKED" in c for c in res.cautions)
-    # a stocky tube (b/t = (4 - 3 x 0.25) / 0.25 = 13 < 20.9) reaches yield first
+    assert [u.name for u in res.unchecked] == []
+    b = check(res, "bending")
+    sx = res.job.section.sx_top
+    assert b.limit == pytest.approx(21.65 * KSI * sx / 1.65, rel=2e-3)
+    assert "B.5.4.2" in b.formula and "limiting element" in b.formula
+    # web shear buckling, ADM 2015 G.2 (Table B.4.2 shear constants, from memory):
+    # Fsy 21 ksi, Bs 27.23, Ds 0.1414, lambda1 35.2 < h/t 44.2 < lambda2 63.2:
+    # Fs = Bs - 1.25 Ds h/t = 19.42 ksi, below 0.6 Fty = 21 ksi
+    v = check(res, "shear")
+    assert v.limit == pytest.approx(19.42 * KSI * res.job.section.shear_area / 1.65, rel=2e-3)
+    assert "G.2" in v.formula
+    # a stocky tube (flat b/t = (4 - 4 x 0.25) / 0.25 = 12 < 20.9) reaches yield first
     stocky = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.25 in" }'
-    assert analyze(job(section=stocky)).unchecked == ()
+    res = analyze(job(section=stocky))
+    assert res.unchecked == ()
+    assert "rupture" in check(res, "bending").formula
+    assert "0.6 Fty Av" in check(res, "shear").formula
+
+
+def test_i_beam_flange_outstand_between_the_limits():
+    # ADM 2015 B.5.4.1 (from memory): 6061-T6 outstand lambda1 = (Bp - Fcy)/(5 Dp) = 6.68,
+    # lambda2 = 0.35 Bp / (5 Dp) = 10.48. 6 x 4 in I-beam, tf 0.21, tw 0.19 in: outstand
+    # (4 - 0.19)/2 / 0.21 = 9.07: Fc = Bp - 5 Dp b/t = 45.04 - 1.504 x 9.07 = 31.40 ksi.
+    # Web (6 - 0.42)/0.19 = 29.4 < lambda1 33.0 in flexure: compact.
+    # Sx by hand: Ix = 4 x 6^3/12 - 3.81 x 5.58^3/12 = 16.84 in^4, Sx = 5.612 in^3;
+    # Mnlb / 1.65 = 31.40 x 5.612 / 1.65 = 106.8 kip*in, under rupture Z Ftu / 1.95 = 123.6
+    ib = '{ shape = "i-beam", depth = "6 in", flange_width = "4 in", flange_thickness = "0.21 in", web_thickness = "0.19 in" }'
+    res = analyze(job(section=ib, beam="braced = true", length="8 ft"))
+    b = check(res, "bending")
+    assert b.limit == pytest.approx(106.8e3 * LBF * IN, rel=3e-3)
+    assert "flange outstand b/t 9.07" in b.formula
+    assert res.unchecked == ()
+
+
+def test_channel_slender_outstand_and_welded_channel():
+    # ADM 2015 B.5.4.1 (from memory): channel 6 x 2.5, tf 0.2, tw 0.17 in, outstand
+    # (2.5 - 0.17)/0.2 = 11.65 > lambda2 10.48: Fc = 2.27 sqrt(45.04 x 10100) / (5 x 11.65)
+    # = 26.29 ksi; Ix = 2.5 x 6^3/12 - 2.33 x 5.6^3/12 = 10.90 in^4, Sx 3.634 in^3:
+    # Mnlb / 1.65 = 57.9 kip*in
+    ch = '{ shape = "channel", depth = "6 in", flange_width = "2.5 in", flange_thickness = "0.2 in", web_thickness = "0.17 in" }'
+    plain = check(analyze(job(section=ch, beam="braced = true", length="8 ft")), "bending")
+    assert plain.limit == pytest.approx(57.9e3 * LBF * IN, rel=3e-3)
+    # welded (ADM 2015 Table A.3.4, Ftyw 15 ksi): Table B.4.1 constants with 15 ksi (from
+    # memory): Bp = 15 (1 + 15^(1/3)/7.6) = 19.87, Dp = Bp/20 sqrt(6 Bp / E) = 0.1079,
+    # lambda1 = 4.87 / (5 x 0.1079) = 9.02 < 11.65 < lambda2 = 0.5 x 19.87 / 0.5396 = 18.4:
+    # Fc = 19.87 - 0.5396 x 11.65 = 13.58 ksi (below Ftyw 15): 13.58 x 3.634 / 1.65 = 29.9
+    welded = check(analyze(job(section=ch, beam="braced = true", length="8 ft",
+                               welded="true")), "bending")
+    assert welded.limit == pytest.approx(29.9e3 * LBF * IN, rel=5e-3)
+    assert welded.limit < plain.limit
 
 
 def test_unbraced_open_shape_lists_lateral_torsional_buckling(tmp_path):

@@ -457,6 +457,34 @@ OMEGA_ADM_RUPTURE = 1.95  # Aluminum Design Manual 2015, rupture (from memory)
 def _adm_flexure(sec, mat, s, z, welded) -> Flexure:
     """ADM 2015 F.1 (from memory): the lesser of yielding Mnp = Z Fy <= 1.5 S Fy over
     Omega 1.65 and rupture Mnu = Z Fu / kt over Omega 1.95 (kt 1.0 for 6xxx alloys, ADM
+    Table A.3.3), with the welded (heat-affected zone) strengths when the member is welded;
+    then local buckling of the flat elements (shopbeam.design.aluminum, ADM 2015 B.5, F.8)
+    over Omega 1.65 where an element is more slender than lambda1."""
+    fl = _adm_yield_rupture(sec, mat, s, z, welded)
+    from shopbeam.design import aluminum
+
+    w = bool(welded and mat.fy_welded)
+    elems = aluminum.flat_elements(sec, mat.fy, mat.e, mat.fy_welded if w else None)
+    slender = [el for el in elems if el.slender]
+    if not slender:
+        if elems:
+            fl = replace(fl, cap_text=fl.cap_text + "; elements compact (" + ", ".join(
+                f"{el.name} b/t {el.bt:.3g} <= lambda1 {el.lambda1:.3g}" for el in elems)
+                + ", ADM 2015 B.5): they reach yield first")
+        return fl
+    lim = min(slender, key=lambda el: el.stress)
+    mnlb = lim.stress * s
+    text = (f"ADM 2015 F.8 local buckling, limiting element (from memory): Mnlb = F Sc, "
+            f"{lim.words()}, Omega 1.65")
+    if mnlb / OMEGA_ADM < fl.cap / fl.omega:
+        return Flexure(mnlb, OMEGA_ADM, f"{text} (governs over {fl.cap_text})",
+                       warnings=fl.warnings)
+    return replace(fl, cap_text=f"{fl.cap_text}; {text} does not govern")
+
+
+def _adm_yield_rupture(sec, mat, s, z, welded) -> Flexure:
+    """ADM 2015 F.1 (from memory): the lesser of yielding Mnp = Z Fy <= 1.5 S Fy over
+    Omega 1.65 and rupture Mnu = Z Fu / kt over Omega 1.95 (kt 1.0 for 6xxx alloys, ADM
     Table A.3.3), with the welded (heat-affected zone) strengths when the member is welded."""
     w = bool(welded and mat.fy_welded)
     fy = mat.fy_welded if w else mat.fy
@@ -508,7 +536,11 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
     lim = adm_limits(fcy, mat.e)
     d, shape = sec.dims, sec.shape
     elems = []  # (name, ratio, limit key, is web)
-    if shape == "rect-tube" and "t_des" in d:
+    from shopbeam.design import aluminum
+
+    if aluminum.flat_elements(sec, mat.fy, mat.e):
+        pass  # flat elements of tubes, I-beams and channels: checked (ADM B.5, F.8, G.2)
+    elif shape == "rect-tube" and "t_des" in d:
         elems += [("flange b/t", d["b_flat"] / d["t_des"], "both", False),
                   ("web h/t", d["h_flat"] / d["t_des"], "both", True)]
     elif shape in ("round-tube", "pipe") and "t_des" in d:
@@ -692,9 +724,23 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     fy, e = _fy_e(mat, basis, welded)
     if basis == "aluminum":
         w = "Ftyw (welded)" if (welded and mat.fy_welded) else "Fty"
-        return ShearStrength(0.6 * fy * av, OMEGA_ADM, f"ADM 2015 G: Vn = Fsy Av = 0.6 {w} Av, "
-                             f"0.6 {w.split()[0]} = {0.6 * fy / (PSI_PA * 1000):.3g} ksi, Omega "
-                             "1.65", av)
+        text = (f"ADM 2015 G: Vn = Fsy Av = 0.6 {w} Av, 0.6 {w.split()[0]} = "
+                f"{0.6 * fy / (PSI_PA * 1000):.3g} ksi, Omega 1.65")
+        from shopbeam.design import aluminum
+
+        ht = aluminum.web_ratio(sec)
+        if ht is not None:
+            fs, l1, _, words = aluminum.shear_buckling(ht, 0.6 * mat.fy, e)
+            if welded and mat.fy_welded:
+                fs = min(fs, 0.6 * fy)
+                fw, l1w, _, ww = aluminum.shear_buckling(ht, 0.6 * fy, e, aged=False)
+                if fw < fs:
+                    fs, words = fw, ww + " (Table B.4.1 constants with the welded Fsy)"
+            if fs < 0.6 * fy:
+                return ShearStrength(fs * av, OMEGA_ADM, f"ADM 2015 G.2 web shear buckling: Vn = "
+                                     f"Fs Av, {words}, Omega 1.65 (below {text})", av)
+            text += f"; web h/t {ht:.3g} reaches shear yield (ADM 2015 G.2)"
+        return ShearStrength(0.6 * fy * av, OMEGA_ADM, text, av)
     d, shape, axis = sec.dims, sec.shape, sec.axis
     if shape in ("i-beam", "channel") and axis == "strong":
         h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
