@@ -47,6 +47,10 @@ from dataclasses import dataclass
 KSI = 6.894757293168361e6  # Pa
 
 
+def _stress(pa: float, system: str) -> str:
+    return f"{pa / 1e6:.3g} MPa" if system == "si" else f"{pa / KSI:.3g} ksi"
+
+
 @dataclass(frozen=True)
 class Constants:
     bp: float
@@ -112,12 +116,12 @@ class Element:
     def slender(self) -> bool:
         return self.bt > self.lambda1
 
-    def words(self) -> str:
+    def words(self, system: str = "us") -> str:
         what = {"one": "supported on one edge, uniform compression",
                 "both": "supported on both edges, uniform compression",
                 "flexure": "supported on both edges, in flexure"}[self.kind]
         return (f"{self.name} b/t {self.bt:.3g} ({what}; lambda1 {self.lambda1:.3g}, lambda2 "
-                f"{self.lambda2:.3g}): F = {self.stress / KSI:.3g} ksi ({self.clause})")
+                f"{self.lambda2:.3g}): F = {_stress(self.stress, system)} ({self.clause})")
 
 
 def _element(name, bt, kind, fcy, e, welded_fcy=None) -> Element:
@@ -176,7 +180,7 @@ def web_ratio(sec) -> float | None:
     return None
 
 
-def shear_buckling(ht: float, fsy: float, e: float, aged: bool = True
+def shear_buckling(ht: float, fsy: float, e: float, aged: bool = True, system: str = "us"
                    ) -> tuple[float, float, float, str]:
     """(Fs Pa, lambda1, lambda2, words) of an unstiffened web in shear, ADM 2015 G.2 with the
     shear buckling constants of Table B.4.2 (aged) or B.4.1."""
@@ -197,4 +201,5 @@ def shear_buckling(ht: float, fsy: float, e: float, aged: bool = True
     else:
         fs, how = min(f, math.pi ** 2 * ek / (1.25 * ht) ** 2), "Fs = pi^2 E / (1.25 h/t)^2"
     return fs * KSI, l1, l2, (f"web h/t {ht:.3g}, lambda1 {l1:.3g}, lambda2 {l2:.3g}: {how} = "
-                              f"{fs:.3g} ksi (ADM 2015 G.2, Bs {bs:.3g}, Ds {ds:.3g} ksi)")
+                              f"{_stress(fs * KSI, system)} (ADM 2015 G.2, constants in ksi: "
+                              f"Bs {bs:.3g}, Ds {ds:.3g})")

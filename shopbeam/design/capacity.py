@@ -22,7 +22,8 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.cautions import banner, cautions_for
-from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
+from shopbeam.design.checks import (BASIS_WORDS, Check, aluminum_unchecked, basis_of,
+                                   governing, strengths)
 from shopbeam.design.loading import Evaluation, evaluate, state_set
 from shopbeam.design.analysis import analyze
 from shopbeam.design.analysis import to_json as base_json
@@ -125,6 +126,7 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     from shopbeam.design.open_shapes import open_unchecked
 
     every = list(st.unchecked) + local_unchecked(job, st.section) + open_unchecked(job, st)
+    every += aluminum_unchecked(job, st.section)
     out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in every if u.blocks_rating]
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:

@@ -49,6 +49,14 @@ PSI_PA = 6894.757293168361
 CB_MAX = 3.0  # AISC 360-16 F1: Cb need not exceed 3.0 (upper bound used here)
 
 
+def stress_words(pa: float, system: str = "us", ksi: bool = False) -> str:
+    """A stress in a provision's words in the job's units: wood in psi (aluminium in ksi) on a
+    US job, MPa on a metric one."""
+    if system == "si":
+        return f"{pa / 1e6:.3g} MPa"
+    return f"{pa / (PSI_PA * 1000):.3g} ksi" if ksi else f"{pa / PSI_PA:,.0f} psi"
+
+
 
 @dataclass(frozen=True)
 class Check:
@@ -240,8 +248,8 @@ class Flexure:
             return cl * fb_star * s, (
                 f"CL {cl:.3f} by NDS 3.3.3: lu {ln(lb)}, {le_words} = "
                 f"{ln(le)}, RB = sqrt(le d / b^2) = {rb:.3g}, FbE = 1.20 Emin'/RB^2 "
-                f"= {fbe / PSI_PA:,.0f} psi, Fb* {fb_star / PSI_PA:,.0f} psi: Fb' = Fb* CL = "
-                f"{cl * fb_star / PSI_PA:,.0f} psi{over}")
+                f"= {stress_words(fbe, system)}, Fb* {stress_words(fb_star, system)}: Fb' = "
+                f"Fb* CL = {stress_words(cl * fb_star, system)}{over}")
         if kind == "F2":
             mp, sx, e, fy, rts, jc, ho, lp, lr = p
             if lb <= lp:
@@ -320,7 +328,7 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     shopbeam.design.lumber.Service)."""
     s = min(sec.sx_top, sec.sx_bot)
     if basis == "lumber":
-        return _lumber_flexure(sec, mat, s, service)
+        return _lumber_flexure(sec, mat, s, service, system)
     if basis == "first-yield":
         unc = ()
         steel = getattr(mat, "kind", "") in ("steel", "stainless")
@@ -341,7 +349,7 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     fy, e = _fy_e(mat, basis, welded)
     z = sec.zx
     if basis == "aluminum":
-        return _adm_flexure(sec, mat, s, z, welded)
+        return _adm_flexure(sec, mat, s, z, welded, system)
     d = sec.dims
     shape, axis = sec.shape, sec.axis
     if shape in ("i-beam", "channel") and axis == "strong" and z:
@@ -454,13 +462,13 @@ def _f2_f3(sec, fy, e) -> Flexure:
 OMEGA_ADM_RUPTURE = 1.95  # Aluminum Design Manual 2015, rupture (from memory)
 
 
-def _adm_flexure(sec, mat, s, z, welded) -> Flexure:
+def _adm_flexure(sec, mat, s, z, welded, system: str = "us") -> Flexure:
     """ADM 2015 F.1 (from memory): the lesser of yielding Mnp = Z Fy <= 1.5 S Fy over
     Omega 1.65 and rupture Mnu = Z Fu / kt over Omega 1.95 (kt 1.0 for 6xxx alloys, ADM
     Table A.3.3), with the welded (heat-affected zone) strengths when the member is welded;
     then local buckling of the flat elements (shopbeam.design.aluminum, ADM 2015 B.5, F.8)
     over Omega 1.65 where an element is more slender than lambda1."""
-    fl = _adm_yield_rupture(sec, mat, s, z, welded)
+    fl = _adm_yield_rupture(sec, mat, s, z, welded, system)
     from shopbeam.design import aluminum
 
     w = bool(welded and mat.fy_welded)
@@ -475,14 +483,14 @@ def _adm_flexure(sec, mat, s, z, welded) -> Flexure:
     lim = min(slender, key=lambda el: el.stress)
     mnlb = lim.stress * s
     text = (f"ADM 2015 F.8 local buckling, limiting element (from memory): Mnlb = F Sc, "
-            f"{lim.words()}, Omega 1.65")
+            f"{lim.words(system)}, Omega 1.65")
     if mnlb / OMEGA_ADM < fl.cap / fl.omega:
         return Flexure(mnlb, OMEGA_ADM, f"{text} (governs over {fl.cap_text})",
                        warnings=fl.warnings)
     return replace(fl, cap_text=f"{fl.cap_text}; {text} does not govern")
 
 
-def _adm_yield_rupture(sec, mat, s, z, welded) -> Flexure:
+def _adm_yield_rupture(sec, mat, s, z, welded, system: str = "us") -> Flexure:
     """ADM 2015 F.1 (from memory): the lesser of yielding Mnp = Z Fy <= 1.5 S Fy over
     Omega 1.65 and rupture Mnu = Z Fu / kt over Omega 1.95 (kt 1.0 for 6xxx alloys, ADM
     Table A.3.3), with the welded (heat-affected zone) strengths when the member is welded."""
@@ -493,14 +501,14 @@ def _adm_yield_rupture(sec, mat, s, z, welded) -> Flexure:
     mp = min(zz * fy, 1.5 * s * fy)
     yname, uname = ("Ftyw (welded)", "Ftuw (welded)") if w else ("Fty", "Ftu")
     ytext = (f"ADM 2015 F.1 yielding: Mn = Z {yname} <= 1.5 S {yname}, {yname.split()[0]} "
-             f"{fy / (PSI_PA * 1000):.3g} ksi, Omega 1.65")
+             f"{stress_words(fy, system, True)}, Omega 1.65")
     if not fu:
         return Flexure(mp, OMEGA_ADM, ytext + " (no tensile strength given: rupture not "
                        "checked)", warnings=("aluminium rupture (Z Ftu / 1.95) not checked: the "
                                              "material gives no fu",))
     mu = zz * fu / 1.0
     utext = (f"ADM 2015 F.1 rupture: Mn = Z {uname} / kt, {uname.split()[0]} "
-             f"{fu / (PSI_PA * 1000):.3g} ksi, kt 1.0, Omega 1.95")
+             f"{stress_words(fu, system, True)}, kt 1.0, Omega 1.95")
     if mu / OMEGA_ADM_RUPTURE < mp / OMEGA_ADM:
         return Flexure(mu, OMEGA_ADM_RUPTURE, f"{utext} (governs over yielding Z {yname} / "
                        "1.65)")
@@ -583,7 +591,7 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
     return out
 
 
-def _lumber_flexure(sec, mat, s, service) -> Flexure:
+def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
     from shopbeam.design import lumber
 
     if sec.shape != "rect-bar":
@@ -595,9 +603,9 @@ def _lumber_flexure(sec, mat, s, service) -> Flexure:
     f = lumber.factors(sec, mat, service or lumber.Service())
     fac = f.factors
     text = (f"NDS 2018 Table 4.3.1: Fb' = Fb CD CM Ct CL CF Cfu Cr = "
-            f"{f.values.fb / PSI_PA:,.0f} psi x CD {fac['CD']:g} x CM {fac['CM_b']:g} x Ct "
+            f"{stress_words(f.values.fb, system)} x CD {fac['CD']:g} x CM {fac['CM_b']:g} x Ct "
             f"{fac['Ct_b']:g} x CF {fac['CF']:.3g} x Cfu {fac['Cfu']:g} x Cr {fac['Cr']:g} = "
-            f"{f.fb_star * f.cfu / PSI_PA:,.0f} psi")
+            f"{stress_words(f.fb_star * f.cfu, system)}")
     ltb = None
     if f.flat:
         text += " (flat use: CL = 1.0, NDS 3.3.3.3 d <= b)"
@@ -712,9 +720,10 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
             f = lumber.factors(sec, mat, service or lumber.Service())
             fac = f.factors
             return ShearStrength(f.fv * av, 1.0, f"NDS 3.4.2: fv = 1.5 V / A <= Fv' = Fv CD CM "
-                                 f"Ct = {f.values.fv / PSI_PA:,.0f} psi x CD {fac['CD']:g} x CM "
-                                 f"{fac['CM_v']:g} x Ct {fac['Ct_b']:g} = {f.fv / PSI_PA:,.0f} "
-                                 "psi (NDS 2018 Table 4.3.1)", av, True)
+                                 f"Ct = {stress_words(f.values.fv, system)} x CD {fac['CD']:g} "
+                                 f"x CM {fac['CM_v']:g} x Ct {fac['Ct_b']:g} = "
+                                 f"{stress_words(f.fv, system)} (NDS 2018 Table 4.3.1)", av,
+                                 True)
         fv = mat.fv or 0.6 * mat.fy
         return ShearStrength(fv * av, 1.0, "NDS 3.4: fv = V / Av <= Fv (a wood section that is "
                              "not a rectangle: adjustment factors not applied)", av, True)
@@ -725,15 +734,16 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     if basis == "aluminum":
         w = "Ftyw (welded)" if (welded and mat.fy_welded) else "Fty"
         text = (f"ADM 2015 G: Vn = Fsy Av = 0.6 {w} Av, 0.6 {w.split()[0]} = "
-                f"{0.6 * fy / (PSI_PA * 1000):.3g} ksi, Omega 1.65")
+                f"{stress_words(0.6 * fy, system, True)}, Omega 1.65")
         from shopbeam.design import aluminum
 
         ht = aluminum.web_ratio(sec)
         if ht is not None:
-            fs, l1, _, words = aluminum.shear_buckling(ht, 0.6 * mat.fy, e)
+            fs, l1, _, words = aluminum.shear_buckling(ht, 0.6 * mat.fy, e, system=system)
             if welded and mat.fy_welded:
                 fs = min(fs, 0.6 * fy)
-                fw, l1w, _, ww = aluminum.shear_buckling(ht, 0.6 * fy, e, aged=False)
+                fw, l1w, _, ww = aluminum.shear_buckling(ht, 0.6 * fy, e, aged=False,
+                                                         system=system)
                 if fw < fs:
                     fs, words = fw, ww + " (Table B.4.1 constants with the welded Fsy)"
             if fs < 0.6 * fy:
@@ -1066,13 +1076,14 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     _, mmax, mn, at, why = worst
     words = "dead load alone with CD 0.9 (permanent, NDS 2018 2.3.2, Table 2.3.2)"
     bend = Check("bending, dead load", mmax / s, mn / s, "Pa",
-                 f"{words}: Fb' = {fl.cap / s * r / PSI_PA:,.0f} psi (CL = 1)"
+                 f"{words}: Fb' = {stress_words(fl.cap / s * r, job.units)} (CL = 1)"
                  + (f"; {why}" if why else ""), at,
                  clause="NDS 2018 2.3.2, 3.3", source="NDS 2018 (from memory)",
                  params={"CD": 0.9})
     v = dsol.shear.extremes()
     shear = Check("shear, dead load", v.abs_max / sh.area, sh.vn * r / sh.area, "Pa",
-                  f"{words}: Fv' = {sh.vn * r / sh.area / PSI_PA:,.0f} psi", v.abs_max_at,
+                  f"{words}: Fv' = {stress_words(sh.vn * r / sh.area, job.units)}",
+                  v.abs_max_at,
                   clause="NDS 2018 2.3.2, 3.4", source="NDS 2018 (from memory)",
                   params={"CD": 0.9})
     return [bend, shear]
@@ -1127,9 +1138,11 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
     fac = wf.factors
     return [Check("bearing", demand, limit, "Pa",
                   f"NDS 2018 3.10.2: fc_perp = R / (b lb) <= Fc_perp' = Fc_perp CM Ct Cb = "
-                  f"{wf.values.fc_perp / PSI_PA:,.0f} psi x CM {fac['CM_cp']:g} x Ct "
-                  f"{fac['Ct_b']:g} x {cb_words} = {limit / PSI_PA:,.0f} psi; bearing length "
-                  f"lb {lb / 0.0254:.4g} in ({stated})", at, detail=f"{what} governs",
+                  f"{stress_words(wf.values.fc_perp, job.units)} x CM {fac['CM_cp']:g} x Ct "
+                  f"{fac['Ct_b']:g} x {cb_words} = {stress_words(limit, job.units)}; bearing "
+                  f"length "
+                  f"lb {fmt(lb, 'small_length', job.units, 4)} ({stated})", at,
+                  detail=f"{what} governs",
                   clause="NDS 2018 3.10.2, 3.10.4", source="NDS 2018 (from memory)",
                   params={"lb": lb, "Cb": cb})]
 

@@ -72,7 +72,11 @@ def factors(section, material, service: Service) -> Factors:
     cm = wood.wet_factors(v, v.fb * cf) if service.wet else \
         {"fb": 1.0, "fv": 1.0, "fc_perp": 1.0, "e": 1.0}
     ct = wood.temperature_factors(service.temperature, service.wet)
-    cr = 1.15 if (service.repetitive and wood.is_dimension(v) and thick <= 4.0) else 1.0
+    cr = 1.0
+    if service.repetitive and wood.is_dimension(v) and thick <= 4.0:
+        cr = 1.15
+    elif service.repetitive and v.size_class == "lvl":
+        cr = 1.04  # NDS 2018 8.3.7, structural composite lumber (from memory)
     words = [f"Fb {v.fb / wood.PSI:,.0f} psi, Fv {v.fv / wood.PSI:,.0f} psi, E "
              f"{v.e / wood.PSI / 1e6:.2g}e6 psi, Emin {v.emin / wood.PSI:,.0f} psi "
              f"({v.species} {v.grade}, {v.size_class.replace('-', ' and ')}; {v.table})",
@@ -84,8 +88,11 @@ def factors(section, material, service: Service) -> Factors:
              f"{service.temperature} (NDS 2.3.3, Table 2.3.3)",
              f"CF {cf:g}: {cf_words}"]
     if flat:
-        words.append(f"Cfu {cfu:g}: {cfu_words} (NDS 4.3.7)")
-    if service.repetitive and cr == 1.0:
+        words.append(f"Cfu {cfu:g}: {cfu_words}")
+    if cr == 1.04:
+        words.append("Cr 1.04: repetitive structural composite lumber, three or more at 24 in "
+                     "or less (NDS 2018 8.3.7, from memory)")
+    elif service.repetitive and cr == 1.0:
         words.append("Cr 1.0: the repetitive member factor is for dimension lumber 2 to 4 in "
                      "thick only (NDS 4.3.9)")
     else:

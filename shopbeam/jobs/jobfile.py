@@ -804,6 +804,25 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section):
         return None, service
 
 
+def _repetitive(r: _Reader, raw_loads, service, material, section, members):
+    """Cr only where NDS 4.3.9 allows it (members.wood.repetitive_rule); a warning otherwise."""
+    from shopbeam.members import wood
+
+    if service is None:
+        return service
+    widths = []
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else []):
+        if _is_table(ld) and isinstance(ld.get("width"), str):
+            try:
+                widths.append((f"loads[{i}].width", units.parse(ld["width"], "length")))
+            except InputError:
+                pass
+    service, problems = wood.repetitive_rule(service, material, section, members, widths)
+    for message, key in problems:
+        r.warn(message, key)
+    return service
+
+
 def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
     kind = getattr(material, "kind", "custom")
     if kind == "custom" or (basis == Basis.FIRST_YIELD and kind != "lumber"):
@@ -972,6 +991,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             if ld.get("flange") == "bottom":
                 hung.append(f"loads[{i}]")
     _upward_loads(r, raw_loads, loads, system)
+    wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material)
     if length is not None:
         for key, message in geometry_problems(length, supports, loads,

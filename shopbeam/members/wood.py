@@ -201,10 +201,20 @@ def size_factor(v: WoodValues, thick_in: float, wide_in: float) -> tuple[float, 
     return cf, f"NDS Supplement Table 4A CF {cf:g} ({w} in wide, {4 if four else 2} in thick)"
 
 
+# Beams and stringers loaded on the wide face: NDS Supplement 2018 Table 4D footnote size
+# factor adjustment on Fb (from memory): Select Structural 0.86, No.1 0.74, No.2 1.00.
+WIDE_FACE_BS = {"Select Structural": 0.86, "No.1": 0.74, "No.2": 1.00}
+
+
 def flat_use_factor(v: WoodValues, thick_in: float, wide_in: float) -> tuple[float, str]:
-    """Cfu for dimension lumber bent about its weak axis (load on the wide face), Table 4A/4B."""
+    """Cfu for dimension lumber bent about its weak axis (load on the wide face), Table 4A/4B
+    (NDS 4.3.7); for beams and stringers on the wide face the Table 4D footnote factor."""
+    if v.size_class == "beams-stringers":
+        f = WIDE_FACE_BS.get(v.grade, 0.74)
+        return f, (f"beams and stringers loaded on the wide face: Fb x {f:g} for {v.grade} "
+                   "(NDS Supplement 2018 Table 4D footnote, from memory)")
     if v.size_class not in ("dimension", "custom"):
-        return 1.0, "Cfu 1.0 (not dimension lumber)"
+        return 1.0, "Cfu 1.0 (not dimension lumber: NDS 4.3.7 does not apply)"
     w = _nominal_width(wide_in)
     if thick_in > 3.0:
         table = {2: 1.0, 3: 1.0, 4: 1.0, 5: 1.05, 6: 1.05, 8: 1.05}
@@ -212,7 +222,7 @@ def flat_use_factor(v: WoodValues, thick_in: float, wide_in: float) -> tuple[flo
     else:
         table = {2: 1.0, 3: 1.0, 4: 1.1, 5: 1.1, 6: 1.15, 8: 1.15}
         cfu = table.get(w, 1.2)
-    return cfu, f"NDS Supplement Table 4A flat use Cfu {cfu:g}"
+    return cfu, f"NDS Supplement Table 4A flat use Cfu {cfu:g} (NDS 4.3.7)"
 
 
 def wet_factors(v: WoodValues, fb_cf: float) -> dict[str, float]:
@@ -271,6 +281,11 @@ def adjusted_material(material, section, wet: bool = False, temp: str = "up-to-1
         return material
     t, w = dressed_of(section)
     v = reference(material, t, w)
+    if wet and v.size_class == "lvl":
+        raise InputError("LVL is made for dry service (the makers' published values, "
+                         "moisture under 16 %); shopbeam has no wet-service values for it: "
+                         "keep it dry and remove wet_service, or give the maker's wet values "
+                         "as an inline lumber material", "beam.wet_service")
     cf = size_factor(v, t, w)[0]
     cm = wet_factors(v, v.fb * cf)["e"] if wet else 1.0
     ct = temperature_factors(temp, wet)["e"]
@@ -283,3 +298,46 @@ def adjusted_material(material, section, wet: bool = False, temp: str = "up-to-1
                    source=f"{v.table}; E' = E CM Ct = {v.e / PSI:,.0f} psi x {cm:g} x {ct:g}"
                    if (cm, ct) != (1.0, 1.0) else material.source if v.size_class ==
                    "dimension" and v.table == _4A else v.table)
+
+
+# ------------------------------------------------------------------ repetitive members
+MAX_REPETITIVE_SPACING = 24 * 0.0254  # NDS 2018 4.3.9: members spaced not more than 24 in
+
+
+def repetitive_rule(service: Service, material, section, members: int,
+                    widths: list[tuple[str, float]]) -> tuple[Service, list[tuple[str, str]]]:
+    """NDS 2018 4.3.9 (8.3.7 for LVL): the repetitive member factor is for three or more
+    members at 24 in or less joined by a load-distributing deck, dimension lumber 2 to 4 in
+    thick (Cr 1.15) or structural composite lumber (Cr 1.04, from memory). Returns the service
+    with `repetitive` as it may be applied, and (warning, key) pairs for what the job says
+    against it: `members = 2`, an area load's tributary width (the joist spacing) over
+    24 in, a timber."""
+    if not service.repetitive:
+        return service, []
+    out = []
+    off = Service(service.duration, service.wet, service.temperature, False)
+    if members == 2:
+        out.append(("repetitive = true needs three or more members sharing the load (NDS 2018 "
+                    "4.3.9); members = 2: Cr 1.0 is used", "beam.repetitive"))
+        return off, out
+    wide = [(k, w) for k, w in widths if w > MAX_REPETITIVE_SPACING * (1 + 1e-9)]
+    if wide:
+        key, w = wide[0]
+        out.append((f"repetitive = true needs members at 24 in or less (NDS 2018 4.3.9), but "
+                    f"this load's tributary width is {w / 0.0254:.4g} in: Cr 1.0 is used (set "
+                    "the width to the joist spacing, or remove repetitive)", key))
+        return off, out
+    if getattr(material, "kind", "") == "lumber" and section is not None and \
+            section.shape == "rect-bar":
+        t, wd = dressed_of(section)
+        try:
+            v = reference(material, t, wd)
+        except InputError:
+            return service, out
+        if v.size_class in ("beams-stringers", "posts-timbers"):
+            out.append((f"repetitive = true: the repetitive member factor is for dimension "
+                        f"lumber 2 to 4 in thick (NDS 2018 4.3.9); this member is a timber "
+                        f"({v.size_class.replace('-', ' and ')}): Cr 1.0 is used",
+                        "beam.repetitive"))
+            return off, out
+    return service, out
