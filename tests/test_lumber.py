@@ -363,11 +363,12 @@ value = "-110 lbf/ft"
 
 def test_a_length_ending_at_a_brace_takes_the_general_row():
     # NDS 2018 Table 3.3.3 footnote: arrangements the table does not list take the general
-    # rows; 2x4 braced at mid-span of 12 ft: lu = 72 in, lu/d = 20.6 > 14.3: le = 1.84 lu
-    res = analyze(job(section="2x4", length="12 ft", load='value = "-10 lbf/ft"',
-                      beam='braces = ["6 ft"]'))
+    # rows; 2x6 braced at mid-span of 14 ft: lu = 84 in, lu/d = 15.3 > 14.3: le = 1.84 lu
+    # (a 2x4 needs no lateral support at all: nominal d/b = 2, NDS 4.4.1.2(a))
+    res = analyze(job(section="2x6", length="14 ft", load='value = "-10 lbf/ft"',
+                      beam='braces = ["7 ft"]'))
     f = check(res, "bending").formula
-    assert "le = 1.84 lu (any load, lu/d > 14.3) = 132.5 in" in f
+    assert "le = 1.84 lu (any load, lu/d > 14.3) = 154.6 in" in f
 
 
 def test_lvl_stock_sizes_and_family():

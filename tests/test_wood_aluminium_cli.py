@@ -241,3 +241,41 @@ def test_welded_aluminium_uses_heat_affected_zone_strength(tmp_path):
                   length="3 ft")
         b = chk(solve(p), "bending")
         assert b["limit"] == pytest.approx(limit * 1e3 * LBF * IN, rel=1e-9)
+
+
+def test_nominal_depth_to_breadth_for_lateral_support(tmp_path):
+    # NDS 2018 4.4.1.1-4.4.1.2(a): d/b on nominal dimensions; d/b <= 2 needs no lateral
+    # support (CL = 1.0): a 2x4 (4/2) and a 4x8 (8/4), although dressed 3.5/1.5 = 2.33 and
+    # 7.25/3.5 = 2.07. A 2x6 (6/2 = 3) unbraced on 8 ft takes CL: lu/d = 96/5.5 = 17.5 >
+    # 14.3 but uniform load -> le = 1.63 lu + 3d = 173.0 in, RB^2 = 173.0 x 5.5 / 2.25 = 422.9,
+    # FbE = 696,000 / 422.9 = 1646 psi, Fb* = 900 x 1.3 = 1170: CL = 0.9149
+    for section, cl in (("2x4", 1.0), ("4x8", 1.0), ("2x6", 0.9149)):
+        p = write(tmp_path, f"b{section}", f'section = "{section}"\nmaterial = "DF-L-2"',
+                  uniform("-20 lbf/ft", "8 ft"), length="8 ft")
+        assert chk(solve(p), "bending")["params"]["CL"] == pytest.approx(cl, abs=5e-4), section
+
+
+def test_shear_bearing_and_deflection_report_their_factors(tmp_path):
+    # NDS 2018 Table 4.3.1: Fv' = Fv CD CM Ct, Fc_perp' = Fc_perp CM Ct Cb, E' = E CM Ct.
+    # Wet 2x10 DF-L No.2 at 100-125 F (Table 2.3.3: wet Ct 0.7, E 0.9; Table 4A wet: Fv 0.97,
+    # Fc_perp 0.67, E 0.9), two-month duration (CD 1.15): Fv' = 180 x 1.15 x 0.97 x 0.7
+    p = write(tmp_path, "hot", 'section = "2x10"\nmaterial = "DF-L-2"\nbraced = true\n'
+              'wet_service = true\ntemperature = "100F-125F"', uniform("-50 lbf/ft", "8 ft"),
+              length="8 ft", criteria='duration = "two-months"')
+    d = solve(p)
+    v = chk(d, "shear")
+    assert (v["params"]["CD"], v["params"]["CM_v"], v["params"]["Ct_b"]) == (1.15, 0.97, 0.7)
+    assert v["limit"] == pytest.approx(180 * 1.15 * 0.97 * 0.7 * PSI, rel=1e-9)
+    b = chk(d, "bearing")
+    assert (b["params"]["CM_cp"], b["params"]["Ct_b"]) == (0.67, 0.7)
+    assert b["limit"] == pytest.approx(625 * 0.67 * 0.7 * PSI, rel=1e-9)
+    f = chk(d, "deflection")
+    assert (f["params"]["CM_e"], f["params"]["Ct_e"]) == (0.9, 0.9)
+
+
+def test_repetitive_joist_left_unbraced_is_told_how_to_say_braced(tmp_path):
+    p = write(tmp_path, "joists", 'section = "2x10"\nmaterial = "DF-L-2"\nrepetitive = true',
+              uniform("-80 lbf/ft", "14 ft"), length="14 ft")
+    d = solve(p)
+    assert chk(d, "bending")["params"]["CL"] < 1.0
+    assert any("braced = true" in c and "repetitive" in c for c in d["cautions"])

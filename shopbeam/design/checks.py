@@ -607,14 +607,28 @@ def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
             f"{fac['Ct_b']:g} x CF {fac['CF']:.3g} x Cfu {fac['Cfu']:g} x Cr {fac['Cr']:g} = "
             f"{stress_words(f.fb_star * f.cfu, system)}")
     ltb = None
+    warnings = ()
+    from shopbeam.members.catalog import lumber_nominal
+
+    nominal = lumber_nominal(sec)  # NDS 4.4.1.1: d/b on nominal sizes for sawn lumber
+    ratio = nominal[1] / nominal[0] if nominal else f.d / f.b
     if f.flat:
         text += " (flat use: CL = 1.0, NDS 3.3.3.3 d <= b)"
-    elif f.d / f.b <= 2.0:
-        text += f" (d/b = {f.d / f.b:.3g} <= 2: no lateral support needed, CL = 1.0, NDS 4.4.1.2)"
+        if f.values.size_class == "beams-stringers":
+            text += (f"; Cfu {f.cfu:g} here is the beams-and-stringers wide-face factor "
+                     "(NDS Supplement 2018 Table 4D footnote, from memory)")
+    elif ratio <= 2.0:
+        text += (f" (d/b = {ratio:.3g}{' nominal' if nominal else ''} <= 2: no lateral support "
+                 "needed, CL = 1.0, NDS 4.4.1.2(a))")
     else:
         ltb = ("NDS", (f.fb_star, s, f.emin, f.b, f.d))
+        if service is not None and service.repetitive:
+            warnings = ("repetitive joists without braced = true take beam stability CL on "
+                        "their span between supports; when the deck or sheathing is nailed to "
+                        "the compression edge (with blocking or bridging as NDS 4.4.1.2 asks for "
+                        "the depth), say braced = true under [beam] for CL = 1.0",)
     return Flexure(f.fb_star * f.cfu * s, 1.0, text, ltb=ltb, stress_s=s, wood=f,
-                   uses_cb=False)
+                   uses_cb=False, warnings=warnings)
 
 
 def _f6(sec, fy, e) -> Flexure:
@@ -985,6 +999,8 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     v = sol.shear.extremes()
     allow_v = sh.vn / sh.omega
     shear_params = {"Vn": sh.vn, "Omega": sh.omega, "Av": sh.area}
+    if fl.wood is not None:  # Fv' = Fv CD CM Ct (NDS 2018 Table 4.3.1)
+        shear_params |= {k: float(fl.wood.factors[k]) for k in ("CD", "CM_v", "Ct_b")}
     if sh.stress:
         shear = Check("shear", v.abs_max / sh.area, allow_v / sh.area, "Pa",
                       f"{basis}: {sh.text}", v.abs_max_at, params=shear_params,
@@ -1010,7 +1026,9 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                  extra={"spans": spans},
                  params={"span_start": w["start"], "span_end": w["end"]}
                  | ({"n": st.defl_ratio} if st.defl_abs is None else {"limit": st.defl_abs})
-                 | ({"Kcr": fl.wood.kcr} if creep else {}),
+                 | ({"Kcr": fl.wood.kcr} if creep else {})
+                 | ({k: float(fl.wood.factors[k]) for k in ("CM_e", "Ct_e")}
+                    if fl.wood is not None else {}),
                  clause="deflection limit per span", source=st.defl_words)
     from shopbeam.design import local, open_shapes
 
@@ -1144,7 +1162,8 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
                   f"lb {fmt(lb, 'small_length', job.units, 4)} ({stated})", at,
                   detail=f"{what} governs",
                   clause="NDS 2018 3.10.2, 3.10.4", source="NDS 2018 (from memory)",
-                  params={"lb": lb, "Cb": cb})]
+                  params={"lb": lb, "Cb": cb, "CM_cp": float(fac["CM_cp"]),
+                          "Ct_b": float(fac["Ct_b"])})]
 
 
 _SOURCES = {"asd": "AISC 360-16", "first-yield": "first yield with a safety factor "

@@ -20,7 +20,7 @@ from shopbeam.design.analysis import Result
 PARAM_KINDS = {"Lb": "small_length", "Lp": "small_length", "Lr": "small_length",
                "Cb": None, "Omega": None, "Mn": "moment", "Vn": "force", "Av": "area",
                "S": "modulus", "n": None, "limit": "small_length", "span_start": "length",
-               "span_end": "length"}
+               "span_end": "length", "lb": "small_length"}
 
 
 @dataclass(frozen=True)
