@@ -825,9 +825,15 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
             F = fd + kk * fl_
         polys[tag, name] = F
         lines = under and name == "moment" and tag == "total"
-        c = candidates(cells, F, groups=groups[name], lines=lines)
+        # a point load hung from the bottom flange gets the flange check too (lifting): the
+        # moment at it is read, so every cell's sides are searched (no pruning)
+        hung = [ld.at for ld in static_loads if ld.kind == "point" and ld.value
+                and (ld.key or "") in set(getattr(job, "hung", ()) or ())] if lines else []
+        c = candidates(cells, F, groups=groups[name], lines=lines, prune=not hung)
         for a, b in regions[name]:
             keep((tag, name, (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
+        for x0 in hung:
+            keep((tag, name, ("hung", x0)), c, np.abs(c.x - x0) <= tol)
         if lines:  # under each wheel (wheel flange bending)
             for i in range(len(P)):
                 keep((tag, name, ("wheel", i)), c, c.wheel == i)
@@ -920,7 +926,8 @@ def _governing_positions(job, ss, st, ext: dict, pos: set) -> None:
             (float(a), float(b)): (1.0 / lim if lim > 0 else math.inf)
             for (a, b, _), (_, lim, _) in zip(ss.segs, deflection_spans(job, ss, st))})
     for key, e in ext.items():
-        if not plain or key[0] in ("live", "dead") or key[2][0] == "wheel" and key[0] == "total":
+        if not plain or key[0] in ("live", "dead") or \
+                key[2][0] in ("wheel", "hung") and key[0] == "total":
             pos.add(e[2])
     pos.update(e[2] for key, e in ext.items() if key[0] == "lateral")
 

@@ -405,7 +405,7 @@ def cell_groups(cells: Cells, regions) -> np.ndarray:
 
 def candidates(cells: Cells, F: np.ndarray, interior: bool = True,
                lines_only: bool = False, groups: np.ndarray | None = None,
-               lines: bool = True) -> Candidates:
+               lines: bool = True, prune: bool = True) -> Candidates:
     """Every point where the quantity F can reach its largest or smallest value over each
     group of cells (a region of x), and under each wheel when `lines`.
 
@@ -441,6 +441,8 @@ def candidates(cells: Cells, F: np.ndarray, interior: bool = True,
         np.minimum.at(best_lo, groups[c], val)
 
     def alive():
+        if not prune:
+            return np.ones(n, bool)
         return (bmax > best_hi[groups]) | (bmin < best_lo[groups])
 
     if not lines_only:
