@@ -48,7 +48,8 @@ def test_bending_carries_its_numbers_as_fields_in_si():
     assert bend.params["Lr"] / FT == pytest.approx(16.9, rel=1e-2)
     assert bend.params["Lb"] == pytest.approx(5.334)
     assert 1.0 < bend.params["Cb"] < 1.35  # AISC Design Examples F.1-3A: Cb = 1.30 (from memory)
-    assert bend.clause == "AISC 360-16 F2" and bend.source == "AISC 360-16"
+    # Lb 17.5 ft > Lr 16.9 ft: elastic lateral-torsional buckling, F2.2 eqs. F2-3 and F2-4
+    assert bend.clause == "AISC 360-16 F2.2, eq. F2-3/F2-4" and bend.source == "AISC 360-16"
     assert bend.as_dict()["params"]["Lb"] == pytest.approx(5.334)
 
 

@@ -38,7 +38,7 @@ import numpy as np
 from shopbeam.engine.solver import Solution, segments
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.jobs.rules import (DEFAULT_IMPACT, DEFLECTION_PRESETS,  # noqa: F401 (re-exported)
-                                 LIFTING_DEFAULT_RATIO, Basis)
+                                 LIFTING_DEFAULT_RATIO, LIVE_DEFLECTION_PRESETS, Basis)
 from shopbeam.units import fmt
 
 OMEGA_B = 1.67  # AISC 360-16 F1
@@ -1029,7 +1029,7 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                  | ({"Kcr": fl.wood.kcr} if creep else {})
                  | ({k: float(fl.wood.factors[k]) for k in ("CM_e", "Ct_e")}
                     if fl.wood is not None else {}),
-                 clause="deflection limit per span", source=st.defl_words)
+                 **dict(zip(("clause", "source"), deflection_provenance(job))))
     from shopbeam.design import local, open_shapes
 
     sec = st.section or job.section
@@ -1048,7 +1048,7 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                          f"{st.live_ratio:g} (IBC 2018 Table 1604.3 floor members, from memory)",
                          w["at"], detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} "
                          f"({w['rule']})", extra={"spans": spans},
-                         clause="IBC 2018 Table 1604.3", source="IBC 2018 (from memory)"))
+                         **dict(zip(("clause", "source"), live_deflection_provenance(job)))))
     if fl.wood is not None:
         out += bearing_checks(job, sol, fl.wood)
         out += dead_load_checks(job, sol, st)
@@ -1166,24 +1166,105 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
                           "Ct_b": float(fac["Ct_b"])})]
 
 
-_SOURCES = {"asd": "AISC 360-16", "first-yield": "first yield with a safety factor "
-            "(common practice)", "aluminum": "Aluminum Design Manual 2015 (from memory)",
+_SOURCES = {"asd": "AISC 360-16", "first-yield": "common practice: first yield with the "
+            "job's safety factor ([criteria] safety_factor)",
+            "aluminum": "Aluminum Design Manual 2015 (from memory)",
             "lumber": "NDS 2018 (from memory)"}
 
+# AISC 360-16 chapters F and G: the section each equation belongs to (section and equation
+# numbers from memory). F3-1/F3-2 are the flange local buckling of F3.2; F7-10/F7-11 the
+# lateral-torsional buckling of F7.4.
+_AISC_SECTION = {"F2-1": "F2.1", "F2-2": "F2.2", "F2-3": "F2.2", "F3-1": "F3.2",
+                 "F3-2": "F3.2", "F6-1": "F6.1", "F6-2": "F6.2", "F6-3": "F6.2",
+                 "F7-1": "F7.1", "F7-2": "F7.2", "F7-3": "F7.2", "F7-6": "F7.3",
+                 "F7-10": "F7.4", "F7-11": "F7.4", "F8-1": "F8.1", "F8-2": "F8.2",
+                 "F8-4": "F8.2", "F11-1": "F11.1", "F11-2": "F11.2", "F11-3": "F11.2",
+                 "G2-1": "G2.1", "G3-1": "G3", "G4-1": "G4", "G5-1": "G5", "G6-1": "G6"}
 
-def _provenance(basis: str, text: str, what: str) -> dict:
-    """clause and source of a strength check from its basis and the provision it used."""
+
+def _aisc_clause(text: str, what: str) -> str:
+    """The AISC 360-16 section and equation a strength text names ("F2-2 inelastic LTB ..."
+    -> "AISC 360-16 F2.2, eq. F2-2")."""
+    m = re.search(r"\b([FG]\d+-\d+)(/[FG]\d+-\d+)?", text)
+    if m and m.group(1) in _AISC_SECTION:
+        return f"AISC 360-16 {_AISC_SECTION[m.group(1)]}, eq. {m.group(0)}"
+    m = re.search(r"\b([FG]\d+(?:\.\d+)?(?:\([a-z]\))?)", text)
+    if m:
+        return f"AISC 360-16 {m.group(1)}"
+    if what == "bending":  # a section chapter F has no rule for: first yield only
+        return "AISC 360-16 chapter F (no rule for this section): first yield My = Fy S"
+    return "AISC 360-16 chapter G (no rule for this section): Vn = 0.6 Fy Av, common practice"
+
+
+def provenance(basis: str, text: str, what: str) -> dict:
+    """clause and source of a strength check ("bending" or "shear") from its basis and the
+    provision its text names."""
     if basis == "asd":
-        m = re.search(r"\b([FG]\d+)", text)
-        return {"clause": f"AISC 360-16 {m.group(1)}" if m else "AISC 360-16 chapter "
-                + ("F" if what == "bending" else "G"), "source": _SOURCES[basis]}
+        clause, source = _aisc_clause(text, what), _SOURCES[basis]
+        if "ASME BTH-1" in text:
+            clause += "; ASME BTH-1 " + ("3-2.3.1" if what == "bending" else "3-2.2")
+            source += "; ASME BTH-1 (from memory)"
+        return {"clause": clause, "source": source}
     if basis == "aluminum":
-        return {"clause": "ADM 2015 " + ("F.2" if what == "bending" else "G"),
-                "source": _SOURCES[basis]}
+        # the governing provision leads the strength text ("ADM 2015 F.8 local buckling ...")
+        m = re.match(r"ADM 2015 ([FG](?:\.\d+)?):? ([a-z ]+?)(?::| \(|,|$)", text)
+        if m and m.group(1) != "G":
+            clause = f"ADM 2015 {m.group(1)}, {m.group(2).strip()}"
+        elif what == "bending":
+            clause = "ADM 2015 chapter F, yielding and rupture"
+        else:
+            clause = "ADM 2015 chapter G, shear yielding Vn = Fsy Av, Fsy = 0.6 Fty"
+        return {"clause": clause, "source": _SOURCES[basis]}
     if basis == "lumber":
-        return {"clause": "NDS 2018 " + ("3.3" if what == "bending" else "3.4"),
-                "source": _SOURCES[basis]}
-    return {"clause": "", "source": _SOURCES.get(basis, "")}
+        return {"clause": "NDS 2018 " + ("3.3" if what == "bending" else "3.4.2, fv = 1.5 V / A")
+                + ", Table 4.3.1", "source": _SOURCES[basis]}
+    return {"clause": "first yield: f = M / S <= Fy / SF" if what == "bending" else
+            "first yield in shear: fv = V / Av <= 0.6 Fy / SF", "source": _SOURCES["first-yield"]}
+
+
+_provenance = provenance
+
+
+# the default deflection limit when a job gives none
+DEFAULT_DEFLECTION_SOURCE = ("L/240: IBC 2018 Table 1604.3, floor and roof members under dead "
+                             "+ live load (from memory)")
+
+
+def deflection_provenance(job) -> tuple[str, str]:
+    """(clause, source) of the deflection check: a serviceability limit set by the job's
+    criteria, and where the figure (or the default L/240) comes from."""
+    c = job.criteria
+    n, absolute, words = deflection_rule(job)
+    limit = f"L/{n:g}" if absolute is None else c.deflection
+    if c.deflection_preset:
+        return (f"serviceability limit from the job's criteria: deflection = "
+                f"\"{c.deflection_preset}\" ({limit} per span)", DEFLECTION_PRESETS[
+                    c.deflection_preset][1])
+    if not c.deflection_given and (job.lifting or c.lifting):
+        from shopbeam.design.lifting import profile_of
+
+        prof = profile_of(job)
+        return (f"serviceability limit of the {prof.name} lifting profile ({limit} per span; "
+                "no [criteria] deflection given)",
+                LIFTING_PROFILES[prof.name]["deflection_source"])
+    if not c.deflection_given:
+        return (f"serviceability limit from the job's criteria: the default {limit} per span "
+                "(no [criteria] deflection given)", DEFAULT_DEFLECTION_SOURCE)
+    return (f"serviceability limit from the job's criteria: deflection = \"{c.deflection}\" "
+            "per span", "set by the job ([criteria] deflection); the default, "
+            + DEFAULT_DEFLECTION_SOURCE)
+
+
+def live_deflection_provenance(job) -> tuple[str, str]:
+    """(clause, source) of the live-load-alone deflection check."""
+    c = job.criteria
+    n = c.live_deflection_ratio
+    if c.deflection_preset and LIVE_DEFLECTION_PRESETS.get(c.deflection_preset) == n:
+        return (f"IBC 2018 Table 1604.3, L/{n:g} under live load (deflection = "
+                f"\"{c.deflection_preset}\")", "IBC 2018 (from memory)")
+    return (f"serviceability limit from the job's criteria: live_deflection = \"L/{n:g}\"",
+            "set by the job ([criteria] live_deflection); L/360 for floor members is IBC 2018 "
+            "Table 1604.3 (from memory)")
 
 
 def warnings_for(job, st: Strengths | None = None) -> list[str]:

@@ -450,7 +450,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
     matter (braced, short, or yielding governs). The governing length's pattern is solved and
     checked for the words and fields of the check.
     """
-    from shopbeam.design.checks import BASIS_WORDS, cb_factor, checks_for
+    from shopbeam.design.checks import BASIS_WORDS, cb_factor, checks_for, provenance
 
     env = Envelopes(ss, k)
     fmt = _fmt_for(job)
@@ -545,7 +545,8 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
     if not fl.stress_s and not getattr(fl, "special", False):
         c = replace(c, demand=abs(e_b.value), limit=allow, at=e_b.at,
                     formula=f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, "
-                            f"Omega_b {fl.omega:g}", extra={**c.extra, "cb": cb})
+                            f"Omega_b {fl.omega:g}", extra={**c.extra, "cb": cb},
+                    **provenance(st.basis, text, "bending"))
     if len(st.ltb_segments) > 1:
         c = replace(c, detail="; ".join(x for x in (c.detail, f"unbraced length {fmt(a)} to "
                                                     f"{fmt(b)} governs") if x))
