@@ -6,6 +6,7 @@ from shopbeam import units
 from shopbeam.cli.common import guarded, load
 from shopbeam.design import capacity, sizing
 from shopbeam.members.stock import load_stock
+from shopbeam.output import capacityreport, sizingreport
 from shopbeam.output.jsonout import dumps_finite
 
 
@@ -16,7 +17,7 @@ def cmd_capacity(args) -> int:
     if args.json:
         print(dumps_finite(capacity.to_json(res), args.job))
     else:
-        print(capacity.render(res), end="")
+        print(capacityreport.render(res), end="")
     return 0
 
 
@@ -31,5 +32,5 @@ def cmd_size(args) -> int:
     if args.json:
         print(dumps_finite(sizing.to_json(res, args.top), args.job))
     else:
-        print(sizing.render(res, args.top), end="")
+        print(sizingreport.render(res, args.top), end="")
     return 0

@@ -17,11 +17,9 @@ label and plaque in shop words are `shopbeam.output.label`.
 from __future__ import annotations
 
 import math
-import textwrap
 from dataclasses import dataclass, replace
 
 from shopbeam import units
-from shopbeam.cautions import banner, cautions_for
 from shopbeam.design.checks import (BASIS_WORDS, Check, aluminum_unchecked, basis_of,
                                    governing, strengths)
 from shopbeam.design.loading import Evaluation, evaluate, state_set
@@ -255,50 +253,3 @@ def to_json(res: CapacityResult) -> dict:
                        "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
                        if res.evaluation else {}}
     return out
-
-
-def render(res: CapacityResult) -> str:
-    job = res.job
-    lines = [f"shopbeam capacity: {job.title}", "=" * 78]
-    lines += textwrap.wrap(banner(job.tags, job.lifting), 78)
-    lines.append("")
-    k = res.factor
-    if math.isfinite(k):
-        lines.append(f"CAPACITY FACTOR k = {k:.6g} on the live loads "
-                     "(dead loads and self-weight fixed)")
-    else:
-        lines.append("CAPACITY FACTOR: unlimited (" + res.note + ")")
-    if res.note and math.isfinite(k):
-        lines.append(f"  {res.note}")
-    lines.append(f"  method: {res.method}")
-    lines.append(f"  basis: {BASIS_WORDS[basis_of(job)]}")
-    if res.not_rated:
-        lines.append("NOT RATED: do not post a load from this factor, because")
-        for r in res.not_rated:
-            lines += textwrap.wrap(r, 78, initial_indent="  - ", subsequent_indent="    ")
-    else:
-        for label, value in max_load_lines(res):
-            lines.append(f"  {label:<16} {value}")
-    lines.append("")
-    lines.append("CHECKS AT k")
-    for c in res.checks:
-        wd = getattr(job.material, "kind", "") == "lumber"
-        lines.append(f"  {c.name:<11} {units.fmt_check(c.demand, c.unit, job.units, wd)} vs "
-                     f"{units.fmt_check(c.limit, c.unit, job.units, wd)}: ratio {c.ratio:.6f}")
-        for w in textwrap.wrap(c.formula + (f" [{c.detail_text}]" if c.detail_text else ""), 72):
-            lines.append("      " + w)
-    if res.governing:
-        lines.append(f"  governing: {res.governing.name}")
-    warns = [p for p in job.warnings if p.warning]
-    if warns:
-        lines.append("")
-        lines.append("INPUT WARNINGS")
-        for p in warns:
-            lines += textwrap.wrap(p.located(), 78, initial_indent="  ", subsequent_indent="  ")
-    lines.append("")
-    lines.append("CAUTIONS")
-    for c in cautions_for(job.tags, job.lifting):
-        lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
-    from shopbeam.escapes import shown  # noqa: PLC0415
-
-    return shown("\n".join(lines), keep="\n") + "\n"

@@ -598,50 +598,6 @@ def _slow(job, cands):
 
 
 # ------------------------------------------------------------------ output
-def render(res: SizeResult, top: int = 15) -> str:
-    from shopbeam.cautions import cautions_for
-    import textwrap
-
-    job = res.job
-    sy = job.units
-    lines = [f"shopbeam size: {job.title}", "=" * 78]
-    lines.append(f"swept {len(res.rows)} sections ({res.kind}) in {res.seconds * 1000:.0f} ms; "
-                 f"{len(res.passing)} pass; {res.method}")
-    if res.material_note:
-        lines += textwrap.wrap("NOTE: " + res.material_note, 78, subsequent_indent="  ")
-    lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; self-weight recomputed per section")
-    if res.lightest:
-        lines.append(f"lightest that passes: {res.lightest.designation} "
-                     f"({units.fmt(res.lightest.weight, 'mass_per_length', sy)})")
-    if res.cheapest:
-        c = res.cheapest
-        cost = c.cost(job.length)
-        lines.append(f"cheapest that passes: {c.designation} ({_money(c.price_per_m, sy)} per "
-                     f"{'ft' if sy == 'us' else 'm'}, {cost:.2f} {res.currency} for the "
-                     "member)".replace("  ", " "))
-    lines.append("")
-    lines.append(f"  {'section':<22} {'weight':>12} {'ratio':>7} {'governing':<11} {'k':>7}"
-                 + ("  price" if any(r.price_per_m is not None for r in res.rows) else ""))
-    for r in res.passing[:top]:
-        price = f"  {_money(r.price_per_m, sy)}" if r.price_per_m is not None else ""
-        lines.append(f"  {r.designation[:22]:<22} {units.fmt(r.weight, 'mass_per_length', sy):>12} "
-                     f"{r.ratio:7.3f} {r.governing:<11} {r.factor:7.3f}{price}")
-    if not res.passing:
-        lines.append("  no section passes; the closest:")
-        for r in sorted(res.rows, key=lambda r: r.ratio)[:5]:
-            lines.append(f"  {r.designation[:22]:<22} ratio {r.ratio:.3f} ({r.governing})")
-    for s in res.skipped[:5]:
-        lines.append(f"  skipped {s}")
-    lines.append("")
-    for c in cautions_for(job.tags, job.lifting):
-        lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
-    return "\n".join(lines) + "\n"
-
-
-def _money(per_m: float, system: str) -> str:
-    return f"{per_m * (0.3048 if system == 'us' else 1.0):.2f}"
-
-
 def to_json(res: SizeResult, top: int | None = None) -> dict:
     from shopbeam.cautions import cautions_for
 

@@ -26,7 +26,8 @@ from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.errors import InputError
 from shopbeam.jobs.storage import atomic_write
 from shopbeam.output import svg
-from shopbeam.output.report import check_value, describe_load, describe_support
+from shopbeam.output.present import CheckRow, EnvelopeRow, present  # noqa: F401 (CheckRow re-exported)
+from shopbeam.output.report import describe_load, describe_support
 
 TITLE_FIELDS = (("shop", "Shop"), ("job", "Job"), ("member", "Member"), ("client", "Client"),
                 ("location", "Location"), ("prepared_by", "Prepared by"),
@@ -41,20 +42,6 @@ EDITIONS = {
     "IBC": "IBC Table 1604.3 (deflection limits)",
 }
 BASIS_EDITIONS = {"asd": "AISC 360", "aluminum": "ADM", "lumber": "NDS"}
-
-
-@dataclass(frozen=True)
-class CheckRow:
-    name: str
-    demand: str
-    limit: str
-    ratio: float
-    ok: bool
-    clause: str
-    source: str
-    formula: str
-    at: str
-    state: str
 
 
 @dataclass(frozen=True)
@@ -87,7 +74,7 @@ class Package:
     state_words: str
     diagrams: tuple[Diagram, ...]
     state_diagrams: tuple[Diagram, ...]
-    checks: tuple[CheckRow, ...]
+    checks: tuple[CheckRow, ...]  # the rows of `output.present`, as the report shows them
     governing: str
     verdict: str
     self_checks: tuple[tuple[bool, str, str], ...]
@@ -99,6 +86,8 @@ class Package:
     input_text: str
     paper: str = "letter"
     warnings: tuple[str, ...] = field(default_factory=tuple)
+    envelope: tuple[EnvelopeRow, ...] = ()  # each support over every load state
+    uplift: tuple[str, ...] = ()  # supports some load state pulls down, in words
 
 
 def sha256_of(data: bytes) -> str:
@@ -130,12 +119,10 @@ def _diagrams(sol, system: str, state: str = "") -> tuple[Diagram, ...]:
     return tuple(out)
 
 
-def _reactions(sol, system: str, uplift: bool = False):
-    return tuple((r.kind, units.fmt(r.at, "length", system),
-                  units.fmt(r.force, "force", system)
-                  + (" (pulls down: uplift)" if uplift and r.force < 0 else ""),
-                  units.fmt(r.moment, "moment", system) if r.kind == "fixed" else "-")
-                 for r in sol.reactions)
+def _reaction_cells(rows, uplift: bool = False):
+    """(kind, at, force, moment) of `output.present` reaction rows ("-": no moment)."""
+    return tuple((r.kind, r.at, r.force + (" (pulls down: uplift)" if uplift and r.uplift
+                                            else ""), r.moment or "-") for r in rows)
 
 
 def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dict | None = None,
@@ -200,15 +187,8 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
         if c.state:
             states.append(f"{c.name}: governed by {c.state}.")
 
-    rows = []
-    for c in result.checks:
-        rows.append(CheckRow(
-            c.name, check_value(c.demand, c.unit, sy), check_value(c.limit, c.unit, sy),
-            float(c.ratio), bool(c.ok), c.clause or "", c.source or "", c.formula,
-            units.fmt(c.at, "length", sy) if c.at is not None else "", c.state or ""))
-    g = result.governing
-    verdict = ("all checks PASS" if result.ok else "the member FAILS: " +
-               ", ".join(c.name for c in result.checks if not c.ok))
+    p = present(result)
+    verdict = ("all checks PASS" if result.ok else "the member FAILS: " + ", ".join(p.failing))
 
     diags = list(sol.diagnostics)
     self_checks = [(bool(d.ok), d.name, d.detail) for d in diags]
@@ -224,17 +204,26 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
         basis=tuple(basis_lines), editions=_editions(result, basis), member=tuple(member),
         supports=tuple(describe_support(s, sy) for s in job.supports), loads=tuple(loads),
         load_states=tuple(states), sketch=svg.member_sketch(job, moving=getattr(job, "moving", ())),
-        reactions=_reactions(sol, sy),
-        state_reactions=_reactions(st_sol, sy, uplift=True) if st_sol is not None else (),
-        state_words=result.state_words if st_sol is not None else "",
+        reactions=_reaction_cells(p.reactions),
+        state_reactions=(_reaction_cells(p.governing_state.reactions, uplift=True)
+                         if p.governing_state is not None else ()),
+        state_words=p.governing_state.words if p.governing_state is not None else "",
         diagrams=_diagrams(sol, sy),
         state_diagrams=_diagrams(st_sol, sy, "governing") if st_sol is not None else (),
-        checks=tuple(rows), governing=f"{g.name}, ratio {g.ratio:.3f}", verdict=verdict,
+        checks=p.checks, governing=p.governing, verdict=verdict,
         self_checks=tuple(self_checks), cautions=tuple(result.cautions),
         not_checked=not_checked, program=f"shopbeam {__version__}",
         input_name=input_name or (job.path or ""), input_sha256=sha256_of(input_bytes),
         input_text=text, paper=(paper or ("a4" if sy == "si" else "letter")).lower(),
-        warnings=tuple(p.located() for p in job.warnings if getattr(p, "warning", False)))
+        warnings=tuple(w.located() for w in job.warnings if getattr(w, "warning", False)),
+        envelope=p.envelope, uplift=p.uplift)
+
+
+def _check_more(c: CheckRow) -> str:
+    """The line under a check: its formula, where, the numbers it used and its load state."""
+    used = ", ".join(f"{k} {v}" for k, v in c.params)
+    return (c.formula + (f"; at {c.at}" if c.at else "") + (f"; used {used}" if used else "")
+            + (f"; state: {c.state}" if c.state else ""))
 
 
 # ------------------------------------------------------------------ HTML
@@ -349,6 +338,18 @@ def to_html(pkg: Package) -> str:
         h.append(_tr(["support", "at", "force", "moment"], header=True))
         h += [_tr(r, classes=["", "num", "num", "num"]) for r in pkg.state_reactions]
         h.append("</table>")
+    if pkg.envelope:
+        h.append("<p><b>Reaction envelope</b> (each support over every load state: what a "
+                 "bracket or anchor must carry):</p><table>")
+        h.append(_tr(["support", "at", "largest up", "state", "largest down", "state"],
+                     header=True))
+        h += [_tr([r.kind, r.at, r.max_up, r.up_state, r.max_down
+                   + (" (uplift)" if r.uplift else ""), r.down_state],
+                  classes=["", "num", "num", "", "num", ""]) for r in pkg.envelope]
+        h.append("</table>")
+    if pkg.uplift:
+        h.append("<p><b>Uplift:</b> anchor these supports against the pull:</p><ul>"
+                 + "".join(f"<li>{e(x)}</li>" for x in pkg.uplift) + "</ul>")
 
     h.append('<h2 class="sheetbreak">4. Shear, moment, slope and deflection</h2>')
     h.append("<table>" + _tr(["function", "max", "at", "min", "at"], header=True))
@@ -373,7 +374,7 @@ def to_html(pkg: Package) -> str:
                  f"<td class=num>{e(c.limit)}</td><td class=num>{c.ratio:.3f}</td>"
                  f'<td class="{verdict.lower()}">{verdict}</td><td>{e(c.clause or "-")}</td>'
                  f"<td>{e(c.source or '-')}</td></tr>")
-        more = c.formula + (f"; at {c.at}" if c.at else "") + (f"; state: {c.state}" if c.state else "")
+        more = _check_more(c)
         h.append(f'<tr><td></td><td colspan="6" class="formula">{e(more)}</td></tr>')
     h.append("</table>")
     h.append(f"<p><b>Governing:</b> {e(pkg.governing)}: {e(pkg.verdict)}.</p>")
@@ -449,6 +450,16 @@ def to_markdown(pkg: Package) -> str:
     if pkg.state_reactions:
         m += ["", f"In {pkg.state_words}:", ""]
         m += _md_table(["support", "at", "force", "moment"], pkg.state_reactions)
+    if pkg.envelope:
+        m += ["", "Reaction envelope (each support over every load state: what a bracket or "
+              "anchor must carry):", ""]
+        m += _md_table(["support", "at", "largest up", "state", "largest down", "state"],
+                       [(r.kind, r.at, r.max_up, r.up_state,
+                         r.max_down + (" (uplift)" if r.uplift else ""), r.down_state)
+                        for r in pkg.envelope])
+    if pkg.uplift:
+        m += ["", "Uplift: anchor these supports against the pull:", ""]
+        m += [f"- {x}" for x in pkg.uplift]
     m += ["", "## 4. Shear, moment, slope and deflection", ""]
     m += _md_table(["function", "max", "at", "min", "at"],
                    [(f"{d.name} ({d.unit})", d.max, d.max_at, d.min, d.min_at)
@@ -460,8 +471,7 @@ def to_markdown(pkg: Package) -> str:
                      c.clause or "-", c.source or "-") for c in pkg.checks])
     m.append("")
     for c in pkg.checks:
-        m.append(f"- {c.name}: {c.formula}" + (f"; at {c.at}" if c.at else "")
-                 + (f"; state: {c.state}" if c.state else ""))
+        m.append(f"- {c.name}: {_check_more(c)}")
     m += ["", f"**Governing:** {pkg.governing}: {pkg.verdict}.", "", "## 6. Not checked", ""]
     if pkg.not_checked:
         m += _md_table(["limit state", "clause", "why / what to do"], pkg.not_checked)

@@ -16,7 +16,9 @@ rounded down from 9429"). The figures depend on the loads entered:
 
 When the capacity carries "not rated" reasons (`CapacityResult.not_rated`), or a limit state
 that blocks a rating was not checked, there is no number: the label says NOT RATED and why.
-Every label and plaque carries the cautions (the stronger lifting ones for lifting jobs) and
+The governing check, the load state that governs it and every support the rated load pulls
+down (uplift: anchor it) come from `output.present.present_capacity`, as the capacity page
+shows them. Every label and plaque carries the cautions (the stronger lifting ones for lifting jobs) and
 every unchecked limit state. `label_text` is the 40-column label (`shopbeam rating JOB`);
 `plaque_text` and `plaque_html` are the full-page plaque (`shopbeam rating JOB --plaque`).
 """
@@ -34,6 +36,7 @@ from shopbeam.cautions import cautions_for
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.errors import InputError
+from shopbeam.output.present import present_capacity
 
 RACK_TAGS = {"rack", "pallet", "racking"}  # members are the beams of one level
 SHELF_TAGS = {"shelf", "shelving"}  # members are the rails or brackets of one shelf
@@ -71,6 +74,9 @@ class Rating:
     notes: tuple[str, ...]
     warnings: tuple[str, ...] = ()  # input warnings, "key: what"
     lifting_profile: str = ""  # the lifting profile the rating used (design.lifting.profile_of)
+    governing_state: str = ""  # the load state that governs at the rated load ("": one state)
+    uplift: tuple[str, ...] = ()  # supports the rated load pulls down, in words
+    uplift_head: str = "UPLIFT at the rated load: anchor"
 
 
 # ------------------------------------------------------------------ rounding
@@ -213,18 +219,22 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
     sups = sorted({s.at for s in job.supports if s.kind != "hinge"})
     span = (units.fmt(job.length, "length", sy) + " (supports at "
             + ", ".join(units.fmt(x, "length", sy) for x in sups) + ")")
-    gov = cap.governing
+    pc = present_capacity(cap)
     unch = tuple(f"{u.name}" + (f" ({u.clause})" if u.clause else "") + f": {u.reason}"
                  for u in unchecked)
     return Rating(
         title=job.title, member=f"{job.section.designation}, {job.material.key}", span=span,
         factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
-        governing=gov.name if gov is not None else "", basis=BASIS_SHORT[basis_of(job)],
+        governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)],
         date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,
         cautions=tuple(cautions_for(job.tags, job.lifting)), unchecked=unch, notes=tuple(notes),
         warnings=tuple(f"{p.key}: {p.message.split(':')[0]}" for p in job.warnings
                        if getattr(p, "warning", False)),
-        lifting_profile=_profile_name(job))
+        lifting_profile=_profile_name(job),
+        governing_state=pc.governing_state if status == "rated" else "",
+        uplift=pc.uplift if status == "rated" else (),
+        uplift_head="UPLIFT at the rated load" + (" (each member)" if job.members > 1 else "")
+        + ": anchor")
 
 
 def _profile_name(job) -> str:
@@ -266,6 +276,12 @@ def label_text(r: Rating, width: int = 40) -> str:
     _body(r, row)
     if r.governing and r.status == "rated":
         row(f"Governing check: {r.governing}")
+        if r.governing_state:
+            row(f"  in {r.governing_state}", "  ")
+    if r.uplift:
+        row(r.uplift_head)
+        for u in r.uplift:
+            row("- " + u, "  ")
     for w in r.warnings:
         row(f"INPUT WARNING {w} (see shopbeam check)")
     row(f"Basis: {r.basis}")
@@ -364,7 +380,11 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
         h.append("<ul>" + "".join(f"<li>{e(n)}</li>" for n in r.notes) + "</ul>")
     h.append(f'<p class="meta">Member: {e(r.member)}</p><p class="meta">Span: {e(r.span)}</p>')
     if r.governing and r.status == "rated":
-        h.append(f'<p class="meta">Governing check: {e(r.governing)}</p>')
+        h.append(f'<p class="meta">Governing check: {e(r.governing)}'
+                 + (f" (in {e(r.governing_state)})" if r.governing_state else "") + "</p>")
+    if r.uplift:
+        h.append(f"<p class=meta><b>{e(r.uplift_head)}</b></p><ul>"
+                 + "".join(f"<li>{e(u)}</li>" for u in r.uplift) + "</ul>")
     h += [f'<p class="meta"><b>INPUT WARNING</b> {e(w)} (see shopbeam check)</p>'
           for w in r.warnings]
     h.append(f'<p class="meta">Basis: {e(r.basis)} &nbsp; Date: {e(r.date)}</p>')

@@ -2,11 +2,13 @@
 the job's units.
 
 `present(result)` turns an `analysis.Result` into plain text pieces: the reactions, the
-governing load state with its reactions and any uplift, every check with its demand, limit,
-formula, clause, the numbers it used (`params`) and the state that governs it, the verdict,
-what was not checked, the self-checks and the cautions. The text report is laid out from it,
-and the text UI shows the same rows, so the two cannot drift; the JSON carries the same facts
-in SI (`analysis.to_json`).
+governing load state with its reactions and any uplift, the reaction envelope over every load
+state, every check with its demand, limit, formula, clause, the numbers it used (`params`) and
+the state that governs it, the verdict, what was not checked, the self-checks and the
+cautions. The text report, the calc package and the text UI are laid out from it, so they
+cannot drift; the JSON carries the same facts in SI (`analysis.to_json`).
+`present_capacity(cap)` is the same for a capacity (the checks, governing state and reaction
+envelope at the rated load): the capacity page and the rating label are laid out from it.
 """
 
 from __future__ import annotations
@@ -46,6 +48,13 @@ class CheckRow:
     source: str
     params: tuple[tuple[str, str], ...]  # (name, value in the job's units)
     spans: tuple[str, ...]  # deflection: each span against its limit (when more than one)
+    detail: str = ""  # e.g. which unbraced length governs
+
+    @property
+    def detail_text(self) -> str:
+        """The detail with the governing load state (as the JSON's `detail` says it)."""
+        return "; ".join(x for x in (self.detail, self.state and "worst state: " + self.state)
+                         if x)
 
     @property
     def verdict(self) -> str:
@@ -62,6 +71,19 @@ class GoverningState:
 
 
 @dataclass(frozen=True)
+class EnvelopeRow:
+    """One support over every load state: the largest upward and downward reaction."""
+
+    kind: str
+    at: str
+    max_up: str
+    max_down: str
+    uplift: bool  # some load state pulls the beam down here (max_down < 0)
+    up_state: str
+    down_state: str
+
+
+@dataclass(frozen=True)
 class Presentation:
     title: str
     units: str
@@ -74,6 +96,24 @@ class Presentation:
     unchecked: tuple[str, ...]
     self_checks: tuple[str, ...]
     cautions: tuple[str, ...]
+    envelope: tuple[EnvelopeRow, ...] = ()  # patterned or moving loads, else empty
+    uplift: tuple[str, ...] = ()  # every support some load state pulls down, in words
+    failing: tuple[str, ...] = ()  # the names of the checks that fail
+
+
+@dataclass(frozen=True)
+class CapacityPresentation:
+    """A capacity at its factor k: the checks at k, what governs and in which load state, and
+    the supports the rated load pulls down."""
+
+    title: str
+    units: str
+    checks: tuple[CheckRow, ...]
+    governing: str  # "deflection, ratio 1.000" ("" when nothing was checked)
+    governing_name: str
+    governing_state: str  # the load state that governs the governing check ("" with one)
+    envelope: tuple[EnvelopeRow, ...]
+    uplift: tuple[str, ...]
 
 
 def param_text(name: str, value: float, system: str) -> str:
@@ -88,6 +128,25 @@ def _reactions(sol, system: str) -> tuple[ReactionRow, ...]:
                  for r in sol.reactions)
 
 
+def envelope_rows(envelope, system: str) -> tuple[EnvelopeRow, ...]:
+    """The rows of a reaction envelope (`loading.Evaluation.reactions`) in the job's units."""
+    f = lambda v: units.fmt(v, "force", system)  # noqa: E731
+    return tuple(EnvelopeRow(r["type"], units.fmt(r["at"], "length", system), f(r["max_up"]),
+                             f(r["max_down"]), r["max_down"] < 0, r.get("max_up_state", ""),
+                             r.get("max_down_state", "")) for r in envelope)
+
+
+def uplift_lines(rows: tuple[ReactionRow, ...] = (), env: tuple[EnvelopeRow, ...] = (),
+                 words: str = "") -> tuple[str, ...]:
+    """Each support that pulls the beam down, once: from the envelope where there is one
+    (the largest pull over every state, and the state), else from the reactions shown."""
+    if env:
+        return tuple(f"{r.kind} at {r.at} pulls down up to {r.max_down.lstrip('-')}"
+                     + (f" ({r.down_state})" if r.down_state else "") for r in env if r.uplift)
+    return tuple(f"{r.kind} at {r.at} pulls down {r.force.lstrip('-')}"
+                 + (f" ({words})" if words else "") for r in rows if r.uplift)
+
+
 def _check_row(c, system: str, wood: bool = False) -> CheckRow:
     f = lambda v, k: units.fmt(v, k, system)  # noqa: E731
     spans = c.extra.get("spans", [])
@@ -99,7 +158,8 @@ def _check_row(c, system: str, wood: bool = False) -> CheckRow:
         units.fmt_check(c.limit, c.unit, system, wood),
         f(c.at, "length") if c.at is not None else "", float(c.ratio), bool(c.ok), c.formula,
         c.state, c.clause, c.source,
-        tuple((k, param_text(k, v, system)) for k, v in c.params.items()), span_lines)
+        tuple((k, param_text(k, v, system)) for k, v in c.params.items()), span_lines,
+        c.detail)
 
 
 def present(result: Result) -> Presentation:
@@ -111,16 +171,38 @@ def present(result: Result) -> Presentation:
         state = GoverningState(result.state_words, rows,
                                tuple(f"{r.kind} at {r.at} pulls down "
                                      f"{r.force.lstrip('-')}" for r in rows if r.uplift))
+    reactions = _reactions(result.solution, sy)
+    env = envelope_rows(result.reaction_envelope, sy)
     g = result.governing
     return Presentation(
         title=job.title, units=sy, note=result.shown_state,
-        reactions=_reactions(result.solution, sy), governing_state=state,
-        checks=tuple(_check_row(c, sy, getattr(job.material, "kind", "") == "lumber")
-                     for c in result.checks),
+        reactions=reactions, governing_state=state,
+        checks=_check_rows(job, result.checks),
         governing=f"{g.name}, ratio {g.ratio:.3f}",
         verdict="all checks PASS" if result.ok else "the member FAILS this check",
         unchecked=tuple(f"{u.name}: {u.reason}" + (f" ({u.clause})" if u.clause else "")
                         for u in result.unchecked),
         self_checks=tuple(f"[{'pass' if d.ok else 'WARN'}] {d.name}: {d.detail}"
                           for d in result.solution.diagnostics),
-        cautions=tuple(result.cautions))
+        cautions=tuple(result.cautions), envelope=env,
+        uplift=uplift_lines(reactions, env),
+        failing=tuple(c.name for c in result.checks if not c.ok))
+
+
+def _check_rows(job, checks) -> tuple[CheckRow, ...]:
+    wood = getattr(job.material, "kind", "") == "lumber"
+    return tuple(_check_row(c, job.units, wood) for c in checks)
+
+
+def present_capacity(cap) -> CapacityPresentation:
+    """The presentation of a capacity (`design.capacity.CapacityResult`) at its factor k."""
+    job, sy = cap.job, cap.job.units
+    g = cap.governing
+    ev = cap.evaluation
+    words = ev.worst.get(g.name, {}).get("words", "") if (ev is not None and g) else ""
+    env = envelope_rows(ev.reactions if ev is not None else (), sy)
+    return CapacityPresentation(
+        title=job.title, units=sy, checks=_check_rows(job, cap.checks),
+        governing=f"{g.name}, ratio {g.ratio:.3f}" if g else "",
+        governing_name=g.name if g else "", governing_state=words, envelope=env,
+        uplift=uplift_lines(env=env))

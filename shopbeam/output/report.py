@@ -103,18 +103,16 @@ def render(result: Result) -> str:
             mom = f"   moment {r.moment}" if r.moment else ""
             up = "  (pulls down: uplift)" if r.uplift else ""
             lines.append(f"    {r.kind:<7} at {r.at:<12} force {r.force}{mom}{up}")
-    if result.reaction_envelope:
+    if p.envelope:
         lines.append("")
         lines.append("REACTION ENVELOPE (each support over every load state: what a bracket or "
                      "anchor must carry)")
-        for r in result.reaction_envelope:
-            lines.append(f"  {r['type']:<7} at {fmt_pos(r['at'], sy):<12} largest up "
-                         f"{f(r['max_up'], 'force'):<14} largest down "
-                         f"{f(r['max_down'], 'force')}"
-                         + ("  (uplift)" if r["max_down"] < 0 else ""))
-            for which, key in (("up", "max_up_state"), ("down", "max_down_state")):
-                if r.get(key):
-                    lines += _wrap(f"{which}: {r[key]}", "      ")
+        for r in p.envelope:
+            lines.append(f"  {r.kind:<7} at {r.at:<12} largest up {r.max_up:<14} largest down "
+                         f"{r.max_down}" + ("  (uplift)" if r.uplift else ""))
+            for which, state in (("up", r.up_state), ("down", r.down_state)):
+                if state:
+                    lines += _wrap(f"{which}: {state}", "      ")
     lines.append("")
 
     lines.append("EXTREMES (exact, with where they occur)")
@@ -135,9 +133,7 @@ def render(result: Result) -> str:
             lines += _wrap(f"worst state: {c.state}", "      ")
         for s in c.spans:
             lines.append(f"      {s}")
-    g = result.governing
-    lines.append(f"  governing: {g.name}, ratio {g.ratio:.3f} -> "
-                 + ("all checks PASS" if result.ok else "the member FAILS this check"))
+    lines.append(f"  governing: {p.governing} -> {p.verdict}")
     lines.append("")
 
     lines.append("SELF-CHECKS (run on every solve)")

@@ -238,7 +238,8 @@ def plot(result, name: str, width: int = 76, height: int = 12) -> str:
 
 def reactions_table(result) -> str:
     """The reactions, and with patterned loads those of the load state that governs (uplift
-    named): the same rows as the report (`output.present`)."""
+    named) and every support some load state pulls down: the same rows as the report
+    (`output.present`)."""
     p = present(result)
 
     def row(r, indent=""):
@@ -250,6 +251,9 @@ def reactions_table(result) -> str:
     if p.governing_state is not None:
         rows.append(f"In {p.governing_state.words}:")
         rows += [row(r) for r in p.governing_state.reactions]
+    if p.uplift:
+        rows.append("Uplift over every load state (anchor these supports):")
+        rows += [f"  {u}" for u in p.uplift]
     return "\n".join(rows)
 
 

@@ -165,10 +165,11 @@ class RatingView(_SheetView):
 def rating_text(job, width: int = 40, date=None) -> str:
     """The capacity report and the printable rating label, or why they are not there."""
     from shopbeam.design import capacity as mod
+    from shopbeam.output.capacityreport import render
 
     try:
         res = mod.capacity(job)
-        text = mod.render(res)
+        text = render(res)
     except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
