@@ -15,7 +15,8 @@ import pytest
 
 from shopbeam.cautions import LIFTING, banner, cautions_for
 from shopbeam.design.analysis import analyze, to_json
-from shopbeam.design.capacity import capacity, render
+from shopbeam.design.capacity import capacity
+from shopbeam.output.capacityreport import render
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.output.label import label_text, rating
 
