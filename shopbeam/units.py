@@ -43,7 +43,7 @@ def ureg():
     """The process's single pint registry, created on first use (it costs ~0.3 s)."""
     global _REGISTRY
     if _REGISTRY is None:
-        import pint
+        import pint  # noqa: PLC0415 - startup
 
         try:
             reg = pint.UnitRegistry(cache_folder=":auto:")

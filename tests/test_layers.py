@@ -89,12 +89,6 @@ def test_the_layer_test_sees_real_imports():
     assert _layer("shopbeam.tui.app") == "tui" and _layer("shopbeam.units") == "foundation"
 
 
-# One tangle is known and not yet untied: the checks of one load state call the local,
-# open-shape and lifting checks, which read the load states back. It may only shrink; any other cycle fails.
-KNOWN_TANGLE = {"shopbeam.design.checks", "shopbeam.design.lifting", "shopbeam.design.local",
-                "shopbeam.design.loading", "shopbeam.design.open_shapes"}
-
-
 def _cycles(g: dict[str, set[str]]) -> list[set[str]]:
     """The strongly connected groups of more than one module (Tarjan)."""
     index: dict[str, int] = {}
@@ -133,8 +127,7 @@ def _cycles(g: dict[str, set[str]]) -> list[set[str]]:
 
 
 def test_no_import_cycles():
-    new = [sorted(c) for c in _cycles(_graph()) if not c <= KNOWN_TANGLE]
-    assert new == []
+    assert [sorted(c) for c in _cycles(_graph())] == []
 
 
 def test_the_cycle_finder_finds_a_cycle():

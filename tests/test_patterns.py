@@ -242,7 +242,7 @@ def test_moving_reaction_envelope_against_a_fine_resolve():
 def test_hinge_shear_and_fixed_end_moment_over_patterns_match_the_walk():
     # a Gerber hinge in a 4-span shelf fixed at the left end: the connection states from the
     # envelopes give the same extremes as every one of the 16 patterns
-    from shopbeam.design.local import fixed_end_moments, hinge_shears
+    from shopbeam.design.connections import fixed_end_moments, hinge_shears
 
     text = shelf([6, 8, 8, 6], extra="", fixed_left=True)
     text = text.replace('[[loads]]', '[[supports]]\nat = "10 ft"\ntype = "hinge"\n[[loads]]', 1)

@@ -45,7 +45,7 @@ def cmd_solve(args) -> int:
         print(dumps_finite(to_json(result), args.job))
         return EXIT_OK
     if args.calc:
-        from shopbeam.output.calcsheet import calc_sheet  # brings sympy: only when asked
+        from shopbeam.output.calcsheet import calc_sheet  # noqa: PLC0415 - startup: sympy
 
         print(calc_sheet(job, result), end="")
         return EXIT_OK
@@ -97,8 +97,8 @@ def _with_kinds(parser) -> None:
     plain = parser.format_help
 
     def format_help():
-        from shopbeam.members.catalog import KIND_INFO, SHAPE_KINDS  # only for --help
-        from shopbeam.members.sections import SHAPES
+        from shopbeam.members.catalog import KIND_INFO, SHAPE_KINDS  # noqa: PLC0415 - startup
+        from shopbeam.members.sections import SHAPES  # noqa: PLC0415 - startup
 
         lines = ["", "catalog kinds (--kind):"]
         lines += [f"  {k:<11} {words}" for k, words in KIND_INFO.items()]
@@ -264,7 +264,7 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_shapes"))
 
     if with_library:  # the library's commands import it (start-up speed: only when needed)
-        from shopbeam.cli import library
+        from shopbeam.cli import library  # noqa: PLC0415 - startup
 
         library.add_parsers(sub)
     else:
@@ -285,7 +285,7 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
 def cmd_ui(args) -> int:
     if args.job:
         load(args.job)  # refuse a broken file with a clear message before the screen opens
-    from shopbeam.tui.app import make_app  # textual: only when the UI opens
+    from shopbeam.tui.app import make_app  # noqa: PLC0415 - startup: textual
 
     app = make_app(job_path=args.job, library=getattr(args, "library", None))
     app.run()
@@ -300,7 +300,7 @@ def resolve_job_arg(args) -> None:
         return
     if Path(job).is_file():
         return
-    from shopbeam.jobs.library import resolve_job  # the library only for a library name
+    from shopbeam.jobs.library import resolve_job  # noqa: PLC0415 - startup: library
 
     args.job = str(resolve_job(job, getattr(args, "library", None)))
 

@@ -11,7 +11,14 @@ from __future__ import annotations
 import sys
 from pathlib import Path
 
+from shopbeam.design.analysis import analyze
+from shopbeam.design.capacity import capacity
 from shopbeam.errors import InputError
+from shopbeam.jobs.jobfile import load_job
+from shopbeam.jobs.storage import atomic_write
+from shopbeam.output import calcpackage as cp
+from shopbeam.output import label
+from shopbeam.output.pdf import NoBrowser, PrintFailed, find_browser, print_pdf
 
 TITLE_OPTIONS = (("shop", "--shop", "the shop's name"),
                  ("job_number", "--job-number", "the job or work-order number"),
@@ -26,14 +33,12 @@ TITLE_OPTIONS = (("shop", "--shop", "the shop's name"),
 
 def job_path(args) -> Path:
     """The file of the job named on the command line (path or library name)."""
-    from shopbeam.jobs.library import resolve_job
+    from shopbeam.jobs.library import resolve_job  # noqa: PLC0415 - startup
 
     return resolve_job(args.job, getattr(args, "library", None))
 
 
 def _read(args):
-    from shopbeam.jobs.jobfile import load_job
-
     path = job_path(args)
     try:
         raw = path.read_bytes()
@@ -48,10 +53,6 @@ def _pdf_error(exc) -> InputError:
 
 def cmd_report(args) -> int:
     """`shopbeam report JOB [-o FILE.html|.md|.pdf] [title-block options]`."""
-    from shopbeam.design.analysis import analyze
-    from shopbeam.output import calcpackage as cp
-    from shopbeam.output.pdf import NoBrowser, PrintFailed, find_browser
-
     path, raw, job = _read(args)
     for w in job.warnings:
         print(w.located(), file=sys.stderr)
@@ -80,10 +81,6 @@ def cmd_report(args) -> int:
 
 def cmd_rating(args) -> int:
     """`shopbeam rating JOB [--width N] [--plaque [-o FILE]]`."""
-    from shopbeam.design.analysis import analyze
-    from shopbeam.design.capacity import capacity
-    from shopbeam.output import label
-
     _, _, job = _read(args)
     r = label.rating(capacity(job), analyze(job).unchecked)
     out = getattr(args, "output", None)
@@ -102,10 +99,6 @@ def cmd_rating(args) -> int:
 
 
 def _write_plaque(r, out: Path, paper: str, overwrite: bool) -> int:
-    from shopbeam.jobs.storage import atomic_write
-    from shopbeam.output import label
-    from shopbeam.output.pdf import NoBrowser, PrintFailed, print_pdf
-
     suffix = out.suffix.lower()
     if suffix not in (".html", ".htm", ".pdf", ".txt"):
         raise InputError(f"{str(out)!r}: the plaque is written as .html, .pdf or .txt (by the "
@@ -130,12 +123,12 @@ def _write_plaque(r, out: Path, paper: str, overwrite: bool) -> int:
 
 def cmd_library_check(args) -> int:
     """`shopbeam library check [--from shop|user|bundled] [--csv]`."""
-    from shopbeam.output import librarycheck as lc
+    from shopbeam.output import librarycheck as lc  # noqa: PLC0415 - startup: brings the library
 
     origin = getattr(args, "origin", None)
     lib = getattr(args, "library", None)
     if origin == "shop":
-        from shopbeam.jobs.library import place
+        from shopbeam.jobs.library import place  # noqa: PLC0415 - startup
 
         place("shop", lib)  # says how to set the shop library when none is
     rows = lc.check_library(lib, origin)

@@ -10,11 +10,17 @@ from dataclasses import dataclass
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import loading
-from shopbeam.design.checks import Check, Unchecked, check_notes, governing, impact_of
+from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, check_notes, governing,
+                                    impact_of, strengths)
+from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
+from shopbeam.design.lifting import profile_of
 from shopbeam.design.loading import run_checks
+from shopbeam.design.local import local_unchecked
+from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, torsion_note
 from shopbeam.jobs.jobfile import Job
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.engine.solver import Solution, sound_solve
+from shopbeam.members.sections import ANGLE_WARNING
 
 
 @dataclass(frozen=True)
@@ -47,9 +53,6 @@ def length_formatter(system: str):
 
 
 def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
-    from shopbeam.design.open_shapes import replaces_angle_warning
-    from shopbeam.members.sections import ANGLE_WARNING
-
     out = cautions_for(job.tags, job.lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
     if replaces_angle_warning(job):  # F10 checks the principal axes (or the job restrains it)
@@ -111,10 +114,6 @@ def analyze(job: Job) -> Result:
         shown = "; ".join(extra)
     else:
         checks = run_checks(job, sol)
-    from shopbeam.design.local import connection_notes
-
-    from shopbeam.design.checks import aluminum_unchecked
-
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) + [
         f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}." for u in aluminum_unchecked(job)]
     return Result(job, sol, tuple(checks),
@@ -125,8 +124,6 @@ def analyze(job: Job) -> Result:
 
 def member_notes(job: Job) -> list[str]:
     """Cautions about what the member type does that the checks do not cover in numbers."""
-    from shopbeam.design.open_shapes import torsion_note
-
     out = []
     t = torsion_note(job, job.section)
     if t:
@@ -141,8 +138,6 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     root and 2.5 for an overhang past a support (SSRC Guide / BS 5950-1 Table 14, from
     memory); the ratio at that length is given as a caution, from the same demand as the
     bending check (impact and load states included) when that check falls in the span."""
-    from shopbeam.design.checks import strengths
-
     st = strengths(job, beam=sol.beam)
     fl = st.flexure
     if fl.ltb is None or fl.stress_s is not None or job.braced:
@@ -177,21 +172,12 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
 
 def unchecked_for(job: Job) -> list[Unchecked]:
     """Limit states the member calls for that shopbeam does not check (see `Unchecked`)."""
-    from shopbeam.design.checks import strengths
-    from shopbeam.design.local import local_unchecked
-    from shopbeam.design.open_shapes import open_unchecked
-
     st = strengths(job)
-    from shopbeam.design.checks import aluminum_unchecked
-
     return list(st.unchecked) + local_unchecked(job) + open_unchecked(job, st) + \
         aluminum_unchecked(job)
 
 
 def _lifting_json(job) -> dict | None:
-    from shopbeam.design.checks import impact_of
-    from shopbeam.design.lifting import profile_of
-
     p = profile_of(job)
     if p is None:
         return None
@@ -202,8 +188,6 @@ def _lifting_json(job) -> dict | None:
 
 def to_json(result: Result) -> dict:
     """The contract's JSON (SI units throughout)."""
-    from shopbeam.design.local import fixed_end_moments, hinge_shears
-
     job, sol = result.job, result.solution
     ex = sol.extremes()
     return {

@@ -27,6 +27,8 @@ from shopbeam.design.analysis import analyze
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
+from shopbeam.design.local import local_unchecked
+from shopbeam.design.open_shapes import open_unchecked
 
 
 # ------------------------------------------------------------------ root finding
@@ -120,9 +122,6 @@ def _fixed_is_zero(ss) -> bool:
 def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     """Why a capacity must not be posted: every limit state the member calls for that was not
     checked and would block a rating, and any failed self-check of the solve."""
-    from shopbeam.design.local import local_unchecked
-    from shopbeam.design.open_shapes import open_unchecked
-
     every = list(st.unchecked) + local_unchecked(job, st.section) + open_unchecked(job, st)
     every += aluminum_unchecked(job, st.section)
     out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in every if u.blocks_rating]

@@ -31,22 +31,22 @@ from __future__ import annotations
 
 import math
 import re
-from dataclasses import dataclass, field, replace
+from dataclasses import dataclass, replace
 
-import numpy as np
-
-from shopbeam.engine.solver import Solution, segments
+from shopbeam.design import aluminum, lifting, local, lumber, open_shapes
+from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noqa: F401 (re-exported)
+                                   OMEGA_ADM, OMEGA_B, OMEGA_V, OMEGA_V_ROLLED_I, PSI_PA, basis_of,
+                                   brace_points, cb_factor, nominal_moment, support_braces,
+                                   unbraced_segments)
+from shopbeam.design.lifting import lifting_notes, lifting_unchecked, profile_of
+from shopbeam.design.results import Check, Unchecked
+from shopbeam.engine.solver import Solution, segments, solve
 from shopbeam.jobs.rules import LIFTING_PROFILES
+from shopbeam.members.catalog import lumber_nominal
 from shopbeam.jobs.rules import (DEFAULT_IMPACT, DEFLECTION_PRESETS,  # noqa: F401 (re-exported)
                                  LIFTING_DEFAULT_RATIO, LIVE_DEFLECTION_PRESETS, Basis)
 from shopbeam.units import fmt
 
-OMEGA_B = 1.67  # AISC 360-16 F1
-OMEGA_V = 1.67  # AISC 360-16 G1
-OMEGA_V_ROLLED_I = 1.50  # AISC 360-16 G2.1(a)
-OMEGA_ADM = 1.65  # Aluminum Design Manual 2015, yielding (from memory)
-PSI_PA = 6894.757293168361
-CB_MAX = 3.0  # AISC 360-16 F1: Cb need not exceed 3.0 (upper bound used here)
 
 
 def stress_words(pa: float, system: str = "us", ksi: bool = False) -> str:
@@ -58,99 +58,10 @@ def stress_words(pa: float, system: str = "us", ksi: bool = False) -> str:
 
 
 
-@dataclass(frozen=True)
-class Check:
-    """One limit state of one member: demand against limit, with where it comes from.
-
-    `clause` names the provision (e.g. "AISC 360-16 F2"), `source` the standard or handbook
-    (or "common practice"), `params` the numbers the check used (SI floats, e.g. Lb, Lp, Lr,
-    Cb) for renderers to format in the job's units, and `state` the load state that governs
-    (empty when the job has one state).
-    """
-
-    name: str
-    demand: float
-    limit: float
-    unit: str  # SI unit of demand and limit
-    formula: str
-    at: float | None = None  # where the demand occurs (m)
-    detail: str = ""
-    extra: dict = field(default_factory=dict)
-    clause: str = ""
-    source: str = ""
-    params: dict = field(default_factory=dict)
-    state: str = ""
-
-    @property
-    def ratio(self) -> float:
-        if self.limit <= 0:
-            return float("inf") if self.demand > 0 else 0.0
-        return self.demand / self.limit
-
-    @property
-    def ok(self) -> bool:
-        return self.ratio <= 1.0
-
-    @property
-    def detail_text(self) -> str:
-        """The detail with the governing load state, as the JSON's `detail` carries it."""
-        return "; ".join(x for x in (self.detail, self.state and "worst state: " + self.state)
-                         if x)
-
-    def as_dict(self) -> dict:
-        return {"name": self.name, "demand": float(self.demand), "limit": float(self.limit),
-                "ratio": float(self.ratio), "ok": bool(self.ok), "unit": self.unit,
-                "formula": self.formula, "at": None if self.at is None else float(self.at),
-                "detail": self.detail_text, "clause": self.clause, "source": self.source,
-                "params": {k: float(v) for k, v in self.params.items()}, "state": self.state}
-
-
-@dataclass(frozen=True)
-class Unchecked:
-    """A limit state the member type calls for that shopbeam did not check, and why.
-
-    A capacity or rating never rests on a job with an unchecked limit state that could
-    govern: it says "not rated" with these reasons (or carries them as warnings).
-    """
-
-    name: str  # e.g. "lateral-torsional buckling"
-    reason: str  # what is missing or not implemented, and what to do
-    clause: str = ""  # the provision that would apply
-    blocks_rating: bool = True  # False: only a caution, the rating may stand
-
-    def as_dict(self) -> dict:
-        return {"name": self.name, "reason": self.reason, "clause": self.clause,
-                "blocks_rating": self.blocks_rating}
-
-
 # ------------------------------------------------------------------ job options
-def basis_of(job) -> str:
-    """"asd", "first-yield", "aluminum" or "lumber" (the material decides the last two)."""
-    kind = getattr(job.material, "kind", "custom")
-    if kind == "lumber":
-        return "lumber"
-    asked = job.criteria.basis
-    if kind == "aluminum":
-        return "first-yield" if asked == Basis.FIRST_YIELD else "aluminum"
-    if asked != Basis.AUTO:
-        return asked.value
-    return "asd" if kind in ("steel", "stainless") else "first-yield"
-
-
-BASIS_WORDS = {
-    "asd": "AISC 360-16 allowable strength design (ASD)",
-    "first-yield": "first yield with a safety factor",
-    "aluminum": "Aluminum Design Manual 2015 ASD, yielding and rupture (from memory)",
-    "lumber": "NDS 2018 allowable stress design with the Table 4.3.1 adjustment factors "
-              "(reference values from memory)",
-}
-
-
 def impact_of(job) -> float:
     """Impact allowance on live loads: as written, else the lifting profile's, else 0."""
     if job.criteria.impact is None:
-        from shopbeam.design.lifting import profile_of
-
         prof = profile_of(job)
         return prof.impact if prof else 0.0
     return job.criteria.impact
@@ -163,54 +74,12 @@ def deflection_rule(job) -> tuple[float | None, float | None, str]:
         n, why = DEFLECTION_PRESETS[c.deflection_preset]
         return n, None, f"L/{n:g}: {why}"
     if not c.deflection_given and (job.lifting or getattr(c, "lifting", "")):
-        from shopbeam.design.lifting import profile_of
-
         prof = profile_of(job)
         src = LIFTING_PROFILES[prof.name]["deflection_source"]
         return prof.deflection, None, f"L/{prof.deflection:g}: {src} ({prof.name})"
     if c.deflection_abs is not None:
         return None, c.deflection_abs, c.deflection
     return c.deflection_ratio or 240.0, None, c.deflection
-
-
-def brace_points(job) -> tuple[bool, list[float]]:
-    """(continuously braced?, lateral brace positions) from beam.braced / beam.braces."""
-    return job.braced, list(job.braces)
-
-
-# A bearing support (fixed, pin, roller) holds the section against twist where it sits
-# unless the job says brace = false: the usual assumption of AISC 360-16 F2, whose
-# unbraced length runs between points braced against twist (common practice). A spring is
-# a brace only when the job says brace = true; a hinge never is.
-BRACE_BY_DEFAULT = {"fixed": True, "pin": True, "roller": True, "spring": False, "hinge": False}
-
-
-def support_braces(job, supports) -> list[float]:
-    """Positions of the supports that brace the member against twist (see BRACE_BY_DEFAULT)."""
-    out = [s.at for s in supports
-           if (s.brace if s.brace is not None else BRACE_BY_DEFAULT.get(s.kind, False))
-           and s.kind != "hinge"]
-    return sorted(set(out))
-
-
-def unbraced_segments(job, beam) -> list[tuple[float, float, bool]]:
-    """(start, end, free end?) of every laterally unbraced length."""
-    braced, pts = brace_points(job)
-    L = beam.length
-    sup = support_braces(job, beam.supports)
-    if braced:
-        return [(0.0, L, False)]
-    stops = sorted(set([0.0, L] + sup + pts))
-    held = set(sup) | set(pts)
-    tol = 1e-9 * L
-    out = []
-    for a, b in zip(stops, stops[1:]):
-        if b - a <= tol:
-            continue
-        free = (a <= tol and not any(abs(h) <= tol for h in held)) or (
-            b >= L - tol and not any(abs(h - L) <= tol for h in held))
-        out.append((a, b, free))
-    return out
 
 
 # ------------------------------------------------------------------ flexure
@@ -239,11 +108,9 @@ class Flexure:
         kind, p = self.ltb
         ln = lambda x, sig=4: fmt(x, "small_length", system, sig)  # noqa: E731
         if kind == "NDS":
-            from shopbeam.design.lumber import effective_length, stability_factor
-
             fb_star, s, emin, b, d = p
-            le, le_words = effective_length(lb, d, case)
-            cl, rb, fbe = stability_factor(fb_star, emin, b, d, le)
+            le, le_words = lumber.effective_length(lb, d, case)
+            cl, rb, fbe = lumber.stability_factor(fb_star, emin, b, d, le)
             over = ("; RB over 50, beyond NDS 3.3.3.7: brace the member" if rb > 50 else "")
             return cl * fb_star * s, (
                 f"CL {cl:.3f} by NDS 3.3.3: lu {ln(lb)}, {le_words} = "
@@ -469,8 +336,6 @@ def _adm_flexure(sec, mat, s, z, welded, system: str = "us") -> Flexure:
     then local buckling of the flat elements (shopbeam.design.aluminum, ADM 2015 B.5, F.8)
     over Omega 1.65 where an element is more slender than lambda1."""
     fl = _adm_yield_rupture(sec, mat, s, z, welded, system)
-    from shopbeam.design import aluminum
-
     w = bool(welded and mat.fy_welded)
     elems = aluminum.flat_elements(sec, mat.fy, mat.e, mat.fy_welded if w else None)
     slender = [el for el in elems if el.slender]
@@ -544,8 +409,6 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
     lim = adm_limits(fcy, mat.e)
     d, shape = sec.dims, sec.shape
     elems = []  # (name, ratio, limit key, is web)
-    from shopbeam.design import aluminum
-
     if aluminum.flat_elements(sec, mat.fy, mat.e):
         pass  # flat elements of tubes, I-beams and channels: checked (ADM B.5, F.8, G.2)
     elif shape == "rect-tube" and "t_des" in d:
@@ -592,8 +455,6 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
 
 
 def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
-    from shopbeam.design import lumber
-
     if sec.shape != "rect-bar":
         fb = mat.fb or mat.fy
         return Flexure(fb * s, 1.0, "NDS 3.3: fb = M / S <= Fb (a wood section that is not a "
@@ -608,8 +469,6 @@ def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
             f"{stress_words(f.fb_star * f.cfu, system)}")
     ltb = None
     warnings = ()
-    from shopbeam.members.catalog import lumber_nominal
-
     nominal = lumber_nominal(sec)  # NDS 4.4.1.1: d/b on nominal sizes for sawn lumber
     ratio = nominal[1] / nominal[0] if nominal else f.d / f.b
     if f.flat:
@@ -729,8 +588,6 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     av = sec.shear_area
     if basis == "lumber":
         if sec.shape == "rect-bar":
-            from shopbeam.design import lumber
-
             f = lumber.factors(sec, mat, service or lumber.Service())
             fac = f.factors
             return ShearStrength(f.fv * av, 1.0, f"NDS 3.4.2: fv = 1.5 V / A <= Fv' = Fv CD CM "
@@ -749,8 +606,6 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
         w = "Ftyw (welded)" if (welded and mat.fy_welded) else "Fty"
         text = (f"ADM 2015 G: Vn = Fsy Av = 0.6 {w} Av, 0.6 {w.split()[0]} = "
                 f"{stress_words(0.6 * fy, system, True)}, Omega 1.65")
-        from shopbeam.design import aluminum
-
         ht = aluminum.web_ratio(sec)
         if ht is not None:
             fs, l1, _, words = aluminum.shear_buckling(ht, 0.6 * mat.fy, e, system=system)
@@ -826,8 +681,6 @@ class Strengths:
 
 def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
     """The limit states this member calls for that the checks do not cover."""
-    from shopbeam.design.lifting import lifting_unchecked
-
     braced = brace_points(job)[0]
     out = [u for u in flex.unchecked
            if not (braced and u.name == "lateral-torsional buckling")]
@@ -848,9 +701,7 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     sf = job.criteria.safety_factor
     service = None
     if b == "lumber":
-        from shopbeam.design.lumber import service_of
-
-        service = service_of(job)
+        service = lumber.service_of(job)
     fl = flexure(sec, job.material, b, sf, job.welded, service=service, system=job.units)
     sh = shear_strength(sec, job.material, b, sf, job.welded, service=service,
                         system=job.units)
@@ -870,8 +721,6 @@ def strengths(job, sec=None, beam=None) -> Strengths:
 
 def _wood_load_case(job, a: float, b: float, free: bool) -> str:
     """NDS Table 3.3.3 row for the loads of the job on the unbraced length a..b."""
-    from shopbeam.design.lumber import load_case
-
     if job.moving:
         return "any"
     tol = 1e-9 * job.length
@@ -879,15 +728,13 @@ def _wood_load_case(job, a: float, b: float, free: bool) -> str:
     ends_held = [any(abs(x - h) <= tol for h in held) for x in (a, b)]
     if not free and not all(ends_held):
         return "any"  # a length ending at a brace: Table 3.3.3 footnote (general rows)
-    return load_case(job.member_loads(), a, b, free, free and b >= job.length * (1 - 1e-9))
+    return lumber.load_case(job.member_loads(), a, b, free, free and b >= job.length * (1 - 1e-9))
 
 
 def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
     """A below-the-hook beam: ASME BTH-1 design factor Nd in place of the AISC Omegas
     (3-2.3.1: Fb = 1.10 Fy / Nd for compact sections, so Mn is capped at 1.10 Fy S; 3-2.2:
     Fv = Fy / (Nd sqrt 3), i.e. Omega_v = 0.6 sqrt(3) Nd on Vn = 0.6 Fy Aw; from memory)."""
-    from shopbeam.design.lifting import profile_of
-
     prof = profile_of(job)
     if prof is None or prof.nd is None or fl.stress_s is not None or fl.omega != OMEGA_B:
         return fl, sh
@@ -898,22 +745,6 @@ def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
     sh = replace(sh, omega=0.6 * math.sqrt(3) * prof.nd,
                  text=sh.text + f"; ASME BTH-1 Fv = Fy / (Nd sqrt 3), Nd {prof.nd:g}")
     return fl, sh
-
-
-def cb_factor(mmax, ma, mb, mc):
-    """AISC 360-16 F1-1 (Rm = 1): Cb = 12.5 Mmax / (2.5 Mmax + 3 MA + 4 MB + 3 MC) <= 3.
-
-    Takes floats or numpy arrays (the sizing sweep passes one value per section and state)."""
-    den = 2.5 * mmax + 3 * ma + 4 * mb + 3 * mc
-    if np.ndim(den) == 0:
-        return 1.0 if den <= 0 else min(12.5 * mmax / den, CB_MAX)
-    safe = np.where(den > 0, den, 1.0)
-    return np.where(den > 0, np.minimum(12.5 * mmax / safe, CB_MAX), 1.0)
-
-
-def nominal_moment(cap, ltb1, cb):
-    """Mn = min(cap, Cb x ltb1(Lb)) (floats or numpy arrays): see `Flexure`."""
-    return np.minimum(cap, cb * ltb1)
 
 
 def judged_length(a: float, b: float, kind: str) -> float:
@@ -1030,8 +861,6 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                  | ({k: float(fl.wood.factors[k]) for k in ("CM_e", "Ct_e")}
                     if fl.wood is not None else {}),
                  **dict(zip(("clause", "source"), deflection_provenance(job))))
-    from shopbeam.design import local, open_shapes
-
     sec = st.section or job.section
     if fl.special:
         bend = open_shapes.bending_check(job, sol, st, sec, cb_one) or bend
@@ -1053,8 +882,6 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
         out += bearing_checks(job, sol, fl.wood)
         out += dead_load_checks(job, sol, st)
     if job.lifting or getattr(job.criteria, "lifting", ""):
-        from shopbeam.design import lifting
-
         wc = lifting.wheel_check(job, sol, sec, job.material)
         if wc is not None:
             out.append(wc)
@@ -1069,8 +896,6 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
 def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     """NDS 2018 2.3.2: the dead load alone is checked with CD = 0.9 (permanent) when the job's
     duration is shorter; it governs when the dead load is a large part of the total."""
-    from dataclasses import replace as _replace
-
     fl, sh = st.flexure, st.shear
     wf = fl.wood
     cd = wf.factors["CD"]
@@ -1080,7 +905,7 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     r = 0.9 / cd
     dsol = _solve_loads(sol, dead)
     s = fl.stress_s
-    scaled = _replace(fl, cap=fl.cap * r, ltb=("NDS", (wf.fb_star * r,) + fl.ltb[1][1:])
+    scaled = replace(fl, cap=fl.cap * r, ltb=("NDS", (wf.fb_star * r,) + fl.ltb[1][1:])
                       if fl.ltb else None)
     braced = brace_points(job)[0]
     worst = None
@@ -1109,11 +934,7 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
 
 def _solve_loads(sol: Solution, loads) -> Solution:
     """The same beam under other loads (creep and live-only deflection)."""
-    from dataclasses import replace as _replace
-
-    from shopbeam.engine.solver import solve
-
-    return solve(_replace(sol.beam, loads=tuple(loads)))
+    return solve(replace(sol.beam, loads=tuple(loads)))
 
 
 def bearing_checks(job, sol: Solution, wf) -> list[Check]:
@@ -1121,8 +942,6 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
     load (NDS 2018 3.10.2; a fixed end is a connection, not checked here):
     fc_perp = R / (b lb) <= Fc_perp' = Fc_perp CM Ct Cb, lb the job's bearing length there
     (``bearing`` on the support or load, else ``[beam] bearing``, else 1-1/2 in, stated)."""
-    from shopbeam.design.lumber import DEFAULT_BEARING, bearing_area_factor
-
     if not wf.values.fc_perp:
         return []
     b = wf.b
@@ -1133,7 +952,7 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
         lb = bearings.get(key) or common
         if lb:
             return lb, "as given"
-        return DEFAULT_BEARING, ("default 1-1/2 in, one 2x plate: give bearing under [beam] or "
+        return lumber.DEFAULT_BEARING, ("default 1-1/2 in, one 2x plate: give bearing under [beam] or "
                                  "on the support or load (common practice)")
 
     # a fixed end is a connection (its design is not a bearing check); pins, rollers and
@@ -1146,7 +965,7 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
     for at, force, what, key in spots:
         lb, stated = length_at(key)
         end = min(at, sol.beam.length - at) / 0.0254
-        cb, cb_words = bearing_area_factor(lb / 0.0254, end)
+        cb, cb_words = lumber.bearing_area_factor(lb / 0.0254, end)
         demand, limit = force / (b * lb), wf.fc_perp * cb
         if worst is None or demand / limit > worst[0]:
             worst = (demand / limit, demand, limit, at, what, cb, cb_words, lb, stated)
@@ -1241,8 +1060,6 @@ def deflection_provenance(job) -> tuple[str, str]:
                 f"\"{c.deflection_preset}\" ({limit} per span)", DEFLECTION_PRESETS[
                     c.deflection_preset][1])
     if not c.deflection_given and (job.lifting or c.lifting):
-        from shopbeam.design.lifting import profile_of
-
         prof = profile_of(job)
         return (f"serviceability limit of the {prof.name} lifting profile ({limit} per span; "
                 "no [criteria] deflection given)",
@@ -1293,8 +1110,6 @@ def check_notes(job) -> list[str]:
         out.append(f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}"
                    + ("; no rating is posted" if u.blocks_rating else ""))
     imp = impact_of(job)
-    from shopbeam.design.lifting import lifting_notes, profile_of
-
     prof = profile_of(job)
     if imp:
         why = ("as written in [criteria] impact" if job.criteria.impact is not None else

@@ -44,6 +44,9 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass, replace
 
+from shopbeam.design.results import Check, Unchecked
+from shopbeam.engine.model import Load
+from shopbeam.engine.solver import solve
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.units import fmt
 
@@ -153,8 +156,6 @@ def flange_tf_at_wheel(sec, a: float) -> tuple[float, bool]:
 
 def wheel_check(job, sol, sec, mat, global_allow=None):
     """The bottom-flange check under the worst wheel of the [[moving]] set in this state."""
-    from shopbeam.design.checks import Check
-
     if sec.shape != "i-beam" or sec.axis != "strong":
         return None
     ws = job.moving[0] if job.moving else None
@@ -227,15 +228,10 @@ def flange_weak_strength(sec, mat) -> tuple[float, str]:
 
 def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
     """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
-    from shopbeam.design.checks import Check
-    from shopbeam.design.loading import read_moving
-    from shopbeam.engine.model import Load
-    from shopbeam.engine.solver import solve
-
     if prof is None or not prof.lateral or not job.moving or sec.shape != "i-beam" \
             or sec.axis != "strong":
         return None
-    mv = read_moving(job)[0]
+    mv = job.member_moving()[0]
     wheels = [ld for ld in sol.beam.loads if (ld.key or "") == mv.key and ld.kind == "point"]
     if len(wheels) != len(mv.live):
         return None
@@ -298,8 +294,6 @@ def _i_shape(sec) -> bool:
 
 def lifting_unchecked(job, sec) -> list:
     """Trolley-wheel and lateral-force limit states of sections these checks do not cover."""
-    from shopbeam.design.checks import Unchecked
-
     if not job.moving or not (job.lifting or getattr(job.criteria, "lifting", "")):
         return []
     if _i_shape(sec):

@@ -67,10 +67,8 @@ class MovingLoad:
 
 def read_moving(job) -> tuple[MovingLoad, ...]:
     """The job's wheel sets as one member carries them (its share of the wheel loads)."""
-    share = 1.0 / job.members
-    return tuple(MovingLoad(w.label, tuple(x * share for x in w.live),
-                            tuple(x * share for x in w.dead), w.offsets, w.travel, w.key)
-                 for w in job.moving)
+    return tuple(MovingLoad(w.label, w.live, w.dead, w.offsets, w.travel, w.key)
+                 for w in job.member_moving())
 
 
 # ------------------------------------------------------------------ load parts

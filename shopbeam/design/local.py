@@ -38,7 +38,11 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from shopbeam.design.checks import Check, Unchecked
+import numpy as np
+
+from shopbeam import units
+from shopbeam.design.lifting import profile_of
+from shopbeam.design.results import Check, Unchecked
 
 OMEGA_FLB = 1.67  # AISC 360-16 J10.1
 OMEGA_WLY = 1.50  # AISC 360-16 J10.2
@@ -146,8 +150,6 @@ def face_of(job, key: str) -> str:
 def forces_of(job, sol) -> list[Force]:
     """Every concentrated force of one solved state: reactions (on the bottom face; not at a
     fixed end, which is a connection) and point loads summed where they act together."""
-    from shopbeam import units
-
     fmt = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
     out = []
     for n, r in enumerate(sol.reactions):
@@ -247,8 +249,6 @@ def design_factor_scale(job) -> float:
     """A below-the-hook beam (ASME BTH-1): the AISC Omegas of these checks times Nd / 1.67,
     the ratio of its design factor to the AISC one (BTH-1 gives no local-force rules of its
     own here; the same margin over AISC ASD as its bending check, from memory). Else 1."""
-    from shopbeam.design.lifting import profile_of
-
     prof = profile_of(job)
     return prof.nd / 1.67 if prof is not None and prof.nd else 1.0
 
@@ -277,8 +277,6 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
     fixed part, self-weight part per unit weight, live part per state): every state's force
     is fixed + w_self x sw + k (1 + impact) x live[state]. Reactions come from the unit
     solutions; point loads from the load parts."""
-    import numpy as np
-
     out = []
     for n, r in enumerate(ss.fixed.reactions):
         if r.kind == "fixed":
@@ -346,8 +344,6 @@ def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
 
 
 def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
-    from shopbeam import units
-
     params_lb = f.bearing if f.bearing is not None else 0.0
     end = max(0.0, min(f.at, job.length - f.at))
     k_end = (applies(sec) == "web" and end_reaction_default(f, end, sec.dims["d"]))
@@ -429,78 +425,4 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                              "concentrated forces at supports and point loads of tees and "
                              "angles are not checked locally", "AISC 360-16 J10",
                              blocks_rating=False))
-    return out
-
-
-# ------------------------------------------------------------------ hinges and fixed ends
-def _states(job, sol):
-    """The solved states whose hinge shears and end moments count: every pattern of a
-    patterned job, else the solution given (the governing state with moving loads)."""
-    from shopbeam.design import loading
-
-    try:
-        parts = loading.load_parts(job)
-        if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
-            return loading.connection_states(job), "over every load pattern"
-        if parts.impact and not parts.moving:
-            ss = loading.state_set(job)
-            return [ss.state(1.0, ())], "impact included"
-    except Exception:  # noqa: BLE001 - the job's own checks report bad input
-        pass
-    return [sol], ""
-
-
-def hinge_shears(job, sol) -> list[dict]:
-    """Shear carried through each internal hinge (N, + as the shear diagram): the force a
-    Gerber hinge's connection must pass. Largest magnitude over the load states."""
-    hinges = [s.at for s in sol.beam.supports if s.kind == "hinge"]
-    if not hinges:
-        return []
-    states, words = _states(job, sol)
-    out = []
-    for x in hinges:
-        best = None
-        for st in states:
-            for side in ("left", "right"):
-                v = float(st.shear(x, side))
-                if best is None or abs(v) > abs(best):
-                    best = v
-        out.append({"at": float(x), "shear": best, "over": words})
-    return out
-
-
-def fixed_end_moments(job, sol) -> list[dict]:
-    """Moment and shear at each fixed support (largest moment over the load states)."""
-    fixed = [i for i, r in enumerate(sol.reactions) if r.kind == "fixed"]
-    if not fixed:
-        return []
-    states, words = _states(job, sol)
-    out = []
-    for i in fixed:
-        best = max((st.reactions[i] for st in states), key=lambda r: abs(r.moment))
-        out.append({"at": float(best.at), "moment": float(best.moment),
-                    "force": float(best.force), "over": words})
-    return out
-
-
-def connection_notes(job, sol) -> list[str]:
-    """Words for the report: hinge shears, and what a fixed end's connection must develop."""
-    from shopbeam import units
-
-    sy = job.units
-    out = []
-    for h in hinge_shears(job, sol):
-        out.append(f"Hinge at {units.fmt(h['at'], 'length', sy)} carries a shear of "
-                   f"{units.fmt(abs(h['shear']), 'force', sy)}"
-                   + (f" ({h['over']})" if h["over"] else "")
-                   + ": its connection (bolts, pin, seat) must pass this force; it is not "
-                   "checked here.")
-    for f in fixed_end_moments(job, sol):
-        out.append(f"Fixed end at {units.fmt(f['at'], 'length', sy)}: the connection must "
-                   f"develop a moment of {units.fmt(abs(f['moment']), 'moment', sy)} with a "
-                   f"shear of {units.fmt(abs(f['force']), 'force', sy)}"
-                   + (f" ({f['over']})" if f["over"] else "")
-                   + " (moment connection: full-penetration or fillet-welded flanges, end "
-                   "plate, or a socket). A bolted shear tab or clip angle is a pin: then "
-                   "re-run with type = \"pin\". The connection is not checked here.")
     return out

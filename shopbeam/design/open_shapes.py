@@ -53,7 +53,10 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from shopbeam.design.checks import OMEGA_B
+from shopbeam import units
+from shopbeam.design.basis import BASIS_WORDS, OMEGA_B, basis_of, brace_points, cb_factor
+from shopbeam.design.results import Check, Unchecked
+from shopbeam.members.sections import principal_factors
 
 F9_SOURCE = "AISC 360-16 F9 (equation numbers from memory)"
 F10_SOURCE = "AISC 360-16 F10 (equation numbers and Cb cap from memory)"
@@ -307,15 +310,11 @@ def applies(sec, basis: str, material_kind: str) -> str:
 
 
 def _segments(job, st):
-    from shopbeam.design.checks import brace_points
-
     braced = brace_points(job)[0]
     return braced, [(a, b, free) for a, b, free, *_ in st.ltb_segments]
 
 
 def _cb(m, a, b, mmax, free, cb_one) -> float:
-    from shopbeam.design.checks import cb_factor
-
     if cb_one or free or mmax <= 0:
         return 1.0
     q = [abs(float(m(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
@@ -324,7 +323,6 @@ def _cb(m, a, b, mmax, free, cb_one) -> float:
 
 def bending_check(job, sol, st, sec, cb_one: bool = False):
     """The F9 (tee) or F10 (angle) bending check of one solved state, or None."""
-    from shopbeam.design.checks import BASIS_WORDS, Check
 
     kind = applies(sec, st.basis, getattr(job.material, "kind", ""))
     if not kind:
@@ -348,7 +346,6 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
         if r and (worst is None or r[0] > worst[0]):
             worst = r + ((a, b),)
     ratio, demand, limit, at, text, params, (a, b) = worst
-    from shopbeam import units
 
     pos = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
     seg = "" if len(segs) == 1 else f"unbraced length {pos(a)} to {pos(b)} governs"
@@ -433,7 +430,6 @@ def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
 
 def deflection_words(job, sec) -> str:
     """What the deflection check means for an angle."""
-    from shopbeam.members.sections import principal_factors
 
     f = principal_factors(sec)
     if f is None:
@@ -448,7 +444,6 @@ def deflection_words(job, sec) -> str:
 def torsion_note(job, sec) -> str:
     """A quantified caution for loads in the plane of the web of a channel, tee or angle:
     the load acts off the shear centre and twists the member."""
-    from shopbeam import units
 
     shape = sec.shape
     d = sec.dims
@@ -504,7 +499,6 @@ def torsion_note(job, sec) -> str:
 
 def open_unchecked(job, st):
     """Unchecked limit states of open shapes (see `shopbeam.design.checks.Unchecked`)."""
-    from shopbeam.design.checks import Unchecked
 
     sec = st.section or job.section
     out = []
@@ -538,7 +532,6 @@ def open_unchecked(job, st):
 def replaces_angle_warning(job) -> bool:
     """True when the angle is checked by F10 (principal axes, or restrained as the job says),
     so the section's warning about geometric-axis bending no longer applies."""
-    from shopbeam.design.checks import basis_of
 
     sec = job.section
     if sec.shape != "angle":

@@ -23,13 +23,22 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from shopbeam import units
-from shopbeam.design.checks import (BASIS_WORDS, basis_of, cb_factor, deflection_limit,
-                                    deflection_rule, flexure, nominal_moment, shear_strength,
-                                    unbraced_segments)
+from shopbeam.cautions import cautions_for
+from shopbeam.design import local as _local
+from shopbeam.design.capacity import capacity
+from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
+                                    deflection_limit, deflection_rule, flexure, nominal_moment,
+                                    shear_strength, unbraced_segments)
+from shopbeam.design.loading import (_dummies, _positions, build_envelope, evaluate, load_parts,
+                                     state_set)
+from shopbeam.design.lumber import service_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
-from shopbeam.engine.solver import segments
-from shopbeam.members.sections import bending_ix
+from shopbeam.engine.solver import segments, solve
+from shopbeam.errors import InputError
+from shopbeam.members import catalog, wood
+from shopbeam.members.materials import get as get_material
+from shopbeam.members.sections import bending_ix, turn
 
 SLOW_LIMIT = 80  # sections checked one by one at most (springs, moving loads)
 
@@ -179,8 +188,6 @@ def _value_at(co: np.ndarray, breaks: np.ndarray, x: float) -> np.ndarray:
 
 # ------------------------------------------------------------------ candidates
 def default_kind(job) -> str:
-    from shopbeam.members import catalog
-
     if getattr(job.material, "kind", "") == "lumber":
         return "LVL" if job.material.key.startswith("LVL") else "lumber"
     m = re.match(r"[A-Za-z]+", job.section.designation or "")
@@ -200,8 +207,6 @@ def material_for_kind(job, kind: str):
     """(job, note): a sweep of lumber on a metal job, or of metal stock on a lumber job,
     switches to a stated default material of the swept family, never a lumber size in
     steel or a steel shape in wood."""
-    from shopbeam.members.materials import get as get_material
-
     mkind = getattr(job.material, "kind", "custom")
     wants_wood = kind in ("lumber", "LVL")
     if mkind == "custom" or wants_wood == (mkind == "lumber"):
@@ -216,20 +221,14 @@ def material_for_kind(job, kind: str):
 
 def _candidates(job, kind, max_depth, stock):
     """[(designation, section, material, price_per_m, note)] to sweep."""
-    from shopbeam.members.sections import turn
-
     weak = getattr(job.section, "axis", "strong") == "weak"
     out = []
     if stock is not None:
-        from shopbeam.members.materials import get as get_material
-
         for item in stock:
             mat = get_material(item.material) if item.material else job.material
             out.append((item.designation, item.section, mat or job.material, item.price_per_m,
                         item.note))
     else:
-        from shopbeam.members import catalog
-
         for sec in catalog.list_sections(kind):
             out.append((sec.designation, sec, job.material, None, ""))
     if weak:
@@ -258,7 +257,6 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     if stock is None:
         job, material_note = material_for_kind(job, kind)
     cands = _candidates(job, None if stock is not None else kind, max_depth, stock)
-    from shopbeam.design.loading import load_parts, state_set
 
     base = replace(job, self_weight=False)
     parts = load_parts(base)
@@ -280,9 +278,6 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
 
 
 def _size_all(job, max_depth, with_capacity, t0) -> SizeResult:
-    from shopbeam.errors import InputError
-    from shopbeam.members import catalog
-
     wood = getattr(job.material, "kind", "") in ("lumber", "lvl")
     rows: dict[str, SizeRow] = {}
     skipped, methods = [], set()
@@ -304,13 +299,10 @@ def _size_all(job, max_depth, with_capacity, t0) -> SizeResult:
 
 
 def _fast(job, base, parts, cands, state_set, with_capacity):
-    from shopbeam.errors import InputError
-
     if not cands:
         return [], []
     L = job.length
     sw_unit = Load("uniform", start=0.0, end=L, w1=-1.0, label="self-weight", case="dead")
-    from shopbeam.design.checks import brace_points
 
     braced, braces = brace_points(job)
     # brace points become breaks (zero loads), so unbraced lengths are whole pieces
@@ -323,8 +315,6 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     n_ratio, d_abs, _ = deflection_rule(job)
     imp = parts.impact
     # the self-weight solution alone: fixed = dead + sw_unit; split by solving sw alone
-    from shopbeam.design.loading import _dummies, _positions
-    from shopbeam.engine.solver import solve
 
     allpos = _positions(parts.fixed) | _positions(parts.live)
     for sl in ss.span_loads:
@@ -332,7 +322,6 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     sw_sol = solve(replace(empty, loads=(sw_unit,) + tuple(_dummies(allpos))))
     if sw_sol.moment.breaks.shape != ss.fixed.moment.breaks.shape:
         raise ValueError("sizing: the self-weight solution does not share the layout's breaks")
-    from shopbeam.design.loading import build_envelope
 
     def stack(name):
         """(dead, self-weight per unit, live states (S, P, w), breaks). Without patterns S = 1;
@@ -384,7 +373,6 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         live_limits.append(deflection_limit(a, bb, kind, live_n, None) if live_n else math.inf)
     # local checks at supports and point loads (shopbeam.design.local): every force is
     # fixed + w_self x sw + kk x live[state]; its allowable depends on its direction
-    from shopbeam.design import local as _local
 
     # live part per state of each force: with patterns, from each span's own part taken
     # where it adds (upper) and where it relieves (lower), the same two states as above
@@ -493,9 +481,6 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
         r[1], r[2], basis_of(replace(job, material=r[2])), job.criteria.safety_factor,
         job.welded).special]
     if special:
-        from shopbeam.design.capacity import capacity
-        from shopbeam.design.loading import evaluate
-
         for i in special:
             r = rs[i]
             j = replace(job, section=r[1], material=r[2])
@@ -556,10 +541,6 @@ def _capacity_vector(ratios, R: int) -> np.ndarray:
 
 def _wood_values(job, cands):
     """Each wood candidate with the reference values of its own size class and E'."""
-    from shopbeam.design.lumber import service_of
-    from shopbeam.members import wood
-    from shopbeam.members.materials import get as get_material
-
     svc = service_of(job)
     out = []
     for des, sec, mat, price, note in cands:
@@ -574,10 +555,6 @@ def _wood_values(job, cands):
 
 
 def _slow(job, cands):
-    from shopbeam.design.capacity import capacity
-    from shopbeam.errors import InputError
-    from shopbeam.design.loading import evaluate
-
     if len(cands) > SLOW_LIMIT:
         raise InputError(f"{len(cands)} sections to check one by one (the job has springs or "
                          f"moving loads); narrow the sweep to {SLOW_LIMIT} or fewer with "
@@ -599,8 +576,6 @@ def _slow(job, cands):
 
 # ------------------------------------------------------------------ output
 def to_json(res: SizeResult, top: int | None = None) -> dict:
-    from shopbeam.cautions import cautions_for
-
     rows = res.passing if top is None else res.passing[:top]
 
     def row(r):

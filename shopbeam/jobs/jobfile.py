@@ -154,6 +154,12 @@ class Job:
             out.append(sw.scaled(dead_factor) if dead_factor != 1.0 else sw)
         return tuple(out)
 
+    def member_moving(self) -> tuple[WheelSet, ...]:
+        """The wheel sets as one member carries them: its share of each wheel load."""
+        share = 1.0 / self.members
+        return tuple(replace(w, live=tuple(x * share for x in w.live),
+                             dead=tuple(x * share for x in w.dead)) for w in self.moving)
+
     def beam(self, live_factor: float = 1.0, dead_factor: float = 1.0) -> Beam:
         return Beam(self.length, self.ei, self.supports,
                     self.member_loads(live_factor, dead_factor))

@@ -511,7 +511,7 @@ def render_bytes(pkg: Package, kind: str) -> bytes:
         return to_markdown(pkg).encode("utf-8")
     html = to_html(pkg)
     if kind == "pdf":
-        from shopbeam.output.pdf import print_pdf  # only when a PDF is asked for
+        from shopbeam.output.pdf import print_pdf  # noqa: PLC0415 - only for a PDF
 
         return print_pdf(html)
     return html.encode("utf-8")

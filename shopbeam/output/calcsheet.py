@@ -29,7 +29,7 @@ SCALES = {
 
 def exact_number(v: float):
     """A float as a sympy Rational: the simple fraction it stands for when there is one."""
-    import sympy as sp
+    import sympy as sp  # noqa: PLC0415 - startup
 
     if v == 0:
         return sp.Integer(0)
@@ -76,8 +76,8 @@ def _at(expr, xv, sf):
 
 def exact_solve(beam: Beam, length_unit: float = 1.0, force_unit: float = 1.0) -> Exact:
     """Solve `beam` symbolically in the given units (default SI)."""
-    import sympy as sp
-    from sympy import SingularityFunction as SF
+    import sympy as sp  # noqa: PLC0415 - startup
+    from sympy import SingularityFunction as SF  # noqa: PLC0415 - startup
 
     lu, fu = length_unit, force_unit
     X = lambda v: exact_number(v / lu)  # noqa: E731
@@ -155,7 +155,7 @@ def _num(v) -> str:
 
 
 def _coef(c) -> str:
-    import sympy as sp
+    import sympy as sp  # noqa: PLC0415 - startup
 
     c = sp.nsimplify(c) if c.is_number else c
     if c.is_number:
@@ -167,8 +167,8 @@ def _coef(c) -> str:
 
 def brackets(expr, x) -> str:
     """A bracket expression as plain text: 445.9 <x>^-1 - 300 <x - 7/2>^-1 ..."""
-    import sympy as sp
-    from sympy import SingularityFunction as SF
+    import sympy as sp  # noqa: PLC0415 - startup
+    from sympy import SingularityFunction as SF  # noqa: PLC0415 - startup
 
     expr = sp.expand(expr)
     if expr == 0:
@@ -212,7 +212,7 @@ def brackets(expr, x) -> str:
 def calc_sheet(job, result=None) -> str:
     """The calc sheet for a job, in its display units (`result` is accepted for callers that
     have one; the sheet checks itself against a numeric solve of the same loads)."""
-    import sympy as sp
+    import sympy as sp  # noqa: PLC0415 - startup
 
     lu, fu, lab = SCALES[job.units]
     beam = job.beam()

@@ -9,9 +9,8 @@ dialogs are in `screens.py`.
 
 from __future__ import annotations
 
-from pathlib import Path
-
 import time
+from pathlib import Path
 
 from rich.text import Text
 from textual import events, work
@@ -22,6 +21,10 @@ from textual.widgets import ContentSwitcher, Footer, Input, Static
 from textual.worker import get_current_worker
 
 from shopbeam import units
+from shopbeam.errors import InputError
+from shopbeam.jobs import library, storage
+from shopbeam.tui import drawing
+from shopbeam.tui import session as session_mod
 from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, LengthScreen,
                                   LibraryScreen, SaveAsScreen)
 from shopbeam.tui.session import Session
@@ -29,7 +32,8 @@ from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowsView, SectionView, SpanView, load_warnings,
                                 problems_text)
-from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, ViewBar
+from shopbeam.tui.widgets import Banner, Choice, Field, OPTION_DIGITS, ViewBar
+
 
 # (id, key, name, short name, class); the first six are the input steps in order
 VIEWS = [
@@ -180,7 +184,6 @@ class JobScreen(Screen):
         if ev.result is None:
             lines = warn + problems_text(ev).splitlines()
             return "\n".join(lines[:3]) + ("\n  ... see 7 Results" if len(lines) > 3 else "")
-        from shopbeam.tui import drawing
 
         return "\n".join(warn + [drawing.summary_line(ev.result) + "   (7 results, 8 plots)"])
 
@@ -201,7 +204,6 @@ class JobScreen(Screen):
         time.sleep(SOLVE_DEBOUNCE)
         if session.version != version or get_current_worker().is_cancelled:
             return  # a newer edit came: its own worker solves it
-        from shopbeam.tui import session as session_mod
 
         ev = session_mod.evaluate_data(data, text, name)
         if session.version == version and not get_current_worker().is_cancelled:
@@ -625,8 +627,6 @@ class JobScreen(Screen):
 
     # ------------------------------------------------------------------ saving
     def _writable_places(self) -> list[str]:
-        from shopbeam.jobs import library
-
         places = [p.origin for p in library.places(self.session.library_dir) if p.writable]
         return ["user"] + [p for p in places if p != "user"]
 
@@ -648,15 +648,11 @@ class JobScreen(Screen):
             name, to = answer
             self._try_save(lambda overwrite: s.save_as(name, to, overwrite=overwrite), then)
 
-        from shopbeam.jobs import storage
 
         name = s.name or storage.suggest_name(str(s.doc.get("title") or "job"))
         self.app.push_screen(SaveAsScreen(name, self._writable_places()), got)
 
     def _try_save(self, do, then=None) -> None:
-        from shopbeam.jobs import storage
-        from shopbeam.errors import InputError
-
         try:
             path = do(False)
         except storage.SaveConflict as exc:
@@ -725,8 +721,6 @@ class JobScreen(Screen):
                                            highlight=highlight or self.session.path), chosen)
 
     def open_path(self, path) -> None:
-        from shopbeam.errors import InputError
-
         try:
             session = Session.open(path, library_dir=self.session.library_dir)
         except InputError as exc:
@@ -821,8 +815,6 @@ class ShopbeamApp(App):
 
 def _demo_path() -> Path | None:
     try:
-        from shopbeam.jobs import library
-
         return library.find("bundled:demo").path
     except Exception:  # noqa: BLE001 - no bundled presets: start on a new job
         here = Path(__file__).resolve().parents[2] / "presets" / "demo.toml"

@@ -10,8 +10,11 @@ from __future__ import annotations
 
 import math
 
+import numpy as np
+
 from shopbeam import units
 from shopbeam.output.present import present
+
 
 PLOT_KINDS = {  # name -> (display kind, title)
     "shear": ("force", "Shear V"),
@@ -155,8 +158,6 @@ def elevation(job, width: int = 76) -> str:
 
 def sample(pw, length: float, n: int = 400) -> tuple[list[float], list[float]]:
     """Points along a piecewise function, with both one-sided values at every break."""
-    import numpy as np
-
     xs = list(np.linspace(0.0, length, n))
     xs += [float(b) for b in pw.breaks]
     xs = sorted(set(xs))
@@ -193,7 +194,7 @@ def nice_ticks(lo: float, hi: float, n: int = 5) -> list[float]:
 
 def plot(result, name: str, width: int = 76, height: int = 12) -> str:
     """One plotext plot of shear, moment, slope or deflection, extremes marked and labelled."""
-    import plotext as plt
+    import plotext as plt  # noqa: PLC0415 - startup
 
     sol, job = result.solution, result.job
     sy = job.units

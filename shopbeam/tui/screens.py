@@ -5,6 +5,9 @@ Dialogs return their answer with `dismiss(value)`; the job screen decides what t
 
 from __future__ import annotations
 
+import textwrap
+from pathlib import Path
+
 from rich.text import Text
 from textual.app import ComposeResult
 from textual.binding import Binding
@@ -13,7 +16,10 @@ from textual.screen import ModalScreen, Screen
 from textual.widgets import Button, Footer, Input, OptionList, Static
 from textual.widgets.option_list import Option
 
+from shopbeam.errors import InputError
+from shopbeam.jobs import library, storage
 from shopbeam.tui.widgets import Banner, Choice, Field
+
 
 KEYS = [
     ("Anywhere, a text field included (the same on every screen)", [
@@ -58,8 +64,6 @@ KEYS = [
 
 
 def help_text(width: int = 74) -> str:
-    import textwrap
-
     out = ["shopbeam keys", ""]
     col = min(22, max(len(k) for _g, keys in KEYS for k, _w in keys) + 2)
     for group, keys in KEYS:
@@ -179,8 +183,6 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
 
     def on_field_edited(self, event: Field.Edited) -> None:
         event.stop()
-        from shopbeam.jobs import storage
-        from shopbeam.errors import InputError
 
         event.field.taken(event.value)
         try:
@@ -195,8 +197,6 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
 
     def _submit(self) -> None:
         name = self.query_one(Field).value.strip()
-        from shopbeam.jobs import storage
-        from shopbeam.errors import InputError
 
         try:
             storage.safe_name(name)
@@ -279,8 +279,6 @@ class LibraryScreen(Screen[object]):
         self.query_one(Field).input.focus()  # type to search at once; enter opens
 
     def fill(self, search: str, keep: bool = False) -> None:
-        from shopbeam.jobs import library
-
         lst = self.query_one("#lib-list", OptionList)
         was = lst.highlighted
         if not keep:
@@ -313,8 +311,6 @@ class LibraryScreen(Screen[object]):
             if keep and was is not None and was < n:
                 lst.highlighted = was
             elif self.highlight is not None:
-                from pathlib import Path
-
                 for i, e in enumerate(self.found):
                     if Path(e.path).resolve() == Path(self.highlight).resolve():
                         lst.highlighted = i
@@ -398,7 +394,6 @@ class LibraryScreen(Screen[object]):
         if i is None or not (0 <= i < len(self.found)):
             return
         e = self.found[i]
-        from shopbeam.jobs import library
 
         places = [p.origin for p in library.places(self.library_dir) if p.writable]
         places = ["user"] + [p for p in places if p != "user"]
@@ -407,8 +402,6 @@ class LibraryScreen(Screen[object]):
             if not answer:
                 return
             name, to = answer
-            from shopbeam.jobs import storage
-            from shopbeam.errors import InputError
 
             try:
                 library.copy(e.label, to=to, library_dir=self.library_dir, new_name=name)

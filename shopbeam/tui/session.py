@@ -11,7 +11,10 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 from pathlib import Path
 
+from shopbeam.design.analysis import analyze
 from shopbeam.errors import InputError, InputErrors, Problem, UnstableBeam
+from shopbeam.jobs import jobdoc, library
+from shopbeam.jobs.jobfile import parse_job_data
 
 
 @dataclass
@@ -57,8 +60,6 @@ def evaluate_data(data: dict, text: str, filename: str = "") -> Evaluation:
     """Validate and solve a job given as plain data plus its text (for line numbers).
 
     Pure: safe to run in a worker thread on a snapshot of the document."""
-    from shopbeam.jobs.jobfile import parse_job_data
-
     try:
         job = parse_job_data(data, filename, text)
     except InputErrors as exc:
@@ -68,8 +69,6 @@ def evaluate_data(data: dict, text: str, filename: str = "") -> Evaluation:
     except Exception as exc:  # noqa: BLE001 - a half-typed job must never crash the screen
         return Evaluation(problems=[Problem(f"cannot read the job: {type(exc).__name__}: {exc}")])
     try:
-        from shopbeam.design.analysis import analyze
-
         result = analyze(job)
     except UnstableBeam as exc:
         msg = str(exc).removeprefix("unstable beam: ")
@@ -107,8 +106,6 @@ class Session:
     @classmethod
     def open(cls, path, library_dir=None) -> "Session":
         """Open a job file (raises InputError when it is not valid TOML)."""
-        from shopbeam.jobs import jobdoc, library
-
         doc = jobdoc.load(path)
         origin = ""
         try:
@@ -126,8 +123,6 @@ class Session:
 
     @classmethod
     def new(cls, title: str = "New job", library_dir=None) -> "Session":
-        from shopbeam.jobs import jobdoc
-
         return cls(jobdoc.JobDoc.new(title), None, library_dir=library_dir)
 
     # ------------------------------------------------------------------ state
@@ -224,8 +219,6 @@ class Session:
 
         Raises storage.SaveConflict (someone changed the file), InputError (no file yet).
         """
-        from shopbeam.jobs import library
-
         if self.path is None:
             raise InputError("this job has no file yet: use Save as")
         if self.read_only:
@@ -237,8 +230,6 @@ class Session:
         return opened.path
 
     def save_as(self, name: str, to: str = "user", *, overwrite: bool = False):
-        from shopbeam.jobs import library
-
         opened = library.save_job(self.doc.text(), name=name, to=to,
                                   library_dir=self.library_dir, overwrite=overwrite)
         self._saved(opened, to)

@@ -7,6 +7,11 @@ until the answer comes; an error is shown in the view, never a crash.
 
 from __future__ import annotations
 
+import os
+import shlex
+import shutil
+import subprocess
+
 from rich.text import Text
 from textual import work
 from textual.app import ComposeResult
@@ -16,6 +21,12 @@ from textual.widgets import Button, OptionList, Static
 from textual.widgets.option_list import Option
 
 from shopbeam import units
+from shopbeam.design import sizing
+from shopbeam.design.analysis import analyze
+from shopbeam.design.capacity import capacity
+from shopbeam.jobs import library, storage
+from shopbeam.output import capacityreport
+from shopbeam.output import label as labels
 from shopbeam.tui.views import View, problems_text
 from shopbeam.tui.widgets import Choice
 
@@ -80,7 +91,6 @@ class _SheetView(View):
         or a read-only preset); never over an existing file; say the full path."""
         if self._not_ready():
             return
-        from shopbeam.jobs import library, storage
 
         session = self.screen.session
         if session.path is not None and not session.read_only:
@@ -105,9 +115,6 @@ class _SheetView(View):
         """Send the sheet to the printer command (SHOPBEAM_PRINT, default "lp")."""
         if self._not_ready():
             return
-        import os
-        import shlex
-        import shutil
 
         command = shlex.split(os.environ.get("SHOPBEAM_PRINT", "lp"))
         if not command or shutil.which(command[0]) is None:
@@ -120,8 +127,6 @@ class _SheetView(View):
 
     @work(thread=True, group="print", exit_on_error=False)
     def _print(self, command: list[str], text: str) -> None:
-        import subprocess
-
         try:
             r = subprocess.run(command, input=text, text=True, capture_output=True,
                                timeout=60)
@@ -145,7 +150,7 @@ class CalcView(_SheetView):
             "editing)...")
 
     def produce(self, job, result) -> str:
-        from shopbeam.output.calcsheet import calc_sheet
+        from shopbeam.output.calcsheet import calc_sheet  # noqa: PLC0415 - startup
 
         return calc_sheet(job, result)
 
@@ -164,19 +169,13 @@ class RatingView(_SheetView):
 
 def rating_text(job, width: int = 40, date=None) -> str:
     """The capacity report and the printable rating label, or why they are not there."""
-    from shopbeam.design import capacity as mod
-    from shopbeam.output.capacityreport import render
-
     try:
-        res = mod.capacity(job)
-        text = render(res)
+        res = capacity(job)
+        text = capacityreport.render(res)
     except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
     try:
-        from shopbeam.design.analysis import analyze
-        from shopbeam.output import label as labels
-
         label = labels.label_text(labels.rating(res, analyze(job).unchecked, date=date), width)
         lines += ["RATING LABEL (ctrl+r writes this view to a file, ctrl+p prints it)",
                   label.rstrip()]
@@ -216,7 +215,6 @@ class SizingView(View):
         if job is not None and not getattr(self, "_kind_set", False):
             self._kind_set = True
             kind = self.SHAPE_KIND.get(getattr(job.section, "shape", ""), None)
-            from shopbeam.design import sizing
 
             try:
                 kind = sizing.default_kind(job)
@@ -280,8 +278,6 @@ def size_rows(job, kind: str, top: int = 40) -> tuple[list[tuple[str, str]], str
 
 
 def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
-    from shopbeam.design import sizing
-
     sy = job.units
     res = sizing.size(job, kind=kind)
     passing = list(res.passing)

@@ -9,6 +9,7 @@ problem is shown beside the field in words, never lost and never a crash.
 from __future__ import annotations
 
 import re
+from dataclasses import replace
 
 from rich.text import Text
 from textual.app import ComposeResult
@@ -19,8 +20,15 @@ from textual.widgets import Button, OptionList, Static
 from textual.widgets.option_list import Option
 
 from shopbeam import units
+from shopbeam.cautions import cautions_for
+from shopbeam.design.checks import BASIS_WORDS, basis_of
+from shopbeam.design.lifting import profile_of
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
+from shopbeam.jobs.rules import LIFTING_PROFILES
+from shopbeam.members import catalog
+from shopbeam.members.materials import figures, list_materials
 from shopbeam.members.sections import DIMENSION_SHAPES, shape_keys
+from shopbeam.members.wood import DURATIONS, TEMPERATURES
 from shopbeam.tui import drawing
 from shopbeam.tui.widgets import Choice, Field
 
@@ -666,7 +674,6 @@ class SectionView(View):
     def fill_matches(self, text: str) -> None:
         lst = self.query_one("#sec-matches", OptionList)
         note = self.query_one("#sec-matches-note", Static)
-        from shopbeam.members import catalog
 
         text = (text or "").strip()
         if len(text) < 1:
@@ -731,7 +738,6 @@ class MaterialView(View):
             for k, label, _kind, ph in self.CUSTOM:
                 yield Field(label, f"mat.{k}", placeholder=ph)
         yield Static("", id="mat-props", markup=False)
-        from shopbeam.members.wood import DURATIONS, TEMPERATURES
 
         with Vertical(id="mat-wood"):
             yield Static("Wood in service (NDS 2018):", classes="sub-title")
@@ -741,8 +747,6 @@ class MaterialView(View):
             yield Choice("Repetitive", ["no", "yes"], key="beam.repetitive")
 
     def on_mount(self) -> None:
-        from shopbeam.members.materials import list_materials
-
         lst = self.query_one("#mat-list", OptionList)
         lst.add_options([Option(_text(f"{m.key:<13} {m.name}"), id=m.key)
                          for m in list_materials()])
@@ -773,7 +777,6 @@ class MaterialView(View):
         msg = ev.message_for("beam.material")
         if ev.job is not None and ev.job.material is not None:
             m, sy = ev.job.material, ev.job.units
-            from shopbeam.members.materials import figures
 
             shown = figures(m, sy) if m.kind in ("lumber", "stainless") else \
                 f"E {units.fmt(m.e, 'stress', sy, 5)}  Fy {units.fmt(m.fy, 'stress', sy)}"
@@ -806,8 +809,6 @@ class MaterialView(View):
         self.show_choice_messages(ev, {k: k for k in self.WOOD_KEYS})
 
     def choice_reading(self, choice, ev) -> str:
-        from shopbeam.members.wood import DURATIONS
-
         if choice.key == "criteria.duration":
             cd, words = DURATIONS[choice.value]
             return f"CD {cd:g}: {words} (NDS Table 2.3.2)"
@@ -838,8 +839,6 @@ class CriteriaView(View):
     title = "Criteria"
 
     def compose(self) -> ComposeResult:
-        from shopbeam.jobs.rules import LIFTING_PROFILES
-
         yield Static("Criteria: what the member is checked against.", classes="view-title")
         yield Field("Deflection", "criteria.deflection", placeholder="L/240 or 0.25 in")
         yield Field("Live defl.", "criteria.live_deflection",
@@ -897,20 +896,15 @@ class CriteriaView(View):
         if field.key == "criteria.impact":
             if c.impact is not None:
                 return f"= {c.impact:.0%} on the live loads"
-            from shopbeam.design.lifting import profile_of
 
             prof = profile_of(ev.job)
             return f"default: {prof.impact:.0%} ({prof.name})" if prof else "default: none"
         return ""
 
     def choice_reading(self, choice, ev) -> str:
-        from shopbeam.jobs.rules import LIFTING_PROFILES
-
         if choice.key == "criteria.lifting":
             p = LIFTING_PROFILES.get(choice.value)
             if p is None:
-                from shopbeam.design.lifting import profile_of
-
                 prof = profile_of(ev.job) if ev.job is not None else None
                 return (f"tagged lifting: taken as {prof.name} (the strictest fit)"
                         if prof else "not a lifting device")
@@ -932,7 +926,6 @@ def basis_words(ev) -> str:
     job = ev.job
     if job is None or job.material is None:
         return ""
-    from shopbeam.design.checks import BASIS_WORDS, basis_of
 
     basis = basis_of(job)
     sf = job.criteria.safety_factor
@@ -999,8 +992,6 @@ class ResultsView(View):
             q("#res-self").update(_text("SELF-CHECKS\n" + drawing.selfchecks_text(r)))
             cautions = list(r.cautions)
         else:
-            from shopbeam.cautions import cautions_for
-
             cautions = cautions_for(ev.job.tags if ev.job is not None else (),
                                     ev.job is not None and ev.job.lifting)
         warns = [p for p in ev.problems if p.warning]
@@ -1025,7 +1016,6 @@ class PlotsView(View):
         head = self.query_one("#plot-problems", Static)
         if r is not None and r.state_solution is not None:
             # patterned loads: draw the pattern that governs, and say which it is
-            from dataclasses import replace
 
             head.update(_text(f"Diagrams of {r.state_words}."))
             r = replace(r, solution=r.state_solution)

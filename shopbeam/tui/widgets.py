@@ -17,6 +17,7 @@ from textual.reactive import reactive
 from textual.widget import Widget
 from textual.widgets import Input, Label, Static
 
+from shopbeam.cautions import SHORT, SHORT_LIFTING, is_lifting
 
 
 # Esc typed quickly before a digit (or alt+digit) reaches the app as the character a Mac
@@ -313,8 +314,6 @@ class Banner(Static):
 
     def show(self, tags, lifting: bool = False) -> None:
         """`lifting`: a lifting device whatever the tags say (a named lifting profile)."""
-        from shopbeam.cautions import SHORT, SHORT_LIFTING, is_lifting
-
         if lifting or is_lifting(tags):
             self.add_class("-lifting")
             self.update(Text("!! " + SHORT_LIFTING + "\n" + SHORT))

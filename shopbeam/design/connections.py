@@ -1,0 +1,80 @@
+"""What the connections of a member must pass: the shear through each internal hinge and the
+moment and shear at each fixed end, the largest over the job's load states, in numbers for the
+JSON and in words for the report (the connections themselves are not checked).
+
+Above `loading` (it reads the load states), beside `local` (the member's own local checks).
+"""
+
+from __future__ import annotations
+
+from shopbeam import units
+from shopbeam.design import loading
+
+
+def _states(job, sol):
+    """The solved states whose hinge shears and end moments count: every pattern of a
+    patterned job, else the solution given (the governing state with moving loads)."""
+    try:
+        parts = loading.load_parts(job)
+        if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
+            return loading.connection_states(job), "over every load pattern"
+        if parts.impact and not parts.moving:
+            ss = loading.state_set(job)
+            return [ss.state(1.0, ())], "impact included"
+    except Exception:  # noqa: BLE001 - the job's own checks report bad input
+        pass
+    return [sol], ""
+
+
+def hinge_shears(job, sol) -> list[dict]:
+    """Shear carried through each internal hinge (N, + as the shear diagram): the force a
+    Gerber hinge's connection must pass. Largest magnitude over the load states."""
+    hinges = [s.at for s in sol.beam.supports if s.kind == "hinge"]
+    if not hinges:
+        return []
+    states, words = _states(job, sol)
+    out = []
+    for x in hinges:
+        best = None
+        for st in states:
+            for side in ("left", "right"):
+                v = float(st.shear(x, side))
+                if best is None or abs(v) > abs(best):
+                    best = v
+        out.append({"at": float(x), "shear": best, "over": words})
+    return out
+
+
+def fixed_end_moments(job, sol) -> list[dict]:
+    """Moment and shear at each fixed support (largest moment over the load states)."""
+    fixed = [i for i, r in enumerate(sol.reactions) if r.kind == "fixed"]
+    if not fixed:
+        return []
+    states, words = _states(job, sol)
+    out = []
+    for i in fixed:
+        best = max((st.reactions[i] for st in states), key=lambda r: abs(r.moment))
+        out.append({"at": float(best.at), "moment": float(best.moment),
+                    "force": float(best.force), "over": words})
+    return out
+
+
+def connection_notes(job, sol) -> list[str]:
+    """Words for the report: hinge shears, and what a fixed end's connection must develop."""
+    sy = job.units
+    out = []
+    for h in hinge_shears(job, sol):
+        out.append(f"Hinge at {units.fmt(h['at'], 'length', sy)} carries a shear of "
+                   f"{units.fmt(abs(h['shear']), 'force', sy)}"
+                   + (f" ({h['over']})" if h["over"] else "")
+                   + ": its connection (bolts, pin, seat) must pass this force; it is not "
+                   "checked here.")
+    for f in fixed_end_moments(job, sol):
+        out.append(f"Fixed end at {units.fmt(f['at'], 'length', sy)}: the connection must "
+                   f"develop a moment of {units.fmt(abs(f['moment']), 'moment', sy)} with a "
+                   f"shear of {units.fmt(abs(f['force']), 'force', sy)}"
+                   + (f" ({f['over']})" if f["over"] else "")
+                   + " (moment connection: full-penetration or fillet-welded flanges, end "
+                   "plate, or a socket). A bolted shear tab or clip angle is a pin: then "
+                   "re-run with type = \"pin\". The connection is not checked here.")
+    return out
