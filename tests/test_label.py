@@ -154,3 +154,43 @@ def test_shelf_speaks_per_shelf_and_per_member_without_a_bay():
     groups = [f.group for f in r.figures]
     assert "PER SHELF (2 members)" in groups and "PER MEMBER" in groups
     assert "PER BAY" not in label.label_text(r)
+
+
+# ------------------------------------------------------------------ per bay (issue 16)
+def _rack_text(extra: str) -> str:
+    text = (PRESETS / "pallet-rack-beam-pair.toml").read_text(encoding="utf-8")
+    return text.replace("\nmembers = 2 ", f"\nmembers = 2\n{extra}\n", 1)
+
+
+def test_rack_with_levels_posts_a_per_bay_total_rounded_down():
+    job = parse_job_text(_rack_text("levels = 4"))
+    assert job.levels == 4
+    cap = capacity(job)
+    r = label.rating(cap)
+    # the level carries two pallets of 600 lbf/ft x 40 in = 2000 lbf each (the job's text);
+    # the bay is four such levels: the posted level total times four, rounded down again
+    level = label.floor_sig(2 * 600 * 40 / 12 * cap.factor)
+    bay = [f for f in r.figures if f.group == "PER BAY (4 levels)"]
+    assert len(bay) == 1 and bay[0].label == "TOTAL"
+    assert bay[0].value == f"{int(label.floor_sig(level * 4))} lbf"
+    assert bay[0].si <= 4 * level * LBF * (1 + 1e-12)  # never above the levels' figures
+    assert "upright frames" in bay[0].note and f"{int(level)} lbf each" in bay[0].note
+    text = label.label_text(r)
+    assert "PER BAY (4 levels):" in text and "give [beam] levels" not in text
+    assert "PER BAY (4 levels)" in label.plaque_html(r)
+
+
+def test_rack_without_levels_says_how_to_get_the_per_bay_total():
+    job, cap = rack()
+    assert job.levels is None
+    text = label.label_text(label.rating(cap))
+    assert "PER BAY" in text and "levels = N" in re.sub(r"[|\s]+", " ", text)
+
+
+@pytest.mark.parametrize("bad", ["0", "51", "2.5", "\"4\"", "true"])
+def test_levels_must_be_a_whole_number(bad):
+    from shopbeam.errors import InputErrors
+
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(_rack_text(f"levels = {bad}"))
+    assert any(p.key == "beam.levels" for p in e.value.problems)

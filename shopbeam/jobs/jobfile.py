@@ -42,7 +42,7 @@ MAX_SUPPORTS = 200
 KNOWN_KEYS: dict[str, set[str]] = {
     "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
          "moving", "project"},
-    "beam": {"length", "section", "material", "self_weight", "axis", "members", "welded",
+    "beam": {"length", "section", "material", "self_weight", "axis", "members", "levels", "welded",
              "braces", "braced", "bearing", "restrained", "wet_service", "temperature",
              "repetitive"},
     "supports": {"at", "type", "stiffness", "label", "bearing", "brace"},
@@ -108,6 +108,7 @@ class Job:
     tags: tuple[str, ...] = ()
     self_weight: bool = True
     members: int = 1
+    levels: int | None = None  # beam.levels: levels of beams in one rack bay (the per-bay total)
     welded: bool = False
     braced: bool = False  # compression flange braced all along (beam.braced)
     braces: tuple[float, ...] = ()  # lateral brace positions, m, sorted (beam.braces)
@@ -904,7 +905,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
 
     beam = data.get("beam")
     length = section = material = wood_service = None
-    self_weight, members, welded = True, 1, False
+    self_weight, members, welded, levels = True, 1, False, None
     braced, braces = False, ()
     restrained, bearing, bearings, hung = False, None, {}, []
     if not _is_table(beam):
@@ -945,6 +946,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             r.error("members must be a whole number from 1 to 100 (identical members sharing "
                     "the loads)", "beam.members")
             members = 1
+        levels = beam.get("levels")
+        if levels is not None and (not isinstance(levels, int) or isinstance(levels, bool)
+                                   or not 1 <= levels <= 50):
+            r.error("levels must be a whole number from 1 to 50 (the levels of beams in one "
+                    "rack bay, for the rating plaque's per-bay total)", "beam.levels")
+            levels = None
         welded = beam.get("welded", False)
         if not isinstance(welded, bool):
             r.error("welded must be true or false (welded near the point of largest moment)",
@@ -1023,7 +1030,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         title=title.strip(), length=length, section=section, material=material,
         supports=tuple(sorted(supports, key=lambda s: s.at)), loads=tuple(loads),
         criteria=criteria, notes=notes, units=system, tags=tags,
-        self_weight=self_weight, members=members, welded=welded, braced=braced, braces=braces,
+        self_weight=self_weight, members=members, levels=levels, welded=welded, braced=braced,
+        braces=braces,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, hung=tuple(hung),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,

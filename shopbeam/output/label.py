@@ -11,8 +11,9 @@ rounded down from 9429"). The figures depend on the loads entered:
 - a moving wheel set: the max load per wheel and for the set;
 - loads shared by identical members (`members = 2`: a pair of rack beams, a shelf's two
   rails): the figures are per level / pair of beams (tags rack, pallet) or per shelf (tag
-  shelf) for the loads as entered, and per beam or member; racks also say what the total per
-  bay depends on (the upright frames are not checked).
+  shelf) for the loads as entered, and per beam or member; racks give the total per bay
+  (`[beam] levels = N`: the per-level total times the levels, rounded down) and say it is
+  also bounded by the upright frames (not checked).
 
 When the capacity carries "not rated" reasons (`CapacityResult.not_rated`), or a limit state
 that blocks a rating was not checked, there is no number: the label says NOT RATED and why.
@@ -170,18 +171,27 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
             figs.append(posted("TOTAL", tot * k, "force", sy, "placed as listed above", where))
         if live and any(ld.kind == "moment" for ld in live):
             notes.append("applied couples are rated with the loads above, as entered")
-    if n > 1:
-        tot_all = sum(abs(ld.total_force) for ld in live)
-        if mv:
-            tot_all += sum(abs(w) for w in mv[0].live) * n
-        if tot_all:
-            each = "PER BEAM" if rack else "PER MEMBER"
-            figs.append(posted("TOTAL", tot_all * k / n, "force", sy,
-                               f"each of {n} identical members carries 1/{n}", each))
-        if rack:
-            notes.append("PER BAY: the levels added up, and no more than the upright frames "
-                         "are rated for (frames, anchors and beam connectors are not checked "
-                         "here).")
+    tot_all = sum(abs(ld.total_force) for ld in live)
+    if mv:
+        tot_all += sum(abs(w) for w in mv[0].live) * n
+    if n > 1 and tot_all:
+        each = "PER BEAM" if rack else "PER MEMBER"
+        figs.append(posted("TOTAL", tot_all * k / n, "force", sy,
+                           f"each of {n} identical members carries 1/{n}", each))
+    levels = getattr(job, "levels", None)
+    if rack and levels and tot_all:
+        # the posted per-level total times the levels, rounded down again: never more than
+        # the levels' posted figures add up to
+        level = posted("TOTAL", tot_all * k, "force", sy)
+        figs.append(posted(
+            "TOTAL", level.si * levels, "force", sy,
+            f"{levels} levels at {level.value} each; and no more than the upright frames are "
+            "rated for (frames, anchors and beam connectors are not checked here)",
+            f"PER BAY ({levels} levels)"))
+    elif rack:
+        notes.append("PER BAY: the levels added up (give [beam] levels = N for the figure), "
+                     "and no more than the upright frames are rated for (frames, anchors and "
+                     "beam connectors are not checked here).")
     notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     return figs, notes
 
