@@ -331,7 +331,7 @@ def test_channel_loaded_in_the_plane_of_its_web_twists():
     note = next(c for c in res.cautions if c.startswith("channel"))
     assert "0.799 in" in note and "59.9" in note
     bend = _named(res, "bending")
-    assert bend.clause == "AISC 360-16 F2"
+    assert bend.clause.startswith("AISC 360-16 F2")  # with the section and equation
 
 
 def test_channel_held_against_twist_or_bent_on_its_back_has_no_torsion_gap():
@@ -344,7 +344,7 @@ def test_channel_held_against_twist_or_bent_on_its_back_has_no_torsion_gap():
     weak = analyze(chan(axis='axis = "weak"'))
     assert not [u for u in weak.unchecked if "torsion" in u.name]
     assert not [c for c in weak.cautions if c.startswith("channel")]
-    assert _named(weak, "bending").clause == "AISC 360-16 F6"
+    assert _named(weak, "bending").clause.startswith("AISC 360-16 F6")
 
 
 # ------------------------------------------------------------------ a load hung from a tube

@@ -129,3 +129,26 @@ def test_capacity_page_and_label_name_the_same_governing_check_and_state(shelf):
     assert gov.state in flat
     plaque = label.plaque_html(rating)
     assert gov.state in plaque and all(u in plaque for u in pc.uplift)
+
+
+def test_plaque_lists_what_each_support_carries_at_the_rated_load(shelf):
+    job, result = shelf
+    cap = capacity(job)
+    rating = label.rating(cap, result.unchecked)
+    k = cap.factor
+    # both spans loaded (the state that loads the middle bracket most): two equal spans under
+    # a uniform load w, middle reaction 10/8 w L (continuous-beam coefficients, from memory);
+    # w per member = k x 150/2 lbf/ft live + the self-weight
+    w = k * 150 * LBF / FT / job.members - job.self_weight_load().w1
+    mid = 1.25 * w * 5 * FT
+    expect = f"roller at {units.fmt(5 * FT, 'length', job.units)}: up to " \
+             f"{units.fmt(mid, 'force', job.units)}"
+    assert expect in rating.reactions
+    assert len(rating.reactions) == 3
+    assert sum("down to" in x for x in rating.reactions) == 2  # both end brackets lift
+    page = label.plaque_text(rating)
+    flat = re.sub(r"[|\s]+", " ", page)
+    assert "SUPPORTS at the rated load (each member, + up):" in flat and expect in flat
+    assert all(len(line) <= 78 for line in page.splitlines())
+    assert expect in label.plaque_html(rating)
+    assert "SUPPORTS at the rated load" not in label.label_text(rating)  # 40 columns: no room

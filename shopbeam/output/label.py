@@ -78,6 +78,10 @@ class Rating:
     governing_state: str = ""  # the load state that governs at the rated load ("": one state)
     uplift: tuple[str, ...] = ()  # supports the rated load pulls down, in words
     uplift_head: str = "UPLIFT at the rated load: anchor"
+    # the full-page plaque: what each support carries at the rated load (the largest up and
+    # down over every load state, `output.present.present_capacity`), per member
+    reactions: tuple[str, ...] = ()
+    reactions_head: str = "SUPPORTS at the rated load (+ up)"
 
 
 # ------------------------------------------------------------------ rounding
@@ -244,7 +248,12 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         governing_state=pc.governing_state if status == "rated" else "",
         uplift=pc.uplift if status == "rated" else (),
         uplift_head="UPLIFT at the rated load" + (" (each member)" if job.members > 1 else "")
-        + ": anchor")
+        + ": anchor",
+        reactions=tuple(f"{e.kind} at {e.at}: up to {e.max_up}"
+                        + (f", down to {e.max_down}" if e.uplift else "") for e in pc.envelope)
+        if status == "rated" else (),
+        reactions_head="SUPPORTS at the rated load (" + ("each member, " if job.members > 1
+                                                      else "") + "+ up)")
 
 
 def _profile_name(job) -> str:
@@ -342,8 +351,19 @@ def _body(r: Rating, row) -> None:
 
 # ------------------------------------------------------------------ full-page plaque
 def plaque_text(r: Rating, width: int = 78) -> str:
-    """The full-page plaque as plain text (fits a letter or A4 page at 10 characters per inch)."""
-    return label_text(r, width)
+    """The full-page plaque as plain text (fits a letter or A4 page at 10 characters per inch):
+    the label, and what each support carries at the rated load."""
+    text = label_text(r, width)
+    if not r.reactions:
+        return text
+    inner = width - 4
+    rows = ["| " + (r.reactions_head + ":").ljust(inner) + " |"]
+    for line in r.reactions:
+        rows += ["| " + piece.ljust(inner) + " |"
+                 for piece in textwrap.wrap("- " + line, inner, subsequent_indent="  ")]
+    lines = text.rstrip("\n").split("\n")
+    cut = next(i for i, ln in enumerate(lines) if ln.startswith("| Basis: "))
+    return "\n".join(lines[:cut] + rows + lines[cut:]) + "\n"
 
 
 def plaque_html(r: Rating, paper: str = "letter") -> str:
@@ -392,6 +412,9 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
     if r.governing and r.status == "rated":
         h.append(f'<p class="meta">Governing check: {e(r.governing)}'
                  + (f" (in {e(r.governing_state)})" if r.governing_state else "") + "</p>")
+    if r.reactions:
+        h.append(f"<p class=meta><b>{e(r.reactions_head)}</b></p><ul>"
+                 + "".join(f"<li>{e(x)}</li>" for x in r.reactions) + "</ul>")
     if r.uplift:
         h.append(f"<p class=meta><b>{e(r.uplift_head)}</b></p><ul>"
                  + "".join(f"<li>{e(u)}</li>" for u in r.uplift) + "</ul>")
