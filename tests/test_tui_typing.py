@@ -33,6 +33,7 @@ SIZE = (80, 24)
 BS = "\x7f"  # backspace as a terminal sends it
 HOME, END, DELETE, LEFT = "\x1b[H", "\x1b[F", "\x1b[3~", "\x1b[D"
 CTRL_U = "\x15"  # clear the field up to the cursor
+TAB, SHIFT_TAB = "\t", "\x1b[Z"
 
 
 @pytest.fixture(autouse=True)
@@ -84,16 +85,21 @@ def field(app, view: str, key: str) -> Field:
     return next(f for f in app.job_screen.query_one(f"#{view}").query(Field) if f.key == key)
 
 
-async def typed_job(preset: str, view_key: str, start: tuple[str, str], data: str,
+async def typed_job(preset: str, view_key: str, start: tuple, data: str,
                     fast: bool) -> tuple[str, object]:
-    """Open a preset, go to a view, put the cursor at the end of one field, type `data`;
-    return the job text and the last evaluation."""
+    """Open a preset, go to a view (and a row of its list: start[2]), put the cursor at the
+    end of one field, type `data`; return the job text and the last evaluation."""
     app = make_app(PRESETS / f"{preset}.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
         await pilot.press("escape", view_key)
         await settle(pilot)
-        f = field(app, *start)
+        if len(start) > 2:
+            lst = app.job_screen.query_one(f"#{start[0]}").query_one("RowList")
+            lst.focus()
+            lst.highlighted = start[2]
+            await settle(pilot)
+        f = field(app, *start[:2])
         f.input.focus()
         await settle(pilot)
         f.input.cursor_position = len(f.input.value)
@@ -115,12 +121,30 @@ CASES = {
     "tab-between-fields": ("demo", "3", ("loads", "load.start"),
                            CTRL_U + "1 ft\t" + CTRL_U + "9 ft\t" + CTRL_U + "-80 lbf/ft",
                            {"start": "1 ft", "end": "9 ft", "value": "-80 lbf/ft"}),
+    # the less common keys: bracing and bearing, typed and tabbed between
+    "braces-then-bearing": ("demo", "2", ("span", "beam.braces"),
+                            CTRL_U + "4 ft, 8 ft\t" + CTRL_U + "3-1/2 in",
+                            {"braces": ["4 ft", "8 ft"], "bearing": "3-1/2 in"}),
+    "support-bearing": ("demo", "2", ("span", "support.bearing", 1),
+                        CTRL_U + "4 in" + BS * 4 + "5-1/2 in", {"bearing": "5-1/2 in"}),
+    "point-load-bearing": ("demo", "3", ("loads", "load.bearing", 3),
+                           "6" + BS + "-6 in" + HOME + DELETE, {"bearing": "6 in"}),
+    "live-deflection": ("demo", "6", ("criteria", "criteria.live_deflection"),
+                        CTRL_U + "L/360", {"live_deflection": "L/360"}),
+    # a field entered by Tab has its text selected: the next key replaces it, typed fast
+    # or slowly alike (backspace clears it all, a character replaces it)
+    "tab-back-into-a-filled-field": ("demo", "6", ("criteria", "criteria.deflection"),
+                                     TAB + "L/360" + SHIFT_TAB + BS + "L/480" + TAB + "L/400",
+                                     {"deflection": "L/480", "live_deflection": "L/400"}),
+    "impact": ("demo", "6", ("criteria", "criteria.impact"), CTRL_U + "-25%" + HOME + DELETE,
+               {"impact": "25%"}),
 }
 
 
 def _assert_has(text: str, expected: dict) -> None:
     for k, v in expected.items():
-        assert f'{k} = "{v}"' in text, (k, v, text)
+        want = ("[" + ", ".join(f'"{x}"' for x in v) + "]") if isinstance(v, list) else f'"{v}"'
+        assert f"{k} = {want}" in text, (k, v, text)
 
 
 @pytest.mark.parametrize("case", list(CASES))
@@ -133,7 +157,10 @@ async def test_fast_typing_gives_the_job_slow_typing_gives(case):
     assert fast_text == slow_text
 
 
-@pytest.mark.parametrize("case", ["minus-250-psf", "tab-between-fields"])
+@pytest.mark.parametrize("case", ["minus-250-psf", "tab-between-fields",
+                                  "tab-back-into-a-filled-field",
+                                  "braces-then-bearing", "support-bearing",
+                                  "point-load-bearing", "impact"])
 @sync
 async def test_fast_typing_with_a_slow_solver(case, slow_solver):
     preset, view_key, start, data, expected = CASES[case]
@@ -171,6 +198,44 @@ async def test_a_field_with_focus_is_never_rewritten_by_a_late_solve(slow_solver
         await settle(pilot)
         assert f.value == "12 ft"
         assert app.job_screen.session.doc.get("beam.length") == "12 ft"
+
+
+F4, DOWN, CTRL_S = "\x1bOS", "\x1b[B", "\x13"
+# from the start of the job: the loads view (F4), down the list to the point load, Tab to
+# its Bearing, type it, Tab to Flange, "b" for bottom, save: one burst
+POINT_LOAD_BURST = F4 + TAB + DOWN * 3 + TAB * 7 + "6 in" + TAB + "b" + CTRL_S
+
+
+async def saved_after(path: Path, data: str, fast: bool) -> str:
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await send(pilot, data, fast)
+    return path.read_text(encoding="utf-8")
+
+
+@pytest.mark.parametrize("slow", [False, True], ids=["solver", "slow-solver"])
+@sync
+async def test_a_row_picked_then_tab_and_a_choice_then_save_at_full_speed(tmp_path, slow,
+                                                                          monkeypatch):
+    """Down in the list then Tab lands in the picked row's fields; a choice's letter then
+    ctrl+s saves the choice: typed as one burst or key by key, the same file."""
+    if slow:
+        real = session_mod.evaluate_data
+        monkeypatch.setattr(session_mod, "evaluate_data",
+                            lambda *a, **k: (time.sleep(0.25), real(*a, **k))[1])
+    texts = []
+    for fast in (False, True):
+        job = tmp_path / f"demo-{fast}.toml"
+        shutil.copy(PRESETS / "demo.toml", job)
+        texts.append(await saved_after(job, POINT_LOAD_BURST, fast))
+    original = (PRESETS / "demo.toml").read_text(encoding="utf-8")
+    slow_text, fast_text = texts
+    assert fast_text == slow_text
+    # exactly two lines more, both in the point load (the last table of the file)
+    added = [ln for ln in fast_text.splitlines() if ln not in original.splitlines()]
+    assert added == ['bearing = "6 in"', 'flange = "bottom"'], added
+    assert 'label = "stair"\nbearing = "6 in"\nflange = "bottom"\n' in fast_text
 
 
 # ---------------------------------------------------------------------- a real terminal
@@ -215,6 +280,32 @@ def test_tmux_keys_sent_at_full_speed_reach_the_saved_job(tmp_path):
         saved = job.read_text(encoding="utf-8")
         assert 'value = "-250 psf"' in saved, saved
         assert saved.replace('"-250 psf"', '"-100 psf"') == original
+    finally:
+        subprocess.run([TMUX, "-S", sock, "kill-server"], capture_output=True)
+
+
+@pytest.mark.skipif(TMUX is None, reason="tmux is not installed")
+def test_tmux_a_row_picked_and_a_choice_at_full_speed_reach_the_saved_job(tmp_path):
+    job = tmp_path / "demo.toml"
+    shutil.copy(PRESETS / "demo.toml", job)
+    original = job.read_text(encoding="utf-8")
+    sock = str(tmp_path / "tmux.sock")
+    env = dict(os.environ, SHOPBEAM_USER_DIR=str(tmp_path / "user"), TERM="xterm-256color")
+    env.pop("SHOPBEAM_LIBRARY", None)
+    cmd = f"{sys.executable} -m shopbeam ui {job}"
+    subprocess.run([TMUX, "-S", sock, "-f", os.devnull, "new-session", "-d", "-x", "80",
+                    "-y", "24", cmd], check=True, env=env)
+    try:
+        def screen() -> str:
+            return _tmux("-S", sock, "capture-pane", "-p")
+
+        assert _wait_for(lambda: "Screening check" in screen()), screen()
+        _tmux("-S", sock, "send-keys", "-t", "0", "F4", "Tab", "Down", "Down", "Down",
+              *(["Tab"] * 7), "6 in", "Tab", "b", "C-s")
+        assert _wait_for(lambda: job.read_text(encoding="utf-8") != original), screen()
+        saved = job.read_text(encoding="utf-8")
+        added = [ln for ln in saved.splitlines() if ln not in original.splitlines()]
+        assert added == ['bearing = "6 in"', 'flange = "bottom"'], saved
     finally:
         subprocess.run([TMUX, "-S", sock, "kill-server"], capture_output=True)
 

@@ -32,7 +32,7 @@ from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowsView, SectionView, SpanView, load_warnings,
                                 problems_text)
-from shopbeam.tui.widgets import Banner, Choice, Field, OPTION_DIGITS, ViewBar
+from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -135,6 +135,16 @@ class JobScreen(Screen):
             yield JobView(id="job")  # the other views are built when first shown
         yield Static("", id="summary", markup=False)
         yield Footer()
+
+    def set_focus(self, widget, scroll_visible: bool = True, from_app_focus: bool = False):
+        """Focus moves at once (a key of a burst goes where the keys before it sent the
+        focus); a text field entered this way has its text selected now, as it would be
+        when typed slowly."""
+        before = self.focused
+        super().set_focus(widget, scroll_visible, from_app_focus)
+        if widget is not None and self.focused is widget and widget is not before \
+                and isinstance(widget, FieldInput) and not from_app_focus:
+            widget.focus_arrived()
 
     def on_mount(self) -> None:
         self._settled_length = self.session.doc.get("beam.length")
@@ -296,6 +306,10 @@ class JobScreen(Screen):
                 finally:
                     f.taken(value)
                     f.forget_typing()
+        for c in self.query(Choice):
+            if c._pending is not None:
+                value, c._pending = c._pending, None
+                self.apply_choice(c.key, value)
 
     def apply_edit(self, key: str, value: str, row: int = 0) -> None:
         s = self.session
@@ -421,7 +435,14 @@ class JobScreen(Screen):
 
     def on_choice_changed(self, event: Choice.Changed) -> None:
         event.stop()
-        s, key, value = self.session, event.choice.key, event.value
+        c = event.choice
+        if c._pending is None or event.value != c._pending:
+            return  # already taken by a flush, or an older choice (a newer one follows)
+        c._pending = None
+        self.apply_choice(c.key, event.value)
+
+    def apply_choice(self, key: str, value: str) -> None:
+        s = self.session
         if key == "units":
             s.set("units", value)
         elif key == "beam.self_weight":
@@ -746,6 +767,8 @@ class JobScreen(Screen):
         self.set_focus(None)
         for f in self.query(Field):
             f.forget_typing()
+        for c in self.query(Choice):
+            c._pending = None
         for v in self.query(RowsView):
             v.selected = 0
         for v in self.query(SizingView):
@@ -794,6 +817,9 @@ class ShopbeamApp(App):
             if await self._check_bindings(event.key, priority=True):
                 return
             focused = self.focused
+            if isinstance(focused, Choice) and event.is_printable \
+                    and focused.type_letter(event.character):
+                return  # chosen now, not queued behind a save typed next
             if isinstance(focused, Input) and event.is_printable:
                 await focused._on_key(event)  # typed into the field now, not queued
                 return

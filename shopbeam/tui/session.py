@@ -175,9 +175,57 @@ class Session:
         return self.evaluated_version != self.version
 
     # ------------------------------------------------------------------ edits
+    def _node(self, path: list):
+        """The tomlkit table at `path` (keys and row indices), or None."""
+        node = self.doc.doc
+        try:
+            for p in path:
+                node = node[p]
+        except (KeyError, IndexError, TypeError):
+            return None
+        return node
+
+    def _forget_or_restore(self, path: list, key: str, value) -> bool:
+        """A key emptied in a field leaves the file; typed again, it comes back in its old
+        place with its comment (typing slowly through an empty field gives the same file as
+        typing fast). Returns True when it was put back here."""
+        node = self._node(path)
+        body = getattr(getattr(node, "value", node), "_body", None)
+        where = (tuple(path), key)
+        places = self.__dict__.setdefault("_places", {})
+        if node is None or body is None or not hasattr(node, "get"):
+            return False
+        if value is None:
+            if key in node:
+                i = next((n for n, (k, _v) in enumerate(body) if k is not None and k.key == key),
+                         None)
+                item = node.item(key) if hasattr(node, "item") else None
+                if i is not None and item is not None and hasattr(item, "trivia"):
+                    places[where] = (i, item.trivia)
+            return False
+        if key in node or where not in places:
+            return False
+        i, trivia = places.pop(where)
+        if i > len(body):
+            return False
+        import tomlkit
+
+        from shopbeam.jobs.jobdoc import _check_value
+
+        _check_value(key, value, ".".join(map(str, [*path, key])))
+        item = tomlkit.item(value)
+        t = item.trivia
+        t.indent, t.comment_ws, t.comment, t.trail = (trivia.indent, trivia.comment_ws,
+                                                      trivia.comment, trivia.trail)
+        getattr(node, "value", node)._insert_at(i, key, item)
+        return True
+
     def set(self, dotted: str, value) -> Evaluation:
         """Set a key (None removes it) and re-evaluate."""
         try:
+            *path, key = dotted.split(".")
+            if self._forget_or_restore(path, key, value):
+                return self._edited()
             self.doc.set_value(dotted, value)
         except InputError as exc:
             self.evaluate()
@@ -188,6 +236,8 @@ class Session:
     def set_row(self, table: str, index: int, key: str, value) -> Evaluation:
         setter = self.doc.set_load if table == "loads" else self.doc.set_support
         try:
+            if self._forget_or_restore([table, index], key, value):
+                return self._edited()
             setter(index, **{key: value})
         except InputError as exc:
             self.evaluate()
@@ -203,6 +253,7 @@ class Session:
             i = self.doc.add_load(**fields)
         else:
             i = self.doc.add_support(**fields)
+        self.__dict__.pop("_places", None)  # row indices moved
         self._edited()
         return i
 
@@ -211,6 +262,7 @@ class Session:
             self.doc.remove_load(index)
         else:
             self.doc.remove_support(index)
+        self.__dict__.pop("_places", None)  # row indices moved
         self._edited()
 
     # ------------------------------------------------------------------ saving

@@ -144,6 +144,15 @@ class RowList(OptionList):
     class Remove(Message):
         pass
 
+    def watch_highlighted(self, highlighted: int | None) -> None:
+        """The form below shows the picked row at once, not when the message arrives: a
+        Tab typed right behind a Down must land in that row's fields (keys keep their
+        order at any speed)."""
+        super().watch_highlighted(highlighted)
+        view = next((a for a in self.ancestors if isinstance(a, RowsView)), None)
+        if view is not None and highlighted is not None:
+            view.row_picked(highlighted)
+
     def action_add(self) -> None:
         self.post_message(self.Add())
 
@@ -223,10 +232,25 @@ class RowsView(View):
             lst.highlighted = self.selected if hl is None or hl != self.selected else hl
         self.query_one(".row-form").display = bool(rows)
 
-    def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
-        if isinstance(event.option_list, RowList) and event.option_index != self.selected:
-            self.selected = event.option_index
+    def row_picked(self, index: int) -> None:
+        if index != self.selected and self.is_mounted:
+            flush = getattr(self.screen, "flush_typing", None)
+            if flush is not None:
+                flush()  # what was typed or chosen for the old row goes into that row first
+            rows = self.app_session().rows(self.table)
+            if not 0 <= index < len(rows):
+                return
+            self.selected = index
+            lst = self.query_one(RowList)
+            if lst.highlighted != index:  # a redraw during the flush showed the old row
+                lst.highlighted = index
             self.show_form(self.app_session())
+            self.screen._refresh_layout()  # Tab order: the fields this row shows, now
+
+    def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
+        if isinstance(event.option_list, RowList):
+            event.stop()
+            self.row_picked(event.option_index)
 
     def on_row_list_remove(self, event: RowList.Remove) -> None:
         event.stop()

@@ -16,6 +16,7 @@ from textual.message import Message
 from textual.reactive import reactive
 from textual.widget import Widget
 from textual.widgets import Input, Label, Static
+from textual.widgets.input import Selection
 
 from shopbeam.cautions import SHORT, SHORT_LIFTING, is_lifting
 
@@ -52,6 +53,25 @@ class FieldInput(Input):
             await self.screen.run_action(f"view_key('{digit}')")  # the screen knows its views
             return
         await super()._on_key(event)
+
+    _early_selects = 0  # selections made as the focus came, whose Focus events are queued
+
+    def focus_arrived(self) -> None:
+        """The focus came here (called by the screen as it moves, not when the queued Focus
+        event arrives): select the text now, so the next key of a fast burst replaces it
+        exactly as it would if typed slowly."""
+        if self.select_on_focus:
+            self.selection = Selection(0, len(self.value))
+            self._early_selects += 1
+
+    def _on_focus(self, event) -> None:
+        if self._early_selects > 0:  # selected already; keys may have been typed since
+            self._early_selects -= 1
+            kept = self.selection
+            super()._on_focus(event)
+            self.selection = kept
+            return
+        super()._on_focus(event)
 
     def watch_value(self, value: str) -> None:
         """Typing is noted at once (not when its message arrives), so a save or a view key
@@ -215,6 +235,7 @@ class Choice(Widget, can_focus=True):
         self.key = key
         self.set_reactive(Choice.value, value if value in self.options else self.options[0])
         self.message = ""  # what the reader says about this key, shown under the choice
+        self._pending = None  # a value the user chose that the screen has not taken yet
 
     def show(self, message: str = "", error: bool = False) -> None:
         """Put the reader's word on this key (a problem, a warning, or what it means) on
@@ -263,18 +284,29 @@ class Choice(Widget, can_focus=True):
 
     def action_move(self, step: int) -> None:
         i = (self.options.index(self.value) + step) % len(self.options)
-        self.value = self.options[i]
-        self.post_message(self.Changed(self, self.value))
+        self._choose(self.options[i])
 
-    def on_key(self, event) -> None:
-        ch = (event.character or "").lower()
+    def _choose(self, value: str) -> None:
+        """The user chose `value`: noted at once (a save typed right behind it takes it
+        along, see `JobScreen.flush_typing`), and said in a Changed message."""
+        self.value = value
+        self._pending = value
+        self.post_message(self.Changed(self, value))
+
+    def type_letter(self, character: str | None) -> bool:
+        """The first option (after the shown one) starting with this letter; True if taken.
+        The app calls it as the key arrives, so keys keep their order at any speed."""
+        ch = (character or "").lower()
         if ch and ch.isalpha():
             for opt in self.options:
                 if opt.lower().startswith(ch) and opt != self.value:
-                    event.stop()
-                    self.value = opt
-                    self.post_message(self.Changed(self, self.value))
-                    return
+                    self._choose(opt)
+                    return True
+        return False
+
+    def on_key(self, event) -> None:
+        if self.type_letter(event.character):
+            event.stop()
 
     def on_focus(self) -> None:
         self.refresh()
