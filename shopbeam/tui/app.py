@@ -9,6 +9,7 @@ dialogs are in `screens.py`.
 
 from __future__ import annotations
 
+import textwrap
 import time
 from pathlib import Path
 
@@ -195,7 +196,11 @@ class JobScreen(Screen):
             lines = warn + problems_text(ev).splitlines()
             return "\n".join(lines[:3]) + ("\n  ... see 7 Results" if len(lines) > 3 else "")
 
-        return "\n".join(warn + [drawing.summary_line(ev.result) + "   (7 results, 8 plots)"])
+        width = (self.size.width or 80) - 2
+        warn = [w if len(w) <= width else textwrap.shorten(w, width, placeholder=" ...")
+                for w in warn]
+        return "\n".join(warn + [drawing.summary_line(ev.result, width,
+                                                      "   (7 results, 8 plots)")])
 
     def changed(self) -> None:
         """The document changed: show it now, solve it in a worker (latest edit wins)."""

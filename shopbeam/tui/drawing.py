@@ -8,6 +8,8 @@ drawn with plotext into a string (imported on first use).
 
 from __future__ import annotations
 
+import textwrap
+
 import math
 
 import numpy as np
@@ -113,10 +115,11 @@ def elevation(job, width: int = 76) -> str:
             mid = max(a + 1, (a + b - len(inside)) // 2)
             if mid + len(inside) <= b:
                 row[mid:mid + len(inside)] = list(inside)
-            else:  # too short a span for words: as much as fits after it
-                tail = text[: max(0, w - b - 2)]
-                if tail:
-                    row[b + 2:b + 2 + len(tail)] = list(tail)
+            else:  # no room beside or inside: the words on their own line below, whole
+                lines.append("".join(row).rstrip())
+                for part in textwrap.wrap(text, w) or [""]:
+                    lines.append(" " * max(0, min(a, w - len(part))) + part)
+                continue
         lines.append("".join(row).rstrip())
     # the beam, with hinges on it
     beam = ["="] * w
@@ -274,12 +277,19 @@ check_value = units.fmt_check  # a check's demand or limit in the job's units
 def checks_table(result) -> str:
     """Every check (as the report shows it, `output.present`), with the load state that
     governs it when there is more than one."""
-    rows = [f"{'check':<11} {'demand':>12} {'limit':>12} {'ratio':>6}  verdict   where"]
-    for c in present(result).checks:
-        rows.append(f"{c.name:<11} {c.demand:>12} {c.limit:>12} {c.ratio:>6.2f}  "
+    checks = present(result).checks
+    # the name column as wide as the longest name up to 20; a longer name has its own line
+    nw = min(20, max([11] + [len(c.name) for c in checks]))
+    rows = [f"{'check':<{nw}} {'demand':>12} {'limit':>12} {'ratio':>6}  verdict   where"]
+    for c in checks:
+        name = c.name
+        if len(name) > nw:
+            rows.append(name)
+            name = ""
+        rows.append(f"{name:<{nw}} {c.demand:>12} {c.limit:>12} {c.ratio:>6.2f}  "
                     f"{c.verdict:<8}  {c.at}")
         if c.state:
-            rows.append(f"{'':<11} worst state: {c.state}")
+            rows.append(f"{'':<{nw}} worst state: {c.state}")
     return "\n".join(rows)
 
 
@@ -299,9 +309,30 @@ def selfchecks_text(result) -> str:
     return "\n".join(out)
 
 
-def summary_line(result) -> str:
-    """One line for the bottom of the editor views."""
+def summary_line(result, width: int = 0, tail: str = "") -> str:
+    """Two lines for the bottom of the editor views: the verdict and the reactions, each
+    kept within `width` columns (0: no limit) by naming fewer items and saying how many
+    more there are, never by cutting words; `tail` ends the reactions line when it fits."""
     sy = result.job.units
-    rs = "  ".join(f"R@{_f(r.at, 'length', sy, 3)} {_f(r.force, 'force', sy, 3)}"
-                   for r in result.solution.reactions)
-    return f"{verdict_line(result)}\nreactions: {rs}"
+    verdict = verdict_line(result)
+    if width and len(verdict) > width and not result.ok:
+        g = result.governing
+        fails = [c.name for c in result.checks if not c.ok]
+        for n in range(len(fails) - 1, 0, -1):
+            verdict = (f"FAILS: {', '.join(fails[:n])} +{len(fails) - n} more - governing: "
+                       f"{g.name}, ratio {g.ratio:.2f}")
+            if len(verdict) <= width:
+                break
+        else:
+            verdict = f"FAILS {len(fails)} checks - governing: {g.name}, ratio {g.ratio:.2f}"
+    items = [f"R@{_f(r.at, 'length', sy, 3)} {_f(r.force, 'force', sy, 3)}"
+             for r in result.solution.reactions]
+    rs = "reactions: " + "  ".join(items)
+    if width and len(rs) > width:
+        for n in range(len(items) - 1, 0, -1):
+            rs = f"reactions: {'  '.join(items[:n])}  +{len(items) - n} more"
+            if len(rs) <= width:
+                break
+    elif tail and (not width or len(rs + tail) <= width):
+        rs += tail
+    return f"{verdict}\n{rs}"

@@ -1,0 +1,109 @@
+"""Every view fits the terminal with nothing cut, and a resize lays it out again."""
+
+from __future__ import annotations
+
+import asyncio
+import functools
+from pathlib import Path
+
+import pytest
+
+from tuipilot import settle  # noqa: E402
+from shopbeam.tui.app import make_app  # noqa: E402
+from shopbeam.tui import drawing  # noqa: E402
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+
+
+@pytest.fixture(autouse=True)
+def _own_library(tmp_path, monkeypatch):
+    user = tmp_path / "user"
+    user.mkdir()
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+
+
+def sync(fn):
+    @functools.wraps(fn)
+    def run(*args, **kwargs):
+        return asyncio.run(fn(*args, **kwargs))
+
+    return run
+
+
+def text(app, selector: str) -> str:
+    return str(app.job_screen.query_one(selector).render())
+
+
+def widest(s: str) -> int:
+    return max((len(line) for line in s.splitlines()), default=0)
+
+
+@sync
+async def test_a_resize_lays_the_results_out_again():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=(100, 32)) as pilot:
+        await settle(pilot)
+        await pilot.press("f8")  # results
+        await settle(pilot)
+        view = app.job_screen.query_one("#results")
+        wide = text(app, "#res-elevation")
+        assert widest(wide) <= view.content_region.width
+        await pilot.resize_terminal(80, 24)
+        await settle(pilot)
+        narrow = text(app, "#res-elevation")
+        assert widest(narrow) < widest(wide)  # drawn again for the new width
+        assert widest(narrow) <= view.content_region.width
+        # the load labels are all there, whole, at either width
+        for label in ("stair", "deck", "stock", "pipe offcuts"):
+            assert label in wide and label in narrow
+        bar = str(app.job_screen.query_one("#titlebar").render())
+        assert widest(bar) <= 78 and "read-only preset" in bar
+        await pilot.resize_terminal(100, 32)
+        await settle(pilot)
+        assert text(app, "#res-elevation") == wide
+
+
+@sync
+async def test_the_summary_of_a_failing_job_fits_80_columns():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        # a much lighter section: several checks fail, the verdict line would be long
+        s.set("beam.section", "W4x13")
+        app.job_screen.changed()
+        await settle(pilot)
+        r = s.evaluation.result
+        assert r is not None and not r.ok
+        summary = str(app.job_screen.query_one("#summary").render())
+        assert widest(summary) <= 78, summary
+        assert summary.startswith("FAILS")
+        assert "reactions: R@0 ft" in summary
+        fails = [c.name for c in r.checks if not c.ok]
+        assert fails[0] in summary
+
+
+def test_summary_names_fewer_items_and_says_how_many_more():
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.design.analysis import analyze
+
+    text_ = (PRESETS / "continuous-shelf.toml").read_text()
+    r = analyze(parse_job_text(text_))
+    full = drawing.summary_line(r)
+    short = drawing.summary_line(r, 40)
+    n = len(r.solution.reactions)
+    assert len(full.splitlines()[1]) > 40 and full.splitlines()[1].count("R@") == n
+    line = short.splitlines()[1]
+    assert len(line) <= 40
+    shown = line.count("R@")
+    assert 0 < shown < n and f"+{n - shown} more" in line
+
+
+def test_a_load_label_with_no_room_beside_its_bar_gets_a_line_of_its_own():
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    job = parse_job_text((PRESETS / "demo.toml").read_text())
+    pic = drawing.elevation(job, 74)
+    assert widest(pic) <= 74
+    assert "0 lbf/ft to -200 lbf/ft pipe offcuts" in pic
