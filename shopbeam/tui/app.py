@@ -150,6 +150,7 @@ class JobScreen(Screen):
     def on_mount(self) -> None:
         self._settled_length = self.session.doc.get("beam.length")
         self.refresh_all()
+        self.solve_soon()  # a job opened unsolved: the first screen comes before the answer
 
     def on_resize(self) -> None:
         self.refresh_all()
@@ -191,6 +192,8 @@ class JobScreen(Screen):
 
     def summary_text(self) -> str:
         ev = self.session.evaluation
+        if self.session.stale and ev.job is None and not ev.problems:
+            return "Reading and solving the job ..."
         warn = load_warnings(self.session)[:1]
         if ev.result is None:
             lines = warn + problems_text(ev).splitlines()
@@ -860,9 +863,12 @@ def make_app(job_path=None, library=None, *, cursor_blink: bool = True,
     screenshots).
     """
     kw = dict(cursor_blink=cursor_blink, label_date=label_date)
+    # the job is read as text here (a file that is not TOML is refused now) and solved in a
+    # worker once the first screen is up
     if job_path is not None:
-        session = Session.open(job_path, library_dir=library)
+        session = Session.open(job_path, library_dir=library, evaluate=False)
         return ShopbeamApp(session, **kw)
     demo = _demo_path()
-    session = Session.open(demo, library_dir=library) if demo else Session.new(library_dir=library)
+    session = Session.open(demo, library_dir=library, evaluate=False) if demo else \
+        Session.new(library_dir=library)
     return ShopbeamApp(session, show_library=True, **kw)

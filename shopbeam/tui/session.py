@@ -86,7 +86,7 @@ class Session:
     """One open job: its document, where it lives, and whether it has unsaved changes."""
 
     def __init__(self, doc, path: Path | None = None, origin: str = "", name: str = "",
-                 library_dir=None):
+                 library_dir=None, evaluate: bool = True):
         self.doc = doc
         self.path = Path(path) if path is not None else None
         self.origin = origin  # "shop" | "user" | "bundled" | "" (a file given on the command line)
@@ -100,11 +100,14 @@ class Session:
         self.version = 0
         # the loads as opened or last saved: a load that changes direction is named
         self.baseline_loads = [dict(r) for r in doc.loads()]
-        self.evaluate()
+        if evaluate:
+            self.evaluate()
+        else:  # the text UI draws the job first and solves it in a worker (`stale`)
+            self.evaluated_version = -1
 
     # ------------------------------------------------------------------ opening
     @classmethod
-    def open(cls, path, library_dir=None) -> "Session":
+    def open(cls, path, library_dir=None, evaluate: bool = True) -> "Session":
         """Open a job file (raises InputError when it is not valid TOML)."""
         doc = jobdoc.load(path)
         origin = ""
@@ -119,7 +122,7 @@ class Session:
                     continue
         except OSError:
             pass
-        return cls(doc, Path(path), origin=origin, library_dir=library_dir)
+        return cls(doc, Path(path), origin=origin, library_dir=library_dir, evaluate=evaluate)
 
     @classmethod
     def new(cls, title: str = "New job", library_dir=None) -> "Session":

@@ -600,7 +600,6 @@ class SectionView(View):
             self.designation = designation
 
     MODES = ["catalog", "dimensions", "custom"]
-    SHAPES = list(DIMENSION_SHAPES)
     DIM_ORDER = ["depth", "width", "size", "od", "diameter", "wall", "thickness",
                  "flange_width", "flange_thickness", "web_thickness", "stem_thickness",
                  "corner_radius", "fillet_radius"]
@@ -620,7 +619,7 @@ class SectionView(View):
             yield Static("", id="sec-matches-note", markup=False)
             yield OptionList(id="sec-matches")
         with Vertical(id="sec-dims"):
-            yield Choice("Shape", self.SHAPES, key="section.shape")
+            yield Choice("Shape", self.shapes(), key="section.shape")
             keys = {k for ks in self._dim_keys().values() for k in ks}
             for k in sorted(keys, key=lambda k: (self.DIM_ORDER.index(k)
                                                  if k in self.DIM_ORDER else 99, k)):
@@ -631,9 +630,18 @@ class SectionView(View):
         yield Static("", id="sec-props", markup=False)
 
     @staticmethod
+    def shapes() -> list[str]:
+        """The built-in shapes (imported when the section view is first shown)."""
+        from shopbeam.members.sections import DIMENSION_SHAPES
+
+        return list(DIMENSION_SHAPES)
+
+    @staticmethod
     def _dim_keys() -> dict[str, tuple[str, ...]]:
         out = {}
-        for shape in SectionView.SHAPES:
+        from shopbeam.members.sections import shape_keys
+
+        for shape in SectionView.shapes():
             req, optional = shape_keys(shape)  # the shapes' own key lists
             opt = tuple(k for k in optional if k in ("corner_radius", "fillet_radius"))
             out[shape] = req + opt
