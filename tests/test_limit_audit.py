@@ -472,3 +472,15 @@ label = "hoist"
     assert cap.governing.name == "wheel flange bending"
     # (20,826 + 3,592) k + 299 = 29,940 (self-weight 832 lbf*ft -> 299 psi) -> k = 1.2139
     assert cap.factor == pytest.approx(1.2139, abs=2e-3)
+
+
+def test_below_the_hook_flange_check_carries_the_design_factor():
+    # the spreader's end loads hang from the bottom flange: the flange-tip check (clamp or
+    # shackle on both tips, CMAA 74 / EN 1993-6 Table 5.2, from memory) is judged against
+    # Fy / Nd = 50 / 3.00 = 16.67 ksi for Category B (ASME BTH-1, from memory), not 0.60 Fy
+    bth = _named(analyze(spreader()), "wheel flange bending")
+    assert bth.limit / KSI == pytest.approx(50 / 3.0, rel=1e-4)
+    plain = _named(analyze(spreader(lifting='lifting = "hand-geared-monorail"')),
+                   "wheel flange bending")
+    assert plain.limit / KSI == pytest.approx(50 / 1.67, rel=1e-4)
+    assert bth.demand == pytest.approx(plain.demand, rel=1e-9)  # no impact in either profile

@@ -192,14 +192,20 @@ def wheel_check(job, sol, sec, mat, global_allow=None):
         if best is None or vm > best[0]:
             best = (vm, point, used, ld.at, p, sg, a, tf, tapered, per, words)
     vm, point, used, at, p, sg, a, tf, tapered, per, words = best
-    allow = mat.fy / OMEGA_WHEEL
+    prof = profile_of(job)
+    scale = prof.nd / 1.67 if prof is not None and prof.nd else 1.0  # below-the-hook: Nd / 1.67
+    allow = mat.fy / (OMEGA_WHEEL * scale)
+    limit_words = ("Fy / 1.67" if scale == 1.0 else
+                   f"Fy / (1.67 x Nd / 1.67) = Fy / {OMEGA_WHEEL * scale:g} (ASME BTH-1 design "
+                   "factor Nd in place of the AISC 1.67)")
     names = {"0": "flange-to-web junction", "1": "under the wheel", "2": "flange tip"}
     return Check(
         "wheel flange bending", vm, allow, "Pa",
         f"bottom-flange local bending under a trolley wheel, CMAA 74 70-3.3.2.2 / AISC "
         f"Design Guide 7 17 (EN 1993-6 Table 5.2 coefficients, from memory): sigma = C P / "
         f"tf^2 ({'tapered' if tapered else 'parallel'} flange, lambda = 2a/(bf - tw) = "
-        f"{used['lambda']:.3f}), plus the global bending stress, von Mises <= Fy / 1.67", at,
+        f"{used['lambda']:.3f}), plus the global bending stress, von Mises <= {limit_words}",
+        at,
         detail=f"point {point} ({names[point]}); {words}",
         clause="CMAA 74 70-3.3.2.2; AISC Design Guide 7 (2nd ed.) 17",
         source="CMAA 74 / EN 1993-6 5.7.2 coefficients (from memory)",
