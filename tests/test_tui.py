@@ -6,15 +6,13 @@ two equal spans, uniform load): end reactions 3wl/8, middle reaction 10wl/8 (fro
 
 from __future__ import annotations
 
-import asyncio
-import functools
 import shutil
 from pathlib import Path
 
 import pytest
 
 
-from tuipilot import settle  # noqa: E402
+from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
 from shopbeam.tui.app import JobScreen, make_app  # noqa: E402
 from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, LengthScreen,  # noqa: E402
                                   LibraryScreen)
@@ -22,25 +20,6 @@ from shopbeam.tui.widgets import Field  # noqa: E402
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
 SIZE = (100, 32)
-
-
-@pytest.fixture(autouse=True)
-def _own_library(tmp_path, monkeypatch):
-    user = tmp_path / "user"
-    user.mkdir()
-    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
-    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
-    return user
-
-
-def sync(fn):
-    """Run an async test body in its own event loop (no async plugin needed)."""
-
-    @functools.wraps(fn)
-    def run(*args, **kwargs):
-        return asyncio.run(fn(*args, **kwargs))
-
-    return run
 
 
 def job_screen(app) -> JobScreen:

@@ -8,14 +8,12 @@ reader's own message beside the field or choice.
 
 from __future__ import annotations
 
-import asyncio
-import functools
 import shutil
 from pathlib import Path
 
 import pytest
 
-from tuipilot import settle  # noqa: E402
+from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
 from shopbeam.jobs.jobfile import parse_job_data, parse_job_text  # noqa: E402
 from shopbeam.errors import InputErrors  # noqa: E402
 from shopbeam.tui.app import make_app  # noqa: E402
@@ -25,23 +23,6 @@ from shopbeam.tui.widgets import Choice, Field  # noqa: E402
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
 SIZE = (80, 24)
 COMMENT = "# kept: a note the shop wrote by hand"
-
-
-@pytest.fixture(autouse=True)
-def _own_library(tmp_path, monkeypatch):
-    user = tmp_path / "user"
-    user.mkdir()
-    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
-    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
-    return user
-
-
-def sync(fn):
-    @functools.wraps(fn)
-    def run(*args, **kwargs):
-        return asyncio.run(fn(*args, **kwargs))
-
-    return run
 
 
 def job_copy(tmp_path, preset: str, extra: str = "") -> Path:

@@ -2,33 +2,13 @@
 
 from __future__ import annotations
 
-import asyncio
-import functools
 from pathlib import Path
 
-import pytest
-
-from tuipilot import settle  # noqa: E402
+from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
 from shopbeam.tui.app import make_app  # noqa: E402
 from shopbeam.tui import drawing  # noqa: E402
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
-
-
-@pytest.fixture(autouse=True)
-def _own_library(tmp_path, monkeypatch):
-    user = tmp_path / "user"
-    user.mkdir()
-    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
-    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
-
-
-def sync(fn):
-    @functools.wraps(fn)
-    def run(*args, **kwargs):
-        return asyncio.run(fn(*args, **kwargs))
-
-    return run
 
 
 def text(app, selector: str) -> str:

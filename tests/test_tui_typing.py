@@ -9,8 +9,6 @@ after each; then again with a solver slowed down to 0.25 s a solve.
 
 from __future__ import annotations
 
-import asyncio
-import functools
 import os
 import shutil
 import subprocess
@@ -24,7 +22,7 @@ import pytest
 from textual._xterm_parser import XTermParser  # noqa: E402
 
 from shopbeam.tui import session as session_mod  # noqa: E402
-from tuipilot import settle  # noqa: E402
+from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
 from shopbeam.tui.app import make_app  # noqa: E402
 from shopbeam.tui.widgets import Field  # noqa: E402
 
@@ -36,15 +34,6 @@ CTRL_U = "\x15"  # clear the field up to the cursor
 TAB, SHIFT_TAB = "\t", "\x1b[Z"
 
 
-@pytest.fixture(autouse=True)
-def _own_library(tmp_path, monkeypatch):
-    user = tmp_path / "user"
-    user.mkdir()
-    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
-    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
-    return user
-
-
 @pytest.fixture
 def slow_solver(monkeypatch):
     real = session_mod.evaluate_data
@@ -54,14 +43,6 @@ def slow_solver(monkeypatch):
         return real(*args, **kwargs)
 
     monkeypatch.setattr(session_mod, "evaluate_data", slow)
-
-
-def sync(fn):
-    @functools.wraps(fn)
-    def run(*args, **kwargs):
-        return asyncio.run(fn(*args, **kwargs))
-
-    return run
 
 
 def events_of(data: str):

@@ -2,7 +2,32 @@
 
 from __future__ import annotations
 
+import asyncio
+import functools
+
+import pytest
 from textual.worker import WorkerCancelled
+
+
+@pytest.fixture(autouse=True)
+def _own_library(tmp_path, monkeypatch):
+    """Each test's own user library (and no shop library): saves never touch the real ones.
+    Autouse wherever it is imported."""
+    user = tmp_path / "user"
+    user.mkdir()
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(user))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+    return user
+
+
+def sync(fn):
+    """Run an async test body in its own event loop (no async plugin needed)."""
+
+    @functools.wraps(fn)
+    def run(*args, **kwargs):
+        return asyncio.run(fn(*args, **kwargs))
+
+    return run
 
 
 async def settle(pilot) -> None:
