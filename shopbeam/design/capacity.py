@@ -140,10 +140,8 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
 
 
 def _capacity(job, section, ss, st) -> CapacityResult:
-    cache: dict = {}
-
     def ev(k):
-        return evaluate(job, k, section, ss, st, cache)
+        return evaluate(job, k, section, ss, st)
 
     def g(k):
         return max(c.ratio for c in ev(k).checks)

@@ -619,7 +619,7 @@ def _length_fmt(system: str):
 
 
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
-             strengths=None, moving_cache: dict | None = None) -> Evaluation:
+             strengths=None) -> Evaluation:
     """Every check at live-load factor k over every pattern and moving-load position."""
     ss = ss or state_set(job, section)
     st = strengths or strengths_of(job, sec=section, beam=ss.beam)
