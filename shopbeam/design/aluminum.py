@@ -44,11 +44,7 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-KSI = 6.894757293168361e6  # Pa
-
-
-def _stress(pa: float, system: str) -> str:
-    return f"{pa / 1e6:.3g} MPa" if system == "si" else f"{pa / KSI:.3g} ksi"
+from shopbeam.units import KSI, fmt
 
 
 @dataclass(frozen=True)
@@ -121,7 +117,7 @@ class Element:
                 "both": "supported on both edges, uniform compression",
                 "flexure": "supported on both edges, in flexure"}[self.kind]
         return (f"{self.name} b/t {self.bt:.3g} ({what}; lambda1 {self.lambda1:.3g}, lambda2 "
-                f"{self.lambda2:.3g}): F = {_stress(self.stress, system)} ({self.clause})")
+                f"{self.lambda2:.3g}): F = {fmt(self.stress, 'stress', system, 3)} ({self.clause})")
 
 
 def _element(name, bt, kind, fcy, e, welded_fcy=None) -> Element:
@@ -201,5 +197,5 @@ def shear_buckling(ht: float, fsy: float, e: float, aged: bool = True, system: s
     else:
         fs, how = min(f, math.pi ** 2 * ek / (1.25 * ht) ** 2), "Fs = pi^2 E / (1.25 h/t)^2"
     return fs * KSI, l1, l2, (f"web h/t {ht:.3g}, lambda1 {l1:.3g}, lambda2 {l2:.3g}: {how} = "
-                              f"{_stress(fs * KSI, system)} (ADM 2015 G.2, constants in ksi: "
+                              f"{fmt(fs * KSI, 'stress', system, 3)} (ADM 2015 G.2, constants in ksi: "
                               f"Bs {bs:.3g}, Ds {ds:.3g})")
