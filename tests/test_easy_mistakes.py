@@ -101,6 +101,55 @@ def test_upward_load_warning_shows_in_report_json_and_check(tmp_path):
     assert "INPUT WARNING" in r.stdout
 
 
+def test_a_load_pointing_up_blocks_the_rating_until_marked_uplift(tmp_path):
+    """A forgotten minus sign must not reach a posted rating: the capacity is "not rated",
+    the label says NOT RATED, and the solve verdict carries the warning; `uplift = true`
+    (the push up is meant) lifts the block."""
+    p = tmp_path / "job.toml"
+    p.write_text(job_text(load='value = "400 lb"'))
+    d = json.loads(run("capacity", str(p), "--json").stdout)
+    assert d["rated"] is False
+    assert any("loads[0] (motor)" in r and "push UP" in r for r in d["not_rated_reasons"])
+    label = run("rating", str(p)).stdout
+    assert "NOT RATED" in label
+    report = run("solve", str(p)).stdout
+    assert "BUT 1 load(s) push UP" in report
+    p.write_text(job_text(load='value = "400 lb"\nuplift = true'))
+    d = json.loads(run("capacity", str(p), "--json").stdout)
+    assert d["rated"] is True and not d["not_rated_reasons"]
+    assert "push UP" not in run("solve", str(p)).stdout
+
+
+def test_one_upward_load_among_gravity_loads_also_blocks_the_rating():
+    from shopbeam.design.capacity import capacity
+
+    extra = '[[loads]]\ntype = "uniform"\nvalue = "25 plf"\nlabel = "deck"'
+    job = parse_job_text(job_text(extra_load=extra))  # the point load is -400 lb (down)
+    assert job.upward == ("loads[1] (deck)",)
+    assert not capacity(job).rated
+
+
+def test_a_wheel_pointing_up_is_warned_and_not_rated():
+    from shopbeam.design.capacity import capacity
+
+    extra = ('[[moving]]\nloads = ["-500 lbf", "500 lbf"]\nspacing = ["1 ft"]\n'
+             'travel = ["0 ft", "6 ft"]\nlabel = "trolley"')
+    job = parse_job_text(job_text(extra_load=extra))
+    assert [p.key for p in warnings(job) if "UP" in p.message] == ["moving[0].loads"]
+    assert job.upward == ("moving[0].loads (trolley)",)
+    assert not capacity(job).rated
+
+
+def test_the_text_ui_verdict_names_loads_pointing_up_within_80_columns():
+    from shopbeam.design.analysis import analyze
+    from shopbeam.tui.drawing import summary_line
+
+    res = analyze(parse_job_text(job_text(load='value = "400 lb"')))
+    assert res.ok  # the checks pass for the load as typed ...
+    verdict = summary_line(res, width=76).splitlines()[0]
+    assert "1 load(s) point UP" in verdict and len(verdict) <= 76  # ... and the line says so
+
+
 # ------------------------------------------------------------------ a safety factor not used
 def test_safety_factor_on_steel_asd_is_a_warning_saying_what_to_write():
     job = parse_job_text(job_text(criteria="safety_factor = 3.0"))

@@ -121,10 +121,16 @@ def _fixed_is_zero(ss) -> bool:
 
 def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     """Why a capacity must not be posted: every limit state the member calls for that was not
-    checked and would block a rating, and any failed self-check of the solve."""
+    checked and would block a rating, a load that pushes up unmarked (a sign mistake), and any
+    failed self-check of the solve."""
     every = list(st.unchecked) + local_unchecked(job, st.section) + open_unchecked(job, st)
     every += aluminum_unchecked(job, st.section)
     out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in every if u.blocks_rating]
+    upward = getattr(job, "upward", ())
+    if upward:
+        out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
+                   "(forces are + up, a weight is negative): " + ", ".join(upward)
+                   + ". Fix the sign, or mark a load that really pushes up uplift = true")
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")

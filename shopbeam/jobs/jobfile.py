@@ -117,6 +117,9 @@ class Job:
     bearing: float | None = None  # m, beam.bearing: bearing length at supports and loads
     bearings: dict = field(default_factory=dict)  # "supports[i]" / "loads[i]" -> bearing, m
     hung: tuple[str, ...] = ()  # keys of point loads hung from the bottom flange
+    # force loads (and wheels) that push UP with no `uplift = true`: almost always a forgotten
+    # minus sign. Each entry is "loads[i] (label)"; a capacity or rating is not posted on them.
+    upward: tuple[str, ...] = ()
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -722,9 +725,9 @@ def _plausible_section(sec, r: _Reader) -> None:
             return
 
 
-def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> None:
+def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> list[str]:
     """A force load that pushes up is almost always a forgotten minus sign: name each one,
-    unless the load says ``uplift = true``."""
+    unless the load says ``uplift = true``. Returns the keys (with labels) it named."""
     up = []
     for ld in loads:
         if ld.kind == "moment":
@@ -747,6 +750,23 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
         r.warn(f"this load{name} points UP (+{shown.lstrip('+')}): forces are + up, so a "
                f"weight is negative (value = \"-{shown.lstrip('+')}\").{every} If the push up "
                "is intended (uplift), add uplift = true to the load", f"{ld.key}.value")
+    return [ld.key + (f" ({ld.label})" if ld.label else "") for ld, _shown in up]
+
+
+def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
+    """A wheel that pushes up is a forgotten minus sign (a wheel can only bear down)."""
+    out = []
+    for ws in moving:
+        for what, values in (("loads", ws.live), ("dead", ws.dead)):
+            up = [v for v in values if v > 0]
+            if not up:
+                continue
+            shown = units.fmt(max(up), "force", system)
+            r.warn(f"{len(up)} wheel load(s) in {what} point UP (largest +{shown.lstrip('+')}): "
+                   f"forces are + up and a wheel bears down, so each is negative "
+                   f"(\"-{shown.lstrip('+')}\")", f"{ws.key}.{what}")
+            out.append(f"{ws.key}.{what} ({ws.label})")
+    return out
 
 
 def _family_mismatch(r: _Reader, section, material) -> None:
@@ -1003,7 +1023,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     bearings[f"loads[{i}]"] = b
             if ld.get("flange") == "bottom":
                 hung.append(f"loads[{i}]")
-    _upward_loads(r, raw_loads, loads, system)
+    upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material)
     if length is not None:
@@ -1013,6 +1033,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
+    upward += _upward_wheels(r, moving, system)
     from shopbeam.jobs.limits import cost_problems  # bounded work: counts checked before solving
 
     for msg, key in cost_problems(supports, loads, moving, braces):
@@ -1033,7 +1054,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         self_weight=self_weight, members=members, levels=levels, welded=welded, braced=braced,
         braces=braces,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
-        bearings=bearings, hung=tuple(hung),
+        bearings=bearings, hung=tuple(hung), upward=tuple(upward),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )

@@ -26,7 +26,7 @@ from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.errors import InputError
 from shopbeam.jobs.storage import atomic_write
 from shopbeam.output import svg
-from shopbeam.output.present import CheckRow, EnvelopeRow, present  # noqa: F401 (CheckRow re-exported)
+from shopbeam.output.present import CheckRow, EnvelopeRow, present, upward_note  # noqa: F401 (CheckRow re-exported)
 from shopbeam.output.report import describe_load, describe_support
 
 TITLE_FIELDS = (("shop", "Shop"), ("job", "Job"), ("member", "Member"), ("client", "Client"),
@@ -189,6 +189,8 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
 
     p = present(result)
     verdict = ("all checks PASS" if result.ok else "the member FAILS: " + ", ".join(p.failing))
+    if upward_note(job):
+        verdict += ". " + upward_note(job)
 
     diags = list(sol.diagnostics)
     self_checks = [(bool(d.ok), d.name, d.detail) for d in diags]

@@ -189,6 +189,17 @@ def present(result: Result) -> Presentation:
         failing=tuple(c.name for c in result.checks if not c.ok))
 
 
+def upward_note(job) -> str:
+    """One line when force loads push UP with no ``uplift = true`` (a forgotten minus sign is
+    the usual cause): the checks then answer for loads the shop did not mean. "" otherwise."""
+    up = getattr(job, "upward", ())
+    if not up:
+        return ""
+    return (f"BUT {len(up)} load(s) push UP with no uplift = true ({', '.join(up)}): forces "
+            "are + up, a weight is negative. These checks are for the loads as typed; fix the "
+            "sign, or mark a load that really pushes up uplift = true. Not rated until then.")
+
+
 def _check_rows(job, checks) -> tuple[CheckRow, ...]:
     wood = getattr(job.material, "kind", "") == "lumber"
     return tuple(_check_row(c, job.units, wood) for c in checks)

@@ -9,7 +9,7 @@ import textwrap
 
 from shopbeam import units
 from shopbeam.design.analysis import Result
-from shopbeam.output.present import present
+from shopbeam.output.present import present, upward_note
 
 WIDTH = 78
 
@@ -134,6 +134,8 @@ def render(result: Result) -> str:
         for s in c.spans:
             lines.append(f"      {s}")
     lines.append(f"  governing: {p.governing} -> {p.verdict}")
+    if upward_note(job):
+        lines += _wrap(upward_note(job), "  !! ")
     lines.append("")
 
     lines.append("SELF-CHECKS (run on every solve)")

@@ -296,7 +296,10 @@ def checks_table(result) -> str:
 def verdict_line(result) -> str:
     g = result.governing
     if result.ok:
-        return f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} (used {g.ratio:.0%})"
+        up = getattr(result.job, "upward", ())
+        but = f" - BUT {len(up)} load(s) point UP: check the signs" if up else ""
+        return (f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} "
+                f"(used {g.ratio:.0%}){but}")
     fails = [c.name for c in result.checks if not c.ok]
     return (f"FAILS: {', '.join(fails)} - governing: {g.name}, ratio {g.ratio:.2f} "
             f"({g.ratio:.0%} of the limit)")
@@ -325,6 +328,14 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
                 break
         else:
             verdict = f"FAILS {len(fails)} checks - governing: {g.name}, ratio {g.ratio:.2f}"
+    elif width and len(verdict) > width:  # a pass with loads pointing up: the warning first
+        g, up = result.governing, getattr(result.job, "upward", ())
+        short = ([f"PASS, ratio {g.ratio:.2f} - BUT {len(up)} load(s) point UP: check the signs",
+                  f"PASS {g.ratio:.2f} - BUT {len(up)} load(s) point UP"] if up else
+                 [f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f}"])
+        for verdict in short:
+            if len(verdict) <= width:
+                break
     items = [f"R@{_f(r.at, 'length', sy, 3)} {_f(r.force, 'force', sy, 3)}"
              for r in result.solution.reactions]
     rs = "reactions: " + "  ".join(items)
