@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import datetime as _dt
 from pathlib import Path
 
 from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
@@ -87,3 +88,64 @@ def test_a_load_label_with_no_room_beside_its_bar_gets_a_line_of_its_own():
     pic = drawing.elevation(job, 74)
     assert widest(pic) <= 74
     assert "0 lbf/ft to -200 lbf/ft pipe offcuts" in pic
+
+
+def _ink(s: str) -> str:
+    """The words of a page, however wrapped: whitespace, rule lines ("====") and the "!!"
+    that starts each line of a caution left out."""
+    words = []
+    for line in s.splitlines():
+        body = line.strip()
+        if body and len(set(body)) == 1:
+            continue
+        words += [w for w in body.split() if w != "!!"]
+    return "".join(words)
+
+
+@sync
+async def test_calc_sheet_and_rating_fit_80x24_with_nothing_cut():
+    from shopbeam.jobs.jobfile import load_job
+    from shopbeam.output.calcsheet import calc_sheet
+    from shopbeam.tui.slow import rating_text
+
+    # the trolley has the longest title and a lifting caution; the demo is the first job seen
+    for name in ("demo", "monorail-trolley"):
+        job = load_job(PRESETS / f"{name}.toml")
+        app = make_app(PRESETS / f"{name}.toml", cursor_blink=False, label_date=_dt.date(2026, 1, 1))
+        async with app.run_test(size=(80, 24)) as pilot:
+            await settle(pilot)
+            for key, body_id, whole in (
+                    ("f10", "#calc-body", calc_sheet(job)),
+                    ("f11", "#rating-body", rating_text(job, date=_dt.date(2026, 1, 1)))):
+                await pilot.press(key)
+                await settle(pilot)
+                body = app.job_screen.query_one(body_id)
+                shown = str(body.render())
+                room = body.size.width
+                assert 60 <= room <= 78
+                too_wide = [ln for ln in shown.splitlines() if len(ln) > room]
+                assert not too_wide, (name, key, room, too_wide)
+                # drawn as one screen line per text line: nothing wrapped by the screen
+                assert body.size.height == len(shown.split("\n"))
+                # every word of the page is there (only the line breaks moved)
+                assert _ink(shown) == _ink(whole), (name, key)
+
+
+@sync
+async def test_calc_sheet_follows_a_resize():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=(120, 32)) as pilot:
+        await settle(pilot)
+        await pilot.press("f10")
+        await settle(pilot)
+        body = app.job_screen.query_one("#calc-body")
+        wide = str(body.render())
+        assert widest(wide) == 78  # a printed page's width when the view has room
+        await pilot.resize_terminal(60, 24)
+        await settle(pilot)
+        narrow = str(body.render())
+        assert widest(narrow) <= body.size.width < 78
+        assert _ink(narrow) == _ink(wide)
+        await pilot.resize_terminal(120, 32)
+        await settle(pilot)
+        assert str(body.render()) == wide

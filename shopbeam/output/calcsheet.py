@@ -209,27 +209,28 @@ def brackets(expr, x) -> str:
     return text[2:] if text.startswith("+ ") else "-" + text[1:] if text.startswith("- ") else text
 
 
-def calc_sheet(job, result=None) -> str:
+def calc_sheet(job, result=None, width: int = 78) -> str:
     """The calc sheet for a job, in its display units (`result` is accepted for callers that
-    have one; the sheet checks itself against a numeric solve of the same loads)."""
+    have one; the sheet checks itself against a numeric solve of the same loads). Its text
+    is wrapped at `width` columns (the text UI passes the width of its view)."""
     import sympy as sp  # noqa: PLC0415 - startup
 
     lu, fu, lab = SCALES[job.units]
     beam = job.beam()
     ex = exact_solve(beam, lu, fu)
     ei_val = exact_number(beam.ei / (fu * lu * lu))
-    width = 78
-    out = [f"shopbeam calc sheet: {job.title}", "=" * width]
+    out = textwrap.wrap(f"shopbeam calc sheet: {job.title}", width, subsequent_indent="  ")
+    out.append("=" * width)
     for c in cautions_for(job.tags, job.lifting):
         out += textwrap.wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
-    out += [
-        "",
-        f"Units: x and positions in {lab['length']}, forces in {lab['force']}, moments in "
-        f"{lab['moment']}, EI in {lab['ei']}.",
-        "Brackets: <x - a>^n is 0 left of a and (x - a)^n right of it; <x - a>^-1 is a point",
-        "force and <x - a>^-2 a couple (each integrates to the next power up).",
-        "Signs: forces + up, couples + counterclockwise, M + sagging, V = dM/dx.",
-    ]
+    out.append("")
+    for para in (f"Units: x and positions in {lab['length']}, forces in {lab['force']}, "
+                 f"moments in {lab['moment']}, EI in {lab['ei']}.",
+                 "Brackets: <x - a>^n is 0 left of a and (x - a)^n right of it; <x - a>^-1 "
+                 "is a point force and <x - a>^-2 a couple (each integrates to the next "
+                 "power up).",
+                 "Signs: forces + up, couples + counterclockwise, M + sagging, V = dM/dx."):
+        out += textwrap.wrap(para, width, break_on_hyphens=False)
     if job.moving or any(ld.patterned for ld in job.loads):
         out += textwrap.wrap("This sheet solves the loads as entered (all patterned loads on, "
                              "no moving wheel set); the load states the checks cover are solved "
@@ -237,14 +238,12 @@ def calc_sheet(job, result=None) -> str:
     e_text = units.fmt(job.material.e, 'stress', job.units)
     if getattr(job.material, "kind", "") == "lumber" and job.units == "us":
         e_text = f"{units.num(job.material.e / units.PSI / 1e6, 3)}e6 psi"  # wood's own figure
-    out += [
-        "",
-        f"Beam length L = {_coef(ex.length)} {lab['length']}; "
-        f"EI = {_num(ei_val)} {lab['ei']} (E = {e_text}, "
-        f"I = {units.fmt(job.section.ix, 'inertia', job.units)})",
-        "",
-        "Unknowns:",
-    ]
+    out.append("")
+    out += textwrap.wrap(f"Beam length L = {_coef(ex.length)} {lab['length']}; "
+                         f"EI = {_num(ei_val)} {lab['ei']} (E = {e_text}, "
+                         f"I = {units.fmt(job.section.ix, 'inertia', job.units)})", width,
+                         subsequent_indent="  ")
+    out += ["", "Unknowns:"]
     for sym, name in zip(ex.unknowns, ex.names):
         out.append(f"  {sym} = {name}")
     out.append("")
@@ -287,7 +286,7 @@ def calc_sheet(job, result=None) -> str:
         agree.append(abs(exact_val - r.force) <= 1e-9 * max(1.0, abs(r.force)))
     out.append("Numeric engine agrees with this sheet: " + ("yes" if all(agree) else "NO - report this"))
     out.append("")
-    out.append("CAUTION: " + cautions_for(job.tags, job.lifting)[-1])
+    out += textwrap.wrap("CAUTION: " + cautions_for(job.tags, job.lifting)[-1], width)
     from shopbeam.escapes import shown
 
     return shown("\n".join(out), keep="\n") + "\n"

@@ -13,25 +13,29 @@ from shopbeam.escapes import shown
 from shopbeam.output.present import present_capacity
 
 
-def render(res: CapacityResult) -> str:
+def render(res: CapacityResult, width: int = 78) -> str:
+    """The page, wrapped at `width` columns (the text UI passes the width of its view)."""
     job = res.job
-    lines = [f"shopbeam capacity: {job.title}", "=" * 78]
-    lines += textwrap.wrap(banner(job.tags, job.lifting), 78)
+    lines = textwrap.wrap(f"shopbeam capacity: {job.title}", width, subsequent_indent="  ")
+    lines.append("=" * width)
+    lines += textwrap.wrap(banner(job.tags, job.lifting), width)
     lines.append("")
     k = res.factor
     if math.isfinite(k):
-        lines.append(f"CAPACITY FACTOR k = {k:.6g} on the live loads "
-                     "(dead loads and self-weight fixed)")
+        lines += textwrap.wrap(f"CAPACITY FACTOR k = {k:.6g} on the live loads "
+                               "(dead loads and self-weight fixed)", width,
+                               subsequent_indent="  ")
     else:
-        lines.append("CAPACITY FACTOR: unlimited (" + res.note + ")")
-    if res.note and math.isfinite(k):
-        lines.append(f"  {res.note}")
-    lines.append(f"  method: {res.method}")
-    lines.append(f"  basis: {BASIS_WORDS[basis_of(job)]}")
+        lines += textwrap.wrap("CAPACITY FACTOR: unlimited (" + res.note + ")", width,
+                               subsequent_indent="  ")
+    more = [res.note] if res.note and math.isfinite(k) else []
+    more += [f"method: {res.method}", f"basis: {BASIS_WORDS[basis_of(job)]}"]
+    for m in more:
+        lines += textwrap.wrap(m, width, initial_indent="  ", subsequent_indent="    ")
     if res.not_rated:
         lines.append("NOT RATED: do not post a load from this factor, because")
         for r in res.not_rated:
-            lines += textwrap.wrap(r, 78, initial_indent="  - ", subsequent_indent="    ")
+            lines += textwrap.wrap(r, width, initial_indent="  - ", subsequent_indent="    ")
     else:
         for label, value in max_load_lines(res):
             lines.append(f"  {label:<16} {value}")
@@ -40,22 +44,23 @@ def render(res: CapacityResult) -> str:
     p = present_capacity(res)
     for c in p.checks:
         lines.append(f"  {c.name:<11} {c.demand} vs {c.limit}: ratio {c.ratio:.6f}")
-        for w in textwrap.wrap(c.formula + (f" [{c.detail_text}]" if c.detail_text else ""), 72):
+        formula = c.formula + (f" [{c.detail_text}]" if c.detail_text else "")
+        for w in textwrap.wrap(formula, width - 6):
             lines.append("      " + w)
     if p.governing_name:
         lines.append(f"  governing: {p.governing_name}")
     if p.uplift and math.isfinite(k) and k > 0:
         lines.append("  uplift at k (anchor these supports):")
         for u in p.uplift:
-            lines += textwrap.wrap(u, 78, initial_indent="    ", subsequent_indent="      ")
+            lines += textwrap.wrap(u, width, initial_indent="    ", subsequent_indent="      ")
     warns = [p for p in job.warnings if p.warning]
     if warns:
         lines.append("")
         lines.append("INPUT WARNINGS")
         for p in warns:
-            lines += textwrap.wrap(p.located(), 78, initial_indent="  ", subsequent_indent="  ")
+            lines += textwrap.wrap(p.located(), width, initial_indent="  ", subsequent_indent="  ")
     lines.append("")
     lines.append("CAUTIONS")
     for c in cautions_for(job.tags, job.lifting):
-        lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
+        lines += textwrap.wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
     return shown("\n".join(lines), keep="\n") + "\n"

@@ -27,13 +27,17 @@ from shopbeam.design.capacity import capacity
 from shopbeam.jobs import library, storage
 from shopbeam.output import capacityreport
 from shopbeam.output import label as labels
+from shopbeam.tui import drawing
 from shopbeam.tui.views import View, problems_text
 from shopbeam.tui.widgets import Choice
 
 
 class _SheetView(View):
     """A view of one slow text (calc sheet, capacity): made in a worker for the job as it
-    stands, so the screen never waits; a result for an older version of the job is dropped."""
+    stands, so the screen never waits; a result for an older version of the job is dropped.
+    The text is made at the width of the view (at most 78 columns, a printed page's), and
+    made again when the view's width changes; until then the text in hand is wrapped to
+    the new width, so no line is ever wider than the view."""
 
     body_id = ""
     busy = "Working..."
@@ -41,33 +45,59 @@ class _SheetView(View):
     def compose(self) -> ComposeResult:
         yield Static("", id=self.body_id, markup=False, classes="wide-text")
 
+    def text_width(self) -> int:
+        """The columns a line may use: the view less its padding and its scroll bar (kept
+        in the sum even while the text is short enough to show none)."""
+        if self.size.width:
+            w = self.scrollable_content_region.width
+            if not self.show_vertical_scrollbar:
+                w -= self.styles.scrollbar_size_vertical
+        else:  # not laid out yet: the screen's width less padding and scroll bar
+            w = self.app.size.width - 2 - self.styles.scrollbar_size_vertical
+        return max(30, min(78, w))
+
     def show(self, session) -> None:
         ev = session.evaluation
         body = self.query_one(f"#{self.body_id}", Static)
+        width = self.text_width()
         if ev.result is None:
-            body.update(Text(problems_text(ev)))
+            body.update(Text(drawing.fit_text(problems_text(ev), width)))
             self._for = None
             return
         text = session.doc.text()
-        if getattr(self, "_for", None) == text:
+        was = getattr(self, "_for", None)
+        if was == (text, width):
             return
-        self._for = text
-        body.update(Text(self.busy))
-        self.make(ev.job, ev.result, text)
+        self._for = (text, width)
+        out = getattr(self, "_out", None)
+        if was is not None and was[0] == text and out is not None:
+            # the same job at a new width: the text in hand, wrapped, until it is made again
+            self._out = drawing.fit_text(out, width)
+            body.update(Text(self._out))
+        else:
+            self._out = None
+            body.update(Text(drawing.fit_text(self.busy, width)))
+        self.make(ev.job, ev.result, text, width)
 
-    def produce(self, job, result) -> str:  # pragma: no cover - each view has its own
+    def on_resize(self) -> None:
+        """Laid out at a new size: the text follows the new width."""
+        session = getattr(self.screen, "session", None)
+        if session is not None and self.display:
+            self.show(session)
+
+    def produce(self, job, result, width: int) -> str:  # pragma: no cover - each view's own
         raise NotImplementedError
 
     @work(thread=True, exclusive=True, group="sheet", exit_on_error=False)
-    def make(self, job, result, text: str) -> None:
+    def make(self, job, result, text: str, width: int) -> None:
         try:
-            out = self.produce(job, result)
+            out = self.produce(job, result, width)
         except Exception as exc:  # noqa: BLE001 - show it, do not crash the screen
             out = f"This could not be worked out: {type(exc).__name__}: {exc}"
-        self.app.call_from_thread(self._done, text, out)
+        self.app.call_from_thread(self._done, text, width, drawing.fit_text(out, width))
 
-    def _done(self, text: str, out: str) -> None:
-        if getattr(self, "_for", None) == text:
+    def _done(self, text: str, width: int, out: str) -> None:
+        if getattr(self, "_for", None) == (text, width):
             self._out = out
             self.query_one(f"#{self.body_id}", Static).update(Text(out))
 
@@ -149,10 +179,10 @@ class CalcView(_SheetView):
     busy = ("Working out the exact calc sheet (this takes a few seconds; you can keep "
             "editing)...")
 
-    def produce(self, job, result) -> str:
+    def produce(self, job, result, width: int) -> str:
         from shopbeam.output.calcsheet import calc_sheet  # noqa: PLC0415 - startup
 
-        return calc_sheet(job, result)
+        return calc_sheet(job, result, width)
 
 
 class RatingView(_SheetView):
@@ -163,15 +193,16 @@ class RatingView(_SheetView):
     file_suffix = "rating"
     busy = "Working out the capacity..."
 
-    def produce(self, job, result) -> str:
-        return rating_text(job, date=getattr(self.app, "label_date", None))
+    def produce(self, job, result, width: int) -> str:
+        return rating_text(job, date=getattr(self.app, "label_date", None), page_width=width)
 
 
-def rating_text(job, width: int = 40, date=None) -> str:
-    """The capacity report and the printable rating label, or why they are not there."""
+def rating_text(job, width: int = 40, date=None, page_width: int = 78) -> str:
+    """The capacity report (`page_width` columns) and the printable rating label (`width`
+    columns), or why they are not there."""
     try:
         res = capacity(job)
-        text = capacityreport.render(res)
+        text = capacityreport.render(res, page_width)
     except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
