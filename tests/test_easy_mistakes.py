@@ -150,6 +150,43 @@ def test_the_text_ui_verdict_names_loads_pointing_up_within_80_columns():
     assert "1 load(s) point UP" in verdict and len(verdict) <= 76  # ... and the line says so
 
 
+# ------------------------------------------------------------------ a deflection limit with a dropped zero
+def test_a_deflection_limit_looser_than_l_100_is_warned_and_l_180_is_not():
+    # loosest common limits about L/120-L/150 (IBC 2018 Table 1604.3, from memory)
+    job = parse_job_text(job_text(criteria='deflection = "L/24"'))
+    w = [p for p in warnings(job) if p.key == "criteria.deflection"]
+    assert len(w) == 1 and '"L/240"' in w[0].message
+    assert job.criteria.deflection_ratio == 24  # used as written: a warning, not a rewrite
+    job = parse_job_text(job_text(criteria='deflection = "L/180"'))
+    assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
+
+
+# ------------------------------------------------------------------ a grade the product is not made to
+# Product grades: AISC Manual 15th ed. Table 2-4 and the ASTM product specifications (A500
+# covers structural tube, A53 pipe, A36 / A572 / A992 rolled shapes, plate and bar), from memory.
+@pytest.mark.parametrize("section,material,key,word", [
+    ("L3x3x1/4", "A500-C", "beam.material", "grade of tube or pipe"),
+    ("FB4x1/2", "A53-B", "beam.material", "grade of tube or pipe"),
+    ("HSS4x4x1/4", "A36", "beam.material", "grade of rolled shapes"),
+    ("PIPE2STD", "A992", "beam.material", "grade of rolled shapes"),
+    ("S8x18.4", "6061-T6", "beam.section", "steel shape from the AISC catalog"),
+    ("HSS4x4x1/4", "304", "beam.section", "steel shape from the AISC catalog"),
+])
+def test_a_grade_the_product_is_not_made_to_is_warned(section, material, key, word):
+    job = parse_job_text(job_text(section=section, material=material))
+    got = [p for p in warnings(job) if p.key == key]
+    assert len(got) == 1 and word in got[0].message
+
+
+@pytest.mark.parametrize("section,material", [
+    ("W8x18", "A992"), ("L3x3x1/4", "A36"), ("C6x8.2", "A572-50"), ("HSS4x4x1/4", "A500-C"),
+    ("PIPE2STD", "A53-B"), ("FB4x1/2", "A36"),
+])
+def test_the_usual_grade_of_each_product_is_not_noise(section, material):
+    job = parse_job_text(job_text(section=section, material=material))
+    assert not [p for p in warnings(job) if p.key in ("beam.material", "beam.section")]
+
+
 # ------------------------------------------------------------------ a safety factor not used
 def test_safety_factor_on_steel_asd_is_a_warning_saying_what_to_write():
     job = parse_job_text(job_text(criteria="safety_factor = 3.0"))

@@ -401,6 +401,12 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                     live_deflection_ratio=live, lifting=lift, category=cat)
 
 
+# Below L/100 a deflection limit is almost certainly a slip (a dropped zero): the loosest
+# limits in common use for members people load are about L/120 to L/150 (IBC 2018 Table 1604.3
+# footnotes and common practice; from memory).
+LOOSEST_COMMON_RATIO = 100.0
+
+
 def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | None, str]:
     """(as written, n of L/n, absolute limit, preset name)."""
     key = "criteria.deflection"
@@ -416,6 +422,11 @@ def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | 
         if n <= 0:
             r.error(f"{text!r}: n in L/n must be positive", key)
             return text, None, None, ""
+        if n < LOOSEST_COMMON_RATIO:
+            r.warn(f"{text!r} allows a deflection of 1/{n:g} of the span, looser than any common "
+                   f"limit (L/{LOOSEST_COMMON_RATIO:g} is already loose; racks, shelves and "
+                   "floors use L/180 to L/360, hoist beams L/450 and stiffer): did you mean "
+                   f"\"L/{n * 10:g}\"?", key)
         return text, n, None, ""
     try:
         return text, None, units.parse(text, "length", key, positive=True), ""
@@ -769,7 +780,7 @@ def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
     return out
 
 
-def _family_mismatch(r: _Reader, section, material) -> None:
+def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
     """A lumber size in steel, or a steel shape in lumber, is refused: the checks and the
     weight would be for a member that does not exist."""
     if section is None or material is None:
@@ -786,6 +797,48 @@ def _family_mismatch(r: _Reader, section, material) -> None:
                 f"in wood, but material {material.key!r} is lumber: give a lumber size such as "
                 "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
                 "material such as \"A992\"", "beam.section")
+    else:
+        _grade_mismatch(r, section, material, mkind, system)
+
+
+_TUBES = ("rect-tube", "round-tube", "pipe")
+
+
+def _a(word: str) -> str:
+    return ("an " if word[:1] in "aeiou" else "a ") + word
+_ROLLED_GRADES = ("A36", "A572-50", "A992")  # grades of rolled shapes, plate and bar
+
+
+def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> None:
+    """A grade that the product is not made to gets a warning naming the usual grade: a tube
+    grade on a rolled shape or bar (the check would credit a yield that shape is not bought
+    at), a rolled-shape grade on tube, an aluminium or stainless member given a steel shape
+    from the AISC catalog (its dimensions are the steel shape's). Product grades: AISC Manual
+    15th ed. Table 2-4 and the ASTM product specifications (common practice; from memory)."""
+    key = getattr(material, "key", "")
+    shape = section.shape
+    where = "beam.material"
+    if mkind == "steel" and getattr(material, "hss_wall_factor", None) is not None \
+            and shape not in _TUBES + ("custom",):
+        usual = ("A992 (W shapes) or A36 / A572-50 (S, C, MC, angles, tees, plate and bar)")
+        r.warn(f"material {key!r} is a grade of tube or pipe, but section "
+               f"{section.designation!r} is {_a(shape)}: that product is bought as {usual}, so "
+               f"the check may credit a yield ({units.fmt(material.fy, 'stress', system)}) the "
+               "member does not have. Give the grade on the mill cert", where)
+    elif mkind == "steel" and key in _ROLLED_GRADES and shape in _TUBES:
+        r.warn(f"material {key!r} is a grade of rolled shapes, plate and bar, but section "
+               f"{section.designation!r} is {_a(shape)}: structural tube is made to A500 "
+               "(\"A500-C\", \"A500-B\") and pipe to A53 (\"A53-B\"); the check uses "
+               f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
+               where)
+    elif mkind in ("aluminum", "stainless") and str(getattr(section, "source", "")).startswith(
+            "AISC Shapes Database"):
+        metal = "aluminium" if mkind == "aluminum" else mkind
+        r.warn(f"section {section.designation!r} is a steel shape from the AISC catalog, but "
+               f"material {key!r} is {metal}: {metal} shapes of a similar name have other "
+               "dimensions (walls, flanges, fillets), so these properties are not the "
+               "member's. Give [beam.section] with the shape and the mill's dimensions",
+               "beam.section")
 
 
 def _wood_keys(r: _Reader, beam: dict, crit, material, section):
@@ -1025,7 +1078,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 hung.append(f"loads[{i}]")
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
-    _family_mismatch(r, section, material)
+    _family_mismatch(r, section, material, system)
     if length is not None:
         for key, message in geometry_problems(length, supports, loads,
                                               lambda x: units.fmt(x, "length", system)):
