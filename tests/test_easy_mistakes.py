@@ -150,6 +150,17 @@ def test_the_text_ui_verdict_names_loads_pointing_up_within_80_columns():
     assert "1 load(s) point UP" in verdict and len(verdict) <= 76  # ... and the line says so
 
 
+# ------------------------------------------------------------------ a key that changes nothing
+def test_welded_on_a_material_welding_does_not_weaken_is_warned():
+    text = job_text(section="2x10", material="DF-L-2").replace("[beam]", "[beam]\nwelded = true")
+    w = [p for p in warnings(parse_job_text(text)) if p.key == "beam.welded"]
+    assert len(w) == 1 and "changes nothing" in w[0].message
+    # aluminium 6061-T6 has a welded (heat-affected zone) strength: welded is used, no warning
+    text = job_text(section="FB4x1/2", material="6061-T6").replace("[beam]",
+                                                                    "[beam]\nwelded = true")
+    assert not [p for p in warnings(parse_job_text(text)) if p.key == "beam.welded"]
+
+
 # ------------------------------------------------------------------ a deflection limit with a dropped zero
 def test_a_deflection_limit_looser_than_l_100_is_warned_and_l_180_is_not():
     # loosest common limits about L/120-L/150 (IBC 2018 Table 1604.3, from memory)

@@ -1079,6 +1079,11 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
+    if welded and material is not None and not getattr(material, "fy_welded", None):
+        r.warn(f"welded = true changes nothing for material {getattr(material, 'key', '')!r}: "
+               "only a grade with a welded (heat-affected zone) strength, such as aluminium "
+               "6061-T6, is weakened by welding in these checks; the welds themselves are not "
+               "checked", "beam.welded")
     if length is not None:
         for key, message in geometry_problems(length, supports, loads,
                                               lambda x: units.fmt(x, "length", system)):
