@@ -212,22 +212,39 @@ def test_thin_aluminium_tube_is_rated_on_its_local_buckling(tmp_path):
     assert d["factor"] > 0
 
 
-def test_unbraced_aluminium_channel_is_not_rated_braced_is(tmp_path):
-    # ADM 2015 F.2 lateral-torsional buckling is not computed: an unbraced channel gets no
-    # rating (the reason named); braced, its flange outstand (b/t 11.65 > lambda2 10.48,
-    # Fc 26.29 ksi) limits Mn = Fc Sc = 26.29 x 3.634 = 95.5 kip in, / 1.65 = 57.9 kip in
+def test_unbraced_aluminium_channel_is_rated_on_lateral_torsional_buckling(tmp_path):
+    # ADM 2015 F.2 (from memory), by hand: channel 6 x 2.5 in, tf 0.2, tw 0.17 (no fillets),
+    # A = 2 (2.5 x 0.2) + 5.6 x 0.17 = 1.952 in^2, x-bar = (1.0 x 1.25 + 0.952 x 0.085) / 1.952
+    # = 0.6818 in, Iy = 2 (0.2 x 2.5^3 / 12) + 1.0 (1.25 - 0.6818)^2 + 5.6 x 0.17^3 / 12
+    # + 0.952 (0.6818 - 0.085)^2 = 1.1850 in^4, ry = 0.7792 in; unbraced 8 ft: lambda = 96 /
+    # 0.7792 = 123.2 > Cc 65.67 (6061-T6): Mnmb = pi^2 x 10,100 x 3.634 / 123.2^2 = 23.86 kip
+    # in, / 1.65 = 14.46 kip in. Braced, its flange outstand (b/t 11.65 > lambda2 10.48, Fc
+    # 26.29 ksi) limits Mn = Fc Sc = 26.29 x 3.634 = 95.5 kip in, / 1.65 = 57.9 kip in
     loose = write(tmp_path, "loose", f"section = {CHANNEL}\nmaterial = \"6061-T6\"",
                   uniform("-100 lbf/ft", "8 ft"), length="8 ft")
-    r = run("rating", loose)
-    assert r.returncode == 0 and "NOT RATED" in r.stdout and "lateral-torsional" in r.stdout
     d = solve(loose, "capacity")
-    assert d["rated"] is False
+    assert d["rated"] is True and not d["unchecked"]
+    b = chk(d, "bending")
+    assert b["limit"] == pytest.approx(14.46e3 * LBF * IN, rel=3e-3)
+    assert "F.2" in b["clause"] and "lateral-torsional" in b["formula"]
+    r = run("rating", loose)
+    assert r.returncode == 0 and "NOT RATED" not in r.stdout
     held = write(tmp_path, "held", f"section = {CHANNEL}\nmaterial = \"6061-T6\"\nbraced = true",
                  uniform("-100 lbf/ft", "8 ft"), length="8 ft")
     d = solve(held, "capacity")
     assert d["rated"] is True
     assert chk(d, "bending")["limit"] == pytest.approx(57.9e3 * LBF * IN, rel=3e-3)
     assert "NOT RATED" not in run("rating", held).stdout
+
+
+def test_unbraced_aluminium_angle_is_not_rated(tmp_path):
+    # an angle's lateral-torsional buckling (ADM 2015 chapter F) is not computed: no rating
+    ang = '{ shape = "angle", depth = "3 in", width = "3 in", thickness = "0.25 in" }'
+    p = write(tmp_path, "ang", f"section = {ang}\nmaterial = \"6061-T6\"",
+              uniform("-20 lbf/ft", "6 ft"), length="6 ft")
+    r = run("rating", p)
+    assert r.returncode == 0 and "NOT RATED" in r.stdout and "lateral-torsional" in r.stdout
+    assert solve(p, "capacity")["rated"] is False
 
 
 def test_welded_aluminium_uses_heat_affected_zone_strength(tmp_path):

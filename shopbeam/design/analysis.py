@@ -144,6 +144,7 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
         return []
     out = []
     tol = 1e-9 * job.length
+    cite = "ADM 2015 F.2/F.3" if fl.ltb[0] == "ADM" else "AISC 360-16 F1"
     for a, b, free, _l1, _why in st.ltb_segments:
         if not free:
             continue
@@ -161,7 +162,7 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
             continue
         out.append(f"Cantilever {units.fmt(a, 'length', job.units)} to "
                    f"{units.fmt(b, 'length', job.units)} is unbraced at its tip: checked with "
-                   f"Lb = its length and Cb = 1.0 (AISC 360-16 F1), loads at the shear centre. "
+                   f"Lb = its length and Cb = 1.0 ({cite}), loads at the shear centre. "
                    f"If the loads bear on the top flange (destabilising), the effective length "
                    f"is about {k:g} x L ({'built-in' if fixed else 'over a support'} root, "
                    f"SSRC Guide / BS 5950-1 Table 14, from memory): bending ratio "

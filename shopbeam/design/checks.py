@@ -135,6 +135,20 @@ class Flexure:
                 return (mp - (mp - 0.7 * fy * sx) * (lb - lp) / (lr - lp),
                         f"F7-10 HSS LTB, Lp {ln(lp)} < Lb {ln(lb)} <= Lr {ln(lr)}")
             return 2 * e * ja / (lb / ry), f"F7-11 HSS elastic LTB, Lb {ln(lb)} > Lr {ln(lr)}"
+        if kind == "ADM":
+            mnp, sc, e, cc, coef, form, scale = p
+            lam = coef * lb if form == "open" else coef * math.sqrt(lb)
+            how = ("F.2 open shape: lambda = Lb / ry" if form == "open" else
+                   "F.3 closed shape: lambda = 2.3 sqrt(Lb Sc / sqrt(Iy J))")
+            if lam < cc:
+                m = mnp * (1 - lam / cc) + math.pi**2 * e * lam * sc / cc**3
+                eq = "Mnmb = Mnp (1 - lambda/Cc) + pi^2 E lambda Sc / Cc^3"
+            else:
+                m = math.pi**2 * e * sc / lam**2
+                eq = "Mnmb = pi^2 E Sc / lambda^2"
+            return m * scale, (f"ADM 2015 {how} = {lam:.3g} (Lb {ln(lb)}, Cb taken as 1.0), "
+                               f"Cc {cc:.3g}: lateral-torsional buckling {eq}, Omega 1.65 "
+                               "(from memory)")
         if kind == "F11":
             my, mp, e, fy, d, t = p
             r = lb * d / t**2
@@ -336,6 +350,7 @@ def _adm_flexure(sec, mat, s, z, welded, system: str = "us") -> Flexure:
     then local buckling of the flat elements (shopbeam.design.aluminum, ADM 2015 B.5, F.8)
     over Omega 1.65 where an element is more slender than lambda1."""
     fl = _adm_yield_rupture(sec, mat, s, z, welded, system)
+    fl = replace(fl, ltb=_adm_ltb(sec, mat, s, z, welded, fl.omega), uses_cb=False)
     w = bool(welded and mat.fy_welded)
     elems = aluminum.flat_elements(sec, mat.fy, mat.e, mat.fy_welded if w else None)
     slender = [el for el in elems if el.slender]
@@ -351,8 +366,57 @@ def _adm_flexure(sec, mat, s, z, welded, system: str = "us") -> Flexure:
             f"{lim.words(system)}, Omega 1.65")
     if mnlb / OMEGA_ADM < fl.cap / fl.omega:
         return Flexure(mnlb, OMEGA_ADM, f"{text} (governs over {fl.cap_text})",
-                       warnings=fl.warnings)
+                       warnings=fl.warnings,
+                       ltb=_adm_ltb(sec, mat, s, z, welded, OMEGA_ADM), uses_cb=False)
     return replace(fl, cap_text=f"{fl.cap_text}; {text} does not govern")
+
+
+def adm_column_constants(fcy: float, e: float, aged: bool = True) -> tuple[float, float, float]:
+    """(Bc, Dc, Cc) in ksi of ADM 2015 Table B.4.2 (artificially aged tempers) or B.4.1 (other
+    tempers and welded members), from memory: aged Bc = Fcy (1 + (Fcy / 2250)^(1/2)),
+    Dc = Bc / 10 (Bc / E)^(1/2), Cc = 0.41 Bc / Dc; otherwise Bc = Fcy (1 + (Fcy / 1000)^(1/2)),
+    Dc = Bc / 20 (6 Bc / E)^(1/2), Cc = 2 Bc / (3 Dc). Stresses given and returned in ksi."""
+    if aged:
+        bc = fcy * (1 + math.sqrt(fcy / 2250))
+        dc = bc / 10 * math.sqrt(bc / e)
+        return bc, dc, 0.41 * bc / dc
+    bc = fcy * (1 + math.sqrt(fcy / 1000))
+    dc = bc / 20 * math.sqrt(6 * bc / e)
+    return bc, dc, 2 * bc / (3 * dc)
+
+
+def _adm_ltb(sec, mat, s, z, welded, omega: float):
+    """Lateral-torsional buckling of an aluminium beam bent about its strong axis, ADM 2015
+    (from memory): F.2 open shapes symmetric about the bending axis (I-beams, channels),
+    lambda = Lb / (ry sqrt(Cb)); F.3 closed shapes (rectangular tube), lambda =
+    2.3 sqrt(Lb Sc / (Cb sqrt(Iy J))); Mnmb = Mnp (1 - lambda / Cc) + pi^2 E lambda Sc / Cc^3 below Cc,
+    pi^2 E Sc / lambda^2 above, over Omega 1.65, Mnp = Z Fcy <= 1.5 S Fcy. Cb is taken as 1.0
+    (conservative; Cb enters inside lambda, not as a factor). A welded member takes the welded
+    yield and the Table B.4.1 constants (conservative). The strength is scaled by
+    omega / 1.65 so that the caller's single Omega gives Mnmb / 1.65. None where it does not
+    apply (weak axis, round and solid shapes) or the section lacks the properties.
+
+    Both slenderness forms reproduce the elastic buckling moment they stand for: with
+    Cw = Iy h^2 / 4 and J neglected, Mcr / Sx = pi^2 E / (Lb / ry)^2 for an I-shape; for a
+    closed shape, warping neglected and G = E / 2.6, Mcr / Sc = pi sqrt(E Iy G J) / (Lb Sc)
+    = pi^2 E / lambda^2 with lambda = 2.25 sqrt(Lb Sc / sqrt(Iy J)) (the ADM's 2.3 a little
+    on the safe side)."""
+    if sec.axis != "strong" or sec.shape not in ("i-beam", "channel", "rect-tube"):
+        return None
+    w = bool(welded and mat.fy_welded)
+    fcy = mat.fy_welded if w else mat.fy
+    ksi = PSI_PA * 1000
+    _bc, _dc, cc = adm_column_constants(fcy / ksi, mat.e / ksi, aged=not w)
+    mnp = min((z or s) * fcy, 1.5 * s * fcy)
+    if sec.shape == "rect-tube":
+        if not (sec.iy and sec.j):
+            return None
+        coef, form = 2.3 * math.sqrt(s / math.sqrt(sec.iy * sec.j)), "closed"
+    else:
+        if not sec.ry:
+            return None
+        coef, form = 1 / sec.ry, "open"
+    return ("ADM", (mnp, s, mat.e, cc, coef, form, omega / OMEGA_ADM))
 
 
 def _adm_yield_rupture(sec, mat, s, z, welded, system: str = "us") -> Flexure:
@@ -440,7 +504,9 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
                     "in shear (ADM 2015 G.2); not computed", "ADM 2015 G.2"))
     braced, _ = brace_points(job)
     if not braced:
-        open_shape = shape in ("i-beam", "channel", "angle", "tee")
+        covered = _adm_ltb(sec, mat, min(sec.sx_top, sec.sx_bot), sec.zx, False, OMEGA_ADM)
+        open_shape = shape in ("i-beam", "channel", "angle", "tee") and covered is None \
+            and not (shape in ("i-beam", "channel") and sec.axis == "weak")
         deep_bar = False
         if shape == "rect-bar" and d["h"] > d["b"]:
             lb = max((b - a for a, b, _ in unbraced_segments(job, job.beam())), default=0.0)
@@ -448,9 +514,9 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
         if open_shape or deep_bar:
             out.append(Unchecked(
                 "lateral-torsional buckling",
-                f"an unbraced {shape} in aluminium may buckle sideways (ADM 2015 F.4); "
+                f"an unbraced {shape} in aluminium may buckle sideways (ADM 2015 chapter F); "
                 "shopbeam does not compute it: brace the compression edge (braced = true, or "
-                "braces = [...]) or have it checked", "ADM 2015 F.4"))
+                "braces = [...]) or have it checked", "ADM 2015 chapter F"))
     return out
 
 
@@ -794,7 +860,9 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
         else:
             q = [abs(float(m(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
             cb = cb_factor(mmax, *q)
-        if cb * l1 < fl.cap and not fl.uses_cb:
+        if cb * l1 < fl.cap and fl.ltb is not None and fl.ltb[0] == "ADM":
+            mn, text = l1, f"{why} (governs over {fl.cap_text})"
+        elif cb * l1 < fl.cap and not fl.uses_cb:
             mn, text = l1, f"{fl.cap_text}; {why}"
         elif cb * l1 < fl.cap:
             mn = float(nominal_moment(fl.cap, l1, cb))
@@ -807,7 +875,12 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
             worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb, mn)
     r, mmax, allow, at, text, (a, b), cb, mn = worst
     lb = 0.0 if brace_points(job)[0] else b - a
-    bend_params = {"Mn": mn, "Omega": fl.omega, "Cb": cb, **fl.ltb_params(lb)}
+    omega = fl.omega
+    if fl.ltb is not None and fl.ltb[0] == "ADM" and mn < fl.cap:
+        # ADM lateral-torsional buckling governs: its own Mnmb over Omega 1.65 (the strength
+        # carried is scaled to the cap's Omega so every consumer gets Mnmb / 1.65)
+        mn, omega = mn / fl.ltb[1][-1], OMEGA_ADM
+    bend_params = {"Mn": mn, "Omega": omega, "Cb": cb, **fl.ltb_params(lb)}
     pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     seg_words = "" if len(st.ltb_segments) == 1 else \
         f"; unbraced length {pos(a)} to {pos(b)} governs"
@@ -824,7 +897,7 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                         if fl.wood is not None else _provenance(st.basis, text, "bending")))
     else:
         bend = Check("bending", mmax, allow, "N*m",
-                     f"{basis}: M <= Mn / Omega_b, Mn by {text}, Omega_b {fl.omega:g}", at,
+                     f"{basis}: M <= Mn / Omega_b, Mn by {text}, Omega_b {omega:g}", at,
                      detail=seg_words.lstrip("; "), extra={"cb": cb}, params=bend_params,
                      **_provenance(st.basis, text, "bending"))
     v = sol.shear.extremes()

@@ -354,7 +354,8 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
             continue
         seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
         rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
-                   fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained), fl.cap))
+                   fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained), fl.cap,
+                   fl.uses_cb))
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
@@ -364,6 +365,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     vallow = np.array([r[8] for r in rs])
     omega = np.array([r[6] for r in rs])
     cap = np.array([r[10] for r in rs])
+    uses_cb = np.array([r[11] for r in rs])  # False: Cb is not a factor (NDS CL, ADM lambda)
     ltb1 = np.array([[s[1] for s in r[7]] for r in rs])  # (R, nseg)
     free = [s[2] for s in rs[0][7]]
     limits, live_limits = [], []
@@ -445,7 +447,7 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
             else:
                 q = [np.abs(_value_at(mco, mb, a + f_ * (bb - a))).reshape(R, S).max(axis=1)
                      for f_ in (0.25, 0.5, 0.75)]
-                cb = cb_factor(mmax, *q)
+                cb = np.where(uses_cb, cb_factor(mmax, *q), 1.0)
             mn = nominal_moment(cap, ltb1[:, si], cb)
             bend = np.maximum(bend, mmax * omega / mn)
         shear = (_absmax_many(combo(V, kk), vb, [(0.0, L)])[0].reshape(R, S).max(axis=1)
