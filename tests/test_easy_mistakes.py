@@ -120,6 +120,17 @@ def test_a_load_pointing_up_blocks_the_rating_until_marked_uplift(tmp_path):
     assert "push UP" not in run("solve", str(p)).stdout
 
 
+def test_input_warnings_are_announced_before_the_answer(tmp_path):
+    p = tmp_path / "job.toml"
+    p.write_text(job_text(load='value = "400 lb"'))
+    report = run("solve", str(p)).stdout
+    assert report.index("1 INPUT WARNING(S) on loads[0].value") < report.index("MEMBER")
+    page = run("capacity", str(p)).stdout
+    assert page.index("1 INPUT WARNING(S) on loads[0].value") < page.index("CAPACITY FACTOR")
+    p.write_text(job_text())  # nothing to warn about: no such line
+    assert "INPUT WARNING" not in run("solve", str(p)).stdout
+
+
 def test_one_upward_load_among_gravity_loads_also_blocks_the_rating():
     from shopbeam.design.capacity import capacity
 

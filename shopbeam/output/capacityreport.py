@@ -19,6 +19,12 @@ def render(res: CapacityResult, width: int = 78) -> str:
     lines = textwrap.wrap(f"shopbeam capacity: {job.title}", width, subsequent_indent="  ")
     lines.append("=" * width)
     lines += textwrap.wrap(banner(job.tags, job.lifting), width)
+    warned = [w for w in job.warnings if w.warning]
+    if warned:  # a slip in the input is read before the answer, not after it
+        keys = ", ".join(dict.fromkeys(w.key for w in warned))
+        lines += textwrap.wrap(f"{len(warned)} INPUT WARNING(S) on {keys}: read them under "
+                               "INPUT WARNINGS below before posting a load", width,
+                               initial_indent="!! ", subsequent_indent="!! ")
     lines.append("")
     k = res.factor
     if math.isfinite(k):

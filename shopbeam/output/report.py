@@ -63,6 +63,11 @@ def render(result: Result) -> str:
         lines.append(f"job file: {job.path}")
     lines.append("=" * WIDTH)
     lines += caution_block(result.cautions[:1])
+    warned = [w for w in job.warnings if w.warning]
+    if warned:  # a slip in the input is read before the answer, not after it
+        keys = ", ".join(dict.fromkeys(w.key for w in warned))
+        lines += _wrap(f"{len(warned)} INPUT WARNING(S) on {keys}: read them under INPUT "
+                       "WARNINGS below before using these figures", "!! ")
     lines.append("")
     sec, mat = job.section, job.material
     lines.append("MEMBER")
