@@ -209,6 +209,23 @@ def test_the_usual_grade_of_each_product_is_not_noise(section, material):
     assert not [p for p in warnings(job) if p.key in ("beam.material", "beam.section")]
 
 
+def test_wheels_on_a_tube_are_not_rated_and_wheel_edge_there_is_warned(tmp_path):
+    # a wheel bears on a narrow patch of an HSS wall: plastification (AISC 360-16 K2, Table
+    # K2.2) can govern and is not computed, so the rating refuses; wheel_edge only describes
+    # a wheel on an I-beam's bottom flange
+    from shopbeam.design.capacity import capacity
+
+    extra = ('[[moving]]\nloads = ["-300 lbf"]\ntravel = ["0 ft", "6 ft"]\n'
+             'wheel_edge = "1 in"\nlabel = "cart"')
+    job = parse_job_text(job_text(section="HSS4x4x1/4", material="A500-C", extra_load=extra))
+    assert [p.key for p in warnings(job) if "wheel_edge" in p.message] == [
+        "moving[0].wheel_edge"]
+    cap = capacity(job)
+    assert not cap.rated and any("moving[0]" in r for r in cap.not_rated)
+    job = parse_job_text(job_text(section="S8x18.4", material="A36", extra_load=extra))
+    assert not [p for p in warnings(job) if "wheel_edge" in p.message]
+
+
 # ------------------------------------------------------------------ a safety factor not used
 def test_safety_factor_on_steel_asd_is_a_warning_saying_what_to_write():
     job = parse_job_text(job_text(criteria="safety_factor = 3.0"))

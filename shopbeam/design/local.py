@@ -400,6 +400,7 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
     out = []
     if kind == "hss":
         hung = [k for k in (getattr(job, "hung", ()) or ()) if k.startswith("loads")]
+        wheels = [ws.key for ws in (getattr(job, "moving", ()) or ())]
         out.append(Unchecked(
             "HSS wall plastification and punching under a narrow bearing",
             "the wall checks assume the load bears across the full width of the tube (a cap "
@@ -408,8 +409,12 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
             + (f"; {', '.join(hung)} hang from the bottom wall (flange = \"bottom\"): a lug or "
                "clamp pulls on the wall there and its plastification can govern, so no rating "
                "is posted (bear the load on a full-width saddle, or have the wall checked)"
-               if hung else ""),
-            "AISC 360-16 K2, Table K2.2", blocks_rating=bool(hung)))
+               if hung else "")
+            + (f"; the wheels of {', '.join(wheels)} bear on a narrow patch of the wall, not "
+               "across its width, so its plastification can govern and no rating is posted "
+               "(run the wheels on a full-width plate or rail, or have the wall checked)"
+               if wheels else ""),
+            "AISC 360-16 K2, Table K2.2", blocks_rating=bool(hung or wheels)))
     elif sec.shape in ("i-beam", "channel") and sec.axis == "weak":
         out.append(Unchecked("local bearing of the flanges (weak axis)",
                              "concentrated forces on a member bent about its weak axis load "

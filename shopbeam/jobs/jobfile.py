@@ -1092,6 +1092,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
     upward += _upward_wheels(r, moving, system)
+    for ws in moving:
+        if ws.wheel_edge is not None and section is not None and not (
+                section.shape == "i-beam" and section.axis == "strong"):
+            r.warn(f"wheel_edge is where a trolley wheel bears on the bottom flange of an "
+                   f"I-beam; section {section.designation!r} is {_a(section.shape)} "
+                   f"({section.axis} axis), so it changes nothing", f"{ws.key}.wheel_edge")
     from shopbeam.jobs.limits import cost_problems  # bounded work: counts checked before solving
 
     for msg, key in cost_problems(supports, loads, moving, braces):
