@@ -288,6 +288,16 @@ def lifting_notes(job, prof: Profile | None) -> list[str]:
                    f"4.9.5, from memory): about {fmt(total, 'force', job.units)} at the "
                    "entered loads, along the runway at the wheels; the hangers, end stops and "
                    "their bracing must carry it (not checked on this member).")
+    if job.moving and _i_shape(job.section):
+        ws, bf = job.moving[0], job.section.dims.get("bf", 0.0)
+        first, last = ws.travel[0], ws.travel[1]
+        if bf and (first < bf or last > job.length - bf):
+            out.append("Wheels reach the end of the beam, where the bottom flange ends: near "
+                       "an unstiffened flange end the local flange stresses are higher than "
+                       "the interior figures the wheel flange bending check uses (CMAA 74 / "
+                       "AISC Design Guide 7 give them for the interior; end values are larger, "
+                       "from memory). Fit end stops that keep the wheels at least a flange "
+                       "width from the end, or close the end with a plate.")
     if prof.lateral and job.moving and not _i_shape(job.section):
         out.append(f"Lateral force {prof.lateral:.0%} of rated load + hoist + trolley (ASCE "
                    "7-16 4.9.4): weak-axis bending and torsion of this section are not checked.")
