@@ -510,8 +510,10 @@ def open_unchecked(job, st):
         out.append(Unchecked(
             "torsion from loads off the shear centre",
             "the loads act off the shear centre and twist the member; the cautions give a "
-            "rough figure, not a check (AISC Design Guide 9 method not applied)",
-            "AISC 360-16 H3 / Design Guide 9", blocks_rating=False))
+            "rough figure, not a check (AISC Design Guide 9 method not applied), so no rating "
+            "is posted on it. A deck, shelf or sheeting fastened along the member holds it "
+            "against twist: say so with beam.restrained = true",
+            "AISC 360-16 H3 / Design Guide 9", blocks_rating=True))
     if sec.shape == "tee" and sec.axis != "strong" and steel and st.basis == "asd":
         out.append(Unchecked("lateral-torsional and local buckling of a tee bent about its "
                              "weak axis", "F9 covers bending about the axis of symmetry only; "
