@@ -341,3 +341,36 @@ def test_wheels_that_reach_the_flange_end_get_a_caution_and_kept_back_they_do_no
     ws = replace(job.moving[0], travel=(1 * ft, job.length - 1 * ft))
     kept = replace(job, moving=(ws,))
     assert not any("Wheels reach the end of the beam" in c for c in analyze(kept).cautions)
+
+
+def _angle_job(load):
+    return f"""schema = 1
+title = "angle rail"
+[beam]
+length = "4 ft"
+section = "L3x3x1/4"
+material = "A36"
+restrained = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "4 ft"
+type = "roller"
+[[loads]]
+{load}
+"""
+
+
+def test_a_point_load_on_an_angle_leg_blocks_the_rating_a_spread_load_does_not():
+    # leg local bending under a concentrated force is not computed for angles and tees
+    # (AISC 360-16 J10 covers I-shapes and channels); at the supports the angle sits on a
+    # seat (common practice), so a uniform load alone keeps its rating
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    point = capacity(parse_job_text(_angle_job('type = "point"\nat = "2 ft"\nvalue = "-300 lbf"')))
+    assert not point.rated
+    assert any("loads[0]" in r and "single leg" in r for r in point.not_rated)
+    spread = capacity(parse_job_text(_angle_job('type = "uniform"\nvalue = "-50 lbf/ft"')))
+    assert spread.rated, spread.not_rated

@@ -426,8 +426,18 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                              "loads is not checked (bear it on a saddle)",
                              "AISC 360-16 K2, Table K2.1", blocks_rating=False))
     elif sec.shape in ("tee", "angle"):
+        # at a support the member bears on a bracket or seat (common practice: not the weak
+        # spot); a point load or a wheel on a single leg or stem bends it locally, and that is
+        # not computed, so no rating rests on it
+        points = [ld.key or "a point load" for ld in job.loads
+                  if ld.kind == "point" and ld.value]
+        points += [ws.key for ws in (getattr(job, "moving", ()) or ())]
         out.append(Unchecked("stem or leg local yielding under a concentrated force",
                              "concentrated forces at supports and point loads of tees and "
-                             "angles are not checked locally", "AISC 360-16 J10",
-                             blocks_rating=False))
+                             "angles are not checked locally"
+                             + (f"; {', '.join(points)} bear on a single leg or stem, which "
+                                "can bend or yield locally first, so no rating is posted "
+                                "(spread the load with a plate across the member, or have "
+                                "the leg checked)" if points else ""),
+                             "AISC 360-16 J10", blocks_rating=bool(points)))
     return out
