@@ -1,16 +1,32 @@
 """Sizing: every catalog (or stock) section that passes the job, lightest first.
 
-The sweep is fast because the layout is solved once, not once per section. For a fixed set
-of supports without springs, shear and moment do not depend on EI and deflection is EI*u /
-EI; every load state is fixed + w_self x (unit self-weight) + k x live, all solved with
-EI = 1 and sharing one set of breaks. Each section then only scales and adds coefficient
-arrays, and the exact extremes of all sections come from one batched root solve per check.
-The capacity factor k of every section is found by a vectorised bracketed root search
-(Illinois regula falsi) on the same arrays. Jobs with springs (moments then depend on EI)
-or moving loads are checked section by section (slower; the sweep says so).
+The sweep is fast because the layout is solved once, not once per section. Shear and moment
+of a beam without springs do not depend on EI, and deflection is EI*u / EI: every load state
+is fixed + w_self x (unit self-weight) + k x live, all solved with EI = 1 and sharing one set
+of breaks. Each section then only scales and adds coefficient arrays, and the exact extremes
+of all sections come from one batched root solve per check. The capacity factor k of every
+section is found by a vectorised bracketed root search (Illinois regula falsi) on the same
+arrays. With patterns the two states are the exact envelopes over all patterns.
+
+Jobs whose full check reads more than those arrays hold are screened, then checked in full:
+- springs: a beam of stiffness EI on springs k has the moments of a beam of EI = 1 on
+  springs k / EI, so each section is the reference layout plus extra springs; their forces
+  come from one small linear system per section (`_spring_forces`), exact;
+- moving loads: every check's governing trolley position for the job's own section and nine
+  positions along the travel are solved as static states (patterns: all on, all off and the
+  governing ones), with the wheel flange check of lifting jobs under each wheel;
+- a load hung from a flange (lifting): its flange check is left to the full check.
+Any chosen state is a real load state, so a screened ratio is never above the section's
+full-check ratio (a lower bound: above 1 it fails for sure). The rows are then checked in
+full (`evaluate`, `capacity`) lightest first, skipping those the screen already fails, until
+one passes: every lighter section has failed a full check or a lower bound, so the lightest
+that passes is the one checking every section in full would give (tests/test_sizing_exact.py).
+Rows heavier than it that pass the screen are "screened only": not listed as passing. A short
+list (a stock list of up to 12) is checked in full throughout. Memory: sections go through
+in chunks (CHUNK_BYTES per working array), so no count of sections is refused.
 
 Ranking: by weight per length, lightest first; with a priced stock list also by price
-(cheapest that passes).
+(cheapest that passes, found the same way in price order).
 """
 
 from __future__ import annotations
@@ -26,21 +42,24 @@ from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
 from shopbeam.design.capacity import capacity
+from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
                                     shear_strength, unbraced_segments)
-from shopbeam.design.loading import (_dummies, _positions, build_envelope, evaluate, load_parts,
+from shopbeam.design.lifting import (DEFAULT_WHEEL_EDGE, OMEGA_WHEEL, flange_coefficients,
+                                     flange_tf_at_wheel, profile_of)
+from shopbeam.design.loading import (_dummies, _positions, build_envelope, clip, evaluate,
+                                     load_parts,
                                      state_set)
 from shopbeam.design.lumber import service_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
-from shopbeam.engine.solver import segments, solve
+from shopbeam.engine.solver import segments, solve, solve_many
 from shopbeam.errors import InputError
 from shopbeam.members import catalog, wood
 from shopbeam.members.materials import get as get_material
 from shopbeam.members.sections import bending_ix, turn
 
-SLOW_LIMIT = 80  # sections checked one by one at most (springs, moving loads)
 
 
 @dataclass(frozen=True)
@@ -54,10 +73,19 @@ class SizeRow:
     factor: float  # capacity factor k of the live loads
     price_per_m: float | None = None
     note: str = ""
+    # how the ratio was found: "full" (the section's own full check), "batched" (the batched
+    # sweep, the same checks exactly) or "screen" (a lower bound over chosen load states: the
+    # row fails when it is above 1, and is not known to pass until checked in full)
+    checked: str = "batched"
 
     @property
     def ok(self) -> bool:
-        return self.ratio <= 1.0
+        return self.ratio <= 1.0 and self.checked != "screen"
+
+    @property
+    def screened_only(self) -> bool:
+        """Passed the screen but not checked in full (heavier than the lightest that passes)."""
+        return self.checked == "screen" and self.ratio <= 1.0 + SCREEN_TOL
 
     def cost(self, length: float) -> float | None:
         return None if self.price_per_m is None else self.price_per_m * length
@@ -73,6 +101,11 @@ class SizeResult:
     currency: str = ""
     skipped: tuple[str, ...] = ()
     material_note: str = ""  # said when the sweep used another material than the job's
+    full_checks: int = 0  # sections checked in full (evaluate + capacity) after the batch
+
+    @property
+    def screened_only(self) -> list[SizeRow]:
+        return [r for r in self.rows if r.screened_only]
 
     @property
     def passing(self) -> list[SizeRow]:
@@ -94,8 +127,20 @@ def _real_roots_01(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
     """Real roots in [0, 1] of rows of ascending coefficients (N, w), w <= 4, in closed form
     (linear, quadratic, trigonometric/Cardano cubic); wider rows go to the companion solve."""
     n, w = c.shape
-    if w > 4:
-        return _roots_in_pieces(c, np.ones(n))
+    if w > 4:  # rows whose top terms are negligible (uniform loads: quartic deflection, cubic
+        # derivative) stay in closed form; only the rest go to the companion solve
+        top = np.abs(c).max(axis=1)
+        wide = (np.abs(c[:, 4:]) > 1e-12 * top[:, None]).any(axis=1)
+        if wide.all():
+            return _roots_in_pieces(c, np.ones(n))
+        narrow = np.flatnonzero(~wide)
+        rows, t = _real_roots_01(c[narrow, :4])
+        rows = narrow[rows]
+        if wide.any():
+            wi = np.flatnonzero(wide)
+            r2, t2 = _roots_in_pieces(c[wi], np.ones(len(wi)))
+            rows, t = np.concatenate([rows, wi[r2]]), np.concatenate([t, t2])
+        return rows, t
     size = np.abs(c)
     top = size.max(axis=1)
     rel = size > 1e-12 * top[:, None]
@@ -246,12 +291,13 @@ def _candidates(job, kind, max_depth, stock):
 
 # ------------------------------------------------------------------ the sweep
 def size(job, kind: str | None = None, max_depth: float | None = None, stock=None,
-         with_capacity: bool = True) -> SizeResult:
+         with_capacity: bool = True, confirm: int = 1) -> SizeResult:
     """Sweep sections for the job; rows sorted by weight per length, lightest first.
-    `kind = "all"` sweeps every catalog kind of the job's material family (metal or wood)."""
+    `kind = "all"` sweeps every catalog kind of the job's material family (metal or wood).
+    `confirm`: how many passing sections to check in full, lightest first (see the module)."""
     t0 = time.perf_counter()
     if kind is not None and kind.lower() == "all" and stock is None:
-        return _size_all(job, max_depth, with_capacity, t0)
+        return _size_all(job, max_depth, with_capacity, t0, confirm)
     kind = kind or default_kind(job)
     material_note = ""
     if stock is None:
@@ -262,60 +308,273 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     parts = load_parts(base)
     springs = any(s.kind == "spring" for s in job.supports)
     wood = any(getattr(c[2], "kind", "") == "lumber" for c in cands)
-    if springs or parts.moving or wood:
-        rows, skipped = _slow(job, _wood_values(job, cands) if wood else cands)
-        method = ("section by section (the job has " + ("springs" if springs else
-                  "moving loads" if parts.moving else "wood members: NDS factors, bearing "
-                  "and creep per size") + ")")
+    n_full = 0
+    if wood:
+        rows, skipped = _slow(job, _wood_values(job, cands))
+        n_full = len(rows)
+        method = ("section by section (wood members: NDS factors, bearing and creep per size)")
     else:
-        rows, skipped = _fast(job, base, parts, cands, state_set, with_capacity)
-        method = "one layout solve, all sections batched"
+        rows, skipped, exact = _batched(job, base, parts, cands, with_capacity)
+        n_full = _confirm(job, rows, max(1, confirm), with_capacity, stock is not None)
+        if exact:
+            method = "one layout solve, all sections batched"
+        else:
+            why = ", ".join(x for x in ("springs (exact per-section spring forces)" if springs
+                                        else "", "moving loads" if parts.moving else "",
+                                        "a load hung from a flange" if not (springs or
+                                                                            parts.moving) else "")
+                            if x)
+            method = (f"all sections screened in one batched pass ({why}), then checked in full "
+                      "lightest first until one passes")
+        method += f"; {n_full} checked in full"
     rows.sort(key=lambda r: (r.weight, r.designation))
     return SizeResult(job, "stock list" if stock is not None else kind, tuple(rows),
                       time.perf_counter() - t0, method,
                       getattr(stock, "currency", "") if stock is not None else "",
-                      tuple(skipped), material_note)
+                      tuple(skipped), material_note, n_full)
 
 
-def _size_all(job, max_depth, with_capacity, t0) -> SizeResult:
+def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
     wood = getattr(job.material, "kind", "") in ("lumber", "lvl")
     rows: dict[str, SizeRow] = {}
     skipped, methods = [], set()
+    n_full = 0
+    seen: set[str] = set()
+    rank = {"full": 0, "batched": 1, "screen": 2}
     for k in catalog.kinds():
         if (k.lower() in ("lumber", "lvl")) != wood:
             continue
+        names = {s.designation for s in catalog.list_sections(k)}
+        if names and names <= seen:  # a kind inside one already swept (HSS-rect in HSS)
+            continue
+        seen |= names
         try:
-            res = size(job, k, max_depth, None, with_capacity)
+            res = size(job, k, max_depth, None, with_capacity, confirm)
         except InputError as exc:  # e.g. a kind with no section under --max-depth
             skipped.append(f"{k}: {exc.problem.message}")
             continue
-        methods.add(res.method)
+        methods.add(re.sub(r"; \d+ checked in full$", "", res.method))
+        n_full += res.full_checks
         skipped += list(res.skipped)
-        for r in res.rows:  # kinds overlap (HSS is HSS-rect and HSS-round): one row each
-            rows.setdefault(r.designation, r)
+        for r in res.rows:  # kinds overlap: one row each, the best-checked one
+            old = rows.get(r.designation)
+            if old is None or rank[r.checked] < rank[old.checked]:
+                rows[r.designation] = r
     out = sorted(rows.values(), key=lambda r: (r.weight, r.designation))
     return SizeResult(job, "all", tuple(out), time.perf_counter() - t0,
-                      "every catalog kind: " + "; ".join(sorted(methods)), "", tuple(skipped))
+                      "every catalog kind: " + "; ".join(sorted(methods))
+                      + f"; {n_full} checked in full", "", tuple(skipped), "", n_full)
 
 
-def _fast(job, base, parts, cands, state_set, with_capacity):
-    if not cands:
-        return [], []
+# ------------------------------------------------------------------ load states as arrays
+CHUNK_BYTES = 8 * 2**20  # the largest working array of one chunk of sections (memory bound)
+SCREEN_TOL = 1e-6  # a screened ratio above 1 + this fails for sure (it is a lower bound)
+CHECK_ALL = 12  # lists this short (a stock list) have every section checked in full
+
+
+@dataclass
+class _Q:
+    """One quantity (moment, shear or EI x deflection) of every load state, on one set of
+    breaks: state s of section i is fixed[s] + w_i sw[s] + kk_i live[s], and its live-only
+    combination lfixed[s] + kk_i live[s] (lfixed: the wheels' dead loads, which a check of
+    the live loads alone counts). With springs, section i adds its spring forces times the
+    unit solutions `unit` to each part (see `_spring_forces`)."""
+
+    fixed: np.ndarray  # (S or 1, P, w)
+    sw: np.ndarray  # (S or 1, P, w)
+    live: np.ndarray  # (S, P, w)
+    breaks: np.ndarray
+    lfixed: np.ndarray | None = None
+    unit: np.ndarray | None = None  # (m, P, w)
+
+    def parts(self, corr, sl):
+        out = [self.fixed[None], self.sw[None], self.live[None],
+               None if self.lfixed is None else self.lfixed[None]]
+        if corr is not None:
+            for i, c in enumerate(corr):
+                if out[i] is not None and c is not None:
+                    out[i] = out[i] + np.einsum("rsm,mpw->rspw", c[sl], self.unit)
+        return out
+
+
+def _reference_states(job, parts, nseg: int) -> list[tuple[tuple[int, ...], float | None]]:
+    """The load states a screen checks, as (pattern, first-wheel position): every check's
+    governing state for the job's own section (`evaluate`), every pattern on and off, and
+    for moving loads nine positions along the travel. Any state is a real load state, so
+    each section's ratio over them is never above its ratio over all states."""
+    pats = [tuple(range(nseg)), ()] if parts.patterned else [()]
+    out = []
+    if parts.moving:
+        lo, hi = parts.moving[0].p_range
+        out += [(p, float(x)) for p in pats for x in np.linspace(lo, hi, 9)]
+    else:
+        out += [(p, None) for p in pats]
+    try:
+        ev = evaluate(job, 1.0)
+        for w in ev.worst.values():
+            if parts.moving and w.get("position") is None:
+                continue
+            out.append((tuple(w.get("pattern") or ()), w.get("position")))
+    except (InputError, ValueError, ZeroDivisionError):  # the screen then has the grid only
+        pass
+    tol = 1e-6 * job.length
+    kept: list = []
+    for pat, p in out:
+        if not any(q == pat and (p is None or abs(r - p) <= tol) for q, r in kept):
+            kept.append((pat, p))
+    return kept
+
+
+def _spring_forces(sols, unit_sols, xs, k, ei, ei_ref):
+    """(R, cases, m): the extra force at each spring of section i for each unit case.
+
+    The unit cases are solved once on the beam at EI = 1 with spring stiffnesses k / ei_ref.
+    Section i is the same beam with stiffnesses k / ei_i (a beam of stiffness EI with springs
+    k has the moments of a beam of EI = 1 with springs k / EI, and EI times its deflection),
+    so it is the reference plus extra springs ds = k / ei_i - k / ei_ref, whose forces F obey
+    F = -ds (u + G F) (u: deflection at the springs, G: the springs' mutual flexibility):
+    (I + D G) F = -D u, one small system per section, exact."""
+    u = np.array([[float(s.deflection(x)) for x in xs] for s in sols])  # (C, m)
+    g = np.array([[float(s.deflection(x)) for s in unit_sols] for x in xs])  # (m, m)
+    d = k[None, :] / ei[:, None] - k[None, :] / ei_ref  # (R, m)
+    m = len(xs)
+    a = np.eye(m)[None] + d[:, :, None] * g[None]
+    rhs = -d[:, :, None] * u.T[None]  # (R, m, C)
+    return np.transpose(np.linalg.solve(a, rhs), (0, 2, 1))
+
+
+def _state_arrays(job, parts, sw_unit, extra, states, ei):
+    """Build the (M, V, U) arrays of `_Q` and the local-check items for the given states
+    (patterns x moving positions) in one `solve_many` pass; springs get per-section
+    corrections. Returns (M, V, U, corr, items, wheel data or None)."""
     L = job.length
-    sw_unit = Load("uniform", start=0.0, end=L, w1=-1.0, label="self-weight", case="dead")
+    springs = [s for s in job.supports if s.kind == "spring"]
+    ei_ref = float(np.exp(np.mean(np.log(ei)))) if springs else 1.0
+    sup = tuple(replace(s, stiffness=s.stiffness / ei_ref) if s.kind == "spring" else s
+                for s in job.supports)
+    empty = Beam(L, 1.0, sup, ())
+    segs = segments(empty)
+    span_loads = []
+    if parts.patterned:
+        for a, b, _ in segs:
+            span_loads.append(tuple(c for c in (clip(ld, a, b) for ld in parts.patterned) if c))
+    mv = parts.moving[0] if parts.moving else None
+    cases = [tuple(parts.fixed) + extra, (sw_unit,), tuple(parts.live)] + span_loads
+    wcase = {}
+    for _, p in states:
+        if mv is not None and p not in wcase:
+            wcase[p] = len(cases)
+            cases.append(tuple(Load("point", at=p + s, value=d, label=mv.label, key=mv.key,
+                                    case="dead") for s, d in zip(mv.offsets, mv.dead)))
+            cases.append(tuple(Load("point", at=p + s, value=f, label=mv.label, key=mv.key)
+                               for s, f in zip(mv.offsets, mv.live)))
+    nc = len(cases)
+    xs = [s.at for s in springs]
+    cases += [(Load("point", at=x, value=1.0),) for x in xs]
+    sols = solve_many(empty, cases)
+    S = len(states)
+    A = np.zeros((S, nc))
+    B = np.zeros((S, nc))
+    Al = np.zeros((S, nc))
+    for si, (pat, p) in enumerate(states):
+        A[si, 0] = 1.0
+        B[si, 2] = 1.0
+        for i in pat:
+            B[si, 3 + i] = 1.0
+        if p is not None:
+            A[si, wcase[p]] = Al[si, wcase[p]] = 1.0
+            B[si, wcase[p] + 1] = 1.0
+    corr = None
+    if springs:
+        k = np.array([s.stiffness for s in springs])
+        f = _spring_forces(sols[:nc], sols[nc:], xs, k, ei, ei_ref)  # (R, nc, m)
+        corr = (np.einsum("sc,rcm->rsm", A, f), f[:, 1:2, :], np.einsum("sc,rcm->rsm", B, f),
+                np.einsum("sc,rcm->rsm", Al, f) if mv is not None else None)
 
-    braced, braces = brace_points(job)
-    # brace points become breaks (zero loads), so unbraced lengths are whole pieces
-    extra = tuple(Load("point", at=x, value=0.0) for x in braces)
+    def q(name):
+        c = np.stack([getattr(s, name).coeffs for s in sols[:nc]])
+        unit = np.stack([getattr(s, name).coeffs for s in sols[nc:]]) if springs else None
+        return _Q(np.einsum("sc,cpw->spw", A, c), c[1][None], np.einsum("sc,cpw->spw", B, c),
+                  getattr(sols[0], name).breaks,
+                  np.einsum("sc,cpw->spw", Al, c) if mv is not None else None, unit)
+
+    items = _state_items(job, parts, sols[:nc], A, B, states, span_loads, mv, wcase,
+                         with_reactions=not springs)
+    wheels = None
+    if mv is not None:
+        wx = np.array([[p + s for s in mv.offsets] for _, p in states])  # (S, nw)
+        wheels = (wx, np.array(mv.dead, float), np.array(mv.live, float))
+    return q("moment"), q("shear"), q("deflection"), corr, items, wheels
+
+
+def _state_items(job, parts, sols, A, B, states, span_loads, mv, wcase, with_reactions):
+    """The concentrated forces of the states in the form of `local.sizing_items` with one
+    value per state: (at, face, lb, moving, fixed (S,), self-weight (S,), live (S,), support).
+    A wheel that meets another point load is left out in that state, and so is that load's
+    part (the check would add them): leaving a force out never raises a ratio."""
+    S = len(states)
+    out = []
+    if with_reactions:
+        for n, r in enumerate(sols[0].reactions):
+            if r.kind == "fixed":
+                continue
+            rf = np.array([s.reactions[n].force for s in sols])
+            out.append((r.at, "bottom", _local.bearing_of(job, r.key or ""), False, A @ rf,
+                        np.full(S, sols[1].reactions[n].force), B @ rf, True))
+    tol = 1e-9 * max(job.length, 1e-9)
+    groups: dict = {}
+
+    def add(ld, fixed, live):
+        key = ld.key or ""
+        face = _local.face_of(job, key)
+        slot = (round(ld.at / tol), face)
+        g = groups.setdefault(slot, {"at": ld.at, "face": face, "lb": [], "a": np.zeros(S),
+                                     "lv": np.zeros(S)})
+        g["lb"].append(_local.bearing_of(job, key))
+        g["a"] += fixed
+        g["lv"] += live
+
+    one, zero = np.ones(S), np.zeros(S)
+    for ld in parts.fixed:
+        if ld.kind == "point" and ld.value:
+            add(ld, ld.value * one, zero)
+    for ld in parts.live:
+        if ld.kind == "point" and ld.value:
+            add(ld, zero, ld.value * one)
+    for si, loads in enumerate(span_loads):
+        on = np.array([1.0 if si in pat else 0.0 for pat, _ in states])
+        for ld in loads:
+            if ld.kind == "point" and ld.value:
+                add(ld, zero, ld.value * on)
+    if mv is not None:
+        key = mv.key
+        face, lb = _local.face_of(job, key), _local.bearing_of(job, key)
+        for si, (_, p) in enumerate(states):
+            for s, d, f in zip(mv.offsets, mv.dead, mv.live):
+                x = p + s
+                hit = [g for g in groups.values() if abs(g["at"] - x) <= tol]
+                for g in hit:
+                    g["a"][si] = g["lv"][si] = 0.0
+                if hit or not (d or f):
+                    continue
+                a, lv = np.zeros(S), np.zeros(S)
+                a[si], lv[si] = d, f
+                out.append((x, face, lb, True, a, zero, lv))
+    for g in groups.values():
+        lb = None if any(b is None for b in g["lb"]) else min(g["lb"])
+        out.append((g["at"], g["face"], lb, False, g["a"], zero, g["lv"]))
+    return out
+
+
+def _exact_arrays(job, base, parts, sw_unit, extra):
+    """Without springs or moving loads: one layout solve; with patterns the S = 2 states are
+    the exact upper and lower envelopes over all patterns (see loading.build_envelope), the
+    same for every section: the spans' signs do not depend on EI or on the section's own
+    weight. Returns (M, V, U, items) as `_state_arrays` does."""
+    L = job.length
     parts = replace(parts, fixed=parts.fixed + (sw_unit,) + extra)
     ss = state_set(base, parts=parts, ei=1.0)
     empty = Beam(L, 1.0, job.supports, ())
-    ltb_segs = unbraced_segments(job, empty)
-    spans = segments(empty)
-    n_ratio, d_abs, _ = deflection_rule(job)
-    imp = parts.impact
-    # the self-weight solution alone: fixed = dead + sw_unit; split by solving sw alone
-
     allpos = _positions(parts.fixed) | _positions(parts.live)
     for sl in ss.span_loads:
         allpos |= _positions(sl)
@@ -323,61 +582,20 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
     if sw_sol.moment.breaks.shape != ss.fixed.moment.breaks.shape:
         raise ValueError("sizing: the self-weight solution does not share the layout's breaks")
 
-    def stack(name):
-        """(dead, self-weight per unit, live states (S, P, w), breaks). Without patterns S = 1;
-        with them the S = 2 states are the exact upper and lower envelopes over all patterns
-        (see loading.build_envelope), the same for every section: the spans' signs do not
-        depend on EI or on the section's own weight."""
+    def q(name):
         sw = getattr(sw_sol, name).coeffs
         fx = getattr(ss.fixed, name).coeffs
         lv = getattr(ss.live, name).coeffs
         if not parts.patterned:
-            return fx - sw, sw, lv[None], ss.fixed.moment.breaks
+            return _Q((fx - sw)[None], sw[None], lv[None], ss.fixed.moment.breaks)
         e = build_envelope(ss, name)
         s_ = e.carry(sw)
-        return e.fixed - s_, s_, np.stack([e.live + e.up, e.live + e.down]), e.breaks
+        return _Q((e.fixed - s_)[None], s_[None], np.stack([e.live + e.up, e.live + e.down]),
+                  e.breaks)
 
-    M = stack("moment")
-    V = stack("shear")
-    U = stack("deflection")  # EI * u (EI = 1)
-    # per-section constants
-    g0 = units.G0
-    rs = []
-    skipped = []
-    for des, sec, mat, price, note in cands:
-        try:
-            b = basis_of(replace(job, material=mat))
-            fl = flexure(sec, mat, b, job.criteria.safety_factor, job.welded)
-            sh = shear_strength(sec, mat, b, job.criteria.safety_factor, job.welded)
-        except (KeyError, TypeError, ValueError, ZeroDivisionError) as exc:
-            skipped.append(f"{des}: {exc}")
-            continue
-        seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
-        rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
-                   fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained), fl.cap,
-                   fl.uses_cb))
-    if not rs:
-        raise InputError("no section of this kind can be checked", "--kind")
-    R = len(rs)
-    S = M[2].shape[0]
-    wsw = np.array([r[5] for r in rs])
-    ei = np.array([r[9] for r in rs])
-    vallow = np.array([r[8] for r in rs])
-    omega = np.array([r[6] for r in rs])
-    cap = np.array([r[10] for r in rs])
-    uses_cb = np.array([r[11] for r in rs])  # False: Cb is not a factor (NDS CL, ADM lambda)
-    ltb1 = np.array([[s[1] for s in r[7]] for r in rs])  # (R, nseg)
-    free = [s[2] for s in rs[0][7]]
-    limits, live_limits = [], []
-    live_n = job.criteria.live_deflection_ratio  # floors: L/360 under live load alone
-    for a, bb, kind in spans:
-        limits.append(deflection_limit(a, bb, kind, n_ratio, d_abs))
-        live_limits.append(deflection_limit(a, bb, kind, live_n, None) if live_n else math.inf)
     # local checks at supports and point loads (shopbeam.design.local): every force is
-    # fixed + w_self x sw + kk x live[state]; its allowable depends on its direction
-
-    # live part per state of each force: with patterns, from each span's own part taken
-    # where it adds (upper) and where it relieves (lower), the same two states as above
+    # fixed + w_self x sw + kk x live[state]; with patterns, each span's own part taken where
+    # it adds (upper) and where it relieves (lower), the same two states as above
     if parts.patterned:
         basis = [()] + [(i,) for i in range(len(ss.spans))]
         items = []
@@ -388,109 +606,284 @@ def _fast(job, base, parts, cands, state_set, with_capacity):
                          + tuple(it[7:]))
     else:
         items = _local.sizing_items(base, ss, sw_sol, [()])
+    S = 2 if parts.patterned else 1
+    items = [it[:4] + tuple(np.broadcast_to(np.asarray(v, float), (S,)) for v in it[4:7])
+             + tuple(it[7:]) for it in items]
+    return q("moment"), q("shear"), q("deflection"), items
+
+
+def _batched(job, base, parts, cands, with_capacity):
+    """(rows, skipped, exact): every candidate rated in one vectorised pass. exact: the rows'
+    ratios are each section's own full check (no springs, no moving loads, no load hung from
+    a flange); otherwise they come from a screen over chosen load states (see `size`) and are
+    lower bounds of the full check."""
+    if not cands:
+        return [], [], True
+    L = job.length
+    sw_unit = Load("uniform", start=0.0, end=L, w1=-1.0, label="self-weight", case="dead")
+    braced, braces = brace_points(job)
+    # brace points become breaks (zero loads), so unbraced lengths are whole pieces
+    extra = tuple(Load("point", at=x, value=0.0) for x in braces)
+    springs = any(s.kind == "spring" for s in job.supports)
+    moving = bool(parts.moving)
+    lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
+    exact = not springs and not moving and not (lifting and getattr(job, "hung", ()))
+    empty = Beam(L, 1.0, job.supports, ())
+    ltb_segs = unbraced_segments(job, empty)
+    spans = segments(empty)
+    n_ratio, d_abs, _ = deflection_rule(job)
+    imp = parts.impact
+    g0 = units.G0
+    prof = profile_of(job) if lifting else None
+    ws = job.moving[0] if (moving and lifting) else None
+    a_w = (ws.wheel_edge if ws is not None and ws.wheel_edge is not None else DEFAULT_WHEEL_EDGE)
+    rs, skipped = [], []
+    for des, sec, mat, price, note in cands:
+        try:
+            jm = replace(job, material=mat)
+            b = basis_of(jm)
+            fl = flexure(sec, mat, b, job.criteria.safety_factor, job.welded)
+            sh = shear_strength(sec, mat, b, job.criteria.safety_factor, job.welded)
+            fl, sh = _design_factor(jm, sec, fl, sh)  # a below-the-hook beam: BTH-1 Nd
+            wheel = None
+            if ws is not None and sec.shape == "i-beam" and sec.axis == "strong":
+                tf, tapered = flange_tf_at_wheel(sec, a_w)
+                d = sec.dims
+                lam = min(max(2 * a_w / (d["bf"] - d["tw"]), 0.0), 1.0)
+                c = flange_coefficients(lam, tapered)
+                scale = prof.nd / 1.67 if prof is not None and prof.nd else 1.0
+                wheel = (tf, [c["cx" + i] for i in "012"], [c["cy" + i] for i in "012"],
+                         sec.sx_bot, mat.fy / (OMEGA_WHEEL * scale))
+        except (KeyError, TypeError, ValueError, ZeroDivisionError) as exc:
+            skipped.append(f"{des}: {exc}")
+            continue
+        seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
+        rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
+                   fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained),
+                   fl.cap, fl.uses_cb, wheel))
+    if not rs:
+        raise InputError("no section of this kind can be checked", "--kind")
+    R = len(rs)
+    wsw = np.array([r[5] for r in rs])
+    ei = np.array([r[9] for r in rs])
+    vallow = np.array([r[8] for r in rs])
+    omega = np.array([r[6] for r in rs])
+    cap = np.array([r[10] for r in rs])
+    uses_cb = np.array([bool(r[11]) for r in rs])
+    ltb1 = np.array([[s[1] for s in r[7]] for r in rs])  # (R, nseg)
+    free = [s[2] for s in rs[0][7]]
+    if exact:
+        M, V, U, items = _exact_arrays(job, base, parts, sw_unit, extra)
+        corr, wheels, cb_one = None, None, False
+    else:
+        states = _reference_states(job, parts, len(spans))
+        M, V, U, corr, items, wheels = _state_arrays(job, parts, sw_unit, extra, states, ei)
+        if ws is None:  # no wheel flange check (not a lifting job)
+            wheels = None
+        cb_one = moving  # the full check takes Cb = 1 under moving loads
+    S = M.live.shape[0]
+    limits, live_limits = [], []
+    live_n = job.criteria.live_deflection_ratio  # floors: L/360 under live load alone
+    for a, bb, kind in spans:
+        limits.append(deflection_limit(a, bb, kind, n_ratio, d_abs))
+        live_limits.append(deflection_limit(a, bb, kind, live_n, None) if live_n else math.inf)
     n_it = len(items)
     if n_it:
         orient = np.array([1.0 if it[1] == "top" else -1.0 for it in items])  # + pulls
-        fa = np.array([it[4] for it in items])
-        fs = np.array([it[5] for it in items])
-        flv = np.array([it[6] for it in items]).T  # (S, n_it)
+        fa = np.array([it[4] for it in items]).T  # (S, n_it)
+        fs = np.array([it[5] for it in items]).T
+        flv = np.array([it[6] for it in items]).T
         al_pull = np.empty((R, n_it))
         al_bear = np.empty((R, n_it))
         nm_pull, nm_bear = [], []
+        # an allowable reads the force's distance from the member end only against d, h and
+        # 10 tf (local.limit_states): forces farther in than all of those share one value
+        far = 1.01 * max(max(r[1].depth, 10 * r[1].dims.get("tf", 0.0)) for r in rs)
+        keys, uniq = [], {}
+        for it in items:
+            end = min(max(0.0, min(it[0], L - it[0])), far)
+            key = (end, it[1], it[2], bool(it[3]), len(it) > 7 and bool(it[7]))
+            if key not in uniq:
+                uniq[key] = len(uniq)
+            keys.append(uniq[key])
+        reps = [(k_[0],) + k_[1:4] + (0.0, 0.0, 0.0, k_[4]) for k_ in uniq]
+        keys = np.array(keys)
         for i, r in enumerate(rs):
-            pu, be = _local.sizing_allowables(job, r[1], r[2], items)
-            al_pull[i] = [x[0] for x in pu]
-            al_bear[i] = [x[0] for x in be]
-            nm_pull.append([x[1] for x in pu])
-            nm_bear.append([x[1] for x in be])
+            pu, be = _local.sizing_allowables(job, r[1], r[2], reps)
+            al_pull[i] = np.array([x[0] for x in pu])[keys]
+            al_bear[i] = np.array([x[0] for x in be])[keys]
+            nm_pull.append([pu[j][1] for j in keys])
+            nm_bear.append([be[j][1] for j in keys])
+    if wheels is not None:
+        wx, wd, wl = wheels
+        per = ws.wheels_per_axle
+        has_w = np.array([r[12] is not None for r in rs])
+        w_tf = np.array([r[12][0] if r[12] else 1.0 for r in rs])
+        w_cx = np.array([r[12][1] if r[12] else [0.0] * 3 for r in rs])
+        w_cy = np.array([r[12][2] if r[12] else [0.0] * 3 for r in rs])
+        w_sb = np.array([r[12][3] if r[12] else 1.0 for r in rs])
+        w_al = np.array([r[12][4] if r[12] else math.inf for r in rs])
+        wj = np.clip(np.searchsorted(M.breaks, wx, side="right") - 1, 0, len(M.breaks) - 2)
+        wt = wx - M.breaks[wj]  # (S, nw)
+    # sections in chunks so that the largest working array stays within CHUNK_BYTES
+    P, w = M.live.shape[1], max(M.live.shape[2], U.live.shape[2])
+    chunk = max(1, int(CHUNK_BYTES // (8 * S * P * w * 2)))
+    slices = [slice(i, min(R, i + chunk)) for i in range(0, R, chunk)]
 
-    def local_ratio(kk, want_name=False):
-        """(R,) worst local ratio over states and forces at factors kk."""
+    def local_ratio(kk, sl, want_name=False):
+        n = sl.stop - sl.start
         if not n_it:
-            return np.zeros(R), [""] * R
-        force = (fa[None, None, :] + wsw[:, None, None] * fs[None, None, :]
-                 + kk[:, None, None] * flv[None, :, :])  # (R, S, n_it)
+            return np.zeros(n), [""] * n
+        force = (fa[None] + wsw[sl, None, None] * fs[None] + kk[:, None, None] * flv[None])
         pulls = orient[None, None, :] * force > 0
-        allow = np.where(pulls, al_pull[:, None, :], al_bear[:, None, :])
+        allow = np.where(pulls, al_pull[sl, None, :], al_bear[sl, None, :])
         with np.errstate(divide="ignore", invalid="ignore"):
             rr = np.where(np.isinf(allow), 0.0, np.abs(force) / allow)
-        flat = rr.reshape(R, -1)
+        flat = rr.reshape(n, -1)
         worst = flat.max(axis=1)
         if not want_name:
             return worst, None
         idx = flat.argmax(axis=1)
         names = []
-        for i in range(R):
+        for i in range(n):
             s_, j = divmod(int(idx[i]), n_it)
-            names.append(nm_pull[i][j] if pulls[i, s_, j] else nm_bear[i][j])
+            g = sl.start + i
+            names.append(nm_pull[g][j] if pulls[i, s_, j] else nm_bear[g][j])
         return worst, names
 
-    def combo(arrs, kk):
-        f, s, lv, _ = arrs  # (P,w), (P,w), (S,P,w)
-        base_ = f[None] + wsw[:, None, None] * s[None]  # (R,P,w)
-        out = base_[:, None] + kk[:, None, None, None] * lv[None]  # (R,S,P,w)
-        return out.reshape(R * S, *f.shape)
+    def combo(q, kk, sl, live_only=False):
+        f, s, lv, lf = q.parts(corr, sl)
+        n = sl.stop - sl.start
+        k4 = kk[:, None, None, None]
+        if live_only:
+            out = k4 * lv if lf is None else lf + k4 * lv
+        else:
+            out = f + wsw[sl, None, None, None] * s + k4 * lv
+        out = np.broadcast_to(out, (n, S) + out.shape[2:])
+        return out.reshape(n * S, *out.shape[2:])
 
-    def ratios(k):
-        """(R,) governing ratio and (R,) index of the governing check at factors k."""
+    def chunk_ratios(k, sl):
+        n = sl.stop - sl.start
         kk = k * (1 + imp)
-        mco = combo(M, kk)
-        mb, vb, ub = M[3], V[3], U[3]
-        bend = np.zeros(R)
+        mco = combo(M, kk, sl)
+        mb, vb, ub = M.breaks, V.breaks, U.breaks
+        bend = np.zeros(n)
         mmaxes = _absmax_many(mco, mb, [(a, bb) for a, bb, _ in ltb_segs])
         for si, (a, bb, _free) in enumerate(ltb_segs):
             # with patterns: Mmax, MA, MB, MC each the largest over both envelopes (the
             # evaluation's rule, conservative against every single pattern)
-            mmax = mmaxes[si].reshape(R, S).max(axis=1)
-            if np.all(np.isinf(ltb1[:, si])) or free[si]:
-                cb = np.ones(R)
+            mmax = mmaxes[si].reshape(n, S).max(axis=1)
+            if cb_one or np.all(np.isinf(ltb1[sl, si])) or free[si]:
+                cb = np.ones(n)
             else:
-                q = [np.abs(_value_at(mco, mb, a + f_ * (bb - a))).reshape(R, S).max(axis=1)
-                     for f_ in (0.25, 0.5, 0.75)]
-                cb = np.where(uses_cb, cb_factor(mmax, *q), 1.0)
-            mn = nominal_moment(cap, ltb1[:, si], cb)
-            bend = np.maximum(bend, mmax * omega / mn)
-        shear = (_absmax_many(combo(V, kk), vb, [(0.0, L)])[0].reshape(R, S).max(axis=1)
-                 / vallow)
-        uco = combo(U, kk)
-        defl = np.zeros(R)
+                qs = [np.abs(_value_at(mco, mb, a + f_ * (bb - a))).reshape(n, S).max(axis=1)
+                      for f_ in (0.25, 0.5, 0.75)]
+                cb = np.where(uses_cb[sl], cb_factor(mmax, *qs), 1.0)
+            mn = nominal_moment(cap[sl], ltb1[sl, si], cb)
+            bend = np.maximum(bend, mmax * omega[sl] / mn)
+        shear = (_absmax_many(combo(V, kk, sl), vb, [(0.0, L)])[0].reshape(n, S).max(axis=1)
+                 / vallow[sl])
+        uco = combo(U, kk, sl)
+        defl = np.zeros(n)
         for um, lim in zip(_absmax_many(uco, ub, [(a, bb) for a, bb, _ in spans]), limits):
-            defl = np.maximum(defl, um.reshape(R, S).max(axis=1) / ei / lim)
-        ldef = np.zeros(R)
+            defl = np.maximum(defl, um.reshape(n, S).max(axis=1) / ei[sl] / lim)
+        ldef = np.zeros(n)
         if live_n:
-            lv = U[2]
-            lco = (kk[:, None, None, None] * lv[None]).reshape(R * S, *lv.shape[1:])
+            lco = combo(U, kk, sl, live_only=True)
             for um, lim in zip(_absmax_many(lco, ub, [(a, bb) for a, bb, _ in spans]),
                                live_limits):
-                ldef = np.maximum(ldef, um.reshape(R, S).max(axis=1) / ei / lim)
-        allr = np.stack([bend, shear, defl, ldef])
-        allr = np.vstack([allr, local_ratio(kk)[0][None, :]])
+                ldef = np.maximum(ldef, um.reshape(n, S).max(axis=1) / ei[sl] / lim)
+        rows = [bend, shear, defl, ldef, local_ratio(kk, sl)[0]]
+        if wheels is not None:  # bottom-flange bending under each wheel (lifting.wheel_check)
+            co = mco.reshape(n, S, *mco.shape[1:])
+            cw = co[:, np.arange(S)[:, None], wj]  # (n, S, nw, w)
+            mw = sum(cw[..., e] * wt[None] ** e for e in range(cw.shape[-1]))
+            sg = mw / w_sb[sl, None, None]
+            pw = np.abs(wd[None] + kk[:, None] * wl[None]) / per  # (n, nw)
+            qq = (pw / w_tf[sl, None] ** 2)[:, None, :, None]
+            sx = w_cx[sl, None, None, :] * qq + sg[..., None]
+            sy = w_cy[sl, None, None, :] * qq
+            vm = np.sqrt(np.maximum(sx * sx + sy * sy - sx * sy, 0.0))
+            rows.append(np.where(has_w[sl], vm.reshape(n, -1).max(axis=1) / w_al[sl], 0.0))
+        allr = np.stack(rows)
         return allr.max(axis=0), allr.argmax(axis=0)
 
+    def ratios(k):
+        """(R,) governing ratio and (R,) index of the governing check at factors k."""
+        out_r, out_i = np.empty(R), np.empty(R, int)
+        for sl in slices:
+            out_r[sl], out_i[sl] = chunk_ratios(k[sl], sl)
+        return out_r, out_i
+
     r1, gi = ratios(np.ones(R))
-    if with_capacity:
+    if with_capacity and exact:  # a screened row's k would only be an upper bound: the rows
+        # checked in full get theirs from `capacity`
         k = _capacity_vector(ratios, R)
     else:
         k = np.full(R, np.nan)
-    local_names = local_ratio(np.ones(R) * (1 + imp), True)[1]
-    names = ("bending", "shear", "deflection", "live deflection")
+    local_names = []
+    for sl in slices:
+        local_names += local_ratio(np.ones(sl.stop - sl.start) * (1 + imp), sl, True)[1]
+    names = ("bending", "shear", "deflection", "live deflection", None, "wheel flange bending")
+    checked = "batched" if exact else "screen"
     rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]),
-                    names[gi[i]] if gi[i] < 4 else local_names[i], float(k[i]),
-                    r[3], r[4]) for i, r in enumerate(rs)]
+                    names[gi[i]] or local_names[i], float(k[i]), r[3], r[4], checked=checked)
+            for i, r in enumerate(rs)]
     # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
     # each unbraced length, principal axes); those rows are checked one by one
     special = [i for i, r in enumerate(rs) if flexure(
         r[1], r[2], basis_of(replace(job, material=r[2])), job.criteria.safety_factor,
         job.welded).special]
-    if special:
-        for i in special:
-            r = rs[i]
-            j = replace(job, section=r[1], material=r[2])
-            ev = evaluate(j, 1.0)
-            g = max(ev.checks, key=lambda c: c.ratio)
-            kf = capacity(j).factor if with_capacity else float("nan")
-            rows[i] = replace(rows[i], ratio=g.ratio, governing=g.name, factor=kf)
-    return rows, skipped
+    for i in special:
+        rows[i] = _full_row(job, rows[i], with_capacity)
+    return rows, skipped, exact
+
+
+def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
+    """The row from the section's own full check (`evaluate`, `capacity`): the authority."""
+    j = replace(job, section=row.section, material=row.material)
+    try:
+        ss = state_set(j)  # shared: the moving-load cells and parts cached on it are reused
+        ev = evaluate(j, 1.0, ss=ss)
+        g = max(ev.checks, key=lambda c: c.ratio)
+        # k of a section that fails at the entered loads is below 1 and never listed
+        kf = capacity(j, ss=ss).factor if with_capacity and g.ratio <= 1.0 else float("nan")
+    except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
+        return replace(row, ratio=math.inf, governing="not checked", factor=float("nan"),
+                       note=f"{row.note}; full check failed: {exc}".lstrip("; "),
+                       checked="full")
+    return replace(row, ratio=g.ratio, governing=g.name, factor=kf, checked="full")
+
+
+def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool) -> int:
+    """Check rows in full lightest first (and cheapest first with prices) until `confirm`
+    of them pass, skipping screened rows whose lower-bound ratio already fails. Every row
+    lighter than the lightest that passes has then failed its full check or a lower bound,
+    so that row is the same as checking every section in full would give. Returns how many
+    rows were checked in full."""
+    orders = [sorted(range(len(rows)), key=lambda i: (rows[i].weight, rows[i].designation))]
+    if by_price:
+        orders.append(sorted((i for i in range(len(rows)) if rows[i].price_per_m is not None),
+                             key=lambda i: (rows[i].price_per_m, rows[i].weight)))
+    want = len(rows) if len(rows) <= CHECK_ALL else confirm
+    n = 0
+    for order in orders:
+        found = 0
+        for i in order:
+            r = rows[i]
+            if r.checked == "screen" and r.ratio > 1 + SCREEN_TOL:
+                continue
+            if r.checked == "batched" and not r.ok:
+                continue
+            if r.checked != "full":
+                rows[i] = r = _full_row(job, r, with_capacity)
+                n += 1
+            if r.ok:
+                found += 1
+                if found >= want:
+                    break
+    return n
+
 
 
 def _capacity_vector(ratios, R: int) -> np.ndarray:
@@ -557,10 +950,8 @@ def _wood_values(job, cands):
 
 
 def _slow(job, cands):
-    if len(cands) > SLOW_LIMIT:
-        raise InputError(f"{len(cands)} sections to check one by one (the job has springs or "
-                         f"moving loads); narrow the sweep to {SLOW_LIMIT} or fewer with "
-                         "--max-depth or --stock", "--kind")
+    """Wood: every section checked in full (NDS factors, bearing and creep per size; the wood
+    catalogs are short)."""
     rows, skipped = [], []
     for des, sec, mat, price, note in cands:
         j = replace(job, section=sec, material=mat)
@@ -572,7 +963,7 @@ def _slow(job, cands):
             continue
         g = max(ev.checks, key=lambda c: c.ratio)
         rows.append(SizeRow(des, sec, mat, sec.weight_per_length(mat.density), g.ratio, g.name,
-                            cap.factor, price, note))
+                            cap.factor, price, note, checked="full"))
     return rows, skipped
 
 
@@ -583,7 +974,8 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
     def row(r):
         return {"designation": r.designation, "mass_per_length": r.weight, "ratio": r.ratio,
                 "governing": r.governing, "factor": r.factor if math.isfinite(r.factor) else None,
-                "price_per_m": r.price_per_m, "material": getattr(r.material, "key", "")}
+                "price_per_m": r.price_per_m, "material": getattr(r.material, "key", ""),
+                "checked": r.checked}
 
     return {"schema": 1, "title": res.job.title, "kind": res.kind, "swept": len(res.rows),
             "passing": [row(r) for r in rows], "seconds": res.seconds, "method": res.method,
@@ -591,4 +983,5 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
             "cheapest": res.cheapest.designation if res.cheapest else None,
             "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags, res.job.lifting),
             "material": getattr(res.job.material, "key", ""),
-            "material_note": res.material_note}
+            "material_note": res.material_note, "checked_in_full": res.full_checks,
+            "screened_not_checked": len(res.screened_only)}

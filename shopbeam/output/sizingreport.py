@@ -20,6 +20,13 @@ def render(res: SizeResult, top: int = 15) -> str:
     if res.material_note:
         lines += textwrap.wrap("NOTE: " + res.material_note, 78, subsequent_indent="  ")
     lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; self-weight recomputed per section")
+    more = len(res.screened_only)
+    if more:
+        lines += textwrap.wrap(
+            f"{res.full_checks} checked in full, lightest first, until one passed; {more} "
+            "heavier sections pass the batched screen but were not checked in full (not "
+            "listed: the screen is only a lower bound)",
+            78)
     if res.lightest:
         lines.append(f"lightest that passes: {res.lightest.designation} "
                      f"({units.fmt(res.lightest.weight, 'mass_per_length', sy)})")
@@ -39,7 +46,8 @@ def render(res: SizeResult, top: int = 15) -> str:
     if not res.passing:
         lines.append("  no section passes; the closest:")
         for r in sorted(res.rows, key=lambda r: r.ratio)[:5]:
-            lines.append(f"  {r.designation[:22]:<22} ratio {r.ratio:.3f} ({r.governing})")
+            least = " at least (screen)" if r.checked == "screen" else ""
+            lines.append(f"  {r.designation[:22]:<22} ratio{least} {r.ratio:.3f} ({r.governing})")
     for s in res.skipped[:5]:
         lines.append(f"  skipped {s}")
     lines.append("")
