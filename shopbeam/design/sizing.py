@@ -303,10 +303,15 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     if stock is None:
         job, material_note = material_for_kind(job, kind)
     cands = _candidates(job, None if stock is not None else kind, max_depth, stock)
+    return _sweep(job, cands, "stock list" if stock is not None else kind, with_capacity,
+                  confirm, stock, material_note, t0)
 
+
+def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note="", t0=None,
+           skipped_before=()) -> SizeResult:
+    t0 = time.perf_counter() if t0 is None else t0
     base = replace(job, self_weight=False)
     parts = load_parts(base)
-    springs = any(s.kind == "spring" for s in job.supports)
     wood = any(getattr(c[2], "kind", "") == "lumber" for c in cands)
     n_full = 0
     if wood:
@@ -314,56 +319,43 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
         n_full = len(rows)
         method = ("section by section (wood members: NDS factors, bearing and creep per size)")
     else:
-        rows, skipped, exact = _batched(job, base, parts, cands, with_capacity)
+        rows, skipped, why = _batched(job, base, parts, cands, with_capacity)
         n_full = _confirm(job, rows, max(1, confirm), with_capacity, stock is not None)
-        if exact:
+        if not why:
             method = "one layout solve, all sections batched"
         else:
-            why = ", ".join(x for x in ("springs (exact per-section spring forces)" if springs
-                                        else "", "moving loads" if parts.moving else "",
-                                        "a load hung from a flange" if not (springs or
-                                                                            parts.moving) else "")
-                            if x)
-            method = (f"all sections screened in one batched pass ({why}), then checked in full "
-                      "lightest first until one passes")
+            method = (f"all sections screened in one batched pass ({'; '.join(why)}), then "
+                      "checked in full lightest first until one passes")
         method += f"; {n_full} checked in full"
     rows.sort(key=lambda r: (r.weight, r.designation))
-    return SizeResult(job, "stock list" if stock is not None else kind, tuple(rows),
-                      time.perf_counter() - t0, method,
+    return SizeResult(job, label, tuple(rows), time.perf_counter() - t0, method,
                       getattr(stock, "currency", "") if stock is not None else "",
-                      tuple(skipped), material_note, n_full)
+                      tuple(skipped_before) + tuple(skipped), material_note, n_full)
 
 
 def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
+    """Every catalog kind of the job's material family in one sweep (one row a designation:
+    HSS-rect and HSS-round are inside HSS)."""
     wood = getattr(job.material, "kind", "") in ("lumber", "lvl")
-    rows: dict[str, SizeRow] = {}
-    skipped, methods = [], set()
-    n_full = 0
-    seen: set[str] = set()
-    rank = {"full": 0, "batched": 1, "screen": 2}
+    if wood:
+        job, _ = material_for_kind(job, "lumber")
+    cands, skipped, seen = [], [], set()
     for k in catalog.kinds():
         if (k.lower() in ("lumber", "lvl")) != wood:
             continue
-        names = {s.designation for s in catalog.list_sections(k)}
-        if names and names <= seen:  # a kind inside one already swept (HSS-rect in HSS)
-            continue
-        seen |= names
         try:
-            res = size(job, k, max_depth, None, with_capacity, confirm)
-        except InputError as exc:  # e.g. a kind with no section under --max-depth
+            got = _candidates(job, k, max_depth, None)
+        except InputError as exc:
             skipped.append(f"{k}: {exc.problem.message}")
             continue
-        methods.add(re.sub(r"; \d+ checked in full$", "", res.method))
-        n_full += res.full_checks
-        skipped += list(res.skipped)
-        for r in res.rows:  # kinds overlap: one row each, the best-checked one
-            old = rows.get(r.designation)
-            if old is None or rank[r.checked] < rank[old.checked]:
-                rows[r.designation] = r
-    out = sorted(rows.values(), key=lambda r: (r.weight, r.designation))
-    return SizeResult(job, "all", tuple(out), time.perf_counter() - t0,
-                      "every catalog kind: " + "; ".join(sorted(methods))
-                      + f"; {n_full} checked in full", "", tuple(skipped), "", n_full)
+        for cnd in got:
+            if cnd[0] not in seen:
+                seen.add(cnd[0])
+                cands.append(cnd)
+    if not cands:
+        raise InputError("no catalog section fits (check --max-depth)", "--kind")
+    res = _sweep(job, cands, "all", with_capacity, confirm, None, "", t0, skipped)
+    return replace(res, method="every catalog kind in one sweep: " + res.method)
 
 
 # ------------------------------------------------------------------ load states as arrays
@@ -613,12 +605,12 @@ def _exact_arrays(job, base, parts, sw_unit, extra):
 
 
 def _batched(job, base, parts, cands, with_capacity):
-    """(rows, skipped, exact): every candidate rated in one vectorised pass. exact: the rows'
-    ratios are each section's own full check (no springs, no moving loads, no load hung from
-    a flange); otherwise they come from a screen over chosen load states (see `size`) and are
-    lower bounds of the full check."""
+    """(rows, skipped, why): every candidate rated in one vectorised pass. `why` is empty when
+    the rows' ratios are each section's own full check exactly (no springs, no moving loads,
+    no load hung from a flange, no tee or angle); otherwise it says why rows come from a
+    screen over chosen load states (see the module) whose ratios are lower bounds."""
     if not cands:
-        return [], [], True
+        return [], [], []
     L = job.length
     sw_unit = Load("uniform", start=0.0, end=L, w1=-1.0, label="self-weight", case="dead")
     braced, braces = brace_points(job)
@@ -660,7 +652,7 @@ def _batched(job, base, parts, cands, with_capacity):
         seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
         rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
                    fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained),
-                   fl.cap, fl.uses_cb, wheel))
+                   fl.cap, fl.uses_cb, wheel, bool(fl.special)))
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
@@ -670,6 +662,7 @@ def _batched(job, base, parts, cands, with_capacity):
     omega = np.array([r[6] for r in rs])
     cap = np.array([r[10] for r in rs])
     uses_cb = np.array([bool(r[11]) for r in rs])
+    special = np.array([r[13] for r in rs])  # tees and angles (F9, F10): see below
     ltb1 = np.array([[s[1] for s in r[7]] for r in rs])  # (R, nseg)
     free = [s[2] for s in rs[0][7]]
     if exact:
@@ -708,8 +701,12 @@ def _batched(job, base, parts, cands, with_capacity):
             keys.append(uniq[key])
         reps = [(k_[0],) + k_[1:4] + (0.0, 0.0, 0.0, k_[4]) for k_ in uniq]
         keys = np.array(keys)
+        none = ([(math.inf, "")] * len(reps),) * 2
         for i, r in enumerate(rs):
-            pu, be = _local.sizing_allowables(job, r[1], r[2], reps)
+            # (no local limit state for this section: local.limit_states gives none)
+            pu, be = (_local.sizing_allowables(job, r[1], r[2], reps)
+                      if _local.applies(r[1]) and getattr(r[2], "kind", "") in
+                      ("steel", "stainless") else none)
             al_pull[i] = np.array([x[0] for x in pu])[keys]
             al_bear[i] = np.array([x[0] for x in be])[keys]
             nm_pull.append([pu[j][1] for j in keys])
@@ -780,7 +777,7 @@ def _batched(job, base, parts, cands, with_capacity):
                       for f_ in (0.25, 0.5, 0.75)]
                 cb = np.where(uses_cb[sl], cb_factor(mmax, *qs), 1.0)
             mn = nominal_moment(cap[sl], ltb1[sl, si], cb)
-            bend = np.maximum(bend, mmax * omega[sl] / mn)
+            bend = np.maximum(bend, np.where(special[sl], 0.0, mmax * omega[sl] / mn))
         shear = (_absmax_many(combo(V, kk, sl), vb, [(0.0, L)])[0].reshape(n, S).max(axis=1)
                  / vallow[sl])
         uco = combo(U, kk, sl)
@@ -825,18 +822,21 @@ def _batched(job, base, parts, cands, with_capacity):
     for sl in slices:
         local_names += local_ratio(np.ones(sl.stop - sl.start) * (1 + imp), sl, True)[1]
     names = ("bending", "shear", "deflection", "live deflection", None, "wheel flange bending")
-    checked = "batched" if exact else "screen"
-    rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]),
-                    names[gi[i]] or local_names[i], float(k[i]), r[3], r[4], checked=checked)
-            for i, r in enumerate(rs)]
     # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
-    # each unbraced length, principal axes); those rows are checked one by one
-    special = [i for i, r in enumerate(rs) if flexure(
-        r[1], r[2], basis_of(replace(job, material=r[2])), job.criteria.safety_factor,
-        job.welded).special]
-    for i in special:
-        rows[i] = _full_row(job, rows[i], with_capacity)
-    return rows, skipped, exact
+    # each unbraced length, principal axes); the batch leaves their bending out, so their
+    # rows are a screen by the other checks (a lower bound) and are checked in full as any
+    # screened row is, lightest first
+    rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]),
+                    names[gi[i]] or local_names[i],
+                    float(k[i]) if exact and not special[i] else float("nan"), r[3], r[4],
+                    checked="batched" if exact and not special[i] else "screen")
+            for i, r in enumerate(rs)]
+    why = [x for x, on in (("springs: exact per-section spring forces", springs),
+                           ("moving loads", moving),
+                           ("a load hung from a flange", lifting and bool(getattr(job, "hung", ()))),
+                           ("tees and angles: F9 / F10 bending in the full check",
+                            special.any())) if on]
+    return rows, skipped, why
 
 
 def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
