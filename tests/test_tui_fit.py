@@ -149,3 +149,44 @@ async def test_calc_sheet_follows_a_resize():
         await pilot.resize_terminal(120, 32)
         await settle(pilot)
         assert str(body.render()) == wide
+
+
+@sync
+async def test_a_long_choice_shows_every_option_at_80x24():
+    from shopbeam.jobs.rules import LIFTING_PROFILES
+    from shopbeam.tui.widgets import Choice
+
+    app = make_app(PRESETS / "monorail-trolley.toml", cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("f7")  # criteria
+        await settle(pilot)
+        choice = next(c for c in app.job_screen.query(Choice) if c.key == "criteria.lifting")
+        choice.focus()
+        await settle(pilot)
+        shown = str(choice.render())
+        lines = shown.splitlines()
+        # too many for one line: they go on two, all in sight, none wider than the field
+        assert len(lines) >= 3  # options on two lines, and the reading under them
+        assert widest(shown) <= choice.size.width
+        assert choice.size.height == len(lines)
+        for opt in ["none", *LIFTING_PROFILES]:
+            assert opt in shown, opt
+        assert f"[{choice.value}]" in shown
+        before = choice.value
+        await pilot.press("right")
+        await settle(pilot)
+        opts = choice.options
+        assert choice.value == opts[(opts.index(before) + 1) % len(opts)]
+        assert f"[{choice.value}]" in str(choice.render())
+        assert app.job_screen.session.doc.get("criteria.lifting") == choice.value
+
+
+def test_a_choice_too_narrow_for_one_option_a_line_shows_the_chosen_one():
+    from shopbeam.tui.widgets import Choice
+
+    c = Choice("Lifting", ["none", "hand-geared-monorail"], key="k")
+    assert "[none]" in str(c._render_choice(80)) and "hand-geared-monorail" in \
+        str(c._render_choice(80))
+    narrow = str(c._render_choice(30))
+    assert "< [none] >" in narrow and "1 of 2" in narrow

@@ -247,33 +247,64 @@ class Choice(Widget, can_focus=True):
             self.refresh(layout=True)
 
     def render(self) -> Text:
-        t = self._render_choice()
+        return self._content(self.size.width or 80)
+
+    def get_content_height(self, container, viewport, width: int) -> int:
+        """As many lines as the options take at this width (they wrap under each other
+        when one line cannot hold them all), and the message under them."""
+        if not width:
+            return 0
+        return len(self._content(width).wrap(self.app.console, width))
+
+    def _content(self, width: int) -> Text:
+        t = self._render_choice(width)
         if self.message:
             t.append("\n" + " " * 14)
             t.append(self.message, style="bold" if self.has_class("-error") else "")
         return t
 
-    def _render_choice(self) -> Text:
+    def _render_choice(self, width: int) -> Text:
+        """The label, then every option with the chosen one in [brackets]; options that do
+        not fit on one line go on lines below, under the first option, so all of them are
+        always in sight. Only a field too narrow for even one option a line shows just the
+        chosen one ("< [pin] >  2 of 5")."""
         t = Text()
         focus = self.has_focus
         t.append(f"{self.label:<14}", style="bold reverse" if focus else "")
+        chosen = "bold reverse" if focus else "bold"
         full = sum(len(o) + 3 for o in self.options) + 14
-        width = self.size.width or 80
-        if full > width:
+        if full <= width:
+            for opt in self.options:
+                if opt == self.value:
+                    t.append(f"[{opt}]", style=chosen)
+                else:
+                    t.append(f" {opt} ")
+                t.append(" ")
+            if focus:
+                t.append("  <- ->", style="dim")
+            return t
+        if 14 + max(len(o) for o in self.options) + 2 > width:
             i = self.options.index(self.value)
-            t.append(f"< [{self.value}] >", style="bold reverse" if focus else "bold")
+            t.append(f"< [{self.value}] >", style=chosen)
             t.append(f"  {i + 1} of {len(self.options)}")
             if focus:
                 t.append("  <- ->", style="dim")
             return t
+        col = 14
         for opt in self.options:
-            if opt == self.value:
-                t.append(f"[{opt}]", style="bold reverse" if focus else "bold")
-            else:
-                t.append(f" {opt} ")
-            t.append(" ")
+            cell = f"[{opt}]" if opt == self.value else f" {opt} "
+            if col > 14 and col + len(cell) > width:
+                t.append("\n" + " " * 14)
+                col = 14
+            t.append(cell, style=chosen if opt == self.value else "")
+            col += len(cell)
+            if col < width:
+                t.append(" ")
+                col += 1
         if focus:
-            t.append("  <- ->", style="dim")
+            if col + 6 > width:
+                t.append("\n" + " " * 14)
+            t.append(" <- ->", style="dim")
         return t
 
     def set(self, value: str) -> None:
@@ -309,10 +340,10 @@ class Choice(Widget, can_focus=True):
             event.stop()
 
     def on_focus(self) -> None:
-        self.refresh()
+        self.refresh(layout=True)  # the "<- ->" hint may take a line of its own
 
     def on_blur(self) -> None:
-        self.refresh()
+        self.refresh(layout=True)
 
 
 class ViewBar(Static):
