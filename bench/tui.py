@@ -4,8 +4,11 @@ and the plots are on screen again.
     python bench/tui.py            # prints a table, writes bench/results/tui.json
     python bench/tui.py --quick    # fewer repeats
 
-- first screen (cold): a fresh interpreter, from its start until the job screen of
-  presets/demo.toml is mounted and drawn (headless, 80x24): what a user waits for.
+- first screen (cold): `shopbeam` with no job (the library, the bundled demo picked, over
+  the demo's job screen) in a fresh interpreter, from its start until the first screen is
+  drawn (headless, 80x24): what a user waits for; then until the demo's answer is on it.
+  `--compare DIR` times another checkout (a git worktree of main) the same way,
+  interleaved, for a before/after on a busy machine.
 - first screen (warm): the same inside one process (imports done), make_app to drawn.
 - per key on the UI thread: one edit of the length applied and the span view redrawn,
   without the solve (the solve runs in a worker): what a typed key costs the screen.
@@ -63,25 +66,48 @@ def _shelf8(folder: Path) -> Path:
 COLD = r"""
 import time, asyncio, sys
 t0 = time.perf_counter()
-from shopbeam.tui.app import make_app
-async def main():
-    app = make_app(sys.argv[1], cursor_blink=False)
-    async with app.run_test(size=(80, 24)) as pilot:
-        await pilot.pause()
-        print(time.perf_counter() - t0)
-asyncio.run(main())
+from shopbeam import cli  # what the `shopbeam` command imports first
+from shopbeam.tui import app as tui_app
+marks = {}
+mounted, solved = tui_app.ShopbeamApp.on_mount, tui_app.JobScreen._solved
+def on_mount(self):  # the app is mounted: note when its first screen has been drawn
+    mounted(self)
+    self.call_after_refresh(
+        lambda: marks.setdefault("drawn", (time.perf_counter() - t0, time.time())))
+def answer(self, *a):
+    solved(self, *a)
+    marks.setdefault("answer", time.perf_counter() - t0)
+def run(self, *a, **k):  # headless at 80x24, until the job is solved
+    async def go():
+        async with self.run_test(size=(80, 24)) as pilot:
+            while "answer" not in marks or "drawn" not in marks:
+                await pilot.pause()
+    asyncio.run(go())
+tui_app.ShopbeamApp.on_mount, tui_app.JobScreen._solved = on_mount, answer
+tui_app.ShopbeamApp.run = run
+cli.main(sys.argv[1:])
+print(*marks["drawn"], marks["answer"])
 """
 
 
-def cold_first_screen(job: Path, runs: int) -> list[float]:
+def cold_first_screen(job: Path, runs: int, root: Path = ROOT, warm: bool = True) -> list[float]:
+    """Fresh interpreters on `root`'s copy of shopbeam. Python may write its bytecode cache
+    (an installed copy has it from the install; PYTHONDONTWRITEBYTECODE, set in some
+    shells, would make every run compile every module again); one run first, not counted,
+    writes it."""
+    env = {k: v for k, v in os.environ.items() if k != "PYTHONDONTWRITEBYTECODE"}
     out = []
+    if warm:
+        subprocess.run([sys.executable, "-c", COLD], capture_output=True, text=True,
+                       cwd=root, check=True, env=env)
     for _ in range(runs):
-        start = time.perf_counter()
-        r = subprocess.run([sys.executable, "-c", COLD, str(job)], capture_output=True,
-                           text=True, cwd=ROOT, check=True)
-        total = time.perf_counter() - start  # interpreter start included
-        inside = float(r.stdout.strip().splitlines()[-1])
-        out.append((total, inside))
+        start = time.time()
+        r = subprocess.run([sys.executable, "-c", COLD], capture_output=True,
+                           text=True, cwd=root, check=True, env=env)
+        inside, drawn, answer = map(float, r.stdout.strip().splitlines()[-1].split())
+        # from the process being started (interpreter start included) to the screen drawn;
+        # not its exit, which a user does not wait for; then to the answer on it
+        out.append((drawn - start, inside, answer + (drawn - start - inside)))
     return out
 
 
@@ -166,6 +192,13 @@ def ms(xs) -> str:
 def main() -> None:
     ap = argparse.ArgumentParser()
     ap.add_argument("--quick", action="store_true")
+    ap.add_argument("--jobs", default="demo,trolley,8-span shelf",
+                    help="which jobs to edit (comma separated; '' for none)")
+    ap.add_argument("--cold-runs", type=int, default=0,
+                    help="cold first-screen runs (default 3, 5 without --quick; 0: default)")
+    ap.add_argument("--compare", metavar="CHECKOUT",
+                    help="also time the cold first screen of another checkout of shopbeam "
+                         "(e.g. a git worktree of main), interleaved with this one")
     args = ap.parse_args()
     runs = 6 if args.quick else 15
     tmp = Path(tempfile.mkdtemp())
@@ -173,14 +206,28 @@ def main() -> None:
     jobs = {"demo": ROOT / "presets" / "demo.toml",
             "trolley": ROOT / "presets" / "monorail-trolley.toml",
             "8-span shelf": _shelf8(tmp)}
+    wanted = [j.strip() for j in args.jobs.split(",") if j.strip()]
     table = []
-    cold = cold_first_screen(jobs["demo"], 3 if args.quick else 5)
-    table.append(("first screen, cold process (demo, 80x24)",
-                  ms([c[0] for c in cold]), "< 1 s"))
-    table.append(("  of which after interpreter start",
-                  ms([c[1] for c in cold]), ""))
-    out = {"cold_total": [c[0] for c in cold], "cold_inside": [c[1] for c in cold]}
-    for name, job in jobs.items():
+    n_cold = args.cold_runs or (3 if args.quick else 5)
+    out = {}
+    roots = [("this checkout", ROOT)] + ([("compared", Path(args.compare).resolve())]
+                                         if args.compare else [])
+    cold: dict = {name: [] for name, _r in roots}
+    for i in range(n_cold):  # interleaved, so both see the same load on a shared machine
+        for name, root in roots:
+            cold[name] += cold_first_screen(jobs["demo"], 1, root, warm=i == 0)
+    for name, _r in roots:
+        table.append((f"first screen, cold `shopbeam` (demo, 80x24), {name}",
+                      ms([c[0] for c in cold[name]]), "< 1 s"))
+        table.append(("  of which after interpreter start",
+                      ms([c[1] for c in cold[name]]), ""))
+        table.append(("  then the answer on screen (solved in the worker)",
+                      ms([c[2] for c in cold[name]]), ""))
+        out[f"cold_total {name}"] = [c[0] for c in cold[name]]
+        out[f"cold_inside {name}"] = [c[1] for c in cold[name]]
+        out[f"cold_answer {name}"] = [c[2] for c in cold[name]]
+    print(*table, sep="\n", flush=True)
+    for name, job in ((n, j) for n, j in jobs.items() if n in wanted):
         r = asyncio.run(warm_and_edit(job, runs))
         out[name] = r
         table.append((f"{name}: first screen, warm", ms(r["first_warm"]), ""))

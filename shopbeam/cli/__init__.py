@@ -15,10 +15,8 @@ import textwrap
 from pathlib import Path
 
 from shopbeam import __version__
-from shopbeam.cli.proof import add_title_options
-from shopbeam.design.analysis import analyze, to_json
-from shopbeam.output.report import render
-from shopbeam.cli.common import EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, guarded, load, report_error
+from shopbeam.cli.common import (EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, add_title_options, guarded,
+                                  load, report_error)
 from shopbeam.output.jsonout import dumps_finite  # noqa: F401 (the name other code knew)
 
 DESCRIPTION = """\
@@ -39,6 +37,11 @@ A JOB is a file or a library name: bundled:demo, shop:NAME, user:NAME, or a bare
 
 @guarded
 def cmd_solve(args) -> int:
+    # the design modules are imported by the commands that use them: `shopbeam` (the text
+    # UI) draws its first screen before they load
+    from shopbeam.design.analysis import analyze, to_json  # noqa: PLC0415 - startup
+    from shopbeam.output.report import render  # noqa: PLC0415 - startup
+
     job = load(args.job)
     result = analyze(job)
     if args.json:
@@ -55,6 +58,8 @@ def cmd_solve(args) -> int:
 
 @guarded
 def cmd_check(args) -> int:
+    from shopbeam.design.analysis import analyze  # noqa: PLC0415 - startup
+
     job = load(args.job)
     analyze(job)  # an unstable beam is an input problem too
     for p in job.warnings:

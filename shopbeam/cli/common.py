@@ -11,10 +11,27 @@ import functools
 import sys
 
 from shopbeam.errors import InputError, InputErrors, UnstableBeam
-from shopbeam.jobs.jobfile import key_lines
 from shopbeam.jobs.storage import SaveConflict, read_bytes
 
 EXIT_OK, EXIT_INTERNAL, EXIT_INPUT = 0, 1, 2
+
+# The title block of `report` and `rating --plaque` (here, not in proof.py: the parser of
+# every command, the text UI's too, is built without the design modules).
+TITLE_OPTIONS = (("shop", "--shop", "the shop's name"),
+                 ("job_number", "--job-number", "the job or work-order number"),
+                 ("member", "--member", "which member this is (default: section and material)"),
+                 ("client", "--client", "the client"),
+                 ("location", "--location", "where the member is"),
+                 ("prepared_by", "--prepared-by", "who prepared the calculation"),
+                 ("checked_by", "--checked-by", "who checked it"),
+                 ("date", "--date", "the date on the title block (default: today)"),
+                 ("revision", "--revision", "the revision, e.g. A"))
+
+
+def add_title_options(p) -> None:
+    g = p.add_argument_group("title block (override the job's [project] table)")
+    for key, flag, words in TITLE_OPTIONS:
+        g.add_argument(flag, dest=key, metavar="TEXT", default=None, help=words)
 
 
 def err(message: str) -> None:
@@ -59,6 +76,8 @@ def name_the_file(exc: BaseException, job) -> None:
         if p.key and p.line is None:
             if lines is None:
                 try:
+                    from shopbeam.jobs.jobfile import key_lines  # noqa: PLC0415 - startup
+
                     lines = key_lines(read_bytes(job).decode("utf-8", "replace"))
                 except Exception:  # noqa: BLE001 - the line is a courtesy
                     lines = {}

@@ -10,7 +10,6 @@ from pathlib import Path
 
 from shopbeam import cautions
 from shopbeam.cli.common import guarded
-from shopbeam.cli.proof import cmd_library_check
 from shopbeam.errors import InputError
 from shopbeam.escapes import shown
 from shopbeam.jobs import storage
@@ -81,8 +80,11 @@ def _library_copy(args) -> int:
 def cmd_library(args) -> int:
     """`shopbeam library list|show|copy ...`."""
     action = getattr(args, "library_cmd", None)
-    handlers = {"list": _library_list, "show": _library_show, "copy": _library_copy,
-                "check": cmd_library_check}
+    if action == "check":  # the design modules: imported for this one (start-up speed)
+        from shopbeam.cli.proof import cmd_library_check  # noqa: PLC0415 - startup
+
+        return cmd_library_check(args)
+    handlers = {"list": _library_list, "show": _library_show, "copy": _library_copy}
     if action not in handlers:
         raise InputError("say what to do: list, show NAME, copy NAME or check (see shopbeam "
                          "library --help)", key="library")

@@ -13,6 +13,7 @@ from pathlib import Path
 
 from shopbeam.design.analysis import analyze
 from shopbeam.design.capacity import capacity
+from shopbeam.cli.common import TITLE_OPTIONS, add_title_options  # noqa: F401
 from shopbeam.errors import InputError
 from shopbeam.jobs.jobfile import load_job
 from shopbeam.jobs.storage import atomic_write
@@ -20,15 +21,6 @@ from shopbeam.output import calcpackage as cp
 from shopbeam.output import label
 from shopbeam.output.pdf import NoBrowser, PrintFailed, find_browser, print_pdf
 
-TITLE_OPTIONS = (("shop", "--shop", "the shop's name"),
-                 ("job_number", "--job-number", "the job or work-order number"),
-                 ("member", "--member", "which member this is (default: section and material)"),
-                 ("client", "--client", "the client"),
-                 ("location", "--location", "where the member is"),
-                 ("prepared_by", "--prepared-by", "who prepared the calculation"),
-                 ("checked_by", "--checked-by", "who checked it"),
-                 ("date", "--date", "the date on the title block (default: today)"),
-                 ("revision", "--revision", "the revision, e.g. A"))
 
 
 def job_path(args) -> Path:
@@ -135,8 +127,3 @@ def cmd_library_check(args) -> int:
     print(lc.to_csv(rows) if getattr(args, "csv", False) else lc.to_text(rows), end="")
     return 0
 
-
-def add_title_options(p) -> None:
-    g = p.add_argument_group("title block (override the job's [project] table)")
-    for key, flag, words in TITLE_OPTIONS:
-        g.add_argument(flag, dest=key, metavar="TEXT", default=None, help=words)

@@ -24,7 +24,6 @@ from textual.worker import get_current_worker
 from shopbeam import units
 from shopbeam.errors import InputError
 from shopbeam.jobs import library, storage
-from shopbeam.tui import drawing
 from shopbeam.tui import session as session_mod
 from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, LengthScreen,
                                   LibraryScreen, SaveAsScreen)
@@ -150,13 +149,17 @@ class JobScreen(Screen):
     def on_mount(self) -> None:
         self._settled_length = self.session.doc.get("beam.length")
         self.refresh_all()
-        self.solve_soon()  # a job opened unsolved: the first screen comes before the answer
+        # a job opened unsolved: the first screen is drawn first, then the solve starts (its
+        # imports and work in a thread would share the interpreter with the first paint)
+        self.call_after_refresh(self.solve_soon)
 
-    def on_resize(self) -> None:
-        self.refresh_all()
+    def on_resize(self, event: events.Resize) -> None:
+        if event.size != getattr(self, "_shown_at", None):  # not again for the same size
+            self.refresh_all()
 
     # ------------------------------------------------------------------ showing
     def refresh_all(self) -> None:
+        self._shown_at = self.size
         s, ev = self.session, self.session.evaluation
         tags = ev.job.tags if ev.job is not None else (s.doc.get("tags") or [])
         if not isinstance(tags, list) and not isinstance(tags, tuple):
@@ -199,6 +202,8 @@ class JobScreen(Screen):
             lines = warn + problems_text(ev).splitlines()
             return "\n".join(lines[:3]) + ("\n  ... see 7 Results" if len(lines) > 3 else "")
 
+        from shopbeam.tui import drawing  # noqa: PLC0415 - startup (the worker imported it)
+
         width = (self.size.width or 80) - 2
         warn = [w if len(w) <= width else textwrap.shorten(w, width, placeholder=" ...")
                 for w in warn]
@@ -224,6 +229,8 @@ class JobScreen(Screen):
             return  # a newer edit came: its own worker solves it
 
         ev = session_mod.evaluate_data(data, text, name)
+        from shopbeam.tui import drawing  # noqa: F401,PLC0415 - startup: imported here, off the UI thread
+
         if session.version == version and not get_current_worker().is_cancelled:
             self.app.call_from_thread(self._solved, session, version, ev)
 

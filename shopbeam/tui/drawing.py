@@ -348,25 +348,3 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
         rs += tail
     return f"{verdict}\n{rs}"
 
-
-def fit_text(text: str, width: int) -> str:
-    """Every line of `text` within `width` columns, nothing cut: a rule line ("====") is
-    shortened, any other long line is wrapped under its own indent (two more for the
-    continuation). Lines that fit are left as they are."""
-    width = max(20, width)
-    out = []
-    for line in text.splitlines():
-        if len(line) <= width:
-            out.append(line)
-            continue
-        body = line.strip()
-        if body and len(set(body)) == 1:  # a rule: as wide as the room
-            out.append(line[:width])
-            continue
-        indent = line[:len(line) - len(line.lstrip())]
-        if len(indent) > width // 2:
-            indent = ""
-        out += textwrap.wrap(body, width, initial_indent=indent,
-                             subsequent_indent=indent + "  ", break_long_words=True,
-                             break_on_hyphens=False) or [""]
-    return "\n".join(out) + ("\n" if text.endswith("\n") else "")

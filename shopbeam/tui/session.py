@@ -11,10 +11,8 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 from pathlib import Path
 
-from shopbeam.design.analysis import analyze
 from shopbeam.errors import InputError, InputErrors, Problem, UnstableBeam
 from shopbeam.jobs import jobdoc, library
-from shopbeam.jobs.jobfile import parse_job_data
 
 
 @dataclass
@@ -59,7 +57,12 @@ def evaluate_doc(doc, filename: str = "") -> Evaluation:
 def evaluate_data(data: dict, text: str, filename: str = "") -> Evaluation:
     """Validate and solve a job given as plain data plus its text (for line numbers).
 
-    Pure: safe to run in a worker thread on a snapshot of the document."""
+    Pure: safe to run in a worker thread on a snapshot of the document. The reader and
+    the design modules (numpy, pint) are imported here, in the worker, so the first screen
+    is drawn without them."""
+    from shopbeam.design.analysis import analyze  # noqa: PLC0415 - startup
+    from shopbeam.jobs.jobfile import parse_job_data  # noqa: PLC0415 - startup
+
     try:
         job = parse_job_data(data, filename, text)
     except InputErrors as exc:

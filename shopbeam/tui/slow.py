@@ -21,15 +21,9 @@ from textual.widgets import Button, OptionList, Static
 from textual.widgets.option_list import Option
 
 from shopbeam import units
-from shopbeam.design import sizing
-from shopbeam.design.analysis import analyze
-from shopbeam.design.capacity import capacity
 from shopbeam.jobs import library, storage
-from shopbeam.output import capacityreport
-from shopbeam.output import label as labels
-from shopbeam.tui import drawing
 from shopbeam.tui.views import View, problems_text
-from shopbeam.tui.widgets import Choice
+from shopbeam.tui.widgets import Choice, fit_text
 
 
 class _SheetView(View):
@@ -61,7 +55,7 @@ class _SheetView(View):
         body = self.query_one(f"#{self.body_id}", Static)
         width = self.text_width()
         if ev.result is None:
-            body.update(Text(drawing.fit_text(problems_text(ev), width)))
+            body.update(Text(fit_text(problems_text(ev), width)))
             self._for = None
             return
         text = session.doc.text()
@@ -72,11 +66,11 @@ class _SheetView(View):
         out = getattr(self, "_out", None)
         if was is not None and was[0] == text and out is not None:
             # the same job at a new width: the text in hand, wrapped, until it is made again
-            self._out = drawing.fit_text(out, width)
+            self._out = fit_text(out, width)
             body.update(Text(self._out))
         else:
             self._out = None
-            body.update(Text(drawing.fit_text(self.busy, width)))
+            body.update(Text(fit_text(self.busy, width)))
         self.make(ev.job, ev.result, text, width)
 
     def on_resize(self) -> None:
@@ -94,7 +88,7 @@ class _SheetView(View):
             out = self.produce(job, result, width)
         except Exception as exc:  # noqa: BLE001 - show it, do not crash the screen
             out = f"This could not be worked out: {type(exc).__name__}: {exc}"
-        self.app.call_from_thread(self._done, text, width, drawing.fit_text(out, width))
+        self.app.call_from_thread(self._done, text, width, fit_text(out, width))
 
     def _done(self, text: str, width: int, out: str) -> None:
         if getattr(self, "_for", None) == (text, width):
@@ -200,6 +194,12 @@ class RatingView(_SheetView):
 def rating_text(job, width: int = 40, date=None, page_width: int = 78) -> str:
     """The capacity report (`page_width` columns) and the printable rating label (`width`
     columns), or why they are not there."""
+    # imported in the worker, not before the first screen
+    from shopbeam.design.analysis import analyze  # noqa: PLC0415 - startup
+    from shopbeam.design.capacity import capacity  # noqa: PLC0415 - startup
+    from shopbeam.output import capacityreport  # noqa: PLC0415 - startup
+    from shopbeam.output import label as labels  # noqa: PLC0415 - startup
+
     try:
         res = capacity(job)
         text = capacityreport.render(res, page_width)
@@ -246,6 +246,7 @@ class SizingView(View):
         if job is not None and not getattr(self, "_kind_set", False):
             self._kind_set = True
             kind = self.SHAPE_KIND.get(getattr(job.section, "shape", ""), None)
+            from shopbeam.design import sizing  # noqa: PLC0415 - startup
 
             try:
                 kind = sizing.default_kind(job)
@@ -309,6 +310,8 @@ def size_rows(job, kind: str, top: int = 40) -> tuple[list[tuple[str, str]], str
 
 
 def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
+    from shopbeam.design import sizing  # noqa: PLC0415 - startup
+
     sy = job.units
     res = sizing.size(job, kind=kind)
     passing = list(res.passing)

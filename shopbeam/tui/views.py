@@ -21,16 +21,14 @@ from textual.widgets.option_list import Option
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for
-from shopbeam.design.checks import BASIS_WORDS, basis_of
-from shopbeam.design.lifting import profile_of
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
 from shopbeam.jobs.rules import LIFTING_PROFILES
-from shopbeam.members import catalog
-from shopbeam.members.materials import figures, list_materials
-from shopbeam.members.sections import DIMENSION_SHAPES, shape_keys
 from shopbeam.members.wood import DURATIONS, TEMPERATURES
-from shopbeam.tui import drawing
 from shopbeam.tui.widgets import Choice, Field
+
+# The design modules, the catalog, the materials and the drawings (numpy) are imported where
+# a view first needs them: the first screen (the job view) is drawn without them, and the
+# solve worker has usually imported them by the time a result view is shown.
 
 
 def _text(s: str) -> Text:
@@ -278,13 +276,17 @@ def load_sign(row: dict) -> int | None:
     for t in texts:
         if not isinstance(t, (str, int, float)) or str(t).strip() == "":
             return None
-        for k in kinds:
+        # a plain quantity ("-50 lbf/ft") is read without the full parser (pint), which is
+        # only asked about anything else: this runs on the UI thread for every redraw
+        x = next((v for v in (units.plain_value(str(t), k) for k in kinds) if v is not None),
+                 None)
+        for k in kinds if x is None else ():
             try:
                 x = units.parse(str(t), k)
                 break
             except Exception:  # noqa: BLE001 - not this kind (or not readable at all)
                 continue
-        else:
+        if x is None:
             return None
         signs.append((x > 0) - (x < 0))
     if any(s > 0 for s in signs) and any(s < 0 for s in signs):
@@ -632,14 +634,14 @@ class SectionView(View):
     @staticmethod
     def shapes() -> list[str]:
         """The built-in shapes (imported when the section view is first shown)."""
-        from shopbeam.members.sections import DIMENSION_SHAPES
+        from shopbeam.members.sections import DIMENSION_SHAPES  # noqa: PLC0415 - startup
 
         return list(DIMENSION_SHAPES)
 
     @staticmethod
     def _dim_keys() -> dict[str, tuple[str, ...]]:
         out = {}
-        from shopbeam.members.sections import shape_keys
+        from shopbeam.members.sections import shape_keys  # noqa: PLC0415 - startup
 
         for shape in SectionView.shapes():
             req, optional = shape_keys(shape)  # the shapes' own key lists
@@ -714,6 +716,8 @@ class SectionView(View):
             lst.display = False
             return
         try:
+            from shopbeam.members import catalog  # noqa: PLC0415 - startup
+
             found = catalog.list_sections(None, text)
         except Exception:  # noqa: BLE001 - a half-typed filter
             found = []
@@ -779,6 +783,8 @@ class MaterialView(View):
             yield Choice("Repetitive", ["no", "yes"], key="beam.repetitive")
 
     def on_mount(self) -> None:
+        from shopbeam.members.materials import list_materials  # noqa: PLC0415 - startup
+
         lst = self.query_one("#mat-list", OptionList)
         lst.add_options([Option(_text(f"{m.key:<13} {m.name}"), id=m.key)
                          for m in list_materials()])
@@ -809,6 +815,8 @@ class MaterialView(View):
         msg = ev.message_for("beam.material")
         if ev.job is not None and ev.job.material is not None:
             m, sy = ev.job.material, ev.job.units
+
+            from shopbeam.members.materials import figures  # noqa: PLC0415 - startup
 
             shown = figures(m, sy) if m.kind in ("lumber", "stainless") else \
                 f"E {units.fmt(m.e, 'stress', sy, 5)}  Fy {units.fmt(m.fy, 'stress', sy)}"
@@ -929,6 +937,8 @@ class CriteriaView(View):
             if c.impact is not None:
                 return f"= {c.impact:.0%} on the live loads"
 
+            from shopbeam.design.lifting import profile_of  # noqa: PLC0415 - startup
+
             prof = profile_of(ev.job)
             return f"default: {prof.impact:.0%} ({prof.name})" if prof else "default: none"
         return ""
@@ -937,6 +947,8 @@ class CriteriaView(View):
         if choice.key == "criteria.lifting":
             p = LIFTING_PROFILES.get(choice.value)
             if p is None:
+                from shopbeam.design.lifting import profile_of  # noqa: PLC0415 - startup
+
                 prof = profile_of(ev.job) if ev.job is not None else None
                 return (f"tagged lifting: taken as {prof.name} (the strictest fit)"
                         if prof else "not a lifting device")
@@ -958,6 +970,7 @@ def basis_words(ev) -> str:
     job = ev.job
     if job is None or job.material is None:
         return ""
+    from shopbeam.design.checks import BASIS_WORDS, basis_of  # noqa: PLC0415 - startup
 
     basis = basis_of(job)
     sf = job.criteria.safety_factor
@@ -1001,6 +1014,8 @@ class ResultsView(View):
         yield Static("", id="res-cautions", markup=False)
 
     def show(self, session) -> None:
+        from shopbeam.tui import drawing  # noqa: PLC0415 - startup: numpy, the report model
+
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         q = lambda i: self.query_one(i, Static)  # noqa: E731
@@ -1036,11 +1051,15 @@ class PlotsView(View):
     title = "Plots"
 
     def compose(self) -> ComposeResult:
+        from shopbeam.tui import drawing  # noqa: PLC0415 - startup: numpy, the report model
+
         yield Static("", id="plot-problems", markup=False)
         for name in drawing.PLOT_KINDS:
             yield Static("", id=f"plot-{name}", markup=False, classes="plot")
 
     def show(self, session) -> None:
+        from shopbeam.tui import drawing  # noqa: PLC0415 - startup: numpy, the report model
+
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         height = 12 if self.app.size.height < 30 else 14
