@@ -218,13 +218,21 @@ class JobScreen(Screen):
     def solve_soon(self) -> None:
         s = self.session
         if s.stale:
-            self._solve(s, *s.snapshot())
+            # a key on its own is solved at once; keys of a burst (closer together than the
+            # debounce) wait it out, so the burst costs one solve
+            now = time.monotonic()
+            wait = SOLVE_DEBOUNCE if now - getattr(self, "_asked_at", -1e9) < SOLVE_DEBOUNCE \
+                else 0.0
+            self._asked_at = now
+            self._solve(s, *s.snapshot(), wait=wait)
 
     @work(thread=True, group="solve", exit_on_error=False)
-    def _solve(self, session: Session, version: int, data: dict, text: str, name: str) -> None:
-        """Solve a snapshot of the job off the UI thread. Waits a moment first, so a burst
-        of keys costs one solve; an answer for an older version of the job is dropped."""
-        time.sleep(SOLVE_DEBOUNCE)
+    def _solve(self, session: Session, version: int, data: dict, text: str, name: str,
+               wait: float = SOLVE_DEBOUNCE) -> None:
+        """Solve a snapshot of the job off the UI thread, after `wait` (a burst of keys
+        costs one solve); an answer for an older version of the job is dropped."""
+        if wait:
+            time.sleep(wait)
         if session.version != version or get_current_worker().is_cancelled:
             return  # a newer edit came: its own worker solves it
 

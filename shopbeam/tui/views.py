@@ -49,12 +49,30 @@ class View(VerticalScroll):
 
     title = ""
 
+    def fields(self) -> list[Field]:
+        """The view's fields, found once: a view's widgets are fixed when it is composed,
+        and a DOM query on every redraw costs more than the redraw (a key's answer)."""
+        found = self.__dict__.get("_fields")
+        if found is None:
+            found = list(self.query(Field))
+            if self.children:  # composed: keep the list
+                self._fields = found
+        return found
+
+    def choices(self) -> list[Choice]:
+        found = self.__dict__.get("_choices")
+        if found is None:
+            found = list(self.query(Choice))
+            if self.children:
+                self._choices = found
+        return found
+
     def show(self, session) -> None:  # pragma: no cover - overridden
         pass
 
     def show_field_messages(self, ev, fields: dict[str, str], session=None) -> None:
         """Put each field's problem (by job-file key) or how it was read beside it."""
-        for f in self.query(Field):
+        for f in self.fields():
             key = fields.get(f.key)
             if key is None:
                 continue
@@ -72,7 +90,7 @@ class View(VerticalScroll):
     def show_choice_messages(self, ev, keys: dict[str, str]) -> None:
         """Under each choice (by its key): the reader's problem or warning on the job-file
         key it edits, else what the chosen word means (`choice_reading`)."""
-        for c in self.query(Choice):
+        for c in self.choices():
             key = keys.get(c.key)
             if key is None:
                 continue
@@ -115,7 +133,7 @@ class JobView(View):
 
     def show(self, session) -> None:
         doc = session.doc
-        for f in self.query(Field):
+        for f in self.fields():
             if f.key == "title":
                 f.set_value(doc.get("title", ""))
             elif f.key == "notes":
@@ -217,14 +235,16 @@ class RowsView(View):
         rows = session.rows(self.table)
         lst = self.query_one(RowList)
         ev = session.evaluation
-        opts = []
+        texts = []
         for i, row in enumerate(rows):
             bad = [p for p in ev.messages_under(f"{self.table}[{i}]") if not p.warning]
             mark = "  <- problem" if bad else ""
-            opts.append(Option(_text(f"{i + 1}. {self.row_text(i, row, session)}{mark}")))
+            texts.append(f"{i + 1}. {self.row_text(i, row, session)}{mark}")
         hl = lst.highlighted
-        lst.clear_options()
-        lst.add_options(opts)
+        if texts != getattr(self, "_row_texts", None):  # the list again only if it changed
+            self._row_texts = texts
+            lst.clear_options()
+            lst.add_options([Option(_text(t)) for t in texts])
         if rows:
             self.selected = min(self.selected, len(rows) - 1)
             lst.highlighted = self.selected if hl is None or hl != self.selected else hl
@@ -380,7 +400,7 @@ class SpanView(RowsView):
 
     def show(self, session) -> None:
         doc = session.doc
-        for f in self.query(Field):
+        for f in self.fields():
             if f.key == "beam.length":
                 f.set_value(doc.get("beam.length", ""))
             elif f.key == "beam.members":
@@ -392,7 +412,7 @@ class SpanView(RowsView):
             elif f.key == "beam.bearing":
                 f.set_value(str(doc.get("beam.bearing", "")))
         sw = doc.get("beam.self_weight", True)
-        for c in self.query(Choice):
+        for c in self.choices():
             if c.key == "beam.self_weight":
                 c.set("left out" if sw is False else "included")
             elif c.key == "beam.braced":
@@ -409,14 +429,14 @@ class SpanView(RowsView):
             return
         kind = row.get("type", self.new_kind)
         brace = row.get("brace")
-        for c in self.query(Choice):
+        for c in self.choices():
             if c.key == "support.type":
                 c.set(kind)
             elif c.key == "support.brace":
                 c.set({True: "yes", False: "no"}.get(brace, "default")
                       if brace is None or isinstance(brace, bool) else "default")
                 c.display = kind != "hinge" or "brace" in row
-        for f in self.query(Field):
+        for f in self.fields():
             if f.key == "support.at":
                 f.show_row(i, row.get("at", ""))
             elif f.key == "support.stiffness":
@@ -515,7 +535,7 @@ class LoadsView(RowsView):
         if row is None:
             return
         kind = row.get("type", self.new_kind)
-        for c in self.query(Choice):
+        for c in self.choices():
             if c.key == "load.type":
                 c.set(kind)
             elif c.key == "load.case":
@@ -537,7 +557,7 @@ class LoadsView(RowsView):
                  "load.start": kind in ("uniform", "linear"),
                  "load.end": kind in ("uniform", "linear"), "load.value2": kind == "linear",
                  "load.width": kind in ("uniform", "linear"), "load.total": kind == "uniform"}
-        for f in self.query(Field):
+        for f in self.fields():
             if f.key in values:
                 f.show_row(i, values[f.key])
                 f.display = shown.get(f.key, True)
@@ -558,7 +578,7 @@ class LoadsView(RowsView):
         if kind == "linear":
             msg = session.evaluation.message_for(f"loads[{i}].value")
             if msg:
-                for f in self.query(Field):
+                for f in self.fields():
                     if f.key == "load.value":
                         f.show(msg, error=True)
 
@@ -659,7 +679,7 @@ class SectionView(View):
         doc, ev = session.doc, session.evaluation
         mode = self.mode_of(session)
         sec = doc.get("beam.section")
-        for c in self.query(Choice):
+        for c in self.choices():
             if c.key == "section.mode":
                 c.set(mode)
             elif c.key == "section.shape" and isinstance(sec, dict):
@@ -669,7 +689,7 @@ class SectionView(View):
         self.query_one("#sec-custom").display = mode == "custom"
         dims = self._dim_keys()
         shape = str(sec.get("shape", "")).lower() if isinstance(sec, dict) else ""
-        for f in self.query(Field):
+        for f in self.fields():
             if f.key == "section.designation":
                 f.set_value(sec if isinstance(sec, str) else "")
             elif f.key.startswith("dim."):
@@ -680,7 +700,7 @@ class SectionView(View):
             elif f.key.startswith("custom.") and isinstance(sec, dict):
                 f.set_value(str(sec.get(f.key[7:], "")))
         keys = {"section.designation": "beam.section"}
-        for f in self.query(Field):
+        for f in self.fields():
             if f.key.startswith("dim.") or f.key.startswith("custom."):
                 keys[f.key] = "beam.section." + f.key.split(".", 1)[1]
         self.show_field_messages(ev, keys)
@@ -793,7 +813,7 @@ class MaterialView(View):
         doc, ev = session.doc, session.evaluation
         mat = doc.get("beam.material")
         mode = "custom" if isinstance(mat, dict) else "built-in"
-        for c in self.query(Choice):
+        for c in self.choices():
             if c.key == "material.mode":
                 c.set(mode)
         self.query_one("#mat-builtin").display = mode == "built-in"
@@ -807,7 +827,7 @@ class MaterialView(View):
                     if lst.highlighted != i:
                         lst.highlighted = i
                     break
-        for f in self.query(Field):
+        for f in self.fields():
             if isinstance(mat, dict) and f.key.startswith("mat."):
                 f.set_value(str(mat.get(f.key[4:], "")))
         self.show_field_messages(ev, {f"mat.{k}": f"beam.material.{k}" for k, *_ in self.CUSTOM})
@@ -896,7 +916,7 @@ class CriteriaView(View):
 
     def show(self, session) -> None:
         doc = session.doc
-        for f in self.query(Field):
+        for f in self.fields():
             v = doc.get(f.key, "")
             f.set_value("" if v is None else str(v))
         ev = session.evaluation
@@ -908,7 +928,7 @@ class CriteriaView(View):
         basis = str(doc.get("criteria.basis", "") or "").strip().lower()
         lift = doc.get("criteria.lifting")
         cat = doc.get("criteria.category")
-        for c in self.query(Choice):
+        for c in self.choices():
             if c.key == "criteria.basis":
                 c.set("first-yield" if basis == "first-yield" else "code")
             elif c.key == "criteria.lifting":
@@ -1064,6 +1084,12 @@ class PlotsView(View):
         width = max(40, self.app.size.width - 6)
         height = 12 if self.app.size.height < 30 else 14
         r = ev.result
+        # drawn only while this view is shown (the screen shows the current view alone),
+        # and not again for the answer and size it already shows (switching back is free)
+        was = getattr(self, "_drawn_for", None)
+        if was is not None and was[0] is ev and was[1:] == (width, height):
+            return
+        self._drawn_for = (ev, width, height)
         head = self.query_one("#plot-problems", Static)
         if r is not None and r.state_solution is not None:
             # patterned loads: draw the pattern that governs, and say which it is
