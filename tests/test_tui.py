@@ -74,7 +74,7 @@ async def goto(pilot, key: str) -> None:
 async def test_start_shows_library_over_the_demo():
     app = make_app(cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         assert isinstance(app.screen, LibraryScreen)
         lst = app.screen.query_one("#lib-list")
         highlighted = app.screen.found[lst.highlighted]
@@ -90,7 +90,7 @@ async def test_start_shows_library_over_the_demo():
 async def test_two_span_shelf_from_scratch_reads_its_reactions():
     app = make_app(cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await pilot.press("ctrl+n")  # new job from the library
         await pilot.pause()
         s = app.job_screen.session
@@ -151,7 +151,7 @@ async def test_two_span_shelf_from_scratch_reads_its_reactions():
 async def test_editing_a_load_changes_the_moment_plot():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await goto(pilot, "8")
         before = text_of(app, "#plot-moment")
         assert "max" in before and "min" in before
@@ -176,7 +176,7 @@ async def test_editing_a_load_changes_the_moment_plot():
 async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await goto(pilot, "2")
         await type_keys(pilot, app, "span", "beam.length", "12")
         f = field(app, "span", "beam.length")
@@ -213,7 +213,7 @@ async def test_save_reopen_gives_the_identical_job(tmp_path):
     shutil.copy(PRESETS / "continuous-shelf.toml", path)
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await type_into(pilot, app, "job", "title", "Shelf, bay 7")
         await goto(pilot, "2")
         await type_into(pilot, app, "span", "beam.length", "10 ft 6 in")
@@ -228,7 +228,7 @@ async def test_save_reopen_gives_the_identical_job(tmp_path):
         assert 'length = "10 ft 6 in"' in saved
     app2 = make_app(path, cursor_blink=False)
     async with app2.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         s2 = app2.job_screen.session
         assert s2.doc.text() == saved and not s2.dirty
         again = s2.evaluation.result
@@ -246,7 +246,7 @@ async def test_save_conflict_shows_the_diff_and_can_overwrite(tmp_path):
     shutil.copy(PRESETS / "lumber-rack-arm.toml", path)
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await type_into(pilot, app, "job", "title", "Mine")
         path.write_text(path.read_text(encoding="utf-8").replace("title =", "# theirs\ntitle ="),
                         encoding="utf-8")
@@ -264,7 +264,7 @@ async def test_save_conflict_shows_the_diff_and_can_overwrite(tmp_path):
 async def test_saving_a_bundled_preset_makes_a_user_copy(_own_library):
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await type_into(pilot, app, "job", "title", "Our loft beam")
         await pilot.press("ctrl+s")
         await pilot.pause()
@@ -278,7 +278,7 @@ async def test_saving_a_bundled_preset_makes_a_user_copy(_own_library):
 async def test_quit_with_unsaved_changes_asks_first():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await type_into(pilot, app, "job", "title", "Changed")
         await pilot.press("ctrl+q")
         await pilot.pause()
@@ -297,7 +297,7 @@ async def test_quit_with_unsaved_changes_asks_first():
 async def test_lifting_job_has_the_stronger_banner():
     app = make_app(PRESETS / "jib-arm.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         banner = app.job_screen.query_one("#banner")
         assert "LIFTING DEVICE" in str(banner.content)
         assert banner.has_class("-lifting")
@@ -307,7 +307,7 @@ async def test_lifting_job_has_the_stronger_banner():
 async def test_calc_sheet_is_made_in_a_worker():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await goto(pilot, "9")
         await app.workers.wait_for_complete()
         await pilot.pause()
@@ -319,7 +319,7 @@ async def test_calc_sheet_is_made_in_a_worker():
 async def test_picking_a_catalog_section_from_type_ahead():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await goto(pilot, "4")
         await type_into(pilot, app, "section", "section.designation", "W10x")
         lst = app.job_screen.query_one("#sec-matches")
@@ -338,7 +338,7 @@ async def test_picking_a_catalog_section_from_type_ahead():
 async def test_library_search_and_the_guard_on_opening_another_job():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await type_into(pilot, app, "job", "title", "Edited demo")
         await pilot.press("ctrl+o")
         await pilot.pause()
@@ -370,7 +370,7 @@ async def test_area_load_with_a_tributary_width_typed_in_the_loads_form():
     # load row (0 to 15 ft, pin at 0, roller at 12 ft) the row's total is 66.67 x 15 = 1000 lbf
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await goto(pilot, "3")
         s = app.job_screen.session
         before = sum(r.force for r in s.evaluation.result.solution.reactions)
@@ -391,7 +391,7 @@ async def test_area_load_with_a_tributary_width_typed_in_the_loads_form():
 async def test_plots_of_a_patterned_job_draw_the_governing_pattern():
     app = make_app(PRESETS / "continuous-shelf.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         await goto(pilot, "8")
         head = text_of(app, "#plot-problems")
         assert "Diagrams of the load state that governs" in head
@@ -412,7 +412,7 @@ async def test_esc_then_digit_typed_fast_in_a_field_changes_view_and_types_nothi
     # character of 7 (pilcrow sign): it must not land in the field
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
-        await pilot.pause()
+        await settle(pilot)
         title = field(app, "job", "title")
         before = title.value
         title.input.focus()

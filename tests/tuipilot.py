@@ -40,5 +40,8 @@ async def settle(pilot) -> None:
         except WorkerCancelled:  # replaced by a newer one: wait for that
             continue
         await pilot.pause()
+        js = getattr(app, "job_screen", None)
+        if js is not None and js.session.stale:
+            continue  # the solve starts after the first paint: not asked for yet
         if not any(w.is_running for w in app.workers):
             return

@@ -185,13 +185,32 @@ class JobScreen(Screen):
         vb.show(self.current)
         view = self.query_one(f"#{self.current}")
         view.show(s)
-        # lay the view out now: Tab order follows positions on screen, so a Tab typed right
-        # after a key that showed or hid fields must find them where they will be
-        self._refresh_layout()
+        # lay the view out now when its fields were shown or hidden: Tab order follows
+        # positions on screen, so a Tab typed right after must find them where they will be
+        # (an answer that only changes the words beside the fields is laid out with the
+        # next frame, as usual)
+        stops = self._tab_stops(view)
+        if stops != getattr(self, "_laid_out_for", None):
+            self._laid_out_for = stops
+            self._refresh_layout()
         summary = self.query_one("#summary", Static)
         summary.display = self.current in INPUT_VIEWS
         if self.current in INPUT_VIEWS:
             summary.update(Text(self.summary_text()))
+
+    @staticmethod
+    def _tab_stops(view) -> tuple:
+        """Which of the view's focusable widgets (text boxes, choices, lists) are shown."""
+        widgets = view.focusables() if hasattr(view, "focusables") else []
+        if not widgets:
+            return (view.id, None)
+        shown = []
+        for w in widgets:
+            node = w
+            while node is not None and node is not view and node.display:
+                node = node.parent
+            shown.append(node is view)
+        return (view.id, tuple(shown))
 
     def summary_text(self) -> str:
         ev = self.session.evaluation

@@ -67,6 +67,15 @@ class View(VerticalScroll):
                 self._choices = found
         return found
 
+    def focusables(self) -> list:
+        """Every widget in the view that can take the focus (text boxes, choices, lists)."""
+        found = self.__dict__.get("_focusables")
+        if found is None:
+            found = [w for w in self.query("*") if w.can_focus]
+            if self.children:
+                self._focusables = found
+        return found
+
     def show(self, session) -> None:  # pragma: no cover - overridden
         pass
 
