@@ -77,6 +77,12 @@ async def shoot(name, job, keys, size, out: Path) -> Path:
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=size) as pilot:
         await pilot.pause()
+        for _ in range(200):  # the first solve starts after the first paint: wait for it
+            js = getattr(app, "job_screen", None)
+            if js is not None and not js.session.stale:
+                break
+            await pilot.pause(0.05)
+        await app.workers.wait_for_complete()
         for k in keys:
             await pilot.press(k)
             await pilot.pause()
