@@ -191,8 +191,9 @@ def test_a_deflection_limit_looser_than_l_100_is_warned_and_l_180_is_not():
     ("FB4x1/2", "A53-B", "beam.material", "grade of tube or pipe"),
     ("HSS4x4x1/4", "A36", "beam.material", "grade of rolled shapes"),
     ("PIPE2STD", "A992", "beam.material", "grade of rolled shapes"),
-    ("S8x18.4", "6061-T6", "beam.section", "steel shape from the AISC catalog"),
-    ("HSS4x4x1/4", "304", "beam.section", "steel shape from the AISC catalog"),
+    ("S8x18.4", "6061-T6", "beam.section", "steel shape (AISC Shapes Database"),
+    ("IPE200", "6061-T6", "beam.section", "steel shape (EN 10365"),
+    ("HSS4x4x1/4", "304", "beam.section", "steel shape (AISC Shapes Database"),
 ])
 def test_a_grade_the_product_is_not_made_to_is_warned(section, material, key, word):
     job = parse_job_text(job_text(section=section, material=material))
@@ -308,3 +309,16 @@ def test_first_yield_on_aluminium_is_used_without_a_warning():
     job = parse_job_text(job_text(section="FB4x1/2", material="6061-T6",
                                   criteria='basis = "first-yield"'))
     assert not [p for p in warnings(job) if p.key == "criteria.basis"]
+
+
+def test_sizing_an_aluminium_job_over_steel_shapes_says_so():
+    # the AISC Shapes Database holds steel shapes; an aluminium I-beam of the same name is
+    # another extrusion (Aluminum Association standard shapes differ), so the sweep says so
+    text = job_text(section="FB4x1/2", material="6061-T6")
+    res = size(parse_job_text(text), kind="W", with_capacity=False)
+    assert "steel shapes (AISC Shapes Database v15.0, EN 10365)" in res.material_note
+    assert "an aluminium shape" in res.material_note
+    res = size(parse_job_text(text), kind="flat-bar", with_capacity=False)  # bar: same sizes
+    assert "steel shapes" not in res.material_note
+    steel = size(parse_job_text(job_text()), kind="W", with_capacity=False)
+    assert "steel shapes" not in steel.material_note

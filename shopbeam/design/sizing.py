@@ -303,8 +303,27 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
     if stock is None:
         job, material_note = material_for_kind(job, kind)
     cands = _candidates(job, None if stock is not None else kind, max_depth, stock)
+    if stock is None:
+        material_note = "; ".join(x for x in (material_note, _steel_shapes_note(job, cands)) if x)
     return _sweep(job, cands, "stock list" if stock is not None else kind, with_capacity,
                   confirm, stock, material_note, t0)
+
+
+# catalog sources whose shapes are rolled or welded steel shapes (not bar or tube stock sizes)
+STEEL_SHAPE_SOURCES = ("AISC Shapes Database", "EN 10365")
+
+
+def _steel_shapes_note(job, cands) -> str:
+    """Said when an aluminium or stainless job sweeps shapes of the AISC (steel) catalog: the
+    sweep keeps the job's material, but an extrusion of the same name has other dimensions."""
+    mkind = getattr(job.material, "kind", "")
+    if mkind not in ("aluminum", "stainless") or not any(
+            str(getattr(c[1], "source", "")).startswith(STEEL_SHAPE_SOURCES) for c in cands):
+        return ""
+    metal = "aluminium" if mkind == "aluminum" else mkind
+    return (f"these are steel shapes (AISC Shapes Database v15.0, EN 10365) with the job's {metal} "
+            f"{job.material.key}: {'an' if metal[0] in 'aeiou' else 'a'} {metal} shape of the same name has other dimensions, so "
+            "check the one you order as an inline [beam.section] with the mill's dimensions")
 
 
 def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note="", t0=None,
@@ -354,7 +373,8 @@ def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
                 cands.append(cnd)
     if not cands:
         raise InputError("no catalog section fits (check --max-depth)", "--kind")
-    res = _sweep(job, cands, "all", with_capacity, confirm, None, "", t0, skipped)
+    res = _sweep(job, cands, "all", with_capacity, confirm, None, _steel_shapes_note(job, cands),
+                 t0, skipped)
     return replace(res, method="every catalog kind in one sweep: " + res.method)
 
 

@@ -832,9 +832,9 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
                where)
     elif mkind in ("aluminum", "stainless") and str(getattr(section, "source", "")).startswith(
-            "AISC Shapes Database"):
+            ("AISC Shapes Database", "EN 10365")):
         metal = "aluminium" if mkind == "aluminum" else mkind
-        r.warn(f"section {section.designation!r} is a steel shape from the AISC catalog, but "
+        r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
                f"material {key!r} is {metal}: {metal} shapes of a similar name have other "
                "dimensions (walls, flanges, fillets), so these properties are not the "
                "member's. Give [beam.section] with the shape and the mill's dimensions",
