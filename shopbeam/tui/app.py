@@ -173,8 +173,10 @@ class JobScreen(Screen):
             flags.append("UNSAVED CHANGES")
         if s.read_only:
             flags.append("read-only preset")
-        self.query_one("#titlebar", Static).update(Text(title_bar(
-            str(title), s.label, "; ".join(flags), (self.size.width or 80) - 2), no_wrap=True))
+        bar = title_bar(str(title), s.label, "; ".join(flags), (self.size.width or 80) - 2)
+        if bar != getattr(self, "_bar_shown", None):  # unchanged: no redraw
+            self._bar_shown = bar
+            self.query_one("#titlebar", Static).update(Text(bar, no_wrap=True))
         vb = self.query_one(ViewBar)
         if self.size.width and self.size.width < 112:
             vb.views = [(v[0], v[1], v[3]) for v in VIEWS]
@@ -196,7 +198,10 @@ class JobScreen(Screen):
         summary = self.query_one("#summary", Static)
         summary.display = self.current in INPUT_VIEWS
         if self.current in INPUT_VIEWS:
-            summary.update(Text(self.summary_text()))
+            text = self.summary_text()
+            if text != getattr(self, "_summary_shown", None):  # unchanged: no redraw
+                self._summary_shown = text
+                summary.update(Text(text))
 
     @staticmethod
     def _tab_stops(view) -> tuple:

@@ -185,13 +185,14 @@ class Field(Horizontal):
         self._typed = None
 
     def show(self, message: str = "", error: bool = False) -> None:
-        msg = self.query_one(".field-msg", Static)
-        if error:
-            msg.update(Text("problem: " + message))
-            self.add_class("-error")
-        else:
-            msg.update(Text(message))
-            self.remove_class("-error")
+        """The message beside the field; the same message again changes nothing on screen
+        (no redraw, no new layout: an answer that leaves it as it was costs nothing here)."""
+        shown = ("problem: " + message) if error else message
+        if getattr(self, "_shown", None) == (shown, error):
+            return
+        self._shown = (shown, error)
+        self.query_one(".field-msg", Static).update(Text(shown))
+        self.set_class(error, "-error")
 
     def on_input_changed(self, event: Input.Changed) -> None:
         event.stop()
@@ -369,7 +370,9 @@ class ViewBar(Static):
             else:
                 t.append(f"{pad}{key} {name}{pad}")
             t.append(" " if self.compact else "")
-        self.update(t)
+        if t.plain != getattr(self, "_shown", None):  # unchanged: no redraw
+            self._shown = t.plain
+            self.update(t)
 
 
 class Banner(Static):
@@ -379,12 +382,12 @@ class Banner(Static):
 
     def show(self, tags, lifting: bool = False) -> None:
         """`lifting`: a lifting device whatever the tags say (a named lifting profile)."""
-        if lifting or is_lifting(tags):
-            self.add_class("-lifting")
-            self.update(Text("!! " + SHORT_LIFTING + "\n" + SHORT))
-        else:
-            self.remove_class("-lifting")
-            self.update(Text(SHORT))
+        loud = bool(lifting or is_lifting(tags))
+        if getattr(self, "_shown", None) == loud:  # unchanged: no redraw
+            return
+        self._shown = loud
+        self.set_class(loud, "-lifting")
+        self.update(Text("!! " + SHORT_LIFTING + "\n" + SHORT if loud else SHORT))
 
 
 def fit_text(text: str, width: int) -> str:
