@@ -77,6 +77,9 @@ class SizeRow:
     # sweep, the same checks exactly) or "screen" (a lower bound over chosen load states: the
     # row fails when it is above 1, and is not known to pass until checked in full)
     checked: str = "batched"
+    # why no load may be posted on this section although it passes (a limit state the checks
+    # do not cover, see capacity.not_rated_reasons); filled for rows checked in full
+    not_rated: tuple[str, ...] = ()
 
     @property
     def ok(self) -> bool:
@@ -198,37 +201,40 @@ def _real_roots_01(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
     return rows, t
 
 
-def _absmax_many(co: np.ndarray, breaks: np.ndarray, intervals) -> list[np.ndarray]:
-    """Exact max |f| over each interval (a, b) (breaks) for every row of co (R, P, w)."""
-    r, n, w = co.shape
-    h = np.diff(breaks)
-    flat = co.reshape(r * n, w)
-    left = np.abs(co[..., 0])
-    right = np.abs(_horner(flat, np.tile(h, r))).reshape(r, n)
-    inner = np.zeros((r, n))
+def _absmax_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
+                   intervals) -> list[np.ndarray]:
+    """Exact max |f| over each interval (a, b) for every section and state: co (n, S, P, w)
+    on each state's own breaks (S, P + 1), of which the first nreal[s] pieces are real (the
+    rest pad to a common count, zero length and zero coefficients). Returns (n, S) each."""
+    n, S, P, w = co.shape
+    h = np.diff(breaks, axis=1)
+    hh = np.broadcast_to(h[None], (n, S, P)).reshape(-1)
+    flat = co.reshape(-1, w)
+    best = np.maximum(np.abs(flat[:, 0]), np.abs(_horner(flat, hh)))
     if w > 1:
-        d = flat[:, 1:] * np.arange(1, w)
-        d = d * (np.tile(h, r)[:, None] ** np.arange(w - 1))  # in tau = t / h
+        d = flat[:, 1:] * np.arange(1, w) * (hh[:, None] ** np.arange(w - 1))  # in tau = t / h
         rows, tau = _real_roots_01(d)
         if rows.size:
-            v = np.abs(_horner(flat[rows], tau * np.tile(h, r)[rows]))
-            np.maximum.at(inner.reshape(-1), rows, v)
-    best = np.maximum(np.maximum(left, right), inner)
-    tol = 1e-9 * (breaks[-1] - breaks[0])
+            np.maximum.at(best, rows, np.abs(_horner(flat[rows], tau * hh[rows])))
+    best = best.reshape(n, S, P)
+    tol = 1e-9 * (breaks[0, -1] - breaks[0, 0])
+    real = np.arange(P)[None, :] < nreal[:, None]
     out = []
     for a, b in intervals:
-        j0 = int(np.searchsorted(breaks, a - tol, side="left"))
-        j1 = int(np.searchsorted(breaks, b + tol, side="right")) - 1
-        j0 = min(max(j0, 0), n - 1)
-        j1 = min(max(j1, j0 + 1), n)
-        out.append(best[:, j0:j1].max(axis=1))
+        m = (breaks[:, :-1] >= a - tol) & (breaks[:, 1:] <= b + tol) & real
+        out.append(np.where(m[None], best, 0.0).max(axis=2))
     return out
 
 
-def _value_at(co: np.ndarray, breaks: np.ndarray, x: float) -> np.ndarray:
-    j = int(np.clip(np.searchsorted(breaks, x, side="right") - 1, 0, len(breaks) - 2))
-    t = np.full(co.shape[0], x - breaks[j])
-    return _horner(co[:, j, :], t)
+def _piece_of(breaks: np.ndarray, nreal: np.ndarray, x) -> tuple[np.ndarray, np.ndarray]:
+    """(piece, offset in it) of x (S, ...) on each state's own real pieces."""
+    x = np.asarray(x, float)
+    S = breaks.shape[0]
+    xs = np.broadcast_to(x, (S,) + x.shape[1:]) if x.ndim else np.full(S, float(x))
+    j = np.stack([np.searchsorted(breaks[s], xs[s], side="right") - 1 for s in range(S)])
+    j = np.clip(j, 0, (nreal - 1).reshape((S,) + (1,) * (j.ndim - 1)))
+    sidx = np.arange(S).reshape((S,) + (1,) * (j.ndim - 1))
+    return j, xs - breaks[sidx, j]
 
 
 # ------------------------------------------------------------------ candidates
@@ -395,9 +401,10 @@ class _Q:
     fixed: np.ndarray  # (S or 1, P, w)
     sw: np.ndarray  # (S or 1, P, w)
     live: np.ndarray  # (S, P, w)
-    breaks: np.ndarray
+    breaks: np.ndarray  # (S, P + 1): each state's own breaks (moving loads: its wheels)
+    nreal: np.ndarray  # (S,): real pieces of each state (the rest pad to P)
     lfixed: np.ndarray | None = None
-    unit: np.ndarray | None = None  # (m, P, w)
+    unit: np.ndarray | None = None  # (S, m, P, w)
 
     def parts(self, corr, sl):
         out = [self.fixed[None], self.sw[None], self.live[None],
@@ -405,7 +412,7 @@ class _Q:
         if corr is not None:
             for i, c in enumerate(corr):
                 if out[i] is not None and c is not None:
-                    out[i] = out[i] + np.einsum("rsm,mpw->rspw", c[sl], self.unit)
+                    out[i] = out[i] + np.einsum("rsm,smpw->rspw", c[sl], self.unit)
         return out
 
 
@@ -457,8 +464,9 @@ def _spring_forces(sols, unit_sols, xs, k, ei, ei_ref):
 
 def _state_arrays(job, parts, sw_unit, extra, states, ei):
     """Build the (M, V, U) arrays of `_Q` and the local-check items for the given states
-    (patterns x moving positions) in one `solve_many` pass; springs get per-section
-    corrections. Returns (M, V, U, corr, items, wheel data or None)."""
+    (patterns x moving positions): one `solve_many` pass per trolley position, so each state
+    keeps its own breaks (its wheels only); springs get per-section corrections. Returns
+    (M, V, U, corr, items, wheel data or None)."""
     L = job.length
     springs = [s for s in job.supports if s.kind == "spring"]
     ei_ref = float(np.exp(np.mean(np.log(ei)))) if springs else 1.0
@@ -471,46 +479,83 @@ def _state_arrays(job, parts, sw_unit, extra, states, ei):
         for a, b, _ in segs:
             span_loads.append(tuple(c for c in (clip(ld, a, b) for ld in parts.patterned) if c))
     mv = parts.moving[0] if parts.moving else None
-    cases = [tuple(parts.fixed) + extra, (sw_unit,), tuple(parts.live)] + span_loads
-    wcase = {}
-    for _, p in states:
-        if mv is not None and p not in wcase:
-            wcase[p] = len(cases)
-            cases.append(tuple(Load("point", at=p + s, value=d, label=mv.label, key=mv.key,
-                                    case="dead") for s, d in zip(mv.offsets, mv.dead)))
-            cases.append(tuple(Load("point", at=p + s, value=f, label=mv.label, key=mv.key)
-                               for s, f in zip(mv.offsets, mv.live)))
-    nc = len(cases)
+    base = [tuple(parts.fixed) + extra, (sw_unit,), tuple(parts.live)] + span_loads
+    nb = len(base)
     xs = [s.at for s in springs]
-    cases += [(Load("point", at=x, value=1.0),) for x in xs]
-    sols = solve_many(empty, cases)
+    units_ = [(Load("point", at=x, value=1.0),) for x in xs]
+    groups: dict = {}
+    for _, p in states:
+        if p not in groups:
+            wc = [] if p is None else [
+                tuple(Load("point", at=p + s, value=d, label=mv.label, key=mv.key, case="dead")
+                      for s, d in zip(mv.offsets, mv.dead)),
+                tuple(Load("point", at=p + s, value=f, label=mv.label, key=mv.key)
+                      for s, f in zip(mv.offsets, mv.live))]
+            groups[p] = (solve_many(empty, base + wc + units_), nb + len(wc))
+
+    def combos(pat, p):
+        """case indices (in its position's solve) of the fixed, live and live-only parts"""
+        wheel = p is not None
+        return ([0] + ([nb] if wheel else []), [2] + [3 + i for i in pat] + ([nb + 1] if wheel
+                                                                            else []),
+                [nb] if wheel else [])
+
     S = len(states)
-    A = np.zeros((S, nc))
-    B = np.zeros((S, nc))
-    Al = np.zeros((S, nc))
-    for si, (pat, p) in enumerate(states):
-        A[si, 0] = 1.0
-        B[si, 2] = 1.0
-        for i in pat:
-            B[si, 3 + i] = 1.0
-        if p is not None:
-            A[si, wcase[p]] = Al[si, wcase[p]] = 1.0
-            B[si, wcase[p] + 1] = 1.0
     corr = None
     if springs:
         k = np.array([s.stiffness for s in springs])
-        f = _spring_forces(sols[:nc], sols[nc:], xs, k, ei, ei_ref)  # (R, nc, m)
-        corr = (np.einsum("sc,rcm->rsm", A, f), f[:, 1:2, :], np.einsum("sc,rcm->rsm", B, f),
-                np.einsum("sc,rcm->rsm", Al, f) if mv is not None else None)
+        forces = {p: _spring_forces(sols[:nc], sols[nc:], xs, k, ei, ei_ref)
+                  for p, (sols, nc) in groups.items()}  # (R, cases, m) each
+        R, m = len(ei), len(xs)
+        cf, cs, cl, clf = (np.zeros((R, S, m)) for _ in range(4))
+        for si, (pat, p) in enumerate(states):
+            f = forces[p]
+            fx, lv, lf = combos(pat, p)
+            cf[:, si], cs[:, si], cl[:, si] = f[:, fx].sum(1), f[:, 1], f[:, lv].sum(1)
+            if lf:
+                clf[:, si] = f[:, lf].sum(1)
+        corr = (cf, cs, cl, clf if mv is not None else None)
+    pmax = max(len(sols[0].moment.breaks) - 1 for sols, _ in groups.values())
+
+    def pad(c):
+        return np.concatenate([c, np.zeros((pmax - c.shape[0],) + c.shape[1:])])
 
     def q(name):
-        c = np.stack([getattr(s, name).coeffs for s in sols[:nc]])
-        unit = np.stack([getattr(s, name).coeffs for s in sols[nc:]]) if springs else None
-        return _Q(np.einsum("sc,cpw->spw", A, c), c[1][None], np.einsum("sc,cpw->spw", B, c),
-                  getattr(sols[0], name).breaks,
-                  np.einsum("sc,cpw->spw", Al, c) if mv is not None else None, unit)
+        fx_, sw_, lv_, lf_, br_, nr_, un_ = [], [], [], [], [], [], []
+        for pat, p in states:
+            sols, nc = groups[p]
+            c = np.stack([getattr(s, name).coeffs for s in sols[:nc]])
+            br = getattr(sols[0], name).breaks
+            fx, lv, lf = combos(pat, p)
+            fx_.append(pad(c[fx].sum(0)))
+            sw_.append(pad(c[1]))
+            lv_.append(pad(c[lv].sum(0)))
+            lf_.append(pad(c[lf].sum(0)) if lf else np.zeros((pmax, c.shape[2])))
+            br_.append(np.concatenate([br, np.full(pmax + 1 - len(br), br[-1])]))
+            nr_.append(len(br) - 1)
+            if springs:
+                un_.append(np.stack([pad(getattr(s, name).coeffs) for s in sols[nc:]]))
+        return _Q(np.stack(fx_), np.stack(sw_), np.stack(lv_), np.stack(br_), np.array(nr_),
+                  np.stack(lf_) if mv is not None else None,
+                  np.stack(un_) if springs else None)
 
-    items = _state_items(job, parts, sols[:nc], A, B, states, span_loads, mv, wcase,
+    # the local checks read forces only: every case's reactions in one list, as one solve
+    first = next(iter(groups.values()))[0]
+    rsols = list(first[:nb])
+    wcase = {}
+    for p, (sols, nc) in groups.items():
+        if p is not None:
+            wcase[p] = len(rsols)
+            rsols += [sols[nb], sols[nb + 1]]
+    A = np.zeros((S, len(rsols)))
+    B = np.zeros((S, len(rsols)))
+    for si, (pat, p) in enumerate(states):
+        A[si, 0] = B[si, 2] = 1.0
+        for i in pat:
+            B[si, 3 + i] = 1.0
+        if p is not None:
+            A[si, wcase[p]] = B[si, wcase[p] + 1] = 1.0
+    items = _state_items(job, parts, rsols, A, B, states, span_loads, mv, wcase,
                          with_reactions=not springs)
     wheels = None
     if mv is not None:
@@ -599,11 +644,13 @@ def _exact_arrays(job, base, parts, sw_unit, extra):
         fx = getattr(ss.fixed, name).coeffs
         lv = getattr(ss.live, name).coeffs
         if not parts.patterned:
-            return _Q((fx - sw)[None], sw[None], lv[None], ss.fixed.moment.breaks)
+            br = ss.fixed.moment.breaks
+            return _Q((fx - sw)[None], sw[None], lv[None], br[None], np.array([len(br) - 1]))
         e = build_envelope(ss, name)
         s_ = e.carry(sw)
+        n_ = len(e.breaks) - 1
         return _Q((e.fixed - s_)[None], s_[None], np.stack([e.live + e.up, e.live + e.down]),
-                  e.breaks)
+                  np.stack([e.breaks, e.breaks]), np.array([n_, n_]))
 
     # local checks at supports and point loads (shopbeam.design.local): every force is
     # fixed + w_self x sw + kk x live[state]; with patterns, each span's own part taken where
@@ -740,8 +787,7 @@ def _batched(job, base, parts, cands, with_capacity):
         w_cy = np.array([r[12][2] if r[12] else [0.0] * 3 for r in rs])
         w_sb = np.array([r[12][3] if r[12] else 1.0 for r in rs])
         w_al = np.array([r[12][4] if r[12] else math.inf for r in rs])
-        wj = np.clip(np.searchsorted(M.breaks, wx, side="right") - 1, 0, len(M.breaks) - 2)
-        wt = wx - M.breaks[wj]  # (S, nw)
+        wj, wt = _piece_of(M.breaks, M.nreal, wx)  # (S, nw) each
     # sections in chunks so that the largest working array stays within CHUNK_BYTES
     P, w = M.live.shape[1], max(M.live.shape[2], U.live.shape[2])
     chunk = max(1, int(CHUNK_BYTES // (8 * S * P * w * 2)))
@@ -776,44 +822,46 @@ def _batched(job, base, parts, cands, with_capacity):
             out = k4 * lv if lf is None else lf + k4 * lv
         else:
             out = f + wsw[sl, None, None, None] * s + k4 * lv
-        out = np.broadcast_to(out, (n, S) + out.shape[2:])
-        return out.reshape(n * S, *out.shape[2:])
+        return np.broadcast_to(out, (n, S) + out.shape[2:])
 
     def chunk_ratios(k, sl):
         n = sl.stop - sl.start
         kk = k * (1 + imp)
         mco = combo(M, kk, sl)
-        mb, vb, ub = M.breaks, V.breaks, U.breaks
         bend = np.zeros(n)
-        mmaxes = _absmax_many(mco, mb, [(a, bb) for a, bb, _ in ltb_segs])
+        mmaxes = _absmax_states(mco, M.breaks, M.nreal, [(a, bb) for a, bb, _ in ltb_segs])
         for si, (a, bb, _free) in enumerate(ltb_segs):
             # with patterns: Mmax, MA, MB, MC each the largest over both envelopes (the
             # evaluation's rule, conservative against every single pattern)
-            mmax = mmaxes[si].reshape(n, S).max(axis=1)
+            mmax = mmaxes[si].max(axis=1)
             if cb_one or np.all(np.isinf(ltb1[sl, si])) or free[si]:
                 cb = np.ones(n)
             else:
-                qs = [np.abs(_value_at(mco, mb, a + f_ * (bb - a))).reshape(n, S).max(axis=1)
-                      for f_ in (0.25, 0.5, 0.75)]
+                qs = []
+                for f_ in (0.25, 0.5, 0.75):
+                    j, t = _piece_of(M.breaks, M.nreal, a + f_ * (bb - a))
+                    c = mco[:, np.arange(S), j, :]  # (n, S, w)
+                    qs.append(np.abs(sum(c[..., e] * t[None] ** e
+                                         for e in range(c.shape[-1]))).max(axis=1))
                 cb = np.where(uses_cb[sl], cb_factor(mmax, *qs), 1.0)
             mn = nominal_moment(cap[sl], ltb1[sl, si], cb)
             bend = np.maximum(bend, np.where(special[sl], 0.0, mmax * omega[sl] / mn))
-        shear = (_absmax_many(combo(V, kk, sl), vb, [(0.0, L)])[0].reshape(n, S).max(axis=1)
+        shear = (_absmax_states(combo(V, kk, sl), V.breaks, V.nreal, [(0.0, L)])[0].max(axis=1)
                  / vallow[sl])
         uco = combo(U, kk, sl)
         defl = np.zeros(n)
-        for um, lim in zip(_absmax_many(uco, ub, [(a, bb) for a, bb, _ in spans]), limits):
-            defl = np.maximum(defl, um.reshape(n, S).max(axis=1) / ei[sl] / lim)
+        for um, lim in zip(_absmax_states(uco, U.breaks, U.nreal, [(a, bb) for a, bb, _ in spans]),
+                           limits):
+            defl = np.maximum(defl, um.max(axis=1) / ei[sl] / lim)
         ldef = np.zeros(n)
         if live_n:
             lco = combo(U, kk, sl, live_only=True)
-            for um, lim in zip(_absmax_many(lco, ub, [(a, bb) for a, bb, _ in spans]),
-                               live_limits):
-                ldef = np.maximum(ldef, um.reshape(n, S).max(axis=1) / ei[sl] / lim)
+            for um, lim in zip(_absmax_states(lco, U.breaks, U.nreal,
+                                              [(a, bb) for a, bb, _ in spans]), live_limits):
+                ldef = np.maximum(ldef, um.max(axis=1) / ei[sl] / lim)
         rows = [bend, shear, defl, ldef, local_ratio(kk, sl)[0]]
         if wheels is not None:  # bottom-flange bending under each wheel (lifting.wheel_check)
-            co = mco.reshape(n, S, *mco.shape[1:])
-            cw = co[:, np.arange(S)[:, None], wj]  # (n, S, nw, w)
+            cw = mco[:, np.arange(S)[:, None], wj]  # (n, S, nw, w)
             mw = sum(cw[..., e] * wt[None] ** e for e in range(cw.shape[-1]))
             sg = mw / w_sb[sl, None, None]
             pw = np.abs(wd[None] + kk[:, None] * wl[None]) / per  # (n, nw)
@@ -867,12 +915,15 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
         ev = evaluate(j, 1.0, ss=ss)
         g = max(ev.checks, key=lambda c: c.ratio)
         # k of a section that fails at the entered loads is below 1 and never listed
-        kf = capacity(j, ss=ss).factor if with_capacity and g.ratio <= 1.0 else float("nan")
+        cap = capacity(j, ss=ss) if with_capacity and g.ratio <= 1.0 else None
+        kf = cap.factor if cap is not None else float("nan")
+        why = tuple(cap.not_rated) if cap is not None else ()
     except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
         return replace(row, ratio=math.inf, governing="not checked", factor=float("nan"),
                        note=f"{row.note}; full check failed: {exc}".lstrip("; "),
                        checked="full")
-    return replace(row, ratio=g.ratio, governing=g.name, factor=kf, checked="full")
+    return replace(row, ratio=g.ratio, governing=g.name, factor=kf, checked="full",
+                   not_rated=why)
 
 
 def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool) -> int:
@@ -995,7 +1046,7 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
         return {"designation": r.designation, "mass_per_length": r.weight, "ratio": r.ratio,
                 "governing": r.governing, "factor": r.factor if math.isfinite(r.factor) else None,
                 "price_per_m": r.price_per_m, "material": getattr(r.material, "key", ""),
-                "checked": r.checked}
+                "checked": r.checked, "not_rated": list(r.not_rated)}
 
     return {"schema": 1, "title": res.job.title, "kind": res.kind, "swept": len(res.rows),
             "passing": [row(r) for r in rows], "seconds": res.seconds, "method": res.method,

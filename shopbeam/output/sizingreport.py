@@ -42,7 +42,12 @@ def render(res: SizeResult, top: int = 15) -> str:
     for r in res.passing[:top]:
         price = f"  {_money(r.price_per_m, sy)}" if r.price_per_m is not None else ""
         lines.append(f"  {r.designation[:22]:<22} {units.fmt(r.weight, 'mass_per_length', sy):>12} "
-                     f"{r.ratio:7.3f} {r.governing:<11} {r.factor:7.3f}{price}")
+                     f"{r.ratio:7.3f} {r.governing:<11} {r.factor:7.3f}{price}"
+                     + ("  NOT RATED" if r.not_rated else ""))
+    for r in res.passing[:top]:
+        for why in r.not_rated[:2]:
+            lines += textwrap.wrap(f"{r.designation} NOT RATED: {why}", 78,
+                                   initial_indent="  ", subsequent_indent="    ")
     if not res.passing:
         lines.append("  no section passes; the closest:")
         for r in sorted(res.rows, key=lambda r: r.ratio)[:5]:
