@@ -198,6 +198,13 @@ def test_the_answer_is_the_brute_force_answer_on_40_w_shapes(name, monkeypatch):
             assert r.ratio == pytest.approx(full[r.designation], rel=1e-9), r.designation
     # the passing list holds only sections that pass their full check
     assert all(full[r.designation] <= 1.0 for r in res.passing)
+    if name == "spring":
+        # springs without moving loads: the per-section spring forces are exact, so where
+        # bending, shear or deflection governs the screen is the full check itself
+        same = [r for r in res.rows if r.governing in ("bending", "shear", "deflection")]
+        assert len(same) > 20
+        for r in same:
+            assert r.ratio == pytest.approx(full[r.designation], rel=1e-9), r.designation
     # the screen spares most of the full checks
     assert res.full_checks < 20
 

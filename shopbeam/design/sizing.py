@@ -883,7 +883,7 @@ def _batched(job, base, parts, cands, with_capacity):
     r1, gi = ratios(np.ones(R))
     if with_capacity and exact:  # a screened row's k would only be an upper bound: the rows
         # checked in full get theirs from `capacity`
-        k = _capacity_vector(ratios, R)
+        k = _capacity_vector(ratios, R, r1)
     else:
         k = np.full(R, np.nan)
     local_names = []
@@ -957,10 +957,10 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
 
 
 
-def _capacity_vector(ratios, R: int) -> np.ndarray:
+def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
     """k with governing ratio 1 for every section at once (Illinois regula falsi, bracketed)."""
     g0, _ = ratios(np.zeros(R))
-    g1, _ = ratios(np.ones(R))
+    g1 = ratios(np.ones(R))[0] if g1 is None else g1  # the ratios at the entered loads
     live = g0 <= 1.0
     # the ratios are convex in k (a max of |a + k b|), so the chord through k = 0 and 1
     # brackets the root from the safe side; a small margin and a check keep it honest
