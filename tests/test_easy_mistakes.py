@@ -322,3 +322,17 @@ def test_sizing_an_aluminium_job_over_steel_shapes_says_so():
     assert "steel shapes" not in res.material_note
     steel = size(parse_job_text(job_text()), kind="W", with_capacity=False)
     assert "steel shapes" not in steel.material_note
+
+
+def test_sizing_headline_warns_when_the_lightest_cannot_be_rated():
+    # trolley wheels on a tube wall: the flange check (CMAA 74 / AISC Design Guide 7) covers
+    # I-shapes only, so the lightest HSS that passes what is checked is NOT RATED, and the
+    # headline must not read as a plain recommendation
+    from pathlib import Path
+
+    preset = Path(__file__).resolve().parent.parent / "presets" / "monorail-trolley.toml"
+    out = run("size", str(preset), "--kind", "HSS").stdout
+    head = out[out.index("lightest that passes"):]
+    assert head.splitlines()[1].startswith("!! but it passes only the checks that were made")
+    out = run("size", str(preset), "--kind", "W").stdout  # an I-shape: rated, no such line
+    assert "passes only the checks that were made" not in out

@@ -30,6 +30,11 @@ def render(res: SizeResult, top: int = 15) -> str:
     if res.lightest:
         lines.append(f"lightest that passes: {res.lightest.designation} "
                      f"({units.fmt(res.lightest.weight, 'mass_per_length', sy)})")
+        if getattr(res.lightest, "not_rated", ()):
+            lines += textwrap.wrap(
+                "!! but it passes only the checks that were made: a limit state it calls for "
+                "is not checked (see NOT RATED below), so do not choose it on this sweep "
+                "alone; try another kind, or have it checked", 78, subsequent_indent="!! ")
     if res.cheapest:
         c = res.cheapest
         cost = c.cost(job.length)
