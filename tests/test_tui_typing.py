@@ -334,3 +334,28 @@ async def test_a_missing_printer_command_says_what_to_do(tmp_path, monkeypatch):
         notes = [str(n.message) for n in app._notifications]
         assert any("no-such-printer-command-here" in n and "SHOPBEAM_PRINT" in n
                    for n in notes), notes
+
+
+@sync
+async def test_a_save_right_after_typing_does_not_quote_the_old_answer(tmp_path, slow_solver):
+    # the answer shown is for the text before the last keys (a solve is on its way): the save
+    # message must not count that old answer's problems as the saved job's
+    job = tmp_path / "demo.toml"
+    shutil.copy(PRESETS / "demo.toml", job)
+    app = make_app(job, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f2")
+        await settle(pilot)
+        await send(pilot, TAB, fast=True)
+        await settle(pilot)
+        assert getattr(app.focused, "value", None) == app.job_screen.session.doc.get("title"), app.focused
+        await send(pilot, END + CTRL_U, fast=True)  # an empty title: a problem
+        await settle(pilot)
+        assert app.job_screen.session.evaluation.errors
+        await send(pilot, "Rack beam" + "\x13", fast=True)  # the fix, then ctrl+s at once
+        await pilot.pause()
+        notes = [str(n.message) for n in app._notifications if "Saved" in str(n.message)]
+        assert notes and not any("still has" in n for n in notes), notes
+        await settle(pilot)
+    assert 'title = "Rack beam"' in job.read_text(encoding="utf-8")

@@ -746,8 +746,12 @@ class JobScreen(Screen):
 
     def _saved(self, path, then=None) -> None:
         s = self.session
-        n = len(s.evaluation.errors)
+        # the shown answer may be older than what was saved (a save right after typing): then
+        # its problem count would be about other text, so none is given
+        n = 0 if s.stale else len(s.evaluation.errors)
         extra = f" - the job still has {n} problem{'s' if n != 1 else ''}" if n else ""
+        if s.stale:
+            extra = " - checking your last edit now (see the summary line)"
         where = str(Path(path).resolve() if path is not None else s.path)
         name = f"{s.label} " if s.label != where else ""
         self.notify(f"Saved {name}to {where}{extra}", severity="warning" if n else
