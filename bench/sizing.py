@@ -13,7 +13,6 @@ import statistics
 import subprocess
 import sys
 import time
-import tracemalloc
 from pathlib import Path
 
 HERE = Path(__file__).resolve().parent
@@ -24,7 +23,7 @@ sys.path.insert(0, str(ROOT / "tests"))
 from shopbeam.design import sizing  # noqa: E402
 from shopbeam.jobs.jobfile import load_job, parse_job_text  # noqa: E402
 
-from loads import shelf_text  # noqa: E402  (bench/loads.py)
+from loads import peak_mib, shelf_text  # noqa: E402  (bench/loads.py)
 from test_sizing_exact import JOBS  # noqa: E402  (the jobs of the exactness tests)
 
 
@@ -38,14 +37,6 @@ def timed(fn, runs: int) -> tuple[float, float, object]:
         wall.append(time.perf_counter() - t)
         cpu.append(time.process_time() - c)
     return statistics.median(wall), statistics.median(cpu), out
-
-
-def peak_mib(fn) -> float:
-    tracemalloc.start()
-    fn()
-    peak = tracemalloc.get_traced_memory()[1]
-    tracemalloc.stop()
-    return peak / 2**20
 
 
 def process_s(args, runs: int) -> float:

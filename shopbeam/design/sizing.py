@@ -315,21 +315,18 @@ def size(job, kind: str | None = None, max_depth: float | None = None, stock=Non
                   confirm, stock, material_note, t0)
 
 
-# catalog sources whose shapes are rolled or welded steel shapes (not bar or tube stock sizes)
-STEEL_SHAPE_SOURCES = ("AISC Shapes Database", "EN 10365")
-
-
 def _steel_shapes_note(job, cands) -> str:
     """Said when an aluminium or stainless job sweeps shapes of the AISC (steel) catalog: the
     sweep keeps the job's material, but an extrusion of the same name has other dimensions."""
     mkind = getattr(job.material, "kind", "")
     if mkind not in ("aluminum", "stainless") or not any(
-            str(getattr(c[1], "source", "")).startswith(STEEL_SHAPE_SOURCES) for c in cands):
+            catalog.is_steel_shape(c[1]) for c in cands):
         return ""
-    metal = "aluminium" if mkind == "aluminum" else mkind
-    return (f"these are steel shapes (AISC Shapes Database v15.0, EN 10365) with the job's {metal} "
-            f"{job.material.key}: {'an' if metal[0] in 'aeiou' else 'a'} {metal} shape of the same name has other dimensions, so "
-            "check the one you order as an inline [beam.section] with the mill's dimensions")
+    metal = "an aluminium" if mkind == "aluminum" else "a stainless"
+    return (f"these are steel shapes (AISC Shapes Database v15.0, EN 10365) with the job's "
+            f"{metal.split()[1]} {job.material.key}: {metal} shape of the same name has other "
+            "dimensions, so check the one you order as an inline [beam.section] with the "
+            "mill's dimensions")
 
 
 def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note="", t0=None,

@@ -28,7 +28,7 @@ from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, Basis)
-from shopbeam.members.catalog import is_wood_size
+from shopbeam.members.catalog import is_steel_shape, is_wood_size
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.resolve import resolve_section
 
@@ -831,8 +831,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "(\"A500-C\", \"A500-B\") and pipe to A53 (\"A53-B\"); the check uses "
                f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
                where)
-    elif mkind in ("aluminum", "stainless") and str(getattr(section, "source", "")).startswith(
-            ("AISC Shapes Database", "EN 10365")):
+    elif mkind in ("aluminum", "stainless") and is_steel_shape(section):
         metal = "aluminium" if mkind == "aluminum" else mkind
         r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
                f"material {key!r} is {metal}: {metal} shapes of a similar name have other "

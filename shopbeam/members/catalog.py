@@ -327,6 +327,16 @@ def is_wood_size(sec: Section) -> bool:
     return is_lumber_size(sec) or (sec.shape == "rect-bar" and "LVL size" in (sec.source or ""))
 
 
+# catalog sources whose shapes are rolled or welded steel shapes (not bar or tube stock sizes
+# computed from their dimensions): an aluminium or stainless shape of the same name differs
+STEEL_SHAPE_SOURCES = ("AISC Shapes Database", "EN 10365")
+
+
+def is_steel_shape(sec: Section) -> bool:
+    """True for a catalog shape that exists as a steel shape only (AISC, EN 10365)."""
+    return (sec.source or "").startswith(STEEL_SHAPE_SOURCES)
+
+
 def lumber_nominal(sec: Section) -> tuple[int, int] | None:
     """(nominal thickness, nominal width) in inches of a catalog lumber size, else None."""
     if sec.shape != "rect-bar" or "dressed lumber size" not in (sec.source or ""):

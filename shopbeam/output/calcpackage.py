@@ -189,8 +189,9 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
 
     p = present(result)
     verdict = ("all checks PASS" if result.ok else "the member FAILS: " + ", ".join(p.failing))
-    if upward_note(job):
-        verdict += ". " + upward_note(job).rstrip(".")  # the page adds the full stop
+    note = upward_note(job)
+    if note:
+        verdict += ". " + note.rstrip(".")  # the page adds the full stop
 
     diags = list(sol.diagnostics)
     self_checks = [(bool(d.ok), d.name, d.detail) for d in diags]

@@ -10,7 +10,7 @@ from shopbeam.cautions import banner, cautions_for
 from shopbeam.design.capacity import CapacityResult, max_load_lines
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.escapes import shown
-from shopbeam.output.present import present_capacity
+from shopbeam.output.present import present_capacity, warnings_headline
 
 
 def render(res: CapacityResult, width: int = 78) -> str:
@@ -19,12 +19,8 @@ def render(res: CapacityResult, width: int = 78) -> str:
     lines = textwrap.wrap(f"shopbeam capacity: {job.title}", width, subsequent_indent="  ")
     lines.append("=" * width)
     lines += textwrap.wrap(banner(job.tags, job.lifting), width)
-    warned = [w for w in job.warnings if w.warning]
-    if warned:  # a slip in the input is read before the answer, not after it
-        keys = ", ".join(dict.fromkeys(w.key for w in warned))
-        lines += textwrap.wrap(f"{len(warned)} INPUT WARNING(S) on {keys}: read them under "
-                               "INPUT WARNINGS below before posting a load", width,
-                               initial_indent="!! ", subsequent_indent="!! ")
+    lines += textwrap.wrap(warnings_headline(job, "posting a load"), width,
+                           initial_indent="!! ", subsequent_indent="!! ")
     lines.append("")
     k = res.factor
     if math.isfinite(k):

@@ -189,6 +189,17 @@ def present(result: Result) -> Presentation:
         failing=tuple(c.name for c in result.checks if not c.ok))
 
 
+def warnings_headline(job, before: str) -> str:
+    """One line for the top of a page when the job has input warnings, naming their keys, so a
+    slip in the input is read before the answer ("" when there are none)."""
+    warned = [w for w in job.warnings if w.warning]
+    if not warned:
+        return ""
+    keys = ", ".join(dict.fromkeys(w.key for w in warned))
+    return (f"{len(warned)} INPUT WARNING(S) on {keys}: read them under INPUT WARNINGS below "
+            f"before {before}")
+
+
 def upward_note(job) -> str:
     """One line when force loads push UP with no ``uplift = true`` (a forgotten minus sign is
     the usual cause): the checks then answer for loads the shop did not mean. "" otherwise."""

@@ -9,7 +9,7 @@ import textwrap
 
 from shopbeam import units
 from shopbeam.design.analysis import Result
-from shopbeam.output.present import present, upward_note
+from shopbeam.output.present import present, upward_note, warnings_headline
 
 WIDTH = 78
 
@@ -63,11 +63,9 @@ def render(result: Result) -> str:
         lines.append(f"job file: {job.path}")
     lines.append("=" * WIDTH)
     lines += caution_block(result.cautions[:1])
-    warned = [w for w in job.warnings if w.warning]
-    if warned:  # a slip in the input is read before the answer, not after it
-        keys = ", ".join(dict.fromkeys(w.key for w in warned))
-        lines += _wrap(f"{len(warned)} INPUT WARNING(S) on {keys}: read them under INPUT "
-                       "WARNINGS below before using these figures", "!! ")
+    head = warnings_headline(job, "using these figures")
+    if head:
+        lines += _wrap(head, "!! ")
     lines.append("")
     sec, mat = job.section, job.material
     lines.append("MEMBER")
@@ -139,8 +137,9 @@ def render(result: Result) -> str:
         for s in c.spans:
             lines.append(f"      {s}")
     lines.append(f"  governing: {p.governing} -> {p.verdict}")
-    if upward_note(job):
-        lines += _wrap(upward_note(job), "  !! ")
+    note = upward_note(job)
+    if note:
+        lines += _wrap(note, "  !! ")
     lines.append("")
 
     lines.append("SELF-CHECKS (run on every solve)")
