@@ -336,3 +336,56 @@ def test_sizing_headline_warns_when_the_lightest_cannot_be_rated():
     assert head.splitlines()[1].startswith("!! but it passes only the checks that were made")
     out = run("size", str(preset), "--kind", "W").stdout  # an I-shape: rated, no such line
     assert "passes only the checks that were made" not in out
+
+
+# ------------------------------------------------------------------ a hoist beam not tagged
+@pytest.mark.parametrize("title, tags, found", [
+    ("Hoist beam, bay 2", "", "the title says 'Hoist'"),
+    ("Shop monorail", "", "the title says 'monorail'"),
+    ("Arm 3", '["rack", "jib"]', "tag 'jib'"),
+    ("Chain fall beam", "", "the title says 'Chain fall'"),
+])
+def test_a_job_that_reads_like_a_lifting_device_is_warned_and_not_rated(title, tags, found):
+    from shopbeam.design.capacity import capacity
+
+    text = job_text().replace('title = "shelf"', f'title = "{title}"'
+                              + (f"\ntags = {tags}" if tags else ""))
+    job = parse_job_text(text)
+    w = [p for p in warnings(job) if "reads like a lifting device" in p.message]
+    assert len(w) == 1 and found in w[0].message
+    assert w[0].key == ("tags" if tags else "title")
+    assert 'tags = ["lifting"]' in w[0].message and "not-lifting" in w[0].message
+    cap = capacity(job)
+    assert not cap.rated
+    assert any("reads like a lifting device" in r for r in cap.not_rated)
+
+
+@pytest.mark.parametrize("title, tags", [
+    ("Hoist beam, bay 2", '["lifting"]'),       # tagged: the lifting checks apply
+    ("Hoist beam, bay 2", '["not-lifting"]'),   # the user says it is not one
+    ("Forklift aisle shelf", ""),               # 'forklift' is not the word 'lift'
+    ("Crank shelf", ""),
+])
+def test_a_tagged_or_plain_job_gets_no_lifting_hint(title, tags):
+    from shopbeam.design.capacity import capacity
+
+    text = job_text().replace('title = "shelf"', f'title = "{title}"'
+                              + (f"\ntags = {tags}" if tags else ""))
+    job = parse_job_text(text)
+    assert not [p for p in warnings(job) if "reads like a lifting device" in p.message]
+    assert job.lifting_hint == ""
+    assert capacity(job).rated
+
+
+def test_trolley_wheels_without_the_lifting_tag_are_not_rated(tmp_path):
+    extra = ('[[moving]]\nloads = ["-500 lbf", "-500 lbf"]\nspacing = ["1 ft"]\n'
+             'travel = ["0 ft", "6 ft"]\nlabel = "cart"')
+    p = tmp_path / "job.toml"
+    p.write_text(job_text(extra_load=extra))
+    out = run("capacity", str(p), "--json")
+    assert out.returncode == 0, out.stderr
+    data = json.loads(out.stdout)
+    assert data["rated"] is False
+    assert any("trolley wheels" in r for r in data["not_rated_reasons"])
+    label = run("rating", str(p)).stdout
+    assert "NOT RATED" in label

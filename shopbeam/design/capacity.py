@@ -131,6 +131,11 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
         out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
                    "(forces are + up, a weight is negative): " + ", ".join(upward)
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
+    hint = getattr(job, "lifting_hint", "")
+    if hint:
+        out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
+                   "impact allowance and the lifting deflection limit were not applied. Add "
+                   "tags = [\"lifting\"], or the tag \"not-lifting\" if it is not one")
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")

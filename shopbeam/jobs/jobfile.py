@@ -120,6 +120,9 @@ class Job:
     # force loads (and wheels) that push UP with no `uplift = true`: almost always a forgotten
     # minus sign. Each entry is "loads[i] (label)"; a capacity or rating is not posted on them.
     upward: tuple[str, ...] = ()
+    # what makes an untagged job read like a lifting device (words, tags, wheels); a rating is
+    # not posted on it until it is tagged lifting, or tagged not-lifting (see _lifting_hint)
+    lifting_hint: str = ""
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -764,6 +767,51 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
     return [ld.key + (f" ({ld.label})" if ld.label else "") for ld, _shown in up]
 
 
+# Words that name a lifting device or its parts; a job that uses one but is not tagged
+# lifting would be checked without the impact allowance and the stricter deflection limit.
+NOT_LIFTING = "not-lifting"  # the tag that says a job that reads like one is not a lifting device
+_LIFTING_WORDS = re.compile(
+    r"\b(hoists?|hoisting|monorails?|jib|jibs|cranes?|trolley|trolleys|chain ?falls?|"
+    r"lifting|lift beam|spreader|davit|gantry|below[- ]the[- ]hook|rigging|block and tackle)\b",
+    re.IGNORECASE)
+
+
+def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
+    """A job that reads like a lifting device but is not tagged one gets a warning, and what
+    gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
+    checked as a shelf, with no impact allowance and no lifting deflection limit. The tag
+    ``not-lifting`` says it is not one."""
+    if is_lifting(tags, criteria.lifting) or NOT_LIFTING in tags:
+        return ""
+    said = []
+    for key, text in (("title", title), ("notes", notes)):
+        m = _LIFTING_WORDS.search(text or "")
+        if m:
+            said.append(f"the {key} says {m.group(0)!r}")
+    for t in tags:
+        m = _LIFTING_WORDS.search(t)
+        if m:
+            said.append(f"tag {t!r}")
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        label = ld.get("label") if _is_table(ld) else None
+        m = _LIFTING_WORDS.search(label) if isinstance(label, str) else None
+        if m:
+            said.append(f"loads[{i}] is labelled {label!r}")
+            break
+    if moving:
+        said.append("it has trolley wheels ([[moving]])")
+    if not said:
+        return ""
+    key = "tags" if tags else "title"
+    hint = "; ".join(said)
+    r.warn(f"this reads like a lifting device ({hint}) but it is not tagged lifting, so it is "
+           "checked like a shelf: no impact allowance and no lifting deflection limit, and no "
+           "rating is posted. If it carries a hoist, trolley or other lifting device, add "
+           "tags = [\"lifting\"] (or name the device with [criteria] lifting = ...); if it "
+           f"does not, add the tag \"{NOT_LIFTING}\"", key)
+    return hint
+
+
 def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
     """A wheel that pushes up is a forgotten minus sign (a wheel can only bear down)."""
     out = []
@@ -1091,6 +1139,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
     upward += _upward_wheels(r, moving, system)
+    lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
                 section.shape == "i-beam" and section.axis == "strong"):
@@ -1117,7 +1166,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         self_weight=self_weight, members=members, levels=levels, welded=welded, braced=braced,
         braces=braces,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
-        bearings=bearings, hung=tuple(hung), upward=tuple(upward),
+        bearings=bearings, hung=tuple(hung), upward=tuple(upward), lifting_hint=lifting_hint,
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
