@@ -389,3 +389,11 @@ def test_trolley_wheels_without_the_lifting_tag_are_not_rated(tmp_path):
     assert any("trolley wheels" in r for r in data["not_rated_reasons"])
     label = run("rating", str(p)).stdout
     assert "NOT RATED" in label
+
+
+def test_an_absolute_deflection_limit_looser_than_span_over_100_is_warned():
+    job = parse_job_text(job_text(criteria='deflection = "1.5 in"'))  # 6 ft: L/48
+    w = [p for p in warnings(job) if p.key == "criteria.deflection"]
+    assert len(w) == 1 and "looser than any common limit" in w[0].message
+    job = parse_job_text(job_text(criteria='deflection = "0.5 in"'))  # L/144: usual
+    assert not [p for p in warnings(job) if p.key == "criteria.deflection"]

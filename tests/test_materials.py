@@ -132,6 +132,15 @@ def test_inline_material():
      "plausible"),
     ({"e": "29000 ksi", "fy": "36 ft", "density": "490 lb/ft^3"}, "beam.material.fy",
      "stress"),
+    # unit slips: psi for ksi, lb/in^3 for lb/ft^3 (plausible ranges: common practice)
+    ({"e": "29000 ksi", "fy": "50 psi", "density": "490 lb/ft^3"}, "beam.material.fy",
+     "not a plausible strength"),
+    ({"e": "1600 ksi", "fb": "900 ksi", "density": "35 lb/ft^3"}, "beam.material.fb",
+     "not a plausible strength"),
+    ({"e": "29000 ksi", "fy": "50 ksi", "density": "490 lb/in^3"}, "beam.material.density",
+     "not a plausible density"),
+    ({"e": "29000 ksi", "fy": "50 ksi", "density": "0.49 lb/ft^3"}, "beam.material.density",
+     "not a plausible density"),
     (42, "beam.material", "table"),
 ])
 def test_inline_errors(spec, key, words):
@@ -161,3 +170,12 @@ def test_cmd_materials_lists_every_material(capsys):
     assert cmd_materials(argparse.Namespace(json=False, units="si")) == 0
     out = capsys.readouterr().out
     assert "248.2 MPa" in out  # A36: 36 ksi = 248.2 MPa
+
+
+@pytest.mark.parametrize("spec", [
+    {"e": "1600 ksi", "fb": "875 psi", "density": "35 lb/ft^3"},    # No. 2 lumber Fb
+    {"e": "29000 ksi", "fy": "100 ksi", "density": "490 lb/ft^3"},  # A514 plate
+    {"e": "10100 ksi", "fy": "35 ksi", "density": "0.0975 lb/in^3"},  # 6061-T6 as per in^3
+])
+def test_plausible_inline_materials_are_taken(spec):
+    assert resolve_material(spec).fy > 0

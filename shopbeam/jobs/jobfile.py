@@ -1139,6 +1139,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
     upward += _upward_wheels(r, moving, system)
+    if (length is not None and criteria.deflection_abs is not None
+            and criteria.deflection_abs > length / LOOSEST_COMMON_RATIO):
+        r.warn(f"deflection = {criteria.deflection!r} is more than 1/{LOOSEST_COMMON_RATIO:g} "
+               f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
+               "common limit (racks, shelves and floors use L/180 to L/360): check the number "
+               "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (

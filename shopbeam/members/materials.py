@@ -322,6 +322,19 @@ def _inline(spec: Mapping, key: str) -> Material:
     if vals["e"] < 1e9 or vals["e"] > 1e12:
         raise InputError(f"e = {spec['e']!r} is not a plausible elastic modulus (steel is "
                          "29000 ksi, aluminium 10100 ksi, lumber about 1600 ksi)", f"{key}.e")
+    # Plausible ranges (common practice, no source): yield of any structural metal or bending
+    # strength of any graded lumber lies between about 2 MPa (290 psi) and 2000 MPa (290 ksi);
+    # any solid a shop makes a beam of weighs between about 50 and 25,000 kg/m^3 (balsa to
+    # tungsten). Outside them a unit was slipped ("50 psi" for 50 ksi, lb/in^3 for lb/ft^3).
+    if not 2e6 <= vals["fy"] <= 2e9:
+        raise InputError(f"fy = {spec.get('fy', spec.get('fb'))!r} is not a plausible strength "
+                         "(mild steel 36 ksi, A500-C 50 ksi, 6061-T6 35 ksi, lumber Fb about "
+                         "0.9 ksi): check the unit, e.g. \"50 ksi\" rather than \"50 psi\"",
+                         f"{key}.fy" if "fy" in spec else f"{key}.fb")
+    if not 50.0 <= vals["density"] <= 25000.0:
+        raise InputError(f"density = {spec['density']!r} is not a plausible density (steel "
+                         "490 lb/ft^3, aluminium 169 lb/ft^3, lumber about 35 lb/ft^3): check the "
+                         "unit, e.g. lb/ft^3 rather than lb/in^3", f"{key}.density")
     if vals["fy"] >= vals["e"]:
         raise InputError("fy is not less than e: check the units", f"{key}.fy")
     if "fu" in vals and vals["fu"] < vals["fy"]:
