@@ -182,3 +182,107 @@ def test_issue_monorail_is_governed_by_the_wheels():
     assert res.governing.name == "wheel flange bending"
     cap = capacity(parse_job_text(text))
     assert 4000 * cap.factor < 6000
+
+
+# ------------------------------------------------------------------ a hoist parked at one spot
+def parked(loads, section="W12x26", material="A992", criteria="impact = 0"):
+    """The W12x26 monorail with its hoist as [[loads]] point loads at mid-span."""
+    return f"""schema = 1
+title = "W12x26 monorail"
+tags = ["lifting"]
+[beam]
+length = "16 ft"
+section = "{section}"
+material = "{material}"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "16 ft"
+type = "roller"
+{loads}
+[criteria]
+{criteria}
+"""
+
+
+RATED = '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-2000 lbf"\nlabel = "rated load"\n'
+HOIST = ('[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-100 lbf"\nlabel = "hoist"\n'
+         'case = "dead"\n')
+
+
+def test_a_parked_hoist_gets_the_lateral_force_by_hand():
+    # Same beam and numbers as the moving hand check above (the hoist parked at mid-span,
+    # H = 20 % x 2000 lbf at the bottom flange), but a parked load has a moment diagram, so
+    # F1-1 gives Cb = 12.5 / (2.5 + 3 x 0.5 + 4 x 1 + 3 x 0.5) = 1.3158 (AISC 360-16 F1-1):
+    # Fcr = 1.3158 x 31.136 = 40.97 ksi < Fy, Mcx = 40.97 x 33.4 / 1.67 = 819.4 kip*in;
+    # H1-1b: 96.0 / 819.4 + 19.2 / 119.80 = 0.1172 + 0.1603 = 0.2775
+    c = _check(parked(RATED), "lateral trolley force")
+    assert c.ratio == pytest.approx(0.2775, abs=1.5e-3)
+    assert c.at / 0.3048 == pytest.approx(8.0, abs=1e-6)
+
+
+def test_the_lateral_force_counts_the_hoist_weight_but_not_the_impact():
+    # 25 % impact and a 100 lbf hoist: Mx = (1.25 x 2000 + 100) x 192 / 4 = 124800 lbf*in,
+    # H = 20 % x (2000 + 100) = 420 lbf, My = 420 x 192 / 4 = 20160 lbf*in;
+    # 124.8 / 819.4 + 20.16 / 119.80 = 0.1523 + 0.1683 = 0.3206 (Mcx, Mcy as above)
+    c = _check(parked(RATED + HOIST, criteria="impact = 0.25"), "lateral trolley force")
+    assert c.ratio == pytest.approx(0.3206, abs=1.5e-3)
+
+
+def test_a_parked_hoist_hangs_from_the_bottom_flange_unless_told_otherwise():
+    res = analyze(parse_job_text(parked(RATED + HOIST)))
+    job = res.job
+    assert job.hung == ("loads[0]", "loads[1]") and job.hung_default == job.hung
+    wheel = next(c for c in res.checks if c.name == "wheel flange bending")
+    # the rated load and the hoist act together on two contacts: P = 2100 / 2 lbf
+    assert wheel.params["P"] / LBF == pytest.approx(1050.0, rel=1e-9)
+    assert "wheels = 4" in wheel.detail
+    # written on top: no flange check, and no note
+    top = parse_job_text(parked(RATED.replace('label', 'flange = "top"\nlabel')))
+    assert top.hung == () and not any(c.name == "wheel flange bending"
+                                       for c in analyze(top).checks)
+
+
+def test_wheels_4_halves_the_wheel_load_of_a_hung_hoist():
+    four = analyze(parse_job_text(parked(RATED.replace("label", "wheels = 4\nlabel") + HOIST)))
+    wheel = next(c for c in four.checks if c.name == "wheel flange bending")
+    assert wheel.params["P"] / LBF == pytest.approx(525.0, rel=1e-9)  # 2100 / 4
+    assert "wheels = 4" in wheel.detail and "P = load / 4" in wheel.detail
+
+
+@pytest.mark.parametrize("extra, key, words", [
+    ("wheels = 3", "loads[0].wheels", "must be 2, 4 or 8"),
+    ('flange = "top"\nwheels = 4', "loads[0].wheels", "changes nothing"),
+])
+def test_bad_or_idle_wheels_get_a_message(extra, key, words):
+    from shopbeam.errors import InputErrors
+
+    text = parked(RATED.replace("label", extra + "\nlabel"))
+    try:
+        job = parse_job_text(text)
+        got = [p for p in job.warnings if p.key == key]
+    except InputErrors as exc:
+        got = [p for p in exc.problems if p.key == key]
+    assert len(got) == 1 and words in got[0].message
+
+
+def test_a_parked_hoist_on_a_tube_is_not_rated_for_the_lateral_force():
+    text = parked(RATED, section="HSS8x4x1/4", material="A500-C")
+    cap = capacity(parse_job_text(text))
+    assert not cap.rated
+    assert any("lateral trolley force" in r for r in cap.not_rated)
+    # a hand-geared device has no lateral force: rated
+    hand = text.replace("impact = 0", 'lifting = "hand-geared-monorail"')
+    assert capacity(parse_job_text(hand)).rated
+
+
+def test_capacity_of_a_parked_hoist_respects_the_lateral_force():
+    # k with H1-1b = 1: k x 0.2775 = 1 -> k = 3.604 (bending alone would give
+    # 819.4 / 96.0 = 8.5); the flange under two contacts may govern first
+    cap = capacity(parse_job_text(parked(RATED)))
+    lat = next(c for c in cap.checks if c.name == "lateral trolley force")
+    assert lat.ratio <= 1.0 + 1e-6
+    assert cap.factor <= 1.0 / 0.2775 * (1 + 2e-3)
+    assert cap.governing.name in ("lateral trolley force", "wheel flange bending")

@@ -173,11 +173,29 @@ def wheel_check(job, sol, sec, mat, global_allow=None):
                      for ld in sol.beam.loads
                      if (ld.key or "") == ws.key and ld.kind == "point"]
     hung = set(getattr(job, "hung", ()) or ())
-    contacts += [(ld, 2, DEFAULT_WHEEL_EDGE,
-                  "point load hung from the bottom flange, taken as a beam clamp or trolley "
-                  "bearing on both flange tips 1/4 in in (P = load / 2)")
-                 for ld in sol.beam.loads
-                 if ld.kind == "point" and ld.value and (ld.key or "") in hung]
+    # hung loads at one place (the rated load and the hoist's own weight) act on the flange
+    # together: one contact carrying their sum
+    # (wheels written on any of them count for all; none written: 2, a beam clamp or a
+    # two-wheel trolley, the most demanding fit)
+    given = getattr(job, "contacts", None) or {}
+    together: dict[float, list] = {}
+    for ld in sol.beam.loads:
+        if ld.kind == "point" and ld.value and (ld.key or "") in hung:
+            got = together.setdefault(ld.at, [ld, 0])
+            if got[0] is not ld:
+                got[0] = replace(got[0], value=got[0].value + ld.value)
+            got[1] = max(got[1], given.get(ld.key or "", 0))
+    for ld, n in together.values():
+        if not ld.value:
+            continue
+        if n:
+            words = (f"point load hung from the bottom flange on {n} trolley wheels or jaws "
+                     f"(wheels = {n}), each 1/4 in in from a flange tip (P = load / {n})")
+        else:
+            n, words = 2, ("point load hung from the bottom flange, taken as a beam clamp or "
+                           "two-wheel trolley bearing on both flange tips 1/4 in in (P = load "
+                           "/ 2); write wheels = 4 on it for a four-wheel trolley")
+        contacts.append((ld, n, DEFAULT_WHEEL_EDGE, words))
     if not contacts:
         return None
     d = sec.dims
@@ -234,18 +252,27 @@ def flange_weak_strength(sec, mat) -> tuple[float, str]:
 
 def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
     """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
-    if prof is None or not prof.lateral or not job.moving or sec.shape != "i-beam" \
-            or sec.axis != "strong":
+    if prof is None or not prof.lateral or sec.shape != "i-beam" or sec.axis != "strong":
         return None
-    mv = job.member_moving()[0]
-    wheels = [ld for ld in sol.beam.loads if (ld.key or "") == mv.key and ld.kind == "point"]
-    if len(wheels) != len(mv.live):
-        return None
-    lat = []
-    for ld, f, dd in zip(wheels, mv.live, mv.dead):
-        # the wheel carries dd + k (1 + impact) f; the lateral force is 20 % of k f + dd
-        live = (ld.value - dd) / (1 + impact)
-        lat.append(Load("point", at=ld.at, value=prof.lateral * abs(live + dd)))
+    if job.moving:
+        mv = job.member_moving()[0]
+        wheels = [ld for ld in sol.beam.loads if (ld.key or "") == mv.key and ld.kind == "point"]
+        if len(wheels) != len(mv.live):
+            return None
+        lat = []
+        for ld, f, dd in zip(wheels, mv.live, mv.dead):
+            # the wheel carries dd + k (1 + impact) f; the lateral force is 20 % of k f + dd
+            live = (ld.value - dd) / (1 + impact)
+            lat.append(Load("point", at=ld.at, value=prof.lateral * abs(live + dd)))
+    else:
+        # a hoist parked at fixed places: every point load of the job is rated load (live,
+        # carrying k (1 + impact)) or hoist and trolley weight (dead); the lateral force is
+        # 20 % of their sum where they hang, without the impact allowance
+        wheels = hoist_loads(sol)
+        if not wheels:
+            return None
+        lat = [Load("point", at=ld.at, value=prof.lateral * abs(
+            ld.value if ld.case == "dead" else ld.value / (1 + impact))) for ld in wheels]
     flange = solve(replace(sol.beam, ei=1.0, loads=tuple(lat)))
     mny, how = flange_weak_strength(sec, mat)
     mcy = mny / 1.67
@@ -274,6 +301,16 @@ def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
         params={"Mx": mx, "Mcx": mcx, "My": my, "Mcy": mcy})
 
 
+def hoist_loads(sol) -> list:
+    """The point loads a lifting job's hoist puts on the member (its [[loads]] entries)."""
+    return [ld for ld in sol.beam.loads
+            if ld.kind == "point" and ld.value and (ld.key or "").startswith("loads")]
+
+
+def _static_hoist(job) -> bool:
+    return not job.moving and any(ld.kind == "point" and ld.value for ld in job.loads)
+
+
 # ------------------------------------------------------------------ words
 def lifting_notes(job, prof: Profile | None) -> list[str]:
     """The profile named in the report, and the longitudinal force as a quantified caution."""
@@ -298,7 +335,12 @@ def lifting_notes(job, prof: Profile | None) -> list[str]:
                        "AISC Design Guide 7 give them for the interior; end values are larger, "
                        "from memory). Fit end stops that keep the wheels at least a flange "
                        "width from the end, or close the end with a plate.")
-    if prof.lateral and job.moving and not _i_shape(job.section):
+    default = getattr(job, "hung_default", ())
+    if default and _i_shape(job.section):
+        out.append("Point loads " + ", ".join(default) + " are taken as the hoist hanging from "
+                   "the bottom flange (a trolley or beam clamp), so the flange is checked under "
+                   "them; write flange = \"top\" on a load that bears on the top flange.")
+    if prof.lateral and (job.moving or _static_hoist(job)) and not _i_shape(job.section):
         out.append(f"Lateral force {prof.lateral:.0%} of rated load + hoist + trolley (ASCE "
                    "7-16 4.9.4): weak-axis bending and torsion of this section are not checked.")
     return out
@@ -310,15 +352,23 @@ def _i_shape(sec) -> bool:
 
 def lifting_unchecked(job, sec) -> list:
     """Trolley-wheel and lateral-force limit states of sections these checks do not cover."""
-    if not job.moving or not (job.lifting or getattr(job.criteria, "lifting", "")):
+    if not (job.lifting or getattr(job.criteria, "lifting", "")) or _i_shape(sec):
         return []
-    if _i_shape(sec):
+    prof = profile_of(job)
+    if not job.moving:
+        if prof and prof.lateral and _static_hoist(job):
+            return [Unchecked("lateral trolley force (weak-axis bending and torsion)",
+                              f"{prof.lateral:.0%} of rated load + hoist + trolley at the hoist "
+                              f"is not checked for a {sec.shape} ({sec.axis} axis): only the "
+                              "bottom flange of an I-beam is checked for it (AISC Design Guide "
+                              "7); use an I-beam, or name a hand-geared device with [criteria] "
+                              "lifting = \"hand-geared-monorail\" if the trolley is not powered",
+                              "ASCE 7-16 4.9.4; AISC 360-16 H1, H3", blocks_rating=True)]
         return []
     out = [Unchecked("flange local bending under trolley wheels",
                      f"trolley wheels on a {sec.shape} ({sec.axis} axis) are not covered by the "
                      "CMAA 74 / Design Guide 7 method (I-shapes only)",
                      "CMAA 74 70-3.3.2.2; AISC Design Guide 7", blocks_rating=True)]
-    prof = profile_of(job)
     if prof and prof.lateral:
         out.append(Unchecked("lateral trolley force (weak-axis bending and torsion)",
                              f"{prof.lateral:.0%} of rated load + hoist + trolley at the wheels "

@@ -47,7 +47,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
              "repetitive"},
     "supports": {"at", "type", "stiffness", "label", "bearing", "brace"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
-              "patterned", "uplift", "bearing", "flange"},
+              "patterned", "uplift", "bearing", "flange", "wheels"},
     "criteria": {"deflection", "safety_factor", "basis", "impact", "duration",
                  "live_deflection", "lifting", "category"},
     "moving": {"label", "loads", "dead", "spacing", "travel", "case", "wheels_per_axle",
@@ -116,7 +116,11 @@ class Job:
     restrained: bool = False  # beam.restrained: held against twist and sideways movement
     bearing: float | None = None  # m, beam.bearing: bearing length at supports and loads
     bearings: dict = field(default_factory=dict)  # "supports[i]" / "loads[i]" -> bearing, m
+    # "loads[i]" -> how many trolley wheels (or clamp jaws) a hung point load bears on
+    contacts: dict = field(default_factory=dict)
     hung: tuple[str, ...] = ()  # keys of point loads hung from the bottom flange
+    # of those, the ones hung by default (a lifting job's I-beam, no `flange` written)
+    hung_default: tuple[str, ...] = ()
     # force loads (and wheels) that push UP with no `uplift = true`: almost always a forgotten
     # minus sign. Each entry is "loads[i] (label)"; a capacity or rating is not posted on them.
     upward: tuple[str, ...] = ()
@@ -1112,6 +1116,15 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         r.error(f"{len(raw_loads)} loads is more than shopbeam takes ({MAX_LOADS}); "
                 "combine loads or split the job", "loads")
         raw_loads = []
+    # on a lifting device a point load with no `flange` is the hoist: it hangs from the bottom
+    # flange of an I-beam (trolley or beam clamp), so the flange is checked under it
+    crit_raw = data.get("criteria")
+    hang_by_default = (section is not None and section.shape == "i-beam"
+                       and section.axis == "strong"
+                       and is_lifting(tags, crit_raw.get("lifting", "")
+                                      if isinstance(crit_raw, dict) else ""))
+    hung_default: list[str] = []
+    contacts: dict[str, int] = {}
     for i, ld in enumerate(raw_loads):
         got = _read_load(r, i, ld, length, conv)
         if got is not None and _plausible_load(r, got):
@@ -1123,6 +1136,21 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     bearings[f"loads[{i}]"] = b
             if ld.get("flange") == "bottom":
                 hung.append(f"loads[{i}]")
+            elif "flange" not in ld and hang_by_default:
+                hung.append(f"loads[{i}]")
+                hung_default.append(f"loads[{i}]")
+            if "wheels" in ld:
+                n = ld["wheels"]
+                if not (isinstance(n, int) and not isinstance(n, bool) and n in (2, 4, 8)):
+                    r.error("wheels must be 2, 4 or 8: the trolley wheels (or clamp jaws) a "
+                            "hanging load bears on, half on each side of the web, e.g. "
+                            "wheels = 4", f"loads[{i}].wheels")
+                elif f"loads[{i}]" not in hung:
+                    r.warn("wheels says how a load hung from the bottom flange bears on it; "
+                           "this load bears on top (flange = \"bottom\" hangs it), so it "
+                           "changes nothing", f"loads[{i}].wheels")
+                else:
+                    contacts[f"loads[{i}]"] = n
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
@@ -1172,7 +1200,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         self_weight=self_weight, members=members, levels=levels, welded=welded, braced=braced,
         braces=braces,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
-        bearings=bearings, hung=tuple(hung), upward=tuple(upward), lifting_hint=lifting_hint,
+        bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
+        upward=tuple(upward), lifting_hint=lifting_hint,
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
