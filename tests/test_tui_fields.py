@@ -120,7 +120,7 @@ async def test_lifting_profile_and_category_round_trip(tmp_path):
 async def test_lifting_back_to_none_removes_the_profile_and_its_category(tmp_path):
     path = job_copy(tmp_path, "monorail-hoist-beam")
     path.write_text(path.read_text().replace(
-        "[criteria]", '[criteria]\nlifting = "below-the-hook"\ncategory = "A"', 1))
+        'lifting = "hand-geared-monorail"', 'lifting = "below-the-hook"\ncategory = "A"', 1))
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
