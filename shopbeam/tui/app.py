@@ -32,7 +32,7 @@ from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowsView, SectionView, SpanView, load_warnings,
                                 problems_text)
-from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar
+from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar, update_text
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -176,7 +176,7 @@ class JobScreen(Screen):
         bar = title_bar(str(title), s.label, "; ".join(flags), (self.size.width or 80) - 2)
         if bar != getattr(self, "_bar_shown", None):  # unchanged: no redraw
             self._bar_shown = bar
-            self.query_one("#titlebar", Static).update(Text(bar, no_wrap=True))
+            update_text(self.query_one("#titlebar", Static), Text(bar, no_wrap=True))
         vb = self.query_one(ViewBar)
         if self.size.width and self.size.width < 112:
             vb.views = [(v[0], v[1], v[3]) for v in VIEWS]
@@ -201,7 +201,7 @@ class JobScreen(Screen):
             text = self.summary_text()
             if text != getattr(self, "_summary_shown", None):  # unchanged: no redraw
                 self._summary_shown = text
-                summary.update(Text(text))
+                update_text(summary, Text(text))
 
     @staticmethod
     def _tab_stops(view) -> tuple:

@@ -191,7 +191,8 @@ class Field(Horizontal):
         if getattr(self, "_shown", None) == (shown, error):
             return
         self._shown = (shown, error)
-        self.query_one(".field-msg", Static).update(Text(shown))
+        update_text(self.query_one(".field-msg", Static), Text(shown),
+                    fixed_width=not self.has_class("-wide"))
         self.set_class(error, "-error")
 
     def on_input_changed(self, event: Input.Changed) -> None:
@@ -373,6 +374,23 @@ class ViewBar(Static):
         if t.plain != getattr(self, "_shown", None):  # unchanged: no redraw
             self._shown = t.plain
             self.update(t)
+
+
+def update_text(static: Static, text: Text, fixed_width: bool = True) -> None:
+    """Show `text` in `static`, laying the screen out again only when its height could change.
+
+    Every `Static.update` asks for a new layout of the whole screen by default, which costs
+    more than the rest of an answer's redraw; a widget whose width does not follow its text
+    (`fixed_width`) and whose new text has as many lines as the old, none wider than the
+    widget, keeps its size, so a repaint is enough."""
+    from rich.cells import cell_len  # noqa: PLC0415 - small, and only here
+
+    lines = text.plain.split("\n")
+    width = static.content_region.width
+    fits = width > 0 and all(cell_len(line) <= width for line in lines)
+    same = fixed_width and fits and getattr(static, "_lines_shown", None) == len(lines)
+    static._lines_shown = len(lines) if fits else None
+    static.update(text, layout=not same)
 
 
 class Banner(Static):
