@@ -397,3 +397,46 @@ def test_an_absolute_deflection_limit_looser_than_span_over_100_is_warned():
     assert len(w) == 1 and "looser than any common limit" in w[0].message
     job = parse_job_text(job_text(criteria='deflection = "0.5 in"'))  # L/144: usual
     assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
+
+
+# ------------------------------------------------------------------ keys that change nothing
+def _uniform(extra, supports_at=("0 ft", "6 ft"), beam_extra="", tags=""):
+    sup = "\n".join(f'[[supports]]\nat = "{a}"\ntype = "{"pin" if i == 0 else "roller"}"'
+                    for i, a in enumerate(supports_at))
+    return f"""schema = 1
+title = "shelf"
+{tags}
+[beam]
+length = "6 ft"
+section = "HSS4x4x1/4"
+material = "A500-C"
+{beam_extra}
+{sup}
+[[loads]]
+type = "uniform"
+value = "-100 lbf/ft"
+{extra}
+"""
+
+
+@pytest.mark.parametrize("text, key, words", [
+    (_uniform('patterned = true\ncase = "dead"'), "loads[0].patterned", "on a dead load"),
+    (_uniform("patterned = true"), "loads[0].patterned", "single span"),
+    (_uniform("uplift = true"), "loads[0].uplift", "pushes down"),
+    (_uniform("", beam_extra="levels = 3"), "beam.levels", "not tagged rack"),
+])
+def test_a_key_that_changes_nothing_is_warned(text, key, words):
+    job = parse_job_text(text)
+    got = [p for p in warnings(job) if p.key == key]
+    assert len(got) == 1 and words in got[0].message and "changes nothing" in got[0].message
+
+
+@pytest.mark.parametrize("text", [
+    _uniform("patterned = true", supports_at=("0 ft", "4 ft")),  # an overhang: patterns count
+    _uniform("patterned = true", supports_at=("0 ft", "3 ft", "6 ft")),  # two spans
+    _uniform("uplift = true").replace("-100 lbf/ft", "100 lbf/ft"),  # really pushes up
+    _uniform("", beam_extra="levels = 3", tags='tags = ["rack"]'),
+])
+def test_the_same_keys_where_they_matter_are_not_warned(text):
+    job = parse_job_text(text)
+    assert not [p for p in warnings(job) if "changes nothing" in p.message]

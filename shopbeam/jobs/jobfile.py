@@ -23,7 +23,7 @@ from pathlib import Path
 
 from shopbeam import units
 from shopbeam.cautions import is_lifting, normal_tag
-from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
+from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support, segments
 from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
@@ -771,6 +771,45 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
     return [ld.key + (f" ({ld.label})" if ld.label else "") for ld, _shown in up]
 
 
+def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels) -> None:
+    """Keys that change nothing get a warning, so a shop does not believe they were used:
+    `patterned` on a dead load or on a member with a single span, `uplift` on a load that
+    pushes down, and `levels` on a job that is not a rack."""
+    raw = raw_loads if isinstance(raw_loads, list) else []
+    by_key = {ld.key: ld for ld in loads}
+    pieces = None
+    if length is not None:
+        try:
+            pieces = len(segments(Beam(length=length, ei=1.0, supports=tuple(supports))))
+        except Exception:  # noqa: BLE001 - geometry problems are reported elsewhere
+            pieces = None
+    for i, ld in enumerate(raw):
+        if not _is_table(ld):
+            continue
+        key = f"loads[{i}]"
+        got = by_key.get(key)
+        if ld.get("patterned") is True:
+            if ld.get("case") == "dead":
+                r.warn("patterned = true on a dead load changes nothing: a dead load is always "
+                       "there, so it is never left off a span; make it case = \"live\" if it "
+                       "comes and goes", f"{key}.patterned")
+            elif pieces == 1:
+                r.warn("patterned = true changes nothing on a member with a single span and no "
+                       "overhang: the load is either on (which is checked) or off; patterns "
+                       "matter on continuous spans and overhangs", f"{key}.patterned")
+        if ld.get("uplift") is True and got is not None and got.kind != "moment":
+            down = (got.value < 0) if got.kind == "point" else max(got.w1, got.w2) <= 0 < abs(
+                min(got.w1, got.w2))
+            if down:
+                r.warn("uplift = true says this load pushes up, but its value pushes down "
+                       "(negative): it changes nothing; remove it, or check the sign",
+                       f"{key}.uplift")
+    if levels is not None and not any(t in ("rack", "pallet", "shelf") for t in tags):
+        r.warn("levels is the number of beam levels in a rack bay, for the rating label's "
+               "per-bay total; this job is not tagged rack, pallet or shelf, so it changes "
+               "nothing: add tags = [\"rack\"] if it is a rack beam", "beam.levels")
+
+
 # Words that name a lifting device or its parts; a job that uses one but is not tagged
 # lifting would be checked without the impact allowance and the stricter deflection limit.
 NOT_LIFTING = "not-lifting"  # the tag that says a job that reads like one is not a lifting device
@@ -1173,6 +1212,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
+    _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
