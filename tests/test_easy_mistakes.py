@@ -440,3 +440,13 @@ def test_a_key_that_changes_nothing_is_warned(text, key, words):
 def test_the_same_keys_where_they_matter_are_not_warned(text):
     job = parse_job_text(text)
     assert not [p for p in warnings(job) if "changes nothing" in p.message]
+
+
+def test_a_rack_beam_is_told_the_impact_load_is_not_added():
+    from shopbeam.design.analysis import RACK_IMPACT, analyze
+
+    rack = parse_job_text(_uniform("", tags='tags = ["rack"]'))
+    assert RACK_IMPACT in analyze(rack).cautions
+    given = parse_job_text(_uniform("", tags='tags = ["rack"]') + '[criteria]\nimpact = "25%"\n')
+    assert RACK_IMPACT not in analyze(given).cautions
+    assert RACK_IMPACT not in analyze(parse_job_text(_uniform(""))).cautions

@@ -52,6 +52,17 @@ def length_formatter(system: str):
     return lambda x: units.fmt(x, "length", system)
 
 
+# A storage-rack beam is designed for an impact load on top of the product load (ANSI
+# MH16.1 / RMI specification: 25 % of one unit load where it does the most harm, from
+# memory); the entered loads do not include it unless the job says so.
+RACK_IMPACT = ("Storage-rack beams are designed for an impact load besides the product load "
+               "(ANSI MH16.1: 25 % of one unit load, placed where it does the most harm; from "
+               "memory); these checks do not add it. Add it as a live load (the heaviest "
+               "pallet again at 25 %, label \"impact\"), or set [criteria] impact = \"25%\" "
+               "(on every live load: conservative). Beam connectors, upright frames and "
+               "anchors often govern a rack and are not checked here.")
+
+
 def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
     out = cautions_for(job.tags, job.lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
@@ -62,6 +73,8 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
         out.append(f"Loads are shared by {job.members} identical members: each is checked for "
                    f"1/{job.members} of the entered loads. Make sure the load really divides "
                    "evenly (stiff deck, centred loads).")
+    if any(t in ("rack", "pallet") for t in job.tags) and job.criteria.impact is None:
+        out.append(RACK_IMPACT)
     if sol is not None:
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:
