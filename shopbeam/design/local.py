@@ -326,6 +326,7 @@ def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
     """Per item: (allowable, name) when the force pulls and when it bears (inf: none)."""
     pull, bear = [], []
     scale = design_factor_scale(job)
+    lifting, length = job.lifting, job.length
     for it in items:
         at, face, lb, moving = it[:4]
         support = len(it) > 7 and bool(it[7])
@@ -333,8 +334,7 @@ def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
         for sign in (1.0, -1.0):
             f = Force(at, sign if face == "top" else -sign, face, lb, "", moving, support)
             best = (math.inf, "")
-            for name, rn, _eq, omega, _c, _x in limit_states(sec, mat, job.length, f,
-                                                              job.lifting):
+            for name, rn, _eq, omega, _c, _x in limit_states(sec, mat, length, f, lifting):
                 if rn / (omega * scale) < best[0]:
                     best = (rn / (omega * scale), name)
             row.append(best)

@@ -694,10 +694,14 @@ def _batched(job, base, parts, cands, with_capacity):
     ws = job.moving[0] if (moving and lifting) else None
     a_w = (ws.wheel_edge if ws is not None and ws.wheel_edge is not None else DEFAULT_WHEEL_EDGE)
     rs, skipped = [], []
+    per_material: dict[int, tuple] = {}  # candidates mostly share one material: one job each
     for des, sec, mat, price, note in cands:
         try:
-            jm = replace(job, material=mat)
-            b = basis_of(jm)
+            got = per_material.get(id(mat))
+            if got is None or got[0] is not mat:
+                jm = replace(job, material=mat)
+                got = per_material[id(mat)] = (mat, jm, basis_of(jm))
+            _m, jm, b = got
             fl = flexure(sec, mat, b, job.criteria.safety_factor, job.welded)
             sh = shear_strength(sec, mat, b, job.criteria.safety_factor, job.welded)
             fl, sh = _design_factor(jm, sec, fl, sh)  # a below-the-hook beam: BTH-1 Nd

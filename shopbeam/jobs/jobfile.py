@@ -19,6 +19,7 @@ import re
 import tomllib
 from dataclasses import dataclass, field, replace
 from enum import StrEnum
+from functools import cached_property
 from pathlib import Path
 
 from shopbeam import units
@@ -133,9 +134,10 @@ class Job:
     wood: object = None  # shopbeam.members.wood.Service: the wood keys (wood members only)
     project: dict = field(default_factory=dict)  # [project] title-block fields, as text
 
-    @property
+    @cached_property
     def lifting(self) -> bool:
-        """A lifting device: tagged ``lifting`` or naming a ``[criteria] lifting`` profile."""
+        """A lifting device: tagged ``lifting`` or naming a ``[criteria] lifting`` profile
+        (worked out once per job: the checks and sizing ask it many times)."""
         return is_lifting(self.tags, self.criteria.lifting)
 
     @property
