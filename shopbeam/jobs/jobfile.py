@@ -832,7 +832,7 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     for key, text in (("title", title), ("notes", notes)):
         m = _LIFTING_WORDS.search(text or "")
         if m:
-            said.append(f"the {key} says {m.group(0)!r}")
+            said.append(f"{key}: {m.group(0)!r}")
     for t in tags:
         m = _LIFTING_WORDS.search(t)
         if m:
@@ -848,12 +848,11 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     if not said:
         return ""
     key = "tags" if tags else "title"
-    hint = "; ".join(said)
-    r.warn(f"this reads like a lifting device ({hint}) but it is not tagged lifting, so it is "
-           "checked like a shelf: no impact allowance and no lifting deflection limit, and no "
-           "rating is posted. If it carries a hoist, trolley or other lifting device, add "
-           "tags = [\"lifting\"] (or name the device with [criteria] lifting = ...); if it "
-           f"does not, add the tag \"{NOT_LIFTING}\"", key)
+    hint = "; ".join(said[:3]) + ("; ..." if len(said) > 3 else "")
+    r.warn(f"this reads like a lifting device ({hint}) but is not tagged lifting: it is "
+           "checked like a shelf (no impact allowance, no lifting deflection limit) and not "
+           "rated. Add tags = [\"lifting\"] if it carries a hoist or trolley, or the tag "
+           f"\"{NOT_LIFTING}\" if it does not", key)
     return hint
 
 

@@ -948,7 +948,10 @@ class CriteriaView(View):
         self.show_choice_messages(ev, {"criteria.basis": "criteria.basis",
                                        "criteria.lifting": "criteria.lifting",
                                        "criteria.category": "criteria.category"})
-        self.query_one("#crit-basis", Static).update(_text(basis_words(ev)))
+        basis = self.query_one("#crit-basis", Static)
+        # the view's width less its padding and scroll bar (the Static may not be laid out yet)
+        width = max(30, (self.app.size.width or 80) - 6)
+        basis.update(_text(hang(basis_words(ev), width)))
 
     def reading(self, field, ev) -> str:
         if ev.job is None:
@@ -990,6 +993,19 @@ class CriteriaView(View):
             return ("Nd 2.0: predictable loads, mild service (BTH-1, from memory)"
                     if choice.value == "A" else "Nd 3.0: the default (ASME BTH-1)")
         return ""
+
+
+def hang(text: str, width: int) -> str:
+    """Wrap each line of `text` to `width`, continuing an indented line under its own
+    indent (so "  results use: ..." does not wrap back to the first column)."""
+    import textwrap  # noqa: PLC0415 - small
+
+    out = []
+    for line in text.split("\n"):
+        indent = " " * (len(line) - len(line.lstrip(" ")))
+        out.append(textwrap.fill(line, width, subsequent_indent=indent + "  ")
+                   if len(line) > width else line)
+    return "\n".join(out)
 
 
 def basis_words(ev) -> str:
