@@ -313,6 +313,16 @@ async def test_rating_label_is_written_beside_the_job_and_printed(tmp_path, monk
         assert out.is_file()
         text = out.read_text(encoding="utf-8")
         assert "RATING LABEL" in text and "Screening check only" in text
+        # at a printed page's width (78 columns, as `shopbeam capacity` writes), not the
+        # 76 columns the view has at 80x24
+        from shopbeam.jobs.jobfile import load_job
+        from shopbeam.tui.slow import rating_text
+
+        paper = rating_text(load_job(job), date=getattr(app, "label_date", None),
+                            page_width=78)
+        assert text == paper.rstrip("\n") + "\n"
+        assert rating_text(load_job(job), date=getattr(app, "label_date", None),
+                           page_width=76) != paper
         await pilot.press("ctrl+r")  # never over the first file
         await settle(pilot)
         assert (tmp_path / "shelf-rating-2.txt").read_text(encoding="utf-8") == text

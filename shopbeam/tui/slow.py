@@ -26,6 +26,9 @@ from shopbeam.tui.views import View, problems_text
 from shopbeam.tui.widgets import Choice, fit_text
 
 
+PAPER_WIDTH = 78  # a printed page's columns, as the command line writes its pages
+
+
 class _SheetView(View):
     """A view of one slow text (calc sheet, capacity): made in a worker for the job as it
     stands, so the screen never waits; a result for an older version of the job is dropped.
@@ -84,6 +87,7 @@ class _SheetView(View):
 
     @work(thread=True, exclusive=True, group="sheet", exit_on_error=False)
     def make(self, job, result, text: str, width: int) -> None:
+        self._made_from = (job, result, text)
         try:
             out = self.produce(job, result, width)
         except Exception as exc:  # noqa: BLE001 - show it, do not crash the screen
@@ -110,12 +114,36 @@ class _SheetView(View):
             return True
         return False
 
+    def on_paper(self, then) -> None:
+        """Call `then(text)` with the sheet made at a printed page's width (78 columns, as
+        the command line writes it), whatever the width of the view: the text on screen
+        when the view is that wide, else made again in a worker."""
+        if getattr(self, "_for", (None, None))[1] == PAPER_WIDTH:
+            then(self.printable().rstrip("\n") + "\n")
+            return
+        job, result, text = self._made_from
+        self.app.notify("Making the sheet at the page width (78 columns)...", timeout=3)
+        self._make_paper(job, result, text, then)
+
+    @work(thread=True, group="paper", exit_on_error=False)
+    def _make_paper(self, job, result, text: str, then) -> None:
+        try:
+            out = self.produce(job, result, PAPER_WIDTH)
+        except Exception as exc:  # noqa: BLE001 - said, never a crash
+            self.app.call_from_thread(self.app.notify, f"not made: {type(exc).__name__}: "
+                                      f"{exc}", severity="error", timeout=10)
+            return
+        self.app.call_from_thread(then, out.rstrip("\n") + "\n")
+
     def write_file(self) -> None:
-        """Write the sheet beside the job (or in the user library for a job not saved yet,
-        or a read-only preset); never over an existing file; say the full path."""
+        """Write the sheet, at a printed page's width, beside the job (or in the user
+        library for a job not saved yet, or a read-only preset); never over an existing
+        file; say the full path."""
         if self._not_ready():
             return
+        self.on_paper(self._write)
 
+    def _write(self, sheet: str) -> None:
         session = self.screen.session
         if session.path is not None and not session.read_only:
             folder, stem = session.path.parent, session.path.stem
@@ -129,7 +157,7 @@ class _SheetView(View):
             n += 1
         try:
             folder.mkdir(parents=True, exist_ok=True)
-            storage.atomic_write(path, self.printable())
+            storage.atomic_write(path, sheet)
         except OSError as exc:
             self.app.notify(f"not written: {exc}", severity="error", timeout=10)
             return
@@ -147,7 +175,7 @@ class _SheetView(View):
                             "sheet to a file with ctrl+r and print that.", severity="error",
                             timeout=12)
             return
-        self._print(command, self.printable())
+        self.on_paper(lambda sheet: self._print(command, sheet))
 
     @work(thread=True, group="print", exit_on_error=False)
     def _print(self, command: list[str], text: str) -> None:
