@@ -180,3 +180,19 @@ def test_cli_size(tmp_path):
     assert _run("size", str(job), "--kind", "NOPE").returncode == 2
     assert _run("size", str(job), "--max-depth", "3").returncode == 2
     assert _run("size", str(job), "--stock", str(tmp_path / "none.csv")).returncode == 2
+
+
+def test_confirm_lists_that_many_fully_checked_sections_lightest_first():
+    from pathlib import Path
+
+    job = str(Path(__file__).resolve().parent.parent / "presets" / "monorail-trolley.toml")
+    one = json.loads(_run("size", job, "--kind", "W", "--json").stdout)["passing"]
+    three = json.loads(_run("size", job, "--kind", "W", "--confirm", "3", "--json").stdout)[
+        "passing"]
+    assert len(one) == 1 and len(three) == 3
+    assert three[0]["designation"] == one[0]["designation"]
+    assert all(r["checked"] == "full" for r in three)
+    weights = [r["mass_per_length"] for r in three]
+    assert weights == sorted(weights)
+    bad = _run("size", job, "--kind", "W", "--confirm", "0")
+    assert bad.returncode == 2 and "--confirm" in bad.stderr and "Traceback" not in bad.stderr

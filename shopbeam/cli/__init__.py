@@ -230,6 +230,10 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("--stock", default=None, metavar="FILE",
                    help="shop stock list (TOML or CSV, see docs/stock-list.md) to choose from")
     s.add_argument("--top", type=int, default=15, metavar="N", help="how many to list (default 15)")
+    s.add_argument("--confirm", type=int, default=1, metavar="N",
+                   help="when the sweep screens first (moving loads, springs, hung loads, "
+                        "tees and angles): how many passing sections to check in full and "
+                        "list, lightest first (default 1; each takes a full check)")
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
     s.set_defaults(func=_lazy("shopbeam.cli.design", "cmd_size"))
 

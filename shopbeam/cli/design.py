@@ -5,6 +5,7 @@ from __future__ import annotations
 from shopbeam import units
 from shopbeam.cli.common import guarded, load
 from shopbeam.design import capacity, sizing
+from shopbeam.errors import InputError
 from shopbeam.members.stock import load_stock
 from shopbeam.output import capacityreport, sizingreport
 from shopbeam.output.jsonout import dumps_finite
@@ -23,12 +24,16 @@ def cmd_capacity(args) -> int:
 
 @guarded
 def cmd_size(args) -> int:
-    """`shopbeam size JOB [--kind K] [--max-depth D] [--stock FILE] [--top N] [--json]`."""
+    """`shopbeam size JOB [--kind K] [--max-depth D] [--stock FILE] [--top N] [--confirm N]
+    [--json]`."""
     job = load(args.job)
     md = units.parse(args.max_depth, "length", "--max-depth", positive=True) \
         if args.max_depth else None
     stock = load_stock(args.stock) if args.stock else None
-    res = sizing.size(job, args.kind, md, stock)
+    if args.confirm < 1:
+        raise InputError(f"--confirm {args.confirm}: give 1 or more (how many passing "
+                         "sections to check in full)", "--confirm")
+    res = sizing.size(job, args.kind, md, stock, confirm=min(args.confirm, max(1, args.top)))
     if args.json:
         print(dumps_finite(sizing.to_json(res, args.top), args.job))
     else:

@@ -346,8 +346,9 @@ def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note=
         if not why:
             method = "one layout solve, all sections batched"
         else:
+            until = "one passes" if confirm <= 1 else f"{confirm} pass"
             method = (f"all sections screened in one batched pass ({'; '.join(why)}), then "
-                      "checked in full lightest first until one passes")
+                      f"checked in full lightest first until {until}")
         method += f"; {n_full} checked in full"
     rows.sort(key=lambda r: (r.weight, r.designation))
     return SizeResult(job, label, tuple(rows), time.perf_counter() - t0, method,

@@ -23,9 +23,10 @@ def render(res: SizeResult, top: int = 15) -> str:
     more = len(res.screened_only)
     if more:
         lines += textwrap.wrap(
-            f"{res.full_checks} checked in full, lightest first, until one passed; {more} "
+            f"{res.full_checks} checked in full, lightest first, until "
+            f"{'one' if len(res.passing) <= 1 else len(res.passing)} passed; {more} "
             "heavier sections pass the batched screen but were not checked in full (not "
-            "listed: the screen is only a lower bound)",
+            "listed: the screen is only a lower bound; --confirm N checks and lists N)",
             78)
     if res.lightest:
         lines.append(f"lightest that passes: {res.lightest.designation} "
