@@ -26,6 +26,8 @@ INSIDE = {
     "100 springs (limit)": springs(100),
     "99 spans, 49 hinges": hinged(99),
     "16 wheels on 2 supports": wheels(16),
+    "35 wheels on 2 supports (moving limit)": wheels(35).replace('"7 in"', '"17 in"'),
+    "20 wheels, 4 springs (moving limit)": wheels(20, springs_n=4).replace('"7 in"', '"30 in"'),
     "8 wheels, 14 springs (moving limit)": wheels(8, springs_n=14),
     "4 wheels, 26 springs (moving limit)": wheels(4, springs_n=26),
     "1000 loads (limit)": springs(0) + "".join(

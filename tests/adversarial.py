@@ -65,6 +65,10 @@ CASES = {
     "100 springs, stiff": springs(100, "1e9 lbf/in"),
     "99 spans with hinges": hinged(99),
     "wheel of -1e30 lbf": wheels(2, force="-1e30 lbf"),
+    # the largest wheel sets the search bound lets in (answered), and one wheel past it
+    "35 wheels on a simple span": wheels(35).replace('"7 in"', '"17 in"'),
+    "20 wheels over 4 springs": wheels(20, springs_n=4).replace('"7 in"', '"30 in"'),
+    "36 wheels on a simple span": wheels(36).replace('"7 in"', '"17 in"'),
     "ramp a hair long": demo_ramp("2 ft", "2.000000001 ft"),
     "ramp to 1e-308 ft": demo_ramp("0 ft", "1e-308 ft"),
     "sliver span 0.01 mm on 2000 ft": sliver_span(1e-5 / 0.3048),

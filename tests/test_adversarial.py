@@ -48,3 +48,22 @@ def test_the_ramp_a_hair_long_answers_the_right_reactions(tmp_path):
                        capture_output=True, text=True)
     forces = [x["force"] / 4.4482216152605 for x in json.loads(r.stdout)["reactions"]]
     assert abs(forces[0] - 2107.5) < 0.01 and abs(forces[1] - 4312.5) < 0.01
+
+
+def test_the_wheel_bound_answers_the_largest_sets_and_refuses_one_more(tmp_path):
+    from adversarial import wheels
+
+    from shopbeam.jobs.limits import MOVING_WORK, moving_work
+
+    # two supports: fixed positions {0, 100 ft} and the end (3): 35 wheels is 3,990 units
+    assert moving_work(35, 3) <= MOVING_WORK < moving_work(36, 3)
+    p = tmp_path / "job.toml"
+    p.write_text(wheels(35).replace('"7 in"', '"17 in"'), encoding="utf-8")
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "solve", "--json", str(p)],
+                       capture_output=True, text=True, timeout=120)
+    assert r.returncode == 0, r.stderr[-1500:]
+    p.write_text(wheels(36).replace('"7 in"', '"17 in"'), encoding="utf-8")
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "solve", str(p)],
+                       capture_output=True, text=True, timeout=120)
+    assert r.returncode == 2 and "36 wheels" in r.stderr and "units of search" in r.stderr
+    assert str(p) in r.stderr and "moving[0].loads" in r.stderr
