@@ -450,3 +450,14 @@ def test_a_rack_beam_is_told_the_impact_load_is_not_added():
     given = parse_job_text(_uniform("", tags='tags = ["rack"]') + '[criteria]\nimpact = "25%"\n')
     assert RACK_IMPACT not in analyze(given).cautions
     assert RACK_IMPACT not in analyze(parse_job_text(_uniform(""))).cautions
+
+
+def test_an_outdoor_member_is_told_wind_and_snow_are_only_checked_if_entered():
+    from shopbeam.design.analysis import OUTDOOR, analyze
+
+    sign = parse_job_text(_uniform("", tags='tags = ["sign"]'))
+    assert OUTDOOR in analyze(sign).cautions
+    awning = parse_job_text(_uniform("").replace('title = "shelf"', 'title = "Awning arm"'))
+    assert OUTDOOR in analyze(awning).cautions
+    design = parse_job_text(_uniform("").replace('title = "shelf"', 'title = "Design shelf"'))
+    assert OUTDOOR not in analyze(design).cautions

@@ -5,6 +5,8 @@
 
 from __future__ import annotations
 
+import re
+
 from dataclasses import dataclass
 
 from shopbeam import units
@@ -63,6 +65,16 @@ RACK_IMPACT = ("Storage-rack beams are designed for an impact load besides the p
                "anchors often govern a rack and are not checked here.")
 
 
+# Members out of doors (signs, awnings, canopies) also take wind, and an awning or canopy
+# snow and drift, by ASCE 7 and the local code; only the loads entered are checked.
+_OUTDOOR = re.compile(r"\b(signs?|awnings?|canop(y|ies)|outdoors?|marquee|billboard)\b",
+                      re.IGNORECASE)
+OUTDOOR = ("Out of doors (a sign, awning or canopy) the member also takes wind, sideways and "
+           "as uplift that reverses the bending, and an awning or canopy snow and drift (ASCE 7 "
+           "and the local code): only the loads entered are checked here. Enter each case "
+           "that applies (wind uplift as its own job, with uplift = true on the load).")
+
+
 def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
     out = cautions_for(job.tags, job.lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
@@ -75,6 +87,8 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
                    "evenly (stiff deck, centred loads).")
     if any(t in ("rack", "pallet") for t in job.tags) and job.criteria.impact is None:
         out.append(RACK_IMPACT)
+    if any(_OUTDOOR.search(t) for t in job.tags + (job.title,)):
+        out.append(OUTDOOR)
     if sol is not None:
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:
