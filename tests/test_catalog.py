@@ -459,3 +459,17 @@ def test_quick_single_row_lookup_matches_the_full_index():
         quick = cat._quick_aisc(k)
         assert quick is not None, label
         assert quick == by_key[k].section(), label
+
+
+@pytest.mark.parametrize("kind", ["HSS", "HSS-rect", "HSS-round", "W", "M", "S", "HP", "C",
+                                  "MC", "L", "WT", "MT", "ST", "PIPE"])
+def test_one_kind_read_alone_matches_the_whole_index(kind):
+    # a sweep of one AISC kind reads only that kind's lines; it must give the same sections,
+    # in the same order, as the whole catalog index
+    catalog._index.cache_clear()
+    catalog._aisc_kind.cache_clear()
+    alone = [(s.designation, s.ix, s.sx, s.area) for s in catalog.list_sections(kind)]
+    catalog._index()
+    whole = [(e.designation, e.section().ix, e.section().sx, e.section().area)
+             for e in catalog._index()[1][kind]]
+    assert alone == whole and len(alone) > 0

@@ -608,12 +608,37 @@ def _kind_names(kind: str) -> tuple[str, ...]:
                      f"shape ({', '.join(SHAPE_KINDS)})", "--kind")
 
 
+_AISC_TYPES = {"HSS": "HSS", "HSS-rect": "HSS", "HSS-round": "HSS", "W": "W", "M": "M",
+               "S": "S", "HP": "HP", "C": "C", "MC": "MC", "L": "L", "WT": "WT", "MT": "MT",
+               "ST": "ST", "PIPE": "PIPE"}
+
+
+@lru_cache(maxsize=None)
+def _aisc_kind(name: str) -> tuple[_Entry, ...]:
+    """The entries of one AISC kind, read from its own lines of the table only (a sweep of
+    one kind need not parse and index the other 900 rows); the same rows and order as the
+    whole index gives."""
+    typ = _AISC_TYPES[name]
+    lines = _aisc_lines()
+    mine = [lines[0]] + [ln for ln in lines[1:] if ln.split(",", 1)[0] == typ]
+    out = []
+    for r in csv.DictReader(mine):
+        row = _row(r)
+        kind = typ if typ != "HSS" else ("HSS-round" if row["OD"] is not None else "HSS-rect")
+        if name in (kind, "HSS"):
+            out.append(_Entry(kind, row["label"], canon(row["label"]), row=row))
+    return tuple(out)
+
+
 def list_sections(kind: str | None = None, filter: str | None = None) -> list[Section]:
     """Catalog sections of a kind (all when None), optionally filtered by a piece of the
     designation ("4x4", "x1/4"; spelling tolerant like look-up). Sections are built once."""
-    by_key, by_kind = _index()
     names = _kind_names(kind) if kind else tuple(k for k in KIND_INFO if k != "HSS")
-    entries = [e for n in names for e in by_kind[n]]
+    if all(n in _AISC_TYPES for n in names) and _index.cache_info().currsize == 0:
+        entries = [e for n in names for e in _aisc_kind(n)]
+    else:
+        by_key, by_kind = _index()
+        entries = [e for n in names for e in by_kind[n]]
     if filter:
         pieces = [_filter_piece(w) for w in filter.split(",") if _prep(w)]
         entries = [e for e in entries if all(_matches(e, p) for p in pieces)]
