@@ -194,3 +194,12 @@ def test_levels_must_be_a_whole_number(bad):
     with pytest.raises(InputErrors) as e:
         parse_job_text(_rack_text(f"levels = {bad}"))
     assert any(p.key == "beam.levels" for p in e.value.problems)
+
+
+def test_a_rack_label_says_the_impact_load_is_not_included_unless_given():
+    job, cap = rack()
+    assert "Impact NOT included" in label.label_text(label.rating(cap))
+    text = (PRESETS / "pallet-rack-beam-pair.toml").read_text(encoding="utf-8")
+    given = parse_job_text(text.replace('[criteria]\n', '[criteria]\nimpact = "25%"\n', 1))
+    assert given.criteria.impact == pytest.approx(0.25)
+    assert "Impact NOT included" not in label.label_text(label.rating(capacity(given)))

@@ -196,6 +196,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         notes.append("PER BAY: the levels added up (give [beam] levels = N for the figure), "
                      "and no more than the upright frames are rated for (frames, anchors and "
                      "beam connectors are not checked here).")
+    if rack and job.criteria.impact is None:
+        notes.append("Impact NOT included: rack beams are designed for 25 % of one unit load "
+                     "more (ANSI MH16.1, from memory); give [criteria] impact, or add it as a "
+                     "load, before posting.")
     notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     return figs, notes
 
