@@ -132,3 +132,17 @@ def test_plaque_prints_on_one_page(browser, poppler, tmp_path):
     assert pages == 1
     assert "LOAD RATING" in text and "PER LEVEL (pair of beams)" in text
     assert "rounded down from" in text and "SCREENING CHECK ONLY" in text
+
+
+def test_a_long_plaque_still_prints_on_one_page(browser, poppler, tmp_path):
+    # a rack bay: per-pallet, per-level, per-beam and per-bay figures and the rack notes
+    text = (PRESETS / "pallet-rack-beam-pair.toml").read_text(encoding="utf-8")
+    job = parse_job_text(text.replace("\nmembers = 2 ", "\nmembers = 2\nlevels = 4\n", 1))
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    assert label._long(r)  # the compact type is used
+    for paper in ("letter", "a4"):
+        pdf = tmp_path / f"bay-{paper}.pdf"
+        pdf.write_bytes(print_pdf(label.plaque_html(r, paper), browser))
+        pages, got = _pdf_text(pdf)
+        assert pages == 1, paper
+        assert "PER BAY (4 levels)" in got and "Impact NOT included" in got

@@ -197,9 +197,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                      "and no more than the upright frames are rated for (frames, anchors and "
                      "beam connectors are not checked here).")
     if rack and job.criteria.impact is None:
-        notes.append("Impact NOT included: rack beams are designed for 25 % of one unit load "
-                     "more (ANSI MH16.1, from memory); give [criteria] impact, or add it as a "
-                     "load, before posting.")
+        notes.append("Impact NOT included (ANSI MH16.1: 25 % of one unit load more, from "
+                     "memory): add it before posting.")
     notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     return figs, notes
 
@@ -370,6 +369,13 @@ def plaque_text(r: Rating, width: int = 78) -> str:
     return "\n".join(lines[:cut] + rows + lines[cut:]) + "\n"
 
 
+def _long(r: Rating) -> bool:
+    """A plaque whose figures and notes would run past one page in the full-size type."""
+    words = sum(len(f.note) + 40 for f in r.figures) + sum(len(n) for n in r.notes)
+    words += sum(len(x) for x in r.not_rated) + 60 * len(r.reactions)
+    return len(r.figures) + len(r.notes) >= 6 or words > 700
+
+
 def plaque_html(r: Rating, paper: str = "letter") -> str:
     """The full-page plaque as a self-contained printable HTML page (big type, one page)."""
     e = escape
@@ -392,7 +398,16 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
          ".caution{font-size:10pt;font-weight:bold;margin:2mm 0}"
          "ul{margin:1mm 0 2mm 5mm;padding-left:4mm;font-size:10.5pt}"
          ".plaque{break-inside:avoid}"
-         "</style></head><body><div class=plaque>",
+         # a plaque with many figures or notes (a rack bay, say) uses smaller type so it
+         # still prints on one page
+         ".compact .plaque{padding:5mm}.compact h1{font-size:24pt;margin:0 0 2mm}"
+         ".compact .title{font-size:13pt;margin-bottom:3mm}"
+         ".compact .fig{font-size:15pt;margin:2mm 0 0}"
+         ".compact .group{font-size:11.5pt;margin:3mm 0 0}"
+         ".compact .note,.compact ul{font-size:9.5pt}.compact .meta{font-size:10pt}"
+         ".compact .caution{font-size:9pt;margin:1mm 0}.compact .lift{font-size:11pt}"
+         "</style></head><body" + (' class="compact"' if _long(r) else "")
+         + "><div class=plaque>",
          "<h1>LOAD RATING</h1>", f'<div class="title">{e(r.title)}</div>']
     if r.status == "not rated":
         h.append('<div class="notrated">NOT RATED</div><ul>'
