@@ -250,6 +250,35 @@ async def test_point_load_bearing_flange_and_patterned(tmp_path):
         assert s.evaluation.job.loads[uni].patterned is True
 
 
+@sync
+async def test_a_lifting_jobs_hoist_shows_and_keeps_the_flange_it_is_checked_on(tmp_path):
+    # the jib arm's point loads say no flange: on a lifting job's I-beam they hang from the
+    # bottom flange, and the form must show that; choosing "top" must write it (removing the
+    # key would hang the load again)
+    path = job_copy(tmp_path, "jib-arm")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        rows = s.rows("loads")
+        pt = next(i for i, r in enumerate(rows) if r["type"] == "point" and "flange" not in r)
+        assert f"loads[{pt}]" in s.evaluation.job.hung_default
+        await goto(pilot, "3")
+        lst = app.job_screen.query_one("#load-list")
+        lst.focus()
+        lst.highlighted = pt
+        await settle(pilot)
+        flange = choice(app, "loads", "load.flange")
+        assert flange.display and flange.value == "bottom"
+        await pick(pilot, flange, "t")
+        assert s.rows("loads")[pt]["flange"] == "top"
+        assert f"loads[{pt}]" not in s.evaluation.job.hung
+        assert flange.value == "top"
+        await pick(pilot, flange, "b")
+        assert s.rows("loads")[pt]["flange"] == "bottom"
+        assert f"loads[{pt}]" in s.evaluation.job.hung
+
+
 WOOD_JOB = """\
 # a 2x10 floor joist, checked in the text UI
 schema = 1

@@ -22,6 +22,7 @@ from textual.widgets import ContentSwitcher, Footer, Input, Static
 from textual.worker import get_current_worker
 
 from shopbeam import units
+from shopbeam.cautions import is_lifting
 from shopbeam.errors import InputError
 from shopbeam.jobs import library, storage
 from shopbeam.tui import session as session_mod
@@ -32,7 +33,8 @@ from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowsView, SectionView, SpanView, load_warnings,
                                 problems_text)
-from shopbeam.tui.widgets import OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar, update_text
+from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
+                                  update_text)
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -516,7 +518,13 @@ class JobScreen(Screen):
             s.set_row("loads", i, "case", "dead" if value == "dead" else None)
         elif key == "load.flange":
             i = self.query_one("#loads", LoadsView).selected
-            s.set_row("loads", i, "flange", "bottom" if value == "bottom" else None)
+            # "top" is the default, except on a lifting job, whose point loads hang from the
+            # bottom flange unless they say flange = "top": write it there
+            tags = s.doc.get("tags")
+            lifting = is_lifting(tags if isinstance(tags, list) else [],
+                                 s.doc.get("criteria.lifting") or "")
+            s.set_row("loads", i, "flange",
+                      "bottom" if value == "bottom" else ("top" if lifting else None))
         elif key == "support.brace":
             i = self.query_one("#span", SpanView).selected
             s.set_row("supports", i, "brace", {"yes": True, "no": False}.get(value))

@@ -553,7 +553,12 @@ class LoadsView(RowsView):
                 c.set("yes" if row.get("patterned") is True else "no")
                 c.display = kind in ("uniform", "linear", "point")
             elif c.key == "load.flange":
-                c.set("bottom" if row.get("flange") == "bottom" else "top")
+                # no flange written: what the checks take (a lifting job's I-beam hangs its
+                # point loads from the bottom flange)
+                job = session.evaluation.job
+                hung = f"loads[{i}]" in (getattr(job, "hung_default", ()) if job else ())
+                c.set("bottom" if row.get("flange") == "bottom"
+                      or ("flange" not in row and hung) else "top")
                 c.display = kind == "point" or "flange" in row
         v = row.get("value", "")
         v1, v2 = (v + ["", ""])[:2] if isinstance(v, list) else (v, "")
