@@ -277,6 +277,16 @@ async def test_a_lifting_jobs_hoist_shows_and_keeps_the_flange_it_is_checked_on(
         await pick(pilot, flange, "b")
         assert s.rows("loads")[pt]["flange"] == "bottom"
         assert f"loads[{pt}]" in s.evaluation.job.hung
+        # how many trolley wheels it hangs on: two (the default) is no key at all
+        wheels = choice(app, "loads", "load.wheels")
+        assert wheels.display and wheels.value == "two" and "P = load / 2" in wheels.message
+        await pick(pilot, wheels, "f")
+        assert s.rows("loads")[pt]["wheels"] == 4
+        assert s.evaluation.job.contacts[f"loads[{pt}]"] == 4
+        await pick(pilot, wheels, "t")
+        assert "wheels" not in s.rows("loads")[pt]
+        await pick(pilot, flange, "t")
+        assert not wheels.display  # a load on top bears on no wheels
 
 
 WOOD_JOB = """\

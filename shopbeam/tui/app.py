@@ -31,8 +31,8 @@ from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, Len
 from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
-                                ResultsView, RowsView, SectionView, SpanView, load_warnings,
-                                problems_text)
+                                ResultsView, RowsView, SectionView, SpanView, WHEEL_WORDS,
+                                load_warnings, problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
                                   update_text)
 
@@ -525,6 +525,10 @@ class JobScreen(Screen):
                                  s.doc.get("criteria.lifting") or "")
             s.set_row("loads", i, "flange",
                       "bottom" if value == "bottom" else ("top" if lifting else None))
+        elif key == "load.wheels":
+            i = self.query_one("#loads", LoadsView).selected
+            n = WHEEL_WORDS.get(value, 2)
+            s.set_row("loads", i, "wheels", None if n == 2 else n)
         elif key == "support.brace":
             i = self.query_one("#span", SpanView).selected
             s.set_row("supports", i, "brace", {"yes": True, "no": False}.get(value))

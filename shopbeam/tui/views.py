@@ -524,6 +524,7 @@ class LoadsView(RowsView):
             yield Choice("Patterned", ["no", "yes"], key="load.patterned")
             yield Field("Bearing", "load.bearing", placeholder="e.g. 6 in")
             yield Choice("Flange", ["top", "bottom"], key="load.flange")
+            yield Choice("Wheels", list(WHEEL_WORDS), key="load.wheels")
             yield Static("Patterned: each span is checked loaded and empty in turn (parts "
                          "taken off one bay at a time).", classes="hint", markup=False)
 
@@ -557,9 +558,13 @@ class LoadsView(RowsView):
                 # point loads from the bottom flange)
                 job = session.evaluation.job
                 hung = f"loads[{i}]" in (getattr(job, "hung_default", ()) if job else ())
-                c.set("bottom" if row.get("flange") == "bottom"
-                      or ("flange" not in row and hung) else "top")
+                bottom = row.get("flange") == "bottom" or ("flange" not in row and hung)
+                c.set("bottom" if bottom else "top")
                 c.display = kind == "point" or "flange" in row
+                wheels = next(w for w in self.choices() if w.key == "load.wheels")
+                n = row.get("wheels", 2)
+                wheels.set(next((w for w, v in WHEEL_WORDS.items() if v == n), "two"))
+                wheels.display = (kind == "point" and bottom) or "wheels" in row
         v = row.get("value", "")
         v1, v2 = (v + ["", ""])[:2] if isinstance(v, list) else (v, "")
         values = {"load.at": row.get("at", ""), "load.start": row.get("start", ""),
@@ -587,7 +592,7 @@ class LoadsView(RowsView):
             "load.bearing": f"loads[{i}].bearing"})
         self.show_choice_messages(session.evaluation, {
             "load.flange": f"loads[{i}].flange", "load.patterned": f"loads[{i}].patterned",
-            "load.case": f"loads[{i}].case"})
+            "load.case": f"loads[{i}].case", "load.wheels": f"loads[{i}].wheels"})
         # a problem with the whole value list of a linear load goes beside the first value
         if kind == "linear":
             msg = session.evaluation.message_for(f"loads[{i}].value")
@@ -620,11 +625,20 @@ class LoadsView(RowsView):
         return ""
 
     def choice_reading(self, choice, ev) -> str:
+        if choice.key == "load.wheels":
+            return {"two": "a beam clamp or two-wheel trolley: P = load / 2 (lifting jobs)",
+                    "four": "a four-wheel trolley: P = load / 4 (lifting jobs)",
+                    "eight": "an eight-wheel trolley: P = load / 8 (lifting jobs)"}.get(
+                        choice.value, "")
         if choice.key == "load.flange":
             return ("hangs from the bottom flange: flange bending (J10.1)"
                     if choice.value == "bottom" else
                     "bears on the top flange: web checks (J10.2, J10.3)")
         return ""
+
+
+# the Wheels choice of a hung point load: its words and the `wheels` value each writes
+WHEEL_WORDS = {"two": 2, "four": 4, "eight": 8}
 
 
 class SectionView(View):
