@@ -24,7 +24,7 @@ from shopbeam.cautions import cautions_for
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.members.wood import DURATIONS, TEMPERATURES
-from shopbeam.tui.widgets import Choice, Field
+from shopbeam.tui.widgets import Choice, Field, fit_text
 
 # The design modules, the catalog, the materials and the drawings (numpy) are imported where
 # a view first needs them: the first screen (the job view) is drawn without them, and the
@@ -970,7 +970,7 @@ class CriteriaView(View):
         basis = self.query_one("#crit-basis", Static)
         # the view's width less its padding and scroll bar (the Static may not be laid out yet)
         width = max(30, (self.app.size.width or 80) - 6)
-        basis.update(_text(hang(basis_words(ev), width)))
+        basis.update(_text(fit_text(basis_words(ev), width)))
 
     def reading(self, field, ev) -> str:
         if ev.job is None:
@@ -1012,19 +1012,6 @@ class CriteriaView(View):
             return ("Nd 2.0: predictable loads, mild service (BTH-1, from memory)"
                     if choice.value == "A" else "Nd 3.0: the default (ASME BTH-1)")
         return ""
-
-
-def hang(text: str, width: int) -> str:
-    """Wrap each line of `text` to `width`, continuing an indented line under its own
-    indent (so "  results use: ..." does not wrap back to the first column)."""
-    import textwrap  # noqa: PLC0415 - small
-
-    out = []
-    for line in text.split("\n"):
-        indent = " " * (len(line) - len(line.lstrip(" ")))
-        out.append(textwrap.fill(line, width, subsequent_indent=indent + "  ")
-                   if len(line) > width else line)
-    return "\n".join(out)
 
 
 def basis_words(ev) -> str:
