@@ -47,6 +47,16 @@ async def goto(pilot, key: str) -> None:
     await settle(pilot)
 
 
+async def show_load(app, pilot, i: int) -> None:
+    """The loads view's form on load i (picked in the list, as a user would)."""
+    if app.job_screen.current != "loads":
+        await goto(pilot, "3")
+    lst = app.job_screen.query_one("#load-list")
+    lst.focus()
+    lst.highlighted = i
+    await settle(pilot)
+
+
 async def type_keys(pilot, f: Field, text: str) -> None:
     f.input.focus()
     await pilot.pause()
@@ -220,11 +230,7 @@ async def test_point_load_bearing_flange_and_patterned(tmp_path):
         s = app.job_screen.session
         rows = s.rows("loads")
         pt = next(i for i, r in enumerate(rows) if r["type"] == "point")
-        await goto(pilot, "3")
-        lst = app.job_screen.query_one("#load-list")
-        lst.focus()
-        lst.highlighted = pt
-        await settle(pilot)
+        await show_load(app, pilot, pt)
         flange = choice(app, "loads", "load.flange")
         assert flange.display and flange.value == "top"
         await pick(pilot, flange, "b")
@@ -240,9 +246,7 @@ async def test_point_load_bearing_flange_and_patterned(tmp_path):
         assert "flange" not in s.rows("loads")[pt]
         # a uniform load: no flange or bearing to give; patterned can be set
         uni = next(i for i, r in enumerate(rows) if r["type"] == "uniform")
-        lst.focus()
-        lst.highlighted = uni
-        await settle(pilot)
+        await show_load(app, pilot, uni)
         assert not flange.display and not bearing.display
         pat = choice(app, "loads", "load.patterned")
         await pick(pilot, pat, "y")
@@ -263,11 +267,7 @@ async def test_a_lifting_jobs_hoist_shows_and_keeps_the_flange_it_is_checked_on(
         rows = s.rows("loads")
         pt = next(i for i, r in enumerate(rows) if r["type"] == "point" and "flange" not in r)
         assert f"loads[{pt}]" in s.evaluation.job.hung_default
-        await goto(pilot, "3")
-        lst = app.job_screen.query_one("#load-list")
-        lst.focus()
-        lst.highlighted = pt
-        await settle(pilot)
+        await show_load(app, pilot, pt)
         flange = choice(app, "loads", "load.flange")
         assert flange.display and flange.value == "bottom"
         await pick(pilot, flange, "t")
