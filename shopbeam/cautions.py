@@ -24,6 +24,13 @@ SHORT = "Screening check only - licensed engineer review required; local codes g
 SHORT_LIFTING = "LIFTING DEVICE - not for service without engineer design and load test."
 
 
+# tags that make a job a storage rack (its members are the beams of one level) or a shelf
+# (its members are the rails or brackets of one shelf): the rating label speaks per level or
+# per shelf, `levels` counts rack levels, and a rack beam is told of the impact load
+RACK_TAGS = frozenset({"rack", "pallet", "racking"})
+SHELF_TAGS = frozenset({"shelf", "shelving"})
+
+
 def normal_tag(tag) -> str:
     """A tag as compared everywhere: ``"Lifting "`` and ``"lifting"`` are the same tag."""
     return str(tag).strip().lower()

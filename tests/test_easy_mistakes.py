@@ -424,6 +424,9 @@ value = "-100 lbf/ft"
     (_uniform("patterned = true"), "loads[0].patterned", "single span"),
     (_uniform("uplift = true"), "loads[0].uplift", "pushes down"),
     (_uniform("", beam_extra="levels = 3"), "beam.levels", "not tagged rack"),
+    # a shelf's label speaks per shelf and never counts levels
+    (_uniform("", beam_extra="levels = 3", tags='tags = ["shelf"]'), "beam.levels",
+     "not tagged rack"),
 ])
 def test_a_key_that_changes_nothing_is_warned(text, key, words):
     job = parse_job_text(text)
@@ -436,6 +439,7 @@ def test_a_key_that_changes_nothing_is_warned(text, key, words):
     _uniform("patterned = true", supports_at=("0 ft", "3 ft", "6 ft")),  # two spans
     _uniform("uplift = true").replace("-100 lbf/ft", "100 lbf/ft"),  # really pushes up
     _uniform("", beam_extra="levels = 3", tags='tags = ["rack"]'),
+    _uniform("", beam_extra="levels = 3", tags='tags = ["racking"]'),  # the label's rack too
 ])
 def test_the_same_keys_where_they_matter_are_not_warned(text):
     job = parse_job_text(text)

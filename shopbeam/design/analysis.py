@@ -10,7 +10,7 @@ import re
 from dataclasses import dataclass
 
 from shopbeam import units
-from shopbeam.cautions import cautions_for
+from shopbeam.cautions import RACK_TAGS, cautions_for
 from shopbeam.design import loading
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, check_notes, governing,
                                     impact_of, strengths)
@@ -85,7 +85,7 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
         out.append(f"Loads are shared by {job.members} identical members: each is checked for "
                    f"1/{job.members} of the entered loads. Make sure the load really divides "
                    "evenly (stiff deck, centred loads).")
-    if any(t in ("rack", "pallet") for t in job.tags) and job.criteria.impact is None:
+    if RACK_TAGS.intersection(job.tags) and job.criteria.impact is None:
         out.append(RACK_IMPACT)
     if any(_OUTDOOR.search(t) for t in job.tags + (job.title,)):
         out.append(OUTDOOR)

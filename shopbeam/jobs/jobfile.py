@@ -23,7 +23,7 @@ from functools import cached_property
 from pathlib import Path
 
 from shopbeam import units
-from shopbeam.cautions import is_lifting, normal_tag
+from shopbeam.cautions import RACK_TAGS, is_lifting, normal_tag
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support, segments
 from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
@@ -806,9 +806,9 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                 r.warn("uplift = true says this load pushes up, but its value pushes down "
                        "(negative): it changes nothing; remove it, or check the sign",
                        f"{key}.uplift")
-    if levels is not None and not any(t in ("rack", "pallet", "shelf") for t in tags):
+    if levels is not None and not RACK_TAGS.intersection(tags):
         r.warn("levels is the number of beam levels in a rack bay, for the rating label's "
-               "per-bay total; this job is not tagged rack, pallet or shelf, so it changes "
+               "per-bay total; this job is not tagged rack, pallet or racking, so it changes "
                "nothing: add tags = [\"rack\"] if it is a rack beam", "beam.levels")
 
 

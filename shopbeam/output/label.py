@@ -33,14 +33,12 @@ from dataclasses import dataclass
 from html import escape
 
 from shopbeam import units
-from shopbeam.cautions import cautions_for
+from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.errors import InputError
 from shopbeam.output.present import present_capacity
 
-RACK_TAGS = {"rack", "pallet", "racking"}  # members are the beams of one level
-SHELF_TAGS = {"shelf", "shelving"}  # members are the rails or brackets of one shelf
 BASIS_SHORT = {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
                "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}
 
