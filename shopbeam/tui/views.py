@@ -49,6 +49,11 @@ class View(VerticalScroll):
 
     title = ""
 
+    def wrap_width(self) -> int:
+        """The columns a line of words beside the fields may use: the screen less the view's
+        padding and scroll bar (the Static may not be laid out yet)."""
+        return max(30, (self.app.size.width or 80) - 6)
+
     def fields(self) -> list[Field]:
         """The view's fields, found once: a view's widgets are fixed when it is composed,
         and a DOM query on every redraw costs more than the redraw (a key's answer)."""
@@ -749,7 +754,7 @@ class SectionView(View):
                      f"  depth {f(s.depth, 'small_length')}  shear area "
                      f"{f(s.shear_area, 'area')}{wt}"]
             lines += [f"  note: {w}" for w in (getattr(s, "warnings", ()) or ())]
-            props.update(_text("\n".join(lines)))
+            props.update(_text(fit_text("\n".join(lines), self.wrap_width())))
         else:
             props.update(_text("Read as: (not readable yet - see the problem above)"))
 
@@ -872,7 +877,7 @@ class MaterialView(View):
                      f"  {shown}  density {units.fmt(m.density, 'density', sy)}"]
             if m.source:
                 lines.append(f"  values: {m.source}")
-            props.update(_text("\n".join(lines)))
+            props.update(_text(fit_text("\n".join(lines), self.wrap_width())))
         else:
             props.update(_text(f"problem: {msg}" if msg else "In use: (not readable yet)"))
         self.show_wood(doc, ev)
@@ -967,10 +972,8 @@ class CriteriaView(View):
         self.show_choice_messages(ev, {"criteria.basis": "criteria.basis",
                                        "criteria.lifting": "criteria.lifting",
                                        "criteria.category": "criteria.category"})
-        basis = self.query_one("#crit-basis", Static)
-        # the view's width less its padding and scroll bar (the Static may not be laid out yet)
-        width = max(30, (self.app.size.width or 80) - 6)
-        basis.update(_text(fit_text(basis_words(ev), width)))
+        self.query_one("#crit-basis", Static).update(
+            _text(fit_text(basis_words(ev), self.wrap_width())))
 
     def reading(self, field, ev) -> str:
         if ev.job is None:
