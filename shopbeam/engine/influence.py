@@ -34,7 +34,7 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from shopbeam.engine.model import Beam, Load
-from shopbeam.engine.piecewise import Piecewise, _horner, _roots_in_pieces
+from shopbeam.engine.piecewise import Piecewise, _horner, _roots_in_pieces, unique
 
 LEVELS = {"shear": 1, "moment": 2, "slope": 3, "deflection": 4}
 NU = 6  # coefficients in x (static deflection of a linear load is degree 5)
@@ -112,12 +112,12 @@ def influence(beam: Beam) -> Influence:
 
     L = beam.length
     sup = sorted(beam.supports, key=lambda s: s.at)
-    b = np.unique(np.array([0.0, L] + [s.at for s in sup]))
+    b = unique(np.array([0.0, L] + [s.at for s in sup]))
     npc = len(b) - 1
     h = np.diff(b)
     frac = np.array([0.0, 1 / 3, 2 / 3, 1.0])
     nodes = b[:-1, None] + h[:, None] * frac[None, :]  # (pieces, 4), ends shared
-    flat = np.unique(nodes)
+    flat = unique(nodes)
     empty = replace(beam, loads=())
     sols = solve_many(empty, [(Load("point", at=float(a), value=1.0),) for a in flat],
                       candidates=False)
@@ -205,7 +205,7 @@ def _colleague_roots(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
     rel = np.abs(c) > 1e-11 * top[:, None]
     deg = np.where(top > 0, w - 1 - np.argmax(rel[:, ::-1], axis=1), 0)
     rows_out, r_out = [], []
-    for d in np.unique(deg):
+    for d in sorted(set(deg.tolist())):
         if d < 1:
             continue
         sel = np.flatnonzero(deg == d)
@@ -259,11 +259,11 @@ class Cells:
 def wheel_cells(inf: Influence, xs, offsets, p_lo: float, p_hi: float) -> Cells:
     L = inf.beam.length
     tol = 1e-11 * L
-    xs = np.unique(np.concatenate([np.asarray(xs, float), inf.breaks]))
+    xs = unique(np.concatenate([np.asarray(xs, float), inf.breaks]))
     xs = xs[(xs >= -tol) & (xs <= L + tol)]
     d = np.asarray(offsets, float)
     pb = (xs[:, None] - d[None, :]).ravel()
-    pb = np.unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
+    pb = unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
     if len(pb) > 1:
         keep = np.concatenate([[True], np.diff(pb) > tol])
         pb = pb[keep]
@@ -627,7 +627,7 @@ def reaction_polys(inf: Influence, offsets, p_lo: float, p_hi: float, static_r, 
     d = np.asarray(offsets, float)
     b = inf.breaks
     pb = (b[:, None] - d[None, :]).ravel()
-    pb = np.unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
+    pb = unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
     p0s = pb[:-1] if len(pb) > 1 else pb
     wps = np.diff(pb) if len(pb) > 1 else np.zeros(1)
     pm = p0s + 0.5 * wps

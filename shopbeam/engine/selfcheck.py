@@ -12,6 +12,7 @@ import numpy as np
 from dataclasses import dataclass, field
 
 from shopbeam.engine.model import segments
+from shopbeam.engine.piecewise import unique
 
 
 @dataclass(frozen=True)
@@ -170,7 +171,7 @@ def self_checks(sol: "Solution") -> list[SelfCheck]:
     springs = [s.stiffness for s in beam.supports if s.kind == "spring"]
     # deflection is levered up where the beam tips about a support or hinge close to another
     # (a spring's give, or the bending beyond a hinge, carried out to a long overhang)
-    pts = np.unique([s.at for s in beam.supports])
+    pts = unique([s.at for s in beam.supports])
     lever = max(1.0, L / float(np.min(np.diff(pts)))) if pts.size > 1 else 1.0
     uref = lever * (fref * lref**3 / ei + (fref / min(springs) if springs else 0.0))
     if fref > 0:

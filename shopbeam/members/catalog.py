@@ -526,12 +526,23 @@ SHAPE_KINDS = {"rect-tube": ("HSS-rect", "SHS", "RHS", "mech-tube"),
                 "rect-bar": ("flat-bar", "square-bar"), "round-bar": ("round-bar",)}
 
 
-class _Entry:
-    __slots__ = ("kind", "designation", "key", "row", "builder", "_sec")
+_LAZY = object()
 
-    def __init__(self, kind, designation, key, row=None, builder=None):
-        self.kind, self.designation, self.key = kind, designation, key
+
+class _Entry:
+    __slots__ = ("kind", "designation", "_key", "row", "builder", "_sec")
+
+    def __init__(self, kind, designation, key=_LAZY, row=None, builder=None):
+        self.kind, self.designation, self._key = kind, designation, key
         self.row, self.builder, self._sec = row, builder, None
+
+    @property
+    def key(self) -> str | None:
+        """The canonical key of the designation (`canon`), worked out when first asked: a
+        sweep of one kind never needs it."""
+        if self._key is _LAZY:
+            self._key = canon(self.designation)
+        return self._key
 
     def section(self) -> Section:
         if self._sec is None:
@@ -626,7 +637,7 @@ def _aisc_kind(name: str) -> tuple[_Entry, ...]:
         row = _row(r)
         kind = typ if typ != "HSS" else ("HSS-round" if row["OD"] is not None else "HSS-rect")
         if name in (kind, "HSS"):
-            out.append(_Entry(kind, row["label"], canon(row["label"]), row=row))
+            out.append(_Entry(kind, row["label"], row=row))
     return tuple(out)
 
 

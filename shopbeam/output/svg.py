@@ -17,6 +17,7 @@ from html import escape
 import numpy as np
 
 from shopbeam import units
+from shopbeam.engine.piecewise import unique
 
 DIAGRAM_KINDS = {"shear": "force", "moment": "moment", "slope": "slope",
                  "deflection": "small_length"}
@@ -197,7 +198,7 @@ def sample(pw, length: float, extra=(), n: int = 240) -> tuple[np.ndarray, np.nd
     """Points to draw a piecewise function: a grid, both sides of every break, and `extra`."""
     breaks = np.asarray(pw.breaks, dtype=float)
     grid = np.linspace(0.0, length, n)
-    inner = np.unique(np.concatenate([grid, np.asarray(list(extra), dtype=float)]))
+    inner = unique(np.concatenate([grid, np.asarray(list(extra), dtype=float)]))
     inner = inner[(inner > 0) & (inner < length)]
     xs, ys = [], []
     bset = set(np.round(breaks / length * 1e9).astype(np.int64)) if length > 0 else set()

@@ -15,6 +15,7 @@ import math
 import numpy as np
 
 from shopbeam import units
+from shopbeam.engine.piecewise import unique
 from shopbeam.output.present import present
 
 
@@ -162,7 +163,7 @@ def elevation(job, width: int = 76) -> str:
 def sample(pw, length: float, n: int = 400) -> tuple[list[float], list[float]]:
     """Points along a piecewise function, with both one-sided values at every break
     (evaluated all at once)."""
-    xs = np.unique(np.concatenate([np.linspace(0.0, length, n),
+    xs = unique(np.concatenate([np.linspace(0.0, length, n),
                                    np.asarray(pw.breaks, dtype=float)]))
     left = np.asarray(pw(xs, "left"), dtype=float)
     right = np.asarray(pw(xs, "right"), dtype=float)
