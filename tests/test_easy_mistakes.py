@@ -250,6 +250,38 @@ def test_the_default_factor_written_out_on_steel_is_not_noise():
     assert not [p for p in warnings(job) if p.key == "criteria.safety_factor"]
 
 
+@pytest.mark.parametrize("sf, hint", [(0.6, "1.67"), (0.5, "e.g. 2 if 0.5"), (0.9, None)])
+def test_safety_factor_below_one_is_refused_naming_the_key(sf, hint):
+    # a factor below 1 would let the stress pass yield: refused, never rated on
+    text = job_text(criteria=f'safety_factor = {sf}\nbasis = "first-yield"')
+    with pytest.raises(InputErrors) as err:
+        parse_job_text(text)
+    msg = str(err.value)
+    assert "criteria.safety_factor" in msg and "below 1" in msg and "1.67" in msg
+    if hint:
+        assert hint in msg
+    else:
+        assert "e.g." not in msg  # 1 / 0.9 = 1.11 is no factor to suggest
+    # exactly 1 is a legal (if unusual) request: checked at yield
+    ok = parse_job_text(job_text(criteria='safety_factor = 1.0\nbasis = "first-yield"'))
+    assert ok.criteria.safety_factor == 1.0
+
+
+@pytest.mark.parametrize("written, warned", [("1.25", True), ("1", True), ("0.25", False),
+                                             ('"125%"', False), ('"25%"', False)])
+def test_impact_written_as_a_multiplier_is_warned(written, warned):
+    # impact is the part added (0.25 = loads x 1.25); 1.25 as a bare number is 125 % added
+    job = parse_job_text(job_text(criteria=f"impact = {written}"))
+    w = [p for p in warnings(job) if p.key == "criteria.impact"]
+    assert bool(w) == warned
+    if warned:
+        assert "added to the live loads" in w[0].message
+        assert ("write 0.25" in w[0].message) == (written == "1.25")
+    # the value is used as written either way (the warning says how it is read)
+    assert job.criteria.impact == pytest.approx(float(written.strip('"%')) /
+                                                (100 if "%" in written else 1))
+
+
 def test_safety_factor_on_lumber_says_to_remove_it():
     job = parse_job_text(job_text(section="2x10", material="DF-L-2",
                                   criteria="safety_factor = 2.5"))

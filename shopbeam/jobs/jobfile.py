@@ -356,7 +356,14 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                 "criteria.safety_factor")
         sf = 1.67
     elif sf < 1:
-        r.warn(f"safety_factor {sf} is below 1: the check allows more than yield", "criteria.safety_factor")
+        # a factor below 1 lets the stress pass yield: no shop check means that (a divisor
+        # typed as a multiplier, 0.6 for 1 / 0.6, is the usual slip), so it is refused
+        r.error(f"safety_factor {sf:g} is below 1, so the check would allow more than the "
+                f"yield strength; a safety factor divides yield (Fy / SF): write 1.67 (AISC "
+                f"ASD) or more" + (f", e.g. {1 / sf:.3g} if {sf:g} was meant as a fraction "
+                                   "of yield" if 1 / sf >= 1.5 else ""),
+                "criteria.safety_factor")
+        sf = 1.67
     basis = r.choice(crit, "basis", "criteria.basis", Basis, Basis.AUTO)
     if "safety_factor" in crit and sf != 1.67:
         _unused_safety_factor(r, sf, material, basis)
@@ -367,6 +374,13 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
         r.warn(f"basis = \"{basis.value}\" does not apply to {kind}: this member is checked by "
                f"{own}; remove basis", "criteria.basis")
     impact = r.fraction(crit, "impact", "criteria.impact")
+    raw = crit.get("impact")
+    if impact is not None and impact >= 1 and not isinstance(raw, str):
+        # a multiplier typed for the allowance: 1.25 for "loads x 1.25" is 125 % added
+        r.warn(f"impact = {raw:g} is read as {impact:.0%} added to the live loads (each live "
+               f"load x {1 + impact:g}); an impact allowance is the part added: write "
+               f"{impact - 1:g} (or \"{(impact - 1) * 100:g}%\") for loads x {impact:g}, or "
+               f"\"{impact * 100:g}%\" if you do mean {impact:.0%}", "criteria.impact")
     live = LIVE_DEFLECTION_PRESETS.get(preset)
     ld = crit.get("live_deflection")
     if ld is not None:
