@@ -7,6 +7,7 @@ from __future__ import annotations
 import json
 import subprocess
 import sys
+from pathlib import Path
 
 import pytest
 
@@ -497,3 +498,27 @@ def test_an_outdoor_member_is_told_wind_and_snow_are_only_checked_if_entered():
     assert OUTDOOR in analyze(awning).cautions
     design = parse_job_text(_uniform("").replace('title = "shelf"', 'title = "Design shelf"'))
     assert OUTDOOR not in analyze(design).cautions
+
+
+@pytest.mark.parametrize("preset, written, profile", [
+    ("monorail-hoist-beam", "L/240", "L/450"),  # a shelf's limit copied onto a monorail
+    ("jib-arm", "L/150", "L/225"),  # tagged lifting with a free end: the jib-boom profile
+])
+def test_lifting_deflection_looser_than_its_profile_is_warned(preset, written, profile):
+    # profiles: jobs/rules.LIFTING_PROFILES (L/450 monorails, L/225 jib booms, common practice)
+    path = Path(__file__).resolve().parent.parent / "presets" / f"{preset}.toml"
+    text = path.read_text()
+    line = next(ln for ln in text.splitlines() if ln.startswith("deflection = "))
+    job = parse_job_text(text.replace(line, f'deflection = "{written}"'))
+    w = [p for p in warnings(job) if p.key == "criteria.deflection"]
+    assert w and f"looser than the {profile}" in w[0].message
+    assert job.criteria.deflection_ratio == float(written[2:])  # used as written
+    # the profile's own limit, or a stricter one, is not warned
+    for ok in (profile, "L/900"):
+        job = parse_job_text(text.replace(line, f'deflection = "{ok}"'))
+        assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
+
+
+def test_shelf_limit_on_a_job_that_is_not_lifting_is_not_warned():
+    job = parse_job_text(job_text(criteria='deflection = "L/180"'))
+    assert not [p for p in warnings(job) if p.key == "criteria.deflection"]

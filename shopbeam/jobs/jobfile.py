@@ -835,6 +835,30 @@ _LIFTING_WORDS = re.compile(
     re.IGNORECASE)
 
 
+def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
+    """A deflection limit written on a lifting job that is looser than its lifting profile's
+    (L/240 copied from a shelf onto a monorail): warned, and the value written is used."""
+    if length is None or not criteria.deflection_given or not criteria.deflection_ratio:
+        return
+    name = criteria.lifting
+    if not name:
+        if not is_lifting(tags):
+            return
+        # the profile tags = ["lifting"] picks (design/lifting.profile_of): a jib boom when
+        # an end is free, else a powered monorail
+        held = [s.at for s in supports if s.takes_force]
+        tol = 1e-9 * length
+        free = not held or min(held) > tol or max(held) < length - tol
+        name = "jib-boom" if free and held else "powered-monorail"
+    p = LIFTING_PROFILES[name]
+    if criteria.deflection_ratio < p["deflection"]:
+        r.warn(f"deflection = {criteria.deflection!r} is looser than the L/{p['deflection']:g} "
+               f"of the {name} lifting profile ({p['deflection_source']}): a hoist or trolley "
+               f"on a member that sags more runs downhill and binds; the checks use the value "
+               f"written: write \"L/{p['deflection']:g}\" or remove deflection to use the "
+               "profile's limit", "criteria.deflection")
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -1227,6 +1251,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
+    _looser_than_lifting(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     for ws in moving:
