@@ -488,3 +488,40 @@ def test_below_the_hook_flange_check_carries_the_design_factor():
                    "wheel flange bending")
     assert plain.limit / KSI == pytest.approx(50 / 1.67, rel=1e-4)
     assert bth.demand == pytest.approx(plain.demand, rel=1e-9)  # no impact in either profile
+
+
+@pytest.mark.parametrize("material", [
+    'material = "6061-T6"',  # aluminium: the ADM checks bending, not the twist
+    '[beam.material]\ne = "29000 ksi"\nfy = "36 ksi"\ndensity = "490 lb/ft^3"',  # typed-in
+])
+def test_a_channel_of_any_metal_loaded_in_its_web_plane_is_not_rated_for_twist(material):
+    # the shear centre lies behind the web whatever the metal (common practice): a rating of
+    # an aluminium or typed-in channel must not rest on the twist it does not check
+    text = f"""schema = 1
+title = "channel shelf rail"
+[beam]
+length = "6 ft"
+{material}
+[beam.section]
+shape = "channel"
+depth = "6 in"
+flange_width = "2 in"
+flange_thickness = "0.25 in"
+web_thickness = "0.2 in"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "3 ft"
+value = "-200 lbf"
+"""
+    job = parse_job_text(text)
+    cap = capacity(job)
+    assert any(r.startswith("torsion from loads off the shear centre") for r in cap.not_rated)
+    held = capacity(parse_job_text(text.replace('length = "6 ft"',
+                                                'length = "6 ft"\nrestrained = true')))
+    assert not any(r.startswith("torsion from loads") for r in held.not_rated)

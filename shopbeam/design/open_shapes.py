@@ -504,16 +504,21 @@ def open_unchecked(job, st):
     out = []
     steel = getattr(job.material, "kind", "") in ("steel", "stainless")
     # a channel bent about its weak axis is loaded along its axis of symmetry, which holds
-    # the shear centre: no twist; a restrained member (beam.restrained) is held against it
-    if sec.shape in ("channel", "angle") and steel and not job.restrained and not (
+    # the shear centre: no twist; a restrained member (beam.restrained) is held against it.
+    # The twist is the shape's, whatever the metal: an aluminium or typed-in channel twists
+    # as a steel one does
+    kind = getattr(job.material, "kind", "")
+    if sec.shape in ("channel", "angle") and kind != "lumber" and not job.restrained and not (
             sec.shape == "channel" and sec.axis != "strong"):
+        clause = {"aluminum": "ADM 2015 chapter H (torsion, from memory)"}.get(
+            kind, "AISC 360-16 H3 / Design Guide 9")
         out.append(Unchecked(
             "torsion from loads off the shear centre",
             "the loads act off the shear centre and twist the member; the cautions give a "
             "rough figure, not a check (AISC Design Guide 9 method not applied), so no rating "
             "is posted on it. A deck, shelf or sheeting fastened along the member holds it "
             "against twist: say so with beam.restrained = true",
-            "AISC 360-16 H3 / Design Guide 9", blocks_rating=True))
+            clause, blocks_rating=True))
     if sec.shape == "tee" and sec.axis != "strong" and steel and st.basis == "asd":
         out.append(Unchecked("lateral-torsional and local buckling of a tee bent about its "
                              "weak axis", "F9 covers bending about the axis of symmetry only; "
