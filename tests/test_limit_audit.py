@@ -525,3 +525,75 @@ value = "-200 lbf"
     held = capacity(parse_job_text(text.replace('length = "6 ft"',
                                                 'length = "6 ft"\nrestrained = true')))
     assert not any(r.startswith("torsion from loads") for r in held.not_rated)
+
+
+# ------------------------------------------------------------------ typed-in metals (first yield)
+TYPED_METAL = '[beam.material]\ne = "29000 ksi"\nfy = "36 ksi"\ndensity = "490 lb/ft^3"'
+
+
+def typed_in(section: str, material: str = TYPED_METAL, extra: str = "", span_ft: int = 8):
+    return parse_job_text(f"""schema = 1
+title = "typed-in member"
+[beam]
+length = "{span_ft} ft"
+{extra}
+{material}
+[beam.section]
+{section}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "{span_ft} ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "{span_ft / 2} ft"
+value = "-10 lbf"
+""")
+
+
+def test_a_deep_bar_on_first_yield_is_not_rated_past_the_f11_slenderness():
+    # AISC 360-16 F11.2 (from memory): with Cb = 1, F11-2 reaches My at Lb d/t^2 = 1.9 E/Fy
+    # and F11-3 is below it beyond. 3 x 1/4 bar over 96 in: 96 x 3 / 0.0625 = 4608, over
+    # 1.9 x 29000 / 36 = 1530.6, so first yield is no bound and the rating must not rest on it
+    bar = 'shape = "rect-bar"\ndepth = "3 in"\nwidth = "0.25 in"'
+    cap = capacity(typed_in(bar))
+    why = [r for r in cap.not_rated if r.startswith("lateral-torsional buckling")]
+    assert why and "4608" in why[0] and "1531" in why[0] and "F11" in why[0]
+    assert not capacity(typed_in(bar, extra="braced = true")).not_rated  # held sideways
+    # a stocky bar (1 x 1/2 over 1 ft: 12 x 1 / 0.25 = 48) cannot buckle first: rated
+    assert not capacity(typed_in('shape = "rect-bar"\ndepth = "1 in"\nwidth = "0.5 in"',
+                                 span_ft=1)).not_rated
+    # the same bar in A36 is checked by F11 itself (AISC basis): rated on that check
+    steel = capacity(typed_in(bar, material='material = "A36"'))
+    assert not steel.not_rated
+    assert "F11" in next(c for c in steel.evaluation.checks if c.name == "bending").clause
+
+
+@pytest.mark.parametrize("section, slender", [
+    # rect tube flange b/t = (4 - 3 x 0.06) / 0.06 = 63.7 > 1.40 sqrt(29000 / 36) = 39.7
+    ('shape = "rect-tube"\ndepth = "4 in"\nwidth = "4 in"\nwall = "0.06 in"', "b/t = 63.7"),
+    # 2 x 2: b/t = 30.3, compact enough: first yield is reached
+    ('shape = "rect-tube"\ndepth = "2 in"\nwidth = "2 in"\nwall = "0.06 in"', None),
+    # round tube D/t = 300 > 0.31 x 29000 / 36 = 250 (AISC 360-16 Table B4.1b case 20)
+    ('shape = "round-tube"\nod = "6 in"\nwall = "0.02 in"', "D/t = 300"),
+])
+def test_a_slender_tube_on_first_yield_is_not_rated(section, slender):
+    # AISC 360-16 Table B4.1b cases 17 and 20 (from memory): a slender wall buckles before
+    # first yield, so a first-yield rating of it must not be posted
+    cap = capacity(typed_in(section, span_ft=4))
+    why = [r for r in cap.not_rated if r.startswith("local buckling")]
+    assert bool(why) == bool(slender)
+    if slender:
+        assert slender in why[0]
+
+
+def test_an_aluminium_section_typed_in_by_its_properties_is_not_rated():
+    # the ADM checks need the walls and the shape; typed-in area, I and S give neither (as a
+    # steel custom section is not rated for AISC 360-16 F1)
+    cap = capacity(typed_in('shape = "custom"\narea = "3 in^2"\nix = "8 in^4"\nsx = "3 in^3"',
+                            material='material = "6061-T6"'))
+    assert any(r.startswith("custom section local and lateral-torsional buckling")
+               for r in cap.not_rated)
+    assert cap.factor > 0  # the strength figure is still given, only not posted

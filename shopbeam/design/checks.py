@@ -203,6 +203,33 @@ def _unchecked_shape(shape: str) -> Unchecked:
                      "yield only", "AISC 360-16 F1")
 
 
+def _slender_wall(sec, mat) -> str:
+    """Why a tube's wall buckles before first yield (a slender element, AISC 360-16 Table
+    B4.1b cases 17, 19 and 20, from memory), or "" when it does not: first yield is then no
+    upper bound on its strength, so a rating on the first-yield basis must not rest on it."""
+    d = sec.dims
+    e, fy = getattr(mat, "e", 0.0), getattr(mat, "fy", 0.0)
+    t = d.get("t_des")
+    if not (e > 0 and fy > 0 and t):
+        return ""
+    root = math.sqrt(e / fy)
+    if sec.shape == "rect-tube" and d.get("b_flat") and d.get("h_flat"):
+        bt, ht = d["b_flat"] / t, d["h_flat"] / t
+        if bt > 1.40 * root:
+            return (f"its compression flange b/t = {bt:.3g} is over 1.40 sqrt(E/Fy) = "
+                    f"{1.40 * root:.3g} (slender, AISC 360-16 Table B4.1b): it buckles before "
+                    "first yield (F7-3)")
+        if ht > 5.70 * root:
+            return (f"its webs h/t = {ht:.3g} are over 5.70 sqrt(E/Fy) = {5.70 * root:.3g} "
+                    "(slender, AISC 360-16 Table B4.1b): first yield is not reached (F7.3)")
+    if sec.shape in ("round-tube", "pipe") and d.get("od"):
+        dt = d["od"] / t
+        if dt > 0.31 * e / fy:
+            return (f"its wall D/t = {dt:.3g} is over 0.31 E/Fy = {0.31 * e / fy:.3g} (slender, "
+                    "AISC 360-16 Table B4.1b): it buckles before first yield (F8-4)")
+    return ""
+
+
 def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
             service=None, system: str = "us") -> Flexure:
     """Bending strength of the section (SI) on the given basis (`service`: the wood keys,
@@ -222,9 +249,11 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
                               "or use basis = \"asd\" with a catalog section)",
                               "AISC 360-16 chapter F"),)
         if sec.shape not in ("round-bar", "rect-bar"):
+            slender = _slender_wall(sec, mat)
             unc += (Unchecked("local buckling", "the first-yield basis does not check thin "
-                              "walls or flanges for local buckling", "AISC 360-16 B4, chapter F",
-                              blocks_rating=False),)
+                              "walls or flanges for local buckling"
+                              + (f"; {slender}" if slender else ""),
+                              "AISC 360-16 B4, chapter F", blocks_rating=bool(slender)),)
         return Flexure(mat.fy * s, sf, f"f = M / S <= Fy / SF = Fy / {sf:g} (first yield)",
                        stress_s=s, unchecked=unc)
     fy, e = _fy_e(mat, basis, welded)
@@ -517,6 +546,15 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
                 f"an unbraced {shape} in aluminium may buckle sideways (ADM 2015 chapter F); "
                 "shopbeam does not compute it: brace the compression edge (braced = true, or "
                 "braces = [...]) or have it checked", "ADM 2015 chapter F"))
+    if shape == "custom":
+        # typed-in properties say nothing of the walls, flanges or the shape's stiffness
+        # against twist: neither kind of buckling can be ruled out (as for steel, F1)
+        out.append(Unchecked(
+            "custom section local and lateral-torsional buckling",
+            "a section typed in by its properties gives no walls or flanges to check for "
+            "local buckling (ADM 2015 B.5) and no shape for sideways buckling (ADM 2015 "
+            "chapter F); it is checked for yielding and rupture only: describe it by its "
+            "shape and dimensions, or have it checked", "ADM 2015 B.5, chapter F"))
     return out
 
 
@@ -781,8 +819,34 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
     fl, sh = _design_factor(job, sec, fl, sh)
+    extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
-                     member_unchecked(job, sec, fl), live_ratio=live_deflection_ratio(job))
+                     member_unchecked(job, sec, fl) + extra,
+                     live_ratio=live_deflection_ratio(job))
+
+
+def _deep_bar_first_yield(job, sec, basis: str, segs) -> tuple[Unchecked, ...]:
+    """A deep bar on the first-yield basis (a typed-in metal): sideways buckling is not
+    checked, and past Lb d/t^2 = 1.9 E / Fy it comes before first yield (AISC 360-16 F11-2
+    with Cb = 1 reaches My there, F11-3 is below it beyond), so the rating must not rest on
+    first yield alone."""
+    d = sec.dims
+    if basis != "first-yield" or sec.shape != "rect-bar" or not d.get("h", 0) > d.get("b", 0) > 0:
+        return ()
+    e, fy = getattr(job.material, "e", 0.0), getattr(job.material, "fy", 0.0)
+    if not (e > 0 and fy > 0):
+        return ()
+    lb = max((bb - a for a, bb, *_ in segs), default=0.0)
+    r = lb * d["h"] / d["b"] ** 2
+    if r <= 1.9 * e / fy:
+        return ()
+    return (Unchecked(
+        "lateral-torsional buckling",
+        f"a deep bar unbraced over {fmt(lb, 'length', job.units)}: Lb d/t^2 = {r:.4g} "
+        f"is over 1.9 E/Fy = {1.9 * e / fy:.4g}, where it buckles sideways below first yield "
+        "(AISC 360-16 F11-2/F11-3 with Cb = 1); the first-yield basis checks yielding only: "
+        "brace the compression edge (braced = true, or braces = [...]) or have it checked",
+        "AISC 360-16 F11.2"),)
 
 
 def _wood_load_case(job, a: float, b: float, free: bool) -> str:
