@@ -597,3 +597,48 @@ def test_an_aluminium_section_typed_in_by_its_properties_is_not_rated():
     assert any(r.startswith("custom section local and lateral-torsional buckling")
                for r in cap.not_rated)
     assert cap.factor > 0  # the strength figure is still given, only not posted
+
+
+# ------------------------------------------------------------------ stainless
+def stainless(section: str, span_ft: int, extra: str = ""):
+    return parse_job_text(f"""schema = 1
+title = "stainless rail at the wash station"
+[beam]
+length = "{span_ft} ft"
+section = "{section}"
+material = "304"
+{extra}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "{span_ft} ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "{span_ft / 2} ft"
+value = "-100 lbf"
+""")
+
+
+@pytest.mark.parametrize("section, span_ft, extra, why", [
+    # HSS6x6x1/8: flange b/t 48.7 > 1.40 sqrt(28000 / 30) = 42.8 (AISC 360-16 Table B4.1b)
+    ("HSS6x6x1/8", 10, "", "local buckling sets its strength (F7-3"),
+    # W8x18 over 16 ft: Lb past Lp = 1.76 ry sqrt(E/Fy) = 1.76 x 1.23 x 30.55 = 66 in
+    ("W8x18", 16, "", "lateral-torsional buckling can set its strength (unbraced 16 ft)"),
+    ("W8x18", 16, "braced = true", None),  # held sideways: yielding sets it
+    ("HSS4x4x1/4", 10, "", None),  # compact walls, no LTB: yielding sets it
+    ("WT4x9", 6, "", "its F9 strength"),  # tee rules mix in buckling
+])
+def test_stainless_is_not_rated_where_carbon_steel_buckling_rules_set_its_strength(
+        section, span_ft, extra, why):
+    # AISC 360-16 is written for carbon steel; stainless (AISC 370-21, from memory) buckles at
+    # less, so a rating must not rest on the carbon-steel buckling strength
+    job = stainless(section, span_ft, extra)
+    cap = capacity(job)
+    got = [r for r in cap.not_rated if r.startswith("stainless buckling strength")]
+    assert bool(got) == bool(why)
+    if why:
+        assert why in got[0] and "AISC 370-21" in got[0]
+    # every stainless job carries the caution, rated or not
+    assert any(c.startswith("Stainless steel is checked here") for c in analyze(job).cautions)

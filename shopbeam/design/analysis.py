@@ -75,6 +75,16 @@ OUTDOOR = ("Out of doors (a sign, awning or canopy) the member also takes wind, 
            "that applies (wind uplift as its own job, with uplift = true on the load).")
 
 
+# Stainless steel has no sharp yield point (a rounded stress-strain curve, Fy its 0.2 %
+# proof stress); AISC 360-16 is written for carbon steel, and stainless members are designed
+# by AISC 370-21 / AISC Design Guide 27, whose buckling rules give less (from memory).
+STAINLESS = ("Stainless steel is checked here by the AISC 360-16 carbon-steel rules with its "
+             "0.2 % proof stress as Fy; AISC 370-21 (stainless, from memory) governs it and "
+             "gives less where the member buckles, and a stainless member sags more than E "
+             "says once it is stressed past about half of Fy. Where buckling sets the bending "
+             "strength the member is NOT RATED.")
+
+
 def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
     out = cautions_for(job.tags, job.lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
@@ -89,6 +99,8 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
         out.append(RACK_IMPACT)
     if any(_OUTDOOR.search(t) for t in job.tags + (job.title,)):
         out.append(OUTDOOR)
+    if getattr(job.material, "kind", "") == "stainless":
+        out.append(STAINLESS)
     if sol is not None:
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:

@@ -820,9 +820,38 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     n, absolute, words = deflection_rule(job)
     fl, sh = _design_factor(job, sec, fl, sh)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
+    extra += _stainless_buckling(job, b, fl, segs)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
                      member_unchecked(job, sec, fl) + extra,
                      live_ratio=live_deflection_ratio(job))
+
+
+def _stainless_buckling(job, basis: str, fl: Flexure, segs) -> tuple[Unchecked, ...]:
+    """A stainless member whose bending strength is set by buckling (lateral-torsional at
+    Cb = 1, or local) rather than yielding: the AISC 360-16 carbon-steel buckling rules do not
+    hold for stainless (AISC 370-21, from memory), so no rating rests on them."""
+    if getattr(job.material, "kind", "") != "stainless" or basis != "asd":
+        return ()
+    why = ""
+    text = fl.cap_text
+    if fl.special:  # tees and angles: F9 / F10 mix yielding with buckling rules throughout
+        why = f"its {fl.special} strength (AISC 360-16 tee or angle rules) includes buckling"
+    elif ("local buckling" in text or "slender" in text) and not text.startswith("first yield"):
+        why = f"local buckling sets its strength ({text.split(': Mn')[0].split(' Mn')[0]})"
+    else:
+        short = [(bb - a, l1) for a, bb, _f, l1, _w in segs if l1 < fl.cap]
+        if short:
+            lb = max(s[0] for s in short)
+            why = (f"lateral-torsional buckling can set its strength (unbraced "
+                   f"{fmt(lb, 'length', job.units)})")
+    if not why:
+        return ()
+    return (Unchecked(
+        "stainless buckling strength",
+        f"{why}: that is the AISC 360-16 carbon-steel rule; stainless (rounded stress-strain "
+        "curve) buckles at less by AISC 370-21 (from memory), which shopbeam does not apply. "
+        "Brace it (braced = true, or braces = [...]), use a stockier section, or have it "
+        "checked", "AISC 370-21 chapter F"),)
 
 
 def _deep_bar_first_yield(job, sec, basis: str, segs) -> tuple[Unchecked, ...]:
