@@ -196,3 +196,102 @@ def test_confirm_lists_that_many_fully_checked_sections_lightest_first():
     assert weights == sorted(weights)
     bad = _run("size", job, "--kind", "W", "--confirm", "0")
     assert bad.returncode == 2 and "--confirm" in bad.stderr and "Traceback" not in bad.stderr
+
+
+STAINLESS_RAIL = """schema = 1
+title = "stainless rail at the wash station"
+[beam]
+length = "6 ft"
+section = "HSS2x2x1/8"
+material = "304"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "6 ft"
+value = "-100 lbf/ft"
+"""
+
+
+def test_listed_rows_say_not_rated_as_their_own_full_capacity_does():
+    # stainless HSS: some sections' bending is set by LTB or a slender wall (carbon-steel
+    # rules, not rated), others by yielding. Every listed row must say NOT RATED exactly when
+    # the section's own capacity withholds the rating, checked in full or not
+    from shopbeam.design.sizing import shown_rows
+
+    job = parse_job_text(STAINLESS_RAIL)
+    res = size(job, "HSS")
+    rows = shown_rows(res, 15)
+    assert any(r.not_rated for r in rows) and any(not r.not_rated for r in rows)
+    for r in rows:
+        full = capacity(replace(job, section=r.section, material=r.material))
+        assert bool(r.not_rated) == bool(full.not_rated), r.designation
+    # the lightest passing section is not rated here, so the sweep went on to a rated one
+    assert res.lightest.not_rated
+    rated = res.lightest_rated
+    assert rated is not None and rated.checked == "full" and not rated.not_rated
+    assert rated.weight >= res.lightest.weight
+    assert all(r.not_rated for r in res.passing if r.weight < rated.weight
+               and r.checked == "full")
+
+
+def test_size_cli_names_the_lightest_rated_section_and_json_marks_each_row(tmp_path):
+    p = tmp_path / "rail.toml"
+    p.write_text(STAINLESS_RAIL)
+    out = subprocess.run([sys.executable, "-m", "shopbeam", "size", str(p), "--kind", "HSS"],
+                         capture_output=True, text=True)
+    assert out.returncode == 0
+    res = size(parse_job_text(STAINLESS_RAIL), "HSS")
+    assert f"lightest that passes and is rated: {res.lightest_rated.designation}" in out.stdout
+    js = json.loads(subprocess.run([sys.executable, "-m", "shopbeam", "size", str(p), "--kind",
+                                    "HSS", "--json"], capture_output=True, text=True).stdout)
+    assert js["lightest_rated"] == res.lightest_rated.designation
+    assert all(r["rated"] == (not r["not_rated"]) for r in js["passing"])
+    assert any(not r["rated"] for r in js["passing"])
+
+
+def test_a_job_level_reason_holds_back_every_listed_row_wood_too():
+    # a load that points up with no uplift = true (a forgotten minus sign) withholds every
+    # rating; the sweep's rows say so, the wood sweep (section by section) as well
+    steel = RACK.replace('value = "-', 'value = "', 1)
+    res = size(parse_job_text(steel), "HSS")
+    from shopbeam.design.sizing import shown_rows
+
+    assert all(any("push UP" in w for w in r.not_rated) for r in shown_rows(res, 5))
+    wood = """schema = 1
+title = "shelf plank"
+[beam]
+length = "4 ft"
+section = "2x8"
+material = "SPF-2"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "4 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "2 ft"
+value = "150 lbf"
+"""
+    res = size(parse_job_text(wood), "lumber")
+    assert res.passing and all(any("push UP" in w for w in r.not_rated) for r in res.passing)
+
+
+def test_text_ui_size_list_marks_rows_that_are_not_rated():
+    from shopbeam.tui.slow import size_rows
+
+    job = parse_job_text(STAINLESS_RAIL)
+    rows, note = size_rows(job, "HSS", 15)
+    marked = {d for d, text in rows if text.endswith("NOT RATED")}
+    res = size(job, "HSS")
+    from shopbeam.design.sizing import shown_rows
+
+    assert marked == {r.designation for r in shown_rows(res, 15) if r.not_rated} != set()
+    assert all(len(text) <= 78 for _, text in rows)  # fits the 80-column list

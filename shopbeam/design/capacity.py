@@ -123,6 +123,16 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     """Why a capacity must not be posted: every limit state the member calls for that was not
     checked and would block a rating, a load that pushes up unmarked (a sign mistake), and any
     failed self-check of the solve."""
+    out = list(rating_gaps(job, st))
+    bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
+    if bad:
+        out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
+    return tuple(out)
+
+
+def rating_gaps(job, st) -> tuple[str, ...]:
+    """`not_rated_reasons` of the member and the job alone, without a solve's self-checks (a
+    sizing sweep asks it of sections it never solves one by one)."""
     every = list(st.unchecked) + local_unchecked(job, st.section) + open_unchecked(job, st)
     every += aluminum_unchecked(job, st.section)
     out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in every if u.blocks_rating]
@@ -136,9 +146,6 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
                    "impact allowance and the lifting deflection limit were not applied. Add "
                    "tags = [\"lifting\"], or the tag \"not-lifting\" if it is not one")
-    bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
-    if bad:
-        out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
     return tuple(out)
 
 

@@ -41,11 +41,11 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.capacity import capacity
+from shopbeam.design.capacity import capacity, rating_gaps
 from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
-                                    shear_strength, unbraced_segments)
+                                    shear_strength, strengths, unbraced_segments)
 from shopbeam.design.lifting import (DEFAULT_WHEEL_EDGE, OMEGA_WHEEL, flange_coefficients,
                                      flange_tf_at_wheel, profile_of)
 from shopbeam.design.loading import (_dummies, _positions, build_envelope, clip, evaluate,
@@ -117,6 +117,12 @@ class SizeResult:
     @property
     def lightest(self) -> SizeRow | None:
         p = self.passing
+        return p[0] if p else None
+
+    @property
+    def lightest_rated(self) -> SizeRow | None:
+        """The lightest passing section checked in full with no reason to withhold a rating."""
+        p = [r for r in self.passing if r.checked == "full" and not r.not_rated]
         return p[0] if p else None
 
     @property
@@ -928,6 +934,33 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
                    not_rated=why)
 
 
+def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
+    """The passing rows to list (all, or the first `top`), each with the rating gaps of its
+    section (limit states it calls for that are not checked, `capacity.rating_gaps`) when it
+    was not checked in full: a listed row must not read as rated when its section would not
+    be. Worked out only for the rows listed (a sweep passes hundreds), once per result."""
+    rows = res.passing if top is None else res.passing[:top]
+    memo = res.__dict__.setdefault("_gaps", {})
+    out = []
+    for r in rows:
+        if r.checked != "full" and not r.not_rated:
+            if r.designation not in memo:
+                j = replace(res.job, section=r.section, material=r.material)
+                try:
+                    memo[r.designation] = rating_gaps(j, strengths(j))
+                except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
+                    memo[r.designation] = (f"its rating could not be assessed ({exc})",)
+            if memo[r.designation]:
+                r = replace(r, not_rated=tuple(memo[r.designation]))
+        out.append(r)
+    return out
+
+
+# Past the lightest passing section that is NOT RATED, how many more passing ones are
+# checked in full looking for one that is rated (each a full check: evaluate + capacity)
+UNRATED_SKIP = 10
+
+
 def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool) -> int:
     """Check rows in full lightest first (and cheapest first with prices) until `confirm`
     of them pass, skipping screened rows whose lower-bound ratio already fails. Every row
@@ -941,7 +974,7 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
     want = len(rows) if len(rows) <= CHECK_ALL else confirm
     n = 0
     for order in orders:
-        found = 0
+        found = unrated = 0
         for i in order:
             r = rows[i]
             if r.checked == "screen" and r.ratio > 1 + SCREEN_TOL:
@@ -952,6 +985,9 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                 rows[i] = r = _full_row(job, r, with_capacity)
                 n += 1
             if r.ok:
+                if r.not_rated and unrated < UNRATED_SKIP:  # not posted: look for a rated one
+                    unrated += 1
+                    continue
                 found += 1
                 if found >= want:
                     break
@@ -1036,23 +1072,26 @@ def _slow(job, cands):
             continue
         g = max(ev.checks, key=lambda c: c.ratio)
         rows.append(SizeRow(des, sec, mat, sec.weight_per_length(mat.density), g.ratio, g.name,
-                            cap.factor, price, note, checked="full"))
+                            cap.factor, price, note, checked="full",
+                            not_rated=tuple(cap.not_rated)))
     return rows, skipped
 
 
 # ------------------------------------------------------------------ output
 def to_json(res: SizeResult, top: int | None = None) -> dict:
-    rows = res.passing if top is None else res.passing[:top]
+    rows = shown_rows(res, top)
 
     def row(r):
         return {"designation": r.designation, "mass_per_length": r.weight, "ratio": r.ratio,
                 "governing": r.governing, "factor": r.factor if math.isfinite(r.factor) else None,
                 "price_per_m": r.price_per_m, "material": getattr(r.material, "key", ""),
-                "checked": r.checked, "not_rated": list(r.not_rated)}
+                "checked": r.checked, "not_rated": list(r.not_rated),
+                "rated": not r.not_rated}
 
     return {"schema": 1, "title": res.job.title, "kind": res.kind, "swept": len(res.rows),
             "passing": [row(r) for r in rows], "seconds": res.seconds, "method": res.method,
             "lightest": res.lightest.designation if res.lightest else None,
+            "lightest_rated": res.lightest_rated.designation if res.lightest_rated else None,
             "cheapest": res.cheapest.designation if res.cheapest else None,
             "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags, res.job.lifting),
             "material": getattr(res.job.material, "key", ""),

@@ -8,7 +8,7 @@ import textwrap
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design.checks import BASIS_WORDS, basis_of
-from shopbeam.design.sizing import SizeResult
+from shopbeam.design.sizing import SizeResult, shown_rows
 
 
 def render(res: SizeResult, top: int = 15) -> str:
@@ -36,6 +36,14 @@ def render(res: SizeResult, top: int = 15) -> str:
                 "!! but it passes only the checks that were made: a limit state it calls for "
                 "is not checked (see NOT RATED below), so do not choose it on this sweep "
                 "alone; try another kind, or have it checked", 78, subsequent_indent="!! ")
+            rated = res.lightest_rated
+            if rated is not None:
+                lines.append(f"lightest that passes and is rated: {rated.designation} "
+                             f"({units.fmt(rated.weight, 'mass_per_length', sy)})")
+            else:
+                lines += textwrap.wrap(
+                    f"!! none of the {res.full_checks} sections checked in full is rated; "
+                    "--confirm N checks more", 78, subsequent_indent="!! ")
     if res.cheapest:
         c = res.cheapest
         cost = c.cost(job.length)
@@ -45,15 +53,19 @@ def render(res: SizeResult, top: int = 15) -> str:
     lines.append("")
     lines.append(f"  {'section':<22} {'weight':>12} {'ratio':>7} {'governing':<11} {'k':>7}"
                  + ("  price" if any(r.price_per_m is not None for r in res.rows) else ""))
-    for r in res.passing[:top]:
+    shown = shown_rows(res, top)
+    for r in shown:
         price = f"  {_money(r.price_per_m, sy)}" if r.price_per_m is not None else ""
         lines.append(f"  {r.designation[:22]:<22} {units.fmt(r.weight, 'mass_per_length', sy):>12} "
                      f"{r.ratio:7.3f} {r.governing:<11} {r.factor:7.3f}{price}"
                      + ("  NOT RATED" if r.not_rated else ""))
-    for r in res.passing[:top]:
+    groups: dict[str, list[str]] = {}  # one reason, the rows it holds back
+    for r in shown:
         for why in r.not_rated[:2]:
-            lines += textwrap.wrap(f"{r.designation} NOT RATED: {why}", 78,
-                                   initial_indent="  ", subsequent_indent="    ")
+            groups.setdefault(why, []).append(r.designation)
+    for why, names in groups.items():
+        lines += textwrap.wrap(f"{', '.join(names)} NOT RATED: {why}", 78,
+                               initial_indent="  ", subsequent_indent="    ")
     if not res.passing:
         lines.append("  no section passes; the closest:")
         for r in sorted(res.rows, key=lambda r: r.ratio)[:5]:
