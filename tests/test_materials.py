@@ -179,3 +179,55 @@ def test_cmd_materials_lists_every_material(capsys):
 ])
 def test_plausible_inline_materials_are_taken(spec):
     assert resolve_material(spec).fy > 0
+
+
+MIXED_JOB = """schema = 1
+title = "typed-in metal"
+[beam]
+length = "6 ft"
+[beam.material]
+{material}
+[beam.section]
+shape = "rect-tube"
+depth = "3 in"
+width = "2 in"
+wall = "0.125 in"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "3 ft"
+value = "-200 lbf"
+"""
+
+
+@pytest.mark.parametrize("material, warned", [
+    ('e = "10100 ksi"\nfy = "35 ksi"\ndensity = "490 lb/ft^3"', True),  # aluminium E, steel weight
+    ('e = "29000 ksi"\nfy = "36 ksi"\ndensity = "169 lb/ft^3"', True),  # steel E, aluminium weight
+    ('e = "1600 ksi"\nfy = "10 ksi"\ndensity = "490 lb/ft^3"', True),   # lumber E on a metal
+    ('e = "29000 ksi"\nfy = "36 ksi"\ndensity = "490 lb/ft^3"', False),
+    ('e = "10100 ksi"\nfy = "35 ksi"\ndensity = "0.0975 lb/in^3"', False),
+])
+def test_typed_in_e_and_density_of_two_materials_are_warned(material, warned):
+    # E / density is about 20 to 26 MN*m/kg for steel, aluminium and wood alike (common
+    # practice): far outside it, one figure is another material's
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    job = parse_job_text(MIXED_JOB.format(material=material))
+    w = [p for p in job.warnings if p.key == "beam.material" and p.warning]
+    assert bool(w) == warned
+    if warned:
+        assert "do not belong to one metal or wood" in w[0].message
+
+
+def test_every_built_in_material_lies_in_the_stiffness_per_weight_band():
+    # the band of the warning must never fire on the shipped data itself
+    from shopbeam.jobs.jobfile import SPECIFIC_STIFFNESS
+
+    lo, hi = SPECIFIC_STIFFNESS
+    for m in list_materials():
+        assert lo <= m.e / m.density <= hi, m.key

@@ -742,6 +742,27 @@ def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
         return None
 
 
+# Steel, aluminium, titanium and wood along the grain all have a stiffness per weight
+# E / density of about 20 to 26 MN*m/kg (common practice: 200 GPa / 7850, 69 GPa / 2700,
+# 11 GPa / 560). A typed-in material far outside 12 to 40 has one figure from another
+# material or unit (aluminium's E with steel's density).
+SPECIFIC_STIFFNESS = (12e6, 40e6)  # E / density, m^2/s^2
+
+
+def _mixed_material(r: _Reader, material, system: str) -> None:
+    ratio = material.e / material.density
+    lo, hi = SPECIFIC_STIFFNESS
+    if lo <= ratio <= hi:
+        return
+    e = units.fmt(material.e, "stress", system)
+    rho = units.fmt(material.density, "density", system)
+    r.warn(f"e = {e} and density = {rho} do not belong to one metal or wood: E / density is "
+           f"{ratio / 1e6:.3g} MN*m/kg, while steel, aluminium and wood all lie near 20 to 26 "
+           "(steel 29,000 ksi with 490 lb/ft^3, aluminium 10,100 ksi with 169 lb/ft^3); one of "
+           "them is another material's figure or unit. A plastic or composite differs: check "
+           "both against its data sheet", "beam.material")
+
+
 # Smallest section properties a real member can have (a 0.1 mm wire is ~1e-8 m^2): below
 # these the numbers are a typing slip, and the stresses would overflow.
 _SECTION_FLOORS = {"area": (1e-10, "area"), "ix": (1e-20, "ix"), "sx_top": (1e-15, "sx"),
@@ -1130,6 +1151,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     "beam.material")
         else:
             material = _resolve("material", beam["material"], "beam.material", r)
+            if material is not None and getattr(material, "source", "") == "typed in":
+                _mixed_material(r, material, system)
         if "section" not in beam:
             r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
                     "[beam.section] table)", "beam.section")
