@@ -945,15 +945,19 @@ def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
     for r in rows:
         if r.checked != "full" and not r.not_rated:
             if r.designation not in memo:
-                j = replace(res.job, section=r.section, material=r.material)
-                try:
-                    memo[r.designation] = rating_gaps(j, strengths(j))
-                except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
-                    memo[r.designation] = (f"its rating could not be assessed ({exc})",)
+                memo[r.designation] = _gaps_of(res.job, r)
             if memo[r.designation]:
                 r = replace(r, not_rated=tuple(memo[r.designation]))
         out.append(r)
     return out
+
+
+def _gaps_of(job, r: "SizeRow") -> tuple[str, ...]:
+    j = replace(job, section=r.section, material=r.material)
+    try:
+        return rating_gaps(j, strengths(j))
+    except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
+        return (f"its rating could not be assessed ({exc})",)
 
 
 # Past the lightest passing section that is NOT RATED, how many more passing ones are
@@ -982,6 +986,11 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
             if r.checked == "batched" and not r.ok:
                 continue
             if r.checked != "full":
+                # looking past a NOT RATED lightest for a rated one: a section whose own
+                # rating gaps already withhold it (wheels on a tube wall) is not worth a full
+                # check (its gaps are found in microseconds)
+                if unrated and _gaps_of(job, r):
+                    continue
                 rows[i] = r = _full_row(job, r, with_capacity)
                 n += 1
             if r.ok:

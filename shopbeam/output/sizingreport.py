@@ -40,6 +40,10 @@ def render(res: SizeResult, top: int = 15) -> str:
             if rated is not None:
                 lines.append(f"lightest that passes and is rated: {rated.designation} "
                              f"({units.fmt(rated.weight, 'mass_per_length', sy)})")
+            elif all(r.not_rated for r in shown_rows(res, top)):
+                lines += textwrap.wrap(
+                    "!! no listed section can be rated on this sweep (each is NOT RATED, see "
+                    "below)", 78, subsequent_indent="!! ")
             else:
                 lines += textwrap.wrap(
                     f"!! none of the {res.full_checks} sections checked in full is rated; "
