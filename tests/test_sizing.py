@@ -290,6 +290,7 @@ def test_text_ui_size_list_marks_rows_that_are_not_rated():
     job = parse_job_text(STAINLESS_RAIL)
     rows, note = size_rows(job, "HSS", 15)
     marked = {d for d, text in rows if text.endswith("NOT RATED")}
+    assert all("capacity x" not in text for d, text in rows if d in marked)  # none to post
     res = size(job, "HSS")
     from shopbeam.design.sizing import shown_rows
 

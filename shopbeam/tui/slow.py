@@ -346,10 +346,11 @@ def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
     rows = []
     for r in sizing.shown_rows(res, top):  # each with its rating gaps: NOT RATED is said
         k = "unlimited" if r.factor == float("inf") else f"{r.factor:.2f}"
+        # a section that would not be rated shows no capacity to post: NOT RATED in its place
         rows.append((r.designation,
                      f"{r.designation:<16} {units.fmt(r.weight, 'mass_per_length', sy):>11}"
-                     f"  ratio {r.ratio:.2f} {r.governing:<10} capacity x{k}"
-                     + ("  NOT RATED" if r.not_rated else "")))
+                     f"  ratio {r.ratio:.2f} {r.governing:<10} "
+                     + ("NOT RATED" if r.not_rated else f"capacity x{k}")))
     n = len(res.rows)
     note = (f"{len(passing)} of {n} {res.kind} sections pass; lightest first"
             + (f" (first {top} shown)" if len(passing) > top else "") + "."
