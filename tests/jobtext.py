@@ -11,3 +11,22 @@ e = "29000 ksi"
 fy = "46 ksi"
 density = "490 lb/ft^3"
 """
+
+
+def point_load(at_ft: float, value: str = "-100 lbf") -> str:
+    return f'[[loads]]\ntype = "point"\nat = "{at_ft:g} ft"\nvalue = "{value}"\n'
+
+
+def uniform_load(end_ft: float, value: str = "-100 lbf/ft") -> str:
+    return f'[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "{end_ft:g} ft"\nvalue = "{value}"\n'
+
+
+def simple_span(beam: str, span_ft: float = 6, load: str | None = None,
+                title: str = "shop member") -> str:
+    """A job on a pin and a roller at the ends. `beam`: the lines under [beam] after the length
+    (plain keys first, then any [beam.section] / [beam.material] table); `load`: [[loads]]
+    text (default 100 lbf down at mid-span)."""
+    load = point_load(span_ft / 2) if load is None else load
+    return (f'schema = 1\ntitle = "{title}"\n[beam]\nlength = "{span_ft:g} ft"\n{beam}\n'
+            f'[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "{span_ft:g} ft"\n'
+            f'type = "roller"\n{load}')

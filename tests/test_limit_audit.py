@@ -20,6 +20,8 @@ from shopbeam.output.capacityreport import render
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.output.label import label_text, rating
 
+from jobtext import point_load, simple_span
+
 LBF, IN, FT = 4.4482216152605, 0.0254, 0.3048
 KSI = 6894757.293168361
 
@@ -497,33 +499,14 @@ def test_below_the_hook_flange_check_carries_the_design_factor():
 def test_a_channel_of_any_metal_loaded_in_its_web_plane_is_not_rated_for_twist(material):
     # the shear centre lies behind the web whatever the metal (common practice): a rating of
     # an aluminium or typed-in channel must not rest on the twist it does not check
-    text = f"""schema = 1
-title = "channel shelf rail"
-[beam]
-length = "6 ft"
-{material}
-[beam.section]
-shape = "channel"
-depth = "6 in"
-flange_width = "2 in"
-flange_thickness = "0.25 in"
-web_thickness = "0.2 in"
-[[supports]]
-at = "0 ft"
-type = "pin"
-[[supports]]
-at = "6 ft"
-type = "roller"
-[[loads]]
-type = "point"
-at = "3 ft"
-value = "-200 lbf"
-"""
+    channel = ('[beam.section]\nshape = "channel"\ndepth = "6 in"\nflange_width = "2 in"\n'
+               'flange_thickness = "0.25 in"\nweb_thickness = "0.2 in"')
+    text = simple_span(f"{material}\n{channel}", 6, point_load(3, "-200 lbf"))
     job = parse_job_text(text)
     cap = capacity(job)
     assert any(r.startswith("torsion from loads off the shear centre") for r in cap.not_rated)
-    held = capacity(parse_job_text(text.replace('length = "6 ft"',
-                                                'length = "6 ft"\nrestrained = true')))
+    held = capacity(parse_job_text(simple_span(f"restrained = true\n{material}\n{channel}", 6,
+                                               point_load(3, "-200 lbf"))))
     assert not any(r.startswith("torsion from loads") for r in held.not_rated)
 
 
@@ -532,25 +515,8 @@ TYPED_METAL = '[beam.material]\ne = "29000 ksi"\nfy = "36 ksi"\ndensity = "490 l
 
 
 def typed_in(section: str, material: str = TYPED_METAL, extra: str = "", span_ft: int = 8):
-    return parse_job_text(f"""schema = 1
-title = "typed-in member"
-[beam]
-length = "{span_ft} ft"
-{extra}
-{material}
-[beam.section]
-{section}
-[[supports]]
-at = "0 ft"
-type = "pin"
-[[supports]]
-at = "{span_ft} ft"
-type = "roller"
-[[loads]]
-type = "point"
-at = "{span_ft / 2} ft"
-value = "-10 lbf"
-""")
+    return parse_job_text(simple_span(f"{extra}\n{material}\n[beam.section]\n{section}", span_ft,
+                                      point_load(span_ft / 2, "-10 lbf"), "typed-in member"))
 
 
 def test_a_deep_bar_on_first_yield_is_not_rated_past_the_f11_slenderness():
@@ -601,24 +567,8 @@ def test_an_aluminium_section_typed_in_by_its_properties_is_not_rated():
 
 # ------------------------------------------------------------------ stainless
 def stainless(section: str, span_ft: int, extra: str = ""):
-    return parse_job_text(f"""schema = 1
-title = "stainless rail at the wash station"
-[beam]
-length = "{span_ft} ft"
-section = "{section}"
-material = "304"
-{extra}
-[[supports]]
-at = "0 ft"
-type = "pin"
-[[supports]]
-at = "{span_ft} ft"
-type = "roller"
-[[loads]]
-type = "point"
-at = "{span_ft / 2} ft"
-value = "-100 lbf"
-""")
+    return parse_job_text(simple_span(f'section = "{section}"\nmaterial = "304"\n{extra}',
+                                      span_ft, title="stainless rail at the wash station"))
 
 
 @pytest.mark.parametrize("section, span_ft, extra, why", [

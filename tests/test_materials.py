@@ -7,6 +7,8 @@ import pytest
 from shopbeam.errors import InputError
 from shopbeam.members.materials import Material, list_materials, resolve_material
 
+from jobtext import point_load, simple_span
+
 KSI = 6894757.293168361  # Pa, exact from the international inch and pound-force
 PSI = KSI / 1000
 
@@ -181,28 +183,7 @@ def test_plausible_inline_materials_are_taken(spec):
     assert resolve_material(spec).fy > 0
 
 
-MIXED_JOB = """schema = 1
-title = "typed-in metal"
-[beam]
-length = "6 ft"
-[beam.material]
-{material}
-[beam.section]
-shape = "rect-tube"
-depth = "3 in"
-width = "2 in"
-wall = "0.125 in"
-[[supports]]
-at = "0 ft"
-type = "pin"
-[[supports]]
-at = "6 ft"
-type = "roller"
-[[loads]]
-type = "point"
-at = "3 ft"
-value = "-200 lbf"
-"""
+TUBE = '[beam.section]\nshape = "rect-tube"\ndepth = "3 in"\nwidth = "2 in"\nwall = "0.125 in"'
 
 
 @pytest.mark.parametrize("material, warned", [
@@ -217,7 +198,8 @@ def test_typed_in_e_and_density_of_two_materials_are_warned(material, warned):
     # practice): far outside it, one figure is another material's
     from shopbeam.jobs.jobfile import parse_job_text
 
-    job = parse_job_text(MIXED_JOB.format(material=material))
+    job = parse_job_text(simple_span(f"[beam.material]\n{material}\n{TUBE}", 6,
+                                     point_load(3, "-200 lbf"), "typed-in metal"))
     w = [p for p in job.warnings if p.key == "beam.material" and p.warning]
     assert bool(w) == warned
     if warned:

@@ -17,6 +17,8 @@ from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.design.loading import evaluate
 from shopbeam.design.sizing import size
 
+from jobtext import point_load, simple_span, uniform_load
+
 RACK = """schema = 1
 title = "Rack beam pair"
 [beam]
@@ -198,24 +200,8 @@ def test_confirm_lists_that_many_fully_checked_sections_lightest_first():
     assert bad.returncode == 2 and "--confirm" in bad.stderr and "Traceback" not in bad.stderr
 
 
-STAINLESS_RAIL = """schema = 1
-title = "stainless rail at the wash station"
-[beam]
-length = "6 ft"
-section = "HSS2x2x1/8"
-material = "304"
-[[supports]]
-at = "0 ft"
-type = "pin"
-[[supports]]
-at = "6 ft"
-type = "roller"
-[[loads]]
-type = "uniform"
-start = "0 ft"
-end = "6 ft"
-value = "-100 lbf/ft"
-"""
+STAINLESS_RAIL = simple_span('section = "HSS2x2x1/8"\nmaterial = "304"', 6, uniform_load(6),
+                             "stainless rail at the wash station")
 
 
 def test_listed_rows_say_not_rated_as_their_own_full_capacity_does():
@@ -263,23 +249,8 @@ def test_a_job_level_reason_holds_back_every_listed_row_wood_too():
     from shopbeam.design.sizing import shown_rows
 
     assert all(any("push UP" in w for w in r.not_rated) for r in shown_rows(res, 5))
-    wood = """schema = 1
-title = "shelf plank"
-[beam]
-length = "4 ft"
-section = "2x8"
-material = "SPF-2"
-[[supports]]
-at = "0 ft"
-type = "pin"
-[[supports]]
-at = "4 ft"
-type = "roller"
-[[loads]]
-type = "point"
-at = "2 ft"
-value = "150 lbf"
-"""
+    wood = simple_span('section = "2x8"\nmaterial = "SPF-2"', 4, point_load(2, "150 lbf"),
+                       "shelf plank")
     res = size(parse_job_text(wood), "lumber")
     assert res.passing and all(any("push UP" in w for w in r.not_rated) for r in res.passing)
 
