@@ -94,6 +94,14 @@ def test_slenderness_limits_of_6061_t6():
     assert lim["curved"] == pytest.approx(33.0, abs=0.2)
 
 
+def gaps(res) -> list[str]:
+    """The limit states left unchecked other than the web or walls under the support
+    reactions, which these jobs (spread loads only) carry as a caution, not a refusal."""
+    web = [u for u in res.unchecked if u.name.startswith("web crippling")]
+    assert all(not u.blocks_rating for u in web)
+    return [u.name for u in res.unchecked if u not in web]
+
+
 def test_thin_tube_flange_local_buckling_is_checked():
     # ADM 2015 B.5.4.2 with Table B.4.2 constants (from memory), 6061-T6 Fcy 35 ksi,
     # E 10,100 ksi: Bp 45.04, Dp 0.3008, lambda1 20.9, lambda2 = 0.35 Bp / (1.6 Dp) = 32.8.
@@ -104,7 +112,7 @@ def test_thin_tube_flange_local_buckling_is_checked():
     # (ADM 2015 F.8, from memory): Mnlb = Fc Sc over Omega 1.65
     thin = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.083 in" }'
     res = analyze(job(section=thin))
-    assert [u.name for u in res.unchecked] == []
+    assert gaps(res) == []
     b = check(res, "bending")
     sx = res.job.section.sx_top
     assert b.limit == pytest.approx(21.65 * KSI * sx / 1.65, rel=2e-3)
@@ -118,7 +126,7 @@ def test_thin_tube_flange_local_buckling_is_checked():
     # a stocky tube (flat b/t = (4 - 4 x 0.25) / 0.25 = 12 < 20.9) reaches yield first
     stocky = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.25 in" }'
     res = analyze(job(section=stocky))
-    assert res.unchecked == ()
+    assert gaps(res) == []
     assert "rupture" in check(res, "bending").formula
     assert "0.6 Fty Av" in check(res, "shear").formula
 
@@ -135,7 +143,7 @@ def test_i_beam_flange_outstand_between_the_limits():
     b = check(res, "bending")
     assert b.limit == pytest.approx(106.8e3 * LBF * IN, rel=3e-3)
     assert "flange outstand b/t 9.07" in b.formula
-    assert res.unchecked == ()
+    assert gaps(res) == []
 
 
 def test_channel_slender_outstand_and_welded_channel():

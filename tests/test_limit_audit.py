@@ -20,7 +20,7 @@ from shopbeam.output.capacityreport import render
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.output.label import label_text, rating
 
-from jobtext import point_load, simple_span
+from jobtext import point_load, simple_span, uniform_load
 
 LBF, IN, FT = 4.4482216152605, 0.0254, 0.3048
 KSI = 6894757.293168361
@@ -592,3 +592,42 @@ def test_stainless_is_not_rated_where_carbon_steel_buckling_rules_set_its_streng
         assert why in got[0] and "AISC 370-21" in got[0]
     # every stainless job carries the caution, rated or not
     assert any(c.startswith("Stainless steel is checked here") for c in analyze(job).cautions)
+
+
+# ------------------------------------------------------------------ aluminium and typed-in webs
+ALU_I = ('[beam.section]\nshape = "i-beam"\ndepth = "6 in"\nflange_width = "4 in"\n'
+         'flange_thickness = "0.3 in"\nweb_thickness = "0.2 in"')
+
+
+@pytest.mark.parametrize("material", ['material = "6061-T6"', TYPED_METAL])
+def test_a_point_load_on_an_aluminium_or_typed_in_web_is_not_rated(material):
+    # the J10 / K2 web rules here are for steel; the web under a point load between the
+    # supports can cripple first, so no rating rests on its absence (ADM chapter J, from memory)
+    point = capacity(parse_job_text(simple_span(f"braced = true\n{material}\n{ALU_I}", 6)))
+    assert any(r.startswith("web crippling and local yielding under concentrated forces")
+               for r in point.not_rated)
+    # a spread load meets the web only at the supports (seats): a caution, not a refusal
+    spread = analyze(parse_job_text(simple_span(f"braced = true\n{material}\n{ALU_I}", 6,
+                                                uniform_load(6, "-50 lbf/ft"))))
+    web = [u for u in spread.unchecked if u.name.startswith("web crippling")]
+    assert web and not web[0].blocks_rating
+
+
+@pytest.mark.parametrize("profile, blocked", [("powered-monorail", True),
+                                              ("hand-geared-monorail", False)])
+def test_first_yield_i_beam_under_a_powered_hoist_is_not_rated_for_the_lateral_force(
+        profile, blocked):
+    # AISC 360-16 H1-1b adds Mx / Mcx to My / Mcy and needs Mcx as a moment; the first-yield
+    # basis checks a stress, so the lateral trolley force (ASCE 7-16 4.9.4, 20 % powered, 0 %
+    # hand-geared, from memory) is not made there and a powered hoist gets no rating
+    text = simple_span(f'braced = true\nmaterial = "A36"\n{ALU_I}', 12,
+                       point_load(6, "-2000 lbf"), "hoist beam").replace(
+        'title = "hoist beam"', 'title = "hoist beam"\ntags = ["lifting"]')
+    text += f'[criteria]\nlifting = "{profile}"\nbasis = "first-yield"\n'
+    cap = capacity(parse_job_text(text))
+    lateral = [r for r in cap.not_rated if r.startswith("lateral trolley force")]
+    assert bool(lateral) == blocked
+    # on the AISC basis the check is made, and the hoist beam is rated on it
+    aisc = capacity(parse_job_text(text.replace('basis = "first-yield"\n', "")))
+    assert not [r for r in aisc.not_rated if r.startswith("lateral trolley force")]
+    assert ("lateral trolley force" in [c.name for c in aisc.checks]) == blocked

@@ -44,6 +44,7 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass, replace
 
+from shopbeam.design.basis import basis_of
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.model import Load
 from shopbeam.engine.solver import solve
@@ -350,10 +351,31 @@ def _i_shape(sec) -> bool:
     return sec.shape == "i-beam" and sec.axis == "strong"
 
 
+def _first_yield_lateral(job, sec) -> list:
+    """An I-beam on the first-yield basis (a typed-in metal, or basis = "first-yield"): the
+    lateral trolley force check adds Mx / Mcx to My / Mcy and needs the bending strength as a
+    moment (AISC 360-16 H1-1b), which that basis does not give, so it is not made; a powered
+    profile then gets no rating."""
+    prof = profile_of(job)
+    if not (prof and prof.lateral and (job.moving or _static_hoist(job))):
+        return []
+    if basis_of(job) != "first-yield":
+        return []
+    return [Unchecked("lateral trolley force (weak-axis bending of the bottom flange)",
+                      f"{prof.lateral:.0%} of rated load + hoist + trolley is checked with the "
+                      "AISC 360-16 H1-1b sum, which needs the bending strength as a moment; the "
+                      "first-yield basis checks a stress, so it is not made: use a catalog "
+                      "section and material (AISC basis), or name a hand-geared device with "
+                      "[criteria] lifting = \"hand-geared-monorail\" if the trolley is not "
+                      "powered", "ASCE 7-16 4.9.4; AISC 360-16 H1", blocks_rating=True)]
+
+
 def lifting_unchecked(job, sec) -> list:
     """Trolley-wheel and lateral-force limit states of sections these checks do not cover."""
-    if not (job.lifting or getattr(job.criteria, "lifting", "")) or _i_shape(sec):
+    if not (job.lifting or getattr(job.criteria, "lifting", "")):
         return []
+    if _i_shape(sec):
+        return _first_yield_lateral(job, sec)
     prof = profile_of(job)
     if not job.moving:
         if prof and prof.lateral and _static_hoist(job):

@@ -390,12 +390,38 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
                  clause=clause, source=src, params=params)
 
 
+def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
+    """Aluminium and typed-in metals: the web or tube wall under a concentrated force is not
+    checked (the J10 and K2 rules here are for steel). A point load or a wheel set on the span
+    then withholds the rating; at the supports alone it is a caution (a member bears on a
+    seat or bracket there, common practice)."""
+    if mkind not in ("aluminum", "custom"):
+        return []
+    if not ((sec.shape in ("i-beam", "channel") and sec.axis == "strong")
+            or sec.shape == "rect-tube"):
+        return []
+    points = [ld.key or "a point load" for ld in job.loads if ld.kind == "point" and ld.value]
+    points += [ws.key for ws in (getattr(job, "moving", ()) or ())]
+    what = "tube walls" if sec.shape == "rect-tube" else "web"
+    clause = ("ADM 2015 chapter J, concentrated forces (from memory)" if mkind == "aluminum"
+              else "AISC 360-16 J10 / K2 (written for steel, not applied to a typed-in metal)")
+    return [Unchecked(
+        "web crippling and local yielding under concentrated forces",
+        f"the {what} under a support reaction or a point load is not checked for "
+        f"{'aluminium' if mkind == 'aluminum' else 'a typed-in metal'}"
+        + (f"; {', '.join(points)} bear on it between the supports and can cripple it first, "
+           "so no rating is posted (spread the load with a bearing plate or stiffener, or have "
+           "it checked)" if points else " (bear the member on seats at the supports)"),
+        clause, blocks_rating=bool(points))]
+
+
 def local_unchecked(job, sec=None) -> list[Unchecked]:
     """Concentrated-force limit states this module does not check, for shapes it does not
     cover."""
     sec = sec or job.section
-    if getattr(job.material, "kind", "") not in ("steel", "stainless"):
-        return []
+    mkind = getattr(job.material, "kind", "")
+    if mkind not in ("steel", "stainless"):
+        return _other_metal_unchecked(job, sec, mkind)
     kind = applies(sec)
     out = []
     if kind == "hss":
