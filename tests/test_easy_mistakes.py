@@ -318,6 +318,28 @@ def test_size_lumber_on_a_steel_job_switches_to_a_stated_wood_material():
     assert "A36" in res.material_note and res.job.material.key in res.material_note
 
 
+@pytest.mark.parametrize("e, kind, switched", [
+    ("29000 ksi", "lumber", True),   # a typed-in metal swept as lumber sizes: wood instead
+    ("29000 ksi", "HSS", False),     # the typed-in metal on metal stock: kept
+    ("1600 ksi", "HSS", True),       # a typed-in wood swept as tubes: steel instead
+    ("1600 ksi", "lumber", False),
+])
+def test_size_of_another_family_on_a_typed_in_material_switches_and_says_so(e, kind, switched):
+    # a typed-in material is a metal or a wood by its stiffness (wood under about 20 GPa,
+    # metals over 40 GPa: common practice); a lumber size in steel is the mismatch refused
+    # elsewhere, so the sweep never makes one
+    rho = "490 lb/ft^3" if e.startswith("29") else "35 lb/ft^3"
+    text = job_text(section="FB4x1/2", material="X").replace(
+        'material = "X"', f'[beam.material]\ne = "{e}"\nfy = "30 ksi"\ndensity = "{rho}"')
+    text = text.replace('section = "FB4x1/2"\n', "") + \
+        '[beam.section]\nshape = "rect-bar"\ndepth = "4 in"\nwidth = "0.5 in"\n'
+    text = text.replace("[criteria]\n\n", "")
+    res = size(parse_job_text(text), kind, with_capacity=False)
+    assert bool(res.material_note and "typed-in" in res.material_note) == switched
+    if switched:  # every row in the stated material of the swept family
+        assert all((r.material.kind == "lumber") == (kind == "lumber") for r in res.rows)
+
+
 def test_size_steel_on_a_lumber_job_switches_to_steel(tmp_path):
     p = tmp_path / "job.toml"
     p.write_text(job_text(section="2x10", material="DF-L-2"))

@@ -266,14 +266,26 @@ def material_for_kind(job, kind: str):
     steel or a steel shape in wood."""
     mkind = getattr(job.material, "kind", "custom")
     wants_wood = kind in ("lumber", "LVL")
-    if mkind == "custom" or wants_wood == (mkind == "lumber"):
+    name = getattr(job.material, "key", "")
+    if mkind == "custom":
+        # a typed-in material is a metal or a wood by its stiffness: every wood is under
+        # about 20 GPa (3,000 ksi) and every structural metal over 40 GPa (common practice)
+        e = getattr(job.material, "e", 0.0)
+        mkind = "a typed-in wood" if e < WOOD_E_MAX else "a typed-in metal"
+        name = f"(E {units.fmt(e, 'stress', job.units)})"
+        if wants_wood == (e < WOOD_E_MAX):
+            return job, ""
+    elif wants_wood == (mkind == "lumber"):
         return job, ""
     key = FAMILY_DEFAULTS.get(kind, "A36")
     mat = get_material(key)
     note = (f"--kind {kind} is {'wood' if wants_wood else 'metal'} stock but the job's material "
-            f"{job.material.key} is {mkind}: swept in {mat.key} ({mat.name}) instead; give "
+            f"{name} is {mkind}: swept in {mat.key} ({mat.name}) instead; give "
             "beam.material in the job to choose another grade")
     return replace(job, material=mat), note
+
+
+WOOD_E_MAX = 30e9  # Pa: between the stiffest wood (about 20 GPa) and aluminium (69 GPa)
 
 
 def _candidates(job, kind, max_depth, stock):
