@@ -310,6 +310,30 @@ def test_a_lumber_size_in_lumber_and_a_flat_bar_in_steel_are_fine():
     parse_job_text(job_text(section="FB4x1/2", material="A36"))
 
 
+@pytest.mark.parametrize("section, e, refused", [
+    ("2x6", "29000 ksi", "a lumber size but the material is a typed-in metal"),
+    ("W8x18", "1600 ksi", "a metal shape (i-beam) but the material is a typed-in wood"),
+    ("W8x18", "29000 ksi", None),
+    ("2x6", "1600 ksi", None),
+])
+def test_a_typed_in_material_of_the_other_family_is_refused_as_a_named_one_is(section, e,
+                                                                               refused):
+    # a "2x6" in a typed-in steel would be checked and weighed as a member that does not exist
+    # (wood under about 20 GPa, metals over 40 GPa: common practice)
+    strength = 'fy = "36 ksi"' if e.startswith("29") else 'fb = "900 psi"'
+    rho = "490 lb/ft^3" if e.startswith("29") else "35 lb/ft^3"
+    text = job_text(section=section, material="X").replace(
+        'material = "X"', f'[beam.material]\ne = "{e}"\n{strength}\ndensity = "{rho}"')
+    text = text.replace(f'section = "{section}"\n', "").replace(
+        "[beam]\n", f'[beam]\nsection = "{section}"\n')
+    if refused:
+        with pytest.raises(InputErrors) as err:
+            parse_job_text(text)
+        assert refused in str(err.value) and "beam.section" in str(err.value)
+    else:
+        assert parse_job_text(text).section.designation.upper() == section.upper()
+
+
 def test_size_lumber_on_a_steel_job_switches_to_a_stated_wood_material():
     job = parse_job_text(job_text(section="FB4x1/2", material="A36"))
     res = size(job, "lumber", with_capacity=False)

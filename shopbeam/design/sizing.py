@@ -56,6 +56,7 @@ from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import segments, solve, solve_many
 from shopbeam.errors import InputError
+from shopbeam.jobs.rules import WOOD_E_MAX
 from shopbeam.members import catalog, wood
 from shopbeam.members.materials import get as get_material
 from shopbeam.members.sections import bending_ix, turn
@@ -268,8 +269,7 @@ def material_for_kind(job, kind: str):
     wants_wood = kind in ("lumber", "LVL")
     name = getattr(job.material, "key", "")
     if mkind == "custom":
-        # a typed-in material is a metal or a wood by its stiffness: every wood is under
-        # about 20 GPa (3,000 ksi) and every structural metal over 40 GPa (common practice)
+        # a typed-in material is a metal or a wood by its stiffness (jobs.rules.WOOD_E_MAX)
         e = getattr(job.material, "e", 0.0)
         mkind = "a typed-in wood" if e < WOOD_E_MAX else "a typed-in metal"
         name = f"(E {units.fmt(e, 'stress', job.units)})"
@@ -284,8 +284,6 @@ def material_for_kind(job, kind: str):
             "beam.material in the job to choose another grade")
     return replace(job, material=mat), note
 
-
-WOOD_E_MAX = 30e9  # Pa: between the stiffest wood (about 20 GPa) and aluminium (69 GPa)
 
 
 def _candidates(job, kind, max_depth, stock):

@@ -28,7 +28,7 @@ from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
 from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
-                                 LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, Basis)
+                                 LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis)
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.resolve import resolve_section
@@ -938,6 +938,22 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
         return
     lumber_size = is_wood_size(section)
     mkind = getattr(material, "kind", "custom")
+    if mkind == "custom":
+        # a typed-in material without a kind is a wood or a metal by its stiffness (wood
+        # under about 20 GPa, metals over 40 GPa, common practice): a lumber size in a
+        # typed-in metal, or a rolled shape in a typed-in wood, is the same mismatch
+        e = getattr(material, "e", 0.0)
+        typed = "a typed-in " + ("wood" if e < WOOD_E_MAX else "metal")
+        if lumber_size and e >= WOOD_E_MAX or (
+                not lumber_size and e < WOOD_E_MAX and is_steel_shape(section)):
+            r.error(f"section {section.designation!r} is "
+                    + ("a lumber size" if lumber_size else f"a metal shape ({section.shape})")
+                    + f" but the material is {typed} (e = {units.fmt(e, 'stress', system)}): "
+                    + ("give kind = \"lumber\" with the wood's values, or a metal section "
+                       "([beam.section] shape = \"rect-bar\" with its sizes)" if lumber_size
+                       else "check e (steel is 29,000 ksi, aluminium 10,100 ksi), or give a "
+                       "lumber size with kind = \"lumber\""), "beam.section")
+            return
     if lumber_size and mkind in ("steel", "stainless", "aluminum"):
         r.error(f"section {section.designation!r} is a lumber size (sawn or LVL) but material "
                 f"{material.key!r} is {mkind}: give a wood material (e.g. material = "

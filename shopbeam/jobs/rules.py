@@ -71,3 +71,8 @@ LIFTING_PROFILES: dict[str, dict] = {
         "nd": {"A": 2.0, "B": 3.0}, "deflection": 450.0,
         "deflection_source": "L/450 (common practice; ASME BTH-1 sets no limit)"},
 }
+
+
+# A typed-in material given no kind is a wood or a metal by its stiffness: every wood is
+# under about 20 GPa (3,000 ksi), every structural metal over 40 GPa (common practice)
+WOOD_E_MAX = 30e9  # Pa
