@@ -631,3 +631,14 @@ def test_first_yield_i_beam_under_a_powered_hoist_is_not_rated_for_the_lateral_f
     aisc = capacity(parse_job_text(text.replace('basis = "first-yield"\n', "")))
     assert not [r for r in aisc.not_rated if r.startswith("lateral trolley force")]
     assert ("lateral trolley force" in [c.name for c in aisc.checks]) == blocked
+
+
+@pytest.mark.parametrize("material", ['material = "A500-C-round"', 'material = "6061-T6"',
+                                      TYPED_METAL])
+def test_a_round_tube_under_a_point_load_says_its_wall_is_not_checked(material):
+    # AISC 360-16 Table K2.1 (steel) is not applied; aluminium and typed-in metals get the same
+    # caution (a caution: a round wall spreads the load round its ring, common practice)
+    tube = '[beam.section]\nshape = "round-tube"\nod = "2.375 in"\nwall = "0.154 in"'
+    res = analyze(parse_job_text(simple_span(f"{material}\n{tube}", 6)))
+    wall = [u for u in res.unchecked if u.name == "round HSS wall under a concentrated force"]
+    assert wall and not wall[0].blocks_rating and "loads[0]" in wall[0].reason

@@ -390,6 +390,27 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
                  clause=clause, source=src, params=params)
 
 
+def _span_forces(job) -> list[str]:
+    """The point loads and wheel sets of the job (concentrated forces between the supports)."""
+    points = [ld.key or "a point load" for ld in job.loads if ld.kind == "point" and ld.value]
+    return points + [ws.key for ws in (getattr(job, "moving", ()) or ())]
+
+
+def _round_wall(job, clause: str) -> Unchecked:
+    """A round tube's wall under a concentrated force is not checked: a caution, naming the
+    point loads and wheels that bear on it (a round wall spreads a load round its ring and is
+    seldom the weak spot of a shop pipe or tube; a narrow strap or hook on a thin wall is the
+    case to have checked)."""
+    points = _span_forces(job)
+    return Unchecked("round HSS wall under a concentrated force",
+                     "local plastification of a round wall at supports and point loads is not "
+                     "checked (bear it on a saddle)"
+                     + (f"; {', '.join(points)} bear on the wall between the supports: on a "
+                        "thin wall hang them from a saddle or sleeve, not a narrow strap or "
+                        "hook" if points else ""),
+                     clause, blocks_rating=False)
+
+
 def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
     """Aluminium and typed-in metals: the web or tube wall under a concentrated force is not
     checked (the J10 and K2 rules here are for steel). A point load or a wheel set on the span
@@ -397,11 +418,14 @@ def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
     seat or bracket there, common practice)."""
     if mkind not in ("aluminum", "custom"):
         return []
+    if sec.shape in ("round-tube", "pipe"):
+        return [_round_wall(job, "ADM 2015 chapter J, concentrated forces (from memory)"
+                            if mkind == "aluminum" else "AISC 360-16 K2, Table K2.1 (written "
+                            "for steel, not applied to a typed-in metal)")]
     if not ((sec.shape in ("i-beam", "channel") and sec.axis == "strong")
             or sec.shape == "rect-tube"):
         return []
-    points = [ld.key or "a point load" for ld in job.loads if ld.kind == "point" and ld.value]
-    points += [ws.key for ws in (getattr(job, "moving", ()) or ())]
+    points = _span_forces(job)
     what = "tube walls" if sec.shape == "rect-tube" else "web"
     clause = ("ADM 2015 chapter J, concentrated forces (from memory)" if mkind == "aluminum"
               else "AISC 360-16 J10 / K2 (written for steel, not applied to a typed-in metal)")
@@ -447,10 +471,7 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                              "the flange edges; no check is made", "AISC 360-16 J10",
                              blocks_rating=False))
     elif sec.shape in ("round-tube", "pipe"):
-        out.append(Unchecked("round HSS wall under a concentrated force",
-                             "local plastification of a round wall at supports and point "
-                             "loads is not checked (bear it on a saddle)",
-                             "AISC 360-16 K2, Table K2.1", blocks_rating=False))
+        out.append(_round_wall(job, "AISC 360-16 K2, Table K2.1"))
     elif sec.shape in ("tee", "angle"):
         # at a support the member bears on a bracket or seat (common practice: not the weak
         # spot); a point load or a wheel on a single leg or stem bends it locally, and that is
