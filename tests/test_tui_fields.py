@@ -368,3 +368,23 @@ async def test_a_wood_key_on_steel_shows_the_readers_warning(tmp_path):
         await pick(pilot, wet, "n")
         assert s.doc.get("beam.wet_service") is None
         assert not app.job_screen.query_one("#mat-wood").display
+
+
+@sync
+async def test_a_warning_on_the_whole_material_is_shown_in_the_material_view(tmp_path):
+    # a typed-in material with aluminium's E and steel's density (jobs.jobfile._mixed_material)
+    # warns on beam.material as a whole: no one field holds it, so the view shows it under the
+    # material in use, as the report does under INPUT WARNINGS
+    path = job_copy(tmp_path, "demo")
+    # the table follows the plain [beam] keys (self_weight is the last of them in the demo)
+    text = path.read_text().replace('material = "A992"\n', "").replace(
+        "self_weight = true\n", 'self_weight = true\n[beam.material]\ne = "10100 ksi"\n'
+        'fy = "35 ksi"\ndensity = "490 lb/ft^3"\n')
+    assert parse_job_text(text).material.source == "typed in"
+    path.write_text(text)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await goto(pilot, "5")
+        props = str(app.job_screen.query_one("#mat-props").render())
+        assert "warning: e = 10100 ksi and density = 490 lb/ft^3 do not belong" in props

@@ -877,6 +877,8 @@ class MaterialView(View):
                      f"  {shown}  density {units.fmt(m.density, 'density', sy)}"]
             if m.source:
                 lines.append(f"  values: {m.source}")
+            if msg:  # a warning on the material as a whole (a grade the product is not made
+                lines.append(msg)  # to, an E and a density of two materials)
             props.update(_text(fit_text("\n".join(lines), self.wrap_width())))
         else:
             props.update(_text(f"problem: {msg}" if msg else "In use: (not readable yet)"))
