@@ -211,3 +211,35 @@ def test_typed_job_fields_for_the_local_checks():
     with pytest.raises(InputErrors) as e:
         _job(extra_beam='restrained = "yes"')
     assert "beam.restrained" in str(e.value)
+
+
+@pytest.mark.parametrize("lifting", [False, True])
+def test_vectorised_sizing_allowables_equal_the_section_by_section_ones(lifting):
+    # the sweep's vectorised local allowables (sizing_allowables_many) against the scalar
+    # limit_states path, name and number, over every branch: near and far from the end (J10-3
+    # and J10-5 forms, 10 tf), bearing given or not (lb = k at an end reaction), pulling and
+    # bearing, trolley wheels (no J10.1 under them on a lifting job), webs and tube walls
+    from dataclasses import replace as _replace
+    from pathlib import Path
+
+    from shopbeam.design import local as L
+    from shopbeam.jobs.jobfile import load_job
+    from shopbeam.members import catalog
+    from shopbeam.members.materials import get
+
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "demo.toml")
+    job = _replace(job, tags=("lifting",) if lifting else ())
+    secs = [s for k in ("W", "S", "C", "MC", "HSS", "M") for s in catalog.list_sections(k)][::7]
+    secs = [s for s in secs if L.applies(s)]
+    mats = [get("A992") if L.applies(s) == "web" else get("A500-C") for s in secs]
+    items = [(at, face, lb, moving, 0.0, 0.0, 0.0, sup)
+             for at in (0.0, 0.05, 0.2, job.length / 2) for face in ("top", "bottom")
+             for lb in (None, 0.1) for moving in (False, True) for sup in (False, True)]
+    (pv, pn), (bv, bn) = L.sizing_allowables_many(job, secs, mats, items)
+    assert {"web crippling", "wall crippling", "flange local bending"} <= set(bn.ravel()) | \
+        set(pn.ravel())
+    for i, (s, m) in enumerate(zip(secs, mats)):
+        pu, be = L.sizing_allowables(job, s, m, items)
+        for j in range(len(items)):
+            assert pv[i, j] == pytest.approx(pu[j][0], rel=1e-12) and pn[i, j] == pu[j][1]
+            assert bv[i, j] == pytest.approx(be[j][0], rel=1e-12) and bn[i, j] == be[j][1]

@@ -343,6 +343,86 @@ def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
     return pull, bear
 
 
+def sizing_allowables_many(job, secs, mats, items):
+    """`sizing_allowables` for many sections at once (a sizing sweep), vectorised over the
+    sections: (pull, bear), each (allowables (S, items), names (S, items)). Every section
+    must have a local limit state (`applies`) and a steel or stainless material; the
+    numbers are those of `limit_states`, equation for equation (tested equal)."""
+    S, n = len(secs), len(items)
+    scale = design_factor_scale(job)
+    lifting, length = job.lifting, job.length
+    out = {sign: (np.full((S, n), math.inf), np.full((S, n), "", dtype=object))
+           for sign in (1.0, -1.0)}
+    kinds = np.array([applies(s) for s in secs])
+    fy = np.array([m.fy for m in mats])
+    e = np.array([m.e for m in mats])
+    for kind in ("web", "hss"):
+        sel = np.flatnonzero(kinds == kind)
+        if not len(sel):
+            continue
+        ss = [secs[i] for i in sel]
+        f_y, e_ = fy[sel], e[sel]
+        if kind == "web":
+            tw = np.array([s.dims["tw"] for s in ss])
+            tf = np.array([s.dims["tf"] for s in ss])
+            dd = np.array([s.dims["d"] for s in ss])
+            kd = np.array([s.dims["kdes"] for s in ss])
+            webs = np.array([2.0 if s.shape == "double-channel" else 1.0 for s in ss])
+        else:
+            t_ = np.array([s.dims["t_des"] for s in ss])
+            h_ = np.array([s.dims["h"] for s in ss])
+            kr = np.array([s.dims.get("r_out") or 1.5 * s.dims["t_des"] for s in ss])
+            qf = np.array([hss_qf_lower(s) for s in ss])
+        for j, it in enumerate(items):
+            at, face, lb0, moving = it[:4]
+            support = len(it) > 7 and bool(it[7])
+            end = max(0.0, min(at, length - at))
+            lb = np.full(len(sel), lb0 if lb0 is not None else 0.0)
+            for sign in (1.0, -1.0):
+                pulls = sign > 0  # (top, +1) and (bottom, -1) pull: see sizing_allowables
+                states = []  # (name, Rn array, Omega), in limit_states order
+                if kind == "web":
+                    lbw = np.where((lb0 is None) & support & (end <= dd), kd, lb)
+                    rn = np.where(end > dd, f_y * tw * (5 * kd + lbw),
+                                  f_y * tw * (2.5 * kd + lbw))
+                    states.append(("web local yielding", webs * rn, OMEGA_WLY))
+                    if pulls:
+                        if not (lifting and moving):
+                            rn = 6.25 * f_y * tf**2 * np.where(end < 10 * tf, 0.5, 1.0)
+                            states.append(("flange local bending", rn, OMEGA_FLB))
+                    else:
+                        root = np.sqrt(e_ * f_y * tf / tw)
+                        r = (tw / tf) ** 1.5
+                        ld = lbw / dd
+                        rn = np.where(end >= dd / 2, 0.80 * tw**2 * (1 + 3 * ld * r) * root,
+                                      np.where(ld <= 0.2, 0.40 * tw**2 * (1 + 3 * ld * r) * root,
+                                               0.40 * tw**2 * (1 + (4 * ld - 0.2) * r) * root))
+                        states.append(("web crippling", webs * rn, OMEGA_WCR))
+                else:
+                    rn = np.where(end > h_, 2 * f_y * t_ * (5 * kr + lb),
+                                  2 * f_y * t_ * (2.5 * kr + lb))
+                    states.append(("wall local yielding", rn, OMEGA_WLY))
+                    if not pulls:
+                        hw = h_ - 3 * t_
+                        root = np.sqrt(e_ * f_y) * qf
+                        rn = np.where(end >= h_ / 2, 1.6 * t_**2 * (1 + 3 * lb / hw) * root,
+                                      np.where(lb / hw <= 0.2,
+                                               0.8 * t_**2 * (1 + 3 * lb / hw) * root,
+                                               0.8 * t_**2 * (1 + (4 * lb / hw - 0.2)) * root))
+                        states.append(("wall crippling", rn, OMEGA_WCR))
+                vals, names = out[sign]
+                best = np.full(len(sel), math.inf)
+                name = np.full(len(sel), "", dtype=object)
+                for nm, rn, om in states:  # strictly less: the first of equals, as the scalar
+                    a = rn / (om * scale)
+                    take = a < best
+                    best = np.where(take, a, best)
+                    name = np.where(take, nm, name)
+                vals[sel, j] = best
+                names[sel, j] = name
+    return out[1.0], out[-1.0]
+
+
 def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
     params_lb = f.bearing if f.bearing is not None else 0.0
     end = max(0.0, min(f.at, job.length - f.at))

@@ -773,7 +773,6 @@ def _batched(job, base, parts, cands, with_capacity):
         flv = np.array([it[6] for it in items]).T
         al_pull = np.empty((R, n_it))
         al_bear = np.empty((R, n_it))
-        nm_pull, nm_bear = [], []
         # an allowable reads the force's distance from the member end only against d, h and
         # 10 tf (local.limit_states): forces farther in than all of those share one value
         far = 1.01 * max(max(r[1].depth, 10 * r[1].dims.get("tf", 0.0)) for r in rs)
@@ -786,16 +785,20 @@ def _batched(job, base, parts, cands, with_capacity):
             keys.append(uniq[key])
         reps = [(k_[0],) + k_[1:4] + (0.0, 0.0, 0.0, k_[4]) for k_ in uniq]
         keys = np.array(keys)
-        none = ([(math.inf, "")] * len(reps),) * 2
-        for i, r in enumerate(rs):
-            # (no local limit state for this section: local.limit_states gives none)
-            pu, be = (_local.sizing_allowables(job, r[1], r[2], reps)
-                      if _local.applies(r[1]) and getattr(r[2], "kind", "") in
-                      ("steel", "stainless") else none)
-            al_pull[i] = np.array([x[0] for x in pu])[keys]
-            al_bear[i] = np.array([x[0] for x in be])[keys]
-            nm_pull.append([pu[j][1] for j in keys])
-            nm_bear.append([be[j][1] for j in keys])
+        # every section with a local limit state at once (local.sizing_allowables_many);
+        # the others have none (local.limit_states gives none): inf, no name
+        ok = [i for i, r in enumerate(rs) if _local.applies(r[1])
+              and getattr(r[2], "kind", "") in ("steel", "stainless")]
+        pv, bv = np.full((R, len(reps)), math.inf), np.full((R, len(reps)), math.inf)
+        pn = np.full((R, len(reps)), "", dtype=object)
+        bn = np.full((R, len(reps)), "", dtype=object)
+        if ok:
+            (a, an), (b, bnm) = _local.sizing_allowables_many(
+                job, [rs[i][1] for i in ok], [rs[i][2] for i in ok], reps)
+            pv[ok], pn[ok], bv[ok], bn[ok] = a, an, b, bnm
+        al_pull[:], al_bear[:] = pv[:, keys], bv[:, keys]
+        nm_pull = [list(row) for row in pn[:, keys]]
+        nm_bear = [list(row) for row in bn[:, keys]]
     if wheels is not None:
         wx, wd, wl = wheels
         per = ws.wheels_per_axle
