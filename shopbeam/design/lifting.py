@@ -48,7 +48,7 @@ from shopbeam.design.basis import basis_of
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.model import Load
 from shopbeam.engine.solver import solve
-from shopbeam.jobs.rules import LIFTING_PROFILES
+from shopbeam.jobs.rules import LIFTING_PROFILES, guessed_profile
 from shopbeam.units import fmt
 
 DEFAULT_WHEEL_EDGE = 0.25 * 0.0254  # m: wheel contact 1/4 in from the flange tip (stated)
@@ -74,9 +74,7 @@ def profile_of(job) -> Profile | None:
     if not name:
         if not job.lifting:
             return None
-        fixed = [s for s in job.supports if s.takes_force]
-        free_end = _has_free_end(job)
-        name = "jib-boom" if free_end and fixed else "powered-monorail"
+        name = guessed_profile(job.supports, job.length)
         guessed = True
     p = LIFTING_PROFILES[name]
     nd = None
@@ -96,12 +94,6 @@ def profile_of(job) -> Profile | None:
              + f"; deflection {p['deflection_source']}")
     return Profile(name, p["impact"], p["lateral"], p["longitudinal"], nd, p["deflection"],
                    words, guessed)
-
-
-def _has_free_end(job) -> bool:
-    tol = 1e-9 * job.length
-    held = [s.at for s in job.supports if s.takes_force]
-    return not held or min(held) > tol or max(held) < job.length - tol
 
 
 # ------------------------------------------------------------------ wheel loads on a flange

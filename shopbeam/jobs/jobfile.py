@@ -28,7 +28,8 @@ from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support
 from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
-                                 LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis)
+                                 LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
+                                 guessed_profile)
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.resolve import resolve_section
@@ -865,12 +866,7 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
     if not name:
         if not is_lifting(tags):
             return
-        # the profile tags = ["lifting"] picks (design/lifting.profile_of): a jib boom when
-        # an end is free, else a powered monorail
-        held = [s.at for s in supports if s.takes_force]
-        tol = 1e-9 * length
-        free = not held or min(held) > tol or max(held) < length - tol
-        name = "jib-boom" if free and held else "powered-monorail"
+        name = guessed_profile(supports, length)  # as design/lifting.profile_of picks it
     p = LIFTING_PROFILES[name]
     if criteria.deflection_ratio < p["deflection"]:
         r.warn(f"deflection = {criteria.deflection!r} is looser than the L/{p['deflection']:g} "

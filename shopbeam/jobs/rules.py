@@ -73,6 +73,16 @@ LIFTING_PROFILES: dict[str, dict] = {
 }
 
 
+def guessed_profile(supports, length: float) -> str:
+    """The lifting profile tags = ["lifting"] picks when none is named, the most demanding
+    that fits: a jib boom when the member is held but an end is free, else a powered
+    monorail."""
+    tol = 1e-9 * length
+    held = [s.at for s in supports if s.takes_force]
+    free_end = not held or min(held) > tol or max(held) < length - tol
+    return "jib-boom" if free_end and held else "powered-monorail"
+
+
 # A typed-in material given no kind is a wood or a metal by its stiffness: every wood is
 # under about 20 GPa (3,000 ksi), every structural metal over 40 GPa (common practice)
 WOOD_E_MAX = 30e9  # Pa
