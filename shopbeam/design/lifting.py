@@ -343,7 +343,7 @@ def _i_shape(sec) -> bool:
     return sec.shape == "i-beam" and sec.axis == "strong"
 
 
-def _first_yield_lateral(job, sec) -> list:
+def _first_yield_lateral(job) -> list:
     """An I-beam on the first-yield basis (a typed-in metal, or basis = "first-yield"): the
     lateral trolley force check adds Mx / Mcx to My / Mcy and needs the bending strength as a
     moment (AISC 360-16 H1-1b), which that basis does not give, so it is not made; a powered
@@ -367,7 +367,7 @@ def lifting_unchecked(job, sec) -> list:
     if not (job.lifting or getattr(job.criteria, "lifting", "")):
         return []
     if _i_shape(sec):
-        return _first_yield_lateral(job, sec)
+        return _first_yield_lateral(job)
     prof = profile_of(job)
     if not job.moving:
         if prof and prof.lateral and _static_hoist(job):

@@ -556,9 +556,7 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
         # at a support the member bears on a bracket or seat (common practice: not the weak
         # spot); a point load or a wheel on a single leg or stem bends it locally, and that is
         # not computed, so no rating rests on it
-        points = [ld.key or "a point load" for ld in job.loads
-                  if ld.kind == "point" and ld.value]
-        points += [ws.key for ws in (getattr(job, "moving", ()) or ())]
+        points = _span_forces(job)
         out.append(Unchecked("stem or leg local yielding under a concentrated force",
                              "concentrated forces at supports and point loads of tees and "
                              "angles are not checked locally"
