@@ -14,6 +14,7 @@ from shopbeam.design.sizing import SizeResult, shown_rows
 def render(res: SizeResult, top: int = 15) -> str:
     job = res.job
     sy = job.units
+    shown = shown_rows(res, top)  # the listed rows, each with its rating gaps
     lines = [f"shopbeam size: {job.title}", "=" * 78]
     lines.append(f"swept {len(res.rows)} sections ({res.kind}) in {res.seconds * 1000:.0f} ms; "
                  f"{len(res.passing)} pass; {res.method}")
@@ -40,7 +41,7 @@ def render(res: SizeResult, top: int = 15) -> str:
             if rated is not None:
                 lines.append(f"lightest that passes and is rated: {rated.designation} "
                              f"({units.fmt(rated.weight, 'mass_per_length', sy)})")
-            elif all(r.not_rated for r in shown_rows(res, top)):
+            elif all(r.not_rated for r in shown):
                 lines += textwrap.wrap(
                     "!! no listed section can be rated on this sweep (each is NOT RATED, see "
                     "below)", 78, subsequent_indent="!! ")
@@ -57,7 +58,6 @@ def render(res: SizeResult, top: int = 15) -> str:
     lines.append("")
     lines.append(f"  {'section':<22} {'weight':>12} {'ratio':>7} {'governing':<11} {'k':>7}"
                  + ("  price" if any(r.price_per_m is not None for r in res.rows) else ""))
-    shown = shown_rows(res, top)
     for r in shown:
         price = f"  {_money(r.price_per_m, sy)}" if r.price_per_m is not None else ""
         lines.append(f"  {r.designation[:22]:<22} {units.fmt(r.weight, 'mass_per_length', sy):>12} "
