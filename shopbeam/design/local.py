@@ -322,32 +322,14 @@ def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:
     return out
 
 
-def sizing_allowables(job, sec, mat, items) -> tuple[list, list]:
-    """Per item: (allowable, name) when the force pulls and when it bears (inf: none)."""
-    pull, bear = [], []
-    scale = design_factor_scale(job)
-    lifting, length = job.lifting, job.length
-    for it in items:
-        at, face, lb, moving = it[:4]
-        support = len(it) > 7 and bool(it[7])
-        row = []
-        for sign in (1.0, -1.0):
-            f = Force(at, sign if face == "top" else -sign, face, lb, "", moving, support)
-            best = (math.inf, "")
-            for name, rn, _eq, omega, _c, _x in limit_states(sec, mat, length, f, lifting):
-                if rn / (omega * scale) < best[0]:
-                    best = (rn / (omega * scale), name)
-            row.append(best)
-        pull.append(row[0])
-        bear.append(row[1])
-    return pull, bear
-
-
 def sizing_allowables_many(job, secs, mats, items):
-    """`sizing_allowables` for many sections at once (a sizing sweep), vectorised over the
-    sections: (pull, bear), each (allowables (S, items), names (S, items)). Every section
-    must have a local limit state (`applies`) and a steel or stainless material; the
-    numbers are those of `limit_states`, equation for equation (tested equal)."""
+    """The local allowable of every item (at, face, lb, moving, ..., support) on many
+    sections at once (a sizing sweep), vectorised over the sections: the least Rn / (Omega x
+    design factor scale) of the `limit_states` that apply, when the force pulls and when it
+    bears: (pull, bear), each (allowables (S, items), names (S, items); inf and "" where
+    none applies). Every section must have a local limit state (`applies`) and a steel or
+    stainless material; the numbers are those of `limit_states`, equation for equation
+    (tested equal, force by force)."""
     S, n = len(secs), len(items)
     scale = design_factor_scale(job)
     lifting, length = job.lifting, job.length
@@ -379,7 +361,7 @@ def sizing_allowables_many(job, secs, mats, items):
             end = max(0.0, min(at, length - at))
             lb = np.full(len(sel), lb0 if lb0 is not None else 0.0)
             for sign in (1.0, -1.0):
-                pulls = sign > 0  # (top, +1) and (bottom, -1) pull: see sizing_allowables
+                pulls = sign > 0  # a force + up on the top face or - up on the bottom pulls
                 states = []  # (name, Rn array, Omega), in limit_states order
                 if kind == "web":
                     lbw = np.where((lb0 is None) & support & (end <= dd), kd, lb)
