@@ -6,7 +6,6 @@
 from __future__ import annotations
 
 import re
-
 from dataclasses import dataclass
 
 from shopbeam import units

@@ -285,7 +285,6 @@ def material_for_kind(job, kind: str):
     return replace(job, material=mat), note
 
 
-
 def _candidates(job, kind, max_depth, stock):
     """[(designation, section, material, price_per_m, note)] to sweep."""
     weak = getattr(job.section, "axis", "strong") == "weak"
@@ -1014,7 +1013,6 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                 if found >= want:
                     break
     return n
-
 
 
 def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:

@@ -164,7 +164,7 @@ def sample(pw, length: float, n: int = 400) -> tuple[list[float], list[float]]:
     """Points along a piecewise function, with both one-sided values at every break
     (evaluated all at once)."""
     xs = unique(np.concatenate([np.linspace(0.0, length, n),
-                                   np.asarray(pw.breaks, dtype=float)]))
+                                np.asarray(pw.breaks, dtype=float)]))
     left = np.asarray(pw(xs, "left"), dtype=float)
     right = np.asarray(pw(xs, "right"), dtype=float)
     jump = np.abs(left - right) > 1e-12 * (np.abs(left) + np.abs(right) + 1e-30)
