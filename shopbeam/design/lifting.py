@@ -266,7 +266,7 @@ def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
             return None
         lat = [Load("point", at=ld.at, value=prof.lateral * abs(
             ld.value if ld.case == "dead" else ld.value / (1 + impact))) for ld in wheels]
-    flange = solve(replace(sol.beam, ei=1.0, loads=tuple(lat)))
+    flange = solve(replace(sol.beam, ei=1.0, loads=tuple(lat)), candidates=False)
     mny, how = flange_weak_strength(sec, mat)
     mcy = mny / 1.67
     # the sum |Mx| / Mcx + |My| / Mcy peaks at a wheel, a support (a cantilever's root, a

@@ -954,10 +954,12 @@ def _combinations(job, ss, static, static_loads, st, mv, kk, P):
     for name in ("shear", "moment", "deflection"):
         yield "total", name, static.function(name), P
     if st.live_ratio:
-        live = solve(replace(ss.beam, loads=tuple(ld for ld in static_loads if ld.case != "dead")))
+        live = solve(replace(ss.beam, loads=tuple(ld for ld in static_loads if ld.case != "dead")),
+                     candidates=False)
         yield "live", "deflection", live.function("deflection"), kk * np.array(mv.live)
     if getattr(st.flexure, "wood", None) is not None:
-        dead = solve(replace(ss.beam, loads=tuple(ld for ld in static_loads if ld.case == "dead")))
+        dead = solve(replace(ss.beam, loads=tuple(ld for ld in static_loads if ld.case == "dead")),
+                     candidates=False)
         for name in ("shear", "moment", "deflection"):
             yield "dead", name, dead.function(name), np.array(mv.dead, float)
 

@@ -388,13 +388,16 @@ EXACT_BUDGET = 4000  # breaks x (unknowns + 1) up to which the exact fallback ru
 ILL = 1e10  # condition number past which float rounding could reach 2e-6 of the answer
 
 
-def solve(beam: Beam, length_fmt=None, exact: bool | None = None) -> Solution:
+def solve(beam: Beam, length_fmt=None, exact: bool | None = None,
+          candidates: bool = True) -> Solution:
     """Solve the beam. Raises UnstableBeam for rigid-body motion or a mechanism.
 
     `length_fmt` formats positions in messages (default: feet and inches). The linear system
     is solved in floating point; when it is ill-conditioned (supports or hinges very close
     together for the length, extreme springs) it is solved again in exact rational
     arithmetic, so rounding never decides the answer. `exact=True` forces that path.
+    `candidates=False` leaves the extreme candidates to be found on first use (for a
+    solution that is only evaluated at points, or whose extremes of one function are read).
     Raises InputError when the answer cannot be computed accurately.
     """
     problems = validate_geometry(beam)
@@ -404,7 +407,7 @@ def solve(beam: Beam, length_fmt=None, exact: bool | None = None) -> Solution:
     # numbers are checked for being finite below; numpy's own warnings would only reach the
     # terminal as noise
     with np.errstate(all="ignore"):
-        sol = _solve(beam, length_fmt, exact)
+        sol = _solve(beam, length_fmt, exact, candidates)
         bad = not all(np.all(np.isfinite(f.coeffs)) for f in
                       (sol.load, sol.shear, sol.moment, sol.slope, sol.deflection))
         bad = bad or not all(math.isfinite(r.force) and math.isfinite(r.moment)
@@ -416,7 +419,7 @@ def solve(beam: Beam, length_fmt=None, exact: bool | None = None) -> Solution:
     return sol
 
 
-def _solve(beam: Beam, length_fmt, exact: bool | None) -> Solution:
+def _solve(beam: Beam, length_fmt, exact: bool | None, candidates: bool = True) -> Solution:
     L, ei = beam.length, beam.ei
     unknowns = _unknowns(beam)
     nz = len(unknowns)
@@ -498,11 +501,11 @@ def _solve(beam: Beam, length_fmt, exact: bool | None) -> Solution:
         if final is None:
             raise UnstableBeam("the supports and hinges leave the beam free to move: "
                                "add a support or fix one end")
-        return _finish(beam, breaks, final, z, unknowns, condition, True)
+        return _finish(beam, breaks, final, z, unknowns, condition, True, candidates)
     z = y / cs
     w = np.concatenate([[1.0], z])
     final = states @ w  # (P + 1, 6)
-    return _finish(beam, breaks, final, z, unknowns, condition, False)
+    return _finish(beam, breaks, final, z, unknowns, condition, False, candidates)
 
 
 def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> list[Solution]:
