@@ -811,10 +811,11 @@ def _batched(job, base, parts, cands, with_capacity):
     # sections in chunks so that the largest working array stays within CHUNK_BYTES
     P, w = M.live.shape[1], max(M.live.shape[2], U.live.shape[2])
     chunk = max(1, int(CHUNK_BYTES // (8 * S * P * w * 2)))
-    slices = [slice(i, min(R, i + chunk)) for i in range(0, R, chunk)]
+    def chunks(rows):  # the sections, as arrays of row numbers of at most `chunk` each
+        return [rows[i:i + chunk] for i in range(0, len(rows), chunk)]
 
     def local_ratio(kk, sl, want_name=False):
-        n = sl.stop - sl.start
+        n = len(sl)
         if not n_it:
             return np.zeros(n), [""] * n
         force = (fa[None] + wsw[sl, None, None] * fs[None] + kk[:, None, None] * flv[None])
@@ -830,13 +831,13 @@ def _batched(job, base, parts, cands, with_capacity):
         names = []
         for i in range(n):
             s_, j = divmod(int(idx[i]), n_it)
-            g = sl.start + i
+            g = int(sl[i])
             names.append(nm_pull[g][j] if pulls[i, s_, j] else nm_bear[g][j])
         return worst, names
 
     def combo(q, kk, sl, live_only=False):
         f, s, lv, lf = q.parts(corr, sl)
-        n = sl.stop - sl.start
+        n = len(sl)
         k4 = kk[:, None, None, None]
         if live_only:
             out = k4 * lv if lf is None else lf + k4 * lv
@@ -845,7 +846,7 @@ def _batched(job, base, parts, cands, with_capacity):
         return np.broadcast_to(out, (n, S) + out.shape[2:])
 
     def chunk_ratios(k, sl):
-        n = sl.stop - sl.start
+        n = len(sl)
         kk = k * (1 + imp)
         mco = combo(M, kk, sl)
         bend = np.zeros(n)
@@ -893,11 +894,16 @@ def _batched(job, base, parts, cands, with_capacity):
         allr = np.stack(rows)
         return allr.max(axis=0), allr.argmax(axis=0)
 
-    def ratios(k):
-        """(R,) governing ratio and (R,) index of the governing check at factors k."""
-        out_r, out_i = np.empty(R), np.empty(R, int)
-        for sl in slices:
-            out_r[sl], out_i[sl] = chunk_ratios(k[sl], sl)
+    def ratios(k, rows=None):
+        """Governing ratio and index of the governing check at factors k, of every section
+        (R,) or of the sections numbered in `rows` (k and both answers then len(rows),): a
+        section's figures do not depend on which others are worked out with it."""
+        rows = np.arange(R) if rows is None else np.asarray(rows, int)
+        out_r, out_i = np.empty(len(rows)), np.empty(len(rows), int)
+        at = 0
+        for sl in chunks(rows):
+            out_r[at:at + len(sl)], out_i[at:at + len(sl)] = chunk_ratios(k[at:at + len(sl)], sl)
+            at += len(sl)
         return out_r, out_i
 
     r1, gi = ratios(np.ones(R))
@@ -907,8 +913,8 @@ def _batched(job, base, parts, cands, with_capacity):
     else:
         k = np.full(R, np.nan)
     local_names = []
-    for sl in slices:
-        local_names += local_ratio(np.ones(sl.stop - sl.start) * (1 + imp), sl, True)[1]
+    for sl in chunks(np.arange(R)):
+        local_names += local_ratio(np.ones(len(sl)) * (1 + imp), sl, True)[1]
     names = ("bending", "shear", "deflection", "live deflection", None, "wheel flange bending")
     # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
     # each unbraced length, principal axes); the batch leaves their bending out, so their
@@ -1016,7 +1022,18 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
 
 
 def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
-    """k with governing ratio 1 for every section at once (Illinois regula falsi, bracketed)."""
+    """k with governing ratio 1 for every section at once (Illinois regula falsi, bracketed).
+    `ratios(k, rows)` gives the governing ratios of the sections numbered in rows; each step
+    works out only the sections whose k is still moving."""
+
+    def at(k, which):
+        """The ratios at k of the sections where `which` holds (NaN elsewhere)."""
+        out = np.full(R, np.nan)
+        rows = np.flatnonzero(which)
+        if rows.size:
+            out[rows] = ratios(k[rows], rows)[0]
+        return out
+
     g0, _ = ratios(np.zeros(R))
     g1 = ratios(np.ones(R))[0] if g1 is None else g1  # the ratios at the entered loads
     live = g0 <= 1.0
@@ -1029,10 +1046,11 @@ def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
     lo = np.where(over, np.minimum(est, 1.0) * (1 - 1e-9), 1.0)
     hi = np.where(over, 1.0, np.maximum(est, 1.0) * (1 + 1e-9))
     lo = np.where(live, lo, 0.0)
-    flo = ratios(lo)[0] - 1.0
+    # one end of each bracket is k = 1, whose ratios are known (g1)
+    flo = np.where(over, at(lo, live & over), g1) - 1.0
     bad = live & (flo > 0)
     lo, flo = np.where(bad, 0.0, lo), np.where(bad, g0 - 1.0, flo)
-    fhi = ratios(hi)[0] - 1.0
+    fhi = np.where(over, g1, at(hi, live & ~over)) - 1.0
     for _ in range(40):
         need = live & (fhi <= 0)
         if not need.any():
@@ -1040,7 +1058,7 @@ def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
         lo = np.where(need, hi, lo)
         flo = np.where(need, fhi, flo)
         hi = np.where(need, hi * 4, hi)
-        fhi = np.where(need, ratios(hi)[0] - 1.0, fhi)
+        fhi = np.where(need, at(hi, need) - 1.0, fhi)
     bounded = live & (fhi > 0)
     side = np.zeros(R)
     for _ in range(100):
@@ -1048,9 +1066,11 @@ def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
         done = ~bounded | (width <= 1e-13 * np.maximum(hi, 1e-300)) | (np.abs(flo) <= 1e-13)
         if done.all():
             break
-        x = np.where(fhi != flo, (lo * fhi - hi * flo) / np.where(fhi != flo, fhi - flo, 1), 0.5 * (lo + hi))
+        with np.errstate(divide="ignore", invalid="ignore"):
+            x = np.where(fhi != flo, (lo * fhi - hi * flo) / np.where(fhi != flo, fhi - flo, 1),
+                         0.5 * (lo + hi))
         x = np.where((x <= lo) | (x >= hi) | ~np.isfinite(x), 0.5 * (lo + hi), x)
-        fx = ratios(x)[0] - 1.0
+        fx = at(x, ~done) - 1.0
         up = (fx <= 0) & ~done
         dn = (fx > 0) & ~done
         lo, flo = np.where(up, x, lo), np.where(up, fx, flo)
