@@ -225,11 +225,16 @@ def _absmax_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
             np.maximum.at(best, rows, np.abs(_horner(flat[rows], tau * hh[rows])))
     best = best.reshape(n, S, P)
     tol = 1e-9 * (breaks[0, -1] - breaks[0, 0])
-    real = np.arange(P)[None, :] < nreal[:, None]
-    out = []
-    for a, b in intervals:
-        m = (breaks[:, :-1] >= a - tol) & (breaks[:, 1:] <= b + tol) & real
-        out.append(np.where(m[None], best, 0.0).max(axis=2))
+    out = [np.zeros((n, S)) for _ in intervals]
+    for s in range(S):
+        # the pieces of an interval are a run of each state's real pieces (breaks ascend):
+        # those starting at a or later and ending at b or sooner
+        left, right = breaks[s, :nreal[s]], breaks[s, 1:nreal[s] + 1]
+        for o, (a, b) in zip(out, intervals):
+            j0 = int(np.searchsorted(left, a - tol, side="left"))
+            j1 = int(np.searchsorted(right, b + tol, side="right"))
+            if j1 > j0:
+                o[:, s] = np.maximum(best[:, s, j0:j1].max(axis=1), 0.0)
     return out
 
 
