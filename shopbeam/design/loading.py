@@ -395,7 +395,13 @@ class Envelopes:
         return a if abs(a.value) >= abs(b.value) else b
 
     def reactions(self) -> list[dict]:
-        """Per support: the largest upward and downward force over all patterns."""
+        """Per support: the largest upward and downward force over all patterns (worked out
+        once; read-only)."""
+        if "_reactions" not in self.__dict__:
+            self._reactions = self._work_out_reactions()
+        return self._reactions
+
+    def _work_out_reactions(self) -> list[dict]:
         ss, kk = self.ss, self.kk
         out = []
         for j, r in enumerate(ss.fixed.reactions):
