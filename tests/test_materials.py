@@ -213,3 +213,43 @@ def test_every_built_in_material_lies_in_the_stiffness_per_weight_band():
     lo, hi = SPECIFIC_STIFFNESS
     for m in list_materials():
         assert lo <= m.e / m.density <= hi, m.key
+
+
+@pytest.mark.parametrize("kind, material, warned", [
+    ("steel", 'e = "10100 ksi"\nfy = "35 ksi"\ndensity = "169 lb/ft^3"', True),  # aluminium
+    ("lumber", 'e = "29000 ksi"\nfy = "1 ksi"\ndensity = "490 lb/ft^3"', True),  # steel as wood
+    ("aluminum", 'e = "29000 ksi"\nfy = "35 ksi"\ndensity = "490 lb/ft^3"', True),
+    ("stainless", 'e = "1600 ksi"\nfy = "30 ksi"\ndensity = "35 lb/ft^3"', True),  # wood's E
+    ("steel", 'e = "200 GPa"\nfy = "250 MPa"\ndensity = "7850 kg/m^3"', False),
+    ("steel", 'e = "30000 ksi"\nfy = "36 ksi"\ndensity = "490 lb/ft^3"', False),
+    ("stainless", 'e = "28000 ksi"\nfy = "30 ksi"\ndensity = "500 lb/ft^3"', False),
+    ("aluminum", 'e = "70 GPa"\nfy = "240 MPa"\ndensity = "2700 kg/m^3"', False),
+    ("lumber", 'e = "1600 ksi"\nfy = "0.9 ksi"\ndensity = "35 lb/ft^3"', False),
+    ("custom", 'e = "16000 ksi"\nfy = "50 ksi"\ndensity = "280 lb/ft^3"', False),  # titanium
+])
+def test_a_typed_in_kind_that_e_contradicts_is_warned(kind, material, warned):
+    # the kind picks the rules (AISC steel, ADM aluminium, NDS wood): a kind whose E is
+    # another family's is a slip in one of the two (jobs.jobfile.KIND_E)
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    sec = '[beam.section]\nshape = "rect-bar"\ndepth = "5.5 in"\nwidth = "1.5 in"' \
+        if kind == "lumber" else TUBE
+    job = parse_job_text(simple_span(f'[beam.material]\nkind = "{kind}"\n{material}\n{sec}',
+                                     6, point_load(3, "-200 lbf"), "typed-in kind"))
+    w = [p for p in job.warnings if p.key == "beam.material" and p.warning
+         and "is outside the range of" in p.message]
+    assert bool(w) == warned
+    if warned:
+        assert f'kind = "{kind}"' in w[0].message
+
+
+def test_every_built_in_material_has_an_e_inside_its_kind_band():
+    # the bands of the warning must never fire on the shipped data itself
+    from shopbeam import units
+    from shopbeam.jobs.jobfile import KIND_E, kind_for_e
+
+    for m in list_materials():
+        if m.kind in KIND_E:
+            lo, hi = KIND_E[m.kind]
+            assert lo <= m.e / units.KSI <= hi, m.key
+            assert kind_for_e(m.e) == ("steel" if m.kind == "stainless" else m.kind), m.key

@@ -764,6 +764,46 @@ def _mixed_material(r: _Reader, material, system: str) -> None:
            "both against its data sheet", "beam.material")
 
 
+# The elastic modulus of each kind a typed-in material can name (common practice, values
+# from memory): carbon and stainless steels 28,000 to 30,000 ksi (AISC 360-16 takes 29,000;
+# 200 to 210 GPa in metric tables); aluminium alloys 10,000 to 10,800 ksi (ADM 2015 Table
+# A.3.4, 6061-T6 10,100 ksi); wood along the grain under 3,000 ksi (NDS Supplement: sawn
+# lumber 0.9 to 2.0 million psi, LVL and glulam up to about 2.3). The bands leave a margin.
+KIND_E = {"steel": (26_000, 31_500), "stainless": (26_000, 31_500),
+          "aluminum": (9_000, 11_500), "lumber": (0, 3_500)}  # ksi
+_KIND_WORDS = {"steel": "steel", "stainless": "stainless steel", "aluminum": "aluminium",
+               "lumber": "wood"}
+
+
+def kind_for_e(e: float) -> str:
+    """The material kind whose band holds the elastic modulus e (Pa), or "custom"."""
+    ksi = e / units.KSI
+    return next((k for k in ("steel", "aluminum", "lumber")
+                 if KIND_E[k][0] <= ksi <= KIND_E[k][1]), "custom")
+
+
+def _kind_mismatch(r: _Reader, material, system: str) -> None:
+    """A typed-in material whose kind says one family and whose E another: the kind picks
+    the rules (AISC steel, ADM aluminium, NDS wood), so one of the two is a slip."""
+    kind = getattr(material, "kind", "custom")
+    if kind not in KIND_E:
+        return
+    lo, hi = KIND_E[kind]
+    ksi = material.e / units.KSI
+    if lo <= ksi <= hi:
+        return
+    e = units.fmt(material.e, "stress", system)
+    like = kind_for_e(material.e)
+    fix = (f"kind = \"{like}\" if it is {_KIND_WORDS[like]}" if like != "custom"
+           else "kind = \"custom\" (first-yield checks) if it is neither")
+    gpa = f"{lo * units.KSI / 1e9:.0f} to {hi * units.KSI / 1e9:.0f} GPa"
+    band = (f"{lo:,} to {hi:,} ksi, {gpa}" if lo else
+            f"under {hi:,} ksi, {hi * units.KSI / 1e9:.0f} GPa")
+    r.warn(f"kind = \"{kind}\" but e = {e} is outside the range of {_KIND_WORDS[kind]} "
+           f"({band}): the {_KIND_WORDS[kind]} rules would be applied to another material. "
+           f"Check e and its unit, or give {fix}", "beam.material")
+
+
 # Smallest section properties a real member can have (a 0.1 mm wire is ~1e-8 m^2): below
 # these the numbers are a typing slip, and the stresses would overflow.
 _SECTION_FLOORS = {"area": (1e-10, "area"), "ix": (1e-20, "ix"), "sx_top": (1e-15, "sx"),
@@ -1165,6 +1205,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             material = _resolve("material", beam["material"], "beam.material", r)
             if material is not None and getattr(material, "source", "") == "typed in":
                 _mixed_material(r, material, system)
+                _kind_mismatch(r, material, system)
         if "section" not in beam:
             r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
                     "[beam.section] table)", "beam.section")
