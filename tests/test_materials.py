@@ -253,3 +253,19 @@ def test_every_built_in_material_has_an_e_inside_its_kind_band():
             lo, hi = KIND_E[m.kind]
             assert lo <= m.e / units.KSI <= hi, m.key
             assert kind_for_e(m.e) == ("steel" if m.kind == "stainless" else m.kind), m.key
+
+
+@pytest.mark.parametrize("kind, e, rated", [("steel", "10100 ksi", False),
+                                            ("aluminum", "29000 ksi", False),
+                                            ("steel", "29000 ksi", True)])
+def test_a_kind_that_e_contradicts_is_not_rated(kind, e, rated):
+    # the rating would rest on the rules of a family the material is not
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    mat = f'[beam.material]\nkind = "{kind}"\ne = "{e}"\nfy = "35 ksi"\ndensity = "490 lb/ft^3"'
+    job = parse_job_text(simple_span(f"{mat}\n{TUBE}", 6, point_load(3, "-200 lbf"), "kind"))
+    why = [w for w in capacity(job).not_rated if "is outside the range of" in w]
+    assert bool(why) == (not rated)
+    if why:
+        assert f'kind = "{kind}"' in why[0] and "Fix e or the kind" in why[0]

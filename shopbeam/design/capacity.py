@@ -29,6 +29,7 @@ from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.design.local import local_unchecked
 from shopbeam.design.open_shapes import open_unchecked
+from shopbeam.jobs.jobfile import kind_mismatch
 
 
 # ------------------------------------------------------------------ root finding
@@ -141,6 +142,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
                    "(forces are + up, a weight is negative): " + ", ".join(upward)
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
+    kind = kind_mismatch(job.material, job.units)
+    if kind:
+        out.append(f"the typed-in material's {kind}. Fix e or the kind")
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "

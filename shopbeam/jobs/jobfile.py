@@ -782,26 +782,31 @@ def kind_for_e(e: float) -> str:
                  if KIND_E[k][0] <= ksi <= KIND_E[k][1]), "custom")
 
 
-def _kind_mismatch(r: _Reader, material, system: str) -> None:
-    """A typed-in material whose kind says one family and whose E another: the kind picks
-    the rules (AISC steel, ADM aluminium, NDS wood), so one of the two is a slip."""
+def kind_mismatch(material, system: str = "us") -> str:
+    """Why a typed-in material's kind and its E name two families ("" when they agree): the
+    kind picks the rules (AISC steel, ADM aluminium, NDS wood), so one of the two is a slip."""
     kind = getattr(material, "kind", "custom")
-    if kind not in KIND_E:
-        return
+    if getattr(material, "source", "") != "typed in" or kind not in KIND_E:
+        return ""
     lo, hi = KIND_E[kind]
-    ksi = material.e / units.KSI
-    if lo <= ksi <= hi:
-        return
+    if lo <= material.e / units.KSI <= hi:
+        return ""
     e = units.fmt(material.e, "stress", system)
-    like = kind_for_e(material.e)
-    fix = (f"kind = \"{like}\" if it is {_KIND_WORDS[like]}" if like != "custom"
-           else "kind = \"custom\" (first-yield checks) if it is neither")
     gpa = f"{lo * units.KSI / 1e9:.0f} to {hi * units.KSI / 1e9:.0f} GPa"
     band = (f"{lo:,} to {hi:,} ksi, {gpa}" if lo else
             f"under {hi:,} ksi, {hi * units.KSI / 1e9:.0f} GPa")
-    r.warn(f"kind = \"{kind}\" but e = {e} is outside the range of {_KIND_WORDS[kind]} "
-           f"({band}): the {_KIND_WORDS[kind]} rules would be applied to another material. "
-           f"Check e and its unit, or give {fix}", "beam.material")
+    return (f"kind = \"{kind}\" but e = {e} is outside the range of {_KIND_WORDS[kind]} "
+            f"({band}): the {_KIND_WORDS[kind]} rules would be applied to another material")
+
+
+def _kind_mismatch(r: _Reader, material, system: str) -> None:
+    why = kind_mismatch(material, system)
+    if not why:
+        return
+    like = kind_for_e(material.e)
+    fix = (f"kind = \"{like}\" if it is {_KIND_WORDS[like]}" if like != "custom"
+           else "kind = \"custom\" (first-yield checks) if it is neither")
+    r.warn(f"{why}. Check e and its unit, or give {fix}", "beam.material")
 
 
 # Smallest section properties a real member can have (a 0.1 mm wire is ~1e-8 m^2): below
