@@ -568,3 +568,13 @@ def test_lifting_deflection_looser_than_its_profile_is_warned(preset, written, p
 def test_shelf_limit_on_a_job_that_is_not_lifting_is_not_warned():
     job = parse_job_text(job_text(criteria='deflection = "L/180"'))
     assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
+
+
+def test_braces_beside_braced_true_are_named_as_changing_nothing():
+    # braced = true leaves no unbraced length, so the brace points would be read and ignored
+    text = job_text().replace('material = "A992"', 'material = "A992"\nbraced = true\n'
+                                                   'braces = ["2 ft"]')
+    w = [p for p in warnings(parse_job_text(text)) if p.key == "beam.braces"]
+    assert len(w) == 1 and "change nothing with braced = true" in w[0].message
+    alone = job_text().replace('material = "A992"', 'material = "A992"\nbraces = ["2 ft"]')
+    assert not [p for p in warnings(parse_job_text(alone)) if p.key == "beam.braces"]

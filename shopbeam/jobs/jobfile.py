@@ -475,6 +475,10 @@ def _read_bracing(r: _Reader, beam: dict, length) -> tuple[bool, tuple[float, ..
         x = _position(r, {"at": raw[i]}, "at", "", length, path=f"beam.braces[{i}]")
         if x is not None:
             pts.append(x)
+    if braced and pts:
+        r.warn("braces change nothing with braced = true: the member is taken as braced all "
+               "along, so no unbraced length is left for them to split. Remove braced = true "
+               "if it is held only at the brace points, or remove braces", "beam.braces")
     return braced, tuple(sorted(pts))
 
 
