@@ -578,3 +578,36 @@ def test_braces_beside_braced_true_are_named_as_changing_nothing():
     assert len(w) == 1 and "change nothing with braced = true" in w[0].message
     alone = job_text().replace('material = "A992"', 'material = "A992"\nbraces = ["2 ft"]')
     assert not [p for p in warnings(parse_job_text(alone)) if p.key == "beam.braces"]
+
+
+@pytest.mark.parametrize("load, key", [
+    ('value = "-400 lb"\ntotal = "-400 lb"', "total"),  # a point load's total is not read
+    ('value = "-400 lb"\nstart = "1 ft"', "start"),
+    ('value = "-400 lb"\nwidth = "16 in"', "width"),
+])
+def test_a_placement_key_a_point_load_does_not_read_is_named(load, key):
+    w = [p for p in warnings(parse_job_text(job_text(load=load)))
+         if p.key == f"loads[0].{key}"]
+    assert len(w) == 1 and "is not read by a point load" in w[0].message
+
+
+def test_a_spread_load_given_at_and_no_start_or_end_is_refused():
+    # it would run over the whole member, wherever it was meant to be
+    text = job_text().replace('type = "point"', 'type = "uniform"').replace(
+        'value = "-400 lb"', 'value = "-50 lbf/ft"')
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    msg = str(e.value)
+    assert "loads[0].at" in msg and "runs from start to end" in msg
+    # with its start given, the stray at is only named as unread
+    job = parse_job_text(text.replace('at = "3 ft"', 'at = "3 ft"\nstart = "2 ft"'))
+    assert [p for p in warnings(job) if p.key == "loads[0].at"]
+    assert job.loads[0].start == pytest.approx(0.6096)
+
+
+def test_a_linear_load_total_is_named_as_unread():
+    text = job_text().replace('type = "point"\nat = "3 ft"', 'type = "linear"\nstart = "0 ft"\n'
+                              'end = "3 ft"').replace(
+        'value = "-400 lb"', 'value = ["0 lbf/ft", "-50 lbf/ft"]\ntotal = "-75 lbf"')
+    w = [p for p in warnings(parse_job_text(text)) if p.key == "loads[0].total"]
+    assert len(w) == 1 and "two intensities" in w[0].message

@@ -666,6 +666,8 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
     if kind != "point" and ("bearing" in ld or "flange" in ld):
         r.warn("bearing and flange describe a point load where it meets the member; "
                f"this {kind} load ignores them", f"{key}.{'bearing' if 'bearing' in ld else 'flange'}")
+    if not _placement_keys(r, ld, kind, key):
+        return None
     if ld.get("flange", "top") not in ("top", "bottom"):
         r.error("flange must be \"top\" (the load bears on the top flange) or \"bottom\" (it "
                 "hangs from the bottom flange)", f"{key}.flange")
@@ -735,6 +737,36 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
     elif "width" in ld:
         r.warn("width is only used with a load per area (psf, kPa); ignored", f"{key}.width")
     return Load(kind, start=start, end=end, w1=w1, w2=w2, **common)
+
+
+# Where each load type is placed and sized: a key of another type's would be read and
+# silently dropped (a point load's `total`, a uniform load's `at`)
+_PLACEMENT = {"point": ("at",), "moment": ("at",), "uniform": ("start", "end", "total", "width"),
+              "linear": ("start", "end", "width")}
+
+
+def _placement_keys(r: _Reader, ld: dict, kind: str, key: str) -> bool:
+    """Warn of placement keys this load type does not read; False (an error) for a spread
+    load given `at` and neither start nor end: where it was meant to be is unknown, and it
+    would run over the whole member."""
+    used = _PLACEMENT[kind]
+    for k in ("at", "start", "end", "total", "width"):
+        if k not in ld or k in used:
+            continue
+        if kind in ("uniform", "linear") and k == "at" and "start" not in ld and "end" not in ld:
+            r.error(f"a {kind} load runs from start to end, not at one place: give start and end "
+                    "(e.g. start = \"5 ft\", end = \"7 ft\"; they default to the ends of the "
+                    "member), or use type = \"point\" for a load at one place", f"{key}.at")
+            return False
+        if kind in ("point", "moment"):
+            why = (f"a {kind} load acts at one place, given by at; for a load spread along the "
+                   "member use type = \"uniform\"")
+        elif k == "total":
+            why = "a linear load is given by its two intensities, value = [start, end]"
+        else:
+            why = f"a {kind} load runs from start to end"
+        r.warn(f"{k} is not read by a {kind} load ({why}); ignored", f"{key}.{k}")
+    return True
 
 
 def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
