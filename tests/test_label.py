@@ -203,3 +203,23 @@ def test_a_rack_label_says_the_impact_load_is_not_included_unless_given():
     given = parse_job_text(text.replace('[criteria]\n', '[criteria]\nimpact = "25%"\n', 1))
     assert given.criteria.impact == pytest.approx(0.25)
     assert "Impact NOT included" not in label.label_text(label.rating(capacity(given)))
+
+
+def test_a_cantilever_rack_arm_names_its_column_and_rack_standard_not_a_pallet_rack_bay():
+    # a rack member with a free end is an arm of a cantilever rack (ANSI MH16.3): the rack
+    # that carries it on is the column, its base and the arm connections, not upright frames
+    job = load_job(PRESETS / "bar-stock-rack-arm.toml")
+    text = label.label_text(label.rating(capacity(job), analyze(job).unchecked))
+    flat = " ".join(text.replace("|", " ").split())
+    assert "PER COLUMN SIDE" in flat and "arm connections are not checked" in flat
+    assert "MH16.3" in flat
+    assert "upright frames" not in flat and "MH16.1" not in flat and "PER BAY" not in flat
+    cautions = " ".join(analyze(job).cautions)
+    assert "Cantilever-rack arms" in cautions and "MH16.1" not in cautions
+    # with its levels the column side's total is posted: the levels times the arm's total
+    three = replace(job, levels=3)
+    r = label.rating(capacity(three), analyze(three).unchecked)
+    side = [f for f in r.figures if f.group == "PER COLUMN SIDE (3 levels)"]
+    arm = [f for f in r.figures if f.label == "TOTAL" and not f.group]
+    assert len(side) == 1 and len(arm) == 1
+    assert side[0].si <= 3 * arm[0].si * (1 + 1e-12) and "column is rated for" in side[0].note

@@ -19,6 +19,7 @@ from shopbeam.design.loading import run_checks
 from shopbeam.design.local import local_unchecked
 from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, torsion_note
 from shopbeam.jobs.jobfile import Job
+from shopbeam.jobs.rules import rack_arm
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.engine.solver import Solution, sound_solve
 from shopbeam.members.sections import ANGLE_WARNING
@@ -63,6 +64,15 @@ RACK_IMPACT = ("Storage-rack beams are designed for an impact load besides the p
                "(on every live load: conservative). Beam connectors, upright frames and "
                "anchors often govern a rack and are not checked here.")
 
+# A cantilever-rack arm (a rack member with a free end): ANSI MH16.3 sets what the arms must
+# carry, impact included (from memory; no figure is given here), and the column, its base
+# and the arm connections carry it on to the floor.
+ARM_IMPACT = ("Cantilever-rack arms are designed for the loads ANSI MH16.3 sets (from memory), "
+              "which include an allowance for placing the load with a lift truck or crane; "
+              "these checks add no impact. Add it as a live load, or set [criteria] impact. "
+              "The upright column, its base and anchors, the arm-to-column connection and the "
+              "arm's lip or stop often govern a cantilever rack and are not checked here.")
+
 
 # Members out of doors (signs, awnings, canopies) also take wind, and an awning or canopy
 # snow and drift, by ASCE 7 and the local code; only the loads entered are checked.
@@ -95,7 +105,7 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
                    f"1/{job.members} of the entered loads. Make sure the load really divides "
                    "evenly (stiff deck, centred loads).")
     if RACK_TAGS.intersection(job.tags) and job.criteria.impact is None:
-        out.append(RACK_IMPACT)
+        out.append(ARM_IMPACT if rack_arm(job.tags, job.supports, job.length) else RACK_IMPACT)
     if any(_OUTDOOR.search(t) for t in job.tags + (job.title,)):
         out.append(OUTDOOR)
     if getattr(job.material, "kind", "") == "stainless":

@@ -9,6 +9,8 @@ from __future__ import annotations
 
 from enum import StrEnum
 
+from shopbeam.cautions import RACK_TAGS
+
 
 class Basis(StrEnum):
     """``criteria.basis`` as written. AUTO: the material decides (AISC ASD for steel and
@@ -73,14 +75,27 @@ LIFTING_PROFILES: dict[str, dict] = {
 }
 
 
+def has_free_end(supports, length: float) -> bool:
+    """Held somewhere, with an end that nothing holds: a cantilever, or a span with an
+    overhang."""
+    tol = 1e-9 * length
+    held = [s.at for s in supports if s.takes_force]
+    return bool(held) and (min(held) > tol or max(held) < length - tol)
+
+
 def guessed_profile(supports, length: float) -> str:
     """The lifting profile tags = ["lifting"] picks when none is named, the most demanding
     that fits: a jib boom when the member is held but an end is free, else a powered
     monorail."""
-    tol = 1e-9 * length
-    held = [s.at for s in supports if s.takes_force]
-    free_end = not held or min(held) > tol or max(held) < length - tol
-    return "jib-boom" if free_end and held else "powered-monorail"
+    return "jib-boom" if has_free_end(supports, length) else "powered-monorail"
+
+
+def rack_arm(tags, supports, length: float) -> bool:
+    """A storage-rack member with a free end: a cantilever-rack arm, whose rack is an
+    upright column, its base and the arm connections (ANSI MH16.3), not the upright frames
+    and beam connectors of a pallet rack (ANSI MH16.1)."""
+    return bool(RACK_TAGS & {str(t).strip().lower() for t in tags}) \
+        and has_free_end(supports, length)
 
 
 # A typed-in material given no kind is a wood or a metal by its stiffness: every wood is

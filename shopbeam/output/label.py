@@ -37,6 +37,7 @@ from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.errors import InputError
+from shopbeam.jobs.rules import rack_arm
 from shopbeam.output.present import present_capacity
 
 BASIS_SHORT = {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
@@ -181,21 +182,33 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         figs.append(posted("TOTAL", tot_all * k / n, "force", sy,
                            f"each of {n} identical members carries 1/{n}", each))
     levels = getattr(job, "levels", None)
+    arm = rack and rack_arm(job.tags, job.supports, job.length)
+    # what holds a rack up besides this member: the bay's upright frames (pallet rack), or a
+    # cantilever rack's column (its arms on one side at every level)
+    if arm:
+        per = "PER COLUMN SIDE"
+        holder = ("the column is rated for (the column, its base, anchors and the arm "
+                  "connections are not checked here)")
+    else:
+        per = "PER BAY"
+        holder = ("the upright frames are rated for (frames, anchors and beam connectors are "
+                  "not checked here)")
     if rack and levels and tot_all:
         # the posted per-level total times the levels, rounded down again: never more than
         # the levels' posted figures add up to
         level = posted("TOTAL", tot_all * k, "force", sy)
         figs.append(posted(
             "TOTAL", level.si * levels, "force", sy,
-            f"{levels} levels at {level.value} each; and no more than the upright frames are "
-            "rated for (frames, anchors and beam connectors are not checked here)",
-            f"PER BAY ({levels} levels)"))
+            f"{levels} levels at {level.value} each; and no more than {holder}",
+            f"{per} ({levels} levels)"))
     elif rack:
-        notes.append("PER BAY: the levels added up (give [beam] levels = N for the figure), "
-                     "and no more than the upright frames are rated for (frames, anchors and "
-                     "beam connectors are not checked here).")
+        what = "the arms of every level" if arm else "the levels"
+        notes.append(f"{per}: {what} added up (give [beam] levels = N for the figure), "
+                     f"and no more than {holder}.")
     if rack and job.criteria.impact is None:
-        notes.append("Impact NOT included (ANSI MH16.1: 25 % of one unit load more, from "
+        notes.append("Impact NOT included (ANSI MH16.3 for cantilever racks sets it, from "
+                     "memory): add it before posting." if arm else
+                     "Impact NOT included (ANSI MH16.1: 25 % of one unit load more, from "
                      "memory): add it before posting.")
     notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     return figs, notes
