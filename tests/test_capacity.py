@@ -132,6 +132,45 @@ def test_capacity_with_cb_changing_with_k():
     assert max(c.ratio for c in res.checks) == pytest.approx(1.0, abs=1e-9)
 
 
+def test_the_chord_brackets_the_root_in_few_evaluations(monkeypatch):
+    # a ratio |a + k b| / limit is convex in k: the chord through k = 0 and 1 reaches 1 just
+    # past the root, so a job whose ratios are linear in k (dead and live loads of one shape)
+    # is bracketed tightly by it and solved in at most 5 evaluations (0, 1, the chord, one or
+    # two steps), where widening the bracket fourfold from k = 1 took 6; still exact
+    from shopbeam.design import capacity as cap_mod
+
+    seen = []
+    real = cap_mod.evaluate
+
+    def counting(job, k, *a, **kw):
+        seen.append(k)
+        return real(job, k, *a, **kw)
+
+    monkeypatch.setattr(cap_mod, "evaluate", counting)
+    text = EXACT.split("[[loads]]")[0] + """[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "12 ft"
+value = "-150 lbf/ft"
+case = "dead"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "12 ft"
+value = "-LIVE lbf/ft"
+"""
+    for live, fails in (("400", False), ("9000", True)):
+        seen.clear()
+        job = parse_job_text(text.replace("LIVE", live).replace('length = "15 ft"',
+                                                                 'length = "12 ft"'))
+        res = capacity(job)
+        k = res.factor
+        assert "Brent" in res.method and len(seen) <= 5, seen
+        assert (k < 1) == fails
+        assert max(c.ratio for c in res.checks) == pytest.approx(1.0, abs=1e-9)
+        assert max(c.ratio for c in real(job, k * (1 + 1e-7)).checks) > 1.0
+
+
 def test_dead_load_alone_fails_gives_zero():
     text = EXACT.replace('value = "-150 lbf/ft"', 'value = "-15000 lbf/ft"')
     res = capacity(parse_job_text(text))

@@ -162,8 +162,12 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
 
 
 def _capacity(job, section, ss, st) -> CapacityResult:
-    def ev(k):
-        return evaluate(job, k, section, ss, st)
+    memo: dict[float, Evaluation] = {}
+
+    def ev(k):  # the root search ends on a factor it has already evaluated: not again
+        if k not in memo:
+            memo[k] = evaluate(job, k, section, ss, st)
+        return memo[k]
 
     def g(k):
         return max(c.ratio for c in ev(k).checks)
@@ -191,13 +195,30 @@ def _capacity(job, section, ss, st) -> CapacityResult:
             e = ev(k)
         return CapacityResult(job, k, e, "closed form: every ratio is proportional to k")
     k_lo, h_lo = 0.0, g0 - 1.0
-    k_hi = 1.0
-    h_hi = g(k_hi) - 1.0
+    g1 = g(1.0)
+    k_hi, h_hi = (1.0, g1 - 1.0) if g1 > 1.0 else (None, None)
+    if k_hi is None:
+        k_lo, h_lo = 1.0, g1 - 1.0
+    # the chord through k = 0 and k = 1: a ratio |a + k b| / limit is convex in k, so the
+    # chord lies above the ratios between 0 and 1 and below them past 1, and where it reaches
+    # 1 (nudged to the side it should bracket) usually brackets the root tightly; if Cb's
+    # change of shape breaks that, the point still narrows the bracket from the side it lands
+    if g1 > g0:
+        est = (1.0 - g0) / (g1 - g0) * (1.0 - 1e-9 if k_hi is not None else 1.0 + 1e-9)
+        if k_lo < est and (k_hi is None or est < k_hi):
+            h = g(est) - 1.0
+            if h > 0:
+                k_hi, h_hi = est, h
+            else:
+                k_lo, h_lo = est, h
     n = 0
-    while h_hi <= 0:
-        k_lo, h_lo = k_hi, h_hi
-        k_hi *= 4.0
-        h_hi = g(k_hi) - 1.0
+    while k_hi is None:
+        k = k_lo * 4.0
+        h = g(k) - 1.0
+        if h > 0:
+            k_hi, h_hi = k, h
+            break
+        k_lo, h_lo = k, h
         n += 1
         if n > 60:
             return CapacityResult(job, math.inf, ev(k_lo), "unbounded",
