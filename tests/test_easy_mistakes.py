@@ -611,3 +611,13 @@ def test_a_linear_load_total_is_named_as_unread():
         'value = "-400 lb"', 'value = ["0 lbf/ft", "-50 lbf/ft"]\ntotal = "-75 lbf"')
     w = [p for p in warnings(parse_job_text(text)) if p.key == "loads[0].total"]
     assert len(w) == 1 and "two intensities" in w[0].message
+
+
+@pytest.mark.parametrize("travel, why", [('["0 ft", "20 ft"]', "past the end of the beam (16 ft)"),
+                                         ('["10 ft", "2 ft"]', "not beyond its start")])
+def test_a_wheel_travel_off_the_beam_or_backwards_says_which(travel, why):
+    text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
+    assert 'travel = ["0 ft", "16 ft"]' in text
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text.replace('travel = ["0 ft", "16 ft"]', f"travel = {travel}"))
+    assert "moving[0].travel" in str(e.value) and why in str(e.value)

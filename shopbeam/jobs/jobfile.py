@@ -538,7 +538,12 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
         if ends is None:
             return ()
         if ends[1] > length * (1 + 1e-9) or ends[1] <= ends[0]:
-            r.error("travel must run forward within the beam", f"{key}.travel")
+            got = f"[{units.fmt(ends[0], 'length')}, {units.fmt(ends[1], 'length')}]"
+            why = (f"its end is past the end of the beam ({units.fmt(length, 'length')})"
+                   if ends[1] > length * (1 + 1e-9) else "its end is not beyond its start")
+            r.error(f"travel {got}: {why}; travel = [\"start\", \"end\"] is where the first "
+                    "and last wheel may run, from the left end (0) to at most the beam's "
+                    "length", f"{key}.travel")
             return ()
         travel = (ends[0], min(ends[1], length))
     if travel[1] - travel[0] < offsets[-1] - 1e-12:
