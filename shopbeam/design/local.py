@@ -442,13 +442,14 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
               "end_distance": max(0.0, min(f.at, job.length - f.at))}
     params.update({k: float(v) for k, v in extra.items()})
     sense = "pulls on" if f.pulls else "bears on"
+    part = "flange" if applies(sec) == "web" else "wall"  # a tube has walls, not flanges
     scale = design_factor_scale(job)
     if scale != 1.0:
         formula += (f"; below-the-hook: Omega x Nd / 1.67 = {omega:.3g} (ASME BTH-1 design "
                     f"factor Nd {scale * 1.67:g} in place of the AISC 1.67)")
     return Check(name, abs(f.force), rn / omega, "N",
                  f"{clause}: {formula}; {eq} at {f.what}, {short}", f.at,
-                 detail=f"{f.what} ({sense} the {f.face} flange): {eq}; {given}",
+                 detail=f"{f.what} ({sense} the {f.face} {part}): {eq}; {given}",
                  clause=clause, source=src, params=params)
 
 
