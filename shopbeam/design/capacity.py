@@ -142,9 +142,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
                    "(forces are + up, a weight is negative): " + ", ".join(upward)
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
-    kind = kind_mismatch(job.material, job.units)
-    if kind:
-        out.append(f"the typed-in material's {kind}. Fix e or the kind")
+    mixed = kind_mismatch(job.material, job.units)
+    if mixed:
+        out.append(f"the typed-in material's {mixed}. Fix e or the kind")
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
