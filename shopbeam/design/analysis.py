@@ -12,7 +12,7 @@ from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for
 from shopbeam.design import loading
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, check_notes, governing,
-                                    impact_of, strengths)
+                                    impact_of, not_checked_words, strengths)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
 from shopbeam.design.lifting import profile_of
 from shopbeam.design.loading import run_checks
@@ -162,11 +162,15 @@ def analyze(job: Job) -> Result:
         shown = "; ".join(extra)
     else:
         checks = run_checks(job, sol)
-    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) + [
-        f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}." for u in aluminum_unchecked(job)]
+    unchecked = unchecked_for(job)
+    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks)
+    # every limit state not checked is named in the report, as on the label and in the JSON
+    # (check_notes names the member's own strength ones)
+    said = set(strengths(job).unchecked)
+    notes += [not_checked_words(u) for u in unchecked if u not in said]
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
-                  state_sol, state_words, tuple(unchecked_for(job)),
+                  state_sol, state_words, tuple(unchecked),
                   reaction_envelope=tuple(envelope))
 
 
@@ -223,7 +227,27 @@ def unchecked_for(job: Job) -> list[Unchecked]:
     """Limit states the member calls for that shopbeam does not check (see `Unchecked`)."""
     st = strengths(job)
     return list(st.unchecked) + local_unchecked(job) + open_unchecked(job, st) + \
-        aluminum_unchecked(job)
+        aluminum_unchecked(job) + floor_unchecked(job)
+
+
+# A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does
+# not keep it from bouncing underfoot; walking vibration is its own serviceability limit
+# state (AISC Design Guide 11 for steel framing, from memory). A caution: it does not decide
+# strength, so it does not hold back a rating.
+_FLOOR = re.compile(r"\b(floors?|mezzanines?|mezz|platforms?|walkways?|catwalks?|joists?|"
+                    r"lofts?)\b", re.IGNORECASE)
+
+
+def floor_unchecked(job: Job) -> list[Unchecked]:
+    """Walking vibration of a floor member (named by its tags or title), as not checked."""
+    if not any(_FLOOR.search(t) for t in tuple(job.tags) + (job.title,)):
+        return []
+    return [Unchecked(
+        "floor vibration under walking",
+        "a floor, mezzanine or platform that meets its deflection limit can still bounce "
+        "underfoot; its walking vibration (framing frequency and damping) is not checked. If "
+        "people walk or work on it, have that checked with the whole floor",
+        "AISC Design Guide 11 for steel floors, from memory", blocks_rating=False)]
 
 
 def _lifting_json(job) -> dict | None:

@@ -1267,14 +1267,19 @@ def governing(checks: list[Check]) -> Check:
     return max(checks, key=lambda c: c.ratio)
 
 
+def not_checked_words(u: Unchecked) -> str:
+    """The report's line for a limit state that was not checked."""
+    return (f"NOT CHECKED: {u.name}" + (f" ({u.clause})" if u.clause else "") + f": {u.reason}"
+            + ("; no rating is posted" if u.blocks_rating and "no rating" not in u.reason
+               else ""))
+
+
 def check_notes(job) -> list[str]:
     """What the report must say about the basis, what is not covered, and the allowances."""
     st = strengths(job)
     out = [f"Strength basis: {BASIS_WORDS[st.basis]}; deflection limit {st.defl_words}."]
     out += list(st.flexure.warnings)
-    for u in st.unchecked:
-        out.append(f"NOT CHECKED: {u.name} ({u.clause}): {u.reason}"
-                   + ("; no rating is posted" if u.blocks_rating else ""))
+    out += [not_checked_words(u) for u in st.unchecked]
     imp = impact_of(job)
     prof = profile_of(job)
     if imp:
