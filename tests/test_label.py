@@ -223,3 +223,32 @@ def test_a_cantilever_rack_arm_names_its_column_and_rack_standard_not_a_pallet_r
     arm = [f for f in r.figures if f.label == "TOTAL" and not f.group]
     assert len(side) == 1 and len(arm) == 1
     assert side[0].si <= 3 * arm[0].si * (1 + 1e-12) and "column is rated for" in side[0].note
+
+
+def test_a_metric_label_posts_kilograms_beside_newtons_each_rounded_down():
+    # metric shops post loads in kg: the weight that makes the force (g0 = 9.80665 m/s^2,
+    # exact by definition), rounded down on its own so it never exceeds the rated force
+    text = """schema = 1
+title = "metric arm"
+units = "si"
+[beam]
+length = "1200 mm"
+section = "HSS4x2x1/4"
+material = "A500-C"
+[[supports]]
+at = "0 mm"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "1.2 m"
+value = "-2.5 kN"
+"""
+    job = parse_job_text(text)
+    r = label.rating(capacity(job))
+    fig = next(f for f in r.figures if f.label == "MAX POINT LOAD")
+    m = re.fullmatch(r"([\d.]+) kN \((\d+) kg\)", fig.value)
+    assert m, fig.value
+    kg = int(m.group(2))
+    assert kg == label.floor_sig(fig.exact / 9.80665) and kg * 9.80665 <= fig.exact
+    us = label.rating(capacity(parse_job_text(text.replace('units = "si"', 'units = "us"'))))
+    assert "kg" not in next(f for f in us.figures if f.label == "MAX POINT LOAD").value

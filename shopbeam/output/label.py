@@ -104,6 +104,11 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
     factor = units.to_display(1.0, kind, system)
     unit = units.unit_label(kind, system)
     text = f"{units.num(down, 6)} {unit}"
+    if system == "si" and kind in ("force", "line_load"):
+        # metric shops post loads in kilograms: the weight that makes this force (g0),
+        # rounded down on its own
+        kg = floor_sig(abs(si_value) / units.G0)
+        text += f" ({units.num(kg, 6)} kg{'/m' if kind == 'line_load' else ''})"
     notes = [note] if note else []
     if down < disp * (1 - 1e-9):
         whole = math.floor(disp)
