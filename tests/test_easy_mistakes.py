@@ -621,3 +621,14 @@ def test_a_wheel_travel_off_the_beam_or_backwards_says_which(travel, why):
     with pytest.raises(InputErrors) as e:
         parse_job_text(text.replace('travel = ["0 ft", "16 ft"]', f"travel = {travel}"))
     assert "moving[0].travel" in str(e.value) and why in str(e.value)
+
+
+@pytest.mark.parametrize("section, warned", [("HSS4x4x1/4", True), ("HSS4.000x0.250", True),
+                                             ("HSS4x2x1/4", False), ("W8x18", False)])
+def test_weak_axis_on_a_section_alike_both_ways_is_named_as_changing_nothing(section, warned):
+    text = job_text(section=section, material="A500-C" if section.startswith("HSS") else "A992")
+    job = parse_job_text(text.replace('material = ', 'axis = "weak"\nmaterial = ', 1))
+    w = [p for p in warnings(job) if p.key == "beam.axis"]
+    assert bool(w) == warned
+    if warned:
+        assert "changes nothing" in w[0].message

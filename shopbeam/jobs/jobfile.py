@@ -867,6 +867,16 @@ def _plausible_section(sec, r: _Reader) -> None:
             return
 
 
+def _same_both_ways(r: _Reader, section, axis) -> None:
+    """axis = "weak" on a section that bends alike about both axes (round, square) is read
+    and changes nothing: say so, as for any key that is ignored."""
+    ix, iy = getattr(section, "ix", 0.0) or 0.0, getattr(section, "iy", 0.0) or 0.0
+    if axis == "weak" and ix > 0 and abs(ix - iy) <= 1e-9 * ix:
+        name = section.designation or section.shape
+        r.warn(f"axis = \"weak\" changes nothing: {name} bends alike about both axes (a round "
+               "or square section); remove it", "beam.axis")
+
+
 def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> list[str]:
     """A force load that pushes up is almost always a forgotten minus sign: name each one,
     unless the load says ``uplift = true``. Returns the keys (with labels) it named."""
@@ -1260,6 +1270,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                material=material)
         if section is not None:
             _plausible_section(section, r)
+            _same_both_ways(r, section, axis)
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
