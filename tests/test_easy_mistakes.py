@@ -632,3 +632,22 @@ def test_weak_axis_on_a_section_alike_both_ways_is_named_as_changing_nothing(sec
     assert bool(w) == warned
     if warned:
         assert "changes nothing" in w[0].message
+
+
+def test_a_jib_boom_profile_on_a_member_with_no_free_end_is_named():
+    # the jib-boom profile's L/225 on twice the reach is for a cantilever boom; a trolley
+    # running between two supports is a monorail's job (L/450)
+    text = job_text(criteria='lifting = "jib-boom"')
+    w = [p for p in warnings(parse_job_text(text)) if p.key == "criteria.lifting"]
+    assert len(w) == 1 and "no free end" in w[0].message
+    boom = (Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml").read_text()
+    assert not [p for p in warnings(parse_job_text(boom)) if p.key == "criteria.lifting"]
+
+
+def test_tags_lifting_and_not_lifting_together_are_named_and_taken_as_lifting():
+    text = job_text().replace('title = "shelf"', 'title = "shelf"\ntags = ["lifting", '
+                                                  '"not-lifting"]')
+    job = parse_job_text(text)
+    w = [p for p in warnings(job) if p.key == "tags"]
+    assert len(w) == 1 and "both" in w[0].message
+    assert job.lifting

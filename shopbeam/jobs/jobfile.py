@@ -29,7 +29,7 @@ from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
-                                 guessed_profile)
+                                 guessed_profile, has_free_end)
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.resolve import resolve_section
@@ -972,6 +972,22 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
                "profile's limit", "criteria.deflection")
 
 
+def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
+    """Lifting words that contradict the job: the jib-boom profile (L/225 on twice the reach)
+    named on a member with no free end, where a monorail's L/450 is what a trolley needs; and
+    the tags lifting and not-lifting together (it is taken as lifting)."""
+    if (criteria.lifting == "jib-boom" and length is not None and supports
+            and not has_free_end(supports, length)):
+        r.warn("lifting = \"jib-boom\" names a cantilever boom, but this member has no free "
+               "end: its deflection limit (L/225 on twice the reach) is for a boom, and a "
+               "trolley running between supports needs a monorail's (L/450). Name "
+               "\"powered-monorail\" or \"hand-geared-monorail\" if that is what it is",
+               "criteria.lifting")
+    if is_lifting(tags) and NOT_LIFTING in tags:
+        r.warn(f"tags say both \"lifting\" and \"{NOT_LIFTING}\": it is checked and rated as "
+               "a lifting device; remove the one that is wrong", "tags")
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -1385,6 +1401,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
     _looser_than_lifting(r, criteria, tags, supports, length)
+    _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     for ws in moving:
