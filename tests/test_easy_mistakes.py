@@ -651,3 +651,12 @@ def test_tags_lifting_and_not_lifting_together_are_named_and_taken_as_lifting():
     w = [p for p in warnings(job) if p.key == "tags"]
     assert len(w) == 1 and "both" in w[0].message
     assert job.lifting
+
+
+def test_a_bearing_on_a_hinge_is_named_as_ignored():
+    text = job_text().replace('at = "6 ft"\ntype = "roller"',
+                              'at = "6 ft"\ntype = "roller"\n[[supports]]\nat = "4 ft"\n'
+                              'type = "hinge"\nbearing = "3 in"\n[[supports]]\nat = "5 ft"\n'
+                              'type = "roller"')
+    w = [p for p in warnings(parse_job_text(text)) if p.key == "supports[2].bearing"]
+    assert len(w) == 1 and "hinge" in w[0].message

@@ -1332,6 +1332,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             b = r.parse(s, "bearing", "length", f"supports[{i}].bearing", nonnegative=True)
             if b is not None:
                 bearings[f"supports[{i}]"] = b
+            if s.get("type") == "hinge":
+                r.warn("bearing is the length a support bears on the member; a hinge is a "
+                       "moment release inside the member, not a support, so it ignores it",
+                       f"supports[{i}].bearing")
 
     raw_loads = data.get("loads", [])
     loads: list[Load] = []
