@@ -162,14 +162,15 @@ def analyze(job: Job) -> Result:
         shown = "; ".join(extra)
     else:
         checks = run_checks(job, sol)
-    unchecked = unchecked_for(job)
+    st = strengths(job)
+    unchecked = unchecked_for(job, st)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks)
     # every limit state not checked is named in the report, as on the label and in the JSON
     # (check_notes names the member's own strength ones)
-    said = set(strengths(job).unchecked)
+    said = set(st.unchecked)
     notes += [not_checked_words(u) for u in unchecked if u not in said]
     return Result(job, sol, tuple(checks),
-                  tuple(job_cautions(job, sol) + check_notes(job) + notes), shown,
+                  tuple(job_cautions(job, sol) + check_notes(job, st) + notes), shown,
                   state_sol, state_words, tuple(unchecked),
                   reaction_envelope=tuple(envelope))
 
@@ -223,11 +224,13 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     return out
 
 
-def unchecked_for(job: Job) -> list[Unchecked]:
-    """Limit states the member calls for that shopbeam does not check (see `Unchecked`)."""
-    st = strengths(job)
-    return list(st.unchecked) + local_unchecked(job) + open_unchecked(job, st) + \
-        aluminum_unchecked(job) + floor_unchecked(job)
+def unchecked_for(job: Job, st=None) -> list[Unchecked]:
+    """Limit states the member calls for that shopbeam does not check (see `Unchecked`), for
+    the section of `st` (its strengths; default the job's own)."""
+    st = st or strengths(job)
+    sec = st.section
+    return list(st.unchecked) + local_unchecked(job, sec) + open_unchecked(job, st) + \
+        aluminum_unchecked(job, sec) + floor_unchecked(job)
 
 
 # A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does

@@ -20,15 +20,12 @@ import math
 from dataclasses import dataclass, replace
 
 from shopbeam import units
-from shopbeam.design.checks import (BASIS_WORDS, Check, aluminum_unchecked, basis_of,
-                                   governing, strengths)
+from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Evaluation, evaluate, state_set
-from shopbeam.design.analysis import analyze
+from shopbeam.design.analysis import analyze, unchecked_for
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
-from shopbeam.design.local import local_unchecked
-from shopbeam.design.open_shapes import open_unchecked
 from shopbeam.jobs.jobfile import kind_mismatch
 
 
@@ -134,9 +131,8 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
 def rating_gaps(job, st) -> tuple[str, ...]:
     """`not_rated_reasons` of the member and the job alone, without a solve's self-checks (a
     sizing sweep asks it of sections it never solves one by one)."""
-    every = list(st.unchecked) + local_unchecked(job, st.section) + open_unchecked(job, st)
-    every += aluminum_unchecked(job, st.section)
-    out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in every if u.blocks_rating]
+    out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in unchecked_for(job, st)
+           if u.blocks_rating]
     upward = getattr(job, "upward", ())
     if upward:
         out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "

@@ -1274,9 +1274,10 @@ def not_checked_words(u: Unchecked) -> str:
                else ""))
 
 
-def check_notes(job) -> list[str]:
-    """What the report must say about the basis, what is not covered, and the allowances."""
-    st = strengths(job)
+def check_notes(job, st: Strengths | None = None) -> list[str]:
+    """What the report must say about the basis, what is not covered, and the allowances
+    (`st`: the job's strengths, when the caller has them)."""
+    st = st or strengths(job)
     out = [f"Strength basis: {BASIS_WORDS[st.basis]}; deflection limit {st.defl_words}."]
     out += list(st.flexure.warnings)
     out += [not_checked_words(u) for u in st.unchecked]
