@@ -816,6 +816,7 @@ def _batched(job, base, parts, cands, with_capacity):
     # sections in chunks so that the largest working array stays within CHUNK_BYTES
     P, w = M.live.shape[1], max(M.live.shape[2], U.live.shape[2])
     chunk = max(1, int(CHUNK_BYTES // (8 * S * P * w * 2)))
+
     def chunks(rows):  # the sections, as arrays of row numbers of at most `chunk` each
         return [rows[i:i + chunk] for i in range(0, len(rows), chunk)]
 
