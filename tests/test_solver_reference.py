@@ -255,6 +255,24 @@ def test_cantilever_triangular_load():
     assert close(s.deflection(L), w * L**4 / (30 * EI))
 
 
+def test_cantilever_triangular_load_extremes_at_the_tip():
+    # Roark's Formulas, Table 8.1, case 2a: tip slope wL^3/24EI and tip deflection wL^4/30EI.
+    # Both are extremes of the contract JSON and lie exactly at the tip, where the moment
+    # -w(L-x)^3/6L has a triple root: the slope is flat there to third order, so a turning
+    # point found numerically lands some 1e-5 of L short of the tip unless the tie with the
+    # tip (a break) is resolved to the break.
+    w = -10000.0
+    for ei in (EI, 3.3e6):  # 3.3e6: a stiffness whose rounding put the turning point short
+        for L in (6.0, 2.0, 3.0):
+            s = solve(Beam(L, ei, (Support(0.0, "fixed"),),
+                           (Load("linear", start=0.0, end=L, w1=w, w2=0.0),)))
+            ex = s.extremes()
+            assert close(ex["slope"].min, w * L**3 / (24 * ei))
+            assert ex["slope"].min_at == L
+            assert close(ex["deflection"].min, w * L**4 / (30 * ei))
+            assert ex["deflection"].min_at == L
+
+
 def test_fixed_fixed_triangular_load():
     # Roark's Formulas, Table 8.1, case 2d (both ends fixed, load rising linearly to w):
     # end moments wL^2/30 (light end) and wL^2/20 (heavy end), reactions 3wL/20, 7wL/20

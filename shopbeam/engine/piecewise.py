@@ -190,9 +190,32 @@ class Piecewise:
             extra_v = np.array([self(lo, "right"), self(hi, "left")])
             xs = np.concatenate([xs[mask], extra_x])
             vs = np.concatenate([vs[mask], extra_v])
-        imax = int(np.argmax(vs))
-        imin = int(np.argmin(vs))
+            ends = np.concatenate([self.breaks, extra_x])
+        else:
+            ends = self.breaks
+        imax = _pick(xs, vs, ends, True)
+        imin = _pick(xs, vs, ends, False)
         return Extreme(float(vs[imax]), float(xs[imax]), float(vs[imin]), float(xs[imin]))
+
+
+# Candidates whose values differ by less than this fraction of the function's largest size
+# are equal to rounding: a turning point that flat and a break (an end, a load, a support)
+# give the same value.
+TIE = 1e-12
+
+
+def _pick(xs: np.ndarray, vs: np.ndarray, ends: np.ndarray, upper: bool) -> int:
+    """Index of the largest (upper) or smallest value. Where an interior turning point and a
+    break tie to rounding, the break is where the extreme is: a flat turning point (a triple
+    root of the derivative, as at the tip of a cantilever under a load tapering to nothing)
+    is found only to the cube root of the rounding, so its position is noise."""
+    i = int(np.argmax(vs) if upper else np.argmin(vs))
+    if len(xs) < 2 or bool(np.isin(xs[i], ends)):
+        return i
+    tol = TIE * float(np.abs(vs).max())
+    tied = (vs >= vs[i] - tol) if upper else (vs <= vs[i] + tol)
+    at_break = tied & np.isin(xs, ends)
+    return int(np.argmax(at_break)) if at_break.any() else i
 
 
 def find_candidates(pieces) -> None:
