@@ -138,6 +138,10 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
                    "(forces are + up, a weight is negative): " + ", ".join(upward)
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
+    if getattr(job, "at_support", ()):
+        out.append("point load(s) on a support go straight into it and load nothing, so a "
+                   "rating would post a load never checked: " + ", ".join(job.at_support)
+                   + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")

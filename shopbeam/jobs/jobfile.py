@@ -129,6 +129,10 @@ class Job:
     # what makes an untagged job read like a lifting device (words, tags, wheels); a rating is
     # not posted on it until it is tagged lifting, or tagged not-lifting (see _lifting_hint)
     lifting_hint: str = ""
+    # point loads placed on a fixed, pin or roller support: they go straight into it and do
+    # not load the member (a tip load typed at the held end). Each entry is "loads[i] (label)
+    # at the <kind> support at <x>"; a capacity or rating is not posted on them.
+    at_support: tuple[str, ...] = ()
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -905,6 +909,45 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
     return [ld.key + (f" ({ld.label})" if ld.label else "") for ld, _shown in up]
 
 
+def _loads_at_supports(r: _Reader, loads, supports, length, system: str) -> list[str]:
+    """A point load on a fixed, pin or roller support (where the solver merges positions)
+    goes straight into the support: it bends nothing, so the checks never see it and a
+    rating scaled on it posts a load the member was never checked for. Almost always a load
+    typed at the wrong place (a cantilever's tip load at its held end). Warned; returns the
+    keys (with labels) it named."""
+    if length is None:
+        return []
+    from shopbeam.engine.solver import SNAP  # the positions the solver takes as one
+
+    tol = SNAP * length
+    held = [s for s in supports if s.kind in ("fixed", "pin", "roller")]
+    bearing = [s.at for s in supports if s.takes_force]
+    free = []
+    if bearing and min(bearing) > tol:
+        free.append(0.0)
+    if bearing and max(bearing) < length - tol:
+        free.append(length)
+    out = []
+    for ld in loads:
+        if ld.kind != "point":
+            continue
+        sup = next((s for s in held if abs(s.at - ld.at) <= tol), None)
+        if sup is None:
+            continue
+        where = units.fmt(sup.at, "length", system)
+        name = f" ({ld.label})" if ld.label else ""
+        tip = ""
+        if free:
+            ends = " or ".join(f'at = "{units.fmt(x, "length", system)}"' for x in free)
+            tip = f", e.g. the free end ({ends})"
+        r.warn(f"this point load{name} is at the {sup.kind} support at {where} "
+               f"({sup.key or 'a support'}): it goes straight into the support and does not "
+               "load the member, so the checks do not see it and the job is NOT RATED. It was "
+               f"probably meant elsewhere{tip}: check at", f"{ld.key}.at")
+        out.append(f"{ld.key}{name} at the {sup.kind} support at {where}")
+    return out
+
+
 def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels) -> None:
     """Keys that change nothing get a warning, so a shop does not believe they were used:
     `patterned` on a dead load or on a member with a single span, `uplift` on a load that
@@ -1394,6 +1437,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         for key, message in geometry_problems(length, supports, loads,
                                               lambda x: units.fmt(x, "length", system)):
             r.error(message, key)
+    at_support = _loads_at_supports(r, loads, supports, length, system)
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
@@ -1435,7 +1479,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         braces=braces,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
-        upward=tuple(upward), lifting_hint=lifting_hint,
+        upward=tuple(upward), lifting_hint=lifting_hint, at_support=tuple(at_support),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )

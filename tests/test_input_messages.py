@@ -1,0 +1,101 @@
+"""Easy input mistakes that used to pass silently or got an unclear message: a point load on
+a support, a bare job name that is also a file here, an alloy without its temper, a lifting
+job with no live load, lifting and rack words without the tag, keys in the wrong table,
+"ton", and the wording of refused types, positions and bare numbers."""
+
+from __future__ import annotations
+
+import subprocess
+import sys
+
+import pytest
+
+from shopbeam.design.capacity import capacity
+from shopbeam.errors import InputErrors
+from shopbeam.jobs.jobfile import parse_job_text
+
+
+def cantilever(load_at="0 in", case="", tags='["rack"]', title="Bar-stock arm", extra=""):
+    return f"""schema = 1
+title = "{title}"
+tags = {tags}
+{extra}
+[beam]
+length = "36 in"
+section = "HSS4x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 in"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "{load_at}"
+value = "-2000 lbf"
+label = "tip load"
+{case}
+"""
+
+
+def warned(job, key=None):
+    return [p for p in job.warnings if p.warning and (key is None or p.key == key)]
+
+
+def refused(text):
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    return [p for p in e.value.problems if not p.warning]
+
+
+def run(*args, cwd=None):
+    return subprocess.run([sys.executable, "-m", "shopbeam", *args], capture_output=True,
+                          text=True, timeout=120, cwd=cwd)
+
+
+# ------------------------------------------------------------------ 1. a point load on a support
+def test_a_tip_load_typed_at_the_fixed_end_is_warned_and_not_rated():
+    job = parse_job_text(cantilever("0 in"))
+    w = warned(job, "loads[0].at")
+    assert len(w) == 1
+    assert "fixed support" in w[0].message and "straight into the support" in w[0].message
+    assert 'at = "3 ft"' in w[0].message  # the free end is offered
+    assert job.at_support and "loads[0] (tip load)" in job.at_support[0]
+    cap = capacity(job)
+    assert any("on a support" in r for r in cap.not_rated)
+
+
+def test_a_load_near_but_not_on_the_support_is_not_warned():
+    job = parse_job_text(cantilever("1 in"))
+    assert not warned(job, "loads[0].at") and job.at_support == ()
+    assert not any("on a support" in r for r in capacity(job).not_rated)
+
+
+@pytest.mark.parametrize("kind", ["pin", "roller"])
+def test_a_point_load_on_an_end_pin_or_roller_is_warned(kind):
+    text = f"""schema = 1
+title = "shelf"
+[beam]
+length = "6 ft"
+section = "HSS2x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "{'roller' if kind == 'pin' else 'pin'}"
+[[supports]]
+at = "72 in"
+type = "{kind}"
+[[loads]]
+type = "point"
+at = "6 ft"
+value = "-300 lbf"
+"""
+    job = parse_job_text(text)
+    assert any(f"{kind} support" in p.message for p in warned(job, "loads[0].at"))
+    assert job.at_support
+
+
+def test_the_rating_label_of_a_load_on_the_fixed_end_says_not_rated(tmp_path):
+    f = tmp_path / "arm.toml"
+    f.write_text(cantilever("0 in"), encoding="utf-8")
+    out = run("rating", str(f))
+    assert "NOT RATED" in out.stdout
+    assert "MAX POINT LOAD" not in out.stdout
