@@ -99,3 +99,62 @@ def test_the_rating_label_of_a_load_on_the_fixed_end_says_not_rated(tmp_path):
     out = run("rating", str(f))
     assert "NOT RATED" in out.stdout
     assert "MAX POINT LOAD" not in out.stdout
+
+
+# ------------------------------------------------------------------ 2. a bare name that is also a file here
+def test_a_bare_name_that_is_also_a_file_here_is_refused_naming_both(tmp_path, monkeypatch):
+    from shopbeam.errors import InputError
+    from shopbeam.jobs.library import bundled_dir, resolve_job
+
+    monkeypatch.chdir(tmp_path)
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(tmp_path / "user"))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+    (tmp_path / "jib-arm.toml").write_text((bundled_dir() / "jib-arm.toml").read_text("utf-8"),
+                                           encoding="utf-8")
+    with pytest.raises(InputError) as e:
+        resolve_job("jib-arm")
+    msg = e.value.problem.message
+    assert "./jib-arm.toml" in msg and "bundled:jib-arm" in msg
+    assert resolve_job("./jib-arm.toml").resolve() == (tmp_path / "jib-arm.toml").resolve()
+    assert resolve_job("bundled:jib-arm").parent == bundled_dir()
+    assert resolve_job("demo").parent == bundled_dir()  # no demo.toml here: the library's
+
+
+def test_a_bare_name_only_here_says_to_write_the_file(tmp_path, monkeypatch):
+    from shopbeam.errors import InputError
+    from shopbeam.jobs.library import resolve_job
+
+    monkeypatch.chdir(tmp_path)
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(tmp_path / "user"))
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+    (tmp_path / "bay7-arm.toml").write_text("schema = 1\n", encoding="utf-8")
+    with pytest.raises(InputError) as e:
+        resolve_job("bay7-arm")
+    assert "./bay7-arm.toml" in e.value.problem.message
+
+
+def test_a_bare_name_the_user_library_holds_here_is_that_file(tmp_path, monkeypatch):
+    from shopbeam.jobs.library import bundled_dir, resolve_job
+
+    monkeypatch.chdir(tmp_path)
+    monkeypatch.setenv("SHOPBEAM_USER_DIR", str(tmp_path))  # the user library is this folder
+    monkeypatch.delenv("SHOPBEAM_LIBRARY", raising=False)
+    (tmp_path / "mine.toml").write_text((bundled_dir() / "demo.toml").read_text("utf-8"),
+                                        encoding="utf-8")
+    assert resolve_job("mine").resolve() == (tmp_path / "mine.toml").resolve()
+
+
+def test_the_cli_refuses_the_ambiguous_bare_name_with_exit_2(tmp_path):
+    from shopbeam.jobs.library import bundled_dir
+
+    (tmp_path / "demo.toml").write_text((bundled_dir() / "demo.toml").read_text("utf-8"),
+                                        encoding="utf-8")
+    import os
+    import pathlib
+    env = dict(os.environ, SHOPBEAM_USER_DIR=str(tmp_path / "user"),
+               PYTHONPATH=str(pathlib.Path(__file__).resolve().parents[1]))
+    env.pop("SHOPBEAM_LIBRARY", None)
+    out = subprocess.run([sys.executable, "-m", "shopbeam", "rating", "demo"], cwd=tmp_path,
+                         capture_output=True, text=True, timeout=120, env=env)
+    assert out.returncode == 2
+    assert "./demo.toml" in out.stderr and "bundled:demo" in out.stderr

@@ -85,7 +85,8 @@ LIBRARY_COMMANDS = {"library": "list, show and copy saved and bundled jobs",
 
 
 JOB_HELP = ("the job: a file (bay3-arm.toml) or a library name (bundled:demo, shop:NAME, "
-            "user:NAME, or a bare NAME looked up shop -> user -> bundled)")
+            "user:NAME, or a bare NAME looked up shop -> user -> bundled; refused when "
+            "./NAME.toml is here too)")
 
 
 def command(sub, name: str, summary: str, description: str, examples: list[str]):

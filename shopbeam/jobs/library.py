@@ -290,7 +290,7 @@ def resolve_job(job, library_dir=None) -> Path:
 
     A path to an existing file is that file. ``bundled:NAME``, ``shop:NAME`` and
     ``user:NAME`` pick a library place; a bare name (no folder, no ``.toml``) is looked up
-    shop -> user -> bundled. A path that does not exist, or a name not in the library, is an
+    shop -> user -> bundled, and refused when ``./NAME.toml`` is here too. A path that does not exist, or a name not in the library, is an
     InputError with "did you mean" near names (files in that folder, or library names).
     """
     text = str(job)
@@ -317,7 +317,29 @@ def resolve_job(job, library_dir=None) -> Path:
                 except (InputError, OSError):
                     near = []
             _missing(text, near)
+        return _bare_name(text, library_dir)
     return find(text, library_dir).path
+
+
+def _bare_name(text: str, library_dir=None) -> Path:
+    """A bare NAME is a library name (shop -> user -> bundled); when ./NAME.toml is also in
+    this folder it is refused, naming both, so `shopbeam rating jib-arm` never checks the
+    bundled preset while the shop meant the file beside it."""
+    here = Path(text.strip() + storage.SUFFIX)
+    local = here if here.is_file() else None
+    try:
+        entry = find(text, library_dir)
+    except InputError as e:
+        if local is None:
+            raise
+        raise InputError(f"{e.problem.message.split(';')[0]}; the file in this folder is "
+                         f"./{local.name}: write ./{local.name} (a bare name is a library "
+                         "name)", file=text) from None
+    if local is not None and local.resolve() != entry.path.resolve():
+        raise InputError(f"'{text}' is both the file ./{local.name} in this folder and the "
+                         f"library job {entry.label}: write ./{local.name} for the file or "
+                         f"{entry.label} for the library job", file=text)
+    return entry.path
 
 
 def _missing(text: str, near: list[str]):
