@@ -158,3 +158,34 @@ def test_the_cli_refuses_the_ambiguous_bare_name_with_exit_2(tmp_path):
                          capture_output=True, text=True, timeout=120, env=env)
     assert out.returncode == 2
     assert "./demo.toml" in out.stderr and "bundled:demo" in out.stderr
+
+
+# ------------------------------------------------------------------ 3. an alloy without its temper
+@pytest.mark.parametrize("spec", ["6063", "al 6063", "Aluminum 6063"])
+def test_a_bare_alloy_with_two_tempers_built_in_is_refused_listing_them(spec):
+    from shopbeam.errors import InputError
+    from shopbeam.members.materials import resolve_material
+
+    with pytest.raises(InputError) as e:
+        resolve_material(spec)
+    msg = e.value.problem.message
+    assert "'6063-T5'" in msg and "'6063-T6'" in msg and "temper" in msg
+
+
+def test_the_tempers_written_out_still_resolve():
+    from shopbeam.members.materials import resolve_material
+
+    assert resolve_material("6063-T5").key == "6063-T5"
+    assert resolve_material("6063 T6").key == "6063-T6"
+    assert resolve_material("al6063t6").key == "6063-T6"
+
+
+def test_a_bare_alloy_with_one_temper_built_in_is_read_but_warned():
+    text = cantilever("36 in").replace('"HSS4x2x3/16"', '{shape = "rect-tube", depth = "4 in", '
+                                       'width = "2 in", wall = "0.125 in"}')
+    job = parse_job_text(text.replace('"A500-C"', '"6061"'))
+    assert job.material.key == "6061-T6"
+    w = warned(job, "beam.material")
+    assert len(w) == 1 and "no temper" in w[0].message and "'6061-T6'" in w[0].message
+    job = parse_job_text(text.replace('"A500-C"', '"6061-T6"'))
+    assert not warned(job, "beam.material")

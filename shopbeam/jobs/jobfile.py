@@ -31,7 +31,7 @@ from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RAT
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
                                  guessed_profile, has_free_end)
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
-from shopbeam.members.materials import resolve_material
+from shopbeam.members.materials import resolve_material, untempered
 from shopbeam.members.resolve import resolve_section
 
 SCHEMA = 1
@@ -1318,6 +1318,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     "beam.material")
         else:
             material = _resolve("material", beam["material"], "beam.material", r)
+            bare_alloy = untempered(beam["material"], material)
+            if bare_alloy:
+                r.warn(bare_alloy, "beam.material")
             if material is not None and getattr(material, "source", "") == "typed in":
                 _mixed_material(r, material, system)
                 _kind_mismatch(r, material, system)

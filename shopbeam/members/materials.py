@@ -199,7 +199,7 @@ _MATERIALS: tuple[Material, ...] = (
              fu_welded=17 * KSI,
              source="Fty 25 ksi, Ftu 30 ksi; welded Ftyw 8 ksi, Ftuw 17 ksi; E 10,100 ksi; "
              "density 0.097 lb/in^3: Aluminum Design Manual 2015, from memory",
-             aliases=("6063", "6063t6", "al6063", "al6063t6"), hss_wall_factor=1.0),
+             aliases=("6063t6", "al6063t6"), hss_wall_factor=1.0),
     # Lumber: NDS Supplement 2018 Table 4A/4B reference values for dimension lumber (timber
     # sizes take their Table 4D row, see shopbeam.members.wood); density from specific
     # gravity (NDS Table 12.3.3A: DF-L 0.50, Hem-Fir 0.43, SPF 0.42, Southern Pine 0.55) at
@@ -228,6 +228,24 @@ _MATERIALS: tuple[Material, ...] = (
              notes=("LVL: dry service only; the depth factor (12/d)^0.136 applies to Fb",),
              aliases=("lvl", "lvl2.0e", "lvl20e", "lvl2.0e2600fb", "lvl2600")),
 )
+
+
+# "al 6063", "aluminum 6063": the alloy number alone, to find the tempers built in
+_ALLOY_PREFIX = re.compile(r"^(?:al|alu|alum|aluminum|aluminium)(?=\d)")
+
+
+def untempered(spec, material) -> str:
+    """What to say when an aluminium alloy was named without its temper ("6061") and read as
+    the one temper built in: the annealed and T4 tempers of the same alloy are far weaker."""
+    if not isinstance(spec, str) or getattr(material, "kind", "") != "aluminum":
+        return ""
+    typed = _ALLOY_PREFIX.sub("", _norm(spec))
+    if not typed.isdigit():
+        return ""
+    return (f"material {spec!r} has no temper and is read as {material.key!r} (Fty "
+            f"{material.fy / KSI:g} ksi), the one {typed} temper built in; other tempers "
+            f"({typed}-O, {typed}-T4) are far weaker: write {material.key!r} if the mill cert "
+            "says so, or give a [beam.material] table with its values")
 
 
 def _norm(text: str) -> str:
@@ -267,10 +285,12 @@ def resolve_material(spec, key: str = "beam.material") -> Material:
         m = get(spec)
         if m is not None:
             return m
-        grades = [x.key for x in _MATERIALS if _norm(x.key).startswith(_norm(spec))
-                  and _norm(spec)]
-        if len(grades) > 1 or (grades and len(_norm(spec)) >= 3):
-            raise InputError(f"{spec!r} names a specification with grades: say which, "
+        bare = _ALLOY_PREFIX.sub("", _norm(spec))
+        grades = [x.key for x in _MATERIALS if _norm(x.key).startswith(bare) and bare]
+        if len(grades) > 1 or (grades and len(bare) >= 3):
+            what = ("an alloy with several tempers built in" if bare.isdigit()
+                    else "a specification with grades")
+            raise InputError(f"{spec!r} names {what}: say which, "
                              f"{' or '.join(repr(g) for g in grades)}", key)
         import difflib
 
