@@ -189,3 +189,25 @@ def test_a_bare_alloy_with_one_temper_built_in_is_read_but_warned():
     assert len(w) == 1 and "no temper" in w[0].message and "'6061-T6'" in w[0].message
     job = parse_job_text(text.replace('"A500-C"', '"6061-T6"'))
     assert not warned(job, "beam.material")
+
+
+# ------------------------------------------------------------------ 4. a lifting job with no live load
+def test_a_lifting_job_whose_hook_load_is_dead_is_warned():
+    job = parse_job_text(cantilever("36 in", case='case = "dead"', tags='["lifting"]',
+                                    title="Jib boom"))
+    w = warned(job, "loads[0].case")
+    assert len(w) == 1 and "no live load" in w[0].message and 'case = "live"' in w[0].message
+    assert "impact" in w[0].message
+
+
+def test_a_lifting_job_with_a_live_hook_load_is_not_warned_of_it():
+    job = parse_job_text(cantilever("36 in", tags='["lifting"]', title="Jib boom")
+                         + '[[loads]]\ntype = "point"\nat = "36 in"\nvalue = "-80 lbf"\n'
+                           'case = "dead"\nlabel = "hoist"\n')
+    assert not [p for p in warned(job) if "no live load" in p.message]
+
+
+def test_a_dead_only_shelf_is_not_told_about_lifting():
+    job = parse_job_text(cantilever("36 in", case='case = "dead"', tags='["shelf"]',
+                                    title="Shelf arm"))
+    assert not [p for p in warned(job) if "no live load" in p.message]

@@ -1015,6 +1015,29 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
                "profile's limit", "criteria.deflection")
 
 
+def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -> None:
+    """A lifting job whose force loads are all dead (the rated hook load typed case =
+    "dead"), or that has none: the impact allowance is added to live loads only and the
+    rating scales the live loads, so the hook load was checked without impact and cannot be
+    rated."""
+    if not is_lifting(tags, criteria.lifting) or moving:
+        return
+    forces = [ld for ld in loads if ld.kind != "moment"]
+    if any(ld.case == "live" for ld in forces):
+        return
+    if forces:
+        names = ", ".join(ld.key + (f" ({ld.label})" if ld.label else "") for ld in forces[:3])
+        r.warn(f"this lifting job has no live load: every force load is case = \"dead\" "
+               f"({names}{', ...' if len(forces) > 3 else ''}). The rated (hook) load must be "
+               "live (case = \"live\", the default) for the impact allowance and the rating "
+               "to apply: keep case = \"dead\" for the hoist and trolley weight only",
+               f"{forces[0].key}.case")
+    else:
+        r.warn("this lifting job has no force load: give the rated (hook) load as a live point "
+               "load (case = \"live\", the default) so the impact allowance and the rating "
+               "apply", "loads")
+
+
 def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
     """Lifting words that contradict the job: the jib-boom profile (L/225 on twice the reach)
     named on a member with no free end, where a monorail's L/450 is what a trolley needs; and
@@ -1452,6 +1475,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
     _looser_than_lifting(r, criteria, tags, supports, length)
+    _lifting_without_live(r, criteria, tags, loads, moving)
     _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
