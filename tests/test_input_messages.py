@@ -211,3 +211,55 @@ def test_a_dead_only_shelf_is_not_told_about_lifting():
     job = parse_job_text(cantilever("36 in", case='case = "dead"', tags='["shelf"]',
                                     title="Shelf arm"))
     assert not [p for p in warned(job) if "no live load" in p.message]
+
+
+# ------------------------------------------------------------------ 5. lifting and rack words
+@pytest.mark.parametrize("title, tags, found", [
+    ("Winch beam over the saw", "[]", "title: 'Winch'"),
+    ("Come-along anchor beam", "[]", "title: 'Come-along'"),
+    ("Comealong beam", "[]", "title: 'Comealong'"),
+    ("Chain block beam", "[]", "title: 'Chain block'"),
+    ("Chainfall beam", "[]", "title: 'Chainfall'"),
+    ("A-frame header", "[]", "title: 'A-frame'"),
+    ("Padeye beam", "[]", "title: 'Padeye'"),
+    ("Pad eye beam", "[]", "title: 'Pad eye'"),
+    ("Shackle point", "[]", "title: 'Shackle'"),
+    ("Beam clamp rail", "[]", "title: 'Beam clamp'"),
+    ("Runway beam bay 1", "[]", "title: 'Runway'"),
+    ("Pulley beam", "[]", "title: 'Pulley'"),
+    ("Engine puller arm", "[]", "title: 'Engine puller'"),
+    ("Strongback", "[]", "title: 'Strongback'"),
+    ("Cherry picker boom", "[]", "title: 'Cherry picker'"),
+    ("Lifting lug bar", '["not-lifting-x"]', "title: 'Lifting'"),
+    ("Arm 2", '["lift"]', "tag 'lift'"),
+])
+def test_more_lifting_words_make_an_untagged_job_not_rated(title, tags, found):
+    job = parse_job_text(cantilever("36 in", tags=tags, title=title))
+    w = [p for p in warned(job) if "reads like a lifting device" in p.message]
+    assert len(w) == 1 and found in w[0].message
+    assert job.lifting_hint
+    assert any("reads like a lifting device" in r for r in capacity(job).not_rated)
+
+
+def test_a_lifting_word_in_a_load_label_is_found():
+    job = parse_job_text(cantilever("36 in", tags="[]", title="Arm 4").replace(
+        'label = "tip load"', 'label = "sling point"'))
+    assert "sling point" in job.lifting_hint
+
+
+@pytest.mark.parametrize("title", ["Pallet rack beam bay 2", "Racking level 3",
+                                   "Rack beam, aisle 4"])
+def test_an_untagged_job_that_reads_like_a_rack_is_warned(title):
+    job = parse_job_text(cantilever("36 in", tags="[]", title=title))
+    w = [p for p in warned(job) if "reads like a storage rack" in p.message]
+    assert len(w) == 1 and 'tags = ["rack"]' in w[0].message and "not-rack" in w[0].message
+    assert w[0].key == "title"
+
+
+@pytest.mark.parametrize("title, tags", [("Pallet rack beam", '["rack"]'),
+                                         ("Pallet rack beam", '["not-rack"]'),
+                                         ("Shelf rail", "[]"),
+                                         ("Hat rack", "[]")])
+def test_a_rack_tagged_or_plain_job_gets_no_rack_hint(title, tags):
+    job = parse_job_text(cantilever("36 in", tags=tags, title=title))
+    assert not [p for p in warned(job) if "reads like a storage rack" in p.message]

@@ -991,8 +991,19 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
 # lifting would be checked without the impact allowance and the stricter deflection limit.
 NOT_LIFTING = "not-lifting"  # the tag that says a job that reads like one is not a lifting device
 _LIFTING_WORDS = re.compile(
-    r"\b(hoists?|hoisting|monorails?|jib|jibs|cranes?|trolley|trolleys|chain ?falls?|"
-    r"lifting|lift beam|spreader|davit|gantry|below[- ]the[- ]hook|rigging|block and tackle)\b",
+    r"\b(hoists?|hoisting|monorails?|jibs?|cranes?|trolleys?|chain[- ]?falls?|chain[- ]?blocks?|"
+    r"lifting|lift beams?|spreaders?|davits?|gantry|gantries|below[- ]the[- ]hook|rigging|"
+    r"block and tackle|tackle|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
+    r"shackles?|sling points?|beam clamps?|runways?|pulleys?|engine (?:pullers?|lifts?)|"
+    r"strongbacks?|strong-backs?|cherry ?pickers?|lugs?)\b",
+    re.IGNORECASE)
+_LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
+NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
+# Words that name a storage-rack member; a job that uses one but is not tagged rack gets
+# neither the rack cautions (the impact load) nor the rating label's per-level wording.
+_RACK_WORDS = re.compile(
+    r"\b(pallet[- ]?racks?|pallet[- ]?racking|racking|rack beams?|rack arms?|"
+    r"cantilever[- ]racks?|storage[- ]racks?|selective[- ]racks?|rack uprights?)\b",
     re.IGNORECASE)
 
 
@@ -1068,7 +1079,7 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
             said.append(f"{key}: {m.group(0)!r}")
     for t in tags:
         m = _LIFTING_WORDS.search(t)
-        if m:
+        if m or t in _LIFTING_TAGS:
             said.append(f"tag {t!r}")
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         label = ld.get("label") if _is_table(ld) else None
@@ -1087,6 +1098,33 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
            "rated. Add tags = [\"lifting\"] if it carries a hoist or trolley, or the tag "
            f"\"{NOT_LIFTING}\" if it does not", key)
     return hint
+
+
+def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
+    """A job that reads like a storage rack ("pallet rack beam", "racking") but is not
+    tagged one is warned: the rack cautions (the impact load is not added unless given) and
+    the rating label's per-level wording are for rack-tagged jobs. The tag ``not-rack`` says
+    it is not one."""
+    if RACK_TAGS.intersection(tags) or NOT_RACK in tags:
+        return
+    said = []
+    for key, text in (("title", title), ("notes", notes)):
+        m = _RACK_WORDS.search(text or "")
+        if m:
+            said.append(f"{key}: {m.group(0)!r}")
+    said += [f"tag {t!r}" for t in tags if _RACK_WORDS.search(t)]
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        label = ld.get("label") if _is_table(ld) else None
+        if isinstance(label, str) and _RACK_WORDS.search(label):
+            said.append(f"loads[{i}] is labelled {label!r}")
+            break
+    if not said:
+        return
+    r.warn(f"this reads like a storage rack ({'; '.join(said[:3])}) but is not tagged rack: "
+           "the rack cautions (the ANSI MH16.1 impact load, not added unless impact is given) "
+           "and the rating label's per-level wording are not applied. Add tags = [\"rack\"] "
+           f"if it is a rack member, or the tag \"{NOT_RACK}\" if it is not",
+           "tags" if tags else "title")
 
 
 def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
@@ -1479,6 +1517,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
+    _rack_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
                 section.shape == "i-beam" and section.axis == "strong"):
