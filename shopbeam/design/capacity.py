@@ -26,6 +26,7 @@ from shopbeam.design.analysis import analyze, unchecked_for
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
+from shopbeam.engine.model import Beam, segments
 from shopbeam.jobs.jobfile import kind_mismatch
 
 
@@ -145,12 +146,71 @@ def rating_gaps(job, st) -> tuple[str, ...]:
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")
+    out += _live_both_ways(job) + _live_on_spans_unpatterned(job)
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
                    "impact allowance and the lifting deflection limit were not applied. Add "
                    "tags = [\"lifting\"], or the tag \"not-lifting\" if it is not one")
     return tuple(out)
+
+
+def _live_both_ways(job) -> list[str]:
+    """Live loads that push both ways: k scales them together, so at the rated figure the
+    ones that push one way hold back the others. A relieving load is never counted on at its
+    full, scaled value (common practice: wind does not relieve snow, a stored load does not
+    relieve an uplift), so nothing is posted from such a job."""
+    down, up = [], []
+    for ld in job.loads:
+        if ld.case != "live" or ld.kind == "moment":
+            continue
+        ends = (ld.value,) if ld.kind == "point" else \
+            (ld.w1, ld.w1 if ld.kind == "uniform" else ld.w2)
+        name = ld.key + (f" ({ld.label})" if ld.label else "")
+        if any(v < 0 for v in ends):
+            down.append(name)
+        if any(v > 0 for v in ends):
+            up.append(name)
+    for mv in read_moving(job):
+        if any(v < 0 for v in mv.live):
+            down.append(mv.key)
+        if any(v > 0 for v in mv.live):
+            up.append(mv.key)
+    if not (down and up):
+        return []
+    return [f"live loads push both ways ({', '.join(down)} down; {', '.join(up)} up): the "
+            "factor scales them together, so at the rated figure one relieves the other, and "
+            "a load that relieves is never counted on at its full scaled value. Rate each "
+            "direction in its own job, or enter the relieving load as case = \"dead\" at a "
+            "value it is sure to have"]
+
+
+def _live_on_spans_unpatterned(job) -> list[str]:
+    """Live loads on more than one span or overhang, not patterned: the factor holds only
+    while every one of them is on at once. Loading some spans and not the others is worse
+    for some checks (a span beside an empty one sags more; a load on an overhang lifts the
+    span behind it), and a posted load is read as good for any arrangement."""
+    segs = segments(Beam(job.length, 1.0, job.supports, ()))
+    if len(segs) < 2:
+        return []
+    tol = 1e-9 * job.length
+    on: set[int] = set()
+    for ld in job.loads:
+        if ld.case != "live" or ld.patterned or not ld.total_force and ld.kind != "moment":
+            continue
+        for i, (a, b, _) in enumerate(segs):
+            if ld.kind in ("point", "moment"):
+                if a + tol < ld.at < b - tol:
+                    on.add(i)
+            elif min(b, ld.end) - max(a, ld.start) > tol:
+                on.add(i)
+    if len(on) < 2:
+        return []
+    return [f"live loads lie on {len(on)} spans and overhangs, all taken as on at once: "
+            "loading only some of them can be worse (a span beside an empty one sags more; "
+            "a load on an overhang lifts the span behind it), and a posted load is read as "
+            "good for any arrangement. Write patterned = true on the live loads that come and "
+            "go span by span, so every arrangement is checked and rated"]
 
 
 def capacity(job, section=None, ss=None) -> CapacityResult:
@@ -173,7 +233,12 @@ def _capacity(job, section, ss, st) -> CapacityResult:
         return max(c.ratio for c in ev(k).checks)
 
     if not _has_live(ss):
-        return CapacityResult(job, math.inf, ev(1.0), "no live loads",
+        e = ev(1.0)
+        if max(c.ratio for c in e.checks) > 1:  # nothing to scale, and it fails as it is
+            return CapacityResult(job, 0.0, e, "fixed loads fail alone",
+                                  "the member fails under its own weight and the dead loads "
+                                  "alone (the job has no live loads)")
+        return CapacityResult(job, math.inf, e, "no live loads",
                               "the job has no live loads to scale: enter the load to rate "
                               "as a live load")
     e0 = ev(0.0)

@@ -363,22 +363,56 @@ def _first_yield_lateral(job) -> list:
 
 
 def lifting_unchecked(job, sec) -> list:
-    """Trolley-wheel and lateral-force limit states of sections these checks do not cover."""
+    """Trolley-wheel and lateral-force limit states of sections these checks do not cover,
+    and fatigue, which no lifting check here covers."""
     if not (job.lifting or getattr(job.criteria, "lifting", "")):
         return []
+    return [FATIGUE] + _lifting_unchecked(job, sec)
+
+
+# Every lift is a load cycle. Below about 20,000 cycles in the member's life fatigue need not
+# be checked (AISC 360-16 Appendix 3.1, from memory): a hoist used a few times a day stays
+# under it for years. A caution, not a bar to the rating: the static checks decide the load
+# to post, and the duty (how many lifts, how heavy) decides whether fatigue must be looked at.
+FATIGUE = Unchecked(
+    "fatigue under repeated lifts",
+    "every lift is a load cycle, and welds, lug holes and the flange under the trolley wheels "
+    "crack under many of them; fatigue is not checked. Fewer than about 20,000 lifts in the "
+    "member's life need no fatigue check; a hoist in production use (a few lifts an hour) "
+    "passes that within a few years: have it checked for its duty (CMAA 74 service class, "
+    "ASME BTH-1 service class)",
+    "AISC 360-16 Appendix 3; CMAA 74 / ASME BTH-1 service classes (from memory)",
+    blocks_rating=False)
+
+
+def _lifting_unchecked(job, sec) -> list:
     if _i_shape(sec):
         return _first_yield_lateral(job)
     prof = profile_of(job)
     if not job.moving:
+        out = []
+        hung = set(getattr(job, "hung", ()) or ())
+        hooks = [ld.key for ld in job.loads if ld.kind == "point" and ld.value
+                 and ld.case == "live"
+                 and not (sec.shape == "rect-tube" and ld.key in hung)]  # K2.2 says it there
+        if hooks:
+            part = "wall" if sec.shape in ("rect-tube", "round-tube", "pipe") else "flange"
+            out.append(Unchecked(
+                "the member under the hook, clamp or trolley",
+                f"{', '.join(hooks)} hang from or bear on this {sec.shape} through a hook, lug, "
+                f"clamp or parked trolley; the {part} there is not checked under it (only an "
+                "I-beam's bottom flange is checked under a hung load), so no rating is posted: "
+                "hang the load from an I-beam, or have the attachment and the member at it "
+                "checked", "CMAA 74 70-3.3.2.2; AISC 360-16 J10, K2", blocks_rating=True))
         if prof and prof.lateral and _static_hoist(job):
-            return [Unchecked("lateral trolley force (weak-axis bending and torsion)",
+            return out + [Unchecked("lateral trolley force (weak-axis bending and torsion)",
                               f"{prof.lateral:.0%} of rated load + hoist + trolley at the hoist "
                               f"is not checked for a {sec.shape} ({sec.axis} axis): only the "
                               "bottom flange of an I-beam is checked for it (AISC Design Guide "
                               "7); use an I-beam, or name a hand-geared device with [criteria] "
                               "lifting = \"hand-geared-monorail\" if the trolley is not powered",
                               "ASCE 7-16 4.9.4; AISC 360-16 H1, H3", blocks_rating=True)]
-        return []
+        return out
     out = [Unchecked("flange local bending under trolley wheels",
                      f"trolley wheels on a {sec.shape} ({sec.axis} axis) are not covered by the "
                      "CMAA 74 / Design Guide 7 method (I-shapes only)",

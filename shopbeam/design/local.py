@@ -460,18 +460,20 @@ def _span_forces(job) -> list[str]:
 
 
 def _round_wall(job, clause: str) -> Unchecked:
-    """A round tube's wall under a concentrated force is not checked: a caution, naming the
-    point loads and wheels that bear on it (a round wall spreads a load round its ring and is
-    seldom the weak spot of a shop pipe or tube; a narrow strap or hook on a thin wall is the
-    case to have checked)."""
+    """A round tube's wall under a concentrated force is not checked. At the supports alone
+    it is a caution (the member bears on a saddle or seat there, common practice); a point
+    load or wheel set on the span withholds the rating: a narrow strap, plate or hook on a
+    thin wall can crush it far below the member's bending strength (AISC 360-16 Table K2.1
+    plastification goes with Fy t^2, from memory)."""
     points = _span_forces(job)
     return Unchecked("round HSS wall under a concentrated force",
                      "local plastification of a round wall at supports and point loads is not "
                      "checked (bear it on a saddle)"
-                     + (f"; {', '.join(points)} bear on the wall between the supports: on a "
-                        "thin wall hang them from a saddle or sleeve, not a narrow strap or "
-                        "hook" if points else ""),
-                     clause, blocks_rating=False)
+                     + (f"; {', '.join(points)} bear on the wall between the supports, and a "
+                        "narrow strap, plate or hook can crush a thin wall first, so no rating "
+                        "is posted (hang the load from a full saddle or sleeve, or have the "
+                        "wall checked)" if points else ""),
+                     clause, blocks_rating=bool(points))
 
 
 def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
@@ -490,16 +492,20 @@ def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
         return []
     points = _span_forces(job)
     what = "tube walls" if sec.shape == "rect-tube" else "web"
+    # thin aluminium webs and walls cripple at the supports too (ADM web crippling covers
+    # end and interior reactions, from memory): no rating rests on that, loads on the span
+    # or not
     clause = ("ADM 2015 chapter J, concentrated forces (from memory)" if mkind == "aluminum"
               else "AISC 360-16 J10 / K2 (written for steel, not applied to a typed-in metal)")
     return [Unchecked(
         "web crippling and local yielding under concentrated forces",
         f"the {what} under a support reaction or a point load is not checked for "
         f"{'aluminium' if mkind == 'aluminum' else 'a typed-in metal'}"
-        + (f"; {', '.join(points)} bear on it between the supports and can cripple it first, "
-           "so no rating is posted (spread the load with a bearing plate or stiffener, or have "
-           "it checked)" if points else " (bear the member on seats at the supports)"),
-        clause, blocks_rating=bool(points))]
+        + (f"; {', '.join(points)} bear on it between the supports and can cripple it first"
+           if points else "; the support reactions bear on it")
+        + ", so no rating is posted (spread the forces with bearing plates or stiffeners, or "
+        "have the web checked)",
+        clause, blocks_rating=True)]
 
 
 def local_unchecked(job, sec=None) -> list[Unchecked]:
@@ -529,10 +535,15 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                if wheels else ""),
             "AISC 360-16 K2, Table K2.2", blocks_rating=bool(hung or wheels)))
     elif sec.shape in ("i-beam", "channel") and sec.axis == "weak":
+        points = _span_forces(job)
         out.append(Unchecked("local bearing of the flanges (weak axis)",
                              "concentrated forces on a member bent about its weak axis load "
-                             "the flange edges; no check is made", "AISC 360-16 J10",
-                             blocks_rating=False))
+                             "the flange edges; no check is made"
+                             + (f"; {', '.join(points)} bear on a flange edge between the "
+                                "supports, which can bend or crush first, so no rating is "
+                                "posted (spread the load with a plate across both flanges, or "
+                                "have it checked)" if points else ""),
+                             "AISC 360-16 J10", blocks_rating=bool(points)))
     elif sec.shape in ("round-tube", "pipe"):
         out.append(_round_wall(job, "AISC 360-16 K2, Table K2.1"))
     elif sec.shape in ("tee", "angle"):

@@ -28,7 +28,9 @@ def render(res: CapacityResult, width: int = 78) -> str:
                                "(dead loads and self-weight fixed)", width,
                                subsequent_indent="  ")
     else:
-        lines += textwrap.wrap("CAPACITY FACTOR: unlimited (" + res.note + ")", width,
+        # no live loads: nothing to scale, so no factor at all (not an unlimited one)
+        words = "none" if res.method == "no live loads" else "unlimited"
+        lines += textwrap.wrap(f"CAPACITY FACTOR: {words} (" + res.note + ")", width,
                                subsequent_indent="  ")
     more = [res.note] if res.note and math.isfinite(k) else []
     more += [f"method: {res.method}", f"basis: {BASIS_WORDS[basis_of(job)]}"]

@@ -1,0 +1,164 @@
+"""No rating from a job whose rated figure would hold only under the loads exactly as entered:
+live loads that push both ways, live loads on several spans not patterned, a member that fails
+under its dead loads alone; and the lifting limit states of members other than I-beams."""
+
+from __future__ import annotations
+
+import math
+
+from jobtext import point_load, simple_span, uniform_load
+from shopbeam.design.analysis import analyze
+from shopbeam.design.capacity import capacity
+from shopbeam.jobs.jobfile import parse_job_text
+from shopbeam.output.capacityreport import render
+from shopbeam.output.label import label_text, rating
+
+ARM = """schema = 1
+title = "awning bracket"
+[beam]
+length = "4 ft"
+section = "HSS3x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "4 ft"
+value = "-180 lbf/ft"
+label = "snow"
+"""
+UPLIFT = """[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "4 ft"
+value = "150 lbf/ft"
+uplift = true
+label = "wind uplift"
+"""
+
+
+def test_live_loads_that_push_both_ways_are_not_rated():
+    # scaled together, the uplift holds back the snow: at the factor found (about 15 on this
+    # arm) the snow alone would be several times over the bending limit, so nothing is posted
+    # (common practice: a relieving load is never counted on at its full scaled value)
+    both = capacity(parse_job_text(ARM + UPLIFT))
+    why = [r for r in both.not_rated if r.startswith("live loads push both ways")]
+    assert why and "loads[0] (snow)" in why[0] and "loads[1] (wind uplift)" in why[0]
+    snow_alone = parse_job_text(ARM.replace("-180 lbf/ft", f"{-180 * both.factor:.6g} lbf/ft"))
+    assert max(c.ratio for c in analyze(snow_alone).checks) > 2
+    assert "NOT RATED" in label_text(rating(both, analyze(both.job).unchecked))
+    # the uplift entered as a dead load it is sure to have: rated (one direction is live)
+    dead = capacity(parse_job_text(ARM + UPLIFT.replace("uplift = true", "uplift = true\n"
+                                                        'case = "dead"')))
+    assert not [r for r in dead.not_rated if r.startswith("live loads push both ways")]
+    # snow alone: rated
+    assert capacity(parse_job_text(ARM)).rated
+
+
+TWO_SPANS = """schema = 1
+title = "shelf rail on three brackets"
+[beam]
+length = "12 ft"
+section = "HSS3x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "pin"
+[[supports]]
+at = "12 ft"
+type = "pin"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "12 ft"
+value = "-100 lbf/ft"
+"""
+
+
+def test_live_load_on_two_spans_not_patterned_is_not_rated():
+    plain = capacity(parse_job_text(TWO_SPANS))
+    why = [r for r in plain.not_rated if r.startswith("live loads lie on 2 spans")]
+    assert why and "patterned = true" in why[0]
+    # patterned: every arrangement is checked, the factor is lower and it is rated
+    pat = capacity(parse_job_text(TWO_SPANS + "patterned = true\n"))
+    assert pat.rated and pat.factor < plain.factor
+    # the same load on one span only: nothing to pattern, rated
+    one = capacity(parse_job_text(TWO_SPANS.replace('end = "12 ft"', 'end = "6 ft"')))
+    assert one.rated
+
+
+def test_live_load_on_a_span_and_its_overhang_is_not_rated():
+    text = TWO_SPANS.replace('[[supports]]\nat = "12 ft"\ntype = "pin"\n', "").replace(
+        'at = "6 ft"\ntype = "pin"', 'at = "8 ft"\ntype = "roller"')
+    cap = capacity(parse_job_text(text))
+    assert [r for r in cap.not_rated if r.startswith("live loads lie on 2 spans and overhangs")]
+
+
+def test_dead_loads_alone_that_fail_give_do_not_load_not_unlimited():
+    text = simple_span('section = "HSS2x2x1/8"\nmaterial = "A500-C"', 10,
+                       uniform_load(10, "-200 lbf/ft").replace("value", 'case = "dead"\nvalue'))
+    cap = capacity(parse_job_text(text))
+    assert cap.factor == 0.0
+    label = label_text(rating(cap, analyze(cap.job).unchecked))
+    assert "DO NOT LOAD" in label and "no live loads" in label
+    # nothing to scale and it passes: no factor, and the page says none (not "unlimited")
+    light = capacity(parse_job_text(text.replace("-200 lbf/ft", "-5 lbf/ft")))
+    assert math.isinf(light.factor)
+    page = render(light)
+    assert "CAPACITY FACTOR: none" in page and "unlimited" not in page
+
+
+HOIST = """schema = 1
+title = "hoist rail"
+tags = ["lifting"]
+[beam]
+length = "10 ft"
+section = "SECTION"
+material = "MATERIAL"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-1000 lbf"
+label = "rated load"
+[criteria]
+lifting = "hand-geared-monorail"
+"""
+
+
+def test_a_hoist_on_a_tube_or_channel_is_not_rated_for_the_member_under_the_hook():
+    # only an I-beam's bottom flange is checked under a hung load (CMAA 74 70-3.3.2.2, from
+    # memory); a tube's wall or a channel's flange under a hook, lug or clamp is not
+    for sec, mat in (("HSS6x4x1/4", "A500-C"), ("C8x11.5", "A36")):
+        cap = capacity(parse_job_text(HOIST.replace("SECTION", sec).replace("MATERIAL", mat)))
+        why = [r for r in cap.not_rated if r.startswith("the member under the hook")]
+        assert why and "loads[0]" in why[0], sec
+    # an I-beam gets the flange checked under the hoist, and no such reason
+    cap = capacity(parse_job_text(HOIST.replace("SECTION", "W8x18").replace("MATERIAL", "A992")))
+    assert not [r for r in cap.not_rated if r.startswith("the member under the hook")]
+
+
+def test_every_lifting_job_lists_fatigue_as_not_checked():
+    res = analyze(parse_job_text(HOIST.replace("SECTION", "W8x18").replace("MATERIAL", "A992")))
+    fat = [u for u in res.unchecked if u.name == "fatigue under repeated lifts"]
+    assert fat and not fat[0].blocks_rating and "Appendix 3" in fat[0].clause
+    plain = analyze(parse_job_text(simple_span('section = "W8x18"\nmaterial = "A992"', 10)))
+    assert not [u for u in plain.unchecked if u.name.startswith("fatigue")]
+
+
+def test_weak_axis_flanges_under_a_point_load_are_not_rated():
+    beam = 'section = "C6x8.2"\nmaterial = "A36"\naxis = "weak"\nbraced = true'
+    point = capacity(parse_job_text(simple_span(beam, 4, point_load(2, "-100 lbf"))))
+    assert [r for r in point.not_rated if r.startswith("local bearing of the flanges")]
+    spread = capacity(parse_job_text(simple_span(beam, 4, uniform_load(4, "-20 lbf/ft"))))
+    assert not [r for r in spread.not_rated if r.startswith("local bearing of the flanges")]
