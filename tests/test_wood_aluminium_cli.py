@@ -198,7 +198,7 @@ CHANNEL = ('{ shape = "channel", depth = "6 in", flange_width = "2.5 in", '
            'flange_thickness = "0.2 in", web_thickness = "0.17 in" }')
 
 
-def test_thin_aluminium_tube_is_rated_on_its_local_buckling(tmp_path):
+def test_thin_aluminium_tube_is_checked_on_its_local_buckling(tmp_path):
     # ADM 2015 B.5.4.2, F.8 (from memory): 6061-T6 4 x 4 x 0.083 tube, flange b/t 44.2 >
     # lambda2 32.8: Fc = 2.27 sqrt(Bp E) / (1.6 b/t) = 21.65 ksi (149.3 MPa), below the
     # rupture and yield figures: Mn = Fc Sc, Omega 1.65. Metric job: the words are in MPa.
@@ -206,10 +206,12 @@ def test_thin_aluminium_tube_is_rated_on_its_local_buckling(tmp_path):
               uniform("-1 kN/m", "2.4 m", "0 m"), units="si", length="2.4 m")
     d = solve(p, "capacity")
     b = chk(d, "bending")
-    # the only gap is the walls at the supports, a caution (the members bear on seats)
-    assert [u["name"] for u in d["unchecked"] if u["blocks_rating"]] == [] and d["rated"] is True
-    assert [u["name"] for u in d["unchecked"]] == [
+    # the only gap is the walls under the support reactions: ADM web crippling (from memory)
+    # is not worked out, and a thin wall can cripple there, so the factor is given, not rated
+    gaps = [u for u in d["unchecked"] if u["blocks_rating"]]
+    assert [u["name"] for u in gaps] == [u["name"] for u in d["unchecked"]] == [
         "web crippling and local yielding under concentrated forces"]
+    assert "support reactions" in gaps[0]["reason"] and d["rated"] is False
     assert "B.5.4.2" in b["formula"] and "149 MPa" in b["formula"]
     assert "ksi" not in b["formula"].split("constants in ksi")[0]
     assert d["factor"] > 0
@@ -232,21 +234,22 @@ def test_unbraced_aluminium_channel_is_checked_for_lateral_torsional_buckling(tm
     # loaded in the plane of its web, off the shear centre, it twists: that is not checked,
     # so it is not rated until a deck or shelf holds it (restrained = true)
     assert d["rated"] is False
-    assert [u["name"] for u in d["unchecked"] if u["blocks_rating"]] == [
-        "torsion from loads off the shear centre"]
+    assert sorted(u["name"] for u in d["unchecked"] if u["blocks_rating"]) == [
+        "torsion from loads off the shear centre",
+        "web crippling and local yielding under concentrated forces"]
     assert "NOT RATED" in run("rating", loose).stdout
     fixed = write(tmp_path, "fixed", f"section = {CHANNEL}\nmaterial = \"6061-T6\"\n"
                   "restrained = true", uniform("-100 lbf/ft", "8 ft"), length="8 ft")
     d = solve(fixed, "capacity")
-    assert d["rated"] is True and not [u for u in d["unchecked"] if u["blocks_rating"]]
+    # held against twist: the torsion gap closes; the web at the supports remains
+    assert [u["name"] for u in d["unchecked"] if u["blocks_rating"]] == [
+        "web crippling and local yielding under concentrated forces"]
     r = run("rating", fixed)
-    assert r.returncode == 0 and "NOT RATED" not in r.stdout
+    assert r.returncode == 0 and "NOT RATED" in r.stdout and "torsion" not in r.stdout
     held = write(tmp_path, "held", f"section = {CHANNEL}\nmaterial = \"6061-T6\"\nbraced = true"
                  "\nrestrained = true", uniform("-100 lbf/ft", "8 ft"), length="8 ft")
     d = solve(held, "capacity")
-    assert d["rated"] is True
     assert chk(d, "bending")["limit"] == pytest.approx(57.9e3 * LBF * IN, rel=3e-3)
-    assert "NOT RATED" not in run("rating", held).stdout
 
 
 def test_unbraced_aluminium_angle_is_not_rated(tmp_path):
