@@ -8,9 +8,12 @@ from __future__ import annotations
 import re
 from dataclasses import dataclass
 
+import numpy as np
+
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for
 from shopbeam.design import loading
+from shopbeam.design.basis import support_braces
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, check_notes, governing,
                                     impact_of, not_checked_words, strengths)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
@@ -163,7 +166,7 @@ def analyze(job: Job) -> Result:
     else:
         checks = run_checks(job, sol)
     st = strengths(job)
-    unchecked = unchecked_for(job, st)
+    unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks)
     # every limit state not checked is named in the report, as on the label and in the JSON
     # (check_notes names the member's own strength ones)
@@ -230,7 +233,106 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
     st = st or strengths(job)
     sec = st.section
     return list(st.unchecked) + local_unchecked(job, sec) + open_unchecked(job, st) + \
-        aluminum_unchecked(job, sec) + floor_unchecked(job)
+        aluminum_unchecked(job, sec) + floor_unchecked(job) + cantilever_top_unchecked(job, st)
+
+
+def _rating_flexure(st):
+    """The flexure whose lateral-torsional buckling a rating rests on, or None where the
+    member has none to lose (no LTB rule, or a stress basis that checks first yield)."""
+    fl = st.flexure
+    return None if fl.ltb is None or fl.stress_s is not None else fl
+
+
+# Effective length of a cantilever unbraced at its tip with the load on its top flange, which
+# destabilises it: about 1.4 L for a built-in root and 2.5 L for an overhang past a support
+# (SSRC Guide / BS 5950-1 Table 14, from memory; see cantilever_notes).
+TOP_LOAD_K = {True: 1.4, False: 2.5}
+
+
+def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float, float]]:
+    """(start, end, effective length factor, strength checked, strength with the loads on
+    top) of each unbraced cantilever whose top-flange loading would lower its bending
+    strength (both strengths are Mn / Omega)."""
+    fl = _rating_flexure(st)
+    if fl is None or job.braced or job.restrained:
+        return []
+    tol = 1e-9 * job.length
+    hung = set(getattr(job, "hung", ()) or ())
+    out = []
+    for a, b, free, l1, _why in st.ltb_segments:
+        if not free:
+            continue
+        on = [ld for ld in job.loads if ld.kind != "moment" and ld.total_force
+              and (a - tol < ld.at < b + tol if ld.kind == "point"
+                   else min(b, ld.end) - max(a, ld.start) > tol)]
+        if on and all(ld.key in hung for ld in on):
+            continue  # every load hangs below the shear centre: not destabilising
+        held = [s.at for s in job.supports if s.takes_force]
+        root = a if any(abs(h - a) <= tol for h in held) else b
+        fixed = any(s.kind == "fixed" and abs(s.at - root) <= tol for s in job.supports)
+        k = TOP_LOAD_K[fixed]
+        now = min(fl.cap, l1)
+        top = min(fl.cap, fl.ltb1(k * (b - a))[0])
+        if top < now * (1 - 1e-9):
+            out.append((a, b, k, now / fl.omega, top / fl.omega))
+    return out
+
+
+def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
+    """An unbraced cantilever is checked with its loads at the shear centre (AISC 360-16 F1,
+    Cb = 1.0). Loads on its top flange destabilise it, and a rack arm's or bracket's loads
+    sit on top. Not checked as such: listed, and `capacity` posts no rating where the moment
+    at the rated load would pass that lower strength (the moment in a cantilever comes from
+    its own loads alone, so the loads as entered at k give it exactly)."""
+    out = []
+    for a, b, k, now, top in cantilever_top_limits(job, st):
+        where = f"{units.fmt(a, 'length', job.units)} to {units.fmt(b, 'length', job.units)}"
+        out.append(Unchecked(
+            "lateral-torsional buckling of a cantilever loaded on its top flange",
+            f"the cantilever {where} is checked with its loads at the shear centre (Lb = its "
+            f"length, Cb 1.0); loads bearing on its top flange destabilise it (effective length "
+            f"about {k:g} x L), which lowers its bending strength to {top / now:.0%} of the "
+            "figure checked; no rating is posted where the rated load would pass that lower "
+            "strength (brace the tip with beam.braces, or hang the loads below the flange "
+            "with flange = \"bottom\")",
+            "AISC 360-16 F1 (Cb 1.0 at a free end); top-flange loading, SSRC Guide (from "
+            "memory)", blocks_rating=False))
+    return out
+
+
+def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
+    """`braced = true` holds the member all along, but what shops brace it with (a deck,
+    boards, sheeting) sits on the top flange. Where the moment hogs, the bottom flange is in
+    compression, and between the supports nothing holds it: its lateral-torsional buckling is
+    not checked, so no rating rests on it where it would lower the strength. `restrained =
+    true` (held against twist all along) says the bottom flange is held too."""
+    fl = _rating_flexure(st)
+    if fl is None or not job.braced or job.restrained:
+        return []
+    ex = moment.extremes()
+    big = max(abs(ex.max), abs(ex.min))
+    if big <= 0 or ex.min >= -0.01 * big:  # hogging under 1 % of the largest moment: none
+        return []
+    L = job.length
+    tol = 1e-9 * L
+    stops = sorted({0.0, L, *support_braces(job, job.supports)})
+    i = max(0, min(len(stops) - 2, int(np.searchsorted(stops, ex.min_at - tol, "right")) - 1))
+    lb = stops[i + 1] - stops[i]
+    l1 = fl.ltb1(lb)[0]
+    if l1 >= fl.cap:
+        return []
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    return [Unchecked(
+        "lateral-torsional buckling of the bottom flange under hogging moment",
+        f"braced = true takes the member as braced all along, but a deck, boards or sheeting "
+        f"brace only the flange they sit on; here the moment hogs ({f(ex.min, 'moment')} at "
+        f"{f(ex.min_at)}), so the bottom flange is in compression over an unbraced length of "
+        f"{f(lb)} between supports, where lateral-torsional buckling (Cb 1.0) would lower the "
+        f"bending strength to {l1 / fl.cap:.0%} of the braced figure. That is not checked, so "
+        "no rating is posted: give the bottom flange's brace points with braces = [...] in "
+        "place of braced = true, or write restrained = true if the member is held against "
+        "twist all along",
+        "AISC 360-16 F1, F2 (Lb between braces of the compression flange)")]
 
 
 # A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does

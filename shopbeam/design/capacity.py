@@ -22,11 +22,12 @@ from dataclasses import dataclass, replace
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Evaluation, evaluate, state_set
-from shopbeam.design.analysis import analyze, unchecked_for
+from shopbeam.design.analysis import analyze, braced_hogging, cantilever_top_limits, unchecked_for
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
+from shopbeam.engine.piecewise import Piecewise
 from shopbeam.jobs.jobfile import kind_mismatch
 
 
@@ -123,6 +124,12 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     checked and would block a rating, a load that pushes up unmarked (a sign mistake), and any
     failed self-check of the solve."""
     out = list(rating_gaps(job, st))
+    if job.braced:  # the moment of every load on at once (patterned spans too), k = 1
+        co = ss.fixed.moment.coeffs + ss.live.moment.coeffs
+        for sp in ss.spans:
+            co = co + sp.moment.coeffs
+        out += [f"{u.name} not checked ({u.clause}): {u.reason}"
+                for u in braced_hogging(job, st, Piecewise(ss.fixed.moment.breaks, co))]
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
@@ -218,7 +225,36 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     ss = ss or state_set(job, section)
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
-    return replace(_capacity(job, section, ss, st), not_rated=reasons)
+    res = _capacity(job, section, ss, st)
+    return replace(res, not_rated=reasons + _cantilever_top(job, st, ss, res.factor))
+
+
+def _cantilever_top(job, st, ss, k: float) -> tuple[str, ...]:
+    """No rating where the rated load, bearing on an unbraced cantilever's top flange, would
+    pass the lower strength that loading leaves it (`analysis.cantilever_top_limits`). The
+    moment in a cantilever or overhang comes from the loads on it alone, so every load on at
+    the factor (patterned spans too) gives its largest."""
+    limits = cantilever_top_limits(job, st)
+    if not limits or not math.isfinite(k) or k <= 0:
+        return ()
+    kk = k * (1 + ss.parts.impact)
+    co = ss.fixed.moment.coeffs + kk * ss.live.moment.coeffs
+    for sp in ss.spans:
+        co = co + kk * sp.moment.coeffs
+    m = Piecewise(ss.fixed.moment.breaks, co)
+    out = []
+    for a, b, kl, now, top in limits:
+        demand = m.extremes(a, b).abs_max
+        if demand > top:
+            f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+            out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
+                       f"loads on the top flange not checked: at the factor found (k = {k:.4g}) "
+                       f"its moment {f(demand, 'moment')} passes the {f(top, 'moment')} that "
+                       f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
+                       f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
+                       "centre, as checked). Brace the tip (beam.braces), or hang the loads "
+                       "below the flange (flange = \"bottom\")")
+    return tuple(out)
 
 
 def _capacity(job, section, ss, st) -> CapacityResult:
