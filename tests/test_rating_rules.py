@@ -6,6 +6,8 @@ from __future__ import annotations
 
 import math
 
+import pytest
+
 from jobtext import point_load, simple_span, uniform_load
 from shopbeam.design.analysis import analyze
 from shopbeam.design.capacity import capacity
@@ -253,3 +255,71 @@ def test_braced_true_does_not_brace_the_bottom_flange_under_hogging():
     down = capacity(parse_job_text(ROOF.replace('value = "400 lbf/ft"\nuplift = true',
                                                 'value = "-400 lbf/ft"')))
     assert down.rated
+
+
+GIRDER = """schema = 1
+title = "built-up girder"
+[beam]
+length = "20 ft"
+material = "A36"
+braced = true
+[beam.section]
+shape = "i-beam"
+depth = "24 in"
+flange_width = "6 in"
+web_thickness = "1/8 in"
+flange_thickness = "3/8 in"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "20 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "20 ft"
+value = "-500 lbf/ft"
+"""
+
+
+def test_a_slender_web_takes_the_bending_strength_reduction_of_f5():
+    # AISC 360-16 F5-6 and F5-1 (from memory), by hand: h = 24 - 2 x 0.375 = 23.25 in, h/tw
+    # 186 > 5.70 sqrt(29000/36) = 161.8 (slender); aw = 23.25 x 0.125 / (6 x 0.375) = 1.292;
+    # Rpg = 1 - aw / (1200 + 300 aw) (186 - 161.8) = 0.980; I = 2 (6 x 0.375^3 / 12 + 2.25 x
+    # 11.8125^2) + 0.125 x 23.25^3 / 12 = 758.9 in^4, Sx = 63.24 in^3; Mn / 1.67
+    KIP_IN = 4448.2216152605 * 0.0254
+    h, tw, bf, tf, d, fy, e = 23.25, 0.125, 6.0, 0.375, 24.0, 36.0, 29000.0
+    root = (e / fy) ** 0.5
+    aw = h * tw / (bf * tf)
+    rpg = 1 - aw / (1200 + 300 * aw) * (h / tw - 5.70 * root)
+    ix = 2 * (bf * tf**3 / 12 + bf * tf * ((d - tf) / 2) ** 2) + tw * h**3 / 12
+    res = analyze(parse_job_text(GIRDER))
+    bend = next(c for c in res.checks if c.name == "bending")
+    assert bend.limit == pytest.approx(rpg * fy * ix / (d / 2) / 1.67 * KIP_IN, rel=1e-3)
+    assert "Rpg 0.980" in bend.formula and "F5-6" in bend.formula
+    # the rest of F5 is not applied: not rated
+    gap = [u for u in res.unchecked if u.name == "slender-web bending"]
+    assert gap and gap[0].blocks_rating
+
+
+def test_a_support_that_pulls_the_member_down_is_named_in_the_report():
+    text = simple_span('section = "HSS2x2x3/16"\nmaterial = "A500-C"\nself_weight = false', 2,
+                       point_load(6, "-100 lbf")).replace('length = "2 ft"', 'length = "6 ft"')
+    res = analyze(parse_job_text(text))
+    # statics: the roller at 2 ft carries 100 x 6 / 2 = 300 lbf up, the pin 200 lbf down
+    up = [c for c in res.cautions if c.startswith("UPLIFT")]
+    assert len(up) == 1 and "pin at 0 ft" in up[0] and "200 lbf" in up[0]
+    plain = analyze(parse_job_text(simple_span('section = "HSS2x2x3/16"\n'
+                                               'material = "A500-C"', 6)))
+    assert not [c for c in plain.cautions if c.startswith("UPLIFT")]
+
+
+def test_a_metric_tee_check_gives_its_lengths_in_millimetres():
+    text = ('schema = 1\ntitle = "tee"\nunits = "si"\n[beam]\nlength = "3 m"\n'
+            'section = "WT6x13"\nmaterial = "A992"\nself_weight = false\n'
+            '[[supports]]\nat = "0 m"\ntype = "pin"\n[[supports]]\nat = "3 m"\n'
+            'type = "roller"\n[[loads]]\ntype = "uniform"\nstart = "0 m"\nend = "3 m"\n'
+            'value = "-3000 N/m"\n')
+    bend = next(c for c in analyze(parse_job_text(text)).checks if c.name == "bending")
+    assert "Lb 3000 mm" in bend.formula and " in " not in bend.formula.replace(" in tension", "")

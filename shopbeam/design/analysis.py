@@ -114,10 +114,24 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
     if getattr(job.material, "kind", "") == "stainless":
         out.append(STAINLESS)
     if sol is not None:
+        out += uplift_notes(job, sol)
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:
             out.append("A self-check did not pass (" + ", ".join(bad) + "): do not rely on "
                        "these numbers until the job is reviewed.")
+    return out
+
+
+def uplift_notes(job: Job, sol: Solution) -> list[str]:
+    """A support that pulls the member down (uplift): it must be anchored, not merely bear."""
+    top = max([abs(r.force) for r in sol.reactions] + [0.0])
+    out = []
+    for r in sol.reactions:
+        if r.kind in ("pin", "roller", "fixed", "spring") and r.force < -1e-9 * top:
+            out.append(f"UPLIFT: the {r.kind} at {units.fmt(r.at, 'length', job.units)} pulls "
+                       f"the member DOWN with {units.fmt(-r.force, 'force', job.units)}: anchor "
+                       "it for that force (a seat or bracket that only bears lets the member "
+                       "lift off), and check the anchor")
     return out
 
 

@@ -323,17 +323,30 @@ def _f2_f3(sec, fy, e) -> Flexure:
     h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
     warnings, unchecked = [], []
     cap, text = mp, f"F2-1 yielding Mn = Mp = Fy Zx (compact flanges, bf/2tf {lam:.3g})"
-    if h_tw > 3.76 * root:
+    if h_tw > 5.70 * root:
+        # AISC 360-16 F5-6 (from memory): Rpg = 1 - aw / (1200 + 300 aw) (hc/tw - 5.7
+        # sqrt(E/Fy)) <= 1, aw = hc tw / (bfc tfc) <= 10; compression flange yielding F5-1
+        aw = min(10.0, h_tw * d["tw"] ** 2 / (d["bf"] * d["tf"]))
+        rpg = min(1.0, 1 - aw / (1200 + 300 * aw) * (h_tw - 5.70 * root))
+        cap = rpg * fy * sx
+        text = (f"slender web (h/tw {h_tw:.3g} > 5.70 sqrt(E/Fy)): Mn = Rpg Fy Sx, Rpg "
+                f"{rpg:.3f} (F5-6, compression flange yielding F5-1; F5 lateral-torsional "
+                "and flange local buckling not applied)")
+        warnings.append("slender web: bending taken as Rpg Fy Sx (AISC 360-16 F5-1); the rest "
+                        "of F5 not applied")
+    elif h_tw > 3.76 * root:
         cap = fy * sx
         text = "noncompact web (h/tw %.3g > 3.76 sqrt(E/Fy)): Mn = Fy Sx (lower bound of F4)" % h_tw
-        warnings.append("noncompact or slender web: bending taken as first yield Fy Sx; "
-                        "AISC 360 F4/F5 not applied")
+        warnings.append("noncompact web: bending taken as first yield Fy Sx; AISC 360 F4 not "
+                        "applied")
+    if h_tw > 3.76 * root:
         slender = h_tw > 5.70 * root
         unchecked.append(Unchecked(
             "slender-web bending" if slender else "noncompact-web bending",
-            f"h/tw {h_tw:.3g} > 3.76 sqrt(E/Fy): bending taken as Fy Sx, not by "
-            + ("F5 (a slender web can fall below Fy Sx)" if slender else
-               "F4 (Fy Sx is a lower bound here)"), "AISC 360-16 F5" if slender else
+            (f"h/tw {h_tw:.3g} > 5.70 sqrt(E/Fy): bending taken as Rpg Fy Sx (F5-1), without "
+             "F5's lateral-torsional and flange local buckling" if slender else
+             f"h/tw {h_tw:.3g} > 3.76 sqrt(E/Fy): bending taken as Fy Sx, not by F4 (Fy Sx is "
+             "a lower bound here)"), "AISC 360-16 F5" if slender else
             "AISC 360-16 F4", blocks_rating=slender))
     if lam > lpf:
         if lam <= lrf:

@@ -92,6 +92,11 @@ def flange_on_top(sec) -> bool:
     return sec.sx_top >= sec.sx_bot
 
 
+def _ln(x: float, system: str, sig: int = 4) -> str:
+    """A length in a check's words, in the job's display system (in or mm)."""
+    return units.fmt(x, "small_length", system, sig)
+
+
 def f9_mcr(p: TeeProps, lb: float, stem_compression: bool) -> float:
     """F9-10 with B from F9-11 (stem in tension) or F9-12 (stem in compression)."""
     b = 2.3 * (p.d / lb) * math.sqrt(p.iy / p.j)
@@ -100,7 +105,7 @@ def f9_mcr(p: TeeProps, lb: float, stem_compression: bool) -> float:
     return 1.95 * p.e / lb * math.sqrt(p.iy * p.j) * (b + math.sqrt(1 + b * b))
 
 
-def f9_stem_tension(p: TeeProps, lb: float | None) -> tuple[float, str]:
+def f9_stem_tension(p: TeeProps, lb: float | None, system: str = "us") -> tuple[float, str]:
     """Mn and the governing provision for a tee with its stem in tension (flange in
     compression). lb None: continuously braced."""
     my = p.fy * p.sx
@@ -114,11 +119,11 @@ def f9_stem_tension(p: TeeProps, lb: float | None) -> tuple[float, str]:
         if lb > lp:
             if lb <= lr:
                 out.append((mp - (mp - my) * (lb - lp) / (lr - lp),
-                            f"F9-6 LTB, stem in tension, Lp {lp / 0.0254:.3g} in < Lb "
-                            f"{lb / 0.0254:.4g} in <= Lr {lr / 0.0254:.4g} in"))
+                            f"F9-6 LTB, stem in tension, Lp {_ln(lp, system, 3)} < Lb "
+                            f"{_ln(lb, system)} <= Lr {_ln(lr, system)}"))
             else:
                 out.append((f9_mcr(p, lb, False), f"F9-7/F9-10 LTB, stem in tension, Lb "
-                            f"{lb / 0.0254:.4g} in > Lr {lr / 0.0254:.4g} in"))
+                            f"{_ln(lb, system)} > Lr {_ln(lr, system)}"))
     lam = p.bf / (2 * p.tf)
     root = math.sqrt(p.e / p.fy)
     lpf, lrf = 0.38 * root, 1.0 * root
@@ -132,14 +137,15 @@ def f9_stem_tension(p: TeeProps, lb: float | None) -> tuple[float, str]:
     return min(out, key=lambda t: t[0])
 
 
-def f9_stem_compression(p: TeeProps, lb: float | None) -> tuple[float, str]:
+def f9_stem_compression(p: TeeProps, lb: float | None,
+                        system: str = "us") -> tuple[float, str]:
     """Mn and the governing provision for a tee with its stem in compression."""
     my = p.fy * p.sx
     out = [(my, "F9-4 yielding Mp = My = Fy Sx (stem in compression)")]
     if lb is not None and lb > 0:
         mcr = f9_mcr(p, lb, True)
         out.append((min(mcr, my), f"F9-13 LTB, stem in compression, Mcr by F9-10/F9-12 "
-                                  f"(Lb {lb / 0.0254:.4g} in)"))
+                                  f"(Lb {_ln(lb, system)})"))
     dt = p.d / p.tw
     root = math.sqrt(p.e / p.fy)
     if dt <= 0.84 * root:
@@ -152,13 +158,14 @@ def f9_stem_compression(p: TeeProps, lb: float | None) -> tuple[float, str]:
     return min(out, key=lambda t: t[0])
 
 
-def f9_ltb_with_compression(p: TeeProps, lb: float | None) -> tuple[float, str] | None:
+def f9_ltb_with_compression(p: TeeProps, lb: float | None,
+                            system: str = "us") -> tuple[float, str] | None:
     """F9.2(b): the stem is in compression somewhere along Lb: Mn = Mcr (B negative) <= My,
     applied to the stem-in-tension moments of the same length too."""
     if lb is None or lb <= 0:
         return None
     return (min(f9_mcr(p, lb, True), p.fy * p.sx),
-            f"F9-13 LTB with the stem in compression along Lb {lb / 0.0254:.4g} in")
+            f"F9-13 LTB with the stem in compression along Lb {_ln(lb, system)}")
 
 
 # ------------------------------------------------------------------ F10 angles
@@ -247,7 +254,8 @@ def beta_w(d, b, t, xb, yb, iw, n_w, cells: int = 400) -> float:
     return tot / iw - 2 * z0
 
 
-def f10_major(p: AngleProps, fy: float, e: float, lb: float | None, cb: float) -> tuple[float, str]:
+def f10_major(p: AngleProps, fy: float, e: float, lb: float | None, cb: float,
+              system: str = "us") -> tuple[float, str]:
     my = fy * p.sw
     out = [(1.5 * my, "F10-1 yielding 1.5 My (major axis)")]
     if lb is not None and lb > 0:
@@ -260,8 +268,8 @@ def f10_major(p: AngleProps, fy: float, e: float, lb: float | None, cb: float) -
         else:
             m = (0.92 - 0.17 * mcr / my) * mcr
             eq = "F10-3"
-        bw = f", beta_w {-p.beta_w / 0.0254:.3g} in" if p.beta_w else ", equal legs beta_w 0"
-        out.append((m, f"{eq} LTB about the major axis, Mcr by F10-4 (Lb {lb / 0.0254:.4g} in, "
+        bw = f", beta_w {_ln(-p.beta_w, system, 3)}" if p.beta_w else ", equal legs beta_w 0"
+        out.append((m, f"{eq} LTB about the major axis, Mcr by F10-4 (Lb {_ln(lb, system)}, "
                        f"Cb {cb:.2f}{bw})"))
     llb = _leg_buckling(p, fy, e, p.sw)
     if llb:
@@ -338,7 +346,7 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
         lb = None if braced else b - a
         ex = m.extremes(a, b)
         if kind == "F9":
-            r = _f9_segment(sec, fy, e, lb, ex, om, bth)
+            r = _f9_segment(sec, fy, e, lb, ex, om, bth, job.units)
         else:
             mmax = ex.abs_max
             cb = _cb(m, a, b, mmax, free, cb_one)
@@ -363,7 +371,7 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
                  source=src, params=params, extra={"cb": params.get("Cb", 1.0)})
 
 
-def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False):
+def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False, system="us"):
     p = tee_props(sec, fy, e)
     top = flange_on_top(sec)
     # sagging (M > 0) compresses the top fibres
@@ -371,10 +379,10 @@ def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False):
     m_stem_c = max(-ex.min, 0.0) if top else max(ex.max, 0.0)
     at_t = ex.max_at if top else ex.min_at
     at_c = ex.min_at if top else ex.max_at
-    mn_t, why_t = f9_stem_tension(p, lb)
-    mn_c, why_c = f9_stem_compression(p, lb)
+    mn_t, why_t = f9_stem_tension(p, lb, system)
+    mn_c, why_c = f9_stem_compression(p, lb, system)
     if m_stem_c > 0:
-        both = f9_ltb_with_compression(p, lb)
+        both = f9_ltb_with_compression(p, lb, system)
         if both and both[0] < mn_t:
             mn_t, why_t = both
     if bth:
@@ -410,7 +418,7 @@ def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
                 f"Omega_b, Mn by {why}, Omega_b {omega:g}")
         return (mmax / allow if allow > 0 else math.inf, mmax, allow, at, text,
                 {"Lb": 0.0, "Mn": mn, "Cb": 1.0})
-    mnw, why_w = f10_major(p, fy, e, lb, cb)
+    mnw, why_w = f10_major(p, fy, e, lb, cb, job.units)
     mnz, why_z = f10_minor(p, fy, e)
     if bth:
         mnw, why_w = _bth_cap(mnw, why_w, fy * p.sw)
