@@ -263,3 +263,49 @@ def test_an_untagged_job_that_reads_like_a_rack_is_warned(title):
 def test_a_rack_tagged_or_plain_job_gets_no_rack_hint(title, tags):
     job = parse_job_text(cantilever("36 in", tags=tags, title=title))
     assert not [p for p in warned(job) if "reads like a storage rack" in p.message]
+
+
+# ------------------------------------------------------------------ 6. keys in the wrong table
+def _one(job, key):
+    w = warned(job, key)
+    assert len(w) == 1, [p.message for p in job.warnings]
+    return w[0].message
+
+
+def test_lifting_under_beam_belongs_under_criteria():
+    job = parse_job_text(cantilever("36 in").replace('material = "A500-C"',
+                                                     'material = "A500-C"\nlifting = "jib-boom"'))
+    msg = _one(job, "beam.lifting")
+    assert "belongs under [criteria]" in msg and "did you mean" not in msg
+
+
+def test_deflection_under_beam_belongs_under_criteria_not_section():
+    job = parse_job_text(cantilever("36 in").replace('material = "A500-C"',
+                                                     'material = "A500-C"\ndeflection = "L/360"'))
+    msg = _one(job, "beam.deflection")
+    assert "belongs under [criteria]" in msg and "'section'" not in msg
+
+
+def test_a_top_level_safety_factor_belongs_under_criteria():
+    job = parse_job_text(cantilever("36 in", extra="safety_factor = 2.0"))
+    assert "belongs under [criteria]" in _one(job, "safety_factor")
+
+
+@pytest.mark.parametrize("table", ["beam", "criteria"])
+def test_tags_after_a_table_header_belong_at_the_top(table):
+    text = cantilever("36 in", tags="[]").replace('tags = []\n', "")
+    if table == "beam":
+        text = text.replace('material = "A500-C"', 'material = "A500-C"\ntags = ["rack"]')
+    else:
+        text += '[criteria]\ndeflection = "L/180"\ntags = ["rack"]\n'
+    msg = _one(parse_job_text(text), f"{table}.tags")
+    assert "belongs at the top of the file, before the first [table]" in msg
+
+
+def test_a_support_key_in_a_load_and_a_typo_keep_their_messages():
+    text = cantilever("36 in").replace('label = "tip load"', 'label = "tip load"\nstiffness = "1 lbf/in"')
+    assert "belongs under [[supports]]" in _one(parse_job_text(text), "loads[0].stiffness")
+    text = cantilever("36 in").replace('material = "A500-C"', 'material = "A500-C"\nmember = 2')
+    assert "did you mean 'members'?" in _one(parse_job_text(text), "beam.member")
+    text = cantilever("36 in").replace('material = "A500-C"', 'material = "A500-C"\nlenght = 2')
+    assert "did you mean 'length'?" in _one(parse_job_text(text), "beam.lenght")

@@ -326,17 +326,39 @@ class _Reader:
         return None if any(x is None for x in out) else tuple(out)
 
     def unknown_keys(self, table: dict, known: set[str], prefix: str, label: str):
+        here = re.sub(r"\[\d+\]$", "", prefix)
         for k in table:
             if k in known:
                 continue
             near = difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.6)
             hint = f"; did you mean {near[0]!r}?" if near else f"; known keys: {', '.join(sorted(known))}"
+            homes = _homes(k, here)
+            if homes and not difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.85):
+                if homes == [""]:  # a top-level key written below a [table] header
+                    hint = (f": {k} belongs at the top of the file, before the first [table] "
+                            "(TOML puts a key written below a [table] header inside that "
+                            "table); move it up")
+                else:
+                    hint = f": {k} belongs under " + " or ".join(_TABLES[t] for t in homes)
             path = f"{prefix}.{k}" if prefix else k
             self.warn(f"unknown key {k!r} in {label} is ignored{hint}", path)
 
     @property
     def errors(self) -> list[Problem]:
         return [p for p in self.problems if not p.warning]
+
+
+# How each table is written, for "belongs under [criteria]" ("" is the top of the file)
+_TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
+           "criteria": "[criteria]", "moving": "[[moving]]", "project": "[project]"}
+
+
+def _homes(key: str, here: str) -> list[str]:
+    """The tables other than `here` that know `key` ([""] for a top-level key): an unknown
+    key that is a known key of another table was written in the wrong one."""
+    if key in KNOWN_KEYS[""] and key not in _TABLES and here != "":
+        return [""]
+    return [t for t in _TABLES if t != here and key in KNOWN_KEYS[t]]
 
 
 def _is_table(v) -> bool:
