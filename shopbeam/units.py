@@ -149,7 +149,7 @@ _SHOP_WORDS = {
     "kipf": "kip", "n": "N", "kn": "kN", "nm": "N*m", "knm": "kN*m", "nmm": "N*mm",
     "pa": "Pa", "kpa": "kPa", "mpa": "MPa", "gpa": "GPa", "psi": "psi", "ksi": "ksi",
     "psf": "psf", "ksf": "ksf", "plf": "plf", "klf": "klf", "pcf": "pcf", "kg": "kg",
-    "kgf": "kgf", "rad": "rad", "radian": "rad",
+    "kgf": "kgf", "rad": "rad", "radian": "rad", "ton": "ton", "tonne": "tonne",
 }
 _UNIT_WORD = re.compile(r"[A-Za-z#]+")
 
@@ -170,6 +170,19 @@ SPELLINGS: dict[str, str] = {
     "density": "lb/ft^3 (pcf), lb/in^3 or kg/m^3",
     "mass_per_length": "lb/ft or kg/m",
 }
+
+
+_TON = re.compile(r"(?<![A-Za-z_])tons?(?![A-Za-z_])", re.IGNORECASE)
+
+
+def ton_note(text) -> str:
+    """What to say of a value written in "ton" (read as the US short ton, as pint reads it):
+    a metric job's "1 ton" is usually a tonne, 10 % more. "" when the text has no "ton"."""
+    if not isinstance(text, str) or not _TON.search(text):
+        return ""
+    return (f"{text!r}: \"ton\" is read as the US short ton (2,000 lb, 8.9 kN per ton); for a "
+            "metric tonne (1,000 kg, 9.81 kN) write \"t\" or \"tonne\", for the long ton "
+            "(2,240 lb) \"long_ton\"")
 
 
 def _word(w: str) -> str:

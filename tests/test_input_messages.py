@@ -309,3 +309,32 @@ def test_a_support_key_in_a_load_and_a_typo_keep_their_messages():
     assert "did you mean 'members'?" in _one(parse_job_text(text), "beam.member")
     text = cantilever("36 in").replace('material = "A500-C"', 'material = "A500-C"\nlenght = 2')
     assert "did you mean 'length'?" in _one(parse_job_text(text), "beam.lenght")
+
+
+# ------------------------------------------------------------------ 7. "ton"
+@pytest.mark.parametrize("units_line", ['units = "si"', 'units = "us"'])
+def test_ton_is_the_short_ton_and_says_so(units_line):
+    job = parse_job_text(cantilever("36 in", extra=units_line).replace('"-2000 lbf"', '"-1 ton"'))
+    assert job.loads[0].value == pytest.approx(-2000 * 4.4482216152605)  # 2,000 lbf by definition
+    msg = _one(job, "loads[0].value")
+    assert "short ton" in msg and '"tonne"' in msg and '"t"' in msg
+
+
+@pytest.mark.parametrize("text", ["-1 t", "-1 tonne", "-1 Tonne", "-1 metric_ton"])
+def test_a_tonne_is_1000_kg_and_not_warned(text):
+    job = parse_job_text(cantilever("36 in", extra='units = "si"').replace('"-2000 lbf"',
+                                                                          f'"{text}"'))
+    assert job.loads[0].value == pytest.approx(-1000 * 9.80665)  # 1,000 kg x standard gravity
+    assert not [p for p in warned(job) if "ton" in p.message]
+
+
+def test_ton_in_a_line_load_is_noted_too():
+    text = cantilever("36 in").replace(
+        'type = "point"\nat = "36 in"\nvalue = "-2000 lbf"', 'type = "uniform"\nvalue = "-1 ton/ft"')
+    assert "short ton" in _one(parse_job_text(text), "loads[0].value")
+
+
+def test_a_long_ton_written_out_is_not_warned():
+    job = parse_job_text(cantilever("36 in").replace('"-2000 lbf"', '"-1 long_ton"'))
+    assert job.loads[0].value == pytest.approx(-2240 * 4.4482216152605)  # 2,240 lb by definition
+    assert not [p for p in warned(job) if "short ton" in p.message]

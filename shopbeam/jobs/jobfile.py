@@ -265,10 +265,18 @@ class _Reader:
                 self.error(f"missing {name!r} ({units.KINDS[kind][1]}, e.g. {units.KINDS[kind][2]})", key)
             return None
         try:
-            return units.parse(table[name], kind, key, **kw)
+            value = units.parse(table[name], kind, key, **kw)
         except InputError as e:
             self.take(e, key)
             return None
+        self.ton(table[name], key)
+        return value
+
+    def ton(self, raw, key: str) -> None:
+        """Warn that "ton" is the US short ton (a metric job's "1 ton" is usually a tonne)."""
+        note = units.ton_note(raw)
+        if note:
+            self.warn(note, key)
 
     # Typed readers: each returns the value (or `default` / None after recording a problem).
     def boolean(self, table: dict, name: str, key: str, default: bool, message: str = "") -> bool:
@@ -636,6 +644,7 @@ def _read_support(r: _Reader, i: int, s, length) -> Support | None:
 
 def _line_load(r: _Reader, ld: dict, raw, key: str, width_needed: list) -> float | None:
     """A load per length, or a load per area times the tributary width."""
+    r.ton(raw, key)
     try:
         return units.parse(raw, "line_load", key)
     except InputError as first:
