@@ -229,6 +229,12 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
                          "(write e.g. \"8 ft\", \"1-1/2 in\", \"10' 6\\\"\")", key)
     sign, terms = scanned
     if any(not unit for _, unit in terms):
+        if kind == "length" and len(terms) == 2 and not terms[0][1] and \
+                _word(terms[1][1]) in ("", "ft"):
+            # "5-6", "5 6" or "5-6 ft": feet and inches with no marks ("5-6 ft" is no number)
+            ft_in = f"{'-' if sign < 0 else ''}{terms[0][0]} ft {terms[1][0]} in"
+            raise InputError(f"{text!r} has a bare number: for feet and inches write \"{ft_in}\" "
+                             "(or 5' 6\"); shopbeam never guesses a unit", key)
         # all numbers: suggest the whole text with a unit; else the first bare number
         shown = text.strip() if all(not u for _, u in terms) else \
             next(str(n) for n, u in terms if not u)
@@ -333,7 +339,10 @@ def parse(text, kind: str, key: str = "", *, positive: bool = False,
 def _parse_full(text, kind: str, key: str = "") -> float:
     ref, words, example = KINDS[kind]
     hint = re.search(r'"[-\d.]+ ([^"]+)"', example)
-    q = quantity(text, key, hint.group(1) if hint else "ft", kind)
+    unit_hint = hint.group(1) if hint else "ft"
+    if kind == "length" and ".section" in key:  # a wall or flange is inches, not feet
+        unit_hint = "in"
+    q = quantity(text, key, unit_hint, kind)
     if q.dimensionality == _dim(ref):
         value = float(q.to(ref).magnitude)
     elif kind in _WEIGHT_OK and q.dimensionality == _dim(_WEIGHT_OK[kind]):

@@ -338,3 +338,55 @@ def test_a_long_ton_written_out_is_not_warned():
     job = parse_job_text(cantilever("36 in").replace('"-2000 lbf"', '"-1 long_ton"'))
     assert job.loads[0].value == pytest.approx(-2240 * 4.4482216152605)  # 2,240 lb by definition
     assert not [p for p in warned(job) if "short ton" in p.message]
+
+
+# ------------------------------------------------------------------ 8. wording
+@pytest.mark.parametrize("typed, meant", [("couple", "moment"), ("Couple", "moment"),
+                                          ("distributed", "uniform"), ("Point", "point"),
+                                          ("unifrom", "uniform")])
+def test_a_load_type_written_another_way_suggests_the_type_meant(typed, meant):
+    text = cantilever("36 in").replace('type = "point"', f'type = "{typed}"')
+    msg = refused(text)[0].message
+    assert f"did you mean {meant!r}?" in msg
+
+
+def test_a_missing_type_says_it_is_missing_and_lists_the_types():
+    text = cantilever("36 in").replace('type = "fixed"\n', "")
+    msg = " ".join(p.message for p in refused(text))
+    assert "missing 'type'" in msg and "None" not in msg
+    assert "fixed, pin, roller" in msg
+    text = cantilever("36 in").replace('type = "point"\n', "")
+    msg = " ".join(p.message for p in refused(text))
+    assert "missing 'type'" in msg and "point, " in msg and "None" not in msg
+
+
+def test_a_support_just_past_the_end_shows_the_digits_that_differ():
+    text = cantilever("36 in").replace('at = "0 in"\ntype = "fixed"',
+                                       'at = "36.001 in"\ntype = "fixed"')
+    msg = refused(text)[0].message
+    assert "'36.001 in'" in msg
+    shown, end = msg.split(" is beyond the end of the beam (")
+    assert end.split(")")[0] == "3 ft" and "3 ft" not in shown.split("(")[1]
+
+
+def test_a_bare_wall_suggests_inches_not_feet():
+    text = cantilever("36 in").replace('"HSS4x2x3/16"', '{shape = "rect-tube", depth = "4 in", '
+                                       'width = "2 in", wall = "3/16"}')
+    msg = refused(text)[0].message
+    assert '"3/16 in"' in msg and "3/16 ft" not in msg
+
+
+@pytest.mark.parametrize("typed", ["5-6", "5-6 ft", "5 6"])
+def test_a_bare_feet_and_inches_suggests_what_reads(typed):
+    text = cantilever("36 in").replace('length = "36 in"', f'length = "{typed}"')
+    msg = refused(text)[0].message
+    assert '"5 ft 6 in"' in msg and '"5-6 ft"' not in msg and '"5 ft"' not in msg
+    # and what it suggests is read as 66 in
+    ok = parse_job_text(cantilever("36 in").replace('length = "36 in"', 'length = "5 ft 6 in"'))
+    assert ok.length == pytest.approx(66 * 0.0254)
+
+
+def test_supports_written_as_one_table_says_double_brackets():
+    text = cantilever("36 in").replace("[[supports]]", "[supports]")
+    msg = refused(text)[0].message
+    assert "[[supports]]" in msg and "no supports" not in msg

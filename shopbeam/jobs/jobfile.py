@@ -595,6 +595,16 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
                      key, int(per_axle), edge),)
 
 
+def _apart(x: float, length: float) -> tuple[str, str]:
+    """A position and the length shown with enough digits to differ ("6.000014 ft" past a
+    "6 ft" member, not "6 ft" past "6 ft")."""
+    for sig in range(4, 13):
+        a, b = units.fmt(x, "length", sig=sig), units.fmt(length, "length", sig=sig)
+        if a != b:
+            return a, b
+    return a, b
+
+
 def _position(r: _Reader, table: dict, name: str, key: str, length: float | None,
               default: float | None = None, *, path: str | None = None) -> float | None:
     if name not in table and default is not None:
@@ -604,10 +614,29 @@ def _position(r: _Reader, table: dict, name: str, key: str, length: float | None
     if x is None:
         return None
     if length is not None and x > length * (1 + 1e-9):
-        r.error(f"{units.fmt(x, 'length')} is beyond the end of the beam "
-                f"({units.fmt(length, 'length')}): positions run from 0 at the left end", path)
+        shown, end = _apart(x, length)
+        typed = table[name] if name in table else ""
+        said = f"{typed!r} ({shown})" if isinstance(typed, str) and typed else shown
+        r.error(f"{said} is beyond the end of the beam ({end}): positions run from 0 at the "
+                "left end", path)
         return None
     return min(x, length) if length is not None else x
+
+
+# Words a shop writes for a load or support type, and the type they mean
+_LOAD_WORDS = {"couple": "moment", "torque": "moment", "distributed": "uniform",
+               "udl": "uniform", "line": "uniform", "concentrated": "point",
+               "triangular": "linear", "trapezoidal": "linear", "varying": "linear"}
+_SUPPORT_WORDS = {"pinned": "pin", "simple": "pin", "clamped": "fixed", "built-in": "fixed",
+                  "builtin": "fixed", "rigid": "fixed", "slider": "roller", "sliding": "roller"}
+
+
+def _type_hint(kind, kinds, words: dict) -> str:
+    """" (did you mean 'moment'?)" for a type written another way ("couple", "Point")."""
+    low = str(kind).strip().lower()
+    near = ([low] if low in kinds else [words[low]] if low in words
+            else difflib.get_close_matches(low, kinds, n=1))
+    return f" (did you mean {near[0]!r}?)" if near else ""
 
 
 def _read_support(r: _Reader, i: int, s, length) -> Support | None:
@@ -618,9 +647,11 @@ def _read_support(r: _Reader, i: int, s, length) -> Support | None:
     r.unknown_keys(s, KNOWN_KEYS["supports"], key, f"the {_ordinal(i)} support")
     kind = s.get("type")
     kinds = SUPPORT_KINDS
-    if kind not in kinds:
-        near = difflib.get_close_matches(str(kind), kinds, n=1)
-        hint = f" (did you mean {near[0]!r}?)" if near else ""
+    if kind is None:
+        r.error(f"missing 'type' (the {_ordinal(i)} support): the support type is one of "
+                f"{', '.join(kinds)}, e.g. type = \"pin\"", f"{key}.type")
+    elif kind not in kinds:
+        hint = _type_hint(kind, kinds, _SUPPORT_WORDS)
         r.error(f"type {kind!r} is not a support type{hint}; use one of {', '.join(kinds)}",
                 f"{key}.type")
         kind = None
@@ -682,9 +713,12 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
     r.unknown_keys(ld, KNOWN_KEYS["loads"], key, where)
     kind = ld.get("type")
     kinds = LOAD_KINDS
+    if kind is None:
+        r.error(f"missing 'type' ({where}): the load type is one of {', '.join(kinds)}, e.g. "
+                "type = \"point\"", f"{key}.type")
+        return None
     if kind not in kinds:
-        near = difflib.get_close_matches(str(kind), kinds + ("couple", "distributed"), n=1)
-        hint = f" (did you mean {near[0]!r}?)" if near else ""
+        hint = _type_hint(kind, kinds, _LOAD_WORDS)
         r.error(f"type {kind!r} is not a load type{hint}; use one of {', '.join(kinds)}", f"{key}.type")
         return None
     case = ld.get("case", "live")
@@ -1456,7 +1490,11 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
 
     sups = data.get("supports", [])
     supports: list[Support] = []
-    if not isinstance(sups, list) or not sups:
+    if _is_table(sups):
+        r.error("supports must be [[supports]] tables (double brackets), one for each support; "
+                "[supports] is a single table", "supports")
+        sups = []
+    elif not isinstance(sups, list) or not sups:
         r.error("no supports: add [[supports]] tables (at least two, or one fixed end)", "supports")
         sups = []
     if len(sups) > MAX_SUPPORTS:
@@ -1479,7 +1517,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     loads: list[Load] = []
     conv: list = []
     if not isinstance(raw_loads, list):
-        r.error("loads must be [[loads]] tables", "loads")
+        r.error("loads must be [[loads]] tables (double brackets), one for each load"
+                + ("; [loads] is a single table" if _is_table(raw_loads) else ""), "loads")
         raw_loads = []
     if len(raw_loads) > MAX_LOADS:
         r.error(f"{len(raw_loads)} loads is more than shopbeam takes ({MAX_LOADS}); "
