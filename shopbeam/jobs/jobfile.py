@@ -1007,7 +1007,8 @@ def _loads_at_supports(r: _Reader, loads, supports, length, system: str) -> list
             tip = f", e.g. the free end ({ends})"
         r.warn(f"this point load{name} is at the {sup.kind} support at {where} "
                f"({sup.key or 'a support'}): it goes straight into the support and does not "
-               "load the member, so the checks do not see it and the job is NOT RATED. It was "
+               "bend the member, so the bending, shear and deflection checks do not see it "
+               "and the job is NOT RATED. It was "
                f"probably meant elsewhere{tip}: check at", f"{ld.key}.at")
         out.append(f"{ld.key}{name} at the {sup.kind} support at {where}")
     return out
