@@ -323,3 +323,37 @@ def test_a_metric_tee_check_gives_its_lengths_in_millimetres():
             'value = "-3000 N/m"\n')
     bend = next(c for c in analyze(parse_job_text(text)).checks if c.name == "bending")
     assert "Lb 3000 mm" in bend.formula and " in " not in bend.formula.replace(" in tension", "")
+
+
+def test_weak_axis_flange_slenderness_is_the_tabulated_one():
+    # AISC 360-16 F6-2 with W8x31's tabulated bf/2tf 9.19, Zy 14.1 in^3, Sy 9.27 in^3 (AISC
+    # Shapes Database v15.0), A992: Mp = min(50 x 14.1, 1.6 x 50 x 9.27) = 705 kip in;
+    # lambda_pf = 0.38 sqrt(29000/50) = 9.152, lambda_rf = 24.08; Mn = 705 - (705 - 0.7 x 50 x
+    # 9.27)(9.19 - 9.152)/(24.08 - 9.152) = 704.02 kip in, / 1.67 (the same slenderness the
+    # strong-axis F3 check reads)
+    KIP_IN = 4448.2216152605 * 0.0254
+    root = (29000 / 50) ** 0.5
+    lpf, lrf = 0.38 * root, root
+    mp = min(50 * 14.1, 1.6 * 50 * 9.27)
+    mn = mp - (mp - 0.7 * 50 * 9.27) * (9.19 - lpf) / (lrf - lpf)
+    text = simple_span('section = "W8x31"\nmaterial = "A992"\naxis = "weak"\nbraced = true', 10,
+                       uniform_load(10, "-500 lbf/ft"))
+    bend = next(c for c in analyze(parse_job_text(text)).checks if c.name == "bending")
+    assert bend.limit == pytest.approx(mn / 1.67 * KIP_IN, rel=2e-5)
+    assert "lambda 9.19" in bend.formula
+
+
+def test_a_hung_monorail_is_told_its_supports_are_taken_as_holding_it_against_twist():
+    hoist = HOIST.replace("SECTION", "W8x18").replace("MATERIAL", "A992")
+    res = analyze(parse_job_text(hoist))
+    assert [c for c in res.cautions if "single rod" in c and "brace = false" in c]
+    said = hoist.replace('type = "pin"', 'type = "pin"\nbrace = true').replace(
+        'type = "roller"', 'type = "roller"\nbrace = true')
+    assert not [c for c in analyze(parse_job_text(said)).cautions if "single rod" in c]
+
+
+def test_a_wood_floor_joist_cites_no_steel_guide_for_its_vibration():
+    text = simple_span('section = "2x10"\nmaterial = "DF-L No.2"', 12,
+                       uniform_load(12, "-40 lbf/ft"), title="loft joist")
+    vib = [u for u in analyze(parse_job_text(text)).unchecked if "vibration" in u.name]
+    assert vib and "Design Guide 11" not in vib[0].clause and "wood" in vib[0].clause

@@ -113,6 +113,9 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
         out.append(OUTDOOR)
     if getattr(job.material, "kind", "") == "stainless":
         out.append(STAINLESS)
+    if job.lifting and any(s.brace is None and s.kind in ("pin", "roller", "fixed")
+                           for s in job.supports):
+        out.append(HANGER_BRACE)
     if sol is not None:
         out += uplift_notes(job, sol)
         bad = [d.name for d in sol.diagnostics if not d.ok]
@@ -120,6 +123,16 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
             out.append("A self-check did not pass (" + ", ".join(bad) + "): do not rely on "
                        "these numbers until the job is reviewed.")
     return out
+
+
+# A bearing support is taken as holding the member against twist where it sits (the braced
+# points of AISC 360-16 F2; common practice). A monorail hung from a single rod at each
+# support, or a beam resting on a seat with nothing on its flanges, is not held so.
+HANGER_BRACE = ("Each support is taken as holding the beam against twist where it sits (its "
+                "braced points for lateral-torsional buckling). A beam hung from a single rod, "
+                "or resting on a seat with no connection to its flanges, is not held against "
+                "twist there: fit the hanger or seat to hold both flanges, or write brace = "
+                "false on that support")
 
 
 def uplift_notes(job: Job, sol: Solution) -> list[str]:
@@ -361,12 +374,15 @@ def floor_unchecked(job: Job) -> list[Unchecked]:
     """Walking vibration of a floor member (named by its tags or title), as not checked."""
     if not any(_FLOOR.search(t) for t in tuple(job.tags) + (job.title,)):
         return []
+    wood = getattr(job.material, "kind", "") == "lumber"
     return [Unchecked(
         "floor vibration under walking",
         "a floor, mezzanine or platform that meets its deflection limit can still bounce "
         "underfoot; its walking vibration (framing frequency and damping) is not checked. If "
         "people walk or work on it, have that checked with the whole floor",
-        "AISC Design Guide 11 for steel floors, from memory", blocks_rating=False)]
+        ("wood floors: stiffness and span limits beyond L/360 are common practice, no single "
+         "standard (from memory)" if wood else
+         "AISC Design Guide 11 for steel floors, from memory"), blocks_rating=False)]
 
 
 def _lifting_json(job) -> dict | None:

@@ -611,7 +611,10 @@ def _f6(sec, fy, e) -> Flexure:
     d = sec.dims
     sy, zy = min(sec.sx_top, sec.sx_bot), sec.zx
     mp = min(fy * zy, 1.6 * fy * sy)
-    lam = d["bf"] / (2 * d["tf"]) if sec.shape == "i-beam" else d["bf"] / d["tf"]
+    # the tabulated slenderness where the catalog gives it, as about the strong axis
+    lam = d.get("bf_2tf") if sec.shape == "i-beam" else d.get("b_t")
+    if lam is None:
+        lam = d["bf"] / (2 * d["tf"]) if sec.shape == "i-beam" else d["bf"] / d["tf"]
     root = math.sqrt(e / fy)
     lpf, lrf = 0.38 * root, 1.0 * root
     if lam <= lpf:
