@@ -357,3 +357,18 @@ def test_a_wood_floor_joist_cites_no_steel_guide_for_its_vibration():
                        uniform_load(12, "-40 lbf/ft"), title="loft joist")
     vib = [u for u in analyze(parse_job_text(text)).unchecked if "vibration" in u.name]
     assert vib and "Design Guide 11" not in vib[0].clause and "wood" in vib[0].clause
+
+
+def test_sizing_does_not_call_a_section_rated_that_capacity_would_not_rate():
+    # the W6x9 arm above, swept over the W kind: each listed row says NOT RATED exactly when
+    # capacity of that section says so, top-flange loading of the arm included
+    from dataclasses import replace
+
+    from shopbeam.design.sizing import shown_rows, size
+
+    job = parse_job_text(W_ARM)
+    rows = shown_rows(size(job, kind="W"), 10)  # past the rows checked in full
+    assert any("top flange" in " ".join(r.not_rated) for r in rows)
+    for r in rows:
+        cap = capacity(replace(job, section=r.section, material=r.material))
+        assert bool(r.not_rated) == (not cap.rated), r.designation

@@ -123,13 +123,7 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     """Why a capacity must not be posted: every limit state the member calls for that was not
     checked and would block a rating, a load that pushes up unmarked (a sign mistake), and any
     failed self-check of the solve."""
-    out = list(rating_gaps(job, st))
-    if job.braced:  # the moment of every load on at once (patterned spans too), k = 1
-        co = ss.fixed.moment.coeffs + ss.live.moment.coeffs
-        for sp in ss.spans:
-            co = co + sp.moment.coeffs
-        out += [f"{u.name} not checked ({u.clause}): {u.reason}"
-                for u in braced_hogging(job, st, Piecewise(ss.fixed.moment.breaks, co))]
+    out = list(rating_gaps(job, st)) + list(_hogging(job, st, ss))
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
@@ -227,6 +221,28 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     reasons = not_rated_reasons(job, st, ss)
     res = _capacity(job, section, ss, st)
     return replace(res, not_rated=reasons + _cantilever_top(job, st, ss, res.factor))
+
+
+def _hogging(job, st, ss) -> tuple[str, ...]:
+    """`analysis.braced_hogging` on the moment of every load on at once (patterned spans
+    too), k = 1."""
+    if not job.braced:
+        return ()
+    co = ss.fixed.moment.coeffs + ss.live.moment.coeffs
+    for sp in ss.spans:
+        co = co + sp.moment.coeffs
+    return tuple(f"{u.name} not checked ({u.clause}): {u.reason}"
+                 for u in braced_hogging(job, st, Piecewise(ss.fixed.moment.breaks, co)))
+
+
+def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
+    """The reasons not to rate that need the member solved (the bottom flange under hogging
+    with braced = true, a cantilever's top-flange loading at the factor k), for a sizing
+    sweep's listed rows; `ss` is solved here when None and either can apply."""
+    if not (job.braced or cantilever_top_limits(job, st)):
+        return ()
+    ss = ss or state_set(job)
+    return _hogging(job, st, ss) + _cantilever_top(job, st, ss, k)
 
 
 def _cantilever_top(job, st, ss, k: float) -> tuple[str, ...]:

@@ -41,7 +41,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.capacity import capacity, rating_gaps
+from shopbeam.design.capacity import capacity, rating_gaps, solved_gaps
 from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
@@ -979,7 +979,8 @@ def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
 def _gaps_of(job, r: "SizeRow") -> tuple[str, ...]:
     j = replace(job, section=r.section, material=r.material)
     try:
-        return rating_gaps(j, strengths(j))
+        st = strengths(j)
+        return rating_gaps(j, st) + solved_gaps(j, st, None, r.factor)
     except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
         return (f"its rating could not be assessed ({exc})",)
 
