@@ -294,11 +294,20 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
 @guarded
 def cmd_ui(args) -> int:
     if args.job:
-        load(args.job)  # refuse a broken file with a clear message before the screen opens
+        # a file that is not TOML is refused with a clear message before the screen opens;
+        # a job with problems opens, each problem shown beside its field, to be finished
+        from shopbeam.jobs.jobdoc import load as open_doc  # noqa: PLC0415 - startup
+
+        open_doc(args.job)
     from shopbeam.tui.app import make_app  # noqa: PLC0415 - startup: textual
 
     app = make_app(job_path=args.job, library=getattr(args, "library", None))
     app.run()
+    if app.return_code:  # the app failed (Textual printed what): never exit 0 after that
+        if app.recovered is not None:
+            print(f"shopbeam: the unsaved job was written to {app.recovered}",
+                  file=sys.stderr)
+        return EXIT_INTERNAL
     return EXIT_OK
 
 

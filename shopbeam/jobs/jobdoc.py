@@ -438,7 +438,56 @@ def _assign(node, key: str, value, where: str) -> None:
         n.indent, n.comment_ws, n.comment, n.trail = t.indent, t.comment_ws, t.comment, t.trail
     if isinstance(new, Table) and key not in node:
         new.add(tomlkit.nl())
+    if key not in node and not isinstance(new, (Table, AoT)):
+        # a new key of a table goes after its last key, before the blank line that ends it
+        box = container_of(node)
+        if box is not None and isinstance(node, Table):
+            i = len(box.body)
+            while i > 0 and box.body[i - 1][0] is None and \
+                    isinstance(box.body[i - 1][1], tomlkit.items.Whitespace):
+                i -= 1
+            if 0 < i < len(box.body) and insert_key(node, i, key, new):
+                return
     node[key] = new
+
+
+def container_of(node):
+    """The tomlkit container that holds a table's lines (the document is its own)."""
+    if isinstance(node, tomlkit.container.Container):
+        return node
+    inner = getattr(node, "value", None)
+    return inner if isinstance(inner, tomlkit.container.Container) else None
+
+
+def key_index(node, key: str) -> int | None:
+    """Where `key` stands among the lines of a table (None when it is not there)."""
+    box = container_of(node)
+    if box is None:
+        return None
+    return next((n for n, (k, _v) in enumerate(box.body) if k is not None and k.key == key),
+                None)
+
+
+def insert_key(node, index: int, key: str, value, trivia=None) -> bool:
+    """Put `key = value` back at line `index` of a table (with the comment and spacing of
+    `trivia`). A table's lines and its keys are two records in tomlkit: both are kept in
+    step, so the key can be read, changed and removed again afterwards. False when the
+    table has no such place (the caller then sets the key the ordinary way)."""
+    box = container_of(node)
+    if box is None or key in node or not 0 <= index <= len(box.body):
+        return False
+    item = tomlkit.item(_item(value))
+    if trivia is not None:
+        t = item.trivia
+        t.indent, t.comment_ws, t.comment, t.trail = (trivia.indent, trivia.comment_ws,
+                                                      trivia.comment, trivia.trail)
+    if index == len(box.body):
+        node[key] = item
+        return True
+    box._insert_at(index, key, item)
+    if box is not node and isinstance(node, dict):
+        dict.__setitem__(node, key, box[key] if key in box else item)
+    return True
 
 
 def load(path: str | os.PathLike) -> JobDoc:

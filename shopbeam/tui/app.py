@@ -115,6 +115,7 @@ class JobScreen(Screen):
         Binding("ctrl+n", "new", "new job", priority=True, show=False),
         Binding("ctrl+r", "write_sheet", "write to file", priority=True, show=False),
         Binding("ctrl+p", "print_sheet", "print", priority=True, show=False),
+        Binding("ctrl+z", "undo_remove", "undo remove", priority=True, show=False),
         Binding("f1", "app.help", "keys", priority=True),
         Binding("question_mark", "app.help", "keys", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
@@ -339,9 +340,8 @@ class JobScreen(Screen):
         f = event.field
         if event.value != f.input.value or f._typed is None:
             return  # an older keystroke (a newer one follows), or already taken by a flush
-        try:
-            self.apply_edit(f.key, event.value, event.row)
-        finally:
+        if self.edit_safely(f"the edit of {f.label}", self.apply_edit, f.key, event.value,
+                            event.row):
             f.taken(event.value)
 
     def flush_typing(self) -> None:
@@ -351,14 +351,32 @@ class JobScreen(Screen):
             if f._typed is not None:
                 value = f.input.value
                 try:
-                    self.apply_edit(f.key, value, f.row)
+                    self.edit_safely(f"the edit of {f.label}", self.apply_edit, f.key, value,
+                                     f.row)
                 finally:
                     f.taken(value)
                     f.forget_typing()
         for c in self.query(Choice):
             if c._pending is not None:
                 value, c._pending = c._pending, None
-                self.apply_choice(c.key, value)
+                self.edit_safely(f"the choice of {c.label}", self.apply_choice, c.key, value)
+
+    def edit_safely(self, what: str, do, *args) -> bool:
+        """Apply one edit; a failure inside shopbeam (a bug) refuses that edit with a
+        message and keeps the app, the job and the text in the field as they are: it never
+        closes the screen with the unsaved work in it. True when the edit was made."""
+        try:
+            do(*args)
+        except Exception as exc:  # noqa: BLE001 - a bug must never cost the user the job
+            self.notify(f"{what} could not be made ({type(exc).__name__}: {exc}). This is a "
+                        "bug in shopbeam: the job is as before, your text stays in the field, "
+                        "and ctrl+s still saves.", severity="error", timeout=20)
+            try:
+                self.refresh_all()
+            except Exception:  # noqa: BLE001 - the message above is what matters
+                pass
+            return False
+        return True
 
     def apply_edit(self, key: str, value: str, row: int = 0) -> None:
         s = self.session
@@ -488,7 +506,7 @@ class JobScreen(Screen):
         if c._pending is None or event.value != c._pending:
             return  # already taken by a flush, or an older choice (a newer one follows)
         c._pending = None
-        self.apply_choice(c.key, event.value)
+        self.edit_safely(f"the choice of {c.label}", self.apply_choice, c.key, event.value)
 
     def apply_choice(self, key: str, value: str) -> None:
         s = self.session
@@ -646,22 +664,30 @@ class JobScreen(Screen):
 
     def on_rows_view_row_add(self, event: RowsView.RowAdd) -> None:
         event.stop()
+        self.add_row(event.table, event.kind)
+
+    def add_row(self, table: str, kind: str) -> None:
+        """Add a support or load (ctrl+t, a/+ buttons) and put the focus in its first field
+        now: keys typed right behind ctrl+t go where they would go typed slowly."""
+        self.flush_typing()
+        self.edit_safely("adding a row", self._add_row, table, kind)
+
+    def _add_row(self, table: str, kind: str) -> None:
         s = self.session
         si = s.doc.get("units") == "si"
         zero = "0 m" if si else "0 ft"
-        if event.table == "supports":
+        if table == "supports":
             n = len(s.rows("supports"))
             at = zero if n == 0 else self._length_text(1.0)
-            fields = {"type": event.kind, "at": at}
-            if event.kind == "spring":
+            fields = {"type": kind, "at": at}
+            if kind == "spring":
                 fields["stiffness"] = "10 kN/m" if si else "2000 lbf/in"
-            if event.kind == "hinge":
+            if kind == "hinge":
                 fields["at"] = self._length_text(0.5)
             i = s.add_row("supports", **fields)
             view = self.query_one("#span", SpanView)
         else:
             # no value nobody entered: the row says "value missing" until one is typed
-            kind = event.kind
             if kind in ("point", "moment"):
                 fields = {"type": kind, "at": self._length_text(0.5)}
             else:
@@ -670,23 +696,47 @@ class JobScreen(Screen):
             view = self.query_one("#loads", LoadsView)
         view.selected = i
         self.changed()
-        self.call_after_refresh(self._focus_row_field, view)
+        if view.is_mounted and view.display:
+            self._focus_row_field(view)
 
     def _focus_row_field(self, view) -> None:
         for f in view.query(".row-form Field"):
             if f.display:
-                f.input.focus()
+                self.set_focus(f.input)
                 return
 
     def on_rows_view_row_remove(self, event: RowsView.RowRemove) -> None:
         event.stop()
-        rows = self.session.rows(event.table)
-        if not rows:
+        self.remove_row(event.table, event.index)
+
+    def remove_row(self, table: str, index: int) -> None:
+        """Remove the picked support or load now (ctrl+x, x, the button); ctrl+z undoes."""
+        self.flush_typing()
+        self.edit_safely("removing a row", self._remove_row, table, index)
+
+    def _remove_row(self, table: str, index: int) -> None:
+        rows = self.session.rows(table)
+        if not rows or not 0 <= index < len(rows):
             return
-        self.session.remove_row(event.table, event.index)
-        view = self.query_one("#span" if event.table == "supports" else "#loads", RowsView)
-        view.selected = max(0, event.index - 1)
-        self.notify(f"removed {event.table[:-1]} {event.index + 1}")
+        self.session.remove_row(table, index)
+        view = self.query_one("#span" if table == "supports" else "#loads", RowsView)
+        view.selected = max(0, index - 1)
+        self.notify(f"removed {table[:-1]} {index + 1} - ctrl+z puts it back", timeout=8)
+        self.changed()
+
+    def action_undo_remove(self) -> None:
+        """ctrl+z: the last support or load removed comes back at its place."""
+        self.flush_typing()
+        back = self.session.undo_remove()
+        if back is None:
+            self.notify("ctrl+z puts back the last support or load removed: none was removed.",
+                        timeout=6)
+            return
+        table, index = back
+        view = self.query("#span" if table == "supports" else "#loads")
+        if view:
+            view.first().selected = index
+        self.notify(f"{table[:-1]} {index + 1} is back", timeout=6)
         self.changed()
 
     def on_section_view_pick(self, event: SectionView.Pick) -> None:
@@ -861,6 +911,19 @@ class ShopbeamApp(App):
         self.push_screen(self.job_screen)
         if self.show_library:
             self.job_screen.action_library(highlight=self.first_session.path)
+
+    recovered = None  # where the unsaved job was written when the app failed
+
+    def _handle_exception(self, error: Exception) -> None:
+        """A failure no handler caught closes the app (Textual's way, exit code 1): the
+        unsaved job is written to a recovery copy first, and the command says where."""
+        js = getattr(self, "job_screen", None)
+        try:
+            if js is not None and js.session.dirty:
+                self.recovered = js.session.save_recovery()
+        except Exception:  # noqa: BLE001 - the failure itself is reported next
+            pass
+        super()._handle_exception(error)
 
     def action_help(self) -> None:
         if not isinstance(self.screen, HelpScreen):

@@ -8,8 +8,11 @@ form can show it beside the field. No textual import here: the tests drive it di
 
 from __future__ import annotations
 
+import copy
 from dataclasses import dataclass, field
 from pathlib import Path
+
+import tomlkit
 
 from shopbeam.errors import InputError, InputErrors, Problem, UnstableBeam
 from shopbeam.jobs import jobdoc, library
@@ -196,35 +199,21 @@ class Session:
         place with its comment (typing slowly through an empty field gives the same file as
         typing fast). Returns True when it was put back here."""
         node = self._node(path)
-        body = getattr(getattr(node, "value", node), "_body", None)
         where = (tuple(path), key)
         places = self.__dict__.setdefault("_places", {})
-        if node is None or body is None or not hasattr(node, "get"):
+        if node is None or jobdoc.container_of(node) is None or not hasattr(node, "get"):
             return False
         if value is None:
-            if key in node:
-                i = next((n for n, (k, _v) in enumerate(body) if k is not None and k.key == key),
-                         None)
+            i = jobdoc.key_index(node, key) if key in node else None
+            if i is not None:
                 item = node.item(key) if hasattr(node, "item") else None
-                if i is not None and item is not None and hasattr(item, "trivia"):
-                    places[where] = (i, item.trivia)
+                places[where] = (i, getattr(item, "trivia", None))
             return False
         if key in node or where not in places:
             return False
         i, trivia = places.pop(where)
-        if i > len(body):
-            return False
-        import tomlkit
-
-        from shopbeam.jobs.jobdoc import _check_value
-
-        _check_value(key, value, ".".join(map(str, [*path, key])))
-        item = tomlkit.item(value)
-        t = item.trivia
-        t.indent, t.comment_ws, t.comment, t.trail = (trivia.indent, trivia.comment_ws,
-                                                      trivia.comment, trivia.trail)
-        getattr(node, "value", node)._insert_at(i, key, item)
-        return True
+        jobdoc._check_value(key, value, ".".join(map(str, [*path, key])))
+        return jobdoc.insert_key(node, i, key, value, trivia)
 
     def set(self, dotted: str, value) -> Evaluation:
         """Set a key (None removes it) and re-evaluate."""
@@ -264,12 +253,40 @@ class Session:
         return i
 
     def remove_row(self, table: str, index: int) -> None:
+        """Remove one row; `undo_remove` puts the last one removed back."""
+        before = self.doc.text()
+        row = copy.deepcopy(self.doc.doc[table][index])
         if table == "loads":
             self.doc.remove_load(index)
         else:
             self.doc.remove_support(index)
+        self.removed = (table, index, before, self.doc.text(), row)
         self.__dict__.pop("_places", None)  # row indices moved
         self._edited()
+
+    removed = None  # (table, index, text before, text after, the row): the last removal
+
+    def undo_remove(self) -> tuple[str, int] | None:
+        """Put the last removed row back at its place: with the file exactly as it was
+        when nothing was changed since (its comments too), else the row itself (its own
+        line comments) at its old index. (table, index), or None when nothing to undo."""
+        if self.removed is None:
+            return None
+        table, index, before, after, row = self.removed
+        self.removed = None
+        if self.doc.text() == after:
+            body, _bom = jobdoc._split_bom(before)
+            self.doc.doc = jobdoc._parse(body)
+        else:
+            rows = self.doc.doc.get(table)
+            if rows is None:
+                self.doc.doc.add(table, tomlkit.aot())
+                rows = self.doc.doc[table]
+            rows.insert(min(index, len(rows)), row)
+            index = min(index, len(rows) - 1)
+        self.__dict__.pop("_places", None)
+        self._edited()
+        return table, index
 
     # ------------------------------------------------------------------ saving
     def save(self, *, overwrite: bool = False):
@@ -293,6 +310,27 @@ class Session:
         self._saved(opened, to)
         self.name = Path(opened.path).stem
         return opened.path
+
+    def save_recovery(self) -> Path:
+        """Write the unsaved job beside its file (or in the user library) as
+        NAME.recovered.toml (-2, -3 ... when taken); never over any file. For the text
+        UI's last act when shopbeam itself fails: the work is kept."""
+        from shopbeam.jobs import storage  # noqa: PLC0415 - only on this rare path
+
+        folder = self.path.parent if self.path is not None and not self.read_only \
+            else library.user_dir()
+        stem = self.path.stem if self.path is not None else \
+            storage.suggest_name(str(self.doc.get("title") or "job"))
+        folder.mkdir(parents=True, exist_ok=True)
+        for n in range(1, 1000):
+            target = folder / f"{stem}.recovered{'' if n == 1 else f'-{n}'}.toml"
+            if target.exists():
+                continue
+            try:
+                return storage.save_text(target, self.doc.text()).path
+            except storage.NameTaken:
+                continue
+        raise OSError(f"no free name for a recovery copy in {folder}")
 
     def _saved(self, opened, origin: str) -> None:
         self.doc.opened = opened

@@ -184,10 +184,18 @@ class RowList(OptionList):
             view.row_picked(highlighted)
 
     def action_add(self) -> None:
-        self.post_message(self.Add())
+        view = next((a for a in self.ancestors if isinstance(a, RowsView)), None)
+        if view is not None:
+            view._add(view.new_kind)  # now: the keys behind it go to the new row
+        else:
+            self.post_message(self.Add())
 
     def action_remove(self) -> None:
-        self.post_message(self.Remove())
+        view = next((a for a in self.ancestors if isinstance(a, RowsView)), None)
+        if view is not None:
+            view._remove()
+        else:
+            self.post_message(self.Remove())
 
 
 class RowButton(Button, can_focus=False):
@@ -204,10 +212,26 @@ class RowsView(View):
     ]
 
     def action_add_row(self) -> None:
-        self.post_message(self.RowAdd(self.table, self.new_kind))
+        self._add(self.new_kind)
 
     def action_remove_row(self) -> None:
-        self.post_message(self.RowRemove(self.table, self.selected))
+        self._remove()
+
+    def _add(self, kind: str) -> None:
+        """Added now, as the key is handled (not when a message arrives): the keys typed
+        right behind it go into the new row's fields, as they would typed slowly."""
+        add = getattr(self.screen, "add_row", None)
+        if add is not None:
+            add(self.table, kind)
+        else:
+            self.post_message(self.RowAdd(self.table, kind))
+
+    def _remove(self) -> None:
+        remove = getattr(self.screen, "remove_row", None)
+        if remove is not None:
+            remove(self.table, self.selected)
+        else:
+            self.post_message(self.RowRemove(self.table, self.selected))
 
     table = ""  # "supports" | "loads"
     new_kind = ""  # the type a plain "add" (a key on the list) makes
@@ -223,7 +247,7 @@ class RowsView(View):
 
     def on_row_list_add(self, event: RowList.Add) -> None:
         event.stop()
-        self.post_message(self.RowAdd(self.table, self.new_kind))
+        self._add(self.new_kind)
 
     def selected_row(self, session) -> tuple[int, dict | None]:
         """The picked row of this view's table and its index (None when there are none)."""
@@ -261,14 +285,24 @@ class RowsView(View):
             lst.add_options([Option(_text(t)) for t in texts])
         if rows:
             self.selected = min(self.selected, len(rows) - 1)
-            lst.highlighted = self.selected if hl is None or hl != self.selected else hl
+            # while a row is being picked (its old row's typing flushed first), the list
+            # keeps the row picked: the form follows it right after
+            want = self._picking if self._picking is not None else self.selected
+            if lst.highlighted != min(want, len(rows) - 1):
+                lst.highlighted = min(want, len(rows) - 1)
         self.query_one(".row-form").display = bool(rows)
 
+    _picking = None  # the row being picked while the old row's typing is written
+
     def row_picked(self, index: int) -> None:
-        if index != self.selected and self.is_mounted:
+        if index != self.selected and self.is_mounted and self._picking is None:
             flush = getattr(self.screen, "flush_typing", None)
             if flush is not None:
-                flush()  # what was typed or chosen for the old row goes into that row first
+                self._picking = index
+                try:
+                    flush()  # what was typed or chosen for the old row goes into it first
+                finally:
+                    self._picking = None
             rows = self.app_session().rows(self.table)
             if not 0 <= index < len(rows):
                 return
@@ -282,11 +316,15 @@ class RowsView(View):
     def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
         if isinstance(event.option_list, RowList):
             event.stop()
-            self.row_picked(event.option_index)
+            # the row highlighted now (the list picked it at once, see watch_highlighted):
+            # a message queued for a highlight since moved on must not pick an older row
+            now = event.option_list.highlighted
+            if now is not None:
+                self.row_picked(now)
 
     def on_row_list_remove(self, event: RowList.Remove) -> None:
         event.stop()
-        self.post_message(self.RowRemove(self.table, self.selected))
+        self._remove()
 
     def app_session(self):
         return self.screen.session

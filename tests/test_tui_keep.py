@@ -1,0 +1,240 @@
+"""Nothing typed is lost: fields emptied and typed again, rows added and picked inside a
+fast burst, a removal undone, a file saved with problems opened again, values kept as typed.
+
+Keys are fed as the bytes a terminal sends, through Textual's own parser, all at once (a
+burst) as tmux send-keys or key repeat would deliver them.
+"""
+
+from __future__ import annotations
+
+import shutil
+from pathlib import Path
+
+import pytest
+from textual._xterm_parser import XTermParser
+
+from tuipilot import _own_library, settle, sync  # noqa: F401 (_own_library: autouse)
+from shopbeam.tui import session as session_mod
+from shopbeam.tui.app import make_app
+from shopbeam.tui.session import Session
+from shopbeam.tui.widgets import Field
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+SIZE = (80, 24)
+BS, TAB, SHIFT_TAB, DOWN = "\x7f", "\t", "\x1b[Z", "\x1b[B"
+F3, F4 = "\x1bOR", "\x1bOS"
+CTRL_T, CTRL_X, CTRL_Z, CTRL_U = "\x14", "\x18", "\x1a", "\x15"
+
+
+def events_of(data: str):
+    parser = XTermParser()
+    return [e for e in list(parser.feed(data)) + list(parser.feed("")) if hasattr(e, "key")]
+
+
+async def burst(pilot, data: str) -> None:
+    for event in events_of(data):
+        pilot.app._driver.send_message(event)
+    await settle(pilot)
+
+
+def field(app, view: str, key: str) -> Field:
+    return next(f for f in app.job_screen.query_one(f"#{view}").query(Field) if f.key == key)
+
+
+def demo_copy(tmp_path) -> Path:
+    path = tmp_path / "demo.toml"
+    shutil.copy(PRESETS / "demo.toml", path)
+    return path
+
+
+# ---------------------------------------------------------------------- 1. emptied twice
+
+@pytest.mark.parametrize("key", ["criteria.live_deflection", "beam.members", "criteria.impact",
+                                 "notes", "beam.bearing"])
+def test_a_key_typed_emptied_typed_and_emptied_again_leaves_the_file_as_it_was(key):
+    s = Session.open(PRESETS / "demo.toml")
+    original = s.doc.text()
+    for value in ("2", None, "3", None, "4", "5", None):
+        s.set(key, value)
+    if key == "notes":  # the demo has notes: typed back, they come back in their place
+        s.set(key, "Demo job. A building member: needs review by a licensed engineer.")
+    assert s.doc.text() == original
+
+
+@sync
+async def test_members_typed_and_emptied_twice_keeps_the_app_and_the_job(tmp_path):
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        f = field(app, "span", "beam.members")
+        f.input.focus()
+        await settle(pilot)
+        for key in (CTRL_U, "2", BS, "3", BS):  # one key at a time: each one is an edit
+            await burst(pilot, key)
+        assert app.is_running and app.return_code is None
+        assert app.job_screen.session.doc.text() == path.read_text(encoding="utf-8")
+        await burst(pilot, "2")
+        assert app.job_screen.session.doc.get("beam.members") == 2
+
+
+@sync
+async def test_an_edit_that_fails_inside_shopbeam_is_refused_and_the_app_keeps_running(
+        tmp_path, monkeypatch):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+
+        def broken(*a, **k):
+            raise RuntimeError("a bug")
+
+        monkeypatch.setattr(s, "set", broken)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Rack beam")
+        assert app.is_running
+        assert f.value == "Rack beam"  # the text stays where it was typed
+        notes = [str(n.message) for n in app._notifications]
+        assert any("bug in shopbeam" in n and "RuntimeError" in n for n in notes), notes
+        monkeypatch.undo()
+        await burst(pilot, "s")  # the next key goes in as usual
+        assert s.doc.get("title") == "Rack beams"
+
+
+# ---------------------------------------------------------------------- 2. add a row, type
+
+@sync
+async def test_keys_right_behind_ctrl_t_go_into_the_new_load(tmp_path):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, F4 + CTRL_T + TAB + "-500 lbf")
+        s = app.job_screen.session
+        loads = s.rows("loads")
+        assert len(loads) == 5
+        assert loads[4] == {"type": "point", "at": "7.5 ft", "value": "-500 lbf"}
+        assert s.doc.get("beam.length") == "15 ft" and app.job_screen.current == "loads"
+
+
+@sync
+async def test_keys_right_behind_ctrl_t_go_into_the_new_support_not_the_length(tmp_path):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, F3 + CTRL_T + "9 ft")
+        s = app.job_screen.session
+        assert s.doc.get("beam.length") == "15 ft"
+        assert s.rows("supports")[2] == {"at": "9 ft", "type": "pin"}
+        assert not app.screen_stack[-1].__class__.__name__ == "LengthScreen"
+
+
+# ---------------------------------------------------------------------- 3. across a row change
+
+@sync
+async def test_a_burst_across_a_row_change_lands_once_in_the_row_shown(tmp_path):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        await burst(pilot, TAB * 5)
+        assert app.focused is field(app, "loads", "load.value").input
+        for _ in range(3):
+            await burst(pilot, "-7 lbf/ft" + SHIFT_TAB * 4 + DOWN + TAB * 4 + "-8 lbf/ft")
+            s = app.job_screen.session
+            assert [r["value"] for r in s.rows("loads")[:2]] == ["-7 lbf/ft", "-8 lbf/ft"]
+            view = app.job_screen.query_one("#loads")
+            assert view.selected == 1 and view.query_one("RowList").highlighted == 1
+            assert field(app, "loads", "load.value").value == "-8 lbf/ft"
+            assert field(app, "loads", "load.label").value == "stock"
+            # back to the first load's value for the next round
+            await burst(pilot, SHIFT_TAB * 4 + "\x1b[A" + TAB * 4)
+
+
+# ---------------------------------------------------------------------- 4. a job with problems
+
+def test_the_command_opens_a_job_saved_with_problems(tmp_path, monkeypatch):
+    """A job saved half-finished (a bare number for the length) opens in the text UI: only
+    a file that is not TOML at all is refused (exit 2)."""
+    from shopbeam import cli
+    from shopbeam.tui import app as tui_app
+
+    job = tmp_path / "half.toml"
+    job.write_text((PRESETS / "demo.toml").read_text(encoding="utf-8")
+                   .replace('length = "15 ft"', 'length = "15"'), encoding="utf-8")
+    ran = []
+
+    class Fake:
+        return_code, recovered = 0, None
+
+        def run(self):
+            ran.append(True)
+
+    monkeypatch.setattr(tui_app, "make_app", lambda **kw: Fake())
+    assert cli.main(["ui", str(job)]) == 0 and ran
+    broken = tmp_path / "broken.toml"
+    broken.write_text("length = = 3\n", encoding="utf-8")
+    assert cli.main(["ui", str(broken)]) == 2 and len(ran) == 1
+    Fake.return_code = 1  # the app failed: never exit 0
+    assert cli.main(["ui", str(job)]) == 1
+
+
+@sync
+async def test_a_job_saved_with_problems_opens_with_each_problem_beside_its_field(tmp_path):
+    job = tmp_path / "half.toml"
+    job.write_text((PRESETS / "demo.toml").read_text(encoding="utf-8")
+                   .replace('length = "15 ft"', 'length = "15"'), encoding="utf-8")
+    app = make_app(job, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        f = field(app, "span", "beam.length")
+        assert f.value == "15" and f.has_class("-error")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, " ft")  # typed after the selected text: replaces it
+        await burst(pilot, "\x1b[H15 ft" + "\x1b[F" + BS * 3)
+        assert app.job_screen.session.doc.get("beam.length") == "15 ft"
+        assert app.job_screen.session.evaluation.ok
+
+
+def test_a_failed_app_writes_the_unsaved_job_to_a_recovery_copy(tmp_path):
+    path = demo_copy(tmp_path)
+    s = Session.open(path)
+    s.set("title", "Typed, not saved")
+    first = s.save_recovery()
+    second = s.save_recovery()
+    assert first.name == "demo.recovered.toml" and second.name == "demo.recovered-2.toml"
+    assert 'title = "Typed, not saved"' in first.read_text(encoding="utf-8")
+    assert path.read_text(encoding="utf-8") == (PRESETS / "demo.toml").read_text(encoding="utf-8")
+
+
+# ---------------------------------------------------------------------- 5. undo a removal
+
+@sync
+async def test_a_removed_load_comes_back_with_ctrl_z_at_its_place_with_its_comment(tmp_path):
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        original = s.doc.text()
+        await burst(pilot, F4 + TAB + DOWN + "x")  # the list picked, load 2 removed
+        assert len(s.rows("loads")) == 3 and "# stored stock" not in s.doc.text()
+        notes = [str(n.message) for n in app._notifications]
+        assert any("removed load 2" in n and "ctrl+z" in n for n in notes), notes
+        await burst(pilot, CTRL_Z)
+        assert s.doc.text() == original
+        assert app.job_screen.query_one("#loads").selected == 1
+        # removed, then another edit: the row still comes back at its place
+        await burst(pilot, CTRL_X)
+        s.set("title", "Loft beam")
+        await burst(pilot, CTRL_Z)
+        assert [r.get("label") for r in s.rows("loads")] == ["deck", "stock", "pipe offcuts",
+                                                              "stair"]
+        assert 'value = "-300 lbf/ft"          # stored stock' in s.doc.text()
