@@ -238,3 +238,165 @@ async def test_a_removed_load_comes_back_with_ctrl_z_at_its_place_with_its_comme
         assert [r.get("label") for r in s.rows("loads")] == ["deck", "stock", "pipe offcuts",
                                                               "stair"]
         assert 'value = "-300 lbf/ft"          # stored stock' in s.doc.text()
+
+
+# ---------------------------------------------------------------------- 6. custom values kept
+
+def choice_of(app, view: str, key: str):
+    from shopbeam.tui.widgets import Choice
+
+    return next(c for c in app.job_screen.query_one(f"#{view}").query(Choice) if c.key == key)
+
+
+@sync
+async def test_custom_material_figures_survive_a_toggle_to_built_in_and_back(tmp_path):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f6")
+        await settle(pilot)
+        mode = choice_of(app, "material", "material.mode")
+        mode.focus()
+        await settle(pilot)
+        await burst(pilot, "c")  # custom
+        s = app.job_screen.session
+        assert isinstance(s.doc.get("beam.material"), dict)
+        fy = field(app, "material", "mat.fy")
+        fy.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "46 ksi")
+        mode.focus()
+        await settle(pilot)
+        await burst(pilot, "b")  # built-in: the key it had
+        assert s.doc.get("beam.material") == "A992"
+        await burst(pilot, "c")  # custom again: the figures typed
+        assert s.doc.get("beam.material.fy") == "46 ksi"
+        assert fy.value == "46 ksi"
+
+
+@sync
+async def test_section_sizes_typed_survive_a_toggle_of_mode_and_shape(tmp_path):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f5")
+        await settle(pilot)
+        mode = choice_of(app, "section", "section.mode")
+        mode.focus()
+        await settle(pilot)
+        await burst(pilot, "d")  # dimensions: a rect-tube to start from
+        s = app.job_screen.session
+        assert s.doc.get("beam.section.shape") == "rect-tube"
+        depth = field(app, "section", "dim.depth")
+        depth.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "5 in")
+        shape = choice_of(app, "section", "section.shape")
+        shape.focus()
+        await settle(pilot)
+        await burst(pilot, "\x1b[C")  # the next shape
+        assert s.doc.get("beam.section.shape") != "rect-tube"
+        await burst(pilot, "\x1b[D")  # back: the depth typed
+        assert s.doc.get("beam.section") == {"shape": "rect-tube", "depth": "5 in",
+                                             "width": "2 in", "wall": "1/8 in"}
+        mode.focus()
+        await settle(pilot)
+        await burst(pilot, "c" + "d")  # catalog, then dimensions again
+        assert s.doc.get("beam.section.depth") == "5 in"
+
+
+# ---------------------------------------------------------------------- 7. as typed
+
+@sync
+async def test_fields_show_what_was_typed_and_numbers_are_saved_as_typed(tmp_path):
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        tags = field(app, "job", "tags")
+        tags.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "rack,shelf ,  demo,,")
+        await burst(pilot, "\x1bOR\x1bOQ")  # F3, then F2 back to the job view
+        assert tags.value == "rack,shelf ,  demo,,"
+        assert s.doc.get("tags") == ["rack", "shelf", "demo"]
+        await burst(pilot, "\x1b[18~")  # F7 criteria
+        sf = field(app, "criteria", "criteria.safety_factor")
+        sf.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "1.670" + "\x1bOQ" + "\x1b[18~")
+        assert sf.value == "1.670"
+        await burst(pilot, "\x13")  # ctrl+s
+        assert "safety_factor = 1.670\n" in path.read_text(encoding="utf-8")
+
+
+@sync
+async def test_notes_emptied_saved_and_typed_again_come_back_in_their_place(tmp_path):
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        notes = field(app, "job", "notes")
+        notes.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U)
+        await burst(pilot, "\x13")
+        assert "notes =" not in path.read_text(encoding="utf-8")
+        await burst(pilot, "Bay 3")
+        await burst(pilot, "\x13")
+    text = path.read_text(encoding="utf-8")
+    assert text == (PRESETS / "demo.toml").read_text(encoding="utf-8").replace(
+        "Demo job. A building member: needs review by a licensed engineer.", "Bay 3")
+
+
+# ---------------------------------------------------------------------- 8. always in sight
+
+def _key_bar_keys(app) -> dict:
+    """The keys of the key bar wholly on screen: key -> its words."""
+    from textual.widgets import Footer
+
+    footer = app.screen.query_one(Footer)
+    width = app.size.width
+    return {k.key: k.description for k in footer.query("FooterKey")
+            if k.region.width and k.region.right <= width}
+
+
+@sync
+async def test_the_key_bar_keeps_save_keys_and_quit_wherever_the_focus_is():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        for fkey in ("f2", "f3", "f4", "f5", "f6", "f7", "f8", "f9", "f10", "f11", "f12"):
+            await pilot.press(fkey)
+            await settle(pilot)
+            view = js.query_one(f"#{js.current}")
+            stops = [w for w in view.focusables() if w.focusable][:12]
+            for w in [view] + stops:
+                w.focus()
+                await pilot.pause()
+                keys = _key_bar_keys(app)
+                assert {"ctrl+q", "ctrl+s", "f1"} <= set(keys), (js.current, w, keys)
+
+
+@sync
+async def test_the_length_question_leaves_the_safety_caution_in_sight(tmp_path):
+    from shopbeam.cautions import SHORT
+
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        field(app, "span", "beam.length").input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "20 ft" + TAB)
+        assert type(app.screen).__name__ == "LengthScreen"
+        top = app.screen.get_widget_at(2, 0)[0]
+        assert type(top).__name__ == "Banner" and SHORT in str(top.render())
+        await burst(pilot, "k")
+        await pilot.press("f1")
+        await settle(pilot)
+        assert type(app.screen).__name__ == "HelpScreen"
+        assert type(app.screen.get_widget_at(2, 0)[0]).__name__ == "Banner"

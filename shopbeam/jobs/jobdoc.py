@@ -423,7 +423,8 @@ def _assign(node, key: str, value, where: str) -> None:
     if isinstance(plain, tuple):
         plain = list(plain)
     if old is not None and hasattr(old, "unwrap") and not isinstance(old, (Table, AoT)):
-        if type(old.unwrap()) is type(plain) and old.unwrap() == plain:
+        if type(old.unwrap()) is type(plain) and old.unwrap() == plain and (
+                not hasattr(value, "as_string") or value.as_string() == old.as_string()):
             return  # unchanged: keep its layout and comments exactly
         if isinstance(old, Array) and isinstance(plain, list) and len(old) == len(plain) \
                 and all(not isinstance(v, (list, dict)) for v in plain):
@@ -449,6 +450,18 @@ def _assign(node, key: str, value, where: str) -> None:
             if 0 < i < len(box.body) and insert_key(node, i, key, new):
                 return
     node[key] = new
+
+
+def number_as_typed(value, text: str):
+    """`value` as a TOML number written the way it was typed ("1.670", "2"), when that text
+    is a TOML number of the same value; else the plain value (written the usual way)."""
+    try:
+        parsed = tomlkit.parse(f"x = {text}\n")["x"]
+    except Exception:  # noqa: BLE001 - not TOML as typed (".5", "01"): the usual way
+        return value
+    if type(parsed.unwrap()) is not type(value) or parsed.unwrap() != value:
+        return value
+    return parsed
 
 
 def container_of(node):

@@ -75,13 +75,18 @@ SHAPE_DEFAULTS = {
 
 
 def _number_or_text(text: str):
+    """A number as typed ("1.670" is written 1.670, not 1.67), or the text itself (the
+    reader then says what is wrong with it)."""
     t = text.strip()
     if not t:
         return None
     try:
-        return int(t) if t.isdigit() else float(t)
+        value = int(t) if t.isdigit() else float(t)
     except ValueError:
         return t
+    from shopbeam.jobs.jobdoc import number_as_typed  # noqa: PLC0415 - startup
+
+    return number_as_typed(value, t)
 
 
 
@@ -561,7 +566,7 @@ class JobScreen(Screen):
         elif key == "section.mode":
             self.change_section_mode(value)
         elif key == "section.shape":
-            s.set("beam.section", {"shape": value, **SHAPE_DEFAULTS.get(value, {})})
+            self.change_section_shape(value)
         elif key == "material.mode":
             self.change_material_mode(value)
         else:
@@ -620,15 +625,21 @@ class JobScreen(Screen):
         s.touched()
 
     def change_section_mode(self, mode: str) -> None:
+        self.flush_typing()  # the figures typed so far belong to the mode left
         s = self.session
         ev = s.evaluation
         cur = s.doc.get("beam.section")
-        if isinstance(cur, str):
-            self._last_designation = cur
+        self._remember_section(cur)
+        kept = self.__dict__.setdefault("_typed_sections", {})
         if mode == "catalog":
             s.set("beam.section", getattr(self, "_last_designation", None) or "HSS4x4x1/4")
         elif mode == "dimensions":
-            s.set("beam.section", {"shape": "rect-tube", **SHAPE_DEFAULTS["rect-tube"]})
+            # the shape and sizes typed before, if any (a toggle never throws them away)
+            last = kept.get("dimensions")
+            s.set("beam.section", dict(last) if last else
+                  {"shape": "rect-tube", **SHAPE_DEFAULTS["rect-tube"]})
+        elif kept.get("custom"):
+            s.set("beam.section", dict(kept["custom"]))
         else:
             sec = ev.job.section if ev.job is not None else None
             sy = s.doc.get("units", "us")
@@ -643,14 +654,41 @@ class JobScreen(Screen):
                         "sx": "3.90 in^3"}
             s.set("beam.section", spec)
 
+    def _remember_section(self, cur) -> None:
+        """What the section was before a mode or shape change: a designation, or the sizes
+        typed for a shape (by shape) and the custom figures, so going back brings them."""
+        kept = self.__dict__.setdefault("_typed_sections", {})
+        if isinstance(cur, str):
+            self._last_designation = cur
+        elif isinstance(cur, dict):
+            shape = cur.get("shape")
+            if shape == "custom":
+                kept["custom"] = dict(cur)
+            elif isinstance(shape, str):
+                kept["dimensions"] = dict(cur)
+                kept[f"shape:{shape}"] = dict(cur)
+
+    def change_section_shape(self, shape: str) -> None:
+        self.flush_typing()  # the figures typed so far belong to the mode left
+        s = self.session
+        self._remember_section(s.doc.get("beam.section"))
+        last = self.__dict__.setdefault("_typed_sections", {}).get(f"shape:{shape}")
+        s.set("beam.section", dict(last) if last else {"shape": shape,
+                                                       **SHAPE_DEFAULTS.get(shape, {})})
+
     def change_material_mode(self, mode: str) -> None:
+        self.flush_typing()  # the figures typed so far belong to the mode left
         s = self.session
         ev = s.evaluation
         cur = s.doc.get("beam.material")
         if isinstance(cur, str):
             self._last_material = cur
+        elif isinstance(cur, dict):
+            self._last_custom_material = dict(cur)  # typed figures: kept for the way back
         if mode == "built-in":
             s.set("beam.material", getattr(self, "_last_material", None) or "A36")
+        elif getattr(self, "_last_custom_material", None):
+            s.set("beam.material", dict(self._last_custom_material))
         else:
             m = ev.job.material if ev.job is not None else None
             sy = s.doc.get("units", "us")
@@ -880,12 +918,16 @@ class JobScreen(Screen):
         self.set_focus(None)
         for f in self.query(Field):
             f.forget_typing()
+            f._kept = None
         for c in self.query(Choice):
             c._pending = None
         for v in self.query(RowsView):
             v.selected = 0
         for v in self.query(SizingView):
             v._kind_set = False
+        for name in ("_typed_sections", "_last_custom_material", "_last_material",
+                     "_last_designation"):
+            self.__dict__.pop(name, None)  # another job: its own typed values only
         self.refresh_all()
 
 

@@ -91,6 +91,7 @@ class HelpScreen(ModalScreen):
         with VerticalScroll(classes="dialog", id="help"):
             yield Static(help_text(width), markup=False)
             yield Static("esc closes this help.", markup=False)
+        yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
 
     def action_close(self) -> None:
@@ -117,6 +118,7 @@ class ConfirmScreen(ModalScreen[str]):
                 yield Button("s  Save", id="save", compact=True)
                 yield Button(f"d  Discard and {self.doing}", id="discard", compact=True)
                 yield Button("esc  Keep editing", id="cancel", compact=True)
+        yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
 
     def on_button_pressed(self, event: Button.Pressed) -> None:
@@ -150,6 +152,7 @@ class LengthScreen(ModalScreen[str]):
                          "  s  scale every position with the length\n"
                          "  e  keep the ends at the ends: what sat at the old end moves to\n"
                          "     the new end; everything else stays", markup=False)
+        yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
 
     def action_answer(self, answer: str) -> None:
@@ -177,6 +180,7 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
             yield Choice("Library", self.places, key="saveas.place")
             yield Static("enter saves, esc cancels. The file is NAME.toml in that library.",
                          markup=False)
+        yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
 
     def on_mount(self) -> None:
@@ -233,6 +237,7 @@ class ConflictScreen(ModalScreen[str]):
                 yield Button("n  Save as a new name", id="new", compact=True)
                 yield Button("o  Overwrite with mine", id="overwrite", compact=True)
                 yield Button("esc  Cancel", id="cancel", compact=True)
+        yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
 
     def on_button_pressed(self, event: Button.Pressed) -> None:

@@ -163,9 +163,11 @@ class JobView(View):
 class RowList(OptionList):
     """The supports or loads of the job, one line each; the highlighted one is edited below."""
 
+    # not in the key bar (ctrl+t / ctrl+x are, and F1 lists these): at 80 columns the bar
+    # must keep room for save and quit
     BINDINGS = [
-        Binding("a", "add", "add"),
-        Binding("delete,x", "remove", "remove"),
+        Binding("a", "add", "add", show=False),
+        Binding("delete,x", "remove", "remove", show=False),
     ]
 
     class Add(Message):

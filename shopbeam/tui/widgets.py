@@ -155,10 +155,19 @@ class Field(Horizontal):
 
     def set_value(self, value: str) -> None:
         """Show a value from the document without it counting as an edit. A field that has
-        the focus, or typing the screen has not taken yet, is never rewritten."""
+        the focus, or typing the screen has not taken yet, is never rewritten; nor is the
+        text last typed here while the document says the same in its own way ("rack,shelf"
+        for the tags rack and shelf, "1.670" for 1.67)."""
         value = "" if value is None else str(value)
         if self.screen.focused is self.input or self._typed is not None:
             return
+        kept = self._kept
+        if kept is not None and same_entry(kept, value):
+            if self.input.value != kept:
+                self._quiet = kept
+                self.input.value = kept
+            return
+        self._kept = None
         if self.input.value != value:
             self._quiet = value
             self.input.value = value
@@ -169,6 +178,7 @@ class Field(Horizontal):
         if row != self.row:
             self.row = row
             self._typed = None
+            self._kept = None
             value = "" if value is None else str(value)
             if self.input.value != value:
                 self._quiet = value
@@ -176,8 +186,11 @@ class Field(Horizontal):
             return
         self.set_value(value)
 
+    _kept = None  # the text last typed here and written into the document
+
     def taken(self, value: str) -> None:
         """The screen wrote `value` (typed here) into the document."""
+        self._kept = value
         if self._typed == value:
             self._typed = None
 
@@ -202,6 +215,19 @@ class Field(Horizontal):
             return
         self._quiet = None
         self.post_message(self.Edited(self, event.value))
+
+
+def same_entry(typed: str, shown: str) -> bool:
+    """Whether the text typed in a field and the text the document gives back for it say
+    the same: the same number, or the same comma-separated items (spaces and empty items
+    aside)."""
+    a, b = typed.strip(), shown.strip()
+    try:
+        return float(a) == float(b)
+    except ValueError:
+        pass
+    return [p.strip() for p in a.split(",") if p.strip()] == \
+        [p.strip() for p in b.split(",") if p.strip()]
 
 
 class Choice(Widget, can_focus=True):
@@ -397,6 +423,16 @@ class Banner(Static):
     """The safety caution, always on screen; the lifting one is louder."""
 
     DEFAULT_CSS = "Banner { height: auto; }"
+
+    def on_mount(self) -> None:
+        """A dialog's banner says what the job screen's says (the same job behind it)."""
+        if getattr(self, "_shown", None) is None:
+            js = getattr(self.app, "job_screen", None)
+            loud = False
+            if js is not None and js is not self.screen:
+                first = js.query(Banner)
+                loud = bool(first and getattr(first.first(), "_shown", False))
+            self.show((), loud)
 
     def show(self, tags, lifting: bool = False) -> None:
         """`lifting`: a lifting device whatever the tags say (a named lifting profile)."""
