@@ -373,9 +373,10 @@ class JobScreen(Screen):
         try:
             do(*args)
         except Exception as exc:  # noqa: BLE001 - a bug must never cost the user the job
+            kept = ", your text stays in the field" if what.startswith("the edit") else ""
             self.notify(f"{what} could not be made ({type(exc).__name__}: {exc}). This is a "
-                        "bug in shopbeam: the job is as before, your text stays in the field, "
-                        "and ctrl+s still saves.", severity="error", timeout=20)
+                        f"bug in shopbeam: the job is as before{kept}, and ctrl+s still "
+                        "saves.", severity="error", timeout=20)
             try:
                 self.refresh_all()
             except Exception:  # noqa: BLE001 - the message above is what matters
@@ -475,7 +476,8 @@ class JobScreen(Screen):
             lines = lines[:7] + [f"  ... and {len(lines) - 7} more"]
 
         def answer(choice) -> None:
-            self.move_positions(choice or "keep", old, new, placed)
+            self.edit_safely("moving the positions", self.move_positions, choice or "keep",
+                             old, new, placed)
 
         self.app.push_screen(LengthScreen(str(before), str(now), lines), answer)
 
@@ -777,21 +779,24 @@ class JobScreen(Screen):
         self.notify(f"{table[:-1]} {index + 1} is back", timeout=6)
         self.changed()
 
+    def _pick(self, key: str, value: str, note: str = "") -> None:
+        self.session.set(key, value)
+        if note:
+            self.notify(note)
+        self.changed()
+
     def on_section_view_pick(self, event: SectionView.Pick) -> None:
         event.stop()
-        self.session.set("beam.section", event.designation)
-        self.changed()
+        self.edit_safely("picking the section", self._pick, "beam.section", event.designation)
 
     def on_sizing_view_pick(self, event: SizingView.Pick) -> None:
         event.stop()
-        self.session.set("beam.section", event.designation)
-        self.notify(f"Using {event.designation} in the job (see 4 Section, 7 Results).")
-        self.changed()
+        self.edit_safely("picking the section", self._pick, "beam.section", event.designation,
+                         f"Using {event.designation} in the job (see 4 Section, 7 Results).")
 
     def on_material_view_pick(self, event: MaterialView.Pick) -> None:
         event.stop()
-        self.session.set("beam.material", event.key)
-        self.changed()
+        self.edit_safely("picking the material", self._pick, "beam.material", event.key)
 
     # ------------------------------------------------------------------ saving
     def _writable_places(self) -> list[str]:
