@@ -400,3 +400,28 @@ async def test_the_length_question_leaves_the_safety_caution_in_sight(tmp_path):
         await settle(pilot)
         assert type(app.screen).__name__ == "HelpScreen"
         assert type(app.screen.get_widget_at(2, 0)[0]).__name__ == "Banner"
+
+
+@sync
+async def test_a_failure_that_closes_the_app_leaves_the_unsaved_job_in_a_recovery_copy(
+        tmp_path):
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    with pytest.raises(RuntimeError, match="a bug outside any edit"):
+        async with app.run_test(size=SIZE) as pilot:
+            await settle(pilot)
+            f = field(app, "job", "title")
+            f.input.focus()
+            await settle(pilot)
+            await burst(pilot, CTRL_U + "Typed, not saved")
+
+            def broken(*a, **k):
+                raise RuntimeError("a bug outside any edit")
+
+            app.job_screen.action_view = broken
+            await pilot.press("f3")
+            await settle(pilot)
+    assert app.return_code == 1
+    assert app.recovered == tmp_path / "demo.recovered.toml"
+    assert 'title = "Typed, not saved"' in app.recovered.read_text(encoding="utf-8")
+    assert path.read_text(encoding="utf-8") == (PRESETS / "demo.toml").read_text(encoding="utf-8")
