@@ -106,6 +106,28 @@ def clip(ld: Load, a: float, b: float) -> Load | None:
     return replace(ld, start=lo, end=hi, w1=f(lo), w2=f(hi))
 
 
+def split_by_span(loads, segs, length: float) -> list[tuple[Load, ...]]:
+    """Each span's and overhang's part of the patterned loads: distributed loads clipped to
+    it, and each point load or couple on the one span it lies in (on a support between two,
+    the one after it; at the far end, the last), so every patterned load comes and goes
+    with its span."""
+    tol = 1e-9 * length
+    out = []
+    for i, (a, b, _) in enumerate(segs):
+        last = i == len(segs) - 1
+        mine = []
+        for ld in loads:
+            if ld.kind in ("point", "moment"):
+                if a - tol <= ld.at and (ld.at < b - tol or last):
+                    mine.append(ld)
+            else:
+                c = clip(ld, a, b)
+                if c is not None:
+                    mine.append(c)
+        out.append(tuple(mine))
+    return out
+
+
 def _positions(loads) -> set[float]:
     out = set()
     for ld in loads:
@@ -196,8 +218,7 @@ def state_set(job, section=None, parts: LoadParts | None = None, ei: float | Non
                              f"2^{len(segs)} patterns at every wheel position; patterned and "
                              f"moving loads together take up to {MAX_PATTERN_SEGMENTS} spans: "
                              "split the job or drop patterned = true", "loads")
-        for a, b, _ in segs:
-            span_loads.append(tuple(c for c in (clip(ld, a, b) for ld in parts.patterned) if c))
+        span_loads = split_by_span(parts.patterned, segs, job.length)
     allpos = _positions(parts.fixed) | _positions(parts.live)
     for sl in span_loads:
         allpos |= _positions(sl)

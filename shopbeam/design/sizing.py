@@ -48,7 +48,7 @@ from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_fact
                                     shear_strength, strengths, unbraced_segments)
 from shopbeam.design.lifting import (DEFAULT_WHEEL_EDGE, OMEGA_WHEEL, flange_coefficients,
                                      flange_tf_at_wheel, profile_of)
-from shopbeam.design.loading import (_dummies, _positions, build_envelope, clip, evaluate,
+from shopbeam.design.loading import (_dummies, _positions, build_envelope, evaluate, split_by_span,
                                      load_parts,
                                      state_set)
 from shopbeam.design.lumber import service_of
@@ -492,10 +492,7 @@ def _state_arrays(job, parts, sw_unit, extra, states, ei):
                 for s in job.supports)
     empty = Beam(L, 1.0, sup, ())
     segs = segments(empty)
-    span_loads = []
-    if parts.patterned:
-        for a, b, _ in segs:
-            span_loads.append(tuple(c for c in (clip(ld, a, b) for ld in parts.patterned) if c))
+    span_loads = split_by_span(parts.patterned, segs, L) if parts.patterned else []
     mv = parts.moving[0] if parts.moving else None
     base = [tuple(parts.fixed) + extra, (sw_unit,), tuple(parts.live)] + span_loads
     nb = len(base)
