@@ -427,3 +427,36 @@ def test_patterned_point_loads_come_and_go_with_their_spans():
     a = capacity(parse_job_text(one))
     b = capacity(parse_job_text(one.replace("patterned = true\n", "")))
     assert a.factor == pytest.approx(b.factor, rel=1e-9) and math.isfinite(a.factor)
+
+
+def test_braced_hogging_withholds_the_rating_only_where_the_demand_would_buckle():
+    # a W8x18 joist, braced = true, 14 ft span and a 2 ft overhang under a dead load only: it
+    # hogs a little over the support, far below what the bottom flange's buckling over 14 ft
+    # leaves (AISC 360-16 F2, Cb 1.0): rated, with the limit state listed as not checked
+    text = ROOF.replace('length = "20 ft"', 'length = "16 ft"').replace(
+        'at = "20 ft"\ntype = "roller"', 'at = "14 ft"\ntype = "roller"').replace(
+        'end = "20 ft"\nvalue = "-50 lbf/ft"\ncase = "dead"',
+        'end = "16 ft"\nvalue = "-50 lbf/ft"\ncase = "dead"').replace(
+        'end = "20 ft"\nvalue = "400 lbf/ft"\nuplift = true', 'end = "14 ft"\nvalue = "-400 lbf/ft"')
+    cap = capacity(parse_job_text(text))
+    assert cap.rated, cap.not_rated
+    assert [u for u in analyze(cap.job).unchecked
+            if u.name.endswith("under hogging moment") and not u.blocks_rating]
+
+
+def test_a_dead_point_load_withholds_no_rating_where_a_live_one_would():
+    pipe = '[beam.section]\nshape = "round-tube"\nod = "2.375 in"\nwall = "0.154 in"'
+    beam = f'material = "A500-C-round"\n{pipe}'
+    dead = point_load(3, "-5 lbf").replace("value", 'case = "dead"\nvalue')
+    spread = uniform_load(6, "-20 lbf/ft")
+    assert capacity(parse_job_text(simple_span(beam, 6, spread + dead))).rated
+    assert not capacity(parse_job_text(simple_span(beam, 6, spread + point_load(3)))).rated
+    # on a support: a dead one is warned, not withheld; a live one is withheld
+    on = point_load(0, "-50 lbf")
+    steel = 'section = "HSS3x2x3/16"\nmaterial = "A500-C"'
+    live = capacity(parse_job_text(simple_span(steel, 6, spread + on)))
+    assert [r for r in live.not_rated if "on a support" in r]
+    dead_on = capacity(parse_job_text(simple_span(steel, 6, spread + on.replace(
+        "value", 'case = "dead"\nvalue'))))
+    assert not [r for r in dead_on.not_rated if "on a support" in r]
+    assert [w for w in dead_on.job.warnings if "support" in w.message]

@@ -319,7 +319,7 @@ def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
             f"the cantilever {where} is checked with its loads at the shear centre (Lb = its "
             f"length, Cb 1.0); loads bearing on its top flange destabilise it (effective length "
             f"about {k:g} x L), which lowers its bending strength to {top / now:.0%} of the "
-            "figure checked; no rating is posted where the rated load would pass that lower "
+            "figure checked; no rating is posted where the rated load would exceed that lower "
             "strength (brace the tip with beam.braces, or hang the loads below the flange "
             "with flange = \"bottom\")",
             "AISC 360-16 F1 (Cb 1.0 at a free end); top-flange loading, SSRC Guide (from "
@@ -327,39 +327,50 @@ def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
     return out
 
 
+def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
+    """(start, end, Mn / Omega) of each length between the supports (the points that hold
+    the bottom flange) over which the bottom flange's lateral-torsional buckling (Cb 1.0)
+    would lower the bending strength of a member taken as braced all along (`braced =
+    true`, not `restrained`)."""
+    fl = _rating_flexure(st)
+    if fl is None or not job.braced or job.restrained:
+        return []
+    stops = sorted({0.0, job.length, *support_braces(job, job.supports)})
+    out = []
+    for a, b in zip(stops, stops[1:]):
+        l1 = fl.ltb1(b - a)[0]
+        if b - a > 1e-9 * job.length and l1 < fl.cap:
+            out.append((a, b, l1 / fl.omega))
+    return out
+
+
 def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     """`braced = true` holds the member all along, but what shops brace it with (a deck,
     boards, sheeting) sits on the top flange. Where the moment hogs, the bottom flange is in
     compression, and between the supports nothing holds it: its lateral-torsional buckling is
-    not checked, so no rating rests on it where it would lower the strength. `restrained =
-    true` (held against twist all along) says the bottom flange is held too."""
-    fl = _rating_flexure(st)
-    if fl is None or not job.braced or job.restrained:
+    not checked. Listed here; `capacity` posts no rating where the hogging moment at the
+    rated load would pass that lower strength. `restrained = true` (held against twist all
+    along) says the bottom flange is held too."""
+    limits = hogging_limits(job, st)
+    if not limits:
         return []
     ex = moment.extremes()
     big = max(abs(ex.max), abs(ex.min))
     if big <= 0 or ex.min >= -0.01 * big:  # hogging under 1 % of the largest moment: none
-        return []
-    L = job.length
-    tol = 1e-9 * L
-    stops = sorted({0.0, L, *support_braces(job, job.supports)})
-    i = max(0, min(len(stops) - 2, int(np.searchsorted(stops, ex.min_at - tol, "right")) - 1))
-    lb = stops[i + 1] - stops[i]
-    l1 = fl.ltb1(lb)[0]
-    if l1 >= fl.cap:
         return []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     return [Unchecked(
         "lateral-torsional buckling of the bottom flange under hogging moment",
         f"braced = true takes the member as braced all along, but a deck, boards or sheeting "
         f"brace only the flange they sit on; here the moment hogs ({f(ex.min, 'moment')} at "
-        f"{f(ex.min_at)}), so the bottom flange is in compression over an unbraced length of "
-        f"{f(lb)} between supports, where lateral-torsional buckling (Cb 1.0) would lower the "
-        f"bending strength to {l1 / fl.cap:.0%} of the braced figure. That is not checked, so "
-        "no rating is posted: give the bottom flange's brace points with braces = [...] in "
-        "place of braced = true, or write restrained = true if the member is held against "
-        "twist all along",
-        "AISC 360-16 F1, F2 (Lb between braces of the compression flange)")]
+        f"{f(ex.min_at)} under the loads as entered), putting the bottom flange in compression "
+        "where nothing holds it between the supports, and its lateral-torsional buckling is "
+        "not checked. No rating is posted where the hogging moment at the rated load would "
+        "exceed the strength that buckling leaves (Cb 1.0); give the bottom flange's brace "
+        "points with braces = [...] in place of braced = true, or write restrained = true if "
+        "the member is held against twist all along",
+        "AISC 360-16 F1, F2 (Lb between braces of the compression flange)",
+        blocks_rating=False)]
 
 
 # A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does

@@ -21,8 +21,8 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import Evaluation, evaluate, state_set
-from shopbeam.design.analysis import analyze, braced_hogging, cantilever_top_limits, unchecked_for
+from shopbeam.design.loading import Envelopes, Evaluation, evaluate, state_set
+from shopbeam.design.analysis import analyze, cantilever_top_limits, hogging_limits, unchecked_for
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
@@ -123,7 +123,7 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     """Why a capacity must not be posted: every limit state the member calls for that was not
     checked and would block a rating, a load that pushes up unmarked (a sign mistake), and any
     failed self-check of the solve."""
-    out = list(rating_gaps(job, st)) + list(_hogging(job, st, ss))
+    out = list(rating_gaps(job, st))
     bad = sorted({d.name for sol in (ss.fixed, ss.live) for d in sol.diagnostics if not d.ok})
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
@@ -140,9 +140,10 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
                    "(forces are + up, a weight is negative): " + ", ".join(upward)
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
-    if getattr(job, "at_support", ()):
-        out.append("point load(s) on a support go straight into it and load nothing, so a "
-                   "rating would post a load never checked: " + ", ".join(job.at_support)
+    live_at = [k for k in getattr(job, "at_support", ()) if _is_live(job, k)]
+    if live_at:  # a dead one is never posted: its warning says where it went
+        out.append("live point load(s) on a support go straight into it and bend nothing, so "
+                   "a rating would post a load never checked: " + ", ".join(live_at)
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
@@ -154,6 +155,13 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "impact allowance and the lifting deflection limit were not applied. Add "
                    "tags = [\"lifting\"], or the tag \"not-lifting\" if it is not one")
     return tuple(out)
+
+
+def _is_live(job, words: str) -> bool:
+    """Whether the load a `Job.at_support` entry names ("loads[2] (bin) at the pin ...") is
+    live."""
+    key = words.split(" ", 1)[0]
+    return any(ld.key == key and ld.case == "live" for ld in job.loads)
 
 
 def _live_both_ways(job) -> list[str]:
@@ -220,19 +228,31 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
     res = _capacity(job, section, ss, st)
-    return replace(res, not_rated=reasons + _cantilever_top(job, st, ss, res.factor))
+    return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor))
 
 
-def _hogging(job, st, ss) -> tuple[str, ...]:
-    """`analysis.braced_hogging` on the moment of every load on at once (patterned spans
-    too), k = 1."""
-    if not job.braced:
+def _hogging(job, st, ss, k: float) -> tuple[str, ...]:
+    """No rating where, with `braced = true`, the hogging moment at the factor k (over every
+    pattern) would exceed the strength the bottom flange's lateral-torsional buckling leaves
+    over its length between supports (`analysis.hogging_limits`; Cb 1.0, conservative)."""
+    limits = hogging_limits(job, st)
+    if not limits or not math.isfinite(k) or k <= 0:
         return ()
-    co = ss.fixed.moment.coeffs + ss.live.moment.coeffs
-    for sp in ss.spans:
-        co = co + sp.moment.coeffs
-    return tuple(f"{u.name} not checked ({u.clause}): {u.reason}"
-                 for u in braced_hogging(job, st, Piecewise(ss.fixed.moment.breaks, co)))
+    env = Envelopes(ss, k)
+    out = []
+    for a, b, allow in limits:
+        e = env.extreme("moment", False, a, b)
+        if -e.value > allow:
+            f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+            out.append(f"lateral-torsional buckling of the bottom flange under hogging moment "
+                       f"not checked: braced = true, but at the factor found (k = {k:.4g}) the "
+                       f"moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, which exceeds "
+                       f"the {f(allow, 'moment')} the bottom flange's buckling over "
+                       f"{f(a)} to {f(b)} leaves (AISC 360-16 F2, Cb 1.0) if only the top "
+                       "flange is braced. Give the bottom flange's brace points with braces = "
+                       "[...] in place of braced = true, or write restrained = true if the "
+                       "member is held against twist all along")
+    return tuple(out)
 
 
 def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
@@ -242,7 +262,7 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     if not (job.braced or cantilever_top_limits(job, st)):
         return ()
     ss = ss or state_set(job)
-    return _hogging(job, st, ss) + _cantilever_top(job, st, ss, k)
+    return _hogging(job, st, ss, k) + _cantilever_top(job, st, ss, k)
 
 
 def _cantilever_top(job, st, ss, k: float) -> tuple[str, ...]:
@@ -265,7 +285,7 @@ def _cantilever_top(job, st, ss, k: float) -> tuple[str, ...]:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
                        f"loads on the top flange not checked: at the factor found (k = {k:.4g}) "
-                       f"its moment {f(demand, 'moment')} passes the {f(top, 'moment')} that "
+                       f"its moment {f(demand, 'moment')} exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
                        "centre, as checked). Brace the tip (beam.braces), or hang the loads "

@@ -454,8 +454,11 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
 
 
 def _span_forces(job) -> list[str]:
-    """The point loads and wheel sets of the job (concentrated forces between the supports)."""
-    points = [ld.key or "a point load" for ld in job.loads if ld.kind == "point" and ld.value]
+    """The live point loads and wheel sets of the job (concentrated forces between the
+    supports that a rating scales: the ones whose unchecked local effect withholds it; a dead
+    point load keeps its size and is named in the caution instead)."""
+    points = [ld.key or "a point load" for ld in job.loads
+              if ld.kind == "point" and ld.value and ld.case == "live"]
     return points + [ws.key for ws in (getattr(job, "moving", ()) or ())]
 
 
