@@ -1055,13 +1055,16 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
 
 # Words that name a lifting device or its parts; a job that uses one but is not tagged
 # lifting would be checked without the impact allowance and the stricter deflection limit.
+# Words with an everyday shop meaning too (a tackle box, runway lights, lug nuts, a shackle
+# on a shelf) count only in the phrase that names the lifting part.
 NOT_LIFTING = "not-lifting"  # the tag that says a job that reads like one is not a lifting device
 _LIFTING_WORDS = re.compile(
     r"\b(hoists?|hoisting|monorails?|jibs?|cranes?|trolleys?|chain[- ]?falls?|chain[- ]?blocks?|"
     r"lifting|lift beams?|spreaders?|davits?|gantry|gantries|below[- ]the[- ]hook|rigging|"
-    r"block and tackle|tackle|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
-    r"shackles?|sling points?|beam clamps?|runways?|pulleys?|engine (?:pullers?|lifts?)|"
-    r"strongbacks?|strong-backs?|cherry ?pickers?|lugs?)\b",
+    r"block and tackle|tackle blocks?|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
+    r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
+    r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
+    r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
 NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
