@@ -460,3 +460,32 @@ def test_a_dead_point_load_withholds_no_rating_where_a_live_one_would():
         "value", 'case = "dead"\nvalue'))))
     assert not [r for r in dead_on.not_rated if "on a support" in r]
     assert [w for w in dead_on.job.warnings if "support" in w.message]
+
+
+def test_a_job_with_nothing_to_rate_is_not_called_rated():
+    # no live load: no factor (JSON null), and "rated" says no load may be posted
+    text = simple_span('section = "HSS3x2x3/16"\nmaterial = "A500-C"', 6,
+                       uniform_load(6, "-20 lbf/ft").replace("value", 'case = "dead"\nvalue'))
+    cap = capacity(parse_job_text(text))
+    assert math.isinf(cap.factor) and not cap.not_rated and not cap.rated
+    assert capacity(parse_job_text(simple_span('section = "HSS3x2x3/16"\n'
+                                               'material = "A500-C"', 6))).rated
+
+
+def test_a_hand_geared_jib_keeps_the_boom_deflection_limit_and_drops_the_lateral_force():
+    # ASCE 7-16 4.9.3 / 4.9.4 (from memory): a hand-geared device has no impact and no
+    # lateral force; a jib boom is judged at L/225 on twice its reach (common practice)
+    arm = ('schema = 1\ntitle = "davit"\ntags = ["lifting"]\n[beam]\nlength = "4 ft"\n'
+           'section = "W6x15"\nmaterial = "A992"\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+           '[[loads]]\ntype = "point"\nat = "4 ft"\nvalue = "-500 lbf"\n')
+    powered = analyze(parse_job_text(arm))
+    hand = analyze(parse_job_text(arm + '[criteria]\nlifting = "hand-geared-jib"\n'))
+    d = {c.name: c for c in hand.checks}
+    assert "lateral trolley force" in {c.name for c in powered.checks}
+    assert "lateral trolley force" not in d
+    assert d["deflection"].limit == pytest.approx(2 * 4 * 0.3048 / 225, rel=1e-12)
+    # and a tube davit is told to name it (not the monorail profile, whose L/450 would halve
+    # the boom's capacity)
+    tube = capacity(parse_job_text(arm.replace('"W6x15"', '"HSS4x4x1/4"').replace(
+        '"A992"', '"A500-C"')))
+    assert [r for r in tube.not_rated if 'lifting = "hand-geared-jib"' in r]

@@ -97,7 +97,9 @@ class CapacityResult:
 
     @property
     def rated(self) -> bool:
-        return not self.not_rated
+        """A load may be posted: nothing withholds it and there is a factor to post (none
+        when the job has no live loads, or they make no demand)."""
+        return not self.not_rated and math.isfinite(self.factor)
 
     @property
     def checks(self) -> tuple[Check, ...]:

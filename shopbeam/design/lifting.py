@@ -300,6 +300,14 @@ def hoist_loads(sol) -> list:
             if ld.kind == "point" and ld.value and (ld.key or "").startswith("loads")]
 
 
+def _hand_geared(job) -> str:
+    """The hand-geared profile that fits the member: a boom (a free end) or a monorail."""
+    from shopbeam.jobs.rules import has_free_end
+
+    return ("hand-geared-jib" if has_free_end(job.supports, job.length)
+            else "hand-geared-monorail")
+
+
 def _static_hoist(job) -> bool:
     return not job.moving and any(ld.kind == "point" and ld.value for ld in job.loads)
 
@@ -358,7 +366,7 @@ def _first_yield_lateral(job) -> list:
                       "AISC 360-16 H1-1b sum, which needs the bending strength as a moment; the "
                       "first-yield basis checks a stress, so it is not made: use a catalog "
                       "section and material (AISC basis), or name a hand-geared device with "
-                      "[criteria] lifting = \"hand-geared-monorail\" if the trolley is not "
+                      f"[criteria] lifting = \"{_hand_geared(job)}\" if the trolley is not "
                       "powered", "ASCE 7-16 4.9.4; AISC 360-16 H1", blocks_rating=True)]
 
 
@@ -410,7 +418,8 @@ def _lifting_unchecked(job, sec) -> list:
                               f"is not checked for a {sec.shape} ({sec.axis} axis): only the "
                               "bottom flange of an I-beam is checked for it (AISC Design Guide "
                               "7); use an I-beam, or name a hand-geared device with [criteria] "
-                              "lifting = \"hand-geared-monorail\" if the trolley is not powered",
+                              f"lifting = \"{_hand_geared(job)}\" if the trolley is not "
+                              "powered",
                               "ASCE 7-16 4.9.4; AISC 360-16 H1, H3", blocks_rating=True)]
         return out
     out = [Unchecked("flange local bending under trolley wheels",

@@ -502,7 +502,8 @@ def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
               else "AISC 360-16 J10 / K2 (written for steel, not applied to a typed-in metal)")
     return [Unchecked(
         "web crippling and local yielding under concentrated forces",
-        f"the {what} under a support reaction or a point load is not checked for "
+        f"the {what} under a support reaction or a point load "
+        f"{'are' if what.endswith('s') else 'is'} not checked for "
         f"{'aluminium' if mkind == 'aluminum' else 'a typed-in metal'}"
         + (f"; {', '.join(points)} bear on it between the supports and can cripple it first"
            if points else "; the support reactions bear on it")

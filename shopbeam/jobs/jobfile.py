@@ -1122,9 +1122,9 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
     """Lifting words that contradict the job: the jib-boom profile (L/225 on twice the reach)
     named on a member with no free end, where a monorail's L/450 is what a trolley needs; and
     the tags lifting and not-lifting together (it is taken as lifting)."""
-    if (criteria.lifting == "jib-boom" and length is not None and supports
+    if (criteria.lifting in ("jib-boom", "hand-geared-jib") and length is not None and supports
             and not has_free_end(supports, length)):
-        r.warn("lifting = \"jib-boom\" names a cantilever boom, but this member has no free "
+        r.warn(f"lifting = \"{criteria.lifting}\" names a cantilever boom, but this member has no free "
                "end: its deflection limit (L/225 on twice the reach) is for a boom, and a "
                "trolley running between supports needs a monorail's (L/450). Name "
                "\"powered-monorail\" or \"hand-geared-monorail\" if that is what it is",

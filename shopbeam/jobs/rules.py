@@ -65,6 +65,12 @@ LIFTING_PROFILES: dict[str, dict] = {
         "longitudinal": 0.10, "longitudinal_source": "ASCE 7-16 4.9.5: 10 % of the wheel loads",
         "nd": None, "deflection": 225.0,
         "deflection_source": "L/225 on twice the reach for jib booms (common practice)"},
+    "hand-geared-jib": {
+        "impact": 0.0, "impact_source": f"{_ASCE}: hand-geared bridge, trolley and hoist 0 %",
+        "lateral": 0.0, "lateral_source": "ASCE 7-16 4.9.4 applies to powered trolleys only",
+        "longitudinal": 0.10, "longitudinal_source": "ASCE 7-16 4.9.5: 10 % of the wheel loads",
+        "nd": None, "deflection": 225.0,
+        "deflection_source": "L/225 on twice the reach for jib booms (common practice)"},
     "below-the-hook": {
         "impact": 0.0, "impact_source": "ASME BTH-1: the design factor Nd covers impact "
         "(Category A up to 50 % of the rated load, from memory)",
