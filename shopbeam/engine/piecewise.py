@@ -190,11 +190,11 @@ class Piecewise:
             extra_v = np.array([self(lo, "right"), self(hi, "left")])
             xs = np.concatenate([xs[mask], extra_x])
             vs = np.concatenate([vs[mask], extra_v])
-            ends = np.concatenate([self.breaks, extra_x])
+            extra = (float(lo), float(hi))
         else:
-            ends = self.breaks
-        imax = _pick(xs, vs, ends, True)
-        imin = _pick(xs, vs, ends, False)
+            extra = ()
+        imax = _pick(xs, vs, self.breaks, extra, True)
+        imin = _pick(xs, vs, self.breaks, extra, False)
         return Extreme(float(vs[imax]), float(xs[imax]), float(vs[imin]), float(xs[imin]))
 
 
@@ -204,18 +204,26 @@ class Piecewise:
 TIE = 1e-12
 
 
-def _pick(xs: np.ndarray, vs: np.ndarray, ends: np.ndarray, upper: bool) -> int:
+def _pick(xs: np.ndarray, vs: np.ndarray, breaks: np.ndarray, extra: tuple, upper: bool) -> int:
     """Index of the largest (upper) or smallest value. Where an interior turning point and a
-    break tie to rounding, the break is where the extreme is: a flat turning point (a triple
-    root of the derivative, as at the tip of a cantilever under a load tapering to nothing)
-    is found only to the cube root of the rounding, so its position is noise."""
+    break (or an end of the range asked for, `extra`) tie to rounding, the break is where the
+    extreme is: a flat turning point (a triple root of the derivative, as at the tip of a
+    cantilever under a load tapering to nothing) is found only to the cube root of the
+    rounding, so its position is noise."""
     i = int(np.argmax(vs) if upper else np.argmin(vs))
-    if len(xs) < 2 or bool(np.isin(xs[i], ends)):
+    if len(xs) < 2 or _at_break(float(xs[i]), breaks, extra):
         return i
     tol = TIE * float(np.abs(vs).max())
-    tied = (vs >= vs[i] - tol) if upper else (vs <= vs[i] + tol)
-    at_break = tied & np.isin(xs, ends)
-    return int(np.argmax(at_break)) if at_break.any() else i
+    tied = np.flatnonzero((vs >= vs[i] - tol) if upper else (vs <= vs[i] + tol))
+    for j in tied:  # in order of position: the first break that ties
+        if _at_break(float(xs[j]), breaks, extra):
+            return int(j)
+    return i
+
+
+def _at_break(x: float, breaks: np.ndarray, extra: tuple) -> bool:
+    k = int(breaks.searchsorted(x))
+    return (k < len(breaks) and float(breaks[k]) == x) or x in extra
 
 
 def find_candidates(pieces) -> None:
