@@ -132,6 +132,30 @@ async def test_keys_right_behind_ctrl_t_go_into_the_new_support_not_the_length(t
         assert not app.screen_stack[-1].__class__.__name__ == "LengthScreen"
 
 
+@sync
+async def test_a_second_ctrl_t_in_a_row_replaces_the_new_rows_default(tmp_path):
+    # the focus is already in the At field when the second row comes: its default is
+    # selected all the same, so what is typed replaces it (it was appended: "7.5 5 ftft")
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, F4 + CTRL_T + "3 ft" + CTRL_T + "5 ft")
+        loads = app.job_screen.session.rows("loads")
+        assert [ld.get("at") for ld in loads[4:]] == ["3 ft", "5 ft"]
+
+
+def test_ctrl_z_puts_back_every_removal_last_first():
+    s = Session.open(PRESETS / "demo.toml")
+    original = s.doc.text()
+    s.remove_row("supports", 0)
+    s.remove_row("supports", 0)
+    assert s.rows("supports") == []
+    assert s.undo_remove() == ("supports", 0)
+    assert s.undo_remove() == ("supports", 0)
+    assert s.doc.text() == original  # both back, exactly as the file was
+    assert s.undo_remove() is None
+
+
 # ---------------------------------------------------------------------- 3. across a row change
 
 @sync

@@ -742,7 +742,10 @@ class JobScreen(Screen):
     def _focus_row_field(self, view) -> None:
         for f in view.query(".row-form Field"):
             if f.display:
-                self.set_focus(f.input)
+                if self.focused is f.input:  # the same field now shows the new row's value:
+                    f.input.focus_arrived()  # select it, as a focus arriving would
+                else:
+                    self.set_focus(f.input)
                 return
 
     def on_rows_view_row_remove(self, event: RowsView.RowRemove) -> None:
@@ -765,12 +768,13 @@ class JobScreen(Screen):
         self.changed()
 
     def action_undo_remove(self) -> None:
-        """ctrl+z: the last support or load removed comes back at its place."""
+        """ctrl+z: the last support or load removed comes back at its place (again: the one
+        before it)."""
         self.flush_typing()
         back = self.session.undo_remove()
         if back is None:
-            self.notify("ctrl+z puts back the last support or load removed: none was removed.",
-                        timeout=6)
+            self.notify("ctrl+z puts back the supports and loads removed, last first: none is "
+                        "left to put back.", timeout=6)
             return
         table, index = back
         view = self.query("#span" if table == "supports" else "#loads")

@@ -32,7 +32,7 @@ KEYS = [
         ("ctrl+o", "library: open a job"),
         ("ctrl+n", "new job (asks first when there are unsaved changes)"),
         ("ctrl+t / ctrl+x", "supports and loads views: add one / remove the picked one"),
-        ("ctrl+z", "put back the last support or load removed (at its place)"),
+        ("ctrl+z", "put back the supports and loads removed, last first (at their places)"),
         ("ctrl+r / ctrl+p", "calc sheet and rating views: write it to a file / print it"),
         ("tab / shift+tab", "next / previous field (only what is shown)"),
         ("esc", "leave the field (then the digits and letters below work)"),

@@ -253,27 +253,29 @@ class Session:
         return i
 
     def remove_row(self, table: str, index: int) -> None:
-        """Remove one row; `undo_remove` puts the last one removed back."""
+        """Remove one row; `undo_remove` puts the removed ones back, last first."""
         before = self.doc.text()
         row = copy.deepcopy(self.doc.doc[table][index])
         if table == "loads":
             self.doc.remove_load(index)
         else:
             self.doc.remove_support(index)
-        self.removed = (table, index, before, self.doc.text(), row)
+        self.removals = self.removals + [(table, index, before, self.doc.text(), row)]
         self.__dict__.pop("_places", None)  # row indices moved
         self._edited()
 
-    removed = None  # (table, index, text before, text after, the row): the last removal
+    # (table, index, text before, text after, the row) of each removal, the last one last
+    removals: list = []
 
     def undo_remove(self) -> tuple[str, int] | None:
         """Put the last removed row back at its place: with the file exactly as it was
         when nothing was changed since (its comments too), else the row itself (its own
-        line comments) at its old index. (table, index), or None when nothing to undo."""
-        if self.removed is None:
+        line comments) at its old index. (table, index), or None when nothing to undo.
+        Called again, it puts back the one removed before that, and so on."""
+        if not self.removals:
             return None
-        table, index, before, after, row = self.removed
-        self.removed = None
+        table, index, before, after, row = self.removals[-1]
+        self.removals = self.removals[:-1]
         if self.doc.text() == after:
             body, _bom = jobdoc._split_bom(before)
             self.doc.doc = jobdoc._parse(body)
