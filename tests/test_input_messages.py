@@ -400,3 +400,39 @@ def test_supports_written_as_one_table_says_double_brackets():
     text = cantilever("36 in").replace("[[supports]]", "[supports]")
     msg = refused(text)[0].message
     assert "[[supports]]" in msg and "no supports" not in msg
+
+
+@pytest.mark.parametrize("where", ["beam", "support", "load"])
+def test_a_bearing_longer_than_the_member_is_refused(where):
+    # "40 ft" typed for "4 in": the local checks would spread the force over 40 ft and pass
+    from shopbeam.errors import InputErrors
+    from jobtext import point_load, simple_span
+
+    beam = 'section = "HSS3x2x3/16"\nmaterial = "A500-C"'
+    load = point_load(3)
+    if where == "beam":
+        text = simple_span(beam + '\nbearing = "BEARING"', 6, load)
+        key = "beam.bearing"
+    elif where == "support":
+        text = simple_span(beam, 6, load).replace('type = "pin"', 'type = "pin"\n'
+                                                  'bearing = "BEARING"')
+        key = "supports[0].bearing"
+    else:
+        text = simple_span(beam, 6, load.replace("value", 'bearing = "BEARING"\nvalue'))
+        key = "loads[0].bearing"
+    parse_job_text(text.replace("BEARING", "4 in"))  # a seat's few inches: read
+    with pytest.raises(InputErrors) as exc:
+        parse_job_text(text.replace("BEARING", "40 ft"))
+    got = [p for p in exc.value.problems if p.key == key]
+    assert got and "longer than the member" in got[0].message
+
+
+def test_a_load_pasted_twice_is_warned():
+    from jobtext import point_load, simple_span
+
+    beam = 'section = "HSS3x2x3/16"\nmaterial = "A500-C"'
+    job = parse_job_text(simple_span(beam, 6, point_load(3) + point_load(3)))
+    got = [p for p in job.warnings if p.key == "loads[1]"]
+    assert got and "same as loads[0]" in got[0].message
+    other = parse_job_text(simple_span(beam, 6, point_load(3) + point_load(4)))
+    assert not [p for p in other.warnings if "same as" in p.message]

@@ -694,6 +694,34 @@ LOAD_LIMITS = {"point": (1e9, "force"), "moment": (1e10, "moment"),
                "uniform": (1e9, "line_load"), "linear": (1e9, "line_load")}
 
 
+def _twice(r: _Reader, raw_loads) -> None:
+    """A [[loads]] table written twice, key for key (pasted twice): both act, doubling the
+    load. Warned on the second."""
+    seen: dict[str, int] = {}
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        if not _is_table(ld):
+            continue
+        sig = repr(sorted((str(k), repr(v)) for k, v in ld.items()))
+        if sig in seen:
+            r.warn(f"loads[{i}] is the same as loads[{seen[sig]}], key for key: both act, so "
+                   "that load counts twice. Remove one if it was pasted twice, or give each a "
+                   "label if the two are meant", f"loads[{i}]")
+        else:
+            seen[sig] = i
+
+
+def _bearing_fits(r: _Reader, b, length, system: str, key: str):
+    """A bearing length longer than the member is a unit slip ("40 ft" for "4 in"): the
+    local checks would spread the force over it and pass anything. Refused."""
+    if b is not None and length is not None and b > length:
+        r.error(f"bearing {units.fmt(b, 'length', system)} is longer than the member "
+                f"({units.fmt(length, 'length', system)}): it is the length of the seat, plate "
+                "or wheel contact the force comes through, a few inches (e.g. \"4 in\" or "
+                "\"100 mm\"); check the unit", key)
+        return None
+    return b
+
+
 def _plausible_load(r: _Reader, ld: Load) -> bool:
     limit, kind = LOAD_LIMITS[ld.kind]
     size = abs(ld.value) if ld.kind in ("point", "moment") else max(abs(ld.w1), abs(ld.w2))
@@ -1490,7 +1518,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                "against twisting and sideways movement all along, so an "
                                "angle bends about its geometric axis)")
         if "bearing" in beam:
-            bearing = r.parse(beam, "bearing", "length", "beam.bearing", nonnegative=True)
+            bearing = _bearing_fits(r, r.parse(beam, "bearing", "length", "beam.bearing",
+                                               nonnegative=True), length, system, "beam.bearing")
 
     sups = data.get("supports", [])
     supports: list[Support] = []
@@ -1509,7 +1538,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if sup is not None:
             supports.append(sup)
         if _is_table(s) and "bearing" in s:  # bearing length for the local checks
-            b = r.parse(s, "bearing", "length", f"supports[{i}].bearing", nonnegative=True)
+            b = _bearing_fits(r, r.parse(s, "bearing", "length", f"supports[{i}].bearing",
+                                         nonnegative=True), length, system,
+                              f"supports[{i}].bearing")
             if b is not None:
                 bearings[f"supports[{i}]"] = b
             if s.get("type") == "hinge":
@@ -1543,7 +1574,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             loads.append(got)
         if _is_table(ld) and ld.get("type") == "point":  # where it meets the member
             if "bearing" in ld:
-                b = r.parse(ld, "bearing", "length", f"loads[{i}].bearing", nonnegative=True)
+                b = _bearing_fits(r, r.parse(ld, "bearing", "length", f"loads[{i}].bearing",
+                                             nonnegative=True), length, system,
+                                  f"loads[{i}].bearing")
                 if b is not None:
                     bearings[f"loads[{i}]"] = b
             if ld.get("flange") == "bottom":
@@ -1563,6 +1596,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                            "changes nothing", f"loads[{i}].wheels")
                 else:
                     contacts[f"loads[{i}]"] = n
+    _twice(r, raw_loads)
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
