@@ -1169,21 +1169,7 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     ``not-lifting`` says it is not one."""
     if is_lifting(tags, criteria.lifting) or NOT_LIFTING in tags:
         return ""
-    said = []
-    for key, text in (("title", title), ("notes", notes)):
-        m = _LIFTING_WORDS.search(text or "")
-        if m:
-            said.append(f"{key}: {m.group(0)!r}")
-    for t in tags:
-        m = _LIFTING_WORDS.search(t)
-        if m or t in _LIFTING_TAGS:
-            said.append(f"tag {t!r}")
-    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
-        label = ld.get("label") if _is_table(ld) else None
-        m = _LIFTING_WORDS.search(label) if isinstance(label, str) else None
-        if m:
-            said.append(f"loads[{i}] is labelled {label!r}")
-            break
+    said = _words_found(_LIFTING_WORDS, title, notes, tags, raw_loads, _LIFTING_TAGS)
     if moving:
         said.append("it has trolley wheels ([[moving]])")
     if not said:
@@ -1197,6 +1183,24 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     return hint
 
 
+def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
+                 whole_tags=frozenset()) -> list[str]:
+    """Where a job's title, notes, tags (or a tag in `whole_tags`) and first matching load
+    label use one of `words`, in words for a warning."""
+    said = []
+    for key, text in (("title", title), ("notes", notes)):
+        m = words.search(text or "")
+        if m:
+            said.append(f"{key}: {m.group(0)!r}")
+    said += [f"tag {t!r}" for t in tags if words.search(t) or t in whole_tags]
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        label = ld.get("label") if _is_table(ld) else None
+        if isinstance(label, str) and words.search(label):
+            said.append(f"loads[{i}] is labelled {label!r}")
+            break
+    return said
+
+
 def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     """A job that reads like a storage rack ("pallet rack beam", "racking") but is not
     tagged one is warned: the rack cautions (the impact load is not added unless given) and
@@ -1204,17 +1208,7 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     it is not one."""
     if RACK_TAGS.intersection(tags) or NOT_RACK in tags:
         return
-    said = []
-    for key, text in (("title", title), ("notes", notes)):
-        m = _RACK_WORDS.search(text or "")
-        if m:
-            said.append(f"{key}: {m.group(0)!r}")
-    said += [f"tag {t!r}" for t in tags if _RACK_WORDS.search(t)]
-    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
-        label = ld.get("label") if _is_table(ld) else None
-        if isinstance(label, str) and _RACK_WORDS.search(label):
-            said.append(f"loads[{i}] is labelled {label!r}")
-            break
+    said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
     if not said:
         return
     r.warn(f"this reads like a storage rack ({'; '.join(said[:3])}) but is not tagged rack: "
