@@ -233,11 +233,11 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor))
 
 
-def _hogging(job, st, ss, k: float) -> tuple[str, ...]:
+def _hogging(job, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where, with `braced = true`, the hogging moment at the factor k (over every
     pattern) would exceed the strength the bottom flange's lateral-torsional buckling leaves
-    over its length between supports (`analysis.hogging_limits`; Cb 1.0, conservative)."""
-    limits = hogging_limits(job, st)
+    over its length between supports (`limits`: `analysis.hogging_limits`; Cb 1.0,
+    conservative)."""
     if not limits or not math.isfinite(k) or k <= 0:
         return ()
     env = Envelopes(ss, k)
@@ -261,19 +261,20 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     """The reasons not to rate that need the member solved (the bottom flange under hogging
     with braced = true, a cantilever's top-flange loading at the factor k), for a sizing
     sweep's listed rows; `ss` is solved here when None and either can apply."""
-    if not (job.braced or cantilever_top_limits(job, st)):
+    hog, top = hogging_limits(job, st), cantilever_top_limits(job, st)
+    if not (hog or top) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
-    return _hogging(job, st, ss, k) + _cantilever_top(job, st, ss, k)
+    return _hogging(job, hog, ss, k) + _cantilever_top(job, top, ss, k)
 
 
-def _cantilever_top(job, st, ss, k: float) -> tuple[str, ...]:
+def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where the rated load, bearing on an unbraced cantilever's top flange, would
-    pass the lower strength that loading leaves it (`analysis.cantilever_top_limits`). The
-    moment in a cantilever or overhang comes from the loads on it alone, so every load on at
-    the factor (patterned spans too) gives its largest."""
-    limits = cantilever_top_limits(job, st)
-    if not limits or not math.isfinite(k) or k <= 0:
+    exceed the lower strength that loading leaves it (`limits`:
+    `analysis.cantilever_top_limits`). The moment in a cantilever or overhang comes from the
+    loads on it alone, so every load on at the factor (patterned spans too) gives its
+    largest."""
+    if not limits:
         return ()
     kk = k * (1 + ss.parts.impact)
     co = ss.fixed.moment.coeffs + kk * ss.live.moment.coeffs
