@@ -98,9 +98,15 @@ async def test_two_span_shelf_from_scratch_reads_its_reactions():
         await type_into(pilot, app, "job", "title", "Two-span shelf")
         await goto(pilot, "2")
         await type_into(pilot, app, "span", "beam.length", "10 ft")
-        # a new length with supports placed along the beam: asked, and told to scale them
+        # a new length with supports placed along the beam: nothing moves and nothing pops
+        # up; the line at the bottom says so until ctrl+l asks, told here to scale them
         # (the template's roller at 8 ft goes to the new end, 10 ft)
         await pilot.press("tab")
+        await settle(pilot)
+        assert not isinstance(app.screen, LengthScreen)
+        assert "ctrl+l moves them" in text_of(app, "#summary")
+        assert s.rows("supports")[1]["at"] == "8 ft"
+        await pilot.press("ctrl+l")
         await settle(pilot)
         assert isinstance(app.screen, LengthScreen)
         await pilot.press("s")
@@ -188,9 +194,13 @@ async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
         assert len(s.rows("loads")) == 4  # the rest of the job is still there
         await type_keys(pilot, app, "span", "beam.length", " ft", clear=False)
         assert message_of(f) == "= 12 ft"
-        # leaving the field asks what happens to the positions; nothing moved before that
+        # leaving the field moves nothing; ctrl+l asks what happens to the positions
         assert s.rows("loads")[3]["at"] == "15 ft"
         await pilot.press("enter")
+        await settle(pilot)
+        assert not isinstance(app.screen, LengthScreen)
+        assert s.rows("loads")[3]["at"] == "15 ft"
+        await pilot.press("ctrl+l")
         await settle(pilot)
         assert isinstance(app.screen, LengthScreen)
         await pilot.press("e")  # the ends stay at the ends

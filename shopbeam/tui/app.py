@@ -21,7 +21,7 @@ from textual.screen import Screen
 from textual.widgets import ContentSwitcher, Footer, Input, Static
 from textual.worker import get_current_worker
 
-from shopbeam import units
+from shopbeam import escapes, units
 from shopbeam.cautions import is_lifting
 from shopbeam.errors import InputError
 from shopbeam.jobs import library, storage
@@ -31,8 +31,8 @@ from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, Len
 from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
-                                ResultsView, RowsView, SectionView, SpanView, WHEEL_WORDS,
-                                load_warnings, problems_text)
+                                ResultsView, RowList, RowsView, SectionView, SpanView, View,
+                                WHEEL_WORDS, load_warnings, problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
                                   update_text)
 
@@ -121,6 +121,7 @@ class JobScreen(Screen):
         Binding("ctrl+r", "write_sheet", "write to file", priority=True, show=False),
         Binding("ctrl+p", "print_sheet", "print", priority=True, show=False),
         Binding("ctrl+z", "undo_remove", "undo remove", priority=True, show=False),
+        Binding("ctrl+l", "positions", "move positions", priority=True, show=False),
         Binding("f1", "app.help", "keys", priority=True),
         Binding("question_mark", "app.help", "keys", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
@@ -230,6 +231,9 @@ class JobScreen(Screen):
         if self.session.stale and ev.job is None and not ev.problems:
             return "Reading and solving the job ..."
         warn = load_warnings(self.session)[:1]
+        note = self.length_note()
+        if note:  # a length change not settled yet: first, it can move the answer a lot
+            warn = [note] + warn
         if ev.result is None:
             lines = warn + problems_text(ev).splitlines()
             return "\n".join(lines[:3]) + ("\n  ... see 7 Results" if len(lines) > 3 else "")
@@ -349,6 +353,46 @@ class JobScreen(Screen):
                             event.row):
             f.taken(event.value)
 
+    STRAY_WAIT = 0.4  # seconds: keys not used that come closer together make one notice
+
+    def not_typed(self, character: str, where) -> None:
+        """A printable key that nothing took (the focus on a choice, a list or a view, not
+        in a text field): it is not used, and a notice says so, with what was typed, once
+        the burst is over. Typed text never goes missing without a word."""
+        said = self._where(where)
+        if self._stray and said != self._stray_where:
+            self._say_not_typed()
+        self._stray += character
+        self._stray_where = said
+        if self._stray_timer is not None:
+            self._stray_timer.stop()
+        self._stray_timer = self.set_timer(self.STRAY_WAIT, self._say_not_typed)
+
+    _stray = ""
+    _stray_where = ""
+    _stray_timer = None
+
+    def _say_not_typed(self) -> None:
+        text, self._stray = self._stray, ""
+        self._stray_timer = None
+        if not text.strip():
+            return  # spaces alone: nothing worth a notice
+        self.app.bell()
+        self.notify(f"Not typed anywhere: \"{escapes.shown(text)}\". The focus was on "
+                    f"{self._stray_where}, not in a text field. Tab goes to the next field; "
+                    "F2 to F12 change views.", title="keys not used", severity="warning",
+                    timeout=10, markup=False)
+
+    @staticmethod
+    def _where(widget) -> str:
+        if isinstance(widget, Choice):
+            return f"the {widget.label.strip()} choice (its first letters and <- -> pick)"
+        view = next((a for a in widget.ancestors_with_self if isinstance(a, View)), None)
+        name = view.title if view is not None else "job"
+        if isinstance(widget, RowList):
+            return f"the list of the {name} view (up and down pick a row)"
+        return f"the {name} view, no field picked"
+
     def flush_typing(self) -> None:
         """Write what is typed in the fields into the job now, before a key that saves,
         changes view or leaves the job acts on it (their messages may still be queued)."""
@@ -443,22 +487,55 @@ class JobScreen(Screen):
         if event.field.key == "beam.length":
             self.length_settled()
 
-    def length_settled(self) -> None:
+    def length_settled(self, quiet: bool = False) -> None:
         """The length field was left: if the length changed and supports or loads sit along
-        the beam, ask what to do with them. Nothing moves without an answer."""
+        the beam, say so (a notice, and a line under the view until it is settled) and
+        leave every position as typed. ctrl+l asks what to do with them: a question that
+        popped up here would take the next keys of a burst as its answer."""
         s = self.session
         before, now = getattr(self, "_settled_length", None), s.doc.get("beam.length")
+        if now == before:
+            return  # settled already (ctrl+l typed before the field's leaving was noted)
+        try:
+            units.parse(str(now), "length", positive=True)
+        except Exception:  # noqa: BLE001 - not a length yet: settled when it is one
+            return
+        self._settled_length = now
+        if self._length_from is None:
+            try:
+                units.parse(str(before), "length", positive=True)
+                self._length_from = str(before)
+            except Exception:  # noqa: BLE001 - no length before: nothing was placed on it
+                return
+        change = self._length_change()
+        if change is None:
+            self._length_from = None  # back where it was, or nothing placed along the beam
+            return
+        old_text, now_text, _old, _new, placed = change
+        if quiet:
+            return
+        self.notify(f"The length changed from {old_text} to {now_text}. The {len(placed)} "
+                    "positions of supports and loads along the beam stay as typed; ctrl+l "
+                    "moves them with the length or keeps the ends at the ends.",
+                    title="length changed", timeout=15, markup=False)
+        self.refresh_all()
+
+    _length_from = None  # the length the positions were typed for, while not settled
+
+    def _length_change(self):
+        """(old text, new text, old, new, placed) while the length differs from the one the
+        positions were typed for and something sits along the beam; else None."""
+        s = self.session
+        if self._length_from is None:
+            return None
+        now = s.doc.get("beam.length")
         try:
             new = units.parse(str(now), "length", positive=True)
-        except Exception:  # noqa: BLE001 - not a length yet: asked when it is one
-            return
-        try:
-            old = units.parse(str(before), "length", positive=True)
-        except Exception:  # noqa: BLE001
-            old = None
-        self._settled_length = now
-        if old is None or abs(new - old) <= 1e-9 * old:
-            return
+            old = units.parse(self._length_from, "length", positive=True)
+        except Exception:  # noqa: BLE001 - not a length (now): nothing to move yet
+            return None
+        if abs(new - old) <= 1e-9 * old:
+            return None
         placed = []
         for table, keys in (("supports", ("at",)), ("loads", ("at", "start", "end"))):
             for i, row in enumerate(s.rows(table)):
@@ -470,16 +547,38 @@ class JobScreen(Screen):
                     if x > 1e-12:
                         placed.append((table, i, k, x))
         if not placed:
+            return None
+        return self._length_from, str(now), old, new, placed
+
+    def length_note(self) -> str:
+        """The line under the input views while a length change is not settled."""
+        change = self._length_change()
+        if change is None:
+            return ""
+        return f"Length {change[0]} -> {change[1]}: positions kept as typed; ctrl+l moves them"
+
+    def action_positions(self) -> None:
+        """ctrl+l: what happens to the supports and loads after a length change."""
+        self.flush_typing()
+        self.length_settled(quiet=True)  # the length typed right before ctrl+l counts
+        change = self._length_change()
+        if change is None:
+            self._length_from = None
+            self.notify("The length has not changed since the supports and loads were "
+                        "placed (or none sits along the beam): nothing to move.", timeout=6)
             return
+        old_text, now_text, old, new, placed = change
+        s = self.session
         lines = [f"  {t[:-1]} {i + 1} {k} {s.rows(t)[i][k]}" for t, i, k, _x in placed]
         if len(lines) > 8:
             lines = lines[:7] + [f"  ... and {len(lines) - 7} more"]
 
         def answer(choice) -> None:
+            self._length_from = None  # answered (esc: kept as typed)
             self.edit_safely("moving the positions", self.move_positions, choice or "keep",
                              old, new, placed)
 
-        self.app.push_screen(LengthScreen(str(before), str(now), lines), answer)
+        self.app.push_screen(LengthScreen(old_text, now_text, lines), answer)
 
     def move_positions(self, how: str, old: float, new: float, placed) -> None:
         s = self.session
@@ -924,6 +1023,7 @@ class JobScreen(Screen):
         session.deferred = True
         self.session = session
         self._settled_length = session.doc.get("beam.length")
+        self._length_from = None  # another job: its positions are as typed for its length
         self.set_focus(None)
         for f in self.query(Field):
             f.forget_typing()
@@ -994,13 +1094,25 @@ class ShopbeamApp(App):
             if await self._check_bindings(event.key, priority=True):
                 return
             focused = self.focused
+            js = getattr(self, "job_screen", None)
+            on_job = js is not None and self.screen is js
             if isinstance(focused, Choice) and event.is_printable \
                     and focused.type_letter(event.character):
                 return  # chosen now, not queued behind a save typed next
+            if on_job and isinstance(focused, (Choice, RowList)) and event.is_printable \
+                    and event.key not in ("space", "question_mark"):
+                # a choice or a list in a form: a digit or letter typed there is meant
+                # as text, never as a view key (it would switch views and the rest of
+                # the burst would go nowhere); it is not used, and the user is told
+                js.not_typed(event.character or "", focused)
+                return
             if isinstance(focused, Input) and event.is_printable:
                 await focused._on_key(event)  # typed into the field now, not queued
                 return
             if await self._check_bindings(event.key):
+                return
+            if on_job and event.is_printable and event.character:
+                js.not_typed(event.character, focused or js)  # nothing takes it: said
                 return
             (focused or self.screen)._forward_event(event)
             return

@@ -33,14 +33,18 @@ KEYS = [
         ("ctrl+n", "new job (asks first when there are unsaved changes)"),
         ("ctrl+t / ctrl+x", "supports and loads views: add one / remove the picked one"),
         ("ctrl+z", "put back the supports and loads removed, last first (at their places)"),
+        ("ctrl+l", "after a length change: move the supports and loads with it (asks how; "
+                   "until then they stay where typed)"),
         ("ctrl+r / ctrl+p", "calc sheet and rating views: write it to a file / print it"),
         ("tab / shift+tab", "next / previous field (only what is shown)"),
         ("esc", "leave the field (then the digits and letters below work)"),
         ("ctrl+q", "quit (asks first when there are unsaved changes)"),
     ]),
-    ("Outside a text field", [
+    ("With no field picked (after esc or a view key)", [
         ("1 to 9, 0, s", "the views, as numbered in the bar"),
         ("?", "these keys"),
+        ("other keys", "not used: a notice says what was typed (on a choice or a list too: "
+                       "digits there never change the view)"),
     ]),
     ("In a text field", [
         ("type", "the value with its unit: 12 ft, 10' 6\", 1-1/2 in, -300 lbf, -25 lbf/ft"),
@@ -49,11 +53,11 @@ KEYS = [
     ]),
     ("On a choice  [like] this", [
         ("left / right", "change it (space too)"),
-        ("first letter", "jump to that choice"),
+        ("first letter", "jump to that choice (other keys: not used, and said so)"),
     ]),
     ("Supports and loads lists", [
         ("up / down", "pick the one to edit below"),
-        ("a / x", "add one / remove the picked one (ctrl+t / ctrl+x anywhere)"),
+        ("delete", "remove the picked one (ctrl+t / ctrl+x add and remove anywhere)"),
     ]),
     ("Sizing", [("r", "sweep the chosen kind"), ("enter", "use the picked section")]),
     ("Library", [
@@ -129,8 +133,9 @@ class ConfirmScreen(ModalScreen[str]):
 
 
 class LengthScreen(ModalScreen[str]):
-    """The length changed: what happens to the supports and loads? Dismisses "keep",
-    "scale" or "ends". Nothing moves unless the user says so (esc keeps the positions)."""
+    """The length changed: what happens to the supports and loads? Asked on ctrl+l, never
+    by itself (it would take the keys of a burst as its answer). Dismisses "keep", "scale"
+    or "ends". Nothing moves unless the user says so (esc keeps the positions)."""
 
     BINDINGS = [Binding("escape,k", "answer('keep')", "keep positions"),
                 Binding("s", "answer('scale')", "scale"),

@@ -163,11 +163,11 @@ class JobView(View):
 class RowList(OptionList):
     """The supports or loads of the job, one line each; the highlighted one is edited below."""
 
-    # not in the key bar (ctrl+t / ctrl+x are, and F1 lists these): at 80 columns the bar
-    # must keep room for save and quit
+    # not in the key bar (ctrl+t / ctrl+x are, and F1 lists it): at 80 columns the bar
+    # must keep room for save and quit. No letter acts here: a letter typed on the list
+    # is text meant for a field, and the app says it was not used.
     BINDINGS = [
-        Binding("a", "add", "add", show=False),
-        Binding("delete,x", "remove", "remove", show=False),
+        Binding("delete", "remove", "remove", show=False),
     ]
 
     class Add(Message):
