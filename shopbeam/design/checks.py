@@ -955,9 +955,10 @@ def deflection_limits(job, sol: Solution, st: Strengths | None = None,
     return out
 
 
-def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[Check]:
-    """The three contract checks of one solved load state."""
-    fl, sh = st.flexure, st.shear
+def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Check:
+    """The bending check of one solved load state (the first of `checks_for`), alone: for
+    callers that read only it (the allowable moment, one length's check)."""
+    fl = st.flexure
     basis = BASIS_WORDS[st.basis]
     m = sol.moment
     worst = None
@@ -1009,6 +1010,22 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                      f"{basis}: M <= Mn / Omega_b, Mn by {text}, Omega_b {omega:g}", at,
                      detail=seg_words.lstrip("; "), extra={"cb": cb}, params=bend_params,
                      **_provenance(st.basis, text, "bending"))
+    if fl.special:
+        sec = st.section or job.section
+        bend = open_shapes.bending_check(job, sol, st, sec, cb_one) or bend
+    return bend
+
+
+def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
+               bending: bool = True) -> list[Check]:
+    """The three contract checks of one solved load state, then the member's others.
+    `bending=False` leaves the bending check out of the list (a caller that takes it from
+    elsewhere); it is still worked out where another check reads its limit (lifting)."""
+    fl, sh = st.flexure, st.shear
+    basis = BASIS_WORDS[st.basis]
+    lifting_job = bool(job.lifting or getattr(job.criteria, "lifting", ""))
+    bend = bending_check(job, sol, st, cb_one) if bending or lifting_job else None
+    pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     v = sol.shear.extremes()
     allow_v = sh.vn / sh.omega
     shear_params = {"Vn": sh.vn, "Omega": sh.omega, "Av": sh.area}
@@ -1044,12 +1061,10 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
                     if fl.wood is not None else {}),
                  **dict(zip(("clause", "source"), deflection_provenance(job))))
     sec = st.section or job.section
-    if fl.special:
-        bend = open_shapes.bending_check(job, sol, st, sec, cb_one) or bend
     angle_words = open_shapes.deflection_words(job, sec)
     if angle_words:
         defl = replace(defl, formula=f"{defl.formula}; {angle_words}")
-    out = [bend, shear, defl] + local.local_checks(job, sol, sec)
+    out = ([bend] if bending else []) + [shear, defl] + local.local_checks(job, sol, sec)
     if st.live_ratio:
         lsol = _solve_loads(sol, [ld for ld in sol.beam.loads if ld.case != "dead"])
         spans = deflection_limits(job, lsol, st, st.live_ratio)
@@ -1063,7 +1078,7 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False) -> list[
     if fl.wood is not None:
         out += bearing_checks(job, sol, fl.wood)
         out += dead_load_checks(job, sol, st)
-    if job.lifting or getattr(job.criteria, "lifting", ""):
+    if lifting_job:
         wc = lifting.wheel_check(job, sol, sec, job.material)
         if wc is not None:
             out.append(wc)

@@ -34,7 +34,8 @@ from functools import lru_cache
 import numpy as np
 
 from shopbeam import units
-from shopbeam.design.checks import Check, basic_checks, brace_points, checks_for, impact_of
+from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_points, checks_for,
+                                    impact_of)
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
@@ -228,9 +229,10 @@ def state_set(job, section=None, parts: LoadParts | None = None, ei: float | Non
         allpos |= {x for x in brace_points(job)[1] if 0 < x < job.length}
     dummies = tuple(_dummies(allpos))
     # one pass for every unit solution: they share the breaks (every position of every case
-    # is a break of all) and the factorised system
+    # is a break of all) and the factorised system. Their extremes are never read (every
+    # state is a new sum of them), so none are looked for here (found on first use if asked)
     sols = solve_many(empty, [tuple(parts.fixed) + dummies, tuple(parts.live)]
-                      + [tuple(sl) for sl in span_loads], length_fmt)
+                      + [tuple(sl) for sl in span_loads], length_fmt, candidates=False)
     return StateSet(empty, sols[0], sols[1], tuple(sols[2:]), segs, parts, tuple(span_loads))
 
 
@@ -477,7 +479,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
     matter (braced, short, or yielding governs). The governing length's pattern is solved and
     checked for the words and fields of the check.
     """
-    from shopbeam.design.checks import BASIS_WORDS, cb_factor, checks_for, provenance
+    from shopbeam.design.checks import BASIS_WORDS, bending_check, cb_factor, provenance
 
     env = Envelopes(ss, k)
     fmt = _fmt_for(job)
@@ -542,7 +544,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
 
     for p in wanted:
         sol = get(p)
-        for c in checks_for(job, sol, st)[1:]:  # shear, deflection and the local checks
+        for c in checks_for(job, sol, st, bending=False):  # shear, deflection, local checks
             _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
     # local checks (concentrated forces at supports and point loads): each support's largest
     # upward and downward reaction, and every patterned point load on at once
@@ -568,7 +570,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
     p = e_b.pattern
     sol = get(p)
     a, b = st.ltb_segments[idx][:2]
-    c = checks_for(job, sol, replace(st, ltb_segments=(st.ltb_segments[idx],)))[0]
+    c = bending_check(job, sol, replace(st, ltb_segments=(st.ltb_segments[idx],)))
     if not fl.stress_s and not getattr(fl, "special", False):
         c = replace(c, demand=abs(e_b.value), limit=allow, at=e_b.at,
                     formula=f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, "
@@ -1005,7 +1007,7 @@ def _lateral(job, ss, st, mv, k, static_loads):
     wheels = [Load("point", at=mv.travel[0] + s, value=d + k * (1 + ss.parts.impact) * f,
                    label=mv.label, key=mv.key) for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
     sol = solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
-    bend = checks_for(job, sol, st, cb_one=True)[0]
+    bend = bending_check(job, sol, st, cb_one=True)
     if bend.unit != "N*m" or not bend.limit > 0:
         return None
     mny, _ = lifting.flange_weak_strength(sec, job.material)
