@@ -43,7 +43,7 @@ from shopbeam.engine.influence import (candidates, cell_groups, cell_polys, infl
                                        reaction_candidates, reaction_extremes, reaction_polys,
                                        wheel_cells)
 from shopbeam.engine.piecewise import Piecewise
-from shopbeam.engine.piecewise import _horner, _roots_in_pieces
+from shopbeam.engine.piecewise import _horner, _roots_in_pieces, find_candidates
 from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
 
 MAX_PATTERN_SEGMENTS = 10  # 2^10 = 1024 states
@@ -1041,10 +1041,17 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None, pos
     kk = k * (1 + ss.parts.impact)
     if positions is None:
         positions = candidate_positions(job, ss, static_loads, k, cache, st)
+    sols = []
     for p in positions:
         wheels = [Load("point", at=p + s, value=d + kk * f, label=mv.label, key=mv.key)
                   for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
-        yield p, solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
+        sols.append((p, solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)),
+                              candidates=False)))
+    # the extreme candidates of every position's four functions in one batched pass (the
+    # same per function as each solve's own pass: each row's search depends on that row)
+    find_candidates([s.function(n) for _, s in sols
+                     for n in ("shear", "moment", "slope", "deflection")])
+    yield from sols
 
 
 def run_checks(job, sol: Solution) -> list[Check]:

@@ -193,9 +193,27 @@ def _compose(F: np.ndarray, alpha: np.ndarray, beta: np.ndarray) -> np.ndarray:
 
 
 def _eval2d(F: np.ndarray, u: np.ndarray, v: np.ndarray) -> np.ndarray:
-    """F[c] at (u[c], v[c])."""
-    cols = np.stack([_horner(F[:, :, j], u) for j in range(F.shape[2])], axis=1)
+    """F[c] at (u[c], v[c]): Horner in u for every power of v at once, then in v (the same
+    operations, value for value, as one Horner pass in u per column)."""
+    uc = u[:, None]
+    cols = F[:, -1, :] + 0.0 * uc
+    for m in range(F.shape[1] - 2, -1, -1):
+        cols = cols * uc + F[:, m, :]
     return _horner(cols, v)
+
+
+def _eval2d_many(F: np.ndarray, u: np.ndarray, v: np.ndarray) -> np.ndarray:
+    """(N, k): each of k polynomials F[c, i] (N, k, NU', NV') at (u[c], v[c]), as `_eval2d`
+    of each (zero high powers, where one is padded to the others' size, change nothing)."""
+    uc = u[:, None, None]
+    cols = F[:, :, -1, :] + 0.0 * uc
+    for m in range(F.shape[2] - 2, -1, -1):
+        cols = cols * uc + F[:, :, m, :]
+    vc = v[:, None]
+    out = cols[:, :, -1] + 0.0 * vc
+    for m in range(cols.shape[2] - 2, -1, -1):
+        out = out * vc + cols[:, :, m]
+    return out
 
 
 def _colleague_roots(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
@@ -520,9 +538,12 @@ def _newton(F, u, v, al, bl, ah, bh, steps: int = 3):
     Fuu = Fu[:, 1:, :] * np.arange(1, NU - 1)[None, :, None]
     Fuv = Fu[:, :, 1:] * np.arange(1, NV)[None, None, :]
     Fvv = Fv[:, :, 1:] * np.arange(1, NV - 1)[None, None, :]
+    # the five derivatives side by side, each padded with zero high powers: one evaluation
+    D = np.zeros((F.shape[0], 5, NU, NV))
+    for i, G in enumerate((Fu, Fv, Fuu, Fuv, Fvv)):
+        D[:, i, :G.shape[1], :G.shape[2]] = G
     for _ in range(steps):
-        a, b = _eval2d(Fu, u, v), _eval2d(Fv, u, v)
-        h11, h12, h22 = _eval2d(Fuu, u, v), _eval2d(Fuv, u, v), _eval2d(Fvv, u, v)
+        a, b, h11, h12, h22 = _eval2d_many(D, u, v).T
         det = h11 * h22 - h12 * h12
         with np.errstate(all="ignore"):
             du = np.where(det != 0, (h22 * a - h12 * b) / det, 0.0)
