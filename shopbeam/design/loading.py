@@ -304,7 +304,7 @@ class PatternEnvelope:
 
     def pattern(self, row: int, upper: bool) -> tuple[int, ...]:
         on = self.up_on[row] if upper else self.down_on[row]
-        return tuple(int(i) for i in np.flatnonzero(on))
+        return tuple(np.flatnonzero(on).tolist())
 
 
 def build_envelope(ss: "StateSet", name: str) -> PatternEnvelope:
@@ -384,34 +384,51 @@ class Envelopes:
         cache = ss.__dict__.setdefault("_envelopes", {})
         self.env = {}
         self.cand = {}
+        self._memo: dict = {}  # (name, upper, lo, hi) -> EnvelopeExtreme (asked again)
+        self.coeffs: dict = {}  # (name, upper) -> the envelope's coefficients at kk
         for name in ENVELOPE_QUANTITIES:
             if name not in cache:
                 cache[name] = build_envelope(ss, name)
             e = cache[name]
             self.env[name] = e
             for upper in (True, False):
-                self.cand[name, upper] = _extreme_rows(e.breaks, e.coeffs(self.kk, upper))
+                co = self.coeffs[name, upper] = e.coeffs(self.kk, upper)
+                r, x, v = _extreme_rows(e.breaks, co)
+                # each candidate's piece ends, for the region masks
+                self.cand[name, upper] = (r, x, v, e.breaks[r], e.breaks[r + 1])
 
     def extreme(self, name: str, upper: bool, lo: float | None = None,
                 hi: float | None = None) -> EnvelopeExtreme:
         """Largest (upper) or smallest (lower) value over all patterns in [lo, hi]."""
+        key = (name, upper, lo, hi)
+        got = self._memo.get(key)
+        if got is not None:
+            return got
         e = self.env[name]
-        r, x, v = self.cand[name, upper]
+        r, x, v, left, right = self.cand[name, upper]
         if lo is not None or hi is not None:
             tol = 1e-9 * self.ss.beam.length
             lo = e.breaks[0] if lo is None else lo
             hi = e.breaks[-1] if hi is None else hi
-            m = (e.breaks[r] >= lo - tol) & (e.breaks[r + 1] <= hi + tol)
-            r, x, v = r[m], x[m], v[m]
-        i = int(np.argmax(v) if upper else np.argmin(v))
-        return EnvelopeExtreme(float(v[i]), float(x[i]), e.pattern(int(r[i]), upper))
+            m = (left >= lo - tol) & (right <= hi + tol)
+            # the first largest (smallest) of the candidates in the region, as argmax of
+            # the region's own candidates would give
+            i = int(np.argmax(np.where(m, v, -np.inf)) if upper
+                    else np.argmin(np.where(m, v, np.inf)))
+            if not m[i]:  # no candidate in the region
+                raise ValueError(f"no piece of the {name} envelope lies in [{lo}, {hi}]")
+        else:
+            i = int(np.argmax(v) if upper else np.argmin(v))
+        out = EnvelopeExtreme(float(v[i]), float(x[i]), e.pattern(int(r[i]), upper))
+        self._memo[key] = out
+        return out
 
     def abs_value(self, name: str, x: float) -> float:
         """The largest |value| at x over all patterns (both envelopes)."""
         e = self.env[name]
         j = int(np.clip(np.searchsorted(e.breaks, x, side="right") - 1, 0, len(e.breaks) - 2))
         t = np.array([x - e.breaks[j]])
-        return max(abs(float(_horner(e.coeffs(self.kk, u)[j:j + 1], t)[0])) for u in (True, False))
+        return max(abs(float(_horner(self.coeffs[name, u][j:j + 1], t)[0])) for u in (True, False))
 
     def abs_extreme(self, name: str, lo=None, hi=None) -> EnvelopeExtreme:
         a, b = self.extreme(name, True, lo, hi), self.extreme(name, False, lo, hi)
