@@ -47,7 +47,7 @@ from dataclasses import dataclass, replace
 from shopbeam.design.basis import basis_of
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.model import Load
-from shopbeam.engine.solver import solve
+from shopbeam.engine.solver import solve, solve_each
 from shopbeam.jobs.rules import LIFTING_PROFILES, guessed_profile
 from shopbeam.units import fmt
 
@@ -243,8 +243,9 @@ def flange_weak_strength(sec, mat) -> tuple[float, str]:
     return 0.69 * e / lam**2 * sf, "F6-3 (slender flange)"
 
 
-def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
-    """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
+def _flange_loads(job, sol, sec, prof: Profile, impact: float):
+    """(the wheels or hoist loads, the lateral forces on the flange-as-beam) of the lateral
+    trolley force check, or None when it does not apply."""
     if prof is None or not prof.lateral or sec.shape != "i-beam" or sec.axis != "strong":
         return None
     if job.moving:
@@ -266,7 +267,34 @@ def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
             return None
         lat = [Load("point", at=ld.at, value=prof.lateral * abs(
             ld.value if ld.case == "dead" else ld.value / (1 + impact))) for ld in wheels]
-    flange = solve(replace(sol.beam, ei=1.0, loads=tuple(lat)), candidates=False)
+    return wheels, lat
+
+
+def solve_flanges(job, sols, sec, prof: Profile, impact: float) -> None:
+    """The flange-as-beam of each solved state's lateral check solved in one batched pass
+    (`solver.solve_each`, the same numbers as one by one) and kept on the state for
+    `lateral_check` (many trolley positions are checked in turn)."""
+    beams, owners = [], []
+    for sol in sols:
+        got = _flange_loads(job, sol, sec, prof, impact)
+        if got is not None:
+            beams.append(replace(sol.beam, ei=1.0, loads=tuple(got[1])))
+            owners.append(sol)
+    if not beams:
+        return
+    for sol, beam, flange in zip(owners, beams, solve_each(beams)):
+        sol.__dict__["_flange"] = (beam, flange)
+
+
+def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
+    """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
+    got = _flange_loads(job, sol, sec, prof, impact)
+    if got is None:
+        return None
+    wheels, lat = got
+    beam = replace(sol.beam, ei=1.0, loads=tuple(lat))
+    kept = sol.__dict__.get("_flange")  # solved with the other positions (solve_flanges)
+    flange = kept[1] if kept is not None and kept[0] == beam else solve(beam, candidates=False)
     mny, how = flange_weak_strength(sec, mat)
     mcy = mny / 1.67
     # the sum |Mx| / Mcx + |My| / Mcy peaks at a wheel, a support (a cantilever's root, a

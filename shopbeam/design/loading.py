@@ -44,7 +44,7 @@ from shopbeam.engine.influence import (candidates, cell_groups, cell_polys, infl
                                        wheel_cells)
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces, find_candidates
-from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_many
+from shopbeam.engine.solver import Reaction, Solution, segments, solve, solve_each, solve_many
 
 MAX_PATTERN_SEGMENTS = 10  # 2^10 = 1024 states
 
@@ -1058,12 +1058,19 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None, pos
     kk = k * (1 + ss.parts.impact)
     if positions is None:
         positions = candidate_positions(job, ss, static_loads, k, cache, st)
-    sols = []
+    beams = []
     for p in positions:
         wheels = [Load("point", at=p + s, value=d + kk * f, label=mv.label, key=mv.key)
                   for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
-        sols.append((p, solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)),
-                              candidates=False)))
+        beams.append(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
+    # one batched march and one stack of linear systems for every position (each the same
+    # numbers as its own solve)
+    sols = list(zip(positions, solve_each(beams)))
+    if (job.lifting or getattr(job.criteria, "lifting", "")) and not st.flexure.stress_s:
+        from shopbeam.design import lifting  # the lateral check's flange-as-beam, batched too
+
+        lifting.solve_flanges(job, [s for _, s in sols], getattr(st, "section", None)
+                              or job.section, lifting.profile_of(job), impact_of(job))
     # the extreme candidates of every position's four functions in one batched pass (the
     # same per function as each solve's own pass: each row's search depends on that row)
     find_candidates([s.function(n) for _, s in sols

@@ -365,6 +365,20 @@ _TK, _TM = (np.array(v) for v in zip(*[(k, m) for k in range(_NLEV) for m in ran
 _FACT = np.array([math.factorial(m) for m in range(_NLEV)], dtype=float)
 
 
+def _march_many(breaks: np.ndarray, jumps: np.ndarray) -> np.ndarray:
+    """`_march` of a stack of beams with as many breaks each: (beams, P + 1, 6, ncol)."""
+    n, nb = breaks.shape
+    h = np.diff(breaks, axis=1)
+    tm = _taylor(h.ravel()).reshape(n, nb - 1, _NLEV, _NLEV)
+    states = np.empty_like(jumps)
+    s = jumps[:, 0]
+    states[:, 0] = s
+    for j in range(nb - 1):
+        s = tm[:, j] @ s + jumps[:, j + 1]
+        states[:, j + 1] = s
+    return states
+
+
 def _march(breaks: np.ndarray, jumps: np.ndarray) -> np.ndarray:
     """States just right of every break: (P + 1, 6, ncol)."""
     h = np.diff(breaks)
@@ -419,8 +433,10 @@ def solve(beam: Beam, length_fmt=None, exact: bool | None = None,
     return sol
 
 
-def _solve(beam: Beam, length_fmt, exact: bool | None, candidates: bool = True) -> Solution:
-    L, ei = beam.length, beam.ei
+def _setup(beam: Beam):
+    """The unknowns, breaks and bracket-term jumps of one beam: (unknowns, index, breaks,
+    where, t_pow, t_col, t_coef, jumps, sup_break)."""
+    L = beam.length
     unknowns = _unknowns(beam)
     nz = len(unknowns)
     index = {id(u): i for i, u in enumerate(unknowns)}
@@ -440,48 +456,66 @@ def _solve(beam: Beam, length_fmt, exact: bool | None, candidates: bool = True) 
     jumps = np.zeros((len(breaks), _NLEV, nz + 1))
     # each term c<x-a>^n jumps state level -n by c (ramps n = 1 jump q' by c)
     np.add.at(jumps, (where, -t_pow + 1, t_col), t_coef)
-    states = _march(breaks, jumps)
     sup_break = {i: int(np.searchsorted(breaks, x)) for i, x in sup_at.items()}
+    return unknowns, index, breaks, where, t_pow, t_col, t_coef, jumps, sup_break
+
+
+def _system(beam: Beam, unknowns, index, sup_break, states, one, ratio):
+    """Rows and right-hand side of the conditions, from the states (float or exact)."""
+    rows, rhs = [], []
+
+    def cond(vec):
+        rows.append(vec[1:])
+        rhs.append(-vec[0])
+
+    ei = beam.ei
+    end = states[-1]
+    cond(end[_IDX["V"]])  # V(L+) = 0
+    cond(end[_IDX["M"]])  # M(L+) = 0
+    for u in unknowns:
+        if u.kind == "c1" or u.kind == "c2":
+            continue
+        sup = beam.supports[u.support]
+        st = states[sup_break[u.support]]
+        if u.kind == "force":
+            if sup.kind == "spring":
+                vec = st[_IDX["EIu"]] * ratio(sup.stiffness, ei)
+                vec[1 + index[id(u)]] += one  # R + k u = 0
+                cond(vec)
+            else:
+                cond(st[_IDX["EIu"]])
+        elif u.kind == "moment":
+            cond(st[_IDX["EIt"]])
+        elif u.kind == "hinge":
+            cond(st[_IDX["M"]])
+    return rows, rhs
+
+
+def _equilibrated(a: np.ndarray) -> tuple[np.ndarray, np.ndarray, np.ndarray]:
+    """Rows and columns of the system (or of a stack of them) scaled to a largest entry of 1
+    (units differ: N, N*m, N*m^2, N*m^3): (scaled matrix, row scales, column scales)."""
+    rs = np.max(np.abs(a), axis=-1)
+    rs[~(rs > 0)] = 1.0
+    a1 = a / rs[..., None]
+    cs = np.max(np.abs(a1), axis=-2)
+    cs[~(cs > 0)] = 1.0
+    return a1 / cs[..., None, :], rs, cs
+
+
+def _solve(beam: Beam, length_fmt, exact: bool | None, candidates: bool = True) -> Solution:
+    L = beam.length
+    unknowns, index, breaks, where, t_pow, t_col, t_coef, jumps, sup_break = _setup(beam)
+    nz = len(unknowns)
+    states = _march(breaks, jumps)
 
     def system(states, one, ratio):
-        """Rows and right-hand side of the conditions, from the states (float or exact)."""
-        rows, rhs = [], []
-
-        def cond(vec):
-            rows.append(vec[1:])
-            rhs.append(-vec[0])
-
-        end = states[-1]
-        cond(end[_IDX["V"]])  # V(L+) = 0
-        cond(end[_IDX["M"]])  # M(L+) = 0
-        for u in unknowns:
-            if u.kind == "c1" or u.kind == "c2":
-                continue
-            sup = beam.supports[u.support]
-            st = states[sup_break[u.support]]
-            if u.kind == "force":
-                if sup.kind == "spring":
-                    vec = st[_IDX["EIu"]] * ratio(sup.stiffness, ei)
-                    vec[1 + index[id(u)]] += one  # R + k u = 0
-                    cond(vec)
-                else:
-                    cond(st[_IDX["EIu"]])
-            elif u.kind == "moment":
-                cond(st[_IDX["EIt"]])
-            elif u.kind == "hinge":
-                cond(st[_IDX["M"]])
-        return rows, rhs
+        return _system(beam, unknowns, index, sup_break, states, one, ratio)
 
     rows, rhs = system(states, 1.0, lambda k, e: k / e)
     a = np.array(rows)
     b = np.array(rhs)
-    # equilibrate rows and columns before solving (units differ: N, N*m, N*m^2, N*m^3)
-    rs = np.max(np.abs(a), axis=1)
-    rs[~(rs > 0)] = 1.0
-    a1 = a / rs[:, None]
-    cs = np.max(np.abs(a1), axis=0)
-    cs[~(cs > 0)] = 1.0
-    a2 = a1 / cs[None, :]
+    # equilibrate rows and columns before solving
+    a2, rs, cs = _equilibrated(a)
     try:
         y = np.linalg.solve(a2, b / rs)
         condition = float(np.linalg.cond(a2))
@@ -506,6 +540,66 @@ def _solve(beam: Beam, length_fmt, exact: bool | None, candidates: bool = True) 
     w = np.concatenate([[1.0], z])
     final = states @ w  # (P + 1, 6)
     return _finish(beam, breaks, final, z, unknowns, condition, False, candidates)
+
+
+def _finite(sol: Solution) -> bool:
+    return (all(np.all(np.isfinite(f.coeffs)) for f in
+                (sol.load, sol.shear, sol.moment, sol.slope, sol.deflection))
+            and all(math.isfinite(r.force) and math.isfinite(r.moment) for r in sol.reactions))
+
+
+def solve_each(beams, length_fmt=None) -> list[Solution]:
+    """`solve(beam, candidates=False)` of each beam, value for value, with the march and the
+    linear systems of beams of one shape (the same supports, as many breaks) done in one
+    batched pass each (stacked matrix products and LAPACK calls, one per beam inside). Any
+    beam the fast path does not settle at once (a problem in its input, an ill-conditioned
+    or singular system, an overflow) is solved by `solve` itself, which says what is wrong
+    exactly as it would have."""
+    beams = list(beams)
+    out: list[Solution | None] = [None] * len(beams)
+    groups: dict = {}
+    for i, beam in enumerate(beams):
+        if validate_geometry(beam):
+            continue
+        with np.errstate(all="ignore"):
+            got = _setup(beam)
+        key = (id(beam.supports), beam.supports, len(got[2]), beam.length, beam.ei)
+        groups.setdefault(key, []).append((i, got))
+    for members in groups.values():
+        idx = [i for i, _ in members]
+        sets = [g for _, g in members]
+        with np.errstate(all="ignore"):
+            breaks = np.stack([g[2] for g in sets])
+            jumps = np.stack([g[7] for g in sets])
+            states = _march_many(breaks, jumps)
+            a, b = [], []
+            for (unknowns, index, _, _, _, _, _, _, sup_break), st, i in zip(sets, states, idx):
+                rows, rhs = _system(beams[i], unknowns, index, sup_break, st, 1.0,
+                                    lambda k, e: k / e)
+                a.append(rows)
+                b.append(rhs)
+            a2, rs, cs = _equilibrated(np.array(a))
+            try:
+                y = np.linalg.solve(a2, (np.array(b) / rs)[..., None])[..., 0]
+                conds = np.linalg.cond(a2)
+            except np.linalg.LinAlgError:
+                continue  # each on its own below
+            for n, i in enumerate(idx):
+                condition = float(conds[n])
+                if not (math.isfinite(condition) and condition <= ILL):
+                    continue
+                unknowns, breaks_i = sets[n][0], sets[n][2]
+                z = y[n] / cs[n]
+                w = np.concatenate([[1.0], z])
+                final = states[n] @ w
+                sol = _finish(beams[i], breaks_i, final, z, unknowns, condition, False,
+                              candidates=False)
+                if _finite(sol):
+                    out[i] = sol
+    for i, sol in enumerate(out):
+        if sol is None:
+            out[i] = solve(beams[i], length_fmt, candidates=False)
+    return out
 
 
 def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> list[Solution]:

@@ -1,0 +1,189 @@
+"""Batched and shortened paths of the moving-load and pattern checks give what the one-by-one
+paths give, number for number (not merely close): the batched solver, the batched
+flange-as-beam of the lateral trolley check, the bending check on its own, the envelope's
+region extremes and the influence polynomials' evaluation."""
+
+from __future__ import annotations
+
+from dataclasses import replace
+from pathlib import Path
+
+import numpy as np
+import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
+
+from shopbeam.design import lifting, loading
+from shopbeam.design.checks import bending_check, checks_for, impact_of, strengths
+from shopbeam.engine.influence import _eval2d, _eval2d_many
+from shopbeam.engine.model import Beam, Load, Support
+from shopbeam.engine.piecewise import _horner
+from shopbeam.engine.solver import solve, solve_each
+from shopbeam.errors import InputError, UnstableBeam
+from shopbeam.jobs.jobfile import load_job, parse_job_text
+
+PRESETS = Path(__file__).resolve().parent.parent / "presets"
+
+
+def same_solution(a, b) -> None:
+    for name in ("load", "shear", "moment", "slope", "deflection"):
+        fa, fb = a.function(name), b.function(name)
+        assert np.array_equal(fa.breaks, fb.breaks)
+        assert np.array_equal(fa.coeffs, fb.coeffs), name
+    assert a.reactions == b.reactions
+    assert a.hinge_rotations == b.hinge_rotations
+    assert (a.ei_slope_0, a.ei_deflection_0) == (b.ei_slope_0, b.ei_deflection_0)
+    assert a.condition == b.condition and a.exact == b.exact
+
+
+SUPPORTS = {
+    "simple": lambda L: (Support(0.0, "pin"), Support(L, "roller")),
+    "cantilever": lambda L: (Support(0.0, "fixed"),),
+    "propped": lambda L: (Support(0.0, "fixed"), Support(L, "roller")),
+    "three spans": lambda L: tuple(Support(L * i / 3, "pin" if i == 0 else "roller")
+                                   for i in range(4)),
+    "spring and hinge": lambda L: (Support(0.0, "fixed"), Support(0.4 * L, "hinge"),
+                                   Support(0.7 * L, "spring", stiffness=3e5),
+                                   Support(L, "roller")),
+}
+
+
+@settings(max_examples=60, deadline=None, derandomize=True)
+@given(st.sampled_from(sorted(SUPPORTS)), st.floats(1.0, 12.0),
+       st.lists(st.tuples(st.floats(0.0, 1.0), st.floats(-5e4, 5e4)), min_size=1, max_size=4),
+       st.lists(st.floats(0.0, 1.0), min_size=1, max_size=6), st.booleans())
+def test_solve_each_is_each_solve(kind, L, wheels, positions, uniform):
+    """Wheel sets at several positions on one beam (some sharing their number of breaks,
+    some not: a wheel on a support or at an end merges breaks) solve as one by one."""
+    sups = SUPPORTS[kind](L)
+    base = (Load("uniform", start=0.0, end=L, w1=-800.0, case="dead"),) if uniform else ()
+    span = max(d for d, _ in wheels) * 0.3 * L
+    beams = []
+    for p in positions:
+        first = p * (L - span)
+        loads = tuple(Load("point", at=min(first + d * 0.3 * L, L), value=v) for d, v in wheels)
+        beams.append(Beam(L, 2.1e6, sups, base + loads))
+    beams.append(Beam(L, 2.1e6, sups, base + (Load("point", at=0.0, value=-1.0),)))
+    for beam, got in zip(beams, solve_each(beams)):
+        same_solution(got, solve(beam, candidates=False))
+
+
+def test_solve_each_says_what_solve_says():
+    L = 4.0
+    sups = (Support(0.0, "pin"), Support(L, "roller"))
+    good = Beam(L, 1e6, sups, (Load("point", at=1.0, value=-10.0),))
+    off = Beam(L, 1e6, sups, (Load("point", at=5.0, value=-10.0),))  # off the member
+    with pytest.raises(InputError) as one:
+        solve(off)
+    with pytest.raises(InputError) as batch:
+        solve_each([good, off])
+    assert str(batch.value) == str(one.value)
+    loose = Beam(L, 1e6, (Support(1.0, "pin"),), (Load("point", at=1.0, value=-10.0),))
+    with pytest.raises(UnstableBeam):
+        solve_each([good, loose])
+
+
+def test_ill_conditioned_beams_go_the_exact_way_as_alone():
+    L = 10.0
+    sups = (Support(0.0, "pin"), Support(L * (1 - 2e-9), "roller"), Support(L, "roller"))
+    beams = [Beam(L, 1e6, sups, (Load("point", at=a, value=-10.0),)) for a in (2.0, 3.0)]
+    for beam, got in zip(beams, solve_each(beams)):
+        same_solution(got, solve(beam, candidates=False))
+
+
+def trolley_states():
+    job = load_job(PRESETS / "monorail-trolley.toml")
+    ss = loading.state_set(job)
+    st_ = strengths(job, beam=ss.beam)
+    static = ss.static_loads(1.0, ())
+    env = loading.moving_envelope(job, ss, static, 1.0, st_, pattern=())
+    return job, ss, st_, list(loading.moving_states(job, ss, static, 1.0, st_,
+                                                    positions=env.positions))
+
+
+def test_trolley_positions_and_their_lateral_checks_as_one_by_one():
+    job, ss, st_, states = trolley_states()
+    assert len(states) > 3
+    sec = job.section
+    for p, sol in states:
+        alone = solve(sol.beam)
+        same_solution(sol, alone)
+        for name in ("shear", "moment", "slope", "deflection"):  # the batched candidates
+            a, b = sol.function(name).extremes(), alone.function(name).extremes()
+            assert a == b
+        assert "_flange" in sol.__dict__  # solved with the other positions
+        mcx = bending_check(job, sol, st_, cb_one=True).limit
+        kept = lifting.lateral_check(job, sol, sec, job.material, lifting.profile_of(job),
+                                     impact_of(job), mcx)
+        fresh = replace(sol)  # the same state without the kept flange: solved alone
+        assert "_flange" not in fresh.__dict__
+        assert kept == lifting.lateral_check(job, fresh, sec, job.material,
+                                             lifting.profile_of(job), impact_of(job), mcx)
+
+
+@pytest.mark.parametrize("preset", ["monorail-trolley.toml", "continuous-shelf.toml",
+                                    "jib-arm.toml", "lumber-rack-arm.toml",
+                                    "wall-shelf-brackets.toml"])
+def test_bending_check_alone_is_the_first_check(preset):
+    job = load_job(PRESETS / preset)
+    sol = solve(job.beam())
+    st_ = strengths(job, beam=sol.beam)
+    for cb_one in (False, True):
+        every = checks_for(job, sol, st_, cb_one=cb_one)
+        assert bending_check(job, sol, st_, cb_one=cb_one) == every[0]
+        assert checks_for(job, sol, st_, cb_one=cb_one, bending=False) == every[1:]
+
+
+def test_envelope_region_extremes_as_the_region_alone():
+    sup = "".join(f'[[supports]]\nat = "{4 * i} ft"\ntype = "{"pin" if i == 0 else "roller"}"\n'
+                  for i in range(7))
+    job = parse_job_text(f"""schema = 1
+title = "six-span shelf"
+[beam]
+length = "24 ft"
+section = "HSS3x2x3/16"
+material = "A500B"
+braces = ["6 ft", "14 ft"]
+{sup}
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "24 ft"
+value = "-150 lbf/ft"
+patterned = true
+
+[[loads]]
+type = "point"
+at = "9 ft"
+value = "-300 lbf"
+patterned = true
+""")
+    ss = loading.state_set(job)
+    env = loading.Envelopes(ss, 1.7)
+    for name in loading.ENVELOPE_QUANTITIES:
+        e = env.env[name]
+        for upper in (True, False):
+            r, x, v, _, _ = env.cand[name, upper]
+            for a, b, _ in list(ss.segs) + [(ss.segs[0][0], ss.segs[-1][1], "")]:
+                tol = 1e-9 * ss.beam.length
+                m = (e.breaks[r] >= a - tol) & (e.breaks[r + 1] <= b + tol)
+                rr, xx, vv = r[m], x[m], v[m]
+                i = int(np.argmax(vv) if upper else np.argmin(vv))
+                got = env.extreme(name, upper, a, b)
+                assert (got.value, got.at) == (float(vv[i]), float(xx[i]))
+                assert got.pattern == tuple(int(j) for j in np.flatnonzero(
+                    (e.up_on if upper else e.down_on)[int(rr[i])]))
+
+
+def test_influence_polynomials_evaluate_as_column_by_column():
+    rng = np.random.default_rng(7)
+    F = rng.normal(size=(40, 6, 4)) * 10.0 ** rng.integers(-6, 6, size=(40, 1, 1))
+    u, v = rng.uniform(-0.2, 1.2, 40), rng.uniform(-0.2, 1.2, 40)
+    cols = np.stack([_horner(F[:, :, j], u) for j in range(4)], axis=1)
+    assert np.array_equal(_eval2d(F, u, v), _horner(cols, v))
+    G = np.zeros((40, 2, 6, 4))
+    G[:, 0] = F
+    G[:, 1, :4, :3] = F[:, :4, :3]
+    both = _eval2d_many(G, u, v)
+    assert np.array_equal(both[:, 0], _eval2d(F, u, v))
+    assert np.array_equal(both[:, 1], _eval2d(F[:, :4, :3], u, v))
