@@ -14,9 +14,11 @@ import pytest
 
 from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
 from shopbeam.tui.app import JobScreen, make_app  # noqa: E402
-from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, LengthScreen,  # noqa: E402
-                                  LibraryScreen)
+from shopbeam.tui.screens import (AnswerScreen, ConfirmScreen, ConflictScreen,  # noqa: E402
+                                  LengthScreen, LibraryScreen)
 from shopbeam.tui.widgets import Field  # noqa: E402
+
+READ = AnswerScreen.READ_TIME  # a question takes answers only after this long on screen
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
 SIZE = (100, 32)
@@ -109,6 +111,7 @@ async def test_two_span_shelf_from_scratch_reads_its_reactions():
         await pilot.press("ctrl+l")
         await settle(pilot)
         assert isinstance(app.screen, LengthScreen)
+        await pilot.pause(READ)
         await pilot.press("s")
         await settle(pilot)
         assert [r["at"] for r in s.rows("supports")] == ["0 ft", "10 ft"]
@@ -203,6 +206,7 @@ async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
         await pilot.press("ctrl+l")
         await settle(pilot)
         assert isinstance(app.screen, LengthScreen)
+        await pilot.pause(READ)
         await pilot.press("e")  # the ends stay at the ends
         await settle(pilot)
         # what sat at the old end (15 ft: the stair load, the deck's end) went to the new
@@ -264,6 +268,7 @@ async def test_save_conflict_shows_the_diff_and_can_overwrite(tmp_path):
         await pilot.pause()
         assert isinstance(app.screen, ConflictScreen)
         assert "# theirs" in app.screen.conflict.diff
+        await pilot.pause(READ)  # a key made sooner is not taken as the answer
         await pilot.press("o")
         await pilot.pause()
         assert isinstance(app.screen, JobScreen)
@@ -297,7 +302,7 @@ async def test_quit_with_unsaved_changes_asks_first():
         await pilot.pause()
         assert isinstance(app.screen, JobScreen) and app.is_running
         await pilot.press("ctrl+q")
-        await pilot.pause()
+        await pilot.pause(READ)
         await pilot.press("d")
         await pilot.pause()
     assert app.return_code == 0 or app.return_code is None
@@ -367,6 +372,7 @@ async def test_library_search_and_the_guard_on_opening_another_job():
         await pilot.press("enter")
         await pilot.pause()
         assert isinstance(app.screen, ConfirmScreen)  # unsaved changes: asked first
+        await pilot.pause(READ)
         await pilot.press("d")
         await pilot.pause()
         s = app.job_screen.session

@@ -420,6 +420,7 @@ async def test_the_length_question_leaves_the_safety_caution_in_sight(tmp_path):
         assert type(app.screen).__name__ == "LengthScreen"
         top = app.screen.get_widget_at(2, 0)[0]
         assert type(top).__name__ == "Banner" and SHORT in str(top.render())
+        await pilot.pause(app.screen.READ_TIME)
         await burst(pilot, "k")
         await pilot.press("f1")
         await settle(pilot)
@@ -543,6 +544,7 @@ async def test_a_new_length_asks_nothing_by_itself_so_a_burst_goes_on_into_the_n
         # asked on ctrl+l: the support at the old end goes to the new end
         await burst(pilot, CTRL_L)
         assert type(app.screen).__name__ == "LengthScreen"
+        await pilot.pause(app.screen.READ_TIME)
         await burst(pilot, "e")
         assert type(app.screen).__name__ == "JobScreen"
         assert s.rows("loads")[3]["at"] == "16 ft" and s.rows("loads")[0]["end"] == "16 ft"
@@ -567,3 +569,49 @@ async def test_a_length_changed_and_changed_back_leaves_nothing_to_settle(tmp_pa
         assert "ctrl+l" not in str(app.job_screen.query_one("#summary").render())
         await burst(pilot, CTRL_L)
         assert type(app.screen).__name__ == "JobScreen"
+
+
+@sync
+async def test_a_save_conflict_met_mid_burst_takes_none_of_the_burst_as_its_answer(tmp_path):
+    # ctrl+s, then typing on: the file had changed on disk, so a question came up, and the
+    # "o" and "n" of the words typed behind the save were its answers (overwrite the other
+    # person's change, or save as). Keys made before it could be read go to the field.
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Mine")
+        theirs = path.read_text(encoding="utf-8").replace("[beam]", "# theirs\n[beam]")
+        path.write_text(theirs, encoding="utf-8")
+        await burst(pilot, "\x13" + " on hold")  # ctrl+s, then " on hold" right behind it
+        assert type(app.screen).__name__ == "ConflictScreen"
+        assert path.read_text(encoding="utf-8") == theirs  # nothing overwritten
+        assert f.input.value == "Mine on hold"  # the burst went on into the title
+        await pilot.pause(app.screen.READ_TIME)
+        await burst(pilot, "\x1b")  # read, then answered: cancel
+        await pilot.pause()
+        assert type(app.screen).__name__ == "JobScreen"
+        assert path.read_text(encoding="utf-8") == theirs
+        assert app.job_screen.session.doc.get("title") == "Mine on hold"
+
+
+@sync
+async def test_a_quit_question_read_and_answered_still_takes_its_key(tmp_path):
+    # the other side of the rule above: a key made after the question was on screen long
+    # enough to be read is its answer
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Changed" + "\x11" + "d")  # ctrl+q, "d" right behind
+        assert type(app.screen).__name__ == "ConfirmScreen" and app.is_running
+        assert f.input.value == "Changedd"
+        await pilot.pause(app.screen.READ_TIME)
+        await burst(pilot, "d")
+        await pilot.pause()
+    assert app.return_code in (0, None) and not app.is_running

@@ -26,8 +26,8 @@ from shopbeam.cautions import is_lifting
 from shopbeam.errors import InputError
 from shopbeam.jobs import library, storage
 from shopbeam.tui import session as session_mod
-from shopbeam.tui.screens import (ConfirmScreen, ConflictScreen, HelpScreen, LengthScreen,
-                                  LibraryScreen, SaveAsScreen)
+from shopbeam.tui.screens import (AnswerScreen, ConfirmScreen, ConflictScreen, HelpScreen,
+                                  LengthScreen, LibraryScreen, SaveAsScreen)
 from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
@@ -352,6 +352,34 @@ class JobScreen(Screen):
         if self.edit_safely(f"the edit of {f.label}", self.apply_edit, f.key, event.value,
                             event.row):
             f.taken(event.value)
+
+    async def key_behind(self, event) -> None:
+        """A key that reached a question before it could be read (see `AnswerScreen`): it
+        does here what it would have done had the question come after it. Text goes into
+        the field that has the focus, Tab and Enter move on, Backspace and the arrows edit;
+        a key with nowhere to go is named in the notice of keys not used."""
+        focused = self.focused
+        if isinstance(focused, Input):
+            if event.is_printable:
+                await focused._on_key(event)
+                return
+            if event.key == "enter":
+                await focused.action_submit()
+                return
+            for binding in focused._bindings.key_to_bindings.get(event.key, ()):
+                await focused.run_action(binding.action)
+                return
+        if event.key == "tab":
+            self.focus_next()
+            return
+        if event.key == "shift+tab":
+            self.focus_previous()
+            return
+        if isinstance(focused, Choice) and event.is_printable \
+                and focused.type_letter(event.character):
+            return
+        if event.is_printable and event.character:
+            self.not_typed(event.character, focused or self)
 
     STRAY_WAIT = 0.4  # seconds: keys not used that come closer together make one notice
 
@@ -1096,6 +1124,10 @@ class ShopbeamApp(App):
             focused = self.focused
             js = getattr(self, "job_screen", None)
             on_job = js is not None and self.screen is js
+            if js is not None and isinstance(self.screen, AnswerScreen) \
+                    and self.screen.too_early(event):
+                await js.key_behind(event)  # typed before the question could be read
+                return
             if isinstance(focused, Choice) and event.is_printable \
                     and focused.type_letter(event.character):
                 return  # chosen now, not queued behind a save typed next

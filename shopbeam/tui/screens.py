@@ -9,6 +9,7 @@ import textwrap
 from pathlib import Path
 
 from rich.text import Text
+from textual import _time
 from textual.app import ComposeResult
 from textual.binding import Binding
 from textual.containers import Horizontal, Vertical, VerticalScroll
@@ -102,7 +103,27 @@ class HelpScreen(ModalScreen):
         self.dismiss(None)
 
 
-class ConfirmScreen(ModalScreen[str]):
+class AnswerScreen(ModalScreen[str]):
+    """A question answered with one key (s, d, k, e, n, o ...). Keys typed before it could
+    be read are not answers: a dialog that comes up in the middle of a burst (a save that
+    meets a conflict) would take the burst's letters as its answer. Keys made less than
+    `READ_TIME` after it opened go on to the field behind it instead
+    (`JobScreen.key_behind`), as if the dialog had come after them."""
+
+    READ_TIME = 0.5  # seconds: shorter than anyone reads a question and answers it
+
+    def __init__(self) -> None:
+        super().__init__()
+        self.opened_at = _time.get_time()
+
+    def too_early(self, event) -> bool:
+        """`event` (a key) was made before this question could have been read. Esc is
+        always taken: it answers with the choice that changes nothing."""
+        return event.key != "escape" and \
+            getattr(event, "time", self.opened_at) < self.opened_at + self.READ_TIME
+
+
+class ConfirmScreen(AnswerScreen):
     """Unsaved changes: save, discard, or go back. Dismisses "save", "discard" or "cancel"."""
 
     BINDINGS = [Binding("escape", "answer('cancel')", "keep editing"),
@@ -132,7 +153,7 @@ class ConfirmScreen(ModalScreen[str]):
         self.dismiss(answer)
 
 
-class LengthScreen(ModalScreen[str]):
+class LengthScreen(AnswerScreen):
     """The length changed: what happens to the supports and loads? Asked on ctrl+l, never
     by itself (it would take the keys of a burst as its answer). Dismisses "keep", "scale"
     or "ends". Nothing moves unless the user says so (esc keeps the positions)."""
@@ -219,7 +240,7 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
         self.dismiss(None)
 
 
-class ConflictScreen(ModalScreen[str]):
+class ConflictScreen(AnswerScreen):
     """A save was refused: show what changed on disk; save as new name, overwrite, or cancel."""
 
     BINDINGS = [Binding("escape", "answer('cancel')", "cancel"),
