@@ -187,3 +187,46 @@ def test_influence_polynomials_evaluate_as_column_by_column():
     both = _eval2d_many(G, u, v)
     assert np.array_equal(both[:, 0], _eval2d(F, u, v))
     assert np.array_equal(both[:, 1], _eval2d(F[:, :4, :3], u, v))
+
+
+def moving_cases():
+    """(cells, asks) of wheel sets on a simple span, a propped cantilever with an overhang and
+    a three-span beam on a spring, as the moving-load envelope asks for them."""
+    from shopbeam.engine.influence import cell_groups, cell_polys, influence, wheel_cells
+
+    out = []
+    for sups, L, offsets, forces, regions in (
+            ((Support(0.0, "pin"), Support(6.0, "roller")), 6.0, (0.0, 0.3),
+             (-9e3, -7e3), [(0.0, 2.0), (2.0, 6.0)]),
+            ((Support(0.0, "fixed"), Support(5.0, "roller")), 6.5, (0.0, 0.8, 1.1),
+             (-4e3, -4e3, -2e3), [(0.0, 5.0), (5.0, 6.5)]),
+            ((Support(0.0, "pin"), Support(4.0, "spring", stiffness=2e6),
+              Support(8.0, "roller"), Support(12.0, "roller")), 12.0, (0.0, 1.5, 3.0, 4.5),
+             (-3e3, -5e3, -5e3, -3e3), [(0.0, 4.0), (4.0, 8.0), (8.0, 12.0)])):
+        beam = Beam(L, 4e6, sups, (Load("uniform", start=0.0, end=L, w1=-500.0),))
+        static = solve(beam)
+        inf = influence(beam)
+        xs = sorted(set(static.moment.breaks.tolist()) | {x for r in regions for x in r})
+        cells = wheel_cells(inf, xs, offsets, 0.0, L - offsets[-1])
+        asks = []
+        for name in ("shear", "moment", "deflection"):
+            F = cell_polys(inf, cells, name, static.function(name), forces)
+            asks.append((F, cell_groups(cells, regions), name == "moment", True))
+        asks.append((asks[1][0] * 0.7 + asks[0][0], None, True, True))
+        asks.append((asks[2][0], cell_groups(cells, regions), False, False))
+        out.append((cells, asks))
+    return out
+
+
+@pytest.mark.parametrize("case", range(3))
+def test_candidates_in_one_pass_as_each_alone(case):
+    from shopbeam.engine.influence import candidates, candidates_many
+
+    cells, asks = moving_cases()[case]
+    together = candidates_many(cells, asks)
+    for (F, groups, lines, prune), got in zip(asks, together):
+        alone = candidates(cells, F, groups=groups, lines=lines, prune=prune)
+        assert np.array_equal(got.cell, alone.cell) and np.array_equal(got.wheel, alone.wheel)
+        for field in ("value", "x", "p"):  # the same numbers (1e-12: any BLAS)
+            np.testing.assert_allclose(getattr(got, field), getattr(alone, field),
+                                       rtol=1e-12, atol=1e-12 * np.abs(alone.value).max())

@@ -39,7 +39,7 @@ from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_po
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
-from shopbeam.engine.influence import (candidates, cell_groups, cell_polys, influence,
+from shopbeam.engine.influence import (candidates_many, cell_groups, cell_polys, influence,
                                        reaction_candidates, reaction_extremes, reaction_polys,
                                        wheel_cells)
 from shopbeam.engine.piecewise import Piecewise
@@ -861,6 +861,8 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
     lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
     under = lifting and sec.shape == "i-beam" and sec.axis == "strong"  # wheel flange check
     groups = {name: cell_groups(cells, regions[name]) for name in regions}
+    # every quantity's candidates (and the lateral check's) are found in one batched pass
+    asks, reads = [], []
     for tag, name, spw, loads in _combinations(job, ss, static, static_loads, st, mv, kk, P):
         if pattern is None:
             F = cell_polys(inf, cells, name, spw, loads)
@@ -876,7 +878,21 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         # moment at it is read, so every cell's sides are searched (no pruning)
         hung = [ld.at for ld in static_loads if ld.kind == "point" and ld.value
                 and (ld.key or "") in set(getattr(job, "hung", ()) or ())] if lines else []
-        c = candidates(cells, F, groups=groups[name], lines=lines, prune=not hung)
+        asks.append((F, groups[name], lines, not hung))
+        reads.append((tag, name, lines, hung))
+    lat = _lateral(job, ss, st, mv, k, static_loads)
+    if lat is not None:  # Mx / Mcx + My / Mcy under each wheel: max over the four signs
+        lat_loads, ratio = lat
+        cache_f = ss.__dict__.setdefault("_influence", {})
+        if "flange" not in cache_f:  # the flange-as-beam of the check (EI 1)
+            cache_f["flange"] = influence(replace(ss.beam, ei=1.0))
+        inf_f = cache_f["flange"]
+        Fy = cell_polys(inf_f, cells, "moment", None, lat_loads)
+        for s in (1.0, -1.0):  # the check takes the sum at the wheels, the supports and
+            # where either moment peaks: the whole beam and the line under each wheel
+            asks.append((polys["total", "moment"] + s * ratio * Fy, None, True, True))
+    found = candidates_many(cells, asks)
+    for (tag, name, lines, hung), c in zip(reads, found):
         for a, b in regions[name]:
             keep((tag, name, (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
         for x0 in hung:
@@ -884,17 +900,10 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         if lines:  # under each wheel (wheel flange bending)
             for i in range(len(P)):
                 keep((tag, name, ("wheel", i)), c, c.wheel == i)
-    lat = _lateral(job, ss, st, mv, k, static_loads)
-    if lat is not None:  # Mx / Mcx + My / Mcy under each wheel: max over the four signs
-        lat_loads, ratio = lat
-        inf_f = influence(replace(ss.beam, ei=1.0))  # the flange-as-beam of the check
-        Fy = cell_polys(inf_f, cells, "moment", None, lat_loads)
-        for s in (1.0, -1.0):  # the check takes the sum at the wheels, the supports and
-            # where either moment peaks: the whole beam and the line under each wheel
-            c = candidates(cells, polys["total", "moment"] + s * ratio * Fy, lines=True)
-            keep(("lateral", s, (0.0, L)), c, np.ones(len(c.x), bool))
-            for i in range(len(P)):
-                keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
+    for s, c in zip((1.0, -1.0), found[len(reads):]):
+        keep(("lateral", s, (0.0, L)), c, np.ones(len(c.x), bool))
+        for i in range(len(P)):
+            keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
     _governing_positions(job, ss, st, ext, pos)
     if pattern is None:
         reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,

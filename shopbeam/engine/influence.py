@@ -432,26 +432,52 @@ def candidates(cells: Cells, F: np.ndarray, interior: bool = True,
     best values already found in its group (its corners first, then its sides) cannot hold
     that group's extreme and is not searched further (its wheel-line sides are when
     `lines`: they carry the extremes under each wheel)."""
+    if lines_only:
+        return _candidates_lines_only(cells, F)
+    return candidates_many(cells, [(F, groups, lines, prune)], interior)[0]
+
+
+def candidates_many(cells: Cells, asks, interior: bool = True) -> list[Candidates]:
+    """`candidates(cells, F, groups=groups, lines=lines, prune=prune)` for each (F, groups,
+    lines, prune) in `asks` on the same cells, in one batched pass: every step runs once
+    over the cells of all of them, each keeping its own groups, pruning and root searches
+    (`_roots_in_pieces` by part), so each answer is the one its own call gives, candidate
+    for candidate and in the same order."""
     n = len(cells.p0)
-    (al, bl), (ah, bh) = _bounds(cells)
-    groups = np.zeros(n, int) if groups is None else groups
-    ng = int(groups.max()) + 1 if n else 1
+    K = len(asks)
+    (al1, bl1), (ah1, bh1) = _bounds(cells)
+    al, bl, ah, bh = (np.tile(a, K) for a in (al1, bl1, ah1, bh1))
+    F = np.concatenate([np.asarray(f, float) for f, _, _, _ in asks]) if K > 1 else \
+        np.asarray(asks[0][0], float)
+    N = n * K
+    part = np.repeat(np.arange(K), n)
+    cell = np.tile(np.arange(n), K)
+    # each ask's groups numbered after the previous ask's
+    groups, start = [], 0
+    for _, g, _, _ in asks:
+        g = np.zeros(n, int) if g is None else np.asarray(g, int)
+        groups.append(g + start)
+        start += int(g.max()) + 1 if n else 1
+    groups = np.concatenate(groups)
+    lines = np.repeat(np.array([bool(x[2]) for x in asks]), n)
+    prune = np.repeat(np.array([bool(x[3]) for x in asks]), n)
+    lo_fixed, hi_fixed = np.tile(cells.lo_fixed, K), np.tile(cells.hi_fixed, K)
+    lo_idx, hi_idx = np.tile(cells.lo_idx, K), np.tile(cells.hi_idx, K)
     us, vs, cs, ws = [], [], [], []
-    cidx = np.arange(n)
+    cidx = np.arange(N)
     # corners
     cu = np.concatenate([al, ah, al + bl, ah + bh])
-    cv = np.concatenate([np.zeros(n), np.zeros(n), np.ones(n), np.ones(n)])
+    cv = np.concatenate([np.zeros(N), np.zeros(N), np.ones(N), np.ones(N)])
     cc = np.tile(cidx, 4)
-    cw = np.concatenate([np.where(cells.lo_fixed, -1, cells.lo_idx),
-                         np.where(cells.hi_fixed, -1, cells.hi_idx)] * 2)
+    cw = np.concatenate([np.where(lo_fixed, -1, lo_idx), np.where(hi_fixed, -1, hi_idx)] * 2)
     us.append(cu)
     vs.append(cv)
     cs.append(cc)
     ws.append(cw)
     bern = _MU[None] @ F @ _MV.T[None]
     bmax, bmin = bern.max(axis=(1, 2)), bern.min(axis=(1, 2))
-    best_hi = np.full(ng, -np.inf)
-    best_lo = np.full(ng, np.inf)
+    best_hi = np.full(start, -np.inf)
+    best_lo = np.full(start, np.inf)
 
     def update(c, u, v):
         val = _eval2d(F[c], u, v)
@@ -459,69 +485,102 @@ def candidates(cells: Cells, F: np.ndarray, interior: bool = True,
         np.minimum.at(best_lo, groups[c], val)
 
     def alive():
-        if not prune:
-            return np.ones(n, bool)
-        return (bmax > best_hi[groups]) | (bmin < best_lo[groups])
+        return ~prune | (bmax > best_hi[groups]) | (bmin < best_lo[groups])
 
-    if not lines_only:
-        update(cc, cu, cv)
-    live = alive() if not lines_only else np.zeros(n, bool)
+    update(cc, cu, cv)
+    live = alive()
     # sides: x on a fixed break or under a wheel
-    for alpha, beta, fixed, idx in ((al, bl, cells.lo_fixed, cells.lo_idx),
-                                    (ah, bh, cells.hi_fixed, cells.hi_idx)):
+    for alpha, beta, fixed, idx in ((al, bl, lo_fixed, lo_idx), (ah, bh, hi_fixed, hi_idx)):
         wheel = np.where(fixed, -1, idx)
-        sel = live | (~fixed if (lines or lines_only) else False)
+        sel = live | (~fixed & lines)
         if not sel.any():
             continue
         g = _compose(F[sel], alpha[sel], beta[sel])
-        rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, g.shape[1]), np.ones(sel.sum()))
         sub = cidx[sel]
+        rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, g.shape[1]), np.ones(sel.sum()),
+                                   part[sub])
         c2 = sub[rows]
         u2 = alpha[c2] + beta[c2] * t
         us.append(u2)
         vs.append(t)
         cs.append(c2)
         ws.append(wheel[c2])
-        if not lines_only and len(c2):
+        if len(c2):
             update(c2, u2, t)
-    if not lines_only:
-        live = alive()
-        # bottom and top: p at a break, x along the cell
-        for v in (0.0, 1.0):
-            if not live.any():
-                break
-            sub = cidx[live]
-            ulo, uhi = al[sub] + bl[sub] * v, ah[sub] + bh[sub] * v
-            g = F[sub] @ (v ** np.arange(NV))  # coefficients in u
-            dg = g[:, 1:] * np.arange(1, NU)
-            # shift to ulo and find roots inside (ulo, uhi)
-            S = _shift_matrix(ulo, NU - 1)
-            dgs = (dg[:, None, :] @ S)[:, 0]
-            width = np.maximum(uhi - ulo, 0.0)
-            rows, t = _roots_in_pieces(dgs, np.where(width > 0, width, 1e-300))
-            c2 = sub[rows]
-            us.append(ulo[rows] + t)
-            vs.append(np.full(len(rows), v))
-            cs.append(c2)
-            ws.append(np.full(len(rows), -1))
-            if len(c2):
-                update(c2, us[-1], vs[-1])
-        live = alive()
-        if interior and live.any():
-            sub = cidx[live]
-            iu, iv, ic = _interior(F[sub], al[sub], bl[sub], ah[sub], bh[sub])
-            us.append(iu)
-            vs.append(iv)
-            cs.append(sub[ic])
-            ws.append(np.full(len(ic), -1))
+    live = alive()
+    # bottom and top: p at a break, x along the cell
+    for v in (0.0, 1.0):
+        if not live.any():
+            break
+        sub = cidx[live]
+        ulo, uhi = al[sub] + bl[sub] * v, ah[sub] + bh[sub] * v
+        g = F[sub] @ (v ** np.arange(NV))  # coefficients in u
+        dg = g[:, 1:] * np.arange(1, NU)
+        # shift to ulo and find roots inside (ulo, uhi)
+        S = _shift_matrix(ulo, NU - 1)
+        dgs = (dg[:, None, :] @ S)[:, 0]
+        width = np.maximum(uhi - ulo, 0.0)
+        rows, t = _roots_in_pieces(dgs, np.where(width > 0, width, 1e-300), part[sub])
+        c2 = sub[rows]
+        us.append(ulo[rows] + t)
+        vs.append(np.full(len(rows), v))
+        cs.append(c2)
+        ws.append(np.full(len(rows), -1))
+        if len(c2):
+            update(c2, us[-1], vs[-1])
+    live = alive()
+    inner = [[] for _ in range(K)]
+    if interior and live.any():
+        sub = cidx[live]
+        for k, blocks in enumerate(_interior(F[sub], al[sub], bl[sub], ah[sub], bh[sub],
+                                             part[sub], K)):
+            inner[k] = [(iu, iv, sub[ic]) for iu, iv, ic in blocks]
     u = np.concatenate(us)
     v = np.concatenate(vs)
     c = np.concatenate(cs).astype(int)
     w = np.concatenate(ws).astype(int)
+    out = []
+    for k in range(K):
+        m = part[c] == k
+        uk = np.concatenate([u[m]] + [b[0] for b in inner[k]])
+        vk = np.concatenate([v[m]] + [b[1] for b in inner[k]])
+        ck = np.concatenate([c[m]] + [b[2] for b in inner[k]]).astype(int)
+        wk = np.concatenate([w[m], np.full(sum(len(b[2]) for b in inner[k]), -1)]).astype(int)
+        val = _eval2d(F[ck], uk, vk)
+        own = cell[ck]
+        x = cells.xr[own] + uk * cells.wu[own]
+        p = cells.p0[own] + vk * cells.wp[own]
+        out.append(Candidates(val, x, p, own, wk))
+    return out
+
+
+def _candidates_lines_only(cells: Cells, F: np.ndarray) -> Candidates:
+    """The candidates under each wheel alone (the sides that are wheel lines)."""
+    n = len(cells.p0)
+    (al, bl), (ah, bh) = _bounds(cells)
+    cidx = np.arange(n)
+    us, vs, cs, ws = [], [], [], []
+    for alpha, beta, fixed, idx in ((al, bl, cells.lo_fixed, cells.lo_idx),
+                                    (ah, bh, cells.hi_fixed, cells.hi_idx)):
+        wheel = np.where(fixed, -1, idx)
+        sel = ~fixed
+        if not sel.any():
+            continue
+        g = _compose(F[sel], alpha[sel], beta[sel])
+        rows, t = _roots_in_pieces(g[:, 1:] * np.arange(1, g.shape[1]), np.ones(sel.sum()))
+        c2 = cidx[sel][rows]
+        us.append(alpha[c2] + beta[c2] * t)
+        vs.append(t)
+        cs.append(c2)
+        ws.append(wheel[c2])
+    cu = np.concatenate([al, ah, al + bl, ah + bh])
+    u = np.concatenate([cu] + us)
+    v = np.concatenate([np.zeros(n), np.zeros(n), np.ones(n), np.ones(n)] + vs)
+    c = np.concatenate([np.tile(cidx, 4)] + cs).astype(int)
+    w = np.concatenate([np.where(cells.lo_fixed, -1, cells.lo_idx),
+                        np.where(cells.hi_fixed, -1, cells.hi_idx)] * 2 + ws).astype(int)
     val = _eval2d(F[c], u, v)
-    x = cells.xr[c] + u * cells.wu[c]
-    p = cells.p0[c] + v * cells.wp[c]
-    return Candidates(val, x, p, c, w)
+    return Candidates(val, cells.xr[c] + u * cells.wu[c], cells.p0[c] + v * cells.wp[c], c, w)
 
 
 _NR = 24  # Chebyshev nodes for a resultant (its degree in v is at most 3*3 + 2*4 = 17)
@@ -572,8 +631,10 @@ def _strip(A: np.ndarray, axis: int, tiny: np.ndarray) -> np.ndarray:
     return out * ok[:, None, :]
 
 
-def _interior(F, al, bl, ah, bh):
-    """Interior points of each cell where both partial derivatives vanish."""
+def _interior(F, al, bl, ah, bh, part: np.ndarray | None = None, parts: int = 1):
+    """Interior points of each cell where both partial derivatives vanish: (u, v, cell)
+    arrays, or with `part` (an id below `parts` per cell) a list per part of its (u, v,
+    cell) blocks, each part's blocks as a call with its cells alone gives them."""
     n = F.shape[0]
     top = np.abs(F).max(axis=(1, 2))
     top = np.where(top > 0, top, 1.0)
@@ -589,8 +650,10 @@ def _interior(F, al, bl, ah, bh):
     du = np.where(mu.any(1), Fu.shape[1] - 1 - np.argmax(mu[:, ::-1], axis=1), -1)
     dv = np.where(mv.any(1), Fv.shape[1] - 1 - np.argmax(mv[:, ::-1], axis=1), -1)
     ok = (du >= 1) & (dv >= 0)
+    one = part is None
+    part = np.zeros(n, int) if one else part
     vnode = 0.5 * (_RHO + 1.0)
-    out_u, out_v, out_c = [], [], []
+    found = {}  # (degree in u, degree in v) -> (u, v, cell, polished u, polished v)
     for a_deg, b_deg in {(int(a), int(b)) for a, b in zip(du[ok], dv[ok])}:
         sel = np.flatnonzero(ok & (du == a_deg) & (dv == b_deg))
         size = a_deg + b_deg
@@ -625,18 +688,30 @@ def _interior(F, al, bl, ah, bh):
         S2 = _shift_matrix(ulo, NU - 1)
         gs = (g[:, None, :] @ S2)[:, 0]
         width = np.maximum(uhi - ulo, 0.0)
-        r2, t2 = _roots_in_pieces(gs, np.where(width > 0, width, 1e-300))
+        r2, t2 = _roots_in_pieces(gs, np.where(width > 0, width, 1e-300), part[cc])
         uu, vv, c3 = ulo[r2] + t2, v[r2], cc[r2]
-        out_u.append(uu)
-        out_v.append(vv)
-        out_c.append(c3)
         pu, pv = _newton(F[c3], uu, vv, al[c3], bl[c3], ah[c3], bh[c3])
-        out_u.append(pu)
-        out_v.append(pv)
-        out_c.append(c3)
-    if not out_c:
+        found[a_deg, b_deg] = (uu, vv, c3, pu, pv)
+    out = []
+    for k in range(parts):
+        mine = ok & (part == k)
+        blocks = []
+        # in the order a call with this part's cells alone meets its degree pairs
+        for key in {(int(a), int(b)) for a, b in zip(du[mine], dv[mine])}:
+            if key not in found:
+                continue
+            uu, vv, c3, pu, pv = found[key]
+            m = part[c3] == k
+            if not one and not m.any():
+                continue
+            blocks.append((uu[m], vv[m], c3[m]))
+            blocks.append((pu[m], pv[m], c3[m]))
+        out.append(blocks)
+    if not one:
+        return out
+    if not out[0]:
         return np.zeros(0), np.zeros(0), np.zeros(0, int)
-    return np.concatenate(out_u), np.concatenate(out_v), np.concatenate(out_c)
+    return tuple(np.concatenate([b[i] for b in out[0]]) for i in range(3))
 
 
 # ------------------------------------------------------------------ reactions

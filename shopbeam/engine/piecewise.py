@@ -63,8 +63,13 @@ def _derivative(coeffs: np.ndarray) -> np.ndarray:
     return coeffs[:, 1:] * np.arange(1, d + 1)
 
 
-def _roots_in_pieces(coeffs: np.ndarray, h: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
-    """Real roots of each row's polynomial with 0 < t < h[row]: (row indices, t)."""
+def _roots_in_pieces(coeffs: np.ndarray, h: np.ndarray,
+                     part: np.ndarray | None = None) -> tuple[np.ndarray, np.ndarray]:
+    """Real roots of each row's polynomial with 0 < t < h[row]: (row indices, t).
+
+    `part` (an id per row) finds the rows of each part exactly as a call of their own would
+    (the companion size is the largest degree of the call's rows), in one pass per distinct
+    size; rows come out in row order either way."""
     n, width = coeffs.shape
     if n == 0 or width < 2:
         return np.zeros(0, int), np.zeros(0)
@@ -76,10 +81,31 @@ def _roots_in_pieces(coeffs: np.ndarray, h: np.ndarray) -> tuple[np.ndarray, np.
     rel = size > 1e-12 * top[:, None]
     live = top > 0
     degree = np.where(live, width - 1 - np.argmax(rel[:, ::-1], axis=1), 0)
+    if part is None:
+        return _roots_of_degree(coeffs, h, scaled, degree, int(degree.max()) if n else 0)
+    bigs = np.zeros(int(part.max()) + 1, int)
+    np.maximum.at(bigs, part, degree)
+    row_big = bigs[part]
+    sizes = sorted(set(row_big.tolist()))
+    if len(sizes) == 1:
+        return _roots_of_degree(coeffs, h, scaled, degree, sizes[0])
+    rows_out, t_out = [], []
+    for big in sizes:
+        idx = np.flatnonzero(row_big == big)
+        r, t = _roots_of_degree(coeffs[idx], h[idx], scaled[idx], degree[idx], big)
+        rows_out.append(idx[r])
+        t_out.append(t)
+    rows, t = np.concatenate(rows_out), np.concatenate(t_out)
+    order = np.argsort(rows, kind="stable")
+    return rows[order], t[order]
+
+
+def _roots_of_degree(coeffs, h, scaled, degree, big: int) -> tuple[np.ndarray, np.ndarray]:
+    """`_roots_in_pieces` of rows whose companion size is `big`."""
+    n = coeffs.shape[0]
     # One batched eigenvalue call for every piece: a piece of degree d < D gets its d x d
     # companion block in the top-left and 2's on the rest of the diagonal (roots at tau = 2,
     # outside the piece, dropped below), so mixed degrees need no grouping.
-    big = int(degree.max()) if n else 0
     if big < 1:
         return np.zeros(0, int), np.zeros(0)
     if big == 1:
