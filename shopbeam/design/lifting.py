@@ -44,6 +44,8 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass, replace
 
+import numpy as np
+
 from shopbeam.design.basis import basis_of
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.model import Load
@@ -303,8 +305,9 @@ def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
     spots = ([ld.at for ld in wheels] + [sp.at for sp in sol.beam.supports]
              + [ex.max_at, ex.min_at, ey.max_at, ey.min_at])
     best = None
-    for x in spots:
-        mx, my = abs(float(sol.moment(x))), abs(float(flange.moment(x)))
+    at = np.array(spots, float)  # both moments at every spot in one evaluation each
+    for x, mx, my in zip(spots, np.abs(sol.moment(at)).tolist(),
+                         np.abs(flange.moment(at)).tolist()):
         r = mx / mcx + my / mcy
         if best is None or r > best[0]:
             best = (r, x, mx, my)

@@ -211,11 +211,13 @@ class Piecewise:
             lo = self.breaks[0] if lo is None else lo
             hi = self.breaks[-1] if hi is None else hi
             tol = 1e-12 * max(1.0, abs(self.breaks[-1]))
-            mask = (xs >= lo - tol) & (xs <= hi + tol)
+            # the candidates are sorted by position: those in [lo - tol, hi + tol] are a run
+            i0 = int(xs.searchsorted(lo - tol, "left"))
+            i1 = max(int(xs.searchsorted(hi + tol, "right")), i0)
             extra_x = np.array([lo, hi])
             extra_v = np.array([self(lo, "right"), self(hi, "left")])
-            xs = np.concatenate([xs[mask], extra_x])
-            vs = np.concatenate([vs[mask], extra_v])
+            xs = np.concatenate([xs[i0:i1], extra_x])
+            vs = np.concatenate([vs[i0:i1], extra_v])
             extra = (float(lo), float(hi))
         else:
             extra = ()
