@@ -265,13 +265,14 @@ ENVELOPE_QUANTITIES = ("shear", "moment", "deflection")
 
 
 def _shift_rows(c: np.ndarray, d: np.ndarray) -> np.ndarray:
-    """Rows of ascending coefficients re-expanded about t = d (one offset per row)."""
-    w = c.shape[1]
+    """Rows of ascending coefficients re-expanded about t = d (one offset per row); c may
+    stack several such sets of rows ((..., rows, w)), each re-expanded alike."""
+    w = c.shape[-1]
     out = np.zeros_like(c)
     dp = d[:, None] ** np.arange(w)  # d^0 .. d^(w-1)
     for m in range(w):
         for i in range(m + 1):
-            out[:, i] += c[:, m] * (math.comb(m, i) * dp[:, m - i])
+            out[..., i] += c[..., m] * (math.comb(m, i) * dp[:, m - i])
     return out
 
 
@@ -344,16 +345,17 @@ def build_envelope(ss: "StateSet", name: str) -> PatternEnvelope:
     tm = 0.5 * (t0 + t1)
     if n:
         Sp = S[:, piece, :]  # (n, cut pieces, w)
-        vals = np.stack([_horner(Sp[i], tm) for i in range(n)])  # (n, cut pieces)
+        # (n, cut pieces): every span's value at every cut piece's middle, in one pass
+        vals = _horner(Sp.reshape(-1, w), np.tile(tm, n)).reshape(n, len(tm))
         up_on, down_on = (vals > 0).T, (vals < 0).T
         up = np.einsum("sn,nsw->sw", up_on.astype(float), Sp)
         down = np.einsum("sn,nsw->sw", down_on.astype(float), Sp)
     else:
         up_on = down_on = np.zeros((len(piece), 0), bool)
         up = down = np.zeros((len(piece), w))
-    sh = lambda c: _shift_rows(c, t0)  # noqa: E731
-    return PatternEnvelope(name, nb, sh(fc[piece]), sh(lc[piece]), sh(up), sh(down),
-                           up_on, down_on, piece, t0)
+    # the four parts re-expanded on the cut pieces together
+    f_, l_, u_, d_ = _shift_rows(np.stack([fc[piece], lc[piece], up, down]), t0)
+    return PatternEnvelope(name, nb, f_, l_, u_, d_, up_on, down_on, piece, t0)
 
 
 def _extreme_rows(breaks: np.ndarray, c: np.ndarray) -> tuple[np.ndarray, np.ndarray, np.ndarray]:

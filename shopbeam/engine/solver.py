@@ -338,7 +338,10 @@ def snap_loads(loads, where: dict[float, float]):
     out = []
     for ld in loads:
         if ld.kind in ("point", "moment"):
-            out.append(replace(ld, at=where[ld.at]))
+            at = where[ld.at]
+            # a load that stays where it is is kept as it is (-0.0 and 0.0 are not the same)
+            same = at == ld.at and math.copysign(1.0, at) == math.copysign(1.0, ld.at)
+            out.append(ld if same else replace(ld, at=at))
             continue
         a, b = where[ld.start], where[ld.end]
         w2 = ld.w1 if ld.kind == "uniform" else ld.w2
