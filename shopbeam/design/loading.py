@@ -140,6 +140,16 @@ def _dummies(positions) -> list[Load]:
     return [Load("point", at=x, value=0.0, label="(break)") for x in sorted(positions)]
 
 
+def _reaction_arrays(sol: Solution) -> tuple[np.ndarray, np.ndarray]:
+    """The solution's reaction forces and moments as arrays (kept on it)."""
+    got = sol.__dict__.get("_reaction_arrays")
+    if got is None:
+        got = sol.__dict__["_reaction_arrays"] = (
+            np.array([r.force for r in sol.reactions], float),
+            np.array([r.moment for r in sol.reactions], float))
+    return got
+
+
 def combine(parts: list[tuple[float, Solution]], beam: Beam) -> Solution:
     """sum(f * solution) for solutions sharing one set of breaks."""
     base = parts[0][1]
@@ -154,9 +164,16 @@ def combine(parts: list[tuple[float, Solution]], beam: Beam) -> Solution:
         co = sum(f * getattr(s, name).coeffs for f, s in parts)
         return Piecewise(getattr(base, name).breaks, co)
 
-    reactions = tuple(Reaction(r.at, r.kind, sum(f * s.reactions[i].force for f, s in parts),
-                               sum(f * s.reactions[i].moment for f, s in parts), r.key)
-                      for i, r in enumerate(base.reactions))
+    # every reaction at once: the same sums, term by term in the same order, as one per
+    # reaction (0 + f1 r1 + f2 r2 + ...)
+    force = moment = 0
+    for f, s in parts:
+        rf, rm = _reaction_arrays(s)
+        force = force + f * rf
+        moment = moment + f * rm
+    reactions = tuple(Reaction(r.at, r.kind, fo, mo, r.key) for r, fo, mo in
+                      zip(base.reactions, np.asarray(force, float).tolist(),
+                          np.asarray(moment, float).tolist()))
     hinges = tuple((h[0], sum(f * s.hinge_rotations[i][1] for f, s in parts))
                    for i, h in enumerate(base.hinge_rotations))
     return Solution(beam=beam, reactions=reactions, hinge_rotations=hinges,
@@ -186,19 +203,31 @@ class StateSet:
         n = len(self.segs)
         return [tuple(i for i in range(n) if mask >> i & 1) for mask in range(2**n)]
 
+    def _scaled(self, kk: float):
+        """(the live loads, each span's patterned loads) scaled by kk (kept per kk)."""
+        cache = self.__dict__.setdefault("_scaled_loads", {})
+        if kk not in cache:
+            if len(cache) > 64:
+                cache.clear()
+            cache[kk] = ([ld.scaled(kk) for ld in self.parts.live],
+                         [[ld.scaled(kk) for ld in sl] for sl in self.span_loads])
+        return cache[kk]
+
     def state(self, k: float, pattern: tuple[int, ...]) -> Solution:
         kk = k * (1 + self.parts.impact)
         parts = [(1.0, self.fixed), (kk, self.live)] + [(kk, self.spans[i]) for i in pattern]
-        loads = list(self.parts.fixed) + [ld.scaled(kk) for ld in self.parts.live]
+        live, spans = self._scaled(kk)
+        loads = list(self.parts.fixed) + live
         for i in pattern:
-            loads += [ld.scaled(kk) for ld in self.span_loads[i]]
+            loads += spans[i]
         return combine(parts, replace(self.beam, loads=tuple(loads)))
 
     def static_loads(self, k: float, pattern) -> list[Load]:
         kk = k * (1 + self.parts.impact)
-        loads = list(self.parts.fixed) + [ld.scaled(kk) for ld in self.parts.live]
+        live, spans = self._scaled(kk)
+        loads = list(self.parts.fixed) + live
         for i in pattern:
-            loads += [ld.scaled(kk) for ld in self.span_loads[i]]
+            loads += spans[i]
         return loads
 
 
@@ -370,6 +399,31 @@ def _extreme_rows(breaks: np.ndarray, c: np.ndarray) -> tuple[np.ndarray, np.nda
     return r, x, v
 
 
+def _extreme_rows_many(items) -> list[tuple[np.ndarray, np.ndarray, np.ndarray]]:
+    """`_extreme_rows` of each (breaks, coefficients) in `items`, with one root search for
+    all of them (by part: each as its own search would find them)."""
+    hs = [np.diff(b) for b, _ in items]
+    ds = [c[:, 1:] * np.arange(1, c.shape[1]) if c.shape[1] > 1 else np.zeros((len(h), 1))
+          for (_, c), h in zip(items, hs)]
+    width = max(d.shape[1] for d in ds)
+    D = np.zeros((sum(len(d) for d in ds), width))  # zero high powers change no root
+    start = np.concatenate([[0], np.cumsum([len(d) for d in ds])])
+    for d, a in zip(ds, start):
+        D[a:a + len(d), :d.shape[1]] = d
+    part = np.repeat(np.arange(len(ds)), [len(d) for d in ds])
+    rows, t = _roots_in_pieces(D, np.concatenate(hs), part)
+    out = []
+    for k, ((breaks, c), h) in enumerate(zip(items, hs)):
+        npc = len(h)
+        m = part[rows] == k
+        rk, tk = rows[m] - start[k], t[m]
+        r = np.concatenate([np.arange(npc), np.arange(npc), rk])
+        x = np.concatenate([breaks[:-1], breaks[1:], breaks[rk] + tk])
+        v = np.concatenate([c[:, 0], _horner(c, h), _horner(c[rk], tk)])
+        out.append((r, x, v))
+    return out
+
+
 @dataclass(frozen=True)
 class EnvelopeExtreme:
     value: float  # signed: the largest upward (upper) or downward (lower) value
@@ -388,16 +442,20 @@ class Envelopes:
         self.cand = {}
         self._memo: dict = {}  # (name, upper, lo, hi) -> EnvelopeExtreme (asked again)
         self.coeffs: dict = {}  # (name, upper) -> the envelope's coefficients at kk
+        keys = []
         for name in ENVELOPE_QUANTITIES:
             if name not in cache:
                 cache[name] = build_envelope(ss, name)
             e = cache[name]
             self.env[name] = e
             for upper in (True, False):
-                co = self.coeffs[name, upper] = e.coeffs(self.kk, upper)
-                r, x, v = _extreme_rows(e.breaks, co)
-                # each candidate's piece ends, for the region masks
-                self.cand[name, upper] = (r, x, v, e.breaks[r], e.breaks[r + 1])
+                self.coeffs[name, upper] = e.coeffs(self.kk, upper)
+                keys.append((name, upper))
+        # the candidates of all six envelopes from one root search
+        found = _extreme_rows_many([(self.env[n].breaks, self.coeffs[n, u]) for n, u in keys])
+        for (name, upper), (r, x, v) in zip(keys, found):
+            b = self.env[name].breaks  # each candidate's piece ends, for the region masks
+            self.cand[name, upper] = (r, x, v, b[r], b[r + 1])
 
     def extreme(self, name: str, upper: bool, lo: float | None = None,
                 hi: float | None = None) -> EnvelopeExtreme:
