@@ -230,3 +230,22 @@ def test_candidates_in_one_pass_as_each_alone(case):
         for field in ("value", "x", "p"):  # the same numbers (1e-12: any BLAS)
             np.testing.assert_allclose(getattr(got, field), getattr(alone, field),
                                        rtol=1e-12, atol=1e-12 * np.abs(alone.value).max())
+
+
+def test_moving_envelope_kept_parts_give_what_a_fresh_state_set_gives():
+    """What the state set keeps between factors (cells, parts, the lateral check's Mcx) gives
+    the envelope a fresh state set gives at the next factor, number for number."""
+    job = load_job(PRESETS / "monorail-trolley.toml")
+    used = loading.state_set(job)
+    st_used = strengths(job, beam=used.beam)
+    for k in (0.0, 1.0):
+        loading.moving_envelope(job, used, used.static_loads(k, ()), k, st_used, pattern=())
+    assert used.__dict__["_mcx"]
+    fresh = loading.state_set(job)
+    st_fresh = strengths(job, beam=fresh.beam)
+    k = 1.31
+    a = loading.moving_envelope(job, used, used.static_loads(k, ()), k, st_used, pattern=())
+    b = loading.moving_envelope(job, fresh, fresh.static_loads(k, ()), k, st_fresh,
+                                pattern=())
+    assert a == b
+    assert any(key[0] == "lateral" for key in a.extremes)

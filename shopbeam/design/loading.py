@@ -1089,16 +1089,27 @@ def _lateral(job, ss, st, mv, k, static_loads):
     if prof is None or not prof.lateral or sec.shape != "i-beam" or sec.axis != "strong":
         return None
     # Mcx is the bending check's allowable strength (Cb = 1 under moving loads): read it
-    # from the checks of one state
-    wheels = [Load("point", at=mv.travel[0] + s, value=d + k * (1 + ss.parts.impact) * f,
-                   label=mv.label, key=mv.key) for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
-    sol = solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
-    bend = bending_check(job, sol, st, cb_one=True)
-    if bend.unit != "N*m" or not bend.limit > 0:
+    # from the bending check of one state. With one unbraced length (and no tee or angle
+    # rules) it does not depend on the loads, so it is read once per state set and strengths
+    # (capacity asks at several factors)
+    cache = ss.__dict__.setdefault("_mcx", {})
+    got = cache.get(id(st))
+    if got is not None and got[0] is st:
+        unit, limit = got[1]
+    else:
+        wheels = [Load("point", at=mv.travel[0] + s, value=d + k * (1 + ss.parts.impact) * f,
+                       label=mv.label, key=mv.key)
+                  for s, f, d in zip(mv.offsets, mv.live, mv.dead)]
+        sol = solve(replace(ss.beam, loads=tuple(static_loads) + tuple(wheels)))
+        bend = bending_check(job, sol, st, cb_one=True)
+        unit, limit = bend.unit, bend.limit
+        if len(st.ltb_segments) == 1 and not getattr(st.flexure, "special", False):
+            cache[id(st)] = (st, (unit, limit))
+    if unit != "N*m" or not limit > 0:
         return None
     mny, _ = lifting.flange_weak_strength(sec, job.material)
     loads = np.array([prof.lateral * abs(k * f + d) for f, d in zip(mv.live, mv.dead)])
-    return loads, bend.limit / (mny / 1.67)
+    return loads, limit / (mny / 1.67)
 
 
 def candidate_positions(job, ss: StateSet, static_loads, k: float, cache=None,
