@@ -7,6 +7,7 @@ import csv
 import json
 import math
 import os
+import re
 import subprocess
 import sys
 from pathlib import Path
@@ -224,6 +225,19 @@ def test_cmd_section_and_shapes(capsys):
     out = capsys.readouterr().out
     assert "HSS4X4X1/4" in out and "HSS6X4X1/4" not in out
     assert cli_members.cmd_shapes(_ns(kind="nope")) == 2
+
+
+def test_shapes_columns_never_run_together_and_angle_axes_print_with_their_units(capsys):
+    # a flat bar's Iy (8.138e-05 in^4) ran into its Sx ("0.005208 in^38.138e-05 in^4")
+    assert cli_members.cmd_shapes(_ns(kind="flat-bar")) == 0
+    rows = [ln for ln in capsys.readouterr().out.splitlines() if ln.startswith("FB")]
+    assert rows and all(ln.count(" in^") == 4 for ln in rows)
+    assert not any(re.search(r"in\^\d[^ ]", ln) for ln in rows)
+    # an angle's principal-axis properties: AISC Shapes Database v15.0, L6X4X3/8 row
+    # (Iw 15.5 in^4, SwC 3.86 in^3 the least Sw, Sz 1.31 in^3): inertia and moduli, not lengths
+    dims = next(ln for ln in catalog.section_report(catalog.lookup("L6X4X3/8"), "us")
+                .splitlines() if ln.strip().startswith("dimensions:"))
+    assert "iw 15.5 in^4" in dims and "sw 3.86 in^3" in dims and "sz 1.31 in^3" in dims
 
 
 def _cli(*args):

@@ -40,11 +40,13 @@ def cmd_shapes(args) -> int:
     system = _system(args)
     if not getattr(args, "kind", None) and not getattr(args, "filter", None):
         print("kinds: " + ", ".join(f"{k} ({catalog.KIND_INFO[k]})" for k in catalog.KIND_INFO))
-    print(f"{'designation':<22}{'weight':>14}{'A':>14}{'Ix':>14}{'Sx':>14}{'Iy':>14}")
+    # every cell keeps a space before it: a long figure widens its column, never runs into
+    # the one before ("0.005208 in^38.138e-05 in^4")
+    print(f"{'designation':<22}{'weight':>14} {'A':>14} {'Ix':>14} {'Sx':>14} {'Iy':>14}")
     for s in secs:
         wt = fmt(s.mass_per_length, "mass_per_length", system) if s.mass_per_length else "-"
-        print(f"{s.designation:<22}{wt:>14}{fmt(s.area, 'area', system):>14}"
-              f"{fmt(s.ix, 'inertia', system):>14}{fmt(s.sx, 'modulus', system):>14}"
+        print(f"{s.designation:<22}{wt:>14} {fmt(s.area, 'area', system):>14} "
+              f"{fmt(s.ix, 'inertia', system):>14} {fmt(s.sx, 'modulus', system):>14} "
               f"{fmt(s.iy, 'inertia', system) if s.iy else '-':>14}")
     print(f"{len(secs)} section{'s' if len(secs) != 1 else ''}. {SHORT}")
     return 0

@@ -892,8 +892,10 @@ def section_report(sec: Section, system: str = "us") -> str:
     for k, v in sec.dims.items():
         if k in ("h_t", "b_t", "D_t", "h_tw", "bf_2tf", "d_tw", "tan_alpha"):
             dim_lines.append(f"{k} {v:.3g}")
-        elif k in ("iz",):
+        elif k in ("iz", "iw"):  # principal-axis moments of inertia
             dim_lines.append(f"{k} {fmt(v, 'inertia', system)}")
+        elif k in ("sw", "sz"):  # principal-axis section moduli
+            dim_lines.append(f"{k} {fmt(v, 'modulus', system)}")
         elif k == "weak_shear_area":
             continue
         else:
