@@ -59,6 +59,51 @@ def test_live_loads_that_push_both_ways_are_not_rated():
     assert capacity(parse_job_text(ARM)).rated
 
 
+COUPLED = """schema = 1
+title = "rail with an end couple"
+tags = ["not-lifting"]
+[beam]
+length = "10 ft"
+section = "W8x18"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-2000 lbf"
+[[loads]]
+type = "moment"
+at = "0 ft"
+value = "COUPLE"
+label = "end couple"
+"""
+
+
+def test_a_live_couple_that_relieves_the_other_live_loads_is_not_rated():
+    # A +3000 lbf*ft (counterclockwise) couple at the pin of a simple span takes M0 (1 - x/L)
+    # off the sagging moment of the mid-span load: at mid-span 1500 of P L / 4 = 5000 lbf*ft
+    # (AISC Manual Table 3-23, cases 7 and 9 superposed). Scaled together, it is counted on
+    # at its full scaled value. Taken off, the factor is lower: nothing is posted.
+    eased = capacity(parse_job_text(COUPLED.replace("COUPLE", "3000 lbf*ft")))
+    alone = capacity(parse_job_text(COUPLED.replace("COUPLE", "0 lbf*ft")))
+    why = [r for r in eased.not_rated if r.startswith("the live couple loads[1] (end couple)")]
+    assert why and eased.factor > alone.factor and f"{alone.factor:.4g}" in why[0]
+    assert "NOT RATED" in label_text(rating(eased, analyze(eased.job).unchecked))
+    # the couple the other way adds to the moment: nothing relieves, and it is rated
+    adds = capacity(parse_job_text(COUPLED.replace("COUPLE", "-3000 lbf*ft")))
+    assert adds.rated and adds.factor < alone.factor
+    # entered as a dead couple it is sure to have: not scaled, so not counted on
+    dead = capacity(parse_job_text(COUPLED.replace("COUPLE", "3000 lbf*ft").replace(
+        'label = "end couple"', 'label = "end couple"\ncase = "dead"')))
+    assert not [r for r in dead.not_rated if "live couple" in r]
+
+
 TWO_SPANS = """schema = 1
 title = "shelf rail on three brackets"
 [beam]

@@ -230,7 +230,43 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
     res = _capacity(job, section, ss, st)
-    return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor))
+    return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
+                   + _relieving_couples(job, section, res.factor))
+
+
+MAX_COUPLES_TRIED = 4  # live couples each taken off in turn (one capacity search each)
+
+
+def _relieving_couples(job, section, k: float) -> tuple[str, ...]:
+    """Live couples scaled together with other live loads: k scales them all at once, so a
+    couple that holds back the others' moment (an end couple against a gravity load) is
+    counted on at its full scaled value. Each live couple is taken off in turn: where the
+    factor found without it is lower, it relieves, and nothing is posted (common practice,
+    as for live loads that push both ways)."""
+    live = [ld for ld in job.loads if ld.case == "live"]
+    couples = [ld for ld in live if ld.kind == "moment" and ld.value]
+    others = [ld for ld in live if ld.kind != "moment" and ld.total_force] \
+        + [mv for mv in read_moving(job) if any(mv.live)]
+    if not couples or not (others or len(couples) > 1) or not math.isfinite(k) or k <= 0:
+        return ()
+    if len(couples) > MAX_COUPLES_TRIED:
+        return (f"{len(couples)} live couples are scaled together with the other live loads, "
+                f"more than the {MAX_COUPLES_TRIED} shopbeam takes off one by one to see "
+                "whether one relieves the others, so nothing is posted. Enter the couples "
+                "as case = \"dead\" at values they are sure to have, or rate them in a job "
+                "of their own",)
+    out = []
+    for c in couples:
+        rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not c))
+        ss = state_set(rest, section)
+        k2 = _capacity(rest, section, ss, strengths(rest, sec=section, beam=ss.beam)).factor
+        if k2 < k * (1 - 1e-6):
+            name = c.key + (f" ({c.label})" if c.label else "")
+            out.append(f"the live couple {name} relieves the other live loads: without it the "
+                       f"factor is {k2:.4g}, not {k:.4g}, and a load that relieves is never "
+                       "counted on at its full scaled value. Enter it as case = \"dead\" at "
+                       "a value it is sure to have, or rate the job without it")
+    return tuple(out)
 
 
 def _hogging(job, limits, ss, k: float) -> tuple[str, ...]:
