@@ -436,3 +436,46 @@ def test_a_load_pasted_twice_is_warned():
     assert got and "same as loads[0]" in got[0].message
     other = parse_job_text(simple_span(beam, 6, point_load(3) + point_load(4)))
     assert not [p for p in other.warnings if "same as" in p.message]
+
+
+WOOD = """schema = 1
+title = "Header over the lumber bay door"
+tags = ["not-lifting"]
+[beam]
+length = "10 ft"
+section = "4x10"
+material = "DF-L-2"
+BEAM
+[[supports]]
+at = "0 ft"
+type = "pin"
+SUPPORT
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "10 ft"
+value = "-400 lbf/ft"
+"""
+
+
+@pytest.mark.parametrize("beam, support, key", [
+    ("", 'bearing = "0 in"', "supports[0].bearing"),
+    ('bearing = "0 in"', "", "beam.bearing"),
+])
+def test_a_zero_bearing_on_wood_is_refused_not_replaced_by_the_default(beam, support, key):
+    # it was read as "not given" and the 1-1/2 in default checked in its place, reported as
+    # "default, not given" although the file said 0
+    err = [p for p in refused(WOOD.replace("BEAM", beam).replace("SUPPORT", support))
+           if p.key == key]
+    assert err and "bearing 0 on a wood member" in err[0].message
+    assert "NDS 2018 3.10" in err[0].message
+
+
+def test_a_zero_bearing_on_steel_stays_the_knife_edge():
+    text = WOOD.replace('section = "4x10"', 'section = "W8x18"').replace(
+        'material = "DF-L-2"', 'material = "A992"')
+    job = parse_job_text(text.replace("BEAM", "").replace("SUPPORT", 'bearing = "0 in"'))
+    assert job.bearings["supports[0]"] == 0.0

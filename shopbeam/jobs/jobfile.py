@@ -722,6 +722,22 @@ def _bearing_fits(r: _Reader, b, length, system: str, key: str):
     return b
 
 
+def _knife_edge_on_wood(r: _Reader, material, bearing, bearings: dict) -> None:
+    """A bearing length of 0 on wood: steel takes it as a knife edge (the least web
+    crippling length, conservative), but wood under a knife edge has no bearing area, so the
+    crushing check (NDS 3.10) has nothing to divide by. Refused, with what to write."""
+    if getattr(material, "kind", "") != "lumber":
+        return
+    given = ([("beam.bearing", bearing)] if bearing is not None else []) + [
+        (f"{k}.bearing", v) for k, v in bearings.items()]
+    for key, b in given:
+        if b is not None and b <= 0:
+            r.error("bearing 0 on a wood member: the force would bear on no area, so its "
+                    "crushing across the grain (NDS 2018 3.10) cannot be checked; give the "
+                    "length of the seat, plate or post it bears on (e.g. \"3.5 in\"), or "
+                    "leave bearing out for one 2x plate (1-1/2 in)", key)
+
+
 def _plausible_load(r: _Reader, ld: Load) -> bool:
     limit, kind = LOAD_LIMITS[ld.kind]
     size = abs(ld.value) if ld.kind in ("point", "moment") else max(abs(ld.w1), abs(ld.w2))
@@ -1591,6 +1607,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 else:
                     contacts[f"loads[{i}]"] = n
     _twice(r, raw_loads)
+    _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
