@@ -217,14 +217,14 @@ def test_every_built_in_material_lies_in_the_stiffness_per_weight_band():
 
 @pytest.mark.parametrize("kind, material, warned", [
     ("steel", 'e = "10100 ksi"\nfy = "35 ksi"\ndensity = "169 lb/ft^3"', True),  # aluminium
-    ("lumber", 'e = "29000 ksi"\nfy = "1 ksi"\ndensity = "490 lb/ft^3"', True),  # steel as wood
+    ("lumber", 'e = "29000 ksi"\nfy = "1 ksi"\nfv = "180 psi"\ndensity = "490 lb/ft^3"', True),  # steel as wood
     ("aluminum", 'e = "29000 ksi"\nfy = "35 ksi"\ndensity = "490 lb/ft^3"', True),
     ("stainless", 'e = "1600 ksi"\nfy = "30 ksi"\ndensity = "35 lb/ft^3"', True),  # wood's E
     ("steel", 'e = "200 GPa"\nfy = "250 MPa"\ndensity = "7850 kg/m^3"', False),
     ("steel", 'e = "30000 ksi"\nfy = "36 ksi"\ndensity = "490 lb/ft^3"', False),
     ("stainless", 'e = "28000 ksi"\nfy = "30 ksi"\ndensity = "500 lb/ft^3"', False),
     ("aluminum", 'e = "70 GPa"\nfy = "240 MPa"\ndensity = "2700 kg/m^3"', False),
-    ("lumber", 'e = "1600 ksi"\nfy = "0.9 ksi"\ndensity = "35 lb/ft^3"', False),
+    ("lumber", 'e = "1600 ksi"\nfy = "0.9 ksi"\nfv = "180 psi"\ndensity = "35 lb/ft^3"', False),
     ("custom", 'e = "16000 ksi"\nfy = "50 ksi"\ndensity = "280 lb/ft^3"', False),  # titanium
 ])
 def test_a_typed_in_kind_that_e_contradicts_is_warned(kind, material, warned):

@@ -14,7 +14,7 @@ from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for
 from shopbeam.design import loading
 from shopbeam.design.basis import support_braces
-from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, check_notes, governing,
+from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
                                     impact_of, not_checked_words, strengths)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
 from shopbeam.design.lifting import profile_of
@@ -260,7 +260,110 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
     st = st or strengths(job)
     sec = st.section
     return list(st.unchecked) + local_unchecked(job, sec) + open_unchecked(job, st) + \
-        aluminum_unchecked(job, sec) + floor_unchecked(job) + cantilever_top_unchecked(job, st)
+        aluminum_unchecked(job, sec) + floor_unchecked(job) + cantilever_top_unchecked(job, st) \
+        + material_unchecked(job, st) + twist_unchecked(job, st)
+
+
+def material_unchecked(job: Job, st) -> list[Unchecked]:
+    """Limit states a typed-in material leaves unchecked for want of a value: bearing
+    perpendicular to grain of a lumber member with no fc_perp (NDS 2018 3.10), tensile rupture
+    of an aluminium one with no fu (ADM 2015 F.1), and the heat-affected zone of a welded
+    aluminium one with no fy_welded (ADM 2015 Table A.3.3/A.3.4). Each blocks the rating: the
+    check it stands for can govern (bearing governs a short DF-L 2x12 under a point load)."""
+    mat = job.material
+    kind = getattr(mat, "kind", "")
+    out = []
+    wf = getattr(st.flexure, "wood", None)
+    if kind == "lumber" and wf is not None and not wf.values.fc_perp:
+        at = [f"supports[{i}] ({s.kind})" for i, s in enumerate(job.supports)
+              if s.kind in ("pin", "roller", "spring")]
+        at += [ld.key for ld in job.loads if ld.kind == "point" and ld.total_force]
+        if at:
+            out.append(Unchecked(
+                "bearing perpendicular to grain",
+                "the typed-in lumber material gives no fc_perp, so bearing at "
+                + ", ".join(at[:4]) + (", ..." if len(at) > 4 else "")
+                + " is not checked, and it can govern a short deep member (DF-L No.2: Fc_perp "
+                "625 psi, NDS Supplement 2018 Table 4A, from memory). Give fc_perp under "
+                "[beam.material], or use a built-in grade such as \"DF-L-2\"",
+                "NDS 2018 3.10.2"))
+    if kind == "aluminum" and basis_of(job) == "aluminum":
+        if not getattr(mat, "fu", None):
+            out.append(Unchecked(
+                "tensile rupture",
+                "the typed-in aluminium gives no fu (Ftu), so rupture in bending (Z Ftu / kt "
+                "over Omega 1.95) is not checked; it governs unwelded 6061-T6 (Ftu 38 ksi) by "
+                "about 8 %. Give fu under [beam.material] (6061-T6 38 ksi, 6063-T6 30 ksi: "
+                "ADM 2015 Table A.3.3, from memory)", "ADM 2015 F.1"))
+        if job.welded and not getattr(mat, "fy_welded", None):
+            out.append(Unchecked(
+                "welded (heat-affected zone) strength",
+                "welded = true, but the typed-in aluminium gives no fy_welded: welding "
+                "anneals the metal near the weld to well under half the temper's yield "
+                "(6061-T6 Fty 35 ksi, welded Ftyw 15 ksi; 6063-T6 25 and 8 ksi: ADM 2015 "
+                "Table A.3.3/A.3.4, from memory), and the checks used the unwelded fy. Give "
+                "fy_welded under [beam.material], or remove welded = true if no weld is within "
+                "1 in of the highly stressed parts", "ADM 2015 Table A.3.3, A.3.4"))
+    return out
+
+
+def twist_unchecked(job: Job, st) -> list[Unchecked]:
+    """A span with its ends not held against twist. The lateral-torsional buckling
+    strength (AISC 360-16 F2, the NDS 3.3.3 beam stability factor, ADM F.2) assumes each
+    unbraced length ends where the section is held against twist; a support does that unless
+    brace = false, a spring only with brace = true (design.basis.BRACE_BY_DEFAULT). shopbeam
+    checks an unbraced length with one end not held as a cantilever from a built-in root
+    (Cb 1.0): that is what it is only where the held end is a fixed support. Between supports
+    with no end held against twist (both brace = false, two springs), or with one end held at
+    a pin, roller or brace point, nothing stops the member rolling over at the end that is not
+    held (AISC 360-16 Appendix 6.3 / F1: torsional restraint at the supports, common practice),
+    so no rating rests on it: listed, blocking."""
+    fl = _rating_flexure(st)
+    if fl is None or job.braced or job.restrained:
+        return []
+    tol = 1e-9 * job.length
+    loose = {s.at: i for i, s in enumerate(job.supports) if s.takes_force}
+    fixed = {s.at for s in job.supports if s.kind == "fixed"}
+    held = set(support_braces(job, job.supports))
+    out = []
+    for a, b, free, _l1, _why in st.ltb_segments:
+        if not free:
+            continue
+        ends = [x for x in (a, b) if x <= tol or x >= job.length - tol]
+        # the free end of this length: a member end with no brace
+        open_ends = [x for x in ends if not any(abs(x - h) <= tol for h in held)
+                     and not any(abs(x - p) <= tol for p in job.braces)]
+        at_support = [x for x in open_ends if any(abs(x - y) <= tol for y in loose)]
+        if not at_support:
+            continue  # a real free tip: a cantilever or an overhang, checked as such
+        other = [x for x in (a, b) if x not in open_ends]
+        if other and any(abs(other[0] - f) <= tol for f in fixed) and \
+                any(abs(other[0] - h) <= tol for h in held):
+            continue  # a built-in root held against twist: a propped cantilever, as checked
+        f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+        names = []
+        for x in at_support:
+            i = next(i for y, i in loose.items() if abs(x - y) <= tol)
+            sup = job.supports[i]
+            why = ("brace = false" if sup.brace is False else
+                   f"a {sup.kind} does not brace unless brace = true")
+            names.append(f"supports[{i}] ({sup.kind} at {f(sup.at)}, {why})")
+        what = ("neither end is held against twist" if not other else
+                f"only the end at {f(other[0])} is held against twist, and it is not a fixed "
+                "support: the span was checked as a cantilever from a built-in root (Cb 1.0), "
+                "which it is not")
+        out.append(Unchecked(
+            "torsional restraint at the supports",
+            f"the span {f(a)} to {f(b)} sits on " + ", ".join(names) + f": {what}. "
+            "Lateral-torsional buckling strength assumes the member is held against twist "
+            "where it is supported; without it the member can roll over at the support, and "
+            "no rating rests on that. Give brace = true on each support whose connection "
+            "holds the member against twist (an end plate, clip angles, stiffeners or blocking "
+            "to the flanges), brace the member there (beam.braces), or write restrained = true "
+            "if it is held against twist all along",
+            "AISC 360-16 F1 and Appendix 6.3 (torsional restraint at supports, common "
+            "practice)"))
+    return out
 
 
 def _rating_flexure(st):

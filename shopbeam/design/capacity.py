@@ -28,7 +28,8 @@ from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
 from shopbeam.engine.piecewise import Piecewise
-from shopbeam.jobs.jobfile import kind_mismatch
+from shopbeam.design.lifting import profile_of
+from shopbeam.jobs.jobfile import kind_mismatch, lifting_uniform_words
 
 
 # ------------------------------------------------------------------ root finding
@@ -151,12 +152,26 @@ def rating_gaps(job, st) -> tuple[str, ...]:
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")
     out += _live_both_ways(job) + _live_on_spans_unpatterned(job)
+    out += _lifting_spread(job)
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
                    "impact allowance and the lifting deflection limit were not applied. Add "
                    "tags = [\"lifting\"], or the tag \"not-lifting\" if it is not one")
     return tuple(out)
+
+
+def _lifting_spread(job) -> list[str]:
+    """A lifting job whose live loads are all uniform or linear (the hook load typed as a
+    uniform load): a hoist bears at a point, and the wheel-on-flange and lateral checks apply
+    to point loads only, so nothing is posted (the reader warns it too)."""
+    if profile_of(job) is None or read_moving(job):
+        return []
+    live = [ld for ld in job.loads if ld.case == "live" and ld.kind != "moment"
+            and ld.total_force]
+    if not live or any(ld.kind == "point" for ld in live):
+        return []
+    return [lifting_uniform_words(live)]
 
 
 def _is_live(job, words: str) -> bool:

@@ -1147,7 +1147,11 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
     if not is_lifting(tags, criteria.lifting) or moving:
         return
     forces = [ld for ld in loads if ld.kind != "moment"]
-    if any(ld.case == "live" for ld in forces):
+    live = [ld for ld in forces if ld.case == "live"]
+    if live and not any(ld.kind == "point" for ld in live):
+        r.warn(lifting_uniform_words(live), f"{live[0].key}.type")
+        return
+    if live:
         return
     if forces:
         names = ", ".join(ld.key + (f" ({ld.label})" if ld.label else "") for ld in forces[:3])
@@ -1160,6 +1164,20 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
         r.warn("this lifting job has no force load: give the rated (hook) load as a live point "
                "load (case = \"live\", the default) so the impact allowance and the rating "
                "apply", "loads")
+
+
+def lifting_uniform_words(live) -> str:
+    """What to say of a lifting job whose live loads are all spread (the hook load typed as a
+    uniform or linear load): the reader warns it, and design.capacity posts no rating."""
+    names = ", ".join(ld.key + (f" ({ld.label})" if ld.label else "") for ld in live[:3])
+    return (f"this lifting job's live load is spread along the member ({names}"
+            f"{', ...' if len(live) > 3 else ''}, {live[0].kind}), but a hoist or trolley "
+            "bears on it at one point: the hook load spread out bends it about half as much "
+            "as the same load at mid-span, and the wheel-on-flange and lateral-force checks "
+            "apply to point loads only, so the job is NOT RATED. Give the rated (hook) load as "
+            "a live point load where it bends most (type = \"point\", e.g. at mid-span), or "
+            "trolley wheels ([[moving]]); keep a uniform load for the member's own attachments "
+            "as case = \"dead\"")
 
 
 def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
@@ -1293,6 +1311,7 @@ _TUBES = ("rect-tube", "round-tube", "pipe")
 def _a(word: str) -> str:
     return ("an " if word[:1] in "aeiou" else "a ") + word
 _ROLLED_GRADES = ("A36", "A572-50", "A992")  # grades of rolled shapes, plate and bar
+EN_SECTIONS = "EN 10365"  # the source of the catalog's European sections (IPE, HE, UPN)
 
 
 def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> None:
@@ -1317,6 +1336,38 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "(\"A500-C\", \"A500-B\") and pipe to A53 (\"A53-B\"); the check uses "
                f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
                where)
+    elif mkind == "steel" and key.startswith("A500") and shape == "pipe":
+        r.warn(f"material {key!r} is a grade of structural tube (HSS), but section "
+               f"{section.designation!r} is pipe, made to ASTM A53 Gr B (Fy 35 ksi; AISC "
+               "Manual Table 2-4, from memory): the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}, more than the pipe has. Write "
+               "material = \"A53-B\", or give the round HSS (e.g. \"HSS4.500X0.237\") if "
+               "the mill cert says A500", where)
+    elif mkind == "steel" and key == "A513-DOM" and shape == "rect-tube":
+        r.warn(f"material {key!r} is DOM (drawn over mandrel) tube, which is round, but "
+               f"section {section.designation!r} is square or rectangular tube, bought as A500 "
+               "(HSS) or A513 Type 1/2 as-welded (30 to 38 ksi, from memory): the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}. Write \"A500-C\" for HSS, "
+               "\"A513\" for mechanical tube, or the grade on the mill cert", where)
+    elif mkind == "steel" and key == "A992" and (
+            shape in ("angle", "channel", "rect-bar", "square-bar")
+            or shape == "i-beam" and section.designation.upper().startswith("S")) \
+            and not section.source.startswith(EN_SECTIONS):
+        r.warn(f"material 'A992' is the grade of W shapes (and HP, WT), but section "
+               f"{section.designation!r} is {_a(shape)}, bought as A36 (Fy 36 ksi; AISC Manual "
+               "Table 2-4 gives A36 for angles, channels and S shapes, and plate and bar are "
+               "A36 or A572, from memory): the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}. Write material = \"A36\", or "
+               "\"A572-50\" if the mill cert says so", where)
+    elif mkind == "steel" and key in _ROLLED_GRADES + ("A53-B",) \
+            and section.source.startswith(EN_SECTIONS):
+        r.warn(f"section {section.designation!r} is a European section ({EN_SECTIONS}), "
+               f"rolled to EN 10025 grades (S235: fy 235 MPa, S355: 355 MPa, up to 16 mm "
+               f"thick), not ASTM {key}: the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}, which an S235 section does not "
+               "have. Give the mill cert's grade as [beam.material] kind = \"steel\", e = "
+               "\"210 GPa\", fy = \"235 MPa\", fu = \"360 MPa\", density = "
+               "\"7850 kg/m^3\" (EN 10025-2 and EN 1993-1-1 3.2, from memory)", where)
     elif mkind in ("aluminum", "stainless") and is_steel_shape(section):
         metal = "aluminium" if mkind == "aluminum" else mkind
         r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
@@ -1611,7 +1662,14 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
-    if welded and material is not None and not getattr(material, "fy_welded", None):
+    if welded and getattr(material, "kind", "") == "aluminum" and \
+            not getattr(material, "fy_welded", None):
+        r.warn("welded = true on a typed-in aluminium with no fy_welded: welding anneals the "
+               "metal near the weld (6061-T6 Fty 35 ksi, welded Ftyw 15 ksi; 6063-T6 25 and "
+               "8 ksi: ADM 2015 Table A.3.3/A.3.4, from memory), and without fy_welded the "
+               "checks can only use the unwelded fy, so the job is NOT RATED. Give fy_welded "
+               "under [beam.material]", "beam.welded")
+    elif welded and material is not None and not getattr(material, "fy_welded", None):
         r.warn(f"welded = true changes nothing for material {getattr(material, 'key', '')!r}: "
                "only a grade with a welded (heat-affected zone) strength, such as aluminium "
                "6061-T6, is weakened by welding in these checks; the welds themselves are not "

@@ -4,7 +4,9 @@ Values are specified minimums (yield, tensile) and nominal moduli and densities,
 the units the standard states them in and converted exactly to SI. Look-up is tolerant
 (``"A500 Gr C"``, ``"a500c"``, ``"ASTM A500 grade C"`` all find ``A500-C``). An inline
 material in a job file is a table with ``e``, ``fy`` and ``density`` (plus optional
-``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fb``, ``fv``).
+``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fb``, ``fv``, ``fc_perp``). A lumber one
+must give ``fv`` (no shear value is guessed from Fb); without ``fc_perp`` its bearing is not
+checked and it is not rated.
 
 Design wall of tube (``hss_wall_factor``): 0.93 x nominal for A500 and A53 (ERW tube,
 AISC 360-16 B4.2), nominal (1.0) for A513 mechanical tubing and for stainless/aluminium
@@ -47,6 +49,9 @@ class Material:
     fu_welded: float | None = None
     hss_wall_factor: float | None = None
     aliases: tuple[str, ...] = field(default=(), compare=False)
+    # Fc_perp, reference bearing perpendicular to grain: a typed-in lumber material only (the
+    # built-in grades take theirs from shopbeam.members.wood)
+    fc_perp: float | None = None
     # the figures as the standard publishes them, (US text, SI text), when a conversion of
     # the stored SI value would print an odd number (stainless 193 GPa is "28,000 ksi")
     published: tuple[str, str] | None = field(default=None, compare=False)
@@ -311,7 +316,8 @@ def resolve_material(spec, key: str = "beam.material") -> Material:
 
 
 _INLINE_KEYS = {"e": "stress", "fy": "stress", "density": "density", "fu": "stress",
-                "g": "stress", "fy_welded": "stress", "fb": "stress", "fv": "stress"}
+                "g": "stress", "fy_welded": "stress", "fb": "stress", "fv": "stress",
+                "fc_perp": "stress"}
 
 
 def _inline(spec: Mapping, key: str) -> Material:
@@ -359,6 +365,14 @@ def _inline(spec: Mapping, key: str) -> Material:
         raise InputError("fy is not less than e: check the units", f"{key}.fy")
     if "fu" in vals and vals["fu"] < vals["fy"]:
         raise InputError("fu is less than fy", f"{key}.fu")
+    if kind == "lumber" and "fv" not in vals:
+        # NDS shear values are not a fixed share of Fb (DF-L No.2: Fb 900 psi, Fv 180 psi,
+        # NDS Supplement 2018 Table 4A, from memory): nothing is guessed
+        raise InputError("a typed-in lumber material needs fv, the reference shear value "
+                         "parallel to grain (e.g. fv = \"180 psi\" for Douglas Fir-Larch No.2, "
+                         "NDS Supplement 2018 Table 4A): shear is checked against it, and "
+                         "no value is guessed from fb. Give fv (and fc_perp for bearing, "
+                         "e.g. \"625 psi\")", f"{key}.fv")
     name = spec.get("name", "custom material")
     if not isinstance(name, str):
         raise InputError("name must be text", f"{key}.name")

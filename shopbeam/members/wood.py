@@ -163,13 +163,22 @@ def reference(material, thick_in: float, wide_in: float) -> WoodValues:
     return rows[cls]
 
 
+def _typed_fv(material) -> float:
+    """A typed-in lumber material's Fv: given, never guessed (the reader refuses one without)."""
+    if not material.fv:
+        raise InputError("a typed-in lumber material needs fv, the reference shear value "
+                         "(e.g. \"180 psi\" for Douglas Fir-Larch No.2, NDS Supplement 2018 "
+                         "Table 4A)", "beam.material.fv")
+    return material.fv
+
+
 def _custom(material, cls: str) -> WoodValues:
-    """An inline lumber material: its fb, fv and e; Emin from NDS 2018 Appendix D (eq. D-4
+    """An inline lumber material: its fb, fv, fc_perp (None: bearing not checked) and e; Emin from NDS 2018 Appendix D (eq. D-4
     with COV_E = 0.25 for visually graded lumber): Emin = E (1 - 1.645 x 0.25) x 1.03 / 1.66."""
     e = material.e
     return WoodValues("typed-in wood", getattr(material, "name", "custom"), "custom",
-                      material.fb or material.fy, None, material.fv or 0.6 * material.fy,
-                      None, None, e, e * (1 - 1.645 * 0.25) * 1.03 / 1.66,
+                      material.fb or material.fy, None, _typed_fv(material),
+                      getattr(material, "fc_perp", None), None, e, e * (1 - 1.645 * 0.25) * 1.03 / 1.66,
                       "typed in; Emin from NDS 2018 Appendix D eq. D-4, COV_E 0.25")
 
 

@@ -1,0 +1,225 @@
+"""A rating never rests on something unchecked, and an easy slip gets a message: a typed-in
+lumber material without its bearing or shear value, a span whose supports do not hold it
+against twist, a lifting job whose hook load is typed as a uniform load, a typed-in
+aluminium without its tensile or welded strength."""
+
+from __future__ import annotations
+
+import pytest
+
+from shopbeam.design.analysis import analyze
+from shopbeam.design.capacity import capacity
+from shopbeam.errors import InputErrors
+from shopbeam.jobs.jobfile import parse_job_text
+
+LBF, PSI, KSI = 4.4482216152605, 6894.757293168361, 6894.757293168361e3
+
+
+def warnings(job, key=None):
+    return [p for p in job.warnings if p.warning and (key is None or p.key == key)]
+
+
+def span(beam: str, supports: str = "", loads: str = "", length: float = 3,
+         tags: str = '["not-lifting"]', criteria: str = "") -> str:
+    supports = supports or (f'[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+                            f'at = "{length:g} ft"\ntype = "roller"\n')
+    loads = loads or (f'[[loads]]\ntype = "point"\nat = "{length / 2:g} ft"\n'
+                      'value = "-1000 lbf"\n')
+    return (f'schema = 1\ntitle = "t"\nunits = "us"\ntags = {tags}\n[beam]\n'
+            f'length = "{length:g} ft"\nself_weight = false\n{beam}\n{supports}{loads}'
+            + (f"[criteria]\n{criteria}\n" if criteria else ""))
+
+
+# ------------------------------------------------------------------ typed-in lumber
+LUMBER = """section = "2x12"
+braced = true
+[beam.material]
+kind = "lumber"
+fb = "900 psi"
+e = "1600000 psi"
+density = "34 lb/ft^3"
+"""
+
+
+def test_typed_in_lumber_with_fc_perp_is_checked_in_bearing_by_hand():
+    # DF-L No.2 typed in (NDS Supplement 2018 Table 4A, from memory: Fb 900, Fv 180,
+    # Fc_perp 625 psi). Under the mid-span point load the bearing length is the default
+    # 1-1/2 in on a 1-1/2 in breadth: Cb = (1.5 + 0.375) / 1.5 = 1.25 (NDS 3.10.4), so
+    # P = 625 x 1.25 x 1.5 x 1.5 = 1757.8 lbf (NDS 3.10.2), under the bending's 3164 lbf
+    job = parse_job_text(span(LUMBER + 'fv = "180 psi"\nfc_perp = "625 psi"\n'))
+    res = capacity(job)
+    assert res.rated and res.governing.name == "bearing"
+    assert res.factor * 1000 == pytest.approx(625 * 1.25 * 1.5 * 1.5, rel=1e-9)
+
+
+def test_typed_in_lumber_without_fc_perp_is_not_rated_and_says_why():
+    job = parse_job_text(span(LUMBER + 'fv = "180 psi"\n'))
+    res = capacity(job)
+    assert not res.rated
+    why = [r for r in res.not_rated if r.startswith("bearing perpendicular to grain")]
+    assert len(why) == 1 and "fc_perp" in why[0] and "supports[0]" in why[0]
+    un = [u for u in analyze(job).unchecked if u.name == "bearing perpendicular to grain"]
+    assert len(un) == 1 and un[0].blocks_rating and "3.10" in un[0].clause
+
+
+def test_typed_in_lumber_without_fv_is_an_error_not_a_guess_from_fb():
+    # NDS Table 4A DF-L No.2 has Fv 180 psi, not 0.6 x 900 = 540 psi: nothing is guessed
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(span(LUMBER + 'fc_perp = "625 psi"\n'))
+    p = e.value.problems[0]
+    assert p.key == "beam.material.fv" and p.line == 10 and "fv" in p.message
+
+
+# ------------------------------------------------------------------ twist at the supports
+W8 = 'section = "W8X18"\nmaterial = "A992"'
+HUNG = '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-2000 lbf"\nflange = "bottom"\n'
+
+
+def sup(at, kind, extra=""):
+    return f'[[supports]]\nat = "{at} ft"\ntype = "{kind}"\n{extra}\n'
+
+
+def twist_reasons(res):
+    return [r for r in res.not_rated if r.startswith("torsional restraint at the supports")]
+
+
+@pytest.mark.parametrize("supports, words", [
+    (sup(0, "pin", "brace = false") + sup(10, "roller", "brace = false"), "neither end"),
+    (sup(0, "spring", 'stiffness = "50000 lbf/in"') + sup(10, "spring",
+                                                          'stiffness = "50000 lbf/in"'),
+     "neither end"),
+    (sup(0, "pin", "brace = false") + sup(10, "roller"), "only the end at 10 ft"),
+])
+def test_a_span_not_held_against_twist_at_its_supports_is_not_rated(supports, words):
+    res = capacity(parse_job_text(span(W8, supports, HUNG, length=10)))
+    got = twist_reasons(res)
+    assert not res.rated and len(got) == 1 and words in got[0]
+    assert "brace = true" in got[0] and "restrained = true" in got[0]
+
+
+@pytest.mark.parametrize("supports, beam", [
+    (sup(0, "pin") + sup(10, "roller"), ""),  # both ends braced by default
+    (sup(0, "pin", "brace = false") + sup(10, "roller", "brace = false"),
+     "restrained = true"),
+    (sup(0, "spring", 'stiffness = "50000 lbf/in"\nbrace = true')
+     + sup(10, "spring", 'stiffness = "50000 lbf/in"\nbrace = true'), ""),
+    (sup(0, "fixed"), ""),  # a cantilever: a free tip is no support
+    (sup(0, "fixed") + sup(10, "spring", 'stiffness = "50000 lbf/in"'), ""),  # propped
+    (sup(0, "pin") + sup(7, "roller"), ""),  # an overhang's free tip
+])
+def test_supports_that_hold_twist_and_real_free_tips_are_not_blocked(supports, beam):
+    res = capacity(parse_job_text(span(W8 + "\n" + beam, supports, HUNG, length=10)))
+    assert not twist_reasons(res)
+
+
+# ------------------------------------------------------------------ a hook load typed as uniform
+UNIFORM = '[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n'
+
+
+def test_a_lifting_job_with_only_a_uniform_live_load_is_warned_and_not_rated():
+    job = parse_job_text(span(W8, loads=UNIFORM, length=10, tags='["lifting"]'))
+    w = warnings(job, "loads[0].type")
+    assert len(w) == 1 and "point" in w[0].message and w[0].line == 17
+    res = capacity(job)
+    assert not res.rated and any("spread along the member" in r for r in res.not_rated)
+
+
+def test_a_lifting_job_with_its_hook_load_as_a_point_is_not_blocked_by_that():
+    hook = '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-1000 lbf"\n'
+    job = parse_job_text(span(W8, loads=UNIFORM.replace("[[loads]]", "[[loads]]\ncase = "
+                                                        '"dead"') + hook,
+                              length=10, tags='["lifting"]'))
+    assert not [p for p in warnings(job) if "spread along" in p.message]
+    assert not any("spread along the member" in r for r in capacity(job).not_rated)
+
+
+def test_a_uniform_load_on_a_shelf_is_not_a_lifting_slip():
+    job = parse_job_text(span(W8, loads=UNIFORM, length=10))
+    assert not any("spread along the member" in r for r in capacity(job).not_rated)
+
+
+# ------------------------------------------------------------------ typed-in aluminium
+BAR = """braced = true
+[beam.section]
+shape = "rect-bar"
+width = "0.5 in"
+depth = "3 in"
+[beam.material]
+kind = "aluminum"
+fy = "35 ksi"
+e = "10100 ksi"
+density = "169 lb/ft^3"
+"""
+# 1/2 x 3 in bar on 2 ft, point load at mid-span: M = P L / 4 = 6 in x P; Z = 1.125 in^3,
+# S = 0.75 in^3 (ADM 2015 F.1, from memory: yield Z Fty <= 1.5 S Fty over 1.65, rupture
+# Z Ftu / kt over 1.95, kt 1.0 for 6xxx)
+
+
+def test_typed_in_aluminium_without_fu_is_not_rated():
+    res = capacity(parse_job_text(span(BAR, length=2, criteria='deflection = "L/100"')))
+    assert not res.rated
+    assert any(r.startswith("tensile rupture not checked") and "fu" in r
+               for r in res.not_rated)
+
+
+def test_typed_in_aluminium_with_fu_rates_on_rupture_by_hand():
+    res = capacity(parse_job_text(span(BAR + 'fu = "38 ksi"\n', length=2,
+                                       criteria='deflection = "L/100"')))
+    assert res.rated
+    assert res.factor * 1000 == pytest.approx(1.125 * 38e3 / 1.95 / 6, rel=1e-9)
+
+
+def test_welded_typed_in_aluminium_without_fy_welded_is_warned_and_not_rated():
+    job = parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\n', length=2,
+                              criteria='deflection = "L/100"'))
+    w = warnings(job, "beam.welded")
+    assert len(w) == 1 and "fy_welded" in w[0].message and "changes nothing" not in w[0].message
+    res = capacity(job)
+    assert not res.rated and any(r.startswith("welded (heat-affected zone) strength")
+                                 for r in res.not_rated)
+
+
+def test_welded_typed_in_aluminium_with_fy_welded_rates_on_the_weld_by_hand():
+    job = parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\nfy_welded = "15 ksi"\n',
+                              length=2, criteria='deflection = "L/100"'))
+    assert not warnings(job, "beam.welded")
+    res = capacity(job)
+    assert res.rated  # Ftyw 15 ksi: Z Ftyw / 1.65 = 1.125 x 15 / 1.65 kip-in
+    assert res.factor * 1000 == pytest.approx(1.125 * 15e3 / 1.65 / 6, rel=1e-9)
+
+
+# ------------------------------------------------------------------ a grade that over-credits yield
+# Product grades, AISC Manual 15th ed. Table 2-4 (from memory): pipe A53 Gr B (35 ksi);
+# angles, channels and S shapes A36; DOM tube is round; EN sections EN 10025 (S235, S355).
+@pytest.mark.parametrize("section, material, word", [
+    ("PIPE4STD", "A500-C", '"A53-B"'),
+    ("L4x4x1/4", "A992", '"A36"'),
+    ("C10x15.3", "A992", '"A36"'),
+    ("S8x18.4", "A992", '"A36"'),
+    ("HSS4x4x1/4", "A513-DOM", '"A500-C"'),
+    ("IPE200", "A992", '"235 MPa"'),
+    ("HEB200", "A572-50", '"235 MPa"'),
+    ("IPE200", "A36", '"235 MPa"'),
+])
+def test_a_grade_that_over_credits_the_shape_is_warned_with_what_to_write(section, material,
+                                                                           word):
+    job = parse_job_text(span(f'section = "{section}"\nmaterial = "{material}"'))
+    got = warnings(job, "beam.material")
+    assert len(got) == 1 and word in got[0].message and "credits" in got[0].message
+    assert got[0].line == 9  # material = ...
+
+
+@pytest.mark.parametrize("section, material", [
+    ("PIPE4STD", "A53-B"), ("L4x4x1/4", "A36"), ("C10x15.3", "A36"), ("S8x18.4", "A36"),
+    ("HSS4x4x1/4", "A500-C"), ("HSS4.000X0.250", "A513-DOM"), ("W8x18", "A992"),
+    ("HSS4.500X0.237", "A500-C"),
+])
+def test_the_usual_grades_are_not_warned(section, material):
+    job = parse_job_text(span(f'section = "{section}"\nmaterial = "{material}"'))
+    assert not warnings(job, "beam.material")
+
+
+def test_an_en_section_with_its_en_grade_typed_in_is_not_warned():
+    job = parse_job_text(span('section = "IPE200"\nmaterial = { kind = "steel", e = "210 GPa", '
+                              'fy = "235 MPa", fu = "360 MPa", density = "7850 kg/m^3" }'))
+    assert not warnings(job, "beam.material")
