@@ -223,3 +223,72 @@ def test_an_en_section_with_its_en_grade_typed_in_is_not_warned():
     job = parse_job_text(span('section = "IPE200"\nmaterial = { kind = "steel", e = "210 GPa", '
                               'fy = "235 MPa", fu = "360 MPa", density = "7850 kg/m^3" }'))
     assert not warnings(job, "beam.material")
+
+
+# ------------------------------------------------------------------ span-to-depth slips
+@pytest.mark.parametrize("length, warned, blocked", [
+    ('"10 in"', True, True),    # 10 in on a W8X18 (d = 8.14 in): 1.2 x the depth
+    ('"20 in"', True, False),   # 2.5 x: warned, rated
+    ('"10 ft"', False, False),
+])
+def test_a_member_only_a_few_times_its_depth_long_is_warned_and_below_2_not_rated(
+        length, warned, blocked):
+    text = span(W8 + '\nbraced = true', sup(0, "pin") + sup(0.5, "roller"),
+                '[[loads]]\ntype = "point"\nat = "0.25 ft"\nvalue = "-100 lbf"\n', length=1)
+    text = text.replace('length = "1 ft"', f"length = {length}")
+    text = text.replace('at = "0.5 ft"', f"at = {length}")
+    job = parse_job_text(text)
+    w = [p for p in warnings(job, "beam.length") if "depth" in p.message]
+    assert len(w) == int(warned)
+    if warned:
+        assert w[0].line == 6 and length in w[0].message and "unit" in w[0].message
+    reasons = [r for r in capacity(job).not_rated if "x the depth of section" in r]
+    assert len(reasons) == int(blocked)
+
+
+# ------------------------------------------------------------------ a factor that means no demand
+def test_a_live_load_on_a_support_reads_as_no_demand_not_a_huge_factor():
+    import json
+    import math
+
+    from shopbeam.design.capacity import to_json
+
+    # a 1/2 x 3 in aluminium bar braced along its length: the load on the roller bends
+    # nothing, so the ratios at 1 x the load are rounding (1e-17), not demand
+    text = span(BAR + 'fu = "38 ksi"\n', sup(0, "pin") + sup(1, "roller"),
+                '[[loads]]\ntype = "point"\nat = "1 ft"\nvalue = "-1000 lbf"\n', length=2)
+    res = capacity(parse_job_text(text))
+    assert math.isinf(res.factor) and res.method == "no demand" and not res.rated
+    out = json.loads(json.dumps(to_json(res)))
+    assert "factor" in out and out["factor"] is None
+
+
+# ------------------------------------------------------------------ keys that change nothing
+@pytest.mark.parametrize("supports, loads, criteria, tags, key", [
+    ("", '[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\nwheels = 4\n', "",
+     '["not-lifting"]', "loads[0].wheels"),
+    (sup(0, "fixed", 'bearing = "4 in"'), '[[loads]]\ntype = "point"\nat = "10 ft"\n'
+     'value = "-500 lbf"\n', "", '["not-lifting"]', "supports[0].bearing"),
+    ("", '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "0 lbf"\n', "", '["not-lifting"]',
+     "loads[0].value"),
+    ("", "", 'deflection = "L/360"\nlive_deflection = "L/240"', '["not-lifting"]',
+     "criteria.live_deflection"),
+    ("", "", 'lifting = "powered-monorail"', '["not-lifting"]', "criteria.lifting"),
+])
+def test_a_key_that_changes_nothing_gets_one_warning(supports, loads, criteria, tags, key):
+    job = parse_job_text(span(W8, supports, loads, length=10, tags=tags, criteria=criteria))
+    assert len(warnings(job, key)) == 1
+
+
+@pytest.mark.parametrize("loads, criteria", [
+    ('[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-500 lbf"\nflange = "bottom"\n'
+     'wheels = 4\n', 'lifting = "powered-monorail"'),
+    ('[[loads]]\ntype = "linear"\nstart = "0 ft"\nend = "10 ft"\nvalue = ["-100 lbf/ft", '
+     '"100 lbf/ft"]\nuplift = true\n', ""),
+    ("", 'deflection = "L/240"\nlive_deflection = "L/360"'),
+])
+def test_those_keys_used_as_meant_are_not_warned(loads, criteria):
+    job = parse_job_text(span(W8, "", loads, length=10, tags='["lifting"]' if "lifting" in
+                              criteria else '["not-lifting"]', criteria=criteria))
+    assert not [p for p in warnings(job) if p.key in (
+        "loads[0].wheels", "loads[0].value", "criteria.live_deflection", "criteria.lifting")]

@@ -29,7 +29,8 @@ from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.design.lifting import profile_of
-from shopbeam.jobs.jobfile import kind_mismatch, lifting_uniform_words
+from shopbeam.jobs.jobfile import (STUBBY_LIMIT, kind_mismatch, lifting_uniform_words,
+                                   stubby_words)
 
 
 # ------------------------------------------------------------------ root finding
@@ -111,6 +112,12 @@ class CapacityResult:
         return governing(list(self.checks)) if self.checks else None
 
 
+# A governing ratio under the live loads as entered below this is rounding, not demand (a
+# load on a support leaves deflections of 1e-19 in): the factor would be 1e17 or more, a
+# number with no meaning, so it is reported as no demand (factor null in the JSON).
+NO_DEMAND = 1e-9
+
+
 def _has_live(ss) -> bool:
     p = ss.parts
     return bool(p.live or p.patterned or (p.moving and any(p.moving[0].live)))
@@ -153,6 +160,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")
     out += _live_both_ways(job) + _live_on_spans_unpatterned(job)
     out += _lifting_spread(job)
+    sec = getattr(st, "section", None) or job.section
+    if job.length < STUBBY_LIMIT * (getattr(sec, "depth", 0.0) or 0.0):
+        out.append(stubby_words(job.length, sec, job.units))
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
@@ -375,7 +385,7 @@ def _capacity(job, section, ss, st) -> CapacityResult:
     if _fixed_is_zero(ss):
         e1 = ev(1.0)
         g1 = max(c.ratio for c in e1.checks)
-        if g1 <= 0:
+        if g1 <= NO_DEMAND:
             return CapacityResult(job, math.inf, e1, "no demand",
                                   "the live loads cause no demand on any check")
         k = 1.0 / g1
@@ -431,7 +441,8 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
     live = [ld for ld in job.loads if ld.case == "live"]
     mv = read_moving(job)
     if not math.isfinite(k):
-        return [("max load", "no live load entered")]
+        return [("max load", "the live loads make no demand on any check"
+                 if res.method == "no demand" else "no live load entered")]
     out = []
     if not mv and len(live) == 1 and live[0].kind == "uniform":
         w = abs(live[0].w1) * k

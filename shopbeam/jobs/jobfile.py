@@ -425,6 +425,12 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
         else:
             r.error(f"live_deflection must be a limit like \"L/360\" (checked under the live "
                     f"loads alone), found {ld!r}", "criteria.live_deflection")
+    if ld is not None and live and ratio and not absolute and live < ratio:
+        r.warn(f"live_deflection = {ld!r} is looser than deflection = \"L/{ratio:g}\" on the "
+               "total load: under gravity loads the live load alone deflects less than the "
+               f"total, so it changes nothing. A live-load limit is the stricter one (floors: L/360 live, "
+               "L/240 total, IBC Table 1604.3, from memory): swap them, or remove "
+               "live_deflection", "criteria.live_deflection")
     lift, cat = "", ""
     if "lifting" in crit:
         raw = crit["lifting"]
@@ -980,6 +986,35 @@ def _plausible_section(sec, r: _Reader) -> None:
             return
 
 
+# Span-to-depth below which a member is not a beam (common practice): Euler-Bernoulli beam
+# theory (plane sections stay plane, shear deformation negligible) is good to a few per cent
+# at span/depth 10, falls off below about 4 (ACI 318-19 9.9.1.1 treats a member as a deep
+# beam when its clear span is 4 h or less, from memory), and below 2 the load goes to the
+# supports as a strut rather than by bending: the bending, shear and deflection figures no
+# longer describe the member. Below STUBBY_WARN it is warned (a length unit slip, "10 in" for
+# "10 ft", lands here); below STUBBY_LIMIT design.capacity posts no rating.
+STUBBY_WARN, STUBBY_LIMIT = 3.0, 2.0
+
+
+def stubby_words(length: float, section, system: str = "us", typed=None) -> str:
+    """What to say of a member whose length is under STUBBY_WARN times its depth ("" if it is
+    not): the warning of the reader, and the reason design.capacity gives below STUBBY_LIMIT."""
+    d = getattr(section, "depth", 0.0) or 0.0
+    if not (d > 0 and length < STUBBY_WARN * d):
+        return ""
+    ratio = length / d
+    shown = f'"{typed}"' if isinstance(typed, str) else units.fmt(length, "small_length", system)
+    blocked = ratio < STUBBY_LIMIT
+    return (f"the member is {shown} long, only {ratio:.2g} x the depth of section "
+            f"{section.designation!r} ({units.fmt(d, 'small_length', system)}): beam theory does "
+            "not hold this short (the load goes to the supports as a strut, shear deformation "
+            f"is as large as bending; deep-beam action below about {STUBBY_WARN:g} x the depth, "
+            "common practice), so " + (f"below {STUBBY_LIMIT:g} x the depth the job is NOT RATED"
+                                       if blocked else "its figures are rough")
+            + ". Check the length and its unit (\"10 in\" typed for \"10 ft\"); a block this "
+            "short is a bearing or connection piece, to be checked as one")
+
+
 def _same_both_ways(r: _Reader, section, axis) -> None:
     """axis = "weak" on a section that bends alike about both axes (round, square) is read
     and changes nothing: say so, as for any key that is ignored."""
@@ -1084,6 +1119,11 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                 r.warn("patterned = true changes nothing on a member with a single span and no "
                        "overhang: the load is either on (which is checked) or off; patterns "
                        "matter on continuous spans and overhangs", f"{key}.patterned")
+        if got is not None and not any((got.value,) if got.kind in ("point", "moment")
+                                       else (got.w1, got.w2)):
+            r.warn("this load is zero: it changes nothing (and a zero live load is nothing to "
+                   "rate); give its value, or remove it", f"{key}.value"
+                   if "value" in ld else key)
         if ld.get("uplift") is True and got is not None and got.kind != "moment":
             down = (got.value < 0) if got.kind == "point" else max(got.w1, got.w2) <= 0 < abs(
                 min(got.w1, got.w2))
@@ -1190,6 +1230,11 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
                "end: its deflection limit (L/225 on twice the reach) is for a boom, and a "
                "trolley running between supports needs a monorail's (L/450). Name "
                "\"powered-monorail\" or \"hand-geared-monorail\" if that is what it is",
+               "criteria.lifting")
+    if criteria.lifting and NOT_LIFTING in tags and not is_lifting(tags):
+        r.warn(f"lifting = \"{criteria.lifting}\" names a lifting profile but the tags say "
+               f"\"{NOT_LIFTING}\": it is checked and rated as a lifting device (impact, "
+               "lateral force, lifting deflection limit); remove the one that is wrong",
                "criteria.lifting")
     if is_lifting(tags) and NOT_LIFTING in tags:
         r.warn(f"tags say both \"lifting\" and \"{NOT_LIFTING}\": it is checked and rated as "
@@ -1552,6 +1597,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if section is not None:
             _plausible_section(section, r)
             _same_both_ways(r, section, axis)
+            if length is not None and stubby_words(length, section, system):
+                r.warn(stubby_words(length, section, system, beam.get("length")), "beam.length")
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
@@ -1608,6 +1655,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 r.warn("bearing is the length a support bears on the member; a hinge is a "
                        "moment release inside the member, not a support, so it ignores it",
                        f"supports[{i}].bearing")
+            elif s.get("type") == "fixed":
+                r.warn("bearing is the length a support bears on the member; a fixed end is a "
+                       "connection (welded or bolted into a wall or column), so the web and "
+                       "bearing checks are not made there and it changes nothing: check the "
+                       "connection itself, or make the support a pin if the member sits on it",
+                       f"supports[{i}].bearing")
 
     raw_loads = data.get("loads", [])
     loads: list[Load] = []
@@ -1657,6 +1710,11 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                            "changes nothing", f"loads[{i}].wheels")
                 else:
                     contacts[f"loads[{i}]"] = n
+        elif _is_table(ld) and "wheels" in ld and ld.get("type") in LOAD_KINDS:
+            r.warn(f"wheels says how a point load hung from the bottom flange bears on it (the "
+                   f"trolley wheels or clamp jaws); this load is a {ld.get('type')} load, "
+                   "so it changes nothing. Give a hoist as a point load, or trolley "
+                   "wheels as [[moving]]", f"loads[{i}].wheels")
     _twice(r, raw_loads)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
