@@ -215,11 +215,35 @@ def test_a_parked_hoist_gets_the_lateral_force_by_hand():
 
 
 def test_the_lateral_force_counts_the_hoist_weight_but_not_the_impact():
-    # 25 % impact and a 100 lbf hoist: Mx = (1.25 x 2000 + 100) x 192 / 4 = 124800 lbf*in,
-    # H = 20 % x (2000 + 100) = 420 lbf, My = 420 x 192 / 4 = 20160 lbf*in;
-    # 124.8 / 819.4 + 20.16 / 119.80 = 0.1523 + 0.1683 = 0.3206 (Mcx, Mcy as above)
+    # 25 % impact on the maximum wheel load, rated load and hoist weight together (ASCE 7-16
+    # 4.9.2 and 4.9.3): Mx = 1.25 x (2000 + 100) x 192 / 4 = 126000 lbf*in; the lateral
+    # force has no impact (4.9.4): H = 20 % x (2000 + 100) = 420 lbf, My = 420 x 192 / 4 =
+    # 20160 lbf*in; 126.0 / 819.4 + 20.16 / 119.80 = 0.1538 + 0.1683 = 0.3221 (Mcx, Mcy as
+    # above)
     c = _check(parked(RATED + HOIST, criteria="impact = 0.25"), "lateral trolley force")
-    assert c.ratio == pytest.approx(0.3206, abs=1.5e-3)
+    assert c.ratio == pytest.approx(0.3221, abs=5e-4)
+
+
+def test_the_impact_raises_the_hoist_and_trolley_weight_too():
+    # ASCE 7-16 4.9.2: the maximum wheel load is rated load plus trolley and hoist weight;
+    # 4.9.3 raises that by the impact allowance. A 2000 lbf rated load and a 100 lbf hoist
+    # parked at mid-span of the 16 ft simple span, 25 % impact: the bending check's moment is
+    # 1.25 x 2100 x 16 / 4 = 10500 lbf*ft (AISC Manual Table 3-23, case 7); before, the
+    # hoist weight took no impact (10400 lbf*ft).
+    def moment(text):
+        c = _check(text, "bending")
+        assert c.unit == "N*m"
+        return c.demand / (LBF * 0.3048)
+
+    assert moment(parked(RATED + HOIST, criteria="impact = 0.25")) == pytest.approx(
+        10500.0, rel=1e-9)
+    # a [[moving]] set's dead part (the trolley's weight) the same way: one wheel of 1000 lbf
+    # rated and 100 lbf trolley weight, worst at mid-span: 1.25 x 1100 x 16 / 4 = 5500 lbf*ft
+    assert moment(monorail('["-1000 lbf"]', extra='dead = ["-100 lbf"]',
+                           criteria="impact = 0.25")) == pytest.approx(5500.0, rel=1e-9)
+    # a hand-geared device has no impact: the weights as entered, 2100 x 16 / 4
+    assert moment(parked(RATED + HOIST, criteria='lifting = "hand-geared-monorail"')) == \
+        pytest.approx(8400.0, rel=1e-9)
 
 
 def test_a_parked_hoist_hangs_from_the_bottom_flange_unless_told_otherwise():

@@ -117,9 +117,9 @@ HAND_TOTALS = {
     "mezzanine-joist": ((125 + 12) * 2 * 12, 8.2),              # psf x 24 in x 12 ft
     "storage-platform-beam": ((750 + 90) * 14, 18.0),
     "monorail-hoist-beam": (2000 + 120, 18.4),
-    # moving trolley: the state shown is the governing one, live axles with 25% impact
-    # (powered monorail, ASCE 7-16 4.9.3)
-    "monorail-trolley": (2 * 1000 * 1.25 + 2 * 60, 25.4),
+    # moving trolley: the state shown is the governing one, the axles (rated load and
+    # trolley weight) with 25% impact (powered monorail, ASCE 7-16 4.9.2 and 4.9.3)
+    "monorail-trolley": (2 * (1000 + 60) * 1.25, 25.4),
     "jib-arm": (1000 + 80, 15.0),
     "sign-bracket": (75 + 75 + 15, 4.32),
     "awning-bracket": (18 * 4 + 180 * 4 + 120 * 3 / 2 + 40, 5.59),

@@ -257,9 +257,9 @@ def _flange_loads(job, sol, sec, prof: Profile, impact: float):
             return None
         lat = []
         for ld, f, dd in zip(wheels, mv.live, mv.dead):
-            # the wheel carries dd + k (1 + impact) f; the lateral force is 20 % of k f + dd
-            live = (ld.value - dd) / (1 + impact)
-            lat.append(Load("point", at=ld.at, value=prof.lateral * abs(live + dd)))
+            # the wheel carries (1 + impact) (dd + k f) (the impact raises the trolley's
+            # weight too, `loading.load_parts`); the lateral force is 20 % of k f + dd
+            lat.append(Load("point", at=ld.at, value=prof.lateral * abs(ld.value / (1 + impact))))
     else:
         # a hoist parked at fixed places: every point load of the job is rated load (live,
         # carrying k (1 + impact)) or hoist and trolley weight (dead); the lateral force is
@@ -267,8 +267,8 @@ def _flange_loads(job, sol, sec, prof: Profile, impact: float):
         wheels = hoist_loads(sol)
         if not wheels:
             return None
-        lat = [Load("point", at=ld.at, value=prof.lateral * abs(
-            ld.value if ld.case == "dead" else ld.value / (1 + impact))) for ld in wheels]
+        lat = [Load("point", at=ld.at, value=prof.lateral * abs(ld.value / (1 + impact)))
+               for ld in wheels]  # dead and live both carry the impact here (see above)
     return wheels, lat
 
 

@@ -35,7 +35,7 @@ import numpy as np
 
 from shopbeam import units
 from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_points, checks_for,
-                                    impact_of)
+                                    impact_of, profile_of)
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
@@ -78,17 +78,34 @@ class LoadParts:
     fixed: tuple[Load, ...]
     live: tuple[Load, ...]
     patterned: tuple[Load, ...]
-    moving: tuple[MovingLoad, ...]
+    moving: tuple[MovingLoad, ...]  # dead wheel parts include `hoist_impact`
     impact: float
+    hoist_impact: float = 0.0  # on the fixed hoist/trolley weight of a lifting job (above)
 
 
 def load_parts(job, section=None) -> LoadParts:
+    """The job's loads in parts. On a lifting job the impact allowance also raises the hoist
+    and trolley weight (dead point loads, the dead part of each wheel): ASCE 7-16 4.9.3
+    raises the maximum wheel loads, which are rated load plus trolley and hoist weight
+    (4.9.2). The lateral force (4.9.4) is taken without impact, from the loads as entered."""
     j = job if section is None else replace(job, section=section)
     loads = j.member_loads()
-    fixed = tuple(ld for ld in loads if ld.case != "live")
+    imp = impact_of(job)
+    hoist = imp if imp and profile_of(job) is not None else 0.0
+    fixed = tuple(replace(ld, value=ld.value * (1 + hoist)) if _hoist_weight(ld, hoist) else ld
+                  for ld in loads if ld.case != "live")
     live = tuple(ld for ld in loads if ld.case == "live" and not ld.patterned)
     pat = tuple(ld for ld in loads if ld.case == "live" and ld.patterned)
-    return LoadParts(fixed, live, pat, read_moving(job), impact_of(job))
+    moving = tuple(replace(mv, dead=tuple(d * (1 + hoist) for d in mv.dead))
+                   for mv in read_moving(job)) if hoist else read_moving(job)
+    return LoadParts(fixed, live, pat, moving, imp, hoist)
+
+
+def _hoist_weight(ld: Load, hoist: float) -> bool:
+    """A dead point load of a lifting job's [[loads]]: hoist or trolley weight (every point
+    load of a lifting job is rated load or that weight, see `lifting.hoist_loads`)."""
+    return bool(hoist) and ld.kind == "point" and bool(ld.value) \
+        and (ld.key or "").startswith("loads")
 
 
 def needs_states(job) -> bool:
@@ -1108,7 +1125,8 @@ def _lateral(job, ss, st, mv, k, static_loads):
     if unit != "N*m" or not limit > 0:
         return None
     mny, _ = lifting.flange_weak_strength(sec, job.material)
-    loads = np.array([prof.lateral * abs(k * f + d) for f, d in zip(mv.live, mv.dead)])
+    h = 1 + ss.parts.hoist_impact  # the lateral force is taken without impact (4.9.4)
+    loads = np.array([prof.lateral * abs(k * f + d / h) for f, d in zip(mv.live, mv.dead)])
     return loads, limit / (mny / 1.67)
 
 
