@@ -15,6 +15,7 @@ import pytest
 from shopbeam.design import local
 from shopbeam.design.analysis import analyze, to_json
 from shopbeam.design.capacity import capacity
+from shopbeam.design.loading import evaluate, walk_patterns
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.errors import InputErrors
 
@@ -264,3 +265,169 @@ def test_vectorised_sizing_allowables_equal_the_section_by_section_ones(lifting)
         for j in range(len(items)):
             assert pv[i, j] == pytest.approx(pu[j][0], rel=1e-12) and pn[i, j] == pu[j][1]
             assert bv[i, j] == pytest.approx(be[j][0], rel=1e-12) and bn[i, j] == be[j][1]
+
+
+# ------------------------------------------------------------------ web sidesway buckling
+# AISC 360-16 J10.4 (formulas from memory). W12x14 from the AISC Shapes Database v15.0:
+# d 11.9, bf 3.97, tw 0.200, tf 0.225 in, h/tw 54.3, Sx 14.9 in^3. All figures below are
+# worked out by hand in kips and inches, not by the code under test.
+W12X14 = dict(tw=0.200, tf=0.225, bf=3.97, h_tw=54.3, sx=14.9)
+SIDESWAY_JOB = """schema = 1
+title = "W12x14 point load braced at the load"
+units = "us"
+tags = ["not-lifting"]
+[beam]
+length = "{length}"
+section = "W12X14"
+material = "A992"
+self_weight = false
+{beam}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "{length}"
+type = "roller"
+[[loads]]
+type = "point"
+at = "{at}"
+value = "-1000 lbf"
+{load}
+"""
+
+
+def _sidesway_job(length="12 ft", at="6 ft", beam='braces = ["6 ft"]', load=""):
+    return parse_job_text(SIDESWAY_JOB.format(length=length, at=at, beam=beam, load=load))
+
+
+def _hand_j10_7(cr_ksi, lb_in):
+    """J10-7 by hand, kips: Cr tw^3 tf / h^2 x 0.4 ((h/tw)/(Lb/bf))^3."""
+    s = W12X14
+    h = s["h_tw"] * s["tw"]  # 10.86 in
+    ratio = s["h_tw"] / (lb_in / s["bf"])
+    return cr_ksi * s["tw"] ** 3 * s["tf"] / h**2 * 0.4 * ratio**3, ratio
+
+
+def test_web_sidesway_formulas_j10_6_and_j10_7():
+    # Lb = 12 ft = 144 in: (h/tw)/(Lb/bf) = 54.3 / (144 / 3.97) = 1.4970 <= 1.7;
+    # Cr tw^3 tf / h^2 = 960,000 x 0.008 x 0.225 / 10.86^2 = 1728 / 117.94 = 14.651 kips;
+    # J10-7: 14.651 x 0.4 x 1.4970^3 = 14.651 x 0.4 x 3.3550 = 19.66 kips
+    want, r = _hand_j10_7(960_000, 144)
+    assert want == pytest.approx(19.66, rel=1e-3) and r == pytest.approx(1.4970, rel=1e-4)
+    rn, eq, ratio = local.web_sidesway_buckling(960_000 * KSI, 0.2 * IN, 0.225 * IN,
+                                                10.86 * IN, 144 * IN, 3.97 * IN)
+    assert eq == "J10-7" and rn / KIP == pytest.approx(want, rel=1e-9)
+    assert ratio == pytest.approx(r, rel=1e-12)
+    # J10-6 (flange restrained against rotation): 14.651 x (1 + 0.4 x 3.3550) = 34.31 kips
+    rn, eq, _ = local.web_sidesway_buckling(960_000 * KSI, 0.2 * IN, 0.225 * IN, 10.86 * IN,
+                                            144 * IN, 3.97 * IN, rotation_restrained=True)
+    assert eq == "J10-6" and rn / KIP == pytest.approx(14.651 * (1 + 0.4 * 3.3550), rel=1e-3)
+    # past the limits the limit state does not apply: Lb = 96 in gives 54.3 / (96 / 3.97)
+    # = 2.245 (> 1.7, <= 2.3); Lb = 90 in gives 2.395 (> 2.3)
+    assert local.web_sidesway_buckling(960_000 * KSI, 0.2 * IN, 0.225 * IN, 10.86 * IN,
+                                       96 * IN, 3.97 * IN)[0] is None
+    assert local.web_sidesway_buckling(960_000 * KSI, 0.2 * IN, 0.225 * IN, 10.86 * IN,
+                                       96 * IN, 3.97 * IN, rotation_restrained=True)[0] > 0
+    assert local.web_sidesway_buckling(960_000 * KSI, 0.2 * IN, 0.225 * IN, 10.86 * IN,
+                                       90 * IN, 3.97 * IN, rotation_restrained=True)[0] is None
+
+
+def test_web_sidesway_governs_the_rating_of_a_beam_braced_at_the_load_only():
+    # 12 ft simple span, point load at mid-span on the top flange, the top flange braced at
+    # the load: the bottom flange is unbraced over the 12 ft between the supports, so
+    # Lb = 144 in and J10-7 gives 19.66 kips / 1.76 = 11.17 kips. At that load Ma = P L / 4
+    # = 11.17 x 3 = 33.5 kip-ft, 1.5 Ma = 50.3 < My = 50 x 14.9 / 12 = 62.1 kip-ft: Cr
+    # 960,000 ksi holds. Bending (Mp / 1.67 = 43.4 kip-ft) allows 14.5 kips.
+    want, _ = _hand_j10_7(960_000, 144)
+    res = capacity(_sidesway_job())
+    assert res.governing.name == "web sidesway buckling"
+    assert 1000 * LBF * res.factor / KIP == pytest.approx(want / 1.76, rel=1e-9)
+    c = res.governing
+    assert c.clause == "AISC 360-16 J10.4, eq. J10-7" and "from memory" in c.source
+    assert c.params["Lb"] == pytest.approx(144 * IN) and c.params["Cr"] == pytest.approx(
+        960_000 * KSI)
+    assert "top flange only" in c.detail and "not taken as restrained against rotation" \
+        in c.detail
+    assert res.rated
+
+
+def test_web_sidesway_cr_halves_past_my_and_the_factor_stops_there():
+    # the same beam with a dead uniform 0.6 kip/ft (M = 0.6 x 12^2 / 8 = 10.8 kip-ft at mid):
+    # Cr halves once 1.5 Ma reaches My = 62.083 kip-ft, i.e. Ma = 41.389 kip-ft, at
+    # P = (41.389 - 10.8) / 3 = 10.196 kips; there J10-7 with Cr 480,000 allows only
+    # 19.66 / 2 / 1.76 = 5.59 kips, so the rated load stops at 10.196 kips
+    job = _sidesway_job(load='[[loads]]\ntype = "uniform"\nvalue = "-0.6 kip/ft"\n'
+                             'case = "dead"')
+    res = capacity(job)
+    p = 1000 * LBF * res.factor / KIP
+    assert p == pytest.approx((50 * 14.9 / 12 / 1.5 - 10.8) / 3, rel=1e-6)
+    assert "Cr halves" in res.note
+    past = {c.name: c for c in evaluate(job, res.factor * (1 + 1e-6)).checks}
+    assert past["web sidesway buckling"].params["Cr"] == pytest.approx(480_000 * KSI)
+    assert past["web sidesway buckling"].ratio > 1
+    # live loads alone (no dead load): the closed form's k lands past the step and the
+    # bracket finds it: a uniform live 0.3 kip/ft with a 2 kip point load at mid
+    job = parse_job_text(SIDESWAY_JOB.format(length="12 ft", at="6 ft", beam='braces = '
+                                             '["6 ft"]', load='[[loads]]\ntype = "uniform"\n'
+                                             'value = "-300 lbf/ft"').replace(
+        '"-1000 lbf"', '"-2000 lbf"'))
+    res = capacity(job)
+    # M = k (2 x 3 + 0.3 x 18) = 11.4 k kip-ft reaches 41.389 at k = 3.6306
+    assert res.factor == pytest.approx(50 * 14.9 / 12 / 1.5 / 11.4, rel=1e-6)
+    assert all(c.ratio <= 1 for c in res.checks)
+
+
+@pytest.mark.parametrize("case", ["short", "hung", "restrained", "overhang", "braced support"])
+def test_web_sidesway_does_not_apply(case):
+    job = {
+        # 10 ft: 54.3 / (120 / 3.97) = 1.796 > 1.7
+        "short": lambda: _sidesway_job(length="10 ft", at="5 ft", beam='braces = ["5 ft"]'),
+        # hung from the bottom flange: it pulls, not J10.4
+        "hung": lambda: _sidesway_job(load='flange = "bottom"'),
+        # restrained = true holds the flanges against relative movement
+        "restrained": lambda: _sidesway_job(beam='braces = ["6 ft"]\nrestrained = true'),
+        # a load on an overhang's tip side: the moment hogs, the top flange is in tension
+        "overhang": lambda: parse_job_text(SIDESWAY_JOB.format(
+            length="12 ft", at="11 ft", beam="", load="").replace(
+            'at = "12 ft"\ntype = "roller"', 'at = "9 ft"\ntype = "roller"')),
+        # a point load over a support that braces: both flanges held there
+        "braced support": lambda: parse_job_text(SIDESWAY_JOB.format(
+            length="24 ft", at="12 ft", beam="", load="").replace(
+            '[[loads]]', '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]', 1)),
+    }[case]()
+    names = {c.name for c in analyze(job).checks} | {c.name for c in capacity(job).checks}
+    assert "web sidesway buckling" not in names
+    assert "web crippling" in names  # the force is still checked locally
+
+
+def test_web_sidesway_at_a_support_that_does_not_brace_under_hogging():
+    # two spans of 10 ft, the middle roller does not brace (brace = false), the moment hogs
+    # over it: its reaction bears on the bottom flange in compression, unbraced over the
+    # 20 ft between the end supports (240 in): 54.3 / (240 / 3.97) = 0.8982;
+    # J10-7 = 14.651 x 0.4 x 0.8982^3 = 4.247 kips (Cr 960,000: the hogging moment is small)
+    # (the load hangs from the bottom flange, so the support is the only force J10.4 takes)
+    text = SIDESWAY_JOB.format(length="20 ft", at="5 ft", beam="",
+                               load='flange = "bottom"').replace(
+        '[[loads]]', '[[supports]]\nat = "10 ft"\ntype = "roller"\nbrace = false\n[[loads]]', 1)
+    res = analyze(parse_job_text(text))
+    c = next(c for c in res.checks if c.name == "web sidesway buckling")
+    want, _ = _hand_j10_7(960_000, 240)
+    assert want == pytest.approx(14.651 * 0.4 * 0.8982**3, rel=1e-3)
+    assert c.at == pytest.approx(10 * FT) and c.limit / KIP == pytest.approx(want / 1.76,
+                                                                             rel=1e-9)
+    assert "bottom flange" in c.detail and "hogs" in c.detail
+
+
+def test_web_sidesway_with_patterns_is_the_worst_pattern():
+    # patterned loads: the check takes the largest moment over every pattern at the force,
+    # the same as walking all of them (test oracle)
+    text = SIDESWAY_JOB.format(length="24 ft", at="6 ft", beam='braces = ["6 ft", "18 ft"]',
+                               load="").replace(
+        '[[loads]]', '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\ntype = '
+        '"uniform"\nvalue = "-400 lbf/ft"\npatterned = true\n[[loads]]', 1)
+    job = parse_job_text(text)
+    for k in (1.0, 6.0):  # 6: past the step of Cr
+        got = {c.name: c for c in evaluate(job, k).checks}["web sidesway buckling"]
+        walk = walk_patterns(job, k)["web sidesway buckling"][0]
+        assert got.ratio == pytest.approx(walk.ratio, rel=1e-12)
+        assert got.params["Cr"] == walk.params["Cr"]

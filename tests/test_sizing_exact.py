@@ -200,9 +200,15 @@ def test_the_answer_is_the_brute_force_answer_on_40_w_shapes(name, monkeypatch):
     assert all(full[r.designation] <= 1.0 for r in res.passing)
     if name == "spring":
         # springs without moving loads: the per-section spring forces are exact, so where
-        # bending, shear or deflection governs the screen is the full check itself
-        same = [r for r in res.rows if r.governing in ("bending", "shear", "deflection")]
-        assert len(same) > 20
+        # bending, shear or deflection governs both, the screen is the full check itself (the
+        # screen leaves out the local checks at the spring, whose force changes per section:
+        # there the unbraced spring lets the web buckle sideways, J10.4, in the full check)
+        plain = ("bending", "shear", "deflection")
+        gov = {s.designation: max(evaluate(replace(job, section=s), 1.0).checks,
+                                  key=lambda c: c.ratio).name for s in secs}
+        same = [r for r in res.rows if r.governing in plain and gov[r.designation] in plain]
+        assert len(same) > 10
+        assert any(g == "web sidesway buckling" for g in gov.values())
         for r in same:
             assert r.ratio == pytest.approx(full[r.designation], rel=1e-9), r.designation
     # the screen spares most of the full checks

@@ -390,11 +390,25 @@ def _capacity(job, section, ss, st) -> CapacityResult:
                                   "the live loads cause no demand on any check")
         k = 1.0 / g1
         e = ev(k)
-        # rounding can leave the ratio a hair above 1: step down to the passing side
-        while max(c.ratio for c in e.checks) > 1.0:
+        gk = max(c.ratio for c in e.checks)
+        if gk <= 1.0 + 1e-9:
+            # rounding can leave the ratio a hair above 1: step down to the passing side
+            while max(c.ratio for c in e.checks) > 1.0:
+                k = math.nextafter(k, 0.0)
+                e = ev(k)
+            return CapacityResult(job, k, e, "closed form: every ratio is proportional to k")
+        # a limit that changes with the load (web sidesway buckling's Cr halves once the
+        # moment at the force reaches My / 1.5): not proportional, so bracket [0, k]
+        k_lo, h_lo, k_hi, h_hi = 0.0, g0 - 1.0, k, gk - 1.0
+        a, fa, b, fb = brent(lambda x: g(x) - 1.0, k_lo, k_hi, h_lo, h_hi)
+        k = a if fa <= 0 else b
+        e = ev(k)
+        while max(c.ratio for c in e.checks) > 1.0:  # stay on the passing side
             k = math.nextafter(k, 0.0)
             e = ev(k)
-        return CapacityResult(job, k, e, "closed form: every ratio is proportional to k")
+        return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing "
+                              "ratio = 1 (a limit changes with the load)",
+                              _step_note(e, ev(b if fa <= 0 else a)))
     k_lo, h_lo = 0.0, g0 - 1.0
     g1 = g(1.0)
     k_hi, h_hi = (1.0, g1 - 1.0) if g1 > 1.0 else (None, None)
@@ -430,7 +444,25 @@ def _capacity(job, section, ss, st) -> CapacityResult:
     while max(c.ratio for c in e.checks) > 1.0:  # stay on the passing side
         k = math.nextafter(k, 0.0)
         e = ev(k)
-    return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1")
+    return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1",
+                          _step_note(e, ev(b if fa <= 0 else a)))
+
+
+def _step_note(at_k: Evaluation, past: Evaluation) -> str:
+    """Words for a factor that stops where a limit drops as the load grows (no ratio reaches
+    1 at k, and just past k one is over it): web sidesway buckling's Cr halves once the
+    moment at the force reaches My / 1.5 (AISC 360-16 J10.4). Empty otherwise."""
+    if max(c.ratio for c in at_k.checks) >= 1.0 - 1e-6:
+        return ""
+    over = [c for c in past.checks if c.ratio > 1.0]
+    if not over:
+        return ""
+    c = max(over, key=lambda c: c.ratio)
+    before = next((x.ratio for x in at_k.checks if x.name == c.name), 0.0)
+    why = (" (Cr halves once 1.5 Ma reaches My at the force, AISC 360-16 J10.4)"
+           if c.name == "web sidesway buckling" else "")
+    return (f"the factor stops where the {c.name} limit drops as the load grows{why}: its "
+            f"ratio is {before:.3f} at k and {c.ratio:.3f} just past it")
 
 
 # ------------------------------------------------------------------ what to post

@@ -502,10 +502,15 @@ class Envelopes:
 
     def abs_value(self, name: str, x: float) -> float:
         """The largest |value| at x over all patterns (both envelopes)."""
+        return max(abs(v) for v in self.values(name, x))
+
+    def values(self, name: str, x: float) -> tuple[float, float]:
+        """(largest, smallest) value at x over all patterns (the two envelopes)."""
         e = self.env[name]
         j = int(np.clip(np.searchsorted(e.breaks, x, side="right") - 1, 0, len(e.breaks) - 2))
         t = np.array([x - e.breaks[j]])
-        return max(abs(float(_horner(self.coeffs[name, u][j:j + 1], t)[0])) for u in (True, False))
+        hi, lo = (float(_horner(self.coeffs[name, u][j:j + 1], t)[0]) for u in (True, False))
+        return hi, lo
 
     def abs_extreme(self, name: str, lo=None, hi=None) -> EnvelopeExtreme:
         a, b = self.extreme(name, True, lo, hi), self.extreme(name, False, lo, hi)
@@ -651,12 +656,14 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
     reactions = env.reactions()
     allon = tuple(range(len(ss.segs)))
     base_sol = get(allon)
-    for c in _local.local_checks(job, base_sol, sec):
+    # web sidesway buckling reads the moment at the force: the largest over every pattern
+    moments = lambda x: env.values("moment", x)  # noqa: E731
+    for c in _local.local_checks(job, base_sol, sec, moments):
         _keep(best, c, allon, None, describe_pattern(ss, allon, fmt), base_sol)
     for key, which in (("max_up", "upward"), ("max_down", "downward")):
         fake = replace(base_sol, reactions=tuple(
             replace(r, force=e[key]) for r, e in zip(base_sol.reactions, reactions)))
-        for c in _local.local_checks(job, fake, sec):
+        for c in _local.local_checks(job, fake, sec, moments):
             _keep(best, c, allon, None, f"each support at its largest {which} reaction over "
                   "all patterns (see the reaction envelope)", base_sol)
     # bending: the governing length's pattern, checked on that length alone for the check's

@@ -24,6 +24,25 @@ memory). Qf = 1.3 - 0.4 U / beta <= 1 depends on the utilisation U of the tube; 
 at its lower bound 1.3 - 0.4 Z/S, valid whenever the bending check passes (U = M Omega /
 (Fy S) <= Z / S), so the check stays linear in the loads.
 
+Web sidesway buckling, AISC 360-16 J10.4 (from memory), for I-shapes and channels: a force
+that bears on a flange in compression (a point load pushing down on the top flange where the
+moment sags; a reaction pushing up on the bottom flange where it hogs) at a point where nothing
+holds the flanges against moving sideways relative to each other. Rn = Cr tw^3 tf / h^2
+[1 + 0.4 ((h/tw)/(Lb/bf))^3] (J10-6, loaded flange restrained against rotation, applies while
+the ratio is at most 2.3) or Cr tw^3 tf / h^2 [0.4 ((h/tw)/(Lb/bf))^3] (J10-7, not restrained
+against rotation, ratio at most 1.7); past those limits the limit state does not apply.
+Omega 1.76; Cr = 960,000 ksi where the moment at the force is below My (ASD: 1.5 Ma < My),
+else 480,000 ksi; Lb is the largest laterally unbraced length of either flange at the force.
+How this model holds the flanges: `restrained = true` holds them against relative movement all
+along (J10.4 then does not apply); a support that braces holds both flanges where it sits (so
+J10.4 does not apply there); `braces` and `braced = true` are taken as holding the top flange
+only (conservative: a deck or a brace clipped to the top flange); the bottom flange is held
+only at the supports that brace; no flange is taken as restrained against rotation, so J10-7
+is used. Where the job has moving loads the moment at a force changes with the trolley: the
+force is then taken as on a flange in compression, with Cr 480,000 ksi and Lb the largest
+unbraced length of either flange anywhere (conservative). With patterned loads the moment is
+the largest over every pattern (`moments`).
+
 Bearing length lb comes from the job (``bearing`` on a support or a point load, ``beam.bearing``
 for all). When it is missing: a support reaction within d of the member end of an I-shape or
 channel takes lb = k (kdes), the least AISC 360-16 J10.2 lets an end beam reaction take ("lb
@@ -41,12 +60,19 @@ from dataclasses import dataclass
 import numpy as np
 
 from shopbeam import units
+from shopbeam.design.basis import support_braces
 from shopbeam.design.lifting import profile_of
 from shopbeam.design.results import Check, Unchecked
 
 OMEGA_FLB = 1.67  # AISC 360-16 J10.1
 OMEGA_WLY = 1.50  # AISC 360-16 J10.2
 OMEGA_WCR = 2.00  # AISC 360-16 J10.3
+OMEGA_WSB = 1.76  # AISC 360-16 J10.4 (from memory)
+# AISC 360-16 J10.4 (from memory): Cr = 960,000 ksi where Mu < My at the force (ASD:
+# 1.5 Ma < My), else 480,000 ksi
+CR_ELASTIC = 960_000 * units.KSI
+CR_YIELDED = 480_000 * units.KSI
+SIDESWAY = "web sidesway buckling"
 SOURCE = "AISC 360-16"
 HSS_SOURCE = "AISC 360-16 (from memory)"
 ZERO = 1e-9  # N: smaller forces are not forces
@@ -101,6 +127,22 @@ def hss_wall_crippling(e: float, fy: float, t: float, h: float, lb: float, end: 
         return 0.8 * t**2 * (1 + 3 * lb / hw) * root, "K2.2 sidewall crippling, end form as J10-5a"
     return 0.8 * t**2 * (1 + (4 * lb / hw - 0.2)) * root, \
         "K2.2 sidewall crippling, end form as J10-5b"
+
+
+def web_sidesway_buckling(cr: float, tw: float, tf: float, h: float, lb: float, bf: float,
+                          rotation_restrained: bool = False) -> tuple[float | None, str, float]:
+    """AISC 360-16 J10.4 (from memory): (Rn, equation, (h/tw)/(Lb/bf)); Rn is None where the
+    limit state does not apply (the ratio over 2.3 with the loaded flange restrained against
+    rotation, J10-6; over 1.7 without, J10-7)."""
+    ratio = (h / tw) / (lb / bf) if lb > 0 else math.inf
+    base = cr * tw**3 * tf / h**2
+    if rotation_restrained:
+        if ratio > 2.3:
+            return None, "J10-6 does not apply: (h/tw)/(Lb/bf) > 2.3", ratio
+        return base * (1 + 0.4 * ratio**3), "J10-6", ratio
+    if ratio > 1.7:
+        return None, "J10-7 does not apply: (h/tw)/(Lb/bf) > 1.7", ratio
+    return base * 0.4 * ratio**3, "J10-7", ratio
 
 
 def hss_qf_lower(sec) -> float:
@@ -253,14 +295,17 @@ def design_factor_scale(job) -> float:
     return prof.nd / 1.67 if prof is not None and prof.nd else 1.0
 
 
-def local_checks(job, sol, sec=None) -> list[Check]:
-    """The worst of each local limit state over the concentrated forces of one state."""
+def local_checks(job, sol, sec=None, moments=None) -> list[Check]:
+    """The worst of each local limit state over the concentrated forces of one state.
+    `moments(x) -> (largest, smallest)` moment at x over the load states the caller covers
+    (web sidesway buckling reads it; default this state's own moment)."""
     sec = sec or job.section
     if not applies(sec) or getattr(job.material, "kind", "") not in ("steel", "stainless"):
         return []
     scale = design_factor_scale(job)
     worst: dict[str, tuple] = {}
-    for f in forces_of(job, sol):
+    forces = forces_of(job, sol)
+    for f in forces:
         for name, rn, eq, omega, clause, extra in limit_states(sec, job.material, job.length,
                                                                f, job.lifting):
             omega = omega * scale
@@ -269,7 +314,143 @@ def local_checks(job, sol, sec=None) -> list[Check]:
             old = worst.get(name)
             if old is None or ratio > old[0]:
                 worst[name] = (ratio, f, rn, eq, omega, clause, extra)
-    return [_check(job, sec, name, *w) for name, w in worst.items()]
+    out = [_check(job, sec, name, *w) for name, w in worst.items()]
+    side = sidesway_check(job, sol, sec, forces, moments)
+    return out + ([side] if side is not None else [])
+
+
+# ------------------------------------------------------------------ web sidesway buckling
+def flange_stops(job) -> tuple[list[float] | None, list[float]]:
+    """The points that hold each flange against moving sideways, with the member's ends:
+    (top, bottom); top is None when `braced = true` holds it all along. `braces` and
+    `braced` are taken as holding the top flange only; the bottom flange is held at the
+    supports that brace (conservative, see the module)."""
+    L = job.length
+    sup = [x for x in support_braces(job, job.supports) if 0.0 <= x <= L]
+    bottom = sorted({0.0, L, *sup})
+    if job.braced:
+        return None, bottom
+    return sorted({0.0, L, *sup, *(x for x in job.braces if 0.0 <= x <= L)}), bottom
+
+
+def unbraced_at(stops: list[float] | None, x: float, tol: float) -> float:
+    """The largest unbraced length of a flange held at `stops` that touches x (0 when held
+    all along)."""
+    if stops is None:
+        return 0.0
+    return max((b - a for a, b in zip(stops, stops[1:]) if a - tol <= x <= b + tol),
+               default=0.0)
+
+
+def sidesway_possible(job, sec, mat) -> bool:
+    """Whether web sidesway buckling can apply to this section in this job (a sizing sweep
+    leaves it to the full check where it can): an I-shape or channel in steel, not
+    `restrained`, with a point load, a wheel set or a support that does not brace."""
+    if job.restrained or applies(sec) != "web" or \
+            getattr(mat, "kind", "") not in ("steel", "stainless"):
+        return False
+    held = set(support_braces(job, job.supports))
+    return bool(any(ld.kind == "point" and ld.value for ld in job.loads)
+                or getattr(job, "moving", ())
+                or any(sp.kind in ("pin", "roller", "spring") and sp.at not in held
+                       for sp in job.supports))
+
+
+def sidesway_dims(sec) -> dict:
+    d = sec.dims
+    tw, tf, bf = d["tw"], d["tf"], d["bf"]
+    h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / tw
+    return {"tw": tw, "tf": tf, "bf": bf, "h": h_tw * tw,
+            "webs": 2.0 if sec.shape == "double-channel" else 1.0}
+
+
+def sidesway_check(job, sol, sec, forces=None, moments=None) -> Check | None:
+    """AISC 360-16 J10.4 web sidesway buckling (see the module): the worst over the forces
+    of one state that bear on a flange in compression where nothing holds the flanges
+    against relative sideways movement, or None where it applies to none."""
+    if job.restrained or applies(sec) != "web":
+        return None
+    L = job.length
+    tol = 1e-9 * max(L, 1e-9)
+    held = support_braces(job, job.supports)
+    top, bottom = flange_stops(job)
+    moving = bool(getattr(job, "moving", ()))
+    dm = sidesway_dims(sec)
+    fy = job.material.fy
+    my = fy * min(sec.sx_top, sec.sx_bot)
+    omega = OMEGA_WSB * design_factor_scale(job)
+    if moving:
+        lb_all = max(max(b - a for a, b in zip(s, s[1:])) for s in (top or [0.0, 0.0], bottom))
+    worst = None
+    for f in forces if forces is not None else forces_of(job, sol):
+        if f.pulls or abs(f.force) <= ZERO:
+            continue
+        if any(abs(h - f.at) <= tol for h in held):
+            continue  # a support that braces holds both flanges here
+        if moving:
+            mc, lb, lbt, lbb = math.inf, lb_all, lb_all, lb_all
+        else:
+            hi, lo = moments(f.at) if moments is not None else (float(sol.moment(f.at)),) * 2
+            mc = hi if f.face == "top" else -lo  # the loaded flange's compression moment
+            if not mc > 1e-9 * abs(f.force) * max(L, 1e-9):
+                continue  # the loaded flange is in tension here: not J10.4
+            lbt, lbb = unbraced_at(top, f.at, tol), unbraced_at(bottom, f.at, tol)
+            lb = max(lbt, lbb)
+        cr = CR_ELASTIC if 1.5 * mc < my else CR_YIELDED
+        rn, eq, r = web_sidesway_buckling(cr, dm["tw"], dm["tf"], dm["h"], lb, dm["bf"])
+        if rn is None:
+            continue
+        rn *= dm["webs"]
+        ratio = abs(f.force) * omega / rn if rn > 0 else math.inf
+        if worst is None or ratio > worst[0]:
+            worst = (ratio, f, rn, eq, r, cr, mc, lb, lbt, lbb)
+    if worst is None:
+        return None
+    return _sidesway(job, sec, dm, my, omega, moving, *worst[1:])
+
+
+def _sidesway(job, sec, dm, my, omega, moving, f, rn, eq, r, cr, mc, lb, lbt, lbb) -> Check:
+    sy = job.units
+    ln = lambda x: units.fmt(x, "length", sy)  # noqa: E731
+    sm = lambda x: units.fmt(x, "small_length", sy)  # noqa: E731
+    flange = "top" if f.face == "top" else "bottom"
+    crw = "960,000 ksi" if cr == CR_ELASTIC else "480,000 ksi"
+    if moving:
+        where = ("moving loads: the moment at the force changes with the trolley, so its "
+                 f"flange is taken as in compression, Cr {crw} and Lb {ln(lb)} the largest "
+                 "unbraced length of either flange anywhere (conservative)")
+    else:
+        sense = "sags" if flange == "top" else "hogs"
+        where = (f"the moment {sense} there ({units.fmt(mc, 'moment', sy)}), so the loaded "
+                 f"{flange} flange is in compression; Cr {crw} (1.5 Ma "
+                 f"{'<' if cr == CR_ELASTIC else '>='} My = Fy Sx = "
+                 f"{units.fmt(my, 'moment', sy)}); Lb {ln(lb)}, the largest unbraced length "
+                 f"of either flange at the force (top flange {ln(lbt) if lbt else 'braced all along'}, "
+                 f"bottom flange {ln(lbb)})")
+    hold = ("braces and braced = true are taken as holding the top flange only (conservative); "
+            "the bottom flange is held only at the supports that brace; the loaded flange is "
+            "not taken as restrained against rotation, so J10-7 (restrained = true would hold "
+            "the flanges against relative sideways movement, and J10.4 would not apply)")
+    webs = " x 2 webs" if dm["webs"] == 2 else ""
+    formula = (f"AISC 360-16 J10.4: Ru <= Rn / {omega:.3g}, Rn = Cr tw^3 tf / h^2 [0.4 "
+               "((h/tw)/(Lb/bf))^3] (J10-7, loaded flange not restrained against rotation; "
+               "applies while (h/tw)/(Lb/bf) <= 1.7; J10-6 [1 + 0.4 (...)^3] when restrained, "
+               f"<= 2.3), Cr 960,000 ksi where 1.5 Ma < My, else 480,000 ksi (from memory)"
+               f"{webs}; {eq} at {f.what}: (h/tw)/(Lb/bf) = {dm['h'] / dm['tw']:.3g} / "
+               f"({ln(lb)} / {sm(dm['bf'])}) = {r:.3g}")
+    scale = design_factor_scale(job)
+    if scale != 1.0:
+        formula += (f"; below-the-hook: Omega x Nd / 1.67 = {omega:.3g} (ASME BTH-1 design "
+                    f"factor Nd {scale * 1.67:g} in place of the AISC 1.67)")
+    params = {"Rn": rn, "omega": omega, "Cr": cr, "h": dm["h"], "tw": dm["tw"],
+              "tf": dm["tf"], "bf": dm["bf"], "Lb": lb, "Lb_top": lbt, "Lb_bottom": lbb,
+              "ratio_h_tw_Lb_bf": r, "My": my, "webs": dm["webs"]}
+    if math.isfinite(mc):
+        params["Ma"] = mc
+    return Check(SIDESWAY, abs(f.force), rn / omega, "N", formula, f.at,
+                 detail=f"{f.what} (bears on the {flange} flange): {eq}; {where}; {hold}",
+                 clause=f"AISC 360-16 J10.4, eq. {eq}", source="AISC 360-16 (from memory)",
+                 params=params)
 
 
 def sizing_items(job, ss, sw_sol, pats) -> list[tuple]:

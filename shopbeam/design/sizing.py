@@ -738,7 +738,8 @@ def _batched(job, base, parts, cands, with_capacity):
         seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
         rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
                    fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained),
-                   fl.cap, fl.uses_cb, wheel, bool(fl.special)))
+                   fl.cap, fl.uses_cb, wheel, bool(fl.special),
+                   _local.sidesway_possible(job, sec, mat)))
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
@@ -749,6 +750,7 @@ def _batched(job, base, parts, cands, with_capacity):
     cap = np.array([r[10] for r in rs])
     uses_cb = np.array([bool(r[11]) for r in rs])
     special = np.array([r[13] for r in rs])  # tees and angles (F9, F10): see below
+    sidesway = np.array([r[14] for r in rs])  # web sidesway buckling can apply (J10.4)
     ltb1 = np.array([[s[1] for s in r[7]] for r in rs])  # (R, nseg)
     free = [s[2] for s in rs[0][7]]
     if exact:
@@ -800,6 +802,77 @@ def _batched(job, base, parts, cands, with_capacity):
         al_pull[:], al_bear[:] = pv[:, keys], bv[:, keys]
         nm_pull = [list(row) for row in pn[:, keys]]
         nm_bear = [list(row) for row in bn[:, keys]]
+    # web sidesway buckling (local.sidesway_check): each force that bears on a flange in
+    # compression, with the moment at it; in the exact sweep with patterns the largest over
+    # them (the envelope, as the full check takes it), in a screen each state's own (a real
+    # state: never above the full check, which takes moving loads conservatively)
+    side_on = bool(n_it and sidesway.any())
+    if side_on:
+        tol_x = 1e-9 * L
+        s_top, s_bot = _local.flange_stops(job)
+        s_held = _local.support_braces(job, job.supports)
+        xs = np.array([it[0] for it in items])
+        s_lb = np.array([max(_local.unbraced_at(s_top, x, tol_x),
+                             _local.unbraced_at(s_bot, x, tol_x)) for x in xs])
+        s_free = np.array([not any(abs(h - x) <= tol_x for h in s_held) for x in xs])
+        dm = [(_local.sidesway_dims(r[1]) if sidesway[i] else None) for i, r in enumerate(rs)]
+        one = {"tw": 1.0, "tf": 1.0, "bf": 1.0, "h": 1.0, "webs": 0.0}
+        s_tw, s_tf, s_bf, s_h, s_webs = (np.array([(d or one)[key] for d in dm])
+                                         for key in ("tw", "tf", "bf", "h", "webs"))
+        s_my = np.array([r[2].fy * min(r[1].sx_top, r[1].sx_bot) if sidesway[i] else 1.0
+                         for i, r in enumerate(rs)])
+        s_om = _local.OMEGA_WSB * _local.design_factor_scale(job)
+        # (h/tw)/(Lb/bf) of every section at every force, and whether J10-7 applies there
+        with np.errstate(divide="ignore"):
+            s_r = (s_h / s_tw * s_bf)[:, None] / s_lb[None, :]
+        s_base = (s_webs * s_tw**3 * s_tf / s_h**2)[:, None] * 0.4 * s_r**3
+        s_ok = sidesway[:, None] & (s_r <= 1.7) & s_free[None, :]
+        s_j, s_t = _piece_of(M.breaks, M.nreal, np.broadcast_to(xs, (S, n_it)))
+    side_rows = np.flatnonzero(sidesway) if side_on else np.zeros(0, int)
+
+    def sidesway_jumps():
+        """(R, S x items): the factor k at which each force's Cr halves (1.5 Ma reaches My,
+        the moment being fixed + k (1 + impact) x live at it), inf where none; None when no
+        section has web sidesway buckling. With patterns the largest moment over the states
+        is a max of lines in k, so its crossing is among the states' own."""
+        if not side_on or not side_rows.size:
+            return None
+        out = np.full((R, S * n_it), np.inf)
+        for sl in chunks(side_rows):
+            f, sw_, lv, _lf = M.parts(corr, sl)
+            def at_x(co):  # (1 or n, S, n_it): the part's moment at each force
+                co = np.broadcast_to(co, (co.shape[0], S) + co.shape[2:])
+                return sum(co[:, np.arange(S)[:, None], s_j, e] * s_t[None] ** e
+                           for e in range(co.shape[-1]))
+
+            m0 = orient[None, None, :] * (at_x(f) + wsw[sl, None, None] * at_x(sw_))
+            m1 = orient[None, None, :] * at_x(lv) * (1 + imp)
+            with np.errstate(divide="ignore", invalid="ignore"):
+                kj = (s_my[sl, None, None] / 1.5 - m0) / m1
+            kj = np.where((m1 > 0) & (kj > 0) & s_ok[sl][:, None, :], kj, np.inf)
+            out[sl] = kj.reshape(len(sl), -1)
+        return out
+
+    def sidesway_ratio(kk, sl, mco):
+        n = len(sl)
+        if not side_on:
+            return np.zeros(n)
+        force = (fa[None] + wsw[sl, None, None] * fs[None] + kk[:, None, None] * flv[None])
+        c = mco[:, np.arange(S)[:, None], s_j, :]  # (n, S, n_it, w)
+        mx = sum(c[..., e] * s_t[None] ** e for e in range(c.shape[-1]))
+        mc = orient[None, None, :] * mx  # (n, S, n_it): the loaded flange's compression
+        if exact:
+            mc = np.broadcast_to(mc.max(axis=1, keepdims=True), mc.shape)
+        bears = orient[None, None, :] * force < 0
+        af = np.abs(force)
+        comp = mc > 1e-9 * af * max(L, 1e-9)
+        cr = np.where(1.5 * mc < s_my[sl, None, None], _local.CR_ELASTIC, _local.CR_YIELDED)
+        allow = (cr * s_base[sl][:, None, :]) / s_om  # (n, S, n_it)
+        live_ = bears & comp & (af > _local.ZERO) & s_ok[sl][:, None, :]
+        with np.errstate(divide="ignore", invalid="ignore"):
+            rr = np.where(live_, af / allow, 0.0)
+        return rr.reshape(n, -1).max(axis=1)
+
     if wheels is not None:
         wx, wd, wl = wheels
         per = ws.wheels_per_axle
@@ -883,7 +956,7 @@ def _batched(job, base, parts, cands, with_capacity):
             for um, lim in zip(_absmax_states(lco, U.breaks, U.nreal,
                                               [(a, bb) for a, bb, _ in spans]), live_limits):
                 ldef = np.maximum(ldef, um.max(axis=1) / ei[sl] / lim)
-        rows = [bend, shear, defl, ldef, local_ratio(kk, sl)[0]]
+        rows = [bend, shear, defl, ldef, local_ratio(kk, sl)[0], sidesway_ratio(kk, sl, mco)]
         if wheels is not None:  # bottom-flange bending under each wheel (lifting.wheel_check)
             cw = mco[:, np.arange(S)[:, None], wj]  # (n, S, nw, w)
             mw = sum(cw[..., e] * wt[None] ** e for e in range(cw.shape[-1]))
@@ -912,13 +985,14 @@ def _batched(job, base, parts, cands, with_capacity):
     r1, gi = ratios(np.ones(R))
     if with_capacity and exact:  # a screened row's k would only be an upper bound: the rows
         # checked in full get theirs from `capacity`
-        k = _capacity_vector(ratios, R, r1)
+        k = _capacity_vector(ratios, R, r1, sidesway_jumps())
     else:
         k = np.full(R, np.nan)
     local_names = []
     for sl in chunks(np.arange(R)):
         local_names += local_ratio(np.ones(len(sl)) * (1 + imp), sl, True)[1]
-    names = ("bending", "shear", "deflection", "live deflection", None, "wheel flange bending")
+    names = ("bending", "shear", "deflection", "live deflection", None,
+             _local.SIDESWAY, "wheel flange bending")
     # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
     # each unbraced length, principal axes); the batch leaves their bending out, so their
     # rows are a screen by the other checks (a lower bound) and are checked in full as any
@@ -1025,10 +1099,11 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
     return n
 
 
-def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
+def _capacity_vector(ratios, R: int, g1=None, jumps=None) -> np.ndarray:
     """k with governing ratio 1 for every section at once (Illinois regula falsi, bracketed).
     `ratios(k, rows)` gives the governing ratios of the sections numbered in rows; each step
-    works out only the sections whose k is still moving."""
+    works out only the sections whose k is still moving. `jumps` (R, m): factors where a
+    ratio steps up (inf where none), tried first."""
 
     def at(k, which):
         """The ratios at k of the sections where `which` holds (NaN elsewhere)."""
@@ -1064,6 +1139,27 @@ def _capacity_vector(ratios, R: int, g1=None) -> np.ndarray:
         hi = np.where(need, hi * 4, hi)
         fhi = np.where(need, at(hi, need) - 1.0, fhi)
     bounded = live & (fhi > 0)
+    if jumps is not None:
+        # a ratio with a step (web sidesway buckling's Cr halves at a known factor): where a
+        # step lies inside the bracket, try just below and at it; a root there is the step
+        for _ in range(jumps.shape[1]):
+            inside = np.where((jumps > lo[:, None]) & (jumps < hi[:, None]), jumps, np.inf)
+            kj = inside.min(axis=1)
+            try_ = bounded & np.isfinite(kj)
+            if not try_.any():
+                break
+            kj = np.where(try_, kj, 1.0)
+            kb = kj * (1 - 1e-12)
+            fb = at(kb, try_) - 1.0
+            fj = at(kj, try_) - 1.0
+            below = try_ & (fb > 0)  # the root is under the step
+            step = try_ & (fb <= 0) & (fj > 0)  # the step is the root
+            above = try_ & (fj <= 0)
+            hi, fhi = np.where(below, kb, hi), np.where(below, fb, fhi)
+            lo, flo = np.where(step, kb, lo), np.where(step, fb, flo)
+            hi, fhi = np.where(step, kj, hi), np.where(step, fj, fhi)
+            lo, flo = np.where(above, kj, lo), np.where(above, fj, flo)
+            jumps = np.where(jumps <= kj[:, None], np.inf, jumps)
     side = np.zeros(R)
     for _ in range(100):
         width = hi - lo
