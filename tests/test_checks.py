@@ -303,3 +303,33 @@ def test_impact_allowance_on_lifting_live_loads():
     b0 = next(c for c in analyze(parse_job_text(text.replace('[criteria]', '[criteria]\nimpact = "0%"'))).checks
               if c.name == "bending")
     assert b0.demand == pytest.approx(2 * KIP * 16 * FT / 4, rel=1e-9)
+
+
+def test_slender_hss_web_takes_flange_local_buckling_f7_8():
+    # AISC 360-16 F7.3(c) (from memory): with a slender web the strength is the smaller of
+    # compression flange yielding Rpg Fy S and compression flange local buckling Rpg Fcr S
+    # (F7-8), Fcr = 0.9 E kc / (b/t)^2 (F7-9), kc = 4; Rpg by F5-6 with aw = 2 h t / (b t).
+    # A 10 x 4 x 0.065 in tube, design wall 0.93 x 0.065 = 0.06045 in, Fy 50 ksi, by hand:
+    from shopbeam.members.sections import rect_tube
+
+    t = 0.93 * 0.065
+    b, h = 4 - 3 * t, 10 - 3 * t  # flat widths, AISC 360 B4.1b
+    bt, ht = b / t, h / t  # 63.17, 162.4
+    root = math.sqrt(29000 / 50)
+    aw = 2 * h / b
+    rpg = 1 - aw / (1200 + 300 * aw) * (ht - 5.70 * root)  # 0.953
+    fcr = 0.9 * 29000 * 4 / bt**2  # 26.16 ksi, well under Fy: F7-8 governs
+    assert ht > 5.70 * root and fcr == pytest.approx(26.16, rel=1e-3)
+    sec = rect_tube(10 * IN, 4 * IN, 0.065 * IN, t_des=t * IN)
+    fl = flexure(sec, material("A500-C"), "asd")
+    s = min(sec.sx_top, sec.sx_bot)
+    assert fl.cap == pytest.approx(rpg * fcr * KSI * s, rel=1e-9)
+    assert fl.cap_text.startswith("F7-8") and "kc 4" in fl.cap_text
+    # and below yielding Rpg Fy S, which it used to take (with the slender flange's F7-3)
+    assert fl.cap < rpg * 50 * KSI * s
+    job = parse_job_text(job_text('{ shape = "rect-tube", depth = "10 in", width = "4 in", '
+                                  'wall = "0.065 in" }', "A500-C", length="20 ft",
+                                  loads='[[loads]]\ntype = "uniform"\nvalue = "-20 lbf/ft"'))
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    assert bend.clause == "AISC 360-16 F7.3, eq. F7-8"
+    assert bend.params["Mn"] == pytest.approx(rpg * fcr * KSI * s, rel=1e-9)

@@ -7,7 +7,8 @@ The basis is stated in every check's formula:
   lateral-torsional buckling with Lp, Lr and Cb from the moment diagram), F3 (flange local
   buckling), F6 (I-shapes and channels about the weak axis), F7 (rectangular HSS: flange and
   web local buckling, effective width for slender flanges, lateral-torsional buckling),
-  F8 (round HSS and pipe), F11 (solid bars). Tees, angles, built-up and typed-in sections
+  F8 (round HSS and pipe), F11 (solid bars); a slender HSS web takes the smaller of
+  compression flange yielding Rpg Fy S and local buckling Rpg Fcr S (F7.3(c), F7-8). Tees, angles, built-up and typed-in sections
   get first yield (My / Omega_b) with a warning that LTB and local buckling are not covered.
   Shear per chapter G: G2 (webs of I-shapes and channels, Omega_v = 1.50 or 1.67), G4
   (rectangular HSS), G5 (round HSS), G6 (weak-axis flanges), G3 (tee stems, angle legs).
@@ -657,6 +658,14 @@ def _f7(sec, fy, e, system: str = "us") -> Flexure:
             rpg = min(1.0, 1 - aw / (1200 + 300 * aw) * (ht - 5.7 * root))
             m = rpg * fy * s
             tx = f"F7.3(c) slender web (h/t {ht:.3g}): Mn = Rpg Fy S, Rpg {rpg:.3g}"
+            # and compression flange local buckling (F7-8, F7-9, from memory): Mn = Rpg Fcr
+            # S, Fcr = 0.9 E kc / (b/t)^2 with kc = 4; the smaller of the two
+            fcr = 0.9 * e * 4.0 / bt**2
+            if rpg * fcr * s < m:
+                m = rpg * fcr * s
+                tx = (f"F7-8 compression flange local buckling with a slender web (h/t "
+                      f"{ht:.3g}, b/t {bt:.3g}): Mn = Rpg Fcr S, Fcr = 0.9 E kc / (b/t)^2 = "
+                      f"{fmt(fcr, 'stress', system)} (F7-9, kc 4), Rpg {rpg:.3g} (F5-6)")
             warnings.append("slender HSS web: AISC 360 F7.3(c) applied from memory; "
                             "have the section checked by an engineer")
         if m < cap:
@@ -1192,7 +1201,7 @@ _SOURCES = {"asd": "AISC 360-16", "first-yield": "common practice: first yield w
 # lateral-torsional buckling of F7.4.
 _AISC_SECTION = {"F2-1": "F2.1", "F2-2": "F2.2", "F2-3": "F2.2", "F3-1": "F3.2",
                  "F3-2": "F3.2", "F6-1": "F6.1", "F6-2": "F6.2", "F6-3": "F6.2",
-                 "F7-1": "F7.1", "F7-2": "F7.2", "F7-3": "F7.2", "F7-6": "F7.3",
+                 "F7-1": "F7.1", "F7-2": "F7.2", "F7-3": "F7.2", "F7-6": "F7.3", "F7-8": "F7.3",
                  "F7-10": "F7.4", "F7-11": "F7.4", "F8-1": "F8.1", "F8-2": "F8.2",
                  "F8-4": "F8.2", "F11-1": "F11.1", "F11-2": "F11.2", "F11-3": "F11.2",
                  "G2-1": "G2.1", "G3-1": "G3", "G4-1": "G4", "G5-1": "G5", "G6-1": "G6"}
