@@ -333,3 +333,47 @@ def test_slender_hss_web_takes_flange_local_buckling_f7_8():
     bend = next(c for c in analyze(job).checks if c.name == "bending")
     assert bend.clause == "AISC 360-16 F7.3, eq. F7-8"
     assert bend.params["Mn"] == pytest.approx(rpg * fcr * KSI * s, rel=1e-9)
+
+
+def test_typed_in_i_section_is_built_up_b4_case_11_and_g2_1b():
+    # AISC 360-16 Table B4.1b case 11 (built-up I flanges, from memory): lambda_r = 0.95
+    # sqrt(kc E / FL), kc = 4 / sqrt(h/tw) within 0.35..0.76, FL = 0.7 Fy. A 12 x 12 in
+    # section of 0.3 in flanges and a 0.25 in web in A36, by hand:
+    # h/tw = (12 - 0.6) / 0.25 = 45.6, kc = 4 / 6.753 = 0.5923,
+    # lambda_r = 0.95 sqrt(0.5923 x 29000 / 25.2) = 0.95 x 26.11 = 24.80 (rolled: 28.38);
+    # lambda = 12 / 0.6 = 20, lambda_p = 0.38 x 28.38 = 10.79: noncompact, F3-1
+    text = ('{ shape = "i-beam", depth = "12 in", flange_width = "12 in", flange_thickness '
+            '= "%s in", web_thickness = "0.25 in" }')
+    job = parse_job_text(job_text(text % "0.3", "A36", length="10 ft", extra_beam="braced = "
+                                  "true", loads='[[loads]]\ntype = "uniform"\nvalue = "-0.2 '
+                                  'kip/ft"'))
+    sec = job.section
+    kc = 4 / math.sqrt(45.6)
+    lr = 0.95 * math.sqrt(kc * 29000 / (0.7 * 36))
+    lp = 0.38 * math.sqrt(29000 / 36)
+    assert lr == pytest.approx(24.80, rel=1e-3)
+    mp, my = 36 * KSI * sec.zx, 36 * KSI * min(sec.sx_top, sec.sx_bot)
+    want = mp - (mp - 0.7 * my) * (20 - lp) / (lr - lp)
+    fl = flexure(sec, job.material, "asd")
+    assert fl.cap == pytest.approx(want, rel=1e-9) and "built-up" in fl.cap_text
+    # the same plates read as a rolled shape would give more (lambda_r 28.38)
+    rolled = mp - (mp - 0.7 * my) * (20 - lp) / (math.sqrt(29000 / 36) - lp)
+    assert fl.cap < rolled
+    # shear: G2.1(b), Omega 1.67 (G2.1(a)'s 1.50 is for rolled I-shapes); h/tw 45.6 <=
+    # 1.10 sqrt(5.34 x 29000 / 36) = 72.2: Cv1 = 1, Vn = 0.6 x 36 x 12 x 0.25 = 64.8 kips
+    sh = shear_strength(sec, job.material, "asd")
+    assert sh.omega == 1.67 and sh.vn / KIP == pytest.approx(64.8, rel=1e-9)
+    assert "G2.1(b)" in sh.text
+    # slender flanges (0.1875 in: lambda 32 > 24.8): F3-2 0.9 E kc Sx / lambda^2, kc as above
+    # with h/tw = (12 - 0.375) / 0.25 = 46.5
+    thin = parse_job_text(job_text(text % "0.1875", "A36", length="10 ft"))
+    fl = flexure(thin.section, thin.material, "asd")
+    kc = 4 / math.sqrt(46.5)
+    assert fl.cap == pytest.approx(0.9 * 29000 * KSI * kc * min(thin.section.sx_top,
+                                                                   thin.section.sx_bot) / 32**2,
+                                   rel=1e-9)
+    assert fl.cap_text.startswith("F3-2")
+    # a catalog W stays rolled: Omega 1.50 (W12x26, h/tw 47.2 <= 2.24 sqrt(E/Fy) = 53.9)
+    w = catalog.lookup("W12x26")
+    assert shear_strength(w, material("A992"), "asd").omega == 1.50
+    assert "built-up" not in flexure(w, material("A992"), "asd").cap_text

@@ -312,6 +312,12 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
                    unchecked=() if shape in ("tee", "angle") else (_unchecked_shape(shape),))
 
 
+def built_up(sec) -> bool:
+    """An I-section typed in by its plates (taken as welded, `members.resolve`): AISC 360-16
+    Table B4.1b case 11 flanges and G2.1(b) shear, in place of the rolled-shape rules."""
+    return sec.shape == "i-beam" and bool(sec.dims.get("built_up"))
+
+
 def _f2_f3(sec, fy, e) -> Flexure:
     d = sec.dims
     sx, z = min(sec.sx_top, sec.sx_bot), sec.zx
@@ -322,6 +328,12 @@ def _f2_f3(sec, fy, e) -> Flexure:
         lam = d["bf"] / (2 * d["tf"]) if sec.shape == "i-beam" else d["bf"] / d["tf"]
     lpf, lrf = 0.38 * root, 1.0 * root
     h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
+    kc = min(max(4 / math.sqrt(h_tw), 0.35), 0.76)
+    built = built_up(sec)
+    if built:
+        # AISC 360-16 Table B4.1b case 11 (flanges of built-up I-shapes, from memory):
+        # lambda_r = 0.95 sqrt(kc E / FL), FL = 0.7 Fy (doubly symmetric)
+        lrf = 0.95 * math.sqrt(kc * e / (0.7 * fy))
     warnings, unchecked = [], []
     cap, text = mp, f"F2-1 yielding Mn = Mp = Fy Zx (compact flanges, bf/2tf {lam:.3g})"
     if h_tw > 5.70 * root:
@@ -350,13 +362,14 @@ def _f2_f3(sec, fy, e) -> Flexure:
              "a lower bound here)"), "AISC 360-16 F5" if slender else
             "AISC 360-16 F4", blocks_rating=slender))
     if lam > lpf:
+        how = (f", built-up: lambda_r = 0.95 sqrt(kc E / 0.7 Fy) = {lrf:.3g}, kc {kc:.3g}"
+               if built else "")
         if lam <= lrf:
             m = mp - (mp - 0.7 * fy * sx) * (lam - lpf) / (lrf - lpf)
-            t = f"F3-1 flange local buckling (noncompact, lambda {lam:.3g})"
+            t = f"F3-1 flange local buckling (noncompact, lambda {lam:.3g}{how})"
         else:
-            kc = min(max(4 / math.sqrt(h_tw), 0.35), 0.76)
             m = 0.9 * e * kc * sx / lam**2
-            t = f"F3-2 flange local buckling (slender, lambda {lam:.3g})"
+            t = f"F3-2 flange local buckling (slender, lambda {lam:.3g}{how})"
         if m < cap:
             cap, text = m, t
     iy, cw, j, ho = sec.iy, sec.cw, sec.j, d.get("ho") or (d["d"] - d["tf"])
@@ -753,7 +766,7 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
     if shape in ("i-beam", "channel") and axis == "strong":
         h_tw = d.get("h_tw") or (d["d"] - 2 * d["kdes"]) / d["tw"]
         aw = d["d"] * d["tw"]
-        if shape == "i-beam" and h_tw <= 2.24 * math.sqrt(e / fy):
+        if shape == "i-beam" and not built_up(sec) and h_tw <= 2.24 * math.sqrt(e / fy):
             return ShearStrength(0.6 * fy * aw, OMEGA_V_ROLLED_I, f"G2-1 web yielding Vn = 0.6 "
                                  f"Fy Aw, Cv1 = 1.0 (h/tw {h_tw:.3g} <= 2.24 sqrt(E/Fy)), "
                                  "Omega 1.50", aw)
@@ -761,7 +774,9 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
         lim = 1.10 * math.sqrt(kv * e / fy)
         cv1 = 1.0 if h_tw <= lim else lim / h_tw
         return ShearStrength(0.6 * fy * aw * cv1, OMEGA_V, f"G2-1 Vn = 0.6 Fy Aw Cv1, Cv1 = "
-                             f"{cv1:.3g} (h/tw {h_tw:.3g}, kv 5.34), Omega 1.67", aw)
+                             f"{cv1:.3g} (h/tw {h_tw:.3g}, kv 5.34), Omega 1.67"
+                             + (" (built-up: G2.1(b); the Omega 1.50 of G2.1(a) is for rolled "
+                                "I-shapes)" if built_up(sec) else ""), aw)
     if shape in ("i-beam", "channel") and axis == "weak":
         b = d["bf"] / 2 if shape == "i-beam" else d["bf"]
         cv2 = _cv2(b / d["tf"], 1.2, e, fy)

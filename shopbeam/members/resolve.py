@@ -178,8 +178,13 @@ def _build(shape, spec, key, material, mass) -> Section:
         return channel(L("depth"), L("flange_width"), L("flange_thickness"),
                        L("web_thickness"), r=r, mass=mass)
     if shape == "i-beam":
-        return i_shape(L("depth"), L("flange_width"), L("flange_thickness"),
-                       L("web_thickness"), r=r, mass=mass)
+        # an I-section typed in by its plates is taken as welded (built-up): AISC 360-16
+        # Table B4.1b case 11 flanges and G2.1(b) shear (conservative; catalog shapes are
+        # rolled)
+        sec = i_shape(L("depth"), L("flange_width"), L("flange_thickness"),
+                      L("web_thickness"), r=r, mass=mass)
+        return replace(sec, dims={**sec.dims, "built_up": 1.0},
+                       source=sec.source + " (taken as built-up: welded plates)")
     if shape == "tee":
         fl = _choice(spec, "flange", ("top", "bottom"), "top", key)
         return tee(L("depth"), L("flange_width"), L("flange_thickness"), L("stem_thickness"),

@@ -51,7 +51,9 @@ Every shape also takes ``axis`` = ``"strong"`` (default) | ``"weak"`` and an opt
 - round-tube/pipe: ``od``, ``t_nom``, ``t_des``, ``D_t``.  round-bar: ``od``.
 - rect-bar: ``h``, ``b``.
 - i-beam, channel: ``d``, ``bf``, ``tf``, ``tw``, ``kdes``, ``ho``, ``h_tw``, ``bf_2tf`` (``b_t``
-  for channels), ``rts`` where known; channel also ``x`` (centroid from the back of the web).
+  for channels), ``rts`` where known; channel also ``x`` (centroid from the back of the web);
+  an i-beam typed in by its dimensions also ``built_up`` = 1.0 (`members.resolve`: checked as
+  welded from plates, not as a rolled shape).
 - tee: ``d``, ``bf``, ``tf``, ``tw``, ``kdes``, ``y`` (flange outside to centroid), ``d_tw``,
   ``bf_2tf``.
 - angle: ``d`` (leg in the bending plane), ``b``, ``t``, ``y`` (heel to centroid along d),
