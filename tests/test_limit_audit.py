@@ -648,8 +648,14 @@ def test_a_round_tube_under_a_point_load_says_its_wall_is_not_checked(material):
     wall = [u for u in res.unchecked if u.name == "round HSS wall under a concentrated force"]
     # a point load on the span: a strap or hook can crush a thin wall first, not rated
     assert wall and wall[0].blocks_rating and "loads[0]" in wall[0].reason
-    # a spread load meets the wall only at the supports (saddles): a caution
+    # a spread live load meets the wall at the supports, whose reactions grow with the rated
+    # load: a seat narrower than a full saddle can crush the wall there, not rated either
     spread = analyze(parse_job_text(simple_span(f"{material}\n{tube}", 6,
                                                 uniform_load(6, "-50 lbf/ft"))))
     wall = [u for u in spread.unchecked if u.name == "round HSS wall under a concentrated force"]
+    assert wall and wall[0].blocks_rating and "reactions bear on the wall" in wall[0].reason
+    # dead load alone (nothing rated): a caution
+    dead = analyze(parse_job_text(simple_span(f"{material}\n{tube}", 6,
+                                              uniform_load(6, "-50 lbf/ft") + 'case = "dead"\n')))
+    wall = [u for u in dead.unchecked if u.name == "round HSS wall under a concentrated force"]
     assert wall and not wall[0].blocks_rating

@@ -431,3 +431,31 @@ def test_web_sidesway_with_patterns_is_the_worst_pattern():
         walk = walk_patterns(job, k)["web sidesway buckling"][0]
         assert got.ratio == pytest.approx(walk.ratio, rel=1e-12)
         assert got.params["Cr"] == walk.params["Cr"]
+
+
+# ------------------------------------------------------------------ tees and round tubes
+@pytest.mark.parametrize("section, material, name", [
+    ("WT6x7", "A36", "stem or leg local yielding under a concentrated force"),
+    ("HSS4.000x0.250", "A500-C", "round HSS wall under a concentrated force")])
+def test_reactions_of_live_load_on_a_stem_or_round_wall_withhold_the_rating(section, material,
+                                                                            name):
+    # the reactions bear on the stem (its tip, stem down) or a thin round wall, which no
+    # clause here checks (J10 is written for I-shapes and channels; Table K2.1 is not
+    # applied): a live load that comes down through them withholds the rating
+    live = _job(section=section, material=material, extra_beam="braced = true",
+                loads=['type = "uniform"\nvalue = "-1 kip/ft"'])
+    res = capacity(live)
+    u = next(u for u in analyze(live).unchecked if u.name == name)
+    assert u.blocks_rating and "the pin at 0 ft and the roller at 2 ft" in u.reason
+    assert not res.rated and any(r.startswith(name) for r in res.not_rated)
+    # dead load alone on the supports (nothing rated) is a caution only
+    dead = _job(section=section, material=material, extra_beam="braced = true",
+                loads=['type = "uniform"\nvalue = "-1 kip/ft"\ncase = "dead"'])
+    u = next(u for u in analyze(dead).unchecked if u.name == name)
+    assert not u.blocks_rating
+    # a cantilever from a fixed end has no bearing support (a fixed end is a connection)
+    cant = _job(section=section, material=material, extra_beam="braced = true",
+                supports=['at = "0 ft"\ntype = "fixed"'],
+                loads=['type = "uniform"\nvalue = "-1 kip/ft"'])
+    u = next(u for u in analyze(cant).unchecked if u.name == name)
+    assert not u.blocks_rating

@@ -643,21 +643,45 @@ def _span_forces(job) -> list[str]:
     return points + [ws.key for ws in (getattr(job, "moving", ()) or ())]
 
 
+def _live_bearings(job) -> list[str]:
+    """The supports that bear the member (pin, roller, spring: a fixed end is a connection)
+    when the job has live loads: their reactions grow with the rated load, so a local limit
+    state there that is not checked withholds the rating as one under a point load does."""
+    live = any(ld.case == "live" and (ld.value if ld.kind in ("point", "moment")
+                                      else ld.total_force) for ld in job.loads) or any(
+        any(ws.live) for ws in (getattr(job, "moving", ()) or ()))
+    if not live:
+        return []
+    fmt = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+    return [f"the {sp.kind} at {fmt(sp.at)}" for sp in job.supports
+            if sp.kind in ("pin", "roller", "spring")]
+
+
+def _and(words: list[str]) -> str:
+    return words[0] if len(words) < 2 else ", ".join(words[:-1]) + " and " + words[-1]
+
+
 def _round_wall(job, clause: str) -> Unchecked:
-    """A round tube's wall under a concentrated force is not checked. At the supports alone
-    it is a caution (the member bears on a saddle or seat there, common practice); a point
-    load or wheel set on the span withholds the rating: a narrow strap, plate or hook on a
-    thin wall can crush it far below the member's bending strength (AISC 360-16 Table K2.1
-    plastification goes with Fy t^2, from memory)."""
+    """A round tube's wall under a concentrated force is not checked: a point load or wheel
+    set on the span, or a support reaction that carries live load, withholds the rating: a
+    narrow strap, plate, hook or seat on a thin wall can crush it far below the member's
+    bending strength (AISC 360-16 Table K2.1 plastification goes with Fy t^2, from memory).
+    Only dead load on the supports is a caution (bear it on a saddle)."""
     points = _span_forces(job)
+    seats = _live_bearings(job)
     return Unchecked("round HSS wall under a concentrated force",
                      "local plastification of a round wall at supports and point loads is not "
                      "checked (bear it on a saddle)"
                      + (f"; {', '.join(points)} bear on the wall between the supports, and a "
-                        "narrow strap, plate or hook can crush a thin wall first, so no rating "
-                        "is posted (hang the load from a full saddle or sleeve, or have the "
-                        "wall checked)" if points else ""),
-                     clause, blocks_rating=bool(points))
+                        "narrow strap, plate or hook can crush a thin wall first" if points
+                        else "")
+                     + (f"; the live load comes down through {_and(seats)}, whose "
+                        "reactions bear on the wall: a seat or strap narrower than a full "
+                        "saddle can crush a thin wall first" if seats else "")
+                     + ("; so no rating is posted (bear the member and hang the load on full "
+                        "saddles or sleeves, or have the wall checked)"
+                        if points or seats else ""),
+                     clause, blocks_rating=bool(points or seats))
 
 
 def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
@@ -732,16 +756,27 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
     elif sec.shape in ("round-tube", "pipe"):
         out.append(_round_wall(job, "AISC 360-16 K2, Table K2.1"))
     elif sec.shape in ("tee", "angle"):
-        # at a support the member bears on a bracket or seat (common practice: not the weak
-        # spot); a point load or a wheel on a single leg or stem bends it locally, and that is
-        # not computed, so no rating rests on it
+        # a point load or a wheel on a single leg or stem bends it locally, and a support
+        # reaction bears on a tee's stem (its tip, or through the flange with the stem up):
+        # none is computed (J10 is written for I-shapes and channels), so no rating rests on a
+        # live load that comes through them; dead load alone on the supports is a caution.
+        # An angle bears on its seat across a flat leg, which is taken as sound there (a
+        # caution, common practice)
         points = _span_forces(job)
+        seats = _live_bearings(job) if sec.shape == "tee" else []
+        part = "stem" if sec.shape == "tee" else "leg"
         out.append(Unchecked("stem or leg local yielding under a concentrated force",
                              "concentrated forces at supports and point loads of tees and "
                              "angles are not checked locally"
                              + (f"; {', '.join(points)} bear on a single leg or stem, which "
-                                "can bend or yield locally first, so no rating is posted "
-                                "(spread the load with a plate across the member, or have "
-                                "the leg checked)" if points else ""),
-                             "AISC 360-16 J10", blocks_rating=bool(points)))
+                                "can bend or yield locally first" if points else "")
+                             + (f"; the live load comes down through {_and(seats)}, "
+                                f"whose reactions bear on the {part}"
+                                + (" (its tip, or the flange with the stem up)"
+                                   if part == "stem" else "")
+                                + ", which can yield or cripple there first" if seats else "")
+                             + ("; so no rating is posted (bear the member on a plate or "
+                                "bracket across it, spread the load the same way, or have "
+                                f"the {part} checked)" if points or seats else ""),
+                             "AISC 360-16 J10", blocks_rating=bool(points or seats)))
     return out
