@@ -292,3 +292,22 @@ def test_those_keys_used_as_meant_are_not_warned(loads, criteria):
                               criteria else '["not-lifting"]', criteria=criteria))
     assert not [p for p in warnings(job) if p.key in (
         "loads[0].wheels", "loads[0].value", "criteria.live_deflection", "criteria.lifting")]
+
+
+@pytest.mark.parametrize("section, blocked", [
+    ("2x10", True),   # d/b = 9.25 / 1.5: ends held in position (NDS 2018 4.4.1.2, from memory)
+    ("2x4", True),    # d/b = 2.33
+    ("4x6", False),   # d/b = 5.5 / 3.5 = 1.57: no lateral support needed (4.4.1.2(a))
+])
+def test_a_joist_whose_ends_are_not_held_is_not_rated(section, blocked):
+    free = sup(0, "pin", "brace = false") + sup(8, "roller", "brace = false")
+    load = '[[loads]]\ntype = "point"\nat = "4 ft"\nvalue = "-100 lbf"\n'
+    res = capacity(parse_job_text(span(f'section = "{section}"\nmaterial = "DF-L-2"', free,
+                                       load, length=8)))
+    got = twist_reasons(res)
+    assert len(got) == int(blocked)
+    if blocked:
+        assert "NDS" in got[0] and "brace = true" in got[0]
+    held = capacity(parse_job_text(span(f'section = "{section}"\nmaterial = "DF-L-2"',
+                                        sup(0, "pin") + sup(8, "roller"), load, length=8)))
+    assert not twist_reasons(held)

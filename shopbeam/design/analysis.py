@@ -319,7 +319,11 @@ def twist_unchecked(job: Job, st) -> list[Unchecked]:
     held (AISC 360-16 Appendix 6.3 / F1: torsional restraint at the supports, common practice),
     so no rating rests on it: listed, blocking."""
     fl = _rating_flexure(st)
-    if fl is None or job.braced or job.restrained:
+    wf = getattr(st.flexure, "wood", None)
+    # sawn lumber deeper than twice its breadth needs its ends held in position against
+    # rotation (NDS 2018 4.4.1.2(b) and beyond, from memory); up to d/b = 2 it needs none (a)
+    wood = wf is not None and not wf.flat and wf.d > 2 * wf.b
+    if (fl is None and not wood) or job.braced or job.restrained:
         return []
     tol = 1e-9 * job.length
     loose = {s.at: i for i, s in enumerate(job.supports) if s.takes_force}
@@ -356,11 +360,12 @@ def twist_unchecked(job: Job, st) -> list[Unchecked]:
             "torsional restraint at the supports",
             f"the span {f(a)} to {f(b)} sits on " + ", ".join(names) + f": {what}. "
             "Lateral-torsional buckling strength assumes the member is held against twist "
-            "where it is supported; without it the member can roll over at the support, and "
+            "where it is supported (a joist's ends blocked or nailed); without it the member can roll over at the support, and "
             "no rating rests on that. Give brace = true on each support whose connection "
             "holds the member against twist (an end plate, clip angles, stiffeners or blocking "
             "to the flanges), brace the member there (beam.braces), or write restrained = true "
             "if it is held against twist all along",
+            "NDS 2018 3.3.3 and 4.4.1.2 (ends held in position, from memory)" if wood else
             "AISC 360-16 F1 and Appendix 6.3 (torsional restraint at supports, common "
             "practice)"))
     return out
