@@ -391,8 +391,10 @@ def build_envelope(ss: "StateSet", name: str) -> PatternEnvelope:
     tm = 0.5 * (t0 + t1)
     if n:
         Sp = S[:, piece, :]  # (n, cut pieces, w)
-        # (n, cut pieces): every span's value at every cut piece's middle, in one pass
-        vals = _horner(Sp.reshape(-1, w), np.tile(tm, n)).reshape(n, len(tm))
+        # (n, cut pieces): every span's value at every cut piece's middle, in one pass (on
+        # the (cut pieces, n) order numpy lays such an indexed array out in: no copy)
+        vals = _horner(Sp.transpose(1, 0, 2).reshape(-1, w),
+                       np.repeat(tm, n)).reshape(len(tm), n).T
         up_on, down_on = (vals > 0).T, (vals < 0).T
         up = np.einsum("sn,nsw->sw", up_on.astype(float), Sp)
         down = np.einsum("sn,nsw->sw", down_on.astype(float), Sp)
