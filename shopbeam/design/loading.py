@@ -157,13 +157,21 @@ def _dummies(positions) -> list[Load]:
     return [Load("point", at=x, value=0.0, label="(break)") for x in sorted(positions)]
 
 
-def _reaction_arrays(sol: Solution) -> tuple[np.ndarray, np.ndarray]:
-    """The solution's reaction forces and moments as arrays (kept on it)."""
-    got = sol.__dict__.get("_reaction_arrays")
+_FUNCTIONS = ("load", "shear", "moment", "slope", "deflection")
+
+
+def _flat(sol: Solution) -> np.ndarray:
+    """Every number `combine` adds up, in one flat array (kept on the solution): the five
+    functions' coefficients, the reaction forces and moments, the hinge rotations and the
+    two integration constants."""
+    got = sol.__dict__.get("_flat")
     if got is None:
-        got = sol.__dict__["_reaction_arrays"] = (
-            np.array([r.force for r in sol.reactions], float),
-            np.array([r.moment for r in sol.reactions], float))
+        got = sol.__dict__["_flat"] = np.concatenate(
+            [sol.function(n).coeffs.ravel() for n in _FUNCTIONS]
+            + [np.array([r.force for r in sol.reactions], float),
+               np.array([r.moment for r in sol.reactions], float),
+               np.array([h[1] for h in sol.hinge_rotations], float),
+               np.array([sol.ei_slope_0, sol.ei_deflection_0], float)])
     return got
 
 
@@ -176,28 +184,24 @@ def combine(parts: list[tuple[float, Solution]], beam: Beam) -> Solution:
         if b is not b0 and (b.shape != b0.shape or
                             float(np.abs(b - b0).max()) > 1e-12 * beam.length):
             raise ValueError("solutions do not share their breaks")
-
-    def add(name):
-        co = sum(f * getattr(s, name).coeffs for f, s in parts)
-        return Piecewise(getattr(base, name).breaks, co)
-
-    # every reaction at once: the same sums, term by term in the same order, as one per
-    # reaction (0 + f1 r1 + f2 r2 + ...)
-    force = moment = 0
+    # every number at once, each the same sum term by term in the same order as one by one
+    # (0 + f1 x1 + f2 x2 + ...)
+    total = 0
     for f, s in parts:
-        rf, rm = _reaction_arrays(s)
-        force = force + f * rf
-        moment = moment + f * rm
+        total = total + f * _flat(s)
+    funcs, at = {}, 0
+    for name in _FUNCTIONS:
+        c = base.function(name).coeffs
+        funcs[name] = Piecewise(base.function(name).breaks,
+                                total[at:at + c.size].reshape(c.shape))
+        at += c.size
+    nr, nh = len(base.reactions), len(base.hinge_rotations)
+    rest = total[at:].tolist()
     reactions = tuple(Reaction(r.at, r.kind, fo, mo, r.key) for r, fo, mo in
-                      zip(base.reactions, np.asarray(force, float).tolist(),
-                          np.asarray(moment, float).tolist()))
-    hinges = tuple((h[0], sum(f * s.hinge_rotations[i][1] for f, s in parts))
-                   for i, h in enumerate(base.hinge_rotations))
+                      zip(base.reactions, rest[:nr], rest[nr:2 * nr]))
+    hinges = tuple((h[0], v) for h, v in zip(base.hinge_rotations, rest[2 * nr:2 * nr + nh]))
     return Solution(beam=beam, reactions=reactions, hinge_rotations=hinges,
-                    ei_slope_0=sum(f * s.ei_slope_0 for f, s in parts),
-                    ei_deflection_0=sum(f * s.ei_deflection_0 for f, s in parts),
-                    load=add("load"), shear=add("shear"), moment=add("moment"),
-                    slope=add("slope"), deflection=add("deflection"),
+                    ei_slope_0=rest[-2], ei_deflection_0=rest[-1], **funcs,
                     condition=max(s.condition for _, s in parts))
 
 
