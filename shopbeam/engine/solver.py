@@ -587,6 +587,7 @@ def solve_each(beams, length_fmt=None) -> list[Solution]:
                 conds = np.linalg.cond(a2)
             except np.linalg.LinAlgError:
                 continue  # each on its own below
+            layout = _layout(beams[idx[0]], sets[0][0])  # one set of supports
             for n, i in enumerate(idx):
                 condition = float(conds[n])
                 if not (math.isfinite(condition) and condition <= ILL):
@@ -596,7 +597,7 @@ def solve_each(beams, length_fmt=None) -> list[Solution]:
                 w = np.concatenate([[1.0], z])
                 final = states[n] @ w
                 sol = _finish(beams[i], breaks_i, final, z, unknowns, condition, False,
-                              candidates=False)
+                              candidates=False, layout=layout)
                 if _finite(sol):
                     out[i] = sol
     for i, sol in enumerate(out):
@@ -705,6 +706,7 @@ def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> l
         return one_by_one()
     zs = y / cs[:, None]
     out = []
+    layout = _layout(beam, unknowns)
     with np.errstate(all="ignore"):
         for c in range(m):
             w = np.zeros(m + nz)
@@ -714,7 +716,7 @@ def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> l
             if not np.all(np.isfinite(final)):
                 return one_by_one()
             out.append(_finish(replace(beam, loads=cases[c]), breaks, final, zs[:, c],
-                               unknowns, condition, False, candidates=False))
+                               unknowns, condition, False, candidates=False, layout=layout))
     if candidates:  # one batched pass for every case
         find_candidates([s.function(n) for s in out
                          for n in ("shear", "moment", "slope", "deflection")])
@@ -793,37 +795,48 @@ def _gauss_exact(a: list[list[Fraction]], b: list[Fraction]) -> list[Fraction] |
     return z
 
 
-def _finish(beam, breaks, final, z, unknowns, condition, exact, candidates=True) -> Solution:
+def _layout(beam, unknowns):
+    """Where each reaction, hinge rotation and integration constant sits among the unknowns:
+    (reactions in order of position as (support, force index, moment index), hinges as (at,
+    index), c1 index, c2 index). The same for every load case on one set of supports."""
+    force, moment = {}, {}
+    hinges = []
+    for i, u in enumerate(unknowns):
+        if u.kind == "force":
+            force[u.support] = i
+        elif u.kind == "moment":
+            moment[u.support] = i
+        elif u.kind == "hinge":
+            hinges.append((u.at, i))
+    rows = [(s, force.get(i), moment.get(i)) for i, s in enumerate(beam.supports)
+            if s.kind != "hinge"]
+    rows.sort(key=lambda r: r[0].at)  # stable: as the reactions were sorted
+    c1 = [i for i, u in enumerate(unknowns) if u.kind == "c1"][0]
+    c2 = [i for i, u in enumerate(unknowns) if u.kind == "c2"][0]
+    return rows, hinges, c1, c2
+
+
+def _finish(beam, breaks, final, z, unknowns, condition, exact, candidates=True,
+            layout=None) -> Solution:
     ei = beam.ei
 
     def pw(level: int, scale: float = 1.0) -> Piecewise:
         return Piecewise(breaks, _piece_coeffs(final, level) * scale)
 
-    reactions = []
-    hinge_rot = []
-    by_support: dict[int, dict[str, float]] = {}
-    for u, val in zip(unknowns, z):
-        if u.kind in ("force", "moment"):
-            by_support.setdefault(u.support, {})[u.kind] = float(val)
-        elif u.kind == "hinge":
-            hinge_rot.append((u.at, float(val) / ei))
-    for i, s in enumerate(beam.supports):
-        if s.kind == "hinge":
-            continue
-        got = by_support.get(i, {})
-        reactions.append(Reaction(s.at, s.kind, got.get("force", 0.0), got.get("moment", 0.0), s.key))
-    reactions.sort(key=lambda r: r.at)
-    c1 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c1"][0]])
-    c2 = float(z[[i for i, u in enumerate(unknowns) if u.kind == "c2"][0]])
+    rows, hinges, i1, i2 = layout or _layout(beam, unknowns)
+    zl = np.asarray(z, float).tolist()
+    reactions = tuple(Reaction(s.at, s.kind, 0.0 if fi is None else zl[fi],
+                               0.0 if mi is None else zl[mi], s.key) for s, fi, mi in rows)
+    hinge_rot = tuple((at, zl[i] / ei) for at, i in hinges)
     funcs = dict(shear=pw(1), moment=pw(2), slope=pw(3, 1.0 / ei), deflection=pw(4, 1.0 / ei))
     if candidates:
         find_candidates(list(funcs.values()))  # every renderer and check asks for extremes
     return Solution(
         beam=beam,
-        reactions=tuple(reactions),
-        hinge_rotations=tuple(hinge_rot),
-        ei_slope_0=c1,
-        ei_deflection_0=c2,
+        reactions=reactions,
+        hinge_rotations=hinge_rot,
+        ei_slope_0=zl[i1],
+        ei_deflection_0=zl[i2],
         load=pw(0),
         condition=condition,
         exact=exact,
