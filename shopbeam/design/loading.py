@@ -493,18 +493,36 @@ class Envelopes:
             tol = 1e-9 * self.ss.beam.length
             lo = e.breaks[0] if lo is None else lo
             hi = e.breaks[-1] if hi is None else hi
-            m = (left >= lo - tol) & (right <= hi + tol)
-            # the first largest (smallest) of the candidates in the region, as argmax of
-            # the region's own candidates would give
-            i = int(np.argmax(np.where(m, v, -np.inf)) if upper
-                    else np.argmin(np.where(m, v, np.inf)))
-            if not m[i]:  # no candidate in the region
+            # the candidates on pieces inside [lo - tol, hi + tol] are those of one run of
+            # pieces, so one run of the candidates sorted by piece
+            b = e.breaks
+            r0 = int(b.searchsorted(lo - tol, "left"))
+            r1 = int(b.searchsorted(hi + tol, "right")) - 1  # pieces r0 .. r1 - 1
+            order, r_sorted = self._by_piece(name, upper)
+            run = order[int(r_sorted.searchsorted(r0, "left")):
+                        int(r_sorted.searchsorted(r1 - 1, "right"))]
+            if not len(run):
                 raise ValueError(f"no piece of the {name} envelope lies in [{lo}, {hi}]")
+            vr = v[run]
+            best = vr.max() if upper else vr.min()
+            if best != best:  # a NaN: the first in the candidates' own order, as argmax
+                i = int(run[np.flatnonzero(vr != vr)].min())
+            else:  # the first largest (smallest) in the candidates' own order, as argmax
+                i = int(run[np.flatnonzero(vr == best)].min())
         else:
             i = int(np.argmax(v) if upper else np.argmin(v))
         out = EnvelopeExtreme(float(v[i]), float(x[i]), e.pattern(int(r[i]), upper))
         self._memo[key] = out
         return out
+
+    def _by_piece(self, name: str, upper: bool) -> tuple[np.ndarray, np.ndarray]:
+        """The candidates' order sorted by piece (stable) and their pieces in that order."""
+        key = ("by piece", name, upper)
+        if key not in self._memo:
+            r = self.cand[name, upper][0]
+            order = np.argsort(r, kind="stable")
+            self._memo[key] = (order, r[order])
+        return self._memo[key]
 
     def abs_value(self, name: str, x: float) -> float:
         """The largest |value| at x over all patterns (both envelopes)."""
@@ -532,9 +550,13 @@ class Envelopes:
     def _work_out_reactions(self) -> list[dict]:
         ss, kk = self.ss, self.kk
         out = []
+        cache = ss.__dict__.setdefault("_span_reactions", {})
+        if "v" not in cache:  # (spans, reactions): each span's unit solution's forces
+            cache["v"] = np.array([[r.force for r in s.reactions] for s in ss.spans], float)
+        forces = cache["v"]
         for j, r in enumerate(ss.fixed.reactions):
             base = r.force + kk * ss.live.reactions[j].force
-            each = np.array([s.reactions[j].force for s in ss.spans]) * kk
+            each = (forces[:, j] if ss.spans else np.zeros(0)) * kk
             top = max(abs(base), float(np.max(np.abs(each))) if each.size else 0.0)
             each = np.where(np.abs(each) <= 1e-13 * top, 0.0, each)
             up = tuple(int(i) for i in np.flatnonzero(each > 0))
