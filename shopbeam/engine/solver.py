@@ -309,8 +309,8 @@ def _snap(positions: np.ndarray, L: float) -> np.ndarray:
     if p.size:
         starts[0] = True
         gaps = np.flatnonzero(np.diff(p) > tol) + 1
-        if gaps.size == p.size - 1:  # every gap wide: nothing to merge
-            starts[1:] = True
+        if gaps.size == p.size - 1:  # every gap wide: nothing to merge, nothing moves
+            return positions.copy()
         else:
             lead = p[0]
             for i in range(1, p.size):  # a cluster is never wider than tol (no chains)
@@ -444,7 +444,9 @@ def _setup(beam: Beam):
     nz = len(unknowns)
     index = {id(u): i for i, u in enumerate(unknowns)}
     load_pos = [p for ld in beam.loads for p in ld.describe_position()]
-    raw = np.clip(np.array([0.0, L] + [s.at for s in beam.supports] + load_pos, float), 0.0, L)
+    # (np.minimum / np.maximum: np.clip's values, without its wrapper's cost)
+    raw = np.minimum(np.maximum(np.array([0.0, L] + [s.at for s in beam.supports] + load_pos,
+                                         float), 0.0), L)
     snapped = _snap(raw, L)
     moved = dict(zip(load_pos, snapped[2 + len(beam.supports):].tolist()))
     terms = load_terms(snap_loads(beam.loads, moved))
@@ -635,7 +637,8 @@ def solve_many(beam: Beam, cases, length_fmt=None, candidates: bool = True) -> l
     m = len(cases)
     index = {id(u): i for i, u in enumerate(unknowns)}
     load_pos = [p for ld in everything for p in ld.describe_position()]
-    raw = np.clip(np.array([0.0, L] + [s.at for s in beam.supports] + load_pos, float), 0.0, L)
+    raw = np.minimum(np.maximum(np.array([0.0, L] + [s.at for s in beam.supports] + load_pos,
+                                         float), 0.0), L)
     snapped = _snap(raw, L)
     moved = dict(zip(load_pos, snapped[2 + len(beam.supports):].tolist()))
     sup_at = dict(zip(range(len(beam.supports)), snapped[2:2 + len(beam.supports)].tolist()))
