@@ -393,22 +393,12 @@ def _capacity(job, section, ss, st) -> CapacityResult:
         gk = max(c.ratio for c in e.checks)
         if gk <= 1.0 + 1e-9:
             # rounding can leave the ratio a hair above 1: step down to the passing side
-            while max(c.ratio for c in e.checks) > 1.0:
-                k = math.nextafter(k, 0.0)
-                e = ev(k)
+            k, e = _passing(ev, k)
             return CapacityResult(job, k, e, "closed form: every ratio is proportional to k")
         # a limit that changes with the load (web sidesway buckling's Cr halves once the
         # moment at the force reaches My / 1.5): not proportional, so bracket [0, k]
-        k_lo, h_lo, k_hi, h_hi = 0.0, g0 - 1.0, k, gk - 1.0
-        a, fa, b, fb = brent(lambda x: g(x) - 1.0, k_lo, k_hi, h_lo, h_hi)
-        k = a if fa <= 0 else b
-        e = ev(k)
-        while max(c.ratio for c in e.checks) > 1.0:  # stay on the passing side
-            k = math.nextafter(k, 0.0)
-            e = ev(k)
-        return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing "
-                              "ratio = 1 (a limit changes with the load)",
-                              _step_note(e, ev(b if fa <= 0 else a)))
+        return _root(job, ev, g, 0.0, g0 - 1.0, k, gk - 1.0,
+                     " (a limit changes with the load)")
     k_lo, h_lo = 0.0, g0 - 1.0
     g1 = g(1.0)
     k_hi, h_hi = (1.0, g1 - 1.0) if g1 > 1.0 else (None, None)
@@ -438,14 +428,26 @@ def _capacity(job, section, ss, st) -> CapacityResult:
         if n > 60:
             return CapacityResult(job, math.inf, ev(k_lo), "unbounded",
                                   "no multiplier of the live loads makes a check fail")
-    a, fa, b, fb = brent(lambda k: g(k) - 1.0, k_lo, k_hi, h_lo, h_hi)
-    k = a if fa <= 0 else b
+    return _root(job, ev, g, k_lo, h_lo, k_hi, h_hi)
+
+
+def _passing(ev, k: float) -> tuple[float, Evaluation]:
+    """k stepped down (one float at a time) until every ratio passes: rounding can leave a
+    root's ratio a hair above 1."""
     e = ev(k)
-    while max(c.ratio for c in e.checks) > 1.0:  # stay on the passing side
+    while max(c.ratio for c in e.checks) > 1.0:
         k = math.nextafter(k, 0.0)
         e = ev(k)
-    return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1",
-                          _step_note(e, ev(b if fa <= 0 else a)))
+    return k, e
+
+
+def _root(job, ev, g, k_lo, h_lo, k_hi, h_hi, why: str = "") -> CapacityResult:
+    """The factor where the governing ratio reaches 1, by Brent's method in the bracket
+    [k_lo, k_hi] (h = ratio - 1 at each end), on its passing side."""
+    a, fa, b, fb = brent(lambda k: g(k) - 1.0, k_lo, k_hi, h_lo, h_hi)
+    k, e = _passing(ev, a if fa <= 0 else b)
+    return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1"
+                          + why, _step_note(e, ev(b if fa <= 0 else a)))
 
 
 def _step_note(at_k: Evaluation, past: Evaluation) -> str:
