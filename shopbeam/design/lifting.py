@@ -255,20 +255,17 @@ def _flange_loads(job, sol, sec, prof: Profile, impact: float):
         wheels = [ld for ld in sol.beam.loads if (ld.key or "") == mv.key and ld.kind == "point"]
         if len(wheels) != len(mv.live):
             return None
-        lat = []
-        for ld, f, dd in zip(wheels, mv.live, mv.dead):
-            # the wheel carries (1 + impact) (dd + k f) (the impact raises the trolley's
-            # weight too, `loading.load_parts`); the lateral force is 20 % of k f + dd
-            lat.append(Load("point", at=ld.at, value=prof.lateral * abs(ld.value / (1 + impact))))
     else:
-        # a hoist parked at fixed places: every point load of the job is rated load (live,
-        # carrying k (1 + impact)) or hoist and trolley weight (dead); the lateral force is
-        # 20 % of their sum where they hang, without the impact allowance
+        # a hoist parked at fixed places: every point load of the job is rated load (live)
+        # or hoist and trolley weight (dead)
         wheels = hoist_loads(sol)
         if not wheels:
             return None
-        lat = [Load("point", at=ld.at, value=prof.lateral * abs(ld.value / (1 + impact)))
-               for ld in wheels]  # dead and live both carry the impact here (see above)
+    # each wheel or hoist load carries (1 + impact) x (its weight + the rated load), the
+    # impact raising the hoist and trolley weight too (`loading.load_parts`); the lateral
+    # force is 20 % of their sum where they act, without the impact allowance
+    lat = [Load("point", at=ld.at, value=prof.lateral * abs(ld.value / (1 + impact)))
+           for ld in wheels]
     return wheels, lat
 
 

@@ -1597,8 +1597,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if section is not None:
             _plausible_section(section, r)
             _same_both_ways(r, section, axis)
-            if length is not None and stubby_words(length, section, system):
-                r.warn(stubby_words(length, section, system, beam.get("length")), "beam.length")
+            stubby = stubby_words(length, section, system, beam.get("length")) \
+                if length is not None else ""
+            if stubby:
+                r.warn(stubby, "beam.length")
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
