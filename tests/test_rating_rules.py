@@ -536,3 +536,17 @@ def test_a_hand_geared_jib_keeps_the_boom_deflection_limit_and_drops_the_lateral
     tube = capacity(parse_job_text(arm.replace('"W6x15"', '"HSS4x4x1/4"').replace(
         '"A992"', '"A500-C"')))
     assert [r for r in tube.not_rated if 'lifting = "hand-geared-jib"' in r]
+
+
+def test_restrained_true_holds_an_i_beam_against_lateral_torsional_buckling():
+    # beam.restrained: held against twist and sideways movement all along, so no unbraced
+    # length is left (AISC 360-16 F2.1: Lb = 0 gives Mn = Mp for a compact section; F2.2 at
+    # Lb = 12 ft would set it far lower for a W8x10, Lp about 3 ft from memory)
+    base = simple_span('section = "W8x10"\nmaterial = "A992"\nself_weight = false', 12)
+    def bending(extra):
+        text = base.replace("self_weight = false", "self_weight = false\n" + extra)
+        return next(c for c in analyze(parse_job_text(text)).checks if c.name == "bending")
+    free, held, braced = bending(""), bending("restrained = true"), bending("braced = true")
+    assert held.limit == pytest.approx(braced.limit, rel=1e-12)
+    assert held.limit > 1.5 * free.limit
+    assert "F2-3" in free.clause and "F2-3" not in held.clause

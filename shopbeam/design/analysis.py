@@ -223,7 +223,7 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     bending check (impact and load states included) when that check falls in the span."""
     st = strengths(job, beam=sol.beam)
     fl = st.flexure
-    if fl.ltb is None or fl.stress_s is not None or job.braced:
+    if fl.ltb is None or fl.stress_s is not None or job.braced or job.restrained:
         return []
     out = []
     tol = 1e-9 * job.length

@@ -42,8 +42,10 @@ BASIS_WORDS = {
 
 
 def brace_points(job) -> tuple[bool, list[float]]:
-    """(continuously braced?, lateral brace positions) from beam.braced / beam.braces."""
-    return job.braced, list(job.braces)
+    """(continuously braced?, lateral brace positions) from beam.braced / beam.braces.
+    `restrained = true` (held against twist and sideways movement all along) braces the
+    member all along too: no unbraced length is left to buckle sideways."""
+    return job.braced or job.restrained, list(job.braces)
 
 
 # A bearing support (fixed, pin, roller) holds the section against twist where it sits
