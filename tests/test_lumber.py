@@ -20,6 +20,7 @@ from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.members import wood
 from shopbeam.members.catalog import lookup
 from shopbeam.members.materials import figures, get
+from shopbeam.output.present import present
 
 PSI = 6894.757293168361
 IN = 0.0254
@@ -453,3 +454,22 @@ def test_dead_load_alone_is_checked_with_cd_0_9():
     res = analyze(job(load='value = "-110 lbf/ft"\ncase = "dead"', beam="braced = true",
                       criteria='duration = "permanent"'))
     assert not [c for c in res.checks if "dead load" in c.name]
+
+
+@pytest.mark.parametrize("span, over", [("23 ft", False), ("24 ft", True), ("30 ft", True)])
+def test_a_member_past_rb_50_is_not_rated(span, over):
+    # NDS 2018 3.3.3.7: RB shall not exceed 50 (from memory). 2x12 (1-1/2 x 11-1/4 in), single
+    # span, uniform load, lu/d >= 7: le = 1.63 lu + 3 d (Table 3.3.3). Hand figures: 23 ft,
+    # le = 483.6 in, RB = sqrt(le d / b^2) = 49.2; 24 ft: 503.2 in, RB = 50.2; 30 ft: 55.7
+    j = job("2x12", "DF-L-SS", span, load='value = "-5 lbf/ft"')
+    cap = capacity(j)
+    why = [r for r in cap.not_rated if "RB over 50" in r]
+    assert bool(why) == over
+    if over:
+        assert "3.3.3.7" in why[0] and "brace" in why[0].lower()
+        assert "NOT CHECKED" in present(analyze(j)).verdict
+    else:
+        assert cap.rated
+    braced = capacity(job("2x12", "DF-L-SS", span, load='value = "-5 lbf/ft"',
+                          beam="braced = true"))
+    assert not [r for r in braced.not_rated if "RB over 50" in r]

@@ -861,9 +861,38 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     fl, sh = _design_factor(job, sec, fl, sh)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
     extra += _stainless_buckling(job, b, fl, segs)
+    extra += _wood_slenderness(job, fl, segs, braced)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
                      member_unchecked(job, sec, fl) + extra,
                      live_ratio=live_deflection_ratio(job))
+
+
+def _wood_slenderness(job, fl: Flexure, segs, braced: bool) -> tuple[Unchecked, ...]:
+    """A lumber member whose slenderness ratio RB = sqrt(le d / b^2) passes 50 on an unbraced
+    length: NDS 2018 3.3.3.7 does not allow it (RB shall not exceed 50, from memory), so the
+    CL figure past that is no strength to rate on."""
+    if fl.ltb is None or fl.ltb[0] != "NDS" or braced:
+        return ()
+    _fb, _s, _emin, b, d = fl.ltb[1]
+    worst = None
+    for a, bb, free, _l1, _why in segs:
+        le, le_words = lumber.effective_length(bb - a, d, _wood_load_case(job, a, bb, free))
+        rb = math.sqrt(le * d / b**2)
+        if rb > 50 and (worst is None or rb > worst[0]):
+            worst = (rb, a, bb, le, le_words)
+    if worst is None:
+        return ()
+    rb, a, bb, le, le_words = worst
+    ln = lambda x: fmt(x, "length", job.units)  # noqa: E731
+    # the longest unbraced length with RB <= 50 for this section, for the message
+    return (Unchecked(
+        "bending strength of a member with RB over 50",
+        f"the unbraced length {ln(a)} to {ln(bb)} ({le_words} = "
+        f"{fmt(le, 'small_length', job.units)}) gives RB = sqrt(le d / b^2) = {rb:.3g}, over "
+        "the 50 NDS 2018 3.3.3.7 allows: the member may not be used unbraced over that "
+        "length, whatever its load. Brace its compression edge (beam.braces = [...], or "
+        "braced = true where a deck is nailed to it), or use a broader member",
+        "NDS 2018 3.3.3.7 (RB shall not exceed 50, from memory)"),)
 
 
 def _stainless_buckling(job, basis: str, fl: Flexure, segs) -> tuple[Unchecked, ...]:

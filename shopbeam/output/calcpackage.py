@@ -188,7 +188,7 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
             states.append(f"{c.name}: governed by {c.state}.")
 
     p = present(result)
-    verdict = ("all checks PASS" if result.ok else "the member FAILS: " + ", ".join(p.failing))
+    verdict = (p.verdict if result.ok else "the member FAILS: " + ", ".join(p.failing))
     note = upward_note(job)
     if note:
         verdict += ". " + note.rstrip(".")  # the page adds the full stop

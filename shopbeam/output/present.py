@@ -179,7 +179,7 @@ def present(result: Result) -> Presentation:
         reactions=reactions, governing_state=state,
         checks=_check_rows(job, result.checks),
         governing=f"{g.name}, ratio {g.ratio:.3f}",
-        verdict="all checks PASS" if result.ok else "the member FAILS this check",
+        verdict=_verdict(result),
         unchecked=tuple(f"{u.name}: {u.reason}" + (f" ({u.clause})" if u.clause else "")
                         for u in result.unchecked),
         self_checks=tuple(f"[{'pass' if d.ok else 'WARN'}] {d.name}: {d.detail}"
@@ -187,6 +187,18 @@ def present(result: Result) -> Presentation:
         cautions=tuple(result.cautions), envelope=env,
         uplift=uplift_lines(reactions, env),
         failing=tuple(c.name for c in result.checks if not c.ok))
+
+
+def _verdict(result) -> str:
+    """The verdict line; a pass that leaves a limit state unchecked, on which no rating can
+    rest, names it there rather than only among the cautions."""
+    if not result.ok:
+        return "the member FAILS this check"
+    gaps = list(dict.fromkeys(u.name for u in result.unchecked if u.blocks_rating))
+    if not gaps:
+        return "all checks PASS"
+    return ("all checks PASS, but NOT CHECKED: " + "; ".join(gaps)
+            + " (see CAUTIONS; no rating rests on this)")
 
 
 def warnings_headline(job, before: str) -> str:

@@ -136,7 +136,7 @@ def render(result: Result) -> str:
             lines += _wrap(f"worst state: {c.state}", "      ")
         for s in c.spans:
             lines.append(f"      {s}")
-    lines.append(f"  governing: {p.governing} -> {p.verdict}")
+    lines += _wrap(f"governing: {p.governing} -> {p.verdict}", "  ")
     note = upward_note(job)
     if note:
         lines += _wrap(note, "  !! ")

@@ -302,6 +302,10 @@ def verdict_line(result) -> str:
     if result.ok:
         up = getattr(result.job, "upward", ())
         but = f" - BUT {len(up)} load(s) point UP: check the signs" if up else ""
+        gaps = [u for u in result.unchecked if u.blocks_rating]
+        if gaps:
+            but += (f" - BUT {len(gaps)} limit state(s) NOT CHECKED (no rating): "
+                    + "; ".join(dict.fromkeys(u.name for u in gaps)))
         return (f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} "
                 f"(used {g.ratio:.0%}){but}")
     fails = [c.name for c in result.checks if not c.ok]
