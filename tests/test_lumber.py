@@ -473,3 +473,48 @@ def test_a_member_past_rb_50_is_not_rated(span, over):
     braced = capacity(job("2x12", "DF-L-SS", span, load='value = "-5 lbf/ft"',
                           beam="braced = true"))
     assert not [r for r in braced.not_rated if "RB over 50" in r]
+
+
+def test_permanent_duration_takes_creep_on_every_load():
+    # NDS 2018 3.5.2: long-term deflection = Kcr x the deflection under long-term load (Kcr
+    # 1.5 seasoned, dry; from memory); duration = "permanent" (NDS Table 2.3.2) says every
+    # load stays. Hand figure, 2x12 (I = 177.98 in^4) DF-L No.2 (E 1.6e6 psi, NDS Supplement
+    # Table 4A, from memory), 20 ft, 30 lbf/ft: 5 w L^4 / (384 E I) = 0.3793 in; x 1.5 = 0.5690
+    short = check(analyze(job("2x12", length="20 ft", load='value = "-30 lbf/ft"',
+                              beam="braced = true")), "deflection")
+    lasting = check(analyze(job("2x12", length="20 ft", load='value = "-30 lbf/ft"',
+                                beam="braced = true", criteria='duration = "permanent"')),
+                    "deflection")
+    assert short.demand / IN == pytest.approx(0.3793, rel=2e-3)
+    assert lasting.demand / IN == pytest.approx(0.5690, rel=2e-3)
+    assert "Kcr 1.5" in lasting.formula and "permanent" in lasting.formula
+
+
+@pytest.mark.parametrize("tags, duration, warned", [
+    ('["shelf"]', "", True), ('["rack"]', "", True), ('["storage"]', "", True),
+    ('["shelf"]', 'duration = "ten-years"', False), ('["bench"]', "", False)])
+def test_a_wood_rack_or_shelf_with_no_duration_is_told_what_it_is_checked_as(tags, duration,
+                                                                            warned):
+    text = f"""schema = 1
+title = "wood shelf"
+tags = {tags}
+[beam]
+length = "6 ft"
+section = "2x10"
+material = "DF-L-2"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-50 lbf/ft"
+[criteria]
+{duration}
+"""
+    said = [w for w in parse_job_text(text).warnings if w.key == "criteria.duration"]
+    assert bool(said) == warned
+    if warned:
+        assert "permanent" in said[0].message

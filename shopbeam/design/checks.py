@@ -1094,12 +1094,18 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
                       params=shear_params, **_provenance(st.basis, sh.text, "shear"))
     creep = ""
     dsol = sol
-    if fl.wood is not None and any(ld.case == "dead" for ld in sol.beam.loads):
+    # every load is long-term when the job says its loads are permanent (NDS Table 2.3.2
+    # "permanent": over ten years), the dead loads alone otherwise
+    lasting = fl.wood is not None and lumber.service_of(job).duration == "permanent"
+    if fl.wood is not None and any(ld.case == "dead" or lasting for ld in sol.beam.loads):
         kcr = fl.wood.kcr
-        dsol = _solve_loads(sol, [ld.scaled(kcr) if ld.case == "dead" else ld
+        dsol = _solve_loads(sol, [ld.scaled(kcr) if ld.case == "dead" or lasting else ld
                                   for ld in sol.beam.loads])
-        creep = (f"; long-term: Kcr {kcr:g} x the dead-load deflection + the live-load "
-                 f"deflection (NDS 2018 3.5.2, {'wet service' if kcr > 1.5 else 'seasoned, dry'})")
+        service = 'wet service' if kcr > 1.5 else 'seasoned, dry'
+        creep = (f"; long-term: Kcr {kcr:g} x the deflection under every load, all of them "
+                 f"permanent (duration = \"permanent\"; NDS 2018 3.5.2, {service})" if lasting else
+                 f"; long-term: Kcr {kcr:g} x the dead-load deflection + the live-load "
+                 f"deflection (NDS 2018 3.5.2, {service})")
     spans = deflection_limits(job, dsol, st)
     w = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
     defl = Check("deflection", w["demand"], w["limit"], "m",

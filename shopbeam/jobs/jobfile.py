@@ -23,7 +23,7 @@ from functools import cached_property
 from pathlib import Path
 
 from shopbeam import units
-from shopbeam.cautions import RACK_TAGS, is_lifting, normal_tag
+from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, is_lifting, normal_tag
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support, segments
 from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
@@ -1422,7 +1422,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "beam.section")
 
 
-def _wood_keys(r: _Reader, beam: dict, crit, material, section):
+def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
     """The wood member's service keys ([beam] wet_service, temperature, repetitive;
     [criteria] duration); a wood material comes back with
     the reference values of this member's size class and E' (see members.wood)."""
@@ -1458,6 +1458,13 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section):
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
+    if "duration" not in crit and (RACK_TAGS | SHELF_TAGS | {"storage"}).intersection(tags):
+        r.warn("a wood rack or shelf with no duration is checked as a ten-year load (CD 1.0, "
+               "NDS 2018 Table 2.3.2) with its live loads short-term for deflection; stock "
+               "that stays on it for years is a permanent load: write duration = "
+               "\"permanent\" under [criteria] (CD 0.9, and Kcr on the deflection of every "
+               "load, NDS 3.5.2), or duration = \"ten-years\" to keep this",
+               "criteria.duration")
     try:
         return wood.adjusted_material(material, section, wet, temp), service
     except InputError as e:
@@ -1601,7 +1608,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 if length is not None else ""
             if stubby:
                 r.warn(stubby, "beam.length")
-        material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section)
+        material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section,
+                                            tags)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
             r.error("self_weight must be true or false", "beam.self_weight")
