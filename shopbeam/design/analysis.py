@@ -6,7 +6,7 @@
 from __future__ import annotations
 
 import re
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 
 import numpy as np
 
@@ -15,7 +15,7 @@ from shopbeam.cautions import RACK_TAGS, cautions_for
 from shopbeam.design import loading
 from shopbeam.design.basis import support_braces
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
-                                    impact_of, not_checked_words, strengths)
+                                    impact_of, not_checked_words, strengths, wood_load_case)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
 from shopbeam.design.lifting import profile_of
 from shopbeam.design.loading import run_checks
@@ -436,29 +436,61 @@ def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
 
 
 def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
-    """(start, end, Mn / Omega) of each length between the supports (the points that hold
-    the bottom flange) over which the bottom flange's lateral-torsional buckling (Cb 1.0)
-    would lower the bending strength of a member taken as braced all along (`braced =
-    true`, not `restrained`)."""
-    fl = _rating_flexure(st)
-    if fl is None or not job.braced or job.restrained:
+    """(start, end, allowable moment) of each length between the supports (the points that
+    hold the bottom flange or edge) over which that edge's lateral-torsional buckling (Cb 1.0)
+    would lower the bending strength of a member taken as braced all along (`braced = true`,
+    not `restrained`): by AISC 360-16 F2 for steel shapes, by NDS 2018 3.3.3 (CL over the
+    length, its Table 3.3.3 row) for lumber. A member whose sideways buckling shopbeam does
+    not compute (an aluminium open shape or deep bar, a typed-in metal's deep bar on the
+    first-yield basis: listed as not checked when unbraced) gets 0 on every length, so any
+    hogging moment stops its rating."""
+    if not job.braced or job.restrained:
         return []
+    fl = st.flexure
     stops = sorted({0.0, job.length, *support_braces(job, job.supports)})
-    out = []
-    for a, b in zip(stops, stops[1:]):
-        l1 = fl.ltb1(b - a)[0]
-        if b - a > 1e-9 * job.length and l1 < fl.cap:
-            out.append((a, b, l1 / fl.omega))
-    return out
+    lengths = [(a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * job.length]
+    wood = fl.ltb is not None and fl.ltb[0] == "NDS"
+    if fl.ltb is not None and (fl.stress_s is None or wood):
+        out = []
+        held = set(support_braces(job, job.supports))
+        tol = 1e-9 * job.length
+        for a, b in lengths:
+            case = "any"
+            if wood:
+                free = not (any(abs(a - h) <= tol for h in held)
+                            and any(abs(b - h) <= tol for h in held))
+                case = wood_load_case(job, a, b, free)
+            l1 = fl.ltb1(b - a, case)[0]
+            if l1 < fl.cap:
+                out.append((a, b, l1 / fl.omega))
+        return out
+    loose = replace(job, braced=False, braces=())
+    if any(u.name == "lateral-torsional buckling" for u in unchecked_for(loose)):
+        return [(a, b, 0.0) for a, b in lengths]
+    return []
+
+
+def hogging_source(job: Job, st) -> str:
+    """The clause a bottom edge's buckling under hogging moment falls under, by basis."""
+    fl = st.flexure
+    if fl.ltb is not None and fl.ltb[0] == "NDS":
+        return ("NDS 2018 3.3.3 (CL = 1.0 only where the compression edge is supported "
+                "throughout its length) and 4.4.1.2")
+    if getattr(job.material, "kind", "") == "aluminum":
+        return "ADM 2015 chapter F (lateral-torsional buckling, not computed)"
+    if fl.ltb is None or fl.stress_s is not None:
+        return "AISC 360-16 F11 (deep bar lateral-torsional buckling, not computed here)"
+    return "AISC 360-16 F1, F2 (Lb between braces of the compression flange)"
 
 
 def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     """`braced = true` holds the member all along, but what shops brace it with (a deck,
-    boards, sheeting) sits on the top flange. Where the moment hogs, the bottom flange is in
-    compression, and between the supports nothing holds it: its lateral-torsional buckling is
-    not checked. Listed here; `capacity` posts no rating where the hogging moment at the
-    rated load would pass that lower strength. `restrained = true` (held against twist all
-    along) says the bottom flange is held too."""
+    boards, sheeting) sits on the top flange or edge. Where the moment hogs, the bottom one
+    is in compression, and between the supports nothing holds it: its lateral-torsional
+    buckling is not checked. Listed here; `capacity` posts no rating where the hogging moment
+    at the rated load would pass that lower strength (any hogging, where shopbeam does not
+    compute that buckling). `restrained = true` (held against twist all along) says the
+    bottom flange is held too."""
     limits = hogging_limits(job, st)
     if not limits:
         return []
@@ -467,18 +499,21 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     if big <= 0 or ex.min >= -0.01 * big:  # hogging under 1 % of the largest moment: none
         return []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    computed = any(allow > 0 for _a, _b, allow in limits)
     return [Unchecked(
         "lateral-torsional buckling of the bottom flange under hogging moment",
         f"braced = true takes the member as braced all along, but a deck, boards or sheeting "
-        f"brace only the flange they sit on; here the moment hogs ({f(ex.min, 'moment')} at "
-        f"{f(ex.min_at)} under the loads as entered), putting the bottom flange in compression "
-        "where nothing holds it between the supports, and its lateral-torsional buckling is "
-        "not checked. No rating is posted where the hogging moment at the rated load would "
-        "exceed the strength that buckling leaves (Cb 1.0); give the bottom flange's brace "
-        "points with braces = [...] in place of braced = true, or write restrained = true if "
-        "the member is held against twist all along",
-        "AISC 360-16 F1, F2 (Lb between braces of the compression flange)",
-        blocks_rating=False)]
+        f"brace only the flange or edge they sit on; here the moment hogs "
+        f"({f(ex.min, 'moment')} at {f(ex.min_at)} under the loads as entered), putting the "
+        "bottom flange or edge in compression where nothing holds it between the supports, "
+        "and its lateral-torsional buckling is not checked. "
+        + ("No rating is posted where the hogging moment at the rated load would exceed the "
+           "strength that buckling leaves (Cb 1.0); " if computed else
+           "shopbeam does not compute that buckling for this member, so no rating is posted "
+           "while the moment hogs; ")
+        + "give the bottom flange's brace points with braces = [...] in place of braced = "
+        "true, or write restrained = true if the member is held against twist all along",
+        hogging_source(job, st), blocks_rating=False)]
 
 
 # A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does

@@ -22,7 +22,8 @@ from dataclasses import dataclass, replace
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Envelopes, Evaluation, evaluate, state_set
-from shopbeam.design.analysis import analyze, cantilever_top_limits, hogging_limits, unchecked_for
+from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits, hogging_source,
+                                       unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
@@ -294,27 +295,34 @@ def _relieving_couples(job, section, k: float) -> tuple[str, ...]:
     return tuple(out)
 
 
-def _hogging(job, limits, ss, k: float) -> tuple[str, ...]:
+def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where, with `braced = true`, the hogging moment at the factor k (over every
-    pattern) would exceed the strength the bottom flange's lateral-torsional buckling leaves
-    over its length between supports (`limits`: `analysis.hogging_limits`; Cb 1.0,
-    conservative)."""
+    pattern) would exceed the strength the bottom flange's or edge's lateral-torsional
+    buckling leaves over its length between supports (`limits`: `analysis.hogging_limits`;
+    Cb 1.0, conservative; 0 where shopbeam does not compute that buckling, so that any
+    hogging beyond 1 % of the largest moment stops the rating)."""
     if not limits or not math.isfinite(k) or k <= 0:
         return ()
     env = Envelopes(ss, k)
+    big = max(max(abs(env.extreme("moment", up, 0.0, job.length).value) for up in (True, False)),
+              1e-300)
     out = []
     for a, b, allow in limits:
         e = env.extreme("moment", False, a, b)
-        if -e.value > allow:
+        if -e.value > max(allow, 0.01 * big if allow <= 0 else 0.0):
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+            leaves = (f"which exceeds the {f(allow, 'moment')} the bottom flange's or edge's "
+                      f"buckling over {f(a)} to {f(b)} leaves ({hogging_source(job, st)}, "
+                      "Cb 1.0) if only the top is braced" if allow > 0 else
+                      f"putting the bottom edge in compression over {f(a)} to {f(b)} where "
+                      "nothing holds it, and shopbeam does not compute that buckling "
+                      f"({hogging_source(job, st)})")
             out.append(f"lateral-torsional buckling of the bottom flange under hogging moment "
                        f"not checked: braced = true, but at the factor found (k = {k:.4g}) the "
-                       f"moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, which exceeds "
-                       f"the {f(allow, 'moment')} the bottom flange's buckling over "
-                       f"{f(a)} to {f(b)} leaves (AISC 360-16 F2, Cb 1.0) if only the top "
-                       "flange is braced. Give the bottom flange's brace points with braces = "
-                       "[...] in place of braced = true, or write restrained = true if the "
-                       "member is held against twist all along")
+                       f"moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. Give "
+                       "the bottom flange's brace points with braces = [...] in place of "
+                       "braced = true, or write restrained = true if the member is held "
+                       "against twist all along")
     return tuple(out)
 
 
@@ -326,7 +334,7 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     if not (hog or top) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
-    return _hogging(job, hog, ss, k) + _cantilever_top(job, top, ss, k)
+    return _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k)
 
 
 def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:

@@ -854,7 +854,7 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     for a, bb, free in unbraced_segments(job, beam):
         case = "any"
         if fl.ltb is not None and fl.ltb[0] == "NDS":
-            case = _wood_load_case(job, a, bb, free)
+            case = wood_load_case(job, a, bb, free)
         l1, why = fl.ltb1(0.0 if braced else bb - a, case, job.units)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
@@ -876,7 +876,7 @@ def _wood_slenderness(job, fl: Flexure, segs, braced: bool) -> tuple[Unchecked, 
     _fb, _s, _emin, b, d = fl.ltb[1]
     worst = None
     for a, bb, free, _l1, _why in segs:
-        le, le_words = lumber.effective_length(bb - a, d, _wood_load_case(job, a, bb, free))
+        le, le_words = lumber.effective_length(bb - a, d, wood_load_case(job, a, bb, free))
         rb = math.sqrt(le * d / b**2)
         if rb > 50 and (worst is None or rb > worst[0]):
             worst = (rb, a, bb, le, le_words)
@@ -947,7 +947,7 @@ def _deep_bar_first_yield(job, sec, basis: str, segs) -> tuple[Unchecked, ...]:
         "AISC 360-16 F11.2"),)
 
 
-def _wood_load_case(job, a: float, b: float, free: bool) -> str:
+def wood_load_case(job, a: float, b: float, free: bool) -> str:
     """NDS Table 3.3.3 row for the loads of the job on the unbraced length a..b."""
     if job.moving:
         return "any"
@@ -1166,7 +1166,7 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     braced = brace_points(job)[0]
     worst = None
     for a, b, free in ((x[0], x[1], x[2]) for x in st.ltb_segments):
-        l1, why = scaled.ltb1(0.0 if braced else b - a, _wood_load_case(job, a, b, free))
+        l1, why = scaled.ltb1(0.0 if braced else b - a, wood_load_case(job, a, b, free))
         mn = min(scaled.cap, l1)
         ex = dsol.moment.extremes(a, b)
         if worst is None or ex.abs_max / mn > worst[0]:
