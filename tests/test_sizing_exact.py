@@ -270,3 +270,22 @@ def test_cli_size_moving_job_whole_kind(tmp_path):
     # trolley wheels on a tube wall: the flange and wall checks under wheels do not cover it,
     # so the section passes what is checked but no load may be posted on it
     assert data["passing"][0]["not_rated"]
+
+
+def test_self_weight_false_holds_for_every_section_swept(monkeypatch):
+    # self_weight = false (the job's dead loads carry the member's weight): each swept row's
+    # ratio is that section's own full check without self-weight, exactly; with it added the
+    # W12X30 at 1,045 lbf/ft (ratio 0.984) read as failing and a heavier section was picked
+    text = ('schema = 1\ntitle = "girt"\n[beam]\nlength = "20 ft"\nsection = "W12X30"\n'
+            'material = "A992"\nself_weight = false\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "20 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-1045 lbf/ft"\n')
+    job = parse_job_text(text)
+    secs = _lightest_w()
+    monkeypatch.setattr(catalog, "list_sections", lambda kind=None: list(secs))
+    res = sizing.size(job, "W")
+    full = {s.designation: _full_ratio(job, s) for s in secs}
+    for r in res.rows:
+        assert r.ratio == pytest.approx(full[r.designation], rel=1e-9), r.designation
+    assert full["W12X30"] < 1.0
+    assert res.lightest.designation == "W12X30"

@@ -743,7 +743,8 @@ def _batched(job, base, parts, cands, with_capacity):
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
-    wsw = np.array([r[5] for r in rs])
+    # the job's self_weight = false holds for every section (its dead loads carry it)
+    wsw = np.array([r[5] if job.self_weight else 0.0 for r in rs])
     ei = np.array([r[9] for r in rs])
     vallow = np.array([r[8] for r in rs])
     omega = np.array([r[6] for r in rs])

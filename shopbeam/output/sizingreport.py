@@ -20,7 +20,9 @@ def render(res: SizeResult, top: int = 15) -> str:
                  f"{len(res.passing)} pass; {res.method}")
     if res.material_note:
         lines += textwrap.wrap("NOTE: " + res.material_note, 78, subsequent_indent="  ")
-    lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; self-weight recomputed per section")
+    weight = ("self-weight recomputed per section" if job.self_weight else
+              "self-weight not included (self_weight = false)")
+    lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; {weight}")
     more = len(res.screened_only)
     if more:
         lines += textwrap.wrap(
