@@ -152,6 +152,24 @@ def test_inline_errors(spec, key, words):
     assert words in exc.value.problem.message
 
 
+LUMBER = {"kind": "lumber", "e": "1600 ksi", "fb": "900 psi", "fv": "180 psi",
+          "fc_perp": "625 psi", "density": "35 lb/ft^3"}
+
+
+@pytest.mark.parametrize("slip", [{"fb": "900 MPa"}, {"fv": "180 ksi"}, {"fc_perp": "625 ksi"},
+                                  {"fb": "900 psi", "fy": "30 ksi"}])
+def test_a_typed_in_lumber_value_no_wood_has_is_refused(slip):
+    # NDS Supplement 2018 Tables 4A-4D and 5A (from memory): no graded lumber or glulam comes
+    # near Fb 6,000 psi, Fv 600 psi or Fc_perp 2,000 psi; "900 MPa" typed for 900 psi passed
+    # as 130,500 psi and the label posted twice the load
+    key = next(iter(k for k in slip if slip[k] != LUMBER.get(k)))
+    with pytest.raises(InputError) as exc:
+        resolve_material(LUMBER | slip)
+    assert exc.value.problem.key == f"beam.material.{key}"
+    assert "check the unit" in exc.value.problem.message
+    assert resolve_material(LUMBER).fy == pytest.approx(900 * 6894.757, rel=1e-6)
+
+
 def test_bare_specification_is_not_guessed():
     # A500 has grades B and C with different yields: shopbeam asks instead of guessing
     with pytest.raises(InputError) as exc:

@@ -320,6 +320,32 @@ _INLINE_KEYS = {"e": "stress", "fy": "stress", "density": "density", "fu": "stre
                 "fc_perp": "stress"}
 
 
+# Highest reference design values of any graded sawn lumber, glulam or structural composite
+# lumber, with room to spare (NDS Supplement 2018 Tables 4A-4D, 5A and the SCL makers'
+# literature top out near Fb 3,000 psi, Fv 300 psi, Fc_perp 1,000 psi; common
+# practice, from memory). Past these a unit was slipped: "900 MPa" or "180 ksi" for psi.
+_WOOD_TOP = {"fb": (6000.0, "Fb 900 psi for DF-L No.2, 2,400 psi for 24F glulam"),
+             "fy": (6000.0, "Fb 900 psi for DF-L No.2, 2,400 psi for 24F glulam"),
+             "fv": (600.0, "Fv 180 psi for DF-L No.2, 265 psi for glulam"),
+             "fc_perp": (2000.0, "Fc_perp 625 psi for DF-L No.2")}
+# (an e no wood has, a steel's typed under kind = "lumber", is the kind mismatch the reader
+# warns of and capacity does not rate: see jobs.jobfile.kind_mismatch)
+_PSI = 6894.757293168361
+
+
+def _plausible_wood(spec: Mapping, vals: dict, key: str) -> None:
+    """Refuse a typed-in lumber value no wood product has (a unit slip)."""
+    for k, (top, usual) in _WOOD_TOP.items():
+        if k in spec and k in vals and vals[k] > top * _PSI:
+            typed = str(spec[k]).strip()
+            num = typed.split()[0] if typed.split() else typed
+            raise InputError(
+                f"{k} = {spec[k]!r} ({vals[k] / _PSI:,.0f} psi) is more than any lumber, glulam "
+                f"or composite lumber has (about {top:,.0f} psi at most; {usual}): check the "
+                f"unit, e.g. \"{num} psi\" rather than {typed!r}",
+                f"{key}.{k}")
+
+
 def _inline(spec: Mapping, key: str) -> Material:
     allowed = set(_INLINE_KEYS) | {"name", "kind", "key", "source"}
     for k in spec:
@@ -352,8 +378,9 @@ def _inline(spec: Mapping, key: str) -> Material:
     # strength of any graded lumber lies between about 2 MPa (290 psi) and 2000 MPa (290 ksi);
     # any solid a shop makes a beam of weighs between about 50 and 25,000 kg/m^3 (balsa to
     # tungsten). Outside them a unit was slipped ("50 psi" for 50 ksi, lb/in^3 for lb/ft^3).
+    named = "fy" if "fy" in spec else "fb"
     if not 2e6 <= vals["fy"] <= 2e9:
-        raise InputError(f"fy = {spec.get('fy', spec.get('fb'))!r} is not a plausible strength "
+        raise InputError(f"{named} = {spec.get('fy', spec.get('fb'))!r} is not a plausible strength "
                          "(mild steel 36 ksi, A500-C 50 ksi, 6061-T6 35 ksi, lumber Fb about "
                          "0.9 ksi): check the unit, e.g. \"50 ksi\" rather than \"50 psi\"",
                          f"{key}.fy" if "fy" in spec else f"{key}.fb")
@@ -365,6 +392,8 @@ def _inline(spec: Mapping, key: str) -> Material:
         raise InputError("fy is not less than e: check the units", f"{key}.fy")
     if "fu" in vals and vals["fu"] < vals["fy"]:
         raise InputError("fu is less than fy", f"{key}.fu")
+    if kind == "lumber":
+        _plausible_wood(spec, vals, key)
     if kind == "lumber" and "fv" not in vals:
         # NDS shear values are not a fixed share of Fb (DF-L No.2: Fb 900 psi, Fv 180 psi,
         # NDS Supplement 2018 Table 4A, from memory): nothing is guessed
