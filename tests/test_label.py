@@ -252,3 +252,23 @@ value = "-2.5 kN"
     assert kg == label.floor_sig(fig.exact / 9.80665) and kg * 9.80665 <= fig.exact
     us = label.rating(capacity(parse_job_text(text.replace('units = "si"', 'units = "us"'))))
     assert "kg" not in next(f for f in us.figures if f.label == "MAX POINT LOAD").value
+
+
+@pytest.mark.parametrize("dead, self_weight, words", [
+    ('[[loads]]\ntype = "uniform"\nvalue = "-300 lbf/ft"\ncase = "dead"\n', "true",
+     "IN ADDITION TO the dead load as entered (3600 lbf in all) and the member's own weight"),
+    ("", "true", "IN ADDITION TO the member's own weight"),
+    ("", "false", None)])
+def test_the_label_says_the_posted_load_comes_on_top_of_the_dead_loads(dead, self_weight, words):
+    # a reader of the label must know the dead loads stay on besides the posted figure
+    text = ('schema = 1\ntitle = "shelf"\n[beam]\nlength = "12 ft"\nsection = "W8X18"\n'
+            f'material = "A992"\nself_weight = {self_weight}\n[[supports]]\nat = "0 ft"\n'
+            'type = "pin"\n[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\n'
+            'type = "uniform"\nvalue = "-500 lbf/ft"\n' + dead)
+    cap = capacity(parse_job_text(text))
+    flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
+                                     width=200).replace("|", " ").split())
+    if words:
+        assert words in flat
+    else:
+        assert "IN ADDITION" not in flat

@@ -216,7 +216,26 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                      "Impact NOT included (ANSI MH16.1: 25 % of one unit load more, from "
                      "memory): add it before posting.")
     notes.append("Rated for the loads placed as in the job; other placements are not rated.")
+    on_top = _dead_words(job)
+    if on_top:
+        notes.append(f"These loads are IN ADDITION TO {on_top}, which stay on.")
     return figs, notes
+
+
+def _dead_words(job) -> str:
+    """What the rated live loads sit on top of: the dead loads as entered and the member's
+    own weight ("" when neither)."""
+    sy = job.units
+    dead = [ld for ld in job.loads if ld.case == "dead"]
+    parts = []
+    if dead:
+        force = sum(ld.total_force for ld in dead if ld.kind != "moment")
+        n = len(dead)
+        parts.append(("the dead load" if n == 1 else f"the {n} dead loads") + " as entered"
+                     + (f" ({units.fmt(abs(force), 'force', sy)} in all)" if force else ""))
+    if job.self_weight:
+        parts.append("the member's own weight")
+    return " and ".join(parts)
 
 
 def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
