@@ -64,8 +64,12 @@ def cmd_check(args) -> int:
     analyze(job)  # an unstable beam is an input problem too
     for p in job.warnings:
         print(p.located(), file=sys.stderr)
-    print(f"{args.job}: OK ({len(job.supports)} supports, {len(job.loads)} loads"
-          + (f", {len(job.warnings)} warnings" if job.warnings else "") + ")")
+    from shopbeam.cautions import banner  # noqa: PLC0415 - startup
+
+    print(f"{args.job}: input OK ({len(job.supports)} supports, {len(job.loads)} loads"
+          + (f", {len(job.warnings)} warnings" if job.warnings else "") + "); the member "
+          "is not checked here: run shopbeam solve for its checks")
+    print(banner(job.tags, bool(job.lifting)))
     return EXIT_OK
 
 
