@@ -15,15 +15,23 @@ is known exactly for shear (n = 0), moment (1), EI slope (2) and EI deflection (
 
 A wheel set (loads P_i at offsets d_i) with its first wheel at p adds sum_i P_i Q(x, p + d_i)
 to a static response S(x). Over the plane (x, p) that sum is one polynomial on each cell
-bounded by the fixed breaks (supports, load edges, region ends) and the wheels, and each
-p-range on which no wheel crosses a fixed break (`wheel_cells`). The largest and smallest
+bounded by two neighbouring lines (a fixed break: support, load edge, region end; or a
+wheel) over the p-range on which they are neighbours (`wheel_cells`). The largest and smallest
 value of a quantity over a region of x and the whole travel is therefore at a cell corner, at
 a stationary point along a cell edge (x at a fixed break: a cubic in p; x under a wheel; p at
 a break: a polynomial in x), or at an interior point where both partial derivatives vanish
 (the common roots of two polynomials: the real roots of their resultant in p, then x from
-the x-derivative at that p). Every candidate is evaluated exactly; none is sampled. The cost
-is proportional to the number of cells: (wheels x fixed breaks) p-ranges times (fixed
-breaks + wheels) x-cells, vectorised.
+the x-derivative at that p). Every candidate is evaluated exactly; none is sampled.
+
+The cost is proportional to the number of cells, each built in a fixed number of operations
+(`cell_polys`: the unknowns once per strip, the wheels left of a cell from running sums).
+A wheel crossing a support, spring or hinge changes the response at every x, so the travel
+is cut into strips there: (wheels x interior supports + 1) strips. On a strip the cells are
+the fixed breaks + wheels + the crossings of a wheel over a fixed break inside it. So the
+work is linear in wheels where no wheel crosses an interior support within its travel (a
+simple span, a cantilever), and about wheels x interior supports x (wheels + fixed breaks)
+where wheels do cross them (the response then really is a different polynomial on each of
+those cells).
 """
 
 from __future__ import annotations
@@ -168,17 +176,6 @@ def _shift_matrix(d: np.ndarray, n: int) -> np.ndarray:
     return p * _BINOM[:n, :n][None]
 
 
-def _psi2d(c: np.ndarray, n: int) -> np.ndarray:
-    """(N, NU, NV): coefficients in (u, v) of (u - v + c)^n / n!."""
-    out = np.zeros((len(c), NU, NV))
-    for a in range(n + 1):
-        for bb in range(n + 1 - a):
-            r = n - a - bb
-            coef = _FACT[n] / (_FACT[a] * _FACT[bb] * _FACT[r]) * (-1) ** bb / _FACT[n]
-            out[:, a, bb] += coef * c**r
-    return out
-
-
 def _compose(F: np.ndarray, alpha: np.ndarray, beta: np.ndarray) -> np.ndarray:
     """Coefficients in v of F(alpha + beta v, v) (F: (N, NU, NV))."""
     n = F.shape[0]
@@ -257,7 +254,10 @@ def _colleague_roots(c: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
 # ------------------------------------------------------------------ cells
 @dataclass(frozen=True)
 class Cells:
-    """The cells of the (x, p) plane for one wheel set on one beam (see module doc)."""
+    """The cells of the (x, p) plane for one wheel set on one beam (see module doc): each
+    a trapezoid between two lines that stay next to each other (fixed breaks: x constant;
+    wheels: x = p + offset) over the cell's own p-range, inside one strip of the travel on
+    which no wheel crosses a break of the bare beam."""
 
     p0: np.ndarray  # (C,) start of the cell's p-range
     wp: np.ndarray  # its width (0 for a travel of one position)
@@ -268,76 +268,199 @@ class Cells:
     xr: np.ndarray  # x of the left side at p0 (the cell's origin in x)
     wu: np.ndarray  # the cell's largest width in x
     k: np.ndarray  # piece of the bare beam holding the cell
-    m: np.ndarray  # (C, wheels): piece of the bare beam under each wheel
-    left: np.ndarray  # (C, wheels): wheel left of the cell
+    strip: np.ndarray  # (C,) the strip of the travel holding the cell
+    nleft: np.ndarray  # (C,) how many wheels are left of the cell (the first nleft)
+    strip_p0: np.ndarray  # (S,) start of each strip
+    strip_m: np.ndarray  # (S, wheels): piece of the bare beam under each wheel on the strip
     xs: np.ndarray  # the fixed breaks
     offsets: np.ndarray
 
 
-def wheel_cells(inf: Influence, xs, offsets, p_lo: float, p_hi: float) -> Cells:
-    L = inf.beam.length
-    tol = 1e-11 * L
-    xs = unique(np.concatenate([np.asarray(xs, float), inf.breaks]))
-    xs = xs[(xs >= -tol) & (xs <= L + tol)]
-    d = np.asarray(offsets, float)
-    pb = (xs[:, None] - d[None, :]).ravel()
+def _ragged(lo: np.ndarray, hi: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """(owner, value) of every integer value in [lo[j], hi[j]) for each j."""
+    n = np.maximum(hi - lo, 0)
+    owner = np.repeat(np.arange(len(lo)), n)
+    start = np.cumsum(n) - n
+    return owner, lo[owner] + np.arange(int(n.sum())) - start[owner]
+
+
+def _strips(breaks: np.ndarray, d: np.ndarray, p_lo: float, p_hi: float, tol: float):
+    """The first-wheel positions where some wheel crosses a break of the bare beam (where
+    the influence data under that wheel changes for every x), with the ends of the travel."""
+    pb = (breaks[:, None] - d[None, :]).ravel()
     pb = unique(np.concatenate([[p_lo, p_hi], pb[(pb > p_lo + tol) & (pb < p_hi - tol)]]))
     if len(pb) > 1:
         keep = np.concatenate([[True], np.diff(pb) > tol])
         pb = pb[keep]
         pb[-1] = p_hi
-    if len(pb) == 1:
-        p0s, wps = pb, np.zeros(1)
-    else:
-        p0s, wps = pb[:-1], np.diff(pb)
-    pm = p0s + 0.5 * wps
-    npp, nx, nw = len(p0s), len(xs), len(d)
-    pos = np.concatenate([np.broadcast_to(xs, (npp, nx)), pm[:, None] + d[None, :]], axis=1)
-    order = np.argsort(pos, axis=1, kind="stable")
-    is_fixed = order < nx
-    idx = np.where(is_fixed, order, order - nx)
-    spos = np.take_along_axis(pos, order, axis=1)
-    # consecutive pairs inside the beam
-    lo_f, hi_f = is_fixed[:, :-1], is_fixed[:, 1:]
-    lo_i, hi_i = idx[:, :-1], idx[:, 1:]
-    xm = 0.5 * (spos[:, :-1] + spos[:, 1:])
-    inside = (spos[:, 1:] - spos[:, :-1] > tol) & (xm > 0) & (xm < L)
-    P = np.broadcast_to(np.arange(npp)[:, None], lo_f.shape)
-    sel = np.nonzero(inside)
-    pc = P[sel]
-    lo_f, hi_f, lo_i, hi_i, xm = lo_f[sel], hi_f[sel], lo_i[sel], hi_i[sel], xm[sel]
-    p0, wp = p0s[pc], wps[pc]
-    def fx(fixed, i):
-        return xs[np.where(fixed, i, 0)]
+    return pb
 
-    def dw(fixed, i):
-        return d[np.where(fixed, 0, i)] if nw else 0.0
 
-    xr = np.where(lo_f, fx(lo_f, lo_i), p0 + dw(lo_f, lo_i))
-    x_hi0 = np.where(hi_f, fx(hi_f, hi_i), p0 + dw(hi_f, hi_i))
-    x_hi1 = np.where(hi_f, fx(hi_f, hi_i), p0 + wp + dw(hi_f, hi_i))
-    x_lo1 = np.where(lo_f, fx(lo_f, lo_i), p0 + wp + dw(lo_f, lo_i))
-    wu = np.maximum(x_hi0, x_hi1) - xr  # the cell lies in 0 <= u <= 1 (sides move right)
-    del x_lo1
-    wu = np.where(wu > 0, wu, tol)
+def wheel_cells(inf: Influence, xs, offsets, p_lo: float, p_hi: float) -> Cells:
+    """The cells of the (x, p) plane: on each strip of the travel (no wheel crosses a bare
+    beam break inside it) the trapezoids between neighbouring lines, each over the whole
+    p-range on which its two lines are neighbours. Lines are the fixed breaks xs (with the
+    bare beam's) and the wheels; a wheel crossing a fixed break that is not a break of the
+    bare beam (a load edge, a brace) ends only the cells that touch the crossing, so a
+    strip holds (fixed breaks + wheels + crossings) cells: linear in wheels and in fixed
+    breaks. Only a wheel crossing a support, spring or hinge starts a new strip."""
+    L = inf.beam.length
+    tol = 1e-11 * L
+    xs = unique(np.concatenate([np.asarray(xs, float), inf.breaks]))
+    xs = xs[(xs >= -tol) & (xs <= L + tol)]
+    d = np.asarray(offsets, float)
+    nx, nw = len(xs), len(d)
+    b = inf.breaks
+    pb = _strips(b, d, p_lo, p_hi, tol)
+    if len(pb) == 1:  # a travel of one position: the lines in order at that position
+        return _cells_at(inf, xs, d, float(pb[0]))
+    P0, P1 = pb[:-1], pb[1:]
+    S = len(P0)
+    big = 4.0 * (L + abs(p_lo) + abs(p_hi)) + 1.0
+    dm = np.concatenate([[-big], d, [big]])  # d[-1] = -inf, d[nw] = +inf, shifted by one
+    xm = np.concatenate([[-big], xs, [big]])
+    blocks = []  # (strip, lo_fixed, lo_idx, hi_fixed, hi_idx, pa, pb)
+
+    def add(s, lo_f, lo_i, hi_f, hi_i, a, z):
+        a = np.maximum(a, P0[s])
+        z = np.minimum(z, P1[s])
+        ok = z - a > tol
+        n = int(ok.sum())
+        if n:
+            blocks.append((s[ok], np.full(n, lo_f), lo_i[ok], np.full(n, hi_f), hi_i[ok],
+                           a[ok], z[ok]))
+
+    sf = np.arange(S)[:, None]
+    # fixed f, then wheel i (f < nx - 1): p in (x_f - d_i, min(x_f+1 - d_i, x_f - d_i-1))
+    f = np.arange(nx - 1)[None, :]
+    ia = np.searchsorted(d, xs[f] - P1[:, None], "right") - 1
+    ib = np.searchsorted(d, xs[f] - P0[:, None], "left") + 1
+    own, i = _ragged(np.clip(ia, 0, nw).ravel(), np.clip(ib + 1, 0, nw).ravel())
+    s, ff = own // (nx - 1), own % (nx - 1)
+    add(s, True, ff, False, i, xs[ff] - d[i], np.minimum(xs[ff + 1] - d[i], xs[ff] - dm[i]))
+    # wheel i, then fixed f (f > 0): p in (max(x_f-1 - d_i, x_f - d_i+1), x_f - d_i)
+    f = np.arange(1, nx)[None, :]
+    ia = np.searchsorted(d, xs[f] - P1[:, None], "right") - 2
+    ib = np.searchsorted(d, xs[f] - P0[:, None], "left") + 1
+    own, i = _ragged(np.clip(ia, 0, nw).ravel(), np.clip(ib, 0, nw).ravel())
+    s, ff = own // (nx - 1), own % (nx - 1) + 1
+    add(s, False, i, True, ff, np.maximum(xs[ff - 1] - d[i], xs[ff] - dm[i + 2]), xs[ff] - d[i])
+    # fixed f, then fixed f + 1 (no wheel between): p in (x_f+1 - d_i+1, x_f - d_i), i = -1..
+    f = np.arange(nx - 1)[None, :]
+    ia = np.searchsorted(d, xs[f + 1] - P1[:, None], "right") - 2
+    ib = np.searchsorted(d, xs[f] - P0[:, None], "left") + 1
+    own, i = _ragged(np.clip(ia, -1, nw).ravel() + 1, np.clip(ib, -1, nw).ravel() + 1)
+    i = i - 1
+    s, ff = own // (nx - 1), own % (nx - 1)
+    add(s, True, ff, True, ff + 1, xs[ff + 1] - dm[i + 2], xs[ff] - dm[i + 1])
+    # wheel i, then wheel i + 1 (no fixed break between): p in (x_f - d_i, x_f+1 - d_i+1)
+    if nw > 1:
+        i = np.arange(nw - 1)[None, :]
+        fa = np.searchsorted(xs, P0[:, None] + d[i + 1], "right") - 2
+        fb = np.searchsorted(xs, P1[:, None] + d[i], "left") + 1
+        own, f = _ragged(np.clip(fa, -1, nx).ravel() + 1, np.clip(fb, -1, nx).ravel() + 1)
+        f = f - 1
+        s, ii = own // (nw - 1), own % (nw - 1)
+        add(s, False, ii, False, ii + 1, xm[f + 1] - d[ii], xm[f + 2] - d[ii + 1])
+    s, lo_f, lo_i, hi_f, hi_i, pa, pz = (np.concatenate(c) for c in zip(*blocks))
+    order = np.lexsort((pa, np.where(lo_f, xs[np.where(lo_f, lo_i, 0)], pa + d[np.where(
+        lo_f, 0, lo_i)] if nw else 0.0), s))
+    s, lo_f, lo_i, hi_f, hi_i, pa, pz = (a[order] for a in (s, lo_f, lo_i, hi_f, hi_i, pa, pz))
+    m = np.clip(np.searchsorted(b, 0.5 * (P0 + P1)[:, None] + d[None, :], "right") - 1,
+                0, len(b) - 2)
+    return _finish(inf, xs, d, s, lo_f, lo_i, hi_f, hi_i, pa, pz - pa, P0, m)
+
+
+def _finish(inf, xs, d, s, lo_f, lo_i, hi_f, hi_i, p0, wp, strip_p0, strip_m) -> Cells:
+    L = inf.beam.length
+    tol = 1e-11 * L
+    nw = len(d)
+
+    def at(fixed, idx, p):
+        return np.where(fixed, xs[np.where(fixed, idx, 0)],
+                        p + (d[np.where(fixed, 0, idx)] if nw else 0.0))
+
+    xr = at(lo_f, lo_i, p0)
+    wu = np.maximum(at(hi_f, hi_i, p0), at(hi_f, hi_i, p0 + wp)) - xr
+    wu = np.where(wu > 0, wu, tol)  # the cell lies in 0 <= u <= 1 (sides move right)
+    pm = p0 + 0.5 * wp
+    xm = 0.5 * (at(lo_f, lo_i, pm) + at(hi_f, hi_i, pm))
     b = inf.breaks
     k = np.clip(np.searchsorted(b, xm, "right") - 1, 0, len(b) - 2)
-    a_mid = pm[pc][:, None] + d[None, :]
-    m = np.clip(np.searchsorted(b, a_mid, "right") - 1, 0, len(b) - 2)
-    left = a_mid < xm[:, None]
-    return Cells(p0, wp, lo_f, lo_i, hi_f, hi_i, xr, wu, k, m, left, xs, d)
+    nleft = np.searchsorted(d, xm - pm, "left") if nw else np.zeros(len(xm), int)
+    return Cells(p0, wp, lo_f, lo_i, hi_f, hi_i, xr, wu, k, s, nleft, np.asarray(strip_p0, float),
+                 strip_m, xs, d)
+
+
+def _cells_at(inf: Influence, xs, d, p: float) -> Cells:
+    """The cells of a travel of one position p (zero width in p)."""
+    L = inf.beam.length
+    tol = 1e-11 * L
+    nx, nw = len(xs), len(d)
+    pos = np.concatenate([xs, p + d])
+    order = np.argsort(pos, kind="stable")
+    spos = pos[order]
+    fixed = order < nx
+    idx = np.where(fixed, order, order - nx)
+    xm = 0.5 * (spos[:-1] + spos[1:])
+    ok = (np.diff(spos) > tol) & (xm > 0) & (xm < L)
+    n = int(ok.sum())
+    b = inf.breaks
+    m = np.clip(np.searchsorted(b, p + d, "right") - 1, 0, len(b) - 2)[None, :]
+    return _finish(inf, xs, d, np.zeros(n, int), fixed[:-1][ok], idx[:-1][ok], fixed[1:][ok],
+                   idx[1:][ok], np.full(n, p), np.zeros(n), [p], m)
+
+
+def _tail_moments(loads: np.ndarray, d: np.ndarray, n: int) -> np.ndarray:
+    """(wheels + 1, n + 1): R[j, q] = sum over i < j of P_i (d_j-1 - d_i)^q, found by a scan
+    (each term shifted by the gap to the next wheel: no cancellation between far wheels)."""
+    nw = len(d)
+    R = np.zeros((nw + 1, n + 1))
+    row = [0.0] * (n + 1)
+    for j in range(nw):
+        if j:
+            g = d[j] - d[j - 1]
+            row = [sum(_BINOM[q, r] * g ** (q - r) * row[r] for r in range(q + 1))
+                   for q in range(n + 1)]
+        row[0] += loads[j]
+        R[j + 1] = row
+    return R
+
+
+def strip_unknowns(inf: Influence, cells: Cells, loads) -> np.ndarray:
+    """(strips, NV, unknowns): every unknown of the solve under the wheel set (forces +
+    up) as a cubic in p - strip start, on each strip (the sum over wheels of each wheel's
+    cubic, shifted to the strip's start)."""
+    b = inf.breaks
+    m = cells.strip_m
+    p0 = cells.strip_p0
+    Z = np.zeros((len(p0), NV, inf.z.shape[2]))
+    for i, P in enumerate(loads):
+        if P == 0:
+            continue
+        mi = m[:, i]
+        Sv = _shift_matrix(p0 + cells.offsets[i] - b[mi], NV)
+        Z += P * (np.swapaxes(Sv, 1, 2) @ inf.z[mi])
+    return Z
 
 
 def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None,
                loads) -> np.ndarray:
     """(C, NU, NV): the quantity on each cell as a polynomial in (u, v), u = (x - xr) / wu,
-    v = (p - p0) / wp (v = 0 on a cell of zero width)."""
+    v = (p - p0) / wp (v = 0 on a cell of zero width).
+
+    On a cell Q(x, p) = S(x) + sum_u Phi_u(x) Z_u(p) + T(x - p): the static response, the
+    unknowns of the solve under the wheel set (one cubic per strip, `strip_unknowns`) times
+    their bracket terms, and the free-body part of the wheels left of the cell, T(y) =
+    sum over those wheels of P_i (y - d_i)^n / n!. Each part is built once per strip or
+    cell, so the work is linear in cells and wheels, not their product."""
     level = LEVELS[name]
     n = len(cells.p0)
     F = np.zeros((n, NU, NV))
     u0 = cells.xr
+    loads = np.asarray(loads, float)
     if level >= 3:  # slope and deflection: the unknowns and brackets are EI times them
-        loads = np.asarray(loads, float) / inf.beam.ei
+        loads = loads / inf.beam.ei
     if static is not None:
         sb = static.breaks
         xin = np.minimum(cells.xr + 1e-9 * cells.wu, sb[-1])  # the static piece of the cell
@@ -346,24 +469,48 @@ def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None
         w = c.shape[1]
         S = _shift_matrix(u0 - sb[j], w)
         F[:, :w, 0] += (c[:, None, :] @ S)[:, 0]
-    bic = inf.bicubic(level)
+    if not np.any(loads):
+        F[cells.wp <= 0, :, 1:] = 0.0
+        return _to_unit(F, cells)
     b = inf.breaks
+    Z = strip_unknowns(inf, cells, loads)  # (strips, NV, unknowns)
+    phi = inf.phi(level)  # (pieces, NU, unknowns)
+    # Phi_k(t) Z_s(sigma) once per (piece, strip) pair, then shifted to each cell's origin
+    ns = len(cells.strip_p0)
+    pair = cells.k * ns + cells.strip
+    order = np.argsort(pair, kind="stable")
+    first = np.ones(len(pair), bool)
+    first[1:] = pair[order][1:] != pair[order][:-1]
+    keys = pair[order][first]
+    inv = np.empty(len(pair), int)
+    inv[order] = np.cumsum(first) - 1
+    C = np.einsum("kiu,kju->kij", phi[keys // ns], Z[keys % ns])[inv]
     Sx = _shift_matrix(u0 - b[cells.k], NU)
+    Sv = _shift_matrix(cells.p0 - cells.strip_p0[cells.strip], NV)
+    F += np.swapaxes(Sx, 1, 2) @ (C @ Sv)
+    # the wheels left of the cell: T(y0 + s), y0 = xr - p0, s = (x - xr) - (p - p0)
     npow = level - 1
-    for i, P in enumerate(loads):
-        if P == 0:
-            continue
-        mi = cells.m[:, i]
-        C = bic[cells.k, mi]  # (C, NU, NV)
-        Sv = _shift_matrix(cells.p0 + cells.offsets[i] - b[mi], NV)
-        F += P * (np.swapaxes(Sx, 1, 2) @ (C @ Sv))
-        lf = cells.left[:, i]
-        if lf.any():
-            cc = cells.xr - cells.p0 - cells.offsets[i]
-            F += P * lf[:, None, None] * _psi2d(cc, npow)
-    # a travel of one position: nothing depends on p
-    F[cells.wp <= 0, :, 1:] = 0.0
-    # to the unit square
+    j = cells.nleft
+    has = j > 0
+    if has.any():
+        R = _tail_moments(loads, cells.offsets, npow)[j]  # about wheel j - 1
+        e = np.where(has, cells.xr - cells.p0 - cells.offsets[np.maximum(j - 1, 0)], 0.0)
+        # A_q = sum_i<j P_i (y0 - d_i)^q = sum_r C(q, r) e^(q - r) R_r (all terms >= 0
+        # for loads of one sign)
+        A = np.zeros((n, npow + 1))
+        for q in range(npow + 1):
+            for r in range(q + 1):
+                A[:, q] += _BINOM[q, r] * e ** (q - r) * R[:, r]
+        # T = sum_a A_(n-a) s^a / (a! (n-a)!), s^a = sum_c C(a, c) U^c (-V)^(a-c)
+        for a in range(npow + 1):
+            coef = A[:, npow - a] / (_FACT[a] * _FACT[npow - a])
+            for c_ in range(a + 1):
+                F[:, c_, a - c_] += coef * _BINOM[a, c_] * (-1.0) ** (a - c_)
+    F[cells.wp <= 0, :, 1:] = 0.0  # a travel of one position: nothing depends on p
+    return _to_unit(F, cells)
+
+
+def _to_unit(F: np.ndarray, cells: Cells) -> np.ndarray:
     su = cells.wu[:, None] ** np.arange(NU)[None, :]
     sv = np.where(cells.wp > 0, cells.wp, 1.0)[:, None] ** np.arange(NV)[None, :]
     return F * su[:, :, None] * sv[:, None, :]
