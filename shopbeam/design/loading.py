@@ -929,7 +929,7 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
     candidate (x, p) is a cell corner, a stationary point along a cell edge or a common root
     of both partial derivatives, evaluated exactly. `positions` holds the first-wheel
     positions where any of them is reached, the ends of the travel (a wheel nearest each end
-    of the member), each wheel on a static point load (their forces add), and for lifting
+    of the member), a wheel on each static point load (their forces add: `_on_point_loads`), and for lifting
     jobs the worst position of Mx / Mcx + My / Mcy under each wheel."""
     mv = ss.parts.moving[0]
     kk = k * (1 + ss.parts.impact)
@@ -1034,9 +1034,7 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
     if getattr(st.flexure, "wood", None) is not None:
         for r in reactions:
             pos.update((r[1], r[3]))
-    for ld in static_loads:
-        if ld.kind == "point" and ld.value:
-            pos.update(ld.at - s for s in mv.offsets if p_lo - tol <= ld.at - s <= p_hi + tol)
+    pos.update(_on_point_loads(mv, static_loads, p_lo, p_hi, tol))
     # a wheel on a support or a load edge: the worst shear there is the limit as the wheel
     # comes near (on the break itself its force goes straight in), so just inside too
     fixed = np.array(sorted(xs))
@@ -1052,6 +1050,33 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         if not out or p - out[-1] > tol:
             out.append(p)
     return MovingEnvelope(tuple(out), ext, reactions)
+
+
+def _on_point_loads(mv, static_loads, p_lo: float, p_hi: float, tol: float) -> list[float]:
+    """First-wheel positions that put a wheel on a static point load (the forces add there:
+    the local checks). Wheels of the same load (live and dead) give the same force at the
+    same place, so of each such class the first and the last wheel are placed; positions
+    that put wheels on two or more point loads at once are all kept. A long train of equal
+    wheels then adds a few positions per point load, not one per wheel."""
+    at = [ld.at for ld in static_loads if ld.kind == "point" and ld.value]
+    if not at:
+        return []
+    d = np.asarray(mv.offsets, float)
+    rep: dict = {}
+    for i, key in enumerate(zip(mv.live, mv.dead)):
+        rep.setdefault(key, []).append(i)
+    keep = sorted({i for idx in rep.values() for i in (idx[0], idx[-1])})
+    out = [x - d[i] for x in at for i in keep if p_lo - tol <= x - d[i] <= p_hi + tol]
+    if len(at) > 1:  # two wheels on two point loads at once
+        p = np.concatenate([x - d for x in at])
+        src = np.repeat(np.arange(len(at)), len(d))
+        ok = (p >= p_lo - tol) & (p <= p_hi + tol)
+        p, src = p[ok], src[ok]
+        order = np.argsort(p, kind="stable")
+        p, src = p[order], src[order]
+        near = np.flatnonzero((np.diff(p) <= tol) & (src[1:] != src[:-1]))
+        out += p[near].tolist() + p[near + 1].tolist()
+    return out
 
 
 def _governing_positions(job, ss, st, ext: dict, pos: set) -> None:
