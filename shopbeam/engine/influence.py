@@ -172,7 +172,8 @@ def _shift_matrix(d: np.ndarray, n: int) -> np.ndarray:
     expo = i[:, None] - i[None, :]
     mask = expo >= 0
     with np.errstate(all="ignore"):
-        p = np.where(mask[None], d[:, None, None] ** np.where(mask, expo, 0)[None], 0.0)
+        pw = np.asarray(d, float)[:, None] ** i[None, :]  # each power once, then placed
+    p = np.where(mask[None], pw[:, np.where(mask, expo, 0)], 0.0)
     return p * _BINOM[:n, :n][None]
 
 
@@ -513,7 +514,9 @@ def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None
 def _to_unit(F: np.ndarray, cells: Cells) -> np.ndarray:
     su = cells.wu[:, None] ** np.arange(NU)[None, :]
     sv = np.where(cells.wp > 0, cells.wp, 1.0)[:, None] ** np.arange(NV)[None, :]
-    return F * su[:, :, None] * sv[:, None, :]
+    F *= su[:, :, None]
+    F *= sv[:, None, :]
+    return F
 
 
 @dataclass(frozen=True)
@@ -626,15 +629,27 @@ def candidates_many(cells: Cells, asks, interior: bool = True) -> list[Candidate
     best_hi = np.full(start, -np.inf)
     best_lo = np.full(start, np.inf)
 
+    def keep_best(g, val):
+        if not len(g):
+            return
+        order = np.argsort(g, kind="stable")
+        gs, vs = g[order], val[order]
+        first = np.flatnonzero(np.concatenate([[True], gs[1:] != gs[:-1]]))
+        ids = gs[first]
+        best_hi[ids] = np.maximum(best_hi[ids], np.maximum.reduceat(vs, first))
+        best_lo[ids] = np.minimum(best_lo[ids], np.minimum.reduceat(vs, first))
+
     def update(c, u, v):
-        val = _eval2d(F[c], u, v)
-        np.maximum.at(best_hi, groups[c], val)
-        np.minimum.at(best_lo, groups[c], val)
+        keep_best(groups[c], _eval2d(F[c], u, v))
 
     def alive():
         return ~prune | (bmax > best_hi[groups]) | (bmin < best_lo[groups])
 
-    update(cc, cu, cv)
+    # the corners of every cell, each row of F at its own corner (no copy of F per corner)
+    zero, one = np.zeros(N), np.ones(N)
+    cval = np.concatenate([_eval2d(F, al, zero), _eval2d(F, ah, zero),
+                           _eval2d(F, al + bl, one), _eval2d(F, ah + bh, one)])
+    keep_best(groups[cc], cval)
     live = alive()
     # sides: x on a fixed break or under a wheel
     for alpha, beta, fixed, idx in ((al, bl, lo_fixed, lo_idx), (ah, bh, hi_fixed, hi_idx)):
@@ -686,6 +701,7 @@ def candidates_many(cells: Cells, asks, interior: bool = True) -> list[Candidate
     v = np.concatenate(vs)
     c = np.concatenate(cs).astype(int)
     w = np.concatenate(ws).astype(int)
+    ncorner = len(cc)
     out = []
     for k in range(K):
         m = part[c] == k
@@ -693,7 +709,8 @@ def candidates_many(cells: Cells, asks, interior: bool = True) -> list[Candidate
         vk = np.concatenate([v[m]] + [b[1] for b in inner[k]])
         ck = np.concatenate([c[m]] + [b[2] for b in inner[k]]).astype(int)
         wk = np.concatenate([w[m], np.full(sum(len(b[2]) for b in inner[k]), -1)]).astype(int)
-        val = _eval2d(F[ck], uk, vk)
+        nc = int(m[:ncorner].sum())  # the corners come first, their values already known
+        val = np.concatenate([cval[m[:ncorner]], _eval2d(F[ck[nc:]], uk[nc:], vk[nc:])])
         own = cell[ck]
         x = cells.xr[own] + uk * cells.wu[own]
         p = cells.p0[own] + vk * cells.wp[own]
