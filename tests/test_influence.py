@@ -15,7 +15,7 @@ import numpy as np
 import pytest
 from hypothesis import Phase, given, settings, strategies as st
 
-from shopbeam.engine.influence import envelope, influence, reaction_candidates
+from shopbeam.engine.influence import cell_polys, envelope, influence, reaction_candidates
 from shopbeam.engine.model import Beam, Load, Support
 from shopbeam.engine.solver import segments, solve
 
@@ -185,3 +185,77 @@ def test_random_beams_never_below_the_resolves(inner, gaps, forces, w, cantileve
         tol = 1e-8 if name == "shear" else 1e-9  # see above
         assert got[0] == pytest.approx(ref_max, abs=tol * scale)
         assert got[3] == pytest.approx(ref_min, abs=tol * scale)
+
+
+# ------------------------------------------------------------------ wheel trains
+TRAINS = {n: (tuple(0.45 * i for i in range(n)), tuple(-1500.0 - 250.0 * (i % 3) for i in range(n)))
+          for n in (1, 2, 4, 8)}
+
+
+@pytest.mark.parametrize("kind, wheels", [(k, 8) for k in BEAMS] + [
+    ("3-span, hinge and spring", 1), ("3-span, hinge and spring", 4), ("overhang", 2)])
+def test_wheel_train_envelopes_match_fine_resolves(kind, wheels):
+    # 1 to 8 wheels over the static loads (a point load and a ramp whose edges the wheels
+    # cross: cells end there without cutting the whole travel): every region's largest and
+    # smallest shear, moment and deflection against re-solves at many trolley positions
+    beam = Beam(L, EI, BEAMS[kind], STATIC)
+    offsets, forces = TRAINS[wheels]
+    travel = (0.0, L - offsets[-1])
+    for name, regions in (("shear", [(0.0, L)]), ("moment", [(0.0, 2.0), (2.0, 6.0), (6.0, L)]),
+                          ("deflection", regions_of(beam))):  # regions side by side
+        got = envelope(beam, offsets, forces, travel, name, regions)
+        for region in regions:
+            mx, _, _, mn, _, _ = got[region]
+            ref_max, ref_min = oracle(beam, offsets, forces, travel, name, region, n=121)
+            scale = max(abs(ref_max), abs(ref_min))
+            assert mx >= ref_max - 1e-10 * scale and mn <= ref_min + 1e-10 * scale
+            tol = 1e-8 if name == "shear" else 1e-9  # see above
+            assert mx == pytest.approx(ref_max, abs=tol * scale)
+            assert mn == pytest.approx(ref_min, abs=tol * scale)
+
+
+def _cells_of(beam, wheels, spacing):
+    from shopbeam.engine.influence import wheel_cells
+
+    offsets = tuple(spacing * i for i in range(wheels))
+    static = solve(beam)
+    xs = sorted(set(static.moment.breaks.tolist()) | {2.5, 5.0, 7.5})  # braces
+    inf = influence(beam)
+    return inf, wheel_cells(inf, xs, offsets, 0.0, L - offsets[-1])
+
+
+def test_cells_grow_linearly_in_wheels_on_a_simple_span():
+    # a train over a simple span with load edges and braces: no wheel crosses a support,
+    # so the travel is one strip and the cells are the lines plus the crossings of a wheel
+    # over a fixed break: linear in wheels (they were wheels x fixed x (wheels + fixed))
+    beam = Beam(L, EI, BEAMS["simple span"], STATIC)
+    counts = {}
+    for n in (10, 20, 40, 80, 160):
+        inf, cells = _cells_of(beam, n, 3.0 / n)  # a train 3 long whatever its wheels
+        assert len(cells.strip_p0) == 1
+        nx = len(cells.xs)
+        # the gaps between lines, then 3 new ones per crossing of a wheel over a fixed
+        # break (each wheel crosses each fixed break at most once)
+        assert len(cells.p0) <= (nx + n - 1) + 3 * n * nx
+        # nothing is built per cell and wheel: every per-cell array is one value a cell
+        for f in ("p0", "wp", "xr", "wu", "k", "strip", "nleft", "lo_idx", "hi_idx"):
+            assert getattr(cells, f).shape == (len(cells.p0),)
+        assert cells.strip_m.shape == (1, n)
+        F = cell_polys(inf, cells, "moment", None, [-100.0] * n)
+        assert F.shape[0] == len(cells.p0)
+        counts[n] = len(cells.p0)
+    for n in (10, 20, 40, 80):
+        assert counts[2 * n] <= 2.1 * counts[n]
+
+
+def test_cells_of_a_continuous_beam_are_cut_only_where_wheels_cross_supports():
+    # over interior supports the travel is cut once per wheel crossing one (the response
+    # changes for every x there), and only there: not at load edges or braces
+    beam = Beam(L, EI, (Support(0.0, "pin"), Support(4.0, "roller"), Support(L, "roller")),
+                STATIC)
+    for n in (5, 20):
+        spacing = 1.0 / n
+        _, cells = _cells_of(beam, n, spacing)
+        travel_end = L - spacing * (n - 1)
+        crossings = sum(1 for i in range(n) if 0 < 4.0 - spacing * i < travel_end)
+        assert len(cells.strip_p0) == crossings + 1

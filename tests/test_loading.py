@@ -244,3 +244,82 @@ def test_trolley_with_a_hung_load_checks_never_below_a_fine_resolve():
     for c in ev.checks:
         assert c.ratio >= bf[c.name][2] * (1 - 1e-12), c.name
         assert c.ratio <= bf[c.name][2] * (1 + 3e-3), c.name
+
+
+TRAIN = """schema = 1
+title = "Rail with a parked load and a wheel train"
+units = "us"
+[beam]
+length = "20 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+bearing = "12 in"
+[[supports]]
+at = "20 ft"
+type = "roller"
+bearing = "12 in"
+[[loads]]
+type = "point"
+at = "{a} ft"
+value = "-3000 lbf"
+[[loads]]
+type = "point"
+at = "13 ft"
+value = "-2500 lbf"
+[[moving]]
+label = "train"
+loads = [{loads}]
+spacing = [{spacing}]
+travel = ["2 ft", "18 ft"]
+"""
+
+
+def _train(n, heavy=(), a=7.0):
+    loads = ", ".join('"-4000 lbf"' if i in heavy else '"-1500 lbf"' for i in range(n))
+    return parse_job_text(TRAIN.format(a=a, loads=loads, spacing=", ".join(['"9 in"'] * (n - 1))))
+
+
+@pytest.mark.parametrize("heavy, a", [((), 7.0), ((3,), 7.0), ((0, 5), 7.0), ((2,), 7.75)])
+def test_wheel_train_local_checks_match_resolves_with_every_wheel_on_each_load(heavy, a):
+    # a wheel on a parked point load adds to it (web yielding and crippling read the sum);
+    # the envelope places only the first and last wheel of each class of equal wheels there
+    # (and every position with wheels on both parked loads: 7.75 ft and 13 ft are 7 gaps of
+    # 9 in apart), so the oracle re-solves with every wheel on each load, and on a fine grid
+    from dataclasses import replace
+
+    from shopbeam.design.checks import checks_for, strengths as strengths_of
+    from shopbeam.design.loading import read_moving
+    from shopbeam.engine.model import Load
+
+    job = _train(8, heavy, a)
+    ev = evaluate(job)
+    ss = state_set(job)
+    st_ = strengths_of(job, beam=ss.beam)
+    mv = read_moving(job)[0]
+    lo, hi = mv.p_range
+    kk = 1.0 + ss.parts.impact
+    on = [x - d for x in (a * FT, 13 * FT) for d in mv.offsets if lo <= x - d <= hi]
+    worst = {}
+    for p in sorted(set(np.linspace(lo, hi, 241).tolist() + on)):
+        wheels = tuple(Load("point", at=p + o, value=d + kk * f, key=mv.key)
+                       for o, f, d in zip(mv.offsets, mv.live, mv.dead))
+        sol = solve(replace(ss.beam, loads=tuple(ss.static_loads(1.0, ())) + wheels))
+        for c in checks_for(job, sol, st_, cb_one=True):
+            worst[c.name] = max(worst.get(c.name, 0.0), c.ratio)
+    local = [c for c in ev.checks if c.name in ("web local yielding", "web crippling")]
+    assert len(local) == 2
+    # a wheel on a parked load governs (web yielding; crippling at times at a support)
+    assert any("train first wheel at" in c.state for c in local)
+    for c in local:
+        assert c.ratio >= worst[c.name] * (1 - 1e-12)
+        assert c.ratio <= worst[c.name] * (1 + 1e-9)
+
+
+def test_load_states_solved_do_not_grow_with_equal_wheels():
+    # a train of equal wheels over parked point loads: the positions solved (the governing
+    # ones, the travel ends, a wheel on each parked load) do not grow with the wheels
+    counts = {n: evaluate(_train(n)).states for n in (4, 12, 20)}
+    assert counts[20] <= counts[4] + 6, counts

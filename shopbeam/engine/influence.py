@@ -932,7 +932,9 @@ def envelope(beam: Beam, offsets, loads, travel: tuple[float, float], name: str,
              regions=None, inf: Influence | None = None, static=None) -> dict:
     """The exact largest and smallest `name` over each region (start, end) of x and every
     first-wheel position p in `travel`, with the wheel set (forces + up at offsets from the
-    first wheel) on top of the beam's own loads: {region: (max, x, p, min, x, p)}."""
+    first wheel) on top of the beam's own loads: {region: (max, x, p, min, x, p)}. Regions
+    lie side by side (a cell counts for the first region holding its middle; the search
+    prunes by region), e.g. the spans or the unbraced lengths."""
     from shopbeam.engine.solver import solve
 
     inf = inf or influence(beam)
