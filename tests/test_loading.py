@@ -323,3 +323,56 @@ def test_load_states_solved_do_not_grow_with_equal_wheels():
     # ones, the travel ends, a wheel on each parked load) do not grow with the wheels
     counts = {n: evaluate(_train(n)).states for n in (4, 12, 20)}
     assert counts[20] <= counts[4] + 6, counts
+
+
+LIFT_TRAIN = """schema = 1
+title = "Monorail with a long trolley"
+units = "us"
+tags = ["lifting"]
+[beam]
+length = "16 ft"
+section = "W12x26"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "16 ft"
+type = "roller"
+[[moving]]
+label = "trolley"
+loads = [{loads}]
+dead = [{dead}]
+spacing = [{spacing}]
+[criteria]
+lifting = "powered-monorail"
+"""
+
+
+def _lift_train(n, heavy=()):
+    return parse_job_text(LIFT_TRAIN.format(
+        loads=", ".join('"-2500 lbf"' if i in heavy else '"-1200 lbf"' for i in range(n)),
+        dead=", ".join(['"-40 lbf"'] * n), spacing=", ".join(['"10 in"'] * (n - 1))))
+
+
+@pytest.mark.parametrize("heavy", [(), (2,), (0, 5)])
+def test_lifting_train_wheel_checks_match_a_fine_resolve(heavy):
+    # the wheel flange check and the lateral trolley force of a 6-wheel trolley: only the
+    # positions that reach each one's worst are solved (from the exact extremes under every
+    # wheel), so every position's state is checked by the oracle (grid of 601 positions):
+    # the exact answer may only be (slightly) worse, never better
+    job = _lift_train(6, heavy)
+    ev = evaluate(job)
+    bf = envelope_bruteforce(job, 1.0, 601)
+    for name in ("wheel flange bending", "lateral trolley force", "bending"):
+        c = next(c for c in ev.checks if c.name == name)
+        ref = bf[name][2]
+        low = 2e-4 if name == "lateral trolley force" else 1e-12  # see the test above
+        assert ref * (1 - low) <= c.ratio <= ref * (1 + 3e-3)
+
+
+def test_lifting_load_states_do_not_grow_with_wheels():
+    # two solves per wheel (its largest and smallest moment) were made for the wheel flange
+    # check and the lateral force; now only the positions that reach their worst
+    counts = {n: evaluate(_lift_train(n)).states for n in (2, 6, 16)}
+    assert counts[16] <= counts[2] + 6, counts

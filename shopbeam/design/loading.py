@@ -1016,7 +1016,7 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         keep(("lateral", s, (0.0, L)), c, np.ones(len(c.x), bool))
         for i in range(len(P)):
             keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
-    _governing_positions(job, ss, st, ext, pos)
+    _governing_positions(job, ss, st, ext, pos, P)
     if pattern is None:
         reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,
                                               [r.force for r in static.reactions], P))
@@ -1079,7 +1079,7 @@ def _on_point_loads(mv, static_loads, p_lo: float, p_hi: float, tol: float) -> l
     return out
 
 
-def _governing_positions(job, ss, st, ext: dict, pos: set) -> None:
+def _governing_positions(job, ss, st, ext: dict, pos: set, forces=None) -> None:
     """The positions to solve and check: for each check the position of its largest ratio.
 
     Under moving loads Cb is 1.0, so each unbraced length's allowable moment and each span's
@@ -1118,11 +1118,66 @@ def _governing_positions(job, ss, st, ext: dict, pos: set) -> None:
         best_of("total", "deflection", {
             (float(a), float(b)): (1.0 / lim if lim > 0 else math.inf)
             for (a, b, _), (_, lim, _) in zip(ss.segs, deflection_spans(job, ss, st))})
+    lines = _wheel_line_positions(job, st, ext, forces) if plain else None
     for key, e in ext.items():
         if not plain or key[0] in ("live", "dead") or \
-                key[2][0] in ("wheel", "hung") and key[0] == "total":
+                key[2][0] == "hung" and key[0] == "total" or \
+                key[2][0] == "wheel" and key[0] == "total" and lines is None:
             pos.add(e[2])
-    pos.update(e[2] for key, e in ext.items() if key[0] == "lateral")
+    if lines is not None:
+        pos.update(lines)
+    pos.update(_lateral_positions(ext))
+
+
+def _wheel_line_positions(job, st, ext: dict, forces) -> list[float] | None:
+    """Where the wheel flange check is worst, from the moment extremes under each wheel
+    (None: solve every wheel's extremes). Its stress under wheel i is convex in the
+    moment there (a von Mises norm of the local stresses plus the global one), so over the
+    travel it is largest at that wheel's largest or smallest moment: the check's worst is
+    the largest of those 2 x wheels values, worked out here with the check's own formula,
+    and only the positions that reach it (within 1e-9) are solved, not two per wheel."""
+    from shopbeam.design import lifting
+
+    keys = [k for k in ext if k[0] == "total" and k[1] == "moment" and k[2][0] == "wheel"]
+    if not keys:
+        return []
+    sec = getattr(st, "section", None) or job.section
+    ws = job.moving[0] if getattr(job, "moving", None) else None
+    if forces is None or ws is None or sec.shape != "i-beam" or "bf" not in sec.dims:
+        return None
+    a = ws.wheel_edge if ws.wheel_edge is not None else lifting.DEFAULT_WHEEL_EDGE
+    tf, tapered = lifting.flange_tf_at_wheel(sec, a)
+    d = sec.dims
+    vals = []
+    for key in keys:
+        m, _, p = ext[key]
+        load = abs(float(forces[key[2][1]])) / ws.wheels_per_axle
+        vm, _, _ = lifting.wheel_flange_stress(load, tf, d["bf"], d["tw"], a, tapered,
+                                               m / sec.sx_bot)
+        vals.append((vm, p))
+    top = max(v for v, _ in vals)
+    return [p for v, p in vals if v >= top * (1 - 1e-9)]
+
+
+def _lateral_positions(ext: dict) -> list[float]:
+    """Where the lateral trolley force check can be worst: the positions of the extremes of
+    Mx + s (Mcx / Mcy) My over the whole beam, and under the wheels the ones that reach the
+    largest of them. A state's check reads that sum at points of the beam, so it is at most
+    the whole-beam extreme; when a wheel line reaches that extreme, a state at another
+    wheel's extreme cannot exceed it and is not solved (else every wheel's is, as before)."""
+    lat = {k: e for k, e in ext.items() if k[0] == "lateral"}
+    if not lat:
+        return []
+    whole = [k for k in lat if k[2][0] != "wheel"]
+    line = [k for k in lat if k[2][0] == "wheel"]
+    out = [lat[k][2] for k in whole]
+    top_whole = max((abs(lat[k][0]) for k in whole), default=0.0)
+    top_line = max((abs(lat[k][0]) for k in line), default=0.0)
+    if line and top_whole <= top_line:
+        out += [lat[k][2] for k in line if abs(lat[k][0]) >= top_line * (1 - 1e-9)]
+    else:
+        out += [lat[k][2] for k in line]
+    return out
 
 
 def _parts(inf, cells, ss: StateSet, live_sol: Solution, mv, tag: str, name: str):
