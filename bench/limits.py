@@ -22,14 +22,34 @@ sys.path.insert(0, str(HERE.parent / "tests"))
 
 from adversarial import CASES, hinged, springs, wheels  # noqa: E402
 
+PRESET = (HERE.parent / "shopbeam" / "presets" / "monorail-trolley.toml").read_text()
+
+
+def TROLLEY(n: int, inner: str = "") -> str:  # noqa: N802 - a recipe, like the others
+    """The monorail-trolley preset with n wheels sharing its load (and a support inside)."""
+    sp = min(8.0, 0.5 * 16 * 12 / max(n - 1, 1))
+    t = PRESET.replace('loads = ["-1000 lbf", "-1000 lbf"]',
+                       "loads = [" + ", ".join([f'"-{2000 / n:g} lbf"'] * n) + "]")
+    t = t.replace('dead = ["-60 lbf", "-60 lbf"]',
+                  "dead = [" + ", ".join([f'"-{120 / n:g} lbf"'] * n) + "]")
+    t = t.replace('spacing = ["8 in"]', "spacing = [" + ", ".join([f'"{sp:.5f} in"'] * (n - 1)) + "]")
+    if inner:
+        t = t.replace('[[supports]]\nat = "16 ft"',
+                      f'[[supports]]\nat = "{inner}"\ntype = "roller"\n[[supports]]\nat = "16 ft"')
+    return t
+
+
 INSIDE = {
     "100 springs (limit)": springs(100),
     "99 spans, 49 hinges": hinged(99),
     "16 wheels on 2 supports": wheels(16),
-    "35 wheels on 2 supports (moving limit)": wheels(35).replace('"7 in"', '"17 in"'),
+    "200 wheels on 2 supports (wheel cap)": wheels(200).replace('"7 in"', '"6 in"'),
+    "55 wheels over 1 spring (moving limit)": wheels(55, springs_n=1),
     "20 wheels, 4 springs (moving limit)": wheels(20, springs_n=4).replace('"7 in"', '"30 in"'),
     "8 wheels, 14 springs (moving limit)": wheels(8, springs_n=14),
     "4 wheels, 26 springs (moving limit)": wheels(4, springs_n=26),
+    "lifting trolley, 200 wheels on 2 supports": TROLLEY(200),
+    "lifting trolley, 55 wheels over 3 supports (limit)": TROLLEY(55, inner="8 ft"),
     "1000 loads (limit)": springs(0) + "".join(
         f'[[loads]]\ntype = "linear"\nstart = "{i / 10:.2f} ft"\nend = "{i / 10 + 0.07:.2f} ft"\n'
         'value = ["-1 lbf/ft", "-3 lbf/ft"]\n' for i in range(999)),

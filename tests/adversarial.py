@@ -65,10 +65,13 @@ CASES = {
     "100 springs, stiff": springs(100, "1e9 lbf/in"),
     "99 spans with hinges": hinged(99),
     "wheel of -1e30 lbf": wheels(2, force="-1e30 lbf"),
-    # the largest wheel sets the search bound lets in (answered), and one wheel past it
-    "35 wheels on a simple span": wheels(35).replace('"7 in"', '"17 in"'),
+    # the largest wheel sets the wheel cap and the search bound let in (answered), and one
+    # wheel past each
+    "200 wheels on a simple span": wheels(200).replace('"7 in"', '"6 in"'),
+    "201 wheels on a simple span": wheels(201).replace('"7 in"', '"5.9 in"'),
     "20 wheels over 4 springs": wheels(20, springs_n=4).replace('"7 in"', '"30 in"'),
-    "36 wheels on a simple span": wheels(36).replace('"7 in"', '"17 in"'),
+    "55 wheels over a spring": wheels(55, springs_n=1),
+    "56 wheels over a spring": wheels(56, springs_n=1),
     "ramp a hair long": demo_ramp("2 ft", "2.000000001 ft"),
     "ramp to 1e-308 ft": demo_ramp("0 ft", "1e-308 ft"),
     "sliver span 0.01 mm on 2000 ft": sliver_span(1e-5 / 0.3048),

@@ -53,17 +53,26 @@ def test_the_ramp_a_hair_long_answers_the_right_reactions(tmp_path):
 def test_the_wheel_bound_answers_the_largest_sets_and_refuses_one_more(tmp_path):
     from adversarial import wheels
 
-    from shopbeam.jobs.limits import MOVING_WORK, moving_work
+    from shopbeam.jobs.limits import MAX_WHEELS, MOVING_WORK, moving_work
 
-    # two supports: fixed positions {0, 100 ft} and the end (3): 35 wheels is 3,990 units
-    assert moving_work(35, 3) <= MOVING_WORK < moving_work(36, 3)
+    def run(text, *argv):
+        p.write_text(text, encoding="utf-8")
+        return subprocess.run([sys.executable, "-m", "shopbeam", *argv, str(p)],
+                              capture_output=True, text=True, timeout=120)
+
     p = tmp_path / "job.toml"
-    p.write_text(wheels(35).replace('"7 in"', '"17 in"'), encoding="utf-8")
-    r = subprocess.run([sys.executable, "-m", "shopbeam", "solve", "--json", str(p)],
-                       capture_output=True, text=True, timeout=120)
+    # a simple span (fixed positions {0, 100 ft} and the end: 3, no support inside): the
+    # search is linear in wheels there, so the wheel cap is what stops a set
+    assert MAX_WHEELS == 200 and moving_work(200, 3) <= MOVING_WORK
+    r = run(wheels(200).replace('"7 in"', '"6 in"'), "solve", "--json")
     assert r.returncode == 0, r.stderr[-1500:]
-    p.write_text(wheels(36).replace('"7 in"', '"17 in"'), encoding="utf-8")
-    r = subprocess.run([sys.executable, "-m", "shopbeam", "solve", str(p)],
-                       capture_output=True, text=True, timeout=120)
-    assert r.returncode == 2 and "36 wheels" in r.stderr and "units of search" in r.stderr
+    r = run(wheels(201).replace('"7 in"', '"5.9 in"'), "solve")
+    assert r.returncode == 2 and "201 wheels is more than shopbeam takes" in r.stderr
+    # a spring at mid-span (4 fixed positions, 1 support inside): each wheel crossing it
+    # starts a strip of the travel, so the search bound stops the set at 55 wheels
+    assert moving_work(55, 4, 1) <= MOVING_WORK < moving_work(56, 4, 1)
+    r = run(wheels(55, springs_n=1), "solve", "--json")
+    assert r.returncode == 0, r.stderr[-1500:]
+    r = run(wheels(56, springs_n=1), "solve")
+    assert r.returncode == 2 and "56 wheels" in r.stderr and "units of search" in r.stderr
     assert str(p) in r.stderr and "moving[0].loads" in r.stderr

@@ -1126,7 +1126,7 @@ def _governing_positions(job, ss, st, ext: dict, pos: set, forces=None) -> None:
             pos.add(e[2])
     if lines is not None:
         pos.update(lines)
-    pos.update(_lateral_positions(ext))
+    pos.update(_lateral_positions(ext, [sp.at for sp in ss.beam.supports], job.length))
 
 
 def _wheel_line_positions(job, st, ext: dict, forces) -> list[float] | None:
@@ -1159,12 +1159,14 @@ def _wheel_line_positions(job, st, ext: dict, forces) -> list[float] | None:
     return [p for v, p in vals if v >= top * (1 - 1e-9)]
 
 
-def _lateral_positions(ext: dict) -> list[float]:
+def _lateral_positions(ext: dict, supports, length: float) -> list[float]:
     """Where the lateral trolley force check can be worst: the positions of the extremes of
     Mx + s (Mcx / Mcy) My over the whole beam, and under the wheels the ones that reach the
-    largest of them. A state's check reads that sum at points of the beam, so it is at most
-    the whole-beam extreme; when a wheel line reaches that extreme, a state at another
-    wheel's extreme cannot exceed it and is not solved (else every wheel's is, as before)."""
+    largest of them. A state's check reads that sum at points of the beam (the wheels, the
+    supports, where either moment peaks), so it is at most the whole-beam extreme; when a
+    wheel line or a support reaches that extreme, the state there reads it and a state at
+    another wheel's extreme cannot exceed it, so that one is not solved (else every wheel's
+    is, as before)."""
     lat = {k: e for k, e in ext.items() if k[0] == "lateral"}
     if not lat:
         return []
@@ -1173,7 +1175,12 @@ def _lateral_positions(ext: dict) -> list[float]:
     out = [lat[k][2] for k in whole]
     top_whole = max((abs(lat[k][0]) for k in whole), default=0.0)
     top_line = max((abs(lat[k][0]) for k in line), default=0.0)
-    if line and top_whole <= top_line:
+    tol = 1e-9 * length
+    read = any(abs(lat[k][0]) >= top_whole and any(abs(lat[k][1] - x) <= tol for x in supports)
+               for k in whole)
+    if read:
+        out += [lat[k][2] for k in line if abs(lat[k][0]) >= top_whole * (1 - 1e-9)]
+    elif line and top_whole <= top_line:
         out += [lat[k][2] for k in line if abs(lat[k][0]) >= top_line * (1 - 1e-9)]
     else:
         out += [lat[k][2] for k in line]

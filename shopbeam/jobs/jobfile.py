@@ -1771,7 +1771,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    f"({section.axis} axis), so it changes nothing", f"{ws.key}.wheel_edge")
     from shopbeam.jobs.limits import cost_problems  # bounded work: counts checked before solving
 
-    for msg, key in cost_problems(supports, loads, moving, braces):
+    for msg, key in cost_problems(supports, loads, moving, braces, length):
         r.error(msg, key)
 
     if r.errors:

@@ -4,7 +4,8 @@ Two gates. `prescan` looks at the raw text before the TOML parser sees it: the n
 (dotted keys, table headers, nested arrays and inline tables) and the number of keys, so a
 file of deeply dotted keys is refused in milliseconds instead of tying up the parser. The
 counts of what the solve will do (supports, springs, hinges, loads, wheels, and the moving-
-load search, whose cells number wheels x fixed positions x (wheels + fixed positions)) are
+load search, whose cells number (wheels x interior supports + 1) x (wheels + fixed positions)
++ 3 x wheels x fixed positions: `moving_work`) are
 checked by the job reader with `cost_problems`. The limits are set so that any job inside
 them answers in under 2 s as a whole process on the development machine (bench/: the worst
 cases inside the limits); anything outside is refused at once, naming the limit, the file,
@@ -17,17 +18,20 @@ import re
 
 MAX_DEPTH = 6  # beam.section.x is 3; nothing in a job file needs more
 MAX_KEYS = 50_000  # a job at its 1,000-load limit has about 5,000; the parser takes 50,000 fast
-# the search bound below is what limits a wheel set; this cap only gives a plain message for
-# a train no shop trolley has (on two supports the bound already stops at 35 wheels; jobs of
-# 35 wheels on a simple span, or 20 wheels over 4 springs, answer `rating` in under 1 s of
-# CPU as a whole process: bench/limits.py)
-MAX_WHEELS = 40
+# a wheel set's own cap: the search below grows linearly in wheels on a member no wheel can
+# cross a support of (a simple span, a cantilever), and each load state solved and checked
+# reads every wheel, so 200 wheels (no shop trolley has more; a longer train is a uniform
+# load) answer `capacity` and `rating` in under 2 s as a whole process (bench/limits.py)
+MAX_WHEELS = 200
 MAX_SPRINGS = 100
 MAX_HINGES = 100
-# wheels x fixed positions x (wheels + fixed positions): the number of (x, trolley position)
-# cells the exact moving-load envelope searches (design/loading.moving_envelope); 4,000 keeps
-# `capacity` and `rating` (about ten envelopes each) under 1.7 s of CPU on the development
-# machine (bench/README.md)
+# (wheels x interior supports + 1) x (wheels + fixed positions) + 3 x wheels x fixed
+# positions: the (x, trolley position) cells the exact moving-load envelope builds and
+# searches (engine/influence.wheel_cells: a strip of the travel per wheel crossing an
+# interior support, springs and hinges included, each holding a cell between every two
+# neighbouring lines, and three more cells per crossing of a wheel over a fixed position);
+# 4,000 keeps `capacity` and `rating` (about ten envelopes each) under 2 s as a whole process
+# on the development machine (bench/README.md)
 MOVING_WORK = 4000
 MAX_WHEEL_FORCE = 1e9  # N, as for a point load (jobfile.LOAD_LIMITS)
 
@@ -68,11 +72,14 @@ def prescan(text: str) -> list[tuple[str, int]]:
     return out
 
 
-def moving_work(wheels: int, fixed: int) -> int:
-    return wheels * fixed * (wheels + fixed)
+def moving_work(wheels: int, fixed: int, inner: int = 0) -> int:
+    """The cells of the moving-load search: `inner` supports, springs and hinges strictly
+    inside the member (a wheel crossing one starts a strip of the travel), `fixed` positions
+    (supports, load ends, braces, the ends)."""
+    return (wheels * inner + 1) * (wheels + fixed) + 3 * wheels * fixed
 
 
-def cost_problems(supports, loads, moving, braces=()) -> list[tuple[str, str]]:
+def cost_problems(supports, loads, moving, braces=(), length=None) -> list[tuple[str, str]]:
     """Counts beyond what shopbeam takes: (message, key path)."""
     out = []
     springs = sum(1 for s in supports if s.kind == "spring")
@@ -100,11 +107,14 @@ def cost_problems(supports, loads, moving, braces=()) -> list[tuple[str, str]]:
         fixed = {0.0} | {s.at for s in supports} | set(braces)
         for ld in loads:
             fixed.update(ld.describe_position())
-        work = moving_work(n, len(fixed) + 1)
+        end = length if length is not None else max(fixed)
+        inner = len({s.at for s in supports if 0.0 < s.at < end})
+        work = moving_work(n, len(fixed) + 1, inner)
         if work > MOVING_WORK:
             out.append((f"a wheel set of {n} wheels over {len(fixed) + 1} fixed positions "
-                        f"(supports, load ends, braces) takes {work:,} units of search, more "
-                        f"than shopbeam takes ({MOVING_WORK:,} = wheels x positions x (wheels "
-                        "+ positions)); use fewer wheels, supports or loads, or split the job",
-                        f"{key}.loads"))
+                        f"(supports, load ends, braces), {inner} of them supports inside the "
+                        f"member, takes {work:,} units of search, more than shopbeam takes "
+                        f"({MOVING_WORK:,} = (wheels x inside supports + 1) x (wheels + "
+                        "positions) + 3 x wheels x positions); use fewer wheels, supports or "
+                        "loads, or split the job", f"{key}.loads"))
     return out
