@@ -44,12 +44,12 @@ INSIDE = {
     "99 spans, 49 hinges": hinged(99),
     "16 wheels on 2 supports": wheels(16),
     "200 wheels on 2 supports (wheel cap)": wheels(200).replace('"7 in"', '"6 in"'),
-    "55 wheels over 1 spring (moving limit)": wheels(55, springs_n=1),
+    "57 wheels over 1 spring (moving limit)": wheels(57, springs_n=1),
     "20 wheels, 4 springs (moving limit)": wheels(20, springs_n=4).replace('"7 in"', '"30 in"'),
     "8 wheels, 14 springs (moving limit)": wheels(8, springs_n=14),
     "4 wheels, 26 springs (moving limit)": wheels(4, springs_n=26),
     "lifting trolley, 200 wheels on 2 supports": TROLLEY(200),
-    "lifting trolley, 55 wheels over 3 supports (limit)": TROLLEY(55, inner="8 ft"),
+    "lifting trolley, 57 wheels over 3 supports (limit)": TROLLEY(57, inner="8 ft"),
     "1000 loads (limit)": springs(0) + "".join(
         f'[[loads]]\ntype = "linear"\nstart = "{i / 10:.2f} ft"\nend = "{i / 10 + 0.07:.2f} ft"\n'
         'value = ["-1 lbf/ft", "-3 lbf/ft"]\n' for i in range(999)),

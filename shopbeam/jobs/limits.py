@@ -5,7 +5,7 @@ Two gates. `prescan` looks at the raw text before the TOML parser sees it: the n
 file of deeply dotted keys is refused in milliseconds instead of tying up the parser. The
 counts of what the solve will do (supports, springs, hinges, loads, wheels, and the moving-
 load search, whose cells number (wheels x interior supports + 1) x (wheels + fixed positions)
-+ 3 x wheels x fixed positions: `moving_work`) are
++ 3 x wheels x other fixed positions: `moving_work`) are
 checked by the job reader with `cost_problems`. The limits are set so that any job inside
 them answers in under 2 s as a whole process on the development machine (bench/: the worst
 cases inside the limits); anything outside is refused at once, naming the limit, the file,
@@ -25,11 +25,13 @@ MAX_KEYS = 50_000  # a job at its 1,000-load limit has about 5,000; the parser t
 MAX_WHEELS = 200
 MAX_SPRINGS = 100
 MAX_HINGES = 100
-# (wheels x interior supports + 1) x (wheels + fixed positions) + 3 x wheels x fixed
-# positions: the (x, trolley position) cells the exact moving-load envelope builds and
-# searches (engine/influence.wheel_cells: a strip of the travel per wheel crossing an
-# interior support, springs and hinges included, each holding a cell between every two
-# neighbouring lines, and three more cells per crossing of a wheel over a fixed position);
+# (wheels x interior supports + 1) x (wheels + fixed positions) + 3 x wheels x (fixed
+# positions - interior supports - 1): the (x, trolley position) cells the exact moving-load
+# envelope builds and searches (engine/influence.wheel_cells: a strip of the travel per
+# wheel crossing an interior support, springs and hinges included, each holding a cell
+# between every two neighbouring lines, and three more cells per crossing of a wheel over
+# another fixed position). It is never more than the earlier wheels x fixed x (wheels +
+# fixed), so every job that bound let in is let in;
 # 4,000 keeps `capacity` and `rating` (about ten envelopes each) under 2 s as a whole process
 # on the development machine (bench/README.md)
 MOVING_WORK = 4000
@@ -76,7 +78,7 @@ def moving_work(wheels: int, fixed: int, inner: int = 0) -> int:
     """The cells of the moving-load search: `inner` supports, springs and hinges strictly
     inside the member (a wheel crossing one starts a strip of the travel), `fixed` positions
     (supports, load ends, braces, the ends)."""
-    return (wheels * inner + 1) * (wheels + fixed) + 3 * wheels * fixed
+    return (wheels * inner + 1) * (wheels + fixed) + 3 * wheels * max(fixed - inner - 1, 0)
 
 
 def cost_problems(supports, loads, moving, braces=(), length=None) -> list[tuple[str, str]]:
@@ -115,6 +117,6 @@ def cost_problems(supports, loads, moving, braces=(), length=None) -> list[tuple
                         f"(supports, load ends, braces), {inner} of them supports inside the "
                         f"member, takes {work:,} units of search, more than shopbeam takes "
                         f"({MOVING_WORK:,} = (wheels x inside supports + 1) x (wheels + "
-                        "positions) + 3 x wheels x positions); use fewer wheels, supports or "
-                        "loads, or split the job", f"{key}.loads"))
+                        "positions) + 3 x wheels x (positions - inside supports - 1)); use "
+                        "fewer wheels, supports or loads, or split the job", f"{key}.loads"))
     return out
