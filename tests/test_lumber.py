@@ -518,3 +518,22 @@ value = "-50 lbf/ft"
     assert bool(said) == warned
     if warned:
         assert "permanent" in said[0].message
+
+
+@pytest.mark.parametrize("inset, cb", [("3.5 in", 1.0), ("3.7 in", 1.0), ("4 in", 1.25)])
+def test_bearing_factor_measures_the_end_distance_to_the_bearing_edge(inset, cb):
+    # NDS 2018 3.10.4 (from memory): Cb = (lb + 0.375)/lb for bearings under 6 in long and
+    # not nearer than 3 in to the end of the member. A 1-1/2 in bearing centred 3.5 in in runs
+    # from 2.75 in (3.7 in: 2.95 in): nearer than 3 in, Cb 1.0; centred 4 in it starts at 3.25 in: Cb
+    # (1.5 + 0.375)/1.5 = 1.25
+    far = 120 - float(inset.split()[0])
+    sup = f"""[[supports]]
+at = "{inset}"
+type = "pin"
+[[supports]]
+at = "{far:g} in"
+type = "roller"
+"""
+    res = analyze(job("2x10", length="10 ft", supports=sup))
+    bear = check(res, "bearing")
+    assert bear.limit / PSI == pytest.approx(625 * cb, rel=1e-6)

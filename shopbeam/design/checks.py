@@ -1220,7 +1220,9 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
     worst = None
     for at, force, what, key in spots:
         lb, stated = length_at(key)
-        end = min(at, sol.beam.length - at) / 0.0254
+        # NDS 3.10.4 measures "not nearer than 3 in to the end" to the bearing's near edge;
+        # the support or load sits at the bearing's centre
+        end = (min(at, sol.beam.length - at) - lb / 2) / 0.0254
         cb, cb_words = lumber.bearing_area_factor(lb / 0.0254, end)
         demand, limit = force / (b * lb), wf.fc_perp * cb
         if worst is None or demand / limit > worst[0]:

@@ -184,8 +184,8 @@ def load_case(loads, a: float, b: float, free: bool, free_at_right: bool) -> str
 
 
 def bearing_area_factor(lb_in: float, end_distance_in: float) -> tuple[float, str]:
-    """Cb (NDS 3.10.4): (lb + 0.375)/lb for bearings shorter than 6 in and at least 3 in
-    from the end of the member; 1.0 at the ends."""
+    """Cb (NDS 3.10.4): (lb + 0.375)/lb for bearings shorter than 6 in whose near edge is at
+    least 3 in from the end of the member; 1.0 nearer the ends."""
     if lb_in < 6.0 and end_distance_in >= 3.0:
         cb = (lb_in + 0.375) / lb_in
         return cb, f"Cb = (lb + 0.375)/lb = {cb:.3f} (NDS 3.10.4)"
