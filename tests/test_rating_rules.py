@@ -5,6 +5,7 @@ under its dead loads alone; and the lifting limit states of members other than I
 from __future__ import annotations
 
 import math
+import re
 
 import pytest
 
@@ -604,3 +605,59 @@ def test_the_bottom_edge_of_a_wood_joist_takes_its_own_beam_stability_factor():
     s = 1.5 * 9.25**2 / 6 * 0.0254**3
     for _a, _b, allow in limits:
         assert allow / (990 * 6894.757 * s) == pytest.approx(0.605, abs=2e-3)
+
+
+BRACED_ARM = """schema = 1
+title = "wall bracket"
+[beam]
+length = "8 ft"
+section = "W8X18"
+material = "A992"
+self_weight = false
+braces = ["2 ft", "4 ft", "6 ft", "8 ft"]
+{flange}
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "uniform"
+value = "-1000 lbf/ft"
+"""
+
+
+def test_braces_said_to_hold_the_top_flange_leave_the_bottom_flange_to_buckle_under_hogging():
+    # A cantilever hogs all along: its bottom flange is in compression. Braces on the top
+    # flange only (joist seats) leave it unbraced over the 8 ft. AISC 360-16 F2-2 by hand with
+    # the AISC Shapes Database v15.0 W8X18 row (Zx 17.0, Sx 15.2, ry 1.23, rts 1.43 in, J 0.172,
+    # ho 7.81): Lp = 1.76 ry sqrt(E/Fy) = 52.1 in, Lr = 161.8 in, Mn = 850 - (850 - 532)
+    # (96 - 52.1)/(161.8 - 52.1) = 722.8 kip*in, / 1.67 = 36.07 kip*ft (Cb 1.0)
+    top = capacity(parse_job_text(BRACED_ARM.format(flange='braces_flange = "top"')))
+    why = [r for r in top.not_rated if "under hogging moment" in r]
+    assert why and 'braces_flange = "top"' in why[0] and "0 ft to 8 ft" in why[0]
+    m = re.search(r"exceeds the (\d+) lbf\*ft", why[0])
+    assert m and float(m.group(1)) == pytest.approx(36070, rel=2e-3)
+    # held against twist at the braces (both flanges): rated, and the job not saying which
+    # gets the caution that names the key
+    both = capacity(parse_job_text(BRACED_ARM.format(flange='braces_flange = "both"')))
+    assert both.rated
+    unsaid = analyze(parse_job_text(BRACED_ARM.format(flange="")))
+    assert any('braces_flange = "top"' in c for c in unsaid.cautions)
+    assert not any('braces_flange' in c for c in analyze(both.job).cautions)
+
+
+@pytest.mark.parametrize("flange, braces, error, warned", [
+    ('braces_flange = "bottom"', True, True, False),
+    ('braces_flange = "top"', False, False, True),
+    ('braces_flange = "both"', True, False, False)])
+def test_braces_flange_is_read_with_a_message_for_each_slip(flange, braces, error, warned):
+    from shopbeam.errors import InputErrors
+    text = BRACED_ARM.format(flange=flange)
+    if not braces:
+        text = text.replace('braces = ["2 ft", "4 ft", "6 ft", "8 ft"]\n', "")
+    if error:
+        with pytest.raises(InputErrors) as exc:
+            parse_job_text(text)
+        assert "beam.braces_flange" in str(exc.value) and '"top"' in str(exc.value)
+        return
+    job = parse_job_text(text)
+    assert bool([w for w in job.warnings if w.key == "beam.braces_flange"]) == warned

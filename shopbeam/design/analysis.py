@@ -194,7 +194,8 @@ def analyze(job: Job) -> Result:
         checks = run_checks(job, sol)
     st = strengths(job)
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment)
-    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks)
+    notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
+        + braces_note(job, st, sol.moment)
     # every limit state not checked is named in the report, as on the label and in the JSON
     # (check_notes names the member's own strength ones)
     said = set(st.unchecked)
@@ -444,7 +445,7 @@ def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
     not compute (an aluminium open shape or deep bar, a typed-in metal's deep bar on the
     first-yield basis: listed as not checked when unbraced) gets 0 on every length, so any
     hogging moment stops its rating."""
-    if not job.braced or job.restrained:
+    if not top_only(job):
         return []
     fl = st.flexure
     stops = sorted({0.0, job.length, *support_braces(job, job.supports)})
@@ -468,6 +469,39 @@ def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
     if any(u.name == "lateral-torsional buckling" for u in unchecked_for(loose)):
         return [(a, b, 0.0) for a, b in lengths]
     return []
+
+
+def top_only(job: Job) -> bool:
+    """True when what braces the member holds its top flange or edge only: `braced = true`
+    (a deck, boards, sheeting) or braces said to hold the top flange (`braces_flange =
+    "top"`), and the member is not held against twist all along (`restrained`)."""
+    return not job.restrained and (job.braced or (
+        bool(job.braces) and getattr(job, "braces_flange", None) == "top"))
+
+
+def top_words(job: Job) -> str:
+    """What the job said that holds the top only, for the messages."""
+    return "braced = true" if job.braced else "braces_flange = \"top\""
+
+
+def braces_note(job: Job, st, moment) -> list[str]:
+    """Brace points of a member whose moment hogs, where the job does not say which flange
+    they hold: taken as holding the section against twist (both flanges), which a joist seat
+    on the top flange does not do. A caution naming the key."""
+    if not job.braces or job.braced or job.restrained or \
+            getattr(job, "braces_flange", None) is not None or st.flexure.ltb is None:
+        return []
+    ex = moment.extremes()
+    big = max(abs(ex.max), abs(ex.min))
+    if big <= 0 or ex.min >= -0.01 * big:
+        return []
+    return [f"the brace points (beam.braces) are taken as holding the member against twist, "
+            f"both flanges; the moment hogs here ({units.fmt(ex.min, 'moment', job.units)} at "
+            f"{units.fmt(ex.min_at, 'length', job.units)}), putting the bottom flange in "
+            "compression. If the braces hold the top flange only (joist seats or a deck with no "
+            "kicker to the bottom flange), say braces_flange = \"top\": the bottom flange is "
+            "then checked as held at the supports only, and no rating is posted where its "
+            "buckling would govern"]
 
 
 def hogging_source(job: Job, st) -> str:
@@ -502,8 +536,10 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     computed = any(allow > 0 for _a, _b, allow in limits)
     return [Unchecked(
         "lateral-torsional buckling of the bottom flange under hogging moment",
-        f"braced = true takes the member as braced all along, but a deck, boards or sheeting "
-        f"brace only the flange or edge they sit on; here the moment hogs "
+        (f"braced = true takes the member as braced all along, but a deck, boards or "
+         "sheeting brace only the flange or edge they sit on" if job.braced else
+         "the braces hold the top flange only (braces_flange = \"top\")")
+        + "; here the moment hogs "
         f"({f(ex.min, 'moment')} at {f(ex.min_at)} under the loads as entered), putting the "
         "bottom flange or edge in compression where nothing holds it between the supports, "
         "and its lateral-torsional buckling is not checked. "
@@ -511,8 +547,11 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
            "strength that buckling leaves (Cb 1.0); " if computed else
            "shopbeam does not compute that buckling for this member, so no rating is posted "
            "while the moment hogs; ")
-        + "give the bottom flange's brace points with braces = [...] in place of braced = "
-        "true, or write restrained = true if the member is held against twist all along",
+        + ("give the bottom flange's brace points with braces = [...] in place of braced = "
+           "true, or write restrained = true if the member is held against twist all along"
+           if job.braced else "brace the bottom flange too (kickers) and say braces_flange = "
+           "\"both\", or write restrained = true if the member is held against twist all "
+           "along"),
         hogging_source(job, st), blocks_rating=False)]
 
 

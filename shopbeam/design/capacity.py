@@ -23,7 +23,7 @@ from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Envelopes, Evaluation, evaluate, state_set
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits, hogging_source,
-                                       unchecked_for)
+                                       top_words, unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
@@ -317,12 +317,14 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
                       f"putting the bottom edge in compression over {f(a)} to {f(b)} where "
                       "nothing holds it, and shopbeam does not compute that buckling "
                       f"({hogging_source(job, st)})")
+            todo = ("Give the bottom flange's brace points with braces = [...] in place of "
+                    "braced = true" if job.braced else
+                    "Brace the bottom flange too (kickers) and say braces_flange = \"both\"")
             out.append(f"lateral-torsional buckling of the bottom flange under hogging moment "
-                       f"not checked: braced = true, but at the factor found (k = {k:.4g}) the "
-                       f"moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. Give "
-                       "the bottom flange's brace points with braces = [...] in place of "
-                       "braced = true, or write restrained = true if the member is held "
-                       "against twist all along")
+                       f"not checked: {top_words(job)}, but at the factor found (k = {k:.4g}) "
+                       f"the moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. "
+                       f"{todo}, or write restrained = true if the member is held against "
+                       "twist all along")
     return tuple(out)
 
 

@@ -45,7 +45,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "": {"schema", "title", "notes", "units", "tags", "beam", "supports", "loads", "criteria",
          "moving", "project"},
     "beam": {"length", "section", "material", "self_weight", "axis", "members", "levels", "welded",
-             "braces", "braced", "bearing", "restrained", "wet_service", "temperature",
+             "braces", "braced", "braces_flange", "bearing", "restrained", "wet_service", "temperature",
              "repetitive"},
     "supports": {"at", "type", "stiffness", "label", "bearing", "brace"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
@@ -114,6 +114,10 @@ class Job:
     welded: bool = False
     braced: bool = False  # compression flange braced all along (beam.braced)
     braces: tuple[float, ...] = ()  # lateral brace positions, m, sorted (beam.braces)
+    # beam.braces_flange: "top" when the braces hold the top flange only (joist seats, no
+    # kicker to the bottom flange), "both" when they hold the section against twist; None when
+    # the job does not say (taken as "both", with a caution where the moment hogs)
+    braces_flange: str | None = None
     moving: tuple[WheelSet, ...] = ()  # at most one wheel set
     restrained: bool = False  # beam.restrained: held against twist and sideways movement
     bearing: float | None = None  # m, beam.bearing: bearing length at supports and loads
@@ -520,6 +524,23 @@ def _read_bracing(r: _Reader, beam: dict, length) -> tuple[bool, tuple[float, ..
                "along, so no unbraced length is left for them to split. Remove braced = true "
                "if it is held only at the brace points, or remove braces", "beam.braces")
     return braced, tuple(sorted(pts))
+
+
+def _read_braces_flange(r: _Reader, beam: dict, braces) -> str | None:
+    """beam.braces_flange: which flange the brace points hold ("top" or "both")."""
+    if "braces_flange" not in beam:
+        return None
+    got = beam["braces_flange"]
+    if got not in ("top", "both"):
+        r.error(f"braces_flange must be \"top\" (the braces hold the top flange only: joist "
+                f"seats, a deck) or \"both\" (they hold the section against twist: kickers "
+                f"to the bottom flange, full-depth connections), not {got!r}",
+                "beam.braces_flange")
+        return None
+    if not braces:
+        r.warn("braces_flange says which flange the brace points hold, and there are no "
+               "braces = [...]: it changes nothing", "beam.braces_flange")
+    return got
 
 
 def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
@@ -1567,7 +1588,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     beam = data.get("beam")
     length = section = material = wood_service = None
     self_weight, members, welded, levels = True, 1, False, None
-    braced, braces = False, ()
+    braced, braces, braces_flange = False, (), None
     restrained, bearing, bearings, hung = False, None, {}, []
     if not _is_table(beam):
         r.error("missing the [beam] table (length, section, material)", "beam")
@@ -1631,6 +1652,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     "beam.welded")
             welded = False
         braced, braces = _read_bracing(r, beam, length)
+        braces_flange = _read_braces_flange(r, beam, braces)
         restrained = r.boolean(beam, "restrained", "beam.restrained", False,
                                "restrained must be true or false (true: the member is held "
                                "against twisting and sideways movement all along, so an "
@@ -1787,7 +1809,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         supports=tuple(sorted(supports, key=lambda s: s.at)), loads=tuple(loads),
         criteria=criteria, notes=notes, units=system, tags=tags,
         self_weight=self_weight, members=members, levels=levels, welded=welded, braced=braced,
-        braces=braces,
+        braces=braces, braces_flange=braces_flange,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, at_support=tuple(at_support),
