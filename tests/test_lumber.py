@@ -537,3 +537,12 @@ type = "roller"
     res = analyze(job("2x10", length="10 ft", supports=sup))
     bear = check(res, "bearing")
     assert bear.limit / PSI == pytest.approx(625 * cb, rel=1e-6)
+
+
+@pytest.mark.parametrize("axis, flat", [("", False), ('axis = "weak"', True)])
+def test_lvl_laid_flat_is_not_rated_on_its_edgewise_values(axis, flat):
+    # LVL makers publish separate flatwise (plank) values, lower than the edgewise ones in
+    # shear and bearing (makers' literature, from memory); shopbeam's are edgewise
+    j = job("LVL1-3/4x11-7/8", "LVL-2.0E", "4 ft", beam=axis)
+    why = [r for r in capacity(j).not_rated if "LVL strength used flat" in r]
+    assert bool(why) == flat

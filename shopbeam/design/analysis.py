@@ -275,6 +275,18 @@ def material_unchecked(job: Job, st) -> list[Unchecked]:
     kind = getattr(mat, "kind", "")
     out = []
     wf = getattr(st.flexure, "wood", None)
+    if wf is not None and wf.flat and wf.values.size_class == "lvl":
+        # LVL laid flat (plank orientation): the makers publish separate, lower flatwise
+        # values (Fv and Fc_perp well below the edgewise ones, from memory); the built-in
+        # values are edgewise
+        out.append(Unchecked(
+            "LVL strength used flat (plank orientation)",
+            "the built-in LVL values are for the member on edge; laid flat its makers publish "
+            "their own, lower flatwise (plank) Fb, Fv and Fc_perp, which shopbeam does not "
+            "have, and the edgewise ones were used. Give the maker's flatwise values as an "
+            "inline lumber material ([beam.material] kind = \"lumber\" with e, fb, fv, "
+            "fc_perp and density), or set the LVL on edge",
+            "LVL makers' published design values (flatwise), from memory"))
     if kind == "lumber" and wf is not None and not wf.values.fc_perp:
         at = [f"supports[{i}] ({s.kind})" for i, s in enumerate(job.supports)
               if s.kind in ("pin", "roller", "spring")]
