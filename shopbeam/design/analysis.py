@@ -5,6 +5,7 @@
 
 from __future__ import annotations
 
+import math
 import re
 from dataclasses import dataclass, replace
 
@@ -13,7 +14,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for
 from shopbeam.design import loading
-from shopbeam.design.basis import support_braces
+from shopbeam.design.basis import cb_factor, support_braces
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
                                     impact_of, not_checked_words, strengths, wood_load_case)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
@@ -193,7 +194,8 @@ def analyze(job: Job) -> Result:
     else:
         checks = run_checks(job, sol)
     st = strengths(job)
-    unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment)
+    unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment) \
+        + span_top_unchecked(job, st, sol.moment)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
         + braces_note(job, st, sol.moment)
     # every limit state not checked is named in the report, as on the label and in the JSON
@@ -445,6 +447,69 @@ def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
             "with flange = \"bottom\")",
             "AISC 360-16 F1 (Cb 1.0 at a free end); top-flange loading, SSRC Guide (from "
             "memory)", blocks_rating=False))
+    return out
+
+
+# A load bearing on the top flange at a point not braced destabilises the member: AISC
+# 360-16 Commentary F1 (from memory) scales Cb by 1.4^(2y/ho), y = -ho/2 for the top flange,
+# that is by 1/1.4. Eq. F1-1's Cb, which the bending check uses, is for loads at the shear
+# centre.
+TOP_FLANGE_CB = 1 / 1.4
+
+
+def span_top_limits(job: Job, st) -> list[tuple[float, float, float]]:
+    """(start, end, LTB strength at Cb = 1) of each unbraced length between brace points
+    (not a cantilever: see `cantilever_top_limits`) that carries a load on its top flange at
+    a point not braced: a point load or spread load not hung from the bottom flange."""
+    fl = _rating_flexure(st)
+    if fl is None or fl.ltb[0] != "F2" or not fl.uses_cb or job.braced or job.restrained:
+        return []
+    tol = 1e-9 * job.length
+    hung = set(getattr(job, "hung", ()) or ())
+    held = set(job.braces) | set(support_braces(job, job.supports))
+    out = []
+    for a, b, free, l1, _why in st.ltb_segments:
+        if free or not math.isfinite(l1):
+            continue
+        on = [ld for ld in job.loads if ld.kind != "moment" and ld.total_force
+              and ld.key not in hung
+              and (a + tol < ld.at < b - tol and not any(abs(ld.at - h) <= tol for h in held)
+                   if ld.kind == "point" else min(b, ld.end) - max(a, ld.start) > tol)]
+        if on:
+            out.append((a, b, l1))
+    return out
+
+
+def span_top_strength(fl, l1: float, moment, a: float, b: float) -> tuple[float, float]:
+    """(Mn / Omega with the top-flange Cb, that Cb) over a..b for the moment diagram given."""
+    mmax = moment.extremes(a, b).abs_max
+    q = [abs(float(moment(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
+    cb = float(cb_factor(mmax, *q)) * TOP_FLANGE_CB
+    return min(fl.cap, cb * l1) / fl.omega, cb
+
+
+def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
+    """Loads on the top flange of an unbraced length between braces, where that loading would
+    lower the bending strength below the figure checked: listed; `capacity` posts no rating
+    where the moment at the rated load would exceed the lower strength."""
+    out = []
+    fl = st.flexure
+    for a, b, l1 in span_top_limits(job, st):
+        top, cb = span_top_strength(fl, l1, moment, a, b)
+        mmax = moment.extremes(a, b).abs_max
+        if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:
+            continue
+        f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+        out.append(Unchecked(
+            "lateral-torsional buckling with the loads on the top flange",
+            f"the unbraced length {f(a)} to {f(b)} carries loads on its top flange at points "
+            "not braced, which destabilise it; the bending check takes Cb by eq. F1-1, for "
+            f"loads at the shear centre. With Cb x 1/1.4 (= {cb:.3f}) the strength is "
+            f"{f(top, 'moment')} against {f(mmax, 'moment')} here; no rating is posted "
+            "where the rated load would exceed it. Brace the member at the loads (beam.braces), "
+            "or hang them below the flange (flange = \"bottom\")",
+            "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
+            blocks_rating=False))
     return out
 
 

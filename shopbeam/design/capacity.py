@@ -23,7 +23,8 @@ from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Envelopes, Evaluation, evaluate, state_set
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits, hogging_source,
-                                       top_words, unchecked_for)
+                                       span_top_limits, span_top_strength, top_words,
+                                       unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
@@ -333,10 +334,47 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     with braced = true, a cantilever's top-flange loading at the factor k), for a sizing
     sweep's listed rows; `ss` is solved here when None and either can apply."""
     hog, top = hogging_limits(job, st), cantilever_top_limits(job, st)
-    if not (hog or top) or not math.isfinite(k) or k <= 0:
+    span = span_top_limits(job, st)
+    if not (hog or top or span) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
-    return _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k)
+    return _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k) \
+        + _span_top(job, st, span, ss, k)
+
+
+def _all_on(ss, k: float) -> Piecewise:
+    """The moment with every live load on at the factor k (patterned spans too)."""
+    kk = k * (1 + ss.parts.impact)
+    co = ss.fixed.moment.coeffs + kk * ss.live.moment.coeffs
+    for sp in ss.spans:
+        co = co + kk * sp.moment.coeffs
+    return Piecewise(ss.fixed.moment.breaks, co)
+
+
+def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
+    """No rating where the rated load, bearing on the top flange of an unbraced length between
+    braces, would exceed the strength that loading leaves it (`limits`:
+    `analysis.span_top_limits`): the moment over every pattern at k against Mn with Cb (from
+    every load on at k) x 1/1.4."""
+    if not limits:
+        return ()
+    env = Envelopes(ss, k)
+    m = _all_on(ss, k)
+    out = []
+    for a, b, l1 in limits:
+        top, cb = span_top_strength(st.flexure, l1, m, a, b)
+        demand = max(abs(env.extreme("moment", up, a, b).value) for up in (True, False))
+        if demand > top * (1 + 1e-9):
+            f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+            out.append(f"lateral-torsional buckling with the loads on the top flange not "
+                       f"checked: at the factor found (k = {k:.4g}) the moment over the "
+                       f"unbraced length {f(a)} to {f(b)} reaches {f(demand, 'moment')}, above "
+                       f"the {f(top, 'moment')} its strength is with the loads bearing on the "
+                       f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
+                       "F1, from memory; the check takes them at the shear centre). Brace the "
+                       "member at the loads (beam.braces), or hang them below the flange "
+                       "(flange = \"bottom\")")
+    return tuple(out)
 
 
 def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
@@ -347,11 +385,7 @@ def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
     largest."""
     if not limits:
         return ()
-    kk = k * (1 + ss.parts.impact)
-    co = ss.fixed.moment.coeffs + kk * ss.live.moment.coeffs
-    for sp in ss.spans:
-        co = co + kk * sp.moment.coeffs
-    m = Piecewise(ss.fixed.moment.breaks, co)
+    m = _all_on(ss, k)
     out = []
     for a, b, kl, now, top in limits:
         demand = m.extremes(a, b).abs_max
