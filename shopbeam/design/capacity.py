@@ -363,7 +363,14 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     out = []
     for a, b, l1 in limits:
         top, cb = span_top_strength(st.flexure, l1, m, a, b)
-        demand = max(abs(env.extreme("moment", up, a, b).value) for up in (True, False))
+        demand = m.extremes(a, b).abs_max
+        if ss.spans:  # patterned: the envelope over the whole pieces that cover a..b (a
+            # brace inside a piece is no break of it), an upper bound over the patterns
+            br = ss.fixed.moment.breaks
+            lo = float(br[max(int(br.searchsorted(a + 1e-9 * job.length, "right")) - 1, 0)])
+            hi = float(br[min(int(br.searchsorted(b - 1e-9 * job.length, "left")), len(br) - 1)])
+            demand = max([demand] + [abs(env.extreme("moment", up, lo, hi).value)
+                                     for up in (True, False)])
         if demand > top * (1 + 1e-9):
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling with the loads on the top flange not "
