@@ -262,7 +262,8 @@ value = "-2.5 kN"
 def test_the_label_says_the_posted_load_comes_on_top_of_the_dead_loads(dead, self_weight, words):
     # a reader of the label must know the dead loads stay on besides the posted figure
     text = ('schema = 1\ntitle = "shelf"\n[beam]\nlength = "12 ft"\nsection = "W8X18"\n'
-            f'material = "A992"\nself_weight = {self_weight}\n[[supports]]\nat = "0 ft"\n'
+            f'material = "A992"\nbraced = true\nself_weight = {self_weight}\n[[supports]]\n'
+            'at = "0 ft"\n'
             'type = "pin"\n[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\n'
             'type = "uniform"\nvalue = "-500 lbf/ft"\n' + dead)
     cap = capacity(parse_job_text(text))
