@@ -273,3 +273,17 @@ def test_the_label_says_the_posted_load_comes_on_top_of_the_dead_loads(dead, sel
         assert words in flat
     else:
         assert "IN ADDITION" not in flat
+
+
+def test_a_wheel_set_is_posted_per_axle_and_per_wheel():
+    # each load of a [[moving]] set is an axle carried by wheels_per_axle wheels (a monorail
+    # trolley runs one each side of the web): the label had posted the axle as "per wheel"
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
+    assert job.moving[0].wheels_per_axle == 2
+    cap = capacity(job)
+    r = label.rating(cap, analyze(job).unchecked)
+    figs = {f.label.split(" (")[0]: f for f in r.figures}
+    axle, wheel = figs["MAX PER AXLE"], figs["MAX PER WHEEL"]
+    assert wheel.exact == pytest.approx(axle.exact / 2, rel=1e-12)
+    assert axle.exact == pytest.approx(max(abs(w) for w in job.moving[0].live) * cap.factor,
+                                       rel=1e-12)

@@ -168,10 +168,16 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                                    where))
         if mv:
             m = mv[0]
+            # each load of a wheel set is an axle (or a wheel pair), carried by
+            # wheels_per_axle wheels: a monorail trolley runs one each side of the web
             wheels = [abs(w) * n * k for w in m.live]
+            per = max(int(job.moving[0].wheels_per_axle if job.moving else 1), 1)
             if len(wheels) > 1:
-                figs.append(posted(f"MAX PER WHEEL ({m.label})", max(wheels), "force", sy,
-                                   f"{len(wheels)} wheels", where))
+                figs.append(posted(f"MAX PER AXLE ({m.label})", max(wheels), "force", sy,
+                                   f"{len(wheels)} axles", where))
+            if per > 1:
+                figs.append(posted(f"MAX PER WHEEL ({m.label})", max(wheels) / per, "force",
+                                   sy, f"{per} wheels per axle", where))
             figs.append(posted(f"MAX MOVING LOAD ({m.label})", sum(wheels), "force", sy,
                                "anywhere on its travel", where))
         tot = sum(abs(ld.total_force) for ld in live)
