@@ -546,3 +546,36 @@ def test_lvl_laid_flat_is_not_rated_on_its_edgewise_values(axis, flat):
     j = job("LVL1-3/4x11-7/8", "LVL-2.0E", "4 ft", beam=axis)
     why = [r for r in capacity(j).not_rated if "LVL strength used flat" in r]
     assert bool(why) == flat
+
+
+def test_a_wood_section_given_by_its_properties_is_not_rated_and_its_wood_keys_are_warned():
+    # a 2x12's properties typed as shape = "custom": no b and d, so no CL (NDS 3.3.3) and no
+    # Table 4.3.1 factors; the same beam as "2x12", 16 ft unbraced at 60 lbf/ft, fails at CL
+    # 0.311 (hand: le = 1.63 x 192 + 3 x 11.25 = 346.7 in, RB 41.6, FbE 478 psi, NDS 2018
+    # 3.3.3, DF-L Select Structural Fb 1,500 psi, Emin 690,000 psi, from memory)
+    custom = ('[beam.section]\nshape = "custom"\narea = "16.875 in^2"\nix = "177.98 in^4"\n'
+              'sx = "31.64 in^3"')
+    text = f"""schema = 1
+title = "shelf"
+[beam]
+length = "16 ft"
+material = "DF-L-SS"
+self_weight = false
+wet_service = true
+{custom}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "16 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-60 lbf/ft"
+"""
+    j = parse_job_text(text)
+    assert [w for w in j.warnings if w.key == "beam.wet_service" and "not applied" in w.message]
+    cap = capacity(j)
+    assert not cap.rated and any("given by its properties" in r for r in cap.not_rated)
+    sized = job("2x12", "DF-L-SS", "16 ft", load='value = "-60 lbf/ft"')
+    assert check(analyze(sized), "bending").ratio > 1.5

@@ -591,7 +591,18 @@ def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
         return Flexure(fb * s, 1.0, "NDS 3.3: fb = M / S <= Fb (a wood section that is not a "
                        "rectangle: no adjustment factors applied)", stress_s=s, uses_cb=False,
                        warnings=("wood section not rectangular: NDS adjustment factors and "
-                                 "beam stability are not applied",))
+                                 "beam stability are not applied",),
+                       unchecked=(Unchecked(
+                           "NDS adjustment factors and beam stability of a wood section "
+                           "given by its properties",
+                           "the wood section is not a rectangle of known breadth and depth, "
+                           "so beam stability CL (NDS 3.3.3), the load duration, wet service, "
+                           "temperature, size and flat-use factors (NDS Table 4.3.1) and "
+                           "bearing (NDS 3.10) are not applied: the bending and shear limits "
+                           "are the bare reference values, which can be several times the "
+                           "adjusted ones. Give the member as a lumber size (\"2x12\") or "
+                           "[beam.section] shape = \"rect-bar\" with its dressed width and "
+                           "depth", "NDS 2018 Table 4.3.1, 3.3.3, 3.10"),))
     f = lumber.factors(sec, mat, service or lumber.Service())
     fac = f.factors
     text = (f"NDS 2018 Table 4.3.1: Fb' = Fb CD CM Ct CL CF Cfu Cr = "

@@ -1479,6 +1479,13 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
+    if section is not None and section.shape != "rect-bar":
+        for k, where in (("wet_service", "beam"), ("temperature", "beam"),
+                         ("repetitive", "beam"), ("duration", "criteria")):
+            if k in (beam if where == "beam" else crit):
+                r.warn(f"{k} is not applied: the NDS factors need a rectangular wood section "
+                       "(a lumber size, or shape = \"rect-bar\"), and this one is given by its "
+                       "properties, so the job is NOT RATED", f"{where}.{k}")
     if "duration" not in crit and (RACK_TAGS | SHELF_TAGS | {"storage"}).intersection(tags):
         r.warn("a wood rack or shelf with no duration is checked as a ten-year load (CD 1.0, "
                "NDS 2018 Table 2.3.2) with its live loads short-term for deflection; stock "
