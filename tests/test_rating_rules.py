@@ -707,3 +707,42 @@ def test_a_load_on_the_top_flange_of_an_unbraced_span_withholds_the_rating_where
     # the report lists it at the loads as entered, without blocking the solve
     res = analyze(parse_job_text(TOP_LOADED.format(extra="", flange="")))
     assert [u for u in res.unchecked if u.name.endswith("loads on the top flange")]
+
+
+def test_the_bottom_flange_rule_is_judged_with_the_live_loads_off_too():
+    # A braced = true awning arm hogs under its roofing (dead) and the wind uplift (live)
+    # relieves it: at the rated factor the root sags, but with no wind (k = 0) it hogs
+    # 700 x 10^2 / 2 = 35.0 kip*ft with the bottom flange free over 10 ft. AISC 360-16 F2-2
+    # with the AISC Shapes Database v15.0 W8X18 row, Cb 1.0: Lp 52.1 in, Lr 161.8 in, Lb 120
+    # in, Mn = 850 - 318 (120 - 52.1)/(161.8 - 52.1) = 653.2 kip*in, / 1.67 = 32.6 kip*ft
+    text = """schema = 1
+title = "awning arm"
+tags = ["not-lifting"]
+[beam]
+length = "10 ft"
+section = "W8x18"
+material = "A992"
+self_weight = false
+braced = true
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "uniform"
+value = "-700 lbf/ft"
+case = "dead"
+label = "roofing"
+[[loads]]
+type = "uniform"
+value = "300 lbf/ft"
+uplift = true
+label = "wind uplift"
+"""
+    cap = capacity(parse_job_text(text))
+    why = [r for r in cap.not_rated if "live loads off (k = 0)" in r]
+    assert why and "35000 lbf*ft" in why[0]
+    m = re.search(r"exceeds the (\d+) lbf\*ft", why[0])
+    assert m and float(m.group(1)) == pytest.approx(32600, rel=2e-3)
+    # lighter roofing that the bottom flange carries: rated
+    light = capacity(parse_job_text(text.replace("-700 lbf/ft", "-500 lbf/ft")))
+    assert not [r for r in light.not_rated if "k = 0" in r]

@@ -302,7 +302,7 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
     buckling leaves over its length between supports (`limits`: `analysis.hogging_limits`;
     Cb 1.0, conservative; 0 where shopbeam does not compute that buckling, so that any
     hogging beyond 1 % of the largest moment stops the rating)."""
-    if not limits or not math.isfinite(k) or k <= 0:
+    if not limits or not math.isfinite(k) or k < 0:
         return ()
     env = Envelopes(ss, k)
     big = max(max(abs(env.extreme("moment", up, 0.0, job.length).value) for up in (True, False)),
@@ -322,7 +322,7 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
                     "braced = true" if job.braced else
                     "Brace the bottom flange too (kickers) and say braces_flange = \"both\"")
             out.append(f"lateral-torsional buckling of the bottom flange under hogging moment "
-                       f"not checked: {top_words(job)}, but at the factor found (k = {k:.4g}) "
+                       f"not checked: {top_words(job)}, but {_at(k)} "
                        f"the moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. "
                        f"{todo}, or write restrained = true if the member is held against "
                        "twist all along")
@@ -338,8 +338,18 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     if not (hog or top or span) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
-    return _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k) \
+    out = _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k) \
         + _span_top(job, st, span, ss, k)
+    # the dead loads alone (k = 0) too: a live load that relieves them (wind uplift on a
+    # roof's dead weight) can leave the rated state inside a limit the unloaded one passes
+    out += _hogging(job, st, hog, ss, 0.0) + _cantilever_top(job, top, ss, 0.0) \
+        + _span_top(job, st, span, ss, 0.0)
+    return tuple(dict.fromkeys(out))
+
+
+def _at(k: float) -> str:
+    """Where a rule is judged, in words: at the factor found, or with the live loads off."""
+    return "with the live loads off (k = 0)" if k == 0 else f"at the factor found (k = {k:.4g})"
 
 
 def _all_on(ss, k: float) -> Piecewise:
@@ -374,7 +384,7 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
         if demand > top * (1 + 1e-9):
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling with the loads on the top flange not "
-                       f"checked: at the factor found (k = {k:.4g}) the moment over the "
+                       f"checked: {_at(k)} the moment over the "
                        f"unbraced length {f(a)} to {f(b)} reaches {f(demand, 'moment')}, above "
                        f"the {f(top, 'moment')} its strength is with the loads bearing on the "
                        f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
@@ -399,7 +409,7 @@ def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
         if demand > top:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
-                       f"loads on the top flange not checked: at the factor found (k = {k:.4g}) "
+                       f"loads on the top flange not checked: {_at(k)} "
                        f"its moment {f(demand, 'moment')} exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
