@@ -33,6 +33,7 @@ _REGISTRY = None
 _EXTRA_DEFINITIONS = (
     "plf = force_pound / foot",
     "klf = kip / foot",
+    "pli = force_pound / inch",
     "psf = force_pound / foot ** 2",
     "ksf = kip / foot ** 2",
     "pcf = pound / foot ** 3",
@@ -148,7 +149,7 @@ _SHOP_WORDS = {
     "lb": "lb", "#": "lb", "pound": "lb", "lbm": "lb", "lbf": "lbf", "kip": "kip", "k": "kip",
     "kipf": "kip", "n": "N", "kn": "kN", "nm": "N*m", "knm": "kN*m", "nmm": "N*mm",
     "pa": "Pa", "kpa": "kPa", "mpa": "MPa", "gpa": "GPa", "psi": "psi", "ksi": "ksi",
-    "psf": "psf", "ksf": "ksf", "plf": "plf", "klf": "klf", "pcf": "pcf", "kg": "kg",
+    "psf": "psf", "ksf": "ksf", "plf": "plf", "klf": "klf", "pli": "pli", "pcf": "pcf", "kg": "kg",
     "kgf": "kgf", "rad": "rad", "radian": "rad", "ton": "ton", "tonne": "tonne",
 }
 _UNIT_WORD = re.compile(r"[A-Za-z#]+")
@@ -157,7 +158,7 @@ _UNIT_WORD = re.compile(r"[A-Za-z#]+")
 SPELLINGS: dict[str, str] = {
     "length": "ft, in, yd, mm, cm or m (also 10' 6\")",
     "force": "lbf, lb (or #), kip (or k), N, kN or kg",
-    "line_load": "lbf/ft (plf), lb/ft, kip/ft (klf), N/m, kN/m or kg/m",
+    "line_load": "lbf/ft (plf), lbf/in (pli), lb/ft, kip/ft (klf), N/m, kN/m or kg/m",
     "area_load": "psf (lbf/ft^2), ksf, Pa, kPa or kN/m^2",
     "moment": "lbf*ft (ft-lb, lb-ft), lbf*in (in-lb), kip*ft (k-ft), N*m (Nm, N-m) or kN*m "
               "(kN-m)",

@@ -39,6 +39,7 @@ def test_shop_lengths(text, inches):
     ("-1.2 kN", "force", -1200.0),
     ("-25 lbf/ft", "line_load", -25 * LBF / FT),
     ("-25 plf", "line_load", -25 * LBF / FT),
+    ("-10 pli", "line_load", -10 * LBF / 0.0254),  # pound per linear inch (common practice)
     ("150 lbf*ft", "moment", 150 * LBF * FT),
     ("125 psf", "area_load", 125 * LBF / FT**2),
     ("36 ksi", "stress", 36e3 * LBF / IN**2),

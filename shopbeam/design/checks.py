@@ -1186,8 +1186,8 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     _, mmax, mn, at, why = worst
     words = "dead load alone with CD 0.9 (permanent, NDS 2018 2.3.2, Table 2.3.2)"
     bend = Check("bending, dead load", mmax / s, mn / s, "Pa",
-                 f"{words}: Fb' = {stress_words(fl.cap / s * r, job.units)} (CL = 1)"
-                 + (f"; {why}" if why else ""), at,
+                 f"{words}: Fb* = {stress_words(fl.cap / s * r, job.units)}"
+                 + (f"; {why}" if why else " (CL = 1)"), at,
                  clause="NDS 2018 2.3.2, 3.3", source="NDS 2018 (from memory)",
                  params={"CD": 0.9})
     v = dsol.shear.extremes()

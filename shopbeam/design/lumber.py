@@ -188,5 +188,5 @@ def bearing_area_factor(lb_in: float, end_distance_in: float) -> tuple[float, st
     least 3 in from the end of the member; 1.0 nearer the ends."""
     if lb_in < 6.0 and end_distance_in >= 3.0:
         cb = (lb_in + 0.375) / lb_in
-        return cb, f"Cb = (lb + 0.375)/lb = {cb:.3f} (NDS 3.10.4)"
+        return cb, f"Cb = (lb + 0.375 in)/lb, lb in inches, = {cb:.3f} (NDS 3.10.4)"
     return 1.0, "Cb 1.0 (at the end of the member or lb >= 6 in, NDS 3.10.4)"
