@@ -273,6 +273,7 @@ def test_the_label_says_the_posted_load_comes_on_top_of_the_dead_loads(dead, sel
         assert words in flat
     else:
         assert "IN ADDITION" not in flat
+    assert ("own weight was LEFT OUT" in flat) == (self_weight == "false")
 
 
 def test_a_wheel_set_is_posted_per_axle_and_per_wheel():

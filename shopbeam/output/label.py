@@ -225,6 +225,9 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     on_top = _dead_words(job)
     if on_top:
         notes.append(f"These loads are IN ADDITION TO {on_top}, which stay on.")
+    if not job.self_weight:
+        notes.append("The member's own weight was LEFT OUT (self_weight = false): it must be "
+                     "inside the loads entered.")
     return figs, notes
 
 
@@ -239,9 +242,12 @@ def _dead_words(job) -> str:
         n = len(dead)
         parts.append(("the dead load" if n == 1 else f"the {n} dead loads") + " as entered"
                      + (f" ({units.fmt(abs(force), 'force', sy)} in all)" if force else ""))
+    if any(any(d for d in ws.dead) for ws in job.moving):
+        parts.append("the wheel set's own weight (its dead wheel loads)")
     if job.self_weight:
         parts.append("the member's own weight")
-    return " and ".join(parts)
+    return ", ".join(parts[:-1]) + (" and " if len(parts) > 1 else "") + parts[-1] if parts \
+        else ""
 
 
 def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
