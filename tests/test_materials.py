@@ -287,3 +287,14 @@ def test_a_kind_that_e_contradicts_is_not_rated(kind, e, rated):
     assert bool(why) == (not rated)
     if why:
         assert f'kind = "{kind}"' in why[0] and "Fix e or the kind" in why[0]
+
+
+@pytest.mark.parametrize("width, fy_ksi, fu_ksi", [("0.5 in", 16, 22), ("1 in", 15, 21)])
+def test_6063_t5_over_half_an_inch_takes_its_lower_minimums(width, fy_ksi, fu_ksi):
+    # Aluminum Design Manual 2015 Table A.3.4 (from memory): 6063-T5 extrusions up to 0.500 in
+    # Fty 16 ksi, Ftu 22 ksi; 0.501 to 1.000 in Fty 15 ksi, Ftu 21 ksi
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = simple_span(f'material = "6063-T5"\n[beam.section]\nshape = "rect-bar"\n'
+                       f'width = "{width}"\ndepth = "3 in"', 4)
+    mat = parse_job_text(text).material
+    assert mat.fy == pytest.approx(fy_ksi * KSI) and mat.fu == pytest.approx(fu_ksi * KSI)

@@ -996,6 +996,26 @@ _SECTION_FLOORS = {"area": (1e-10, "area"), "ix": (1e-20, "ix"), "sx_top": (1e-1
                    "sx_bot": (1e-15, "sx"), "shear_area": (1e-10, "shear_area")}
 
 
+def _thick_6063_t5(r: _Reader, material, section):
+    """6063-T5 over 0.5 in thick has the lower minimums of its next thickness range (Fty 15
+    ksi, Ftu 21 ksi for 0.501 to 1.000 in, Aluminum Design Manual 2015 Table A.3.4, from
+    memory); the built-in figures (16 / 22 ksi) are for up to 0.5 in."""
+    from dataclasses import replace
+
+    if material is None or section is None or getattr(material, "key", "") != "6063-T5":
+        return material
+    d = getattr(section, "dims", {}) or {}
+    t = max((float(d[k]) for k in ("t", "tf", "tw") if d.get(k)), default=0.0)
+    if section.shape in ("rect-bar", "round-bar"):
+        t = min(float(d.get("b", 0) or d.get("d", 0) or 0), float(d.get("h", 0) or 1e9)) or t
+    if t <= 0.5 * 0.0254 * (1 + 1e-9):
+        return material
+    ksi = 6894.757293168361 * 1000
+    return replace(material, fy=15 * ksi, fu=21 * ksi,
+                   name=f"{material.name}, over 0.5 in thick",
+                   source="Fty 15 ksi, Ftu 21 ksi (0.501 to 1.000 in thick); " + material.source)
+
+
 def _plausible_section(sec, r: _Reader) -> None:
     for attr, (floor, key) in _SECTION_FLOORS.items():
         v = getattr(sec, attr, None)
@@ -1638,6 +1658,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 r.warn(stubby, "beam.length")
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section,
                                             tags)
+        material = _thick_6063_t5(r, material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
             r.error("self_weight must be true or false", "beam.self_weight")
