@@ -288,3 +288,17 @@ def test_a_wheel_set_is_posted_per_axle_and_per_wheel():
     assert wheel.exact == pytest.approx(axle.exact / 2, rel=1e-12)
     assert axle.exact == pytest.approx(max(abs(w) for w in job.moving[0].live) * cap.factor,
                                        rel=1e-12)
+
+
+@pytest.mark.parametrize("bearing, said", [("", True), ('bearing = "3-1/2 in"', False)])
+def test_a_wood_label_says_when_it_rests_on_the_default_bearing(bearing, said):
+    # the wood bearing check (NDS 2018 3.10) takes 1-1/2 in where none is given: the label
+    # must say the posted load holds only on bearings at least that long
+    text = ('schema = 1\ntitle = "shelf"\n[beam]\nlength = "6 ft"\nsection = "2x10"\n'
+            f'material = "DF-L-2"\n{bearing}\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "6 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-100 lbf/ft"\n')
+    cap = capacity(parse_job_text(text))
+    flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
+                                     width=200).replace("|", " ").split())
+    assert ("Bearing taken as 1-1/2 in" in flat) == said

@@ -228,6 +228,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     if not job.self_weight:
         notes.append("The member's own weight was LEFT OUT (self_weight = false): it must be "
                      "inside the loads entered.")
+    if getattr(job.material, "kind", "") == "lumber" and not getattr(job, "bearing", None) \
+            and not getattr(job, "bearings", None):
+        notes.append("Bearing taken as 1-1/2 in at the supports and under point loads (none "
+                     "given): each bearing must be at least that long.")
     return figs, notes
 
 
