@@ -299,3 +299,23 @@ def test_text_ui_size_list_marks_rows_that_are_not_rated():
 
     assert marked == {r.designation for r in shown_rows(res, 15) if r.not_rated} != set()
     assert all(len(text) <= 78 for _, text in rows)  # fits the 80-column list
+
+
+def test_a_kind_not_made_in_the_jobs_grade_is_swept_in_its_own():
+    # AISC Manual 15th ed. Table 2-4 (common practice, from memory): flat bar is bought in A36,
+    # not the A500-C of tube; swept in A500-C a 10 x 1/8 in bar passed at 50 ksi that fails at
+    # 36 ksi (F11-1: Z = t d^2 / 4 = 3.125 in^3, Mn / 1.67 = 5.61 kip*ft against 6.25)
+    from shopbeam.design.analysis import analyze
+    text = simple_span('section = "HSS6x6x3/16"\nmaterial = "A500-C"\nbraced = true\n'
+                       'self_weight = false', 10, uniform_load(10, "-500 lbf/ft"))
+    job = parse_job_text(text)
+    res = size(job, "flat-bar")
+    assert res.lightest.material.key == "A36" and "swept in A36" in res.material_note
+    full = analyze(replace(job, section=res.lightest.section, material=res.lightest.material))
+    assert max(c.ratio for c in full.checks) <= 1.0
+    bar = catalog.lookup("FB10x1/8")
+    in_a36 = analyze(replace(job, section=bar, material=res.lightest.material))
+    assert max(c.ratio for c in in_a36.checks) > 1.0
+    assert res.lightest.designation != bar.designation
+    # a tube kind keeps the job's tube grade
+    assert size(job, "HSS-rect").material_note == ""

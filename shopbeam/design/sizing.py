@@ -261,9 +261,39 @@ def default_kind(job) -> str:
 
 # The material a sweep of another family uses (stated in the output): the grade a shop
 # most often buys for that kind of stock (common practice).
-FAMILY_DEFAULTS = {"lumber": "DF-L-2", "LVL": "LVL-2.0E", "W": "A992", "M": "A36", "S": "A36", "HP": "A572-50",
+FAMILY_DEFAULTS = {"lumber": "DF-L-2", "LVL": "LVL-2.0E", "W": "A992", "WT": "A992", "M": "A36", "S": "A36",
+                   "HP": "A572-50",
                    "HSS": "A500-C", "HSS-rect": "A500-C", "HSS-round": "A500-C",
                    "PIPE": "A53-B", "mech-tube": "A513", "mech-round": "A513"}
+
+
+# Kinds made of tube or pipe (A500, A53, A513 grades); every other steel kind is rolled
+# shape, plate or bar (A36, A572-50, A992). AISC Manual 15th ed. Table 2-4 (common practice,
+# from memory).
+TUBE_KINDS = frozenset({"HSS", "HSS-rect", "HSS-round", "PIPE", "mech-tube", "mech-round",
+                        "SHS", "RHS", "CHS"})
+W_KINDS = frozenset({"W", "HP", "WT"})  # A992 is the grade of W shapes (and HP, WT)
+
+
+def usual_grade(material, kind: str):
+    """The grade a steel sweep of `kind` uses in place of the job's, when the job's grade is
+    not one that kind is made to (a tube grade on rolled shapes or bar, a rolled grade on
+    tube, A500 on pipe, A992 on anything but W shapes); None when the job's grade fits."""
+    if getattr(material, "kind", "") != "steel" or kind in ("lumber", "LVL"):
+        return None
+    key = getattr(material, "key", "")
+    tube_grade = getattr(material, "hss_wall_factor", None) is not None
+    if kind in TUBE_KINDS and not tube_grade:
+        want = FAMILY_DEFAULTS.get(kind, "A500-C")
+    elif kind not in TUBE_KINDS and tube_grade:
+        want = FAMILY_DEFAULTS.get(kind, "A36")
+    elif kind == "PIPE" and key.startswith("A500"):
+        want = "A53-B"
+    elif key == "A992" and kind not in W_KINDS:
+        want = FAMILY_DEFAULTS.get(kind, "A36")
+    else:
+        return None
+    return get_material(want) if want != key else None
 
 
 def material_for_kind(job, kind: str):
@@ -281,7 +311,13 @@ def material_for_kind(job, kind: str):
         if wants_wood == (e < WOOD_E_MAX):
             return job, ""
     elif wants_wood == (mkind == "lumber"):
-        return job, ""
+        grade = usual_grade(job.material, kind)
+        if grade is None:
+            return job, ""
+        return replace(job, material=grade), (
+            f"--kind {kind} is not made in the job's grade {name}: swept in {grade.key} "
+            f"({grade.name}), the grade it is bought in (AISC Manual Table 2-4, common "
+            "practice); give beam.material in the job to choose another grade")
     key = FAMILY_DEFAULTS.get(kind, "A36")
     mat = get_material(key)
     note = (f"--kind {kind} is {'wood' if wants_wood else 'metal'} stock but the job's material "
@@ -383,6 +419,7 @@ def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
     if wood:
         job, _ = material_for_kind(job, "lumber")
     cands, skipped, seen = [], [], set()
+    regraded: dict[str, list[str]] = {}
     for k in catalog.kinds():
         if (k.lower() in ("lumber", "lvl")) != wood:
             continue
@@ -391,14 +428,20 @@ def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
         except InputError as exc:
             skipped.append(f"{k}: {exc.problem.message}")
             continue
+        grade = usual_grade(job.material, k)
+        if grade is not None and got:
+            regraded.setdefault(grade.key, []).append(k)
         for cnd in got:
             if cnd[0] not in seen:
                 seen.add(cnd[0])
-                cands.append(cnd)
+                cands.append(cnd if grade is None else cnd[:2] + (grade,) + cnd[3:])
     if not cands:
         raise InputError("no catalog section fits (check --max-depth)", "--kind")
-    res = _sweep(job, cands, "all", with_capacity, confirm, None, _steel_shapes_note(job, cands),
-                 t0, skipped)
+    note = "; ".join(
+        [f"{', '.join(ks)} swept in {g}, the grade they are bought in (not the job's "
+         f"{job.material.key}; AISC Manual Table 2-4, common practice)"
+         for g, ks in regraded.items()] + [_steel_shapes_note(job, cands)])
+    res = _sweep(job, cands, "all", with_capacity, confirm, None, note.strip("; "), t0, skipped)
     return replace(res, method="every catalog kind in one sweep: " + res.method)
 
 
