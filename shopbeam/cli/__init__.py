@@ -229,7 +229,9 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
                    help="catalog kind to sweep, e.g. W, HSS-rect, C, lumber, LVL, or all (every "
                         "kind of the job's material family) (default: the job's own; see "
                         "shopbeam shapes --help for the list); wood on a metal job, or metal on "
-                        "a wood job, sweeps a stated default material of that family")
+                        "a wood job, sweeps a stated default material of that family, and a "
+                        "steel kind not made in the job's grade (bar on tube grade A500-C) "
+                        "sweeps the grade it is bought in (A36), saying so")
     s.add_argument("--max-depth", default=None, metavar="LENGTH",
                    help="deepest section allowed, e.g. \"6 in\"")
     s.add_argument("--stock", default=None, metavar="FILE",
