@@ -305,3 +305,12 @@ def test_capacity_of_a_parked_hoist_respects_the_lateral_force():
     assert lat.ratio <= 1.0 + 1e-6
     assert cap.factor <= 1.0 / 0.2775 * (1 + 2e-3)
     assert cap.governing.name in ("lateral trolley force", "wheel flange bending")
+
+
+def test_a_lifting_span_with_an_overhang_is_guessed_a_monorail_not_a_jib():
+    # a monorail often runs past its last hanger: the guess takes the stricter profile
+    # (L/450 for monorails against L/225 on twice the reach for jib booms, common practice)
+    over = monorail(criteria="").replace('at = "16 ft"\ntype = "roller"',
+                                         'at = "12 ft"\ntype = "roller"')
+    prof = profile_of(parse_job_text(over))
+    assert prof.name == "powered-monorail" and prof.guessed

@@ -4,7 +4,7 @@ trolley force on the runway.
 
 Profiles (`shopbeam.jobs.rules.LIFTING_PROFILES`) come from ``[criteria] lifting``. A job
 only tagged ``lifting`` gets the most demanding profile that fits: ``jib-boom`` when the
-member has a free end, else ``powered-monorail`` (25 % impact, 20 % lateral, 10 %
+member is a cantilever held at one place, else ``powered-monorail`` (25 % impact, 20 % lateral, 10 %
 longitudinal); a below-the-hook beam is never guessed (its design factor must be named).
 
 Wheel loads on the bottom flange of an I-shape (W, S, HP, M): the local flange stresses of

@@ -91,9 +91,14 @@ def has_free_end(supports, length: float) -> bool:
 
 def guessed_profile(supports, length: float) -> str:
     """The lifting profile tags = ["lifting"] picks when none is named, the most demanding
-    that fits: a jib boom when the member is held but an end is free, else a powered
-    monorail."""
-    return "jib-boom" if has_free_end(supports, length) else "powered-monorail"
+    that fits: a jib boom only when the member is a cantilever held at one place (a boom
+    at its mast); a span with an overhang may as well be a monorail run past its last hanger,
+    so it takes the powered monorail's stricter limits (L/450 against L/225, the same
+    impact and lateral force)."""
+    tol = 1e-9 * length
+    held = sorted(s.at for s in supports if s.takes_force)
+    one_place = bool(held) and held[-1] - held[0] <= tol
+    return "jib-boom" if has_free_end(supports, length) and one_place else "powered-monorail"
 
 
 def rack_arm(tags, supports, length: float) -> bool:
