@@ -314,3 +314,15 @@ def test_a_lifting_span_with_an_overhang_is_guessed_a_monorail_not_a_jib():
                                          'at = "12 ft"\ntype = "roller"')
     prof = profile_of(parse_job_text(over))
     assert prof.name == "powered-monorail" and prof.guessed
+
+
+def test_members_over_one_on_a_trolley_job_is_warned_and_not_rated():
+    # a trolley's wheels run on one beam's flange (CMAA 74 / AISC Design Guide 7 flange
+    # bending is per wheel on the flange it runs on, from memory): sharing them among members
+    # posted twice the wheel load the flange check allowed
+    text = monorail(criteria="").replace("self_weight = false", "self_weight = false\nmembers = 2")
+    job = parse_job_text(text)
+    assert [w for w in job.warnings if w.key == "beam.members"]
+    assert any(r.startswith("members = 2") for r in capacity(job).not_rated)
+    assert not any(r.startswith("members") for r in capacity(parse_job_text(
+        monorail(criteria=""))).not_rated)

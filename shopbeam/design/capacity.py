@@ -162,6 +162,13 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")
     out += _live_both_ways(job) + _live_on_spans_unpatterned(job)
     out += _lifting_spread(job)
+    if getattr(job, "members", 1) > 1 and (job.moving or job.lifting
+                                            or getattr(job.criteria, "lifting", "")):
+        out.append(f"members = {job.members} shares the loads among {job.members} beams, but a "
+                   "trolley runs on one beam's flange and a hoist hangs from one beam: its "
+                   "wheel and hook loads do not divide between members, and the per-wheel "
+                   "figure would be posted for all of them together. Rate each runway beam "
+                   "on its own (members = 1) with the trolley or hoist it carries")
     sec = getattr(st, "section", None) or job.section
     if job.length < STUBBY_LIMIT * (getattr(sec, "depth", 0.0) or 0.0):
         out.append(stubby_words(job.length, sec, job.units))

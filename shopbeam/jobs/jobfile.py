@@ -1668,6 +1668,11 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             r.error("members must be a whole number from 1 to 100 (identical members sharing "
                     "the loads)", "beam.members")
             members = 1
+        if members > 1 and (is_lifting(tags) or data.get("moving")):
+            r.warn(f"members = {members} divides the loads among identical beams, but a "
+                   "trolley runs on one beam and a hoist hangs from one: its wheel and hook "
+                   "loads are not shared, so the job is NOT RATED; rate each runway beam on its "
+                   "own (members = 1)", "beam.members")
         levels = beam.get("levels")
         if levels is not None and (not isinstance(levels, int) or isinstance(levels, bool)
                                    or not 1 <= levels <= 50):
