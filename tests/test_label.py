@@ -302,3 +302,38 @@ def test_a_wood_label_says_when_it_rests_on_the_default_bearing(bearing, said):
     flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
                                      width=200).replace("|", " ").split())
     assert ("Bearing taken as 1-1/2 in" in flat) == said
+
+
+@pytest.mark.parametrize("extra, words", [
+    ("restrained = true", "RATED ONLY WHILE the member is held against twist"),
+    ("braced = true", "RATED ONLY WHILE the top flange is braced all along"),
+    ('braces = ["4 ft", "8 ft"]', "RATED ONLY WITH the braces in place at 4 ft, 8 ft"),
+    ("", None)])
+def test_the_label_says_what_restraint_the_rating_rests_on(extra, words):
+    # a rating that counts on a deck, sheeting or braces holds only while they are there
+    text = ('schema = 1\ntitle = "shelf"\n[beam]\nlength = "12 ft"\nsection = "HSS6x4x1/4"\n'
+            f'material = "A500-C"\n{extra}\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-200 lbf/ft"\n')
+    cap = capacity(parse_job_text(text))
+    flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
+                                     width=200).replace("|", " ").split())
+    if words:
+        assert words in flat
+    else:
+        assert "RATED ONLY" not in flat
+
+
+def test_the_label_says_a_trolley_must_stay_within_its_travel():
+    # a rating that holds only while end stops keep the trolley off the rest of the member
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
+    a, b = job.moving[0].travel
+
+    def flat(j):
+        cap = capacity(j)
+        return " ".join(label.label_text(label.rating(cap, analyze(j).unchecked),
+                                         width=200).replace("|", " ").split())
+    full = replace(job, moving=(replace(job.moving[0], travel=(0.0, job.length)),))
+    short = replace(job, moving=(replace(job.moving[0], travel=(a, b - 0.5)),))
+    assert "END STOPS" not in flat(full)
+    assert "END STOPS must keep it there" in flat(short)

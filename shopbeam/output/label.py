@@ -222,6 +222,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                      "Impact NOT included (ANSI MH16.1: 25 % of one unit load more, from "
                      "memory): add it before posting.")
     notes.append("Rated for the loads placed as in the job; other placements are not rated.")
+    notes += _held_words(job)
     on_top = _dead_words(job)
     if on_top:
         notes.append(f"These loads are IN ADDITION TO {on_top}, which stay on.")
@@ -233,6 +234,31 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         notes.append("Bearing taken as 1-1/2 in at the supports and under point loads (none "
                      "given): each bearing must be at least that long.")
     return figs, notes
+
+
+def _held_words(job) -> list[str]:
+    """What the rating rests on besides the member: its restraint or bracing, and a wheel
+    set's travel narrower than the member (end stops)."""
+    sy = job.units
+    pos = lambda x: units.fmt(x, "length", sy)  # noqa: E731
+    out = []
+    if job.restrained:
+        out.append("RATED ONLY WHILE the member is held against twist and sideways movement "
+                   "all along (restrained = true).")
+    elif job.braced:
+        out.append("RATED ONLY WHILE the top flange is braced all along (braced = true).")
+    elif job.braces:
+        which = {"top": "top flange", "both": "both flanges"}.get(
+            getattr(job, "braces_flange", None) or "both", "both flanges")
+        out.append("RATED ONLY WITH the braces in place at "
+                   + ", ".join(pos(x) for x in job.braces) + f" ({which}).")
+    tol = 1e-6 * job.length
+    for ws in job.moving:
+        a, b = ws.travel
+        if a > tol or b < job.length - tol:
+            out.append(f"RATED ONLY WHILE the {ws.label or 'wheel set'} stays between "
+                       f"{pos(a)} and {pos(b)}: END STOPS must keep it there.")
+    return out
 
 
 def _dead_words(job) -> str:
