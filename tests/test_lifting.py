@@ -326,3 +326,18 @@ def test_members_over_one_on_a_trolley_job_is_warned_and_not_rated():
     assert any(r.startswith("members = 2") for r in capacity(job).not_rated)
     assert not any(r.startswith("members") for r in capacity(parse_job_text(
         monorail(criteria=""))).not_rated)
+
+
+@pytest.mark.parametrize("title, named, hinted", [
+    ("Spreader beam for the press frame", "", True),
+    ("Lifting beam, 2 picks", "", True),
+    ("Spreader beam for the press frame", 'lifting = "below-the-hook"\ncategory = "B"', False),
+    ("W12x26 monorail", "", False)])
+def test_a_below_the_hook_device_with_no_profile_named_is_not_rated(title, named, hinted):
+    # ASME BTH-1 (from memory) sets a design factor Nd of its own (2.0 category A, 3.0 B),
+    # which is never guessed: a spreader tagged only lifting was rated as a jib boom
+    text = monorail(criteria=named).replace('title = "W12x26 monorail"', f'title = "{title}"')
+    job = parse_job_text(text)
+    assert bool([w for w in job.warnings if w.key == "criteria.lifting"
+                 and "below-the-hook" in w.message]) == hinted
+    assert any("below-the-hook device" in r for r in capacity(job).not_rated) == hinted

@@ -172,6 +172,12 @@ def rating_gaps(job, st) -> tuple[str, ...]:
     sec = getattr(st, "section", None) or job.section
     if job.length < STUBBY_LIMIT * (getattr(sec, "depth", 0.0) or 0.0):
         out.append(stubby_words(job.length, sec, job.units))
+    bth = getattr(job, "bth_hint", "")
+    if bth:
+        out.append(f"it reads like a below-the-hook device ({bth}) but names no lifting "
+                   "profile: the guessed monorail or jib profile uses AISC Omega, not the "
+                   "ASME BTH-1 design factor. Write lifting = \"below-the-hook\" under "
+                   "[criteria], or the profile it is")
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "

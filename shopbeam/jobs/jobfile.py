@@ -133,6 +133,9 @@ class Job:
     # what makes an untagged job read like a lifting device (words, tags, wheels); a rating is
     # not posted on it until it is tagged lifting, or tagged not-lifting (see _lifting_hint)
     lifting_hint: str = ""
+    # words that name a below-the-hook device on a job tagged lifting with no profile named
+    # (its ASME BTH-1 design factor is never guessed; see _below_the_hook_hint)
+    bth_hint: str = ""
     # point loads placed on a fixed, pin or roller support: they go straight into it and do
     # not load the member (a tip load typed at the held end). Each entry is "loads[i] (label)
     # at the <kind> support at <x>"; a capacity or rating is not posted on them.
@@ -1282,6 +1285,30 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
                "a lifting device; remove the one that is wrong", "tags")
 
 
+_BTH_WORDS = re.compile(r"\b(spreaders?(?: bars?| beams?)?|lift(?:ing)? beams?|strongbacks?|"
+                        r"strong-backs?|below[- ]the[- ]hook|lifters?|sheet lifters?|"
+                        r"coil lifters?)\b", re.IGNORECASE)
+
+
+def _below_the_hook_hint(r: _Reader, title, notes, tags, criteria) -> str:
+    """A job tagged lifting, with no profile named, that reads like a below-the-hook device (a
+    spreader or lifting beam): the guessed profile (monorail or jib) uses AISC Omega, where
+    ASME BTH-1 sets a design factor Nd (2.0 or 3.0, from memory) that is never guessed.
+    Warned, and no rating is posted until the profile is named."""
+    if not is_lifting(tags) or criteria.lifting:
+        return ""
+    said = _words_found(_BTH_WORDS, title, notes, tags, [], frozenset())
+    if not said:
+        return ""
+    hint = "; ".join(said[:3])
+    r.warn(f"this reads like a below-the-hook device ({hint}) but names no lifting profile: "
+           "it would be checked as a monorail or jib (AISC Omega, trolley forces) where ASME "
+           "BTH-1 sets its own design factor, so no rating is posted. Write lifting = "
+           "\"below-the-hook\" under [criteria] (with its design category), or the profile "
+           "it is", "criteria.lifting")
+    return hint
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -1817,6 +1844,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
+    bth_hint = _below_the_hook_hint(r, title, notes, tags, criteria)
     _rack_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
@@ -1845,7 +1873,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         braces=braces, braces_flange=braces_flange,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
-        upward=tuple(upward), lifting_hint=lifting_hint, at_support=tuple(at_support),
+        upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
