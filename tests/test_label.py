@@ -337,3 +337,25 @@ def test_the_label_says_a_trolley_must_stay_within_its_travel():
     short = replace(job, moving=(replace(job.moving[0], travel=(a, b - 0.5)),))
     assert "END STOPS" not in flat(full)
     assert "END STOPS must keep it there" in flat(short)
+
+
+def test_a_linear_load_is_posted_as_its_total_with_its_end_intensities_and_patterns_on_any_span():
+    text = ('schema = 1\ntitle = "shelf"\n[beam]\nlength = "12 ft"\nsection = "HSS6x4x1/4"\n'
+            'material = "A500-C"\nself_weight = false\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "linear"\n'
+            'start = "0 ft"\nend = "12 ft"\nvalue = ["0 lbf/ft", "-100 lbf/ft"]\n'
+            '[[loads]]\ntype = "point"\nat = "6 ft"\nvalue = "-100 lbf"\n')
+
+    def flat(t):
+        cap = capacity(parse_job_text(t))
+        return cap, " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
+                                              width=200).replace("|", " ").split())
+    cap, words = flat(text)
+    assert "(total)" in words and "varying from 0 lbf/ft at 0 ft to" in words
+    assert "other placements are not rated" in words
+    two = text.replace('length = "12 ft"', 'length = "24 ft"').replace(
+        '[[loads]]\ntype = "linear"', '[[supports]]\nat = "24 ft"\ntype = "roller"\n'
+        '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\npatterned = true\n'
+        '[[loads]]\ntype = "linear"')
+    _, words = flat(two)
+    assert "rated on any or all of their spans" in words

@@ -161,8 +161,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                 figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
                                    f"spread over {pos(ld.start)} to {pos(ld.end)}", where))
             elif ld.kind == "linear":
-                figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
-                                   f"varying over {pos(ld.start)} to {pos(ld.end)}", where))
+                w1, w2 = (units.fmt(abs(w) * k, "line_load", sy) for w in (ld.w1, ld.w2))
+                figs.append(posted(f"max {name} (total)", ld.total_force * k, "force", sy,
+                                   f"varying from {w1} at {pos(ld.start)} to {w2} at "
+                                   f"{pos(ld.end)}", where))
             else:
                 figs.append(posted(f"max {name}", ld.value * k, "moment", sy, f"at {pos(ld.at)}",
                                    where))
@@ -221,7 +223,11 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                      "memory): add it before posting." if arm else
                      "Impact NOT included (ANSI MH16.1: 25 % of one unit load more, from "
                      "memory): add it before posting.")
-    notes.append("Rated for the loads placed as in the job; other placements are not rated.")
+    if any(ld.patterned for ld in live):
+        notes.append("Patterned loads are rated on any or all of their spans; other loads as "
+                     "placed in the job, and other placements are not rated.")
+    else:
+        notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     notes += _held_words(job)
     on_top = _dead_words(job)
     if on_top:
