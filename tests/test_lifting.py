@@ -341,3 +341,18 @@ def test_a_below_the_hook_device_with_no_profile_named_is_not_rated(title, named
     assert bool([w for w in job.warnings if w.key == "criteria.lifting"
                  and "below-the-hook" in w.message]) == hinted
     assert any("below-the-hook device" in r for r in capacity(job).not_rated) == hinted
+
+
+@pytest.mark.parametrize("edge, bad", [('"0.25 in"', False), ('"0.5 ft"', True)])
+def test_a_wheel_edge_past_the_web_is_refused(edge, bad):
+    # wheel_edge is the flange tip to the wheel contact; a W12x26 flange stands out
+    # (6.49 - 0.23) / 2 = 3.13 in from the web (AISC Shapes Database v15.0): "0.5 ft" (typed
+    # for 1/2 in) put the wheel past it and the flange check took lambda = 1
+    from shopbeam.errors import InputErrors
+    text = monorail(extra=f"wheel_edge = {edge}")
+    if bad:
+        with pytest.raises(InputErrors) as exc:
+            parse_job_text(text)
+        assert "moving[0].wheel_edge" in str(exc.value) and "past the web" in str(exc.value)
+    else:
+        assert parse_job_text(text).moving[0].wheel_edge == pytest.approx(0.25 * IN)

@@ -1852,6 +1852,16 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             r.warn(f"wheel_edge is where a trolley wheel bears on the bottom flange of an "
                    f"I-beam; section {section.designation!r} is {_a(section.shape)} "
                    f"({section.axis} axis), so it changes nothing", f"{ws.key}.wheel_edge")
+        elif ws.wheel_edge is not None and section is not None:
+            d = section.dims
+            out = (float(d.get("bf", 0.0)) - float(d.get("tw", 0.0))) / 2
+            if out > 0 and ws.wheel_edge >= out:
+                r.error(f"wheel_edge = {units.fmt(ws.wheel_edge, 'small_length', system)} puts "
+                        f"the wheel past the web: the flange of {section.designation!r} "
+                        f"stands out {units.fmt(out, 'small_length', system)} from it. It is "
+                        "the distance from the flange tip to the wheel's contact, usually under "
+                        "an inch (check the unit: \"0.25 in\", not \"0.25 ft\")",
+                        f"{ws.key}.wheel_edge")
     from shopbeam.jobs.limits import cost_problems  # bounded work: counts checked before solving
 
     for msg, key in cost_problems(supports, loads, moving, braces, length):
