@@ -319,3 +319,16 @@ def test_a_kind_not_made_in_the_jobs_grade_is_swept_in_its_own():
     assert res.lightest.designation != bar.designation
     # a tube kind keeps the job's tube grade
     assert size(job, "HSS-rect").material_note == ""
+
+
+def test_a_stock_line_with_no_grade_is_swept_in_the_grade_it_is_bought_in():
+    # AISC Manual Table 2-4 (common practice, from memory): a flat bar on a tube job's stock
+    # list is A36 stock, not the job's A500-C
+    from shopbeam.members.stock import parse_stock
+    text = simple_span('section = "HSS6x6x3/16"\nmaterial = "A500-C"\nbraced = true\n'
+                       'self_weight = false', 10, uniform_load(10, "-500 lbf/ft"))
+    stock = parse_stock("section,price_per_ft\nHSS6x6x3/16,12.0\nFB10x1/8,3.0\n", "csv")
+    res = size(parse_job_text(text), stock=stock)
+    mats = {r.designation.upper(): r.material.key for r in res.rows}
+    assert mats["FB10X1/8"] == "A36" and mats["HSS6X6X3/16"] == "A500-C"
+    assert not any(r.designation.upper() == "FB10X1/8" for r in res.passing)

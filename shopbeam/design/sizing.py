@@ -275,6 +275,17 @@ TUBE_KINDS = frozenset({"HSS", "HSS-rect", "HSS-round", "PIPE", "mech-tube", "me
 W_KINDS = frozenset({"W", "HP", "WT"})  # A992 is the grade of W shapes (and HP, WT)
 
 
+def _kind_of(section) -> str:
+    """The catalog kind a stock section stands for, as far as its grade goes."""
+    shape = getattr(section, "shape", "")
+    if shape == "pipe":
+        return "PIPE"
+    if shape in ("rect-tube", "round-tube"):
+        return "HSS"
+    name = getattr(section, "designation", "").upper()
+    return "W" if shape == "i-beam" and name.startswith(("W", "HP")) else "other"
+
+
 def usual_grade(material, kind: str):
     """The grade a steel sweep of `kind` uses in place of the job's, when the job's grade is
     not one that kind is made to (a tube grade on rolled shapes or bar, a rolled grade on
@@ -332,9 +343,14 @@ def _candidates(job, kind, max_depth, stock):
     out = []
     if stock is not None:
         for item in stock:
-            mat = get_material(item.material) if item.material else job.material
-            out.append((item.designation, item.section, mat or job.material, item.price_per_m,
-                        item.note))
+            mat = get_material(item.material) if item.material else None
+            note = item.note
+            if mat is None:  # no grade on the line: the job's, or the one this stock is made in
+                mat = usual_grade(job.material, _kind_of(item.section)) or job.material
+                if mat is not job.material:
+                    note = "; ".join(x for x in (note, f"in {mat.key}, the grade it is bought "
+                                                 f"in (the job's {job.material.key} is not)") if x)
+            out.append((item.designation, item.section, mat, item.price_per_m, note))
     else:
         for sec in catalog.list_sections(kind):
             out.append((sec.designation, sec, job.material, None, ""))
