@@ -208,7 +208,9 @@ def shop_unit(text: str) -> str:
         out.append(_word(m.group(0)))
         pos = m.end()
     out.append(text[pos:])
-    return "".join(out)
+    # a power written straight after its unit, as EN tables and mill certs do ("N/mm2",
+    # "kg/m3", "in4")
+    return re.sub(r"(?<=[A-Za-z])([234])(?![\d.])", r"^\1", "".join(out))
 
 
 @lru_cache(maxsize=512)

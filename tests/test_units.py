@@ -40,6 +40,8 @@ def test_shop_lengths(text, inches):
     ("-25 lbf/ft", "line_load", -25 * LBF / FT),
     ("-25 plf", "line_load", -25 * LBF / FT),
     ("-10 pli", "line_load", -10 * LBF / 0.0254),  # pound per linear inch (common practice)
+    ("355 N/mm2", "stress", 355e6),  # a power straight after its unit, as mill certs write it
+    ("7850 kg/m3", "density", 7850.0),
     ("150 lbf*ft", "moment", 150 * LBF * FT),
     ("125 psf", "area_load", 125 * LBF / FT**2),
     ("36 ksi", "stress", 36e3 * LBF / IN**2),
