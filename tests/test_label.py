@@ -254,6 +254,13 @@ value = "-2.5 kN"
     assert "kg" not in next(f for f in us.figures if f.label == "MAX POINT LOAD").value
 
 
+def _flat(cap, job=None) -> str:
+    """The label of a capacity result at 200 columns, as one line of words."""
+    job = job or cap.job
+    return " ".join(label.label_text(label.rating(cap, analyze(job).unchecked),
+                                     width=200).replace("|", " ").split())
+
+
 @pytest.mark.parametrize("dead, self_weight, words", [
     ('[[loads]]\ntype = "uniform"\nvalue = "-300 lbf/ft"\ncase = "dead"\n', "true",
      "IN ADDITION TO the dead load as entered (3600 lbf in all) and the member's own weight"),
@@ -267,8 +274,7 @@ def test_the_label_says_the_posted_load_comes_on_top_of_the_dead_loads(dead, sel
             'type = "pin"\n[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\n'
             'type = "uniform"\nvalue = "-500 lbf/ft"\n' + dead)
     cap = capacity(parse_job_text(text))
-    flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
-                                     width=200).replace("|", " ").split())
+    flat = _flat(cap)
     if words:
         assert words in flat
     else:
@@ -299,8 +305,7 @@ def test_a_wood_label_says_when_it_rests_on_the_default_bearing(bearing, said):
             '[[supports]]\nat = "6 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
             'value = "-100 lbf/ft"\n')
     cap = capacity(parse_job_text(text))
-    flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
-                                     width=200).replace("|", " ").split())
+    flat = _flat(cap)
     assert ("Bearing taken as 1-1/2 in" in flat) == said
 
 
@@ -316,8 +321,7 @@ def test_the_label_says_what_restraint_the_rating_rests_on(extra, words):
             '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
             'value = "-200 lbf/ft"\n')
     cap = capacity(parse_job_text(text))
-    flat = " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
-                                     width=200).replace("|", " ").split())
+    flat = _flat(cap)
     if words:
         assert words in flat
     else:
@@ -328,15 +332,10 @@ def test_the_label_says_a_trolley_must_stay_within_its_travel():
     # a rating that holds only while end stops keep the trolley off the rest of the member
     job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
     a, b = job.moving[0].travel
-
-    def flat(j):
-        cap = capacity(j)
-        return " ".join(label.label_text(label.rating(cap, analyze(j).unchecked),
-                                         width=200).replace("|", " ").split())
     full = replace(job, moving=(replace(job.moving[0], travel=(0.0, job.length)),))
     short = replace(job, moving=(replace(job.moving[0], travel=(a, b - 0.5)),))
-    assert "END STOPS" not in flat(full)
-    assert "END STOPS must keep it there" in flat(short)
+    assert "END STOPS" not in _flat(capacity(full), full)
+    assert "END STOPS must keep it there" in _flat(capacity(short), short)
 
 
 def test_a_linear_load_is_posted_as_its_total_with_its_end_intensities_and_patterns_on_any_span():
@@ -345,17 +344,12 @@ def test_a_linear_load_is_posted_as_its_total_with_its_end_intensities_and_patte
             '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "linear"\n'
             'start = "0 ft"\nend = "12 ft"\nvalue = ["0 lbf/ft", "-100 lbf/ft"]\n'
             '[[loads]]\ntype = "point"\nat = "6 ft"\nvalue = "-100 lbf"\n')
-
-    def flat(t):
-        cap = capacity(parse_job_text(t))
-        return cap, " ".join(label.label_text(label.rating(cap, analyze(cap.job).unchecked),
-                                              width=200).replace("|", " ").split())
-    cap, words = flat(text)
+    words = _flat(capacity(parse_job_text(text)))
     assert "(total)" in words and "varying from 0 lbf/ft at 0 ft to" in words
     assert "other placements are not rated" in words
     two = text.replace('length = "12 ft"', 'length = "24 ft"').replace(
         '[[loads]]\ntype = "linear"', '[[supports]]\nat = "24 ft"\ntype = "roller"\n'
         '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\npatterned = true\n'
         '[[loads]]\ntype = "linear"')
-    _, words = flat(two)
+    words = _flat(capacity(parse_job_text(two)))
     assert "rated on any or all of their spans" in words
