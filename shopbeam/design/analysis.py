@@ -53,6 +53,11 @@ class Result:
     def ok(self) -> bool:
         return all(c.ok for c in self.checks)
 
+    @property
+    def blocking(self) -> tuple[str, ...]:
+        """The names of the limit states not checked that withhold a rating, each once."""
+        return tuple(dict.fromkeys(u.name for u in self.unchecked if u.blocks_rating))
+
 
 def length_formatter(system: str):
     return lambda x: units.fmt(x, "length", system)
@@ -480,12 +485,14 @@ def span_top_limits(job: Job, st) -> list[tuple[float, float, float]]:
     return out
 
 
-def span_top_strength(fl, l1: float, moment, a: float, b: float) -> tuple[float, float]:
-    """(Mn / Omega with the top-flange Cb, that Cb) over a..b for the moment diagram given."""
+def span_top_strength(fl, l1: float, moment, a: float, b: float
+                      ) -> tuple[float, float, float]:
+    """(Mn / Omega with the top-flange Cb, that Cb, the largest |M|) over a..b for the moment
+    diagram given."""
     mmax = moment.extremes(a, b).abs_max
     q = [abs(float(moment(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
     cb = float(cb_factor(mmax, *q)) * TOP_FLANGE_CB
-    return min(fl.cap, cb * l1) / fl.omega, cb
+    return min(fl.cap, cb * l1) / fl.omega, cb, mmax
 
 
 def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
@@ -495,8 +502,7 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
     out = []
     fl = st.flexure
     for a, b, l1 in span_top_limits(job, st):
-        top, cb = span_top_strength(fl, l1, moment, a, b)
-        mmax = moment.extremes(a, b).abs_max
+        top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
         if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:
             continue
         f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
@@ -525,12 +531,12 @@ def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
     if not top_only(job):
         return []
     fl = st.flexure
-    stops = sorted({0.0, job.length, *support_braces(job, job.supports)})
+    held = set(support_braces(job, job.supports))
+    stops = sorted({0.0, job.length, *held})
     lengths = [(a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * job.length]
     wood = fl.ltb is not None and fl.ltb[0] == "NDS"
     if fl.ltb is not None and (fl.stress_s is None or wood):
         out = []
-        held = set(support_braces(job, job.supports))
         tol = 1e-9 * job.length
         for a, b in lengths:
             case = "any"
@@ -561,6 +567,22 @@ def top_words(job: Job) -> str:
     return "braced = true" if job.braced else "braces_flange = \"top\""
 
 
+def hogging(moment):
+    """The moment's extremes when it hogs by 1 % or more of its largest value, else None (a
+    hogging under that is no compression of the bottom flange worth a word)."""
+    ex = moment.extremes()
+    big = max(abs(ex.max), abs(ex.min))
+    return ex if big > 0 and ex.min < -0.01 * big else None
+
+
+def hogging_remedy(job: Job) -> str:
+    """What to write when the top-only bracing leaves the bottom flange free under hogging."""
+    return ("give the bottom flange's brace points with braces = [...] in place of braced = "
+            "true" if job.braced else "brace the bottom flange too (kickers) and say "
+            "braces_flange = \"both\"") + (", or write restrained = true if the member is "
+                                            "held against twist all along")
+
+
 def braces_note(job: Job, st, moment) -> list[str]:
     """Brace points of a member whose moment hogs, where the job does not say which flange
     they hold: taken as holding the section against twist (both flanges), which a joist seat
@@ -568,9 +590,8 @@ def braces_note(job: Job, st, moment) -> list[str]:
     if not job.braces or job.braced or job.restrained or \
             getattr(job, "braces_flange", None) is not None or st.flexure.ltb is None:
         return []
-    ex = moment.extremes()
-    big = max(abs(ex.max), abs(ex.min))
-    if big <= 0 or ex.min >= -0.01 * big:
+    ex = hogging(moment)
+    if ex is None:
         return []
     return [f"the brace points (beam.braces) are taken as holding the member against twist, "
             f"both flanges; the moment hogs here ({units.fmt(ex.min, 'moment', job.units)} at "
@@ -603,11 +624,8 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     compute that buckling). `restrained = true` (held against twist all along) says the
     bottom flange is held too."""
     limits = hogging_limits(job, st)
-    if not limits:
-        return []
-    ex = moment.extremes()
-    big = max(abs(ex.max), abs(ex.min))
-    if big <= 0 or ex.min >= -0.01 * big:  # hogging under 1 % of the largest moment: none
+    ex = hogging(moment) if limits else None
+    if ex is None:
         return []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     computed = any(allow > 0 for _a, _b, allow in limits)
@@ -624,12 +642,7 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
            "strength that buckling leaves (Cb 1.0); " if computed else
            "shopbeam does not compute that buckling for this member, so no rating is posted "
            "while the moment hogs; ")
-        + ("give the bottom flange's brace points with braces = [...] in place of braced = "
-           "true, or write restrained = true if the member is held against twist all along"
-           if job.braced else "brace the bottom flange too (kickers) and say braces_flange = "
-           "\"both\", or write restrained = true if the member is held against twist all "
-           "along"),
-        hogging_source(job, st), blocks_rating=False)]
+        + hogging_remedy(job), hogging_source(job, st), blocks_rating=False)]
 
 
 # A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does

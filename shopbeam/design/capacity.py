@@ -22,9 +22,9 @@ from dataclasses import dataclass, replace
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import Envelopes, Evaluation, evaluate, state_set
-from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits, hogging_source,
-                                       span_top_limits, span_top_strength, top_words,
-                                       unchecked_for)
+from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
+                                       hogging_remedy, hogging_source, span_top_limits,
+                                       span_top_strength, top_words, unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
@@ -331,14 +331,11 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
                       f"putting the bottom edge in compression over {f(a)} to {f(b)} where "
                       "nothing holds it, and shopbeam does not compute that buckling "
                       f"({hogging_source(job, st)})")
-            todo = ("Give the bottom flange's brace points with braces = [...] in place of "
-                    "braced = true" if job.braced else
-                    "Brace the bottom flange too (kickers) and say braces_flange = \"both\"")
+            todo = hogging_remedy(job)
             out.append(f"lateral-torsional buckling of the bottom flange under hogging moment "
                        f"not checked: {top_words(job)}, but {_at(k)} "
                        f"the moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. "
-                       f"{todo}, or write restrained = true if the member is held against "
-                       "twist all along")
+                       f"{todo[0].upper()}{todo[1:]}")
     return tuple(out)
 
 
@@ -385,8 +382,7 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     m = _all_on(ss, k)
     out = []
     for a, b, l1 in limits:
-        top, cb = span_top_strength(st.flexure, l1, m, a, b)
-        demand = m.extremes(a, b).abs_max
+        top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
         if ss.spans:  # patterned: the envelope over the whole pieces that cover a..b (a
             # brace inside a piece is no break of it), an upper bound over the patterns
             br = ss.fixed.moment.breaks

@@ -194,10 +194,9 @@ def _verdict(result) -> str:
     rest, names it there rather than only among the cautions."""
     if not result.ok:
         return "the member FAILS this check"
-    gaps = list(dict.fromkeys(u.name for u in result.unchecked if u.blocks_rating))
-    if not gaps:
+    if not result.blocking:
         return "all checks PASS"
-    return ("all checks PASS, but NOT CHECKED: " + "; ".join(gaps)
+    return ("all checks PASS, but NOT CHECKED: " + "; ".join(result.blocking)
             + " (see CAUTIONS; no rating rests on this)")
 
 

@@ -305,7 +305,7 @@ def verdict_line(result) -> str:
         gaps = [u for u in result.unchecked if u.blocks_rating]
         if gaps:
             but += (f" - BUT {len(gaps)} limit state(s) NOT CHECKED (no rating): "
-                    + "; ".join(dict.fromkeys(u.name for u in gaps)))
+                    + "; ".join(result.blocking))
         return (f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} "
                 f"(used {g.ratio:.0%}){but}")
     fails = [c.name for c in result.checks if not c.ok]
