@@ -888,14 +888,13 @@ def _wood_slenderness(job, fl: Flexure, segs, braced: bool) -> tuple[Unchecked, 
     worst = None
     for a, bb, free, _l1, _why in segs:
         le, le_words = lumber.effective_length(bb - a, d, wood_load_case(job, a, bb, free))
-        rb = math.sqrt(le * d / b**2)
+        rb = lumber.slenderness(le, b, d)
         if rb > 50 and (worst is None or rb > worst[0]):
             worst = (rb, a, bb, le, le_words)
     if worst is None:
         return ()
     rb, a, bb, le, le_words = worst
     ln = lambda x: fmt(x, "length", job.units)  # noqa: E731
-    # the longest unbraced length with RB <= 50 for this section, for the message
     return (Unchecked(
         "bending strength of a member with RB over 50",
         f"the unbraced length {ln(a)} to {ln(bb)} ({le_words} = "

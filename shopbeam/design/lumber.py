@@ -138,10 +138,15 @@ def effective_length(lu: float, d: float, case: str) -> tuple[float, str]:
     return 1.84 * lu, "le = 1.84 lu (any load, lu/d > 14.3)"
 
 
+def slenderness(le: float, b: float, d: float) -> float:
+    """RB = sqrt(le d / b^2), NDS 2018 eq. 3.3-5 (at most 50 by 3.3.3.7)."""
+    return math.sqrt(le * d / b**2)
+
+
 def stability_factor(fb_star: float, emin: float, b: float, d: float, le: float
                      ) -> tuple[float, float, float]:
     """(CL, RB, FbE) by NDS 2018 3.3.3 (eq. 3.3-5, 3.3-6)."""
-    rb = math.sqrt(le * d / b**2)
+    rb = slenderness(le, b, d)
     fbe = 1.20 * emin / rb**2
     a = fbe / fb_star
     c = (1 + a) / 1.9

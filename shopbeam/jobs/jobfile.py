@@ -1003,8 +1003,6 @@ def _thick_6063_t5(r: _Reader, material, section):
     """6063-T5 over 0.5 in thick has the lower minimums of its next thickness range (Fty 15
     ksi, Ftu 21 ksi for 0.501 to 1.000 in, Aluminum Design Manual 2015 Table A.3.4, from
     memory); the built-in figures (16 / 22 ksi) are for up to 0.5 in."""
-    from dataclasses import replace
-
     if material is None or section is None or getattr(material, "key", "") != "6063-T5":
         return material
     d = getattr(section, "dims", {}) or {}
@@ -1013,8 +1011,7 @@ def _thick_6063_t5(r: _Reader, material, section):
         t = min(float(d.get("b", 0) or d.get("d", 0) or 0), float(d.get("h", 0) or 1e9)) or t
     if t <= 0.5 * 0.0254 * (1 + 1e-9):
         return material
-    ksi = 6894.757293168361 * 1000
-    return replace(material, fy=15 * ksi, fu=21 * ksi,
+    return replace(material, fy=15 * units.KSI, fu=21 * units.KSI,
                    name=f"{material.name}, over 0.5 in thick",
                    source="Fty 15 ksi, Ftu 21 ksi (0.501 to 1.000 in thick); " + material.source)
 
@@ -1490,6 +1487,11 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "beam.section")
 
 
+# The wood service keys and the table each sits in (what NDS factors they set: `_wood_keys`)
+_WOOD_KEYS = (("wet_service", "beam"), ("temperature", "beam"), ("repetitive", "beam"),
+              ("duration", "criteria"))
+
+
 def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
     """The wood member's service keys ([beam] wet_service, temperature, repetitive;
     [criteria] duration); a wood material comes back with
@@ -1518,17 +1520,14 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
                 "duration of NDS Table 2.3.2)", "criteria.duration")
         dur = "ten-years"
     if material is None or getattr(material, "kind", "") != "lumber":
-        for k, where in (("wet_service", "beam"), ("temperature", "beam"),
-                         ("repetitive", "beam"),
-                         ("duration", "criteria")):
+        for k, where in _WOOD_KEYS:
             if k in (beam if where == "beam" else crit):
                 r.warn(f"{k} is for wood members (NDS); this material ignores it",
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
     if section is not None and section.shape != "rect-bar":
-        for k, where in (("wet_service", "beam"), ("temperature", "beam"),
-                         ("repetitive", "beam"), ("duration", "criteria")):
+        for k, where in _WOOD_KEYS:
             if k in (beam if where == "beam" else crit):
                 r.warn(f"{k} is not applied: the NDS factors need a rectangular wood section "
                        "(a lumber size, or shape = \"rect-bar\"), and this one is given by its "

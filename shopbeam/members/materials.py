@@ -330,17 +330,16 @@ _WOOD_TOP = {"fb": (6000.0, "Fb 900 psi for DF-L No.2, 2,400 psi for 24F glulam"
              "fc_perp": (2000.0, "Fc_perp 625 psi for DF-L No.2")}
 # (an e no wood has, a steel's typed under kind = "lumber", is the kind mismatch the reader
 # warns of and capacity does not rate: see jobs.jobfile.kind_mismatch)
-_PSI = 6894.757293168361
 
 
 def _plausible_wood(spec: Mapping, vals: dict, key: str) -> None:
     """Refuse a typed-in lumber value no wood product has (a unit slip)."""
     for k, (top, usual) in _WOOD_TOP.items():
-        if k in spec and k in vals and vals[k] > top * _PSI:
+        if k in spec and k in vals and vals[k] > top * PSI:
             typed = str(spec[k]).strip()
             num = typed.split()[0] if typed.split() else typed
             raise InputError(
-                f"{k} = {spec[k]!r} ({vals[k] / _PSI:,.0f} psi) is more than any lumber, glulam "
+                f"{k} = {spec[k]!r} ({vals[k] / PSI:,.0f} psi) is more than any lumber, glulam "
                 f"or composite lumber has (about {top:,.0f} psi at most; {usual}): check the "
                 f"unit, e.g. \"{num} psi\" rather than {typed!r}",
                 f"{key}.{k}")
