@@ -410,6 +410,12 @@ def unit_label(kind: str, system: str = "us") -> str:
     return DISPLAY[system][kind][1]
 
 
+def and_words(words) -> str:
+    """"a", "a and b", "a, b and c"."""
+    words = list(words)
+    return words[0] if len(words) < 2 else ", ".join(words[:-1]) + " and " + words[-1]
+
+
 def num(value: float, sig: int = 4) -> str:
     """A number to `sig` significant figures, without exponent for shop-sized values."""
     if value == 0 or not math.isfinite(value):

@@ -657,10 +657,6 @@ def _live_bearings(job) -> list[str]:
             if sp.kind in ("pin", "roller", "spring")]
 
 
-def _and(words: list[str]) -> str:
-    return words[0] if len(words) < 2 else ", ".join(words[:-1]) + " and " + words[-1]
-
-
 def _round_wall(job, clause: str) -> Unchecked:
     """A round tube's wall under a concentrated force is not checked: a point load or wheel
     set on the span, or a support reaction that carries live load, withholds the rating: a
@@ -675,7 +671,7 @@ def _round_wall(job, clause: str) -> Unchecked:
                      + (f"; {', '.join(points)} bear on the wall between the supports, and a "
                         "narrow strap, plate or hook can crush a thin wall first" if points
                         else "")
-                     + (f"; the live load comes down through {_and(seats)}, whose "
+                     + (f"; the live load comes down through {units.and_words(seats)}, whose "
                         "reactions bear on the wall: a seat or strap narrower than a full "
                         "saddle can crush a thin wall first" if seats else "")
                      + ("; so no rating is posted (bear the member and hang the load on full "
@@ -770,7 +766,7 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                              "angles are not checked locally"
                              + (f"; {', '.join(points)} bear on a single leg or stem, which "
                                 "can bend or yield locally first" if points else "")
-                             + (f"; the live load comes down through {_and(seats)}, "
+                             + (f"; the live load comes down through {units.and_words(seats)}, "
                                 f"whose reactions bear on the {part}"
                                 + (" (its tip, or the flange with the stem up)"
                                    if part == "stem" else "")

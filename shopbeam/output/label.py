@@ -282,8 +282,7 @@ def _dead_words(job) -> str:
         parts.append("the wheel set's own weight (its dead wheel loads)")
     if job.self_weight:
         parts.append("the member's own weight")
-    return ", ".join(parts[:-1]) + (" and " if len(parts) > 1 else "") + parts[-1] if parts \
-        else ""
+    return units.and_words(parts) if parts else ""
 
 
 def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
