@@ -34,8 +34,8 @@ from functools import lru_cache
 import numpy as np
 
 from shopbeam import units
-from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_points, checks_for,
-                                    impact_of, profile_of)
+from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_points, cb_factor,
+                                    checks_for, impact_of, profile_of)
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
@@ -606,7 +606,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
     matter (braced, short, or yielding governs). The governing length's pattern is solved and
     checked for the words and fields of the check.
     """
-    from shopbeam.design.checks import BASIS_WORDS, bending_check, cb_factor, provenance
+    from shopbeam.design.checks import BASIS_WORDS, bending_check, provenance
 
     env = Envelopes(ss, k)
     fmt = _fmt_for(job)
@@ -618,15 +618,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
             wanted.append(p)
 
     want(env.abs_extreme("shear").pattern)
-    worst_d, pat_d = -1.0, ()
-    for a, b, _ in ss.segs:
-        e = env.abs_extreme("deflection", a, b)
-        span = [x for x in deflection_spans(job, ss, st) if abs(x[0] - a) <= 1e-9 * L]
-        lim = span[0][1] if span else 1.0
-        r = abs(e.value) / lim if lim > 0 else math.inf
-        if r > worst_d:
-            worst_d, pat_d = r, e.pattern
-    want(pat_d)
+    want(_envelope_deflection(job, ss, st, env)[1])
     live_n = getattr(st, "live_ratio", None)
     if live_n:  # deflection under the live loads alone (floors): its own worst pattern
         e = env.env["deflection"]
@@ -645,22 +637,7 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
                     top, pat_l = ratio, e.pattern(int(r_[i]), upper)
         want(pat_l)
     fl = st.flexure
-    segs = []
-    for idx, (a, b, free, l1, why) in enumerate(st.ltb_segments):
-        e = env.abs_extreme("moment", a, b)
-        mmax = abs(e.value)
-        if l1 == math.inf or free:
-            cb = 1.0
-        else:
-            cb = cb_factor(mmax, *(env.abs_value("moment", a + f * (b - a))
-                                   for f in (0.25, 0.5, 0.75)))
-        if cb * l1 < fl.cap:
-            mn, text = cb * l1, f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
-        else:
-            mn, text = fl.cap, fl.cap_text
-        allow = mn / fl.omega
-        segs.append((mmax / allow if allow > 0 else math.inf, idx, e, cb, allow, text))
-    r_b, idx, e_b, cb, allow, text = max(segs, key=lambda t: t[0])
+    r_b, idx, e_b, cb, allow, text = _envelope_bending(env, st)
     best: dict[str, tuple] = {}
     done: dict[tuple, Solution] = {}
 
@@ -675,25 +652,15 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
             _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
     # local checks (concentrated forces at supports and point loads): each support's largest
     # upward and downward reaction, and every patterned point load on at once
-    from shopbeam.design import local as _local
-
     # (a local check reads only the reactions and the point loads, so one state with every
     # support at its largest upward reaction and one at its largest downward reaction, all
     # patterned point loads on, cover every pattern without solving one per support)
-    sec = getattr(st, "section", None) or job.section
-    reactions = env.reactions()
     allon = tuple(range(len(ss.segs)))
     base_sol = get(allon)
-    # web sidesway buckling reads the moment at the force: the largest over every pattern
-    moments = lambda x: env.values("moment", x)  # noqa: E731
-    for c in _local.local_checks(job, base_sol, sec, moments):
-        _keep(best, c, allon, None, describe_pattern(ss, allon, fmt), base_sol)
-    for key, which in (("max_up", "upward"), ("max_down", "downward")):
-        fake = replace(base_sol, reactions=tuple(
-            replace(r, force=e[key]) for r, e in zip(base_sol.reactions, reactions)))
-        for c in _local.local_checks(job, fake, sec, moments):
-            _keep(best, c, allon, None, f"each support at its largest {which} reaction over "
-                  "all patterns (see the reaction envelope)", base_sol)
+    for which, c in _envelope_local(job, ss, st, env, base_sol):
+        _keep(best, c, allon, None, describe_pattern(ss, allon, fmt) if which is None else
+              f"each support at its largest {which} reaction over all patterns (see the "
+              "reaction envelope)", base_sol)
     # bending: the governing length's pattern, checked on that length alone for the check's
     # fields, with the envelope's demand, Cb and limit
     p = e_b.pattern
@@ -719,6 +686,114 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
                       "state": describe_pattern(ss, e.pattern, fmt)})
     best["deflection"] = (replace(c, extra={**c.extra, "spans": spans}),) + best["deflection"][1:]
     return best, len(done), env
+
+
+def _envelope_bending(env: Envelopes, st) -> tuple:
+    """(ratio, index, extreme, Cb, allowable, words) of the unbraced length whose bending
+    ratio over every pattern is largest: its largest moment from the envelope, Cb (AISC
+    360-16 F1-1) with Mmax, MA, MB, MC each the largest over every pattern."""
+    from shopbeam.design.checks import cb_factor
+
+    fl = st.flexure
+    segs = []
+    for idx, (a, b, free, l1, why) in enumerate(st.ltb_segments):
+        e = env.abs_extreme("moment", a, b)
+        mmax = abs(e.value)
+        if l1 == math.inf or free:
+            cb = 1.0
+        else:
+            cb = cb_factor(mmax, *(env.abs_value("moment", a + f * (b - a))
+                                   for f in (0.25, 0.5, 0.75)))
+        if cb * l1 < fl.cap:
+            mn, text = cb * l1, f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
+        else:
+            mn, text = fl.cap, fl.cap_text
+        allow = mn / fl.omega
+        segs.append((mmax / allow if allow > 0 else math.inf, idx, e, cb, allow, text))
+    return max(segs, key=lambda t: t[0])
+
+
+def _envelope_deflection(job, ss: "StateSet", st, env: Envelopes) -> tuple:
+    """(ratio, pattern) of the span or overhang whose deflection over every pattern is the
+    largest part of its limit (the ratio as `Check.ratio` takes it)."""
+    L = ss.beam.length
+    worst_d, pat_d = -1.0, ()
+    for a, b, _ in ss.segs:
+        e = env.abs_extreme("deflection", a, b)
+        span = [x for x in deflection_spans(job, ss, st) if abs(x[0] - a) <= 1e-9 * L]
+        lim = span[0][1] if span else 1.0
+        r = abs(e.value) / lim if lim > 0 else (math.inf if e.value else 0.0)
+        if r > worst_d:
+            worst_d, pat_d = r, e.pattern
+    return worst_d, pat_d
+
+
+def _envelope_local(job, ss: "StateSet", st, env: Envelopes, base_sol: Solution):
+    """(None or "upward" / "downward", check) of the local checks over every pattern: the
+    state with every pattern on, then every support at its largest upward and at its largest
+    downward reaction (a local check reads only the reactions and the point loads; web
+    sidesway buckling reads the moment at the force, the largest over every pattern)."""
+    from shopbeam.design import local as _local
+
+    sec = getattr(st, "section", None) or job.section
+    reactions = env.reactions()
+    moments = lambda x: env.values("moment", x)  # noqa: E731
+    for c in _local.local_checks(job, base_sol, sec, moments):
+        yield None, c
+    for key, which in (("max_up", "upward"), ("max_down", "downward")):
+        fake = replace(base_sol, reactions=tuple(
+            replace(r, force=e[key]) for r, e in zip(base_sol.reactions, reactions)))
+        for c in _local.local_checks(job, fake, sec, moments):
+            yield which, c
+
+
+def envelope_ratio_applies(job, ss: "StateSet", st) -> bool:
+    """Whether `envelope_ratio` covers every check of this job: patterned loads (no moving
+    ones), a member whose checks are bending (moment, not stress), shear, deflection and the
+    local checks (no wood, tee or angle rules, no lifting checks, no live-load deflection)."""
+    fl = st.flexure
+    return bool(ss.parts.patterned and not ss.parts.moving and not st.live_ratio
+                and fl.wood is None and not fl.stress_s and not getattr(fl, "special", False)
+                and not (job.lifting or getattr(job.criteria, "lifting", "")))
+
+
+def envelope_ratio(job, ss: "StateSet", k: float, st) -> float:
+    """The largest ratio of every check over every pattern at the factor k, read from the
+    exact envelopes with no state's extremes searched (`envelope_ratio_applies` says where
+    it covers every check). What `evaluate(...).checks` gives, to rounding: bending and the
+    local checks are the very numbers `pattern_checks` takes (its bending demand is the
+    envelope's, and the local checks of the states it solves are worked out here on the
+    same states, which cost a sum each); shear and deflection are the envelopes' extremes,
+    which the governing pattern's own solution reaches to rounding (1e-12 of the value).
+    The capacity search reads this at every trial factor and evaluates in full only at the
+    answer."""
+    from shopbeam.design import local as _local
+
+    env = Envelopes(ss, k)
+    ratios = [_envelope_bending(env, st)[0]]
+    sh = st.shear
+    v = abs(env.abs_extreme("shear").value)
+    allow_v = sh.vn / sh.omega
+    ratios.append(_ratio(v / sh.area, allow_v / sh.area) if sh.stress else _ratio(v, allow_v))
+    worst_d, pat_d = _envelope_deflection(job, ss, st, env)
+    ratios.append(worst_d)
+    sec = getattr(st, "section", None) or job.section
+    states = {}
+    for p in (env.abs_extreme("shear").pattern, pat_d):
+        if p not in states:  # the solved states' own local checks, as `checks_for` has them
+            states[p] = ss.state(k, p)
+            ratios += [c.ratio for c in _local.local_checks(job, states[p], sec)]
+    allon = tuple(range(len(ss.segs)))
+    base = states.get(allon) or ss.state(k, allon)
+    ratios += [c.ratio for _, c in _envelope_local(job, ss, st, env, base)]
+    return max(ratios)
+
+
+def _ratio(demand: float, limit: float) -> float:
+    """`Check.ratio` of a demand and its limit."""
+    if limit <= 0:
+        return math.inf if demand > 0 else 0.0
+    return demand / limit
 
 
 def deflection_spans(job, ss: "StateSet", st) -> list[tuple[float, float, str]]:
