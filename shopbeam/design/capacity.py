@@ -21,7 +21,8 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import Envelopes, Evaluation, evaluate, state_set
+from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
+                                     envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
                                        hogging_remedy, hogging_source, span_top_limits,
                                        span_top_strength, top_words, unchecked_for)
@@ -427,8 +428,14 @@ def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
     return tuple(out)
 
 
-def _capacity(job, section, ss, st) -> CapacityResult:
+def _capacity(job, section, ss, st, fast: bool = True) -> CapacityResult:
+    """The search of `capacity`. Where `loading.envelope_ratio` covers every check and
+    `fast`, each trial factor reads the governing ratio from it (the same number as a full
+    evaluation, without building the checks) and only the answer is evaluated in full;
+    `fast=False` evaluates every trial in full (the tests compare)."""
     memo: dict[float, Evaluation] = {}
+    quick: dict[float, float] | None = {} if fast and envelope_ratio_applies(job, ss, st) \
+        else None
 
     def ev(k):  # the root search ends on a factor it has already evaluated: not again
         if k not in memo:
@@ -436,7 +443,11 @@ def _capacity(job, section, ss, st) -> CapacityResult:
         return memo[k]
 
     def g(k):
-        return max(c.ratio for c in ev(k).checks)
+        if quick is None:
+            return max(c.ratio for c in ev(k).checks)
+        if k not in quick:
+            quick[k] = envelope_ratio(job, ss, k, st)
+        return quick[k]
 
     if not _has_live(ss):
         e = ev(1.0)
@@ -447,20 +458,17 @@ def _capacity(job, section, ss, st) -> CapacityResult:
         return CapacityResult(job, math.inf, e, "no live loads",
                               "the job has no live loads to scale: enter the load to rate "
                               "as a live load")
-    e0 = ev(0.0)
-    g0 = max(c.ratio for c in e0.checks)
+    g0 = g(0.0)
     if g0 > 1:
-        return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
+        return CapacityResult(job, 0.0, ev(0.0), "fixed loads fail alone",
                               "the member fails under its own weight and the dead loads alone")
     if _fixed_is_zero(ss):
-        e1 = ev(1.0)
-        g1 = max(c.ratio for c in e1.checks)
+        g1 = g(1.0)
         if g1 <= NO_DEMAND:
-            return CapacityResult(job, math.inf, e1, "no demand",
+            return CapacityResult(job, math.inf, ev(1.0), "no demand",
                                   "the live loads cause no demand on any check")
         k = 1.0 / g1
-        e = ev(k)
-        gk = max(c.ratio for c in e.checks)
+        gk = g(k)
         if gk <= 1.0 + 1e-9:
             # rounding can leave the ratio a hair above 1: step down to the passing side
             k, e = _passing(ev, k)
@@ -517,16 +525,17 @@ def _root(job, ev, g, k_lo, h_lo, k_hi, h_hi, why: str = "") -> CapacityResult:
     a, fa, b, fb = brent(lambda k: g(k) - 1.0, k_lo, k_hi, h_lo, h_hi)
     k, e = _passing(ev, a if fa <= 0 else b)
     return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1"
-                          + why, _step_note(e, ev(b if fa <= 0 else a)))
+                          + why, _step_note(e, lambda: ev(b if fa <= 0 else a)))
 
 
-def _step_note(at_k: Evaluation, past: Evaluation) -> str:
+def _step_note(at_k: Evaluation, past) -> str:
     """Words for a factor that stops where a limit drops as the load grows (no ratio reaches
     1 at k, and just past k one is over it): web sidesway buckling's Cr halves once the
-    moment at the force reaches My / 1.5 (AISC 360-16 J10.4). Empty otherwise."""
+    moment at the force reaches My / 1.5 (AISC 360-16 J10.4). Empty otherwise. `past()`
+    evaluates just past k (only when asked)."""
     if max(c.ratio for c in at_k.checks) >= 1.0 - 1e-6:
         return ""
-    over = [c for c in past.checks if c.ratio > 1.0]
+    over = [c for c in past().checks if c.ratio > 1.0]
     if not over:
         return ""
     c = max(over, key=lambda c: c.ratio)

@@ -715,14 +715,11 @@ def _envelope_bending(env: Envelopes, st) -> tuple:
 
 def _envelope_deflection(job, ss: "StateSet", st, env: Envelopes) -> tuple:
     """(ratio, pattern) of the span or overhang whose deflection over every pattern is the
-    largest part of its limit (the ratio as `Check.ratio` takes it)."""
-    L = ss.beam.length
+    largest part of its limit (the first span when a limit is zero)."""
     worst_d, pat_d = -1.0, ()
-    for a, b, _ in ss.segs:
+    for (a, b, _), (_, lim, _) in zip(ss.segs, deflection_spans(job, ss, st)):
         e = env.abs_extreme("deflection", a, b)
-        span = [x for x in deflection_spans(job, ss, st) if abs(x[0] - a) <= 1e-9 * L]
-        lim = span[0][1] if span else 1.0
-        r = abs(e.value) / lim if lim > 0 else (math.inf if e.value else 0.0)
+        r = abs(e.value) / lim if lim > 0 else math.inf
         if r > worst_d:
             worst_d, pat_d = r, e.pattern
     return worst_d, pat_d
@@ -750,43 +747,71 @@ def _envelope_local(job, ss: "StateSet", st, env: Envelopes, base_sol: Solution)
 def envelope_ratio_applies(job, ss: "StateSet", st) -> bool:
     """Whether `envelope_ratio` covers every check of this job: patterned loads (no moving
     ones), a member whose checks are bending (moment, not stress), shear, deflection and the
-    local checks (no wood, tee or angle rules, no lifting checks, no live-load deflection)."""
+    local checks (no wood, tee or angle rules, no lifting checks, no live-load deflection),
+    every deflection limit above zero."""
     fl = st.flexure
     return bool(ss.parts.patterned and not ss.parts.moving and not st.live_ratio
                 and fl.wood is None and not fl.stress_s and not getattr(fl, "special", False)
-                and not (job.lifting or getattr(job.criteria, "lifting", "")))
+                and not (job.lifting or getattr(job.criteria, "lifting", ""))
+                and all(lim > 0 for _, lim, _ in deflection_spans(job, ss, st)))
+
+
+# a state's value is below the envelope's by rounding at most: far less than this part of
+# the envelope's largest size, which `envelope_ratio` adds to each bound it prunes by
+BOUND_SLACK = 1e-9
 
 
 def envelope_ratio(job, ss: "StateSet", k: float, st) -> float:
-    """The largest ratio of every check over every pattern at the factor k, read from the
-    exact envelopes with no state's extremes searched (`envelope_ratio_applies` says where
-    it covers every check). What `evaluate(...).checks` gives, to rounding: bending and the
-    local checks are the very numbers `pattern_checks` takes (its bending demand is the
-    envelope's, and the local checks of the states it solves are worked out here on the
-    same states, which cost a sum each); shear and deflection are the envelopes' extremes,
-    which the governing pattern's own solution reaches to rounding (1e-12 of the value).
-    The capacity search reads this at every trial factor and evaluates in full only at the
-    answer."""
+    """The governing ratio of `evaluate(job, k, ...)` (the largest of its checks' ratios), the
+    same number, without building the checks. Bending and the local checks are worked out
+    as `pattern_checks` works them out (bending's demand is the envelope's; the local
+    checks read the sum of the unit solutions, no extremes). Shear and deflection are the
+    extremes of the solved pattern states, as `checks_for` takes them, but only where they
+    can govern: the envelope bounds each state's shear and each state's deflection in each
+    span from above, so a state or span whose bound is below the largest ratio already
+    found is not searched (most are not: its extremes are the costly part). The capacity
+    search reads this at every trial factor and evaluates in full only at the answer
+    (`envelope_ratio_applies` says where it covers every check)."""
     from shopbeam.design import local as _local
 
     env = Envelopes(ss, k)
-    ratios = [_envelope_bending(env, st)[0]]
-    sh = st.shear
-    v = abs(env.abs_extreme("shear").value)
-    allow_v = sh.vn / sh.omega
-    ratios.append(_ratio(v / sh.area, allow_v / sh.area) if sh.stress else _ratio(v, allow_v))
-    worst_d, pat_d = _envelope_deflection(job, ss, st, env)
-    ratios.append(worst_d)
     sec = getattr(st, "section", None) or job.section
-    states = {}
-    for p in (env.abs_extreme("shear").pattern, pat_d):
+    _, _, e_b, _, allow, _ = _envelope_bending(env, st)
+    best = _ratio(abs(e_b.value), allow)  # as the bending check's own ratio
+    shear_p = env.abs_extreme("shear").pattern
+    states: dict[tuple, Solution] = {}
+    for p in (shear_p, _envelope_deflection(job, ss, st, env)[1]):
         if p not in states:  # the solved states' own local checks, as `checks_for` has them
             states[p] = ss.state(k, p)
-            ratios += [c.ratio for c in _local.local_checks(job, states[p], sec)]
+            best = max([best] + [c.ratio for c in _local.local_checks(job, states[p], sec)])
     allon = tuple(range(len(ss.segs)))
     base = states.get(allon) or ss.state(k, allon)
-    ratios += [c.ratio for _, c in _envelope_local(job, ss, st, env, base)]
-    return max(ratios)
+    best = max([best] + [c.ratio for _, c in _envelope_local(job, ss, st, env, base)])
+    # shear and deflection of each solved state, largest bound first, while one can govern
+    sh = st.shear
+    allow_v = sh.vn / sh.omega
+    v_top = abs(env.abs_extreme("shear").value)
+    bounds = []
+    for p, sol in states.items():
+        bounds.append((v_top * (1 + BOUND_SLACK) / allow_v if allow_v > 0 else math.inf,
+                       "shear", sol, None))
+    d_top = max(abs(env.abs_extreme("deflection").value), 1e-300)
+    for (a, b, _), (_, lim, _) in zip(ss.segs, deflection_spans(job, ss, st)):
+        bound = (abs(env.abs_extreme("deflection", a, b).value) + BOUND_SLACK * d_top) / lim
+        for sol in states.values():
+            bounds.append((bound, "deflection", sol, (a, b, lim)))
+    bounds.sort(key=lambda t: -t[0])
+    for bound, what, sol, span in bounds:
+        if bound < best:
+            break
+        if what == "shear":
+            v = sol.shear.extremes().abs_max
+            r = _ratio(v / sh.area, allow_v / sh.area) if sh.stress else _ratio(v, allow_v)
+        else:
+            a, b, lim = span
+            r = sol.deflection.extremes(a, b).abs_max / lim
+        best = max(best, r)
+    return best
 
 
 def _ratio(demand: float, limit: float) -> float:

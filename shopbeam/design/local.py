@@ -56,6 +56,7 @@ from __future__ import annotations
 
 import math
 from dataclasses import dataclass
+from functools import lru_cache
 
 import numpy as np
 
@@ -189,10 +190,17 @@ def face_of(job, key: str) -> str:
     return "top"
 
 
+@lru_cache(maxsize=4096)
+def _where(x: float, negative: bool, system: str) -> str:
+    """A position in words (`units.fmt`), kept: the local checks of every load state name
+    the same supports and loads (`negative` keeps -0.0 apart from 0.0)."""
+    return units.fmt(x, "length", system)
+
+
 def forces_of(job, sol) -> list[Force]:
     """Every concentrated force of one solved state: reactions (on the bottom face; not at a
     fixed end, which is a connection) and point loads summed where they act together."""
-    fmt = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+    fmt = lambda x: _where(x, math.copysign(1.0, x) < 0, job.units)  # noqa: E731
     out = []
     for n, r in enumerate(sol.reactions):
         # a fixed end is a connection (welded or bolted into a wall or column), not a bearing
@@ -244,10 +252,27 @@ def end_reaction_default(f: Force, end: float, d: float) -> bool:
     return f.bearing is None and f.support and end <= d
 
 
+_LIMITS: dict[tuple, tuple] = {}  # limit_states by (section, material, where, how)
+
+
 def limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
     """(name, Rn, equation, Omega, clause, params) of every local limit state that applies to
     force f on this section (the direction decides: crippling only where the force bears on
-    the flange, flange local bending only where it pulls)."""
+    the flange, flange local bending only where it pulls). They read the force's place,
+    bearing, kind and direction, never its size, so they are kept for the next load state
+    (a capacity search asks the same supports at every factor)."""
+    key = (id(sec), id(mat), length, f.at, f.bearing, f.support, f.moving, f.pulls, lifting)
+    got = _LIMITS.get(key)
+    if got is not None and got[0] is sec and got[1] is mat:
+        return got[2]
+    out = _limit_states(sec, mat, length, f, lifting)
+    if len(_LIMITS) > 4096:
+        _LIMITS.clear()
+    _LIMITS[key] = (sec, mat, out)  # the objects kept too: an id is not reused while held
+    return out
+
+
+def _limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
     kind = applies(sec)
     if not kind or getattr(mat, "kind", "") not in ("steel", "stainless"):
         return []
