@@ -998,24 +998,39 @@ def deflection_limit(a: float, b: float, kind: str, ratio: float | None,
 
 
 def deflection_limits(job, sol: Solution, st: Strengths | None = None,
-                      ratio: float | None = None) -> list[dict]:
+                      ratio: float | None = None, bounds=None) -> list[dict]:
     """Each span and overhang with its largest deflection and its limit (L/`ratio` when
-    given, else the job's rule)."""
+    given, else the job's rule). `bounds`: an upper bound of each one's deflection over its
+    limit (every limit above zero); then only the spans that can hold the largest ratio are
+    worked out, largest bound first, and the list holds those (in order)."""
     st = st or strengths(job, beam=sol.beam)
-    out = []
-    for a, b, kind in segments(sol.beam):
-        length = b - a
-        judged = judged_length(a, b, kind)
-        if ratio is None and st.defl_abs is not None:
-            limit, rule = st.defl_abs, st.defl_words
-        else:
-            n = ratio or st.defl_ratio
-            limit = deflection_limit(a, b, kind, n, None)
-            rule = f"{'2 x ' if judged != length else ''}{kind} length / {n:g}"
-        ex = sol.deflection.extremes(a, b)
-        out.append({"start": a, "end": b, "kind": kind, "demand": ex.abs_max, "limit": limit,
-                    "at": ex.abs_max_at, "rule": rule})
-    return out
+    segs = segments(sol.beam)
+    if bounds is not None and len(bounds) == len(segs):
+        top, keep = -1.0, []
+        for i in sorted(range(len(segs)), key=lambda i: -bounds[i]):
+            if bounds[i] < top:
+                break
+            got = _span_deflection(st, sol, *segs[i], ratio)
+            top = max(top, got["demand"] / got["limit"])
+            keep.append((i, got))
+        return [got for _, got in sorted(keep, key=lambda t: t[0])]
+    return [_span_deflection(st, sol, a, b, kind, ratio) for a, b, kind in segs]
+
+
+def _span_deflection(st: Strengths, sol: Solution, a: float, b: float, kind: str,
+                     ratio: float | None) -> dict:
+    """One span's or overhang's entry of `deflection_limits`."""
+    length = b - a
+    judged = judged_length(a, b, kind)
+    if ratio is None and st.defl_abs is not None:
+        limit, rule = st.defl_abs, st.defl_words
+    else:
+        n = ratio or st.defl_ratio
+        limit = deflection_limit(a, b, kind, n, None)
+        rule = f"{'2 x ' if judged != length else ''}{kind} length / {n:g}"
+    ex = sol.deflection.extremes(a, b)
+    return {"start": a, "end": b, "kind": kind, "demand": ex.abs_max, "limit": limit,
+            "at": ex.abs_max_at, "rule": rule}
 
 
 def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Check:
@@ -1080,10 +1095,11 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
 
 
 def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
-               bending: bool = True) -> list[Check]:
+               bending: bool = True, defl_bounds=None) -> list[Check]:
     """The three contract checks of one solved load state, then the member's others.
     `bending=False` leaves the bending check out of the list (a caller that takes it from
-    elsewhere); it is still worked out where another check reads its limit (lifting)."""
+    elsewhere); it is still worked out where another check reads its limit (lifting).
+    `defl_bounds`: `deflection_limits`' bounds (the caller then replaces the span list)."""
     fl, sh = st.flexure, st.shear
     basis = BASIS_WORDS[st.basis]
     lifting_job = bool(job.lifting or getattr(job.criteria, "lifting", ""))
@@ -1116,7 +1132,7 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
                  f"permanent (duration = \"permanent\"; NDS 2018 3.5.2, {service})" if lasting else
                  f"; long-term: Kcr {kcr:g} x the dead-load deflection + the live-load "
                  f"deflection (NDS 2018 3.5.2, {service})")
-    spans = deflection_limits(job, dsol, st)
+    spans = deflection_limits(job, dsol, st, bounds=defl_bounds if dsol is sol else None)
     w = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
     defl = Check("deflection", w["demand"], w["limit"], "m",
                  f"largest deflection in each span against {st.defl_words} "

@@ -646,9 +646,11 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
             done[p] = ss.state(k, p)
         return done[p]
 
+    bounds = _deflection_bounds(job, ss, st, env)  # the spans list is the envelope's below
     for p in wanted:
         sol = get(p)
-        for c in checks_for(job, sol, st, bending=False):  # shear, deflection, local checks
+        for c in checks_for(job, sol, st, bending=False, defl_bounds=bounds):  # shear,
+            # deflection (its largest span: only those the envelope lets hold it), local checks
             _keep(best, c, p, None, describe_pattern(ss, p, fmt), sol)
     # local checks (concentrated forces at supports and point loads): each support's largest
     # upward and downward reaction, and every patterned point load on at once
@@ -795,9 +797,8 @@ def envelope_ratio(job, ss: "StateSet", k: float, st) -> float:
     for p, sol in states.items():
         bounds.append((v_top * (1 + BOUND_SLACK) / allow_v if allow_v > 0 else math.inf,
                        "shear", sol, None))
-    d_top = max(abs(env.abs_extreme("deflection").value), 1e-300)
-    for (a, b, _), (_, lim, _) in zip(ss.segs, deflection_spans(job, ss, st)):
-        bound = (abs(env.abs_extreme("deflection", a, b).value) + BOUND_SLACK * d_top) / lim
+    for (a, b, _), (_, lim, _), bound in zip(ss.segs, deflection_spans(job, ss, st),
+                                             _deflection_bounds(job, ss, st, env)):
         for sol in states.values():
             bounds.append((bound, "deflection", sol, (a, b, lim)))
     bounds.sort(key=lambda t: -t[0])
@@ -812,6 +813,18 @@ def envelope_ratio(job, ss: "StateSet", k: float, st) -> float:
             r = sol.deflection.extremes(a, b).abs_max / lim
         best = max(best, r)
     return best
+
+
+def _deflection_bounds(job, ss: "StateSet", st, env: Envelopes) -> list[float] | None:
+    """Per span and overhang, an upper bound of any pattern state's deflection there over its
+    limit: the envelopes' extreme there plus BOUND_SLACK of their largest size. None where a
+    limit is not above zero or the check reads another deflection (wood's creep)."""
+    spans = deflection_spans(job, ss, st)
+    if st.flexure.wood is not None or any(lim <= 0 for _, lim, _ in spans):
+        return None
+    top = max(abs(env.abs_extreme("deflection").value), 1e-300)
+    return [(abs(env.abs_extreme("deflection", a, b).value) + BOUND_SLACK * top) / lim
+            for (a, b, _), (_, lim, _) in zip(ss.segs, spans)]
 
 
 def _ratio(demand: float, limit: float) -> float:
