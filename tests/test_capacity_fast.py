@@ -63,3 +63,24 @@ def test_fast_capacity_equals_the_search_that_evaluates_every_trial(text):
     assert fast.factor == slow.factor
     assert (fast.method, fast.note) == (slow.method, slow.note)
     assert [c.as_dict() for c in fast.checks] == [c.as_dict() for c in slow.checks]
+
+
+@settings(max_examples=20, **SETTINGS)
+@given(jobs())
+def test_with_nothing_fixed_the_ratio_at_zero_is_the_full_evaluations(text):
+    # no self-weight and no dead load: the search's first trial (k = 0) is answered without
+    # the envelopes; it must still be the full evaluation's number
+    text = text.replace("[beam]\n", "[beam]\nself_weight = false\n", 1)
+    text = "\n[[loads]]".join(block for block in text.split("\n[[loads]]")
+                              if 'case = "dead"' not in block)
+    if "[[loads]]" not in text:
+        return
+    job, ss, stg = _job(text)
+    if not envelope_ratio_applies(job, ss, stg):
+        return
+    assert not any(ld.total_force for ld in ss.parts.fixed)
+    full = max(c.ratio for c in evaluate(job, 0.0, None, ss, stg).checks)
+    assert envelope_ratio(job, ss, 0.0, stg) == full
+    fast = _capacity(job, None, ss, stg, fast=True)
+    job2, ss2, stg2 = _job(text)
+    assert fast.factor == _capacity(job2, None, ss2, stg2, fast=False).factor

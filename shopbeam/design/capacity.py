@@ -8,7 +8,9 @@ scales) and k = 1 / ratio(1) in closed form. Otherwise the governing ratio g(k) 
 equal to 1 by a bracketed root search (Brent's method, written here): bracket [0, k_hi]
 with g(0) <= 1 < g(k_hi), then converge to working precision, keeping the side that passes.
 Cb changes with the shape of the moment diagram, so g is not linear in k; the bracket makes
-the answer safe anyway.
+the answer safe anyway. For patterned jobs g(k) at each trial factor is read from the exact
+pattern envelopes (`loading.envelope_ratio`: the same number as a full evaluation, without
+building the checks) and only the answer is evaluated in full.
 
 `shopbeam capacity` (cli/design.py) prints it (or the contract JSON with "factor"); the rating
 label and plaque in shop words are `shopbeam.output.label`.

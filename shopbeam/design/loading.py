@@ -776,6 +776,9 @@ def envelope_ratio(job, ss: "StateSet", k: float, st) -> float:
     (`envelope_ratio_applies` says where it covers every check)."""
     from shopbeam.design import local as _local
 
+    if k == 0 and not any(ld.total_force or ld.kind == "moment" and ld.value
+                          for ld in ss.parts.fixed):
+        return 0.0  # no load at all: every demand is zero (the search starts here)
     env = Envelopes(ss, k)
     sec = getattr(st, "section", None) or job.section
     _, _, e_b, _, allow, _ = _envelope_bending(env, st)
