@@ -379,6 +379,19 @@ def test_a_support_just_past_the_end_shows_the_digits_that_differ():
     assert end.split(")")[0] == "3 ft" and "3 ft" not in shown.split("(")[1]
 
 
+def test_an_si_job_is_told_its_slips_in_its_own_units():
+    # a job in metres gets positions, lengths and loads back in metres and kN, not feet
+    text = cantilever("36 in").replace('title = "Bar-stock arm"', 'title = "Arm"\nunits = "si"')
+    text = text.replace('"36 in"', '"1 m"').replace('"0 in"', '"0 m"')
+    past = refused(text.replace('at = "1 m"\nvalue', 'at = "1.5 m"\nvalue'))[0].message
+    assert "beyond the end of the beam (1 m)" in past and " ft" not in past
+    big = refused(text.replace('"-2000 lbf"', '"-5e9 kN"'))[0].message
+    assert "far beyond any shop load" in big and " kN" in big and "lbf" not in big
+    backwards = text + '[[loads]]\ntype = "uniform"\nstart = "0.8 m"\nend = "0.2 m"\nvalue = "-1 kN/m"\n'
+    msg = refused(backwards)[0].message
+    assert msg.startswith("end (0.2 m) must be beyond start (0.8 m)")
+
+
 def test_a_bare_wall_suggests_inches_not_feet():
     text = cantilever("36 in").replace('"HSS4x2x3/16"', '{shape = "rect-tube", depth = "4 in", '
                                        'width = "2 in", wall = "3/16"}')

@@ -241,6 +241,7 @@ class _Reader:
         self.file = filename
         self.lines = key_lines(text) if text else {}
         self.problems: list[Problem] = []
+        self.system = "us"  # the job's units, for the figures quoted in messages
 
     def line_for(self, key: str) -> int | None:
         k = key
@@ -602,8 +603,9 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
         if ends is None:
             return ()
         if ends[1] > length * (1 + 1e-9) or ends[1] <= ends[0]:
-            got = f"[{units.fmt(ends[0], 'length')}, {units.fmt(ends[1], 'length')}]"
-            why = (f"its end is past the end of the beam ({units.fmt(length, 'length')})"
+            got = (f"[{units.fmt(ends[0], 'length', r.system)}, "
+                   f"{units.fmt(ends[1], 'length', r.system)}]")
+            why = (f"its end is past the end of the beam ({units.fmt(length, 'length', r.system)})"
                    if ends[1] > length * (1 + 1e-9) else "its end is not beyond its start")
             r.error(f"travel {got}: {why}; travel = [\"start\", \"end\"] is where the first "
                     "and last wheel may run, from the left end (0) to at most the beam's "
@@ -625,11 +627,12 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
                      key, int(per_axle), edge),)
 
 
-def _apart(x: float, length: float) -> tuple[str, str]:
+def _apart(x: float, length: float, system: str = "us") -> tuple[str, str]:
     """A position and the length shown with enough digits to differ ("6.000014 ft" past a
     "6 ft" member, not "6 ft" past "6 ft")."""
     for sig in range(4, 13):
-        a, b = units.fmt(x, "length", sig=sig), units.fmt(length, "length", sig=sig)
+        a, b = (units.fmt(x, "length", system, sig=sig),
+                units.fmt(length, "length", system, sig=sig))
         if a != b:
             return a, b
     return a, b
@@ -644,7 +647,7 @@ def _position(r: _Reader, table: dict, name: str, key: str, length: float | None
     if x is None:
         return None
     if length is not None and x > length * (1 + 1e-9):
-        shown, end = _apart(x, length)
+        shown, end = _apart(x, length, r.system)
         typed = table[name] if name in table else ""
         said = f"{typed!r} ({shown})" if isinstance(typed, str) and typed else shown
         r.error(f"{said} is beyond the end of the beam ({end}): positions run from 0 at the "
@@ -773,8 +776,8 @@ def _plausible_load(r: _Reader, ld: Load) -> bool:
     size = abs(ld.value) if ld.kind in ("point", "moment") else max(abs(ld.w1), abs(ld.w2))
     if size <= limit:
         return True
-    r.error(f"{units.fmt(size, kind)} is far beyond any shop load (the limit is "
-            f"{units.fmt(limit, kind)}): check the number and its unit", f"{ld.key}.value")
+    r.error(f"{units.fmt(size, kind, r.system)} is far beyond any shop load (the limit is "
+            f"{units.fmt(limit, kind, r.system)}): check the number and its unit", f"{ld.key}.value")
     return False
 
 
@@ -833,7 +836,8 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
     if start is None or end is None:
         return None
     if not end > start:
-        r.error(f"end ({units.fmt(end, 'length')}) must be beyond start ({units.fmt(start, 'length')})",
+        r.error(f"end ({units.fmt(end, 'length', r.system)}) must be beyond start "
+                f"({units.fmt(start, 'length', r.system)})",
                 f"{key}.end")
         return None
     area: list = []
@@ -847,7 +851,7 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
             if total is None:
                 return None
             w = total / (end - start)
-            conversions.append((key, f"total {ld['total']} over {units.fmt(end - start, 'length')}",
+            conversions.append((key, f"total {ld['total']} over {units.fmt(end - start, 'length', r.system)}",
                                 w))
         else:
             w = _line_load(r, ld, ld.get("value"), f"{key}.value", area) if "value" in ld else None
@@ -1630,6 +1634,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if system not in ("us", "si"):
         r.error(f"units {system!r} must be \"us\" or \"si\"", "units")
         system = "us"
+    r.system = system
     tags = data.get("tags", [])
     if not (isinstance(tags, list) and all(isinstance(t, str) for t in tags)):
         r.error("tags must be a list of words, e.g. tags = [\"rack\", \"shelf\"]", "tags")
