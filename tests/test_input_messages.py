@@ -492,3 +492,22 @@ def test_a_zero_bearing_on_steel_stays_the_knife_edge():
         'material = "DF-L-2"', 'material = "A992"')
     job = parse_job_text(text.replace("BEAM", "").replace("SUPPORT", 'bearing = "0 in"'))
     assert job.bearings["supports[0]"] == 0.0
+
+
+# ------------------------------------------------------------------ a couple with a slipped sign
+@pytest.mark.parametrize("sign, named", [("", True), ("-", False)])
+def test_a_couple_that_relieves_the_load_it_rides_with_is_named(sign, named):
+    from shopbeam.design.analysis import analyze
+    # a 4 ft arm, 2000 lbf at the tip and a 3000 lbf*ft couple there; statics by hand
+    # (common practice): without the couple the root moment is P L = 8000 lbf*ft; a + (ccw)
+    # couple takes the largest |M| down to 5000, a - (cw) one raises it to 11000
+    text = cantilever("36 in", tags='["not-rack"]').replace('length = "36 in"', 'length = "4 ft"')
+    text = text.replace('at = "36 in"', 'at = "4 ft"') + (
+        f'[[loads]]\ntype = "moment"\nat = "4 ft"\nvalue = "{sign}3000 lbf*ft"\n'
+        'label = "hanger eccentricity"\n')
+    job = parse_job_text(text.replace("[beam]", "[beam]\nself_weight = false"))
+    said = [c for c in analyze(job).cautions if "works against the other loads" in c]
+    assert bool(said) == named
+    if named:
+        assert "loads[1] (hanger eccentricity), 3000 lbf*ft (counterclockwise)" in said[0]
+        assert "from 8000 lbf*ft (without it) to 5000 lbf*ft" in said[0]

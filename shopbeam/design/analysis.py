@@ -154,6 +154,41 @@ def uplift_notes(job: Job, sol: Solution) -> list[str]:
     return out
 
 
+MAX_COUPLES_WEIGHED = 4  # couples each taken off in turn to see whether they relieve
+
+
+def couple_notes(job: Job, sol: Solution) -> list[str]:
+    """A couple that lowers the largest bending moment the other loads make works against
+    them. That is rare on purpose (an eccentric hanger or bracket adds to the moment of the
+    load it carries) and common by a slipped sign (+ is counterclockwise), so it is named
+    with its sense to check. Each couple is taken off in turn (one plain solve each)."""
+    couples = [ld for ld in job.loads if ld.kind == "moment" and ld.value]
+    if not couples or len(couples) > MAX_COUPLES_WEIGHED \
+            or not any(ld.kind != "moment" and ld.total_force for ld in job.loads):
+        return []
+    fmt = lambda v, q: units.fmt(v, q, job.units)  # noqa: E731
+    now = sol.moment.extremes(0.0, job.length).abs_max
+    out = []
+    for c in couples:
+        rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not c))
+        try:
+            without = sound_solve(rest.beam()).moment.extremes(0.0, job.length).abs_max
+        except (UnstableBeam, InputError):
+            continue
+        if not now < without * 0.99:
+            continue
+        name = c.key + (f" ({c.label})" if c.label else "")
+        sense = "counterclockwise" if c.value > 0 else "clockwise"
+        out.append(f"The {c.case} couple {name}, {fmt(c.value, 'moment')} ({sense}), lowers "
+                   f"the largest bending moment from {fmt(without, 'moment')} (without it) to "
+                   f"{fmt(now, 'moment')}: it works against the other loads. Couples are + "
+                   "counterclockwise: check its sign (an eccentric hanger or bracket adds to "
+                   "the moment of the load it carries)"
+                   + ("; a live couple that does hold the others back is not counted on for a "
+                      "rating (capacity posts none)" if c.case == "live" else ""))
+    return out
+
+
 def analyze(job: Job) -> Result:
     """Solve the job's member and run its checks. Raises UnstableBeam."""
     try:
@@ -202,7 +237,7 @@ def analyze(job: Job) -> Result:
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment) \
         + span_top_unchecked(job, st, sol.moment)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
-        + braces_note(job, st, sol.moment)
+        + braces_note(job, st, sol.moment) + couple_notes(job, sol)
     # every limit state not checked is named in the report, as on the label and in the JSON
     # (check_notes names the member's own strength ones)
     said = set(st.unchecked)
