@@ -511,3 +511,28 @@ def test_a_couple_that_relieves_the_load_it_rides_with_is_named(sign, named):
     if named:
         assert "loads[1] (hanger eccentricity), 3000 lbf*ft (counterclockwise)" in said[0]
         assert "from 8000 lbf*ft (without it) to 5000 lbf*ft" in said[0]
+
+
+# ------------------------------------------------------------------ a yield typed in MPa figures
+@pytest.mark.parametrize("kind, fy, slipped", [("steel", "250 ksi", True), ("steel", "36 ksi", False),
+                                               ("steel", "100 ksi", False),
+                                               ("aluminum", "240 ksi", True),
+                                               ("aluminum", "35 ksi", False)])
+def test_a_yield_above_the_kinds_rules_is_warned_and_not_rated(kind, fy, slipped):
+    # AISC 360-16 A3.1a tops out at ASTM A514, Fy 100 ksi (from memory); 250 MPa = 36.3 ksi
+    # (1 ksi = 6.894757 MPa, NIST SP 811); aluminium 7075-T6 Fty about 73 ksi (ADM 2015,
+    # from memory)
+    e = "29000 ksi" if kind == "steel" else "10100 ksi"
+    rho = "490 lb/ft^3" if kind == "steel" else "169 lb/ft^3"
+    text = cantilever("36 in", tags='["not-rack"]').replace(
+        'material = "A500-C"',
+        f'[beam.material]\nkind = "{kind}"\ne = "{e}"\nfy = "{fy}"\ndensity = "{rho}"')
+    text = text.replace('section = "HSS4x2x3/16"\n', "").replace(
+        "[beam]", '[beam]\nsection = "HSS4x2x3/16"')
+    job = parse_job_text(text)
+    w = warned(job, "beam.material.fy")
+    reasons = capacity(job).not_rated
+    assert bool(w) == slipped
+    assert any("above any" in r for r in reasons) == slipped
+    if slipped and kind == "steel":
+        assert "250 MPa is 36.3 ksi" in w[0].message

@@ -34,7 +34,7 @@ from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.design.lifting import profile_of
-from shopbeam.jobs.jobfile import (STUBBY_LIMIT, kind_mismatch, lifting_uniform_words,
+from shopbeam.jobs.jobfile import (STUBBY_LIMIT, kind_mismatch, lifting_uniform_words, strength_slip,
                                    stubby_words)
 
 
@@ -163,6 +163,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")
+    slip = strength_slip(job.material, job.units)
+    if slip:
+        out.append(f"the typed-in material's {slip}. Fix fy and its unit")
     out += _live_both_ways(job) + _live_on_spans_unpatterned(job)
     out += _lifting_spread(job)
     if getattr(job, "members", 1) > 1 and (job.moving or job.lifting

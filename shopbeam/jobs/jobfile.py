@@ -987,7 +987,36 @@ def kind_mismatch(material, system: str = "us") -> str:
             f"({band}): the {_KIND_WORDS[kind]} rules would be applied to another material")
 
 
+# Highest yield strength of the metals whose design rules shopbeam applies (values from
+# memory): AISC 360-16 A3.1a lists structural steels up to ASTM A514, Fy 100 ksi, and
+# stainless takes its 0.2 % proof stress (duplex grades about 65 to 80 ksi); the strongest
+# common aluminium alloy, 7075-T6, has Fty about 70-73 ksi (ADM 2015 Table A.3.4). A typed-in
+# yield above these is a unit slip (250 MPa typed as "250 ksi") or a metal the rules do not
+# cover.
+KIND_FY_TOP = {"steel": 100.0, "stainless": 100.0, "aluminum": 80.0}  # ksi
+
+
+def strength_slip(material, system: str = "us") -> str:
+    """Why a typed-in metal's yield strength is beyond its kind's rules ("" when it is not)."""
+    kind = getattr(material, "kind", "custom")
+    if getattr(material, "source", "") != "typed in" or kind not in KIND_FY_TOP:
+        return ""
+    ksi, top = material.fy / units.KSI, KIND_FY_TOP[kind]
+    if ksi <= top * (1 + 1e-9):
+        return ""
+    mpa = f"{ksi:.4g} MPa is {ksi * 1e6 / units.KSI:.3g} ksi" if ksi > 150 else ""
+    return (f"fy = {units.fmt(material.fy, 'stress', system)} is above any "
+            f"{_KIND_WORDS[kind]} whose rules shopbeam applies ({top:g} ksi at most"
+            + ("; ASTM A514, the strongest steel AISC 360-16 A3.1a lists" if kind != "aluminum"
+               else "; 7075-T6 has about 73 ksi") + ")"
+            + (f": a figure in MPa typed with ksi is likely ({mpa})" if mpa else ""))
+
+
 def _kind_mismatch(r: _Reader, material, system: str) -> None:
+    slip = strength_slip(material, system)
+    if slip:
+        r.warn(f"{slip}. Check fy and its unit; the job is NOT RATED until it reads as the "
+               "mill certificate does", "beam.material.fy")
     why = kind_mismatch(material, system)
     if not why:
         return
