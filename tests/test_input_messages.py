@@ -536,3 +536,49 @@ def test_a_yield_above_the_kinds_rules_is_warned_and_not_rated(kind, fy, slipped
     assert any("above any" in r for r in reasons) == slipped
     if slipped and kind == "steel":
         assert "250 MPa is 36.3 ksi" in w[0].message
+
+
+# ------------------------------------------------------------------ bearing lengths in feet
+def _post_beam(bearing: str, span: str = "3 ft", at: str = "18 in") -> str:
+    return f"""schema = 1
+title = "Transfer beam under a post"
+tags = ["not-rack"]
+[beam]
+length = "{span}"
+section = "W8X18"
+material = "A992"
+restrained = true
+bearing = "{bearing}"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "{span}"
+type = "roller"
+[[loads]]
+type = "point"
+at = "{at}"
+value = "-20000 lbf"
+label = "post"
+"""
+
+
+@pytest.mark.parametrize("bearing, span, at, said", [
+    ("2 in", "3 ft", "18 in", ""),
+    ("2 ft", "3 ft", "18 in", "overlap"),          # 0-2 ft at the pin, 0.5-2.5 ft at the post
+    ("4 ft", "10 ft", "5 ft", "overlap"),
+    ("20 in", "10 ft", "5 ft", "more than 25%"),   # 20 in of the 60 in it bears on
+    ("6 in", "10 ft", "5 ft", "")])
+def test_a_bearing_a_point_model_cannot_take_is_warned_and_not_rated(bearing, span, at, said):
+    # J10-2 credits lb in full (AISC 360-16 J10.2): W8X18 tw 0.230 in, k 0.630 in (AISC
+    # Shapes Database v15.0) gives Rn/1.5 = 50 x 0.23 (5 x 0.63 + lb) / 1.5 = 39.5 kip at
+    # lb = 2 in and 208 kip at 2 ft, so a foot slip lifts the rating 43 %; the quarter-span
+    # rule for a force taken at a point is common practice (no source)
+    job = parse_job_text(_post_beam(bearing, span, at))
+    w = [p.message for p in warned(job) if p.key.endswith("bearing")]
+    reasons = capacity(job).not_rated
+    if not said:
+        assert not w and not any("bearing" in r for r in reasons)
+    else:
+        assert len(w) >= 1 and said in " ".join(w) and "NOT RATED" in w[0]
+        assert any(said in r for r in reasons)

@@ -160,6 +160,7 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append("live point load(s) on a support go straight into it and bend nothing, so "
                    "a rating would post a load never checked: " + ", ".join(live_at)
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
+    out += list(getattr(job, "long_bearings", ()))
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")

@@ -140,6 +140,7 @@ class Job:
     # not load the member (a tip load typed at the held end). Each entry is "loads[i] (label)
     # at the <kind> support at <x>"; a capacity or rating is not posted on them.
     at_support: tuple[str, ...] = ()
+    long_bearings: tuple[str, ...] = ()  # bearing too long for a point model (no rating)
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -753,6 +754,77 @@ def _bearing_fits(r: _Reader, b, length, system: str, key: str):
                 "\"100 mm\"); check the unit", key)
         return None
     return b
+
+
+# A support or point load is modelled as acting at a point; its bearing length only feeds the
+# local checks (web yielding and crippling, wood bearing). Over about a quarter of the span it
+# bears on, the point model no longer holds (the span itself is shorter, the force spreads)
+# and the local checks would credit a length a unit slip most often gives ("2 ft" for "2 in";
+# common practice, no source).
+LONG_BEARING = 0.25
+
+
+def _bearing_room(r: _Reader, length, supports, loads, bearing, bearings: dict,
+                  system: str) -> list[str]:
+    """Bearing lengths that run past the member, overlap one another, or are longer than
+    LONG_BEARING of the span they bear on: warned, and returned (the job is not rated)."""
+    if length is None or (bearing is None and not bearings):
+        return []
+    from shopbeam.engine.solver import SNAP  # the positions the solver takes as one
+
+    tol = SNAP * length
+    held = sorted(s.at for s in supports if s.takes_force)
+    places = [(s.key, s.at, "support") for s in supports
+              if s.takes_force and s.kind != "fixed"]
+    places += [(ld.key, ld.at, "load") for ld in loads if ld.kind == "point"
+               and not any(abs(ld.at - h) <= tol for h in held)]  # on a support: warned
+    zones = []
+    for key, at, _what in places:
+        b = bearings.get(key, bearing)
+        if not b:
+            continue
+        if at <= tol:  # at an end, a plate or seat lies on the member
+            lo, hi = 0.0, b
+        elif at >= length - tol:
+            lo, hi = length - b, length
+        else:
+            lo, hi = at - b / 2, at + b / 2
+        zones.append((lo, hi, key, at, b))
+    f = lambda x: units.fmt(x, "length", system)  # noqa: E731
+    said_key = lambda key: f"{key}.bearing" if key in bearings else "beam.bearing"  # noqa: E731
+    slip = ("a bearing is the length of the plate, seat or wheel contact under the force, "
+            "inches as a rule, and the local checks credit it, so the job is NOT RATED. Check "
+            "the unit (\"2 in\", not \"2 ft\")")
+    out: list[str] = []
+    seen: set[str] = set()  # one message a bearing
+
+    def say(words: str, key: str, *more: str) -> None:
+        if key in seen or seen.intersection(more):
+            return
+        seen.update((key, *more))
+        r.warn(f"{words}: {slip}", said_key(key))
+        out.append(f"{words}. Check the unit (\"2 in\", not \"2 ft\")")
+
+    for lo, hi, key, at, b in zones:
+        if lo < -tol or hi > length + tol:
+            say(f"bearing {f(b)} centred on {key} at {f(at)} runs "
+                f"{f(max(-lo, hi - length))} past the end of the member", key)
+    zones.sort()
+    for (lo1, hi1, k1, _, b1), (lo2, hi2, k2, _, b2) in zip(zones, zones[1:]):
+        if hi1 > lo2 + tol:
+            say(f"the bearings of {k1} ({f(lo1)} to {f(hi1)}) and {k2} ({f(lo2)} to "
+                f"{f(hi2)}) overlap", k2, k1)
+    for lo, hi, key, at, b in zones:
+        left = max((h for h in held if h < at - tol), default=None)
+        right = min((h for h in held if h > at + tol), default=None)
+        spans = [at - left] if left is not None else []
+        spans += [right - at] if right is not None else []
+        span = min(spans) if spans else length
+        if b > LONG_BEARING * span * (1 + 1e-9):
+            say(f"bearing {f(b)} at {key} ({f(at)}) is more than {LONG_BEARING:.0%} of the "
+                f"{f(span)} it bears on, too long for a force taken at a point (model a long "
+                "seat as a support at each end of it)", key)
+    return out
 
 
 def _knife_edge_on_wood(r: _Reader, material, bearing, bearings: dict) -> None:
@@ -1862,6 +1934,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                               lambda x: units.fmt(x, "length", system)):
             r.error(message, key)
     at_support = _loads_at_supports(r, loads, supports, length, system)
+    long_bearings = _bearing_room(r, length, supports, loads, bearing, bearings, system)
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
@@ -1917,6 +1990,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
+        long_bearings=tuple(long_bearings),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
