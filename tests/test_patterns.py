@@ -267,3 +267,54 @@ def test_governing_wheel_positions_are_plain_data():
     assert [x for x, _ in w] == pytest.approx([p, p + 2 * FT], abs=1e-12)
     # 1000 lbf live x (1 + 0 impact: not a lifting job) + 60 lbf dead, down, per wheel
     assert [f for _, f in w] == pytest.approx([-1060 * LBF] * 2, rel=1e-12)
+
+
+STAIR_LOFT = """schema = 1
+title = "Loft beam with stair overhang"
+tags = ["not-rack", "not-lifting"]
+[beam]
+length = "15 ft"
+section = "W8x18"
+material = "A992"
+restrained = true
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "12 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "12 ft"
+value = "-300 lbf/ft"
+label = "stock"
+{p}
+[[loads]]
+type = "point"
+at = "15 ft"
+value = "-1200 lbf"
+label = "stair"
+{p}
+[criteria]
+deflection = "L/360"
+"""
+
+
+def test_live_loads_on_a_span_and_at_its_overhangs_tip_rate_only_when_patterned():
+    from shopbeam.design.capacity import capacity
+    # the stair load sits at the free tip: it is on the overhang, so with the span's load
+    # both come and go and the unpatterned factor is not posted
+    loose = capacity(parse_job_text(STAIR_LOFT.format(p="")))
+    assert any("live loads lie on 2 spans and overhangs" in r for r in loose.not_rated)
+    cap = capacity(parse_job_text(STAIR_LOFT.format(p="patterned = true")))
+    assert not cap.not_rated
+    # the span loaded, the stair off: the tip rises w l^3 a / (24 EI) (AISC Manual Table
+    # 3-23 case 24, beam overhanging one support, from memory), against 2 a / 360 (the
+    # contract: an overhang judged on twice its length); W8X18 Ix 61.9 in^4 (AISC Shapes
+    # Database v15.0), E 29,000 ksi
+    w, l, a, ei = 300 / 12, 144.0, 36.0, 29e6 * 61.9
+    k = (2 * a / 360) * 24 * ei / (w * l**3 * a)
+    assert cap.factor == pytest.approx(k, rel=1e-6)
+    assert k < 0.5 * loose.factor  # the unpatterned factor was more than twice as high

@@ -252,13 +252,16 @@ def _live_on_spans_unpatterned(job) -> list[str]:
     if len(segs) < 2:
         return []
     tol = 1e-9 * job.length
+    # a free end belongs to its overhang (a load at a stair landing's tip is on it)
+    free_lo, free_hi = segs[0][2] != "span", segs[-1][2] != "span"
     on: set[int] = set()
     for ld in job.loads:
         if ld.case != "live" or ld.patterned or not ld.total_force and ld.kind != "moment":
             continue
         for i, (a, b, _) in enumerate(segs):
             if ld.kind in ("point", "moment"):
-                if a + tol < ld.at < b - tol:
+                if (a + tol < ld.at < b - tol or (i == 0 and free_lo and ld.at <= tol)
+                        or (i == len(segs) - 1 and free_hi and ld.at >= job.length - tol)):
                     on.add(i)
             elif min(b, ld.end) - max(a, ld.start) > tol:
                 on.add(i)
