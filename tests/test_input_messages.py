@@ -582,3 +582,17 @@ def test_a_bearing_a_point_model_cannot_take_is_warned_and_not_rated(bearing, sp
     else:
         assert len(w) >= 1 and said in " ".join(w) and "NOT RATED" in w[0]
         assert any(said in r for r in reasons)
+
+
+@pytest.mark.parametrize("at, into", [("0 in", True), ("6 in", False)])
+def test_a_couple_typed_at_a_fixed_end_is_warned_and_not_rated(at, into):
+    # statics (common practice): the wall's moment is P L - C = 6000 lbf*ft for a 2000 lbf
+    # tip load on 36 in and C = -2000 lbf*ft at the root, while the member's end section
+    # sees P L alone: the couple went into the support
+    text = cantilever("36 in", tags='["not-rack"]') + (
+        f'[[loads]]\ntype = "moment"\nat = "{at}"\nvalue = "-2000 lbf*ft"\nlabel = "bracket"\n')
+    job = parse_job_text(text)
+    w = warned(job, "loads[1].at")
+    assert bool(w) == into
+    reasons = capacity(job).not_rated
+    assert any("loads[1] (bracket) (a couple) at the fixed support" in r for r in reasons) == into

@@ -157,8 +157,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
     live_at = [k for k in getattr(job, "at_support", ()) if _is_live(job, k)]
     if live_at:  # a dead one is never posted: its warning says where it went
-        out.append("live point load(s) on a support go straight into it and bend nothing, so "
-                   "a rating would post a load never checked: " + ", ".join(live_at)
+        out.append("live load(s) on a support go straight into it and the member's checks do "
+                   "not see them, so a rating would post a load never checked: "
+                   + ", ".join(live_at)
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     out += list(getattr(job, "long_bearings", ()))
     mixed = kind_mismatch(job.material, job.units)

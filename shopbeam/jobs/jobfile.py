@@ -1219,6 +1219,22 @@ def _loads_at_supports(r: _Reader, loads, supports, length, system: str) -> list
         free.append(length)
     out = []
     for ld in loads:
+        if ld.kind == "moment" and ld.value:
+            # a couple at a fixed end turns the wall, not the member: the member's end is
+            # checked without it while the connection is told to develop it
+            sup = next((s for s in held if s.kind == "fixed" and abs(s.at - ld.at) <= tol),
+                       None)
+            if sup is not None:
+                where = units.fmt(sup.at, "length", system)
+                name = f" ({ld.label})" if ld.label else ""
+                r.warn(f"this couple{name} is at the fixed support at {where} "
+                       f"({sup.key or 'a support'}): it goes into the support, so the member's "
+                       "bending check does not see it while the fixed end's connection moment "
+                       "includes it, and the job is NOT RATED. If it acts on the member (an "
+                       "eccentric bracket welded to it), put it just inside the end, e.g. at "
+                       "the bracket's position; if it acts on the wall, leave it out", f"{ld.key}.at")
+                out.append(f"{ld.key}{name} (a couple) at the fixed support at {where}")
+            continue
         if ld.kind != "point":
             continue
         sup = next((s for s in held if abs(s.at - ld.at) <= tol), None)
