@@ -596,3 +596,27 @@ def test_a_couple_typed_at_a_fixed_end_is_warned_and_not_rated(at, into):
     assert bool(w) == into
     reasons = capacity(job).not_rated
     assert any("loads[1] (bracket) (a couple) at the fixed support" in r for r in reasons) == into
+
+
+@pytest.mark.parametrize("section, grade, blocked", [
+    ("C6X8.2", "A500-C", True),    # 50 ksi credited, channels are bought as A36 (36 ksi)
+    ("C6X8.2", "A36", False),
+    ("C6X8.2", "A572-50", False),  # a grade channels are rolled to
+    ("L3X3X1/4", "A992", True),    # A992 is for W shapes; angles are A36
+    ("W8X18", "A500-C", False),    # a tube grade on a W, but no more than A992's 50 ksi
+    ("HSS4X4X1/4", "A36", False),  # a rolled grade on tube: less than A500-C, conservative
+    ("PIPE2STD", "A500-C", True),  # pipe is A53 Gr B, 35 ksi
+])
+def test_a_grade_the_product_is_not_made_to_is_not_rated_when_it_credits_more(
+        section, grade, blocked):
+    # product grades: AISC Manual 15th ed. Table 2-4 (from memory): W shapes A992 (50 ksi);
+    # C, MC, L and S shapes A36 (36 ksi, A572-50 also rolled); HSS A500 Gr C (50 ksi);
+    # pipe A53 Gr B (35 ksi)
+    text = cantilever("36 in", tags='["not-rack"]').replace(
+        'section = "HSS4x2x3/16"', f'section = "{section}"').replace(
+        'material = "A500-C"', f'material = "{grade}"')
+    job = parse_job_text(text)
+    reasons = capacity(job).not_rated
+    assert any("is not a grade" in r for r in reasons) == blocked
+    if blocked:
+        assert any("NOT RATED" in p.message for p in warned(job, "beam.material"))

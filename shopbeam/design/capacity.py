@@ -162,6 +162,8 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    + ", ".join(live_at)
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     out += list(getattr(job, "long_bearings", ()))
+    if getattr(job, "grade_gap", ""):
+        out.append(job.grade_gap)
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")

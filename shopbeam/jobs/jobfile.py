@@ -31,7 +31,7 @@ from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RAT
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
                                  guessed_profile, has_free_end)
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
-from shopbeam.members.materials import resolve_material, untempered
+from shopbeam.members.materials import get as get_material, resolve_material, untempered
 from shopbeam.members.resolve import resolve_section
 
 SCHEMA = 1
@@ -141,6 +141,7 @@ class Job:
     # at the <kind> support at <x>"; a capacity or rating is not posted on them.
     at_support: tuple[str, ...] = ()
     long_bearings: tuple[str, ...] = ()  # bearing too long for a point model (no rating)
+    grade_gap: str = ""  # a grade the product is not made to, crediting more yield (no rating)
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -1499,11 +1500,12 @@ def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
     return out
 
 
-def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
+def _family_mismatch(r: _Reader, section, material, system: str = "us") -> str:
     """A lumber size in steel, or a steel shape in lumber, is refused: the checks and the
-    weight would be for a member that does not exist."""
+    weight would be for a member that does not exist. Returns why a grade the product is not
+    made to withholds the rating ("" when none does: `_grade_mismatch`)."""
     if section is None or material is None:
-        return
+        return ""
     lumber_size = is_wood_size(section)
     mkind = getattr(material, "kind", "custom")
     if mkind == "custom":
@@ -1521,7 +1523,7 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                        "([beam.section] shape = \"rect-bar\" with its sizes)" if lumber_size
                        else "check e (steel is 29,000 ksi, aluminium 10,100 ksi), or give a "
                        "lumber size with kind = \"lumber\""), "beam.section")
-            return
+            return ""
     if lumber_size and mkind in ("steel", "stainless", "aluminum"):
         r.error(f"section {section.designation!r} is a lumber size (sawn or LVL) but material "
                 f"{material.key!r} is {mkind}: give a wood material (e.g. material = "
@@ -1533,7 +1535,8 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                 "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
                 "material such as \"A992\"", "beam.section")
     else:
-        _grade_mismatch(r, section, material, mkind, system)
+        return _grade_mismatch(r, section, material, mkind, system)
+    return ""
 
 
 _TUBES = ("rect-tube", "round-tube", "pipe")
@@ -1541,11 +1544,13 @@ _TUBES = ("rect-tube", "round-tube", "pipe")
 
 def _a(word: str) -> str:
     return ("an " if word[:1] in "aeiou" else "a ") + word
+
+
 _ROLLED_GRADES = ("A36", "A572-50", "A992")  # grades of rolled shapes, plate and bar
 EN_SECTIONS = "EN 10365"  # the source of the catalog's European sections (IPE, HE, UPN)
 
 
-def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> None:
+def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> str:
     """A grade that the product is not made to gets a warning naming the usual grade: a tube
     grade on a rolled shape or bar (the check would credit a yield that shape is not bought
     at), a rolled-shape grade on tube, an aluminium or stainless member given a steel shape
@@ -1554,11 +1559,15 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
     key = getattr(material, "key", "")
     shape = section.shape
     where = "beam.material"
+    said = len(r.problems)
+    usual = ""  # the grade the product is bought in, where the job's is not one it is made to
     if mkind == "steel" and getattr(material, "hss_wall_factor", None) is not None \
             and shape not in _TUBES + ("custom",):
-        usual = ("A992 (W shapes) or A36 / A572-50 (S, C, MC, angles, tees, plate and bar)")
+        bought = ("A992 (W shapes) or A36 / A572-50 (S, C, MC, angles, tees, plate and bar)")
+        w_shape = section.designation.upper().startswith(("W", "HP", "WT"))
+        usual = "A992" if w_shape and not section.source.startswith(EN_SECTIONS) else "A36"
         r.warn(f"material {key!r} is a grade of tube or pipe, but section "
-               f"{section.designation!r} is {_a(shape)}: that product is bought as {usual}, so "
+               f"{section.designation!r} is {_a(shape)}: that product is bought as {bought}, so "
                f"the check may credit a yield ({units.fmt(material.fy, 'stress', system)}) the "
                "member does not have. Give the grade on the mill cert", where)
     elif mkind == "steel" and key in _ROLLED_GRADES and shape in _TUBES:
@@ -1568,6 +1577,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
                where)
     elif mkind == "steel" and key.startswith("A500") and shape == "pipe":
+        usual = "A53-B"
         r.warn(f"material {key!r} is a grade of structural tube (HSS), but section "
                f"{section.designation!r} is pipe, made to ASTM A53 Gr B (Fy 35 ksi; AISC "
                "Manual Table 2-4, from memory): the check credits "
@@ -1575,6 +1585,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "material = \"A53-B\", or give the round HSS (e.g. \"HSS4.500X0.237\") if "
                "the mill cert says A500", where)
     elif mkind == "steel" and key == "A513-DOM" and shape == "rect-tube":
+        usual = "A500-C"
         r.warn(f"material {key!r} is DOM (drawn over mandrel) tube, which is round, but "
                f"section {section.designation!r} is square or rectangular tube, bought as A500 "
                "(HSS) or A513 Type 1/2 as-welded (30 to 38 ksi, from memory): the check credits "
@@ -1584,6 +1595,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
             shape in ("angle", "channel", "rect-bar", "square-bar")
             or shape == "i-beam" and section.designation.upper().startswith("S")) \
             and not section.source.startswith(EN_SECTIONS):
+        usual = "A36"
         r.warn(f"material 'A992' is the grade of W shapes (and HP, WT), but section "
                f"{section.designation!r} is {_a(shape)}, bought as A36 (Fy 36 ksi; AISC Manual "
                "Table 2-4 gives A36 for angles, channels and S shapes, and plate and bar are "
@@ -1592,6 +1604,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "\"A572-50\" if the mill cert says so", where)
     elif mkind == "steel" and key in _ROLLED_GRADES + ("A53-B",) \
             and section.source.startswith(EN_SECTIONS):
+        usual = "S235"
         r.warn(f"section {section.designation!r} is a European section ({EN_SECTIONS}), "
                f"rolled to EN 10025 grades (S235: fy 235 MPa, S355: 355 MPa, up to 16 mm "
                f"thick), not ASTM {key}: the check credits "
@@ -1606,6 +1619,21 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> N
                "dimensions (walls, flanges, fillets), so these properties are not the "
                "member's. Give [beam.section] with the shape and the mill's dimensions",
                "beam.section")
+    if not usual:
+        return ""
+    # S235: fy 235 MPa up to 16 mm (EN 10025-2, from memory); the others are built in
+    top = 235e6 if usual == "S235" else getattr(get_material(usual), "fy", float("inf"))
+    if not material.fy > top * (1 + 1e-9):
+        return ""
+    if len(r.problems) > said:  # the warning just given says so too
+        p = r.problems[-1]
+        p.message += (f". The job is NOT RATED while it credits more than {usual} "
+                      f"({units.fmt(top, 'stress', system)})")
+    return (f"material {key!r} is not a grade {section.designation!r} is made to: the checks "
+            f"credit fy {units.fmt(material.fy, 'stress', system)}, more than the "
+            f"{units.fmt(top, 'stress', system)} of {usual}, the grade that product is "
+            "bought in. Give the grade on the mill cert (a typed-in [beam.material] with its "
+            "fy, or the grade's key)")
 
 
 # The wood service keys and the table each sits in (what NDS factors they set: `_wood_keys`)
@@ -1932,7 +1960,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
-    _family_mismatch(r, section, material, system)
+    grade_gap = _family_mismatch(r, section, material, system)
     if welded and getattr(material, "kind", "") == "aluminum" and \
             not getattr(material, "fy_welded", None):
         r.warn("welded = true on a typed-in aluminium with no fy_welded: welding anneals the "
@@ -2006,7 +2034,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
-        long_bearings=tuple(long_bearings),
+        long_bearings=tuple(long_bearings), grade_gap=grade_gap,
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
