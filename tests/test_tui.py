@@ -167,15 +167,15 @@ async def test_editing_a_load_changes_the_moment_plot():
         await goto(pilot, "3")
         lst = app.job_screen.query_one("#load-list")
         lst.focus()
-        lst.highlighted = 3  # the stair point load at the end of the overhang
+        lst.highlighted = 0  # the deck, a dead load over the whole beam (never patterned)
         await pilot.pause()
-        assert field(app, "loads", "load.value").value == "-1200 lbf"
-        await type_into(pilot, app, "loads", "load.value", "-2400 lbf")
+        assert field(app, "loads", "load.value").value == "-90 lbf/ft"
+        await type_into(pilot, app, "loads", "load.value", "-900 lbf/ft")
         assert "down" in message_of(field(app, "loads", "load.value"))
         await goto(pilot, "8")
         after = text_of(app, "#plot-moment")
         assert after != before
-        # hogging over the post doubles its overhang part: 2400 lbf x 3 ft plus the rest
+        # ten times the deck over the overhang: the post's hogging moment grows most
         mins = [ln for ln in after.splitlines() if " min " in ln]
         assert mins and "at x = 12 ft" in mins[0]
         assert app.job_screen.session.dirty

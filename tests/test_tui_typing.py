@@ -216,7 +216,8 @@ async def test_a_row_picked_then_tab_and_a_choice_then_save_at_full_speed(tmp_pa
     # exactly two lines more, both in the point load (the last table of the file)
     added = [ln for ln in fast_text.splitlines() if ln not in original.splitlines()]
     assert added == ['bearing = "6 in"', 'flange = "bottom"'], added
-    assert 'label = "stair"\nbearing = "6 in"\nflange = "bottom"\n' in fast_text
+    assert 'label = "stair"\npatterned = true' in fast_text  # the stair's own table
+    assert 'lifts the span\nbearing = "6 in"\nflange = "bottom"\n' in fast_text
 
 
 # ---------------------------------------------------------------------- a real terminal
