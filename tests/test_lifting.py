@@ -356,3 +356,49 @@ def test_a_wheel_edge_past_the_web_is_refused(edge, bad):
         assert "moving[0].wheel_edge" in str(exc.value) and "past the web" in str(exc.value)
     else:
         assert parse_job_text(text).moving[0].wheel_edge == pytest.approx(0.25 * IN)
+
+
+HUNG_ON_WHEELS = """schema = 1
+title = "Storage trolley rail"
+tags = ["not-rack", "not-lifting"]
+[beam]
+length = "10 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-2000 lbf"
+flange = "bottom"
+{wheels}
+[criteria]
+deflection = "L/240"
+"""
+
+
+def test_a_load_on_wheels_under_the_flange_of_a_job_that_is_not_lifting_gets_the_tip_check():
+    on_wheels = parse_job_text(HUNG_ON_WHEELS.format(wheels="wheels = 4"))
+    cap = capacity(on_wheels)
+    names = [c.name for c in cap.checks]
+    assert "wheel flange bending" in names
+    # by hand at the flange tip (point 2), EN 1993-6 Table 5.2 parallel flange (from memory):
+    # c_x2 = 0.730 - 1.580 lambda + 2.910 exp(-6 lambda), lambda = 2 a / (bf - tw), a = 1/4 in;
+    # W8X18 bf 5.25, tw 0.230, tf 0.330 in, Sx 15.2 in^3, 18 lb/ft (AISC Shapes Database
+    # v15.0); sigma = c_x2 (P / 4) / tf^2 + M / Sx = Fy / 1.67 with M = 225 lbf*ft of
+    # self-weight + P L / 4 (common practice)
+    lam = 2 * 0.25 / (5.25 - 0.23)
+    cx2 = 0.730 - 1.580 * lam + 2.910 * math.exp(-6 * lam)
+    allow = 50_000 / 1.67
+    per_k = cx2 * (2000 / 4) / 0.33**2 + 2000 * 10 / 4 * 12 / 15.2
+    k = (allow - 225 * 12 / 15.2) / per_k
+    assert cap.factor == pytest.approx(k, rel=5e-3)
+    # without wheels the load is a lug under the web (J10.1 only): no tip check
+    lug = capacity(parse_job_text(HUNG_ON_WHEELS.format(wheels="")))
+    assert "wheel flange bending" not in [c.name for c in lug.checks]
+    assert lug.factor > 2 * cap.factor

@@ -1163,10 +1163,13 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
     if fl.wood is not None:
         out += bearing_checks(job, sol, fl.wood)
         out += dead_load_checks(job, sol, st)
-    if lifting_job:
-        wc = lifting.wheel_check(job, sol, sec, job.material)
+    if lifting_job or getattr(job, "contacts", None):
+        # a load said to hang on trolley wheels or clamp jaws (`wheels`) bears on the flange
+        # tips whether or not the job is a lifting device
+        wc = lifting.wheel_check(job, sol, sec, job.material, only_given=not lifting_job)
         if wc is not None:
             out.append(wc)
+    if lifting_job:
         if bend.unit == "N*m":
             lc = lifting.lateral_check(job, sol, sec, job.material, lifting.profile_of(job),
                                        impact_of(job), bend.limit)

@@ -149,11 +149,14 @@ def flange_tf_at_wheel(sec, a: float) -> tuple[float, bool]:
     return max(tf, 0.3 * d["tf"]), tapered
 
 
-def wheel_check(job, sol, sec, mat, global_allow=None):
-    """The bottom-flange check under the worst wheel of the [[moving]] set in this state."""
+def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False):
+    """The bottom-flange check under the worst wheel of the [[moving]] set in this state, and
+    under the loads hung from the bottom flange. `only_given`: a job that is not a lifting
+    device, whose [[moving]] wheels are not taken as running on the bottom flange and whose
+    hung loads count only where `wheels` says they bear on trolley wheels or clamp jaws."""
     if sec.shape != "i-beam" or sec.axis != "strong":
         return None
-    ws = job.moving[0] if job.moving else None
+    ws = job.moving[0] if job.moving and not only_given else None
     # (load, contacts, flange tip to contact, words): the trolley's wheels, and on a lifting
     # job every point load hung from the bottom flange (a hoist on a beam clamp or a parked
     # trolley: two contacts at the flange tips, the most demanding fit; a lug welded under
@@ -181,7 +184,7 @@ def wheel_check(job, sol, sec, mat, global_allow=None):
                 got[0] = replace(got[0], value=got[0].value + ld.value)
             got[1] = max(got[1], given.get(ld.key or "", 0))
     for ld, n in together.values():
-        if not ld.value:
+        if not ld.value or only_given and not n:
             continue
         if n:
             words = (f"point load hung from the bottom flange on {n} trolley wheels or jaws "

@@ -760,7 +760,10 @@ def _batched(job, base, parts, cands, with_capacity):
     springs = any(s.kind == "spring" for s in job.supports)
     moving = bool(parts.moving)
     lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
-    exact = not springs and not moving and not (lifting and getattr(job, "hung", ()))
+    # a load hung from the bottom flange gets the flange-tip check on a lifting job, and on any
+    # job where `wheels` says it bears on trolley wheels or clamp jaws (checks.checks_for)
+    hung = bool(lifting and getattr(job, "hung", ()) or getattr(job, "contacts", None))
+    exact = not springs and not moving and not hung
     empty = Beam(L, 1.0, job.supports, ())
     ltb_segs = unbraced_segments(job, empty)
     spans = segments(empty)
@@ -1064,7 +1067,7 @@ def _batched(job, base, parts, cands, with_capacity):
             for i, r in enumerate(rs)]
     why = [x for x, on in (("springs: exact per-section spring forces", springs),
                            ("moving loads", moving),
-                           ("a load hung from a flange", lifting and bool(getattr(job, "hung", ()))),
+                           ("a load hung from a flange", hung),
                            ("tees and angles: F9 / F10 bending in the full check",
                             special.any())) if on]
     return rows, skipped, why
