@@ -550,7 +550,7 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
             "where the rated load would exceed it. Brace the member at the loads (beam.braces), "
             "or hang them below the flange (flange = \"bottom\")",
             "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
-            blocks_rating=False))
+            blocks_rating=mmax > top * (1 + 1e-9)))  # already past it as entered
     return out
 
 
@@ -664,6 +664,15 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
         return []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     computed = any(allow > 0 for _a, _b, allow in limits)
+    # already past that strength under the loads as entered: the verdict must not read as a
+    # clean pass (blocking), as capacity posts no rating from it
+    over = [(max(-moment.extremes(a, b).min, 0.0), allow) for a, b, allow in limits]
+    over = [(m, allow) for m, allow in over if m > allow * (1 + 1e-9) and m > 0]
+    worst = max(over, key=lambda x: x[0] / x[1] if x[1] > 0 else math.inf, default=None)
+    here = ""
+    if worst is not None and worst[1] > 0:
+        here = (f". Under the loads as entered it is already exceeded: {f(worst[0], 'moment')} "
+                f"hogging against the {f(worst[1], 'moment')} that buckling leaves")
     return [Unchecked(
         "lateral-torsional buckling of the bottom flange under hogging moment",
         (f"braced = true takes the member as braced all along, but a deck, boards or "
@@ -677,7 +686,8 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
            "strength that buckling leaves (Cb 1.0); " if computed else
            "shopbeam does not compute that buckling for this member, so no rating is posted "
            "while the moment hogs; ")
-        + hogging_remedy(job), hogging_source(job, st), blocks_rating=False)]
+        + hogging_remedy(job) + here, hogging_source(job, st),
+        blocks_rating=worst is not None)]
 
 
 # A member people walk on (a floor, mezzanine, platform, walkway): its deflection limit does
