@@ -620,3 +620,25 @@ def test_a_grade_the_product_is_not_made_to_is_not_rated_when_it_credits_more(
     assert any("is not a grade" in r for r in reasons) == blocked
     if blocked:
         assert any("NOT RATED" in p.message for p in warned(job, "beam.material"))
+
+
+@pytest.mark.parametrize("typed, said", [('"0.25%"', "if you meant 25 %"), ('"25%"', ""),
+                                         ("0.25", "")])
+def test_an_impact_under_one_percent_is_warned(typed, said):
+    job = parse_job_text(cantilever("36 in", tags='["not-rack"]') + f"[criteria]\nimpact = {typed}\n")
+    w = warned(job, "criteria.impact")
+    assert bool(w) == bool(said)
+    if said:
+        assert said in w[0].message and job.criteria.impact == pytest.approx(0.0025)
+
+
+def test_an_impact_number_in_quotes_says_how_to_write_it():
+    msg = refused(cantilever("36 in", tags='["not-rack"]') + '[criteria]\nimpact = "0.25"\n')[0].message
+    assert "without the quotes (impact = 0.25, read as 25%)" in msg and '"25%"' in msg
+
+
+@pytest.mark.parametrize("limit, looser", [("L/120", True), ("L/180", False), ("L/240", False)])
+def test_a_rack_limit_looser_than_rack_practice_is_warned(limit, looser):
+    # storage-rack beams L/180 (ANSI MH16.1, from memory; the named limit "rack")
+    job = parse_job_text(cantilever("36 in") + f'[criteria]\ndeflection = "{limit}"\n')
+    assert bool(warned(job, "criteria.deflection")) == looser

@@ -323,7 +323,16 @@ class _Reader:
                 self.error(f"cannot read {raw!r} as a percentage (write \"15%\")", key)
                 return None
         if v is None:
-            self.error(f"cannot read {raw!r}: write a fraction such as 0.15 or \"15%\"", key)
+            try:
+                n = float(str(raw).strip())
+            except ValueError:
+                n = None
+            if n is not None:  # a number in quotes
+                self.error(f"cannot read {raw!r} (a number in quotes): write it without the "
+                           f"quotes ({name} = {n:g}, read as {n:.0%}) or with a percent sign "
+                           f"(\"{n * 100:g}%\")", key)
+            else:
+                self.error(f"cannot read {raw!r}: write a fraction such as 0.15 or \"15%\"", key)
             return None
         if not (lo <= v <= hi):
             self.error(f"{raw!r} is outside {lo:.0%} to {hi:.0%}", key)
@@ -420,6 +429,12 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                f"{own}; remove basis", "criteria.basis")
     impact = r.fraction(crit, "impact", "criteria.impact")
     raw = crit.get("impact")
+    if impact is not None and 0 < impact < 0.01 and isinstance(raw, str):
+        # "0.25%" for 25 %: an allowance under 1 % is none a shop means
+        r.warn(f"impact = {raw!r} is read as {impact * 100:g} % ({impact:g} of the live load), "
+               f"which changes almost nothing; if you meant {impact * 1e4:g} %, write "
+               f"\"{impact * 1e4:g}%\" (or {impact * 100:g}); the checks use the value "
+               "written", "criteria.impact")
     if impact is not None and impact >= 1 and not isinstance(raw, str):
         # a multiplier typed for the allowance: 1.25 for "loads x 1.25" is 125 % added
         r.warn(f"impact = {raw:g} is read as {impact:.0%} added to the live loads (each live "
@@ -1342,6 +1357,21 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
                "profile's limit", "criteria.deflection")
 
 
+def _looser_than_rack(r: _Reader, criteria: Criteria, tags) -> None:
+    """A deflection limit written on a storage-rack job that is looser than rack practice's
+    L/180 (the named limit `rack`): warned, and the value written is used."""
+    if not criteria.deflection_given or not criteria.deflection_ratio:
+        return
+    if not RACK_TAGS.intersection(normal_tag(t) for t in tags):
+        return
+    n, why = DEFLECTION_PRESETS["rack"]
+    if LOOSEST_COMMON_RATIO <= criteria.deflection_ratio < n:  # looser still: warned already
+        r.warn(f"deflection = {criteria.deflection!r} is looser than the L/{n:g} of storage-rack "
+               f"beams ({why.split(' (', 1)[1].rstrip(')')}): the checks and the rating use the "
+               f"value written; write \"L/{n:g}\" (or deflection = \"rack\") for rack practice",
+               "criteria.deflection")
+
+
 def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -> None:
     """A lifting job whose force loads are all dead (the rated hook load typed case =
     "dead"), or that has none: the impact allowance is added to live loads only and the
@@ -1990,6 +2020,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
     _looser_than_lifting(r, criteria, tags, supports, length)
+    _looser_than_rack(r, criteria, tags)
     _lifting_without_live(r, criteria, tags, loads, moving)
     _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
