@@ -497,6 +497,13 @@ def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
 TOP_FLANGE_CB = 1 / 1.4
 
 
+# Limit states not checked whose rule `capacity` judges at the rated load itself: blocking in a
+# solve only where the loads as entered already pass them; a rating takes capacity's word.
+TOP_FLANGE_LTB = "lateral-torsional buckling with the loads on the top flange"
+HOGGING_LTB = "lateral-torsional buckling of the bottom flange under hogging moment"
+JUDGED_AT_RATED_LOAD = frozenset({TOP_FLANGE_LTB, HOGGING_LTB})
+
+
 def span_top_limits(job: Job, st) -> list[tuple[float, float, float]]:
     """(start, end, LTB strength at Cb = 1) of each unbraced length between brace points
     (not a cantilever: see `cantilever_top_limits`) that carries a load on its top flange at
@@ -542,7 +549,7 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
             continue
         f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
         out.append(Unchecked(
-            "lateral-torsional buckling with the loads on the top flange",
+            TOP_FLANGE_LTB,
             f"the unbraced length {f(a)} to {f(b)} carries loads on its top flange at points "
             "not braced, which destabilise it; the bending check takes Cb by eq. F1-1, for "
             f"loads at the shear centre. With Cb x 1/1.4 (= {cb:.3f}) the strength is "
@@ -674,7 +681,7 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
         here = (f". Under the loads as entered it is already exceeded: {f(worst[0], 'moment')} "
                 f"hogging against the {f(worst[1], 'moment')} that buckling leaves")
     return [Unchecked(
-        "lateral-torsional buckling of the bottom flange under hogging moment",
+        HOGGING_LTB,
         (f"braced = true takes the member as braced all along, but a deck, boards or "
          "sheeting brace only the flange or edge they sit on" if job.braced else
          "the braces hold the top flange only (braces_flange = \"top\")")

@@ -34,6 +34,7 @@ from html import escape
 
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
+from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.errors import InputError
@@ -295,7 +296,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
     k = cap.factor
     reasons = [str(r) for r in (getattr(cap, "not_rated", ()) or ())]
     for u in unchecked:
-        if getattr(u, "blocks_rating", True):
+        if getattr(u, "blocks_rating", True) and u.name not in JUDGED_AT_RATED_LOAD:
             why = f"{u.name} was not checked: {u.reason}"
             if why not in reasons and not any(u.name in r for r in reasons):
                 reasons.append(why)
