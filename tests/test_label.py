@@ -353,3 +353,45 @@ def test_a_linear_load_is_posted_as_its_total_with_its_end_intensities_and_patte
         '[[loads]]\ntype = "linear"')
     words = _flat(capacity(parse_job_text(two)))
     assert "rated on any or all of their spans" in words
+
+
+GERBER = """schema = 1
+title = "Gerber girder"
+tags = ["not-rack"]
+[beam]
+length = "30 ft"
+section = "W18X35"
+material = "A992"
+restrained = true
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[supports]]
+at = "10 ft"
+type = "hinge"
+[[supports]]
+at = "30 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-1000 lbf/ft"
+"""
+
+
+def test_a_rating_names_the_connections_it_rests_on_at_the_rated_load():
+    from shopbeam.design.capacity import to_json
+    from shopbeam.output.label import label_text, rating
+    # statics (common practice): the suspended 20 ft span hands V = w 20 / 2 to the hinge;
+    # the 10 ft cantilever carries w and V: root moment w 10^2 / 2 + V 10 = 150 w ft^2,
+    # root shear 20 w; at the rated factor k, w = 1000 k lbf/ft
+    cap = capacity(parse_job_text(GERBER))
+    k = cap.factor
+    assert cap.rated and 0.5 < k < 5
+    lbf, ft = 4.4482216152605, 0.3048
+    got = to_json(cap)["capacity"]
+    assert abs(got["fixed_ends"][0]["moment"]) == pytest.approx(150_000 * k * lbf * ft, rel=1e-9)
+    assert abs(got["fixed_ends"][0]["force"]) == pytest.approx(20_000 * k * lbf, rel=1e-9)
+    assert abs(got["hinges"][0]["shear"]) == pytest.approx(10_000 * k * lbf, rel=1e-9)
+    text = " ".join(label_text(rating(cap, analyze(cap.job).unchecked)).split())
+    assert "RATED ONLY WHILE the fixed end at 0 ft develops" in text.replace("| ", "")

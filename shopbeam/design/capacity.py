@@ -29,6 +29,7 @@ from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_li
                                        hogging_remedy, hogging_source, span_top_limits,
                                        span_top_strength, top_words, unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
+from shopbeam.design.connections import fixed_end_moments, hinge_shears
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
@@ -604,6 +605,24 @@ def _floor_fmt(value: float, kind: str, system: str) -> str:
     return units.fmt(value * down / disp, kind, system, 3)
 
 
+def at_factor(job, k: float):
+    """The job with every live load (and each wheel set's live part) times k."""
+    loads = tuple(replace(ld, value=ld.value * k, w1=ld.w1 * k, w2=ld.w2 * k)
+                  if ld.case == "live" else ld for ld in job.loads)
+    moving = tuple(replace(ws, live=tuple(v * k for v in ws.live)) for ws in job.moving)
+    return replace(job, loads=loads, moving=moving)
+
+
+def connections_at(job, k: float) -> tuple[list[dict], list[dict]]:
+    """(fixed ends, hinges) as `analysis.to_json` gives them, at the live-load factor k: what
+    the connections a rating rests on must carry at the rated load (not checked here)."""
+    if not any(s.kind in ("fixed", "hinge") for s in job.supports) or not math.isfinite(k):
+        return [], []
+    at_k = at_factor(job, k)
+    sol = analyze(at_k).solution
+    return fixed_end_moments(at_k, sol), hinge_shears(at_k, sol)
+
+
 # ------------------------------------------------------------------ output
 def to_json(res: CapacityResult) -> dict:
     out = base_json(analyze(res.job))
@@ -619,4 +638,7 @@ def to_json(res: CapacityResult) -> dict:
                        "max_load": dict(max_load_lines(res)),
                        "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
                        if res.evaluation else {}}
+    if k > 0 and math.isfinite(k):  # what the connections carry at the factor found
+        ends, hinges = connections_at(res.job, k)
+        out["capacity"]["fixed_ends"], out["capacity"]["hinges"] = ends, hinges
     return out

@@ -268,6 +268,30 @@ def _held_words(job) -> list[str]:
     return out
 
 
+def _connection_words(job, k: float) -> list[str]:
+    """What a fixed end's connection and an internal hinge must pass at the rated load: the
+    rating rests on them and they are not checked (design.connections)."""
+    if not any(s.kind in ("fixed", "hinge") for s in job.supports):
+        return []
+    from shopbeam.design.capacity import connections_at  # noqa: PLC0415 - these members only
+
+    try:
+        ends, hinges = connections_at(job, k)
+    except Exception:  # noqa: BLE001 - the rating itself stands on capacity's own solve
+        return ["RATED ONLY WHILE the fixed ends' and hinges' connections carry what the rated "
+                "load puts through them (see shopbeam solve; connections are not checked)."]
+    sy = job.units
+    parts = [f"the fixed end at {units.fmt(f['at'], 'length', sy)} develops "
+             f"{units.fmt(abs(f['moment']), 'moment', sy)} with "
+             f"{units.fmt(abs(f['force']), 'force', sy)} of shear" for f in ends]
+    parts += [f"the hinge at {units.fmt(h['at'], 'length', sy)} passes "
+              f"{units.fmt(abs(h['shear']), 'force', sy)}" for h in hinges]
+    if not parts:
+        return []
+    return ["RATED ONLY WHILE " + units.and_words(parts)
+            + " (the connections are not checked here)."]
+
+
 def _dead_words(job) -> str:
     """What the rated live loads sit on top of: the dead loads as entered and the member's
     own weight ("" when neither)."""
@@ -313,6 +337,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
     else:
         status = "rated"
         figs, notes = _figures(job, k)
+        notes += _connection_words(job, k)
         imp = impact_of(job)
         if imp:
             notes.insert(0, f"Includes a {imp:.0%} impact allowance on the live loads.")
