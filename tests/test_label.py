@@ -395,3 +395,20 @@ def test_a_rating_names_the_connections_it_rests_on_at_the_rated_load():
     assert abs(got["hinges"][0]["shear"]) == pytest.approx(10_000 * k * lbf, rel=1e-9)
     text = " ".join(label_text(rating(cap, analyze(cap.job).unchecked)).split())
     assert "RATED ONLY WHILE the fixed end at 0 ft develops" in text.replace("| ", "")
+
+
+def test_derived_label_figures_agree_with_the_posted_one_they_come_from():
+    # a posted figure is rounded down; the total of a uniform load and a trolley's per-wheel
+    # and whole-set figures are taken from it, so the label's figures agree with each other
+    # (and each is still no more than its exact value)
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
+    cap = capacity(job)
+    figs = {f.label.split(" (")[0]: f for f in label.rating(cap, analyze(job).unchecked).figures}
+    axle, wheel, whole = figs["MAX PER AXLE"], figs["MAX PER WHEEL"], figs["MAX MOVING LOAD"]
+    assert wheel.si == pytest.approx(axle.si / 2, rel=1e-9)
+    assert whole.si == pytest.approx(axle.si * 2, rel=1e-9)
+    assert all(f.si <= f.exact * (1 + 1e-12) for f in (axle, wheel, whole))
+    gerber = capacity(parse_job_text(GERBER))
+    figs = {f.label: f for f in label.rating(gerber, analyze(gerber.job).unchecked).figures}
+    w, total = figs["MAX UNIFORM LOAD"], figs["TOTAL"]
+    assert total.si == pytest.approx(w.si * 30 * 0.3048, rel=1e-9) and total.si <= total.exact

@@ -98,8 +98,10 @@ def floor_sig(value: float, sig: int = 3) -> float:
 
 
 def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
-           group: str = "") -> Figure:
-    """A figure rounded down in display units, noting the unrounded value when they differ."""
+           group: str = "", exact: float | None = None) -> Figure:
+    """A figure rounded down in display units, noting the unrounded value when they differ.
+    `exact`: the figure's own value before any rounding, where `si_value` is derived from
+    another posted (rounded) figure."""
     disp = abs(units.to_display(si_value, kind, system))
     down = floor_sig(disp)
     factor = units.to_display(1.0, kind, system)
@@ -115,7 +117,8 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
         whole = math.floor(disp)
         notes.append(f"rounded down from {whole}" if disp >= 1000 and whole > down
                      else f"rounded down from {units.num(disp, max(5, len(str(whole)) + 1))}")
-    return Figure(label, text, "; ".join(notes), down / factor, abs(si_value), group)
+    return Figure(label, text, "; ".join(notes), down / factor,
+                  abs(si_value) if exact is None else abs(exact), group)
 
 
 # ------------------------------------------------------------------ the figures
@@ -145,9 +148,12 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
 
     if len(live) == 1 and not mv and live[0].kind == "uniform":
         ld = live[0]
-        figs.append(posted("MAX UNIFORM LOAD", ld.w1 * k, "line_load", sy,
-                           f"over {pos(ld.start)} to {pos(ld.end)}", where))
-        figs.append(posted("TOTAL", ld.total_force * k, "force", sy, "spread evenly", where))
+        w = posted("MAX UNIFORM LOAD", ld.w1 * k, "line_load", sy,
+                   f"over {pos(ld.start)} to {pos(ld.end)}", where)
+        figs.append(w)
+        # the total of the posted figure (never more than the exact total), so the two agree
+        figs.append(posted("TOTAL", w.si * (ld.end - ld.start), "force", sy, "spread evenly",
+                           where, exact=ld.total_force * k))
     elif len(live) == 1 and not mv and live[0].kind == "point":
         ld = live[0]
         figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
@@ -175,14 +181,20 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
             # wheels_per_axle wheels: a monorail trolley runs one each side of the web
             wheels = [abs(w) * n * k for w in m.live]
             per = max(int(job.moving[0].wheels_per_axle if job.moving else 1), 1)
+            # the per-wheel and whole-set figures come from the posted axle figure where the
+            # axles are alike, so the three agree (each still no more than its exact value)
+            axle = posted(f"MAX PER AXLE ({m.label})", max(wheels), "force", sy,
+                          f"{len(wheels)} axles", where)
+            alike = max(wheels) - min(wheels) <= 1e-9 * max(wheels)
             if len(wheels) > 1:
-                figs.append(posted(f"MAX PER AXLE ({m.label})", max(wheels), "force", sy,
-                                   f"{len(wheels)} axles", where))
+                figs.append(axle)
             if per > 1:
-                figs.append(posted(f"MAX PER WHEEL ({m.label})", max(wheels) / per, "force",
-                                   sy, f"{per} wheels per axle", where))
-            figs.append(posted(f"MAX MOVING LOAD ({m.label})", sum(wheels), "force", sy,
-                               "anywhere on its travel", where))
+                figs.append(posted(f"MAX PER WHEEL ({m.label})", axle.si / per, "force",
+                                   sy, f"{per} wheels per axle", where,
+                                   exact=max(wheels) / per))
+            figs.append(posted(f"MAX MOVING LOAD ({m.label})",
+                               axle.si * len(wheels) if alike else sum(wheels), "force", sy,
+                               "anywhere on its travel", where, exact=sum(wheels)))
         tot = sum(abs(ld.total_force) for ld in live)
         if tot and len(live) > 1:
             figs.append(posted("TOTAL", tot * k, "force", sy, "placed as listed above", where))
