@@ -289,3 +289,21 @@ def test_self_weight_false_holds_for_every_section_swept(monkeypatch):
         assert r.ratio == pytest.approx(full[r.designation], rel=1e-9), r.designation
     assert full["W12X30"] < 1.0
     assert res.lightest.designation == "W12X30"
+
+
+def test_a_job_with_no_live_load_sizes_but_rates_nothing():
+    # the README: a job with no live load gives no factor (JSON null) and nothing to rate,
+    # as capacity says of the same section
+    from pathlib import Path
+
+    from shopbeam.design.capacity import capacity
+    from shopbeam.design.sizing import size, to_json
+    from shopbeam.jobs.jobfile import load_job
+    from shopbeam.output.sizingreport import render
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "sign-bracket.toml")
+    res = size(job, "HSS")
+    assert res.lightest is not None and res.lightest_rated is None
+    got = to_json(res)
+    assert got["passing"][0]["factor"] is None and got["passing"][0]["rated"] is False
+    assert capacity(job).rated is False
+    assert " inf" not in render(res)

@@ -122,8 +122,10 @@ class SizeResult:
 
     @property
     def lightest_rated(self) -> SizeRow | None:
-        """The lightest passing section checked in full with no reason to withhold a rating."""
-        p = [r for r in self.passing if r.checked == "full" and not r.not_rated]
+        """The lightest passing section checked in full with no reason to withhold a rating
+        (none when there is no live load to rate: k infinite)."""
+        p = [r for r in self.passing if r.checked == "full" and not r.not_rated
+             and not math.isinf(r.factor)]
         return p[0] if p else None
 
     @property
@@ -1289,7 +1291,7 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
                 "governing": r.governing, "factor": r.factor if math.isfinite(r.factor) else None,
                 "price_per_m": r.price_per_m, "material": getattr(r.material, "key", ""),
                 "checked": r.checked, "not_rated": list(r.not_rated),
-                "rated": not r.not_rated}
+                "rated": not r.not_rated and not math.isinf(r.factor)}  # inf: nothing to rate
 
     return {"schema": 1, "title": res.job.title, "kind": res.kind, "swept": len(res.rows),
             "passing": [row(r) for r in rows], "seconds": res.seconds, "method": res.method,

@@ -112,7 +112,7 @@ class Job:
     members: int = 1
     levels: int | None = None  # beam.levels: levels of beams in one rack bay (the per-bay total)
     welded: bool = False
-    braced: bool = False  # compression flange braced all along (beam.braced)
+    braced: bool = False  # top flange or edge braced all along (beam.braced)
     braces: tuple[float, ...] = ()  # lateral brace positions, m, sorted (beam.braces)
     # beam.braces_flange: "top" when the braces hold the top flange only (joist seats, no
     # kicker to the bottom flange), "both" when they hold the section against twist; None when
@@ -529,7 +529,8 @@ def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | 
 def _read_bracing(r: _Reader, beam: dict, length) -> tuple[bool, tuple[float, ...]]:
     """beam.braced and beam.braces (lateral brace points, sorted)."""
     braced = r.boolean(beam, "braced", "beam.braced", False,
-                       "braced must be true or false (compression flange braced all along)")
+                       "braced must be true or false (the top flange or edge braced all along, "
+                       "by a deck, boards or sheeting)")
     raw = beam.get("braces", [])
     if not isinstance(raw, list):
         r.error("braces must be a list of positions, e.g. braces = [\"4 ft\", \"8 ft\"]",

@@ -3,6 +3,8 @@ and the table of those that pass (or the closest), with the cautions."""
 
 from __future__ import annotations
 
+import math
+
 import textwrap
 
 from shopbeam import units
@@ -10,6 +12,11 @@ from shopbeam.cautions import cautions_for
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.design.sizing import SizeResult, shown_rows
 
+
+
+def _k(factor: float) -> str:
+    """The factor column: '-' where there is no live load to scale (k infinite)."""
+    return f"{factor:7.3f}" if not math.isinf(factor) else f"{'-':>7}"
 
 def render(res: SizeResult, top: int = 15) -> str:
     job = res.job
@@ -63,7 +70,7 @@ def render(res: SizeResult, top: int = 15) -> str:
     for r in shown:
         price = f"  {_money(r.price_per_m, sy)}" if r.price_per_m is not None else ""
         lines.append(f"  {r.designation[:22]:<22} {units.fmt(r.weight, 'mass_per_length', sy):>12} "
-                     f"{r.ratio:7.3f} {r.governing:<11} {r.factor:7.3f}{price}"
+                     f"{r.ratio:7.3f} {r.governing:<11} {_k(r.factor)}{price}"
                      + ("  NOT RATED" if r.not_rated else ""))
     groups: dict[str, list[str]] = {}  # one reason, the rows it holds back
     for r in shown:
