@@ -412,3 +412,19 @@ def test_derived_label_figures_agree_with_the_posted_one_they_come_from():
     figs = {f.label: f for f in label.rating(gerber, analyze(gerber.job).unchecked).figures}
     w, total = figs["MAX UNIFORM LOAD"], figs["TOTAL"]
     assert total.si == pytest.approx(w.si * 30 * 0.3048, rel=1e-9) and total.si <= total.exact
+
+
+def test_a_member_that_fails_under_its_dead_loads_is_not_rated_in_the_json():
+    # 30 ft W8X18 under 500 lbf/ft dead: w L^2 / 8 = 56.3 kip*ft (common practice) against
+    # Mp / 1.67 = 50 x 17.0 / 1.67 / 12 = 42.4 kip*ft (AISC 360-16 F2-1, AISC Shapes
+    # Database v15.0 Zx 17.0 in^3): k = 0, nothing may be posted
+    from shopbeam.design.capacity import to_json
+    text = GERBER.replace('length = "30 ft"', 'length = "30 ft"').replace(
+        'section = "W18X35"', 'section = "W8X18"')
+    text = text.split("[[supports]]")[0] + (
+        '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "30 ft"\ntype = "roller"\n'
+        '[[loads]]\ntype = "uniform"\nvalue = "-500 lbf/ft"\ncase = "dead"\n'
+        '[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n')
+    cap = capacity(parse_job_text(text))
+    assert cap.factor == 0 and not cap.rated and to_json(cap)["rated"] is False
+    assert label.rating(cap, analyze(cap.job).unchecked).status == "do not load"

@@ -106,8 +106,9 @@ class CapacityResult:
     @property
     def rated(self) -> bool:
         """A load may be posted: nothing withholds it and there is a factor to post (none
-        when the job has no live loads, or they make no demand)."""
-        return not self.not_rated and math.isfinite(self.factor)
+        when the job has no live loads, or they make no demand, and none when the member
+        fails under its own weight and dead loads alone: k = 0, DO NOT LOAD)."""
+        return not self.not_rated and math.isfinite(self.factor) and self.factor > 0
 
     @property
     def checks(self) -> tuple[Check, ...]:
