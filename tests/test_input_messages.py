@@ -642,3 +642,19 @@ def test_a_rack_limit_looser_than_rack_practice_is_warned(limit, looser):
     # storage-rack beams L/180 (ANSI MH16.1, from memory; the named limit "rack")
     job = parse_job_text(cantilever("36 in") + f'[criteria]\ndeflection = "{limit}"\n')
     assert bool(warned(job, "criteria.deflection")) == looser
+
+
+def test_an_upward_total_is_named_by_its_own_key_and_fix():
+    text = cantilever("36 in", tags='["not-rack"]').replace(
+        'type = "point"\nat = "36 in"\nvalue = "-2000 lbf"',
+        'type = "uniform"\nstart = "0 in"\nend = "36 in"\ntotal = "700 lbf"')
+    w = warned(parse_job_text(text), "loads[0].total")
+    assert w and 'total = "-700 lbf"' in w[0].message
+
+
+def test_an_upward_linear_load_gets_both_ends_back_negative():
+    text = cantilever("36 in", tags='["not-rack"]').replace(
+        'type = "point"\nat = "36 in"\nvalue = "-2000 lbf"',
+        'type = "linear"\nstart = "0 in"\nend = "36 in"\nvalue = ["20 lbf/ft", "-60 lbf/ft"]')
+    w = warned(parse_job_text(text), "loads[0].value")
+    assert w and 'value = ["-20 lbf/ft", "-60 lbf/ft"]' in w[0].message

@@ -1199,21 +1199,30 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
         raw = raw_loads[i] if i < len(raw_loads) and isinstance(raw_loads[i], dict) else {}
         if raw.get("uplift") is True:
             continue
+        key, fix = "value", ""
         if ld.kind == "point" and ld.value > 0:
             shown = units.fmt(ld.value, "force", system)
-        elif ld.kind in ("uniform", "linear") and max(ld.w1, ld.w2) > 0:
+        elif ld.kind == "uniform" and ld.w1 > 0 and "total" in raw:
+            shown = units.fmt(ld.total_force, "force", system)  # as typed: a total
+            key = "total"
+        elif ld.kind == "linear" and max(ld.w1, ld.w2) > 0:
+            shown = units.fmt(max(ld.w1, ld.w2), "line_load", system)
+            ends = [units.fmt(-abs(w), "line_load", system) for w in (ld.w1, ld.w2)]
+            fix = f"value = [\"{ends[0]}\", \"{ends[1]}\"]"
+        elif ld.kind == "uniform" and max(ld.w1, ld.w2) > 0:
             shown = units.fmt(max(ld.w1, ld.w2), "line_load", system)
         else:
             continue
-        up.append((ld, shown))
-    for ld, shown in up:
+        up.append((ld, shown, key, fix or f"{key} = \"-{shown.lstrip('+')}\""))
+    for ld, shown, key, fix in up:
         name = f" ({ld.label})" if ld.label else ""
-        every = " Every force load of this job points up." if len(up) == sum(
-            1 for x in loads if x.kind != "moment") else ""
+        forces = sum(1 for x in (raw_loads if isinstance(raw_loads, list) else [])
+                     if not (isinstance(x, dict) and x.get("type") == "moment"))
+        every = " Every force load of this job points up." if len(up) == forces else ""
         r.warn(f"this load{name} points UP (+{shown.lstrip('+')}): forces are + up, so a "
-               f"weight is negative (value = \"-{shown.lstrip('+')}\").{every} If the push up "
-               "is intended (uplift), add uplift = true to the load", f"{ld.key}.value")
-    return [ld.key + (f" ({ld.label})" if ld.label else "") for ld, _shown in up]
+               f"weight is negative ({fix}).{every} If the push up "
+               "is intended (uplift), add uplift = true to the load", f"{ld.key}.{key}")
+    return [ld.key + (f" ({ld.label})" if ld.label else "") for ld, *_ in up]
 
 
 def _loads_at_supports(r: _Reader, loads, supports, length, system: str) -> list[str]:
