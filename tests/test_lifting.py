@@ -402,3 +402,12 @@ def test_a_load_on_wheels_under_the_flange_of_a_job_that_is_not_lifting_gets_the
     lug = capacity(parse_job_text(HUNG_ON_WHEELS.format(wheels="")))
     assert "wheel flange bending" not in [c.name for c in lug.checks]
     assert lug.factor > 2 * cap.factor
+
+
+@pytest.mark.parametrize("spacing, warns", [('"8 in"', False), ('"8 ft"', True)])
+def test_trolley_axles_feet_apart_are_warned(spacing, warns):
+    # a hoist trolley's wheelbase is inches (common practice, from memory)
+    from pathlib import Path
+    text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
+    job = parse_job_text(text.replace('spacing = ["8 in"]', f"spacing = [{spacing}]"))
+    assert bool([w for w in job.warnings if w.key == "moving[0].spacing"]) == warns

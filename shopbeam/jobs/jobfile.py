@@ -1382,6 +1382,23 @@ def _looser_than_rack(r: _Reader, criteria: Criteria, tags) -> None:
                "criteria.deflection")
 
 
+# A hoist trolley's axles are inches apart (a wheelbase of about 6 to 24 in; common
+# practice, from memory): a spacing past TROLLEY_SPACING on a lifting job is most likely
+# feet typed for inches, and it lets the axles act apart, lowering the moment.
+TROLLEY_SPACING = 4 * 0.3048  # m
+
+
+def _trolley_spacing(r: _Reader, moving, system: str) -> None:
+    for ws in moving:
+        gaps = [b - a for a, b in zip(ws.offsets, ws.offsets[1:])]
+        if gaps and max(gaps) > TROLLEY_SPACING:
+            r.warn(f"the axles of {ws.label or ws.key} are {units.fmt(max(gaps), 'length', system)} "
+                   "apart, more than a hoist trolley's wheelbase (inches as a rule): check the "
+                   "unit (\"12 in\", not \"12 ft\"); axles far apart act apart and lower the "
+                   "moment. Two trolleys tied together are fine; the spacing written is used",
+                   f"{ws.key}.spacing")
+
+
 def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -> None:
     """A lifting job whose force loads are all dead (the rated hook load typed case =
     "dead"), or that has none: the impact allowance is added to live loads only and the
@@ -2022,6 +2039,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
+    if is_lifting(tags) or criteria.lifting:
+        _trolley_spacing(r, moving, system)
     upward += _upward_wheels(r, moving, system)
     if (length is not None and criteria.deflection_abs is not None
             and criteria.deflection_abs > length / LOOSEST_COMMON_RATIO):
