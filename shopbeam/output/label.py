@@ -113,6 +113,8 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
         kg = floor_sig(abs(si_value) / units.G0)
         text += f" ({units.num(kg, 6)} kg{'/m' if kind == 'line_load' else ''})"
     notes = [note] if note else []
+    if exact is not None:  # say what the figure itself was before rounding
+        disp = abs(units.to_display(exact, kind, system))
     if down < disp * (1 - 1e-9):
         whole = math.floor(disp)
         notes.append(f"rounded down from {whole}" if disp >= 1000 and whole > down
