@@ -658,3 +658,16 @@ def test_an_upward_linear_load_gets_both_ends_back_negative():
         'type = "linear"\nstart = "0 in"\nend = "36 in"\nvalue = ["20 lbf/ft", "-60 lbf/ft"]')
     w = warned(parse_job_text(text), "loads[0].value")
     assert w and 'value = ["-20 lbf/ft", "-60 lbf/ft"]' in w[0].message
+
+
+def test_a_grade_gap_belongs_to_the_section_not_to_the_job():
+    # the job's channel in A500-C is not rated; the same job sized over HSS (made in A500-C)
+    # is judged section by section, so its tube rows can be rated
+    from shopbeam.design.sizing import size
+    text = cantilever("36 in", tags='["not-rack"]').replace(
+        'section = "HSS4x2x3/16"', 'section = "C6X8.2"')
+    job = parse_job_text(text)
+    assert any("is not a grade" in r for r in capacity(job).not_rated)
+    res = size(job, "HSS")
+    assert res.lightest_rated is not None
+    assert not any("is not a grade" in w for r in res.passing for w in r.not_rated)

@@ -35,8 +35,8 @@ from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.design.lifting import profile_of
-from shopbeam.jobs.jobfile import (STUBBY_LIMIT, kind_mismatch, lifting_uniform_words, strength_slip,
-                                   stubby_words)
+from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
+                                   strength_slip, stubby_words)
 
 
 # ------------------------------------------------------------------ root finding
@@ -164,8 +164,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    + ", ".join(live_at)
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     out += list(getattr(job, "long_bearings", ()))
-    if getattr(job, "grade_gap", ""):
-        out.append(job.grade_gap)
+    gap = grade_gap(getattr(st, "section", None) or job.section, job.material, job.units)
+    if gap:
+        out.append(gap)
     mixed = kind_mismatch(job.material, job.units)
     if mixed:
         out.append(f"the typed-in material's {mixed}. Fix e or the kind")

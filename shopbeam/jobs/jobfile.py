@@ -141,7 +141,6 @@ class Job:
     # at the <kind> support at <x>"; a capacity or rating is not posted on them.
     at_support: tuple[str, ...] = ()
     long_bearings: tuple[str, ...] = ()  # bearing too long for a point model (no rating)
-    grade_gap: str = ""  # a grade the product is not made to, crediting more yield (no rating)
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -1607,6 +1606,16 @@ _ROLLED_GRADES = ("A36", "A572-50", "A992")  # grades of rolled shapes, plate an
 EN_SECTIONS = "EN 10365"  # the source of the catalog's European sections (IPE, HE, UPN)
 
 
+def grade_gap(section, material, system: str = "us") -> str:
+    """Why no rating may rest on this grade for this section: a grade the product is not
+    made to that credits more yield than the grade it is bought in ("" when none), for any
+    section a check or a sizing sweep puts with the material (`_grade_mismatch`)."""
+    mkind = getattr(material, "kind", "custom")
+    if section is None or material is None or mkind == "custom":
+        return ""
+    return _grade_mismatch(_Reader("", None), section, material, mkind, system)
+
+
 def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> str:
     """A grade that the product is not made to gets a warning naming the usual grade: a tube
     grade on a rolled shape or bar (the check would credit a yield that shape is not bought
@@ -2017,7 +2026,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
-    grade_gap = _family_mismatch(r, section, material, system)
+    _family_mismatch(r, section, material, system)
     if welded and getattr(material, "kind", "") == "aluminum" and \
             not getattr(material, "fy_welded", None):
         r.warn("welded = true on a typed-in aluminium with no fy_welded: welding anneals the "
@@ -2094,7 +2103,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
-        long_bearings=tuple(long_bearings), grade_gap=grade_gap,
+        long_bearings=tuple(long_bearings),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
