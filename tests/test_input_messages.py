@@ -671,3 +671,41 @@ def test_a_grade_gap_belongs_to_the_section_not_to_the_job():
     res = size(job, "HSS")
     assert res.lightest_rated is not None
     assert not any("is not a grade" in w for r in res.passing for w in r.not_rated)
+
+
+@pytest.mark.parametrize("moving", [False, True])
+def test_a_relieving_couple_is_judged_on_the_loads_as_entered_with_moving_loads_too(moving):
+    # a 10 ft simple span under 100 lbf/ft with a 500 lbf*ft end couple: one sense of the
+    # couple lowers the largest moment (w L^2 / 8 = 1250 lbf*ft, common practice) and the
+    # other raises it; a wheel set on the job must not change which one is named
+    from shopbeam.design.analysis import analyze
+    named = []
+    for sign in ("", "-"):
+        text = f"""schema = 1
+title = "rail"
+tags = ["not-rack", "not-lifting"]
+[beam]
+length = "10 ft"
+section = "W8X18"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-100 lbf/ft"
+[[loads]]
+type = "moment"
+at = "0 ft"
+value = "{sign}500 lbf*ft"
+"""
+        if moving:
+            text += ('[[moving]]\nlabel = "cart"\nloads = ["-200 lbf", "-200 lbf"]\n'
+                     'spacing = ["12 in"]\n')
+        res = analyze(parse_job_text(text))
+        named.append(any("works against the other loads" in c for c in res.cautions))
+    assert sorted(named) == [False, True]

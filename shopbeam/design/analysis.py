@@ -193,6 +193,7 @@ def analyze(job: Job) -> Result:
     """Solve the job's member and run its checks. Raises UnstableBeam."""
     try:
         sol = sound_solve(job.beam(), length_formatter(job.units), file=job.path or "")
+        entered = sol  # the loads as entered (a moving-load job shows its governing state)
     except UnstableBeam as e:
         raise UnstableBeam(e.args[0], file=job.path or "") from None
     except InputError as e:
@@ -237,7 +238,7 @@ def analyze(job: Job) -> Result:
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment) \
         + span_top_unchecked(job, st, sol.moment)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
-        + braces_note(job, st, sol.moment) + couple_notes(job, sol)
+        + braces_note(job, st, sol.moment) + couple_notes(job, entered)
     # every limit state not checked is named in the report, as on the label and in the JSON
     # (check_notes names the member's own strength ones)
     said = set(st.unchecked)
