@@ -674,8 +674,8 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     computed = any(allow > 0 for _a, _b, allow in limits)
     # already past that strength under the loads as entered: the verdict must not read as a
     # clean pass (blocking), as capacity posts no rating from it
-    over = [(max(-moment.extremes(a, b).min, 0.0), allow) for a, b, allow in limits]
-    over = [(m, allow) for m, allow in over if m > allow * (1 + 1e-9) and m > 0]
+    over = [(-moment.extremes(a, b).min, allow) for a, b, allow in limits]
+    over = [(m, allow) for m, allow in over if m > allow * (1 + 1e-9)]  # hogs past it
     worst = max(over, key=lambda x: x[0] / x[1] if x[1] > 0 else math.inf, default=None)
     here = ""
     if worst is not None and worst[1] > 0:

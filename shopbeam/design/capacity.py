@@ -34,6 +34,7 @@ from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
 from shopbeam.engine.piecewise import Piecewise
+from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
 from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
                                    strength_slip, stubby_words)
@@ -621,7 +622,9 @@ def connections_at(job, k: float) -> tuple[list[dict], list[dict]]:
     if not any(s.kind in ("fixed", "hinge") for s in job.supports) or not math.isfinite(k):
         return [], []
     at_k = at_factor(job, k)
-    sol = analyze(at_k).solution
+    # the loads as entered at k, as analyze solves them; with a wheel set, the state analyze
+    # shows (its governing one), which the connection figures read
+    sol = analyze(at_k).solution if at_k.moving else sound_solve(at_k.beam())
     return fixed_end_moments(at_k, sol), hinge_shears(at_k, sol)
 
 

@@ -790,12 +790,11 @@ def _bearing_room(r: _Reader, length, supports, loads, bearing, bearings: dict,
 
     tol = SNAP * length
     held = sorted(s.at for s in supports if s.takes_force)
-    places = [(s.key, s.at, "support") for s in supports
-              if s.takes_force and s.kind != "fixed"]
-    places += [(ld.key, ld.at, "load") for ld in loads if ld.kind == "point"
+    places = [(s.key, s.at) for s in supports if s.takes_force and s.kind != "fixed"]
+    places += [(ld.key, ld.at) for ld in loads if ld.kind == "point"
                and not any(abs(ld.at - h) <= tol for h in held)]  # on a support: warned
     zones = []
-    for key, at, _what in places:
+    for key, at in places:
         b = bearings.get(key, bearing)
         if not b:
             continue
@@ -826,7 +825,7 @@ def _bearing_room(r: _Reader, length, supports, loads, bearing, bearings: dict,
             say(f"bearing {f(b)} centred on {key} at {f(at)} runs "
                 f"{f(max(-lo, hi - length))} past the end of the member", key)
     zones.sort()
-    for (lo1, hi1, k1, _, b1), (lo2, hi2, k2, _, b2) in zip(zones, zones[1:]):
+    for (lo1, hi1, k1, *_), (lo2, hi2, k2, *_) in zip(zones, zones[1:]):
         if hi1 > lo2 + tol:
             say(f"the bearings of {k1} ({f(lo1)} to {f(hi1)}) and {k2} ({f(lo2)} to "
                 f"{f(hi2)}) overlap", k2, k1)
@@ -1213,11 +1212,11 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
         else:
             continue
         up.append((ld, shown, key, fix or f"{key} = \"-{shown.lstrip('+')}\""))
+    forces = sum(1 for x in (raw_loads if isinstance(raw_loads, list) else [])
+                 if not (isinstance(x, dict) and x.get("type") == "moment"))
+    every = " Every force load of this job points up." if len(up) == forces else ""
     for ld, shown, key, fix in up:
         name = f" ({ld.label})" if ld.label else ""
-        forces = sum(1 for x in (raw_loads if isinstance(raw_loads, list) else [])
-                     if not (isinstance(x, dict) and x.get("type") == "moment"))
-        every = " Every force load of this job points up." if len(up) == forces else ""
         r.warn(f"this load{name} points UP (+{shown.lstrip('+')}): forces are + up, so a "
                f"weight is negative ({fix}).{every} If the push up "
                "is intended (uplift), add uplift = true to the load", f"{ld.key}.{key}")
@@ -1556,12 +1555,11 @@ def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
     return out
 
 
-def _family_mismatch(r: _Reader, section, material, system: str = "us") -> str:
+def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
     """A lumber size in steel, or a steel shape in lumber, is refused: the checks and the
-    weight would be for a member that does not exist. Returns why a grade the product is not
-    made to withholds the rating ("" when none does: `_grade_mismatch`)."""
+    weight would be for a member that does not exist."""
     if section is None or material is None:
-        return ""
+        return
     lumber_size = is_wood_size(section)
     mkind = getattr(material, "kind", "custom")
     if mkind == "custom":
@@ -1579,7 +1577,7 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> str:
                        "([beam.section] shape = \"rect-bar\" with its sizes)" if lumber_size
                        else "check e (steel is 29,000 ksi, aluminium 10,100 ksi), or give a "
                        "lumber size with kind = \"lumber\""), "beam.section")
-            return ""
+            return
     if lumber_size and mkind in ("steel", "stainless", "aluminum"):
         r.error(f"section {section.designation!r} is a lumber size (sawn or LVL) but material "
                 f"{material.key!r} is {mkind}: give a wood material (e.g. material = "
@@ -1591,8 +1589,7 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> str:
                 "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
                 "material such as \"A992\"", "beam.section")
     else:
-        return _grade_mismatch(r, section, material, mkind, system)
-    return ""
+        _grade_mismatch(r, section, material, mkind, system)
 
 
 _TUBES = ("rect-tube", "round-tube", "pipe")

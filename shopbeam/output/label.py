@@ -37,7 +37,7 @@ from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
 from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
-from shopbeam.errors import InputError
+from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.jobs.rules import rack_arm
 from shopbeam.output.present import present_capacity
 
@@ -291,7 +291,7 @@ def _connection_words(job, k: float) -> list[str]:
 
     try:
         ends, hinges = connections_at(job, k)
-    except Exception:  # noqa: BLE001 - the rating itself stands on capacity's own solve
+    except (InputError, UnstableBeam):  # the rating stands on capacity's own solve
         return ["RATED ONLY WHILE the fixed ends' and hinges' connections carry what the rated "
                 "load puts through them (see shopbeam solve; connections are not checked)."]
     sy = job.units
