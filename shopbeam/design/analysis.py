@@ -523,9 +523,61 @@ def span_top_limits(job: Job, st) -> list[tuple[float, float, float]]:
               and ld.key not in hung
               and (a + tol < ld.at < b - tol and not any(abs(ld.at - h) <= tol for h in held)
                    if ld.kind == "point" else min(b, ld.end) - max(a, ld.start) > tol)]
-        if on:
+        if on or _rolls_through(job, a, b):
             out.append((a, b, l1))
     return out
+
+
+def rolling_on_top(job: Job) -> bool:
+    """A `[[moving]]` set on a job that is not a lifting device: its wheels are taken as
+    rolling on the top flange (a cart on a platform or track beam); a lifting job's trolley
+    hangs from the bottom flange."""
+    return bool(job.moving) and not (job.lifting or getattr(job.criteria, "lifting", ""))
+
+
+def _rolls_through(job: Job, a: float, b: float) -> bool:
+    """Whether the wheels rolling on the top flange can stand inside a..b."""
+    if not rolling_on_top(job):
+        return False
+    t0, t1 = job.moving[0].travel
+    return min(b, t1) - max(a, t0) > 1e-9 * job.length
+
+
+# Wheel positions judged per unbraced length for the top-flange rule of a rolling set: every
+# 1/MOVING_TOP_STEPS of the travel, with the positions where the exact envelopes peak
+MOVING_TOP_STEPS = 200
+
+
+def moving_top_worst(job: Job, st, ss, k: float, a: float, b: float, l1: float):
+    """(demand, top strength, Cb x 1/1.4, first-wheel position) where the moment over a..b
+    stands highest against the strength left by wheels rolling on the top flange, over the
+    wheel positions (each pattern of a patterned job too) with a wheel inside a..b, or every
+    position where static loads also bear on the top flange there. Each position's Cb is eq.
+    F1-1 of that position's own moment diagram x 1/1.4; the positions are every
+    1/MOVING_TOP_STEPS of the travel plus those where the exact envelopes peak (the ratio is
+    continuous in the position, so a step of travel / 200 misses at most a sliver of it).
+    None when no position puts a wheel inside a..b."""
+    fl = st.flexure
+    mv = ss.parts.moving[0]
+    lo, hi = mv.p_range
+    tol = 1e-9 * job.length
+    static_on = any(abs(x - a) <= tol and abs(y - b) <= tol
+                    for x, y, _ in span_top_limits(replace(job, moving=()), st))
+    grid = set(np.linspace(lo, hi, MOVING_TOP_STEPS + 1).tolist()) if hi > lo else {lo}
+    best = None
+    for pattern in ss.patterns:
+        static = ss.static_loads(k, pattern)
+        env = loading.moving_envelope(job, ss, static, k, st, pattern=tuple(pattern))
+        pos = sorted(grid | {float(p) for p in env.positions})
+        if not static_on:
+            pos = [p for p in pos if any(a + tol < p + s < b - tol for s in mv.offsets)]
+        if not pos:
+            continue
+        for p, sol in loading.moving_states(job, ss, static, k, st, positions=pos):
+            top, cb, m = span_top_strength(fl, l1, sol.moment, a, b)
+            if top > 0 and (best is None or m / top > best[0] / best[1]):
+                best = (m, top, cb, float(p))
+    return best
 
 
 def span_top_strength(fl, l1: float, moment, a: float, b: float
@@ -541,22 +593,38 @@ def span_top_strength(fl, l1: float, moment, a: float, b: float
 def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
     """Loads on the top flange of an unbraced length between braces, where that loading would
     lower the bending strength below the figure checked: listed; `capacity` posts no rating
-    where the moment at the rated load would exceed the lower strength."""
+    where the moment at the rated load would exceed the lower strength. Wheels rolling on
+    the top flange (`rolling_on_top`) are judged over their positions at the loads as
+    entered (`moving_top_worst`)."""
     out = []
     fl = st.flexure
+    ss = None
     for a, b, l1 in span_top_limits(job, st):
-        top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
+        where = ""
+        if _rolls_through(job, a, b):
+            ss = ss or loading.state_set(job)
+            got = moving_top_worst(job, st, ss, 1.0, a, b, l1)
+            if got is None:
+                continue
+            mmax, top, cb, p = got
+            where = (f", worst with the first wheel of {job.moving[0].label or 'the set'} at "
+                     f"{units.fmt(p, 'length', job.units)} (the wheels of [[moving]] on a job "
+                     "not tagged lifting are taken as rolling on the top flange)")
+        else:
+            top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
         if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:
             continue
         f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
         out.append(Unchecked(
             TOP_FLANGE_LTB,
             f"the unbraced length {f(a)} to {f(b)} carries loads on its top flange at points "
-            "not braced, which destabilise it; the bending check takes Cb by eq. F1-1, for "
-            f"loads at the shear centre. With Cb x 1/1.4 (= {cb:.3f}) the strength is "
-            f"{f(top, 'moment')} against {f(mmax, 'moment')} here; no rating is posted "
-            "where the rated load would exceed it. Brace the member at the loads (beam.braces), "
-            "or hang them below the flange (flange = \"bottom\")",
+            "not braced, which destabilise it; the bending check takes Cb by eq. F1-1"
+            + (" (1.0 under moving loads)" if where else "") + ", for loads at the shear "
+            f"centre. With Cb x 1/1.4 (= {cb:.3f}) the strength is {f(top, 'moment')} "
+            f"against {f(mmax, 'moment')} here{where}; no rating is posted where the rated "
+            "load would exceed it. Brace the member at the loads (beam.braces), or hang them "
+            "below the flange (flange = \"bottom\"" + ("; a [[moving]] set hangs from the "
+            "bottom flange on a job tagged lifting" if where else "") + ")",
             "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
             blocks_rating=mmax > top * (1 + 1e-9)))  # already past it as entered
     return out

@@ -27,6 +27,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
                                        hogging_remedy, hogging_source, span_top_limits,
+                                       moving_top_worst, rolling_on_top,
                                        span_top_strength, top_words, unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.connections import fixed_end_moments, hinge_shears
@@ -192,6 +193,12 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "profile: the guessed monorail or jib profile uses AISC Omega, not the "
                    "ASME BTH-1 design factor. Write lifting = \"below-the-hook\" under "
                    "[criteria], or the profile it is")
+    rolling = getattr(job, "rolling_keys", "")
+    if rolling:
+        out.append(f"{rolling} on the [[moving]] set say{'' if ' and ' in rolling else 's'} a trolley hangs from the bottom "
+                   "flange, but on a job not tagged lifting its wheels are taken as rolling on "
+                   "the top flange and the flange checks under them are not made. Tag the job "
+                   "\"lifting\", or remove the key(s) for a cart on top")
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
@@ -395,12 +402,23 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     every load on at k) x 1/1.4."""
     if not limits:
         return ()
-    env = Envelopes(ss, k)
+    moving = bool(ss.parts.moving) and rolling_on_top(job)
+    env = None if moving else Envelopes(ss, k)
     m = _all_on(ss, k)
     out = []
     for a, b, l1 in limits:
-        top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
-        if ss.spans:  # patterned: the envelope over the whole pieces that cover a..b (a
+        where = ""
+        if moving:  # every wheel position (and pattern), each with its own Cb
+            got = moving_top_worst(job, st, ss, k, a, b, l1)
+            if got is None:
+                continue
+            demand, top, cb, p = got
+            where = (f" with the first wheel of {job.moving[0].label or 'the set'} at "
+                     f"{units.fmt(p, 'length', job.units)} (wheels of [[moving]] on a job "
+                     "not tagged lifting roll on the top flange)")
+        else:
+            top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
+        if ss.spans and not moving:  # patterned: the envelope over the whole pieces that cover a..b (a
             # brace inside a piece is no break of it), an upper bound over the patterns
             br = ss.fixed.moment.breaks
             lo = float(br[max(int(br.searchsorted(a + 1e-9 * job.length, "right")) - 1, 0)])
@@ -411,7 +429,7 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling with the loads on the top flange not "
                        f"checked: {_at(k)} the moment over the "
-                       f"unbraced length {f(a)} to {f(b)} reaches {f(demand, 'moment')}, above "
+                       f"unbraced length {f(a)} to {f(b)} reaches {f(demand, 'moment')}{where}, above "
                        f"the {f(top, 'moment')} its strength is with the loads bearing on the "
                        f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
                        "F1, from memory; the check takes them at the shear centre). Brace the "

@@ -141,6 +141,10 @@ class Job:
     # at the <kind> support at <x>"; a capacity or rating is not posted on them.
     at_support: tuple[str, ...] = ()
     long_bearings: tuple[str, ...] = ()  # bearing too long for a point model (no rating)
+    # the [[moving]] keys that say a trolley hangs from the bottom flange (wheels_per_axle,
+    # wheel_edge) on a job not tagged lifting, whose wheels are taken as rolling on the top
+    # flange: the wheel flange checks are not made there, so no rating (see _rolling_keys)
+    rolling_keys: str = ""
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -1464,6 +1468,28 @@ _BTH_WORDS = re.compile(r"\b(spreaders?(?: bars?| beams?)?|lift(?:ing)? beams?|s
                         r"coil lifters?)\b", re.IGNORECASE)
 
 
+def _rolling_keys(r: _Reader, raw, moving, tags, criteria) -> str:
+    """`wheels_per_axle` or `wheel_edge` written on the [[moving]] set of a job not tagged
+    lifting: they describe a trolley hung from the bottom flange, whose wheel flange checks are
+    made on lifting jobs only, while here the wheels are taken as rolling on the top flange.
+    Warned; the keys are returned (no rating is posted on them)."""
+    if not moving or is_lifting(tags, criteria.lifting) or not isinstance(raw, list):
+        return ""
+    said = [k for t in raw if isinstance(t, dict)
+            for k in ("wheels_per_axle", "wheel_edge") if k in t]
+    if not said:
+        return ""
+    names = " and ".join(dict.fromkeys(said))
+    r.warn(f"{names} describe{'s' if len(set(said)) == 1 else ''} a trolley hung from the "
+           "bottom flange, but on a job not tagged lifting the wheels of [[moving]] are taken "
+           "as rolling on the top flange (a cart on a track or platform beam), so the flange "
+           "checks under the wheels are not made and no rating is posted. A trolley hung from "
+           "the flange is a lifting device or runs like one: tag the job \"lifting\" (with "
+           "the tag \"not-lifting\" removed); for a cart on top, remove the key(s)",
+           f"{moving[0].key}.{said[0]}")
+    return names
+
+
 def _below_the_hook_hint(r: _Reader, title, notes, tags, criteria) -> str:
     """A job tagged lifting, with no profile named, that reads like a below-the-hook device (a
     spreader or lifting beam): the guessed profile (monorail or jib) uses AISC Omega, where
@@ -2061,6 +2087,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     bth_hint = _below_the_hook_hint(r, title, notes, tags, criteria)
+    rolling_keys = _rolling_keys(r, data.get("moving"), moving, tags, criteria)
     _rack_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
@@ -2100,7 +2127,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
-        long_bearings=tuple(long_bearings),
+        long_bearings=tuple(long_bearings), rolling_keys=rolling_keys,
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
