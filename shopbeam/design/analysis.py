@@ -543,41 +543,65 @@ def _rolls_through(job: Job, a: float, b: float) -> bool:
     return min(b, t1) - max(a, t0) > 1e-9 * job.length
 
 
-# Wheel positions judged per unbraced length for the top-flange rule of a rolling set: every
-# 1/MOVING_TOP_STEPS of the travel, with the positions where the exact envelopes peak
+# Wheel positions judged for the top-flange rule of a rolling set: every 1/MOVING_TOP_STEPS of
+# the travel, with the positions where the exact envelopes peak
 MOVING_TOP_STEPS = 200
+# `moving_top_worst`'s answer for a patterned job: not judged (2^n patterns x the positions)
+NOT_JUDGED = "patterned"
 
 
-def moving_top_worst(job: Job, st, ss, k: float, a: float, b: float, l1: float):
-    """(demand, top strength, Cb x 1/1.4, first-wheel position) where the moment over a..b
-    stands highest against the strength left by wheels rolling on the top flange, over the
-    wheel positions (each pattern of a patterned job too) with a wheel inside a..b, or every
-    position where static loads also bear on the top flange there. Each position's Cb is eq.
-    F1-1 of that position's own moment diagram x 1/1.4; the positions are every
-    1/MOVING_TOP_STEPS of the travel plus those where the exact envelopes peak (the ratio is
-    continuous in the position, so a step of travel / 200 misses at most a sliver of it).
-    None when no position puts a wheel inside a..b."""
+def moving_top_worst(job: Job, st, ss, k: float, limits):
+    """For each unbraced length (a, b, l1) of `limits` the wheels can stand in: (demand, top
+    strength, Cb x 1/1.4, first-wheel position) where the moment over a..b stands highest
+    against the strength left by wheels rolling on the top flange, over the wheel positions
+    with a wheel inside a..b (every position where static loads bear on the top flange there
+    too). Each position's Cb is eq. F1-1 of that position's own moment diagram x 1/1.4; the
+    positions are every 1/MOVING_TOP_STEPS of the travel plus those where the exact envelopes
+    peak (the ratio is continuous in the position, so a step of travel / 200 misses at most
+    a sliver of it). A length no position puts a wheel in (or whose wheels carry nothing at
+    k) is left out. NOT_JUDGED for a patterned job: each pattern would need the whole sweep,
+    so the rule is not judged there (and no rating rests on it)."""
+    from shopbeam.engine.model import Load
+    from shopbeam.engine.solver import solve_each
+
+    if ss.parts.patterned:
+        return NOT_JUDGED
     fl = st.flexure
     mv = ss.parts.moving[0]
+    kk = k * (1 + ss.parts.impact)
+    forces = [d + kk * f for f, d in zip(mv.live, mv.dead)]
+    if not any(forces):
+        return {}
     lo, hi = mv.p_range
     tol = 1e-9 * job.length
-    static_on = any(abs(x - a) <= tol and abs(y - b) <= tol
-                    for x, y, _ in span_top_limits(replace(job, moving=()), st))
+    static = set((round(x / tol), round(y / tol))
+                 for x, y, _ in span_top_limits(replace(job, moving=()), st))
     grid = set(np.linspace(lo, hi, MOVING_TOP_STEPS + 1).tolist()) if hi > lo else {lo}
-    best = None
-    for pattern in ss.patterns:
-        static = ss.static_loads(k, pattern)
-        env = loading.moving_envelope(job, ss, static, k, st, pattern=tuple(pattern))
-        pos = sorted(grid | {float(p) for p in env.positions})
-        if not static_on:
-            pos = [p for p in pos if any(a + tol < p + s < b - tol for s in mv.offsets)]
-        if not pos:
-            continue
-        for p, sol in loading.moving_states(job, ss, static, k, st, positions=pos):
+    loads = ss.static_loads(k, ())
+    env = loading.moving_envelope(job, ss, loads, k, st, pattern=())
+    pos = sorted(grid | {float(p) for p in env.positions})
+    asked = {}
+    for a, b, l1 in limits:
+        on = (round(a / tol), round(b / tol)) in static
+        mine = [p for p in pos if on or any(a + tol < p + s < b - tol for s in mv.offsets)]
+        if mine:
+            asked[(a, b, l1)] = set(mine)
+    if not asked:
+        return {}
+    need = sorted(set().union(*asked.values()))
+    beams = [replace(ss.beam, loads=tuple(loads) + tuple(
+        Load("point", at=p + s, value=f, label=mv.label, key=mv.key)
+        for s, f in zip(mv.offsets, forces))) for p in need]
+    out = {}
+    for p, sol in zip(need, solve_each(beams)):
+        for (a, b, l1), ps in asked.items():
+            if p not in ps:
+                continue
             top, cb, m = span_top_strength(fl, l1, sol.moment, a, b)
+            best = out.get((a, b))
             if top > 0 and (best is None or m / top > best[0] / best[1]):
-                best = (m, top, cb, float(p))
-    return best
+                out[(a, b)] = (m, top, cb, float(p))
+    return out
 
 
 def span_top_strength(fl, l1: float, moment, a: float, b: float
@@ -598,12 +622,27 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
     entered (`moving_top_worst`)."""
     out = []
     fl = st.flexure
-    ss = None
-    for a, b, l1 in span_top_limits(job, st):
+    limits = span_top_limits(job, st)
+    rolling = [x for x in limits if _rolls_through(job, x[0], x[1])]
+    worst = moving_top_worst(job, st, loading.state_set(job), 1.0, rolling) if rolling else {}
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    if worst == NOT_JUDGED:
+        out.append(Unchecked(
+            TOP_FLANGE_LTB,
+            "the wheels of [[moving]] on a job not tagged lifting roll on the top flange of "
+            "the unbraced length" + ("s " if len(rolling) > 1 else " ")
+            + ", ".join(f"{f(a)} to {f(b)}" for a, b, _ in rolling) + ", which destabilises "
+            "it; with patterned loads as well, the strength that leaves (eq. F1-1's Cb x 1/1.4 "
+            "at every wheel position and pattern) is not worked out, so no rating is posted. "
+            "Brace the member (beam.braces, braced = true), or drop patterned = true where "
+            "the loads stay on",
+            "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
+            blocks_rating=True))
+        worst, limits = {}, [x for x in limits if x not in rolling]
+    for a, b, l1 in limits:
         where = ""
-        if _rolls_through(job, a, b):
-            ss = ss or loading.state_set(job)
-            got = moving_top_worst(job, st, ss, 1.0, a, b, l1)
+        if (a, b, l1) in rolling:
+            got = worst.get((a, b))
             if got is None:
                 continue
             mmax, top, cb, p = got
@@ -614,7 +653,6 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
             top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
         if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:
             continue
-        f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
         out.append(Unchecked(
             TOP_FLANGE_LTB,
             f"the unbraced length {f(a)} to {f(b)} carries loads on its top flange at points "

@@ -27,7 +27,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
                                        hogging_remedy, hogging_source, span_top_limits,
-                                       moving_top_worst, rolling_on_top,
+                                       NOT_JUDGED, moving_top_worst, rolling_on_top,
                                        span_top_strength, top_words, unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.connections import fixed_end_moments, hinge_shears
@@ -403,13 +403,22 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     if not limits:
         return ()
     moving = bool(ss.parts.moving) and rolling_on_top(job)
-    env = None if moving else Envelopes(ss, k)
     m = _all_on(ss, k)
     out = []
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    worst = moving_top_worst(job, st, ss, k, limits) if moving else {}
+    if worst == NOT_JUDGED:
+        return (f"lateral-torsional buckling with the loads on the top flange not checked: "
+                "the wheels of [[moving]] on a job not tagged lifting roll on the top flange "
+                "of an unbraced length, and with patterned loads as well the strength that "
+                "leaves (eq. F1-1's Cb x 1/1.4 at every wheel position and pattern) is not "
+                "worked out. Brace the member (beam.braces, braced = true), or drop patterned "
+                "= true where the loads stay on",)
+    env = None if moving else Envelopes(ss, k)
     for a, b, l1 in limits:
         where = ""
-        if moving:  # every wheel position (and pattern), each with its own Cb
-            got = moving_top_worst(job, st, ss, k, a, b, l1)
+        if moving:  # every wheel position, each with its own Cb
+            got = worst.get((a, b))
             if got is None:
                 continue
             demand, top, cb, p = got
@@ -426,7 +435,6 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
             demand = max([demand] + [abs(env.extreme("moment", up, lo, hi).value)
                                      for up in (True, False)])
         if demand > top * (1 + 1e-9):
-            f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling with the loads on the top flange not "
                        f"checked: {_at(k)} the moment over the "
                        f"unbraced length {f(a)} to {f(b)} reaches {f(demand, 'moment')}{where}, above "
