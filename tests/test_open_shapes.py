@@ -255,3 +255,39 @@ def test_cli_json_for_a_tee(tmp_path):
     bend = next(c for c in d["checks"] if c["name"] == "bending")
     assert bend["clause"] == "AISC 360-16 F9" and bend["ok"] is False
     assert bend["ratio"] == pytest.approx(1.040, abs=0.002)
+
+
+def test_capacity_of_a_tee_in_sagging_keeps_the_stem_in_tension_strength():
+    # WT6x13 (AISC Shapes Database v15.0: Sx to the stem tip 2.40, Zx 4.20, Iy 8.66, J 0.150,
+    # ry 1.51, d 6.11 in), A992, simple span 8 ft, uniform load, no self-weight: the moment
+    # sags all along, the stem is in tension. By hand, AISC 360-16 F9: My = 50 x 2.40 = 120
+    # kip-in, Mp = min(Fy Zx, 1.6 My) = 192 (F9-2), Lp = 1.76 ry sqrt(E/Fy) = 64.0 in (F9-8),
+    # Lr about 633 in (F9-9), F9-6 at Lb 96 in: Mn = 188 kip-in, / 1.67 = 9.39 kip*ft; the
+    # factor on 500 lbf/ft (wL^2/8 = 4 kip*ft) is about 2.35. The scaled state's end moment
+    # (rounding size) had put the stem "in compression" and brought in F9-13
+    text = """schema = 1
+title = "tee rail"
+tags = ["not-rack"]
+[beam]
+length = "8 ft"
+section = "WT6x13"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "8 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-500 lbf/ft"
+"""
+    job = parse_job_text(text)
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    cap = capacity(job)
+    at_k = next(c for c in cap.checks if c.name == "bending")
+    assert "F9-6" in bend.formula and "F9-6" in at_k.formula and "F9-13" not in at_k.formula
+    assert at_k.limit == pytest.approx(bend.limit, rel=1e-12)
+    assert bend.limit / (KIP * FT) == pytest.approx(9.39, rel=4e-3)
+    assert cap.factor == pytest.approx(bend.limit / (4 * KIP * FT), rel=1e-6)

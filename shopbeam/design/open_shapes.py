@@ -375,8 +375,12 @@ def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False, system="us"):
     p = tee_props(sec, fy, e)
     top = flange_on_top(sec)
     # sagging (M > 0) compresses the top fibres
+    # a moment of rounding size (1e-9 of the largest: a scaled state's end value) is none:
+    # it would put the stem "in compression" along the length and bring in F9-13
+    noise = 1e-9 * max(abs(ex.max), abs(ex.min))
     m_stem_t = max(ex.max, 0.0) if top else max(-ex.min, 0.0)
     m_stem_c = max(-ex.min, 0.0) if top else max(ex.max, 0.0)
+    m_stem_t, m_stem_c = (x if x > noise else 0.0 for x in (m_stem_t, m_stem_c))
     at_t = ex.max_at if top else ex.min_at
     at_c = ex.min_at if top else ex.max_at
     mn_t, why_t = f9_stem_tension(p, lb, system)
