@@ -311,3 +311,33 @@ def test_repetitive_joist_left_unbraced_is_told_how_to_say_braced(tmp_path):
     d = solve(p)
     assert chk(d, "bending")["params"]["CL"] < 1.0
     assert any("braced = true" in c and "repetitive" in c for c in d["cautions"])
+
+
+@pytest.mark.parametrize("braced, said", [("true", False), ("false", True)])
+def test_the_joists_cl_advice_is_given_only_where_braced_is_not_said(tmp_path, braced, said):
+    # NDS 2018 4.4.1.2: a 2x10 (d/b 5 nominal) needs its compression edge held; with
+    # braced = true CL = 1.0 and the report must not tell the shop to write what it wrote
+    loads = uniform("-40 psf", "14 ft", width="16 in")
+    p = write(tmp_path, f"joist-{braced}", 'section = "2x10"\nmaterial = "DF-L-2"\n'
+              f'braced = {braced}\nrepetitive = true', loads, length="14 ft")
+    d = solve(p)
+    assert any("repetitive joists without braced = true" in c for c in d["cautions"]) == said
+    assert ("CL" in chk(d, "bending")["params"] and chk(d, "bending")["params"]["CL"] < 1) == said
+
+
+def test_the_report_names_the_wet_service_modulus_e_prime(tmp_path):
+    # NDS 2018 Table 4.3.1 and Supplement Table 4A (from memory): DF-L No.2 E 1,600,000 psi;
+    # wet service CM 0.9 on E and, wet at 100F-125F, Ct 0.9 on E (Table 2.3.3): E' = E CM Ct
+    # = 1.296e6 psi. The MEMBER line gives it as E' with the reference E beside it
+    beam = ('section = "2x10"\nmaterial = "DF-L-2"\nbraced = true\nwet_service = true\n'
+            'temperature = "100F-125F"')
+    p = write(tmp_path, "wet", beam, uniform("-60 lbf/ft", "12 ft"), length="12 ft")
+    r = run("solve", p)
+    assert r.returncode == 0, r.stderr
+    line = next(x for x in r.stdout.splitlines() if x.strip().startswith("material"))
+    assert "E' = 1.3e6 psi (E 1.6e6 psi x CM 0.9 x Ct 0.9)" in line
+    dry = write(tmp_path, "dry", 'section = "2x10"\nmaterial = "DF-L-2"\nbraced = true',
+                uniform("-60 lbf/ft", "12 ft"), length="12 ft")
+    line = next(x for x in run("solve", dry).stdout.splitlines()
+                if x.strip().startswith("material"))
+    assert "E = 1.6e6 psi" in line and "E'" not in line

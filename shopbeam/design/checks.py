@@ -585,6 +585,20 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
     return out
 
 
+# said of repetitive joists deep enough to need lateral support, unless the job is braced
+REPETITIVE_UNBRACED = (
+    "repetitive joists without braced = true take beam stability CL on their span between "
+    "supports; when the deck or sheathing is nailed to the compression edge (with blocking or "
+    "bridging as NDS 4.4.1.2 asks for the depth), say braced = true under [beam] for CL = 1.0")
+
+
+def flexure_warnings(job, fl: Flexure) -> list[str]:
+    """The bending strength's words for this job (the joists' CL advice only where the job
+    does not already say braced = true or restrained = true)."""
+    held = getattr(job, "braced", False) or getattr(job, "restrained", False)
+    return [w for w in fl.warnings if not (held and w == REPETITIVE_UNBRACED)]
+
+
 def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
     if sec.shape != "rect-bar":
         fb = mat.fb or mat.fy
@@ -624,10 +638,7 @@ def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
     else:
         ltb = ("NDS", (f.fb_star, s, f.emin, f.b, f.d))
         if service is not None and service.repetitive:
-            warnings = ("repetitive joists without braced = true take beam stability CL on "
-                        "their span between supports; when the deck or sheathing is nailed to "
-                        "the compression edge (with blocking or bridging as NDS 4.4.1.2 asks for "
-                        "the depth), say braced = true under [beam] for CL = 1.0",)
+            warnings = (REPETITIVE_UNBRACED,)
     return Flexure(f.fb_star * f.cfu * s, 1.0, text, ltb=ltb, stress_s=s, wood=f,
                    uses_cb=False, warnings=warnings)
 
@@ -1374,7 +1385,7 @@ def live_deflection_provenance(job) -> tuple[str, str]:
 def warnings_for(job, st: Strengths | None = None) -> list[str]:
     """Words the report must carry about what the checks do not cover."""
     st = st or strengths(job)
-    out = list(st.flexure.warnings)
+    out = flexure_warnings(job, st.flexure)
     out.append(f"Checks on the basis of {BASIS_WORDS[st.basis]}.")
     return out
 
@@ -1400,7 +1411,7 @@ def check_notes(job, st: Strengths | None = None) -> list[str]:
     (`st`: the job's strengths, when the caller has them)."""
     st = st or strengths(job)
     out = [f"Strength basis: {BASIS_WORDS[st.basis]}; deflection limit {st.defl_words}."]
-    out += list(st.flexure.warnings)
+    out += flexure_warnings(job, st.flexure)
     out += [not_checked_words(u) for u in st.unchecked]
     imp = impact_of(job)
     prof = profile_of(job)

@@ -67,15 +67,27 @@ def figures(m: Material, system: str = "us") -> str:
         return m.published[0 if system == "us" else 1]
     if m.kind == "lumber":
         fb = m.fb or m.fy
+        # a member in wet service or heat carries E' = E CM Ct (wood.adjusted_material says
+        # so in its source): named E', with the reference E and the factors
+        adj = re.search(r"E' = E CM Ct = ([\d,]+) psi x ([\d.]+) x ([\d.]+)", m.source or "")
+        name = "E'" if adj else "E"
         if system == "us":
             text = f"Fb = {num(fb / PSI, 4)} psi"
             if m.fv:
                 text += f", Fv = {num(m.fv / PSI, 4)} psi"
-            return text + f", E = {num(m.e / PSI / 1e6, 3)}e6 psi"
+            text += f", {name} = {num(m.e / PSI / 1e6, 3)}e6 psi"
+            if adj:
+                e0 = float(adj.group(1).replace(",", "")) / 1e6
+                text += f" (E {num(e0, 3)}e6 psi x CM {adj.group(2)} x Ct {adj.group(3)})"
+            return text
         text = f"Fb = {num(fb / MPA, 3)} MPa"
         if m.fv:
             text += f", Fv = {num(m.fv / MPA, 3)} MPa"
-        return text + f", E = {num(m.e / 1e9, 3)} GPa"
+        text += f", {name} = {num(m.e / 1e9, 3)} GPa"
+        if adj:
+            e0 = float(adj.group(1).replace(",", "")) * PSI / 1e9
+            text += f" (E {num(e0, 3)} GPa x CM {adj.group(2)} x Ct {adj.group(3)})"
+        return text
     if system == "si":
         return f"E = {num(m.e / 1e9, 4)} GPa, Fy = {num(m.fy / MPA, 4)} MPa"
     return f"E = {fmt(m.e, 'stress', system, 5)}, Fy = {fmt(m.fy, 'stress', system)}"
