@@ -1473,7 +1473,10 @@ def _rolling_keys(r: _Reader, raw, moving, tags, criteria) -> str:
     lifting: they describe a trolley hung from the bottom flange, whose wheel flange checks are
     made on lifting jobs only, while here the wheels are taken as rolling on the top flange.
     Warned; the keys are returned (no rating is posted on them)."""
-    if not moving or is_lifting(tags, criteria.lifting) or not isinstance(raw, list):
+    # an untagged job with wheels is already warned and not rated as reading like a lifting
+    # device (_lifting_hint), which says to tag it: this is for one tagged not-lifting
+    if not moving or is_lifting(tags, criteria.lifting) or NOT_LIFTING not in tags or \
+            not isinstance(raw, list):
         return ""
     said = [k for t in raw if isinstance(t, dict)
             for k in ("wheels_per_axle", "wheel_edge") if k in t]
