@@ -604,6 +604,14 @@ def moving_top_worst(job: Job, st, ss, k: float, limits):
     return out
 
 
+def rolling_where(job: Job, p: float) -> str:
+    """" with the first wheel of <set> at <p> (...)": where a rolling set's top-flange rule
+    is worst, in words."""
+    return (f" with the first wheel of {job.moving[0].label or 'the set'} at "
+            f"{units.fmt(p, 'length', job.units)} (the wheels of [[moving]] on a job not "
+            "tagged lifting are taken as rolling on the top flange)")
+
+
 def span_top_strength(fl, l1: float, moment, a: float, b: float
                       ) -> tuple[float, float, float]:
     """(Mn / Omega with the top-flange Cb, that Cb, the largest |M|) over a..b for the moment
@@ -646,9 +654,7 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
             if got is None:
                 continue
             mmax, top, cb, p = got
-            where = (f", worst with the first wheel of {job.moving[0].label or 'the set'} at "
-                     f"{units.fmt(p, 'length', job.units)} (the wheels of [[moving]] on a job "
-                     "not tagged lifting are taken as rolling on the top flange)")
+            where = ", worst" + rolling_where(job, p)
         else:
             top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
         if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:

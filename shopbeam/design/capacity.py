@@ -27,7 +27,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
                                        hogging_remedy, hogging_source, span_top_limits,
-                                       NOT_JUDGED, moving_top_worst, rolling_on_top,
+                                       NOT_JUDGED, moving_top_worst, rolling_on_top, rolling_where,
                                        span_top_strength, top_words, unchecked_for)
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.connections import fixed_end_moments, hinge_shears
@@ -422,13 +422,12 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
             if got is None:
                 continue
             demand, top, cb, p = got
-            where = (f" with the first wheel of {job.moving[0].label or 'the set'} at "
-                     f"{units.fmt(p, 'length', job.units)} (wheels of [[moving]] on a job "
-                     "not tagged lifting roll on the top flange)")
+            where = rolling_where(job, p)
         else:
             top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
-        if ss.spans and not moving:  # patterned: the envelope over the whole pieces that cover a..b (a
-            # brace inside a piece is no break of it), an upper bound over the patterns
+        if ss.spans and not moving:
+            # patterned: the envelope over the whole pieces that cover a..b (a brace inside a
+            # piece is no break of it), an upper bound over the patterns
             br = ss.fixed.moment.breaks
             lo = float(br[max(int(br.searchsorted(a + 1e-9 * job.length, "right")) - 1, 0)])
             hi = float(br[min(int(br.searchsorted(b - 1e-9 * job.length, "left")), len(br) - 1)])
@@ -436,8 +435,8 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                                      for up in (True, False)])
         if demand > top * (1 + 1e-9):
             out.append(f"lateral-torsional buckling with the loads on the top flange not "
-                       f"checked: {_at(k)} the moment over the "
-                       f"unbraced length {f(a)} to {f(b)} reaches {f(demand, 'moment')}{where}, above "
+                       f"checked: {_at(k)} the moment over the unbraced length {f(a)} to "
+                       f"{f(b)} reaches {f(demand, 'moment')}{where}, above "
                        f"the {f(top, 'moment')} its strength is with the loads bearing on the "
                        f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
                        "F1, from memory; the check takes them at the shear centre). Brace the "
