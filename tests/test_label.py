@@ -428,3 +428,41 @@ def test_a_member_that_fails_under_its_dead_loads_is_not_rated_in_the_json():
     cap = capacity(parse_job_text(text))
     assert cap.factor == 0 and not cap.rated and to_json(cap)["rated"] is False
     assert label.rating(cap, analyze(cap.job).unchecked).status == "do not load"
+
+
+def test_the_total_of_several_loads_is_no_more_than_their_posted_figures_add_up_to():
+    # two live point loads rated together: each is posted rounded down, and the TOTAL "placed
+    # as listed above" comes from those posted figures, so a reader adding them up never
+    # finds the total larger (common practice: a posted figure is never rounded up)
+    text = """schema = 1
+title = "press table"
+tags = ["not-rack"]
+[beam]
+length = "10 ft"
+section = "W8X18"
+material = "A992"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "3 ft"
+value = "-2000 lbf"
+label = "press"
+[[loads]]
+type = "point"
+at = "7 ft"
+value = "-500 lbf"
+label = "cabinet"
+"""
+    cap = capacity(parse_job_text(text))
+    figs = {f.label: f for f in label.rating(cap, analyze(cap.job).unchecked).figures}
+    parts = figs["max press"].si + figs["max cabinet"].si
+    total = figs["TOTAL"]
+    assert total.si <= parts * (1 + 1e-12)
+    assert total.si <= total.exact and total.exact == pytest.approx(2500 * LBF * cap.factor)
+    assert total.si >= parts * 0.99  # three figures: within 1 % of the sum

@@ -161,6 +161,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
                            f"at {pos(ld.at)}", where))
     else:
+        each_live = []  # the posted figures of the live force loads, for their TOTAL
         for i, ld in enumerate(live):
             name = ld.label or f"load {i + 1}"
             if ld.kind == "point":
@@ -177,6 +178,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
             else:
                 figs.append(posted(f"max {name}", ld.value * k, "moment", sy, f"at {pos(ld.at)}",
                                    where))
+                continue
+            each_live.append(figs[-1].si)
         if mv:
             m = mv[0]
             # each load of a wheel set is an axle (or a wheel pair), carried by
@@ -199,7 +202,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                                "anywhere on its travel", where, exact=sum(wheels)))
         tot = sum(abs(ld.total_force) for ld in live)
         if tot and len(live) > 1:
-            figs.append(posted("TOTAL", tot * k, "force", sy, "placed as listed above", where))
+            # the sum of the posted figures (never more than they add up to, nor than the
+            # exact total), so the label adds up
+            figs.append(posted("TOTAL", sum(each_live), "force", sy, "placed as listed above",
+                               where, exact=tot * k))
         if live and any(ld.kind == "moment" for ld in live):
             notes.append("applied couples are rated with the loads above, as entered")
     tot_all = sum(abs(ld.total_force) for ld in live)
