@@ -226,6 +226,14 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
             f"expected a value with its unit in quotes, found {text!r}", key)
     if len(text) > 200:
         raise InputError("value is too long (more than 200 characters)", key)
+    comma = re.search(r"\d,\d", text)
+    if comma:  # "2,000 lbf" (thousands) or "2,5 m" (a decimal comma): neither is read
+        plain = re.sub(r"(?<=\d),(?=\d{3}(?!\d))", "", text)
+        hint = (f"write {plain!r} without the thousands separator" if "," not in plain else
+                f"write a decimal point, not a comma ({text.replace(',', '.')!r})")
+        raise InputError(f"{text!r} has a comma inside a number: {hint}; shopbeam reads "
+                         "neither thousands separators nor decimal commas, so as not to guess "
+                         "which one is meant", key)
     scanned = _terms(text)
     if scanned is None:
         raise InputError(f"cannot read {text!r} as a number with a unit "

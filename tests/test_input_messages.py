@@ -709,3 +709,46 @@ value = "{sign}500 lbf*ft"
         res = analyze(parse_job_text(text))
         named.append(any("works against the other loads" in c for c in res.cautions))
     assert sorted(named) == [False, True]
+
+
+DOUBLED = """schema = 1
+title = "doubled"
+[beam]
+length = "8 ft"
+section = "W8X18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "point"
+type = "point"
+at = "8 ft"
+value = "-300 lbf"
+"""
+
+
+def test_a_key_written_twice_names_the_key_and_both_lines():
+    # TOML 1.0 allows one value per key; the parser's own words ("Cannot overwrite a value")
+    # send a shop user looking for a quote or bracket that is not wrong
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(DOUBLED, "doubled.toml")
+    (p,) = got.value.problems
+    assert p.line == 12 and "'type' is given twice" in p.message and "lines 11 and 12" in p.message
+    text = DOUBLED.replace("[[loads]]\ntype = \"point\"\n", "[beam]\nbraced = true\n[[loads]]\n")
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text, "doubled.toml")
+    (p,) = got.value.problems
+    assert "[beam] is written twice (lines 3 and 10)" in p.message
+
+
+@pytest.mark.parametrize("typed, says", [("-2,000 lbf", "'-2000 lbf' without the thousands"),
+                                         ("-2,5 kN", "not a comma ('-2.5 kN')")])
+def test_a_comma_inside_a_number_is_named_as_such(typed, says):
+    # a thousands separator or a decimal comma is refused (neither is guessed), and the message
+    # says that, not that the unit is unknown
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(DOUBLED.replace('type = "point"\ntype = "point"', 'type = "point"')
+                       .replace("-300 lbf", typed))
+    (p,) = got.value.problems
+    assert p.key == "loads[0].value" and says in p.message and "unknown unit" not in p.message

@@ -2136,6 +2136,46 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     )
 
 
+_KEY_LINE = re.compile(r"""^\s*((?:[A-Za-z0-9_-]+|"[^"]*"|'[^']*')(?:\s*\.\s*(?:[A-Za-z0-9_-]+|"[^"]*"|'[^']*'))*)\s*=""")
+_HEADER_LINE = re.compile(r"^\s*\[\[?\s*([^\]]+?)\s*\]\]?")
+
+
+def _twice_words(msg: str, text: str, line: int | None) -> str:
+    """The TOML reader's "Cannot overwrite a value" / "Cannot declare ... twice" in shop words:
+    which key or table is written twice, on which lines, and what to do ("" for other
+    errors)."""
+    if line is None or not ("Cannot overwrite" in msg or "Cannot declare" in msg):
+        return ""
+    lines = text.splitlines()
+    here = lines[line - 1] if 0 < line <= len(lines) else ""
+    head = _HEADER_LINE.match(here)
+    if "Cannot declare" in msg and head:
+        name = head.group(1)
+        first = next((i + 1 for i, x in enumerate(lines[:line - 1])
+                      if (h := _HEADER_LINE.match(x)) and h.group(1) == name
+                      and not x.lstrip().startswith("[[")), None)
+        where = f"lines {first} and {line}" if first else f"line {line}"
+        return (f"the table [{name}] is written twice ({where}): a job has one [{name}]; put "
+                "all its keys under the first header and delete the second")
+    key = _KEY_LINE.match(here)
+    if not key:
+        return ""
+    name = re.sub(r"\s+", "", key.group(1))
+    # the earlier line in the same table that gave it (back to the table's header)
+    first = None
+    for i in range(line - 2, -1, -1):
+        if _HEADER_LINE.match(lines[i]) and not _KEY_LINE.match(lines[i]):
+            break
+        k = _KEY_LINE.match(lines[i])
+        if k and re.sub(r"\s+", "", k.group(1)) == name:
+            first = i + 1
+            break
+    where = f"lines {first} and {line}" if first else f"line {line}"
+    return (f"the key {name!r} is given twice in the same table ({where}): TOML allows one "
+            "value per key; keep the one you mean and delete the other (two loads or supports "
+            "each need their own [[loads]] or [[supports]] header)")
+
+
 def parse_job_text(text: str, filename: str = "<job>") -> Job:
     """Parse and validate job-file text. Raises InputErrors."""
     if len(text.encode("utf-8", "surrogatepass")) > MAX_FILE_BYTES:
@@ -2153,6 +2193,9 @@ def parse_job_text(text: str, filename: str = "<job>") -> Job:
         m = re.search(r"\(at line (\d+), column (\d+)\)", msg)
         line = int(m.group(1)) if m else None
         msg = re.sub(r"\s*\(at line \d+, column \d+\)", "", msg)
+        said = _twice_words(msg, text.removeprefix("\ufeff"), line)
+        if said:
+            raise InputErrors([Problem(said, "", filename, line)]) from None
         if m:
             msg += f" (column {m.group(2)})"
         raise InputErrors([Problem(f"not valid TOML: {msg}. Check quotes, brackets and "
