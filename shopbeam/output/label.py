@@ -279,12 +279,32 @@ def _held_words(job) -> list[str]:
             getattr(job, "braces_flange", None) or "both", "both flanges")
         out.append("RATED ONLY WITH the braces in place at "
                    + ", ".join(pos(x) for x in job.braces) + f" ({which}).")
+    if job.lifting and not (job.restrained or job.braced):
+        # a lifting job's supports are taken as holding it against twist unless brace says
+        # otherwise (analysis.HANGER_BRACE): a single hanger rod does not
+        held = [pos(s.at) for s in job.supports
+                if s.brace is None and s.kind in ("pin", "roller")]
+        if held:
+            at = held[0] if len(held) == 1 else ", ".join(held[:-1]) + " and " + held[-1]
+            out.append(("RATED ONLY WHILE the hanger or seat at " + at + " holds"
+                        if len(held) == 1 else
+                        "RATED ONLY WHILE the hangers or seats at " + at + " hold")
+                       + " the beam against twist (both flanges held; a single hanger rod "
+                       "does not).")
     tol = 1e-6 * job.length
     for ws in job.moving:
         a, b = ws.travel
         if a > tol or b < job.length - tol:
             out.append(f"RATED ONLY WHILE the {ws.label or 'wheel set'} stays between "
                        f"{pos(a)} and {pos(b)}: END STOPS must keep it there.")
+        sec = job.section
+        bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
+        if job.lifting and bf and (a < bf or b > job.length - bf):
+            # lifting.lifting_notes: the wheel flange check is for the interior of the flange
+            out.append(f"RATED ONLY WHILE END STOPS keep the wheels at least "
+                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from each end "
+                       "of the beam, or its ends are closed with plates (the flange check "
+                       "under the wheels is for the flange away from its ends).")
     return out
 
 
