@@ -160,6 +160,10 @@ def test_patterned_shelf_reports_the_uplift_of_the_governing_pattern():
     # the reaction envelope: each end support's largest uplift over every pattern
     env = text[text.index("REACTION ENVELOPE"):text.index("EXTREMES")]
     assert env.count("largest down -19.31 lbf  (uplift)") == 2
+    # the middle support only ever pushes up: its other end is the least push, with the
+    # patterned loads off, 10/8 x 2.2 x 5 = 13.75 lbf (case 29, from memory), never "down"
+    mid = next(ln for ln in env.splitlines() if "at 5 ft" in ln)
+    assert "least up 13.75 lbf  (no uplift)" in mid and "down" not in mid
 
 
 def test_json_of_a_patterned_job_carries_the_governing_state():

@@ -344,10 +344,10 @@ def to_html(pkg: Package) -> str:
     if pkg.envelope:
         h.append("<p><b>Reaction envelope</b> (each support over every load state: what a "
                  "bracket or anchor must carry):</p><table>")
-        h.append(_tr(["support", "at", "largest up", "state", "largest down", "state"],
-                     header=True))
+        h.append(_tr(["support", "at", "largest up", "state", "largest down (uplift) or least up",
+                      "state"], header=True))
         h += [_tr([r.kind, r.at, r.max_up, r.up_state, r.max_down
-                   + (" (uplift)" if r.uplift else ""), r.down_state],
+                   + (" (uplift)" if r.uplift else " up (no uplift)"), r.down_state],
                   classes=["", "num", "num", "", "num", ""]) for r in pkg.envelope]
         h.append("</table>")
     if pkg.uplift:
@@ -456,9 +456,11 @@ def to_markdown(pkg: Package) -> str:
     if pkg.envelope:
         m += ["", "Reaction envelope (each support over every load state: what a bracket or "
               "anchor must carry):", ""]
-        m += _md_table(["support", "at", "largest up", "state", "largest down", "state"],
+        m += _md_table(["support", "at", "largest up", "state",
+                        "largest down (uplift) or least up", "state"],
                        [(r.kind, r.at, r.max_up, r.up_state,
-                         r.max_down + (" (uplift)" if r.uplift else ""), r.down_state)
+                         r.max_down + (" (uplift)" if r.uplift else " up (no uplift)"),
+                         r.down_state)
                         for r in pkg.envelope])
     if pkg.uplift:
         m += ["", "Uplift: anchor these supports against the pull:", ""]

@@ -111,9 +111,14 @@ def render(result: Result) -> str:
         lines.append("REACTION ENVELOPE (each support over every load state: what a bracket or "
                      "anchor must carry)")
         for r in p.envelope:
-            lines.append(f"  {r.kind:<7} at {r.at:<12} largest up {r.max_up:<14} largest down "
-                         f"{r.max_down}" + ("  (uplift)" if r.uplift else ""))
-            for which, state in (("up", r.up_state), ("down", r.down_state)):
+            # the other end of the envelope: a pull down (uplift) where some state reverses the
+            # reaction, else the least push up (never "largest down" for a support that only
+            # ever pushes up)
+            low = (f"largest down {r.max_down}  (uplift)" if r.uplift else
+                   f"least up {r.max_down}  (no uplift)")
+            lines.append(f"  {r.kind:<7} at {r.at:<12} largest up {r.max_up:<14} {low}")
+            for which, state in (("up", r.up_state), ("down" if r.uplift else "least",
+                                                      r.down_state)):
                 if state:
                     lines += _wrap(f"{which}: {state}", "      ")
     lines.append("")
