@@ -752,3 +752,28 @@ def test_a_comma_inside_a_number_is_named_as_such(typed, says):
                        .replace("-300 lbf", typed))
     (p,) = got.value.problems
     assert p.key == "loads[0].value" and says in p.message and "unknown unit" not in p.message
+
+
+@pytest.mark.parametrize("typed, says", [
+    ("W8x18 A992", 'section = "W8X18" and material = "A992"'),
+    ("HSS4x4x1/4 A500 Gr C", 'section = "HSS4X4X1/4" and material = "A500-C"')])
+def test_a_grade_typed_after_the_designation_is_named_with_where_it_goes(typed, says):
+    # a shop writes the grade beside the size as on a cut list; the section key takes the
+    # designation alone (common practice: the size and the grade are separate entries)
+    text = DOUBLED.replace('type = "point"\ntype = "point"', 'type = "point"').replace(
+        'section = "W8X18"', f'section = "{typed}"')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = got.value.problems
+    assert p.key == "beam.section" and says in p.message
+
+
+def test_an_unknown_size_lists_its_own_family():
+    # "W8x19" is no W shape (AISC Shapes Database v15.0 has W8X18 and W8X21): the listing
+    # command named is the W one, not HSS
+    text = DOUBLED.replace('type = "point"\ntype = "point"', 'type = "point"').replace(
+        'section = "W8X18"', 'section = "W8x19"')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = got.value.problems
+    assert "W8X18" in p.message and "--kind W`" in p.message

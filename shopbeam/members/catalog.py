@@ -737,9 +737,27 @@ def _rounded_match(k: str):
 
 
 def _not_found(designation: str, k: str | None) -> str:
+    # a grade or other words typed after a good designation ("W8x18 A992", "HSS4x4x1/4 gr
+    # C"): say where the rest belongs
+    words = str(designation).split()
+    for i in range(len(words) - 1, 0, -1):
+        head, tail = " ".join(words[:i]), " ".join(words[i:])
+        hk = canon(head)
+        if hk and (hk in _index()[0] or _rounded_match(hk) is not None):
+            found = (_index()[0][hk] if hk in _index()[0] else _rounded_match(hk)).designation
+            from shopbeam.members.materials import get  # noqa: PLC0415 - this message only
+
+            grade = get(tail)
+            said = (f"section = \"{found}\" and material = \"{grade.key}\"" if grade else
+                    f"section = \"{found}\", with the grade in material = (`shopbeam "
+                    "materials` lists them)")
+            return (f"unknown section {designation!r}: it starts with the catalog section "
+                    f"{found!r} followed by {tail!r}; the section key takes the designation "
+                    f"alone and a grade goes in material: write {said}")
     sugg = suggestions(designation)
     hint = f"did you mean {', '.join(sugg)}? " if sugg else ""
-    prefix = (k or "").split("|")[0]
+    prefix = (k or "").split("|")[0] or (re.match(r"\s*([A-Za-z]+)", str(designation)) or
+                                         re.match("", "")).group(0).strip().upper()
     kind = next((n for n in KIND_INFO if n.upper() == prefix), None) or (
         "HSS" if prefix == "HSS" else None)
     listing = f"`shopbeam shapes --kind {kind or 'HSS'}` lists {'them' if kind else 'the catalog'}"
