@@ -777,3 +777,17 @@ def test_an_unknown_size_lists_its_own_family():
         parse_job_text(text)
     (p,) = got.value.problems
     assert "W8X18" in p.message and "--kind W`" in p.message
+
+
+def test_a_built_up_shape_missing_keys_names_them_all_with_what_they_mean():
+    # a shop user who writes shape = "cover-plated" learns every key it takes in one message,
+    # not one key per run
+    text = ('schema = 1\ntitle = "x"\n[beam]\nlength = "10 ft"\nmaterial = "A36"\n'
+            '[beam.section]\nshape = "cover-plated"\n[[supports]]\nat = "0 ft"\n'
+            'type = "fixed"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = got.value.problems
+    assert p.key == "beam.section.base"
+    assert "needs base, plate_width and plate_thickness" in p.message
+    assert 'a catalog I-shape, e.g. "W8x18"' in p.message and "optional: plate" in p.message

@@ -14,11 +14,23 @@ from typing import Mapping
 from shopbeam.errors import InputError
 from shopbeam.members import catalog
 from shopbeam.members.sections import (_ALIASES, _COMMON, _KEYS, _REQUIRED, SHAPES, Section,
+                                       shape_keys,
                                        _a, _choice, _in, _len, _sheet, _suggest, _wall,
                                        _wall_factor, angle, channel, cover_plated,
                                        double_channel, i_shape, rect_bar, rect_tube, round_bar,
                                        round_tube, tee, turn)
 from shopbeam.units import parse, quantity
+
+
+# What the keys of the built-up shapes mean, for the message that names a missing one
+_KEY_MEANING = {
+    "base": "a catalog I-shape, e.g. \"W8x18\"",
+    "plate_width": "e.g. \"6 in\"", "plate_thickness": "e.g. \"1/2 in\"",
+    "plate": "\"bottom\" (default), \"top\" or \"both\"",
+    "channel": "a catalog channel, e.g. \"C6x8.2\"",
+    "arrangement": "\"back-to-back\" (default) or \"toe-to-toe\"",
+    "gap": "between the channels, default 0",
+}
 
 
 def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
@@ -58,9 +70,16 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
         if k not in allowed:
             raise InputError(f"unknown key {k!r} for {_a(shape)}{_suggest(k, allowed)}; "
                              f"keys are {', '.join(sorted(allowed))}", f"{key}.{k}")
-    for k in _REQUIRED[shape]:
-        if k not in spec:
-            raise InputError(f"{_a(shape)} needs {k}", f"{key}.{k}")
+    missing = [k for k in _REQUIRED[shape] if k not in spec]
+    if missing:
+        req, opt = shape_keys(shape)
+        meant = "; ".join(f"{k} ({_KEY_MEANING[k]})" if k in _KEY_MEANING else k
+                          for k in req + opt)
+        need = missing[0] if len(missing) == 1 else \
+            ", ".join(missing[:-1]) + " and " + missing[-1]
+        raise InputError(f"shape = \"{shape}\" needs {need}: its keys are {meant}"
+                         + (f" (optional: {', '.join(opt)})" if opt else ""),
+                         f"{key}.{missing[0]}")
     if "axis" in spec:
         ax = _choice(spec, "axis", ("strong", "weak"), "strong", key)
     else:
