@@ -791,3 +791,26 @@ def test_a_built_up_shape_missing_keys_names_them_all_with_what_they_mean():
     assert p.key == "beam.section.base"
     assert "needs base, plate_width and plate_thickness" in p.message
     assert 'a catalog I-shape, e.g. "W8x18"' in p.message and "optional: plate" in p.message
+
+
+@pytest.mark.parametrize("where, key", [("[beam]", "notch"), ("[beam]", "bolt_holes"),
+                                        ("[[supports]]", "cope"), ("[beam]", "web_openings")])
+def test_a_key_saying_the_member_is_cut_is_not_ignored_and_nothing_is_rated(where, key):
+    # a notch on the tension edge of a wood member at a support cuts its shear strength by
+    # (dn/d)^2 (NDS 2018 3.4.3.2, from memory); a coped steel end or holes are limit states of
+    # their own (AISC Manual Part 9; AISC 360-16 J4, from memory). shopbeam models none of
+    # them, so a key that says so must stop the rating, not pass as "unknown key ignored"
+    text = DOUBLED.replace('type = "point"\ntype = "point"', 'type = "point"')
+    if where == "[beam]":
+        text = text.replace('material = "A992"\n', f'material = "A992"\n{key} = "1-1/2 in"\n')
+    else:
+        text = text.replace('type = "fixed"\n', f'type = "fixed"\n{key} = "1-1/2 in"\n')
+    job = parse_job_text(text)
+    path = ("beam." if where == "[beam]" else "supports[0].") + key
+    assert [w.key for w in job.warnings if "says the member is cut" in w.message] == [path]
+    cap = capacity(job)
+    assert not cap.rated and any(path in r for r in cap.not_rated)
+    # an unrelated unknown key stays a plain warning and stops nothing
+    plain = parse_job_text(text.replace(f"{key} = ", "colour = "))
+    assert not any("member is cut" in r for r in capacity(plain).not_rated)
+    assert any(w.key.endswith("colour") and "is ignored" in w.message for w in plain.warnings)

@@ -193,6 +193,12 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "profile: the guessed monorail or jib profile uses AISC Omega, not the "
                    "ASME BTH-1 design factor. Write lifting = \"below-the-hook\" under "
                    "[criteria], or the profile it is")
+    cuts = getattr(job, "cut_keys", ())
+    if cuts:
+        out.append("the job says the member is cut (" + ", ".join(cuts) + "): notches, copes, "
+                   "holes and cut-outs are not modelled, and the checks are of the full section "
+                   "the cut weakens. Have the cut member checked, or remove the key if it is "
+                   "not cut")
     rolling = getattr(job, "rolling_keys", "")
     if rolling:
         out.append(f"{rolling} on the [[moving]] set say{'' if ' and ' in rolling else 's'} a trolley hangs from the bottom "

@@ -145,6 +145,9 @@ class Job:
     # wheel_edge) on a job not tagged lifting, whose wheels are taken as rolling on the top
     # flange: the wheel flange checks are not made there, so no rating (see _rolling_keys)
     rolling_keys: str = ""
+    # keys the reader did not know that say the member is notched, coped or holed (not
+    # modelled): no rating is posted on them (see _CUT_KEY)
+    cut_keys: tuple[str, ...] = ()
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -247,6 +250,7 @@ class _Reader:
         self.lines = key_lines(text) if text else {}
         self.problems: list[Problem] = []
         self.system = "us"  # the job's units, for the figures quoted in messages
+        self.cuts: list[str] = []  # keys that say the member is notched, coped or holed
 
     def line_for(self, key: str) -> int | None:
         k = key
@@ -360,6 +364,18 @@ class _Reader:
         for k in table:
             if k in known:
                 continue
+            if _CUT_KEY.search(str(k)):
+                path = f"{prefix}.{k}" if prefix else k
+                self.cuts.append(path)
+                self.warn(f"{k!r} in {label} says the member is cut there, and shopbeam does "
+                          "not model notches, copes, holes or cut-outs: it checks the full "
+                          "section, which the cut weakens (a notch on the tension edge of wood "
+                          "at a support cuts its shear strength by (dn/d)^2, NDS 2018 3.4.3.2, "
+                          "from memory), so no rating is posted. Have the cut member checked "
+                          "(NDS 3.2.3 and 3.4.3 for notched wood, AISC Manual Part 9 for a coped "
+                          "end, AISC 360-16 B4.3 and J4 for holes), or remove the key if it is "
+                          "not cut", path)
+                continue
             near = difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.6)
             hint = f"; did you mean {near[0]!r}?" if near else f"; known keys: {', '.join(sorted(known))}"
             homes = _homes(k, here)
@@ -377,6 +393,12 @@ class _Reader:
     def errors(self) -> list[Problem]:
         return [p for p in self.problems if not p.warning]
 
+
+# An unknown key that says the member is cut (notched, coped, drilled, slotted): a limit state
+# shopbeam does not check, so the job is not rated (never "unknown key ignored" alone)
+_CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes?|cut_?outs?|"
+                      r"openings?|slots?|slotted|penetrations?|bored|drilled|drilling)"
+                      r"(?:$|[_\- ])", re.IGNORECASE)
 
 # How each table is written, for "belongs under [criteria]" ("" is the top of the file)
 _TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
@@ -2130,7 +2152,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
-        long_bearings=tuple(long_bearings), rolling_keys=rolling_keys,
+        long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
