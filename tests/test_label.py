@@ -491,3 +491,16 @@ def test_a_monorail_label_says_what_its_rating_rests_on_at_the_hangers_and_the_f
     text = label.label_text(label.rating(capacity(kept), analyze(kept).unchecked))
     flat = " ".join(x.strip("| ") for x in text.splitlines())
     assert "against twist" not in flat and "flange width" not in flat
+
+
+def test_the_capacity_page_total_is_the_labels():
+    # one uniform load: the capacity page and the label both post the total of the posted
+    # (rounded down) figure over its length (common practice: never round a posted load up)
+    from shopbeam.design.capacity import max_load_lines
+
+    cap = capacity(parse_job_text(GERBER))
+    lines = dict(max_load_lines(cap))
+    figs = {f.label: f for f in label.rating(cap, analyze(cap.job).unchecked).figures}
+    assert lines["total"] == figs["TOTAL"].value
+    w = float(lines["max uniform load"].split()[0])
+    assert float(lines["total"].split()[0]) <= w * 30 + 1e-9

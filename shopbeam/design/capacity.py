@@ -609,7 +609,10 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
         out.append(("max uniform load", _floor_fmt(w, "line_load", sy)))
         out.append(("over", f"{units.fmt(live[0].start, 'length', sy)} to "
                              f"{units.fmt(live[0].end, 'length', sy)}"))
-        out.append(("total", _floor_fmt(abs(live[0].total_force) * k, "force", sy)))
+        # the total of the posted (rounded down) figure, as the label gives it, so the two
+        # agree and the total is never more than the posted load over its length
+        out.append(("total", _floor_fmt(_floor_si(w, "line_load", sy)
+                                        * (live[0].end - live[0].start), "force", sy)))
     elif not mv and len(live) == 1 and live[0].kind == "point":
         out.append(("max point load", _floor_fmt(abs(live[0].value) * k, "force", sy)))
         out.append(("at", units.fmt(live[0].at, "length", sy)))
@@ -629,14 +632,19 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
     return out
 
 
-def _floor_fmt(value: float, kind: str, system: str) -> str:
-    """Format rounded DOWN to 3 significant figures (a posted load must not round up)."""
+def _floor_si(value: float, kind: str, system: str) -> float:
+    """The SI value whose display is `value`'s rounded DOWN to 3 significant figures."""
     disp = units.to_display(value, kind, system)
     if disp <= 0:
-        return units.fmt(0.0, kind, system)
+        return 0.0
     e = math.floor(math.log10(disp)) - 2
     down = math.floor(disp / 10**e * (1 + 1e-12)) * 10**e
-    return units.fmt(value * down / disp, kind, system, 3)
+    return value * min(down / disp, 1.0)
+
+
+def _floor_fmt(value: float, kind: str, system: str) -> str:
+    """Format rounded DOWN to 3 significant figures (a posted load must not round up)."""
+    return units.fmt(_floor_si(value, kind, system), kind, system, 3)
 
 
 def at_factor(job, k: float):
