@@ -411,3 +411,53 @@ def test_trolley_axles_feet_apart_are_warned(spacing, warns):
     text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
     job = parse_job_text(text.replace('spacing = ["8 in"]', f"spacing = [{spacing}]"))
     assert bool([w for w in job.warnings if w.key == "moving[0].spacing"]) == warns
+
+
+AL_RUNWAY = """schema = 1
+title = "aluminium runway"
+tags = ["lifting"]
+[beam]
+length = "10 ft"
+material = "{material}"
+[beam.section]
+shape = "i-beam"
+depth = "8 in"
+flange_width = "5 in"
+flange_thickness = "0.5 in"
+web_thickness = "0.3 in"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[moving]]
+label = "trolley"
+loads = ["-250 lbf", "-250 lbf"]
+spacing = ["6 in"]
+[criteria]
+lifting = "{profile}"
+"""
+
+
+@pytest.mark.parametrize("profile", ["hand-geared-monorail", "powered-monorail"])
+def test_an_aluminium_runway_does_not_get_the_steel_flange_checks_and_is_not_rated(profile):
+    # the wheel flange coefficients (CMAA 74 / AISC Design Guide 7, EN 1993-6 Table 5.2, from
+    # memory) are checked against Fy / 1.67 and the lateral force by AISC 360-16 F6 / H1: steel
+    # rules. 6061-T6's allowable is the lesser of Fty / 1.65 and Ftu / (kt 1.95) (ADM 2015,
+    # from memory; 19.5 ksi, under the 35 / 1.67 = 21.0 a steel rule would give), lower again
+    # where welded: the checks are not made on aluminium and nothing is rated on them
+    job = parse_job_text(AL_RUNWAY.format(material="6061-T6", profile=profile))
+    res = analyze(job)
+    names = {c.name for c in res.checks}
+    assert "wheel flange bending" not in names and "lateral trolley force" not in names
+    blocked = {u.name for u in res.unchecked if u.blocks_rating}
+    assert "flange local bending under trolley wheels or clamp jaws" in blocked
+    assert (profile == "powered-monorail") == (
+        "lateral trolley force (weak-axis bending and torsion)" in blocked)
+    cap = capacity(job)
+    assert not cap.rated and any("flange local bending under trolley wheels" in r
+                                 for r in cap.not_rated)
+    # the same runway in A36 plate gets both checks
+    steel = analyze(parse_job_text(AL_RUNWAY.format(material="A36", profile=profile)))
+    assert "wheel flange bending" in {c.name for c in steel.checks}

@@ -39,7 +39,8 @@ from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noq
                                    OMEGA_ADM, OMEGA_B, OMEGA_V, OMEGA_V_ROLLED_I, PSI_PA, basis_of,
                                    brace_points, cb_factor, nominal_moment, support_braces,
                                    unbraced_segments)
-from shopbeam.design.lifting import lifting_notes, lifting_unchecked, profile_of
+from shopbeam.design.lifting import (flange_unchecked, lifting_notes, lifting_unchecked,
+                                     profile_of)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.solver import Solution, segments, solve
 from shopbeam.jobs.rules import LIFTING_PROFILES
@@ -850,7 +851,7 @@ def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
     braced = brace_points(job)[0]
     out = [u for u in flex.unchecked
            if not (braced and u.name == "lateral-torsional buckling")]
-    out += lifting_unchecked(job, sec)
+    out += lifting_unchecked(job, sec) + flange_unchecked(job, sec)
     return tuple(out)
 
 

@@ -154,8 +154,8 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
     under the loads hung from the bottom flange. `only_given`: a job that is not a lifting
     device, whose [[moving]] wheels are not taken as running on the bottom flange and whose
     hung loads count only where `wheels` says they bear on trolley wheels or clamp jaws."""
-    if sec.shape != "i-beam" or sec.axis != "strong":
-        return None
+    if sec.shape != "i-beam" or sec.axis != "strong" or not steel_flange(mat):
+        return None  # not covered: `lifting_unchecked` / `flange_unchecked` say so
     ws = job.moving[0] if job.moving and not only_given else None
     # (load, contacts, flange tip to contact, words): the trolley's wheels, and on a lifting
     # job every point load hung from the bottom flange (a hoist on a beam clamp or a parked
@@ -290,6 +290,8 @@ def solve_flanges(job, sols, sec, prof: Profile, impact: float) -> None:
 
 def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
     """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
+    if not steel_flange(mat):
+        return None  # aluminium: not covered (`lifting_unchecked`)
     got = _flange_loads(job, sol, sec, prof, impact)
     if got is None:
         return None
@@ -382,6 +384,16 @@ def _i_shape(sec) -> bool:
     return sec.shape == "i-beam" and sec.axis == "strong"
 
 
+def steel_flange(material) -> bool:
+    """Whether the flange checks under wheels (CMAA 74 / AISC Design Guide 7 coefficients,
+    Fy / 1.67; the lateral force by AISC 360-16 F6 and H1) apply to this material: steel and
+    stainless, or a typed-in metal as stiff as steel (E 150 GPa or more). Aluminium is not
+    covered by them (ADM allowables, rupture, welded strengths)."""
+    kind = getattr(material, "kind", "custom")
+    return kind in ("steel", "stainless") or (kind == "custom"
+                                              and getattr(material, "e", 0.0) >= 150e9)
+
+
 def _first_yield_lateral(job) -> list:
     """An I-beam on the first-yield basis (a typed-in metal, or basis = "first-yield"): the
     lateral trolley force check adds Mx / Mcx to My / Mcy and needs the bending strength as a
@@ -424,7 +436,38 @@ FATIGUE = Unchecked(
     blocks_rating=False)
 
 
+def flange_unchecked(job, sec) -> list:
+    """An aluminium I-beam with trolley wheels (a lifting job's [[moving]] set or hung hoist,
+    or loads hung on wheels or clamp jaws, `wheels`): the flange checks under them use steel's
+    method and allowable, so they are not made and no rating is posted."""
+    if not _i_shape(sec) or steel_flange(job.material):
+        return []
+    lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
+    hung = set(getattr(job, "hung", ()) or ())
+    under = bool(lifting and (job.moving or hung)) or bool(getattr(job, "contacts", None))
+    if not under:
+        return []
+    out = [Unchecked("flange local bending under trolley wheels or clamp jaws",
+                     f"the bottom flange of this {getattr(job.material, 'kind', 'typed-in')} "
+                     "I-beam carries wheels or jaws; the flange check under them (CMAA 74 / "
+                     "AISC Design Guide 7 coefficients against Fy / 1.67) is for steel, and "
+                     "aluminium's allowables (ADM: yield and rupture, welded strengths) are "
+                     "not applied to it, so it is not made and no rating is posted: have the "
+                     "flange checked, or use a steel runway beam",
+                     "CMAA 74; AISC Design Guide 7; ADM 2015 (from memory)",
+                     blocks_rating=True)]
+    prof = profile_of(job)
+    if lifting and prof and prof.lateral and (job.moving or _static_hoist(job)):
+        out.append(Unchecked("lateral trolley force (weak-axis bending and torsion)",
+                             f"{prof.lateral:.0%} of rated load + hoist + trolley is checked on "
+                             "steel flanges only (AISC 360-16 F6 and H1); not on aluminium",
+                             "ASCE 7-16 4.9.4; AISC 360-16 H1", blocks_rating=True))
+    return out
+
+
 def _lifting_unchecked(job, sec) -> list:
+    if _i_shape(sec) and not steel_flange(job.material):
+        return []  # flange_unchecked says it
     if _i_shape(sec):
         return _first_yield_lateral(job)
     prof = profile_of(job)
