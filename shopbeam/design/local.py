@@ -692,15 +692,19 @@ def _round_wall(job, clause: str) -> Unchecked:
     seats = _live_bearings(job)
     return Unchecked("round HSS wall under a concentrated force",
                      "local plastification of a round wall at supports and point loads is not "
-                     "checked (bear it on a saddle)"
+                     "checked" + ("" if points or seats else " (bear it on a saddle)")
                      + (f"; {', '.join(points)} bear on the wall between the supports, and a "
                         "narrow strap, plate or hook can crush a thin wall first" if points
                         else "")
                      + (f"; the live load comes down through {units.and_words(seats)}, whose "
                         "reactions bear on the wall: a seat or strap narrower than a full "
                         "saddle can crush a thin wall first" if seats else "")
-                     + ("; so no rating is posted (bear the member and hang the load on full "
-                        "saddles or sleeves, or have the wall checked)"
+                     + ("; so no rating is posted. shopbeam has no way to check the wall "
+                        "or to be told it is safe (no key says \"full saddle\"), so whatever "
+                        "the seats are, a round member carrying live load this way is not "
+                        "rated here: have the wall checked at each seat and load (full saddles "
+                        "or sleeves that spread the force are what such a check usually asks "
+                        "for), and rate the member from that check"
                         if points or seats else ""),
                      clause, blocks_rating=bool(points or seats))
 
