@@ -1,6 +1,6 @@
 """Lifting profiles, bottom-flange bending under trolley wheels and the lateral trolley force.
 
-Hand calculations written out below; coefficients of CMAA 74 70-3.3.2.2 / EN 1993-6 Table 5.2
+Hand calculations written out below; coefficients of CMAA 74 local flange bending / EN 1993-6 Table 5.2
 and the ASCE 7-16 4.9 and ASME BTH-1 values are from memory. Section properties: AISC Shapes
 Database v15.0 (W12x26: d 12.2, bf 6.49, tf 0.380, tw 0.230 in, Sx 33.4 in^3, rts 1.75 in,
 J 0.300 in^4, ho 11.8 in).

@@ -399,7 +399,7 @@ lifting = "powered-monorail"
 def test_issue_monorail_by_hand():
     # W12x26 A992, 16 ft, two 2000 lbf axles 12 in apart (2-ton hoist), 2 wheels per axle,
     # wheel 1/4 in from the flange tip, tagged lifting -> powered-monorail (25 % impact,
-    # ASCE 7-16 4.9.3, from memory). CMAA 74 70-3.3.2.2 / EN 1993-6 Table 5.2 (from memory):
+    # ASCE 7-16 4.9.3, from memory). CMAA 74 local flange bending / EN 1993-6 Table 5.2 (from memory):
     #   P = 1.25 x 1000 = 1250 lbf per wheel; lambda = 2 x 0.25 / (6.49 - 0.23) = 0.0799
     #   tip (point 2): Cx2 = 2.4058; local sigma_x = 2.4058 x 1250 / 0.380^2 = 20,826 psi
     #   worst place: axles at 7.24 and 8.24 ft; R_left = 2500 x 16.52 / 16 + 26 x 8 = 2789 lbf

@@ -186,7 +186,7 @@ lifting = "hand-geared-monorail"
 
 
 def test_a_hoist_on_a_tube_or_channel_is_not_rated_for_the_member_under_the_hook():
-    # only an I-beam's bottom flange is checked under a hung load (CMAA 74 70-3.3.2.2, from
+    # only an I-beam's bottom flange is checked under a hung load (CMAA 74 local flange bending, from
     # memory); a tube's wall or a channel's flange under a hook, lug or clamp is not
     for sec, mat in (("HSS6x4x1/4", "A500-C"), ("C8x11.5", "A36")):
         cap = capacity(parse_job_text(HOIST.replace("SECTION", sec).replace("MATERIAL", mat)))

@@ -8,8 +8,9 @@ member is a cantilever held at one place, else ``powered-monorail`` (25 % impact
 longitudinal); a below-the-hook beam is never guessed (its design factor must be named).
 
 Wheel loads on the bottom flange of an I-shape (W, S, HP, M): the local flange stresses of
-CMAA 74 (2004) 70-3.3.2.2 / AISC Design Guide 7 (2nd ed.) 17, the same coefficients as
-EN 1993-6 5.7.2 Table 5.2, all from memory. With P the load of one wheel, tf the flange
+CMAA 74 (2004) and AISC Design Guide 7 (2nd ed.) for monorail flanges (their section numbers
+are not cited: from memory), the same coefficients as EN 1993-6 5.7.2 Table 5.2, all from
+memory. With P the load of one wheel, tf the flange
 thickness at the wheel, lambda = 2 a / (bf - tw), a the distance from the flange tip to the
 wheel contact:
 
@@ -217,13 +218,14 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
     names = {"0": "flange-to-web junction", "1": "under the wheel", "2": "flange tip"}
     return Check(
         "wheel flange bending", vm, allow, "Pa",
-        f"bottom-flange local bending under a trolley wheel, CMAA 74 70-3.3.2.2 / AISC "
-        f"Design Guide 7 17 (EN 1993-6 Table 5.2 coefficients, from memory): sigma = C P / "
-        f"tf^2 ({'tapered' if tapered else 'parallel'} flange, lambda = 2a/(bf - tw) = "
+        f"bottom-flange local bending under a trolley wheel, CMAA 74 / AISC Design "
+        f"Guide 7 (2nd ed.) local flange bending (EN 1993-6 Table 5.2 coefficients, from "
+        f"memory): sigma = C P / tf^2 ({'tapered' if tapered else 'parallel'} flange, lambda = 2a/(bf - tw) = "
         f"{used['lambda']:.3f}), plus the global bending stress, von Mises <= {limit_words}",
         at,
         detail=f"point {point} ({names[point]}); {words}",
-        clause="CMAA 74 70-3.3.2.2; AISC Design Guide 7 (2nd ed.) 17",
+        clause="CMAA 74 local flange bending; AISC Design Guide 7 (2nd ed.) monorail flange "
+               "bending (sections from memory)",
         source="CMAA 74 / EN 1993-6 5.7.2 coefficients (from memory)",
         params={"P": p, "tf": tf, "a": a, "lambda": used["lambda"], "Cx": used["cx"],
                 "Cy": used["cy"], "sigma_global": sg, "sigma_x": used["sx"],
@@ -485,7 +487,7 @@ def _lifting_unchecked(job, sec) -> list:
                 f"clamp or parked trolley; the {part} there is not checked under it (only an "
                 "I-beam's bottom flange is checked under a hung load), so no rating is posted: "
                 "hang the load from an I-beam, or have the attachment and the member at it "
-                "checked", "CMAA 74 70-3.3.2.2; AISC 360-16 J10, K2", blocks_rating=True))
+                "checked", "CMAA 74 local flange bending; AISC 360-16 J10, K2", blocks_rating=True))
         if prof and prof.lateral and _static_hoist(job):
             return out + [Unchecked("lateral trolley force (weak-axis bending and torsion)",
                               f"{prof.lateral:.0%} of rated load + hoist + trolley at the hoist "
@@ -499,7 +501,7 @@ def _lifting_unchecked(job, sec) -> list:
     out = [Unchecked("flange local bending under trolley wheels",
                      f"trolley wheels on a {sec.shape} ({sec.axis} axis) are not covered by the "
                      "CMAA 74 / Design Guide 7 method (I-shapes only)",
-                     "CMAA 74 70-3.3.2.2; AISC Design Guide 7", blocks_rating=True)]
+                     "CMAA 74 local flange bending; AISC Design Guide 7", blocks_rating=True)]
     if prof and prof.lateral:
         out.append(Unchecked("lateral trolley force (weak-axis bending and torsion)",
                              f"{prof.lateral:.0%} of rated load + hoist + trolley at the wheels "
