@@ -252,3 +252,22 @@ def test_closed_shape_slenderness_gives_the_elastic_buckling_moment():
     b = check(res, "bending")
     assert "F.3 closed shape" in b.formula
     assert 0.93 * mcr / 1.65 < b.limit < mcr / 1.65
+
+
+@pytest.mark.parametrize("material, welded, wall, rated", [
+    ("6061-T6", "true", "1/2 in", False), ("6061-T6", "true", "3/8 in", True),
+    ("6061-T6", "false", "1/2 in", True), ("6063-T5", "false", "5/8 in", False),
+    ("6063-T5", "false", "1/2 in", True)])
+def test_a_member_thicker_than_its_material_values_hold_for_is_not_rated(material, welded, wall,
+                                                                          rated):
+    # Aluminum Design Manual 2015 Part A (from memory): 6061-T6's welded Ftyw 15 ksi holds up
+    # to 0.375 in, 6063-T5's Fty 16 / Ftu 22 ksi up to 0.5 in; both are lower past those, so a
+    # thicker member would be credited strength it may not have
+    from shopbeam.design.capacity import rating_gaps
+    from shopbeam.design.checks import strengths
+
+    j = job(section=f'{{ shape = "rect-tube", depth = "6 in", width = "4 in", wall = "{wall}" }}',
+            material=material, welded=welded)
+    said = [w for w in j.warnings if "thick where thickest" in w.message]
+    gaps = [g for g in rating_gaps(j, strengths(j)) if "thick where thickest" in g]
+    assert bool(said) == bool(gaps) == (not rated)

@@ -38,7 +38,7 @@ from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
 from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
-                                   strength_slip, stubby_words)
+                                   strength_slip, stubby_words, thickness_gap)
 
 
 # ------------------------------------------------------------------ root finding
@@ -193,6 +193,10 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "profile: the guessed monorail or jib profile uses AISC Omega, not the "
                    "ASME BTH-1 design factor. Write lifting = \"below-the-hook\" under "
                    "[criteria], or the profile it is")
+    thick = thickness_gap(getattr(st, "section", None) or job.section, job.material,
+                          getattr(job, "welded", False), job.units)
+    if thick:
+        out.append(thick)
     cuts = getattr(job, "cut_keys", ())
     if cuts:
         out.append("the job says the member is cut (" + ", ".join(cuts) + "): notches, copes, "

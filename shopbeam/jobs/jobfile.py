@@ -1490,6 +1490,53 @@ _BTH_WORDS = re.compile(r"\b(spreaders?(?: bars?| beams?)?|lift(?:ing)? beams?|s
                         r"coil lifters?)\b", re.IGNORECASE)
 
 
+def thickest(section) -> float | None:
+    """The thickest element of a section (m): a tube's wall, an I-shape's, channel's or tee's
+    flange or web, an angle's leg, a bar's least dimension; None for a custom section."""
+    d = getattr(section, "dims", {}) or {}
+    shape = getattr(section, "shape", "")
+    if shape in ("rect-tube", "round-tube", "pipe"):
+        return d.get("t_nom") or d.get("t_des")
+    if shape in ("i-beam", "channel", "tee"):
+        return max(d.get("tf", 0.0), d.get("tw", 0.0)) or None
+    if shape == "angle":
+        return d.get("t")
+    if shape == "rect-bar":
+        return min(d.get("h", 0.0), d.get("b", 0.0)) or None
+    if shape == "round-bar":
+        return d.get("od")
+    return None
+
+
+def thickness_gap(section, material, welded: bool, system: str = "us") -> str:
+    """Why no rating may rest on this material for this section: the member is thicker than
+    the range its values hold for (6063-T5 past 0.5 in, welded 6061-T6 past 0.375 in: Aluminum
+    Design Manual 2015 Part A, from memory, lower values past them); "" when none. Judged per
+    section, so a sizing sweep is not tainted by the job's own section."""
+    if section is None or material is None:
+        return ""
+    t = thickest(section)
+    limit, which = getattr(material, "max_thickness", None), "its values"
+    if welded and getattr(material, "welded_max_thickness", None) and (
+            limit is None or material.welded_max_thickness < limit):
+        limit, which = material.welded_max_thickness, "its welded (heat-affected zone) values"
+    if t is None or limit is None or t <= limit * (1 + 1e-6):
+        return ""
+    f = lambda x: units.fmt(x, "small_length", system)  # noqa: E731
+    return (f"section {section.designation!r} is {f(t)} thick where thickest, past the "
+            f"{f(limit)} up to which {which} for {material.key!r} hold (the standard gives "
+            "lower values past it), so the checks would credit strength the member may not "
+            "have")
+
+
+def _thickness_range(r: _Reader, section, material, welded: bool, system: str) -> None:
+    """`thickness_gap` as a warning on the job's own section."""
+    words = thickness_gap(section, material, welded, system)
+    if words:
+        r.warn(f"{words}: no rating is posted. Give the material inline with the values for "
+               "this thickness, or use a thinner section", "beam.material")
+
+
 def _rolling_keys(r: _Reader, raw, moving, tags, criteria) -> str:
     """`wheels_per_axle` or `wheel_edge` written on the [[moving]] set of a job not tagged
     lifting: they describe a trolley hung from the bottom flange, whose wheel flange checks are
@@ -2075,6 +2122,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     upward = _upward_loads(r, raw_loads, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
+    _thickness_range(r, section, material, welded, system)
     if welded and getattr(material, "kind", "") == "aluminum" and \
             not getattr(material, "fy_welded", None):
         r.warn("welded = true on a typed-in aluminium with no fy_welded: welding anneals the "

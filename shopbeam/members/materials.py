@@ -24,6 +24,7 @@ from shopbeam.errors import InputError
 from shopbeam.units import parse
 
 KSI = 6.894757293168361e6  # Pa (lbf/in^2 x 1000, exact from the international pound and inch)
+IN = 0.0254  # m (the international inch, exact)
 PSI = KSI / 1000
 LB_FT3 = 16.018463373960138  # kg/m^3 per lb/ft^3
 MPA = 1e6
@@ -55,6 +56,10 @@ class Material:
     # the figures as the standard publishes them, (US text, SI text), when a conversion of
     # the stored SI value would print an odd number (stainless 193 GPa is "28,000 ksi")
     published: tuple[str, str] | None = field(default=None, compare=False)
+    # the thickness (m) up to which the unwelded and the welded values hold, where the
+    # standard gives other values past it (None: no limit recorded)
+    max_thickness: float | None = None
+    welded_max_thickness: float | None = None
 
 
 def figures(m: Material, system: str = "us") -> str:
@@ -197,8 +202,9 @@ _MATERIALS: tuple[Material, ...] = (
     # (compression modulus), density 0.098 lb/in^3 (6061) and 0.097 (6063), from memory.
     Material("6061-T6", "Aluminium 6061-T6 extrusion / tube", "aluminum", 10100 * KSI,
              35 * KSI, 0.098 * 1728 * LB_FT3, fu=38 * KSI, g=3800 * KSI,
-             fy_welded=15 * KSI, fu_welded=24 * KSI,
-             source="Fty 35 ksi, Ftu 38 ksi; welded Ftyw 15 ksi, Ftuw 24 ksi; E 10,100 ksi; "
+             fy_welded=15 * KSI, fu_welded=24 * KSI, welded_max_thickness=0.375 * IN,
+             source="Fty 35 ksi, Ftu 38 ksi; welded Ftyw 15 ksi, Ftuw 24 ksi (up to 0.375 in "
+             "thick; lower past it); E 10,100 ksi; "
              "G 3,800 ksi; density 0.098 lb/in^3: Aluminum Design Manual 2015, from memory",
              notes=("welding within 1 in of a point lowers the strength there to the welded "
                     "(heat-affected zone) value",),
@@ -206,8 +212,8 @@ _MATERIALS: tuple[Material, ...] = (
              hss_wall_factor=1.0),
     Material("6063-T5", "Aluminium 6063-T5 extrusion", "aluminum", 10100 * KSI, 16 * KSI,
              0.097 * 1728 * LB_FT3, fu=22 * KSI, g=3800 * KSI, fy_welded=8 * KSI,
-             fu_welded=17 * KSI,
-             source="Fty 16 ksi, Ftu 22 ksi (up to 0.5 in thick); welded Ftyw 8 ksi, Ftuw "
+             fu_welded=17 * KSI, max_thickness=0.5 * IN,
+             source="Fty 16 ksi, Ftu 22 ksi (up to 0.5 in thick; lower past it); welded Ftyw 8 ksi, Ftuw "
              "17 ksi; E 10,100 ksi; density 0.097 lb/in^3: Aluminum Design Manual 2015, "
              "from memory",
              aliases=("6063t5", "al6063t5"), hss_wall_factor=1.0),
