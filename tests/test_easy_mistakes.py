@@ -246,6 +246,49 @@ def test_safety_factor_with_first_yield_is_used_without_a_warning():
     assert bend.limit == pytest.approx(job.material.fy / 3.0, rel=1e-9)
 
 
+@pytest.mark.parametrize("sf, rated", [(3.0, False), (2.0, False), (1.5, True)])
+def test_a_larger_factor_the_basis_does_not_use_stops_the_rating(sf, rated):
+    # AISC 360-16 ASD bending carries Omega_b 1.67: a job that asks for 3 wants more margin
+    # than the label would carry (common practice: a posted load honours the factor asked
+    # for), so nothing is posted until basis = "first-yield" applies it or it is removed; a
+    # smaller one than the basis's own is only warned (the label is then more conservative)
+    from shopbeam.design.capacity import capacity
+
+    cap = capacity(parse_job_text(job_text(criteria=f"safety_factor = {sf}")))
+    said = [r for r in cap.not_rated if r.startswith(f"safety_factor = {sf:g} asks for more")]
+    assert bool(said) == (not rated)
+    applied = capacity(parse_job_text(job_text(
+        criteria=f'safety_factor = {sf}\nbasis = "first-yield"')))
+    assert not [r for r in applied.not_rated if r.startswith("safety_factor")]
+
+
+@pytest.mark.parametrize("key", ["factor_of_safety", "sf", "fos", "omega", "nd"])
+def test_a_safety_factor_under_another_name_is_warned_and_not_rated(key):
+    # the factor meant is not applied: never "unknown key ignored" on a posted label
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(job_text(criteria=f"{key} = 3"))
+    assert any(p.key == f"criteria.{key}" and "reads like a safety factor" in p.message
+               for p in warnings(job))
+    cap = capacity(job)
+    assert not cap.rated and any(f"criteria.{key}" in r for r in cap.not_rated)
+
+
+@pytest.mark.parametrize("sf, posted", [(1.0, False), (1.4, False), (1.5, True), (2.0, True)])
+def test_too_small_a_factor_on_first_yield_posts_nothing(sf, posted):
+    # a posted load at first yield with no margin (1.0) or nearly none: AISC ASD takes 1.67 on
+    # bending (AISC 360-16 F1); under 1.5 nothing is posted (common practice), though the
+    # checks use the factor as written
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(job_text(criteria=f'safety_factor = {sf}\nbasis = "first-yield"'))
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    assert bend.limit == pytest.approx(job.material.fy / sf, rel=1e-9)
+    cap = capacity(job)
+    assert any("leaves" in r and "margin" in r for r in cap.not_rated) == (not posted)
+
+
 def test_the_default_factor_written_out_on_steel_is_not_noise():
     job = parse_job_text(job_text(criteria="safety_factor = 1.67"))
     assert not [p for p in warnings(job) if p.key == "criteria.safety_factor"]

@@ -197,6 +197,14 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                           getattr(job, "welded", False), job.units)
     if thick:
         out.append(thick)
+    gap = getattr(job.criteria, "factor_gap", "")
+    if gap:
+        out.append(gap)
+    keys = getattr(job, "factor_keys", ())
+    if keys:
+        out.append("the job writes a safety factor shopbeam does not read (" + ", ".join(keys)
+                   + "), so it is not applied. The factor key is [criteria] safety_factor "
+                   "(with basis = \"first-yield\"); write it there, or remove the key")
     cuts = getattr(job, "cut_keys", ())
     if cuts:
         out.append("the job says the member is cut (" + ", ".join(cuts) + "): notches, copes, "

@@ -77,6 +77,9 @@ class Criteria:
     deflection_given: bool = False  # the file gives a deflection limit
     live_deflection_ratio: float | None = None  # n of L/n under live load alone, or None
     lifting: str = ""  # lifting profile named (shopbeam.jobs.rules.LIFTING_PROFILES), lower case
+    # why the safety_factor as written stops a rating (more than the basis carries and not
+    # used, or too little margin on first yield); "" when it does not
+    factor_gap: str = ""
     category: str = ""  # ASME BTH-1 design category "A" or "B" (below-the-hook beams)
 
 
@@ -148,6 +151,9 @@ class Job:
     # keys the reader did not know that say the member is notched, coped or holed (not
     # modelled): no rating is posted on them (see _CUT_KEY)
     cut_keys: tuple[str, ...] = ()
+    # keys the reader did not know that read like a safety factor (sf, fos, omega...), or a
+    # safety_factor outside [criteria]: the factor meant is not applied, so no rating
+    factor_keys: tuple[str, ...] = ()
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -251,6 +257,7 @@ class _Reader:
         self.problems: list[Problem] = []
         self.system = "us"  # the job's units, for the figures quoted in messages
         self.cuts: list[str] = []  # keys that say the member is notched, coped or holed
+        self.factors: list[str] = []  # keys that read like a safety factor shopbeam ignores
 
     def line_for(self, key: str) -> int | None:
         k = key
@@ -364,6 +371,19 @@ class _Reader:
         for k in table:
             if k in known:
                 continue
+            if _FACTOR_KEY.match(str(k)) or (str(k) == "safety_factor" and prefix != "criteria"):
+                path = f"{prefix}.{k}" if prefix else k
+                self.factors.append(path)
+                where = "" if prefix == "criteria" else " under [criteria]"
+                said = (f"safety_factor in {label} belongs under [criteria]: written here it "
+                        "is not read" if str(k) == "safety_factor" else
+                        f"{k!r} in {label} reads like a safety factor, and shopbeam does not "
+                        "read it")
+                self.warn(f"{said}, so the checks would not use it and no rating is posted. "
+                          f"The factor key is safety_factor{where} (applied with basis = "
+                          "\"first-yield\"; AISC and ADM checks carry their own Omega); write "
+                          "it there, or remove this key", path)
+                continue
             if _CUT_KEY.search(str(k)):
                 path = f"{prefix}.{k}" if prefix else k
                 self.cuts.append(path)
@@ -399,6 +419,12 @@ class _Reader:
 _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes?|cut_?outs?|"
                       r"openings?|slots?|slotted|penetrations?|bored|drilled|drilling)"
                       r"(?:$|[_\- ])", re.IGNORECASE)
+
+# An unknown key that reads like a safety factor: one the user meant to apply, ignored, so the
+# job is not rated on it (a misplaced safety_factor too)
+_FACTOR_KEY = re.compile(r"^(?:sf|fs|fos|nd|omega(?:_b)?|factor_?of_?safety|safety|"
+                         r"safety_?margin|design_?factor|load_?factor|safety_?factors?)$",
+                         re.IGNORECASE)
 
 # How each table is written, for "belongs under [criteria]" ("" is the top of the file)
 _TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
@@ -444,8 +470,16 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                 "criteria.safety_factor")
         sf = 1.67
     basis = r.choice(crit, "basis", "criteria.basis", Basis, Basis.AUTO)
+    unused = ""
     if "safety_factor" in crit and sf != 1.67:
-        _unused_safety_factor(r, sf, material, basis)
+        unused = _unused_safety_factor(r, sf, material, basis)
+    if "safety_factor" in crit and 1 <= sf < MIN_POSTED_FACTOR and (
+            basis == Basis.FIRST_YIELD or getattr(material, "kind", "custom") == "custom"):
+        unused = (f"safety_factor = {sf:g} leaves {'no' if sf == 1 else 'too little'} margin "
+                  f"on first yield for a posted load (AISC ASD takes 1.67; under "
+                  f"{MIN_POSTED_FACTOR:g} nothing is posted)")
+        r.warn(f"{unused}: the checks use it, but no rating is posted; write 1.67 (or your "
+               "shop's factor) to rate the member", "criteria.safety_factor")
     kind = getattr(material, "kind", "")
     if (kind == "lumber" and basis != Basis.AUTO) or (kind == "aluminum" and basis == Basis.ASD):
         own = "the NDS allowable stresses" if kind == "lumber" else \
@@ -512,7 +546,8 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                f"{lift} profile ({LIFTING_PROFILES[lift]['impact_source']}); the checks use "
                "the value written", "criteria.impact")
     return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given,
-                    live_deflection_ratio=live, lifting=lift, category=cat)
+                    live_deflection_ratio=live, lifting=lift, category=cat,
+                    factor_gap=unused)
 
 
 # Below L/100 a deflection limit is almost certainly a slip (a dropped zero): the loosest
@@ -1875,10 +1910,18 @@ def _repetitive(r: _Reader, raw_loads, service, material, section, members):
     return service
 
 
-def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
+# The least safety factor on first yield a posted load may rest on (common practice: ASD
+# bending takes 1.67, and no shop posts a load at first yield with less than about 1.5)
+MIN_POSTED_FACTOR = 1.5
+
+
+def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> str:
+    """A safety factor the basis does not use is warned; one larger than the basis's own is
+    also the reason no rating is posted (the user asked for more margin than the label would
+    carry). Returns that reason, or ""."""
     kind = getattr(material, "kind", "custom")
     if kind == "custom" or (basis == Basis.FIRST_YIELD and kind != "lumber"):
-        return
+        return ""
     uses = {"steel": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
             "stainless": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
             "aluminum": "the Aluminum Design Manual (Omega 1.65 on yield, 1.95 on rupture)",
@@ -1886,8 +1929,13 @@ def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> None:
     todo = ("remove safety_factor (wood has no first-yield basis)" if kind == "lumber" else
             "write basis = \"first-yield\" under [criteria] to check first yield with this "
             "factor, or remove safety_factor")
+    more = sf > 1.67
     r.warn(f"safety_factor = {sf:g} is NOT used: this {kind} member is checked by "
-           f"{uses[kind]}; {todo}", "criteria.safety_factor")
+           f"{uses[kind]}; {todo}"
+           + ("; as it asks for more margin than the checks carry, no rating is posted"
+              if more else ""), "criteria.safety_factor")
+    return (f"safety_factor = {sf:g} asks for more margin than {uses[kind]}, and it is not "
+            f"used; {todo}") if more else ""
 
 
 def _read_project(r: _Reader, table) -> dict:
@@ -2201,6 +2249,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
+        factor_keys=tuple(r.factors),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
