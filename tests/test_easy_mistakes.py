@@ -703,3 +703,23 @@ def test_a_bearing_on_a_hinge_is_named_as_ignored():
                               'type = "roller"')
     w = [p for p in warnings(parse_job_text(text)) if p.key == "supports[2].bearing"]
     assert len(w) == 1 and "hinge" in w[0].message
+
+
+@pytest.mark.parametrize("impact, rated", [(None, False), ('"100%"', True), ('"0%"', True)])
+def test_a_road_vehicle_member_without_impact_is_not_rated(impact, rated):
+    # road shock multiplies a trailer's payload (1.5 to 3 g design figures, common practice,
+    # from memory): a static rating would be read as the payload, so none is posted until the
+    # job says what allowance it takes (0 % for a member only loaded while parked)
+    from shopbeam.design.capacity import capacity
+
+    crit = f"impact = {impact}" if impact else ""
+    text = job_text(criteria=crit).replace('title = "shelf"', 'title = "utility trailer deck"')
+    text = text.replace("[beam]", 'tags = ["not-lifting"]\n[beam]')
+    job = parse_job_text(text)
+    said = [p for p in warnings(job) if "road vehicle" in p.message]
+    assert bool(said) == (not rated)
+    cap = capacity(job)
+    assert any("road vehicle" in r for r in cap.not_rated) == (not rated)
+    if impact == '"100%"':  # and the allowance is applied: k halves (the live load doubles)
+        plain = capacity(parse_job_text(job_text()))
+        assert cap.factor == pytest.approx(plain.factor / 2, rel=1e-6)

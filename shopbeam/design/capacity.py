@@ -197,6 +197,12 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                           getattr(job, "welded", False), job.units)
     if thick:
         out.append(thick)
+    road = getattr(job, "vehicle_hint", "")
+    if road:
+        out.append(f"it reads like a member of a road vehicle ({road}) but gives no impact: "
+                   "road shock multiplies the payload, so a static figure would overstate it. "
+                   "Write [criteria] impact = \"100%\" (or the vehicle maker's figure), or "
+                   "impact = \"0%\" for a member only loaded while parked")
     gap = getattr(job.criteria, "factor_gap", "")
     if gap:
         out.append(gap)

@@ -154,6 +154,8 @@ class Job:
     # keys the reader did not know that read like a safety factor (sf, fos, omega...), or a
     # safety_factor outside [criteria]: the factor meant is not applied, so no rating
     factor_keys: tuple[str, ...] = ()
+    # what makes a job with no impact read like a road vehicle's member (see _vehicle_hint)
+    vehicle_hint: str = ""
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -1655,6 +1657,32 @@ def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
     return said
 
 
+_VEHICLE_WORDS = re.compile(
+    r"\b(trailers?|truck(?: bed|s)?|flat ?beds?|pickup|vehicles?|chassis|tow(?:ing|ed)?|"
+    r"hitch|road|axle ?frames?|utility trailer|car hauler|cargo deck)\b", re.IGNORECASE)
+
+
+def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: bool) -> str:
+    """A member of a road vehicle (a trailer cross member, a truck bed rail) with no `impact`
+    written: road shock multiplies the payload (bumps of 1.5 to 3 g are usual design figures
+    for trailers, common practice, from memory) and a static figure would be read as the
+    payload it may carry. Warned; the words that gave it away are returned (no rating is
+    posted until impact is given). A lifting job has its own impact."""
+    if lifting or criteria.impact is not None:
+        return ""
+    said = _words_found(_VEHICLE_WORDS, title, notes, tags, raw_loads)
+    if not said:
+        return ""
+    hint = "; ".join(said[:3])
+    r.warn(f"this reads like a member of a road vehicle ({hint}) but gives no impact: road "
+           "shock over bumps multiplies the payload (trailers are commonly designed for 1.5 to "
+           "3 g, from memory), so a static figure would overstate what may be carried and no "
+           "rating is posted. Write [criteria] impact = \"100%\" (or the vehicle maker's "
+           "figure) for the road shock, or impact = \"0%\" for a member that is only loaded "
+           "while parked", "criteria.impact")
+    return hint
+
+
 def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     """A job that reads like a storage rack ("pallet rack beam", "racking") but is not
     tagged one is warned: the rack cautions (the impact load is not added unless given) and
@@ -2209,6 +2237,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     bth_hint = _below_the_hook_hint(r, title, notes, tags, criteria)
     rolling_keys = _rolling_keys(r, data.get("moving"), moving, tags, criteria)
+    vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
+                                 is_lifting(tags, criteria.lifting))
     _rack_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
@@ -2249,7 +2279,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
-        factor_keys=tuple(r.factors),
+        factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint,
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
