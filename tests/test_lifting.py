@@ -461,3 +461,59 @@ def test_an_aluminium_runway_does_not_get_the_steel_flange_checks_and_is_not_rat
     # the same runway in A36 plate gets both checks
     steel = analyze(parse_job_text(AL_RUNWAY.format(material="A36", profile=profile)))
     assert "wheel flange bending" in {c.name for c in steel.checks}
+
+
+BTH = """schema = 1
+title = "lifting beam for die sets"
+tags = ["lifting"]
+[beam]
+length = "8 ft"
+section = "W8x18"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "8 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "4 ft"
+value = "-10000 lbf"
+label = "rated load"
+flange = "bottom"
+{lug}
+[criteria]
+lifting = "below-the-hook"
+category = "A"
+"""
+
+
+def test_a_load_hung_from_a_lug_under_the_web_is_not_checked_as_a_clamp_on_the_flange_tips():
+    # a lifting beam's load hangs from a lug plate welded under the web: no wheel or jaw bears
+    # on the flange tips, so the tip check (EN 1993-6 Table 5.2 coefficients, from memory) is
+    # not the model; the flange under the lug keeps AISC 360-16 J10.1, and the label says what
+    # the rating rests on. Without lug = true the clamp model (the most demanding) stays
+    from shopbeam.output import label
+
+    clamp = parse_job_text(BTH.format(lug=""))
+    lug = parse_job_text(BTH.format(lug="lug = true"))
+    assert lug.lugs == ("loads[0]",) and not clamp.lugs
+    names = lambda job: {c.name for c in analyze(job).checks}  # noqa: E731
+    assert "wheel flange bending" in names(clamp)
+    assert "wheel flange bending" not in names(lug)
+    assert "flange local bending" in names(lug)
+    k_clamp, k_lug = capacity(clamp).factor, capacity(lug).factor
+    assert k_lug > k_clamp
+    cap = capacity(lug)
+    text = " ".join(x.strip("| ") for x in
+                    label.label_text(label.rating(cap, analyze(lug).unchecked)).splitlines())
+    assert "RATED ONLY WHILE loads[0] (rated load) hangs from a lug plate welded under" in text
+
+
+def test_lug_on_a_load_that_bears_on_top_changes_nothing_and_says_so():
+    job = parse_job_text(BTH.format(lug="lug = true").replace('flange = "bottom"',
+                                                               'flange = "top"'))
+    assert not job.lugs
+    assert any(w.key == "loads[0].lug" and "changes nothing" in w.message for w in job.warnings)

@@ -177,9 +177,10 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
     # (wheels written on any of them count for all; none written: 2, a beam clamp or a
     # two-wheel trolley, the most demanding fit)
     given = getattr(job, "contacts", None) or {}
+    lugs = set(getattr(job, "lugs", ()) or ())  # on a lug under the web: no flange-tip contact
     together: dict[float, list] = {}
     for ld in sol.beam.loads:
-        if ld.kind == "point" and ld.value and (ld.key or "") in hung:
+        if ld.kind == "point" and ld.value and (ld.key or "") in hung and ld.key not in lugs:
             got = together.setdefault(ld.at, [ld, 0])
             if got[0] is not ld:
                 got[0] = replace(got[0], value=got[0].value + ld.value)

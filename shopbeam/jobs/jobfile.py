@@ -49,7 +49,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
              "repetitive"},
     "supports": {"at", "type", "stiffness", "label", "bearing", "brace"},
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
-              "patterned", "uplift", "bearing", "flange", "wheels"},
+              "patterned", "uplift", "bearing", "flange", "wheels", "lug"},
     "criteria": {"deflection", "safety_factor", "basis", "impact", "duration",
                  "live_deflection", "lifting", "category"},
     "moving": {"label", "loads", "dead", "spacing", "travel", "case", "wheels_per_axle",
@@ -130,6 +130,9 @@ class Job:
     hung: tuple[str, ...] = ()  # keys of point loads hung from the bottom flange
     # of those, the ones hung by default (a lifting job's I-beam, no `flange` written)
     hung_default: tuple[str, ...] = ()
+    # of those, the ones said to hang from a lug plate welded under the web (lug = true): no
+    # wheels or jaws on the flange tips, so no flange-tip check (J10.1 still applies)
+    lugs: tuple[str, ...] = ()
     # force loads (and wheels) that push UP with no `uplift = true`: almost always a forgotten
     # minus sign. Each entry is "loads[i] (label)"; a capacity or rating is not posted on them.
     upward: tuple[str, ...] = ()
@@ -2160,6 +2163,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                       if isinstance(crit_raw, dict) else ""))
     hung_default: list[str] = []
     contacts: dict[str, int] = {}
+    lugs: list[str] = []
     for i, ld in enumerate(raw_loads):
         got = _read_load(r, i, ld, length, conv)
         if got is not None and _plausible_load(r, got):
@@ -2188,7 +2192,27 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                            "changes nothing", f"loads[{i}].wheels")
                 else:
                     contacts[f"loads[{i}]"] = n
-        elif _is_table(ld) and "wheels" in ld and ld.get("type") in LOAD_KINDS:
+            if "lug" in ld:
+                if not isinstance(ld["lug"], bool):
+                    r.error("lug must be true or false (true: the load hangs from a lug plate "
+                            "welded under the web, not from trolley wheels or a clamp on the "
+                            "flange tips)", f"loads[{i}].lug")
+                elif ld["lug"] and f"loads[{i}]" not in hung:
+                    r.warn("lug = true says a load hung from the bottom flange hangs from a "
+                           "lug under the web; this load bears on top (flange = \"bottom\" "
+                           "hangs it), so it changes nothing", f"loads[{i}].lug")
+                elif ld["lug"] and "wheels" in ld:
+                    r.error("lug = true and wheels together: a load hangs either from a lug "
+                            "under the web or from trolley wheels or jaws on the flange tips; "
+                            "keep the one it is", f"loads[{i}].lug")
+                elif ld["lug"]:
+                    lugs.append(f"loads[{i}]")
+        elif _is_table(ld) and "lug" in ld and ld.get("type") in LOAD_KINDS:
+            r.warn(f"lug says a point load hung from the bottom flange hangs from a lug under "
+                   f"the web; this load is a {ld.get('type')} load, so it changes nothing",
+                   f"loads[{i}].lug")
+        if _is_table(ld) and ld.get("type") != "point" and "wheels" in ld and \
+                ld.get("type") in LOAD_KINDS:
             r.warn(f"wheels says how a point load hung from the bottom flange bears on it (the "
                    f"trolley wheels or clamp jaws); this load is a {ld.get('type')} load, "
                    "so it changes nothing. Give a hoist as a point load, or trolley "
@@ -2277,6 +2301,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         braces=braces, braces_flange=braces_flange,
         moving=moving, path=filename, restrained=restrained, bearing=bearing,
         bearings=bearings, contacts=contacts, hung=tuple(hung), hung_default=tuple(hung_default),
+        lugs=tuple(lugs),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
         factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint,

@@ -279,6 +279,15 @@ def _held_words(job) -> list[str]:
             getattr(job, "braces_flange", None) or "both", "both flanges")
         out.append("RATED ONLY WITH the braces in place at "
                    + ", ".join(pos(x) for x in job.braces) + f" ({which}).")
+    lugs = getattr(job, "lugs", ())
+    if lugs:
+        names = [ld.key + (f" ({ld.label})" if ld.label else "") for ld in job.loads
+                 if ld.key in lugs]
+        out.append("RATED ONLY WHILE " + ", ".join(names) + (" hangs" if len(names) == 1
+                                                            else " hang")
+                   + " from a lug plate welded under the web, not from a clamp or trolley on "
+                   "the flange tips (lug = true; the lug, its welds and the rigging are not "
+                   "checked here).")
     if job.lifting and not (job.restrained or job.braced):
         # a lifting job's supports are taken as holding it against twist unless brace says
         # otherwise (analysis.HANGER_BRACE): a single hanger rod does not
