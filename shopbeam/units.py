@@ -246,6 +246,12 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
             ft_in = f"{'-' if sign < 0 else ''}{terms[0][0]} ft {terms[1][0]} in"
             raise InputError(f"{text!r} has a bare number: for feet and inches write \"{ft_in}\" "
                              "(or 5' 6\"); shopbeam never guesses a unit", key)
+        if kind == "length" and len(terms) == 2 and not terms[1][1] and \
+                _word(terms[0][1]) == "ft":
+            # "5 ft 6" or "5'6": the inches of feet and inches without their mark
+            raise InputError(f"{text!r} has a bare number after the feet: for feet and inches "
+                             f"write \"{'-' if sign < 0 else ''}{float(terms[0][0]):g} ft "
+                             f"{float(terms[1][0]):g} in\" (or 5' 6\"); shopbeam never guesses a unit", key)
         # all numbers: suggest the whole text with a unit; else the first bare number
         shown = text.strip() if all(not u for _, u in terms) else \
             next(str(n) for n, u in terms if not u)

@@ -814,3 +814,16 @@ def test_a_key_saying_the_member_is_cut_is_not_ignored_and_nothing_is_rated(wher
     plain = parse_job_text(text.replace(f"{key} = ", "colour = "))
     assert not any("member is cut" in r for r in capacity(plain).not_rated)
     assert any(w.key.endswith("colour") and "is ignored" in w.message for w in plain.warnings)
+
+
+@pytest.mark.parametrize("typed, says", [("5 ft 6", '"5 ft 6 in"'), ("5'6", '"5 ft 6 in"'),
+                                         ("10' 6-1/2", '"10 ft 6.5 in"')])
+def test_feet_with_bare_inches_suggest_the_inches(typed, says):
+    # a shop writes 5' 6 for five feet six inches; shopbeam never guesses the unit of the 6,
+    # but the message names the likely fix
+    text = DOUBLED.replace('type = "point"\ntype = "point"', 'type = "point"').replace(
+        'at = "8 ft"', f'at = "{typed}"')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = got.value.problems
+    assert p.key == "loads[0].at" and says in p.message

@@ -274,7 +274,8 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("--kind", default=None,
                    help="one catalog kind or shape kind (listed below; default: all)")
     s.add_argument("--filter", default=None, metavar="TEXT",
-                   help="only designations containing TEXT, e.g. 4x4")
+                   help="only designations containing TEXT as whole sizes, e.g. 4x4 (W8X10 is "
+                        "found by 8x10, not by 8x1)")
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
     _with_kinds(s)
     s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_shapes"))

@@ -690,7 +690,8 @@ def _round_wall(job, clause: str) -> Unchecked:
     Only dead load on the supports is a caution (bear it on a saddle)."""
     points = _span_forces(job)
     seats = _live_bearings(job)
-    return Unchecked("round HSS wall under a concentrated force",
+    steel = getattr(job.material, "kind", "") in ("steel", "stainless")
+    return Unchecked(f"round {'HSS' if steel else 'tube'} wall under a concentrated force",
                      "local plastification of a round wall at supports and point loads is not "
                      "checked" + ("" if points or seats else " (bear it on a saddle)")
                      + (f"; {', '.join(points)} bear on the wall between the supports, and a "

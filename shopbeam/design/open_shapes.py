@@ -366,7 +366,9 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
         clause, src = "AISC 360-16 F10", F10_SOURCE
         formula = f"{BASIS_WORDS[st.basis]}: {text}"
     if braced:
-        seg = "; ".join(x for x in (seg, "continuously braced (beam.braced): no LTB") if x)
+        held = ("held against twist all along (beam.restrained): no LTB" if job.restrained
+                else "continuously braced (beam.braced): no LTB")
+        seg = "; ".join(x for x in (seg, held) if x)
     return Check("bending", demand, limit, "N*m", formula, at, detail=seg, clause=clause,
                  source=src, params=params, extra={"cb": params.get("Cb", 1.0)})
 

@@ -542,12 +542,13 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
     if lift and not given:
         ratio = LIFTING_PROFILES[lift]["deflection"]
     if not lift and lifting and impact is not None and impact < 0.25:
-        r.warn(f"impact {impact:.0%} is below the 25% of a powered monorail or jib (ASCE 7-16 "
-               "4.9.3), the profile tags = [\"lifting\"] picks; name the device with "
-               "[criteria] lifting = \"hand-geared-monorail\" (0%) if that is what it is",
-               "criteria.impact")
+        r.warn(f"impact {impact:.3g} ({impact * 100:.3g}%) is below the 25% of a powered "
+               "monorail or jib (ASCE 7-16 4.9.3), the profile tags = [\"lifting\"] picks; "
+               "name the device with [criteria] lifting = \"hand-geared-monorail\" or "
+               "\"hand-geared-jib\" (0%) if that is what it is", "criteria.impact")
     if lift and impact is not None and impact < LIFTING_PROFILES[lift]["impact"]:
-        r.warn(f"impact {impact:.0%} is below the {LIFTING_PROFILES[lift]['impact']:.0%} of the "
+        r.warn(f"impact {impact * 100:.3g}% is below the "
+               f"{LIFTING_PROFILES[lift]['impact']:.0%} of the "
                f"{lift} profile ({LIFTING_PROFILES[lift]['impact_source']}); the checks use "
                "the value written", "criteria.impact")
     return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given,

@@ -31,10 +31,11 @@ def render(res: SizeResult, top: int = 15) -> str:
               "self-weight not included (self_weight = false)")
     lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; {weight}")
     more = len(res.screened_only)
+    full_ok = sum(1 for r in res.rows if r.checked == "full" and r.ok)
     if more:
         lines += textwrap.wrap(
             f"{res.full_checks} checked in full, lightest first, until "
-            f"{'one' if len(res.passing) <= 1 else len(res.passing)} passed; {more} "
+            f"{'one' if full_ok <= 1 else full_ok} passed; {more} "
             "heavier sections pass the batched screen but were not checked in full (not "
             "listed: the screen is only a lower bound; --confirm N checks and lists N)",
             78)
