@@ -620,9 +620,12 @@ def _lumber_flexure(sec, mat, s, service, system: str = "us") -> Flexure:
                            "depth", "NDS 2018 Table 4.3.1, 3.3.3, 3.10"),))
     f = lumber.factors(sec, mat, service or lumber.Service())
     fac = f.factors
-    text = (f"NDS 2018 Table 4.3.1: Fb' = Fb CD CM Ct CL CF Cfu Cr = "
+    lvl = f.values.size_class == "lvl"  # its depth factor is the maker's, not NDS CF
+    size = "the maker's depth factor (12/d)^0.136" if lvl else "CF"
+    text = (f"NDS 2018 Table {'8.3.1' if lvl else '4.3.1'}: Fb' = Fb CD CM Ct CL "
+            f"{'(12/d)^0.136' if lvl else 'CF'} Cfu Cr = "
             f"{stress_words(f.values.fb, system)} x CD {fac['CD']:g} x CM {fac['CM_b']:g} x Ct "
-            f"{fac['Ct_b']:g} x CF {fac['CF']:.3g} x Cfu {fac['Cfu']:g} x Cr {fac['Cr']:g} = "
+            f"{fac['Ct_b']:g} x {size} {fac['CF']:.3g} x Cfu {fac['Cfu']:g} x Cr {fac['Cr']:g} = "
             f"{stress_words(f.fb_star * f.cfu, system)}")
     ltb = None
     warnings = ()
