@@ -330,7 +330,10 @@ def material_for_kind(job, kind: str):
         return replace(job, material=grade), (
             f"--kind {kind} is not made in the job's grade {name}: swept in {grade.key} "
             f"({grade.name}), the grade it is bought in (AISC Manual Table 2-4, common "
-            "practice); give beam.material in the job to choose another grade")
+            "practice)" + ("; round tube to an A500 edition before 2018 is 46 ksi "
+                           "(A500-C-round)" if kind in ("HSS-round", "CHS") and
+                           grade.key == "A500-C" else "")
+            + "; give beam.material in the job to choose another grade")
     key = FAMILY_DEFAULTS.get(kind, "A36")
     mat = get_material(key)
     note = (f"--kind {kind} is {'wood' if wants_wood else 'metal'} stock but the job's material "
