@@ -504,3 +504,18 @@ def test_the_capacity_page_total_is_the_labels():
     assert lines["total"] == figs["TOTAL"].value
     w = float(lines["max uniform load"].split()[0])
     assert float(lines["total"].split()[0]) <= w * 30 + 1e-9
+
+
+@pytest.mark.parametrize("preset", ["jib-arm", "monorail-hoist-beam", "monorail-trolley"])
+def test_a_lifting_label_says_the_device_is_rated_at_the_least_of_its_parts(preset):
+    # a lifting device is marked with the least rated load of its parts (ASME B30.11 / B30.17
+    # practice, from memory): the beam's figure alone would invite a lift past the hoist's
+    job = load_job(PRESETS / f"{preset}.toml")
+    cap = capacity(job)
+    r = label.rating(cap, analyze(job).unchecked)
+    for text in (label.label_text(r), label.plaque_text(r), label.plaque_html(r)):
+        flat = " ".join(x.strip("| ") for x in text.splitlines())
+        assert "BEAM ONLY" in flat and "LEAST of this figure" in flat
+    shelf = load_job(PRESETS / "workbench-top.toml")
+    assert "BEAM ONLY" not in label.label_text(label.rating(capacity(shelf),
+                                                            analyze(shelf).unchecked))

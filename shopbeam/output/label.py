@@ -426,7 +426,9 @@ def _profile_name(job) -> str:
 def _lifting_words(r: Rating) -> str:
     """The lifting line of a label: the profile the numbers used, and what must follow."""
     return ("LIFTING DEVICE" + (f" ({r.lifting_profile} profile)" if r.lifting_profile else "")
-            + ": proof load test and marking by a qualified engineer required before use")
+            + ": proof load test and marking by a qualified engineer required before use. "
+            "BEAM ONLY: the device's rated load is the LEAST of this figure and the rated "
+            "loads of the hoist, trolley, hangers, connections and rigging; mark the least")
 
 
 # ------------------------------------------------------------------ 40-column label
