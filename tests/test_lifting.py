@@ -517,3 +517,22 @@ def test_lug_on_a_load_that_bears_on_top_changes_nothing_and_says_so():
                                                                'flange = "top"'))
     assert not job.lugs
     assert any(w.key == "loads[0].lug" and "changes nothing" in w.message for w in job.warnings)
+
+
+@pytest.mark.parametrize("material, section, applied", [
+    ("A992", '"W8x18"', True), ("6061-T6", '{ shape = "rect-tube", depth = "4 in", width = '
+                                            '"2 in", wall = "1/8 in" }', False),
+    ("DF-L-2", '"4x10"', False)])
+def test_the_below_the_hook_design_factor_is_applied_or_the_job_is_not_rated(material, section,
+                                                                             applied):
+    # ASME BTH-1 (from memory): Nd 2.0 for Category A in place of the AISC Omegas, written
+    # for steel. A steel beam gets it (Mn capped at 1.10 Fy S, / Nd); an aluminium or wood
+    # member is checked by its own rules, which do not carry Nd: nothing may be rated on it
+    text = BTH.format(lug="").replace('section = "W8x18"', f"section = {section}").replace(
+        'material = "A992"', f'material = "{material}"').replace('flange = "bottom"\n', "")
+    job = parse_job_text(text)
+    res = analyze(job)
+    nd = [u for u in res.unchecked if u.name == "ASME BTH-1 design factor on this member"]
+    assert bool(nd) == (not applied)
+    bend = next(c for c in res.checks if c.name == "bending")
+    assert ("Nd 2" in bend.formula) == applied

@@ -645,17 +645,17 @@ def test_a_round_tube_under_a_point_load_says_its_wall_is_not_checked(material):
     # caution (a caution: a round wall spreads the load round its ring, common practice)
     tube = '[beam.section]\nshape = "round-tube"\nod = "2.375 in"\nwall = "0.154 in"'
     res = analyze(parse_job_text(simple_span(f"{material}\n{tube}", 6)))
-    wall = [u for u in res.unchecked if u.name == "round HSS wall under a concentrated force"]
+    wall = [u for u in res.unchecked if u.name.endswith("wall under a concentrated force")]
     # a point load on the span: a strap or hook can crush a thin wall first, not rated
     assert wall and wall[0].blocks_rating and "loads[0]" in wall[0].reason
     # a spread live load meets the wall at the supports, whose reactions grow with the rated
     # load: a seat narrower than a full saddle can crush the wall there, not rated either
     spread = analyze(parse_job_text(simple_span(f"{material}\n{tube}", 6,
                                                 uniform_load(6, "-50 lbf/ft"))))
-    wall = [u for u in spread.unchecked if u.name == "round HSS wall under a concentrated force"]
+    wall = [u for u in spread.unchecked if u.name.endswith("wall under a concentrated force")]
     assert wall and wall[0].blocks_rating and "reactions bear on the wall" in wall[0].reason
     # dead load alone (nothing rated): a caution
     dead = analyze(parse_job_text(simple_span(f"{material}\n{tube}", 6,
                                               uniform_load(6, "-50 lbf/ft") + 'case = "dead"\n')))
-    wall = [u for u in dead.unchecked if u.name == "round HSS wall under a concentrated force"]
+    wall = [u for u in dead.unchecked if u.name.endswith("wall under a concentrated force")]
     assert wall and not wall[0].blocks_rating

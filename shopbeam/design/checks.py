@@ -855,6 +855,19 @@ def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
     out = [u for u in flex.unchecked
            if not (braced and u.name == "lateral-torsional buckling")]
     out += lifting_unchecked(job, sec) + flange_unchecked(job, sec)
+    prof = profile_of(job)
+    if prof is not None and prof.nd is not None and (flex.stress_s is not None
+                                                     or flex.omega not in (OMEGA_B, prof.nd)):
+        # _design_factor puts Nd in place of the AISC Omegas of steel on the AISC basis only
+        out.append(Unchecked(
+            "ASME BTH-1 design factor on this member",
+            f"a below-the-hook device takes the BTH-1 design factor Nd {prof.nd:g} on its "
+            "strength; BTH-1 is written for steel, and this member is checked by "
+            + ("first yield with safety_factor" if basis_of(job) == "first-yield" else
+               "its own rules (ADM Omega 1.65 / 1.95, NDS reference values)")
+            + f", which do not carry Nd {prof.nd:g}, so no rating is posted: use a steel "
+            "member on the AISC basis, or have the device checked",
+            "ASME BTH-1 3-1.3 and chapter 3 (from memory)", blocks_rating=True))
     return tuple(out)
 
 
