@@ -608,6 +608,21 @@ def test_lifting_deflection_looser_than_its_profile_is_warned(preset, written, p
         assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
 
 
+@pytest.mark.parametrize("written, looser", [("1 in", True), ("0.4 in", False)])
+def test_an_absolute_lifting_limit_is_judged_as_the_l_over_n_it_amounts_to(written, looser):
+    # the monorail preset's 16 ft span (presets/monorail-hoist-beam.toml): 1 in is L/192,
+    # looser than the monorail profile's L/450 (common practice); 0.4 in is L/480, tighter
+    path = Path(__file__).resolve().parent.parent / "presets" / "monorail-hoist-beam.toml"
+    text = path.read_text()
+    line = next(ln for ln in text.splitlines() if ln.startswith("deflection = "))
+    job = parse_job_text(text.replace(line, f'deflection = "{written}"'))
+    w = [p for p in warnings(job) if p.key == "criteria.deflection"]
+    assert bool(w) == looser
+    if looser:
+        assert "L/192 on the longest span" in w[0].message and "looser than the L/450" in \
+            w[0].message
+
+
 def test_shelf_limit_on_a_job_that_is_not_lifting_is_not_warned():
     job = parse_job_text(job_text(criteria='deflection = "L/180"'))
     assert not [p for p in warnings(job) if p.key == "criteria.deflection"]

@@ -1413,10 +1413,39 @@ _RACK_WORDS = re.compile(
     re.IGNORECASE)
 
 
+def _judged_longest(supports, length) -> float | None:
+    """The longest length a deflection limit is judged on: each span between supports, and a
+    cantilever or overhang on twice its length (as the deflection check judges them)."""
+    if length is None:
+        return None
+    held = sorted(s.at for s in supports if s.takes_force)
+    if not held:
+        return None
+    spans = [b - a for a, b in zip(held, held[1:])]
+    spans += [2 * held[0], 2 * (length - held[-1])]
+    return max(spans) or None
+
+
+def _ratio_of(criteria: Criteria, supports, length) -> tuple[float | None, str]:
+    """(n of the L/n a written limit amounts to, how it is shown): an absolute limit ("1 in")
+    is taken over the longest judged length, so "looser" holds on every span."""
+    if criteria.deflection_ratio:
+        return criteria.deflection_ratio, repr(criteria.deflection)
+    longest = _judged_longest(supports, length)
+    if criteria.deflection_abs and longest:
+        n = longest / criteria.deflection_abs
+        return n, f"{criteria.deflection!r} (L/{n:.0f} on the longest span)"
+    return None, ""
+
+
 def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
     """A deflection limit written on a lifting job that is looser than its lifting profile's
-    (L/240 copied from a shelf onto a monorail): warned, and the value written is used."""
-    if length is None or not criteria.deflection_given or not criteria.deflection_ratio:
+    (L/240 copied from a shelf onto a monorail, or "1 in" on a 16 ft runway): warned, and the
+    value written is used."""
+    if length is None or not criteria.deflection_given:
+        return
+    ratio, shown = _ratio_of(criteria, supports, length)
+    if not ratio:
         return
     name = criteria.lifting
     if not name:
@@ -1424,24 +1453,26 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
             return
         name = guessed_profile(supports, length)  # as design/lifting.profile_of picks it
     p = LIFTING_PROFILES[name]
-    if criteria.deflection_ratio < p["deflection"]:
-        r.warn(f"deflection = {criteria.deflection!r} is looser than the L/{p['deflection']:g} "
+    if ratio < p["deflection"]:
+        r.warn(f"deflection = {shown} is looser than the L/{p['deflection']:g} "
                f"of the {name} lifting profile ({p['deflection_source']}): a hoist or trolley "
                f"on a member that sags more runs downhill and binds; the checks use the value "
                f"written: write \"L/{p['deflection']:g}\" or remove deflection to use the "
                "profile's limit", "criteria.deflection")
 
 
-def _looser_than_rack(r: _Reader, criteria: Criteria, tags) -> None:
+def _looser_than_rack(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
     """A deflection limit written on a storage-rack job that is looser than rack practice's
-    L/180 (the named limit `rack`): warned, and the value written is used."""
-    if not criteria.deflection_given or not criteria.deflection_ratio:
+    L/180 (the named limit `rack`), or an absolute one that amounts to that: warned, and the
+    value written is used."""
+    if not criteria.deflection_given:
         return
-    if not RACK_TAGS.intersection(normal_tag(t) for t in tags):
+    ratio, shown = _ratio_of(criteria, supports, length)
+    if not ratio or not RACK_TAGS.intersection(normal_tag(t) for t in tags):
         return
     n, why = DEFLECTION_PRESETS["rack"]
-    if LOOSEST_COMMON_RATIO <= criteria.deflection_ratio < n:  # looser still: warned already
-        r.warn(f"deflection = {criteria.deflection!r} is looser than the L/{n:g} of storage-rack "
+    if LOOSEST_COMMON_RATIO <= ratio < n:  # looser still: warned already
+        r.warn(f"deflection = {shown} is looser than the L/{n:g} of storage-rack "
                f"beams ({why.split(' (', 1)[1].rstrip(')')}): the checks and the rating use the "
                f"value written; write \"L/{n:g}\" (or deflection = \"rack\") for rack practice",
                "criteria.deflection")
@@ -2255,7 +2286,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
     _looser_than_lifting(r, criteria, tags, supports, length)
-    _looser_than_rack(r, criteria, tags)
+    _looser_than_rack(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving)
     _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
