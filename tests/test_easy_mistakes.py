@@ -738,3 +738,24 @@ def test_a_road_vehicle_member_without_impact_is_not_rated(impact, rated):
     if impact == '"100%"':  # and the allowance is applied: k halves (the live load doubles)
         plain = capacity(parse_job_text(job_text()))
         assert cap.factor == pytest.approx(plain.factor / 2, rel=1e-6)
+
+
+def test_a_wood_size_and_a_wood_product_that_do_not_go_together_are_named():
+    # LVL is made in 1-3/4 in plies (the LVL sizes); a sawn 2x10 credited LVL's 2600 psi would
+    # carry about 2.6 x a sawn No.2's 900 x CF 1.1 (NDS Supplement 2018 Table 4A, from
+    # memory): warned and NOT RATED. An LVL size in a sawn grade is checked at the sawn values
+    # (on the safe side): warned only. A sweep of one product in the other's grade says so
+    from shopbeam.design.capacity import capacity
+    from shopbeam.design.sizing import size
+
+    sawn_lvl = parse_job_text(job_text(section="2x10", material="LVL-2.0E"))
+    assert any("sawn lumber size but material 'LVL-2.0E'" in p.message
+               for p in warnings(sawn_lvl))
+    cap = capacity(sawn_lvl)
+    assert not cap.rated and any("sawn lumber size" in r for r in cap.not_rated)
+    lvl_sawn = parse_job_text(job_text(section="LVL1-3/4x9-1/4", material="DF-L-2"))
+    assert any("is an LVL size but material 'DF-L-2'" in p.message for p in warnings(lvl_sawn))
+    assert not any("sawn lumber size" in r for r in capacity(lvl_sawn).not_rated)
+    swept = size(parse_job_text(job_text(section="2x10", material="DF-L-2")), "LVL")
+    assert "swept in LVL-2.0E" in swept.material_note
+    assert all(r.material.key == "LVL-2.0E" for r in swept.rows)

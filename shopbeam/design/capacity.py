@@ -38,7 +38,8 @@ from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
 from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
-                                   strength_slip, stubby_words, thickness_gap)
+                                   strength_slip, stubby_words, thickness_gap,
+                                   wood_gap)
 
 
 # ------------------------------------------------------------------ root finding
@@ -167,6 +168,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     out += list(getattr(job, "long_bearings", ()))
     gap = grade_gap(getattr(st, "section", None) or job.section, job.material, job.units)
+    if gap:
+        out.append(gap)
+    gap = wood_gap(getattr(st, "section", None) or job.section, job.material)
     if gap:
         out.append(gap)
     mixed = kind_mismatch(job.material, job.units)

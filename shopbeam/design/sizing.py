@@ -323,6 +323,14 @@ def material_for_kind(job, kind: str):
         name = f"(E {units.fmt(e, 'stress', job.units)})"
         if wants_wood == (e < WOOD_E_MAX):
             return job, ""
+    elif wants_wood and mkind == "lumber" and (kind == "LVL") != name.upper().startswith("LVL"):
+        # LVL sizes in a sawn grade, or sawn sizes in LVL: each is made in its own product
+        mat = get_material(FAMILY_DEFAULTS[kind])
+        return replace(job, material=mat), (
+            f"--kind {kind} is {'LVL' if kind == 'LVL' else 'sawn lumber'} but the job's "
+            f"material {name} is {'a sawn grade' if kind == 'LVL' else 'LVL'}: swept in "
+            f"{mat.key} ({mat.name}) instead; give beam.material in the job to choose another "
+            "grade")
     elif wants_wood == (mkind == "lumber"):
         grade = usual_grade(job.material, kind)
         if grade is None:

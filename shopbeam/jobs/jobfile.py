@@ -1786,6 +1786,14 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                 "material such as \"A992\"", "beam.section")
     else:
         _grade_mismatch(r, section, material, mkind, system)
+    gap = wood_gap(section, material)
+    if gap:
+        r.warn(f"{gap}: no rating is posted", "beam.material")
+    elif mkind == "lumber" and _is_lvl_size(section) and not _is_lvl(material):
+        r.warn(f"section {section.designation!r} is an LVL size but material {material.key!r} "
+               "is a sawn grade: it is checked at the sawn grade's values (on the safe side, "
+               "LVL is stronger). Write material = \"LVL-2.0E\" (or the maker's values) for "
+               "LVL", "beam.material")
 
 
 _TUBES = ("rect-tube", "round-tube", "pipe")
@@ -1797,6 +1805,29 @@ def _a(word: str) -> str:
 
 _ROLLED_GRADES = ("A36", "A572-50", "A992")  # grades of rolled shapes, plate and bar
 EN_SECTIONS = "EN 10365"  # the source of the catalog's European sections (IPE, HE, UPN)
+
+
+def _is_lvl_size(section) -> bool:
+    return section is not None and "LVL size" in (getattr(section, "source", "") or "")
+
+
+def _is_lvl(material) -> bool:
+    return str(getattr(material, "key", "")).upper().startswith("LVL")
+
+
+def wood_gap(section, material) -> str:
+    """Why no rating may rest on this wood product for this section: a sawn lumber size
+    given an LVL grade, credited LVL's strength (2600 psi against about 1000 psi for a sawn
+    No.2, NDS Supplement 2018 Table 4A, from memory) though LVL is made in 1-3/4 in plies, not
+    in sawn sizes ("" when none). Judged per section, as grade_gap is."""
+    if section is None or getattr(material, "kind", "") != "lumber" or not _is_lvl(material):
+        return ""
+    if is_wood_size(section) and not _is_lvl_size(section):
+        return (f"section {section.designation!r} is a sawn lumber size but material "
+                f"{material.key!r} is LVL, which is made in 1-3/4 in plies (the LVL sizes, e.g. "
+                "\"LVL1-3/4x9-1/4\"): the check would credit a sawn stick with LVL's strength, "
+                "about 2.6 x a sawn No.2's. Give the LVL size, or the sawn grade")
+    return ""
 
 
 def grade_gap(section, material, system: str = "us") -> str:
