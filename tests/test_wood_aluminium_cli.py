@@ -341,3 +341,14 @@ def test_the_report_names_the_wet_service_modulus_e_prime(tmp_path):
     line = next(x for x in run("solve", dry).stdout.splitlines()
                 if x.strip().startswith("material"))
     assert "E = 1.6e6 psi" in line and "E'" not in line
+
+
+@pytest.mark.parametrize("section, kcr", [("6x10", 2), ("2x10", 1.5)])
+def test_timbers_take_the_unseasoned_creep_factor(tmp_path, section, kcr):
+    # NDS 2018 3.5.2 (from memory): Kcr 1.5 for seasoned lumber in dry service, 2.0 for
+    # unseasoned; timbers (5 in and thicker, Supplement Table 4D) are sold surfaced green
+    loads = uniform("-40 lbf/ft", "12 ft") + uniform("-20 lbf/ft", "12 ft", case="dead")
+    p = write(tmp_path, f"t{section}", f'section = "{section}"\nmaterial = "DF-L-2"\n'
+              "braced = true", loads, length="12 ft")
+    d = solve(p)
+    assert f"Kcr {kcr:g} x the dead-load deflection" in chk(d, "deflection")["formula"]

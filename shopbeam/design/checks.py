@@ -1155,7 +1155,8 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
         kcr = fl.wood.kcr
         dsol = _solve_loads(sol, [ld.scaled(kcr) if ld.case == "dead" or lasting else ld
                                   for ld in sol.beam.loads])
-        service = 'wet service' if kcr > 1.5 else 'seasoned, dry'
+        service = ('seasoned, dry' if kcr <= 1.5 else 'wet service' if job_wet(job) else
+                   'a timber, sold unseasoned')
         creep = (f"; long-term: Kcr {kcr:g} x the deflection under every load, all of them "
                  f"permanent (duration = \"permanent\"; NDS 2018 3.5.2, {service})" if lasting else
                  f"; long-term: Kcr {kcr:g} x the dead-load deflection + the live-load "
@@ -1204,6 +1205,11 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
             if lc is not None:
                 out.append(lc)
     return out
+
+
+def job_wet(job) -> bool:
+    """Whether the job says its wood is in wet service."""
+    return bool(getattr(getattr(job, "wood", None), "wet", False))
 
 
 def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:

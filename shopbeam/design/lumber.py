@@ -14,7 +14,8 @@ CL = (1 + FbE/Fb*)/1.9 - sqrt(((1 + FbE/Fb*)/1.9)^2 - (FbE/Fb*)/0.95). A member 
 its weak axis (d <= b) or with d/b <= 2 (NDS 4.4.1.2(a)) needs no lateral support: CL = 1.0.
 
 Creep (NDS 3.5.2): the long-term deflection is Kcr x the deflection under the dead loads
-(Kcr 1.5 seasoned lumber or LVL in dry service, 2.0 in wet service) plus the short-term
+(Kcr 1.5 seasoned lumber or LVL in dry service, 2.0 in wet service or for timbers, 5 in and
+thicker, which are sold unseasoned) plus the short-term
 deflection under the live loads.
 """
 
@@ -100,7 +101,10 @@ def factors(section, material, service: Service) -> Factors:
                                        "sharing the load (NDS 4.3.9)" if cr > 1 else
                                        "single member (NDS 4.3.9; say repetitive = true under "
                                        "[beam] for joists at 24 in or less)"))
-    kcr = 2.0 if service.wet else 1.5
+    # timbers (5 in and thicker) are sold unseasoned (surfaced green; their Table 4D values
+    # are for green timbers used dry): NDS 3.5.2 takes Kcr 2.0 for unseasoned lumber
+    green = v.size_class in ("beams-stringers", "posts-timbers")
+    kcr = 2.0 if service.wet or green else 1.5
     fb_star = v.fb * cd * cm["fb"] * ct["fb"] * cf * cr
     fv = v.fv * cd * cm["fv"] * ct["fv"]
     fcp = (v.fc_perp or 0.0) * cm["fc_perp"] * ct["fc_perp"]
