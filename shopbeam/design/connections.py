@@ -12,10 +12,12 @@ from shopbeam.design import loading
 
 
 def _states(job, sol):
-    """The solved states whose hinge shears and end moments count: every pattern of a
-    patterned job, else the solution given (the governing state with moving loads)."""
+    """The solved states whose hinge shears and end moments count: every wheel position of a
+    moving-load job, every pattern of a patterned one, else the solution given."""
     try:
         parts = loading.load_parts(job)
+        if parts.moving:  # every wheel position (and pattern)
+            return loading.moving_connection_states(job), "over every position of the wheels"
         if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
             return loading.connection_states(job), "over every load pattern"
         if parts.impact and not parts.moving:

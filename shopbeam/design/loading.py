@@ -594,6 +594,58 @@ def connection_states(job, k: float = 1.0, ss: "StateSet | None" = None) -> list
     return [ss.state(k, p) for p in sorted(pats)]
 
 
+# First-wheel positions, besides the exact ones, at which a wheel set's hinge shears are read
+# (every 1/CONNECTION_STEPS of the travel, and a wheel just either side of every break)
+CONNECTION_STEPS = 100
+
+
+def moving_connection_states(job, k: float = 1.0, ss: "StateSet | None" = None
+                             ) -> list[Solution]:
+    """The states of a wheel-set job whose fixed-end reactions and hinge shears a connection
+    must carry, over the whole travel (and every pattern): at each fixed support the exact
+    largest and smallest reaction moment and force (cubics in the wheel position,
+    engine/influence.py), and for the hinges a wheel just either side of every break, the
+    ends of the travel and every 1/CONNECTION_STEPS of it (a hinge's shear under a wheel
+    set peaks with a wheel at a break in the common determinate cases; the steps cover the
+    rest to well within the figures shown)."""
+    ss = ss or state_set(job)
+    mv = ss.parts.moving[0]
+    kk = k * (1 + ss.parts.impact)
+    inf = beam_influence(ss)
+    P = wheel_forces(mv, kk)
+    p_lo, p_hi = mv.p_range
+    L = job.length
+    st = strengths_of(job, beam=ss.beam)
+    fixed = [j for j, r in enumerate(ss.fixed.reactions) if r.kind == "fixed"]
+    hinges = [sp.at for sp in ss.beam.supports if sp.kind == "hinge"]
+    base = set()
+    if hinges:
+        base.update(np.linspace(p_lo, p_hi, CONNECTION_STEPS + 1).tolist() if p_hi > p_lo
+                    else [p_lo])
+        nudge = NUDGE * L
+        for x in inf.breaks:
+            for d in mv.offsets:
+                for p in (x - d - nudge, x - d + nudge):
+                    if p_lo <= p <= p_hi:
+                        base.add(float(p))
+    out = []
+    for pattern in ss.patterns:
+        static_sol = ss.state(k, pattern)
+        pos = set(base) | {p_lo, p_hi}
+        if fixed:
+            mcols = [inf.reaction_cols[j] + 1 for j in fixed]
+            fcols = [inf.reaction_cols[j] for j in fixed]
+            for cols, vals in ((mcols, [static_sol.reactions[j].moment for j in fixed]),
+                               (fcols, [static_sol.reactions[j].force for j in fixed])):
+                for hi, phi, lo, plo in reaction_extremes(*reaction_polys(
+                        inf, mv.offsets, p_lo, p_hi, vals, P, cols=cols)):
+                    pos.update((phi, plo))
+        static = ss.static_loads(k, pattern)
+        out += [sol for _, sol in moving_states(job, ss, static, k, st,
+                                                positions=sorted(pos))]
+    return out
+
+
 def pattern_checks(job, ss: "StateSet", k: float, st):
     """The checks over every pattern from the exact envelopes: (best per check, states run).
 

@@ -879,9 +879,12 @@ def _interior(F, al, bl, ah, bh, part: np.ndarray | None = None, parts: int = 1)
 
 
 # ------------------------------------------------------------------ reactions
-def reaction_polys(inf: Influence, offsets, p_lo: float, p_hi: float, static_r, loads):
+def reaction_polys(inf: Influence, offsets, p_lo: float, p_hi: float, static_r, loads,
+                   cols=None):
     """Every reaction (solution order) as a cubic in p on each p-range where no wheel crosses
-    a break of the bare beam: (starts, widths, coefficients (reactions, ranges, 4))."""
+    a break of the bare beam: (starts, widths, coefficients (reactions, ranges, 4)). `cols`:
+    other unknowns instead of the reaction forces (a fixed support's moment: its force's
+    column + 1), with `static_r` their static values."""
     L = inf.beam.length
     tol = 1e-11 * L
     d = np.asarray(offsets, float)
@@ -892,7 +895,7 @@ def reaction_polys(inf: Influence, offsets, p_lo: float, p_hi: float, static_r, 
     wps = np.diff(pb) if len(pb) > 1 else np.zeros(1)
     pm = p0s + 0.5 * wps
     m = np.clip(np.searchsorted(b, pm[:, None] + d[None, :], "right") - 1, 0, len(b) - 2)
-    cols = np.array(inf.reaction_cols, int)
+    cols = np.array(inf.reaction_cols if cols is None else cols, int)
     G = np.zeros((len(cols), len(p0s), NV))
     for i, P in enumerate(loads):
         if P == 0:
