@@ -759,3 +759,16 @@ def test_a_wood_size_and_a_wood_product_that_do_not_go_together_are_named():
     swept = size(parse_job_text(job_text(section="2x10", material="DF-L-2")), "LVL")
     assert "swept in LVL-2.0E" in swept.material_note
     assert all(r.material.key == "LVL-2.0E" for r in swept.rows)
+
+
+@pytest.mark.parametrize("title, tags, caught", [
+    ("Truck dock shelf", '["not-lifting"]', False),
+    ("Forklift truck aisle shelf", '["not-lifting"]', False),
+    ("Trailer hitch storage shelf", '["not-lifting"]', True),
+    ("Trailer hitch storage shelf", '["not-lifting", "not-vehicle"]', False),
+    ("Truck bed rail", '["not-lifting"]', True)])
+def test_the_road_vehicle_rule_reads_vehicle_words_and_a_tag_says_it_is_not_one(title, tags,
+                                                                                caught):
+    text = job_text().replace('title = "shelf"', f'title = "{title}"\ntags = {tags}')
+    job = parse_job_text(text)
+    assert any("road vehicle" in p.message for p in warnings(job)) == caught

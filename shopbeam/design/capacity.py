@@ -205,8 +205,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
     if road:
         out.append(f"it reads like a member of a road vehicle ({road}) but gives no impact: "
                    "road shock multiplies the payload, so a static figure would overstate it. "
-                   "Write [criteria] impact = \"100%\" (or the vehicle maker's figure), or "
-                   "impact = \"0%\" for a member only loaded while parked")
+                   "Write [criteria] impact = \"100%\" (or the vehicle maker's figure), "
+                   "impact = \"0%\" for a member only loaded while parked, or the tag "
+                   "\"not-vehicle\" if it is not on a vehicle")
     gap = getattr(job.criteria, "factor_gap", "")
     if gap:
         out.append(gap)

@@ -1300,7 +1300,8 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
                   f"{fac['Ct_b']:g} x {cb_words} = {stress_words(limit, job.units)}; bearing "
                   f"length "
                   f"lb {fmt(lb, 'small_length', job.units, 4)} ({stated})", at,
-                  detail=f"{what} governs",
+                  detail=f"{what} governs, of every pin, roller and spring support and every "
+                  "point load and wheel",
                   clause="NDS 2018 3.10.2, 3.10.4", source="NDS 2018 (from memory)",
                   params={"lb": lb, "Cb": cb, "CM_cp": float(fac["CM_cp"]),
                           "Ct_b": float(fac["Ct_b"])})]

@@ -1693,8 +1693,9 @@ def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
 
 
 _VEHICLE_WORDS = re.compile(
-    r"\b(trailers?|truck(?: bed|s)?|flat ?beds?|pickup|vehicles?|chassis|tow(?:ing|ed)?|"
-    r"hitch|road|axle ?frames?|utility trailer|car hauler|cargo deck)\b", re.IGNORECASE)
+    r"\b(trailers?|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
+    r"vehicles?|chassis|car haulers?|cargo decks?)\b", re.IGNORECASE)
+NOT_VEHICLE = "not-vehicle"  # the tag that says a job that reads like one is not on a vehicle
 
 
 def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: bool) -> str:
@@ -1703,7 +1704,7 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
     for trailers, common practice, from memory) and a static figure would be read as the
     payload it may carry. Warned; the words that gave it away are returned (no rating is
     posted until impact is given). A lifting job has its own impact."""
-    if lifting or criteria.impact is not None:
+    if lifting or criteria.impact is not None or NOT_VEHICLE in tags:
         return ""
     said = _words_found(_VEHICLE_WORDS, title, notes, tags, raw_loads)
     if not said:
@@ -1713,8 +1714,9 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
            "shock over bumps multiplies the payload (trailers are commonly designed for 1.5 to "
            "3 g, from memory), so a static figure would overstate what may be carried and no "
            "rating is posted. Write [criteria] impact = \"100%\" (or the vehicle maker's "
-           "figure) for the road shock, or impact = \"0%\" for a member that is only loaded "
-           "while parked", "criteria.impact")
+           "figure) for the road shock, impact = \"0%\" for a member that is only loaded "
+           f"while parked, or the tag \"{NOT_VEHICLE}\" if it is not on a vehicle (a shelf at a "
+           "truck dock)", "criteria.impact")
     return hint
 
 
