@@ -52,6 +52,43 @@ def test_json_follows_the_contract():
     assert all(x["ok"] for x in d["diagnostics"])
 
 
+def test_the_bending_check_in_json_is_a_stress_as_the_contract_shows(tmp_path):
+    # the contract's JSON shows bending in Pa: f = M / S against the allowable stress; on the
+    # AISC basis (checked on moments, M against Mn / Omega) the JSON states both as stresses
+    # over the extreme fibre's S, the ratio unchanged, the moments kept in params. Simple span,
+    # uniform load: M = w L^2 / 8 (common practice)
+    text = """schema = 1
+title = "rail"
+tags = ["not-rack"]
+[beam]
+length = "10 ft"
+section = "HSS4x4x1/4"
+material = "A500-C"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-100 lbf/ft"
+"""
+    p = write(tmp_path, text)
+    for cmd in ("solve", "capacity"):
+        d = json.loads(run(cmd, str(p), "--json").stdout)
+        bend = next(c for c in d["checks"] if c["name"] == "bending")
+        sec = json.loads(run("section", "HSS4x4x1/4", "--json").stdout)
+        assert bend["unit"] == "Pa"
+        m = 100 * 4.4482216152605 / 0.3048 * (10 * 0.3048) ** 2 / 8
+        k = d.get("factor") or 1.0
+        assert bend["demand"] == pytest.approx(k * m / sec["sx"], rel=1e-6)
+        assert bend["params"]["moment_demand"] == pytest.approx(k * m, rel=1e-6)
+        assert bend["ratio"] == pytest.approx(bend["demand"] / bend["limit"])
+        assert bend["limit"] * sec["sx"] == pytest.approx(bend["params"]["moment_limit"])
+
+
 def test_calc_sheet_prints_exact_reactions():
     r = run("solve", str(DATA / "cantilever_arm.toml"), "--calc")
     assert r.returncode == 0, r.stderr

@@ -64,3 +64,19 @@ def test_a_gerber_hinge_passes_the_largest_shear_over_every_position():
     assert abs(h["shear"]) / LBF == pytest.approx(1900, rel=1e-6)
     (f,) = fixed_end_moments(job, sol)
     assert abs(f["moment"]) / LBFFT == pytest.approx(19000, rel=1e-6)
+
+
+def test_capacity_json_keys_its_fixed_ends_as_the_top_level_does(tmp_path):
+    # docs/json.md: capacity.fixed_ends are "as the top-level fixed_ends" ({"at", "moment",
+    # "shear"}); a script reading "shear" from either must find it
+    import json
+    import subprocess
+    import sys
+
+    p = tmp_path / "arm.toml"
+    p.write_text(TRACK.format(L=10, supports=supports((0, "fixed"), (10, "fixed"))))
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "capacity", str(p), "--json"],
+                       capture_output=True, text=True, timeout=120)
+    d = json.loads(r.stdout)
+    for e in d["fixed_ends"] + d["capacity"]["fixed_ends"]:
+        assert {"at", "moment", "shear"} <= set(e)

@@ -842,6 +842,14 @@ def _lifting_json(job) -> dict | None:
             "design_factor": p.nd, "deflection_ratio": p.deflection, "words": p.words}
 
 
+def bending_s(job) -> float | None:
+    """The section modulus a bending check's JSON states its stress with: the extreme
+    fibre's, S = min(S top, S bottom) about the bending axis (`Check.as_dict`)."""
+    sec = job.section
+    s = min(getattr(sec, "sx_top", 0.0) or 0.0, getattr(sec, "sx_bot", 0.0) or 0.0)
+    return s if s > 0 else None
+
+
 def to_json(result: Result) -> dict:
     """The contract's JSON (SI units throughout)."""
     job, sol = result.job, result.solution
@@ -855,7 +863,7 @@ def to_json(result: Result) -> dict:
             for r in sol.reactions
         ],
         "extremes": {name: e.as_dict() for name, e in ex.items()},
-        "checks": [c.as_dict() for c in result.checks],
+        "checks": [c.as_dict(bending_s(job)) for c in result.checks],
         "governing": result.governing.name,
         "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),

@@ -29,6 +29,7 @@ from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_li
                                        hogging_remedy, hogging_source, span_top_limits,
                                        NOT_JUDGED, moving_top_worst, rolling_on_top, rolling_where,
                                        span_top_strength, top_words, unchecked_for)
+from shopbeam.design.analysis import bending_s
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.connections import fixed_end_moments, hinge_shears
 from shopbeam.design.checks import impact_of
@@ -695,7 +696,7 @@ def to_json(res: CapacityResult) -> dict:
     out = base_json(analyze(res.job))
     k = res.factor
     out["factor"] = float(k) if math.isfinite(k) else None
-    out["checks"] = [c.as_dict() for c in res.checks]
+    out["checks"] = [c.as_dict(bending_s(res.job)) for c in res.checks]
     out["governing"] = res.governing.name if res.governing else None
     out["rated"] = res.rated
     out["not_rated_reasons"] = list(res.not_rated)
@@ -707,5 +708,7 @@ def to_json(res: CapacityResult) -> dict:
                        if res.evaluation else {}}
     if k > 0 and math.isfinite(k):  # what the connections carry at the factor found
         ends, hinges = connections_at(res.job, k)
-        out["capacity"]["fixed_ends"], out["capacity"]["hinges"] = ends, hinges
+        # keyed as the top-level fixed_ends ("shear"), with "force" kept beside it
+        out["capacity"]["fixed_ends"] = [dict(e, shear=e["force"]) for e in ends]
+        out["capacity"]["hinges"] = hinges
     return out

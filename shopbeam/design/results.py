@@ -50,12 +50,21 @@ class Check:
         return "; ".join(x for x in (self.detail, self.state and "worst state: " + self.state)
                          if x)
 
-    def as_dict(self) -> dict:
-        return {"name": self.name, "demand": float(self.demand), "limit": float(self.limit),
-                "ratio": float(self.ratio), "ok": bool(self.ok), "unit": self.unit,
+    def as_dict(self, stress_s: float | None = None) -> dict:
+        """The JSON of the check. `stress_s`: the section modulus (m^3) that states a bending
+        check made on moments (AISC, ADM: M against Mn / Omega) as the bending stress the
+        contract's JSON gives, f = M / S (Pa) against the allowable Fb = Mn / (Omega S): the
+        ratio is the same, and the moments stay in params (moment_demand, moment_limit)."""
+        demand, limit, unit = float(self.demand), float(self.limit), self.unit
+        params = {k: float(v) for k, v in self.params.items()}
+        if self.name == "bending" and unit == "N*m" and stress_s and stress_s > 0:
+            params.update(moment_demand=demand, moment_limit=limit, S=float(stress_s))
+            demand, limit, unit = demand / stress_s, limit / stress_s, "Pa"
+        return {"name": self.name, "demand": demand, "limit": limit,
+                "ratio": float(self.ratio), "ok": bool(self.ok), "unit": unit,
                 "formula": self.formula, "at": None if self.at is None else float(self.at),
                 "detail": self.detail_text, "clause": self.clause, "source": self.source,
-                "params": {k: float(v) for k, v in self.params.items()}, "state": self.state}
+                "params": params, "state": self.state}
 
 
 @dataclass(frozen=True)
