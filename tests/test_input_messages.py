@@ -827,3 +827,23 @@ def test_feet_with_bare_inches_suggest_the_inches(typed, says):
         parse_job_text(text)
     (p,) = got.value.problems
     assert p.key == "loads[0].at" and says in p.message
+
+
+def test_a_linear_load_that_changes_sign_is_named_as_such_not_as_all_up():
+    # +0.3 to -0.9 kN/m: mostly down; the warning says which end pushes up and does not claim
+    # that every load of the job points up
+    text = DOUBLED.replace('type = "point"\ntype = "point"\nat = "8 ft"\nvalue = "-300 lbf"',
+                           'type = "linear"\nstart = "2 ft"\nend = "6 ft"\n'
+                           'value = ["100 lbf/ft", "-300 lbf/ft"]')
+    job = parse_job_text(text)
+    (w,) = [p for p in job.warnings if p.key == "loads[0].value"]
+    assert "changes sign along its length" in w.message and "its start pushes UP" in w.message
+    assert "Every force load" not in w.message
+
+
+def test_a_title_that_is_not_text_is_named_as_such():
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(DOUBLED.replace('title = "doubled"', "title = 5").replace(
+            'type = "point"\ntype = "point"', 'type = "point"'))
+    (p,) = got.value.problems
+    assert p.key == "title" and "title must be text in quotes, found 5" in p.message

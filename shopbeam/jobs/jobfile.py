@@ -1281,9 +1281,22 @@ def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -
         up.append((ld, shown, key, fix or f"{key} = \"-{shown.lstrip('+')}\""))
     forces = sum(1 for x in (raw_loads if isinstance(raw_loads, list) else [])
                  if not (isinstance(x, dict) and x.get("type") == "moment"))
-    every = " Every force load of this job points up." if len(up) == forces else ""
+
+    def mixed(ld):  # a linear load that changes sign along its length
+        return ld.kind == "linear" and min(ld.w1, ld.w2) < 0 < max(ld.w1, ld.w2)
+
+    every = (" Every force load of this job points up." if len(up) == forces
+             and not any(mixed(ld) for ld, *_ in up) else "")
     for ld, shown, key, fix in up:
         name = f" ({ld.label})" if ld.label else ""
+        if mixed(ld):
+            ends = [units.fmt(w, "line_load", system) for w in (ld.w1, ld.w2)]
+            r.warn(f"this load{name} changes sign along its length ({ends[0]} to {ends[1]}): "
+                   f"its {'start' if ld.w1 > 0 else 'end'} pushes UP (+{shown.lstrip('+')}), "
+                   f"and forces are + up, so a weight is negative at both ends ({fix} if the "
+                   "+ was a slip). If part of it really pushes up, add uplift = true to the "
+                   "load", f"{ld.key}.{key}")
+            continue
         r.warn(f"this load{name} points UP (+{shown.lstrip('+')}): forces are + up, so a "
                f"weight is negative ({fix}).{every} If the push up "
                "is intended (uplift), add uplift = true to the load", f"{ld.key}.{key}")
@@ -2073,7 +2086,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     elif schema < 1:
         r.error(f"schema {schema} is not a job-file version; use schema = 1", "schema")
     title = data.get("title")
-    if not isinstance(title, str) or not title.strip():
+    if title is not None and not isinstance(title, str):
+        r.error(f"title must be text in quotes, found {title!r} (e.g. title = \"Rack arm, "
+                f"bay {title}\")" if isinstance(title, (int, float)) and not isinstance(
+                    title, bool) else f"title must be text in quotes, found {title!r}", "title")
+        title = ""
+    elif not isinstance(title, str) or not title.strip():
         r.error("missing 'title' (a name for the job, e.g. title = \"Lumber rack arm, bay 3\")", "title")
         title = ""
     notes = data.get("notes", "")
