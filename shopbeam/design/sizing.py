@@ -811,7 +811,7 @@ def _batched(job, base, parts, cands, with_capacity):
             skipped.append(f"{des}: {exc}")
             continue
         seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
-        rs.append((des, sec, mat, price, note, sec.weight_per_length(mat.density) * g0,
+        rs.append((des, sec, mat, price, note, sec.self_weight_mass(mat.density) * g0,
                    fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained),
                    fl.cap, fl.uses_cb, wheel, bool(fl.special),
                    _local.sidesway_possible(job, sec, mat)))

@@ -182,7 +182,7 @@ class Job:
     def self_weight_load(self) -> Load | None:
         if not self.self_weight:
             return None
-        w = self.section.weight_per_length(self.material.density) * units.G0
+        w = self.section.self_weight_mass(self.material.density) * units.G0
         return Load("uniform", start=0.0, end=self.length, w1=-w, label="self-weight",
                     case="dead", key="beam.self_weight")
 

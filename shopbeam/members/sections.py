@@ -120,6 +120,15 @@ class Section:
     def sx(self) -> float:
         return min(self.sx_top, self.sx_bot)
 
+    def self_weight_mass(self, density: float) -> float:
+        """kg/m of the self-weight load: area x density (the job file's rule), or the weight
+        typed in for the section (`weight`). A catalog shape's tabulated weight (what sizing
+        ranks and shows) is not used here: for tube it is of the nominal wall, about 7 % over
+        the design area's."""
+        if self.mass_per_length is not None and self.mass_density is None:
+            return self.mass_per_length
+        return self.area * density
+
     def weight_per_length(self, density: float) -> float:
         """kg/m: the typed-in weight; or the tabulated weight, scaled when the job's material
         is not the one the table assumes (an AISC shape in aluminium); else area x density."""
