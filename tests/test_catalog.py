@@ -447,12 +447,14 @@ def test_job_naming_a_catalog_section_and_material_solves_with_self_weight(tmp_p
     p = _cli("solve", str(job), "--json")
     assert p.returncode == 0, p.stderr
     out = json.loads(p.stdout)
-    # hand check: simple span, midspan load P L^3 / 48 EI plus the tabulated self-weight
-    # 12.21 lb/ft (AISC Shapes Database v15.0) as 5 w L^4 / 384 EI; E 29,000 ksi, I 7.80 in^4
-    P, L, E, I, w = 1000.0, 144.0, 29.0e6, 7.80, 12.21 / 12
+    # hand check: simple span, midspan load P L^3 / 48 EI plus the self-weight, area x
+    # density as the job file's contract says: A 3.37 in^2 (AISC Shapes Database v15.0) x
+    # 490 lb/ft^3 = 11.47 lb/ft, as 5 w L^4 / 384 EI; E 29,000 ksi, I 7.80 in^4
+    sw = 3.37 * 490 / 144
+    P, L, E, I, w = 1000.0, 144.0, 29.0e6, 7.80, sw / 12
     sag = P * L**3 / (48 * E * I) + 5 * w * L**4 / (384 * E * I)
     assert out["extremes"]["deflection"]["min"] == pytest.approx(-sag * IN, rel=1e-3)
-    total = 1000.0 + 12.21 * 12
+    total = 1000.0 + sw * 12
     assert sum(r["force"] for r in out["reactions"]) == pytest.approx(total * 4.4482216152605,
                                                                       rel=1e-6)
 

@@ -183,24 +183,26 @@ def test_size_from_the_bundled_stock_list_ranks_by_weight_and_price():
 def test_patterned_shelf_reports_the_uplift_of_the_governing_pattern():
     # AISC Manual Table 3-23, case 30 (two equal spans, uniform load on one span; from
     # memory): the far end of the empty span pulls down by wl/16. The preset: 100 psf x 18 in
-    # = 150 lbf/ft on two rails (75 lbf/ft each), l = 5 ft, plus the rail's own 2.2 lb/ft on
-    # both spans (case 29: 3wl/8 up at the end): -75 x 5/16 + 3 x 2.2 x 5/8 = -19.31 lbf
+    # = 150 lbf/ft on two rails (75 lbf/ft each), l = 5 ft, plus the rail's own weight on
+    # both spans, area x density: HSS2x1x1/8 A = 0.608 in^2 (AISC Shapes Database v15.0) x
+    # 490 lb/ft^3 = 2.069 lbf/ft (case 29: 3wl/8 up at the end): -75 x 5/16 + 3 x 2.069 x 5/8
+    # = -19.56 lbf
     root = Path(__file__).resolve().parents[1]
     r = run("solve", str(root / "presets" / "continuous-shelf.toml"))
     assert r.returncode == 0, r.stderr
     text = r.stdout
     # the two one-span patterns are mirror images: either may be named as governing
     line = next(ln for ln in text.splitlines() if "uplift" in ln)
-    assert "-19.31 lbf" in line
+    assert "-19.56 lbf" in line
     far, loaded = ("0 ft", "5 ft-10 ft") if "at 0 ft" in line else ("10 ft", "0 ft-5 ft")
     assert f"at {far}" in line and f"patterned loads on span {loaded}" in text
     # the reaction envelope: each end support's largest uplift over every pattern
     env = text[text.index("REACTION ENVELOPE"):text.index("EXTREMES")]
-    assert env.count("largest down -19.31 lbf  (uplift)") == 2
+    assert env.count("largest down -19.56 lbf  (uplift)") == 2
     # the middle support only ever pushes up: its other end is the least push, with the
-    # patterned loads off, 10/8 x 2.2 x 5 = 13.75 lbf (case 29, from memory), never "down"
+    # patterned loads off, 10/8 x 2.069 x 5 = 12.93 lbf (case 29, from memory), never "down"
     mid = next(ln for ln in env.splitlines() if "at 5 ft" in ln)
-    assert "least up 13.75 lbf  (no uplift)" in mid and "down" not in mid
+    assert "least up 12.93 lbf  (no uplift)" in mid and "down" not in mid
 
 
 def test_json_of_a_patterned_job_carries_the_governing_state():
@@ -213,11 +215,11 @@ def test_json_of_a_patterned_job_carries_the_governing_state():
     assert "patterned loads on" in g["words"]
     # (mirror patterns tie: the uplift is at whichever end the governing pattern leaves empty)
     assert min(g["reactions"][0]["force"], g["reactions"][-1]["force"]) == pytest.approx(
-        -19.31 * 4.4482216152605, rel=2e-3)
+        -19.56 * 4.4482216152605, rel=2e-3)
     env = d["reaction_envelope"]
     assert [e["at"] for e in env] == [x["at"] for x in d["reactions"]]
     for e in (env[0], env[-1]):
-        assert e["max_down"] == pytest.approx(-19.31 * 4.4482216152605, rel=2e-3)
+        assert e["max_down"] == pytest.approx(-19.56 * 4.4482216152605, rel=2e-3)
         assert "patterned loads on span" in e["max_down_state"]
     # the loads as entered (all spans loaded) stay the contract's reactions: no uplift there
     assert d["reactions"][0]["force"] > 0

@@ -107,26 +107,28 @@ def _solver():
 
 
 # name: (entered loads per member in lbf, hand-summed from the file's comments;
-#        section weight in lb/ft, column W of the AISC Shapes Database v15.0)
+#        section area in in^2, column A of the AISC Shapes Database v15.0): the self-weight
+#        is area x density (the job file's rule), steel 490 lb/ft^3 (AISC Manual)
 HAND_TOTALS = {
-    "pallet-rack-beam-pair": (2 * 600 * 40 / 12 / 2, 6.87),      # two pallets, half each
-    "bar-stock-rack-arm": (706 * 34 / 12, 6.87),
-    "lumber-rack-arm": (480 * 22 / 12, 5.59),
-    "wall-shelf-brackets": (75 * 2 * 6 / 2, 2.44),              # 75 psf x 24 in x 6 ft / 2
-    "workbench-top": (12.8 * 6 + 40 * 6 + 450, 4.32),
-    "mezzanine-joist": ((125 + 12) * 2 * 12, 8.2),              # psf x 24 in x 12 ft
-    "storage-platform-beam": ((750 + 90) * 14, 18.0),
-    "monorail-hoist-beam": (2000 + 120, 18.4),
+    "pallet-rack-beam-pair": (2 * 600 * 40 / 12 / 2, 1.89),      # two pallets, half each
+    "bar-stock-rack-arm": (706 * 34 / 12, 1.89),
+    "lumber-rack-arm": (480 * 22 / 12, 1.54),
+    "wall-shelf-brackets": (75 * 2 * 6 / 2, 0.722),             # 75 psf x 24 in x 6 ft / 2
+    "workbench-top": (12.8 * 6 + 40 * 6 + 450, 1.19),
+    "mezzanine-joist": ((125 + 12) * 2 * 12, 2.39),             # psf x 24 in x 12 ft
+    "storage-platform-beam": ((750 + 90) * 14, 5.26),
+    "monorail-hoist-beam": (2000 + 120, 5.40),
     # moving trolley: the state shown is the governing one, the axles (rated load and
     # trolley weight) with 25% impact (powered monorail, ASCE 7-16 4.9.2 and 4.9.3)
-    "monorail-trolley": (2 * (1000 + 60) * 1.25, 25.4),
-    "jib-arm": (1000 + 80, 15.0),
-    "sign-bracket": (75 + 75 + 15, 4.32),
-    "awning-bracket": (18 * 4 + 180 * 4 + 120 * 3 / 2 + 40, 5.59),
-    "trailer-cross-member": ((84 + 6) * 80 / 12 + 750, 4.1),
-    "continuous-shelf": (100 * 1.5 * 10 / 2, 2.2),             # 100 psf x 18 in x 10 ft / 2
-    "demo": (90 * 15 + 300 * 12 + 200 * 6 / 2 + 1200, 18.0),
+    "monorail-trolley": (2 * (1000 + 60) * 1.25, 7.45),
+    "jib-arm": (1000 + 80, 4.43),
+    "sign-bracket": (75 + 75 + 15, 1.19),
+    "awning-bracket": (18 * 4 + 180 * 4 + 120 * 3 / 2 + 40, 1.54),
+    "trailer-cross-member": ((84 + 6) * 80 / 12 + 750, 1.20),
+    "continuous-shelf": (100 * 1.5 * 10 / 2, 0.608),           # 100 psf x 18 in x 10 ft / 2
+    "demo": (90 * 15 + 300 * 12 + 200 * 6 / 2 + 1200, 5.26),
 }
+STEEL = 490 / 144  # lb/ft per in^2 of steel (490 lb/ft^3, AISC Manual)
 
 
 @pytest.mark.parametrize("path", PRESETS, ids=lambda p: p.stem)
@@ -141,9 +143,9 @@ def test_preset_solves_cleanly_and_matches_hand_statics(path):
     assert result.ok, [(c.name, c.ratio) for c in result.checks]
     assert 0.2 < result.governing.ratio <= 1.0
     # total support force = the loads worked by hand from the comments + self-weight
-    # (statics, by hand; self-weight = the AISC tabulated weight per foot x length)
-    entered, weight = HAND_TOTALS[path.stem]
-    total = entered + weight * job.length / FT
+    # (statics, by hand; self-weight = area x 490 lb/ft^3 x length)
+    entered, area = HAND_TOTALS[path.stem]
+    total = entered + area * STEEL * job.length / FT
     got = sum(r.force for r in result.solution.reactions) / LBF
     assert got == pytest.approx(total, rel=3e-3)
 
@@ -154,8 +156,9 @@ def _analyzed(name):
 
 
 def _w(name):
-    """Self-weight of the preset's section, lbf/ft (AISC Shapes Database v15.0, column W)."""
-    return HAND_TOTALS[name][1]
+    """Self-weight of the preset's section, lbf/ft: area (AISC Shapes Database v15.0, column
+    A) x 490 lb/ft^3."""
+    return HAND_TOTALS[name][1] * STEEL
 
 
 def test_monorail_midspan_moment_by_hand():
