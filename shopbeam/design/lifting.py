@@ -93,7 +93,7 @@ def profile_of(job) -> Profile | None:
              + (f"design factor Nd {nd:g}, ASME BTH-1 Category {cat} (3-1.3, from memory)"
                 + (" (category not given: B, the stricter)"
                    if not getattr(job.criteria, "category", "") else "")
-                if nd else "AISC 360-16 ASD safety factors")
+                if nd else "the member's own safety factors (AISC 360-16 ASD for steel)")
              + f"; deflection {p['deflection_source']}")
     return Profile(name, p["impact"], p["lateral"], p["longitudinal"], nd, p["deflection"],
                    words, guessed)

@@ -378,6 +378,11 @@ class _Reader:
                 continue
             if _FACTOR_KEY.match(str(k)) or (str(k) == "safety_factor" and prefix != "criteria"):
                 path = f"{prefix}.{k}" if prefix else k
+                if str(k) == "safety_factor" and table[k] == 1.67:  # the default: no change
+                    self.warn(f"safety_factor in {label} belongs under [criteria]; written here "
+                              "it is not read, and as 1.67 is the default nothing changes: move "
+                              "it or remove it", path)
+                    continue
                 self.factors.append(path)
                 where = "" if prefix == "criteria" else " under [criteria]"
                 said = (f"safety_factor in {label} belongs under [criteria]: written here it "

@@ -110,7 +110,8 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
     if system == "si" and kind in ("force", "line_load"):
         # metric shops post loads in kilograms: the weight that makes this force (g0),
         # rounded down on its own
-        kg = floor_sig(abs(si_value) / units.G0)
+        # from the posted force, so the two agree (never more kilograms than the kN posted)
+        kg = floor_sig(down / factor / units.G0)
         text += f" ({units.num(kg, 6)} kg{'/m' if kind == 'line_load' else ''})"
     notes = [note] if note else []
     if exact is not None:  # say what the figure itself was before rounding
@@ -176,8 +177,9 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                                    f"varying from {w1} at {pos(ld.start)} to {w2} at "
                                    f"{pos(ld.end)}", where))
             else:
-                figs.append(posted(f"max {name}", ld.value * k, "moment", sy, f"at {pos(ld.at)}",
-                                   where))
+                turn = "counterclockwise" if ld.value > 0 else "clockwise"
+                figs.append(posted(f"max {name}", ld.value * k, "moment", sy,
+                                   f"at {pos(ld.at)}, turning {turn}", where))
                 continue
             each_live.append(figs[-1].si)
         if mv:
@@ -295,11 +297,15 @@ def _held_words(job) -> list[str]:
                 if s.brace is None and s.kind in ("pin", "roller")]
         if held:
             at = held[0] if len(held) == 1 else ", ".join(held[:-1]) + " and " + held[-1]
-            out.append(("RATED ONLY WHILE the hanger or seat at " + at + " holds"
-                        if len(held) == 1 else
-                        "RATED ONLY WHILE the hangers or seats at " + at + " hold")
-                       + " the beam against twist (both flanges held; a single hanger rod "
-                       "does not).")
+            bth = getattr(job.criteria, "lifting", "") == "below-the-hook"
+            what = ("lifting point", "lifting points") if bth else ("hanger or seat",
+                                                                    "hangers or seats")
+            out.append((f"RATED ONLY WHILE the {what[0]} at {at} holds" if len(held) == 1
+                        else f"RATED ONLY WHILE the {what[1]} at {at} hold")
+                       + " the beam against twist (both flanges held; "
+                       + ("a single sling or shackle does not: write brace = false on those "
+                          "supports to check it unbraced)." if bth else
+                          "a single hanger rod does not)."))
     tol = 1e-6 * job.length
     for ws in job.moving:
         a, b = ws.travel
