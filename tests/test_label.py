@@ -522,3 +522,13 @@ def test_a_lifting_label_says_the_device_is_rated_at_the_least_of_its_parts(pres
     shelf = load_job(PRESETS / "workbench-top.toml")
     assert "BEAM ONLY" not in label.label_text(label.rating(capacity(shelf),
                                                             analyze(shelf).unchecked))
+
+
+def test_posted_kilograms_never_exceed_the_posted_force():
+    # a metric label gives kg beside kN: each rounded down, the kg from the posted kN (g0 =
+    # 9.80665 m/s^2, the standard gravity), so 294 kg is never posted beside 2.88 kN
+    for value in (2885.0, 9999.0, 1234.5, 7911.0):
+        f = label.posted("MAX", value, "force", "si")
+        kn = float(f.value.split()[0]) * 1000
+        kg = float(f.value.split("(")[1].split()[0])
+        assert kg * 9.80665 <= kn * (1 + 1e-12) and kn <= value
