@@ -847,3 +847,20 @@ def test_a_title_that_is_not_text_is_named_as_such():
             'type = "point"\ntype = "point"', 'type = "point"'))
     (p,) = got.value.problems
     assert p.key == "title" and "title must be text in quotes, found 5" in p.message
+
+
+@pytest.mark.parametrize("extra, says", [
+    ('sx = "390 in^3"', "sqrt(I A) = 5.127 in^3"),
+    ('sx = "3.90 in^3"\ndepth = "10 in"', "S <= 2 I / depth = 1.56 in^3")])
+def test_a_custom_section_modulus_no_section_can_have_is_refused(extra, says):
+    # elementary section geometry: I <= A c^2, so S = I / c <= sqrt(I A); with a depth d the
+    # extreme fibre is at least d / 2 away, so S <= 2 I / d. The contract's own custom example
+    # (A 3.37 in^2, I 7.80 in^4, S 3.90 in^3) is within both and is read
+    base = ('schema = 1\ntitle = "x"\n[beam]\nlength = "8 ft"\nmaterial = "A36"\n'
+            '[beam.section]\nshape = "custom"\narea = "3.37 in^2"\nix = "7.80 in^4"\n{extra}\n'
+            '[[supports]]\nat = "0 ft"\ntype = "fixed"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(base.format(extra=extra))
+    (p,) = got.value.problems
+    assert p.key == "beam.section.sx" and says in p.message
+    parse_job_text(base.format(extra='sx = "3.90 in^3"'))

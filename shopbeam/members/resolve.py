@@ -259,6 +259,7 @@ def _custom(spec, key, mass, parse) -> Section:
         s_top = s_bot = s
     elif s_top is None or s_bot is None:
         raise InputError("give both sx_top and sx_bot, or sx", f"{key}.sx_top")
+    _possible_moduli(key, area, ix, depth, sx, spec)
     if depth is None:
         depth = ix / s_top + ix / s_bot
     shear = q("shear_area", "area")
@@ -274,6 +275,32 @@ def _custom(spec, key, mass, parse) -> Section:
     return Section(
         spec.get("name") or "custom", "custom", area, ix, s_top, s_bot, q("zx", "modulus"), iy,
         q("sy", "modulus"), q("zy", "modulus"), rx, ry, q("j", "inertia"), _cw(spec, key), shear, depth, "strong", {}, "typed in", notes, mass)
+
+
+def _possible_moduli(key, area, ix, depth, sx, spec) -> None:
+    """A section modulus no section can have is a slip (I typed for S, a unit off): every
+    fibre lies within c of the axis, so I <= A c^2 and S = I / c <= sqrt(I A); and with a
+    depth d the extreme fibre is at least d / 2 away, so S <= 2 I / d (elementary section
+    geometry). Refused, naming the bound."""
+    from shopbeam.units import fmt
+
+    most = math.sqrt(ix * area)
+    for name in ("sx", "sx_top", "sx_bot"):
+        if name not in spec:
+            continue
+        v = parse(spec[name], "modulus", f"{key}.{name}", positive=True)
+        if v > most * (1 + 1e-6):
+            raise InputError(
+                f"{name} = {fmt(v, 'modulus', 'us')} is more than any section of area "
+                f"{fmt(area, 'area', 'us')} and I = {fmt(ix, 'inertia', 'us')} can have "
+                f"(S = I / c <= sqrt(I A) = {fmt(most, 'modulus', 'us')}, as I <= A c^2): check "
+                "the value and its unit (was I typed for S?)", f"{key}.{name}")
+        if depth is not None and v > 2 * ix / depth * (1 + 1e-6):
+            raise InputError(
+                f"{name} = {fmt(v, 'modulus', 'us')} and depth = {fmt(depth, 'small_length', 'us')} "
+                f"disagree: the extreme fibre is at least depth / 2 from the axis, so S <= 2 I "
+                f"/ depth = {fmt(2 * ix / depth, 'modulus', 'us')}; check both, or give only "
+                "one of them", f"{key}.{name}")
 
 
 def _cw(spec, key):
