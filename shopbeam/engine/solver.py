@@ -267,8 +267,13 @@ def geometry_problems(length: float, supports, loads, fmt=None) -> list[tuple[st
                 names = " and ".join(x.key or x.kind for x in (a, b))
                 out.append((at(b, "supports"), f"{names} are both at {fmt(a.at)}; keep one"))
             elif "fixed" in (a.kind, b.kind):
+                fx = a if a.kind == "fixed" else b
+                end = fx.at <= tol or fx.at >= L - tol
                 out.append((at(b, "hinge"), "a hinge at a fixed support makes it a pin; use "
-                            "type = \"pin\""))
+                            "type = \"pin\"" if end else
+                            "a hinge exactly at an interior fixed support is ambiguous (which "
+                            "side does the clamp hold?): put the hinge a little to the side "
+                            "the clamp does not hold, or make the support a pin"))
     hinges = [s for s in supports if s.kind == "hinge"]
     for ld in loads:
         if ld.kind == "moment" and any(abs(ld.at - h.at) <= tol for h in hinges):
