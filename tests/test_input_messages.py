@@ -864,3 +864,24 @@ def test_a_custom_section_modulus_no_section_can_have_is_refused(extra, says):
     (p,) = got.value.problems
     assert p.key == "beam.section.sx" and says in p.message
     parse_job_text(base.format(extra='sx = "3.90 in^3"'))
+
+
+def test_a_tee_typed_in_with_its_two_moduli_is_read_and_its_smaller_one_bounded():
+    # AISC Shapes Database v15.0, WT6x20 (as shipped in the catalog): A 5.84 in^2, Ix 14.4
+    # in^4, d 5.97 in, y 1.09 in. Flange side S = I / y = 13.2 in^3 is above sqrt(I A) = 9.17
+    # in^3 and above 2 I / d = 4.82 in^3 -- legitimately, as the flange sits near the axis; the
+    # stem side S = I / (d - y) = 2.95 in^3 is the one the bounds limit
+    from shopbeam.members import catalog
+    wt = catalog.lookup("WT6x20")
+    base = ('schema = 1\ntitle = "x"\n[beam]\nlength = "8 ft"\nmaterial = "A36"\n'
+            '[beam.section]\nshape = "custom"\narea = "5.84 in^2"\nix = "14.4 in^4"\n'
+            'depth = "5.97 in"\nsx_top = "{top}"\nsx_bot = "{bot}"\n'
+            '[[supports]]\nat = "0 ft"\ntype = "fixed"\n')
+    job = parse_job_text(base.format(top="13.2 in^3", bot="2.95 in^3"))
+    assert job.section.sx_top == pytest.approx(wt.sx_top, rel=0.002)
+    assert job.section.sx_bot == pytest.approx(wt.sx_bot, rel=0.002)
+    # a stem-side modulus past 2 I / d (4.82 in^3) is still refused, and named
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(base.format(top="13.2 in^3", bot="5.2 in^3"))
+    (p,) = got.value.problems
+    assert p.key == "beam.section.sx_bot" and "2 I / depth = 4.824 in^3" in p.message

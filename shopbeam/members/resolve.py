@@ -259,7 +259,7 @@ def _custom(spec, key, mass, parse) -> Section:
         s_top = s_bot = s
     elif s_top is None or s_bot is None:
         raise InputError("give both sx_top and sx_bot, or sx", f"{key}.sx_top")
-    _possible_moduli(key, area, ix, depth, sx, spec)
+    _possible_moduli(key, area, ix, depth, sx, spec, s_top, s_bot)
     if depth is None:
         depth = ix / s_top + ix / s_bot
     shear = q("shear_area", "area")
@@ -277,30 +277,35 @@ def _custom(spec, key, mass, parse) -> Section:
         q("sy", "modulus"), q("zy", "modulus"), rx, ry, q("j", "inertia"), _cw(spec, key), shear, depth, "strong", {}, "typed in", notes, mass)
 
 
-def _possible_moduli(key, area, ix, depth, sx, spec) -> None:
-    """A section modulus no section can have is a slip (I typed for S, a unit off): every
-    fibre lies within c of the axis, so I <= A c^2 and S = I / c <= sqrt(I A); and with a
-    depth d the extreme fibre is at least d / 2 away, so S <= 2 I / d (elementary section
-    geometry). Refused, naming the bound."""
+def _possible_moduli(key, area, ix, depth, sx, spec, s_top, s_bot) -> None:
+    """A section modulus no section can have is a slip (I typed for S, a unit off). The
+    fibre farthest from the axis is c_max away, every fibre lies within it, so I <= A c_max^2
+    and the smaller modulus S = I / c_max <= sqrt(I A); with a depth d, c_max >= d / 2, so
+    S <= 2 I / d (elementary section geometry). Only the smaller modulus is bounded: the
+    other side of a tee or a cover-plated shape sits near the axis and may be far larger.
+    Refused, naming the bound."""
     from shopbeam.units import fmt
 
+    if "sx_top" in spec and "sx_bot" in spec:
+        name, v = ("sx_top", s_top) if s_top <= s_bot else ("sx_bot", s_bot)
+    elif "sx" in spec:
+        name, v = "sx", sx
+    else:
+        return
     most = math.sqrt(ix * area)
-    for name in ("sx", "sx_top", "sx_bot"):
-        if name not in spec:
-            continue
-        v = parse(spec[name], "modulus", f"{key}.{name}", positive=True)
-        if v > most * (1 + 1e-6):
-            raise InputError(
-                f"{name} = {fmt(v, 'modulus', 'us')} is more than any section of area "
-                f"{fmt(area, 'area', 'us')} and I = {fmt(ix, 'inertia', 'us')} can have "
-                f"(S = I / c <= sqrt(I A) = {fmt(most, 'modulus', 'us')}, as I <= A c^2): check "
-                "the value and its unit (was I typed for S?)", f"{key}.{name}")
-        if depth is not None and v > 2 * ix / depth * (1 + 1e-6):
-            raise InputError(
-                f"{name} = {fmt(v, 'modulus', 'us')} and depth = {fmt(depth, 'small_length', 'us')} "
-                f"disagree: the extreme fibre is at least depth / 2 from the axis, so S <= 2 I "
-                f"/ depth = {fmt(2 * ix / depth, 'modulus', 'us')}; check both, or give only "
-                "one of them", f"{key}.{name}")
+    if v > most * (1 + 1e-6):
+        raise InputError(
+            f"{name} = {fmt(v, 'modulus', 'us')} is more than any section of area "
+            f"{fmt(area, 'area', 'us')} and I = {fmt(ix, 'inertia', 'us')} can have "
+            f"(the smaller S = I / c_max <= sqrt(I A) = {fmt(most, 'modulus', 'us')}, as "
+            "I <= A c_max^2): check the value and its unit (was I typed for S?)",
+            f"{key}.{name}")
+    if depth is not None and v > 2 * ix / depth * (1 + 1e-6):
+        raise InputError(
+            f"{name} = {fmt(v, 'modulus', 'us')} and depth = {fmt(depth, 'small_length', 'us')} "
+            f"disagree: the farthest fibre is at least depth / 2 from the axis, so the smaller "
+            f"S <= 2 I / depth = {fmt(2 * ix / depth, 'modulus', 'us')}; check both, or give "
+            "only one of them", f"{key}.{name}")
 
 
 def _cw(spec, key):
