@@ -45,6 +45,20 @@ class InputError(Exception):
         return self.problem.located()
 
 
+class InputErrorGroup(InputError):
+    """Several independent problems in one table (each key of a typed-in section): raised as
+    its first problem, so any caller that handles an `InputError` still can, while a job
+    reader lists them all (`more`) in one pass."""
+
+    def __init__(self, errors: list[InputError]):
+        first = errors[0].problem
+        super().__init__(first.message, first.key, first.file, first.line)
+        self.more = [e.problem for e in errors[1:]]
+
+    def __str__(self) -> str:
+        return "\n".join([self.problem.located()] + [p.located() for p in self.more])
+
+
 class InputErrors(Exception):
     """Several problems found in one pass over a job file."""
 

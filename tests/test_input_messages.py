@@ -885,3 +885,16 @@ def test_a_tee_typed_in_with_its_two_moduli_is_read_and_its_smaller_one_bounded(
         parse_job_text(base.format(top="13.2 in^3", bot="5.2 in^3"))
     (p,) = got.value.problems
     assert p.key == "beam.section.sx_bot" and "2 I / depth = 4.824 in^3" in p.message
+
+
+def test_every_slipped_unit_of_a_typed_in_section_is_named_in_one_pass():
+    # each figure carries its own unit, so each slip can be named without the others
+    text = ('schema = 1\ntitle = "x"\n[beam]\nlength = "8 ft"\nmaterial = "A36"\n'
+            '[beam.section]\nshape = "custom"\narea = "3.37 in"\nix = "7.80 in^3"\n'
+            'sx = "3.90 in^4"\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    keys = [p.key for p in got.value.problems if not p.warning]
+    assert keys == ["beam.section.area", "beam.section.ix", "beam.section.sx"]
+    lines = [p.line for p in got.value.problems if not p.warning]
+    assert lines == [8, 9, 10]

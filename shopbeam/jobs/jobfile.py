@@ -284,9 +284,9 @@ class _Reader:
         self.problems.append(Problem(message, key, self.file, self.line_for(key), warning=True))
 
     def take(self, exc: InputError, key: str = ""):
-        p = exc.problem
-        k = p.key or key
-        self.problems.append(Problem(p.message, k, self.file, self.line_for(k)))
+        for p in [exc.problem] + list(getattr(exc, "more", ())):
+            k = p.key or key
+            self.problems.append(Problem(p.message, k, self.file, self.line_for(k)))
 
     def parse(self, table: dict, name: str, kind: str, key: str, required=True, **kw):
         if name not in table:

@@ -11,7 +11,7 @@ import math
 from dataclasses import replace
 from typing import Mapping
 
-from shopbeam.errors import InputError
+from shopbeam.errors import InputError, InputErrorGroup
 from shopbeam.members import catalog
 from shopbeam.members.sections import (_ALIASES, _COMMON, _KEYS, _REQUIRED, SHAPES, Section,
                                        shape_keys,
@@ -242,11 +242,27 @@ def _wall_text(spec) -> str:
     return v.strip() if isinstance(v, str) else str(v)
 
 
+_CUSTOM_KINDS = {"area": "area", "ix": "inertia", "sx": "modulus", "depth": "length",
+                 "sx_top": "modulus", "sx_bot": "modulus", "shear_area": "area",
+                 "iy": "inertia", "rx": "length", "ry": "length", "zx": "modulus",
+                 "sy": "modulus", "zy": "modulus", "j": "inertia"}
+
+
 def _custom(spec, key, mass, parse) -> Section:
+    values, bad = {}, []
+    for name, kind in _CUSTOM_KINDS.items():  # every figure read, every slip named at once
+        if name in spec:
+            try:
+                values[name] = parse(spec[name], kind, f"{key}.{name}", positive=True)
+            except InputError as exc:
+                bad.append(exc)
+    if len(bad) == 1:
+        raise bad[0]
+    if bad:
+        raise InputErrorGroup(bad)
+
     def q(name, kind):
-        if name not in spec:
-            return None
-        return parse(spec[name], kind, f"{key}.{name}", positive=True)
+        return values.get(name)
 
     area, ix = q("area", "area"), q("ix", "inertia")
     sx, depth = q("sx", "modulus"), q("depth", "length")
