@@ -257,8 +257,10 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
             next(str(n) for n, u in terms if not u)
         raise InputError(f"{text!r} has a bare number: give its unit (e.g. \"{shown} {unit_hint}\"); "
                          "shopbeam never guesses a unit", key)
+    _mixed_fraction_slip(text, key)
     reg = ureg()
     total = None
+    prev = None  # (unit text, size of one unit in base units) of the term before
     try:
         for num, unit in terms:
             try:
@@ -275,7 +277,9 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
             elif q.dimensionality != total.dimensionality:
                 raise InputError(f"cannot add {unit!r} to {terms[0][1]!r} in {text!r}", key)
             else:
+                _compound_slip(text, key, prev, unit, float(num), q)
                 total = total + q.to(total.units)
+            prev = (unit, float(reg.Quantity(1.0, u).to_base_units().magnitude))
         value = sign * total
     except InputError:
         raise
@@ -286,6 +290,41 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
     if not math.isfinite(float(value.magnitude)):
         raise InputError(f"{text!r} is not a finite number", key)
     return value
+
+
+_MIXED = re.compile(r"(?<![\d./])(\d+)[ -](\d+)/(\d+)(?![\d./])")
+
+
+def _mixed_fraction_slip(text: str, key: str) -> None:
+    """A mixed number's fraction is under one ("5 1/4"); "5 5/4" is a slip (5 1/4? 6 1/4?)
+    that shopbeam does not settle by guessing."""
+    for m in _MIXED.finditer(_normalise(text)):
+        n, d = int(m.group(2)), int(m.group(3))
+        if d and n >= d:
+            whole = int(m.group(1)) + n // d
+            rest = f" {n % d}/{d}" if n % d else ""
+            raise InputError(f"{text!r}: the fraction in {m.group(0)!r} is not less than one, "
+                             f"so it is not a mixed number (it would read {whole}{rest}); write "
+                             "the value as meant, e.g. '5 1/4 in'", key)
+
+
+def _compound_slip(text: str, key: str, prev, unit: str, num: float, q) -> None:
+    """Feet then inches, metres then millimetres: a compound value goes from the larger unit
+    to the smaller, and each part is less than one of the unit before it. "10 ft 13 in",
+    "10 in 6 ft" or "1 ft 1 ft" all add up, but each is more likely a slip than meant."""
+    if prev is None:
+        return
+    before, size = prev
+    here = float(q.to_base_units().magnitude) / num if num else None
+    if here is not None and here >= size * (1 - 1e-12):
+        raise InputError(f"{text!r} gives {unit!r} after {before!r}: a compound value goes "
+                         "from the larger unit to the smaller, each unit once (e.g. '10 ft "
+                         "6 in', '2 m 50 mm'); write it as meant", key)
+    if float(q.to_base_units().magnitude) >= size * (1 - 1e-12):
+        raise InputError(f"{text!r}: the {num:g} {unit} after the {before} is one {before} or "
+                         f"more; write the value as meant (e.g. '10 ft 6 in': the inches "
+                         "after the feet are under 12), so a slipped digit is not read as "
+                         "a sum", key)
 
 
 @lru_cache(maxsize=64)
@@ -334,7 +373,7 @@ def plain_value(text, kind: str) -> float | None:
         return -v if m.group(1) == "-" else v
     if kind == "length":
         m = _FT_IN.fullmatch(text)
-        if m:
+        if m and float(m.group(3)) < 12:  # 12 in or more: the full parser says why not
             v = (int(m.group(2)) + float(m.group(3)) / 12) * FT
             return -v if m.group(1) == "-" else v
     return None

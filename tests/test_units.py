@@ -84,3 +84,34 @@ def test_positive_and_display():
 
 def test_one_registry_for_the_process():
     assert units.ureg() is units.ureg()
+
+
+# Shop notation, common practice (no source): a compound value runs from the larger unit to
+# the smaller, each part under one of the unit before it, and the fraction of a mixed number
+# is under one. Anything else adds up, but is more often a slipped digit than meant.
+@pytest.mark.parametrize("text, words", [
+    ("10 ft 13 in", "the 13 in after the ft is one ft or more"),
+    ("1 ft 12 in", "the 12 in after the ft"),
+    ("1 m 1000 mm", "the 1000 mm after the m"),
+    ("10 in 6 ft", "gives 'ft' after 'in'"),
+    ("1 ft 1 ft", "gives 'ft' after 'ft'"),
+    ("5 5/4 ft", "it would read 6 1/4"),
+    ("5-3/2 ft", "it would read 6 1/2"),
+])
+def test_a_compound_value_that_is_likely_a_slip_is_refused(text, words):
+    with pytest.raises(InputError) as got:
+        units.parse(text, "length", "loads[0].at")
+    assert words in str(got.value) and "loads[0].at" in str(got.value)
+
+
+@pytest.mark.parametrize("text, inches", [
+    ("10 ft 11.99 in", 131.99), ("3 ft 1-1/2 in", 37.5), ("2 ft 6-3/4 in", 30.75),
+    ("10 ft 0 in", 120.0), ("10' 6\"", 126.0), ("10'-6\"", 126.0)])
+def test_ordinary_feet_and_inches_still_read(text, inches):
+    assert units.parse(text, "length") == pytest.approx(inches * 0.0254)
+
+
+def test_a_compound_force_is_read_largest_first_only():
+    assert units.parse("1 kip 500 lbf", "force") == pytest.approx(1500 * 4.4482216152605)
+    with pytest.raises(InputError):
+        units.parse("500 lbf 1 kip", "force")
