@@ -898,3 +898,18 @@ def test_every_slipped_unit_of_a_typed_in_section_is_named_in_one_pass():
     assert keys == ["beam.section.area", "beam.section.ix", "beam.section.sx"]
     lines = [p.line for p in got.value.problems if not p.warning]
     assert lines == [8, 9, 10]
+
+
+@pytest.mark.parametrize("typed, says", [
+    # what the section key cannot take says what it is and where it goes instead
+    ("2L3x3x1/4", "double angles (2L) are not in the catalog"),
+    ("5-1/8x12", "glued-laminated timber (glulam) sizes are not offered"),
+    ("C8x11.5 weak", "axis = 'weak' under [beam]"),
+    ("L4x3x1/4 LLV", "leg = 'bottom' or 'top'"),
+])
+def test_a_section_the_catalog_cannot_take_says_why(typed, says):
+    from shopbeam.errors import InputError
+    from shopbeam.members import catalog
+    with pytest.raises(InputError) as got:
+        catalog.lookup(typed)
+    assert says in str(got.value) and "did you mean" not in str(got.value)

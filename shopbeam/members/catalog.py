@@ -736,7 +736,28 @@ def _rounded_match(k: str):
     return next(iter(unique.values())) if len(unique) == 1 else None
 
 
+_DOUBLE_ANGLE = re.compile(r"\s*2\s*-?\s*L\s*\d", re.IGNORECASE)
+_GLULAM_SIZE = re.compile(r"\s*\d+\s*[- ]\s*\d+\s*/\s*\d+\s*(in|\")?\s*x\s*\d+(\.\d+)?"
+                          r"(\s*-?\s*\d+\s*/\s*\d+)?\s*(in|\")?\s*$", re.IGNORECASE)
+_AXIS_WORDS = {"weak": "weak", "strong": "strong", "weak axis": "weak", "strong axis": "strong",
+               "minor": "weak", "major": "strong", "minor axis": "weak", "major axis": "strong",
+               "y-y": "weak", "x-x": "strong", "yy": "weak", "xx": "strong"}
+_LEG_WORDS = {"llv": "the long leg vertical", "lsv": "the short leg vertical",
+              "llh": "the long leg horizontal", "lsh": "the short leg horizontal"}
+
+
 def _not_found(designation: str, k: str | None) -> str:
+    if _DOUBLE_ANGLE.match(str(designation)):
+        return (f"unknown section {designation!r}: double angles (2L) are not in the catalog "
+                "and their checks (the pair acting together, connectors, the gap) are not "
+                "made; check one angle (e.g. \"L3x3x1/4\") carrying its share of the load, or "
+                "give the pair's figures in a [beam.section] table with shape = \"custom\" "
+                "(analysed, but not rated)")
+    if _GLULAM_SIZE.match(str(designation)):
+        return (f"unknown section {designation!r}: glued-laminated timber (glulam) sizes are "
+                "not offered; sawn lumber (e.g. \"2x10\", \"4x12\") and LVL are, or give the "
+                "member as shape = \"rect-bar\" with its width and depth and a typed-in "
+                "material with the glulam's published design values")
     # a grade or other words typed after a good designation ("W8x18 A992", "HSS4x4x1/4 gr
     # C"): say where the rest belongs
     words = str(designation).split()
@@ -745,6 +766,18 @@ def _not_found(designation: str, k: str | None) -> str:
         hk = canon(head)
         if hk and (hk in _index()[0] or _rounded_match(hk) is not None):
             found = (_index()[0][hk] if hk in _index()[0] else _rounded_match(hk)).designation
+            low = tail.lower().strip()
+            if low in _AXIS_WORDS:
+                return (f"unknown section {designation!r}: {found!r} followed by {tail!r}; the "
+                        f"axis goes in its own key: write section = '{found}' and axis = "
+                        f"'{_AXIS_WORDS[low]}' under [beam] (bending about the "
+                        f"{_AXIS_WORDS[low]} axis)")
+            if low in _LEG_WORDS:
+                return (f"unknown section {designation!r}: {found!r} followed by {tail!r} "
+                        f"({_LEG_WORDS[low]}); an angle's orientation goes in a [beam.section] "
+                        f"table: designation = '{found}', axis = 'strong' (about x-x, the "
+                        "catalog's Ix) or 'weak' (y-y), and leg = 'bottom' or 'top' (where the "
+                        "horizontal leg sits); `shopbeam section` shows both axes")
             from shopbeam.members.materials import get  # noqa: PLC0415 - this message only
 
             grade = get(tail)
