@@ -913,3 +913,35 @@ def test_a_section_the_catalog_cannot_take_says_why(typed, says):
     with pytest.raises(InputError) as got:
         catalog.lookup(typed)
     assert says in str(got.value) and "did you mean" not in str(got.value)
+
+
+def _preset_text(name):
+    from pathlib import Path
+    return (Path(__file__).resolve().parent.parent / "presets" / f"{name}.toml").read_text()
+
+
+@pytest.mark.parametrize("preset, old, new, key", [
+    # a refused support: no lifting-profile deflection warning guessed from the rest
+    ("jib-arm", 'type = "fixed"', 'type = "Fixed"', "supports[0].type"),
+    # a refused wheel set: no "this lifting job has no force load"
+    ("monorail-trolley", 'dead = ["-60 lbf", "-60 lbf"]', 'dead = ["-60 lbf"]',
+     "moving[0].dead"),
+])
+def test_a_refused_table_is_not_followed_by_warnings_that_assume_it_away(preset, old, new, key):
+    text = _preset_text(preset)
+    assert old in text
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text.replace(old, new, 1))
+    assert [p.key for p in got.value.problems] == [key]
+
+
+def test_a_glulam_stress_class_is_named_as_such_and_wood_keys_are_not_called_ignored():
+    text = ('schema = 1\ntitle = "shed joist"\ntags = ["not-lifting"]\n[beam]\n'
+            'length = "12 ft"\nsection = "2x10"\nmaterial = "24F-V4"\nrepetitive = true\n'
+            'wet_service = true\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n'
+            '[criteria]\nduration = "two-months"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = got.value.problems
+    assert p.key == "beam.material" and "glulam" in p.message

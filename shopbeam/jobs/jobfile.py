@@ -672,7 +672,9 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
     if live is None or dead is None or gaps is None or length is None:
         return ()
     if dead and len(dead) != len(live):
-        r.error(f"dead has {len(dead)} values for {len(live)} wheels", f"{key}.dead")
+        r.error(f"dead has {len(dead)} value{'s' if len(dead) != 1 else ''} for "
+                f"{len(live)} wheels: give one per wheel, in the order of loads (the "
+                "trolley's own weight on each wheel, + up)", f"{key}.dead")
         return ()
     if gaps is not None and len(gaps) != len(live) - 1:
         r.error(f"spacing needs {len(live) - 1} value(s) (one between each pair of wheels)",
@@ -1978,7 +1980,9 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
         r.error(f"duration {dur!r} must be one of {', '.join(wood.DURATIONS)} (the load "
                 "duration of NDS Table 2.3.2)", "criteria.duration")
         dur = "ten-years"
-    if material is None or getattr(material, "kind", "") != "lumber":
+    if material is None:  # refused already: whether these keys apply is not known yet
+        return material, None
+    if getattr(material, "kind", "") != "lumber":
         for k, where in _WOOD_KEYS:
             if k in (beam if where == "beam" else crit):
                 r.warn(f"{k} is for wood members (NDS); this material ignores it",
@@ -2341,10 +2345,15 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
                "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
-    _looser_than_lifting(r, criteria, tags, supports, length)
-    _looser_than_rack(r, criteria, tags, supports, length)
-    _lifting_without_live(r, criteria, tags, loads, moving)
-    _lifting_mismatch(r, criteria, tags, supports, length)
+    # a refused support or wheel set leaves the job half read: what would follow from the
+    # rest (a profile guessed from the other supports, "no force load") would mislead
+    support_refused = any(not p.warning and p.key.startswith("supports") for p in r.problems)
+    if not support_refused:
+        _looser_than_lifting(r, criteria, tags, supports, length)
+        _looser_than_rack(r, criteria, tags, supports, length)
+    _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
+    if not support_refused:
+        _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     bth_hint = _below_the_hook_hint(r, title, notes, tags, criteria)
