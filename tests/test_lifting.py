@@ -536,3 +536,19 @@ def test_the_below_the_hook_design_factor_is_applied_or_the_job_is_not_rated(mat
     assert bool(nd) == (not applied)
     bend = next(c for c in res.checks if c.name == "bending")
     assert ("Nd 2" in bend.formula) == applied
+
+
+def test_a_lifting_profile_without_nd_names_the_material_s_own_safety_factors():
+    # the profile line says whose safety factors stand in for Nd: the steel jib keeps AISC
+    # 360-16 ASD; the same jib in 6061-T6 keeps the Aluminum Design Manual's
+    from pathlib import Path
+
+    from shopbeam.design.lifting import profile_of
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = (Path(__file__).resolve().parent.parent / "presets" / "jib-arm.toml").read_text()
+    steel = profile_of(parse_job_text(text))
+    assert steel.nd is None and "own safety factors (AISC 360-16 ASD)" in steel.words
+    sec = [ln for ln in text.splitlines() if ln.startswith("material =")]
+    assert sec
+    alu = parse_job_text(text.replace(sec[0], 'material = "6061-T6"'))
+    assert "own safety factors (Aluminum Design Manual 2015 ASD)" in profile_of(alu).words

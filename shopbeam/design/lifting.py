@@ -70,6 +70,19 @@ class Profile:
     guessed: bool = False  # picked from tags = ["lifting"], not named
 
 
+def _own_basis(job) -> str:
+    """Whose safety factors a lifting profile without Nd leaves in force, by material."""
+    kind = getattr(getattr(job, "material", None), "kind", "")
+    if kind == "aluminum":
+        return "Aluminum Design Manual 2015 ASD"
+    if kind == "lumber":
+        return "NDS allowable stresses"
+    basis = getattr(getattr(job, "criteria", None), "basis", "")
+    if basis == "first-yield" or (kind == "custom" and basis != "asd"):
+        return "first yield with the job's safety factor"
+    return "AISC 360-16 ASD"
+
+
 def profile_of(job) -> Profile | None:
     """The job's lifting profile (None for a job that is not a lifting device)."""
     name = getattr(job.criteria, "lifting", "") or ""
@@ -93,7 +106,7 @@ def profile_of(job) -> Profile | None:
              + (f"design factor Nd {nd:g}, ASME BTH-1 Category {cat} (3-1.3, from memory)"
                 + (" (category not given: B, the stricter)"
                    if not getattr(job.criteria, "category", "") else "")
-                if nd else "the member's own safety factors (AISC 360-16 ASD for steel)")
+                if nd else f"the member's own safety factors ({_own_basis(job)})")
              + f"; deflection {p['deflection_source']}")
     return Profile(name, p["impact"], p["lateral"], p["longitudinal"], nd, p["deflection"],
                    words, guessed)

@@ -287,7 +287,11 @@ def _custom(spec, key, mass, parse) -> Section:
     rx = q("rx", "length") or math.sqrt(ix / area)
     ry = q("ry", "length") or (math.sqrt(iy / area) if iy else None)
     if shear > area * 1.0000001:
-        raise InputError("shear_area is larger than the area", f"{key}.shear_area")
+        raise InputError("shear_area is larger than the area: the shear area is the part that "
+                         "carries shear (the web, d x tw for an I-shape, 2 h t for a tube), so "
+                         "it is a part of the area; check both values and their units, or "
+                         "leave shear_area out (half the area is then used)",
+                         f"{key}.shear_area")
     return Section(
         spec.get("name") or "custom", "custom", area, ix, s_top, s_bot, q("zx", "modulus"), iy,
         q("sy", "modulus"), q("zy", "modulus"), rx, ry, q("j", "inertia"), _cw(spec, key), shear, depth, "strong", {}, "typed in", notes, mass)
