@@ -271,6 +271,7 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
                 raise InputError(f"unknown unit {unit!r} in {text!r}{what} "
                                  f"(e.g. {KINDS[kind][2] if kind in KINDS else chr(34) + '8 ft' + chr(34)})",
                                  key) from None
+            _odd_prefix(text, key, unit, u)
             q = reg.Quantity(float(num), u)
             if total is None:
                 total = q
@@ -290,6 +291,27 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
     if not math.isfinite(float(value.magnitude)):
         raise InputError(f"{text!r} is not a finite number", key)
     return value
+
+
+_SMALL_PREFIX = re.compile(r"^(?:milli|micro|nano|pico)(?:metric_ton|ton|kip|force_pound|"
+                           r"pound|newton|gram|force_kilogram|kilogram)")
+
+
+def _odd_prefix(text: str, key: str, word: str, u) -> None:
+    """A metric prefix no shop puts on a force or a mass reads as a slip, not a value: "mt"
+    (shorthand for metric tons) is milli-tonnes to pint, "mkip" a thousandth of a kip. Refused,
+    saying what it would have read as and what to write."""
+    for name in (str(c) for c in getattr(u, "_units", {})):
+        if name in ("millimetric_ton", "megametric_ton"):
+            big = name.startswith("mega")
+            raise InputError(f"{text!r}: {word!r} reads as {'mega' if big else 'milli'}-tonnes "
+                             f"({'a million metric tons' if big else 'a thousandth of a metric ton'}); "
+                             "for metric tons write \"t\" or \"tonne\" (e.g. \"-1.5 t\"), "
+                             "or give the force in kN", key)
+        if _SMALL_PREFIX.match(name):
+            raise InputError(f"{text!r}: {word!r} is {name.replace('_', ' ')}, a unit no load on "
+                             "a beam is written in, so it reads as a slip; write lbf, kip, N, "
+                             "kN, kg or t", key)
 
 
 _MIXED = re.compile(r"(?<![\d./])(\d+)[ -](\d+)/(\d+)(?![\d./])")

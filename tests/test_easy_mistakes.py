@@ -772,3 +772,92 @@ def test_the_road_vehicle_rule_reads_vehicle_words_and_a_tag_says_it_is_not_one(
     text = job_text().replace('title = "shelf"', f'title = "{title}"\ntags = {tags}')
     job = parse_job_text(text)
     assert any("road vehicle" in p.message for p in warnings(job)) == caught
+
+
+# ------------------------------------------------------------ words and keys that change the figure
+def _gaps(job):
+    from shopbeam.design.capacity import rating_gaps
+    return rating_gaps(job, None)
+
+
+def _titled(title, tags="[]"):
+    return job_text().replace('title = "shelf"', f'title = "{title}"\ntags = {tags}')
+
+
+@pytest.mark.parametrize("title, what", [
+    # a member that is coped, notched or holed is weaker than the full section checked
+    # (AISC Manual Part 9 coped-beam checks; NDS 2018 3.4.3.2 notched wood, from memory)
+    ("Coped W8 beam, both ends coped", "cut member"),
+    ("Beam with 1 in holes drilled in the web", "cut member"),
+    # words of a lifting device, a vehicle or a mobile machine: impact applies
+    ("Pick beam, 3 ton", "lifting device"),
+    ("Beam with chain motor on hook", "lifting device"),
+    ("Coil lifter beam", "lifting device"),
+    ("Cargo van shelving beam", "road vehicle"),
+    ("Forklift fork extension", "road vehicle"),
+    ("Ute tray cross member", "road vehicle"),
+])
+def test_words_that_change_what_the_member_is_withhold_the_rating(title, what):
+    job = parse_job_text(_titled(title))
+    assert any(what in w.message for w in warnings(job))
+    assert any(what in g for g in _gaps(job))
+
+
+@pytest.mark.parametrize("title, tag", [
+    ("Coped W8 beam, both ends coped", "not-cut"),
+    ("Cargo van shelving beam", "not-vehicle"),
+    ("Pick beam, 3 ton", "not-lifting"),
+])
+def test_the_not_tags_clear_what_the_words_suggested(title, tag):
+    job = parse_job_text(_titled(title, f'["{tag}"]'))
+    assert _gaps(job) == ()
+
+
+def test_ordinary_shop_titles_are_not_taken_for_cut_lifting_or_vehicle_members():
+    for title in ("Wall shelf for bar stock", "Loft beam over the saw bay",
+                  "Pallet rack beam, beam ends hook into the uprights"):
+        job = parse_job_text(_titled(title, '["not-rack"]'))
+        assert _gaps(job) == (), title
+
+
+@pytest.mark.parametrize("key", ["impact_factor = 1.25", "dynamic_factor = 1.5", "dlf = 1.3",
+                                 "derate = 0.8"])
+def test_an_impact_or_derating_factor_under_another_name_withholds_the_rating(key):
+    job = parse_job_text(job_text(criteria=key))
+    (w,) = [p for p in warnings(job) if p.key.startswith("criteria.")]
+    assert 'impact = "25%"' in w.message
+    assert any(w.key in g for g in _gaps(job))
+
+
+def test_a_criteria_key_written_under_beam_withholds_the_rating():
+    text = job_text().replace('material = "A992"', 'material = "A992"\nimpact = "25%"')
+    job = parse_job_text(text)
+    (w,) = [p for p in warnings(job) if p.key == "beam.impact"]
+    assert "belongs under [criteria]" in w.message
+    assert any("beam.impact" in g for g in _gaps(job))
+
+
+def test_a_described_size_without_unit_on_an_si_job_is_refused():
+    text = job_text(section="round-bar 25").replace('title = "shelf"',
+                                                    'title = "shelf"\nunits = "si"')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = [p for p in got.value.problems if not p.warning]
+    assert p.key == "beam.section" and '"round-bar 25 mm"' in p.message
+    parse_job_text(text.replace("round-bar 25", "round-bar 25 mm"))  # with its unit: read
+
+
+def test_a_described_size_past_shop_stock_without_unit_is_refused_on_a_us_job():
+    # common practice (no source): no shop stocks a solid bar over 12 in
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(job_text(section="rect-bar 50 x 6"))
+    assert "past any shop stock" in str(got.value)
+    parse_job_text(job_text(section="rect-bar 3 x 1/2"))
+
+
+@pytest.mark.parametrize("value, says", [
+    ('"-15 mt"', 'write "t" or "tonne"'), ('"-3 mkip"', "reads as a slip")])
+def test_a_prefix_no_shop_puts_on_a_load_is_refused(value, says):
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(job_text(load=f"value = {value}"))
+    assert says in str(got.value)

@@ -204,7 +204,7 @@ def rating_gaps(job, st) -> tuple[str, ...]:
         out.append(thick)
     road = getattr(job, "vehicle_hint", "")
     if road:
-        out.append(f"it reads like a member of a road vehicle ({road}) but gives no impact: "
+        out.append(f"it reads like a member of a road vehicle or mobile machine ({road}) but gives no impact: "
                    "road shock multiplies the payload, so a static figure would overstate it. "
                    "Write [criteria] impact = \"100%\" (or the vehicle maker's figure), "
                    "impact = \"0%\" for a member only loaded while parked, or the tag "
@@ -229,6 +229,7 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "flange, but on a job not tagged lifting its wheels are taken as rolling on "
                    "the top flange and the flange checks under them are not made. Tag the job "
                    "\"lifting\", or remove the key(s) for a cart on top")
+    out += list(getattr(job, "holds", ()))
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "

@@ -30,6 +30,7 @@ from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
                                  guessed_profile, has_free_end)
+from shopbeam.members import catalog
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
 from shopbeam.members.materials import get as get_material, resolve_material, untempered
 from shopbeam.members.resolve import resolve_section
@@ -159,6 +160,8 @@ class Job:
     factor_keys: tuple[str, ...] = ()
     # what makes a job with no impact read like a road vehicle's member (see _vehicle_hint)
     vehicle_hint: str = ""
+    # other reasons the reader found to post no rating, each warned too (see _Reader.hold)
+    holds: tuple[str, ...] = ()
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -263,6 +266,12 @@ class _Reader:
         self.system = "us"  # the job's units, for the figures quoted in messages
         self.cuts: list[str] = []  # keys that say the member is notched, coped or holed
         self.factors: list[str] = []  # keys that read like a safety factor shopbeam ignores
+        self.holds: list[str] = []  # why no rating may be posted, each said in a warning too
+
+    def hold(self, message: str, key: str, reason: str):
+        """Warn, and withhold the rating for `reason` (capacity.rating_gaps lists it)."""
+        self.warn(message, key)
+        self.holds.append(reason)
 
     def line_for(self, key: str) -> int | None:
         k = key
@@ -394,6 +403,21 @@ class _Reader:
                           "\"first-yield\"; AISC and ADM checks carry their own Omega); write "
                           "it there, or remove this key", path)
                 continue
+            if _IMPACT_KEY.match(str(k)):
+                path = f"{prefix}.{k}" if prefix else k
+                lower = _LOWER_KEY.match(str(k))
+                meant = ("a lower figure (a derating or margin)" if lower else
+                         "more load (an impact or dynamic allowance)")
+                self.hold(f"{k!r} in {label} reads like it asks for {meant}, and shopbeam "
+                          "does not read it, so no rating is posted. An impact or dynamic "
+                          "allowance is [criteria] impact = \"25%\" (a factor of 1.25 is "
+                          "25 %), added to the live loads; a margin on strength is "
+                          "safety_factor with basis = \"first-yield\". Write the one meant, "
+                          "or remove this key", path,
+                          f"{path} is not read (an impact, dynamic or derating factor by its "
+                          "name), so the figure would leave it out. Write [criteria] impact = "
+                          "\"25%\" for an allowance on the live loads, or remove the key")
+                continue
             if _CUT_KEY.search(str(k)):
                 path = f"{prefix}.{k}" if prefix else k
                 self.cuts.append(path)
@@ -417,6 +441,13 @@ class _Reader:
                 else:
                     hint = f": {k} belongs under " + " or ".join(_TABLES[t] for t in homes)
             path = f"{prefix}.{k}" if prefix else k
+            if homes == ["criteria"] and here != "criteria":
+                # a limit or factor written in the wrong table changes the figure unseen
+                self.hold(f"unknown key {k!r} in {label} is ignored{hint}; until it is, the "
+                          "checks do not use it and no rating is posted", path,
+                          f"{path} belongs under [criteria]: written here it is not read, so "
+                          "the figure would leave it out. Move it")
+                continue
             self.warn(f"unknown key {k!r} in {label} is ignored{hint}", path)
 
     @property
@@ -435,6 +466,15 @@ _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes
 _FACTOR_KEY = re.compile(r"^(?:sf|fs|fos|nd|omega(?:_b)?|factor_?of_?safety|safety|"
                          r"safety_?margin|design_?factor|load_?factor|safety_?factors?)$",
                          re.IGNORECASE)
+
+# An unknown key that reads like an impact, dynamic or derating factor: the user asked for
+# more load (or less strength) than the checks use, so the job is not rated on it
+_IMPACT_KEY = re.compile(r"^(?:impact_?(?:factor|allowance|percent|pct)|dynamic(?:_?factor)?|"
+                         r"dlf|daf|dynamic_?(?:load_?)?(?:factor|allowance)|overload(?:_?factor)?|"
+                         r"live_?load_?factor|service_?factor|derat(?:e|ing)(?:_?factor)?|"
+                         r"reduction(?:_?factor)?|margin|shock(?:_?factor)?|g_?factor)$",
+                         re.IGNORECASE)
+_LOWER_KEY = re.compile(r"^(?:derat|reduction|margin)", re.IGNORECASE)
 
 # How each table is written, for "belongs under [criteria]" ("" is the top of the file)
 _TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
@@ -1421,7 +1461,11 @@ _LIFTING_WORDS = re.compile(
     r"block and tackle|tackle blocks?|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
     r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
     r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
-    r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?)\b",
+    r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?|"
+    r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:on|from|under) (?:the|a) hook|"
+    r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
+    r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
+    r"pallet|bar) lifters?|lifters?|magnet beams?|booms?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
 NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
@@ -1714,7 +1758,12 @@ def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
 
 _VEHICLE_WORDS = re.compile(
     r"\b(trailers?|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
-    r"vehicles?|chassis|car haulers?|cargo decks?)\b", re.IGNORECASE)
+    r"vehicles?|chassis|car haulers?|cargo decks?|vans?|utes?|pickups?|"
+    r"service bod(?:y|ies)|headache racks?|ladder racks? (?:on|for) (?:a|the) (?:truck|van)|"
+    r"bus (?:luggage|racks?|shel(?:f|ves))|luggage racks?|rvs?|campers?|motor ?homes?|"
+    r"caravans?|tow dolly|tow dollies|fork ?lift (?:attachments?|forks?|extensions?|"
+    r"booms?|jibs?|platforms?|carriages?)|fork extensions?|skid ?steers?|telehandlers?|"
+    r"tractors?|boat (?:racks?|bunks?))\b", re.IGNORECASE)
 NOT_VEHICLE = "not-vehicle"  # the tag that says a job that reads like one is not on a vehicle
 
 
@@ -1730,7 +1779,7 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
     if not said:
         return ""
     hint = "; ".join(said[:3])
-    r.warn(f"this reads like a member of a road vehicle ({hint}) but gives no impact: road "
+    r.warn(f"this reads like a member of a road vehicle or mobile machine ({hint}) but gives no impact: road "
            "shock over bumps multiplies the payload (trailers are commonly designed for 1.5 to "
            "3 g, from memory), so a static figure would overstate what may be carried and no "
            "rating is posted. Write [criteria] impact = \"100%\" (or the vehicle maker's "
@@ -1738,6 +1787,31 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
            f"while parked, or the tag \"{NOT_VEHICLE}\" if it is not on a vehicle (a shelf at a "
            "truck dock)", "criteria.impact")
     return hint
+
+
+NOT_CUT = "not-cut"  # the tag that says a job whose words read like a cut member is not one
+_CUT_WORDS = re.compile(
+    r"\b(coped|copes?|coping|notch(?:ed|es)?|holes?|drilled|bored|cut-?outs?|slotted|"
+    r"slots?|openings? in the (?:web|flange)|penetrations?)\b", re.IGNORECASE)
+
+
+def _cut_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
+    """A member the title, notes or a load label say is coped, notched or holed: the checks
+    are of the full section, which the cut weakens, so no rating is posted (as for a cut
+    key). The tag ``not-cut`` says the words do not mean this member is cut."""
+    if NOT_CUT in tags:
+        return
+    said = _words_found(_CUT_WORDS, title, notes, tags, raw_loads)
+    if not said:
+        return
+    hint = "; ".join(said[:3])
+    r.hold(f"this reads like a cut member ({hint}): shopbeam does not model notches, copes, "
+           "holes or cut-outs and checks the full section, which the cut weakens, so no rating "
+           "is posted. Have the cut member checked (AISC Manual Part 9 for a coped end, AISC "
+           "360-16 B4.3 and J4 for holes, NDS 3.2.3 and 3.4.3 for notched wood), or add the "
+           f"tag \"{NOT_CUT}\" if this member is not cut", "tags" if tags else "title",
+           f"it reads like a cut member ({hint}): the checks are of the full section the cut "
+           f"weakens. Have the cut checked, or add the tag \"{NOT_CUT}\" if it is not cut")
 
 
 def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
@@ -2154,6 +2228,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if "section" not in beam:
             r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
                     "[beam.section] table)", "beam.section")
+        elif catalog.bare_size_problem(beam["section"], system):
+            r.error(catalog.bare_size_problem(beam["section"], system), "beam.section")
         else:
             section = _resolve("section", beam["section"], "beam.section", r, axis=axis,
                                material=material)
@@ -2361,6 +2437,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
                                  is_lifting(tags, criteria.lifting))
     _rack_hint(r, title, notes, tags, raw_loads)
+    _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
                 section.shape == "i-beam" and section.axis == "strong"):
@@ -2401,7 +2478,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         lugs=tuple(lugs),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
-        factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint,
+        factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint, holds=tuple(r.holds),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )

@@ -840,6 +840,49 @@ def suggestions(designation: str, n: int = 3) -> list[str]:
     return out[:n]
 
 
+# A described size with no unit is read in inches; a solid bar over 12 in or a tube over 24
+# in is far past shop stock (common practice, no source) and is likely millimetres.
+_BARE_LIMIT_IN = {"bar": 12.0, "tube": 24.0}
+
+
+def bare_description(designation) -> tuple[str, float] | None:
+    """For a shop description whose sizes carry no unit at all ("round-bar 25", "rect-tube 40
+    x 20 x 2"): (the shape word, the largest number). None for anything else."""
+    if not isinstance(designation, str):
+        return None
+    m = _DESCRIBED.match(designation)
+    if not m or _PIPE.match(_prep(designation)):
+        return None
+    dims = m.group("dims")
+    if re.search(r"[a-wyzA-WYZ\"'\u2032\u2033]", dims):  # a unit, a gauge or an inch mark
+        return None
+    nums = [_number(_MIXED.sub(lambda n: f"{n.group(1)}-{n.group(2)}/{n.group(3)}", t.strip()))
+            for t in re.split(r"\s*[xX\u00d7*]\s*", dims.strip()) if t.strip()]
+    nums = [v for v in nums if v is not None]
+    return (m.group("shape"), max(nums)) if nums else None
+
+
+def bare_size_problem(designation, system: str) -> str:
+    """What is wrong with a unitless description on this job, or "": on an SI job the inches
+    it would be read in are not what was meant; on a US job a size past any shop stock
+    (a bar over 12 in, a tube over 24 in) is likely millimetres."""
+    bare = bare_description(designation)
+    if bare is None:
+        return ""
+    shape, biggest = bare
+    if system == "si":
+        return (f"{designation!r} gives its sizes without a unit, which would be read as "
+                "inches, but this job is in SI units: write the unit, e.g. "
+                f"\"{designation.strip()} mm\" (or \"... in\" if inches are meant)")
+    limit = _BARE_LIMIT_IN["bar" if "bar" in shape.lower() else "tube"]
+    if biggest > limit:
+        return (f"{designation!r} gives its sizes without a unit, read as inches: {biggest:g} "
+                f"in is past any shop stock of that shape (over {limit:g} in). Write the "
+                f"unit: \"{designation.strip()} mm\" if millimetres are meant, or \"... in\" "
+                "to keep inches")
+    return ""
+
+
 def _described(shape_word: str, dims_text: str, designation: str, key: str,
                material) -> Section:
     """Sections described as 'rect-tube 2 x 1 x 14ga' (inches unless a unit is written)."""
