@@ -861,3 +861,89 @@ def test_a_prefix_no_shop_puts_on_a_load_is_refused(value, says):
     with pytest.raises(InputErrors) as got:
         parse_job_text(job_text(load=f"value = {value}"))
     assert says in str(got.value)
+
+
+def _preset(name):
+    return (Path(__file__).resolve().parent.parent / "presets" / f"{name}.toml").read_text()
+
+
+def _swap(text, old, new):
+    assert old in text, old
+    return text.replace(old, new)
+
+
+def test_a_short_wood_duration_withholds_the_rating():
+    # NDS 2018 Table 2.3.2 (from memory): CD 2.0 is for impact only; a posted load stays on
+    text = ('schema = 1\ntitle = "plank shelf"\ntags = ["shelf"]\n[beam]\nlength = "10 ft"\n'
+            'section = "2x10"\nmaterial = "DF-L-2"\nbraced = true\n[[supports]]\nat = "0 ft"\n'
+            'type = "pin"\n[[supports]]\nat = "10 ft"\ntype = "roller"\n[[loads]]\n'
+            'type = "uniform"\nvalue = "-100 lbf/ft"\n[criteria]\nduration = "{d}"\n')
+    job = parse_job_text(text.replace("{d}", "impact"))
+    assert any("CD 2" in w.message and w.key == "criteria.duration" for w in warnings(job))
+    assert any("duration" in g for g in _gaps(job))
+    assert not any("duration" in g for g in _gaps(parse_job_text(text.replace("{d}", "ten-years"))))
+
+
+def test_a_monorail_hook_load_on_the_top_flange_withholds_the_rating():
+    text = _preset("monorail-hoist-beam")
+    job = parse_job_text(text)
+    assert not _gaps(job)
+    line = next(ln for ln in text.splitlines() if ln.startswith('flange = "bottom"'))
+    wheels = next(ln for ln in text.splitlines() if ln.startswith("wheels = "))
+    job = parse_job_text(text.replace(line, 'flange = "top"', 1).replace(wheels, "", 1))
+    assert any("top flange of a monorail" in g for g in _gaps(job))
+
+
+def test_a_hand_geared_profile_on_a_powered_hoist_withholds_the_rating():
+    # ASCE 7-16 4.9.3 and 4.9.4 (from memory): powered hoists take impact and lateral force
+    text = _preset("monorail-trolley")
+    text = _swap(text, 'lifting = "powered-monorail"', 'lifting = "hand-geared-monorail"')
+    assert not _gaps(parse_job_text(text))
+    title = next(ln for ln in text.splitlines() if ln.startswith("title = "))
+    job = parse_job_text(text.replace(title, 'title = "Electric monorail hoist beam"', 1))
+    assert any('"powered-monorail"' in g for g in _gaps(job))
+
+
+def test_a_rack_beam_with_fixed_ends_withholds_the_rating_but_a_rack_arm_does_not():
+    text = _preset("pallet-rack-beam-pair")
+    fixed = text.replace('type = "pin"', 'type = "fixed"').replace('type = "roller"',
+                                                                      'type = "fixed"')
+    assert fixed != text
+    assert any("rack beam with a fixed end" in g for g in _gaps(parse_job_text(fixed)))
+    assert not _gaps(parse_job_text(_preset("bar-stock-rack-arm")))
+
+
+def test_a_stainless_grade_on_a_carbon_steel_catalog_shape_withholds_the_rating():
+    job = parse_job_text(job_text(section="HSS4x4x1/4", material="304"))
+    assert any("carbon-steel catalog shape" in g for g in _gaps(job))
+
+
+@pytest.mark.parametrize("material, read_as", [("DF-L", "DF-L-2"), ("SYP", "SP-2"),
+                                               ("A53", "A53-B")])
+def test_a_species_or_spec_with_no_grade_is_warned_with_the_grade_read(material, read_as):
+    section = "Pipe4STD" if material == "A53" else "2x10"
+    job = parse_job_text(job_text(section=section, material=material))
+    (w,) = [p for p in warnings(job) if p.key == "beam.material"]
+    assert "names no grade" in w.message and repr(read_as) in w.message
+
+
+def test_a_floor_given_a_looser_limit_than_l240_is_warned():
+    # IBC Table 1604.3 (from memory): floor members L/240 total, L/360 live
+    text = _swap(_preset("mezzanine-joist"), 'deflection = "L/360"', 'deflection = "L/180"')
+    job = parse_job_text(text)
+    assert any("looser than a floor's L/240" in w.message for w in warnings(job))
+
+
+@pytest.mark.parametrize("value, says", [('"25"', 'write "25%"'), ("25", 'write "25%"')])
+def test_an_impact_typed_as_a_bare_percentage_says_to_write_the_percent_sign(value, says):
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(job_text(criteria=f"impact = {value}"))
+    assert says in str(got.value) and "2500%\")" not in str(got.value)
+
+
+def test_a_point_load_on_a_rectangular_tube_is_rated_only_on_a_full_width_seat():
+    from shopbeam.output.label import _held_words
+    job = parse_job_text(job_text(section="HSS8x4x1/8", material="A500-C"))
+    assert any("across the full width of the tube" in w for w in _held_words(job))
+    job = parse_job_text(job_text(section="W8x18", material="A992"))
+    assert not any("full width of the tube" in w for w in _held_words(job))

@@ -32,7 +32,7 @@ from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RAT
                                  guessed_profile, has_free_end)
 from shopbeam.members import catalog
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
-from shopbeam.members.materials import get as get_material, resolve_material, untempered
+from shopbeam.members.materials import get as get_material, resolve_material, untempered, ungraded
 from shopbeam.members.resolve import resolve_section
 
 SCHEMA = 1
@@ -355,7 +355,11 @@ class _Reader:
                 n = float(str(raw).strip())
             except ValueError:
                 n = None
-            if n is not None:  # a number in quotes
+            if n is not None and n > hi:  # "25": a percent with its sign left off
+                self.error(f"cannot read {raw!r} (a number in quotes): if {n:g} % is meant, "
+                           f"write \"{n:g}%\" (or {name} = {n / 100:g}); a bare number is a "
+                           f"fraction ({n:g} would be {n:.0%})", key)
+            elif n is not None:  # a number in quotes
                 self.error(f"cannot read {raw!r} (a number in quotes): write it without the "
                            f"quotes ({name} = {n:g}, read as {n:.0%}) or with a percent sign "
                            f"(\"{n * 100:g}%\")", key)
@@ -363,7 +367,11 @@ class _Reader:
                 self.error(f"cannot read {raw!r}: write a fraction such as 0.15 or \"15%\"", key)
             return None
         if not (lo <= v <= hi):
-            self.error(f"{raw!r} is outside {lo:.0%} to {hi:.0%}", key)
+            hint = (f": if {raw:g} % is meant, write \"{raw:g}%\" or {name} = {raw / 100:g} "
+                    "(a bare number is a fraction)"
+                    if isinstance(raw, (int, float)) and 1 < raw <= 100 * hi else
+                    f"; write a fraction such as 0.25 or \"25%\"")
+            self.error(f"{raw!r} is outside {lo:.0%} to {hi:.0%}{hint}", key)
             return None
         return v
 
@@ -1542,6 +1550,28 @@ def _looser_than_rack(r: _Reader, criteria: Criteria, tags, supports, length) ->
                "criteria.deflection")
 
 
+FLOOR_TAGS = frozenset({"floor", "mezzanine", "platform", "deck", "joist", "loft", "walkway",
+                        "catwalk"})
+
+
+def _looser_than_floor(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
+    """A deflection limit written on a floor, mezzanine or platform job that is looser than a
+    floor's L/240 under dead + live load (the named limit `floor`; IBC Table 1604.3, from
+    memory): warned, and the value written is used."""
+    if not criteria.deflection_given or length is None:
+        return
+    ratio, shown = _ratio_of(criteria, supports, length)
+    if not ratio or not FLOOR_TAGS.intersection(normal_tag(t) for t in tags):
+        return
+    n, _why = DEFLECTION_PRESETS["floor"]
+    if LOOSEST_COMMON_RATIO <= ratio < n:  # looser still: warned already
+        r.warn(f"deflection = {shown} is looser than a floor's L/{n:g} under dead + live load "
+               f"(with L/{LIVE_DEFLECTION_PRESETS['floor']:g} under live load; IBC Table "
+               "1604.3, from memory), and people walk on this member: the checks and the "
+               "rating use the value written; write deflection = \"floor\" for both",
+               "criteria.deflection")
+
+
 # A hoist trolley's axles are inches apart (a wheelbase of about 6 to 24 in; common
 # practice, from memory): a spacing past TROLLEY_SPACING on a lifting job is most likely
 # feet typed for inches, and it lets the axles act apart, lowering the moment.
@@ -1619,6 +1649,48 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
     if is_lifting(tags) and NOT_LIFTING in tags:
         r.warn(f"tags say both \"lifting\" and \"{NOT_LIFTING}\": it is checked and rated as "
                "a lifting device; remove the one that is wrong", "tags")
+
+
+_POWERED_WORDS = re.compile(r"\b(electric|powered|motori[sz]ed|motor[- ]driven|air hoists?|"
+                            r"pneumatic|vfd|push[- ]button|pendant|radio[- ]controlled)\b",
+                            re.IGNORECASE)
+
+
+def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags) -> None:
+    """A lifting profile the rest of the job contradicts, each of which makes the figure
+    generous: a monorail's hook load set on the top flange (a monorail trolley runs on the
+    bottom flange, so the wheel flange checks drop out), and a hand-geared profile (no impact,
+    no lateral force) on a job that says its hoist is electric or powered."""
+    name = crit_raw.get("lifting", "") if isinstance(crit_raw, dict) else ""
+    if not isinstance(name, str):
+        return
+    if name in ("powered-monorail", "hand-geared-monorail"):
+        for i, ld in enumerate(raw_loads):
+            if (_is_table(ld) and ld.get("type") == "point" and ld.get("flange") == "top"
+                    and ld.get("case", "live") == "live"):
+                r.hold(f"flange = \"top\" puts this load on the top flange, but lifting = "
+                       f"\"{name}\" is a monorail, whose trolley runs on the bottom flange: "
+                       "the wheel flange checks under it are not made, so no rating is "
+                       "posted. Remove flange (a hoist load hangs from the bottom flange by "
+                       "default), or name the profile the member really is",
+                       f"loads[{i}].flange",
+                       f"loads[{i}] is set on the top flange of a monorail (lifting = "
+                       f"\"{name}\"), whose trolley hangs from the bottom flange: the wheel "
+                       "flange checks are not made. Remove flange = \"top\"")
+    if name.startswith("hand-geared"):
+        said = _words_found(_POWERED_WORDS, title, notes, tags, raw_loads)
+        if said:
+            hint = "; ".join(said[:3])
+            powered = {"hand-geared-monorail": "powered-monorail",
+                       "hand-geared-jib": "jib-boom"}.get(name, "powered-monorail")
+            r.hold(f"lifting = \"{name}\" takes no impact and no lateral force (a hand-geared "
+                   f"hoist and trolley), but the job says it is powered ({hint}): a powered "
+                   "hoist and trolley take 25 % impact and 20 % lateral force (ASCE 7-16 "
+                   f"4.9.3 and 4.9.4, from memory), so no rating is posted. Name lifting = "
+                   f"\"{powered}\" if it is powered",
+                   "criteria.lifting",
+                   f"lifting = \"{name}\" (no impact) on a job that says its hoist is powered "
+                   f"({hint}). Name \"{powered}\" if it is")
 
 
 _BTH_WORDS = re.compile(r"\b(spreaders?(?: bars?| beams?)?|lift(?:ing)? beams?|strongbacks?|"
@@ -1787,6 +1859,28 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
            f"while parked, or the tag \"{NOT_VEHICLE}\" if it is not on a vehicle (a shelf at a "
            "truck dock)", "criteria.impact")
     return hint
+
+
+def _rack_fixed_ends(r: _Reader, tags, supports, length) -> None:
+    """A rack beam between uprights with a fixed end: its connector (a clip or hook into the
+    upright) is semi-rigid at best, rated by test (ANSI MH16.1, from memory), and far from the
+    member's full end moment, so a figure resting on a fixed end is not posted. A cantilever
+    arm, fixed to its column by design, is not meant."""
+    if not RACK_TAGS.intersection(tags) or length is None or not supports:
+        return
+    if has_free_end(supports, length):
+        return
+    fixed = [s for s in supports if s.kind == "fixed"]
+    if fixed:
+        keys = ", ".join(s.key or f"at {s.at:g} m" for s in fixed)
+        r.hold(f"a rack beam between uprights with a fixed end ({keys}): a beam connector hooked "
+               "or clipped into an upright is semi-rigid at best, its moment capacity found by "
+               "test (ANSI MH16.1, from memory), far below the full end moment a fixed end "
+               "takes, so no rating is posted on it. Make the ends pin and roller (the usual "
+               "screening assumption), or have the connector's tested moment capacity checked",
+               fixed[0].key + ".type" if fixed[0].key else "supports",
+               f"a rack beam with a fixed end ({keys}) rests on a connector moment no clip "
+               "develops. Make the ends pin and roller")
 
 
 NOT_CUT = "not-cut"  # the tag that says a job whose words read like a cut member is not one
@@ -2000,11 +2094,14 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                "\"7850 kg/m^3\" (EN 10025-2 and EN 1993-1-1 3.2, from memory)", where)
     elif mkind in ("aluminum", "stainless") and is_steel_shape(section):
         metal = "aluminium" if mkind == "aluminum" else mkind
-        r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
+        r.hold(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
                f"material {key!r} is {metal}: {metal} shapes of a similar name have other "
                "dimensions (walls, flanges, fillets), so these properties are not the "
-               "member's. Give [beam.section] with the shape and the mill's dimensions",
-               "beam.section")
+               "member's and no rating is posted on them. Give [beam.section] with the shape "
+               "and the mill's dimensions", "beam.section",
+               f"section {section.designation!r} is a carbon-steel catalog shape and the "
+               f"material is {metal}: the properties are not the member's. Give "
+               "[beam.section] with the mill's dimensions")
     if not usual:
         return ""
     # S235: fy 235 MPa up to 16 mm (EN 10025-2, from memory); the others are built in
@@ -2069,6 +2166,17 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
                 r.warn(f"{k} is not applied: the NDS factors need a rectangular wood section "
                        "(a lumber size, or shape = \"rect-bar\"), and this one is given by its "
                        "properties, so the job is NOT RATED", f"{where}.{k}")
+    if wood.DURATIONS.get(dur, (1.0,))[0] > 1.0:
+        cd, words = wood.DURATIONS[dur]
+        r.hold(f"duration = \"{dur}\" takes CD {cd:g} (NDS 2018 Table 2.3.2: {words}), so the "
+               f"wood is credited {cd:g} times its ten-year strength. That holds for a load "
+               "that comes and goes within that time, not for a load placed on the member and "
+               "left, which is what a rating label posts: no rating is posted. Write duration "
+               "= \"ten-years\" (or \"permanent\" for stock that stays on) for a rating; an "
+               "impact allowance on the load is [criteria] impact = \"25%\"",
+               "criteria.duration",
+               f"duration = \"{dur}\" credits the wood CD {cd:g} for a short-lived load; a "
+               "posted load stays on. Write duration = \"ten-years\" or \"permanent\"")
     if "duration" not in crit and (RACK_TAGS | SHELF_TAGS | {"storage"}).intersection(tags):
         r.warn("a wood rack or shelf with no duration is checked as a ten-year load (CD 1.0, "
                "NDS 2018 Table 2.3.2) with its live loads short-term for deflection; stock "
@@ -2219,7 +2327,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                     "beam.material")
         else:
             material = _resolve("material", beam["material"], "beam.material", r)
-            bare_alloy = untempered(beam["material"], material)
+            bare_alloy = untempered(beam["material"], material) or \
+                ungraded(beam["material"], material)
             if bare_alloy:
                 r.warn(bare_alloy, "beam.material")
             if material is not None and getattr(material, "source", "") == "typed in":
@@ -2329,6 +2438,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                        and section.axis == "strong"
                        and is_lifting(tags, crit_raw.get("lifting", "")
                                       if isinstance(crit_raw, dict) else ""))
+    _profile_contradicted(r, crit_raw, raw_loads, title, notes, tags)
     hung_default: list[str] = []
     contacts: dict[str, int] = {}
     lugs: list[str] = []
@@ -2427,6 +2537,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if not support_refused:
         _looser_than_lifting(r, criteria, tags, supports, length)
         _looser_than_rack(r, criteria, tags, supports, length)
+        _looser_than_floor(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     if not support_refused:
         _lifting_mismatch(r, criteria, tags, supports, length)
@@ -2437,6 +2548,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
                                  is_lifting(tags, criteria.lifting))
     _rack_hint(r, title, notes, tags, raw_loads)
+    _rack_fixed_ends(r, tags, supports, length)
     _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (

@@ -271,6 +271,32 @@ def untempered(spec, material) -> str:
             "says so, or give a [beam.material] table with its values")
 
 
+# Names of a species or specification with no grade, read as the one grade built in
+_UNGRADED = {"dfl": "the grade stamp (No.1, No.2, Select Structural; No.3 and Stud are weaker "
+                    "and not built in)",
+             "df": "the grade stamp", "douglasfir": "the grade stamp",
+             "douglasfirlarch": "the grade stamp", "hemfir": "the grade stamp",
+             "hf": "the grade stamp", "sp": "the grade stamp", "syp": "the grade stamp",
+             "southernpine": "the grade stamp", "a53": "the mill cert (Grade A is 30 ksi)"}
+
+
+def ungraded(spec, material) -> str:
+    """What to say when a species or specification was named without its grade ("DF-L",
+    "SYP", "A53") and read as the one grade built in: other grades of it are weaker."""
+    if not isinstance(spec, str) or material is None:
+        return ""
+    typed = _norm(spec)
+    if typed not in _UNGRADED:
+        return ""
+    if material.kind == "lumber":
+        strength = f"Fb {material.fb / PSI:,.0f} psi" if getattr(material, "fb", None) else ""
+    else:
+        strength = f"Fy {material.fy / KSI:g} ksi"
+    return (f"material {spec!r} names no grade and is read as {material.key!r} ({material.name}"
+            f"{', ' + strength if strength else ''}); a lower grade of it is weaker: write "
+            f"{material.key!r} if {_UNGRADED[typed]} says so, or the grade it is")
+
+
 def _norm(text: str) -> str:
     t = text.strip().lower()
     t = re.sub(r"\bastm\b", "", t)

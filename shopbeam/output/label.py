@@ -265,6 +265,20 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     return figs, notes
 
 
+def _seated_point_loads(job) -> list[str]:
+    """The live point loads that bear on the top wall of a rectangular steel HSS: the wall
+    checks take them as spread across its width (beta = 1), which the rating then rests on."""
+    from shopbeam.design.local import applies  # noqa: PLC0415 - label lines only
+
+    if getattr(job.material, "kind", "") not in ("steel", "stainless"):
+        return []
+    if applies(job.section) != "hss":
+        return []
+    hung = set(getattr(job, "hung", ()) or ())
+    return [ld.key + (f" ({ld.label})" if ld.label else "") for ld in job.loads
+            if ld.kind == "point" and ld.case == "live" and ld.key not in hung]
+
+
 def _held_words(job) -> list[str]:
     """What the rating rests on besides the member: its restraint or bracing, and a wheel
     set's travel narrower than the member (end stops)."""
@@ -281,6 +295,12 @@ def _held_words(job) -> list[str]:
             getattr(job, "braces_flange", None) or "both", "both flanges")
         out.append("RATED ONLY WITH the braces in place at "
                    + ", ".join(pos(x) for x in job.braces) + f" ({which}).")
+    seated = _seated_point_loads(job)
+    if seated:
+        out.append("RATED ONLY WHILE " + ", ".join(seated) + (" bears" if len(seated) == 1
+                                                              else " bear")
+                   + " across the full width of the tube through a cap plate or saddle (wall "
+                   "plastification under a narrower bearing, AISC 360-16 K2, is not checked).")
     lugs = getattr(job, "lugs", ())
     if lugs:
         names = [ld.key + (f" ({ld.label})" if ld.label else "") for ld in job.loads
