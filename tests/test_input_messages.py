@@ -945,3 +945,48 @@ def test_a_glulam_stress_class_is_named_as_such_and_wood_keys_are_not_called_ign
         parse_job_text(text)
     (p,) = got.value.problems
     assert p.key == "beam.material" and "glulam" in p.message
+
+
+def test_a_beam_key_written_below_the_section_header_says_to_move_it():
+    text = ('schema = 1\ntitle = "x"\n[beam]\nlength = "8 ft"\n[beam.section]\n'
+            'designation = "W8x18"\nmaterial = "A992"\n'
+            '[[supports]]\nat = "0 ft"\ntype = "fixed"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    (p,) = got.value.problems  # one message, not also "missing material"
+    assert p.key == "beam.section.material" and "move the material line above" in p.message
+
+
+def test_a_single_bracket_supports_table_beside_double_ones_says_to_double_it():
+    text = ('schema = 1\ntitle = "x"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[supports]\n'
+            'at = "8 ft"\ntype = "roller"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    assert "write [[supports]] there" in str(got.value)
+
+
+def test_a_torque_load_type_is_not_steered_to_a_couple():
+    text = ('schema = 1\ntitle = "x"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n[[loads]]\n'
+            'type = "torque"\nat = "8 ft"\nvalue = "100 lbf*ft"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    assert "takes no torsion load" in str(got.value)
+
+
+def test_a_dressed_lumber_size_points_to_its_nominal_name():
+    # NDS Supplement Table 1B: a 2x10 is dressed to 1-1/2 x 9-1/4 in
+    from shopbeam.errors import InputError
+    from shopbeam.members import catalog
+    with pytest.raises(InputError) as got:
+        catalog.lookup("1.5x9.25")
+    assert 'write "2x10"' in str(got.value)
+
+
+@pytest.mark.parametrize("top", ["-3", "0"])
+def test_size_top_must_list_something(top):
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "size", "presets/demo.toml", "--top",
+                        top], capture_output=True, text=True, timeout=120,
+                       cwd=str(__import__("pathlib").Path(__file__).resolve().parent.parent))
+    assert r.returncode == 2 and "give 1 or more" in r.stderr and "Traceback" not in r.stderr

@@ -73,6 +73,17 @@ def cmd_check(args) -> int:
     return EXIT_OK
 
 
+def _at_least_one(text: str) -> int:
+    """--top N: a whole number, 1 or more (argparse says what was wrong)."""
+    try:
+        n = int(text)
+    except ValueError:
+        raise argparse.ArgumentTypeError(f"{text!r} is not a whole number (e.g. --top 10)") from None
+    if n < 1:
+        raise argparse.ArgumentTypeError(f"{n} lists nothing: give 1 or more (e.g. --top 10)")
+    return n
+
+
 def _lazy(module: str, func: str):
     """The handler `func` of `module`, imported only when its command runs (start-up speed:
     `solve` need not import the catalog, the sizing sweep or the library)."""
@@ -236,7 +247,8 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
                    help="deepest section allowed, e.g. \"6 in\"")
     s.add_argument("--stock", default=None, metavar="FILE",
                    help="shop stock list (TOML or CSV, see docs/stock-list.md) to choose from")
-    s.add_argument("--top", type=int, default=15, metavar="N", help="how many to list (default 15)")
+    s.add_argument("--top", type=_at_least_one, default=15, metavar="N",
+                   help="how many to list (default 15)")
     s.add_argument("--confirm", type=int, default=1, metavar="N",
                    help="when the sweep screens first (moving loads, springs, hung loads, "
                         "tees and angles): how many passing sections to check in full and "

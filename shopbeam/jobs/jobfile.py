@@ -806,6 +806,10 @@ _SUPPORT_WORDS = {"pinned": "pin", "simple": "pin", "clamped": "fixed", "built-i
 def _type_hint(kind, kinds, words: dict) -> str:
     """" (did you mean 'moment'?)" for a type written another way ("couple", "Point")."""
     low = str(kind).strip().lower()
+    if low in ("torque", "torsion", "twist"):  # about the member's axis: not a bending load
+        return (" (a torque twists the member about its own axis, and shopbeam takes no "
+                "torsion load: a couple in the plane of bending is type = \"moment\"; have a "
+                "member under torsion checked)")
     near = ([low] if low in kinds else [words[low]] if low in words
             else difflib.get_close_matches(low, kinds, n=1))
     return f" (did you mean {near[0]!r}?)" if near else ""
@@ -2323,8 +2327,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             axis = None
         # the material first: it decides the design wall of tube (0.93 x nominal for A500)
         if "material" not in beam:
-            r.error("missing 'material' (a key such as \"A500-C\", or a [beam.material] table)",
-                    "beam.material")
+            if not (_is_table(beam.get("section")) and "material" in beam["section"]):
+                r.error("missing 'material' (a key such as \"A500-C\", or a [beam.material] "
+                        "table)", "beam.material")  # else: the section's message says where
         else:
             material = _resolve("material", beam["material"], "beam.material", r)
             bare_alloy = untempered(beam["material"], material) or \
@@ -2606,6 +2611,14 @@ def _twice_words(msg: str, text: str, line: int | None) -> str:
     errors)."""
     if line is None or not ("Cannot overwrite" in msg or "Cannot declare" in msg):
         return ""
+    lines = text.splitlines()
+    for name in ("supports", "loads", "moving"):  # [supports] beside [[supports]]
+        single = [i + 1 for i, x in enumerate(lines) if re.match(rf"\s*\[\s*{name}\s*\]", x)]
+        double = any(re.match(rf"\s*\[\[\s*{name}\s*\]\]", x) for x in lines)
+        if single and double:
+            return (f"[{name}] on line {single[0]} has single brackets beside [[{name}]] "
+                    f"headers: every one of the {name} is its own [[{name}]] table (double "
+                    f"brackets); write [[{name}]] there")
     lines = text.splitlines()
     here = lines[line - 1] if 0 < line <= len(lines) else ""
     head = _HEADER_LINE.match(here)

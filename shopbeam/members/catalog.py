@@ -753,6 +753,17 @@ def _not_found(designation: str, k: str | None) -> str:
                 "made; check one angle (e.g. \"L3x3x1/4\") carrying its share of the load, or "
                 "give the pair's figures in a [beam.section] table with shape = \"custom\" "
                 "(analysed, but not rated)")
+    dm = re.fullmatch(r"\s*(\d+(?:\.\d+)?)\s*(?:in|\")?\s*x\s*(\d+(?:\.\d+)?)\s*(?:in|\")?\s*",
+                      str(designation), re.IGNORECASE)
+    if dm and ("." in dm.group(1) or "." in dm.group(2)):
+        a, b = sorted((float(dm.group(1)), float(dm.group(2))))
+        nominal = next((f"{t}x{w}" for t, w in LUMBER_SIZES
+                        if all(abs(x - y) < 1e-6 for x, y in zip(dressed(t, w), (a, b)))),
+                       None)
+        said = (f"{a:g} x {b:g} in is the dressed size of a {nominal}: write \"{nominal}\""
+                if nominal else "the catalog takes lumber by its nominal size (e.g. \"2x10\")")
+        return (f"unknown section {designation!r}: {said}, or give shape = \"rect-bar\" with "
+                "its depth and width (with units) for a size of its own")
     if _GLULAM_SIZE.match(str(designation)):
         return (f"unknown section {designation!r}: glued-laminated timber (glulam) sizes are "
                 "not offered; sawn lumber (e.g. \"2x10\", \"4x12\") and LVL are, or give the "

@@ -67,6 +67,10 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
                          + ", ".join(SHAPES), f"{key}.shape")
     allowed = _KEYS[shape] | _COMMON
     for k in spec:
+        if k not in allowed and k in BEAM_KEYS:
+            raise InputError(f"{k} is read as part of [beam.section] because it comes after "
+                             "that header (a TOML table runs until the next header): move the "
+                             f"{k} line above [beam.section], into [beam]", f"{key}.{k}")
         if k not in allowed:
             raise InputError(f"unknown key {k!r} for {_a(shape)}{_suggest(k, allowed)}; "
                              f"keys are {', '.join(sorted(allowed))}", f"{key}.{k}")
@@ -100,11 +104,19 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
 
 
 _ORIENT_KEYS = {"designation", "axis", "leg", "toes", "flange", "name"}
+# [beam]'s own keys: written below a [beam.section] header, TOML puts them in the section
+BEAM_KEYS = frozenset({"length", "section", "material", "self_weight", "members", "levels",
+                       "welded", "braces", "braced", "braces_flange", "bearing", "restrained",
+                       "wet_service", "temperature", "repetitive"})
 
 
 def _catalog_table(spec, key, axis, material) -> Section:
     """``{designation = "L2x2x3/16", leg = "top"}``: a catalog section, oriented."""
     for k in spec:
+        if k not in _ORIENT_KEYS and k in BEAM_KEYS:
+            raise InputError(f"{k} is read as part of [beam.section] because it comes after "
+                             "that header (a TOML table runs until the next header): move the "
+                             f"{k} line above [beam.section], into [beam]", f"{key}.{k}")
         if k not in _ORIENT_KEYS:
             raise InputError(f"unknown key {k!r} beside a designation{_suggest(k, _ORIENT_KEYS)};"
                              f" keys are {', '.join(sorted(_ORIENT_KEYS))} (or give shape = "
