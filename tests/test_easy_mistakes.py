@@ -947,3 +947,17 @@ def test_a_point_load_on_a_rectangular_tube_is_rated_only_on_a_full_width_seat()
     assert any("across the full width of the tube" in w for w in _held_words(job))
     job = parse_job_text(job_text(section="W8x18", material="A992"))
     assert not any("full width of the tube" in w for w in _held_words(job))
+
+
+@pytest.mark.parametrize("section, axis, says", [
+    ("2x10", "strong", "2x10 ON EDGE (strong axis)"), ("2x10", "weak", "2x10 LAID FLAT"),
+    ("W8x18", "weak", "bent about its WEAK axis"), ("HSS4x4x1/4", "strong", "HSS4X4X1/4, ")])
+def test_the_label_says_how_the_member_stands(section, axis, says):
+    # a 2x10 on edge and laid flat differ 18 times in strength (S = b h^2 / 6)
+    from shopbeam.design.capacity import capacity
+    from shopbeam.output.label import rating
+    material = "DF-L-2" if section == "2x10" else ("A500-C" if "HSS" in section else "A992")
+    text = job_text(section=section, material=material).replace(
+        f'section = "{section}"', f'section = "{section}"\naxis = "{axis}"')
+    job = parse_job_text(text)
+    assert says in rating(capacity(job)).member

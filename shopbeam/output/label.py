@@ -265,6 +265,19 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     return figs, notes
 
 
+def _stands(sec) -> str:
+    """How the member stands, where it could stand two ways: a board, bar or rectangular tube
+    on edge or laid flat (18 times apart for a 2x10), and any shape bent about its weak axis."""
+    dims = getattr(sec, "dims", {}) or {}
+    if getattr(sec, "axis", "strong") == "weak":
+        return " LAID FLAT (weak axis)" if sec.shape in ("rect-bar", "rect-tube") else \
+            " bent about its WEAK axis"
+    if sec.shape in ("rect-bar", "rect-tube") and dims.get("h") and dims.get("b") and \
+            abs(dims["h"] - dims["b"]) > 1e-9:
+        return " ON EDGE (strong axis)"
+    return ""
+
+
 def _seated_point_loads(job) -> list[str]:
     """The live point loads that bear on the top wall of a rectangular steel HSS: the wall
     checks take them as spread across its width (beta = 1), which the rating then rests on."""
@@ -423,7 +436,8 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
     unch = tuple(f"{u.name}" + (f" ({u.clause})" if u.clause else "") + f": {u.reason}"
                  for u in unchecked)
     return Rating(
-        title=job.title, member=f"{job.section.designation}, {job.material.key}", span=span,
+        title=job.title, member=f"{job.section.designation}{_stands(job.section)}, "
+                                f"{job.material.key}", span=span,
         factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
         governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)],
         date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,
