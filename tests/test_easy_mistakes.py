@@ -961,3 +961,12 @@ def test_the_label_says_how_the_member_stands(section, axis, says):
         f'section = "{section}"', f'section = "{section}"\naxis = "{axis}"')
     job = parse_job_text(text)
     assert says in rating(capacity(job)).member
+
+
+def test_a_length_in_metres_on_a_job_in_feet_withholds_the_rating():
+    text = job_text().replace('length = "6 ft"', 'length = "6 m"')
+    job = parse_job_text(text)
+    (w,) = [p for p in warnings(job) if p.key == "beam.length"]
+    assert "metric units while every support and load position is in feet" in w.message
+    assert any("beam.length" not in g and "'6 m'" in g for g in _gaps(job))
+    assert not any("'6 ft'" in g for g in _gaps(parse_job_text(job_text())))

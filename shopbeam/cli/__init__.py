@@ -66,8 +66,11 @@ def cmd_check(args) -> int:
         print(p.located(), file=sys.stderr)
     from shopbeam.cautions import banner  # noqa: PLC0415 - startup
 
-    print(f"{args.job}: input OK ({len(job.supports)} supports, {len(job.loads)} loads"
-          + (f", {len(job.warnings)} warnings" if job.warnings else "") + "); the member "
+    def n(count, word):
+        return f"{count} {word}{'' if count == 1 else 's'}"
+
+    print(f"{args.job}: input OK ({n(len(job.supports), 'support')}, {n(len(job.loads), 'load')}"
+          + (f", {n(len(job.warnings), 'warning')}" if job.warnings else "") + "); the member "
           "is not checked here: run shopbeam solve for its checks")
     print(banner(job.tags, bool(job.lifting)))
     return EXIT_OK

@@ -1887,6 +1887,42 @@ def _rack_fixed_ends(r: _Reader, tags, supports, length) -> None:
                "develops. Make the ends pin and roller")
 
 
+_METRIC = re.compile(r"\d\s*(?:m|mm|cm|metres?|meters?)\b", re.IGNORECASE)
+_IMPERIAL = re.compile(r"\d\s*(?:ft|feet|foot|in|inch|inches|'|\"|\u2032|\u2033)", re.IGNORECASE)
+
+
+def _length_in_other_units(r: _Reader, data) -> None:
+    """The member's length written in one system and every position in the other ("12 m" on a
+    job whose supports and loads are all in feet): most likely the wrong unit on the length,
+    which adds an unloaded overhang whose own weight can even raise the figure."""
+    beam = data.get("beam") if _is_table(data.get("beam")) else {}
+    raw = beam.get("length")
+    if not isinstance(raw, str):
+        return
+    here = "metric" if _METRIC.search(raw) else "US" if _IMPERIAL.search(raw) else ""
+    if not here:
+        return
+    where = []
+    for name in ("supports", "loads"):
+        for t in data.get(name) or ():
+            if _is_table(t):
+                where += [v for k, v in t.items() if k in ("at", "start", "end")
+                          and isinstance(v, str)]
+    if not where:
+        return
+    other = _IMPERIAL if here == "metric" else _METRIC
+    if all(other.search(v) and not (_METRIC if here == "metric" else _IMPERIAL).search(v)
+           for v in where):
+        them = "feet and inches" if here == "metric" else "metric units"
+        r.hold(f"length = {raw!r} is in {here} units while every support and load position is "
+               f"in {them}: most likely the wrong unit on the length (it changes the member "
+               "past the last support, whose own weight can even raise the figure), so no "
+               "rating is posted. Write the length in the units of the positions",
+               "beam.length",
+               f"length = {raw!r} is in {here} units and every position in {them}: write "
+               "them in one system")
+
+
 NOT_CUT = "not-cut"  # the tag that says a job whose words read like a cut member is not one
 _CUT_WORDS = re.compile(
     r"\b(coped|copes?|coping|notch(?:ed|es)?|holes?|drilled|bored|cut-?outs?|slotted|"
@@ -2554,6 +2590,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                  is_lifting(tags, criteria.lifting))
     _rack_hint(r, title, notes, tags, raw_loads)
     _rack_fixed_ends(r, tags, supports, length)
+    _length_in_other_units(r, data)
     _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
