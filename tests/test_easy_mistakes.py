@@ -970,3 +970,11 @@ def test_a_length_in_metres_on_a_job_in_feet_withholds_the_rating():
     assert "metric units while every support and load position is in feet" in w.message
     assert any("beam.length" not in g and "'6 m'" in g for g in _gaps(job))
     assert not any("'6 ft'" in g for g in _gaps(parse_job_text(job_text())))
+
+
+def test_a_monorail_hoist_typed_off_mid_span_is_warned_that_it_travels():
+    text = _preset("monorail-hoist-beam")
+    assert not [p for p in warnings(parse_job_text(text)) if "travels" in p.message]
+    job = parse_job_text(text.replace('at = "8 ft"', 'at = "2 ft"'))
+    (w,) = [p for p in warnings(job) if "travels" in p.message]
+    assert w.key == "loads[0].at" and "[[moving]]" in w.message

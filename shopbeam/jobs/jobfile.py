@@ -1620,6 +1620,35 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
                "apply", "loads")
 
 
+def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw, supports,
+                  length, system: str) -> None:
+    """A monorail or jib hoist given as a point load at one place: the hoist travels by
+    design, and the checks and the rating are for the place written only. Warned (the label
+    says where); a [[moving]] wheel set rates every place along the travel."""
+    if moving_raw or length is None or not supports or not is_lifting(tags, criteria.lifting):
+        return
+    name = criteria.lifting or guessed_profile(supports, length)
+    if name not in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
+        return
+    hooks = [ld for ld in loads if ld.kind == "point" and ld.case == "live" and ld.key in hung]
+    held = sorted(s.at for s in supports if s.takes_force)
+    jib = "jib" in name
+    for ld in hooks[:1]:
+        if jib and held and ld.at >= held[-1] + 0.9 * (length - held[-1]):
+            return  # at the end of the reach (an end stop short of the tip)
+        if not jib and len(held) == 2 and abs(ld.at - (held[0] + held[1]) / 2) <= \
+                0.01 * (held[1] - held[0]):
+            return  # at mid-span of a single span
+        at = units.fmt(ld.at, "length", system)
+        worst = "the end stop" if jib else "mid-span"
+        device = "jib boom" if jib else "monorail"
+        r.warn(f"{ld.key} is the hoist at {at} only, but on a {device} the hoist "
+               "travels: the checks and the rating are for it there, and the label says so. "
+               f"It is usually worst at {worst} (and near the supports for shear); to rate "
+               "every place, give it as a [[moving]] wheel set (loads per axle, spacing, "
+               "travel between the end stops)", f"{ld.key}.at")
+
+
 def lifting_uniform_words(live) -> str:
     """What to say of a lifting job whose live loads are all spread (the hook load typed as a
     uniform or linear load): the reader warns it, and design.capacity posts no rating."""
@@ -2580,6 +2609,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_rack(r, criteria, tags, supports, length)
         _looser_than_floor(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
+    _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     if not support_refused:
         _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
