@@ -978,3 +978,14 @@ def test_a_monorail_hoist_typed_off_mid_span_is_warned_that_it_travels():
     job = parse_job_text(text.replace('at = "8 ft"', 'at = "2 ft"'))
     (w,) = [p for p in warnings(job) if "travels" in p.message]
     assert w.key == "loads[0].at" and "[[moving]]" in w.message
+
+
+@pytest.mark.parametrize("stiffness, says", [('"5 lbf/in"', "over 100 times softer"),
+                                             ('"1e15 lbf/in"', "acts as a rigid support")])
+def test_a_spring_far_from_the_member_s_own_stiffness_is_named(stiffness, says):
+    # 48 E I / L^3: a simple span's stiffness at mid-span (AISC Manual Table 3-23, case 7)
+    text = job_text().replace('type = "roller"', f'type = "spring"\nstiffness = {stiffness}')
+    (w,) = [p for p in warnings(parse_job_text(text)) if p.key == "supports[1].stiffness"]
+    assert says in w.message
+    ok = job_text().replace('type = "roller"', 'type = "spring"\nstiffness = "20 kip/in"')
+    assert not [p for p in warnings(parse_job_text(ok)) if "stiffness" in p.key]

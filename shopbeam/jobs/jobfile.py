@@ -1916,6 +1916,32 @@ def _rack_fixed_ends(r: _Reader, tags, supports, length) -> None:
                "develops. Make the ends pin and roller")
 
 
+def _odd_springs(r: _Reader, supports, section, material, length, system: str) -> None:
+    """A spring far softer or far stiffer than the member itself (48 E I / L^3, its stiffness
+    at mid-span on two supports): a unit slip ("5 lbf/in" for 5 kip/in) makes the member ride
+    on the spring, which a bigger section will not cure; a huge one is a rigid support."""
+    if section is None or material is None or not length:
+        return
+    own = 48 * material.e * section.ix / length ** 3
+    for sp in supports:
+        if sp.kind != "spring" or not sp.stiffness:
+            continue
+        k = units.fmt(sp.stiffness, "stiffness", system)
+        if sp.stiffness < own / 100:
+            r.warn(f"the spring at {units.fmt(sp.at, 'length', system)} ({k}) is over 100 times "
+                   f"softer than the member itself (48 E I / L^3 = "
+                   f"{units.fmt(own, 'stiffness', system)}): the member rides on it, and a "
+                   "deflection or rating that fails there is the spring's settling, which a "
+                   "bigger section will not cure. Check its stiffness and unit (kip/in, not "
+                   "lbf/in?)", f"{sp.key}.stiffness")
+        elif sp.stiffness > own * 1e6:
+            r.warn(f"the spring at {units.fmt(sp.at, 'length', system)} ({k}) is a million times "
+                   f"stiffer than the member (48 E I / L^3 = "
+                   f"{units.fmt(own, 'stiffness', system)}): it acts as a rigid support; write "
+                   "type = \"roller\" (or \"pin\") if that is meant, or check the unit",
+                   f"{sp.key}.stiffness")
+
+
 _METRIC = re.compile(r"\d\s*(?:m|mm|cm|metres?|meters?)\b", re.IGNORECASE)
 _IMPERIAL = re.compile(r"\d\s*(?:ft|feet|foot|in|inch|inches|'|\"|\u2032|\u2033)", re.IGNORECASE)
 
@@ -2621,6 +2647,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _rack_hint(r, title, notes, tags, raw_loads)
     _rack_fixed_ends(r, tags, supports, length)
     _length_in_other_units(r, data)
+    _odd_springs(r, supports, section, material, length, system)
     _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
         if ws.wheel_edge is not None and section is not None and not (
