@@ -129,3 +129,15 @@ def test_missing_file(tmp_path):
     with pytest.raises(InputError) as exc:
         load_stock(tmp_path / "nope.toml")
     assert "not found" in exc.value.problem.message
+
+
+def test_a_row_whose_section_cannot_be_made_in_its_material_is_refused_with_its_line():
+    # as a job file refuses a W shape in wood; a carbon-steel catalog shape in aluminium has
+    # properties that are not the member's
+    text = ("section,material\nW8x18,A992\nW6x12,DF-L-2\nHSS6x4x1/4,6061-T6\n2x10,A36\n")
+    with pytest.raises(InputErrors) as exc:
+        parse_stock(text, "csv", file="s.csv")
+    got = {p.line: p.message for p in exc.value.problems}
+    assert sorted(got) == [3, 4, 5]
+    assert "not made in wood" in got[3] and "carbon-steel catalog shape" in got[4]
+    assert "lumber size" in got[5]

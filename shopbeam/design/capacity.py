@@ -151,6 +151,21 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     return tuple(out)
 
 
+def other_metal_on_steel_shape(sec, material) -> str:
+    """A carbon-steel catalog shape given an aluminium or stainless grade: shapes of those
+    metals with a similar name have other dimensions, so the properties are not the
+    member's ("" otherwise)."""
+    from shopbeam.members.catalog import is_steel_shape  # noqa: PLC0415
+
+    kind = getattr(material, "kind", "")
+    if kind not in ("aluminum", "stainless") or sec is None or not is_steel_shape(sec):
+        return ""
+    metal = "aluminium" if kind == "aluminum" else kind
+    return (f"section {sec.designation!r} is a carbon-steel catalog shape and the material is "
+            f"{metal}: {metal} shapes of a similar name have other dimensions, so the "
+            "properties are not the member's. Give [beam.section] with the mill's dimensions")
+
+
 def rating_gaps(job, st) -> tuple[str, ...]:
     """`not_rated_reasons` of the member and the job alone, without a solve's self-checks (a
     sizing sweep asks it of sections it never solves one by one)."""
@@ -172,6 +187,9 @@ def rating_gaps(job, st) -> tuple[str, ...]:
     if gap:
         out.append(gap)
     gap = wood_gap(getattr(st, "section", None) or job.section, job.material)
+    if gap:
+        out.append(gap)
+    gap = other_metal_on_steel_shape(getattr(st, "section", None) or job.section, job.material)
     if gap:
         out.append(gap)
     mixed = kind_mismatch(job.material, job.units)

@@ -2189,14 +2189,11 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                "\"7850 kg/m^3\" (EN 10025-2 and EN 1993-1-1 3.2, from memory)", where)
     elif mkind in ("aluminum", "stainless") and is_steel_shape(section):
         metal = "aluminium" if mkind == "aluminum" else mkind
-        r.hold(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
+        r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
                f"material {key!r} is {metal}: {metal} shapes of a similar name have other "
                "dimensions (walls, flanges, fillets), so these properties are not the "
                "member's and no rating is posted on them. Give [beam.section] with the shape "
-               "and the mill's dimensions", "beam.section",
-               f"section {section.designation!r} is a carbon-steel catalog shape and the "
-               f"material is {metal}: the properties are not the member's. Give "
-               "[beam.section] with the mill's dimensions")
+               "and the mill's dimensions", "beam.section")
     if not usual:
         return ""
     # S235: fy 235 MPa up to 16 mm (EN 10025-2, from memory); the others are built in
