@@ -532,3 +532,25 @@ def test_posted_kilograms_never_exceed_the_posted_force():
         kn = float(f.value.split()[0]) * 1000
         kg = float(f.value.split("(")[1].split()[0])
         assert kg * 9.80665 <= kn * (1 + 1e-12) and kn <= value
+
+
+def test_a_load_given_per_area_is_posted_per_area_first():
+    # the posted area load times the tributary width is the posted line load (no more than
+    # it), in the unit the job was written in
+    from pathlib import Path
+
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.output.label import rating
+    text = (Path(__file__).resolve().parent.parent / "presets" / "mezzanine-joist.toml").read_text()
+    job = parse_job_text(text)
+    r = rating(capacity(job))
+    area, line = r.figures[0], r.figures[1]
+    assert area.label == "MAX AREA LOAD" and "psf" in area.value
+    assert line.label == "MAX UNIFORM LOAD"
+    live = next(ld for ld in job.loads if ld.case == "live")
+    width = job.widths[live.key]
+    assert width == pytest.approx(24 * 0.0254)  # the preset's width = "24 in"
+    # both rounded down from the same exact figure: area x width within rounding of the line
+    assert area.exact * width == pytest.approx(line.exact, rel=1e-12)
+    assert area.si <= area.exact and line.si <= line.exact

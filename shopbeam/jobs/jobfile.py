@@ -162,6 +162,8 @@ class Job:
     vehicle_hint: str = ""
     # other reasons the reader found to post no rating, each warned too (see _Reader.hold)
     holds: tuple[str, ...] = ()
+    # the tributary width (m) of each load given per area (psf x width), by load key
+    widths: dict = field(default_factory=dict)
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -267,6 +269,7 @@ class _Reader:
         self.cuts: list[str] = []  # keys that say the member is notched, coped or holed
         self.factors: list[str] = []  # keys that read like a safety factor shopbeam ignores
         self.holds: list[str] = []  # why no rating may be posted, each said in a warning too
+        self.widths: dict[str, float] = {}  # tributary width (m) of each load given per area
 
     def hold(self, message: str, key: str, reason: str):
         """Warn, and withhold the rating for `reason` (capacity.rating_gaps lists it)."""
@@ -1097,6 +1100,7 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         if width is None:
             return None
         w1, w2 = w1 * width, w2 * width
+        r.widths[key] = width
         raw = ld["value"] if kind == "uniform" else " to ".join(ld["value"])
         conversions.append((key, f"{raw} x {ld['width']} tributary width", w1 if kind == "uniform" else None))
     elif "width" in ld:
@@ -2687,6 +2691,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
         factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint, holds=tuple(r.holds),
+        widths=dict(r.widths),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )

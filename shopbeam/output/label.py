@@ -151,6 +151,11 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
 
     if len(live) == 1 and not mv and live[0].kind == "uniform":
         ld = live[0]
+        width = (getattr(job, "widths", None) or {}).get(ld.key)
+        if width:  # given per area: post it per area first, in the unit it was written in
+            figs.append(posted("MAX AREA LOAD", ld.w1 * k / width, "area_load", sy,
+                               f"over {pos(width)} tributary width, {pos(ld.start)} to "
+                               f"{pos(ld.end)}", where))
         w = posted("MAX UNIFORM LOAD", ld.w1 * k, "line_load", sy,
                    f"over {pos(ld.start)} to {pos(ld.end)}", where)
         figs.append(w)
