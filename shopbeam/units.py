@@ -521,4 +521,7 @@ def fmt_check(value: float, unit: str, system: str = "us", wood: bool = False) -
     if wood and unit == "Pa" and system == "us":
         return f"{num(value / PSI)} psi"
     kind = CHECK_KINDS.get(unit)
-    return fmt(value, kind, system) if kind else f"{num(value)} {unit}"
+    if kind:
+        return fmt(value, kind, system)
+    # an interaction sum or other pure number: three decimals, no unit to print
+    return f"{value:.3f}" if not unit.strip() else f"{num(value)} {unit}"

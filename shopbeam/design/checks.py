@@ -1055,7 +1055,8 @@ def _span_deflection(st: Strengths, sol: Solution, a: float, b: float, kind: str
     else:
         n = ratio or st.defl_ratio
         limit = deflection_limit(a, b, kind, n, None)
-        rule = f"{'2 x ' if judged != length else ''}{kind} length / {n:g}"
+        rule = (f"2 x {kind} length / {n:g}, i.e. its tip may move {kind} length / {n / 2:g}"
+                if judged != length else f"{kind} length / {n:g}")
     ex = sol.deflection.extremes(a, b)
     return {"start": a, "end": b, "kind": kind, "demand": ex.abs_max, "limit": limit,
             "at": ex.abs_max_at, "rule": rule}
