@@ -313,7 +313,7 @@ def resolve_job(job, library_dir=None) -> Path:
             if not near and str(p.parent) in ("", ".") and p.stem:
                 try:
                     names = sorted({e.name for e in entries(library_dir)})
-                    near = [f"{n} (library name)" for n in _near(p.stem, names)]
+                    near = [f"{n} (library name)" for n in _near(p.stem, names, cutoff=0.65)]
                 except (InputError, OSError):
                     near = []
             _missing(text, near)
