@@ -1867,12 +1867,13 @@ def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
 
 _VEHICLE_WORDS = re.compile(
     r"\b(trailers?|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
-    r"vehicles?|chassis|car haulers?|cargo decks?|vans?|utes?|pickups?|"
+    r"vehicles?|chassis|car haulers?|cargo decks?|vans?|utes?|pickup (?:ladder )?(?:racks?|box(?:es)?)|"
     r"service bod(?:y|ies)|headache racks?|ladder racks? (?:on|for) (?:a|the) (?:truck|van)|"
     r"bus (?:luggage|racks?|shel(?:f|ves))|luggage racks?|rvs?|campers?|motor ?homes?|"
     r"caravans?|tow dolly|tow dollies|fork ?lift (?:attachments?|forks?|extensions?|"
     r"booms?|jibs?|platforms?|carriages?)|fork extensions?|skid ?steers?|telehandlers?|"
-    r"tractors?|boat (?:racks?|bunks?))\b", re.IGNORECASE)
+    r"tractor (?:attachments?|loaders?|booms?|forks?|buckets?|frames?)|"
+    r"boat (?:racks?|bunks?))\b", re.IGNORECASE)
 NOT_VEHICLE = "not-vehicle"  # the tag that says a job that reads like one is not on a vehicle
 
 
