@@ -990,3 +990,14 @@ def test_size_top_must_list_something(top):
                         top], capture_output=True, text=True, timeout=120,
                        cwd=str(__import__("pathlib").Path(__file__).resolve().parent.parent))
     assert r.returncode == 2 and "give 1 or more" in r.stderr and "Traceback" not in r.stderr
+
+
+@pytest.mark.parametrize("top", ["loads = 5", "supports = 3", "loads = \"x\"", "moving = 1"])
+def test_a_table_key_given_a_plain_value_is_a_message_not_a_crash(top):
+    text = ('schema = 1\ntitle = "x"\n' + top + '\n[beam]\nlength = "10 ft"\n'
+            'section = "W8x18"\nmaterial = "A992"\n')
+    if not top.startswith("supports"):
+        text += '[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    assert got.value.problems

@@ -1964,7 +1964,8 @@ def _length_in_other_units(r: _Reader, data) -> None:
         return
     where = []
     for name in ("supports", "loads"):
-        for t in data.get(name) or ():
+        rows = data.get(name)
+        for t in rows if isinstance(rows, list) else ():
             if _is_table(t):
                 where += [v for k, v in t.items() if k in ("at", "start", "end")
                           and isinstance(v, str)]
