@@ -75,11 +75,13 @@ class InputErrors(Exception):
 class UnstableBeam(Exception):
     """The supports and hinges let the beam move as a rigid body or a mechanism."""
 
-    def __init__(self, message: str, file: str = ""):
+    def __init__(self, message: str, file: str = "", line: int | None = None):
         super().__init__(message)
         self.file = file
+        self.line = line  # the first [[supports]] header's line, where the layout starts
 
     def __str__(self) -> str:
         msg = super().__str__()
-        where = f"{self.file}: supports: " if self.file else ""
+        at = f":{self.line}" if self.line is not None and self.file else ""
+        where = f"{self.file}{at}: supports: " if self.file else ""
         return f"{where}unstable beam: {msg}"

@@ -223,3 +223,12 @@ def test_json_of_a_patterned_job_carries_the_governing_state():
         assert "patterned loads on span" in e["max_down_state"]
     # the loads as entered (all spans loaded) stay the contract's reactions: no uplift there
     assert d["reactions"][0]["force"] > 0
+
+
+def test_an_unstable_layout_names_the_file_and_the_supports_line(tmp_path):
+    p = tmp_path / "cant.toml"
+    p.write_text('schema = 1\ntitle = "arm"\n[beam]\nlength = "4 ft"\nsection = "W8x18"\n'
+                 'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n')
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "solve", str(p)], capture_output=True,
+                       text=True, timeout=120)
+    assert r.returncode != 0 and f"{p}:7: supports: unstable beam" in r.stderr

@@ -195,7 +195,8 @@ def analyze(job: Job) -> Result:
         sol = sound_solve(job.beam(), length_formatter(job.units), file=job.path or "")
         entered = sol  # the loads as entered (a moving-load job shows its governing state)
     except UnstableBeam as e:
-        raise UnstableBeam(e.args[0], file=job.path or "") from None
+        raise UnstableBeam(e.args[0], file=job.path or "",
+                           line=getattr(job, "supports_line", None)) from None
     except InputError as e:
         if not e.problem.file:
             e.problem.file = job.path or ""

@@ -164,6 +164,7 @@ class Job:
     holds: tuple[str, ...] = ()
     # the tributary width (m) of each load given per area (psf x width), by load key
     widths: dict = field(default_factory=dict)
+    supports_line: int | None = None  # the first [[supports]] header's line, for messages
     path: str = ""
     warnings: tuple[Problem, ...] = ()
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
@@ -2693,7 +2694,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
         factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint, holds=tuple(r.holds),
-        widths=dict(r.widths),
+        widths=dict(r.widths), supports_line=r.line_for("supports[0]"),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
     )
