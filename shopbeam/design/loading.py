@@ -1461,8 +1461,11 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None, pos
                               or job.section, lifting.profile_of(job), impact_of(job))
     # the extreme candidates of every position's four functions in one batched pass (the
     # same per function as each solve's own pass: each row's search depends on that row)
+    # (and the moment of each flange-as-beam, which the lateral check reads the extremes of)
     find_candidates([s.function(n) for _, s in sols
-                     for n in ("shear", "moment", "slope", "deflection")])
+                     for n in ("shear", "moment", "slope", "deflection")]
+                    + [s.__dict__["_flange"][1].moment for _, s in sols
+                       if "_flange" in s.__dict__])
     yield from sols
 
 
