@@ -44,6 +44,7 @@ from __future__ import annotations
 
 import math
 from dataclasses import dataclass, replace
+from functools import lru_cache
 
 import numpy as np
 
@@ -92,21 +93,24 @@ def profile_of(job) -> Profile | None:
             return None
         name = guessed_profile(job.supports, job.length)
         guessed = True
+    given = getattr(job.criteria, "category", "") or ""
+    cat = (given or "B") if LIFTING_PROFILES[name]["nd"] else ""
+    # every check of every load state asks: the profile is built once per distinct answer
+    return _profile(name, guessed, cat, bool(given), _own_basis(job))
+
+
+@lru_cache(maxsize=64)
+def _profile(name: str, guessed: bool, cat: str, cat_given: bool, own: str) -> Profile:
     p = LIFTING_PROFILES[name]
-    nd = None
-    cat = ""
-    if p["nd"]:
-        cat = getattr(job.criteria, "category", "") or "B"
-        nd = p["nd"][cat]
+    nd = p["nd"][cat] if p["nd"] else None
     words = (f"lifting profile {name}" + (" (picked for tags = [\"lifting\"]: the most "
                                           "demanding that fits)" if guessed else "")
              + f": impact {p['impact']:.0%} ({p['impact_source']}); lateral "
              f"{p['lateral']:.0%} ({p['lateral_source']}); longitudinal {p['longitudinal']:.0%} "
              f"({p['longitudinal_source']}); "
              + (f"design factor Nd {nd:g}, ASME BTH-1 Category {cat} (3-1.3, from memory)"
-                + (" (category not given: B, the stricter)"
-                   if not getattr(job.criteria, "category", "") else "")
-                if nd else f"the member's own safety factors ({_own_basis(job)})")
+                + (" (category not given: B, the stricter)" if not cat_given else "")
+                if nd else f"the member's own safety factors ({own})")
              + f"; deflection {p['deflection_source']}")
     return Profile(name, p["impact"], p["lateral"], p["longitudinal"], nd, p["deflection"],
                    words, guessed)
