@@ -313,9 +313,14 @@ def _snap(positions: np.ndarray, L: float) -> np.ndarray:
     starts = np.zeros(p.shape[0], bool)
     if p.size:
         starts[0] = True
-        gaps = np.flatnonzero(np.diff(p) > tol) + 1
-        if gaps.size == p.size - 1:  # every gap wide: nothing to merge, nothing moves
+        dp = np.diff(p)
+        wide = dp > tol
+        if wide.all():  # every gap wide: nothing to merge, nothing moves
             return positions.copy()
+        if not (dp[~wide] != 0).any():
+            # only equal positions to merge (a load on a support, the ends given twice): the
+            # loop below would start a cluster at exactly the wide gaps
+            starts[1:] = wide
         else:
             lead = p[0]
             for i in range(1, p.size):  # a cluster is never wider than tol (no chains)
@@ -441,6 +446,21 @@ def solve(beam: Beam, length_fmt=None, exact: bool | None = None,
     return sol
 
 
+def _unique_inverse(a: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """`np.unique(a, return_inverse=True)` of a flat float array, the same steps without its
+    wrapper's cost (every solve of a moving-load state sets up its breaks)."""
+    perm = a.argsort(kind="quicksort")
+    aux = a[perm]
+    if not aux.size or np.isnan(aux[-1]):
+        return np.unique(a, return_inverse=True)
+    mask = np.empty(aux.shape, dtype=bool)
+    mask[:1] = True
+    np.not_equal(aux[1:], aux[:-1], out=mask[1:])
+    inv = np.empty(mask.shape, dtype=np.intp)
+    inv[perm] = np.cumsum(mask) - 1
+    return aux[mask], inv
+
+
 def _setup(beam: Beam):
     """The unknowns, breaks and bracket-term jumps of one beam: (unknowns, index, breaks,
     where, t_pow, t_col, t_coef, jumps, sup_break)."""
@@ -461,7 +481,7 @@ def _setup(beam: Beam):
                      + [sup_at[u.support] if u.support >= 0 else u.at for u in unknowns], float)
     t_pow = np.array([t[2] for t in terms] + [u.power for u in unknowns], dtype=int)
     t_col = np.concatenate([np.zeros(len(terms), int), np.arange(1, nz + 1)])
-    breaks, where = np.unique(np.concatenate([[0.0, L], t_pos]), return_inverse=True)
+    breaks, where = _unique_inverse(np.concatenate([[0.0, L], t_pos]))
     where = where[2:]
     jumps = np.zeros((len(breaks), _NLEV, nz + 1))
     # each term c<x-a>^n jumps state level -n by c (ramps n = 1 jump q' by c)
