@@ -1062,6 +1062,19 @@ def _span_deflection(st: Strengths, sol: Solution, a: float, b: float, kind: str
             "at": ex.abs_max_at, "rule": rule}
 
 
+def segment_strength(fl, l1: float, cb: float, free: bool, why: str) -> tuple[float, str]:
+    """(Mn, words) of one unbraced length with its Cb (`bending_check`; the allowable is
+    Mn / Omega_b): it reads no loads but through Cb."""
+    if cb * l1 < fl.cap and fl.ltb is not None and fl.ltb[0] == "ADM":
+        return l1, f"{why} (governs over {fl.cap_text})"
+    if cb * l1 < fl.cap and not fl.uses_cb:
+        return l1, f"{fl.cap_text}; {why}"
+    if cb * l1 < fl.cap:
+        return (float(nominal_moment(fl.cap, l1, cb)),
+                f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else ""))
+    return fl.cap, fl.cap_text
+
+
 def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Check:
     """The bending check of one solved load state (the first of `checks_for`), alone: for
     callers that read only it (the allowable moment, one length's check)."""
@@ -1077,15 +1090,7 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
         else:
             q = [abs(float(m(a + f * (b - a)))) for f in (0.25, 0.5, 0.75)]
             cb = cb_factor(mmax, *q)
-        if cb * l1 < fl.cap and fl.ltb is not None and fl.ltb[0] == "ADM":
-            mn, text = l1, f"{why} (governs over {fl.cap_text})"
-        elif cb * l1 < fl.cap and not fl.uses_cb:
-            mn, text = l1, f"{fl.cap_text}; {why}"
-        elif cb * l1 < fl.cap:
-            mn = float(nominal_moment(fl.cap, l1, cb))
-            text = f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
-        else:
-            mn, text = fl.cap, fl.cap_text
+        mn, text = segment_strength(fl, l1, cb, free, why)
         allow = mn / fl.omega
         r = mmax / allow if allow > 0 else math.inf
         if worst is None or r > worst[0]:

@@ -35,7 +35,7 @@ import numpy as np
 
 from shopbeam import units
 from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_points, cb_factor,
-                                    checks_for, impact_of, profile_of)
+                                    segment_strength, checks_for, impact_of, profile_of)
 from shopbeam.design.checks import strengths as strengths_of
 from shopbeam.engine.model import Beam, Load
 from shopbeam.errors import InputError
@@ -1401,8 +1401,16 @@ def _lateral(job, ss, st, mv, k, static_loads):
     # (capacity asks at several factors)
     cache = ss.__dict__.setdefault("_mcx", {})
     got = cache.get(id(st))
+    fl = st.flexure
     if got is not None and got[0] is st:
         unit, limit = got[1]
+    elif len(st.ltb_segments) == 1 and not getattr(fl, "special", False):
+        # the bending check's allowable of its one length at Cb 1.0, without a state solved
+        # for it (`bending_check` takes the same steps: Mn / Omega_b, over S on a stress basis)
+        _, _, free, l1, why = st.ltb_segments[0]
+        allow = segment_strength(fl, l1, 1.0, free, why)[0] / fl.omega
+        unit, limit = ("Pa", allow / fl.stress_s) if fl.stress_s else ("N*m", allow)
+        cache[id(st)] = (st, (unit, limit))
     else:
         wheels = [Load("point", at=mv.travel[0] + s, value=d + k * (1 + ss.parts.impact) * f,
                        label=mv.label, key=mv.key)
