@@ -301,24 +301,30 @@ def solve_flanges(job, sols, sec, prof: Profile, impact: float) -> None:
         got = _flange_loads(job, sol, sec, prof, impact)
         if got is not None:
             beams.append(replace(sol.beam, ei=1.0, loads=tuple(got[1])))
-            owners.append(sol)
+            owners.append((sol, got))
     if not beams:
         return
-    for sol, beam, flange in zip(owners, beams, solve_each(beams)):
-        sol.__dict__["_flange"] = (beam, flange)
+    for (sol, got), beam, flange in zip(owners, beams, solve_each(beams)):
+        # with what it was worked out from: `lateral_check` with the same takes it as it is
+        sol.__dict__["_flange"] = (beam, flange, (job, sec, prof, impact), got)
 
 
 def lateral_check(job, sol, sec, mat, prof: Profile, impact: float, mcx: float):
     """AISC 360-16 H1-1b with the lateral trolley force on the bottom flange (see module doc)."""
     if not steel_flange(mat):
         return None  # aluminium: not covered (`lifting_unchecked`)
-    got = _flange_loads(job, sol, sec, prof, impact)
-    if got is None:
-        return None
-    wheels, lat = got
-    beam = replace(sol.beam, ei=1.0, loads=tuple(lat))
     kept = sol.__dict__.get("_flange")  # solved with the other positions (solve_flanges)
-    flange = kept[1] if kept is not None and kept[0] == beam else solve(beam, candidates=False)
+    if kept is not None and kept[2][0] is job and kept[2][1] is sec and kept[2][2] == prof \
+            and kept[2][3] == impact:
+        (wheels, lat), flange = kept[3], kept[1]
+    else:
+        got = _flange_loads(job, sol, sec, prof, impact)
+        if got is None:
+            return None
+        wheels, lat = got
+        beam = replace(sol.beam, ei=1.0, loads=tuple(lat))
+        flange = kept[1] if kept is not None and kept[0] == beam else \
+            solve(beam, candidates=False)
     mny, how = flange_weak_strength(sec, mat)
     mcy = mny / 1.67
     # the sum |Mx| / Mcx + |My| / Mcy peaks at a wheel, a support (a cantilever's root, a
