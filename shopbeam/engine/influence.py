@@ -432,17 +432,43 @@ def strip_unknowns(inf: Influence, cells: Cells, loads) -> np.ndarray:
     """(strips, NV, unknowns): every unknown of the solve under the wheel set (forces +
     up) as a cubic in p - strip start, on each strip (the sum over wheels of each wheel's
     cubic, shifted to the strip's start)."""
-    b = inf.breaks
-    m = cells.strip_m
-    p0 = cells.strip_p0
-    Z = np.zeros((len(p0), NV, inf.z.shape[2]))
+    Z = np.zeros((len(cells.strip_p0), NV, inf.z.shape[2]))
+    shifts = _geometry(inf, cells)["wheels"]
     for i, P in enumerate(loads):
         if P == 0:
             continue
-        mi = m[:, i]
-        Sv = _shift_matrix(p0 + cells.offsets[i] - b[mi], NV)
-        Z += P * (np.swapaxes(Sv, 1, 2) @ inf.z[mi])
+        mi, SvT = shifts[i]
+        Z += P * (SvT @ inf.z[mi])
     return Z
+
+
+def _geometry(inf: Influence, cells: Cells) -> dict:
+    """What `cell_polys` and `strip_unknowns` read of the cells and the bare beam alone (no
+    loads): the same arrays for every quantity, load combination and factor, so worked out
+    once per (cells, influence) and kept on the cells."""
+    kept = cells.__dict__.setdefault("_geometry", {})
+    got = kept.get(id(inf))
+    if got is not None and got[0] is inf:
+        return got[1]
+    b = inf.breaks
+    m = cells.strip_m
+    wheels = []
+    for i in range(m.shape[1]):
+        mi = m[:, i]
+        wheels.append((mi, np.swapaxes(_shift_matrix(cells.strip_p0 + cells.offsets[i] - b[mi],
+                                                     NV), 1, 2)))
+    ns = len(cells.strip_p0)
+    pair = cells.k * ns + cells.strip
+    order = np.argsort(pair, kind="stable")
+    first = np.ones(len(pair), bool)
+    first[1:] = pair[order][1:] != pair[order][:-1]
+    inv = np.empty(len(pair), int)
+    inv[order] = np.cumsum(first) - 1
+    geo = {"wheels": wheels, "ns": ns, "keys": pair[order][first], "inv": inv,
+           "SxT": np.swapaxes(_shift_matrix(cells.xr - b[cells.k], NU), 1, 2),
+           "Sv": _shift_matrix(cells.p0 - cells.strip_p0[cells.strip], NV)}
+    kept[id(inf)] = (inf, geo)  # the influence kept too: an id is not reused while held
+    return geo
 
 
 def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None,
@@ -473,22 +499,13 @@ def cell_polys(inf: Influence, cells: Cells, name: str, static: Piecewise | None
     if not np.any(loads):
         F[cells.wp <= 0, :, 1:] = 0.0
         return _to_unit(F, cells)
-    b = inf.breaks
     Z = strip_unknowns(inf, cells, loads)  # (strips, NV, unknowns)
     phi = inf.phi(level)  # (pieces, NU, unknowns)
     # Phi_k(t) Z_s(sigma) once per (piece, strip) pair, then shifted to each cell's origin
-    ns = len(cells.strip_p0)
-    pair = cells.k * ns + cells.strip
-    order = np.argsort(pair, kind="stable")
-    first = np.ones(len(pair), bool)
-    first[1:] = pair[order][1:] != pair[order][:-1]
-    keys = pair[order][first]
-    inv = np.empty(len(pair), int)
-    inv[order] = np.cumsum(first) - 1
-    C = np.einsum("kiu,kju->kij", phi[keys // ns], Z[keys % ns])[inv]
-    Sx = _shift_matrix(u0 - b[cells.k], NU)
-    Sv = _shift_matrix(cells.p0 - cells.strip_p0[cells.strip], NV)
-    F += np.swapaxes(Sx, 1, 2) @ (C @ Sv)
+    geo = _geometry(inf, cells)
+    ns, keys = geo["ns"], geo["keys"]
+    C = np.einsum("kiu,kju->kij", phi[keys // ns], Z[keys % ns])[geo["inv"]]
+    F += geo["SxT"] @ (C @ geo["Sv"])
     # the wheels left of the cell: T(y0 + s), y0 = xr - p0, s = (x - xr) - (p - p0)
     npow = level - 1
     j = cells.nleft
