@@ -307,13 +307,13 @@ def _snap(positions: np.ndarray, L: float) -> np.ndarray:
     further than that; each cluster takes the value of its earliest entry (so 0 and L,
     given first, stay exact); a lone position is never moved.
     """
-    order = np.argsort(positions, kind="stable")
+    order = positions.argsort(kind="stable")
     p = positions[order]
     tol = SNAP * L
     starts = np.zeros(p.shape[0], bool)
     if p.size:
         starts[0] = True
-        dp = np.diff(p)
+        dp = p[1:] - p[:-1]
         wide = dp > tol
         if wide.all():  # every gap wide: nothing to merge, nothing moves
             return positions.copy()
@@ -327,7 +327,7 @@ def _snap(positions: np.ndarray, L: float) -> np.ndarray:
                 if p[i] - lead > tol:
                     starts[i] = True
                     lead = p[i]
-    first = np.flatnonzero(starts)
+    first = starts.nonzero()[0]
     reps = positions[np.minimum.reduceat(order, first)]
     out = np.empty_like(positions)
     out[order] = reps[np.cumsum(starts) - 1]
@@ -486,7 +486,7 @@ def _setup(beam: Beam):
     jumps = np.zeros((len(breaks), _NLEV, nz + 1))
     # each term c<x-a>^n jumps state level -n by c (ramps n = 1 jump q' by c)
     np.add.at(jumps, (where, -t_pow + 1, t_col), t_coef)
-    sup_break = {i: int(np.searchsorted(breaks, x)) for i, x in sup_at.items()}
+    sup_break = {i: int(breaks.searchsorted(x)) for i, x in sup_at.items()}
     return unknowns, index, breaks, where, t_pow, t_col, t_coef, jumps, sup_break
 
 
@@ -573,7 +573,7 @@ def _solve(beam: Beam, length_fmt, exact: bool | None, candidates: bool = True) 
 
 
 def _finite(sol: Solution) -> bool:
-    return (all(np.all(np.isfinite(f.coeffs)) for f in
+    return (all(np.isfinite(f.coeffs).all() for f in
                 (sol.load, sol.shear, sol.moment, sol.slope, sol.deflection))
             and all(math.isfinite(r.force) and math.isfinite(r.moment) for r in sol.reactions))
 
