@@ -249,3 +249,46 @@ def test_moving_envelope_kept_parts_give_what_a_fresh_state_set_gives():
                                 pattern=())
     assert a == b
     assert any(key[0] == "lateral" for key in a.extremes)
+
+
+def test_kept_flange_serves_only_the_loads_it_was_solved_for():
+    # the flange-as-beam kept with a batched state is used only for the same job, section,
+    # profile and impact; any other asks for its own loads (a stale one would be wrong)
+    job, ss, st_, states = trolley_states()
+    sec = job.section
+    prof = lifting.profile_of(job)
+    for _, sol in states[:3]:
+        mcx = bending_check(job, sol, st_, cb_one=True).limit
+        for impact, p in ((0.5, prof), (impact_of(job), replace(prof, lateral=0.1))):
+            got = lifting.lateral_check(job, sol, sec, job.material, p, impact, mcx)
+            fresh = replace(sol)
+            assert got == lifting.lateral_check(job, fresh, sec, job.material, p, impact, mcx)
+            assert got.demand != lifting.lateral_check(job, sol, sec, job.material, prof,
+                                                       impact_of(job), mcx).demand
+
+
+@pytest.mark.parametrize("section", ["S10x25.4", "S8x23", "W12x26", "W8x10"])
+def test_lateral_mcx_read_without_a_solve_is_the_bending_checks(section):
+    # one unbraced length: Mcx of the lateral check is the bending check's allowable,
+    # whatever the loads (read from the strength alone, no state solved for it)
+    text = (PRESETS / "monorail-trolley.toml").read_text()
+    job = parse_job_text(text.replace('section = "S10x25.4"', f'section = "{section}"'))
+    ss = loading.state_set(job)
+    st_ = strengths(job, beam=ss.beam)
+    assert len(st_.ltb_segments) == 1
+    got = loading._lateral(job, ss, st_, ss.parts.moving[0], 1.0, ss.static_loads(1.0, ()))
+    sol = solve(job.beam())
+    mcx = bending_check(job, sol, st_, cb_one=True).limit
+    mny, _ = lifting.flange_weak_strength(job.section, job.material)
+    assert got[1] == mcx / (mny / 1.67)
+
+
+def test_lifting_profile_follows_the_category():
+    text = (PRESETS / "monorail-trolley.toml").read_text()
+    text = text.replace('lifting = "powered-monorail"', 'lifting = "below-the-hook"')
+    a = lifting.profile_of(parse_job_text(text + 'category = "A"\n'))
+    b = lifting.profile_of(parse_job_text(text + 'category = "B"\n'))
+    none = lifting.profile_of(parse_job_text(text))
+    assert (a.nd, b.nd, none.nd) == (2.0, 3.0, 3.0)  # ASME BTH-1 3-1.3 (from memory)
+    assert "category not given" in none.words and "category not given" not in b.words
+    assert "Category A" in a.words
