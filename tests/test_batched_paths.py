@@ -292,3 +292,25 @@ def test_lifting_profile_follows_the_category():
     assert (a.nd, b.nd, none.nd) == (2.0, 3.0, 3.0)  # ASME BTH-1 3-1.3 (from memory)
     assert "category not given" in none.words and "category not given" not in b.words
     assert "Category A" in a.words
+
+
+@pytest.mark.parametrize("supports", [
+    (("pin", 0.0), ("roller", 16.0)),
+    (("fixed", 0.0),),
+    (("pin", 2.0), ("roller", 9.0), ("roller", 14.5)),
+    (("fixed", 0.0), ("roller", 11.0)),
+    (("pin", 0.0), ("spring", 8.0), ("roller", 16.0)),
+    (("fixed", 0.0), ("hinge", 7.0), ("roller", 16.0)),
+])
+def test_flange_influence_is_the_one_solved_at_ei_one(supports):
+    # the lateral check's flange-as-beam (EI 1) takes the beam's own influence data where
+    # EI enters none of its unknowns: number for number what solving it at EI 1 gives
+    sups = tuple(Support(at=a * 0.3048, kind=k, stiffness=2e6 if k == "spring" else 0.0)
+                 for k, a in supports)
+    beam = Beam(16 * 0.3048, 2.1e6, sups, ())
+    got = loading.flange_influence(beam, loading.influence(beam))
+    alone = loading.influence(replace(beam, ei=1.0))
+    assert got.beam == alone.beam and got.reaction_cols == alone.reaction_cols
+    for name in ("breaks", "z", "kind", "at"):
+        assert np.array_equal(getattr(got, name), getattr(alone, name))
+    assert np.array_equal(got.phi(2), alone.phi(2))

@@ -1085,6 +1085,17 @@ def beam_influence(ss: StateSet):
     return cache["v"]
 
 
+def flange_influence(beam: Beam, inf):
+    """The influence data of the flange-as-beam (the bare beam with EI 1) from the beam's own
+    `inf`: the unknowns per unit load are found in EI times slope and deflection, so EI
+    enters them only through springs (k / EI) and hinge rotations (stored over EI, read back
+    times EI); without either they are the same numbers, and the moment is read at EI 1."""
+    flat = replace(beam, ei=1.0)
+    if any(s.kind in ("spring", "hinge") for s in beam.supports):
+        return influence(flat)
+    return replace(inf, beam=flat)
+
+
 def wheel_forces(mv: MovingLoad, kk: float) -> np.ndarray:
     return np.array([d + kk * f for f, d in zip(mv.live, mv.dead)])
 
@@ -1165,7 +1176,7 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         lat_loads, ratio = lat
         cache_f = ss.__dict__.setdefault("_influence", {})
         if "flange" not in cache_f:  # the flange-as-beam of the check (EI 1)
-            cache_f["flange"] = influence(replace(ss.beam, ei=1.0))
+            cache_f["flange"] = flange_influence(ss.beam, inf)
         inf_f = cache_f["flange"]
         Fy = cell_polys(inf_f, cells, "moment", None, lat_loads)
         for s in (1.0, -1.0):  # the check takes the sum at the wheels, the supports and
