@@ -370,3 +370,23 @@ async def test_a_save_right_after_typing_does_not_quote_the_old_answer(tmp_path,
         assert notes and not any("still has" in n for n in notes), notes
         await settle(pilot)
     assert 'title = "Rack beam"' in job.read_text(encoding="utf-8")
+
+
+CTRL_T, CTRL_X = "\x14", "\x18"
+
+
+@pytest.mark.parametrize("fast", [True, False])
+@sync
+async def test_keys_right_behind_ctrl_x_never_edit_the_neighbouring_row(fast):
+    # a point load added (ctrl+t), typed into, removed (ctrl+x), and more keys behind it:
+    # the field would now show the row before it (the stair at 15 ft), which must not change
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("escape", "3")
+        await settle(pilot)
+        before = app.job_screen.session.doc.text()
+        await send(pilot, CTRL_T + "3 ft 7 in" + CTRL_X + "abc", fast)
+        s = app.job_screen.session
+        assert s.doc.text() == before  # the added row is gone; no other row changed
+        assert 'at = "15 ft"' in s.doc.text() and "abc" not in s.doc.text()

@@ -291,6 +291,7 @@ class JobScreen(Screen):
 
     async def action_view(self, vid: str) -> None:
         self.flush_typing()
+        self._switched = (vid, time.monotonic())
         switcher = self.query_one(ContentSwitcher)
         if not switcher.query(f"#{vid}"):
             cls = next(v[4] for v in VIEWS if v[0] == vid)
@@ -390,6 +391,12 @@ class JobScreen(Screen):
         said = self._where(where)
         if self._stray and said != self._stray_where:
             self._say_not_typed()
+        if not self._stray:  # a burst's first stray key: right behind a view key?
+            vid, at = self._switched
+            name = next((v[2] for v in VIEWS if v[0] == vid), vid)
+            self._stray_after = (f" (typed right behind the key that switched to the {name} "
+                                 "view: a digit with no field picked changes views)"
+                                 if vid and time.monotonic() - at < self.STRAY_WAIT else "")
         self._stray += character
         self._stray_where = said
         if self._stray_timer is not None:
@@ -399,6 +406,8 @@ class JobScreen(Screen):
     _stray = ""
     _stray_where = ""
     _stray_timer = None
+    _stray_after = ""
+    _switched = ("", 0.0)  # the last view switched to, and when (time.monotonic)
 
     def _say_not_typed(self) -> None:
         text, self._stray = self._stray, ""
@@ -406,7 +415,8 @@ class JobScreen(Screen):
         if not text.strip():
             return  # spaces alone: nothing worth a notice
         self.app.bell()
-        self.notify(f"Not typed anywhere: \"{escapes.shown(text)}\". The focus was on "
+        self.notify(f"Not typed anywhere: \"{escapes.shown(text)}\"{self._stray_after}. "
+                    "The focus was on "
                     f"{self._stray_where}, not in a text field. Tab goes to the next field; "
                     "F2 to F12 change views.", title="keys not used", severity="warning",
                     timeout=10, markup=False)
@@ -891,6 +901,13 @@ class JobScreen(Screen):
         self.session.remove_row(table, index)
         view = self.query_one("#span" if table == "supports" else "#loads", RowsView)
         view.selected = max(0, index - 1)
+        # a field of the removed row would now show its neighbour's value: keys typed right
+        # behind ctrl+x must not edit that row, so the focus goes to the list (they are
+        # then said as not typed anywhere)
+        if self.focused is not None and view in self.focused.ancestors and \
+                isinstance(self.focused, FieldInput):
+            lists = view.query(RowList)
+            self.set_focus(lists.first() if lists else view)
         self.notify(f"removed {table[:-1]} {index + 1} - ctrl+z puts it back", timeout=8)
         self.changed()
 
