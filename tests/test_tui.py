@@ -19,6 +19,7 @@ from shopbeam.tui.screens import (AnswerScreen, ConfirmScreen, ConflictScreen,  
 from shopbeam.tui.widgets import Field  # noqa: E402
 
 READ = AnswerScreen.READ_TIME  # a question takes answers only after this long on screen
+ALONE = AnswerScreen.ALONE + 0.1  # a letter answers once no key has followed it this long
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
 SIZE = (100, 32)
@@ -113,6 +114,7 @@ async def test_two_span_shelf_from_scratch_reads_its_reactions():
         assert isinstance(app.screen, LengthScreen)
         await pilot.pause(READ)
         await pilot.press("s")
+        await pilot.pause(ALONE)
         await settle(pilot)
         assert [r["at"] for r in s.rows("supports")] == ["0 ft", "10 ft"]
         # self-weight left out so the reactions are the entered load alone
@@ -208,6 +210,7 @@ async def test_bad_entry_shows_the_problem_beside_the_field_and_keeps_the_job():
         assert isinstance(app.screen, LengthScreen)
         await pilot.pause(READ)
         await pilot.press("e")  # the ends stay at the ends
+        await pilot.pause(ALONE)
         await settle(pilot)
         # what sat at the old end (15 ft: the stair load, the deck's end) went to the new
         # end; the post at 12 ft did not move
@@ -270,6 +273,7 @@ async def test_save_conflict_shows_the_diff_and_can_overwrite(tmp_path):
         assert "# theirs" in app.screen.conflict.diff
         await pilot.pause(READ)  # a key made sooner is not taken as the answer
         await pilot.press("o")
+        await pilot.pause(ALONE)
         await pilot.pause()
         assert isinstance(app.screen, JobScreen)
         assert 'title = "Mine"' in path.read_text(encoding="utf-8")
@@ -304,6 +308,7 @@ async def test_quit_with_unsaved_changes_asks_first():
         await pilot.press("ctrl+q")
         await pilot.pause(READ)
         await pilot.press("d")
+        await pilot.pause(ALONE)
         await pilot.pause()
     assert app.return_code == 0 or app.return_code is None
 
@@ -374,6 +379,7 @@ async def test_library_search_and_the_guard_on_opening_another_job():
         assert isinstance(app.screen, ConfirmScreen)  # unsaved changes: asked first
         await pilot.pause(READ)
         await pilot.press("d")
+        await pilot.pause(ALONE)
         await pilot.pause()
         s = app.job_screen.session
         assert s.name == "jib-arm" and not s.dirty

@@ -425,6 +425,7 @@ async def test_the_length_question_leaves_the_safety_caution_in_sight(tmp_path):
         assert type(top).__name__ == "Banner" and SHORT in str(top.render())
         await pilot.pause(app.screen.READ_TIME)
         await burst(pilot, "k")
+        await pilot.pause(0.4)  # a letter answers once no key follows it
         await pilot.press("f1")
         await settle(pilot)
         assert type(app.screen).__name__ == "HelpScreen"
@@ -549,6 +550,7 @@ async def test_a_new_length_asks_nothing_by_itself_so_a_burst_goes_on_into_the_n
         assert type(app.screen).__name__ == "LengthScreen"
         await pilot.pause(app.screen.READ_TIME)
         await burst(pilot, "e")
+        await pilot.pause(0.4)  # a letter answers once no key follows it
         assert type(app.screen).__name__ == "JobScreen"
         assert s.rows("loads")[3]["at"] == "16 ft" and s.rows("loads")[0]["end"] == "16 ft"
         assert [dict(r) for r in s.rows("supports")] == supports  # 0 ft and 12 ft stay
@@ -616,5 +618,30 @@ async def test_a_quit_question_read_and_answered_still_takes_its_key(tmp_path):
         assert f.input.value == "Changedd"
         await pilot.pause(app.screen.READ_TIME)
         await burst(pilot, "d")
+        await pilot.pause(0.4)  # a letter answers once no key follows it
         await pilot.pause()
     assert app.return_code in (0, None) and not app.is_running
+
+
+@sync
+async def test_a_word_typed_on_after_the_quit_question_opened_is_text_not_its_answer(tmp_path):
+    # a slow link delivers a word typed on after ctrl+q once the question has been up longer
+    # than READ_TIME: its "d" is part of the word (keys right behind one another), not
+    # "discard"; the word goes on into the field, and the question stays
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "notes")
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        await burst(pilot, " - 400 lb more" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        await pilot.pause(app.screen.READ_TIME + 0.2)
+        await burst(pilot, "; delivered")
+        await pilot.pause(0.5)
+        assert app.is_running and type(app.screen).__name__ == "ConfirmScreen"
+        assert f.input.value.endswith(" - 400 lb more; delivered")
+        await burst(pilot, "d" + "o")  # even a word that starts with the answer letter
+        await pilot.pause(0.5)
+        assert app.is_running and f.input.value.endswith("; delivereddo")

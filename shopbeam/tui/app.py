@@ -1088,6 +1088,8 @@ class JobScreen(Screen):
 class ShopbeamApp(App):
     """The application: one job screen, with the library shown first when asked."""
 
+    _last_key_at: float | None = None  # when the key before this one was made
+
     CSS_PATH = "app.tcss"
     TITLE = "shopbeam"
     ENABLE_COMMAND_PALETTE = False
@@ -1141,10 +1143,27 @@ class ShopbeamApp(App):
             focused = self.focused
             js = getattr(self, "job_screen", None)
             on_job = js is not None and self.screen is js
-            if js is not None and isinstance(self.screen, AnswerScreen) \
-                    and self.screen.too_early(event):
-                await js.key_behind(event)  # typed before the question could be read
-                return
+            now = getattr(event, "time", None)
+            gap = None if now is None or self._last_key_at is None else now - self._last_key_at
+            if now is not None:
+                self._last_key_at = now
+            if js is not None and isinstance(self.screen, AnswerScreen):
+                question = self.screen
+                held = question.release() if event.key != "escape" else None
+                if held is not None:  # a key right behind a letter answer: both were text
+                    await js.key_behind(held)
+                    await js.key_behind(event)
+                    return
+                if question.too_early(event, gap):
+                    await js.key_behind(event)  # typed before it could be read, or text
+                    return
+                if event.is_printable and event.key in question.answer_keys():
+                    key = event.key
+                    question.hold(event, lambda: self.call_later(
+                        question.run_action, next(b.action for b in question.BINDINGS
+                                                  if key in [k.strip() for k in
+                                                             b.key.split(",")])))
+                    return
             if isinstance(focused, Choice) and event.is_printable \
                     and focused.type_letter(event.character):
                 return  # chosen now, not queued behind a save typed next

@@ -111,16 +111,55 @@ class AnswerScreen(ModalScreen[str]):
     (`JobScreen.key_behind`), as if the dialog had come after them."""
 
     READ_TIME = 0.5  # seconds: shorter than anyone reads a question and answers it
+    # A letter that answers is a key pressed on its own: one that comes within ALONE of the
+    # key before it, or has another key within ALONE behind it, is part of a word being
+    # typed (a slow link delivers a word typed before the question could be seen after it
+    # opened) and goes on to the field behind, with the keys around it
+    ALONE = 0.3  # seconds
 
     def __init__(self) -> None:
         super().__init__()
         self.opened_at = _time.get_time()
+        self.held = None  # a letter answer waiting ALONE to see that no key follows it
+        self._held_timer = None
 
-    def too_early(self, event) -> bool:
-        """`event` (a key) was made before this question could have been read. Esc is
-        always taken: it answers with the choice that changes nothing."""
-        return event.key != "escape" and \
-            getattr(event, "time", self.opened_at) < self.opened_at + self.READ_TIME
+    def too_early(self, event, gap: float | None = None) -> bool:
+        """`event` (a key) was made before this question could have been read, or is text
+        typed on (a printable key right behind another, or one that answers nothing). Esc
+        is always taken: it answers with the choice that changes nothing."""
+        if event.key == "escape":
+            return False
+        if getattr(event, "time", self.opened_at) < self.opened_at + self.READ_TIME:
+            return True
+        if not event.is_printable:
+            return False
+        if gap is not None and gap < self.ALONE:
+            return True
+        return event.key not in self.answer_keys()
+
+    def answer_keys(self) -> set[str]:
+        keys = set()
+        for b in self.BINDINGS:
+            keys |= {k.strip() for k in b.key.split(",")} - {"escape"}
+        return keys
+
+    def hold(self, event, run) -> None:
+        """Keep a letter answer for ALONE: `run` answers then, unless a key comes first."""
+        self.held = event
+        self._held_timer = self.set_timer(self.ALONE, lambda: self._answer_held(run))
+
+    def _answer_held(self, run) -> None:
+        if self.held is not None:
+            self.held = None
+            run()
+
+    def release(self):
+        """The letter held back (a key came behind it: it was text), or None."""
+        event, self.held = self.held, None
+        if self._held_timer is not None:
+            self._held_timer.stop()
+            self._held_timer = None
+        return event
 
 
 class ConfirmScreen(AnswerScreen):
