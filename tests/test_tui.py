@@ -443,3 +443,35 @@ async def test_esc_then_digit_typed_fast_in_a_field_changes_view_and_types_nothi
         await pilot.pause()
         assert app.job_screen.current == "results"
         assert field(app, "job", "title").value == before
+
+
+@sync
+async def test_a_sizing_sweep_that_ends_while_typing_elsewhere_leaves_the_focus_there(
+        monkeypatch):
+    # the sweep runs in a worker (slowed here so it ends while the user is typing in
+    # another view); an Enter there must not pick a section from the hidden sizing list
+    import time
+
+    from shopbeam.tui import slow
+    real = slow.size_rows
+
+    def slowly(*args, **kwargs):
+        time.sleep(0.6)
+        return real(*args, **kwargs)
+
+    monkeypatch.setattr(slow, "size_rows", slowly)
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("escape", "s", "r")  # sizing view, run the sweep
+        await pilot.press("6")  # criteria, while it runs
+        f = field(app, "criteria", "criteria.deflection")
+        f.input.focus()
+        await settle(pilot)  # the sweep has ended
+        await app.workers.wait_for_complete()
+        await pilot.pause()
+        assert app.focused is f.input
+        before = job_screen(app).session.doc.get("beam.section")
+        await pilot.press("enter")
+        await settle(pilot)
+        assert job_screen(app).session.doc.get("beam.section") == before

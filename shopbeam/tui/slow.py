@@ -320,7 +320,11 @@ class SizingView(View):
         lst = self.query_one("#size-list", OptionList)
         lst.clear_options()
         lst.add_options([Option(Text(text), id=des) for des, text in rows])
-        if rows:
+        # the list takes the focus only if this view still has it: a sweep that ends while
+        # the user types in another view must not pull the keys (an Enter would pick a
+        # section) away from the field they are typing in
+        focused = self.app.focused
+        if rows and self.display and (focused is None or self in focused.ancestors_with_self):
             lst.focus()
 
     def on_option_list_option_selected(self, event: OptionList.OptionSelected) -> None:
