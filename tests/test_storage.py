@@ -159,7 +159,12 @@ def test_new_file_never_overwrites_silently(tmp_path):
     storage.save_text(target, OLD)
     with pytest.raises(storage.NameTaken) as info:
         storage.save_text(target, "other\n")
-    assert info.value.reason == "exists" and '+title = "old text"' in info.value.diff
+    # the diff says what overwriting would change: the file there now against the new text
+    assert info.value.reason == "exists" and '-title = "old text"' in info.value.diff
+    assert "+other" in info.value.diff
+    with pytest.raises(storage.NameTaken) as same:
+        storage.save_text(target, OLD)
+    assert same.value.diff == ""  # the same text: nothing would change
     assert target.read_text(encoding="utf-8") == OLD
     storage.save_text(target, "other\n", overwrite=True)
     assert target.read_text(encoding="utf-8") == "other\n"

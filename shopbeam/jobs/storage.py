@@ -237,7 +237,8 @@ class SaveConflict(Exception):
     `reason` is "changed" (someone changed the file since it was opened), "deleted"
     (someone removed it since) or "exists" (saving a new file to a name that is taken).
     `diff` is a unified diff from the text the caller opened to the text on disk now
-    (for "exists", from nothing to the file on disk). The caller can offer to save under a
+    (for "exists", from the file on disk to the text that would replace it). The caller can
+    offer to save under a
     new name, or to overwrite after the user has seen the diff (`overwrite=True`).
     """
 
@@ -546,7 +547,7 @@ def save_text(path: str | os.PathLike, text: str, base: Opened | None = None, *,
         if reviewed is not None:
             _check_reviewed(real, reviewed)
         elif not force:
-            _check(real, base)
+            _check(real, base, text)
         fp = atomic_write(real, text)
     return Opened(p, text, fp)
 
@@ -590,13 +591,15 @@ def _nolock():
     yield
 
 
-def _check(p: Path, base: Opened | None) -> None:
+def _check(p: Path, base: Opened | None, text: str | None = None) -> None:
     got = _read(p)
     if base is None or base.fingerprint is None:
         if got is not None:
             on_disk = got[0].decode("utf-8", "replace")
-            raise NameTaken(p, "exists", unified_diff("", on_disk, "/dev/null", str(p)),
-                            on_disk, got[1])
+            # what overwriting would change: the file there now against the text to write
+            diff = (unified_diff(on_disk, text, f"{p} (on disk now)", f"{p} (yours)")
+                    if text is not None else unified_diff("", on_disk, "/dev/null", str(p)))
+            raise NameTaken(p, "exists", diff, on_disk, got[1])
         return
     if got is None:
         raise SaveConflict(p, "deleted", unified_diff(base.text, "", f"{p} (when opened)",

@@ -294,7 +294,9 @@ class ConflictScreen(AnswerScreen):
         c = self.conflict
         with Vertical(classes="dialog", id="conflict"):
             yield Static(f"Not saved: {c.message()}", markup=False)
-            yield Static("What is in the file on disk now, against what you opened:",
+            yield Static("What overwriting would change: the file on disk now, against "
+                         "yours:" if c.reason == "exists" else
+                         "What is in the file on disk now, against what you opened:",
                          markup=False)
             with VerticalScroll(id="conflict-diff"):
                 yield Static(c.diff or "(no differences to show)", markup=False)
