@@ -660,12 +660,20 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
         out.append(("max point load", _floor_fmt(abs(live[0].value) * k, "force", sy)))
         out.append(("at", units.fmt(live[0].at, "length", sy)))
     else:
-        out.append(("max load", f"{k:.3f} x the entered live loads"))
+        shown = math.floor(k * 1000 * (1 + 1e-12)) / 1000  # rounded DOWN, as posted
+        if shown > k:
+            shown = math.floor(k * 1000) / 1000
+        out.append(("max load", f"{shown:.3f} x the entered live loads"))
         tot = sum(abs(ld.total_force) for ld in live)
         if mv:
-            wheels = job.moving[0].live
-            out.append(("moving", _floor_fmt(sum(abs(w) for w in wheels) * k, "force", sy)
-                        + f" ({mv[0].label})"))
+            wheels = [abs(w) * k for w in job.moving[0].live]
+            # as the label: axles alike take the whole set from the posted axle figure, so
+            # the two agree and neither is more than its exact value
+            if wheels and max(wheels) - min(wheels) <= 1e-9 * max(wheels):
+                whole = _floor_si(max(wheels), "force", sy) * len(wheels)
+            else:
+                whole = sum(wheels)
+            out.append(("moving", _floor_fmt(whole, "force", sy) + f" ({mv[0].label})"))
         if tot:
             out.append(("static live", _floor_fmt(tot * k, "force", sy) + " total"))
     if job.members > 1:
