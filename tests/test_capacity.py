@@ -256,3 +256,37 @@ def test_the_posted_factor_and_moving_total_are_rounded_down_as_the_label_posts_
     shown = float(lines["max load"].split(" x")[0])
     assert shown <= res.factor < shown + 0.001
     assert lines["moving"].startswith("29.6 kN")
+
+
+def test_the_json_static_total_is_the_sum_of_the_posted_figures_as_on_the_label():
+    # three live loads: each posted figure is rounded down, and the total is their sum
+    # rounded down (never the exact total's rounding, which can be more than the label's)
+    from shopbeam.design.capacity import capacity, max_load_lines
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.output.label import rating
+    job = parse_job_text(
+        'schema = 1\ntitle = "two hoppers"\ntags = ["not-lifting"]\n[beam]\nlength = "12 ft"\n'
+        'section = "W8x18"\nmaterial = "A992"\nbraced = true\nrestrained = true\n'
+        '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "12 ft"\ntype = "roller"\n'
+        '[[loads]]\ntype = "point"\nat = "4 ft"\nvalue = "-3 kip"\nlabel = "A"\n'
+        '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-2 kip"\nlabel = "B"\n'
+        '[[loads]]\ntype = "uniform"\nstart = "2 ft"\nend = "10 ft"\nvalue = "-100 lbf/ft"\n'
+        'label = "C"\n')
+    res = capacity(job)
+    total = next(f for f in rating(res).figures if f.label == "TOTAL")
+    assert dict(max_load_lines(res))["static live"] == total.value + " total"
+
+
+def test_json_has_no_negative_zero(tmp_path):
+    # a cantilever under a tip couple alone: no vertical force anywhere, so 0.0, not -0.0
+    import subprocess
+    import sys
+    p = tmp_path / "c.toml"
+    p.write_text('schema = 1\ntitle = "arm"\n[beam]\nlength = "4 ft"\nsection = "W8x18"\n'
+                 'material = "A992"\nself_weight = false\n[[supports]]\nat = "0 ft"\n'
+                 'type = "fixed"\n[[loads]]\ntype = "moment"\nat = "4 ft"\n'
+                 'value = "-2000 lbf*ft"\n')
+    out = subprocess.run([sys.executable, "-m", "shopbeam", "solve", str(p), "--json"],
+                         capture_output=True, text=True, timeout=120).stdout
+    import re
+    assert '"force": 0.0' in out and not re.search(r"-0\.0(?![0-9])", out)

@@ -169,3 +169,23 @@ def test_deflection_scales_with_one_over_ei(beam, factor):
                 + [abs(ld.value) / beam.length for ld in beam.loads if ld.kind == "moment"] + [1e-300])
     for r1, r2 in zip(s1.reactions, s2.reactions):
         assert abs(r1.force - r2.force) <= 1e-9 * scale
+
+
+def test_a_tie_between_symmetric_turning_points_names_the_first():
+    # three equal spans under a uniform load: the end spans' largest sagging moments are
+    # equal (0.08 w L^2, AISC Manual Table 3-23 case 36, from memory); the place named is the
+    # first, not whichever the last bit of the arithmetic favours
+    import pytest
+
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.design.analysis import analyze
+    job = parse_job_text(
+        'schema = 1\ntitle = "3 spans"\nunits = "si"\n[beam]\nlength = "12 m"\n'
+        'section = "W8x18"\nmaterial = "A992"\nself_weight = false\n'
+        + "".join(f'[[supports]]\nat = "{x} m"\ntype = "{t}"\n'
+                  for x, t in ((0, "pin"), (4, "roller"), (8, "roller"), (12, "roller")))
+        + '[[loads]]\ntype = "uniform"\nvalue = "-4 kN/m"\n')
+    ex = analyze(job).solution.extremes()
+    assert ex["moment"].max == pytest.approx(0.08 * 4000 * 16)
+    assert ex["moment"].max_at == pytest.approx(1.6)
+    assert ex["deflection"].min_at < 4.0

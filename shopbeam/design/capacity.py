@@ -675,7 +675,10 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
                 whole = sum(wheels)
             out.append(("moving", _floor_fmt(whole, "force", sy) + f" ({mv[0].label})"))
         if tot:
-            out.append(("static live", _floor_fmt(tot * k, "force", sy) + " total"))
+            # as the label's TOTAL: the sum of each force load's posted (rounded down) figure
+            parts = sum(_floor_si(abs(ld.total_force) * k, "force", sy) for ld in live
+                        if ld.kind != "moment")
+            out.append(("static live", _floor_fmt(min(parts, tot * k), "force", sy) + " total"))
     if job.members > 1:
         out.append(("shared by", f"{job.members} identical members"))
     if impact_of(job):

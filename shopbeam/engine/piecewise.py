@@ -234,20 +234,24 @@ TIE = 1e-12
 
 
 def _pick(xs: np.ndarray, vs: np.ndarray, breaks: np.ndarray, extra: tuple, upper: bool) -> int:
-    """Index of the largest (upper) or smallest value. Where an interior turning point and a
-    break (or an end of the range asked for, `extra`) tie to rounding, the break is where the
-    extreme is: a flat turning point (a triple root of the derivative, as at the tip of a
+    """Index of the largest (upper) or smallest value. Of values equal to rounding, the first
+    break (or end of the range asked for, `extra`) in order of position is where the extreme
+    is, else the first turning point: a flat turning point (a triple root of the derivative, as at the tip of a
     cantilever under a load tapering to nothing) is found only to the cube root of the
     rounding, so its position is noise."""
     i = int(np.argmax(vs) if upper else np.argmin(vs))
-    if len(xs) < 2 or _at_break(float(xs[i]), breaks, extra):
+    if len(xs) < 2:
         return i
     tol = TIE * float(np.abs(vs).max())
     tied = np.flatnonzero((vs >= vs[i] - tol) if upper else (vs <= vs[i] + tol))
+    if len(tied) == 1:
+        return i
     for j in tied:  # in order of position: the first break that ties
         if _at_break(float(xs[j]), breaks, extra):
             return int(j)
-    return i
+    # equal to rounding at several turning points (a symmetric beam's two spans): the
+    # first, so the place named does not turn on the last bit of the arithmetic
+    return int(tied[0])
 
 
 def _at_break(x: float, breaks: np.ndarray, extra: tuple) -> bool:
