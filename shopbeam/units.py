@@ -75,7 +75,8 @@ KINDS: dict[str, tuple[str, str, str]] = {
 
 # Kinds where a weight (mass) unit is read as the force of that mass under standard gravity:
 # shop people say "500 lb" and "200 kg" for loads.
-_WEIGHT_OK = {"force": "kg", "line_load": "kg/m", "area_load": "kg/m^2", "moment": "kg*m"}
+_WEIGHT_OK = {"force": "kg", "line_load": "kg/m", "area_load": "kg/m^2", "moment": "kg*m",
+              "stiffness": "kg/m", "rot_stiffness": "kg*m/rad"}
 # Kinds where a force unit is read as mass under standard gravity (lbf/ft^3 for density).
 _MASS_FROM_FORCE = {"density": "N/m^3", "mass_per_length": "N/m"}
 

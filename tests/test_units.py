@@ -115,3 +115,9 @@ def test_a_compound_force_is_read_largest_first_only():
     assert units.parse("1 kip 500 lbf", "force") == pytest.approx(1500 * 4.4482216152605)
     with pytest.raises(InputError):
         units.parse("500 lbf 1 kip", "force")
+
+
+def test_a_spring_stiffness_in_pounds_reads_as_loads_do():
+    # "lb" is read as a pound-force for loads ("-400 lb"); a stiffness written "lb/in" alike
+    assert units.parse("2000 lb/in", "stiffness") == pytest.approx(2000 * LBF / IN)
+    assert units.parse("100 lb*ft/rad", "rot_stiffness") == pytest.approx(100 * LBF * FT)
