@@ -1542,17 +1542,27 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
                "profile's limit", "criteria.deflection")
 
 
+def _looser_than_named(criteria: Criteria, tags, supports, length, tagset, name):
+    """(n, the limit as written) when a job tagged with one of `tagset` writes a deflection
+    limit looser than the named limit `name`'s L/n (but not looser than any common limit,
+    warned already); else None."""
+    if not criteria.deflection_given or length is None:
+        return None
+    ratio, shown = _ratio_of(criteria, supports, length)
+    if not ratio or not tagset.intersection(normal_tag(t) for t in tags):
+        return None
+    n = DEFLECTION_PRESETS[name][0]
+    return (n, shown) if LOOSEST_COMMON_RATIO <= ratio < n else None
+
+
 def _looser_than_rack(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
     """A deflection limit written on a storage-rack job that is looser than rack practice's
     L/180 (the named limit `rack`), or an absolute one that amounts to that: warned, and the
     value written is used."""
-    if not criteria.deflection_given:
-        return
-    ratio, shown = _ratio_of(criteria, supports, length)
-    if not ratio or not RACK_TAGS.intersection(normal_tag(t) for t in tags):
-        return
-    n, why = DEFLECTION_PRESETS["rack"]
-    if LOOSEST_COMMON_RATIO <= ratio < n:  # looser still: warned already
+    got = _looser_than_named(criteria, tags, supports, length, RACK_TAGS, "rack")
+    if got:
+        n, shown = got
+        why = DEFLECTION_PRESETS["rack"][1]
         r.warn(f"deflection = {shown} is looser than the L/{n:g} of storage-rack "
                f"beams ({why.split(' (', 1)[1].rstrip(')')}): the checks and the rating use the "
                f"value written; write \"L/{n:g}\" (or deflection = \"rack\") for rack practice",
@@ -1567,13 +1577,9 @@ def _looser_than_floor(r: _Reader, criteria: Criteria, tags, supports, length) -
     """A deflection limit written on a floor, mezzanine or platform job that is looser than a
     floor's L/240 under dead + live load (the named limit `floor`; IBC Table 1604.3, from
     memory): warned, and the value written is used."""
-    if not criteria.deflection_given or length is None:
-        return
-    ratio, shown = _ratio_of(criteria, supports, length)
-    if not ratio or not FLOOR_TAGS.intersection(normal_tag(t) for t in tags):
-        return
-    n, _why = DEFLECTION_PRESETS["floor"]
-    if LOOSEST_COMMON_RATIO <= ratio < n:  # looser still: warned already
+    got = _looser_than_named(criteria, tags, supports, length, FLOOR_TAGS, "floor")
+    if got:
+        n, shown = got
         r.warn(f"deflection = {shown} is looser than a floor's L/{n:g} under dead + live load "
                f"(with L/{LIVE_DEFLECTION_PRESETS['floor']:g} under live load; IBC Table "
                "1604.3, from memory), and people walk on this member: the checks and the "
