@@ -35,6 +35,7 @@ from shopbeam.design.connections import fixed_end_moments, hinge_shears
 from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
+from shopbeam.members.catalog import other_metal_on_steel_shape
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
@@ -149,21 +150,6 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     if bad:
         out.append("a self-check of the solve did not pass (" + ", ".join(bad) + ")")
     return tuple(out)
-
-
-def other_metal_on_steel_shape(sec, material) -> str:
-    """A carbon-steel catalog shape given an aluminium or stainless grade: shapes of those
-    metals with a similar name have other dimensions, so the properties are not the
-    member's ("" otherwise)."""
-    from shopbeam.members.catalog import is_steel_shape  # noqa: PLC0415
-
-    kind = getattr(material, "kind", "")
-    if kind not in ("aluminum", "stainless") or sec is None or not is_steel_shape(sec):
-        return ""
-    metal = "aluminium" if kind == "aluminum" else kind
-    return (f"section {sec.designation!r} is a carbon-steel catalog shape and the material is "
-            f"{metal}: {metal} shapes of a similar name have other dimensions, so the "
-            "properties are not the member's. Give [beam.section] with the mill's dimensions")
 
 
 def rating_gaps(job, st) -> tuple[str, ...]:

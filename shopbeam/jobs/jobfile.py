@@ -2072,16 +2072,9 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                        else "check e (steel is 29,000 ksi, aluminium 10,100 ksi), or give a "
                        "lumber size with kind = \"lumber\""), "beam.section")
             return
-    if lumber_size and mkind in ("steel", "stainless", "aluminum"):
-        r.error(f"section {section.designation!r} is a lumber size (sawn or LVL) but material "
-                f"{material.key!r} is {mkind}: give a wood material (e.g. material = "
-                "\"DF-L-2\") or a metal section (e.g. a flat bar \"FB4x1/2\", or "
-                "[beam.section] shape = \"rect-bar\" with its sizes)", "beam.section")
-    elif mkind == "lumber" and not lumber_size and section.shape not in ("rect-bar", "custom"):
-        r.error(f"section {section.designation!r} ({section.shape}) is a metal shape, not made "
-                f"in wood, but material {material.key!r} is lumber: give a lumber size such as "
-                "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
-                "material such as \"A992\"", "beam.section")
+    wrong = catalog.not_made_in(section, material)
+    if wrong:
+        r.error(wrong, "beam.section")
     else:
         _grade_mismatch(r, section, material, mkind, system)
     gap = wood_gap(section, material)

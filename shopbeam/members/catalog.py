@@ -337,6 +337,39 @@ def is_steel_shape(sec: Section) -> bool:
     return (sec.source or "").startswith(STEEL_SHAPE_SOURCES)
 
 
+def not_made_in(sec: Section, material) -> str:
+    """Why `sec` cannot be made in `material` ("" when it can): a lumber size in a metal, a
+    metal shape in wood. The job reader and a stock list refuse it with these words; a
+    typed-in material without a kind is judged by the reader on its stiffness."""
+    kind = getattr(material, "kind", "custom")
+    lumber_size = is_wood_size(sec)
+    if lumber_size and kind in ("steel", "stainless", "aluminum"):
+        return (f"section {sec.designation!r} is a lumber size (sawn or LVL) but material "
+                f"{material.key!r} is {kind}: give a wood material (e.g. material = "
+                "\"DF-L-2\") or a metal section (e.g. a flat bar \"FB4x1/2\", or "
+                "[beam.section] shape = \"rect-bar\" with its sizes)")
+    if kind == "lumber" and not lumber_size and sec.shape not in ("rect-bar", "custom"):
+        return (f"section {sec.designation!r} ({sec.shape}) is a metal shape, not made in "
+                f"wood, but material {material.key!r} is lumber: give a lumber size such as "
+                "\"2x10\" (or a [beam.section] rect-bar of its dressed sizes) or a metal "
+                "material such as \"A992\"")
+    return ""
+
+
+def other_metal_on_steel_shape(sec: Section | None, material) -> str:
+    """A carbon-steel catalog shape given an aluminium or stainless grade: shapes of those
+    metals with a similar name have other dimensions, so the properties are not the
+    member's ("" otherwise). No rating rests on it (capacity.rating_gaps); a stock list
+    refuses the row."""
+    kind = getattr(material, "kind", "")
+    if kind not in ("aluminum", "stainless") or sec is None or not is_steel_shape(sec):
+        return ""
+    metal = "aluminium" if kind == "aluminum" else kind
+    return (f"section {sec.designation!r} is a carbon-steel catalog shape and the material is "
+            f"{metal}: {metal} shapes of a similar name have other dimensions, so the "
+            "properties are not the member's. Give [beam.section] with the mill's dimensions")
+
+
 def lumber_nominal(sec: Section) -> tuple[int, int] | None:
     """(nominal thickness, nominal width) in inches of a catalog lumber size, else None."""
     if sec.shape != "rect-bar" or "dressed lumber size" not in (sec.source or ""):

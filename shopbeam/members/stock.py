@@ -33,6 +33,7 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from shopbeam.errors import InputError, InputErrors, Problem
+from shopbeam.members.catalog import not_made_in, other_metal_on_steel_shape
 from shopbeam.members.sections import Section
 from shopbeam.members.materials import resolve_material
 from shopbeam.members.resolve import resolve_section
@@ -276,7 +277,8 @@ def _item(entry: dict, key: str, file: str, line: int | None) -> StockItem:
     except InputError as exc:
         raise InputError(exc.problem.message, exc.problem.key, file, line) from None
     if material is not None:
-        wrong = _family_words(sec, material)
+        # the job reader's words: the row is refused as a job file would refuse it
+        wrong = not_made_in(sec, material) or other_metal_on_steel_shape(sec, material)
         if wrong:
             raise InputError(wrong, skey, file, line)
     note = entry.get("note", "")
@@ -285,29 +287,6 @@ def _item(entry: dict, key: str, file: str, line: int | None) -> StockItem:
     designation = spec if isinstance(spec, str) else sec.designation
     return StockItem(designation.strip(), sec, _price(entry, where, file, line),
                      material.key if material else None, note, line)
-
-
-def _family_words(sec, material) -> str:
-    """What is wrong with a row's section in its material, as a job file says it ("" when they
-    go together): a lumber size in a metal, a metal shape in wood, and a carbon-steel catalog
-    shape in aluminium or stainless (the shapes of those metals have other dimensions)."""
-    from shopbeam.members.catalog import is_steel_shape, is_wood_size  # noqa: PLC0415
-
-    kind = getattr(material, "kind", "custom")
-    if is_wood_size(sec) and kind in ("steel", "stainless", "aluminum"):
-        return (f"section {sec.designation!r} is a lumber size but material {material.key!r} "
-                f"is {kind}: give a wood material (e.g. \"DF-L-2\") or a metal section")
-    if kind == "lumber" and not is_wood_size(sec) and sec.shape not in ("rect-bar", "custom"):
-        return (f"section {sec.designation!r} ({sec.shape}) is a metal shape, not made in wood, "
-                f"but material {material.key!r} is lumber: give a lumber size (e.g. \"2x10\") "
-                "or a metal material")
-    if kind in ("aluminum", "stainless") and is_steel_shape(sec):
-        metal = "aluminium" if kind == "aluminum" else kind
-        return (f"section {sec.designation!r} is a carbon-steel catalog shape but material "
-                f"{material.key!r} is {metal}: {metal} shapes of a similar name have other "
-                "dimensions, so these properties are not the member's; list it in a job's "
-                "[beam.section] table with the mill's dimensions instead")
-    return ""
 
 
 def rank(items, by: str = "weight", density: float | None = None,
