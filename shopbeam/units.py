@@ -338,12 +338,13 @@ def _compound_slip(text: str, key: str, prev, unit: str, num: float, q) -> None:
     if prev is None:
         return
     before, size = prev
-    here = float(q.to_base_units().magnitude) / num if num else None
+    whole = float(q.to_base_units().magnitude)
+    here = whole / num if num else None
     if here is not None and here >= size * (1 - 1e-12):
         raise InputError(f"{text!r} gives {unit!r} after {before!r}: a compound value goes "
                          "from the larger unit to the smaller, each unit once (e.g. '10 ft "
                          "6 in', '2 m 50 mm'); write it as meant", key)
-    if float(q.to_base_units().magnitude) >= size * (1 - 1e-12):
+    if whole >= size * (1 - 1e-12):
         raise InputError(f"{text!r}: the {num:g} {unit} after the {before} is one {before} or "
                          f"more; write the value as meant (e.g. '10 ft 6 in': the inches "
                          "after the feet are under 12), so a slipped digit is not read as "

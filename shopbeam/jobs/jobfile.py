@@ -1641,23 +1641,25 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     name = criteria.lifting or guessed_profile(supports, length)
     if name not in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
         return
-    hooks = [ld for ld in loads if ld.kind == "point" and ld.case == "live" and ld.key in hung]
+    ld = next((ld for ld in loads if ld.kind == "point" and ld.case == "live"
+               and ld.key in hung), None)  # the hook load
+    if ld is None:
+        return
     held = sorted(s.at for s in supports if s.takes_force)
     jib = "jib" in name
-    for ld in hooks[:1]:
-        if jib and held and ld.at >= held[-1] + 0.9 * (length - held[-1]):
-            return  # at the end of the reach (an end stop short of the tip)
-        if not jib and len(held) == 2 and abs(ld.at - (held[0] + held[1]) / 2) <= \
-                0.01 * (held[1] - held[0]):
-            return  # at mid-span of a single span
-        at = units.fmt(ld.at, "length", system)
-        worst = "the end stop" if jib else "mid-span"
-        device = "jib boom" if jib else "monorail"
-        r.warn(f"{ld.key} is the hoist at {at} only, but on a {device} the hoist "
-               "travels: the checks and the rating are for it there, and the label says so. "
-               f"It is usually worst at {worst} (and near the supports for shear); to rate "
-               "every place, give it as a [[moving]] wheel set (loads per axle, spacing, "
-               "travel between the end stops)", f"{ld.key}.at")
+    if jib and held and ld.at >= held[-1] + 0.9 * (length - held[-1]):
+        return  # at the end of the reach (an end stop short of the tip)
+    if not jib and len(held) == 2 and abs(ld.at - (held[0] + held[1]) / 2) <= \
+            0.01 * (held[1] - held[0]):
+        return  # at mid-span of a single span
+    at = units.fmt(ld.at, "length", system)
+    worst = "the end stop" if jib else "mid-span"
+    device = "jib boom" if jib else "monorail"
+    r.warn(f"{ld.key} is the hoist at {at} only, but on a {device} the hoist "
+           "travels: the checks and the rating are for it there, and the label says so. "
+           f"It is usually worst at {worst} (and near the supports for shear); to rate "
+           "every place, give it as a [[moving]] wheel set (loads per axle, spacing, "
+           "travel between the end stops)", f"{ld.key}.at")
 
 
 def lifting_uniform_words(live) -> str:
@@ -1966,8 +1968,11 @@ def _length_in_other_units(r: _Reader, data) -> None:
     raw = beam.get("length")
     if not isinstance(raw, str):
         return
-    here = "metric" if _METRIC.search(raw) else "US" if _IMPERIAL.search(raw) else ""
-    if not here:
+    if _METRIC.search(raw):
+        here, same, other = "metric", _METRIC, _IMPERIAL
+    elif _IMPERIAL.search(raw):
+        here, same, other = "US", _IMPERIAL, _METRIC
+    else:
         return
     where = []
     for name in ("supports", "loads"):
@@ -1978,9 +1983,7 @@ def _length_in_other_units(r: _Reader, data) -> None:
                           and isinstance(v, str)]
     if not where:
         return
-    other = _IMPERIAL if here == "metric" else _METRIC
-    if all(other.search(v) and not (_METRIC if here == "metric" else _IMPERIAL).search(v)
-           for v in where):
+    if all(other.search(v) and not same.search(v) for v in where):
         them = "feet and inches" if here == "metric" else "metric units"
         r.hold(f"length = {raw!r} is in {here} units while every support and load position is "
                f"in {them}: most likely the wrong unit on the length (it changes the member "
@@ -2436,8 +2439,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if "section" not in beam:
             r.error("missing 'section' (a catalog designation such as \"HSS4x4x1/4\", or a "
                     "[beam.section] table)", "beam.section")
-        elif catalog.bare_size_problem(beam["section"], system):
-            r.error(catalog.bare_size_problem(beam["section"], system), "beam.section")
+        elif bare := catalog.bare_size_problem(beam["section"], system):
+            r.error(bare, "beam.section")
         else:
             section = _resolve("section", beam["section"], "beam.section", r, axis=axis,
                                material=material)
@@ -2717,7 +2720,6 @@ def _twice_words(msg: str, text: str, line: int | None) -> str:
             return (f"[{name}] on line {single[0]} has single brackets beside [[{name}]] "
                     f"headers: every one of the {name} is its own [[{name}]] table (double "
                     f"brackets); write [[{name}]] there")
-    lines = text.splitlines()
     here = lines[line - 1] if 0 < line <= len(lines) else ""
     head = _HEADER_LINE.match(here)
     if "Cannot declare" in msg and head:

@@ -1157,12 +1157,9 @@ class ShopbeamApp(App):
                 if question.too_early(event, gap):
                     await js.key_behind(event)  # typed before it could be read, or text
                     return
-                if event.is_printable and event.key in question.answer_keys():
-                    key = event.key
-                    question.hold(event, lambda: self.call_later(
-                        question.run_action, next(b.action for b in question.BINDINGS
-                                                  if key in [k.strip() for k in
-                                                             b.key.split(",")])))
+                action = question.answers().get(event.key) if event.is_printable else None
+                if action is not None:
+                    question.hold(event, lambda: self.call_later(question.run_action, action))
                     return
             if isinstance(focused, Choice) and event.is_printable \
                     and focused.type_letter(event.character):

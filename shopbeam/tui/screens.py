@@ -135,13 +135,12 @@ class AnswerScreen(ModalScreen[str]):
             return False
         if gap is not None and gap < self.ALONE:
             return True
-        return event.key not in self.answer_keys()
+        return event.key not in self.answers()
 
-    def answer_keys(self) -> set[str]:
-        keys = set()
-        for b in self.BINDINGS:
-            keys |= {k.strip() for k in b.key.split(",")} - {"escape"}
-        return keys
+    def answers(self) -> dict[str, str]:
+        """The action of each letter that answers (Esc, always taken at once, aside)."""
+        return {k.strip(): b.action for b in self.BINDINGS for k in b.key.split(",")
+                if k.strip() != "escape"}
 
     def hold(self, event, run) -> None:
         """Keep a letter answer for ALONE: `run` answers then, unless a key comes first."""
