@@ -645,3 +645,23 @@ async def test_a_word_typed_on_after_the_quit_question_opened_is_text_not_its_an
         await burst(pilot, "d" + "o")  # even a word that starts with the answer letter
         await pilot.pause(0.5)
         assert app.is_running and f.input.value.endswith("; delivereddo")
+
+
+@sync
+async def test_esc_right_behind_a_letter_answer_cancels_and_the_letter_never_answers(tmp_path):
+    # "d" then Esc within the letter's wait: the question is cancelled, and the held "d"
+    # must not discard the work once its wait is over
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Changed" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        await pilot.pause(app.screen.READ_TIME + 0.2)
+        await burst(pilot, "d")
+        await pilot.press("escape")
+        await pilot.pause(0.6)
+        assert app.is_running and type(app.screen).__name__ == "JobScreen"
+        assert app.job_screen.session.dirty and f.input.value == "Changed"

@@ -1149,8 +1149,9 @@ class ShopbeamApp(App):
                 self._last_key_at = now
             if js is not None and isinstance(self.screen, AnswerScreen):
                 question = self.screen
-                held = question.release() if event.key != "escape" else None
-                if held is not None:  # a key right behind a letter answer: both were text
+                held = question.release()  # Esc right behind a letter: the letter is dropped
+                if held is not None and event.key != "escape":
+                    # a key right behind a letter answer: both were text
                     await js.key_behind(held)
                     await js.key_behind(event)
                     return
