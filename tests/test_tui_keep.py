@@ -665,3 +665,125 @@ async def test_esc_right_behind_a_letter_answer_cancels_and_the_letter_never_ans
         await pilot.pause(0.6)
         assert app.is_running and type(app.screen).__name__ == "JobScreen"
         assert app.job_screen.session.dirty and f.input.value == "Changed"
+
+
+# ------------------------------------- a choice picks by a letter pressed on its own only
+
+LETTER = 0.45  # Choice.ALONE (0.3 s) and a little: a letter on its own has picked by then
+
+
+@sync
+async def test_a_word_typed_on_the_load_type_choice_picks_nothing_and_is_named(tmp_path):
+    # "-250 lbf/ft typed" with the focus on the Type choice (a Tab too many): before, its
+    # "l" picked linear and its "p" point, and the uniform load's -90 lbf/ft was cleared
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        s = app.job_screen.session
+        before = s.doc.text()
+        await burst(pilot, "-250 lbf/ft typed up")
+        await pilot.pause(LETTER + app.job_screen.STRAY_WAIT)
+        await settle(pilot)
+        assert kind.value == "uniform" and s.doc.text() == before
+        said = [m for m in _notices(app) if "Not typed anywhere" in m]
+        assert said and '"-250 lbf/ft typed up"' in said[-1], said
+        # the same letter pressed on its own picks, once nothing has followed it
+        for event in events_of("p"):
+            app._driver.send_message(event)
+        await pilot.pause()
+        assert kind.value == "uniform" and app._held_letter is not None  # not yet a pick
+        await pilot.pause(LETTER)
+        await settle(pilot)
+        assert kind.value == "point" and s.rows("loads")[0]["type"] == "point"
+
+
+@sync
+async def test_a_letter_on_a_choice_right_before_a_save_is_picked_and_saved(tmp_path):
+    # a letter with a key that is not text right behind it (ctrl+s here) is a pick, taken
+    # before the save reads the job
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        await burst(pilot, "l" + "\x13")  # "l", ctrl+s
+        await pilot.pause(LETTER)
+        await settle(pilot)
+    assert 'type = "linear"' in path.read_text(encoding="utf-8").split("[[loads]]")[1]
+
+
+@sync
+async def test_a_load_type_picked_and_picked_back_keeps_the_value_typed(tmp_path):
+    # uniform -90 lbf/ft -> point (its value cleared: a force is another unit) -> uniform:
+    # the -90 lbf/ft comes back; a linear pair typed comes back with linear too
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        s = app.job_screen.session
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        for letter in "pu":
+            await burst(pilot, letter)
+            await pilot.pause(LETTER)
+            await settle(pilot)
+        assert s.rows("loads")[0]["type"] == "uniform"
+        assert s.rows("loads")[0]["value"] == "-90 lbf/ft"
+        await burst(pilot, "l")
+        await pilot.pause(LETTER)
+        await settle(pilot)
+        v2 = field(app, "loads", "load.value2")
+        v2.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "-150 lbf/ft" + "\t")
+        kind.focus()
+        await settle(pilot)
+        for letter in "pl":
+            await burst(pilot, letter)
+            await pilot.pause(LETTER)
+            await settle(pilot)
+        assert s.rows("loads")[0]["value"] == ["-90 lbf/ft", "-150 lbf/ft"]
+
+
+def test_a_spring_stiffness_typed_comes_back_with_the_spring_type(tmp_path):
+    from shopbeam.tui.app import JobScreen  # noqa: F401 - the screen holds what was kept
+
+    @sync
+    async def run():
+        app = make_app(demo_copy(tmp_path), cursor_blink=False)
+        async with app.run_test(size=SIZE) as pilot:
+            await settle(pilot)
+            await pilot.press("f3")
+            await settle(pilot)
+            s = app.job_screen.session
+            kind = choice_of(app, "span", "support.type")
+            kind.focus()
+            await settle(pilot)
+            await burst(pilot, "s")  # spring
+            await pilot.pause(LETTER)
+            await settle(pilot)
+            assert s.rows("supports")[0]["type"] == "spring"
+            k = field(app, "span", "support.stiffness")
+            k.input.focus()
+            await settle(pilot)
+            await burst(pilot, CTRL_U + "850 lbf/in" + "\t")
+            kind.focus()
+            await settle(pilot)
+            for letter in "ps":  # pin, then spring again
+                await burst(pilot, letter)
+                await pilot.pause(LETTER)
+                await settle(pilot)
+            assert s.rows("supports")[0].get("stiffness") == "850 lbf/in"
+    run()

@@ -35,6 +35,9 @@ async def settle(pilot) -> None:
     app = pilot.app
     for _ in range(100):
         await pilot.pause()
+        if getattr(app, "_held_letter", None) is not None:
+            await pilot.pause(0.35)  # a letter on a choice picks once nothing follows it
+            continue
         try:
             await app.workers.wait_for_complete()
         except WorkerCancelled:  # replaced by a newer one: wait for that

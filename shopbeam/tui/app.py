@@ -376,10 +376,8 @@ class JobScreen(Screen):
         if event.key == "shift+tab":
             self.focus_previous()
             return
-        if isinstance(focused, Choice) and event.is_printable \
-                and focused.type_letter(event.character):
-            return
         if event.is_printable and event.character:
+            # a choice too: a key typed before the question could be read is text
             self.not_typed(event.character, focused or self)
 
     STRAY_WAIT = 0.4  # seconds: keys not used that come closer together make one notice
@@ -424,7 +422,8 @@ class JobScreen(Screen):
     @staticmethod
     def _where(widget) -> str:
         if isinstance(widget, Choice):
-            return f"the {widget.label.strip()} choice (its first letters and <- -> pick)"
+            return (f"the {widget.label.strip()} choice (a first letter pressed on its own, "
+                    "or <- ->, picks)")
         view = next((a for a in widget.ancestors_with_self if isinstance(a, View)), None)
         name = view.title if view is not None else "job"
         if isinstance(widget, RowList):
@@ -660,10 +659,15 @@ class JobScreen(Screen):
             s.set("beam.self_weight", value == "included")
         elif key == "support.type":
             i = self.query_one("#span", SpanView).selected
+            row = s.rows("supports")[i]
+            kept = self._kept_for(("supports", i))
+            if "stiffness" in row:  # a stiffness typed for a spring comes back with it
+                kept["spring"] = {"stiffness": row["stiffness"]}
             s.set_row("supports", i, "type", value)
             row = s.rows("supports")[i]
             if value == "spring" and "stiffness" not in row:
-                s.set_row("supports", i, "stiffness", "2000 lbf/in")
+                s.set_row("supports", i, "stiffness", kept.get("spring", {}).get(
+                    "stiffness", "2000 lbf/in" if s.doc.get("units") != "si" else "350 kN/m"))
             elif value != "spring" and "stiffness" in row:
                 s.set_row("supports", i, "stiffness", None)
         elif key == "load.type":
@@ -759,9 +763,26 @@ class JobScreen(Screen):
             fields["value"] = v[0]
         elif not same_unit:
             fields["value"] = None
+        # what the row had as `old` is kept, and what it had as `kind` comes back: a type
+        # picked by mistake and picked back loses nothing that was typed
+        kept = self._kept_for(("loads", i))
+        kept[old] = {k: row.get(k) for k in ("value", "width", "total") if row.get(k) is not None}
+        for k, v in kept.get(kind, {}).items():
+            if k == "value" or fields.get(k, row.get(k)) is None:
+                fields[k] = v
         for k, v in fields.items():
             s.doc.set_load(i, **{k: v})
         s.touched()
+
+    def _kept_for(self, where: tuple[str, int]) -> dict:
+        """What a support or load row had under the other types it was given (type ->
+        {key: value}), kept for as long as the row is this same table of the job file."""
+        table = self.session._node(list(where))
+        store = self.__dict__.setdefault("_kept_by_type", {})
+        held = store.get(id(table))
+        if held is None or held[0] is not table:
+            held = store[id(table)] = (table, {})
+        return held[1]
 
     def change_section_mode(self, mode: str) -> None:
         self.flush_typing()  # the figures typed so far belong to the mode left
@@ -1138,15 +1159,21 @@ class ShopbeamApp(App):
         text field goes into it at once; only keys nothing is bound to are passed on."""
         if isinstance(event, events.Key) and not event.is_forwarded:
             self.app_focus = True
+            now = getattr(event, "time", None)
+            gap = None if now is None or self._last_key_at is None else now - self._last_key_at
+            if now is not None:
+                self._last_key_at = now
+            # a key right behind a printable one, with the focus where that one went, is
+            # part of a word being typed
+            typed_on = self._text_before is self.focused and gap is not None \
+                and gap < Choice.ALONE
+            self._text_before = self.focused if event.is_printable else False
+            self._letter_behind(typed_on and event.is_printable)
             if await self._check_bindings(event.key, priority=True):
                 return
             focused = self.focused
             js = getattr(self, "job_screen", None)
             on_job = js is not None and self.screen is js
-            now = getattr(event, "time", None)
-            gap = None if now is None or self._last_key_at is None else now - self._last_key_at
-            if now is not None:
-                self._last_key_at = now
             if js is not None and isinstance(self.screen, AnswerScreen):
                 question = self.screen
                 held = question.release()  # Esc right behind a letter: the letter is dropped
@@ -1162,11 +1189,14 @@ class ShopbeamApp(App):
                 if action is not None:
                     question.hold(event, lambda: self.call_later(question.run_action, action))
                     return
-            if isinstance(focused, Choice) and event.is_printable \
-                    and focused.type_letter(event.character):
-                return  # chosen now, not queued behind a save typed next
+            if isinstance(focused, Choice) and event.is_printable and not typed_on and (
+                    event.key == "space" or focused.pick_for(event.character) is not None):
+                # a letter picks only when pressed on its own: held for ALONE, it picks
+                # then, or before the next key that is not text (a save, Tab, a view key)
+                self._hold_letter(event, focused)
+                return
             if on_job and isinstance(focused, (Choice, RowList)) and event.is_printable \
-                    and event.key not in ("space", "question_mark"):
+                    and (typed_on or event.key not in ("space", "question_mark")):
                 # a choice or a list in a form: a digit or letter typed there is meant
                 # as text, never as a view key (it would switch views and the rest of
                 # the burst would go nowhere); it is not used, and the user is told
@@ -1183,6 +1213,34 @@ class ShopbeamApp(App):
             (focused or self.screen)._forward_event(event)
             return
         await super().on_event(event)
+
+    # the focused widget when the key before this one was printable (a word being typed
+    # there), else False
+    _text_before = False
+    _held_letter = None  # (key event, choice, timer): a letter on a choice, not yet a pick
+
+    def _hold_letter(self, event, choice) -> None:
+        timer = self.set_timer(Choice.ALONE, lambda: self._letter_behind(False))
+        self._held_letter = (event, choice, timer)
+
+    def _letter_behind(self, text: bool) -> None:
+        """The letter (or space) held on a choice, if any, is settled: a pick (nothing
+        printable came within ALONE behind it), or text (`text`: a printable key came right behind it),
+        which is not used and is named in the notice of keys not used, never a pick."""
+        held, self._held_letter = self._held_letter, None
+        if held is None:
+            return
+        event, choice, timer = held
+        timer.stop()
+        js = getattr(self, "job_screen", None)
+        if text:
+            if js is not None:
+                js.not_typed(event.character or "", choice)
+        elif choice.is_attached:
+            if event.key == "space":
+                choice.action_move(1)  # space on its own: the next option
+            else:
+                choice.type_letter(event.character)
 
     async def action_quit(self) -> None:
         js = getattr(self, "job_screen", None)

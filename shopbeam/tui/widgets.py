@@ -354,20 +354,27 @@ class Choice(Widget, can_focus=True):
         self._pending = value
         self.post_message(self.Changed(self, value))
 
-    def type_letter(self, character: str | None) -> bool:
-        """The first option (after the shown one) starting with this letter; True if taken.
-        The app calls it as the key arrives, so keys keep their order at any speed."""
+    # A letter picks an option only when pressed on its own: one right behind another
+    # printable key, or with one right behind it (closer than ALONE), is part of a word
+    # typed with the focus here by mistake, and picks nothing (the app holds the letter
+    # for ALONE to see; see `ShopbeamApp._letter_behind`)
+    ALONE = 0.3  # seconds, as for a letter that answers a question
+
+    def pick_for(self, character: str | None) -> str | None:
+        """The first option (after the shown one) starting with this letter, or None."""
         ch = (character or "").lower()
         if ch and ch.isalpha():
             for opt in self.options:
                 if opt.lower().startswith(ch) and opt != self.value:
-                    self._choose(opt)
-                    return True
-        return False
+                    return opt
+        return None
 
-    def on_key(self, event) -> None:
-        if self.type_letter(event.character):
-            event.stop()
+    def type_letter(self, character: str | None) -> bool:
+        """Pick the option `pick_for` names; True if one was picked."""
+        opt = self.pick_for(character)
+        if opt is not None:
+            self._choose(opt)
+        return opt is not None
 
     def on_focus(self) -> None:
         self.refresh(layout=True)  # the "<- ->" hint may take a line of its own
