@@ -306,7 +306,59 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
     sec = st.section
     return list(st.unchecked) + local_unchecked(job, sec) + open_unchecked(job, st) + \
         aluminum_unchecked(job, sec) + floor_unchecked(job) + cantilever_top_unchecked(job, st) \
-        + material_unchecked(job, st) + twist_unchecked(job, st)
+        + material_unchecked(job, st) + twist_unchecked(job, st) + use_unchecked(job)
+
+
+NO_AXIAL = "no-axial"  # the tag that says a lifting member's rigging puts no thrust in it
+FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked elsewhere
+
+
+def use_unchecked(job: Job) -> list[Unchecked]:
+    """Limit states the member's use calls for that shopbeam does not check, each blocking
+    the rating until the job says it does not arise (a tag):
+    - a below-the-hook beam hung from two or more sling points, or a jib boom held by a tie
+      rod or knee brace (held at two places): sloped slings and ties push the member
+      endwise, and bending with that thrust is checked together (ASME BTH-1 3-2.2 and 3-2.5,
+      AISC 360-16 E3 and H1-1, from memory); shopbeam has no axial force;
+    - a member of a road vehicle or mobile machine: every bump is a load cycle, and welds
+      and holes crack under a stress range far below the static strength (AISC 360-16
+      Appendix 3, fatigue, from memory); shopbeam checks static strength only."""
+    out = []
+    prof = getattr(job.criteria, "lifting", "") or ""
+    if job.lifting and NO_AXIAL not in job.tags:
+        tol = 1e-9 * job.length
+        held = sorted({round(s.at / tol) for s in job.supports if s.takes_force}) if tol else []
+        from shopbeam.jobs.rules import guessed_profile  # noqa: PLC0415
+
+        name = prof or guessed_profile(job.supports, job.length)
+        if name == "below-the-hook" and len(held) >= 2:
+            out.append(Unchecked(
+                "axial compression from sloped slings",
+                "the beam hangs from slings at two or more places: slings that lean in to one "
+                "hook push the beam endwise, and bending with that thrust is not checked here "
+                "(it lowers what the beam may carry). Have it "
+                "checked as a beam-column, or add the tag \"no-axial\" if the slings hang "
+                "plumb (two hooks, or a spreader above)",
+                "ASME BTH-1 3-2.2 and 3-2.5; AISC 360-16 E3, H1-1"))
+        elif name in ("jib-boom", "hand-geared-jib") and len(held) >= 2:
+            out.append(Unchecked(
+                "axial compression from a tie rod or knee brace",
+                "the boom is held at two places: a tie rod or knee brace pushes it endwise "
+                "toward the mast, and bending with that thrust is not checked here. Have it "
+                "checked as a beam-column, or add the tag \"no-axial\" if nothing pushes it "
+                "endwise",
+                "AISC 360-16 E3, H1-1"))
+    road = getattr(job, "vehicle", "")
+    if road and FATIGUE_CHECKED not in job.tags:
+        out.append(Unchecked(
+            "fatigue under road loads",
+            f"it reads like a member of a road vehicle or mobile machine ({road}): every bump "
+            "is a load cycle, and welds, holes and attachments crack under a stress range far "
+            "below the static strength checked here (fatigue is not checked). Have the "
+            "member's details checked for fatigue, then add the tag \"fatigue-checked\"; or "
+            "the tag \"not-vehicle\" if it is not on a vehicle",
+            "AISC 360-16 Appendix 3"))
+    return out
 
 
 def material_unchecked(job: Job, st) -> list[Unchecked]:

@@ -39,6 +39,8 @@ from shopbeam.members.catalog import other_metal_on_steel_shape
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
+from shopbeam.cautions import RACK_TAGS
+from shopbeam.jobs.rules import rack_arm
 from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
                                    strength_slip, stubby_words, thickness_gap,
                                    wood_gap)
@@ -234,12 +236,34 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "the top flange and the flange checks under them are not made. Tag the job "
                    "\"lifting\", or remove the key(s) for a cart on top")
     out += list(getattr(job, "holds", ()))
+    out += _rack_impact_gap(job)
     hint = getattr(job, "lifting_hint", "")
     if hint:
         out.append(f"it reads like a lifting device ({hint}) but is not tagged lifting, so the "
                    "impact allowance and the lifting deflection limit were not applied. Add "
                    "tags = [\"lifting\"], or the tag \"not-lifting\" if it is not one")
     return tuple(out)
+
+
+def _rack_impact_gap(job) -> list[str]:
+    """A storage-rack member rated with no impact: a rack beam is designed for the product
+    load plus an impact load (ANSI MH16.1: 25 % of one unit load where it does most harm),
+    a cantilever-rack arm for the loads ANSI MH16.3 sets (both from memory). A job that
+    gives `impact` (even "0%", said on purpose) or a live load labelled impact is rated."""
+    if not RACK_TAGS.intersection(job.tags) or job.criteria.impact is not None:
+        return []
+    if any("impact" in (ld.label or "").lower() and ld.case == "live" for ld in job.loads):
+        return []
+    if rack_arm(job.tags, job.supports, job.length):
+        return ["a cantilever-rack arm is rated for its load with the allowance ANSI MH16.3 "
+                "sets for placing it with a lift truck or crane (from memory), and the job "
+                "gives no impact: write [criteria] impact = \"25%\" (or the rack maker's "
+                "figure), or add the impact as a live load labelled \"impact\""]
+    return ["a storage-rack beam is rated for the product load plus an impact load (ANSI "
+            "MH16.1: 25 % of one unit load, where it does the most harm; from memory), and the "
+            "job gives none: write [criteria] impact = \"25%\" (on every live load: on the "
+            "safe side), or add the heaviest unit load again at 25 % as a live load labelled "
+            "\"impact\""]
 
 
 def _lifting_spread(job) -> list[str]:

@@ -160,6 +160,9 @@ class Job:
     factor_keys: tuple[str, ...] = ()
     # what makes a job with no impact read like a road vehicle's member (see _vehicle_hint)
     vehicle_hint: str = ""
+    # what makes a job read like a road vehicle's member, impact given or not (fatigue:
+    # analysis.use_unchecked)
+    vehicle: str = ""
     # other reasons the reader found to post no rating, each warned too (see _Reader.hold)
     holds: tuple[str, ...] = ()
     # the tributary width (m) of each load given per area (psf x width), by load key
@@ -1908,6 +1911,32 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
     return hint
 
 
+_GLULAM_WORDS = re.compile(r"\b(glu-?lams?|glued[- ]laminated|GLT|\d\dF-[VE]\d+)\b", re.IGNORECASE)
+
+
+def _glulam_words(r: _Reader, title, notes, tags, material, data) -> None:
+    """A wood member the job calls glued-laminated (glulam, a stress class such as 24F-V4)
+    with sawn-lumber or LVL values: glulam has its own design values and a volume factor CV
+    that lowers Fb in long, deep members (NDS 2018 5.3.6, from memory), which are not
+    applied here, so no rating is posted on it."""
+    if getattr(material, "kind", "") not in ("lumber", "wood"):
+        return
+    mat = data.get("beam", {}).get("material") if _is_table(data.get("beam")) else None
+    said = _words_found(_GLULAM_WORDS, title, notes, tags, [])
+    if isinstance(mat, str) and _GLULAM_WORDS.search(mat):
+        said.append(f"material {mat!r}")
+    if not said:
+        return
+    hint = "; ".join(said[:2])
+    r.hold(f"this reads like a glued-laminated (glulam) member ({hint}), but the values used "
+           "are sawn-lumber or LVL values: glulam's own design values and its volume factor "
+           "CV (NDS 2018 5.3.6, from memory) are not applied, and no rating is posted. Check "
+           "it by the glulam maker's tables, or remove the word if it is sawn lumber",
+           "beam.material",
+           f"glulam is not covered ({hint}): the sawn-lumber values used overstate a long, "
+           "deep glulam member (volume factor CV, NDS 2018 5.3.6, from memory)")
+
+
 def _rack_fixed_ends(r: _Reader, tags, supports, length) -> None:
     """A rack beam between uprights with a fixed end: its connector (a clip or hook into the
     upright) is semi-rigid at best, rated by test (ANSI MH16.1, from memory), and far from the
@@ -2650,8 +2679,11 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     rolling_keys = _rolling_keys(r, data.get("moving"), moving, tags, criteria)
     vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
                                  is_lifting(tags, criteria.lifting))
+    vehicle = "" if is_lifting(tags, criteria.lifting) or NOT_VEHICLE in tags else "; ".join(
+        _words_found(_VEHICLE_WORDS, title, notes, tags, raw_loads)[:3])
     _rack_hint(r, title, notes, tags, raw_loads)
     _rack_fixed_ends(r, tags, supports, length)
+    _glulam_words(r, title, notes, tags, material, data)
     _length_in_other_units(r, data)
     _odd_springs(r, supports, section, material, length, system)
     _cut_hint(r, title, notes, tags, raw_loads)
@@ -2695,7 +2727,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         lugs=tuple(lugs),
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
-        factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint, holds=tuple(r.holds),
+        factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint, vehicle=vehicle,
+        holds=tuple(r.holds),
         widths=dict(r.widths), supports_line=r.line_for("supports[0]"),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,
