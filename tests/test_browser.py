@@ -145,4 +145,4 @@ def test_a_long_plaque_still_prints_on_one_page(browser, poppler, tmp_path):
         pdf.write_bytes(print_pdf(label.plaque_html(r, paper), browser))
         pages, got = _pdf_text(pdf)
         assert pages == 1, paper
-        assert "PER BAY (4 levels)" in got and "Impact NOT included" in got
+        assert "PER BAY (4 levels)" in got and "upright frames" in got

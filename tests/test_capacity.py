@@ -290,3 +290,25 @@ def test_json_has_no_negative_zero(tmp_path):
                          capture_output=True, text=True, timeout=120).stdout
     import re
     assert '"force": 0.0' in out and not re.search(r"-0\.0(?![0-9])", out)
+
+
+def test_a_deep_bar_loaded_on_its_top_edge_between_supports_is_not_rated_past_that_strength():
+    # AISC 360-16 F11-3 (elastic LTB of a rectangular bar) is Cb times its Cb = 1 figure,
+    # as F2's is; a load bearing on the top edge takes Cb x 1/1.4 (AISC 360-16 Commentary
+    # F1, 1.4^(2y/ho), from memory). FB6x1/2 A36 on edge, 8 ft span, uniform load on top:
+    # Lb d / t^2 = 96 x 6 / 0.25 = 2304 > 1.9 E / Fy = 1530.6, so Fcr = 1.9 E Cb / 2304;
+    # Cb = 1.136 (eq. F1-1, uniform load) x 1/1.4 = 0.812: Mn / 1.67 with Sx = 0.5 x 36 / 6
+    # = 3 in^3 is 1.9 x 29000 x 0.812 / 2304 x 3 / 1.67 = 34.87 kip-in = 2906 lbf*ft
+    text = ('schema = 1\ntitle = "flat bar shelf rail"\n[beam]\nlength = "8 ft"\n'
+            'section = "FB6x1/2"\nmaterial = "A36"\nself_weight = false\n[[supports]]\n'
+            'at = "0 ft"\ntype = "pin"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n[criteria]\n'
+            'deflection = "L/100"\n')
+    res = capacity(parse_job_text(text))
+    assert not res.rated
+    top = [r for r in res.not_rated if "top flange" in r]
+    assert top and "2906 lbf*ft" in top[0], res.not_rated
+    # braced all along its length (a shelf deck fastened to it), the same bar is rated
+    held = capacity(parse_job_text(text.replace('self_weight = false\n',
+                                                'self_weight = false\nbraced = true\n')))
+    assert held.rated and held.factor > res.factor

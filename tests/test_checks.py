@@ -377,3 +377,42 @@ def test_typed_in_i_section_is_built_up_b4_case_11_and_g2_1b():
     w = catalog.lookup("W12x26")
     assert shear_strength(w, material("A992"), "asd").omega == 1.50
     assert "built-up" not in flexure(w, material("A992"), "asd").cap_text
+
+
+def test_a_typed_in_i_beam_with_a_noncompact_web_is_bent_by_f4_not_f2():
+    # AISC 360-16 F4 (from memory), doubly symmetric I with a noncompact web: plates 16 in
+    # deep, flanges 6 x 1/2 in, web 0.15 in, Fy 50 ksi, E 29000 ksi; an 8 ft cantilever
+    # (Cb 1.0). h/tw = 15 / 0.15 = 100, between 3.76 and 5.70 sqrt(E/Fy) = 90.55 / 137.3.
+    # Rpc = Mp/Myc - (Mp/Myc - 1)(100 - 90.55)/(137.3 - 90.55) (F4-9b); aw = h tw / (bf tf)
+    # = 0.75, rt = bf / sqrt(12 (1 + aw/6)) (F4-11); Lp = 1.1 rt sqrt(E/Fy) (F4-7); Lr by
+    # F4-8 with FL = 0.7 Fy; Mn = Rpc Myc - (Rpc Myc - FL Sx)(Lb - Lp)/(Lr - Lp) (F4-2).
+    from shopbeam.design.checks import strengths
+
+    text = ('schema = 1\ntitle = "welded girder arm"\n[beam]\nlength = "8 ft"\n'
+            'material = "A572-50"\nself_weight = false\n[beam.section]\nshape = "i-beam"\n'
+            'depth = "16 in"\nflange_width = "6 in"\nflange_thickness = "1/2 in"\n'
+            'web_thickness = "0.15 in"\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+            '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-10000 lbf"\nflange = "bottom"\n'
+            'bearing = "6 in"\n[criteria]\ndeflection = "L/100"\n')
+    job = parse_job_text(text)
+    sec = job.section
+    IN = 0.0254
+    e, fy = 29000.0, 50.0
+    sx = min(sec.sx_top, sec.sx_bot) / IN**3
+    zx, j = sec.zx / IN**3, sec.j / IN**4
+    root = math.sqrt(e / fy)
+    mp_myc = zx / sx
+    rpc = min(mp_myc, mp_myc - (mp_myc - 1) * (100 - 3.76 * root) / ((5.70 - 3.76) * root))
+    rt = 6 / math.sqrt(12 * (1 + 0.75 / 6))
+    lp = 1.1 * rt * root
+    fl, ho = 0.7 * fy, 15.5
+    a = j / (sx * ho)
+    lr = 1.95 * rt * e / fl * math.sqrt(a + math.sqrt(a * a + 6.76 * (fl / e) ** 2))
+    assert lp == pytest.approx(43.3, abs=0.05)  # the figure printed beside the check
+    mn = rpc * fy * sx - (rpc * fy * sx - fl * sx) * (96 - lp) / (lr - lp)  # kip-in
+    st = strengths(job)
+    got, words = st.flexure.mn(1.0, 96 * IN)
+    assert "F4-2" in words
+    assert got / (4448.2216152605 * IN) == pytest.approx(mn, rel=1e-9)
+    # compression flange yielding, F4-1: Rpc Myc (it was Fy Sx, with F2-2 above it)
+    assert st.flexure.cap / (4448.2216152605 * IN) == pytest.approx(rpc * fy * sx, rel=1e-9)

@@ -459,3 +459,27 @@ def test_reactions_of_live_load_on_a_stem_or_round_wall_withhold_the_rating(sect
                 loads=['type = "uniform"\nvalue = "-1 kip/ft"'])
     u = next(u for u in analyze(cant).unchecked if u.name == name)
     assert not u.blocks_rating
+
+
+def test_hss_sidewall_yielding_takes_k_as_1_5_t_unless_the_radius_is_typed_in():
+    # AISC 360-16 K2 (from memory): k, the outside corner radius, is permitted to be taken
+    # as 1.5 t when unknown; the catalog's 2 t is the AISC Shapes Database's assumption for
+    # section properties, not a measured radius. HSS10x2x1/8, t_des 0.116 in (AISC Shapes
+    # Database v15.0), A500-B Fy 46 ksi, a reaction at the member end (K2.2 end form,
+    # 2.5k + lb, lb = 0): Rn = 2 x 46 x 0.116 x 2.5 x 1.5 x 0.116 = 4.642 kips; / 1.50
+    text = ('schema = 1\ntitle = "short tube"\n[beam]\nlength = "2 ft"\nsection = "HSS10x2x1/8"\n'
+            'material = "A500-B"\nself_weight = false\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "2 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-5000 lbf/ft"\n')
+    res = analyze(parse_job_text(text))
+    wly = next(c for c in res.checks if c.name == "wall local yielding")
+    t = 0.116
+    assert wly.limit / KIP == pytest.approx(2 * 46 * t * 2.5 * 1.5 * t / 1.50, rel=1e-6)
+    # typed in with its radius measured (3/8 in): k is that radius
+    typed = text.replace('section = "HSS10x2x1/8"\n', '').replace(
+        'self_weight = false\n', 'self_weight = false\n[beam.section]\nshape = "rect-tube"\n'
+        'depth = "10 in"\nwidth = "2 in"\nwall = "1/8 in"\ncorner_radius = "0.375 in"\n')
+    res = analyze(parse_job_text(typed))
+    wly = next(c for c in res.checks if c.name == "wall local yielding")
+    tt = 0.125 * 0.93  # A500 design wall, 0.93 t_nom (AISC 360-16 B4.2, from memory)
+    assert wly.limit / KIP == pytest.approx(2 * 46 * tt * 2.5 * 0.375 / 1.50, rel=1e-6)

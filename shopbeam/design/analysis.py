@@ -70,17 +70,18 @@ RACK_IMPACT = ("Storage-rack beams are designed for an impact load besides the p
                "(ANSI MH16.1: 25 % of one unit load, placed where it does the most harm; from "
                "memory); these checks do not add it. Add it as a live load (the heaviest "
                "pallet again at 25 %, label \"impact\"), or set [criteria] impact = \"25%\" "
-               "(on every live load: conservative). Beam connectors, upright frames and "
-               "anchors often govern a rack and are not checked here.")
+               "(on every live load: conservative). ")
+RACK_REST = ("Beam connectors, upright frames and anchors often govern a storage rack and are "
+             "not checked here.")
 
 # A cantilever-rack arm (a rack member with a free end): ANSI MH16.3 sets what the arms must
 # carry, impact included (from memory; no figure is given here), and the column, its base
 # and the arm connections carry it on to the floor.
 ARM_IMPACT = ("Cantilever-rack arms are designed for the loads ANSI MH16.3 sets (from memory), "
               "which include an allowance for placing the load with a lift truck or crane; "
-              "these checks add no impact. Add it as a live load, or set [criteria] impact. "
-              "The upright column, its base and anchors, the arm-to-column connection and the "
-              "arm's lip or stop often govern a cantilever rack and are not checked here.")
+              "these checks add no impact. Add it as a live load, or set [criteria] impact. ")
+ARM_REST = ("The upright column of a cantilever rack, its base and anchors, the arm-to-column "
+            "connection and the arm's lip or stop often govern it and are not checked here.")
 
 
 # Members out of doors (signs, awnings, canopies) also take wind, and an awning or canopy
@@ -113,8 +114,10 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
         out.append(f"Loads are shared by {job.members} identical members: each is checked for "
                    f"1/{job.members} of the entered loads. Make sure the load really divides "
                    "evenly (stiff deck, centred loads).")
-    if RACK_TAGS.intersection(job.tags) and job.criteria.impact is None:
-        out.append(ARM_IMPACT if rack_arm(job.tags, job.supports, job.length) else RACK_IMPACT)
+    if RACK_TAGS.intersection(job.tags):
+        arm = rack_arm(job.tags, job.supports, job.length)
+        out.append(("" if job.criteria.impact is not None else ARM_IMPACT if arm else
+                    RACK_IMPACT) + (ARM_REST if arm else RACK_REST))
     if any(_OUTDOOR.search(t) for t in job.tags + (job.title,)):
         out.append(OUTDOOR)
     if getattr(job.material, "kind", "") == "stainless":
@@ -563,7 +566,10 @@ def span_top_limits(job: Job, st) -> list[tuple[float, float, float]]:
     (not a cantilever: see `cantilever_top_limits`) that carries a load on its top flange at
     a point not braced: a point load or spread load not hung from the bottom flange."""
     fl = _rating_flexure(st)
-    if fl is None or fl.ltb[0] != "F2" or not fl.uses_cb or job.braced or job.restrained:
+    # F2 I-shapes and channels (F4 with a noncompact web), and F11 bars on edge (their LTB
+    # strength is Cb times the Cb = 1 figure as F2's: the same 1/1.4 for a load on the top edge, from memory)
+    if fl is None or fl.ltb[0] not in ("F2", "F4", "F11") or not fl.uses_cb or job.braced \
+            or job.restrained:
         return []
     tol = 1e-9 * job.length
     hung = set(getattr(job, "hung", ()) or ())

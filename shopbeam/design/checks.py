@@ -129,6 +129,18 @@ class Flexure:
             x = (lb / rts) ** 2
             fcr = math.pi**2 * e / x * math.sqrt(1 + 0.078 * jc / (sx * ho) * x)
             return fcr * sx, f"F2-3/F2-4 elastic LTB, Lb {ln(lb)} > Lr {ln(lr)}"
+        if kind == "F4":
+            # AISC 360-16 F4-2 and F4-3/F4-5 (from memory), doubly symmetric: Sxc = Sx
+            rpc_myc, sx, e, fl_, rt, j, ho, lp, lr = p
+            if lb <= lp:
+                return math.inf, ""
+            if lb <= lr:
+                return (rpc_myc - (rpc_myc - fl_ * sx) * (lb - lp) / (lr - lp),
+                        f"F4-2 inelastic LTB (noncompact web), Lp {ln(lp, 3)} < Lb {ln(lb)} "
+                        f"<= Lr {ln(lr)}")
+            x = (lb / rt) ** 2
+            fcr = math.pi**2 * e / x * math.sqrt(1 + 0.078 * j / (sx * ho) * x)
+            return fcr * sx, f"F4-3/F4-5 elastic LTB (noncompact web), Lb {ln(lb)} > Lr {ln(lr)}"
         if kind == "F7":
             mp, sx, e, fy, ry, ja, lp, lr = p
             if lb <= lp:
@@ -166,7 +178,7 @@ class Flexure:
         if self.ltb is None:
             return {}
         kind, p = self.ltb
-        if kind in ("F2", "F7"):
+        if kind in ("F2", "F4", "F7"):
             return {"Lb": lb, "Lp": p[-2], "Lr": p[-1]}
         return {"Lb": lb}
 
@@ -348,20 +360,22 @@ def _f2_f3(sec, fy, e) -> Flexure:
                 "and flange local buckling not applied)")
         warnings.append("slender web: bending taken as Rpg Fy Sx (AISC 360-16 F5-1); the rest "
                         "of F5 not applied")
+    elif h_tw > 3.76 * root and sec.shape == "i-beam":
+        return _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc, built)
     elif h_tw > 3.76 * root:
-        cap = fy * sx
-        text = "noncompact web (h/tw %.3g > 3.76 sqrt(E/Fy)): Mn = Fy Sx (lower bound of F4)" % h_tw
-        warnings.append("noncompact web: bending taken as first yield Fy Sx; AISC 360 F4 not "
-                        "applied")
+        cap = fy * sx  # a channel: F2 covers compact webs only (AISC 360-16 F2, from memory)
+        text = "noncompact web (h/tw %.3g > 3.76 sqrt(E/Fy)): Mn = Fy Sx" % h_tw
+        warnings.append("channel with a noncompact web: bending taken as first yield Fy Sx")
     if h_tw > 3.76 * root:
         slender = h_tw > 5.70 * root
         unchecked.append(Unchecked(
-            "slender-web bending" if slender else "noncompact-web bending",
+            "slender-web bending" if slender else "noncompact-web bending of a channel",
             (f"h/tw {h_tw:.3g} > 5.70 sqrt(E/Fy): bending taken as Rpg Fy Sx (F5-1), without "
              "F5's lateral-torsional and flange local buckling" if slender else
-             f"h/tw {h_tw:.3g} > 3.76 sqrt(E/Fy): bending taken as Fy Sx, not by F4 (Fy Sx is "
-             "a lower bound here)"), "AISC 360-16 F5" if slender else
-            "AISC 360-16 F4", blocks_rating=slender))
+             f"h/tw {h_tw:.3g} > 3.76 sqrt(E/Fy): AISC 360-16 F2 covers channels with compact "
+             "webs only, and lateral-torsional buckling by F2-2 with a noncompact web is not "
+             "covered"), "AISC 360-16 F5" if slender else "AISC 360-16 F2",
+            blocks_rating=True))
     if lam > lpf:
         how = (f", built-up: lambda_r = 0.95 sqrt(kc E / 0.7 Fy) = {lrf:.3g}, kc {kc:.3g}"
                if built else "")
@@ -395,6 +409,48 @@ def _f2_f3(sec, fy, e) -> Flexure:
     lr = 1.95 * rts * e / (0.7 * fy) * math.sqrt(a + math.sqrt(a * a + 6.76 * (0.7 * fy / e) ** 2))
     return Flexure(cap, OMEGA_B, text, ltb=("F2", (mp, sx, e, fy, rts, jc, ho, lp, lr)),
                    warnings=tuple(warnings), unchecked=tuple(unchecked))
+
+
+def _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc, built) -> Flexure:
+    """A doubly symmetric I-shape with a noncompact web (3.76 < h/tw <= 5.70 sqrt(E/Fy)),
+    by AISC 360-16 F4 (from memory): compression flange yielding Mn = Rpc Myc (F4-1), flange
+    local buckling F4-13/F4-14, lateral-torsional buckling F4-2/F4-5 with rt, Lp = 1.1 rt
+    sqrt(E/Fy) and Lr (F4-8); the tension flange does not govern (Sxt = Sxc). Here hc = h,
+    Iyc / Iy = 0.5 > 0.23 (F4-9a/b for Rpc), FL = 0.7 Fy (F4-6a, Sxt / Sxc = 1)."""
+    d = sec.dims
+    root = math.sqrt(e / fy)
+    myc = fy * sx
+    lpw, lrw = 3.76 * root, 5.70 * root
+    rpc = min(mp / myc, mp / myc - (mp / myc - 1) * (h_tw - lpw) / (lrw - lpw))
+    fl_ = 0.7 * fy
+    cap = rpc * myc
+    text = (f"F4-1 compression flange yielding Mn = Rpc Myc, Rpc {rpc:.3f} (noncompact web, "
+            f"h/tw {h_tw:.3g}; F4-9b)")
+    if lam > lpf:
+        if lam <= lrf:
+            m = cap - (cap - fl_ * sx) * (lam - lpf) / (lrf - lpf)
+            t = f"F4-13 flange local buckling (noncompact flange, lambda {lam:.3g})"
+        else:
+            m = 0.9 * e * kc * sx / lam**2
+            t = f"F4-14 flange local buckling (slender flange, lambda {lam:.3g}, kc {kc:.3g})"
+        if m < cap:
+            cap, text = m, t
+    iy, j = sec.iy, sec.j
+    ho = d.get("ho") or (d["d"] - d["tf"])
+    if not (iy and j):
+        return Flexure(cap, OMEGA_B, text, warnings=(
+            "no torsion properties: lateral-torsional buckling not checked",),
+            unchecked=(Unchecked(
+                "lateral-torsional buckling", "the section has no torsion properties (Iy, J); "
+                "give them, or brace the compression flange all along (braced = true)",
+                "AISC 360-16 F4", blocks_rating=True),))
+    hc = h_tw * d["tw"]
+    aw = hc * d["tw"] / (d["bf"] * d["tf"])
+    rt = d["bf"] / math.sqrt(12 * (1 + aw / 6))  # F4-11
+    lp = 1.1 * rt * root  # F4-7
+    a = j / (sx * ho)
+    lr = 1.95 * rt * e / fl_ * math.sqrt(a + math.sqrt(a * a + 6.76 * (fl_ / e) ** 2))  # F4-8
+    return Flexure(cap, OMEGA_B, text, ltb=("F4", (rpc * myc, sx, e, fl_, rt, j, ho, lp, lr)))
 
 
 OMEGA_ADM_RUPTURE = 1.95  # Aluminum Design Manual 2015, rupture (from memory)

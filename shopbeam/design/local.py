@@ -17,8 +17,8 @@ section J10 without stiffeners:
 Rectangular HSS walls under a concentrated force bearing across the full width of the wall
 (a cap plate or saddle, beta = 1) get the two sidewall limit states of AISC 360-16 K2
 (Table K2.2, recalled from memory; the same provisions were 360-10 K1.3): sidewall local
-yielding Rn = 2 Fy t (5k + lb), k the outside corner radius (2.5k + lb within the depth of
-the member end, as J10-3), Omega 1.50; sidewall local crippling Rn = 1.6 t^2 [1 + 3 lb /
+yielding Rn = 2 Fy t (5k + lb), k the outside corner radius (1.5 t unless typed in:
+`hss_corner_k`; 2.5k + lb within the depth of the member end, as J10-3), Omega 1.50; sidewall local crippling Rn = 1.6 t^2 [1 + 3 lb /
 (H - 3t)] sqrt(E Fy) Qf, Omega 2.00, with the end form taken as J10-5 for two walls (from
 memory). Qf = 1.3 - 0.4 U / beta <= 1 depends on the utilisation U of the tube; it is taken
 at its lower bound 1.3 - 0.4 Z/S, valid whenever the bending check passes (U = M Omega /
@@ -300,7 +300,7 @@ def _limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
                         {"tw": tw, "tf": tf, "d": dd, "webs": webs, "qf": 1.0}))
     else:
         t, h = d["t_des"], d["h"]
-        k = d.get("r_out") or 1.5 * t
+        k = hss_corner_k(d)
         rn, eq = hss_wall_yielding(fy, t, k, lb, end, h)
         out.append(("wall local yielding", rn, eq, OMEGA_WLY, "AISC 360-16 K2, Table K2.2",
                     {"t": t, "k": k, "h": h}))
@@ -310,6 +310,15 @@ def _limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
             out.append(("wall crippling", rn, eq, OMEGA_WCR, "AISC 360-16 K2, Table K2.2",
                         {"t": t, "h": h, "qf": qf}))
     return out
+
+
+def hss_corner_k(dims) -> float:
+    """k of the HSS wall checks (Table K2.2): the outside corner radius, which AISC 360-16
+    K2 permits to be taken as 1.5 t when it is not known (from memory). A tube's actual
+    radius varies from mill to mill; the catalog's 2 t (the AISC Shapes Database's figure
+    for its section properties) is not a measured one, so 1.5 t is used unless the job
+    typed in the radius (`corner_radius` of a rect-tube)."""
+    return dims.get("r_typed") or 1.5 * dims["t_des"]
 
 
 def design_factor_scale(job) -> float:
@@ -559,7 +568,7 @@ def sizing_allowables_many(job, secs, mats, items):
         else:
             t_ = np.array([s.dims["t_des"] for s in ss])
             h_ = np.array([s.dims["h"] for s in ss])
-            kr = np.array([s.dims.get("r_out") or 1.5 * s.dims["t_des"] for s in ss])
+            kr = np.array([hss_corner_k(s.dims) for s in ss])
             qf = np.array([hss_qf_lower(s) for s in ss])
         for j, it in enumerate(items):
             at, face, lb0, moving = it[:4]
@@ -641,7 +650,8 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
                "flange local bending": "Ru <= Rn / 1.67, Rn = 6.25 Fyf tf^2 (J10-1; half within "
                                        "10 tf of the end)",
                "wall local yielding": "Ru <= Rn / 1.50, Rn = 2 Fy t (5k + lb), k = outside "
-                                      "corner radius (load across the full wall width)",
+                                      "corner radius, 1.5 t unless corner_radius is typed in "
+                                      "(load across the full wall width)",
                "wall crippling": "Ru <= Rn / 2.00, Rn = 1.6 t^2 [1 + 3 lb/(H - 3t)] sqrt(E Fy) "
                                  "Qf, Qf = 1.3 - 0.4 Z/S (lower bound while bending passes)"}[name]
     params = {"Rn": rn, "omega": omega, "lb": params_lb, "fy": job.material.fy,

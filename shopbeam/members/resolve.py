@@ -181,6 +181,8 @@ def _build(shape, spec, key, material, mass) -> Section:
                         source="computed from dimensions (" + "; ".join(
                             x for x in (note, rule, "outside corner radius " + (
                                 "as given" if r is not None else "2 x design wall")) if x) + ")")
+        if r is not None:  # the wall checks' k: the radius measured, not the assumed one
+            sec.dims["r_typed"] = r
         return sec
     if shape in ("round-tube", "pipe"):
         od = L("od")

@@ -237,7 +237,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     if rack and levels and tot_all:
         # the posted per-level total times the levels, rounded down again: never more than
         # the levels' posted figures add up to
-        level = posted("TOTAL", tot_all * k, "force", sy)
+        # the level's own posted TOTAL where the label shows one (the posted intensity over
+        # its length, or the posted loads added up), so the two figures agree
+        level = next((f for f in figs if f.label == "TOTAL" and f.group == where), None) \
+            or posted("TOTAL", tot_all * k, "force", sy)
         figs.append(posted(
             "TOTAL", level.si * levels, "force", sy,
             f"{levels} levels at {level.value} each; and no more than {holder}",
