@@ -463,6 +463,16 @@ class _Reader:
                           f"{path} belongs under [criteria]: written here it is not read, so "
                           "the figure would leave it out. Move it")
                 continue
+            meant = _lowering_meant(str(k), here, near, homes)
+            if meant:
+                # a slip of a key that would lower the figure: rated without it, the figure
+                # would be too high (an ignored key that raises it only errs on the safe side)
+                self.hold(f"unknown key {k!r} in {label} is ignored{hint}; it reads like "
+                          f"{meant}, which lowers what the member may carry, so no rating is "
+                          "posted until it is written right (or removed)", path,
+                          f"{path} is not read and reads like {meant}: the figure would leave "
+                          "it out. Write the key right, or remove it")
+                continue
             self.warn(f"unknown key {k!r} in {label} is ignored{hint}", path)
 
     @property
@@ -494,6 +504,38 @@ _LOWER_KEY = re.compile(r"^(?:derat|reduction|margin)", re.IGNORECASE)
 # How each table is written, for "belongs under [criteria]" ("" is the top of the file)
 _TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
            "criteria": "[criteria]", "moving": "[[moving]]", "project": "[project]"}
+
+
+# Keys that can lower what a member may carry, by table: written wrong and ignored, the
+# figure posted would be too high. (Keys that only raise it when given, such as braced,
+# repetitive or lug, are left to their warning: ignored, the figure errs on the safe side.)
+_LOWERING = {"beam": {"axis", "welded", "wet_service", "temperature"},
+             "supports": {"brace"}, "loads": {"patterned"},
+             "moving": {"dead", "wheels_per_axle"}}
+_LOWERING_WORDS = (  # key words of a table that name one of those, whatever the spelling
+    (re.compile(r"axe?s|orient|flat|on_?edge|plank|bending_?axis", re.I), "beam", "axis"),
+    (re.compile(r"weld", re.I), "beam", "welded"),
+    (re.compile(r"wet|moist|damp|exposure", re.I), "beam", "wet_service"),
+    (re.compile(r"temp|heat|hot", re.I), "beam", "temperature"),
+    (re.compile(r"pattern", re.I), "loads", "patterned"),
+    (re.compile(r"^crit|^limits?$|^checks?$|^design$", re.I), "", "criteria"))
+
+
+def _lowering_meant(key: str, here: str, near: list[str], homes: list[str]) -> str:
+    """What an unknown `key` in table `here` reads like when that is a key that lowers the
+    figure (see `_LOWERING`), in words, or "". Every unknown key of [criteria] does: each
+    key there sets a limit or a factor."""
+    for table in [here, *homes]:
+        for k in _LOWERING.get(table, ()):
+            if key == k or (table == here and near and near[0] == k):
+                return f"{k} of {_TABLES.get(table, '[' + table + ']')}"
+    if here == "criteria":
+        return "a limit or factor of [criteria]"
+    for words, table, k in _LOWERING_WORDS:
+        if words.search(key) and (table == here or k == "criteria"):
+            return ("the [criteria] table (a limit or factor)" if k == "criteria" else
+                    f"{k} of {_TABLES.get(table, '[' + table + ']')}")
+    return ""
 
 
 def _homes(key: str, here: str) -> list[str]:
@@ -1145,11 +1187,26 @@ def _placement_keys(r: _Reader, ld: dict, kind: str, key: str) -> bool:
 def _resolve(kind: str, spec, key: str, r: _Reader, **kw):
     try:
         if kind == "section":
-            return resolve_section(spec, key, **kw)
+            sec = resolve_section(spec, key, **kw)
+            _wide_first(r, spec, key, kw.get("axis"))
+            return sec
         return resolve_material(spec, key)
     except InputError as e:
         r.take(e, key)
         return None
+
+
+def _wide_first(r: _Reader, spec, key: str, axis) -> None:
+    """A lumber size written wide first ("8x2"): read as the 2x8 it is, on edge (strong
+    axis), which is right for a joist and 14x wrong for a plank laid flat; said."""
+    from shopbeam.members.catalog import _LUMBER  # noqa: PLC0415
+
+    m = _LUMBER.match(spec) if isinstance(spec, str) else None
+    if m and int(m.group(1)) > int(m.group(2)) and (axis or "strong") == "strong":
+        size = f"{m.group(2)}x{m.group(1)}"
+        r.warn(f"{spec.strip()!r} is read as a {size} ON EDGE (bent about its strong axis, as "
+               f"a joist); lumber is written thickness first ({size}). For a board laid flat "
+               "(a plank or shelf board) write axis = \"weak\" under [beam]", key)
 
 
 # Steel, aluminium, titanium and wood along the grain all have a stiffness per weight
@@ -1485,9 +1542,15 @@ _LIFTING_WORDS = re.compile(
     r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:on|from|under) (?:the|a) hook|"
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
     r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
-    r"pallet|bar) lifters?|lifters?|magnet beams?|booms?)\b",
+    r"pallet|bar) lifters?|lifters?|magnet beams?|booms?|tackle beams?|puller beams?|"
+    r"lift rails?|overhead lifts?|(?:to|for) lift|hoysts?|monorials?|tralleys?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
+# lifting words inside a tag run together with another word (a tag is a word or two, so
+# a stem anywhere in it says what it is): "hoistbeam", "jibcrane", "crane_runway",
+# "underhung", "monorial" (a slip of monorail)
+_LIFTING_STEMS = re.compile(r"hoist|lifting|liftbeam|crane|monora?il|monorial|jib(?!e)|"
+                            r"trolley|underhung|spreader|rigging|davit|gantry", re.IGNORECASE)
 NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
 # Words that name a storage-rack member; a job that uses one but is not tagged rack gets
 # neither the rack cautions (the impact load) nor the rating label's per-level wording.
@@ -1846,6 +1909,13 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     if is_lifting(tags, criteria.lifting) or NOT_LIFTING in tags:
         return ""
     said = _words_found(_LIFTING_WORDS, title, notes, tags, raw_loads, _LIFTING_TAGS)
+    # a tag written as one run-together word ("hoistbeam", "jibcrane", "liftingdevice")
+    said += [f"tag {t!r}" for t in tags if _LIFTING_STEMS.search(t)
+             and f"tag {t!r}" not in said]
+    if not any(x.startswith("title") for x in said):  # and a run-together word of the title
+        joined = [w for w in re.findall(r"[^\W\d]+", _as_words(title))
+                  if len(w) > 7 and _LIFTING_STEMS.search(w)]
+        said += [f"title: {joined[0]!r}"] if joined else []
     if moving:
         said.append("it has trolley wheels ([[moving]])")
     if not said:
@@ -1865,16 +1935,27 @@ def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
     label use one of `words`, in words for a warning."""
     said = []
     for key, text in (("title", title), ("notes", notes)):
-        m = words.search(text or "")
+        m = words.search(_as_words(text))
         if m:
             said.append(f"{key}: {m.group(0)!r}")
-    said += [f"tag {t!r}" for t in tags if words.search(t) or t in whole_tags]
+    said += [f"tag {t!r}" for t in tags if words.search(_as_words(t)) or t in whole_tags]
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         label = ld.get("label") if _is_table(ld) else None
-        if isinstance(label, str) and words.search(label):
+        if isinstance(label, str) and words.search(_as_words(label)):
             said.append(f"loads[{i}] is labelled {label!r}")
             break
     return said
+
+
+def _as_words(text) -> str:
+    """Free text as words for the word rules: full-width letters as plain ones (NFKC),
+    underscores and camel case as spaces ("hoist_beam", "LiftingBeam" -> "hoist beam",
+    "Lifting Beam"), so a word joined up in a tag or file-name style title is still read."""
+    import unicodedata  # noqa: PLC0415
+
+    t = unicodedata.normalize("NFKC", str(text or ""))
+    t = re.sub(r"(?<=[a-z])(?=[A-Z])", " ", t)
+    return t.replace("_", " ")
 
 
 _VEHICLE_WORDS = re.compile(
@@ -1885,7 +1966,11 @@ _VEHICLE_WORDS = re.compile(
     r"caravans?|tow dolly|tow dollies|fork ?lift (?:attachments?|forks?|extensions?|"
     r"booms?|jibs?|platforms?|carriages?)|fork extensions?|skid ?steers?|telehandlers?|"
     r"tractor (?:attachments?|loaders?|booms?|forks?|buckets?|frames?)|"
-    r"boat (?:racks?|bunks?))\b", re.IGNORECASE)
+    r"boat (?:racks?|bunks?)|(?:work|box|dump|stake|utility|service|flatbed|tow|semi) trucks?|"
+    r"(?<!hand )(?<!pallet )truck (?:racks?|toolbox(?:es)?|shel(?:f|ves)|beds?|boxes)|roof racks?|"
+    r"hitch (?:cargo )?(?:carriers?|racks?|baskets?)|goosenecks?|lowboys?|stake beds?|"
+    r"dump bod(?:y|ies)|atv racks?|semi(?:-| )?(?:trailers?|decks?)|"
+    r"(?:on|for|in|under) (?:my|the|a|our) (?:truck|pickup|van|trailer))\b", re.IGNORECASE)
 NOT_VEHICLE = "not-vehicle"  # the tag that says a job that reads like one is not on a vehicle
 
 

@@ -406,6 +406,28 @@ def _dead_words(job) -> str:
     return units.and_words(parts) if parts else ""
 
 
+def _dead_couple_words(job) -> list[str]:
+    """A dead couple that lowers the largest moment the other loads make: the figure counts
+    on it, and a slipped sign (+ is counterclockwise) is the usual reason it does; the label
+    says so beside the figure (a live one that relieves posts no rating at all)."""
+    from shopbeam.design.analysis import couple_notes  # noqa: PLC0415
+    from shopbeam.engine.solver import sound_solve  # noqa: PLC0415
+
+    if not any(ld.kind == "moment" and ld.case == "dead" and ld.value for ld in job.loads):
+        return []
+    try:
+        said = couple_notes(job, sound_solve(job.beam()))
+    except Exception:  # noqa: BLE001 - the rating above solved this job; nothing to add
+        return []
+    out = []
+    for note in said:
+        if note.startswith("The dead couple "):
+            name = note[len("The dead couple "):].split(",")[0]
+            out.append(f"CHECK THE SIGN of the dead couple {name} (+ is counterclockwise): it "
+                       "lowers the largest bending moment, and this figure counts on it.")
+    return out
+
+
 def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
     """The rating of a capacity result in shop words (see the module doc).
 
@@ -434,6 +456,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         status = "rated"
         figs, notes = _figures(job, k)
         notes += _connection_words(job, k)
+        notes += _dead_couple_words(job)
         imp = impact_of(job)
         if imp:
             notes.insert(0, f"Includes a {imp:.0%} impact allowance on the live loads.")
