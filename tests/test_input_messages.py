@@ -1001,3 +1001,47 @@ def test_a_table_key_given_a_plain_value_is_a_message_not_a_crash(top):
     with pytest.raises(InputErrors) as got:
         parse_job_text(text)
     assert got.value.problems
+
+
+@pytest.mark.parametrize("line, said", [
+    ('length = 96 in', 'length = "96 in"'),
+    ('length = \u201c96 in\u201d', 'curly quotes'),
+    ('tags = [rack, pallet]', 'tags = ["rack", "pallet"]'),
+    ('length = "8\' 0""', 'inch mark'),
+])
+def test_the_commonest_toml_slips_say_the_line_written_right(line, said):
+    # the TOML reader's own words ("Invalid value (column 10)") named no key and no fix
+    from shopbeam.errors import InputErrors
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = f'schema = 1\ntitle = "t"\n[beam]\n{line}\nsection = "W8x18"\nmaterial = "A992"\n'
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text, "slip.toml")
+    p = e.value.problems[0]
+    assert p.line == 4 and said in p.message, p.message
+
+
+def test_a_catalog_key_and_its_table_both_given_say_which_lines():
+    from shopbeam.errors import InputErrors
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = ('schema = 1\ntitle = "t"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[beam.material]\ne = "29000 ksi"\n')
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text, "twice.toml")
+    msg = e.value.problems[0].message
+    assert "material is given twice" in msg and "line 6" in msg and "line 7" in msg
+
+
+@pytest.mark.parametrize("value, warned", [("-1.500 lbf", True), ("-1.250 kN", True),
+                                           ("-1.5 kN", False), ("-1500 lbf", False)])
+def test_a_force_written_with_a_point_between_thousands_is_said(value, warned):
+    # "-1.500 lbf" was read as 1.5 lbf and every check passed a load 1000x too small
+    text = ('schema = 1\ntitle = "t"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            f'at = "8 ft"\ntype = "roller"\n[[loads]]\ntype = "point"\nat = "4 ft"\n'
+            f'value = "{value}"\n')
+    got = [w for w in parse_job_text(text).warnings if w.key == "loads[0].value"]
+    assert bool(got) == warned
+    if warned:
+        assert "a point between thousands" in got[0].message

@@ -315,7 +315,22 @@ class _Reader:
             self.take(e, key)
             return None
         self.ton(table[name], key)
+        self.thousands_point(table[name], kind, key)
         return value
+
+    _POINT_THOUSANDS = re.compile(r"^\s*([-+\u2212]?)(\d{1,3})\.(\d{3})\s*([^\d\s.,].*)$")
+
+    def thousands_point(self, raw, kind: str, key: str) -> None:
+        """A force or mass written "1.500 kN" as a European thousands point: read as 1.5, and
+        a load a thousand times too small passes every check. Said, with both readings (a
+        comma, "1,500", is refused for the same doubt)."""
+        m = self._POINT_THOUSANDS.match(raw) if isinstance(raw, str) else None
+        if m and kind in ("force", "line_load", "area_load"):
+            sign, a, b, unit = m.group(1), m.group(2), m.group(3), m.group(4).strip()
+            sign = "-" if sign == "\u2212" else sign
+            self.warn(f"{raw.strip()!r} is read as {sign}{float(a + '.' + b):g} {unit} (a "
+                      f"decimal point); if {sign}{a}{b} {unit} was meant (a point between "
+                      f"thousands), write \"{sign}{a}{b} {unit}\"", key)
 
     def ton(self, raw, key: str) -> None:
         """Warn that "ton" is the US short ton (a metric job's "1 ton" is usually a tonne)."""
@@ -2824,6 +2839,36 @@ _KEY_LINE = re.compile(r"""^\s*((?:[A-Za-z0-9_-]+|"[^"]*"|'[^']*')(?:\s*\.\s*(?:
 _HEADER_LINE = re.compile(r"^\s*\[\[?\s*([^\]]+?)\s*\]\]?")
 
 
+_VALUE_LINE = re.compile(r"""^\s*([A-Za-z0-9_.-]+)\s*=\s*(.*?)\s*$""")
+
+
+def _slip_words(text: str, line: int | None) -> str:
+    """The commonest slips behind a TOML error, in shop words with the line written right
+    ("" when the line is none of them): curly quotes pasted from a word processor, a value
+    with no quotes, a list of words with no quotes, an inch mark that ends the string."""
+    lines = text.splitlines()
+    here = lines[line - 1] if line and 0 < line <= len(lines) else ""
+    m = _VALUE_LINE.match(here)
+    if not m:
+        return ""
+    key, value = m.group(1), re.sub(r"\s+#[^\"']*$", "", m.group(2))
+    if re.search("[\u201c\u201d\u2018\u2019]", value):
+        fixed = re.sub("[\u201c\u201d]", '"', value)
+        return (f"{key}: the value is in curly quotes (\u201c \u201d, as a word processor or "
+                f"chat pastes them); TOML needs straight quotes: {key} = {fixed}")
+    if re.match(r"^\[[^\]\"']*[A-Za-z][^\]\"']*\]$", value):
+        words = [w.strip() for w in value[1:-1].split(",") if w.strip()]
+        return (f"{key}: each word of a list is in quotes: {key} = ["
+                + ", ".join(f'"{w}"' for w in words) + "]")
+    if re.match(r'^"[^"]*\d\s*"".*$|^"[^"]*\d"[^"]+"$', value):
+        return (f"{key}: the inch mark \" ends the string early; inside double quotes write it "
+                f"\\\" (\"8' 0\\\"\"), or write the value as \"8 ft 0 in\"")
+    if value and value[0] not in "\"'[{" and not re.match(r"^[-+]?\d[\d_]*(\.\d+)?([eE][-+]?\d+)?$|^(true|false)$", value):
+        return (f"{key}: a value with a unit or a word is written in quotes: {key} = "
+                f"\"{value}\"")
+    return ""
+
+
 def _twice_words(msg: str, text: str, line: int | None) -> str:
     """The TOML reader's "Cannot overwrite a value" / "Cannot declare ... twice" in shop words:
     which key or table is written twice, on which lines, and what to do ("" for other
@@ -2848,6 +2893,14 @@ def _twice_words(msg: str, text: str, line: int | None) -> str:
         where = f"lines {first} and {line}" if first else f"line {line}"
         return (f"the table [{name}] is written twice ({where}): a job has one [{name}]; put "
                 "all its keys under the first header and delete the second")
+    if "Cannot overwrite" in msg and head and "." in head.group(1):
+        parent, child = head.group(1).rsplit(".", 1)
+        first = next((i + 1 for i, x in enumerate(lines[:line - 1])
+                      if (k := _KEY_LINE.match(x)) and re.sub(r"\s+", "", k.group(1)) == child),
+                     None)
+        said = f" as {child} = ... on line {first}" if first else f" as {child} = ..."
+        return (f"{child} is given twice:{said} under [{parent}], and as the [{head.group(1)}] "
+                f"table on line {line}; keep one (a catalog key, or the table with its values)")
     key = _KEY_LINE.match(here)
     if not key:
         return ""
@@ -2884,7 +2937,8 @@ def parse_job_text(text: str, filename: str = "<job>") -> Job:
         m = re.search(r"\(at line (\d+), column (\d+)\)", msg)
         line = int(m.group(1)) if m else None
         msg = re.sub(r"\s*\(at line \d+, column \d+\)", "", msg)
-        said = _twice_words(msg, text.removeprefix("\ufeff"), line)
+        said = _twice_words(msg, text.removeprefix("\ufeff"), line) or \
+            _slip_words(text.removeprefix("\ufeff"), line)
         if said:
             raise InputErrors([Problem(said, "", filename, line)]) from None
         if m:
