@@ -318,3 +318,22 @@ def test_live_loads_on_a_span_and_at_its_overhangs_tip_rate_only_when_patterned(
     k = (2 * a / 360) * 24 * ei / (w * l**3 * a)
     assert cap.factor == pytest.approx(k, rel=1e-6)
     assert k < 0.5 * loose.factor  # the unpatterned factor was more than twice as high
+
+
+def test_the_json_of_a_patterned_bending_check_gives_the_cb_and_mn_its_limit_rests_on():
+    # two 20 ft spans of W12x26, 500 lbf/ft patterned, unbraced between the supports: the
+    # limit uses Cb (AISC 360-16 F1-1) from the envelope over every pattern; params gave the
+    # governing pattern's own Cb and Mn, which did not give the limit printed beside them
+    text = ('schema = 1\ntitle = "two spans"\n[beam]\nlength = "40 ft"\nsection = "W12x26"\n'
+            'material = "A992"\nself_weight = false\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "20 ft"\ntype = "pin"\n[[supports]]\nat = "40 ft"\n'
+            'type = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-500 lbf/ft"\n'
+            'patterned = true\n[criteria]\ndeflection = "L/100"\n')
+    from shopbeam.design.analysis import analyze, to_json
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    d = to_json(analyze(parse_job_text(text)))
+    c = next(c for c in d["checks"] if c["name"] == "bending")
+    p = c["params"]
+    assert p["Mn"] / p["Omega"] == pytest.approx(p["moment_limit"], rel=1e-12)
+    assert f"Cb {p['Cb']:.3f}" in c["formula"]

@@ -725,6 +725,9 @@ def pattern_checks(job, ss: "StateSet", k: float, st):
         c = replace(c, demand=abs(e_b.value), limit=allow, at=e_b.at,
                     formula=f"{BASIS_WORDS[st.basis]}: M <= Mn / Omega_b, Mn by {text}, "
                             f"Omega_b {fl.omega:g}", extra={**c.extra, "cb": cb},
+                    # the figures the limit rests on: the envelope's Cb and its Mn, not the
+                    # governing pattern's own (which the check's words do not use)
+                    params={**c.params, "Cb": cb, "Mn": allow * fl.omega},
                     **provenance(st.basis, text, "bending"))
     if len(st.ltb_segments) > 1:
         c = replace(c, detail="; ".join(x for x in (c.detail, f"unbraced length {fmt(a)} to "
