@@ -735,12 +735,15 @@ async def test_a_load_type_picked_and_picked_back_keeps_the_value_typed(tmp_path
         kind = choice_of(app, "loads", "load.type")
         kind.focus()
         await settle(pilot)
+        original = s.doc.text()
         for letter in "pu":
             await burst(pilot, letter)
             await pilot.pause(LETTER)
             await settle(pilot)
         assert s.rows("loads")[0]["type"] == "uniform"
         assert s.rows("loads")[0]["value"] == "-90 lbf/ft"
+        # every key back in its place, with its comment ("# loft deck and joists")
+        assert s.doc.text() == original
         await burst(pilot, "l")
         await pilot.pause(LETTER)
         await settle(pilot)

@@ -770,8 +770,23 @@ class JobScreen(Screen):
         for k, v in kept.get(kind, {}).items():
             if k == "value" or fields.get(k, row.get(k)) is None:
                 fields[k] = v
+        # keys dropped leave their place and comment behind, and come back into them (in
+        # the reverse of the order they left, so each lands where it was)
+        gone = [k for k, v in fields.items() if v is None and k in row]
+        back = [k for k, v in fields.items() if v is not None and k not in row]
+        order = kept.get("_gone", [])
+        back.sort(key=lambda k: -order.index(k) if k in order else 1)
+        for k in gone:
+            s._forget_or_restore(["loads", i], k, None)
+            s.doc.set_load(i, **{k: None})
+        for k in back:
+            if not s._forget_or_restore(["loads", i], k, fields[k]):
+                s.doc.set_load(i, **{k: fields[k]})
         for k, v in fields.items():
-            s.doc.set_load(i, **{k: v})
+            if k not in gone and k not in back:
+                s.doc.set_load(i, **{k: v})
+        if gone:
+            kept["_gone"] = gone
         s.touched()
 
     def _kept_for(self, where: tuple[str, int]) -> dict:
