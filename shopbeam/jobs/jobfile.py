@@ -2865,7 +2865,7 @@ def _slip_words(text: str, line: int | None) -> str:
                 f"\\\" (\"8' 0\\\"\"), or write the value as \"8 ft 0 in\"")
     if value and value[0] not in "\"'[{" and not re.match(r"^[-+]?\d[\d_]*(\.\d+)?([eE][-+]?\d+)?$|^(true|false)$", value):
         return (f"{key}: a value with a unit or a word is written in quotes: {key} = "
-                f"\"{value}\"")
+                f"\"{value.strip(chr(34) + chr(39))}\"")
     return ""
 
 
@@ -2937,8 +2937,9 @@ def parse_job_text(text: str, filename: str = "<job>") -> Job:
         m = re.search(r"\(at line (\d+), column (\d+)\)", msg)
         line = int(m.group(1)) if m else None
         msg = re.sub(r"\s*\(at line \d+, column \d+\)", "", msg)
-        said = _twice_words(msg, text.removeprefix("\ufeff"), line) or \
-            _slip_words(text.removeprefix("\ufeff"), line)
+        slip = _slip_words(text.removeprefix("\ufeff"), line)
+        said = _twice_words(msg, text.removeprefix("\ufeff"), line) or (
+            f"not valid TOML: {slip}" if slip else "")
         if said:
             raise InputErrors([Problem(said, "", filename, line)]) from None
         if m:
