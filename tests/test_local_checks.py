@@ -483,3 +483,18 @@ def test_hss_sidewall_yielding_takes_k_as_1_5_t_unless_the_radius_is_typed_in():
     wly = next(c for c in res.checks if c.name == "wall local yielding")
     tt = 0.125 * 0.93  # A500 design wall, 0.93 t_nom (AISC 360-16 B4.2, from memory)
     assert wly.limit / KIP == pytest.approx(2 * 46 * tt * 2.5 * 0.375 / 1.50, rel=1e-6)
+
+
+def test_web_sidesway_is_not_checked_at_a_brace_said_to_hold_both_flanges():
+    # AISC 360-16 J10.4 (from memory) applies where nothing holds the loaded flange and the
+    # other one against moving sideways relative to each other at the force. Braces taken as
+    # holding the top flange only (the default, conservative) leave it; braces_flange =
+    # "both" (kickers to the bottom flange) holds both at the brace, and J10.4 falls away
+    text = ('schema = 1\ntitle = "third points"\n[beam]\nlength = "20 ft"\nsection = "W12x26"\n'
+            'material = "A992"\nself_weight = false\nbraces = ["80 in", "160 in"]\n{both}'
+            '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "20 ft"\n'
+            'type = "roller"\n[[loads]]\ntype = "point"\nat = "80 in"\nvalue = "-5000 lbf"\n'
+            '[[loads]]\ntype = "point"\nat = "160 in"\nvalue = "-5000 lbf"\n')
+    names = lambda t: {c.name for c in analyze(parse_job_text(t)).checks}  # noqa: E731
+    assert "web sidesway buckling" in names(text.replace("{both}", ""))
+    assert "web sidesway buckling" not in names(text.replace("{both}", 'braces_flange = "both"\n'))

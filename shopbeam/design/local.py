@@ -358,10 +358,13 @@ def flange_stops(job) -> tuple[list[float] | None, list[float]]:
     """The points that hold each flange against moving sideways, with the member's ends:
     (top, bottom); top is None when `braced = true` holds it all along. `braces` and
     `braced` are taken as holding the top flange only; the bottom flange is held at the
-    supports that brace (conservative, see the module)."""
+    supports that brace (conservative, see the module), and at the braces too where the job
+    says they hold both flanges (`braces_flange = "both"`: kickers, full-depth
+    connections)."""
     L = job.length
     sup = [x for x in support_braces(job, job.supports) if 0.0 <= x <= L]
-    bottom = sorted({0.0, L, *sup})
+    both = getattr(job, "braces_flange", None) == "both"
+    bottom = sorted({0.0, L, *sup, *(x for x in job.braces if both and 0.0 <= x <= L)})
     if job.braced:
         return None, bottom
     return sorted({0.0, L, *sup, *(x for x in job.braces if 0.0 <= x <= L)}), bottom
@@ -421,6 +424,9 @@ def sidesway_check(job, sol, sec, forces=None, moments=None) -> Check | None:
             continue
         if any(abs(h - f.at) <= tol for h in held):
             continue  # a support that braces holds both flanges here
+        if getattr(job, "braces_flange", None) == "both" and not job.braced and \
+                any(abs(x - f.at) <= tol for x in job.braces):
+            continue  # so does a brace said to hold both flanges
         if moving:
             mc, lb, lbt, lbb = math.inf, lb_all, lb_all, lb_all
         else:
@@ -461,7 +467,8 @@ def _sidesway(job, sec, dm, my, omega, moving, f, rn, eq, r, cr, mc, lb, lbt, lb
                  f"{units.fmt(my, 'moment', sy)}); Lb {ln(lb)}, the largest unbraced length "
                  f"of either flange at the force (top flange {ln(lbt) if lbt else 'braced all along'}, "
                  f"bottom flange {ln(lbb)})")
-    hold = ("braces and braced = true are taken as holding the top flange only (conservative); "
+    hold = ("braces and braced = true are taken as holding the top flange only (conservative; "
+            "braces_flange = \"both\" says the braces hold the bottom flange too); "
             "the bottom flange is held only at the supports that brace; the loaded flange is "
             "not taken as restrained against rotation, so J10-7 (restrained = true would hold "
             "the flanges against relative sideways movement, and J10.4 would not apply)")
