@@ -1099,3 +1099,12 @@ def test_a_lumber_size_written_wide_first_says_how_it_is_read():
     assert len(got) == 1 and "2x8 ON EDGE" in got[0].message and 'axis = "weak"' in got[0].message
     assert not [w for w in warnings(parse_job_text(job_text(section="2x8", material="DF-L-2")))
                 if w.key == "beam.section"]
+
+
+@pytest.mark.parametrize("title", ["Shelf for the van der Berg order",
+                                   "Shelf in the trailer park office",
+                                   "Shelf for lift truck batteries"])
+def test_names_and_places_that_only_look_like_a_vehicle_or_a_hoist_are_not_held(title):
+    job = parse_job_text(job_text().replace('title = "shelf"', f'title = "{title}"'))
+    assert not any("road vehicle" in w.message or "lifting device" in w.message
+                   for w in warnings(job))

@@ -1558,7 +1558,7 @@ _LIFTING_WORDS = re.compile(
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
     r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
     r"pallet|bar) lifters?|lifters?|magnet beams?|booms?|tackle beams?|puller beams?|"
-    r"lift rails?|overhead lifts?|(?:to|for) lift|hoysts?|monorials?|tralleys?)\b",
+    r"lift rails?|overhead lifts?|(?:to|for) lift(?! trucks?\b)|hoysts?|monorials?|tralleys?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
 # lifting words inside a tag run together with another word (a tag is a word or two, so
@@ -1974,8 +1974,8 @@ def _as_words(text) -> str:
 
 
 _VEHICLE_WORDS = re.compile(
-    r"\b(trailers?|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
-    r"vehicles?|chassis|car haulers?|cargo decks?|vans?|utes?|pickup (?:ladder )?(?:racks?|box(?:es)?)|"
+    r"\b(trailers?(?! parks?\b)|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
+    r"vehicles?|chassis|car haulers?|cargo decks?|vans?(?! de[nr]?\b)|utes?|pickup (?:ladder )?(?:racks?|box(?:es)?)|"
     r"service bod(?:y|ies)|headache racks?|ladder racks? (?:on|for) (?:a|the) (?:truck|van)|"
     r"bus (?:luggage|racks?|shel(?:f|ves))|luggage racks?|rvs?|campers?|motor ?homes?|"
     r"caravans?|tow dolly|tow dollies|fork ?lift (?:attachments?|forks?|extensions?|"
@@ -1985,7 +1985,8 @@ _VEHICLE_WORDS = re.compile(
     r"(?<!hand )(?<!pallet )truck (?:racks?|toolbox(?:es)?|shel(?:f|ves)|beds?|boxes)|roof racks?|"
     r"hitch (?:cargo )?(?:carriers?|racks?|baskets?)|goosenecks?|lowboys?|stake beds?|"
     r"dump bod(?:y|ies)|atv racks?|semi(?:-| )?(?:trailers?|decks?)|"
-    r"(?:on|for|in|under) (?:my|the|a|our) (?:truck|pickup|van|trailer))\b", re.IGNORECASE)
+    r"(?:on|for|in|under) (?:my|the|a|our) (?:truck|pickup|van(?! de)|trailer(?! park)))\b",
+    re.IGNORECASE)
 NOT_VEHICLE = "not-vehicle"  # the tag that says a job that reads like one is not on a vehicle
 
 

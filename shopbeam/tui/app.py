@@ -1240,8 +1240,8 @@ class ShopbeamApp(App):
 
     def _letter_behind(self, text: bool) -> None:
         """The letter (or space) held on a choice, if any, is settled: a pick (nothing
-        printable came within ALONE behind it), or text (`text`: a printable key came right behind it),
-        which is not used and is named in the notice of keys not used, never a pick."""
+        printable came within ALONE behind it), or text (`text`: a printable key came right
+        behind it), which is not used and is named in the notice of keys not used."""
         held, self._held_letter = self._held_letter, None
         if held is None:
             return
