@@ -180,8 +180,12 @@ def test_a_deflection_limit_looser_than_l_100_is_warned_and_l_180_is_not():
     w = [p for p in warnings(job) if p.key == "criteria.deflection"]
     assert len(w) == 1 and '"L/240"' in w[0].message
     assert job.criteria.deflection_ratio == 24  # used as written: a warning, not a rewrite
+    from shopbeam.design.capacity import capacity  # and no rating rests on it
+
+    assert any("L/24" in r for r in capacity(job).not_rated)
     job = parse_job_text(job_text(criteria='deflection = "L/180"'))
     assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
+    assert capacity(job).rated
 
 
 # ------------------------------------------------------------------ a grade the product is not made to

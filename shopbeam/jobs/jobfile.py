@@ -695,10 +695,14 @@ def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | 
             r.error(f"{text!r}: n in L/n must be positive", key)
             return text, None, None, ""
         if n < LOOSEST_COMMON_RATIO:
-            r.warn(f"{text!r} allows a deflection of 1/{n:g} of the span, looser than any common "
+            r.hold(f"{text!r} allows a deflection of 1/{n:g} of the span, looser than any common "
                    f"limit (L/{LOOSEST_COMMON_RATIO:g} is already loose; racks, shelves and "
                    "floors use L/180 to L/360, hoist beams L/450 and stiffer): did you mean "
-                   f"\"L/{n * 10:g}\"?", key)
+                   f"\"L/{n * 10:g}\"? No rating is posted on it; a loose limit meant on "
+                   "purpose is written as a length (e.g. \"2 in\")", key,
+                   f"the deflection limit {text} is looser than any common limit (likely a "
+                   f"dropped zero: L/{n * 10:g}?); a rating would rest on it. Write the limit "
+                   "meant, or a loose one meant on purpose as a length (e.g. \"2 in\")")
         return text, n, None, ""
     try:
         return text, None, units.parse(text, "length", key, positive=True), ""
