@@ -141,3 +141,64 @@ def test_a_member_called_glulam_with_sawn_lumber_values_is_not_rated():
     assert any("glulam" in r and "5.3.6" in r for r in capacity(job).not_rated)
     plain = parse_job_text(text.replace("Glulam 24F-V4 header", "Header"))
     assert not any("glulam" in r for r in capacity(plain).not_rated)
+
+
+# --------------------------------------------------------- fatigue, when the job gives it
+
+def test_the_allowable_stress_range_of_eq_a_3_1():
+    # AISC 360-16 eq. A-3-1 with Table A-3.1 (from memory): F_SR = (C_f / n)^0.333 >= F_TH;
+    # at 2,000,000 cycles the long-standing allowable ranges, A 24 (the threshold), B 18,
+    # C 13, E 8 and E' 5.8 ksi
+    from shopbeam.design import fatigue
+
+    ksi = fatigue.KSI
+    assert fatigue.allowable_range("A", 2e6) / ksi == pytest.approx(24.0)
+    assert fatigue.allowable_range("B", 2e6) / ksi == pytest.approx(18.0, rel=0.01)
+    assert fatigue.allowable_range("C", 2e6) / ksi == pytest.approx(13.0, rel=0.01)
+    assert fatigue.allowable_range("E", 2e6) / ksi == pytest.approx(8.0, rel=0.025)
+    assert fatigue.allowable_range("E'", 2e6) / ksi == pytest.approx(5.8, rel=0.01)
+    assert fatigue.allowable_range("E", 1e9) / ksi == pytest.approx(4.5)  # the threshold
+    assert fatigue.allowable_range("E", 19_999) == float("inf")  # A-3.1: no check
+
+
+FATIGUE_JOB = ('schema = 1\ntitle = "conveyor hanger beam"\n[beam]\nlength = "10 ft"\n'
+               'section = "W8x18"\nmaterial = "A992"\nself_weight = false\nbraced = true\n'
+               '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "10 ft"\n'
+               'type = "roller"\n[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-1000 lbf"\n'
+               '[criteria]\nfatigue_category = "{cat}"\ncycles = {n}\n')
+
+
+def test_a_rating_past_the_fatigue_range_is_not_posted_and_says_the_factor_that_keeps_within():
+    # W8x18, 10 ft simple span, 1000 lbf at mid-span: the live moment is PL/4 = 30 kip-in,
+    # the range 30 / Sx; category E' at 10,000,000 cycles: F_SR = (3.9e8 / 1e7)^0.333 ksi
+    job = parse_job_text(FATIGUE_JOB.format(cat="E'", n="10000000"))
+    sx = min(job.section.sx_top, job.section.sx_bot) / 0.0254**3  # in^3
+    fr1 = 30.0 / sx  # ksi at the loads as entered
+    fsr = (3.9e8 / 1e7) ** 0.333
+    res = capacity(job)
+    assert res.factor > fsr / fr1  # the strength checks alone would post more
+    why = [r for r in res.not_rated if r.startswith("fatigue:")]
+    assert len(why) == 1 and f"{fsr / fr1:.4g} x as entered" in why[0], res.not_rated
+    # fewer than 20,000 cycles need no fatigue check (A-3.1): the strength rating stands
+    assert capacity(parse_job_text(FATIGUE_JOB.format(cat="E'", n="10000"))).rated
+
+
+def test_fatigue_keys_come_in_pairs_and_name_a_category_of_table_a_3_1():
+    from shopbeam.errors import InputErrors
+
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(FATIGUE_JOB.format(cat="E", n="2e6").replace("cycles = 2e6\n", ""))
+    assert any(p.key == "criteria.cycles" and "give both" in p.message for p in e.value.problems)
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(FATIGUE_JOB.format(cat="F", n="2000000"))
+    assert any(p.key == "criteria.fatigue_category" for p in e.value.problems)
+
+
+def test_a_trailer_member_with_its_fatigue_detail_given_is_judged_not_held():
+    text = (PRESETS / "trailer-cross-member.toml").read_text(encoding="utf-8").replace(
+        'impact = "100%"', 'impact = "100%"\nfatigue_category = "{c}"\ncycles = 2000000', 1)
+    welded = capacity(parse_job_text(text.replace("{c}", "E")))
+    assert not welded.rated and any(r.startswith("fatigue:") for r in welded.not_rated)
+    assert not any("fatigue under road loads" in r for r in welded.not_rated)
+    plain = capacity(parse_job_text(text.replace("{c}", "A")))
+    assert plain.rated

@@ -352,14 +352,18 @@ def use_unchecked(job: Job) -> list[Unchecked]:
                 "endwise",
                 "AISC 360-16 E3, H1-1"))
     road = getattr(job, "vehicle", "")
-    if road and FATIGUE_CHECKED not in job.tags:
+    from shopbeam.design import fatigue  # noqa: PLC0415
+
+    if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job):
         out.append(Unchecked(
             "fatigue under road loads",
             f"it reads like a member of a road vehicle or mobile machine ({road}): every bump "
             "is a load cycle, and welds, holes and attachments crack under a stress range far "
-            "below the static strength checked here (fatigue is not checked). Have the "
-            "member's details checked for fatigue, then add the tag \"fatigue-checked\"; or "
-            "the tag \"not-vehicle\" if it is not on a vehicle",
+            "below the static strength checked here. Give the detail's stress category "
+            "and the number of load cycles under [criteria] (fatigue_category = \"E\" for a "
+            "fillet-welded attachment, cycles = 2000000, AISC 360-16 Table A-3.1) to have "
+            "it checked; or add the tag \"fatigue-checked\" once it has been checked "
+            "elsewhere, or \"not-vehicle\" if it is not on a vehicle",
             "AISC 360-16 Appendix 3"))
     return out
 

@@ -39,6 +39,7 @@ from shopbeam.members.catalog import other_metal_on_steel_shape
 from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
+from shopbeam.design import fatigue
 from shopbeam.cautions import RACK_TAGS
 from shopbeam.jobs.rules import rack_arm
 from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
@@ -428,16 +429,61 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     sweep's listed rows; `ss` is solved here when None and either can apply."""
     hog, top = hogging_limits(job, st), cantilever_top_limits(job, st)
     span = span_top_limits(job, st)
-    if not (hog or top or span) or not math.isfinite(k) or k <= 0:
+    fat = fatigue.given(job)
+    if not (hog or top or span or fat) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
     out = _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k) \
-        + _span_top(job, st, span, ss, k)
+        + _span_top(job, st, span, ss, k) + (_fatigue(job, st, ss, k) if fat else ())
     # the dead loads alone (k = 0) too: a live load that relieves them (wind uplift on a
     # roof's dead weight) can leave the rated state inside a limit the unloaded one passes
     out += _hogging(job, st, hog, ss, 0.0) + _cantilever_top(job, top, ss, 0.0) \
         + _span_top(job, st, span, ss, 0.0)
     return tuple(dict.fromkeys(out))
+
+
+def fatigue_range(job, st, ss, k: float) -> tuple[float, float] | None:
+    """(live stress range, allowable F_SR), Pa, at the factor k (see design.fatigue), or None
+    where it is not worked out (a moving load)."""
+    if ss.parts.moving:
+        return None
+    kk = k * (1 + ss.parts.impact)
+    live = ss.live.moment
+    if not ss.spans:
+        m = abs(live.extremes(0.0, job.length).abs_max)
+    else:  # each piece: what the static live load and each span's load add, either way
+        br = live.breaks
+        m = 0.0
+        for a, b in zip(br[:-1], br[1:]):
+            if b - a <= 0:
+                continue
+            m = max(m, sum(abs(f.extremes(float(a), float(b)).abs_max)
+                           for f in [live] + [sp.moment for sp in ss.spans]))
+    sec = getattr(st, "section", None) or job.section
+    s = min(sec.sx_top, sec.sx_bot)
+    c = job.criteria
+    return kk * m / s, fatigue.allowable_range(c.fatigue_category, c.cycles)
+
+
+def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
+    """No rating where the live-load stress range at the factor k exceeds the detail's
+    allowable range (AISC 360-16 Appendix 3; `design.fatigue`)."""
+    if getattr(job.material, "kind", "") not in ("steel", "stainless"):
+        return ("fatigue not checked: the stress categories of AISC 360-16 Appendix 3 are "
+                "for steel, and this member is not steel; have it checked by its own "
+                "material's fatigue rules, or remove fatigue_category and cycles",)
+    got = fatigue_range(job, st, ss, k)
+    if got is None:
+        return ("fatigue not checked: the stress range of a moving load over its travel is "
+                "not worked out here; have it checked, or remove fatigue_category and cycles",)
+    fr, fsr = got
+    if fr <= fsr * (1 + 1e-9):
+        return ()
+    f = lambda v: units.fmt(v, "stress", job.units)  # noqa: E731
+    return (f"fatigue: {_at(k)} the live-load stress range reaches {f(fr)}, above the "
+            f"{f(fsr)} the detail may take ({fatigue.words(job, fsr)}); the live loads at "
+            f"{fsr / fr * k:.4g} x as entered keep within it (the range is taken where it is "
+            "largest along the member, with the impact allowance)",)
 
 
 def _at(k: float) -> str:

@@ -52,7 +52,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "loads": {"type", "at", "start", "end", "value", "label", "case", "width", "total",
               "patterned", "uplift", "bearing", "flange", "wheels", "lug"},
     "criteria": {"deflection", "safety_factor", "basis", "impact", "duration",
-                 "live_deflection", "lifting", "category"},
+                 "live_deflection", "lifting", "category", "fatigue_category", "cycles"},
     "moving": {"label", "loads", "dead", "spacing", "travel", "case", "wheels_per_axle",
                "wheel_edge"},
     "project": set(),  # filled from PROJECT_KEYS below
@@ -82,6 +82,10 @@ class Criteria:
     # used, or too little margin on first yield); "" when it does not
     factor_gap: str = ""
     category: str = ""  # ASME BTH-1 design category "A" or "B" (below-the-hook beams)
+    # fatigue (AISC 360-16 Appendix 3): the detail's stress category ("A" ... "E'", upper
+    # case) and the number of stress-range cycles over the member's life; "" / None: not given
+    fatigue_category: str = ""
+    cycles: float | None = None
 
 
 @dataclass(frozen=True)
@@ -668,9 +672,42 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                f"{LIFTING_PROFILES[lift]['impact']:.0%} of the "
                f"{lift} profile ({LIFTING_PROFILES[lift]['impact_source']}); the checks use "
                "the value written", "criteria.impact")
+    fat_cat, cycles = _read_fatigue(r, crit)
     return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given,
                     live_deflection_ratio=live, lifting=lift, category=cat,
-                    factor_gap=unused)
+                    factor_gap=unused, fatigue_category=fat_cat, cycles=cycles)
+
+
+def _read_fatigue(r: _Reader, crit: dict) -> tuple[str, float | None]:
+    """[criteria] fatigue_category and cycles (AISC 360-16 Appendix 3): both or neither."""
+    from shopbeam.design.fatigue import CATEGORIES  # noqa: PLC0415
+
+    cat, n = "", None
+    if "fatigue_category" in crit:
+        raw = crit["fatigue_category"]
+        cat = raw.strip().upper().replace("\u2019", "'") if isinstance(raw, str) else ""
+        if cat not in CATEGORIES:
+            r.error(f"fatigue_category {raw!r} is not an AISC 360-16 Table A-3.1 stress "
+                    "category; use one of " + ", ".join(f'"{c}"' for c in CATEGORIES)
+                    + " (a plain rolled member A, a fillet-welded attachment usually E)",
+                    "criteria.fatigue_category")
+            cat = ""
+    if "cycles" in crit:
+        raw = crit["cycles"]
+        try:
+            n = float(raw.replace("_", "")) if isinstance(raw, str) else float(raw)
+        except (TypeError, ValueError):
+            n = None
+        if isinstance(raw, bool) or n is None or not math.isfinite(n) or n <= 0:
+            r.error(f"cycles {raw!r}: the number of stress-range cycles over the member's life, "
+                    "a plain number such as 2000000 or 2e6", "criteria.cycles")
+            n = None
+    if ("fatigue_category" in crit) != ("cycles" in crit):
+        r.error("fatigue is checked with both fatigue_category (the detail's stress category) "
+                "and cycles (how many times the load comes and goes over the member's life): "
+                "give both", "criteria.fatigue_category" if "cycles" in crit else
+                "criteria.cycles")
+    return cat, n
 
 
 # Below L/100 a deflection limit is almost certainly a slip (a dropped zero): the loosest

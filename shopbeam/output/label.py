@@ -457,6 +457,13 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         figs, notes = _figures(job, k)
         notes += _connection_words(job, k)
         notes += _dead_couple_words(job)
+        from shopbeam.design import fatigue  # noqa: PLC0415
+
+        if fatigue.given(job):
+            c = job.criteria
+            notes.append(f"Fatigue checked at this rating: a category {c.fatigue_category} "
+                         f"detail, {c.cycles:,.0f} load cycles (AISC 360-16 Appendix 3; the "
+                         "largest live stress range along the member).")
         imp = impact_of(job)
         if imp:
             notes.insert(0, f"Includes a {imp:.0%} impact allowance on the live loads.")
