@@ -239,6 +239,13 @@ def analyze(job: Job) -> Result:
     else:
         checks = run_checks(job, sol)
     st = strengths(job)
+    from shopbeam.design import fatigue  # noqa: PLC0415
+
+    if fatigue.given(job):  # the fatigue limit state at the loads as entered (k = 1)
+        from shopbeam.design.capacity import fatigue_check  # noqa: PLC0415
+
+        c = fatigue_check(job, st, loading.state_set(job), 1.0)
+        checks = list(checks) + ([c] if c is not None else [])
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment) \
         + span_top_unchecked(job, st, sol.moment)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \

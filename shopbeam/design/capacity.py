@@ -353,9 +353,49 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     ss = ss or state_set(job, section)
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
-    res = _capacity(job, section, ss, st)
+    res = _fatigue_cap(job, section, ss, st, _capacity(job, section, ss, st))
     return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
                    + _relieving_couples(job, section, res.factor))
+
+
+def fatigue_check(job, st, ss, k: float) -> Check | None:
+    """The fatigue limit state at the factor k (AISC 360-16 Appendix 3, `design.fatigue`)
+    as a check, or None where the job gives no fatigue detail or it is not worked out here
+    (not steel, a moving load: `_fatigue` then holds the rating)."""
+    if not fatigue.given(job) or getattr(job.material, "kind", "") not in ("steel", "stainless"):
+        return None
+    got = fatigue_range(job, st, ss, k)
+    if got is None:
+        return None
+    fr, fsr = got
+    if not math.isfinite(fsr):
+        return None  # fewer than 20,000 cycles: no fatigue check is needed (A-3.1)
+    return Check("fatigue", fr, fsr, "Pa",
+                 "live-load stress range (every live load on and off, with the impact "
+                 "allowance; the largest along the member) against " + fatigue.words(job, fsr),
+                 clause="AISC 360-16 Appendix 3, eq. A-3-1", source="AISC 360-16",
+                 params={"F_SR": fsr, "cycles": float(job.criteria.cycles)})
+
+
+def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
+    """Fatigue is a limit state like the others: the live stress range grows with k, so the
+    factor where it reaches F_SR is k x F_SR / range, and the rating is the lower of that and
+    the strength search's (the checks at that factor, with the fatigue check among them)."""
+    k = res.factor
+    if not fatigue.given(job) or res.evaluation is None or not math.isfinite(k) or k <= 0:
+        return res
+    c = fatigue_check(job, st, ss, k)
+    if c is None:
+        return res
+    if c.ratio <= 1.0 + 1e-12:
+        e = replace(res.evaluation, checks=tuple(res.evaluation.checks) + (c,))
+        return replace(res, evaluation=e)
+    k_f = k / c.ratio * (1 - 1e-12)  # the range is proportional to k: its own root, a hair in
+    e = evaluate(job, k_f, section, ss, st)
+    c = fatigue_check(job, st, ss, k_f)
+    return replace(res, factor=k_f, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
+                   method="closed form for fatigue: the live stress range is proportional "
+                          "to k (the strength checks would allow " + f"{k:.4g})")
 
 
 MAX_COUPLES_TRIED = 4  # live couples each taken off in turn (one capacity search each)
