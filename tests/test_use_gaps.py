@@ -202,3 +202,25 @@ def test_a_trailer_member_with_its_fatigue_detail_given_is_judged_not_held():
     assert welded.rated and welded.governing.name == "fatigue"
     plain = capacity(parse_job_text(text.replace("{c}", "A")))
     assert plain.rated and plain.factor > welded.factor
+
+
+def test_a_sizing_sweep_picks_the_lightest_section_that_passes_fatigue_too():
+    # the trailer's cross member with a fillet-welded attachment (category E, 2e6 cycles):
+    # its own C3x4.1 passes strength at the loads as entered but not fatigue, so it is not
+    # the lightest that passes; the one named passes both (its fatigue ratio at most 1)
+    from shopbeam.design.sizing import size
+    from shopbeam.design.loading import state_set
+    from shopbeam.design.capacity import fatigue_check
+    from shopbeam.design.checks import strengths
+    from dataclasses import replace
+
+    text = (PRESETS / "trailer-cross-member.toml").read_text(encoding="utf-8").replace(
+        'impact = "100%"', 'impact = "100%"\nfatigue_category = "E"\ncycles = 2000000', 1)
+    job = parse_job_text(text)
+    own = fatigue_check(job, strengths(job), state_set(job), 1.0)
+    assert own.ratio > 1
+    res = size(job, "C")
+    best = res.lightest
+    assert best is not None and best.designation != "C3X4.1"
+    j = replace(job, section=best.section, material=best.material)
+    assert fatigue_check(j, strengths(j), state_set(j), 1.0).ratio <= 1.0

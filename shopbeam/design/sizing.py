@@ -41,7 +41,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.capacity import capacity, rating_gaps, solved_gaps
+from shopbeam.design.capacity import capacity, fatigue_check, rating_gaps, solved_gaps
 from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
@@ -1093,6 +1093,9 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
         ss = state_set(j)  # shared: the moving-load cells and parts cached on it are reused
         ev = evaluate(j, 1.0, ss=ss)
         g = max(ev.checks, key=lambda c: c.ratio)
+        fat = fatigue_check(j, strengths(j, beam=ss.beam), ss, 1.0)  # fatigue given: a check
+        if fat is not None and fat.ratio > g.ratio:
+            g = fat
         # k of a section that fails at the entered loads is below 1 and never listed
         cap = capacity(j, ss=ss) if with_capacity and g.ratio <= 1.0 else None
         kf = cap.factor if cap is not None else float("nan")
