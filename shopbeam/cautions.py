@@ -32,8 +32,9 @@ SHELF_TAGS = frozenset({"shelf", "shelving"})
 
 
 def normal_tag(tag) -> str:
-    """A tag as compared everywhere: ``"Lifting "`` and ``"lifting"`` are the same tag."""
-    return str(tag).strip().lower()
+    """A tag as compared everywhere: ``"Lifting "`` and ``"lifting"`` are the same tag, and
+    ``"not_lifting"`` is ``"not-lifting"``."""
+    return str(tag).strip().lower().replace("_", "-")
 
 
 def is_lifting(tags, profile: str = "") -> bool:

@@ -68,8 +68,7 @@ def length_formatter(system: str):
 # memory); the entered loads do not include it unless the job says so.
 RACK_IMPACT = ("Storage-rack beams are designed for an impact load besides the product load "
                "(ANSI MH16.1: 25 % of one unit load, placed where it does the most harm; from "
-               "memory); these checks do not add it. Add it as a live load (the heaviest "
-               "pallet again at 25 %, label \"impact\"), or set [criteria] impact = \"25%\" "
+               "memory); these checks do not add it: set [criteria] impact = \"25%\" "
                "(on every live load: conservative). ")
 RACK_REST = ("Beam connectors, upright frames and anchors often govern a storage rack and are "
              "not checked here.")
@@ -79,7 +78,7 @@ RACK_REST = ("Beam connectors, upright frames and anchors often govern a storage
 # and the arm connections carry it on to the floor.
 ARM_IMPACT = ("Cantilever-rack arms are designed for the loads ANSI MH16.3 sets (from memory), "
               "which include an allowance for placing the load with a lift truck or crane; "
-              "these checks add no impact. Add it as a live load, or set [criteria] impact. ")
+              "these checks add no impact: set [criteria] impact. ")
 ARM_REST = ("The upright column of a cantilever rack, its base and anchors, the arm-to-column "
             "connection and the arm's lip or stop often govern it and are not checked here.")
 
@@ -242,9 +241,7 @@ def analyze(job: Job) -> Result:
     from shopbeam.design import fatigue  # noqa: PLC0415
 
     if fatigue.given(job):  # the fatigue limit state at the loads as entered (k = 1)
-        from shopbeam.design.capacity import fatigue_check  # noqa: PLC0415
-
-        c = fatigue_check(job, st, loading.state_set(job), 1.0)
+        c = fatigue.fatigue_check(job, st, loading.state_set(job), 1.0)
         checks = list(checks) + ([c] if c is not None else [])
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment) \
         + span_top_unchecked(job, st, sol.moment)
@@ -350,7 +347,10 @@ def use_unchecked(job: Job) -> list[Unchecked]:
                 "checked as a beam-column, or add the tag \"no-axial\" if the slings hang "
                 "plumb (two hooks, or a spreader above)",
                 "ASME BTH-1 3-2.2 and 3-2.5; AISC 360-16 E3, H1-1"))
-        elif name in ("jib-boom", "hand-geared-jib") and len(held) >= 2:
+        elif len(held) >= 2 and (name in ("jib-boom", "hand-geared-jib") or (
+                not prof and re.search(r"\bjibs?\b|jib[- ]?(?:crane|boom|arm)",
+                                       " ".join([job.title, job.notes, *job.tags]),
+                                       re.IGNORECASE))):
             out.append(Unchecked(
                 "axial compression from a tie rod or knee brace",
                 "the boom is held at two places: a tie rod or knee brace pushes it endwise "
@@ -361,7 +361,8 @@ def use_unchecked(job: Job) -> list[Unchecked]:
     road = getattr(job, "vehicle", "")
     from shopbeam.design import fatigue  # noqa: PLC0415
 
-    if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job):
+    parked = job.criteria.impact == 0 and not job.lifting  # loaded only while parked
+    if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job) and not parked:
         out.append(Unchecked(
             "fatigue under road loads",
             f"it reads like a member of a road vehicle or mobile machine ({road}): every bump "

@@ -250,21 +250,19 @@ def _rack_impact_gap(job) -> list[str]:
     """A storage-rack member rated with no impact: a rack beam is designed for the product
     load plus an impact load (ANSI MH16.1: 25 % of one unit load where it does most harm),
     a cantilever-rack arm for the loads ANSI MH16.3 sets (both from memory). A job that
-    gives `impact` (even "0%", said on purpose) or a live load labelled impact is rated."""
+    gives `impact` (even "0%", said on purpose) is rated; a load entered for the impact is
+    not enough (it would be posted as product)."""
     if not RACK_TAGS.intersection(job.tags) or job.criteria.impact is not None:
-        return []
-    if any("impact" in (ld.label or "").lower() and ld.case == "live" for ld in job.loads):
         return []
     if rack_arm(job.tags, job.supports, job.length):
         return ["a cantilever-rack arm is rated for its load with the allowance ANSI MH16.3 "
                 "sets for placing it with a lift truck or crane (from memory), and the job "
                 "gives no impact: write [criteria] impact = \"25%\" (or the rack maker's "
-                "figure), or add the impact as a live load labelled \"impact\""]
+                "figure)"]
     return ["a storage-rack beam is rated for the product load plus an impact load (ANSI "
             "MH16.1: 25 % of one unit load, where it does the most harm; from memory), and the "
             "job gives none: write [criteria] impact = \"25%\" (on every live load: on the "
-            "safe side), or add the heaviest unit load again at 25 % as a live load labelled "
-            "\"impact\""]
+            "safe side; a load entered for the impact would be posted as product)"]
 
 
 def _lifting_spread(job) -> list[str]:
@@ -358,25 +356,6 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
                    + _relieving_couples(job, section, res.factor))
 
 
-def fatigue_check(job, st, ss, k: float) -> Check | None:
-    """The fatigue limit state at the factor k (AISC 360-16 Appendix 3, `design.fatigue`)
-    as a check, or None where the job gives no fatigue detail or it is not worked out here
-    (not steel, a moving load: `_fatigue` then holds the rating)."""
-    if not fatigue.given(job) or getattr(job.material, "kind", "") not in ("steel", "stainless"):
-        return None
-    got = fatigue_range(job, st, ss, k)
-    if got is None:
-        return None
-    fr, fsr = got
-    if not math.isfinite(fsr):
-        return None  # fewer than 20,000 cycles: no fatigue check is needed (A-3.1)
-    return Check("fatigue", fr, fsr, "Pa",
-                 "live-load stress range (every live load on and off, with the impact "
-                 "allowance; the largest along the member) against " + fatigue.words(job, fsr),
-                 clause="AISC 360-16 Appendix 3, eq. A-3-1", source="AISC 360-16",
-                 params={"F_SR": fsr, "cycles": float(job.criteria.cycles)})
-
-
 def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     """Fatigue is a limit state like the others: the live stress range grows with k, so the
     factor where it reaches F_SR is k x F_SR / range, and the rating is the lower of that and
@@ -384,7 +363,7 @@ def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     k = res.factor
     if not fatigue.given(job) or res.evaluation is None or not math.isfinite(k) or k <= 0:
         return res
-    c = fatigue_check(job, st, ss, k)
+    c = fatigue.fatigue_check(job, st, ss, k)
     if c is None:
         return res
     if c.ratio <= 1.0 + 1e-12:
@@ -392,7 +371,7 @@ def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
         return replace(res, evaluation=e)
     k_f = k / c.ratio * (1 - 1e-12)  # the range is proportional to k: its own root, a hair in
     e = evaluate(job, k_f, section, ss, st)
-    c = fatigue_check(job, st, ss, k_f)
+    c = fatigue.fatigue_check(job, st, ss, k_f)
     return replace(res, factor=k_f, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
                    method="closed form for fatigue: the live stress range is proportional "
                           "to k (the strength checks would allow " + f"{k:.4g})")
@@ -482,29 +461,6 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     return tuple(dict.fromkeys(out))
 
 
-def fatigue_range(job, st, ss, k: float) -> tuple[float, float] | None:
-    """(live stress range, allowable F_SR), Pa, at the factor k (see design.fatigue), or None
-    where it is not worked out (a moving load)."""
-    if ss.parts.moving:
-        return None
-    kk = k * (1 + ss.parts.impact)
-    live = ss.live.moment
-    if not ss.spans:
-        m = abs(live.extremes(0.0, job.length).abs_max)
-    else:  # each piece: what the static live load and each span's load add, either way
-        br = live.breaks
-        m = 0.0
-        for a, b in zip(br[:-1], br[1:]):
-            if b - a <= 0:
-                continue
-            m = max(m, sum(abs(f.extremes(float(a), float(b)).abs_max)
-                           for f in [live] + [sp.moment for sp in ss.spans]))
-    sec = getattr(st, "section", None) or job.section
-    s = min(sec.sx_top, sec.sx_bot)
-    c = job.criteria
-    return kk * m / s, fatigue.allowable_range(c.fatigue_category, c.cycles)
-
-
 def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
     """No rating where the live-load stress range at the factor k exceeds the detail's
     allowable range (AISC 360-16 Appendix 3; `design.fatigue`)."""
@@ -512,7 +468,7 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
         return ("fatigue not checked: the stress categories of AISC 360-16 Appendix 3 are "
                 "for steel, and this member is not steel; have it checked by its own "
                 "material's fatigue rules, or remove fatigue_category and cycles",)
-    got = fatigue_range(job, st, ss, k)
+    got = fatigue.fatigue_range(job, st, ss, k)
     if got is None:
         return ("fatigue not checked: the stress range of a moving load over its travel is "
                 "not worked out here; have it checked, or remove fatigue_category and cycles",)

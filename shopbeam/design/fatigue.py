@@ -18,11 +18,10 @@ from __future__ import annotations
 import math
 
 from shopbeam import units
+from shopbeam.design.results import Check
+from shopbeam.jobs.rules import FATIGUE_CATEGORIES as CATEGORIES
 
 KSI = 6.894757293168361e6  # Pa
-# stress category: (C_f in ksi^3, F_TH in ksi), AISC 360-16 Table A-3.1 (from memory)
-CATEGORIES = {"A": (250e8, 24.0), "B": (120e8, 16.0), "B'": (61e8, 12.0), "C": (44e8, 10.0),
-              "D": (22e8, 7.0), "E": (11e8, 4.5), "E'": (3.9e8, 2.6)}
 FEW_CYCLES = 20_000  # A-3.1: no fatigue check below this many cycles
 
 
@@ -46,3 +45,45 @@ def words(job, fsr: float) -> str:
              f"F_SR = (C_f / n)^0.333 >= F_TH = {units.fmt(fsr, 'stress', job.units)}")
     return (f"AISC 360-16 Appendix 3, eq. A-3-1 (Table A-3.1, from memory): category "
             f"{c.fatigue_category}, {n} cycles: {limit}")
+
+
+def fatigue_range(job, st, ss, k: float) -> tuple[float, float] | None:
+    """(live stress range, allowable F_SR), Pa, at the factor k (see design.fatigue), or None
+    where it is not worked out (a moving load)."""
+    if ss.parts.moving:
+        return None
+    kk = k * (1 + ss.parts.impact)
+    live = ss.live.moment
+    if not ss.spans:
+        m = abs(live.extremes(0.0, job.length).abs_max)
+    else:  # each piece: what the static live load and each span's load add, either way
+        br = live.breaks
+        m = 0.0
+        for a, b in zip(br[:-1], br[1:]):
+            if b - a <= 0:
+                continue
+            m = max(m, sum(abs(f.extremes(float(a), float(b)).abs_max)
+                           for f in [live] + [sp.moment for sp in ss.spans]))
+    sec = getattr(st, "section", None) or job.section
+    s = min(sec.sx_top, sec.sx_bot)
+    c = job.criteria
+    return kk * m / s, allowable_range(c.fatigue_category, c.cycles)
+
+
+def fatigue_check(job, st, ss, k: float) -> Check | None:
+    """The fatigue limit state at the factor k (AISC 360-16 Appendix 3, `design.fatigue`)
+    as a check, or None where the job gives no fatigue detail or it is not worked out here
+    (not steel, a moving load: `capacity._fatigue` then holds the rating)."""
+    if not given(job) or getattr(job.material, "kind", "") not in ("steel", "stainless"):
+        return None
+    got = fatigue_range(job, st, ss, k)
+    if got is None:
+        return None
+    fr, fsr = got
+    if not math.isfinite(fsr):
+        return None  # fewer than 20,000 cycles: no fatigue check is needed (A-3.1)
+    return Check("fatigue", fr, fsr, "Pa",
+                 "live-load stress range (every live load on and off, with the impact "
+                 "allowance; the largest along the member) against " + words(job, fsr),
+                 clause="AISC 360-16 Appendix 3, eq. A-3-1", source="AISC 360-16",
+                 params={"F_SR": fsr, "cycles": float(job.criteria.cycles)})

@@ -41,7 +41,8 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.capacity import capacity, fatigue_check, rating_gaps, solved_gaps
+from shopbeam.design.capacity import capacity, rating_gaps, solved_gaps
+from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,

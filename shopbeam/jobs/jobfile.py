@@ -329,7 +329,10 @@ class _Reader:
         a load a thousand times too small passes every check. Said, with both readings (a
         comma, "1,500", is refused for the same doubt)."""
         m = self._POINT_THOUSANDS.match(raw) if isinstance(raw, str) else None
-        if m and kind in ("force", "line_load", "area_load"):
+        small = re.match(r"(?:lbf?s?|pounds?|n|newtons?|kgf?|kilograms?|lb/ft|lbf/ft|plf|"
+                         r"n/m|psf|lbf/ft\^?2|lb/ft\^?2|kg/m)$", m.group(4).strip(), re.I) \
+            if m else None
+        if m and kind in ("force", "line_load", "area_load") and small and m.group(2) != "0":
             sign, a, b, unit = m.group(1), m.group(2), m.group(3), m.group(4).strip()
             sign = "-" if sign == "\u2212" else sign
             self.warn(f"{raw.strip()!r} is read as {sign}{float(a + '.' + b):g} {unit} (a "
@@ -482,7 +485,7 @@ class _Reader:
                           f"{path} belongs under [criteria]: written here it is not read, so "
                           "the figure would leave it out. Move it")
                 continue
-            meant = _lowering_meant(str(k), here, near, homes)
+            meant = _lowering_meant(str(k), here, near, homes, table[k])
             if meant:
                 # a slip of a key that would lower the figure: rated without it, the figure
                 # would be too high (an ignored key that raises it only errs on the safe side)
@@ -528,27 +531,48 @@ _TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
 # Keys that can lower what a member may carry, by table: written wrong and ignored, the
 # figure posted would be too high. (Keys that only raise it when given, such as braced,
 # repetitive or lug, are left to their warning: ignored, the figure errs on the safe side.)
-_LOWERING = {"beam": {"axis", "welded", "wet_service", "temperature"},
+_LOWERING = {"beam": {"axis", "welded", "wet_service", "temperature", "braces_flange"},
              "supports": {"brace"}, "loads": {"patterned"},
-             "moving": {"dead", "wheels_per_axle"}}
-_LOWERING_WORDS = (  # key words of a table that name one of those, whatever the spelling
-    (re.compile(r"axe?s|orient|flat|on_?edge|plank|bending_?axis", re.I), "beam", "axis"),
-    (re.compile(r"weld", re.I), "beam", "welded"),
-    (re.compile(r"wet|moist|damp|exposure", re.I), "beam", "wet_service"),
-    (re.compile(r"temp|heat|hot", re.I), "beam", "temperature"),
-    (re.compile(r"pattern", re.I), "loads", "patterned"),
-    (re.compile(r"^crit|^limits?$|^checks?$|^design$", re.I), "", "criteria"))
+             "moving": {"dead", "wheels_per_axle"},
+             # a lost tags key loses the lifting or rack rules; a lost [[loads]] table a load
+             "": {"tags", "loads", "moving"}}
+_LOWERING_WORDS = (  # whole keys of a table that name one of those, whatever the spelling
+    (re.compile(r"^(?:axes|orient(?:ation)?|flat|laid_?flat|on_?edge|edge|plank|"
+                r"(?:bending|strong|weak)_?axis|weak)$", re.I), "beam", "axis"),
+    (re.compile(r"^(?:welds?|weldment|is_?welded)$", re.I), "beam", "welded"),
+    (re.compile(r"^(?:wet|wet_?use|moist(?:ure)?|damp|exposure|service_?condition|"
+                r"in_?service|incised|moisture_?content)$", re.I), "beam", "wet_service"),
+    (re.compile(r"^(?:temps?|heat|hot|operating_?temp(?:erature)?)$", re.I), "beam",
+     "temperature"),
+    (re.compile(r"^(?:lateral_?brace|torsion(?:al)?(?:_?brace|_?restraint)?|twist|"
+                r"restrain(?:ed|t)?)$", re.I), "supports", "brace"),
+    (re.compile(r"^pattern(?:s|ed|_?loads?|_?loading)?$", re.I), "loads", "patterned"),
+    (re.compile(r"^(?:crit|limits?$|checks?$|design|settings?$)", re.I), "", "criteria"))
+# [criteria] keys that are only words (a note, a name): warned, not held
+_CRITERIA_WORDS_ONLY = re.compile(r"^(?:notes?|comments?|remarks?|description|by|checked_?by|"
+                                  r"references?|sources?|standard|code)$", re.I)
 
 
-def _lowering_meant(key: str, here: str, near: list[str], homes: list[str]) -> str:
+_BOOL_KEYS = frozenset({"welded", "patterned", "brace", "wet_service"})
+
+
+def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], value=None) -> str:
     """What an unknown `key` in table `here` reads like when that is a key that lowers the
     figure (see `_LOWERING`), in words, or "". Every unknown key of [criteria] does: each
     key there sets a limit or a factor."""
     for table in [here, *homes]:
         for k in _LOWERING.get(table, ()):
-            if key == k or (table == here and near and near[0] == k):
-                return f"{k} of {_TABLES.get(table, '[' + table + ']')}"
-    if here == "criteria":
+            # a near miss close enough to be that key (not "base" for brace)
+            close = table == here and near and near[0] == k and \
+                (len(key) >= 5 or table == "") and \
+                difflib.SequenceMatcher(None, key.lower(), k).ratio() >= 0.8
+            if k in _BOOL_KEYS and not isinstance(value, bool):
+                continue  # welder = "Ana" is a record, not welded = true
+            if key.lower() == k or close:
+                where = _TABLES.get(table, "the top of the file" if table == "" else
+                                    "[" + table + "]")
+                return f"{k} of {where}"
+    if here == "criteria" and not _CRITERIA_WORDS_ONLY.match(key):
         return "a limit or factor of [criteria]"
     for words, table, k in _LOWERING_WORDS:
         if words.search(key) and (table == here or k == "criteria"):
@@ -680,7 +704,7 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
 
 def _read_fatigue(r: _Reader, crit: dict) -> tuple[str, float | None]:
     """[criteria] fatigue_category and cycles (AISC 360-16 Appendix 3): both or neither."""
-    from shopbeam.design.fatigue import CATEGORIES  # noqa: PLC0415
+    from shopbeam.jobs.rules import FATIGUE_CATEGORIES as CATEGORIES  # noqa: PLC0415
 
     cat, n = "", None
     if "fatigue_category" in crit:
@@ -1599,20 +1623,26 @@ _LIFTING_WORDS = re.compile(
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
     r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
     r"pallet|bar) lifters?|lifters?|magnet beams?|booms?|tackle beams?|puller beams?|"
-    r"lift rails?|overhead lifts?|(?:to|for) lift(?! trucks?\b)|hoysts?|monorials?|tralleys?)\b",
+    r"lift rails?|overhead lifts?|(?:to|for) lift(?! trucks?\b)|hoysts?|monorials?|tralleys?|"
+    r"equali[sz]er beams?|sling bars?|lift(?:ing)? frames?|lift(?:ing)? bars?|yokes?|"
+    r"load bars?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
 # lifting words inside a tag run together with another word (a tag is a word or two, so
 # a stem anywhere in it says what it is): "hoistbeam", "jibcrane", "crane_runway",
 # "underhung", "monorial" (a slip of monorail)
-_LIFTING_STEMS = re.compile(r"hoist|lifting|liftbeam|crane|monora?il|monorial|jib(?!e)|"
-                            r"trolley|underhung|spreader|rigging|davit|gantry", re.IGNORECASE)
+_LIFTING_STEMS = re.compile(
+    r"^(?:hoist|lift|lifting|jib|crane|monorail|monorial|trolley|chain|spreader|sling|pick)"
+    r"(?:ing)?(?:beams?|arms?|booms?|rails?|cranes?|bars?|frames?|devices?|runways?|hooks?|"
+    r"hoists?|blocks?|falls?|trolleys?)$|^underhung$", re.IGNORECASE)
 NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
 # Words that name a storage-rack member; a job that uses one but is not tagged rack gets
 # neither the rack cautions (the impact load) nor the rating label's per-level wording.
 _RACK_WORDS = re.compile(
     r"\b(pallet[- ]?racks?|pallet[- ]?racking|racking|rack beams?|rack arms?|"
-    r"cantilever[- ]racks?|storage[- ]racks?|selective[- ]racks?|rack uprights?)\b",
+    r"cantilever[- ]racks?|storage[- ]racks?|selective[- ]racks?|rack uprights?|"
+    r"step beams?|teardrop|drive[- ]?(?:in|thru|through) racks?|cantilever arms?|"
+    r"(?:pallet|storage|stock) (?:racks?|bays?) beams?)\b",
     re.IGNORECASE)
 
 
@@ -1863,7 +1893,9 @@ def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags) -
 
 _BTH_WORDS = re.compile(r"\b(spreaders?(?: bars?| beams?)?|lift(?:ing)? beams?|strongbacks?|"
                         r"strong-backs?|below[- ]the[- ]hook|lifters?|sheet lifters?|"
-                        r"coil lifters?)\b", re.IGNORECASE)
+                        r"coil lifters?|equali[sz]er beams?|sling bars?|lift(?:ing)? frames?|"
+                        r"lift(?:ing)? bars?|yokes?|pick(?:ing)? beams?|load bars?)\b",
+                        re.IGNORECASE)
 
 
 def thickest(section) -> float | None:
@@ -1966,11 +1998,11 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
         return ""
     said = _words_found(_LIFTING_WORDS, title, notes, tags, raw_loads, _LIFTING_TAGS)
     # a tag written as one run-together word ("hoistbeam", "jibcrane", "liftingdevice")
-    said += [f"tag {t!r}" for t in tags if _LIFTING_STEMS.search(t)
+    said += [f"tag {t!r}" for t in tags if _LIFTING_STEMS.search(re.sub(r"[\W_]", "", t))
              and f"tag {t!r}" not in said]
     if not any(x.startswith("title") for x in said):  # and a run-together word of the title
-        joined = [w for w in re.findall(r"[^\W\d]+", _as_words(title))
-                  if len(w) > 7 and _LIFTING_STEMS.search(w)]
+        joined = [w for w in re.findall(r"[^\W\d_]+", str(title or ""))
+                  if _LIFTING_STEMS.search(w)]
         said += [f"title: {joined[0]!r}"] if joined else []
     if moving:
         said.append("it has trolley wheels ([[moving]])")
@@ -2026,7 +2058,9 @@ _VEHICLE_WORDS = re.compile(
     r"(?<!hand )(?<!pallet )truck (?:racks?|toolbox(?:es)?|shel(?:f|ves)|beds?|boxes)|roof racks?|"
     r"hitch (?:cargo )?(?:carriers?|racks?|baskets?)|goosenecks?|lowboys?|stake beds?|"
     r"dump bod(?:y|ies)|atv racks?|semi(?:-| )?(?:trailers?|decks?)|"
-    r"(?:on|for|in|under) (?:my|the|a|our) (?:truck|pickup|van(?! de)|trailer(?! park)))\b",
+    r"(?:on|for|in|under) (?:my|the|a|our) (?:truck|pickup|van(?! de)|trailer(?! park))|"
+    r"truck cross ?members?|tailgates?|food trucks?|fire (?:engines?|trucks?)|horse floats?|"
+    r"wagons?)\b",
     re.IGNORECASE)
 NOT_VEHICLE = "not-vehicle"  # the tag that says a job that reads like one is not on a vehicle
 
@@ -2053,7 +2087,8 @@ def _vehicle_hint(r: _Reader, title, notes, tags, raw_loads, criteria, lifting: 
     return hint
 
 
-_GLULAM_WORDS = re.compile(r"\b(glu-?lams?|glued[- ]laminated|GLT|\d\dF-[VE]\d+)\b", re.IGNORECASE)
+_GLULAM_WORDS = re.compile(r"\b(glue?[- ]?lams?|glue?d?[- ]?laminated|\d\dF-(?:[VE]\d+|\d\.\dE))\b",
+                           re.IGNORECASE)
 
 
 def _glulam_words(r: _Reader, title, notes, tags, material, data) -> None:
@@ -2064,7 +2099,9 @@ def _glulam_words(r: _Reader, title, notes, tags, material, data) -> None:
     if getattr(material, "kind", "") not in ("lumber", "wood"):
         return
     mat = data.get("beam", {}).get("material") if _is_table(data.get("beam")) else None
-    said = _words_found(_GLULAM_WORDS, title, notes, tags, [])
+    # the title, tags and material name the member itself (notes may name a neighbour: a
+    # joist hung from a glulam ridge)
+    said = _words_found(_GLULAM_WORDS, title, "", tags, [])
     if isinstance(mat, str) and _GLULAM_WORDS.search(mat):
         said.append(f"material {mat!r}")
     if not said:
@@ -2200,11 +2237,15 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
     if not said:
         return
-    r.warn(f"this reads like a storage rack ({'; '.join(said[:3])}) but is not tagged rack: "
+    hint = "; ".join(said[:3])
+    r.hold(f"this reads like a storage rack ({hint}) but is not tagged rack: "
            "the rack cautions (the ANSI MH16.1 impact load, not added unless impact is given) "
-           "and the rating label's per-level wording are not applied. Add tags = [\"rack\"] "
+           "and the rating label's per-level wording are not applied, and no rating is posted. "
+           "Add tags = [\"rack\"] "
            f"if it is a rack member, or the tag \"{NOT_RACK}\" if it is not",
-           "tags" if tags else "title")
+           "tags" if tags else "title",
+           f"it reads like a storage rack ({hint}) but is not tagged rack, so the rack's impact "
+           f"load was not asked for. Tag it \"rack\" (and give impact), or \"{NOT_RACK}\"")
 
 
 def _upward_wheels(r: _Reader, moving: tuple, system: str) -> list[str]:
@@ -2821,7 +2862,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     rolling_keys = _rolling_keys(r, data.get("moving"), moving, tags, criteria)
     vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
                                  is_lifting(tags, criteria.lifting))
-    vehicle = "" if is_lifting(tags, criteria.lifting) or NOT_VEHICLE in tags else "; ".join(
+    vehicle = "" if NOT_VEHICLE in tags else "; ".join(  # a truck crane's boom too
         _words_found(_VEHICLE_WORDS, title, notes, tags, raw_loads)[:3])
     _rack_hint(r, title, notes, tags, raw_loads)
     _rack_fixed_ends(r, tags, supports, length)

@@ -112,3 +112,9 @@ def rack_arm(tags, supports, length: float) -> bool:
 # A typed-in material given no kind is a wood or a metal by its stiffness: every wood is
 # under about 20 GPa (3,000 ksi), every structural metal over 40 GPa (common practice)
 WOOD_E_MAX = 30e9  # Pa
+
+
+# Fatigue stress categories: (C_f in ksi^3, F_TH in ksi), AISC 360-16 Table A-3.1 (from
+# memory); design.fatigue works the allowable range from them, the job reader checks the name
+FATIGUE_CATEGORIES = {"A": (250e8, 24.0), "B": (120e8, 16.0), "B'": (61e8, 12.0),
+                      "C": (44e8, 10.0), "D": (22e8, 7.0), "E": (11e8, 4.5), "E'": (3.9e8, 2.6)}

@@ -249,6 +249,9 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         what = "the arms of every level" if arm else "the levels"
         notes.append(f"{per}: {what} added up (give [beam] levels = N for the figure), "
                      f"and no more than {holder}.")
+    if rack and job.criteria.impact == 0:
+        notes.append("NO IMPACT allowance: impact = \"0%\" in the job (ANSI MH16.1 asks 25 % "
+                     "of one unit load, from memory; MH16.3 for cantilever racks).")
     if rack and job.criteria.impact is None:
         notes.append("Impact NOT included (ANSI MH16.3 for cantilever racks sets it, from "
                      "memory): add it before posting." if arm else
