@@ -790,3 +790,71 @@ def test_a_spring_stiffness_typed_comes_back_with_the_spring_type(tmp_path):
                 await settle(pilot)
             assert s.rows("supports")[0].get("stiffness") == "850 lbf/in"
     run()
+
+
+@sync
+async def test_text_typed_in_the_same_burst_as_the_tab_into_a_field_is_not_selected_after(
+        tmp_path):
+    # Tab Tab r in one read, then a, c, k one by one: the r was selected again when the
+    # field's queued Focus event came through, and the a replaced it ("ack" saved)
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, TAB + TAB + "r")
+        for ch in "ack":
+            await pilot.pause(0.12)
+            await burst(pilot, ch)
+        await burst(pilot, "\x13")  # ctrl+s
+        await settle(pilot)
+    assert 'notes = "rack"' in path.read_text(encoding="utf-8")
+
+
+@sync
+async def test_a_load_type_picked_and_picked_back_keeps_its_place(tmp_path):
+    # the stair's 1200 lbf at 15 ft: uniform and back to point put it at 0 ft (into the wall
+    # support); the stock's 0-12 ft came back as 0-15 ft
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        s = app.job_screen.session
+        original = s.doc.text()
+        view = app.job_screen.query_one("#loads")
+        lst = view.query_one("RowList")
+        for row, letters in ((3, "up"), (1, "pu")):
+            lst.focus()
+            await settle(pilot)
+            step = DOWN if row > view.selected else "\x1b[A"
+            await burst(pilot, step * abs(row - view.selected))
+            await settle(pilot)
+            assert view.selected == row
+            kind = choice_of(app, "loads", "load.type")
+            kind.focus()
+            await settle(pilot)
+            for letter in letters:
+                await burst(pilot, letter)
+                await pilot.pause(LETTER)
+                await settle(pilot)
+        assert s.rows("loads")[3]["at"] == "15 ft" and s.rows("loads")[3]["value"] == "-1200 lbf"
+        assert (s.rows("loads")[1]["start"], s.rows("loads")[1]["end"]) == ("0 ft", "12 ft")
+        assert s.doc.text() == original
+
+
+@sync
+async def test_save_as_takes_the_name_as_it_was_at_enter(tmp_path):
+    # "other" Enter "o" in one read saved othero.toml: the o typed behind Enter went into
+    # the name before the dialog read it
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, "\x04")  # ctrl+d: save as
+        await pilot.pause(0.6)
+        await settle(pilot)
+        assert type(app.screen).__name__ == "SaveAsScreen"
+        await burst(pilot, CTRL_U + "other" + "\r" + "o")
+        await pilot.pause(0.6)
+        await settle(pilot)
+        saved = app.job_screen.session.path
+    assert saved is not None and saved.name == "other.toml"

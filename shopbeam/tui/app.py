@@ -766,10 +766,10 @@ class JobScreen(Screen):
         # what the row had as `old` is kept, and what it had as `kind` comes back: a type
         # picked by mistake and picked back loses nothing that was typed
         kept = self._kept_for(("loads", i))
-        kept[old] = {k: row.get(k) for k in ("value", "width", "total") if row.get(k) is not None}
-        for k, v in kept.get(kind, {}).items():
-            if k == "value" or fields.get(k, row.get(k)) is None:
-                fields[k] = v
+        kept[old] = {k: row.get(k) for k in ("value", "width", "total", "at", "start", "end")
+                     if row.get(k) is not None}
+        for k, v in kept.get(kind, {}).items():  # as typed for this type: over any default
+            fields[k] = v
         # keys dropped leave their place and comment behind, and come back into them (in
         # the reverse of the order they left, so each lands where it was)
         gone = [k for k, v in fields.items() if v is None and k in row]

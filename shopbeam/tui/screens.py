@@ -262,10 +262,10 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
 
     def on_input_submitted(self, event: Input.Submitted) -> None:
         event.stop()
-        self._submit()
+        self._submit(event.value)  # the name as it was at Enter, not with keys typed behind
 
-    def _submit(self) -> None:
-        name = self.query_one(Field).value.strip()
+    def _submit(self, typed: str | None = None) -> None:
+        name = (self.query_one(Field).value if typed is None else typed).strip()
 
         try:
             storage.safe_name(name)
@@ -408,7 +408,7 @@ class LibraryScreen(Screen[object]):
     def on_input_submitted(self, event: Input.Submitted) -> None:
         """Enter in the search opens the picked job: type, then one Enter."""
         event.stop()
-        search = self.query_one(Field).value
+        search = event.value  # as it was at Enter: keys typed behind it are not part of it
         if search != getattr(self, "_filled_for", ""):  # typed fast: its search not run yet
             self.highlight = None
             self.fill(search)

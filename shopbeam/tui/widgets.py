@@ -57,23 +57,26 @@ class FieldInput(Input):
         await super()._on_key(event)
 
     _early_selects = 0  # selections made as the focus came, whose Focus events are queued
+    # the whole text is selected when the focus comes (typing replaces it). Textual's own
+    # select_on_focus is off: its Focus handler runs after this class's (handlers run down
+    # the whole class line) and would select again the text typed since the focus came
+    select_all = True
 
     def focus_arrived(self) -> None:
         """The focus came here (called by the screen as it moves, not when the queued Focus
         event arrives): select the text now, so the next key of a fast burst replaces it
         exactly as it would if typed slowly."""
-        if self.select_on_focus:
+        if self.select_all:
             self.selection = Selection(0, len(self.value))
             self._early_selects += 1
 
     def _on_focus(self, event) -> None:
+        # Input._on_focus runs after this one (blink, cursor; no selection: see select_all)
         if self._early_selects > 0:  # selected already; keys may have been typed since
             self._early_selects -= 1
-            kept = self.selection
-            super()._on_focus(event)
-            self.selection = kept
             return
-        super()._on_focus(event)
+        if self.select_all and not event.from_app_focus:  # a click, or focus set in code
+            self.selection = Selection(0, len(self.value))
 
     def watch_value(self, value: str) -> None:
         """Typing is noted at once (not when its message arrives), so a save or a view key
@@ -140,7 +143,7 @@ class Field(Horizontal):
     def compose(self) -> ComposeResult:
         yield Label(self.label, classes="field-label")
         inp = FieldInput(self._value, placeholder=self._placeholder, compact=True,
-                    suggester=self._suggester, select_on_focus=True)
+                    suggester=self._suggester, select_on_focus=False)
         inp.cursor_blink = getattr(self.app, "cursor_blink", True)
         yield inp
         yield Static("", classes="field-msg", markup=False)
