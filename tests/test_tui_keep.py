@@ -669,7 +669,7 @@ async def test_esc_right_behind_a_letter_answer_cancels_and_the_letter_never_ans
 
 # ------------------------------------- a choice picks by a letter pressed on its own only
 
-LETTER = 0.45  # Choice.ALONE (0.3 s) and a little: a letter on its own has picked by then
+LETTER = 1.1  # past Choice.WORD_GAP (1 s): a letter on its own has picked, and the next one is no word
 
 
 @sync
@@ -858,3 +858,36 @@ async def test_save_as_takes_the_name_as_it_was_at_enter(tmp_path):
         await settle(pilot)
         saved = app.job_screen.session.path
     assert saved is not None and saved.name == "other.toml"
+
+
+@sync
+async def test_a_word_typed_slowly_on_a_choice_changes_nothing_and_is_named(tmp_path):
+    # "uniform" at 0.35 s a key on the stair's Type choice: each letter was "on its own", so
+    # u picked uniform and m picked moment: the point load became a couple at 0 ft, unsaid
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        view = app.job_screen.query_one("#loads")
+        view.query_one("RowList").focus()
+        await settle(pilot)
+        await burst(pilot, DOWN * 3)
+        await settle(pilot)
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        s = app.job_screen.session
+        before = s.doc.text()
+        for ch in "uniform":
+            for event in events_of(ch):
+                app._driver.send_message(event)
+            await pilot.pause(0.35)
+        await pilot.pause(1.2)
+        await settle(pilot)
+        assert kind.value == "point" and s.doc.text() == before
+        import re
+
+        said = "".join(re.findall(r'Not typed anywhere: "([^"]*)"', " ".join(_notices(app))))
+        assert sorted(said) == sorted("uniform"), said

@@ -1182,8 +1182,24 @@ class ShopbeamApp(App):
             # part of a word being typed
             typed_on = self._text_before is self.focused and gap is not None \
                 and gap < Choice.ALONE
+            # on a choice, a key within WORD_GAP of a printable one is a word typed slowly
+            slow_text = self._text_before is self.focused and gap is not None \
+                and gap < Choice.WORD_GAP
             self._text_before = self.focused if event.is_printable else False
+            if event.key == "escape" and self._held_letter is not None:
+                self._held_letter[2].stop()  # Esc right behind a letter: it picks nothing
+                self._held_letter = None
             self._letter_behind(typed_on and event.is_printable)
+            picked, self._picked = self._picked, None
+            if picked is not None and event.is_printable and slow_text \
+                    and picked[0] is self.focused and picked[0].is_attached:
+                # a letter that picked, with more text right behind it: it was the start of a
+                # word typed with the focus here, so its pick is taken back and it is named
+                choice, before, letter = picked
+                choice._choose(before)
+                js0 = getattr(self, "job_screen", None)
+                if js0 is not None:
+                    js0.not_typed(letter, choice)
             if await self._check_bindings(event.key, priority=True):
                 return
             focused = self.focused
@@ -1204,14 +1220,15 @@ class ShopbeamApp(App):
                 if action is not None:
                     question.hold(event, lambda: self.call_later(question.run_action, action))
                     return
-            if isinstance(focused, Choice) and event.is_printable and not typed_on and (
+            if isinstance(focused, Choice) and event.is_printable and not slow_text and (
                     event.key == "space" or focused.pick_for(event.character) is not None):
                 # a letter picks only when pressed on its own: held for ALONE, it picks
                 # then, or before the next key that is not text (a save, Tab, a view key)
                 self._hold_letter(event, focused)
                 return
+            text_here = slow_text if isinstance(focused, Choice) else typed_on
             if on_job and isinstance(focused, (Choice, RowList)) and event.is_printable \
-                    and (typed_on or event.key not in ("space", "question_mark")):
+                    and (text_here or event.key not in ("space", "question_mark")):
                 # a choice or a list in a form: a digit or letter typed there is meant
                 # as text, never as a view key (it would switch views and the rest of
                 # the burst would go nowhere); it is not used, and the user is told
@@ -1233,6 +1250,7 @@ class ShopbeamApp(App):
     # there), else False
     _text_before = False
     _held_letter = None  # (key event, choice, timer): a letter on a choice, not yet a pick
+    _picked = None  # (choice, value before, letter): the last pick by a letter, for a while
 
     def _hold_letter(self, event, choice) -> None:
         timer = self.set_timer(Choice.ALONE, lambda: self._letter_behind(False))
@@ -1252,10 +1270,13 @@ class ShopbeamApp(App):
             if js is not None:
                 js.not_typed(event.character or "", choice)
         elif choice.is_attached:
+            before = choice.value
             if event.key == "space":
                 choice.action_move(1)  # space on its own: the next option
             else:
                 choice.type_letter(event.character)
+            if choice.value != before:
+                self._picked = (choice, before, event.character or " ")
 
     async def action_quit(self) -> None:
         js = getattr(self, "job_screen", None)

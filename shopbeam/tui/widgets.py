@@ -362,6 +362,9 @@ class Choice(Widget, can_focus=True):
     # typed with the focus here by mistake, and picks nothing (the app holds the letter
     # for ALONE to see; see `ShopbeamApp._letter_behind`)
     ALONE = 0.3  # seconds, as for a letter that answers a question
+    # a key within WORD_GAP of the printable key before it (on the same choice) is a word
+    # typed slowly: it picks nothing, and a pick made by the letter before it is taken back
+    WORD_GAP = 1.0  # seconds
 
     def pick_for(self, character: str | None) -> str | None:
         """The first option (after the shown one) starting with this letter, or None."""
