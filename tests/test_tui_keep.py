@@ -891,3 +891,35 @@ async def test_a_word_typed_slowly_on_a_choice_changes_nothing_and_is_named(tmp_
 
         said = "".join(re.findall(r'Not typed anywhere: "([^"]*)"', " ".join(_notices(app))))
         assert sorted(said) == sorted("uniform"), said
+
+
+@sync
+async def test_a_choice_picked_away_and_back_leaves_an_explicit_default_as_written(tmp_path):
+    # case = "live" written out (with its comment) was removed, comment and all, when the
+    # Case choice went to dead and back to live
+    path = tmp_path / "demo.toml"
+    path.write_text((PRESETS / "demo.toml").read_text(encoding="utf-8").replace(
+        'label = "stock"\n', 'label = "stock"\ncase = "live"                  # comes and goes\n',
+        1), encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        s = app.job_screen.session
+        original = s.doc.text()
+        view = app.job_screen.query_one("#loads")
+        view.query_one("RowList").focus()
+        await settle(pilot)
+        await burst(pilot, DOWN)
+        await settle(pilot)
+        assert view.selected == 1
+        case = choice_of(app, "loads", "load.case")
+        case.focus()
+        await settle(pilot)
+        for letter in "dl":
+            await burst(pilot, letter)
+            await pilot.pause(LETTER)
+            await settle(pilot)
+        assert s.rows("loads")[1]["case"] == "live"
+        assert s.doc.text() == original

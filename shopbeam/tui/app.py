@@ -673,15 +673,18 @@ class JobScreen(Screen):
         elif key == "load.type":
             self.change_load_type(self.query_one("#loads", LoadsView).selected, value)
         elif key == "beam.braced":
-            s.set("beam.braced", True if value == "all along" else None)
+            s.set("beam.braced", True if value == "all along" else self._as_opened(
+                ["beam"], "braced", {False}))
         elif key == "criteria.basis":
             s.set("criteria.basis", "first-yield" if value == "first-yield" else None)
         elif key == "load.patterned":
             i = self.query_one("#loads", LoadsView).selected
-            s.set_row("loads", i, "patterned", True if value == "yes" else None)
+            s.set_row("loads", i, "patterned", True if value == "yes" else self._as_opened(
+                ["loads", i], "patterned", {False}))
         elif key == "load.case":
             i = self.query_one("#loads", LoadsView).selected
-            s.set_row("loads", i, "case", "dead" if value == "dead" else None)
+            s.set_row("loads", i, "case", "dead" if value == "dead" else self._as_opened(
+                ["loads", i], "case", {"live"}))
         elif key == "load.flange":
             i = self.query_one("#loads", LoadsView).selected
             # "top" is the default, except on a lifting job, whose point loads hang from the
@@ -690,7 +693,8 @@ class JobScreen(Screen):
             lifting = is_lifting(tags if isinstance(tags, list) else [],
                                  s.doc.get("criteria.lifting") or "")
             s.set_row("loads", i, "flange",
-                      "bottom" if value == "bottom" else ("top" if lifting else None))
+                      "bottom" if value == "bottom" else ("top" if lifting else self._as_opened(
+                          ["loads", i], "flange", {"top"})))
         elif key == "load.wheels":
             i = self.query_one("#loads", LoadsView).selected
             n = WHEEL_WORDS.get(value, 2)
@@ -705,7 +709,8 @@ class JobScreen(Screen):
         elif key in ("criteria.duration", "beam.temperature"):
             s.set(key, None if value == MaterialView.WOOD_KEYS[key] else value)
         elif key in ("beam.wet_service", "beam.repetitive"):
-            s.set(key, True if value == "yes" else None)
+            s.set(key, True if value == "yes" else self._as_opened(
+                ["beam"], key.split(".")[1], {False}))
         elif key == "section.mode":
             self.change_section_mode(value)
         elif key == "section.shape":
@@ -788,6 +793,33 @@ class JobScreen(Screen):
         if gone:
             kept["_gone"] = gone
         s.touched()
+
+    def _as_opened(self, path: list, key: str, same: set):
+        """A choice set back to its default: the value the file had as opened (or last
+        saved) when it said the default in words (`case = "live"`, `patterned = false`), so
+        a choice picked away and back leaves the line as it was; None (the key left out)
+        when it did not."""
+        import tomllib  # noqa: PLC0415
+
+        text = self.session.saved_text
+        if not text:
+            return None
+        cache = self.__dict__.setdefault("_opened", {})
+        if text not in cache:
+            try:
+                cache.clear()
+                cache[text] = tomllib.loads(text.removeprefix("\ufeff"))
+            except (tomllib.TOMLDecodeError, ValueError):
+                cache[text] = {}
+        node = cache[text]
+        for p in path:
+            try:
+                node = node[p]
+            except (KeyError, IndexError, TypeError):
+                return None
+        got = node.get(key) if isinstance(node, dict) else None
+        return got if got is not None and got in same and \
+            not (isinstance(got, bool) != any(isinstance(x, bool) for x in same)) else None
 
     def _kept_for(self, where: tuple[str, int]) -> dict:
         """What a support or load row had under the other types it was given (type ->
