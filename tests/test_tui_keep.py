@@ -923,3 +923,35 @@ async def test_a_choice_picked_away_and_back_leaves_an_explicit_default_as_writt
             await settle(pilot)
         assert s.rows("loads")[1]["case"] == "live"
         assert s.doc.text() == original
+
+
+@sync
+async def test_scaling_the_positions_moves_the_braces_and_the_trolley_travel_too(tmp_path):
+    # a 16 ft hoist beam made 20 ft, positions scaled: the support moved, the brace and the
+    # trolley's travel stayed, and the last 4 ft went unchecked for the trolley
+    path = tmp_path / "lift.toml"
+    path.write_text('schema = 1\ntitle = "Hoist beam over the press"\ntags = ["lifting"]\n'
+                    '[beam]\nlength = "16 ft"\nsection = "W8x18"\nmaterial = "A992"\n'
+                    'braces = ["8 ft"]\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+                    '[[supports]]\nat = "16 ft"\ntype = "roller"\n[[moving]]\nlabel = "trolley"\n'
+                    'loads = ["-1000 lbf", "-1000 lbf"]\nspacing = ["1 ft"]\n'
+                    'travel = ["0 ft", "16 ft"]\n', encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        f = field(app, "span", "beam.length")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "20 ft" + TAB)
+        await burst(pilot, CTRL_L)
+        await pilot.pause(0.7)
+        await settle(pilot)
+        await burst(pilot, "s")  # scale
+        await pilot.pause(0.6)
+        await settle(pilot)
+        s = app.job_screen.session
+        assert s.rows("supports")[1]["at"] == "20 ft"
+        assert s.doc.get("beam.braces") == ["10 ft"]
+        assert s.doc.get("moving")[0]["travel"] == ["0 ft", "20 ft"]

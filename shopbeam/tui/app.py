@@ -583,6 +583,25 @@ class JobScreen(Screen):
                         continue
                     if x > 1e-12:
                         placed.append((table, i, k, x))
+        # the brace points and a trolley's travel sit along the beam too
+        braces = s.doc.get("beam.braces")
+        for j, b in enumerate(braces if isinstance(braces, list) else ()):
+            try:
+                x = units.parse(str(b), "length")
+            except Exception:  # noqa: BLE001 - not a length
+                continue
+            if x > 1e-12:
+                placed.append(("braces", j, "at", x))
+        moving = s.doc.get("moving")
+        for i, mv in enumerate(moving if isinstance(moving, list) else ()):
+            travel = mv.get("travel") if isinstance(mv, dict) else None
+            for j, t in enumerate(travel if isinstance(travel, list) else ()):
+                try:
+                    x = units.parse(str(t), "length")
+                except Exception:  # noqa: BLE001 - not a length
+                    continue
+                if x > 1e-12:
+                    placed.append(("movings", i, f"travel{j}", x))
         if not placed:
             return None
         return self._length_from, str(now), old, new, placed
@@ -606,7 +625,7 @@ class JobScreen(Screen):
             return
         old_text, now_text, old, new, placed = change
         s = self.session
-        lines = [f"  {t[:-1]} {i + 1} {k} {s.rows(t)[i][k]}" for t, i, k, _x in placed]
+        lines = [f"  {self._placed_words(t, i, k, x)}" for t, i, k, x in placed]
         if len(lines) > 8:
             lines = lines[:7] + [f"  ... and {len(lines) - 7} more"]
 
@@ -616,6 +635,21 @@ class JobScreen(Screen):
                              old, new, placed)
 
         self.app.push_screen(LengthScreen(old_text, now_text, lines), answer)
+
+    def _placed_words(self, table: str, i: int, k: str, x: float) -> str:
+        """One position along the beam in words ("load 2 start 4 ft", "brace 1 at 6 ft")."""
+        system = self.session.doc.get("units") if self.session.doc.get("units") in (
+            "us", "si") else "us"
+        at = units.fmt(x, "length", system)
+        if table == "braces":
+            return f"brace {i + 1} at {at}"
+        if table == "movings":
+            return f"trolley travel {'start' if k.endswith('0') else 'end'} {at}"
+        try:
+            at = str(self.session.rows(table)[i][k])  # as typed
+        except (IndexError, KeyError, TypeError):
+            pass
+        return f"{table[:-1]} {i + 1} {k} {at}"
 
     def move_positions(self, how: str, old: float, new: float, placed) -> None:
         s = self.session
@@ -628,8 +662,22 @@ class JobScreen(Screen):
                 to = str(s.doc.get("beam.length"))
             else:
                 continue
-            (s.doc.set_support if table == "supports" else s.doc.set_load)(i, **{k: to})
-            moved.append(f"{table[:-1]} {i + 1} {k} {to}")
+            if table == "braces":
+                braces = list(s.doc.get("beam.braces"))
+                braces[i] = to
+                s.doc.set_value("beam.braces", braces)
+            elif table == "movings":
+                from shopbeam.jobs import jobdoc  # noqa: PLC0415
+
+                row = s.doc._row("moving", i)
+                travel = list(row["travel"].unwrap() if hasattr(row["travel"], "unwrap")
+                              else row["travel"])
+                travel[int(k[-1])] = to
+                jobdoc._assign(row, "travel", travel, f"moving[{i}].travel")
+            else:
+                (s.doc.set_support if table == "supports" else s.doc.set_load)(i, **{k: to})
+            moved.append(f"{self._placed_words(table, i, k, x).rsplit(' ', 2)[0]} {to}"
+                         if table in ("braces", "movings") else f"{table[:-1]} {i + 1} {k} {to}")
         past = [f"{t[:-1]} {i + 1}" for t, i, k, x in placed
                 if x > new * (1 + 1e-9) and not (how == "scale" or
                                                  (how == "ends" and abs(x - old) <= 1e-9 * old))]
