@@ -579,8 +579,19 @@ class LoadsView(RowsView):
     def show(self, session) -> None:
         warn = self.query_one("#load-warnings", Static)
         lines = load_warnings(session)
+        moving = session.doc.get("moving")
+        for mv in moving if isinstance(moving, list) else ():
+            if isinstance(mv, dict):  # a wheel set is read and checked, not edited here
+                wheels = mv.get("loads") if isinstance(mv.get("loads"), list) else []
+                lines.append(f"Also a moving wheel set ([[moving]] {mv.get('label') or ''}: "
+                             f"{len(wheels)} wheel loads {', '.join(map(str, wheels[:4]))}"
+                             f"{' ...' if len(wheels) > 4 else ''}, travel "
+                             f"{' to '.join(map(str, mv.get('travel') or []))}), checked at "
+                             "every place it travels: edit it in the job file.")
         if not session.rows("loads"):
-            lines.append("No loads yet: ctrl+t adds one (then pick its type), or use + below.")
+            lines.append("No fixed loads yet: ctrl+t adds one (then pick its type), or use + "
+                         "below." if moving else
+                         "No loads yet: ctrl+t adds one (then pick its type), or use + below.")
         warn.update(_text("\n".join(lines)))
         warn.display = bool(lines)
         super().show(session)
