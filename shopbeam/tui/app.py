@@ -24,7 +24,7 @@ from textual.worker import get_current_worker
 from shopbeam import escapes, units
 from shopbeam.cautions import is_lifting
 from shopbeam.errors import InputError
-from shopbeam.jobs import library, storage
+from shopbeam.jobs import jobdoc, library, storage
 from shopbeam.tui import session as session_mod
 from shopbeam.tui.screens import (AnswerScreen, ConfirmScreen, ConflictScreen, HelpScreen,
                                   LengthScreen, LibraryScreen, SaveAsScreen)
@@ -667,8 +667,6 @@ class JobScreen(Screen):
                 braces[i] = to
                 s.doc.set_value("beam.braces", braces)
             elif table == "movings":
-                from shopbeam.jobs import jobdoc  # noqa: PLC0415
-
                 row = s.doc._row("moving", i)
                 travel = list(row["travel"].unwrap() if hasattr(row["travel"], "unwrap")
                               else row["travel"])
@@ -847,17 +845,15 @@ class JobScreen(Screen):
         saved) when it said the default in words (`case = "live"`, `patterned = false`), so
         a choice picked away and back leaves the line as it was; None (the key left out)
         when it did not."""
-        import tomllib  # noqa: PLC0415
-
         text = self.session.saved_text
         if not text:
             return None
         cache = self.__dict__.setdefault("_opened", {})
         if text not in cache:
+            cache.clear()
             try:
-                cache.clear()
-                cache[text] = tomllib.loads(text.removeprefix("\ufeff"))
-            except (tomllib.TOMLDecodeError, ValueError):
+                cache[text] = jobdoc.JobDoc.parse(text).doc.unwrap()
+            except (InputError, ValueError):
                 cache[text] = {}
         node = cache[text]
         for p in path:
