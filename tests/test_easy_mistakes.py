@@ -1207,3 +1207,15 @@ def test_a_lifting_job_named_like_a_below_the_hook_device_asks_for_that_profile(
     text = job_text().replace('title = "shelf"', f'title = "{title}"\ntags = ["lifting"]')
     cap = capacity(parse_job_text(text))
     assert any("below-the-hook" in r for r in cap.not_rated), cap.not_rated
+
+
+@pytest.mark.parametrize("notes, cut", [
+    ("No holes in the beam", False), ("Fixed with drilled-in anchors", False),
+    ("Rack upright teardrop slots", False), ("Slots in the uprights only", False),
+    ("Beam has bolt holes at midspan", True), ("Coped end at the wall", True)])
+def test_cut_words_that_say_the_member_is_not_cut_hold_nothing(notes, cut):
+    from shopbeam.design.capacity import capacity
+
+    text = job_text().replace('title = "shelf"', f'title = "shelf"\nnotes = "{notes}"')
+    held = any("cut" in r for r in capacity(parse_job_text(text)).not_rated)
+    assert held == cut

@@ -2203,9 +2203,13 @@ def _length_in_other_units(r: _Reader, data) -> None:
 
 
 NOT_CUT = "not-cut"  # the tag that says a job whose words read like a cut member is not one
+# a cut word after "no", "not", "without" or "never" (a word or two before) says the member
+# is NOT cut; "drilled-in anchors" and the "teardrop slots" of rack uprights are elsewhere
 _CUT_WORDS = re.compile(
-    r"\b(coped|copes?|coping|notch(?:ed|es)?|holes?|drilled|bored|cut-?outs?|slotted|"
-    r"slots?|openings? in the (?:web|flange)|penetrations?)\b", re.IGNORECASE)
+    r"(?<!\bno )(?<!\bnot )(?<!\bwithout )(?<!\bnever )(?<!\bteardrop )"
+    r"\b(coped|copes?|coping|notch(?:ed|es)?|holes?|drilled(?![- ]in\b)|bored|cut-?outs?|"
+    r"slotted|slots?|openings? in the (?:web|flange)|penetrations?)\b"
+    r"(?! (?:in|on) the (?:uprights?|posts?|columns?|walls?|slab|floor)\b)", re.IGNORECASE)
 
 
 def _cut_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
