@@ -41,6 +41,23 @@ label = "motor"
 """
 
 
+def _with_key(where: str, key: str, value: str) -> str:
+    """`job_text()` with `key = value` written in `where`: "[beam]", "[[supports]]" (the
+    first support), "[criteria]" (the job's own table), "top" (the top of the file) or a
+    table of that name added at the end."""
+    base = job_text()
+    line = f"{key} = {value}\n"
+    if where == "[[supports]]":
+        return base.replace('at = "0 ft"\ntype = "pin"\n', 'at = "0 ft"\ntype = "pin"\n' + line)
+    if where == "[beam]":
+        return base.replace('material = "A992"\n', 'material = "A992"\n' + line)
+    if where == "top":
+        return base.replace('title = "shelf"\n', 'title = "shelf"\n' + line)
+    if where == "[criteria]":
+        return base + line
+    return base + f"{where}\n" + line
+
+
 def warnings(job):
     return [p for p in job.warnings if p.warning]
 
@@ -1036,16 +1053,7 @@ def test_a_misspelt_or_misplaced_key_that_lowers_the_figure_holds_the_rating(whe
     # ignored with a warning, each was rated as if absent: up to 3x the figure written right
     from shopbeam.design.capacity import capacity
 
-    base = job_text()
-    if where == "[[supports]]":
-        text = base.replace('at = "0 ft"\ntype = "pin"\n', f'at = "0 ft"\ntype = "pin"\n{key} = {value}\n')
-    elif where == "[beam]":
-        text = base.replace('material = "A992"\n', f'material = "A992"\n{key} = {value}\n')
-    elif where == "[criteria]":
-        text = base + f"{key} = {value}\n"
-    else:
-        text = base + f"{where}\n{key} = {value}\n"
-    job = parse_job_text(text)
+    job = parse_job_text(_with_key(where, key, value))
     assert any("no rating is posted" in w.message for w in warnings(job))
     assert not capacity(job).rated
 
@@ -1124,16 +1132,7 @@ def test_names_and_places_that_only_look_like_a_vehicle_or_a_hoist_are_not_held(
 def test_more_slips_of_keys_that_lower_the_figure_hold_the_rating(where, key, value):
     from shopbeam.design.capacity import capacity
 
-    base = job_text()
-    if where == "[[supports]]":
-        text = base.replace('at = "0 ft"\ntype = "pin"\n', f'at = "0 ft"\ntype = "pin"\n{key} = {value}\n')
-    elif where == "[beam]":
-        text = base.replace('material = "A992"\n', f'material = "A992"\n{key} = {value}\n')
-    elif where == "top":
-        text = base.replace('title = "shelf"\n', f'title = "shelf"\n{key} = {value}\n')
-    else:
-        text = base + f"{where}\n{key} = {value}\n"
-    job = parse_job_text(text)
+    job = parse_job_text(_with_key(where, key, value))
     assert not capacity(job).rated, [w.message for w in warnings(job)]
 
 
@@ -1154,14 +1153,7 @@ def test_a_load_written_under_a_misspelt_table_holds_the_rating():
 def test_keys_that_are_only_shop_records_are_warned_not_held(where, key, value):
     from shopbeam.design.capacity import capacity
 
-    base = job_text()
-    if where == "[[supports]]":
-        text = base.replace('at = "0 ft"\ntype = "pin"\n', f'at = "0 ft"\ntype = "pin"\n{key} = {value}\n')
-    elif where == "[beam]":
-        text = base.replace('material = "A992"\n', f'material = "A992"\n{key} = {value}\n')
-    else:
-        text = base + f"{key} = {value}\n"
-    job = parse_job_text(text)
+    job = parse_job_text(_with_key(where, key, value))
     assert any(key in w.message for w in warnings(job))
     assert capacity(job).rated, capacity(job).not_rated
 

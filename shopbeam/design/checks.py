@@ -379,12 +379,9 @@ def _f2_f3(sec, fy, e) -> Flexure:
     if lam > lpf:
         how = (f", built-up: lambda_r = 0.95 sqrt(kc E / 0.7 Fy) = {lrf:.3g}, kc {kc:.3g}"
                if built else "")
-        if lam <= lrf:
-            m = mp - (mp - 0.7 * fy * sx) * (lam - lpf) / (lrf - lpf)
-            t = f"F3-1 flange local buckling (noncompact, lambda {lam:.3g}{how})"
-        else:
-            m = 0.9 * e * kc * sx / lam**2
-            t = f"F3-2 flange local buckling (slender, lambda {lam:.3g}{how})"
+        m = _flange_buckling(mp, 0.7 * fy * sx, lam, lpf, lrf, e, kc, sx)
+        t = (f"F3-1 flange local buckling (noncompact, lambda {lam:.3g}{how})" if lam <= lrf
+             else f"F3-2 flange local buckling (slender, lambda {lam:.3g}{how})")
         if m < cap:
             cap, text = m, t
     iy, cw, j, ho = sec.iy, sec.cw, sec.j, d.get("ho") or (d["d"] - d["tf"])
@@ -411,6 +408,16 @@ def _f2_f3(sec, fy, e) -> Flexure:
                    warnings=tuple(warnings), unchecked=tuple(unchecked))
 
 
+def _flange_buckling(top: float, low: float, lam: float, lpf: float, lrf: float, e: float,
+                     kc: float, sx: float) -> float:
+    """Flange local buckling of an I-shape (AISC 360-16 F3-1/F3-2, F4-13/F4-14): a straight
+    line from `top` at lambda_pf to `low` (0.7 Fy Sx, or FL Sxc) at lambda_rf, then the
+    elastic 0.9 E kc Sx / lambda^2 of a slender flange."""
+    if lam <= lrf:
+        return top - (top - low) * (lam - lpf) / (lrf - lpf)
+    return 0.9 * e * kc * sx / lam**2
+
+
 def _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc, built) -> Flexure:
     """A doubly symmetric I-shape with a noncompact web (3.76 < h/tw <= 5.70 sqrt(E/Fy)),
     by AISC 360-16 F4 (from memory): compression flange yielding Mn = Rpc Myc (F4-1), flange
@@ -427,12 +434,10 @@ def _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc, built) -> Flexure:
     text = (f"F4-1 compression flange yielding Mn = Rpc Myc, Rpc {rpc:.3f} (noncompact web, "
             f"h/tw {h_tw:.3g}; F4-9b)")
     if lam > lpf:
-        if lam <= lrf:
-            m = cap - (cap - fl_ * sx) * (lam - lpf) / (lrf - lpf)
-            t = f"F4-13 flange local buckling (noncompact flange, lambda {lam:.3g})"
-        else:
-            m = 0.9 * e * kc * sx / lam**2
-            t = f"F4-14 flange local buckling (slender flange, lambda {lam:.3g}, kc {kc:.3g})"
+        m = _flange_buckling(cap, fl_ * sx, lam, lpf, lrf, e, kc, sx)
+        t = (f"F4-13 flange local buckling (noncompact flange, lambda {lam:.3g})"
+             if lam <= lrf else
+             f"F4-14 flange local buckling (slender flange, lambda {lam:.3g}, kc {kc:.3g})")
         if m < cap:
             cap, text = m, t
     iy, j = sec.iy, sec.j

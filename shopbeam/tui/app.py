@@ -585,23 +585,11 @@ class JobScreen(Screen):
                         placed.append((table, i, k, x))
         # the brace points and a trolley's travel sit along the beam too
         braces = s.doc.get("beam.braces")
-        for j, b in enumerate(braces if isinstance(braces, list) else ()):
-            try:
-                x = units.parse(str(b), "length")
-            except Exception:  # noqa: BLE001 - not a length
-                continue
-            if x > 1e-12:
-                placed.append(("braces", j, "at", x))
+        placed += [("braces", j, "at", x) for j, x in _along(braces)]
         moving = s.doc.get("moving")
         for i, mv in enumerate(moving if isinstance(moving, list) else ()):
             travel = mv.get("travel") if isinstance(mv, dict) else None
-            for j, t in enumerate(travel if isinstance(travel, list) else ()):
-                try:
-                    x = units.parse(str(t), "length")
-                except Exception:  # noqa: BLE001 - not a length
-                    continue
-                if x > 1e-12:
-                    placed.append(("movings", i, f"travel{j}", x))
+            placed += [("movings", i, f"travel{j}", x) for j, x in _along(travel)]
         if not placed:
             return None
         return self._length_from, str(now), old, new, placed
@@ -1362,6 +1350,19 @@ class ShopbeamApp(App):
             self.exit()
             return
         js.guard("quit", self.exit)
+
+
+def _along(values) -> list[tuple[int, float]]:
+    """(index, position m) of each entry of a list of lengths that reads as a length past 0."""
+    out = []
+    for j, v in enumerate(values if isinstance(values, list) else ()):
+        try:
+            x = units.parse(str(v), "length")
+        except Exception:  # noqa: BLE001 - not a length
+            continue
+        if x > 1e-12:
+            out.append((j, x))
+    return out
 
 
 def _demo_path() -> Path | None:
