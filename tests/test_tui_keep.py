@@ -955,3 +955,45 @@ async def test_scaling_the_positions_moves_the_braces_and_the_trolley_travel_too
         assert s.rows("supports")[1]["at"] == "20 ft"
         assert s.doc.get("beam.braces") == ["10 ft"]
         assert s.doc.get("moving")[0]["travel"] == ["0 ft", "20 ft"]
+
+
+@sync
+async def test_a_removal_undone_keeps_what_every_row_kept_under_other_types(tmp_path):
+    # the stair load made uniform (its -1200 lbf kept), then another load removed and put
+    # back: picking point again left the stair with no value
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        s = app.job_screen.session
+        view = app.job_screen.query_one("#loads")
+        view.query_one("RowList").focus()
+        await settle(pilot)
+        await burst(pilot, DOWN * 3)
+        await settle(pilot)
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        await burst(pilot, "u")
+        await pilot.pause(LETTER)
+        await settle(pilot)
+        assert s.rows("loads")[3]["type"] == "uniform"
+        view.query_one("RowList").focus()
+        await settle(pilot)
+        await burst(pilot, "\x1b[A" + CTRL_X)  # remove load 3 (the offcuts)
+        await settle(pilot)
+        await burst(pilot, CTRL_Z)
+        await settle(pilot)
+        assert len(s.rows("loads")) == 4
+        await burst(pilot, DOWN * (3 - view.selected))
+        await settle(pilot)
+        assert view.selected == 3
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        await burst(pilot, "p")
+        await pilot.pause(LETTER)
+        await settle(pilot)
+        assert s.rows("loads")[3]["value"] == "-1200 lbf"
+        assert s.rows("loads")[3]["at"] == "15 ft"

@@ -853,6 +853,23 @@ class JobScreen(Screen):
         return got if got is not None and got in same and \
             not (isinstance(got, bool) != any(isinstance(x, bool) for x in same)) else None
 
+    def _kept_rows(self, table: str) -> list:
+        """What each row of `table` kept under other types (see `_kept_for`), by index."""
+        store = self.__dict__.setdefault("_kept_by_type", {})
+        out = []
+        for i in range(len(self.session.rows(table))):
+            node = self.session._node([table, i])
+            held = store.get(id(node))
+            out.append(held[1] if held is not None and held[0] is node else None)
+        return out
+
+    def _set_kept_rows(self, table: str, kept: list) -> None:
+        store = self.__dict__.setdefault("_kept_by_type", {})
+        for i, k in enumerate(kept[:len(self.session.rows(table))]):
+            if k is not None:
+                node = self.session._node([table, i])
+                store[id(node)] = (node, k)
+
     def _kept_for(self, where: tuple[str, int]) -> dict:
         """What a support or load row had under the other types it was given (type ->
         {key: value}), kept for as long as the row is this same table of the job file."""
@@ -998,7 +1015,11 @@ class JobScreen(Screen):
         rows = self.session.rows(table)
         if not rows or not 0 <= index < len(rows):
             return
+        kept = {t: self._kept_rows(t) for t in ("supports", "loads")}
+        self.__dict__.setdefault("_kept_removed", []).append(kept[table].pop(index))
         self.session.remove_row(table, index)
+        for t, lst in kept.items():  # the rows may be new tables now: what each kept follows
+            self._set_kept_rows(t, lst)
         view = self.query_one("#span" if table == "supports" else "#loads", RowsView)
         view.selected = max(0, index - 1)
         # a field of the removed row would now show its neighbour's value: keys typed right
@@ -1015,7 +1036,13 @@ class JobScreen(Screen):
         """ctrl+z: the last support or load removed comes back at its place (again: the one
         before it)."""
         self.flush_typing()
+        kept = {t: self._kept_rows(t) for t in ("supports", "loads")}
         back = self.session.undo_remove()
+        if back is not None:  # the row comes back with what it kept under other types
+            stack = self.__dict__.setdefault("_kept_removed", [])
+            kept[back[0]].insert(back[1], stack.pop() if stack else None)
+            for t, lst in kept.items():
+                self._set_kept_rows(t, lst)
         if back is None:
             self.notify("ctrl+z puts back the supports and loads removed, last first: none is "
                         "left to put back.", timeout=6)
