@@ -997,3 +997,18 @@ async def test_a_removal_undone_keeps_what_every_row_kept_under_other_types(tmp_
         await settle(pilot)
         assert s.rows("loads")[3]["value"] == "-1200 lbf"
         assert s.rows("loads")[3]["at"] == "15 ft"
+
+
+@sync
+async def test_digits_typed_right_behind_a_view_key_are_text_not_another_view(tmp_path):
+    # F4 then "12 ft" in one read ended on the Span view (1 Job, then 2 Span), with only
+    # " ft" named as not typed
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, F4 + "12 ft")
+        await pilot.pause(app.job_screen.STRAY_WAIT + 0.2)
+        await settle(pilot)
+        assert app.job_screen.current == "loads"
+        said = [m for m in _notices(app) if "Not typed anywhere" in m]
+        assert said and '"12 ft"' in said[-1], said

@@ -393,7 +393,8 @@ class JobScreen(Screen):
             vid, at = self._switched
             name = next((v[2] for v in VIEWS if v[0] == vid), vid)
             self._stray_after = (f" (typed right behind the key that switched to the {name} "
-                                 "view: a digit with no field picked changes views)"
+                                 "view; a digit on its own, with no field picked, changes "
+                                 "views)"
                                  if vid and time.monotonic() - at < self.STRAY_WAIT else "")
         self._stray += character
         self._stray_where = said
@@ -1327,6 +1328,13 @@ class ShopbeamApp(App):
                 return
             if isinstance(focused, Input) and event.is_printable:
                 await focused._on_key(event)  # typed into the field now, not queued
+                return
+            if on_job and event.is_printable and not isinstance(focused, Input) and \
+                    event.key in {v[1] for v in VIEWS} and \
+                    time.monotonic() - js._switched[1] < Choice.ALONE:
+                # a view key right behind a view switch ("F4 12 ft" in one burst): text typed
+                # on, not a second switch; it is not used, and the user is told
+                js.not_typed(event.character or "", focused or js)
                 return
             if await self._check_bindings(event.key):
                 return
