@@ -292,6 +292,7 @@ class JobScreen(Screen):
     async def action_view(self, vid: str) -> None:
         self.flush_typing()
         self._switched = (vid, time.monotonic())
+        self._switched_key = getattr(self.app, "_key_count", 0)
         switcher = self.query_one(ContentSwitcher)
         if not switcher.query(f"#{vid}"):
             cls = next(v[4] for v in VIEWS if v[0] == vid)
@@ -407,6 +408,7 @@ class JobScreen(Screen):
     _stray_timer = None
     _stray_after = ""
     _switched = ("", 0.0)  # the last view switched to, and when (time.monotonic)
+    _switched_key = -2  # the count of the key that switched it (ShopbeamApp._key_count)
 
     def _say_not_typed(self) -> None:
         text, self._stray = self._stray, ""
@@ -1266,6 +1268,7 @@ class ShopbeamApp(App):
         text field goes into it at once; only keys nothing is bound to are passed on."""
         if isinstance(event, events.Key) and not event.is_forwarded:
             self.app_focus = True
+            self._key_count += 1
             now = getattr(event, "time", None)
             gap = None if now is None or self._last_key_at is None else now - self._last_key_at
             if now is not None:
@@ -1329,13 +1332,19 @@ class ShopbeamApp(App):
             if isinstance(focused, Input) and event.is_printable:
                 await focused._on_key(event)  # typed into the field now, not queued
                 return
+            after_switch, self._text_after_switch = self._text_after_switch, False
             if on_job and event.is_printable and not isinstance(focused, Input) and \
-                    event.key in {v[1] for v in VIEWS} and \
-                    time.monotonic() - js._switched[1] < Choice.ALONE:
-                # a view key right behind a view switch ("F4 12 ft" in one burst): text typed
-                # on, not a second switch; it is not used, and the user is told
+                    event.key in {v[1] for v in VIEWS} and gap is not None and \
+                    gap < Choice.ALONE and (js._switched_key == self._key_count - 1
+                                            or (after_switch and typed_on)):
+                # a view key right behind the key that switched views, or in the text typed
+                # on from it ("F4 12 ft" in one burst): text, not a second switch; it is not
+                # used, and the user is told
+                self._text_after_switch = True
                 js.not_typed(event.character or "", focused or js)
                 return
+            if on_job and event.is_printable and after_switch and typed_on:
+                self._text_after_switch = True  # the word typed on goes on
             if await self._check_bindings(event.key):
                 return
             if on_job and event.is_printable and event.character:
@@ -1348,6 +1357,8 @@ class ShopbeamApp(App):
     # the focused widget when the key before this one was printable (a word being typed
     # there), else False
     _text_before = False
+    _key_count = 0  # keys so far (a view switch notes the key that made it)
+    _text_after_switch = False  # the key before was text typed right behind a view switch
     _held_letter = None  # (key event, choice, timer): a letter on a choice, not yet a pick
     _picked = None  # (choice, value before, letter): the last pick by a letter, for a while
 
