@@ -13,7 +13,7 @@ import numpy as np
 
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for
-from shopbeam.design import loading
+from shopbeam.design import fatigue, loading
 from shopbeam.design.basis import cb_factor, support_braces
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
                                     impact_of, not_checked_words, strengths, wood_load_case)
@@ -23,7 +23,7 @@ from shopbeam.design.loading import run_checks
 from shopbeam.design.local import local_unchecked
 from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, torsion_note
 from shopbeam.jobs.jobfile import Job
-from shopbeam.jobs.rules import rack_arm
+from shopbeam.jobs.rules import guessed_profile, rack_arm
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.engine.solver import Solution, sound_solve
 from shopbeam.members.sections import ANGLE_WARNING
@@ -238,8 +238,6 @@ def analyze(job: Job) -> Result:
     else:
         checks = run_checks(job, sol)
     st = strengths(job)
-    from shopbeam.design import fatigue  # noqa: PLC0415
-
     if fatigue.given(job):  # the fatigue limit state at the loads as entered (k = 1)
         c = fatigue.fatigue_check(job, st, loading.state_set(job), 1.0)
         checks = list(checks) + ([c] if c is not None else [])
@@ -334,9 +332,7 @@ def use_unchecked(job: Job) -> list[Unchecked]:
     prof = getattr(job.criteria, "lifting", "") or ""
     if job.lifting and NO_AXIAL not in job.tags:
         tol = 1e-9 * job.length
-        held = sorted({round(s.at / tol) for s in job.supports if s.takes_force}) if tol else []
-        from shopbeam.jobs.rules import guessed_profile  # noqa: PLC0415
-
+        held = {round(s.at / tol) for s in job.supports if s.takes_force}  # places held
         name = prof or guessed_profile(job.supports, job.length)
         if name == "below-the-hook" and len(held) >= 2:
             out.append(Unchecked(
@@ -359,8 +355,6 @@ def use_unchecked(job: Job) -> list[Unchecked]:
                 "endwise",
                 "AISC 360-16 E3, H1-1"))
     road = getattr(job, "vehicle", "")
-    from shopbeam.design import fatigue  # noqa: PLC0415
-
     parked = job.criteria.impact == 0 and not job.lifting  # loaded only while parked
     if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job) and not parked:
         out.append(Unchecked(
@@ -579,7 +573,8 @@ def span_top_limits(job: Job, st) -> list[tuple[float, float, float]]:
     a point not braced: a point load or spread load not hung from the bottom flange."""
     fl = _rating_flexure(st)
     # F2 I-shapes and channels (F4 with a noncompact web), and F11 bars on edge (their LTB
-    # strength is Cb times the Cb = 1 figure as F2's: the same 1/1.4 for a load on the top edge, from memory)
+    # strength is Cb times the Cb = 1 figure as F2's: the same 1/1.4 for a load on the top
+    # edge, from memory)
     if fl is None or fl.ltb[0] not in ("F2", "F4", "F11") or not fl.uses_cb or job.braced \
             or job.restrained:
         return []

@@ -468,13 +468,13 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
         return ("fatigue not checked: the stress categories of AISC 360-16 Appendix 3 are "
                 "for steel, and this member is not steel; have it checked by its own "
                 "material's fatigue rules, or remove fatigue_category and cycles",)
-    got = fatigue.fatigue_range(job, st, ss, k)
-    if got is None:
+    if ss.parts.moving:
         return ("fatigue not checked: the stress range of a moving load over its travel is "
                 "not worked out here; have it checked, or remove fatigue_category and cycles",)
-    fr, fsr = got
-    if fr <= fsr * (1 + 1e-9):
+    c = fatigue.fatigue_check(job, st, ss, k)
+    if c is None or c.ratio <= 1 + 1e-9:  # None: fewer than 20,000 cycles, no check needed
         return ()
+    fr, fsr = c.demand, c.limit
     f = lambda v: units.fmt(v, "stress", job.units)  # noqa: E731
     return (f"fatigue: {_at(k)} the live-load stress range reaches {f(fr)}, above the "
             f"{f(fsr)} the detail may take ({fatigue.words(job, fsr)}); the live loads at "

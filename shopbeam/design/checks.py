@@ -361,7 +361,7 @@ def _f2_f3(sec, fy, e) -> Flexure:
         warnings.append("slender web: bending taken as Rpg Fy Sx (AISC 360-16 F5-1); the rest "
                         "of F5 not applied")
     elif h_tw > 3.76 * root and sec.shape == "i-beam":
-        return _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc, built)
+        return _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc)
     elif h_tw > 3.76 * root:
         cap = fy * sx  # a channel: F2 covers compact webs only (AISC 360-16 F2, from memory)
         text = "noncompact web (h/tw %.3g > 3.76 sqrt(E/Fy)): Mn = Fy Sx" % h_tw
@@ -418,7 +418,7 @@ def _flange_buckling(top: float, low: float, lam: float, lpf: float, lrf: float,
     return 0.9 * e * kc * sx / lam**2
 
 
-def _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc, built) -> Flexure:
+def _f4_flexure(sec, mp, sx, e, fy, h_tw, lam, lpf, lrf, kc) -> Flexure:
     """A doubly symmetric I-shape with a noncompact web (3.76 < h/tw <= 5.70 sqrt(E/Fy)),
     by AISC 360-16 F4 (from memory): compression flange yielding Mn = Rpc Myc (F4-1), flange
     local buckling F4-13/F4-14, lateral-torsional buckling F4-2/F4-5 with rt, Lp = 1.1 rt

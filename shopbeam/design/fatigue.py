@@ -9,8 +9,10 @@ E' 5.8 ksi).
 The demand is the live-load bending stress range at the extreme fibre, taken wherever along
 the member it is largest (the detail's own place is not known: conservative): every live load
 (with the impact allowance) on and off, and over every pattern of patterned loads the sum of
-what each span's live load adds either way (a bound). It is judged at the rated load
-(`capacity.solved_gaps`): a rating is posted only where the range there passes.
+what each span's live load adds either way (a bound). It is a check like the others
+(`fatigue_check`): where it comes first it sets the capacity factor (`capacity._fatigue_cap`);
+a sizing row whose factor comes from the batched search is judged at that factor instead
+(`capacity._fatigue`).
 """
 
 from __future__ import annotations

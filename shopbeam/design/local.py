@@ -18,7 +18,8 @@ Rectangular HSS walls under a concentrated force bearing across the full width o
 (a cap plate or saddle, beta = 1) get the two sidewall limit states of AISC 360-16 K2
 (Table K2.2, recalled from memory; the same provisions were 360-10 K1.3): sidewall local
 yielding Rn = 2 Fy t (5k + lb), k the outside corner radius (1.5 t unless typed in:
-`hss_corner_k`; 2.5k + lb within the depth of the member end, as J10-3), Omega 1.50; sidewall local crippling Rn = 1.6 t^2 [1 + 3 lb /
+`hss_corner_k`; 2.5k + lb within the depth of the member end, as J10-3), Omega 1.50;
+sidewall local crippling Rn = 1.6 t^2 [1 + 3 lb /
 (H - 3t)] sqrt(E Fy) Qf, Omega 2.00, with the end form taken as J10-5 for two walls (from
 memory). Qf = 1.3 - 0.4 U / beta <= 1 depends on the utilisation U of the tube; it is taken
 at its lower bound 1.3 - 0.4 Z/S, valid whenever the bending check passes (U = M Omega /

@@ -272,6 +272,12 @@ class JobDoc:
         for k, v in fields.items():
             _assign(row, k, v, f"supports[{index}].{k}")
 
+    def set_moving(self, index: int, **fields) -> None:
+        """Change fields of one [[moving]] wheel set (e.g. travel=["0 ft", "20 ft"])."""
+        row = self._row("moving", index)
+        for k, v in fields.items():
+            _assign(row, k, v, f"moving[{index}].{k}")
+
     def add_load(self, type: str, **fields) -> int:
         """Append a load (`type` first, then the fields in the order given); its index."""
         return self._add("loads", {"type": type, **fields})

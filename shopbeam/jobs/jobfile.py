@@ -29,7 +29,7 @@ from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
-                                 guessed_profile, has_free_end)
+                                 FATIGUE_CATEGORIES, guessed_profile, has_free_end)
 from shopbeam.members import catalog
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
 from shopbeam.members.materials import get as get_material, resolve_material, untempered, ungraded
@@ -325,9 +325,10 @@ class _Reader:
     _POINT_THOUSANDS = re.compile(r"^\s*([-+\u2212]?)(\d{1,3})\.(\d{3})\s*([^\d\s.,].*)$")
 
     def thousands_point(self, raw, kind: str, key: str) -> None:
-        """A force or mass written "1.500 kN" as a European thousands point: read as 1.5, and
-        a load a thousand times too small passes every check. Said, with both readings (a
-        comma, "1,500", is refused for the same doubt)."""
+        """A force or mass in a small unit written "-1.500 lbf" with a European thousands
+        point: read as 1.5, and a load a thousand times too small passes every check. Said,
+        with both readings (a comma, "1,500", is refused for the same doubt); a larger unit
+        ("0.250 kip", "1.250 kN") is written to three places as a matter of course."""
         m = self._POINT_THOUSANDS.match(raw) if isinstance(raw, str) else None
         small = re.match(r"(?:lbf?s?|pounds?|n|newtons?|kgf?|kilograms?|lb/ft|lbf/ft|plf|"
                          r"n/m|psf|lbf/ft\^?2|lb/ft\^?2|kg/m)$", m.group(4).strip(), re.I) \
@@ -704,15 +705,13 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
 
 def _read_fatigue(r: _Reader, crit: dict) -> tuple[str, float | None]:
     """[criteria] fatigue_category and cycles (AISC 360-16 Appendix 3): both or neither."""
-    from shopbeam.jobs.rules import FATIGUE_CATEGORIES as CATEGORIES  # noqa: PLC0415
-
     cat, n = "", None
     if "fatigue_category" in crit:
         raw = crit["fatigue_category"]
         cat = raw.strip().upper().replace("\u2019", "'") if isinstance(raw, str) else ""
-        if cat not in CATEGORIES:
+        if cat not in FATIGUE_CATEGORIES:
             r.error(f"fatigue_category {raw!r} is not an AISC 360-16 Table A-3.1 stress "
-                    "category; use one of " + ", ".join(f'"{c}"' for c in CATEGORIES)
+                    "category; use one of " + ", ".join(f'"{c}"' for c in FATIGUE_CATEGORIES)
                     + " (a plain rolled member A, a fillet-welded attachment usually E)",
                     "criteria.fatigue_category")
             cat = ""
@@ -1628,9 +1627,9 @@ _LIFTING_WORDS = re.compile(
     r"load bars?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
-# lifting words inside a tag run together with another word (a tag is a word or two, so
-# a stem anywhere in it says what it is): "hoistbeam", "jibcrane", "crane_runway",
-# "underhung", "monorial" (a slip of monorail)
+# a lifting word run together with the member it names, as one word of a tag or title
+# ("hoistbeam", "jibcrane", "liftingdevice", "underhung"): whole compounds only, so
+# "Cranebrook" or "Weightlifting" are not read as one
 _LIFTING_STEMS = re.compile(
     r"^(?:hoist|lift|lifting|jib|crane|monorail|monorial|trolley|chain|spreader|sling|pick)"
     r"(?:ing)?(?:beams?|arms?|booms?|rails?|cranes?|bars?|frames?|devices?|runways?|hooks?|"

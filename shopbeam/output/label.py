@@ -34,9 +34,11 @@ from html import escape
 
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
-from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD
+from shopbeam.design import fatigue
+from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD, couple_notes
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
+from shopbeam.engine.solver import sound_solve
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.jobs.rules import rack_arm
 from shopbeam.output.present import present_capacity
@@ -413,9 +415,6 @@ def _dead_couple_words(job) -> list[str]:
     """A dead couple that lowers the largest moment the other loads make: the figure counts
     on it, and a slipped sign (+ is counterclockwise) is the usual reason it does; the label
     says so beside the figure (a live one that relieves posts no rating at all)."""
-    from shopbeam.design.analysis import couple_notes  # noqa: PLC0415
-    from shopbeam.engine.solver import sound_solve  # noqa: PLC0415
-
     if not any(ld.kind == "moment" and ld.case == "dead" and ld.value for ld in job.loads):
         return []
     try:
@@ -460,8 +459,6 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         figs, notes = _figures(job, k)
         notes += _connection_words(job, k)
         notes += _dead_couple_words(job)
-        from shopbeam.design import fatigue  # noqa: PLC0415
-
         if fatigue.given(job):
             c = job.criteria
             notes.append(f"Fatigue checked at this rating: a category {c.fatigue_category} "

@@ -52,6 +52,7 @@ VIEWS = [
     ("sizing", "s", "Size", "Size", SizingView),
 ]
 INPUT_VIEWS = {v[0] for v in VIEWS[:6]}
+VIEW_KEYS = frozenset(v[1] for v in VIEWS)  # the keys that switch views with no field picked
 VIEW_FKEYS = [f"f{n}" for n in range(2, 13)]  # F2 .. F12: the views in bar order, from anywhere
 SOLVE_DEBOUNCE = 0.03  # seconds: keys typed closer together than this cost one solve
 
@@ -627,11 +628,12 @@ class JobScreen(Screen):
 
         self.app.push_screen(LengthScreen(old_text, now_text, lines), answer)
 
-    def _placed_words(self, table: str, i: int, k: str, x: float) -> str:
-        """One position along the beam in words ("load 2 start 4 ft", "brace 1 at 6 ft")."""
+    def _placed_words(self, table: str, i: int, k: str, x: float, shown: str = "") -> str:
+        """One position along the beam in words ("load 2 start 4 ft", "brace 1 at 6 ft"):
+        a support's or load's as typed in its row, a brace's or travel's `shown` or x."""
         system = self.session.doc.get("units") if self.session.doc.get("units") in (
             "us", "si") else "us"
-        at = units.fmt(x, "length", system)
+        at = shown or units.fmt(x, "length", system)
         if table == "braces":
             return f"brace {i + 1} at {at}"
         if table == "movings":
@@ -658,15 +660,12 @@ class JobScreen(Screen):
                 braces[i] = to
                 s.doc.set_value("beam.braces", braces)
             elif table == "movings":
-                row = s.doc._row("moving", i)
-                travel = list(row["travel"].unwrap() if hasattr(row["travel"], "unwrap")
-                              else row["travel"])
+                travel = list(s.doc.get("moving")[i]["travel"])
                 travel[int(k[-1])] = to
-                jobdoc._assign(row, "travel", travel, f"moving[{i}].travel")
+                s.doc.set_moving(i, travel=travel)
             else:
                 (s.doc.set_support if table == "supports" else s.doc.set_load)(i, **{k: to})
-            moved.append(f"{self._placed_words(table, i, k, x).rsplit(' ', 2)[0]} {to}"
-                         if table in ("braces", "movings") else f"{table[:-1]} {i + 1} {k} {to}")
+            moved.append(self._placed_words(table, i, k, x, to))
         past = [f"{t[:-1]} {i + 1}" for t, i, k, x in placed
                 if x > new * (1 + 1e-9) and not (how == "scale" or
                                                  (how == "ends" and abs(x - old) <= 1e-9 * old))]
@@ -856,32 +855,31 @@ class JobScreen(Screen):
         return got if got is not None and got in same and \
             not (isinstance(got, bool) != any(isinstance(x, bool) for x in same)) else None
 
-    def _kept_rows(self, table: str) -> list:
-        """What each row of `table` kept under other types (see `_kept_for`), by index."""
+    def _kept_of(self, node, kept: dict | None = None) -> dict | None:
+        """What the row table `node` had under the other types it was given (type -> {key:
+        value}), held for as long as the row is this same table of the job file; `kept`
+        given: held for it from now on."""
         store = self.__dict__.setdefault("_kept_by_type", {})
-        out = []
-        for i in range(len(self.session.rows(table))):
-            node = self.session._node([table, i])
-            held = store.get(id(node))
-            out.append(held[1] if held is not None and held[0] is node else None)
-        return out
+        if kept is not None:
+            store[id(node)] = (node, kept)
+        held = store.get(id(node))
+        return held[1] if held is not None and held[0] is node else None
+
+    def _kept_rows(self, table: str) -> list:
+        """`_kept_of` each row of `table`, by index."""
+        return [self._kept_of(self.session._node([table, i]))
+                for i in range(len(self.session.rows(table)))]
 
     def _set_kept_rows(self, table: str, kept: list) -> None:
-        store = self.__dict__.setdefault("_kept_by_type", {})
         for i, k in enumerate(kept[:len(self.session.rows(table))]):
             if k is not None:
-                node = self.session._node([table, i])
-                store[id(node)] = (node, k)
+                self._kept_of(self.session._node([table, i]), k)
 
     def _kept_for(self, where: tuple[str, int]) -> dict:
-        """What a support or load row had under the other types it was given (type ->
-        {key: value}), kept for as long as the row is this same table of the job file."""
-        table = self.session._node(list(where))
-        store = self.__dict__.setdefault("_kept_by_type", {})
-        held = store.get(id(table))
-        if held is None or held[0] is not table:
-            held = store[id(table)] = (table, {})
-        return held[1]
+        """`_kept_of` the row at `where` (table, index), a new one if it had none."""
+        node = self.session._node(list(where))
+        kept = self._kept_of(node)
+        return kept if kept is not None else self._kept_of(node, {})
 
     def change_section_mode(self, mode: str) -> None:
         self.flush_typing()  # the figures typed so far belong to the mode left
@@ -1334,7 +1332,7 @@ class ShopbeamApp(App):
                 return
             after_switch, self._text_after_switch = self._text_after_switch, False
             if on_job and event.is_printable and not isinstance(focused, Input) and \
-                    event.key in {v[1] for v in VIEWS} and gap is not None and \
+                    event.key in VIEW_KEYS and gap is not None and \
                     gap < Choice.ALONE and (js._switched_key == self._key_count - 1
                                             or (after_switch and typed_on)):
                 # a view key right behind the key that switched views, or in the text typed
