@@ -672,6 +672,19 @@ async def test_esc_right_behind_a_letter_answer_cancels_and_the_letter_never_ans
 LETTER = 1.1  # past Choice.WORD_GAP (1 s): a letter on its own has picked, and the next one is no word
 
 
+async def letters_alone(pilot, letters: str) -> None:
+    """Each letter on its own, past Choice.WORD_GAP: a deliberate pick, not a word."""
+    for letter in letters:
+        await burst(pilot, letter)
+        await pilot.pause(LETTER)
+        await settle(pilot)
+
+
+async def focus(pilot, widget) -> None:
+    widget.focus()
+    await settle(pilot)
+
+
 @sync
 async def test_a_word_typed_on_the_load_type_choice_picks_nothing_and_is_named(tmp_path):
     # "-250 lbf/ft typed" with the focus on the Type choice (a Tab too many): before, its
@@ -683,8 +696,7 @@ async def test_a_word_typed_on_the_load_type_choice_picks_nothing_and_is_named(t
         await pilot.press("f4")
         await settle(pilot)
         kind = choice_of(app, "loads", "load.type")
-        kind.focus()
-        await settle(pilot)
+        await focus(pilot, kind)
         s = app.job_screen.session
         before = s.doc.text()
         await burst(pilot, "-250 lbf/ft typed up")
@@ -714,8 +726,7 @@ async def test_a_letter_on_a_choice_right_before_a_save_is_picked_and_saved(tmp_
         await pilot.press("f4")
         await settle(pilot)
         kind = choice_of(app, "loads", "load.type")
-        kind.focus()
-        await settle(pilot)
+        await focus(pilot, kind)
         await burst(pilot, "l" + "\x13")  # "l", ctrl+s
         await pilot.pause(LETTER)
         await settle(pilot)
@@ -733,30 +744,20 @@ async def test_a_load_type_picked_and_picked_back_keeps_the_value_typed(tmp_path
         await settle(pilot)
         s = app.job_screen.session
         kind = choice_of(app, "loads", "load.type")
-        kind.focus()
-        await settle(pilot)
+        await focus(pilot, kind)
         original = s.doc.text()
-        for letter in "pu":
-            await burst(pilot, letter)
-            await pilot.pause(LETTER)
-            await settle(pilot)
+        await letters_alone(pilot, "pu")
         assert s.rows("loads")[0]["type"] == "uniform"
         assert s.rows("loads")[0]["value"] == "-90 lbf/ft"
         # every key back in its place, with its comment ("# loft deck and joists")
         assert s.doc.text() == original
-        await burst(pilot, "l")
-        await pilot.pause(LETTER)
-        await settle(pilot)
+        await letters_alone(pilot, "l")
         v2 = field(app, "loads", "load.value2")
         v2.input.focus()
         await settle(pilot)
         await burst(pilot, CTRL_U + "-150 lbf/ft" + "\t")
-        kind.focus()
-        await settle(pilot)
-        for letter in "pl":
-            await burst(pilot, letter)
-            await pilot.pause(LETTER)
-            await settle(pilot)
+        await focus(pilot, kind)
+        await letters_alone(pilot, "pl")
         assert s.rows("loads")[0]["value"] == ["-90 lbf/ft", "-150 lbf/ft"]
 
 
@@ -772,22 +773,14 @@ def test_a_spring_stiffness_typed_comes_back_with_the_spring_type(tmp_path):
             await settle(pilot)
             s = app.job_screen.session
             kind = choice_of(app, "span", "support.type")
-            kind.focus()
-            await settle(pilot)
-            await burst(pilot, "s")  # spring
-            await pilot.pause(LETTER)
-            await settle(pilot)
+            await focus(pilot, kind)
+            await letters_alone(pilot, "s")  # spring
             assert s.rows("supports")[0]["type"] == "spring"
             k = field(app, "span", "support.stiffness")
-            k.input.focus()
-            await settle(pilot)
+            await focus(pilot, k.input)
             await burst(pilot, CTRL_U + "850 lbf/in" + "\t")
-            kind.focus()
-            await settle(pilot)
-            for letter in "ps":  # pin, then spring again
-                await burst(pilot, letter)
-                await pilot.pause(LETTER)
-                await settle(pilot)
+            await focus(pilot, kind)
+            await letters_alone(pilot, "ps")  # pin, then spring again
             assert s.rows("supports")[0].get("stiffness") == "850 lbf/in"
     run()
 
@@ -824,19 +817,14 @@ async def test_a_load_type_picked_and_picked_back_keeps_its_place(tmp_path):
         view = app.job_screen.query_one("#loads")
         lst = view.query_one("RowList")
         for row, letters in ((3, "up"), (1, "pu")):
-            lst.focus()
-            await settle(pilot)
+            await focus(pilot, lst)
             step = DOWN if row > view.selected else "\x1b[A"
             await burst(pilot, step * abs(row - view.selected))
             await settle(pilot)
             assert view.selected == row
             kind = choice_of(app, "loads", "load.type")
-            kind.focus()
-            await settle(pilot)
-            for letter in letters:
-                await burst(pilot, letter)
-                await pilot.pause(LETTER)
-                await settle(pilot)
+            await focus(pilot, kind)
+            await letters_alone(pilot, letters)
         assert s.rows("loads")[3]["at"] == "15 ft" and s.rows("loads")[3]["value"] == "-1200 lbf"
         assert (s.rows("loads")[1]["start"], s.rows("loads")[1]["end"]) == ("0 ft", "12 ft")
         assert s.doc.text() == original
@@ -871,13 +859,11 @@ async def test_a_word_typed_slowly_on_a_choice_changes_nothing_and_is_named(tmp_
         await pilot.press("f4")
         await settle(pilot)
         view = app.job_screen.query_one("#loads")
-        view.query_one("RowList").focus()
-        await settle(pilot)
+        await focus(pilot, view.query_one("RowList"))
         await burst(pilot, DOWN * 3)
         await settle(pilot)
         kind = choice_of(app, "loads", "load.type")
-        kind.focus()
-        await settle(pilot)
+        await focus(pilot, kind)
         s = app.job_screen.session
         before = s.doc.text()
         for ch in "uniform":
@@ -909,18 +895,13 @@ async def test_a_choice_picked_away_and_back_leaves_an_explicit_default_as_writt
         s = app.job_screen.session
         original = s.doc.text()
         view = app.job_screen.query_one("#loads")
-        view.query_one("RowList").focus()
-        await settle(pilot)
+        await focus(pilot, view.query_one("RowList"))
         await burst(pilot, DOWN)
         await settle(pilot)
         assert view.selected == 1
         case = choice_of(app, "loads", "load.case")
-        case.focus()
-        await settle(pilot)
-        for letter in "dl":
-            await burst(pilot, letter)
-            await pilot.pause(LETTER)
-            await settle(pilot)
+        await focus(pilot, case)
+        await letters_alone(pilot, "dl")
         assert s.rows("loads")[1]["case"] == "live"
         assert s.doc.text() == original
 
@@ -942,8 +923,7 @@ async def test_scaling_the_positions_moves_the_braces_and_the_trolley_travel_too
         await pilot.press("f3")
         await settle(pilot)
         f = field(app, "span", "beam.length")
-        f.input.focus()
-        await settle(pilot)
+        await focus(pilot, f.input)
         await burst(pilot, CTRL_U + "20 ft" + TAB)
         await burst(pilot, CTRL_L)
         await pilot.pause(0.7)
@@ -968,19 +948,14 @@ async def test_a_removal_undone_keeps_what_every_row_kept_under_other_types(tmp_
         await settle(pilot)
         s = app.job_screen.session
         view = app.job_screen.query_one("#loads")
-        view.query_one("RowList").focus()
-        await settle(pilot)
+        await focus(pilot, view.query_one("RowList"))
         await burst(pilot, DOWN * 3)
         await settle(pilot)
         kind = choice_of(app, "loads", "load.type")
-        kind.focus()
-        await settle(pilot)
-        await burst(pilot, "u")
-        await pilot.pause(LETTER)
-        await settle(pilot)
+        await focus(pilot, kind)
+        await letters_alone(pilot, "u")
         assert s.rows("loads")[3]["type"] == "uniform"
-        view.query_one("RowList").focus()
-        await settle(pilot)
+        await focus(pilot, view.query_one("RowList"))
         await burst(pilot, "\x1b[A" + CTRL_X)  # remove load 3 (the offcuts)
         await settle(pilot)
         await burst(pilot, CTRL_Z)
@@ -990,11 +965,8 @@ async def test_a_removal_undone_keeps_what_every_row_kept_under_other_types(tmp_
         await settle(pilot)
         assert view.selected == 3
         kind = choice_of(app, "loads", "load.type")
-        kind.focus()
-        await settle(pilot)
-        await burst(pilot, "p")
-        await pilot.pause(LETTER)
-        await settle(pilot)
+        await focus(pilot, kind)
+        await letters_alone(pilot, "p")
         assert s.rows("loads")[3]["value"] == "-1200 lbf"
         assert s.rows("loads")[3]["at"] == "15 ft"
 
