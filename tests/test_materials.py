@@ -298,3 +298,59 @@ def test_6063_t5_over_half_an_inch_takes_its_lower_minimums(width, fy_ksi, fu_ks
                        f'width = "{width}"\ndepth = "3 in"', 4)
     mat = parse_job_text(text).material
     assert mat.fy == pytest.approx(fy_ksi * KSI) and mat.fu == pytest.approx(fu_ksi * KSI)
+
+
+# ------------------------------------------------------------------ European grades
+# EN 10025-2 (hot-rolled) and EN 10219-1 (hollow sections), from memory: minimum yield ReH up
+# to 16 mm thick and tensile Rm from 3 mm up, in MPa.
+@pytest.mark.parametrize("typed, key, fy_mpa, fu_mpa", [
+    ("S235", "S235", 235, 360), ("S235JR", "S235", 235, 360),
+    ("S275 J0", "S275", 275, 410),
+    ("S355", "S355", 355, 470), ("S355J2H", "S355", 355, 470), ("s355-j2", "S355", 355, 470),
+])
+def test_european_grades_take_their_en_minimums(typed, key, fy_mpa, fu_mpa):
+    m = resolve_material(typed)
+    assert m.key == key and m.kind == "steel"
+    assert m.fy == pytest.approx(fy_mpa * 1e6, rel=1e-12)
+    assert m.fu == pytest.approx(fu_mpa * 1e6, rel=1e-12)
+    assert m.max_thickness == pytest.approx(0.016)  # the 16 mm step of EN 10025-2
+
+
+@pytest.mark.parametrize("section, rated", [
+    ("IPE500", True),    # EN 10365: tf 16.0 mm, inside the 16 mm range
+    ("IPE550", False),   # tf 17.2 mm: S355's yield is 345 MPa there (EN 10025-2, from memory)
+    ("HEB200", True),    # tf 15 mm
+    ("HEB300", False),   # tf 19 mm
+])
+def test_a_european_grade_past_16_mm_is_not_rated_on_its_thin_values(section, rated):
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = simple_span(f'section = "{section}"\nmaterial = "S355"\nbraced = true', 20,
+                       point_load(10, "-2000 lbf"))
+    job = parse_job_text(text)
+    why = [w for w in capacity(job).not_rated if "16 mm" in w or "past the" in w]
+    assert bool(why) == (not rated)
+    thick = [p for p in job.warnings if p.key == "beam.material" and "thick" in p.message]
+    assert bool(thick) == (not rated)
+
+
+def test_a_european_grade_on_any_section_is_not_warned_as_a_mismatch():
+    # S grades are made as rolled sections, plate and hollow sections (EN 10025-2, EN 10210,
+    # EN 10219), common practice
+    from shopbeam.jobs.jobfile import parse_job_text
+    for section in ("IPE200", "HEA200", "UPN200", "SHS100x100x5", "W8x18", "HSS4x4x1/4"):
+        job = parse_job_text(simple_span(f'section = "{section}"\nmaterial = "S355"', 10))
+        assert not [p for p in job.warnings if p.key == "beam.material"], section
+
+
+def test_sizing_a_european_kind_from_an_astm_job_sweeps_s235():
+    from shopbeam.design.sizing import material_for_kind
+    from shopbeam.jobs.jobfile import parse_job_text
+    job = parse_job_text(simple_span('section = "W8x18"\nmaterial = "A992"', 10))
+    for kind in ("IPE", "HEB", "UPN", "SHS", "CHS"):
+        swept, note = material_for_kind(job, kind)
+        assert swept.material.key == "S235" and "S235" in note, kind
+    s355 = parse_job_text(simple_span('section = "IPE200"\nmaterial = "S355"', 10))
+    for kind in ("IPE", "RHS", "W", "HSS"):
+        swept, note = material_for_kind(s355, kind)
+        assert swept.material.key == "S355" and note == "", kind

@@ -197,9 +197,9 @@ def test_welded_typed_in_aluminium_with_fy_welded_rates_on_the_weld_by_hand():
     ("C10x15.3", "A992", '"A36"'),
     ("S8x18.4", "A992", '"A36"'),
     ("HSS4x4x1/4", "A513-DOM", '"A500-C"'),
-    ("IPE200", "A992", '"235 MPa"'),
-    ("HEB200", "A572-50", '"235 MPa"'),
-    ("IPE200", "A36", '"235 MPa"'),
+    ("IPE200", "A992", '"S235"'),
+    ("HEB200", "A572-50", '"S235"'),
+    ("IPE200", "A36", '"S235"'),
 ])
 def test_a_grade_that_over_credits_the_shape_is_warned_with_what_to_write(section, material,
                                                                            word):

@@ -59,7 +59,7 @@ from shopbeam.engine.solver import segments, solve, solve_many
 from shopbeam.errors import InputError
 from shopbeam.jobs.rules import WOOD_E_MAX
 from shopbeam.members import catalog, wood
-from shopbeam.members.materials import get as get_material
+from shopbeam.members.materials import EN_GRADES, get as get_material
 from shopbeam.members.sections import bending_ix, turn
 
 
@@ -267,7 +267,12 @@ def default_kind(job) -> str:
 FAMILY_DEFAULTS = {"lumber": "DF-L-2", "LVL": "LVL-2.0E", "W": "A992", "WT": "A992", "M": "A36", "S": "A36",
                    "HP": "A572-50",
                    "HSS": "A500-C", "HSS-rect": "A500-C", "HSS-round": "A500-C",
-                   "PIPE": "A53-B", "mech-tube": "A513", "mech-round": "A513"}
+                   "PIPE": "A53-B", "mech-tube": "A513", "mech-round": "A513",
+                   # European sections: S235, the lowest common grade of EN 10025-2 and
+                   # EN 10219-1 (common practice)
+                   "IPE": "S235", "HEA": "S235", "HEB": "S235", "UPN": "S235", "SHS": "S235",
+                   "RHS": "S235", "CHS": "S235"}
+EN_KINDS = frozenset({"IPE", "HEA", "HEB", "UPN", "SHS", "RHS", "CHS"})
 
 
 # Kinds made of tube or pipe (A500, A53, A513 grades); every other steel kind is rolled
@@ -296,8 +301,12 @@ def usual_grade(material, kind: str):
     if getattr(material, "kind", "") != "steel" or kind in ("lumber", "LVL"):
         return None
     key = getattr(material, "key", "")
+    if key in EN_GRADES:  # made as rolled sections, plate and hollow sections alike
+        return None
     tube_grade = getattr(material, "hss_wall_factor", None) is not None
-    if kind in TUBE_KINDS and not tube_grade:
+    if kind in EN_KINDS:
+        want = FAMILY_DEFAULTS[kind]
+    elif kind in TUBE_KINDS and not tube_grade:
         want = FAMILY_DEFAULTS.get(kind, "A500-C")
     elif kind not in TUBE_KINDS and tube_grade:
         want = FAMILY_DEFAULTS.get(kind, "A36")
@@ -338,8 +347,9 @@ def material_for_kind(job, kind: str):
             return job, ""
         return replace(job, material=grade), (
             f"--kind {kind} is not made in the job's grade {name}: swept in {grade.key} "
-            f"({grade.name}), the grade it is bought in (AISC Manual Table 2-4, common "
-            "practice)" + ("; round tube to an A500 edition before 2018 is 46 ksi "
+            f"({grade.name}), the grade it is bought in ("
+            + ("EN 10025-2 / EN 10219-1, the lowest common grade" if kind in EN_KINDS
+               else "AISC Manual Table 2-4") + ", common practice)" + ("; round tube to an A500 edition before 2018 is 46 ksi "
                            "(A500-C-round)" if kind in ("HSS-round", "CHS") and
                            grade.key == "A500-C" else "")
             + "; give beam.material in the job to choose another grade")

@@ -2408,9 +2408,8 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                f"rolled to EN 10025 grades (S235: fy 235 MPa, S355: 355 MPa, up to 16 mm "
                f"thick), not ASTM {key}: the check credits "
                f"{units.fmt(material.fy, 'stress', system)}, which an S235 section does not "
-               "have. Give the mill cert's grade as [beam.material] kind = \"steel\", e = "
-               "\"210 GPa\", fy = \"235 MPa\", fu = \"360 MPa\", density = "
-               "\"7850 kg/m^3\" (EN 10025-2 and EN 1993-1-1 3.2, from memory)", where)
+               "have. Write the mill cert's grade: material = \"S235\", \"S275\" or "
+               "\"S355\" (EN 10025-2, from memory)", where)
     elif mkind in ("aluminum", "stainless") and is_steel_shape(section):
         metal = "aluminium" if mkind == "aluminum" else mkind
         r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
@@ -2420,8 +2419,7 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                "and the mill's dimensions", "beam.section")
     if not usual:
         return ""
-    # S235: fy 235 MPa up to 16 mm (EN 10025-2, from memory); the others are built in
-    top = 235e6 if usual == "S235" else getattr(get_material(usual), "fy", float("inf"))
+    top = getattr(get_material(usual), "fy", float("inf"))
     if not material.fy > top * (1 + 1e-9):
         return ""
     if len(r.problems) > said:  # the warning just given says so too

@@ -125,6 +125,24 @@ def _steel(key, name, fy_ksi, fu_ksi, spec, notes=(), aliases=(), wall=None):
                     hss_wall_factor=wall)
 
 
+EN_GRADES = ("S235", "S275", "S355")  # made as rolled sections, plate and hollow sections
+
+
+def _en_steel(key, fy_mpa, fu_mpa, aliases):
+    return Material(key, f"EN 10025-2 / EN 10219-1 structural steel {key}", "steel", _E_STEEL,
+                    fy_mpa * MPA, _RHO_STEEL, fu=fu_mpa * MPA, g=_G_STEEL,
+                    source=f"fy {fy_mpa} MPa up to 16 mm thick, fu {fu_mpa} MPa: EN 10025-2 "
+                    "and EN 10219-1, from memory (lower yield past 16 mm); E 200 GPa "
+                    "(29,000 ksi), G 77.2 GPa (11,200 ksi): AISC 360-16, whose checks these "
+                    "are; density 490 lb/ft^3: AISC Manual",
+                    notes=(f"{key}'s yield steps down past 16 mm thick ({fy_mpa - 10} MPa to "
+                           "40 mm, EN 10025-2, from memory): a thicker section is not rated "
+                           "on these values",),
+                    aliases=tuple(aliases), max_thickness=0.016,
+                    published=(f"E = 29,000 ksi, Fy = {fy_mpa / (KSI / MPA):.1f} ksi "
+                               f"({fy_mpa} MPa)", f"E = 200 GPa, Fy = {fy_mpa} MPa"))
+
+
 _A500_NOTE = ("ASTM A500 editions before 2018 gave round tube a lower yield than shaped "
               "(square/rectangular) tube (Gr B 42 vs 46 ksi, Gr C 46 vs 50 ksi); from A500-18 "
               "on round and shaped tube share one yield. Old stock or an old mill cert: use "
@@ -169,6 +187,18 @@ _MATERIALS: tuple[Material, ...] = (
     _steel("A513-DOM", "ASTM A513 Type 5 DOM mechanical tube, 1020 stress relieved", 60, 70,
            "ASTM A513 (Type 5 DOM, 1020, stress relieved), from memory", notes=(_A513_NOTE,),
            aliases=("a513dom", "dom", "a513type5", "dom1020"), wall=1.0),
+    # European structural steel: EN 10025-2 (hot-rolled sections and plate), EN 10210-1 and
+    # EN 10219-1 (hollow sections, the "H" grades): minimum yield ReH for nominal thickness up
+    # to 16 mm and tensile Rm from 3 mm up, from memory. Past 16 mm the yield steps down (by
+    # 10 MPa to 40 mm), so these values hold to 16 mm only (max_thickness). E and G are
+    # AISC 360-16's (the checks are AISC 360-16's; EN 1993-1-1 3.2.6 takes E = 210 GPa, so
+    # deflections and buckling here are on the safe side by about 5 %).
+    _en_steel("S235", 235, 360, ("s235jr", "s235j0", "s235j2", "s235jrh", "s235j0h",
+                                  "s235j2h", "en10025s235")),
+    _en_steel("S275", 275, 410, ("s275jr", "s275j0", "s275j2", "s275jrh", "s275j0h",
+                                  "s275j2h", "en10025s275")),
+    _en_steel("S355", 355, 470, ("s355jr", "s355j0", "s355j2", "s355k2", "s355jrh",
+                                  "s355j0h", "s355j2h", "s355k2h", "en10025s355")),
     # Stainless: E 193 GPa (28,000 ksi), density 8000 kg/m^3 (ASTM A240 / producer data,
     # from memory); G 77 GPa.
     Material("304", "Type 304 stainless steel (annealed)", "stainless", 193e9, 205 * MPA,
