@@ -311,3 +311,35 @@ def test_a_joist_whose_ends_are_not_held_is_not_rated(section, blocked):
     held = capacity(parse_job_text(span(f'section = "{section}"\nmaterial = "DF-L-2"',
                                         sup(0, "pin") + sup(8, "roller"), load, length=8)))
     assert not twist_reasons(held)
+
+
+# ------------------------------------------------------------------ a floor's live-load limit
+def _floor(tags: str, criteria: str) -> str:
+    # 20 ft W8X18 floor beam, braced by the deck, 100 lbf/ft live, no self-weight
+    return span(W8 + '\nbraced = true', "",
+                '[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "20 ft"\n'
+                'value = "-100 lbf/ft"\n', length=20, tags=tags, criteria=criteria)
+
+
+@pytest.mark.parametrize("tags, criteria, live", [
+    ('["mezzanine"]', 'deflection = "L/240"', True),
+    ('["floor", "not-lifting"]', "", True),           # the default L/240 too
+    ('["platform"]', 'deflection = "L/300"', True),
+    ('["mezzanine"]', 'deflection = "L/360"', False),  # a total limit this strict covers it
+    ('["mezzanine"]', 'deflection = "L/240"\nlive_deflection = "L/480"', False),  # as written
+    ('["roof", "joist"]', 'deflection = "L/240"', False),
+    ('["shelf"]', 'deflection = "L/240"', False),
+])
+def test_a_floor_job_is_checked_for_live_load_deflection_at_l_over_360(tags, criteria, live):
+    job = parse_job_text(_floor(tags, criteria))
+    said = [p for p in job.warnings if "read as a floor" in p.message]
+    assert len(said) == int(live)
+    ld = job.criteria.live_deflection_ratio
+    assert ld == (360 if live else 480 if "live_deflection" in criteria else None)
+    # simple span under uniform load: delta = 5 w L^4 / (384 E I) (AISC Manual Table 3-23,
+    # case 1); live governs here, so k = (L/360) / delta at 1 x the load
+    if live:
+        w, L = 100 * 4.4482216152605 / 0.3048, 20 * 0.3048
+        delta = 5 * w * L ** 4 / (384 * job.material.e * job.section.ix)
+        res = capacity(job)
+        assert res.rated and res.factor == pytest.approx(L / 360 / delta, rel=1e-9)

@@ -1738,6 +1738,31 @@ def _looser_than_floor(r: _Reader, criteria: Criteria, tags, supports, length) -
                "criteria.deflection")
 
 
+def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length) -> Criteria:
+    """A floor, mezzanine or platform job (by its tags, not a roof) whose total-load limit is
+    looser than L/360 and that names no live-load limit gets the floor's L/360 under live load
+    alone as well (IBC 2018 Table 1604.3, from memory), with a warning saying so: a rating on
+    L/240 total alone can pass a floor that bounces past L/360 under the people and stock on
+    it. Under gravity loads a total limit of L/360 or stricter covers the live one."""
+    normal = {normal_tag(t) for t in tags}
+    if (criteria.live_deflection_ratio is not None or length is None or "roof" in normal
+            or not FLOOR_TAGS.intersection(normal)):
+        return criteria
+    ratio, shown = _ratio_of(criteria, supports, length)
+    live = LIVE_DEFLECTION_PRESETS["floor"]
+    if not ratio or ratio >= live:
+        return criteria
+    tag = sorted(FLOOR_TAGS.intersection(normal))[0]
+    written = (f"deflection = {shown}" if criteria.deflection_given
+               else f"the default L/{ratio:g}")
+    r.warn(f"this member is read as a floor (tag {tag!r}): the live load alone is checked "
+           f"against L/{live:g} as well (IBC 2018 Table 1604.3 floor members, from memory), "
+           f"besides {written} under dead + live load. Write [criteria] live_deflection = "
+           f"\"L/n\" for another live-load limit, or deflection = \"floor\" for both",
+           "criteria.deflection" if criteria.deflection_given else "criteria")
+    return replace(criteria, live_deflection_ratio=live)
+
+
 # A hoist trolley's axles are inches apart (a wheelbase of about 6 to 24 in; common
 # practice, from memory): a spacing past TROLLEY_SPACING on a lifting job is most likely
 # feet typed for inches, and it lets the axles act apart, lowering the moment.
@@ -2853,6 +2878,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_lifting(r, criteria, tags, supports, length)
         _looser_than_rack(r, criteria, tags, supports, length)
         _looser_than_floor(r, criteria, tags, supports, length)
+        criteria = _floor_live_limit(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     if not support_refused:
