@@ -110,7 +110,8 @@ def test_thin_tube_flange_local_buckling_is_checked():
     # The web in flexure (B.5.5.1, Bbr 66.76, Dbr 0.6648, m 0.65): lambda1 33.0 < 44.2 <
     # lambda2 77.3, Fb = Bbr - m Dbr b/t = 47.7 ksi: the flange is the limiting element
     # (ADM 2015 F.8, from memory): Mnlb = Fc Sc over Omega 1.65
-    thin = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.083 in" }'
+    thin = ('{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.083 in", '
+            'corner_radius = "0.166 in" }')
     res = analyze(job(section=thin))
     assert gaps(res) == []
     b = check(res, "bending")
@@ -129,6 +130,50 @@ def test_thin_tube_flange_local_buckling_is_checked():
     assert gaps(res) == []
     assert "rupture" in check(res, "bending").formula
     assert "0.6 Fty Av" in check(res, "shear").formula
+
+
+def test_a_tube_with_no_corner_radius_takes_square_inside_corners_for_its_flats():
+    # The same 4 x 4 x 0.083 tube with no corner_radius: the flats are taken at their widest,
+    # b = 4 - 2 x 0.083 = 3.834 in, b/t = 46.19 (extruded tube has small corners; 2t is
+    # steel HSS practice). ADM 2015 B.5.4.2 (from memory): Fc = 2.27 x 674.5 / (1.6 x 46.19)
+    # = 20.72 ksi; G.2: Fs = 27.23 - 1.25 x 0.1414 x 46.19 = 19.07 ksi
+    thin = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.083 in" }'
+    res = analyze(job(section=thin))
+    b = check(res, "bending")
+    assert b.limit == pytest.approx(20.72 * KSI * res.job.section.sx_top / 1.65, rel=2e-3)
+    assert "no corner_radius typed in" in b.formula
+    v = check(res, "shear")
+    assert v.limit == pytest.approx(19.07 * KSI * res.job.section.shear_area / 1.65, rel=2e-3)
+
+
+@pytest.mark.parametrize("welded, rated", [(None, False), ("false", True), ("true", True)])
+def test_an_aluminium_member_with_a_fixed_end_must_say_whether_it_is_welded(welded, rated):
+    # a welded end puts the heat-affected zone (6061-T6 Ftyw 15 ksi against Fty 35 ksi, ADM
+    # 2015 Table A.3.3, from memory) where a fixed end's moment is largest
+    from shopbeam.design.capacity import capacity
+    text = f"""schema = 1
+title = "al arm"
+[beam]
+length = "2 ft"
+section = {{ shape = "round-tube", od = "2 in", wall = "0.125 in" }}
+material = "6061-T6"
+{"" if welded is None else f"welded = {welded}"}
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "uniform"
+value = "-20 lbf/ft"
+"""
+    j = parse_job_text(text)
+    res = capacity(j)
+    why = [w for w in res.not_rated if "welded" in w and "fixed end" in w]
+    assert bool(why) == (not rated) and res.rated == rated
+    if welded is None:
+        assert any("welded = true" in p.message for p in j.warnings)
+        # the figure it holds back is the unwelded one: the welded job's is lower
+        welded_k = capacity(parse_job_text(text.replace("[beam]", "[beam]\nwelded = true")))
+        assert welded_k.factor < res.factor
 
 
 def test_i_beam_flange_outstand_between_the_limits():

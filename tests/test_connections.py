@@ -80,3 +80,22 @@ def test_capacity_json_keys_its_fixed_ends_as_the_top_level_does(tmp_path):
     d = json.loads(r.stdout)
     for e in d["fixed_ends"] + d["capacity"]["fixed_ends"]:
         assert {"at", "moment", "shear"} <= set(e)
+
+
+@pytest.mark.parametrize("section, material, said, not_said", [
+    ("W8X18", "A992", "fillet-welded flanges", "side plates"),
+    ("2x10", "DF-L-2", "side plates", "flanges"),
+    ('{ shape = "round-tube", od = "2 in", wall = "0.125 in" }', "6061-T6", "welded = true",
+     "fillet-welded flanges"),
+])
+def test_a_fixed_end_connection_is_named_in_the_words_of_its_material(section, material, said,
+                                                                    not_said):
+    # common practice: a wood member's end moment is taken by a backspan, bolted side plates
+    # or a bracket (it has no flanges to weld); welding an aluminium end weakens it there
+    from shopbeam.design.connections import connection_notes
+    sec = section if section.startswith("{") else f'"{section}"'
+    job = parse_job_text(f'schema = 1\ntitle = "arm"\n[beam]\nlength = "3 ft"\nsection = {sec}\n'
+                         f'material = "{material}"\nwelded = false\n[[supports]]\nat = "0 ft"\n'
+                         'type = "fixed"\n[[loads]]\ntype = "uniform"\nvalue = "-20 lbf/ft"\n')
+    notes = " ".join(connection_notes(job, analyze(job).solution))
+    assert said in notes and not_said not in notes

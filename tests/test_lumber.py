@@ -225,6 +225,36 @@ def test_point_load_case_is_read_from_the_loads():
     assert "point load at centre" in check(res, "bending").formula
 
 
+@pytest.mark.parametrize("self_weight, row", [("false", "point load at centre"),
+                                               ("true", "any load")])
+def test_a_centre_point_load_with_the_members_own_weight_takes_the_general_row(self_weight,
+                                                                              row):
+    # NDS 2018 Table 3.3.3 lists a centre point load alone; a point load together with a
+    # uniform one (the member's own weight) is a loading it does not list, and its footnote
+    # gives the general row: le = 1.63 lu + 3d for 7 <= lu/d <= 14.3 (from memory)
+    res = analyze(job(kind="point", load='at = "5 ft"\nvalue = "-300 lbf"',
+                      self_weight=self_weight))
+    assert row in check(res, "bending").formula
+
+
+def test_the_dead_load_alone_check_reads_its_row_from_the_dead_loads():
+    # 2x12 DF-L No.1 (Fb 1000 psi, Emin 620,000 psi, NDS Supplement 2018 Table 4A, from
+    # memory), 10 ft unbraced, 300 lbf live at mid-span, its own weight the only dead load.
+    # Dead load alone (CD 0.9): a uniform load, le = 1.63 x 120 + 3 x 11.25 = 229.35 in,
+    # RB = sqrt(le d / b^2) = 33.86, FbE = 1.20 Emin / RB^2 = 648.8 psi, Fb* = 900 psi,
+    # CL by NDS eq. 3.3-6 = 0.658, Fb' = 592 psi
+    res = analyze(job(section="2x12", material="DF-L-1", kind="point",
+                      load='at = "5 ft"\nvalue = "-300 lbf"', self_weight="true"))
+    dead = check(res, "bending, dead load")
+    rb2 = 229.35 * 11.25 / 1.5 ** 2
+    a = 1.20 * 620_000 / rb2 / 900
+    c = (1 + a) / 1.9
+    cl = c - math.sqrt(c * c - a / 0.95)
+    assert dead.limit / PSI == pytest.approx(900 * cl, rel=1e-3)
+    assert dead.limit / PSI == pytest.approx(592, abs=1)
+    assert "uniform load" in dead.formula
+
+
 # ------------------------------------------------------------------ bearing
 def test_bearing_at_supports_and_under_a_point_load():
     # NDS 2018 3.10.2: fc_perp = R / (b lb); 2x10 DF-L No.2 Fc_perp 625 psi (Table 4A).
@@ -579,3 +609,11 @@ value = "-60 lbf/ft"
     assert not cap.rated and any("given by its properties" in r for r in cap.not_rated)
     sized = job("2x12", "DF-L-SS", "16 ft", load='value = "-60 lbf/ft"')
     assert check(analyze(sized), "bending").ratio > 1.5
+
+
+def test_a_metal_shape_in_wood_is_refused_once_without_a_follow_on_warning():
+    # the wood service keys are not "not applied to a section given by its properties":
+    # the section is a W shape, refused as not made in wood, and that one message says so
+    with pytest.raises(InputErrors) as e:
+        job(section="W8x10", criteria='duration = "ten-years"')
+    assert len(e.value.problems) == 1 and "not made in wood" in e.value.problems[0].message

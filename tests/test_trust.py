@@ -270,3 +270,10 @@ def test_a_floor_member_names_walking_vibration_as_not_checked_and_stays_rated()
     assert capacity(floor).rated
     shelf = load_job(presets / "wall-shelf-brackets.toml")
     assert "floor vibration under walking" not in [u.name for u in analyze(shelf).unchecked]
+    # a hoist beam's title naming the loft it hangs in is not a floor people walk on
+    from dataclasses import replace
+    hoist = load_job(presets / "monorail-hoist-beam.toml")
+    lofty = replace(hoist, title="Chain hoist beam in the barn loft")
+    assert "floor vibration under walking" not in [u.name for u in analyze(lofty).unchecked]
+    loft = replace(shelf, title="Loft over the paint booth")  # a member not lifting: read
+    assert "floor vibration under walking" in [u.name for u in analyze(loft).unchecked]

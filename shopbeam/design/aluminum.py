@@ -151,7 +151,7 @@ def flat_elements(sec, fcy: float, e: float, welded_fcy: float | None = None) ->
     out = []
     if shape == "rect-tube" and "t_des" in d:
         t = d["t_des"]
-        r = max(d.get("r_out", t), t)
+        r = _corner(d)
         flange, web = (d["b"] - 2 * r) / t, (d["h"] - 2 * r) / t
         out.append(_element("flange", flange, "both", fcy, e, welded_fcy))
         out.append(_element("web", web, "flexure", fcy, e, welded_fcy))
@@ -164,12 +164,21 @@ def flat_elements(sec, fcy: float, e: float, welded_fcy: float | None = None) ->
     return out
 
 
+def _corner(d: dict) -> float:
+    """The outside corner radius an aluminium tube's flat widths are taken from: the one
+    typed in (corner_radius), at least the wall; with none typed in, the wall itself (a square
+    inside corner: the widest flats, so the lowest buckling strength). Extruded tube is made
+    with small corners; the 2 x wall the section's properties take is steel HSS practice."""
+    t = d["t_des"]
+    return max(d.get("r_out", t), t) if d.get("r_given", True) else t
+
+
 def web_ratio(sec) -> float | None:
     """h/t of the web that carries the shear (clear height over thickness), or None."""
     d, shape = sec.dims, sec.shape
     if shape == "rect-tube" and "t_des" in d:
         t = d["t_des"]
-        return (d["h"] - 2 * max(d.get("r_out", t), t)) / t
+        return (d["h"] - 2 * _corner(d)) / t
     if shape in ("i-beam", "channel") and getattr(sec, "axis", "strong") == "strong" and \
             all(k in d for k in ("tf", "tw", "d")):
         return (d["d"] - 2 * d["tf"]) / d["tw"]

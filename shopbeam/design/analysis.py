@@ -885,8 +885,10 @@ _FLOOR = re.compile(r"\b(floors?|mezzanines?|mezz|platforms?|walkways?|catwalks?
 
 
 def floor_unchecked(job: Job) -> list[Unchecked]:
-    """Walking vibration of a floor member (named by its tags or title), as not checked."""
-    if not any(_FLOOR.search(t) for t in tuple(job.tags) + (job.title,)):
+    """Walking vibration of a floor member (named by its tags or title), as not checked. A
+    lifting device's title naming where it hangs ("hoist beam in the loft") is not a floor."""
+    lifting = job.lifting or getattr(job.criteria, "lifting", "")
+    if not any(_FLOOR.search(t) for t in tuple(job.tags) + (() if lifting else (job.title,))):
         return []
     wood = getattr(job.material, "kind", "") == "lumber"
     return [Unchecked(

@@ -428,14 +428,17 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
         e = env.extreme("moment", False, a, b)
         if -e.value > max(allow, 0.01 * big if allow <= 0 else 0.0):
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
-            leaves = (f"which exceeds the {f(allow, 'moment')} the bottom flange's or edge's "
-                      f"buckling over {f(a)} to {f(b)} leaves ({hogging_source(job, st)}, "
-                      "Cb 1.0) if only the top is braced" if allow > 0 else
+            wood = getattr(job.material, "kind", "") == "lumber"
+            leaves = (f"which exceeds the {f(allow, 'moment')} the bottom "
+                      f"{'edge' if wood else 'flange'}'s buckling over {f(a)} to {f(b)} leaves "
+                      f"({hogging_source(job, st)}{'' if wood else ', Cb 1.0'}) if only the "
+                      "top is braced" if allow > 0 else
                       f"putting the bottom edge in compression over {f(a)} to {f(b)} where "
                       "nothing holds it, and shopbeam does not compute that buckling "
                       f"({hogging_source(job, st)})")
             todo = hogging_remedy(job)
-            out.append(f"lateral-torsional buckling of the bottom flange under hogging moment "
+            out.append(f"lateral-torsional buckling of the bottom {'edge' if wood else 'flange'} "
+                       f"under hogging moment "
                        f"not checked: {top_words(job)}, but {_at(k)} "
                        f"the moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. "
                        f"{todo[0].upper()}{todo[1:]}")

@@ -472,16 +472,19 @@ def _adm_flexure(sec, mat, s, z, welded, system: str = "us") -> Flexure:
     w = bool(welded and mat.fy_welded)
     elems = aluminum.flat_elements(sec, mat.fy, mat.e, mat.fy_welded if w else None)
     slender = [el for el in elems if el.slender]
+    flats = (" (flat widths = outside less 2 walls: no corner_radius typed in, so square "
+             "inside corners)" if sec.shape == "rect-tube" and not sec.dims.get("r_given", True)
+             else "")
     if not slender:
         if elems:
             fl = replace(fl, cap_text=fl.cap_text + "; elements compact (" + ", ".join(
                 f"{el.name} b/t {el.bt:.3g} <= lambda1 {el.lambda1:.3g}" for el in elems)
-                + ", ADM 2015 B.5): they reach yield first")
+                + f", ADM 2015 B.5){flats}: they reach yield first")
         return fl
     lim = min(slender, key=lambda el: el.stress)
     mnlb = lim.stress * s
     text = (f"ADM 2015 F.8 local buckling, limiting element (from memory): Mnlb = F Sc, "
-            f"{lim.words(system)}, Omega 1.65")
+            f"{lim.words(system)}{flats}, Omega 1.65")
     if mnlb / OMEGA_ADM < fl.cap / fl.omega:
         return Flexure(mnlb, OMEGA_ADM, f"{text} (governs over {fl.cap_text})",
                        warnings=fl.warnings,
@@ -1046,8 +1049,9 @@ def _deep_bar_first_yield(job, sec, basis: str, segs) -> tuple[Unchecked, ...]:
         "AISC 360-16 F11.2"),)
 
 
-def wood_load_case(job, a: float, b: float, free: bool) -> str:
-    """NDS Table 3.3.3 row for the loads of the job on the unbraced length a..b."""
+def wood_load_case(job, a: float, b: float, free: bool, loads=None) -> str:
+    """NDS Table 3.3.3 row for the loads of the job (or `loads`, e.g. the dead loads alone)
+    on the unbraced length a..b."""
     if job.moving:
         return "any"
     tol = 1e-9 * job.length
@@ -1055,7 +1059,8 @@ def wood_load_case(job, a: float, b: float, free: bool) -> str:
     ends_held = [any(abs(x - h) <= tol for h in held) for x in (a, b)]
     if not free and not all(ends_held):
         return "any"  # a length ending at a brace: Table 3.3.3 footnote (general rows)
-    return lumber.load_case(job.member_loads(), a, b, free, free and b >= job.length * (1 - 1e-9))
+    return lumber.load_case(job.member_loads() if loads is None else loads, a, b, free,
+                            free and b >= job.length * (1 - 1e-9))
 
 
 def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
@@ -1296,7 +1301,7 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     braced = brace_points(job)[0]
     worst = None
     for a, b, free in ((x[0], x[1], x[2]) for x in st.ltb_segments):
-        l1, why = scaled.ltb1(0.0 if braced else b - a, wood_load_case(job, a, b, free))
+        l1, why = scaled.ltb1(0.0 if braced else b - a, wood_load_case(job, a, b, free, dead))
         mn = min(scaled.cap, l1)
         ex = dsol.moment.extremes(a, b)
         if worst is None or ex.abs_max / mn > worst[0]:

@@ -76,7 +76,19 @@ def connection_notes(job, sol) -> list[str]:
                    f"develop a moment of {units.fmt(abs(f['moment']), 'moment', sy)} with a "
                    f"shear of {units.fmt(abs(f['force']), 'force', sy)}"
                    + (f" ({f['over']})" if f["over"] else "")
-                   + " (moment connection: full-penetration or fillet-welded flanges, end "
-                   "plate, or a socket). A bolted shear tab or clip angle is a pin: then "
-                   "re-run with type = \"pin\". The connection is not checked here.")
+                   + _moment_connection(job) + " A bolted shear tab or clip angle is a pin: "
+                   "then re-run with type = \"pin\". The connection is not checked here.")
     return out
+
+
+def _moment_connection(job) -> str:
+    """What develops a fixed end's moment, in the words of the member's material."""
+    kind = getattr(job.material, "kind", "")
+    if kind == "lumber":
+        return (" (moment connection: a backspan built in past the support, bolted steel "
+                "side plates, or a steel bracket or socket; nailed or toe-screwed ends are "
+                "pins).")
+    if kind == "aluminum":
+        return (" (moment connection: a bolted end plate or a socket; a welded end is checked "
+                "at the weld's reduced, heat-affected strength only with welded = true).")
+    return " (moment connection: full-penetration or fillet-welded flanges, end plate, or a socket)."

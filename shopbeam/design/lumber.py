@@ -161,7 +161,7 @@ def stability_factor(fb_star: float, emin: float, b: float, d: float, le: float
 def load_case(loads, a: float, b: float, free: bool, free_at_right: bool) -> str:
     """The Table 3.3.3 row for the loads on an unbraced length a..b (self-weight counts as
     a uniform load; anything else than one uniform spread or one point load in the right
-    place takes the 'any load' row)."""
+    place, such as a point load with the member's own weight, takes the 'any load' row)."""
     tol = 1e-6 * max(b - a, 1e-9)
     points, uniform_ok, other = [], True, False
     for ld in loads:
@@ -175,7 +175,10 @@ def load_case(loads, a: float, b: float, free: bool, free_at_right: bool) -> str
         elif ld.kind in ("linear", "moment"):
             if getattr(ld, "at", None) is not None or ld.kind == "linear":
                 other = True
-    real = [ld for ld in loads if ld.kind == "uniform" and ld.label != "self-weight"]
+    # any uniform load with a point load, the member's own weight included, is a loading
+    # Table 3.3.3 does not list: its footnote's general row applies
+    real = [ld for ld in loads if ld.kind == "uniform" and ld.w1 != 0
+            and ld.end > a + tol and ld.start < b - tol]
     if other or not uniform_ok:
         return "any"
     if free:

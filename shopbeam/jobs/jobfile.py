@@ -2140,6 +2140,30 @@ def _glulam_words(r: _Reader, title, notes, tags, material, data) -> None:
            "deep glulam member (volume factor CV, NDS 2018 5.3.6, from memory)")
 
 
+def _aluminium_fixed_end(r: _Reader, beam: dict, material, supports, system: str) -> None:
+    """An aluminium member with a fixed end and no `welded` written: the usual shop-built
+    fixed end is welded, and welding anneals the metal within about 1 in of the weld (6061-T6
+    Fty 35 ksi, welded Ftyw 15 ksi: ADM 2015 Table A.3.3, from memory) right where a fixed
+    end's moment is largest, so a figure on the unwelded strength may be twice what the weld
+    zone carries. Held until the job says which."""
+    if getattr(material, "kind", "") != "aluminum" or "welded" in beam \
+            or not getattr(material, "fy_welded", None):
+        return
+    fixed = [s for s in supports if s.kind == "fixed"]
+    if not fixed:
+        return
+    keys = ", ".join(s.key or f"at {s.at:g} m" for s in fixed)
+    weak = units.fmt(material.fy_welded, "stress", system)
+    strong = units.fmt(material.fy, "stress", system)
+    r.hold(f"aluminium member with a fixed end ({keys}) and no welded key: a welded end puts "
+           f"the weld's heat-affected zone (yield {weak} against {strong} unwelded, ADM 2015, "
+           "from memory) at the largest moment. Write [beam] welded = true to check it at the "
+           "welded strength, or welded = false if the end is bolted, clamped or socketed with "
+           "no weld within 1 in of it", "beam",
+           f"an aluminium member with a fixed end ({keys}) gives no welded key, and a welded "
+           "end is weaker where the moment is largest. Write welded = true or false")
+
+
 def _rack_fixed_ends(r: _Reader, tags, supports, length) -> None:
     """A rack beam between uprights with a fixed end: its connector (a clip or hook into the
     upright) is semi-rigid at best, rated by test (ANSI MH16.1, from memory), and far from the
@@ -2499,7 +2523,9 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
-    if section is not None and section.shape != "rect-bar":
+    # a metal shape in wood is refused (_family_mismatch): said once, by that error
+    if section is not None and section.shape != "rect-bar" \
+            and not catalog.not_made_in(section, material):
         for k, where in _WOOD_KEYS:
             if k in (beam if where == "beam" else crit):
                 r.warn(f"{k} is not applied: the NDS factors need a rectangular wood section "
@@ -2853,6 +2879,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "only a grade with a welded (heat-affected zone) strength, such as aluminium "
                "6061-T6, is weakened by welding in these checks; the welds themselves are not "
                "checked", "beam.welded")
+    _aluminium_fixed_end(r, beam, material, supports, system)
     if length is not None:
         for key, message in geometry_problems(length, supports, loads,
                                               lambda x: units.fmt(x, "length", system)):

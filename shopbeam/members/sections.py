@@ -441,7 +441,8 @@ def rect_tube(h: float, b: float, t_nom: float, *, t_des: float | None = None,
     j = 4 * ap * ap * t / p
     h_flat, b_flat = h - 3 * t, b - 3 * t
     dims = {"h": h, "b": b, "t_nom": t_nom, "t_des": t, "r_out": r, "h_flat": h_flat,
-            "b_flat": b_flat, "h_t": h_flat / t, "b_t": b_flat / t}
+            "b_flat": b_flat, "h_t": h_flat / t, "b_t": b_flat / t,
+            "r_given": r_out is not None}
     if not designation:
         designation = f"rect-tube {_in(h)} x {_in(b)} x {_in(t_nom, 3)}"
     # closed form (fast: the catalog builds hundreds of these); the parts engine gives the
