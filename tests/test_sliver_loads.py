@@ -132,3 +132,47 @@ def test_sliver_ramp_on_a_continuous_beam_matches_the_exact_sympy_solve(frac):
     got = [r.force for r in sorted(solve(beam).reactions, key=lambda r: r.at)]
     scale = max(abs(v) for v in ref)
     assert max(abs(g - r) for g, r in zip(got, ref)) <= 1e-7 * scale, (got, ref)
+
+
+STRADDLE = """schema = 1
+title = "sliver across a support"
+tags = ["not-lifting"]
+[beam]
+length = "8 ft"
+section = "W8x18"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "2 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "1.999999999 ft"
+end = "2.000000001 ft"
+value = "-1e6 lbf/ft"
+[[loads]]
+type = "point"
+at = "8 ft"
+value = "-100 lbf"
+"""
+
+
+@pytest.mark.parametrize("command", [["solve"], ["capacity"], ["capacity", "--json"],
+                                     ["rating"], ["size", "--kind", "W"]])
+def test_a_job_whose_answer_fails_its_self_check_is_refused_by_every_command(tmp_path,
+                                                                            command):
+    # a sliver of load straddling a support: whether or not a command's own solves pass,
+    # the job's answer does not, so none of them may print figures from it (exit 2, named)
+    path = tmp_path / "straddle.toml"
+    path.write_text(STRADDLE)
+    from shopbeam.engine.solver import failed_checks
+    job = parse_job_text(STRADDLE)
+    if not failed_checks(solve(job.beam())):
+        pytest.skip("this platform's solve passes the self-checks: nothing to refuse")
+    out = subprocess.run([sys.executable, "-m", "shopbeam", *command, str(path)],
+                         capture_output=True, text=True)
+    assert out.returncode == 2 and out.stdout == ""
+    assert "straddle.toml" in out.stderr and "self-check" in out.stderr

@@ -11,10 +11,19 @@ from shopbeam.output import capacityreport, sizingreport
 from shopbeam.output.jsonout import dumps_finite
 
 
+def _sound(job):
+    """The job, once its own solve passes its self-checks (exact fallback included): a job
+    whose answer fails them is refused here as `solve` refuses it, not rated and sized on it."""
+    from shopbeam.engine.solver import sound_solve
+
+    sound_solve(job.beam(), file=job.path or "")
+    return job
+
+
 @guarded
 def cmd_capacity(args) -> int:
     """`shopbeam capacity JOB [--json]`."""
-    res = capacity.capacity(load(args.job))
+    res = capacity.capacity(_sound(load(args.job)))
     if args.json:
         print(dumps_finite(capacity.to_json(res), args.job))
     else:
@@ -26,7 +35,7 @@ def cmd_capacity(args) -> int:
 def cmd_size(args) -> int:
     """`shopbeam size JOB [--kind K] [--max-depth D] [--stock FILE] [--top N] [--confirm N]
     [--json]`."""
-    job = load(args.job)
+    job = _sound(load(args.job))
     md = units.parse(args.max_depth, "length", "--max-depth", positive=True) \
         if args.max_depth else None
     stock = load_stock(args.stock) if args.stock else None
