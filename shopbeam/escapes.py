@@ -12,8 +12,9 @@ from __future__ import annotations
 import re
 
 # C0 and C1 controls, DEL, and the Unicode format characters that reorder or hide text
-# (bidirectional overrides and isolates, zero-width joiners aside from the common ones)
-_CONTROL = re.compile("[\x00-\x1f\x7f-\x9f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069"
+# (bidirectional overrides and isolates, the line and paragraph separators, zero-width
+# joiners aside from the common ones)
+_CONTROL = re.compile("[\x00-\x1f\x7f-\x9f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069"
                       "\ufff9-\ufffb\U000e0000-\U000e007f]")
 _NAMED = {"\t": "\\t", "\n": "\\n", "\r": "\\r"}
 

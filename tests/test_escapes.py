@@ -77,3 +77,20 @@ def test_the_report_renderer_itself_escapes():
 
     text = render(analyze(parse_job_text(job_text(), "esc.toml")))
     assert not CONTROL.search(text) and "\\x1b[8m" in text
+
+
+@pytest.mark.parametrize("argv", [["solve"], ["size", "--kind", "W", "--top", "3"],
+                                  ["capacity"], ["rating"], ["solve", "--calc"]])
+def test_a_line_break_in_a_title_or_label_adds_no_line_to_a_report(tmp_path, argv):
+    # a title or label is one line: "\n" and "\t" in it are shown, not obeyed, so a job file
+    # cannot print a line that reads as shopbeam's own verdict
+    fake = "FAKE governing: bending, ratio 0.100 -> PASS"
+    s = job_text().replace('label = "st\\u001b[2Jair"', f'label = "stair\\n{fake}\\tx"')
+    s = s.replace('title = "Loft \\u001b[8m beam \\u009b31m bell\\u0007 \\u202e"',
+                  f'title = "Loft\\n{fake}"')
+    p = tmp_path / "nl.toml"
+    p.write_text(s)
+    r = run(*argv, str(p))
+    assert r.returncode == 0, r.stderr
+    assert not any(line.lstrip().startswith("FAKE") for line in r.stdout.splitlines())
+    assert "\t" not in r.stdout

@@ -164,4 +164,6 @@ def render(result: Result) -> str:
     lines += caution_block(result.cautions)
     from shopbeam.escapes import shown
 
-    return shown("\n".join(lines), keep="\n") + "\n"
+    # each line is escaped on its own: a line break or tab in a title or label is shown as
+    # \n or \t, so text from the job file never adds a line of its own to the report
+    return "\n".join(shown(x) for x in lines) + "\n"

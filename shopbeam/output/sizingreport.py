@@ -9,6 +9,7 @@ import textwrap
 
 from shopbeam import units
 from shopbeam.cautions import cautions_for
+from shopbeam.escapes import shown as escaped
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.design.sizing import SizeResult, shown_rows
 
@@ -90,7 +91,8 @@ def render(res: SizeResult, top: int = 15) -> str:
     lines.append("")
     for c in cautions_for(job.tags, job.lifting):
         lines += textwrap.wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
-    return "\n".join(lines) + "\n"
+    # each line is escaped on its own (a line break or tab in the title is shown, not obeyed)
+    return "\n".join(escaped(x) for x in lines) + "\n"
 
 
 def _money(per_m: float, system: str) -> str:
