@@ -175,6 +175,26 @@ def test_library_follows_no_link_out_of_its_folder(tmp_path):
     assert secret.read_text() == 'title = "not yours"\n'
 
 
+def test_a_new_job_is_never_written_through_a_link(tmp_path):
+    # `shopbeam new NAME --overwrite` on a name that is a link out of the folder would replace
+    # the file the link points to (another person's): refused, with the link named
+    shop = tmp_path / "shop"
+    shop.mkdir()
+    secret = tmp_path / "elsewhere" / "secret.toml"
+    secret.parent.mkdir()
+    secret.write_text('title = "not yours"\n')
+    (shop / "evil.toml").symlink_to(secret)
+    here = str(Path(__file__).resolve().parents[1])  # this checkout's shopbeam, from any cwd
+    run = subprocess.run([sys.executable, "-m", "shopbeam", "new", "evil.toml", "--overwrite"],
+                         capture_output=True, text=True, cwd=shop,
+                         env={**os.environ, "PYTHONPATH": here})
+    assert run.returncode == 2 and "symbolic link" in run.stderr and "evil.toml" in run.stderr
+    assert secret.read_text() == 'title = "not yours"\n' and (shop / "evil.toml").is_symlink()
+    with pytest.raises(InputError):
+        storage.save_text(shop / "evil.toml", JOB, None, overwrite=True)
+    assert secret.read_text() == 'title = "not yours"\n'
+
+
 def test_a_fifo_named_like_a_job_is_refused_at_once(tmp_path):
     if not hasattr(os, "mkfifo"):
         pytest.skip("no FIFOs here")

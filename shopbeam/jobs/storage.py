@@ -428,8 +428,15 @@ def atomic_write(path: str | os.PathLike, text: str | bytes) -> Fingerprint:
     data = text.encode("utf-8") if isinstance(text, str) else bytes(text)
     mode, group = _new_file_mode(p, folder)
     with locked(p):
-        fd, tmp = tempfile.mkstemp(dir=folder, prefix=f"{_TEMP_PREFIX}{p.name}.",
-                                   suffix=_TEMP_SUFFIX)
+        try:
+            fd, tmp = tempfile.mkstemp(dir=folder, prefix=f"{_TEMP_PREFIX}{p.name}.",
+                                       suffix=_TEMP_SUFFIX)
+        except PermissionError as e:
+            shown = f" (the name is a link to {p})" if p != Path(path) else ""
+            raise InputError(f"cannot save: the folder {folder} is not writable for you"
+                             f"{shown} ({e.strerror}). Nothing was changed; save the job in "
+                             "a folder you may write, or ask the folder's owner",
+                             file=str(path)) from None
         try:
             if fcntl is not None:
                 fcntl.flock(fd, fcntl.LOCK_EX)
@@ -539,6 +546,12 @@ def save_text(path: str | os.PathLike, text: str, base: Opened | None = None, *,
     """
     p = Path(path)
     real = real_target(p)
+    if base is None and real != p:
+        # a new job written over a name that is a link would replace the file the link
+        # points to, which may be anyone's, anywhere: never through a link
+        raise InputError(f"{p} is a symbolic link to {real}: a new job is not written "
+                         "through it (that would replace the file it points to). Remove the "
+                         "link, or give another name", file=str(p))
     force, reviewed = _resolve_overwrite(overwrite)
     ctx = locked(real) if lock else _nolock()
     with ctx:
