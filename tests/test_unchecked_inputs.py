@@ -200,6 +200,9 @@ def test_welded_typed_in_aluminium_with_fy_welded_rates_on_the_weld_by_hand():
     ("IPE200", "A992", '"S235"'),
     ("HEB200", "A572-50", '"S235"'),
     ("IPE200", "A36", '"S235"'),
+    ("SHS100x100x5", "A500-C", '"S235"'),   # EN 10219 hollow sections: S235JRH and up
+    ("RHS100x50x4", "A572-50", '"S235"'),
+    ("CHS88.9x4", "A36", '"S235"'),
 ])
 def test_a_grade_that_over_credits_the_shape_is_warned_with_what_to_write(section, material,
                                                                            word):

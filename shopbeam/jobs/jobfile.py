@@ -32,7 +32,8 @@ from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RAT
                                  FATIGUE_CATEGORIES, guessed_profile, has_free_end)
 from shopbeam.members import catalog
 from shopbeam.members.catalog import is_steel_shape, is_wood_size
-from shopbeam.members.materials import get as get_material, resolve_material, untempered, ungraded
+from shopbeam.members.materials import (EN_GRADES, get as get_material, resolve_material,
+                                        untempered, ungraded)
 from shopbeam.members.resolve import resolve_section
 
 SCHEMA = 1
@@ -2363,6 +2364,12 @@ def _a(word: str) -> str:
 
 _ROLLED_GRADES = ("A36", "A572-50", "A992")  # grades of rolled shapes, plate and bar
 EN_SECTIONS = "EN 10365"  # the source of the catalog's European sections (IPE, HE, UPN)
+EN_TUBES = "EN 10219"  # ... and of its European hollow sections (SHS, RHS, CHS)
+
+
+def is_en_section(section) -> bool:
+    """A catalog section of a European standard, made to EN grades (S235, S275, S355)."""
+    return str(getattr(section, "source", "") or "").startswith((EN_SECTIONS, EN_TUBES))
 
 
 def _is_lvl_size(section) -> bool:
@@ -2409,7 +2416,17 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
     where = "beam.material"
     said = len(r.problems)
     usual = ""  # the grade the product is bought in, where the job's is not one it is made to
-    if mkind == "steel" and getattr(material, "hss_wall_factor", None) is not None \
+    if mkind == "steel" and key not in EN_GRADES and get_material(key) is not None \
+            and is_en_section(section):  # a built-in ASTM grade (a typed-in one is the cert's)
+        usual = "S235"
+        family = section.source.split(" ", 2)[:2]
+        r.warn(f"section {section.designation!r} is a European section ({' '.join(family)}), "
+               f"made to EN grades (S235: fy 235 MPa, S355: 355 MPa, up to 16 mm thick), "
+               f"not ASTM {key}: the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}, which an S235 section does not "
+               "have. Write the mill cert's grade: material = \"S235\", \"S275\" or "
+               "\"S355\" (EN 10025-2 / EN 10219-1, from memory)", where)
+    elif mkind == "steel" and getattr(material, "hss_wall_factor", None) is not None \
             and shape not in _TUBES + ("custom",):
         bought = ("A992 (W shapes) or A36 / A572-50 (S, C, MC, angles, tees, plate and bar)")
         w_shape = section.designation.upper().startswith(("W", "HP", "WT"))
@@ -2450,15 +2467,6 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                "A36 or A572, from memory): the check credits "
                f"{units.fmt(material.fy, 'stress', system)}. Write material = \"A36\", or "
                "\"A572-50\" if the mill cert says so", where)
-    elif mkind == "steel" and key in _ROLLED_GRADES + ("A53-B",) \
-            and section.source.startswith(EN_SECTIONS):
-        usual = "S235"
-        r.warn(f"section {section.designation!r} is a European section ({EN_SECTIONS}), "
-               f"rolled to EN 10025 grades (S235: fy 235 MPa, S355: 355 MPa, up to 16 mm "
-               f"thick), not ASTM {key}: the check credits "
-               f"{units.fmt(material.fy, 'stress', system)}, which an S235 section does not "
-               "have. Write the mill cert's grade: material = \"S235\", \"S275\" or "
-               "\"S355\" (EN 10025-2, from memory)", where)
     elif mkind in ("aluminum", "stainless") and is_steel_shape(section):
         metal = "aluminium" if mkind == "aluminum" else mkind
         r.warn(f"section {section.designation!r} is a steel shape ({section.source.split(' (')[0]}), but "
