@@ -346,3 +346,26 @@ def test_a_floor_job_is_checked_for_live_load_deflection_at_l_over_360(tags, cri
         delta = 5 * w * L ** 4 / (384 * job.material.e * job.section.ix)
         res = capacity(job)
         assert res.rated and res.factor == pytest.approx(L / 360 / delta, rel=1e-9)
+
+
+# ------------------------------------------------------------------ N for kN
+@pytest.mark.parametrize("deck, held", [
+    ('"-0.4 kN/m"', False),   # as meant
+    ('"-0.4 N/m"', True),     # N/m for kN/m: 1.2 N in all beside a 7.5 kN load
+    ('"-40 N/m"', False),     # small but not a thousandth of the largest load
+])
+def test_a_load_a_thousand_times_too_small_holds_the_rating(deck, held):
+    # a unit slip of 1000 x (common practice, no source): a dead load left that small
+    # raises the posted figure, so it is named and no rating rests on it
+    text = (f'schema = 1\ntitle = "shelf"\nunits = "si"\ntags = ["not-lifting"]\n[beam]\n'
+            f'length = "3 m"\nsection = "W8X18"\nmaterial = "A992"\nbraced = true\n'
+            f'[[supports]]\nat = "0 m"\ntype = "pin"\n[[supports]]\nat = "3 m"\n'
+            f'type = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-2.5 kN/m"\n'
+            f'label = "stock"\n[[loads]]\ntype = "uniform"\nvalue = {deck}\ncase = "dead"\n'
+            f'label = "deck"\n')
+    job = parse_job_text(text)
+    said = [p for p in job.warnings if "unit slip" in p.message]
+    assert len(said) == int(held)
+    if held:
+        assert said[0].key == "loads[1].value" and "deck" in said[0].message
+    assert capacity(job).rated == (not held)

@@ -1457,6 +1457,31 @@ def _same_both_ways(r: _Reader, section, axis) -> None:
                "or square section); remove it", "beam.axis")
 
 
+# A force load under TINY_FORCE (about 1 kg or 2 lbf in all) beside one TINY_RATIO times
+# larger is almost surely a unit slip (N for kN, N/m for kN/m: 1000 x): common practice, no
+# source. A label plate or a cable on a member that carries tons changes nothing anyway.
+TINY_FORCE = 10.0  # N
+TINY_RATIO = 1000.0
+
+
+def _tiny_loads(r: _Reader, loads: list[Load], system: str) -> None:
+    """Hold the rating on a force load a thousand times smaller than the job's largest and
+    under about 1 kg in all: a dead one left 1000 x too small raises the posted figure, a live
+    one 1000 x too small gets a multiple of next to nothing posted."""
+    sized = [(abs(ld.total_force), ld) for ld in loads if ld.kind != "moment"]
+    big = max((f for f, _ in sized), default=0.0)
+    for f, ld in sized:
+        if 0 < f < TINY_FORCE and f * TINY_RATIO < big:
+            name = f" ({ld.label})" if ld.label else ""
+            r.hold(f"this load{name} comes to {units.fmt(f, 'force', system)} in all, under "
+                   f"1/{TINY_RATIO:g} of the job's largest load "
+                   f"({units.fmt(big, 'force', system)}): most likely a unit slip (N for kN, "
+                   "N/m for kN/m, lbf for kip). Fix its unit, or remove it if it is nothing; "
+                   "no rating is posted while it stands", f"{ld.key}.value",
+                   f"{ld.key}{name} is {units.fmt(f, 'force', system)}, a thousand times "
+                   "smaller than the largest load: most likely a unit slip. Fix its unit")
+
+
 def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> list[str]:
     """A force load that pushes up is almost always a forgotten minus sign: name each one,
     unless the load says ``uplift = true``. Returns the keys (with labels) it named."""
@@ -2872,6 +2897,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _twice(r, raw_loads)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
+    _tiny_loads(r, loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
     _thickness_range(r, section, material, welded, system)
