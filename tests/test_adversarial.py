@@ -79,3 +79,40 @@ def test_the_wheel_bound_answers_the_largest_sets_and_refuses_one_more(tmp_path)
     r = run(wheels(58, springs_n=1), "solve")
     assert r.returncode == 2 and "58 wheels" in r.stderr and "units of search" in r.stderr
     assert str(p) in r.stderr and "moving[0].loads" in r.stderr
+
+
+def _shelf(spans: int, per_span: int = 1) -> str:
+    # a continuous shelf rail, 4 ft bays, every bay carrying `per_span` patterned loads
+    t = (f'schema = 1\ntitle = "shelf"\ntags = ["shelf"]\n[beam]\nlength = "{4 * spans} ft"\n'
+         'section = "W8x18"\nmaterial = "A992"\nbraced = true\n')
+    for i in range(spans + 1):
+        t += f'[[supports]]\nat = "{4 * i} ft"\ntype = "{"pin" if i == 0 else "roller"}"\n'
+    for i in range(spans):
+        for j in range(per_span):
+            a = 4 * i + 4 * j / per_span
+            t += (f'[[loads]]\ntype = "uniform"\nstart = "{a:g} ft"\nend = '
+                  f'"{a + 4 / per_span:g} ft"\nvalue = "-100 lbf/ft"\npatterned = true\n')
+    return t
+
+
+def test_the_pattern_bound_answers_inside_it_and_refuses_past_it(tmp_path):
+    from shopbeam.jobs.limits import PATTERN_WORK, SIZE_PATTERN_WORK
+
+    def run(text, *argv):
+        p.write_text(text, encoding="utf-8")
+        return subprocess.run([sys.executable, "-m", "shopbeam", *argv, str(p)],
+                              capture_output=True, text=True, timeout=120)
+
+    p = tmp_path / "shelf.toml"
+    # patterned spans x (spans + patterned loads): 100 x (100 + 100) inside, 199 x 398 past
+    assert 100 * 200 <= PATTERN_WORK < 199 * 398
+    assert run(_shelf(100), "check").returncode == 0
+    r = run(_shelf(199), "solve")
+    assert r.returncode == 2 and "units of work" in r.stderr and str(p) in r.stderr
+    # sizing: patterned spans x spans x sections; 25 spans over the W shapes inside, 50 not
+    from shopbeam.members import catalog
+    n_w = len(catalog.list_sections("W"))
+    assert 25 * 25 * n_w <= SIZE_PATTERN_WORK < 50 * 50 * n_w
+    r = run(_shelf(50), "size", "--kind", "W")
+    assert r.returncode == 2 and "--kind" in r.stderr and str(p) in r.stderr
+    assert r.stdout == ""

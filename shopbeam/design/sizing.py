@@ -57,6 +57,7 @@ from shopbeam.engine.model import Beam, Load
 from shopbeam.engine.piecewise import _horner, _roots_in_pieces
 from shopbeam.engine.solver import segments, solve, solve_many
 from shopbeam.errors import InputError
+from shopbeam.jobs.limits import SIZE_PATTERN_WORK, patterned_spans
 from shopbeam.jobs.rules import WOOD_E_MAX
 from shopbeam.members import catalog, wood
 from shopbeam.members.materials import EN_GRADES, get as get_material
@@ -425,9 +426,23 @@ def _steel_shapes_note(job, cands) -> str:
             "mill's dimensions")
 
 
+def _bound_patterned(job, sections: int, label: str) -> None:
+    """Refuse, at once, a sweep of a patterned job past SIZE_PATTERN_WORK (jobs/limits)."""
+    spans, hit = patterned_spans(job.supports, job.loads, job.length)
+    work = hit * spans * sections
+    if hit and work > SIZE_PATTERN_WORK:
+        raise InputError(
+            f"sizing {sections} sections ({label}) over {hit} patterned spans of {spans} takes "
+            f"{work:,} units of work (patterned spans x spans x sections), more than shopbeam "
+            f"takes ({SIZE_PATTERN_WORK:,}); sweep fewer sections: a smaller --kind, "
+            "--max-depth, or --stock with the sections you would buy", "--kind",
+            file=getattr(job, "path", "") or "")
+
+
 def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note="", t0=None,
            skipped_before=()) -> SizeResult:
     t0 = time.perf_counter() if t0 is None else t0
+    _bound_patterned(job, len(cands), label)
     base = replace(job, self_weight=False)
     parts = load_parts(base)
     wood = any(getattr(c[2], "kind", "") == "lumber" for c in cands)
