@@ -97,6 +97,22 @@ def test_broken_files_are_listed_with_their_problem_and_temps_are_skipped(places
     assert mine[0].problem and mine[0].title == "(not valid TOML)"
 
 
+def test_a_deeply_nested_or_huge_file_is_a_problem_row_not_a_crash(places):
+    # one bad file in a shared folder must not take the listing down for everyone: nesting
+    # past the reader's limit and a file past 1 MB are each a row with their problem
+    shop, _ = places
+    (shop / "deep.toml").write_text(_job("deep") + "x = " + "[" * 5000 + "]" * 5000 + "\n")
+    (shop / "huge.toml").write_text(_job("huge") + "pad = [" + "1, " * 400_000 + "1]\n")
+    (shop / "fine.toml").write_text(_job("fine"))
+    mine = {e.name: e for e in library.entries(shop) if e.origin == "shop"}
+    assert mine["deep"].problem and "nested" in mine["deep"].problem
+    assert mine["huge"].problem and "larger than a job file" in mine["huge"].problem
+    assert not mine["fine"].problem and mine["fine"].title == "fine"
+    run = subprocess.run([sys.executable, "-m", "shopbeam", "library", "list", "--library",
+                          str(shop)], capture_output=True, text=True, timeout=60)
+    assert run.returncode == 0 and "deep" in run.stdout and "Traceback" not in run.stderr
+
+
 def test_find_suggests_near_names(places):
     with pytest.raises(InputError) as info:
         library.find("jib-ram")

@@ -27,6 +27,7 @@ from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, is_lifting, normal_tag
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS, Beam, Load, Support, segments
 from shopbeam.engine.solver import geometry_problems
 from shopbeam.errors import InputError, InputErrors, Problem
+from shopbeam.jobs.limits import MAX_FILE_BYTES
 from shopbeam.jobs.rules import (LIVE_DEFLECTION_PRESETS, DEFAULT_DEFLECTION_RATIO, DEFLECTION_PRESETS,
                                  LIFTING_DEFAULT_RATIO, LIFTING_PROFILES, WOOD_E_MAX, Basis,
                                  FATIGUE_CATEGORIES, guessed_profile, has_free_end)
@@ -37,7 +38,6 @@ from shopbeam.members.materials import (EN_GRADES, get as get_material, resolve_
 from shopbeam.members.resolve import resolve_section
 
 SCHEMA = 1
-MAX_FILE_BYTES = 1_000_000
 MAX_LOADS = 1000
 MAX_SUPPORTS = 200
 

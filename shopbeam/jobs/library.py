@@ -22,8 +22,9 @@ from dataclasses import dataclass, field
 from pathlib import Path
 
 from shopbeam.cautions import is_lifting, normal_tag
-from shopbeam.jobs import storage
 from shopbeam.errors import InputError
+from shopbeam.jobs import storage
+from shopbeam.jobs.limits import MAX_FILE_BYTES, prescan
 
 ORIGINS = ("shop", "user", "bundled")
 ENV_SHOP = "SHOPBEAM_LIBRARY"
@@ -125,11 +126,23 @@ def _read_entry(path: Path, origin: str) -> Entry:
     if outside:
         return Entry(path.stem, "(link not followed)", (), origin, path, problem=outside)
     try:
+        size = path.stat().st_size
+    except OSError as exc:
+        return Entry(path.stem, "(unreadable)", (), origin, path, problem=str(exc))
+    if size > MAX_FILE_BYTES:  # as the job reader refuses it, before reading it all
+        return Entry(path.stem, "(too large)", (), origin, path,
+                     problem=f"the file is {size:,} bytes, larger than a job file can be "
+                     f"({MAX_FILE_BYTES // 1000} kB); is it the right file?")
+    try:
         text = storage.read_bytes(path).decode("utf-8")
     except InputError as exc:
         return Entry(path.stem, "(unreadable)", (), origin, path, problem=exc.problem.message)
     except (OSError, UnicodeDecodeError) as exc:
         return Entry(path.stem, "(unreadable)", (), origin, path, problem=str(exc))
+    shape = prescan(text)  # nesting and key counts the parser would choke on
+    if shape:
+        return Entry(path.stem, "(not a job file)", (), origin, path,
+                     problem=f"line {shape[0][1]}: {shape[0][0]}", text=text)
     try:
         data = tomllib.loads(text.removeprefix("\ufeff"))
     except tomllib.TOMLDecodeError as exc:

@@ -16,6 +16,7 @@ from __future__ import annotations
 
 import re
 
+MAX_FILE_BYTES = 1_000_000  # a job at its 1,000-load limit is about 100 kB
 MAX_DEPTH = 6  # beam.section.x is 3; nothing in a job file needs more
 MAX_KEYS = 50_000  # a job at its 1,000-load limit has about 5,000; the parser takes 50,000 fast
 # a wheel set's own cap: the search below grows linearly in wheels on a member no wheel can
