@@ -18,7 +18,9 @@ from shopbeam.tui.screens import (AnswerScreen, ConfirmScreen, ConflictScreen,  
                                   LengthScreen, LibraryScreen)
 from shopbeam.tui.widgets import Field  # noqa: E402
 
-READ = AnswerScreen.READ_TIME  # a question takes answers only after this long on screen
+# a question takes answers only after this long on screen, and a letter only this long
+# after the last key typed (one sooner is a word typed on)
+READ = max(AnswerScreen.READ_TIME, AnswerScreen.WORD_GAP) + 0.05
 ALONE = AnswerScreen.ALONE + 0.1  # a letter answers once no key has followed it this long
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"

@@ -423,9 +423,9 @@ async def test_the_length_question_leaves_the_safety_caution_in_sight(tmp_path):
         assert type(app.screen).__name__ == "LengthScreen"
         top = app.screen.get_widget_at(2, 0)[0]
         assert type(top).__name__ == "Banner" and SHORT in str(top.render())
-        await pilot.pause(app.screen.READ_TIME)
+        await pilot.pause(app.screen.WORD_GAP + 0.05)  # read, and no word being typed
         await burst(pilot, "k")
-        await pilot.pause(0.4)  # a letter answers once no key follows it
+        await pilot.pause(app.screen.ALONE + 0.1)  # a letter answers once no key follows it
         await pilot.press("f1")
         await settle(pilot)
         assert type(app.screen).__name__ == "HelpScreen"
@@ -548,9 +548,9 @@ async def test_a_new_length_asks_nothing_by_itself_so_a_burst_goes_on_into_the_n
         # asked on ctrl+l: the support at the old end goes to the new end
         await burst(pilot, CTRL_L)
         assert type(app.screen).__name__ == "LengthScreen"
-        await pilot.pause(app.screen.READ_TIME)
+        await pilot.pause(app.screen.WORD_GAP + 0.05)  # read, and no word being typed
         await burst(pilot, "e")
-        await pilot.pause(0.4)  # a letter answers once no key follows it
+        await pilot.pause(app.screen.ALONE + 0.1)  # a letter answers once no key follows it
         assert type(app.screen).__name__ == "JobScreen"
         assert s.rows("loads")[3]["at"] == "16 ft" and s.rows("loads")[0]["end"] == "16 ft"
         assert [dict(r) for r in s.rows("supports")] == supports  # 0 ft and 12 ft stay
@@ -616,9 +616,9 @@ async def test_a_quit_question_read_and_answered_still_takes_its_key(tmp_path):
         await burst(pilot, CTRL_U + "Changed" + "\x11" + "d")  # ctrl+q, "d" right behind
         assert type(app.screen).__name__ == "ConfirmScreen" and app.is_running
         assert f.input.value == "Changedd"
-        await pilot.pause(app.screen.READ_TIME)
+        await pilot.pause(app.screen.WORD_GAP + 0.05)  # read, and no word being typed
         await burst(pilot, "d")
-        await pilot.pause(0.4)  # a letter answers once no key follows it
+        await pilot.pause(app.screen.ALONE + 0.1)  # a letter answers once no key follows it
         await pilot.pause()
     assert app.return_code in (0, None) and not app.is_running
 
@@ -659,12 +659,33 @@ async def test_esc_right_behind_a_letter_answer_cancels_and_the_letter_never_ans
         await settle(pilot)
         await burst(pilot, CTRL_U + "Changed" + "\x11")
         assert type(app.screen).__name__ == "ConfirmScreen"
-        await pilot.pause(app.screen.READ_TIME + 0.2)
+        await pilot.pause(app.screen.WORD_GAP + 0.05)
         await burst(pilot, "d")
         await pilot.press("escape")
-        await pilot.pause(0.6)
+        await pilot.pause(0.7)  # past the letter's wait (AnswerScreen.ALONE)
         assert app.is_running and type(app.screen).__name__ == "JobScreen"
         assert app.job_screen.session.dirty and f.input.value == "Changed"
+
+
+@sync
+async def test_a_word_typed_slowly_as_a_question_opens_never_answers_it(tmp_path):
+    # 0.4 s a key is an ordinary slow pace: the "d" of "revised", typed on after ctrl+q was
+    # hit by mistake, is part of the word, not "discard"; every letter goes on into the
+    # field and the question stays until a letter comes on its own
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Loft beam, re" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        for letter in "vised":
+            await pilot.pause(0.4)
+            await burst(pilot, letter)
+        await pilot.pause(app.screen.ALONE + 0.2)
+        assert app.is_running and type(app.screen).__name__ == "ConfirmScreen"
+        assert f.input.value == "Loft beam, revised" and app.job_screen.session.dirty
 
 
 # ------------------------------------- a choice picks by a letter pressed on its own only

@@ -1217,6 +1217,7 @@ class ShopbeamApp(App):
     """The application: one job screen, with the library shown first when asked."""
 
     _last_key_at: float | None = None  # when the key before this one was made
+    _last_text_at: float | None = None  # when the last printable key was made
 
     CSS_PATH = "app.tcss"
     TITLE = "shopbeam"
@@ -1269,8 +1270,13 @@ class ShopbeamApp(App):
             self._key_count += 1
             now = getattr(event, "time", None)
             gap = None if now is None or self._last_key_at is None else now - self._last_key_at
+            # since the last printable key: a word being typed, whatever came between
+            text_gap = None if now is None or self._last_text_at is None \
+                else now - self._last_text_at
             if now is not None:
                 self._last_key_at = now
+                if event.is_printable:
+                    self._last_text_at = now
             # a key right behind a printable one, with the focus where that one went, is
             # part of a word being typed
             typed_on = self._text_before is self.focused and gap is not None \
@@ -1306,7 +1312,7 @@ class ShopbeamApp(App):
                     await js.key_behind(held)
                     await js.key_behind(event)
                     return
-                if question.too_early(event, gap):
+                if question.too_early(event, text_gap):
                     await js.key_behind(event)  # typed before it could be read, or text
                     return
                 action = question.answers().get(event.key) if event.is_printable else None

@@ -111,11 +111,14 @@ class AnswerScreen(ModalScreen[str]):
     (`JobScreen.key_behind`), as if the dialog had come after them."""
 
     READ_TIME = 0.5  # seconds: shorter than anyone reads a question and answers it
-    # A letter that answers is a key pressed on its own: one that comes within ALONE of the
-    # key before it, or has another key within ALONE behind it, is part of a word being
-    # typed (a slow link delivers a word typed before the question could be seen after it
-    # opened) and goes on to the field behind, with the keys around it
-    ALONE = 0.3  # seconds
+    # A letter that answers is a key pressed on its own: one that comes within WORD_GAP of
+    # the printable key before it, or has another key within ALONE behind it, is part of a
+    # word being typed (a slow link delivers a word typed before the question could be seen
+    # after it opened; a slow typist types 2 or 3 keys a second) and goes on to the field
+    # behind, with the keys around it. A question can overwrite another person's change or
+    # discard every edit: a word typed at any ordinary pace never answers it.
+    WORD_GAP = 1.0  # seconds, as a word typed slowly on a choice
+    ALONE = 0.6  # seconds a letter answer waits for a key behind it
 
     def __init__(self) -> None:
         super().__init__()
@@ -125,15 +128,16 @@ class AnswerScreen(ModalScreen[str]):
 
     def too_early(self, event, gap: float | None = None) -> bool:
         """`event` (a key) was made before this question could have been read, or is text
-        typed on (a printable key right behind another, or one that answers nothing). Esc
-        is always taken: it answers with the choice that changes nothing."""
+        typed on (a printable key within WORD_GAP of the printable key before it, `gap`, or
+        one that answers nothing). Esc is always taken: it answers with the choice that
+        changes nothing."""
         if event.key == "escape":
             return False
         if getattr(event, "time", self.opened_at) < self.opened_at + self.READ_TIME:
             return True
         if not event.is_printable:
             return False
-        if gap is not None and gap < self.ALONE:
+        if gap is not None and gap < self.WORD_GAP:
             return True
         return event.key not in self.answers()
 
