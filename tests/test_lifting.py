@@ -553,3 +553,20 @@ def test_a_lifting_profile_without_nd_names_the_material_s_own_safety_factors():
     assert sec
     alu = parse_job_text(text.replace(sec[0], 'material = "6061-T6"'))
     assert "own safety factors (Aluminum Design Manual 2015 ASD)" in profile_of(alu).words
+
+
+@pytest.mark.parametrize("at, rated", [("8 ft", True), ("8 in", False), ("12 ft", False)])
+def test_a_monorail_hoist_placed_away_from_mid_span_is_not_rated(at, rated):
+    # the hoist travels along a monorail; a figure for one place away from where it bends
+    # most (mid-span of a single span, common practice) would be posted for every place.
+    # "8 in" for "8 ft" had been rated 54 % high
+    from pathlib import Path
+    preset = Path(__file__).resolve().parents[1] / "presets" / "monorail-hoist-beam.toml"
+    text = preset.read_text()
+    job = parse_job_text(text)
+    hook = next(ld for ld in job.loads if ld.kind == "point" and ld.case == "live")
+    assert abs(hook.at - 8 * 0.3048) < 1e-9  # the preset's hook is at mid-span of 16 ft
+    moved = parse_job_text(text.replace('at = "8 ft"', f'at = "{at}"'))
+    res = capacity(moved)
+    assert res.rated == rated
+    assert any("hoist" in w and "travels" in w for w in res.not_rated) == (not rated)

@@ -1857,11 +1857,16 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     at = units.fmt(ld.at, "length", system)
     worst = "the end stop" if jib else "mid-span"
     device = "jib boom" if jib else "monorail"
-    r.warn(f"{ld.key} is the hoist at {at} only, but on a {device} the hoist "
-           "travels: the checks and the rating are for it there, and the label says so. "
-           f"It is usually worst at {worst} (and near the supports for shear); to rate "
-           "every place, give it as a [[moving]] wheel set (loads per axle, spacing, "
-           "travel between the end stops)", f"{ld.key}.at")
+    # a figure for one place away from the worst is not what a label on a travelling hoist
+    # may post (an "8 in" typed for "8 ft" rated a monorail 54 % high): held, not only warned
+    r.hold(f"{ld.key} is the hoist at {at} only, but on a {device} the hoist "
+           f"travels, and it is usually worst at {worst} (and near the supports for shear): "
+           "a rating for this one place would be posted for every place, so none is. Check "
+           "the position and its unit (\"8 ft\", not \"8 in\"); put the hoist at its worst "
+           "place, or give it as a [[moving]] wheel set (loads per axle, spacing, travel "
+           "between the end stops) to rate every place", f"{ld.key}.at",
+           f"the hoist ({ld.key}) is placed at {at} only, not where it is worst on a "
+           f"{device} that it travels along. Put it at {worst}, or give it as [[moving]]")
 
 
 def lifting_uniform_words(live) -> str:
