@@ -369,3 +369,19 @@ def test_a_load_a_thousand_times_too_small_holds_the_rating(deck, held):
     if held:
         assert said[0].key == "loads[1].value" and "deck" in said[0].message
     assert capacity(job).rated == (not held)
+
+
+def test_a_looser_live_limit_beside_deflection_floor_keeps_the_floors_l_over_360():
+    # deflection = "floor" carries L/360 under live load (IBC 2018 Table 1604.3, from
+    # memory); a live_deflection looser than that, the limit given twice, must not loosen it
+    floor = parse_job_text(_floor('["mezzanine"]', 'deflection = "floor"'))
+    both = parse_job_text(_floor('["mezzanine"]',
+                                 'deflection = "floor"\nlive_deflection = "L/180"'))
+    assert both.criteria.live_deflection_ratio == 360
+    said = [p for p in both.warnings if p.key == "criteria.live_deflection"]
+    assert len(said) == 1 and "stricter" in said[0].message and "changes nothing" not in \
+        said[0].message
+    assert capacity(both).factor == capacity(floor).factor
+    stricter = parse_job_text(_floor('["mezzanine"]',
+                                     'deflection = "floor"\nlive_deflection = "L/480"'))
+    assert stricter.criteria.live_deflection_ratio == 480

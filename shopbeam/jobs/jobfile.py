@@ -652,7 +652,7 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                f"load x {1 + impact:g}); an impact allowance is the part added: write "
                f"{impact - 1:g} (or \"{(impact - 1) * 100:g}%\") for loads x {impact:g}, or "
                f"\"{impact * 100:g}%\" if you do mean {impact:.0%}", "criteria.impact")
-    live = LIVE_DEFLECTION_PRESETS.get(preset)
+    live = named_live = LIVE_DEFLECTION_PRESETS.get(preset)
     ld = crit.get("live_deflection")
     if ld is not None:
         m = re.fullmatch(r"\s*[Ll]\s*/\s*(\d+(?:\.\d+)?)\s*", ld) if isinstance(ld, str) else None
@@ -661,6 +661,14 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
         else:
             r.error(f"live_deflection must be a limit like \"L/360\" (checked under the live "
                     f"loads alone), found {ld!r}", "criteria.live_deflection")
+    if named_live and live and live < named_live:
+        # the limit given twice, the key looser than the named one: the stricter stands
+        r.warn(f"live_deflection = {ld!r} is looser than the L/{named_live:g} under live load "
+               f"that deflection = \"{preset}\" carries (IBC 2018 Table 1604.3, from memory): "
+               f"the stricter, L/{named_live:g}, is checked. To set both limits yourself, write "
+               "deflection as a limit (\"L/240\") beside live_deflection",
+               "criteria.live_deflection")
+        live = named_live
     if ld is not None and live and ratio and not absolute and live < ratio:
         r.warn(f"live_deflection = {ld!r} is looser than deflection = \"L/{ratio:g}\" on the "
                "total load: under gravity loads the live load alone deflects less than the "
