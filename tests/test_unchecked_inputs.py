@@ -385,3 +385,19 @@ def test_a_looser_live_limit_beside_deflection_floor_keeps_the_floors_l_over_360
     stricter = parse_job_text(_floor('["mezzanine"]',
                                      'deflection = "floor"\nlive_deflection = "L/480"'))
     assert stricter.criteria.live_deflection_ratio == 480
+
+
+@pytest.mark.parametrize("where, key, held", [
+    ("load", "count = 2", True), ("load", "factor = 1.6", True), ("load", 'quantity = "2"', True),
+    ("beam", "multiplier = 2", True), ("load", "count = 1", False),  # 1 changes nothing
+    ("load", 'scale = "ok"', True),
+])
+def test_a_multiplier_or_count_key_nobody_reads_holds_the_rating(where, key, held):
+    # a load written once with "count = 2" beside it is checked once (common practice: the
+    # figure must not leave out what the file asks for); load_factor was held already
+    loads = ('[[loads]]\ntype = "point"\nat = "1.5 ft"\nvalue = "-1000 lbf"\n'
+             + (key + "\n" if where == "load" else ""))
+    beam = W8 + "\nbraced = true" + ("\n" + key if where == "beam" else "")
+    job = parse_job_text(span(beam, "", loads))
+    why = [w for w in capacity(job).not_rated if "multiplier or count" in w]
+    assert bool(why) == held

@@ -457,6 +457,20 @@ class _Reader:
                           "name), so the figure would leave it out. Write [criteria] impact = "
                           "\"25%\" for an allowance on the live loads, or remove the key")
                 continue
+            if _MULTIPLIER_KEY.match(str(k)) and here in ("", "beam", "loads", "moving") \
+                    and isinstance(table[k], (int, float, str)) \
+                    and not isinstance(table[k], bool) and table[k] not in (1, "1"):
+                path = f"{prefix}.{k}" if prefix else k
+                self.hold(f"{k!r} in {label} reads like a multiplier or a count of the load "
+                          f"({table[k]!r}), and shopbeam does not read it: each load is "
+                          "checked once, as written, so no rating is posted. Give each load "
+                          "as its own [[loads]] table, or write the total in its value (a "
+                          "factor on the live loads is [criteria] impact; on strength, "
+                          "safety_factor); or remove this key", path,
+                          f"{path} = {table[k]!r} is not read (a multiplier or count by its "
+                          "name), so the figure would leave it out. Write the loads as they "
+                          "are, or remove the key")
+                continue
             if _CUT_KEY.search(str(k)):
                 path = f"{prefix}.{k}" if prefix else k
                 self.cuts.append(path)
@@ -524,6 +538,13 @@ _IMPACT_KEY = re.compile(r"^(?:impact_?(?:factor|allowance|percent|pct)|dynamic(
                          r"reduction(?:_?factor)?|margin|shock(?:_?factor)?|g_?factor)$",
                          re.IGNORECASE)
 _LOWER_KEY = re.compile(r"^(?:derat|reduction|margin)", re.IGNORECASE)
+
+# An unknown key on a load, the member or the file that reads like a multiplier or a count of
+# the load (2 pallets, x 1.6): the load is checked once as written, so not rated on it
+_MULTIPLIER_KEY = re.compile(r"^(?:factor|multiplier|mult|multiply|scale(?:_?factor)?|"
+                             r"count|qty|quantity|times|copies|repeat(?:s|ed)?|"
+                             r"number_?of_?(?:loads|pallets|items|units)|n_?(?:loads|pallets))$",
+                             re.IGNORECASE)
 
 # How each table is written, for "belongs under [criteria]" ("" is the top of the file)
 _TABLES = {"beam": "[beam]", "supports": "[[supports]]", "loads": "[[loads]]",
