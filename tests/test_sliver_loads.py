@@ -176,3 +176,15 @@ def test_a_job_whose_answer_fails_its_self_check_is_refused_by_every_command(tmp
                          capture_output=True, text=True)
     assert out.returncode == 2 and out.stdout == ""
     assert "straddle.toml" in out.stderr and "self-check" in out.stderr
+
+
+@pytest.mark.parametrize("command", ["solve", "check", "capacity", "rating", "size"])
+def test_an_unstable_beam_is_named_with_its_line_by_every_command(tmp_path, command):
+    # the contract: one message naming the file, the key and, where TOML gives one, the line
+    path = tmp_path / "unstable.toml"
+    path.write_text('schema = 1\ntitle = "one pin"\n[beam]\nlength = "10 ft"\n'
+                    'section = "W8x18"\nmaterial = "A992"\n[[supports]]\nat = "0 ft"\n'
+                    'type = "pin"\n[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-100 lbf"\n')
+    out = subprocess.run([sys.executable, "-m", "shopbeam", command, str(path)],
+                         capture_output=True, text=True)
+    assert out.returncode == 2 and f"{path}:7: supports:" in out.stderr, out.stderr

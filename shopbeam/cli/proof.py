@@ -74,7 +74,8 @@ def cmd_report(args) -> int:
 def cmd_rating(args) -> int:
     """`shopbeam rating JOB [--width N] [--plaque [-o FILE]]`."""
     _, _, job = _read(args)
-    r = label.rating(capacity(job), analyze(job).unchecked)
+    unchecked = analyze(job).unchecked  # first: a job it refuses is refused as solve does
+    r = label.rating(capacity(job), unchecked)
     out = getattr(args, "output", None)
     if out and not getattr(args, "plaque", False):
         raise InputError("-o writes the full-page plaque: add --plaque (the 40-column label "
