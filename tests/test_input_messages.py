@@ -1045,3 +1045,23 @@ def test_a_force_written_with_a_point_between_thousands_is_said(value, warned):
     assert bool(got) == warned
     if warned:
         assert "a point between thousands" in got[0].message
+
+
+@pytest.mark.parametrize("kind, value, warned", [
+    ("uniform", "-1.200 lbf/ft", True), ("uniform", "-1.500 N/m", True),
+    ("uniform", "-1.500 kN/m", False), ("uniform", "-40.5 psf", False),
+    ("uniform", "-1.250 psf", True), ("moment", "-2.000 lbf*ft", True),
+    ("moment", "-2.500 kN*m", False),
+])
+def test_a_line_load_or_couple_with_a_point_between_thousands_is_said_too(kind, value, warned):
+    # as for a force: "-1.200 lbf/ft" was read as 1.2 lbf/ft and the PASS rested on it
+    from shopbeam.jobs.jobfile import parse_job_text
+    where = 'at = "4 ft"\n' if kind == "moment" else ""
+    width = 'width = "2 ft"\n' if "psf" in value else ""
+    text = ('schema = 1\ntitle = "t"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            f'at = "8 ft"\ntype = "roller"\n[[loads]]\ntype = "{kind}"\n{where}{width}'
+            f'value = "{value}"\n')
+    got = [w for w in parse_job_text(text).warnings if w.key == "loads[0].value"
+           and "point between thousands" in w.message]
+    assert bool(got) == warned

@@ -332,9 +332,11 @@ class _Reader:
         ("0.250 kip", "1.250 kN") is written to three places as a matter of course."""
         m = self._POINT_THOUSANDS.match(raw) if isinstance(raw, str) else None
         small = re.match(r"(?:lbf?s?|pounds?|n|newtons?|kgf?|kilograms?|lb/ft|lbf/ft|plf|"
-                         r"n/m|psf|lbf/ft\^?2|lb/ft\^?2|kg/m)$", m.group(4).strip(), re.I) \
-            if m else None
-        if m and kind in ("force", "line_load", "area_load") and small and m.group(2) != "0":
+                         r"lbf?/in|pli|n/m|n/mm|psf|lbf/ft\^?2|lb/ft\^?2|kg/m|n/m\^?2|pa|"
+                         r"lbf?[*\- ·]?(?:ft|in)|(?:ft|in)[*\- ·]?lbf?s?|n[*\- ·]?m|"
+                         r"n[*\- ·]?mm)$", m.group(4).strip(), re.I) if m else None
+        if m and kind in ("force", "line_load", "area_load", "moment") and small \
+                and m.group(2) != "0":
             sign, a, b, unit = m.group(1), m.group(2), m.group(3), m.group(4).strip()
             sign = "-" if sign == "\u2212" else sign
             self.warn(f"{raw.strip()!r} is read as {sign}{float(a + '.' + b):g} {unit} (a "
@@ -1011,13 +1013,16 @@ def _line_load(r: _Reader, ld: dict, raw, key: str, width_needed: list) -> float
     """A load per length, or a load per area times the tributary width."""
     r.ton(raw, key)
     try:
-        return units.parse(raw, "line_load", key)
+        got = units.parse(raw, "line_load", key)
+        r.thousands_point(raw, "line_load", key)
+        return got
     except InputError as first:
         try:
             p = units.parse(raw, "area_load", key)
         except InputError:
             r.take(first, key)
             return None
+        r.thousands_point(raw, "area_load", key)
         width_needed.append((raw, p))
         return p  # multiplied by the width by the caller
 
