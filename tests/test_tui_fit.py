@@ -5,6 +5,8 @@ from __future__ import annotations
 import datetime as _dt
 from pathlib import Path
 
+import pytest
+
 from tuipilot import _own_library, settle, sync  # noqa: E402,F401 (_own_library: autouse)
 from shopbeam.tui.app import make_app  # noqa: E402
 from shopbeam.tui import drawing  # noqa: E402
@@ -190,3 +192,18 @@ def test_a_choice_too_narrow_for_one_option_a_line_shows_the_chosen_one():
         str(c._render_choice(80))
     narrow = str(c._render_choice(30))
     assert "< [none] >" in narrow and "1 of 2" in narrow
+
+
+@pytest.mark.parametrize("width", [78, 60, 40])
+def test_the_summary_in_sight_while_typing_keeps_not_rated_at_any_width(width):
+    # the trailer preset passes every check but its fatigue under road loads is not checked:
+    # the one line in sight in the form views must say NOT RATED, shortened, never dropped
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    r = analyze(parse_job_text((PRESETS / "trailer-cross-member.toml").read_text()))
+    assert r.ok and r.blocking  # the case: passes, not rated
+    verdict = drawing.summary_line(r, width).splitlines()[0]
+    assert len(verdict) <= width and "NOT RATED" in verdict
+    if width >= 78:
+        assert "fatigue" in verdict

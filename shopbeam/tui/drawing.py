@@ -306,6 +306,10 @@ def verdict_line(result) -> str:
         if gaps:
             but += (f" - BUT {len(gaps)} limit state(s) NOT CHECKED (no rating): "
                     + "; ".join(result.blocking))
+        holds = getattr(result.job, "holds", ())
+        if holds:
+            but += (f" - NOT RATED: {len(holds)} input problem(s), each named beside its "
+                    "field")
         return (f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} "
                 f"(used {g.ratio:.0%}){but}")
     fails = [c.name for c in result.checks if not c.ok]
@@ -336,10 +340,30 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
                 break
         else:
             verdict = f"FAILS {len(fails)} checks - governing: {g.name}, ratio {g.ratio:.2f}"
-    elif width and len(verdict) > width:  # a pass with loads pointing up: the warning first
+    elif width and len(verdict) > width:
+        # a pass with loads pointing up, or with a limit state not checked: the warning and
+        # NOT RATED stay in sight, shortened, never dropped
         g, up = result.governing, getattr(result.job, "upward", ())
-        short = ([f"PASS, ratio {g.ratio:.2f} - BUT {len(up)} load(s) point UP: check the signs",
-                  f"PASS {g.ratio:.2f} - BUT {len(up)} load(s) point UP"] if up else
+        gaps = [u for u in result.unchecked if u.blocks_rating]
+        holds = getattr(result.job, "holds", ())
+        # what holds the rating: limit states not checked, input problems (each named beside
+        # its field)
+        names = "; ".join(x for x in (
+            f"not checked: {'; '.join(result.blocking)}" if result.blocking else "",
+            f"{len(holds)} input problem(s)" if holds else "") if x)
+        gaps = gaps + list(holds)
+        no = (" - NOT RATED" if gaps else "")
+        short = ([f"PASS, ratio {g.ratio:.2f} - BUT {len(up)} load(s) point UP: check the "
+                  f"signs{no}", f"PASS {g.ratio:.2f} - BUT {len(up)} load(s) point UP{no}",
+                  f"PASS - {len(up)} load(s) point UP{' - NOT RATED' if gaps else ''}"]
+                 if up else
+                 [f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} - NOT RATED, "
+                  f"{names}",
+                  f"PASS {g.name} {g.ratio:.2f} - NOT RATED, {names}",
+                  f"PASS {g.ratio:.2f} - NOT RATED, {names}",
+                  f"PASS {g.ratio:.2f} - NOT RATED: {len(gaps)} reason(s), see Results",
+                  "PASS - NOT RATED"]
+                 if gaps else
                  [f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f}"])
         for verdict in short:
             if len(verdict) <= width:
