@@ -433,18 +433,21 @@ async def test_plots_of_a_patterned_job_draw_the_governing_pattern():
 @sync
 async def test_esc_then_digit_typed_fast_in_a_field_changes_view_and_types_nothing():
     # over SSH and in tmux, Esc followed at once by 7 arrives as one key, the Option-layer
-    # character of 7 (pilcrow sign): it must not land in the field
+    # character of 7 (pilcrow sign): in a field of numbers and units it must not land in the
+    # field (in a free-text field it is a character: see test_tui_keep)
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        title = field(app, "job", "title")
-        before = title.value
-        title.input.focus()
+        await pilot.press("f3")
+        await settle(pilot)
+        length = field(app, "span", "beam.length")
+        before = length.value
+        length.input.focus()
         await pilot.pause()
         await pilot.press("pilcrow_sign")
         await pilot.pause()
         assert app.job_screen.current == "results"
-        assert field(app, "job", "title").value == before
+        assert field(app, "span", "beam.length").value == before
 
 
 @sync
@@ -477,3 +480,4 @@ async def test_a_sizing_sweep_that_ends_while_typing_elsewhere_leaves_the_focus_
         await pilot.press("enter")
         await settle(pilot)
         assert job_screen(app).session.doc.get("beam.section") == before
+

@@ -1005,3 +1005,21 @@ async def test_digits_typed_right_behind_a_view_key_are_text_not_another_view(tm
         assert app.job_screen.current == "loads"
         said = [m for m in _notices(app) if "Not typed anywhere" in m]
         assert said and '"12 ft"' in said[-1], said
+
+
+@sync
+async def test_pound_and_section_signs_in_notes_are_typed_not_read_as_view_keys(tmp_path):
+    # "£" is shift+3 on a UK keyboard and "§" cites a clause; they are also the characters
+    # Esc-then-3 and Esc-then-6 arrive as. In a free-text field they are text: before, "£"
+    # switched to the Loads view and the rest of the line went nowhere
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "notes")
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        before = f.input.value
+        await burst(pilot, " Steel cost £40 per length; see NDS § 4.3.")
+        assert app.job_screen.current == "job"
+        assert f.input.value == before + " Steel cost £40 per length; see NDS § 4.3."

@@ -32,11 +32,22 @@ OPTION_DIGITS = {"1": "inverted_exclamation_mark", "2": "trade_mark_sign", "3": 
 _DIGIT_OF = {name: digit for digit, name in OPTION_DIGITS.items()}
 
 
+# Fields of free text, where the Option-layer characters of the digits are ordinary
+# characters (£ on a UK keyboard, § before a clause, º in "nº") and are typed, never read as
+# Esc-then-digit: a view key there is F2..F12 (or Esc, then the digit a moment later)
+FREE_TEXT_KEYS = frozenset({"title", "notes", "tags", "load.label", "support.label",
+                            "moving.label"})
+
+
 class FieldInput(Input):
     """A field's text box. Keys come in typing order (the app runs bound keys at once, see
     `ShopbeamApp.on_event`); a key that still arrives after an earlier key of the same burst
     moved the focus away goes on to whatever has the focus now. Esc-then-digit typed fast
     (the Option-layer character of that digit) changes view and types nothing."""
+
+    def _free_text(self) -> bool:
+        key = getattr(self.parent, "key", "")
+        return key in FREE_TEXT_KEYS or key.startswith("project.")
 
     async def _on_key(self, event) -> None:
         if self.screen.focused is not self:
@@ -48,7 +59,7 @@ class FieldInput(Input):
                 target.post_message(events.Key(event.key, event.character))
             return
         digit = _DIGIT_OF.get(event.key)
-        if digit is not None:
+        if digit is not None and not self._free_text():
             event.stop()
             event.prevent_default()
             self.screen.set_focus(None)
