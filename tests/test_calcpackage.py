@@ -226,3 +226,23 @@ def test_governing_pattern_names_uplift_like_the_report():
     up = [r for r in pkg.state_reactions if "uplift" in r[2]]
     down = [r for r in result.state_solution.reactions if r.force < 0]
     assert len(up) == len(down) >= 1
+
+
+def test_a_title_cannot_end_the_style_element_and_run_markup():
+    # the running header is a CSS string inside <style>: a "</style><script>" in a title
+    # must stay text there (escaped as CSS), so no script element appears in the package
+    from html.parser import HTMLParser
+
+    text = (PRESETS / "demo.toml").read_text().replace(
+        'title = "Loft beam over the saw bay, with stair overhang"',
+        'title = "</style><script>alert(5)</script><style>"')
+    job = parse_job_text(text)
+    html = cp.to_html(cp.build(analyze(job), input_bytes=text.encode(), input_name="x.toml"))
+    tags = []
+
+    class Tags(HTMLParser):
+        def handle_starttag(self, tag, attrs):
+            tags.append(tag)
+
+    Tags().feed(html)
+    assert "script" not in tags and tags.count("style") == 1

@@ -233,6 +233,9 @@ def _check_more(c: CheckRow) -> str:
 def _css_string(text: str) -> str:
     """Text as a CSS string literal (for @page margin boxes)."""
     out = text.replace("\\", "\\\\").replace('"', '\\"').replace("\n", " ")
+    # < and > as CSS escapes: the string sits inside a <style> element, where a "</style>"
+    # in a title would end it and let markup (a script) run in the package
+    out = out.replace("<", "\\3c ").replace(">", "\\3e ")
     return '"' + "".join(ch if ch.isprintable() else " " for ch in out) + '"'
 
 
