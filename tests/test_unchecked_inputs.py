@@ -401,3 +401,15 @@ def test_a_multiplier_or_count_key_nobody_reads_holds_the_rating(where, key, hel
     job = parse_job_text(span(beam, "", loads))
     why = [w for w in capacity(job).not_rated if "multiplier or count" in w]
     assert bool(why) == held
+
+
+@pytest.mark.parametrize("value", ['"-5e-324 lbf"', '"-1e-300 lbf"', '"-1e-9 lbf"'])
+def test_a_load_of_next_to_nothing_is_named_and_capacity_does_not_fail(value):
+    # a subnormal load left a deflection scale of 0 in the self-checks (ZeroDivisionError in
+    # capacity and rating); a load under a milligram's weight is a slip: held, with its key
+    loads = f'[[loads]]\ntype = "point"\nat = "1.5 ft"\nvalue = {value}\n'
+    job = parse_job_text(span(W8 + "\nbraced = true", "", loads))
+    assert any("next to nothing" in p.message and p.key == "loads[0].value"
+               for p in job.warnings)
+    res = capacity(job)  # no exception
+    assert not res.rated and any("next to nothing" in w for w in res.not_rated)

@@ -7,6 +7,8 @@ checks are rules of thumb of the trade (common practice, no source) that catch u
 
 from __future__ import annotations
 
+import math
+
 import numpy as np
 
 from dataclasses import dataclass, field
@@ -175,7 +177,10 @@ def self_checks(sol: "Solution") -> list[SelfCheck]:
     lever = max(1.0, L / float(np.min(np.diff(pts)))) if pts.size > 1 else 1.0
     uref = lever * (fref * lref**3 / ei + (fref / min(springs) if springs else 0.0))
     if fref > 0:
-        rv, rm_, ru = vmax / fref, mmax / (fref * lref), umax / uref
+        # a load of next to nothing (a subnormal float) can leave a scale 0: no ratio then
+        rv = vmax / fref
+        rm_ = mmax / (fref * lref) if fref * lref > 0 else (0.0 if mmax == 0 else math.inf)
+        ru = umax / uref if uref > 0 else (0.0 if umax == 0 else math.inf)
         ok_v, ok_m, ok_u = rv <= 1.5, rm_ <= 1.5, ru <= 1.0
         out.append(SelfCheck(
             "shear magnitude", ok_v,

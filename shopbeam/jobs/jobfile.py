@@ -1496,6 +1496,7 @@ def _same_both_ways(r: _Reader, section, axis) -> None:
 # source. A label plate or a cable on a member that carries tons changes nothing anyway.
 TINY_FORCE = 10.0  # N
 TINY_RATIO = 1000.0
+NEXT_TO_NOTHING = 1e-5  # N in all (a milligram's weight): no shop load, whatever the rest
 
 
 def _tiny_loads(r: _Reader, loads: list[Load], system: str) -> None:
@@ -1505,7 +1506,14 @@ def _tiny_loads(r: _Reader, loads: list[Load], system: str) -> None:
     sized = [(abs(ld.total_force), ld) for ld in loads if ld.kind != "moment"]
     big = max((f for f, _ in sized), default=0.0)
     for f, ld in sized:
-        if 0 < f < TINY_FORCE and f * TINY_RATIO < big:
+        if 0 < f < NEXT_TO_NOTHING:
+            name = f" ({ld.label})" if ld.label else ""
+            r.hold(f"this load{name} comes to {f:.3g} N in all, next to nothing (less than a "
+                   "milligram's weight): most likely a slip of the exponent or the unit. Fix "
+                   "it, or remove the load; no rating is posted while it stands",
+                   f"{ld.key}.value", f"{ld.key}{name} is next to nothing ({f:.3g} N): most "
+                   "likely a slip. Fix it or remove it")
+        elif 0 < f < TINY_FORCE and f * TINY_RATIO < big:
             name = f" ({ld.label})" if ld.label else ""
             r.hold(f"this load{name} comes to {units.fmt(f, 'force', system)} in all, under "
                    f"1/{TINY_RATIO:g} of the job's largest load "
