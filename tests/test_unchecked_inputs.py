@@ -413,3 +413,20 @@ def test_a_load_of_next_to_nothing_is_named_and_capacity_does_not_fail(value):
                for p in job.warnings)
     res = capacity(job)  # no exception
     assert not res.rated and any("next to nothing" in w for w in res.not_rated)
+
+
+@pytest.mark.parametrize("sf, refused, warned", [(167, True, False), (100, True, False),
+                                                  (12, True, False), (6, False, True),
+                                                  (3, False, False)])
+def test_a_safety_factor_with_a_slipped_decimal_point_is_refused(sf, refused, warned):
+    # 167 for 1.67: no member check uses a factor past 10 (AISC ASD 1.67, ASME BTH-1 2 to 3,
+    # from memory); it had passed silently, and sized every section to "ratio inf"
+    from shopbeam.errors import InputErrors
+    text = span(W8, criteria=f'safety_factor = {sf}\nbasis = "first-yield"')
+    if refused:
+        with pytest.raises(InputErrors) as e:
+            parse_job_text(text)
+        assert e.value.problems[0].key == "criteria.safety_factor"
+        return
+    job = parse_job_text(text)
+    assert bool(warnings(job, "criteria.safety_factor")) == warned

@@ -644,6 +644,17 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                                    "of yield" if 1 / sf >= 1.5 else ""),
                 "criteria.safety_factor")
         sf = 1.67
+    elif sf > 10:
+        # a dropped decimal point (167 for 1.67, 100 for 1.00): no member check means that
+        r.error(f"safety_factor {sf:g} is far above any member check's (AISC ASD 1.67, ASME "
+                f"BTH-1 2 to 3, rigging 5): most likely a slipped decimal point"
+                + (f" ({sf / 100:g}?)" if sf >= 100 else "") + "; write the factor meant, "
+                "up to 10", "criteria.safety_factor")
+        sf = 1.67
+    elif sf > 5:
+        r.warn(f"safety_factor {sf:g} is more than members are usually checked with (AISC ASD "
+               "1.67, ASME BTH-1 2 to 3): it is used as written; check it is the factor meant",
+               "criteria.safety_factor")
     basis = r.choice(crit, "basis", "criteria.basis", Basis, Basis.AUTO)
     unused = ""
     if "safety_factor" in crit and sf != 1.67:
