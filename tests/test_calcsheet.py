@@ -50,3 +50,24 @@ def test_brackets_print_as_text():
     x = sp.Symbol("x", real=True)
     e = 3 * sp.SingularityFunction(x, 0, 1) - sp.Rational(1, 2) * sp.SingularityFunction(x, sp.Rational(7, 2), 2)
     assert brackets(e, x) == "3 <x>^1 - 1/2 <x - 7/2>^2"
+
+
+def test_a_calc_sheet_too_large_to_work_out_quickly_is_refused_with_what_to_use(tmp_path):
+    # 100 point loads: the exact algebra took 11 s (254 s at the 1,000-load cap); past the
+    # bound the sheet is refused at once, naming the count and the commands that do answer
+    import subprocess
+    import sys
+
+    from shopbeam.jobs.limits import CALC_TERMS
+    text = ('schema = 1\ntitle = "c"\n[beam]\nlength = "16 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "16 ft"\ntype = "roller"\n')
+    n = CALC_TERMS - 10 + 1  # two supports count 10
+    for i in range(n):
+        text += f'[[loads]]\ntype = "point"\nat = "{(i + 0.5) * 16 / n:.4f} ft"\nvalue = "-10 lbf"\n'
+    p = tmp_path / "many.toml"
+    p.write_text(text)
+    run = subprocess.run([sys.executable, "-m", "shopbeam", "solve", "--calc", str(p)],
+                         capture_output=True, text=True, timeout=120)
+    assert run.returncode == 2 and "calc sheet" in run.stderr and str(p) in run.stderr
+    assert "shopbeam report" in run.stderr and run.stdout == ""

@@ -48,6 +48,26 @@ PATTERN_WORK = 60_000
 SIZE_PATTERN_WORK = 400_000
 
 
+# the exact calc sheet (rational brackets solved by sympy) grows with the loads and, faster,
+# with the supports, hinges and springs: loads + 5 x those <= 60 keeps it to a few seconds on
+# the development machine (40 loads on 2 supports 2.3 s, 5 loads on 10 supports 2.7 s, 60
+# loads 5.5 s, 100 loads 11 s under load: measured 2026-12-04); past it the sheet is refused
+# with what to use instead (the report has every figure)
+CALC_TERMS = 60
+
+
+def calc_problem(supports, loads) -> str:
+    """Why the exact calc sheet is not worked out for this job ("" when it is)."""
+    held = sum(1 for s in supports)
+    terms = len(loads) + 5 * held
+    if terms <= CALC_TERMS:
+        return ""
+    return (f"the exact calc sheet of {len(loads)} loads on {held} supports, hinges and springs "
+            f"is too large to work out in a few seconds (loads + 5 x supports = {terms}, "
+            f"more than {CALC_TERMS}); `shopbeam solve` and `shopbeam report` give every "
+            "figure and check without the exact algebra")
+
+
 def _edges(supports, length=None) -> list[float]:
     """The ends of the spans and overhangs: the member's ends and the supports that take
     force inside it."""

@@ -17,6 +17,7 @@ from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.engine.model import Beam
 from shopbeam.engine.solver import solve
+from shopbeam.errors import InputError
 
 # display scales per system: (length, force, label words)
 SCALES = {
@@ -215,8 +216,13 @@ def calc_sheet(job, result=None, width: int = 78) -> str:
     is wrapped at `width` columns (the text UI passes the width of its view)."""
     import sympy as sp  # noqa: PLC0415 - startup
 
+    from shopbeam.jobs.limits import calc_problem  # noqa: PLC0415
+
     lu, fu, lab = SCALES[job.units]
     beam = job.beam()
+    too_big = calc_problem(beam.supports, beam.loads)
+    if too_big:
+        raise InputError(too_big, "loads", file=getattr(job, "path", "") or "")
     ex = exact_solve(beam, lu, fu)
     ei_val = exact_number(beam.ei / (fu * lu * lu))
     out = textwrap.wrap(f"shopbeam calc sheet: {job.title}", width, subsequent_indent="  ")
