@@ -116,3 +116,24 @@ def test_the_pattern_bound_answers_inside_it_and_refuses_past_it(tmp_path):
     r = run(_shelf(50), "size", "--kind", "W")
     assert r.returncode == 2 and "--kind" in r.stderr and str(p) in r.stderr
     assert r.stdout == ""
+
+
+def test_a_wheel_set_beside_patterned_loads_counts_the_search_once_per_pattern(tmp_path):
+    # a train near the search bound plus patterned loads took 8.8 s for rating: the search
+    # runs once per patterned span (and once more), so that product is bounded
+    from adversarial import wheels
+
+    from shopbeam.jobs.limits import MOVING_WORK, moving_work
+    pattern = ('[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "100 ft"\n'
+               'value = "-10 lbf/ft"\npatterned = true\n')
+    p = tmp_path / "job.toml"
+    # 57 wheels over a spring at mid-span: inside the bound alone, past it with the pattern
+    assert moving_work(57, 4, 1) * 3 > MOVING_WORK
+    p.write_text(wheels(57, springs_n=1) + pattern, encoding="utf-8")
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "check", str(p)],
+                       capture_output=True, text=True, timeout=120)
+    assert r.returncode == 2 and "patterned" in r.stderr and "moving[0].loads" in r.stderr
+    p.write_text(wheels(4, springs_n=1) + pattern, encoding="utf-8")
+    r = subprocess.run([sys.executable, "-m", "shopbeam", "check", str(p)],
+                       capture_output=True, text=True, timeout=120)
+    assert r.returncode == 0, r.stderr

@@ -173,6 +173,16 @@ def cost_problems(supports, loads, moving, braces=(), length=None) -> list[tuple
         end = length if length is not None else max(fixed)
         inner = len({s.at for s in supports if 0.0 < s.at < end})
         work = moving_work(n, len(fixed) + 1, inner)
+        # each span's patterned load is a load state the wheel set's envelope is searched in
+        pat = patterned_spans(supports, loads, length)[1] if any(
+            getattr(ld, "patterned", False) for ld in loads) else 0
+        if pat and work * (pat + 1) > MOVING_WORK:
+            out.append((f"a wheel set of {n} wheels ({work:,} units of search) beside "
+                        f"patterned loads on {pat} spans takes {work * (pat + 1):,} units "
+                        f"(the search once per patterned span and once more), more than "
+                        f"shopbeam takes ({MOVING_WORK:,}); use fewer wheels or make the "
+                        "loads beside the wheels not patterned", f"{key}.loads"))
+            continue
         if work > MOVING_WORK:
             out.append((f"a wheel set of {n} wheels over {len(fixed) + 1} fixed positions "
                         f"(supports, load ends, braces), {inner} of them supports inside the "
