@@ -12,9 +12,11 @@ from __future__ import annotations
 import re
 
 # C0 and C1 controls, DEL, and the Unicode format characters that reorder or hide text
-# (bidirectional overrides and isolates, the line and paragraph separators, zero-width
-# joiners aside from the common ones)
-_CONTROL = re.compile("[\x00-\x1f\x7f-\x9f\u061c\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069"
+# (bidirectional overrides and isolates, the line and paragraph separators, the invisible
+# ones: soft hyphen, zero-width space, word joiner, byte-order mark; the zero-width joiners
+# of emoji and scripts aside)
+_CONTROL = re.compile("[\x00-\x1f\x7f-\x9f\u00ad\u061c\u200b\u200e\u200f\u2028\u2029\u202a-\u202e"
+                      "\u2060-\u2064\u2066-\u2069\ufeff"
                       "\ufff9-\ufffb\U000e0000-\U000e007f]")
 _NAMED = {"\t": "\\t", "\n": "\\n", "\r": "\\r"}
 

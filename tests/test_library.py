@@ -317,3 +317,13 @@ def test_copy_as_a_name_with_spaces_makes_it_safe(places):
     target = library.copy("bundled:demo", new_name="loft beam 2")
     assert target.name == "loft-beam-2.toml" and target.parent.name == "user"
     assert library.find("loft beam 2").origin == "user"
+
+
+def test_new_refuses_a_file_name_with_control_characters(tmp_path):
+    # a line break or an escape in a file name garbles every listing it appears in
+    here = str(Path(__file__).resolve().parents[1])
+    run = subprocess.run([sys.executable, "-m", "shopbeam", "new", "bay\n4\x1b[8m.toml"],
+                         capture_output=True, text=True, cwd=tmp_path,
+                         env={**__import__("os").environ, "PYTHONPATH": here})
+    assert run.returncode == 2 and "control characters" in run.stderr
+    assert list(tmp_path.iterdir()) == []

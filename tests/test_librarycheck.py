@@ -53,3 +53,15 @@ def test_csv_has_a_header_and_a_row_per_job(shop):
 def test_bundled_library_all_pass(shop):
     rows = lc.check_library(None, "bundled")
     assert len(rows) >= 12 and all(r.result == "PASS" for r in rows)
+
+
+def test_a_title_that_reads_as_a_formula_is_kept_as_text_in_the_csv(shop):
+    # OWASP's advice on CSV injection (a cell starting with = + - @ is run as a formula by
+    # a spreadsheet): the title gets a leading apostrophe; numbers stay numbers
+    (shop / "formula.toml").write_text(
+        SIMPLE.replace('title = "Simple span, hand case"',
+                       'title = "=HYPERLINK(\\"http://x\\",\\"ok\\")"'), encoding="utf-8")
+    rows = lc.check_library(str(shop), "shop")
+    got = {g["job"]: g for g in csv.DictReader(io.StringIO(lc.to_csv(rows)))}
+    assert got["shop:formula"]["title"] == "'=HYPERLINK(\"http://x\",\"ok\")"
+    assert float(got["shop:good"]["ratio"]) > 0

@@ -4,6 +4,7 @@ files from the command line (the library itself is `shopbeam.jobs.library`)."""
 from __future__ import annotations
 
 import argparse
+import re
 import shlex
 import textwrap
 from pathlib import Path
@@ -113,6 +114,10 @@ def cmd_new(args) -> int:
         dest.folder.mkdir(parents=True, exist_ok=True)
     if not target.parent.is_dir():
         raise InputError(f"the folder {target.parent} does not exist", key="--to")
+    if re.search(r"[\x00-\x1f\x7f-\x9f\u202a-\u202e\u2066-\u2069]", target.name):
+        raise InputError(f"the file name {shown(target.name)} holds control characters (a "
+                         "line break, an escape or a direction mark), which would hide or "
+                         "garble it in listings: give a plain name", key="--to")
     title = args.title or storage.suggest_name(Path(name).stem).replace("-", " ").capitalize()
     tags = [t.strip() for t in (args.tags or "").split(",") if t.strip()]
     storage.save_text(target, new_job_text(title, tags=tags), None, overwrite=args.overwrite)

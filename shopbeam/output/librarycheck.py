@@ -120,5 +120,17 @@ def to_csv(rows: list[Row]) -> str:
     w = csv.writer(buf, lineterminator="\n")
     w.writerow(COLUMNS)
     for r in rows:
-        w.writerow(r.cells())
+        w.writerow([_cell(c) for c in r.cells()])
     return buf.getvalue()
+
+
+def _cell(value):
+    """A cell a spreadsheet shows as text: one from a job file that starts with = + - @ (a
+    title such as =HYPERLINK(...)) would be run as a formula when the CSV is opened, so it
+    gets a leading apostrophe. Numbers (a negative factor) stay numbers."""
+    if isinstance(value, str) and value[:1] in ("=", "+", "-", "@", "\t", "\r"):
+        try:
+            float(value)
+        except ValueError:
+            return "'" + value
+    return value
