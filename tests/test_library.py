@@ -4,6 +4,7 @@ never overwrite silently and never write the bundled presets; the library and ne
 from __future__ import annotations
 
 import argparse
+import os
 import subprocess
 import sys
 import tomllib
@@ -324,6 +325,6 @@ def test_new_refuses_a_file_name_with_control_characters(tmp_path):
     here = str(Path(__file__).resolve().parents[1])
     run = subprocess.run([sys.executable, "-m", "shopbeam", "new", "bay\n4\x1b[8m.toml"],
                          capture_output=True, text=True, cwd=tmp_path,
-                         env={**__import__("os").environ, "PYTHONPATH": here})
+                         env={**os.environ, "PYTHONPATH": here})
     assert run.returncode == 2 and "control characters" in run.stderr
     assert list(tmp_path.iterdir()) == []
