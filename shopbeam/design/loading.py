@@ -221,8 +221,11 @@ class StateSet:
     def patterns(self) -> list[tuple[int, ...]]:
         if not self.parts.patterned:
             return [()]
-        n = len(self.segs)
-        return [tuple(i for i in range(n) if mask >> i & 1) for mask in range(2**n)]
+        # only the spans that carry a patterned load: a span with none is the same state
+        # loaded or not (walked in mask order, each state comes before its duplicates did)
+        hit = [i for i in range(len(self.segs)) if self.span_loads[i]]
+        return [tuple(i for b, i in enumerate(hit) if mask >> b & 1)
+                for mask in range(2 ** len(hit))]
 
     def _scaled(self, kk: float):
         """(the live loads, each span's patterned loads) scaled by kk (kept per kk)."""

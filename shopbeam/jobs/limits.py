@@ -173,14 +173,16 @@ def cost_problems(supports, loads, moving, braces=(), length=None) -> list[tuple
         end = length if length is not None else max(fixed)
         inner = len({s.at for s in supports if 0.0 < s.at < end})
         work = moving_work(n, len(fixed) + 1, inner)
-        # each span's patterned load is a load state the wheel set's envelope is searched in
+        # beside a wheel set, every pattern of the spans that carry a patterned load is a load
+        # state the wheel set's envelope is searched in: 2^(those spans) searches
         pat = patterned_spans(supports, loads, length)[1] if any(
             getattr(ld, "patterned", False) for ld in loads) else 0
-        if pat and work * (pat + 1) > MOVING_WORK:
+        if pat and (pat > 20 or work * 2 ** pat > MOVING_WORK):
+            total = f"{work * 2 ** pat:,}" if pat <= 20 else f"more than {MOVING_WORK:,}"
             out.append((f"a wheel set of {n} wheels ({work:,} units of search) beside "
-                        f"patterned loads on {pat} spans takes {work * (pat + 1):,} units "
-                        f"(the search once per patterned span and once more), more than "
-                        f"shopbeam takes ({MOVING_WORK:,}); use fewer wheels or make the "
+                        f"patterned loads on {pat} spans takes {total} units (the search "
+                        f"once for each of the 2^{pat} patterns), more than shopbeam takes "
+                        f"({MOVING_WORK:,}); use fewer wheels or patterned spans, or make the "
                         "loads beside the wheels not patterned", f"{key}.loads"))
             continue
         if work > MOVING_WORK:
