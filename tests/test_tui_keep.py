@@ -1023,3 +1023,31 @@ async def test_pound_and_section_signs_in_notes_are_typed_not_read_as_view_keys(
         await burst(pilot, " Steel cost £40 per length; see NDS § 4.3.")
         assert app.job_screen.current == "job"
         assert f.input.value == before + " Steel cost £40 per length; see NDS § 4.3."
+
+
+@sync
+async def test_a_paste_of_several_lines_keeps_every_line(tmp_path):
+    # Textual's own field kept the first line of a paste and dropped the rest unseen; a
+    # paste is typing: joined with spaces in the one-line field, and said
+    from textual import events as tevents
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "notes")
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        before = f.input.value
+        pilot.app._driver.send_message(tevents.Paste(
+            " Checked by RK.\nBolts 3/4 A325 at each end.\r\nSee drawing Q-114.\n"))
+        await settle(pilot)
+        assert f.input.value == before + "Checked by RK. Bolts 3/4 A325 at each end. See " \
+            "drawing Q-114."
+        # pasted with the focus on a choice: nothing takes it, and a notice says what
+        await pilot.press("f2")
+        await settle(pilot)
+        pilot.app._driver.send_message(tevents.Paste("rack beam 96 in bay"))
+        await settle(pilot)
+        await pilot.pause(0.6)
+        said = [n.message for n in app._notifications]
+        assert any("Not typed anywhere" in m and "rack beam 96 in bay" in m for m in said)

@@ -1265,6 +1265,13 @@ class ShopbeamApp(App):
         backspace after the characters typed behind it, a character into the field a Tab
         had already left. Here a bound key runs its action at once and a character for a
         text field goes into it at once; only keys nothing is bound to are passed on."""
+        if isinstance(event, events.Paste) and not isinstance(self.focused, Input):
+            # a paste with no text field picked (a choice, a list, a view): nothing takes
+            # it, and like a typed key that nothing takes, it is said, never dropped
+            js = getattr(self, "job_screen", None)
+            if js is not None and self.screen is js and event.text.strip():
+                js.not_typed(" ".join(event.text.split()), self.focused or js)
+                return
         if isinstance(event, events.Key) and not event.is_forwarded:
             self.app_focus = True
             self._key_count += 1

@@ -45,6 +45,27 @@ class FieldInput(Input):
     moved the focus away goes on to whatever has the focus now. Esc-then-digit typed fast
     (the Option-layer character of that digit) changes view and types nothing."""
 
+    def _on_paste(self, event: events.Paste) -> None:
+        """A paste is typing: every line of it is kept. A field holds one line, so the lines
+        are joined with spaces and a notice says so (Textual's own Input keeps the first line
+        only; prevent_default keeps its handler, which Textual also runs, from adding the
+        first line again)."""
+        event.stop()
+        event.prevent_default()
+        if not event.text:
+            return
+        lines = [ln.strip() for ln in event.text.splitlines()]
+        lines = [ln for ln in lines if ln]
+        text = " ".join(lines)
+        selection = self.selection
+        if selection.is_empty:
+            self.insert_text_at_cursor(text)
+        else:
+            self.replace(text, *selection)
+        if len(lines) > 1:
+            self.app.notify(f"Pasted {len(lines)} lines into one line (a field holds one "
+                            "line): they are joined with spaces, nothing left out.")
+
     def _free_text(self) -> bool:
         key = getattr(self.parent, "key", "")
         return key in FREE_TEXT_KEYS or key.startswith("project.")
