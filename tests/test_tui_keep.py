@@ -1051,3 +1051,27 @@ async def test_a_paste_of_several_lines_keeps_every_line(tmp_path):
         await pilot.pause(0.6)
         said = [n.message for n in app._notifications]
         assert any("Not typed anywhere" in m and "rack beam 96 in bay" in m for m in said)
+
+
+@sync
+async def test_keys_typed_behind_f1_go_into_the_field_or_are_named(tmp_path):
+    # F1 sits by F2 and Esc: the keys of a burst behind it (before the key list could be
+    # read) go on into the field; printable keys later, which the key list does not use,
+    # are named in a notice (they had vanished)
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Burst" + "\x1bOP" + " after help")
+        assert type(app.screen).__name__ == "HelpScreen"
+        assert f.input.value == "Burst after help"
+        await pilot.pause(0.6)
+        await burst(pilot, "typed")
+        await pilot.pause(0.6)
+        said = [n.message for n in app._notifications]
+        assert any("Not typed anywhere" in m and "typed" in m for m in said)
+        await pilot.press("escape")
+        await settle(pilot)
+        assert f.input.value == "Burst after help"

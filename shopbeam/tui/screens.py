@@ -89,7 +89,16 @@ def help_text(width: int = 74) -> str:
 
 
 class HelpScreen(ModalScreen):
+    """The key list. Keys typed before it could be read go on to the field behind it, and
+    later printable keys it does not use are named in the notice of keys not typed
+    (`ShopbeamApp.on_event`), as for a question."""
+
     BINDINGS = [Binding("escape,q,f1,question_mark", "close", "close")]
+    READ_TIME = 0.5  # seconds, as AnswerScreen.READ_TIME
+
+    def __init__(self) -> None:
+        super().__init__()
+        self.opened_at = _time.get_time()
 
     def compose(self) -> ComposeResult:
         width = min(96, self.app.size.width) - 8
