@@ -1075,3 +1075,28 @@ async def test_keys_typed_behind_f1_go_into_the_field_or_are_named(tmp_path):
         await pilot.press("escape")
         await settle(pilot)
         assert f.input.value == "Burst after help"
+
+
+@sync
+async def test_a_number_typed_slowly_with_no_field_picked_changes_no_view(tmp_path):
+    # "-250" at half a second a key right after F4 (the user thinks the value field is
+    # picked): the "-" goes nowhere, and the digits behind it are the same word, not three
+    # view switches; all four are named in the notice
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        assert app.job_screen.current == "loads"
+        for key in "-250":
+            await pilot.pause(0.5)
+            await burst(pilot, key)
+        await pilot.pause(0.6)
+        assert app.job_screen.current == "loads"
+        said = " ".join(n.message for n in app._notifications)
+        assert "Not typed anywhere" in said and all(d in said for d in "-250")
+        # a digit on its own, a while later, still switches views
+        await pilot.pause(1.1)
+        await burst(pilot, "2")
+        await settle(pilot)
+        assert app.job_screen.current == "span"

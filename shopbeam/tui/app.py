@@ -400,11 +400,13 @@ class JobScreen(Screen):
                                  if vid and time.monotonic() - at < self.STRAY_WAIT else "")
         self._stray += character
         self._stray_where = said
+        self._stray_at = time.monotonic()
         if self._stray_timer is not None:
             self._stray_timer.stop()
         self._stray_timer = self.set_timer(self.STRAY_WAIT, self._say_not_typed)
 
     _stray = ""
+    _stray_at = -1e9  # when the last key nothing took was typed (time.monotonic)
     _stray_where = ""
     _stray_timer = None
     _stray_after = ""
@@ -1360,6 +1362,14 @@ class ShopbeamApp(App):
                 # on from it ("F4 12 ft" in one burst): text, not a second switch; it is not
                 # used, and the user is told
                 self._text_after_switch = True
+                js.not_typed(event.character or "", focused or js)
+                return
+            if on_job and event.is_printable and not isinstance(focused, Input) and \
+                    event.key in VIEW_KEYS and \
+                    time.monotonic() - js._stray_at < Choice.WORD_GAP:
+                # a view key within WORD_GAP of a key nothing took: the same word typed on
+                # slowly ("-250" at half a second a key, no field picked), not three
+                # switches; it is not used, and the notice names it with the rest
                 js.not_typed(event.character or "", focused or js)
                 return
             if on_job and event.is_printable and after_switch and typed_on:
