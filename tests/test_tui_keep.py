@@ -1100,3 +1100,34 @@ async def test_a_number_typed_slowly_with_no_field_picked_changes_no_view(tmp_pa
         await burst(pilot, "2")
         await settle(pilot)
         assert app.job_screen.current == "span"
+
+
+@sync
+async def test_keys_behind_the_enter_that_opens_a_job_go_to_the_job(tmp_path):
+    # "search, Enter, Tab, type" in one burst (a fast typist, or one packet over SSH): the
+    # library had handled the Tab and the text while it closed, and they were lost
+    from shopbeam.tui.screens import LibraryScreen
+    app = make_app(cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        assert isinstance(app.screen, LibraryScreen)
+        await burst(pilot, "jib-arm" + "\r" + "\t" + "XYZ")
+        await settle(pilot)
+        await pilot.pause(0.3)
+        s = app.job_screen.session
+        assert s.name == "jib-arm"
+        assert s.doc.get("title") == "XYZ"  # the Tab reached the title, the text went in
+
+
+@sync
+async def test_keys_behind_an_enter_that_opens_nothing_stay_with_the_library(tmp_path):
+    from shopbeam.tui.screens import LibraryScreen
+    app = make_app(cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, "zzqqzz" + "\r" + "x")
+        await pilot.pause(0.8)
+        await settle(pilot)
+        assert isinstance(app.screen, LibraryScreen) and app._keys_after_open is None
+        from shopbeam.tui.widgets import Field
+        assert app.screen.query_one(Field).value == "zzqqzzx"

@@ -1164,6 +1164,8 @@ class JobScreen(Screen):
         tags = self.session.evaluation.job.tags if self.session.evaluation.job else ()
 
         def chosen(answer) -> None:
+            # keys typed behind the Enter that opened a job, held while the library closed
+            behind, self.app._keys_after_open = self.app._keys_after_open or [], None
             if not answer:
                 return
             what, path = answer
@@ -1171,9 +1173,17 @@ class JobScreen(Screen):
                 self.guard("open another job", lambda: self.open_path(path))
             elif what == "new":
                 self.guard("start a new job", self.new_job)
+            if behind:
+                self.call_next(self._replay_keys, behind)
 
         self.app.push_screen(LibraryScreen(self.session.library_dir, tags,
                                            highlight=highlight or self.session.path), chosen)
+
+    async def _replay_keys(self, keys) -> None:
+        """Keys that reached the library after it chose to open a job, in their order, as
+        if typed on the job (a Tab and text right behind Enter: the next field gets them)."""
+        for event in keys:
+            await self.key_behind(event)
 
     def open_path(self, path) -> None:
         try:
@@ -1219,6 +1229,7 @@ class ShopbeamApp(App):
     """The application: one job screen, with the library shown first when asked."""
 
     _last_key_at: float | None = None  # when the key before this one was made
+    _keys_after_open: list | None = None  # keys behind the library's Enter (see on_event)
     _last_text_at: float | None = None  # when the last printable key was made
 
     CSS_PATH = "app.tcss"
@@ -1274,6 +1285,19 @@ class ShopbeamApp(App):
             if js is not None and self.screen is js and event.text.strip():
                 js.not_typed(" ".join(event.text.split()), self.focused or js)
                 return
+        if isinstance(event, events.Key) and not event.is_forwarded \
+                and isinstance(self.screen, LibraryScreen):
+            if self._keys_after_open is not None:
+                # Enter was pressed to open a job, which happens once its message comes
+                # through: keys behind that Enter are for the job, held until it is open
+                # (`JobScreen._replay_keys`), or given back to the library if nothing opens
+                self._keys_after_open.append(event)
+                return
+            if event.key == "enter":
+                self._keys_after_open = []
+                # an Enter that opens nothing (a button, an empty list) must not hold the
+                # keys behind it for long: they go back to the library
+                self.set_timer(0.5, self._release_held_keys)
         if isinstance(event, events.Key) and not event.is_forwarded:
             self.app_focus = True
             self._key_count += 1
@@ -1390,6 +1414,12 @@ class ShopbeamApp(App):
     _text_after_switch = False  # the key before was text typed right behind a view switch
     _held_letter = None  # (key event, choice, timer): a letter on a choice, not yet a pick
     _picked = None  # (choice, value before, letter): the last pick by a letter, for a while
+
+    def _release_held_keys(self) -> None:
+        screen = self.screen
+        if self._keys_after_open is not None and isinstance(screen, LibraryScreen) \
+                and not screen.opening:
+            screen._give_back_keys()
 
     def _hold_letter(self, event, choice) -> None:
         timer = self.set_timer(Choice.ALONE, lambda: self._letter_behind(False))

@@ -9,7 +9,7 @@ import textwrap
 from pathlib import Path
 
 from rich.text import Text
-from textual import _time
+from textual import _time, events
 from textual.app import ComposeResult
 from textual.binding import Binding
 from textual.containers import Horizontal, Vertical, VerticalScroll
@@ -344,6 +344,7 @@ class LibraryScreen(Screen[object]):
 
     def __init__(self, library_dir=None, tags=(), highlight=None) -> None:
         super().__init__()
+        self.opening = False  # a job is being opened: the keys held behind Enter are its
         self.highlight = highlight
         self.library_dir = library_dir
         self.tags = tags
@@ -430,6 +431,8 @@ class LibraryScreen(Screen[object]):
             self.on_option_list_option_selected(
                 OptionList.OptionSelected(lst, lst.get_option_at_index(lst.highlighted),
                                           lst.highlighted))
+        else:
+            self._give_back_keys()  # nothing matched: nothing opens
 
     def action_move(self, step: int) -> None:
         """Up, down, page up and page down pick in the list, from the search field too."""
@@ -464,14 +467,28 @@ class LibraryScreen(Screen[object]):
             e = self.found[event.option_index]
             if e.problem:
                 self.notify(f"{e.label} cannot be opened: {e.problem}", severity="error")
+                self._give_back_keys()
                 return
-            self.dismiss(("open", e.path))
+            self.opening = True
+            self.dismiss(("open", e.path))  # the keys held since Enter go to the job
+            return
+        self._give_back_keys()
 
-    def action_back(self) -> None:
-        self.dismiss(None)
+    def _give_back_keys(self) -> None:
+        """Nothing opens after all: the keys held behind Enter (`ShopbeamApp.on_event`) are
+        the library's again, in their order."""
+        held, self.app._keys_after_open = self.app._keys_after_open, None
+        for event in held or ():
+            self.app.post_message(events.Key(event.key, event.character))
 
     def action_new(self) -> None:
+        self.app._keys_after_open = []  # keys from here on are for the new job
+        self.opening = True
         self.dismiss(("new", None))
+
+    def action_back(self) -> None:
+        self._give_back_keys()  # nothing held is lost: Esc goes back to the job as it was
+        self.dismiss(None)
 
     def action_duplicate(self) -> None:
         lst = self.query_one("#lib-list", OptionList)
