@@ -1131,3 +1131,21 @@ async def test_keys_behind_an_enter_that_opens_nothing_stay_with_the_library(tmp
         assert isinstance(app.screen, LibraryScreen) and app._keys_after_open is None
         from shopbeam.tui.widgets import Field
         assert app.screen.query_one(Field).value == "zzqqzzx"
+
+
+@sync
+async def test_braces_typed_with_a_thousands_comma_stay_one_entry_each(tmp_path):
+    # "1,200 mm, 2,400 mm" had been split at every comma and written as four entries the
+    # user never typed; each stays whole, and the reader's message says what to write
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        f = field(app, "span", "beam.braces")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "1,200 mm, 2,400 mm" + TAB)
+        await settle(pilot)
+        assert app.job_screen.session.doc.get("beam.braces") == ["1,200 mm", "2,400 mm"]

@@ -9,6 +9,7 @@ dialogs are in `screens.py`.
 
 from __future__ import annotations
 
+import re
 import textwrap
 import time
 from pathlib import Path
@@ -488,7 +489,10 @@ class JobScreen(Screen):
                      "beam.bearing"):
             s.set(key, raw or None)  # optional: emptied means left out
         elif key == "beam.braces":
-            s.set(key, [t.strip() for t in value.split(",") if t.strip()] or None)
+            # a comma between digit groups ("1,200 mm") is a thousands comma, not a new entry:
+            # the entry is kept whole, and the reader says what to write
+            parts = re.split(r"(?<!\d),|,(?!\d{3}(?:\D|$))", value)
+            s.set(key, [t.strip() for t in parts if t.strip()] or None)
         elif key in ("beam.members", "criteria.safety_factor"):
             s.set(key, _number_or_text(raw))
         elif key == "section.designation":
