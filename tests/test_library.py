@@ -328,3 +328,15 @@ def test_new_refuses_a_file_name_with_control_characters(tmp_path):
                          env={**os.environ, "PYTHONPATH": here})
     assert run.returncode == 2 and "control characters" in run.stderr
     assert list(tmp_path.iterdir()) == []
+
+
+def test_special_files_named_like_jobs_are_problem_rows_not_left_out(places):
+    # a FIFO or a folder named NAME.toml in the shop folder had been left out of the list
+    # without a word, then "no job named ..." with a wrong "did you mean"
+    shop, _ = places
+    if not hasattr(os, "mkfifo"):
+        pytest.skip("no FIFOs here")
+    os.mkfifo(shop / "pipe.toml")
+    (shop / "folder.toml").mkdir()
+    mine = {e.name: e for e in library.entries(shop) if e.origin == "shop"}
+    assert "named pipe" in mine["pipe"].problem and "folder" in mine["folder"].problem

@@ -175,8 +175,9 @@ def _outside_link(path: Path) -> str:
 
 
 def _files(folder: Path) -> list[Path]:
-    """Job files in a folder: regular files and links (checked when read), no dot files,
-    no FIFOs, devices or folders (lstat only: nothing is opened here)."""
+    """Job files in a folder: every NAME.toml that is not a dot file (lstat only: nothing
+    is opened here). A FIFO, device or folder of that name is listed too and refused when
+    read (`_read_entry`: a problem row), never opened and never left out unsaid."""
     import stat
 
     try:
@@ -191,7 +192,9 @@ def _files(folder: Path) -> list[Path]:
             mode = os.lstat(p).st_mode
         except OSError:
             continue
-        if stat.S_ISREG(mode) or stat.S_ISLNK(mode):
+        if stat.S_ISREG(mode) or stat.S_ISLNK(mode) or stat.S_ISFIFO(mode) \
+                or stat.S_ISCHR(mode) or stat.S_ISBLK(mode) or stat.S_ISSOCK(mode) \
+                or stat.S_ISDIR(mode):
             files.append(p)
     return sorted(files, key=lambda p: p.name.lower())
 
