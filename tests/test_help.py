@@ -46,3 +46,15 @@ def test_shapes_help_lists_the_kinds():
     r = subprocess.run([sys.executable, "-m", "shopbeam", "section", "--help"],
                        capture_output=True, text=True, timeout=60)
     assert "rect-tube" in r.stdout and "examples:" in r.stdout
+
+
+def test_an_unknown_option_is_said_with_the_commands_own_usage():
+    # the top-level usage lists no command's options; the command's usage does
+    import subprocess
+    import sys
+    from pathlib import Path
+    demo = Path(__file__).resolve().parents[1] / "presets" / "demo.toml"
+    run = subprocess.run([sys.executable, "-m", "shopbeam", "capacity", str(demo), "--nope"],
+                         capture_output=True, text=True)
+    assert run.returncode == 2 and "usage: shopbeam capacity" in run.stderr
+    assert "unrecognized arguments: --nope" in run.stderr

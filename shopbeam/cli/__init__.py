@@ -354,7 +354,13 @@ def main(argv: list[str] | None = None) -> int:
     commands = {a for a in parser._subparsers._group_actions[0].choices}  # noqa: SLF001
     if not argv or (argv[0] not in commands and not argv[0].startswith("-")):
         argv = ["ui"] + argv
-    args = parser.parse_args(argv)
+    args, extra = parser.parse_known_args(argv)
+    if extra:
+        # an option the command does not take: said with that command's own usage, which
+        # lists its options (the top-level usage does not)
+        chosen = parser._subparsers._group_actions[0].choices.get(  # noqa: SLF001
+            getattr(args, "command", None))
+        (chosen or parser).error(f"unrecognized arguments: {' '.join(extra)}")
     if not getattr(args, "func", None):
         parser.print_help()
         return EXIT_INPUT
