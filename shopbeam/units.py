@@ -256,7 +256,10 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
         # all numbers: suggest the whole text with a unit; else the first bare number
         shown = text.strip() if all(not u for _, u in terms) else \
             next(str(n) for n, u in terms if not u)
-        raise InputError(f"{text!r} has a bare number: give its unit (e.g. \"{shown} {unit_hint}\"); "
+        # a length is as often inches as feet (a rack beam's "96", a wheelbase's "8"): both
+        other = "in" if unit_hint == "ft" and kind in (None, "length") else None
+        eg = f"\"{shown} {unit_hint}\"" + (f" or \"{shown} {other}\"" if other else "")
+        raise InputError(f"{text!r} has a bare number: give its unit (e.g. {eg}); "
                          "shopbeam never guesses a unit", key)
     _mixed_fraction_slip(text, key)
     reg = ureg()

@@ -1065,3 +1065,11 @@ def test_a_line_load_or_couple_with_a_point_between_thousands_is_said_too(kind, 
     got = [w for w in parse_job_text(text).warnings if w.key == "loads[0].value"
            and "point between thousands" in w.message]
     assert bool(got) == warned
+
+
+def test_a_bare_length_suggests_feet_or_inches():
+    # a rack beam's "96" is inches as often as a span's "16" is feet: both are offered, so
+    # the fix the message gives is not the wrong unit
+    text = cantilever("36 in").replace('length = "36 in"', 'length = "96"')
+    msg = refused(text)[0].message
+    assert '"96 ft"' in msg and '"96 in"' in msg
