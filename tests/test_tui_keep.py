@@ -1149,3 +1149,26 @@ async def test_braces_typed_with_a_thousands_comma_stay_one_entry_each(tmp_path)
         await burst(pilot, CTRL_U + "1,200 mm, 2,400 mm" + TAB)
         await settle(pilot)
         assert app.job_screen.session.doc.get("beam.braces") == ["1,200 mm", "2,400 mm"]
+
+
+@sync
+async def test_notes_written_on_several_lines_show_on_one_and_keep_their_breaks(tmp_path):
+    # notes as a TOML multi-line string: the raw line break drew the second line over the
+    # Tags row; it is shown as a mark, and an edit keeps the breaks where they were
+    path = demo_copy(tmp_path)
+    text = path.read_text(encoding="utf-8").replace(
+        'notes = "Demo job. A building member: needs review by a licensed engineer."',
+        'notes = """Line one of the notes.\nLine two: bolts 3/4 A325."""')
+    path.write_text(text, encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "notes")
+        assert "\n" not in f.input.value and "\u23ce" in f.input.value
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        await burst(pilot, " Added.")
+        await settle(pilot)
+        assert app.job_screen.session.doc.get("notes") == \
+            "Line one of the notes.\nLine two: bolts 3/4 A325. Added."

@@ -35,7 +35,7 @@ from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, 
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
                                 WHEEL_WORDS, load_warnings, problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
-                                  update_text)
+                                  from_one_line, update_text)
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -476,9 +476,9 @@ class JobScreen(Screen):
         s = self.session
         raw = value.strip()
         if key == "title":
-            s.set("title", value)
+            s.set("title", from_one_line(value))
         elif key == "notes":
-            s.set("notes", value or None)
+            s.set("notes", from_one_line(value) or None)
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])
         elif key == "beam.length":

@@ -24,7 +24,7 @@ from shopbeam.cautions import cautions_for
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.members.wood import DURATIONS, TEMPERATURES
-from shopbeam.tui.widgets import Choice, Field, fit_text
+from shopbeam.tui.widgets import Choice, Field, fit_text, one_line
 
 # The design modules, the catalog, the materials and the drawings (numpy) are imported where
 # a view first needs them: the first screen (the job view) is drawn without them, and the
@@ -149,9 +149,9 @@ class JobView(View):
         doc = session.doc
         for f in self.fields():
             if f.key == "title":
-                f.set_value(doc.get("title", ""))
+                f.set_value(one_line(doc.get("title", "")))
             elif f.key == "notes":
-                f.set_value(doc.get("notes", ""))
+                f.set_value(one_line(doc.get("notes", "")))
             elif f.key == "tags":
                 tags = doc.get("tags", [])
                 f.set_value(", ".join(tags) if isinstance(tags, list) else str(tags))

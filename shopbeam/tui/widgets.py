@@ -32,6 +32,23 @@ OPTION_DIGITS = {"1": "inverted_exclamation_mark", "2": "trade_mark_sign", "3": 
 _DIGIT_OF = {name: digit for digit, name in OPTION_DIGITS.items()}
 
 
+# A line break in a text a one-line field shows (notes written as a multi-line string in the
+# file): shown as this mark, so the field draws on its own line and shows all of its text,
+# and turned back into the line break when the field is edited
+LINE_BREAK = "\u23ce"  # ⏎
+
+
+def one_line(text) -> str:
+    """`text` for a one-line field: each line break shown as LINE_BREAK."""
+    text = "" if text is None else str(text)
+    return text.replace("\r\n", "\n").replace("\n", LINE_BREAK)
+
+
+def from_one_line(text: str) -> str:
+    """What a one-line field's text stands for: each LINE_BREAK a line break again."""
+    return text.replace(LINE_BREAK, "\n")
+
+
 # Fields of free text, where the Option-layer characters of the digits are ordinary
 # characters (£ on a UK keyboard, § before a clause, º in "nº") and are typed, never read as
 # Esc-then-digit: a view key there is F2..F12 (or Esc, then the digit a moment later)
