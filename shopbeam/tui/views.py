@@ -561,7 +561,7 @@ class LoadsView(RowsView):
             yield Field("Start", "load.start", placeholder="e.g. 0 ft")
             yield Field("End", "load.end", placeholder="e.g. 12 ft")
             yield Field("Value", "load.value", placeholder="e.g. -300 lbf")
-            yield Field("Value at end", "load.value2", placeholder="e.g. -60 lbf/ft")
+            yield Field("End value", "load.value2", placeholder="e.g. -60 lbf/ft")
             yield Field("Width", "load.width", placeholder="psf width, e.g. 16 in")
             yield Field("Total", "load.total", placeholder="e.g. -700 lbf in all")
             yield Field("Label", "load.label", placeholder="what it is")
@@ -638,7 +638,7 @@ class LoadsView(RowsView):
                 f.display = shown.get(f.key, True)
                 if f.key == "load.value":
                     f.query_one(".field-label").update(
-                        "Value at start" if kind == "linear" else "Value")
+                        "Start value" if kind == "linear" else "Value")
         self.show_field_messages(session.evaluation, {
             "load.at": f"loads[{i}].at", "load.start": f"loads[{i}].start",
             "load.end": f"loads[{i}].end",
