@@ -362,3 +362,15 @@ def test_two_people_saving_the_same_opened_file_one_wins_one_is_told(tmp_path):
     assert sorted(outs) == ["CONFLICT", "SAVED"], outs
     winner = ("alice", "bob")[outs.index("SAVED")]
     assert target.read_text(encoding="utf-8") == winner + "\n"
+
+
+def test_a_saves_temp_file_is_born_with_the_saved_files_mode(tmp_path):
+    # born 0600 (mkstemp), a temp killed before its mode was set could not be opened, and so
+    # not tidied, by the folder's other members for an hour; it now starts with the mode the
+    # saved file gets (less the umask)
+    fd, tmp = storage._new_temp(tmp_path, "arm.toml", 0o664)
+    os.close(fd)
+    umask = os.umask(0)
+    os.umask(umask)
+    assert os.stat(tmp).st_mode & 0o777 == 0o664 & ~umask
+    assert os.path.basename(tmp).startswith(".arm.toml.") and tmp.endswith(".saving")

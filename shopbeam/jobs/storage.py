@@ -28,8 +28,8 @@ import difflib
 import hashlib
 import os
 import re
+import secrets
 import stat
-import tempfile
 import time
 from contextlib import contextmanager
 from dataclasses import dataclass
@@ -429,8 +429,7 @@ def atomic_write(path: str | os.PathLike, text: str | bytes) -> Fingerprint:
     mode, group = _new_file_mode(p, folder)
     with locked(p):
         try:
-            fd, tmp = tempfile.mkstemp(dir=folder, prefix=f"{_TEMP_PREFIX}{p.name}.",
-                                       suffix=_TEMP_SUFFIX)
+            fd, tmp = _new_temp(folder, p.name, mode)
         except PermissionError as e:
             shown = f" (the name is a link to {p})" if p != Path(path) else ""
             raise InputError(f"cannot save: the folder {folder} is not writable for you"
@@ -467,6 +466,22 @@ def atomic_write(path: str | os.PathLike, text: str | bytes) -> Fingerprint:
     _fsync_dir(folder)
     st = os.stat(p)
     return _fingerprint_bytes(data, st)
+
+
+def _new_temp(folder: Path, name: str, mode: int) -> tuple[int, str]:
+    """A new temp file beside `name`, created with the saved file's own mode (less the
+    umask) rather than 0600: killed before its mode is set, the temp can still be opened, and
+    so tidied, by the folder's other members (`clean_stale_temps` must open it to see that no
+    save holds it)."""
+    flags = os.O_RDWR | os.O_CREAT | os.O_EXCL | getattr(os, "O_NOFOLLOW", 0) \
+        | getattr(os, "O_CLOEXEC", 0)
+    for _ in range(100):
+        tmp = os.path.join(folder, f"{_TEMP_PREFIX}{name}.{secrets.token_hex(4)}{_TEMP_SUFFIX}")
+        try:
+            return os.open(tmp, flags, mode & 0o7777), tmp
+        except FileExistsError:
+            continue
+    raise FileExistsError(f"no free temp name beside {name} in {folder}")
 
 
 def clean_stale_temps(folder: str | os.PathLike, older_than: float = 0.0) -> list[Path]:
