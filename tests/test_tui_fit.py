@@ -207,3 +207,17 @@ def test_the_summary_in_sight_while_typing_keeps_not_rated_at_any_width(width):
     assert len(verdict) <= width and "NOT RATED" in verdict
     if width >= 78:
         assert "fatigue" in verdict
+
+
+def test_the_summary_says_not_rated_for_a_rack_with_no_impact():
+    # a hold that is no limit state left unchecked (ANSI MH16.1's impact, from memory, not
+    # given) still reaches the line in sight while typing, not only the Rating view
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = (PRESETS / "pallet-rack-beam-pair.toml").read_text().replace('impact = "25%"', "")
+    r = analyze(parse_job_text(text))
+    assert r.ok and not r.blocking
+    assert "NOT RATED" in drawing.summary_line(r, 78).splitlines()[0]
+    rated = analyze(parse_job_text((PRESETS / "pallet-rack-beam-pair.toml").read_text()))
+    assert "NOT RATED" not in drawing.summary_line(rated, 78)

@@ -306,10 +306,9 @@ def verdict_line(result) -> str:
         if gaps:
             but += (f" - BUT {len(gaps)} limit state(s) NOT CHECKED (no rating): "
                     + "; ".join(result.blocking))
-        holds = getattr(result.job, "holds", ())
-        if holds:
-            but += (f" - NOT RATED: {len(holds)} input problem(s), each named beside its "
-                    "field")
+        other = other_gaps(result)
+        if other:
+            but += f" - NOT RATED: {len(other)} reason(s), named in the Rating view"
         return (f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} "
                 f"(used {g.ratio:.0%}){but}")
     fails = [c.name for c in result.checks if not c.ok]
@@ -322,6 +321,23 @@ def selfchecks_text(result) -> str:
     for d in result.solution.diagnostics:
         out.append(f"[{'pass' if d.ok else 'WARN'}] {d.name}: {d.detail}")
     return "\n".join(out)
+
+
+def other_gaps(result) -> list[str]:
+    """Why no rating may be posted, besides the limit states not checked and the loads that
+    point up (the verdict names those): an input problem that holds the rating, a rack with
+    no impact, a job that reads like a lifting device... (`capacity.rating_gaps`)."""
+    from shopbeam.design.capacity import rating_gaps  # noqa: PLC0415 - design on demand
+    from shopbeam.design.checks import strengths  # noqa: PLC0415
+
+    job = result.job
+    try:
+        gaps = rating_gaps(job, strengths(job, beam=result.solution.beam))
+    except Exception:  # noqa: BLE001 - the Rating view says it in full; never a crash here
+        return []
+    named = [u.name for u in result.unchecked if u.blocks_rating]
+    return [g for g in gaps if not g.startswith("load(s) push UP")
+            and not any(g.startswith(f"{n} not checked") for n in named)]
 
 
 def summary_line(result, width: int = 0, tail: str = "") -> str:
@@ -345,13 +361,13 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
         # NOT RATED stay in sight, shortened, never dropped
         g, up = result.governing, getattr(result.job, "upward", ())
         gaps = [u for u in result.unchecked if u.blocks_rating]
-        holds = getattr(result.job, "holds", ())
-        # what holds the rating: limit states not checked, input problems (each named beside
-        # its field)
+        other = other_gaps(result)
+        # what holds the rating: limit states not checked, and other reasons (input problems,
+        # a rack with no impact...: named in full in the Rating view)
         names = "; ".join(x for x in (
             f"not checked: {'; '.join(result.blocking)}" if result.blocking else "",
-            f"{len(holds)} input problem(s)" if holds else "") if x)
-        gaps = gaps + list(holds)
+            f"{len(other)} other reason(s)" if other else "") if x)
+        gaps = gaps + list(other)
         no = (" - NOT RATED" if gaps else "")
         short = ([f"PASS, ratio {g.ratio:.2f} - BUT {len(up)} load(s) point UP: check the "
                   f"signs{no}", f"PASS {g.ratio:.2f} - BUT {len(up)} load(s) point UP{no}",
