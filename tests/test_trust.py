@@ -277,3 +277,18 @@ def test_a_floor_member_names_walking_vibration_as_not_checked_and_stays_rated()
     assert "floor vibration under walking" not in [u.name for u in analyze(lofty).unchecked]
     loft = replace(shelf, title="Loft over the paint booth")  # a member not lifting: read
     assert "floor vibration under walking" in [u.name for u in analyze(loft).unchecked]
+
+
+def test_the_report_verdict_says_not_rated_when_the_rating_is_held():
+    # all checks pass, but a rack beam with no impact given (ANSI MH16.1, from memory) is
+    # not rated: the report's verdict line says so, not only the cautions
+    from pathlib import Path
+
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.output.present import present
+
+    presets = Path(__file__).resolve().parents[1] / "presets"
+    text = (presets / "pallet-rack-beam-pair.toml").read_text()
+    held = present(analyze(parse_job_text(text.replace('impact = "25%"', ""))))
+    assert held.verdict.startswith("all checks PASS, but NOT RATED")
+    assert present(analyze(parse_job_text(text))).verdict == "all checks PASS"
