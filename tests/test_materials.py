@@ -354,3 +354,20 @@ def test_sizing_a_european_kind_from_an_astm_job_sweeps_s235():
     for kind in ("IPE", "RHS", "W", "HSS"):
         swept, note = material_for_kind(s355, kind)
         assert swept.material.key == "S355" and note == "", kind
+
+
+@pytest.mark.parametrize("section, usual", [("PIPE4STD", "A53-B"),
+                                            ("rect-tube 3 x 2 x 11ga", "A513")])
+def test_a_european_grade_on_pipe_or_mechanical_tube_is_not_rated_past_its_own_grade(
+        section, usual):
+    # pipe is bought to A53 Gr B (35 ksi) and mechanical tube to A513 (about 30 ksi), AISC
+    # Manual Table 2-4 and ASTM, from memory: S355 there credited 355 MPa (+73 %)
+    from shopbeam.design.capacity import capacity
+    from shopbeam.design.sizing import material_for_kind
+    from shopbeam.jobs.jobfile import parse_job_text
+    job = parse_job_text(simple_span(f'section = "{section}"\nmaterial = "S355"', 6))
+    assert any(usual in p.message for p in job.warnings if p.key == "beam.material")
+    assert any(usual in w for w in capacity(job).not_rated)
+    kind = "PIPE" if usual == "A53-B" else "mech-tube"
+    swept, note = material_for_kind(job, kind)
+    assert swept.material.key == usual and usual in note

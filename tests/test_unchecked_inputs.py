@@ -332,6 +332,7 @@ def _floor(tags: str, criteria: str) -> str:
     ('["mezzanine"]', 'deflection = "L/240"\nlive_deflection = "L/480"', False),  # as written
     ('["roof", "joist"]', 'deflection = "L/240"', False),
     ('["shelf"]', 'deflection = "L/240"', False),
+    ('["rack", "deck"]', 'deflection = "L/240"', False),  # a rack's decking is no floor
 ])
 def test_a_floor_job_is_checked_for_live_load_deflection_at_l_over_360(tags, criteria, live):
     job = parse_job_text(_floor(tags, criteria))

@@ -274,6 +274,8 @@ FAMILY_DEFAULTS = {"lumber": "DF-L-2", "LVL": "LVL-2.0E", "W": "A992", "WT": "A9
                    "IPE": "S235", "HEA": "S235", "HEB": "S235", "UPN": "S235", "SHS": "S235",
                    "RHS": "S235", "CHS": "S235"}
 EN_KINDS = frozenset({"IPE", "HEA", "HEB", "UPN", "SHS", "RHS", "CHS"})
+# kinds an EN structural grade (S235...) is not bought in: their own product grades
+EN_PRODUCT_GAPS = frozenset({"PIPE", "mech-tube", "mech-round"})
 
 
 # Kinds made of tube or pipe (A500, A53, A513 grades); every other steel kind is rolled
@@ -302,8 +304,12 @@ def usual_grade(material, kind: str):
     if getattr(material, "kind", "") != "steel" or kind in ("lumber", "LVL"):
         return None
     key = getattr(material, "key", "")
-    if key in EN_GRADES:  # made as rolled sections, plate and hollow sections alike
-        return None
+    if key in EN_GRADES:
+        # made as rolled sections, plate and structural hollow sections alike, but not as
+        # mechanical tube (A513) or pipe (A53): those are swept in their own grade
+        if kind not in EN_PRODUCT_GAPS:
+            return None
+        return get_material(FAMILY_DEFAULTS[kind])
     tube_grade = getattr(material, "hss_wall_factor", None) is not None
     if kind in EN_KINDS:
         want = FAMILY_DEFAULTS[kind]

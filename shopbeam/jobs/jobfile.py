@@ -1824,8 +1824,10 @@ def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length) ->
     L/240 total alone can pass a floor that bounces past L/360 under the people and stock on
     it. Under gravity loads a total limit of L/360 or stricter covers the live one."""
     normal = {normal_tag(t) for t in tags}
+    # a rack's or a shelf's "deck" is its decking, and a lifting device is no floor
     if (criteria.live_deflection_ratio is not None or length is None or "roof" in normal
-            or not FLOOR_TAGS.intersection(normal)):
+            or not FLOOR_TAGS.intersection(normal) or (RACK_TAGS | SHELF_TAGS).intersection(normal)
+            or is_lifting(tags, criteria.lifting)):
         return criteria
     ratio, shown = _ratio_of(criteria, supports, length)
     live = LIVE_DEFLECTION_PRESETS["floor"]
@@ -2509,6 +2511,15 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                f"{units.fmt(material.fy, 'stress', system)}, which an S235 section does not "
                "have. Write the mill cert's grade: material = \"S235\", \"S275\" or "
                "\"S355\" (EN 10025-2 / EN 10219-1, from memory)", where)
+    elif mkind == "steel" and key in EN_GRADES and (
+            shape == "pipe" or catalog.kind_of(section) in ("mech-tube", "mech-round")):
+        usual = "A53-B" if shape == "pipe" else "A513"
+        product = ("pipe, made to ASTM A53 (Gr B, Fy 35 ksi)" if shape == "pipe" else
+                   "mechanical tube, made to ASTM A513 (as-welded, Fy about 30 ksi)")
+        r.warn(f"material {key!r} is a European structural grade, but section "
+               f"{section.designation!r} is {product} (AISC Manual Table 2-4 and ASTM, from "
+               f"memory): the check credits {units.fmt(material.fy, 'stress', system)}. Write "
+               f"material = \"{usual}\", or the grade on the mill cert", where)
     elif mkind == "steel" and getattr(material, "hss_wall_factor", None) is not None \
             and shape not in _TUBES + ("custom",):
         bought = ("A992 (W shapes) or A36 / A572-50 (S, C, MC, angles, tees, plate and bar)")
