@@ -1172,3 +1172,30 @@ async def test_notes_written_on_several_lines_show_on_one_and_keep_their_breaks(
         await settle(pilot)
         assert app.job_screen.session.doc.get("notes") == \
             "Line one of the notes.\nLine two: bolts 3/4 A325. Added."
+
+
+@sync
+async def test_keys_behind_the_library_enter_never_edit_the_unsaved_job_left(tmp_path):
+    # with unsaved changes the question comes first: the keys typed behind the Enter had
+    # been replayed into the OLD job's fields (and a later "s" saved them over its file)
+    from shopbeam.tui.screens import LibraryScreen
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "notes")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, " EDIT")
+        notes_before = f.input.value
+        await burst(pilot, "\x0f")  # ctrl+o
+        await settle(pilot)
+        assert isinstance(app.screen, LibraryScreen)
+        await pilot.pause(0.3)
+        await burst(pilot, "jib-arm" + "\r" + "\t" + "NEWTITLE")
+        await settle(pilot)
+        await pilot.pause(0.6)
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        assert f.input.value == notes_before  # the old job's field untouched
+        said = " ".join(n.message for n in app._notifications)
+        assert "Not typed anywhere" in said and "NEWTITLE" in said

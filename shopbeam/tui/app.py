@@ -1173,15 +1173,34 @@ class JobScreen(Screen):
             if not answer:
                 return
             what, path = answer
+            if behind and self.session.dirty:
+                # a question about the unsaved job comes first: keys typed behind the Enter
+                # were meant for the job to open, never for this one (nor as the answer):
+                # not used, and said
+                self._not_replayed(behind)
+                behind = []
+
+            def opened(ok: bool) -> None:
+                if not behind:
+                    return
+                if ok:
+                    self.call_next(self._replay_keys, behind)
+                else:
+                    self._not_replayed(behind)
+
             if what == "open":
-                self.guard("open another job", lambda: self.open_path(path))
+                self.guard("open another job", lambda: opened(self.open_path(path)))
             elif what == "new":
-                self.guard("start a new job", self.new_job)
-            if behind:
-                self.call_next(self._replay_keys, behind)
+                self.guard("start a new job", lambda: (self.new_job(), opened(True)))
 
         self.app.push_screen(LibraryScreen(self.session.library_dir, tags,
                                            highlight=highlight or self.session.path), chosen)
+
+    def _not_replayed(self, keys) -> None:
+        """Keys held behind the library's Enter that go to no job: named as not typed."""
+        for event in keys:
+            if event.is_printable and event.character:
+                self.not_typed(event.character, self)
 
     async def _replay_keys(self, keys) -> None:
         """Keys that reached the library after it chose to open a job, in their order, as
@@ -1189,14 +1208,15 @@ class JobScreen(Screen):
         for event in keys:
             await self.key_behind(event)
 
-    def open_path(self, path) -> None:
+    def open_path(self, path) -> bool:
         try:
             session = Session.open(path, library_dir=self.session.library_dir)
         except InputError as exc:
             self.notify(f"cannot open: {exc}", severity="error", timeout=10)
-            return
+            return False
         self.set_session(session)
         self.notify(f"Opened {session.label}")
+        return True
 
     def new_job(self) -> None:
         session = Session.new(library_dir=self.session.library_dir)
