@@ -1199,3 +1199,36 @@ async def test_keys_behind_the_library_enter_never_edit_the_unsaved_job_left(tmp
         assert f.input.value == notes_before  # the old job's field untouched
         said = " ".join(n.message for n in app._notifications)
         assert "Not typed anywhere" in said and "NEWTITLE" in said
+
+
+@sync
+async def test_editing_keys_typed_on_into_a_question_or_the_key_list_edit_the_field(tmp_path):
+    # Backspace and Tab typed on (within a second of the last letter) had gone to the dialog
+    # or the key list and been dropped, while the letters around them were typed: the text
+    # came out rewritten ("abcxy" for "abcy"); and Enter typed on pressed the dialog's
+    # focused "Save" button
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "abcx" + "\x11")  # ctrl+q: the question opens
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        await pilot.pause(0.7)  # past READ_TIME, within a second of the "x"
+        await burst(pilot, "\x7f" + "y")  # Backspace, y
+        await pilot.pause(0.8)
+        assert type(app.screen).__name__ == "ConfirmScreen" and app.is_running
+        assert f.input.value == "abcy"
+        await burst(pilot, "\r")  # Enter within a second of the "y": no button pressed
+        await pilot.pause(0.8)
+        assert app.is_running and app.job_screen.session.dirty
+        await pilot.press("escape")
+        await settle(pilot)
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        # the key list: Backspace in the burst behind F1 edits the field
+        await burst(pilot, "z" + "\x1bOP" + "\x7f" + "w")
+        assert type(app.screen).__name__ == "HelpScreen"
+        assert f.input.value == "abcyw"

@@ -1361,12 +1361,13 @@ class ShopbeamApp(App):
             focused = self.focused
             js = getattr(self, "job_screen", None)
             on_job = js is not None and self.screen is js
-            if js is not None and isinstance(self.screen, HelpScreen) and event.is_printable:
+            if js is not None and isinstance(self.screen, HelpScreen) \
+                    and event.key not in ("escape", "f1"):
                 help_ = self.screen
                 if getattr(event, "time", help_.opened_at) < help_.opened_at + help_.READ_TIME:
-                    await js.key_behind(event)  # typed on before the key list was read
-                    return
-                if event.key not in ("q", "question_mark"):
+                    await js.key_behind(event)  # typed on before the key list was read:
+                    return  # text, Backspace and Tab do in the field what they would have
+                if event.is_printable and event.key not in ("q", "question_mark"):
                     js.not_typed(event.character or "", js)  # the key list takes no text
                     return
             if js is not None and isinstance(self.screen, AnswerScreen):

@@ -120,6 +120,9 @@ class AnswerScreen(ModalScreen[str]):
     (`JobScreen.key_behind`), as if the dialog had come after them."""
 
     READ_TIME = 0.5  # seconds: shorter than anyone reads a question and answers it
+    # no button has the focus: Enter (or Tab, Enter) typed on from a field must never press
+    # one ("Save", "Discard and quit"); the letters and Esc answer
+    AUTO_FOCUS = None
     # A letter that answers is a key pressed on its own: one that comes within WORD_GAP of
     # the printable key before it, or has another key within ALONE behind it, is part of a
     # word being typed (a slow link delivers a word typed before the question could be seen
@@ -144,10 +147,10 @@ class AnswerScreen(ModalScreen[str]):
             return False
         if getattr(event, "time", self.opened_at) < self.opened_at + self.READ_TIME:
             return True
+        if gap is not None and gap < self.WORD_GAP:
+            return True  # typed on: a letter, Backspace, Tab or Enter of the word goes behind
         if not event.is_printable:
             return False
-        if gap is not None and gap < self.WORD_GAP:
-            return True
         return event.key not in self.answers()
 
     def answers(self) -> dict[str, str]:
