@@ -431,3 +431,12 @@ def test_a_safety_factor_with_a_slipped_decimal_point_is_refused(sf, refused, wa
         return
     job = parse_job_text(text)
     assert bool(warnings(job, "criteria.safety_factor")) == warned
+
+
+def test_a_small_load_in_the_jobs_own_unit_is_what_it_says():
+    # a 2 lbf load sign on a beam carrying 4,000 lbf, both typed in lbf: no unit slip
+    loads = ('[[loads]]\ntype = "point"\nat = "1.5 ft"\nvalue = "-4000 lbf"\n'
+             '[[loads]]\ntype = "point"\nat = "1 ft"\nvalue = "-2 lbf"\ncase = "dead"\n')
+    job = parse_job_text(span(W8 + "\nbraced = true", "", loads))
+    assert not [p for p in job.warnings if "unit slip" in p.message]
+    assert capacity(job).rated

@@ -1510,12 +1510,28 @@ TINY_RATIO = 1000.0
 NEXT_TO_NOTHING = 1e-5  # N in all (a milligram's weight): no shop load, whatever the rest
 
 
-def _tiny_loads(r: _Reader, loads: list[Load], system: str) -> None:
-    """Hold the rating on a force load a thousand times smaller than the job's largest and
-    under about 1 kg in all: a dead one left 1000 x too small raises the posted figure, a live
-    one 1000 x too small gets a multiple of next to nothing posted."""
+def _unit_typed(raw_loads, ld) -> str:
+    """The unit a load's value was typed in ("kn/m", "lbf"), lower case; "" if not known."""
+    try:
+        i = int(ld.key[ld.key.index("[") + 1:-1])
+        v = raw_loads[i].get("value", raw_loads[i].get("total"))
+    except (ValueError, IndexError, AttributeError, TypeError):
+        return ""
+    v = v[-1] if isinstance(v, list) and v else v
+    m = re.match(r"\s*[-+\u2212]?[\d.,/\s]*(.*)$", v) if isinstance(v, str) else None
+    return re.sub(r"\s+", "", m.group(1)).lower() if m else ""
+
+
+def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
+    """Hold the rating on a force load a thousand times smaller than the job's largest, under
+    about 1 kg in all and typed in another unit than that largest one (N beside kN): a dead
+    one left 1000 x too small raises the posted figure, a live one 1000 x too small gets a
+    multiple of next to nothing posted. A small load in the job's own unit (a 2 lbf sign on
+    a 4,000 lbf beam) is what it says."""
+    raw_loads = raw_loads if isinstance(raw_loads, list) else []
     sized = [(abs(ld.total_force), ld) for ld in loads if ld.kind != "moment"]
     big = max((f for f, _ in sized), default=0.0)
+    big_unit = next((_unit_typed(raw_loads, ld) for f, ld in sized if f == big), "")
     for f, ld in sized:
         if 0 < f < NEXT_TO_NOTHING:
             name = f" ({ld.label})" if ld.label else ""
@@ -1524,7 +1540,8 @@ def _tiny_loads(r: _Reader, loads: list[Load], system: str) -> None:
                    "it, or remove the load; no rating is posted while it stands",
                    f"{ld.key}.value", f"{ld.key}{name} is next to nothing ({f:.3g} N): most "
                    "likely a slip. Fix it or remove it")
-        elif 0 < f < TINY_FORCE and f * TINY_RATIO < big:
+        elif 0 < f < TINY_FORCE and f * TINY_RATIO < big \
+                and _unit_typed(raw_loads, ld) != big_unit:
             name = f" ({ld.label})" if ld.label else ""
             r.hold(f"this load{name} comes to {units.fmt(f, 'force', system)} in all, under "
                    f"1/{TINY_RATIO:g} of the job's largest load "
@@ -2966,7 +2983,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _twice(r, raw_loads)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
-    _tiny_loads(r, loads, system)
+    _tiny_loads(r, loads, raw_loads, system)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
     _family_mismatch(r, section, material, system)
     _thickness_range(r, section, material, welded, system)
