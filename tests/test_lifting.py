@@ -570,3 +570,21 @@ def test_a_monorail_hoist_placed_away_from_mid_span_is_not_rated(at, rated):
     res = capacity(moved)
     assert res.rated == rated
     assert any("hoist" in w and "travels" in w for w in res.not_rated) == (not rated)
+
+
+def test_a_hoist_at_an_end_stop_or_mid_span_of_a_second_span_is_not_held_for_its_place():
+    # worst places, common practice: a jib's hoist at its end stop up to a foot inside the
+    # tip; a continuous monorail's at the middle of a span
+    from pathlib import Path
+    jib = (Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml").read_text()
+    job = parse_job_text(jib)
+    hook = next(ld for ld in job.loads if ld.kind == "point" and ld.case == "live")
+    tip_in = round(hook.at / 0.0254)
+    stop = parse_job_text(jib.replace(f'at = "{hook.at / 0.3048:g} ft"',
+                                      f'at = "{tip_in - 10} in"'))
+    assert not any("hoist" in w and "travels" in w for w in capacity(stop).not_rated)
+    two = _member() + '[[supports]]\nat = "8 ft"\ntype = "roller"\n'
+    for at, held in (("12 ft", False), ("10 ft", True)):
+        res = capacity(parse_job_text(two + f'[[loads]]\ntype = "point"\nat = "{at}"\n'
+                                            'value = "-2000 lbf"\n'))
+        assert any("hoist" in w and "travels" in w for w in res.not_rated) == held, at

@@ -1920,12 +1920,15 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     if ld is None:
         return
     held = sorted(s.at for s in supports if s.takes_force)
-    jib = "jib" in name
-    if jib and held and ld.at >= held[-1] + 0.9 * (length - held[-1]):
-        return  # at the end of the reach (an end stop short of the tip)
-    if not jib and len(held) == 2 and abs(ld.at - (held[0] + held[1]) / 2) <= \
-            0.01 * (held[1] - held[0]):
-        return  # at mid-span of a single span
+    # a jib by its profile, or named so (a knee-braced jib held at two places is guessed a
+    # monorail, but its hoist still runs out along the boom)
+    jib = "jib" in name or "jib" in {normal_tag(t) for t in tags}
+    reach = length - held[-1] if held else 0.0
+    if jib and held and ld.at >= held[-1] + min(0.9 * reach, reach - 0.305):
+        return  # at the end of the reach (an end stop up to a foot short of the tip)
+    if not jib and any(abs(ld.at - (a + b) / 2) <= 0.01 * (b - a)
+                       for a, b in zip(held, held[1:])):
+        return  # at the middle of a span
     at = units.fmt(ld.at, "length", system)
     worst = "the end stop" if jib else "mid-span"
     device = "jib boom" if jib else "monorail"
