@@ -489,3 +489,17 @@ def test_one_kind_read_alone_matches_the_whole_index(kind):
     whole = [(e.designation, e.section().ix, e.section().sx, e.section().area)
              for e in catalog._index()[1][kind]]
     assert alone == whole and len(alone) > 0
+
+
+def test_the_section_printout_lists_only_dimensions():
+    # the tube's corner-radius flag (r_given) is kept with its dimensions for the checks; it
+    # had been printed as a length ("r_given 39.37 in") and put among the JSON dimensions
+    import subprocess
+    import sys
+    for name in ("SHS100x100x5", "square-tube 2 x 11ga"):
+        out = subprocess.run([sys.executable, "-m", "shopbeam", "section", name],
+                             capture_output=True, text=True)
+        js = subprocess.run([sys.executable, "-m", "shopbeam", "section", name, "--json"],
+                            capture_output=True, text=True)
+        assert out.returncode == 0 and "r_given" not in out.stdout
+        assert js.returncode == 0 and "r_given" not in js.stdout

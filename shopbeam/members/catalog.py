@@ -1028,6 +1028,8 @@ def section_report(sec: Section, system: str = "us") -> str:
                      " (steel at 7850 kg/m^3; the job's material sets it)")
     dim_lines = []
     for k, v in sec.dims.items():
+        if isinstance(v, bool):  # a flag kept with the dimensions (r_given), not a length
+            continue
         if k in ("h_t", "b_t", "D_t", "h_tw", "bf_2tf", "d_tw", "tan_alpha"):
             dim_lines.append(f"{k} {v:.3g}")
         elif k in ("iz", "iw"):  # principal-axis moments of inertia
@@ -1060,7 +1062,8 @@ def section_json(sec: Section) -> dict:
         "sx_bot": sec.sx_bot, "zx": sec.zx, "iy": sec.iy, "sy": sec.sy, "zy": sec.zy,
         "rx": sec.rx, "ry": sec.ry, "j": sec.j, "cw": sec.cw, "shear_area": sec.shear_area,
         "depth": sec.depth, "mass_per_length": sec.mass_per_length,
-        "dims": {k: v for k, v in sec.dims.items()}, "source": sec.source,
+        "dims": {k: v for k, v in sec.dims.items() if not isinstance(v, bool)},
+        "source": sec.source,
         "warnings": list(sec.warnings), "cautions": [SHORT],
     }
 
