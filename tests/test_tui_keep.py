@@ -1232,3 +1232,16 @@ async def test_editing_keys_typed_on_into_a_question_or_the_key_list_edit_the_fi
         await burst(pilot, "z" + "\x1bOP" + "\x7f" + "w")
         assert type(app.screen).__name__ == "HelpScreen"
         assert f.input.value == "abcyw"
+
+
+@sync
+async def test_a_pound_sign_in_the_library_search_is_typed(tmp_path):
+    # the library has no views: "£" there had dropped the focus and every key behind it
+    from shopbeam.tui.screens import LibraryScreen
+    from shopbeam.tui.widgets import Field
+    app = make_app(cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        assert isinstance(app.screen, LibraryScreen)
+        await burst(pilot, "ab£c")
+        assert app.screen.query_one(Field).value == "ab£c"

@@ -97,7 +97,9 @@ class FieldInput(Input):
                 target.post_message(events.Key(event.key, event.character))
             return
         digit = _DIGIT_OF.get(event.key)
-        if digit is not None and not self._free_text():
+        # as a view key only on a screen of views (the library search, a save-as name: text)
+        if digit is not None and not self._free_text() \
+                and hasattr(self.screen, "action_view_key"):
             event.stop()
             event.prevent_default()
             self.screen.set_focus(None)
