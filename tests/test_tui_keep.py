@@ -1245,3 +1245,21 @@ async def test_a_pound_sign_in_the_library_search_is_typed(tmp_path):
         assert isinstance(app.screen, LibraryScreen)
         await burst(pilot, "ab£c")
         assert app.screen.query_one(Field).value == "ab£c"
+
+
+@sync
+async def test_a_return_symbol_typed_in_a_one_line_title_stays_a_character(tmp_path):
+    path = demo_copy(tmp_path)
+    text = path.read_text(encoding="utf-8").replace(
+        'title = "Loft beam over the saw bay, with stair overhang"', 'title = "Press ⏎ to open"')
+    path.write_text(text, encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        await burst(pilot, "!")
+        await settle(pilot)
+        assert app.job_screen.session.doc.get("title") == "Press ⏎ to open!"

@@ -475,10 +475,12 @@ class JobScreen(Screen):
     def apply_edit(self, key: str, value: str, row: int = 0) -> None:
         s = self.session
         raw = value.strip()
-        if key == "title":
-            s.set("title", from_one_line(value))
-        elif key == "notes":
-            s.set("notes", from_one_line(value) or None)
+        if key in ("title", "notes"):
+            # the marks stand for line breaks only in a text that had them (a ⏎ typed into
+            # a one-line text is a character of it)
+            was = s.doc.get(key, "")
+            text = from_one_line(value) if isinstance(was, str) and "\n" in was else value
+            s.set(key, text if key == "title" else (text or None))
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])
         elif key == "beam.length":
