@@ -1263,3 +1263,23 @@ async def test_a_return_symbol_typed_in_a_one_line_title_stays_a_character(tmp_p
         await burst(pilot, "!")
         await settle(pilot)
         assert app.job_screen.session.doc.get("title") == "Press ⏎ to open!"
+
+
+@sync
+async def test_a_braces_problem_is_shown_beside_the_braces_field(tmp_path):
+    # "1,5 ft" (a decimal comma) stays one entry, and its problem (an element of the list,
+    # beam.braces[0]) is beside the field that holds the list, not only in the summary
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        f = field(app, "span", "beam.braces")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "1,5 ft, 8 ft" + TAB)
+        await settle(pilot)
+        await pilot.pause(0.3)
+        assert app.job_screen.session.doc.get("beam.braces") == ["1,5 ft", "8 ft"]
+        shown = str(f.query_one(".field-msg").render())
+        assert "comma" in shown

@@ -491,9 +491,9 @@ class JobScreen(Screen):
                      "beam.bearing"):
             s.set(key, raw or None)  # optional: emptied means left out
         elif key == "beam.braces":
-            # a comma between digit groups ("1,200 mm") is a thousands comma, not a new entry:
-            # the entry is kept whole, and the reader says what to write
-            parts = re.split(r"(?<!\d),|,(?!\d{3}(?:\D|$))", value)
+            # a comma between digits ("1,200 mm", "1,5 ft") is inside a number, not a new
+            # entry: the entry is kept whole, and the reader says what to write
+            parts = re.split(r"(?<!\d),|,(?!\d)", value)  # "1,5 ft" stays whole too
             s.set(key, [t.strip() for t in parts if t.strip()] or None)
         elif key in ("beam.members", "criteria.safety_factor"):
             s.set(key, _number_or_text(raw))
