@@ -117,7 +117,8 @@ def cmd_new(args) -> int:
     if re.search(r"[\x00-\x1f\x7f-\x9f\u202a-\u202e\u2066-\u2069]", target.name):
         raise InputError(f"the file name {shown(target.name)} holds control characters (a "
                          "line break, an escape or a direction mark), which would hide or "
-                         "garble it in listings: give a plain name", key="--to")
+                         "garble it in listings: give a plain name",
+                         key="--to" if to is not None else "NAME")
     title = args.title or storage.suggest_name(Path(name).stem).replace("-", " ").capitalize()
     tags = [t.strip() for t in (args.tags or "").split(",") if t.strip()]
     storage.save_text(target, new_job_text(title, tags=tags), None, overwrite=args.overwrite)

@@ -1257,7 +1257,9 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
         w = max(spans, key=lambda s: s["demand"] / s["limit"] if s["limit"] > 0 else 0.0)
         out.append(Check("live deflection", w["demand"], w["limit"], "m",
                          f"largest deflection under the live loads alone against L/"
-                         f"{st.live_ratio:g} (IBC 2018 Table 1604.3 floor members, from memory)",
+                         f"{st.live_ratio:g}" + (" (IBC 2018 Table 1604.3 floor members, from "
+                                                 "memory)" if st.live_ratio == 360 else
+                                                 " (the job's live_deflection)"),
                          w["at"], detail=f"{w['kind']} {pos(w['start'])} to {pos(w['end'])} "
                          f"({w['rule']})", extra={"spans": spans},
                          **dict(zip(("clause", "source"), live_deflection_provenance(job)))))
@@ -1473,6 +1475,9 @@ def live_deflection_provenance(job) -> tuple[str, str]:
     if c.deflection_preset and LIVE_DEFLECTION_PRESETS.get(c.deflection_preset) == n:
         return (f"IBC 2018 Table 1604.3, L/{n:g} under live load (deflection = "
                 f"\"{c.deflection_preset}\")", "IBC 2018 (from memory)")
+    if n == LIVE_DEFLECTION_PRESETS["floor"]:
+        return (f"IBC 2018 Table 1604.3, L/{n:g} under live load for floor members (the "
+                "job's live_deflection, or its floor tags)", "IBC 2018 (from memory)")
     return (f"serviceability limit from the job's criteria: live_deflection = \"L/{n:g}\"",
             "set by the job ([criteria] live_deflection); L/360 for floor members is IBC 2018 "
             "Table 1604.3 (from memory)")

@@ -468,7 +468,9 @@ class _Reader:
                           "checked once, as written, so no rating is posted. Give each load "
                           "as its own [[loads]] table, or write the total in its value (a "
                           "factor on the live loads is [criteria] impact; on strength, "
-                          "safety_factor); or remove this key", path,
+                          "safety_factor" + ("; several beams sharing the loads: [beam] "
+                                             "members = N" if here == "beam" else "")
+                          + "); or remove this key", path,
                           f"{path} = {table[k]!r} is not read (a multiplier or count by its "
                           "name), so the figure would leave it out. Write the loads as they "
                           "are, or remove the key")

@@ -62,7 +62,8 @@ def calc_problem(supports, loads) -> str:
     terms = len(loads) + 5 * held
     if terms <= CALC_TERMS:
         return ""
-    return (f"the exact calc sheet of {len(loads)} loads on {held} supports, hinges and springs "
+    return (f"the exact calc sheet of {len(loads)} loads (the member's own weight counts as "
+            f"one) on {held} supports, hinges and springs "
             f"is too large to work out in a few seconds (loads + 5 x supports = {terms}, "
             f"more than {CALC_TERMS}); `shopbeam solve` and `shopbeam report` give every "
             "figure and check without the exact algebra")

@@ -220,7 +220,7 @@ def calc_sheet(job, result=None, width: int = 78) -> str:
 
     lu, fu, lab = SCALES[job.units]
     beam = job.beam()
-    too_big = calc_problem(beam.supports, beam.loads)
+    too_big = calc_problem(beam.supports, beam.loads)  # the member's own weight is one
     if too_big:
         raise InputError(too_big, "loads", file=getattr(job, "path", "") or "")
     ex = exact_solve(beam, lu, fu)
