@@ -123,12 +123,12 @@ def test_a_wheel_set_beside_patterned_loads_counts_the_search_once_per_pattern(t
     # runs once per patterned span (and once more), so that product is bounded
     from adversarial import wheels
 
-    from shopbeam.jobs.limits import MOVING_WORK, moving_work
+    from shopbeam.jobs.limits import PATTERN_MOVING_WORK, moving_work
     pattern = ('[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "100 ft"\n'
                'value = "-10 lbf/ft"\npatterned = true\n')
     p = tmp_path / "job.toml"
     # 57 wheels over a spring at mid-span: inside the bound alone, past it with the pattern
-    assert moving_work(57, 4, 1) * 3 > MOVING_WORK
+    assert moving_work(57, 4, 1) * 4 > PATTERN_MOVING_WORK >= moving_work(4, 4, 1) * 4
     p.write_text(wheels(57, springs_n=1) + pattern, encoding="utf-8")
     r = subprocess.run([sys.executable, "-m", "shopbeam", "check", str(p)],
                        capture_output=True, text=True, timeout=120)
