@@ -1041,8 +1041,8 @@ async def test_a_paste_of_several_lines_keeps_every_line(tmp_path):
         pilot.app._driver.send_message(tevents.Paste(
             " Checked by RK.\nBolts 3/4 A325 at each end.\r\nSee drawing Q-114.\n"))
         await settle(pilot)
-        assert f.input.value == before + "Checked by RK. Bolts 3/4 A325 at each end. See " \
-            "drawing Q-114."
+        assert f.input.value == before + " Checked by RK. Bolts 3/4 A325 at each end. See " \
+            "drawing Q-114."  # its own leading space kept
         # pasted with the focus on a choice: nothing takes it, and a notice says what
         await pilot.press("f2")
         await settle(pilot)
@@ -1283,3 +1283,35 @@ async def test_a_braces_problem_is_shown_beside_the_braces_field(tmp_path):
         assert app.job_screen.session.doc.get("beam.braces") == ["1,5 ft", "8 ft"]
         shown = str(f.query_one(".field-msg").render())
         assert "comma" in shown
+
+
+@sync
+async def test_a_paste_over_a_question_goes_to_the_field_behind_it(tmp_path):
+    # a paste made as a question opens was dropped by the dialog; it goes where the keys
+    # typed at that moment go: into the field behind
+    from textual import events as tevents
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Rail" + "\x11")  # ctrl+q: the question opens
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        pilot.app._driver.send_message(tevents.Paste(" over the bay"))
+        await settle(pilot)
+        assert f.input.value == "Rail over the bay"
+
+
+@sync
+async def test_a_view_key_behind_the_library_enter_switches_the_opened_job(tmp_path):
+    # F8 in the same burst as the Enter that opens a job: held, then done on the job (it
+    # had been dropped without a word)
+    app = make_app(cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, "jib-arm" + "\r" + "\x1b[19~")  # F8
+        await settle(pilot)
+        await pilot.pause(0.3)
+        assert app.job_screen.session.name == "jib-arm"
+        assert app.job_screen.current == "results"

@@ -1201,14 +1201,20 @@ class JobScreen(Screen):
     def _not_replayed(self, keys) -> None:
         """Keys held behind the library's Enter that go to no job: named as not typed."""
         for event in keys:
-            if event.is_printable and event.character:
+            if isinstance(event, events.Paste):
+                self.not_typed(" ".join(event.text.split()), self)
+            elif event.is_printable and event.character:
                 self.not_typed(event.character, self)
 
     async def _replay_keys(self, keys) -> None:
-        """Keys that reached the library after it chose to open a job, in their order, as
-        if typed on the job (a Tab and text right behind Enter: the next field gets them)."""
+        """Keys (and pastes) that reached the library after it chose to open a job, in their
+        order, as if typed on the job: posted again, so each does what it does there (a Tab
+        and text: the next field gets them; F8: the plots; ctrl+s: a save)."""
         for event in keys:
-            await self.key_behind(event)
+            if isinstance(event, events.Paste):
+                self.app.post_message(events.Paste(event.text))
+            else:
+                self.app.post_message(events.Key(event.key, event.character))
 
     def open_path(self, path) -> bool:
         try:
@@ -1304,12 +1310,22 @@ class ShopbeamApp(App):
         backspace after the characters typed behind it, a character into the field a Tab
         had already left. Here a bound key runs its action at once and a character for a
         text field goes into it at once; only keys nothing is bound to are passed on."""
+        if isinstance(event, events.Paste) and self._keys_after_open is not None \
+                and isinstance(self.screen, LibraryScreen):
+            self._keys_after_open.append(event)  # behind the Enter that opens a job: its
+            return
         if isinstance(event, events.Paste) and not isinstance(self.focused, Input):
-            # a paste with no text field picked (a choice, a list, a view): nothing takes
-            # it, and like a typed key that nothing takes, it is said, never dropped
+            # a paste with no text field picked (a choice, a list, a view), or over a
+            # question or the key list: the field behind takes it, else it is said, never
+            # dropped (as a typed key that nothing takes)
             js = getattr(self, "job_screen", None)
-            if js is not None and self.screen is js and event.text.strip():
-                js.not_typed(" ".join(event.text.split()), self.focused or js)
+            if js is not None and event.text.strip() and (
+                    self.screen is js or isinstance(self.screen, (AnswerScreen, HelpScreen))):
+                behind = js.focused
+                if isinstance(behind, FieldInput) and self.screen is not js:
+                    behind._on_paste(event)
+                else:
+                    js.not_typed(" ".join(event.text.split()), behind or js)
                 return
         if isinstance(event, events.Key) and not event.is_forwarded \
                 and isinstance(self.screen, LibraryScreen):

@@ -7,6 +7,8 @@ job screen owns the state (attributes down, messages up).
 
 from __future__ import annotations
 
+import re
+
 import textwrap
 
 from rich.text import Text
@@ -71,9 +73,11 @@ class FieldInput(Input):
         event.prevent_default()
         if not event.text:
             return
-        lines = [ln.strip() for ln in event.text.splitlines()]
-        lines = [ln for ln in lines if ln]
-        text = " ".join(lines)
+        # the line breaks (with the spaces around them) become one space each; the text's
+        # own leading and trailing spaces stay (" over the bay" pasted after a word)
+        lines = [ln for ln in event.text.splitlines() if ln.strip()]
+        text = re.sub(r"[ \t]*(?:\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029])+[ \t]*", " ",
+                      event.text.strip("\r\n"))
         selection = self.selection
         if selection.is_empty:
             self.insert_text_at_cursor(text)
