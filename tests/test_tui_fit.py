@@ -221,3 +221,9 @@ def test_the_summary_says_not_rated_for_a_rack_with_no_impact():
     assert "NOT RATED" in drawing.summary_line(r, 78).splitlines()[0]
     rated = analyze(parse_job_text((PRESETS / "pallet-rack-beam-pair.toml").read_text()))
     assert "NOT RATED" not in drawing.summary_line(rated, 78)
+
+
+def test_a_title_with_a_line_break_keeps_the_title_bar_on_one_line_with_its_flags():
+    from shopbeam.tui.app import title_bar
+    bar = title_bar("Loft beam\nover the saw bay", "lib/mltitle.toml", "UNSAVED CHANGES", 78)
+    assert "\n" not in bar and bar.endswith("UNSAVED CHANGES") and "mltitle.toml" in bar

@@ -96,6 +96,7 @@ def _number_or_text(text: str):
 def title_bar(title: str, label: str, flags: str, width: int) -> str:
     """Title | where | flags in `width` columns: the flags (UNSAVED CHANGES, read-only
     preset) always whole; the place shortened to its file name, then the title cut."""
+    title = " ".join(str(title).split())  # one line: a title's line breaks and tabs as spaces
     tail = f" | {flags}" if flags else ""
     bar = f"{title} | {label}{tail}"
     if len(bar) <= width:
@@ -1162,8 +1163,8 @@ class JobScreen(Screen):
             elif choice == "discard":
                 proceed()
 
-        self.app.push_screen(ConfirmScreen(f"'{self.session.doc.get('title') or 'This job'}'",
-                                           doing), answer)
+        title = " ".join(str(self.session.doc.get("title") or "This job").split())
+        self.app.push_screen(ConfirmScreen(f"'{title}'", doing), answer)
 
     def action_library(self, highlight=None) -> None:
         self.flush_typing()

@@ -384,7 +384,8 @@ class LibraryScreen(Screen[object]):
             tags = f" [{', '.join(e.tags)}]" if e.tags else ""
             shadow = f" (hidden by the {e.shadowed_by} copy)" if e.shadowed_by else ""
             bad = " (PROBLEM)" if e.problem else ""
-            line = f"{e.origin:<8} {e.name:<24} {e.title}{tags}{shadow}{bad}"
+            title = " ".join(e.title.split())  # one line: a title's line breaks as spaces
+            line = f"{e.origin:<8} {e.name:<24} {title}{tags}{shadow}{bad}"
             width = max(40, (self.size.width or 80) - 4)
             if len(line) > width:
                 line = line[: width - 3] + "..."
@@ -453,7 +454,7 @@ class LibraryScreen(Screen[object]):
     def on_option_list_option_highlighted(self, event: OptionList.OptionHighlighted) -> None:
         if 0 <= event.option_index < len(self.found):
             e = self.found[event.option_index]
-            lines = [f"{e.label}: {e.title}"]
+            lines = [f"{e.label}: {' '.join(e.title.split())}"]
             if e.notes:
                 lines.append(e.notes[:200])
             if e.read_only:
