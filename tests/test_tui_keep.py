@@ -1082,6 +1082,15 @@ async def test_a_number_typed_slowly_with_no_field_picked_changes_no_view(tmp_pa
     # "-250" at half a second a key right after F4 (the user thinks the value field is
     # picked): the "-" goes nowhere, and the digits behind it are the same word, not three
     # view switches; all four are named in the notice
+    from shopbeam.tui.widgets import Choice
+    gap, Choice.WORD_GAP = Choice.WORD_GAP, 2.0  # a wide window: no timing in the asserts
+    try:
+        await _slow_number(tmp_path)
+    finally:
+        Choice.WORD_GAP = gap
+
+
+async def _slow_number(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
@@ -1096,7 +1105,7 @@ async def test_a_number_typed_slowly_with_no_field_picked_changes_no_view(tmp_pa
         said = " ".join(n.message for n in app._notifications)
         assert "Not typed anywhere" in said and all(d in said for d in "-250")
         # a digit on its own, a while later, still switches views
-        await pilot.pause(1.1)
+        await pilot.pause(2.1)
         await burst(pilot, "2")
         await settle(pilot)
         assert app.job_screen.current == "span"
@@ -1207,6 +1216,15 @@ async def test_editing_keys_typed_on_into_a_question_or_the_key_list_edit_the_fi
     # or the key list and been dropped, while the letters around them were typed: the text
     # came out rewritten ("abcxy" for "abcy"); and Enter typed on pressed the dialog's
     # focused "Save" button
+    from shopbeam.tui.screens import AnswerScreen
+    gap, AnswerScreen.WORD_GAP = AnswerScreen.WORD_GAP, 5.0  # a wide "typed on" window: the
+    try:  # keys below land in it however busy the machine is (no timing in the assertions)
+        await _editing_keys_typed_on(tmp_path)
+    finally:
+        AnswerScreen.WORD_GAP = gap
+
+
+async def _editing_keys_typed_on(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
@@ -1315,3 +1333,25 @@ async def test_a_view_key_behind_the_library_enter_switches_the_opened_job(tmp_p
         await pilot.pause(0.3)
         assert app.job_screen.session.name == "jib-arm"
         assert app.job_screen.current == "results"
+
+
+@sync
+async def test_a_letter_answer_confirmed_with_enter_answers(tmp_path):
+    # read for two seconds, "s", then Enter (a common habit): the "s" had gone into the
+    # field behind ("16 fts") and the question stayed; it saves now
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Changed" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        await pilot.pause(1.2)
+        await burst(pilot, "s")
+        await pilot.pause(0.2)
+        await burst(pilot, "\r")
+        await pilot.pause(0.5)
+        assert 'title = "Changed"' in path.read_text(encoding="utf-8")
+        assert f.input.value == "Changed"

@@ -1391,6 +1391,8 @@ class ShopbeamApp(App):
                     return
             if js is not None and isinstance(self.screen, AnswerScreen):
                 question = self.screen
+                if event.key == "enter" and question.confirm_held():
+                    return  # a letter pressed on its own, then Enter: that answer, at once
                 held = question.release()  # Esc right behind a letter: the letter is dropped
                 if held is not None and event.key != "escape":
                     # a key right behind a letter answer: both were text

@@ -161,7 +161,18 @@ class AnswerScreen(ModalScreen[str]):
     def hold(self, event, run) -> None:
         """Keep a letter answer for ALONE: `run` answers then, unless a key comes first."""
         self.held = event
+        self._held_run = run
         self._held_timer = self.set_timer(self.ALONE, lambda: self._answer_held(run))
+
+    def confirm_held(self) -> bool:
+        """Enter right behind a letter answer (read, pressed on its own, then confirmed):
+        it answers now. False when no letter is held."""
+        if self.held is None:
+            return False
+        run = self._held_run
+        self.release()
+        run()
+        return True
 
     def _answer_held(self, run) -> None:
         if self.held is not None:
