@@ -109,6 +109,13 @@ class FieldInput(Input):
             self.screen.set_focus(None)
             await self.screen.run_action(f"view_key('{digit}')")  # the screen knows its views
             return
+        if digit is not None and event.character and event.character not in "£§" \
+                and hasattr(self.screen, "action_view_key"):
+            # typed as text here; the rarer ones are said, since Esc and the digit typed at
+            # once (a laggy link bunches them) arrive as the same character
+            self.app.notify(f"Typed \"{event.character}\" into the field. If you meant Esc "
+                            f"and then {digit} (a view), Backspace it: from a field, F-keys "
+                            "change views.", timeout=5)
         await super()._on_key(event)
 
     _early_selects = 0  # selections made as the focus came, whose Focus events are queued
