@@ -1355,3 +1355,31 @@ async def test_a_letter_answer_confirmed_with_enter_answers(tmp_path):
         await pilot.pause(0.5)
         assert 'title = "Changed"' in path.read_text(encoding="utf-8")
         assert f.input.value == "Changed"
+
+
+@sync
+async def test_enter_or_tab_enter_alone_on_a_question_presses_no_button(tmp_path):
+    # no button of a question takes the focus: Enter alone had saved and quit, Tab Enter had
+    # discarded every edit and quit; a second ctrl+q asks no second question
+    path = demo_copy(tmp_path)
+    before = path.read_text(encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = field(app, "job", "title")
+        f.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "Changed" + "\x11")
+        await pilot.pause(1.2)
+        await burst(pilot, "\x11")  # ctrl+q again
+        await burst(pilot, "\r")
+        await pilot.pause(0.3)
+        await burst(pilot, "\t")
+        await burst(pilot, "\r")
+        await pilot.pause(0.3)
+        assert app.is_running and type(app.screen).__name__ == "ConfirmScreen"
+        assert len([s for s in app.screen_stack if type(s).__name__ == "ConfirmScreen"]) == 1
+        assert path.read_text(encoding="utf-8") == before and f.input.value == "Changed"
+        await pilot.press("escape")
+        await settle(pilot)
+        assert type(app.screen).__name__ == "JobScreen"

@@ -1351,8 +1351,8 @@ class ShopbeamApp(App):
                 else now - self._last_text_at
             if now is not None:
                 self._last_key_at = now
-                if event.is_printable:
-                    self._last_text_at = now
+                if event.is_printable or event.key in ("backspace", "delete"):
+                    self._last_text_at = now  # typing, editing keys too
             # a key right behind a printable one, with the focus where that one went, is
             # part of a word being typed
             typed_on = self._text_before is self.focused and gap is not None \
@@ -1494,6 +1494,8 @@ class ShopbeamApp(App):
                 self._picked = (choice, before, event.character or " ")
 
     async def action_quit(self) -> None:
+        if isinstance(self.screen, AnswerScreen):
+            return  # the question is up already: one at a time (Esc closes it)
         js = getattr(self, "job_screen", None)
         if js is not None:
             js.flush_typing()

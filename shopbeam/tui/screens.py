@@ -120,9 +120,13 @@ class AnswerScreen(ModalScreen[str]):
     (`JobScreen.key_behind`), as if the dialog had come after them."""
 
     READ_TIME = 0.5  # seconds: shorter than anyone reads a question and answers it
-    # no button has the focus: Enter (or Tab, Enter) typed on from a field must never press
-    # one ("Save", "Discard and quit"); the letters and Esc answer
-    AUTO_FOCUS = None
+    # no button takes the focus: Enter (or Tab, Enter) typed on from a field must never
+    # press one ("Save", "Discard and quit"); the letters and Esc answer, and a click works
+    AUTO_FOCUS = ""
+
+    def on_mount(self) -> None:
+        for b in self.query(Button):
+            b.can_focus = False
     # A letter that answers is a key pressed on its own: one that comes within WORD_GAP of
     # the printable key before it, or has another key within ALONE behind it, is part of a
     # word being typed (a slow link delivers a word typed before the question could be seen
