@@ -70,9 +70,7 @@ async def test_members_typed_and_emptied_twice_keeps_the_app_and_the_job(tmp_pat
         await settle(pilot)
         await pilot.press("f3")
         await settle(pilot)
-        f = field(app, "span", "beam.members")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "span", "beam.members")
         for key in (CTRL_U, "2", BS, "3", BS):  # one key at a time: each one is an edit
             await burst(pilot, key)
         assert app.is_running and app.return_code is None
@@ -93,9 +91,7 @@ async def test_an_edit_that_fails_inside_shopbeam_is_refused_and_the_app_keeps_r
             raise RuntimeError("a bug")
 
         monkeypatch.setattr(s, "set", broken)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Rack beam")
         assert app.is_running
         assert f.value == "Rack beam"  # the text stays where it was typed
@@ -440,9 +436,7 @@ async def test_a_failure_that_closes_the_app_leaves_the_unsaved_job_in_a_recover
     with pytest.raises(RuntimeError, match="a bug outside any edit"):
         async with app.run_test(size=SIZE) as pilot:
             await settle(pilot)
-            f = field(app, "job", "title")
-            f.input.focus()
-            await settle(pilot)
+            f = await focused(pilot, app, "job", "title")
             await burst(pilot, CTRL_U + "Typed, not saved")
 
             def broken(*a, **k):
@@ -532,9 +526,7 @@ async def test_a_new_length_asks_nothing_by_itself_so_a_burst_goes_on_into_the_n
         await settle(pilot)
         await pilot.press("f3")
         await settle(pilot)
-        f = field(app, "span", "beam.length")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "span", "beam.length")
         s = app.job_screen.session
         supports = [dict(r) for r in s.rows("supports")]
         assert s.rows("loads")[3]["at"] == "15 ft"  # the stair, at the old end
@@ -585,9 +577,7 @@ async def test_a_save_conflict_met_mid_burst_takes_none_of_the_burst_as_its_answ
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Mine")
         theirs = path.read_text(encoding="utf-8").replace("[beam]", "# theirs\n[beam]")
         path.write_text(theirs, encoding="utf-8")
@@ -610,9 +600,7 @@ async def test_a_quit_question_read_and_answered_still_takes_its_key(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Changed" + "\x11" + "d")  # ctrl+q, "d" right behind
         assert type(app.screen).__name__ == "ConfirmScreen" and app.is_running
         assert f.input.value == "Changedd"
@@ -631,10 +619,7 @@ async def test_a_word_typed_on_after_the_quit_question_opened_is_text_not_its_an
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "notes")
-        f.input.focus()
-        await settle(pilot)
-        f.input.cursor_position = len(f.input.value)
+        f = await at_end_of(pilot, app, "job", "notes")
         await burst(pilot, " - 400 lb more" + "\x11")
         assert type(app.screen).__name__ == "ConfirmScreen"
         await pilot.pause(app.screen.READ_TIME + 0.2)
@@ -654,9 +639,7 @@ async def test_esc_right_behind_a_letter_answer_cancels_and_the_letter_never_ans
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Changed" + "\x11")
         assert type(app.screen).__name__ == "ConfirmScreen"
         await pilot.pause(app.screen.WORD_GAP + 0.05)
@@ -675,9 +658,7 @@ async def test_a_word_typed_slowly_as_a_question_opens_never_answers_it(tmp_path
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Loft beam, re" + "\x11")
         assert type(app.screen).__name__ == "ConfirmScreen"
         for letter in "vised":
@@ -704,6 +685,20 @@ async def letters_alone(pilot, letters: str) -> None:
 async def focus(pilot, widget) -> None:
     widget.focus()
     await settle(pilot)
+
+
+async def focused(pilot, app, view: str, key: str) -> Field:
+    """The field of `key` in `view`, with the focus (its text selected, as a Tab leaves it)."""
+    f = field(app, view, key)
+    await focus(pilot, f.input)
+    return f
+
+
+async def at_end_of(pilot, app, view: str, key: str) -> Field:
+    """The field of `key` in `view`, with the focus and the cursor after its text."""
+    f = await focused(pilot, app, view, key)
+    f.input.cursor_position = len(f.input.value)
+    return f
 
 
 @sync
@@ -1015,10 +1010,7 @@ async def test_pound_and_section_signs_in_notes_are_typed_not_read_as_view_keys(
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "notes")
-        f.input.focus()
-        await settle(pilot)
-        f.input.cursor_position = len(f.input.value)
+        f = await at_end_of(pilot, app, "job", "notes")
         before = f.input.value
         await burst(pilot, " Steel cost £40 per length; see NDS § 4.3.")
         assert app.job_screen.current == "job"
@@ -1033,10 +1025,7 @@ async def test_a_paste_of_several_lines_keeps_every_line(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "notes")
-        f.input.focus()
-        await settle(pilot)
-        f.input.cursor_position = len(f.input.value)
+        f = await at_end_of(pilot, app, "job", "notes")
         before = f.input.value
         pilot.app._driver.send_message(tevents.Paste(
             " Checked by RK.\nBolts 3/4 A325 at each end.\r\nSee drawing Q-114.\n"))
@@ -1061,9 +1050,7 @@ async def test_keys_typed_behind_f1_go_into_the_field_or_are_named(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Burst" + "\x1bOP" + " after help")
         assert type(app.screen).__name__ == "HelpScreen"
         assert f.input.value == "Burst after help"
@@ -1152,9 +1139,7 @@ async def test_braces_typed_with_a_thousands_comma_stay_one_entry_each(tmp_path)
         await settle(pilot)
         await pilot.press("f3")
         await settle(pilot)
-        f = field(app, "span", "beam.braces")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "span", "beam.braces")
         await burst(pilot, CTRL_U + "1,200 mm, 2,400 mm" + TAB)
         await settle(pilot)
         assert app.job_screen.session.doc.get("beam.braces") == ["1,200 mm", "2,400 mm"]
@@ -1192,9 +1177,7 @@ async def test_keys_behind_the_library_enter_never_edit_the_unsaved_job_left(tmp
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "notes")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "notes")
         await burst(pilot, " EDIT")
         notes_before = f.input.value
         await burst(pilot, "\x0f")  # ctrl+o
@@ -1228,9 +1211,7 @@ async def _editing_keys_typed_on(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "abcx" + "\x11")  # ctrl+q: the question opens
         assert type(app.screen).__name__ == "ConfirmScreen"
         await pilot.pause(0.7)  # past READ_TIME, within a second of the "x"
@@ -1274,10 +1255,7 @@ async def test_a_return_symbol_typed_in_a_one_line_title_stays_a_character(tmp_p
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
-        f.input.cursor_position = len(f.input.value)
+        f = await at_end_of(pilot, app, "job", "title")
         await burst(pilot, "!")
         await settle(pilot)
         assert app.job_screen.session.doc.get("title") == "Press ⏎ to open!"
@@ -1292,9 +1270,7 @@ async def test_a_braces_problem_is_shown_beside_the_braces_field(tmp_path):
         await settle(pilot)
         await pilot.press("f3")
         await settle(pilot)
-        f = field(app, "span", "beam.braces")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "span", "beam.braces")
         await burst(pilot, CTRL_U + "1,5 ft, 8 ft" + TAB)
         await settle(pilot)
         await pilot.pause(0.3)
@@ -1311,9 +1287,7 @@ async def test_a_paste_over_a_question_goes_to_the_field_behind_it(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Rail" + "\x11")  # ctrl+q: the question opens
         assert type(app.screen).__name__ == "ConfirmScreen"
         pilot.app._driver.send_message(tevents.Paste(" over the bay"))
@@ -1343,9 +1317,7 @@ async def test_a_letter_answer_confirmed_with_enter_answers(tmp_path):
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Changed" + "\x11")
         assert type(app.screen).__name__ == "ConfirmScreen"
         await pilot.pause(1.2)
@@ -1366,9 +1338,7 @@ async def test_enter_or_tab_enter_alone_on_a_question_presses_no_button(tmp_path
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = field(app, "job", "title")
-        f.input.focus()
-        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
         await burst(pilot, CTRL_U + "Changed" + "\x11")
         await pilot.pause(1.2)
         await burst(pilot, "\x11")  # ctrl+q again
