@@ -371,3 +371,13 @@ def test_a_european_grade_on_pipe_or_mechanical_tube_is_not_rated_past_its_own_g
     kind = "PIPE" if usual == "A53-B" else "mech-tube"
     swept, note = material_for_kind(job, kind)
     assert swept.material.key == usual and usual in note
+
+
+def test_a_sweep_of_every_kind_cites_en_for_the_european_kinds_grade():
+    # the note had cited AISC Manual Table 2-4 for S235 on IPE, HEA... (an EN choice)
+    from shopbeam.design.sizing import size
+    from shopbeam.jobs.jobfile import parse_job_text
+    job = parse_job_text(simple_span('section = "HSS4x4x1/4"\nmaterial = "A500-C"', 6))
+    note = size(job, "all").material_note
+    at = note.index("swept in S235")
+    assert "EN 10025-2" in note[at:at + 160] and "Table 2-4" not in note[at:at + 160]

@@ -500,7 +500,9 @@ def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
         raise InputError("no catalog section fits (check --max-depth)", "--kind")
     note = "; ".join(
         [f"{', '.join(ks)} swept in {g}, the grade they are bought in (not the job's "
-         f"{job.material.key}; AISC Manual Table 2-4, common practice)"
+         f"{job.material.key}; "
+         + ("EN 10025-2 / EN 10219-1, the lowest common grade" if g in EN_GRADES
+            else "AISC Manual Table 2-4") + ", common practice)"
          for g, ks in regraded.items()] + [_steel_shapes_note(job, cands)])
     res = _sweep(job, cands, "all", with_capacity, confirm, None, note.strip("; "), t0, skipped)
     return replace(res, method="every catalog kind in one sweep: " + res.method)
