@@ -1169,6 +1169,17 @@ def _gaps_of(job, r: "SizeRow") -> tuple[str, ...]:
         return (f"its rating could not be assessed ({exc})",)
 
 
+def _has_gaps(job, r: "SizeRow") -> bool:
+    """Whether `_gaps_of` would name any gap: the member's own gaps first (cheap), the solved
+    ones only when there are none (the look-ahead past a NOT RATED row asks only this)."""
+    j = replace(job, section=r.section, material=r.material)
+    try:
+        st = strengths(j)
+        return bool(rating_gaps(j, st)) or bool(solved_gaps(j, st, None, r.factor))
+    except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError):
+        return True
+
+
 # Past the lightest passing section that is NOT RATED, how many more passing ones are
 # checked in full looking for one that is rated (each a full check: evaluate + capacity)
 UNRATED_SKIP = 10
@@ -1198,7 +1209,7 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                 # looking past a NOT RATED lightest for a rated one: a section whose own
                 # rating gaps already withhold it (wheels on a tube wall) is not worth a full
                 # check (its gaps are found in microseconds)
-                if unrated and _gaps_of(job, r):
+                if unrated and _has_gaps(job, r):
                     continue
                 rows[i] = r = _full_row(job, r, with_capacity)
                 n += 1
