@@ -14,13 +14,9 @@ from shopbeam.output.jsonout import dumps_finite
 def _sound(job):
     """The job, once its own solve passes its self-checks (exact fallback included): a job
     whose answer fails them is refused here as `solve` refuses it, not rated and sized on it."""
-    from shopbeam.engine.solver import UnstableBeam, sound_solve
+    from shopbeam.design.analysis import sound_solution
 
-    try:
-        sound_solve(job.beam(), file=job.path or "")
-    except UnstableBeam as e:  # named as solve names it: the file and the supports' line
-        raise UnstableBeam(e.args[0], file=job.path or "",
-                           line=getattr(job, "supports_line", None)) from None
+    sound_solution(job)  # refused as solve refuses it, with the file and the supports' line
     return job
 
 

@@ -191,11 +191,13 @@ def couple_notes(job: Job, sol: Solution) -> list[str]:
     return out
 
 
-def analyze(job: Job) -> Result:
-    """Solve the job's member and run its checks. Raises UnstableBeam."""
+def sound_solution(job: Job) -> Solution:
+    """The solve of the job's loads as entered, once it passes its self-checks (exact
+    fallback included); a job whose answer fails them, or that cannot stand, is refused
+    naming the file (and the supports' line). `analyze` and the commands that rate or size
+    a job start from it."""
     try:
-        sol = sound_solve(job.beam(), length_formatter(job.units), file=job.path or "")
-        entered = sol  # the loads as entered (a moving-load job shows its governing state)
+        return sound_solve(job.beam(), length_formatter(job.units), file=job.path or "")
     except UnstableBeam as e:
         raise UnstableBeam(e.args[0], file=job.path or "",
                            line=getattr(job, "supports_line", None)) from None
@@ -203,6 +205,13 @@ def analyze(job: Job) -> Result:
         if not e.problem.file:
             e.problem.file = job.path or ""
         raise
+
+
+def analyze(job: Job) -> Result:
+    """Solve the job's member and run its checks. Raises UnstableBeam."""
+    # the loads as entered (`entered`); `sol` is what is shown: a moving-load job shows its
+    # governing state
+    sol = entered = sound_solution(job)
 
     shown, state_sol, state_words, envelope = "", None, "", ()
     if loading.needs_states(job):

@@ -155,6 +155,20 @@ def not_rated_reasons(job, st, ss) -> tuple[str, ...]:
     return tuple(out)
 
 
+UPWARD_GAP = "load(s) push UP"  # how `rating_gaps` names loads pointing up (a verdict's own)
+
+
+def held_besides(result) -> list[str]:
+    """Why no rating may be posted besides what a verdict already names (the limit states
+    not checked, loads pointing up): an input problem that holds the rating, a rack with no
+    impact, a job that reads like a lifting device... For `result`, an analysis Result."""
+    job = result.job
+    gaps = rating_gaps(job, strengths(job, beam=result.solution.beam))
+    named = [u.name for u in result.unchecked if u.blocks_rating]
+    return [g for g in gaps if not g.startswith(UPWARD_GAP)
+            and not any(g.startswith(f"{n} not checked") for n in named)]
+
+
 def rating_gaps(job, st) -> tuple[str, ...]:
     """`not_rated_reasons` of the member and the job alone, without a solve's self-checks (a
     sizing sweep asks it of sections it never solves one by one)."""
@@ -162,7 +176,7 @@ def rating_gaps(job, st) -> tuple[str, ...]:
            if u.blocks_rating]
     upward = getattr(job, "upward", ())
     if upward:
-        out.append("load(s) push UP with no uplift = true, almost always a forgotten minus sign "
+        out.append(f"{UPWARD_GAP} with no uplift = true, almost always a forgotten minus sign "
                    "(forces are + up, a weight is negative): " + ", ".join(upward)
                    + ". Fix the sign, or mark a load that really pushes up uplift = true")
     live_at = [k for k in getattr(job, "at_support", ()) if _is_live(job, k)]

@@ -1160,24 +1160,19 @@ def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
     return out
 
 
-def _gaps_of(job, r: "SizeRow") -> tuple[str, ...]:
+def _gaps_of(job, r: "SizeRow", any_only: bool = False) -> tuple[str, ...]:
+    """The rating gaps of a row's section and grade; `any_only`: stop at the member's own
+    gaps when it has some (the solved ones cost about a millisecond a row), for callers that
+    only ask whether a row has any (the look-ahead past a NOT RATED row)."""
     j = replace(job, section=r.section, material=r.material)
     try:
         st = strengths(j)
-        return rating_gaps(j, st) + solved_gaps(j, st, None, r.factor)
+        own = rating_gaps(j, st)
+        if own and any_only:
+            return own
+        return own + solved_gaps(j, st, None, r.factor)
     except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError) as exc:
         return (f"its rating could not be assessed ({exc})",)
-
-
-def _has_gaps(job, r: "SizeRow") -> bool:
-    """Whether `_gaps_of` would name any gap: the member's own gaps first (cheap), the solved
-    ones only when there are none (the look-ahead past a NOT RATED row asks only this)."""
-    j = replace(job, section=r.section, material=r.material)
-    try:
-        st = strengths(j)
-        return bool(rating_gaps(j, st)) or bool(solved_gaps(j, st, None, r.factor))
-    except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError):
-        return True
 
 
 # Past the lightest passing section that is NOT RATED, how many more passing ones are
@@ -1209,7 +1204,7 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                 # looking past a NOT RATED lightest for a rated one: a section whose own
                 # rating gaps already withhold it (wheels on a tube wall) is not worth a full
                 # check (its gaps are found in microseconds)
-                if unrated and _has_gaps(job, r):
+                if unrated and _gaps_of(job, r, any_only=True):
                     continue
                 rows[i] = r = _full_row(job, r, with_capacity)
                 n += 1

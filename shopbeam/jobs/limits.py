@@ -64,7 +64,7 @@ CALC_TERMS = 60
 
 def calc_problem(supports, loads) -> str:
     """Why the exact calc sheet is not worked out for this job ("" when it is)."""
-    held = sum(1 for s in supports)
+    held = len(supports)
     terms = len(loads) + 5 * held
     if terms <= CALC_TERMS:
         return ""

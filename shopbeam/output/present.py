@@ -194,7 +194,9 @@ def _verdict(result) -> str:
     rest, names it there rather than only among the cautions."""
     if not result.ok:
         return "the member FAILS this check"
-    held = _held(result)
+    from shopbeam.design.capacity import held_besides  # noqa: PLC0415
+
+    held = held_besides(result)
     if not result.blocking:
         return "all checks PASS" + (f", but NOT RATED for {len(held)} reason(s) that "
                                     "`shopbeam capacity` names" if held else "")
@@ -202,19 +204,6 @@ def _verdict(result) -> str:
             + " (see CAUTIONS; no rating rests on this)"
             + (f"; and NOT RATED for {len(held)} more reason(s) that `shopbeam capacity` "
                "names" if held else ""))
-
-
-def _held(result) -> list[str]:
-    """Why no rating may be posted besides the limit states not checked and the loads that
-    point up (the report names those already): `capacity.rating_gaps`."""
-    from shopbeam.design.capacity import rating_gaps  # noqa: PLC0415
-    from shopbeam.design.checks import strengths  # noqa: PLC0415
-
-    job = result.job
-    gaps = rating_gaps(job, strengths(job, beam=result.solution.beam))
-    named = [u.name for u in result.unchecked if u.blocks_rating]
-    return [g for g in gaps if not g.startswith("load(s) push UP")
-            and not any(g.startswith(f"{n} not checked") for n in named)]
 
 
 def warnings_headline(job, before: str) -> str:

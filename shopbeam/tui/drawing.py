@@ -297,7 +297,8 @@ def checks_table(result) -> str:
     return "\n".join(rows)
 
 
-def verdict_line(result) -> str:
+def verdict_line(result, other: list[str] | None = None) -> str:
+    """The verdict; `other`: `other_gaps(result)` when the caller has it already."""
     g = result.governing
     if result.ok:
         up = getattr(result.job, "upward", ())
@@ -306,7 +307,7 @@ def verdict_line(result) -> str:
         if gaps:
             but += (f" - BUT {len(gaps)} limit state(s) NOT CHECKED (no rating): "
                     + "; ".join(result.blocking))
-        other = other_gaps(result)
+        other = other_gaps(result) if other is None else other
         if other:
             but += f" - NOT RATED: {len(other)} reason(s), named in the Rating view"
         return (f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f} "
@@ -324,20 +325,14 @@ def selfchecks_text(result) -> str:
 
 
 def other_gaps(result) -> list[str]:
-    """Why no rating may be posted, besides the limit states not checked and the loads that
-    point up (the verdict names those): an input problem that holds the rating, a rack with
-    no impact, a job that reads like a lifting device... (`capacity.rating_gaps`)."""
-    from shopbeam.design.capacity import rating_gaps  # noqa: PLC0415 - design on demand
-    from shopbeam.design.checks import strengths  # noqa: PLC0415
+    """`capacity.held_besides`: why no rating is posted besides what the verdict names; []
+    if it cannot be worked out here (the Rating view says it in full; never a crash)."""
+    from shopbeam.design.capacity import held_besides  # noqa: PLC0415 - design on demand
 
-    job = result.job
     try:
-        gaps = rating_gaps(job, strengths(job, beam=result.solution.beam))
-    except Exception:  # noqa: BLE001 - the Rating view says it in full; never a crash here
+        return held_besides(result)
+    except Exception:  # noqa: BLE001
         return []
-    named = [u.name for u in result.unchecked if u.blocks_rating]
-    return [g for g in gaps if not g.startswith("load(s) push UP")
-            and not any(g.startswith(f"{n} not checked") for n in named)]
 
 
 def summary_line(result, width: int = 0, tail: str = "") -> str:
@@ -345,7 +340,8 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
     kept within `width` columns (0: no limit) by naming fewer items and saying how many
     more there are, never by cutting words; `tail` ends the reactions line when it fits."""
     sy = result.job.units
-    verdict = verdict_line(result)
+    other = other_gaps(result) if result.ok else []  # worked out once, for both lines
+    verdict = verdict_line(result, other)
     if width and len(verdict) > width and not result.ok:
         g = result.governing
         fails = [c.name for c in result.checks if not c.ok]
@@ -361,7 +357,6 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
         # NOT RATED stay in sight, shortened, never dropped
         g, up = result.governing, getattr(result.job, "upward", ())
         gaps = [u for u in result.unchecked if u.blocks_rating]
-        other = other_gaps(result)
         # what holds the rating: limit states not checked, and other reasons (input problems,
         # a rack with no impact...: named in full in the Rating view)
         names = "; ".join(x for x in (

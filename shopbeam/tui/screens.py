@@ -88,13 +88,18 @@ def help_text(width: int = 74) -> str:
     return "\n".join(out)
 
 
+# seconds a question or the key list is on screen before a key can be an answer to it:
+# shorter than anyone reads one; keys made sooner were typed before it came
+READ_TIME = 0.5
+
+
 class HelpScreen(ModalScreen):
     """The key list. Keys typed before it could be read go on to the field behind it, and
     later printable keys it does not use are named in the notice of keys not typed
     (`ShopbeamApp.on_event`), as for a question."""
 
     BINDINGS = [Binding("escape,q,f1,question_mark", "close", "close")]
-    READ_TIME = 0.5  # seconds, as AnswerScreen.READ_TIME
+    READ_TIME = READ_TIME
 
     def __init__(self) -> None:
         super().__init__()
@@ -119,7 +124,7 @@ class AnswerScreen(ModalScreen[str]):
     `READ_TIME` after it opened go on to the field behind it instead
     (`JobScreen.key_behind`), as if the dialog had come after them."""
 
-    READ_TIME = 0.5  # seconds: shorter than anyone reads a question and answers it
+    READ_TIME = READ_TIME
     # no button takes the focus: Enter (or Tab, Enter) typed on from a field must never
     # press one ("Save", "Discard and quit"); the letters and Esc answer, and a click works
     AUTO_FOCUS = ""

@@ -35,12 +35,18 @@ class Evaluation:
     def ok(self) -> bool:
         return self.result is not None
 
-    def message_for(self, key: str) -> str:
-        """The first error (or warning) for exactly this key, in words."""
-        for warning in (False, True):
-            for p in self.problems:
-                if p.key == key and p.warning == warning:
-                    return ("warning: " if warning else "") + p.message
+    def message_for(self, key: str, elements: bool = False) -> str:
+        """The first error (or warning) for exactly this key, in words; with `elements`, for
+        an element of the list it names when the key itself has none (beam.braces[1], for
+        the field that holds the whole list)."""
+        matches = [lambda k: k == key]
+        if elements:
+            matches.append(lambda k: k.startswith(key + "["))
+        for keyed in matches:
+            for warning in (False, True):
+                for p in self.problems:
+                    if keyed(p.key) and p.warning == warning:
+                        return ("warning: " if warning else "") + p.message
         return ""
 
     def messages_under(self, prefix: str) -> list[Problem]:

@@ -90,7 +90,7 @@ class View(VerticalScroll):
             key = fields.get(f.key)
             if key is None:
                 continue
-            msg = in_words(ev.message_for(key) or _element_message(ev, key))
+            msg = in_words(ev.message_for(key, elements=True))
             if msg and not msg.startswith("warning: "):
                 f.show(msg, error=True)
             elif msg:
@@ -1192,13 +1192,3 @@ class PlotsView(View):
             if r is not None:
                 st.update(Text(drawing.plot(r, name, width, height), no_wrap=True,
                                overflow="crop"))
-
-
-def _element_message(ev, key: str) -> str:
-    """The first error (or warning) on an element of a list key (beam.braces[1]), for the
-    field that holds the whole list, in the words `message_for` gives."""
-    for warning in (False, True):
-        for p in getattr(ev, "problems", ()):
-            if p.key.startswith(key + "[") and p.warning == warning:
-                return ("warning: " if warning else "") + p.message
-    return ""
