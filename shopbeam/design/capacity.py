@@ -171,9 +171,45 @@ def held_besides(result) -> list[str]:
 
 def rating_gaps(job, st) -> tuple[str, ...]:
     """`not_rated_reasons` of the member and the job alone, without a solve's self-checks (a
-    sizing sweep asks it of sections it never solves one by one)."""
+    sizing sweep asks it of sections it never solves one by one): the member's own gaps (its
+    section and grade), then the job's (`job_gaps`, the same for every section)."""
+    return member_gaps(job, st) + job_gaps(job)
+
+
+def member_gaps(job, st) -> tuple[str, ...]:
+    """The rating gaps that come with the section and grade: limit states the member calls
+    for that are not checked, a grade that does not hold for the shape, thickness or kind,
+    a stubby member."""
+    sec = getattr(st, "section", None) or job.section
     out = [f"{u.name} not checked ({u.clause}): {u.reason}" for u in unchecked_for(job, st)
            if u.blocks_rating]
+    gap = grade_gap(sec, job.material, job.units)
+    if gap:
+        out.append(gap)
+    gap = wood_gap(sec, job.material)
+    if gap:
+        out.append(gap)
+    gap = other_metal_on_steel_shape(sec, job.material)
+    if gap:
+        out.append(gap)
+    mixed = kind_mismatch(job.material, job.units)
+    if mixed:
+        out.append(f"the typed-in material's {mixed}. Fix e or the kind")
+    slip = strength_slip(job.material, job.units)
+    if slip:
+        out.append(f"the typed-in material's {slip}. Fix fy and its unit")
+    if job.length < STUBBY_LIMIT * (getattr(sec, "depth", 0.0) or 0.0):
+        out.append(stubby_words(job.length, sec, job.units))
+    thick = thickness_gap(sec, job.material, getattr(job, "welded", False), job.units)
+    if thick:
+        out.append(thick)
+    return tuple(out)
+
+
+def job_gaps(job) -> tuple[str, ...]:
+    """The rating gaps of the job itself, whatever the section: its loads, tags and keys (a
+    sizing sweep works them out once: with one, no section can be rated)."""
+    out = []
     upward = getattr(job, "upward", ())
     if upward:
         out.append(f"{UPWARD_GAP} with no uplift = true, almost always a forgotten minus sign "
@@ -186,21 +222,6 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    + ", ".join(live_at)
                    + ". Move each to where it acts (e.g. a cantilever's tip), or remove it")
     out += list(getattr(job, "long_bearings", ()))
-    gap = grade_gap(getattr(st, "section", None) or job.section, job.material, job.units)
-    if gap:
-        out.append(gap)
-    gap = wood_gap(getattr(st, "section", None) or job.section, job.material)
-    if gap:
-        out.append(gap)
-    gap = other_metal_on_steel_shape(getattr(st, "section", None) or job.section, job.material)
-    if gap:
-        out.append(gap)
-    mixed = kind_mismatch(job.material, job.units)
-    if mixed:
-        out.append(f"the typed-in material's {mixed}. Fix e or the kind")
-    slip = strength_slip(job.material, job.units)
-    if slip:
-        out.append(f"the typed-in material's {slip}. Fix fy and its unit")
     out += _live_both_ways(job) + _live_on_spans_unpatterned(job)
     out += _lifting_spread(job)
     if getattr(job, "members", 1) > 1 and (job.moving or job.lifting
@@ -210,19 +231,12 @@ def rating_gaps(job, st) -> tuple[str, ...]:
                    "wheel and hook loads do not divide between members, and the per-wheel "
                    "figure would be posted for all of them together. Rate each runway beam "
                    "on its own (members = 1) with the trolley or hoist it carries")
-    sec = getattr(st, "section", None) or job.section
-    if job.length < STUBBY_LIMIT * (getattr(sec, "depth", 0.0) or 0.0):
-        out.append(stubby_words(job.length, sec, job.units))
     bth = getattr(job, "bth_hint", "")
     if bth:
         out.append(f"it reads like a below-the-hook device ({bth}) but names no lifting "
                    "profile: the guessed monorail or jib profile uses AISC Omega, not the "
                    "ASME BTH-1 design factor. Write lifting = \"below-the-hook\" under "
                    "[criteria], or the profile it is")
-    thick = thickness_gap(getattr(st, "section", None) or job.section, job.material,
-                          getattr(job, "welded", False), job.units)
-    if thick:
-        out.append(thick)
     road = getattr(job, "vehicle_hint", "")
     if road:
         out.append(f"it reads like a member of a road vehicle or mobile machine ({road}) but gives no impact: "

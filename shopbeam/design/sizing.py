@@ -41,7 +41,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.capacity import capacity, rating_gaps, solved_gaps
+from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
@@ -1191,6 +1191,7 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
         orders.append(sorted((i for i in range(len(rows)) if rows[i].price_per_m is not None),
                              key=lambda i: (rows[i].price_per_m, rows[i].weight)))
     want = len(rows) if len(rows) <= CHECK_ALL else confirm
+    gapped_job = bool(job_gaps(job))  # the job's own gaps hold every section alike
     n = 0
     for order in orders:
         found = unrated = 0
@@ -1204,7 +1205,7 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                 # looking past a NOT RATED lightest for a rated one: a section whose own
                 # rating gaps already withhold it (wheels on a tube wall) is not worth a full
                 # check (its gaps are found in microseconds)
-                if unrated and _gaps_of(job, r, any_only=True):
+                if unrated and (gapped_job or _gaps_of(job, r, any_only=True)):
                     continue
                 rows[i] = r = _full_row(job, r, with_capacity)
                 n += 1
