@@ -1247,6 +1247,36 @@ async def test_a_pound_sign_in_the_library_search_is_typed(tmp_path):
 
 
 @sync
+async def test_every_kind_of_line_break_is_shown_and_kept_through_an_edit(tmp_path):
+    # a carriage return, a Unicode line separator or a NEL in a title or notes had been
+    # invisible in the field, and an edit at the end of the text had turned one into a space
+    # and dropped another: each shows as a mark of its own and is saved as it was
+    path = demo_copy(tmp_path)
+    text = path.read_text(encoding="utf-8").replace(
+        'title = "Loft beam over the saw bay, with stair overhang"',
+        'title = "Loft beam\\rover the bay\\u2028x\\r\\ny"').replace(
+        'notes = "Demo job. A building member: needs review by a licensed engineer."',
+        'notes = "tab\\there\\u000bvt\\u000cff\\u0085nel\\u2029par end"')
+    path.write_text(text, encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        title, notes = field(app, "job", "title"), field(app, "job", "notes")
+        for f in (title, notes):
+            assert not any(ch in f.input.value for ch in "\r\n\v\f\x85\u2028\u2029")
+        assert title.input.value == "Loft beam\u240dover the bay\u21b5x\u240d\u23cey"
+        await at_end_of(pilot, app, "job", "title")
+        await burst(pilot, "!")
+        await settle(pilot)
+        await at_end_of(pilot, app, "job", "notes")
+        await burst(pilot, "!")
+        await settle(pilot)
+        doc = app.job_screen.session.doc
+        assert doc.get("title") == "Loft beam\rover the bay\u2028x\r\ny!"
+        assert doc.get("notes") == "tab\there\vvt\fff\x85nel\u2029par end!"
+
+
+@sync
 async def test_a_return_symbol_typed_in_a_one_line_title_stays_a_character(tmp_path):
     path = demo_copy(tmp_path)
     text = path.read_text(encoding="utf-8").replace(

@@ -480,7 +480,7 @@ class JobScreen(Screen):
             # the marks stand for line breaks only in a text that had them (a ⏎ typed into
             # a one-line text is a character of it)
             was = s.doc.get(key, "")
-            text = from_one_line(value) if isinstance(was, str) and "\n" in was else value
+            text = from_one_line(value, was) if isinstance(was, str) else value
             s.set(key, text if key == "title" else (text or None))
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])

@@ -38,17 +38,30 @@ _DIGIT_OF = {name: digit for digit, name in OPTION_DIGITS.items()}
 # file): shown as this mark, so the field draws on its own line and shows all of its text,
 # and turned back into the line break when the field is edited
 LINE_BREAK = "\u23ce"  # ⏎
+# Every character Python reads as a line break, each with a mark of its own (a carriage
+# return, a form feed or a Unicode line separator in a title would otherwise be invisible in
+# the field, and an edit elsewhere in the text would drop it or make it a space)
+BREAK_MARKS = {"\n": LINE_BREAK, "\r": "\u240d", "\v": "\u240b", "\f": "\u240c",
+               "\x1c": "\u241c", "\x1d": "\u241d", "\x1e": "\u241e", "\x85": "\u2424",
+               "\u2028": "\u21b5", "\u2029": "\u204b"}  # ⏎ ␍ ␋ ␌ ␜ ␝ ␞ ␤ ↵ ⁋
 
 
 def one_line(text) -> str:
-    """`text` for a one-line field: each line break shown as LINE_BREAK."""
+    """`text` for a one-line field: each line break shown as its mark (BREAK_MARKS)."""
     text = "" if text is None else str(text)
-    return text.replace("\r\n", "\n").replace("\n", LINE_BREAK)
+    for ch, mark in BREAK_MARKS.items():
+        text = text.replace(ch, mark)
+    return text
 
 
-def from_one_line(text: str) -> str:
-    """What a one-line field's text stands for: each LINE_BREAK a line break again."""
-    return text.replace(LINE_BREAK, "\n")
+def from_one_line(text: str, was: str) -> str:
+    """What a one-line field's text stands for, given the text `was` it showed: a mark is its
+    line break again where `was` had that break (a mark typed into a text that had none, such
+    as "Press ⏎ to open", is a character of it)."""
+    for ch, mark in BREAK_MARKS.items():
+        if ch in was:
+            text = text.replace(mark, ch)
+    return text
 
 
 # Fields of free text, where the Option-layer characters of the digits are ordinary
