@@ -1383,3 +1383,22 @@ async def test_enter_or_tab_enter_alone_on_a_question_presses_no_button(tmp_path
         await pilot.press("escape")
         await settle(pilot)
         assert type(app.screen).__name__ == "JobScreen"
+
+
+@sync
+async def test_a_load_type_picked_away_and_back_leaves_the_file_as_it_was(tmp_path):
+    # uniform -> point -> linear -> uniform had put the load's `end` line after its `value`
+    # (each dropped key came back at a line number that the others' coming and going had
+    # moved): every key comes back after the one it followed, and the file is unchanged
+    path = demo_copy(tmp_path)
+    before = path.read_text(encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        for flips in (("point", "linear", "uniform"), ("moment", "uniform"),
+                      ("linear", "point", "uniform")):
+            for kind in flips:
+                js.change_load_type(0, kind)
+                await settle(pilot)
+            assert js.session.doc.text() == before, flips

@@ -209,16 +209,19 @@ class Session:
         places = self.__dict__.setdefault("_places", {})
         if node is None or jobdoc.container_of(node) is None or not hasattr(node, "get"):
             return False
+        orders = self.__dict__.setdefault("_orders", {})
         if value is None:
             i = jobdoc.key_index(node, key) if key in node else None
             if i is not None:
                 item = node.item(key) if hasattr(node, "item") else None
                 places[where] = (i, getattr(item, "trivia", None))
+                _merge_order(orders.setdefault(tuple(path), []), _keys_of(node))
             return False
         if key in node or where not in places:
             return False
         i, trivia = places.pop(where)
         jobdoc._check_value(key, value, ".".join(map(str, [*path, key])))
+        i = _place_after(node, key, i, orders.get(tuple(path), []))
         return jobdoc.insert_key(node, i, key, value, trivia)
 
     def set(self, dotted: str, value) -> Evaluation:
@@ -255,6 +258,7 @@ class Session:
         else:
             i = self.doc.add_support(**fields)
         self.__dict__.pop("_places", None)  # row indices moved
+        self.__dict__.pop("_orders", None)
         self._edited()
         return i
 
@@ -268,6 +272,7 @@ class Session:
             self.doc.remove_support(index)
         self.removals = self.removals + [(table, index, before, self.doc.text(), row)]
         self.__dict__.pop("_places", None)  # row indices moved
+        self.__dict__.pop("_orders", None)
         self._edited()
 
     # (table, index, text before, text after, the row) of each removal, the last one last
@@ -293,6 +298,7 @@ class Session:
             rows.insert(min(index, len(rows)), row)
             index = min(index, len(rows) - 1)
         self.__dict__.pop("_places", None)
+        self.__dict__.pop("_orders", None)
         self._edited()
         return table, index
 
@@ -348,3 +354,36 @@ class Session:
         self.name = self.path.stem
         self.saved_text = opened.text
         self.baseline_loads = [dict(r) for r in self.doc.loads()]
+
+
+def _keys_of(node) -> list[str]:
+    """The keys of a table in the order of its lines."""
+    box = jobdoc.container_of(node)
+    return [k.key for k, _v in box.body if k is not None] if box is not None else []
+
+
+def _merge_order(order: list[str], keys: list[str]) -> None:
+    """Fold a table's key order now into `order`, its order as first seen (a key new since
+    goes in after the key it follows now)."""
+    for n, k in enumerate(keys):
+        if k in order:
+            continue
+        before = next((b for b in reversed(keys[:n]) if b in order), None)
+        order.insert(order.index(before) + 1 if before is not None else 0, k)
+
+
+def _place_after(node, key: str, i: int, order: list[str]) -> int:
+    """The line at which `key` comes back into a table: after the nearest key that stood
+    before it (in `order`) and is there now, so keys that left and come back in any order
+    each land where they were. `i`, the line it left from, is kept when it still lies in that
+    gap (a comment line above the key stays above it)."""
+    if key not in order:
+        return i
+    pos = order.index(key)
+    here = _keys_of(node)
+    before = next((k for k in reversed(order[:pos]) if k in here), None)
+    after = next((k for k in order[pos + 1:] if k in here), None)
+    lo = jobdoc.key_index(node, before) + 1 if before is not None else 0
+    box = jobdoc.container_of(node)
+    hi = jobdoc.key_index(node, after) if after is not None else len(box.body)
+    return i if lo <= i <= hi else lo
