@@ -588,3 +588,37 @@ def test_a_hoist_at_an_end_stop_or_mid_span_of_a_second_span_is_not_held_for_its
         res = capacity(parse_job_text(two + f'[[loads]]\ntype = "point"\nat = "{at}"\n'
                                             'value = "-2000 lbf"\n'))
         assert any("hoist" in w and "travels" in w for w in res.not_rated) == held, at
+
+
+def test_the_top_face_of_the_bottom_flange_governs_where_a_jib_hogs():
+    # A W12x26 jib boom 8 ft long, fixed at the post, two axles of 1000 lbf 2 ft apart (two
+    # wheels of 500 lbf each), no impact, no self-weight. Under the inner axle the moment is
+    # the outer axle times the spacing wherever the trolley stands:
+    #   M = -1000 x 24 = -24000 lbf*in; sigma_g = -24000 / 33.4 = -718.6 psi (compression)
+    #   P / tf^2 = 500 / 0.380^2 = 3462.6 psi; lambda 0.07987 (coefficients above)
+    #   underside, point 2: sx = 2.4058 x 3462.6 - 718.6 = 7611.7 psi (the most there)
+    #   top face of the bottom flange, point 2: sx = -8330.3 - 718.6 = -9048.9 psi
+    #   (point 1 top: 8468.6 psi; point 0 top: 7492 psi): 9048.9 psi governs
+    # (EN 1993-6 Table 5.2 coefficients give the underside, from memory; the top face has
+    # the same local stresses with the other sign: common practice, no source)
+    text = """schema = 1
+title = "W12x26 jib boom"
+tags = ["lifting"]
+[beam]
+length = "8 ft"
+section = "W12x26"
+material = "A992"
+self_weight = false
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[moving]]
+label = "trolley"
+loads = ["-1000 lbf", "-1000 lbf"]
+spacing = ["2 ft"]
+[criteria]
+impact = 0
+"""
+    c = _check(text, "wheel flange bending")
+    assert c.demand / PSI == pytest.approx(9048.9, rel=2e-3)
+    assert "top face" in c.detail and "point 2" in c.detail

@@ -17,7 +17,8 @@ wheel contact:
     sigma_x,i = Cx_i P / tf^2 (along the beam),  sigma_y,i = Cy_i P / tf^2 (across)
 
 at point 0 (flange-to-web junction), 1 (under the wheel) and 2 (the flange tip), tension on
-the flange's underside positive. Parallel-flange (W) beams:
+the flange's underside positive (the top face of the bottom flange has the same local
+stresses with the other sign; both faces are checked). Parallel-flange (W) beams:
     Cx0 = 0.050 - 0.580 lambda + 0.148 e^(3.015 lambda)
     Cx1 = 2.230 - 1.490 lambda + 1.390 e^(-18.33 lambda)
     Cx2 = 0.730 - 1.580 lambda + 2.910 e^(-6.000 lambda)
@@ -138,19 +139,25 @@ def flange_coefficients(lam: float, tapered: bool) -> dict[str, float]:
 def wheel_flange_stress(p: float, tf: float, bf: float, tw: float, a: float, tapered: bool,
                         global_stress: float) -> tuple[float, str, dict]:
     """Largest von Mises stress of the bottom flange at points 0, 1, 2 under one wheel load p
-    (N, magnitude) with the global bending stress of the bottom fibre there (Pa, tension +).
-    Returns (stress, point, numbers used)."""
+    (N, magnitude) with the global bending stress of the bottom fibre there (Pa, tension +),
+    on both faces of the flange: the coefficients give the underside, and the top face of
+    the bottom flange carries the same local stresses with the other sign. Where the beam
+    hogs (a jib, a run-out, over a hanger) the global compression adds to the top face's
+    local compression, and that face is the worse; the bottom fibre's global stress is taken
+    on both faces (a little more than the top face's: on the safe side). Returns (stress,
+    point, numbers used)."""
     lam = min(max(2 * a / (bf - tw), 0.0), 1.0)
     c = flange_coefficients(lam, tapered)
     q = p / tf**2
     best = (-1.0, "", {})
-    for i in ("0", "1", "2"):
-        sx = c["cx" + i] * q + global_stress
-        sy = c["cy" + i] * q
-        vm = math.sqrt(sx * sx + sy * sy - sx * sy)
-        if vm > best[0]:
-            best = (vm, i, {"lambda": lam, "cx": c["cx" + i], "cy": c["cy" + i], "sx": sx,
-                            "sy": sy, "local_x": c["cx" + i] * q})
+    for face, sign in (("underside", 1.0), ("top face", -1.0)):
+        for i in ("0", "1", "2"):
+            sx = sign * c["cx" + i] * q + global_stress
+            sy = sign * c["cy" + i] * q
+            vm = math.sqrt(sx * sx + sy * sy - sx * sy)
+            if vm > best[0] * (1 + 1e-12):  # the underside where both faces agree
+                best = (vm, i, {"lambda": lam, "cx": c["cx" + i], "cy": c["cy" + i], "sx": sx,
+                                "sy": sy, "local_x": sign * c["cx" + i] * q, "face": face})
     return best
 
 
@@ -241,7 +248,7 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
         f"memory): sigma = C P / tf^2 ({'tapered' if tapered else 'parallel'} flange, lambda = 2a/(bf - tw) = "
         f"{used['lambda']:.3f}), plus the global bending stress, von Mises <= {limit_words}",
         at,
-        detail=f"point {point} ({names[point]}); {words}",
+        detail=f"point {point} ({names[point]}), {used['face']} of the bottom flange; {words}",
         clause="CMAA 74 local flange bending; AISC Design Guide 7 (2nd ed.) monorail flange "
                "bending (sections from memory)",
         source="CMAA 74 / EN 1993-6 5.7.2 coefficients (from memory)",
