@@ -1907,6 +1907,11 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
                "apply", "loads")
 
 
+# A monorail that runs further than this past its outer hanger has a run-out the hoist
+# travels onto (a shorter stub carries the end stop, not the hoist)
+RUNOUT_MIN = 0.305  # 1 ft
+
+
 def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw, supports,
                   length, system: str) -> None:
     """A monorail or jib hoist given as a point load at one place: the hoist travels by
@@ -1928,10 +1933,24 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     reach = length - held[-1] if held else 0.0
     if jib and held and ld.at >= held[-1] + min(0.9 * reach, reach - 0.305):
         return  # at the end of the reach (an end stop up to a foot short of the tip)
+    at = units.fmt(ld.at, "length", system)
+    runout = max(held[0], length - held[-1]) if held else 0.0
+    if not jib and runout > RUNOUT_MIN:
+        # the hoist runs out past the last hanger: at the run-out's end it is worst for the
+        # run-out (its deflection, the hogging over the hanger), at mid-span for the span;
+        # no one place covers both (a hoist at mid-span had been rated 43 % high)
+        r.hold(f"{ld.key} is the hoist at {at} only, but this monorail runs "
+               f"{units.fmt(runout, 'length', system)} past its outer hanger, and the hoist "
+               "travels onto that run-out: at its end the run-out deflects and bends the most, "
+               "at mid-span the span does, and no one place covers both, so no rating is "
+               "posted. Give the hoist as a [[moving]] wheel set (loads per axle, spacing, "
+               "travel between the end stops) to rate every place", f"{ld.key}.at",
+               f"the hoist ({ld.key}) is placed at {at} only, on a monorail with a run-out "
+               "it travels onto. Give it as [[moving]]")
+        return
     if not jib and any(abs(ld.at - (a + b) / 2) <= 0.01 * (b - a)
                        for a, b in zip(held, held[1:])):
         return  # at the middle of a span
-    at = units.fmt(ld.at, "length", system)
     worst = "the end stop" if jib else "mid-span"
     device = "jib boom" if jib else "monorail"
     # a figure for one place away from the worst is not what a label on a travelling hoist
