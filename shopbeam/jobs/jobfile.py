@@ -732,16 +732,26 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
                    "criteria.category")
     if lift and not given:
         ratio = LIFTING_PROFILES[lift]["deflection"]
+    # an impact below the device's is held, not only warned: the label posts the hook load,
+    # and a hook load typed with its impact already in it under impact = "0%" had been posted
+    # 15 % over a powered jib's figure
     if not lift and lifting and impact is not None and impact < 0.25:
-        r.warn(f"impact {impact:.3g} ({impact * 100:.3g}%) is below the 25% of a powered "
-               "monorail or jib (ASCE 7-16 4.9.3), the profile tags = [\"lifting\"] picks; "
-               "name the device with [criteria] lifting = \"hand-geared-monorail\" or "
-               "\"hand-geared-jib\" (0%) if that is what it is", "criteria.impact")
+        r.hold(f"impact {impact:.3g} ({impact * 100:.3g}%) is below the 25% of a powered "
+               "monorail or jib (ASCE 7-16 4.9.3), the profile tags = [\"lifting\"] picks, so "
+               "no rating is posted. Remove impact (the profile's is used; give the hook load "
+               "itself, without impact), or name the device with [criteria] lifting = "
+               "\"hand-geared-monorail\" or \"hand-geared-jib\" (0%) if that is what it is",
+               "criteria.impact",
+               f"impact {impact * 100:.3g}% is below the 25% of a powered monorail or jib "
+               "(ASCE 7-16 4.9.3). Remove it, or name a hand-geared profile")
     if lift and impact is not None and impact < LIFTING_PROFILES[lift]["impact"]:
-        r.warn(f"impact {impact * 100:.3g}% is below the "
-               f"{LIFTING_PROFILES[lift]['impact']:.0%} of the "
-               f"{lift} profile ({LIFTING_PROFILES[lift]['impact_source']}); the checks use "
-               "the value written", "criteria.impact")
+        need = LIFTING_PROFILES[lift]["impact"]
+        r.hold(f"impact {impact * 100:.3g}% is below the {need:.0%} of the {lift} profile "
+               f"({LIFTING_PROFILES[lift]['impact_source']}), so no rating is posted. Remove "
+               "impact (the profile's is used; give the hook load itself, without impact), or "
+               "name the profile the device is", "criteria.impact",
+               f"impact {impact * 100:.3g}% is below the {need:.0%} of the {lift} profile "
+               f"({LIFTING_PROFILES[lift]['impact_source']}). Remove it")
     fat_cat, cycles = _read_fatigue(r, crit)
     return Criteria(text, ratio, absolute, float(sf), basis, impact, preset, given,
                     live_deflection_ratio=live, lifting=lift, category=cat,
