@@ -928,6 +928,9 @@ def test_a_hand_geared_profile_on_a_powered_hoist_withholds_the_rating():
     title = next(ln for ln in text.splitlines() if ln.startswith("title = "))
     job = parse_job_text(text.replace(title, 'title = "Electric monorail hoist beam"', 1))
     assert any('"powered-monorail"' in g for g in _gaps(job))
+    # an electric chain hoist is often called a chain motor: rated 26 % high before
+    job = parse_job_text(text.replace(title, 'title = "Monorail, 1 ton chain motor"', 1))
+    assert any('"powered-monorail"' in g for g in _gaps(job))
 
 
 def test_a_rack_beam_with_fixed_ends_withholds_the_rating_but_a_rack_arm_does_not():

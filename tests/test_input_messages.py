@@ -232,6 +232,9 @@ def test_a_dead_only_shelf_is_not_told_about_lifting():
     ("Cherry picker boom", "[]", "title: 'Cherry picker'"),
     ("Lifting lug bar", '["not-lifting-x"]', "title: 'Lifting'"),
     ("Arm 2", '["lift"]', "tag 'lift'"),
+    ("Block & tackle beam", "[]", "title: 'Block & tackle'"),
+    ("Engine pulling beam over bay 2", "[]", "title: 'pulling beam'"),
+    ("Pick-up beam for the press dies", "[]", "title: 'Pick-up beam'"),
 ])
 def test_more_lifting_words_make_an_untagged_job_not_rated(title, tags, found):
     job = parse_job_text(cantilever("36 in", tags=tags, title=title))
@@ -1073,3 +1076,15 @@ def test_a_bare_length_suggests_feet_or_inches():
     text = cantilever("36 in").replace('length = "36 in"', 'length = "96"')
     msg = refused(text)[0].message
     assert '"96 ft"' in msg and '"96 in"' in msg
+
+
+def test_a_load_hung_from_a_lug_makes_an_untagged_job_read_like_a_lifting_device():
+    # lug = true is a lifting beam's shackle point or a hoist's lug plate: an untagged
+    # job with one had been rated as a plain beam (81 % over ASME BTH-1 Category B)
+    text = cantilever("36 in", tags="[]", title="Beam over bay 2")
+    job = parse_job_text(text)
+    assert not job.lifting_hint
+    line = next(ln for ln in text.splitlines() if ln.startswith("value = "))
+    job = parse_job_text(text.replace(line, line + "\nlug = true", 1))
+    assert "lug = true" in job.lifting_hint
+    assert any("reads like a lifting device" in r for r in capacity(job).not_rated)

@@ -1722,7 +1722,7 @@ NOT_LIFTING = "not-lifting"  # the tag that says a job that reads like one is no
 _LIFTING_WORDS = re.compile(
     r"\b(hoists?|hoisting|monorails?|jibs?|cranes?|trolleys?|chain[- ]?falls?|chain[- ]?blocks?|"
     r"lifting|lift beams?|spreaders?|davits?|gantry|gantries|below[- ]the[- ]hook|rigging|"
-    r"block and tackle|tackle blocks?|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
+    r"block (?:and|&|n'?) tackle|tackle blocks?|pulling beams?|pick[- ]?up beams?|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
     r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
     r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
     r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?|"
@@ -2011,7 +2011,8 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
 
 
 _POWERED_WORDS = re.compile(r"\b(electric|powered|motori[sz]ed|motor[- ]driven|air hoists?|"
-                            r"pneumatic|vfd|push[- ]button|pendant|radio[- ]controlled)\b",
+                            r"pneumatic|vfd|push[- ]button|pendant|radio[- ]controlled|"
+                            r"chain[- ]?motors?|hoist motors?|motor hoists?|battery)\b",
                             re.IGNORECASE)
 
 
@@ -2167,6 +2168,13 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
         said += [f"title: {joined[0]!r}"] if joined else []
     if moving:
         said.append("it has trolley wheels ([[moving]])")
+    # a load hung from a lug (a lifting beam's shackle point) or on trolley wheels or clamp
+    # jaws: the keys say what the words may not
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        if _is_table(ld) and (ld.get("lug") is True or "wheels" in ld):
+            said.append(f"loads[{i}] has " + ("lug = true" if ld.get("lug") is True
+                                               else "wheels"))
+            break
     if not said:
         return ""
     key = "tags" if tags else "title"
