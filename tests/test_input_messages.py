@@ -1088,3 +1088,55 @@ def test_a_load_hung_from_a_lug_makes_an_untagged_job_read_like_a_lifting_device
     job = parse_job_text(text.replace(line, line + "\nlug = true", 1))
     assert "lug = true" in job.lifting_hint
     assert any("reads like a lifting device" in r for r in capacity(job).not_rated)
+
+
+def _span(title, length, tags="[]", notes=""):
+    return f"""schema = 1
+title = "{title}"
+notes = "{notes}"
+tags = {tags}
+[beam]
+length = "{length}"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 in"
+type = "pin"
+[[supports]]
+at = "{length}"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 in"
+end = "{length}"
+value = "-50 lbf/ft"
+"""
+
+
+@pytest.mark.parametrize("title, length, notes, held", [
+    ("Shelf beam, 12 ft span", "12 in", "", True),      # the unit slipped: 12 in for 12 ft
+    ("Loft joist", "3.6 ft", "3.6 m between posts", True),
+    ("Shelf 12 in deep, 12 ft long", "12 ft", "", False),  # the words agree somewhere
+    ("Shelf 12 in deep", "12 ft", "", False),            # a shorter unit: on the safe side
+    ("Shelf beam, 12 ft span", "12 ft", "", False),
+    ("Bay 12 shelf", "12 in", "", False),                # a number with no unit
+    ("Shelf beam, 12 ft span", "10 ft 6 in", "", False),  # only a plain length is compared
+])
+def test_a_length_whose_unit_disagrees_with_the_title_is_not_rated(title, length, notes,
+                                                                    held):
+    # a jib typed "12 in" for its "12 ft reach" had been rated at 10 times its figure
+    job = parse_job_text(_span(title, length, notes=notes))
+    assert any("unit of beam.length" in h for h in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("length, tags, criteria, held", [
+    ("18 in", '["lifting"]', "", True),                 # a monorail 18 in long
+    ("3 ft", '["lifting"]', "", False),
+    ("18 in", '["lifting"]', '[criteria]\nlifting = "below-the-hook"\ncategory = "B"', False),
+])
+def test_a_monorail_or_jib_under_two_feet_long_is_not_rated(length, tags, criteria, held):
+    text = _span("Beam", length, tags=tags).replace(
+        'type = "uniform"\nstart = "0 in"\nend = "' + length + '"\nvalue = "-50 lbf/ft"',
+        'type = "point"\nat = "0 in"\nvalue = "-500 lbf"') + criteria
+    job = parse_job_text(text)
+    assert any("monorail or jib" in h and "long" in h for h in capacity(job).not_rated) == held

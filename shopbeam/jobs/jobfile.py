@@ -1975,6 +1975,70 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
            f"{device} that it travels along. Put it at {worst}, or give it as [[moving]]")
 
 
+# A length written in the title or notes ("12 ft reach", "3.6 m span", 8')
+_LENGTH_WORDS = re.compile(r"(?<![\w.])(\d+(?:\.\d+)?)\s*-?\s*(feet|foot|ft|inches|inch|in|mm|cm|m|'|\")"
+                           r"(?![a-z0-9])", re.IGNORECASE)
+_LENGTH_UNITS = {"feet": "ft", "foot": "ft", "ft": "ft", "'": "ft", "inches": "in", "inch": "in",
+                 "in": "in", '"': "in", "mm": "mm", "cm": "cm", "m": "m"}
+_UNIT_M = {"ft": 0.3048, "in": 0.0254, "mm": 0.001, "cm": 0.01, "m": 1.0}
+
+
+def _length_against_words(r: _Reader, raw, length, title, notes, system: str) -> None:
+    """beam.length typed as a number and one unit ("12 in") while the title or notes give the
+    same number in a longer unit ("12 ft reach") and nowhere the length typed: the unit
+    slipped, and the member is rated for a span it does not have (a jib typed "12 in" for
+    "12 ft" had been rated at 10 times its figure). Held; a shorter unit in the words is
+    on the safe side and left alone."""
+    if not isinstance(raw, str) or length is None:
+        return
+    m = re.fullmatch(r"\s*(\d+(?:\.\d+)?)\s*(feet|foot|ft|inches|inch|in|mm|cm|m|'|\")\s*",
+                     raw, re.IGNORECASE)
+    if not m:
+        return
+    number = float(m.group(1))
+    said = []
+    for where, text in (("title", title), ("notes", notes)):
+        for w in _LENGTH_WORDS.finditer(str(text or "")):
+            unit = _LENGTH_UNITS[w.group(2).lower()]
+            said.append((where, w.group(0).strip(), float(w.group(1)) * _UNIT_M[unit]))
+    if not said or any(abs(v - length) <= 0.02 * length for _, _, v in said):
+        return
+    longer = [(where, words) for where, words, v in said
+              if abs(float(_LENGTH_WORDS.match(words).group(1)) - number) < 1e-9
+              and v > 1.5 * length]
+    if not longer:
+        return
+    where, words = longer[0]
+    r.hold(f"beam.length is {raw.strip()}, but the {where} says {words!r}: the same number in "
+           "a longer unit, so the unit of the length has likely slipped, and a member rated "
+           "for a shorter span than it has posts far too much. Fix the unit of beam.length; "
+           f"if the {where}'s {words!r} is some other length, reword it (e.g. \"bay 12\")",
+           "beam.length",
+           f"beam.length is {raw.strip()} but the {where} says {words!r}. Fix the unit of "
+           "beam.length")
+
+
+# A monorail or jib shorter than this is a length typed in the wrong unit (a jib boom of
+# 12 in), not a lifting device (common practice, no source); a below-the-hook beam may be
+# shorter and is left alone
+SHORT_LIFTING = 0.61  # 2 ft
+
+
+def _short_lifting_member(r: _Reader, criteria: Criteria, tags, supports, length,
+                          system: str) -> None:
+    if length is None or not supports or not is_lifting(tags, criteria.lifting):
+        return
+    name = criteria.lifting or guessed_profile(supports, length)
+    if name == "below-the-hook" or length >= SHORT_LIFTING:
+        return
+    r.hold(f"this lifting member is {units.fmt(length, 'length', system)} long: a monorail or "
+           "jib that short is almost always a length typed in the wrong unit (\"12 in\" for "
+           "\"12 ft\"), and it would be rated at many times its figure, so no rating is "
+           "posted. Check beam.length and every position's unit", "beam.length",
+           f"a monorail or jib {units.fmt(length, 'length', system)} long: check the unit of "
+           "beam.length")
+
+
 def lifting_uniform_words(live) -> str:
     """What to say of a lifting job whose live loads are all spread (the hook load typed as a
     uniform or linear load): the reader warns it, and design.capacity posts no rating."""
@@ -3070,6 +3134,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         criteria = _floor_live_limit(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
+    _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,
+                          title, notes, system)
+    _short_lifting_member(r, criteria, tags, supports, length, system)
     if not support_refused:
         _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
