@@ -324,6 +324,12 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
 
 
 NO_AXIAL = "no-axial"  # the tag that says a lifting member's rigging puts no thrust in it
+# Words that say something does push a lifting member endwise, against the tag no-axial
+_THRUST_WORDS = re.compile(
+    r"\b(tie[- ]?rods?|knee[- ]?braces?|struts?|diagonal braces?|"
+    r"(?:two|2|three|3|four|4)[- ]legs?(?: slings?| bridles?)?|bridles?|"
+    r"(?:to|on|from) (?:the|one|a|a single) (?:crane )?hook|"
+    r"(?:sloped|angled|inclined|leaning) slings?)\b", re.IGNORECASE)
 FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked elsewhere
 
 
@@ -363,6 +369,19 @@ def use_unchecked(job: Job) -> list[Unchecked]:
                 "checked as a beam-column, or add the tag \"no-axial\" if nothing pushes it "
                 "endwise",
                 "AISC 360-16 E3, H1-1"))
+    if job.lifting and NO_AXIAL in job.tags:
+        said = _THRUST_WORDS.search(" | ".join(
+            [job.title or "", job.notes or "", *(getattr(x, "label", "") or ""
+                                                 for x in (*job.supports, *job.loads))]))
+        if said:
+            out.append(Unchecked(
+                "axial compression (the tag no-axial contradicted)",
+                f"the tag \"no-axial\" says nothing pushes the member endwise, but the job "
+                f"says {said.group(0)!r}: a tie rod or knee brace pushes a boom toward its "
+                "mast, and slings that lean in to one hook push a beam endwise, and bending "
+                "with that thrust is not checked here. Have it checked as a beam-column; if "
+                "the words do not describe this member (slings that hang plumb), reword them",
+                "ASME BTH-1 3-2.2 and 3-2.5; AISC 360-16 E3, H1-1"))
     road = getattr(job, "vehicle", "")
     parked = job.criteria.impact == 0 and not job.lifting  # loaded only while parked
     if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job) and not parked:
