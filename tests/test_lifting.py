@@ -646,3 +646,19 @@ def test_a_monorail_with_a_run_out_is_not_rated_from_one_hoist_place(length, hel
     res = capacity(parse_job_text(text))
     assert any("run-out" in w and "[[moving]]" in w for w in res.not_rated) == held
     assert res.rated == (not held)
+
+
+@pytest.mark.parametrize("support_keys, held", [
+    ('label = "hanger rod H1"', True),
+    ('label = "hanger rod H1"\nbrace = true', False),   # the hanger grips both flanges
+    ('label = "hanger H1"', False),
+    ('label = "chain to the truss"', True),
+])
+def test_a_lifting_support_labelled_a_hanger_rod_needs_its_brace_key(support_keys, held):
+    # a single rod does not hold the member against twist, which the checks take each
+    # support to do (AISC 360-16 F1 braced points; common practice): the job's own words
+    # deny what the rating rests on, so it waits for brace = true or false
+    text = _member().replace('at = "0 ft"\ntype = "pin"\n',
+                             f'at = "0 ft"\ntype = "pin"\n{support_keys}\n') + RATED
+    res = capacity(parse_job_text(text))
+    assert any("brace = true or brace = false" in w for w in res.not_rated) == held

@@ -1975,6 +1975,35 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
            f"{device} that it travels along. Put it at {worst}, or give it as [[moving]]")
 
 
+# A support label that says the member hangs from a rod, chain or sling there: a single rod
+# does not hold the member against twist, which a bearing support is taken to do
+_ROD_WORDS = re.compile(r"\b(hanger rods?|threaded rods?|all[- ]?thread|rods?|eye ?bolts?|"
+                        r"chains?|slings?|cables?|wire ropes?|hanger straps?)\b", re.IGNORECASE)
+
+
+def _hung_from_rods(r: _Reader, criteria: Criteria, tags, raw_supports) -> None:
+    """A lifting job's support labelled as a hanger rod (chain, sling...) with no brace key:
+    the checks take every support as holding the member against twist (its braced point for
+    lateral-torsional buckling), which a single rod does not; the rating would rest on what
+    the job's own words deny (the label says so), so it is held until brace is written."""
+    if not is_lifting(tags, criteria.lifting) or not isinstance(raw_supports, list):
+        return
+    for i, sp in enumerate(raw_supports):
+        if not _is_table(sp) or "brace" in sp or sp.get("type") == "hinge":
+            continue
+        label = sp.get("label")
+        m = _ROD_WORDS.search(label) if isinstance(label, str) else None
+        if m:
+            r.hold(f"the support is labelled {label!r}: a member hung from a single rod, "
+                   "chain or sling is not held against twist there, but the checks take each "
+                   "support as holding it (its braced point for lateral-torsional buckling), "
+                   "so no rating is posted. Write brace = true on the support if the hanger "
+                   "holds both flanges (clamp plates, a bolted seat), or brace = false if it "
+                   "does not", f"supports[{i}].label",
+                   f"supports[{i}] is labelled {label!r} but says nothing of holding the "
+                   "member against twist. Write brace = true or brace = false on it")
+
+
 # A length written in the title or notes ("12 ft reach", "3.6 m span", 8')
 _LENGTH_WORDS = re.compile(r"(?<![\w.])(\d+(?:\.\d+)?)\s*-?\s*(feet|foot|ft|inches|inch|in|mm|cm|m|'|\")"
                            r"(?![a-z0-9])", re.IGNORECASE)
@@ -3134,6 +3163,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         criteria = _floor_live_limit(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
+    _hung_from_rods(r, criteria, tags, data.get("supports"))
     _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,
                           title, notes, system)
     _short_lifting_member(r, criteria, tags, supports, length, system)
