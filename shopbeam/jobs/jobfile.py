@@ -487,6 +487,10 @@ class _Reader:
                           "end, AISC 360-16 B4.3 and J4 for holes), or remove the key if it is "
                           "not cut", path)
                 continue
+            table_slip = _table_slip(str(k), table[k], here)
+            if table_slip:
+                self.error(table_slip, f"{prefix}.{k}" if prefix else str(k))
+                continue
             near = difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.6)
             hint = f"; did you mean {near[0]!r}?" if near else f"; known keys: {', '.join(sorted(known))}"
             homes = _homes(k, here)
@@ -520,6 +524,36 @@ class _Reader:
     @property
     def errors(self) -> list[Problem]:
         return [p for p in self.problems if not p.warning]
+
+
+_MAIN_TABLES = ("loads", "supports", "moving", "beam", "criteria")
+
+
+def _table_slip(k: str, value, here: str) -> str:
+    """What is wrong with an unknown table that is one of the job's own tables written wrong
+    ([[Loads]], [[load]], [Criteria], or [[beam.loads]] inside another table): read as
+    unknown, its entries would be left out and the job solved without them (every check
+    passing on a beam with no loads), so it is refused, as a slip inside a table is. ""
+    when the key is not such a table."""
+    many = isinstance(value, list) and bool(value) and all(isinstance(x, dict) for x in value)
+    if not (isinstance(value, dict) or many):
+        return ""
+    bare = re.sub(r"[\W_]", "", k).lower()
+    target = next((t for t in _MAIN_TABLES if bare in (t, t.rstrip("s"), t + "s")), None)
+    if target is None:
+        near = difflib.get_close_matches(bare, _MAIN_TABLES, n=1, cutoff=0.8)
+        target = near[0] if near else None
+    if target is None or (here and target not in ("loads", "supports", "moving")):
+        return ""
+    written = f"[[{here + '.' if here else ''}{k}]]" if many else \
+        f"[{here + '.' if here else ''}{k}]"
+    right = f"[[{target}]]" if target in ("loads", "supports", "moving") else f"[{target}]"
+    what = (f"its {len(value)} entr{'y' if len(value) == 1 else 'ies'} would be left out and "
+            f"the job checked without {'it' if len(value) == 1 else 'them'}") if many else \
+        "its keys would be left out and the job checked without them"
+    where = (f"it puts the {target} inside {_TABLES.get(here, here)}" if here else
+             "table names are exact: lower case, as the job-file guide writes them")
+    return f"{written} is not a table shopbeam reads ({where}), so {what}. Write {right}"
 
 
 # An unknown key that says the member is cut (notched, coped, drilled, slotted): a limit state
