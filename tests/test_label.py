@@ -135,6 +135,13 @@ value = "-10 lbf"
 """
     r = label.rating(capacity(parse_job_text(text)))
     assert r.status == "do not load" and "DO NOT LOAD" in label.label_text(r)
+    # capacity --json: rated false always comes with a reason a script can print
+    from shopbeam.design.capacity import to_json
+    for res in (capacity(job), capacity(parse_job_text(text))):
+        d = to_json(res)
+        assert d["rated"] is False
+        assert d["not_rated_reasons"] and d["not_rated_reasons"] == d["capacity"]["not_rated"]
+        assert d["not_rated_reasons"][0] == res.note
 
 
 def test_uniform_label_value_matches_the_capacity_rounded_down():

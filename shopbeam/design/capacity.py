@@ -812,9 +812,12 @@ def to_json(res: CapacityResult) -> dict:
     out["checks"] = [c.as_dict(bending_s(res.job)) for c in res.checks]
     out["governing"] = res.governing.name if res.governing else None
     out["rated"] = res.rated
-    out["not_rated_reasons"] = list(res.not_rated)
+    # with no factor to post (no live load; DO NOT LOAD) the note is the reason: a script
+    # that prints the reasons when rated is false has one to print
+    reasons = list(res.not_rated) or ([res.note or "no factor to post"] if not res.rated else [])
+    out["not_rated_reasons"] = reasons
     out["capacity"] = {"method": res.method, "note": res.note,
-                       "not_rated": list(res.not_rated),
+                       "not_rated": list(reasons),
                        "basis": BASIS_WORDS[basis_of(res.job)],
                        "max_load": dict(max_load_lines(res)),
                        "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
