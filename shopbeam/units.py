@@ -95,9 +95,18 @@ _UNICODE = {
 }
 
 
+# Fraction characters as the fractions they are ("10½ ft" is 10 1/2 ft)
+_VULGAR = {"\u00bd": "1/2", "\u00bc": "1/4", "\u00be": "3/4", "\u215b": "1/8", "\u215c": "3/8",
+           "\u215d": "5/8", "\u215e": "7/8", "\u2153": "1/3", "\u2154": "2/3"}
+
+
 def _normalise(text: str) -> str:
     for a, b in _UNICODE.items():
         text = text.replace(a, b)
+    text = text.replace("\u2044", "/")  # the fraction slash: 1⁄2
+    for a, b in _VULGAR.items():
+        if a in text:
+            text = re.sub(rf"(?<=\d)\s*{a}", f" {b}", text).replace(a, b)
     text = text.replace("''", '"')
     # feet and inch marks become words; a mark is only a mark right after a number or space
     text = re.sub(r"(?<=[\d\s])'", " ft ", text)

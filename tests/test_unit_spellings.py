@@ -76,6 +76,14 @@ def test_shop_notation_still_reads():
     assert units.parse("1-1/2 in", "length") == pytest.approx(1.5 * IN)
 
 
+@pytest.mark.parametrize("text, inches", [("10\u00bd ft", 126.0), ("10 \u00bd ft", 126.0),
+                                          ("\u00bd in", 0.5), ("3\u00be\"", 3.75),
+                                          ("1\u20442 in", 0.5), ("5 ft 6\u215b in", 66.125)])
+def test_fraction_characters_read_as_the_fractions_they_are(text, inches):
+    # "10½ ft" had been refused as the unknown unit "½ ft" (the unit was never the problem)
+    assert units.parse(text, "length") == pytest.approx(inches * IN, rel=1e-12)
+
+
 def test_a_refused_unit_lists_what_to_write():
     with pytest.raises(InputError) as e:
         units.parse("150 ft-lbz", "moment", "loads[0].value")
