@@ -1140,3 +1140,11 @@ def test_a_monorail_or_jib_under_two_feet_long_is_not_rated(length, tags, criter
         'type = "point"\nat = "0 in"\nvalue = "-500 lbf"') + criteria
     job = parse_job_text(text)
     assert any("monorail or jib" in h and "long" in h for h in capacity(job).not_rated) == held
+
+
+def test_two_values_on_a_uniform_load_say_that_two_are_a_linear_load():
+    text = _span("Shelf", "8 ft").replace('value = "-50 lbf/ft"',
+                                           'value = ["-50 lbf/ft", "-40 lbf/ft"]')
+    got = refused(text)
+    assert len(got) == 1 and got[0].key == "loads[0].value"
+    assert 'type = "linear"' in got[0].message

@@ -1287,6 +1287,12 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
             conversions.append((key, f"total {ld['total']} over {units.fmt(end - start, 'length', r.system)}",
                                 w))
         else:
+            if isinstance(ld.get("value"), list):
+                r.error("a uniform load has one value (a load per length such as \"-25 "
+                        "lbf/ft\"); two values, at the start and at the end, are a linear "
+                        "load: write type = \"linear\" for them, or give the one value",
+                        f"{key}.value")
+                return None
             w = _line_load(r, ld, ld.get("value"), f"{key}.value", area) if "value" in ld else None
             if "value" not in ld:
                 r.error("missing 'value' (a load per length such as \"-25 lbf/ft\", a load per "
