@@ -859,6 +859,9 @@ def hogging_source(job: Job, st) -> str:
                 "throughout its length) and 4.4.1.2")
     if getattr(job.material, "kind", "") == "aluminum":
         return "ADM 2015 chapter F (lateral-torsional buckling, not computed)"
+    if getattr(getattr(job, "section", None), "shape", "") == "custom":
+        return ("AISC 360-16 chapter F (lateral-torsional buckling of the compression edge; "
+                "a custom section's shape is not known, so it is not computed here)")
     if fl.ltb is None or fl.stress_s is not None:
         return "AISC 360-16 F11 (deep bar lateral-torsional buckling, not computed here)"
     return "AISC 360-16 F1, F2 (Lb between braces of the compression flange)"
