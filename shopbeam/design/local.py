@@ -650,6 +650,8 @@ def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
     else:
         given = f"bearing length not given: lb = 0 taken (a knife edge, conservative); {give}"
         short = "lb = 0: bearing length not given (conservative)"
+    if name == "flange local bending":  # J10-1 has no bearing length
+        given = short = "J10-1 does not depend on the bearing length"
     src = HSS_SOURCE if clause.endswith("K2.2") else SOURCE
     formula = {"web local yielding": "Ru <= Rn / 1.50, Rn = Fyw tw (5k + lb) (J10-2) or "
                                      "Fyw tw (2.5k + lb) within d of the end (J10-3)",
