@@ -662,3 +662,17 @@ def test_a_lifting_support_labelled_a_hanger_rod_needs_its_brace_key(support_key
                              f'at = "0 ft"\ntype = "pin"\n{support_keys}\n') + RATED
     res = capacity(parse_job_text(text))
     assert any("brace = true or brace = false" in w for w in res.not_rated) == held
+
+
+def test_the_hoist_weight_reminder_is_said_only_where_none_is_entered():
+    # a caution that is always there is one people learn to skip
+    from shopbeam.design.checks import check_notes
+
+    def said(text):
+        return any("Enter the hoist and trolley weight" in n
+                   for n in check_notes(parse_job_text(text)))
+
+    assert said(parked(RATED))
+    assert not said(parked(RATED + HOIST))
+    assert not said(monorail(extra='dead = ["-100 lbf"]'))
+    assert said(monorail())

@@ -1522,7 +1522,11 @@ def check_notes(job, st: Strengths | None = None) -> list[str]:
         out.append(f"Impact allowance {imp:.0%} on the live loads ({why}) is included in the "
                    "checks.")
     out += lifting_notes(job, prof)
-    if job.lifting:
+    # said only where the job has no hoist weight of its own yet (a caution that is always
+    # there is one people learn to skip), and not of a below-the-hook beam (no hoist on it)
+    given = any(ld.case == "dead" and ld.kind == "point" and ld.value for ld in job.loads) or \
+        any(any(ws.dead) for ws in (getattr(job, "moving", ()) or ()))
+    if job.lifting and not given and (prof is None or prof.name != "below-the-hook"):
         out.append("Enter the hoist and trolley weight as its own load (case = \"dead\", or "
                    "dead = [...] on a [[moving]] wheel set) so it is not rated as payload.")
     return out
