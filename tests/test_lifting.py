@@ -676,3 +676,19 @@ def test_the_hoist_weight_reminder_is_said_only_where_none_is_entered():
     assert not said(parked(RATED + HOIST))
     assert not said(monorail(extra='dead = ["-100 lbf"]'))
     assert said(monorail())
+
+
+def test_a_misspelt_profile_gets_its_own_message_alone():
+    # lifting = "below the hook" (a space for the hyphen) had also been told it names no
+    # profile, and its category that it is used only with one
+    from shopbeam.errors import InputErrors
+
+    text = below_the_hook("B").replace('lifting = "below-the-hook"', 'lifting = "below the hook"')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    keys = [p.key for p in got.value.problems]
+    assert keys == ["criteria.lifting"], keys
+    # a valid other profile with a category still hears that category is unused there
+    job = parse_job_text(below_the_hook("B").replace('lifting = "below-the-hook"',
+                                                     'lifting = "powered-monorail"'))
+    assert any(p.key == "criteria.category" for p in job.warnings)

@@ -760,7 +760,8 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
             r.error(f"category {raw!r}: the ASME BTH-1 design category is \"A\" or \"B\"",
                     "criteria.category")
             cat = ""
-        elif lift != "below-the-hook":
+        elif lift != "below-the-hook" and not ("lifting" in crit and not lift):
+            # (not said beside a refused profile: its own message says what to write)
             r.warn("category is the ASME BTH-1 design category of a below-the-hook lifting "
                    "beam; it is used only with lifting = \"below-the-hook\"",
                    "criteria.category")
@@ -2270,8 +2271,9 @@ def _below_the_hook_hint(r: _Reader, title, notes, tags, criteria) -> str:
     spreader or lifting beam): the guessed profile (monorail or jib) uses AISC Omega, where
     ASME BTH-1 sets a design factor Nd (2.0 or 3.0, from memory) that is never guessed.
     Warned, and no rating is posted until the profile is named."""
-    if not is_lifting(tags) or criteria.lifting:
-        return ""
+    if not is_lifting(tags) or criteria.lifting or \
+            any(p.key == "criteria.lifting" and not p.warning for p in r.problems):
+        return ""  # a profile named (or named wrong: refused with its own message)
     said = _words_found(_BTH_WORDS, title, notes, tags, [], frozenset())
     if not said:
         return ""
