@@ -574,8 +574,9 @@ def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
             f"length, Cb 1.0); loads bearing on its top flange destabilise it (effective length "
             f"about {k:g} x L), which lowers its bending strength to {top / now:.0%} of the "
             "figure checked; no rating is posted where the rated load would exceed that lower "
-            "strength (brace the tip with beam.braces, or hang the loads below the flange "
-            "with flange = \"bottom\")",
+            "strength (brace the tip where one can be fitted, beam.braces; hang a point load "
+            "below the flange, flange = \"bottom\"; or choose a section that passes at the "
+            "lower strength)",
             "AISC 360-16 F1 (Cb 1.0 at a free end); top-flange loading, SSRC Guide (from "
             "memory)", blocks_rating=False))
     return out

@@ -596,8 +596,10 @@ def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
                        f"its moment {f(demand, 'moment')} exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
-                       "centre, as checked). Brace the tip (beam.braces), or hang the loads "
-                       "below the flange (flange = \"bottom\")")
+                       "centre, as checked). Brace the tip where one can be fitted "
+                       "(beam.braces), hang a point load below the flange (flange = "
+                       "\"bottom\"), or choose a section that passes at the lower strength "
+                       "(shopbeam size)")
     return tuple(out)
 
 
