@@ -479,6 +479,34 @@ async def test_digits_typed_on_a_choice_change_no_view_and_are_named_in_a_notice
 
 
 @sync
+async def test_keys_typed_slowly_where_nothing_takes_them_make_one_notice(tmp_path):
+    # "-250" at 0.9 s a key had stacked four notices over the screen; the slow keys join one
+    # notice, updated, which says why a digit did not change views
+    from shopbeam.tui.app import JobScreen
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    join = JobScreen.STRAY_JOIN
+    JobScreen.STRAY_JOIN = 5.0  # wide: the test never races the clock
+    try:
+        async with app.run_test(size=SIZE) as pilot:
+            await settle(pilot)
+            await pilot.press("f3")
+            await settle(pilot)
+            sw = [c for c in app.job_screen.query("#span Choice")
+                  if c.key == "beam.self_weight"][0]
+            sw.focus()
+            await settle(pilot)
+            for ch in "-250":
+                await burst(pilot, ch)
+                await pilot.pause(app.job_screen.STRAY_WAIT + 0.2)  # each said on its own
+            said = [m for m in _notices(app) if "Not typed anywhere" in m]
+            assert len(said) == 1 and '"-250"' in said[0], said
+            assert "press it again to change views" in said[0]
+            assert app.job_screen.current == "span"
+    finally:
+        JobScreen.STRAY_JOIN = join
+
+
+@sync
 async def test_a_letter_on_a_choice_that_names_no_option_is_not_a_view_key(tmp_path):
     # "s" is the Size view's key outside a field; on a choice with no option starting with
     # s it was taken as that key

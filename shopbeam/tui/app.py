@@ -415,17 +415,36 @@ class JobScreen(Screen):
     _switched = ("", 0.0)  # the last view switched to, and when (time.monotonic)
     _switched_key = -2  # the count of the key that switched it (ShopbeamApp._key_count)
 
+    # keys not used said within this of the last notice (typed slowly, one by one) join it:
+    # one notice, updated, not one stacked per key
+    STRAY_JOIN = 1.5  # seconds
+    _stray_note = None  # (notification, text it names, where, when said)
+
     def _say_not_typed(self) -> None:
         text, self._stray = self._stray, ""
         self._stray_timer = None
         if not text.strip():
             return  # spaces alone: nothing worth a notice
-        self.app.bell()
-        self.notify(f"Not typed anywhere: \"{escapes.shown(text)}\"{self._stray_after}. "
-                    "The focus was on "
-                    f"{self._stray_where}, not in a text field. Tab goes to the next field; "
-                    "F2 to F12 change views.", title="keys not used", severity="warning",
-                    timeout=10, markup=False)
+        from textual.notifications import Notification, Notify
+
+        now = time.monotonic()
+        prev = self._stray_note
+        if prev is not None and prev[2] == self._stray_where and now - prev[3] <= \
+                self.STRAY_JOIN + self.STRAY_WAIT and prev[0] in self.app._notifications:
+            self.app._unnotify(prev[0])  # the slow keys' notice so far: this one extends it
+            text = prev[1] + text
+        else:
+            self.app.bell()
+        digits = any(ch.isdigit() for ch in text)
+        note = Notification(
+            f"Not typed anywhere: \"{escapes.shown(text)}\"{self._stray_after}. The focus was "
+            f"on {self._stray_where}, not in a text field. Tab goes to the next field; F2 to "
+            "F12 change views." + (" A digit within a second of a key not used is taken as "
+                                   "text, not as a view: press it again to change views."
+                                   if digits else ""),
+            "keys not used", "warning", 10, markup=False)
+        self.app.post_message(Notify(note))
+        self._stray_note = (note, text, self._stray_where, now)
 
     @staticmethod
     def _where(widget) -> str:
