@@ -928,9 +928,17 @@ def test_a_hand_geared_profile_on_a_powered_hoist_withholds_the_rating():
     title = next(ln for ln in text.splitlines() if ln.startswith("title = "))
     job = parse_job_text(text.replace(title, 'title = "Electric monorail hoist beam"', 1))
     assert any('"powered-monorail"' in g for g in _gaps(job))
-    # an electric chain hoist is often called a chain motor: rated 26 % high before
-    job = parse_job_text(text.replace(title, 'title = "Monorail, 1 ton chain motor"', 1))
-    assert any('"powered-monorail"' in g for g in _gaps(job))
+    # an electric chain hoist is often called a chain motor (rated 26 % high before), and
+    # shops name a powered hoist by its power, its controls or its air supply too
+    for said, held in (("1 ton chain motor", True), ("1 hp chain hoist", True),
+                       ("3-phase 480V chain hoist", True), ("pushbutton hoist", True),
+                       ("air chain hoist", True), ("hoist with motor", True),
+                       ("electrical chain hoist", True), ("hoist with radio remote", True),
+                       ("battery-powered hoist", True),
+                       ("hand chain hoist in the battery shop", False),
+                       ("hand chain hoist, push trolley", False)):
+        job = parse_job_text(text.replace(title, f'title = "Monorail, {said}"', 1))
+        assert any('"powered-monorail"' in g for g in _gaps(job)) == held, said
 
 
 def test_a_rack_beam_with_fixed_ends_withholds_the_rating_but_a_rack_arm_does_not():

@@ -653,6 +653,10 @@ def test_a_monorail_with_a_run_out_is_not_rated_from_one_hoist_place(length, hel
     ('label = "hanger rod H1"\nbrace = true', False),   # the hanger grips both flanges
     ('label = "hanger H1"', False),
     ('label = "chain to the truss"', True),
+    ('label = "1/2 in ATR drop"', True),
+    ('label = "turnbuckle hanger"', True),
+    ('label = "wire-rope hanger"', True),
+    ('label = "base plate on 4 anchor rods"', False),  # anchor rods hold a base, not a hanger
 ])
 def test_a_lifting_support_labelled_a_hanger_rod_needs_its_brace_key(support_keys, held):
     # a single rod does not hold the member against twist, which the checks take each
@@ -692,3 +696,17 @@ def test_a_misspelt_profile_gets_its_own_message_alone():
     job = parse_job_text(below_the_hook("B").replace('lifting = "below-the-hook"',
                                                      'lifting = "powered-monorail"'))
     assert any(p.key == "criteria.category" for p in job.warnings)
+
+
+
+def test_hanger_rods_said_in_the_notes_need_the_brace_keys_too():
+    # the monorail preset had said so in its own words ("hung ... by two hanger rods")
+    text = _member().replace('title = "W12x26 monorail"',
+                             'title = "W12x26 monorail"\nnotes = "Hung from the roof trusses '
+                             'by two single 3/4 in hanger rods."') + RATED
+    res = capacity(parse_job_text(text))
+    assert any("brace = true or brace = false" in w for w in res.not_rated)
+    braced = text.replace('type = "pin"\n', 'type = "pin"\nbrace = true\n').replace(
+        'type = "roller"\n', 'type = "roller"\nbrace = true\n')
+    assert not any("brace = true or brace = false" in w
+                   for w in capacity(parse_job_text(braced)).not_rated)

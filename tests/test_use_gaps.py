@@ -114,6 +114,11 @@ def test_the_no_axial_tag_says_the_slings_hang_plumb():
     ("Jib boom with tie rod", True),
     ("Lifting beam on a bridle", True),
     ("Lifting beam, hooks at both lugs", False),
+    ("Knee-braced jib", True),
+    ("Jib with a kicker under the boom", True),
+    ("Guyed boom", True),
+    ("Lifting beam, slings at 60 degrees", True),
+    ("Lifting beam hung from the crane hook by two hooks", False),  # plumb: the tag's case
 ])
 def test_the_no_axial_tag_is_not_taken_when_the_job_says_something_pushes_it_endwise(
         title, held):

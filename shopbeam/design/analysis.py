@@ -326,10 +326,12 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
 NO_AXIAL = "no-axial"  # the tag that says a lifting member's rigging puts no thrust in it
 # Words that say something does push a lifting member endwise, against the tag no-axial
 _THRUST_WORDS = re.compile(
-    r"\b(tie[- ]?rods?|knee[- ]?braces?|struts?|diagonal braces?|"
-    r"(?:two|2|three|3|four|4)[- ]legs?(?: slings?| bridles?)?|bridles?|"
-    r"(?:to|on|from) (?:the|one|a|a single) (?:crane )?hook|"
-    r"(?:sloped|angled|inclined|leaning) slings?)\b", re.IGNORECASE)
+    r"\b(tie[- ]?(?:rods?|bars?)|tension rods?|rod braces?|knee[- ]?brac\w*|kickers?|struts?|"
+    r"diagonal\w*|guy(?:ed|s| wires?| ropes?)?|braced boom|"
+    r"(?:two|2|three|3|four|4)[- ]leg\w*(?: slings?| bridles?)?|bridles?|"
+    r"(?:to|on|from) (?:one|a single) (?:crane )?hook|"
+    r"(?:sloped|angled|inclined|leaning) slings?|slings? at \d+|\d+\s*(?:deg\w*|\u00b0))(?![\w])",
+    re.IGNORECASE)
 FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked elsewhere
 
 
@@ -377,10 +379,11 @@ def use_unchecked(job: Job) -> list[Unchecked]:
             out.append(Unchecked(
                 "axial compression (the tag no-axial contradicted)",
                 f"the tag \"no-axial\" says nothing pushes the member endwise, but the job "
-                f"says {said.group(0)!r}: a tie rod or knee brace pushes a boom toward its "
-                "mast, and slings that lean in to one hook push a beam endwise, and bending "
-                "with that thrust is not checked here. Have it checked as a beam-column; if "
-                "the words do not describe this member (slings that hang plumb), reword them",
+                f"says {said.group(0)!r}: a tie rod puts a boom in compression and a knee "
+                "brace puts it in tension, slings that lean in to one hook push a beam "
+                "endwise, and bending with that axial force is not checked here. Have it "
+                "checked as a beam-column; if the words do not describe this member (slings "
+                "that hang plumb), reword them",
                 "ASME BTH-1 3-2.2 and 3-2.5; AISC 360-16 E3, H1-1"))
     road = getattr(job, "vehicle", "")
     parked = job.criteria.impact == 0 and not job.lifting  # loaded only while parked

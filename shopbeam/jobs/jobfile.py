@@ -2018,23 +2018,42 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
 
 # A support label that says the member hangs from a rod, chain or sling there: a single rod
 # does not hold the member against twist, which a bearing support is taken to do
-_ROD_WORDS = re.compile(r"\b(hanger rods?|threaded rods?|all[- ]?thread|rods?|eye ?bolts?|"
-                        r"chains?|slings?|cables?|wire ropes?|hanger straps?)\b", re.IGNORECASE)
+_ROD_WORDS = re.compile(r"\b(hanger rods?|threaded rods?|all[- ]?thread|atr|drop rods?|rods?|"
+                        r"eye ?bolts?|u-?bolts?|turnbuckles?|clevis(?:es)?|shackles?|chains?|"
+                        r"slings?|cables?|wire[- ]ropes?|guy wires?|hanger straps?)(?![\w])",
+                        re.IGNORECASE)
+# ...and the same said of the member in the title or notes ("hung by two hanger rods")
+_HUNG_WORDS = re.compile(r"\b(?:hung|hangs|suspended|hanging)\b[^.;]{0,40}?\b(?:by|from|on)\b"
+                         r"[^.;]{0,30}?" + _ROD_WORDS.pattern, re.IGNORECASE)
 
 
-def _hung_from_rods(r: _Reader, criteria: Criteria, tags, raw_supports) -> None:
+def _hung_from_rods(r: _Reader, criteria: Criteria, tags, raw_supports, title="",
+                    notes="") -> None:
     """A lifting job's support labelled as a hanger rod (chain, sling...) with no brace key:
     the checks take every support as holding the member against twist (its braced point for
     lateral-torsional buckling), which a single rod does not; the rating would rest on what
     the job's own words deny (the label says so), so it is held until brace is written."""
     if not is_lifting(tags, criteria.lifting) or not isinstance(raw_supports, list):
         return
-    for i, sp in enumerate(raw_supports):
-        if not _is_table(sp) or "brace" in sp or sp.get("type") == "hinge":
-            continue
+    bearing = [(i, sp) for i, sp in enumerate(raw_supports) if _is_table(sp)
+               and sp.get("type") in ("pin", "roller", "spring") and "brace" not in sp]
+    said = next((m.group(0) for m in (_HUNG_WORDS.search(_as_words(t)) for t in (title, notes))
+                 if m), "")
+    if said and bearing:  # the words say so of the member: every support not told is held
+        i = bearing[0][0]
+        r.hold(f"the job says the member is {said!r}: a member hung from single rods, chains "
+               "or slings is not held against twist at them, but the checks take each support "
+               "as holding it (its braced point for lateral-torsional buckling), so no rating "
+               "is posted. Write brace = true on each support whose hanger holds both flanges "
+               "(clamp plates, a bolted seat), or brace = false where it does not",
+               f"supports[{i}]",
+               f"the job says the member is {said!r} but its supports say nothing of holding "
+               "it against twist. Write brace = true or brace = false on each")
+        return
+    for i, sp in bearing:
         label = sp.get("label")
         m = _ROD_WORDS.search(label) if isinstance(label, str) else None
-        if m:
+        if m and not re.search(r"\banchor", label, re.IGNORECASE):
             r.hold(f"the support is labelled {label!r}: a member hung from a single rod, "
                    "chain or sling is not held against twist there, but the checks take each "
                    "support as holding it (its braced point for lateral-torsional buckling), "
@@ -2144,10 +2163,12 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
                "a lifting device; remove the one that is wrong", "tags")
 
 
-_POWERED_WORDS = re.compile(r"\b(electric|powered|motori[sz]ed|motor[- ]driven|air hoists?|"
-                            r"pneumatic|vfd|push[- ]button|pendant|radio[- ]controlled|"
-                            r"chain[- ]?motors?|hoist motors?|motor hoists?|battery)\b",
-                            re.IGNORECASE)
+_POWERED_WORDS = re.compile(
+    r"\b(electric\w*|elec\.|powered|motori[sz]ed|motor[- ]driven|(?:with|has) (?:a |an )?motor|"
+    r"air (?:chain |wire[- ]rope )?hoists?|pneumatic|vfd|push[- ]?buttons?|pendant|"
+    r"radio\w*|remote[- ]control\w*|wireless|chain[- ]?motors?|hoist motors?|motor hoists?|"
+    r"battery[- ](?:powered|operated)|\d+(?:\.\d+)?\s*(?:hp|kw|volts?|v)|"
+    r"(?:3|three|single|1)[- ]phase)(?![\w])", re.IGNORECASE)
 
 
 def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags) -> None:
@@ -2181,7 +2202,8 @@ def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags) -
                    f"hoist and trolley), but the job says it is powered ({hint}): a powered "
                    "hoist and trolley take 25 % impact and 20 % lateral force (ASCE 7-16 "
                    f"4.9.3 and 4.9.4, from memory), so no rating is posted. Name lifting = "
-                   f"\"{powered}\" if it is powered",
+                   f"\"{powered}\" if it is powered, or reword the text if those words are "
+                   "not about the hoist or trolley",
                    "criteria.lifting",
                    f"lifting = \"{name}\" (no impact) on a job that says its hoist is powered "
                    f"({hint}). Name \"{powered}\" if it is")
@@ -3205,7 +3227,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         criteria = _floor_live_limit(r, criteria, tags, supports, length)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
-    _hung_from_rods(r, criteria, tags, data.get("supports"))
+    _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,
                           title, notes, system)
     _short_lifting_member(r, criteria, tags, supports, length, system)
