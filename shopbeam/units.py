@@ -114,6 +114,12 @@ def _normalise(text: str) -> str:
     return text.strip()
 
 
+def normalised(text: str) -> str:
+    """Text with shop marks read as units reads them: feet and inch marks as ft and in,
+    fraction characters as fractions, typographic quotes and dashes plain."""
+    return _normalise(text)
+
+
 def _terms(text: str) -> tuple[int, list[tuple[Fraction | float, str]]] | None:
     """Split shop notation into (sign, [(number, unit text), ...]); None if it does not scan."""
     s = _normalise(text)

@@ -1121,6 +1121,13 @@ value = "-50 lbf/ft"
     ("Shelf beam, 12 ft span", "12 ft", "", False),
     ("Bay 12 shelf", "12 in", "", False),                # a number with no unit
     ("Shelf beam, 12 ft span", "10 ft 6 in", "", False),  # only a plain length is compared
+    ("Parts shelf, 12 ft long, 12 in deep", "12 in", "", True),  # a depth is not the length
+    ("Parts shelf 10\u00bd ft", "10\u00bd in", "", True),
+    ("Parts shelf, 10 1/2 ft", "10-1/2 in", "", True),
+    ("Parts shelf, 12 LF", "12 in", "", True),
+    ("Parts shelf, 12\u2019 long", "12 in", "", True),
+    ("Rack arm for 24 ft lumber", "24 in", "", False),  # the stock's length, not the arm's
+    ("Bracket, 12 in, for the 12 ft shelf", "12 in", "", False),
 ])
 def test_a_length_whose_unit_disagrees_with_the_title_is_not_rated(title, length, notes,
                                                                     held):
@@ -1129,13 +1136,17 @@ def test_a_length_whose_unit_disagrees_with_the_title_is_not_rated(title, length
     assert any("unit of beam.length" in h for h in capacity(job).not_rated) == held
 
 
-@pytest.mark.parametrize("length, tags, criteria, held", [
-    ("18 in", '["lifting"]', "", True),                 # a monorail 18 in long
-    ("3 ft", '["lifting"]', "", False),
-    ("18 in", '["lifting"]', '[criteria]\nlifting = "below-the-hook"\ncategory = "B"', False),
+@pytest.mark.parametrize("title, length, tags, criteria, held", [
+    ("Monorail bay 2", "18 in", '["lifting"]', "", True),   # a monorail 18 in long
+    ("Beam", "18 in", '["lifting"]', '[criteria]\nlifting = "powered-monorail"', True),
+    ("Monorail bay 2", "3 ft", '["lifting"]', "", False),
+    ("Hook bracket", "18 in", '["lifting"]', "", False),     # a bracket may be that short
+    ("Monorail bay 2", "18 in", '["lifting"]',
+     '[criteria]\nlifting = "below-the-hook"\ncategory = "B"', False),
 ])
-def test_a_monorail_or_jib_under_two_feet_long_is_not_rated(length, tags, criteria, held):
-    text = _span("Beam", length, tags=tags).replace(
+def test_a_monorail_or_jib_under_two_feet_long_is_not_rated(title, length, tags, criteria,
+                                                            held):
+    text = _span(title, length, tags=tags).replace(
         'type = "uniform"\nstart = "0 in"\nend = "' + length + '"\nvalue = "-50 lbf/ft"',
         'type = "point"\nat = "0 in"\nvalue = "-500 lbf"') + criteria
     job = parse_job_text(text)

@@ -2064,37 +2064,58 @@ def _hung_from_rods(r: _Reader, criteria: Criteria, tags, raw_supports, title=""
                    "member against twist. Write brace = true or brace = false on it")
 
 
-# A length written in the title or notes ("12 ft reach", "3.6 m span", 8')
-_LENGTH_WORDS = re.compile(r"(?<![\w.])(\d+(?:\.\d+)?)\s*-?\s*(feet|foot|ft|inches|inch|in|mm|cm|m|'|\")"
-                           r"(?![a-z0-9])", re.IGNORECASE)
-_LENGTH_UNITS = {"feet": "ft", "foot": "ft", "ft": "ft", "'": "ft", "inches": "in", "inch": "in",
-                 "in": "in", '"': "in", "mm": "mm", "cm": "cm", "m": "m"}
+# A length written in the title or notes ("12 ft reach", "3.6 m span", 8', "10 1/2 ft"),
+# after units' own reading of shop marks (' " and fraction characters); a figure followed by
+# a word that makes it some other size (12 in deep, 16 in o.c., 24 ft lumber) is not the
+# member's length
+_LEN_NUM = r"(\d+(?:\.\d+)?(?:[ -]\d+/\d+)?|\d+/\d+)"
+_LEN_UNIT = r"(feet|foot|ft|lf|inches|inch|in|mm|cm|m)"
+_LENGTH_WORDS = re.compile(
+    r"(?<![\w./])" + _LEN_NUM + r"\s*-?\s*" + _LEN_UNIT + r"(?![a-z0-9])"
+    r"(\s*(?:deep|wide|high|tall|thick|depth|width|height|o\.?\s?c\b\.?|on cent\w*|apart|"
+    r"spacing|cent(?:er|re)s|dia\w*|square|sq\b|lumber|stock|bars?|pipes?|boards?|lengths?|"
+    r"sticks?|tubes?|parts|material|pallets?)\b)?", re.IGNORECASE)
+_LENGTH_UNITS = {"feet": "ft", "foot": "ft", "ft": "ft", "lf": "ft", "inches": "in",
+                 "inch": "in", "in": "in", "mm": "mm", "cm": "cm", "m": "m"}
 _UNIT_M = {"ft": 0.3048, "in": 0.0254, "mm": 0.001, "cm": 0.01, "m": 1.0}
+
+
+def _number(text: str) -> float:
+    """A shop number: 12, 10.5, 10 1/2, 10-1/2, 1/2."""
+    m = re.fullmatch(r"(\d+)[ -](\d+)/(\d+)", text)
+    if m:
+        return int(m.group(1)) + int(m.group(2)) / max(int(m.group(3)), 1)
+    m = re.fullmatch(r"(\d+)/(\d+)", text)
+    if m:
+        return int(m.group(1)) / max(int(m.group(2)), 1)
+    return float(text)
 
 
 def _length_against_words(r: _Reader, raw, length, title, notes, system: str) -> None:
     """beam.length typed as a number and one unit ("12 in") while the title or notes give the
-    same number in a longer unit ("12 ft reach") and nowhere the length typed: the unit
+    same number in a longer unit ("12 ft reach"), and nowhere the length typed: the unit
     slipped, and the member is rated for a span it does not have (a jib typed "12 in" for
     "12 ft" had been rated at 10 times its figure). Held; a shorter unit in the words is
     on the safe side and left alone."""
     if not isinstance(raw, str) or length is None:
         return
-    m = re.fullmatch(r"\s*(\d+(?:\.\d+)?)\s*(feet|foot|ft|inches|inch|in|mm|cm|m|'|\")\s*",
-                     raw, re.IGNORECASE)
+    m = re.fullmatch(r"\s*" + _LEN_NUM + r"\s*" + _LEN_UNIT + r"\s*", units.normalised(raw),
+                     re.IGNORECASE)
     if not m:
         return
-    number = float(m.group(1))
+    number = _number(m.group(1))
     said = []
     for where, text in (("title", title), ("notes", notes)):
-        for w in _LENGTH_WORDS.finditer(str(text or "")):
+        for w in _LENGTH_WORDS.finditer(units.normalised(str(text or ""))):
+            if w.group(3):
+                continue  # some other size: a depth, a spacing, the stock's length
             unit = _LENGTH_UNITS[w.group(2).lower()]
-            said.append((where, w.group(0).strip(), float(w.group(1)) * _UNIT_M[unit]))
-    if not said or any(abs(v - length) <= 0.02 * length for _, _, v in said):
-        return
-    longer = [(where, words) for where, words, v in said
-              if abs(float(_LENGTH_WORDS.match(words).group(1)) - number) < 1e-9
-              and v > 1.5 * length]
+            said.append((where, w.group(0).strip(), _number(w.group(1)) * _UNIT_M[unit],
+                         _number(w.group(1))))
+    if any(abs(v - length) <= 0.02 * length for _, _, v, _ in said):
+        return  # the words give the length typed too
+    longer = [(where, words) for where, words, v, n in said
+              if abs(n - number) < 1e-9 and v > 1.5 * length]
     if not longer:
         return
     where, words = longer[0]
@@ -2113,17 +2134,27 @@ def _length_against_words(r: _Reader, raw, length, title, notes, system: str) ->
 SHORT_LIFTING = 0.61  # 2 ft
 
 
+_RUNWAY_WORDS = re.compile(r"\b(jibs?|monorails?|booms?|runways?|trolley beams?)\b",
+                           re.IGNORECASE)
+
+
 def _short_lifting_member(r: _Reader, criteria: Criteria, tags, supports, length,
-                          system: str) -> None:
-    if length is None or not supports or not is_lifting(tags, criteria.lifting):
+                          system: str, title="", notes="") -> None:
+    """A monorail or jib (named so by its profile or its words) under SHORT_LIFTING long: a
+    hook bracket that short is left alone (the stubby-member rule covers it)."""
+    if length is None or not supports or not is_lifting(tags, criteria.lifting) \
+            or length >= SHORT_LIFTING or criteria.lifting == "below-the-hook":
         return
-    name = criteria.lifting or guessed_profile(supports, length)
-    if name == "below-the-hook" or length >= SHORT_LIFTING:
+    named = criteria.lifting in ("powered-monorail", "hand-geared-monorail", "jib-boom",
+                                 "hand-geared-jib")
+    if not named and not any(_RUNWAY_WORDS.search(_as_words(t)) for t in (title, notes, *tags)):
         return
     r.hold(f"this lifting member is {units.fmt(length, 'length', system)} long: a monorail or "
            "jib that short is almost always a length typed in the wrong unit (\"12 in\" for "
            "\"12 ft\"), and it would be rated at many times its figure, so no rating is "
-           "posted. Check beam.length and every position's unit", "beam.length",
+           "posted. Check beam.length and every position's unit; if the member really is that "
+           "short, it is a bracket, not a jib or monorail: name the profile it is, or take "
+           "the word out of the title", "beam.length",
            f"a monorail or jib {units.fmt(length, 'length', system)} long: check the unit of "
            "beam.length")
 
@@ -3230,7 +3261,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,
                           title, notes, system)
-    _short_lifting_member(r, criteria, tags, supports, length, system)
+    _short_lifting_member(r, criteria, tags, supports, length, system, title, notes)
     if not support_refused:
         _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
