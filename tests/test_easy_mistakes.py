@@ -1149,7 +1149,11 @@ def test_more_slips_of_keys_that_lower_the_figure_hold_the_rating(where, key, va
 
 @pytest.mark.parametrize("header, right", [("[[load]]", "[[loads]]"), ("[[Loads]]", "[[loads]]"),
                                            ("[[beam.loads]]", "[[loads]]"),
-                                           ("[Criteria]", "[criteria]")])
+                                           ("[Criteria]", "[criteria]"),
+                                           ("[[point_loads]]", "[[loads]]"),
+                                           ("[[loading]]", "[[loads]]"),
+                                           ("[[load_cases]]", "[[loads]]"),
+                                           ("[[more.loads]]", "[[loads]]")])
 def test_a_job_table_written_wrong_is_refused(header, right):
     # [[Loads]] had been ignored with a warning: solve --json exited 0 with no loads and every
     # check passing; a slip inside a table ("Value =") is refused, and so is this one
@@ -1163,6 +1167,13 @@ def test_a_job_table_written_wrong_is_refused(header, right):
     with pytest.raises(InputErrors) as got:
         parse_job_text(text)
     assert f"Write {right}" in str(got.value)
+
+
+def test_a_table_of_shop_records_is_warned_not_refused():
+    # [[revisions]] (who changed the job, when) holds no loads: an unknown key, warned
+    text = job_text() + '[[revisions]]\ndate = "2026-11-30"\nby = "RK"\n'
+    job = parse_job_text(text)
+    assert any("revisions" in w.message for w in warnings(job))
 
 
 @pytest.mark.parametrize("where, key, value", [

@@ -538,11 +538,31 @@ def _table_slip(k: str, value, here: str) -> str:
     many = isinstance(value, list) and bool(value) and all(isinstance(x, dict) for x in value)
     if not (isinstance(value, dict) or many):
         return ""
+    if isinstance(value, dict):  # [[more.loads]]: the job's table inside one of another name
+        for t in ("loads", "supports", "moving"):
+            inner = value.get(t)
+            if isinstance(inner, list) and inner and all(isinstance(x, dict) for x in inner):
+                name = f"{here + '.' if here else ''}{k}"
+                return (f"[[{name}.{t}]] is not a table shopbeam reads (it puts the {t} inside "
+                        f"[{name}]), so its {len(inner)} entr{'y' if len(inner) == 1 else 'ies'} "
+                        f"would be left out and the job checked without "
+                        f"{'it' if len(inner) == 1 else 'them'}. Write [[{t}]]")
     bare = re.sub(r"[\W_]", "", k).lower()
     target = next((t for t in _MAIN_TABLES if bare in (t, t.rstrip("s"), t + "s")), None)
     if target is None:
         near = difflib.get_close_matches(bare, _MAIN_TABLES, n=1, cutoff=0.8)
         target = near[0] if near else None
+    if target is None and many and not here:
+        # a table of loads or supports under a name of its own ([[point_loads]], [[loading]],
+        # [[load_cases]]): read by what its entries hold, or by its name
+        kinds = {str(x.get("type", "")).strip().lower() for x in value}
+        if kinds & set(LOAD_KINDS) - {"point"} or kinds & {"point"} and \
+                any("value" in x for x in value) or "load" in bare:
+            target = "loads"
+        elif kinds & set(SUPPORT_KINDS) or "support" in bare:
+            target = "supports"
+        elif any(w in bare for w in ("wheel", "trolley", "moving", "axle")):
+            target = "moving"
     if target is None or (here and target not in ("loads", "supports", "moving")):
         return ""
     written = f"[[{here + '.' if here else ''}{k}]]" if many else \
