@@ -710,3 +710,15 @@ def test_hanger_rods_said_in_the_notes_need_the_brace_keys_too():
         'type = "roller"\n', 'type = "roller"\nbrace = true\n')
     assert not any("brace = true or brace = false" in w
                    for w in capacity(parse_job_text(braced)).not_rated)
+
+
+def test_a_hoist_set_on_the_top_flange_of_a_tag_guessed_monorail_is_not_rated():
+    # the profile tags = ["lifting"] picks for a span is a monorail too: a hook load set on
+    # its top flange dropped the wheel flange check (and, with a run-out, the run-out hold)
+    text = _member() + RATED.replace('label = "rated load"', 'label = "rated load"\nflange = "top"')
+    res = capacity(parse_job_text(text))
+    assert any("top flange of a monorail" in w and "profile from the tags" in w
+               for w in res.not_rated)
+    runout = text.replace('length = "16 ft"', 'length = "19 ft"')
+    res = capacity(parse_job_text(runout))
+    assert any("run-out" in w for w in res.not_rated)

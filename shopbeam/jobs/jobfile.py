@@ -1993,8 +1993,9 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     name = criteria.lifting or guessed_profile(supports, length)
     if name not in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
         return
-    ld = next((ld for ld in loads if ld.kind == "point" and ld.case == "live"
-               and ld.key in hung), None)  # the hook load
+    live = [ld for ld in loads if ld.kind == "point" and ld.case == "live" and ld.value]
+    # the hook load: hung from the bottom flange, or (set on top, itself held) the first
+    ld = next((ld for ld in live if ld.key in hung), live[0] if live else None)
     if ld is None:
         return
     held = sorted(s.at for s in supports if s.takes_force)
@@ -2222,7 +2223,8 @@ _POWERED_WORDS = re.compile(
     r"(?:3|three|single|1)[- ]phase)(?![\w])", re.IGNORECASE)
 
 
-def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags) -> None:
+def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags,
+                          supports=None, length=None) -> None:
     """A lifting profile the rest of the job contradicts, each of which makes the figure
     generous: a monorail's hook load set on the top flange (a monorail trolley runs on the
     bottom flange, so the wheel flange checks drop out), and a hand-geared profile (no impact,
@@ -2230,18 +2232,24 @@ def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags) -
     name = crit_raw.get("lifting", "") if isinstance(crit_raw, dict) else ""
     if not isinstance(name, str):
         return
+    guessed = not name and is_lifting(tags) and supports and length is not None
+    if guessed:  # the profile tags = ["lifting"] picks: a monorail's trolley hangs below too
+        name = guessed_profile(supports, length)
     if name in ("powered-monorail", "hand-geared-monorail"):
         for i, ld in enumerate(raw_loads):
             if (_is_table(ld) and ld.get("type") == "point" and ld.get("flange") == "top"
                     and ld.get("case", "live") == "live"):
-                r.hold(f"flange = \"top\" puts this load on the top flange, but lifting = "
-                       f"\"{name}\" is a monorail, whose trolley runs on the bottom flange: "
+                who = (f"the profile tags = [\"lifting\"] picks for this span, \"{name}\","
+                       if guessed else f"lifting = \"{name}\"")
+                r.hold(f"flange = \"top\" puts this load on the top flange, but {who} "
+                       "is a monorail, whose trolley runs on the bottom flange: "
                        "the wheel flange checks under it are not made, so no rating is "
                        "posted. Remove flange (a hoist load hangs from the bottom flange by "
                        "default), or name the profile the member really is",
                        f"loads[{i}].flange",
-                       f"loads[{i}] is set on the top flange of a monorail (lifting = "
-                       f"\"{name}\"), whose trolley hangs from the bottom flange: the wheel "
+                       f"loads[{i}] is set on the top flange of a monorail ("
+                       + ("profile from the tags: " if guessed else "lifting = ")
+                       + f"\"{name}\"), whose trolley hangs from the bottom flange: the wheel "
                        "flange checks are not made. Remove flange = \"top\"")
     if name.startswith("hand-geared"):
         said = _words_found(_POWERED_WORDS, title, notes, tags, raw_loads)
@@ -3173,7 +3181,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                        and section.axis == "strong"
                        and is_lifting(tags, crit_raw.get("lifting", "")
                                       if isinstance(crit_raw, dict) else ""))
-    _profile_contradicted(r, crit_raw, raw_loads, title, notes, tags)
+    _profile_contradicted(r, crit_raw, raw_loads, title, notes, tags, supports, length)
     hung_default: list[str] = []
     contacts: dict[str, int] = {}
     lugs: list[str] = []
