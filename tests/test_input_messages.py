@@ -1088,6 +1088,13 @@ def test_a_load_hung_from_a_lug_makes_an_untagged_job_read_like_a_lifting_device
     job = parse_job_text(text.replace(line, line + "\nlug = true", 1))
     assert "lug = true" in job.lifting_hint
     assert any("reads like a lifting device" in r for r in capacity(job).not_rated)
+    # a load hung below the flange likewise (a W8x18 door header with 2000 lbf hung under it
+    # had been rated at 6.6 times its figure as a lifting device)
+    job = parse_job_text(text.replace(line, line + '\nflange = "bottom"', 1))
+    assert "hangs below" in job.lifting_hint
+    tagged = text.replace('tags = []', 'tags = ["not-lifting"]')
+    job = parse_job_text(tagged.replace(line, line + '\nflange = "bottom"', 1))
+    assert not job.lifting_hint
 
 
 def _span(title, length, tags="[]", notes=""):

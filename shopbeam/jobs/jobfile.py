@@ -2387,9 +2387,11 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     # a load hung from a lug (a lifting beam's shackle point) or on trolley wheels or clamp
     # jaws: the keys say what the words may not
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
-        if _is_table(ld) and (ld.get("lug") is True or "wheels" in ld):
+        if _is_table(ld) and (ld.get("lug") is True or "wheels" in ld
+                              or ld.get("flange") == "bottom" and ld.get("type") == "point"):
             said.append(f"loads[{i}] has " + ("lug = true" if ld.get("lug") is True
-                                               else "wheels"))
+                                               else "wheels" if "wheels" in ld
+                                               else "flange = \"bottom\" (it hangs below)"))
             break
     if not said:
         return ""
