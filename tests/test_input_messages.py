@@ -1165,3 +1165,14 @@ def test_two_values_on_a_uniform_load_say_that_two_are_a_linear_load():
     got = refused(text)
     assert len(got) == 1 and got[0].key == "loads[0].value"
     assert 'type = "linear"' in got[0].message
+
+
+def test_a_post_split_into_live_and_dead_parts_on_one_plate_is_no_overlap():
+    # one post, its dead and live parts as two loads at one place with the same bearing:
+    # one plate under both, not two plates that overlap
+    text = _post_beam("6 in", "10 ft", "5 ft") + (
+        '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-4000 lbf"\nlabel = "post dead"\n'
+        'case = "dead"\n')
+    job = parse_job_text(text)
+    assert not [p for p in warned(job) if "overlap" in p.message]
+    assert not any("overlap" in r for r in capacity(job).not_rated)
