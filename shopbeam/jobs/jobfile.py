@@ -1823,6 +1823,13 @@ _RACK_WORDS = re.compile(
     re.IGNORECASE)
 
 
+# ...and words that name one unless the job is a floor that carries pallets
+_RACK_SOFT = re.compile(
+    r"\b(pallets?|fork[- ]?lifts?|fork[- ]?trucks?|lift[- ]?trucks?|drive[- ]?(?:in|thru|through)|"
+    r"uprights?|(?:bar|lumber|pipe|tube|stock|steel|timber|sheet)[- ]?(?:stock )?arms?)\b",
+    re.IGNORECASE)
+
+
 def _judged_longest(supports, length) -> float | None:
     """The longest length a deflection limit is judged on: each span between supports, and a
     cantilever or overhang on twice its length (as the deflection check judges them)."""
@@ -2659,6 +2666,10 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     if RACK_TAGS.intersection(tags) or NOT_RACK in tags:
         return
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
+    if not said and not FLOOR_TAGS.intersection(normal_tag(t) for t in tags):
+        # pallets, forklifts, uprights, a bar-stock arm: a rack unless it is a floor that
+        # carries pallets (a platform or mezzanine)
+        said = _words_found(_RACK_SOFT, title, notes, tags, raw_loads)
     if not said:
         return
     hint = "; ".join(said[:3])
