@@ -1923,26 +1923,52 @@ def _looser_than_floor(r: _Reader, criteria: Criteria, tags, supports, length) -
                "criteria.deflection")
 
 
-def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length) -> Criteria:
+# A floor named in the title or notes ("Mezzanine joist", "loft floor"): read as the floor tags
+# are, for the live-load limit (a roof, ceiling, rack or shelf is not one)
+_FLOOR_WORDS = re.compile(r"\b(floors?|mezzanines?|mezz|platforms?|walkways?|catwalks?|"
+                          r"joists?|lofts?)\b", re.IGNORECASE)
+_NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shelves|shelving|"
+                              r"racks?|racking)\b", re.IGNORECASE)
+
+
+def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, title="",
+                      notes="") -> Criteria:
     """A floor, mezzanine or platform job (by its tags, not a roof) whose total-load limit is
     looser than L/360 and that names no live-load limit gets the floor's L/360 under live load
     alone as well (IBC 2018 Table 1604.3, from memory), with a warning saying so: a rating on
     L/240 total alone can pass a floor that bounces past L/360 under the people and stock on
     it. Under gravity loads a total limit of L/360 or stricter covers the live one."""
     normal = {normal_tag(t) for t in tags}
+    words = [m.group(0) for t in (title, notes)
+             for m in [_FLOOR_WORDS.search(_as_words(t))] if m and not
+             _NOT_FLOOR_WORDS.search(_as_words(t))]
     # a rack's or a shelf's "deck" is its decking, and a lifting device is no floor
-    if (criteria.live_deflection_ratio is not None or length is None or "roof" in normal
-            or not FLOOR_TAGS.intersection(normal) or (RACK_TAGS | SHELF_TAGS).intersection(normal)
+    if (length is None or "roof" in normal
+            or not (FLOOR_TAGS.intersection(normal) or words)
+            or (RACK_TAGS | SHELF_TAGS).intersection(normal)
             or is_lifting(tags, criteria.lifting)):
         return criteria
-    ratio, shown = _ratio_of(criteria, supports, length)
     live = LIVE_DEFLECTION_PRESETS["floor"]
+    what = (f"tag {sorted(FLOOR_TAGS.intersection(normal))[0]!r}"
+            if FLOOR_TAGS.intersection(normal) else f"the words {words[0]!r}")
+    if criteria.live_deflection_ratio is not None:
+        if criteria.live_deflection_ratio < live * (1 - 1e-9):
+            # looser than a floor's: the code minimum for people and stock on it
+            r.hold(f"live_deflection = \"L/{criteria.live_deflection_ratio:g}\" is looser than "
+                   f"a floor's L/{live:g} under live load (IBC 2018 Table 1604.3 floor members, "
+                   f"from memory), and this member is read as a floor ({what}), so no rating "
+                   f"is posted. Write live_deflection = \"L/{live:g}\" (or stricter), or "
+                   "remove the floor word or tag if people do not walk on it",
+                   "criteria.live_deflection",
+                   f"live_deflection L/{criteria.live_deflection_ratio:g} is looser than a "
+                   f"floor's L/{live:g} (IBC 2018 Table 1604.3). Write L/{live:g}")
+        return criteria
+    ratio, shown = _ratio_of(criteria, supports, length)
     if not ratio or ratio >= live:
         return criteria
-    tag = sorted(FLOOR_TAGS.intersection(normal))[0]
     written = (f"deflection = {shown}" if criteria.deflection_given
                else f"the default L/{ratio:g}")
-    r.warn(f"this member is read as a floor (tag {tag!r}): the live load alone is checked "
+    r.warn(f"this member is read as a floor ({what}): the live load alone is checked "
            f"against L/{live:g} as well (IBC 2018 Table 1604.3 floor members, from memory), "
            f"besides {written} under dead + live load. Write [criteria] live_deflection = "
            f"\"L/n\" for another live-load limit, or deflection = \"floor\" for both",
@@ -3305,7 +3331,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_lifting(r, criteria, tags, supports, length)
         _looser_than_rack(r, criteria, tags, supports, length)
         _looser_than_floor(r, criteria, tags, supports, length)
-        criteria = _floor_live_limit(r, criteria, tags, supports, length)
+        criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
