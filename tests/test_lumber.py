@@ -27,7 +27,8 @@ IN = 0.0254
 
 
 def job(section="2x10", material="DF-L-2", length="10 ft", load='value = "-110 lbf/ft"',
-        beam="", criteria="", self_weight="false", supports=None, kind="uniform"):
+        beam="", criteria="", self_weight="false", supports=None, kind="uniform",
+        title="wood"):
     sup = supports or f"""[[supports]]
 at = "0 ft"
 type = "pin"
@@ -36,7 +37,7 @@ at = "{length}"
 type = "roller"
 """
     return parse_job_text(f"""schema = 1
-title = "wood"
+title = "{title}"
 [beam]
 length = "{length}"
 section = "{section}"
@@ -617,3 +618,17 @@ def test_a_metal_shape_in_wood_is_refused_once_without_a_follow_on_warning():
     with pytest.raises(InputErrors) as e:
         job(section="W8x10", criteria='duration = "ten-years"')
     assert len(e.value.problems) == 1 and "not made in wood" in e.value.problems[0].message
+
+
+@pytest.mark.parametrize("load, title, held", [
+    ('value = "-110 lbf/ft"', "wood", True),                       # no spacing shown
+    ('value = "-55 psf"\nwidth = "16 in"', "wood", False),          # joists at 16 in
+    ('value = "-55 psf"\nwidth = "16 in"', "Single 2x10 header", True),
+])
+def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held):
+    # NDS 2018 4.3.9 (from memory): Cr 1.15 for three or more members at 24 in or less
+    # sharing the load; a lone header with repetitive = true had been posted 15 % high
+    from shopbeam.design.capacity import capacity
+
+    res = capacity(job(beam="braced = true\nrepetitive = true", load=load, title=title))
+    assert any("repetitive = true (Cr 1.15)" in w for w in res.not_rated) == held

@@ -1926,7 +1926,7 @@ def _looser_than_floor(r: _Reader, criteria: Criteria, tags, supports, length) -
 # A floor named in the title or notes ("Mezzanine joist", "loft floor"): read as the floor tags
 # are, for the live-load limit (a roof, ceiling, rack or shelf is not one)
 _FLOOR_WORDS = re.compile(r"\b(floors?|mezzanines?|mezz|platforms?|walkways?|catwalks?|"
-                          r"joists?|lofts?)\b", re.IGNORECASE)
+                          r"lofts?)\b", re.IGNORECASE)  # (a joist alone may be a roof's)
 _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shelves|shelving|"
                               r"racks?|racking)\b", re.IGNORECASE)
 
@@ -2981,7 +2981,12 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
         return None, service
 
 
-def _repetitive(r: _Reader, raw_loads, service, material, section, members):
+_LONE_WORDS = re.compile(r"\b(single|lone|headers?|girders?|lintels?|beams? on its own)\b",
+                         re.IGNORECASE)
+
+
+def _repetitive(r: _Reader, raw_loads, service, material, section, members, title="",
+                notes=""):
     """Cr only where NDS 4.3.9 allows it (members.wood.repetitive_rule); a warning otherwise."""
     from shopbeam.members import wood
 
@@ -2997,6 +3002,24 @@ def _repetitive(r: _Reader, raw_loads, service, material, section, members):
     service, problems = wood.repetitive_rule(service, material, section, members, widths)
     for message, key in problems:
         r.warn(message, key)
+    if service.repetitive and material is not None:
+        # Cr is for three or more members at 24 in or less sharing the load through a deck
+        # (NDS 2018 4.3.9, from memory): taken only where the job shows the spacing, and not
+        # where its words say the member is on its own (a lone header had been posted 15 %
+        # high on Cr 1.15)
+        lone = next((m.group(0) for m in (_LONE_WORDS.search(_as_words(t))
+                                          for t in (title, notes)) if m), "")
+        if lone or not widths:
+            why = (f"the job says {lone!r}, a member on its own" if lone else
+                   "the job gives no spacing (an area load's tributary width is the joist "
+                   "spacing)")
+            r.hold(f"repetitive = true takes Cr 1.15, which NDS 2018 4.3.9 allows only for "
+                   "three or more members at 24 in or less sharing the load through a deck, "
+                   f"and {why}, so no rating is posted. Give the load as an area load with "
+                   "width = the spacing (24 in or less), or remove repetitive",
+                   "beam.repetitive",
+                   f"repetitive = true (Cr 1.15) but {why}. Give the load per area with "
+                   "width = the spacing, or remove repetitive")
     return service
 
 
@@ -3290,7 +3313,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
-    wood_service = _repetitive(r, raw_loads, wood_service, material, section, members)
+    wood_service = _repetitive(r, raw_loads, wood_service, material, section, members, title,
+                               notes)
     _family_mismatch(r, section, material, system)
     _thickness_range(r, section, material, welded, system)
     if welded and getattr(material, "kind", "") == "aluminum" and \
