@@ -632,3 +632,22 @@ def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held)
 
     res = capacity(job(beam="braced = true\nrepetitive = true", load=load, title=title))
     assert any("repetitive = true (Cr 1.15)" in w for w in res.not_rated) == held
+
+
+@pytest.mark.parametrize("title, key, held", [
+    ("Outdoor deck joist, exposed to rain", "", True),
+    ("Outdoor deck joist, exposed to rain", "wet_service = true", False),
+    ("Outdoor deck joist, under the roof", "wet_service = false", False),
+    ("Loft joist over the heat-treat furnace, about 120F", "", True),
+    ("Loft joist over the heat-treat furnace, about 120F", 'temperature = "100F-125F"', False),
+    ("Shelf for hot-rolled bar", "", False),   # a steel grade's words, not the wood's heat
+    ("Loft joist", "", False),
+])
+def test_wet_or_hot_service_said_in_words_needs_its_key(title, key, held):
+    # NDS 2018 Supplement Table 4A CM and Table 2.3.3 Ct (from memory): a 2x6 deck joist
+    # exposed to rain had been posted 17 % high, a joist over a furnace 31 %
+    from shopbeam.design.capacity import capacity
+
+    res = capacity(job(beam=f"braced = true\n{key}", title=title))
+    said = [w for w in res.not_rated if "wet service" in w or "temperature" in w]
+    assert bool(said) == held, res.not_rated

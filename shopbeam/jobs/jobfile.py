@@ -2912,7 +2912,47 @@ _WOOD_KEYS = (("wet_service", "beam"), ("temperature", "beam"), ("repetitive", "
               ("duration", "criteria"))
 
 
-def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
+# Words that say a wood member is wet or hot in service, where its keys say nothing: NDS
+# 2018 takes CM (wet service, Supplement Table 4A) and Ct (Table 2.3.3) below 1.0 there (from
+# memory), so a figure without them is too high (a deck joist "exposed to rain" had been
+# posted 17 % high, a loft joist "over the heat-treat furnace, about 120F" 31 %)
+_WET_WORDS = re.compile(r"\b(outdoors?|outside|exterior|exposed|weather(?:ed|ing)?|rain\w*|wet|"
+                        r"damp|ground contact|pressure[- ]treated|porch|patio|dock|pier|"
+                        r"uncovered|open[- ]air)\b", re.IGNORECASE)
+_HOT_WORDS = re.compile(r"\b(furnaces?|ovens?|kilns?|boilers?|heat[- ]treat\w*|foundry|forge|"
+                        r"smelter|hot(?![- ](?:dip|rolled|roll))|"
+                        r"(?:1\d\d|[2-9]\d\d)\s*(?:\u00b0\s*)?(?:f|deg\w*\s*f)|"
+                        r"(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\s*c))\b", re.IGNORECASE)
+
+
+def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
+    """A wood member whose words say it is wet or hot in service while its keys say nothing:
+    held until wet_service or temperature says so either way."""
+    text = [_as_words(t) for t in (title, notes, *tags)]
+    wet = next((m.group(0) for m in map(_WET_WORDS.search, text) if m), "")
+    if wet and "wet_service" not in beam:
+        r.hold(f"the job says {wet!r}, but [beam] says nothing of wet service: wood over 19 % "
+               "moisture in service takes the wet service factor CM (NDS 2018 Supplement "
+               "Table 4A, from memory: Fb 0.85, E 0.9, Fc-perp 0.67...), and checked dry it "
+               "is rated too high, so no rating is posted. Write wet_service = true under "
+               "[beam], or wet_service = false if it stays dry (under cover)",
+               "beam.wet_service",
+               f"the job says {wet!r} but not whether the wood is in wet service. Write "
+               "wet_service = true or false")
+    hot = next((m.group(0) for m in map(_HOT_WORDS.search, text) if m), "")
+    if hot and "temperature" not in beam:
+        r.hold(f"the job says {hot!r}, but [beam] says nothing of its temperature: wood kept "
+               "over 100 F takes the temperature factor Ct (NDS 2018 Table 2.3.3, from "
+               "memory: Fb 0.8 dry at 100-125 F), and checked at room temperature it is "
+               "rated too high, so no rating is posted. Write temperature = \"100F-125F\" "
+               "or \"125F-150F\" under [beam], or \"up-to-100F\" if it stays below 100 F",
+               "beam.temperature",
+               f"the job says {hot!r} but not the wood's temperature. Write temperature = "
+               "\"100F-125F\", \"125F-150F\" or \"up-to-100F\"")
+
+
+def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="",
+               notes=""):
     """The wood member's service keys ([beam] wet_service, temperature, repetitive;
     [criteria] duration); a wood material comes back with
     the reference values of this member's size class and E' (see members.wood)."""
@@ -2948,6 +2988,7 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=()):
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
+    _service_words(r, beam, title, notes, tags)
     # a metal shape in wood is refused (_family_mismatch): said once, by that error
     if section is not None and section.shape != "rect-bar" \
             and not catalog.not_made_in(section, material):
@@ -3164,7 +3205,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             if stubby:
                 r.warn(stubby, "beam.length")
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section,
-                                            tags)
+                                            tags, title, notes)
         material = _thick_6063_t5(r, material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
