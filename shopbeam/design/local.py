@@ -732,9 +732,8 @@ def _round_wall(job, clause: str) -> Unchecked:
 
 def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
     """Aluminium and typed-in metals: the web or tube wall under a concentrated force is not
-    checked (the J10 and K2 rules here are for steel). A point load or a wheel set on the span
-    then withholds the rating; at the supports alone it is a caution (a member bears on a
-    seat or bracket there, common practice)."""
+    checked (the J10 and K2 rules here are for steel). A point load or a wheel set on the span,
+    or the support reactions (thin aluminium webs cripple there too), withhold the rating."""
     if mkind not in ("aluminum", "custom"):
         return []
     if sec.shape in ("round-tube", "pipe"):
@@ -758,8 +757,10 @@ def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
         f"{'aluminium' if mkind == 'aluminum' else 'a typed-in metal'}"
         + (f"; {', '.join(points)} bear on it between the supports and can cripple it first"
            if points else "; the support reactions bear on it")
-        + ", so no rating is posted (spread the forces with bearing plates or stiffeners, or "
-        "have the web checked)",
+        + ", so no rating is posted. shopbeam has no check of it and no key that says it is "
+        "safe, so bearing plates or stiffeners do not change this: have the "
+        + ("web crippling checked (ADM 2015 J.8, from memory)" if mkind == "aluminum"
+           else "web checked") + " and rate the member from that check",
         clause, blocks_rating=True)]
 
 
