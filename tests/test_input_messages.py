@@ -1182,3 +1182,16 @@ def test_a_post_split_into_live_and_dead_parts_on_one_plate_is_no_overlap():
     job = parse_job_text(text)
     assert not [p for p in warned(job) if "overlap" in p.message]
     assert not any("overlap" in r for r in capacity(job).not_rated)
+
+
+@pytest.mark.parametrize("width, length, held", [
+    ("6 in", "14 ft", True),    # "6 in" for "6 ft": the posted psf 12 times too high
+    ("6 ft", "14 ft", False),
+    ("16 in", "14 ft", False),  # joists at 16 in
+    ("6 in", "96 in", False),   # a job written in inches: a narrow shelf strip
+])
+def test_a_tributary_width_in_inches_on_a_member_in_feet_is_not_rated(width, length, held):
+    text = _span("Platform beam", length).replace(
+        'value = "-50 lbf/ft"', f'value = "-125 psf"\nwidth = "{width}"')
+    res = capacity(parse_job_text(text))
+    assert any("width" in w and "under a foot" in w for w in res.not_rated) == held

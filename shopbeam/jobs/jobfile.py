@@ -2191,6 +2191,32 @@ def _length_against_words(r: _Reader, raw, length, title, notes, system: str) ->
            "beam.length")
 
 
+def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str) -> None:
+    """An area load's tributary width typed in inches (or mm) on a member whose length is in
+    feet (or m), under a foot and under 1/20 of the member: most likely the unit slipped
+    ("6 in" for "6 ft" put a platform beam's posted area load 12 times too high). Held; a
+    load per length says the same without a width."""
+    if length is None or not isinstance(raw_length, str) or not isinstance(raw_loads, list) \
+            or not re.search(r"(?:ft|feet|foot|'|\bm)\s*$", raw_length.strip(), re.IGNORECASE):
+        return
+    for i, ld in enumerate(raw_loads):
+        key = f"loads[{i}]"
+        w = r.widths.get(key)
+        raw = ld.get("width") if _is_table(ld) else None
+        if w is None or not isinstance(raw, str) or \
+                not re.search(r"(?:in|inch|inches|\"|mm)\s*$", raw.strip(), re.IGNORECASE):
+            continue
+        if w < min(0.305, length / 20):
+            r.hold(f"width = {raw!r} is the tributary width of an area load on a member "
+                   f"{units.fmt(length, 'length', system)} long, under a foot and under 1/20 "
+                   "of it: most likely the unit slipped (\"6 in\" for \"6 ft\"), which "
+                   "multiplies the posted area load, so no rating is posted. Check the unit; "
+                   "if the width is right, give the load per length instead (lbf/ft, kN/m)",
+                   f"{key}.width",
+                   f"{key}.width = {raw!r} is under a foot on a member in feet: check the "
+                   "unit, or give the load per length")
+
+
 # A monorail or jib shorter than this is a length typed in the wrong unit (a jib boom of
 # 12 in), not a lifting device (common practice, no source); a below-the-hook beam may be
 # shorter and is left alone
@@ -3400,6 +3426,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
+    _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
+                   system)
     _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,
                           title, notes, system)
     _short_lifting_member(r, criteria, tags, supports, length, system, title, notes)
