@@ -568,3 +568,23 @@ def test_a_load_given_per_area_is_posted_per_area_first():
     # both rounded down from the same exact figure: area x width within rounding of the line
     assert area.exact * width == pytest.approx(line.exact, rel=1e-12)
     assert area.si <= area.exact and line.si <= line.exact
+
+
+def test_solve_json_names_the_holds_that_capacity_would_post_no_rating_for():
+    # a script reading solve --json had seen every check pass and nothing blocking on a rack
+    # beam with no impact; every reason solve names, capacity names too
+    from shopbeam.design.analysis import analyze, to_json
+    from shopbeam.design.capacity import capacity as cap
+
+    for path in sorted(PRESETS.glob("*.toml")):
+        job = load_job(path)
+        said = to_json(analyze(job))["not_rated_reasons"]
+        res = cap(job)
+        assert all(r in res.not_rated for r in said), path.name
+        if said:
+            assert not res.rated, path.name
+    text = (PRESETS / "pallet-rack-beam-pair.toml").read_text()
+    line = next(ln for ln in text.splitlines() if ln.startswith("impact"))
+    job = parse_job_text(text.replace(line, ""))
+    said = to_json(analyze(job))["not_rated_reasons"]
+    assert any("impact" in r for r in said) and not cap(job).rated
