@@ -588,3 +588,27 @@ def test_solve_json_names_the_holds_that_capacity_would_post_no_rating_for():
     job = parse_job_text(text.replace(line, ""))
     said = to_json(analyze(job))["not_rated_reasons"]
     assert any("impact" in r for r in said) and not cap(job).rated
+
+
+def test_a_wood_rating_speaks_of_its_top_edge_not_a_flange():
+    text = """schema = 1
+title = "Loft joist"
+tags = ["not-lifting"]
+[beam]
+length = "12 ft"
+section = "2x10"
+material = "DF-L-2"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "12 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-60 lbf/ft"
+"""
+    words = label.label_text(label.rating(capacity(parse_job_text(text))))
+    assert "top edge is braced all along" in " ".join(re.sub(r"[|+=]", " ", words).split())
+    assert "flange" not in words

@@ -830,8 +830,9 @@ def hogging(moment):
 
 def hogging_remedy(job: Job) -> str:
     """What to write when the top-only bracing leaves the bottom flange free under hogging."""
-    return ("give the bottom flange's brace points with braces = [...] in place of braced = "
-            "true" if job.braced else "brace the bottom flange too (kickers) and say "
+    part = "edge" if getattr(job.material, "kind", "") == "lumber" else "flange"
+    return (f"give the bottom {part}'s brace points with braces = [...] in place of braced = "
+            "true" if job.braced else f"brace the bottom {part} too (kickers) and say "
             "braces_flange = \"both\"") + (", or write restrained = true if the member is "
                                             "held against twist all along")
 

@@ -315,7 +315,8 @@ def _held_words(job) -> list[str]:
         out.append("RATED ONLY WHILE the member is held against twist and sideways movement "
                    "all along (restrained = true).")
     elif job.braced:
-        out.append("RATED ONLY WHILE the top flange is braced all along (braced = true).")
+        part = "edge" if getattr(job.material, "kind", "") == "lumber" else "flange"
+        out.append(f"RATED ONLY WHILE the top {part} is braced all along (braced = true).")
     elif job.braces:
         which = {"top": "top flange", "both": "both flanges"}.get(
             getattr(job, "braces_flange", None) or "both", "both flanges")
