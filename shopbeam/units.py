@@ -285,6 +285,10 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
             try:
                 u = _unit(shop_unit(unit))
             except Exception:
+                if any(ch in text for ch in _VULGAR) or "\u2044" in text:
+                    raise InputError(f"the fraction characters in {text!r} do not read as one "
+                                     "number: write it with one fraction, as \"2-1/2 ft\" "
+                                     "or \"2\u00bd ft\"", key) from None
                 what = (f"; for {KINDS[kind][1]} write {SPELLINGS[kind]}"
                         if kind in SPELLINGS else "")
                 raise InputError(f"unknown unit {unit!r} in {text!r}{what} "

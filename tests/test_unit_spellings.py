@@ -98,3 +98,10 @@ def test_a_moment_where_a_force_is_expected_is_still_refused():
     with pytest.raises(InputError) as e:
         units.parse("150 ft-lb", "force")
     assert "a force is expected" in str(e.value)
+
+
+def test_fraction_characters_that_do_not_make_one_number_say_so():
+    # "2½½ ft" had been refused as the unknown unit "/2 ft", text the user never typed
+    with pytest.raises(InputError) as e:
+        units.parse("2\u00bd\u00bd ft", "length", "beam.length")
+    assert "fraction characters" in str(e.value) and "/2 ft" not in str(e.value)
