@@ -1825,7 +1825,7 @@ _RACK_WORDS = re.compile(
 
 # ...and words that name one unless the job is a floor that carries pallets
 _RACK_SOFT = re.compile(
-    r"\b(pallets?|fork[- ]?lifts?|fork[- ]?trucks?|lift[- ]?trucks?|drive[- ]?(?:in|thru|through)|"
+    r"\b(pallets?|drive[- ]?(?:in|thru|through)|"
     r"uprights?|(?:bar|lumber|pipe|tube|stock|steel|timber|sheet)[- ]?(?:stock )?arms?)\b",
     re.IGNORECASE)
 
@@ -2719,7 +2719,7 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
         return
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
     if not said and not FLOOR_TAGS.intersection(normal_tag(t) for t in tags):
-        # pallets, forklifts, uprights, a bar-stock arm: a rack unless it is a floor that
+        # pallets, drive-in, uprights, a bar-stock arm: a rack unless it is a floor that
         # carries pallets (a platform or mezzanine)
         said = _words_found(_RACK_SOFT, title, notes, tags, raw_loads)
     if not said:
