@@ -1825,7 +1825,7 @@ _RACK_WORDS = re.compile(
 
 # ...and words that name one unless the job is a floor that carries pallets
 _RACK_SOFT = re.compile(
-    r"\b(pallets?|drive[- ]?(?:in|thru|through)|"
+    r"\b(pallets?(?![- ]?(?:jacks?|trucks?))|drive[- ]?(?:in|thru|through)|"
     r"uprights?|(?:bar|lumber|pipe|tube|stock|steel|timber|sheet)[- ]?(?:stock )?arms?)\b",
     re.IGNORECASE)
 
@@ -2455,8 +2455,11 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     # a load hung from a lug (a lifting beam's shackle point) or on trolley wheels or clamp
     # jaws: the keys say what the words may not
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        # (a load hung below counts on a job that says nothing of its use: a shelf, rack or
+        # pipe support tagged so hangs things below without lifting them)
         if _is_table(ld) and (ld.get("lug") is True or "wheels" in ld
-                              or ld.get("flange") == "bottom" and ld.get("type") == "point"):
+                              or ld.get("flange") == "bottom" and ld.get("type") == "point"
+                              and not tags):
             said.append(f"loads[{i}] has " + ("lug = true" if ld.get("lug") is True
                                                else "wheels" if "wheels" in ld
                                                else "flange = \"bottom\" (it hangs below)"))
@@ -2718,7 +2721,7 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     if RACK_TAGS.intersection(tags) or NOT_RACK in tags:
         return
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
-    if not said and not FLOOR_TAGS.intersection(normal_tag(t) for t in tags):
+    if not said and not (FLOOR_TAGS | SHELF_TAGS).intersection(normal_tag(t) for t in tags):
         # pallets, drive-in, uprights, a bar-stock arm: a rack unless it is a floor that
         # carries pallets (a platform or mezzanine)
         said = _words_found(_RACK_SOFT, title, notes, tags, raw_loads)
