@@ -641,6 +641,7 @@ def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held)
     ("Loft joist over the heat-treat furnace, about 120F", "", True),
     ("Loft joist over the heat-treat furnace, about 120F", 'temperature = "100F-125F"', False),
     ("Shelf for hot-rolled bar", "", False),   # a steel grade's words, not the wood's heat
+    ("Exposed joist in the showroom", "", False),  # exposed to view, not to the weather
     ("Loft joist", "", False),
 ])
 def test_wet_or_hot_service_said_in_words_needs_its_key(title, key, held):

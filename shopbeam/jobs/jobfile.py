@@ -2945,11 +2945,12 @@ _WOOD_KEYS = (("wet_service", "beam"), ("temperature", "beam"), ("repetitive", "
 # 2018 takes CM (wet service, Supplement Table 4A) and Ct (Table 2.3.3) below 1.0 there (from
 # memory), so a figure without them is too high (a deck joist "exposed to rain" had been
 # posted 17 % high, a loft joist "over the heat-treat furnace, about 120F" 31 %)
-_WET_WORDS = re.compile(r"\b(outdoors?|outside|exterior|exposed|weather(?:ed|ing)?|rain\w*|wet|"
+_WET_WORDS = re.compile(r"\b(outdoors?|outside|exterior|exposed to (?:the )?(?:rain|weather|"
+                        r"elements|moisture|water)|weather(?:ed|ing)?|rain\w*|wet|"
                         r"damp|ground contact|pressure[- ]treated|porch|patio|dock|pier|"
                         r"uncovered|open[- ]air)\b", re.IGNORECASE)
 _HOT_WORDS = re.compile(r"\b(furnaces?|ovens?|kilns?|boilers?|heat[- ]treat\w*|foundry|forge|"
-                        r"smelter|hot(?![- ](?:dip|rolled|roll))|"
+                        r"smelter|
                         r"(?:1\d\d|[2-9]\d\d)\s*(?:\u00b0\s*)?(?:f|deg\w*\s*f)|"
                         r"(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\s*c))\b", re.IGNORECASE)
 
