@@ -2950,7 +2950,7 @@ _WET_WORDS = re.compile(r"\b(outdoors?|outside|exterior|exposed to (?:the )?(?:r
                         r"damp|ground contact|pressure[- ]treated|porch|patio|dock|pier|"
                         r"uncovered|open[- ]air)\b", re.IGNORECASE)
 _HOT_WORDS = re.compile(r"\b(furnaces?|ovens?|kilns?|boilers?|heat[- ]treat\w*|foundry|forge|"
-                        r"smelter|
+                        r"smelter|"
                         r"(?:1\d\d|[2-9]\d\d)\s*(?:\u00b0\s*)?(?:f|deg\w*\s*f)|"
                         r"(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\s*c))\b", re.IGNORECASE)
 
