@@ -570,15 +570,15 @@ def test_a_load_given_per_area_is_posted_per_area_first():
     assert area.si <= area.exact and line.si <= line.exact
 
 
-def test_solve_json_names_the_holds_that_capacity_would_post_no_rating_for():
+def test_solve_json_names_the_holds_that_capacity_would_post_no_rating_for(tmp_path):
     # a script reading solve --json had seen every check pass and nothing blocking on a rack
     # beam with no impact; every reason solve names, capacity names too
-    from shopbeam.design.analysis import analyze, to_json
     from shopbeam.design.capacity import capacity as cap
+    from shopbeam.design.capacity import solve_reasons
 
     for path in sorted(PRESETS.glob("*.toml")):
         job = load_job(path)
-        said = to_json(analyze(job))["not_rated_reasons"]
+        said = solve_reasons(analyze(job))
         res = cap(job)
         assert all(r in res.not_rated for r in said), path.name
         if said:
@@ -586,8 +586,17 @@ def test_solve_json_names_the_holds_that_capacity_would_post_no_rating_for():
     text = (PRESETS / "pallet-rack-beam-pair.toml").read_text()
     line = next(ln for ln in text.splitlines() if ln.startswith("impact"))
     job = parse_job_text(text.replace(line, ""))
-    said = to_json(analyze(job))["not_rated_reasons"]
+    said = solve_reasons(analyze(job))
     assert any("impact" in r for r in said) and not cap(job).rated
+    # and solve --json carries them
+    import json
+    import subprocess
+    import sys
+    path = tmp_path / "noimpact.toml"
+    path.write_text(text.replace(line, ""), encoding="utf-8")
+    out = subprocess.run([sys.executable, "-m", "shopbeam", "solve", str(path), "--json"],
+                         capture_output=True, text=True, timeout=120)
+    assert json.loads(out.stdout)["not_rated_reasons"] == said
 
 
 def test_a_wood_rating_speaks_of_its_top_edge_not_a_flange():

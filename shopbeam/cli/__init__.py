@@ -45,7 +45,11 @@ def cmd_solve(args) -> int:
     job = load(args.job)
     result = analyze(job)
     if args.json:
-        print(dumps_finite(to_json(result), args.job))
+        from shopbeam.design.capacity import solve_reasons  # noqa: PLC0415 - startup
+
+        data = to_json(result)
+        data["not_rated_reasons"] = solve_reasons(result)
+        print(dumps_finite(data, args.job))
         return EXIT_OK
     if args.calc:
         from shopbeam.output.calcsheet import calc_sheet  # noqa: PLC0415 - startup: sympy

@@ -954,17 +954,6 @@ def bending_s(job) -> float | None:
     return s if s > 0 else None
 
 
-def _not_rated_json(result: Result) -> list[str]:
-    """What solve can say of why `shopbeam capacity` would post no rating: the limit states
-    not checked that block one, and the job's and member's own holds (a forgotten impact, a
-    hold the reader made); capacity adds what it finds at the rated load."""
-    from shopbeam.design.capacity import held_besides  # noqa: PLC0415 - capacity imports this
-
-    out = [f"{u.name} not checked ({u.clause}): {u.reason}" if u.clause else
-           f"{u.name} not checked: {u.reason}" for u in result.unchecked if u.blocks_rating]
-    return out + [g for g in held_besides(result) if g not in out]
-
-
 def to_json(result: Result) -> dict:
     """The contract's JSON (SI units throughout)."""
     job, sol = result.job, result.solution
@@ -983,7 +972,6 @@ def to_json(result: Result) -> dict:
         "diagnostics": [{"name": d.name, "ok": bool(d.ok), "detail": d.detail} for d in sol.diagnostics],
         "cautions": list(result.cautions),
         "unchecked": [u.as_dict() for u in result.unchecked],
-        "not_rated_reasons": _not_rated_json(result),
         "lifting": _lifting_json(job),
         "hinges": [{"at": h["at"], "shear": h["shear"]} for h in hinge_shears(job, sol)],
         "fixed_ends": [{"at": f["at"], "moment": f["moment"], "shear": f["force"]}

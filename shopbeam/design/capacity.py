@@ -169,6 +169,16 @@ def held_besides(result) -> list[str]:
             and not any(g.startswith(f"{n} not checked") for n in named)]
 
 
+def solve_reasons(result) -> list[str]:
+    """What solve can say of why capacity would post no rating (solve --json
+    `not_rated_reasons`): the limit states not checked that block one, and the job's and
+    member's own holds (a forgotten impact, a hold the reader made); capacity adds what it
+    finds at the rated load."""
+    out = [f"{u.name} not checked ({u.clause}): {u.reason}" if u.clause else
+           f"{u.name} not checked: {u.reason}" for u in result.unchecked if u.blocks_rating]
+    return out + [g for g in held_besides(result) if g not in out]
+
+
 def rating_gaps(job, st) -> tuple[str, ...]:
     """`not_rated_reasons` of the member and the job alone, without a solve's self-checks (a
     sizing sweep asks it of sections it never solves one by one): the member's own gaps (its
