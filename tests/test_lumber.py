@@ -642,6 +642,18 @@ def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held)
     ("Loft joist over the heat-treat furnace, about 120F", 'temperature = "100F-125F"', False),
     ("Shelf for hot-rolled bar", "", False),   # a steel grade's words, not the wood's heat
     ("Exposed joist in the showroom", "", False),  # exposed to view, not to the weather
+    # words of a dry, room-temperature member (each had held a rating)
+    ("Loft joist, kiln-dried DF", "", False),
+    ("Joist, not exposed to weather", "", False),
+    ("Loft joist, Rainbow Woodworks", "", False),
+    ("Outside dimensions 12x16 ft", "", False),
+    ("Attic joist, stays under 100F", "", False),
+    ("Bakery joist near the ovens, conditioned space", "", False),
+    ("Garage loft joist, weather-protected", "", False),
+    # and wet or hot said other ways
+    ("Backyard deck joist", "", True),
+    ("Drying room joist, 140\u00b0", "", True),
+    ("Sauna bench joist", "", True),
     ("Loft joist", "", False),
 ])
 def test_wet_or_hot_service_said_in_words_needs_its_key(title, key, held):

@@ -2475,19 +2475,31 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     return hint
 
 
+# A word the text denies ("not electric", "no rain exposure", "never wet") says the opposite
+_DENIED = re.compile(r"\b(?:no|not|non|without|never|nor)\b[\w\s-]{0,14}$", re.IGNORECASE)
+
+
+def _search(words: re.Pattern, text: str):
+    """The first match of `words` in `text` that the text does not deny, or None."""
+    for m in words.finditer(text):
+        if not _DENIED.search(text[max(0, m.start() - 24):m.start()]):
+            return m
+    return None
+
+
 def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
                  whole_tags=frozenset()) -> list[str]:
     """Where a job's title, notes, tags (or a tag in `whole_tags`) and first matching load
-    label use one of `words`, in words for a warning."""
+    label use one of `words` (and do not deny it), in words for a warning."""
     said = []
     for key, text in (("title", title), ("notes", notes)):
-        m = words.search(_as_words(text))
+        m = _search(words, _as_words(text))
         if m:
             said.append(f"{key}: {m.group(0)!r}")
     said += [f"tag {t!r}" for t in tags if words.search(_as_words(t)) or t in whole_tags]
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         label = ld.get("label") if _is_table(ld) else None
-        if isinstance(label, str) and words.search(_as_words(label)):
+        if isinstance(label, str) and _search(words, _as_words(label)):
             said.append(f"loads[{i}] is labelled {label!r}")
             break
     return said
@@ -2945,21 +2957,34 @@ _WOOD_KEYS = (("wet_service", "beam"), ("temperature", "beam"), ("repetitive", "
 # 2018 takes CM (wet service, Supplement Table 4A) and Ct (Table 2.3.3) below 1.0 there (from
 # memory), so a figure without them is too high (a deck joist "exposed to rain" had been
 # posted 17 % high, a loft joist "over the heat-treat furnace, about 120F" 31 %)
-_WET_WORDS = re.compile(r"\b(outdoors?|outside|exterior|exposed to (?:the )?(?:rain|weather|"
-                        r"elements|moisture|water)|weather(?:ed|ing)?|rain\w*|wet|"
-                        r"damp|ground contact|pressure[- ]treated|porch|patio|dock|pier|"
-                        r"uncovered|open[- ]air)\b", re.IGNORECASE)
-_HOT_WORDS = re.compile(r"\b(furnaces?|ovens?|kilns?|boilers?|heat[- ]treat\w*|foundry|forge|"
-                        r"smelter|"
-                        r"(?:1\d\d|[2-9]\d\d)\s*(?:\u00b0\s*)?(?:f|deg\w*\s*f)|"
-                        r"(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\s*c))\b", re.IGNORECASE)
+_WET_WORDS = re.compile(
+    r"\b(outdoors?|outside(?! (?:dimensions?|of|face|corners?|diameter|width|edges?|the))|"
+    r"exterior(?! walls?| face| dimensions?)|exposed to (?:the )?(?:rain|weather|elements|"
+    r"moisture|water)|(?:in|out in) the (?:rain|weather|elements)|weathered|"
+    r"rain(?:s|ed|ing|water|fall)?|wet(?! bar)|ground contact|in contact with the ground|"
+    r"uncovered|open[- ]air|backyard|boardwalk|pergola|balcony|outdoor deck|humid\w*|"
+    r"condensation)\b", re.IGNORECASE)
+_HOT_WORDS = re.compile(
+    r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?|heat[- ]treat\w*|smelter|saunas?|"
+    r"smoke ?houses?|drying rooms?|(?:10[1-9]|1[1-9]\d|[2-9]\d\d)\s*(?:\u00b0\s*f?|f|"
+    r"deg\w*\.?\s*f)|(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\.?\s*c))(?![a-z])",
+    re.IGNORECASE)
+# ...and words that say the member is dry and at room temperature all the same
+_DRY_WORDS = re.compile(r"\b(interior|indoors?|inside (?:the )?(?:building|shop|warehouse)|"
+                        r"under (?:the )?roof|covered|enclosed|heated|conditioned|"
+                        r"weather[- ]?(?:tight|protected|proof)|dry storage|kept dry|"
+                        r"stays dry|mezzanine|loft)\b", re.IGNORECASE)
+_COOL_WORDS = re.compile(r"\b(room temperature|conditioned|(?:well )?away from|far from|"
+                         r"(?:under|below) 100|separate from|ft away)\b", re.IGNORECASE)
 
 
 def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
     """A wood member whose words say it is wet or hot in service while its keys say nothing:
     held until wet_service or temperature says so either way."""
     text = [_as_words(t) for t in (title, notes, *tags)]
-    wet = next((m.group(0) for m in map(_WET_WORDS.search, text) if m), "")
+    found = lambda words: next((m.group(0) for m in (_search(words, t) for t in text) if m),  # noqa: E731
+                               "")
+    wet = found(_WET_WORDS) if not found(_DRY_WORDS) else ""
     if wet and "wet_service" not in beam:
         r.hold(f"the job says {wet!r}, but [beam] says nothing of wet service: wood over 19 % "
                "moisture in service takes the wet service factor CM (NDS 2018 Supplement "
@@ -2969,7 +2994,7 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
                "beam.wet_service",
                f"the job says {wet!r} but not whether the wood is in wet service. Write "
                "wet_service = true or false")
-    hot = next((m.group(0) for m in map(_HOT_WORDS.search, text) if m), "")
+    hot = found(_HOT_WORDS) if not found(_COOL_WORDS) else ""
     if hot and "temperature" not in beam:
         r.hold(f"the job says {hot!r}, but [beam] says nothing of its temperature: wood kept "
                "over 100 F takes the temperature factor Ct (NDS 2018 Table 2.3.3, from "
