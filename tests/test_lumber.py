@@ -624,6 +624,13 @@ def test_a_metal_shape_in_wood_is_refused_once_without_a_follow_on_warning():
     ('value = "-110 lbf/ft"', "wood", True),                       # no spacing shown
     ('value = "-55 psf"\nwidth = "16 in"', "wood", False),          # joists at 16 in
     ('value = "-55 psf"\nwidth = "16 in"', "Single 2x10 header", True),
+    ('value = "-110 lbf/ft"', "Floor joist 2x10 at 16 in o.c.", False),  # spacing in words
+    ('value = "-55 psf"\nwidth = "16 in"', "Floor joist, single span", False),
+    ('value = "-55 psf"\nwidth = "16 in"', "Single-family house, floor joist", False),
+    ('value = "-55 psf"\nwidth = "16 in"', "Joist between headers", False),
+    ('value = "-55 psf"\nwidth = "16 in"', "Ceiling joist, lintel over the window is separate",
+     False),
+    ('value = "-55 psf"\nwidth = "16 in"', "Header over the patio door, 2-ply 2x10", True),
 ])
 def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held):
     # NDS 2018 4.3.9 (from memory): Cr 1.15 for three or more members at 24 in or less

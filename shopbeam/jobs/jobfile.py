@@ -3077,8 +3077,18 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="
         return None, service
 
 
-_LONE_WORDS = re.compile(r"\b(single|lone|headers?|girders?|lintels?|beams? on its own)\b",
-                         re.IGNORECASE)
+# The title says the member is one on its own: a single or lone joist or beam, or a header,
+# girder or lintel named as the member (not one it bears on: "joist between headers")
+_LONE_WORDS = re.compile(
+    r"\b(?:(?:single|lone)[- ](?:2x\d+|joists?|members?|beams?|headers?|ply|pieces?)(?! per)|"
+    r"(?<!\bon )(?<!\bonto )(?<!\binto )(?<!\boff )(?<!\bbetween )(?<!\bfrom )(?<!\bto )"
+    r"(?<!\bat )(?<!\bby )(?<!\bunder )(?<!\bover )(?<!\bnear )(?<!\bthe )(?<!\bthat )"
+    r"(?:headers?|girders?|lintels?)(?! (?:hangers?|joists?|is separate)))\b",
+    re.IGNORECASE)
+# A spacing the words give: "16 in o.c.", "at 16 in", 16" OC, "24 in centres"
+_SPACING_WORDS = re.compile(
+    r"(\d+(?:\.\d+)?)\s*(?:in\b|inch\w*|\")\s*(?:o\.?\s?c\b\.?|on cent\w*|"
+    r"cent(?:er|re)s|spacing|apart)", re.IGNORECASE)
 
 
 def _repetitive(r: _Reader, raw_loads, service, material, section, members, title="",
@@ -3103,16 +3113,22 @@ def _repetitive(r: _Reader, raw_loads, service, material, section, members, titl
         # (NDS 2018 4.3.9, from memory): taken only where the job shows the spacing, and not
         # where its words say the member is on its own (a lone header had been posted 15 %
         # high on Cr 1.15)
-        lone = next((m.group(0) for m in (_LONE_WORDS.search(_as_words(t))
-                                          for t in (title, notes)) if m), "")
-        if lone or not widths:
-            why = (f"the job says {lone!r}, a member on its own" if lone else
+        lone = next((m.group(0) for m in [_search(_LONE_WORDS, _as_words(title))] if m), "")
+        if lone and re.search(r"\b(?:joists?|rafters?|studs?|purlins?)\b", str(title or ""),
+                              re.IGNORECASE) and not re.match(r"(?i)(?:single|lone)", lone):
+            lone = ""  # a joist's title naming the header or lintel beside it
+        spaced = [float(m.group(1)) for t in (title, notes)
+                  for m in _SPACING_WORDS.finditer(units.normalised(str(t or "")))]
+        if lone or not (widths or any(0 < x <= 24 for x in spaced)):
+            why = (f"the title says {lone!r}, a member on its own" if lone else
                    "the job gives no spacing (an area load's tributary width is the joist "
                    "spacing)")
             r.hold(f"repetitive = true takes Cr 1.15, which NDS 2018 4.3.9 allows only for "
                    "three or more members at 24 in or less sharing the load through a deck, "
                    f"and {why}, so no rating is posted. Give the load as an area load with "
-                   "width = the spacing (24 in or less), or remove repetitive",
+                   "width = the spacing (24 in or less) or the spacing in the title (\"16 in "
+                   "o.c.\"), reword the title if the word is about another member, or remove "
+                   "repetitive",
                    "beam.repetitive",
                    f"repetitive = true (Cr 1.15) but {why}. Give the load per area with "
                    "width = the spacing, or remove repetitive")
