@@ -263,7 +263,7 @@ def test_a_lifting_word_in_a_load_label_is_found():
                                    "Rack beam, aisle 4",
                                    # ordinary shop titles that had been rated with no impact
                                    # (12 % over ANSI MH16.1's figure, from memory)
-                                   "Pallet beams bay 4 level 2", "Drive-in support rail",
+                                   "Pallet beams bay 4 level 2", "Drive-in rack rail",
                                    "Bar stock arm, yard, 36 in", "Lumber arm level 3"])
 def test_an_untagged_job_that_reads_like_a_rack_is_warned(title):
     job = parse_job_text(cantilever("36 in", tags="[]", title=title))

@@ -442,7 +442,8 @@ def test_a_small_load_in_the_jobs_own_unit_is_what_it_says():
     assert capacity(job).rated
 
 
-@pytest.mark.parametrize("title", ["Mezzanine joist", "Loft floor beam, bay 2"])
+@pytest.mark.parametrize("title", ["Mezzanine joist", "Loft floor beam, bay 2", "Walk-way beam",
+                                   "Stair landing beam", "Balcony beam"])
 def test_a_floor_named_in_the_title_gets_the_live_load_limit_too(title):
     # the title had been read for the walking-vibration caution but not for L/360 under
     # live load: a mezzanine joist was posted 40 % over (IBC 2018 Table 1604.3, from memory)
@@ -455,6 +456,17 @@ def test_a_floor_named_in_the_title_gets_the_live_load_limit_too(title):
     assert roof.criteria.live_deflection_ratio is None
 
 
+@pytest.mark.parametrize("title", ["Roll-up door header, 14 ft above the floor",
+                                   "Sign support beam over the shop floor",
+                                   "Duct support beam above the mezzanine",
+                                   "Equipment platform beam, no foot traffic"])
+def test_a_member_that_only_mentions_a_floor_is_not_read_as_one(title):
+    # each had been given the floor's L/360 live-load check (its figure 32 % lower)
+    text = _floor('["not-lifting"]', 'deflection = "L/240"').replace('title = "t"',
+                                                                    f'title = "{title}"')
+    assert parse_job_text(text).criteria.live_deflection_ratio is None
+
+
 def test_a_live_load_limit_looser_than_a_floors_is_not_rated():
     job = parse_job_text(_floor('["mezzanine"]', 'deflection = "L/240"\n'
                                                  'live_deflection = "L/240"'))
@@ -462,4 +474,8 @@ def test_a_live_load_limit_looser_than_a_floors_is_not_rated():
     assert any("looser than a floor's L/360" in w for w in res.not_rated)
     ok = capacity(parse_job_text(_floor('["mezzanine"]', 'deflection = "L/240"\n'
                                                          'live_deflection = "L/360"')))
+    assert ok.rated
+    # the tag not-floor says people do not walk on it
+    ok = capacity(parse_job_text(_floor('["mezzanine", "not-floor"]', 'deflection = "L/240"\n'
+                                                                     'live_deflection = "L/240"')))
     assert ok.rated

@@ -924,7 +924,8 @@ def floor_unchecked(job: Job) -> list[Unchecked]:
     """Walking vibration of a floor member (named by its tags or title), as not checked. A
     lifting device's title naming where it hangs ("hoist beam in the loft") is not a floor."""
     lifting = job.lifting or getattr(job.criteria, "lifting", "")
-    if not any(_FLOOR.search(t) for t in tuple(job.tags) + (() if lifting else (job.title,))):
+    if "not-floor" in {str(t).strip().lower() for t in job.tags} or \
+            not any(_FLOOR.search(t) for t in tuple(job.tags) + (() if lifting else (job.title,))):
         return []
     wood = getattr(job.material, "kind", "") == "lumber"
     return [Unchecked(

@@ -1825,9 +1825,8 @@ _RACK_WORDS = re.compile(
 
 # ...and words that name one unless the job is a floor that carries pallets
 _RACK_SOFT = re.compile(
-    r"\b(pallets?(?![- ]?(?:jacks?|trucks?))|drive[- ]?(?:in|thru|through)|"
-    r"uprights?|(?:bar|lumber|pipe|tube|stock|steel|timber|sheet)[- ]?(?:stock )?arms?)\b",
-    re.IGNORECASE)
+    r"\b(pallets?(?![- ]?(?:jacks?|trucks?|wrap))|"
+    r"(?:bar|lumber|pipe|stock|timber)[- ]?(?:stock )?arms?)\b", re.IGNORECASE)
 
 
 def _judged_longest(supports, length) -> float | None:
@@ -1925,10 +1924,17 @@ def _looser_than_floor(r: _Reader, criteria: Criteria, tags, supports, length) -
 
 # A floor named in the title or notes ("Mezzanine joist", "loft floor"): read as the floor tags
 # are, for the live-load limit (a roof, ceiling, rack or shelf is not one)
-_FLOOR_WORDS = re.compile(r"\b(floors?|mezzanines?|mezz|platforms?|walkways?|catwalks?|"
-                          r"lofts?)\b", re.IGNORECASE)  # (a joist alone may be a roof's)
+# (as the member's use: "mezzanine joist", "walk-way beam", "loft floor", not "above the floor")
+_FLOOR_WORDS = re.compile(
+    r"\b(?:(?:floor|mezzanine|mezz|platform|loft|walk[- ]?way|catwalk|landing|balcony|stage|"
+    r"deck|gangway|foot[- ]?bridge|bleachers?)(?:[- ](?:level|floor))?[\s-]+(?:joists?|beams?|"
+    r"framing|girders?|stringers?|members?|planks?|boards?)|loft floor|people walk\w*|"
+    r"foot traffic|walked on)\b", re.IGNORECASE)
 _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shelves|shelving|"
-                              r"racks?|racking)\b", re.IGNORECASE)
+                              r"racks?|racking|canopy|signs?|ducts?|pipes?|conveyors?|doors?|"
+                              r"headers?|benches?|tanks?|machines?|equipment|scales?)\b",
+                              re.IGNORECASE)
+NOT_FLOOR = "not-floor"  # the tag that says a member read as a floor is not one
 
 
 def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, title="",
@@ -1939,11 +1945,11 @@ def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, ti
     L/240 total alone can pass a floor that bounces past L/360 under the people and stock on
     it. Under gravity loads a total limit of L/360 or stricter covers the live one."""
     normal = {normal_tag(t) for t in tags}
-    words = [m.group(0) for t in (title, notes)
-             for m in [_FLOOR_WORDS.search(_as_words(t))] if m and not
-             _NOT_FLOOR_WORDS.search(_as_words(t))]
+    text = " | ".join(_as_words(t) for t in (title, notes))
+    words = [m.group(0) for m in [_search(_FLOOR_WORDS, text)] if m and not
+             _NOT_FLOOR_WORDS.search(text)]
     # a rack's or a shelf's "deck" is its decking, and a lifting device is no floor
-    if (length is None or "roof" in normal
+    if (length is None or "roof" in normal or NOT_FLOOR in normal
             or not (FLOOR_TAGS.intersection(normal) or words)
             or (RACK_TAGS | SHELF_TAGS).intersection(normal)
             or is_lifting(tags, criteria.lifting)):
@@ -1957,8 +1963,8 @@ def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, ti
             r.hold(f"live_deflection = \"L/{criteria.live_deflection_ratio:g}\" is looser than "
                    f"a floor's L/{live:g} under live load (IBC 2018 Table 1604.3 floor members, "
                    f"from memory), and this member is read as a floor ({what}), so no rating "
-                   f"is posted. Write live_deflection = \"L/{live:g}\" (or stricter), or "
-                   "remove the floor word or tag if people do not walk on it",
+                   f"is posted. Write live_deflection = \"L/{live:g}\" (or stricter), or add "
+                   f"the tag \"{NOT_FLOOR}\" if people do not walk on it",
                    "criteria.live_deflection",
                    f"live_deflection L/{criteria.live_deflection_ratio:g} is looser than a "
                    f"floor's L/{live:g} (IBC 2018 Table 1604.3). Write L/{live:g}")
@@ -1971,7 +1977,8 @@ def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, ti
     r.warn(f"this member is read as a floor ({what}): the live load alone is checked "
            f"against L/{live:g} as well (IBC 2018 Table 1604.3 floor members, from memory), "
            f"besides {written} under dead + live load. Write [criteria] live_deflection = "
-           f"\"L/n\" for another live-load limit, or deflection = \"floor\" for both",
+           f"\"L/n\" for another live-load limit, deflection = \"floor\" for both, or add the "
+           f"tag \"{NOT_FLOOR}\" if people do not walk on it",
            "criteria.deflection" if criteria.deflection_given else "criteria")
     return replace(criteria, live_deflection_ratio=live)
 
@@ -2733,8 +2740,10 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
     if RACK_TAGS.intersection(tags) or NOT_RACK in tags:
         return
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
-    if not said and not (FLOOR_TAGS | SHELF_TAGS).intersection(normal_tag(t) for t in tags):
-        # pallets, drive-in, uprights, a bar-stock arm: a rack unless it is a floor that
+    floor = _search(_FLOOR_WORDS, " | ".join(_as_words(t) for t in (title, notes)))
+    if not said and not floor and \
+            not (FLOOR_TAGS | SHELF_TAGS).intersection(normal_tag(t) for t in tags):
+        # pallets, a bar-stock or lumber arm: a rack unless it is a floor that
         # carries pallets (a platform or mezzanine)
         said = _words_found(_RACK_SOFT, title, notes, tags, raw_loads)
     if not said:
