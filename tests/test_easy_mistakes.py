@@ -936,7 +936,13 @@ def test_a_hand_geared_profile_on_a_powered_hoist_withholds_the_rating():
                        ("electrical chain hoist", True), ("hoist with radio remote", True),
                        ("battery-powered hoist", True),
                        ("hand chain hoist in the battery shop", False),
-                       ("hand chain hoist, push trolley", False)):
+                       ("hand chain hoist, push trolley", False),
+                       # words about something else beside a hand hoist
+                       ("hand chain hoist, electrical conduit along the web", False),
+                       ("hand chain hoist, 480 V 3-phase power nearby", False),
+                       ("hand chain hoist, pendant light below", False),
+                       ("hand chain hoist, not electric", False),
+                       ("hand chain hoist, battery-operated impact wrench", False)):
         job = parse_job_text(text.replace(title, f'title = "Monorail, {said}"', 1))
         assert any('"powered-monorail"' in g for g in _gaps(job)) == held, said
 

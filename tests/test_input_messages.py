@@ -1100,6 +1100,10 @@ def test_a_load_hung_from_a_lug_makes_an_untagged_job_read_like_a_lifting_device
     tagged = text.replace('tags = []', 'tags = ["not-lifting"]')
     job = parse_job_text(tagged.replace(line, line + '\nflange = "bottom"', 1))
     assert not job.lifting_hint
+    # a heater, sign or cable tray hangs below without being lifted
+    heater = text.replace('label = "tip load"', 'label = "unit heater"')
+    job = parse_job_text(heater.replace(line, line + '\nflange = "bottom"', 1))
+    assert not job.lifting_hint
 
 
 def _span(title, length, tags="[]", notes=""):

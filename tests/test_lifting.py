@@ -659,6 +659,7 @@ def test_a_monorail_with_a_run_out_is_not_rated_from_one_hoist_place(length, hel
     ('label = "turnbuckle hanger"', True),
     ('label = "wire-rope hanger"', True),
     ('label = "base plate on 4 anchor rods"', False),  # anchor rods hold a base, not a hanger
+    ('label = "chain hoist side"', False),              # the hoist's chain, not a hanger
 ])
 def test_a_lifting_support_labelled_a_hanger_rod_needs_its_brace_key(support_keys, held):
     # a single rod does not hold the member against twist, which the checks take each

@@ -119,6 +119,10 @@ def test_the_no_axial_tag_says_the_slings_hang_plumb():
     ("Guyed boom", True),
     ("Lifting beam, slings at 60 degrees", True),
     ("Lifting beam hung from the crane hook by two hooks", False),  # plumb: the tag's case
+    ("Spreader, slings vertical (90 deg) to two hooks", False),
+    ("Spreader, 2 leg chain below each end, vertical", False),
+    ("Spreader, two-leg sling to the crane hook", True),
+    ("Spreader, struts of the panel frame are separate", False),
 ])
 def test_the_no_axial_tag_is_not_taken_when_the_job_says_something_pushes_it_endwise(
         title, held):

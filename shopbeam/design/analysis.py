@@ -326,11 +326,12 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
 NO_AXIAL = "no-axial"  # the tag that says a lifting member's rigging puts no thrust in it
 # Words that say something does push a lifting member endwise, against the tag no-axial
 _THRUST_WORDS = re.compile(
-    r"\b(tie[- ]?(?:rods?|bars?)|tension rods?|rod braces?|knee[- ]?brac\w*|kickers?|struts?|"
-    r"diagonal\w*|guy(?:ed|s| wires?| ropes?)?|braced boom|"
-    r"(?:two|2|three|3|four|4)[- ]leg\w*(?: slings?| bridles?)?|bridles?|"
+    r"\b(tie[- ]?(?:rods?|bars?)|tension rods?|rod braces?|knee[- ]?brac\w*|kickers?|"
+    r"diagonal (?:brace|tie|rod|strut|sling)s?|guy(?:ed|s| wires?| ropes?)?|braced boom|"
+    r"(?:two|2|three|3|four|4)[- ]leg\w*(?: slings?| bridles?)? to (?:one|a single|the) "
+    r"(?:crane )?hook|bridles?|"
     r"(?:to|on|from) (?:one|a single) (?:crane )?hook|"
-    r"(?:sloped|angled|inclined|leaning) slings?|slings? at \d+|\d+\s*(?:deg\w*|\u00b0))(?![\w])",
+    r"(?:sloped|angled|inclined|leaning) slings?|slings? at (?!90)\d+)(?![\w])",
     re.IGNORECASE)
 FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked elsewhere
 

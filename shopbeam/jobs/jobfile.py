@@ -2089,7 +2089,8 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
 # A support label that says the member hangs from a rod, chain or sling there: a single rod
 # does not hold the member against twist, which a bearing support is taken to do
 _ROD_WORDS = re.compile(r"\b(hanger rods?|threaded rods?|all[- ]?thread|atr|drop rods?|rods?|"
-                        r"eye ?bolts?|u-?bolts?|turnbuckles?|clevis(?:es)?|shackles?|chains?|"
+                        r"eye ?bolts?|u-?bolts?|turnbuckles?|clevis(?:es)?|shackles?|"
+                        r"chains?(?! ?(?:hoists?|blocks?|falls?|motors?))|"
                         r"slings?|cables?|wire[- ]ropes?|guy wires?|hanger straps?)(?![\w])",
                         re.IGNORECASE)
 # ...and the same said of the member in the title or notes ("hung by two hanger rods")
@@ -2291,11 +2292,15 @@ def _lifting_mismatch(r: _Reader, criteria: Criteria, tags, supports, length) ->
 
 
 _POWERED_WORDS = re.compile(
-    r"\b(electric\w*|elec\.|powered|motori[sz]ed|motor[- ]driven|(?:with|has) (?:a |an )?motor|"
-    r"air (?:chain |wire[- ]rope )?hoists?|pneumatic|vfd|push[- ]?buttons?|pendant|"
-    r"radio\w*|remote[- ]control\w*|wireless|chain[- ]?motors?|hoist motors?|motor hoists?|"
-    r"battery[- ](?:powered|operated)|\d+(?:\.\d+)?\s*(?:hp|kw|volts?|v)|"
-    r"(?:3|three|single|1)[- ]phase)(?![\w])", re.IGNORECASE)
+    r"\b(electric(?![a-z])|electric(?:al)?[- ](?:chain[- ])?(?:hoists?|trolleys?|blocks?|drives?|"
+    r"motors?)|elec\. (?:chain )?hoists?|powered|motori[sz]ed|motor[- ]driven|"
+    r"(?:with|has) (?:a |an )?motor|air (?:chain |wire[- ]rope )?hoists?|pneumatic|vfd|"
+    r"push[- ]?buttons?|pendant[- ](?:hoists?|control\w*|stations?|operated|push\w*)|"
+    r"radio[- ]?(?:remote|control\w*)|remote[- ]control\w*|chain[- ]?motors?|hoist motors?|"
+    r"motor hoists?|battery[- ](?:powered|operated)(?: chain)? (?:hoists?|trolleys?)|"
+    r"\d+(?:\.\d+)?\s*(?:hp|kw)|"
+    r"(?:\d+\s*v(?:olts?)?|(?:3|three|single|1)[- ]phase)(?:[ -]+[a-z]+)?[ -]+"
+    r"(?:chain )?(?:hoists?|motors?|trolleys?))(?![\w])", re.IGNORECASE)
 
 
 def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags,
@@ -2442,6 +2447,12 @@ def _below_the_hook_hint(r: _Reader, title, notes, tags, criteria) -> str:
     return hint
 
 
+_FIXTURE_WORDS = re.compile(
+    r"\b(heaters?|signs?|pipes?|piping|trays?|ducts?|ductwork|lights?|lamps?|luminaires?|"
+    r"tracks?|conduits?|fans?|banners?|sprinklers?|cables?|speakers?|curtains?|hvac|"
+    r"units?|displays?|screens?|baskets?)\b", re.IGNORECASE)
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -2460,13 +2471,17 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     if moving:
         said.append("it has trolley wheels ([[moving]])")
     # a load hung from a lug (a lifting beam's shackle point) or on trolley wheels or clamp
-    # jaws: the keys say what the words may not
+    # jaws: the keys say what the words may not (a load hung below counts unless the words
+    # name a fixture: a heater, sign, pipe or cable tray hangs below without being lifted)
+    fixture = any(_search(_FIXTURE_WORDS, _as_words(t)) for t in (
+        title, notes, *[ld.get("label") for ld in (raw_loads if isinstance(raw_loads, list)
+                                                   else ()) if _is_table(ld)]) if t)
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         # (a load hung below counts on a job that says nothing of its use: a shelf, rack or
         # pipe support tagged so hangs things below without lifting them)
         if _is_table(ld) and (ld.get("lug") is True or "wheels" in ld
                               or ld.get("flange") == "bottom" and ld.get("type") == "point"
-                              and not tags):
+                              and not tags and not fixture):
             said.append(f"loads[{i}] has " + ("lug = true" if ld.get("lug") is True
                                                else "wheels" if "wheels" in ld
                                                else "flange = \"bottom\" (it hangs below)"))
