@@ -1193,9 +1193,20 @@ def test_a_post_split_into_live_and_dead_parts_on_one_plate_is_no_overlap():
     ("6 ft", "14 ft", False),
     ("16 in", "14 ft", False),  # joists at 16 in
     ("6 in", "96 in", False),   # a job written in inches: a narrow shelf strip
+    ("6 in.", "14 ft", True),
+    ("6 in", "14 ft 0 in", True),  # a length in feet and inches is in feet too
 ])
 def test_a_tributary_width_in_inches_on_a_member_in_feet_is_not_rated(width, length, held):
     text = _span("Platform beam", length).replace(
         'value = "-50 lbf/ft"', f'value = "-125 psf"\nwidth = "{width}"')
     res = capacity(parse_job_text(text))
     assert any("width" in w and "under a foot" in w for w in res.not_rated) == held
+
+
+def test_bar_grating_bearing_bars_at_their_spacing_are_rated():
+    # 19-4 grating's bearing bars are at 1-3/16 in (common practice): the spacing said in
+    # the words is the width, not a slip
+    text = _span("Bar grating bearing bar", "4 ft", notes="Bearing bars at 1-3/16 in centers."
+                 ).replace('value = "-50 lbf/ft"', 'value = "-100 psf"\nwidth = "1-3/16 in"')
+    res = capacity(parse_job_text(text))
+    assert not any("under a foot" in w for w in res.not_rated)

@@ -2199,30 +2199,40 @@ def _length_against_words(r: _Reader, raw, length, title, notes, system: str) ->
            "beam.length")
 
 
-def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str) -> None:
+def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title="",
+                   notes="") -> None:
     """An area load's tributary width typed in inches (or mm) on a member whose length is in
-    feet (or m), under a foot and under 1/20 of the member: most likely the unit slipped
-    ("6 in" for "6 ft" put a platform beam's posted area load 12 times too high). Held; a
-    load per length says the same without a width."""
+    feet (or m), under a foot (300 mm) and under 1/20 of the member: most likely the unit
+    slipped ("6 in" for "6 ft" put a platform beam's posted area load 12 times too high).
+    Held, unless the words give the same spacing (bar grating's bearing bars at 1-3/16 in
+    centres); a load per length says the same without a width."""
     if length is None or not isinstance(raw_length, str) or not isinstance(raw_loads, list) \
-            or not re.search(r"(?:ft|feet|foot|'|\bm)\s*$", raw_length.strip(), re.IGNORECASE):
+            or not re.search(r"ft|feet|foot|'|\d\s*m\b", raw_length, re.IGNORECASE):
         return
+    said = [_number(m.group(1)) * 0.0254
+            for t in (title, notes) for m in _SPACING_WORDS.finditer(units.normalised(
+                str(t or "")))]
     for i, ld in enumerate(raw_loads):
         key = f"loads[{i}]"
         w = r.widths.get(key)
         raw = ld.get("width") if _is_table(ld) else None
         if w is None or not isinstance(raw, str) or \
-                not re.search(r"(?:in|inch|inches|\"|mm)\s*$", raw.strip(), re.IGNORECASE):
+                not re.search(r"(?:in|inch|inches|\"|mm)\.?\s*$", raw.strip(), re.IGNORECASE):
             continue
+        if any(abs(x - w) <= 1e-3 * w for x in said):
+            continue  # the spacing the words give
+        foot = "300 mm" if system == "si" else "a foot"
         if w < min(0.305, length / 20):
             r.hold(f"width = {raw!r} is the tributary width of an area load on a member "
-                   f"{units.fmt(length, 'length', system)} long, under a foot and under 1/20 "
+                   f"{units.fmt(length, 'length', system)} long, under {foot} and under 1/20 "
                    "of it: most likely the unit slipped (\"6 in\" for \"6 ft\"), which "
                    "multiplies the posted area load, so no rating is posted. Check the unit; "
-                   "if the width is right, give the load per length instead (lbf/ft, kN/m)",
+                   "if the width is right, say the spacing in the title (\"bars at 1-3/16 in "
+                   "centres\") or give the load per length instead (lbf/ft, kN/m)",
                    f"{key}.width",
-                   f"{key}.width = {raw!r} is under a foot on a member in feet: check the "
-                   "unit, or give the load per length")
+                   f"{key}.width = {raw!r} is under {foot} on a member "
+                   f"{units.fmt(length, 'length', system)} long: check the unit, say the "
+                   "spacing in the title, or give the load per length")
 
 
 # A monorail or jib shorter than this is a length typed in the wrong unit (a jib boom of
@@ -3111,7 +3121,7 @@ _LONE_WORDS = re.compile(
     re.IGNORECASE)
 # A spacing the words give: "16 in o.c.", "at 16 in", 16" OC, "24 in centres"
 _SPACING_WORDS = re.compile(
-    r"(\d+(?:\.\d+)?)\s*(?:in\b|inch\w*|\")\s*(?:o\.?\s?c\b\.?|on cent\w*|"
+    r"(\d+(?:\.\d+)?(?:[ -]\d+/\d+)?|\d+/\d+)\s*(?:in\b|inch\w*|\")\s*(?:o\.?\s?c\b\.?|on cent\w*|"
     r"cent(?:er|re)s|spacing|apart)", re.IGNORECASE)
 
 
@@ -3141,7 +3151,7 @@ def _repetitive(r: _Reader, raw_loads, service, material, section, members, titl
         if lone and re.search(r"\b(?:joists?|rafters?|studs?|purlins?)\b", str(title or ""),
                               re.IGNORECASE) and not re.match(r"(?i)(?:single|lone)", lone):
             lone = ""  # a joist's title naming the header or lintel beside it
-        spaced = [float(m.group(1)) for t in (title, notes)
+        spaced = [_number(m.group(1)) for t in (title, notes)
                   for m in _SPACING_WORDS.finditer(units.normalised(str(t or "")))]
         if lone or not (widths or any(0 < x <= 24 for x in spaced)):
             why = (f"the title says {lone!r}, a member on its own" if lone else
@@ -3496,7 +3506,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
-                   system)
+                   system, title, notes)
     _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,
                           title, notes, system)
     _short_lifting_member(r, criteria, tags, supports, length, system, title, notes)
