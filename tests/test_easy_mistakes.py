@@ -1249,3 +1249,18 @@ def test_cut_words_that_say_the_member_is_not_cut_hold_nothing(notes, cut):
     text = job_text().replace('title = "shelf"', f'title = "shelf"\nnotes = "{notes}"')
     held = any("cut" in r for r in capacity(parse_job_text(text)).not_rated)
     assert held == cut
+
+
+@pytest.mark.parametrize("table, held", [
+    ('[[stock]]\nitem = "pipe"\nweight = "-300 lbf/ft"\n', True),   # loads under a name
+    ('[[load_tests]]\ndate = "2026-01-05"\nload = "3000 lbf"\n', True),
+    ('[[revisions]]\ndate = "2026-11-30"\nby = "RK"\n', False),
+])
+def test_a_table_whose_entries_give_forces_holds_the_rating_without_refusing(table, held):
+    # [[stock]] with weight = ... had been warned and the job rated without the stock; a
+    # record of load tests is not refused (it may be a record), but no rating rests on it
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(job_text() + table)
+    res = capacity(job)
+    assert any("is not a table shopbeam reads" in w for w in res.not_rated) == held

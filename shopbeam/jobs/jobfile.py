@@ -491,6 +491,10 @@ class _Reader:
             if table_slip:
                 self.error(table_slip, f"{prefix}.{k}" if prefix else str(k))
                 continue
+            held = _table_holds(str(k), table[k]) if not here else ""
+            if held:
+                self.hold(held, str(k), held)
+                continue
             near = difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.6)
             hint = f"; did you mean {near[0]!r}?" if near else f"; known keys: {', '.join(sorted(known))}"
             homes = _homes(k, here)
@@ -527,6 +531,33 @@ class _Reader:
 
 
 _MAIN_TABLES = ("loads", "supports", "moving", "beam", "criteria")
+# Names that mean "the loads" ([[point_loads]], [[loading]]); other names with "load" in them
+# may be records ([[load_tests]], [[loading_dock]]): held, not refused (`_table_holds`)
+_LOAD_TABLE_NAMES = frozenset({"pointloads", "pointload", "loading", "loadings", "loadcases",
+                               "loadcase", "extraloads", "moreloads", "liveloads", "deadloads",
+                               "udl", "udls", "uniformloads", "distributedloads",
+                               "appliedloads", "forces"})
+# An entry's key that gives a force: an unknown table whose entries have one may be loads
+_FORCE_KEYS = frozenset({"value", "weight", "load", "force", "mass", "wt"})
+
+
+def _table_holds(k: str, value) -> str:
+    """A table of another name whose entries give a force ([[stock]] with weight = ..., a
+    name with "load" in it): they may be loads the job leaves out, or a record of them (load
+    tests, a loading dock). Not refused (a record is fine), but no rating rests on loads
+    that may be missing. "" when the table gives no force."""
+    many = isinstance(value, list) and bool(value) and all(isinstance(x, dict) for x in value)
+    rows = value if many else [value] if isinstance(value, dict) else []
+    forced = [x for x in rows if _FORCE_KEYS.intersection(str(y).lower() for y in x)]
+    if not forced and "load" not in re.sub(r"[\W_]", "", k).lower():
+        return ""
+    if not rows:
+        return ""
+    return (f"[[{k}]] is not a table shopbeam reads, and its entries give forces or it is "
+            "named for loads: if they bear on this member they are left out of every check, "
+            "so no rating is posted. Write them as [[loads]] (type, at, value), or, if it is a "
+            "record of something that does not bear on this member (load tests, a loading "
+            "dock, a parts list), move it into the notes")
 
 
 def _table_slip(k: str, value, here: str) -> str:
@@ -554,14 +585,15 @@ def _table_slip(k: str, value, here: str) -> str:
         target = near[0] if near else None
     if target is None and many and not here:
         # a table of loads or supports under a name of its own ([[point_loads]], [[loading]],
-        # [[load_cases]]): read by what its entries hold, or by its name
+        # [[load_cases]]): read by what its entries hold, or by a name that means them (a
+        # record of load tests or a loading dock is not one: `_table_holds` says those)
         kinds = {str(x.get("type", "")).strip().lower() for x in value}
         if kinds & set(LOAD_KINDS) - {"point"} or kinds & {"point"} and \
-                any("value" in x for x in value) or "load" in bare:
+                any("value" in x for x in value) or bare in _LOAD_TABLE_NAMES:
             target = "loads"
-        elif kinds & set(SUPPORT_KINDS) or "support" in bare:
+        elif kinds & set(SUPPORT_KINDS) or bare in ("support", "supportpoints", "bearings"):
             target = "supports"
-        elif any(w in bare for w in ("wheel", "trolley", "moving", "axle")):
+        elif bare in ("wheels", "trolley", "trolleys", "wheelset", "axles"):
             target = "moving"
     if target is None or (here and target not in ("loads", "supports", "moving")):
         return ""
