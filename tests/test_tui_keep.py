@@ -1292,7 +1292,8 @@ async def test_every_kind_of_line_break_is_shown_and_kept_through_an_edit(tmp_pa
         title, notes = field(app, "job", "title"), field(app, "job", "notes")
         for f in (title, notes):
             assert not any(ch in f.input.value for ch in "\r\n\v\f\x85\u2028\u2029")
-        assert title.input.value == "Loft beam\u240dover the bay\u21b5x\u240d\u23cey"
+        # (a CR LF pair is one line break, as a TOML reader reads a multi-line string's)
+        assert title.input.value == "Loft beam\u240dover the bay\u21b5x\u23cey"
         await at_end_of(pilot, app, "job", "title")
         await burst(pilot, "!")
         await settle(pilot)
@@ -1300,7 +1301,7 @@ async def test_every_kind_of_line_break_is_shown_and_kept_through_an_edit(tmp_pa
         await burst(pilot, "!")
         await settle(pilot)
         doc = app.job_screen.session.doc
-        assert doc.get("title") == "Loft beam\rover the bay\u2028x\r\ny!"
+        assert doc.get("title") == "Loft beam\rover the bay\u2028x\ny!"
         assert doc.get("notes") == "tab\there\vvt\fff\x85nel\u2029par end!"
 
 
@@ -1430,3 +1431,36 @@ async def test_a_load_type_picked_away_and_back_leaves_the_file_as_it_was(tmp_pa
                 js.change_load_type(0, kind)
                 await settle(pilot)
             assert js.session.doc.text() == before, flips
+
+
+def test_a_typed_return_symbol_beside_a_real_line_break_stays_a_character():
+    # "Press ⏎ to open" + a real line break: an edit had turned the typed ⏎ into a break
+    from shopbeam.tui.widgets import from_one_line, one_line
+    was = "Press \u23ce to open\nline2"
+    assert one_line(was) == "Press \u23ce to open\u23celine2"
+    assert from_one_line(one_line(was) + "!", was) == was + "!"
+    # a Windows line end reads as the line break a TOML reader makes of it
+    crlf = "notes\r\nline two"
+    assert one_line(crlf) == "notes\u23celine two"
+    assert from_one_line(one_line(crlf) + "!", crlf) == "notes\nline two!"
+    # a form feed kept where the text around it changed
+    ff = "a\fb"
+    assert from_one_line("xa\u240cb", ff) == "xa\fb"
+
+
+@sync
+async def test_a_mark_deleted_and_typed_again_is_the_line_break_it_was(tmp_path):
+    path = demo_copy(tmp_path)
+    text = path.read_text(encoding="utf-8").replace(
+        'title = "Loft beam over the saw bay, with stair overhang"', 'title = "Bay\\fone"')
+    path.write_text(text, encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = await at_end_of(pilot, app, "job", "title")
+        f.input.cursor_position = 4  # after the mark
+        await burst(pilot, "\x7f")
+        await settle(pilot)
+        await burst(pilot, "\u240c")
+        await settle(pilot)
+        assert app.job_screen.session.doc.get("title") == "Bay\fone"

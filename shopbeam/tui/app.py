@@ -35,7 +35,7 @@ from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, 
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
                                 WHEEL_WORDS, load_warnings, problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
-                                  from_one_line, update_text)
+                                  from_one_line, one_line, update_text)
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -496,10 +496,14 @@ class JobScreen(Screen):
         s = self.session
         raw = value.strip()
         if key in ("title", "notes"):
-            # the marks stand for line breaks only in a text that had them (a ⏎ typed into
-            # a one-line text is a character of it)
+            # the marks stand for the line breaks the text had (a ⏎ typed is a character);
+            # a text back as it was opened is that text (a mark deleted and typed again)
             was = s.doc.get(key, "")
-            text = from_one_line(value, was) if isinstance(was, str) else value
+            opened = self._opened_value([], key)
+            if isinstance(opened, str) and value == one_line(opened):
+                text = opened.replace("\r\n", "\n")
+            else:
+                text = from_one_line(value, was) if isinstance(was, str) else value
             s.set(key, text if key == "title" else (text or None))
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])
@@ -863,6 +867,12 @@ class JobScreen(Screen):
         saved) when it said the default in words (`case = "live"`, `patterned = false`), so
         a choice picked away and back leaves the line as it was; None (the key left out)
         when it did not."""
+        got = self._opened_value(path, key)
+        return got if got is not None and got in same and \
+            not (isinstance(got, bool) != any(isinstance(x, bool) for x in same)) else None
+
+    def _opened_value(self, path: list, key: str):
+        """The value `key` (under `path`) had in the file as opened or last saved; None."""
         text = self.session.saved_text
         if not text:
             return None
@@ -879,9 +889,7 @@ class JobScreen(Screen):
                 node = node[p]
             except (KeyError, IndexError, TypeError):
                 return None
-        got = node.get(key) if isinstance(node, dict) else None
-        return got if got is not None and got in same and \
-            not (isinstance(got, bool) != any(isinstance(x, bool) for x in same)) else None
+        return node.get(key) if isinstance(node, dict) else None
 
     def _kept_of(self, node, kept: dict | None = None) -> dict | None:
         """What the row table `node` had under the other types it was given (type -> {key:

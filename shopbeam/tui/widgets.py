@@ -46,22 +46,42 @@ BREAK_MARKS = {"\n": LINE_BREAK, "\r": "\u240d", "\v": "\u240b", "\f": "\u240c",
                "\u2028": "\u21b5", "\u2029": "\u204b"}  # ⏎ ␍ ␋ ␌ ␜ ␝ ␞ ␤ ↵ ⁋
 
 
+def _pieces(text: str) -> list[tuple[str, str]]:
+    """(shown character, what it stands for) of `text` in a one-line field: a line break is
+    its mark (a Windows line end, CR LF, one mark and a plain line break: a TOML reader reads
+    a multi-line string's CR LF as LF), every other character itself."""
+    out, i = [], 0
+    while i < len(text):
+        if text.startswith("\r\n", i):
+            out.append((LINE_BREAK, "\n"))
+            i += 2
+            continue
+        ch = text[i]
+        out.append((BREAK_MARKS.get(ch, ch), ch))
+        i += 1
+    return out
+
+
 def one_line(text) -> str:
     """`text` for a one-line field: each line break shown as its mark (BREAK_MARKS)."""
-    text = "" if text is None else str(text)
-    for ch, mark in BREAK_MARKS.items():
-        text = text.replace(ch, mark)
-    return text
+    return "".join(shown for shown, _ in _pieces("" if text is None else str(text)))
 
 
 def from_one_line(text: str, was: str) -> str:
-    """What a one-line field's text stands for, given the text `was` it showed: a mark is its
-    line break again where `was` had that break (a mark typed into a text that had none, such
-    as "Press ⏎ to open", is a character of it)."""
-    for ch, mark in BREAK_MARKS.items():
-        if ch in was:
-            text = text.replace(mark, ch)
-    return text
+    """What a one-line field's text stands for, given the text `was` it showed: what is left
+    as it was shown stands for what it was (a mark for its line break), and what was typed is
+    itself (a "⏎" typed into a title is a character of it, even beside a real line break)."""
+    from difflib import SequenceMatcher
+
+    pieces = _pieces(was)
+    shown = "".join(p for p, _ in pieces)
+    if text == shown:
+        return "".join(orig for _, orig in pieces)
+    out = []
+    for op, i1, i2, j1, j2 in SequenceMatcher(None, shown, text, autojunk=False).get_opcodes():
+        out.append("".join(orig for _, orig in pieces[i1:i2]) if op == "equal" else
+                   text[j1:j2])
+    return "".join(out)
 
 
 # Fields of free text, where the Option-layer characters of the digits are ordinary
