@@ -1210,3 +1210,13 @@ def test_bar_grating_bearing_bars_at_their_spacing_are_rated():
                  ).replace('value = "-50 lbf/ft"', 'value = "-100 psf"\nwidth = "1-3/16 in"')
     res = capacity(parse_job_text(text))
     assert not any("under a foot" in w for w in res.not_rated)
+
+
+def test_a_line_separator_inside_a_string_does_not_shift_the_line_named():
+    # a title holding U+2028 (saved raw by the text UI) had made `check` name line 20 for
+    # a problem on line 16: TOML ends a line at LF only
+    text = _span("Shelf\u2028beam\u2029bay\x853", "8 ft").replace(
+        'value = "-50 lbf/ft"', 'value = "-50 lbf/fx"')
+    got = refused(text)
+    want = next(n for n, ln in enumerate(text.split("\n"), start=1) if "lbf/fx" in ln)
+    assert got and got[0].key == "loads[0].value" and got[0].line == want

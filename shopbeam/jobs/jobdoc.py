@@ -364,7 +364,8 @@ def _cut_row(text: str, name: str, index: int) -> str | None:
     """The text without row `index` of the array of tables `name` and its own comment
     block (comment lines directly above its header). None when the layout is not plain
     enough to be sure (the caller then lets tomlkit remove it)."""
-    lines = text.splitlines(keepends=True)
+    lines = text.split("\n")  # TOML's lines: a U+2028 or form feed in a string is no end
+    lines = [ln + "\n" for ln in lines[:-1]] + ([lines[-1]] if lines[-1] else [])
     own = re.compile(r"^\s*\[\[\s*" + re.escape(name) + r"\s*\]\]\s*(#.*)?$")
     headers = [i for i, ln in enumerate(lines) if _ANY_HEADER.match(ln)
                and re.match(r"^\s*\[\[?\s*[A-Za-z0-9_.\"' -]+\s*\]\]?\s*(#.*)?$", ln)]

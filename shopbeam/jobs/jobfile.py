@@ -231,12 +231,19 @@ _HEADER = re.compile(r"^\s*(\[\[?)\s*([A-Za-z0-9_.\-\" ]+?)\s*\]\]?\s*(#.*)?$")
 _KEYLINE = re.compile(r"^\s*([A-Za-z0-9_\-]+|\"[^\"]*\")\s*=")
 
 
+def toml_lines(text: str) -> list[str]:
+    """The lines of a job file as TOML counts them: only LF (or CR LF) ends one (a U+2028,
+    form feed or NEL inside a string is a character; str.splitlines would end a line there
+    and name the wrong line in a message)."""
+    return [ln[:-1] if ln.endswith("\r") else ln for ln in text.split("\n")]
+
+
 def key_lines(text: str) -> dict[str, int]:
     """Map key paths (``beam.length``, ``loads[2].at``, ``loads[2]``) to 1-based lines."""
     lines: dict[str, int] = {}
     counts: dict[str, int] = {}
     table = ""
-    for n, raw in enumerate(text.splitlines(), start=1):
+    for n, raw in enumerate(toml_lines(text), start=1):
         m = _HEADER.match(raw)
         if m and not _KEYLINE.match(raw):
             name = m.group(2).replace('"', "").replace(" ", "")
@@ -3617,7 +3624,7 @@ def _slip_words(text: str, line: int | None) -> str:
     """The commonest slips behind a TOML error, in shop words with the line written right
     ("" when the line is none of them): curly quotes pasted from a word processor, a value
     with no quotes, a list of words with no quotes, an inch mark that ends the string."""
-    lines = text.splitlines()
+    lines = toml_lines(text)
     here = lines[line - 1] if line and 0 < line <= len(lines) else ""
     m = _VALUE_LINE.match(here)
     if not m:
@@ -3646,7 +3653,7 @@ def _twice_words(msg: str, text: str, line: int | None) -> str:
     errors)."""
     if line is None or not ("Cannot overwrite" in msg or "Cannot declare" in msg):
         return ""
-    lines = text.splitlines()
+    lines = toml_lines(text)
     for name in ("supports", "loads", "moving"):  # [supports] beside [[supports]]
         single = [i + 1 for i, x in enumerate(lines) if re.match(rf"\s*\[\s*{name}\s*\]", x)]
         double = any(re.match(rf"\s*\[\[\s*{name}\s*\]\]", x) for x in lines)
