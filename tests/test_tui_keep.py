@@ -1464,3 +1464,21 @@ async def test_a_mark_deleted_and_typed_again_is_the_line_break_it_was(tmp_path)
         await burst(pilot, "\u240c")
         await settle(pilot)
         assert app.job_screen.session.doc.get("title") == "Bay\fone"
+
+
+@sync
+async def test_a_load_label_with_a_line_separator_shows_a_mark_and_keeps_it(tmp_path):
+    # a label holding U+2028 spilled over the row below, and an edit made it a space
+    path = demo_copy(tmp_path)
+    text = path.read_text(encoding="utf-8").replace('label = "deck"', 'label = "deck\\u2028A"')
+    path.write_text(text, encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        f = await at_end_of(pilot, app, "loads", "load.label")
+        assert f.input.value == "deck\u21b5A"
+        await burst(pilot, "!")
+        await settle(pilot)
+        assert app.job_screen.session.rows("loads")[0]["label"] == "deck\u2028A!"

@@ -545,8 +545,10 @@ class JobScreen(Screen):
                 pair = list(old) if isinstance(old, list) and len(old) == 2 else ["", ""]
                 pair[0 if field == "value" else 1] = raw
                 s.set_row("loads", i, "value", pair)
-            elif field == "label":
-                s.set_row("loads", i, "label", value or None)
+            elif field == "label":  # its line breaks shown as marks, as in the title
+                was = row.get("label")
+                text = from_one_line(value, was) if isinstance(was, str) else value
+                s.set_row("loads", i, "label", text or None)
             elif field in ("width", "total", "bearing"):  # optional: emptied means left out
                 s.set_row("loads", i, field, raw or None)
             else:

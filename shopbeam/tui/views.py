@@ -626,7 +626,8 @@ class LoadsView(RowsView):
         values = {"load.at": row.get("at", ""), "load.start": row.get("start", ""),
                   "load.end": row.get("end", ""), "load.value": v1, "load.value2": v2,
                   "load.width": row.get("width", ""), "load.total": row.get("total", ""),
-                  "load.label": row.get("label", ""), "load.bearing": row.get("bearing", "")}
+                  "load.label": one_line(row.get("label", "")),
+                  "load.bearing": row.get("bearing", "")}
         shown = {"load.at": kind in ("point", "moment"),
                  "load.bearing": kind == "point" or "bearing" in row,
                  "load.start": kind in ("uniform", "linear"),
