@@ -1482,3 +1482,30 @@ async def test_a_load_label_with_a_line_separator_shows_a_mark_and_keeps_it(tmp_
         await burst(pilot, "!")
         await settle(pilot)
         assert app.job_screen.session.rows("loads")[0]["label"] == "deck\u2028A!"
+
+
+@sync
+async def test_a_burst_of_arrows_on_a_choice_ends_where_the_keys_say(tmp_path):
+    # ten arrows that go round and come back had left a load on another type (its value
+    # and comment gone from the file): an answer redrawn mid-burst put the choice back a few
+    # keys. Whatever the spacing of the keys, the load ends where it began
+    import asyncio
+    left, right = "\x1b[D", "\x1b[C"
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        kind = choice_of(app, "loads", "load.type")
+        kind.focus()
+        await settle(pilot)
+        s = app.job_screen.session
+        before = s.doc.text()
+        for n in range(6):
+            for ev in events_of(left * 3 + right * 3 + left * 4):
+                app._driver.send_message(ev)
+                await asyncio.sleep(0.004 * (n % 3))
+            await settle(pilot)
+            await pilot.pause(0.3)
+            assert kind.value == "uniform" and s.rows("loads")[0]["type"] == "uniform", n
+        assert s.doc.text() == before

@@ -436,7 +436,12 @@ class Choice(Widget, can_focus=True):
         return t
 
     def set(self, value: str) -> None:
-        """Show a value from the document (no Changed message)."""
+        """Show a value from the document (no Changed message); not while a pick of the
+        user's is still on its way to the document (an answer redrawn mid-burst had put the
+        choice back a few keys, and the arrows behind it moved on from there: a load ended
+        on a type not picked)."""
+        if getattr(self, "_pending", None) is not None:
+            return
         if value in self.options:
             self.set_reactive(Choice.value, value)
             self.refresh()
