@@ -522,7 +522,8 @@ def label_text(r: Rating, width: int = 40) -> str:
         out.append("+" + ch * (width - 2) + "+")
 
     def row(text="", indent=""):
-        for piece in (textwrap.wrap(text, inner, subsequent_indent=indent) or [""]):
+        for piece in (textwrap.wrap(text, inner, subsequent_indent=indent,
+                                    break_on_hyphens=False) or [""]):
             out.append("| " + piece.ljust(inner) + " |")
 
     rule()
@@ -601,7 +602,8 @@ def plaque_text(r: Rating, width: int = 78) -> str:
     rows = ["| " + (r.reactions_head + ":").ljust(inner) + " |"]
     for line in r.reactions:
         rows += ["| " + piece.ljust(inner) + " |"
-                 for piece in textwrap.wrap("- " + line, inner, subsequent_indent="  ")]
+                 for piece in textwrap.wrap("- " + line, inner, subsequent_indent="  ",
+                                            break_on_hyphens=False)]
     lines = text.rstrip("\n").split("\n")
     cut = next(i for i, ln in enumerate(lines) if ln.startswith("| Basis: "))
     return "\n".join(lines[:cut] + rows + lines[cut:]) + "\n"
