@@ -621,3 +621,8 @@ value = "-60 lbf/ft"
     words = label.label_text(label.rating(capacity(parse_job_text(text))))
     assert "top edge is braced all along" in " ".join(re.sub(r"[|+=]", " ", words).split())
     assert "flange" not in words
+
+
+def test_a_tag_to_type_is_not_split_at_its_hyphen_on_the_label():
+    text = label.label_text(label.rating(capacity(load_job(PRESETS / "trailer-cross-member.toml"))))
+    assert '"not-vehicle"' in text
