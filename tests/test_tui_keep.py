@@ -1509,3 +1509,20 @@ async def test_a_burst_of_arrows_on_a_choice_ends_where_the_keys_say(tmp_path):
             await pilot.pause(0.3)
             assert kind.value == "uniform" and s.rows("loads")[0]["type"] == "uniform", n
         assert s.doc.text() == before
+
+
+
+@sync
+async def test_the_keys_not_used_notice_names_the_view_on_screen(tmp_path):
+    # with no field picked on the Span view the notice had said "the job view"
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        app.set_focus(None)
+        await settle(pilot)
+        await burst(pilot, "hello")
+        await pilot.pause(app.job_screen.STRAY_WAIT + 0.2)
+        said = [m for m in _notices(app) if "Not typed anywhere" in m]
+        assert said and "the Span view, no field picked" in said[-1], said

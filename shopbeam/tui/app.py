@@ -446,13 +446,14 @@ class JobScreen(Screen):
         self.app.post_message(Notify(note))
         self._stray_note = (note, text, self._stray_where, now)
 
-    @staticmethod
-    def _where(widget) -> str:
+    def _where(self, widget) -> str:
         if isinstance(widget, Choice):
             return (f"the {widget.label.strip()} choice (a first letter pressed on its own, "
                     "or <- ->, picks)")
         view = next((a for a in widget.ancestors_with_self if isinstance(a, View)), None)
-        name = view.title if view is not None else "job"
+        # no widget of a view has the focus: the view on screen (it had said "job" always)
+        name = view.title if view is not None else next(
+            (v[2] for v in VIEWS if v[0] == getattr(self, "current", "")), "job")
         if isinstance(widget, RowList):
             return f"the list of the {name} view (up and down pick a row)"
         return f"the {name} view, no field picked"
