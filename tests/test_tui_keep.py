@@ -1513,6 +1513,31 @@ async def test_a_burst_of_arrows_on_a_choice_ends_where_the_keys_say(tmp_path):
 
 
 @sync
+async def test_digits_a_second_and_more_apart_behind_a_key_not_used_switch_no_view(tmp_path):
+    # "-250" at 1.2 s a key with no field picked had switched views three times, and the
+    # notice named the "-" alone: within STRAY_WORD_GAP they are the same word
+    from shopbeam.tui.app import JobScreen
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    gap, join = JobScreen.STRAY_WORD_GAP, JobScreen.STRAY_JOIN
+    JobScreen.STRAY_WORD_GAP = JobScreen.STRAY_JOIN = 10.0  # wide: never racing the clock
+    try:
+        async with app.run_test(size=SIZE) as pilot:
+            await settle(pilot)
+            await pilot.press("f3")
+            await settle(pilot)
+            app.set_focus(None)
+            await settle(pilot)
+            for ch in "-250":
+                await burst(pilot, ch)
+                await pilot.pause(1.2)
+            assert app.job_screen.current == "span"
+            said = [m for m in _notices(app) if "Not typed anywhere" in m]
+            assert len(said) == 1 and '"-250"' in said[0], said
+    finally:
+        JobScreen.STRAY_WORD_GAP, JobScreen.STRAY_JOIN = gap, join
+
+
+@sync
 async def test_the_keys_not_used_notice_names_the_view_on_screen(tmp_path):
     # with no field picked on the Span view the notice had said "the job view"
     app = make_app(demo_copy(tmp_path), cursor_blink=False)

@@ -385,6 +385,9 @@ class JobScreen(Screen):
             self.not_typed(event.character, focused or self)
 
     STRAY_WAIT = 0.4  # seconds: keys not used that come closer together make one notice
+    # a view key (a digit) typed within this of a key nothing took is text of the same word
+    # (typed slowly, at up to a second and a half a key), not a switch of views
+    STRAY_WORD_GAP = 2.0  # seconds
 
     def not_typed(self, character: str, where) -> None:
         """A printable key that nothing took (the focus on a choice, a list or a view, not
@@ -439,8 +442,8 @@ class JobScreen(Screen):
         note = Notification(
             f"Not typed anywhere: \"{escapes.shown(text)}\"{self._stray_after}. The focus was "
             f"on {self._stray_where}, not in a text field. Tab goes to the next field; F2 to "
-            "F12 change views." + (" A digit within a second of a key not used is taken as "
-                                   "text, not as a view: press it again to change views."
+            "F12 change views." + (" A digit within two seconds of a key not used is taken "
+                                   "as text, not as a view: press it again to change views."
                                    if digits else ""),
             "keys not used", "warning", 10, markup=False)
         self.app.post_message(Notify(note))
@@ -1466,10 +1469,10 @@ class ShopbeamApp(App):
                 return
             if on_job and event.is_printable and not isinstance(focused, Input) and \
                     event.key in VIEW_KEYS and \
-                    time.monotonic() - js._stray_at < Choice.WORD_GAP:
-                # a view key within WORD_GAP of a key nothing took: the same word typed on
-                # slowly ("-250" at half a second a key, no field picked), not three
-                # switches; it is not used, and the notice names it with the rest
+                    time.monotonic() - js._stray_at < js.STRAY_WORD_GAP:
+                # a view key within STRAY_WORD_GAP of a key nothing took: the same word typed
+                # on slowly ("-250" at a second a key, no field picked), not three switches;
+                # it is not used, and the notice names it with the rest
                 js.not_typed(event.character or "", focused or js)
                 return
             if on_job and event.is_printable and after_switch and typed_on:
