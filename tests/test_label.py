@@ -624,5 +624,9 @@ value = "-60 lbf/ft"
 
 
 def test_a_tag_to_type_is_not_split_at_its_hyphen_on_the_label():
-    text = label.label_text(label.rating(capacity(load_job(PRESETS / "trailer-cross-member.toml"))))
-    assert '"not-vehicle"' in text
+    res = capacity(load_job(PRESETS / "trailer-cross-member.toml"))
+    assert '"not-vehicle"' in label.label_text(label.rating(res))
+    # and on the capacity page, at the text UI's width as at 78 columns
+    from shopbeam.output.capacityreport import render
+    for width in (78, 76):
+        assert '"not-vehicle"' in render(res, width)

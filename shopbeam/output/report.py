@@ -17,7 +17,8 @@ CHECK_KINDS = units.CHECK_KINDS
 
 
 def _wrap(text: str, indent: str = "  ", width: int = WIDTH) -> list[str]:
-    return textwrap.wrap(text, width=width, initial_indent=indent, subsequent_indent=indent) or [indent]
+    return textwrap.wrap(text, width=width, initial_indent=indent, subsequent_indent=indent,
+                         break_on_hyphens=False) or [indent]
 
 
 def fmt_pos(x: float, system: str) -> str:
