@@ -12,7 +12,7 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from shopbeam import units
-from shopbeam.cautions import RACK_TAGS, cautions_for
+from shopbeam.cautions import RACK_TAGS, cautions_for, normal_tag
 from shopbeam.design import fatigue, loading
 from shopbeam.design.basis import cb_factor, support_braces
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
@@ -22,7 +22,7 @@ from shopbeam.design.lifting import profile_of
 from shopbeam.design.loading import run_checks
 from shopbeam.design.local import local_unchecked
 from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, torsion_note
-from shopbeam.jobs.jobfile import Job
+from shopbeam.jobs.jobfile import NOT_FLOOR, Job
 from shopbeam.jobs.rules import guessed_profile, rack_arm
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.engine.solver import Solution, sound_solve
@@ -829,9 +829,15 @@ def hogging(moment):
     return ex if big > 0 and ex.min < -0.01 * big else None
 
 
+def flange_word(job: Job) -> str:
+    """What the member's top and bottom are called in words: a wood member's edges, a metal
+    one's flanges."""
+    return "edge" if getattr(job.material, "kind", "") == "lumber" else "flange"
+
+
 def hogging_remedy(job: Job) -> str:
     """What to write when the top-only bracing leaves the bottom flange free under hogging."""
-    part = "edge" if getattr(job.material, "kind", "") == "lumber" else "flange"
+    part = flange_word(job)
     return (f"give the bottom {part}'s brace points with braces = [...] in place of braced = "
             "true" if job.braced else f"brace the bottom {part} too (kickers) and say "
             "braces_flange = \"both\"") + (", or write restrained = true if the member is "
@@ -925,7 +931,7 @@ def floor_unchecked(job: Job) -> list[Unchecked]:
     """Walking vibration of a floor member (named by its tags or title), as not checked. A
     lifting device's title naming where it hangs ("hoist beam in the loft") is not a floor."""
     lifting = job.lifting or getattr(job.criteria, "lifting", "")
-    if "not-floor" in {str(t).strip().lower() for t in job.tags} or \
+    if NOT_FLOOR in {normal_tag(t) for t in job.tags} or \
             not any(_FLOOR.search(t) for t in tuple(job.tags) + (() if lifting else (job.title,))):
         return []
     wood = getattr(job.material, "kind", "") == "lumber"

@@ -4,47 +4,41 @@ why none may be posted), the checks at k as `output.present` words them, and the
 from __future__ import annotations
 
 import math
-import textwrap
 
 from shopbeam.cautions import banner, cautions_for
 from shopbeam.design.capacity import CapacityResult, max_load_lines
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.escapes import shown
-from shopbeam.output.present import present_capacity, warnings_headline
-
-
-def _wrap(text: str, width: int, **kw) -> list[str]:
-    """Lines of `text`, never split at a hyphen (a tag to type, "not-vehicle", stays whole)."""
-    return textwrap.wrap(text, width, break_on_hyphens=False, **kw)
+from shopbeam.output.present import present_capacity, warnings_headline, wrap
 
 
 def render(res: CapacityResult, width: int = 78) -> str:
     """The page, wrapped at `width` columns (the text UI passes the width of its view)."""
     job = res.job
-    lines = _wrap(f"shopbeam capacity: {job.title}", width, subsequent_indent="  ")
+    lines = wrap(f"shopbeam capacity: {job.title}", width, subsequent_indent="  ")
     lines.append("=" * width)
-    lines += _wrap(banner(job.tags, job.lifting), width)
-    lines += _wrap(warnings_headline(job, "posting a load"), width,
-                   initial_indent="!! ", subsequent_indent="!! ")
+    lines += wrap(banner(job.tags, job.lifting), width)
+    lines += wrap(warnings_headline(job, "posting a load"), width,
+                  initial_indent="!! ", subsequent_indent="!! ")
     lines.append("")
     k = res.factor
     if math.isfinite(k):
-        lines += _wrap(f"CAPACITY FACTOR k = {k:.6g} on the live loads "
-                       "(dead loads and self-weight fixed)", width,
-                       subsequent_indent="  ")
+        lines += wrap(f"CAPACITY FACTOR k = {k:.6g} on the live loads "
+                      "(dead loads and self-weight fixed)", width,
+                      subsequent_indent="  ")
     else:
         # no live loads: nothing to scale, so no factor at all (not an unlimited one)
         words = "none" if res.method == "no live loads" else "unlimited"
-        lines += _wrap(f"CAPACITY FACTOR: {words} (" + res.note + ")", width,
-                       subsequent_indent="  ")
+        lines += wrap(f"CAPACITY FACTOR: {words} (" + res.note + ")", width,
+                      subsequent_indent="  ")
     more = [res.note] if res.note and math.isfinite(k) else []
     more += [f"method: {res.method}", f"basis: {BASIS_WORDS[basis_of(job)]}"]
     for m in more:
-        lines += _wrap(m, width, initial_indent="  ", subsequent_indent="    ")
+        lines += wrap(m, width, initial_indent="  ", subsequent_indent="    ")
     if res.not_rated:
         lines.append("NOT RATED: do not post a load from this factor, because")
         for r in res.not_rated:
-            lines += _wrap(r, width, initial_indent="  - ", subsequent_indent="    ")
+            lines += wrap(r, width, initial_indent="  - ", subsequent_indent="    ")
     else:
         for label, value in max_load_lines(res):
             lines.append(f"  {label:<16} {value}")
@@ -54,22 +48,22 @@ def render(res: CapacityResult, width: int = 78) -> str:
     for c in p.checks:
         lines.append(f"  {c.name:<11} {c.demand} vs {c.limit}: ratio {c.ratio:.6f}")
         formula = c.formula + (f" [{c.detail_text}]" if c.detail_text else "")
-        for w in _wrap(formula, width - 6):
+        for w in wrap(formula, width - 6):
             lines.append("      " + w)
     if p.governing_name:
         lines.append(f"  governing: {p.governing_name}")
     if p.uplift and math.isfinite(k) and k > 0:
         lines.append("  uplift at k (anchor these supports):")
         for u in p.uplift:
-            lines += _wrap(u, width, initial_indent="    ", subsequent_indent="      ")
+            lines += wrap(u, width, initial_indent="    ", subsequent_indent="      ")
     warns = [p for p in job.warnings if p.warning]
     if warns:
         lines.append("")
         lines.append("INPUT WARNINGS")
         for p in warns:
-            lines += _wrap(p.located(), width, initial_indent="  ", subsequent_indent="  ")
+            lines += wrap(p.located(), width, initial_indent="  ", subsequent_indent="  ")
     lines.append("")
     lines.append("CAUTIONS")
     for c in cautions_for(job.tags, job.lifting):
-        lines += _wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
+        lines += wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
     return shown("\n".join(lines), keep="\n") + "\n"

@@ -28,20 +28,19 @@ from __future__ import annotations
 
 import datetime as _dt
 import math
-import textwrap
 from dataclasses import dataclass
 from html import escape
 
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
 from shopbeam.design import fatigue
-from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD, couple_notes
+from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD, couple_notes, flange_word
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.solver import sound_solve
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.jobs.rules import rack_arm
-from shopbeam.output.present import present_capacity
+from shopbeam.output.present import present_capacity, wrap
 
 BASIS_SHORT = {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
                "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}
@@ -315,8 +314,8 @@ def _held_words(job) -> list[str]:
         out.append("RATED ONLY WHILE the member is held against twist and sideways movement "
                    "all along (restrained = true).")
     elif job.braced:
-        part = "edge" if getattr(job.material, "kind", "") == "lumber" else "flange"
-        out.append(f"RATED ONLY WHILE the top {part} is braced all along (braced = true).")
+        out.append(f"RATED ONLY WHILE the top {flange_word(job)} is braced all along "
+                   "(braced = true).")
     elif job.braces:
         which = {"top": "top flange", "both": "both flanges"}.get(
             getattr(job, "braces_flange", None) or "both", "both flanges")
@@ -522,8 +521,7 @@ def label_text(r: Rating, width: int = 40) -> str:
         out.append("+" + ch * (width - 2) + "+")
 
     def row(text="", indent=""):
-        for piece in (textwrap.wrap(text, inner, subsequent_indent=indent,
-                                    break_on_hyphens=False) or [""]):
+        for piece in (wrap(text, inner, subsequent_indent=indent) or [""]):
             out.append("| " + piece.ljust(inner) + " |")
 
     rule()
@@ -602,8 +600,7 @@ def plaque_text(r: Rating, width: int = 78) -> str:
     rows = ["| " + (r.reactions_head + ":").ljust(inner) + " |"]
     for line in r.reactions:
         rows += ["| " + piece.ljust(inner) + " |"
-                 for piece in textwrap.wrap("- " + line, inner, subsequent_indent="  ",
-                                            break_on_hyphens=False)]
+                 for piece in wrap("- " + line, inner, subsequent_indent="  ")]
     lines = text.rstrip("\n").split("\n")
     cut = next(i for i, ln in enumerate(lines) if ln.startswith("| Basis: "))
     return "\n".join(lines[:cut] + rows + lines[cut:]) + "\n"

@@ -13,6 +13,7 @@ envelope at the rated load): the capacity page and the rating label are laid out
 
 from __future__ import annotations
 
+import textwrap
 from dataclasses import dataclass
 
 from shopbeam import units
@@ -23,6 +24,12 @@ PARAM_KINDS = {"Lb": "small_length", "Lp": "small_length", "Lr": "small_length",
                "Cb": None, "Omega": None, "Mn": "moment", "Vn": "force", "Av": "area",
                "S": "modulus", "n": None, "limit": "small_length", "span_start": "length",
                "span_end": "length", "lb": "small_length"}
+
+
+def wrap(text: str, width: int, **kw) -> list[str]:
+    """Lines of `text` for a page or label, never split at a hyphen (a tag to type,
+    "not-vehicle", stays whole)."""
+    return textwrap.wrap(text, width, break_on_hyphens=False, **kw)
 
 
 @dataclass(frozen=True)

@@ -5,11 +5,10 @@ Everything is shown in the job's display units; the safety caution is always on 
 
 from __future__ import annotations
 
-import textwrap
 
 from shopbeam import units
 from shopbeam.design.analysis import Result
-from shopbeam.output.present import present, upward_note, warnings_headline
+from shopbeam.output.present import present, upward_note, warnings_headline, wrap
 
 WIDTH = 78
 
@@ -17,8 +16,7 @@ CHECK_KINDS = units.CHECK_KINDS
 
 
 def _wrap(text: str, indent: str = "  ", width: int = WIDTH) -> list[str]:
-    return textwrap.wrap(text, width=width, initial_indent=indent, subsequent_indent=indent,
-                         break_on_hyphens=False) or [indent]
+    return wrap(text, width, initial_indent=indent, subsequent_indent=indent) or [indent]
 
 
 def fmt_pos(x: float, system: str) -> str:

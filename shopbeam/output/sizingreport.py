@@ -5,19 +5,12 @@ from __future__ import annotations
 
 import math
 
-import textwrap
-
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.escapes import shown as escaped
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.design.sizing import SizeResult, shown_rows
-
-
-def _wrap(text: str, width: int, **kw) -> list[str]:
-    """Lines of `text`, never split at a hyphen (a tag to type, "not-vehicle", stays whole)."""
-    return textwrap.wrap(text, width, break_on_hyphens=False, **kw)
-
+from shopbeam.output.present import wrap
 
 
 def _k(factor: float) -> str:
@@ -32,14 +25,14 @@ def render(res: SizeResult, top: int = 15) -> str:
     lines.append(f"swept {len(res.rows)} sections ({res.kind}) in {res.seconds * 1000:.0f} ms; "
                  f"{len(res.passing)} pass; {res.method}")
     if res.material_note:
-        lines += _wrap("NOTE: " + res.material_note, 78, subsequent_indent="  ")
+        lines += wrap("NOTE: " + res.material_note, 78, subsequent_indent="  ")
     weight = ("self-weight recomputed per section" if job.self_weight else
               "self-weight not included (self_weight = false)")
     lines.append(f"basis: {BASIS_WORDS[basis_of(job)]}; {weight}")
     more = len(res.screened_only)
     full_ok = sum(1 for r in res.rows if r.checked == "full" and r.ok)
     if more:
-        lines += _wrap(
+        lines += wrap(
             f"{res.full_checks} checked in full, lightest first, until "
             f"{'one' if full_ok <= 1 else full_ok} passed; {more} "
             "heavier sections pass the batched screen but were not checked in full (not "
@@ -49,7 +42,7 @@ def render(res: SizeResult, top: int = 15) -> str:
         lines.append(f"lightest that passes: {res.lightest.designation} "
                      f"({units.fmt(res.lightest.weight, 'mass_per_length', sy)})")
         if getattr(res.lightest, "not_rated", ()):
-            lines += _wrap(
+            lines += wrap(
                 "!! but it passes only the checks that were made: a limit state it calls for "
                 "is not checked (see NOT RATED below), so do not choose it on this sweep "
                 "alone; try another kind, or have it checked", 78, subsequent_indent="!! ")
@@ -58,11 +51,11 @@ def render(res: SizeResult, top: int = 15) -> str:
                 lines.append(f"lightest that passes and is rated: {rated.designation} "
                              f"({units.fmt(rated.weight, 'mass_per_length', sy)})")
             elif all(r.not_rated for r in shown):
-                lines += _wrap(
+                lines += wrap(
                     "!! no listed section can be rated on this sweep (each is NOT RATED, see "
                     "below)", 78, subsequent_indent="!! ")
             else:
-                lines += _wrap(
+                lines += wrap(
                     f"!! none of the {res.full_checks} sections checked in full is rated; "
                     "--confirm N checks more", 78, subsequent_indent="!! ")
     if res.cheapest:
@@ -84,8 +77,8 @@ def render(res: SizeResult, top: int = 15) -> str:
         for why in r.not_rated[:2]:
             groups.setdefault(why, []).append(r.designation)
     for why, names in groups.items():
-        lines += _wrap(f"{', '.join(names)} NOT RATED: {why}", 78,
-                       initial_indent="  ", subsequent_indent="    ")
+        lines += wrap(f"{', '.join(names)} NOT RATED: {why}", 78,
+                      initial_indent="  ", subsequent_indent="    ")
     if not res.passing:
         lines.append("  no section passes; the closest:")
         for r in sorted(res.rows, key=lambda r: r.ratio)[:5]:
@@ -95,7 +88,7 @@ def render(res: SizeResult, top: int = 15) -> str:
         lines.append(f"  skipped {s}")
     lines.append("")
     for c in cautions_for(job.tags, job.lifting):
-        lines += _wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
+        lines += wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
     # each line is escaped on its own (a line break or tab in the title is shown, not obeyed)
     return "\n".join(escaped(x) for x in lines) + "\n"
 
