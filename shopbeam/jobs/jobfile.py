@@ -2190,6 +2190,17 @@ _LENGTH_UNITS = {"feet": "ft", "foot": "ft", "ft": "ft", "lf": "ft", "inches": "
 _UNIT_M = {"ft": 0.3048, "in": 0.0254, "mm": 0.001, "cm": 0.01, "m": 1.0}
 
 
+# A spacing the words give: "16 in o.c.", 16" OC, "24 in centres", "1-3/16 in centers"
+_SPACING_WORDS = re.compile(_LEN_NUM + r"\s*(?:in\b|inch\w*|\")\s*(?:o\.?\s?c\b\.?|"
+                            r"on cent\w*|cent(?:er|re)s|spacing|apart)", re.IGNORECASE)
+
+
+def _spacings_said(title, notes) -> list[float]:
+    """The spacings (in inches) the title and notes give."""
+    return [_number(m.group(1)) for t in (title, notes)
+            for m in _SPACING_WORDS.finditer(units.normalised(str(t or "")))]
+
+
 def _number(text: str) -> float:
     """A shop number: 12, 10.5, 10 1/2, 10-1/2, 1/2."""
     m = re.fullmatch(r"(\d+)[ -](\d+)/(\d+)", text)
@@ -2248,9 +2259,7 @@ def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title
     if length is None or not isinstance(raw_length, str) or not isinstance(raw_loads, list) \
             or not re.search(r"ft|feet|foot|'|\d\s*m\b", raw_length, re.IGNORECASE):
         return
-    said = [_number(m.group(1)) * 0.0254
-            for t in (title, notes) for m in _SPACING_WORDS.finditer(units.normalised(
-                str(t or "")))]
+    said = [x * 0.0254 for x in _spacings_said(title, notes)]
     for i, ld in enumerate(raw_loads):
         key = f"loads[{i}]"
         w = r.widths.get(key)
@@ -3158,12 +3167,6 @@ _LONE_WORDS = re.compile(
     r"(?<!\bat )(?<!\bby )(?<!\bunder )(?<!\bover )(?<!\bnear )(?<!\bthe )(?<!\bthat )"
     r"(?:headers?|girders?|lintels?)(?! (?:hangers?|joists?|is separate)))\b",
     re.IGNORECASE)
-# A spacing the words give: "16 in o.c.", "at 16 in", 16" OC, "24 in centres"
-_SPACING_WORDS = re.compile(
-    r"(\d+(?:\.\d+)?(?:[ -]\d+/\d+)?|\d+/\d+)\s*(?:in\b|inch\w*|\")\s*(?:o\.?\s?c\b\.?|on cent\w*|"
-    r"cent(?:er|re)s|spacing|apart)", re.IGNORECASE)
-
-
 def _repetitive(r: _Reader, raw_loads, service, material, section, members, title="",
                 notes=""):
     """Cr only where NDS 4.3.9 allows it (members.wood.repetitive_rule); a warning otherwise."""
@@ -3190,9 +3193,7 @@ def _repetitive(r: _Reader, raw_loads, service, material, section, members, titl
         if lone and re.search(r"\b(?:joists?|rafters?|studs?|purlins?)\b", str(title or ""),
                               re.IGNORECASE) and not re.match(r"(?i)(?:single|lone)", lone):
             lone = ""  # a joist's title naming the header or lintel beside it
-        spaced = [_number(m.group(1)) for t in (title, notes)
-                  for m in _SPACING_WORDS.finditer(units.normalised(str(t or "")))]
-        if lone or not (widths or any(0 < x <= 24 for x in spaced)):
+        if lone or not (widths or any(0 < x <= 24 for x in _spacings_said(title, notes))):
             why = (f"the title says {lone!r}, a member on its own" if lone else
                    "the job gives no spacing (an area load's tributary width is the joist "
                    "spacing)")
