@@ -249,6 +249,13 @@ class Session:
             return self.evaluation
         return self._edited()
 
+    def _forget_places(self) -> None:
+        """Drop where emptied keys stood and the key orders they came back by
+        (`_forget_or_restore`): rows were added, removed or put back, so their indices
+        moved."""
+        self.__dict__.pop("_places", None)
+        self.__dict__.pop("_orders", None)
+
     def rows(self, table: str) -> list[dict]:
         return self.doc.loads() if table == "loads" else self.doc.supports()
 
@@ -257,8 +264,7 @@ class Session:
             i = self.doc.add_load(**fields)
         else:
             i = self.doc.add_support(**fields)
-        self.__dict__.pop("_places", None)  # row indices moved
-        self.__dict__.pop("_orders", None)
+        self._forget_places()  # row indices moved
         self._edited()
         return i
 
@@ -271,8 +277,7 @@ class Session:
         else:
             self.doc.remove_support(index)
         self.removals = self.removals + [(table, index, before, self.doc.text(), row)]
-        self.__dict__.pop("_places", None)  # row indices moved
-        self.__dict__.pop("_orders", None)
+        self._forget_places()  # row indices moved
         self._edited()
 
     # (table, index, text before, text after, the row) of each removal, the last one last
@@ -297,8 +302,7 @@ class Session:
                 rows = self.doc.doc[table]
             rows.insert(min(index, len(rows)), row)
             index = min(index, len(rows) - 1)
-        self.__dict__.pop("_places", None)
-        self.__dict__.pop("_orders", None)
+        self._forget_places()
         self._edited()
         return table, index
 
