@@ -394,7 +394,7 @@ deflection = "L/240"
 """
 
 
-def test_a_load_on_wheels_under_the_flange_of_a_job_that_is_not_lifting_gets_the_tip_check():
+def test_a_load_hung_under_the_flange_of_a_job_that_is_not_lifting_gets_the_tip_check():
     on_wheels = parse_job_text(HUNG_ON_WHEELS.format(wheels="wheels = 4"))
     cap = capacity(on_wheels)
     names = [c.name for c in cap.checks]
@@ -410,8 +410,16 @@ def test_a_load_on_wheels_under_the_flange_of_a_job_that_is_not_lifting_gets_the
     per_k = cx2 * (2000 / 4) / 0.33**2 + 2000 * 10 / 4 * 12 / 15.2
     k = (allow - 225 * 12 / 15.2) / per_k
     assert cap.factor == pytest.approx(k, rel=5e-3)
-    # without wheels the load is a lug under the web (J10.1 only): no tip check
-    lug = capacity(parse_job_text(HUNG_ON_WHEELS.format(wheels="")))
+    # without wheels, on a job that is not a lifting device too, the load is taken as a
+    # beam clamp on both flange tips (P / 2 a contact, the most demanding fit): a pipe rack
+    # hung on clamps bends the tips as a hoist's clamp does
+    clamp = capacity(parse_job_text(HUNG_ON_WHEELS.format(wheels="")))
+    tip = next(c for c in clamp.checks if c.name == "wheel flange bending")
+    assert "lug = true" in tip.detail
+    per2 = cx2 * (2000 / 2) / 0.33**2 + 2000 * 10 / 4 * 12 / 15.2
+    assert clamp.factor == pytest.approx((allow - 225 * 12 / 15.2) / per2, rel=5e-3)
+    # a lug plate welded under the web (lug = true): J10.1 only, no tip check
+    lug = capacity(parse_job_text(HUNG_ON_WHEELS.format(wheels="lug = true")))
     assert "wheel flange bending" not in [c.name for c in lug.checks]
     assert lug.factor > 2 * cap.factor
 

@@ -699,9 +699,10 @@ def test_a_load_on_the_top_flange_of_an_unbraced_span_withholds_the_rating_where
     m = re.search(r"above the (\d+) lbf\*ft", why[0])
     assert m and float(m.group(1)) == pytest.approx(34690, rel=3e-3)
     assert top.factor * 8 * 20 / 4 == pytest.approx(48.56, rel=2e-3)  # k x PL/4, kip*ft
-    # hung below the flange, or braced at the load: rated, on the same factor or more
-    # (a load hung below reads like a lifting device until the job says it is not one)
-    hung_text = TOP_LOADED.format(extra="", flange='flange = "bottom"')
+    # hung below the flange from a lug under the web, or braced at the load: rated, on the
+    # same factor or more (a load hung below reads like a lifting device until the job says
+    # it is not one; on a clamp its flange tips are checked, see test_lifting)
+    hung_text = TOP_LOADED.format(extra="", flange='flange = "bottom"\nlug = true')
     assert not capacity(parse_job_text(hung_text)).rated
     hung = capacity(parse_job_text(hung_text.replace(
         'title = "pit cover beam"', 'title = "pit cover beam"\ntags = ["not-lifting"]')))

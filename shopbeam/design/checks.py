@@ -1266,9 +1266,9 @@ def checks_for(job, sol: Solution, st: Strengths, cb_one: bool = False,
     if fl.wood is not None:
         out += bearing_checks(job, sol, fl.wood)
         out += dead_load_checks(job, sol, st)
-    if lifting_job or getattr(job, "contacts", None):
-        # a load said to hang on trolley wheels or clamp jaws (`wheels`) bears on the flange
-        # tips whether or not the job is a lifting device
+    if lifting_job or lifting.tip_hung(job):
+        # a load hung from the bottom flange bears on the flange tips (a clamp or trolley
+        # wheels; not a lug under the web) whether or not the job is a lifting device
         wc = lifting.wheel_check(job, sol, sec, job.material, only_given=not lifting_job)
         if wc is not None:
             out.append(wc)

@@ -174,11 +174,18 @@ def flange_tf_at_wheel(sec, a: float) -> tuple[float, bool]:
     return max(tf, 0.3 * d["tf"]), tapered
 
 
+def tip_hung(job) -> tuple[str, ...]:
+    """The point loads hung from the bottom flange that bear on its tips (a beam clamp or
+    trolley wheels: every hung load but those with `lug = true`), on any job."""
+    lugs = set(getattr(job, "lugs", ()) or ())
+    return tuple(k for k in (getattr(job, "hung", ()) or ()) if k not in lugs)
+
+
 def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False):
     """The bottom-flange check under the worst wheel of the [[moving]] set in this state, and
     under the loads hung from the bottom flange. `only_given`: a job that is not a lifting
-    device, whose [[moving]] wheels are not taken as running on the bottom flange and whose
-    hung loads count only where `wheels` says they bear on trolley wheels or clamp jaws."""
+    device, whose [[moving]] wheels are not taken as running on the bottom flange (its hung
+    loads are taken as on the flange tips all the same, unless `lug = true`)."""
     if sec.shape != "i-beam" or sec.axis != "strong" or not steel_flange(mat):
         return None  # not covered: `lifting_unchecked` / `flange_unchecked` say so
     ws = job.moving[0] if job.moving and not only_given else None
@@ -199,7 +206,9 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
     # hung loads at one place (the rated load and the hoist's own weight) act on the flange
     # together: one contact carrying their sum
     # (wheels written on any of them count for all; none written: 2, a beam clamp or a
-    # two-wheel trolley, the most demanding fit)
+    # two-wheel trolley, the most demanding fit, on any job: a pipe or a heater hung on a
+    # beam clamp bends the flange tips as a hoist's clamp does, and only `lug = true` says
+    # the load reaches the web through a lug instead)
     given = getattr(job, "contacts", None) or {}
     lugs = set(getattr(job, "lugs", ()) or ())  # on a lug under the web: no flange-tip contact
     together: dict[float, list] = {}
@@ -210,7 +219,7 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
                 got[0] = replace(got[0], value=got[0].value + ld.value)
             got[1] = max(got[1], given.get(ld.key or "", 0))
     for ld, n in together.values():
-        if not ld.value or only_given and not n:
+        if not ld.value:
             continue
         if n:
             words = (f"point load hung from the bottom flange on {n} trolley wheels or jaws "
@@ -218,7 +227,8 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
         else:
             n, words = 2, ("point load hung from the bottom flange, taken as a beam clamp or "
                            "two-wheel trolley bearing on both flange tips 1/4 in in (P = load "
-                           "/ 2); write wheels = 4 on it for a four-wheel trolley")
+                           "/ 2); write wheels = 4 on it for a four-wheel trolley, or lug = "
+                           "true if it hangs from a lug plate welded under the web")
         contacts.append((ld, n, DEFAULT_WHEEL_EDGE, words))
     if not contacts:
         return None
@@ -471,13 +481,13 @@ FATIGUE = Unchecked(
 
 def flange_unchecked(job, sec) -> list:
     """An aluminium I-beam with trolley wheels (a lifting job's [[moving]] set or hung hoist,
-    or loads hung on wheels or clamp jaws, `wheels`): the flange checks under them use steel's
+    or loads hung on a clamp or wheels on any job, `tip_hung`): the flange checks under them use steel's
     method and allowable, so they are not made and no rating is posted."""
     if not _i_shape(sec) or steel_flange(job.material):
         return []
     lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
     hung = set(getattr(job, "hung", ()) or ())
-    under = bool(lifting and (job.moving or hung)) or bool(getattr(job, "contacts", None))
+    under = bool(lifting and (job.moving or hung)) or bool(tip_hung(job))
     if not under:
         return []
     out = [Unchecked("flange local bending under trolley wheels or clamp jaws",

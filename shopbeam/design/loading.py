@@ -34,6 +34,7 @@ from functools import lru_cache
 import numpy as np
 
 from shopbeam import units
+from shopbeam.design import lifting as _lifting
 from shopbeam.design.checks import (Check, basic_checks, bending_check, brace_points, cb_factor,
                                     segment_strength, checks_for, impact_of, profile_of)
 from shopbeam.design.checks import strengths as strengths_of
@@ -813,6 +814,7 @@ def envelope_ratio_applies(job, ss: "StateSet", st) -> bool:
     return bool(ss.parts.patterned and not ss.parts.moving and not st.live_ratio
                 and fl.wood is None and not fl.stress_s and not getattr(fl, "special", False)
                 and not (job.lifting or getattr(job.criteria, "lifting", ""))
+                and not _lifting.tip_hung(job)  # the flange-tip check under a hung load
                 and all(lim > 0 for _, lim, _ in deflection_spans(job, ss, st)))
 
 
@@ -1156,7 +1158,12 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
     polys = {}
     sec = getattr(st, "section", None) or job.section
     lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
-    under = lifting and sec.shape == "i-beam" and sec.axis == "strong"  # wheel flange check
+    i_strong = sec.shape == "i-beam" and sec.axis == "strong"
+    under = lifting and i_strong  # wheel flange check
+    # the loads hung from the bottom flange whose moment the flange check reads: on a lifting
+    # job every one; on any other, those on a clamp or wheels (not `lug = true`)
+    hung_keys = set() if not i_strong else set(getattr(job, "hung", ()) or ()) if lifting \
+        else set(_lifting.tip_hung(job))
     groups = {name: cell_groups(cells, regions[name]) for name in regions}
     # every quantity's candidates (and the lateral check's) are found in one batched pass
     asks, reads = [], []
@@ -1171,10 +1178,11 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
             F = fd + kk * fl_
         polys[tag, name] = F
         lines = under and name == "moment" and tag == "total"
-        # a point load hung from the bottom flange gets the flange check too (lifting): the
-        # moment at it is read, so every cell's sides are searched (no pruning)
+        # a point load hung from the bottom flange gets the flange check too: the moment at
+        # it is read, so every cell's sides are searched (no pruning)
         hung = [ld.at for ld in static_loads if ld.kind == "point" and ld.value
-                and (ld.key or "") in set(getattr(job, "hung", ()) or ())] if lines else []
+                and (ld.key or "") in hung_keys] \
+            if hung_keys and name == "moment" and tag == "total" else []
         asks.append((F, groups[name], lines, not hung))
         reads.append((tag, name, lines, hung))
     lat = _lateral(job, ss, st, mv, k, static_loads)

@@ -48,7 +48,7 @@ from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_fact
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
                                     shear_strength, strengths, unbraced_segments)
 from shopbeam.design.lifting import (DEFAULT_WHEEL_EDGE, OMEGA_WHEEL, flange_coefficients,
-                                     flange_tf_at_wheel, profile_of)
+                                     flange_tf_at_wheel, profile_of, tip_hung)
 from shopbeam.design.loading import (_dummies, _positions, build_envelope, evaluate, split_by_span,
                                      load_parts,
                                      state_set)
@@ -808,8 +808,8 @@ def _batched(job, base, parts, cands, with_capacity):
     moving = bool(parts.moving)
     lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
     # a load hung from the bottom flange gets the flange-tip check on a lifting job, and on any
-    # job where `wheels` says it bears on trolley wheels or clamp jaws (checks.checks_for)
-    hung = bool(lifting and getattr(job, "hung", ()) or getattr(job, "contacts", None))
+    # job unless `lug = true` says it hangs from a lug under the web (checks.checks_for)
+    hung = bool(lifting and getattr(job, "hung", ()) or tip_hung(job))
     exact = not springs and not moving and not hung
     empty = Beam(L, 1.0, job.supports, ())
     ltb_segs = unbraced_segments(job, empty)
