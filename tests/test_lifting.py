@@ -733,3 +733,17 @@ def test_a_hoist_set_on_the_top_flange_of_a_tag_guessed_monorail_is_not_rated():
     runout = text.replace('length = "16 ft"', 'length = "19 ft"')
     res = capacity(parse_job_text(runout))
     assert any("run-out" in w for w in res.not_rated)
+
+
+def test_a_load_hung_on_a_clamp_under_a_channel_is_not_rated_a_lug_is():
+    # a channel's bottom flange under a clamp is a one-sided cantilever with no check here
+    # (the flange-tip check is written for I-beams): NOT RATED, unless lug = true says the
+    # load reaches the web through a lug plate (J10.1 is then its case)
+    text = (HUNG_ON_WHEELS.replace('section = "W8x18"', 'section = "C8x11.5"')
+            .replace('material = "A992"', 'material = "A36"\nrestrained = true'))
+    clamp = capacity(parse_job_text(text.format(wheels="")))
+    assert not clamp.rated
+    assert any("flange tip bending under a clamp" in r for r in clamp.not_rated)
+    lug = capacity(parse_job_text(text.format(wheels="lug = true")))
+    assert lug.rated, lug.not_rated
+    assert lug.factor == pytest.approx(clamp.factor, rel=1e-12)  # the same checks otherwise

@@ -63,7 +63,7 @@ import numpy as np
 
 from shopbeam import units
 from shopbeam.design.basis import support_braces
-from shopbeam.design.lifting import profile_of
+from shopbeam.design.lifting import profile_of, tip_hung
 from shopbeam.design.results import Check, Unchecked
 
 OMEGA_FLB = 1.67  # AISC 360-16 J10.1
@@ -790,6 +790,18 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
                "(run the wheels on a full-width plate or rail, or have the wall checked)"
                if wheels else ""),
             "AISC 360-16 K2, Table K2.2", blocks_rating=bool(hung or wheels)))
+    elif sec.shape == "channel" and sec.axis == "strong" and tip_hung(job) \
+            and not (job.lifting or getattr(job.criteria, "lifting", "")):
+        # a lifting job's hook on a channel is withheld by lifting_unchecked
+        clamped = ", ".join(tip_hung(job))
+        out.append(Unchecked(
+            "flange tip bending under a clamp or trolley wheels",
+            f"{clamped} hang from the bottom flange of this channel, taken as a beam clamp or "
+            "wheels on its flange tip (no lug = true): the one-sided flange bends as a short "
+            "cantilever under it and no check of it is made here (the flange-tip check is for "
+            "I-beams), so no rating is posted; hang it from a lug plate welded under the web "
+            "(lug = true on the load), or have the flange checked",
+            "CMAA 74 local flange bending; AISC 360-16 J10", blocks_rating=True))
     elif sec.shape in ("i-beam", "channel") and sec.axis == "weak":
         points = _span_forces(job)
         out.append(Unchecked("local bearing of the flanges (weak axis)",
