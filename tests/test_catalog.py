@@ -351,21 +351,26 @@ def test_tabulated_weight_follows_the_material():
         12.21 * 0.45359237 / 0.3048 * 2712.6 / 7849.05, rel=1e-6)
 
 
-def test_mechanical_tube_kinds_use_the_nominal_wall():
+def test_mechanical_tube_kinds_use_the_erw_design_wall():
     from shopbeam.members.materials import resolve_material
 
     listed = {s.designation: s for s in catalog.list_sections("mech-tube")}
     s = listed["rect-tube 2 x 1 x 14ga"]
-    assert s.dims["t_des"] == s.dims["t_nom"] == pytest.approx(0.083 * IN)  # Birmingham 14
-    assert "ASTM A513" in s.source and "nominal" in s.source
+    assert s.dims["t_nom"] == pytest.approx(0.083 * IN)  # Birmingham 14
+    # as-welded (ERW) mechanical tube: AISC 360-16 B4.2's 0.93 x nominal, as A500's
+    assert s.dims["t_des"] == pytest.approx(0.93 * 0.083 * IN)
+    assert "ASTM A513" in s.source and "0.93" in s.source
     same = catalog.lookup("rect-tube 2 x 1 x 14ga", material=resolve_material("A513"))
     assert same.area == pytest.approx(s.area, rel=1e-12)
     a500 = catalog.lookup("rect-tube 2 x 1 x 14ga", material=resolve_material("A500-B"))
-    assert a500.area < s.area  # 0.93 x nominal for A500 (AISC 360 B4.2)
+    assert a500.area == pytest.approx(s.area, rel=1e-12)
+    dom = catalog.lookup("rect-tube 2 x 1 x 14ga", material=resolve_material("A513-DOM"))
+    assert dom.area > s.area and dom.dims["t_des"] == pytest.approx(0.083 * IN)  # nominal
     sq = listed["square-tube 1-1/2 x 16ga"]
     assert sq.dims["h"] == sq.dims["b"] == pytest.approx(1.5 * IN)
     rnd = {x.designation: x for x in catalog.list_sections("mech-round")}["round-tube 1 x 14ga"]
-    assert rnd.dims["od"] == pytest.approx(IN) and rnd.dims["t_des"] == pytest.approx(0.083 * IN)
+    assert rnd.dims["od"] == pytest.approx(IN) \
+        and rnd.dims["t_des"] == pytest.approx(0.93 * 0.083 * IN)
     assert [x.designation for x in catalog.list_sections("mech-tube", "2x1")] == [
         "rect-tube 2 x 1 x 16ga", "rect-tube 2 x 1 x 14ga", "rect-tube 2 x 1 x 11ga"]
     # the shape kind gathers HSS, EN and mechanical tube

@@ -76,10 +76,13 @@ def test_lumber_reference_values():
 
 
 def test_tube_wall_rules():
-    # AISC 360-16 B4.2: 0.93 x nominal for ERW A500 (and A53 pipe); A513 uses nominal
+    # AISC 360-16 B4.2: 0.93 x nominal for ERW A500 (and A53 pipe); as-welded A513 is ERW
+    # tube too (not a grade 360 lists: the lower figure), DOM takes its nominal wall
     assert resolve_material("A500-C").hss_wall_factor == 0.93
     assert resolve_material("A53-B").hss_wall_factor == 0.93
-    assert resolve_material("A513").hss_wall_factor == 1.0
+    assert resolve_material("A513").hss_wall_factor == 0.93
+    assert resolve_material("A513-1020").hss_wall_factor == 0.93
+    assert resolve_material("A513-DOM").hss_wall_factor == 1.0
     assert resolve_material("A36").hss_wall_factor is None
 
 

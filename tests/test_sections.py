@@ -176,12 +176,19 @@ def test_resolve_rect_tube_gauge_and_wall_rule():
     a500 = resolve_section({"shape": "rect-tube", "depth": "2 in", "width": "1 in",
                             "wall": "14 ga"}, material=resolve_material("A500-C"))
     a513 = resolve_section({"shape": "rect-tube", "depth": "2 in", "width": "1 in",
-                            "wall": "14 ga"}, material=resolve_material("A513"))
+                            "wall": "14 ga"}, material=resolve_material("A513-DOM"))
     close(a513.dims["t_des"], 0.083 * IN, 1e-9)  # Birmingham wire gauge 14 = 0.083 in
     close(a500.dims["t_des"], 0.93 * 0.083 * IN, 1e-9)  # AISC 360 B4.2
     assert "nominal" in a513.source and "0.93" in a500.source
     assert "Birmingham" in a513.source
     assert a513.area > a500.area
+    welded = resolve_section({"shape": "rect-tube", "depth": "2 in", "width": "1 in",
+                              "wall": "14 ga"}, material=resolve_material("A513"))
+    close(welded.dims["t_des"], 0.93 * 0.083 * IN, 1e-9)  # as-welded A513: ERW, B4.2
+    nominal = resolve_section({"shape": "rect-tube", "depth": "2 in", "width": "1 in",
+                               "wall": "14 ga", "design_wall": "nominal"},
+                              material=resolve_material("A513"))
+    close(nominal.dims["t_des"], 0.083 * IN, 1e-9)  # the user's word wins
 
 
 def test_resolve_weak_axis_turns_tube_and_w():
@@ -435,3 +442,27 @@ def test_rect_tube_closed_form_equals_parts_engine(h, b, frac, rfac):
     # the engine finds Z by bisection on the plastic axis: agreement to 1e-7
     assert (s.area, s.ix, s.zx) == pytest.approx((px.area, px.i, px.z), rel=1e-7)
     assert (s.iy, s.zy) == pytest.approx((py.i, py.z), rel=1e-7)
+
+
+def test_a_typed_in_tube_shows_its_design_wall_on_the_report_and_label(tmp_path):
+    # the posted load rests on the design wall (AISC 360-16 B4.2: 0.93 x nominal for ERW
+    # tube): the report and the label say which wall was taken; a catalog HSS (its
+    # published design wall) does not get the line
+    import subprocess
+    import sys
+    job = tmp_path / "t.toml"
+    body = ('schema = 1\ntitle = "tube shelf"\ntags = ["not-rack"]\n[beam]\nlength = "6 ft"\n'
+            'material = "A513"\nSECTION\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "6 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'start = "0 ft"\nend = "6 ft"\nvalue = "-10 lbf/ft"\n')
+    job.write_text(body.replace("SECTION", '[beam.section]\nshape = "rect-tube"\n'
+                                'depth = "4 in"\nwidth = "2 in"\nwall = "16 ga"'))
+
+    def run(*args):
+        return subprocess.run([sys.executable, "-m", "shopbeam", *args, str(job)],
+                              capture_output=True, text=True, timeout=120).stdout
+    report = " ".join(run("solve").split())
+    assert "design t = 0.06045 in of nominal 0.065 in" in report  # 0.93 x 16 ga 0.065 in
+    assert "design wall 0.06045 in" in " ".join(run("rating").replace("|", " ").split())
+    job.write_text(body.replace("SECTION", 'section = "HSS4x2x1/8"').replace("A513", "A500-C"))
+    assert "design t =" not in run("solve") and "design wall" not in run("rating")

@@ -50,8 +50,9 @@ def test_toml_stock(tmp_path):
     assert hss.section.designation == "HSS4X4X1/4" and hss.material == "A500-C"
     assert hss.price_per_ft == pytest.approx(18.40) and hss.note == "rack 3"
     assert hss.cost(10 * FT) == pytest.approx(184.0)
-    # A513 mechanical tube: nominal wall (14 ga Birmingham = 0.083 in)
-    assert tube.section.dims["t_des"] == pytest.approx(0.083 * IN)
+    # A513 as-welded mechanical tube: 0.93 x nominal wall (14 ga Birmingham = 0.083 in;
+    # AISC 360-16 B4.2's ERW rule)
+    assert tube.section.dims["t_des"] == pytest.approx(0.93 * 0.083 * IN)
     assert tube.price_per_ft == pytest.approx(4.10)
     assert w.price_per_m == pytest.approx(95.0)
     assert bar.price_per_m is None and bar.section.shape == "rect-bar"
@@ -64,7 +65,7 @@ def test_csv_stock(tmp_path):
     assert [i.designation for i in st] == ["HSS4x4x1/4", "rect-tube 2 x 1 x 14ga", "W8x31"]
     assert [i.line for i in st] == [3, 4, 6]
     assert st.items[2].price_per_m is None
-    assert st.items[1].section.dims["t_des"] == pytest.approx(0.083 * IN)
+    assert st.items[1].section.dims["t_des"] == pytest.approx(0.93 * 0.083 * IN)
 
 
 def test_extension_sniffed(tmp_path):

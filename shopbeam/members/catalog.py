@@ -476,23 +476,28 @@ def _generated() -> list[tuple[str, str, object]]:
         des = f"RB{s}"
         out.append(("round-bar", des, lambda s=sv, des=des: S.round_bar(
             s * IN, designation=des, source="round bar stock size, computed from dimensions")))
-    mech = ("design wall = nominal (ASTM A513 mechanical tube: the 0.93 factor is for A500 "
-            "only); outside corner radius 2 x wall")
+    # as-welded (ERW) mechanical tube: the design wall takes AISC 360-16 B4.2's ERW rule, as
+    # a typed-in A513 tube does (sections._wall_factor; A513 is not a grade 360 lists)
+    erw = S.ERW_FACTOR
+    mech = ("design wall 0.93 x nominal (ASTM A513 ERW mechanical tube, AISC 360 B4.2); "
+            "outside corner radius 2 x design wall")
     for (h, b), gs in MECH_RECT.items():
         for g in gs:
             des = f"rect-tube {h} x {b} x {g}ga" if h != b else f"square-tube {h} x {g}ga"
             out.append(("mech-tube", des, lambda h=h, b=b, g=g, des=des: S.rect_tube(
-                _number(h) * IN, _number(b) * IN, gauges.BWG[g] * IN, designation=des,
+                _number(h) * IN, _number(b) * IN, gauges.BWG[g] * IN,
+                t_des=erw * gauges.BWG[g] * IN, designation=des,
                 source=f"mechanical tube stock size, computed from dimensions ({g} ga = "
                 f"{gauges.BWG[g]:g} in, Birmingham wire gauge; {mech})")))
     for od, gs in MECH_ROUND.items():
         for g in gs:
             des = f"round-tube {od} x {g}ga"
             out.append(("mech-round", des, lambda od=od, g=g, des=des: S.round_tube(
-                _number(od) * IN, gauges.BWG[g] * IN, designation=des,
+                _number(od) * IN, gauges.BWG[g] * IN, t_des=erw * gauges.BWG[g] * IN,
+                designation=des,
                 source=f"mechanical tube stock size, computed from dimensions ({g} ga = "
-                f"{gauges.BWG[g]:g} in, Birmingham wire gauge; design wall = nominal, "
-                "ASTM A513)")))
+                f"{gauges.BWG[g]:g} in, Birmingham wire gauge; design wall 0.93 x nominal, "
+                "ASTM A513 ERW mechanical tube, AISC 360 B4.2)")))
     for th, wi in LUMBER_SIZES:
         des = f"{th}x{wi}"
         out.append(("lumber", des, lambda th=th, wi=wi, des=des: _lumber(th, wi, des)))
@@ -545,8 +550,8 @@ KIND_INFO = {
     "square-bar": "square bar, US stock sizes", "round-bar": "round bar, US stock sizes",
     "lumber": "sawn lumber on edge, dressed sizes (2x4 = 1-1/2 x 3-1/2 in)",
     "LVL": "LVL on edge, 1-3/4 in plies (LVL1-3/4x11-7/8; use with material LVL-2.0E)",
-    "mech-tube": "A513 mechanical square/rectangular tube by gauge (nominal wall)",
-    "mech-round": "A513 mechanical round tube by gauge (nominal wall)",
+    "mech-tube": "A513 mechanical square/rectangular tube by gauge (design wall 0.93 x nominal)",
+    "mech-round": "A513 mechanical round tube by gauge (design wall 0.93 x nominal)",
     "SHS": "EN 10219 square hollow sections", "RHS": "EN 10219 rectangular hollow sections",
     "CHS": "EN 10219 circular hollow sections", "IPE": "EN 10365 IPE beams",
     "HEA": "EN 10365 HEA wide-flange beams", "HEB": "EN 10365 HEB wide-flange beams",
@@ -717,7 +722,8 @@ def lookup(designation: str, key: str = "beam.section", material=None) -> Sectio
     """The catalog section for a designation (strong axis), spelling tolerant.
 
     Also builds shop descriptions ("rect-tube 2 x 1 x 14ga") from their dimensions; `material`
-    then settles the design wall (0.93 x nominal for A500, nominal for A513; see sections).
+    then settles the design wall (0.93 x nominal for ERW tube: A500, A53, as-welded A513;
+    nominal for DOM; see sections).
     """
     if not isinstance(designation, str) or not designation.strip():
         raise InputError("give a section designation such as \"HSS4x4x1/4\" or \"W8x31\"", key)

@@ -8,9 +8,10 @@ material in a job file is a table with ``e``, ``fy`` and ``density`` (plus optio
 must give ``fv`` (no shear value is guessed from Fb); without ``fc_perp`` its bearing is not
 checked and it is not rated.
 
-Design wall of tube (``hss_wall_factor``): 0.93 x nominal for A500 and A53 (ERW tube,
-AISC 360-16 B4.2), nominal (1.0) for A513 mechanical tubing and for stainless/aluminium
-tube; None where the grade is not a tube grade.
+Design wall of tube (``hss_wall_factor``): 0.93 x nominal for A500, A53 and as-welded A513
+(ERW tube, AISC 360-16 B4.2; A513 is not a grade 360 lists, so its ERW tube takes the ERW
+rule, the lower figure), nominal (1.0) for A513 Type 5 DOM (drawn over a mandrel to a close
+wall) and for stainless/aluminium tube; None where the grade is not a tube grade.
 """
 
 from __future__ import annotations
@@ -150,7 +151,10 @@ _A500_NOTE = ("ASTM A500 editions before 2018 gave round tube a lower yield than
 _A513_NOTE = ("ASTM A513 mechanical tubing: strength depends on the type (as-welded, DOM), "
               "the steel grade and the mill's processing; the figure here is the specified "
               "minimum recalled from memory for the condition named. Use the mill cert when "
-              "you have one. Design wall = nominal wall (the 0.93 factor is for A500 only).")
+              "you have one. Design wall: 0.93 x nominal for as-welded (ERW) tube, the AISC 360-16 B4.2 "
+              "rule for ERW HSS (A513 is not a grade 360 lists: the lower figure is taken); "
+              "nominal for DOM. Write design_wall = \"nominal\" on the section where the wall "
+              "is measured at its nominal size.")
 _LUMBER_NOTE = ("reference design values for visually graded dimension lumber 2-4 in thick "
                 "(NDS Supplement 2018, Table 4A/4B, from memory); timbers 5 in and thicker take "
                 "their Table 4D values; the checks apply the NDS 2018 adjustment factors "
@@ -180,10 +184,10 @@ _MATERIALS: tuple[Material, ...] = (
            aliases=("a53b", "a53grb", "a53", "a53gradeb"), wall=0.93),
     _steel("A513", "ASTM A513 Type 1/2 ERW mechanical tube, 1008/1010 as-welded", 30, 42,
            "ASTM A513 (Type 1/2, grade 1008, as welded), from memory", notes=(_A513_NOTE,),
-           aliases=("a513", "a5131008", "a513type1", "a513type2", "mechanicaltube"), wall=1.0),
+           aliases=("a513", "a5131008", "a513type1", "a513type2", "mechanicaltube"), wall=0.93),
     _steel("A513-1020", "ASTM A513 ERW mechanical tube, 1020 as-welded", 38, 52,
            "ASTM A513 (grade 1020, as welded), from memory", notes=(_A513_NOTE,),
-           aliases=("a5131020",), wall=1.0),
+           aliases=("a5131020",), wall=0.93),
     _steel("A513-DOM", "ASTM A513 Type 5 DOM mechanical tube, 1020 stress relieved", 60, 70,
            "ASTM A513 (Type 5 DOM, 1020, stress relieved), from memory", notes=(_A513_NOTE,),
            aliases=("a513dom", "dom", "a513type5", "dom1020"), wall=1.0),

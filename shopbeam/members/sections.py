@@ -14,9 +14,9 @@ with its unit; a wall may also be a gauge such as ``"14 ga"``):
 rect-tube          ``depth``, ``width`` (outside), ``wall``; optional ``corner_radius`` (outside;
                    default 2 x design wall, as the AISC Shapes Database computes HSS), and
                    ``design_wall`` = ``"nominal"`` | ``"0.93"`` (or any factor). Without it
-                   the factor follows the material (0.93 x nominal for A500 ERW structural tube,
-                   AISC 360 B4.2; nominal for A513 mechanical tube and the rest); with no
-                   material known, 0.93 (the lower, safer figure). ``square-tube``: ``size``.
+                   the factor follows the material (0.93 x nominal for ERW tube: A500, A53
+                   and as-welded A513, AISC 360 B4.2; nominal for DOM, stainless and
+                   aluminium); with no material known, 0.93 (the lower, safer figure). ``square-tube``: ``size``.
 round-tube, pipe   ``od``, ``wall``; optional ``design_wall`` as above.
 rect-bar           ``depth``, ``width`` (``flat-bar`` is the same; ``square-bar``: ``size``).
                    Sawn lumber is a rect-bar too; the catalog knows ``"2x6"`` etc.
@@ -893,7 +893,7 @@ def _wall_factor(spec, key, material, shape) -> tuple[float, str]:
         mname = getattr(material, "key", "the material")
         if wf < 1.0:
             return wf, f"design wall {wf:g} x nominal ({mname} ERW tube, AISC 360 B4.2)"
-        return wf, f"design wall = nominal ({mname}: the 0.93 factor is for A500 ERW HSS only)"
+        return wf, f"design wall = nominal ({mname}: not ERW tube, AISC 360 B4.2's 0.93 is not taken)"
     if material is not None:
         return 1.0, "design wall = nominal"
     return ERW_FACTOR, ("design wall 0.93 x nominal (AISC 360 B4.2 ERW rule; no material "

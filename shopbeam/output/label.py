@@ -277,6 +277,15 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     return figs, notes
 
 
+def _wall_words(job, sy) -> str:
+    """A typed-in tube's design wall, which the posted load rests on (AISC 360-16 B4.2)."""
+    d = getattr(job.section, "dims", None) or {}
+    src = getattr(job.section, "source", "") or ""
+    if "t_des" not in d or "design wall" not in src or "computed from dimensions" not in src:
+        return ""  # a catalog HSS's design wall is the published one
+    return f", design wall {units.fmt(d['t_des'], 'small_length', sy)}"
+
+
 def _stands(sec) -> str:
     """How the member stands, where it could stand two ways: a board, bar or rectangular tube
     on edge or laid flat (18 times apart for a 2x10), and any shape bent about its weak axis."""
@@ -475,7 +484,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
                  for u in unchecked)
     return Rating(
         title=job.title, member=f"{job.section.designation}{_stands(job.section)}, "
-                                f"{job.material.key}", span=span,
+                                f"{job.material.key}{_wall_words(job, sy)}", span=span,
         factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
         governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)],
         date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,

@@ -15,6 +15,32 @@ WIDTH = 78
 CHECK_KINDS = units.CHECK_KINDS
 
 
+def _design_wall(sec, f) -> str:
+    """A typed-in tube's design wall and the rule that set it (AISC 360-16 B4.2), for the
+    MEMBER lines: a posted load rests on it. Empty for other sections."""
+    d = getattr(sec, "dims", None) or {}
+    src = getattr(sec, "source", "") or ""
+    if "t_des" not in d or "t_nom" not in d or "design wall" not in src \
+            or "computed from dimensions" not in src:
+        return ""  # a catalog HSS's design wall is the published one
+    i = src.index("design wall")
+    depth, j = 0, i
+    while j < len(src):  # to the "; " or ")" that closes the rule (its own brackets kept)
+        ch = src[j]
+        if ch == "(":
+            depth += 1
+        elif ch == ")":
+            if depth == 0:
+                break
+            depth -= 1
+        elif ch == ";" and depth == 0:
+            break
+        j += 1
+    rule = src[i:j].strip()
+    return (f"wall: design t = {f(d['t_des'], 'small_length')} of nominal "
+            f"{f(d['t_nom'], 'small_length')}, {rule}")
+
+
 def _wrap(text: str, indent: str = "  ", width: int = WIDTH) -> list[str]:
     return wrap(text, width, initial_indent=indent, subsequent_indent=indent) or [indent]
 
@@ -72,6 +98,9 @@ def render(result: Result) -> str:
     lines.append(f"  section  {sec.designation} ({sec.shape}, {sec.axis} axis): "
                  f"I = {f(sec.ix, 'inertia')}, S = {f(sec.sx, 'modulus')}, "
                  f"A = {f(sec.area, 'area')}")
+    wall = _design_wall(sec, f)
+    if wall:
+        lines += _wrap(wall, "           ")
     from shopbeam.members.materials import figures
 
     lines.append(f"  material {mat.name}: {figures(mat, sy)}")
