@@ -920,6 +920,16 @@ def test_a_monorail_hook_load_on_the_top_flange_withholds_the_rating():
     assert any("top flange of a monorail" in g for g in _gaps(job))
 
 
+def test_a_jib_hook_load_on_the_top_flange_withholds_the_rating():
+    # a jib boom's hoist trolley runs on the bottom flange (common practice): the hook load
+    # on the top flange leaves the wheel flange checks out, as on a monorail
+    text = _preset("jib-arm")
+    assert not _gaps(parse_job_text(text))
+    i = text.index("[[loads]]")
+    job = parse_job_text(text[:i] + text[i:].replace("\nvalue", '\nflange = "top"\nvalue', 1))
+    assert any("top flange of a jib boom" in g for g in _gaps(job))
+
+
 def test_a_hand_geared_profile_on_a_powered_hoist_withholds_the_rating():
     # ASCE 7-16 4.9.3 and 4.9.4 (from memory): powered hoists take impact and lateral force
     text = _preset("monorail-trolley")

@@ -2373,19 +2373,23 @@ def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags,
     guessed = not name and is_lifting(tags) and supports and length is not None
     if guessed:  # the profile tags = ["lifting"] picks: a monorail's trolley hangs below too
         name = guessed_profile(supports, length)
-    if name in ("powered-monorail", "hand-geared-monorail"):
+    if name in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
+        # a monorail's or a jib boom's hoist trolley runs on the bottom flange (a trolley on
+        # top would bear on the flange tips just the same): the hook load on the top flange
+        # leaves the wheel flange checks out
+        what = "a monorail" if "monorail" in name else "a jib boom"
         for i, ld in enumerate(raw_loads):
             if (_is_table(ld) and ld.get("type") == "point" and ld.get("flange") == "top"
                     and ld.get("case", "live") == "live"):
                 who = (f"the profile tags = [\"lifting\"] picks for this span, \"{name}\","
                        if guessed else f"lifting = \"{name}\"")
                 r.hold(f"flange = \"top\" puts this load on the top flange, but {who} "
-                       "is a monorail, whose trolley runs on the bottom flange: "
+                       f"is {what}, whose trolley runs on the bottom flange: "
                        "the wheel flange checks under it are not made, so no rating is "
                        "posted. Remove flange (a hoist load hangs from the bottom flange by "
                        "default), or name the profile the member really is",
                        f"loads[{i}].flange",
-                       f"loads[{i}] is set on the top flange of a monorail ("
+                       f"loads[{i}] is set on the top flange of {what} ("
                        + ("profile from the tags: " if guessed else "lifting = ")
                        + f"\"{name}\"), whose trolley hangs from the bottom flange: the wheel "
                        "flange checks are not made. Remove flange = \"top\"")
