@@ -614,6 +614,9 @@ def test_a_couple_typed_at_a_fixed_end_is_warned_and_not_rated(at, into):
     ("W8X18", "A500-C", False),    # a tube grade on a W, but no more than A992's 50 ksi
     ("HSS4X4X1/4", "A36", False),  # a rolled grade on tube: less than A500-C, conservative
     ("PIPE2STD", "A500-C", True),  # pipe is A53 Gr B, 35 ksi
+    ("PIPE3STD", "A992", True),    # a rolled-shape grade on pipe: 50 ksi over A53 Gr B's 35
+    ("PIPE3STD", "A36", True),     # 36 ksi is more than A53 Gr B's 35 too
+    ("HSS4.500X0.237", "A992", False),  # round HSS: A500 Gr C's 50 ksi, no more
 ])
 def test_a_grade_the_product_is_not_made_to_is_not_rated_when_it_credits_more(
         section, grade, blocked):

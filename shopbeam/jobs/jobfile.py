@@ -2980,6 +2980,9 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                f"the check may credit a yield ({units.fmt(material.fy, 'stress', system)}) the "
                "member does not have. Give the grade on the mill cert", where)
     elif mkind == "steel" and key in _ROLLED_GRADES and shape in _TUBES:
+        # held while it credits more than the tube's own grade (pipe: A53 Gr B, 35 ksi)
+        usual = ("A53-B" if shape == "pipe" else "A513"
+                 if catalog.kind_of(section) in ("mech-tube", "mech-round") else "A500-C")
         r.warn(f"material {key!r} is a grade of rolled shapes, plate and bar, but section "
                f"{section.designation!r} is {_a(shape)}: structural tube is made to A500 "
                "(\"A500-C\", \"A500-B\") and pipe to A53 (\"A53-B\"); the check uses "
