@@ -625,10 +625,13 @@ def test_lifting_deflection_looser_than_its_profile_is_warned(preset, written, p
     w = [p for p in warnings(job) if p.key == "criteria.deflection"]
     assert w and f"looser than the {profile}" in w[0].message
     assert job.criteria.deflection_ratio == float(written[2:])  # used as written
+    # and no rating is posted on it (a trolley on a member that sags more runs downhill)
+    assert any("lifting profile" in g for g in _gaps(job))
     # the profile's own limit, or a stricter one, is not warned
     for ok in (profile, "L/900"):
         job = parse_job_text(text.replace(line, f'deflection = "{ok}"'))
         assert not [p for p in warnings(job) if p.key == "criteria.deflection"]
+        assert not any("lifting profile" in g for g in _gaps(job))
 
 
 @pytest.mark.parametrize("written, looser", [("1 in", True), ("0.4 in", False)])

@@ -1895,8 +1895,9 @@ def _ratio_of(criteria: Criteria, supports, length) -> tuple[float | None, str]:
 
 def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
     """A deflection limit written on a lifting job that is looser than its lifting profile's
-    (L/240 copied from a shelf onto a monorail, or "1 in" on a 16 ft runway): warned, and the
-    value written is used."""
+    (L/240 copied from a shelf onto a monorail, or "1 in" on a 16 ft runway): warned and NOT
+    RATED (a trolley on a member that sags more runs downhill and binds); the checks use the
+    value written."""
     if length is None or not criteria.deflection_given:
         return
     ratio, shown = _ratio_of(criteria, supports, length)
@@ -1909,11 +1910,13 @@ def _looser_than_lifting(r: _Reader, criteria: Criteria, tags, supports, length)
         name = guessed_profile(supports, length)  # as design/lifting.profile_of picks it
     p = LIFTING_PROFILES[name]
     if ratio < p["deflection"]:
-        r.warn(f"deflection = {shown} is looser than the L/{p['deflection']:g} "
+        r.hold(f"deflection = {shown} is looser than the L/{p['deflection']:g} "
                f"of the {name} lifting profile ({p['deflection_source']}): a hoist or trolley "
                f"on a member that sags more runs downhill and binds; the checks use the value "
-               f"written: write \"L/{p['deflection']:g}\" or remove deflection to use the "
-               "profile's limit", "criteria.deflection")
+               f"written, and no rating is posted on it: write \"L/{p['deflection']:g}\" or "
+               "remove deflection to use the profile's limit", "criteria.deflection",
+               f"deflection = {shown} is looser than the L/{p['deflection']:g} of the {name} "
+               "lifting profile: write the profile's limit, or remove deflection")
 
 
 def _looser_than_named(criteria: Criteria, tags, supports, length, tagset, name):
