@@ -431,6 +431,24 @@ def test_trolley_axles_feet_apart_are_warned(spacing, warns):
     text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
     job = parse_job_text(text.replace('spacing = ["8 in"]', f"spacing = [{spacing}]"))
     assert bool([w for w in job.warnings if w.key == "moving[0].spacing"]) == warns
+    # and no rating is posted on axles feet apart (they act apart: less moment)
+    assert any("wheelbase" in g for g in capacity(job).not_rated) == warns
+
+
+@pytest.mark.parametrize("travel, held", [
+    ('["0 in", "16 in"]', True),     # 16 in of a 16 ft monorail, typed in inches: feet meant
+    ('["0 ft", "16 ft"]', False),
+    ('["2 ft", "14 ft"]', False),    # end stops 2 ft in
+    ('["0 in", "192 in"]', False),   # the whole beam in inches
+])
+def test_a_trolley_travel_of_a_few_inches_typed_in_inches_is_not_rated(travel, held):
+    # a hoist travels its beam (common practice): a travel of inches on a 16 ft beam
+    # keeps the hoist by a support, and the label would post 33 % more
+    from pathlib import Path
+    text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
+    job = parse_job_text(text.replace('travel = ["0 ft", "16 ft"]', f"travel = {travel}", 1))
+    assert bool([w for w in job.warnings if w.key == "moving[0].travel"]) == held
+    assert any("feet meant" in g for g in capacity(job).not_rated) == held
 
 
 AL_RUNWAY = """schema = 1

@@ -2031,15 +2031,42 @@ def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, ti
 TROLLEY_SPACING = 4 * 0.3048  # m
 
 
-def _trolley_spacing(r: _Reader, moving, system: str) -> None:
+# A hoist travels its beam: a travel typed in inches that covers less than this part of the
+# member (and under 2 ft) is most likely feet typed as inches ("16 in" for "16 ft").
+SHORT_TRAVEL = 0.25
+
+
+def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> None:
+    """A lifting job's wheel set with its axles feet apart, or its travel typed in inches
+    over a few inches of a long member: a unit slip that lowers the moment (the axles act
+    apart; the hoist kept near a support), so NOT RATED."""
     for ws in moving:
         gaps = [b - a for a, b in zip(ws.offsets, ws.offsets[1:])]
         if gaps and max(gaps) > TROLLEY_SPACING:
-            r.warn(f"the axles of {ws.label or ws.key} are {units.fmt(max(gaps), 'length', system)} "
+            apart = units.fmt(max(gaps), 'length', system)
+            r.hold(f"the axles of {ws.label or ws.key} are {apart} "
                    "apart, more than a hoist trolley's wheelbase (inches as a rule): check the "
                    "unit (\"12 in\", not \"12 ft\"); axles far apart act apart and lower the "
-                   "moment. Two trolleys tied together are fine; the spacing written is used",
-                   f"{ws.key}.spacing")
+                   "moment, so no rating is posted on it (two trolleys tied together need "
+                   "their own review); the spacing written is used", f"{ws.key}.spacing",
+                   f"the axles of {ws.label or ws.key} are {apart} apart, more than a hoist "
+                   "trolley's wheelbase: check the unit of spacing")
+        tr = (raw[0].get("travel") if isinstance(raw, list) and raw and _is_table(raw[0])
+              else None)
+        span = ws.travel[1] - ws.travel[0]
+        if isinstance(tr, list) and length and span < min(SHORT_TRAVEL * length, 2 * 0.3048) \
+                and any(isinstance(v, str) and re.search(r"\d\s*(?:in\b|inch|\"|'')", v)
+                        for v in tr):
+            got = ", ".join(f'"{v}"' for v in tr)
+            r.hold(f"travel = [{got}] lets the hoist run over only "
+                   f"{units.fmt(span, 'length', system)} of the "
+                   f"{units.fmt(length, 'length', system)} member, typed in inches: a hoist "
+                   "travels its beam, so this reads like feet typed as inches (\"16 in\" for "
+                   "\"16 ft\"), and it keeps the hoist near one place; no rating is posted on "
+                   "it. Write the travel in feet, or remove travel to cover the whole beam",
+                   f"{ws.key}.travel",
+                   f"travel [{got}] covers only {units.fmt(span, 'length', system)} of the "
+                   "member, typed in inches: feet meant? Write it in feet")
 
 
 def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -> None:
@@ -3536,7 +3563,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
     if is_lifting(tags) or criteria.lifting:
-        _trolley_spacing(r, moving, system)
+        _trolley_spacing(r, moving, system, data.get("moving"), length)
     upward += _upward_wheels(r, moving, system)
     if (length is not None and criteria.deflection_abs is not None
             and criteria.deflection_abs > length / LOOSEST_COMMON_RATIO):
