@@ -479,3 +479,41 @@ def test_a_live_load_limit_looser_than_a_floors_is_not_rated():
     ok = capacity(parse_job_text(_floor('["mezzanine", "not-floor"]', 'deflection = "L/240"\n'
                                                                      'live_deflection = "L/240"')))
     assert ok.rated
+
+
+# ------------------------------------------------------------------ dead loads in N, or too light
+@pytest.mark.parametrize("hoist, held, word", [
+    ('"-80 lbf"', False, ""),
+    ('"-80 N"', True, "metric units"),       # N for lbf: 4.45 times too light
+    ('"-0.36 kN"', True, "metric units"),
+    ('"-0.08 lbf"', True, "under 1 lbf"),    # kip meant: too light to be a hoist's weight
+    ('"-0.08 kip"', False, ""),
+])
+def test_a_dead_load_in_metric_units_or_too_light_on_a_us_job_holds_the_rating(hoist, held,
+                                                                              word):
+    # the rating holds the dead load fixed, so one typed too light posts a higher live
+    # load (a unit slip: common practice, no source)
+    text = ('schema = 1\ntitle = "jib"\ntags = ["lifting", "jib"]\n[beam]\nlength = "10 ft"\n'
+            'section = "W6x15"\nmaterial = "A992"\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+            '[[loads]]\ntype = "point"\nat = "9 ft 6 in"\nvalue = "-1000 lbf"\n'
+            'label = "rated load"\n[[loads]]\ntype = "point"\nat = "9 ft 6 in"\n'
+            f'value = {hoist}\nlabel = "hoist"\ncase = "dead"\n[criteria]\n'
+            'lifting = "hand-geared-jib"\n')
+    job = parse_job_text(text)
+    said = [p for p in job.warnings if p.key == "loads[1].value"]
+    assert bool(said) == held
+    gaps = capacity(job).not_rated
+    assert any("loads[1] (hoist)" in g for g in gaps) == held
+    if held:
+        assert word in said[0].message
+
+
+def test_a_live_load_in_kn_on_a_us_job_and_a_light_live_load_are_left_alone():
+    text = ('schema = 1\ntitle = "shelf"\ntags = ["not-lifting"]\n[beam]\nlength = "8 ft"\n'
+            'section = "W8x18"\nmaterial = "A992"\nbraced = true\n[[supports]]\nat = "0 ft"\n'
+            'type = "pin"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n[[loads]]\n'
+            'type = "point"\nat = "4 ft"\nvalue = "-2 kN"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-0.5 lbf/ft"\n')
+    job = parse_job_text(text)
+    assert not [p for p in job.warnings if p.key.startswith("loads")]
+    assert capacity(job).rated

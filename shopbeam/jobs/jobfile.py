@@ -2069,6 +2069,65 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> 
                    "member, typed in inches: feet meant? Write it in feet")
 
 
+# A force unit of the metric system: N, kN, MN, N/m, kN/m, N/mm, Pa, kPa, N/m^2 ...
+_SI_FORCE = re.compile(r"\d\s*(?:k|M)?(?:N|Pa)\b(?:\s*/\s*(?:m|mm|cm)\b)?")
+# A dead load lighter than this (a point load in N, a spread load in N/m) is too light to be
+# the weight of anything a shop hangs on a member: a unit slip ("-0.08 lbf" for kip,
+# "-12.8 N/m" for lbf/ft), and a dead load stays on while the live load is rated
+TINY_DEAD_POINT = 4.4482216152605  # 1 lbf, N
+TINY_DEAD_LINE = 4.4482216152605 / 0.3048  # 1 lbf/ft, N/m
+
+
+def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
+    """A dead load typed in metric force units on a job in US units (N for lbf is 4.45 times
+    too light, and the rating counts on the dead load it holds fixed), and a dead load too
+    light to be real (under 1 lbf or 1 lbf/ft): a unit slip, so NOT RATED. (A live load in
+    the other system's units is left alone: the label posts it in the job's units, and N
+    typed for lbf only makes the entered load larger, on the safe side.)"""
+    for ld in loads:
+        i = _load_index(ld.key)
+        raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
+        if not _is_table(raw):
+            continue
+        vals = raw.get("value")
+        texts = [v for v in (vals if isinstance(vals, list) else [vals]) if isinstance(v, str)]
+        name = ld.key + (f" ({ld.label})" if ld.label else "")
+        metric = [v for v in texts if _SI_FORCE.search(v)]
+        if system == "us" and metric and ld.kind != "moment":
+            said = ", ".join(f'"{v}"' for v in metric)
+            if ld.case == "dead":
+                r.hold(f"{name} is a dead load typed in metric units ({said}) on a job in US "
+                       "units: if lbf or lbf/ft was meant, it is 4.45 times too light, and the "
+                       "rating holds the dead load fixed, so a light one posts a higher live "
+                       "load; no rating is posted on it. Write it in lbf (lbf/ft, psf), or set "
+                       "units = \"si\" if the whole job is metric", f"{ld.key}.value",
+                       f"{name} is a dead load typed in metric units ({said}) on a job in US "
+                       "units: write it in lbf, lbf/ft or psf")
+            continue
+        if ld.case != "dead" or ld.kind == "moment" \
+                or any(p.key == f"{ld.key}.value" for p in r.problems):  # said already
+            continue
+        if ld.kind == "point":
+            tiny = 0 < abs(ld.value) < TINY_DEAD_POINT
+            limit = units.fmt(TINY_DEAD_POINT, "force", system)
+        else:
+            w = max(abs(ld.w1), abs(ld.w2 if ld.kind == "linear" else ld.w1))
+            tiny = 0 < w < TINY_DEAD_LINE
+            limit = units.fmt(TINY_DEAD_LINE, "line_load", system)
+        if tiny:
+            r.hold(f"{name} is a dead load of under {limit}, too light to be the weight of a "
+                   "hoist, a deck or a fixture: a unit slip is likely (\"-0.08 lbf\" for "
+                   "\"-0.08 kip\"), and the rating holds the dead load fixed, so a light one "
+                   "posts a higher live load; no rating is posted on it. Check the unit, or "
+                   "leave the load out if it really is this light", f"{ld.key}.value",
+                   f"{name} is a dead load under {limit}: check its unit")
+
+
+def _load_index(key: str) -> int | None:
+    m = re.fullmatch(r"loads\[(\d+)\]", key or "")
+    return int(m.group(1)) if m else None
+
+
 def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -> None:
     """A lifting job whose force loads are all dead (the rated hook load typed case =
     "dead"), or that has none: the impact allowance is added to live loads only and the
@@ -3580,6 +3639,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_floor(r, criteria, tags, supports, length)
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
+    _dead_load_units(r, raw_loads, loads, system)
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
