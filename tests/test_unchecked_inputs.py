@@ -517,3 +517,20 @@ def test_a_live_load_in_kn_on_a_us_job_and_a_light_live_load_are_left_alone():
     job = parse_job_text(text)
     assert not [p for p in job.warnings if p.key.startswith("loads")]
     assert capacity(job).rated
+
+
+@pytest.mark.parametrize("case, held", [('"dead"', True), ('"live"', False)])
+def test_a_width_beside_a_load_per_length_is_said_and_holds_a_dead_load(case, held):
+    # "-12 lbf/ft" typed for "-12 psf" with its 24 in width left in: the deck weight read as
+    # half of it (common practice, no source); a live load's posted figure is per length
+    text = ('schema = 1\ntitle = "joist"\ntags = ["not-lifting", "not-floor"]\n[beam]\n'
+            'length = "12 ft"\nsection = "W8x18"\nmaterial = "A992"\nbraced = true\n'
+            '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "12 ft"\n'
+            'type = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-125 psf"\n'
+            'width = "24 in"\nlabel = "storage"\n[[loads]]\ntype = "uniform"\n'
+            f'value = "-12 lbf/ft"\nwidth = "24 in"\nlabel = "deck"\ncase = {case}\n')
+    job = parse_job_text(text)
+    said = [p for p in job.warnings if p.key == "loads[1].width"]
+    assert len(said) == 1 and "per area" in said[0].message
+    assert any("loads[1] is a dead load per length" in g
+               for g in capacity(job).not_rated) == held

@@ -1396,7 +1396,19 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         raw = ld["value"] if kind == "uniform" else " to ".join(ld["value"])
         conversions.append((key, f"{raw} x {ld['width']} tributary width", w1 if kind == "uniform" else None))
     elif "width" in ld:
-        r.warn("width is only used with a load per area (psf, kPa); ignored", f"{key}.width")
+        # a width beside a load per length is most often a load per area typed per foot
+        # ("-12 lbf/ft" for "-12 psf" with its width left in): a dead load read that way is
+        # too light, and the rating holds the dead load fixed
+        said = (f"width = {ld['width']!r} is only used with a load per area (psf, kPa), but "
+                "this value is per length, so the width is ignored: if the value was meant "
+                "per area, write it so (\"-12 psf\"), else remove width")
+        if common.get("case") == "dead":
+            r.hold(said + "; a dead load read too light posts a higher live load, so no "
+                   "rating is posted on it", f"{key}.width",
+                   f"{key} is a dead load per length with a width beside it: per area "
+                   "meant? Write it in psf (or kPa), or remove width")
+        else:
+            r.warn(said, f"{key}.width")
     return Load(kind, start=start, end=end, w1=w1, w2=w2, **common)
 
 
