@@ -512,6 +512,12 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
     if ss.parts.moving:
         return ("fatigue not checked: the stress range of a moving load over its travel is "
                 "not worked out here; have it checked, or remove fatigue_category and cycles",)
+    if fatigue.tip_loaded(job):
+        return ("fatigue not checked: trolley wheels or a clamp bear on the bottom flange's "
+                "tips, and the local flange bending under them is a stress range of its own "
+                "at the flange, which is not worked out here (it can be larger than the "
+                "global bending range); have it checked, or remove fatigue_category and "
+                "cycles",)
     c = fatigue.fatigue_check(job, st, ss, k)
     if c is None or c.ratio <= 1 + 1e-9:  # None: fewer than 20,000 cycles, no check needed
         return ()

@@ -40,6 +40,22 @@ def given(job) -> bool:
     return bool(getattr(c, "fatigue_category", "")) and getattr(c, "cycles", None) is not None
 
 
+def tip_loaded(job) -> bool:
+    """Trolley wheels or a clamp bear on the bottom flange's tips (a lifting job's trolley,
+    a load hung on a clamp): their local flange bending is a stress range of its own at the
+    flange, which the range worked out here (global bending) leaves out."""
+    from shopbeam.design.lifting import tip_hung
+    lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
+    return bool(tip_hung(job)) or (lifting and bool(job.moving))
+
+
+def checked(job) -> bool:
+    """Whether `fatigue_check` works the fatigue range out for this job (the keys given, a
+    steel member, no moving load, nothing on the flange tips)."""
+    return (given(job) and getattr(job.material, "kind", "") in ("steel", "stainless")
+            and not job.moving and not tip_loaded(job))
+
+
 def words(job, fsr: float) -> str:
     c = job.criteria
     n = f"{c.cycles:,.0f}"
@@ -51,8 +67,8 @@ def words(job, fsr: float) -> str:
 
 def fatigue_range(job, st, ss, k: float) -> tuple[float, float] | None:
     """(live stress range, allowable F_SR), Pa, at the factor k (see design.fatigue), or None
-    where it is not worked out (a moving load)."""
-    if ss.parts.moving:
+    where it is not worked out (a moving load, wheels or a clamp on the flange tips)."""
+    if ss.parts.moving or tip_loaded(job):
         return None
     kk = k * (1 + ss.parts.impact)
     live = ss.live.moment

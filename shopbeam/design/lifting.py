@@ -461,7 +461,9 @@ def lifting_unchecked(job, sec) -> list:
     and fatigue, which no lifting check here covers."""
     if not (job.lifting or getattr(job.criteria, "lifting", "")):
         return []
-    return [FATIGUE] + _lifting_unchecked(job, sec)
+    from shopbeam.design import fatigue
+    # fatigue_category and cycles given and worked out: the fatigue check stands instead
+    return ([] if fatigue.checked(job) else [FATIGUE]) + _lifting_unchecked(job, sec)
 
 
 # Every lift is a load cycle. Below about 20,000 cycles in the member's life fatigue need not
