@@ -630,3 +630,28 @@ def test_a_tag_to_type_is_not_split_at_its_hyphen_on_the_label():
     from shopbeam.output.capacityreport import render
     for width in (78, 76):
         assert '"not-vehicle"' in render(res, width)
+
+
+def test_the_label_and_capacity_page_give_what_each_support_must_carry_at_the_rated_load():
+    # the rating rests on the brackets, clips and seats carrying the reactions, which are not
+    # checked here: a simple span under a uniform load gives each end w L / 2 (statics)
+    from pathlib import Path
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import load_job
+    from shopbeam.output import capacityreport, label
+    from shopbeam import units
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "mezzanine-joist.toml")
+    cap = capacity(job)
+    assert cap.rated
+    k = cap.factor
+    total = sum(-ld.total_force * (k if ld.case == "live" else 1.0) for ld in job.loads)
+    if job.self_weight:
+        total += -job.self_weight_load().total_force
+    each = units.fmt(total / 2, "force", job.units)
+    text = " ".join(label.label_text(label.rating(cap, analyze(job).unchecked))
+                    .replace("|", " ").split())
+    assert "SUPPORTS must carry at the rated load" in text and "not checked here" in text
+    assert f"pin at 0 ft: up to {each}" in text and f"roller at 12 ft: up to {each}" in text
+    page = " ".join(capacityreport.render(cap).split())
+    assert "supports at k" in page and f"pin at 0 ft: up to {each}" in page

@@ -56,6 +56,14 @@ def render(res: CapacityResult, width: int = 78) -> str:
         lines.append("  uplift at k (anchor these supports):")
         for u in p.uplift:
             lines += wrap(u, width, initial_indent="    ", subsequent_indent="      ")
+    if p.envelope and math.isfinite(k) and k > 0:
+        lines += wrap("supports at k (+ up; their brackets, seats, hangers and anchors must "
+                      "carry these and are not checked here):", width, initial_indent="  ",
+                      subsequent_indent="    ")
+        for e in p.envelope:
+            lines += wrap(f"{e.kind} at {e.at}: up to {e.max_up}"
+                          + (f", down to {e.max_down}" if e.uplift else ""), width,
+                          initial_indent="    ", subsequent_indent="      ")
     warns = [p for p in job.warnings if p.warning]
     if warns:
         lines.append("")

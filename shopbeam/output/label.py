@@ -82,7 +82,7 @@ class Rating:
     # the full-page plaque: what each support carries at the rated load (the largest up and
     # down over every load state, `output.present.present_capacity`), per member
     reactions: tuple[str, ...] = ()
-    reactions_head: str = "SUPPORTS at the rated load (+ up)"
+    reactions_head: str = "SUPPORTS must carry at the rated load (+ up)"
 
 
 # ------------------------------------------------------------------ rounding
@@ -499,8 +499,9 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         reactions=tuple(f"{e.kind} at {e.at}: up to {e.max_up}"
                         + (f", down to {e.max_down}" if e.uplift else "") for e in pc.envelope)
         if status == "rated" else (),
-        reactions_head="SUPPORTS at the rated load (" + ("each member, " if job.members > 1
-                                                      else "") + "+ up)")
+        reactions_head="SUPPORTS must carry at the rated load (" + (
+            "each member, " if job.members > 1 else "") + "+ up; their brackets, seats, "
+        "hangers and anchors are not checked here)")
 
 
 def _profile_name(job) -> str:
@@ -550,6 +551,10 @@ def label_text(r: Rating, width: int = 40) -> str:
         row(r.uplift_head)
         for u in r.uplift:
             row("- " + u, "  ")
+    if r.reactions:  # the rating rests on the brackets, seats and anchors carrying these
+        row(r.reactions_head + ":")
+        for line in r.reactions:
+            row("- " + line, "  ")
     for w in r.warnings:
         row(f"INPUT WARNING {w} (see shopbeam check)")
     row(f"Basis: {r.basis}")
@@ -601,18 +606,8 @@ def _body(r: Rating, row) -> None:
 # ------------------------------------------------------------------ full-page plaque
 def plaque_text(r: Rating, width: int = 78) -> str:
     """The full-page plaque as plain text (fits a letter or A4 page at 10 characters per inch):
-    the label, and what each support carries at the rated load."""
-    text = label_text(r, width)
-    if not r.reactions:
-        return text
-    inner = width - 4
-    rows = ["| " + (r.reactions_head + ":").ljust(inner) + " |"]
-    for line in r.reactions:
-        rows += ["| " + piece.ljust(inner) + " |"
-                 for piece in wrap("- " + line, inner, subsequent_indent="  ")]
-    lines = text.rstrip("\n").split("\n")
-    cut = next(i for i, ln in enumerate(lines) if ln.startswith("| Basis: "))
-    return "\n".join(lines[:cut] + rows + lines[cut:]) + "\n"
+    the label, with what each support carries at the rated load, at the plaque's width."""
+    return label_text(r, width)
 
 
 def _long(r: Rating) -> bool:
