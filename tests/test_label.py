@@ -655,3 +655,19 @@ def test_the_label_and_capacity_page_give_what_each_support_must_carry_at_the_ra
     assert f"pin at 0 ft: up to {each}" in text and f"roller at 12 ft: up to {each}" in text
     page = " ".join(capacityreport.render(cap).split())
     assert "supports at k" in page and f"pin at 0 ft: up to {each}" in page
+
+
+def test_a_hoist_given_as_a_point_load_at_a_jib_end_is_rated_only_with_end_stops():
+    # the wheel flange check is for the flange away from its ends (lifting.lifting_notes):
+    # a hoist within a flange width of the end is rated only while end stops keep it off
+    # the open end, as for a [[moving]] set
+    from shopbeam.output import label
+    text = (Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml").read_text()
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml")
+    inside = label.rating(capacity(job), analyze(job).unchecked)
+    assert not any("END STOPS" in n for n in inside.notes)
+    at = next(ld for ld in job.loads if ld.case == "live")
+    end = parse_job_text(text.replace('at = "9 ft 6 in"', 'at = "10 ft"'))
+    assert next(ld for ld in end.loads if ld.case == "live").at > at.at
+    r = label.rating(capacity(end), analyze(end).unchecked)
+    assert any("END STOPS keep the hoist's wheels" in n and "near 10 ft" in n for n in r.notes)

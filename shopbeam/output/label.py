@@ -375,6 +375,21 @@ def _held_words(job) -> list[str]:
                        f"{units.fmt(bf, 'small_length', sy)} (a flange width) from each end "
                        "of the beam, or its ends are closed with plates (the flange check "
                        "under the wheels is for the flange away from its ends).")
+    sec = job.section
+    bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
+    if job.lifting and bf and not job.moving:
+        # a hoist given as a point load hung on the flange tips within a flange width of an
+        # end (a jib's hoist at the end of its reach): the same flange-end condition
+        from shopbeam.design.lifting import tip_hung
+        tips = set(tip_hung(job))
+        near = sorted({ld.at for ld in job.loads if ld.key in tips and ld.kind == "point"
+                       and ld.value and (ld.at < bf or ld.at > job.length - bf)})
+        if near:
+            out.append(f"RATED ONLY WHILE END STOPS keep the hoist's wheels at least "
+                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from the end "
+                       f"of the beam near {', '.join(pos(x) for x in near)}, or that end is "
+                       "closed with a plate (the flange check under the wheels is for the "
+                       "flange away from its ends).")
     return out
 
 
