@@ -65,3 +65,20 @@ def test_a_title_that_reads_as_a_formula_is_kept_as_text_in_the_csv(shop):
     got = {g["job"]: g for g in csv.DictReader(io.StringIO(lc.to_csv(rows)))}
     assert got["shop:formula"]["title"] == "'=HYPERLINK(\"http://x\",\"ok\")"
     assert float(got["shop:good"]["ratio"]) > 0
+
+
+def test_the_library_check_carries_the_cautions_and_marks_lifting_devices():
+    # every screen that posts a rated load carries the screening caution, and a lifting
+    # device's row the stronger one (text and CSV)
+    from shopbeam.output.librarycheck import check_library, to_csv, to_text
+    rows = check_library(origin="bundled")
+    text = to_text(rows)
+    assert "SCREENING CHECK ONLY" in text and "licensed professional" in " ".join(text.split())
+    jib = next(ln for ln in text.splitlines() if ln.startswith("bundled:jib-arm"))
+    shelf = next(ln for ln in text.splitlines() if ln.startswith("bundled:wall-shelf"))
+    assert "LIFTING DEVICE" in jib and "LIFTING DEVICE" not in shelf
+    import csv
+    import io
+    got = {r["job"]: r for r in csv.DictReader(io.StringIO(to_csv(rows)))}
+    assert got["bundled:jib-arm"]["caution"].startswith("LIFTING DEVICE")
+    assert got["bundled:wall-shelf-brackets"]["caution"].startswith("Screening check only")

@@ -11,8 +11,10 @@ from __future__ import annotations
 
 import csv
 import io
+import textwrap
 from dataclasses import dataclass
 
+from shopbeam import cautions
 from shopbeam.design.analysis import analyze
 from shopbeam.design.capacity import capacity
 from shopbeam.errors import InputError, InputErrors, UnstableBeam
@@ -20,7 +22,7 @@ from shopbeam.jobs import library
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.output import label
 
-COLUMNS = ("job", "title", "governing", "ratio", "result", "rated_load", "problem")
+COLUMNS = ("job", "title", "governing", "ratio", "result", "rated_load", "problem", "caution")
 
 
 @dataclass(frozen=True)
@@ -33,11 +35,16 @@ class Row:
     rated_load: str = ""
     problem: str = ""
     path: str = ""
+    lifting: bool = False  # a lifting device: its rated load carries the stronger caution
+
+    @property
+    def caution(self) -> str:
+        return cautions.banner((), self.lifting)
 
     def cells(self) -> list[str]:
         return [self.job, self.title, self.governing,
                 "" if self.ratio is None else f"{self.ratio:.3f}", self.result, self.rated_load,
-                self.problem]
+                self.problem, self.caution]
 
 
 def rated_words(r) -> str:
@@ -75,7 +82,8 @@ def check_entry(entry) -> Row:
         first = str(exc).strip().splitlines()
         return _replace(base, result="ERROR", problem=first[0] if first else type(exc).__name__)
     return _replace(base, title=job.title, governing=g.name, ratio=float(g.ratio),
-                    result="PASS" if result.ok else "FAIL", rated_load=rated_words(r))
+                    result="PASS" if result.ok else "FAIL", rated_load=rated_words(r),
+                    lifting=job.lifting)
 
 
 def _replace(row: Row, **kw) -> Row:
@@ -102,9 +110,11 @@ def to_text(rows: list[Row], width: int = 120) -> str:
         return "No jobs in that library.\n"
     heads = ["JOB", "TITLE", "GOVERNING", "RATIO", "RESULT", "RATED LOAD"]
     data = [[r.job, r.title[:40], r.governing, "" if r.ratio is None else f"{r.ratio:.3f}",
-             r.result, r.rated_load if r.result != "ERROR" else r.problem] for r in rows]
+             r.result, r.problem if r.result == "ERROR" else
+             ("LIFTING DEVICE, not for service without engineer design and load test: "
+              if r.lifting else "") + r.rated_load] for r in rows]
     widths = [max(len(x[i]) for x in data + [heads]) for i in range(len(heads) - 1)]
-    lines = []
+    lines = textwrap.wrap(cautions.SCREENING, min(width, 100)) + [""]
     for row in [heads] + data:
         lines.append("  ".join(c.ljust(w) for c, w in zip(row[:-1], widths)) + "  " + row[-1])
     n_fail = sum(r.result == "FAIL" for r in rows)
