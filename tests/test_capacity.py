@@ -314,3 +314,19 @@ def test_a_deep_bar_loaded_on_its_top_edge_between_supports_is_not_rated_past_th
     held = capacity(parse_job_text(text.replace('self_weight = false\n',
                                                 'self_weight = false\nbraced = true\n')))
     assert held.rated and held.factor > res.factor
+
+
+def test_a_member_that_fails_under_its_own_weight_names_the_check_and_the_usual_unit_slips():
+    # a 36 ft bar-stock arm typed for 36 in (its positions in inches): the self-weight alone
+    # fails it, and the note points to the units, not only "do not load"
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+    job = parse_job_text(
+        'schema = 1\ntitle = "arm"\ntags = ["not-rack"]\n[beam]\nlength = "36 ft"\n'
+        'section = "HSS3x2x3/16"\nmaterial = "A500-C"\nrestrained = true\n[[supports]]\n'
+        'at = "0 in"\ntype = "fixed"\n[[loads]]\ntype = "point"\nat = "30 in"\n'
+        'value = "-200 lbf"\n[criteria]\ndeflection = "L/180"\n')
+    res = capacity(job)
+    assert res.factor == 0.0
+    assert "fails under its own weight" in res.note and "check the units" in res.note
+    assert "deflection, ratio" in res.note

@@ -529,6 +529,16 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
             "largest along the member, with the impact allowance)",)
 
 
+def _fails_alone(e, why: str = "") -> str:
+    """Why nothing can be posted when the fixed loads alone fail: the check that fails, and
+    the unit slips that usually cause it on a member a shop would not otherwise question."""
+    worst = max(e.checks, key=lambda c: c.ratio)
+    return (f"the member fails under its own weight and the dead loads alone{why} ({worst.name}, "
+            f"ratio {worst.ratio:.3g}); if that is not expected, check the units: a length in "
+            "feet with the positions in inches, a deflection limit in mm, a dead load in kip "
+            "for lbf")
+
+
 def _at(k: float) -> str:
     """Where a rule is judged, in words: at the factor found, or with the live loads off."""
     return "with the live loads off (k = 0)" if k == 0 else f"at the factor found (k = {k:.4g})"
@@ -644,15 +654,14 @@ def _capacity(job, section, ss, st, fast: bool = True) -> CapacityResult:
         e = ev(1.0)
         if max(c.ratio for c in e.checks) > 1:  # nothing to scale, and it fails as it is
             return CapacityResult(job, 0.0, e, "fixed loads fail alone",
-                                  "the member fails under its own weight and the dead loads "
-                                  "alone (the job has no live loads)")
+                                  _fails_alone(e, " (the job has no live loads)"))
         return CapacityResult(job, math.inf, e, "no live loads",
                               "the job has no live loads to scale: enter the load to rate "
                               "as a live load")
     g0 = g(0.0)
     if g0 > 1:
-        return CapacityResult(job, 0.0, ev(0.0), "fixed loads fail alone",
-                              "the member fails under its own weight and the dead loads alone")
+        e0 = ev(0.0)
+        return CapacityResult(job, 0.0, e0, "fixed loads fail alone", _fails_alone(e0))
     if _fixed_is_zero(ss):
         g1 = g(1.0)
         if g1 <= NO_DEMAND:
