@@ -671,3 +671,29 @@ def test_a_hoist_given_as_a_point_load_at_a_jib_end_is_rated_only_with_end_stops
     assert next(ld for ld in end.loads if ld.case == "live").at > at.at
     r = label.rating(capacity(end), analyze(end).unchecked)
     assert any("END STOPS keep the hoist's wheels" in n and "near 10 ft" in n for n in r.notes)
+
+
+def test_a_welded_built_up_beam_is_rated_only_while_its_flange_welds_carry_the_shear_flow():
+    # q = V Q / I (mechanics of materials, common practice): a 12 x 6 x 3/8 flange x 1/4 web
+    # plate girder, Q = 6 x 0.375 x (12 - 0.375) / 2 = 13.08 in^3, I by its plates
+    from shopbeam.output import label
+    job = parse_job_text(
+        'schema = 1\ntitle = "platform girder"\ntags = ["not-floor"]\n[beam]\nlength = "16 ft"\n'
+        'material = "A36"\nbraced = true\n[beam.section]\nshape = "i-beam"\ndepth = "12 in"\n'
+        'flange_width = "6 in"\nflange_thickness = "3/8 in"\nweb_thickness = "1/4 in"\n'
+        '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "16 ft"\ntype = "roller"\n'
+        '[[loads]]\ntype = "uniform"\nvalue = "-800 lbf/ft"\n')
+    cap = capacity(job)
+    r = label.rating(cap, analyze(job).unchecked)
+    IN = 0.0254
+    hw = 12 - 2 * 0.375
+    i_in4 = (6 * 12**3 - (6 - 0.25) * hw**3) / 12
+    v = max(abs(c.demand) for c in cap.evaluation.checks if c.name == "shear") / 4.4482216152605
+    q = v * 6 * 0.375 * (12 - 0.375) / 2 / i_in4
+    note = next(n for n in r.notes if "flange-to-web welds" in n)
+    got = float(re.search(r"shear flow of ([\d,]+) lbf/in", note).group(1).replace(",", ""))
+    assert got == pytest.approx(q, abs=1.0)
+    assert job.section.ix == pytest.approx(i_in4 * IN**4, rel=1e-9)
+    # a rolled W shape: no such line
+    w = load_job(Path(__file__).resolve().parents[1] / "presets" / "storage-platform-beam.toml")
+    assert not any("flange-to-web" in n for n in label.rating(capacity(w)).notes)

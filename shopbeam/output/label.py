@@ -393,6 +393,26 @@ def _held_words(job) -> list[str]:
     return out
 
 
+def _weld_words(job, cap) -> list[str]:
+    """A welded built-up I-section (typed in by its plates): the rating rests on the
+    flange-to-web welds carrying the shear flow q = V Q / I at the rated load (AISC 360-16
+    J2; Q of one flange about the neutral axis), which is not checked here."""
+    sec = job.section
+    d = getattr(sec, "dims", None) or {}
+    if not d.get("built_up") or sec.shape != "i-beam" or cap.evaluation is None:
+        return []
+    v = max((abs(c.demand) for c in cap.evaluation.checks if c.name == "shear"), default=0.0)
+    if not v or not sec.ix:
+        return []
+    q_flange = d["bf"] * d["tf"] * (d["d"] - d["tf"]) / 2
+    q = v * q_flange / sec.ix  # N/m
+    flow = (f"{q / (4.4482216152605 / 0.0254):,.0f} lbf/in" if job.units == "us"
+            else f"{q / 1000:,.0f} N/mm")
+    return [f"RATED ONLY WHILE the flange-to-web welds carry a shear flow of {flow} (V Q / I "
+            "at the rated load, both welds of a flange together; welds are not checked here): "
+            "continuous fillets both sides, or stitch welds sized for it."]
+
+
 def _connection_words(job, k: float) -> list[str]:
     """What a fixed end's connection and an internal hinge must pass at the rated load: the
     rating rests on them and they are not checked (design.connections)."""
@@ -482,6 +502,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         status = "rated"
         figs, notes = _figures(job, k)
         notes += _connection_words(job, k)
+        notes += _weld_words(job, cap)
         notes += _dead_couple_words(job)
         if fatigue.given(job):
             c = job.criteria
