@@ -697,3 +697,14 @@ def test_a_welded_built_up_beam_is_rated_only_while_its_flange_welds_carry_the_s
     # a rolled W shape: no such line
     w = load_job(Path(__file__).resolve().parents[1] / "presets" / "storage-platform-beam.toml")
     assert not any("flange-to-web" in n for n in label.rating(capacity(w)).notes)
+
+
+def test_a_pallet_rack_beam_is_rated_only_while_its_connectors_carry_the_end_forces():
+    from shopbeam.output import label
+    root = Path(__file__).resolve().parents[1] / "presets"
+    job = load_job(root / "pallet-rack-beam-pair.toml")
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    assert any("end connectors" in n and "locking devices" in n for n in r.notes)
+    assert r.reactions  # the SUPPORTS lines the note points to
+    arm = load_job(root / "bar-stock-rack-arm.toml")  # a cantilever arm: its column instead
+    assert not any("end connectors" in n for n in label.rating(capacity(arm)).notes)

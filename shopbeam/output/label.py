@@ -250,6 +250,15 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         what = "the arms of every level" if arm else "the levels"
         notes.append(f"{per}: {what} added up (give [beam] levels = N for the figure), "
                      f"and no more than {holder}.")
+    if rack and not arm and all(sp.kind in ("pin", "roller") for sp in job.supports
+                                if sp.kind != "hinge"):
+        # a pallet-rack beam hangs on its end connectors: the label's SUPPORTS lines give
+        # what each carries at the rated load, and the rating rests on them
+        notes.append("RATED ONLY WHILE each beam's end connectors carry what the SUPPORTS "
+                     "lines give at the rated load (connectors are rated by the rack maker's "
+                     "tests, not checked here) and their locking devices are in place against "
+                     "being knocked up (ANSI MH16.1 asks a lock that resists 1,000 lbf upward, "
+                     "from memory).")
     if rack and job.criteria.impact == 0:
         notes.append("NO IMPACT allowance: impact = \"0%\" in the job (ANSI MH16.1 asks 25 % "
                      "of one unit load, from memory; MH16.3 for cantilever racks).")
