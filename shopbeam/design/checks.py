@@ -298,7 +298,8 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
             return Flexure(min(fy * z, (0.021 * e / dt + fy) * s), OMEGA_B,
                            f"F8-2 local buckling, noncompact wall (D/t {dt:.3g})", warnings=warn,
                            unchecked=unc)
-        return Flexure(0.33 * e / dt * s, OMEGA_B, f"F8-4 local buckling, slender wall "
+        return Flexure(0.33 * e / dt * s, OMEGA_B, f"F8-3 local buckling Mn = Fcr S, Fcr = "
+                       f"0.33 E / (D/t) (F8-4), slender wall "
                        f"(D/t {dt:.3g})", warnings=warn, unchecked=unc)
     if shape == "round-bar":
         return Flexure(min(fy * z, 1.6 * fy * s), OMEGA_B, "F11-1 Mn = Fy Z <= 1.6 Fy S")
@@ -1393,7 +1394,8 @@ _AISC_SECTION = {"F2-1": "F2.1", "F2-2": "F2.2", "F2-3": "F2.2", "F3-1": "F3.2",
                  "F3-2": "F3.2", "F6-1": "F6.1", "F6-2": "F6.2", "F6-3": "F6.2",
                  "F7-1": "F7.1", "F7-2": "F7.2", "F7-3": "F7.2", "F7-6": "F7.3", "F7-8": "F7.3",
                  "F7-10": "F7.4", "F7-11": "F7.4", "F8-1": "F8.1", "F8-2": "F8.2",
-                 "F8-4": "F8.2", "F11-1": "F11.1", "F11-2": "F11.2", "F11-3": "F11.2",
+                 "F8-3": "F8.2", "F8-4": "F8.2", "F11-1": "F11.1", "F11-2": "F11.2",
+                 "F11-3": "F11.2",
                  "G2-1": "G2.1", "G3-1": "G3", "G4-1": "G4", "G5-1": "G5", "G6-1": "G6"}
 
 
