@@ -316,3 +316,31 @@ def test_a_member_thicker_than_its_material_values_hold_for_is_not_rated(materia
     said = [w for w in j.warnings if "thick where thickest" in w.message]
     gaps = [g for g in rating_gaps(j, strengths(j)) if "thick where thickest" in g]
     assert bool(said) == bool(gaps) == (not rated)
+
+
+def test_a_thin_round_aluminium_tube_in_bending_takes_the_curved_wall_buckling_strength():
+    # ADM 2015 B.5.5.4 (from memory): Btb = 1.5 Fcy (1 + Fcy^(1/5) / 8.7), Dtb = Btb / 2.7
+    # (Btb / E)^(1/3), Fb = Btb - Dtb sqrt(Rb/t); 6063-T6 (Fcy 25 ksi, E 10,100 ksi, ADM
+    # Table A.3.4 / A.3.1, from memory), OD 4 in x 0.055 in: Rb/t = 35.9, Fb = 28.9 ksi, under
+    # the plastic moment's 1.29 Fcy; the tube had been credited Z Fcy
+    import math
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+    job = parse_job_text(
+        'schema = 1\ntitle = "rail arm"\ntags = ["not-floor", "not-rack"]\n[beam]\n'
+        'length = "2 ft"\nmaterial = "6063-T6"\nself_weight = false\n[beam.section]\n'
+        'shape = "round-tube"\nod = "4 in"\nwall = "0.055 in"\n[[supports]]\nat = "0 ft"\n'
+        'type = "fixed"\n[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n'
+        '[criteria]\ndeflection = "L/240"\n')
+    f, e = job.material.fy / 6894757.293168361, job.material.e / 6894757.293168361
+    rbt = (4 - 0.055) / 2 / 0.055
+    btb = 1.5 * f * (1 + f ** 0.2 / 8.7)
+    dtb = btb / 2.7 * (btb / e) ** (1 / 3)
+    fb = btb - dtb * math.sqrt(rbt)
+    assert fb == pytest.approx(28.9, abs=0.1)
+    s_in3 = math.pi * (4**4 - (4 - 0.11) ** 4) / 64 / 2
+    ma = fb * s_in3 / 1.65 * 1000 / 12  # lbf*ft
+    cap = capacity(job)
+    bend = next(c for c in cap.evaluation.checks if c.name == "bending")
+    assert bend.limit / 4.4482216152605 / 0.3048 == pytest.approx(ma, rel=2e-3)
+    assert "B.5.5.4" in bend.formula
