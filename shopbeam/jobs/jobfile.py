@@ -3156,25 +3156,37 @@ _WET_WORDS = re.compile(
     r"condensation)\b", re.IGNORECASE)
 _HOT_WORDS = re.compile(
     r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?|heat[- ]treat\w*|smelter|saunas?|"
-    r"smoke ?houses?|drying rooms?|(?:10[1-9]|1[1-9]\d|[2-9]\d\d)\s*(?:\u00b0\s*f?|f|"
-    r"deg\w*\.?\s*f)|(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\.?\s*c))(?![a-z])",
+    r"smoke ?houses?|drying rooms?|forges?|foundry|foundries|anneal\w*|"
+    r"steam (?:pipes?|lines?|heat\w*)|"
+    r"(?:10[1-9]|1[1-9]\d|[2-9]\d\d)\s*(?:\u00b0\s*f?|f|deg\w*\.?(?:\s*f)?(?!\s*c\b))|"
+    r"(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\.?\s*c))(?![a-z])",
     re.IGNORECASE)
-# ...and words that say the member is dry and at room temperature all the same
+# ...and words that say the member is dry and at room temperature all the same: said of the
+# whole member (anywhere in the words), or of a place (only in the phrase of the wet or hot
+# word: "mezzanine stair landing outside, exposed to rain" is wet by its second phrase)
 _DRY_WORDS = re.compile(r"\b(interior|indoors?|inside (?:the )?(?:building|shop|warehouse)|"
-                        r"under (?:the )?roof|covered|enclosed|heated|conditioned|"
+                        r"under (?:the )?roof|covered|enclosed|conditioned|"
                         r"weather[- ]?(?:tight|protected|proof)|dry storage|kept dry|"
-                        r"stays dry|mezzanine|loft)\b", re.IGNORECASE)
-_COOL_WORDS = re.compile(r"\b(room temperature|conditioned|(?:well )?away from|far from|"
-                         r"(?:under|below) 100|separate from|ft away)\b", re.IGNORECASE)
+                        r"stays dry)\b", re.IGNORECASE)
+_DRY_NEAR = re.compile(r"\b(heated|mezzanine|loft)\b", re.IGNORECASE)
+_COOL_WORDS = re.compile(r"\b(room temperature|conditioned)\b", re.IGNORECASE)
+_COOL_NEAR = re.compile(r"\b((?:well )?away from|far from|(?:under|below) 100|separate from|"
+                        r"ft away)\b", re.IGNORECASE)
 
 
 def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
     """A wood member whose words say it is wet or hot in service while its keys say nothing:
     held until wet_service or temperature says so either way."""
-    text = [_as_words(t) for t in (title, notes, *tags)]
-    found = lambda words: next((m.group(0) for m in (_search(words, t) for t in text) if m),  # noqa: E731
-                               "")
-    wet = found(_WET_WORDS) if not found(_DRY_WORDS) else ""
+    whole = [_as_words(t) for t in (title, notes, *tags)]
+    phrases = [p for t in whole
+               for p in re.split(r"[.,;:!?()\n]+|\s+-+\s+|\bbut\b", t) if p.strip()]
+
+    def said(words, cancel, near) -> str:
+        if any(_search(cancel, t) for t in whole):
+            return ""
+        return next((m.group(0) for m in (_search(words, t) for t in phrases
+                                          if not _search(near, t)) if m), "")
+    wet = said(_WET_WORDS, _DRY_WORDS, _DRY_NEAR)
     if wet and "wet_service" not in beam:
         r.hold(f"the job says {wet!r}, but [beam] says nothing of wet service: wood over 19 % "
                "moisture in service takes the wet service factor CM (NDS 2018 Supplement "
@@ -3184,7 +3196,7 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
                "beam.wet_service",
                f"the job says {wet!r} but not whether the wood is in wet service. Write "
                "wet_service = true or false")
-    hot = found(_HOT_WORDS) if not found(_COOL_WORDS) else ""
+    hot = said(_HOT_WORDS, _COOL_WORDS, _COOL_NEAR)
     if hot and "temperature" not in beam:
         r.hold(f"the job says {hot!r}, but [beam] says nothing of its temperature: wood kept "
                "over 100 F takes the temperature factor Ct (NDS 2018 Table 2.3.3, from "
