@@ -575,7 +575,8 @@ label = "post"
     ("2 in", "3 ft", "18 in", ""),
     ("2 ft", "3 ft", "18 in", "overlap"),          # 0-2 ft at the pin, 0.5-2.5 ft at the post
     ("4 ft", "10 ft", "5 ft", "overlap"),
-    ("20 in", "10 ft", "5 ft", "more than 25%"),   # 20 in of the 60 in it bears on
+    ("40 in", "10 ft", "5 ft", "more than 25%"),   # 40 in of the 120 in span it sits in
+    ("20 in", "10 ft", "5 ft", ""),                # 20 in of 120 in: a wide post base
     ("6 in", "10 ft", "5 ft", "")])
 def test_a_bearing_a_point_model_cannot_take_is_warned_and_not_rated(bearing, span, at, said):
     # J10-2 credits lb in full (AISC 360-16 J10.2): W8X18 tw 0.230 in, k 0.630 in (AISC

@@ -1247,13 +1247,19 @@ def _bearing_room(r: _Reader, length, supports, loads, bearing, bearings: dict,
     for lo, hi, key, at, b in zones:
         left = max((h for h in held if h < at - tol), default=None)
         right = min((h for h in held if h > at + tol), default=None)
-        spans = [at - left] if left is not None else []
-        spans += [right - at] if right is not None else []
-        span = min(spans) if spans else length
+        if key.startswith("loads"):  # a load: the span it sits in, support to support
+            span = (right if right is not None else length) - (left if left is not None
+                                                               else 0.0)
+            what = f"the {f(span)} span it sits in"
+        else:  # a support: the shorter span beside it
+            spans = [at - left] if left is not None else []
+            spans += [right - at] if right is not None else []
+            span = min(spans) if spans else length
+            what = f"the {f(span)} span beside it"
         if b > LONG_BEARING * span * (1 + 1e-9):
-            say(f"bearing {f(b)} at {key} ({f(at)}) is more than {LONG_BEARING:.0%} of the "
-                f"{f(span)} it bears on, too long for a force taken at a point (model a long "
-                "seat as a support at each end of it)", key)
+            say(f"bearing {f(b)} at {key} ({f(at)}) is more than {LONG_BEARING:.0%} of "
+                f"{what}, too long for a force taken at a point (model a long seat as a "
+                "support at each end of it)", key)
     return out
 
 
