@@ -708,3 +708,27 @@ def test_a_pallet_rack_beam_is_rated_only_while_its_connectors_carry_the_end_for
     assert r.reactions  # the SUPPORTS lines the note points to
     arm = load_job(root / "bar-stock-rack-arm.toml")  # a cantilever arm: its column instead
     assert not any("end connectors" in n for n in label.rating(capacity(arm)).notes)
+
+
+def test_a_rating_that_rests_on_the_tag_fatigue_checked_says_so_on_the_label():
+    from shopbeam.output import label
+    text = (Path(__file__).resolve().parents[1] / "presets" / "trailer-cross-member.toml") \
+        .read_text()
+    tags = next(ln for ln in text.splitlines() if ln.startswith("tags = "))
+    job = parse_job_text(text.replace(tags, tags.rstrip("]") + ', "fatigue-checked"]', 1))
+    cap = capacity(job)
+    assert cap.rated, cap.not_rated
+    r = label.rating(cap, analyze(job).unchecked)
+    assert any("tag fatigue-checked" in n for n in r.notes)
+
+
+def test_a_lifting_beam_rated_on_the_tag_no_axial_says_so_on_the_label():
+    from shopbeam.output import label
+    job = parse_job_text(
+        'schema = 1\ntitle = "spreader bar"\ntags = ["lifting", "no-axial"]\n[beam]\n'
+        'length = "10 ft"\nsection = "W8x18"\nmaterial = "A992"\nrestrained = true\n'
+        '[[supports]]\nat = "1 ft"\ntype = "pin"\n[[supports]]\nat = "9 ft"\ntype = "roller"\n'
+        '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-2000 lbf"\nlug = true\n'
+        'flange = "bottom"\n[criteria]\nlifting = "below-the-hook"\n')
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    assert any("tag no-axial" in n for n in r.notes)

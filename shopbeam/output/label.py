@@ -402,6 +402,22 @@ def _held_words(job) -> list[str]:
     return out
 
 
+def _tag_words(job) -> list[str]:
+    """What a rating rests on because a tag says so (a limit state that tag lets through
+    unchecked): the label says it, as for restraint and braces."""
+    from shopbeam.design.analysis import FATIGUE_CHECKED, NO_AXIAL  # noqa: PLC0415
+    out = []
+    if job.lifting and NO_AXIAL in job.tags and len(
+            {round(s.at, 6) for s in job.supports if s.takes_force}) >= 2:
+        out.append("RATED ONLY WHILE nothing pushes or pulls the member endwise (tag "
+                   "no-axial: slings hang plumb, no tie rod or knee brace; axial force is not "
+                   "checked here).")
+    if getattr(job, "vehicle", "") and FATIGUE_CHECKED in job.tags:
+        out.append("RATED ONLY WHILE the fatigue check made elsewhere stands (tag "
+                   "fatigue-checked: fatigue under road loads is not checked here).")
+    return out
+
+
 def _weld_words(job, cap) -> list[str]:
     """A welded built-up I-section (typed in by its plates): the rating rests on the
     flange-to-web welds carrying the shear flow q = V Q / I at the rated load (AISC 360-16
@@ -512,6 +528,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         figs, notes = _figures(job, k)
         notes += _connection_words(job, k)
         notes += _weld_words(job, cap)
+        notes += _tag_words(job)
         notes += _dead_couple_words(job)
         if fatigue.given(job):
             c = job.criteria
