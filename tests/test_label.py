@@ -732,3 +732,13 @@ def test_a_lifting_beam_rated_on_the_tag_no_axial_says_so_on_the_label():
         'flange = "bottom"\n[criteria]\nlifting = "below-the-hook"\n')
     r = label.rating(capacity(job), analyze(job).unchecked)
     assert any("tag no-axial" in n for n in r.notes)
+
+
+def test_an_outdoor_bracket_label_says_wind_is_not_in_the_figure():
+    from shopbeam.output import label
+    root = Path(__file__).resolve().parents[1] / "presets"
+    job = load_job(root / "awning-bracket.toml")
+    assert any(n.startswith("WIND is not in this figure") for n in
+               label.rating(capacity(job), analyze(job).unchecked).notes)
+    shelf = load_job(root / "wall-shelf-brackets.toml")
+    assert not any("WIND" in n for n in label.rating(capacity(shelf)).notes)

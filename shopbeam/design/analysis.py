@@ -93,6 +93,11 @@ OUTDOOR = ("Out of doors (a sign, awning or canopy) the member also takes wind, 
            "that applies (wind uplift as its own job, with uplift = true on the load).")
 
 
+def is_outdoor(job) -> bool:
+    """Whether the job's tags or title say it stands out of doors (a sign, awning, canopy)."""
+    return any(_OUTDOOR.search(t) for t in (*job.tags, job.title))
+
+
 # Stainless steel has no sharp yield point (a rounded stress-strain curve, Fy its 0.2 %
 # proof stress); AISC 360-16 is written for carbon steel, and stainless members are designed
 # by AISC 370-21 / AISC Design Guide 27, whose buckling rules give less (from memory).
@@ -117,7 +122,7 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
         arm = rack_arm(job.tags, job.supports, job.length)
         out.append(("" if job.criteria.impact is not None else ARM_IMPACT if arm else
                     RACK_IMPACT) + (ARM_REST if arm else RACK_REST))
-    if any(_OUTDOOR.search(t) for t in job.tags + (job.title,)):
+    if is_outdoor(job):
         out.append(OUTDOOR)
     if getattr(job.material, "kind", "") == "stainless":
         out.append(STAINLESS)

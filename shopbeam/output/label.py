@@ -412,6 +412,11 @@ def _tag_words(job) -> list[str]:
         out.append("RATED ONLY WHILE nothing pushes or pulls the member endwise (tag "
                    "no-axial: slings hang plumb, no tie rod or knee brace; axial force is not "
                    "checked here).")
+    from shopbeam.design.analysis import is_outdoor  # noqa: PLC0415
+    if is_outdoor(job):
+        out.append("WIND is not in this figure: out of doors the member also takes wind, "
+                   "sideways and as uplift that reverses the bending (ASCE 7 and the local "
+                   "code); only the loads entered are checked here.")
     if getattr(job, "vehicle", "") and FATIGUE_CHECKED in job.tags:
         out.append("RATED ONLY WHILE the fatigue check made elsewhere stands (tag "
                    "fatigue-checked: fatigue under road loads is not checked here).")
