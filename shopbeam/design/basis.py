@@ -97,3 +97,10 @@ def cb_factor(mmax, ma, mb, mc):
 def nominal_moment(cap, ltb1, cb):
     """Mn = min(cap, Cb x ltb1(Lb)) (floats or numpy arrays): see `Flexure`."""
     return np.minimum(cap, cb * ltb1)
+
+
+def tip_hung(job) -> tuple[str, ...]:
+    """The point loads hung from the bottom flange that bear on its tips (a beam clamp or
+    trolley wheels: every hung load but those with `lug = true`), on any job."""
+    lugs = set(getattr(job, "lugs", ()) or ())
+    return tuple(k for k in (getattr(job, "hung", ()) or ()) if k not in lugs)

@@ -20,6 +20,7 @@ from __future__ import annotations
 import math
 
 from shopbeam import units
+from shopbeam.design.basis import tip_hung
 from shopbeam.design.results import Check
 from shopbeam.jobs.rules import FATIGUE_CATEGORIES as CATEGORIES
 
@@ -44,7 +45,6 @@ def tip_loaded(job) -> bool:
     """Trolley wheels or a clamp bear on the bottom flange's tips (a lifting job's trolley,
     a load hung on a clamp): their local flange bending is a stress range of its own at the
     flange, which the range worked out here (global bending) leaves out."""
-    from shopbeam.design.lifting import tip_hung
     lifting = bool(job.lifting or getattr(job.criteria, "lifting", ""))
     return bool(tip_hung(job)) or (lifting and bool(job.moving))
 

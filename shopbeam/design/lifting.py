@@ -49,7 +49,7 @@ from functools import lru_cache
 
 import numpy as np
 
-from shopbeam.design.basis import basis_of
+from shopbeam.design.basis import basis_of, tip_hung  # noqa: F401 (re-exported)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.model import Load
 from shopbeam.engine.solver import solve, solve_each
@@ -172,13 +172,6 @@ def flange_tf_at_wheel(sec, a: float) -> tuple[float, bool]:
         half = (d["bf"] - d["tw"]) / 2
         tf = tf - (half / 2 - a) / 6.0  # slope 1 in 6: thinner toward the tip
     return max(tf, 0.3 * d["tf"]), tapered
-
-
-def tip_hung(job) -> tuple[str, ...]:
-    """The point loads hung from the bottom flange that bear on its tips (a beam clamp or
-    trolley wheels: every hung load but those with `lug = true`), on any job."""
-    lugs = set(getattr(job, "lugs", ()) or ())
-    return tuple(k for k in (getattr(job, "hung", ()) or ()) if k not in lugs)
 
 
 def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False):
