@@ -508,14 +508,17 @@ def test_a_dead_load_in_metric_units_or_too_light_on_a_us_job_holds_the_rating(h
         assert word in said[0].message
 
 
-def test_a_live_load_in_kn_on_a_us_job_and_a_light_live_load_are_left_alone():
+def test_a_live_load_in_kn_on_a_us_job_is_warned_and_rated_and_a_light_live_load_left_alone():
     text = ('schema = 1\ntitle = "shelf"\ntags = ["not-lifting"]\n[beam]\nlength = "8 ft"\n'
             'section = "W8x18"\nmaterial = "A992"\nbraced = true\n[[supports]]\nat = "0 ft"\n'
             'type = "pin"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n[[loads]]\n'
             'type = "point"\nat = "4 ft"\nvalue = "-2 kN"\n[[loads]]\ntype = "uniform"\n'
             'value = "-0.5 lbf/ft"\n')
     job = parse_job_text(text)
-    assert not [p for p in job.warnings if p.key.startswith("loads")]
+    said = [p for p in job.warnings if p.key.startswith("loads")]
+    # one warning naming the metric value (the label posts it in lbf; N for lbf would only
+    # make the entered load heavier), none for the light live load
+    assert len(said) == 1 and said[0].key == "loads[0].value" and "metric" in said[0].message
     assert capacity(job).rated
 
 
@@ -534,3 +537,25 @@ def test_a_width_beside_a_load_per_length_is_said_and_holds_a_dead_load(case, he
     assert len(said) == 1 and "per area" in said[0].message
     assert any("loads[1] is a dead load per length" in g
                for g in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("units, line, warned", [
+    ("us", 'deflection = "0.25 mm"', True),     # in meant
+    ("us", 'deflection = "0.25 in"', False),
+    ("si", 'deflection = "0.25 in"', True),
+    ("si", 'deflection = "6 mm"', False),
+])
+def test_a_value_in_the_other_unit_system_is_warned(units, line, warned):
+    length = '"8 ft"' if units == "us" else '"2.4 m"'
+    end = length
+    text = (f'schema = 1\ntitle = "shelf"\nunits = "{units}"\ntags = ["not-lifting"]\n[beam]\n'
+            f'length = {length}\nsection = "W8x18"\nmaterial = "A992"\nbraced = true\n'
+            f'[[supports]]\nat = "0 m"\ntype = "pin"\n[[supports]]\nat = {end}\n'
+            f'type = "roller"\n[[loads]]\ntype = "uniform"\n'
+            f'value = "{"-100 lbf/ft" if units == "us" else "-1.5 kN/m"}"\n[criteria]\n{line}\n')
+    text = text.replace('at = "0 m"', 'at = "0 ft"' if units == "us" else 'at = "0 m"')
+    job = parse_job_text(text)
+    said = [p for p in job.warnings if "units on a job in" in p.message]
+    assert bool(said) == warned
+    if warned:
+        assert said[0].key == "criteria.deflection"

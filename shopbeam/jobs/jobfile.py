@@ -2141,6 +2141,54 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                    f"{name} is a dead load under {limit}: check its unit")
 
 
+# A length or force unit of the other system than the job's (metric among feet and lbf, or
+# feet and lbf among metres and N): mixed in one job, the odd one out is a likely slip
+_METRIC_UNIT = re.compile(r"\d\s*(?:mm|cm|m|(?:k|M)?N(?:\s*/\s*m)?|(?:k|M)?Pa)\b")
+_US_UNIT = re.compile(r"(?:\d\s*(?:in|inch\w*|ft|feet|foot|lbf?|lbs|kips?|psf|plf|klf)\b|"
+                      r"\d\s*['\"\u2032\u2033])")
+_MIXED_KEYS = {"beam": ("length", "braces", "bearing"), "supports": ("at", "bearing"),
+               "loads": ("at", "start", "end", "value", "width", "total", "bearing"),
+               "criteria": ("deflection",), "moving": ("loads", "dead", "spacing", "travel")}
+
+
+def _mixed_unit_systems(r: _Reader, data: dict, system: str) -> None:
+    """Positions, lengths, loads and limits typed in the other unit system than the job's
+    (`units`): warned once, naming them, since one value in mm or kN among feet and lbf is
+    most often a slip (a deflection limit of "0.25 mm" for "0.25 in", a vise of "-450 kN" for
+    lbf); it is read as written. (A dead load in metric units on a job in US units is also
+    NOT RATED: `_dead_load_units`.)"""
+    other = _METRIC_UNIT if system == "us" else _US_UNIT
+    found: list[tuple[str, str]] = []
+
+    def look(key: str, v) -> None:
+        for i, x in enumerate(v if isinstance(v, list) else [v]):
+            if isinstance(x, str) and other.search(x):
+                found.append((key if not isinstance(v, list) else f"{key}[{i}]", x))
+
+    for table, keys in _MIXED_KEYS.items():
+        t = data.get(table)
+        rows = [(table, t)] if _is_table(t) else (
+            [(f"{table}[{i}]", x) for i, x in enumerate(t) if _is_table(x)]
+            if isinstance(t, list) else [])
+        for where, row in rows:
+            for k in keys:
+                if k in row:
+                    look(f"{where}.{k}", row[k])
+    said = {p.key for p in r.problems}
+    found = [(k, v) for k, v in found if k.split("[")[0] not in said and k not in said]
+    if not found:
+        return
+    shown = "; ".join(f"{k} = {v!r}" for k, v in found[:4]) + (
+        f" and {len(found) - 4} more" if len(found) > 4 else "")
+    mine, theirs = (("US", "metric") if system == "us" else ("metric (si)", "US"))
+    r.warn(f"typed in {theirs} units on a job in {mine} units: {shown}; each is read as "
+           f"written, but one value in the other system is most often a slip (\"0.25 mm\" "
+           f"for \"0.25 in\", \"-450 kN\" for lbf): check the unit"
+           + (", or set units = \"si\" if the job is metric" if system == "us" else
+              ", or set units = \"us\" if the job is in feet and pounds"),
+           found[0][0])
+
+
 def _load_index(key: str) -> int | None:
     m = re.fullmatch(r"loads\[(\d+)\]", key or "")
     return int(m.group(1)) if m else None
@@ -3691,6 +3739,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _rack_fixed_ends(r, tags, supports, length)
     _glulam_words(r, title, notes, tags, material, data)
     _length_in_other_units(r, data)
+    _mixed_unit_systems(r, data, system)  # after the rules that name a value's unit
     _odd_springs(r, supports, section, material, length, system)
     _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
