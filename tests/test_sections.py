@@ -466,3 +466,16 @@ def test_a_typed_in_tube_shows_its_design_wall_on_the_report_and_label(tmp_path)
     assert "design wall 0.06045 in" in " ".join(run("rating").replace("|", " ").split())
     job.write_text(body.replace("SECTION", 'section = "HSS4x2x1/8"').replace("A513", "A500-C"))
     assert "design t =" not in run("solve") and "design wall" not in run("rating")
+
+
+def test_a_typed_in_tube_of_a_plate_grade_or_a_typed_in_steel_takes_the_erw_design_wall():
+    # AISC 360-16 B4.2: 0.93 x nominal for ERW tube; a grade that is not a tube grade (A36,
+    # a mill cert's typed-in steel) says nothing of how the tube was made: the lower figure
+    from shopbeam.members.materials import resolve_material
+    spec = {"shape": "rect-tube", "depth": "3 in", "width": "2 in", "wall": "3/16 in"}
+    for mat in (resolve_material("A36"), resolve_material("A572-50")):
+        sec = resolve_section(spec, material=mat)
+        close(sec.dims["t_des"], 0.93 * 0.1875 * IN, 1e-9)
+        assert "not a tube grade" in sec.source
+    alu = resolve_section(spec, material=resolve_material("6061-T6"))
+    close(alu.dims["t_des"], 0.1875 * IN, 1e-9)  # extruded: nominal

@@ -3151,6 +3151,16 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                f"{units.fmt(material.fy, 'stress', system)}, more than the pipe has. Write "
                "material = \"A53-B\", or give the round HSS (e.g. \"HSS4.500X0.237\") if "
                "the mill cert says A500", where)
+    elif mkind == "steel" and shape == "pipe" and get_material(key) is not None \
+            and not key.startswith("A53"):
+        # a built-in grade pipe is not made to (mechanical tube grades, say): pipe is A53
+        usual = "A53-B"
+        r.warn(f"material {key!r} is not a grade pipe is made to: section "
+               f"{section.designation!r} is pipe, made to ASTM A53 Gr B (Fy 35 ksi; AISC "
+               "Manual Table 2-4, from memory): the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}. Write material = \"A53-B\", or "
+               "give the tube the mill cert names (a round-tube section) if it is not pipe",
+               where)
     elif mkind == "steel" and key == "A513-DOM" and shape == "rect-tube":
         usual = "A500-C"
         r.warn(f"material {key!r} is DOM (drawn over mandrel) tube, which is round, but "

@@ -894,8 +894,12 @@ def _wall_factor(spec, key, material, shape) -> tuple[float, str]:
         if wf < 1.0:
             return wf, f"design wall {wf:g} x nominal ({mname} ERW tube, AISC 360 B4.2)"
         return wf, f"design wall = nominal ({mname}: not ERW tube, AISC 360 B4.2's 0.93 is not taken)"
-    if material is not None:
+    if material is not None and getattr(material, "kind", "") != "steel":
         return 1.0, "design wall = nominal"
+    if material is not None:  # a plate or shape grade, or a typed-in steel: not a tube grade
+        return ERW_FACTOR, ("design wall 0.93 x nominal (AISC 360 B4.2 ERW rule; the material "
+                            "is not a tube grade, so the lower figure: write design_wall = "
+                            "\"nominal\" if the wall is measured at its nominal size)")
     return ERW_FACTOR, ("design wall 0.93 x nominal (AISC 360 B4.2 ERW rule; no material "
                         "given, so the lower figure)")
 
