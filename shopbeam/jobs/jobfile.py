@@ -2533,9 +2533,17 @@ def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags,
         # top would bear on the flange tips just the same): the hook load on the top flange
         # leaves the wheel flange checks out
         what = "a monorail" if "monorail" in name else "a jib boom"
+        # the hook's places: a point load set on top at one of them is the hoist and
+        # trolley's own weight (or part of the hook load), which hangs on the wheels; with no
+        # hook hung below, a live load on top is the hook load itself. A live load on top
+        # beside a hook that hangs below is something else (a tray bearing on the beam)
+        hooks = {str(ld.get("at")).strip() for ld in raw_loads
+                 if _is_table(ld) and ld.get("type") == "point" and ld.get("flange") != "top"
+                 and ld.get("case", "live") == "live"}
         for i, ld in enumerate(raw_loads):
             if (_is_table(ld) and ld.get("type") == "point" and ld.get("flange") == "top"
-                    and ld.get("case", "live") == "live"):
+                    and ((ld.get("case", "live") == "live" and not hooks)
+                         or str(ld.get("at")).strip() in hooks)):
                 who = (f"the profile tags = [\"lifting\"] picks for this span, \"{name}\","
                        if guessed else f"lifting = \"{name}\"")
                 r.hold(f"flange = \"top\" puts this load on the top flange, but {who} "
