@@ -2050,7 +2050,7 @@ TROLLEY_SPACING = 4 * 0.3048  # m
 
 
 # A hoist travels its beam: a travel typed in inches that covers less than this part of the
-# member (and under 2 ft) is most likely feet typed as inches ("16 in" for "16 ft").
+# member is most likely feet typed as inches ("16 in" for "16 ft", "29 in" on a 30 ft beam).
 SHORT_TRAVEL = 0.25
 
 
@@ -2072,7 +2072,7 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> 
         tr = (raw[0].get("travel") if isinstance(raw, list) and raw and _is_table(raw[0])
               else None)
         span = ws.travel[1] - ws.travel[0]
-        if isinstance(tr, list) and length and span < min(SHORT_TRAVEL * length, 2 * 0.3048) \
+        if isinstance(tr, list) and length and span < SHORT_TRAVEL * length \
                 and any(isinstance(v, str) and re.search(r"\d\s*(?:in\b|inch|\"|'')", v)
                         for v in tr):
             got = ", ".join(f'"{v}"' for v in tr)
