@@ -559,3 +559,30 @@ def test_a_value_in_the_other_unit_system_is_warned(units, line, warned):
     assert bool(said) == warned
     if warned:
         assert said[0].key == "criteria.deflection"
+
+
+@pytest.mark.parametrize("dead, held", [
+    ('["-60 lbf", "-60 lbf"]', False),
+    ('["-267 N", "-267 N"]', True),     # N for lbf on a job in feet
+    ('["-0.06 lbf", "-0.06 lbf"]', True),  # kip meant
+])
+def test_a_trolley_s_dead_wheel_loads_in_metric_or_too_light_hold_the_rating(dead, held):
+    from pathlib import Path
+    text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
+    line = next(ln for ln in text.splitlines() if ln.startswith("dead = "))
+    job = parse_job_text(text.replace(line, f"dead = {dead}", 1))
+    assert any("dead wheel load" in g for g in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("value, held", [('"-60 lbf"', False), ('"-27 kg"', True),
+                                         ('"-5 daN"', True)])
+def test_a_dead_point_load_in_kilograms_or_decanewtons_on_a_us_job_holds_the_rating(value,
+                                                                                   held):
+    text = ('schema = 1\ntitle = "jib"\ntags = ["lifting", "jib"]\n[beam]\nlength = "10 ft"\n'
+            'section = "W6x15"\nmaterial = "A992"\n[[supports]]\nat = "0 ft"\ntype = "fixed"\n'
+            '[[loads]]\ntype = "point"\nat = "9 ft 6 in"\nvalue = "-1000 lbf"\n'
+            '[[loads]]\ntype = "point"\nat = "9 ft 6 in"\n'
+            f'value = {value}\nlabel = "hoist"\ncase = "dead"\n[criteria]\n'
+            'lifting = "hand-geared-jib"\n')
+    job = parse_job_text(text)
+    assert any("metric units" in g for g in capacity(job).not_rated) == held

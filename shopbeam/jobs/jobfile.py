@@ -2088,7 +2088,8 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> 
 
 
 # A force unit of the metric system: N, kN, MN, N/m, kN/m, N/mm, Pa, kPa, N/m^2 ...
-_SI_FORCE = re.compile(r"\d\s*(?:k|M)?(?:N|Pa)\b(?:\s*/\s*(?:m|mm|cm)\b)?")
+_SI_FORCE = re.compile(r"\d\s*(?:(?:k|M|da)?(?:N|Pa)|kgf?|kilograms?)\b"
+                       r"(?:\s*/\s*(?:m|mm|cm)\b)?")
 # A dead load lighter than this (a point load in N, a spread load in N/m) is too light to be
 # the weight of anything a shop hangs on a member: a unit slip ("-0.08 lbf" for kip,
 # "-12.8 N/m" for lbf/ft), and a dead load stays on while the live load is rated
@@ -2107,7 +2108,7 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
         raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
         if not _is_table(raw):
             continue
-        vals = raw.get("value")
+        vals = raw.get("value", raw.get("total"))
         texts = [v for v in (vals if isinstance(vals, list) else [vals]) if isinstance(v, str)]
         name = ld.key + (f" ({ld.label})" if ld.label else "")
         metric = [v for v in texts if _SI_FORCE.search(v)]
@@ -2138,7 +2139,8 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                    "\"-0.08 kip\"), and the rating holds the dead load fixed, so a light one "
                    "posts a higher live load; no rating is posted on it. Check the unit, or "
                    "leave the load out if it really is this light", f"{ld.key}.value",
-                   f"{name} is a dead load under {limit}: check its unit")
+                   f"{name} is a dead load under {limit}: check its unit, or leave it out "
+                   "if it really is this light")
 
 
 # A length or force unit of the other system than the job's (metric among feet and lbf, or
@@ -2187,6 +2189,34 @@ def _mixed_unit_systems(r: _Reader, data: dict, system: str) -> None:
            + (", or set units = \"si\" if the job is metric" if system == "us" else
               ", or set units = \"us\" if the job is in feet and pounds"),
            found[0][0])
+
+
+def _moving_dead_units(r: _Reader, raw_moving, moving, system: str) -> None:
+    """A [[moving]] set's dead wheel loads (the trolley and hoist's own weight) typed in
+    metric units on a job in US units, or under 1 lbf a wheel: as `_dead_load_units` (the
+    rating holds them fixed, so a light one posts more): NOT RATED."""
+    if not moving or not (isinstance(raw_moving, list) and raw_moving
+                          and _is_table(raw_moving[0])):
+        return
+    ws, raw = moving[0], raw_moving[0].get("dead")
+    name = ws.key + (f" ({ws.label})" if ws.label else "")
+    texts = [v for v in (raw if isinstance(raw, list) else [raw]) if isinstance(v, str)]
+    metric = [v for v in texts if _SI_FORCE.search(v)]
+    if system == "us" and metric:
+        said = ", ".join(f'"{v}"' for v in metric)
+        r.hold(f"the dead wheel loads of {name} are typed in metric units ({said}) on a job "
+               "in US units: if lbf was meant, they are 4.45 times too light, and the rating "
+               "holds the trolley's weight fixed, so a light one posts a higher hook load; no "
+               "rating is posted on it. Write them in lbf", f"{ws.key}.dead",
+               f"the dead wheel loads of {name} are typed in metric units ({said}) on a job "
+               "in US units: write them in lbf")
+    elif any(0 < abs(d) < TINY_DEAD_POINT for d in ws.dead):
+        r.hold(f"a dead wheel load of {name} is under "
+               f"{units.fmt(TINY_DEAD_POINT, 'force', system)}, too light to be a trolley's "
+               "weight: a unit slip is likely, and the rating holds it fixed; no rating is "
+               "posted on it. Check the unit, or leave dead out if the trolley weighs nothing "
+               "worth counting", f"{ws.key}.dead",
+               f"a dead wheel load of {name} is under 1 lbf: check its unit, or leave it out")
 
 
 def _load_index(key: str) -> int | None:
@@ -3736,6 +3766,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _dead_load_units(r, raw_loads, loads, system)
+    _moving_dead_units(r, data.get("moving"), moving, system)
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
