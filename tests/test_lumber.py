@@ -662,17 +662,27 @@ def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held)
     ("Drying room joist, 140\u00b0", "", True),
     ("Sauna bench joist", "", True),
     ("Loft joist", "", False),
-    # a place word (mezzanine, loft, heated) cancels a wet word in its own phrase only
+    # a near word (heated) cancels a wet word in its own phrase only; mezzanine and loft
+    # say nothing of the weather
     ("Mezzanine stair landing beam outside, exposed to rain", "", True),
     ("Heated shop to lumber shed walkway, exposed to rain", "", True),
     ("Open loft over the yard, exposed to rain", "", True),
+    ("Outdoor mezzanine joist", "", True),
     ("Mezzanine joist, enclosed, exposed to rain during the build", "", False),  # whole member
+    ("Patio cover joist", "", True),
+    ("Boat dock stringer", "", True),
+    ("Shelf joist beside the wet saw", "", False),
+    ("Joist along the outside wall", "", False),
+    ("Shelf joist, 2 ft away from the forge", "", True),
+    ("Shelf joist, forge 30 ft away", "", False),
+    ("Rack joist for annealed wire stock", "", False),
+    ("Shelf over the wood stove", "", True),
+    ("Drying shelf at 140 \u00baF", "", True),
     # heat said in a metal shop's words
     ("Shelf joist over the forge", "", True),
     ("Foundry pattern shelf beam", "", True),
     ("Drying shed shelf at 140 degrees", "", True),
     ("Shelf beside the steam pipes", "", True),
-    ("Shelf joist, forge 30 ft away", "", False),
 ])
 def test_wet_or_hot_service_said_in_words_needs_its_key(title, key, held):
     # NDS 2018 Supplement Table 4A CM and Table 2.3.3 Ct (from memory): a 2x6 deck joist

@@ -2788,7 +2788,8 @@ def _as_words(text) -> str:
     "Lifting Beam"), so a word joined up in a tag or file-name style title is still read."""
     import unicodedata  # noqa: PLC0415
 
-    t = unicodedata.normalize("NFKC", str(text or ""))
+    # the ordinal sign typed for a degree sign ("140 \u00baF") stays a degree (NFKC makes it "o")
+    t = unicodedata.normalize("NFKC", str(text or "").replace("\u00ba", "\u00b0"))
     t = re.sub(r"(?<=[a-z])(?=[A-Z])", " ", t)
     return t.replace("_", " ")
 
@@ -3250,18 +3251,19 @@ _WOOD_KEYS = (("wet_service", "beam"), ("temperature", "beam"), ("repetitive", "
 # memory), so a figure without them is too high (a deck joist "exposed to rain" had been
 # posted 17 % high, a loft joist "over the heat-treat furnace, about 120F" 31 %)
 _WET_WORDS = re.compile(
-    r"\b(outdoors?|outside(?! (?:dimensions?|of|face|corners?|diameter|width|edges?|the))|"
+    r"\b(outdoors?|outside(?! (?:dimensions?|of|face|corners?|diameter|width|edges?|the|"
+    r"walls?))|patios?|(?:boat|floating) docks?|not covered|"
     r"exterior(?! walls?| face| dimensions?)|exposed to (?:the )?(?:rain|weather|elements|"
     r"moisture|water)|(?:in|out in) the (?:rain|weather|elements)|weathered|"
-    r"rain(?:s|ed|ing|water|fall)?|wet(?! bar)|ground contact|in contact with the ground|"
+    r"rain(?:s|ed|ing|water|fall)?|wet(?! bar| saws?)|ground contact|in contact with the ground|"
     r"uncovered|open[- ]air|backyard|boardwalk|pergola|balcony|outdoor deck|humid\w*|"
     r"condensation)\b", re.IGNORECASE)
 _HOT_WORDS = re.compile(
     r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?|heat[- ]treat\w*|smelter|saunas?|"
-    r"smoke ?houses?|drying rooms?|forges?|foundry|foundries|anneal\w*|"
+    r"smoke ?houses?|drying rooms?|forges?|foundry|foundries|wood ?stoves?|"
     r"steam (?:pipes?|lines?|heat\w*)|"
-    r"(?:10[1-9]|1[1-9]\d|[2-9]\d\d)\s*(?:\u00b0\s*f?|f|deg\w*\.?(?:\s*f)?(?!\s*c\b))|"
-    r"(?:3[89]|[4-9]\d)\s*(?:\u00b0\s*)?(?:c|deg\w*\.?\s*c))(?![a-z])",
+    r"(?:10[1-9]|1[1-9]\d|[2-9]\d\d)\s*(?:[\u00b0\u00ba]\s*f?|f|deg\w*\.?(?:\s*f)?(?!\s*c\b))|"
+    r"(?:3[89]|[4-9]\d)\s*(?:[\u00b0\u00ba]\s*)?(?:c|deg\w*\.?\s*c))(?![a-z])",
     re.IGNORECASE)
 # ...and words that say the member is dry and at room temperature all the same: said of the
 # whole member (anywhere in the words), or of a place (only in the phrase of the wet or hot
@@ -3270,10 +3272,11 @@ _DRY_WORDS = re.compile(r"\b(interior|indoors?|inside (?:the )?(?:building|shop|
                         r"under (?:the )?roof|covered|enclosed|conditioned|"
                         r"weather[- ]?(?:tight|protected|proof)|dry storage|kept dry|"
                         r"stays dry)\b", re.IGNORECASE)
-_DRY_NEAR = re.compile(r"\b(heated|mezzanine|loft)\b", re.IGNORECASE)
+_DRY_NEAR = re.compile(r"\b(heated)\b", re.IGNORECASE)
 _COOL_WORDS = re.compile(r"\b(room temperature|conditioned)\b", re.IGNORECASE)
-_COOL_NEAR = re.compile(r"\b((?:well )?away from|far from|(?:under|below) 100|separate from|"
-                        r"ft away)\b", re.IGNORECASE)
+_COOL_NEAR = re.compile(r"\b(well away from|far from|(?:under|below) 100|separate room|"
+                        r"(?:[1-9]\d+|ten|twenty|thirty|forty|fifty) (?:ft|feet) away)\b",
+                        re.IGNORECASE)
 
 
 def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
