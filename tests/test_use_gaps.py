@@ -303,3 +303,15 @@ def test_fatigue_keys_on_a_monorail_with_a_hoist_on_the_flange_tips_hold_the_rat
     res = analyze(lug)
     assert "fatigue" in [c.name for c in res.checks]
     assert not any(u.name == "fatigue under repeated lifts" for u in res.unchecked)
+
+
+def test_fewer_than_20000_cycles_on_a_monorail_need_no_fatigue_check_and_hold_nothing():
+    # AISC 360-16 A-3.1 (from memory): below 20,000 cycles no fatigue check is needed
+    from pathlib import Path
+    from shopbeam.design.analysis import analyze
+    text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-hoist-beam.toml") \
+        .read_text().replace("[criteria]", '[criteria]\nfatigue_category = "B"\n'
+                                           'cycles = 5000', 1)
+    job = parse_job_text(text)
+    assert not any("fatigue" in r for r in capacity(job).not_rated)
+    assert not any(u.name == "fatigue under repeated lifts" for u in analyze(job).unchecked)

@@ -50,8 +50,11 @@ def tip_loaded(job) -> bool:
 
 
 def checked(job) -> bool:
-    """Whether `fatigue_check` works the fatigue range out for this job (the keys given, a
-    steel member, no moving load, nothing on the flange tips)."""
+    """Whether the job's fatigue is settled here: `fatigue_check` works the range out (the
+    keys given, a steel member, no moving load, nothing on the flange tips), or the keys
+    give fewer than 20,000 cycles, which need no check (AISC 360-16 A-3.1)."""
+    if given(job) and job.criteria.cycles < FEW_CYCLES:
+        return True  # A-3.1: no fatigue check is needed below 20,000 cycles: settled
     return (given(job) and getattr(job.material, "kind", "") in ("steel", "stainless")
             and not job.moving and not tip_loaded(job))
 
