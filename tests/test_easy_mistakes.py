@@ -1234,6 +1234,15 @@ def test_more_names_of_devices_racks_and_vehicles_are_read(title, words):
     assert any(words in w.message for w in warnings(job)), [w.message for w in warnings(job)]
 
 
+@pytest.mark.parametrize("title", ["Pipe rack beam on beam clamps", "Cable rack beam"])
+def test_a_pipe_or_cable_rack_beam_is_not_read_as_a_storage_rack(title):
+    # a pipe rack carries pipes across a plant on beam clamps, not stored goods
+    job = parse_job_text(job_text().replace('title = "shelf"', f'title = "{title}"'))
+    assert not any("storage rack" in w.message for w in warnings(job))
+    stored = parse_job_text(job_text().replace('title = "shelf"', 'title = "Stock rack beam"'))
+    assert any("storage rack" in w.message for w in warnings(stored))
+
+
 @pytest.mark.parametrize("title, tags", [
     ("Cranebrook Road shelf", "[]"), ("Weightlifting rack at the gym", '["not-rack"]'),
     ("Canopy for uplifting wind", "[]"), ("Saw bench", '["not_lifting", "not_vehicle"]')])

@@ -1873,7 +1873,9 @@ NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack 
 # Words that name a storage-rack member; a job that uses one but is not tagged rack gets
 # neither the rack cautions (the impact load) nor the rating label's per-level wording.
 _RACK_WORDS = re.compile(
-    r"\b(pallet[- ]?racks?|pallet[- ]?racking|racking|rack beams?|rack arms?|"
+    # a pipe rack or cable rack carries pipes or trays across a plant, not stored goods
+    r"\b(pallet[- ]?racks?|pallet[- ]?racking|racking|"
+    r"(?<!pipe )(?<!pipe-)(?<!cable )(?<!conduit )rack beams?|rack arms?|"
     r"cantilever[- ]racks?|storage[- ]racks?|selective[- ]racks?|rack uprights?|"
     r"step beams?|teardrop|drive[- ]?(?:in|thru|through) racks?|cantilever arms?|"
     r"(?:pallet|storage|stock) (?:racks?|bays?) beams?)\b",
