@@ -62,7 +62,8 @@ def render(res: CapacityResult, width: int = 78) -> str:
                       subsequent_indent="    ")
         for e in p.envelope:
             lines += wrap(f"{e.kind} at {e.at}: up to {e.max_up}"
-                          + (f", down to {e.max_down}" if e.uplift else ""), width,
+                          + (f"; pulls down up to {e.max_down.lstrip('-')}" if e.uplift
+                             else ""), width,
                           initial_indent="    ", subsequent_indent="      ")
     warns = [p for p in job.warnings if p.warning]
     if warns:

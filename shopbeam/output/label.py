@@ -395,10 +395,11 @@ def _held_words(job) -> list[str]:
                        and ld.value and (ld.at < bf or ld.at > job.length - bf)})
         if near:
             out.append(f"RATED ONLY WHILE END STOPS keep the hoist's wheels at least "
-                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from the end "
-                       f"of the beam near {', '.join(pos(x) for x in near)}, or that end is "
-                       "closed with a plate (the flange check under the wheels is for the "
-                       "flange away from its ends).")
+                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from the open "
+                       f"end near {', '.join(pos(x) for x in near)} (the figure, taken with "
+                       "the hoist there, then errs on the safe side), or that end is closed "
+                       "with a plate (the flange check under the wheels is for the flange away "
+                       "from its ends).")
     return out
 
 
@@ -438,9 +439,14 @@ def _weld_words(job, cap) -> list[str]:
     q = v * q_flange / sec.ix  # N/m
     flow = (f"{q / (4.4482216152605 / 0.0254):,.0f} lbf/in" if job.units == "us"
             else f"{q / 1000:,.0f} N/mm")
+    from shopbeam.design.basis import tip_hung  # noqa: PLC0415
+    hung = bool(getattr(job, "hung", ()))
     return [f"RATED ONLY WHILE the flange-to-web welds carry a shear flow of {flow} (V Q / I "
             "at the rated load, both welds of a flange together; welds are not checked here): "
-            "continuous fillets both sides, or stitch welds sized for it."]
+            "continuous fillets both sides, or stitch welds sized for it"
+            + (", and the bottom flange's welds also the loads hung from it, which reach the "
+               "web through them" + (" (a clamp bears on the flange tips)"
+                                     if tip_hung(job) else "") if hung else "") + "."]
 
 
 def _connection_words(job, k: float) -> list[str]:
@@ -564,7 +570,8 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         uplift_head="UPLIFT at the rated load" + (" (each member)" if job.members > 1 else "")
         + ": anchor",
         reactions=tuple(f"{e.kind} at {e.at}: up to {e.max_up}"
-                        + (f", down to {e.max_down}" if e.uplift else "") for e in pc.envelope)
+                        + (f"; pulls down up to {e.max_down.lstrip('-')}" if e.uplift else "")
+                        for e in pc.envelope)
         if status == "rated" else (),
         reactions_head="SUPPORTS must carry at the rated load (" + (
             "each member, " if job.members > 1 else "") + "+ up; their brackets, seats, "
