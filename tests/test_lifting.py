@@ -441,6 +441,7 @@ def test_trolley_axles_feet_apart_are_warned(spacing, warns):
     ('["2 ft", "14 ft"]', False),    # end stops 2 ft in
     ('["0 in", "192 in"]', False),   # the whole beam in inches
     ('["1 in", "29 in"]', True),     # 28 in of 16 ft: over 2 ft, under a quarter
+    ('["0 ft", "1 ft 4 in"]', False),  # feet and inches: written as meant
 ])
 def test_a_trolley_travel_of_a_few_inches_typed_in_inches_is_not_rated(travel, held):
     # a hoist travels its beam (common practice): a travel of inches on a 16 ft beam

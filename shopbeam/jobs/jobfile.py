@@ -1257,7 +1257,8 @@ def _bearing_room(r: _Reader, length, supports, loads, bearing, bearings: dict,
             span = min(spans) if spans else length
             what = f"the {f(span)} span beside it"
         if b > LONG_BEARING * span * (1 + 1e-9):
-            say(f"bearing {f(b)} at {key} ({f(at)}) is more than {LONG_BEARING:.0%} of "
+            say(f"bearing {units.fmt(b, 'small_length', system)} at {key} ({f(at)}) is more "
+                f"than {LONG_BEARING:.0%} of "
                 f"{what}, too long for a force taken at a point (model a long seat as a "
                 "support at each end of it)", key)
     return out
@@ -1405,14 +1406,18 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         # a width beside a load per length is most often a load per area typed per foot
         # ("-12 lbf/ft" for "-12 psf" with its width left in): a dead load read that way is
         # too light, and the rating holds the dead load fixed
+        example = '"-12 psf"' if r.system == "us" else '"-0.6 kPa"'
         said = (f"width = {ld['width']!r} is only used with a load per area (psf, kPa), but "
-                "this value is per length, so the width is ignored: if the value was meant "
-                "per area, write it so (\"-12 psf\"), else remove width")
+                + ("this total is a force" if "total" in ld else "this value is per length")
+                + ", so the width is ignored: if the load was meant per area, write its value "
+                f"so ({example}), else remove width")
         if common.get("case") == "dead":
             r.hold(said + "; a dead load read too light posts a higher live load, so no "
                    "rating is posted on it", f"{key}.width",
-                   f"{key} is a dead load per length with a width beside it: per area "
-                   "meant? Write it in psf (or kPa), or remove width")
+                   f"{key} is a dead load " + ("given as a total" if "total" in ld else
+                                               "per length")
+                   + " with a width beside it: per area meant? Write it in "
+                   + ("psf" if r.system == "us" else "kPa") + ", or remove width")
         else:
             r.warn(said, f"{key}.width")
     return Load(kind, start=start, end=end, w1=w1, w2=w2, **common)
@@ -2076,7 +2081,9 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> 
         span = ws.travel[1] - ws.travel[0]
         if isinstance(tr, list) and length and span < SHORT_TRAVEL * length \
                 and any(isinstance(v, str) and re.search(r"\d\s*(?:in\b|inch|\"|'')", v)
-                        for v in tr):
+                        for v in tr) \
+                and not any(isinstance(v, str) and re.search(r"ft\b|feet|foot|\d\s*'(?!')", v)
+                            for v in tr):  # "1 ft 4 in" is feet and inches, not a slip
             got = ", ".join(f'"{v}"' for v in tr)
             r.hold(f"travel = [{got}] lets the hoist run over only "
                    f"{units.fmt(span, 'length', system)} of the "
