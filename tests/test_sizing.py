@@ -335,3 +335,22 @@ def test_a_stock_line_with_no_grade_is_swept_in_the_grade_it_is_bought_in():
     mats = {r.designation.upper(): r.material.key for r in res.rows}
     assert mats["FB10X1/8"] == "A36" and mats["HSS6X6X3/16"] == "A500-C"
     assert not any(r.designation.upper() == "FB10X1/8" for r in res.passing)
+
+
+@pytest.mark.parametrize("job_grade, kind, swept", [
+    ("A500-C", "mech-tube", "A513"),       # gauge tube is bought as A513 (30 ksi)
+    ("A500-C", "mech-round", "A513"),
+    ("A513-DOM", "HSS-round", "A500-C"),   # DOM's 60 ksi is not what HSS is bought in
+    ("A513", "HSS-rect", None),            # 30 ksi on HSS: less than A500-C, kept (safe side)
+    ("A500-C", "HSS-rect", None),
+    ("A53-B", "PIPE", None),
+    ("A500-B", "PIPE", "A53-B"),
+])
+def test_a_tube_sweep_uses_the_grade_its_product_is_bought_in_where_the_job_s_credits_more(
+        job_grade, kind, swept):
+    # product grades: AISC Manual 15th ed. Table 2-4 (from memory): HSS A500 Gr C, pipe
+    # A53 Gr B; mechanical tube ASTM A513
+    from shopbeam.design.sizing import usual_grade
+    from shopbeam.members.materials import resolve_material
+    got = usual_grade(resolve_material(job_grade), kind)
+    assert (got.key if got is not None else None) == swept

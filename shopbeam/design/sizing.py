@@ -317,8 +317,14 @@ def usual_grade(material, kind: str):
         want = FAMILY_DEFAULTS.get(kind, "A500-C")
     elif kind not in TUBE_KINDS and tube_grade:
         want = FAMILY_DEFAULTS.get(kind, "A36")
-    elif kind == "PIPE" and key.startswith("A500"):
-        want = "A53-B"
+    elif kind in TUBE_KINDS and tube_grade and not key.startswith(
+            {"PIPE": "A53", "mech-tube": "A513", "mech-round": "A513"}.get(kind, "A500")):
+        # a tube grade of another tube product (A500 on gauge tube, DOM on HSS, A500 on
+        # pipe): swept in the product's own grade where the job's credits more
+        want = FAMILY_DEFAULTS.get(kind, "A500-C")
+        own = get_material(want)
+        if own is None or not material.fy > own.fy * (1 + 1e-9):
+            return None
     elif key == "A992" and kind not in W_KINDS:
         want = FAMILY_DEFAULTS.get(kind, "A36")
     else:
