@@ -586,3 +586,19 @@ def test_a_dead_point_load_in_kilograms_or_decanewtons_on_a_us_job_holds_the_rat
             'lifting = "hand-geared-jib"\n')
     job = parse_job_text(text)
     assert any("metric units" in g for g in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("label, held", [('"pallet 1 (per beam)"', True),
+                                         ('"each rail"', True),
+                                         ('"pallet 1"', False),
+                                         ('"pallet on one side"', False)])
+def test_members_over_one_with_a_load_labelled_per_beam_holds_the_rating(label, held):
+    # members = 2 divides every load by 2: a load already per beam would be halved twice
+    text = ('schema = 1\ntitle = "rack pair"\ntags = ["rack"]\n[beam]\nlength = "96 in"\n'
+            'section = "HSS4x2x3/16"\nmaterial = "A500-C"\nmembers = 2\n[[supports]]\n'
+            'at = "0 in"\ntype = "pin"\n[[supports]]\nat = "96 in"\ntype = "roller"\n'
+            f'[[loads]]\ntype = "uniform"\nvalue = "-300 lbf/ft"\nlabel = {label}\n'
+            '[criteria]\nimpact = "25%"\n')
+    job = parse_job_text(text)
+    assert any("divided twice" in g or "one member's load" in g
+               for g in capacity(job).not_rated) == held

@@ -2228,6 +2228,31 @@ def _moving_dead_units(r: _Reader, raw_moving, moving, system: str) -> None:
                f"a dead wheel load of {name} is under 1 lbf: check its unit, or leave it out")
 
 
+# Words in a load's label or the notes that say its figure is already one member's share
+_PER_MEMBER = re.compile(r"\b(?:per|each) (?:beam|member|rail|arm|joist|bracket|"
+                         r"stringer)\b", re.IGNORECASE)
+
+
+def _per_member_loads(r: _Reader, raw_loads, members) -> None:
+    """`members` > 1 divides every load among the members; a load whose own label says it is
+    already per beam (or per member, per rail) would be divided twice, and the label would
+    post a member's share as the pair's: NOT RATED until the two agree."""
+    if not isinstance(members, int) or members <= 1:
+        return
+    said = [f"loads[{i}] ({ld.get('label')})" for i, ld in enumerate(raw_loads)
+            if _is_table(ld) and isinstance(ld.get("label"), str)
+            and _search(_PER_MEMBER, _as_words(ld["label"]))]
+    if said:
+        r.hold(f"members = {members} divides every load among {members} identical members, "
+               f"but {', '.join(said[:3])} say{'s' if len(said) == 1 else ''} the load is "
+               "already one member's: it would be divided twice, and the label would post a "
+               "member's share as the whole. Enter the loads for all the members together "
+               "(the pair's, the level's), or write members = 1 and rate one member",
+               f"{said[0].split(' ')[0]}.label",
+               f"members = {members}, but {said[0]} is labelled as one member's load: enter "
+               "the loads for all the members, or members = 1")
+
+
 def _load_index(key: str) -> int | None:
     m = re.fullmatch(r"loads\[(\d+)\]", key or "")
     return int(m.group(1)) if m else None
@@ -3592,8 +3617,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             self_weight = True
         members = beam.get("members", 1)
         if not isinstance(members, int) or isinstance(members, bool) or not 1 <= members <= 100:
-            r.error("members must be a whole number from 1 to 100 (identical members sharing "
-                    "the loads)", "beam.members")
+            r.error(f"members must be a whole number from 1 to 100 (identical members sharing "
+                    f"the loads), not {members!r}"
+                    + (" (a number in quotes: write members = 2)" if isinstance(members, str)
+                       else ""), "beam.members")
             members = 1
         if members > 1 and (is_lifting(tags) or data.get("moving")):
             r.warn(f"members = {members} divides the loads among identical beams, but a "
@@ -3778,6 +3805,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _dead_load_units(r, raw_loads, loads, system)
+    _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _moving_dead_units(r, data.get("moving"), moving, system)
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
