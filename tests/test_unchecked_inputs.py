@@ -602,3 +602,20 @@ def test_members_over_one_with_a_load_labelled_per_beam_holds_the_rating(label, 
     job = parse_job_text(text)
     assert any("divided twice" in g or "one member's load" in g
                for g in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("impact, held", [('"25%"', False), ('"12.5%"', False),
+                                          ('"0%"', False), ('"2.5%"', True), ("0.025", True),
+                                          ('"0.25%"', True)])
+def test_a_rack_impact_under_mh16_1_s_share_of_one_unit_load_holds_the_rating(impact, held):
+    # ANSI MH16.1 (from memory): 25 % of one unit load; two pallets entered: 12.5 % of the
+    # live load at least; "0%" says none on purpose (the label says NO IMPACT)
+    text = ('schema = 1\ntitle = "rack beam"\ntags = ["rack"]\n[beam]\nlength = "96 in"\n'
+            'section = "HSS4x2x3/16"\nmaterial = "A500-C"\n[[supports]]\nat = "0 in"\n'
+            'type = "pin"\n[[supports]]\nat = "96 in"\ntype = "roller"\n[[loads]]\n'
+            'type = "uniform"\nstart = "4 in"\nend = "44 in"\nvalue = "-300 lbf/ft"\n'
+            '[[loads]]\ntype = "uniform"\nstart = "52 in"\nend = "92 in"\nvalue = "-300 lbf/ft"\n'
+            f'[criteria]\nimpact = {impact}\n')
+    job = parse_job_text(text)
+    assert any("impact" in g and ("MH16.1" in g or "meant" in g)
+               for g in capacity(job).not_rated) == held

@@ -771,10 +771,12 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
     raw = crit.get("impact")
     if impact is not None and 0 < impact < 0.01 and isinstance(raw, str):
         # "0.25%" for 25 %: an allowance under 1 % is none a shop means
-        r.warn(f"impact = {raw!r} is read as {impact * 100:g} % ({impact:g} of the live load), "
+        r.hold(f"impact = {raw!r} is read as {impact * 100:g} % ({impact:g} of the live load), "
                f"which changes almost nothing; if you meant {impact * 1e4:g} %, write "
                f"\"{impact * 1e4:g}%\" (or {impact * 100:g}); the checks use the value "
-               "written", "criteria.impact")
+               "written, and no rating is posted on it", "criteria.impact",
+               f"impact = {raw!r} is {impact * 100:g} %: if {impact * 1e4:g} % was meant, "
+               f"write \"{impact * 1e4:g}%\"")
     if impact is not None and impact >= 1 and not isinstance(raw, str):
         # a multiplier typed for the allowance: 1.25 for "loads x 1.25" is 125 % added
         r.warn(f"impact = {raw:g} is read as {impact:.0%} added to the live loads (each live "
@@ -2251,6 +2253,25 @@ def _per_member_loads(r: _Reader, raw_loads, members) -> None:
                f"{said[0].split(' ')[0]}.label",
                f"members = {members}, but {said[0]} is labelled as one member's load: enter "
                "the loads for all the members, or members = 1")
+
+
+def _rack_impact_slip(r: _Reader, criteria, tags, loads) -> None:
+    """A storage rack's impact allowance under ANSI MH16.1's 25 % of one unit load (from
+    memory), spread over the unit loads entered (12.5 % of two pallets), but above zero: a
+    slip ("2.5%" for "25%"), so NOT RATED; "0%" said on purpose is the label's NO IMPACT."""
+    imp = criteria.impact
+    if not imp or not RACK_TAGS.intersection(normal_tag(t) for t in tags) or imp < 0.01:
+        return  # none, not a rack, or under 1 % (held already)
+    units_on = max(1, sum(1 for ld in loads if ld.case == "live" and ld.kind != "moment"))
+    least = 0.25 / units_on
+    if imp < least * (1 - 1e-9):
+        r.hold(f"impact = {imp * 100:g} % is less than ANSI MH16.1's 25 % of one unit load "
+               f"(from memory) over the {units_on} live load{'s' if units_on > 1 else ''} "
+               f"entered ({least * 100:.3g} %): a slip (\"2.5%\" for \"25%\")? No rating "
+               "is posted on it: write the allowance (\"25%\"), or \"0%\" if the rack takes "
+               "none", "criteria.impact",
+               f"impact = {imp * 100:g} % is under MH16.1's 25 % of one unit load "
+               f"({least * 100:.3g} % here): write \"25%\", or \"0%\" for none")
 
 
 def _load_index(key: str) -> int | None:
@@ -3806,6 +3827,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _dead_load_units(r, raw_loads, loads, system)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
+    _rack_impact_slip(r, criteria, tags, loads)
     _moving_dead_units(r, data.get("moving"), moving, system)
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)

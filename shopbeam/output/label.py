@@ -548,7 +548,8 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
                          "largest live stress range along the member).")
         imp = impact_of(job)
         if imp:
-            notes.insert(0, f"Includes a {imp:.0%} impact allowance on the live loads.")
+            notes.insert(0, f"Includes a {imp * 100:.3g}% impact allowance on the live "
+                         "loads.")
     sups = sorted({s.at for s in job.supports if s.kind != "hinge"})
     span = (units.fmt(job.length, "length", sy) + " (supports at "
             + ", ".join(units.fmt(x, "length", sy) for x in sups) + ")")
