@@ -619,3 +619,15 @@ def test_a_rack_impact_under_mh16_1_s_share_of_one_unit_load_holds_the_rating(im
     job = parse_job_text(text)
     assert any("impact" in g and ("MH16.1" in g or "meant" in g)
                for g in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("root, at, held", [('"36 in"', '"35 in"', True),   # reach typed
+                                            ('"0 in"', '"35 in"', False),   # root on the left
+                                            ('"36 in"', '"1 in"', False)])  # at the tip
+def test_a_cantilever_rooted_at_its_right_end_with_every_load_by_the_root_holds(root, at, held):
+    text = ('schema = 1\ntitle = "arm"\ntags = ["not-rack"]\n[beam]\nlength = "36 in"\n'
+            'section = "HSS3x2x3/16"\nmaterial = "A500-C"\nrestrained = true\n[[supports]]\n'
+            f'at = {root}\ntype = "fixed"\n[[loads]]\ntype = "point"\nat = {at}\n'
+            'value = "-500 lbf"\n')
+    job = parse_job_text(text)
+    assert any("right end" in g for g in capacity(job).not_rated) == held

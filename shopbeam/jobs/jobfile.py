@@ -2274,6 +2274,33 @@ def _rack_impact_slip(r: _Reader, criteria, tags, loads) -> None:
                f"({least * 100:.3g} % here): write \"25%\", or \"0%\" for none")
 
 
+def _root_at_the_right(r: _Reader, supports, loads, length, system: str) -> None:
+    """A cantilever held only by a fixed end at its right end, all of whose loads sit in the
+    half by that end: positions are measured from the left end (0), so loads typed as their
+    reach from the root ("35 in" on a 36 in arm) land next to the root and the arm is rated
+    as if they were. NOT RATED until the root or the positions say which."""
+    held = [sp for sp in supports if sp.takes_force]
+    if length is None or len(held) != 1 or held[0].kind != "fixed":
+        return
+    root = held[0].at
+    if root < length * (1 - 1e-9):
+        return
+    live = [ld for ld in loads if ld.case == "live" and (ld.total_force or ld.kind == "moment")]
+    far = [ld for ld in live if (ld.at if ld.kind in ("point", "moment") else ld.start)
+           < length / 2]
+    if live and not far:
+        where = units.fmt(root, "length", system)
+        r.hold(f"the only support is a fixed end at the right end ({where}), and every live "
+               "load sits in the half next to it: positions are measured from the left end "
+               "(0), so a load typed as its reach from the root lands next to the root, where "
+               "the arm carries it easily. No rating is posted on it: put the fixed end at "
+               "0 (the root on the left) if the positions are reaches from the root",
+               held[0].key + ".at",
+               f"a cantilever fixed at its right end ({where}) with every live load next to "
+               "the root: positions are from the left end; put the root at 0 if they are "
+               "reaches")
+
+
 def _load_index(key: str) -> int | None:
     m = re.fullmatch(r"loads\[(\d+)\]", key or "")
     return int(m.group(1)) if m else None
@@ -3828,6 +3855,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _dead_load_units(r, raw_loads, loads, system)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _rack_impact_slip(r, criteria, tags, loads)
+    _root_at_the_right(r, supports, loads, length, system)
     _moving_dead_units(r, data.get("moving"), moving, system)
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
