@@ -742,3 +742,14 @@ def test_an_outdoor_bracket_label_says_wind_is_not_in_the_figure():
                label.rating(capacity(job), analyze(job).unchecked).notes)
     shelf = load_job(root / "wall-shelf-brackets.toml")
     assert not any("WIND" in n for n in label.rating(capacity(shelf)).notes)
+
+
+def test_a_rating_on_a_spring_support_states_the_stiffness_it_rests_on():
+    from shopbeam.output import label
+    job = parse_job_text(
+        'schema = 1\ntitle = "rail"\ntags = ["not-rack"]\n[beam]\nlength = "10 ft"\n'
+        'section = "W8x18"\nmaterial = "A992"\nbraced = true\n[[supports]]\nat = "0 ft"\n'
+        'type = "pin"\n[[supports]]\nat = "10 ft"\ntype = "spring"\nstiffness = "5000 lbf/in"\n'
+        '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-1000 lbf"\n')
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    assert any("spring support at 10 ft (5000 lbf/in)" in n for n in r.notes), r.notes

@@ -405,9 +405,19 @@ def _held_words(job) -> list[str]:
 
 def _tag_words(job) -> list[str]:
     """What a rating rests on because a tag says so (a limit state that tag lets through
-    unchecked): the label says it, as for restraint and braces."""
+    unchecked), or a spring support's stiffness as typed: the label says it, as for
+    restraint and braces."""
     from shopbeam.design.analysis import FATIGUE_CHECKED, NO_AXIAL  # noqa: PLC0415
     out = []
+    springs = [sp for sp in job.supports if sp.kind == "spring"]
+    if springs:
+        said = ", ".join(f"{units.fmt(sp.at, 'length', job.units)} "
+                         f"({units.fmt(sp.stiffness, 'stiffness', job.units)})"
+                         for sp in springs)
+        out.append(f"RATED ONLY WHILE the spring support{'s' if len(springs) > 1 else ''} at "
+                   f"{said} {'are' if len(springs) > 1 else 'is'} as stiff as typed: a "
+                   "stiffer or softer one shares the load otherwise (check its unit: lbf/in, "
+                   "not kip/in or lbf/ft).")
     if job.lifting and NO_AXIAL in job.tags and len(
             {round(s.at, 6) for s in job.supports if s.takes_force}) >= 2:
         out.append("RATED ONLY WHILE nothing pushes or pulls the member endwise (tag "
