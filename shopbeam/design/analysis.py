@@ -307,14 +307,21 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
         top = min(fl.cap, fl.ltb1(k * (b - a))[0]) / fl.omega
         if mmax <= 0 or top >= now * (1 - 1e-9):
             continue  # the longer length changes nothing (a tube, a stocky section)
-        out.append(f"Cantilever {units.fmt(a, 'length', job.units)} to "
-                   f"{units.fmt(b, 'length', job.units)} is unbraced at its tip: checked with "
+        ends = sum(any(abs(h - x) <= tol for h in held) for x in (a, b))
+        what = (f"Cantilever {units.fmt(a, 'length', job.units)} to "
+                f"{units.fmt(b, 'length', job.units)} is unbraced at its tip" if ends < 2 else
+                f"Span {units.fmt(a, 'length', job.units)} to "
+                f"{units.fmt(b, 'length', job.units)} is not braced against twist at its "
+                "supports (springs or hangers that do not brace)")
+        out.append(f"{what}: checked with "
                    f"Lb = its length and Cb = 1.0 ({cite}), loads at the shear centre. "
                    f"If the loads bear on the top flange (destabilising), the effective length "
                    f"is about {k:g} x L ({'built-in' if fixed else 'over a support'} root, "
                    f"SSRC Guide / BS 5950-1 Table 14, from memory): bending ratio "
-                   f"{mmax / top:.2f} instead of {mmax / now:.2f}. Brace the tip (beam.braces) "
-                   "or hang the load below the shear centre.")
+                   f"{mmax / top:.2f} instead of {mmax / now:.2f}. "
+                   + ("Brace the tip (beam.braces)" if ends < 2 else
+                      "Brace it at its supports (brace = true where they hold both flanges)")
+                   + " or hang the load below the shear centre.")
     return out
 
 
