@@ -1223,3 +1223,13 @@ def test_a_line_separator_inside_a_string_does_not_shift_the_line_named():
     got = refused(text)
     want = next(n for n, ln in enumerate(text.split("\n"), start=1) if "lbf/fx" in ln)
     assert got and got[0].key == "loads[0].value" and got[0].line == want
+
+
+def test_dead_true_on_a_load_points_to_case_dead():
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = ('schema = 1\ntitle = "t"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "8 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n'
+            'dead = true\n')
+    (w,) = [p for p in parse_job_text(text).warnings if p.key == "loads[0].dead"]
+    assert 'case = "dead"' in w.message and "[[moving]]" not in w.message

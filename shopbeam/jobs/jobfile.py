@@ -512,6 +512,11 @@ class _Reader:
                             "table); move it up")
                 else:
                     hint = f": {k} belongs under " + " or ".join(_TABLES[t] for t in homes)
+            if here == "loads" and str(k).lower() in ("dead", "live", "dead_load", "permanent"):
+                # a load's case said as a key of its own: `case` says it
+                word = "live" if str(k).lower() == "live" else "dead"
+                hint = (f": a load's case is written case = \"{word}\" (dead loads stay on "
+                        "while the live loads are rated)")
             path = f"{prefix}.{k}" if prefix else k
             if homes == ["criteria"] and here != "criteria":
                 # a limit or factor written in the wrong table changes the figure unseen
@@ -521,6 +526,9 @@ class _Reader:
                           "the figure would leave it out. Move it")
                 continue
             meant = _lowering_meant(str(k), here, near, homes, table[k])
+            if meant and here == "loads" and str(k).lower() in ("dead", "dead_load",
+                                                                "permanent"):
+                meant = "case = \"dead\""
             if meant:
                 # a slip of a key that would lower the figure: rated without it, the figure
                 # would be too high (an ignored key that raises it only errs on the safe side)
