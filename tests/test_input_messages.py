@@ -1233,3 +1233,17 @@ def test_dead_true_on_a_load_points_to_case_dead():
             'dead = true\n')
     (w,) = [p for p in parse_job_text(text).warnings if p.key == "loads[0].dead"]
     assert 'case = "dead"' in w.message and "[[moving]]" not in w.message
+
+
+@pytest.mark.parametrize("second, warned", [('"8 ft"', False), ('"1/2 in"', True),
+                                            ('"4 ft"', False)])
+def test_two_supports_a_few_inches_apart_are_warned_as_a_clamp(second, warned):
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = ('schema = 1\ntitle = "t"\n[beam]\nlength = "8 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            f'at = {second}\ntype = "roller"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n')
+    if second == '"8 ft"':
+        text = text.replace('[[supports]]\nat = "8 ft"\ntype = "roller"\n', "", 1)
+    job = parse_job_text(text)
+    assert any("clamp the member" in p.message for p in job.warnings) == warned

@@ -2309,6 +2309,26 @@ def _root_at_the_right(r: _Reader, supports, loads, length, system: str) -> None
                "reaches")
 
 
+# Two supports closer than this clamp the member between them like a fixed end
+CLOSE_SUPPORTS = 3 * 0.0254  # m
+
+
+def _close_supports(r: _Reader, supports, length, system: str) -> None:
+    """Two supports that take force within a few inches of each other act together as a
+    clamp (a fixed end), with large, opposed reactions: most often one support typed twice
+    in two units, or a seat given as two supports. Warned; it errs on the safe side for the
+    member, but the reactions it prints are not a seat's."""
+    held = sorted((sp.at, sp.key) for sp in supports if sp.takes_force)
+    for (a, ka), (b, kb) in zip(held, held[1:]):
+        if 0 < b - a < min(CLOSE_SUPPORTS, 0.05 * (length or 1.0)):
+            r.warn(f"{ka} and {kb} are {units.fmt(b - a, 'small_length', system)} apart: two "
+                   "supports that close clamp the member between them like a fixed end, with "
+                   "large reactions pulling opposite ways. If one seat was meant, give one "
+                   "support (with bearing = \"...\" for its length); if a support was typed "
+                   "twice, remove one", f"{kb}.at")
+            return
+
+
 def _load_index(key: str) -> int | None:
     m = re.fullmatch(r"loads\[(\d+)\]", key or "")
     return int(m.group(1)) if m else None
@@ -3864,6 +3884,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
+    _close_supports(r, supports, length, system)
     _moving_dead_units(r, data.get("moving"), moving, system)
     _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
