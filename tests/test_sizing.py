@@ -354,3 +354,18 @@ def test_a_tube_sweep_uses_the_grade_its_product_is_bought_in_where_the_job_s_cr
     from shopbeam.members.materials import resolve_material
     got = usual_grade(resolve_material(job_grade), kind)
     assert (got.key if got is not None else None) == swept
+
+
+def test_size_rows_show_and_rank_by_the_tabulated_weight():
+    # AISC Shapes Database v15.0: W12X14 is tabulated at 14 lb/ft (area x 490 lb/ft^3 gives
+    # 14.16); HSS weights are of the nominal wall, above the design-wall area's
+    from pathlib import Path
+    from shopbeam.design.sizing import size
+    from shopbeam.jobs.jobfile import load_job
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "storage-platform-beam.toml")
+    res = size(job, "W")
+    got = {r.designation: r.weight for r in res.rows}
+    LBFT = 0.45359237 / 0.3048
+    assert got["W12X14"] == pytest.approx(14 * LBFT, rel=1e-9)
+    ws = [r.weight for r in res.rows]
+    assert ws == sorted(ws)

@@ -1113,7 +1113,9 @@ def _batched(job, base, parts, cands, with_capacity):
     # each unbraced length, principal axes); the batch leaves their bending out, so their
     # rows are a screen by the other checks (a lower bound) and are checked in full as any
     # screened row is, lightest first
-    rows = [SizeRow(r[0], r[1], r[2], r[5] / g0, float(r1[i]),
+    # ranked and shown by the tabulated weight (what is ordered and paid for); the checks'
+    # self-weight load is area x density (r[5])
+    rows = [SizeRow(r[0], r[1], r[2], r[1].weight_per_length(r[2].density), float(r1[i]),
                     names[gi[i]] or local_names[i],
                     float(k[i]) if exact and not special[i] else float("nan"), r[3], r[4],
                     checked="batched" if exact and not special[i] else "screen")
