@@ -369,3 +369,20 @@ def test_size_rows_show_and_rank_by_the_tabulated_weight():
     assert got["W12X14"] == pytest.approx(14 * LBFT, rel=1e-9)
     ws = [r.weight for r in res.rows]
     assert ws == sorted(ws)
+
+
+def test_a_gauge_tube_sweep_in_aluminium_takes_the_wall_the_job_s_own_section_takes():
+    # extruded aluminium tube: nominal wall (materials: hss_wall_factor 1.0); the sweep's
+    # ratio of a section equals the job's own solve with that section
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.sizing import size
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = ('schema = 1\ntitle = "rail"\ntags = ["not-rack"]\n[beam]\nlength = "6 ft"\n'
+            'section = "rect-tube 3 x 1-1/2 x 14ga"\nmaterial = "6061-T6"\nrestrained = true\n'
+            '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "6 ft"\n'
+            'type = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-60 lbf/ft"\n')
+    job = parse_job_text(text)
+    own = analyze(job).governing.ratio
+    row = next(r for r in size(job, "mech-tube").rows
+               if r.designation == "rect-tube 3 x 1-1/2 x 14ga")
+    assert row.ratio == pytest.approx(own, rel=1e-9)

@@ -389,7 +389,12 @@ def _candidates(job, kind, max_depth, stock):
                                                  f"in (the job's {job.material.key} is not)") if x)
             out.append((item.designation, item.section, mat, item.price_per_m, note))
     else:
+        wall = getattr(job.material, "hss_wall_factor", None)
+        relook = kind in ("mech-tube", "mech-round") and wall is not None and wall != 0.93
         for sec in catalog.list_sections(kind):
+            if relook:  # gauge tube listed at the ERW design wall: the material's own wall
+                # (nominal for DOM, stainless, aluminium), as the job's own section takes it
+                sec = catalog.lookup(sec.designation, material=job.material)
             out.append((sec.designation, sec, job.material, None, ""))
     if weak:
         out2 = []
