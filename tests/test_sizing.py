@@ -386,3 +386,22 @@ def test_a_gauge_tube_sweep_in_aluminium_takes_the_wall_the_job_s_own_section_ta
     row = next(r for r in size(job, "mech-tube").rows
                if r.designation == "rect-tube 3 x 1-1/2 x 14ga")
     assert row.ratio == pytest.approx(own, rel=1e-9)
+
+
+def test_a_fatigue_job_s_listed_rows_carry_fatigue_as_capacity_does():
+    # the live stress range is proportional to k (AISC 360-16 Appendix 3): a listed row's k
+    # is lowered to where it reaches F_SR, the figure capacity gives that section
+    from dataclasses import replace as _replace
+    from pathlib import Path
+    from shopbeam.design.capacity import capacity
+    from shopbeam.design.sizing import shown_rows, size
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = (Path(__file__).resolve().parents[1] / "presets" / "trailer-cross-member.toml") \
+        .read_text().replace("[criteria]", '[criteria]\nfatigue_category = "E"\n'
+                                           'cycles = 2000000', 1)
+    job = parse_job_text(text)
+    rows = shown_rows(size(job, "C"), top=4)
+    r = rows[1]
+    cap = capacity(_replace(job, section=r.section, material=r.material))
+    assert r.factor == pytest.approx(cap.factor, rel=1e-6)
+    assert r.governing == "fatigue" and not r.not_rated

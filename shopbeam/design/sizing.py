@@ -43,6 +43,7 @@ from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
 from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
+from shopbeam.design.fatigue import given as fatigue_given
 from shopbeam.design.checks import _design_factor
 from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
@@ -1163,7 +1164,14 @@ def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
     rows = res.passing if top is None else res.passing[:top]
     memo = res.__dict__.setdefault("_gaps", {})
     out = []
+    fat = fatigue_given(res.job)
     for r in rows:
+        if fat and r.checked != "full":
+            # the batched search leaves fatigue out: its closed form, as capacity has it
+            key = ("fatigue", r.designation)
+            if key not in memo:
+                memo[key] = _with_fatigue(res.job, r)
+            r = memo[key]
         if r.checked != "full" and not r.not_rated:
             if r.designation not in memo:
                 memo[r.designation] = _gaps_of(res.job, r)
@@ -1171,6 +1179,30 @@ def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
                 r = replace(r, not_rated=tuple(memo[r.designation]))
         out.append(r)
     return out
+
+
+def _with_fatigue(job, r: "SizeRow") -> "SizeRow":
+    """A listed row of a job that gives fatigue_category and cycles, with fatigue in: its
+    ratio at the entered loads, and its factor lowered to where the live stress range
+    reaches the allowable (the range is proportional to k, as `capacity._fatigue_cap` takes
+    it). The row as it was where fatigue is not worked out (a gap then says so)."""
+    j = replace(job, section=r.section, material=r.material)
+    try:
+        ss = state_set(j)
+        st = strengths(j, beam=ss.beam)
+        f1 = fatigue_check(j, st, ss, 1.0)
+        if f1 is None:
+            return r
+        out = r
+        if f1.ratio > r.ratio:
+            out = replace(out, ratio=f1.ratio, governing=f1.name)
+        if math.isfinite(r.factor) and r.factor > 0:
+            fk = fatigue_check(j, st, ss, r.factor)
+            if fk is not None and fk.ratio > 1:
+                out = replace(out, factor=r.factor / fk.ratio * (1 - 1e-12))
+        return out
+    except (InputError, ValueError, ZeroDivisionError, KeyError, TypeError):
+        return r
 
 
 def _gaps_of(job, r: "SizeRow", any_only: bool = False) -> tuple[str, ...]:
