@@ -405,3 +405,15 @@ def test_a_fatigue_job_s_listed_rows_carry_fatigue_as_capacity_does():
     cap = capacity(_replace(job, section=r.section, material=r.material))
     assert r.factor == pytest.approx(cap.factor, rel=1e-6)
     assert r.governing == "fatigue" and not r.not_rated
+
+
+def test_size_of_a_job_with_no_live_loads_says_there_is_nothing_to_rate():
+    from pathlib import Path
+    from shopbeam.design.sizing import size
+    from shopbeam.jobs.jobfile import load_job
+    from shopbeam.output.sizingreport import render
+    root = Path(__file__).resolve().parents[1] / "presets"
+    dead = " ".join(render(size(load_job(root / "sign-bracket.toml"), "HSS-round")).split())
+    assert "the job has no live loads" in dead
+    live = " ".join(render(size(load_job(root / "demo.toml"), "W")).split())
+    assert "the job has no live loads" not in live

@@ -41,6 +41,11 @@ def render(res: SizeResult, top: int = 15) -> str:
     if res.lightest:
         lines.append(f"lightest that passes: {res.lightest.designation} "
                      f"({units.fmt(res.lightest.weight, 'mass_per_length', sy)})")
+        if not any(ld.case == "live" for ld in job.loads) and not job.moving:
+            lines += wrap("!! the job has no live loads: the sections listed pass under the "
+                          "loads entered, but there is nothing to rate (no load to post); "
+                          "enter the load to rate as a live load", 78,
+                          subsequent_indent="!! ")
         if getattr(res.lightest, "not_rated", ()):
             lines += wrap(
                 "!! but it passes only the checks that were made: a limit state it calls for "
