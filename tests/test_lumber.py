@@ -678,6 +678,14 @@ def test_the_repetitive_member_factor_needs_the_spacing_shown(load, title, held)
     ("Rack joist for annealed wire stock", "", False),
     ("Shelf over the wood stove", "", True),
     ("Drying shelf at 140 \u00baF", "", True),
+    # words that are not the member's service (a span's place, stored goods, a tarp)
+    ("Outdoor deck joist, interior span of three", "", True),
+    ("Outdoor lumber rack joist, covered by a tarp in winter only", "", True),
+    ("Joist, 12 ft outside to outside", "", False),
+    ("Shelf joist for heat-treated pallets", "", False),
+    ("Joist under the wet-pipe sprinkler main", "", False),
+    ("Rain gear shelf joist", "", False),
+    ("Boiler parts shelf joist", "", False),
     # heat said in a metal shop's words
     ("Shelf joist over the forge", "", True),
     ("Foundry pattern shelf beam", "", True),

@@ -2119,9 +2119,11 @@ TINY_DEAD_LINE = 4.4482216152605 / 0.3048  # 1 lbf/ft, N/m
 def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
     """A dead load typed in metric force units on a job in US units (N for lbf is 4.45 times
     too light, and the rating counts on the dead load it holds fixed), and a dead load too
-    light to be real (under 1 lbf or 1 lbf/ft): a unit slip, so NOT RATED. (A live load in
+    light to be real (under 1 lbf or 1 lbf/ft and under a thousandth of the largest live load):
+    a unit slip, so NOT RATED. (A live load in
     the other system's units is left alone: the label posts it in the job's units, and N
     typed for lbf only makes the entered load larger, on the safe side.)"""
+    live_max = max((abs(x.total_force) for x in loads if x.case == "live"), default=0.0)
     for ld in loads:
         i = _load_index(ld.key)
         raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
@@ -2144,6 +2146,10 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
             continue
         if ld.case != "dead" or ld.kind == "moment" \
                 or any(p.key == f"{ld.key}.value" for p in r.problems):  # said already
+            continue
+        # a light fitting (an LED strip, a clip) is real: only a dead load under a
+        # thousandth of the largest live load is too light to be what was meant
+        if abs(ld.total_force) >= 1e-3 * live_max:
             continue
         if ld.kind == "point":
             tiny = 0 < abs(ld.value) < TINY_DEAD_POINT
@@ -2239,8 +2245,8 @@ def _moving_dead_units(r: _Reader, raw_moving, moving, system: str) -> None:
 
 
 # Words in a load's label or the notes that say its figure is already one member's share
-_PER_MEMBER = re.compile(r"\b(?:per|each) (?:beam|member|rail|arm|joist|bracket|"
-                         r"stringer)\b", re.IGNORECASE)
+_PER_MEMBER = re.compile(r"\bper (?:beam|member|rail|arm|joist|stringer)\b(?! pair| set)",
+                         re.IGNORECASE)
 
 
 def _per_member_loads(r: _Reader, raw_loads, members) -> None:
@@ -2270,7 +2276,8 @@ def _rack_impact_slip(r: _Reader, criteria, tags, loads) -> None:
     imp = criteria.impact
     if not imp or not RACK_TAGS.intersection(normal_tag(t) for t in tags) or imp < 0.01:
         return  # none, not a rack, or under 1 % (held already)
-    units_on = max(1, sum(1 for ld in loads if ld.case == "live" and ld.kind != "moment"))
+    # a rack level holds two unit loads at least (one spread load entered for both)
+    units_on = max(2, sum(1 for ld in loads if ld.case == "live" and ld.kind != "moment"))
     least = 0.25 / units_on
     if imp < least * (1 - 1e-9):
         r.hold(f"impact = {imp * 100:g} % is less than ANSI MH16.1's 25 % of one unit load "
@@ -2286,7 +2293,7 @@ def _root_at_the_right(r: _Reader, supports, loads, length, system: str) -> None
     """A cantilever held only by a fixed end at its right end, all of whose loads sit in the
     half by that end: positions are measured from the left end (0), so loads typed as their
     reach from the root ("35 in" on a 36 in arm) land next to the root and the arm is rated
-    as if they were. NOT RATED until the root or the positions say which."""
+    as if they were. Warned (a load truly near the root is rated the same either way)."""
     held = [sp for sp in supports if sp.takes_force]
     if length is None or len(held) != 1 or held[0].kind != "fixed":
         return
@@ -2298,15 +2305,12 @@ def _root_at_the_right(r: _Reader, supports, loads, length, system: str) -> None
            < length / 2]
     if live and not far:
         where = units.fmt(root, "length", system)
-        r.hold(f"the only support is a fixed end at the right end ({where}), and every live "
+        r.warn(f"the only support is a fixed end at the right end ({where}), and every live "
                "load sits in the half next to it: positions are measured from the left end "
                "(0), so a load typed as its reach from the root lands next to the root, where "
-               "the arm carries it easily. No rating is posted on it: put the fixed end at "
-               "0 (the root on the left) if the positions are reaches from the root",
-               held[0].key + ".at",
-               f"a cantilever fixed at its right end ({where}) with every live load next to "
-               "the root: positions are from the left end; put the root at 0 if they are "
-               "reaches")
+               "the arm carries it easily. Check them: put the fixed end at 0 (the root on "
+               "the left) if the positions are reaches from the root",
+               held[0].key + ".at")
 
 
 # Two supports closer than this clamp the member between them like a fixed end
@@ -2385,8 +2389,12 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     # a jib by its profile, or named so (a knee-braced jib held at two places is guessed a
     # monorail, but its hoist still runs out along the boom)
     jib = "jib" in name or "jib" in {normal_tag(t) for t in tags}
-    reach = length - held[-1] if held else 0.0
-    if jib and held and ld.at >= held[-1] + min(0.9 * reach, reach - 0.305):
+    # the reach runs from the outer support to the free end, whichever end that is (a jib
+    # drawn with its mast at the right end reaches out to 0)
+    left_free = bool(held) and held[0] > 0 and held[-1] >= length * (1 - 1e-9)
+    reach = (held[0] if left_free else length - held[-1]) if held else 0.0
+    out = (held[0] - ld.at if left_free else ld.at - held[-1]) if held else 0.0
+    if jib and held and out >= min(0.9 * reach, reach - 0.305):
         return  # at the end of the reach (an end stop up to a foot short of the tip)
     at = units.fmt(ld.at, "length", system)
     runout = max(held[0], length - held[-1]) if held else 0.0
@@ -2677,13 +2685,22 @@ def _profile_contradicted(r: _Reader, crit_raw, raw_loads, title, notes, tags,
         # trolley's own weight (or part of the hook load), which hangs on the wheels; with no
         # hook hung below, a live load on top is the hook load itself. A live load on top
         # beside a hook that hangs below is something else (a tray bearing on the beam)
-        hooks = {str(ld.get("at")).strip() for ld in raw_loads
-                 if _is_table(ld) and ld.get("type") == "point" and ld.get("flange") != "top"
-                 and ld.get("case", "live") == "live"}
+        def at(ld):  # the position in metres (None when it cannot be read: said elsewhere)
+            try:
+                return round(units.parse(ld.get("at"), "length", "at"), 6)
+            except (InputError, TypeError, ValueError):
+                return None
+
+        points = [ld for ld in raw_loads if _is_table(ld) and ld.get("type") == "point"]
+        below = [ld for ld in points if ld.get("flange") != "top"]
+        hooks = {at(ld) for ld in below if ld.get("case", "live") == "live"} - {None}
+        weights = {at(ld) for ld in below if ld.get("case", "live") == "dead"} - {None}
         for i, ld in enumerate(raw_loads):
+            # a dead load on top at a hook whose own weight already hangs below is a fitting
             if (_is_table(ld) and ld.get("type") == "point" and ld.get("flange") == "top"
                     and ((ld.get("case", "live") == "live" and not hooks)
-                         or str(ld.get("at")).strip() in hooks)):
+                         or (at(ld) in hooks and (ld.get("case", "live") == "live"
+                                                  or at(ld) not in weights)))):
                 who = (f"the profile tags = [\"lifting\"] picks for this span, \"{name}\","
                        if guessed else f"lifting = \"{name}\"")
                 r.hold(f"flange = \"top\" puts this load on the top flange, but {who} "
@@ -3361,15 +3378,17 @@ _WOOD_KEYS = (("wet_service", "beam"), ("temperature", "beam"), ("repetitive", "
 # memory), so a figure without them is too high (a deck joist "exposed to rain" had been
 # posted 17 % high, a loft joist "over the heat-treat furnace, about 120F" 31 %)
 _WET_WORDS = re.compile(
-    r"\b(outdoors?|outside(?! (?:dimensions?|of|face|corners?|diameter|width|edges?|the|"
-    r"walls?))|patios?|(?:boat|floating) docks?|not covered|"
+    r"\b(outdoors?|(?<!to )outside(?! (?:dimensions?|of|face|corners?|diameter|width|edges?|the|"
+    r"walls?|to))|patios?|(?:boat|floating) docks?|not covered|"
     r"exterior(?! walls?| face| dimensions?)|exposed to (?:the )?(?:rain|weather|elements|"
     r"moisture|water)|(?:in|out in) the (?:rain|weather|elements)|weathered|"
-    r"rain(?:s|ed|ing|water|fall)?|wet(?! bar| saws?)|ground contact|in contact with the ground|"
+    r"rain(?:s|ed|ing|water|fall)?(?! gear| coats?| jackets?| suits?)|"
+    r"wet(?! bar| saws?|[- ]pipe)|ground contact|in contact with the ground|"
     r"uncovered|open[- ]air|backyard|boardwalk|pergola|balcony|outdoor deck|humid\w*|"
     r"condensation)\b", re.IGNORECASE)
 _HOT_WORDS = re.compile(
-    r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?|heat[- ]treat\w*|smelter|saunas?|"
+    r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?(?! parts?)|"
+    r"heat[- ]treat(?!ed (?:pallets?|parts?|stock|steel|bars?))\w*|smelter|saunas?|"
     r"smoke ?houses?|drying rooms?|forges?|foundry|foundries|wood ?stoves?|"
     r"steam (?:pipes?|lines?|heat\w*)|"
     r"(?:10[1-9]|1[1-9]\d|[2-9]\d\d)\s*(?:[\u00b0\u00ba]\s*f?|f|deg\w*\.?(?:\s*f)?(?!\s*c\b))|"
@@ -3378,8 +3397,10 @@ _HOT_WORDS = re.compile(
 # ...and words that say the member is dry and at room temperature all the same: said of the
 # whole member (anywhere in the words), or of a place (only in the phrase of the wet or hot
 # word: "mezzanine stair landing outside, exposed to rain" is wet by its second phrase)
-_DRY_WORDS = re.compile(r"\b(interior|indoors?|inside (?:the )?(?:building|shop|warehouse)|"
-                        r"under (?:the )?roof|covered|enclosed|conditioned|"
+_DRY_WORDS = re.compile(r"\b(interior(?! (?:spans?|supports?|bays?|joists?|beams?|rails?|"
+                        r"posts?|stringers?))|indoors?|inside (?:the )?(?:building|shop|"
+                        r"warehouse)|under (?:the )?roof|covered(?! (?:by|with) (?:a )?tarps?)|"
+                        r"enclosed|conditioned|"
                         r"weather[- ]?(?:tight|protected|proof)|dry storage|kept dry|"
                         r"stays dry)\b", re.IGNORECASE)
 _DRY_NEAR = re.compile(r"\b(heated)\b", re.IGNORECASE)
