@@ -40,7 +40,7 @@ from shopbeam.design.loading import read_moving
 from shopbeam.engine.solver import sound_solve
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.jobs.rules import rack_arm
-from shopbeam.output.present import present_capacity, wrap
+from shopbeam.output.present import design_wall, present_capacity, wrap
 
 BASIS_SHORT = {"asd": "AISC 360-16 ASD", "first-yield": "first yield",
                "aluminum": "ADM 2015 ASD", "lumber": "NDS 2018 ASD"}
@@ -288,11 +288,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
 
 def _wall_words(job, sy) -> str:
     """A typed-in tube's design wall, which the posted load rests on (AISC 360-16 B4.2)."""
-    d = getattr(job.section, "dims", None) or {}
-    src = getattr(job.section, "source", "") or ""
-    if "t_des" not in d or "design wall" not in src or "computed from dimensions" not in src:
-        return ""  # a catalog HSS's design wall is the published one
-    return f", design wall {units.fmt(d['t_des'], 'small_length', sy)}"
+    got = design_wall(job.section)
+    return f", design wall {units.fmt(got[0], 'small_length', sy)}" if got else ""
 
 
 def _stands(sec) -> str:

@@ -252,3 +252,29 @@ def present_capacity(cap) -> CapacityPresentation:
         governing=f"{g.name}, ratio {g.ratio:.3f}" if g else "",
         governing_name=g.name if g else "", governing_state=words, envelope=env,
         uplift=uplift_lines(env=env))
+
+
+def design_wall(sec) -> tuple[float, float, str] | None:
+    """(design wall, nominal wall, the rule in words) of a tube whose wall shopbeam set from
+    its dimensions and grade (AISC 360-16 B4.2: typed in, or gauge stock), which a posted
+    load rests on; None for other sections (a catalog HSS's design wall is the published
+    one)."""
+    d = getattr(sec, "dims", None) or {}
+    src = getattr(sec, "source", "") or ""
+    if "t_des" not in d or "t_nom" not in d or "design wall" not in src \
+            or "computed from dimensions" not in src:
+        return None
+    i = src.index("design wall")
+    depth, j = 0, i
+    while j < len(src):  # to the "; " or ")" that closes the rule (its own brackets kept)
+        ch = src[j]
+        if ch == "(":
+            depth += 1
+        elif ch == ")":
+            if depth == 0:
+                break
+            depth -= 1
+        elif ch == ";" and depth == 0:
+            break
+        j += 1
+    return d["t_des"], d["t_nom"], src[i:j].strip()

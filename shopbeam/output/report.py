@@ -8,7 +8,8 @@ from __future__ import annotations
 
 from shopbeam import units
 from shopbeam.design.analysis import Result
-from shopbeam.output.present import present, upward_note, warnings_headline, wrap
+from shopbeam.output.present import (design_wall, present, upward_note,
+                                     warnings_headline, wrap)
 
 WIDTH = 78
 
@@ -16,29 +17,14 @@ CHECK_KINDS = units.CHECK_KINDS
 
 
 def _design_wall(sec, f) -> str:
-    """A typed-in tube's design wall and the rule that set it (AISC 360-16 B4.2), for the
-    MEMBER lines: a posted load rests on it. Empty for other sections."""
-    d = getattr(sec, "dims", None) or {}
-    src = getattr(sec, "source", "") or ""
-    if "t_des" not in d or "t_nom" not in d or "design wall" not in src \
-            or "computed from dimensions" not in src:
-        return ""  # a catalog HSS's design wall is the published one
-    i = src.index("design wall")
-    depth, j = 0, i
-    while j < len(src):  # to the "; " or ")" that closes the rule (its own brackets kept)
-        ch = src[j]
-        if ch == "(":
-            depth += 1
-        elif ch == ")":
-            if depth == 0:
-                break
-            depth -= 1
-        elif ch == ";" and depth == 0:
-            break
-        j += 1
-    rule = src[i:j].strip()
-    return (f"wall: design t = {f(d['t_des'], 'small_length')} of nominal "
-            f"{f(d['t_nom'], 'small_length')}, {rule}")
+    """A typed-in tube's design wall and its rule (`present.design_wall`), for the MEMBER
+    lines: a posted load rests on it. Empty for other sections."""
+    got = design_wall(sec)
+    if got is None:
+        return ""
+    t_des, t_nom, rule = got
+    return (f"wall: design t = {f(t_des, 'small_length')} of nominal "
+            f"{f(t_nom, 'small_length')}, {rule}")
 
 
 def _wrap(text: str, indent: str = "  ", width: int = WIDTH) -> list[str]:
