@@ -42,9 +42,22 @@ def field(app, view: str, key: str) -> Field:
     return next(f for f in app.job_screen.query_one(f"#{view}").query(Field) if f.key == key)
 
 
-def demo_copy(tmp_path) -> Path:
+DEMO_TITLE = 'title = "Loft beam over the saw bay, with stair overhang"'
+DEMO_NOTES = 'notes = "Demo job. A building member: needs review by a licensed engineer."'
+
+
+def demo_copy(tmp_path, title: str | None = None, notes: str | None = None) -> Path:
+    """The demo job in tmp_path; `title` and `notes`, TOML strings as written in the file,
+    replace the demo's own."""
     path = tmp_path / "demo.toml"
     shutil.copy(PRESETS / "demo.toml", path)
+    if title is not None or notes is not None:
+        text = path.read_text(encoding="utf-8")
+        for line, value, key in ((DEMO_TITLE, title, "title"), (DEMO_NOTES, notes, "notes")):
+            if value is not None:
+                assert line in text
+                text = text.replace(line, f"{key} = {value}")
+        path.write_text(text, encoding="utf-8")
     return path
 
 
@@ -1279,13 +1292,8 @@ async def test_every_kind_of_line_break_is_shown_and_kept_through_an_edit(tmp_pa
     # a carriage return, a Unicode line separator or a NEL in a title or notes had been
     # invisible in the field, and an edit at the end of the text had turned one into a space
     # and dropped another: each shows as a mark of its own and is saved as it was
-    path = demo_copy(tmp_path)
-    text = path.read_text(encoding="utf-8").replace(
-        'title = "Loft beam over the saw bay, with stair overhang"',
-        'title = "Loft beam\\rover the bay\\u2028x\\r\\ny"').replace(
-        'notes = "Demo job. A building member: needs review by a licensed engineer."',
-        'notes = "tab\\there\\u000bvt\\u000cff\\u0085nel\\u2029par end"')
-    path.write_text(text, encoding="utf-8")
+    path = demo_copy(tmp_path, title='"Loft beam\\rover the bay\\u2028x\\r\\ny"',
+                     notes='"tab\\there\\u000bvt\\u000cff\\u0085nel\\u2029par end"')
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
@@ -1307,10 +1315,7 @@ async def test_every_kind_of_line_break_is_shown_and_kept_through_an_edit(tmp_pa
 
 @sync
 async def test_a_return_symbol_typed_in_a_one_line_title_stays_a_character(tmp_path):
-    path = demo_copy(tmp_path)
-    text = path.read_text(encoding="utf-8").replace(
-        'title = "Loft beam over the saw bay, with stair overhang"', 'title = "Press ⏎ to open"')
-    path.write_text(text, encoding="utf-8")
+    path = demo_copy(tmp_path, title='"Press ⏎ to open"')
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
@@ -1450,10 +1455,7 @@ def test_a_typed_return_symbol_beside_a_real_line_break_stays_a_character():
 
 @sync
 async def test_a_mark_deleted_and_typed_again_is_the_line_break_it_was(tmp_path):
-    path = demo_copy(tmp_path)
-    text = path.read_text(encoding="utf-8").replace(
-        'title = "Loft beam over the saw bay, with stair overhang"', 'title = "Bay\\fone"')
-    path.write_text(text, encoding="utf-8")
+    path = demo_copy(tmp_path, title='"Bay\\fone"')
     app = make_app(path, cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
