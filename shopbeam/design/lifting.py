@@ -49,6 +49,7 @@ from functools import lru_cache
 
 import numpy as np
 
+from shopbeam.design import fatigue
 from shopbeam.design.basis import basis_of, tip_hung  # noqa: F401 (re-exported)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.engine.model import Load
@@ -454,7 +455,6 @@ def lifting_unchecked(job, sec) -> list:
     and fatigue, which no lifting check here covers."""
     if not (job.lifting or getattr(job.criteria, "lifting", "")):
         return []
-    from shopbeam.design import fatigue
     # fatigue_category and cycles given and worked out: the fatigue check stands instead
     return ([] if fatigue.checked(job) else [FATIGUE]) + _lifting_unchecked(job, sec)
 

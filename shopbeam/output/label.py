@@ -34,7 +34,9 @@ from html import escape
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
 from shopbeam.design import fatigue
-from shopbeam.design.analysis import JUDGED_AT_RATED_LOAD, couple_notes, flange_word
+from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
+                                      couple_notes, flange_word, is_outdoor)
+from shopbeam.design.basis import tip_hung
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.solver import sound_solve
@@ -386,7 +388,6 @@ def _held_words(job) -> list[str]:
     if job.lifting and bf and not job.moving:
         # a hoist given as a point load hung on the flange tips within a flange width of an
         # end (a jib's hoist at the end of its reach): the same flange-end condition
-        from shopbeam.design.lifting import tip_hung
         tips = set(tip_hung(job))
         near = sorted({ld.at for ld in job.loads if ld.key in tips and ld.kind == "point"
                        and ld.value and (ld.at < bf or ld.at > job.length - bf)})
@@ -404,7 +405,6 @@ def _tag_words(job) -> list[str]:
     """What a rating rests on because a tag says so (a limit state that tag lets through
     unchecked), or a spring support's stiffness as typed: the label says it, as for
     restraint and braces."""
-    from shopbeam.design.analysis import FATIGUE_CHECKED, NO_AXIAL  # noqa: PLC0415
     out = []
     springs = [sp for sp in job.supports if sp.kind == "spring"]
     if springs:
@@ -420,7 +420,6 @@ def _tag_words(job) -> list[str]:
         out.append("RATED ONLY WHILE nothing pushes or pulls the member endwise (tag "
                    "no-axial: slings hang plumb, no tie rod or knee brace; axial force is not "
                    "checked here).")
-    from shopbeam.design.analysis import is_outdoor  # noqa: PLC0415
     if is_outdoor(job):
         out.append("WIND is not in this figure: out of doors the member also takes wind, "
                    "sideways and as uplift that reverses the bending (ASCE 7 and the local "
@@ -446,7 +445,6 @@ def _weld_words(job, cap) -> list[str]:
     q = v * q_flange / sec.ix  # N/m
     flow = (f"{q / (4.4482216152605 / 0.0254):,.0f} lbf/in" if job.units == "us"
             else f"{q / 1000:,.0f} N/mm")
-    from shopbeam.design.basis import tip_hung  # noqa: PLC0415
     hung = bool(getattr(job, "hung", ()))
     return [f"RATED ONLY WHILE the flange-to-web welds carry a shear flow of {flow} (V Q / I "
             "at the rated load, both welds of a flange together; welds are not checked here): "

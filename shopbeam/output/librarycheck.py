@@ -11,7 +11,6 @@ from __future__ import annotations
 
 import csv
 import io
-import textwrap
 from dataclasses import dataclass
 
 from shopbeam import cautions
@@ -21,6 +20,7 @@ from shopbeam.errors import InputError, InputErrors, UnstableBeam
 from shopbeam.jobs import library
 from shopbeam.jobs.jobfile import parse_job_text
 from shopbeam.output import label
+from shopbeam.output.present import wrap
 
 COLUMNS = ("job", "title", "governing", "ratio", "result", "rated_load", "problem", "caution")
 
@@ -114,7 +114,7 @@ def to_text(rows: list[Row], width: int = 120) -> str:
              ("LIFTING DEVICE, not for service without engineer design and load test: "
               if r.lifting else "") + r.rated_load] for r in rows]
     widths = [max(len(x[i]) for x in data + [heads]) for i in range(len(heads) - 1)]
-    lines = textwrap.wrap(cautions.SCREENING, min(width, 100)) + [""]
+    lines = wrap(cautions.SCREENING, min(width, 100)) + [""]
     for row in [heads] + data:
         lines.append("  ".join(c.ljust(w) for c, w in zip(row[:-1], widths)) + "  " + row[-1])
     n_fail = sum(r.result == "FAIL" for r in rows)
