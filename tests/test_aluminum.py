@@ -344,3 +344,4 @@ def test_a_thin_round_aluminium_tube_in_bending_takes_the_curved_wall_buckling_s
     bend = next(c for c in cap.evaluation.checks if c.name == "bending")
     assert bend.limit / 4.4482216152605 / 0.3048 == pytest.approx(ma, rel=2e-3)
     assert "B.5.5.4" in bend.formula
+    assert bend.clause == "ADM 2015 B.5.5.4, curved wall in flexure"  # the provision used

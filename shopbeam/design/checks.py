@@ -1450,7 +1450,7 @@ def provenance(basis: str, text: str, what: str) -> dict:
         return {"clause": clause, "source": source}
     if basis == "aluminum":
         # the governing provision leads the strength text ("ADM 2015 F.8 local buckling ...")
-        m = re.match(r"ADM 2015 ([FG](?:\.\d+)?):? ([a-z ]+?)(?::| \(|,|$)", text)
+        m = re.match(r"ADM 2015 ([BFG](?:\.\d+)*):? ([a-z ]+?)(?::| \(|,|$)", text)
         if m and m.group(1) != "G":
             clause = f"ADM 2015 {m.group(1)}, {m.group(2).strip()}"
         elif what == "bending":
