@@ -1247,3 +1247,31 @@ def test_two_supports_a_few_inches_apart_are_warned_as_a_clamp(second, warned):
         text = text.replace('[[supports]]\nat = "8 ft"\ntype = "roller"\n', "", 1)
     job = parse_job_text(text)
     assert any("clamp the member" in p.message for p in job.warnings) == warned
+
+
+# --------------------------------------------- units = "metric", flange on a spread load
+def test_units_metric_names_si_and_is_not_also_warned_as_other_system_values():
+    text = cantilever().replace('tags = ["rack"]', 'tags = ["rack"]\nunits = "metric"')
+    text = text.replace('"36 in"', '"0.9 m"').replace('"0 in"', '"0 m"')
+    problems = refused(text)
+    assert [p.key for p in problems] == ["units"]
+    assert 'write units = "si"' in problems[0].message
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    # the values in metres are what the job meant: no "typed in metric units on a job in US
+    # units" warning on top of the units error
+    assert not any("other system" in p.message for p in e.value.problems)
+
+
+def test_flange_bottom_on_a_spread_load_says_it_is_read_on_point_loads_only():
+    text = cantilever().replace('''type = "point"
+at = "0 in"
+value = "-2000 lbf"''', '''type = "uniform"
+start = "0 in"
+end = "36 in"
+value = "-60 lbf/ft"
+flange = "bottom"''')
+    w = warned(parse_job_text(text), "loads[0].flange")
+    assert len(w) == 1
+    assert "point loads only" in w[0].message and "top flange" in w[0].message
+    assert "point loads at its hangers" in w[0].message

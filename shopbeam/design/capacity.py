@@ -600,7 +600,8 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                        f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
                        "F1, from memory; the check takes them at the shear centre). Brace the "
                        "member at the loads (beam.braces), or hang them below the flange "
-                       "(flange = \"bottom\")")
+                       "(flange = \"bottom\" on a point load; a spread load hung below goes "
+                       "in as point loads at its hangers)")
     return tuple(out)
 
 

@@ -1333,7 +1333,12 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         r.error("uplift must be true or false (true: this load is meant to push up)",
                 f"{key}.uplift")
     common = dict(label=label, case=case, key=key, patterned=patterned)
-    if kind != "point" and ("bearing" in ld or "flange" in ld):
+    if kind != "point" and ld.get("flange") == "bottom":
+        r.warn("flange = \"bottom\" is read on point loads only: this spread load is taken as "
+               "bearing on the top flange (so is its lateral-torsional buckling). To hang it "
+               "below the member, enter it as point loads at its hangers or clamps, each with "
+               "flange = \"bottom\"", f"{key}.flange")
+    elif kind != "point" and ("bearing" in ld or "flange" in ld):
         r.warn("bearing and flange describe a point load where it meets the member; "
                f"this {kind} load ignores them", f"{key}.{'bearing' if 'bearing' in ld else 'flange'}")
     if not _placement_keys(r, ld, kind, key):
@@ -3646,7 +3651,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         notes = ""
     system = data.get("units", "us")
     if system not in ("us", "si"):
-        r.error(f"units {system!r} must be \"us\" or \"si\"", "units")
+        low = system.strip().lower() if isinstance(system, str) else ""
+        meant = ("si" if low in ("metric", "si", "mks", "mm", "m", "kn", "kn-m", "n", "eu")
+                 else "us" if low in ("us", "imperial", "usc", "english", "in", "ft", "lb",
+                                      "lbf", "kip", "kips") else "")
+        r.error(f"units {system!r} must be \"us\" (feet, inches, lbf) or \"si\" (metres, mm, "
+                f"N, kN)" + (f": write units = \"{meant}\"" if meant else ""), "units")
         system = "us"
     r.system = system
     tags = data.get("tags", [])
@@ -3928,7 +3938,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _rack_fixed_ends(r, tags, supports, length)
     _glulam_words(r, title, notes, tags, material, data)
     _length_in_other_units(r, data)
-    _mixed_unit_systems(r, data, system)  # after the rules that name a value's unit
+    if data.get("units", "us") in ("us", "si"):  # a wrong units = ... is its own error
+        _mixed_unit_systems(r, data, system)  # after the rules that name a value's unit
     _odd_springs(r, supports, section, material, length, system)
     _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
