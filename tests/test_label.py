@@ -753,3 +753,56 @@ def test_a_rating_on_a_spring_support_states_the_stiffness_it_rests_on():
         '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-1000 lbf"\n')
     r = label.rating(capacity(job), analyze(job).unchecked)
     assert any("spring support at 10 ft (5000 lbf/in)" in n for n in r.notes), r.notes
+
+
+def _shelf_tube(extra_support: str = "", length: str = "8 ft", deflection: str = "L/180") -> str:
+    return f"""schema = 1
+title = "Tube shelf beam"
+[beam]
+length = "{length}"
+section = "HSS4x2x1/8"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "pin"
+{extra_support}
+[[supports]]
+at = "8 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "8 ft"
+value = "-100 lbf/ft"
+[criteria]
+deflection = "{deflection}"
+"""
+
+
+def test_a_governing_local_check_without_a_bearing_length_says_where_and_what_to_give():
+    # the wall's local yielding at an end support governs with the bearing length not given
+    # (taken as a knife edge): the bare name would read as a weak member
+    shelf = _shelf_tube(deflection="L/120").replace("HSS4x2x1/8", "HSS6x6x1/8")
+    cap = capacity(parse_job_text(shelf))
+    assert cap.governing.name == "wall local yielding"
+    text = _flat(cap)
+    assert "Governing check: wall local yielding at the pin support at 0 ft: bearing length " \
+           "not given, taken as 0 in; give bearing" in text
+    # with the seat given, the words go (the bearing length is no longer the least)
+    cap2 = capacity(parse_job_text(shelf.replace(
+        'type = "pin"', 'type = "pin"\nbearing = "4 in"').replace(
+        'type = "roller"', 'type = "roller"\nbearing = "4 in"')))
+    assert "bearing length not given" not in _flat(cap2)
+
+
+def test_a_governing_overhang_deflection_names_its_limit_on_twice_the_length():
+    cap = capacity(parse_job_text(_shelf_tube(length="8.5 ft", deflection="L/180").replace(
+        'type = "pin"', 'type = "pin"\nbearing = "4 in"').replace(
+        'type = "roller"', 'type = "roller"\nbearing = "4 in"')))
+    g = cap.governing
+    assert g.name == "deflection" and g.detail.startswith("overhang")
+    text = _flat(cap)
+    limit_in = 2 * 6 / 180  # twice the 6 in overhang / 180 (the contract's rule)
+    assert f"Governing check: deflection limit {limit_in:.4g} in on the overhang 8 ft to " \
+           "8.5 ft (2 x overhang length / 180, i.e. its tip may move overhang length / 90)" \
+           in text

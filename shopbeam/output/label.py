@@ -79,6 +79,7 @@ class Rating:
     warnings: tuple[str, ...] = ()  # input warnings, "key: what"
     lifting_profile: str = ""  # the lifting profile the rating used (design.lifting.profile_of)
     governing_state: str = ""  # the load state that governs at the rated load ("": one state)
+    governing_how: str = ""  # where and on what the governing check was judged, when it matters
     uplift: tuple[str, ...] = ()  # supports the rated load pulls down, in words
     uplift_head: str = "UPLIFT at the rated load: anchor"
     # the full-page plaque: what each support carries at the rated load (the largest up and
@@ -430,6 +431,26 @@ def _tag_words(job) -> list[str]:
     return out
 
 
+def _governing_how(job, cap) -> str:
+    """Where and on what the governing check was judged, where a shop could misread the bare
+    name: a deflection limit (a cantilever's or overhang's is taken on twice its length, so
+    its tip may move length / (n / 2)), or a local check at a support or load whose bearing
+    length was not given (taken as the least, so giving it can lift the figure)."""
+    g = cap.governing if cap.evaluation is not None else None
+    if g is None:
+        return ""
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    if g.name in ("deflection", "live deflection") and g.detail:
+        return f"limit {f(g.limit, 'small_length')} on the {g.detail}"
+    if "bearing length not given" in (g.detail or ""):
+        place = g.detail.split(":")[0].split(" (")[0]
+        lb = (g.params or {}).get("lb")
+        took = f", taken as {f(lb, 'small_length')}" if lb is not None else ""
+        return (f"at the {place}: bearing length not given{took}; give bearing = \"...\" "
+                "(the seat or plate it bears on) if it is longer")
+    return ""
+
+
 def _weld_words(job, cap) -> list[str]:
     """A welded built-up I-section (typed in by its plates): the rating rests on the
     flange-to-web welds carrying the shear flow q = V Q / I at the rated load (AISC 360-16
@@ -572,6 +593,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
                        if getattr(p, "warning", False)),
         lifting_profile=_profile_name(job),
         governing_state=pc.governing_state if status == "rated" else "",
+        governing_how=_governing_how(job, cap) if status == "rated" else "",
         uplift=pc.uplift if status == "rated" else (),
         uplift_head="UPLIFT at the rated load" + (" (each member)" if job.members > 1 else "")
         + ": anchor",
@@ -625,6 +647,8 @@ def label_text(r: Rating, width: int = 40) -> str:
     _body(r, row)
     if r.governing and r.status == "rated":
         row(f"Governing check: {r.governing}")
+        if r.governing_how:
+            row(f"  {r.governing_how}", "  ")
         if r.governing_state:
             row(f"  in {r.governing_state}", "  ")
     if r.uplift:
@@ -751,6 +775,7 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
     h.append(f'<p class="meta">Member: {e(r.member)}</p><p class="meta">Span: {e(r.span)}</p>')
     if r.governing and r.status == "rated":
         h.append(f'<p class="meta">Governing check: {e(r.governing)}'
+                 + (f"; {e(r.governing_how)}" if r.governing_how else "")
                  + (f" (in {e(r.governing_state)})" if r.governing_state else "") + "</p>")
     if r.reactions:
         h.append(f"<p class=meta><b>{e(r.reactions_head)}</b></p><ul>"
