@@ -682,6 +682,10 @@ _CRITERIA_WORDS_ONLY = re.compile(r"^(?:notes?|comments?|remarks?|description|by
 
 
 _BOOL_KEYS = frozenset({"welded", "patterned", "brace", "wet_service"})
+# a load's case written under another key ("cas", "load_case"), with a value that says dead
+_CASE_KEY = re.compile(r"^(?:cas|cse|csae|caes|case?s|load_?cases?|loadcase|case_?type|"
+                       r"load_?type|load_?kind|kind|category|dead_?or_?live)$", re.IGNORECASE)
+_DEAD_VALUE = re.compile(r"^\s*(?:dead|d|dl|permanent|dead[ _-]?load)\s*$", re.IGNORECASE)
 
 
 def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], value=None) -> str:
@@ -702,6 +706,11 @@ def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], valu
                 return f"{k} of {where}"
     if here == "criteria" and not _CRITERIA_WORDS_ONLY.match(key):
         return "a limit or factor of [criteria]"
+    if here == "loads" and _DEAD_VALUE.match(value if isinstance(value, str) else "") and (
+            _CASE_KEY.match(key) or (near and near[0] == "case")):
+        # a slip of `case` with a dead value: the dead load would be scaled as live
+        return "case = \"dead\" of [[loads]] (a dead load stays on; read as live it is rated " \
+               "up with the others)"
     for words, table, k in _LOWERING_WORDS:
         if words.search(key) and (table == here or k == "criteria"):
             return ("the [criteria] table (a limit or factor)" if k == "criteria" else
@@ -1486,11 +1495,49 @@ def _wide_first(r: _Reader, spec, key: str, axis) -> None:
     from shopbeam.members.catalog import _LUMBER  # noqa: PLC0415
 
     m = _LUMBER.match(spec) if isinstance(spec, str) else None
-    if m and int(m.group(1)) > int(m.group(2)) and (axis or "strong") == "strong":
+    if m and int(m.group(1)) > int(m.group(2)) and axis is None:
         size = f"{m.group(2)}x{m.group(1)}"
-        r.warn(f"{spec.strip()!r} is read as a {size} ON EDGE (bent about its strong axis, as "
-               f"a joist); lumber is written thickness first ({size}). For a board laid flat "
-               "(a plank or shelf board) write axis = \"weak\" under [beam]", key)
+        # the two readings differ many times over (on edge, flat): held until axis says which
+        r.hold(f"{spec.strip()!r} is read as a {size} ON EDGE (bent about its strong axis, as "
+               f"a joist); lumber is written thickness first ({size}), and written wide first "
+               "it may mean a board laid flat (a plank or shelf board), many times weaker. Write "
+               "axis = \"weak\" under [beam] if it lies flat, or axis = \"strong\" if it "
+               "stands on edge; no rating is posted until it says", key,
+               f"{spec.strip()!r} is written wide first: on edge or laid flat? Write axis = "
+               "\"strong\" or \"weak\" under [beam]")
+
+
+# Words that say a board or bar lies flat (a plank, a shelf board): read on edge by default
+_LAID_FLAT = re.compile(r"\b(?:planks?|plank(?:ing|ed)|(?:laid|lying|lies|laying|set|placed) "
+                        r"flat|flat[- ](?:board|plank|shelf)s?|flatwise|on (?:the |its )?flat|"
+                        r"shelf[- ]boards?|boards? (?:laid|set|placed) (?:across|on|over))\b",
+                        re.IGNORECASE)
+_ON_EDGE = re.compile(r"\b(?:on (?:its |the )?edge|edgewise|edge[- ]?up|upright|standing)\b",
+                      re.IGNORECASE)
+
+
+def _said_laid_flat(r: _Reader, section, axis, title, notes) -> None:
+    """A board or bar the job's words say lies flat ("2x10 plank", "shelf board laid
+    across the brackets") but with no axis: it is read on edge, many times stronger than
+    flat. NOT RATED until axis says which."""
+    if axis is not None or section is None or getattr(section, "shape", "") != "rect-bar":
+        return
+    d = getattr(section, "dims", {}) or {}
+    h, b = d.get("h"), d.get("b")
+    if not (h and b and h > 1.5 * b):  # on edge and flat differ little for a squarish bar
+        return
+    # the member's own words (title, notes); a load's label names what it carries ("deck
+    # boards" on a joist)
+    said = _words_found(_LAID_FLAT, title, notes, (), ())
+    if not said or _words_found(_ON_EDGE, title, notes, (), ()):
+        return
+    r.hold(f"the job says the member lies flat ({'; '.join(said[:2])}), but "
+           f"{section.designation!r} is read ON EDGE (bent about its strong axis, deep side "
+           "up), many times stiffer and stronger than laid flat. Write axis = \"weak\" under "
+           "[beam] if it lies flat, or axis = \"strong\" if it stands on edge; no rating is "
+           "posted until it says", "beam.section",
+           f"the job says the member lies flat ({said[0]}) but no axis is given, and it is read "
+           "on edge: write axis = \"weak\" (flat) or \"strong\" (on edge) under [beam]")
 
 
 # Steel, aluminium, titanium and wood along the grain all have a stiffness per weight
@@ -1620,6 +1667,34 @@ def _plausible_section(sec, r: _Reader) -> None:
             r.error(f"the section's {key} ({v:.3g} in SI units) is too small or not a number "
                     "for a real member: check the value and its unit", f"beam.section.{key}")
             return
+
+
+# A typed-in section's dimensions (a tube's depth, a bar's width, a wall, a radius): a shop
+# writes them in inches or millimetres, so one in feet or metres is most often a slip ("3 ft"
+# for "3 in" makes a 36 in deep tube, rated many times over)
+_SECTION_DIMS = ("depth", "width", "size", "od", "diameter", "wall", "thickness", "flange_width",
+                 "flange_thickness", "web_thickness", "stem_thickness", "corner_radius",
+                 "fillet_radius", "plate_width", "plate_thickness", "gap")
+_FEET_OR_METRES = re.compile(r"\d\s*(?:ft|feet|foot|yd|yards?|'|m|metres?|meters?)\s*$",
+                             re.IGNORECASE)
+
+
+def _section_dims_in_feet(r: _Reader, spec) -> None:
+    """A [beam.section] dimension typed in feet or metres: NOT RATED until written in inches
+    or millimetres (the unit a section is measured in)."""
+    if not _is_table(spec):
+        return
+    said = [(k, spec[k]) for k in _SECTION_DIMS
+            if isinstance(spec.get(k), str) and _FEET_OR_METRES.search(spec[k].strip())]
+    if not said:
+        return
+    k, v = said[0]
+    r.hold(f"{k} = {v!r} is typed in feet or metres; a section's sizes are measured in inches "
+           "or millimetres, and one in feet (\"3 ft\" for \"3 in\") makes the member many "
+           "times stronger than it is. Write it in in or mm" + (
+               f" (and {', '.join(x for x, _ in said[1:])})" if len(said) > 1 else ""),
+           f"beam.section.{k}",
+           f"the section's {k} ({v!r}) is typed in feet or metres: write it in inches or mm")
 
 
 # Span-to-depth below which a member is not a beam (common practice): Euler-Bernoulli beam
@@ -2272,6 +2347,39 @@ def _per_member_loads(r: _Reader, raw_loads, members) -> None:
                f"{said[0].split(' ')[0]}.label",
                f"members = {members}, but {said[0]} is labelled as one member's load: enter "
                "the loads for all the members, or members = 1")
+
+
+_PALLET = re.compile(r"\bpallets?(?![- ]?(?:jacks?|trucks?|wrap))\b", re.IGNORECASE)
+_PAIR = re.compile(r"\b(?:pair|front and back|front & back|two beams|2 beams)\b",
+                   re.IGNORECASE)
+
+
+def _rack_members(r: _Reader, title, notes, tags, raw_loads, members) -> None:
+    """A pallet-rack level rests on a front and a back beam: `members` = 2. More beams than
+    that sharing the level evenly is a slip of the count (20 for 2, or beams of several levels
+    counted as one level's), and the label's per-level figure grows with it: NOT RATED. A job
+    that says "pair" (or front and back) with another count is held the same way."""
+    if not isinstance(members, int) or isinstance(members, bool) or members < 1:
+        return
+    pallet = "pallet" in tags or _words_found(_PALLET, title, notes, (), raw_loads)
+    pair = _words_found(_PAIR, title, notes, (), raw_loads)
+    if pallet and members > 2:
+        r.hold(f"members = {members} shares each level's load evenly among {members} beams, "
+               "but a pallet-rack level rests on a front and a back beam (members = 2); pallets "
+               "do not spread evenly onto more beams, and the label's per-level figure grows "
+               "with the count. Write members = 2 for a beam pair, or rate one beam with its "
+               "own share of the load (members = 1)", "beam.members",
+               f"members = {members} on a pallet rack, whose level rests on a front and back "
+               "beam: write members = 2, or rate one beam with its own share (members = 1)")
+    elif pair and members > 2:
+        r.hold(f"members = {members}, but the job says {pair[0].split(': ', 1)[-1]}: the "
+               f"load is shared evenly among {members} members and the label's figure for "
+               "them all grows with the count. Write members = 2 for a pair", "beam.members",
+               f"members = {members}, but the job says it is a pair: write members = 2")
+    elif pair and pallet and members == 1:
+        r.warn(f"members = 1, but the job says {pair[0].split(': ', 1)[-1]}: the loads entered "
+               "are taken by one beam alone (the figure is for one beam carrying them all, on "
+               "the low side). Write members = 2 if the loads are the pair's", "beam.members")
 
 
 def _rack_impact_slip(r: _Reader, criteria, tags, loads) -> None:
@@ -3710,6 +3818,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                material=material)
         if section is not None:
             _plausible_section(section, r)
+            _section_dims_in_feet(r, beam["section"])
+            _said_laid_flat(r, section, axis, title, notes)
             _same_both_ways(r, section, axis)
             stubby = stubby_words(length, section, system, beam.get("length")) \
                 if length is not None else ""
@@ -3898,10 +4008,21 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     upward += _upward_wheels(r, moving, system)
     if (length is not None and criteria.deflection_abs is not None
             and criteria.deflection_abs > length / LOOSEST_COMMON_RATIO):
-        r.warn(f"deflection = {criteria.deflection!r} is more than 1/{LOOSEST_COMMON_RATIO:g} "
-               f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
-               "common limit (racks, shelves and floors use L/180 to L/360): check the number "
-               "and its unit, or write the limit as \"L/240\"", "criteria.deflection")
+        said = (f"deflection = {criteria.deflection!r} is more than 1/{LOOSEST_COMMON_RATIO:g} "
+                f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
+                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
+                "and its unit, or write the limit as \"L/240\"")
+        if _FEET_OR_METRES.search(str(criteria.deflection).strip()):
+            # "0.5 ft" for "0.5 in": a limit in feet or metres this loose is a unit slip; a
+            # loose limit meant on purpose is written in inches or mm
+            r.hold(said + ". Typed in feet or metres, it is most often \"ft\" for \"in\" (or m "
+                   "for mm), so no rating is posted on it; a loose limit meant on purpose is "
+                   "written in in or mm", "criteria.deflection",
+                   f"the deflection limit {criteria.deflection} is typed in feet or metres and "
+                   "is looser than any common limit (\"0.5 ft\" for \"0.5 in\"?): write it in "
+                   "in or mm, or as L/n")
+        else:
+            r.warn(said, "criteria.deflection")
     # a refused support or wheel set leaves the job half read: what would follow from the
     # rest (a profile guessed from the other supports, "no force load") would mislead
     support_refused = any(not p.warning and p.key.startswith("supports") for p in r.problems)
@@ -3913,6 +4034,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _dead_load_units(r, raw_loads, loads, system)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
+    _rack_members(r, title, notes, tags, raw_loads,
+                  beam.get("members", 1) if isinstance(beam, dict) else None)
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)

@@ -176,6 +176,11 @@ def _build(shape, spec, key, material, mass) -> Section:
         t_nom, note = _wall(spec, key, "tube")
         f, rule = _wall_factor(spec, key, material, shape)
         r = L("corner_radius", positive=False)
+        if r is not None and r >= min(h, b) / 2:
+            raise InputError(f"corner_radius ({_in(r)} in) must be less than half the tube's "
+                             f"smaller side ({_in(min(h, b))} in): check its unit (\"5 mm\", "
+                             "not \"5 in\"); the outside corner radius is about 2 x the wall",
+                             f"{key}.corner_radius")
         sec = rect_tube(h, b, t_nom, t_des=f * t_nom, r_out=r, mass=mass,
                         designation=f"rect-tube {_in(h)} x {_in(b)} x {_wall_text(spec)}",
                         source="computed from dimensions (" + "; ".join(
