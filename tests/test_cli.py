@@ -147,6 +147,18 @@ def test_typo_in_a_key_warns_with_the_nearest_key(tmp_path):
     assert "unknown key 'lable'" in r.stderr and "did you mean 'label'" in r.stderr
 
 
+@pytest.mark.parametrize("command", ["solve", "capacity"])
+def test_with_json_an_input_warning_goes_to_stderr_and_stdout_stays_the_json(tmp_path, command):
+    job = write(tmp_path, GOOD.replace('label = "bundle"', 'lable = "bundle"'))
+    r = run(command, str(job), "--json")
+    assert r.returncode == 0
+    data = json.loads(r.stdout)  # stdout is the JSON alone
+    assert any("lable" in w for w in data["warnings"])
+    assert "unknown key 'lable'" in r.stderr and "job.toml" in r.stderr
+    clean = run(command, str(write(tmp_path, GOOD, "clean.toml")), "--json")
+    assert clean.returncode == 0 and clean.stderr == ""  # nothing to say: nothing said
+
+
 def test_missing_file_and_two_hinges_in_one_span(tmp_path):
     r = run("solve", str(tmp_path / "nope.toml"))
     assert r.returncode == 2 and "no such job file" in r.stderr

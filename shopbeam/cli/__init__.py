@@ -16,7 +16,7 @@ from pathlib import Path
 
 from shopbeam import __version__
 from shopbeam.cli.common import (EXIT_INPUT, EXIT_INTERNAL, EXIT_OK, add_title_options, guarded,
-                                  load, report_error)
+                                  load, report_error, warnings_to_stderr)
 from shopbeam.output.jsonout import dumps_finite  # noqa: F401 (the name other code knew)
 
 DESCRIPTION = """\
@@ -50,6 +50,7 @@ def cmd_solve(args) -> int:
         data = to_json(result)
         data["not_rated_reasons"] = solve_reasons(result)
         print(dumps_finite(data, args.job))
+        warnings_to_stderr(job)
         return EXIT_OK
     if args.calc:
         from shopbeam.output.calcsheet import calc_sheet  # noqa: PLC0415 - startup: sympy
@@ -185,7 +186,9 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s.add_argument("job", help=JOB_HELP)
     lib_opt(s)
     s.add_argument("--json", action="store_true",
-                   help="print the JSON (the solve JSON at k, plus factor and capacity)")
+                   help="print the JSON: the solve JSON's reactions and extremes for the "
+                        "job as entered (k = 1), factor (k), and checks and governing at k "
+                        "(input warnings also go to stderr)")
     s.set_defaults(func=_lazy("shopbeam.cli.design", "cmd_capacity"))
 
     s = command(sub, "rating", "print a rating label to post on the member",

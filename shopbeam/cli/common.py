@@ -109,3 +109,11 @@ def load(path):
     from shopbeam.jobs.jobfile import load_job
 
     return load_job(path)
+
+
+def warnings_to_stderr(job) -> None:
+    """With --json the report's INPUT WARNINGS are not printed: each goes to stderr (the
+    contract's channel for messages; stdout stays the JSON alone) besides the JSON's own
+    `warnings`, so a script that reads only the contract keys still sees an ignored key."""
+    for p in getattr(job, "warnings", ()):
+        print(p.located(), file=sys.stderr)

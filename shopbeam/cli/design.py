@@ -3,7 +3,7 @@
 from __future__ import annotations
 
 from shopbeam import units
-from shopbeam.cli.common import guarded, load
+from shopbeam.cli.common import guarded, load, warnings_to_stderr
 from shopbeam.design import capacity, sizing
 from shopbeam.errors import InputError
 from shopbeam.members.stock import load_stock
@@ -26,6 +26,7 @@ def cmd_capacity(args) -> int:
     res = capacity.capacity(_sound(load(args.job)))
     if args.json:
         print(dumps_finite(capacity.to_json(res), args.job))
+        warnings_to_stderr(res.job)
     else:
         print(capacityreport.render(res), end="")
     return 0
