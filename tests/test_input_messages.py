@@ -1404,3 +1404,20 @@ def test_a_board_that_may_lie_flat_is_not_rated_until_axis_says(section, title, 
     job = parse_job_text(_board(section, title, extra))
     assert bool([p for p in job.warnings if p.key == "beam.section"]) == held
     assert capacity(job).rated is not held
+
+
+@pytest.mark.parametrize("where", ["title", "label", "tag"])
+def test_a_step_beam_is_not_rated(where):
+    text = _preset("pallet-rack-beam-pair.toml")
+    if where == "title":
+        text = text.replace('title = "Pallet-rack beam pair', 'title = "Step beam pair', 1)
+    elif where == "label":
+        text = text.replace('label = "pallet', 'label = "pallet on the step beams', 1)
+    else:
+        text = text.replace('tags = ["rack", "pallet"]', 'tags = ["rack", "pallet", "step-beam"]')
+    job = parse_job_text(text)
+    w = [p for p in job.warnings if "step beam" in p.message]
+    assert len(w) == 1 and "cold-formed" in w[0].message
+    cap = capacity(job)
+    assert not cap.rated and any("step beam" in x for x in cap.not_rated)
+    assert capacity(parse_job_text(_preset("pallet-rack-beam-pair.toml"))).rated

@@ -2382,6 +2382,36 @@ def _rack_members(r: _Reader, title, notes, tags, raw_loads, members) -> None:
                "the low side). Write members = 2 if the loads are the pair's", "beam.members")
 
 
+def _said_key(said: str) -> str:
+    """The job-file key a `_words_found` entry names ("title: ...", "loads[2] is ...")."""
+    if said.startswith("loads["):
+        return said.split(" ", 1)[0] + ".label"
+    return "tags" if said.startswith("tag") else said.split(":", 1)[0]
+
+
+_STEP_BEAM = re.compile(r"\bstep(?:ped)?[- ]?beams?\b", re.IGNORECASE)
+
+
+def _step_beam(r: _Reader, title, notes, tags, raw_loads, section) -> None:
+    """A pallet-rack step beam: its deck or pallets bear on the step along one edge, off the
+    shear centre, which twists it, and its roll-formed section (a step in a box or channel,
+    cold-formed: AISI S100) is not the plain section entered. Neither is checked here, so no
+    rating is posted on it. (A channel or angle entered as one is left to the open shapes'
+    torsion rule, with beam.restrained: the section entered is the one used.)"""
+    if getattr(section, "shape", "") in ("channel", "angle"):
+        return
+    said = _words_found(_STEP_BEAM, title, notes, tags, raw_loads)
+    if not said:
+        return
+    r.hold(f"the job names a step beam ({said[0]}): its deck or pallets bear on the step along "
+           "one edge, off the shear centre, and twist it (torsion, not checked here), and a "
+           "roll-formed step section is cold-formed steel (AISI S100) with the step cut out of "
+           "the box, not the plain section entered; no rating is posted. Post the rack "
+           "maker's rated capacity for the beam, or have it checked", _said_key(said[0]),
+           f"a step beam ({said[0]}): the load on its step twists it and its cold-formed "
+           "section is not the plain one entered; neither is checked here")
+
+
 def _rack_impact_slip(r: _Reader, criteria, tags, loads) -> None:
     """A storage rack's impact allowance under ANSI MH16.1's 25 % of one unit load (from
     memory), spread over the unit loads entered (12.5 % of two pallets), but above zero: a
@@ -4034,6 +4064,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _dead_load_units(r, raw_loads, loads, system)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
+    _step_beam(r, title, notes, tags, raw_loads, section)
     _rack_members(r, title, notes, tags, raw_loads,
                   beam.get("members", 1) if isinstance(beam, dict) else None)
     _rack_impact_slip(r, criteria, tags, loads)
