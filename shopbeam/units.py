@@ -229,6 +229,28 @@ def shop_unit(text: str) -> str:
     return re.sub(r"(?<=[A-Za-z])([234])(?![\d.])", r"^\1", "".join(out))
 
 
+def as_typed(v) -> str:
+    """A value read from a job file, shown as it reads in TOML (true, "3 ft", 10, a table),
+    not as Python prints it (True, {'value': 10}, datetime.datetime(...))."""
+    import datetime as _dt  # noqa: PLC0415 - only for a message
+
+    if isinstance(v, bool):
+        return "true" if v else "false"
+    if isinstance(v, str):
+        return '"' + v.replace("\\", "\\\\").replace('"', '\\"') + '"'
+    if isinstance(v, (int, float)):
+        return repr(v)
+    if isinstance(v, dict):
+        return "a table {" + ", ".join(f"{k} = {as_typed(x)}" for k, x in list(v.items())[:4]) \
+            + (", ..." if len(v) > 4 else "") + "}"
+    if isinstance(v, list):
+        return "a list [" + ", ".join(as_typed(x) for x in v[:4]) + (", ..." if len(v) > 4
+                                                                    else "") + "]"
+    if isinstance(v, (_dt.date, _dt.time)):
+        return f"a date or time ({v.isoformat()}; TOML reads an unquoted date as one)"
+    return repr(v)
+
+
 @lru_cache(maxsize=512)
 def _unit(text: str):
     reg = ureg()
@@ -239,7 +261,7 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
     """Parse shop notation to a pint Quantity (sum of compound terms). Raises InputError."""
     if not isinstance(text, str):
         raise InputError(
-            f"expected a value with its unit in quotes, found {text!r}", key)
+            f"expected a value with its unit in quotes, found {as_typed(text)}", key)
     if len(text) > 200:
         raise InputError("value is too long (more than 200 characters)", key)
     comma = re.search(r"\d,\d", text)

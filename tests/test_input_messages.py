@@ -1421,3 +1421,13 @@ def test_a_step_beam_is_not_rated(where):
     cap = capacity(job)
     assert not cap.rated and any("step beam" in x for x in cap.not_rated)
     assert capacity(parse_job_text(_preset("pallet-rack-beam-pair.toml"))).rated
+
+
+@pytest.mark.parametrize("value, words", [("true", "found true"),
+                                          ('{value = 10, unit = "ft"}',
+                                           'found a table {value = 10, unit = "ft"}'),
+                                          ('["10 ft"]', 'found a list ["10 ft"]'),
+                                          ("1979-05-27", "found a date or time (1979-05-27")])
+def test_a_wrong_type_is_shown_as_toml_writes_it(value, words):
+    problems = refused(cantilever().replace('length = "36 in"', f"length = {value}"))
+    assert any(p.key == "beam.length" and words in p.message for p in problems)

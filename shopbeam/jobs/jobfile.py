@@ -744,7 +744,7 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
         ratio = LIFTING_DEFAULT_RATIO
     sf = crit.get("safety_factor", 1.67)
     if isinstance(sf, bool) or not isinstance(sf, (int, float)) or not math.isfinite(sf) or sf <= 0:
-        r.error(f"safety_factor must be a positive number such as 1.67, found {sf!r}",
+        r.error(f"safety_factor must be a positive number such as 1.67, found {units.as_typed(sf)}",
                 "criteria.safety_factor")
         sf = 1.67
     elif sf < 1:
@@ -808,7 +808,7 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
             live = float(m.group(1))
         else:
             r.error(f"live_deflection must be a limit like \"L/360\" (checked under the live "
-                    f"loads alone), found {ld!r}", "criteria.live_deflection")
+                    f"loads alone), found {units.as_typed(ld)}", "criteria.live_deflection")
     if named_live and live and live < named_live:
         # the limit given twice, the key looser than the named one: the stricter stands
         r.warn(f"live_deflection = {ld!r} is looser than the L/{named_live:g} under live load "
@@ -918,7 +918,7 @@ def _deflection_criterion(text, r: _Reader) -> tuple[str, float | None, float | 
     """(as written, n of L/n, absolute limit, preset name)."""
     key = "criteria.deflection"
     if not isinstance(text, str):
-        r.error(f"expected a limit like \"L/240\" or \"0.25 in\", found {text!r}", key)
+        r.error(f"expected a limit like \"L/240\" or \"0.25 in\", found {units.as_typed(text)}", key)
         return "L/240", DEFAULT_DEFLECTION_RATIO, None, ""
     name = text.strip().lower()
     if name in DEFLECTION_PRESETS:  # named presets such as "rack", "hoist"
@@ -3766,7 +3766,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if schema is None:
         r.error("missing 'schema = 1' (the job-file format version) at the top of the file", "schema")
     elif not isinstance(schema, int) or isinstance(schema, bool):
-        r.error(f"schema must be a whole number, found {schema!r}", "schema")
+        r.error(f"schema must be a whole number, found {units.as_typed(schema)}", "schema")
     elif schema > SCHEMA:
         raise InputErrors([Problem(
             f"this job file is schema {schema}, written by a newer shopbeam; this version reads "
@@ -3776,9 +3776,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         r.error(f"schema {schema} is not a job-file version; use schema = 1", "schema")
     title = data.get("title")
     if title is not None and not isinstance(title, str):
-        r.error(f"title must be text in quotes, found {title!r} (e.g. title = \"Rack arm, "
+        r.error(f"title must be text in quotes, found {units.as_typed(title)} (e.g. title = \"Rack arm, "
                 f"bay {title}\")" if isinstance(title, (int, float)) and not isinstance(
-                    title, bool) else f"title must be text in quotes, found {title!r}", "title")
+                    title, bool) else f"title must be text in quotes, found {units.as_typed(title)}", "title")
         title = ""
     elif not isinstance(title, str) or not title.strip():
         r.error("missing 'title' (a name for the job, e.g. title = \"Lumber rack arm, bay 3\")", "title")
