@@ -1553,3 +1553,27 @@ async def test_the_keys_not_used_notice_names_the_view_on_screen(tmp_path):
         await pilot.pause(app.job_screen.STRAY_WAIT + 0.2)
         said = [m for m in _notices(app) if "Not typed anywhere" in m]
         assert said and "the Span view, no field picked" in said[-1], said
+
+
+@sync
+async def test_a_late_focus_of_a_view_left_never_pulls_the_focus_out_of_a_field(tmp_path):
+    # a view switch puts the focus on the view after a refresh; with a slow view (plots, calc)
+    # that can land after the next view key and Tab have put the cursor in a field of the view
+    # now shown: the keys typed next must still go into that field
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        await pilot.press("f9")  # the plots view
+        await settle(pilot)
+        plots = js.query_one("#plots")
+        await pilot.press("f2")  # back to the job view, and Tab into its first field
+        await settle(pilot)
+        await burst(pilot, TAB)
+        typing_in = js.focused
+        assert js.query_one("#job") in typing_in.ancestors_with_self
+        js._focus_first(plots)  # the plots view's deferred focus, arriving late
+        assert js.focused is typing_in
+        before = js.session.doc.get("title")
+        await burst(pilot, "\x05 two")  # ctrl+e: to the end of the line, then type
+        assert js.session.doc.get("title") == before + " two"

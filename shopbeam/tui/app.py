@@ -310,7 +310,11 @@ class JobScreen(Screen):
 
     def _focus_first(self, view) -> None:
         """The view itself takes the focus, not its first field: a view key pressed next
-        must switch views, never land in a field. Tab goes into the fields."""
+        must switch views, never land in a field. Tab goes into the fields. Called after a
+        refresh: by then another view key may have switched on (and Tab gone into a field of
+        the view now shown), so it acts only while `view` is still the view shown."""
+        if self.current != view.id or not view.is_attached:
+            return  # a later switch owns the focus now: never pull it into a hidden view
         if self.focused is None or view not in self.focused.ancestors_with_self:
             self.set_focus(view)
 
