@@ -1431,3 +1431,23 @@ def test_a_step_beam_is_not_rated(where):
 def test_a_wrong_type_is_shown_as_toml_writes_it(value, words):
     problems = refused(cantilever().replace('length = "36 in"', f"length = {value}"))
     assert any(p.key == "beam.length" and words in p.message for p in problems)
+
+
+@pytest.mark.parametrize("tags, loud", [('["lifting", "hoist", "monorail", "moving"]', True),
+                                        ("[]", True),  # reads like one: the strong caution
+                                        ('["not-lifting"]', False)])
+def test_a_job_that_reads_like_a_lifting_device_carries_the_lifting_caution(tags, loud):
+    from shopbeam.cautions import LIFTING
+    from shopbeam.design.analysis import analyze
+    from shopbeam.output import label
+
+    text = _preset("monorail-trolley.toml")
+    line = next(ln for ln in text.splitlines() if ln.startswith("tags = "))
+    text = text.replace(line, f"tags = {tags}")
+    if tags != line[len("tags = "):]:  # untagged: the profile named would make it lifting too
+        prof = next(ln for ln in text.splitlines() if ln.startswith("lifting = "))
+        text = text.replace(prof, "")
+    job = parse_job_text(text)
+    assert bool(job.lifting_hint) == (tags == "[]")
+    assert (LIFTING in analyze(job).cautions) == loud
+    assert (LIFTING in label.rating(capacity(job)).cautions) == loud

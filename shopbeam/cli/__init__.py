@@ -77,7 +77,7 @@ def cmd_check(args) -> int:
     print(f"{args.job}: input OK ({n(len(job.supports), 'support')}, {n(len(job.loads), 'load')}"
           + (f", {n(len(job.warnings), 'warning')}" if job.warnings else "") + "); the member "
           "is not checked here: run shopbeam solve for its checks")
-    print(banner(job.tags, bool(job.lifting)))
+    print(banner(job.tags, bool(job.caution_lifting)))
     return EXIT_OK
 
 

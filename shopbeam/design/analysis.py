@@ -109,7 +109,7 @@ STAINLESS = ("Stainless steel is checked here by the AISC 360-16 carbon-steel ru
 
 
 def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
-    out = cautions_for(job.tags, job.lifting)
+    out = cautions_for(job.tags, job.caution_lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
     if replaces_angle_warning(job):  # F10 checks the principal axes (or the job restrains it)
         warns = [w for w in warns if w != ANGLE_WARNING]

@@ -1398,7 +1398,7 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
             "lightest": res.lightest.designation if res.lightest else None,
             "lightest_rated": res.lightest_rated.designation if res.lightest_rated else None,
             "cheapest": res.cheapest.designation if res.cheapest else None,
-            "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags, res.job.lifting),
+            "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags, res.job.caution_lifting),
             "material": getattr(res.job.material, "key", ""),
             "material_note": res.material_note, "checked_in_full": res.full_checks,
             "screened_not_checked": len(res.screened_only)}

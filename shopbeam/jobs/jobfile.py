@@ -186,6 +186,13 @@ class Job:
         return is_lifting(self.tags, self.criteria.lifting)
 
     @property
+    def caution_lifting(self) -> bool:
+        """The stronger lifting caution: a lifting device, or a job that reads like one but is
+        not tagged (`lifting_hint`: NOT RATED until tagged lifting or not-lifting). The checks
+        follow `lifting` alone."""
+        return self.lifting or bool(self.lifting_hint)
+
+    @property
     def ei(self) -> float:
         """E times the I that gives the vertical deflection (for an angle that is not
         restrained, about its principal axes: see `sections.bending_ix`)."""

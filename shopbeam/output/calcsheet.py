@@ -227,7 +227,7 @@ def calc_sheet(job, result=None, width: int = 78) -> str:
     ei_val = exact_number(beam.ei / (fu * lu * lu))
     out = textwrap.wrap(f"shopbeam calc sheet: {job.title}", width, subsequent_indent="  ")
     out.append("=" * width)
-    for c in cautions_for(job.tags, job.lifting):
+    for c in cautions_for(job.tags, job.caution_lifting):
         out += textwrap.wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
     out.append("")
     for para in (f"Units: x and positions in {lab['length']}, forces in {lab['force']}, "
@@ -292,7 +292,7 @@ def calc_sheet(job, result=None, width: int = 78) -> str:
         agree.append(abs(exact_val - r.force) <= 1e-9 * max(1.0, abs(r.force)))
     out.append("Numeric engine agrees with this sheet: " + ("yes" if all(agree) else "NO - report this"))
     out.append("")
-    out += textwrap.wrap("CAUTION: " + cautions_for(job.tags, job.lifting)[-1], width)
+    out += textwrap.wrap("CAUTION: " + cautions_for(job.tags, job.caution_lifting)[-1], width)
     from shopbeam.escapes import shown
 
     return shown("\n".join(out), keep="\n") + "\n"

@@ -17,7 +17,7 @@ def render(res: CapacityResult, width: int = 78) -> str:
     job = res.job
     lines = wrap(f"shopbeam capacity: {job.title}", width, subsequent_indent="  ")
     lines.append("=" * width)
-    lines += wrap(banner(job.tags, job.lifting), width)
+    lines += wrap(banner(job.tags, job.caution_lifting), width)
     lines += wrap(warnings_headline(job, "posting a load"), width,
                   initial_indent="!! ", subsequent_indent="!! ")
     lines.append("")
@@ -73,6 +73,6 @@ def render(res: CapacityResult, width: int = 78) -> str:
             lines += wrap(p.located(), width, initial_indent="  ", subsequent_indent="  ")
     lines.append("")
     lines.append("CAUTIONS")
-    for c in cautions_for(job.tags, job.lifting):
+    for c in cautions_for(job.tags, job.caution_lifting):
         lines += wrap(c, width, initial_indent="!! ", subsequent_indent="!! ")
     return shown("\n".join(lines), keep="\n") + "\n"

@@ -588,7 +588,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
         governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)],
         date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,
-        cautions=tuple(cautions_for(job.tags, job.lifting)), unchecked=unch, notes=tuple(notes),
+        cautions=tuple(cautions_for(job.tags, job.caution_lifting)), unchecked=unch, notes=tuple(notes),
         warnings=tuple(f"{p.key}: {p.message.split(':')[0]}" for p in job.warnings
                        if getattr(p, "warning", False)),
         lifting_profile=_profile_name(job),

@@ -83,7 +83,7 @@ def check_entry(entry) -> Row:
         return _replace(base, result="ERROR", problem=first[0] if first else type(exc).__name__)
     return _replace(base, title=job.title, governing=g.name, ratio=float(g.ratio),
                     result="PASS" if result.ok else "FAIL", rated_load=rated_words(r),
-                    lifting=job.lifting)
+                    lifting=job.caution_lifting)
 
 
 def _replace(row: Row, **kw) -> Row:

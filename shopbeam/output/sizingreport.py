@@ -92,7 +92,7 @@ def render(res: SizeResult, top: int = 15) -> str:
     for s in res.skipped[:5]:
         lines.append(f"  skipped {s}")
     lines.append("")
-    for c in cautions_for(job.tags, job.lifting):
+    for c in cautions_for(job.tags, job.caution_lifting):
         lines += wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
     # each line is escaped on its own (a line break or tab in the title is shown, not obeyed)
     return "\n".join(escaped(x) for x in lines) + "\n"

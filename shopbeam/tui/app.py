@@ -177,7 +177,7 @@ class JobScreen(Screen):
         if not isinstance(tags, list) and not isinstance(tags, tuple):
             tags = []
         prof = s.doc.get("criteria.lifting")
-        lifting = ev.job.lifting if ev.job is not None else isinstance(prof, str) and bool(prof)
+        lifting = ev.job.caution_lifting if ev.job is not None else isinstance(prof, str) and bool(prof)
         self.query_one(Banner).show(tags, lifting)
         title = s.doc.get("title") or "(no title)"
         flags = []

@@ -1148,7 +1148,7 @@ class ResultsView(View):
             cautions = list(r.cautions)
         else:
             cautions = cautions_for(ev.job.tags if ev.job is not None else (),
-                                    ev.job is not None and ev.job.lifting)
+                                    ev.job is not None and ev.job.caution_lifting)
         warns = [p for p in ev.problems if p.warning]
         extra = ["INPUT WARNINGS"] + [in_words(f"  {p.key}: {p.message}") for p in warns] \
             if warns else []
