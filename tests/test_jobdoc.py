@@ -203,3 +203,16 @@ def test_saving_a_bundled_preset_saves_a_copy_to_user(tmp_path, monkeypatch):
     doc.set_title("my copy, again")
     doc.save()  # now it is the user's own file: a normal save
     assert "again" in saved.read_text(encoding="utf-8") and src.read_bytes() == before
+
+
+def test_notes_with_line_breaks_are_saved_as_a_multi_line_string(tmp_path):
+    text = next(p for p in PRESETS if p.stem == "demo").read_text(encoding="utf-8")
+    line = next(ln for ln in text.splitlines() if ln.startswith("notes = "))
+    text = text.replace(line, 'notes = """\nLine one.\nLine two\twith a tab, "quoted".\n\nLast."""')
+    doc = jobdoc.JobDoc.parse(text)
+    value = doc.get("notes") + " added"
+    doc.set_notes(value)
+    out = doc.text()
+    assert tomllib.loads(out)["notes"] == value  # the value exactly
+    assert 'notes = """' in out and "\\n" not in out.split('notes = """')[1].split('"""')[0]
+    assert out.count("\n") == text.count("\n") - 1  # one line fewer: the leading break only

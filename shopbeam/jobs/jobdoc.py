@@ -439,7 +439,12 @@ def _assign(node, key: str, value, where: str) -> None:
                 if old[i] != v:
                     old[i] = v
             return
-    new = tomlkit.item(_item(value)) if not hasattr(value, "trivia") else value
+    if isinstance(plain, str) and "\n" in plain and not hasattr(value, "trivia"):
+        # a text with line breaks (notes) stays a multi-line string, as a person writes one,
+        # not one line of \n escapes
+        new = tomlkit.string(plain, multiline=True)
+    else:
+        new = tomlkit.item(_item(value)) if not hasattr(value, "trivia") else value
     if old is not None and hasattr(old, "trivia") and not isinstance(new, (Table, AoT)) \
             and not isinstance(old, (Table, AoT)):
         t, n = old.trivia, new.trivia
