@@ -227,3 +227,22 @@ def test_a_title_with_a_line_break_keeps_the_title_bar_on_one_line_with_its_flag
     from shopbeam.tui.app import title_bar
     bar = title_bar("Loft beam\nover the saw bay", "lib/mltitle.toml", "UNSAVED CHANGES", 78)
     assert "\n" not in bar and bar.endswith("UNSAVED CHANGES") and "mltitle.toml" in bar
+
+
+@sync
+async def test_the_problem_summary_keeps_to_three_rows_of_the_width_and_says_where_the_rest_is():
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        head = "The job has 2 problems; no results until they are fixed:"
+        long1 = "  - supports[1].at: '16 ft' (16 ft) is beyond the end of the beam (12 ft): " \
+                "positions run from 0 at the left end"
+        long2 = "  - moving[0].travel: the travel runs past the end of the beam (12 ft)"
+        for lines, pointer in (([head, long1, long2], "1 more line: see 7 Results"),
+                               ([head, long1 + " and more words" * 8], "see 7 Results"),
+                               ([head, "  - a short one"], None)):
+            got = js._problems_summary(lines).splitlines()
+            assert len(got) <= 3 and widest("\n".join(got)) <= 78
+            assert got[0] == head
+            assert (pointer in got[-1]) if pointer else got == lines

@@ -238,8 +238,7 @@ class JobScreen(Screen):
         if note:  # a length change not settled yet: first, it can move the answer a lot
             warn = [note] + warn
         if ev.result is None:
-            lines = warn + problems_text(ev).splitlines()
-            return "\n".join(lines[:3]) + ("\n  ... see 7 Results" if len(lines) > 3 else "")
+            return self._problems_summary(warn + problems_text(ev).splitlines())
 
         from shopbeam.tui import drawing  # noqa: PLC0415 - startup (the worker imported it)
 
@@ -248,6 +247,28 @@ class JobScreen(Screen):
                 for w in warn]
         return "\n".join(warn + [drawing.summary_line(ev.result, width,
                                                       "   (7 results, 8 plots)")])
+
+    def _problems_summary(self, lines: list[str]) -> str:
+        """The problems in the summary's three rows, each row cut to the screen's width (a
+        long message wrapped there hid the rows after it): the first lines, and the count of
+        the rest with where to read them all (7 Results)."""
+        width = max((self.size.width or 80) - 2, 20)
+
+        def cut(line: str) -> str:
+            return line if len(line) <= width else line[:width - 4].rstrip() + " ..."
+
+        if len(lines) <= 3 and all(len(ln) <= width for ln in lines):
+            return "\n".join(lines)
+        if len(lines) <= 2:  # one long message: as much of it as fits, then where it all is
+            head = lines[:-1]
+            rest = textwrap.wrap(lines[-1], width, subsequent_indent="    ")
+            room = 3 - len(head)
+            if len(rest) <= room:
+                return "\n".join(head + rest)
+            return "\n".join(head + rest[:room - 1] + ["  ... the whole message: see 7 Results"])
+        more = len(lines) - 2
+        return "\n".join([cut(ln) for ln in lines[:2]]
+                         + [f"  ... {more} more line{'s' if more != 1 else ''}: see 7 Results"])
 
     def changed(self) -> None:
         """The document changed: show it now, solve it in a worker (latest edit wins)."""
