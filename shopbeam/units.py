@@ -274,8 +274,13 @@ def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None =
                          "which one is meant", key)
     scanned = _terms(text)
     if scanned is None:
-        raise InputError(f"cannot read {text!r} as a number with a unit "
-                         "(write e.g. \"8 ft\", \"1-1/2 in\", \"10' 6\\\"\")", key)
+        example = ("\"8 ft\", \"1-1/2 in\", \"10' 6\\\"\"" if kind in (None, "length")
+                   else KINDS[kind][2] if kind in KINDS else "\"8 ft\", \"-300 lbf\"")
+        if kind in KINDS and kind != "length":
+            raise InputError(f"cannot read {text!r} as {KINDS[kind][1]}: write a number with "
+                             f"its unit, e.g. {example}", key)
+        raise InputError(f"cannot read {text!r} as a number with a unit (write e.g. {example})",
+                         key)
     sign, terms = scanned
     if any(not unit for _, unit in terms):
         if kind == "length" and len(terms) == 2 and not terms[0][1] and \

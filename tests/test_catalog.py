@@ -508,3 +508,11 @@ def test_the_section_printout_lists_only_dimensions():
                             capture_output=True, text=True)
         assert out.returncode == 0 and "r_given" not in out.stdout
         assert js.returncode == 0 and "r_given" not in js.stdout
+
+
+def test_near_misses_of_a_designation_not_finished_come_from_its_own_depth_first():
+    from shopbeam.members.catalog import suggestions
+
+    assert suggestions("s8x1")[0] == "S8X18.4"  # typed on the way to S8X18.4
+    assert all(s.startswith("W8X1") for s in suggestions("W8x1"))
+    assert suggestions("W8x17")[:2] == ["W8X18", "W8X15"]  # a weight between two: the nearest

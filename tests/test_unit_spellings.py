@@ -105,3 +105,14 @@ def test_fraction_characters_that_do_not_make_one_number_say_so():
     with pytest.raises(InputError) as e:
         units.parse("2\u00bd\u00bd ft", "length", "beam.length")
     assert "fraction characters" in str(e.value) and "unknown unit" not in str(e.value)
+
+
+@pytest.mark.parametrize("kind, example", [("line_load", "lbf/ft"), ("force", "lbf"),
+                                           ("moment", "lbf*ft"), ("length", "ft")])
+def test_an_unreadable_value_gets_an_example_of_its_own_kind(kind, example):
+    from shopbeam import units
+    from shopbeam.errors import InputError
+
+    with pytest.raises(InputError) as e:
+        units.parse("lbs/FT!", kind, "loads[1].value")
+    assert example in str(e.value)
