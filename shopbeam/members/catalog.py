@@ -126,6 +126,27 @@ def _row(r: dict) -> dict:
     return row
 
 
+def _rows_of(header: str, lines) -> list[dict]:
+    """`_row` of each data line (the same dicts), read by column position: a DictReader
+    builds a dict of all 85 columns per line, of which a row keeps 42."""
+    names = next(csv.reader([header]))
+    at = {c: i for i, c in reversed(list(enumerate(names)))}  # the first column of a name
+    cols = [(c, at[c]) for c in _FLOAT_COLS if c in at]
+    missing = [c for c in _FLOAT_COLS if c not in at]
+    it, il, ie = at["Type"], at["AISC_Manual_Label"], at["EDI_Std_Nomenclature"]
+    out = []
+    for r in csv.reader(lines):
+        n = len(r)
+        row = {"Type": r[it], "label": r[il], "edi": r[ie]}
+        for c, i in cols:
+            v = r[i] if i < n else ""
+            row[c] = float(v) if v else None
+        for c in missing:
+            row[c] = None
+        out.append(row)
+    return out
+
+
 @lru_cache(maxsize=1)
 def _aisc_rows() -> tuple[dict, ...]:
     return tuple(_row(r) for r in csv.DictReader(_aisc_lines()))
@@ -669,10 +690,9 @@ def _aisc_kind(name: str) -> tuple[_Entry, ...]:
     whole index gives."""
     typ = _AISC_TYPES[name]
     lines = _aisc_lines()
-    mine = [lines[0]] + [ln for ln in lines[1:] if ln.split(",", 1)[0] == typ]
+    mine = [ln for ln in lines[1:] if ln.split(",", 1)[0] == typ]
     out = []
-    for r in csv.DictReader(mine):
-        row = _row(r)
+    for row in _rows_of(lines[0], mine):
         kind = typ if typ != "HSS" else ("HSS-round" if row["OD"] is not None else "HSS-rect")
         if name in (kind, "HSS"):
             out.append(_Entry(kind, row["label"], row=row))
