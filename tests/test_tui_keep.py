@@ -1066,7 +1066,7 @@ async def test_a_paste_of_several_lines_keeps_every_line(tmp_path):
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
-        f = await at_end_of(pilot, app, "job", "notes")
+        f = await at_end_of(pilot, app, "job", "title")  # one line: the notes keep breaks
         before = f.input.value
         pilot.app._driver.send_message(tevents.Paste(
             " Checked by RK.\nBolts 3/4 A325 at each end.\r\nSee drawing Q-114.\n"))
@@ -1577,3 +1577,28 @@ async def test_a_late_focus_of_a_view_left_never_pulls_the_focus_out_of_a_field(
         before = js.session.doc.get("title")
         await burst(pilot, "\x05 two")  # ctrl+e: to the end of the line, then type
         assert js.session.doc.get("title") == before + " two"
+
+
+@sync
+async def test_the_notes_keep_the_line_breaks_of_a_paste_and_take_one_from_ctrl_j(tmp_path):
+    import tomllib
+
+    from textual import events as tevents
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = await at_end_of(pilot, app, "job", "notes")
+        before = app.job_screen.session.doc.get("notes")
+        pilot.app._driver.send_message(tevents.Paste(
+            " Checked by RK.\nBolts 3/4 A325\tat each end.\r\nSee Q-114.\n"))
+        await settle(pilot)
+        await burst(pilot, "\n" + "Last line.")  # ctrl+j, as a terminal sends it, then text
+        await burst(pilot, TAB)
+        want = before + " Checked by RK.\nBolts 3/4 A325\tat each end.\nSee Q-114.\nLast line."
+        assert app.job_screen.session.doc.get("notes") == want
+        await pilot.press("ctrl+s")
+        await settle(pilot)
+        saved = path.read_text(encoding="utf-8")
+        assert tomllib.loads(saved)["notes"] == want
+        assert 'notes = """' in saved  # a multi-line string, as a person writes one

@@ -532,7 +532,8 @@ class JobScreen(Screen):
             if isinstance(opened, str) and value == one_line(opened):
                 text = opened.replace("\r\n", "\n")
             else:
-                text = from_one_line(value, was) if isinstance(was, str) else value
+                text = from_one_line(value, was if isinstance(was, str) else "",
+                                     breaks=key == "notes")
             s.set(key, text if key == "title" else (text or None))
         elif key == "tags":
             s.set("tags", [t.strip() for t in value.split(",") if t.strip()])
@@ -1478,9 +1479,10 @@ class ShopbeamApp(App):
                 # the burst would go nowhere); it is not used, and the user is told
                 js.not_typed(event.character or "", focused)
                 return
-            if isinstance(focused, Input) and event.is_printable:
-                await focused._on_key(event)  # typed into the field now, not queued
-                return
+            if isinstance(focused, Input) and (event.is_printable or (
+                    event.key == "ctrl+j" and isinstance(focused, FieldInput))):
+                await focused._on_key(event)  # typed into the field now, not queued (ctrl+j:
+                return  # a line break in the notes, in its place among the keys typed)
             after_switch, self._text_after_switch = self._text_after_switch, False
             if on_job and event.is_printable and not isinstance(focused, Input) and \
                     event.key in VIEW_KEYS and gap is not None and \

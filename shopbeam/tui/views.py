@@ -138,7 +138,8 @@ class JobView(View):
     def compose(self) -> ComposeResult:
         yield Static("Job: what it is and how it is shown.", classes="view-title")
         yield Field("Title", "title", placeholder="e.g. Lumber rack arm, bay 3", classes="-wide")
-        yield Field("Notes", "notes", placeholder="free text: where, who, why", classes="-wide")
+        yield Field("Notes", "notes", placeholder="free text: where, who, why (ctrl+j: new line)",
+                    classes="-wide")
         yield Field("Tags", "tags", placeholder="comma separated, e.g. rack, shelf",
                     classes="-wide")
         yield Choice("Units", ["us", "si"], key="units")

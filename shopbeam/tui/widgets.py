@@ -67,10 +67,11 @@ def one_line(text) -> str:
     return "".join(shown for shown, _ in _pieces("" if text is None else str(text)))
 
 
-def from_one_line(text: str, was: str) -> str:
+def from_one_line(text: str, was: str, breaks: bool = False) -> str:
     """What a one-line field's text stands for, given the text `was` it showed: what is left
     as it was shown stands for what it was (a mark for its line break), and what was typed is
-    itself (a "⏎" typed into a title is a character of it, even beside a real line break)."""
+    itself (a "⏎" typed into a title is a character of it, even beside a real line break).
+    `breaks` (the notes): a "⏎" typed or pasted is a line break (ctrl+j types one)."""
     from difflib import SequenceMatcher
 
     pieces = _pieces(was)
@@ -79,9 +80,14 @@ def from_one_line(text: str, was: str) -> str:
         return "".join(orig for _, orig in pieces)
     out = []
     for op, i1, i2, j1, j2 in SequenceMatcher(None, shown, text, autojunk=False).get_opcodes():
-        out.append("".join(orig for _, orig in pieces[i1:i2]) if op == "equal" else
-                   text[j1:j2])
+        typed = text[j1:j2].replace(LINE_BREAK, "\n") if breaks else text[j1:j2]
+        out.append("".join(orig for _, orig in pieces[i1:i2]) if op == "equal" else typed)
     return "".join(out)
+
+
+# Fields whose text may hold line breaks (shown as LINE_BREAK, typed with ctrl+j, kept from a
+# paste); every other field holds one line
+MULTI_LINE_KEYS = frozenset({"notes"})
 
 
 # Fields of free text, where the Option-layer characters of the digits are ordinary
@@ -105,6 +111,21 @@ class FieldInput(Input):
         event.stop()
         event.prevent_default()
         if not event.text:
+            return
+        if getattr(self.parent, "key", "") in MULTI_LINE_KEYS:
+            # the notes keep every line break of a paste, shown as its mark (saved as the
+            # line break), and every other character as pasted
+            lines = event.text.strip("\r\n").splitlines()
+            text = re.sub(r"\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029]", LINE_BREAK,
+                          event.text.strip("\r\n"))
+            selection = self.selection
+            if selection.is_empty:
+                self.insert_text_at_cursor(text)
+            else:
+                self.replace(text, *selection)
+            if len(lines) > 1:
+                self.app.notify(f"Pasted {len(lines)} lines: each line break is shown as "
+                                f"{LINE_BREAK} and saved as a line break (ctrl+j types one).")
             return
         # the line breaks (with the spaces around them) become one space each; the text's
         # own leading and trailing spaces stay (" over the bay" pasted after a word)
@@ -132,6 +153,15 @@ class FieldInput(Input):
             target = self.screen.focused or self.screen
             if target is not self:
                 target.post_message(events.Key(event.key, event.character))
+            return
+        if event.key == "ctrl+j" and getattr(self.parent, "key", "") in MULTI_LINE_KEYS:
+            event.stop()  # a line break in the notes: shown as its mark, saved as a break
+            event.prevent_default()
+            selection = self.selection
+            if selection.is_empty:
+                self.insert_text_at_cursor(LINE_BREAK)
+            else:
+                self.replace(LINE_BREAK, *selection)
             return
         digit = _DIGIT_OF.get(event.key)
         # as a view key only on a screen of views (the library search, a save-as name: text)
