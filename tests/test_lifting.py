@@ -767,3 +767,58 @@ def test_a_load_hung_on_a_clamp_under_a_channel_is_not_rated_a_lug_is():
     lug = capacity(parse_job_text(text.format(wheels="lug = true")))
     assert lug.rated, lug.not_rated
     assert lug.factor == pytest.approx(clamp.factor, rel=1e-12)  # the same checks otherwise
+
+
+# ------------------------------------------------- a hoist given as a point load travels
+def _preset_text(name):
+    from pathlib import Path
+    return (Path(__file__).resolve().parents[1] / "presets" / name).read_text(encoding="utf-8")
+
+
+def test_a_monorail_hoist_given_as_a_point_load_is_rated_travelling_the_span():
+    # the preset's hoist is at mid-span, its worst place for bending; beside a hanger the
+    # hanger carries nearly all of it. Hand figure: at the rated load with the hoist at a
+    # hanger, R = k x 2000 + 120 lbf (hoist) + 18.4 lbf/ft x 16 ft / 2 (own weight)
+    text = _preset_text("monorail-hoist-beam.toml")
+    job = parse_job_text(text)
+    assert job.travelling_hoist == "loads[0]"
+    cap = capacity(job)
+    k = cap.factor
+    hand = (k * 2000 + 120 + 18.4 * 16 / 2) * LBF
+    for r in cap.evaluation.reactions:
+        assert r["max_up"] == pytest.approx(hand, rel=2e-3)
+    # the same hoist entered as a one-axle wheel set: the same factor and supports
+    moving = text.replace('''[[loads]]
+type = "point"
+at = "8 ft"
+value = "-2000 lbf"            # rated load of the hoist
+label = "rated load"
+flange = "bottom"              # hangs from the trolley on the bottom flange
+wheels = 4                     # four-wheel push trolley
+''', '').replace('''[[loads]]
+type = "point"
+at = "8 ft"
+value = "-120 lbf"             # hoist and trolley weight
+label = "hoist and trolley"
+case = "dead"
+flange = "bottom"
+''', '''[[moving]]
+label = "rated load"
+loads = ["-2000 lbf"]
+dead = ["-120 lbf"]
+wheels_per_axle = 4
+''')
+    assert "[[moving]]" in moving and "[[loads]]" not in moving
+    cap_m = capacity(parse_job_text(moving))
+    assert cap_m.factor == pytest.approx(k, rel=1e-9)
+    assert [r["max_up"] for r in cap_m.evaluation.reactions] == pytest.approx(
+        [r["max_up"] for r in cap.evaluation.reactions], rel=1e-9)
+
+
+def test_a_jib_hoist_given_at_its_end_stop_travels_from_the_mast_to_there_only():
+    job = parse_job_text(_preset_text("jib-arm.toml"))
+    assert job.travelling_hoist
+    from shopbeam.design.capacity import travelling
+    moved = travelling(job)
+    assert moved.moving[0].travel == pytest.approx((0.0, 9.5 * 12 * IN))  # to the end stop
+    assert not [ld for ld in moved.loads if ld.kind == "point"]  # hook and hoist both move

@@ -42,7 +42,7 @@ from shopbeam.design.lifting import profile_of
 from shopbeam.design import fatigue
 from shopbeam.cautions import RACK_TAGS
 from shopbeam.jobs.rules import rack_arm
-from shopbeam.jobs.jobfile import (STUBBY_LIMIT, grade_gap, kind_mismatch, lifting_uniform_words,
+from shopbeam.jobs.jobfile import (STUBBY_LIMIT, WheelSet, grade_gap, kind_mismatch, lifting_uniform_words,
                                    strength_slip, stubby_words, thickness_gap,
                                    wood_gap)
 
@@ -384,8 +384,54 @@ def _live_on_spans_unpatterned(job) -> list[str]:
             "go span by span, so every arrangement is checked and rated"]
 
 
+def travelling(job):
+    """A monorail's or jib's hoist given as a point load at its worst place (`Job.
+    travelling_hoist`) as the wheel set it is: one axle of the hook load with the hoist's own
+    weight hung at the same place as its dead wheel load, on the load's wheels, travelling
+    the whole member. None where the job has none, or the hoist is not that plain (a lug,
+    loads set on top, other hung loads at its place)."""
+    key = getattr(job, "travelling_hoist", "")
+    if not key or job.moving:
+        return None
+    hook = next((ld for ld in job.loads if ld.key == key), None)
+    hung = set(job.hung)
+    if hook is None or hook.kind != "point" or key not in hung or key in set(job.lugs):
+        return None
+    there = [ld for ld in job.loads if ld.kind == "point"
+             and abs(ld.at - hook.at) <= 1e-9 * job.length]
+    here = [ld for ld in there if ld.key in hung]
+    if len(here) < len(there) or any(
+            ld is not hook and (ld.case != "dead" or ld.key in set(job.lugs)) for ld in here):
+        return None  # another live load hung there, or one set on top: not one hoist
+    gone = {ld.key for ld in here}
+    # it runs the whole member, except out on a jib's boom (or past an outer hanger), where
+    # the place given is its end stop
+    held = sorted(sp.at for sp in job.supports if sp.takes_force)
+    travel = (0.0, job.length)
+    if held and hook.at > held[-1]:
+        travel = (0.0, hook.at)
+    elif held and hook.at < held[0]:
+        travel = (hook.at, job.length)
+    ws = WheelSet(label=hook.label or "hoist", live=(hook.value,),
+                  dead=(sum(ld.value for ld in here if ld is not hook),), offsets=(0.0,),
+                  travel=travel, key="moving[0]",
+                  wheels_per_axle=max(job.contacts.get(k, 0) for k in gone) or 2)
+    return replace(job, loads=tuple(ld for ld in job.loads if ld.key not in gone),
+                   moving=(ws,), hung=tuple(k for k in job.hung if k not in gone),
+                   hung_default=tuple(k for k in job.hung_default if k not in gone),
+                   contacts={k: v for k, v in job.contacts.items() if k not in gone},
+                   travelling_hoist="")
+
+
 def capacity(job, section=None, ss=None) -> CapacityResult:
-    """The largest live-load multiplier k with every check passing (exact, see module doc)."""
+    """The largest live-load multiplier k with every check passing (exact, see module doc).
+    A hoist given as a point load at its worst place is rated travelling the member (its
+    supports and shear are worst beside a hanger or the mast): the checks, the state that
+    governs and what the supports carry are the travelling hoist's, the figures the job's."""
+    moved = travelling(job)
+    if moved is not None:
+        res = capacity(moved, section)
+        return replace(res, job=job)
     ss = ss or state_set(job, section)
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
@@ -514,7 +560,8 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
         return ("fatigue not checked: the stress categories of AISC 360-16 Appendix 3 are "
                 "for steel, and this member is not steel; have it checked by its own "
                 "material's fatigue rules, or remove fatigue_category and cycles",)
-    if ss.parts.moving:
+    if ss.parts.moving and job.criteria.cycles >= fatigue.FEW_CYCLES:
+        # (under 20,000 cycles no check is needed at all, AISC 360-16 A-3.1)
         return ("fatigue not checked: the stress range of a moving load over its travel is "
                 "not worked out here; have it checked, or remove fatigue_category and cycles",)
     if fatigue.tip_loaded(job) and math.isfinite(

@@ -954,6 +954,12 @@ def _length_fmt(system: str):
     return lambda x: units.fmt(x, "length", system)
 
 
+def _first(mv) -> str:
+    """"first wheel " of a wheel set's position in words ("" for a set of one axle: the
+    hoist is at that place)."""
+    return "first wheel " if len(mv.live) > 1 else ""
+
+
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
              strengths=None) -> Evaluation:
     """Every check at live-load factor k over every pattern and moving-load position."""
@@ -982,7 +988,7 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
             for p, sol in moving_states(job, ss, static, k, st, positions=env.positions):
                 count += 1
                 shown = round(p / (job.length * 1e-6)) * job.length * 1e-6  # no 1e-7 ft noise
-                where = f"{mv.label} first wheel at {fmt(shown)}"
+                where = f"{mv.label} {_first(mv)}at {fmt(shown)}"
                 full = "; ".join(x for x in (words, where) if x)
                 for c in checks_for(job, sol, st, cb_one=True):
                     _keep(best, c, pattern, p, full, sol)
@@ -1047,7 +1053,7 @@ def _exact_reactions(out: list[dict], env: "MovingEnvelope", words: str, mv, job
                                       (lo, p_lo, "max_down", lo < d["max_down"])):
             if better:
                 shown = round(p / (job.length * 1e-6)) * job.length * 1e-6
-                where = f"{mv.label} first wheel at {fmt(shown)}"
+                where = f"{mv.label} {_first(mv)}at {fmt(shown)}"
                 d[key], d[key + "_state"] = float(value), "; ".join(x for x in (words, where) if x)
 
 

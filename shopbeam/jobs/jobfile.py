@@ -170,6 +170,9 @@ class Job:
     vehicle: str = ""
     # other reasons the reader found to post no rating, each warned too (see _Reader.hold)
     holds: tuple[str, ...] = ()
+    # the key of a monorail's or jib's hook load given as a point load at its worst place:
+    # the hoist travels, and `capacity` rates it anywhere along the member ("" otherwise)
+    travelling_hoist: str = ""
     # the tributary width (m) of each load given per area (psf x width), by load key
     widths: dict = field(default_factory=dict)
     supports_line: int | None = None  # the first [[supports]] header's line, for messages
@@ -2521,20 +2524,22 @@ RUNOUT_MIN = 0.305  # 1 ft
 
 
 def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw, supports,
-                  length, system: str) -> None:
+                  length, system: str) -> str:
     """A monorail or jib hoist given as a point load at one place: the hoist travels by
-    design, and the checks and the rating are for the place written only. Warned (the label
-    says where); a [[moving]] wheel set rates every place along the travel."""
+    design. Held where the place is not its worst (a [[moving]] wheel set rates every place
+    along the travel); at its worst place (mid-span, the end of the reach) the key of the
+    hook load is returned, and `capacity` rates the hoist travelling the whole member (the
+    supports and the shear are worst with it beside a hanger or the mast)."""
     if moving_raw or length is None or not supports or not is_lifting(tags, criteria.lifting):
-        return
+        return ""
     name = criteria.lifting or guessed_profile(supports, length)
     if name not in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
-        return
+        return ""
     live = [ld for ld in loads if ld.kind == "point" and ld.case == "live" and ld.value]
     # the hook load: hung from the bottom flange, or (set on top, itself held) the first
     ld = next((ld for ld in live if ld.key in hung), live[0] if live else None)
     if ld is None:
-        return
+        return ""
     held = sorted(s.at for s in supports if s.takes_force)
     # a jib by its profile, or named so (a knee-braced jib held at two places is guessed a
     # monorail, but its hoist still runs out along the boom)
@@ -2545,7 +2550,7 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
     reach = (held[0] if left_free else length - held[-1]) if held else 0.0
     out = (held[0] - ld.at if left_free else ld.at - held[-1]) if held else 0.0
     if jib and held and out >= min(0.9 * reach, reach - 0.305):
-        return  # at the end of the reach (an end stop up to a foot short of the tip)
+        return ld.key  # at the end of the reach (an end stop up to a foot short of the tip)
     at = units.fmt(ld.at, "length", system)
     runout = max(held[0], length - held[-1]) if held else 0.0
     if not jib and runout > RUNOUT_MIN:
@@ -2560,10 +2565,10 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
                "travel between the end stops) to rate every place", f"{ld.key}.at",
                f"the hoist ({ld.key}) is placed at {at} only, on a monorail with a run-out "
                "it travels onto. Give it as [[moving]]")
-        return
+        return ""
     if not jib and any(abs(ld.at - (a + b) / 2) <= 0.01 * (b - a)
                        for a, b in zip(held, held[1:])):
-        return  # at the middle of a span
+        return ld.key  # at the middle of a span
     worst = "the end stop" if jib else "mid-span"
     device = "jib boom" if jib else "monorail"
     # a figure for one place away from the worst is not what a label on a travelling hoist
@@ -2576,6 +2581,7 @@ def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw,
            "between the end stops) to rate every place", f"{ld.key}.at",
            f"the hoist ({ld.key}) is placed at {at} only, not where it is worst on a "
            f"{device} that it travels along. Put it at {worst}, or give it as [[moving]]")
+    return ""
 
 
 # A support label that says the member hangs from a rod, chain or sling there: a single rod
@@ -4078,7 +4084,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _root_at_the_right(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)
     _moving_dead_units(r, data.get("moving"), moving, system)
-    _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"), supports, length, system)
+    travelling_hoist = _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"),
+                                     supports, length, system)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
                    system, title, notes)
@@ -4144,7 +4151,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         upward=tuple(upward), lifting_hint=lifting_hint, bth_hint=bth_hint, at_support=tuple(at_support),
         long_bearings=tuple(long_bearings), rolling_keys=rolling_keys, cut_keys=tuple(r.cuts),
         factor_keys=tuple(r.factors), vehicle_hint=vehicle_hint, vehicle=vehicle,
-        holds=tuple(r.holds),
+        holds=tuple(r.holds), travelling_hoist=travelling_hoist,
         widths=dict(r.widths), supports_line=r.line_for("supports[0]"),
         warnings=tuple(r.problems), conversions=tuple(conversions), project=project,
         wood=wood_service,

@@ -168,8 +168,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                            where, exact=ld.total_force * k))
     elif len(live) == 1 and not mv and live[0].kind == "point":
         ld = live[0]
+        moves = getattr(job, "travelling_hoist", "") == ld.key
         figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
-                           f"at {pos(ld.at)}", where))
+                           "anywhere along its travel" if moves else f"at {pos(ld.at)}",
+                           where))
     else:
         each_live = []  # the posted figures of the live force loads, for their TOTAL
         for i, ld in enumerate(live):
@@ -273,6 +275,9 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     if any(ld.patterned for ld in live):
         notes.append("Patterned loads are rated on any or all of their spans; other loads as "
                      "placed in the job, and other placements are not rated.")
+    elif getattr(job, "travelling_hoist", "") and len(live) == 1:
+        notes.append("Rated with the hoist anywhere along the member (up to the place given "
+                     "out on a boom); other loads as placed in the job.")
     else:
         notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     notes += _held_words(job)
