@@ -918,3 +918,56 @@ def test_a_cart_on_the_top_flange_with_patterned_loads_is_not_rated_as_the_rule_
                for u in res.unchecked)
     held = capacity(parse_job_text(two.format(extra="braced = true", kip=2, wheels="")))
     assert held.rated
+
+
+CART_RAIL = """schema = 1
+title = "Cart rail over two spans"
+units = "us"
+tags = ["not-lifting"]
+[beam]
+length = "26 ft"
+section = "W12x26"
+material = "A992"
+self_weight = false
+restrained = true
+[[supports]]
+at = "3 ft"
+type = "pin"
+[[supports]]
+at = "14 ft"
+type = "roller"
+[[supports]]
+at = "26 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "26 ft"
+value = "-50 lbf/ft"
+case = "dead"
+[[moving]]
+label = "cart"
+loads = ["-2500 lbf", "-1500 lbf"]
+spacing = ["30 in"]
+travel = ["0 in", "312 in"]
+[criteria]
+deflection = "L/360"
+"""
+
+
+def test_a_wheel_set_of_unequal_axles_is_rated_either_way_round():
+    from shopbeam.design.capacity import _one_way
+    from shopbeam.output import label
+
+    ahead = parse_job_text(CART_RAIL)
+    back = parse_job_text(CART_RAIL.replace('["-2500 lbf", "-1500 lbf"]', '["-1500 lbf", "-2500 lbf"]'))
+    one, other = _one_way(ahead).factor, _one_way(back).factor
+    assert abs(one - other) > 0.01 * one  # the two ways round differ on this rail
+    # either way it is entered, the rating is the lower of the two
+    assert capacity(ahead).factor == pytest.approx(min(one, other), rel=1e-12)
+    assert capacity(back).factor == pytest.approx(min(one, other), rel=1e-12)
+    text = " ".join(label.label_text(label.rating(capacity(ahead))).replace("|", " ").split())
+    assert "either way round" in text
+    # a set alike both ways is not searched twice
+    from shopbeam.design.capacity import turned_round
+    assert turned_round(parse_job_text(CART_RAIL.replace('"-1500 lbf"', '"-2500 lbf"'))) is None

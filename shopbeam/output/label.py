@@ -212,7 +212,9 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                                    exact=max(wheels) / per))
             figs.append(posted(f"MAX MOVING LOAD ({m.label})",
                                axle.si * len(wheels) if alike else sum(wheels), "force", sy,
-                               "anywhere on its travel", where, exact=sum(wheels)))
+                               "anywhere on its travel" + (
+                                   ", either way round" if len(set(m.live)) > 1 else ""),
+                               where, exact=sum(wheels)))
         tot = sum(abs(ld.total_force) for ld in live)
         if tot and len(live) > 1:
             # the sum of the posted figures (never more than they add up to, nor than the
@@ -278,6 +280,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     elif getattr(job, "travelling_hoist", "") and len(live) == 1:
         notes.append("Rated with the hoist anywhere along the member (up to the place given "
                      "out on a boom); other loads as placed in the job.")
+    elif job.moving:
+        notes.append("Rated with the wheel set anywhere on its travel" + (
+            " and either way round" if len(set(job.moving[0].live)) > 1 else "")
+            + (", with the other loads as placed in the job." if live else "."))
     else:
         notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     notes += _held_words(job)
