@@ -1451,3 +1451,99 @@ def test_a_job_that_reads_like_a_lifting_device_carries_the_lifting_caution(tags
     assert bool(job.lifting_hint) == (tags == "[]")
     assert (LIFTING in analyze(job).cautions) == loud
     assert (LIFTING in label.rating(capacity(job)).cautions) == loud
+
+
+# ------------------------------------------ the rules above: other spellings, false alarms
+@pytest.mark.parametrize("depth, held", [("\"3\u2019\"", True), ("\"3\u2032\"", True),
+                                         ('"3 ft."', True), ('"3 in"', False)])
+def test_a_section_size_in_feet_is_held_however_the_feet_are_marked(depth, held):
+    assert _rated(_tube_shelf(depth=depth)) is not held
+
+
+@pytest.mark.parametrize("limit, held", [("\"0.5\u2019\"", True), ('"0.5 ft."', True),
+                                         ('"0.5 in"', False)])
+def test_a_loose_deflection_limit_in_feet_is_held_however_the_feet_are_marked(limit, held):
+    assert _rated(_tube_shelf(deflection=limit)) is not held
+
+
+def test_sound_sizes_in_metres_or_feet_are_read_as_written():
+    si = _tube_shelf(depth='"0.2 m"', width='"0.1 m"').replace('length = "10 ft"',
+                                                              'length = "6 m"')
+    si = si.replace('tags = ["shelf"]', 'tags = ["shelf"]\nunits = "si"').replace(
+        '"3/16 in"', '"6 mm"').replace('at = "10 ft"', 'at = "6 m"').replace(
+        '"-80 lbf/ft"', '"-1 kN/m"')
+    job = parse_job_text(si)
+    assert not [p for p in job.warnings if p.key.startswith("beam.section.")]
+    # a cantilever's absolute limit is judged on twice its length, as L/n is
+    arm = cantilever().replace('[[loads]]', '[criteria]\ndeflection = "0.4 in"\n[[loads]]', 1)
+    assert not [p for p in parse_job_text(arm).warnings if p.key == "criteria.deflection"]
+
+
+@pytest.mark.parametrize("change, held", [
+    (('tags = ["rack", "pallet"]', 'tags = ["rack", "pallets"]'), True),
+    (('title = "Pallet-rack beam pair', 'title = "Palette-rack beam pair'), True),
+    (('notes = "', 'notes = "No damaged pallets. '), True),
+    (('title = "Pallet-rack beam pair', 'title = "Rack level beams, three rails,'), False)])
+def test_the_pallet_members_rule_reads_other_spellings_and_counts(change, held):
+    text = _preset("pallet-rack-beam-pair.toml").replace("\nmembers = 2 ", "\nmembers = 4 ", 1)
+    if "three rails" in change[1]:
+        text = text.replace('tags = ["rack", "pallet"]', 'tags = ["rack"]').replace(
+            "pallet", "unit load")
+    assert change[0] in text
+    job = parse_job_text(text.replace(*change, 1))
+    assert bool([p for p in job.warnings if p.key == "beam.members"]) == held
+
+
+def test_the_pallet_members_rule_leaves_arms_and_support_bars_alone():
+    arm = cantilever(title="Cantilever rack arm under a pallet of plywood").replace(
+        'material = "A500-C"', 'material = "A500-C"\nmembers = 3')
+    assert not [p for p in parse_job_text(arm).warnings if p.key == "beam.members"]
+
+
+@pytest.mark.parametrize("key_line, held", [("live = false", True), ('lc = "dead"', True),
+                                            ('note = "dead load, stays on"', True),
+                                            ('case = "dead"\nkind = "dead"', False)])
+def test_other_ways_of_saying_a_load_is_dead_hold_the_rating(key_line, held):
+    text = _tube_shelf().replace('label = "stock"', 'label = "stock"\n[[loads]]\ntype = '
+                                 f'"uniform"\nvalue = "-20 lbf/ft"\nlabel = "deck"\n{key_line}')
+    assert _rated(text) is not held
+
+
+def test_a_load_labelled_dead_but_live_is_held():
+    text = _tube_shelf().replace('label = "stock"', 'label = "stock"\n[[loads]]\ntype = '
+                                 '"uniform"\nvalue = "-20 lbf/ft"\nlabel = "deck (dead)"')
+    assert not _rated(text)
+    assert _rated(text.replace('label = "deck (dead)"', 'label = "deck (dead)"\ncase = "dead"'))
+
+
+@pytest.mark.parametrize("title, notes, held", [
+    ("Scaffold board, 6 ft", "", True),
+    ("Shelf plank on cleats screwed to the upright", "", True),
+    ("Mezzanine joist, 2x10 at 16 in", "Decked with 2x6 planks", False),
+    ("Plank bridge stringer over the drain", "", False)])
+def test_flat_words_name_the_member_not_what_it_carries(title, notes, held):
+    text = _board("2x10", title).replace('tags = ["shelf"]', f'notes = "{notes}"\ntags = ["shelf"]')
+    job = parse_job_text(text)
+    assert bool([p for p in job.warnings if "lies flat" in p.message]) == held
+
+
+@pytest.mark.parametrize("title, held", [("Stepped box beam, 96 in bay", True),
+                                         ("Box beam replacing the step beams", False),
+                                         ("Pallet support bar in the step of the beams", False)])
+def test_a_step_beam_is_read_by_other_names_and_not_from_its_neighbours(title, held):
+    text = _preset("pallet-rack-beam-pair.toml")
+    line = next(ln for ln in text.splitlines() if ln.startswith("title = "))
+    job = parse_job_text(text.replace(line, f'title = "{title}"'))
+    assert bool([p for p in job.warnings if "step beam" in p.message]) == held
+
+
+def test_a_tube_corner_radius_over_three_walls_is_held():
+    assert not _rated(_tube_shelf(extra='corner_radius = "0.75 in"'))  # 4 x the 3/16 wall
+    assert _rated(_tube_shelf(extra='corner_radius = "0.5 in"'))  # under 3 x
+
+
+@pytest.mark.parametrize("title", ["A-frame lumber rack arm", "Tool trolley shelf",
+                                   "Shelf beside the crane bay door", "Shelf for boom box"])
+def test_shop_words_that_only_look_like_lifting_are_not_read_as_a_lifting_device(title):
+    job = parse_job_text(cantilever(title=title, tags='["shelf"]'))
+    assert not job.lifting_hint

@@ -292,7 +292,10 @@ def test_fatigue_keys_on_a_monorail_with_a_hoist_on_the_flange_tips_hold_the_rat
         .read_text().replace("[criteria]", '[criteria]\nfatigue_category = "B"\n'
                                            'cycles = 2000000', 1)
     job = parse_job_text(text)
-    assert any("local flange bending" in r for r in capacity(job).not_rated)
+    # rated travelling the span (its hoist is a point load at mid-span): the moving load's
+    # range over the travel is not worked out either, and fatigue holds the rating
+    cap = capacity(job)
+    assert not cap.rated and any(r.startswith("fatigue not checked") for r in cap.not_rated)
     res = analyze(job)
     assert "fatigue" not in [c.name for c in res.checks]  # no PASS on the global range alone
     assert any(u.name == "fatigue under repeated lifts" for u in res.unchecked)

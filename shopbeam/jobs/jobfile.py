@@ -528,14 +528,16 @@ class _Reader:
                 hint = (f": a load's case is written case = \"{word}\" (dead loads stay on "
                         "while the live loads are rated)")
             path = f"{prefix}.{k}" if prefix else k
-            if homes == ["criteria"] and here != "criteria":
+            dead_said = here == "loads" and isinstance(table[k], str) and bool(
+                _DEAD_WORDS.search(table[k]) or _DEAD_VALUE.match(table[k].strip()))
+            if homes == ["criteria"] and here != "criteria" and not dead_said:
                 # a limit or factor written in the wrong table changes the figure unseen
                 self.hold(f"unknown key {k!r} in {label} is ignored{hint}; until it is, the "
                           "checks do not use it and no rating is posted", path,
                           f"{path} belongs under [criteria]: written here it is not read, so "
                           "the figure would leave it out. Move it")
                 continue
-            meant = _lowering_meant(str(k), here, near, homes, table[k])
+            meant = _lowering_meant(str(k), here, near, homes, table[k], table)
             if meant and here == "loads" and str(k).lower() in ("dead", "dead_load",
                                                                 "permanent"):
                 meant = "case = \"dead\""
@@ -695,10 +697,15 @@ _BOOL_KEYS = frozenset({"welded", "patterned", "brace", "wet_service"})
 # a load's case written under another key ("cas", "load_case"), with a value that says dead
 _CASE_KEY = re.compile(r"^(?:cas|cse|csae|caes|case?s|load_?cases?|loadcase|case_?type|"
                        r"load_?type|load_?kind|kind|category|dead_?or_?live)$", re.IGNORECASE)
-_DEAD_VALUE = re.compile(r"^\s*(?:dead|d|dl|permanent|dead[ _-]?load)\s*$", re.IGNORECASE)
+# words in a load's text that say the load is dead ("dead load, stays on", "(dead)")
+_DEAD_WORDS = re.compile(r"(?<![\w-])(?:dead(?:[ _-]?load)?|self[ _-]?weight|permanent(?: load)?)"
+                         r"(?![\w-])(?! ?end)", re.IGNORECASE)
+_DEAD_VALUE = re.compile(r"^\s*(?:dead|d|dl|permanent|dead[ _-]?load|permanent[ _-]?load|"
+                         r"self[ _-]?weight|fixed|static)\s*$", re.IGNORECASE)
 
 
-def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], value=None) -> str:
+def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], value=None,
+                    row=None) -> str:
     """What an unknown `key` in table `here` reads like when that is a key that lowers the
     figure (see `_LOWERING`), in words, or "". Every unknown key of [criteria] does: each
     key there sets a limit or a factor."""
@@ -716,9 +723,13 @@ def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], valu
                 return f"{k} of {where}"
     if here == "criteria" and not _CRITERIA_WORDS_ONLY.match(key):
         return "a limit or factor of [criteria]"
-    if here == "loads" and _DEAD_VALUE.match(value if isinstance(value, str) else "") and (
-            _CASE_KEY.match(key) or (near and near[0] == "case")):
-        # a slip of `case` with a dead value: the dead load would be scaled as live
+    said_dead = (isinstance(value, str) and (_DEAD_VALUE.match(value.strip().rstrip(".!"))
+                                             or _DEAD_WORDS.search(value))) \
+        or (key.lower() == "live" and value is False) \
+        or (key.lower() in ("dead", "dead_load", "permanent", "is_dead") and value is True)
+    if here == "loads" and said_dead and not (_is_table(row) and row.get("case") == "dead"):
+        # any key of a load that says it is dead, but not `case`: the dead load would be
+        # counted as live and rated up with the others (a `case = "dead"` beside it says so)
         return "case = \"dead\" of [[loads]] (a dead load stays on; read as live it is rated " \
                "up with the others)"
     for words, table, k in _LOWERING_WORDS:
@@ -1351,6 +1362,13 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
     if not isinstance(ld.get("uplift", False), bool):
         r.error("uplift must be true or false (true: this load is meant to push up)",
                 f"{key}.uplift")
+    if label and case != "dead" and _search(_DEAD_WORDS, _as_words(label)):
+        r.hold(f"the label {label!r} says this load is dead, but it has no case = \"dead\": it "
+               "is counted as live load and rated up with the others, so no rating is posted. "
+               "Write case = \"dead\" on it (it then stays on at its value), or change the label",
+               f"{key}.label",
+               f"{key} is labelled {label!r} but is live: write case = \"dead\" on it, or change "
+               "the label")
     common = dict(label=label, case=case, key=key, patterned=patterned)
     if kind != "point" and ld.get("flange") == "bottom":
         r.warn("flange = \"bottom\" is read on point loads only: this spread load is taken as "
@@ -1518,29 +1536,54 @@ def _wide_first(r: _Reader, spec, key: str, axis) -> None:
 
 
 # Words that say a board or bar lies flat (a plank, a shelf board): read on edge by default
-_LAID_FLAT = re.compile(r"\b(?:planks?|plank(?:ing|ed)|(?:laid|lying|lies|laying|set|placed) "
-                        r"flat|flat[- ](?:board|plank|shelf)s?|flatwise|on (?:the |its )?flat|"
-                        r"shelf[- ]boards?|boards? (?:laid|set|placed) (?:across|on|over))\b",
-                        re.IGNORECASE)
-_ON_EDGE = re.compile(r"\b(?:on (?:its |the )?edge|edgewise|edge[- ]?up|upright|standing)\b",
-                      re.IGNORECASE)
+_LAID_FLAT = re.compile(r"\b(?:planks?|plank(?:ing|ed)|(?:laid|lay|lays|lying|lies|laying|set|"
+                        r"placed|sits?) flat|flat[- ](?:board|plank|shelf)s?|flat side (?:down|"
+                        r"up)|flatwise|on (?:the |its )?flat|(?:on|rests on) its wide face|"
+                        r"wide face (?:down|up)|shelf[- ]boards?|scaffold(?:ing)?[- ]?boards?|"
+                        r"walk[- ]?boards?|deck[- ]?boards?|stair treads?|treads?|bench[- ]?tops?|"
+                        r"boards? (?:laid|set|placed) (?:across|on|over))\b", re.IGNORECASE)
+_FLAT_TAG = re.compile(r"^(?:planks?|shelf[- ]?boards?|flat|laid[- ]flat|treads?|walk[- ]?boards?)$",
+                       re.IGNORECASE)
+# the member said to stand on edge
+_ON_EDGE = re.compile(r"\b(?:on (?:its |the )?edge|edgewise|edge[- ]?(?:up|on)|stands? upright|"
+                      r"standing on (?:its |the )?edge|(?:set|stood|standing) upright|"
+                      r"deep side up)\b", re.IGNORECASE)
+# a title naming a framing member: words of boards or planks there are what it carries
+_FRAMING = re.compile(r"\b(?:joists?|stringers?|rails?|beams?|cross ?bars?|bars?|arms?|headers?|"
+                      r"purlins?|girts?|rafters?|studs?|ledgers?|cleats?|bearers?|"
+                      r"sleepers?|runners?|supports?)\b", re.IGNORECASE)
 
 
-def _said_laid_flat(r: _Reader, section, axis, title, notes) -> None:
+_ABOUT_OTHER = re.compile(r"\b(?:on|onto|across|over|between|to|from|under|below|above|"
+                          r"the|two|three|four|2|3|4|with|and)\s+(?:\w+\s+)?$", re.IGNORECASE)
+
+
+def _names_framing(title) -> bool:
+    """The title names the member as a framing member (a joist, a rail), not what it sits
+    on or carries ("Shelf plank on cleats" names a plank)."""
+    words = _as_words(title)
+    return any(not _ABOUT_OTHER.search(words[max(0, m.start() - 20):m.start()])
+               for m in _FRAMING.finditer(words))
+
+
+def _said_laid_flat(r: _Reader, section, axis, title, notes, tags=()) -> None:
     """A board or bar the job's words say lies flat ("2x10 plank", "shelf board laid
-    across the brackets") but with no axis: it is read on edge, many times stronger than
-    flat. NOT RATED until axis says which."""
+    across the brackets", a tag "plank") but with no axis: it is read on edge, many times
+    stronger than flat. NOT RATED until axis says which. Not where the title names a framing
+    member (a joist "decked with planks", a rail under shelf boards): the words are then
+    about what it carries."""
     if axis is not None or section is None or getattr(section, "shape", "") != "rect-bar":
         return
     d = getattr(section, "dims", {}) or {}
     h, b = d.get("h"), d.get("b")
     if not (h and b and h > 1.5 * b):  # on edge and flat differ little for a squarish bar
         return
-    # the member's own words (title, notes); a load's label names what it carries ("deck
-    # boards" on a joist)
-    said = _words_found(_LAID_FLAT, title, notes, (), ())
-    if not said or _words_found(_ON_EDGE, title, notes, (), ()):
-        return
+    said = [f"tag {t!r}" for t in tags if isinstance(t, str) and _FLAT_TAG.match(t.strip())]
+    if not said and not _names_framing(title):
+        said = _words_found(_LAID_FLAT, title, notes, (), ())
+    if not said or _words_found(_ON_EDGE, title, notes, (), ()) or any(
+            p.key == "beam.section" and "wide first" in p.message for p in r.problems):
+        return  # (a size written wide first is held for its axis already)
     r.hold(f"the job says the member lies flat ({'; '.join(said[:2])}), but "
            f"{section.designation!r} is read ON EDGE (bent about its strong axis, deep side "
            "up), many times stiffer and stronger than laid flat. Write axis = \"weak\" under "
@@ -1687,21 +1730,68 @@ _SECTION_DIMS = ("depth", "width", "size", "od", "diameter", "wall", "thickness"
                  "fillet_radius", "plate_width", "plate_thickness", "gap")
 _FEET_OR_METRES = re.compile(r"\d\s*(?:ft|feet|foot|yd|yards?|'|m|metres?|meters?)\s*$",
                              re.IGNORECASE)
+_IN_METRES = re.compile(r"\d\s*(?:m|metres?|meters?)\s*$", re.IGNORECASE)
+# the thickness-like sizes: none is ever a foot or more than 2 in (a wall "3/16 ft")
+_SECTION_THIN = frozenset({"wall", "thickness", "flange_thickness", "web_thickness",
+                           "stem_thickness", "corner_radius", "fillet_radius",
+                           "plate_thickness", "gap"})
 
 
-def _section_dims_in_feet(r: _Reader, spec) -> None:
-    """A [beam.section] dimension typed in feet or metres: NOT RATED until written in inches
-    or millimetres (the unit a section is measured in)."""
+def _feet_or_metres(text) -> bool:
+    """A length typed in feet or metres, however the feet are marked ("3'", "3’", "3′",
+    "3 ft.")."""
+    if not isinstance(text, str):
+        return False
+    t = text.strip().rstrip(".").replace("\u2019", "'").replace("\u2032", "'").replace(
+        "\u2018", "'").replace("`", "'")
+    return bool(_FEET_OR_METRES.search(t))
+
+
+def _corner_radius(r: _Reader, section, material, system: str) -> None:
+    """A typed-in tube's corner radius over 3 x its wall: past what ASTM A500 allows a tube's
+    outside corner (3 t at most, from memory) and a likely unit slip ("5 in" for "5 mm"); the
+    wall checks' k grows with it (AISC 360-16 K2), so NOT RATED."""
+    if getattr(material, "kind", "steel") not in ("steel", "stainless"):
+        return  # an extrusion's corners are its die's
+    d = getattr(section, "dims", None) or {}
+    rt, t = d.get("r_typed"), d.get("t_nom")
+    if not rt or not t or rt <= 3 * t * (1 + 1e-9):
+        return
+    f = lambda x: units.fmt(x, "small_length", system)  # noqa: E731
+    r.hold(f"corner_radius = {f(rt)} is {rt / t:.2g} x the {f(t)} wall: a tube's outside corner "
+           "is at most 3 x its wall (ASTM A500, from memory), and the wall checks' k grows with "
+           "the radius (AISC 360-16 K2), so no rating is posted. Check its unit (\"5 mm\", not "
+           "\"5 in\"), or leave it out (k = 1.5 t)", "beam.section.corner_radius",
+           f"the corner_radius {f(rt)} is over 3 x the {f(t)} wall: check its unit, or leave it "
+           "out")
+
+
+def _section_dims_in_feet(r: _Reader, spec, length, system: str) -> None:
+    """A [beam.section] size typed in feet or metres where that reading is far from a shop
+    section ("3 ft" for "3 in": a 36 in deep tube on a 12 ft span): NOT RATED until written
+    in inches or millimetres. A size in feet or metres that makes a sound section is read as
+    written (a 2 ft deep girder over 30 ft, 0.2 m on a 6 m span)."""
     if not _is_table(spec):
         return
-    said = [(k, spec[k]) for k in _SECTION_DIMS
-            if isinstance(spec.get(k), str) and _FEET_OR_METRES.search(spec[k].strip())]
+    said = []
+    for k in _SECTION_DIMS:
+        v = spec.get(k)
+        if not _feet_or_metres(v):
+            continue
+        try:
+            size = units.parse(v, "length", f"beam.section.{k}")
+        except InputError:
+            continue  # its own message says what is wrong
+        other = system == "us" and bool(_IN_METRES.search(v.strip().rstrip(".")))
+        if other or (k in _SECTION_THIN and size > 2 * units.IN) or (
+                k not in _SECTION_THIN and length and length / size < 12):
+            said.append((k, v))
     if not said:
         return
     k, v = said[0]
-    r.hold(f"{k} = {v!r} is typed in feet or metres; a section's sizes are measured in inches "
-           "or millimetres, and one in feet (\"3 ft\" for \"3 in\") makes the member many "
-           "times stronger than it is. Write it in in or mm" + (
+    r.hold(f"{k} = {v!r} is typed in feet or metres, and read so the section is far from any "
+           "shop section (\"3 ft\" for \"3 in\" makes the member many times stronger than it "
+           "is); no rating is posted until it is written in inches or millimetres" + (
                f" (and {', '.join(x for x, _ in said[1:])})" if len(said) > 1 else ""),
            f"beam.section.{k}",
            f"the section's {k} ({v!r}) is typed in feet or metres: write it in inches or mm")
@@ -1952,17 +2042,23 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
 # on a shelf) count only in the phrase that names the lifting part.
 NOT_LIFTING = "not-lifting"  # the tag that says a job that reads like one is not a lifting device
 _LIFTING_WORDS = re.compile(
-    r"\b(hoists?|hoisting|monorails?|jibs?|cranes?|trolleys?|chain[- ]?falls?|chain[- ]?blocks?|"
+    r"\b(hoists?|hoisting|monorails?|jibs?|cranes?(?! bays?\b| ?way doors?\b)|"
+    r"(?<!tool )(?<!tea )(?<!sack )(?<!hand )(?<!shopping )(?<!service )(?<!drinks )"
+    r"(?<!platform )trolleys?(?! (?:shel(?:f|ves)|carts?|tops?)\b)|chain[- ]?falls?|chain[- ]?blocks?|"
     r"lifting|lift beams?|spreaders?|davits?|gantry|gantries|below[- ]the[- ]hook|rigging|"
-    r"block (?:and|&|n'?) tackle|tackle blocks?|pulling beams?|winch|winches|come[- ]?alongs?|a-?frames?|pad[- ]?eyes?|"
+    r"block (?:and|&|n'?) tackle|tackle blocks?|pulling beams?|winch|winches|come[- ]?alongs?|"
+    r"a-?frames?(?![- ](?:\w+[- ])?(?:racks?|ladders?|signs?|tables?|carts?|shel(?:f|ves)|"
+    r"stands?|houses?)\b)|pad[- ]?eyes?|"
     r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
     r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
     r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?|"
     r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:on|from|under) (?:the|a) hook|"
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
     r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
-    r"pallet|bar) lifters?|lifters?|magnet beams?|booms?|tackle beams?|puller beams?|"
-    r"lift rails?|overhead lifts?|(?:to|for) lift(?! trucks?\b)|hoysts?|monorials?|tralleys?|"
+    r"pallet|bar) lifters?|lifters?|magnet beams?|booms?(?! ?box(?:es)?\b)|tackle beams?|"
+    r"puller beams?|"
+    r"lift rails?|overhead lifts?|(?<!easy )(?<!easier )(?:to|for) lift(?! trucks?\b)"
+    r"(?! (?:\w+ )?(?:off|out|down)\b)|hoysts?|monorials?|tralleys?|"
     r"equali[sz]er beams?|sling bars?|lift(?:ing)? frames?|lift(?:ing)? bars?|yokes?|"
     r"load bars?)\b",
     re.IGNORECASE)
@@ -2359,37 +2455,71 @@ def _per_member_loads(r: _Reader, raw_loads, members) -> None:
                "the loads for all the members, or members = 1")
 
 
-_PALLET = re.compile(r"\bpallets?(?![- ]?(?:jacks?|trucks?|wrap))\b", re.IGNORECASE)
-_PAIR = re.compile(r"\b(?:pair|front and back|front & back|two beams|2 beams)\b",
-                   re.IGNORECASE)
+_PALLET = re.compile(r"\b(?:pallet|palette|skid)s?(?![- ]?(?:jacks?|trucks?|wrap))",
+                     re.IGNORECASE)
+_PAIR = re.compile(r"\b(?:pair|front and (?:back|rear)|front & (?:back|rear)|two beams|"
+                   r"2[- ]?beams?|twin beams?|double beams?)\b", re.IGNORECASE)
+# the member is not one of a level's beams: an arm, a support bar, a deck support
+_NOT_LEVEL_BEAM = re.compile(r"\b(?:arms?|support bars?|pallet supports?|deck supports?|"
+                             r"cross ?bars?|drums? supports?|stringers?)\b", re.IGNORECASE)
+# words giving a count of members other than a pair ("three rails", "two pairs")
+_OTHER_COUNT = re.compile(r"\b(?:(?:three|four|five|six|seven|eight|nine|ten|[3-9]|1\d)\s+"
+                          r"(?:\w+\s+)?(?:rails?|beams?|brackets?|members?|bars?|joists?|arms?|"
+                          r"stringers?)|(?:two|2|several|three|3) pairs|pairs of|in pairs|"
+                          r"middle (?:rail|beam|bar))\b", re.IGNORECASE)
 
 
-def _rack_members(r: _Reader, title, notes, tags, raw_loads, members) -> None:
+def _plain_found(words: re.Pattern, title, notes, tags, raw_loads) -> list[str]:
+    """Where title, notes, a tag or a load label use `words`, read plainly (a "no" before
+    them denies nothing here: "no damaged pallets" still speaks of pallets)."""
+    said = [f"{key}: {m.group(0)!r}" for key, text in (("title", title), ("notes", notes))
+            for m in [words.search(_as_words(text))] if m]
+    said += [f"tag {t!r}" for t in tags if isinstance(t, str) and words.search(_as_words(t))]
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        label = ld.get("label") if _is_table(ld) else None
+        if isinstance(label, str) and words.search(_as_words(label)):
+            said.append(f"loads[{i}] is labelled {label!r}")
+            break
+    return said
+
+
+def _rack_members(r: _Reader, title, notes, tags, raw_loads, members, supports) -> None:
     """A pallet-rack level rests on a front and a back beam: `members` = 2. More beams than
     that sharing the level evenly is a slip of the count (20 for 2, or beams of several levels
     counted as one level's), and the label's per-level figure grows with it: NOT RATED. A job
-    that says "pair" (or front and back) with another count is held the same way."""
+    that says "pair" (or front and back) with another count is held the same way. Not for an
+    arm, a support bar or a cantilever (no beams of a level), nor where the words give another
+    count ("three rails", "two pairs")."""
     if not isinstance(members, int) or isinstance(members, bool) or members < 1:
         return
-    pallet = "pallet" in tags or _words_found(_PALLET, title, notes, (), raw_loads)
-    pair = _words_found(_PAIR, title, notes, (), raw_loads)
+    held = {round(sp.at, 9) for sp in supports if sp.takes_force}
+    if len(held) < 2 or _plain_found(_NOT_LEVEL_BEAM, title, "", (), ()):
+        return  # a cantilever arm, or a member that is not a level's beam
+    if _plain_found(_OTHER_COUNT, title, notes, (), raw_loads):
+        return  # the job counts its members itself
+    pallet = _plain_found(_PALLET, title, notes, tags, raw_loads)
+    pair = _plain_found(_PAIR, title, notes, (), raw_loads)
     if pallet and members > 2:
         r.hold(f"members = {members} shares each level's load evenly among {members} beams, "
-               "but a pallet-rack level rests on a front and a back beam (members = 2); pallets "
-               "do not spread evenly onto more beams, and the label's per-level figure grows "
-               "with the count. Write members = 2 for a beam pair, or rate one beam with its "
-               "own share of the load (members = 1)", "beam.members",
-               f"members = {members} on a pallet rack, whose level rests on a front and back "
-               "beam: write members = 2, or rate one beam with its own share (members = 1)")
+               f"but the job is a pallet rack ({pallet[0]}), whose level rests on a front and a "
+               "back beam (members = 2); pallets do not spread evenly onto more beams, and the "
+               "label's per-level figure grows with the count, so no rating is posted. Write "
+               "members = 2 for a beam pair, or rate one beam with its own share of the load "
+               "(members = 1)", "beam.members",
+               f"members = {members} on a pallet rack ({pallet[0]}), whose level rests on a "
+               "front and back beam: write members = 2, or rate one beam with its own share "
+               "(members = 1)")
     elif pair and members > 2:
-        r.hold(f"members = {members}, but the job says {pair[0].split(': ', 1)[-1]}: the "
-               f"load is shared evenly among {members} members and the label's figure for "
-               "them all grows with the count. Write members = 2 for a pair", "beam.members",
-               f"members = {members}, but the job says it is a pair: write members = 2")
-    elif pair and pallet and members == 1:
-        r.warn(f"members = 1, but the job says {pair[0].split(': ', 1)[-1]}: the loads entered "
-               "are taken by one beam alone (the figure is for one beam carrying them all, on "
-               "the low side). Write members = 2 if the loads are the pair's", "beam.members")
+        r.hold(f"members = {members}, but the job says it is a pair ({pair[0]}): the load is "
+               f"shared evenly among {members} members and the label's figure for them all "
+               "grows with the count, so no rating is posted. Write members = 2 for a pair, "
+               "or say the count in the title (\"three rails\")", "beam.members",
+               f"members = {members}, but the job says it is a pair ({pair[0]}): write "
+               "members = 2")
+    elif pallet and members == 1 and _plain_found(_PAIR, title, "", (), ()):
+        r.warn(f"members = 1, but the title says a pair ({pair[0]}): the loads entered are "
+               "taken by one beam alone (the figure is for one beam carrying them all, on the "
+               "low side). Write members = 2 if the loads are the pair's", "beam.members")
 
 
 def _said_key(said: str) -> str:
@@ -2399,27 +2529,47 @@ def _said_key(said: str) -> str:
     return "tags" if said.startswith("tag") else said.split(":", 1)[0]
 
 
-_STEP_BEAM = re.compile(r"\bstep(?:ped)?[- ]?beams?\b", re.IGNORECASE)
+_STEP_BEAM = re.compile(r"\b(?:step(?:ped)?[- ]?(?:type[- ]?)?(?:box[- ]?)?beams?|"
+                        r"step[- ]type|beams? with (?:a |an? [\w/\- ]{1,14} )?step|"
+                        r"box beams? with [\w/\- ]{0,14}step)\b", re.IGNORECASE)
+_STEP_TAG = re.compile(r"^(?:step|step[- ]?beams?|stepped)$", re.IGNORECASE)
+# the member replaces or sits beside step beams: the words are about other members
+_STEP_OTHER = re.compile(r"\b(?:replac\w*|instead of|between|into|under|in place of|"
+                         r"beside|on|onto|of the)\s+(?:the\s+)?(?:\w+\s+){0,3}step",
+                         re.IGNORECASE)
 
 
 def _step_beam(r: _Reader, title, notes, tags, raw_loads, section) -> None:
-    """A pallet-rack step beam: its deck or pallets bear on the step along one edge, off the
-    shear centre, which twists it, and its roll-formed section (a step in a box or channel,
-    cold-formed: AISI S100) is not the plain section entered. Neither is checked here, so no
-    rating is posted on it. (A channel or angle entered as one is left to the open shapes'
-    torsion rule, with beam.restrained: the section entered is the one used.)"""
-    if getattr(section, "shape", "") in ("channel", "angle"):
-        return
-    said = _words_found(_STEP_BEAM, title, notes, tags, raw_loads)
+    """A pallet-rack step beam, named by the job's title, a tag or a load label: its deck or
+    pallets bear on the step along one edge, off the shear centre, which twists it, and its
+    roll-formed section (a step in a box or channel, cold-formed: AISI S100) is not the
+    section entered, whatever that is (a tube, a channel). Neither is checked here, so no
+    rating is posted on it. Words that place the member beside, into or instead of step
+    beams ("set into the step of the front beam", "replacing the step beams") are about its
+    neighbours, and an arm or support bar is not one.)"""
+    if _plain_found(_NOT_LEVEL_BEAM, title, "", (), ()):
+        return  # a support bar or an arm: the step beams are its neighbours
+    said = [f"tag {t!r}" for t in tags if isinstance(t, str) and _STEP_TAG.match(t.strip())]
+    for key, text in (("title", title), ("notes", notes)):
+        words = _as_words(text)
+        m = _search(_STEP_BEAM, words)  # "no step beams in this bay" denies it
+        if m and not _STEP_OTHER.search(words):
+            said.append(f"{key}: {m.group(0)!r}")
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        label = ld.get("label") if _is_table(ld) else None
+        if isinstance(label, str) and _STEP_BEAM.search(_as_words(label)):  # (a load sits on
+            # the member: "pallet on the step beams" names it)
+            said.append(f"loads[{i}] is labelled {label!r}")
+            break
     if not said:
         return
     r.hold(f"the job names a step beam ({said[0]}): its deck or pallets bear on the step along "
            "one edge, off the shear centre, and twist it (torsion, not checked here), and a "
-           "roll-formed step section is cold-formed steel (AISI S100) with the step cut out of "
-           "the box, not the plain section entered; no rating is posted. Post the rack "
+           "roll-formed step section is cold-formed steel (AISI S100) with the step formed "
+           "out of the section, not the section entered; no rating is posted. Post the rack "
            "maker's rated capacity for the beam, or have it checked", _said_key(said[0]),
            f"a step beam ({said[0]}): the load on its step twists it and its cold-formed "
-           "section is not the plain one entered; neither is checked here")
+           "section is not the one entered; neither is checked here")
 
 
 def _rack_impact_slip(r: _Reader, criteria, tags, loads) -> None:
@@ -3861,8 +4011,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                material=material)
         if section is not None:
             _plausible_section(section, r)
-            _section_dims_in_feet(r, beam["section"])
-            _said_laid_flat(r, section, axis, title, notes)
+            _section_dims_in_feet(r, beam["section"], length, system)
+            _corner_radius(r, section, material, system)
+            _said_laid_flat(r, section, axis, title, notes, tags)
             _same_both_ways(r, section, axis)
             stubby = stubby_words(length, section, system, beam.get("length")) \
                 if length is not None else ""
@@ -4049,13 +4200,15 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if is_lifting(tags) or criteria.lifting:
         _trolley_spacing(r, moving, system, data.get("moving"), length)
     upward += _upward_wheels(r, moving, system)
-    if (length is not None and criteria.deflection_abs is not None
-            and criteria.deflection_abs > length / LOOSEST_COMMON_RATIO):
+    judged = _judged_longest(supports, length) or length
+    if (judged is not None and criteria.deflection_abs is not None
+            and criteria.deflection_abs > judged / LOOSEST_COMMON_RATIO):
         said = (f"deflection = {criteria.deflection!r} is more than 1/{LOOSEST_COMMON_RATIO:g} "
-                f"of the whole {units.fmt(length, 'length', system)} member, looser than any "
-                "common limit (racks, shelves and floors use L/180 to L/360): check the number "
-                "and its unit, or write the limit as \"L/240\"")
-        if _FEET_OR_METRES.search(str(criteria.deflection).strip()):
+                f"of the longest length it is judged on ({units.fmt(judged, 'length', system)}"
+                "; a cantilever or overhang on twice its own), looser than any common limit "
+                "(racks, shelves and floors use L/180 to L/360): check the number and its "
+                "unit, or write the limit as \"L/240\"")
+        if _feet_or_metres(str(criteria.deflection)):
             # "0.5 ft" for "0.5 in": a limit in feet or metres this loose is a unit slip; a
             # loose limit meant on purpose is written in inches or mm
             r.hold(said + ". Typed in feet or metres, it is most often \"ft\" for \"in\" (or m "
@@ -4079,7 +4232,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _step_beam(r, title, notes, tags, raw_loads, section)
     _rack_members(r, title, notes, tags, raw_loads,
-                  beam.get("members", 1) if isinstance(beam, dict) else None)
+                  beam.get("members", 1) if isinstance(beam, dict) else None, supports)
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)

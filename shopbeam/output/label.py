@@ -462,6 +462,33 @@ def _governing_how(job, cap) -> str:
     return ""
 
 
+def _first_clause(message: str) -> str:
+    """A warning's words up to its first colon outside brackets and quotes (the short form
+    the label carries)."""
+    depth, quote = 0, ""
+    for i, ch in enumerate(message):
+        if quote:
+            quote = "" if ch == quote else quote
+        elif ch in "'\"" and (i == 0 or not message[i - 1].isalnum()):
+            quote = ch
+        elif ch in "([{":
+            depth += 1
+        elif ch in ")]}":
+            depth = max(depth - 1, 0)
+        elif ch == ":" and depth == 0:
+            return message[:i]
+    return message
+
+
+def _lifting_band(r: "Rating") -> str:
+    """The lifting band of a member that is not a lifting device: NOT FOR LIFTING, unless the
+    job reads like one (it then carries the lifting caution, and is not rated until tagged)."""
+    if any(c.startswith("LIFTING DEVICE") for c in r.cautions):
+        return ("LIFTING DEVICE? The job reads like one but is not tagged lifting: tag it "
+                "lifting, or not-lifting if it is not one")
+    return "NOT FOR LIFTING"
+
+
 def _weld_words(job, cap) -> list[str]:
     """A welded built-up I-section (typed in by its plates): the rating rests on the
     flange-to-web welds carrying the shear flow q = V Q / I at the rated load (AISC 360-16
@@ -600,7 +627,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)],
         date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,
         cautions=tuple(cautions_for(job.tags, job.caution_lifting)), unchecked=unch, notes=tuple(notes),
-        warnings=tuple(f"{p.key}: {p.message.split(':')[0]}" for p in job.warnings
+        warnings=tuple(f"{p.key}: {_first_clause(p.message)}" for p in job.warnings
                        if getattr(p, "warning", False)),
         lifting_profile=_profile_name(job),
         governing_state=pc.governing_state if status == "rated" else "",
@@ -678,7 +705,7 @@ def label_text(r: Rating, width: int = 40) -> str:
     if r.lifting:
         row(_lifting_words(r))
     else:
-        row("NOT FOR LIFTING")
+        row(_lifting_band(r))
     if r.unchecked:
         rule("-")
         row("NOT CHECKED:")
@@ -797,7 +824,7 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
     h += [f'<p class="meta"><b>INPUT WARNING</b> {e(w)} (see shopbeam check)</p>'
           for w in r.warnings]
     h.append(f'<p class="meta">Basis: {e(r.basis)} &nbsp; Date: {e(r.date)}</p>')
-    h.append('<div class="lift">' + e(_lifting_words(r) if r.lifting else "NOT FOR LIFTING")
+    h.append('<div class="lift">' + e(_lifting_words(r) if r.lifting else _lifting_band(r))
              + "</div>")
     if r.unchecked:
         h.append("<p class=meta><b>Not checked:</b></p><ul>"
