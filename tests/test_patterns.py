@@ -337,3 +337,61 @@ def test_the_json_of_a_patterned_bending_check_gives_the_cb_and_mn_its_limit_res
     p = c["params"]
     assert p["Mn"] / p["Omega"] == pytest.approx(p["moment_limit"], rel=1e-12)
     assert f"Cb {p['Cb']:.3f}" in c["formula"]
+
+
+def test_a_fixed_end_under_patterned_loads_names_its_moment_both_ways_and_its_largest_shear():
+    # two fixed ends and two inner supports, a patterned ramp: loading only the far spans
+    # turns the end moment at 0 ft round. Checked against every pattern solved one by one.
+    from itertools import product
+
+    from shopbeam.design import loading
+    from shopbeam.design.connections import fixed_end_moments
+    from shopbeam.engine.solver import sound_solve
+
+    text = """schema = 1
+title = "ramp over three spans, fixed ends"
+tags = ["not-lifting"]
+[beam]
+length = "30 ft"
+section = "W8x18"
+material = "A992"
+self_weight = false
+restrained = true
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[supports]]
+at = "8 ft"
+type = "roller"
+[[supports]]
+at = "19 ft"
+type = "roller"
+[[supports]]
+at = "30 ft"
+type = "fixed"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "30 ft"
+value = "-40 lbf/ft"
+case = "dead"
+[[loads]]
+type = "linear"
+start = "0 ft"
+end = "30 ft"
+value = ["0 lbf/ft", "-600 lbf/ft"]
+patterned = true
+"""
+    job = parse_job_text(text)
+    ends = fixed_end_moments(job, sound_solve(job.beam()))
+    ss = loading.state_set(job)
+    n = len(ss.spans)
+    states = [ss.state(1.0, tuple(i for i in range(n) if on[i]))
+              for on in product((0, 1), repeat=n)]  # every pattern: the spans loaded
+    m0 = [st.reactions[0].moment for st in states]
+    v0 = [st.reactions[0].force for st in states]
+    first = ends[0]
+    assert abs(first["moment"]) == pytest.approx(max(abs(m) for m in m0), rel=1e-9)
+    assert abs(first["force"]) == pytest.approx(max(abs(v) for v in v0), rel=1e-9)
+    other = [m for m in m0 if m * first["moment"] < 0]
+    assert other and first["moment_reversed"] == pytest.approx(max(other, key=abs), rel=1e-9)

@@ -55,9 +55,18 @@ def fixed_end_moments(job, sol) -> list[dict]:
     states, words = _states(job, sol)
     out = []
     for i in fixed:
-        best = max((st.reactions[i] for st in states), key=lambda r: abs(r.moment))
+        here = [st.reactions[i] for st in states]
+        best = max(here, key=lambda r: abs(r.moment))
+        # the largest shear over the states (not only the one beside the largest moment),
+        # and the largest moment the other way where the end's moment reverses (patterns,
+        # wheels): the connection must develop both
+        shear = max(here, key=lambda r: abs(r.force)).force
+        other = [r.moment for r in here if r.moment * best.moment < 0]
+        back = max(other, key=abs) if other else 0.0
         out.append({"at": float(best.at), "moment": float(best.moment),
-                    "force": float(best.force), "over": words})
+                    "force": float(shear), "over": words,
+                    "moment_reversed": float(back)
+                    if abs(back) > 0.01 * abs(best.moment) else 0.0})
     return out
 
 
@@ -73,8 +82,10 @@ def connection_notes(job, sol) -> list[str]:
                    "checked here.")
     for f in fixed_end_moments(job, sol):
         out.append(f"Fixed end at {units.fmt(f['at'], 'length', sy)}: the connection must "
-                   f"develop a moment of {units.fmt(abs(f['moment']), 'moment', sy)} with a "
-                   f"shear of {units.fmt(abs(f['force']), 'force', sy)}"
+                   f"develop a moment of {units.fmt(abs(f['moment']), 'moment', sy)}"
+                   + (f" (and {units.fmt(abs(f['moment_reversed']), 'moment', sy)} the other "
+                      "way: it reverses)" if f.get("moment_reversed") else "")
+                   + f" with a shear of {units.fmt(abs(f['force']), 'force', sy)}"
                    + (f" ({f['over']})" if f["over"] else "")
                    + _moment_connection(job) + " A bolted shear tab or clip angle is a pin: "
                    "then re-run with type = \"pin\". The connection is not checked here.")

@@ -527,8 +527,10 @@ def _connection_words(job, k: float) -> list[str]:
                 "load puts through them (see shopbeam solve; connections are not checked)."]
     sy = job.units
     parts = [f"the fixed end at {units.fmt(f['at'], 'length', sy)} develops "
-             f"{units.fmt(abs(f['moment']), 'moment', sy)} with "
-             f"{units.fmt(abs(f['force']), 'force', sy)} of shear" for f in ends]
+             f"{units.fmt(abs(f['moment']), 'moment', sy)}"
+             + (f" and {units.fmt(abs(f['moment_reversed']), 'moment', sy)} the other way"
+                if f.get("moment_reversed") else "")
+             + f" with {units.fmt(abs(f['force']), 'force', sy)} of shear" for f in ends]
     parts += [f"the hinge at {units.fmt(h['at'], 'length', sy)} passes "
               f"{units.fmt(abs(h['shear']), 'force', sy)}" for h in hinges]
     if not parts:
