@@ -392,10 +392,17 @@ def lifting_notes(job, prof: Profile | None) -> list[str]:
         ws = job.moving[0]
         per = max(abs(w + d) for w, d in zip(ws.live, ws.dead)) * (1 + prof.impact)
         total = prof.longitudinal * per * len(ws.live)
+        from shopbeam.jobs.rules import has_free_end  # noqa: PLC0415 - as _hand_geared
+
+        boom = has_free_end(job.supports, job.length)
         out.append(f"Longitudinal force {prof.longitudinal:.0%} of the wheel loads (ASCE 7-16 "
                    f"4.9.5, from memory): about {fmt(total, 'force', job.units)} at the "
-                   "entered loads, along the runway at the wheels; the hangers, end stops and "
-                   "their bracing must carry it (not checked on this member).")
+                   "entered loads, " + ("along the boom at the wheels, endwise into the mast "
+                                        "connection and the end stops, which must carry it"
+                                        if boom else
+                                        "along the runway at the wheels; the hangers, end "
+                                        "stops and their bracing must carry it")
+                   + " (not checked on this member).")
     if job.moving and _i_shape(job.section):
         ws, bf = job.moving[0], job.section.dims.get("bf", 0.0)
         first, last = ws.travel[0], ws.travel[1]
