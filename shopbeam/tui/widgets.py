@@ -107,39 +107,37 @@ class FieldInput(Input):
         """A paste is typing: every line of it is kept. A field holds one line, so the lines
         are joined with spaces and a notice says so (Textual's own Input keeps the first line
         only; prevent_default keeps its handler, which Textual also runs, from adding the
-        first line again)."""
+        first line again); the notes keep each line break as its mark."""
         event.stop()
         event.prevent_default()
         if not event.text:
             return
+        pasted = event.text.strip("\r\n")
         if getattr(self.parent, "key", "") in MULTI_LINE_KEYS:
             # the notes keep every line break of a paste, shown as its mark (saved as the
             # line break), and every other character as pasted
-            lines = event.text.strip("\r\n").splitlines()
-            text = re.sub(r"\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029]", LINE_BREAK,
-                          event.text.strip("\r\n"))
-            selection = self.selection
-            if selection.is_empty:
-                self.insert_text_at_cursor(text)
-            else:
-                self.replace(text, *selection)
-            if len(lines) > 1:
-                self.app.notify(f"Pasted {len(lines)} lines: each line break is shown as "
-                                f"{LINE_BREAK} and saved as a line break (ctrl+j types one).")
-            return
-        # the line breaks (with the spaces around them) become one space each; the text's
-        # own leading and trailing spaces stay (" over the bay" pasted after a word)
-        lines = [ln for ln in event.text.splitlines() if ln.strip()]
-        text = re.sub(r"[ \t]*(?:\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029])+[ \t]*", " ",
-                      event.text.strip("\r\n"))
+            lines = pasted.splitlines()
+            self.type_in(re.sub(r"\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029]", LINE_BREAK, pasted))
+            said = (f"Pasted {len(lines)} lines: each line break is shown as {LINE_BREAK} and "
+                    "saved as a line break (ctrl+j types one).")
+        else:
+            # the line breaks (with the spaces around them) become one space each; the
+            # text's own leading and trailing spaces stay (" over the bay" pasted after a word)
+            lines = [ln for ln in event.text.splitlines() if ln.strip()]
+            self.type_in(re.sub(r"[ \t]*(?:\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029])+[ \t]*", " ",
+                                pasted))
+            said = (f"Pasted {len(lines)} lines into one line (a field holds one line): they "
+                    "are joined with spaces, nothing left out.")
+        if len(lines) > 1:
+            self.app.notify(said)
+
+    def type_in(self, text: str) -> None:
+        """`text` at the cursor, or in place of the selection, as typing puts it."""
         selection = self.selection
         if selection.is_empty:
             self.insert_text_at_cursor(text)
         else:
             self.replace(text, *selection)
-        if len(lines) > 1:
-            self.app.notify(f"Pasted {len(lines)} lines into one line (a field holds one "
-                            "line): they are joined with spaces, nothing left out.")
 
     def _free_text(self) -> bool:
         key = getattr(self.parent, "key", "")
@@ -157,11 +155,7 @@ class FieldInput(Input):
         if event.key == "ctrl+j" and getattr(self.parent, "key", "") in MULTI_LINE_KEYS:
             event.stop()  # a line break in the notes: shown as its mark, saved as a break
             event.prevent_default()
-            selection = self.selection
-            if selection.is_empty:
-                self.insert_text_at_cursor(LINE_BREAK)
-            else:
-                self.replace(LINE_BREAK, *selection)
+            self.type_in(LINE_BREAK)
             return
         digit = _DIGIT_OF.get(event.key)
         # as a view key only on a screen of views (the library search, a save-as name: text)
