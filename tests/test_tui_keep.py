@@ -1602,3 +1602,24 @@ async def test_the_notes_keep_the_line_breaks_of_a_paste_and_take_one_from_ctrl_
         saved = path.read_text(encoding="utf-8")
         assert tomllib.loads(saved)["notes"] == want
         assert 'notes = """' in saved  # a multi-line string, as a person writes one
+
+
+@sync
+async def test_a_switch_away_and_back_in_one_burst_leaves_the_focus_where_tab_put_it(tmp_path):
+    # F3 F2 Tab End in one burst: the Hide of the first switch reached the title field after
+    # the second switch and the Tab had put the focus there, and Textual's own handler blurred
+    # it, so the keys typed next went nowhere
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        f = await at_end_of(pilot, app, "job", "title")
+        before = f.input.value
+        await burst(pilot, F3 + "\x1bOQ" + TAB + "\x1b[F")  # F3 F2 Tab End
+        assert js.focused is f.input
+        await burst(pilot, "k")
+        assert js.session.doc.get("title") == before + "k"
+        # a Hide while the field really is hidden still takes the focus away
+        await pilot.press("f3")
+        await settle(pilot)
+        assert js.focused is not f.input

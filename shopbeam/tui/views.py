@@ -24,7 +24,7 @@ from shopbeam.cautions import cautions_for
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.members.wood import DURATIONS, TEMPERATURES
-from shopbeam.tui.widgets import Choice, Field, fit_text, one_line
+from shopbeam.tui.widgets import Choice, Field, KeepFocusOnStaleHide, fit_text, one_line
 
 # The design modules, the catalog, the materials and the drawings (numpy) are imported where
 # a view first needs them: the first screen (the job view) is drawn without them, and the
@@ -161,7 +161,7 @@ class JobView(View):
                                  {"title": "title", "notes": "notes", "tags": "tags"})
 
 
-class RowList(OptionList):
+class RowList(KeepFocusOnStaleHide, OptionList):
     """The supports or loads of the job, one line each; the highlighted one is edited below."""
 
     # not in the key bar (ctrl+t / ctrl+x are, and F1 lists it): at 80 columns the bar

@@ -18,6 +18,7 @@ from textual.binding import Binding
 from textual.containers import Horizontal
 from textual.message import Message
 from textual.reactive import reactive
+from textual.screen import Screen
 from textual.widget import Widget
 from textual.widgets import Input, Label, Static
 from textual.widgets.input import Selection
@@ -97,7 +98,31 @@ FREE_TEXT_KEYS = frozenset({"title", "notes", "tags", "load.label", "support.lab
                             "moving.label"})
 
 
-class FieldInput(Input):
+def shown_now(widget) -> bool:
+    """Whether `widget` is shown at this moment: it and every container up to its screen
+    displayed (a view switched away is display: none)."""
+    node = widget
+    while node is not None and not isinstance(node, Screen):
+        if not getattr(node, "display", True):
+            return False
+        node = node.parent
+    return True
+
+
+class KeepFocusOnStaleHide:
+    """A Hide that arrives after the widget is shown again (a quick switch away and back:
+    the Hide of the first switch is handled after the second switch and a Tab had put the
+    focus here) must not blur it: Textual's own handler would, and the keys typed next went
+    nowhere. A Hide while hidden blurs as before."""
+
+    def _on_hide(self, event: events.Hide) -> None:
+        # Textual runs the `_on_hide` of every class in the line; prevent_default stops the
+        # ones below this (Widget's would blur)
+        if self.has_focus and shown_now(self):
+            event.prevent_default()  # stale: shown again, and the focus placed here since
+
+
+class FieldInput(KeepFocusOnStaleHide, Input):
     """A field's text box. Keys come in typing order (the app runs bound keys at once, see
     `ShopbeamApp.on_event`); a key that still arrives after an earlier key of the same burst
     moved the focus away goes on to whatever has the focus now. Esc-then-digit typed fast
@@ -352,7 +377,7 @@ def same_entry(typed: str, shown: str) -> bool:
         [p.strip() for p in b.split(",") if p.strip()]
 
 
-class Choice(Widget, can_focus=True):
+class Choice(KeepFocusOnStaleHide, Widget, can_focus=True):
     """One of a few words, chosen with left/right (or the first letter); the chosen one is
     shown in [brackets] so it reads without colour."""
 
