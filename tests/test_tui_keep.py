@@ -1595,7 +1595,8 @@ async def test_the_notes_keep_the_line_breaks_of_a_paste_and_take_one_from_ctrl_
         await settle(pilot)
         await burst(pilot, "\n" + "Last line.")  # ctrl+j, as a terminal sends it, then text
         await burst(pilot, TAB)
-        want = before + " Checked by RK.\nBolts 3/4 A325\tat each end.\nSee Q-114.\nLast line."
+        # every line break of the paste is kept, its last one too, then the one ctrl+j typed
+        want = before + " Checked by RK.\nBolts 3/4 A325\tat each end.\nSee Q-114.\n\nLast line."
         assert app.job_screen.session.doc.get("notes") == want
         await pilot.press("ctrl+s")
         await settle(pilot)
@@ -1623,3 +1624,26 @@ async def test_a_switch_away_and_back_in_one_burst_leaves_the_focus_where_tab_pu
         await pilot.press("f3")
         await settle(pilot)
         assert js.focused is not f.input
+
+
+@sync
+async def test_notes_emptied_then_pasted_on_several_lines_are_saved_as_a_multi_line_string(
+        tmp_path):
+    import tomllib
+
+    from textual import events as tevents
+    path = demo_copy(tmp_path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await focused(pilot, app, "job", "notes")
+        await burst(pilot, CTRL_U)  # emptied: the key leaves the file, to come back in place
+        await settle(pilot)
+        pilot.app._driver.send_message(tevents.Paste("\nfirst\nsecond"))
+        await settle(pilot)
+        await burst(pilot, TAB)
+        await pilot.press("ctrl+s")
+        await settle(pilot)
+        saved = path.read_text(encoding="utf-8")
+        assert tomllib.loads(saved)["notes"] == "\nfirst\nsecond"  # the leading break kept
+        assert 'notes = """' in saved

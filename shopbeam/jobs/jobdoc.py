@@ -401,6 +401,14 @@ def _table(fields: dict | None = None):
     return t
 
 
+def _toml_item(value):
+    """The TOML item for a plain value: a text with line breaks (notes) as a multi-line
+    string, as a person writes one, not one line of \n escapes."""
+    if isinstance(value, str) and "\n" in value:
+        return tomlkit.string(value, multiline=True)
+    return tomlkit.item(_item(value))
+
+
 def _item(value):
     if isinstance(value, (list, tuple)):
         arr = tomlkit.array()
@@ -439,12 +447,8 @@ def _assign(node, key: str, value, where: str) -> None:
                 if old[i] != v:
                     old[i] = v
             return
-    if isinstance(plain, str) and "\n" in plain and not hasattr(value, "trivia"):
-        # a text with line breaks (notes) stays a multi-line string, as a person writes one,
-        # not one line of \n escapes
-        new = tomlkit.string(plain, multiline=True)
-    else:
-        new = tomlkit.item(_item(value)) if not hasattr(value, "trivia") else value
+    new = _toml_item(plain if isinstance(plain, str) else value) \
+        if not hasattr(value, "trivia") else value
     if old is not None and hasattr(old, "trivia") and not isinstance(new, (Table, AoT)) \
             and not isinstance(old, (Table, AoT)):
         t, n = old.trivia, new.trivia
@@ -501,7 +505,7 @@ def insert_key(node, index: int, key: str, value, trivia=None) -> bool:
     box = container_of(node)
     if box is None or key in node or not 0 <= index <= len(box.body):
         return False
-    item = tomlkit.item(_item(value))
+    item = _toml_item(value)
     if trivia is not None:
         t = item.trivia
         t.indent, t.comment_ws, t.comment, t.trail = (trivia.indent, trivia.comment_ws,

@@ -141,8 +141,10 @@ class FieldInput(KeepFocusOnStaleHide, Input):
         if getattr(self.parent, "key", "") in MULTI_LINE_KEYS:
             # the notes keep every line break of a paste, shown as its mark (saved as the
             # line break), and every other character as pasted
-            lines = pasted.splitlines()
-            self.type_in(re.sub(r"\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029]", LINE_BREAK, pasted))
+            # (all of it, its leading and trailing line breaks too: the notes hold them)
+            lines = event.text.splitlines()
+            self.type_in(re.sub(r"\r\n|[\r\n\v\f\x1c-\x1e\x85\u2028\u2029]", LINE_BREAK,
+                                event.text))
             said = (f"Pasted {len(lines)} lines: each line break is shown as {LINE_BREAK} and "
                     "saved as a line break (ctrl+j types one).")
         else:
