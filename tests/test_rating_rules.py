@@ -955,19 +955,29 @@ deflection = "L/360"
 """
 
 
-def test_a_wheel_set_of_unequal_axles_is_rated_either_way_round():
-    from shopbeam.design.capacity import _one_way
+def test_a_wheel_set_of_unequal_axles_is_rated_either_way_round(monkeypatch):
+    from shopbeam.design import loading
     from shopbeam.output import label
 
-    ahead = parse_job_text(CART_RAIL)
-    back = parse_job_text(CART_RAIL.replace('["-2500 lbf", "-1500 lbf"]', '["-1500 lbf", "-2500 lbf"]'))
-    one, other = _one_way(ahead).factor, _one_way(back).factor
-    assert abs(one - other) > 0.01 * one  # the two ways round differ on this rail
-    # either way it is entered, the rating is the lower of the two
-    assert capacity(ahead).factor == pytest.approx(min(one, other), rel=1e-12)
-    assert capacity(back).factor == pytest.approx(min(one, other), rel=1e-12)
-    text = " ".join(label.label_text(label.rating(capacity(ahead))).replace("|", " ").split())
+    ahead_text = CART_RAIL
+    back_text = CART_RAIL.replace('["-2500 lbf", "-1500 lbf"]', '["-1500 lbf", "-2500 lbf"]')
+    both = capacity(parse_job_text(ahead_text)).factor
+    assert capacity(parse_job_text(back_text)).factor == pytest.approx(both, rel=1e-12)
+    text = " ".join(label.label_text(label.rating(capacity(parse_job_text(ahead_text))))
+                    .replace("|", " ").split())
     assert "either way round" in text
+    # each way alone (the set not turned): the rating is the lower of the two, and they differ
+    monkeypatch.setattr(loading, "turned_round", lambda job: None)
+    one = capacity(parse_job_text(ahead_text)).factor
+    other = capacity(parse_job_text(back_text)).factor
+    assert abs(one - other) > 0.01 * one
+    assert both == pytest.approx(min(one, other), rel=1e-9)
+    monkeypatch.undo()
+    # the solve's checks are the worse of the two ways too
+    from shopbeam.design.analysis import analyze
+    r1 = max(c.ratio for c in analyze(parse_job_text(ahead_text)).checks)
+    r2 = max(c.ratio for c in analyze(parse_job_text(back_text)).checks)
+    assert r1 == pytest.approx(r2, rel=1e-12)
     # a set alike both ways is not searched twice
-    from shopbeam.design.capacity import turned_round
-    assert turned_round(parse_job_text(CART_RAIL.replace('"-1500 lbf"', '"-2500 lbf"'))) is None
+    assert loading.turned_round(parse_job_text(CART_RAIL.replace('"-1500 lbf"', '"-2500 lbf"'))) \
+        is None

@@ -23,8 +23,8 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
-                                     envelope_ratio_applies, evaluate, state_set)
+from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,  # noqa: F401
+                                     envelope_ratio_applies, evaluate, state_set, turned_round)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
                                        hogging_remedy, hogging_source, span_top_limits,
                                        NOT_JUDGED, moving_top_worst, rolling_on_top, rolling_where,
@@ -432,36 +432,12 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     if moved is not None:
         res = capacity(moved, section)
         return replace(res, job=job)
-    res = _one_way(job, section, ss)
-    back = turned_round(job)
-    if back is None:
-        return res
-    # a wheel set of unequal axles can run either way round (a cart turned, a trolley hung
-    # the other way): the rating is the lower of the two, and holds if either holds
-    other = _one_way(back, section, None)
-    low = other if other.factor < res.factor else res
-    return replace(low, job=job,
-                   not_rated=tuple(dict.fromkeys(res.not_rated + other.not_rated)))
-
-
-def turned_round(job):
-    """The job with its wheel set turned round (the last axle first), or None where that is
-    the same set (one axle, or axles and spacings alike both ways)."""
-    if not job.moving:
-        return None
-    ws = job.moving[0]
-    span = ws.offsets[-1] if ws.offsets else 0.0
-    back = replace(ws, live=ws.live[::-1], dead=ws.dead[::-1],
-                   offsets=tuple(span - o for o in ws.offsets[::-1]))
-    if back.live == ws.live and back.dead == ws.dead and all(
-            abs(a - b) <= 1e-12 * max(span, 1e-9) for a, b in zip(back.offsets, ws.offsets)):
-        return None
-    back = replace(back, label=f"{ws.label or 'wheel set'} turned round")
-    return replace(job, moving=(back,) + tuple(job.moving[1:]))
+    return _one_way(job, section, ss)
 
 
 def _one_way(job, section=None, ss=None) -> CapacityResult:
-    """`capacity` of the job as it is (its wheel set the way round it is entered)."""
+    """`capacity` proper (a wheel set of unequal axles is checked either way round by
+    `loading.evaluate` itself)."""
     ss = ss or state_set(job, section)
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)

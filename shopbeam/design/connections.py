@@ -16,8 +16,11 @@ def _states(job, sol):
     moving-load job, every pattern of a patterned one, else the solution given."""
     try:
         parts = loading.load_parts(job)
-        if parts.moving:  # every wheel position (and pattern)
-            return loading.moving_connection_states(job), "over every position of the wheels"
+        if parts.moving:  # every wheel position (and pattern), the set either way round
+            back = loading.turned_round(job)
+            return (loading.moving_connection_states(job)
+                    + (loading.moving_connection_states(back) if back is not None else [])), \
+                "over every position of the wheels" + (", either way round" if back else "")
         if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
             return loading.connection_states(job), "over every load pattern"
         if parts.impact and not parts.moving:

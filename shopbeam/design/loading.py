@@ -960,10 +960,68 @@ def _first(mv) -> str:
     return "first wheel " if len(mv.live) > 1 else ""
 
 
+def turned_round(job):
+    """The job with its wheel set turned round (the last axle first), or None where that is
+    the same set (one axle, or axles and spacings alike both ways)."""
+    if not job.moving:
+        return None
+    ws = job.moving[0]
+    span = ws.offsets[-1] if ws.offsets else 0.0
+    back = replace(ws, live=ws.live[::-1], dead=ws.dead[::-1],
+                   offsets=tuple(span - o for o in ws.offsets[::-1]))
+    if back.live == ws.live and back.dead == ws.dead and all(
+            abs(a - b) <= 1e-12 * max(span, 1e-9) for a, b in zip(back.offsets, ws.offsets)):
+        return None
+    back = replace(back, label=f"{ws.label or 'wheel set'} turned round")
+    return replace(job, moving=(back,) + tuple(job.moving[1:]))
+
+
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
              strengths=None) -> Evaluation:
-    """Every check at live-load factor k over every pattern and moving-load position."""
+    """Every check at live-load factor k over every pattern and moving-load position; a
+    wheel set of unequal axles either way round (a cart turned, a trolley hung the other way:
+    each check and each support's reactions the worse of the two)."""
     ss = ss or state_set(job, section)
+    ev = _evaluate(job, k, section, ss, strengths)
+    cache = ss.__dict__.setdefault("_turned", {})
+    if "job" not in cache:
+        cache["job"] = turned_round(job)
+        cache["ss"] = state_set(cache["job"], section) if cache["job"] is not None else None
+    if cache["job"] is None:
+        return ev
+    return _worse(ev, _evaluate(cache["job"], k, section, cache["ss"], strengths))
+
+
+def _worse(a: Evaluation, b: Evaluation) -> Evaluation:
+    """Each check, worst state and support reaction the worse of two evaluations."""
+    by_b = {c.name: c for c in b.checks}
+    checks, worst = [], {}
+    for c in a.checks:
+        other = by_b.get(c.name)
+        take_b = other is not None and other.ratio > c.ratio
+        checks.append(other if take_b else c)
+        worst[c.name] = (b if take_b else a).worst.get(c.name)
+    names = {c.name for c in a.checks}
+    for c in b.checks:
+        if c.name not in names:
+            checks.append(c)
+            worst[c.name] = b.worst.get(c.name)
+    reactions = []
+    for ra, rb in zip(a.reactions, b.reactions):
+        r = dict(ra)
+        if rb["max_up"] > r["max_up"]:
+            r["max_up"], r["max_up_state"] = rb["max_up"], rb["max_up_state"]
+        if rb["max_down"] < r["max_down"]:
+            r["max_down"], r["max_down_state"] = rb["max_down"], rb["max_down_state"]
+        reactions.append(r)
+    gov = max(checks, key=lambda c: c.ratio)
+    solution = b.solution if any(c is gov for c in b.checks) else a.solution
+    return Evaluation(a.k, tuple(checks), worst, a.states + b.states, solution,
+                      tuple(reactions) or a.reactions)
+
+
+def _evaluate(job, k: float, section, ss: StateSet, strengths) -> Evaluation:
+    """`evaluate` of the job as entered."""
     st = strengths or strengths_of(job, sec=section, beam=ss.beam)
     fmt = _fmt_for(job)
     best: dict[str, tuple] = {}
