@@ -822,3 +822,48 @@ def test_a_jib_hoist_given_at_its_end_stop_travels_from_the_mast_to_there_only()
     moved = travelling(job)
     assert moved.moving[0].travel == pytest.approx((0.0, 9.5 * 12 * IN))  # to the end stop
     assert not [ld for ld in moved.loads if ld.kind == "point"]  # hook and hoist both move
+
+
+def _monorail_with(extra_loads: str) -> str:
+    text = _preset_text("monorail-hoist-beam.toml")
+    return text.replace("[criteria]", extra_loads + "\n[criteria]", 1)
+
+
+def test_a_hoist_with_a_magnet_under_its_hook_travels_as_one_axle():
+    from shopbeam.design.capacity import hoist_travels
+    magnet = _monorail_with('''[[loads]]
+type = "point"
+at = "8 ft"
+value = "-300 lbf"
+label = "magnet"
+flange = "bottom"
+''')
+    job = parse_job_text(magnet)
+    assert hoist_travels(job)
+    cap = capacity(job)
+    k = cap.factor
+    hand = (k * (2000 + 300) + 120 + 18.4 * 16 / 2) * LBF  # all of it beside a hanger
+    assert max(r["max_up"] for r in cap.evaluation.reactions) == pytest.approx(hand, rel=2e-3)
+
+
+def test_the_hoist_weight_typed_a_few_inches_off_the_hook_travels_with_it():
+    text = _preset_text("monorail-hoist-beam.toml")
+    near = text.replace('''at = "8 ft"
+value = "-120 lbf"''', '''at = "8 ft 6 in"
+value = "-120 lbf"''')
+    assert near != text
+    assert capacity(parse_job_text(near)).factor == pytest.approx(
+        capacity(parse_job_text(text)).factor, rel=1e-9)
+
+
+def test_a_load_set_on_top_at_the_hoist_place_holds_a_travelling_rating():
+    top = _monorail_with('''[[loads]]
+type = "point"
+at = "8 ft"
+value = "-50 lbf"
+label = "junction box"
+case = "dead"
+flange = "top"
+''')
+    cap = capacity(parse_job_text(top))
+    assert not cap.rated and any("cannot all be moved with it" in r for r in cap.not_rated)

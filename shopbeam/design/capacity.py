@@ -384,36 +384,51 @@ def _live_on_spans_unpatterned(job) -> list[str]:
             "go span by span, so every arrangement is checked and rated"]
 
 
-def travelling(job):
-    """A monorail's or jib's hoist given as a point load at its worst place (`Job.
-    travelling_hoist`) as the wheel set it is: one axle of the hook load with the hoist's own
-    weight hung at the same place as its dead wheel load, on the load's wheels, travelling
-    the whole member. None where the job has none, or the hoist is not that plain (a lug,
-    loads set on top, other hung loads at its place)."""
+HOIST_NEAR = 0.305  # m: a dead load hung within a foot of the hook is the hoist's own weight
+
+
+def _hook(job):
+    """The hook load of a hoist given as a point load at its worst place, or None (none, or
+    hung from a lug under the web: a fixed hoist, which does not travel)."""
     key = getattr(job, "travelling_hoist", "")
     if not key or job.moving:
         return None
     hook = next((ld for ld in job.loads if ld.key == key), None)
-    hung = set(job.hung)
-    if hook is None or hook.kind != "point" or key not in hung or key in set(job.lugs):
+    if hook is None or hook.kind != "point" or key not in set(job.hung) \
+            or key in set(job.lugs):
         return None
-    there = [ld for ld in job.loads if ld.kind == "point"
-             and abs(ld.at - hook.at) <= 1e-9 * job.length]
-    here = [ld for ld in there if ld.key in hung]
-    if len(here) < len(there) or any(
-            ld is not hook and (ld.case != "dead" or ld.key in set(job.lugs)) for ld in here):
-        return None  # another live load hung there, or one set on top: not one hoist
-    gone = {ld.key for ld in here}
-    # it runs the whole member, except out on a jib's boom (or past an outer hanger), where
-    # the place given is its end stop
+    return hook
+
+
+def travelling(job):
+    """A monorail's or jib's hoist given as a point load at its worst place (`Job.
+    travelling_hoist`) as the wheel set it is: one axle of the live loads hung at the hook's
+    place (the hook load, a magnet or spreader under it) with the dead loads hung within a
+    foot of it (the hoist's own weight) as its dead wheel load, on the loads' wheels,
+    travelling the whole member, or from the mast out to the place given on a jib's boom.
+    None where there is no such hoist (`_hook`), or its place has loads that cannot travel
+    with it (set on top of the flange, live loads hung beside it): `capacity` then holds."""
+    hook = _hook(job)
+    if hook is None:
+        return None
+    hung, lugs = set(job.hung), set(job.lugs)
+    tol = 1e-9 * job.length
+    points = [ld for ld in job.loads if ld.kind == "point" and ld.value]
+    live = [ld for ld in points if abs(ld.at - hook.at) <= tol and ld.case != "dead"]
+    dead = [ld for ld in points if abs(ld.at - hook.at) <= HOIST_NEAR and ld.case == "dead"]
+    near_live = [ld for ld in points if ld.case != "dead" and ld not in live
+                 and abs(ld.at - hook.at) <= HOIST_NEAR]
+    if near_live or any(ld.key not in hung or ld.key in lugs for ld in live + dead):
+        return None
+    gone = {ld.key for ld in live + dead}
     held = sorted(sp.at for sp in job.supports if sp.takes_force)
     travel = (0.0, job.length)
     if held and hook.at > held[-1]:
         travel = (0.0, hook.at)
     elif held and hook.at < held[0]:
         travel = (hook.at, job.length)
-    ws = WheelSet(label=hook.label or "hoist", live=(hook.value,),
-                  dead=(sum(ld.value for ld in here if ld is not hook),), offsets=(0.0,),
+    ws = WheelSet(label=hook.label or "hoist", live=(sum(ld.value for ld in live),),
+                  dead=(sum(ld.value for ld in dead),), offsets=(0.0,),
                   travel=travel, key="moving[0]",
                   wheels_per_axle=max(job.contacts.get(k, 0) for k in gone) or 2)
     return replace(job, loads=tuple(ld for ld in job.loads if ld.key not in gone),
@@ -421,6 +436,17 @@ def travelling(job):
                    hung_default=tuple(k for k in job.hung_default if k not in gone),
                    contacts={k: v for k, v in job.contacts.items() if k not in gone},
                    travelling_hoist="")
+
+
+def hoist_travels(job) -> bool:
+    """Whether `capacity` rates the job's point-load hoist travelling (the label says so)."""
+    return travelling(job) is not None
+
+
+def hoist_at(job) -> float:
+    """Where the travelling hoist's hook load is given (nan where there is none)."""
+    hook = _hook(job)
+    return hook.at if hook is not None else math.nan
 
 
 def capacity(job, section=None, ss=None) -> CapacityResult:
@@ -432,7 +458,17 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     if moved is not None:
         res = capacity(moved, section)
         return replace(res, job=job)
-    return _one_way(job, section, ss)
+    res = _one_way(job, section, ss)
+    hook = _hook(job)
+    if hook is not None:  # a travelling hoist whose loads cannot all travel with it
+        f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+        res = replace(res, not_rated=res.not_rated + (
+            f"the hoist ({hook.key}) travels, but the loads at and around its place ({f(hook.at)}) "
+            "cannot all be moved with it (a load set on top of the flange there, or another "
+            "live load hung beside it), so it is checked at that place only and no rating is "
+            "posted for a travelling hoist. Give the hoist as a [[moving]] wheel set (the "
+            "hook load and its attachments as the axle load, the hoist's weight as dead)",))
+    return res
 
 
 def _one_way(job, section=None, ss=None) -> CapacityResult:

@@ -37,6 +37,7 @@ from shopbeam.design import fatigue
 from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
                                       couple_notes, flange_word, is_outdoor)
 from shopbeam.design.basis import tip_hung
+from shopbeam.design.capacity import hoist_at, hoist_travels
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.solver import sound_solve
@@ -168,7 +169,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                            where, exact=ld.total_force * k))
     elif len(live) == 1 and not mv and live[0].kind == "point":
         ld = live[0]
-        moves = getattr(job, "travelling_hoist", "") == ld.key
+        moves = hoist_travels(job)
         figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
                            "anywhere along its travel" if moves else f"at {pos(ld.at)}",
                            where))
@@ -177,8 +178,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         for i, ld in enumerate(live):
             name = ld.label or f"load {i + 1}"
             if ld.kind == "point":
-                figs.append(posted(f"max {name}", ld.value * k, "force", sy, f"at {pos(ld.at)}",
-                                   where))
+                figs.append(posted(f"max {name}", ld.value * k, "force", sy,
+                                   "anywhere along its travel, with the hoist"
+                                   if hoist_travels(job) and abs(ld.at - hoist_at(job)) <= 1e-9
+                                   * job.length else f"at {pos(ld.at)}", where))
             elif ld.kind == "uniform":
                 figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
                                    f"spread over {pos(ld.start)} to {pos(ld.end)}", where))
@@ -277,7 +280,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     if any(ld.patterned for ld in live):
         notes.append("Patterned loads are rated on any or all of their spans; other loads as "
                      "placed in the job, and other placements are not rated.")
-    elif getattr(job, "travelling_hoist", "") and len(live) == 1:
+    elif hoist_travels(job):
         notes.append("Rated with the hoist anywhere along the member (up to the place given "
                      "out on a boom); other loads as placed in the job.")
     elif job.moving:
