@@ -809,3 +809,32 @@ def test_a_governing_overhang_deflection_names_its_limit_on_twice_the_length():
     assert f"Governing check: deflection limit {limit_in:.4g} in on the overhang 8 ft to " \
            "8.5 ft (2 x overhang length / 180, i.e. its tip may move overhang length / 90)" \
            in text
+
+
+def test_a_wheel_set_of_unequal_axles_posts_each_axle_not_the_heaviest_for_all():
+    text = """schema = 1
+title = "Cart on a shop rail"
+tags = ["not-lifting"]
+[beam]
+length = "14 ft"
+section = "W8x18"
+material = "A992"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "14 ft"
+type = "roller"
+[[moving]]
+label = "cart"
+loads = ["-3000 lbf", "-1000 lbf", "-500 lbf"]
+spacing = ["2 ft", "2 ft"]
+"""
+    cap = capacity(parse_job_text(text))
+    r = label.rating(cap)
+    heavy = next(f for f in r.figures if f.label.startswith("MAX HEAVIEST AXLE"))
+    k = cap.factor
+    for w in (3000, 1000, 500):  # each axle's own figure, rounded down, in order
+        assert f"{label.floor_sig(w * k):g} lbf" in heavy.note
+    assert not any(f.label.startswith("MAX PER AXLE") for f in r.figures)

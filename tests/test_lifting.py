@@ -867,3 +867,12 @@ flange = "top"
 ''')
     cap = capacity(parse_job_text(top))
     assert not cap.rated and any("cannot all be moved with it" in r for r in cap.not_rated)
+
+
+def test_capacity_json_gives_what_each_support_carries_at_the_factor():
+    from shopbeam.design.capacity import to_json
+    cap = capacity(parse_job_text(_preset_text("monorail-hoist-beam.toml")))
+    got = to_json(cap)["capacity"]["supports"]
+    assert [r["max_up"] for r in got] == [r["max_up"] for r in cap.evaluation.reactions]
+    k = cap.factor
+    assert got[0]["max_up"] == pytest.approx((k * 2000 + 120 + 18.4 * 16 / 2) * LBF, rel=2e-3)

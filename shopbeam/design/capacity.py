@@ -945,6 +945,10 @@ def to_json(res: CapacityResult) -> dict:
                        "max_load": dict(max_load_lines(res)),
                        "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
                        if res.evaluation else {}}
+    # what each support carries at the factor found, over every load state (the label's
+    # SUPPORTS lines; a point-load hoist's rated travelling, so beside each hanger)
+    out["capacity"]["supports"] = [dict(r) for r in res.evaluation.reactions] \
+        if res.evaluation is not None and math.isfinite(k) else []
     if k > 0 and math.isfinite(k):  # what the connections carry at the factor found
         ends, hinges = connections_at(res.job, k)
         # keyed as the top-level fixed_ends ("shear"), with "force" kept beside it

@@ -61,10 +61,7 @@ def render(res: CapacityResult, width: int = 78) -> str:
                       "carry these and are not checked here):", width, initial_indent="  ",
                       subsequent_indent="    ")
         for e in p.envelope:
-            lines += wrap(f"{e.kind} at {e.at}: up to {e.max_up}"
-                          + (f"; pulls down up to {e.max_down.lstrip('-')}" if e.uplift
-                             else ""), width,
-                          initial_indent="    ", subsequent_indent="      ")
+            lines += wrap(e.words(), width, initial_indent="    ", subsequent_indent="      ")
     warns = [p for p in job.warnings if p.warning]
     if warns:
         lines.append("")

@@ -204,9 +204,14 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
             per = max(int(job.moving[0].wheels_per_axle if job.moving else 1), 1)
             # the per-wheel and whole-set figures come from the posted axle figure where the
             # axles are alike, so the three agree (each still no more than its exact value)
-            axle = posted(f"MAX PER AXLE ({m.label})", max(wheels), "force", sy,
-                          f"{len(wheels)} axles", where)
             alike = max(wheels) - min(wheels) <= 1e-9 * max(wheels)
+            if alike:
+                axle = posted(f"MAX PER AXLE ({m.label})", max(wheels), "force", sy,
+                              f"{len(wheels)} axles", where)
+            else:  # each axle its own figure (the heaviest is not every axle's)
+                each = " / ".join(posted("", w, "force", sy).value for w in wheels)
+                axle = posted(f"MAX HEAVIEST AXLE ({m.label})", max(wheels), "force", sy,
+                              f"{len(wheels)} axles, in order: {each}", where)
             if len(wheels) > 1:
                 figs.append(axle)
             if per > 1:
@@ -640,9 +645,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         uplift=pc.uplift if status == "rated" else (),
         uplift_head="UPLIFT at the rated load" + (" (each member)" if job.members > 1 else "")
         + ": anchor",
-        reactions=tuple(f"{e.kind} at {e.at}: up to {e.max_up}"
-                        + (f"; pulls down up to {e.max_down.lstrip('-')}" if e.uplift else "")
-                        for e in pc.envelope)
+        reactions=tuple(e.words() for e in pc.envelope)
         if status == "rated" else (),
         reactions_head="SUPPORTS must carry at the rated load (" + (
             "each member, " if job.members > 1 else "") + "+ up; their brackets, seats, "

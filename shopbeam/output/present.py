@@ -89,6 +89,14 @@ class EnvelopeRow:
     up_state: str
     down_state: str
 
+    def words(self) -> str:
+        """What this support must carry, in one line: up to the largest push, and the
+        largest pull where one pulls down (only the pull where it never pushes up)."""
+        if self.max_up.lstrip().startswith("-"):  # it only ever holds the beam down
+            return f"{self.kind} at {self.at}: pulls down up to {self.max_down.lstrip('-')}"
+        return (f"{self.kind} at {self.at}: up to {self.max_up}"
+                + (f"; pulls down up to {self.max_down.lstrip('-')}" if self.uplift else ""))
+
 
 @dataclass(frozen=True)
 class Presentation:
