@@ -239,7 +239,7 @@ async def test_the_problem_summary_keeps_to_three_rows_of_the_width_and_says_whe
         long1 = "  - supports[1].at: '16 ft' (16 ft) is beyond the end of the beam (12 ft): " \
                 "positions run from 0 at the left end"
         long2 = "  - moving[0].travel: the travel runs past the end of the beam (12 ft)"
-        for lines, pointer in (([head, long1, long2], "1 more line: see 7 Results"),
+        for lines, pointer in (([head, long1, long2], "and 1 more: see 7 Results"),
                                ([head, long1 + " and more words" * 8], "see 7 Results"),
                                ([head, "  - a short one"], None)):
             got = js._problems_summary(lines).splitlines()

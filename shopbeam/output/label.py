@@ -664,7 +664,7 @@ def _lifting_words(r: Rating) -> str:
     return ("LIFTING DEVICE" + (f" ({r.lifting_profile} profile)" if r.lifting_profile else "")
             + ": proof load test and marking by a qualified engineer required before use. "
             "BEAM ONLY: the device's rated load is the LEAST of this figure and the rated "
-            "loads of the hoist, trolley, hangers, connections and rigging; mark the least")
+            "loads of the hoist, trolley, hangers, connections and rigging; mark the least.")
 
 
 # ------------------------------------------------------------------ 40-column label
@@ -696,7 +696,7 @@ def label_text(r: Rating, width: int = 40) -> str:
         if r.governing_how:
             row(f"  {r.governing_how}", "  ")
         if r.governing_state:
-            row(f"  in {r.governing_state}", "  ")
+            row(f"  worst with {r.governing_state}", "  ")
     if r.uplift:
         row(r.uplift_head)
         for u in r.uplift:
@@ -822,7 +822,8 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
     if r.governing and r.status == "rated":
         h.append(f'<p class="meta">Governing check: {e(r.governing)}'
                  + (f"; {e(r.governing_how)}" if r.governing_how else "")
-                 + (f" (in {e(r.governing_state)})" if r.governing_state else "") + "</p>")
+                 + (f" (worst with {e(r.governing_state)})" if r.governing_state else "")
+                 + "</p>")
     if r.reactions:
         h.append(f"<p class=meta><b>{e(r.reactions_head)}</b></p><ul>"
                  + "".join(f"<li>{e(x)}</li>" for x in r.reactions) + "</ul>")

@@ -254,8 +254,12 @@ class JobScreen(Screen):
         the rest with where to read them all (7 Results)."""
         width = max((self.size.width or 80) - 2, 20)
 
-        def cut(line: str) -> str:
-            return line if len(line) <= width else line[:width - 4].rstrip() + " ..."
+        def cut(line: str) -> str:  # at a word's end
+            if len(line) <= width:
+                return line
+            head = line[:width - 4]
+            head = head.rsplit(" ", 1)[0] if " " in head.strip() else head
+            return head.rstrip() + " ..."
 
         if len(lines) <= 3 and all(len(ln) <= width for ln in lines):
             return "\n".join(lines)
@@ -268,7 +272,7 @@ class JobScreen(Screen):
             return "\n".join(head + rest[:room - 1] + ["  ... the whole message: see 7 Results"])
         more = len(lines) - 2
         return "\n".join([cut(ln) for ln in lines[:2]]
-                         + [f"  ... {more} more line{'s' if more != 1 else ''}: see 7 Results"])
+                         + [f"  ... and {more} more: see 7 Results"])
 
     def changed(self) -> None:
         """The document changed: show it now, solve it in a worker (latest edit wins)."""
