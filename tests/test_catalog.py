@@ -516,3 +516,4 @@ def test_near_misses_of_a_designation_not_finished_come_from_its_own_depth_first
     assert suggestions("s8x1")[0] == "S8X18.4"  # typed on the way to S8X18.4
     assert all(s.startswith("W8X1") for s in suggestions("W8x1"))
     assert suggestions("W8x17")[:2] == ["W8X18", "W8X15"]  # a weight between two: the nearest
+    assert all(s.startswith("W8X") for s in suggestions("W8x999"))  # past the heaviest: W8s

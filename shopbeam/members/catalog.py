@@ -898,7 +898,7 @@ def suggestions(designation: str, n: int = 3) -> list[str]:
                     continue
                 # the first size (the depth) weighs most, and a size that starts as typed
                 # ("S8x1" for S8X18.4, a designation not finished) comes first
-                dist = sum((3.0 if i == 0 else 1.0) * abs(math.log(a / b))
+                dist = sum((10.0 if i == 0 else 1.0) * abs(math.log(a / b))
                            for i, (a, b) in enumerate(zip(vals, v2)))
                 started = nums[:-1] == n2[:len(nums) - 1] and \
                     n2[len(nums) - 1].startswith(nums[-1])
