@@ -23,8 +23,8 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,  # noqa: F401
-                                     envelope_ratio_applies, evaluate, state_set, turned_round)
+from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
+                                     envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
                                        hogging_remedy, hogging_source, span_top_limits,
                                        NOT_JUDGED, moving_top_worst, rolling_on_top, rolling_where,
@@ -458,7 +458,7 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     if moved is not None:
         res = capacity(moved, section)
         return replace(res, job=job)
-    res = _one_way(job, section, ss)
+    res = _rate(job, section, ss)
     hook = _hook(job)
     if hook is not None:  # a travelling hoist whose loads cannot all travel with it
         f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
@@ -471,9 +471,9 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
     return res
 
 
-def _one_way(job, section=None, ss=None) -> CapacityResult:
-    """`capacity` proper (a wheel set of unequal axles is checked either way round by
-    `loading.evaluate` itself)."""
+def _rate(job, section=None, ss=None) -> CapacityResult:
+    """`capacity` of the job as given (a wheel set of unequal axles is checked either way
+    round by `loading.evaluate` itself)."""
     ss = ss or state_set(job, section)
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
