@@ -2470,17 +2470,8 @@ _OTHER_COUNT = re.compile(r"\b(?:(?:three|four|five|six|seven|eight|nine|ten|[3-
 
 
 def _plain_found(words: re.Pattern, title, notes, tags, raw_loads) -> list[str]:
-    """Where title, notes, a tag or a load label use `words`, read plainly (a "no" before
-    them denies nothing here: "no damaged pallets" still speaks of pallets)."""
-    said = [f"{key}: {m.group(0)!r}" for key, text in (("title", title), ("notes", notes))
-            for m in [words.search(_as_words(text))] if m]
-    said += [f"tag {t!r}" for t in tags if isinstance(t, str) and words.search(_as_words(t))]
-    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
-        label = ld.get("label") if _is_table(ld) else None
-        if isinstance(label, str) and words.search(_as_words(label)):
-            said.append(f"loads[{i}] is labelled {label!r}")
-            break
-    return said
+    """`_words_found` read plainly: "no damaged pallets" still speaks of pallets."""
+    return _words_found(words, title, notes, tags, raw_loads, deny=False)
 
 
 def _rack_members(r: _Reader, title, notes, tags, raw_loads, members, supports) -> None:
@@ -3198,18 +3189,21 @@ def _search(words: re.Pattern, text: str):
 
 
 def _words_found(words: re.Pattern, title, notes, tags, raw_loads,
-                 whole_tags=frozenset()) -> list[str]:
+                 whole_tags=frozenset(), deny: bool = True) -> list[str]:
     """Where a job's title, notes, tags (or a tag in `whole_tags`) and first matching load
-    label use one of `words` (and do not deny it), in words for a warning."""
+    label use one of `words` (and do not deny it; `deny=False`: read plainly, a "no" before
+    the words denies nothing), in words for a warning."""
+    find = _search if deny else (lambda w, text: w.search(text))
     said = []
     for key, text in (("title", title), ("notes", notes)):
-        m = _search(words, _as_words(text))
+        m = find(words, _as_words(text))
         if m:
             said.append(f"{key}: {m.group(0)!r}")
-    said += [f"tag {t!r}" for t in tags if words.search(_as_words(t)) or t in whole_tags]
+    said += [f"tag {t!r}" for t in tags if isinstance(t, str) and words.search(_as_words(t))
+             or t in whole_tags]
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         label = ld.get("label") if _is_table(ld) else None
-        if isinstance(label, str) and _search(words, _as_words(label)):
+        if isinstance(label, str) and find(words, _as_words(label)):
             said.append(f"loads[{i}] is labelled {label!r}")
             break
     return said
