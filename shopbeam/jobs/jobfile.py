@@ -1742,9 +1742,8 @@ def _feet_or_metres(text) -> bool:
     "3 ft.")."""
     if not isinstance(text, str):
         return False
-    t = text.strip().rstrip(".").replace("\u2019", "'").replace("\u2032", "'").replace(
-        "\u2018", "'").replace("`", "'")
-    return bool(_FEET_OR_METRES.search(t))
+    # the marks read as the unit reader reads them (3' 3’ 3′ are 3 ft)
+    return bool(_FEET_OR_METRES.search(units.normalised(text).strip().rstrip(".")))
 
 
 def _corner_radius(r: _Reader, section, material, system: str) -> None:

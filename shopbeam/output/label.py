@@ -144,6 +144,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     shelf = bool(SHELF_TAGS & tags) and not rack
     figs: list[Figure] = []
     notes: list[str] = []
+    # a point-load hoist rated travelling (`capacity`): its loads are posted for anywhere
+    hoist_x = hoist_at(job) if hoist_travels(job) else None
     where = ""
     if n > 1:
         if rack:
@@ -169,7 +171,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                            where, exact=ld.total_force * k))
     elif len(live) == 1 and not mv and live[0].kind == "point":
         ld = live[0]
-        moves = hoist_travels(job)
+        moves = hoist_x is not None
         figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
                            "anywhere along its travel" if moves else f"at {pos(ld.at)}",
                            where))
@@ -180,7 +182,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
             if ld.kind == "point":
                 figs.append(posted(f"max {name}", ld.value * k, "force", sy,
                                    "anywhere along its travel, with the hoist"
-                                   if hoist_travels(job) and abs(ld.at - hoist_at(job)) <= 1e-9
+                                   if hoist_x is not None and abs(ld.at - hoist_x) <= 1e-9
                                    * job.length else f"at {pos(ld.at)}", where))
             elif ld.kind == "uniform":
                 figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
@@ -285,7 +287,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     if any(ld.patterned for ld in live):
         notes.append("Patterned loads are rated on any or all of their spans; other loads as "
                      "placed in the job, and other placements are not rated.")
-    elif hoist_travels(job):
+    elif hoist_x is not None:
         notes.append("Rated with the hoist anywhere along the member (up to the place given "
                      "out on a boom); other loads as placed in the job.")
     elif job.moving:
