@@ -891,6 +891,38 @@ def hogging_source(job: Job, st) -> str:
     return "AISC 360-16 F1, F2 (Lb between braces of the compression flange)"
 
 
+def hogging_demands(job: Job, st, ss, k: float, limits
+                    ) -> tuple[list[tuple[float, float, float, float, float]], float]:
+    """([(start, end, allowable, least moment over start..end, where)] for each length of
+    `limits` (`hogging_limits`), the largest |moment| anywhere), over every state at the
+    factor k: each pattern of patterned spans, and for [[moving]] every position of the
+    wheel set over its travel (exact, from its influence lines), not one governing state."""
+    L = job.length
+    if ss.parts.moving:
+        stops = sorted({0.0, L} | {x for a, b, _ in limits for x in (a, b)})
+        regions = tuple((a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * L)
+        least: dict = {}
+        big = 0.0
+        for pattern in ss.patterns:
+            ext = loading.moving_envelope(job, ss, ss.static_loads(k, pattern), k, st,
+                                          pattern=tuple(pattern), hog=regions).extremes
+            for r in regions:
+                for how in ("max", "min"):
+                    e = ext.get(("hog", "moment", r, how))
+                    if e is not None:
+                        big = max(big, abs(e[0]))
+                        if how == "min" and (r not in least or e[0] < least[r][0]):
+                            least[r] = (e[0], e[1])
+        return [(a, b, allow) + least.get((a, b), (0.0, a)) for a, b, allow in limits], big
+    env = loading.Envelopes(ss, k)
+    big = max(abs(env.extreme("moment", up, 0.0, L).value) for up in (True, False))
+    out = []
+    for a, b, allow in limits:
+        e = env.extreme("moment", False, a, b)
+        out.append((a, b, allow, e.value, e.at))
+    return out, big
+
+
 def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     """`braced = true` holds the member all along, but what shops brace it with (a deck,
     boards, sheeting) sits on the top flange or edge. Where the moment hogs, the bottom one
@@ -898,16 +930,31 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     buckling is not checked. Listed here; `capacity` posts no rating where the hogging moment
     at the rated load would pass that lower strength (any hogging, where shopbeam does not
     compute that buckling). `restrained = true` (held against twist all along) says the
-    bottom flange is held too."""
+    bottom flange is held too. A job of load states (patterned spans, [[moving]] wheels) is
+    judged over all of them (`hogging_demands`), not on `moment`, one state's."""
     limits = hogging_limits(job, st)
-    ex = hogging(moment) if limits else None
-    if ex is None:
+    if not limits:
         return []
+    if loading.needs_states(job):
+        dem, big = hogging_demands(job, st, loading.state_set(job), 1.0, limits)
+        lo = min(dem, key=lambda d: d[3])
+        if not (big > 0 and lo[3] < -0.01 * big):
+            return []
+        least, least_at = lo[3], lo[4]
+        over = [(-d[3], d[2]) for d in dem]
+        entered = ("under the loads as entered, over " + ("the wheels' travel"
+                   if job.moving else "every pattern of the patterned loads"))
+    else:
+        ex = hogging(moment)
+        if ex is None:
+            return []
+        least, least_at = ex.min, ex.min_at
+        over = [(-moment.extremes(a, b).min, allow) for a, b, allow in limits]
+        entered = "under the loads as entered"
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     computed = any(allow > 0 for _a, _b, allow in limits)
     # already past that strength under the loads as entered: the verdict must not read as a
     # clean pass (blocking), as capacity posts no rating from it
-    over = [(-moment.extremes(a, b).min, allow) for a, b, allow in limits]
     over = [(m, allow) for m, allow in over if m > allow * (1 + 1e-9)]  # hogs past it
     worst = max(over, key=lambda x: x[0] / x[1] if x[1] > 0 else math.inf, default=None)
     here = ""
@@ -920,7 +967,7 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
          "sheeting brace only the flange or edge they sit on" if job.braced else
          "the braces hold the top flange only (braces_flange = \"top\")")
         + "; here the moment hogs "
-        f"({f(ex.min, 'moment')} at {f(ex.min_at)} under the loads as entered), putting the "
+        f"({f(least, 'moment')} at {f(least_at)} {entered}), putting the "
         "bottom flange or edge in compression where nothing holds it between the supports, "
         "and its lateral-torsional buckling is not checked. "
         + ("No rating is posted where the hogging moment at the rated load would exceed the "

@@ -25,10 +25,11 @@ from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
-from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_limits,
-                                       hogging_remedy, hogging_source, span_top_limits,
-                                       NOT_JUDGED, moving_top_worst, rolling_on_top, rolling_where,
-                                       span_top_strength, top_words, unchecked_for)
+from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
+                                       hogging_limits, hogging_remedy, hogging_source,
+                                       span_top_limits, NOT_JUDGED, moving_top_worst,
+                                       rolling_on_top, rolling_where, span_top_strength,
+                                       top_words, unchecked_for)
 from shopbeam.design.analysis import bending_s
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.connections import fixed_end_moments, hinge_shears
@@ -551,13 +552,13 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
     hogging beyond 1 % of the largest moment stops the rating)."""
     if not limits or not math.isfinite(k) or k < 0:
         return ()
-    env = Envelopes(ss, k)
-    big = max(max(abs(env.extreme("moment", up, 0.0, job.length).value) for up in (True, False)),
-              1e-300)
+    dem, big = hogging_demands(job, st, ss, k, limits)
+    big = max(big, 1e-300)
+    where = f" (a position of {job.moving[0].label or 'the wheel set'} over its travel)" \
+        if ss.parts.moving else ""
     out = []
-    for a, b, allow in limits:
-        e = env.extreme("moment", False, a, b)
-        if -e.value > max(allow, 0.01 * big if allow <= 0 else 0.0):
+    for a, b, allow, least, at in dem:
+        if -least > max(allow, 0.01 * big if allow <= 0 else 0.0):
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             wood = getattr(job.material, "kind", "") == "lumber"
             leaves = (f"which exceeds the {f(allow, 'moment')} the bottom "
@@ -571,7 +572,7 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
             out.append(f"lateral-torsional buckling of the bottom {'edge' if wood else 'flange'} "
                        f"under hogging moment "
                        f"not checked: {top_words(job)}, but {_at(k)} "
-                       f"the moment hogs to {f(-e.value, 'moment')} at {f(e.at)}, {leaves}. "
+                       f"the moment hogs to {f(-least, 'moment')} at {f(at)}{where}, {leaves}. "
                        f"{todo[0].upper()}{todo[1:]}")
     return tuple(out)
 
