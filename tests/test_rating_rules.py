@@ -1041,3 +1041,33 @@ def test_a_cart_rolling_onto_an_overhang_hogs_the_bottom_flange_and_is_not_rated
     inside = capacity(parse_job_text(CART_ONTO_OVERHANG.replace(
         'travel = ["0 ft", "30 ft"]', 'travel = ["0 ft", "24 ft"]')))
     assert not [r for r in inside.not_rated if "under hogging moment" in r]
+
+
+def test_a_cart_rolling_onto_an_unbraced_overhang_is_held_by_the_top_flange_rule():
+    # no braced = true: the 8 ft overhang of a 12 ft span is an unbraced cantilever, and the
+    # cart's wheels roll on its top flange, which destabilises it (effective length about
+    # 2.5 x L). The rule must take the cart at every position, not the static loads alone
+    from shopbeam.design.analysis import cantilever_top_limits, moment_ranges
+    from shopbeam.design.checks import strengths
+    from shopbeam.design.loading import state_set
+
+    text = CART_ONTO_OVERHANG.replace("braced = true\n", "").replace(
+        'length = "30 ft"', 'length = "20 ft"').replace('at = "24 ft"', 'at = "12 ft"').replace(
+        'travel = ["0 ft", "30 ft"]', 'travel = ["0 ft", "20 ft"]')
+    job = parse_job_text(text)
+    cap = capacity(job)
+    held = [r for r in cap.not_rated if "cantilever 12 ft to 20 ft" in r]
+    assert not cap.rated and held
+    st = strengths(job)
+    (a, b, _kl, _now, top), = cantilever_top_limits(job, st)
+    ss = state_set(job)
+    at_k = moment_ranges(job, st, ss, cap.factor, [(a, b)])[0][a, b]
+    alone = moment_ranges(job, st, ss, 0.0, [(a, b)])[0][a, b]
+    # statics: the cart at the tip, wheels 5 ft and 8 ft out: k x 2000 lbf x 13 ft more
+    assert at_k[0] - alone[0] == pytest.approx(
+        -cap.factor * 2000 * 13 * 4.4482216152605 * 0.3048, rel=1e-9)
+    assert -at_k[0] > top
+    # a trolley hung from the bottom flange (a lifting job) does not destabilise it: that
+    # rule does not hold it back
+    hoist = capacity(parse_job_text(text.replace('tags = ["not-lifting"]', 'tags = ["lifting"]')))
+    assert not [r for r in hoist.not_rated if "cantilever 12 ft to 20 ft" in r]

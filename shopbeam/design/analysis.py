@@ -559,9 +559,7 @@ def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float
     for a, b, free, l1, _why in st.ltb_segments:
         if not free:
             continue
-        on = [ld for ld in job.loads if ld.kind != "moment" and ld.total_force
-              and (a - tol < ld.at < b + tol if ld.kind == "point"
-                   else min(b, ld.end) - max(a, ld.start) > tol)]
+        on = loads_on(job, a, b)
         if on and all(ld.key in hung for ld in on):
             continue  # every load hangs below the shear centre: not destabilising
         held = [s.at for s in job.supports if s.takes_force]
@@ -573,6 +571,24 @@ def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float
         if top < now * (1 - 1e-9):
             out.append((a, b, k, now / fl.omega, top / fl.omega))
     return out
+
+
+def loads_on(job: Job, a: float, b: float) -> list:
+    """The loads of the job (not couples) that bear on a..b."""
+    tol = 1e-9 * job.length
+    return [ld for ld in job.loads if ld.kind != "moment" and ld.total_force
+            and (a - tol < ld.at < b + tol if ld.kind == "point"
+                 else min(b, ld.end) - max(a, ld.start) > tol)]
+
+
+def wheels_count_on_top(job: Job, a: float, b: float) -> bool:
+    """Whether the moment of the [[moving]] wheels counts in the top-flange rule of the
+    unbraced cantilever a..b: they roll on its top flange (`rolling_on_top`), or a load of
+    the job bears on its top there (the wheels' moment then adds to what it destabilises)."""
+    if not job.moving:
+        return False
+    hung = set(getattr(job, "hung", ()) or ())
+    return _rolls_through(job, a, b) or any(ld.key not in hung for ld in loads_on(job, a, b))
 
 
 def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
@@ -891,36 +907,45 @@ def hogging_source(job: Job, st) -> str:
     return "AISC 360-16 F1, F2 (Lb between braces of the compression flange)"
 
 
+def moment_ranges(job: Job, st, ss, k: float, lengths) -> tuple[dict, float]:
+    """({(start, end): (least moment, where, largest moment, where)} over each of `lengths`,
+    the largest |moment| anywhere), over every state at the factor k: each pattern of
+    patterned spans, and for [[moving]] every position of the wheel set over its travel
+    (exact, from its influence lines), not one governing state."""
+    L = job.length
+    out: dict = {}
+    if ss.parts.moving:
+        stops = sorted({0.0, L} | {x for a, b in lengths for x in (a, b)})
+        regions = tuple((a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * L)
+        big = 0.0
+        for pattern in ss.patterns:
+            ext = loading.moving_envelope(job, ss, ss.static_loads(k, pattern), k, st,
+                                          pattern=tuple(pattern), more=regions).extremes
+            for r in regions:
+                lo = ext.get(("more", "moment", r, "min"))
+                hi = ext.get(("more", "moment", r, "max"))
+                if lo is None or hi is None:
+                    continue
+                big = max(big, abs(lo[0]), abs(hi[0]))
+                was = out.get(r)
+                out[r] = (min(was[:2], lo[:2]) if was else lo[:2]) \
+                    + (max(was[2:], hi[:2]) if was else hi[:2])
+        return {r: out.get(r, (0.0, r[0], 0.0, r[0])) for r in lengths}, big
+    env = loading.Envelopes(ss, k)
+    big = max(abs(env.extreme("moment", up, 0.0, L).value) for up in (True, False))
+    for a, b in lengths:
+        lo, hi = env.extreme("moment", False, a, b), env.extreme("moment", True, a, b)
+        out[a, b] = (lo.value, lo.at, hi.value, hi.at)
+    return out, big
+
+
 def hogging_demands(job: Job, st, ss, k: float, limits
                     ) -> tuple[list[tuple[float, float, float, float, float]], float]:
     """([(start, end, allowable, least moment over start..end, where)] for each length of
     `limits` (`hogging_limits`), the largest |moment| anywhere), over every state at the
-    factor k: each pattern of patterned spans, and for [[moving]] every position of the
-    wheel set over its travel (exact, from its influence lines), not one governing state."""
-    L = job.length
-    if ss.parts.moving:
-        stops = sorted({0.0, L} | {x for a, b, _ in limits for x in (a, b)})
-        regions = tuple((a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * L)
-        least: dict = {}
-        big = 0.0
-        for pattern in ss.patterns:
-            ext = loading.moving_envelope(job, ss, ss.static_loads(k, pattern), k, st,
-                                          pattern=tuple(pattern), hog=regions).extremes
-            for r in regions:
-                for how in ("max", "min"):
-                    e = ext.get(("hog", "moment", r, how))
-                    if e is not None:
-                        big = max(big, abs(e[0]))
-                        if how == "min" and (r not in least or e[0] < least[r][0]):
-                            least[r] = (e[0], e[1])
-        return [(a, b, allow) + least.get((a, b), (0.0, a)) for a, b, allow in limits], big
-    env = loading.Envelopes(ss, k)
-    big = max(abs(env.extreme("moment", up, 0.0, L).value) for up in (True, False))
-    out = []
-    for a, b, allow in limits:
-        e = env.extreme("moment", False, a, b)
-        out.append((a, b, allow, e.value, e.at))
-    return out, big
+    factor k (`moment_ranges`)."""
+    got, big = moment_ranges(job, st, ss, k, [(a, b) for a, b, _ in limits])
+    return [(a, b, allow) + got[a, b][:2] for a, b, allow in limits], big
 
 
 def braced_hogging(job: Job, st, moment) -> list[Unchecked]:

@@ -27,6 +27,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        hogging_limits, hogging_remedy, hogging_source,
+                                       moment_ranges, wheels_count_on_top,
                                        span_top_limits, NOT_JUDGED, moving_top_worst,
                                        rolling_on_top, rolling_where, span_top_strength,
                                        top_words, unchecked_for)
@@ -587,11 +588,11 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     if not (hog or top or span or fat) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
-    out = _hogging(job, st, hog, ss, k) + _cantilever_top(job, top, ss, k) \
+    out = _hogging(job, st, hog, ss, k) + _cantilever_top(job, st, top, ss, k) \
         + _span_top(job, st, span, ss, k) + (_fatigue(job, st, ss, k) if fat else ())
     # the dead loads alone (k = 0) too: a live load that relieves them (wind uplift on a
     # roof's dead weight) can leave the rated state inside a limit the unloaded one passes
-    out += _hogging(job, st, hog, ss, 0.0) + _cantilever_top(job, top, ss, 0.0) \
+    out += _hogging(job, st, hog, ss, 0.0) + _cantilever_top(job, st, top, ss, 0.0) \
         + _span_top(job, st, span, ss, 0.0)
     return tuple(dict.fromkeys(out))
 
@@ -700,23 +701,31 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     return tuple(out)
 
 
-def _cantilever_top(job, limits, ss, k: float) -> tuple[str, ...]:
+def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where the rated load, bearing on an unbraced cantilever's top flange, would
     exceed the lower strength that loading leaves it (`limits`:
     `analysis.cantilever_top_limits`). The moment in a cantilever or overhang comes from the
     loads on it alone, so every load on at the factor (patterned spans too) gives its
-    largest."""
+    largest; [[moving]] wheels on it are taken at every position of the set
+    (`analysis.moment_ranges`)."""
     if not limits:
         return ()
     m = _all_on(ss, k)
+    # [[moving]] wheels on it (or adding to a top load there): every position of the set
+    rolls = [(a, b) for a, b, *_ in limits if wheels_count_on_top(job, a, b)]
+    ranges = moment_ranges(job, st, ss, k, rolls)[0] if rolls else {}
     out = []
     for a, b, kl, now, top in limits:
-        demand = m.extremes(a, b).abs_max
+        demand = max(abs(ranges[a, b][0]), abs(ranges[a, b][2])) if (a, b) in ranges \
+            else m.extremes(a, b).abs_max
         if demand > top:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
                        f"loads on the top flange not checked: {_at(k)} "
-                       f"its moment {f(demand, 'moment')} exceeds the {f(top, 'moment')} that "
+                       f"its moment {f(demand, 'moment')}"
+                       + (f" (a position of {job.moving[0].label or 'the wheel set'} over its "
+                          "travel)" if (a, b) in ranges else "")
+                       + f" exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
                        "centre, as checked). Brace the tip where one can be fitted "

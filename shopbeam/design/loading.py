@@ -1173,7 +1173,7 @@ def wheel_forces(mv: MovingLoad, kk: float) -> np.ndarray:
 
 
 def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
-                    pattern: tuple | None = None, hog: tuple = ()) -> MovingEnvelope:
+                    pattern: tuple | None = None, more: tuple = ()) -> MovingEnvelope:
     """Exact extremes of shear, moment (each unbraced length, and under each wheel),
     deflection (each span) and every reaction over the whole travel of the wheel set, on top
     of the static loads, from the beam's influence lines (engine/influence.py): every
@@ -1181,10 +1181,10 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
     of both partial derivatives, evaluated exactly. `positions` holds the first-wheel
     positions where any of them is reached, the ends of the travel (a wheel nearest each end
     of the member), a wheel on each static point load (their forces add: `_on_point_loads`), and for lifting
-    jobs the worst position of Mx / Mcx + My / Mcy under each wheel. `hog`: more (start,
+    jobs the worst position of Mx / Mcx + My / Mcy under each wheel. `more`: more (start,
     end) lengths, covering the member one after another, whose moment extremes are wanted
-    too (the bottom flange's lengths between supports, `analysis.hogging_demands`): kept as
-    ("hog", "moment", (start, end), "max" | "min"); they add no positions."""
+    too (the lengths between supports, a cantilever: `analysis.moment_ranges`): kept as
+    ("more", "moment", (start, end), "max" | "min"); they add no positions."""
     mv = ss.parts.moving[0]
     kk = k * (1 + ss.parts.impact)
     L = job.length
@@ -1263,13 +1263,13 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         for s in (1.0, -1.0):  # the check takes the sum at the wheels, the supports and
             # where either moment peaks: the whole beam and the line under each wheel
             asks.append((polys["total", "moment"] + s * ratio * Fy, None, True, True))
-    if hog:
-        asks.append((polys["total", "moment"], cell_groups(cells, hog), False, True))
+    if more:
+        asks.append((polys["total", "moment"], cell_groups(cells, more), False, True))
     found = candidates_many(cells, asks)
-    if hog:
+    if more:
         c = found.pop()
-        for a, b in hog:
-            keep(("hog", "moment", (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
+        for a, b in more:
+            keep(("more", "moment", (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
     for (tag, name, lines, hung), c in zip(reads, found):
         for a, b in regions[name]:
             keep((tag, name, (a, b)), c, (c.x >= a - tol) & (c.x <= b + tol))
@@ -1282,7 +1282,7 @@ def moving_envelope(job, ss: StateSet, static_loads, k: float, st=None,
         keep(("lateral", s, (0.0, L)), c, np.ones(len(c.x), bool))
         for i in range(len(P)):
             keep(("lateral", s, ("wheel", i)), c, c.wheel == i)
-    _governing_positions(job, ss, st, {k_: e for k_, e in ext.items() if k_[0] != "hog"},
+    _governing_positions(job, ss, st, {k_: e for k_, e in ext.items() if k_[0] != "more"},
                          pos, P)
     if pattern is None:
         reactions = tuple(reaction_candidates(inf, mv.offsets, p_lo, p_hi,
