@@ -876,3 +876,36 @@ def test_capacity_json_gives_what_each_support_carries_at_the_factor():
     assert [r["max_up"] for r in got] == [r["max_up"] for r in cap.evaluation.reactions]
     k = cap.factor
     assert got[0]["max_up"] == pytest.approx((k * 2000 + 120 + 18.4 * 16 / 2) * LBF, rel=2e-3)
+
+
+def test_a_hung_trolley_adds_its_moment_to_a_load_on_the_top_flange():
+    # a monorail with a tray bearing on its top flange at mid-span: the tray destabilises the
+    # unbraced length (Cb x 1/1.4), and the trolley's moment, though it hangs below, adds to
+    # the moment that length must carry. The rule must take the trolley at every position
+    import tomllib
+    from pathlib import Path
+
+    from shopbeam.design.analysis import moving_top_worst, span_top_limits, span_top_strength
+    from shopbeam.design.capacity import _all_on, _span_top
+    from shopbeam.design.checks import strengths
+    from shopbeam.design.loading import state_set
+
+    text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text(
+    ).replace("[criteria]", (
+        '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-1500 lbf"\nlabel = "tray"\nflange = "top"\n\n'
+        "[criteria]"))
+    assert tomllib.loads(text)["loads"][0]["label"] == "tray"
+    job = parse_job_text(text)
+    st = strengths(job)
+    limits = span_top_limits(job, st)
+    (a, b, l1), = limits
+    ss = state_set(job)
+    k = 3.0
+    # the tray alone at k stays inside the strength its loading leaves
+    top_s, _cb, demand_s = span_top_strength(st.flexure, l1, _all_on(ss, k), a, b)
+    assert demand_s < top_s
+    # with the trolley beside it, it does not
+    demand, top, _cb, p = moving_top_worst(job, st, ss, k, limits)[a, b]
+    assert demand > top and demand > demand_s
+    reasons = _span_top(job, st, limits, ss, k)
+    assert reasons and "hang from the bottom flange" in reasons[0]

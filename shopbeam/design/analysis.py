@@ -732,11 +732,21 @@ def moving_top_worst(job: Job, st, ss, k: float, limits):
 
 
 def rolling_where(job: Job, p: float) -> str:
-    """" with the first wheel of <set> at <p> (...)": where a rolling set's top-flange rule
-    is worst, in words."""
+    """" with the first wheel of <set> at <p> (...)": where a wheel set's top-flange rule is
+    worst, in words."""
     return (f" with the first wheel of {job.moving[0].label or 'the set'} at "
-            f"{units.fmt(p, 'length', job.units)} (the wheels of [[moving]] on a job not "
-            "tagged lifting are taken as rolling on the top flange)")
+            f"{units.fmt(p, 'length', job.units)} " + (
+                "(the wheels of [[moving]] on a job not tagged lifting are taken as rolling "
+                "on the top flange)" if rolling_on_top(job) else
+                "(its wheels hang from the bottom flange; their moment adds to that of the "
+                "loads on the top flange)"))
+
+
+def wheels_with_top_words(job: Job) -> str:
+    """Why a wheel set's positions enter the top-flange rule of an unbraced length, in words."""
+    return ("the wheels of [[moving]] on a job not tagged lifting roll on the top flange" if
+            rolling_on_top(job) else "loads bear on the top flange and the moment of the "
+            "[[moving]] trolley adds to theirs")
 
 
 def span_top_strength(fl, l1: float, moment, a: float, b: float
@@ -758,14 +768,16 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
     out = []
     fl = st.flexure
     limits = span_top_limits(job, st)
-    rolling = [x for x in limits if _rolls_through(job, x[0], x[1])]
+    # with a wheel set, every length (wheels rolling in it, or static loads on its top that
+    # the wheels' moment adds to) is judged over the wheel positions
+    rolling = list(limits) if job.moving else []
     worst = moving_top_worst(job, st, loading.state_set(job), 1.0, rolling) if rolling else {}
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     if worst == NOT_JUDGED:
         out.append(Unchecked(
             TOP_FLANGE_LTB,
-            "the wheels of [[moving]] on a job not tagged lifting roll on the top flange of "
-            "the unbraced length" + ("s " if len(rolling) > 1 else " ")
+            wheels_with_top_words(job) + " of the unbraced length"
+            + ("s " if len(rolling) > 1 else " ")
             + ", ".join(f"{f(a)} to {f(b)}" for a, b, _ in rolling) + ", which destabilises "
             "it; with patterned loads as well, the strength that leaves (eq. F1-1's Cb x 1/1.4 "
             "at every wheel position and pattern) is not worked out, so no rating is posted. "

@@ -29,8 +29,8 @@ from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_de
                                        hogging_limits, hogging_remedy, hogging_source,
                                        moment_ranges, wheels_count_on_top,
                                        span_top_limits, NOT_JUDGED, moving_top_worst,
-                                       rolling_on_top, rolling_where, span_top_strength,
-                                       top_words, unchecked_for)
+                                       rolling_where, span_top_strength,
+                                       top_words, unchecked_for, wheels_with_top_words)
 from shopbeam.design.analysis import bending_s
 from shopbeam.design.analysis import to_json as base_json
 from shopbeam.design.connections import fixed_end_moments, hinge_shears
@@ -657,14 +657,16 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     every load on at k) x 1/1.4."""
     if not limits:
         return ()
-    moving = bool(ss.parts.moving) and rolling_on_top(job)
+    # a wheel set: every wheel position, rolling on the top flange (a cart) or adding its
+    # moment to static loads on top (a hung trolley)
+    moving = bool(ss.parts.moving)
     m = _all_on(ss, k)
     out = []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     worst = moving_top_worst(job, st, ss, k, limits) if moving else {}
     if worst == NOT_JUDGED:
         return (f"lateral-torsional buckling with the loads on the top flange not checked: "
-                "the wheels of [[moving]] on a job not tagged lifting roll on the top flange "
+                f"{wheels_with_top_words(job)} "
                 "of an unbraced length, and with patterned loads as well the strength that "
                 "leaves (eq. F1-1's Cb x 1/1.4 at every wheel position and pattern) is not "
                 "worked out. Brace the member (beam.braces, braced = true), or drop patterned "
