@@ -259,3 +259,65 @@ def test_cells_of_a_continuous_beam_are_cut_only_where_wheels_cross_supports():
         travel_end = L - spacing * (n - 1)
         crossings = sum(1 for i in range(n) if 0 < 4.0 - spacing * i < travel_end)
         assert len(cells.strip_p0) == crossings + 1
+
+
+def test_moment_extremes_over_extra_lengths_are_reached_and_never_beaten():
+    # moving_envelope's extra lengths (the bottom flange's between supports, a cantilever's):
+    # each extreme is reached at the (x, position) it names, and a fine walk of positions
+    # never goes past it
+    from shopbeam.design.checks import strengths
+    from shopbeam.design.loading import moving_envelope, moving_states, state_set
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    job = parse_job_text("""schema = 1
+title = "three-span track with an overhang"
+tags = ["not-lifting"]
+[beam]
+length = "34 ft"
+section = "W10x22"
+material = "A992"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[supports]]
+at = "18 ft"
+type = "roller"
+[[supports]]
+at = "29 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "34 ft"
+value = "-60 lbf/ft"
+case = "dead"
+[[moving]]
+label = "cart"
+loads = ["-900 lbf", "-2500 lbf", "-1200 lbf"]
+spacing = ["2 ft", "3.5 ft"]
+""")
+    st = strengths(job)
+    ss = state_set(job)
+    k = 1.0
+    static = ss.static_loads(k, ())
+    ft = 0.3048
+    regions = ((0.0, 10 * ft), (10 * ft, 18 * ft), (18 * ft, 29 * ft), (29 * ft, 34 * ft))
+    ext = moving_envelope(job, ss, static, k, st, pattern=(), more=regions).extremes
+    lo, hi = job.moving[0].travel[0], job.moving[0].travel[1] - 5.5 * ft
+    walk = np.linspace(lo, hi, 1201)
+    named = [ext["more", "moment", r, how][2] for r in regions for how in ("min", "max")]
+    sols = dict(moving_states(job, ss, static, k, st, positions=sorted(set(walk) | set(named))))
+    big = max(abs(v[0]) for v in ext.values())
+    for r in regions:
+        for how in ("min", "max"):
+            value, x, p = ext["more", "moment", r, how]
+            assert r[0] - 1e-9 <= x <= r[1] + 1e-9
+            assert float(sols[p].moment(x)) == pytest.approx(value, abs=1e-9 * big)
+            e = [sols[q].moment.extremes(*r) for q in walk]
+            walked = min(v.min for v in e) if how == "min" else max(v.max for v in e)
+            assert (walked >= value - 1e-9 * big) if how == "min" else (walked <= value + 1e-9 * big)
+            assert walked == pytest.approx(value, abs=2e-3 * big)  # and the walk comes close
