@@ -700,3 +700,56 @@ def test_wet_or_hot_service_said_in_words_needs_its_key(title, key, held):
     res = capacity(job(beam=f"braced = true\n{key}", title=title))
     said = [w for w in res.not_rated if "wet service" in w or "temperature" in w]
     assert bool(said) == held, res.not_rated
+
+
+def test_bearing_of_a_patterned_wood_beam_is_judged_at_each_supports_largest_reaction():
+    # three spans, live load patterned, a 1 in seat at the third support: its reaction is
+    # largest with the two spans beside it loaded, a state neither the shear nor the
+    # deflection pattern need be. The check must read the worst of every pattern (the
+    # all-patterns walk is the oracle)
+    from shopbeam.design.loading import evaluate, walk_patterns
+
+    text = """schema = 1
+title = "three-span lumber shelf rail"
+units = "us"
+tags = ["shelf"]
+[beam]
+length = "30 ft 6 in"
+section = "2x12"
+material = "DF-L-2"
+self_weight = false
+restrained = true
+bearing = "3.5 in"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft 6 in"
+type = "roller"
+bearing = "6 in"
+[[supports]]
+at = "20 ft 6 in"
+type = "roller"
+bearing = "1 in"
+[[supports]]
+at = "30 ft 6 in"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-120 lbf/ft"
+patterned = true
+label = "stock"
+[criteria]
+deflection = "L/120"
+duration = "ten-years"
+"""
+    job = parse_job_text(text)
+    got = {c.name: c for c in evaluate(job, 1.0).checks}["bearing"]
+    walked = walk_patterns(job, 1.0)["bearing"][0]
+    assert got.ratio == pytest.approx(walked.ratio, rel=1e-9)
+    # and it is the 1 in seat: R / (1.5 in x 1 in), with R = 1441.6 lbf by the three-moment
+    # equation (spans 10.5/10/10 ft, the last two loaded: M1 = -389.6, M2 = -1402.6 lbf*ft;
+    # R = 600 + 101.3 + 600 + 140.3 lbf), worked by hand
+    assert got.demand * 1.5 * 1.0 * 0.0254 ** 2 / 4.4482216152605 == pytest.approx(1442, rel=0.01)
+    cap = capacity(job)
+    assert {c.name: c for c in cap.evaluation.checks}["bearing"].ratio <= 1 + 1e-9

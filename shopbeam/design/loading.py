@@ -790,12 +790,16 @@ def _envelope_local(job, ss: "StateSet", st, env: Envelopes, base_sol: Solution)
     """(None or "upward" / "downward", check) of the local checks over every pattern: the
     state with every pattern on, then every support at its largest upward and at its largest
     downward reaction (a local check reads only the reactions and the point loads; web
-    sidesway buckling reads the moment at the force, the largest over every pattern)."""
+    sidesway buckling reads the moment at the force, the largest over every pattern). A wood
+    member's bearing perpendicular to grain (NDS 2018 3.10.2) reads the reactions and the
+    point loads too, so it is judged the same way."""
     from shopbeam.design import local as _local
+    from shopbeam.design.checks import bearing_checks
 
     sec = getattr(st, "section", None) or job.section
     reactions = env.reactions()
     moments = lambda x: env.values("moment", x)  # noqa: E731
+    wood = getattr(st.flexure, "wood", None)
     for c in _local.local_checks(job, base_sol, sec, moments):
         yield None, c
     for key, which in (("max_up", "upward"), ("max_down", "downward")):
@@ -803,6 +807,9 @@ def _envelope_local(job, ss: "StateSet", st, env: Envelopes, base_sol: Solution)
             replace(r, force=e[key]) for r, e in zip(base_sol.reactions, reactions)))
         for c in _local.local_checks(job, fake, sec, moments):
             yield which, c
+        if wood is not None:
+            for c in bearing_checks(job, fake, wood):
+                yield which, c
 
 
 def envelope_ratio_applies(job, ss: "StateSet", st) -> bool:
