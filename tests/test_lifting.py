@@ -905,7 +905,7 @@ def test_a_hung_trolley_adds_its_moment_to_a_load_on_the_top_flange():
     top_s, _cb, demand_s = span_top_strength(st.flexure, l1, _all_on(ss, k), a, b)
     assert demand_s < top_s
     # with the trolley beside it, it does not
-    demand, top, _cb, p = moving_top_worst(job, st, ss, k, limits)[a, b]
+    demand, top, _cb, _p, _job = moving_top_worst(job, st, ss, k, limits)[a, b]
     assert demand > top and demand > demand_s
     reasons = _span_top(job, st, limits, ss, k)
     assert reasons and "hang from the bottom flange" in reasons[0]

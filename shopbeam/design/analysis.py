@@ -678,6 +678,21 @@ NOT_JUDGED = "patterned"
 
 
 def moving_top_worst(job: Job, st, ss, k: float, limits):
+    """`_moving_top_worst` of the wheel set as entered and turned round (`loading.both_ways`),
+    the worse of the two for each length, with the job (as entered or turned) it holds for:
+    (demand, top strength, Cb x 1/1.4, first-wheel position, job)."""
+    if ss.parts.patterned:
+        return NOT_JUDGED
+    out = {}
+    for jb, s2 in loading.both_ways(job, ss):
+        for key, got in _moving_top_worst(jb, st, s2, k, limits).items():
+            best = out.get(key)
+            if best is None or got[0] / got[1] > best[0] / best[1]:
+                out[key] = got + (jb,)
+    return out
+
+
+def _moving_top_worst(job: Job, st, ss, k: float, limits):
     """For each unbraced length (a, b, l1) of `limits` the wheels can stand in: (demand, top
     strength, Cb x 1/1.4, first-wheel position) where the moment over a..b stands highest
     against the strength left by wheels rolling on the top flange, over the wheel positions
@@ -759,6 +774,23 @@ def span_top_strength(fl, l1: float, moment, a: float, b: float
     return min(fl.cap, cb * l1) / fl.omega, cb, mmax
 
 
+def pattern_span_top(fl, l1: float, ss, env, a: float, b: float
+                     ) -> tuple[float, float, float]:
+    """`span_top_strength` over every pattern of a patterned job (`env`: its Envelopes at the
+    factor): the largest |M| over the whole pieces that cover a..b (a brace inside a piece
+    is no break of it) and Cb by eq. F1-1 with Mmax, MA, MB and MC each the largest over the
+    patterns, x 1/1.4. As for the bending check, M / (Cb Mn1) = (2.5 Mmax + 3 MA + 4 MB + 3
+    MC) / (12.5 Mn1), so the ratio is never below any one pattern's own."""
+    L = ss.beam.length
+    br = ss.fixed.moment.breaks
+    lo = float(br[max(int(br.searchsorted(a + 1e-9 * L, "right")) - 1, 0)])
+    hi = float(br[min(int(br.searchsorted(b - 1e-9 * L, "left")), len(br) - 1)])
+    mmax = max(abs(env.extreme("moment", up, lo, hi).value) for up in (True, False))
+    q = [env.abs_value("moment", a + f * (b - a)) for f in (0.25, 0.5, 0.75)]
+    cb = float(cb_factor(mmax, *q)) * TOP_FLANGE_CB
+    return min(fl.cap, cb * l1) / fl.omega, cb, mmax
+
+
 def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
     """Loads on the top flange of an unbraced length between braces, where that loading would
     lower the bending strength below the figure checked: listed; `capacity` posts no rating
@@ -786,14 +818,20 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
             "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
             blocks_rating=True))
         worst, limits = {}, [x for x in limits if x not in rolling]
+    env = None
     for a, b, l1 in limits:
         where = ""
         if (a, b, l1) in rolling:
             got = worst.get((a, b))
             if got is None:
                 continue
-            mmax, top, cb, p = got
-            where = ", worst" + rolling_where(job, p)
+            mmax, top, cb, p, jb = got
+            where = ", worst" + rolling_where(jb, p)
+        elif any(ld.patterned for ld in job.loads):  # every pattern, not one state's
+            if env is None:
+                ss = loading.state_set(job)
+                env = (ss, loading.Envelopes(ss, 1.0))
+            top, cb, mmax = pattern_span_top(fl, l1, env[0], env[1], a, b)
         else:
             top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
         if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:
@@ -922,16 +960,17 @@ def hogging_source(job: Job, st) -> str:
 def moment_ranges(job: Job, st, ss, k: float, lengths) -> tuple[dict, float]:
     """({(start, end): (least moment, where, largest moment, where)} over each of `lengths`,
     the largest |moment| anywhere), over every state at the factor k: each pattern of
-    patterned spans, and for [[moving]] every position of the wheel set over its travel
-    (exact, from its influence lines), not one governing state."""
+    patterned spans, and for [[moving]] every position of the wheel set over its travel,
+    either way round (exact, from its influence lines), not one governing state."""
     L = job.length
     out: dict = {}
     if ss.parts.moving:
         stops = sorted({0.0, L} | {x for a, b in lengths for x in (a, b)})
         regions = tuple((a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * L)
         big = 0.0
-        for pattern in ss.patterns:
-            ext = loading.moving_envelope(job, ss, ss.static_loads(k, pattern), k, st,
+        for jb, s2, pattern in ((jb, s2, p) for jb, s2 in loading.both_ways(job, ss)
+                                for p in s2.patterns):  # the wheel set either way round
+            ext = loading.moving_envelope(jb, s2, s2.static_loads(k, pattern), k, st,
                                           pattern=tuple(pattern), more=regions).extremes
             for r in regions:
                 lo = ext.get(("more", "moment", r, "min"))

@@ -23,13 +23,13 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
+from shopbeam.design.loading import (Envelopes, Evaluation, both_ways, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        hogging_limits, hogging_remedy, hogging_source,
                                        moment_ranges, wheels_count_on_top,
                                        span_top_limits, NOT_JUDGED, moving_top_worst,
-                                       rolling_where, span_top_strength,
+                                       pattern_span_top, rolling_where, span_top_strength,
                                        top_words, unchecked_for, wheels_with_top_words)
 from shopbeam.design.analysis import bending_s
 from shopbeam.design.analysis import to_json as base_json
@@ -555,8 +555,7 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
         return ()
     dem, big = hogging_demands(job, st, ss, k, limits)
     big = max(big, 1e-300)
-    where = f" (a position of {job.moving[0].label or 'the wheel set'} over its travel)" \
-        if ss.parts.moving else ""
+    where = _travel_words(job, ss) if ss.parts.moving else ""
     out = []
     for a, b, allow, least, at in dem:
         if -least > max(allow, 0.01 * big if allow <= 0 else 0.0):
@@ -671,25 +670,21 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                 "leaves (eq. F1-1's Cb x 1/1.4 at every wheel position and pattern) is not "
                 "worked out. Brace the member (beam.braces, braced = true), or drop patterned "
                 "= true where the loads stay on",)
-    env = None if moving else Envelopes(ss, k)
+    env = Envelopes(ss, k) if ss.spans and not moving else None
     for a, b, l1 in limits:
         where = ""
         if moving:  # every wheel position, each with its own Cb
             got = worst.get((a, b))
             if got is None:
                 continue
-            demand, top, cb, p = got
-            where = rolling_where(job, p)
+            demand, top, cb, p, jb = got
+            where = rolling_where(jb, p)
+        elif ss.spans:  # patterned: an upper bound over the patterns, Cb included
+            top, cb, demand = pattern_span_top(st.flexure, l1, ss, env, a, b)
+            where = (" (the moments of eq. F1-1 each the largest over every pattern of the "
+                     "patterned loads)")
         else:
             top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
-        if ss.spans and not moving:
-            # patterned: the envelope over the whole pieces that cover a..b (a brace inside a
-            # piece is no break of it), an upper bound over the patterns
-            br = ss.fixed.moment.breaks
-            lo = float(br[max(int(br.searchsorted(a + 1e-9 * job.length, "right")) - 1, 0)])
-            hi = float(br[min(int(br.searchsorted(b - 1e-9 * job.length, "left")), len(br) - 1)])
-            demand = max([demand] + [abs(env.extreme("moment", up, lo, hi).value)
-                                     for up in (True, False)])
         if demand > top * (1 + 1e-9):
             out.append(f"lateral-torsional buckling with the loads on the top flange not "
                        f"checked: {_at(k)} the moment over the unbraced length {f(a)} to "
@@ -701,6 +696,12 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                        "(flange = \"bottom\" on a point load; a spread load hung below goes "
                        "in as point loads at its hangers)")
     return tuple(out)
+
+
+def _travel_words(job, ss) -> str:
+    """" (the worst position of <set> over its travel[, either way round])"."""
+    return (f" (the worst position of {job.moving[0].label or 'the wheel set'} over its travel"
+            + (", either way round" if len(both_ways(job, ss)) > 1 else "") + ")")
 
 
 def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
@@ -725,8 +726,7 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
                        f"loads on the top flange not checked: {_at(k)} "
                        f"its moment {f(demand, 'moment')}"
-                       + (f" (a position of {job.moving[0].label or 'the wheel set'} over its "
-                          "travel)" if (a, b) in ranges else "")
+                       + (_travel_words(job, ss) if (a, b) in ranges else "")
                        + f" exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "

@@ -97,9 +97,13 @@ def load_parts(job, section=None) -> LoadParts:
                   for ld in loads if ld.case != "live")
     live = tuple(ld for ld in loads if ld.case == "live" and not ld.patterned)
     pat = tuple(ld for ld in loads if ld.case == "live" and ld.patterned)
-    moving = tuple(replace(mv, dead=tuple(d * (1 + hoist) for d in mv.dead))
-                   for mv in read_moving(job)) if hoist else read_moving(job)
-    return LoadParts(fixed, live, pat, moving, imp, hoist)
+    return LoadParts(fixed, live, pat, _moving_parts(job, hoist), imp, hoist)
+
+
+def _moving_parts(job, hoist: float) -> tuple[MovingLoad, ...]:
+    """The job's wheel sets, their dead parts raised by the lifting job's impact `hoist`."""
+    return tuple(replace(mv, dead=tuple(d * (1 + hoist) for d in mv.dead))
+                 for mv in read_moving(job)) if hoist else read_moving(job)
 
 
 def _hoist_weight(ld: Load, hoist: float) -> bool:
@@ -990,13 +994,24 @@ def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
     each check and each support's reactions the worse of the two)."""
     ss = ss or state_set(job, section)
     ev = _evaluate(job, k, section, ss, strengths)
+    ways = both_ways(job, ss)
+    if len(ways) == 1:
+        return ev
+    (turned, tss), = ways[1:]
+    return _worse(ev, _evaluate(turned, k, section, tss, strengths))
+
+
+def both_ways(job, ss: StateSet) -> list[tuple]:
+    """[(job, its state set)], and for a wheel set of unequal axles the same turned round
+    (`turned_round`; its state set shares every unit solution, only the wheels differ):
+    every rule that reads wheel positions judges both, as `evaluate` does."""
     cache = ss.__dict__.setdefault("_turned", {})
     if "job" not in cache:
-        cache["job"] = turned_round(job)
-        cache["ss"] = state_set(cache["job"], section) if cache["job"] is not None else None
-    if cache["job"] is None:
-        return ev
-    return _worse(ev, _evaluate(cache["job"], k, section, cache["ss"], strengths))
+        t = turned_round(job)
+        cache["job"] = t
+        cache["ss"] = None if t is None else replace(ss, parts=replace(
+            ss.parts, moving=_moving_parts(t, ss.parts.hoist_impact)))
+    return [(job, ss)] + ([(cache["job"], cache["ss"])] if cache["job"] is not None else [])
 
 
 def _worse(a: Evaluation, b: Evaluation) -> Evaluation:
