@@ -1179,3 +1179,50 @@ def test_the_rules_that_hold_a_rating_back_take_the_cart_either_way_round(case, 
     for cap in caps:
         held = [r for r in cap.not_rated if rule in r]
         assert not cap.rated and held and want in held[0], (held, want)
+
+
+def test_a_support_the_dead_loads_alone_pull_down_is_listed_as_uplift():
+    # equipment (dead) on a 4 ft overhang, storage (live) in the 10 ft span: with the storage
+    # off the pin must hold the beam down with 2000 lbf x 4 ft / 10 ft = 800 lbf (statics);
+    # "up to" the rated load includes none of it, so the label and the JSON list that uplift
+    # whether or not the storage is written patterned
+    text = """schema = 1
+title = "platform beam, equipment on the overhang"
+units = "us"
+tags = ["not-floor"]
+[beam]
+length = "14 ft"
+section = "W8x18"
+material = "A992"
+self_weight = false
+braced = true
+restrained = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "14 ft"
+value = "-2000 lbf"
+case = "dead"
+label = "equipment"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "10 ft"
+value = "-200 lbf/ft"
+label = "storage"
+"""
+    lbf = 4.4482216152605
+    for t in (text, text.replace('label = "storage"', 'label = "storage"\npatterned = true')):
+        cap = capacity(parse_job_text(t))
+        assert cap.rated
+        pin = cap.evaluation.reactions[0]
+        assert pin["max_down"] == pytest.approx(-800 * lbf, rel=1e-9)
+        assert pin["max_up"] > 0  # and it still bears the storage at the rating
+        assert any("pin at 0 ft pulls down up to 800 lbf" in line for line in rating(cap).uplift)
+    notes = analyze(parse_job_text(text)).cautions
+    assert [n for n in notes if n.startswith("UPLIFT with the live loads off") and "800 lbf" in n]

@@ -130,7 +130,7 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
                            for s in job.supports):
         out.append(HANGER_BRACE)
     if sol is not None:
-        out += uplift_notes(job, sol)
+        out += uplift_notes(job, sol) + live_off_uplift(job, sol)
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:
             out.append("A self-check did not pass (" + ", ".join(bad) + "): do not rely on "
@@ -158,6 +158,28 @@ def uplift_notes(job: Job, sol: Solution) -> list[str]:
                        f"the member DOWN with {units.fmt(-r.force, 'force', job.units)}: anchor "
                        "it for that force (a seat or bracket that only bears lets the member "
                        "lift off), and check the anchor")
+    return out
+
+
+def live_off_uplift(job: Job, sol: Solution) -> list[str]:
+    """A support the dead loads alone pull down harder than the loads as entered do (the
+    equipment on an overhang with the storage in the span taken off): a live load may be
+    absent, so it must be anchored for that. Jobs of load states list it in their reaction
+    envelope (patterns), or at the rated load (`capacity`: wheel sets)."""
+    if job.moving or any(ld.patterned for ld in job.loads) \
+            or not any(ld.case == "live" and ld.total_force for ld in job.loads):
+        return []
+    off = loading.state_set(job).fixed.reactions
+    top = max([abs(r.force) for r in sol.reactions] + [abs(r.force) for r in off] + [0.0])
+    out = []
+    for r, r0 in zip(sol.reactions, off):
+        if r0.kind in ("pin", "roller", "fixed", "spring") and r0.force < -1e-9 * top \
+                and r0.force < r.force - 1e-9 * top:
+            out.append(f"UPLIFT with the live loads off: the {r0.kind} at "
+                       f"{units.fmt(r0.at, 'length', job.units)} pulls the member DOWN with "
+                       f"{units.fmt(-r0.force, 'force', job.units)} under the dead loads alone "
+                       "(a live load may be absent): anchor it for that force (a seat or "
+                       "bracket that only bears lets the member lift off), and check the anchor")
     return out
 
 

@@ -480,8 +480,41 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
     res = _fatigue_cap(job, section, ss, st, _capacity(job, section, ss, st))
+    res = _with_live_off(job, section, ss, st, res)
     return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
                    + _relieving_couples(job, section, res.factor))
+
+
+def _with_live_off(job, section, ss, st, res: CapacityResult) -> CapacityResult:
+    """What the supports carry "up to" the rated load includes none of it: each support's
+    reaction range at the factor found is widened by the state with the live loads off
+    (k = 0: the dead loads, and a wheel set's dead weight over its travel), so a support the
+    dead loads alone pull down (equipment on an overhang, the storage in the span off) is
+    listed as uplift and its anchor force given."""
+    k = res.factor
+    e = res.evaluation
+    if e is None or not e.reactions or not math.isfinite(k) or k <= 0:
+        return res
+    if ss.parts.moving:
+        off = evaluate(job, 0.0, section, ss, st).reactions
+    else:
+        off = [{"max_up": r.force, "max_down": r.force} for r in ss.fixed.reactions]
+    words = "live loads off"
+    out = []
+    for r, r0 in zip(e.reactions, off):
+        r = dict(r)
+        if r0["max_up"] > r["max_up"] + 1e-9 * abs(r0["max_up"]):
+            r["max_up"], r["max_up_state"] = r0["max_up"], _off_words(r0, "max_up_state", words)
+        if r0["max_down"] < r["max_down"] - 1e-9 * abs(r0["max_down"]):
+            r["max_down"], r["max_down_state"] = r0["max_down"], _off_words(
+                r0, "max_down_state", words)
+        out.append(r)
+    return replace(res, evaluation=replace(e, reactions=tuple(out)))
+
+
+def _off_words(r0: dict, key: str, words: str) -> str:
+    """The live-off state in words, with the wheel position where one gives it."""
+    return "; ".join(x for x in (words, r0.get(key, "")) if x)
 
 
 def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
