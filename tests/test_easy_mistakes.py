@@ -1302,3 +1302,67 @@ def test_a_table_whose_entries_give_forces_holds_the_rating_without_refusing(tab
     job = parse_job_text(job_text() + table)
     res = capacity(job)
     assert any("is not a table shopbeam reads" in w for w in res.not_rated) == held
+
+
+@pytest.mark.parametrize("key, value, reads", [
+    # wood adjustment factors typed in: shopbeam sets them itself from the service keys
+    ("CM", "0.85", "NDS 2018 adjustment factor"), ("Ct", "0.8", "NDS 2018 adjustment factor"),
+    # a grade, a species or a yield written beside the material key: the catalog grade is
+    # what is checked (A500-B is 46 ksi, not A500-C's 50: a figure 9 % high)
+    ("grade", '"B"', "grade or strength"), ("species", '"Hem-Fir"', "grade or strength"),
+    ("fy", '"46 ksi"', "grade or strength"),
+    # a measured wall thinner than the catalog's design wall
+    ("wall", '"0.12 in"', "size"), ("thickness", '"3/16 in"', "size"),
+    # wet service said in other words
+    ("outdoor", "true", "wet_service"), ("service", '"wet"', "wet_service"),
+    ("condition", '"wet"', "wet_service"), ("green", "true", "wet_service"),
+    # treatment: fire-retardant and incised lumber take factors shopbeam does not apply
+    ("treated", "true", "lumber treatment"), ("fire_retardant", "true", "lumber treatment"),
+    ("incised", "true", "lumber treatment"),
+    # anything else said of the member
+    ("knot", '"large"', "property of the member"),
+])
+def test_an_unknown_beam_key_that_may_lower_the_figure_holds_the_rating(key, value, reads):
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_with_key("[beam]", key, value))
+    said = [p for p in job.warnings if p.key == f"beam.{key}"]
+    assert said and reads in said[0].message and "no rating is posted" in said[0].message
+    assert "did you mean 'braced'" not in said[0].message
+    assert not capacity(job).rated
+
+
+@pytest.mark.parametrize("key", ["notes", "label", "part_no", "customer"])
+def test_a_beam_key_that_only_names_or_notes_is_warned_not_held(key):
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_with_key("[beam]", key, '"bay 3 rail"'))
+    assert [p for p in job.warnings if p.key == f"beam.{key}"]
+    assert capacity(job).rated
+
+
+@pytest.mark.parametrize("title", [
+    "Joist open to the weather", "Wash bay platform joist", "Cooling tower platform joist",
+    "Greenhouse bench joist", "Joist outside the back door", "Porch joist behind the shop",
+    "Loading dock ramp joist", "Pool deck joist", "Steam room bench joist"])
+def test_wet_service_words_hold_a_wood_rating(title):
+    # NDS 2018 Supplement Table 4A: wet service takes CM below 1.0 (from memory); words that
+    # say the wood is wet, with no wet_service key, hold the rating until it says either way
+    from shopbeam.design.capacity import capacity
+
+    text = job_text(section="2x10", material="DF-L-SS").replace('title = "shelf"',
+                                                                f'title = "{title}"')
+    assert not capacity(parse_job_text(text)).rated
+    dry = text.replace('material = "DF-L-SS"', 'material = "DF-L-SS"\nwet_service = false')
+    assert capacity(parse_job_text(dry)).rated
+
+
+@pytest.mark.parametrize("title, held", [
+    ("Loft joist, fire-retardant treated 2x10", True), ("FRT joist over the paint booth", True),
+    ("Incised hem-fir rail", True), ("Shelf for heat-treated parts", False)])
+def test_fire_retardant_or_incised_lumber_is_not_rated(title, held):
+    from shopbeam.design.capacity import capacity
+
+    text = job_text(section="2x10", material="DF-L-2").replace('title = "shelf"',
+                                                               f'title = "{title}"')
+    assert capacity(parse_job_text(text)).rated is not held

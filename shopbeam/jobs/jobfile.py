@@ -541,6 +541,9 @@ class _Reader:
             if meant and here == "loads" and str(k).lower() in ("dead", "dead_load",
                                                                 "permanent"):
                 meant = "case = \"dead\""
+            if meant and here == "beam" and near and difflib.SequenceMatcher(
+                    None, str(k).lower(), near[0]).ratio() < 0.8:
+                hint = ""  # "treated": not 'braced'; what it reads like is said below
             if meant:
                 # a slip of a key that would lower the figure: rated without it, the figure
                 # would be too high (an ignored key that raises it only errs on the safe side)
@@ -681,7 +684,7 @@ _LOWERING_WORDS = (  # whole keys of a table that name one of those, whatever th
                 r"(?:bending|strong|weak)_?axis|weak)$", re.I), "beam", "axis"),
     (re.compile(r"^(?:welds?|weldment|is_?welded)$", re.I), "beam", "welded"),
     (re.compile(r"^(?:wet|wet_?use|moist(?:ure)?|damp|exposure|service_?condition|"
-                r"in_?service|incised|moisture_?content)$", re.I), "beam", "wet_service"),
+                r"in_?service|moisture_?content)$", re.I), "beam", "wet_service"),
     (re.compile(r"^(?:temps?|heat|hot|operating_?temp(?:erature)?)$", re.I), "beam",
      "temperature"),
     (re.compile(r"^(?:lateral_?brace|torsion(?:al)?(?:_?brace|_?restraint)?|twist|"
@@ -736,7 +739,43 @@ def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], valu
         if words.search(key) and (table == here or k == "criteria"):
             return ("the [criteria] table (a limit or factor)" if k == "criteria" else
                     f"{k} of {_TABLES.get(table, '[' + table + ']')}")
+    if here == "beam" and not _WORDS_ONLY.match(key) and "" not in homes:
+        # every key of [beam] says what the member is (its grade, size, condition): one that
+        # is not read may be one that lowers its strength
+        return next((what for words, what in _BEAM_MEANT if words.search(key)),
+                    "a property of the member (its grade, size or condition)")
     return ""
+
+
+# Keys that are only words (a note, a name, a record): warned, not held
+_WORDS_ONLY = re.compile(r"^(?:notes?|comments?|remarks?|description|desc|by|checked_?by|"
+                         r"references?|refs?|sources?|standard|code|labels?|names?|ids?|"
+                         r"marks?|part(?:_?(?:no|number))?|item|drawing|dwg|job|po|customer|"
+                         r"colou?r|finish|paint\w*|primer|coating|galv\w*|hot_?dip\w*|"
+                         r"vendor|supplier|location|titles?|heat_?(?:no|num|number)|"
+                         r"photos?|images?|pictures?|templates?|welders?|wps|"
+                         r"weld_?(?:procedure|spec|wps)|dates?|revisions?|rev|inspect\w*|"
+                         r"(?:approved|drawn|made|welded)_?by|owner|project|bay|room)$", re.I)
+# What an unknown [beam] key reads like, and where it is written in a job
+_BEAM_MEANT = (
+    (re.compile(r"^(?:c[mtifdlrv]|cfu|kcr|cm_?\w*|ct_?\w*)$", re.I),
+     "an NDS 2018 adjustment factor (shopbeam sets CM from wet_service, Ct from temperature, "
+     "CD from duration under [criteria], and the others from the member's size and use; it "
+     "takes no factor typed in)"),
+    (re.compile(r"(?:treat|retard|frt|^pt$|preserv|incis|cca|acq)", re.I),
+     "a lumber treatment (fire-retardant or preservative treatment lowers wood strength by the "
+     "treater's factors, NDS 2018 2.3.4, and incising by Ci, NDS 4.3.8, from memory; shopbeam "
+     "does not apply them: have the member rated with them)"),
+    (re.compile(r"(?:grade|species|^f[yu]$|yield|tensile|strength|^spec|astm|alloy|temper)", re.I),
+     "the member's grade or strength (written in material: a grade key such as \"A500-B\" or "
+     "\"HF-2\", or [beam.material] with its figures)"),
+    (re.compile(r"(?:wall|thick|^t$|depth|width|height|size|^od$|^id$|diam|gauge|gage)", re.I),
+     "the member's size (written in section: a catalog size, or [beam.section] with its "
+     "dimensions)"),
+    (re.compile(r"(?:outdoor|outside|exterior|service|condition|green|expos|weather|climate|"
+                r"environment|moist|wet)", re.I),
+     "wet_service of [beam] (wood in wet service takes CM, NDS 2018 Supplement Table 4A)"),
+)
 
 
 def _homes(key: str, here: str) -> list[str]:
@@ -3684,7 +3723,15 @@ _WET_WORDS = re.compile(
     r"rain(?:s|ed|ing|water|fall)?(?! gear| coats?| jackets?| suits?)|"
     r"wet(?! bar| saws?|[- ]pipe)|ground contact|in contact with the ground|"
     r"uncovered|open[- ]air|backyard|boardwalk|pergola|balcony|outdoor deck|humid\w*|"
-    r"condensation)\b", re.IGNORECASE)
+    r"condensation|open to (?:the )?(?:weather|elements|sky)|"
+    r"outside (?:the |of the )?(?:shop|building|back door|door|barn|warehouse|garage|plant|"
+    r"mill|yard)|wash[- ]?(?:bays?|downs?|racks?|areas?|stations?|pads?)|cooling towers?|"
+    r"greenhouses?|steam rooms?|(?:swimming )?pools?(?:side)?|porch(?:es)?|loading docks?|"
+    r"dock levell?ers?)\b", re.IGNORECASE)
+# Words that say a wood member is fire-retardant treated or incised: its design values take
+# factors shopbeam does not apply (NDS 2018 2.3.4, 4.3.8), so it is not rated
+_TREATED_WORDS = re.compile(r"\b(fire[- ]?retardant(?:[- ]treated)?|frtw?|"
+                            r"incised|incising)\b", re.IGNORECASE)
 _HOT_WORDS = re.compile(
     r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?(?! parts?)|"
     r"heat[- ]treat(?!ed (?:pallets?|parts?|stock|steel|bars?))\w*|smelter|saunas?|"
@@ -3741,6 +3788,16 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
                "beam.temperature",
                f"the job says {hot!r} but not the wood's temperature. Write temperature = "
                "\"100F-125F\", \"125F-150F\" or \"up-to-100F\"")
+    treated = next((m.group(0) for m in (_search(_TREATED_WORDS, t) for t in whole) if m), "")
+    if treated:
+        r.hold(f"the job says {treated!r}: fire-retardant treated lumber takes the treater's "
+               "reduction factors on its design values (NDS 2018 2.3.4) and incised lumber "
+               "the incising factor Ci (NDS 2018 4.3.8: 0.80 on Fb, Ft, Fc, Fv, from memory), "
+               "which shopbeam does not apply, so checked as untreated it is rated too high "
+               "and no rating is posted. Have it rated with those factors (lumber pressure-"
+               "treated with preservatives only, not incised, takes the untreated values)",
+               "title", f"the job says {treated!r}: shopbeam does not apply the treatment "
+               "factors of fire-retardant or incised lumber")
 
 
 def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="",
