@@ -1366,3 +1366,16 @@ def test_fire_retardant_or_incised_lumber_is_not_rated(title, held):
     text = job_text(section="2x10", material="DF-L-2").replace('title = "shelf"',
                                                                f'title = "{title}"')
     assert capacity(parse_job_text(text)).rated is not held
+
+
+@pytest.mark.parametrize("key, value", [("selfweight", "false"), ("case", '"dead"')])
+def test_a_slip_of_a_known_key_in_beam_keeps_that_keys_own_rule(key, value):
+    # selfweight = false misspelt leaves the own weight in (on the safe side): warned, as
+    # every key that only raises the figure when given; a key of another table is told
+    # where it belongs
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_with_key("[beam]", key, value))
+    said = [p for p in job.warnings if p.key == f"beam.{key}"]
+    assert said and "property of the member" not in said[0].message
+    assert capacity(job).rated

@@ -1647,3 +1647,66 @@ async def test_notes_emptied_then_pasted_on_several_lines_are_saved_as_a_multi_l
         saved = path.read_text(encoding="utf-8")
         assert tomllib.loads(saved)["notes"] == "\nfirst\nsecond"  # the leading break kept
         assert 'notes = """' in saved
+
+
+@sync
+async def test_ctrl_l_shows_the_moved_position_in_the_field_that_has_the_focus(tmp_path):
+    # the focused field is never rewritten from the document while one types, but ctrl+l
+    # moving the positions is asked for: the End field with the focus must show the new
+    # end, as the list and the saved file do, and not the old one (editing it would put
+    # the old end back)
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        await focused(pilot, app, "span", "beam.length")
+        await burst(pilot, CTRL_U + "16 ft" + TAB)
+        await pilot.press("f4")
+        await settle(pilot)
+        s = app.job_screen.session
+        assert s.rows("loads")[0]["end"] == "15 ft"
+        end = await focused(pilot, app, "loads", "load.end")
+        assert end.row == 0 and end.input.value == "15 ft"
+        await burst(pilot, CTRL_L)
+        assert type(app.screen).__name__ == "LengthScreen"
+        await pilot.pause(app.screen.WORD_GAP + 0.05)
+        await burst(pilot, "e")
+        await pilot.pause(app.screen.ALONE + 0.1)
+        await settle(pilot)
+        assert type(app.screen).__name__ == "JobScreen"
+        assert s.rows("loads")[0]["end"] == "16 ft"
+        assert app.job_screen.focused is end.input
+        assert end.input.value == "16 ft"
+        # and typing there goes on as typing: the field is not rewritten under it
+        await burst(pilot, CTRL_U + "14 ft")
+        await pilot.pause(0.3)
+        assert end.input.value == "14 ft"
+
+
+@sync
+async def test_a_sizing_sweep_is_taken_off_when_the_job_changes(tmp_path):
+    # the list of sections that pass was the job's before an edit, and nothing said so:
+    # after the edit the Sizing view must not show it as this job's
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f12")
+        await settle(pilot)
+        view = app.job_screen.query_one("SizingView")
+        view.action_run()
+        lst = view.query_one("#size-list")
+        for _ in range(200):  # the sweep runs in a thread
+            await pilot.pause(0.05)
+            if lst.option_count:
+                break
+        assert lst.option_count
+        await pilot.press("f4")
+        await settle(pilot)
+        await focused(pilot, app, "loads", "load.value")
+        await burst(pilot, CTRL_U + "-400 lbf/ft" + TAB)
+        await pilot.pause(0.5)
+        await pilot.press("f12")
+        await settle(pilot)
+        assert lst.option_count == 0
+        assert "job changed" in str(view.query_one("#size-note").render())

@@ -739,7 +739,10 @@ def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], valu
         if words.search(key) and (table == here or k == "criteria"):
             return ("the [criteria] table (a limit or factor)" if k == "criteria" else
                     f"{k} of {_TABLES.get(table, '[' + table + ']')}")
-    if here == "beam" and not _WORDS_ONLY.match(key) and "" not in homes:
+    if here == "beam" and not _WORDS_ONLY.match(key) and not homes and not (
+            near and difflib.SequenceMatcher(None, key.lower(), near[0]).ratio() >= 0.8):
+        # (a slip of a known key, or a key of another table, says what it is: the known
+        # key's own rule decides, see _LOWERING)
         # every key of [beam] says what the member is (its grade, size, condition): one that
         # is not read may be one that lowers its strength
         return next((what for words, what in _BEAM_MEANT if words.search(key)),

@@ -715,7 +715,7 @@ class JobScreen(Screen):
     def move_positions(self, how: str, old: float, new: float, placed) -> None:
         s = self.session
         system = s.doc.get("units") if s.doc.get("units") in ("us", "si") else "us"
-        moved = []
+        moved, moved_at = [], []
         for table, i, k, x in placed:
             if how == "scale":
                 to = units.fmt(x * new / old, "length", system)
@@ -734,11 +734,20 @@ class JobScreen(Screen):
             else:
                 (s.doc.set_support if table == "supports" else s.doc.set_load)(i, **{k: to})
             moved.append(self._placed_words(table, i, k, x, to))
+            moved_at.append((table, i, k))
         past = [f"{t[:-1]} {i + 1}" for t, i, k, x in placed
                 if x > new * (1 + 1e-9) and not (how == "scale" or
                                                  (how == "ends" and abs(x - old) <= 1e-9 * old))]
         if moved:
             s.touched()
+            # the field with the focus shows its moved value too (nothing typed is pending:
+            # ctrl+l took the typing first); only the next value shown, then typing rules
+            here = getattr(self.focused, "parent", None)
+            shown = {("beam.braces", None) if t == "braces" else (f"{t[:-1]}.{k}", i)
+                     for t, i, k in moved_at if t != "movings"}
+            if isinstance(here, Field) and ((here.key, here.row) in shown
+                                            or (here.key, None) in shown):
+                here.will_move()
             self.notify("Moved: " + "; ".join(moved[:6]) + (" ..." if len(moved) > 6 else ""),
                         timeout=8)
         elif how == "keep":

@@ -286,10 +286,18 @@ class SizingView(View):
             if kind:
                 choice.set(kind)
         note = self.query_one("#size-note", Static)
+        swept = getattr(self, "_swept_for", None)
+        if swept is not None and swept is not job:
+            # a sweep of the job before the last edit would read as this job's: taken off
+            self._swept_for = None
+            self._ran = False
+            self.query_one("#size-list", OptionList).clear_options()
         if session.evaluation.result is None:
             note.update(Text(problems_text(session.evaluation)))
         elif not getattr(self, "_ran", False):
-            note.update(Text("Choose a kind, then press the button (or r)."))
+            note.update(Text(("The job changed since the last sweep: " if swept is not None
+                              and swept is not job else "")
+                             + "Choose a kind, then press the button (or r)."))
 
     BINDINGS = [Binding("r", "run", "sweep", priority=True)]
 
@@ -306,6 +314,7 @@ class SizingView(View):
             return
         kind = self.query_one(Choice).value
         self._ran = True
+        self._swept_for = ev.job
         self.query_one("#size-note", Static).update(Text(f"Sweeping {kind}..."))
         self.query_one("#size-list", OptionList).clear_options()
         self.sweep(ev.job, kind)
@@ -313,9 +322,11 @@ class SizingView(View):
     @work(thread=True, exclusive=True, group="sizing", exit_on_error=False)
     def sweep(self, job, kind: str) -> None:
         rows, note = size_rows(job, kind)
-        self.app.call_from_thread(self._done, rows, note)
+        self.app.call_from_thread(self._done, rows, note, job)
 
-    def _done(self, rows, note: str) -> None:
+    def _done(self, rows, note: str, job=None) -> None:
+        if job is not None and getattr(self, "_swept_for", None) is not job:
+            return  # the job changed while it swept: its rows are not this job's
         self.query_one("#size-note", Static).update(Text(note))
         lst = self.query_one("#size-list", OptionList)
         lst.clear_options()

@@ -308,8 +308,9 @@ class Field(Horizontal):
         text last typed here while the document says the same in its own way ("rack,shelf"
         for the tags rack and shelf, "1.670" for 1.67)."""
         value = "" if value is None else str(value)
-        if self.screen.focused is self.input or self._typed is not None:
+        if self._typed is not None or (self.screen.focused is self.input and not self._moved):
             return
+        self._moved = False
         kept = self._kept
         if kept is not None and same_entry(kept, value):
             if self.input.value != kept:
@@ -336,6 +337,13 @@ class Field(Horizontal):
         self.set_value(value)
 
     _kept = None  # the text last typed here and written into the document
+    _moved = False  # the user asked to move what this field shows (ctrl+l): show it
+
+    def will_move(self) -> None:
+        """The next value shown here is one the user asked for (ctrl+l moved the positions
+        after a length change): shown even with the focus, as nothing typed is pending."""
+        self._moved = True
+        self._kept = None
 
     def taken(self, value: str) -> None:
         """The screen wrote `value` (typed here) into the document."""
