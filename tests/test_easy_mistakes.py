@@ -1379,3 +1379,23 @@ def test_a_slip_of_a_known_key_in_beam_keeps_that_keys_own_rule(key, value):
     said = [p for p in job.warnings if p.key == f"beam.{key}"]
     assert said and "property of the member" not in said[0].message
     assert capacity(job).rated
+
+
+@pytest.mark.parametrize("section, held", [
+    # millimetres typed with no unit, read as inches (a 10 mm bar as a 10 in one)
+    ("round-bar 10", True), ("rect-tube 10 x 10 x 1", True), ("rect-tube 20 x 20 x 2", True),
+    # a 1 in wall: past shop tube walls (common practice: they run to 5/8 in)
+    ("rect-tube 4 x 4 x 1", True),
+    # shop inch sizes: read as written
+    ("rect-tube 4 x 2 x 0.25", False), ("round-bar 1.5", False),
+    # the unit written either way: read as written
+    ("round-bar 10 mm", False)])
+def test_a_unitless_size_far_from_a_shop_member_of_its_span_is_not_rated(section, held):
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(job_text(section=section, material="A36").replace(
+        'length = "6 ft"', 'length = "8 ft"').replace('at = "6 ft"', 'at = "8 ft"'))
+    said = [p for p in job.warnings if p.key == "beam.section" and "without a unit" in p.message]
+    assert bool(said) is held
+    if held:
+        assert not capacity(job).rated

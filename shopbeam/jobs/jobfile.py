@@ -1788,6 +1788,38 @@ def _feet_or_metres(text) -> bool:
     return bool(_FEET_OR_METRES.search(units.normalised(text).strip().rstrip(".")))
 
 
+# A described size with no unit is read in inches. Millimetres typed so ("round-bar 10",
+# "rect-tube 10 x 10 x 1") read as a section far heavier than a shop puts on that span: a
+# size of 8 or more on a span under 12 times it, or a tube wall of 1 or more (common practice,
+# no source: shop tube walls run to 5/8 in)
+BARE_BIG, BARE_SPAN, BARE_WALL = 8.0, 12.0, 1.0
+
+
+def _bare_sizes_in_mm(r: _Reader, spec, length, system: str) -> None:
+    """A unitless description on a US job whose inches are far from a shop section of that
+    span (a 10 mm bar typed "round-bar 10" is a 10 in bar): NOT RATED until the unit is
+    written."""
+    got = catalog.bare_numbers(spec) if system == "us" else None
+    if not got or not length:
+        return
+    shape, nums = got
+    big = max(nums)
+    tube = "tube" in shape.lower() or "pipe" in shape.lower()
+    why = ""
+    if big >= BARE_BIG and length / (big * units.IN) < BARE_SPAN:
+        why = (f"a {big:g} in size on a {units.fmt(length, 'length', system)} span (only "
+               f"{length / (big * units.IN):.2g} x its size)")
+    elif tube and len(nums) >= 2 and nums[-1] >= BARE_WALL:
+        why = f"a {nums[-1]:g} in wall"
+    if why:
+        r.hold(f"{spec!r} gives its sizes without a unit, read as inches: {why} is far from a "
+               "shop member of this length, so millimetres may be meant (a 10 mm bar read as "
+               "10 in is rated hundreds of times over); no rating is posted until the unit is "
+               f"written: \"{spec.strip()} mm\" if millimetres are meant, or \"... in\" "
+               "on each size to keep inches", "beam.section",
+               f"the section {spec!r} has no unit: write mm or in on its sizes")
+
+
 def _corner_radius(r: _Reader, section, material, system: str) -> None:
     """A typed-in tube's corner radius over 3 x its wall: past what ASTM A500 allows a tube's
     outside corner (3 t at most, from memory) and a likely unit slip ("5 in" for "5 mm"); the
@@ -4065,6 +4097,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         if section is not None:
             _plausible_section(section, r)
             _section_dims_in_feet(r, beam["section"], length, system)
+            _bare_sizes_in_mm(r, beam["section"], length, system)
             _corner_radius(r, section, material, system)
             _said_laid_flat(r, section, axis, title, notes, tags)
             _same_both_ways(r, section, axis)

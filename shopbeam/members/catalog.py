@@ -923,6 +923,13 @@ _BARE_LIMIT_IN = {"bar": 12.0, "tube": 24.0}
 def bare_description(designation) -> tuple[str, float] | None:
     """For a shop description whose sizes carry no unit at all ("round-bar 25", "rect-tube 40
     x 20 x 2"): (the shape word, the largest number). None for anything else."""
+    got = bare_numbers(designation)
+    return (got[0], max(got[1])) if got else None
+
+
+def bare_numbers(designation) -> tuple[str, list[float]] | None:
+    """For a shop description whose sizes carry no unit at all: (the shape word, its numbers
+    in the order written). None for anything else."""
     if not isinstance(designation, str):
         return None
     m = _DESCRIBED.match(designation)
@@ -934,7 +941,7 @@ def bare_description(designation) -> tuple[str, float] | None:
     nums = [_number(_MIXED.sub(lambda n: f"{n.group(1)}-{n.group(2)}/{n.group(3)}", t.strip()))
             for t in re.split(r"\s*[xX\u00d7*]\s*", dims.strip()) if t.strip()]
     nums = [v for v in nums if v is not None]
-    return (m.group("shape"), max(nums)) if nums else None
+    return (m.group("shape"), nums) if nums else None
 
 
 def bare_size_problem(designation, system: str) -> str:
