@@ -672,7 +672,9 @@ def test_a_monorail_with_a_run_out_is_not_rated_from_one_hoist_place(length, hel
     # 43 % high, hand-checked: P a^2 (L + a) / 3EI). No one place covers it and the span
     # (common practice: a run-out carries the hoist); a 6 in stub carries only the end stop
     text = _member().replace('length = "16 ft"', f'length = "{length}"') + (
-        '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-2000 lbf"\n')
+        '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-2000 lbf"\n'
+        '[[loads]]\ntype = "point"\nat = "8 ft"\nvalue = "-100 lbf"\ncase = "dead"\n'
+        'label = "hoist"\n')
     res = capacity(parse_job_text(text))
     assert any("run-out" in w and "[[moving]]" in w for w in res.not_rated) == held
     assert res.rated == (not held)
@@ -909,3 +911,25 @@ def test_a_hung_trolley_adds_its_moment_to_a_load_on_the_top_flange():
     assert demand > top and demand > demand_s
     reasons = _span_top(job, st, limits, ss, k)
     assert reasons and "hang from the bottom flange" in reasons[0]
+
+
+def test_a_hoist_with_no_weight_entered_is_not_rated():
+    # the rated load of a jib or monorail is the hook load plus the hoist and trolley (ASCE
+    # 7-16 4.9.2, from memory): with no hoist weight entered, the figure posted is what the
+    # member carries in all, and the hoist hung on it would come on top
+    from pathlib import Path
+
+    presets = Path(__file__).resolve().parents[1] / "presets"
+    jib = (presets / "jib-arm.toml").read_text()
+    assert capacity(parse_job_text(jib)).rated
+    bare = jib.replace('value = "-80 lbf"              # hoist and trolley', 'value = "0 lbf"')
+    assert bare != jib
+    job = parse_job_text(bare)
+    said = [p for p in job.warnings if "no hoist or trolley weight" in p.message]
+    assert said and 'case = "dead"' in said[0].message
+    assert not capacity(job).rated
+    trolley = (presets / "monorail-trolley.toml").read_text()
+    assert capacity(parse_job_text(trolley)).rated
+    job = parse_job_text(trolley.replace('dead = ["-60 lbf", "-60 lbf"]', ""))
+    assert [p for p in job.warnings if "dead = [...] on [[moving]]" in p.message]
+    assert not capacity(job).rated

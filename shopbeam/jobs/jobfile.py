@@ -2737,6 +2737,36 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
 RUNOUT_MIN = 0.305  # 1 ft
 
 
+def _hoist_weight(r: _Reader, criteria: Criteria, tags, loads, moving, supports,
+                  length) -> None:
+    """A monorail or jib (a hoist hangs on the member) with no hoist or trolley weight
+    entered: the figure posted would be the hook load and the hoist together, and the hoist
+    hung on top of it overloads the member (ASCE 7-16 4.9.2 takes the wheel loads as rated
+    load plus trolley and hoist, from memory). NOT RATED until the weight is entered."""
+    if length is None or not supports or not is_lifting(tags, criteria.lifting) or r.errors:
+        return  # (a job refused already: its own messages first)
+    name = criteria.lifting or guessed_profile(supports, length)
+    if name not in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
+        return
+    if moving:
+        if any(d for ws in moving for d in ws.dead):
+            return
+    elif any(ld.case == "dead" and ld.kind == "point" and ld.value for ld in loads):
+        return
+    if not any(ld.case == "live" and ld.total_force for ld in loads) and not moving:
+        return  # nothing to rate
+    where = ("dead = [...] on [[moving]], the hoist and trolley weight per axle" if moving
+             else "a point load at the hoist with case = \"dead\" (the hoist and trolley "
+             "weight)")
+    r.hold("no hoist or trolley weight is entered on this " + (
+               "jib" if "jib" in name else "monorail") + ": the figure posted would be what "
+           "the member carries in all, and the hoist hung on it takes its own weight out of "
+           "that (the rated load is hook load plus hoist and trolley, ASCE 7-16 4.9.2, from "
+           f"memory), so no rating is posted until it is entered: {where}",
+           "moving" if moving else "loads",
+           "the hoist and trolley weight is not entered: enter it as " + where)
+
+
 def _parked_hoist(r: _Reader, criteria: Criteria, tags, loads, hung, moving_raw, supports,
                   length, system: str) -> str:
     """A monorail or jib hoist given as a point load at one place: the hoist travels by
@@ -4325,6 +4355,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _moving_dead_units(r, data.get("moving"), moving, system)
     travelling_hoist = _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"),
                                      supports, length, system)
+    _hoist_weight(r, criteria, tags, loads, moving, supports, length)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
     _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
                    system, title, notes)
