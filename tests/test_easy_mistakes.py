@@ -512,8 +512,11 @@ def test_a_job_that_reads_like_a_lifting_device_is_warned_and_not_rated(title, t
 def test_a_tagged_or_plain_job_gets_no_lifting_hint(title, tags):
     from shopbeam.design.capacity import capacity
 
-    text = job_text().replace('title = "shelf"', f'title = "{title}"'
-                              + (f"\ntags = {tags}" if tags else ""))
+    # (a lifting job gives its hoist's weight, without which nothing is rated)
+    hoist = ('[[loads]]\ntype = "point"\nat = "3 ft"\nvalue = "-60 lbf"\ncase = "dead"\n'
+             'label = "hoist"\n') if tags == '["lifting"]' else ""
+    text = job_text(extra_load=hoist).replace('title = "shelf"', f'title = "{title}"'
+                                              + (f"\ntags = {tags}" if tags else ""))
     job = parse_job_text(text)
     assert not [p for p in warnings(job) if "reads like a lifting device" in p.message]
     assert job.lifting_hint == ""
@@ -1399,3 +1402,29 @@ def test_a_unitless_size_far_from_a_shop_member_of_its_span_is_not_rated(section
     assert bool(said) is held
     if held:
         assert not capacity(job).rated
+
+
+def test_a_dead_load_marked_uplift_that_pushes_up_holds_the_rating():
+    # the wrong fix of a forgotten minus sign: uplift = true on a weight. Counted on as always
+    # there, it relieves the member and the figure posted goes up
+    from shopbeam.design.capacity import capacity
+
+    plank = ('[[loads]]\ntype = "uniform"\nvalue = "40 lbf/ft"\ncase = "dead"\n'
+             'label = "shelf plank"\n')
+    job = parse_job_text(job_text(extra_load=plank + "uplift = true\n"))
+    assert [p for p in job.warnings if p.key == "loads[1].uplift" and "pushes UP" in p.message]
+    assert not capacity(job).rated
+    # written as a weight, it is rated
+    assert capacity(parse_job_text(job_text(extra_load=plank.replace('"40', '"-40')))).rated
+
+
+def test_an_upward_live_load_is_posted_as_upward():
+    # a figure with no direction on a label reads as a weight
+    from shopbeam.design.capacity import capacity
+    from shopbeam.output.label import label_text, rating
+
+    up = capacity(parse_job_text(job_text(load='value = "400 lb"\nuplift = true')))
+    assert "MAX UPWARD POINT LOAD" in label_text(rating(up))
+    down = capacity(parse_job_text(job_text()))
+    text = label_text(rating(down))
+    assert "MAX POINT LOAD" in text and "UPWARD" not in text

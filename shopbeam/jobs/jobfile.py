@@ -2103,6 +2103,17 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                 r.warn("uplift = true says this load pushes up, but its value pushes down "
                        "(negative): it changes nothing; remove it, or check the sign",
                        f"{key}.uplift")
+            elif got.case == "dead":
+                # the wrong fix of a forgotten minus sign: a weight marked uplift, counted on
+                # as always there and relieving the member
+                name = f" ({got.label})" if got.label else ""
+                r.hold(f"this dead load{name} pushes UP (uplift = true): a dead load is counted "
+                       "on as always there, so it lowers what the member must carry and "
+                       "raises the figure posted. A weight pushes down: write its value "
+                       "negative and remove uplift = true. If it really pushes up (a "
+                       "counterweight over a pulley), remove it to rate the member without "
+                       "its help", f"{key}.uplift",
+                       f"the dead load{name} pushes up and relieves the member: check its sign")
     if levels is not None and not RACK_TAGS.intersection(tags):
         r.warn("levels is the number of beam levels in a rack bay, for the rating label's "
                "per-bay total; this job is not tagged rack, pallet or racking, so it changes "

@@ -160,10 +160,10 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         ld = live[0]
         width = (getattr(job, "widths", None) or {}).get(ld.key)
         if width:  # given per area: post it per area first, in the unit it was written in
-            figs.append(posted("MAX AREA LOAD", ld.w1 * k / width, "area_load", sy,
+            figs.append(posted(f"MAX {_up(ld)}AREA LOAD", ld.w1 * k / width, "area_load", sy,
                                f"over {pos(width)} tributary width, {pos(ld.start)} to "
                                f"{pos(ld.end)}", where))
-        w = posted("MAX UNIFORM LOAD", ld.w1 * k, "line_load", sy,
+        w = posted(f"MAX {_up(ld)}UNIFORM LOAD", ld.w1 * k, "line_load", sy,
                    f"over {pos(ld.start)} to {pos(ld.end)}", where)
         figs.append(w)
         # the total of the posted figure (never more than the exact total), so the two agree
@@ -172,7 +172,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     elif len(live) == 1 and not mv and live[0].kind == "point":
         ld = live[0]
         moves = hoist_x is not None
-        figs.append(posted("MAX POINT LOAD", ld.value * k, "force", sy,
+        figs.append(posted(f"MAX {_up(ld)}POINT LOAD", ld.value * k, "force", sy,
                            "anywhere along its travel" if moves else f"at {pos(ld.at)}",
                            where))
     else:
@@ -180,16 +180,17 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         for i, ld in enumerate(live):
             name = ld.label or f"load {i + 1}"
             if ld.kind == "point":
-                figs.append(posted(f"max {name}", ld.value * k, "force", sy,
+                figs.append(posted(f"max {name}{_up(ld, ' (upward)')}", ld.value * k, "force", sy,
                                    "anywhere along its travel, with the hoist"
                                    if hoist_x is not None and abs(ld.at - hoist_x) <= 1e-9
                                    * job.length else f"at {pos(ld.at)}", where))
             elif ld.kind == "uniform":
-                figs.append(posted(f"max {name}", ld.total_force * k, "force", sy,
-                                   f"spread over {pos(ld.start)} to {pos(ld.end)}", where))
+                figs.append(posted(f"max {name}{_up(ld, ' (upward)')}", ld.total_force * k,
+                                   "force", sy, f"spread over {pos(ld.start)} to {pos(ld.end)}", where))
             elif ld.kind == "linear":
                 w1, w2 = (units.fmt(abs(w) * k, "line_load", sy) for w in (ld.w1, ld.w2))
-                figs.append(posted(f"max {name} (total)", ld.total_force * k, "force", sy,
+                figs.append(posted(f"max {name}{_up(ld, ' (upward)')} (total)",
+                                   ld.total_force * k, "force", sy,
                                    f"varying from {w1} at {pos(ld.start)} to {w2} at "
                                    f"{pos(ld.end)}", where))
             else:
@@ -652,6 +653,11 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         reactions_head="SUPPORTS must carry at the rated load (" + (
             "each member, " if job.members > 1 else "") + "+ up; their brackets, seats, "
         "hangers and anchors are not checked here)")
+
+
+def _up(ld, words: str = "UPWARD ") -> str:
+    """`words` for a load that pushes up (a figure with no direction reads as a weight)."""
+    return words if ld.kind != "moment" and ld.total_force > 0 else ""
 
 
 def _profile_name(job) -> str:
