@@ -1428,3 +1428,21 @@ def test_an_upward_live_load_is_posted_as_upward():
     down = capacity(parse_job_text(job_text()))
     text = label_text(rating(down))
     assert "MAX POINT LOAD" in text and "UPWARD" not in text
+
+
+@pytest.mark.parametrize("title, tags, hinted", [
+    ("Lift arm for the welding positioner", "", True), ("Die change beam over the press", "", True),
+    ("Overhead beam to raise motors", "", True), ("Pickup arm for the mill vise", "", True),
+    ("Beam for the 1 ton Harrington", "", True), ("Wall-mounted swing arm, 1/2 ton", "", True),
+    ("Beam to hang the motor from while we rebuild it", "", True),
+    # a load hung from the bottom flange under a tag that says nothing of stored goods
+    ("Overhead I-beam, bay 2", '["overhead"]', True),
+    # ...and under one that does: no hint
+    ("Overhead I-beam, bay 2", '["storage"]', False),
+    ("Parts shelf", "", False)])
+def test_more_words_of_a_lifting_device_hold_an_untagged_job(title, tags, hinted):
+    hung = 'flange = "bottom"' if "I-beam" in title else ""
+    text = job_text(load=f'value = "-400 lb"\n{hung}').replace(
+        'title = "shelf"', f'title = "{title}"' + (f"\ntags = {tags}" if tags else ""))
+    job = parse_job_text(text)
+    assert bool(job.lifting_hint) is hinted

@@ -2144,7 +2144,11 @@ _LIFTING_WORDS = re.compile(
     r"lift rails?|overhead lifts?|(?<!easy )(?<!easier )(?:to|for) lift(?! trucks?\b)"
     r"(?! (?:\w+ )?(?:off|out|down)\b)|hoysts?|monorials?|tralleys?|"
     r"equali[sz]er beams?|sling bars?|lift(?:ing)? frames?|lift(?:ing)? bars?|yokes?|"
-    r"load bars?)\b",
+    r"load bars?|lift(?:ing)? arms?|lift(?:ing)? points?|(?:engine|motor|transmission|"
+    r"gearbox) (?:hoist|pick)\w*|pull(?:ing)? beams?|pick[- ]?up arms?|"
+    r"(?:to|for) (?:raise|pull) (?:the )?(?:motors?|engines?|transmissions?|gearbox(?:es)?|"
+    r"pumps?|dies?|molds?|moulds?)|die[- ]?change|mou?ld[- ]?change|swing[- ]?arms?|"
+    r"harrington|lodestar|coffing|budgit|demag|(?:yale|liftmaster|chester) (?:hoists?|\d)|hang (?:the )?(?:motor|engine|transmission|pump|die)s?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
 # a lifting word run together with the member it names, as one word of a tag or title
@@ -3246,6 +3250,18 @@ _FIXTURE_WORDS = re.compile(
     r"units?|displays?|screens?|baskets?)\b", re.IGNORECASE)
 
 
+# Tags of a member that hangs things below without lifting them (stored goods, fixtures)
+_HANGS_STORED = RACK_TAGS | SHELF_TAGS | {"storage", "pipe", "pipes", "pipe-support", "tray",
+                                          "cable-tray", "fixture", "sign", "hanger", "hvac",
+                                          "floor", "mezzanine", "platform"}
+
+
+def _hangs_stored(tags) -> bool:
+    """Whether the job's tags say the member hangs stored goods or fixtures below (a load on
+    its bottom flange is then no hint of a hoist)."""
+    return bool(_HANGS_STORED & {normal_tag(t) for t in tags})
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -3274,7 +3290,7 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
         # pipe support tagged so hangs things below without lifting them)
         if _is_table(ld) and (ld.get("lug") is True or "wheels" in ld
                               or ld.get("flange") == "bottom" and ld.get("type") == "point"
-                              and not tags and not fixture):
+                              and not _hangs_stored(tags) and not fixture):
             said.append(f"loads[{i}] has " + ("lug = true" if ld.get("lug") is True
                                                else "wheels" if "wheels" in ld
                                                else "flange = \"bottom\" (it hangs below)"))
