@@ -1446,3 +1446,15 @@ def test_more_words_of_a_lifting_device_hold_an_untagged_job(title, tags, hinted
         'title = "shelf"', f'title = "{title}"' + (f"\ntags = {tags}" if tags else ""))
     job = parse_job_text(text)
     assert bool(job.lifting_hint) is hinted
+
+
+@pytest.mark.parametrize("limit, held", [("L/120", True), ("0.5 in", True), ("L/180", False),
+                                         ("rack", False), ("L/240", False)])
+def test_a_rack_beam_limit_looser_than_the_rack_standard_holds_the_rating(limit, held):
+    # ANSI MH16.1 limits a pallet-rack beam to L/180 (from memory); a looser limit written
+    # on a rack job would post a figure the rack's own standard does not allow
+    from shopbeam.design.capacity import capacity
+
+    text = job_text(criteria=f'deflection = "{limit}"\nimpact = "25%"').replace(
+        'title = "shelf"', 'title = "pallet rack beam"\ntags = ["rack"]\n')
+    assert capacity(parse_job_text(text)).rated is not held

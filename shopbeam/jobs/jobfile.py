@@ -2242,17 +2242,21 @@ def _looser_than_named(criteria: Criteria, tags, supports, length, tagset, name)
 
 
 def _looser_than_rack(r: _Reader, criteria: Criteria, tags, supports, length) -> None:
-    """A deflection limit written on a storage-rack job that is looser than rack practice's
-    L/180 (the named limit `rack`), or an absolute one that amounts to that: warned, and the
-    value written is used."""
+    """A deflection limit written on a storage-rack job that is looser than the rack
+    standard's L/180 (the named limit `rack`), or an absolute one that amounts to that: NOT
+    RATED on it, as a lifting job looser than its profile is (the figure would rest on a
+    limit the rack's own standard does not allow)."""
     got = _looser_than_named(criteria, tags, supports, length, RACK_TAGS, "rack")
     if got:
         n, shown = got
         why = DEFLECTION_PRESETS["rack"][1]
-        r.warn(f"deflection = {shown} is looser than the L/{n:g} of storage-rack "
-               f"beams ({why.split(' (', 1)[1].rstrip(')')}): the checks and the rating use the "
-               f"value written; write \"L/{n:g}\" (or deflection = \"rack\") for rack practice",
-               "criteria.deflection")
+        r.hold(f"deflection = {shown} is looser than the L/{n:g} of storage-rack "
+               f"beams ({why.split(' (', 1)[1].rstrip(')')}): the checks use the value "
+               "written, and no rating is posted on it; write "
+               f"\"L/{n:g}\" (or deflection = \"rack\"), or a tighter limit",
+               "criteria.deflection",
+               f"deflection = {shown} is looser than the L/{n:g} of storage-rack beams: "
+               "write the rack limit, or a tighter one")
 
 
 FLOOR_TAGS = frozenset({"floor", "mezzanine", "platform", "deck", "joist", "loft", "walkway",
