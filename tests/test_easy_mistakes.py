@@ -1458,3 +1458,22 @@ def test_a_rack_beam_limit_looser_than_the_rack_standard_holds_the_rating(limit,
     text = job_text(criteria=f'deflection = "{limit}"\nimpact = "25%"').replace(
         'title = "shelf"', 'title = "pallet rack beam"\ntags = ["rack"]\n')
     assert capacity(parse_job_text(text)).rated is not held
+
+
+def test_a_slipped_count_of_levels_or_members_holds_the_rating():
+    # "40" for "4" levels, "20" for "2" members: the label's totals grow with the count
+    from shopbeam.design.capacity import capacity
+    from pathlib import Path
+
+    presets = Path(__file__).resolve().parents[1] / "presets"
+    rack = (presets / "pallet-rack-beam-pair.toml").read_text()
+    shelf = (presets / "continuous-shelf.toml").read_text()
+    assert "members = 2  " in rack and "members = 2  " in shelf
+    four = rack.replace("members = 2  ", "levels = 4\nmembers = 2  ")
+    assert capacity(parse_job_text(four)).rated and capacity(parse_job_text(shelf)).rated
+    forty = parse_job_text(rack.replace("members = 2  ", "levels = 40\nmembers = 2  "))
+    assert [p for p in forty.warnings if p.key == "beam.levels"]
+    assert not capacity(forty).rated
+    twenty = parse_job_text(shelf.replace("members = 2  ", "members = 20  "))
+    assert [p for p in twenty.warnings if p.key == "beam.members" and "side by side" in p.message]
+    assert not capacity(twenty).rated

@@ -2566,6 +2566,42 @@ def _plain_found(words: re.Pattern, title, notes, tags, raw_loads) -> list[str]:
     return _words_found(words, title, notes, tags, raw_loads, deny=False)
 
 
+# Past these counts a rack bay's levels, or a shelf's or rack's members sharing one load, are
+# a slip of the count (common practice, no source): the label's totals grow with them
+MAX_PLAUSIBLE_LEVELS = 12
+MAX_SHELF_MEMBERS = 4
+
+
+def _shelf_members(r: _Reader, tags, raw_loads, members, section, system: str) -> None:
+    """A shelf's or rack's members sharing its load: more than MAX_SHELF_MEMBERS, or more
+    than fit side by side in the loaded width (its width / members under the member's own
+    width), is a slip of the count ("20" for "2"), and the label's per-shelf figure grows
+    with it: NOT RATED."""
+    if not isinstance(members, int) or isinstance(members, bool) or members < 2:
+        return
+    tagset = {normal_tag(t) for t in tags}
+    own = getattr(section, "width", 0.0) or getattr(section, "depth", 0.0) or 0.0
+    widths = []
+    for ld in raw_loads if isinstance(raw_loads, list) else ():
+        if _is_table(ld) and isinstance(ld.get("width"), str):
+            try:
+                widths.append(units.parse(ld["width"], "length", "width"))
+            except InputError:
+                pass
+    crowded = [w for w in widths if own > 0 and w / members < own]
+    if (tagset & (SHELF_TAGS | RACK_TAGS) and members > MAX_SHELF_MEMBERS) or crowded:
+        why = (f"{members} members of {units.fmt(own, 'small_length', system)} cannot sit side "
+               f"by side under a {units.fmt(crowded[0], 'small_length', system)} wide load"
+               if crowded else f"a shelf or rack of more than {MAX_SHELF_MEMBERS} members "
+               "sharing one load evenly is far past shop practice (common practice, no "
+               "source)")
+        r.hold(f"members = {members}: {why}, and the label's figure for them all grows with "
+               "the count, so no rating is posted. Check the count (2 for 20?), or rate one "
+               "member with its own share of the load (members = 1)", "beam.members",
+               f"members = {members} is past what the shelf or its loaded width holds: check "
+               "the count")
+
+
 def _rack_members(r: _Reader, title, notes, tags, raw_loads, members, supports) -> None:
     """A pallet-rack level rests on a front and a back beam: `members` = 2. More beams than
     that sharing the level evenly is a slip of the count (20 for 2, or beams of several levels
@@ -4191,6 +4227,13 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             r.error("levels must be a whole number from 1 to 50 (the levels of beams in one "
                     "rack bay, for the rating plaque's per-bay total)", "beam.levels")
             levels = None
+        elif levels is not None and levels > MAX_PLAUSIBLE_LEVELS:
+            # "40" for "4": the per-bay total is ten times what a bay may hold
+            r.hold(f"levels = {levels}: a rack bay of more than {MAX_PLAUSIBLE_LEVELS} beam "
+                   "levels is far past shop racks (about 12 at most, common practice, no "
+                   "source), and the label's per-bay total grows with it, so no rating is "
+                   "posted. Check the count (4 for 40?)", "beam.levels",
+                   f"levels = {levels} is past any shop rack bay: check the count")
         welded = beam.get("welded", False)
         if not isinstance(welded, bool):
             r.error("welded must be true or false (welded near the point of largest moment)",
@@ -4380,6 +4423,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _step_beam(r, title, notes, tags, raw_loads, section)
     _rack_members(r, title, notes, tags, raw_loads,
                   beam.get("members", 1) if isinstance(beam, dict) else None, supports)
+    _shelf_members(r, tags, raw_loads,
+                   beam.get("members", 1) if isinstance(beam, dict) else None, section, system)
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)
