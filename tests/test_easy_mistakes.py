@@ -1477,3 +1477,13 @@ def test_a_slipped_count_of_levels_or_members_holds_the_rating():
     twenty = parse_job_text(shelf.replace("members = 2  ", "members = 20  "))
     assert [p for p in twenty.warnings if p.key == "beam.members" and "side by side" in p.message]
     assert not capacity(twenty).rated
+
+
+def test_a_shelf_only_a_few_depths_long_is_warned_of_its_length():
+    # "12 in" typed for "12 ft": an HSS4x4 shelf 3 depths long; shelves span many times
+    # their depth (common practice)
+    text = job_text(section="HSS4x4x1/4", material="A500-C").replace(
+        'title = "shelf"', 'title = "parts shelf"\ntags = ["shelf"]')
+    short = parse_job_text(text.replace('"6 ft"', '"12 in"').replace('at = "3 ft"', 'at = "6 in"'))
+    assert [p for p in short.warnings if p.key == "beam.length" and "x its depth" in p.message]
+    assert not [p for p in parse_job_text(text).warnings if "x its depth" in p.message]

@@ -1899,6 +1899,26 @@ def stubby_words(length: float, section, system: str = "us", typed=None) -> str:
             "short is a bearing or connection piece, to be checked as one")
 
 
+# A shelf, rack beam or floor member spans many times its depth (common practice, no
+# source: 15 to 30); one under this many depths is most often a length slip ("12 in" for
+# "12 ft"), warned
+SHORT_SPAN_DEPTHS = 6.0
+_SPANNING_TAGS = SHELF_TAGS | RACK_TAGS | {"floor", "joist", "mezzanine", "platform", "loft",
+                                           "deck", "walkway"}
+
+
+def _short_span(r: _Reader, length: float, section, tags, system: str, typed) -> None:
+    """A shelf, rack or floor member under SHORT_SPAN_DEPTHS x its depth: warned."""
+    d = getattr(section, "depth", 0.0) or 0.0
+    if d <= 0 or length >= SHORT_SPAN_DEPTHS * d \
+            or not _SPANNING_TAGS & {normal_tag(t) for t in tags}:
+        return
+    shown = f'"{typed}"' if isinstance(typed, str) else units.fmt(length, "length", system)
+    r.warn(f"the member is {shown} long, only {length / d:.2g} x its depth: shelves, rack "
+           "beams and floor members span many times their depth (common practice). Check the "
+           "length and its unit (\"12 in\" typed for \"12 ft\")", "beam.length")
+
+
 def _same_both_ways(r: _Reader, section, axis) -> None:
     """axis = "weak" on a section that bends alike about both axes (round, square) is read
     and changes nothing: say so, as for any key that is ignored."""
@@ -4202,6 +4222,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 if length is not None else ""
             if stubby:
                 r.warn(stubby, "beam.length")
+            elif length is not None:
+                _short_span(r, length, section, tags, system, beam.get("length"))
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section,
                                             tags, title, notes)
         material = _thick_6063_t5(r, material, section)
