@@ -239,10 +239,15 @@ async def test_the_problem_summary_keeps_to_three_rows_of_the_width_and_says_whe
         long1 = "  - supports[1].at: '16 ft' (16 ft) is beyond the end of the beam (12 ft): " \
                 "positions run from 0 at the left end"
         long2 = "  - moving[0].travel: the travel runs past the end of the beam (12 ft)"
-        for lines, pointer in (([head, long1, long2], "and 1 more: see 7 Results"),
+        for lines, pointer in (([head, long1, long2, long2], "and 2 more: see 7 Results"),
                                ([head, long1 + " and more words" * 8], "see 7 Results"),
                                ([head, "  - a short one"], None)):
             got = js._problems_summary(lines).splitlines()
             assert len(got) <= 3 and widest("\n".join(got)) <= 78
             assert got[0] == head
             assert (pointer in got[-1]) if pointer else got == lines
+        # three rows: each is shown, cut to fit ("and 1 more" had hidden the one problem
+        # under a warning)
+        got = js._problems_summary([head, long1, long2]).splitlines()
+        assert len(got) == 3 and widest("\n".join(got)) <= 78
+        assert got[1].startswith("  - supports[1].at") and got[2].startswith("  - moving[0]")

@@ -1710,3 +1710,44 @@ async def test_a_sizing_sweep_is_taken_off_when_the_job_changes(tmp_path):
         await settle(pilot)
         assert lst.option_count == 0
         assert "job changed" in str(view.query_one("#size-note").render())
+
+
+@sync
+async def test_a_long_value_is_shown_from_its_start_once_the_focus_leaves(tmp_path):
+    # left scrolled to its end, "2 ft, 4 ft, 6 ft, 8 ft, 10 ft, 12 ft" read as a list
+    # without its first brace
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f3")
+        await settle(pilot)
+        f = await focused(pilot, app, "span", "beam.braces")
+        await burst(pilot, CTRL_U + "2 ft, 4 ft, 6 ft, 8 ft, 10 ft, 12 ft, 14 ft")
+        assert f.input.scroll_offset.x > 0  # the end in view while typing
+        await burst(pilot, TAB)
+        await pilot.pause(0.2)
+        assert f.input.scroll_offset.x == 0
+        assert f.input.value == "2 ft, 4 ft, 6 ft, 8 ft, 10 ft, 12 ft, 14 ft"
+        await focused(pilot, app, "span", "beam.braces")
+        assert f.input.scroll_offset.x > 0  # back in it: the cursor's end in view again
+
+
+@sync
+async def test_the_field_typed_in_stays_in_sight_when_a_warning_line_comes_above_it(tmp_path):
+    # a lifting job (two banner lines) at 80x24: taking a load's minus sign off adds a
+    # "changed direction" warning above the form, which pushed the Value field out of sight
+    # while the keys went on into it
+    app = make_app(demo_copy(tmp_path, title='"Hoist beam over the saw bay"'), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        f = await focused(pilot, app, "loads", "load.value")
+        f.input.cursor_position = 0
+        await burst(pilot, DELETE)
+        await pilot.pause(0.6)
+        await settle(pilot)
+        assert app.job_screen.focused is f.input
+        view = app.job_screen.query_one("#loads")
+        assert f.input.region.height > 0
+        assert view.region.contains_region(f.input.region), (f.input.region, view.region)

@@ -336,11 +336,17 @@ class JobDoc:
                 except ParseError:
                     doc = None
                 before = [r.unwrap() for i, r in enumerate(rows) if i != index]
-                if doc is not None and name in doc and [r.unwrap() for r in doc[name]] == before \
-                        and _without(doc, name) == _without(self.doc, name):
+                # (the last row gone, the key goes with it: no "loads = []" left at the top)
+                if doc is not None and _without(doc, name) == _without(self.doc, name) and (
+                        [r.unwrap() for r in doc[name]] == before if name in doc
+                        else not before):
                     self.doc = doc
                     return
         del rows[index]
+        if not len(rows):
+            # an empty array of tables is written "name = []" at the top of the file, where
+            # a [[name]] table added by hand below would no longer parse
+            del self.doc[name]
 
 
 BOM = "\ufeff"

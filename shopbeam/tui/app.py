@@ -35,7 +35,7 @@ from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, 
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
                                 WHEEL_WORDS, load_warnings, problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
-                                  from_one_line, one_line, update_text)
+                                  from_one_line, one_line, shown_now, update_text)
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -214,6 +214,14 @@ class JobScreen(Screen):
             if text != getattr(self, "_summary_shown", None):  # unchanged: no redraw
                 self._summary_shown = text
                 update_text(summary, Text(text))
+        # a line the answer adds above the form (a load's changed direction) must not push
+        # the field being typed in out of sight: typing into a hidden field
+        self.call_after_refresh(self._focus_in_view)
+
+    def _focus_in_view(self) -> None:
+        f = self.focused
+        if isinstance(f, (FieldInput, Choice)) and shown_now(f):
+            f.scroll_visible(animate=False, immediate=True)
 
     @staticmethod
     def _tab_stops(view) -> tuple:
@@ -270,6 +278,8 @@ class JobScreen(Screen):
             if len(rest) <= room:
                 return "\n".join(head + rest)
             return "\n".join(head + rest[:room - 1] + ["  ... the whole message: see 7 Results"])
+        if len(lines) == 3:  # each row cut to fit: "and 1 more" would hide the one problem
+            return "\n".join(cut(ln) for ln in lines)
         more = len(lines) - 2
         return "\n".join([cut(ln) for ln in lines[:2]]
                          + [f"  ... and {more} more: see 7 Results"])

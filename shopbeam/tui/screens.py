@@ -51,6 +51,10 @@ KEYS = [
         ("type", "the value with its unit: 12 ft, 10' 6\", 1-1/2 in, -300 lbf, -25 lbf/ft"),
         ("enter", "next field"),
         ("right arrow", "accept the grey completion (section designations)"),
+        ("ctrl+u / ctrl+k", "delete to the start / the end of the field"),
+        ("copy, cut, paste", "with the terminal's own keys (often ctrl+shift+c / v) or the "
+                             "mouse: here ctrl+x removes the picked support or load (ctrl+z "
+                             "puts it back) and ctrl+c quits; typing itself is not undone"),
     ]),
     ("On a choice  [like] this", [
         ("left / right", "change it (space too)"),

@@ -224,6 +224,12 @@ class FieldInput(KeepFocusOnStaleHide, Input):
         if self.select_all and not event.from_app_focus:  # a click, or focus set in code
             self.selection = Selection(0, len(self.value))
 
+    def _on_blur(self, event) -> None:
+        # a long value left scrolled to its end read as a whole one ("4 ft, 6 ft, 8 ft" for
+        # braces at 2 ft, 4 ft, ...): shown from its start once the focus leaves (the cursor
+        # stays; the focus coming back scrolls to it again)
+        self.scroll_to(0, 0, animate=False, force=True, immediate=True)
+
     def watch_value(self, value: str) -> None:
         """Typing is noted at once (not when its message arrives), so a save or a view key
         typed right behind it takes it along (`JobScreen.flush_typing`)."""
