@@ -1547,3 +1547,33 @@ def test_a_tube_corner_radius_over_three_walls_is_held():
 def test_shop_words_that_only_look_like_lifting_are_not_read_as_a_lifting_device(title):
     job = parse_job_text(cantilever(title=title, tags='["shelf"]'))
     assert not job.lifting_hint
+
+
+def test_a_bare_length_on_an_si_job_is_told_in_mm_or_m_and_gives_no_cascade():
+    from shopbeam.errors import InputErrors
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = ('schema = 1\ntitle = "rail"\nunits = "si"\n[beam]\nlength = "2400"\n'
+            'section = "HSS4x4x1/4"\nmaterial = "A500-C"\n[[supports]]\nat = "0 mm"\n'
+            'type = "pin"\n[[supports]]\nat = "2400 mm"\ntype = "roller"\n[[loads]]\n'
+            'type = "uniform"\nvalue = "-1 kN/m"\n')
+    with pytest.raises(InputErrors) as got:
+        parse_job_text(text)
+    problems = got.value.problems
+    assert [p.key for p in problems] == ["beam.length"]  # no "missing 'end'" on the load
+    assert '"2400 mm" or "2.4 m"' in problems[0].message
+
+
+@pytest.mark.parametrize("key, value, read", [
+    ("basis", '"first yield"', "first-yield"), ("basis", '"First_Yield"', "first-yield"),
+    ("duration", '"Permanent"', "permanent"), ("duration", '"ten years"', "ten-years")])
+def test_a_closed_set_value_is_read_whatever_its_case_and_spacing(key, value, read):
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = ('schema = 1\ntitle = "rail"\n[beam]\nlength = "8 ft"\nsection = "2x8"\n'
+            'material = "DF-L-2"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "8 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n'
+            f'[criteria]\n{key} = {value}\n')
+    job = parse_job_text(text)
+    got = job.criteria.basis if key == "basis" else job.wood.duration
+    assert str(got) == read

@@ -284,6 +284,18 @@ def _ordinal(i: int) -> str:
     return f"{n}{suffix}"
 
 
+_BARE_FT_IN = re.compile(r'\(e\.g\. "([^"]+) ft" or "\1 in"\)')
+
+
+def _si_example(m) -> str:
+    """An SI job's bare length read both ways: "2400 mm" or "2.4 m"."""
+    try:
+        metres = f'"{float(m.group(1)) / 1000:g} m"'
+    except ValueError:
+        metres = f'"{m.group(1)} m"'
+    return f'(e.g. "{m.group(1)} mm" or {metres})'
+
+
 class _Reader:
     """Collects every problem while reading one job."""
 
@@ -334,6 +346,9 @@ class _Reader:
         try:
             value = units.parse(table[name], kind, key, **kw)
         except InputError as e:
+            if self.system == "si" and kind == "length" and type(e) is InputError \
+                    and _BARE_FT_IN.search(e.problem.message):  # an SI job's lengths: mm, m
+                e = InputError(_BARE_FT_IN.sub(_si_example, e.problem.message), e.problem.key)
             self.take(e, key)
             return None
         self.ton(table[name], key)
@@ -380,7 +395,9 @@ class _Reader:
             return default
         v = table[name]
         try:
-            return allowed(str(v).strip().lower()) if isinstance(v, str) else allowed(None)
+            # ("first yield", "First_Yield": the value's words as the set writes them)
+            return allowed(re.sub(r"[\s_]+", "-", str(v).strip().lower())) \
+                if isinstance(v, str) else allowed(None)
         except ValueError:
             self.error(f"{name} {v!r} is not one of the allowed values: "
                        + ", ".join(f'"{a.value}"' for a in allowed), key)
@@ -1435,7 +1452,10 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
             return None
         return Load(kind, at=at, value=v, **common)
     start = _position(r, ld, "start", key, length, default=0.0)
-    end = _position(r, ld, "end", key, length, default=length if length is not None else None)
+    # no end given and no length read: the length's own message says what is wrong (not a
+    # "missing 'end'" on a load that runs the whole member)
+    end = None if length is None and "end" not in ld else \
+        _position(r, ld, "end", key, length, default=length)
     if start is None or end is None:
         return None
     if not end > start:
@@ -3976,6 +3996,9 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="
                 "less sharing the load, NDS 4.3.9)", "beam.repetitive")
         rep = False
     dur = crit.get("duration", "ten-years")
+    if isinstance(dur, str):  # ("Permanent", "ten years": the value as the set writes it)
+        dur = re.sub(r"[\s_]+", "-", dur.strip().lower()) if re.sub(
+            r"[\s_]+", "-", dur.strip().lower()) in wood.DURATIONS else dur
     if not isinstance(dur, str) or dur not in wood.DURATIONS:
         r.error(f"duration {dur!r} must be one of {', '.join(wood.DURATIONS)} (the load "
                 "duration of NDS Table 2.3.2)", "criteria.duration")
