@@ -24,6 +24,7 @@ from dataclasses import dataclass, replace
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import (Envelopes, Evaluation, both_ways, envelope_ratio,
+                                     moving_reactions_off,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        hogging_limits, hogging_remedy, hogging_source,
@@ -496,10 +497,12 @@ def _with_live_off(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     if e is None or not e.reactions or not math.isfinite(k) or k <= 0:
         return res
     if ss.parts.moving:
-        off = evaluate(job, 0.0, section, ss, st).reactions
+        off = [{"max_up": hi, "max_down": lo} for hi, lo in moving_reactions_off(job, ss)]
+        words = (f"live loads off; {job.moving[0].label or 'the wheel set'}'s dead weight at "
+                 "its worst place")
     else:
         off = [{"max_up": r.force, "max_down": r.force} for r in ss.fixed.reactions]
-    words = "live loads off"
+        words = "live loads off"
     out = []
     for r, r0 in zip(e.reactions, off):
         r = dict(r)

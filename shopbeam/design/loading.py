@@ -1011,7 +1011,25 @@ def both_ways(job, ss: StateSet) -> list[tuple]:
         cache["job"] = t
         cache["ss"] = None if t is None else replace(ss, parts=replace(
             ss.parts, moving=_moving_parts(t, ss.parts.hoist_impact)))
+        if t is not None:  # the bare beam's influence data is the same beam's: shared
+            cache["ss"].__dict__["_influence"] = ss.__dict__.setdefault("_influence", {})
     return [(job, ss)] + ([(cache["job"], cache["ss"])] if cache["job"] is not None else [])
+
+
+def moving_reactions_off(job, ss: StateSet) -> list[tuple[float, float]]:
+    """Per reaction (solution order): (largest, smallest) with the live loads off (k = 0):
+    the fixed loads and the wheel set's dead weight anywhere on its travel, either way round
+    (exact, from the reactions' cubics in the wheel position)."""
+    out: list[tuple[float, float]] = []
+    for _jb, s2 in both_ways(job, ss):
+        mv = s2.parts.moving[0]
+        p_lo, p_hi = mv.p_range
+        got = reaction_extremes(*reaction_polys(
+            beam_influence(s2), mv.offsets, p_lo, p_hi, [r.force for r in s2.fixed.reactions],
+            np.asarray(mv.dead, float)))
+        out = [(hi, lo) for hi, _ph, lo, _pl in got] if not out else \
+            [(max(a[0], hi), min(a[1], lo)) for a, (hi, _ph, lo, _pl) in zip(out, got)]
+    return out
 
 
 def _worse(a: Evaluation, b: Evaluation) -> Evaluation:
