@@ -361,7 +361,8 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
         # a rack with no impact...: named in full in the Rating view)
         names = "; ".join(x for x in (
             f"not checked: {'; '.join(result.blocking)}" if result.blocking else "",
-            f"{len(other)} other reason(s)" if other else "") if x)
+            (f"{len(other)} other reason{'s' if len(other) > 1 else ''} (F11 Rating names "
+             f"{'them' if len(other) > 1 else 'it'})") if other else "") if x)
         gaps = gaps + list(other)
         no = (" - NOT RATED" if gaps else "")
         short = ([f"PASS, ratio {g.ratio:.2f} - BUT {len(up)} load(s) point UP: check the "
