@@ -700,13 +700,14 @@ NOT_JUDGED = "patterned"
 
 
 def moving_top_worst(job: Job, st, ss, k: float, limits):
-    """`_moving_top_worst` of the wheel set as entered and turned round (`loading.both_ways`),
-    the worse of the two for each length, with the job (as entered or turned) it holds for:
-    (demand, top strength, Cb x 1/1.4, first-wheel position, job)."""
+    """`_moving_top_worst` of the wheel set in each of its variants (`loading.
+    wheel_variants`: as entered, turned round, empty), the worst for each length, with the
+    job (the variant) it holds for: (demand, top strength, Cb x 1/1.4, first-wheel position,
+    job)."""
     if ss.parts.patterned:
         return NOT_JUDGED
     out = {}
-    for jb, s2 in loading.both_ways(job, ss):
+    for jb, s2 in loading.wheel_variants(job, ss):
         for key, got in _moving_top_worst(jb, st, s2, k, limits).items():
             best = out.get(key)
             if best is None or got[0] / got[1] > best[0] / best[1]:
@@ -982,16 +983,17 @@ def hogging_source(job: Job, st) -> str:
 def moment_ranges(job: Job, st, ss, k: float, lengths) -> tuple[dict, float]:
     """({(start, end): (least moment, where, largest moment, where)} over each of `lengths`,
     the largest |moment| anywhere), over every state at the factor k: each pattern of
-    patterned spans, and for [[moving]] every position of the wheel set over its travel,
-    either way round (exact, from its influence lines), not one governing state."""
+    patterned spans, and for [[moving]] every position of the wheel set over its travel in
+    each of its variants (`loading.wheel_variants`: turned round, empty; exact, from its
+    influence lines), not one governing state."""
     L = job.length
     out: dict = {}
     if ss.parts.moving:
         stops = sorted({0.0, L} | {x for a, b in lengths for x in (a, b)})
         regions = tuple((a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * L)
         big = 0.0
-        for jb, s2, pattern in ((jb, s2, p) for jb, s2 in loading.both_ways(job, ss)
-                                for p in s2.patterns):  # the wheel set either way round
+        for jb, s2, pattern in ((jb, s2, p) for jb, s2 in loading.wheel_variants(job, ss)
+                                for p in s2.patterns):  # every variant of the wheel set
             ext = loading.moving_envelope(jb, s2, s2.static_loads(k, pattern), k, st,
                                           pattern=tuple(pattern), more=regions).extremes
             for r in regions:

@@ -23,8 +23,8 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import (Envelopes, Evaluation, both_ways, envelope_ratio,
-                                     moving_reactions_off,
+from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
+                                     moving_reactions_off, wheel_variants,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        hogging_limits, hogging_remedy, hogging_source,
@@ -378,9 +378,18 @@ def _live_on_spans_unpatterned(job) -> list[str]:
                     on.add(i)
             elif min(b, ld.end) - max(a, ld.start) > tol:
                 on.add(i)
-    if len(on) < 2:
+    rolls = set()
+    if on and job.moving and any(job.moving[0].live):
+        # a wheel set comes and goes by itself (its every position is checked), but an
+        # unpatterned static live load is taken as on with it: the stock that holds down an
+        # overhang the cart runs onto is counted on (its spans are the travel's)
+        t0, t1 = job.moving[0].travel
+        rolls = {i for i, (a, b, _) in enumerate(segs) if min(b, t1) - max(a, t0) > tol}
+    if len(on | rolls) < 2:
         return []
-    return [f"live loads lie on {len(on)} spans and overhangs, all taken as on at once: "
+    return [f"live loads lie on {len(on | rolls)} spans and overhangs"
+            + (" (the [[moving]] wheels' travel among them)" if rolls - on else "")
+            + ", the static ones all taken as on at once: "
             "loading only some of them can be worse (a span beside an empty one sags more; "
             "a load on an overhang lifts the span behind it), and a posted load is read as "
             "good for any arrangement. Write patterned = true on the live loads that come and "
@@ -736,8 +745,10 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
 
 def _travel_words(job, ss) -> str:
     """" (the worst position of <set> over its travel[, either way round])"."""
+    labels = [jb.moving[0].label for jb, _ in wheel_variants(job, ss)]
     return (f" (the worst position of {job.moving[0].label or 'the wheel set'} over its travel"
-            + (", either way round" if len(both_ways(job, ss)) > 1 else "") + ")")
+            + (", either way round" if any(x.endswith("turned round") for x in labels) else "")
+            + (", loaded or empty" if any(x.endswith(" empty") for x in labels) else "") + ")")
 
 
 def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:

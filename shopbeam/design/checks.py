@@ -42,6 +42,7 @@ from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noq
 from shopbeam.design.lifting import (flange_unchecked, lifting_notes, lifting_unchecked,
                                      profile_of)
 from shopbeam.design.results import Check, Unchecked
+from shopbeam.engine.model import Load
 from shopbeam.engine.solver import Solution, segments, solve
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.members.catalog import lumber_nominal
@@ -1319,7 +1320,11 @@ def dead_load_checks(job, sol: Solution, st: Strengths) -> list[Check]:
     fl, sh = st.flexure, st.shear
     wf = fl.wood
     cd = wf.factors["CD"]
-    dead = [ld for ld in sol.beam.loads if ld.case == "dead"]
+    # (a wheel set's dead weight too: each wheel is one load of the state, its dead part
+    # noted by `loading.moving_states`)
+    dead = [ld for ld in sol.beam.loads if ld.case == "dead"] + [
+        Load("point", at=x, value=d, case="dead", label="wheel (dead weight)")
+        for x, d in sol.__dict__.get("dead_wheels", ())]
     if cd <= 0.9 or not dead:
         return []
     r = 0.9 / cd

@@ -16,11 +16,15 @@ def _states(job, sol):
     moving-load job, every pattern of a patterned one, else the solution given."""
     try:
         parts = loading.load_parts(job)
-        if parts.moving:  # every wheel position (and pattern), the set either way round
-            back = loading.turned_round(job)
-            return (loading.moving_connection_states(job)
-                    + (loading.moving_connection_states(back) if back is not None else [])), \
-                "over every position of the wheels" + (", either way round" if back else "")
+        if parts.moving:  # every wheel position (and pattern), every variant of the set
+            ss = loading.state_set(job)
+            ways = loading.wheel_variants(job, ss)
+            labels = [jb.moving[0].label for jb, _ in ways]
+            return [st for jb, s2 in ways for st in loading.moving_connection_states(jb, ss=s2)], \
+                "over every position of the wheels" + (
+                    ", either way round" if any(x.endswith("turned round") for x in labels)
+                    else "") + (", loaded or empty" if any(x.endswith(" empty") for x in labels)
+                                else "")
         if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
             return loading.connection_states(job), "over every load pattern"
         if parts.impact and not parts.moving:

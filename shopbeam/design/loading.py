@@ -989,31 +989,43 @@ def turned_round(job):
 
 def evaluate(job, k: float = 1.0, section=None, ss: StateSet | None = None,
              strengths=None) -> Evaluation:
-    """Every check at live-load factor k over every pattern and moving-load position; a
-    wheel set of unequal axles either way round (a cart turned, a trolley hung the other way:
-    each check and each support's reactions the worse of the two)."""
+    """Every check at live-load factor k over every pattern and moving-load position, with a
+    wheel set in each of its variants (`wheel_variants`: turned round, empty): each check and
+    each support's reactions the worst of them."""
     ss = ss or state_set(job, section)
     ev = _evaluate(job, k, section, ss, strengths)
-    ways = both_ways(job, ss)
-    if len(ways) == 1:
-        return ev
-    (turned, tss), = ways[1:]
-    return _worse(ev, _evaluate(turned, k, section, tss, strengths))
+    for jb, s2 in wheel_variants(job, ss)[1:]:
+        ev = _worse(ev, _evaluate(jb, k, section, s2, strengths))
+    return ev
 
 
-def both_ways(job, ss: StateSet) -> list[tuple]:
-    """[(job, its state set)], and for a wheel set of unequal axles the same turned round
-    (`turned_round`; its state set shares every unit solution, only the wheels differ):
-    every rule that reads wheel positions judges both, as `evaluate` does."""
-    cache = ss.__dict__.setdefault("_turned", {})
-    if "job" not in cache:
-        t = turned_round(job)
-        cache["job"] = t
-        cache["ss"] = None if t is None else replace(ss, parts=replace(
-            ss.parts, moving=_moving_parts(t, ss.parts.hoist_impact)))
-        if t is not None:  # the bare beam's influence data is the same beam's: shared
-            cache["ss"].__dict__["_influence"] = ss.__dict__.setdefault("_influence", {})
-    return [(job, ss)] + ([(cache["job"], cache["ss"])] if cache["job"] is not None else [])
+def wheel_variants(job, ss: StateSet) -> list[tuple]:
+    """[(job, its state set)] as entered, then the wheel set's other variants, each with a
+    state set that shares every unit solution and the bare beam's influence data (only the
+    wheels differ): turned round, for unequal axles (`turned_round`: a cart turned, a trolley
+    hung the other way); and empty, its live part off and its dead weight on, where other
+    live loads come with it (a cart's payload comes and goes like a patterned load: the empty
+    cart on the span no longer holds down an overhang's stock), turned too. Every rule that
+    reads wheel positions judges them all, as `evaluate` does."""
+    got = ss.__dict__.get("_variants")
+    if got is None:
+        got = [(job, ss)]
+        if job.moving:
+            ws = job.moving[0]
+            sets = [job]
+            if (ss.parts.live or ss.parts.patterned) and any(ws.live):
+                empty = replace(ws, live=tuple(0.0 for _ in ws.live),
+                                label=f"{ws.label or 'wheel set'} empty")
+                sets.append(replace(job, moving=(empty,) + tuple(job.moving[1:])))
+            for jb in sets:
+                t = turned_round(jb)
+                for v in ([jb] if jb is not job else []) + ([t] if t is not None else []):
+                    s2 = replace(ss, parts=replace(
+                        ss.parts, moving=_moving_parts(v, ss.parts.hoist_impact)))
+                    s2.__dict__["_influence"] = ss.__dict__.setdefault("_influence", {})
+                    got.append((v, s2))
+        ss.__dict__["_variants"] = got
+    return got
 
 
 def moving_reactions_off(job, ss: StateSet) -> list[tuple[float, float]]:
@@ -1021,7 +1033,7 @@ def moving_reactions_off(job, ss: StateSet) -> list[tuple[float, float]]:
     the fixed loads and the wheel set's dead weight anywhere on its travel, either way round
     (exact, from the reactions' cubics in the wheel position)."""
     out: list[tuple[float, float]] = []
-    for _jb, s2 in both_ways(job, ss):
+    for _jb, s2 in wheel_variants(job, ss):
         mv = s2.parts.moving[0]
         p_lo, p_hi = mv.p_range
         got = reaction_extremes(*reaction_polys(
@@ -1601,6 +1613,10 @@ def moving_states(job, ss: StateSet, static_loads, k: float, st, cache=None, pos
     # one batched march and one stack of linear systems for every position (each the same
     # numbers as its own solve)
     sols = list(zip(positions, solve_each(beams)))
+    # each wheel is one point load (its dead and live parts together); its dead weight is
+    # noted on the state for the checks of the dead loads alone (wood's CD 0.9, NDS 2.3.2)
+    for p, sol in sols:
+        sol.__dict__["dead_wheels"] = tuple((p + s, d) for s, d in zip(mv.offsets, mv.dead) if d)
     if (job.lifting or getattr(job.criteria, "lifting", "")) and not st.flexure.stress_s:
         from shopbeam.design import lifting  # the lateral check's flange-as-beam, batched too
 
