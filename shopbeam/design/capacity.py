@@ -352,8 +352,9 @@ def _live_both_ways(job) -> list[str]:
     return [f"live loads push both ways ({', '.join(down)} down; {', '.join(up)} up): the "
             "factor scales them together, so at the rated figure one relieves the other, and "
             "a load that relieves is never counted on at its full scaled value. Rate each "
-            "direction in its own job, or enter the relieving load as case = \"dead\" at a "
-            "value it is sure to have"]
+            "direction in its own job, or enter a relieving load that pushes down as case = "
+            "\"dead\" at a value it is sure to have (one that pushes up is never counted on "
+            "as dead)"]
 
 
 def _live_on_spans_unpatterned(job) -> list[str]:

@@ -756,17 +756,27 @@ def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], valu
         if words.search(key) and (table == here or k == "criteria"):
             return ("the [criteria] table (a limit or factor)" if k == "criteria" else
                     f"{k} of {_TABLES.get(table, '[' + table + ']')}")
-    if here == "beam" and not _WORDS_ONLY.match(key) and not homes and not (
-            near and difflib.SequenceMatcher(None, key.lower(), near[0]).ratio() >= 0.8):
-        # (a slip of a known key, or a key of another table, says what it is: the known
-        # key's own rule decides, see _LOWERING)
+    slip = near[0] if near and difflib.SequenceMatcher(
+        None, key.lower(), near[0]).ratio() >= 0.8 else ""
+    if slip in _BOOL_KEYS and not isinstance(value, bool):
+        slip = ""  # welder = "Ana" is a record, not welded = true
+    if here == "beam" and slip and slip not in _RAISING_BEAM_KEYS:
+        # a slip of a known key that can lower the figure ("axs" for axis, "bearng" for
+        # bearing), however short
+        return f"{slip} of [beam]"
+    if here == "beam" and not _WORDS_ONLY.match(key) and not homes and not slip:
         # every key of [beam] says what the member is (its grade, size, condition): one that
-        # is not read may be one that lowers its strength
+        # is not read may be one that lowers its strength (a slip of a key that only raises
+        # the figure when given, or a key of another table, says what it is: warned)
         return next((what for words, what in _BEAM_MEANT if words.search(key)),
                     "a property of the member (its grade, size or condition)")
     return ""
 
 
+# [beam] keys that only raise the figure when given: a slip of one (ignored, so left out)
+# errs on the safe side, and is warned
+_RAISING_BEAM_KEYS = frozenset({"self_weight", "braced", "braces", "repetitive", "restrained",
+                                "members", "levels"})
 # Keys that are only words (a note, a name, a record): warned, not held
 _WORDS_ONLY = re.compile(r"^(?:notes?|comments?|remarks?|description|desc|by|checked_?by|"
                          r"references?|refs?|sources?|standard|code|labels?|names?|ids?|"
@@ -775,7 +785,11 @@ _WORDS_ONLY = re.compile(r"^(?:notes?|comments?|remarks?|description|desc|by|che
                          r"vendor|supplier|location|titles?|heat_?(?:no|num|number)|"
                          r"photos?|images?|pictures?|templates?|welders?|wps|"
                          r"weld_?(?:procedure|spec|wps)|dates?|revisions?|rev|inspect\w*|"
-                         r"(?:approved|drawn|made|welded)_?by|owner|project|bay|room)$", re.I)
+                         r"(?:approved|drawn|made|welded)_?by|owner|project|bay|room|"
+                         r"serial\w*|po_?\w*|mill_?certs?|certs?|"
+                         r"\w+_(?:notes?|no|num|number|date|by|certs?|ids?|names?|refs?)|"
+                         r"date_\w+|prices?|costs?|installed\w*|\w*inspected\w*|"
+                         r"purchased\w*|bought\w*|ordered\w*|(?:last|next)_\w+)$", re.I)
 # What an unknown [beam] key reads like, and where it is written in a job
 _BEAM_MEANT = (
     (re.compile(r"^(?:c[mtifdlrv]|cfu|kcr|cm_?\w*|ct_?\w*)$", re.I),
@@ -794,7 +808,9 @@ _BEAM_MEANT = (
      "dimensions)"),
     (re.compile(r"(?:outdoor|outside|exterior|service|condition|green|expos|weather|climate|"
                 r"environment|moist|wet)", re.I),
-     "wet_service of [beam] (wood in wet service takes CM, NDS 2018 Supplement Table 4A)"),
+     "wet_service of [beam] for wood (wet service takes CM, NDS 2018 Supplement Table 4A), or "
+     "on metal a condition shopbeam does not model (corrosion or damage: rate it with the "
+     "sizes measured)"),
 )
 
 
@@ -1811,8 +1827,11 @@ def _feet_or_metres(text) -> bool:
 # A described size with no unit is read in inches. Millimetres typed so ("round-bar 10",
 # "rect-tube 10 x 10 x 1") read as a section far heavier than a shop puts on that span: a
 # size of 8 or more on a span under 12 times it, or a tube wall of 1 or more (common practice,
-# no source: shop tube walls run to 5/8 in)
+# no source: shop tube walls run to 5/8 in); a fraction or a size under 1 says inches
 BARE_BIG, BARE_SPAN, BARE_WALL = 8.0, 12.0, 1.0
+# ...and a solid bar of 4 or more on a span under 24 times it (shop round and flat bar beams
+# are an inch or two; "round-bar 6" on a 24 in towel bar is a 6 mm rod)
+BARE_BAR, BARE_BAR_SPAN = 4.0, 24.0
 
 
 def _bare_sizes_in_mm(r: _Reader, spec, length, system: str) -> None:
@@ -1823,10 +1842,15 @@ def _bare_sizes_in_mm(r: _Reader, spec, length, system: str) -> None:
     if not got or not length:
         return
     shape, nums = got
+    if "/" in spec or min(nums) < 1:
+        return  # a fraction or a size under 1: inches (millimetres are written whole)
     big = max(nums)
     tube = "tube" in shape.lower() or "pipe" in shape.lower()
     why = ""
-    if big >= BARE_BIG and length / (big * units.IN) < BARE_SPAN:
+    if not tube and big >= BARE_BAR and length / (big * units.IN) < BARE_BAR_SPAN:
+        why = (f"a {big:g} in solid bar on a {units.fmt(length, 'length', system)} span (only "
+               f"{length / (big * units.IN):.2g} x its size)")
+    elif big >= BARE_BIG and length / (big * units.IN) < BARE_SPAN:
         why = (f"a {big:g} in size on a {units.fmt(length, 'length', system)} span (only "
                f"{length / (big * units.IN):.2g} x its size)")
     elif tube and len(nums) >= 2 and nums[-1] >= BARE_WALL:
@@ -1923,20 +1947,35 @@ def stubby_words(length: float, section, system: str = "us", typed=None) -> str:
 # source: 15 to 30); one under this many depths is most often a length slip ("12 in" for
 # "12 ft"), warned
 SHORT_SPAN_DEPTHS = 6.0
-_SPANNING_TAGS = SHELF_TAGS | RACK_TAGS | {"floor", "joist", "mezzanine", "platform", "loft",
-                                           "deck", "walkway"}
+# tags a shelf is given besides the shelf tags themselves
+_SHELF_WORDS = frozenset({"shelves", "shelving-unit", "storage", "bench", "workbench",
+                          "stockroom"})
+_SPANNING_TAGS = SHELF_TAGS | RACK_TAGS | _SHELF_WORDS | {"floor", "joist", "mezzanine",
+                                                          "platform", "loft", "deck",
+                                                          "walkway"}
 
 
-def _short_span(r: _Reader, length: float, section, tags, system: str, typed) -> None:
+def _spans_between(supports) -> bool:
+    """Whether the member spans between two places that hold it (no free end)."""
+    held = sorted(round(sp.at, 9) for sp in supports if getattr(sp, "takes_force", False))
+    return len(held) >= 2 and held[-1] - held[0] > 0
+
+
+def _short_span(r: _Reader, length: float, section, tags, system: str, typed,
+                supports=()) -> None:
     """A shelf, rack or floor member under SHORT_SPAN_DEPTHS x its depth: warned."""
     d = getattr(section, "depth", 0.0) or 0.0
-    if d <= 0 or length >= SHORT_SPAN_DEPTHS * d \
-            or not _SPANNING_TAGS & {normal_tag(t) for t in tags}:
-        return
+    tagset = {normal_tag(t) for t in tags}
+    if d <= 0 or length >= SHORT_SPAN_DEPTHS * d or not _SPANNING_TAGS & tagset \
+            or tagset & {"bracket", "header", "arm", "cantilever"} \
+            or not _spans_between(supports):
+        return  # (an arm or bracket is a few depths long: its own free end)
     shown = f'"{typed}"' if isinstance(typed, str) else units.fmt(length, "length", system)
+    slip = "a dropped zero, \"300 mm\" typed for \"3000 mm\"" if system == "si" \
+        else "\"12 in\" typed for \"12 ft\""
     r.warn(f"the member is {shown} long, only {length / d:.2g} x its depth: shelves, rack "
            "beams and floor members span many times their depth (common practice). Check the "
-           "length and its unit (\"12 in\" typed for \"12 ft\")", "beam.length")
+           f"length and its unit ({slip})", "beam.length")
 
 
 def _same_both_ways(r: _Reader, section, axis) -> None:
@@ -2184,11 +2223,13 @@ _LIFTING_WORDS = re.compile(
     r"lift rails?|overhead lifts?|(?<!easy )(?<!easier )(?:to|for) lift(?! trucks?\b)"
     r"(?! (?:\w+ )?(?:off|out|down)\b)|hoysts?|monorials?|tralleys?|"
     r"equali[sz]er beams?|sling bars?|lift(?:ing)? frames?|lift(?:ing)? bars?|yokes?|"
-    r"load bars?|lift(?:ing)? arms?|lift(?:ing)? points?|(?:engine|motor|transmission|"
-    r"gearbox) (?:hoist|pick)\w*|pull(?:ing)? beams?|pick[- ]?up arms?|"
+    r"load bars?|lift(?:ing)?[- ]arms?|lift(?:ing)?[- ]points?|(?:engine|motor|transmission|"
+    r"gearbox) (?:hoist|pick)\w*|pull(?:ing)?[- ]beams?|pick[- ]?up arms?|"
     r"(?:to|for) (?:raise|pull) (?:the )?(?:motors?|engines?|transmissions?|gearbox(?:es)?|"
     r"pumps?|dies?|molds?|moulds?)|die[- ]?change|mou?ld[- ]?change|swing[- ]?arms?|"
-    r"harrington|lodestar|coffing|budgit|demag|(?:yale|liftmaster|chester) (?:hoists?|\d)|hang (?:the )?(?:motor|engine|transmission|pump|die)s?)\b",
+    r"harrington (?:hoists?|\d\w*)|\d+(?:/\d+)?[- ]?tons? harrington|lodestar|valustar|coffing|budgit|demag|kito|"
+    r"(?:yale|chester) (?:hoists?|electric|\d+\w*)(?! (?:forklifts?|lift ?trucks?|trucks?|"
+    r"pallet))|hang (?:the )?(?:motor|engine|transmission|pump|die)s?)\b",
     re.IGNORECASE)
 _LIFTING_TAGS = frozenset({"lift", "lifts", "lifter"})  # a tag that means lifting, misspelt
 # a lifting word run together with the member it names, as one word of a tag or title
@@ -2609,7 +2650,7 @@ def _plain_found(words: re.Pattern, title, notes, tags, raw_loads) -> list[str]:
 # Past these counts a rack bay's levels, or a shelf's or rack's members sharing one load, are
 # a slip of the count (common practice, no source): the label's totals grow with them
 MAX_PLAUSIBLE_LEVELS = 12
-MAX_SHELF_MEMBERS = 4
+MAX_SHELF_MEMBERS = 8
 
 
 def _shelf_members(r: _Reader, tags, raw_loads, members, section, system: str) -> None:
@@ -2620,6 +2661,7 @@ def _shelf_members(r: _Reader, tags, raw_loads, members, section, system: str) -
     if not isinstance(members, int) or isinstance(members, bool) or members < 2:
         return
     tagset = {normal_tag(t) for t in tags}
+    shelf = bool(tagset & (SHELF_TAGS | RACK_TAGS | _SHELF_WORDS))
     own = getattr(section, "width", 0.0) or getattr(section, "depth", 0.0) or 0.0
     widths = []
     for ld in raw_loads if isinstance(raw_loads, list) else ():
@@ -2629,7 +2671,7 @@ def _shelf_members(r: _Reader, tags, raw_loads, members, section, system: str) -
             except InputError:
                 pass
     crowded = [w for w in widths if own > 0 and w / members < own]
-    if (tagset & (SHELF_TAGS | RACK_TAGS) and members > MAX_SHELF_MEMBERS) or crowded:
+    if (shelf and members > MAX_SHELF_MEMBERS) or crowded:
         why = (f"{members} members of {units.fmt(own, 'small_length', system)} cannot sit side "
                f"by side under a {units.fmt(crowded[0], 'small_length', system)} wide load"
                if crowded else f"a shelf or rack of more than {MAX_SHELF_MEMBERS} members "
@@ -2832,6 +2874,9 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
 RUNOUT_MIN = 0.305  # 1 ft
 
 
+HOIST_AT = 0.305  # m: a dead point load within a foot of the hook load is the hoist's weight
+
+
 def _hoist_weight(r: _Reader, criteria: Criteria, tags, loads, moving, supports,
                   length) -> None:
     """A monorail or jib (a hoist hangs on the member) with no hoist or trolley weight
@@ -2843,21 +2888,25 @@ def _hoist_weight(r: _Reader, criteria: Criteria, tags, loads, moving, supports,
     name = criteria.lifting or guessed_profile(supports, length)
     if name not in ("powered-monorail", "hand-geared-monorail", "jib-boom", "hand-geared-jib"):
         return
+    hooks = [ld.at for ld in loads if ld.case == "live" and ld.kind == "point" and ld.value]
     if moving:
         if any(d for ws in moving for d in ws.dead):
             return
-    elif any(ld.case == "dead" and ld.kind == "point" and ld.value for ld in loads):
-        return
+    elif any(ld.case == "dead" and ld.kind == "point" and ld.value
+             and any(abs(ld.at - x) <= HOIST_AT for x in hooks) for ld in loads):
+        return  # (a dead load elsewhere, a cable clamp at the mast, is not the hoist)
     if not any(ld.case == "live" and ld.total_force for ld in loads) and not moving:
         return  # nothing to rate
     where = ("dead = [...] on [[moving]], the hoist and trolley weight per axle" if moving
-             else "a point load at the hoist with case = \"dead\" (the hoist and trolley "
-             "weight)")
+             else "a point load at the hoist (within a foot of the hook load) with case = "
+             "\"dead\" (the hoist and trolley weight)")
     r.hold("no hoist or trolley weight is entered on this " + (
                "jib" if "jib" in name else "monorail") + ": the figure posted would be what "
            "the member carries in all, and the hoist hung on it takes its own weight out of "
            "that (the rated load is hook load plus hoist and trolley, ASCE 7-16 4.9.2, from "
-           f"memory), so no rating is posted until it is entered: {where}",
+           f"memory), so no rating is posted until it is entered: {where}. A lifting beam "
+           "below the hook (a spreader) carries no hoist: name its profile, lifting = "
+           "\"below-the-hook\"",
            "moving" if moving else "loads",
            "the hoist and trolley weight is not entered: enter it as " + where)
 
@@ -3327,7 +3376,8 @@ def _below_the_hook_hint(r: _Reader, title, notes, tags, criteria) -> str:
 _FIXTURE_WORDS = re.compile(
     r"\b(heaters?|signs?|pipes?|piping|trays?|ducts?|ductwork|lights?|lamps?|luminaires?|"
     r"tracks?|conduits?|fans?|banners?|sprinklers?|cables?|speakers?|curtains?|hvac|"
-    r"units?|displays?|screens?|baskets?)\b", re.IGNORECASE)
+    r"units?|displays?|screens?|baskets?|tires?|tyres?|bins?|openers?|doors?)\b",
+    re.IGNORECASE)
 
 
 # Tags of a member that hangs things below without lifting them (stored goods, fixtures)
@@ -3900,6 +3950,13 @@ _WET_WORDS = re.compile(
     r"mill|yard)|wash[- ]?(?:bays?|downs?|racks?|areas?|stations?|pads?)|cooling towers?|"
     r"greenhouses?|steam rooms?|(?:swimming )?pools?(?:side)?|porch(?:es)?|loading docks?|"
     r"dock levell?ers?)\b", re.IGNORECASE)
+# Places wet by what goes on inside them (wash water, humidity): wet whatever dry words say
+# ("heated greenhouse", "indoor pool", "interior wash bay")
+_WET_PLACES = re.compile(
+    r"\b(wash[- ]?(?:bays?|downs?|racks?|areas?|stations?|pads?|houses?|rooms?)|"
+    r"(?:car|truck|vehicle|bus) ?wash(?:es)?|cooling towers?|greenhouses?|steam rooms?|"
+    r"(?:swimming |indoor )?pools?(?:side)?|shower rooms?|showers|laundr(?:y|ies)|dairy|"
+    r"dairies|milk ?houses?)\b", re.IGNORECASE)
 # Words that say a wood member is fire-retardant treated or incised: its design values take
 # factors shopbeam does not apply (NDS 2018 2.3.4, 4.3.8), so it is not rated
 _TREATED_WORDS = re.compile(r"\b(fire[- ]?retardant(?:[- ]treated)?|frtw?|"
@@ -3940,7 +3997,8 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
             return ""
         return next((m.group(0) for m in (_search(words, t) for t in phrases
                                           if not _search(near, t)) if m), "")
-    wet = said(_WET_WORDS, _DRY_WORDS, _DRY_NEAR)
+    wet = said(_WET_WORDS, _DRY_WORDS, _DRY_NEAR) or next(
+        (m.group(0) for m in (_search(_WET_PLACES, t) for t in whole) if m), "")
     if wet and "wet_service" not in beam:
         r.hold(f"the job says {wet!r}, but [beam] says nothing of wet service: wood over 19 % "
                "moisture in service takes the wet service factor CM (NDS 2018 Supplement "
@@ -3973,7 +4031,7 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
 
 
 def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="",
-               notes=""):
+               notes="", more=()):
     """The wood member's service keys ([beam] wet_service, temperature, repetitive;
     [criteria] duration); a wood material comes back with
     the reference values of this member's size class and E' (see members.wood)."""
@@ -4012,7 +4070,7 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
-    _service_words(r, beam, title, notes, tags)
+    _service_words(r, beam, title, notes, tuple(tags) + tuple(more))
     # a metal shape in wood is refused (_family_mismatch): said once, by that error
     if section is not None and section.shape != "rect-bar" \
             and not catalog.not_made_in(section, material):
@@ -4245,10 +4303,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                 if length is not None else ""
             if stubby:
                 r.warn(stubby, "beam.length")
-            elif length is not None:
-                _short_span(r, length, section, tags, system, beam.get("length"))
+        # words written in other keys (a [beam] record, [project]) say where it stands too
+        more = [v for k, v in beam.items() if k not in KNOWN_KEYS["beam"] and isinstance(v, str)]
+        more += [v for v in (data.get("project") or {}).values() if isinstance(v, str)] \
+            if _is_table(data.get("project")) else []
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section,
-                                            tags, title, notes)
+                                            tags, title, notes, more)
         material = _thick_6063_t5(r, material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
@@ -4473,6 +4533,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)
+    if length is not None and section is not None and isinstance(beam, dict) \
+            and not stubby_words(length, section, system):
+        _short_span(r, length, section, tags, system, beam.get("length"), supports)
     _moving_dead_units(r, data.get("moving"), moving, system)
     travelling_hoist = _parked_hoist(r, criteria, tags, loads, hung, data.get("moving"),
                                      supports, length, system)

@@ -167,8 +167,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
                    f"over {pos(ld.start)} to {pos(ld.end)}", where)
         figs.append(w)
         # the total of the posted figure (never more than the exact total), so the two agree
-        figs.append(posted("TOTAL", w.si * (ld.end - ld.start), "force", sy, "spread evenly",
-                           where, exact=ld.total_force * k))
+        figs.append(posted(f"{_up(ld, 'UPWARD ')}TOTAL", w.si * (ld.end - ld.start), "force",
+                           sy, "spread evenly", where, exact=ld.total_force * k))
     elif len(live) == 1 and not mv and live[0].kind == "point":
         ld = live[0]
         moves = hoist_x is not None
