@@ -2135,10 +2135,12 @@ def _loads_at_supports(r: _Reader, loads, supports, length, system: str) -> list
         if free:
             ends = " or ".join(f'at = "{units.fmt(x, "length", system)}"' for x in free)
             tip = f", e.g. the free end ({ends})"
+        held_back = "and the job is NOT RATED" if ld.case == "live" else (
+            "(a dead load there is not counted in the member's bending; the rating stands)")
         r.warn(f"this point load{name} is at the {sup.kind} support at {where} "
                f"({sup.key or 'a support'}): it goes straight into the support and does not "
                "bend the member, so the bending, shear and deflection checks do not see it "
-               "and the job is NOT RATED. It was "
+               f"{held_back}. It was "
                f"probably meant elsewhere{tip}: check at", f"{ld.key}.at")
         out.append(f"{ld.key}{name} at the {sup.kind} support at {where}")
     return out

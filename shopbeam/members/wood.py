@@ -329,12 +329,15 @@ def repetitive_rule(service: Service, material, section, members: int,
         out.append(("repetitive = true needs three or more members sharing the load (NDS 2018 "
                     "4.3.9); members = 2: Cr 1.0 is used", "beam.repetitive"))
         return off, out
-    wide = [(k, w) for k, w in widths if w > MAX_REPETITIVE_SPACING * (1 + 1e-9)]
+    # an area load shared by `members` members: each one's spacing is width / members
+    n = members if isinstance(members, int) and members > 1 else 1
+    wide = [(k, w) for k, w in widths if w / n > MAX_REPETITIVE_SPACING * (1 + 1e-9)]
     if wide:
         key, w = wide[0]
+        each = f" ({n} members: {w / n / 0.0254:.4g} in each)" if n > 1 else ""
         out.append((f"repetitive = true needs members at 24 in or less (NDS 2018 4.3.9), but "
-                    f"this load's tributary width is {w / 0.0254:.4g} in: Cr 1.0 is used (set "
-                    "the width to the joist spacing, or remove repetitive)", key))
+                    f"this load's tributary width is {w / 0.0254:.4g} in{each}: Cr 1.0 is used "
+                    "(set the width to the joist spacing, or remove repetitive)", key))
         return off, out
     if getattr(material, "kind", "") == "lumber" and section is not None and \
             section.shape == "rect-bar":

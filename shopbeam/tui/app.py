@@ -727,8 +727,8 @@ class JobScreen(Screen):
         system = s.doc.get("units") if s.doc.get("units") in ("us", "si") else "us"
         moved, moved_at = [], []
         for table, i, k, x in placed:
-            if how == "scale":
-                to = units.fmt(x * new / old, "length", system)
+            if how == "scale":  # (six figures: scaled back, a position comes back as it was)
+                to = units.fmt(x * new / old, "length", system, 6)
             elif how == "ends" and abs(x - old) <= 1e-9 * old:
                 to = str(s.doc.get("beam.length"))
             else:
@@ -758,6 +758,7 @@ class JobScreen(Screen):
             if isinstance(here, Field) and ((here.key, here.row) in shown
                                             or (here.key, None) in shown):
                 here.will_move()
+            self.app.clear_notifications()  # "positions stay as typed" is no longer so
             self.notify("Moved: " + "; ".join(moved[:6]) + (" ..." if len(moved) > 6 else ""),
                         timeout=8)
         elif how == "keep":
