@@ -1552,3 +1552,13 @@ def test_a_unitless_bar_on_a_short_span(section, held):
         'at = "3 ft"', 'at = "12 in"'))
     said = [p for p in job.warnings if p.key == "beam.section" and "without a unit" in p.message]
     assert bool(said) is held
+
+
+def test_the_untreated_tag_says_the_treatment_words_are_about_something_else():
+    from shopbeam.design.capacity import capacity
+
+    text = job_text(section="2x10", material="DF-L-2").replace(
+        'title = "shelf"', 'title = "Loft joist under an FRT plywood deck"')
+    assert not capacity(parse_job_text(text)).rated
+    tagged = text.replace('title = "Loft joist', 'tags = ["untreated"]\ntitle = "Loft joist')
+    assert capacity(parse_job_text(tagged)).rated

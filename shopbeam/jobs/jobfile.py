@@ -4021,13 +4021,15 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
                f"the job says {hot!r} but not the wood's temperature. Write temperature = "
                "\"100F-125F\", \"125F-150F\" or \"up-to-100F\"")
     treated = next((m.group(0) for m in (_search(_TREATED_WORDS, t) for t in whole) if m), "")
-    if treated:
+    if treated and "untreated" not in {normal_tag(t) for t in tags}:
         r.hold(f"the job says {treated!r}: fire-retardant treated lumber takes the treater's "
                "reduction factors on its design values (NDS 2018 2.3.4) and incised lumber "
                "the incising factor Ci (NDS 2018 4.3.8: 0.80 on Fb, Ft, Fc, Fv, from memory), "
                "which shopbeam does not apply, so checked as untreated it is rated too high "
                "and no rating is posted. Have it rated with those factors (lumber pressure-"
-               "treated with preservatives only, not incised, takes the untreated values)",
+               "treated with preservatives only, not incised, takes the untreated values); if "
+               "the words are about something else and this member is untreated, add the tag "
+               "\"untreated\"",
                "title", f"the job says {treated!r}: shopbeam does not apply the treatment "
                "factors of fire-retardant or incised lumber")
 
