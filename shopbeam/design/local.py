@@ -201,7 +201,11 @@ def _where(x: float, negative: bool, system: str) -> str:
 def forces_of(job, sol) -> list[Force]:
     """Every concentrated force of one solved state: reactions (on the bottom face; not at a
     fixed end, which is a connection) and point loads summed where they act together."""
-    fmt = lambda x: _where(x, math.copysign(1.0, x) < 0, job.units)  # noqa: E731
+    step = 1e-6 * max(job.length, 1e-9)  # a wheel nudged past a support: 0 ft, not 1e-07 ft
+
+    def fmt(x):
+        x = round(x / step) * step + 0.0
+        return _where(x, math.copysign(1.0, x) < 0, job.units)
     out = []
     for n, r in enumerate(sol.reactions):
         # a fixed end is a connection (welded or bolted into a wall or column), not a bearing
