@@ -417,3 +417,18 @@ def test_size_of_a_job_with_no_live_loads_says_there_is_nothing_to_rate():
     assert "the job has no live loads" in dead
     live = " ".join(render(size(load_job(root / "demo.toml"), "W")).split())
     assert "the job has no live loads" not in live
+
+
+def test_text_ui_size_note_says_heavier_sections_were_screened_only():
+    # "1 of 283 W sections pass" read as if the heavier ones failed: they pass the quick
+    # screen and were not checked in full (the lightest that passes ends the full checks)
+    from pathlib import Path
+
+    from shopbeam.tui.slow import size_rows
+
+    job = parse_job_text((Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml")
+                         .read_text())
+    res = size(job, "W")
+    rows, note = size_rows(job, "W", 40)
+    assert res.screened_only  # the jib's heavier W shapes: screened only
+    assert f"{len(res.screened_only)} heavier ones pass the quick screen" in note

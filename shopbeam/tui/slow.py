@@ -367,7 +367,10 @@ def _size_rows(job, kind: str, top: int) -> tuple[list[tuple[str, str]], str]:
                      f"  ratio {r.ratio:.2f} {r.governing:<10} "
                      + ("NOT RATED" if r.not_rated else f"capacity x{k}")))
     n = len(res.rows)
+    more = len(getattr(res, "screened_only", ()) or ())
     note = (f"{len(passing)} of {n} {res.kind} sections pass; lightest first"
             + (f" (first {top} shown)" if len(passing) > top else "") + "."
+            + (f" {more} heavier ones pass the quick screen but were not checked in full "
+               "(shopbeam size --confirm N lists them)." if more else "")
             if passing else f"None of the {n} {res.kind} sections passes every check.")
     return rows, note
