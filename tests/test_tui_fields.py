@@ -389,3 +389,22 @@ async def test_a_warning_on_the_whole_material_is_shown_in_the_material_view(tmp
         await goto(pilot, "5")
         props = str(app.job_screen.query_one("#mat-props").render())
         assert "warning: e = 10100 ksi and density = 490 lb/ft^3 do not belong" in props
+
+
+@sync
+async def test_a_load_that_really_pushes_up_is_said_so_in_the_form(tmp_path):
+    # the messages say "add uplift = true to the load": the form has the choice for it
+    path = job_copy(tmp_path, "demo")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        rows = s.rows("loads")
+        pt = next(i for i, r in enumerate(rows) if r["type"] == "point")
+        await show_load(app, pilot, pt)
+        up = choice(app, "loads", "load.uplift")
+        assert up.display and up.value == "no"
+        await pick(pilot, up, "y")
+        assert s.rows("loads")[pt]["uplift"] is True
+        await pick(pilot, up, "n")
+        assert "uplift" not in s.rows("loads")[pt]  # back as the file had it: no key

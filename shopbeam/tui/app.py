@@ -805,6 +805,10 @@ class JobScreen(Screen):
             i = self.query_one("#loads", LoadsView).selected
             s.set_row("loads", i, "patterned", True if value == "yes" else self._as_opened(
                 ["loads", i], "patterned", {False}))
+        elif key == "load.uplift":
+            i = self.query_one("#loads", LoadsView).selected
+            s.set_row("loads", i, "uplift", True if value == "yes" else self._as_opened(
+                ["loads", i], "uplift", {False}))
         elif key == "load.case":
             i = self.query_one("#loads", LoadsView).selected
             s.set_row("loads", i, "case", "dead" if value == "dead" else self._as_opened(

@@ -568,6 +568,7 @@ class LoadsView(RowsView):
             yield Field("Label", "load.label", placeholder="what it is")
             yield Choice("Case", ["live", "dead"], key="load.case")
             yield Choice("Patterned", ["no", "yes"], key="load.patterned")
+            yield Choice("Uplift", ["no", "yes"], key="load.uplift")
             yield Field("Bearing", "load.bearing", placeholder="e.g. 6 in")
             yield Choice("Flange", ["top", "bottom"], key="load.flange")
             yield Choice("Wheels", list(WHEEL_WORDS), key="load.wheels")
@@ -610,6 +611,9 @@ class LoadsView(RowsView):
             elif c.key == "load.patterned":
                 c.set("yes" if row.get("patterned") is True else "no")
                 c.display = kind in ("uniform", "linear", "point")
+            elif c.key == "load.uplift":  # a force load that really pushes up says so
+                c.set("yes" if row.get("uplift") is True else "no")
+                c.display = kind in ("uniform", "linear", "point")
             elif c.key == "load.flange":
                 # no flange written: what the checks take (a lifting job's I-beam hangs its
                 # point loads from the bottom flange)
@@ -650,6 +654,7 @@ class LoadsView(RowsView):
             "load.bearing": f"loads[{i}].bearing"})
         self.show_choice_messages(session.evaluation, {
             "load.flange": f"loads[{i}].flange", "load.patterned": f"loads[{i}].patterned",
+            "load.uplift": f"loads[{i}].uplift",
             "load.case": f"loads[{i}].case", "load.wheels": f"loads[{i}].wheels"})
         # a problem with the whole value list of a linear load goes beside the first value
         if kind == "linear":
