@@ -568,10 +568,11 @@ class LoadsView(RowsView):
             yield Field("Label", "load.label", placeholder="what it is")
             yield Choice("Case", ["live", "dead"], key="load.case")
             yield Choice("Patterned", ["no", "yes"], key="load.patterned")
-            yield Choice("Uplift", ["no", "yes"], key="load.uplift")
             yield Field("Bearing", "load.bearing", placeholder="e.g. 6 in")
             yield Choice("Flange", ["top", "bottom"], key="load.flange")
             yield Choice("Wheels", list(WHEEL_WORDS), key="load.wheels")
+            # (last: the fields above keep their Tab order)
+            yield Choice("Uplift", ["no", "yes"], key="load.uplift")
             yield Static("Patterned: each span is checked loaded and empty in turn (parts "
                          "taken off one bay at a time).", classes="hint", markup=False)
 
