@@ -25,7 +25,7 @@ from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, 
 from shopbeam.jobs.jobfile import NOT_FLOOR, Job
 from shopbeam.jobs.rules import guessed_profile, rack_arm
 from shopbeam.errors import InputError, UnstableBeam
-from shopbeam.engine.solver import Solution, sound_solve
+from shopbeam.engine.solver import Solution, solve, sound_solve
 from shopbeam.members.sections import ANGLE_WARNING
 
 
@@ -169,7 +169,11 @@ def live_off_uplift(job: Job, sol: Solution) -> list[str]:
     if job.moving or any(ld.patterned for ld in job.loads) \
             or not any(ld.case == "live" and ld.total_force for ld in job.loads):
         return []
-    off = loading.state_set(job).fixed.reactions
+    fixed = loading.load_parts(job).fixed
+    if not fixed:
+        return []
+    # the dead loads alone: one plain solve of the same beam (no extremes looked for)
+    off = solve(replace(sol.beam, loads=tuple(fixed)), candidates=False).reactions
     top = max([abs(r.force) for r in sol.reactions] + [abs(r.force) for r in off] + [0.0])
     out = []
     for r, r0 in zip(sol.reactions, off):
@@ -724,13 +728,11 @@ def _moving_top_worst(job: Job, st, ss, k: float, limits):
     positions are every 1/MOVING_TOP_STEPS of the travel plus those where the exact envelopes
     peak (the ratio is continuous in the position, so a step of travel / 200 misses at most
     a sliver of it). A length no position puts a wheel in (or whose wheels carry nothing at
-    k) is left out. NOT_JUDGED for a patterned job: each pattern would need the whole sweep,
-    so the rule is not judged there (and no rating rests on it)."""
+    k) is left out. Not for a patterned job (`moving_top_worst` answers NOT_JUDGED: each
+    pattern would need the whole sweep)."""
     from shopbeam.engine.model import Load
     from shopbeam.engine.solver import solve_each
 
-    if ss.parts.patterned:
-        return NOT_JUDGED
     fl = st.flexure
     mv = ss.parts.moving[0]
     kk = k * (1 + ss.parts.impact)

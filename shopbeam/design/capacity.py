@@ -24,7 +24,7 @@ from dataclasses import dataclass, replace
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
 from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
-                                     moving_reactions_off, wheel_variants,
+                                     moving_reactions_off, variant_words,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        hogging_limits, hogging_remedy, hogging_source,
@@ -45,7 +45,7 @@ from shopbeam.design.lifting import profile_of
 from shopbeam.design import fatigue
 from shopbeam.cautions import RACK_TAGS
 from shopbeam.jobs.rules import rack_arm
-from shopbeam.jobs.jobfile import (STUBBY_LIMIT, WheelSet, grade_gap, kind_mismatch, lifting_uniform_words,
+from shopbeam.jobs.jobfile import (HOIST_NEAR, STUBBY_LIMIT, WheelSet, grade_gap, kind_mismatch, lifting_uniform_words,
                                    strength_slip, stubby_words, thickness_gap,
                                    wood_gap)
 
@@ -397,9 +397,6 @@ def _live_on_spans_unpatterned(job) -> list[str]:
             "go span by span, so every arrangement is checked and rated"]
 
 
-HOIST_NEAR = 0.305  # m: a dead load hung within a foot of the hook is the hoist's own weight
-
-
 def _hook(job):
     """The hook load of a hoist given as a point load at its worst place, or None (none, or
     hung from a lug under the web: a fixed hoist, which does not travel)."""
@@ -517,17 +514,11 @@ def _with_live_off(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     for r, r0 in zip(e.reactions, off):
         r = dict(r)
         if r0["max_up"] > r["max_up"] + 1e-9 * abs(r0["max_up"]):
-            r["max_up"], r["max_up_state"] = r0["max_up"], _off_words(r0, "max_up_state", words)
+            r["max_up"], r["max_up_state"] = r0["max_up"], words
         if r0["max_down"] < r["max_down"] - 1e-9 * abs(r0["max_down"]):
-            r["max_down"], r["max_down_state"] = r0["max_down"], _off_words(
-                r0, "max_down_state", words)
+            r["max_down"], r["max_down_state"] = r0["max_down"], words
         out.append(r)
     return replace(res, evaluation=replace(e, reactions=tuple(out)))
-
-
-def _off_words(r0: dict, key: str, words: str) -> str:
-    """The live-off state in words, with the wheel position where one gives it."""
-    return "; ".join(x for x in (words, r0.get(key, "")) if x)
 
 
 def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
@@ -746,10 +737,8 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
 
 def _travel_words(job, ss) -> str:
     """" (the worst position of <set> over its travel[, either way round])"."""
-    labels = [jb.moving[0].label for jb, _ in wheel_variants(job, ss)]
     return (f" (the worst position of {job.moving[0].label or 'the wheel set'} over its travel"
-            + (", either way round" if any(x.endswith("turned round") for x in labels) else "")
-            + (", loaded or empty" if any(x.endswith(" empty") for x in labels) else "") + ")")
+            f"{variant_words(job, ss)})")
 
 
 def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:

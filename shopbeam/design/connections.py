@@ -19,12 +19,8 @@ def _states(job, sol):
         if parts.moving:  # every wheel position (and pattern), every variant of the set
             ss = loading.state_set(job)
             ways = loading.wheel_variants(job, ss)
-            labels = [jb.moving[0].label for jb, _ in ways]
             return [st for jb, s2 in ways for st in loading.moving_connection_states(jb, ss=s2)], \
-                "over every position of the wheels" + (
-                    ", either way round" if any(x.endswith("turned round") for x in labels)
-                    else "") + (", loaded or empty" if any(x.endswith(" empty") for x in labels)
-                                else "")
+                "over every position of the wheels" + loading.variant_words(job, ss)
         if parts.patterned and not parts.moving:  # the extreme patterns, from the envelopes
             return loading.connection_states(job), "over every load pattern"
         if parts.impact and not parts.moving:

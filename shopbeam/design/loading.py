@@ -1010,6 +1010,7 @@ def wheel_variants(job, ss: StateSet) -> list[tuple]:
     got = ss.__dict__.get("_variants")
     if got is None:
         got = [(job, ss)]
+        words = ""
         if job.moving:
             ws = job.moving[0]
             sets = [job]
@@ -1017,15 +1018,25 @@ def wheel_variants(job, ss: StateSet) -> list[tuple]:
                 empty = replace(ws, live=tuple(0.0 for _ in ws.live),
                                 label=f"{ws.label or 'wheel set'} empty")
                 sets.append(replace(job, moving=(empty,) + tuple(job.moving[1:])))
-            for jb in sets:
-                t = turned_round(jb)
+            turned = [turned_round(jb) for jb in sets]
+            for jb, t in zip(sets, turned):
                 for v in ([jb] if jb is not job else []) + ([t] if t is not None else []):
                     s2 = replace(ss, parts=replace(
                         ss.parts, moving=_moving_parts(v, ss.parts.hoist_impact)))
                     s2.__dict__["_influence"] = ss.__dict__.setdefault("_influence", {})
                     got.append((v, s2))
+            words = (", either way round" if any(t is not None for t in turned) else "") \
+                + (", loaded or empty" if len(sets) > 1 else "")
         ss.__dict__["_variants"] = got
+        ss.__dict__["_variant_words"] = words
     return got
+
+
+def variant_words(job, ss: StateSet) -> str:
+    """The variants `wheel_variants` judges, in words: ", either way round" and/or ", loaded
+    or empty" ("" for a set judged only as entered)."""
+    wheel_variants(job, ss)
+    return ss.__dict__["_variant_words"]
 
 
 def moving_reactions_off(job, ss: StateSet) -> list[tuple[float, float]]:

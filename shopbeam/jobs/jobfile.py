@@ -2876,7 +2876,7 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
 RUNOUT_MIN = 0.305  # 1 ft
 
 
-HOIST_AT = 0.305  # m: a dead point load within a foot of the hook load is the hoist's weight
+HOIST_NEAR = 0.305  # m: a dead point load within a foot of the hook load is the hoist's weight
 
 
 def _hoist_weight(r: _Reader, criteria: Criteria, tags, loads, moving, supports,
@@ -2895,7 +2895,7 @@ def _hoist_weight(r: _Reader, criteria: Criteria, tags, loads, moving, supports,
         if any(d for ws in moving for d in ws.dead):
             return
     elif any(ld.case == "dead" and ld.kind == "point" and ld.value
-             and any(abs(ld.at - x) <= HOIST_AT for x in hooks) for ld in loads):
+             and any(abs(ld.at - x) <= HOIST_NEAR for x in hooks) for ld in loads):
         return  # (a dead load elsewhere, a cable clamp at the mast, is not the hoist)
     if not any(ld.case == "live" and ld.total_force for ld in loads) and not moving:
         return  # nothing to rate
