@@ -753,3 +753,62 @@ duration = "ten-years"
     assert got.demand * 1.5 * 1.0 * 0.0254 ** 2 / 4.4482216152605 == pytest.approx(1442, rel=0.01)
     cap = capacity(job)
     assert {c.name: c for c in cap.evaluation.checks}["bearing"].ratio <= 1 + 1e-9
+
+
+CART_DECK = """schema = 1
+title = "Lumber deck joist over three posts, cart aisle"
+units = "us"
+tags = ["not-lifting", "not-floor"]
+[beam]
+length = "20 ft"
+section = "4x10"
+material = "DF-L-2"
+self_weight = false
+braced = true
+wet_service = false
+temperature = "up-to-100F"
+[[supports]]
+at = "0 ft"
+type = "pin"
+bearing = "5.5 in"
+[[supports]]
+at = "10 ft"
+type = "roller"
+bearing = "5.5 in"
+[[supports]]
+at = "20 ft"
+type = "roller"
+bearing = "5.5 in"
+[[moving]]
+label = "cart"
+loads = ["-1200 lbf", "-300 lbf"]
+spacing = ["2 ft"]
+{contact}
+[criteria]
+deflection = "L/240"
+"""
+
+
+def test_wheels_on_wood_bear_on_their_own_contact_or_the_member_is_not_rated():
+    # no contact length given: the wheels never borrow the seats' 5.5 in (nor the 1-1/2 in
+    # plate default); the member is not rated, and says what to write
+    cap = capacity(parse_job_text(CART_DECK.format(contact=""), "deck.toml"))
+    held = [w for w in cap.not_rated if "bearing under the wheels" in w]
+    assert held and "[[moving]]" in held[0] and not cap.rated
+    # given: NDS 2018 3.10.2 fc_perp = P / (b lb) <= Fc_perp Cb; at the member's end Cb = 1
+    # (NDS 3.10.4), so the 1200 lbf wheel there rates k = 625 psi x 3.5 in x 0.75 in / 1200
+    # lbf (Fc_perp 625 psi for DF-L No.2, NDS Supplement Table 4A, from memory; b = 3.5 in)
+    cap = capacity(parse_job_text(CART_DECK.format(contact='bearing = "0.75 in"'), "deck.toml"))
+    assert not [w for w in cap.not_rated if "bearing under the wheels" in w]
+    assert cap.governing.name == "bearing" and "each wheel's contact" in cap.governing.formula
+    assert cap.factor == pytest.approx(625 * 3.5 * 0.75 / 1200, rel=1e-6)
+
+
+def test_a_wheel_contact_on_a_steel_member_is_warned_as_unused():
+    text = CART_DECK.format(contact='bearing = "1 in"').replace('section = "4x10"',
+                                                               'section = "W8x18"')
+    text = text.replace('material = "DF-L-2"', 'material = "A992"')
+    text = text.replace("wet_service = false\ntemperature = \"up-to-100F\"\n", "")
+    j = parse_job_text(text, "deck.toml")
+    assert any(p.key == "moving[0].bearing" and "changes nothing" in p.message
+               for p in j.warnings)

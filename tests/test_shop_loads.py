@@ -96,6 +96,18 @@ def test_area_load_without_width_is_refused_with_the_reason():
     assert "loads[0].width" in str(e.value) and "tributary width" in str(e.value)
 
 
+def test_a_width_that_is_not_a_length_beside_a_line_load_is_a_problem():
+    # a stray word in width is a mistake to mend, not a width that is merely ignored
+    text = job("Shelf", "8 ft", '[[loads]]\ntype = "uniform"\nvalue = "-60 lbf/ft"\n'
+               'width = "wind uplift (suction)"\n')
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text, "shelf.toml")
+    assert "loads[0].width" in str(e.value) and "wind uplift" in str(e.value)
+    # a length there is only warned as ignored, as before
+    ok = parse_job_text(text.replace("wind uplift (suction)", "16 in"), "shelf.toml")
+    assert any(p.key == "loads[0].width" and "ignored" in p.message for p in ok.warnings)
+
+
 def test_total_and_value_together_is_refused():
     text = job("x", "6 ft", '[[loads]]\ntype = "uniform"\ntotal = "-700 lbf"\nvalue = "-5 lbf/ft"\n')
     with pytest.raises(InputErrors, match="either value"):

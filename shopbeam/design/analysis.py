@@ -475,6 +475,20 @@ def material_unchecked(job: Job, st) -> list[Unchecked]:
                 "625 psi, NDS Supplement 2018 Table 4A, from memory). Give fc_perp under "
                 "[beam.material], or use a built-in grade such as \"DF-L-2\"",
                 "NDS 2018 3.10.2"))
+    if kind == "lumber" and wf is not None and wf.values.fc_perp:
+        for ws in getattr(job, "moving", ()):
+            if ws.bearing is None:
+                out.append(Unchecked(
+                    "bearing under the wheels, perpendicular to grain",
+                    f"the wheels of {ws.label!r} bear on the wood over their own contact, "
+                    "often well under an inch along a caster's tread, not on the seats' "
+                    "bearing length, and no contact length is given, so their crushing "
+                    "across the grain is not checked (it can govern: Fc_perp 625 psi for "
+                    "DF-L No.2, NDS Supplement 2018 Table 4A, from memory). Give each "
+                    "wheel's contact length along the member as bearing = \"...\" in "
+                    "[[moving]] (a plate under the track: its length), and put the tread "
+                    "on the member's full breadth or have the bearing checked",
+                    "NDS 2018 3.10.2, 3.10.4"))
     if kind == "aluminum" and basis_of(job) == "aluminum":
         if not getattr(mat, "fu", None):
             out.append(Unchecked(

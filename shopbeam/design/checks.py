@@ -1384,11 +1384,17 @@ def bearing_checks(job, sol: Solution, wf) -> list[Check]:
     # springs bear on what holds them
     spots = [(r.at, abs(r.force), "support", r.key) for r in sol.reactions
              if r.kind in ("pin", "roller", "spring")]
-    spots += [(ld.at, abs(ld.value), "point load", ld.key) for ld in sol.beam.loads
-              if ld.kind == "point" and ld.value != 0]
+    # a wheel bears on its own contact (bearing on [[moving]]), never on the seats' length;
+    # not given, the wheels are not checked here and the member is not rated (analysis.
+    # material_unchecked says so)
+    contact = {ws.key: ws.bearing for ws in getattr(job, "moving", ())}
+    spots += [(ld.at, abs(ld.value), "wheel" if ld.key in contact else "point load", ld.key)
+              for ld in sol.beam.loads if ld.kind == "point" and ld.value != 0
+              and (ld.key not in contact or contact[ld.key] is not None)]
     worst = None
     for at, force, what, key in spots:
-        lb, stated = length_at(key)
+        lb, stated = (contact[key], "each wheel's contact, as given") if key in contact \
+            else length_at(key)
         # NDS 3.10.4 measures "not nearer than 3 in to the end" to the bearing's near edge;
         # the support or load sits at the bearing's centre
         end = (min(at, sol.beam.length - at) - lb / 2) / 0.0254

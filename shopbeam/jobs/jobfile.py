@@ -55,7 +55,7 @@ KNOWN_KEYS: dict[str, set[str]] = {
     "criteria": {"deflection", "safety_factor", "basis", "impact", "duration",
                  "live_deflection", "lifting", "category", "fatigue_category", "cycles"},
     "moving": {"label", "loads", "dead", "spacing", "travel", "case", "wheels_per_axle",
-               "wheel_edge"},
+               "wheel_edge", "bearing"},
     "project": set(),  # filled from PROJECT_KEYS below
 }
 
@@ -101,6 +101,9 @@ class WheelSet:
     key: str = "moving[0]"
     wheels_per_axle: int = 2  # each load is an axle; a monorail trolley runs a wheel each side
     wheel_edge: float | None = None  # m, flange tip to wheel contact; None: the stated default
+    # m, each wheel's contact length along the member (bearing = "..."): a wood member's
+    # bearing under the wheels (NDS 3.10); None: not given (a wood member is then not rated)
+    bearing: float | None = None
 
 
 @dataclass(frozen=True)
@@ -1161,8 +1164,11 @@ def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
     edge = None
     if "wheel_edge" in t:
         edge = r.parse(t, "wheel_edge", "length", f"{key}.wheel_edge", nonnegative=True)
+    contact = None
+    if "bearing" in t:
+        contact = r.parse(t, "bearing", "length", f"{key}.bearing", positive=True)
     return (WheelSet(label, live, dead or tuple(0.0 for _ in live), tuple(offsets), travel,
-                     key, int(per_axle), edge),)
+                     key, int(per_axle), edge, contact),)
 
 
 def _apart(x: float, length: float, system: str = "us") -> tuple[str, str]:
@@ -1532,6 +1538,8 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         r.widths[key] = width
         raw = ld["value"] if kind == "uniform" else " to ".join(ld["value"])
         conversions.append((key, f"{raw} x {ld['width']} tributary width", w1 if kind == "uniform" else None))
+    elif "width" in ld and r.parse(ld, "width", "length", f"{key}.width", positive=True) is None:
+        pass  # not a length at all: said as a problem (a stray word is not an ignored width)
     elif "width" in ld:
         # a width beside a load per length is most often a load per area typed per foot
         # ("-12 lbf/ft" for "-12 psf" with its width left in): a dead load read that way is
@@ -4569,6 +4577,13 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _odd_springs(r, supports, section, material, length, system)
     _cut_hint(r, title, notes, tags, raw_loads)
     for ws in moving:
+        if ws.bearing is not None and material is not None and \
+                getattr(material, "kind", "") != "lumber":
+            r.warn(f"bearing on [[moving]] is each wheel's contact length along a wood member, "
+                   f"for its crushing across the grain (NDS 2018 3.10); this "
+                   f"{getattr(material, 'kind', '') or 'metal'} member takes each wheel at a "
+                   "point (bearing length 0) in its web checks, on the safe side, so it changes "
+                   "nothing: remove it", f"{ws.key}.bearing")
         if ws.wheel_edge is not None and section is not None and not (
                 section.shape == "i-beam" and section.axis == "strong"):
             r.warn(f"wheel_edge is where a trolley wheel bears on the bottom flange of an "
