@@ -57,6 +57,31 @@ def test_a_half_typed_job_gives_problems_not_an_exception():
     assert s.evaluation.ok
 
 
+def test_a_key_to_write_is_named_as_the_control_that_writes_it():
+    # the UI has an Uplift choice and a Basis choice: a message read there names them
+    said = in_words("loads[2].value: this load points UP (+300 lbf): forces are + up. If the "
+                    "push up is intended (uplift), add uplift = true to the load")
+    assert "load 3 value" in said and "Uplift to yes" in said and "uplift = true" not in said
+    said = in_words('criteria.safety_factor: write basis = "first-yield" under [criteria] to '
+                    "check first yield with this factor")
+    assert "Basis: first-yield (F7 Criteria)" in said
+
+
 def test_row_keys_read_as_the_lists_number_them():
     assert in_words("supports[1].at: supports[0] and supports[1] clash") == \
         "support 2 at: support 1 and support 2 clash"
+
+
+def test_rating_view_counts_loads_as_the_list_does(tmp_path):
+    # the demo tagged lifting: its hoist (the fourth load) is named in the label's reasons
+    # and input warnings; the Rating view says "load 4", as the Loads list numbers it
+    from shopbeam.tui.slow import rating_text
+
+    text = (PRESETS / "demo.toml").read_text(encoding="utf-8")
+    job = tmp_path / "lift.toml"
+    job.write_text(text.replace('tags = [', 'tags = ["lifting", ', 1), encoding="utf-8")
+    shown = rating_text(load_job(job))
+    assert "loads[" not in shown and "load 4" in shown
+    # still boxed: every label line keeps the box's width
+    box = [ln for ln in shown.splitlines() if ln.startswith("|")]
+    assert box and len({len(ln) for ln in box}) == 1

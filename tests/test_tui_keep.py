@@ -1713,6 +1713,36 @@ async def test_a_sizing_sweep_is_taken_off_when_the_job_changes(tmp_path):
 
 
 @sync
+async def test_a_sweep_taken_off_is_still_said_after_problems_between(tmp_path):
+    # the job changed, had a problem while the Sizing view was shown, and was mended: the
+    # note still says the sweep was of an earlier job
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f12")
+        await settle(pilot)
+        view = app.job_screen.query_one("SizingView")
+        view.action_run()
+        lst = view.query_one("#size-list")
+        for _ in range(200):  # the sweep runs in a thread
+            await pilot.pause(0.05)
+            if lst.option_count:
+                break
+        assert lst.option_count
+        for typed in ("-400 lbf/fx", "-400 lbf/ft"):
+            await pilot.press("f4")
+            await settle(pilot)
+            await focused(pilot, app, "loads", "load.value")
+            await burst(pilot, CTRL_U + typed + TAB)
+            await pilot.pause(0.5)
+            await pilot.press("f12")
+            await settle(pilot)
+        assert lst.option_count == 0
+        note = str(view.query_one("#size-note").render())
+        assert "The job changed since the last sweep: choose a kind" in note
+
+
+@sync
 async def test_a_long_value_is_shown_from_its_start_once_the_focus_leaves(tmp_path):
     # left scrolled to its end, "2 ft, 4 ft, 6 ft, 8 ft, 10 ft, 12 ft" read as a list
     # without its first brace
@@ -1751,3 +1781,46 @@ async def test_the_field_typed_in_stays_in_sight_when_a_warning_line_comes_above
         view = app.job_screen.query_one("#loads")
         assert f.input.region.height > 0
         assert view.region.contains_region(f.input.region), (f.input.region, view.region)
+
+
+@sync
+async def test_the_value_example_follows_the_load_type(tmp_path):
+    # a couple's Value is not a force: its example is in lbf*ft with its sign rule, and
+    # the example goes back to a force when the type goes back to point
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        value = field(app, "loads", "load.value")
+        assert "lbf/ft" in value.input.placeholder  # the demo's first load is uniform
+        kind = choice_of(app, "loads", "load.type")
+        await focus(pilot, kind)
+        await letters_alone(pilot, "m")
+        assert app.job_screen.session.rows("loads")[0]["type"] == "moment"
+        assert "lbf*ft" in value.input.placeholder
+        assert "counterclockwise" in value.input.placeholder
+        await letters_alone(pilot, "p")
+        assert value.input.placeholder == "e.g. -300 lbf"
+
+
+@sync
+async def test_a_notice_never_covers_the_summary_at_80_columns(tmp_path):
+    # at 80x24 a notice took the right half of the summary's rows: "ALL CHECKS PASS -
+    # governing: deflectio" and the rest behind it
+    from textual.widgets._toast import Toast
+
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=(80, 24), notifications=True) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        app.notify("A notice of some length, as the length-changed one is: " + "words " * 30,
+                   title="length changed", timeout=30)
+        await settle(pilot)
+        summary = app.job_screen.query_one("#summary")
+        assert summary.display and summary.region.height
+        toasts = [t for t in app.screen.query(Toast) if t.region.height]
+        assert toasts
+        for t in toasts:
+            assert t.region.bottom <= summary.region.y, (t.region, summary.region)

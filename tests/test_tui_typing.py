@@ -390,3 +390,14 @@ async def test_keys_right_behind_ctrl_x_never_edit_the_neighbouring_row(fast):
         s = app.job_screen.session
         assert s.doc.text() == before  # the added row is gone; no other row changed
         assert 'at = "15 ft"' in s.doc.text() and "abc" not in s.doc.text()
+
+
+def test_the_save_notice_names_a_file_opened_by_a_relative_path_once(tmp_path, monkeypatch):
+    from shopbeam.tui.app import _same_file
+
+    monkeypatch.chdir(tmp_path)
+    (tmp_path / "jobs").mkdir()
+    where = str((tmp_path / "jobs" / "rack.toml").resolve())
+    assert _same_file("jobs/rack.toml", where)  # "Saved jobs/rack.toml to /.../rack.toml"
+    assert not _same_file("jobs/other.toml", where)
+    assert not _same_file("shop:rack", where)  # a library name is worth saying

@@ -1230,7 +1230,7 @@ class JobScreen(Screen):
         if s.stale:
             extra = " - checking your last edit now (see the summary line)"
         where = str(Path(path).resolve() if path is not None else s.path)
-        name = f"{s.label} " if s.label != where else ""
+        name = f"{s.label} " if s.label != where and not _same_file(s.label, where) else ""
         self.notify(f"Saved {name}to {where}{extra}", severity="warning" if n else
                     "information", timeout=8)
         self.refresh_all()
@@ -1591,6 +1591,14 @@ class ShopbeamApp(App):
             self.exit()
             return
         js.guard("quit", self.exit)
+
+
+def _same_file(label: str, where: str) -> bool:
+    """The session's label is a path to the file saved (named once in the notice)."""
+    try:
+        return Path(label).resolve() == Path(where)
+    except (OSError, ValueError):
+        return False
 
 
 def _along(values) -> list[tuple[int, float]]:

@@ -22,7 +22,7 @@ from textual.widgets.option_list import Option
 
 from shopbeam import units
 from shopbeam.jobs import library, storage
-from shopbeam.tui.views import View, problems_text
+from shopbeam.tui.views import View, in_words, problems_text
 from shopbeam.tui.widgets import Choice, fit_text
 
 
@@ -230,17 +230,35 @@ def rating_text(job, width: int = 40, date=None, page_width: int = 78) -> str:
 
     try:
         res = capacity(job)
-        text = capacityreport.render(res, page_width)
+        # rows counted from 1, as the lists of the text UI show them ("load 4", not
+        # "loads[3]"); the report's lines only get shorter
+        text = in_words(capacityreport.render(res, page_width))
     except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
     try:
-        label = labels.label_text(labels.rating(res, analyze(job).unchecked, date=date), width)
+        r = labels.rating(res, analyze(job).unchecked, date=date)
+        label = labels.label_text(_label_in_words(r), width)  # in words before it is boxed
         lines += ["RATING LABEL (ctrl+r writes this view to a file, ctrl+p prints it)",
                   label.rstrip()]
     except Exception as exc:  # noqa: BLE001
         lines.append(f"The rating label could not be made: {type(exc).__name__}: {exc}")
     return "\n".join(lines)
+
+
+def _label_in_words(r):
+    """The label's words with rows counted from 1 (`in_words`), before they are wrapped."""
+    import dataclasses  # noqa: PLC0415 - startup
+
+    def say(v):
+        if isinstance(v, str):
+            return in_words(v)
+        if isinstance(v, tuple) and all(isinstance(x, str) for x in v):
+            return tuple(in_words(x) for x in v)
+        return v
+
+    return dataclasses.replace(r, **{f.name: say(getattr(r, f.name))
+                                     for f in dataclasses.fields(r)})
 
 
 class SizingView(View):
@@ -291,13 +309,14 @@ class SizingView(View):
             # a sweep of the job before the last edit would read as this job's: taken off
             self._swept_for = None
             self._ran = False
+            self._dropped = True  # said until the next sweep, through any problems between
             self.query_one("#size-list", OptionList).clear_options()
         if session.evaluation.result is None:
             note.update(Text(problems_text(session.evaluation)))
         elif not getattr(self, "_ran", False):
-            note.update(Text(("The job changed since the last sweep: " if swept is not None
-                              and swept is not job else "")
-                             + "Choose a kind, then press the button (or r)."))
+            note.update(Text("The job changed since the last sweep: choose a kind, then press "
+                             "the button (or r)." if getattr(self, "_dropped", False) else
+                             "Choose a kind, then press the button (or r)."))
 
     BINDINGS = [Binding("r", "run", "sweep", priority=True)]
 
@@ -314,6 +333,7 @@ class SizingView(View):
             return
         kind = self.query_one(Choice).value
         self._ran = True
+        self._dropped = False
         self._swept_for = ev.job
         self.query_one("#size-note", Static).update(Text(f"Sweeping {kind}..."))
         self.query_one("#size-list", OptionList).clear_options()

@@ -38,9 +38,22 @@ def _text(s: str) -> Text:
 _ROW_KEY = re.compile(r"\b(supports|loads)\[(\d+)\]")
 
 
+# what a message tells a file's reader to write, said as the control that writes it here
+_UI_WAYS = (
+    ("add uplift = true to the load", "set Uplift to yes in the load's form (F4 Loads)"),
+    ("mark a load that really pushes up uplift = true",
+     "set Uplift to yes for a load that really pushes up (F4 Loads)"),
+    ('write basis = "first-yield" under [criteria]', "pick Basis: first-yield (F7 Criteria)"),
+)
+
+
 def in_words(text: str) -> str:
-    """'supports[1].at' -> 'support 2 at': rows counted from 1 as the lists show them."""
+    """'supports[1].at' -> 'support 2 at': rows counted from 1 as the lists show them; and
+    a key the message says to write, where this UI has a control for it, named as the
+    control."""
     text = _ROW_KEY.sub(lambda m: f"{m.group(1)[:-1]} {int(m.group(2)) + 1}", text)
+    for said, here in _UI_WAYS:
+        text = text.replace(said, here)
     return re.sub(r"\b(support|load) (\d+)\.(\w+)", r"\1 \2 \3", text)
 
 
@@ -539,6 +552,23 @@ class SpanView(RowsView):
         return ""
 
 
+_VALUE_EXAMPLES = {  # the Value field's placeholder for each load type, in the job's units
+    "us": {"point": "e.g. -300 lbf", "moment": "e.g. 150 lbf*ft (+ counterclockwise)",
+           "uniform": "e.g. -60 lbf/ft or -50 psf", "linear": "e.g. 0 lbf/ft",
+           "end": "e.g. -60 lbf/ft"},
+    "si": {"point": "e.g. -1.5 kN", "moment": "e.g. 0.2 kN*m (+ counterclockwise)",
+           "uniform": "e.g. -0.9 kN/m or -2.4 kPa", "linear": "e.g. 0 kN/m",
+           "end": "e.g. -0.9 kN/m"},
+}
+
+
+def _value_example(kind: str, session) -> str:
+    """What the Value field suggests for a load of `kind` (a couple is not a force)."""
+    units_ = session.doc.get("units")
+    examples = _VALUE_EXAMPLES["si" if units_ == "si" else "us"]
+    return examples.get(kind, examples["point"])
+
+
 class LoadsView(RowsView):
     title = "Loads"
     table = "loads"
@@ -646,6 +676,9 @@ class LoadsView(RowsView):
                 if f.key == "load.value":
                     f.query_one(".field-label").update(
                         "Start value" if kind == "linear" else "Value")
+                    f.input.placeholder = _value_example(kind, session)
+                elif f.key == "load.value2":
+                    f.input.placeholder = _value_example("end", session)
         self.show_field_messages(session.evaluation, {
             "load.at": f"loads[{i}].at", "load.start": f"loads[{i}].start",
             "load.end": f"loads[{i}].end",
