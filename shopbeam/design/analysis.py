@@ -245,11 +245,14 @@ def analyze(job: Job) -> Result:
     sol = entered = sound_solution(job)
 
     shown, state_sol, state_words, envelope = "", None, "", ()
+    # one state set for every rule that reads the load states: its unit solutions, wheel
+    # variants and influence data are worked out once
+    ss = loading.state_set(job) if loading.needs_states(job) or fatigue.given(job) else None
     if loading.needs_states(job):
         # patterns, moving loads or impact: the checks cover every load state. The numbers
         # shown are the loads as entered, except with moving loads (the entered loads do
         # not include them): then the state that governs is shown
-        ev = loading.evaluate(job, 1.0)
+        ev = loading.evaluate(job, 1.0, ss=ss)
         checks = list(ev.checks)
         envelope = ev.reactions
         gov = max(checks, key=lambda c: c.ratio)
@@ -279,10 +282,10 @@ def analyze(job: Job) -> Result:
         checks = run_checks(job, sol)
     st = strengths(job)
     if fatigue.given(job):  # the fatigue limit state at the loads as entered (k = 1)
-        c = fatigue.fatigue_check(job, st, loading.state_set(job), 1.0)
+        c = fatigue.fatigue_check(job, st, ss, 1.0)
         checks = list(checks) + ([c] if c is not None else [])
-    unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment) \
-        + span_top_unchecked(job, st, sol.moment)
+    unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment, ss) \
+        + span_top_unchecked(job, st, sol.moment, ss)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
         + braces_note(job, st, sol.moment) + couple_notes(job, entered)
     # every limit state not checked is named in the report, as on the label and in the JSON
@@ -830,7 +833,7 @@ def pattern_span_top(fl, l1: float, ss, env, a: float, b: float
     return min(fl.cap, cb * l1) / fl.omega, cb, mmax
 
 
-def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
+def span_top_unchecked(job: Job, st, moment, ss=None) -> list[Unchecked]:
     """Loads on the top flange of an unbraced length between braces, where that loading would
     lower the bending strength below the figure checked: listed; `capacity` posts no rating
     where the moment at the rated load would exceed the lower strength. Wheels rolling on
@@ -842,7 +845,9 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
     # with a wheel set, every length (wheels rolling in it, or static loads on its top that
     # the wheels' moment adds to) is judged over the wheel positions
     rolling = list(limits) if job.moving else []
-    worst = moving_top_worst(job, st, loading.state_set(job), 1.0, rolling) if rolling else {}
+    if rolling or any(ld.patterned for ld in job.loads):
+        ss = ss or loading.state_set(job)  # the caller's, when it has one
+    worst = moving_top_worst(job, st, ss, 1.0, rolling) if rolling else {}
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     if worst == NOT_JUDGED:
         out.append(Unchecked(
@@ -868,7 +873,6 @@ def span_top_unchecked(job: Job, st, moment) -> list[Unchecked]:
             where = ", worst" + rolling_where(jb, p)
         elif any(ld.patterned for ld in job.loads):  # every pattern, not one state's
             if env is None:
-                ss = loading.state_set(job)
                 env = (ss, loading.Envelopes(ss, 1.0))
             top, cb, mmax = pattern_span_top(fl, l1, env[0], env[1], a, b)
         else:
@@ -1039,7 +1043,7 @@ def hogging_demands(job: Job, st, ss, k: float, limits
     return [(a, b, allow) + got[a, b][:2] for a, b, allow in limits], big
 
 
-def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
+def braced_hogging(job: Job, st, moment, ss=None) -> list[Unchecked]:
     """`braced = true` holds the member all along, but what shops brace it with (a deck,
     boards, sheeting) sits on the top flange or edge. Where the moment hogs, the bottom one
     is in compression, and between the supports nothing holds it: its lateral-torsional
@@ -1052,7 +1056,7 @@ def braced_hogging(job: Job, st, moment) -> list[Unchecked]:
     if not limits:
         return []
     if loading.needs_states(job):
-        dem, big = hogging_demands(job, st, loading.state_set(job), 1.0, limits)
+        dem, big = hogging_demands(job, st, ss or loading.state_set(job), 1.0, limits)
         lo = min(dem, key=lambda d: d[3])
         if not (big > 0 and lo[3] < -0.01 * big):
             return []
