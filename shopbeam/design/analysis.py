@@ -310,10 +310,11 @@ def member_notes(job: Job) -> list[str]:
 def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     """A cantilever unbraced at its tip: Lb is its length with Cb = 1.0 (AISC 360-16 F1),
     which assumes the load at the shear centre. Loads bearing on the top flange destabilise
-    it: the effective length factors for a tip free to twist are about 1.4 for a built-in
-    root and 2.5 for an overhang past a support (SSRC Guide / BS 5950-1 Table 14, from
-    memory); the ratio at that length is given as a caution, from the same demand as the
-    bending check (impact and load states included) when that check falls in the span."""
+    it: the effective length factor for a tip free to twist is about 2.5 (`TOP_LOAD_K`: a
+    root held against lateral movement and twist, as Lb = L takes it, or an overhang past a
+    support; SSRC Guide / BS 5950-1 Table 14, from memory); the ratio at that length is given
+    as a caution, from the same demand as the bending check (impact and load states included)
+    when that check falls in the span."""
     st = strengths(job, beam=sol.beam)
     fl = st.flexure
     if fl.ltb is None or fl.stress_s is not None or job.braced or job.restrained:
@@ -327,7 +328,7 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
         held = [s.at for s in job.supports if s.takes_force]
         root = a if any(abs(h - a) <= tol for h in held) else b
         fixed = any(s.kind == "fixed" and abs(s.at - root) <= tol for s in job.supports)
-        k = 1.4 if fixed else 2.5
+        k = TOP_LOAD_K
         mmax = sol.moment.extremes(a, b).abs_max
         for c in checks:
             if c.name == "bending" and c.at is not None and a - tol <= c.at <= b + tol:
@@ -342,16 +343,29 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
                 f"Span {units.fmt(a, 'length', job.units)} to "
                 f"{units.fmt(b, 'length', job.units)} is not braced against twist at its "
                 "supports (springs or hangers that do not brace)")
+        lo, hi = _apart_ratios(mmax / top, mmax / now)
         out.append(f"{what}: checked with "
                    f"Lb = its length and Cb = 1.0 ({cite}), loads at the shear centre. "
                    f"If the loads bear on the top flange (destabilising), the effective length "
-                   f"is about {k:g} x L ({'built-in' if fixed else 'over a support'} root, "
-                   f"SSRC Guide / BS 5950-1 Table 14, from memory): bending ratio "
-                   f"{mmax / top:.2f} instead of {mmax / now:.2f}. "
+                   f"is about {k:g} x L ("
+                   + ("built-in root held against lateral movement and twist" if fixed else
+                      "root over a support")
+                   + ", SSRC Guide / BS 5950-1 Table 14, from memory): bending ratio "
+                   f"{lo} instead of {hi}. "
                    + ("Brace the tip (beam.braces)" if ends < 2 else
                       "Brace it at its supports (brace = true where they hold both flanges)")
                    + " or hang the load below the shear centre.")
     return out
+
+
+def _apart_ratios(a: float, b: float) -> tuple[str, str]:
+    """Two ratios shown with enough digits to differ ("0.193 instead of 0.188", not "0.19
+    instead of 0.19")."""
+    for d in range(2, 6):
+        x, y = f"{a:.{d}f}", f"{b:.{d}f}"
+        if x != y:
+            return x, y
+    return x, y
 
 
 def unchecked_for(job: Job, st=None) -> list[Unchecked]:
@@ -584,9 +598,12 @@ def _rating_flexure(st):
 
 
 # Effective length of a cantilever unbraced at its tip with the load on its top flange, which
-# destabilises it: about 1.4 L for a built-in root and 2.5 L for an overhang past a support
-# (SSRC Guide / BS 5950-1 Table 14, from memory; see cantilever_notes).
-TOP_LOAD_K = {True: 1.4, False: 2.5}
+# destabilises it: 2.5 L where the root holds the member against lateral movement and twist,
+# the root the bending check's Lb = L (Cb 1.0) takes, and for an overhang past a support (SSRC
+# Guide / BS 5950-1 Table 14, from memory). 1.4 L needs a root that also stops the member
+# turning on plan, which an arm or bracket on an upright that can twist does not give, and
+# nothing in a job says it is so; see cantilever_notes.
+TOP_LOAD_K = 2.5
 
 
 def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float, float]]:
@@ -607,8 +624,7 @@ def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float
             continue  # every load hangs below the shear centre: not destabilising
         held = [s.at for s in job.supports if s.takes_force]
         root = a if any(abs(h - a) <= tol for h in held) else b
-        fixed = any(s.kind == "fixed" and abs(s.at - root) <= tol for s in job.supports)
-        k = TOP_LOAD_K[fixed]
+        k = TOP_LOAD_K
         now = min(fl.cap, l1)
         top = min(fl.cap, fl.ltb1(k * (b - a))[0])
         if top < now * (1 - 1e-9):
