@@ -45,11 +45,12 @@ unbraced length of either flange anywhere (conservative). With patterned loads t
 the largest over every pattern (`moments`).
 
 Bearing length lb comes from the job (``bearing`` on a support or a point load, ``beam.bearing``
-for all). When it is missing: a support reaction within d of the member end of an I-shape or
-channel takes lb = k (kdes), the least AISC 360-16 J10.2 lets an end beam reaction take ("lb
-not less than k for end beam reactions", from memory); a trolley wheel bears at a point,
-lb = 0; every other force takes lb = 0 (a knife edge: the lowest strength, conservative).
-The check says which. Every check is linear in the concentrated force, so the capacity search scales
+for all). When it is missing: in web local yielding a support reaction within d of the member
+end of an I-shape or channel takes lb = k (kdes), the least AISC 360-16 J10.2 lets an end
+beam reaction take ("lb not less than k for end beam reactions", from memory); that floor is
+J10.2's own, so web crippling (J10.3, which has none) takes lb = 0 there; a trolley wheel
+bears at a point, lb = 0; every other force takes lb = 0 (a knife edge: the lowest strength,
+conservative). The check says which. Every check is linear in the concentrated force, so the capacity search scales
 it exactly.
 """
 
@@ -253,7 +254,8 @@ def applies(sec) -> str:
 
 def end_reaction_default(f: Force, end: float, d: float) -> bool:
     """True when lb is not given and f is an end beam reaction (a support within d of the
-    member end): lb = k then (AISC 360-16 J10.2, from memory)."""
+    member end): lb = k then in web local yielding (AISC 360-16 J10.2, from memory; J10.3's
+    web crippling has no such floor and takes lb = 0)."""
     return f.bearing is None and f.support and end <= d
 
 
@@ -289,9 +291,9 @@ def _limit_states(sec, mat, length: float, f: Force, lifting: bool = False):
     if kind == "web":
         webs = 2 if sec.shape == "double-channel" else 1
         tw, tf, dd, k = d["tw"], d["tf"], d["d"], d["kdes"]
-        if end_reaction_default(f, end, dd):
-            lb = k  # AISC 360-16 J10.2: lb not less than k for end beam reactions
-        rn, eq = web_local_yielding(fy, tw, k, lb, end, dd)
+        # AISC 360-16 J10.2: lb not less than k for end beam reactions (yielding only)
+        lb_y = k if end_reaction_default(f, end, dd) else lb
+        rn, eq = web_local_yielding(fy, tw, k, lb_y, end, dd)
         out.append(("web local yielding", webs * rn, eq, OMEGA_WLY, "AISC 360-16 J10.2",
                     {"tw": tw, "k": k, "d": dd, "webs": webs}))
         if f.pulls:
@@ -602,7 +604,7 @@ def sizing_allowables_many(job, secs, mats, items):
                     else:
                         root = np.sqrt(e_ * f_y * tf / tw)
                         r = (tw / tf) ** 1.5
-                        ld = lbw / dd
+                        ld = lb / dd  # J10.3 has no floor of k at an end reaction
                         rn = np.where(end >= dd / 2, 0.80 * tw**2 * (1 + 3 * ld * r) * root,
                                       np.where(ld <= 0.2, 0.40 * tw**2 * (1 + 3 * ld * r) * root,
                                                0.40 * tw**2 * (1 + (4 * ld - 0.2) * r) * root))
@@ -635,7 +637,7 @@ def sizing_allowables_many(job, secs, mats, items):
 def _check(job, sec, name, ratio, f, rn, eq, omega, clause, extra) -> Check:
     params_lb = f.bearing if f.bearing is not None else 0.0
     end = max(0.0, min(f.at, job.length - f.at))
-    k_end = (applies(sec) == "web" and end_reaction_default(f, end, sec.dims["d"]))
+    k_end = (name == "web local yielding" and end_reaction_default(f, end, sec.dims["d"]))
     if k_end:
         params_lb = sec.dims["kdes"]
     small = (f"{params_lb / units.IN:.4g} in" if job.units == "us"
