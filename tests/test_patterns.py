@@ -320,6 +320,19 @@ def test_live_loads_on_a_span_and_at_its_overhangs_tip_rate_only_when_patterned(
     assert k < 0.5 * loose.factor  # the unpatterned factor was more than twice as high
 
 
+def test_an_unpatterned_live_load_beside_patterned_ones_is_not_counted_on():
+    from shopbeam.design.capacity import capacity
+    # the stock patterned, the stair not: every pattern took the stair as on, and with the
+    # span loaded it holds the span down, so the factor was the stair's relief's (the span
+    # loaded with the stair off is worse). Held, as for unpatterned loads on two spans
+    text = STAIR_LOFT.replace('label = "stock"\n{p}', 'label = "stock"\npatterned = true')
+    half = capacity(parse_job_text(text.format(p="")))
+    assert any("live loads lie on 2 spans and overhangs (the patterned loads' spans among "
+               "them)" in r for r in half.not_rated)
+    both = capacity(parse_job_text(text.format(p="patterned = true")))
+    assert not both.not_rated and both.factor < half.factor
+
+
 def test_the_json_of_a_patterned_bending_check_gives_the_cb_and_mn_its_limit_rests_on():
     # two 20 ft spans of W12x26, 500 lbf/ft patterned, unbraced between the supports: the
     # limit uses Cb (AISC 360-16 F1-1) from the envelope over every pattern; params gave the

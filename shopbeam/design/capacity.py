@@ -386,10 +386,23 @@ def _live_on_spans_unpatterned(job) -> list[str]:
         # overhang the cart runs onto is counted on (its spans are the travel's)
         t0, t1 = job.moving[0].travel
         rolls = {i for i, (a, b, _) in enumerate(segs) if min(b, t1) - max(a, t0) > tol}
-    if len(on | rolls) < 2:
+    pat = set()
+    if on:
+        # patterned loads come and go span by span, but an unpatterned static live load is
+        # taken as on in every pattern: an end bin on an overhang is counted on to hold the
+        # span behind it down while the span is loaded (its spans are the patterned loads')
+        for ld in job.loads:
+            if ld.case != "live" or not ld.patterned or not ld.total_force:
+                continue
+            for i, (a, b, _) in enumerate(segs):
+                if (a - tol < ld.at < b + tol if ld.kind == "point"
+                        else min(b, ld.end) - max(a, ld.start) > tol):
+                    pat.add(i)
+    if len(on | rolls | pat) < 2:
         return []
-    return [f"live loads lie on {len(on | rolls)} spans and overhangs"
+    return [f"live loads lie on {len(on | rolls | pat)} spans and overhangs"
             + (" (the [[moving]] wheels' travel among them)" if rolls - on else "")
+            + (" (the patterned loads' spans among them)" if pat - on - rolls else "")
             + ", the static ones all taken as on at once: "
             "loading only some of them can be worse (a span beside an empty one sags more; "
             "a load on an overhang lifts the span behind it), and a posted load is read as "
