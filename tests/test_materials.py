@@ -384,3 +384,51 @@ def test_a_sweep_of_every_kind_cites_en_for_the_european_kinds_grade():
     note = size(job, "all").material_note
     at = note.index("swept in S235")
     assert "EN 10025-2" in note[at:at + 160] and "Table 2-4" not in note[at:at + 160]
+
+
+W15B = """schema = 1
+title = "Loft beam, glulam values typed in, unbraced, 14 ft"
+tags = ["not-floor", "not-rack"]
+[beam]
+length = "14 ft"
+self_weight = true
+[beam.section]
+shape = "rect-bar"
+width = "1.5 in"
+depth = "11.25 in"
+[beam.material]
+name = "24F-V4 DF glulam"
+e = "1800 ksi"
+fy = "2400 psi"
+density = "35 lb/ft^3"
+{kind}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "14 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-150 lbf/ft"
+"""
+
+
+def test_a_typed_in_material_with_a_wood_stiffness_and_no_kind_is_not_rated():
+    # checked as a metal on first yield it had no beam stability, shear at 0.6 fy and no
+    # bearing: a 1.5 x 11.25 in member unbraced over 14 ft was rated at twice what NDS 2018
+    # 3.3.3 allows (its CL about 0.3). E of wood is under about 3,000 ksi, of a metal over
+    # 6,000 ksi (common practice)
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    job = parse_job_text(W15B.format(kind=""))
+    assert any(p.key == "beam.material.e" and 'kind = "lumber"' in p.message
+               for p in job.warnings)
+    assert not capacity(job).rated
+    # as a wood, it is checked as one (beam stability among its factors)
+    wood = parse_job_text(W15B.format(kind='kind = "lumber"\nfb = "2400 psi"\nfv = "265 psi"\n'
+                                          'fc_perp = "650 psi"').replace('fy = "2400 psi"\n', ""))
+    assert not any(p.key == "beam.material.e" for p in wood.warnings)
+    cap = capacity(wood)
+    assert "CL" in cap.governing.formula

@@ -3766,6 +3766,20 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                        else "check e (steel is 29,000 ksi, aluminium 10,100 ksi), or give a "
                        "lumber size with kind = \"lumber\""), "beam.section")
             return
+        if e < WOOD_E_MAX:
+            # a wood's stiffness (or a plastic's, FRP's) with no kind is checked as a metal
+            # on first yield: no beam stability (NDS 3.3.3 CL), shear at 0.6 fy instead of
+            # Fv, no bearing across the grain; a glulam's values typed in land here
+            r.hold(f"the typed-in material has e = {units.fmt(e, 'stress', system)}, a wood's "
+                   "stiffness (or a plastic's or FRP's), but no kind, so it is checked as a "
+                   "metal on first yield: a wood's beam stability (NDS 2018 3.3.3, CL), its "
+                   "shear (Fv, well under 0.6 fy) and its bearing across the grain (3.10) "
+                   "are not checked. For a wood give kind = \"lumber\" with fb, fv and "
+                   "fc_perp (its reference values), or use a built-in grade such as "
+                   "\"DF-L-2\"; a plastic or FRP member needs its maker's design method",
+                   "beam.material.e",
+                   "a typed-in material with a wood's stiffness and no kind is checked as a "
+                   "metal on first yield (no beam stability, wood shear or bearing)")
     wrong = catalog.not_made_in(section, material)
     if wrong:
         r.error(wrong, "beam.section")

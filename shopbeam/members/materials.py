@@ -387,8 +387,10 @@ def resolve_material(spec, key: str = "beam.material") -> Material:
         hint = f"did you mean {' or '.join(repr(s) for s in seen)}? " if seen else ""
         if re.fullmatch(r"\s*\d{2}F-[VE]\d+\w*\s*", str(spec), re.IGNORECASE):
             hint = ("that is a glued-laminated timber (glulam) stress class, and glulam is not "
-                    "built in: give its published design values in a table (e, fy and "
-                    "density) or pick a sawn grade or LVL; ")
+                    "built in nor rated (its volume factor, NDS 2018 5.3.6, is not checked): "
+                    "pick a sawn grade or LVL, or have the glulam member checked; a table of "
+                    "its values needs kind = \"lumber\" with fb, fv and fc_perp, else it "
+                    "is checked as a metal on first yield; ")
         raise InputError(f"unknown material {spec!r}; {hint}built-in materials are "
                          f"{', '.join(keys)} (or give a table with e, fy and density)", key)
     if isinstance(spec, Mapping):
