@@ -432,3 +432,57 @@ def test_a_typed_in_material_with_a_wood_stiffness_and_no_kind_is_not_rated():
     assert not any(p.key == "beam.material.e" for p in wood.warnings)
     cap = capacity(wood)
     assert "CL" in cap.governing.formula
+
+
+ALU_BAR = """schema = 1
+title = "Aluminium hanger bar, 6061-T6 flat bar 3 x 3/8 on edge, 3 ft"
+notes = "{notes}"
+tags = ["not-floor", "not-rack"]
+[beam]
+length = "3 ft"
+material = "6061-T6"
+self_weight = false
+restrained = true
+{welded}
+[beam.section]
+shape = "rect-bar"
+depth = "3 in"
+width = "0.375 in"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "3 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "1.5 ft"
+value = "-1000 lbf"
+label = "gearbox"
+[criteria]
+deflection = "L/180"
+"""
+
+
+def test_aluminium_said_to_be_welded_is_not_rated_until_the_key_says_so():
+    # a lug welded at mid-span puts the heat-affected zone (6061-T6 Ftyw 15 ksi against Fty
+    # 35 ksi, ADM 2015 Table A.3.4, from memory) at the largest moment: rated on the
+    # unwelded strength the label was about twice what the weld zone carries
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    said = "A lug welded on top at mid-span takes the load."
+    job = parse_job_text(ALU_BAR.format(notes=said, welded=""))
+    assert any("words say welded" in p.message for p in job.warnings)
+    assert not capacity(job).rated
+    welded = capacity(parse_job_text(ALU_BAR.format(notes=said, welded="welded = true")))
+    assert welded.rated
+    plain = capacity(parse_job_text(ALU_BAR.format(notes="Bolted lug at mid-span.", welded="")))
+    assert plain.rated and welded.factor < 0.6 * plain.factor
+    # false beside the words: taken as said, with a warning
+    kept = parse_job_text(ALU_BAR.format(notes=said, welded="welded = false"))
+    assert any(p.key == "beam.welded" and "words say welded" in p.message for p in kept.warnings)
+    assert capacity(kept).rated
+    # a denial is not a weld
+    assert capacity(parse_job_text(ALU_BAR.format(notes="No welds on the bar.",
+                                                  welded=""))).rated

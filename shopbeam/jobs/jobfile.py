@@ -3585,6 +3585,39 @@ def _aluminium_fixed_end(r: _Reader, beam: dict, material, supports, system: str
            "end is weaker where the moment is largest. Write welded = true or false")
 
 
+_WELD_WORDS = re.compile(r"\b(?:(?:tig|mig)[- ]?)?weld(?:s|ed|ing|ments?)?\b", re.IGNORECASE)
+
+
+def _aluminium_weld_words(r: _Reader, beam: dict, material, title, notes, tags, raw_loads,
+                          system: str) -> None:
+    """An aluminium member whose words say welded ("a lug welded on top at mid-span", "ends
+    welded to the frame") and no `welded` key: welding anneals the metal near the weld to
+    well under half its temper's yield (6061-T6 Fty 35 ksi, welded Ftyw 15 ksi: ADM 2015
+    Table A.3.3/A.3.4, from memory), so a figure on the unwelded strength may be twice what
+    the weld zone carries. Held until the job says which, as the wood's wet words are;
+    `welded = false` beside the words is warned (the words may be about something else)."""
+    if getattr(material, "kind", "") != "aluminum" or not getattr(material, "fy_welded", None):
+        return
+    said = _words_found(_WELD_WORDS, title, notes, tags, raw_loads)
+    if not said:
+        return
+    weak = units.fmt(material.fy_welded, "stress", system)
+    strong = units.fmt(material.fy, "stress", system)
+    where = "; ".join(said[:2])
+    if "welded" not in beam:
+        r.hold(f"the job's words say welded ({where}) but [beam] has no welded key: a weld on "
+               f"an aluminium member anneals it nearby (yield {weak} against {strong} "
+               "unwelded, ADM 2015 Table A.3.3/A.3.4, from memory), and the checks used the "
+               "unwelded strength. Write welded = true to check it at the welded strength, "
+               "or welded = false if no weld is within 1 in of the highly stressed parts",
+               "beam", f"the words say welded ({where}) on an aluminium member with no welded "
+               "key: write welded = true or false")
+    elif beam.get("welded") is False:
+        r.warn(f"welded = false, but the job's words say welded ({where}): a weld within 1 in "
+               f"of the highly stressed parts weakens aluminium to {weak} yield (ADM 2015, from "
+               "memory); keep welded = false only if every weld is away from them", "beam.welded")
+
+
 def _rack_fixed_ends(r: _Reader, tags, supports, length) -> None:
     """A rack beam between uprights with a fixed end: its connector (a clip or hook into the
     upright) is semi-rigid at best, rated by test (ANSI MH16.1, from memory), and far from the
@@ -4509,6 +4542,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "6061-T6, is weakened by welding in these checks; the welds themselves are not "
                "checked", "beam.welded")
     _aluminium_fixed_end(r, beam, material, supports, system)
+    _aluminium_weld_words(r, beam, material, title, notes, tags, raw_loads, system)
     if length is not None:
         for key, message in geometry_problems(length, supports, loads,
                                               lambda x: units.fmt(x, "length", system)):
