@@ -626,6 +626,26 @@ def test_a_point_load_on_an_aluminium_or_typed_in_web_is_not_rated(material):
     assert web and web[0].blocks_rating and "support reactions" in web[0].reason
 
 
+ALU_ANGLE = ('[beam.section]\nshape = "angle"\ndepth = "2 in"\nwidth = "2 in"\n'
+             'thickness = "0.25 in"')
+
+
+@pytest.mark.parametrize("material", ['material = "6061-T6"', TYPED_METAL, 'material = "A36"'])
+@pytest.mark.parametrize("section, name", [
+    (ALU_ANGLE, "stem or leg local yielding under a concentrated force"),
+    (ALU_I + '\naxis = "weak"', "local bearing of the flanges (weak axis)")])
+def test_a_point_load_on_a_leg_or_flange_edge_is_not_rated_in_any_metal(material, section,
+                                                                        name):
+    # a leg or a flange edge under a point load bends or crushes locally, and no check of it
+    # is made (AISC 360-16 J10 is written for webs; ADM 2015 chapter J, from memory): steel
+    # was held, aluminium and typed-in metals were rated on the checks made
+    cap = capacity(parse_job_text(simple_span(f"restrained = true\n{material}\n{section}", 4)))
+    assert any(r.startswith(name) for r in cap.not_rated), cap.not_rated
+    spread = capacity(parse_job_text(simple_span(f"restrained = true\n{material}\n{section}", 4,
+                                                 uniform_load(4, "-20 lbf/ft"))))
+    assert not any(r.startswith(name) for r in spread.not_rated)
+
+
 @pytest.mark.parametrize("profile, blocked", [("powered-monorail", True),
                                               ("hand-geared-monorail", False)])
 def test_first_yield_i_beam_under_a_powered_hoist_is_not_rated_for_the_lateral_force(

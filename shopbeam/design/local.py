@@ -736,6 +736,50 @@ def _round_wall(job, clause: str) -> Unchecked:
                      clause, blocks_rating=bool(points or seats))
 
 
+def _open_local_applies(sec) -> bool:
+    """A member whose flange edges, stem or leg take a concentrated force: weak-axis I-shapes
+    and channels, tees and angles (no local check is made for any of them)."""
+    return (sec.shape in ("i-beam", "channel") and sec.axis == "weak") or \
+        sec.shape in ("tee", "angle")
+
+
+def _open_local(job, sec, clause: str) -> list[Unchecked]:
+    """The local limit state under concentrated forces of a member `_open_local_applies` to,
+    not checked: blocking where a live load comes through it (the same for every metal)."""
+    points = _span_forces(job)
+    if sec.shape in ("i-beam", "channel") and sec.axis == "weak":
+        return [Unchecked("local bearing of the flanges (weak axis)",
+                          "concentrated forces on a member bent about its weak axis load "
+                          "the flange edges; no check is made"
+                          + (f"; {', '.join(points)} bear on a flange edge between the "
+                             "supports, which can bend or crush first, so no rating is "
+                             "posted (spread the load with a plate across both flanges, or "
+                             "have it checked)" if points else ""),
+                          clause, blocks_rating=bool(points))]
+    # a tee or an angle: a point load or a wheel on a single leg or stem bends it locally,
+    # and a support reaction bears on a tee's stem (its tip, or through the flange with the
+    # stem up): none is computed (J10 is written for I-shapes and channels), so no rating
+    # rests on a live load that comes through them; dead load alone on the supports is a
+    # caution. An angle bears on its seat across a flat leg, which is taken as sound there
+    # (a caution, common practice)
+    seats = _live_bearings(job) if sec.shape == "tee" else []
+    part = "stem" if sec.shape == "tee" else "leg"
+    return [Unchecked("stem or leg local yielding under a concentrated force",
+                      "concentrated forces at supports and point loads of tees and "
+                      "angles are not checked locally"
+                      + (f"; {', '.join(points)} bear on a single leg or stem, which "
+                         "can bend or yield locally first" if points else "")
+                      + (f"; the live load comes down through {units.and_words(seats)}, "
+                         f"whose reactions bear on the {part}"
+                         + (" (its tip, or the flange with the stem up)"
+                            if part == "stem" else "")
+                         + ", which can yield or cripple there first" if seats else "")
+                      + ("; so no rating is posted (bear the member on a plate or "
+                         "bracket across it, spread the load the same way, or have "
+                         f"the {part} checked)" if points or seats else ""),
+                      clause, blocks_rating=bool(points or seats))]
+
+
 def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
     """Aluminium and typed-in metals: the web or tube wall under a concentrated force is not
     checked (the J10 and K2 rules here are for steel). A point load or a wheel set on the span,
@@ -746,6 +790,10 @@ def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
         return [_round_wall(job, "ADM 2015 chapter J, concentrated forces (from memory)"
                             if mkind == "aluminum" else "AISC 360-16 K2, Table K2.1 (written "
                             "for steel, not applied to a typed-in metal)")]
+    if _open_local_applies(sec):  # as for steel: flange edges, stems and legs
+        return _open_local(job, sec, "ADM 2015 chapter J, concentrated forces (from memory)"
+                           if mkind == "aluminum" else "AISC 360-16 J10 (written for steel, "
+                           "not applied to a typed-in metal)")
     if not ((sec.shape in ("i-beam", "channel") and sec.axis == "strong")
             or sec.shape == "rect-tube"):
         return []
@@ -808,40 +856,8 @@ def local_unchecked(job, sec=None) -> list[Unchecked]:
             "I-beams), so no rating is posted; hang it from a lug plate welded under the web "
             "(lug = true on the load), or have the flange checked",
             "CMAA 74 local flange bending; AISC 360-16 J10", blocks_rating=True))
-    elif sec.shape in ("i-beam", "channel") and sec.axis == "weak":
-        points = _span_forces(job)
-        out.append(Unchecked("local bearing of the flanges (weak axis)",
-                             "concentrated forces on a member bent about its weak axis load "
-                             "the flange edges; no check is made"
-                             + (f"; {', '.join(points)} bear on a flange edge between the "
-                                "supports, which can bend or crush first, so no rating is "
-                                "posted (spread the load with a plate across both flanges, or "
-                                "have it checked)" if points else ""),
-                             "AISC 360-16 J10", blocks_rating=bool(points)))
+    elif _open_local_applies(sec):
+        out += _open_local(job, sec, "AISC 360-16 J10")
     elif sec.shape in ("round-tube", "pipe"):
         out.append(_round_wall(job, "AISC 360-16 K2, Table K2.1"))
-    elif sec.shape in ("tee", "angle"):
-        # a point load or a wheel on a single leg or stem bends it locally, and a support
-        # reaction bears on a tee's stem (its tip, or through the flange with the stem up):
-        # none is computed (J10 is written for I-shapes and channels), so no rating rests on a
-        # live load that comes through them; dead load alone on the supports is a caution.
-        # An angle bears on its seat across a flat leg, which is taken as sound there (a
-        # caution, common practice)
-        points = _span_forces(job)
-        seats = _live_bearings(job) if sec.shape == "tee" else []
-        part = "stem" if sec.shape == "tee" else "leg"
-        out.append(Unchecked("stem or leg local yielding under a concentrated force",
-                             "concentrated forces at supports and point loads of tees and "
-                             "angles are not checked locally"
-                             + (f"; {', '.join(points)} bear on a single leg or stem, which "
-                                "can bend or yield locally first" if points else "")
-                             + (f"; the live load comes down through {units.and_words(seats)}, "
-                                f"whose reactions bear on the {part}"
-                                + (" (its tip, or the flange with the stem up)"
-                                   if part == "stem" else "")
-                                + ", which can yield or cripple there first" if seats else "")
-                             + ("; so no rating is posted (bear the member on a plate or "
-                                "bracket across it, spread the load the same way, or have "
-                                f"the {part} checked)" if points or seats else ""),
-                             "AISC 360-16 J10", blocks_rating=bool(points or seats)))
     return out
