@@ -1371,6 +1371,23 @@ def test_fire_retardant_or_incised_lumber_is_not_rated(title, held):
     assert capacity(parse_job_text(text)).rated is not held
 
 
+@pytest.mark.parametrize("title, held", [
+    ("Shelf joist, pressure-treated Hem-Fir", True), ("PT 2x10 deck joist", True),
+    ("ACQ treated lumber rail", True), ("Treated joist, PT, not incised", False),
+    ("Shelf joist, 8 pt spacing", False), ("Shelf for heat-treated parts", False)])
+def test_preservative_treated_lumber_is_not_rated_until_said_not_incised(title, held):
+    # treated dimension lumber is often incised (common practice), and incised lumber takes
+    # Ci 0.80 on Fb (NDS 2018 4.3.8, from memory): rated as plain lumber it was 25 % high
+    from shopbeam.design.capacity import capacity
+
+    text = job_text(section="2x10", material="DF-L-2").replace('title = "shelf"',
+                                                               f'title = "{title}"')
+    assert capacity(parse_job_text(text)).rated is not held
+    if held:  # the tag says the stock has no incisions
+        tagged = text.replace("\n[beam]", '\ntags = ["not-incised"]\n[beam]', 1)
+        assert tagged != text and capacity(parse_job_text(tagged)).rated
+
+
 @pytest.mark.parametrize("key, value", [("selfweight", "false"), ("case", '"dead"')])
 def test_a_slip_of_a_known_key_in_beam_keeps_that_keys_own_rule(key, value):
     # selfweight = false misspelt leaves the own weight in (on the safe side): warned, as

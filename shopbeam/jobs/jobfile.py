@@ -4018,6 +4018,16 @@ _WET_PLACES = re.compile(
 # factors shopbeam does not apply (NDS 2018 2.3.4, 4.3.8), so it is not rated
 _TREATED_WORDS = re.compile(r"\b(fire[- ]?retardant(?:[- ]treated)?|frtw?|"
                             r"incised|incising)\b", re.IGNORECASE)
+# Words that say a wood member is preservative treated: such dimension lumber is often
+# incised to take the treatment (Hem-Fir and Douglas Fir-Larch nearly always, common
+# practice), and incised lumber takes Ci (NDS 2018 4.3.8), so it is held until the tags say
+# the stock is not incised (or untreated: the words are about something else)
+_PRESERVED_WORDS = re.compile(
+    r"\b(pressure[- ]?treated|preservative[- ]?treated|wolmanized|"
+    r"treated (?:lumber|wood|timber|stock|joists?|boards?|posts?|planks?|2x\d+|4x\d+)|"
+    r"(?:cca|acq|mca|ca-?[bc])(?:[- ]treated)?)\b", re.IGNORECASE)
+_PT = re.compile(r"\bPT\b")  # "PT" in capitals: pressure treated (not "pt", a point)
+NOT_INCISED = "not-incised"  # the tag that says preservative-treated stock is not incised
 _HOT_WORDS = re.compile(
     r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?(?! parts?)|"
     r"heat[- ]treat(?!ed (?:pallets?|parts?|stock|steel|bars?))\w*|smelter|saunas?|"
@@ -4087,6 +4097,24 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
                "\"untreated\"",
                "title", f"the job says {treated!r}: shopbeam does not apply the treatment "
                "factors of fire-retardant or incised lumber")
+    texts = [title or "", notes or "", *(t for t in tags if isinstance(t, str))]
+    kept = {normal_tag(t) for t in tags}
+    preserved = "" if treated else next(
+        (m.group(0) for m in [*(_search(_PRESERVED_WORDS, t) for t in whole),
+                              *(_PT.search(t) for t in texts)] if m), "")
+    said_not = any(re.search(r"\b(?:not|no|non|un)[- ]?incis\w*", t, re.IGNORECASE)
+                   for t in whole)  # "preservative treated (ACQ), not incised"
+    if preserved and not said_not and not kept & {"untreated", NOT_INCISED}:
+        r.hold(f"the job says {preserved!r}: preservative-treated dimension lumber is often "
+               "incised to take the treatment (Hem-Fir and Douglas Fir-Larch nearly always), "
+               "and incised lumber takes the incising factor Ci (NDS 2018 4.3.8: 0.80 on Fb, "
+               "Ft, Fc, Fv and 0.95 on E, from memory), which shopbeam does not apply, so "
+               "checked as plain lumber it may be rated too high and no rating is posted. If "
+               "the stock has no incisions (the small slits along its faces), add the tag "
+               "\"not-incised\" and it is checked at the untreated values; if the words are "
+               "about something else, add the tag \"untreated\"",
+               "title", f"the job says {preserved!r}: treated lumber is often incised (Ci, "
+               "NDS 4.3.8, not applied). Add the tag \"not-incised\" if it is not")
 
 
 def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="",
