@@ -371,6 +371,9 @@ def test_a_linear_load_is_posted_as_its_total_with_its_end_intensities_and_patte
         '[[loads]]\ntype = "linear"', '[[supports]]\nat = "24 ft"\ntype = "roller"\n'
         '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\npatterned = true\n'
         '[[loads]]\ntype = "linear"')
+    # every live load patterned: one left on in every pattern beside them is not rated
+    two = two.replace('"-100 lbf/ft"]\n', '"-100 lbf/ft"]\npatterned = true\n').replace(
+        'value = "-100 lbf"\n', 'value = "-100 lbf"\npatterned = true\n')
     words = _flat(capacity(parse_job_text(two)))
     assert "rated on any or all of their spans" in words
 

@@ -234,10 +234,25 @@ def test_a_cantilever_arm_loaded_on_its_top_flange_is_rated_no_higher_than_that_
     # checked per AISC 360-16 F1 with Cb 1.0 and Lb = L (loads at the shear centre); loads on
     # the top flange of a tip free to twist act over about 2.5 L (SSRC Guide / BS 5950-1
     # Table 14, from memory: a root held against lateral movement and twist, as Lb = L takes):
-    # at the factor found the arm's moment passes that lower strength, so nothing is posted
+    # at the factor the bending check allows, the arm's moment passes that lower strength, so
+    # the rating is on it. Hand, W6x9 (AISC Shapes Database v15.0: Sx 5.56 in^3, rts 1.06 in,
+    # J 0.0405 in^4, ho 5.69 in), Lb = 2.5 x 72 = 180 in past Lr: AISC 360-16 F2-4, Cb 1.0,
+    # Fcr = pi^2 E / (Lb/rts)^2 sqrt(1 + 0.078 J / (Sx ho) (Lb/rts)^2) = 19.55 ksi;
+    # Mn / 1.67 = 19.55 x 5.56 / 1.67 = 65.1 kip*in = 5424 lbf*ft; the arm's moment
+    # (9 + 400 k) lbf/ft x 6^2 / 2 reaches it at k = 0.731
+    import math
+
     cap = capacity(parse_job_text(W_ARM))
-    why = [r for r in cap.not_rated if "with its loads on the top flange" in r]
-    assert why and "2.5 x L" in why[0]
+    assert not [r for r in cap.not_rated if "top flange" in r]  # (held as a rack without
+    # its tag: that rule's own)
+    assert cap.governing.name == "bending, top-flange loads"
+    assert "2.5 x L" in cap.governing.formula
+    x = (180 / 1.06) ** 2
+    fcr = math.pi ** 2 * 29000 / x * math.sqrt(1 + 0.078 * 0.0405 / (5.56 * 5.69) * x)
+    top = fcr * 5.56 / 1.67 * 1000 / 12  # lbf*ft
+    assert cap.factor == pytest.approx((top / 18 - 9) / 400, rel=2e-3)
+    bending = next(c for c in cap.checks if c.name == "bending")
+    assert bending.ratio < 1  # the check at the shear centre allows more
     res = analyze(cap.job)
     assert [u for u in res.unchecked if u.name.startswith("lateral-torsional buckling of a "
                                                           "cantilever") and not u.blocks_rating]
@@ -1057,8 +1072,9 @@ def test_a_cart_rolling_onto_an_unbraced_overhang_is_held_by_the_top_flange_rule
         'travel = ["0 ft", "30 ft"]', 'travel = ["0 ft", "20 ft"]')
     job = parse_job_text(text)
     cap = capacity(job)
-    held = [r for r in cap.not_rated if "cantilever 12 ft to 20 ft" in r]
-    assert not cap.rated and held
+    # rated on that strength: the factor is where the moment over every position reaches it
+    assert not [r for r in cap.not_rated if "cantilever 12 ft to 20 ft" in r]
+    assert cap.governing.name == "bending, top-flange loads"
     st = strengths(job)
     (a, b, _kl, _now, top), = cantilever_top_limits(job, st)
     ss = state_set(job)
@@ -1067,7 +1083,8 @@ def test_a_cart_rolling_onto_an_unbraced_overhang_is_held_by_the_top_flange_rule
     # statics: the cart at the tip, wheels 5 ft and 8 ft out: k x 2000 lbf x 13 ft more
     assert at_k[0] - alone[0] == pytest.approx(
         -cap.factor * 2000 * 13 * 4.4482216152605 * 0.3048, rel=1e-9)
-    assert -at_k[0] > top
+    assert -at_k[0] == pytest.approx(top, rel=1e-9) and -at_k[0] <= top
+    assert cap.governing.demand == pytest.approx(-at_k[0], rel=1e-12)
     # a trolley hung from the bottom flange (a lifting job) does not destabilise it: that
     # rule does not hold it back
     hoist = capacity(parse_job_text(text.replace('tags = ["not-lifting"]', 'tags = ["lifting"]')))
@@ -1178,6 +1195,11 @@ def test_the_rules_that_hold_a_rating_back_take_the_cart_either_way_round(case, 
     assert caps[1].factor == pytest.approx(k, rel=1e-9)
     want = f"{k * figure:.0f} lbf*ft"
     for cap in caps:
+        if case == "overhang":  # rated on the top-flange strength: its moment at k is there
+            g = cap.governing
+            assert g.name == "bending, top-flange loads" and "10 ft to 13 ft" in g.formula
+            assert g.demand == pytest.approx(k * figure * 4.4482216152605 * 0.3048, rel=1e-9)
+            continue
         held = [r for r in cap.not_rated if rule in r]
         assert not cap.rated and held and want in held[0], (held, want)
 

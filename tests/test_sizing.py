@@ -432,3 +432,54 @@ def test_text_ui_size_note_says_heavier_sections_were_screened_only():
     rows, note = size_rows(job, "W", 40)
     assert res.screened_only  # the jib's heavier W shapes: screened only
     assert f"{len(res.screened_only)} heavier ones pass the quick screen" in note
+
+
+MONORAIL = """schema = 1
+title = "Monorail hoist beam, 18 ft, 1 ton electric hoist"
+tags = ["lifting", "monorail"]
+[beam]
+length = "18 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "18 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "9 ft"
+value = "-2000 lbf"
+label = "rated load"
+flange = "bottom"
+wheels = 4
+[[loads]]
+type = "point"
+at = "9 ft"
+value = "-250 lbf"
+label = "hoist and trolley"
+case = "dead"
+flange = "bottom"
+wheels = 4
+[criteria]
+lifting = "powered-monorail"
+"""
+
+
+def test_a_section_whose_rating_is_under_the_loads_entered_does_not_pass():
+    # the hoist passes at the place entered (ratio under 1), but capacity rates it travelling
+    # the member, with Cb 1.0 there: W8x18's factor is under 1, so a sweep that called it
+    # the lightest that passes recommended a beam rated under the hoist it was sized for
+    from shopbeam.design.analysis import analyze
+
+    job = parse_job_text(MONORAIL)
+    assert max(c.ratio for c in analyze(job).checks) <= 1
+    assert capacity(job).factor < 1
+    res = size(job, "W")
+    assert res.lightest is not None and res.lightest.designation != "W8X18"
+    assert all(r.factor >= 1 for r in res.passing)
+    assert capacity(replace(job, section=res.lightest.section)).factor >= 1
+    # and the report says why its figure and the rating's differ
+    said = [c for c in analyze(job).cautions if "checked here at the place entered" in c]
+    assert said and "Cb = 1.0" in said[0]

@@ -304,7 +304,31 @@ def member_notes(job: Job) -> list[str]:
     t = torsion_note(job, job.section)
     if t:
         out.append(t)
+    hook = travelling_hook(job)
+    if hook is not None:
+        # the report checks the hoist where it was entered; capacity and the label take it
+        # at every place along its travel, where its moment diagram moves with it and
+        # bending is checked with Cb = 1.0: the figure posted can be under the loads that
+        # pass here, and a reader comparing the two must know why
+        out.append(f"The hoist ({hook.key}{' ' + repr(hook.label) if hook.label else ''}) is "
+                   f"checked here at the place entered ({units.fmt(hook.at, 'length', job.units)}"
+                   "); capacity and the rating label take it at every place along its travel, "
+                   "with bending there checked at Cb = 1.0 (the moment diagram moves with the "
+                   "hoist), so the load they post can be lower than what passes here")
     return out
+
+
+def travelling_hook(job):
+    """The hook load of a hoist given as a point load at its worst place, or None (none, or
+    hung from a lug under the web: a fixed hoist, which does not travel)."""
+    key = getattr(job, "travelling_hoist", "")
+    if not key or job.moving:
+        return None
+    hook = next((ld for ld in job.loads if ld.key == key), None)
+    if hook is None or hook.kind != "point" or key not in set(job.hung) \
+            or key in set(job.lugs):
+        return None
+    return hook
 
 
 def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:

@@ -27,7 +27,8 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      moving_reactions_off, variant_words,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
-                                       hogging_limits, hogging_remedy, hogging_source,
+                                       travelling_hook, hogging_limits, hogging_remedy,
+                                       hogging_source,
                                        moment_ranges, wheels_count_on_top,
                                        span_top_limits, NOT_JUDGED, moving_top_worst,
                                        pattern_span_top, rolling_where, span_top_strength,
@@ -410,19 +411,6 @@ def _live_on_spans_unpatterned(job) -> list[str]:
             "go span by span, so every arrangement is checked and rated"]
 
 
-def _hook(job):
-    """The hook load of a hoist given as a point load at its worst place, or None (none, or
-    hung from a lug under the web: a fixed hoist, which does not travel)."""
-    key = getattr(job, "travelling_hoist", "")
-    if not key or job.moving:
-        return None
-    hook = next((ld for ld in job.loads if ld.key == key), None)
-    if hook is None or hook.kind != "point" or key not in set(job.hung) \
-            or key in set(job.lugs):
-        return None
-    return hook
-
-
 def travelling(job):
     """A monorail's or jib's hoist given as a point load at its worst place (`Job.
     travelling_hoist`) as the wheel set it is: one axle of the live loads hung at the hook's
@@ -431,7 +419,7 @@ def travelling(job):
     travelling the whole member, or from the mast out to the place given on a jib's boom.
     None where there is no such hoist (`_hook`), or its place has loads that cannot travel
     with it (set on top of the flange, live loads hung beside it): `capacity` then holds."""
-    hook = _hook(job)
+    hook = travelling_hook(job)
     if hook is None:
         return None
     hung, lugs = set(job.hung), set(job.lugs)
@@ -468,7 +456,7 @@ def hoist_travels(job) -> bool:
 
 def hoist_at(job) -> float:
     """Where the travelling hoist's hook load is given (nan where there is none)."""
-    hook = _hook(job)
+    hook = travelling_hook(job)
     return hook.at if hook is not None else math.nan
 
 
@@ -482,7 +470,7 @@ def capacity(job, section=None, ss=None) -> CapacityResult:
         res = capacity(moved, section)
         return replace(res, job=job)
     res = _rate(job, section, ss)
-    hook = _hook(job)
+    hook = travelling_hook(job)
     if hook is not None:  # a travelling hoist whose loads cannot all travel with it
         f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
         res = replace(res, not_rated=res.not_rated + (
@@ -501,6 +489,7 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
     st = strengths(job, sec=section, beam=ss.beam)
     reasons = not_rated_reasons(job, st, ss)
     res = _fatigue_cap(job, section, ss, st, _capacity(job, section, ss, st))
+    res = _cantilever_top_rate(job, section, ss, st, res)
     res = _with_live_off(job, section, ss, st, res)
     return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
                    + _relieving_couples(job, section, res.factor))
@@ -754,29 +743,46 @@ def _travel_words(job, ss) -> str:
             f"{variant_words(job, ss)})")
 
 
-def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
-    """No rating where the rated load, bearing on an unbraced cantilever's top flange, would
-    exceed the lower strength that loading leaves it (`limits`:
-    `analysis.cantilever_top_limits`). The moment in a cantilever or overhang comes from the
-    loads on it alone, so every load on at the factor (patterned spans too) gives its
-    largest; [[moving]] wheels on it are taken at every position of the set
-    (`analysis.moment_ranges`)."""
-    if not limits:
-        return ()
+def _cantilever_top_demands(job, st, limits, ss, k: float) -> list[tuple]:
+    """(start, end, effective length factor, strength as checked, top-flange strength,
+    moment, at, travelling) of each unbraced cantilever of `limits` at the factor k. The
+    moment in a cantilever or overhang comes from the loads on it alone, so every load on at
+    the factor (patterned spans too) gives its largest; [[moving]] wheels on it are taken at
+    every position of the set (`analysis.moment_ranges`)."""
     m = _all_on(ss, k)
-    # [[moving]] wheels on it (or adding to a top load there): every position of the set
     rolls = [(a, b) for a, b, *_ in limits if wheels_count_on_top(job, a, b)]
     ranges = moment_ranges(job, st, ss, k, rolls)[0] if rolls else {}
     out = []
     for a, b, kl, now, top in limits:
-        demand = max(abs(ranges[a, b][0]), abs(ranges[a, b][2])) if (a, b) in ranges \
-            else m.extremes(a, b).abs_max
+        if (a, b) in ranges:
+            lo, hi = ranges[a, b][0], ranges[a, b][2]
+            demand, at = max(abs(lo), abs(hi)), None
+        else:
+            ex = m.extremes(a, b)
+            demand = ex.abs_max
+            at = ex.max_at if abs(ex.max) >= abs(ex.min) else ex.min_at
+        out.append((a, b, kl, now, top, demand, at, (a, b) in ranges))
+    return out
+
+
+def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
+    """No rating where the rated load, bearing on an unbraced cantilever's top flange, would
+    exceed the lower strength that loading leaves it (`limits`:
+    `analysis.cantilever_top_limits`; the moments of `_cantilever_top_demands`). `capacity`
+    rates the job at that strength where it can (`_cantilever_top_rate`), so this is left to
+    say only what cannot be rated so (the dead loads alone past it) and a sizing sweep's
+    rows, whose factor is the batched search's."""
+    if not limits:
+        return ()
+    out = []
+    for a, b, kl, now, top, demand, _at_x, rolled in _cantilever_top_demands(
+            job, st, limits, ss, k):
         if demand > top:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
                        f"loads on the top flange not checked: {_at(k)} "
                        f"its moment {f(demand, 'moment')}"
-                       + (_travel_words(job, ss) if (a, b) in ranges else "")
+                       + (_travel_words(job, ss) if rolled else "")
                        + f" exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
@@ -785,6 +791,67 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                        "\"bottom\"), or choose a section that passes at the lower strength "
                        "(shopbeam size)")
     return tuple(out)
+
+
+TOP_FLANGE_CHECK = "bending, top-flange loads"  # the check `_cantilever_top_rate` adds
+
+
+def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
+    """An unbraced cantilever whose loads bear on its top flange: where the moment at the
+    factor found passes the lower strength that loading leaves it (`analysis.
+    cantilever_top_limits`, effective length about 2.5 L), the factor is lowered to where it
+    reaches it, and that limit state is among the checks at the answer, as the governing one
+    (a rating on the lower strength, not NOT RATED). The moment is linear in k on each
+    length, so its largest is convex in k: one bracketed root from k = 0, where the dead
+    loads alone must pass it (else `_cantilever_top` says why nothing is posted)."""
+    k = res.factor
+    if res.evaluation is None or not math.isfinite(k) or k <= 0:
+        return res
+    limits = cantilever_top_limits(job, st)
+    if not limits:
+        return res
+
+    def worst(kk):
+        got = _cantilever_top_demands(job, st, limits, ss, kk)
+        return max(got, key=lambda g: g[5] / g[4]) if got else None
+
+    g = worst(k)
+    if g is None or g[5] <= g[4]:
+        return res
+    g0 = worst(0.0)
+    if g0[5] >= g0[4]:
+        return res  # the dead loads alone pass it: nothing to post (said as a reason)
+    lo, hi = 0.0, k
+    for _ in range(200):  # bisection to the last float: the ratio is monotone past k = 0
+        mid = 0.5 * (lo + hi)
+        if mid <= lo or mid >= hi:
+            break
+        gm = worst(mid)
+        if gm[5] > gm[4]:
+            hi = mid
+        else:
+            lo = mid
+    k2 = lo
+    g = worst(k2)
+    a, b, kl, now, top, demand, at, rolled = g
+    e = evaluate(job, k2, section, ss, st)
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    c = Check(TOP_FLANGE_CHECK, demand, top, "N*m",
+              f"AISC 360-16 F2 (F1 Cb 1.0) with the effective length of a cantilever loaded "
+              f"on its top flange, about {kl:g} x L over {f(a)} to {f(b)} (SSRC Guide / BS "
+              f"5950-1 Table 14, from memory): M <= {f(top, 'moment')}, against "
+              f"{f(now, 'moment')} with the loads at the shear centre"
+              + (_travel_words(job, ss) if rolled else ""),
+              at, detail="the loads bear on the top flange of the unbraced cantilever, which "
+              "destabilises it; brace the tip (beam.braces) or hang a point load below the "
+              "flange (flange = \"bottom\") to rate it on the bending check",
+              clause="AISC 360-16 F2, F1; effective length for top-flange loading",
+              source="AISC 360-16; SSRC Guide / BS 5950-1 Table 14 (from memory)",
+              params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})
+    return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
+                   method=res.method + "; lowered to where the cantilever's moment reaches "
+                   "the strength its top-flange loads leave it (a bracketed root: the moment "
+                   "is linear in k)")
 
 
 def _capacity(job, section, ss, st, fast: bool = True) -> CapacityResult:
