@@ -96,8 +96,11 @@ def floor_sig(value: float, sig: int = 3) -> float:
         return 0.0
     e = math.floor(math.log10(value)) - (sig - 1)
     step = 10.0 ** e
-    down = math.floor(value / step * (1 + 1e-12)) * step
-    if down > value:  # the 1e-12 nudge must never round up past the value itself
+    # a figure worked out from posted ones comes back through the unit conversions a few
+    # parts in 1e12 short (1250 lbf/ft x 4 ft as 4999.99999999 lbf): nudged by 1e-9 so it
+    # posts as 5000, not 4990; never more than that above the value itself
+    down = math.floor(value / step * (1 + 1e-9)) * step
+    if down > value * (1 + 1e-9):
         down = math.floor(value / step) * step
     return round(down, max(0, -e))
 
