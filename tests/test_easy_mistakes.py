@@ -1009,7 +1009,8 @@ def test_a_floor_given_a_looser_limit_than_l240_is_warned():
     assert any("looser than a floor's L/240" in w.message for w in warnings(job))
 
 
-@pytest.mark.parametrize("value, says", [('"25"', 'write "25%"'), ("25", 'write "25%"')])
+@pytest.mark.parametrize("value, says", [('"25"', 'write "25%"'), ("25", 'write "25%"'),
+                                         ('"1.25"', 'write "25%"')])
 def test_an_impact_typed_as_a_bare_percentage_says_to_write_the_percent_sign(value, says):
     with pytest.raises(InputErrors) as got:
         parse_job_text(job_text(criteria=f"impact = {value}"))

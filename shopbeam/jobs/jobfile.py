@@ -429,6 +429,11 @@ class _Reader:
                 self.error(f"cannot read {raw!r} (a number in quotes): if {n:g} % is meant, "
                            f"write \"{n:g}%\" (or {name} = {n / 100:g}); a bare number is a "
                            f"fraction ({n:g} would be {n:.0%})", key)
+            elif n is not None and n > 1 and name == "impact":  # "1.25": loads x 1.25
+                self.error(f"cannot read {raw!r} (a number in quotes): if a factor of {n:g} on "
+                           f"the live loads is meant, that is {n - 1:.0%}: write "
+                           f"\"{(n - 1) * 100:g}%\" (or impact = {n - 1:g}); impact is the "
+                           "allowance added, not the factor", key)
             elif n is not None:  # a number in quotes
                 self.error(f"cannot read {raw!r} (a number in quotes): write it without the "
                            f"quotes ({name} = {n:g}, read as {n:.0%}) or with a percent sign "
