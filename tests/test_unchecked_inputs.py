@@ -559,6 +559,20 @@ def test_a_value_in_the_other_unit_system_is_warned(units, line, warned):
     assert bool(said) == warned
     if warned:
         assert said[0].key == "criteria.deflection"
+    # and held: a value in the other system is most often a slip, and a rating posted on it
+    # is posted on a member that is not the one meant
+    assert capacity(job).rated is not warned
+
+
+def test_a_load_placed_in_metres_on_a_job_in_feet_is_not_rated():
+    # a point load at "1.2 m" on a 2x8 in feet sat 3.9 ft out, and was rated there
+    text = ('schema = 1\ntitle = "shelf"\ntags = ["not-lifting", "not-floor"]\n[beam]\n'
+            'length = "8 ft"\nsection = "2x8"\nmaterial = "DF-L-2"\n'
+            '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "8 ft"\n'
+            'type = "roller"\n[[loads]]\ntype = "point"\nat = "{at}"\nvalue = "-300 lbf"\n')
+    slipped = capacity(parse_job_text(text.format(at="1.2 m")))
+    assert not slipped.rated and any("1.2 m" in r for r in slipped.not_rated)
+    assert capacity(parse_job_text(text.format(at="1.2 ft"))).rated
 
 
 @pytest.mark.parametrize("dead, held", [

@@ -2556,8 +2556,7 @@ def _mixed_unit_systems(r: _Reader, data: dict, system: str) -> None:
     """Positions, lengths, loads and limits typed in the other unit system than the job's
     (`units`): warned once, naming them, since one value in mm or kN among feet and lbf is
     most often a slip (a deflection limit of "0.25 mm" for "0.25 in", a vise of "-450 kN" for
-    lbf); it is read as written. (A dead load in metric units on a job in US units is also
-    NOT RATED: `_dead_load_units`.)"""
+    lbf); it is read as written, and no rating is posted until it is in the job's units."""
     other = _METRIC_UNIT if system == "us" else _US_UNIT
     found: list[tuple[str, str]] = []
 
@@ -2582,12 +2581,25 @@ def _mixed_unit_systems(r: _Reader, data: dict, system: str) -> None:
     shown = "; ".join(f"{k} = {v!r}" for k, v in found[:4]) + (
         f" and {len(found) - 4} more" if len(found) > 4 else "")
     mine, theirs = (("US", "metric") if system == "us" else ("metric (si)", "US"))
-    r.warn(f"typed in {theirs} units on a job in {mine} units: {shown}; each is read as "
-           f"written, but one value in the other system is most often a slip (\"0.25 mm\" "
-           f"for \"0.25 in\", \"-450 kN\" for lbf): check the unit"
-           + (", or set units = \"si\" if the job is metric" if system == "us" else
-              ", or set units = \"us\" if the job is in feet and pounds"),
-           found[0][0])
+    fix = (", or set units = \"si\" if the job is metric" if system == "us" else
+           ", or set units = \"us\" if the job is in feet and pounds")
+    # a length or a position is held, not only warned: a load placed at "1.2 m" for 1.2 ft
+    # sits 3.3 times further out (a cantilever's tip load slipped toward its root posts a
+    # figure far too high), a limit in mm for in is another member's. A live load's size is
+    # only warned: the label posts what the member carries, k times it, whatever its unit
+    # (a dead load's is held by `_dead_load_units`)
+    placed = [(k, v) for k, v in found if not re.search(r"\.(?:value|total|loads|dead)\b", k)]
+    said = (f"typed in {theirs} units on a job in {mine} units: {shown}; each is read as "
+            f"written, but one value in the other system is most often a slip (\"0.25 mm\" "
+            f"for \"0.25 in\", \"1.2 m\" for 1.2 ft, \"-450 kN\" for lbf)")
+    if placed:
+        where = "; ".join(f"{k} = {v!r}" for k, v in placed[:3])
+        r.hold(said + ", and no rating is posted while a length or position is in the other "
+               "system: check the unit" + fix, placed[0][0],
+               f"a length or position is typed in {theirs} units on a job in {mine} units "
+               f"({where}): write it in the job's units" + fix)
+    else:
+        r.warn(said + ": check the unit" + fix, found[0][0])
 
 
 def _moving_dead_units(r: _Reader, raw_moving, moving, system: str) -> None:
