@@ -369,6 +369,14 @@ def test_steel_shape_in_lumber_is_refused():
     assert "not made in wood" in str(e.value)
 
 
+@pytest.mark.parametrize("section", ["FB3x1/2", "SQ2", "RB2"])
+def test_a_steel_bar_stock_size_in_lumber_is_refused(section):
+    # FB3x1/2 in DF-L No.2 was checked as 2x dimension lumber (CF 1.5) with no message
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(job_text(section=section, material="DF-L-2"))
+    assert "bar stock size" in str(e.value) and "not made in wood" in str(e.value)
+
+
 def test_a_lumber_size_in_lumber_and_a_flat_bar_in_steel_are_fine():
     parse_job_text(job_text(section="2x10", material="DF-L-2"))
     parse_job_text(job_text(section="FB4x1/2", material="A36"))

@@ -369,6 +369,11 @@ def not_made_in(sec: Section, material) -> str:
                 f"{material.key!r} is {kind}: give a wood material (e.g. material = "
                 "\"DF-L-2\") or a metal section (e.g. a flat bar \"FB4x1/2\", or "
                 "[beam.section] shape = \"rect-bar\" with its sizes)")
+    if kind == "lumber" and "bar stock size" in (sec.source or ""):
+        return (f"section {sec.designation!r} is a steel bar stock size (flat, square or "
+                f"round bar), not made in wood, but material {material.key!r} is lumber: "
+                "give a lumber size such as \"2x10\" (or a [beam.section] rect-bar of its "
+                "dressed sizes) or a metal material such as \"A36\"")
     if kind == "lumber" and not lumber_size and sec.shape not in ("rect-bar", "custom"):
         return (f"section {sec.designation!r} ({sec.shape}) is a metal shape, not made in "
                 f"wood, but material {material.key!r} is lumber: give a lumber size such as "
