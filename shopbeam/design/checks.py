@@ -646,7 +646,8 @@ def aluminum_unchecked(job, sec=None) -> list[Unchecked]:
                 f"{name} = {ratio:.3g} is over lambda1 = {lim[key]:.3g} (ADM 2015 B.5.4, from "
                 "memory): the element may buckle before it yields, and shopbeam does not compute "
                 "the buckled strength; have the section checked before rating it",
-                "ADM 2015 B.5.4, F.3"))
+                # elements of flexural members (F.8); a single angle has its own section
+                "ADM 2015 B.5.4, F.5, F.8" if shape == "angle" else "ADM 2015 B.5.4, F.8"))
             if web:
                 out.append(Unchecked(
                     "web shear buckling", f"{name} = {ratio:.3g}: a web this slender may buckle "
