@@ -362,6 +362,8 @@ def test_web_sidesway_cr_halves_past_my_and_the_factor_stops_there():
     p = 1000 * LBF * res.factor / KIP
     assert p == pytest.approx((50 * 14.9 / 12 / 1.5 - 10.8) / 3, rel=1e-6)
     assert "Cr halves" in res.note
+    # the step sets the factor, so it governs (its ratio at k is under the largest)
+    assert res.governing.name == "web sidesway buckling"
     past = {c.name: c for c in evaluate(job, res.factor * (1 + 1e-6)).checks}
     assert past["web sidesway buckling"].params["Cr"] == pytest.approx(480_000 * KSI)
     assert past["web sidesway buckling"].ratio > 1

@@ -114,6 +114,9 @@ class CapacityResult:
     # why no load may be posted although k is computed (a limit state not checked, a failed
     # self-check); empty when the rating stands
     not_rated: tuple[str, ...] = ()
+    # the check whose limit drops just past k, where that sets the factor though its ratio at
+    # k is under 1 (web sidesway buckling's Cr step): it governs, not the largest ratio
+    stepped: str = ""
 
     @property
     def rated(self) -> bool:
@@ -128,6 +131,10 @@ class CapacityResult:
 
     @property
     def governing(self) -> Check | None:
+        if self.stepped:
+            c = next((c for c in self.checks if c.name == self.stepped), None)
+            if c is not None:
+                return c
         return governing(list(self.checks)) if self.checks else None
 
 
@@ -540,7 +547,7 @@ def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     e = evaluate(job, k_f, section, ss, st)
     c = fatigue.fatigue_check(job, st, ss, k_f)
     return replace(res, factor=k_f, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
-                   method="closed form for fatigue: the live stress range is proportional "
+                   note="", stepped="", method="closed form for fatigue: the live stress range is proportional "
                           "to k (the strength checks would allow " + f"{k:.4g})")
 
 
@@ -849,7 +856,7 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
               source="AISC 360-16; SSRC Guide / BS 5950-1 Table 14 (from memory)",
               params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})
     return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
-                   method=res.method + "; lowered to where the cantilever's moment reaches "
+                   note="", stepped="", method=res.method + "; lowered to where the cantilever's moment reaches "
                    "the strength its top-flange loads leave it (a bracketed root: the moment "
                    "is linear in k)")
 
@@ -949,26 +956,28 @@ def _root(job, ev, g, k_lo, h_lo, k_hi, h_hi, why: str = "") -> CapacityResult:
     [k_lo, k_hi] (h = ratio - 1 at each end), on its passing side."""
     a, fa, b, fb = brent(lambda k: g(k) - 1.0, k_lo, k_hi, h_lo, h_hi)
     k, e = _passing(ev, a if fa <= 0 else b)
+    note, stepped = _step_note(e, lambda: ev(b if fa <= 0 else a))
     return CapacityResult(job, k, e, "bracketed root (Brent's method) of governing ratio = 1"
-                          + why, _step_note(e, lambda: ev(b if fa <= 0 else a)))
+                          + why, note, stepped=stepped)
 
 
-def _step_note(at_k: Evaluation, past) -> str:
+def _step_note(at_k: Evaluation, past) -> tuple[str, str]:
     """Words for a factor that stops where a limit drops as the load grows (no ratio reaches
     1 at k, and just past k one is over it): web sidesway buckling's Cr halves once the
     moment at the force reaches My / 1.5 (AISC 360-16 J10.4). Empty otherwise. `past()`
-    evaluates just past k (only when asked)."""
+    evaluates just past k (only when asked). With the words, the name of that check (it
+    governs)."""
     if max(c.ratio for c in at_k.checks) >= 1.0 - 1e-6:
-        return ""
+        return "", ""
     over = [c for c in past().checks if c.ratio > 1.0]
     if not over:
-        return ""
+        return "", ""
     c = max(over, key=lambda c: c.ratio)
     before = next((x.ratio for x in at_k.checks if x.name == c.name), 0.0)
     why = (" (Cr halves once 1.5 Ma reaches My at the force, AISC 360-16 J10.4)"
            if c.name == "web sidesway buckling" else "")
     return (f"the factor stops where the {c.name} limit drops as the load grows{why}: its "
-            f"ratio is {before:.3f} at k and {c.ratio:.3f} just past it")
+            f"ratio is {before:.3f} at k and {c.ratio:.3f} just past it"), c.name
 
 
 # ------------------------------------------------------------------ what to post
