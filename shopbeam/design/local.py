@@ -37,8 +37,9 @@ else 480,000 ksi; Lb is the largest laterally unbraced length of either flange a
 How this model holds the flanges: `restrained = true` holds them against relative movement all
 along (J10.4 then does not apply); a support that braces holds both flanges where it sits (so
 J10.4 does not apply there); `braces` and `braced = true` are taken as holding the top flange
-only (conservative: a deck or a brace clipped to the top flange); the bottom flange is held
-only at the supports that brace; no flange is taken as restrained against rotation, so J10-7
+only (conservative: a deck or a brace clipped to the top flange), unless `braces_flange =
+"both"` says the braces hold the bottom flange too (kickers, full-depth stiffeners); the
+bottom flange is otherwise held only at the supports that brace; no flange is taken as restrained against rotation, so J10-7
 is used. Where the job has moving loads the moment at a force changes with the trolley: the
 force is then taken as on a flange in compression, with Cr 480,000 ksi and Lb the largest
 unbraced length of either flange anywhere (conservative). With patterned loads the moment is
