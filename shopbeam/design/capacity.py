@@ -809,8 +809,9 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
     cantilever_top_limits`, effective length about 2.5 L), the factor is lowered to where it
     reaches it, and that limit state is among the checks at the answer, as the governing one
     (a rating on the lower strength, not NOT RATED). The moment is linear in k on each
-    length, so its largest is convex in k: one bracketed root from k = 0, where the dead
-    loads alone must pass it (else `_cantilever_top` says why nothing is posted)."""
+    length, so its largest is convex in k: one bracketed root (Brent's method) from k = 0,
+    where the dead loads alone must pass it (else `_cantilever_top` says why nothing is
+    posted)."""
     k = res.factor
     if res.evaluation is None or not math.isfinite(k) or k <= 0:
         return res
@@ -828,17 +829,16 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
     g0 = worst(0.0)
     if g0[5] >= g0[4]:
         return res  # the dead loads alone pass it: nothing to post (said as a reason)
-    lo, hi = 0.0, k
-    for _ in range(200):  # bisection to the last float: the ratio is monotone past k = 0
-        mid = 0.5 * (lo + hi)
-        if mid <= lo or mid >= hi:
-            break
-        gm = worst(mid)
-        if gm[5] > gm[4]:
-            hi = mid
-        else:
-            lo = mid
-    k2 = lo
+    def h(kk):
+        gk = worst(kk)
+        return gk[5] / gk[4] - 1.0
+
+    # Brent's method on the ratio (one crossing: convex, below 1 at k = 0), then its
+    # passing side, stepped down a float at a time if rounding leaves it a hair over
+    a0, fa, b0, fb = brent(h, 0.0, k, g0[5] / g0[4] - 1.0, g[5] / g[4] - 1.0)
+    k2 = a0 if fa <= 0 else b0
+    while h(k2) > 0:
+        k2 = math.nextafter(k2, 0.0)
     g = worst(k2)
     a, b, kl, now, top, demand, at, rolled = g
     e = evaluate(job, k2, section, ss, st)
