@@ -637,7 +637,6 @@ def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float
     fl = _rating_flexure(st)
     if fl is None or job.braced or job.restrained:
         return []
-    tol = 1e-9 * job.length
     hung = set(getattr(job, "hung", ()) or ())
     out = []
     for a, b, free, l1, _why in st.ltb_segments:
@@ -646,9 +645,7 @@ def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float
         on = loads_on(job, a, b)
         if on and all(ld.key in hung for ld in on):
             continue  # every load hangs below the shear centre: not destabilising
-        held = [s.at for s in job.supports if s.takes_force]
-        root = a if any(abs(h - a) <= tol for h in held) else b
-        k = TOP_LOAD_K
+        k = TOP_LOAD_K  # a built-in root or a support alike (see TOP_LOAD_K)
         now = min(fl.cap, l1)
         top = min(fl.cap, fl.ltb1(k * (b - a))[0])
         if top < now * (1 - 1e-9):

@@ -424,7 +424,8 @@ def travelling(job):
     place (the hook load, a magnet or spreader under it) with the dead loads hung within a
     foot of it (the hoist's own weight) as its dead wheel load, on the loads' wheels,
     travelling the whole member, or from the mast out to the place given on a jib's boom.
-    None where there is no such hoist (`_hook`), or its place has loads that cannot travel
+    None where there is no such hoist (`analysis.travelling_hook`), or its place has loads
+    that cannot travel
     with it (set on top of the flange, live loads hung beside it): `capacity` then holds."""
     hook = travelling_hook(job)
     if hook is None:
@@ -547,8 +548,9 @@ def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     e = evaluate(job, k_f, section, ss, st)
     c = fatigue.fatigue_check(job, st, ss, k_f)
     return replace(res, factor=k_f, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
-                   note="", stepped="", method="closed form for fatigue: the live stress range is proportional "
-                          "to k (the strength checks would allow " + f"{k:.4g})")
+                   note="", stepped="",
+                   method="closed form for fatigue: the live stress range is proportional to k "
+                          "(the strength checks would allow " + f"{k:.4g})")
 
 
 MAX_COUPLES_TRIED = 4  # live couples each taken off in turn (one capacity search each)

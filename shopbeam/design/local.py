@@ -39,7 +39,8 @@ along (J10.4 then does not apply); a support that braces holds both flanges wher
 J10.4 does not apply there); `braces` and `braced = true` are taken as holding the top flange
 only (conservative: a deck or a brace clipped to the top flange), unless `braces_flange =
 "both"` says the braces hold the bottom flange too (kickers, full-depth stiffeners); the
-bottom flange is otherwise held only at the supports that brace; no flange is taken as restrained against rotation, so J10-7
+bottom flange is otherwise held only at the supports that brace; no flange is taken as
+restrained against rotation, so J10-7
 is used. Where the job has moving loads the moment at a force changes with the trolley: the
 force is then taken as on a flange in compression, with Cr 480,000 ksi and Lb the largest
 unbraced length of either flange anywhere (conservative). With patterned loads the moment is
@@ -51,7 +52,8 @@ end of an I-shape or channel takes lb = k (kdes), the least AISC 360-16 J10.2 le
 beam reaction take ("lb not less than k for end beam reactions", from memory); that floor is
 J10.2's own, so web crippling (J10.3, which has none) takes lb = 0 there; a trolley wheel
 bears at a point, lb = 0; every other force takes lb = 0 (a knife edge: the lowest strength,
-conservative). The check says which. Every check is linear in the concentrated force, so the capacity search scales
+conservative). The check says which. Every check is linear in the concentrated force, so the
+capacity search scales
 it exactly.
 """
 
