@@ -8,8 +8,9 @@ E' 5.8 ksi).
 
 The demand is the live-load bending stress range at the extreme fibre, taken wherever along
 the member it is largest (the detail's own place is not known: conservative): every live load
-(with the impact allowance) on and off, and over every pattern of patterned loads the sum of
-what each span's live load adds either way (a bound). It is a check like the others
+(with the impact allowance) on and off, and over every pattern of patterned loads the largest
+of every arrangement less the smallest, exactly (at each place the sum of what the static live
+loads and each span's load add either way). It is a check like the others
 (`fatigue_check`): where it comes first it sets the capacity factor (`capacity._fatigue_cap`);
 a sizing row whose factor comes from the batched search is judged at that factor instead
 (`capacity._fatigue`).
@@ -18,6 +19,8 @@ a sizing row whose factor comes from the batched search is judged at that factor
 from __future__ import annotations
 
 import math
+
+import numpy as np
 
 from shopbeam import units
 from shopbeam.design.basis import tip_hung
@@ -77,18 +80,54 @@ def fatigue_range(job, st, ss, k: float) -> tuple[float, float] | None:
     live = ss.live.moment
     if not ss.spans:
         m = abs(live.extremes(0.0, job.length).abs_max)
-    else:  # each piece: what the static live load and each span's load add, either way
-        br = live.breaks
-        m = 0.0
-        for a, b in zip(br[:-1], br[1:]):
-            if b - a <= 0:
-                continue
-            m = max(m, sum(abs(f.extremes(float(a), float(b)).abs_max)
-                           for f in [live] + [sp.moment for sp in ss.spans]))
+    else:
+        m = _largest_sum_of_abs([live] + [sp.moment for sp in ss.spans])
     sec = getattr(st, "section", None) or job.section
     s = min(sec.sx_top, sec.sx_bot)
     c = job.criteria
     return kk * m / s, allowable_range(c.fatigue_category, c.cycles)
+
+
+def _largest_sum_of_abs(funcs) -> float:
+    """max over x of sum |f_i(x)|, exactly, for piecewise polynomials on the same breaks: the
+    live moment range where each f_i comes and goes by itself (the static live loads, each
+    span's patterned load), as the largest of every arrangement less the smallest is, at each
+    x, the sum of what each adds either way. On each piece the f_i keep their signs between
+    their real roots, so there the sum is one polynomial, whose largest is at an end of the
+    stretch or a root of its derivative."""
+    br = funcs[0].breaks
+    co = np.stack([f.coeffs for f in funcs])  # (functions, pieces, degree + 1)
+    best = 0.0
+    for j, h in enumerate(np.diff(br)):
+        if h <= 0:
+            continue
+        c = co[:, j, :]
+        cuts = [0.0, float(h)]
+        for row in c:
+            cuts += _real_roots_in(row, h)
+        cuts = sorted(set(cuts))
+        for t0, t1 in zip(cuts[:-1], cuts[1:]):
+            if t1 - t0 <= 1e-15 * h:
+                continue
+            mid = 0.5 * (t0 + t1)
+            signs = np.sign(np.polynomial.polynomial.polyval(mid, c.T))
+            g = signs @ c  # the sum of |f_i| on this stretch, ascending powers
+            ts = [t0, t1] + [t for t in _real_roots_in(
+                np.polynomial.polynomial.polyder(g), h) if t0 < t < t1]
+            best = max(best, float(np.max(np.polynomial.polynomial.polyval(
+                np.array(ts), g))))
+    return best
+
+
+def _real_roots_in(asc, h: float) -> list[float]:
+    """The real roots of the polynomial (ascending coefficients) strictly inside (0, h)."""
+    a = np.trim_zeros(np.asarray(asc, dtype=float), "b")
+    if len(a) < 2:
+        return []
+    r = np.roots(a[::-1])
+    scale = max(abs(h), 1e-300)
+    return [float(x.real) for x in r
+            if abs(x.imag) <= 1e-9 * scale and 0.0 < x.real < h]
 
 
 def fatigue_check(job, st, ss, k: float) -> Check | None:
