@@ -304,7 +304,10 @@ value = "-2.5 kN"
     assert m, fig.value
     kg = int(m.group(2))
     assert kg == label.floor_sig(fig.exact / 9.80665) and kg * 9.80665 <= fig.exact
-    us = label.rating(capacity(parse_job_text(text.replace('units = "si"', 'units = "us"'))))
+    us_text = text.replace('units = "si"', 'units = "us"').replace('"1200 mm"', '"4 ft"') \
+        .replace('"0 mm"', '"0 ft"').replace('"1.2 m"', '"4 ft"').replace('"-2.5 kN"',
+                                                                            '"-560 lbf"')
+    us = label.rating(capacity(parse_job_text(us_text)))
     assert "kg" not in next(f for f in us.figures if f.label == "MAX POINT LOAD").value
 
 
