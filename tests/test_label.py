@@ -878,3 +878,17 @@ spacing = ["2 ft", "2 ft"]
     for w in (3000, 1000, 500):  # each axle's own figure, rounded down, in order
         assert f"{label.floor_sig(w * k):g} lbf" in heavy.note
     assert not any(f.label.startswith("MAX PER AXLE") for f in r.figures)
+
+
+def test_a_typed_in_tube_s_member_line_says_its_units():
+    # "rect-tube 3.937 x 1.9685 x 3 mm": the sizes converted to inches with no unit beside
+    # a wall still in millimetres
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = ('schema = 1\ntitle = "Storage shelf beam"\ntags = ["shelf"]\n[beam]\n'
+            'length = "8 ft"\nsection = { shape = "rect-tube", width = "50 mm", '
+            'depth = "100 mm", wall = "3 mm" }\nmaterial = "A500-C"\n[[supports]]\n'
+            'at = "0 ft"\ntype = "pin"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n')
+    r = label.rating(capacity(parse_job_text(text)))
+    assert "rect-tube 3.937 x 1.9685 in x 3 mm" in r.member

@@ -182,7 +182,7 @@ def _build(shape, spec, key, material, mass) -> Section:
                              "not \"5 in\"); the outside corner radius is about 2 x the wall",
                              f"{key}.corner_radius")
         sec = rect_tube(h, b, t_nom, t_des=f * t_nom, r_out=r, mass=mass,
-                        designation=f"rect-tube {_in(h)} x {_in(b)} x {_wall_text(spec)}",
+                        designation=f"rect-tube {_in(h)} x {_in(b)} in x {_wall_text(spec)}",
                         source="computed from dimensions (" + "; ".join(
                             x for x in (note, rule, "outside corner radius " + (
                                 "as given" if r is not None else "2 x design wall")) if x) + ")")
@@ -194,7 +194,7 @@ def _build(shape, spec, key, material, mass) -> Section:
         t_nom, note = _wall(spec, key, "tube")
         f, rule = _wall_factor(spec, key, material, shape)
         return round_tube(od, t_nom, t_des=f * t_nom, shape=shape, mass=mass,
-                          designation=f"{shape} {_in(od)} x {_wall_text(spec)}",
+                          designation=f"{shape} {_in(od)} in x {_wall_text(spec)}",
                           source="computed from dimensions (" + "; ".join(
                               x for x in (note, rule) if x) + ")")
     if shape in ("rect-bar", "flat-bar", "square-bar"):
