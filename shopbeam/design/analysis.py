@@ -25,6 +25,7 @@ from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, 
 from shopbeam.jobs.jobfile import NOT_FLOOR, Job
 from shopbeam.jobs.rules import guessed_profile, rack_arm
 from shopbeam.errors import InputError, UnstableBeam
+from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import Solution, solve, sound_solve
 from shopbeam.members.sections import ANGLE_WARNING
 
@@ -284,6 +285,9 @@ def analyze(job: Job) -> Result:
     if fatigue.given(job):  # the fatigue limit state at the loads as entered (k = 1)
         c = fatigue.fatigue_check(job, st, ss, 1.0)
         checks = list(checks) + ([c] if c is not None else [])
+    # an unbraced cantilever loaded on its top flange: the strength that loading leaves it,
+    # as capacity rates it (a plain job's state set is built only where one applies)
+    checks = list(checks) + top_flange_checks(job, st, ss)
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment, ss) \
         + span_top_unchecked(job, st, sol.moment, ss)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
@@ -398,7 +402,7 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
     st = st or strengths(job)
     sec = st.section
     return list(st.unchecked) + local_unchecked(job, sec) + open_unchecked(job, st) + \
-        aluminum_unchecked(job, sec) + floor_unchecked(job) + cantilever_top_unchecked(job, st) \
+        aluminum_unchecked(job, sec) + floor_unchecked(job) \
         + material_unchecked(job, st) + twist_unchecked(job, st) + use_unchecked(job)
 
 
@@ -653,6 +657,78 @@ def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float
     return out
 
 
+def all_on_moment(ss, k: float) -> Piecewise:
+    """The moment with every live load on at the factor k (patterned spans too)."""
+    kk = k * (1 + ss.parts.impact)
+    co = ss.fixed.moment.coeffs + kk * ss.live.moment.coeffs
+    for sp in ss.spans:
+        co = co + kk * sp.moment.coeffs
+    return Piecewise(ss.fixed.moment.breaks, co)
+
+
+def cantilever_top_demands(job, st, limits, ss, k: float) -> list[tuple]:
+    """(start, end, effective length factor, strength as checked, top-flange strength,
+    moment, at, travelling) of each unbraced cantilever of `limits` at the factor k. The
+    moment in a cantilever or overhang comes from the loads on it alone, so every load on at
+    the factor (patterned spans too) gives its largest; [[moving]] wheels on it are taken at
+    every position of the set (`analysis.moment_ranges`)."""
+    m = all_on_moment(ss, k)
+    rolls = [(a, b) for a, b, *_ in limits if wheels_count_on_top(job, a, b)]
+    ranges = moment_ranges(job, st, ss, k, rolls)[0] if rolls else {}
+    out = []
+    for a, b, kl, now, top in limits:
+        if (a, b) in ranges:
+            lo, hi = ranges[a, b][0], ranges[a, b][2]
+            demand, at = max(abs(lo), abs(hi)), None
+        else:
+            ex = m.extremes(a, b)
+            demand = ex.abs_max
+            at = ex.max_at if abs(ex.max) >= abs(ex.min) else ex.min_at
+        out.append((a, b, kl, now, top, demand, at, (a, b) in ranges))
+    return out
+
+
+def travel_words(job: Job, ss) -> str:
+    """" (the worst position of <set> over its travel[, either way round])"."""
+    return (f" (the worst position of {job.moving[0].label or 'the wheel set'} over its travel"
+            f"{loading.variant_words(job, ss)})")
+
+
+TOP_FLANGE_CHECK = "bending, top-flange loads"  # an unbraced cantilever's top-flange loads
+
+
+def top_flange_check(job: Job, ss, g, travel_words: str = "") -> Check:
+    """The check of an unbraced cantilever whose loads bear on its top flange, from one entry
+    `g` of `cantilever_top_demands`: its moment against the strength that loading leaves it
+    (AISC 360-16 F2 at about 2.5 L, `TOP_LOAD_K`)."""
+    a, b, kl, now, top, demand, at, rolled = g
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    return Check(TOP_FLANGE_CHECK, demand, top, "N*m",
+                 f"AISC 360-16 F2 (F1 Cb 1.0) with the effective length of a cantilever "
+                 f"loaded on its top flange, about {kl:g} x L over {f(a)} to {f(b)} (SSRC "
+                 f"Guide / BS 5950-1 Table 14, from memory): M <= {f(top, 'moment')}, "
+                 f"against {f(now, 'moment')} with the loads at the shear centre"
+                 + (travel_words if rolled else ""),
+                 at, detail="the loads bear on the top flange of the unbraced cantilever, "
+                 "which destabilises it; brace the tip (beam.braces) or hang a point load "
+                 "below the flange (flange = \"bottom\") to rate it on the bending check",
+                 clause="AISC 360-16 F2, F1; effective length for top-flange loading",
+                 source="AISC 360-16; SSRC Guide / BS 5950-1 Table 14 (from memory)",
+                 params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})
+
+
+def top_flange_checks(job: Job, st, ss) -> list[Check]:
+    """`top_flange_check` of every unbraced cantilever whose top-flange loading lowers its
+    strength, at the loads as entered (k = 1: every live load on, the impact allowance in)."""
+    limits = cantilever_top_limits(job, st)
+    if not limits:
+        return []
+    ss = ss or loading.state_set(job)
+    words = travel_words(job, ss) if job.moving else ""
+    return [top_flange_check(job, ss, g, words)
+            for g in cantilever_top_demands(job, st, limits, ss, 1.0)]
+
+
 def loads_on(job: Job, a: float, b: float) -> list:
     """The loads of the job (not couples) that bear on a..b."""
     tol = 1e-9 * job.length
@@ -669,29 +745,6 @@ def wheels_count_on_top(job: Job, a: float, b: float) -> bool:
         return False
     hung = set(getattr(job, "hung", ()) or ())
     return _rolls_through(job, a, b) or any(ld.key not in hung for ld in loads_on(job, a, b))
-
-
-def cantilever_top_unchecked(job: Job, st) -> list[Unchecked]:
-    """An unbraced cantilever is checked with its loads at the shear centre (AISC 360-16 F1,
-    Cb = 1.0). Loads on its top flange destabilise it, and a rack arm's or bracket's loads
-    sit on top. Not checked as such: listed, and `capacity` posts no rating where the moment
-    at the rated load would pass that lower strength (the moment in a cantilever comes from
-    its own loads alone, so the loads as entered at k give it exactly)."""
-    out = []
-    for a, b, k, now, top in cantilever_top_limits(job, st):
-        where = f"{units.fmt(a, 'length', job.units)} to {units.fmt(b, 'length', job.units)}"
-        out.append(Unchecked(
-            "lateral-torsional buckling of a cantilever loaded on its top flange",
-            f"the cantilever {where} is checked with its loads at the shear centre (Lb = its "
-            f"length, Cb 1.0); loads bearing on its top flange destabilise it (effective length "
-            f"about {k:g} x L), which lowers its bending strength to {top / now:.0%} of the "
-            "figure checked; no rating is posted where the rated load would exceed that lower "
-            "strength (brace the tip where one can be fitted, beam.braces; hang a point load "
-            "below the flange, flange = \"bottom\"; or choose a section that passes at the "
-            "lower strength)",
-            "AISC 360-16 F1 (Cb 1.0 at a free end); top-flange loading, SSRC Guide (from "
-            "memory)", blocks_rating=False))
-    return out
 
 
 # A load bearing on the top flange at a point not braced destabilises the member: AISC

@@ -28,6 +28,8 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        travelling_hook, hogging_limits, hogging_remedy,
+                                       all_on_moment, cantilever_top_demands, top_flange_check,
+                                       travel_words,
                                        hogging_source,
                                        moment_ranges, wheels_count_on_top,
                                        span_top_limits, NOT_JUDGED, moving_top_worst,
@@ -40,7 +42,6 @@ from shopbeam.design.checks import impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.model import Beam, segments
 from shopbeam.members.catalog import other_metal_on_steel_shape
-from shopbeam.engine.piecewise import Piecewise
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
 from shopbeam.design import fatigue
@@ -688,15 +689,6 @@ def _at(k: float) -> str:
     return "with the live loads off (k = 0)" if k == 0 else f"at the factor found (k = {k:.4g})"
 
 
-def _all_on(ss, k: float) -> Piecewise:
-    """The moment with every live load on at the factor k (patterned spans too)."""
-    kk = k * (1 + ss.parts.impact)
-    co = ss.fixed.moment.coeffs + kk * ss.live.moment.coeffs
-    for sp in ss.spans:
-        co = co + kk * sp.moment.coeffs
-    return Piecewise(ss.fixed.moment.breaks, co)
-
-
 def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where the rated load, bearing on the top flange of an unbraced length between
     braces, would exceed the strength that loading leaves it (`limits`:
@@ -707,7 +699,7 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     # a wheel set: every wheel position, rolling on the top flange (a cart) or adding its
     # moment to static loads on top (a hung trolley)
     moving = bool(ss.parts.moving)
-    m = _all_on(ss, k)
+    m = all_on_moment(ss, k)
     out = []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     worst = moving_top_worst(job, st, ss, k, limits) if moving else {}
@@ -746,32 +738,7 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     return tuple(out)
 
 
-def _travel_words(job, ss) -> str:
-    """" (the worst position of <set> over its travel[, either way round])"."""
-    return (f" (the worst position of {job.moving[0].label or 'the wheel set'} over its travel"
-            f"{variant_words(job, ss)})")
-
-
-def _cantilever_top_demands(job, st, limits, ss, k: float) -> list[tuple]:
-    """(start, end, effective length factor, strength as checked, top-flange strength,
-    moment, at, travelling) of each unbraced cantilever of `limits` at the factor k. The
-    moment in a cantilever or overhang comes from the loads on it alone, so every load on at
-    the factor (patterned spans too) gives its largest; [[moving]] wheels on it are taken at
-    every position of the set (`analysis.moment_ranges`)."""
-    m = _all_on(ss, k)
-    rolls = [(a, b) for a, b, *_ in limits if wheels_count_on_top(job, a, b)]
-    ranges = moment_ranges(job, st, ss, k, rolls)[0] if rolls else {}
-    out = []
-    for a, b, kl, now, top in limits:
-        if (a, b) in ranges:
-            lo, hi = ranges[a, b][0], ranges[a, b][2]
-            demand, at = max(abs(lo), abs(hi)), None
-        else:
-            ex = m.extremes(a, b)
-            demand = ex.abs_max
-            at = ex.max_at if abs(ex.max) >= abs(ex.min) else ex.min_at
-        out.append((a, b, kl, now, top, demand, at, (a, b) in ranges))
-    return out
+_travel_words = travel_words  # (analysis.travel_words)
 
 
 def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
@@ -784,7 +751,7 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     if not limits:
         return ()
     out = []
-    for a, b, kl, now, top, demand, _at_x, rolled in _cantilever_top_demands(
+    for a, b, kl, now, top, demand, _at_x, rolled in cantilever_top_demands(
             job, st, limits, ss, k):
         if demand > top:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
@@ -800,9 +767,6 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                        "\"bottom\"), or choose a section that passes at the lower strength "
                        "(shopbeam size)")
     return tuple(out)
-
-
-TOP_FLANGE_CHECK = "bending, top-flange loads"  # the check `_cantilever_top_rate` adds
 
 
 def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
@@ -822,7 +786,7 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
         return res
 
     def worst(kk):
-        got = _cantilever_top_demands(job, st, limits, ss, kk)
+        got = cantilever_top_demands(job, st, limits, ss, kk)
         return max(got, key=lambda g: g[5] / g[4]) if got else None
 
     g = worst(k)
@@ -842,21 +806,8 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
     while h(k2) > 0:
         k2 = math.nextafter(k2, 0.0)
     g = worst(k2)
-    a, b, kl, now, top, demand, at, rolled = g
     e = evaluate(job, k2, section, ss, st)
-    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
-    c = Check(TOP_FLANGE_CHECK, demand, top, "N*m",
-              f"AISC 360-16 F2 (F1 Cb 1.0) with the effective length of a cantilever loaded "
-              f"on its top flange, about {kl:g} x L over {f(a)} to {f(b)} (SSRC Guide / BS "
-              f"5950-1 Table 14, from memory): M <= {f(top, 'moment')}, against "
-              f"{f(now, 'moment')} with the loads at the shear centre"
-              + (_travel_words(job, ss) if rolled else ""),
-              at, detail="the loads bear on the top flange of the unbraced cantilever, which "
-              "destabilises it; brace the tip (beam.braces) or hang a point load below the "
-              "flange (flange = \"bottom\") to rate it on the bending check",
-              clause="AISC 360-16 F2, F1; effective length for top-flange loading",
-              source="AISC 360-16; SSRC Guide / BS 5950-1 Table 14 (from memory)",
-              params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})
+    c = top_flange_check(job, ss, g, _travel_words(job, ss) if job.moving else "")
     return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
                    note="", stepped="", method=res.method + "; lowered to where the cantilever's moment reaches "
                    "the strength its top-flange loads leave it (a bracketed root: the moment "

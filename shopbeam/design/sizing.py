@@ -41,6 +41,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
+from shopbeam.design.analysis import loads_on, top_flange_checks
 from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.fatigue import given as fatigue_given
@@ -826,9 +827,14 @@ def _batched(job, base, parts, cands, with_capacity):
     # a load hung from the bottom flange gets the flange-tip check on a lifting job, and on any
     # job unless `lug = true` says it hangs from a lug under the web (checks.checks_for)
     hung = bool(lifting and getattr(job, "hung", ()) or tip_hung(job))
-    exact = not springs and not moving and not hung
     empty = Beam(L, 1.0, job.supports, ())
     ltb_segs = unbraced_segments(job, empty)
+    # an unbraced cantilever with loads on its top flange: the strength that loading leaves
+    # it (analysis.top_flange_checks, about 2.5 L) is in the full check, not the batch
+    on_top = not (job.braced or job.restrained) and any(
+        free and (lambda on: on and not all(ld.key in set(job.hung) for ld in on))(
+            loads_on(job, a, b)) for a, b, free in ltb_segs)
+    exact = not springs and not moving and not hung and not on_top
     spans = segments(empty)
     n_ratio, d_abs, _ = deflection_rule(job)
     imp = parts.impact
@@ -1133,6 +1139,8 @@ def _batched(job, base, parts, cands, with_capacity):
     why = [x for x, on in (("springs: exact per-section spring forces", springs),
                            ("moving loads", moving),
                            ("a load hung from a flange", hung),
+                           ("an unbraced cantilever loaded on its top flange: its strength at "
+                            "about 2.5 L in the full check", on_top),
                            ("tees and angles: F9 / F10 bending in the full check",
                             special.any())) if on]
     return rows, skipped, why
@@ -1144,8 +1152,9 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
     try:
         ss = state_set(j)  # shared: the moving-load cells and parts cached on it are reused
         ev = evaluate(j, 1.0, ss=ss)
-        g = max(ev.checks, key=lambda c: c.ratio)
-        fat = fatigue_check(j, strengths(j, beam=ss.beam), ss, 1.0)  # fatigue given: a check
+        st = strengths(j, beam=ss.beam)
+        g = max(list(ev.checks) + top_flange_checks(j, st, ss), key=lambda c: c.ratio)
+        fat = fatigue_check(j, st, ss, 1.0)  # fatigue given: a check
         if fat is not None and fat.ratio > g.ratio:
             g = fat
         # k of a section that fails at the entered loads is below 1 and never listed
