@@ -221,7 +221,10 @@ class JobScreen(Screen):
     def _focus_in_view(self) -> None:
         f = self.focused
         if isinstance(f, (FieldInput, Choice)) and shown_now(f):
-            f.scroll_visible(animate=False, immediate=True)
+            # the whole field, with the message under it (a load that now points up says
+            # why and what to do there), not its text box alone
+            target = f.parent if isinstance(f.parent, Field) else f
+            target.scroll_visible(animate=False, immediate=True)
 
     @staticmethod
     def _tab_stops(view) -> tuple:
@@ -1126,8 +1129,17 @@ class JobScreen(Screen):
                 isinstance(self.focused, FieldInput):
             lists = view.query(RowList)
             self.set_focus(lists.first() if lists else view)
-        self.notify(f"removed {table[:-1]} {index + 1} - ctrl+z puts it back", timeout=8)
+        self._removed_notes = getattr(self, "_removed_notes", []) + [self._note(
+            f"removed {table[:-1]} {index + 1} - ctrl+z puts it back", timeout=8)]
         self.changed()
+
+    def _note(self, message: str, timeout: float = 8):
+        """A notice, returned so that it can be taken down when it is no longer so."""
+        from textual.notifications import Notification, Notify
+
+        note = Notification(message, "", "information", timeout, markup=False)
+        self.app.post_message(Notify(note))
+        return note
 
     def action_undo_remove(self) -> None:
         """ctrl+z: the last support or load removed comes back at its place (again: the one
@@ -1148,6 +1160,11 @@ class JobScreen(Screen):
         view = self.query("#span" if table == "supports" else "#loads")
         if view:
             view.first().selected = index
+        notes = getattr(self, "_removed_notes", [])
+        if notes:  # its "removed ... ctrl+z puts it back" is no longer so
+            note = notes.pop()
+            if note in self.app._notifications:
+                self.app._unnotify(note)
         self.notify(f"{table[:-1]} {index + 1} is back", timeout=6)
         self.changed()
 

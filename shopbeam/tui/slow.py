@@ -22,7 +22,7 @@ from textual.widgets.option_list import Option
 
 from shopbeam import units
 from shopbeam.jobs import library, storage
-from shopbeam.tui.views import View, in_words, problems_text
+from shopbeam.tui.views import View, problems_text, rows_in_words
 from shopbeam.tui.widgets import Choice, fit_text
 
 
@@ -232,7 +232,7 @@ def rating_text(job, width: int = 40, date=None, page_width: int = 78) -> str:
         res = capacity(job)
         # rows counted from 1, as the lists of the text UI show them ("load 4", not
         # "loads[3]"); the report's lines only get shorter
-        text = in_words(capacityreport.render(res, page_width))
+        text = rows_in_words(capacityreport.render(res, page_width))
     except Exception as exc:  # noqa: BLE001 - shown, never a crash
         return f"The capacity could not be worked out: {type(exc).__name__}: {exc}"
     lines = [text.rstrip(), ""]
@@ -247,14 +247,15 @@ def rating_text(job, width: int = 40, date=None, page_width: int = 78) -> str:
 
 
 def _label_in_words(r):
-    """The label's words with rows counted from 1 (`in_words`), before they are wrapped."""
+    """The label's words with rows counted from 1 (`rows_in_words`), before they are
+    wrapped."""
     import dataclasses  # noqa: PLC0415 - startup
 
     def say(v):
         if isinstance(v, str):
-            return in_words(v)
+            return rows_in_words(v)
         if isinstance(v, tuple) and all(isinstance(x, str) for x in v):
-            return tuple(in_words(x) for x in v)
+            return tuple(rows_in_words(x) for x in v)
         return v
 
     return dataclasses.replace(r, **{f.name: say(getattr(r, f.name))

@@ -47,14 +47,20 @@ _UI_WAYS = (
 )
 
 
-def in_words(text: str) -> str:
-    """'supports[1].at' -> 'support 2 at': rows counted from 1 as the lists show them; and
-    a key the message says to write, where this UI has a control for it, named as the
-    control."""
+def rows_in_words(text: str) -> str:
+    """'supports[1].at' -> 'support 2 at': rows counted from 1 as the lists show them (the
+    text only gets shorter, so a page already wrapped stays within its width)."""
     text = _ROW_KEY.sub(lambda m: f"{m.group(1)[:-1]} {int(m.group(2)) + 1}", text)
+    return re.sub(r"\b(support|load) (\d+)\.(\w+)", r"\1 \2 \3", text)
+
+
+def in_words(text: str) -> str:
+    """A message shown beside a field or in the problem summary: `rows_in_words`, and a key
+    the message says to write, where this UI has a control for it, named as the control
+    (not on the printable pages, which match the command line's)."""
     for said, here in _UI_WAYS:
         text = text.replace(said, here)
-    return re.sub(r"\b(support|load) (\d+)\.(\w+)", r"\1 \2 \3", text)
+    return rows_in_words(text)
 
 
 class View(VerticalScroll):
@@ -552,20 +558,29 @@ class SpanView(RowsView):
         return ""
 
 
-_VALUE_EXAMPLES = {  # the Value field's placeholder for each load type, in the job's units
-    "us": {"point": "e.g. -300 lbf", "moment": "e.g. 150 lbf*ft (+ counterclockwise)",
-           "uniform": "e.g. -60 lbf/ft or -50 psf", "linear": "e.g. 0 lbf/ft",
-           "end": "e.g. -60 lbf/ft"},
-    "si": {"point": "e.g. -1.5 kN", "moment": "e.g. 0.2 kN*m (+ counterclockwise)",
-           "uniform": "e.g. -0.9 kN/m or -2.4 kPa", "linear": "e.g. 0 kN/m",
-           "end": "e.g. -0.9 kN/m"},
+_LOAD_EXAMPLES = {  # the load form's placeholders in the job's units (short: a field is
+    # about 18 columns wide at 80); the Value one follows the load type (a couple is not a
+    # force)
+    "us": {"point": "e.g. -300 lbf", "moment": "150 lbf*ft (+ ccw)",
+           "uniform": "e.g. -60 lbf/ft", "linear": "e.g. 0 lbf/ft", "end": "e.g. -60 lbf/ft",
+           "load.at": "e.g. 4 ft", "load.start": "e.g. 0 ft", "load.end": "e.g. 12 ft",
+           "load.width": "psf width, e.g. 16 in", "load.total": "e.g. -700 lbf in all",
+           "load.bearing": "e.g. 6 in", "title": "(-300 lbf)"},
+    "si": {"point": "e.g. -1.5 kN", "moment": "0.2 kN*m (+ ccw)",
+           "uniform": "e.g. -0.9 kN/m", "linear": "e.g. 0 kN/m", "end": "e.g. -0.9 kN/m",
+           "load.at": "e.g. 1.2 m", "load.start": "e.g. 0 m", "load.end": "e.g. 3.6 m",
+           "load.width": "kPa width, e.g. 400 mm", "load.total": "e.g. -3 kN in all",
+           "load.bearing": "e.g. 150 mm", "title": "(-1.5 kN)"},
 }
+
+
+def _examples(session) -> dict:
+    return _LOAD_EXAMPLES["si" if session.doc.get("units") == "si" else "us"]
 
 
 def _value_example(kind: str, session) -> str:
     """What the Value field suggests for a load of `kind` (a couple is not a force)."""
-    units_ = session.doc.get("units")
-    examples = _VALUE_EXAMPLES["si" if units_ == "si" else "us"]
+    examples = _examples(session)
     return examples.get(kind, examples["point"])
 
 
@@ -576,7 +591,7 @@ class LoadsView(RowsView):
 
     def compose(self) -> ComposeResult:
         yield Static("Loads: forces + up, so gravity loads are negative (-300 lbf).",
-                     classes="view-title")
+                     classes="view-title", id="loads-title")
         yield Static("ctrl+t add, ctrl+x remove, up/down pick:", classes="sub-title")
         yield Static("", id="load-warnings", markup=False, classes="warning")
         yield RowList(id="load-list", classes="rows")
@@ -610,6 +625,11 @@ class LoadsView(RowsView):
         return _load_words(row)
 
     def show(self, session) -> None:
+        title = ("Loads: forces + up, so gravity loads are negative "
+                 f"{_examples(session)['title']}.")
+        if title != getattr(self, "_title_shown", None):
+            self._title_shown = title
+            self.query_one("#loads-title", Static).update(title)
         warn = self.query_one("#load-warnings", Static)
         lines = load_warnings(session)
         moving = session.doc.get("moving")
@@ -679,6 +699,8 @@ class LoadsView(RowsView):
                     f.input.placeholder = _value_example(kind, session)
                 elif f.key == "load.value2":
                     f.input.placeholder = _value_example("end", session)
+                elif f.key in _LOAD_EXAMPLES["us"]:
+                    f.input.placeholder = _examples(session)[f.key]
         self.show_field_messages(session.evaluation, {
             "load.at": f"loads[{i}].at", "load.start": f"loads[{i}].start",
             "load.end": f"loads[{i}].end",
