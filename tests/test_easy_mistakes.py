@@ -1383,7 +1383,10 @@ def test_fire_retardant_or_incised_lumber_is_not_rated(title, held):
 @pytest.mark.parametrize("title, held", [
     ("Shelf joist, pressure-treated Hem-Fir", True), ("PT 2x10 deck joist", True),
     ("ACQ treated lumber rail", True), ("Treated joist, PT, not incised", False),
-    ("Shelf joist, 8 pt spacing", False), ("Shelf for heat-treated parts", False)])
+    ("Shelf joist, 8 pt spacing", False), ("Shelf for heat-treated parts", False),
+    ("Treated deck joist", True), ("P.T. 2x10 joist", True), ("Joist, copper azole", True),
+    ("Green treated joist", True), ("Joist treated as a simple span", False),
+    ("PT-450 shelf joist", False)])
 def test_preservative_treated_lumber_is_not_rated_until_said_not_incised(title, held):
     # treated dimension lumber is often incised (common practice), and incised lumber takes
     # Ci 0.80 on Fb (NDS 2018 4.3.8, from memory): rated as plain lumber it was 25 % high
@@ -1395,6 +1398,19 @@ def test_preservative_treated_lumber_is_not_rated_until_said_not_incised(title, 
     if held:  # the tag says the stock has no incisions
         tagged = text.replace("\n[beam]", '\ntags = ["not-incised"]\n[beam]', 1)
         assert tagged != text and capacity(parse_job_text(tagged)).rated
+
+
+def test_a_pt_tag_holds_treated_lumber_and_a_treated_timber_is_not_held():
+    # tags are written in lower case: "pt" says pressure treated as "PT" does; Ci is for
+    # dimension lumber (NDS 2018 4.3.8, from memory), so a 6x8 timber is not held for it
+    from shopbeam.design.capacity import capacity
+
+    text = job_text(section="2x10", material="DF-L-2")
+    tagged = text.replace("\n[beam]", '\ntags = ["pt"]\n[beam]', 1)
+    assert tagged != text and not capacity(parse_job_text(tagged)).rated
+    timber = job_text(section="6x8", material="DF-L-2").replace(
+        'title = "shelf"', 'title = "Pressure-treated 6x8 beam"')
+    assert capacity(parse_job_text(timber)).rated
 
 
 @pytest.mark.parametrize("key, value", [("selfweight", "false"), ("case", '"dead"')])

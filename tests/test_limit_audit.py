@@ -687,3 +687,12 @@ def test_a_round_tube_under_a_point_load_says_its_wall_is_not_checked(material):
                                               uniform_load(6, "-50 lbf/ft") + 'case = "dead"\n')))
     wall = [u for u in dead.unchecked if u.name.endswith("wall under a concentrated force")]
     assert wall and not wall[0].blocks_rating
+
+
+def test_a_typed_in_metal_custom_section_is_not_rated_on_first_yield():
+    # a custom section's walls and flanges are not known: whether they buckle before first
+    # yield cannot be told (a built-in steel or aluminium custom section is held too)
+    text = simple_span("restrained = true\n" + TYPED_METAL + '\n[beam.section]\n'
+                       'shape = "custom"\narea = "1.5 in^2"\nix = "3 in^4"\nsx = "1.5 in^3"', 4)
+    cap = capacity(parse_job_text(text))
+    assert any(r.startswith("local buckling") for r in cap.not_rated), cap.not_rated

@@ -486,3 +486,30 @@ def test_aluminium_said_to_be_welded_is_not_rated_until_the_key_says_so():
     # a denial is not a weld
     assert capacity(parse_job_text(ALU_BAR.format(notes="No welds on the bar.",
                                                   welded=""))).rated
+
+
+@pytest.mark.parametrize("notes", ["Clips TIG'd on at mid-span.", "GTAW clips at mid-span.",
+                                   "Tacked-on clips at mid-span.", "MIG'd clips."])
+def test_aluminium_welded_in_shop_words_is_not_rated(notes):
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    assert not capacity(parse_job_text(ALU_BAR.format(notes=notes, welded=""))).rated
+
+
+def test_aluminium_said_welded_in_a_support_label_or_a_typed_in_alloy_is_not_rated():
+    # a support's label counts as the notes do; a typed-in alloy with no fy_welded cannot
+    # be checked at the weld zone's strength at all (rated 39 % high on the unwelded fy)
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = ALU_BAR.format(notes="Bolted.", welded="")
+    label = text.replace('at = "0 ft"\ntype = "pin"', 'at = "0 ft"\ntype = "pin"\n'
+                         'label = "welded to the post"')
+    assert label != text and not capacity(parse_job_text(label)).rated
+    typed = ALU_BAR.format(notes="A lug welded on at mid-span.", welded="").replace(
+        'material = "6061-T6"', 'material = { kind = "aluminum", e = "10100 ksi", '
+        'fy = "35 ksi", fu = "38 ksi", density = "169 lb/ft^3" }')
+    job = parse_job_text(typed)
+    assert any("no fy_welded" in p.message for p in job.warnings)
+    assert not capacity(job).rated

@@ -263,7 +263,17 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
                               "(brace the compression flange all along and say braced = true, "
                               "or use basis = \"asd\" with a catalog section)",
                               "AISC 360-16 chapter F"),)
-        if sec.shape not in ("round-bar", "rect-bar"):
+        if sec.shape == "custom":
+            # its walls and flanges are not known: whether they buckle before first yield
+            # cannot be told, so no rating rests on first yield (as a custom section of a
+            # built-in steel or aluminium is held)
+            unc += (Unchecked("local buckling", "the first-yield basis does not check thin "
+                              "walls or flanges for local buckling, and a custom section's "
+                              "are not known, so whether they buckle before first yield "
+                              "cannot be told; give the section by its shape and sizes "
+                              "([beam.section] shape = \"rect-tube\", ...) or have it "
+                              "checked", "AISC 360-16 B4, chapter F", blocks_rating=True),)
+        elif sec.shape not in ("round-bar", "rect-bar"):
             slender = _slender_wall(sec, mat)
             unc += (Unchecked("local buckling", "the first-yield basis does not check thin "
                               "walls or flanges for local buckling"

@@ -3602,25 +3602,43 @@ def _aluminium_fixed_end(r: _Reader, beam: dict, material, supports, system: str
            "end is weaker where the moment is largest. Write welded = true or false")
 
 
-_WELD_WORDS = re.compile(r"\b(?:(?:tig|mig)[- ]?)?weld(?:s|ed|ing|ments?)?\b", re.IGNORECASE)
+_WELD_WORDS = re.compile(
+    r"\b(?:(?:(?:tig|mig|spot|stitch|seam|fillet|plug)[- ]?)?weld(?:s|ed|ing|ments?)?|"
+    r"(?:tig|mig)(?:'d|ed|[- ]on)|gtaw|gmaw|smaw|fcaw|"
+    r"tack(?:s|ed)?[- ](?:welded|on)|tack welds?)\b", re.IGNORECASE)
 
 
 def _aluminium_weld_words(r: _Reader, beam: dict, material, title, notes, tags, raw_loads,
-                          system: str) -> None:
+                          system: str, more=()) -> None:
     """An aluminium member whose words say welded ("a lug welded on top at mid-span", "ends
     welded to the frame") and no `welded` key: welding anneals the metal near the weld to
     well under half its temper's yield (6061-T6 Fty 35 ksi, welded Ftyw 15 ksi: ADM 2015
     Table A.3.3/A.3.4, from memory), so a figure on the unwelded strength may be twice what
     the weld zone carries. Held until the job says which, as the wood's wet words are;
     `welded = false` beside the words is warned (the words may be about something else)."""
-    if getattr(material, "kind", "") != "aluminum" or not getattr(material, "fy_welded", None):
+    if getattr(material, "kind", "") != "aluminum":
         return
     said = _words_found(_WELD_WORDS, title, notes, tags, raw_loads)
+    for where, text in more:  # a support's label, the [project] block
+        if isinstance(text, str) and _search(_WELD_WORDS, _as_words(text)):
+            said.append(f"{where}: {text!r}")
     if not said:
+        return
+    where = "; ".join(said[:2])
+    if not getattr(material, "fy_welded", None):
+        # a typed-in aluminium with no welded strength: the weld zone's cannot be checked
+        if beam.get("welded") is not False:
+            r.hold(f"the job's words say welded ({where}), but the typed-in aluminium gives no "
+                   "fy_welded: welding anneals the metal near the weld to well under half its "
+                   "temper's yield (6061-T6 Fty 35 ksi, welded Ftyw 15 ksi: ADM 2015 Table "
+                   "A.3.3/A.3.4, from memory), and the checks used the unwelded fy. Give "
+                   "fy_welded under [beam.material] and welded = true, or write welded = false "
+                   "if no weld is within 1 in of the highly stressed parts",
+                   "beam.material", f"the words say welded ({where}) on a typed-in aluminium "
+                   "with no fy_welded: give fy_welded and welded = true, or welded = false")
         return
     weak = units.fmt(material.fy_welded, "stress", system)
     strong = units.fmt(material.fy, "stress", system)
-    where = "; ".join(said[:2])
     if "welded" not in beam:
         r.hold(f"the job's words say welded ({where}) but [beam] has no welded key: a weld on "
                f"an aluminium member anneals it nearby (yield {weak} against {strong} "
@@ -4040,10 +4058,11 @@ _TREATED_WORDS = re.compile(r"\b(fire[- ]?retardant(?:[- ]treated)?|frtw?|"
 # practice), and incised lumber takes Ci (NDS 2018 4.3.8), so it is held until the tags say
 # the stock is not incised (or untreated: the words are about something else)
 _PRESERVED_WORDS = re.compile(
-    r"\b(pressure[- ]?treated|preservative[- ]?treated|wolmanized|"
-    r"treated (?:lumber|wood|timber|stock|joists?|boards?|posts?|planks?|2x\d+|4x\d+)|"
-    r"(?:cca|acq|mca|ca-?[bc])(?:[- ]treated)?)\b", re.IGNORECASE)
-_PT = re.compile(r"\bPT\b")  # "PT" in capitals: pressure treated (not "pt", a point)
+    r"\b(pressure[- ]?treated|preservative[- ]?treated|wolmanized|green[- ]treated|kdat|"
+    r"copper azole|ground[- ]contact|(?:cca|acq|mca|ca-?[bc])(?:[- ]treated)?|"
+    r"(?<!heat-)(?<!heat )treated(?! as\b))\b|\bp\.t\.(?!\w)", re.IGNORECASE)
+# "PT" in capitals: pressure treated (not "pt", a point; not a part number "PT-450")
+_PT = re.compile(r"\bPT\b(?!-?\d)")
 NOT_INCISED = "not-incised"  # the tag that says preservative-treated stock is not incised
 _HOT_WORDS = re.compile(
     r"\b(furnaces?|ovens?|kilns?(?![- ]?dried)|boilers?(?! parts?)|"
@@ -4069,7 +4088,7 @@ _COOL_NEAR = re.compile(r"\b(well away from|far from|(?:under|below) 100|separat
                         re.IGNORECASE)
 
 
-def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
+def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> None:
     """A wood member whose words say it is wet or hot in service while its keys say nothing:
     held until wet_service or temperature says so either way."""
     whole = [_as_words(t) for t in (title, notes, *tags)]
@@ -4119,6 +4138,11 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags) -> None:
     preserved = "" if treated else next(
         (m.group(0) for m in [*(_search(_PRESERVED_WORDS, t) for t in whole),
                               *(_PT.search(t) for t in texts)] if m), "")
+    if not treated and not preserved:
+        preserved = next((f"tag {t!r}" for t in tags if normal_tag(t) in ("pt", "p.t.")), "")
+    nominal = catalog.lumber_nominal(section) if section is not None else None
+    if nominal is not None and nominal[0] >= 5:
+        preserved = ""  # a timber (5 in and thicker): Ci is for dimension lumber (NDS 4.3.8)
     said_not = any(re.search(r"\b(?:not|no|non|un)[- ]?incis\w*", t, re.IGNORECASE)
                    for t in whole)  # "preservative treated (ACQ), not incised"
     if preserved and not said_not and not kept & {"untreated", NOT_INCISED}:
@@ -4174,7 +4198,7 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
-    _service_words(r, beam, title, notes, tuple(tags) + tuple(more))
+    _service_words(r, beam, title, notes, tuple(tags) + tuple(more), section)
     # a metal shape in wood is refused (_family_mismatch): said once, by that error
     if section is not None and section.shape != "rect-bar" \
             and not catalog.not_made_in(section, material):
@@ -4587,7 +4611,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                "6061-T6, is weakened by welding in these checks; the welds themselves are not "
                "checked", "beam.welded")
     _aluminium_fixed_end(r, beam, material, supports, system)
-    _aluminium_weld_words(r, beam, material, title, notes, tags, raw_loads, system)
+    _aluminium_weld_words(r, beam, material, title, notes, tags, raw_loads, system, more=[
+        *((f"supports[{i}].label", sp.get("label")) for i, sp in enumerate(
+            data.get("supports") if isinstance(data.get("supports"), list) else ())
+          if _is_table(sp)),
+        *((f"project.{k}", v) for k, v in (data.get("project") or {}).items()
+          if _is_table(data.get("project")))])
     if length is not None:
         for key, message in geometry_problems(length, supports, loads,
                                               lambda x: units.fmt(x, "length", system)):
