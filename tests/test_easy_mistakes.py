@@ -369,7 +369,7 @@ def test_steel_shape_in_lumber_is_refused():
     assert "not made in wood" in str(e.value)
 
 
-@pytest.mark.parametrize("section", ["FB3x1/2", "SQ2", "RB2"])
+@pytest.mark.parametrize("section", ["FB3x1/2", "SQ2", "RB2", "flat bar 4x1/2", "square-bar 1"])
 def test_a_steel_bar_stock_size_in_lumber_is_refused(section):
     # FB3x1/2 in DF-L No.2 was checked as 2x dimension lumber (CF 1.5) with no message
     with pytest.raises(InputErrors) as e:

@@ -1027,8 +1027,12 @@ def _described(shape_word: str, dims_text: str, designation: str, key: str,
             b, note = gauges.parse_wall(toks[1], key, "plate")
         else:
             b = length(toks[1])
+        # a flat or square bar written out is bar stock, as FB and SQ are (not_made_in)
+        stock = "flat bar stock size, " if shape == "flat-bar" else (
+            "square bar stock size, " if shape == "square-bar" else "")
         return S.rect_bar(h, b, designation=designation.strip(), source=(
-            "computed from dimensions (" + "; ".join(x for x in (unit_note, note) if x) + ")"))
+            stock + "computed from dimensions ("
+            + "; ".join(x for x in (unit_note, note) if x) + ")"))
     except ValueError as exc:
         raise InputError(f"{designation!r}: {exc}", key) from None
 
