@@ -697,14 +697,24 @@ def travel_words(job: Job, ss) -> str:
 TOP_FLANGE_CHECK = "bending, top-flange loads"  # an unbraced cantilever's top-flange loads
 
 
-def top_flange_check(job: Job, ss, g, travel_words: str = "") -> Check:
+# the lateral-torsional buckling rule each flexure's figure comes from (Flexure.ltb[0])
+_LTB_RULES = {"F2": ("AISC 360-16 F2", "AISC 360-16"), "F4": ("AISC 360-16 F4", "AISC 360-16"),
+              "F7": ("AISC 360-16 F7.4", "AISC 360-16"),
+              "F11": ("AISC 360-16 F11.2", "AISC 360-16"),
+              "ADM": ("ADM 2015 F.2", "Aluminum Design Manual 2015 (from memory)"),
+              "NDS": ("NDS 2018 3.3.3", "NDS 2018 (from memory)")}
+
+
+def top_flange_check(job: Job, ss, g, travel_words: str = "", st=None) -> Check:
     """The check of an unbraced cantilever whose loads bear on its top flange, from one entry
     `g` of `cantilever_top_demands`: its moment against the strength that loading leaves it
-    (AISC 360-16 F2 at about 2.5 L, `TOP_LOAD_K`)."""
+    (the section's own lateral-torsional buckling rule at about 2.5 L, `TOP_LOAD_K`)."""
     a, b, kl, now, top, demand, at, rolled = g
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    ltb = getattr(getattr(st, "flexure", None), "ltb", None)
+    rule, src = _LTB_RULES.get(ltb[0] if ltb else "F2", _LTB_RULES["F2"])
     return Check(TOP_FLANGE_CHECK, demand, top, "N*m",
-                 f"AISC 360-16 F2 (F1 Cb 1.0) with the effective length of a cantilever "
+                 f"{rule} (Cb 1.0) with the effective length of a cantilever "
                  f"loaded on its top flange, about {kl:g} x L over {f(a)} to {f(b)} (SSRC "
                  f"Guide / BS 5950-1 Table 14, from memory): M <= {f(top, 'moment')}, "
                  f"against {f(now, 'moment')} with the loads at the shear centre"
@@ -712,8 +722,8 @@ def top_flange_check(job: Job, ss, g, travel_words: str = "") -> Check:
                  at, detail="the loads bear on the top flange of the unbraced cantilever, "
                  "which destabilises it; brace the tip (beam.braces) or hang a point load "
                  "below the flange (flange = \"bottom\") to rate it on the bending check",
-                 clause="AISC 360-16 F2, F1; effective length for top-flange loading",
-                 source="AISC 360-16; SSRC Guide / BS 5950-1 Table 14 (from memory)",
+                 clause=f"{rule}; effective length for top-flange loading",
+                 source=f"{src}; SSRC Guide / BS 5950-1 Table 14 (from memory)",
                  params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})
 
 
@@ -725,7 +735,7 @@ def top_flange_checks(job: Job, st, ss) -> list[Check]:
         return []
     ss = ss or loading.state_set(job)
     words = travel_words(job, ss) if job.moving else ""
-    return [top_flange_check(job, ss, g, words)
+    return [top_flange_check(job, ss, g, words, st)
             for g in cantilever_top_demands(job, st, limits, ss, 1.0)]
 
 

@@ -807,7 +807,7 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
         k2 = math.nextafter(k2, 0.0)
     g = worst(k2)
     e = evaluate(job, k2, section, ss, st)
-    c = top_flange_check(job, ss, g, _travel_words(job, ss) if job.moving else "")
+    c = top_flange_check(job, ss, g, _travel_words(job, ss) if job.moving else "", st)
     return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
                    note="", stepped="", method=res.method + "; lowered to where the cantilever's moment reaches "
                    "the strength its top-flange loads leave it (a bracketed root: the moment "
