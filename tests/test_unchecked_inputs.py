@@ -573,6 +573,9 @@ def test_a_load_placed_in_metres_on_a_job_in_feet_is_not_rated():
     slipped = capacity(parse_job_text(text.format(at="1.2 m")))
     assert not slipped.rated and any("1.2 m" in r for r in slipped.not_rated)
     assert capacity(parse_job_text(text.format(at="1.2 ft"))).rated
+    # zero is zero in either system: a support at "0 m" on a job in feet holds nothing
+    zero = text.format(at="1.2 ft").replace('at = "0 ft"', 'at = "0 m"')
+    assert zero != text.format(at="1.2 ft") and capacity(parse_job_text(zero)).rated
 
 
 @pytest.mark.parametrize("dead, held", [
