@@ -2562,8 +2562,7 @@ def _mixed_unit_systems(r: _Reader, data: dict, system: str) -> None:
 
     def look(key: str, v) -> None:
         for i, x in enumerate(v if isinstance(v, list) else [v]):
-            if isinstance(x, str) and re.fullmatch(r"\s*[-+]?0*\.?0*\s*[^\d.\s].*", x) \
-                    and re.search(r"\d", x):
+            if isinstance(x, str) and re.fullmatch(r"\s*[-+]?(?:0+\.?0*|\.0+)\s*[^\d.\s].*", x):
                 continue  # zero is zero in either system ("0 ft" on a metric job)
             if isinstance(x, str) and other.search(x):
                 found.append((key if not isinstance(v, list) else f"{key}[{i}]", x))
