@@ -888,7 +888,8 @@ def test_a_hung_trolley_adds_its_moment_to_a_load_on_the_top_flange():
     from pathlib import Path
 
     from shopbeam.design.analysis import moving_top_worst, span_top_limits, span_top_strength
-    from shopbeam.design.capacity import _all_on, _span_top
+    from shopbeam.design.analysis import all_on_moment as _all_on
+    from shopbeam.design.capacity import _span_top
     from shopbeam.design.checks import strengths
     from shopbeam.design.loading import state_set
 

@@ -126,6 +126,11 @@ def test_sweep_agrees_with_checking_each_section(text, kind):
         j = replace(job, section=r.section)
         ev = evaluate(j)
         direct = max(c.ratio for c in ev.checks)
+        if r.checked == "screen":
+            # (the platform's overhang is an unbraced cantilever loaded on its top flange:
+            # its rows are screened by the batch and checked in full lightest first)
+            assert r.ratio <= direct * (1 + 1e-9)
+            continue
         assert r.ratio == pytest.approx(direct, rel=1e-9)
         assert r.governing == max(ev.checks, key=lambda c: c.ratio).name
         assert r.factor == pytest.approx(capacity(j).factor, rel=1e-9)
