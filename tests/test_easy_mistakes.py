@@ -1386,7 +1386,7 @@ def test_fire_retardant_or_incised_lumber_is_not_rated(title, held):
     ("Shelf joist, 8 pt spacing", False), ("Shelf for heat-treated parts", False),
     ("Treated deck joist", True), ("P.T. 2x10 joist", True), ("Joist, copper azole", True),
     ("Green treated joist", True), ("Joist treated as a simple span", False),
-    ("PT-450 shelf joist", False)])
+    ("PT-450 shelf joist", False), ("Joist, not fire-retardant treated", False)])
 def test_preservative_treated_lumber_is_not_rated_until_said_not_incised(title, held):
     # treated dimension lumber is often incised (common practice), and incised lumber takes
     # Ci 0.80 on Fb (NDS 2018 4.3.8, from memory): rated as plain lumber it was 25 % high

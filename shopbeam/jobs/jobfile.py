@@ -4062,7 +4062,8 @@ _TREATED_WORDS = re.compile(r"\b(fire[- ]?retardant(?:[- ]treated)?|frtw?|"
 _PRESERVED_WORDS = re.compile(
     r"\b(pressure[- ]?treated|preservative[- ]?treated|wolmanized|green[- ]treated|kdat|"
     r"copper azole|ground[- ]contact|(?:cca|acq|mca|ca-?[bc])(?:[- ]treated)?|"
-    r"(?<!heat-)(?<!heat )treated(?! as\b))\b|\bp\.t\.(?!\w)", re.IGNORECASE)
+    r"(?<!heat-)(?<!heat )(?<!retardant-)(?<!retardant )treated(?! as\b))\b|\bp\.t\.(?!\w)",
+    re.IGNORECASE)  # ("fire-retardant treated" is the FRT rule's, with its own denials)
 # "PT" in capitals: pressure treated (not "pt", a point; not a part number "PT-450")
 _PT = re.compile(r"\bPT\b(?!-?\d)")
 NOT_INCISED = "not-incised"  # the tag that says preservative-treated stock is not incised
