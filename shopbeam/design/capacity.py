@@ -790,11 +790,22 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
         return max(got, key=lambda g: g[5] / g[4]) if got else None
 
     g = worst(k)
-    if g is None or g[5] <= g[4]:
+    if g is None:
         return res
+    words = _travel_words(job, ss) if job.moving else ""
+
+    def listed(r: CapacityResult, gk) -> CapacityResult:
+        """The check among the checks at the factor, as the report lists it."""
+        c = top_flange_check(job, ss, gk, words, st)
+        return replace(r, evaluation=replace(r.evaluation,
+                                             checks=tuple(r.evaluation.checks) + (c,)))
+
+    if g[5] <= g[4]:
+        return listed(res, g)  # it does not come first: listed at the factor found
     g0 = worst(0.0)
     if g0[5] >= g0[4]:
-        return res  # the dead loads alone pass it: nothing to post (said as a reason)
+        return listed(res, g)  # the dead loads alone pass it: nothing to post (a reason)
+
     def h(kk):
         gk = worst(kk)
         return gk[5] / gk[4] - 1.0
@@ -807,7 +818,7 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
         k2 = math.nextafter(k2, 0.0)
     g = worst(k2)
     e = evaluate(job, k2, section, ss, st)
-    c = top_flange_check(job, ss, g, _travel_words(job, ss) if job.moving else "", st)
+    c = top_flange_check(job, ss, g, words, st)
     return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
                    note="", stepped="", method=res.method + "; lowered to where the cantilever's moment reaches "
                    "the strength its top-flange loads leave it (a bracketed root: the moment "
