@@ -1364,3 +1364,31 @@ deflection = "L/240"
     # 3.5 x 9.25 in dressed, S = b d^2 / 6 = 49.91 in^3 (NDS Supplement Table 1B, from memory)
     m = 2 * 1050 * (5 - 0.5) ** 2 / 10 * 12  # lbf*in
     assert dead.demand / 6894.757293168 == pytest.approx(m / (3.5 * 9.25 ** 2 / 6), rel=1e-6)
+
+
+WT_ARM = """schema = 1
+title = "WT arm"
+tags = ["not-lifting", "not-rack"]
+[beam]
+length = "4 ft"
+section = {{ designation = "WT4X9", flange = "{flange}" }}
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "uniform"
+value = "-100 lbf/ft"
+"""
+
+
+def test_a_tee_arm_with_its_stem_up_and_loads_on_it_is_not_rated():
+    # the stem's tip stands well above the shear centre: a load there destabilises the arm
+    # (about 2.5 L, SSRC Guide / BS 5950-1 Table 14, from memory), and F9 takes the load at
+    # the shear centre with no strength at that length worked out
+    up = capacity(parse_job_text(WT_ARM.format(flange="bottom")))
+    assert any(r.startswith("lateral-torsional buckling of a cantilever loaded on its top")
+               for r in up.not_rated), up.not_rated
+    down = capacity(parse_job_text(WT_ARM.format(flange="top")))  # the flange on top
+    assert not any(r.startswith("lateral-torsional buckling of a cantilever loaded on its "
+                                "top") for r in down.not_rated)

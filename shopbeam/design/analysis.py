@@ -402,7 +402,7 @@ def unchecked_for(job: Job, st=None) -> list[Unchecked]:
     st = st or strengths(job)
     sec = st.section
     return list(st.unchecked) + local_unchecked(job, sec) + open_unchecked(job, st) + \
-        aluminum_unchecked(job, sec) + floor_unchecked(job) \
+        aluminum_unchecked(job, sec) + floor_unchecked(job) + open_top_unchecked(job, st) \
         + material_unchecked(job, st) + twist_unchecked(job, st) + use_unchecked(job)
 
 
@@ -685,6 +685,35 @@ def cantilever_top_demands(job, st, limits, ss, k: float) -> list[tuple]:
             demand = ex.abs_max
             at = ex.max_at if abs(ex.max) >= abs(ex.min) else ex.min_at
         out.append((a, b, kl, now, top, demand, at, (a, b) in ranges))
+    return out
+
+
+def open_top_unchecked(job: Job, st) -> list[Unchecked]:
+    """An unbraced tee or angle cantilever with its stem or leg up and loads bearing on its
+    top: F9 and F10 take the load at the shear centre, and one on the stem's tip, well above
+    it, destabilises the member, but no strength at the longer effective length (about 2.5 L,
+    `TOP_LOAD_K`) is worked out for these shapes, so no rating rests on it (blocking)."""
+    sec = st.section if getattr(st, "section", None) is not None else job.section
+    if sec.shape not in ("tee", "angle") or job.braced or job.restrained:
+        return []
+    if not sec.sx_top < sec.sx_bot:
+        return []  # the flange (or the heel) on top: the load sits by the shear centre
+    hung = set(getattr(job, "hung", ()) or ())
+    out = []
+    for a, b, free, _l1, _why in st.ltb_segments:
+        on = loads_on(job, a, b) if free else []
+        if on and not all(ld.key in hung for ld in on):
+            f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
+            out.append(Unchecked(
+                "lateral-torsional buckling of a cantilever loaded on its top",
+                f"the {sec.shape} cantilever {f(a)} to {f(b)} is unbraced at its tip and its "
+                "loads bear on its top, which destabilises it (effective length about "
+                f"{TOP_LOAD_K:g} x L); the {sec.shape}'s bending rule takes the load at the "
+                "shear centre and its strength at that length is not worked out here, so no "
+                "rating is posted. Brace the tip (beam.braces), hang the load below, or have "
+                "it checked",
+                "AISC 360-16 " + ("F9" if sec.shape == "tee" else "F10")
+                + "; SSRC Guide / BS 5950-1 Table 14 (from memory)", blocks_rating=True))
     return out
 
 
