@@ -472,8 +472,23 @@ class SpanView(RowsView):
         return f"{row.get('type', '?')} at {row.get('at', '?')}{k}"
 
 
+    # the form's examples in the job's units (a US example typed on a metric job is held as
+    # a length in the other system)
+    EXAMPLES = {"us": {"beam.length": "e.g. 12 ft or 10' 6\"", "beam.braces": "e.g. 4 ft, 8 ft",
+                       "beam.bearing": "e.g. 4 in (all supports)", "support.at": "e.g. 0 ft",
+                       "support.stiffness": "e.g. 2000 lbf/in",
+                       "support.bearing": "e.g. 4 in (this one)"},
+                "si": {"beam.length": "e.g. 3.6 m or 3600 mm", "beam.braces": "e.g. 1.2 m, 2.4 m",
+                       "beam.bearing": "e.g. 100 mm (all supports)", "support.at": "e.g. 0 m",
+                       "support.stiffness": "e.g. 350 kN/m",
+                       "support.bearing": "e.g. 100 mm (this one)"}}
+
     def show(self, session) -> None:
         doc = session.doc
+        examples = self.EXAMPLES["si" if doc.get("units") == "si" else "us"]
+        for f in self.fields():
+            if f.key in examples and f.input.placeholder != examples[f.key]:
+                f.input.placeholder = examples[f.key]
         for f in self.fields():
             if f.key == "beam.length":
                 f.set_value(doc.get("beam.length", ""))
