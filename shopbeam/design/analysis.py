@@ -350,8 +350,12 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     out = []
     tol = 1e-9 * job.length
     cite = "ADM 2015 F.2/F.3" if fl.ltb[0] == "ADM" else "AISC 360-16 F1"
+    # a cantilever whose loads bear on its top is checked at that length (the check
+    # `bending, top-flange loads`): the note is for the others (loads hung below, where it
+    # says what loads on top would do)
+    checked = {(x[0], x[1]) for x in cantilever_top_limits(job, st)}
     for a, b, free, _l1, _why in st.ltb_segments:
-        if not free:
+        if not free or (a, b) in checked:
             continue
         held = [s.at for s in job.supports if s.takes_force]
         root = a if any(abs(h - a) <= tol for h in held) else b

@@ -636,8 +636,10 @@ def solved_gaps(job, st, ss, k: float) -> tuple[str, ...]:
     if not (hog or top or span or fat) or not math.isfinite(k) or k <= 0:
         return ()
     ss = ss or state_set(job)
-    out = _hogging(job, st, hog, ss, k) + _cantilever_top(job, st, top, ss, k) \
-        + _span_top(job, st, span, ss, k) + (_fatigue(job, st, ss, k) if fat else ())
+    # (the cantilever's top-flange strength at k is a check capacity rates on, lowering the
+    # factor to it: only the dead loads alone past it withhold the rating, below)
+    out = _hogging(job, st, hog, ss, k) + _span_top(job, st, span, ss, k) \
+        + (_fatigue(job, st, ss, k) if fat else ())
     # the dead loads alone (k = 0) too: a live load that relieves them (wind uplift on a
     # roof's dead weight) can leave the rated state inside a limit the unloaded one passes
     out += _hogging(job, st, hog, ss, 0.0) + _cantilever_top(job, st, top, ss, 0.0) \
@@ -746,8 +748,8 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     exceed the lower strength that loading leaves it (`limits`:
     `analysis.cantilever_top_limits`; the moments of `_cantilever_top_demands`). `capacity`
     rates the job at that strength where it can (`_cantilever_top_rate`), so this is left to
-    say only what cannot be rated so (the dead loads alone past it) and a sizing sweep's
-    rows, whose factor is the batched search's."""
+    say only what cannot be rated so: the dead loads alone past it (`solved_gaps` asks at
+    k = 0)."""
     if not limits:
         return ()
     out = []
@@ -756,7 +758,7 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
         if demand > top:
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
-                       f"loads on the top flange not checked: {_at(k)} "
+                       f"loads on the top flange: {_at(k)} "
                        f"its moment {f(demand, 'moment')}"
                        + (_travel_words(job, ss) if rolled else "")
                        + f" exceeds the {f(top, 'moment')} that "
