@@ -470,8 +470,6 @@ class JobScreen(Screen):
         self._stray_timer = None
         if not text.strip():
             return  # spaces alone: nothing worth a notice
-        from textual.notifications import Notification, Notify
-
         now = time.monotonic()
         prev = self._stray_note
         if prev is not None and prev[2] == self._stray_where and now - prev[3] <= \
@@ -481,14 +479,13 @@ class JobScreen(Screen):
         else:
             self.app.bell()
         digits = any(ch.isdigit() for ch in text)
-        note = Notification(
+        note = self._note(
             f"Not typed anywhere: \"{escapes.shown(text)}\"{self._stray_after}. The focus was "
             f"on {self._stray_where}, not in a text field. Tab goes to the next field; F2 to "
             "F12 change views." + (" A digit within two seconds of a key not used is taken "
                                    "as text, not as a view: press it again to change views."
                                    if digits else ""),
-            "keys not used", "warning", 10, markup=False)
-        self.app.post_message(Notify(note))
+            title="keys not used", severity="warning", timeout=10)
         self._stray_note = (note, text, self._stray_where, now)
 
     def _where(self, widget) -> str:
@@ -1133,11 +1130,13 @@ class JobScreen(Screen):
             f"removed {table[:-1]} {index + 1} - ctrl+z puts it back", timeout=8)]
         self.changed()
 
-    def _note(self, message: str, timeout: float = 8):
-        """A notice, returned so that it can be taken down when it is no longer so."""
+    def _note(self, message: str, title: str = "", severity: str = "information",
+              timeout: float = 8):
+        """A notice, returned so that it can be taken down when it is no longer so (App.notify
+        returns nothing)."""
         from textual.notifications import Notification, Notify
 
-        note = Notification(message, "", "information", timeout, markup=False)
+        note = Notification(message, title, severity, timeout, markup=False)
         self.app.post_message(Notify(note))
         return note
 
