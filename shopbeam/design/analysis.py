@@ -702,11 +702,9 @@ def open_top_unchecked(job: Job, st) -> list[Unchecked]:
         return []
     if not sec.sx_top < sec.sx_bot:
         return []  # the flange (or the heel) on top: the load sits by the shear centre
-    hung = set(getattr(job, "hung", ()) or ())
     out = []
     for a, b, free, _l1, _why in st.ltb_segments:
-        on = loads_on(job, a, b) if free else []
-        if on and not all(ld.key in hung for ld in on):
+        if free and loaded_on_top(job, a, b):
             f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
             out.append(Unchecked(
                 "lateral-torsional buckling of a cantilever loaded on its top",
@@ -770,6 +768,14 @@ def top_flange_checks(job: Job, st, ss) -> list[Check]:
     words = travel_words(job, ss) if job.moving else ""
     return [top_flange_check(job, ss, g, words, st)
             for g in cantilever_top_demands(job, st, limits, ss, 1.0)]
+
+
+def loaded_on_top(job: Job, a: float, b: float) -> bool:
+    """Whether a load of the job bears on a..b and not every one there hangs below (a load
+    hung from the bottom flange or a lug does not destabilise the length)."""
+    on = loads_on(job, a, b)
+    hung = set(getattr(job, "hung", ()) or ())
+    return bool(on) and not all(ld.key in hung for ld in on)
 
 
 def loads_on(job: Job, a: float, b: float) -> list:
