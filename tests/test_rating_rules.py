@@ -6,6 +6,7 @@ from __future__ import annotations
 
 import math
 import re
+from dataclasses import replace
 
 import pytest
 
@@ -268,6 +269,35 @@ def test_a_cantilever_arm_loaded_on_its_top_flange_is_rated_no_higher_than_that_
     braced = capacity(parse_job_text(W_ARM.replace('material = "A992"',
                                                    'material = "A992"\nbraces = ["6 ft"]')))
     assert not [r for r in braced.not_rated if "top flange" in r]
+
+
+def test_a_brace_on_the_top_flange_only_does_not_lift_a_cantilevers_top_flange_rating():
+    # a cantilever's top flange is its tension flange: a brace there (at the tip or along the
+    # arm) leaves the bottom flange free, and with the load on top the effective length stays
+    # about 2.5 L, as for a free tip (SSRC Guide / BS 5950-1 Table 14, tip laterally restrained
+    # on the top flange only, destabilising load; from memory). So the arm rates as if the
+    # brace were not there; braced on both flanges it is rated on the bending check.
+    free = capacity(parse_job_text(W_ARM))
+    for where in ('["6 ft"]', '["3 ft"]', '["3 ft", "6 ft"]'):
+        top = capacity(parse_job_text(W_ARM.replace(
+            'material = "A992"', f'material = "A992"\nbraces = {where}\nbraces_flange = "top"')))
+        assert top.governing.name == "bending, top-flange loads", where
+        assert "0 ft to 6 ft" in top.governing.formula
+        assert top.factor == pytest.approx(free.factor, rel=1e-9), where
+        assert "braces_flange = \"both\"" in top.governing.detail
+        job = top.job
+        assert [c for c in analyze(job).checks if c.name == "bending, top-flange loads"]
+        # sizing checks it in full too: the lightest W it picks holds at 2.5 L
+        from shopbeam.design.sizing import size
+        rows = size(job, "W").rows
+        pick = next(r for r in rows if r.ok)
+        assert pick.checked == "full"
+        got = analyze(replace(job, section=pick.section))
+        assert [c for c in got.checks if c.name == "bending, top-flange loads" and c.ok]
+    both = capacity(parse_job_text(W_ARM.replace(
+        'material = "A992"', 'material = "A992"\nbraces = ["6 ft"]\nbraces_flange = "both"')))
+    assert both.governing.name != "bending, top-flange loads"
+    assert both.factor > 2 * free.factor
 
 
 def test_a_short_overhang_whose_top_flange_figure_is_not_reached_keeps_the_rating():
@@ -662,11 +692,24 @@ def test_braces_said_to_hold_the_top_flange_leave_the_bottom_flange_to_buckle_un
     # the AISC Shapes Database v15.0 W8X18 row (Zx 17.0, Sx 15.2, ry 1.23, rts 1.43 in, J 0.172,
     # ho 7.81): Lp = 1.76 ry sqrt(E/Fy) = 52.1 in, Lr = 161.8 in, Mn = 850 - (850 - 532)
     # (96 - 52.1)/(161.8 - 52.1) = 722.8 kip*in, / 1.67 = 36.07 kip*ft (Cb 1.0)
-    top = capacity(parse_job_text(BRACED_ARM.format(flange='braces_flange = "top"')))
+    # (the load hung below the bottom flange at the tip, so that the cantilever's top-flange
+    # rule, which comes first for loads on top, does not apply)
+    hung = BRACED_ARM.replace('type = "uniform"\nvalue = "-1000 lbf/ft"',
+                              'type = "point"\nat = "8 ft"\nvalue = "-4000 lbf"\n'
+                              'flange = "bottom"\nlug = true').replace(
+        'title = "wall bracket"', 'title = "wall bracket"\ntags = ["not-lifting"]')
+    top = capacity(parse_job_text(hung.format(flange='braces_flange = "top"')))
     why = [r for r in top.not_rated if "under hogging moment" in r]
     assert why and 'braces_flange = "top"' in why[0] and "0 ft to 8 ft" in why[0]
     m = re.search(r"exceeds the (\d+) lbf\*ft", why[0])
     assert m and float(m.group(1)) == pytest.approx(36070, rel=2e-3)
+    # the same braces with the load on the top flange: the cantilever's top-flange rule
+    # (about 2.5 L over the whole arm, the top-flange braces not counted) comes first, below
+    # the hogging figure, and the rating rests on it
+    on_top = capacity(parse_job_text(BRACED_ARM.format(flange='braces_flange = "top"')))
+    assert on_top.rated and on_top.governing.name == "bending, top-flange loads"
+    assert "0 ft to 8 ft" in on_top.governing.formula
+    assert 1000 * on_top.factor * 8 ** 2 / 2 < 36070
     # held against twist at the braces (both flanges): rated, and the job not saying which
     # gets the caution that names the key
     both = capacity(parse_job_text(BRACED_ARM.format(flange='braces_flange = "both"')))

@@ -14,7 +14,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for, normal_tag
 from shopbeam.design import fatigue, loading
-from shopbeam.design.basis import cb_factor, support_braces
+from shopbeam.design.basis import cb_factor, support_braces, unbraced_segments
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
                                     impact_of, not_checked_words, strengths, wood_load_case)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
@@ -355,7 +355,7 @@ def cantilever_notes(job: Job, sol: Solution, checks=()) -> list[str]:
     # says what loads on top would do)
     checked = {(x[0], x[1]) for x in cantilever_top_limits(job, st)}
     for a, b, free, _l1, _why in st.ltb_segments:
-        if not free or (a, b) in checked:
+        if not free or any(x - tol <= a and b <= y + tol for x, y in checked):
             continue
         held = [s.at for s in job.supports if s.takes_force]
         root = a if any(abs(h - a) <= tol for h in held) else b
@@ -638,16 +638,53 @@ def _rating_flexure(st):
 TOP_LOAD_K = 2.5
 
 
+def top_brace_only(job: Job) -> bool:
+    """Brace points said to hold the top flange only (`braces_flange = "top"`)."""
+    return bool(job.braces) and getattr(job, "braces_flange", None) == "top"
+
+
+def top_load_segments(job: Job, beam=None) -> list[tuple[float, float, bool]]:
+    """(start, end, free end?) of the unbraced lengths as a cantilever loaded on its top sees
+    them: brace points on the top flange only (`top_brace_only`) do not count. A cantilever's
+    top flange is its tension flange; a brace there, at the tip or along the arm, leaves the
+    bottom flange free to swing, and with the load on top the effective length stays about
+    2.5 L, as for a free tip (SSRC Guide / BS 5950-1 Table 14, tip laterally restrained on
+    the top flange only, destabilising load; from memory)."""
+    return unbraced_segments(replace(job, braces=()) if top_brace_only(job) else job,
+                             beam if beam is not None else job)
+
+
+def tip_brace_words(job: Job) -> str:
+    """What to brace a cantilever loaded on its top with, in words (lower case)."""
+    return ("brace both flanges at the tip (braces_flange = \"both\": a kicker to the bottom "
+            "flange; a brace on the top flange only does not hold it)" if top_brace_only(job)
+            else "brace the tip (beam.braces)")
+
+
+def _top_load_lengths(job: Job, st) -> list[tuple[float, float, bool, float]]:
+    """(start, end, free end?, ltb1 at Cb = 1 over it) for `cantilever_top_limits`: the
+    bending check's own lengths, or `top_load_segments` where braces hold the top only."""
+    if not top_brace_only(job):
+        return [(a, b, free, l1) for a, b, free, l1, _why in st.ltb_segments]
+    fl = st.flexure
+    out = []
+    for a, b, free in top_load_segments(job):
+        case = wood_load_case(job, a, b, free) if fl.ltb[0] == "NDS" else "any"
+        out.append((a, b, free, fl.ltb1(b - a, case, job.units)[0]))
+    return out
+
+
 def cantilever_top_limits(job: Job, st) -> list[tuple[float, float, float, float, float]]:
     """(start, end, effective length factor, strength checked, strength with the loads on
     top) of each unbraced cantilever whose top-flange loading would lower its bending
-    strength (both strengths are Mn / Omega)."""
+    strength (both strengths are Mn / Omega). A cantilever braced on its top flange only
+    counts as unbraced (`top_load_segments`)."""
     fl = _rating_flexure(st)
     if fl is None or job.braced or job.restrained:
         return []
     hung = set(getattr(job, "hung", ()) or ())
     out = []
-    for a, b, free, l1, _why in st.ltb_segments:
+    for a, b, free, l1 in _top_load_lengths(job, st):
         if not free:
             continue
         on = loads_on(job, a, b)
@@ -703,7 +740,7 @@ def open_top_unchecked(job: Job, st) -> list[Unchecked]:
     if not sec.sx_top < sec.sx_bot:
         return []  # the flange (or the heel) on top: the load sits by the shear centre
     out = []
-    for a, b, free, _l1, _why in st.ltb_segments:
+    for a, b, free in top_load_segments(job):
         if free and loaded_on_top(job, a, b):
             f = lambda x: units.fmt(x, "length", job.units)  # noqa: E731
             out.append(Unchecked(
@@ -712,8 +749,8 @@ def open_top_unchecked(job: Job, st) -> list[Unchecked]:
                 "loads bear on its top, which destabilises it (effective length about "
                 f"{TOP_LOAD_K:g} x L); the {sec.shape}'s bending rule takes the load at the "
                 "shear centre and its strength at that length is not worked out here, so no "
-                "rating is posted. Brace the tip (beam.braces), hang the load below, or have "
-                "it checked",
+                "rating is posted. " + tip_brace_words(job).capitalize() + ", hang the load "
+                "below, or have it checked",
                 "AISC 360-16 " + ("F9" if sec.shape == "tee" else "F10")
                 + "; SSRC Guide / BS 5950-1 Table 14 (from memory)", blocks_rating=True))
     return out
@@ -751,8 +788,8 @@ def top_flange_check(job: Job, ss, g, travel_words: str = "", st=None) -> Check:
                  f"against {f(now, 'moment')} with the loads at the shear centre"
                  + (travel_words if rolled else ""),
                  at, detail="the loads bear on the top flange of the unbraced cantilever, "
-                 "which destabilises it; brace the tip (beam.braces) or hang a point load "
-                 "below the flange (flange = \"bottom\") to rate it on the bending check",
+                 "which destabilises it; " + tip_brace_words(job) + " or hang a point load below the flange (flange = "
+                 "\"bottom\") to rate it on the bending check",
                  clause=f"{rule}; effective length for top-flange loading",
                  source=f"{src}; SSRC Guide / BS 5950-1 Table 14 (from memory)",
                  params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})

@@ -27,6 +27,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      moving_reactions_off, variant_words,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
+                                       tip_brace_words,
                                        travelling_hook, hogging_limits, hogging_remedy,
                                        all_on_moment, cantilever_top_demands, top_flange_check,
                                        travel_words,
@@ -764,8 +765,8 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                        + f" exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
-                       "centre, as checked). Brace the tip where one can be fitted "
-                       "(beam.braces), hang a point load below the flange (flange = "
+                       "centre, as checked). " + tip_brace_words(job).capitalize()
+                       + " where one can be fitted, hang a point load below the flange (flange = "
                        "\"bottom\"), or choose a section that passes at the lower strength "
                        "(shopbeam size)")
     return tuple(out)

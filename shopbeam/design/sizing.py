@@ -41,7 +41,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.analysis import loaded_on_top, top_flange_checks
+from shopbeam.design.analysis import loaded_on_top, top_flange_checks, top_load_segments
 from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.fatigue import given as fatigue_given
@@ -832,7 +832,7 @@ def _batched(job, base, parts, cands, with_capacity):
     # an unbraced cantilever with loads on its top flange: the strength that loading leaves
     # it (analysis.top_flange_checks, about 2.5 L) is in the full check, not the batch
     on_top = not (job.braced or job.restrained) and any(
-        free and loaded_on_top(job, a, b) for a, b, free in ltb_segs)
+        free and loaded_on_top(job, a, b) for a, b, free in top_load_segments(job, empty))
     exact = not springs and not moving and not hung and not on_top
     spans = segments(empty)
     n_ratio, d_abs, _ = deflection_rule(job)
