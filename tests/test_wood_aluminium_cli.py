@@ -218,6 +218,49 @@ def test_thin_aluminium_tube_is_checked_on_its_local_buckling(tmp_path):
     assert d["factor"] > 0
 
 
+ARM_TUBE = '{ shape = "rect-tube", depth = "6 in", width = "1.5 in", wall = "0.125 in" }'
+
+
+def arm(tmp_path, name, loads):
+    """An aluminium tube arm held by one fixed (bolted) root: no bearing support."""
+    p = tmp_path / f"{name}.toml"
+    p.write_text(f"""schema = 1
+title = "{name}"
+[beam]
+length = "72 in"
+material = "6061-T6"
+welded = false
+section = {ARM_TUBE}
+[[supports]]
+at = "0 in"
+type = "fixed"
+{loads}""")
+    return p
+
+
+def test_an_aluminium_arm_on_a_fixed_root_is_not_withheld_for_bearing(tmp_path):
+    # a fixed end is a bolted, welded or socketed connection, not a bearing (as for steel,
+    # whose J10 checks skip it): with nothing bearing on the span, the walls' crippling under
+    # a concentrated force (ADM 2015 J.8, from memory) has nothing to act on
+    d = solve(arm(tmp_path, "spread", uniform("-100 lbf/ft", "72 in", "0 in")), "capacity")
+    assert not [u for u in d["unchecked"] if u["name"].startswith("web crippling")]
+    assert d["rated"] is True and d["factor"] > 0
+    # its top-flange check names the closed shape's rule, as its bending check does
+    top = chk(d, "bending, top-flange loads")
+    assert top["clause"].startswith("ADM 2015 F.3") and "F.3" in chk(d, "bending")["clause"]
+    # a live point load on the arm bears on the top wall: withheld, as before
+    live = '[[loads]]\ntype = "point"\nat = "{x}"\nvalue = "-200 lbf"\ncase = "{c}"\n'
+    d = solve(arm(tmp_path, "tip", live.format(x="72 in", c="live")), "capacity")
+    gap = [u for u in d["unchecked"] if u["name"].startswith("web crippling")]
+    assert gap and gap[0]["blocks_rating"] and d["rated"] is False
+    # a dead one: named, not withheld on (it does not grow with the rated load)
+    d = solve(arm(tmp_path, "dead", live.format(x="72 in", c="dead")
+                  + uniform("-50 lbf/ft", "72 in", "0 in")), "capacity")
+    gap = [u for u in d["unchecked"] if u["name"].startswith("web crippling")]
+    assert gap and not gap[0]["blocks_rating"] and "loads[0]" in gap[0]["reason"]
+    assert d["rated"] is True
+
+
 def test_unbraced_aluminium_channel_is_checked_for_lateral_torsional_buckling(tmp_path):
     # ADM 2015 F.2 (from memory), by hand: channel 6 x 2.5 in, tf 0.2, tw 0.17 (no fillets),
     # A = 2 (2.5 x 0.2) + 5.6 x 0.17 = 1.952 in^2, x-bar = (1.0 x 1.25 + 0.952 x 0.085) / 1.952

@@ -781,6 +781,8 @@ def top_flange_check(job: Job, ss, g, travel_words: str = "", st=None) -> Check:
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     ltb = getattr(getattr(st, "flexure", None), "ltb", None)
     rule, src = _LTB_RULES.get(ltb[0] if ltb else "F2", _LTB_RULES["F2"])
+    if ltb and ltb[0] == "ADM" and ltb[1][5] != "open":
+        rule = "ADM 2015 F.3"  # a closed shape (a tube): its own rule, as the bending check
     return Check(TOP_FLANGE_CHECK, demand, top, "N*m",
                  f"{rule} (Cb 1.0) with the effective length of a cantilever "
                  f"loaded on its top flange, about {kl:g} x L over {f(a)} to {f(b)} (SSRC "

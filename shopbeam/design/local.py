@@ -802,6 +802,23 @@ def _other_metal_unchecked(job, sec, mkind: str) -> list[Unchecked]:
         return []
     points = _span_forces(job)
     what = "tube walls" if sec.shape == "rect-tube" else "web"
+    bearings = [sp for sp in job.supports if sp.kind in ("pin", "roller", "spring")]
+    if not points and not bearings:
+        # held by fixed ends only (a welded, bolted or socketed root: a connection, not a
+        # bearing, as for steel) with no live force on the span: nothing here scales with a
+        # rating; a dead point load is named, not withheld on
+        dead = [ld.key or "a point load" for ld in job.loads
+                if ld.kind == "point" and ld.value and ld.case != "live"]
+        return [Unchecked(
+            "web crippling and local yielding under concentrated forces",
+            f"the {what} under {', '.join(dead)} (dead, on the span) "
+            f"{'are' if what.endswith('s') else 'is'} not checked for "
+            f"{'aluminium' if mkind == 'aluminum' else 'a typed-in metal'}; have the "
+            + ("web crippling checked (ADM 2015 J.8, from memory)" if mkind == "aluminum"
+               else "web checked") + " or bear the load on a plate across the flange",
+            "ADM 2015 chapter J, concentrated forces (from memory)" if mkind == "aluminum"
+            else "AISC 360-16 J10 / K2 (written for steel, not applied to a typed-in metal)",
+            blocks_rating=False)] if dead else []
     # thin aluminium webs and walls cripple at the supports too (ADM web crippling covers
     # end and interior reactions, from memory): no rating rests on that, loads on the span
     # or not
