@@ -204,20 +204,23 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
             each_live.append(figs[-1].si)
         if mv:
             m = mv[0]
-            # each load of a wheel set is an axle (or a wheel pair), carried by
-            # wheels_per_axle wheels: a monorail trolley runs one each side of the web
+            # on a lifting job each load of a wheel set is an axle (or a wheel pair), carried
+            # by wheels_per_axle wheels: a monorail trolley runs one each side of the web; on
+            # any other job each load is one wheel (a cart on the top flange)
             wheels = [abs(w) * n * k for w in m.live]
-            per = max(int(job.moving[0].wheels_per_axle if job.moving else 1), 1)
+            lifts = bool(job.lifting or getattr(job.criteria, "lifting", ""))
+            per = max(int(job.moving[0].wheels_per_axle if job.moving and lifts else 1), 1)
+            one, many = ("AXLE", "axles") if lifts else ("WHEEL", "wheels")
             # the per-wheel and whole-set figures come from the posted axle figure where the
             # axles are alike, so the three agree (each still no more than its exact value)
             alike = max(wheels) - min(wheels) <= 1e-9 * max(wheels)
             if alike:
-                axle = posted(f"MAX PER AXLE ({m.label})", max(wheels), "force", sy,
-                              f"{len(wheels)} axles", where)
+                axle = posted(f"MAX PER {one} ({m.label})", max(wheels), "force", sy,
+                              f"{len(wheels)} {many}", where)
             else:  # each axle its own figure (the heaviest is not every axle's)
                 each = " / ".join(posted("", w, "force", sy).value for w in wheels)
-                axle = posted(f"MAX HEAVIEST AXLE ({m.label})", max(wheels), "force", sy,
-                              f"{len(wheels)} axles, in order: {each}", where)
+                axle = posted(f"MAX HEAVIEST {one} ({m.label})", max(wheels), "force", sy,
+                              f"{len(wheels)} {many}, in order: {each}", where)
             if len(wheels) > 1:
                 figs.append(axle)
             if per > 1:
