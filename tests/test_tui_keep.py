@@ -15,9 +15,9 @@ from textual._xterm_parser import XTermParser
 
 from tuipilot import _own_library, settle, sync  # noqa: F401 (_own_library: autouse)
 from shopbeam.tui import session as session_mod
-from shopbeam.tui.app import make_app
+from shopbeam.tui.app import VIEWS, make_app
 from shopbeam.tui.session import Session
-from shopbeam.tui.widgets import Field
+from shopbeam.tui.widgets import Field, FieldInput
 
 PRESETS = Path(__file__).resolve().parents[1] / "presets"
 SIZE = (80, 24)
@@ -1808,3 +1808,31 @@ async def test_the_value_example_follows_the_load_type(tmp_path):
         await letters_alone(pilot, "p")
         assert value.input.placeholder == "e.g. -300 lbf"
 
+
+
+@sync
+@pytest.mark.parametrize("view", ["job", "span", "loads", "section", "material", "criteria"])
+async def test_tab_from_a_views_last_field_wraps_to_its_first_never_to_nowhere(tmp_path, view):
+    # the view itself takes the focus when it is switched to (so a view key typed next
+    # switches views); Tab past its last field used to stop there too, where a measurement
+    # typed went nowhere and its leading digit switched views
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press(next(v[1] for v in VIEWS if v[0] == view))
+        await settle(pilot)
+        shown = app.job_screen.query_one(f"#{view}")
+        chain = [w for w in app.job_screen.focus_chain if shown in w.ancestors]
+        assert len(chain) >= 2
+        await focus(pilot, chain[-1])
+        await burst(pilot, TAB)
+        assert app.job_screen.focused is chain[0]
+        await burst(pilot, SHIFT_TAB)
+        assert app.job_screen.focused is chain[-1]
+        # a measurement typed after a Tab too many lands in the first field
+        await focus(pilot, chain[-1])
+        first = chain[0]
+        if isinstance(first, FieldInput):
+            await burst(pilot, TAB + "6 in")
+            assert first.value == "6 in"
+            assert app.job_screen.current == view

@@ -385,6 +385,25 @@ class JobScreen(Screen):
     def action_leave_field(self) -> None:
         self.set_focus(None)
 
+    def focus_next(self, selector="*"):
+        """Tab: as Textual moves it, but from the view's last field it wraps to the first
+        field, not to the view itself (which takes the focus when it is switched to, so that
+        a view key typed next switches views): a key typed there would go nowhere, and a
+        digit would switch views under a person who meant it for a field."""
+        return self._tab(super().focus_next, selector)
+
+    def focus_previous(self, selector="*"):
+        """Shift+Tab: from the view's first field it wraps to the last (see `focus_next`)."""
+        return self._tab(super().focus_previous, selector)
+
+    def _tab(self, move, selector):
+        before = self.focused
+        got = move(selector)
+        if got is not None and isinstance(got, View) and before is not None \
+                and before is not got and got in before.ancestors:
+            got = move(selector)  # past the view, onto the field at the other end
+        return got
+
     # ------------------------------------------------------------------ edits
     ENTER_NEXT_FIELD = True  # enter in a field moves on (done by the field, in key order)
 
