@@ -1836,3 +1836,41 @@ async def test_tab_from_a_views_last_field_wraps_to_its_first_never_to_nowhere(t
             await burst(pilot, TAB + "6 in")
             assert first.value == "6 in"
             assert app.job_screen.current == view
+
+
+METRIC = """schema = 1
+title = "Metric shelf beam"
+units = "si"
+[beam]
+length = "4 m"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 m"
+type = "pin"
+[[supports]]
+at = "4 m"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 m"
+end = "4 m"
+value = "-4 kN/m"
+"""
+
+
+@sync
+async def test_a_new_loads_position_echo_stays_metric_while_its_value_is_missing(tmp_path):
+    # a new load has no value yet, so the job does not read: the echo of its position used to
+    # fall back to feet on a metric job ("2 m = 6.562 ft")
+    path = tmp_path / "metric.toml"
+    path.write_text(METRIC, encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, "3" + CTRL_T)
+        assert app.job_screen.session.evaluation.job is None  # the new load has no value
+        at = field(app, "loads", "load.at")
+        words = str(at.query_one(".field-msg").render())
+        assert at.input.value.endswith(" m") and words.startswith("= ")
+        assert words.endswith(" m") and "ft" not in words, words

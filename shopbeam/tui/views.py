@@ -120,6 +120,15 @@ class View(VerticalScroll):
     def reading(self, field: Field, ev) -> str:
         return ""
 
+    def system(self, ev) -> str:
+        """The job's units for an echo: the job as read, or, while it has a problem that
+        stops it reading, what its units key says (a metric job's echo stays metric)."""
+        if ev is not None and ev.job is not None:
+            return ev.job.units
+        session = getattr(self.screen, "session", None)
+        got = session.doc.get("units") if session is not None else None
+        return got if got in ("us", "si") else "us"
+
     def show_choice_messages(self, ev, keys: dict[str, str]) -> None:
         """Under each choice (by its key): the reader's problem or warning on the job-file
         key it edits, else what the chosen word means (`choice_reading`)."""
@@ -545,7 +554,7 @@ class SpanView(RowsView):
             self.app.notify(tmsg, severity="error")
 
     def reading(self, field, ev) -> str:
-        system = ev.job.units if ev.job is not None else "us"
+        system = self.system(ev)
         kinds = {"beam.length": "length", "support.at": "length", "support.stiffness": "stiffness"}
         k = kinds.get(field.key)
         if k and field.value:
@@ -736,7 +745,7 @@ class LoadsView(RowsView):
                         f.show(msg, error=True)
 
     def reading(self, field, ev) -> str:
-        system = ev.job.units if ev.job is not None else "us"
+        system = self.system(ev)
         rows = self.app_session().rows("loads")
         kind = rows[self.selected].get("type") if rows else "point"
         value_kind = {"point": "force", "moment": "moment"}.get(kind, "line_load")
@@ -926,7 +935,7 @@ class SectionView(View):
             self.post_message(self.Pick(event.option.id))
 
     def reading(self, field, ev) -> str:
-        system = ev.job.units if ev.job is not None else "us"
+        system = self.system(ev)
         if field.key.startswith("dim."):
             return echo(field.value, "small_length", system) if field.value else ""
         for k, _label, kind, _ph in self.CUSTOM:
@@ -1052,7 +1061,7 @@ class MaterialView(View):
             self.post_message(self.Pick(event.option.id))
 
     def reading(self, field, ev) -> str:
-        system = ev.job.units if ev.job is not None else "us"
+        system = self.system(ev)
         for k, _label, kind, _ph in self.CUSTOM:
             if field.key == f"mat.{k}" and field.value:
                 return echo(field.value, kind, system)
