@@ -611,6 +611,11 @@ def test_a_load_given_per_area_is_posted_per_area_first():
     # both rounded down from the same exact figure: area x width within rounding of the line
     assert area.exact * width == pytest.approx(line.exact, rel=1e-12)
     assert area.si <= area.exact and line.si <= line.exact
+    # the line load and the total are worked out from the posted area figure, so the three
+    # figures on the label agree: 146 psf x 2 ft is 292 lbf/ft, never 293
+    assert line.si <= area.si * width * (1 + 1e-12)
+    total = next(f for f in r.figures if f.label == "TOTAL")
+    assert total.si <= area.si * width * (live.end - live.start) * (1 + 1e-12)
 
 
 def test_solve_json_names_the_holds_that_capacity_would_post_no_rating_for(tmp_path):

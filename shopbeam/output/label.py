@@ -162,12 +162,17 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     if len(live) == 1 and not mv and live[0].kind == "uniform":
         ld = live[0]
         width = (getattr(job, "widths", None) or {}).get(ld.key)
+        area = None
         if width:  # given per area: post it per area first, in the unit it was written in
-            figs.append(posted(f"MAX {_up(ld)}AREA LOAD", ld.w1 * k / width, "area_load", sy,
-                               f"over {pos(width)} tributary width, {pos(ld.start)} to "
-                               f"{pos(ld.end)}", where))
-        w = posted(f"MAX {_up(ld)}UNIFORM LOAD", ld.w1 * k, "line_load", sy,
-                   f"over {pos(ld.start)} to {pos(ld.end)}", where)
+            area = posted(f"MAX {_up(ld)}AREA LOAD", ld.w1 * k / width, "area_load", sy,
+                          f"over {pos(width)} tributary width, {pos(ld.start)} to "
+                          f"{pos(ld.end)}", where)
+            figs.append(area)
+        # per length from the posted area figure where there is one, so the area load, the
+        # line load and the total agree (each still no more than its exact value)
+        w = posted(f"MAX {_up(ld)}UNIFORM LOAD", area.si * width if area else ld.w1 * k,
+                   "line_load", sy, f"over {pos(ld.start)} to {pos(ld.end)}", where,
+                   exact=ld.w1 * k if area else None)
         figs.append(w)
         # the total of the posted figure (never more than the exact total), so the two agree
         figs.append(posted(f"{_up(ld, 'UPWARD ')}TOTAL", w.si * (ld.end - ld.start), "force",
