@@ -69,6 +69,19 @@ def test_a_key_to_write_is_named_as_the_control_that_writes_it():
     said = in_words('criteria.safety_factor: write basis = "first-yield" under [criteria] to '
                     "check first yield with this factor")
     assert "Basis: first-yield (F7 Criteria)" in said
+    # the reader's own words for a dead load marked uplift, as the form shows them
+    from shopbeam.jobs.jobfile import parse_job_data
+
+    data = {"schema": 1, "title": "t",
+            "beam": {"length": "10 ft", "section": "W8x18", "material": "A992"},
+            "supports": [{"at": "0 ft", "type": "pin"}, {"at": "10 ft", "type": "roller"}],
+            "loads": [{"type": "uniform", "value": "50 lbf/ft", "case": "dead",
+                       "uplift": True}]}
+    job = parse_job_data(data)
+    msg = next(str(w) for w in job.warnings if "pushes UP" in str(w))
+    said = in_words(msg)
+    assert "remove uplift = true" in msg and "remove uplift = true" not in said
+    assert "set Uplift to no" in said
 
 
 def test_row_keys_read_as_the_lists_number_them():

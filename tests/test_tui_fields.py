@@ -408,3 +408,22 @@ async def test_a_load_that_really_pushes_up_is_said_so_in_the_form(tmp_path):
         assert s.rows("loads")[pt]["uplift"] is True
         await pick(pilot, up, "n")
         assert "uplift" not in s.rows("loads")[pt]  # back as the file had it: no key
+
+
+@sync
+async def test_a_choices_long_message_wraps_under_the_options_not_under_the_labels(tmp_path):
+    # the uplift warning on a dead load that points up ran back to column 0 on its second line
+    app = make_app(job_copy(tmp_path, "demo"), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await show_load(app, pilot, 0)
+        c = choice(app, "loads", "load.uplift")
+        c.show("this dead load pushes UP (uplift = true): it is taken as on as always there, "
+               "never left off, and a live load that relieves it is never counted on; set "
+               "Uplift to no if it pushes down")
+        await settle(pilot)
+        lines = c._content(c.size.width).plain.split("\n")
+        said = [ln for ln in lines[1:] if ln.strip()]
+        assert len(said) >= 2  # it wraps
+        assert all(ln.startswith(" " * 14) and len(ln) <= c.size.width for ln in said)
+        assert " ".join(ln.strip() for ln in said) == c.message

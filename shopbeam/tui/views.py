@@ -44,6 +44,9 @@ _UI_WAYS = (
     ("mark a load that really pushes up uplift = true",
      "set Uplift to yes for a load that really pushes up (F4 Loads)"),
     ('write basis = "first-yield" under [criteria]', "pick Basis: first-yield (F7 Criteria)"),
+    ("write its value negative and remove uplift = true",
+     "type its Value negative and set Uplift to no"),
+    ("remove it, or check the sign", "set Uplift to no, or check the sign"),
 )
 
 

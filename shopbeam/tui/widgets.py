@@ -452,8 +452,12 @@ class Choice(KeepFocusOnStaleHide, Widget, can_focus=True):
     def _content(self, width: int) -> Text:
         t = self._render_choice(width)
         if self.message:
-            t.append("\n" + " " * 14)
-            t.append(self.message, style="bold" if self.has_class("-error") else "")
+            # wrapped in the column right of the label, as a field's message is
+            style = "bold" if self.has_class("-error") else ""
+            for line in textwrap.wrap(self.message, max(20, width - 14),
+                                      break_on_hyphens=False) or [""]:
+                t.append("\n" + " " * 14)
+                t.append(line, style=style)
         return t
 
     def _render_choice(self, width: int) -> Text:
