@@ -102,3 +102,39 @@ def test_rating_view_counts_loads_as_the_list_does(tmp_path):
     # still boxed: every label line keeps the box's width
     box = [ln for ln in shown.splitlines() if ln.startswith("|")]
     assert box and len({len(ln) for ln in box}) == 1
+
+
+def test_the_basis_words_say_why_first_yield_is_used_when_the_choice_shows_code():
+    # a typed-in metal with no kind: no code rule, so bending is on first yield though the
+    # Basis choice shows [code] (nothing written)
+    from types import SimpleNamespace
+
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.tui.views import basis_words
+
+    base = """schema = 1
+title = "t"
+[beam]
+length = "10 ft"
+section = "W8x18"
+{mat}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-50 lbf/ft"
+{crit}"""
+    typed = 'material = { e = "29000 ksi", fy = "36 ksi", density = "490 lb/ft^3" }'
+    said = basis_words(SimpleNamespace(job=parse_job_text(base.format(mat=typed, crit="")),
+                                       result=None))
+    assert said.startswith("Basis code has no rule") and "first yield" in said
+    asked = basis_words(SimpleNamespace(job=parse_job_text(base.format(
+        mat=typed, crit='[criteria]\nbasis = "first-yield"')), result=None))
+    assert not asked.startswith("Basis code") and asked.startswith("Bending on first yield")
+    steel = basis_words(SimpleNamespace(job=parse_job_text(base.format(
+        mat='material = "A992"', crit="")), result=None))
+    assert "Basis code has no rule" not in steel

@@ -1176,7 +1176,11 @@ def basis_words(ev) -> str:
                  if c.name == "bending"), None)
     how = f"\n  results use: {bend.formula}" if bend is not None else ""
     if basis == "first-yield":
-        return (f"Bending on {BASIS_WORDS[basis]}: M <= Fy S / {sf:g}, a stress of "
+        # the choice shows [code] (nothing written) on a material no code covers here
+        why = ("" if job.criteria.basis.value == "first-yield" else
+               "Basis code has no rule for a typed-in metal of no known kind: "
+               "first yield is used. ")
+        return (f"{why}Bending on {BASIS_WORDS[basis]}: M <= Fy S / {sf:g}, a stress of "
                 f"Fy / {sf:g} = {fy} at the extreme fibre.{how}")
     return (f"Bending by {BASIS_WORDS.get(basis, basis)}: the factor above is NOT used "
             f"(it applies with basis first-yield: Fy S / factor). The code's own factor "
