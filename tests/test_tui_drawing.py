@@ -68,7 +68,7 @@ def test_a_key_to_write_is_named_as_the_control_that_writes_it():
     assert "load 3 value" in said and "Uplift to yes" in said and "uplift = true" not in said
     said = in_words('criteria.safety_factor: write basis = "first-yield" under [criteria] to '
                     "check first yield with this factor")
-    assert "Basis: first-yield (F7 Criteria)" in said
+    assert "Basis: first-yield (6 Criteria)" in said
     # the reader's own words for a dead load marked uplift, as the form shows them
     from shopbeam.jobs.jobfile import parse_job_data
 

@@ -40,10 +40,10 @@ _ROW_KEY = re.compile(r"\b(supports|loads)\[(\d+)\]")
 
 # what a message tells a file's reader to write, said as the control that writes it here
 _UI_WAYS = (
-    ("add uplift = true to the load", "set Uplift to yes in the load's form (F4 Loads)"),
+    ("add uplift = true to the load", "set Uplift to yes in the load's form (3 Loads)"),
     ("mark a load that really pushes up uplift = true",
-     "set Uplift to yes for a load that really pushes up (F4 Loads)"),
-    ('write basis = "first-yield" under [criteria]', "pick Basis: first-yield (F7 Criteria)"),
+     "set Uplift to yes for a load that really pushes up (3 Loads)"),
+    ('write basis = "first-yield" under [criteria]', "pick Basis: first-yield (6 Criteria)"),
     ("write its value negative and remove uplift = true",
      "type its Value negative and set Uplift to no"),
     ("remove it, or check the sign", "set Uplift to no, or check the sign"),
