@@ -108,6 +108,8 @@ def _normalise(text: str) -> str:
         if a in text:
             text = re.sub(rf"(?<=\d)\s*{a}", f" {b}", text).replace(a, b)
     text = text.replace("''", '"')
+    # a power written with spaces, as pint also reads it ("pound / foot ** 3")
+    text = re.sub(r"\s*(\*\*|\^)\s*(?=\d)", r"\1", text)
     # feet and inch marks become words; a mark is only a mark right after a number or space
     text = re.sub(r"(?<=[\d\s])'", " ft ", text)
     text = re.sub(r'(?<=[\d\s])"', " in ", text)
@@ -168,7 +170,7 @@ _SHOP_WORDS = {
     "psf": "psf", "ksf": "ksf", "plf": "plf", "klf": "klf", "pli": "pli", "pcf": "pcf", "kg": "kg",
     "kgf": "kgf", "rad": "rad", "radian": "rad", "ton": "ton", "tonne": "tonne",
 }
-_UNIT_WORD = re.compile(r"[A-Za-z#]+")
+_UNIT_WORD = re.compile(r"[A-Za-z#][A-Za-z_#]*")  # pint's own names: pound_force, foot_pound
 
 # What to write, per kind, when a unit is refused.
 SPELLINGS: dict[str, str] = {

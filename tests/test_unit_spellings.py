@@ -116,3 +116,18 @@ def test_an_unreadable_value_gets_an_example_of_its_own_kind(kind, example):
     with pytest.raises(InputError) as e:
         units.parse("lbs/FT!", kind, "loads[1].value")
     assert example in str(e.value)
+
+
+@pytest.mark.parametrize("text, kind, expected", [
+    # pint's own unit names, written with underscores or spaced powers, read as pint reads
+    # them (the job file's values are pint strings; shop spellings come on top)
+    ("-1000 pound_force", "force", -1000 * LBF),
+    ("-1000 force_pound", "force", -1000 * LBF),
+    ("-2 kilogram_force", "force", -2 * 9.80665),
+    ("-25 pound_force / foot", "line_load", -25 * LBF / FT),
+    ("150 foot_pound", "moment", 150 * LBF * FT),
+    ("490 pound / foot ** 3", "density", 490 * 0.45359237 / FT**3),
+    ("3.37 in ^ 2", "area", 3.37 * IN**2),
+])
+def test_pint_unit_names_read_as_pint_reads_them(text, kind, expected):
+    assert units.parse(text, kind) == pytest.approx(expected, rel=1e-12)
