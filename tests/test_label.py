@@ -713,12 +713,28 @@ def test_a_hoist_given_as_a_point_load_at_a_jib_end_is_rated_only_with_end_stops
     text = (Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml").read_text()
     job = load_job(Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml")
     inside = label.rating(capacity(job), analyze(job).unchecked)
-    assert not any("END STOPS" in n for n in inside.notes)
+    # rated travelling from the mast out to the place given (capacity.travelling): the
+    # hoist must be kept there, but the mast end is closed by its fixed connection
+    assert any("stays between 0 ft and 9.5 ft: END STOPS" in n for n in inside.notes)
+    assert not any("a flange width" in n for n in inside.notes)
     at = next(ld for ld in job.loads if ld.case == "live")
     end = parse_job_text(text.replace('at = "9 ft 6 in"', 'at = "10 ft"'))
     assert next(ld for ld in end.loads if ld.case == "live").at > at.at
     r = label.rating(capacity(end), analyze(end).unchecked)
-    assert any("END STOPS keep the hoist's wheels" in n and "near 10 ft" in n for n in r.notes)
+    assert any("END STOPS keep the wheels" in n and "the open end at 10 ft" in n
+               for n in r.notes)
+    assert not any("stays between" in n for n in r.notes)  # it may run the whole boom
+
+
+def test_a_monorail_hoist_given_as_a_point_load_is_rated_only_with_end_stops_at_both_ends():
+    # rated "anywhere along its travel" over the whole beam: its wheels can reach either open
+    # flange end, where the wheel flange check does not hold (as for a [[moving]] trolley)
+    from shopbeam.output import label
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-hoist-beam.toml")
+    assert not job.moving and any(ld.kind == "point" for ld in job.loads)
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    assert any("END STOPS keep the wheels at least" in n and "each end of the beam" in n
+               for n in r.notes)
 
 
 def test_a_welded_built_up_beam_is_rated_only_while_its_flange_welds_carry_the_shear_flow():

@@ -37,7 +37,7 @@ from shopbeam.design import fatigue
 from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
                                       couple_notes, flange_word, is_outdoor)
 from shopbeam.design.basis import tip_hung
-from shopbeam.design.capacity import hoist_at, hoist_travels
+from shopbeam.design.capacity import hoist_at, hoist_travels, travelling
 from shopbeam.design.checks import basis_of, impact_of
 from shopbeam.design.loading import read_moving
 from shopbeam.engine.solver import sound_solve
@@ -404,22 +404,32 @@ def _held_words(job) -> list[str]:
                           "supports to check it unbraced)." if bth else
                           "a single hanger rod does not)."))
     tol = 1e-6 * job.length
-    for ws in job.moving:
+    # a hoist given as a point load is rated travelling (capacity.travelling): its travel
+    # and the flange ends it can reach are stated as a wheel set's are
+    moved = travelling(job) if not job.moving else None
+    sets = job.moving or (moved.moving if moved is not None else ())
+    for ws in sets:
         a, b = ws.travel
         if a > tol or b < job.length - tol:
             out.append(f"RATED ONLY WHILE the {ws.label or 'wheel set'} stays between "
                        f"{pos(a)} and {pos(b)}: END STOPS must keep it there.")
         sec = job.section
         bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
-        if job.lifting and bf and (a < bf or b > job.length - bf):
+        # an end built into a fixed support (a jib's mast) is closed by its connection
+        built = {sp.at for sp in job.supports if sp.kind == "fixed"}
+        ends = [x for x, near in ((0.0, a < bf), (job.length, b > job.length - bf))
+                if near and not any(abs(x - f) <= tol for f in built)]
+        if job.lifting and bf and ends:
             # lifting.lifting_notes: the wheel flange check is for the interior of the flange
+            where = ("each end of the beam, or its ends are closed with plates" if len(ends) == 2
+                     else f"the open end at {pos(ends[0])}, or that end is closed with a plate")
             out.append(f"RATED ONLY WHILE END STOPS keep the wheels at least "
-                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from each end "
-                       "of the beam, or its ends are closed with plates (the flange check "
-                       "under the wheels is for the flange away from its ends).")
+                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from {where} "
+                       "(the flange check under the wheels is for the flange away from its "
+                       "ends).")
     sec = job.section
     bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
-    if job.lifting and bf and not job.moving:
+    if job.lifting and bf and not sets:
         # a hoist given as a point load hung on the flange tips within a flange width of an
         # end (a jib's hoist at the end of its reach): the same flange-end condition
         tips = set(tip_hung(job))
