@@ -917,3 +917,18 @@ def test_a_typed_in_tube_s_member_line_says_its_units():
             '[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n')
     r = label.rating(capacity(parse_job_text(text)))
     assert "rect-tube 3.937 x 1.9685 in x 3 mm" in r.member
+
+
+def test_a_lifting_label_is_rated_only_while_the_lifts_are_few_where_fatigue_is_not_checked():
+    # fatigue under repeated lifts is not checked (lifting.FATIGUE) and does not withhold the
+    # figure: the label says what it rests on, fewer than 20,000 lifts (AISC 360-16 Appendix
+    # 3.1, from memory: no fatigue check below that)
+    from shopbeam.output import label
+    for name in ("monorail-trolley", "jib-arm", "monorail-hoist-beam"):
+        job = load_job(Path(__file__).resolve().parents[1] / "presets" / f"{name}.toml")
+        r = label.rating(capacity(job), analyze(job).unchecked)
+        assert any(n.startswith("RATED ONLY WHILE the member sees fewer than 20,000 lifts")
+                   for n in r.notes), name
+    plain = load_job(Path(__file__).resolve().parents[1] / "presets" / "mezzanine-joist.toml")
+    r = label.rating(capacity(plain), analyze(plain).unchecked)
+    assert not any("20,000 lifts" in n for n in r.notes)

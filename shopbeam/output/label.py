@@ -403,6 +403,12 @@ def _held_words(job) -> list[str]:
                        + ("a single sling or shackle does not: write brace = false on those "
                           "supports to check it unbraced)." if bth else
                           "a single hanger rod does not)."))
+    if (job.lifting or getattr(job.criteria, "lifting", "")) and not fatigue.checked(job):
+        # lifting.FATIGUE: not checked, and no bar to the rating only while the lifts are few
+        out.append("RATED ONLY WHILE the member sees fewer than 20,000 lifts in its life (no "
+                   "fatigue check is needed below that, AISC 360-16 Appendix 3.1, from "
+                   "memory); past that, a production hoist within a few years, have its "
+                   "fatigue checked for its duty.")
     tol = 1e-6 * job.length
     # a hoist given as a point load is rated travelling (capacity.travelling): its travel
     # and the flange ends it can reach are stated as a wheel set's are
