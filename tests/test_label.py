@@ -932,3 +932,41 @@ def test_a_lifting_label_is_rated_only_while_the_lifts_are_few_where_fatigue_is_
     plain = load_job(Path(__file__).resolve().parents[1] / "presets" / "mezzanine-joist.toml")
     r = label.rating(capacity(plain), analyze(plain).unchecked)
     assert not any("20,000 lifts" in n for n in r.notes)
+
+
+def test_a_below_the_hook_label_names_its_design_category_and_factor():
+    # ASME BTH-1 3-1.3 (from memory): Nd 2.0 for Category A, 3.0 for B; the same basis line
+    # would otherwise post 1.5 times as much under A with nothing to tell the two apart
+    from shopbeam.output import label
+    text = """schema = 1
+title = "spreader"
+tags = ["lifting"]
+[beam]
+length = "10 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-2000 lbf"
+lug = true
+flange = "bottom"
+[criteria]
+lifting = "below-the-hook"
+category = "{cat}"
+"""
+    said = {}
+    for cat in ("A", "B"):
+        job = parse_job_text(text.replace("{cat}", cat))
+        r = label.rating(capacity(job), analyze(job).unchecked)
+        said[cat] = r.basis
+    assert said["A"].endswith("ASME BTH-1 Design Category A, Nd 2")
+    assert said["B"].endswith("ASME BTH-1 Design Category B, Nd 3")
+    plain = load_job(PRESETS / "mezzanine-joist.toml")
+    assert "BTH-1" not in label.rating(capacity(plain)).basis

@@ -664,7 +664,7 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         title=job.title, member=f"{job.section.designation}{_stands(job.section)}, "
                                 f"{job.material.key}{_wall_words(job, sy)}", span=span,
         factor=float(k), figures=tuple(figs), not_rated=tuple(reasons), status=status,
-        governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)],
+        governing=pc.governing_name, basis=BASIS_SHORT[basis_of(job)] + _design_factor_words(job),
         date=(date or _dt.date.today()).isoformat(), lifting=job.lifting,
         cautions=tuple(cautions_for(job.tags, job.caution_lifting)), unchecked=unch, notes=tuple(notes),
         warnings=tuple(f"{p.key}: {_first_clause(p.message)}" for p in job.warnings
@@ -685,6 +685,19 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
 def _up(ld, words: str = "UPWARD ") -> str:
     """`words` for a load that pushes up (a figure with no direction reads as a weight)."""
     return words if ld.kind != "moment" and ld.total_force > 0 else ""
+
+
+def _design_factor_words(job) -> str:
+    """A below-the-hook device's ASME BTH-1 design category and factor, beside the basis: the
+    same basis line posts 1.5 times as much under Category A as under B's Nd 3.0 (none for
+    other jobs)."""
+    from shopbeam.design.lifting import profile_of
+
+    prof = profile_of(job)
+    if prof is None or not prof.nd:
+        return ""
+    cat = getattr(job.criteria, "category", "") or "B"  # (lifting.profile_of's default)
+    return f" with ASME BTH-1 Design Category {cat}, Nd {prof.nd:g}"
 
 
 def _profile_name(job) -> str:
