@@ -19,7 +19,7 @@ IN, FT, LBF = 0.0254, 0.3048, 4.4482216152605
 
 
 def job(section='{ shape = "rect-bar", depth = "2 in", width = "1 in" }', welded="false",
-        material="6061-T6", beam="", length="3 ft", w="-100 lbf/ft"):
+        material="6061-T6", beam="", length="3 ft", w="-100 lbf/ft", criteria=""):
     return parse_job_text(f"""schema = 1
 title = "al"
 [beam]
@@ -38,7 +38,12 @@ type = "roller"
 [[loads]]
 type = "uniform"
 value = "{w}"
-""")
+""" + (f"[criteria]\n{criteria}\n" if criteria else ""))
+
+
+# the job's first-yield cap (Fy S / safety_factor, checks.on_yield) set above the ADM figures
+# (safety_factor = 1), so that a test of the code's own strength sees it
+CODE_ONLY = "safety_factor = 1.0"
 
 
 def check(res, name):
@@ -49,10 +54,15 @@ def test_rupture_governs_unwelded_6061_t6():
     # ADM 2015 F.1 (from memory): rupture Z Ftu / kt / 1.95 = 1.0 in^3 x 38 ksi / 1.95 =
     # 19.49 kip*in for a 1 x 2 in bar (Z = b d^2 / 4 = 1.0 in^3), below yielding
     # min(Z, 1.5 S) Fty / 1.65 = 1.0 x 35 / 1.65 = 21.21 kip*in: about 8 % lower
-    b = check(analyze(job()), "bending")
+    b = check(analyze(job(criteria=CODE_ONLY)), "bending")
     assert b.limit == pytest.approx(1.0 * IN**3 * 38 * KSI / 1.95, rel=1e-9)
     assert "rupture" in b.formula and "Ftu" in b.formula
     assert (35 / 1.65) / (38 / 1.95) == pytest.approx(1.088, abs=1e-3)
+    # at the default factor 1.67 on yield, first yield comes first: S Fty / 1.67 =
+    # 0.667 in^3 x 35 ksi / 1.67 = 13.97 kip*in (S = b d^2 / 6)
+    b = check(analyze(job()), "bending")
+    assert b.limit == pytest.approx(2 / 3 * IN**3 * 35 * KSI / 1.67, rel=1e-9)
+    assert "capped at first yield" in b.formula
 
 
 def test_welded_member_uses_the_heat_affected_zone_strengths():
@@ -331,7 +341,7 @@ def test_a_thin_round_aluminium_tube_in_bending_takes_the_curved_wall_buckling_s
         'length = "2 ft"\nmaterial = "6063-T6"\nself_weight = false\n[beam.section]\n'
         'shape = "round-tube"\nod = "4 in"\nwall = "0.055 in"\n[[supports]]\nat = "0 ft"\n'
         'type = "fixed"\n[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n'
-        '[criteria]\ndeflection = "L/240"\n')
+        '[criteria]\ndeflection = "L/240"\n' + CODE_ONLY + '\n')
     f, e = job.material.fy / 6894757.293168361, job.material.e / 6894757.293168361
     rbt = (4 - 0.055) / 2 / 0.055
     btb = 1.5 * f * (1 + f ** 0.2 / 8.7)

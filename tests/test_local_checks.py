@@ -356,8 +356,10 @@ def test_web_sidesway_cr_halves_past_my_and_the_factor_stops_there():
     # Cr halves once 1.5 Ma reaches My = 62.083 kip-ft, i.e. Ma = 41.389 kip-ft, at
     # P = (41.389 - 10.8) / 3 = 10.196 kips; there J10-7 with Cr 480,000 allows only
     # 19.66 / 2 / 1.76 = 5.59 kips, so the rated load stops at 10.196 kips
+    # (safety_factor = 1: at the default 1.67 on yield, bending stops at My / 1.67, below the
+    # step's My / 1.5, which a job reaches only with a factor under 1.5; checks.on_yield)
     job = _sidesway_job(load='[[loads]]\ntype = "uniform"\nvalue = "-0.6 kip/ft"\n'
-                             'case = "dead"')
+                             'case = "dead"\n[criteria]\nsafety_factor = 1.0')
     res = capacity(job)
     p = 1000 * LBF * res.factor / KIP
     assert p == pytest.approx((50 * 14.9 / 12 / 1.5 - 10.8) / 3, rel=1e-6)
@@ -371,7 +373,8 @@ def test_web_sidesway_cr_halves_past_my_and_the_factor_stops_there():
     # bracket finds it: a uniform live 0.3 kip/ft with a 2 kip point load at mid
     job = parse_job_text(SIDESWAY_JOB.format(length="12 ft", at="6 ft", beam='braces = '
                                              '["6 ft"]', load='[[loads]]\ntype = "uniform"\n'
-                                             'value = "-300 lbf/ft"').replace(
+                                             'value = "-300 lbf/ft"\n[criteria]\n'
+                                             'safety_factor = 1.0').replace(
         '"-1000 lbf"', '"-2000 lbf"'))
     res = capacity(job)
     # M = k (2 x 3 + 0.3 x 18) = 11.4 k kip-ft reaches 41.389 at k = 3.6306

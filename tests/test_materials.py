@@ -478,7 +478,10 @@ def test_aluminium_said_to_be_welded_is_not_rated_until_the_key_says_so():
     welded = capacity(parse_job_text(ALU_BAR.format(notes=said, welded="welded = true")))
     assert welded.rated
     plain = capacity(parse_job_text(ALU_BAR.format(notes="Bolted lug at mid-span.", welded="")))
-    assert plain.rated and welded.factor < 0.6 * plain.factor
+    # (welded: 1.5 S x 15 / 1.65 = 13.6 S; unwelded: first yield S x 35 / 1.67 = 20.96 S, the
+    # job's factor on yield, below rupture's 29.2 S: 0.65 of it, and less still with the
+    # dead loads, which take a larger share of the smaller strength)
+    assert plain.rated and welded.factor < 0.66 * plain.factor
     # false beside the words: taken as said, with a warning
     kept = parse_job_text(ALU_BAR.format(notes=said, welded="welded = false"))
     assert any(p.key == "beam.welded" and "words say welded" in p.message for p in kept.warnings)

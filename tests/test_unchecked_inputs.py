@@ -163,10 +163,17 @@ def test_typed_in_aluminium_without_fu_is_not_rated():
 
 
 def test_typed_in_aluminium_with_fu_rates_on_rupture_by_hand():
+    # (safety_factor = 1: the first-yield cap, Fy S / safety_factor, checks.on_yield, above
+    # the rupture figure, which then governs)
+    res = capacity(parse_job_text(span(BAR + 'fu = "38 ksi"\n', length=2,
+                                       criteria='deflection = "L/100"\nsafety_factor = 1.0')))
+    assert res.rated
+    assert res.factor * 1000 == pytest.approx(1.125 * 38e3 / 1.95 / 6, rel=1e-9)
+    # at the default 1.67 on yield: S Fty / 1.67 = 0.75 x 35e3 / 1.67 lbf*in comes first
     res = capacity(parse_job_text(span(BAR + 'fu = "38 ksi"\n', length=2,
                                        criteria='deflection = "L/100"')))
     assert res.rated
-    assert res.factor * 1000 == pytest.approx(1.125 * 38e3 / 1.95 / 6, rel=1e-9)
+    assert res.factor * 1000 == pytest.approx(0.75 * 35e3 / 1.67 / 6, rel=1e-9)
 
 
 def test_welded_typed_in_aluminium_without_fy_welded_is_warned_and_not_rated():

@@ -274,7 +274,7 @@ def job_gaps(job) -> tuple[str, ...]:
     if keys:
         out.append("the job writes a safety factor shopbeam does not read (" + ", ".join(keys)
                    + "), so it is not applied. The factor key is [criteria] safety_factor "
-                   "(with basis = \"first-yield\"); write it there, or remove the key")
+                   "(the factor on yield in bending); write it there, or remove the key")
     cuts = getattr(job, "cut_keys", ())
     if cuts:
         out.append("the job says the member is cut (" + ", ".join(cuts) + "): notches, copes, "

@@ -1001,6 +1001,7 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
     fl, sh = _design_factor(job, sec, fl, sh)
+    fl = on_yield(fl, sec, job.material, job.criteria.safety_factor)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
     extra += _stainless_buckling(job, b, fl, segs)
     extra += _wood_slenderness(job, fl, segs, braced)
@@ -1116,6 +1117,33 @@ def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
     sh = replace(sh, omega=0.6 * math.sqrt(3) * prof.nd,
                  text=sh.text + f"; ASME BTH-1 Fv = Fy / (Nd sqrt 3), Nd {prof.nd:g}")
     return fl, sh
+
+
+# the safety factor on yield in bending a job that gives none takes (the contract's example)
+DEFAULT_SF = 1.67
+
+
+def on_yield(fl: Flexure, sec, mat, sf: float) -> Flexure:
+    """The job's safety factor on the material's yield strength in bending (`[criteria]
+    safety_factor`, default 1.67): the allowable moment is never more than first yield over
+    it, Fy S / safety_factor, besides the code's own limit states (AISC 360-16 chapter F, ADM
+    2015 chapter F: Mn / Omega_b, which for a compact, braced section credits the plastic
+    moment Fy Z, up to 1.2 Fy S for a tube and 1.5 Fy S for a bar). A factor larger than
+    the code's Omega_b (and than 1.67) is also taken on every bending limit state (lateral-torsional and
+    local buckling), so the margin asked for holds whichever comes first. A basis that
+    already checks a stress (first yield, wood) is left as it is."""
+    if fl.stress_s is not None or not getattr(mat, "fy", None) or not sf or sf <= 0:
+        return fl
+    text = fl.cap_text
+    if sf > max(fl.omega, DEFAULT_SF) * (1 + 1e-12):
+        text += f"; Omega_b {fl.omega:g} raised to the job's safety factor {sf:g}"
+        fl = replace(fl, omega=sf)
+    allow = mat.fy * min(sec.sx_top, sec.sx_bot) / sf
+    if fl.cap / fl.omega > allow * (1 + 1e-12):
+        fl = replace(fl, cap=allow * fl.omega)
+        text += (f"; capped at first yield, M <= Fy S / {sf:g} (the job's safety factor on "
+                 "the yield strength in bending)")
+    return replace(fl, cap_text=text) if text != fl.cap_text else fl
 
 
 def judged_length(a: float, b: float, kind: str) -> float:
@@ -1464,6 +1492,16 @@ def _aisc_clause(text: str, what: str) -> str:
 def provenance(basis: str, text: str, what: str) -> dict:
     """clause and source of a strength check ("bending" or "shear") from its basis and the
     provision its text names."""
+    out = _provenance_of(basis, text, what)
+    if what == "bending" and "capped at first yield" in text:
+        out["clause"] += "; first yield M <= Fy S / safety_factor"
+        out["source"] += "; the job's safety_factor on yield in bending"
+    if what == "bending" and "raised to the job's safety factor" in text:
+        out["clause"] += "; Omega_b = safety_factor"
+    return out
+
+
+def _provenance_of(basis: str, text: str, what: str) -> dict:
     if basis == "asd":
         clause, source = _aisc_clause(text, what), _SOURCES[basis]
         if "ASME BTH-1" in text:

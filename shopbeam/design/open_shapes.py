@@ -346,7 +346,8 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
         lb = None if braced else b - a
         ex = m.extremes(a, b)
         if kind == "F9":
-            r = _f9_segment(sec, fy, e, lb, ex, om, bth, job.units)
+            r = _f9_segment(sec, fy, e, lb, ex, om, bth, job.units,
+                            job.criteria.safety_factor)
         else:
             mmax = ex.abs_max
             cb = _cb(m, a, b, mmax, free, cb_one)
@@ -365,6 +366,9 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
     else:
         clause, src = "AISC 360-16 F10", F10_SOURCE
         formula = f"{BASIS_WORDS[st.basis]}: {text}"
+    if "capped at first yield" in text:
+        clause += "; first yield M <= Fy S / safety_factor"
+        src += "; the job's safety_factor on yield in bending"
     if braced:
         held = ("held against twist all along (beam.restrained): no LTB" if job.restrained
                 else "continuously braced (beam.braced): no LTB")
@@ -373,7 +377,7 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
                  source=src, params=params, extra={"cb": params.get("Cb", 1.0)})
 
 
-def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False, system="us"):
+def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False, system="us", sf=None):
     p = tee_props(sec, fy, e)
     top = flange_on_top(sec)
     # sagging (M > 0) compresses the top fibres
@@ -394,6 +398,8 @@ def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False, system="us"):
     if bth:
         mn_t, why_t = _bth_cap(mn_t, why_t, fy * p.sx)
         mn_c, why_c = _bth_cap(mn_c, why_c, fy * p.sx)
+    mn_t, why_t = _sf_cap(mn_t, why_t, fy * p.sx, omega, sf)
+    mn_c, why_c = _sf_cap(mn_c, why_c, fy * p.sx, omega, sf)
     allow_t, allow_c = mn_t / omega, mn_c / omega
     r_t = m_stem_t / allow_t if allow_t > 0 else math.inf
     r_c = m_stem_c / allow_c if allow_c > 0 else math.inf
@@ -411,6 +417,15 @@ def _bth_cap(mn, why, my):
     return mn, why
 
 
+def _sf_cap(mn, why, my, omega, sf):
+    """The job's safety factor on yield in bending (checks.on_yield): Mn / Omega_b no more
+    than first yield over it, My / safety_factor."""
+    if sf and sf > 0 and mn / omega > my / sf * (1 + 1e-12):
+        return my * omega / sf, why + (f" capped at first yield, M <= Fy S / {sf:g} (the "
+                                       "job's safety factor on yield)")
+    return mn, why
+
+
 def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
     p = angle_props(sec)
     mmax = ex.abs_max
@@ -419,6 +434,8 @@ def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
         mn, why = f10_geometric(p, fy, e, min(sec.sx_top, sec.sx_bot))
         if bth:
             mn, why = _bth_cap(mn, why, fy * min(sec.sx_top, sec.sx_bot))
+        mn, why = _sf_cap(mn, why, fy * min(sec.sx_top, sec.sx_bot), omega,
+                          job.criteria.safety_factor)
         allow = mn / omega
         text = (f"restrained angle (beam.restrained) bent about its geometric axis: M <= Mn / "
                 f"Omega_b, Mn by {why}, Omega_b {omega:g}")
@@ -429,6 +446,9 @@ def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
     if bth:
         mnw, why_w = _bth_cap(mnw, why_w, fy * p.sw)
         mnz, why_z = _bth_cap(mnz, why_z, fy * p.sz)
+    sf = job.criteria.safety_factor
+    mnw, why_w = _sf_cap(mnw, why_w, fy * p.sw, omega, sf)
+    mnz, why_z = _sf_cap(mnz, why_z, fy * p.sz, omega, sf)
     c, s = math.cos(p.alpha), math.sin(p.alpha)
     # H2-1: Mw / (Mnw / Omega) + Mz / (Mnz / Omega) <= 1 with Mw = M cos a, Mz = M sin a
     inv = omega * (c / mnw + s / mnz)

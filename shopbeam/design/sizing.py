@@ -46,7 +46,7 @@ from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gap
 from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.fatigue import given as fatigue_given
 from shopbeam.design.checks import _design_factor
-from shopbeam.design.checks import (BASIS_WORDS, basis_of, brace_points, cb_factor,
+from shopbeam.design.checks import (on_yield, BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
                                     shear_strength, strengths, unbraced_segments)
 from shopbeam.design.lifting import (DEFAULT_WHEEL_EDGE, OMEGA_WHEEL, flange_coefficients,
@@ -853,6 +853,7 @@ def _batched(job, base, parts, cands, with_capacity):
             fl = flexure(sec, mat, b, job.criteria.safety_factor, job.welded)
             sh = shear_strength(sec, mat, b, job.criteria.safety_factor, job.welded)
             fl, sh = _design_factor(jm, sec, fl, sh)  # a below-the-hook beam: BTH-1 Nd
+            fl = on_yield(fl, sec, mat, job.criteria.safety_factor)
             wheel = None
             if ws is not None and sec.shape == "i-beam" and sec.axis == "strong":
                 tf, tapered = flange_tf_at_wheel(sec, a_w)

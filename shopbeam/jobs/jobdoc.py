@@ -92,7 +92,7 @@ def new_job_text(title: str, *, length: str = "8 ft", section: str = "HSS4x4x1/4
         "",
         "[criteria]",
         'deflection = "L/240"            # "L/n" per span, or a limit such as "0.25 in"',
-        "safety_factor = 1.67            # on yield, with basis = \"first-yield\" only",
+        "safety_factor = 1.67            # on yield in bending: never past Fy S / this",
         "",
     ]
     return "\n".join(lines)

@@ -4291,19 +4291,30 @@ MIN_POSTED_FACTOR = 1.5
 
 
 def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> str:
-    """A safety factor the basis does not use is warned; one larger than the basis's own is
-    also the reason no rating is posted (the user asked for more margin than the label would
-    carry). Returns that reason, or ""."""
+    """What a safety factor other than 1.67 does on the member's basis, said in a warning.
+    On steel, stainless and aluminium by their codes it is the factor on yield in bending
+    (`checks.on_yield`: first yield capped at Fy S / safety_factor, and a larger factor taken
+    on every bending limit state); wood has no first-yield basis, so there it is not used,
+    and one larger than 1.67 is also the reason no rating is posted (the user asked for more
+    margin than the label would carry). Returns that reason, or ""."""
     kind = getattr(material, "kind", "custom")
     if kind == "custom" or (basis == Basis.FIRST_YIELD and kind != "lumber"):
         return ""
-    uses = {"steel": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
-            "stainless": "AISC 360-16 ASD (Omega_b 1.67, Omega_v 1.50 or 1.67)",
-            "aluminum": "the Aluminum Design Manual (Omega 1.65 on yield, 1.95 on rupture)",
-            "lumber": "the NDS allowable stresses (their safety is in the reference values)"}
-    todo = ("remove safety_factor (wood has no first-yield basis)" if kind == "lumber" else
-            "write basis = \"first-yield\" under [criteria] to check first yield with this "
-            "factor, or remove safety_factor")
+    if kind in ("steel", "stainless", "aluminum"):
+        code = ("AISC 360-16 ASD" if kind != "aluminum" else "the Aluminum Design Manual")
+        if sf > 1.67:
+            r.warn(f"safety_factor = {sf:g} is taken on bending: first yield is capped at Fy S "
+                   f"/ {sf:g}, and every bending limit state of {code} takes {sf:g} in place "
+                   "of its own Omega_b; shear and the local checks keep the code's own "
+                   "factors", "criteria.safety_factor")
+        else:
+            r.warn(f"safety_factor = {sf:g} caps bending at first yield, Fy S / {sf:g}; the "
+                   f"code's own factors ({code}: Omega_b "
+                   f"{'1.67' if kind != 'aluminum' else '1.65'}) still apply to every bending "
+                   "limit state and are not lowered by it", "criteria.safety_factor")
+        return ""
+    uses = {"lumber": "the NDS allowable stresses (their safety is in the reference values)"}
+    todo = "remove safety_factor (wood has no first-yield basis)"
     more = sf > 1.67
     r.warn(f"safety_factor = {sf:g} is NOT used: this {kind} member is checked by "
            f"{uses[kind]}; {todo}"

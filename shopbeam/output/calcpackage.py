@@ -148,6 +148,10 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
                        "on twice its length).")
     if basis == "first-yield":
         basis_lines.append(f"Safety factor on yield: {crit.safety_factor:g}.")
+    elif basis != "lumber":
+        basis_lines.append(f"Safety factor on yield in bending: {crit.safety_factor:g} (the "
+                           "allowable moment is never more than Fy S / this factor, besides "
+                           "the code's own limit states).")
     basis_lines.append("Analysis: Euler-Bernoulli beam, exact singularity-function solution; "
                        "extremes found exactly, not sampled.")
     if job.members > 1:

@@ -1182,10 +1182,13 @@ def basis_words(ev) -> str:
                "first yield is used. ")
         return (f"{why}Bending on {BASIS_WORDS[basis]}: M <= Fy S / {sf:g}, a stress of "
                 f"Fy / {sf:g} = {fy} at the extreme fibre.{how}")
-    return (f"Bending by {BASIS_WORDS.get(basis, basis)}: the factor above is NOT used "
-            f"(it applies with basis first-yield: Fy S / factor). The code's own factor "
-            f"divides the nominal strength, e.g. Fy Zx / 1.67 for a compact steel section - "
-            f"a moment, not the stress Fy / 1.67.{how}")
+    if basis == "lumber":
+        return (f"Bending by {BASIS_WORDS.get(basis, basis)}: the factor above is NOT used "
+                f"(wood has no first-yield basis; its safety is in the reference values).{how}")
+    return (f"Bending by {BASIS_WORDS.get(basis, basis)}, and never more than first yield "
+            f"over the factor above: M <= Fy S / {sf:g}, a stress of {fy} at the extreme "
+            f"fibre. The code's own factor divides its nominal strength (e.g. Fy Zx / 1.67 "
+            f"for a compact steel section), whichever is lower.{how}")
 
 
 # ---------------------------------------------------------------------- results
