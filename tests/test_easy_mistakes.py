@@ -1618,3 +1618,81 @@ def test_the_untreated_tag_says_the_treatment_words_are_about_something_else():
     assert not capacity(parse_job_text(text)).rated
     tagged = text.replace('title = "Loft joist', 'tags = ["untreated"]\ntitle = "Loft joist')
     assert capacity(parse_job_text(tagged)).rated
+
+
+# ---------------------------------------------------------------- slips of review 60
+ARM = """schema = 1
+title = "Bar-stock arm"
+tags = ["rack", "cantilever"]
+[beam]
+length = "{length}"
+section = "HSS4x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 in"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "{at}"
+value = "-2000 lbf"
+label = "bar stock"
+[criteria]
+deflection = "L/180"
+impact = "25%"
+"""
+
+
+def test_a_position_in_inches_that_is_the_length_in_feet_is_not_rated():
+    # "3 in" on a 36 in (3 ft) arm: read as written the bundle sits by the root and the arm
+    # posts about 12 times what its tip carries
+    from shopbeam.design.capacity import capacity
+
+    slip = parse_job_text(ARM.format(length="36 in", at="3 in"))
+    w = [p for p in warnings(slip) if p.key == "loads[0].at"]
+    assert w and "3 ft" in w[0].message and "typed with in" in w[0].message
+    assert any("member's length in feet" in g for g in capacity(slip).not_rated)
+    # the same place written so it cannot be that slip, and the tip: no such hold
+    for at in ("0.25 ft", "36 in", "34 in"):
+        ok = capacity(parse_job_text(ARM.format(length="36 in", at=at)))
+        assert not [g for g in ok.not_rated if "member's length" in g], at
+    # an end typed in inches on a beam in feet: 14 in for 14 ft
+    text = _uniform('start = "0 ft"\nend = "14 in"', supports_at=("0 ft", "14 ft")).replace(
+        'length = "6 ft"', 'length = "14 ft"')
+    slip = parse_job_text(text)
+    assert any(p.key == "loads[0].end" and "14 ft" in p.message for p in warnings(slip))
+
+
+def test_an_arms_loads_all_by_its_left_root_are_warned():
+    # an arm's loads sit out along it: every live load within the inner quarter of the
+    # reach is a position slipped short ("3 in" for "34 in"), warned
+    slip = parse_job_text(ARM.format(length="36 in", at="8 in"))
+    assert any("within a quarter of the reach" in p.message for p in warnings(slip))
+    assert not any("within a quarter" in p.message
+                   for p in warnings(parse_job_text(ARM.format(length="36 in", at="20 in"))))
+
+
+def test_a_load_labelled_uplift_that_pushes_down_is_not_rated():
+    # a wind uplift typed with the gravity loads' minus sign is checked as a weight: the
+    # member is never checked pushed up, and the label would post it as a capacity
+    from shopbeam.design.capacity import capacity
+
+    down = parse_job_text(_uniform('label = "wind uplift"'))
+    assert any("pushes DOWN" in p.message for p in warnings(down))
+    assert any("pushes down" in g for g in capacity(down).not_rated)
+    up = parse_job_text(_uniform('label = "wind uplift"\nuplift = true').replace(
+        '"-100 lbf/ft"', '"100 lbf/ft"'))
+    assert not any("pushes DOWN" in p.message for p in warnings(up))
+    anti = parse_job_text(_uniform('label = "anti-uplift clip"'))
+    assert not any("pushes DOWN" in p.message for p in warnings(anti))
+
+
+@pytest.mark.parametrize("title", ["Rack level 2, bay A", "Skid beams, bay A",
+                                   "Level 2 beams between uprights"])
+def test_a_rack_named_in_plain_words_is_held_until_tagged(title):
+    # read like a storage rack, the member is rated with no impact allowance (ANSI MH16.1,
+    # from memory: 25 % of one unit load) unless tagged: held, as "pallet rack" already was
+    job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{title}"'))
+    assert any("reads like a storage rack" in p.message for p in warnings(job))
+    for other in ("Pipe rack crossbeam", "Rack and pinion guard"):
+        job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{other}"'))
+        assert not any("reads like a storage rack" in p.message for p in warnings(job)), other

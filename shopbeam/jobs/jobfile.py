@@ -2190,6 +2190,21 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
             r.warn("this load is zero: it changes nothing (and a zero live load is nothing to "
                    "rate); give its value, or remove it", f"{key}.value"
                    if "value" in ld else key)
+        if got is not None and got.kind != "moment" and ld.get("uplift") is not True \
+                and isinstance(got.label, str) and _UPLIFT_WORDS.search(got.label) \
+                and ((got.value < 0) if got.kind == "point" else
+                     max(got.w1, got.w2) <= 0 < abs(min(got.w1, got.w2))):
+            # a wind uplift typed with the gravity loads' minus sign: checked pushing down,
+            # and the member's buckling under the uplift (the bottom flange) is never seen
+            r.hold(f"this load is labelled {got.label!r}, but its value pushes DOWN "
+                   "(negative): forces are + up, so an uplift is written positive, with "
+                   "uplift = true. As written it is checked as a weight, the member is never "
+                   "checked pushed up (its bottom flange buckling under the uplift), and the "
+                   "label would post it as a capacity for uplift, so no rating is posted. "
+                   "Write it positive with uplift = true, or reword the label if it is a "
+                   "weight", f"{key}.value" if "value" in ld else key,
+                   f"the load labelled {got.label!r} pushes down: an uplift is written "
+                   "positive with uplift = true")
         if ld.get("uplift") is True and got is not None and got.kind != "moment":
             down = (got.value < 0) if got.kind == "point" else max(got.w1, got.w2) <= 0 < abs(
                 min(got.w1, got.w2))
@@ -2254,6 +2269,10 @@ _LIFTING_STEMS = re.compile(
     r"^(?:hoist|lift|lifting|jib|crane|monorail|monorial|trolley|chain|spreader|sling|pick)"
     r"(?:ing)?(?:beams?|arms?|booms?|rails?|cranes?|bars?|frames?|devices?|runways?|hooks?|"
     r"hoists?|blocks?|falls?|trolleys?)$|^underhung$", re.IGNORECASE)
+# a load's label that says it pushes up (wind uplift, suction, lift-off), not a negation
+_UPLIFT_WORDS = re.compile(r"(?<!\bno )(?<!\bnot )(?<!\banti-)(?<!\banti )"
+                           r"\b(?:uplift|up-lift|suction|lift[- ]?off|blow[- ]?off)\b",
+                           re.IGNORECASE)
 NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
 # Words that name a storage-rack member; a job that uses one but is not tagged rack gets
 # neither the rack cautions (the impact load) nor the rating label's per-level wording.
@@ -2270,7 +2289,12 @@ _RACK_WORDS = re.compile(
 # ...and words that name one unless the job is a floor that carries pallets
 _RACK_SOFT = re.compile(
     r"\b(pallets?(?![- ]?(?:jacks?|trucks?|wrap))|"
-    r"(?:bar|lumber|pipe|stock|timber)[- ]?(?:stock )?arms?)\b", re.IGNORECASE)
+    r"(?:bar|lumber|pipe|stock|timber)[- ]?(?:stock )?arms?|"
+    # a rack on its own ("Rack level 2"), not a pipe, cable or tray rack across a plant, nor
+    # a rack and pinion; skids (pallets), uprights and beam levels are rack words too
+    r"(?<!pipe )(?<!pipe-)(?<!cable )(?<!cable-)(?<!conduit )(?<!tray )(?<!bike )"
+    r"(?<!roof )racks?(?! and pinion)(?!-and-pinion)|skids?|uprights?|"
+    r"beam levels?|levels? \d+ beams?|longspan)\b", re.IGNORECASE)
 
 
 def _judged_longest(supports, length) -> float | None:
@@ -2844,6 +2868,72 @@ def _root_at_the_right(r: _Reader, supports, loads, length, system: str) -> None
                "the arm carries it easily. Check them: put the fixed end at 0 (the root on "
                "the left) if the positions are reaches from the root",
                held[0].key + ".at")
+
+
+# a position's unit and the one a slip puts in its place: "3 in" for "3 ft", "4 mm" for "4 m"
+_UNIT_TWINS = {"in": ("ft", 0.3048), "inch": ("ft", 0.3048), "inches": ("ft", 0.3048),
+               "mm": ("m", 1.0), "cm": ("m", 1.0)}
+_PLAIN_POSITION = re.compile(r"\s*([0-9]*\.?[0-9]+)\s*([A-Za-z]+)\s*")
+
+
+def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str) -> bool:
+    """A load position or end typed in the small unit whose number is the member's length,
+    or a support's place, in the large one: "3 in" on a 3 ft (36 in) arm, end = "14 in" on
+    a 14 ft platform beam. Read as written, the load sits next to the root or over a sliver
+    of the span and the figure posted is several times what the member carries; a shop
+    means the large unit. NOT RATED until the position is written so that it cannot be that
+    slip (in the large unit, "0.25 ft", or as the length meant). True where one was found."""
+    if length is None or not isinstance(raw_loads, list):
+        return False
+    marks = [length] + [sp.at for sp in supports if sp.at > 0]
+    words = {"ft": "feet", "m": "metres"}
+    found = False
+    for i, (raw, ld) in enumerate(zip(raw_loads, loads)):
+        if not _is_table(raw):
+            continue
+        for k in ("at", "start", "end"):
+            m = _PLAIN_POSITION.fullmatch(raw.get(k)) if isinstance(raw.get(k), str) else None
+            if not m or m.group(2).lower() not in _UNIT_TWINS:
+                continue
+            big, size = _UNIT_TWINS[m.group(2).lower()]
+            meant = float(m.group(1)) * size
+            if meant <= 0 or not any(abs(meant - x) <= 1e-6 * length for x in marks):
+                continue
+            what = "length" if abs(meant - length) <= 1e-6 * length else "support place"
+            key = f"loads[{i}].{k}"
+            read = units.parse(raw[k], "length")
+            r.hold(f"{key} = {raw[k]!r}: {m.group(1)} is the member's {what} in "
+                   f"{words[big]} ({m.group(1)} {big}), typed with {m.group(2)}. Read as "
+                   f"written, the load {'sits' if k == 'at' else 'starts' if k == 'start' else 'ends'} "
+                   f"{units.fmt(read, 'length', system)} from the left end and the member is "
+                   f"rated as if it did, so no rating is posted. If {m.group(1)} {big} is "
+                   "meant, write it so; if the position is right, write it in the length's "
+                   "unit, so that it cannot be read as that slip", key,
+                   f"{key} = {raw[k]!r} is the member's {what} in {words[big]} typed with "
+                   f"{m.group(2)}: write the position meant")
+            found = True
+            break
+    return found
+
+
+def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: str) -> None:
+    """A cantilever held only by a fixed end at its left end (0), every live load of which
+    sits in the quarter of the reach next to that root: an arm's loads sit out along it, and
+    a position typed in the wrong unit or short a digit ("3 in" for "34 in") lands there,
+    where the arm carries it easily. Warned (a load truly by the root is rated right)."""
+    held = [sp for sp in supports if sp.takes_force]
+    if length is None or len(held) != 1 or held[0].kind != "fixed" or held[0].at > 1e-9 * length:
+        return
+    live = [ld for ld in loads if ld.case == "live" and ld.total_force]
+    reach = [(ld.at if ld.kind == "point" else ld.end) for ld in live]
+    if live and max(reach) <= length / 4 * (1 + 1e-9):
+        r.warn(f"the only support is a fixed end at 0 and every live load sits within a "
+               f"quarter of the reach from it (the farthest at "
+               f"{units.fmt(max(reach), 'length', system)} of "
+               f"{units.fmt(length, 'length', system)}): an arm's loads sit out along it, and "
+               "one typed in the wrong unit or short a digit (\"3 in\" for \"34 in\") lands "
+               "by the root, where the arm carries it easily. Check the positions",
+               live[0].key + (".at" if live[0].kind == "point" else ".end"))
 
 
 # Two supports closer than this clamp the member between them like a fixed end
@@ -4680,6 +4770,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    beam.get("members", 1) if isinstance(beam, dict) else None, section, system)
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
+    if not _unit_twin_slip(r, raw_loads, loads, supports, length, system):
+        _root_at_the_left_loads_by_it(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)
     if length is not None and section is not None and isinstance(beam, dict) \
             and not stubby_words(length, section, system):

@@ -47,6 +47,9 @@ _UI_WAYS = (
     ("write its value negative and remove uplift = true",
      "type its Value negative and set Uplift to no"),
     ("remove it, or check the sign", "set Uplift to no, or check the sign"),
+    ("Write it positive with uplift = true", "Type its Value positive and set Uplift to yes"),
+    ("an uplift is written positive with uplift = true",
+     "an uplift is typed positive, with Uplift yes"),
 )
 
 
