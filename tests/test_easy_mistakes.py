@@ -1696,3 +1696,41 @@ def test_a_rack_named_in_plain_words_is_held_until_tagged(title):
     for other in ("Pipe rack crossbeam", "Rack and pinion guard"):
         job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{other}"'))
         assert not any("reads like a storage rack" in p.message for p in warnings(job)), other
+
+
+def test_a_wood_section_typed_at_its_nominal_size_is_held_until_said():
+    # a 2x10 typed as 2 x 10 in: NDS Supplement Table 1B (from memory) dresses it to 1-1/2 x
+    # 9-1/4 in, and the full figure's section modulus, 33.3 in^3, is 1.56 times 21.4
+    from shopbeam.design.capacity import capacity
+
+    text = ('schema = 1\ntitle = "shelf joist"\n{tags}\n[beam]\nlength = "12 ft"\n'
+            'material = "DF-L-2"\nbraced = true\n[beam.section]\nshape = "rect-bar"\n'
+            'width = "{b}"\ndepth = "{d}"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+            '[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-50 lbf/ft"\n')
+    slip = parse_job_text(text.format(tags="", b="2 in", d="10 in"))
+    w = [p for p in warnings(slip) if p.key == "beam.section"]
+    assert w and "nominal size of a 2x10" in w[0].message and "1.5 x 9.25" in w[0].message
+    assert any("nominal size" in g for g in capacity(slip).not_rated)
+    for tags, b, d in (("", "1.5 in", "9.25 in"), ('tags = ["rough-sawn"]', "2 in", "10 in"),
+                       ("", "2 in", "9 in")):
+        job = parse_job_text(text.format(tags=tags, b=b, d=d))
+        assert not any("nominal size" in p.message for p in warnings(job)), (tags, b, d)
+
+
+def test_a_metric_dead_load_in_newtons_beside_kilonewtons_is_held():
+    # a 40 kg hoist typed "-40 N" beside a 5 kN hook load: 9.81 times too light, and the
+    # rating holds the dead load fixed (as a US job's dead load in N already is)
+    from shopbeam.design.capacity import capacity
+
+    text = ('schema = 1\ntitle = "Jib boom"\nunits = "si"\ntags = ["lifting"]\n[beam]\n'
+            'length = "3 m"\nsection = "W6x15"\nmaterial = "A992"\n[[supports]]\nat = "0 m"\n'
+            'type = "fixed"\n[[loads]]\ntype = "point"\nat = "2.9 m"\nvalue = "-5 kN"\n'
+            'label = "rated load"\n[[loads]]\ntype = "point"\nat = "2.9 m"\nvalue = "{dead}"\n'
+            'label = "hoist"\ncase = "dead"\n')
+    slip = parse_job_text(text.format(dead="-40 N"))
+    assert any(p.key == "loads[1].value" and "typed in N" in p.message for p in warnings(slip))
+    assert any("dead load in N" in g for g in capacity(slip).not_rated)
+    for dead in ("-40 kg", "-0.4 kN", "-400 N"):
+        job = parse_job_text(text.format(dead=dead))
+        assert not any("typed in N" in p.message for p in warnings(job)), dead

@@ -2522,6 +2522,10 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
     the other system's units is left alone: the label posts it in the job's units, and N
     typed for lbf only makes the entered load larger, on the safe side.)"""
     live_max = max((abs(x.total_force) for x in loads if x.case == "live"), default=0.0)
+    kn_live = any(_KILONEWTON.search(v) for x in raw_loads if _is_table(x)
+                  and x.get("case", "live") == "live"
+                  for v in ([x.get("value")] if not isinstance(x.get("value"), list)
+                            else x.get("value")) + [x.get("total")] if isinstance(v, str))
     for ld in loads:
         i = _load_index(ld.key)
         raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
@@ -2541,6 +2545,19 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                        "units = \"si\" if the whole job is metric", f"{ld.key}.value",
                        f"{name} is a dead load typed in metric units ({said}) on a job in US "
                        "units: write it in lbf, lbf/ft or psf")
+            continue
+        if system == "si" and ld.case == "dead" and ld.kind != "moment" and kn_live and \
+                any(_PLAIN_NEWTON.search(v) for v in texts) and \
+                abs(ld.total_force) < live_max / 50:
+            # "-40 N" for a 40 kg hoist beside a hook load in kN: 9.81 times too light
+            said = ", ".join(f'"{v}"' for v in texts)
+            r.hold(f"{name} is a dead load typed in N ({said}) beside live loads in kN, and "
+                   "under a fiftieth of the largest: if kg was meant (a hoist's or a deck's "
+                   "weight), it is 9.81 times too light, and the rating holds the dead load "
+                   "fixed, so a light one posts a higher live load; no rating is posted on "
+                   "it. Write it in kg (kg/m) or kN, as meant", f"{ld.key}.value",
+                   f"{name} is a dead load in N beside live loads in kN: write it in kg or "
+                   "kN, as meant")
             continue
         if ld.case != "dead" or ld.kind == "moment" \
                 or any(p.key == f"{ld.key}.value" for p in r.problems):  # said already
@@ -2564,6 +2581,10 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                    "leave the load out if it really is this light", f"{ld.key}.value",
                    f"{name} is a dead load under {limit}: check its unit, or leave it out "
                    "if it really is this light")
+
+
+_PLAIN_NEWTON = re.compile(r"\d\s*N(?:\s*/\s*m)?\s*$")  # "40 N", "80 N/m", not kN
+_KILONEWTON = re.compile(r"\d\s*kN\b")
 
 
 # A length or force unit of the other system than the job's (metric among feet and lbf, or
@@ -3955,6 +3976,39 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                "LVL", "beam.material")
 
 
+ROUGH_SAWN = "rough-sawn"  # the tag that says a wood section's full sizes are its real ones
+_NOMINAL_THICK = (2, 3, 4, 6, 8)
+_NOMINAL_WIDE = (2, 3, 4, 6, 8, 10, 12, 14, 16)
+
+
+def _nominal_as_dressed(r: _Reader, section, material, tags, system: str) -> None:
+    """A wood [beam.section] rect-bar typed at a lumber size's nominal inches (2 x 10 for a
+    2x10, whose dressed sizes are 1-1/2 x 9-1/4 in): read as written, its section modulus is
+    half as much again as the board's (2 x 10^2 / 6 = 33.3 in^3 against 21.4), so the
+    figure posted is too. Held until written as the size ("2x10") or its dressed sizes, or
+    tagged rough-sawn (full-sawn timber, which is that size)."""
+    if section is None or getattr(material, "kind", "") != "lumber" or \
+            section.shape != "rect-bar" or catalog.is_lumber_size(section) or \
+            ROUGH_SAWN in {normal_tag(t) for t in tags}:
+        return
+    b, h = (section.dims.get(k, 0.0) / 0.0254 for k in ("b", "h"))
+    th, wi = sorted((b, h))
+    whole = lambda x: abs(x - round(x)) < 1e-6  # noqa: E731
+    if not (whole(th) and whole(wi) and round(th) in _NOMINAL_THICK
+            and round(wi) in _NOMINAL_WIDE):
+        return
+    name = f"{round(th)}x{round(wi)}"
+    t, w = catalog.dressed(round(th), round(wi))
+    r.hold(f"the wood section is typed {round(th)} x {round(wi)} in, the nominal size of a "
+           f"{name}, whose dressed sizes are {t:g} x {w:g} in: read as written, its section "
+           f"modulus is {(th * wi ** 2) / (t * w ** 2):.2f} times the board's, and so is the "
+           f"figure posted. Write section = \"{name}\" (or the dressed sizes); for full-sawn "
+           f"timber of that real size, add the tag \"{ROUGH_SAWN}\"", "beam.section",
+           f"the wood section is typed at the nominal size of a {name} ({round(th)} x "
+           f"{round(wi)} in; dressed {t:g} x {w:g}): write section = \"{name}\", or tag "
+           f"it \"{ROUGH_SAWN}\" if it is full-sawn")
+
+
 _TUBES = ("rect-tube", "round-tube", "pipe")
 
 
@@ -4701,6 +4755,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members, title,
                                notes)
     _family_mismatch(r, section, material, system)
+    _nominal_as_dressed(r, section, material, tags, system)
     _thickness_range(r, section, material, welded, system)
     if welded and getattr(material, "kind", "") == "aluminum" and \
             not getattr(material, "fy_welded", None):
