@@ -1734,3 +1734,28 @@ def test_a_metric_dead_load_in_newtons_beside_kilonewtons_is_held():
     for dead in ("-40 kg", "-0.4 kN", "-400 N"):
         job = parse_job_text(text.format(dead=dead))
         assert not any("typed in N" in p.message for p in warnings(job)), dead
+
+
+def test_dead_loads_whose_size_is_in_doubt_are_held_and_a_limit_in_cm_is_named():
+    # the rating holds a dead load fixed, so a light one posts more: a point between
+    # thousands ("-1.200 lbf/ft", read as 1.2) and US units on a metric job are held, as N
+    # on a US job already was; a deflection limit in cm on a US job is named with the rest
+    from shopbeam.design.capacity import capacity
+
+    dead = _uniform('case = "dead"').replace('"-100 lbf/ft"', '"-1.200 lbf/ft"') + (
+        '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n')
+    job = parse_job_text(dead)
+    assert any("point between thousands" in g for g in capacity(job).not_rated)
+    live = parse_job_text(_uniform("").replace('"-100 lbf/ft"', '"-1.200 lbf/ft"'))
+    assert not any("point between thousands" in g for g in capacity(live).not_rated)
+    si = ('schema = 1\ntitle = "bench"\nunits = "si"\n[beam]\nlength = "2 m"\n'
+          'section = "HSS4x4x1/4"\nmaterial = "A500-C"\n[[supports]]\nat = "0 m"\n'
+          'type = "pin"\n[[supports]]\nat = "2 m"\ntype = "roller"\n[[loads]]\n'
+          'type = "uniform"\nvalue = "-2 kN/m"\n[[loads]]\ntype = "point"\nat = "1 m"\n'
+          'value = "{v}"\ncase = "dead"\n')
+    slip = parse_job_text(si.format(v="-150 lbf"))
+    assert any("typed in US units" in g for g in capacity(slip).not_rated)
+    assert not any("US units" in g for g in capacity(parse_job_text(si.format(v="-68 kg"))).not_rated)
+    cm = parse_job_text(_uniform("") + '[criteria]\ndeflection = "1.5 cm"\n')
+    assert any(p.key == "criteria.deflection" and "metric units" in p.message
+               for p in warnings(cm))

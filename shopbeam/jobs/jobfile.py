@@ -2190,6 +2190,14 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
             r.warn("this load is zero: it changes nothing (and a zero live load is nothing to "
                    "rate); give its value, or remove it", f"{key}.value"
                    if "value" in ld else key)
+        if got is not None and got.case == "dead" and any(
+                p.key == f"{key}.value" and "a point between thousands" in p.message
+                for p in r.problems):
+            # the rating holds a dead load fixed: one read a thousand times too light posts
+            # a live load far too high, so the doubt is not left to a warning
+            r.holds.append(f"the dead load {key} ({ld.get('value')!r}) may be a thousand times "
+                           "what is read (a point between thousands): write it without the "
+                           "point, or with fewer than three decimals, as meant")
         if got is not None and got.kind != "moment" and ld.get("uplift") is not True \
                 and isinstance(got.label, str) and _UPLIFT_WORDS.search(got.label) \
                 and ((got.value < 0) if got.kind == "point" else
@@ -2559,6 +2567,18 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                    f"{name} is a dead load in N beside live loads in kN: write it in kg or "
                    "kN, as meant")
             continue
+        us = [v for v in texts if _US_FORCE.search(v)]
+        if system == "si" and us and ld.case == "dead" and ld.kind != "moment":
+            # the mirror of the US job's dead load in N: lbf for kg is 2.2 times too light
+            said = ", ".join(f'"{v}"' for v in us)
+            r.hold(f"{name} is a dead load typed in US units ({said}) on a job in metric "
+                   "units: if kg or N was meant it is the wrong size, and the rating holds the "
+                   "dead load fixed, so a light one posts a higher live load; no rating is "
+                   "posted on it. Write it in kg (kg/m) or N (kN, kN/m), or set units = \"us\" "
+                   "if the whole job is in feet and pounds", f"{ld.key}.value",
+                   f"{name} is a dead load typed in US units ({said}) on a metric job: write "
+                   "it in kg, N or kN")
+            continue
         if ld.case != "dead" or ld.kind == "moment" \
                 or any(p.key == f"{ld.key}.value" for p in r.problems):  # said already
             continue
@@ -2583,6 +2603,8 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                    "if it really is this light")
 
 
+_US_FORCE = re.compile(r"\d\s*(?:lbf?s?|pounds?|kips?|k|#|plf|klf|pli|psf|ksf)\b"
+                       r"|\d\s*(?:lbf?|kips?)\s*/", re.IGNORECASE)
 _PLAIN_NEWTON = re.compile(r"\d\s*N(?:\s*/\s*m)?\s*$")  # "40 N", "80 N/m", not kN
 _KILONEWTON = re.compile(r"\d\s*kN\b")
 
@@ -2621,7 +2643,9 @@ def _mixed_unit_systems(r: _Reader, data: dict, system: str) -> None:
             for k in keys:
                 if k in row:
                     look(f"{where}.{k}", row[k])
-    said = {p.key for p in r.problems}
+    # a key refused, or already said to be in the wrong unit, is not named again (another
+    # warning on it, a floor's live-load limit beside a limit typed in cm, is no reason)
+    said = {p.key for p in r.problems if not p.warning or "unit" in p.message}
     found = [(k, v) for k, v in found if k.split("[")[0] not in said and k not in said]
     if not found:
         return
