@@ -1759,3 +1759,17 @@ def test_dead_loads_whose_size_is_in_doubt_are_held_and_a_limit_in_cm_is_named()
     cm = parse_job_text(_uniform("") + '[criteria]\ndeflection = "1.5 cm"\n')
     assert any(p.key == "criteria.deflection" and "metric units" in p.message
                for p in warnings(cm))
+
+
+@pytest.mark.parametrize("section, material, usual, held", [
+    ("W8x18", "S355", "A992", True), ("HSS4x2x3/16", "S355", "A500-C", True),
+    ("HSS4x2x3/16", "A500-C-round", "A500-C", False)])
+def test_a_grade_the_aisc_shape_is_not_bought_in_is_named(section, material, usual, held):
+    # AISC Manual Table 2-4 (from memory): W shapes A992 (50 ksi), HSS A500 Gr C (50 ksi
+    # shaped, 46 ksi round); S355 credits 51.5 ksi (355 MPa) that the shape is not bought at
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(job_text(section=section, material=material))
+    w = [p for p in warnings(job) if p.key == "beam.material"]
+    assert w and usual in w[0].message
+    assert bool([g for g in capacity(job).not_rated if "not a grade" in g]) == held

@@ -4149,6 +4149,25 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                f"{units.fmt(material.fy, 'stress', system)}. Write material = \"A53-B\", or "
                "give the tube the mill cert names (a round-tube section) if it is not pipe",
                where)
+    elif mkind == "steel" and key in EN_GRADES and not is_en_section(section) \
+            and get_material(key) is not None and section.source.startswith("AISC") \
+            and shape in ("i-beam", "channel", "angle", "tee", "rect-tube", "round-tube"):
+        # a European grade on an AISC shape: a W is bought as A992, an HSS as A500, the
+        # rest as A36 (AISC Manual Table 2-4, from memory)
+        usual = ("A500-C" if shape == "rect-tube" else "A500-C-round" if shape == "round-tube"
+                 else "A992" if section.designation.upper().startswith(("W", "HP", "WT"))
+                 else "A36")
+        r.warn(f"material {key!r} is a European grade (EN 10025 / EN 10219), but section "
+               f"{section.designation!r} is an AISC shape, bought as {usual} (AISC Manual "
+               "Table 2-4, from memory): the check credits "
+               f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
+               where)
+    elif mkind == "steel" and key.endswith("-round") and shape == "rect-tube":
+        usual = key[:-len("-round")]
+        r.warn(f"material {key!r} is the grade of round HSS, but section "
+               f"{section.designation!r} is square or rectangular tube, whose grade is "
+               f"{usual!r} (A500's own figure for shaped tube): write material = \"{usual}\"",
+               where)
     elif mkind == "steel" and key == "A513-DOM" and shape == "rect-tube":
         usual = "A500-C"
         r.warn(f"material {key!r} is DOM (drawn over mandrel) tube, which is round, but "
