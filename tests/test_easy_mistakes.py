@@ -1773,3 +1773,22 @@ def test_a_grade_the_aisc_shape_is_not_bought_in_is_named(section, material, usu
     w = [p for p in warnings(job) if p.key == "beam.material"]
     assert w and usual in w[0].message
     assert bool([g for g in capacity(job).not_rated if "not a grade" in g]) == held
+
+
+def test_a_support_place_in_inches_that_is_the_length_in_feet_is_held():
+    # "12 in" for the far support of a 12 ft joist: a 1 ft span with an 11 ft overhang
+    from shopbeam.design.capacity import capacity
+
+    text = _uniform("", supports_at=("0 ft", "12 in")).replace('length = "6 ft"',
+                                                                'length = "12 ft"')
+    job = parse_job_text(text)
+    assert any(p.key == "supports[1].at" and "12 ft" in p.message for p in warnings(job))
+    assert any("supports[1].at" in g for g in capacity(job).not_rated)
+    ok = parse_job_text(_uniform("", supports_at=("0 ft", "6 ft")).replace(
+        'length = "6 ft"', 'length = "12 ft"'))
+    assert not any(p.key == "supports[1].at" for p in warnings(ok))
+
+
+def test_a_job_with_no_loads_is_warned():
+    job = parse_job_text(_uniform("").split("[[loads]]")[0])
+    assert any(p.key == "loads" and "no loads entered" in p.message for p in warnings(job))

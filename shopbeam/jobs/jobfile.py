@@ -2921,6 +2921,32 @@ _UNIT_TWINS = {"in": ("ft", 0.3048), "inch": ("ft", 0.3048), "inches": ("ft", 0.
 _PLAIN_POSITION = re.compile(r"\s*([0-9]*\.?[0-9]+)\s*([A-Za-z]+)\s*")
 
 
+def _unit_twin_support(r: _Reader, raw_supports, length, system: str) -> None:
+    """A support's place typed in the small unit whose number is the member's length in the
+    large one ("12 in" on a 12 ft joist): read as written, the member becomes a short span
+    with a long overhang. NOT RATED until written so that it cannot be that slip."""
+    if length is None or not isinstance(raw_supports, list):
+        return
+    words = {"ft": "feet", "m": "metres"}
+    for i, raw in enumerate(raw_supports):
+        m = _PLAIN_POSITION.fullmatch(raw.get("at")) if _is_table(raw) and isinstance(
+            raw.get("at"), str) else None
+        if not m or m.group(2).lower() not in _UNIT_TWINS:
+            continue
+        big, size = _UNIT_TWINS[m.group(2).lower()]
+        if abs(float(m.group(1)) * size - length) > 1e-6 * length:
+            continue
+        key = f"supports[{i}].at"
+        r.hold(f"{key} = {raw['at']!r}: {m.group(1)} is the member's length in {words[big]} "
+               f"({m.group(1)} {big}), typed with {m.group(2)}. Read as written, the support "
+               f"sits {units.fmt(units.parse(raw['at'], 'length'), 'length', system)} from "
+               "the left end and the rest of the member is an overhang, so no rating is "
+               f"posted. If {m.group(1)} {big} is meant, write it so; if the place is right, "
+               "write it in the length's unit", key,
+               f"{key} = {raw['at']!r} is the member's length in {words[big]} typed with "
+               f"{m.group(2)}: write the place meant")
+
+
 def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str) -> bool:
     """A load position or end typed in the small unit whose number is the member's length,
     or a support's place, in the large one: "3 in" on a 3 ft (36 in) arm, end = "14 in" on
@@ -4859,6 +4885,10 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_floor(r, criteria, tags, supports, length)
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
+    if not loads and not (moving or data.get("moving")) and not any(
+            p.key.startswith("loads") for p in r.problems):
+        r.warn("no loads entered: only the member's own weight is checked, and a pass says "
+               "nothing of what it may carry; add the [[loads]] it carries", "loads")
     _dead_load_units(r, raw_loads, loads, system)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _step_beam(r, title, notes, tags, raw_loads, section)
@@ -4868,6 +4898,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    beam.get("members", 1) if isinstance(beam, dict) else None, section, system)
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
+    _unit_twin_support(r, data.get("supports"), length, system)
     if not _unit_twin_slip(r, raw_loads, loads, supports, length, system):
         _root_at_the_left_loads_by_it(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)
