@@ -91,6 +91,17 @@ def test_near_miss_suggestions(text, expect):
     assert exc.value.problem.key == "beam.section"
 
 
+@pytest.mark.parametrize("text, meant", [("HSS2x4x3/16", "HSS4X2X3/16"),
+                                         ("HSS3x6x1/4", "HSS6X3X1/4")])
+def test_a_tube_named_narrow_side_first_is_named_the_catalogs_way(text, meant):
+    # the AISC Shapes Database names a rectangular HSS larger side first; a tube lying flat
+    # is that section about its weak axis
+    with pytest.raises(InputError) as exc:
+        catalog.lookup(text, key="beam.section")
+    msg = exc.value.problem.message
+    assert f"'{meant}'" in msg and 'axis = "weak"' in msg
+
+
 def test_nonsense_gets_a_plain_message():
     with pytest.raises(InputError) as exc:
         catalog.lookup("banana")

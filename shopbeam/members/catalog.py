@@ -862,6 +862,19 @@ def _not_found(designation: str, k: str | None) -> str:
             return (f"unknown section {designation!r}: it starts with the catalog section "
                     f"{found!r} followed by {tail!r}; the section key takes the designation "
                     f"alone and a grade goes in material: write {said}")
+    # a tube's sizes the wrong way round ("HSS2x4x3/16"): the catalog names the larger side
+    # first; a tube lying flat is that section about its weak axis
+    m = re.fullmatch(r"\s*(HSS|TS)\s*([0-9./-]+)\s*[xX]\s*([0-9./-]+)\s*[xX]\s*(\S+)\s*",
+                     str(designation), re.IGNORECASE)
+    if m:
+        turned = f"{m.group(1)}{m.group(3)}x{m.group(2)}x{m.group(4)}"
+        tk = canon(turned)
+        hit = _index()[0].get(tk) if tk else None
+        if hit is not None:
+            return (f"unknown section {designation!r}: the catalog names a tube's larger side "
+                    f"first, so it is {hit.designation!r}; write section = "
+                    f"\"{hit.designation}\", and axis = \"weak\" under [beam] if it lies flat "
+                    "(bent about its narrow side)")
     sugg = suggestions(designation)
     hint = f"did you mean {', '.join(sugg)}? " if sugg else ""
     prefix = (k or "").split("|")[0] or (re.match(r"\s*([A-Za-z]+)", str(designation)) or
