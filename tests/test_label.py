@@ -975,3 +975,15 @@ category = "{cat}"
     assert said["B"].endswith("ASME BTH-1 Design Category B, Nd 3")
     plain = load_job(PRESETS / "mezzanine-joist.toml")
     assert "BTH-1" not in label.rating(capacity(plain)).basis
+
+
+def test_a_lifting_label_says_the_supports_take_the_sideways_trolley_force_too():
+    # ASCE 7-16 4.9.4 (from memory): 20 % of rated load + hoist + trolley for a powered
+    # trolley; the member is checked for it, the supports' and root's figures are vertical
+    from shopbeam.output import label
+    jib = load_job(PRESETS / "jib-arm.toml")
+    notes = label.rating(capacity(jib), analyze(jib).unchecked).notes
+    said = [n for n in notes if "SIDEWAYS" in n]
+    assert said and "20%" in said[0] and "at the root" in said[0]
+    plain = load_job(PRESETS / "mezzanine-joist.toml")
+    assert not any("SIDEWAYS" in n for n in label.rating(capacity(plain)).notes)

@@ -309,6 +309,7 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     else:
         notes.append("Rated for the loads placed as in the job; other placements are not rated.")
     notes += _held_words(job)
+    notes += _sideways_words(job)
     on_top = _dead_words(job)
     if on_top:
         notes.append(f"These loads are IN ADDITION TO {on_top}, which stay on.")
@@ -685,6 +686,23 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
 def _up(ld, words: str = "UPWARD ") -> str:
     """`words` for a load that pushes up (a figure with no direction reads as a weight)."""
     return words if ld.kind != "moment" and ld.total_force > 0 else ""
+
+
+def _sideways_words(job) -> list[str]:
+    """A lifting profile's lateral trolley force: the member is checked for it (the lateral
+    trolley force check), but the supports' and a fixed end's figures on the label are the
+    vertical ones; the hangers, seats and a jib's mast take it too."""
+    from shopbeam.design.lifting import profile_of
+
+    prof = profile_of(job)
+    if prof is None or not prof.lateral:
+        return []
+    fixed = any(s.kind == "fixed" for s in job.supports)
+    return [f"The supports{' and the fixed end' if fixed else ''} also take the trolley's "
+            f"SIDEWAYS force, {prof.lateral:.0%} of rated load + hoist + trolley at the bottom "
+            "flange (ASCE 7-16 4.9.4, from memory)"
+            + (", and the sideways bending and twist it makes at the root" if fixed else "")
+            + ": not in the figures here, and not checked."]
 
 
 def _design_factor_words(job) -> str:
