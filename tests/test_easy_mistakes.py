@@ -1792,3 +1792,18 @@ def test_a_support_place_in_inches_that_is_the_length_in_feet_is_held():
 def test_a_job_with_no_loads_is_warned():
     job = parse_job_text(_uniform("").split("[[loads]]")[0])
     assert any(p.key == "loads" and "no loads entered" in p.message for p in warnings(job))
+
+
+@pytest.mark.parametrize("notes, material, warned", [
+    ("2x10 No.2 joists at 16 in", "DF-L-SS", True), ("No. 1 DF joists", "DF-L-2", True),
+    ("2x10 No.2 joists at 16 in", "DF-L-2", False), ("Bay No. 2, north wall", "DF-L-SS", False),
+    ("Select Structural joists", "DF-L-2", True)])
+def test_a_lumber_grade_named_in_words_that_is_not_the_materials_is_warned(notes, material,
+                                                                          warned):
+    # NDS Supplement Table 4A (from memory): DF-L Select Structural Fb 1500 psi, No.2 900
+    text = ('schema = 1\ntitle = "loft joist"\nnotes = "{n}"\n[beam]\nlength = "12 ft"\n'
+            'section = "2x10"\nmaterial = "{m}"\nbraced = true\n[[supports]]\nat = "0 ft"\n'
+            'type = "pin"\n[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\n'
+            'type = "uniform"\nvalue = "-50 lbf/ft"\n').format(n=notes, m=material)
+    job = parse_job_text(text)
+    assert any("name the grade" in p.message for p in warnings(job)) == warned

@@ -4026,6 +4026,36 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
                "LVL", "beam.material")
 
 
+# a sawn lumber grade named in words beside a lumber size or a species ("2x10 No.2",
+# "No. 1 DF", "Select Structural joists"), and the grade word in a material key ("DF-L-2")
+_GRADE_WORDS = re.compile(
+    r"(?:\b\d+x\d+\s+|\b(?:DF|DF-L|Doug(?:las)? fir|SPF|HF|Hem[- ]?fir|SP|SYP|pine)\s+)"
+    r"(?:No\.?\s?|#)([123])\b|\b(?:No\.?\s?|#)([123])\s+(?:&\s*btr\s+)?"
+    r"(?:DF|DF-L|Doug|SPF|HF|Hem|SP\b|SYP|pine|fir|joists?|lumber|studs?|boards?|planks?)"
+    r"|\b(select structural|sel\.? str\.?)\b", re.IGNORECASE)
+
+
+def _grade_words(r: _Reader, material, title, notes) -> None:
+    """A sawn lumber grade named in the title or notes that is not the material's ("2x10
+    No.2 joists" with material DF-L-SS): the checks take the key's grade, and Select
+    Structural's Fb is 1.7 times No.2's (NDS Supplement Table 4A, from memory). Warned."""
+    key = getattr(material, "key", "") or ""
+    if getattr(material, "kind", "") != "lumber" or key.startswith("LVL"):
+        return
+    mine = key.rsplit("-", 1)[-1].upper()
+    text = " | ".join(str(x) for x in (title, notes) if isinstance(x, str))
+    said = set()
+    for m in _GRADE_WORDS.finditer(text):
+        said.add("SS" if m.group(3) else (m.group(1) or m.group(2)))
+    other = sorted(g for g in said if g != mine)
+    if other and mine not in said:
+        words = ", ".join("Select Structural" if g == "SS" else f"No.{g}" for g in other)
+        r.warn(f"the title or notes name the grade {words}, but material {key!r} is "
+               f"{'Select Structural' if mine == 'SS' else 'No.' + mine}: the checks take the "
+               "material's grade (its Fb and Fv). Give the grade the stamp on the lumber "
+               "shows", "beam.material")
+
+
 ROUGH_SAWN = "rough-sawn"  # the tag that says a wood section's full sizes are its real ones
 _NOMINAL_THICK = (2, 3, 4, 6, 8)
 _NOMINAL_WIDE = (2, 3, 4, 6, 8, 10, 12, 14, 16)
@@ -4825,6 +4855,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                notes)
     _family_mismatch(r, section, material, system)
     _nominal_as_dressed(r, section, material, tags, system)
+    _grade_words(r, material, title, notes)
     _thickness_range(r, section, material, welded, system)
     if welded and getattr(material, "kind", "") == "aluminum" and \
             not getattr(material, "fy_welded", None):
