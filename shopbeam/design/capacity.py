@@ -956,7 +956,9 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
     mv = read_moving(job)
     if not math.isfinite(k):
         return [("max load", "the live loads make no demand on any check"
-                 if res.method == "no demand" else "no live load entered")]
+                 if res.method == "no demand" else "no multiplier of the live loads makes a "
+                 "check fail (unbounded)" if res.method == "unbounded"
+                 else "no live load entered")]
     out = []
     if not mv and len(live) == 1 and live[0].kind == "uniform":
         w = abs(live[0].w1) * k
