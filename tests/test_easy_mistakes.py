@@ -1655,6 +1655,11 @@ def test_a_position_in_inches_that_is_the_length_in_feet_is_not_rated():
     for at in ("0.25 ft", "36 in", "34 in"):
         ok = capacity(parse_job_text(ARM.format(length="36 in", at=at)))
         assert not [g for g in ok.not_rated if "member's length" in g], at
+    # a spread load cannot start at the far end: "4 in" as the start on a 48 in arm is meant
+    spread = ARM.format(length="48 in", at="").replace(
+        'type = "point"\nat = ""\nvalue = "-2000 lbf"',
+        'type = "uniform"\nstart = "4 in"\nend = "48 in"\nvalue = "-400 lbf/ft"')
+    assert not any("member's length" in p.message for p in warnings(parse_job_text(spread)))
     # an end typed in inches on a beam in feet: 14 in for 14 ft
     text = _uniform('start = "0 ft"\nend = "14 in"', supports_at=("0 ft", "14 ft")).replace(
         'length = "6 ft"', 'length = "14 ft"')
@@ -1693,7 +1698,8 @@ def test_a_rack_named_in_plain_words_is_held_until_tagged(title):
     # from memory: 25 % of one unit load) unless tagged: held, as "pallet rack" already was
     job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{title}"'))
     assert any("reads like a storage rack" in p.message for p in warnings(job))
-    for other in ("Pipe rack crossbeam", "Rack and pinion guard"):
+    for other in ("Pipe rack crossbeam", "Rack and pinion guard", "Hose rack rail",
+                  "Towel drying rack"):
         job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{other}"'))
         assert not any("reads like a storage rack" in p.message for p in warnings(job)), other
 

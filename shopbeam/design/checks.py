@@ -1001,9 +1001,10 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
     fl, sh = _design_factor(job, sec, fl, sh)
+    code = fl  # the code's own strength: whether buckling sets it is judged on it, not the cap
     fl = on_yield(fl, sec, job.material, job.criteria.safety_factor)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
-    extra += _stainless_buckling(job, b, fl, segs)
+    extra += _stainless_buckling(job, b, code, segs)
     extra += _wood_slenderness(job, fl, segs, braced)
     return Strengths(b, fl, sh, tuple(segs), n, absolute, words, sec,
                      member_unchecked(job, sec, fl) + extra,

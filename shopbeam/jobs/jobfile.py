@@ -2301,7 +2301,9 @@ _RACK_SOFT = re.compile(
     # a rack on its own ("Rack level 2"), not a pipe, cable or tray rack across a plant, nor
     # a rack and pinion; skids (pallets), uprights and beam levels are rack words too
     r"(?<!pipe )(?<!pipe-)(?<!cable )(?<!cable-)(?<!conduit )(?<!tray )(?<!bike )"
-    r"(?<!roof )racks?(?! and pinion)(?!-and-pinion)|skids?|uprights?|"
+    r"(?<!roof )(?<!hose )(?<!towel )(?<!drying )(?<!coat )(?<!tool )(?<!gun )(?<!spice )"
+    r"(?<!wine )(?<!shoe )(?<!hat )(?<!dish )(?<!plate )(?<!luggage )(?<!magazine )"
+    r"racks?(?! and pinion)(?!-and-pinion)|skids?|uprights?|"
     r"beam levels?|levels? \d+ beams?|longspan)\b", re.IGNORECASE)
 
 
@@ -2968,7 +2970,10 @@ def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str)
                 continue
             big, size = _UNIT_TWINS[m.group(2).lower()]
             meant = float(m.group(1)) * size
-            if meant <= 0 or not any(abs(meant - x) <= 1e-6 * length for x in marks):
+            # (a spread load cannot start at the member's far end: "4 in" for the start of a
+            # load on a 4 ft arm is a place by the root, meant)
+            near = marks[1:] if k == "start" else marks
+            if meant <= 0 or not any(abs(meant - x) <= 1e-6 * length for x in near):
                 continue
             what = "length" if abs(meant - length) <= 1e-6 * length else "support place"
             key = f"loads[{i}].{k}"
