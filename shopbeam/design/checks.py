@@ -1133,7 +1133,8 @@ def on_yield(fl: Flexure, sec, mat, sf: float) -> Flexure:
     the code's Omega_b (and than 1.67) is also taken on every bending limit state (lateral-torsional and
     local buckling), so the margin asked for holds whichever comes first. A basis that
     already checks a stress (first yield, wood) is left as it is."""
-    if fl.stress_s is not None or not getattr(mat, "fy", None) or not sf or sf <= 0:
+    if fl.stress_s is not None or not getattr(mat, "fy", None) or not sf or sf <= 0 \
+            or fl.special:  # tees and angles: open_shapes caps each axis's own strength
         return fl
     text = fl.cap_text
     if sf > max(fl.omega, DEFAULT_SF) * (1 + 1e-12):
