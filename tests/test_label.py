@@ -987,3 +987,18 @@ def test_a_lifting_label_says_the_supports_take_the_sideways_trolley_force_too()
     assert said and "20%" in said[0] and "at the root" in said[0]
     plain = load_job(PRESETS / "mezzanine-joist.toml")
     assert not any("SIDEWAYS" in n for n in label.rating(capacity(plain)).notes)
+
+
+def test_capacity_names_where_a_travelling_hoist_may_run_not_where_it_was_typed():
+    # the label rates the hoist anywhere along its travel; capacity's max load line says the
+    # same, not the place typed (the worst place, where the job put it)
+    from shopbeam.design.capacity import max_load_lines
+    job = load_job(PRESETS / "monorail-hoist-beam.toml")
+    lines = dict(max_load_lines(capacity(job)))
+    assert lines["at"] == "anywhere from 0 ft to 16 ft"
+    plain = dict(max_load_lines(capacity(parse_job_text(
+        'schema = 1\ntitle = "bench"\n[beam]\nlength = "6 ft"\nsection = "HSS4x4x1/4"\n'
+        'material = "A500-C"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+        'at = "6 ft"\ntype = "roller"\n[[loads]]\ntype = "point"\nat = "2 ft"\n'
+        'value = "-500 lbf"\n'))))
+    assert plain["at"] == "2 ft"

@@ -971,7 +971,10 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
                                         * (live[0].end - live[0].start), "force", sy)))
     elif not mv and len(live) == 1 and live[0].kind == "point":
         out.append(("max point load", _floor_fmt(abs(live[0].value) * k, "force", sy)))
-        out.append(("at", units.fmt(live[0].at, "length", sy)))
+        moved = travelling(job)  # a hoist rated travelling: where it may run, not its place
+        out.append(("at", units.fmt(live[0].at, "length", sy) if moved is None else
+                    "anywhere from {} to {}".format(
+                        *(units.fmt(x, "length", sy) for x in moved.moving[0].travel))))
     else:
         shown = math.floor(k * 1000 * (1 + 1e-12)) / 1000  # rounded DOWN, as posted
         if shown > k:
