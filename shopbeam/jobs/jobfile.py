@@ -3044,6 +3044,8 @@ def _lifting_without_live(r: _Reader, criteria: Criteria, tags, loads, moving) -
     rated."""
     if not is_lifting(tags, criteria.lifting) or moving:
         return
+    if any(not p.warning and p.key.startswith("loads") for p in r.problems):
+        return  # a load refused: it may be the live one, and the problem says what to fix
     forces = [ld for ld in loads if ld.kind != "moment"]
     live = [ld for ld in forces if ld.case == "live"]
     if live and not any(ld.kind == "point" for ld in live):
