@@ -2524,7 +2524,8 @@ TINY_DEAD_POINT = 4.4482216152605  # 1 lbf, N
 TINY_DEAD_LINE = 4.4482216152605 / 0.3048  # 1 lbf/ft, N/m
 
 
-def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
+def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
+                     lifting: bool = False) -> None:
     """A dead load typed in metric force units on a job in US units (N for lbf is 4.45 times
     too light, and the rating counts on the dead load it holds fixed), and a dead load too
     light to be real (under 1 lbf or 1 lbf/ft and under a thousandth of the largest live load):
@@ -2556,10 +2557,12 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str) -> None:
                        f"{name} is a dead load typed in metric units ({said}) on a job in US "
                        "units: write it in lbf, lbf/ft or psf")
             continue
-        if system == "si" and ld.case == "dead" and ld.kind != "moment" and kn_live and \
-                any(_PLAIN_NEWTON.search(v) for v in texts) and \
+        if system == "si" and ld.case == "dead" and ld.kind == "point" and kn_live and \
+                lifting and any(_PLAIN_NEWTON.search(v) for v in texts) and \
                 abs(ld.total_force) < live_max / 50:
-            # "-40 N" for a 40 kg hoist beside a hook load in kN: 9.81 times too light
+            # "-40 N" for a 40 kg hoist beside a hook load in kN: 9.81 times too light (a
+            # hoist and trolley weigh some 5 to 10 % of what they lift; a light fixture in N
+            # beside a shelf's load in kN is real, so only a lifting job's hoist is held)
             said = ", ".join(f'"{v}"' for v in texts)
             r.hold(f"{name} is a dead load typed in N ({said}) beside live loads in kN, and "
                    "under a fiftieth of the largest: if kg was meant (a hoist's or a deck's "
@@ -3002,6 +3005,8 @@ def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: s
         return
     live = [ld for ld in loads if ld.case == "live" and ld.total_force]
     reach = [(ld.at if ld.kind == "point" else ld.end) for ld in live]
+    if any(x <= 1e-9 * length for x in reach):
+        return  # a load on the root itself: the at-support rule names it
     if live and max(reach) <= length / 4 * (1 + 1e-9):
         r.warn(f"the only support is a fixed end at 0 and every live load sits within a "
                f"quarter of the reach from it (the farthest at "
@@ -4212,19 +4217,6 @@ def _grade_mismatch(r: _Reader, section, material, mkind: str, system: str) -> s
                f"{units.fmt(material.fy, 'stress', system)}. Write material = \"A53-B\", or "
                "give the tube the mill cert names (a round-tube section) if it is not pipe",
                where)
-    elif mkind == "steel" and key in EN_GRADES and not is_en_section(section) \
-            and get_material(key) is not None and section.source.startswith("AISC") \
-            and shape in ("i-beam", "channel", "angle", "tee", "rect-tube", "round-tube"):
-        # a European grade on an AISC shape: a W is bought as A992, an HSS as A500, the
-        # rest as A36 (AISC Manual Table 2-4, from memory)
-        usual = ("A500-C" if shape == "rect-tube" else "A500-C-round" if shape == "round-tube"
-                 else "A992" if section.designation.upper().startswith(("W", "HP", "WT"))
-                 else "A36")
-        r.warn(f"material {key!r} is a European grade (EN 10025 / EN 10219), but section "
-               f"{section.designation!r} is an AISC shape, bought as {usual} (AISC Manual "
-               "Table 2-4, from memory): the check credits "
-               f"{units.fmt(material.fy, 'stress', system)}. Give the grade on the mill cert",
-               where)
     elif mkind == "steel" and key.endswith("-round") and shape == "rect-tube":
         usual = key[:-len("-round")]
         r.warn(f"material {key!r} is the grade of round HSS, but section "
@@ -4923,11 +4915,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_floor(r, criteria, tags, supports, length)
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
-    if not loads and not (moving or data.get("moving")) and not any(
-            p.key.startswith("loads") for p in r.problems):
-        r.warn("no loads entered: only the member's own weight is checked, and a pass says "
-               "nothing of what it may carry; add the [[loads]] it carries", "loads")
-    _dead_load_units(r, raw_loads, loads, system)
+    _dead_load_units(r, raw_loads, loads, system, is_lifting(tags, criteria.lifting))
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _step_beam(r, title, notes, tags, raw_loads, section)
     _rack_members(r, title, notes, tags, raw_loads,
