@@ -1797,8 +1797,9 @@ def test_a_support_place_in_inches_that_is_the_length_in_feet_is_held():
 @pytest.mark.parametrize("notes, material, warned", [
     ("2x10 No.2 joists at 16 in", "DF-L-SS", True), ("No. 1 DF joists", "DF-L-2", True),
     ("2x10 No.2 joists at 16 in", "DF-L-2", False), ("Bay No. 2, north wall", "DF-L-SS", False),
-    ("Select Structural joists", "DF-L-2", True)])
-def test_a_lumber_grade_named_in_words_that_is_not_the_materials_is_warned(notes, material,
+    ("Select Structural joists", "DF-L-2", True), ("#2 & btr DF-L", "DF-L-SS", True),
+    ("#2 and better", "DF-L-SS", True), ("grade 2", "DF-L-SS", True), ("bay #2", "DF-L-SS", False)])
+def test_a_lumber_grade_named_in_words_that_is_not_the_materials_is_held(notes, material,
                                                                           warned):
     # NDS Supplement Table 4A (from memory): DF-L Select Structural Fb 1500 psi, No.2 900
     text = ('schema = 1\ntitle = "loft joist"\nnotes = "{n}"\n[beam]\nlength = "12 ft"\n'
@@ -1807,3 +1808,49 @@ def test_a_lumber_grade_named_in_words_that_is_not_the_materials_is_warned(notes
             'type = "uniform"\nvalue = "-50 lbf/ft"\n').format(n=notes, m=material)
     job = parse_job_text(text)
     assert any("name the grade" in p.message for p in warnings(job)) == warned
+    from shopbeam.design.capacity import capacity
+    assert any("notes name the grade" in g for g in capacity(job).not_rated) == warned
+
+
+def test_review_63_cases_of_the_cap_and_the_slip_rules():
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.capacity import capacity
+
+    # welded aluminium first-yields in the heat-affected zone: 6061-T6 Ftyw 15 ksi (ADM 2015
+    # Table A.3.4, from memory), so the cap is Ftyw S / 1.67, not Fty's 35 ksi
+    bar = ('schema = 1\ntitle = "al bar"\n[beam]\nlength = "3 ft"\nmaterial = "6061-T6"\n'
+           'welded = true\nbraced = true\nself_weight = false\n[beam.section]\n'
+           'shape = "rect-bar"\nwidth = "1 in"\ndepth = "2 in"\n[[supports]]\nat = "0 ft"\n'
+           'type = "pin"\n[[supports]]\nat = "3 ft"\ntype = "roller"\n[[loads]]\n'
+           'type = "uniform"\nvalue = "-10 lbf/ft"\n')
+    bend = next(c for c in analyze(parse_job_text(bar)).checks if c.name == "bending")
+    s = 1 * 2 ** 2 / 6  # in^3
+    assert bend.params["Mn"] / bend.params["Omega"] <= 15e3 * s / 1.67 * 4.4482216152605 * \
+        0.0254 * (1 + 1e-9)
+    # a below-the-hook beam asking more than its Nd is rated on it, not held as unchecked
+    bth = ('schema = 1\ntitle = "spreader"\ntags = ["lifting"]\n[beam]\nlength = "8 ft"\n'
+           'section = "W8x18"\nmaterial = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+           'brace = true\n[[supports]]\nat = "8 ft"\ntype = "roller"\nbrace = true\n'
+           '[[loads]]\ntype = "point"\nat = "4 ft"\nvalue = "-2000 lbf"\nflange = "bottom"\n'
+           'lug = true\n[criteria]\nlifting = "below-the-hook"\ncategory = "A"\n'
+           'safety_factor = 2.5\n')
+    assert not [g for g in capacity(parse_job_text(bth)).not_rated if "BTH-1 design factor" in g]
+    # a dead load's total read through a point between thousands is held as its value is
+    total = _uniform('case = "dead"').replace('value = "-100 lbf/ft"', 'total = "-1.250 lbf"')
+    total += '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n'
+    assert any("point between thousands" in g for g in capacity(parse_job_text(total)).not_rated)
+    # a 1x6 board typed at its nominal size (dressed 3/4 x 5-1/2, NDS Supplement Table 1A,
+    # from memory)
+    board = ('schema = 1\ntitle = "shelf board"\n[beam]\nlength = "3 ft"\nmaterial = "DF-L-2"\n'
+             '[beam.section]\nshape = "rect-bar"\nwidth = "6 in"\ndepth = "1 in"\n'
+             '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "3 ft"\n'
+             'type = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-20 lbf/ft"\n')
+    assert any("nominal size of a 1x6" in p.message for p in warnings(parse_job_text(board)))
+    # not an uplift, not a storage rack
+    for label in ("suction line", "vacuum suction table"):
+        job = parse_job_text(_uniform(f'label = "{label}"'))
+        assert not any("pushes DOWN" in p.message for p in warnings(job)), label
+    for title in ("Server rack rail", "Ladder rack crossbar", "Clamp rack bar",
+                  "Welding table uprights"):
+        job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{title}"'))
+        assert not any("storage rack" in p.message for p in warnings(job)), title

@@ -959,8 +959,10 @@ def member_unchecked(job, sec, flex: Flexure) -> tuple[Unchecked, ...]:
            if not (braced and u.name == "lateral-torsional buckling")]
     out += lifting_unchecked(job, sec) + flange_unchecked(job, sec)
     prof = profile_of(job)
-    if prof is not None and prof.nd is not None and (flex.stress_s is not None
-                                                     or flex.omega not in (OMEGA_B, prof.nd)):
+    sf = job.criteria.safety_factor
+    if prof is not None and prof.nd is not None and (
+            flex.stress_s is not None or flex.omega not in (OMEGA_B, prof.nd)
+            and not (flex.omega == sf and sf > prof.nd)):  # (a larger factor asked: on_yield)
         # _design_factor puts Nd in place of the AISC Omegas of steel on the AISC basis only
         out.append(Unchecked(
             "ASME BTH-1 design factor on this member",
@@ -1002,7 +1004,7 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     n, absolute, words = deflection_rule(job)
     fl, sh = _design_factor(job, sec, fl, sh)
     code = fl  # the code's own strength: whether buckling sets it is judged on it, not the cap
-    fl = on_yield(fl, sec, job.material, job.criteria.safety_factor)
+    fl = on_yield(fl, sec, job.material, job.criteria.safety_factor, job.welded)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
     extra += _stainless_buckling(job, b, code, segs)
     extra += _wood_slenderness(job, fl, segs, braced)
@@ -1124,7 +1126,7 @@ def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
 DEFAULT_SF = 1.67
 
 
-def on_yield(fl: Flexure, sec, mat, sf: float) -> Flexure:
+def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
     """The job's safety factor on the material's yield strength in bending (`[criteria]
     safety_factor`, default 1.67): the allowable moment is never more than first yield over
     it, Fy S / safety_factor, besides the code's own limit states (AISC 360-16 chapter F, ADM
@@ -1140,7 +1142,10 @@ def on_yield(fl: Flexure, sec, mat, sf: float) -> Flexure:
     if sf > max(fl.omega, DEFAULT_SF) * (1 + 1e-12):
         text += f"; Omega_b {fl.omega:g} raised to the job's safety factor {sf:g}"
         fl = replace(fl, omega=sf)
-    allow = mat.fy * min(sec.sx_top, sec.sx_bot) / sf
+    # first yield of a welded aluminium member is in the weld's heat-affected zone (Ftyw)
+    fy = mat.fy_welded if welded and getattr(mat, "kind", "") == "aluminum" and getattr(
+        mat, "fy_welded", None) else mat.fy
+    allow = fy * min(sec.sx_top, sec.sx_bot) / sf
     if fl.cap / fl.omega > allow * (1 + 1e-12):
         fl = replace(fl, cap=allow * fl.omega)
         text += (f"; capped at first yield, M <= Fy S / {sf:g} (the job's safety factor on "

@@ -853,7 +853,7 @@ def _batched(job, base, parts, cands, with_capacity):
             fl = flexure(sec, mat, b, job.criteria.safety_factor, job.welded)
             sh = shear_strength(sec, mat, b, job.criteria.safety_factor, job.welded)
             fl, sh = _design_factor(jm, sec, fl, sh)  # a below-the-hook beam: BTH-1 Nd
-            fl = on_yield(fl, sec, mat, job.criteria.safety_factor)
+            fl = on_yield(fl, sec, mat, job.criteria.safety_factor, job.welded)
             wheel = None
             if ws is not None and sec.shape == "i-beam" and sec.axis == "strong":
                 tf, tapered = flange_tf_at_wheel(sec, a_w)

@@ -2190,12 +2190,14 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
             r.warn("this load is zero: it changes nothing (and a zero live load is nothing to "
                    "rate); give its value, or remove it", f"{key}.value"
                    if "value" in ld else key)
-        if got is not None and got.case == "dead" and any(
-                p.key == f"{key}.value" and "a point between thousands" in p.message
-                for p in r.problems):
+        point_key = next((f"{key}.{k}" for k in ("value", "total") if any(
+            p.key == f"{key}.{k}" and "a point between thousands" in p.message
+            for p in r.problems)), None)
+        if got is not None and got.case == "dead" and point_key:
             # the rating holds a dead load fixed: one read a thousand times too light posts
             # a live load far too high, so the doubt is not left to a warning
-            r.holds.append(f"the dead load {key} ({ld.get('value')!r}) may be a thousand times "
+            typed = ld.get(point_key.rsplit(".", 1)[1])
+            r.holds.append(f"the dead load {key} ({typed!r}) may be a thousand times "
                            "what is read (a point between thousands): write it without the "
                            "point, or with fewer than three decimals, as meant")
         if got is not None and got.kind != "moment" and ld.get("uplift") is not True \
@@ -2279,7 +2281,9 @@ _LIFTING_STEMS = re.compile(
     r"hoists?|blocks?|falls?|trolleys?)$|^underhung$", re.IGNORECASE)
 # a load's label that says it pushes up (wind uplift, suction, lift-off), not a negation
 _UPLIFT_WORDS = re.compile(r"(?<!\bno )(?<!\bnot )(?<!\banti-)(?<!\banti )"
-                           r"\b(?:uplift|up-lift|suction|lift[- ]?off|blow[- ]?off)\b",
+                           r"\b(?:uplift|up-lift|wind suction|lift[- ]?off|blow[- ]?off|"
+                           r"suction(?![- ](?:lines?|tables?|cups?|hoses?|pipes?|pumps?|fans?|"
+                           r"ducts?|heads?|pads?|lifters?)))\b",
                            re.IGNORECASE)
 NOT_RACK = "not-rack"  # the tag that says a job that reads like a storage rack is not one
 # Words that name a storage-rack member; a job that uses one but is not tagged rack gets
@@ -2303,7 +2307,8 @@ _RACK_SOFT = re.compile(
     r"(?<!pipe )(?<!pipe-)(?<!cable )(?<!cable-)(?<!conduit )(?<!tray )(?<!bike )"
     r"(?<!roof )(?<!hose )(?<!towel )(?<!drying )(?<!coat )(?<!tool )(?<!gun )(?<!spice )"
     r"(?<!wine )(?<!shoe )(?<!hat )(?<!dish )(?<!plate )(?<!luggage )(?<!magazine )"
-    r"racks?(?! and pinion)(?!-and-pinion)|skids?|uprights?|"
+    r"(?<!server )(?<!clamp )(?<!ladder )(?<!hose-)(?<!tool-)(?<!bike-)(?<!pipe-)"
+    r"racks?(?! and pinion)(?!-and-pinion)|skids?|"
     r"beam levels?|levels? \d+ beams?|longspan)\b", re.IGNORECASE)
 
 
@@ -4040,11 +4045,16 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
 
 # a sawn lumber grade named in words beside a lumber size or a species ("2x10 No.2",
 # "No. 1 DF", "Select Structural joists"), and the grade word in a material key ("DF-L-2")
+_GRADE_NO = r"(?:(?<![\w#])No\.?\s?|(?<![\w#])#)([123])\b"
+_GRADE_BTR = re.compile(_GRADE_NO + r"\s*(?:&|and)\s*(?:btr|better)\b", re.IGNORECASE)
 _GRADE_WORDS = re.compile(
     r"(?:\b\d+x\d+\s+|\b(?:DF|DF-L|Doug(?:las)? fir|SPF|HF|Hem[- ]?fir|SP|SYP|pine)\s+)"
-    r"(?:No\.?\s?|#)([123])\b|\b(?:No\.?\s?|#)([123])\s+(?:&\s*btr\s+)?"
-    r"(?:DF|DF-L|Doug|SPF|HF|Hem|SP\b|SYP|pine|fir|joists?|lumber|studs?|boards?|planks?)"
-    r"|\b(select structural|sel\.? str\.?)\b", re.IGNORECASE)
+    + _GRADE_NO
+    + r"|" + _GRADE_NO.replace("([123])", "([123])", 1).replace("(?:(?<", "(?:(?<", 1)
+    + r"(?:\s*(?:&|and)\s*(?:btr|better))?\s+(?:grade|DF|DF-L|Doug|SPF|HF|Hem|SP\b|SYP|"
+    r"pine|fir|joists?|lumber|studs?|boards?|planks?|rafters?)"
+    r"|\bgrade\s+(?:No\.?\s?|#)?([123])\b"
+    r"|\b(select structural|sel\.? str\.?)", re.IGNORECASE)
 
 
 def _grade_words(r: _Reader, material, title, notes) -> None:
@@ -4058,18 +4068,27 @@ def _grade_words(r: _Reader, material, title, notes) -> None:
     text = " | ".join(str(x) for x in (title, notes) if isinstance(x, str))
     said = set()
     for m in _GRADE_WORDS.finditer(text):
-        said.add("SS" if m.group(3) else (m.group(1) or m.group(2)))
+        said.add("SS" if m.group(4) else (m.group(1) or m.group(2) or m.group(3)))
+    for m in _GRADE_BTR.finditer(text):  # "#2 and better": a lumber grade on its own
+        said.add(m.group(1))
     other = sorted(g for g in said if g != mine)
     if other and mine not in said:
         words = ", ".join("Select Structural" if g == "SS" else f"No.{g}" for g in other)
-        r.warn(f"the title or notes name the grade {words}, but material {key!r} is "
-               f"{'Select Structural' if mine == 'SS' else 'No.' + mine}: the checks take the "
-               "material's grade (its Fb and Fv). Give the grade the stamp on the lumber "
-               "shows", "beam.material")
+        grade = 'Select Structural' if mine == 'SS' else 'No.' + mine
+        r.hold(f"the title or notes name the grade {words}, but material {key!r} is {grade}: "
+               "the checks take the material's grade (its Fb and Fv; Select Structural's Fb is "
+               "1.7 times No.2's), so no rating is posted while they disagree. Give the grade "
+               "the stamp on the lumber shows, or reword the notes if they speak of another "
+               "member", "beam.material",
+               f"the notes name the grade {words} but material {key!r} is {grade}: give the "
+               "grade on the stamp")
 
 
 ROUGH_SAWN = "rough-sawn"  # the tag that says a wood section's full sizes are its real ones
-_NOMINAL_THICK = (2, 3, 4, 6, 8)
+_NOMINAL_THICK = (1, 2, 3, 4, 6, 8)
+# boards (1 in nominal) and the wide dimension sizes the catalog leaves out, inches dressed
+# dry (NDS Supplement Table 1A, from memory): 1 -> 3/4, 14 -> 13-1/4, 16 -> 15-1/4
+_MORE_DRESSED = {1: 0.75, 14: 13.25, 16: 15.25}
 _NOMINAL_WIDE = (2, 3, 4, 6, 8, 10, 12, 14, 16)
 
 
@@ -4090,11 +4109,17 @@ def _nominal_as_dressed(r: _Reader, section, material, tags, system: str) -> Non
             and round(wi) in _NOMINAL_WIDE):
         return
     name = f"{round(th)}x{round(wi)}"
-    t, w = catalog.dressed(round(th), round(wi))
+    size = {**catalog.DRESSED, **_MORE_DRESSED}
+    t, w = ((round(th) - 0.5, round(wi) - 0.5) if round(th) >= 5 else
+            (size[round(th)], size[round(wi)]))
+    dress = {round(th): t, round(wi): w}  # b and h as typed (on edge or flat)
+    ratio = b * h ** 2 / (dress[round(b)] * dress[round(h)] ** 2)
+    write = (f"section = \"{name}\" (or the dressed sizes)"
+             if (round(th), round(wi)) in catalog.LUMBER_SIZES else "the dressed sizes")
     r.hold(f"the wood section is typed {round(th)} x {round(wi)} in, the nominal size of a "
            f"{name}, whose dressed sizes are {t:g} x {w:g} in: read as written, its section "
-           f"modulus is {(th * wi ** 2) / (t * w ** 2):.2f} times the board's, and so is the "
-           f"figure posted. Write section = \"{name}\" (or the dressed sizes); for full-sawn "
+           f"modulus is {ratio:.2f} times the board's, and so is the "
+           f"figure posted. Write {write}; for full-sawn "
            f"timber of that real size, add the tag \"{ROUGH_SAWN}\"", "beam.section",
            f"the wood section is typed at the nominal size of a {name} ({round(th)} x "
            f"{round(wi)} in; dressed {t:g} x {w:g}): write section = \"{name}\", or tag "
