@@ -68,10 +68,15 @@ def test_rupture_governs_unwelded_6061_t6():
 def test_welded_member_uses_the_heat_affected_zone_strengths():
     # ADM 2015 Table A.3.4 (from memory), 6061-T6 welded: Ftyw 15 ksi, Ftuw 24 ksi; yielding
     # 1.0 x 15 / 1.65 = 9.09 kip*in governs over rupture 1.0 x 24 / 1.95 = 12.3 kip*in
-    res = analyze(job(welded="true"))
+    # (safety_factor = 1: the first-yield cap, Ftyw S / 1 = 10 kip*in, above that figure)
+    res = analyze(job(welded="true", criteria=CODE_ONLY))
     b = check(res, "bending")
     assert b.limit == pytest.approx(1.0 * IN**3 * 15 * KSI / 1.65, rel=1e-9)
     assert "Ftyw (welded)" in b.formula
+    # at the default 1.67 on yield the weld zone first-yields: Ftyw S / 1.67 = 15 x 0.667 /
+    # 1.67 = 5.99 kip*in (the parent metal's 35 ksi would be no limit at all here)
+    capped = check(analyze(job(welded="true")), "bending")
+    assert capped.limit == pytest.approx(2 / 3 * IN**3 * 15 * KSI / 1.67, rel=1e-9)
     v = check(res, "shear")
     # shear yielding 0.6 Ftyw on Av = 2A/3 (solid rectangle), Omega 1.65; the text names it
     assert v.limit == pytest.approx(0.6 * 15 * KSI * (2 / 3 * 2 * IN**2) / 1.65, rel=1e-9)

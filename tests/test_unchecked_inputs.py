@@ -188,11 +188,16 @@ def test_welded_typed_in_aluminium_without_fy_welded_is_warned_and_not_rated():
 
 def test_welded_typed_in_aluminium_with_fy_welded_rates_on_the_weld_by_hand():
     job = parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\nfy_welded = "15 ksi"\n',
-                              length=2, criteria='deflection = "L/100"'))
+                              length=2, criteria='deflection = "L/100"\nsafety_factor = 1.0'))
     assert not warnings(job, "beam.welded")
     res = capacity(job)
     assert res.rated  # Ftyw 15 ksi: Z Ftyw / 1.65 = 1.125 x 15 / 1.65 kip-in
     assert res.factor * 1000 == pytest.approx(1.125 * 15e3 / 1.65 / 6, rel=1e-9)
+    # at the default 1.67 on yield: the weld zone's first yield, S Ftyw / 1.67, governs
+    res = capacity(parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\n'
+                                       'fy_welded = "15 ksi"\n', length=2,
+                                       criteria='deflection = "L/100"')))
+    assert res.factor * 1000 == pytest.approx(0.75 * 15e3 / 1.67 / 6, rel=1e-9)
 
 
 # ------------------------------------------------------------------ a grade that over-credits yield
