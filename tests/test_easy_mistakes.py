@@ -1854,3 +1854,16 @@ def test_review_63_cases_of_the_cap_and_the_slip_rules():
                   "Welding table uprights"):
         job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{title}"'))
         assert not any("storage rack" in p.message for p in warnings(job)), title
+
+
+def test_the_json_keeps_the_codes_nominal_strength_beside_the_first_yield_cap():
+    # W8x18 braced at its ends over 10 ft (AISC Shapes Database v15.0: Zx 17.0, Sx 15.2 in^3):
+    # the code's Mn (F2, Cb from the moment) stays Mn; the cap Fy S / 3 is M_yield_cap
+    from shopbeam.design.analysis import analyze
+
+    job = parse_job_text(job_text(criteria="safety_factor = 3.0"))
+    bend = next(c for c in analyze(job).checks if c.name == "bending")
+    kip_in = 4448.2216152605 * 0.0254
+    assert bend.params["M_yield_cap"] / kip_in == pytest.approx(50 * 15.2 / 3, rel=3e-3)
+    assert bend.params["Mn"] / kip_in > 50 * 15.2  # past first yield: the code's own figure
+    assert bend.limit == pytest.approx(bend.params["M_yield_cap"], rel=1e-12)

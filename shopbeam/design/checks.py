@@ -101,6 +101,8 @@ class Flexure:
     unchecked: tuple = ()
     wood: object = None  # lumber.Factors for wood members
     uses_cb: bool = True  # False: the stability rule has no Cb (NDS CL)
+    # the code's own cap where the job's first-yield cap lowered `cap` (on_yield), else None
+    code_cap: float | None = None
 
     def ltb1(self, lb: float, case: str = "any", system: str = "us") -> tuple[float, str]:
         """LTB strength at Cb = 1 for unbraced length lb (inf when it does not govern), and
@@ -1147,7 +1149,7 @@ def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
         mat, "fy_welded", None) else mat.fy
     allow = fy * min(sec.sx_top, sec.sx_bot) / sf
     if fl.cap / fl.omega > allow * (1 + 1e-12):
-        fl = replace(fl, cap=allow * fl.omega)
+        fl = replace(fl, cap=allow * fl.omega, code_cap=fl.cap)
         text += (f"; capped at first yield, M <= Fy S / {sf:g} (the job's safety factor on "
                  "the yield strength in bending)")
     return replace(fl, cap_text=text) if text != fl.cap_text else fl
@@ -1215,6 +1217,11 @@ def segment_strength(fl, l1: float, cb: float, free: bool, why: str) -> tuple[fl
     return fl.cap, fl.cap_text
 
 
+def l1_of(st, a: float, b: float) -> float:
+    """The Cb = 1 lateral-torsional buckling strength of the unbraced length a..b."""
+    return next((l1 for x, y, _f, l1, _w in st.ltb_segments if x == a and y == b), math.inf)
+
+
 def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Check:
     """The bending check of one solved load state (the first of `checks_for`), alone: for
     callers that read only it (the allowable moment, one length's check)."""
@@ -1243,6 +1250,10 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
         # carried is scaled to the cap's Omega so every consumer gets Mnmb / 1.65)
         mn, omega = mn / fl.ltb[1][-1], OMEGA_ADM
     bend_params = {"Mn": mn, "Omega": omega, "Cb": cb, **fl.ltb_params(lb)}
+    if fl.code_cap is not None and mn >= fl.cap * (1 - 1e-12):
+        # the first-yield cap sets it: Mn is the code's own figure, and the cap beside it
+        bend_params["Mn"] = min(fl.code_cap, cb * l1_of(st, a, b))
+        bend_params["M_yield_cap"] = fl.cap / fl.omega
     pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     seg_words = "" if len(st.ltb_segments) == 1 else \
         f"; unbraced length {pos(a)} to {pos(b)} governs"
