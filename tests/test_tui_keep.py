@@ -1874,3 +1874,21 @@ async def test_a_new_loads_position_echo_stays_metric_while_its_value_is_missing
         words = str(at.query_one(".field-msg").render())
         assert at.input.value.endswith(" m") and words.startswith("= ")
         assert words.endswith(" m") and "ft" not in words, words
+
+
+@sync
+async def test_ctrl_z_in_a_field_puts_back_the_text_a_key_replaced(tmp_path):
+    # a Tab selects a field's whole text and the next key replaces it: ctrl+z puts it back
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        before = s.doc.get("title")
+        f = await focused(pilot, app, "job", "title")
+        await burst(pilot, "2")
+        assert s.doc.get("title") == "2" and f.input.value == "2"
+        await burst(pilot, CTRL_Z)
+        assert f.input.value == before and s.doc.get("title") == before
+        # nothing more to put back in the field: ctrl+z goes on to removed rows, as before
+        await burst(pilot, CTRL_Z)
+        assert f.input.value == before

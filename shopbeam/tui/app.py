@@ -1160,8 +1160,13 @@ class JobScreen(Screen):
         return note
 
     def action_undo_remove(self) -> None:
-        """ctrl+z: the last support or load removed comes back at its place (again: the one
-        before it)."""
+        """ctrl+z: in a field whose text was changed since the focus came there, that text
+        comes back (a key typed after a Tab replaces the whole text); otherwise the last
+        support or load removed comes back at its place (again: the one before it)."""
+        focused = self.focused
+        if isinstance(focused, FieldInput) and focused.undo_typing():
+            self.notify(f"{focused.parent.label}: put back as it was", timeout=4)
+            return
         self.flush_typing()
         kept = {t: self._kept_rows(t) for t in ("supports", "loads")}
         back = self.session.undo_remove()

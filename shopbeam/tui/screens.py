@@ -27,13 +27,16 @@ KEYS = [
         ("F1", "these keys"),
         ("F2 to F12", "views in the order of the bar: F2 job, F3 span, F4 loads, F5 section, "
                       "F6 material, F7 criteria, F8 results, F9 plots, F10 calc sheet, "
-                      "F11 rating, F12 sizing (alt+digit works too)"),
+                      "F11 rating, F12 sizing (alt+digit works too, except alt+3 and "
+                      "alt+6 in the title, notes, tags and labels, which type the £ and § "
+                      "of a UK keyboard there)"),
         ("ctrl+s", "save (a bundled preset is saved as your own copy; says where)"),
         ("ctrl+d", "save as: this job, or in the library the picked job, under a new name"),
         ("ctrl+o", "library: open a job"),
         ("ctrl+n", "new job (asks first when there are unsaved changes)"),
         ("ctrl+t / ctrl+x", "supports and loads views: add one / remove the picked one"),
-        ("ctrl+z", "put back the supports and loads removed, last first (at their places)"),
+        ("ctrl+z", "in a field: put back its text as it was when you came to it; "
+                   "elsewhere: put back the supports and loads removed, last first"),
         ("ctrl+l", "after a length change: move the supports and loads with it (asks how; "
                    "until then they stay where typed)"),
         ("ctrl+r / ctrl+p", "calc sheet and rating views: write it to a file / print it"),

@@ -208,10 +208,22 @@ class FieldInput(KeepFocusOnStaleHide, Input):
     # the whole class line) and would select again the text typed since the focus came
     select_all = True
 
+    at_focus = None  # the text when the focus came: what ctrl+z puts back (`undo_typing`)
+
+    def undo_typing(self) -> bool:
+        """ctrl+z in a field: its text as it was when the focus came (a Tab selects the
+        whole text, and a key typed next replaces it all). False where nothing changed."""
+        if self.at_focus is None or self.value == self.at_focus:
+            return False
+        self.value = self.at_focus
+        self.cursor_position = len(self.value)
+        return True
+
     def focus_arrived(self) -> None:
         """The focus came here (called by the screen as it moves, not when the queued Focus
         event arrives): select the text now, so the next key of a fast burst replaces it
         exactly as it would if typed slowly."""
+        self.at_focus = self.value
         if self.select_all:
             self.selection = Selection(0, len(self.value))
             self._early_selects += 1
@@ -221,6 +233,7 @@ class FieldInput(KeepFocusOnStaleHide, Input):
         if self._early_selects > 0:  # selected already; keys may have been typed since
             self._early_selects -= 1
             return
+        self.at_focus = self.value
         if self.select_all and not event.from_app_focus:  # a click, or focus set in code
             self.selection = Selection(0, len(self.value))
 
