@@ -1892,3 +1892,23 @@ async def test_ctrl_z_in_a_field_puts_back_the_text_a_key_replaced(tmp_path):
         # nothing more to put back in the field: ctrl+z goes on to removed rows, as before
         await burst(pilot, CTRL_Z)
         assert f.input.value == before
+
+
+@sync
+async def test_the_marked_label_follows_the_field_with_the_focus(tmp_path):
+    # the reversed label marks where typing goes; the first field's stayed marked while Tab
+    # moved the typing on to the next fields
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await burst(pilot, "1")
+        view = app.job_screen.query_one("#job")
+        for _ in range(3):
+            await burst(pilot, TAB)
+            where = app.job_screen.focused
+            marked = [f for f in view.query(Field)
+                      if "reverse" in str(f.query_one(".field-label").styles.text_style)]
+            owner = [f for f in marked if where in f.query("*")]
+            assert len(marked) <= 1 and (marked == owner)
+            if isinstance(where, FieldInput):
+                assert marked and marked[0].input is where

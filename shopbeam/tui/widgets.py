@@ -265,7 +265,7 @@ class Field(Horizontal):
     Field > Label.field-label { width: 14; height: 1; }
     Field > Input { width: 24; height: 1; }
     Field > Static.field-msg { width: 1fr; height: auto; padding: 0 0 0 1; }
-    Field:focus-within > Label.field-label { text-style: bold reverse; }
+    Field.-focused > Label.field-label { text-style: bold reverse; }
     Field.-wide > Input { width: 1fr; }
     Field.-wide > Static.field-msg { width: auto; max-width: 40; }
     """
@@ -291,7 +291,15 @@ class Field(Horizontal):
             self.field = field
 
     def on_descendant_blur(self, event) -> None:
+        # the label marks the field with the focus: by a class, which restyles the label at
+        # once (Textual did not restyle it when `:focus-within` of its parent changed, and
+        # the first field's label stayed marked while typing went into another)
+        self.set_class(self.screen.focused is not None
+                       and self in self.screen.focused.ancestors, "-focused")
         self.post_message(self.Left(self))
+
+    def on_descendant_focus(self, event) -> None:
+        self.set_class(True, "-focused")
 
     def __init__(self, label: str, key: str, *, placeholder: str = "", value: str = "",
                  suggester=None, id: str | None = None, classes: str | None = None) -> None:
