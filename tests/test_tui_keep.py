@@ -1912,3 +1912,27 @@ async def test_the_marked_label_follows_the_field_with_the_focus(tmp_path):
             assert len(marked) <= 1 and (marked == owner)
             if isinstance(where, FieldInput):
                 assert marked and marked[0].input is where
+
+
+@sync
+async def test_a_job_read_as_lifting_by_its_words_keeps_the_lifting_caution_through_an_edit(
+        tmp_path):
+    # not tagged lifting, read as one by its load's label: while a field does not read (the
+    # job with it), the stronger caution stays on screen
+    path = tmp_path / "hoist.toml"
+    path.write_text('schema = 1\ntitle = "Beam over bay B"\n[beam]\nlength = "12 ft"\n'
+                    'section = "W8x18"\nmaterial = "A992"\n[[supports]]\nat = "0 ft"\n'
+                    'type = "pin"\n[[supports]]\nat = "12 ft"\ntype = "roller"\n[[loads]]\n'
+                    'type = "point"\nat = "6 ft"\nvalue = "-1000 lbf"\nlabel = "hoist pt B"\n',
+                    encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        from shopbeam.tui.widgets import Banner
+        banner = app.job_screen.query_one(Banner)
+        assert banner.has_class("-lifting")
+        await burst(pilot, "3")
+        await at_end_of(pilot, app, "loads", "load.value")
+        await burst(pilot, "x")
+        assert app.job_screen.session.evaluation.job is None
+        assert banner.has_class("-lifting")

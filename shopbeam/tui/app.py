@@ -177,7 +177,12 @@ class JobScreen(Screen):
         if not isinstance(tags, list) and not isinstance(tags, tuple):
             tags = []
         prof = s.doc.get("criteria.lifting")
-        lifting = ev.job.caution_lifting if ev.job is not None else isinstance(prof, str) and bool(prof)
+        if ev.job is not None:
+            lifting = self._was_lifting = ev.job.caution_lifting
+        else:  # while the job does not read (a field being typed), the last word stands: a
+            # job read as lifting by its words keeps the stronger caution through an edit
+            lifting = isinstance(prof, str) and bool(prof) or getattr(self, "_was_lifting",
+                                                                        False)
         self.query_one(Banner).show(tags, lifting)
         title = s.doc.get("title") or "(no title)"
         flags = []
