@@ -461,10 +461,10 @@ class SpanView(RowsView):
                      classes="view-title")
         yield Field("Length", "beam.length", placeholder="e.g. 12 ft or 10' 6\"")
         yield Choice("Self-weight", ["included", "left out"], key="beam.self_weight")
-        yield Field("Members", "beam.members", placeholder="1 (identical members sharing)")
+        yield Field("Members", "beam.members", placeholder="1 (members sharing)")
         yield Choice("Braced", ["at supports", "all along"], key="beam.braced")
         yield Field("Braces at", "beam.braces", placeholder="e.g. 4 ft, 8 ft")
-        yield Field("Bearing", "beam.bearing", placeholder="e.g. 4 in (all supports)")
+        yield Field("Bearing", "beam.bearing", placeholder="e.g. 4 in, all seats")
         yield Static("Supports (ctrl+t add, ctrl+x remove, up/down pick):",
                      classes="sub-title")
         yield RowList(id="support-list", classes="rows")
@@ -490,11 +490,11 @@ class SpanView(RowsView):
     # the form's examples in the job's units (a US example typed on a metric job is held as
     # a length in the other system)
     EXAMPLES = {"us": {"beam.length": "e.g. 12 ft or 10' 6\"", "beam.braces": "e.g. 4 ft, 8 ft",
-                       "beam.bearing": "e.g. 4 in (all supports)", "support.at": "e.g. 0 ft",
+                       "beam.bearing": "e.g. 4 in, all seats", "support.at": "e.g. 0 ft",
                        "support.stiffness": "e.g. 2000 lbf/in",
                        "support.bearing": "e.g. 4 in (this one)"},
                 "si": {"beam.length": "e.g. 3.6 m or 3600 mm", "beam.braces": "e.g. 1.2 m, 2.4 m",
-                       "beam.bearing": "e.g. 100 mm (all supports)", "support.at": "e.g. 0 m",
+                       "beam.bearing": "e.g. 100 mm, all seats", "support.at": "e.g. 0 m",
                        "support.stiffness": "e.g. 350 kN/m",
                        "support.bearing": "e.g. 100 mm (this one)"}}
 
@@ -814,7 +814,7 @@ class SectionView(View):
         yield Choice("Give it by", self.MODES, key="section.mode")
         with Vertical(id="sec-catalog"):
             yield Field("Designation", "section.designation",
-                        placeholder="type: W8x18, HSS4x4x1/4, L3x3x1/4")
+                        placeholder="e.g. W8x18, HSS4x4x1/4")
             yield Static("", id="sec-matches-note", markup=False)
             yield OptionList(id="sec-matches")
         with Vertical(id="sec-dims"):
