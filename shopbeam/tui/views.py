@@ -1190,8 +1190,10 @@ def basis_words(ev) -> str:
                 f"(wood has no first-yield basis; its safety is in the reference values).{how}")
     return (f"Bending by {BASIS_WORDS.get(basis, basis)}, and never more than first yield "
             f"over the factor above: M <= Fy S / {sf:g}, a stress of {fy} at the extreme "
-            f"fibre. The code's own factor divides its nominal strength (e.g. Fy Zx / 1.67 "
-            f"for a compact steel section), whichever is lower.{how}")
+            f"fibre. The code's own factor divides its nominal strength (e.g. Fy Zx / "
+            f"{max(1.67, sf):g} for a compact steel section"
+            + (f": a factor over 1.67 takes Omega_b's place" if sf > 1.67 else "")
+            + f"), whichever is lower.{how}")
 
 
 # ---------------------------------------------------------------------- results
