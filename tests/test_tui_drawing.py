@@ -81,7 +81,10 @@ def test_a_key_to_write_is_named_as_the_control_that_writes_it():
     msg = next(str(w) for w in job.warnings if "pushes UP" in str(w))
     said = in_words(msg)
     assert "remove uplift = true" in msg and "remove uplift = true" not in said
-    assert "set Uplift to no" in said
+    assert "set Uplift to no" in said and "(uplift = true)" not in said
+    said = in_words('this reads like a lifting device (hoist) but is not tagged lifting. '
+                    'Add tags = ["lifting"] if it carries a hoist')
+    assert "Tags (1 Job)" in said and "tags = [" not in said
 
 
 def test_row_keys_read_as_the_lists_number_them():

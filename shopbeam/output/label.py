@@ -300,8 +300,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         notes.append("Patterned loads are rated on any or all of their spans; other loads as "
                      "placed in the job, and other placements are not rated.")
     elif hoist_x is not None:
-        notes.append("Rated with the hoist anywhere along the member (up to the place given "
-                     "out on a boom); other loads as placed in the job.")
+        notes.append("Rated with the hoist anywhere along the member (on a boom, anywhere "
+                     "from the mast out to the place given); other loads as placed in the job.")
     elif job.moving:
         notes.append("Rated with the wheel set anywhere on its travel" + (
             " and either way round" if len(set(job.moving[0].live)) > 1 else "")
@@ -408,8 +408,8 @@ def _held_words(job) -> list[str]:
         # lifting.FATIGUE: not checked, and no bar to the rating only while the lifts are few
         out.append("RATED ONLY WHILE the member sees fewer than 20,000 lifts in its life (no "
                    "fatigue check is needed below that, AISC 360-16 Appendix 3.1, from "
-                   "memory); past that, a production hoist within a few years, have its "
-                   "fatigue checked for its duty.")
+                   "memory). A hoist in production use passes that within a few years: have "
+                   "its fatigue checked for its duty.")
     tol = 1e-6 * job.length
     # a hoist given as a point load is rated travelling (capacity.travelling): its travel
     # and the flange ends it can reach are stated as a wheel set's are

@@ -50,6 +50,9 @@ _UI_WAYS = (
     ("Write it positive with uplift = true", "Type its Value positive and set Uplift to yes"),
     ("an uplift is written positive with uplift = true",
      "an uplift is typed positive, with Uplift yes"),
+    ("pushes UP (uplift = true)", "pushes UP (Uplift yes)"),
+    ('Add tags = ["lifting"]', 'Add lifting to the Tags (1 Job)'),
+    ('Add tags = ["rack"]', 'Add rack to the Tags (1 Job)'),
 )
 
 
