@@ -790,8 +790,8 @@ def top_flange_check(job: Job, ss, g, travel_words: str = "", st=None) -> Check:
                  f"against {f(now, 'moment')} with the loads at the shear centre"
                  + (travel_words if rolled else ""),
                  at, detail="the loads bear on the top flange of the unbraced cantilever, "
-                 "which destabilises it; " + tip_brace_words(job) + " or hang a point load below the flange (flange = "
-                 "\"bottom\") to rate it on the bending check",
+                 "which destabilises it; " + tip_brace_words(job) + " or hang a point load "
+                 "below the flange (flange = \"bottom\") to rate it on the bending check",
                  clause=f"{rule}; effective length for top-flange loading",
                  source=f"{src}; SSRC Guide / BS 5950-1 Table 14 (from memory)",
                  params={"k_eff": kl, "Mn_omega": top, "Mn_omega_shear_centre": now})

@@ -1134,9 +1134,9 @@ def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
     it, Fy S / safety_factor, besides the code's own limit states (AISC 360-16 chapter F, ADM
     2015 chapter F: Mn / Omega_b, which for a compact, braced section credits the plastic
     moment Fy Z, up to 1.2 Fy S for a tube and 1.5 Fy S for a bar). A factor larger than
-    the code's Omega_b (and than 1.67) is also taken on every bending limit state (lateral-torsional and
-    local buckling), so the margin asked for holds whichever comes first. A basis that
-    already checks a stress (first yield, wood) is left as it is."""
+    the code's Omega_b (and than 1.67) is also taken on every bending limit state
+    (lateral-torsional and local buckling), so the margin asked for holds whichever comes
+    first. A basis that already checks a stress (first yield, wood) is left as it is."""
     if fl.stress_s is not None or not getattr(mat, "fy", None) or not sf or sf <= 0 \
             or fl.special:  # tees and angles: open_shapes caps each axis's own strength
         return fl
@@ -1217,11 +1217,6 @@ def segment_strength(fl, l1: float, cb: float, free: bool, why: str) -> tuple[fl
     return fl.cap, fl.cap_text
 
 
-def l1_of(st, a: float, b: float) -> float:
-    """The Cb = 1 lateral-torsional buckling strength of the unbraced length a..b."""
-    return next((l1 for x, y, _f, l1, _w in st.ltb_segments if x == a and y == b), math.inf)
-
-
 def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Check:
     """The bending check of one solved load state (the first of `checks_for`), alone: for
     callers that read only it (the allowable moment, one length's check)."""
@@ -1241,8 +1236,8 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
         allow = mn / fl.omega
         r = mmax / allow if allow > 0 else math.inf
         if worst is None or r > worst[0]:
-            worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb, mn)
-    r, mmax, allow, at, text, (a, b), cb, mn = worst
+            worst = (r, mmax, allow, ex.abs_max_at, text, (a, b), cb, mn, l1)
+    r, mmax, allow, at, text, (a, b), cb, mn, l1 = worst
     lb = 0.0 if brace_points(job)[0] else b - a
     omega = fl.omega
     if fl.ltb is not None and fl.ltb[0] == "ADM" and mn < fl.cap:
@@ -1252,7 +1247,7 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
     bend_params = {"Mn": mn, "Omega": omega, "Cb": cb, **fl.ltb_params(lb)}
     if fl.code_cap is not None and mn >= fl.cap * (1 - 1e-12):
         # the first-yield cap sets it: Mn is the code's own figure, and the cap beside it
-        bend_params["Mn"] = min(fl.code_cap, cb * l1_of(st, a, b))
+        bend_params["Mn"] = min(fl.code_cap, cb * l1)
         bend_params["M_yield_cap"] = fl.cap / fl.omega
     pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     seg_words = "" if len(st.ltb_segments) == 1 else \

@@ -874,7 +874,7 @@ def _read_criteria(r: _Reader, crit, lifting: bool, material) -> Criteria:
     basis = r.choice(crit, "basis", "criteria.basis", Basis, Basis.AUTO)
     unused = ""
     if "safety_factor" in crit and sf != 1.67:
-        unused = _unused_safety_factor(r, sf, material, basis)
+        unused = _safety_factor_words(r, sf, material, basis)
     if "safety_factor" in crit and 1 <= sf < MIN_POSTED_FACTOR and (
             basis == Basis.FIRST_YIELD or getattr(material, "kind", "custom") == "custom"):
         unused = (f"safety_factor = {sf:g} leaves {'no' if sf == 1 else 'too little'} margin "
@@ -2986,9 +2986,10 @@ def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str)
             what = "length" if abs(meant - length) <= 1e-6 * length else "support place"
             key = f"loads[{i}].{k}"
             read = units.parse(raw[k], "length")
+            verb = {"at": "sits", "start": "starts", "end": "ends"}[k]
             r.hold(f"{key} = {raw[k]!r}: {m.group(1)} is the member's {what} in "
                    f"{words[big]} ({m.group(1)} {big}), typed with {m.group(2)}. Read as "
-                   f"written, the load {'sits' if k == 'at' else 'starts' if k == 'start' else 'ends'} "
+                   f"written, the load {verb} "
                    f"{units.fmt(read, 'length', system)} from the left end and the member is "
                    f"rated as if it did, so no rating is posted. If {m.group(1)} {big} is "
                    "meant, write it so; if the position is right, write it in the length's "
@@ -4557,7 +4558,7 @@ def _repetitive(r: _Reader, raw_loads, service, material, section, members, titl
 MIN_POSTED_FACTOR = 1.5
 
 
-def _unused_safety_factor(r: _Reader, sf: float, material, basis) -> str:
+def _safety_factor_words(r: _Reader, sf: float, material, basis) -> str:
     """What a safety factor other than 1.67 does on the member's basis, said in a warning.
     On steel, stainless and aluminium by their codes it is the factor on yield in bending
     (`checks.on_yield`: first yield capped at Fy S / safety_factor, and a larger factor taken
