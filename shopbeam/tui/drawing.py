@@ -361,7 +361,7 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
         # a rack with no impact...: named in full in the Rating view)
         names = "; ".join(x for x in (
             f"not checked: {'; '.join(result.blocking)}" if result.blocking else "",
-            (f"{len(other)} other reason{'s' if len(other) > 1 else ''} (F11 Rating names "
+            (f"{len(other)} other reason{'s' if len(other) > 1 else ''} (0 Rating names "
              f"{'them' if len(other) > 1 else 'it'})") if other else "") if x)
         gaps = gaps + list(other)
         no = (" - NOT RATED" if gaps else "")
@@ -373,7 +373,7 @@ def summary_line(result, width: int = 0, tail: str = "") -> str:
                   f"{names}",
                   f"PASS {g.name} {g.ratio:.2f} - NOT RATED, {names}",
                   f"PASS {g.ratio:.2f} - NOT RATED, {names}",
-                  f"PASS {g.ratio:.2f} - NOT RATED: {len(gaps)} reason(s), see Results",
+                  f"PASS {g.ratio:.2f} - NOT RATED: {len(gaps)} reason(s), see 0 Rating",
                   "PASS - NOT RATED"]
                  if gaps else
                  [f"ALL CHECKS PASS - governing: {g.name}, ratio {g.ratio:.2f}"])
