@@ -523,3 +523,20 @@ def test_a_top_loaded_arm_is_sized_on_the_strength_its_top_flange_loads_leave_it
     assert w8.factor < 1 and w8.governing.name == "bending, top-flange loads"
     assert light.designation != "W8X15" and light.weight <= catalog.lookup(
         "W8X15").weight_per_length(job.material.density) * 1.5
+
+
+def test_a_section_of_the_same_weight_as_the_lightest_that_passes_is_listed_beside_it():
+    # HSS4x3x1/8 and HSS5x2x1/8 both weigh 5.61 lb/ft (AISC Shapes Database v15.0): where
+    # the first passes, the second is checked in full too and listed, not left out as heavier
+    from pathlib import Path
+
+    text = (Path(__file__).resolve().parents[1] / "presets" / "bar-stock-rack-arm.toml"
+            ).read_text()
+    job = parse_job_text(text.replace("safety_factor = 1.67", "safety_factor = 2.0"))
+    res = size(job, "HSS-rect")
+    best = res.lightest
+    ties = [r for r in res.rows if r.ok and r.checked == "full"
+            and abs(r.weight - best.weight) <= 1e-9 * best.weight]
+    assert len(ties) >= 2, [r.designation for r in ties]
+    for r in ties:  # each passes its own full check
+        assert max(c.ratio for c in evaluate(replace(job, section=r.section), 1.0).checks) <= 1

@@ -1253,8 +1253,11 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
     n = 0
     for order in orders:
         found = unrated = 0
+        tie = None  # the weight of the last section wanted: its equals are checked too
         for i in order:
             r = rows[i]
+            if tie is not None and (order is not orders[0] or r.weight > tie * (1 + 1e-9)):
+                break
             if r.checked == "screen" and r.ratio > 1 + SCREEN_TOL:
                 continue
             if r.checked == "batched" and not r.ok:
@@ -1272,8 +1275,12 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                     unrated += 1
                     continue
                 found += 1
-                if found >= want:
-                    break
+                if found >= want and tie is None:
+                    if want > 1:
+                        break  # --confirm N: that many, as asked
+                    # the lightest: a section of the same weight may pass as well
+                    # (HSS4x3x1/8 and HSS5x2x1/8), shown beside it, not left out as heavier
+                    tie = r.weight
     return n
 
 
