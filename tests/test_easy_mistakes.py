@@ -1869,3 +1869,14 @@ def test_the_json_keeps_the_codes_nominal_strength_beside_the_first_yield_cap():
     assert bend.params["M_yield_cap"] / kip_in == pytest.approx(50 * 15.2 / 3, rel=3e-3)
     assert bend.params["Mn"] / kip_in > 50 * 15.2  # past first yield: the code's own figure
     assert bend.limit == pytest.approx(bend.params["M_yield_cap"], rel=1e-12)
+
+
+def test_a_point_load_in_inches_whose_twin_would_sit_on_a_support_is_not_held():
+    # a vise 6 in from the end of a 6 ft rail held at both ends: read as "6 ft" it would go
+    # straight into the support, so "6 in" is what is meant
+    job = parse_job_text(_uniform("", supports_at=("0 ft", "6 ft")) + (
+        '[[loads]]\ntype = "point"\nat = "6 in"\nvalue = "-300 lbf"\nlabel = "vise"\n'))
+    assert not any("member's length" in p.message for p in warnings(job))
+    # on an arm (a free end at 36 in) the tip is the twin: held, as before
+    slip = parse_job_text(ARM.format(length="36 in", at="3 in"))
+    assert any("member's length" in p.message for p in warnings(slip))

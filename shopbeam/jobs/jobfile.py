@@ -2967,9 +2967,11 @@ def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str)
     if length is None or not isinstance(raw_loads, list):
         return False
     marks = [length] + [sp.at for sp in supports if sp.at > 0]
+    held = [sp.at for sp in supports if sp.takes_force]
+    free_end = not any(abs(x - length) <= 1e-6 * length for x in held)
     words = {"ft": "feet", "m": "metres"}
     found = False
-    for i, (raw, ld) in enumerate(zip(raw_loads, loads)):
+    for i, raw in enumerate(raw_loads):
         if not _is_table(raw):
             continue
         for k in ("at", "start", "end"):
@@ -2978,9 +2980,13 @@ def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str)
                 continue
             big, size = _UNIT_TWINS[m.group(2).lower()]
             meant = float(m.group(1)) * size
-            # (a spread load cannot start at the member's far end: "4 in" for the start of a
-            # load on a 4 ft arm is a place by the root, meant)
-            near = marks[1:] if k == "start" else marks
+            # the slip's reading must be a place the load could be meant at: a spread load
+            # does not start at the member's far end ("4 in" as the start of a load on a 4 ft
+            # arm is a place by the root, meant), and a point load typed for a support's place
+            # or a held end would go straight into it ("6 in" for a vise on a 6 ft rail held
+            # at both ends is meant): only a free end, a cantilever's tip, is its twin
+            near = (marks[1:] if k == "start" else
+                    ([length] if free_end else []) if k == "at" else marks)
             if meant <= 0 or not any(abs(meant - x) <= 1e-6 * length for x in near):
                 continue
             what = "length" if abs(meant - length) <= 1e-6 * length else "support place"
