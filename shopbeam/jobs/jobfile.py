@@ -2202,8 +2202,7 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                            "point, or with fewer than three decimals, as meant")
         if got is not None and got.kind != "moment" and ld.get("uplift") is not True \
                 and isinstance(got.label, str) and _UPLIFT_WORDS.search(got.label) \
-                and ((got.value < 0) if got.kind == "point" else
-                     max(got.w1, got.w2) <= 0 < abs(min(got.w1, got.w2))):
+                and _pushes_down(got):
             # a wind uplift typed with the gravity loads' minus sign: checked pushing down,
             # and the member's buckling under the uplift (the bottom flange) is never seen
             r.hold(f"this load is labelled {got.label!r}, but its value pushes DOWN "
@@ -2216,9 +2215,7 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                    f"the load labelled {got.label!r} pushes down: an uplift is written "
                    "positive with uplift = true")
         if ld.get("uplift") is True and got is not None and got.kind != "moment":
-            down = (got.value < 0) if got.kind == "point" else max(got.w1, got.w2) <= 0 < abs(
-                min(got.w1, got.w2))
-            if down:
+            if _pushes_down(got):
                 r.warn("uplift = true says this load pushes up, but its value pushes down "
                        "(negative): it changes nothing; remove it, or check the sign",
                        f"{key}.uplift")
@@ -2279,6 +2276,13 @@ _LIFTING_STEMS = re.compile(
     r"^(?:hoist|lift|lifting|jib|crane|monorail|monorial|trolley|chain|spreader|sling|pick)"
     r"(?:ing)?(?:beams?|arms?|booms?|rails?|cranes?|bars?|frames?|devices?|runways?|hooks?|"
     r"hoists?|blocks?|falls?|trolleys?)$|^underhung$", re.IGNORECASE)
+def _pushes_down(ld) -> bool:
+    """A force load whose value pushes down (negative) all along, not zero."""
+    if ld.kind == "point":
+        return ld.value < 0
+    return max(ld.w1, ld.w2) <= 0 < abs(min(ld.w1, ld.w2))
+
+
 # a load's label that says it pushes up (wind uplift, suction, lift-off), not a negation
 _UPLIFT_WORDS = re.compile(r"(?<!\bno )(?<!\bnot )(?<!\banti-)(?<!\banti )"
                            r"\b(?:uplift|up-lift|wind suction|lift[- ]?off|blow[- ]?off|"
@@ -2929,6 +2933,17 @@ def _root_at_the_right(r: _Reader, supports, loads, length, system: str) -> None
 _UNIT_TWINS = {"in": ("ft", 0.3048), "inch": ("ft", 0.3048), "inches": ("ft", 0.3048),
                "mm": ("m", 1.0), "cm": ("m", 1.0)}
 _PLAIN_POSITION = re.compile(r"\s*([0-9]*\.?[0-9]+)\s*([A-Za-z]+)\s*")
+_BIG_WORDS = {"ft": "feet", "m": "metres"}
+
+
+def _unit_twin(text):
+    """(number as typed, small unit as typed, large unit, the number read in the large unit,
+    m) of a place typed plainly in a small unit ("3 in"), else None."""
+    m = _PLAIN_POSITION.fullmatch(text) if isinstance(text, str) else None
+    if not m or m.group(2).lower() not in _UNIT_TWINS:
+        return None
+    big, size = _UNIT_TWINS[m.group(2).lower()]
+    return m.group(1), m.group(2), big, float(m.group(1)) * size
 
 
 def _unit_twin_support(r: _Reader, raw_supports, length, system: str) -> None:
@@ -2937,27 +2952,23 @@ def _unit_twin_support(r: _Reader, raw_supports, length, system: str) -> None:
     with a long overhang. NOT RATED until written so that it cannot be that slip."""
     if length is None or not isinstance(raw_supports, list):
         return
-    words = {"ft": "feet", "m": "metres"}
     for i, raw in enumerate(raw_supports):
-        m = _PLAIN_POSITION.fullmatch(raw.get("at")) if _is_table(raw) and isinstance(
-            raw.get("at"), str) else None
-        if not m or m.group(2).lower() not in _UNIT_TWINS:
+        twin = _unit_twin(raw.get("at")) if _is_table(raw) else None
+        if twin is None or abs(twin[3] - length) > 1e-6 * length:
             continue
-        big, size = _UNIT_TWINS[m.group(2).lower()]
-        if abs(float(m.group(1)) * size - length) > 1e-6 * length:
-            continue
+        num, small, big, _meant = twin
         key = f"supports[{i}].at"
-        r.hold(f"{key} = {raw['at']!r}: {m.group(1)} is the member's length in {words[big]} "
-               f"({m.group(1)} {big}), typed with {m.group(2)}. Read as written, the support "
+        r.hold(f"{key} = {raw['at']!r}: {num} is the member's length in {_BIG_WORDS[big]} "
+               f"({num} {big}), typed with {small}. Read as written, the support "
                f"sits {units.fmt(units.parse(raw['at'], 'length'), 'length', system)} from "
                "the left end and the rest of the member is an overhang, so no rating is "
-               f"posted. If {m.group(1)} {big} is meant, write it so; if the place is right, "
+               f"posted. If {num} {big} is meant, write it so; if the place is right, "
                "write it in the length's unit", key,
-               f"{key} = {raw['at']!r} is the member's length in {words[big]} typed with "
-               f"{m.group(2)}: write the place meant")
+               f"{key} = {raw['at']!r} is the member's length in {_BIG_WORDS[big]} typed with "
+               f"{small}: write the place meant")
 
 
-def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str) -> bool:
+def _unit_twin_slip(r: _Reader, raw_loads, supports, length, system: str) -> bool:
     """A load position or end typed in the small unit whose number is the member's length,
     or a support's place, in the large one: "3 in" on a 3 ft (36 in) arm, end = "14 in" on
     a 14 ft platform beam. Read as written, the load sits next to the root or over a sliver
@@ -2969,17 +2980,15 @@ def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str)
     marks = [length] + [sp.at for sp in supports if sp.at > 0]
     held = [sp.at for sp in supports if sp.takes_force]
     free_end = not any(abs(x - length) <= 1e-6 * length for x in held)
-    words = {"ft": "feet", "m": "metres"}
     found = False
     for i, raw in enumerate(raw_loads):
         if not _is_table(raw):
             continue
         for k in ("at", "start", "end"):
-            m = _PLAIN_POSITION.fullmatch(raw.get(k)) if isinstance(raw.get(k), str) else None
-            if not m or m.group(2).lower() not in _UNIT_TWINS:
+            twin = _unit_twin(raw.get(k))
+            if twin is None:
                 continue
-            big, size = _UNIT_TWINS[m.group(2).lower()]
-            meant = float(m.group(1)) * size
+            num, small, big, meant = twin
             # the slip's reading must be a place the load could be meant at: a spread load
             # does not start at the member's far end ("4 in" as the start of a load on a 4 ft
             # arm is a place by the root, meant), and a point load typed for a support's place
@@ -2993,15 +3002,15 @@ def _unit_twin_slip(r: _Reader, raw_loads, loads, supports, length, system: str)
             key = f"loads[{i}].{k}"
             read = units.parse(raw[k], "length")
             verb = {"at": "sits", "start": "starts", "end": "ends"}[k]
-            r.hold(f"{key} = {raw[k]!r}: {m.group(1)} is the member's {what} in "
-                   f"{words[big]} ({m.group(1)} {big}), typed with {m.group(2)}. Read as "
+            r.hold(f"{key} = {raw[k]!r}: {num} is the member's {what} in "
+                   f"{_BIG_WORDS[big]} ({num} {big}), typed with {small}. Read as "
                    f"written, the load {verb} "
                    f"{units.fmt(read, 'length', system)} from the left end and the member is "
-                   f"rated as if it did, so no rating is posted. If {m.group(1)} {big} is "
+                   f"rated as if it did, so no rating is posted. If {num} {big} is "
                    "meant, write it so; if the position is right, write it in the length's "
                    "unit, so that it cannot be read as that slip", key,
-                   f"{key} = {raw[k]!r} is the member's {what} in {words[big]} typed with "
-                   f"{m.group(2)}: write the position meant")
+                   f"{key} = {raw[k]!r} is the member's {what} in {_BIG_WORDS[big]} typed "
+                   f"with {small}: write the position meant")
             found = True
             break
     return found
@@ -4057,7 +4066,7 @@ _GRADE_BTR = re.compile(_GRADE_NO + r"\s*(?:&|and)\s*(?:btr|better)\b", re.IGNOR
 _GRADE_WORDS = re.compile(
     r"(?:\b\d+x\d+\s+|\b(?:DF|DF-L|Doug(?:las)? fir|SPF|HF|Hem[- ]?fir|SP|SYP|pine)\s+)"
     + _GRADE_NO
-    + r"|" + _GRADE_NO.replace("([123])", "([123])", 1).replace("(?:(?<", "(?:(?<", 1)
+    + r"|" + _GRADE_NO
     + r"(?:\s*(?:&|and)\s*(?:btr|better))?\s+(?:grade|DF|DF-L|Doug|SPF|HF|Hem|SP\b|SYP|"
     r"pine|fir|joists?|lumber|studs?|boards?|planks?|rafters?)"
     r"|\bgrade\s+(?:No\.?\s?|#)?([123])\b"
@@ -4067,7 +4076,8 @@ _GRADE_WORDS = re.compile(
 def _grade_words(r: _Reader, material, title, notes) -> None:
     """A sawn lumber grade named in the title or notes that is not the material's ("2x10
     No.2 joists" with material DF-L-SS): the checks take the key's grade, and Select
-    Structural's Fb is 1.7 times No.2's (NDS Supplement Table 4A, from memory). Warned."""
+    Structural's Fb is 1.7 times No.2's (NDS Supplement Table 4A, from memory). Warned, and
+    no rating is posted while they disagree."""
     key = getattr(material, "key", "") or ""
     if getattr(material, "kind", "") != "lumber" or key.startswith("LVL"):
         return
@@ -4093,9 +4103,6 @@ def _grade_words(r: _Reader, material, title, notes) -> None:
 
 ROUGH_SAWN = "rough-sawn"  # the tag that says a wood section's full sizes are its real ones
 _NOMINAL_THICK = (1, 2, 3, 4, 6, 8)
-# boards (1 in nominal) and the wide dimension sizes the catalog leaves out, inches dressed
-# dry (NDS Supplement Table 1A, from memory): 1 -> 3/4, 14 -> 13-1/4, 16 -> 15-1/4
-_MORE_DRESSED = {1: 0.75, 14: 13.25, 16: 15.25}
 _NOMINAL_WIDE = (2, 3, 4, 6, 8, 10, 12, 14, 16)
 
 
@@ -4116,9 +4123,7 @@ def _nominal_as_dressed(r: _Reader, section, material, tags, system: str) -> Non
             and round(wi) in _NOMINAL_WIDE):
         return
     name = f"{round(th)}x{round(wi)}"
-    size = {**catalog.DRESSED, **_MORE_DRESSED}
-    t, w = ((round(th) - 0.5, round(wi) - 0.5) if round(th) >= 5 else
-            (size[round(th)], size[round(wi)]))
+    t, w = catalog.dressed(round(th), round(wi))
     dress = {round(th): t, round(wi): w}  # b and h as typed (on edge or flat)
     ratio = b * h ** 2 / (dress[round(b)] * dress[round(h)] ** 2)
     write = (f"section = \"{name}\" (or the dressed sizes)"
@@ -4587,14 +4592,14 @@ def _safety_factor_words(r: _Reader, sf: float, material, basis) -> str:
                    f"{'1.67' if kind != 'aluminum' else '1.65'}) still apply to every bending "
                    "limit state and are not lowered by it", "criteria.safety_factor")
         return ""
-    uses = {"lumber": "the NDS allowable stresses (their safety is in the reference values)"}
+    uses = "the NDS allowable stresses (their safety is in the reference values)"  # wood
     todo = "remove safety_factor (wood has no first-yield basis)"
     more = sf > 1.67
     r.warn(f"safety_factor = {sf:g} is NOT used: this {kind} member is checked by "
-           f"{uses[kind]}; {todo}"
+           f"{uses}; {todo}"
            + ("; as it asks for more margin than the checks carry, no rating is posted"
               if more else ""), "criteria.safety_factor")
-    return (f"safety_factor = {sf:g} asks for more margin than {uses[kind]}, and it is not "
+    return (f"safety_factor = {sf:g} asks for more margin than {uses}, and it is not "
             f"used; {todo}") if more else ""
 
 
@@ -4957,7 +4962,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _rack_impact_slip(r, criteria, tags, loads)
     _root_at_the_right(r, supports, loads, length, system)
     _unit_twin_support(r, data.get("supports"), length, system)
-    if not _unit_twin_slip(r, raw_loads, loads, supports, length, system):
+    if not _unit_twin_slip(r, raw_loads, supports, length, system):
         _root_at_the_left_loads_by_it(r, supports, loads, length, system)
     _close_supports(r, supports, length, system)
     if length is not None and section is not None and isinstance(beam, dict) \

@@ -305,7 +305,10 @@ MECH_ROUND = {
 # dry dressed, from memory). Dimension lumber (2 to 4 in nominal thickness): 2 -> 1-1/2,
 # 3 -> 2-1/2, 4 -> 3-1/2, 6 -> 5-1/2, 8 -> 7-1/4, 10 -> 9-1/4, 12 -> 11-1/4. Timbers (5 in
 # nominal and thicker): 1/2 in less than nominal each way, so a 6x8 is 5-1/2 x 7-1/2.
-DRESSED = {2: 1.5, 3: 2.5, 4: 3.5, 6: 5.5, 8: 7.25, 10: 9.25, 12: 11.25}
+# Boards (1 in nominal) and the widest dimension sizes, 14 and 16 in, the same table: 1 ->
+# 3/4, 14 -> 13-1/4, 16 -> 15-1/4 (the catalog lists none of them; a size typed in is read).
+DRESSED = {1: 0.75, 2: 1.5, 3: 2.5, 4: 3.5, 6: 5.5, 8: 7.25, 10: 9.25, 12: 11.25, 14: 13.25,
+           16: 15.25}
 LUMBER_SIZES = ((2, 2), (2, 3), (2, 4), (2, 6), (2, 8), (2, 10), (2, 12), (4, 4), (4, 6),
                 (4, 8), (4, 10), (4, 12), (6, 6), (6, 8), (6, 10), (6, 12), (8, 8), (8, 10),
                 (8, 12))
