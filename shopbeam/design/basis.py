@@ -32,6 +32,20 @@ def basis_of(job) -> str:
     return "asd" if kind in ("steel", "stainless") else "first-yield"
 
 
+# the words `checks.on_yield` and the tee and angle rules (open_shapes) put in a bending
+# strength's text where the job's safety factor on yield caps it
+CAPPED_AT_YIELD = "capped at first yield"
+
+
+def yield_cap_provenance(text: str, clause: str, source: str) -> tuple[str, str]:
+    """A bending check's clause and source, naming the first-yield cap where its strength
+    `text` says the cap set it."""
+    if CAPPED_AT_YIELD not in text:
+        return clause, source
+    return (clause + "; first yield M <= Fy S / safety_factor",
+            source + "; the job's safety_factor on yield in bending")
+
+
 BASIS_WORDS = {
     "asd": "AISC 360-16 allowable strength design (ASD)",
     "first-yield": "first yield with a safety factor",

@@ -38,7 +38,7 @@ from shopbeam.design import aluminum, lifting, local, lumber, open_shapes
 from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noqa: F401 (re-exported)
                                    OMEGA_ADM, OMEGA_B, OMEGA_V, OMEGA_V_ROLLED_I, PSI_PA, basis_of,
                                    brace_points, cb_factor, nominal_moment, support_braces,
-                                   unbraced_segments)
+                                   unbraced_segments, CAPPED_AT_YIELD, yield_cap_provenance)
 from shopbeam.design.lifting import (flange_unchecked, lifting_notes, lifting_unchecked,
                                      profile_of)
 from shopbeam.design.results import Check, Unchecked
@@ -1004,9 +1004,8 @@ def strengths(job, sec=None, beam=None) -> Strengths:
         l1, why = fl.ltb1(0.0 if braced else bb - a, case, job.units)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
-    fl, sh = _design_factor(job, sec, fl, sh)
-    code = fl  # the code's own strength: whether buckling sets it is judged on it, not the cap
-    fl = on_yield(fl, sec, job.material, job.criteria.safety_factor, job.welded)
+    # (code: the code's own strength: whether buckling sets it is judged on it, not the cap)
+    fl, sh, code = job_factors(job, sec, fl, sh)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
     extra += _stainless_buckling(job, b, code, segs)
     extra += _wood_slenderness(job, fl, segs, braced)
@@ -1128,6 +1127,14 @@ def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
 DEFAULT_SF = 1.67
 
 
+def job_factors(job, sec, fl: Flexure, sh: "ShearStrength"):
+    """The job's own factors on the code's strengths, in their order: a below-the-hook
+    beam's design factor (`_design_factor`), then the safety factor on yield in bending
+    (`on_yield`). (flexure, shear, the flexure before that cap)."""
+    fl, sh = _design_factor(job, sec, fl, sh)
+    return on_yield(fl, sec, job.material, job.criteria.safety_factor, job.welded), sh, fl
+
+
 def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
     """The job's safety factor on the material's yield strength in bending (`[criteria]
     safety_factor`, default 1.67): the allowable moment is never more than first yield over
@@ -1150,7 +1157,7 @@ def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
     allow = fy * min(sec.sx_top, sec.sx_bot) / sf
     if fl.cap / fl.omega > allow * (1 + 1e-12):
         fl = replace(fl, cap=allow * fl.omega, code_cap=fl.cap)
-        text += (f"; capped at first yield, M <= Fy S / {sf:g} (the job's safety factor on "
+        text += (f"; {CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the job's safety factor on "
                  "the yield strength in bending)")
     return replace(fl, cap_text=text) if text != fl.cap_text else fl
 
@@ -1506,9 +1513,8 @@ def provenance(basis: str, text: str, what: str) -> dict:
     """clause and source of a strength check ("bending" or "shear") from its basis and the
     provision its text names."""
     out = _provenance_of(basis, text, what)
-    if what == "bending" and "capped at first yield" in text:
-        out["clause"] += "; first yield M <= Fy S / safety_factor"
-        out["source"] += "; the job's safety_factor on yield in bending"
+    if what == "bending":
+        out["clause"], out["source"] = yield_cap_provenance(text, out["clause"], out["source"])
     if what == "bending" and "raised to the job's safety factor" in text:
         out["clause"] += "; Omega_b = safety_factor"
     return out

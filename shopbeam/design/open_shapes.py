@@ -54,7 +54,8 @@ import math
 from dataclasses import dataclass
 
 from shopbeam import units
-from shopbeam.design.basis import BASIS_WORDS, OMEGA_B, basis_of, brace_points, cb_factor
+from shopbeam.design.basis import (BASIS_WORDS, CAPPED_AT_YIELD, OMEGA_B, basis_of,
+                                   brace_points, cb_factor, yield_cap_provenance)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.members.sections import principal_factors
 
@@ -366,9 +367,7 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
     else:
         clause, src = "AISC 360-16 F10", F10_SOURCE
         formula = f"{BASIS_WORDS[st.basis]}: {text}"
-    if "capped at first yield" in text:
-        clause += "; first yield M <= Fy S / safety_factor"
-        src += "; the job's safety_factor on yield in bending"
+    clause, src = yield_cap_provenance(text, clause, src)
     if braced:
         held = ("held against twist all along (beam.restrained): no LTB" if job.restrained
                 else "continuously braced (beam.braced): no LTB")
@@ -421,7 +420,7 @@ def _sf_cap(mn, why, my, omega, sf):
     """The job's safety factor on yield in bending (checks.on_yield): Mn / Omega_b no more
     than first yield over it, My / safety_factor."""
     if sf and sf > 0 and mn / omega > my / sf * (1 + 1e-12):
-        return my * omega / sf, why + (f" capped at first yield, M <= Fy S / {sf:g} (the "
+        return my * omega / sf, why + (f" {CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the "
                                        "job's safety factor on yield)")
     return mn, why
 

@@ -45,8 +45,7 @@ from shopbeam.design.analysis import loaded_on_top, top_flange_checks, top_load_
 from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.fatigue import given as fatigue_given
-from shopbeam.design.checks import _design_factor
-from shopbeam.design.checks import (on_yield, BASIS_WORDS, basis_of, brace_points, cb_factor,
+from shopbeam.design.checks import (job_factors, BASIS_WORDS, basis_of, brace_points, cb_factor,
                                     deflection_limit, deflection_rule, flexure, nominal_moment,
                                     shear_strength, strengths, unbraced_segments)
 from shopbeam.design.lifting import (DEFAULT_WHEEL_EDGE, OMEGA_WHEEL, flange_coefficients,
@@ -852,8 +851,8 @@ def _batched(job, base, parts, cands, with_capacity):
             _m, jm, b = got
             fl = flexure(sec, mat, b, job.criteria.safety_factor, job.welded)
             sh = shear_strength(sec, mat, b, job.criteria.safety_factor, job.welded)
-            fl, sh = _design_factor(jm, sec, fl, sh)  # a below-the-hook beam: BTH-1 Nd
-            fl = on_yield(fl, sec, mat, job.criteria.safety_factor, job.welded)
+            # a below-the-hook beam's BTH-1 Nd, the job's factor on yield in bending
+            fl, sh, _code = job_factors(jm, sec, fl, sh)
             wheel = None
             if ws is not None and sec.shape == "i-beam" and sec.axis == "strong":
                 tf, tapered = flange_tf_at_wheel(sec, a_w)
@@ -1256,7 +1255,7 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
         tie = None  # the weight of the last section wanted: its equals are checked too
         for i in order:
             r = rows[i]
-            if tie is not None and (order is not orders[0] or r.weight > tie * (1 + 1e-9)):
+            if tie is not None and r.weight > tie * (1 + 1e-9):
                 break
             if r.checked == "screen" and r.ratio > 1 + SCREEN_TOL:
                 continue
@@ -1276,8 +1275,8 @@ def _confirm(job, rows: list, confirm: int, with_capacity: bool, by_price: bool)
                     continue
                 found += 1
                 if found >= want and tie is None:
-                    if want > 1:
-                        break  # --confirm N: that many, as asked
+                    if want > 1 or order is not orders[0]:
+                        break  # --confirm N: that many, as asked; by price: the cheapest
                     # the lightest: a section of the same weight may pass as well
                     # (HSS4x3x1/8 and HSS5x2x1/8), shown beside it, not left out as heavier
                     tie = r.weight
