@@ -605,7 +605,7 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
         return ()
     dem, big = hogging_demands(job, st, ss, k, limits)
     big = max(big, 1e-300)
-    where = _travel_words(job, ss) if ss.parts.moving else ""
+    where = travel_words(job, ss) if ss.parts.moving else ""
     out = []
     for a, b, allow, least, at in dem:
         if -least > max(allow, 0.01 * big if allow <= 0 else 0.0):
@@ -741,9 +741,6 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     return tuple(out)
 
 
-_travel_words = travel_words  # (analysis.travel_words)
-
-
 def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where the rated load, bearing on an unbraced cantilever's top flange, would
     exceed the lower strength that loading leaves it (`limits`:
@@ -761,7 +758,7 @@ def _cantilever_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
             out.append(f"lateral-torsional buckling of the cantilever {f(a)} to {f(b)} with its "
                        f"loads on the top flange: {_at(k)} "
                        f"its moment {f(demand, 'moment')}"
-                       + (_travel_words(job, ss) if rolled else "")
+                       + (travel_words(job, ss) if rolled else "")
                        + f" exceeds the {f(top, 'moment')} that "
                        f"top-flange loading leaves it (effective length about {kl:g} x L, SSRC "
                        f"Guide, from memory; {f(now, 'moment')} with the loads at the shear "
@@ -795,7 +792,7 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
     g = worst(k)
     if g is None:
         return res
-    words = _travel_words(job, ss) if job.moving else ""
+    words = travel_words(job, ss) if job.moving else ""
 
     def listed(r: CapacityResult, gk) -> CapacityResult:
         """The check among the checks at the factor, as the report lists it."""

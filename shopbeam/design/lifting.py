@@ -71,6 +71,7 @@ class Profile:
     deflection: float
     words: str  # one line naming every value and its source
     guessed: bool = False  # picked from tags = ["lifting"], not named
+    category: str = ""  # ASME BTH-1 design category where Nd applies ("A" or "B")
 
 
 def _own_basis(job) -> str:
@@ -115,7 +116,7 @@ def _profile(name: str, guessed: bool, cat: str, cat_given: bool, own: str) -> P
                 if nd else f"the member's own safety factors ({own})")
              + f"; deflection {p['deflection_source']}")
     return Profile(name, p["impact"], p["lateral"], p["longitudinal"], nd, p["deflection"],
-                   words, guessed)
+                   words, guessed, cat)
 
 
 # ------------------------------------------------------------------ wheel loads on a flange

@@ -714,8 +714,7 @@ def _design_factor_words(job) -> str:
     prof = profile_of(job)
     if prof is None or not prof.nd:
         return ""
-    cat = getattr(job.criteria, "category", "") or "B"  # (lifting.profile_of's default)
-    return f" with ASME BTH-1 Design Category {cat}, Nd {prof.nd:g}"
+    return f" with ASME BTH-1 Design Category {prof.category}, Nd {prof.nd:g}"
 
 
 def _profile_name(job) -> str:

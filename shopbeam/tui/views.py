@@ -1195,7 +1195,7 @@ def basis_words(ev) -> str:
             f"over the factor above: M <= Fy S / {sf:g}, a stress of {fy} at the extreme "
             f"fibre. The code's own factor divides its nominal strength (e.g. Fy Zx / "
             f"{max(1.67, sf):g} for a compact steel section"
-            + (f": a factor over 1.67 takes Omega_b's place" if sf > 1.67 else "")
+            + (": a factor over 1.67 takes Omega_b's place" if sf > 1.67 else "")
             + f"), whichever is lower.{how}")
 
 
