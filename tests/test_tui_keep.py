@@ -1936,3 +1936,35 @@ async def test_a_job_read_as_lifting_by_its_words_keeps_the_lifting_caution_thro
         await burst(pilot, "x")
         assert app.job_screen.session.evaluation.job is None
         assert banner.has_class("-lifting")
+
+
+@sync
+@pytest.mark.parametrize("preset", ["demo", "jib-arm"])
+async def test_stacked_notices_never_cover_the_safety_caution(tmp_path, preset):
+    """Notices stack up from the foot of the screen; however many are shown at once at 80x24
+    (long ones wrap to several lines), the banner rows on top (the caution, the lifting
+    caution), the title bar and the view bar stay in sight: the rack of notices scrolls to
+    the newest instead of growing over them."""
+    from shopbeam.cautions import SHORT
+
+    path = tmp_path / f"{preset}.toml"
+    shutil.copy(PRESETS / f"{preset}.toml", path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE, notifications=True) as pilot:
+        await settle(pilot)
+        for i in range(5):
+            app.notify(f"notice {i}: " + "a long notice that wraps to several lines " * 3,
+                       timeout=30)
+        await settle(pilot)
+        await pilot.pause(0.1)
+        toasts = {str(w.render()).split(":")[0] for w in (
+            app.screen.get_widget_at(x, y)[0] for y in range(SIZE[1])
+            for x in range(0, SIZE[0], 2)) if type(w).__name__ == "Toast"}
+        assert "notice 4" in toasts, toasts  # the newest notice is in sight
+        banners = [app.screen.get_widget_at(2, y)[0] for y in range(2)]
+        assert any(SHORT in str(b.render()) for b in banners
+                   if type(b).__name__ == "Banner")
+        for y in range(4):
+            on_row = {type(app.screen.get_widget_at(x, y)[0]).__name__
+                      for x in range(SIZE[0])}
+            assert "Toast" not in on_row, (y, on_row)

@@ -1417,6 +1417,38 @@ class ShopbeamApp(App):
         if self.show_library:
             self.job_screen.action_library(highlight=self.first_session.path)
 
+    def _refresh_notifications(self) -> None:
+        """Textual's own, then `_fit_notices` once the notices are laid out."""
+        super()._refresh_notifications()
+        self.call_after_refresh(self._fit_notices)
+
+    def _fit_notices(self, tries: int = 8) -> None:
+        """Notices stack up from the foot of the screen. app.tcss caps the height of their
+        rack so that they never cover the banners (the safety caution, the lifting caution),
+        the title bar or the view bar; past the cap the rack would clip the newest notice,
+        so the oldest notice shown is taken away early until the newest fits. Textual
+        mounts a notice's toast a refresh or two after it is made: until every notice has
+        its toast laid out, this looks again after the next refresh (`tries` times)."""
+        from textual.widgets._toast import Toast, ToastRack  # Textual is pinned exactly
+
+        try:
+            rack = self.screen.get_child_by_type(ToastRack)
+        except Exception:  # noqa: BLE001 - no screen or no rack (notices off): nothing
+            return
+        toasts = list(rack.query(Toast))
+        due = sum(not n.has_expired for n in self._notifications)
+        if len(toasts) != due or any(not t.region or t._notification not in
+                                     self._notifications for t in toasts):
+            if tries > 0:
+                self.call_after_refresh(self._fit_notices, tries - 1)
+            return
+        size = self.screen.size
+        room = rack.styles.max_height.resolve(size, size) if rack.styles.max_height else \
+            size.height
+        if len(toasts) > 1 and sum(t.outer_size.height + t.styles.margin.top
+                                   for t in toasts) > room:
+            self._unnotify(toasts[0]._notification)
+
     recovered = None  # where the unsaved job was written when the app failed
 
     def _handle_exception(self, error: Exception) -> None:
