@@ -187,17 +187,35 @@ def test_welded_typed_in_aluminium_without_fy_welded_is_warned_and_not_rated():
 
 
 def test_welded_typed_in_aluminium_with_fy_welded_rates_on_the_weld_by_hand():
-    job = parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\nfy_welded = "15 ksi"\n',
+    # 6061-T6 welded: Ftyw 15 ksi, Ftuw 24 ksi (ADM 2015 Table A.3.3, from memory)
+    welded = 'fu = "38 ksi"\nfy_welded = "15 ksi"\nfu_welded = "24 ksi"\n'
+    job = parse_job_text(span("welded = true\n" + BAR + welded,
                               length=2, criteria='deflection = "L/100"\nsafety_factor = 1.0'))
     assert not warnings(job, "beam.welded")
     res = capacity(job)
     assert res.rated  # Ftyw 15 ksi: Z Ftyw / 1.65 = 1.125 x 15 / 1.65 kip-in
     assert res.factor * 1000 == pytest.approx(1.125 * 15e3 / 1.65 / 6, rel=1e-9)
     # at the default 1.67 on yield: the weld zone's first yield, S Ftyw / 1.67, governs
-    res = capacity(parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\n'
-                                       'fy_welded = "15 ksi"\n', length=2,
+    res = capacity(parse_job_text(span("welded = true\n" + BAR + welded, length=2,
                                        criteria='deflection = "L/100"')))
     assert res.factor * 1000 == pytest.approx(0.75 * 15e3 / 1.67 / 6, rel=1e-9)
+
+
+def test_welded_typed_in_aluminium_without_fu_welded_is_not_rated_and_says_so():
+    # the rupture near the weld needs the welded tensile strength; the unwelded fu is more
+    job = parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\nfy_welded = "15 ksi"\n',
+                              length=2, criteria='deflection = "L/100"'))
+    res = capacity(job)
+    assert not res.rated
+    assert any("fu_welded" in r for r in res.not_rated)
+    bend = next(c for c in res.checks if c.name == "bending")
+    assert "Ftuw" not in bend.formula and "no fu_welded given" in bend.formula
+
+
+def test_a_typed_in_fu_welded_above_fu_is_refused():
+    with pytest.raises(InputErrors, match="fu_welded"):
+        parse_job_text(span("welded = true\n" + BAR + 'fu = "38 ksi"\nfy_welded = "15 ksi"\n'
+                            'fu_welded = "40 ksi"\n', length=2))
 
 
 # ------------------------------------------------------------------ a grade that over-credits yield

@@ -59,7 +59,7 @@ def cmd_materials(args) -> int:
     if getattr(args, "json", False):
         print(json.dumps([{"key": m.key, "name": m.name, "kind": m.kind, "e": m.e, "fy": m.fy,
                            "fu": m.fu, "density": m.density, "fy_welded": m.fy_welded,
-                           "fb": m.fb, "fv": m.fv, "source": m.source,
+                           "fu_welded": m.fu_welded, "fb": m.fb, "fv": m.fv, "source": m.source,
                            "notes": list(m.notes)} for m in mats], indent=2))
         return 0
     system = getattr(args, "units", None) or "us"

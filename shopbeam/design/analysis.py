@@ -555,6 +555,14 @@ def material_unchecked(job: Job, st) -> list[Unchecked]:
                 "Table A.3.3/A.3.4, from memory), and the checks used the unwelded fy. Give "
                 "fy_welded under [beam.material], or remove welded = true if no weld is within "
                 "1 in of the highly stressed parts", "ADM 2015 Table A.3.3, A.3.4"))
+        elif job.welded and getattr(mat, "fu", None) and not getattr(mat, "fu_welded", None):
+            out.append(Unchecked(
+                "welded (heat-affected zone) rupture",
+                "welded = true, but the typed-in aluminium gives no fu_welded (Ftuw), so "
+                "rupture in bending near the weld (Z Ftuw / kt over Omega 1.95) was checked on "
+                "the unwelded fu, which welding lowers (6061-T6 Ftu 38 ksi, welded Ftuw 24 "
+                "ksi: ADM 2015 Table A.3.3, from memory). Give fu_welded under "
+                "[beam.material]", "ADM 2015 F.1, Table A.3.3"))
     return out
 
 

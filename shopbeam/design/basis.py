@@ -35,6 +35,8 @@ def basis_of(job) -> str:
 # the words `checks.on_yield` and the tee and angle rules (open_shapes) put in a bending
 # strength's text where the job's safety factor on yield caps it
 CAPPED_AT_YIELD = "capped at first yield"
+# the safety factor on yield in bending a job that gives none takes (the contract's example)
+DEFAULT_SF = 1.67
 
 
 def yield_cap_provenance(text: str, clause: str, source: str) -> tuple[str, str]:

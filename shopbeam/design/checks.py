@@ -38,7 +38,8 @@ from shopbeam.design import aluminum, lifting, local, lumber, open_shapes
 from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noqa: F401 (re-exported)
                                    OMEGA_ADM, OMEGA_B, OMEGA_V, OMEGA_V_ROLLED_I, PSI_PA, basis_of,
                                    brace_points, cb_factor, nominal_moment, support_braces,
-                                   unbraced_segments, CAPPED_AT_YIELD, yield_cap_provenance)
+                                   unbraced_segments, CAPPED_AT_YIELD, DEFAULT_SF,
+                                   yield_cap_provenance)
 from shopbeam.design.lifting import (flange_unchecked, lifting_notes, lifting_unchecked,
                                      profile_of)
 from shopbeam.design.results import Check, Unchecked
@@ -164,8 +165,8 @@ class Flexure:
                 m = math.pi**2 * e * sc / lam**2
                 eq = "Mnmb = pi^2 E Sc / lambda^2"
             return m * scale, (f"ADM 2015 {how} = {lam:.3g} (Lb {ln(lb)}, Cb taken as 1.0), "
-                               f"Cc {cc:.3g}: lateral-torsional buckling {eq}, Omega 1.65 "
-                               "(from memory)")
+                               f"Cc {cc:.3g}: lateral-torsional buckling {eq}, Omega "
+                               f"{self.omega / scale:.3g} (from memory)")
         if kind == "F11":
             my, mp, e, fy, d, t = p
             r = lb * d / t**2
@@ -589,7 +590,8 @@ def _adm_yield_rupture(sec, mat, s, z, welded, system: str = "us") -> Flexure:
     fu = (mat.fu_welded if w and mat.fu_welded else mat.fu)
     zz = z or s
     mp = min(zz * fy, 1.5 * s * fy)
-    yname, uname = ("Ftyw (welded)", "Ftuw (welded)") if w else ("Fty", "Ftu")
+    yname, uname = ("Ftyw (welded)", "Ftuw (welded)" if mat.fu_welded else
+                    "Ftu (unwelded: no fu_welded given)") if w else ("Fty", "Ftu")
     ytext = (f"ADM 2015 F.1 yielding: Mn = Z {yname} <= 1.5 S {yname}, {yname.split()[0]} "
              f"{stress_words(fy, system, True)}, Omega 1.65")
     if not fu:
@@ -995,17 +997,19 @@ def strengths(job, sec=None, beam=None) -> Strengths:
     fl = flexure(sec, job.material, b, sf, job.welded, service=service, system=job.units)
     sh = shear_strength(sec, job.material, b, sf, job.welded, service=service,
                         system=job.units)
+    # (code: the code's own strength: whether buckling sets it is judged on it, not the cap)
+    fl, sh, code = job_factors(job, sec, fl, sh)
     segs = []
     braced = brace_points(job)[0]
     for a, bb, free in unbraced_segments(job, beam):
         case = "any"
         if fl.ltb is not None and fl.ltb[0] == "NDS":
             case = wood_load_case(job, a, bb, free)
+        # the strengths of the lengths after the job's factors: ADM's carries the ratio of
+        # its own Omega to the flexure's, which the job's factor can change (on_yield)
         l1, why = fl.ltb1(0.0 if braced else bb - a, case, job.units)
         segs.append((a, bb, free, l1, why))
     n, absolute, words = deflection_rule(job)
-    # (code: the code's own strength: whether buckling sets it is judged on it, not the cap)
-    fl, sh, code = job_factors(job, sec, fl, sh)
     extra = () if braced else _deep_bar_first_yield(job, sec, b, segs)
     extra += _stainless_buckling(job, b, code, segs)
     extra += _wood_slenderness(job, fl, segs, braced)
@@ -1123,10 +1127,6 @@ def _design_factor(job, sec, fl: Flexure, sh: "ShearStrength"):
     return fl, sh
 
 
-# the safety factor on yield in bending a job that gives none takes (the contract's example)
-DEFAULT_SF = 1.67
-
-
 def job_factors(job, sec, fl: Flexure, sh: "ShearStrength"):
     """The job's own factors on the code's strengths, in their order: a below-the-hook
     beam's design factor (`_design_factor`), then the safety factor on yield in bending
@@ -1151,6 +1151,12 @@ def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
     if sf > max(fl.omega, DEFAULT_SF) * (1 + 1e-12):
         text += f"; Omega_b {fl.omega:g} raised to the job's safety factor {sf:g}"
         fl = replace(fl, omega=sf)
+    if fl.ltb is not None and fl.ltb[0] == "ADM":
+        # ADM lateral-torsional buckling has its own Omega, 1.65 (the flexure's is the cap's,
+        # 1.95 where rupture sets it): the job's factor replaces it where larger than 1.67
+        # too, and the strength carried is scaled to the flexure's Omega (`_adm_ltb`)
+        om = sf if sf > max(OMEGA_ADM, DEFAULT_SF) * (1 + 1e-12) else OMEGA_ADM
+        fl = replace(fl, ltb=("ADM", fl.ltb[1][:-1] + (fl.omega / om,)))
     # first yield of a welded aluminium member is in the weld's heat-affected zone (Ftyw)
     fy = mat.fy_welded if welded and getattr(mat, "kind", "") == "aluminum" and getattr(
         mat, "fy_welded", None) else mat.fy
@@ -1221,6 +1227,12 @@ def segment_strength(fl, l1: float, cb: float, free: bool, why: str) -> tuple[fl
     if cb * l1 < fl.cap:
         return (float(nominal_moment(fl.cap, l1, cb)),
                 f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else ""))
+    if fl.code_cap is not None and cb * l1 < fl.code_cap:
+        # the job's first-yield cap sets it, below the code's own strength, which is this
+        # length's buckling (not the cap's text's limit state): name that one, then the cap
+        cut = fl.cap_text.find("; " + CAPPED_AT_YIELD)
+        return fl.cap, (f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
+                        + (fl.cap_text[cut:] if cut >= 0 else ""))
     return fl.cap, fl.cap_text
 
 
@@ -1250,7 +1262,7 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
     if fl.ltb is not None and fl.ltb[0] == "ADM" and mn < fl.cap:
         # ADM lateral-torsional buckling governs: its own Mnmb over Omega 1.65 (the strength
         # carried is scaled to the cap's Omega so every consumer gets Mnmb / 1.65)
-        mn, omega = mn / fl.ltb[1][-1], OMEGA_ADM
+        mn, omega = mn / fl.ltb[1][-1], fl.omega / fl.ltb[1][-1]
     bend_params = {"Mn": mn, "Omega": omega, "Cb": cb, **fl.ltb_params(lb)}
     if fl.code_cap is not None and mn >= fl.cap * (1 - 1e-12):
         # the first-yield cap sets it: Mn is the code's own figure, and the cap beside it

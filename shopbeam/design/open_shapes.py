@@ -54,8 +54,8 @@ import math
 from dataclasses import dataclass
 
 from shopbeam import units
-from shopbeam.design.basis import (BASIS_WORDS, CAPPED_AT_YIELD, OMEGA_B, basis_of,
-                                   brace_points, cb_factor, yield_cap_provenance)
+from shopbeam.design.basis import (BASIS_WORDS, CAPPED_AT_YIELD, DEFAULT_SF, OMEGA_B,
+                                   basis_of, brace_points, cb_factor, yield_cap_provenance)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.members.sections import principal_factors
 
@@ -340,6 +340,12 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
     # Omega_b, or a below-the-hook beam's ASME BTH-1 design factor Nd (checks._design_factor)
     om = st.flexure.omega or OMEGA_B
     bth = om != OMEGA_B  # Mn capped at 1.10 Fy S too (ASME BTH-1 3-2.3.1, from memory)
+    # the job's safety factor on yield, where larger than Omega_b (and than 1.67), is taken
+    # on every limit state of F9 and F10 too, as `checks.on_yield` does for the other shapes
+    sf = job.criteria.safety_factor
+    raised = bool(sf and sf > max(om, DEFAULT_SF) * (1 + 1e-12))
+    if raised:
+        om = sf
     m = sol.moment
     braced, segs = _segments(job, st)
     worst = None
@@ -368,6 +374,9 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
         clause, src = "AISC 360-16 F10", F10_SOURCE
         formula = f"{BASIS_WORDS[st.basis]}: {text}"
     clause, src = yield_cap_provenance(text, clause, src)
+    if raised:
+        formula += (f"; Omega_b {st.flexure.omega or OMEGA_B:g} raised to the job's safety "
+                    f"factor {om:g}")
     if braced:
         held = ("held against twist all along (beam.restrained): no LTB" if job.restrained
                 else "continuously braced (beam.braced): no LTB")
@@ -397,16 +406,28 @@ def _f9_segment(sec, fy, e, lb, ex, omega=OMEGA_B, bth=False, system="us", sf=No
     if bth:
         mn_t, why_t = _bth_cap(mn_t, why_t, fy * p.sx)
         mn_c, why_c = _bth_cap(mn_c, why_c, fy * p.sx)
+    # the code's own figures in params; the job's first-yield cap beside the one it sets
+    params = {"Lb": lb or 0.0, "Mn_stem_tension": mn_t, "Mn_stem_compression": mn_c,
+              "My": fy * p.sx, "Mp": min(fy * p.zx, 1.6 * fy * p.sx), "Cb": 1.0}
     mn_t, why_t = _sf_cap(mn_t, why_t, fy * p.sx, omega, sf)
     mn_c, why_c = _sf_cap(mn_c, why_c, fy * p.sx, omega, sf)
     allow_t, allow_c = mn_t / omega, mn_c / omega
     r_t = m_stem_t / allow_t if allow_t > 0 else math.inf
     r_c = m_stem_c / allow_c if allow_c > 0 else math.inf
-    params = {"Lb": lb or 0.0, "Mn_stem_tension": mn_t, "Mn_stem_compression": mn_c,
-              "My": fy * p.sx, "Mp": min(fy * p.zx, 1.6 * fy * p.sx), "Cb": 1.0}
     if r_c >= r_t and m_stem_c > 0:
-        return (r_c, m_stem_c, allow_c, at_c, f"{why_c} (stem in compression; Cb 1.0)", params)
-    return (r_t, m_stem_t, allow_t, at_t, f"{why_t} (stem in tension)", params)
+        return (r_c, m_stem_c, allow_c, at_c, f"{why_c} (stem in compression; Cb 1.0)",
+                _with_cap(params, "Mn_stem_compression", mn_c, omega))
+    return (r_t, m_stem_t, allow_t, at_t, f"{why_t} (stem in tension)",
+            _with_cap(params, "Mn_stem_tension", mn_t, omega))
+
+
+def _with_cap(params: dict, key: str, mn: float, omega: float, cap_key: str = "M_yield_cap"
+              ) -> dict:
+    """`params` with the capped allowable moment beside the code's own `params[key]` where
+    the job's first-yield cap (`_sf_cap`) lowered it (docs/json.md)."""
+    if mn < params[key] * (1 - 1e-12):
+        return {**params, cap_key: mn / omega}
+    return params
 
 
 def _bth_cap(mn, why, my):
@@ -433,19 +454,21 @@ def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
         mn, why = f10_geometric(p, fy, e, min(sec.sx_top, sec.sx_bot))
         if bth:
             mn, why = _bth_cap(mn, why, fy * min(sec.sx_top, sec.sx_bot))
+        params = {"Lb": 0.0, "Mn": mn, "Cb": 1.0}
         mn, why = _sf_cap(mn, why, fy * min(sec.sx_top, sec.sx_bot), omega,
                           job.criteria.safety_factor)
         allow = mn / omega
         text = (f"restrained angle (beam.restrained) bent about its geometric axis: M <= Mn / "
                 f"Omega_b, Mn by {why}, Omega_b {omega:g}")
         return (mmax / allow if allow > 0 else math.inf, mmax, allow, at, text,
-                {"Lb": 0.0, "Mn": mn, "Cb": 1.0})
+                _with_cap(params, "Mn", mn, omega))
     mnw, why_w = f10_major(p, fy, e, lb, cb, job.units)
     mnz, why_z = f10_minor(p, fy, e)
     if bth:
         mnw, why_w = _bth_cap(mnw, why_w, fy * p.sw)
         mnz, why_z = _bth_cap(mnz, why_z, fy * p.sz)
     sf = job.criteria.safety_factor
+    own = {"Mnw": mnw, "Mnz": mnz}
     mnw, why_w = _sf_cap(mnw, why_w, fy * p.sw, omega, sf)
     mnz, why_z = _sf_cap(mnz, why_z, fy * p.sz, omega, sf)
     c, s = math.cos(p.alpha), math.sin(p.alpha)
@@ -456,8 +479,10 @@ def _f10_segment(job, sec, fy, e, lb, cb, ex, omega=OMEGA_B, bth=False):
             f"Mz = M sin a (a = {math.degrees(p.alpha):.1f} deg), combined by H2-1 as "
             f"Mw Omega / Mnw + Mz Omega / Mnz <= 1 (signs ignored: conservative); major axis "
             f"Mnw by {why_w}; minor axis Mnz by {why_z}; Omega_b {omega:g}")
-    params = {"Lb": lb or 0.0, "Mnw": mnw, "Mnz": mnz, "alpha": p.alpha, "Cb": min(cb, CB_MAX_ANGLE),
+    params = {"Lb": lb or 0.0, **own, "alpha": p.alpha, "Cb": min(cb, CB_MAX_ANGLE),
               "Mw": mmax * c, "Mz": mmax * s}
+    params = _with_cap(_with_cap(params, "Mnw", mnw, omega, "Mw_yield_cap"), "Mnz", mnz,
+                       omega, "Mz_yield_cap")
     return (mmax / allow, mmax, allow, at, text, params)
 
 

@@ -4,7 +4,7 @@ Values are specified minimums (yield, tensile) and nominal moduli and densities,
 the units the standard states them in and converted exactly to SI. Look-up is tolerant
 (``"A500 Gr C"``, ``"a500c"``, ``"ASTM A500 grade C"`` all find ``A500-C``). An inline
 material in a job file is a table with ``e``, ``fy`` and ``density`` (plus optional
-``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fb``, ``fv``, ``fc_perp``). A lumber one
+``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fu_welded``, ``fb``, ``fv``, ``fc_perp``). A lumber one
 must give ``fv`` (no shear value is guessed from Fb); without ``fc_perp`` its bearing is not
 checked and it is not rated.
 
@@ -400,7 +400,8 @@ def resolve_material(spec, key: str = "beam.material") -> Material:
 
 
 _INLINE_KEYS = {"e": "stress", "fy": "stress", "density": "density", "fu": "stress",
-                "g": "stress", "fy_welded": "stress", "fb": "stress", "fv": "stress",
+                "g": "stress", "fy_welded": "stress", "fu_welded": "stress", "fb": "stress",
+                "fv": "stress",
                 "fc_perp": "stress"}
 
 
@@ -475,6 +476,12 @@ def _inline(spec: Mapping, key: str) -> Material:
         raise InputError("fy is not less than e: check the units", f"{key}.fy")
     if "fu" in vals and vals["fu"] < vals["fy"]:
         raise InputError("fu is less than fy", f"{key}.fu")
+    if "fu_welded" in vals and vals["fu_welded"] < vals.get("fy_welded", 0.0):
+        raise InputError("fu_welded is less than fy_welded", f"{key}.fu_welded")
+    if "fu_welded" in vals and "fu" in vals and vals["fu_welded"] > vals["fu"]:
+        raise InputError("fu_welded is more than fu: welding lowers the strength near the "
+                         "weld (6061-T6 Ftu 38 ksi, Ftuw 24 ksi, ADM 2015 Table A.3.3, from "
+                         "memory); check the two figures", f"{key}.fu_welded")
     if kind == "lumber":
         _plausible_wood(spec, vals, key)
     if kind == "lumber" and "fv" not in vals:
