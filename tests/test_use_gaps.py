@@ -380,3 +380,68 @@ def test_the_fatigue_range_over_patterns_is_the_largest_arrangement_less_the_sma
     res = capacity(job)
     assert res.governing.name == "fatigue"
     assert res.factor == pytest.approx(fatigue.allowable_range("E", 2e6) / got, rel=1e-9)
+
+
+# ------------------------------------------------------------------ tie rods and knee braces
+
+ARM_TIED = ('[[supports]]\nat = "0 ft"\ntype = "pin"\nlabel = "wall plate"\n'
+            '[[supports]]\nat = "6 ft"\ntype = "roller"\nlabel = "{label}"\n')
+SNOW = ('[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "6 ft"\nvalue = "-180 lbf/ft"\n'
+        'label = "snow"\n')
+
+
+@pytest.mark.parametrize("label, held", [
+    ("tie rod to wall above", True),      # pushes the arm endwise toward the wall
+    ("knee brace", True),                 # pulls it
+    ("kicker", True),
+    ("diagonal strut", True),
+    ("post", False),
+    ("strut channel clip", False),        # a channel's trade name, not a brace
+])
+def test_a_member_held_by_a_tie_rod_or_brace_is_not_rated_as_a_plain_beam(label, held):
+    # a tie rod rising 4 ft over a 6 ft awning arm pushes it endwise with 1.5 x its tip
+    # reaction; bending with that thrust is a beam-column check (AISC 360-16 E3, H1-1b,
+    # from memory), about 10 % over the plain-beam rating by hand for HSS3x2x3/16
+    text = span_job(title="Awning arm", tags='["bracket", "awning"]', length="6 ft",
+                    section="HSS3x2x3/16", material="A500-C",
+                    supports=ARM_TIED.format(label=label), loads=SNOW)
+    got = reasons(text)
+    assert any("axial force" in r and "H1-1" in r for r in got) == held, got
+    if held:
+        assert any(p.key == "supports[1].label" and "beam-column" in p.message
+                   for p in parse_job_text(text).warnings if p.warning)
+
+
+@pytest.mark.parametrize("title, held", [
+    ("Awning arm with a tie rod to the wall", True),
+    ("Knee-braced shelf arm", True),
+    ("Tie rod rack, 6 ft bay", False),    # what the rack stores
+    ("Rack for tie rods and kickers", False),
+])
+def test_the_title_holds_only_when_it_says_the_member_is_tied_or_braced(title, held):
+    text = span_job(title=title, tags='["bracket"]', length="6 ft", section="HSS3x2x3/16",
+                    material="A500-C", supports=ARM_TIED.format(label="post"), loads=SNOW)
+    assert any("axial force" in r for r in reasons(text)) == held
+
+
+def test_the_no_axial_tag_rates_a_tied_member_and_the_label_says_on_what():
+    from shopbeam.output.label import label_text, rating
+
+    text = span_job(title="Awning arm", tags='["bracket", "awning", "no-axial"]',
+                    length="6 ft", section="HSS3x2x3/16", material="A500-C",
+                    supports=ARM_TIED.format(label="plumb hanger rod, tie rod square"),
+                    loads=SNOW)
+    assert not any("axial" in r for r in reasons(text))
+    cap = capacity(parse_job_text(text))
+    assert cap.rated
+    words = " ".join(label_text(rating(cap)).replace("|", " ").split())
+    assert "RATED ONLY WHILE nothing pushes or pulls the member endwise" in words
+    assert "slings" not in words.split("RATED ONLY WHILE nothing pushes")[1][:80]
+
+
+def test_a_lifting_support_labelled_as_a_knee_brace_contradicts_the_no_axial_tag():
+    sup = ('[[supports]]\nat = "0 ft"\ntype = "fixed"\nlabel = "mast"\n'
+           '[[supports]]\nat = "3 ft"\ntype = "roller"\nlabel = "knee brace"\n')
+    text = span_job(title="Davit arm", tags='["lifting", "no-axial"]', length="6 ft",
+                    section="W6x15", supports=sup)
+    assert any("no-axial contradicted" in r for r in reasons(text))

@@ -248,6 +248,26 @@ def _slender_wall(sec, mat) -> str:
     return ""
 
 
+def _flange_or_web_below_yield(sec, mat) -> str:
+    """Why an I-shape's or channel's flange or web buckles locally before first yield (AISC
+    360-16 F3, F4, F5 and F6 give Mn below My = Fy S, braced), or "": first yield is then no
+    upper bound on its strength, as for a tube's slender wall (`_slender_wall`)."""
+    e, fy = getattr(mat, "e", 0.0), getattr(mat, "fy", 0.0)
+    if sec.shape not in ("i-beam", "channel") or not (e > 0 and fy > 0 and sec.zx):
+        return ""
+    try:
+        code = _f2_f3(sec, fy, e) if sec.axis == "strong" else _f6(sec, fy, e)
+    except (KeyError, TypeError, ValueError, ZeroDivisionError):
+        return ""
+    my = fy * min(sec.sx_top, sec.sx_bot)
+    if code.cap >= my * (1 - 1e-9):
+        return ""
+    return (f"AISC 360-16 gives it Mn = {code.cap / my:.2f} Fy S, below first yield, by "
+            f"{code.cap_text}: it buckles locally before first yield. Rate it on that "
+            "strength: a steel material (a key such as \"A36\", or kind = \"steel\") with "
+            "basis = \"asd\"")
+
+
 def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
             service=None, system: str = "us") -> Flexure:
     """Bending strength of the section (SI) on the given basis (`service`: the wood keys,
@@ -277,7 +297,7 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
                               "([beam.section] shape = \"rect-tube\", ...) or have it "
                               "checked", "AISC 360-16 B4, chapter F", blocks_rating=True),)
         elif sec.shape not in ("round-bar", "rect-bar"):
-            slender = _slender_wall(sec, mat)
+            slender = _slender_wall(sec, mat) or _flange_or_web_below_yield(sec, mat)
             unc += (Unchecked("local buckling", "the first-yield basis does not check thin "
                               "walls or flanges for local buckling"
                               + (f"; {slender}" if slender else ""),

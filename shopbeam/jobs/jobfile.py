@@ -3244,6 +3244,61 @@ def _hung_from_rods(r: _Reader, criteria: Criteria, tags, raw_supports, title=""
                    "member against twist. Write brace = true or brace = false on it")
 
 
+# A support held by a sloped tie or brace (an awning or sign arm with a tie rod up to the wall,
+# a shelf arm on a knee brace, a davit's kicker): what holds the member there also pushes or
+# pulls it endwise. Bare "strut" is a channel's trade name (strut channel) and "stay" an
+# everyday verb: only their sloped or diagonal forms are read.
+_TIE_WORDS = re.compile(
+    r"\b(tie[- ]?(?:rods?|bars?)|tension rods?|rod braces?|knee[- ]?brac\w*|kickers?|"
+    r"(?:diagonal|sloped|angled|inclined|raking) (?:braces?|ties?|rods?|struts?|stays?)|"
+    r"guy(?:ed|[- ]wires?|[- ]ropes?|[- ]rods?))(?![\w])", re.IGNORECASE)
+# ...said of the member in its title or notes ("arm with a tie rod to the wall", "knee-braced
+# arm"), not of what a rack stores ("tie rod rack")
+_TIE_SAID = re.compile(
+    r"\b(?:with|by|on|from|has)\b(?: [\w-]+){0,2}? " + _TIE_WORDS.pattern[2:]
+    + r"|" + _TIE_WORDS.pattern + r" (?:to|up|from|above|below|at)\b|\bknee[- ]?braced\b|"
+    r"\bguyed\b", re.IGNORECASE)
+
+
+def _tied_or_braced(r: _Reader, tags, raw_supports, title="", notes="") -> None:
+    """A job whose support label, title or notes say the member is held by a tie rod, knee
+    brace or kicker (a sloped member meeting it): that holds it up by pushing it endwise (a
+    tie above) or pulling it (a knee brace below), so it is a beam-column, and bending with
+    that axial force is not checked (AISC 360-16 E3, H1-1): the rating is held, unless the
+    tag no-axial says nothing pushes or pulls it endwise (the label then says it is rated
+    only while so). A lifting job tagged no-axial has its own rule for words that contradict
+    the tag (design.analysis.use_unchecked); its support labels are read here."""
+    places = [(f"supports[{i}].label", sp.get("label")) for i, sp in
+              enumerate(raw_supports if isinstance(raw_supports, list) else [])
+              if _is_table(sp)] + [("title", title), ("notes", notes)]
+    for key, text in places:
+        rule = _TIE_WORDS if key.startswith("supports") else _TIE_SAID
+        m = rule.search(_as_words(text)) if isinstance(text, str) else None
+        if not m:
+            continue
+        said = _TIE_WORDS.search(m.group(0)).group(0) if _TIE_WORDS.search(m.group(0)) \
+            else m.group(0)
+        if "no-axial" in tags:
+            if is_lifting(tags) and key.startswith("supports"):
+                r.hold(f"the tag \"no-axial\" says nothing pushes the member endwise, but "
+                       f"{key} says {said!r}: a tie rod pushes a lifting member endwise and a "
+                       "knee brace pulls it, and bending with that axial force is not checked "
+                       "here, so no rating is posted. Have it checked as a beam-column; if "
+                       "the words do not describe this support, reword them", key,
+                       f"axial force (the tag no-axial contradicted by {key}, {said!r}) "
+                       "not checked (AISC 360-16 E3, H1-1)")
+            return
+        r.hold(f"{key} says {said!r}: a tie rod or brace that meets the member at a slope "
+               "holds it up by pushing it endwise (a knee brace below pulls it), so the "
+               "member is a beam-column, and bending with that axial force is not checked "
+               "here (it lowers what the member may carry), so no rating is posted. Have it "
+               "checked as a beam-column; or add the tag \"no-axial\" if the rod or brace "
+               "meets it square (a plumb hanger) and nothing pushes or pulls it endwise",
+               key, f"axial force from {said!r} ({key}) not checked: a beam-column (AISC "
+               "360-16 E3, H1-1)")
+        return
+
+
 # A length written in the title or notes ("12 ft reach", "3.6 m span", 8', "10 1/2 ft"),
 # after units' own reading of shop marks (' " and fraction characters); a figure followed by
 # a word that makes it some other size (12 in deep, 16 in o.c., 24 ft lumber) is not the
@@ -4973,6 +5028,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                      supports, length, system)
     _hoist_weight(r, criteria, tags, loads, moving, supports, length)
     _hung_from_rods(r, criteria, tags, data.get("supports"), title, notes)
+    _tied_or_braced(r, tags, data.get("supports"), title, notes)
     _narrow_widths(r, raw_loads, length, beam.get("length") if isinstance(beam, dict) else None,
                    system, title, notes)
     _length_against_words(r, beam.get("length") if isinstance(beam, dict) else None, length,

@@ -466,11 +466,11 @@ def _tag_words(job) -> list[str]:
                    f"{said} {'are' if len(springs) > 1 else 'is'} as stiff as typed: a "
                    "stiffer or softer one shares the load otherwise (check its unit: lbf/in, "
                    "not kip/in or lbf/ft).")
-    if job.lifting and NO_AXIAL in job.tags and len(
-            {round(s.at, 6) for s in job.supports if s.takes_force}) >= 2:
+    if NO_AXIAL in job.tags and (not job.lifting or len(
+            {round(s.at, 6) for s in job.supports if s.takes_force}) >= 2):
         out.append("RATED ONLY WHILE nothing pushes or pulls the member endwise (tag "
-                   "no-axial: slings hang plumb, no tie rod or knee brace; axial force is not "
-                   "checked here).")
+                   "no-axial: " + ("slings hang plumb, " if job.lifting else "")
+                   + "no sloped tie rod or knee brace; axial force is not checked here).")
     if is_outdoor(job):
         out.append("WIND is not in this figure: out of doors the member also takes wind, "
                    "sideways and as uplift that reverses the bending (ASCE 7 and the local "
