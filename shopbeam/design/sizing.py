@@ -442,7 +442,8 @@ def _steel_shapes_note(job, cands) -> str:
             catalog.is_steel_shape(c[1]) for c in cands):
         return ""
     metal = "an aluminium" if mkind == "aluminum" else "a stainless"
-    return (f"these are steel shapes (AISC Shapes Database v15.0, EN 10365) with the job's "
+    return (f"these are steel shapes (AISC Shapes Database v15.0, EN 10365, EN 10219) with "
+            f"the job's "
             f"{metal.split()[1]} {job.material.key}: {metal} shape of the same name has other "
             "dimensions, so check the one you order as an inline [beam.section] with the "
             "mill's dimensions")

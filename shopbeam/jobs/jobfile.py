@@ -1091,6 +1091,40 @@ def _read_braces_flange(r: _Reader, beam: dict, braces) -> str | None:
     return got
 
 
+# A trolley's wheels counted in all in the job's words ("four-wheel trolley", "4 wheels")
+_WHEELS_IN_ALL = re.compile(r"\b(?:four|4)[- ]?wheel(?:s|ed)?\b", re.IGNORECASE)
+
+
+def _four_per_axle(r: _Reader, raw, moving, title="", notes="") -> None:
+    """wheels_per_axle = 4: each load of [[moving]] is one axle, so the set runs on axles x 4
+    wheels, and the wheel flange check shares each axle's load over four. A shop counts a
+    trolley's wheels in all (four on a common two-axle trolley), so 4 here is an easy slip
+    that posts a higher figure: it is said wherever the set has two axles or more, and held
+    where the job's words give four wheels in all. (A set of one load is a whole trolley
+    travelling as one point: its four wheels are the trolley's, as a point load's wheels = 4.)"""
+    if not moving or moving[0].wheels_per_axle != 4 or not isinstance(raw, list) or not raw:
+        return
+    axles = len(moving[0].live)
+    if axles < 2:
+        return
+    t = raw[0]
+    m = next((m for m in (_WHEELS_IN_ALL.search(_as_words(x)) for x in (
+        title, notes, t.get("label") if _is_table(t) else "") if isinstance(x, str)) if m),
+        None)
+    msg = (f"wheels_per_axle = 4 counts the wheels on ONE axle (each of the {axles} loads of "
+           f"[[moving]] is an axle), so the set runs on {axles} x 4 = {axles * 4} wheels and "
+           "each wheel is checked for a quarter of its axle's load; a trolley with four wheels "
+           "in all is 2 axles of 2 (wheels_per_axle = 2, the default)")
+    if m:
+        r.hold(msg + f". The job says {m.group(0)!r}, so no rating is posted: write "
+               "wheels_per_axle = 2, or reword if each axle really runs four wheels",
+               "moving[0].wheels_per_axle",
+               f"wheels_per_axle = 4 ({axles * 4} wheels) against the job's {m.group(0)!r}: "
+               "the wheel flange check would share each axle's load over four wheels")
+    else:
+        r.warn(msg + ". Check it against the trolley", "moving[0].wheels_per_axle")
+
+
 def _read_moving(r: _Reader, raw, length) -> tuple[WheelSet, ...]:
     """[[moving]]: at most one wheel set at fixed spacing over a travel range."""
     if raw in (None, []):
@@ -1281,6 +1315,53 @@ def _line_load(r: _Reader, ld: dict, raw, key: str, width_needed: list) -> float
 # 1e9 N is about 100,000 tonnes.
 LOAD_LIMITS = {"point": (1e9, "force"), "moment": (1e10, "moment"),
                "uniform": (1e9, "line_load"), "linear": (1e9, "line_load")}
+
+
+# Words that say a load hangs from trolley wheels or a clamp on the flange tips (a monorail
+# hoist, a beam clamp), not from a lug plate under the web
+_FLANGE_TIP_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?|clamps?|"
+                               r"push[- ]trolley|geared[- ]trolley)\b", re.IGNORECASE)
+
+
+def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, title="", notes="") -> None:
+    """lug = true (the load hangs from a lug plate welded under the web: no flange bending
+    under trolley wheels) on a job that says the load runs on a trolley or hangs from a clamp
+    on the flange tips: a monorail profile or tag, or the words of the job or of a load at
+    the same place. The flange check under the wheels (CMAA 74, AISC Design Guide 7) would be
+    left out on what the job's own words deny, so the rating is held."""
+    if not lugs:
+        return
+    profile = crit_raw.get("lifting", "") if isinstance(crit_raw, dict) else ""
+    rows = [ld for ld in raw_loads if _is_table(ld)] if isinstance(raw_loads, list) else []
+    for key in lugs:
+        i = int(key[6:-1])
+        ld = raw_loads[i]
+        said = ""
+        if isinstance(profile, str) and "monorail" in profile:
+            said = f"[criteria] lifting = {profile!r}"
+        elif any(t in ("monorail", "trolley") for t in tags):
+            said = "the tag " + next(t for t in tags if t in ("monorail", "trolley"))
+        else:
+            at = ld.get("at")
+            texts = [("title", title), ("notes", notes)] + [
+                (f"loads[{j}].label", o.get("label")) for j, o in enumerate(raw_loads)
+                if _is_table(o) and (o is ld or o.get("at") == at)]
+            for where, text in texts:
+                m = _FLANGE_TIP_WORDS.search(_as_words(text)) if isinstance(text, str) else None
+                if m:
+                    said = f"{where} says {m.group(0)!r}"
+                    break
+        if said and rows:
+            r.hold(f"lug = true says {key} hangs from a lug plate welded under the web, so "
+                   f"the bottom flange is not checked under trolley wheels or clamp jaws, but "
+                   f"{said}: a trolley or beam clamp bears on the flange tips, which bend "
+                   "under it (often what governs a hoist beam). Remove lug = true (give "
+                   "wheels = 2, 4 or 8 for the trolley's wheels or the clamp's jaws), or, if "
+                   "the load really hangs from a welded lug (a fixed pick point, no trolley), "
+                   "take out the monorail, trolley or clamp words, tag or profile",
+                   f"{key}.lug",
+                   f"{key} has lug = true but {said}: the flange under a trolley or clamp is "
+                   "not checked (CMAA 74, AISC Design Guide 7)")
 
 
 def _twice(r: _Reader, raw_loads) -> None:
@@ -2049,6 +2130,48 @@ def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
                    "no rating is posted while it stands", f"{ld.key}.value",
                    f"{ld.key}{name} is {units.fmt(f, 'force', system)}, a thousand times "
                    "smaller than the largest load: most likely a unit slip. Fix its unit")
+
+
+def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, material,
+                      system: str, title="", notes="") -> None:
+    """A floor's dead spread load (deck, joists, finishes) given as a total that spreads to less
+    than half the member's own weight per length: most often the per-length figure typed as
+    `total` ("-90 lbf" for "-90 lbf/ft"), which leaves the dead load a span's length too light
+    and posts a higher live load. Held, with the per-length figure it came to; writing that
+    figure as `value` (per length) says it is meant."""
+    normal = {normal_tag(t) for t in tags}
+    text = " | ".join(_as_words(t) for t in (title, notes))
+    floor = FLOOR_TAGS.intersection(normal) or (_search(_FLOOR_WORDS, text)
+                                                and not _NOT_FLOOR_WORDS.search(text))
+    if not floor or NOT_FLOOR in normal or section is None or material is None \
+            or not isinstance(raw_loads, list):
+        return
+    try:
+        own = section.self_weight_mass(material.density) * units.G0  # N/m
+    except (AttributeError, TypeError, ValueError):
+        return
+    for ld in loads:
+        i = int(ld.key[6:-1]) if ld.key.startswith("loads[") else -1
+        raw = raw_loads[i] if 0 <= i < len(raw_loads) else None
+        if ld.kind != "uniform" or ld.case != "dead" or not _is_table(raw) \
+                or "total" not in raw or ld.end <= ld.start:
+            continue
+        per = abs(ld.total_force) / (ld.end - ld.start)
+        if 0 < per < 0.5 * own:
+            name = f" ({ld.label})" if ld.label else ""
+            per_words = units.fmt(per, "line_load", system)
+            r.hold(f"total = {raw['total']!r}{name} spreads to {per_words} along the "
+                   f"member, less than half the member's own weight "
+                   f"({units.fmt(own, 'line_load', system)}): a floor's deck and joists "
+                   "weigh more than that. Most often the per-length figure was typed as the "
+                   f"total: if {raw['total']!r} per length was meant, write value = "
+                   f"\"{raw['total']}/{'ft' if system == 'us' else 'm'}\" (a too light dead "
+                   "load posts a higher live load, so no rating is posted while it stands); "
+                   "if the total is right, write it as value = "
+                   f"\"{'-' if ld.total_force < 0 else ''}{per_words}\"",
+                   f"{ld.key}.total", f"{ld.key}{name}: total = {raw['total']!r} spreads "
+                   f"to {per_words}, under half the member's own weight per length: the "
+                   "per-length figure typed as a total?")
 
 
 def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> list[str]:
@@ -4939,9 +5062,11 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    "so it changes nothing. Give a hoist as a point load, or trolley "
                    "wheels as [[moving]]", f"loads[{i}].wheels")
     _twice(r, raw_loads)
+    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs, title, notes)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
+    _floor_dead_total(r, loads, raw_loads, tags, section, material, system, title, notes)
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members, title,
                                notes)
     _family_mismatch(r, section, material, system)
@@ -4976,6 +5101,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
 
     criteria = _read_criteria(r, data.get("criteria", {}), is_lifting(tags), material)
     moving = _read_moving(r, data.get("moving"), length)
+    _four_per_axle(r, data.get("moving"), moving, title, notes)
     if is_lifting(tags) or criteria.lifting:
         _trolley_spacing(r, moving, system, data.get("moving"), length)
     upward += _upward_wheels(r, moving, system)

@@ -351,9 +351,11 @@ def is_wood_size(sec: Section) -> bool:
     return is_lumber_size(sec) or (sec.shape == "rect-bar" and "LVL size" in (sec.source or ""))
 
 
-# catalog sources whose shapes are rolled or welded steel shapes (not bar or tube stock sizes
-# computed from their dimensions): an aluminium or stainless shape of the same name differs
-STEEL_SHAPE_SOURCES = ("AISC Shapes Database", "EN 10365")
+# catalog sources whose shapes are rolled, welded or cold-formed carbon-steel shapes (not bar
+# stock sizes computed from their dimensions): an aluminium or stainless shape of the same
+# name differs (EN 10219 hollow sections: steel corner radii and tolerances; stainless and
+# aluminium tube are made to other standards)
+STEEL_SHAPE_SOURCES = ("AISC Shapes Database", "EN 10365", "EN 10219")
 
 
 def is_steel_shape(sec: Section) -> bool:

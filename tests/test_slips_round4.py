@@ -1,0 +1,139 @@
+"""Easy slips that posted a higher rating with no message: a lug written under a trolley's
+load, four wheels per axle for a four-wheel trolley, a stainless or aluminium grade on an EN
+10219 hollow section, a floor's dead spread load typed as a total with its per-foot figure.
+Each now gets a message at its key, and the rating is held where the job's words or figures
+say it is a slip."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import pytest
+
+from shopbeam.design.capacity import capacity
+from shopbeam.jobs.jobfile import parse_job_text
+
+PRESETS = Path(__file__).resolve().parents[1] / "presets"
+
+
+def preset(name: str) -> str:
+    return (PRESETS / name).read_text(encoding="utf-8")
+
+
+def warned(job, key: str) -> list[str]:
+    return [p.message for p in job.warnings if p.warning and p.key == key]
+
+
+# ------------------------------------------------------------------ a lug under a trolley's load
+
+def test_a_lug_written_on_a_monorail_hoist_load_is_held():
+    # the trolley runs on the flange tips, whose bending under the wheels governs the preset
+    # (CMAA 74, AISC Design Guide 7): lug = true would leave that check out
+    text = preset("monorail-hoist-beam.toml")
+    assert "wheels = 4" in text
+    slip = text.replace("wheels = 4", "lug = true", 1)
+    job = parse_job_text(slip)
+    assert any("trolley" in m for m in warned(job, "loads[0].lug"))
+    res = capacity(job)
+    assert not res.rated
+    assert capacity(parse_job_text(text)).rated
+
+
+@pytest.mark.parametrize("label, held", [
+    ("chain hoist and beam clamp", True),
+    ("spreader shackle", False),
+])
+def test_a_lug_is_held_where_a_load_at_the_same_place_names_a_clamp(label, held):
+    text = f'''schema = 1
+title = "Hoist point over the press, W8x18, 10 ft"
+units = "us"
+tags = ["lifting", "hoist"]
+[beam]
+length = "10 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-1000 lbf"
+label = "rated load"
+flange = "bottom"
+lug = true
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-60 lbf"
+label = "{label}"
+case = "dead"
+flange = "bottom"
+lug = true
+[criteria]
+lifting = "below-the-hook"
+'''
+    job = parse_job_text(text)
+    assert bool(warned(job, "loads[0].lug")) == held
+    assert any("lug = true" in r for r in capacity(job).not_rated) == held
+
+
+# ------------------------------------------------------------------ wheels per axle
+
+def _trolley(per_axle: int, label: str = "hoist trolley") -> str:
+    text = preset("monorail-trolley.toml")
+    assert 'label = "hoist trolley"' in text
+    return text.replace('label = "hoist trolley"',
+                        f'label = "{label}"\nwheels_per_axle = {per_axle}', 1)
+
+
+def test_four_wheels_per_axle_on_a_two_axle_set_is_said_with_the_wheels_in_all():
+    job = parse_job_text(_trolley(4))
+    got = warned(job, "moving[0].wheels_per_axle")
+    assert got and "2 x 4 = 8 wheels" in got[0] and "ONE axle" in got[0]
+    assert not warned(parse_job_text(_trolley(2)), "moving[0].wheels_per_axle")
+
+
+def test_four_wheels_per_axle_against_a_four_wheel_trolley_in_the_words_is_held():
+    job = parse_job_text(_trolley(4, label="four-wheel hoist trolley"))
+    assert not capacity(job).rated
+    assert capacity(parse_job_text(_trolley(2, label="four-wheel hoist trolley"))).rated
+
+
+# ------------------------------------------------------------------ EN 10219 hollow sections
+
+@pytest.mark.parametrize("section", ["SHS50x50x4", "RHS100x50x4", "CHS88.9x4"])
+@pytest.mark.parametrize("material", ["304", "6061-T6"])
+def test_a_stainless_or_aluminium_grade_on_an_en_hollow_section_is_not_rated(section,
+                                                                             material):
+    # EN 10219 is a carbon-steel product standard: a stainless or aluminium tube of that
+    # size has its own corner radii and tolerances (as on an AISC HSS or an EN IPE)
+    text = preset("workbench-top.toml")
+    import re
+
+    text = re.sub(r'section = "[^"]*"', f'section = "{section}"', text, count=1)
+    text = re.sub(r'material = "[^"]*"', f'material = "{material}"', text, count=1)
+    job = parse_job_text(text)
+    assert any("steel shape" in p.message for p in job.warnings if p.warning)
+    assert not capacity(job).rated
+
+
+# ------------------------------------------------------------------ a floor's dead load total
+
+def test_a_floor_dead_load_typed_as_a_total_with_its_per_foot_figure_is_held():
+    text = preset("storage-platform-beam.toml")
+    import re
+
+    m = re.search(r'value = "(-[\d.]+) lbf/ft"[^\n]*\nlabel = "[^"]*"\ncase = "dead"', text)
+    assert m, "the preset's dead spread load"
+    slip = text.replace(m.group(0), m.group(0).replace(
+        f'value = "{m.group(1)} lbf/ft"', f'total = "{m.group(1)} lbf"'), 1)
+    job = parse_job_text(slip)
+    said = [p for p in job.warnings if p.warning and p.key.endswith(".total")]
+    assert said and "per length" in said[0].message
+    assert not capacity(job).rated
+    # the same total spread out written per foot is what it says: no message
+    assert capacity(parse_job_text(text)).rated
