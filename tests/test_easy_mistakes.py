@@ -481,7 +481,7 @@ def test_sizing_an_aluminium_job_over_steel_shapes_says_so():
     # another extrusion (Aluminum Association standard shapes differ), so the sweep says so
     text = job_text(section="FB4x1/2", material="6061-T6")
     res = size(parse_job_text(text), kind="W", with_capacity=False)
-    assert "steel shapes (AISC Shapes Database v15.0, EN 10365)" in res.material_note
+    assert "steel shapes (AISC Shapes Database v15.0, EN 10365, EN 10219)" in res.material_note
     assert "an aluminium shape" in res.material_note
     res = size(parse_job_text(text), kind="flat-bar", with_capacity=False)  # bar: same sizes
     assert "steel shapes" not in res.material_note

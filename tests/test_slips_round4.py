@@ -137,3 +137,54 @@ def test_a_floor_dead_load_typed_as_a_total_with_its_per_foot_figure_is_held():
     assert not capacity(job).rated
     # the same total spread out written per foot is what it says: no message
     assert capacity(parse_job_text(text)).rated
+
+
+# ------------------------------------------------------------------ not-lifting on a crane
+
+def test_the_not_lifting_tag_on_a_job_that_says_it_is_a_jib_crane_is_held():
+    text = preset("jib-arm.toml")
+    assert 'tags = ["lifting", "jib", "cantilever"]' in text
+    slip = text.replace('tags = ["lifting", "jib", "cantilever"]',
+                        'tags = ["not-lifting", "cantilever"]', 1)
+    job = parse_job_text(slip)
+    assert any("not-lifting" in m and "jib crane" in m.lower() for m in warned(job, "tags"))
+    assert not capacity(job).rated
+
+
+def test_the_not_lifting_tag_stands_where_the_words_only_name_a_part_stored():
+    text = preset("bar-stock-rack-arm.toml")
+    import re
+
+    text = re.sub(r'title = "[^"]*"', 'title = "Arm of the rack for hoist chains"', text,
+                  count=1)
+    text = re.sub(r"tags = \[", 'tags = ["not-lifting", ', text, count=1)
+    assert not warned(parse_job_text(text), "tags")
+
+
+# ------------------------------------------------------------------ steel yield in the wrong unit
+
+def test_a_typed_in_steel_yield_far_below_any_steel_is_warned_with_the_likely_unit():
+    text = preset("workbench-top.toml")
+    import re
+
+    text = re.sub(r'material = "[^"]*"\n', "", text, count=1).replace(
+        "[[supports]]", '[beam.material]\nkind = "steel"\ne = "29000 ksi"\nfy = "50 MPa"\n'
+        'density = "490 lb/ft^3"\n\n[[supports]]', 1)
+    got = warned(parse_job_text(text), "beam.material.fy")
+    assert got and "50 ksi typed as MPa" in got[0]
+    ok = text.replace('fy = "50 MPa"', 'fy = "50 ksi"')
+    assert not warned(parse_job_text(ok), "beam.material.fy")
+
+
+# ------------------------------------------------------------------ the hoist's weight as live
+
+def test_a_hoist_weight_left_live_is_named_with_its_key_not_said_to_be_missing():
+    text = preset("jib-arm.toml")
+    i = text.index('label = "hoist and trolley"')
+    j = text.index('case = "dead"', i)
+    slip = text[:j] + text[j + len('case = "dead"'):]
+    job = parse_job_text(slip)
+    got = [p.message for p in job.warnings if p.warning and "hoist" in p.message]
+    assert any("loads[1] (hoist and trolley)" in m and 'case = "dead"' in m for m in got), got
+    assert not any("no hoist or trolley weight is entered" in m for m in got)
+    assert not capacity(job).rated

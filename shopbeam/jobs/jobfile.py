@@ -1323,11 +1323,11 @@ _FLANGE_TIP_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?
                                r"push[- ]trolley|geared[- ]trolley)\b", re.IGNORECASE)
 
 
-def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, title="", notes="") -> None:
+def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs) -> None:
     """lug = true (the load hangs from a lug plate welded under the web: no flange bending
     under trolley wheels) on a job that says the load runs on a trolley or hangs from a clamp
-    on the flange tips: a monorail profile or tag, or the words of the job or of a load at
-    the same place. The flange check under the wheels (CMAA 74, AISC Design Guide 7) would be
+    on the flange tips: a monorail profile or tag, or the label of a load at the same
+    place. The flange check under the wheels (CMAA 74, AISC Design Guide 7) would be
     left out on what the job's own words deny, so the rating is held."""
     if not lugs:
         return
@@ -1343,9 +1343,10 @@ def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, title="", not
             said = "the tag " + next(t for t in tags if t in ("monorail", "trolley"))
         else:
             at = ld.get("at")
-            texts = [("title", title), ("notes", notes)] + [
-                (f"loads[{j}].label", o.get("label")) for j, o in enumerate(raw_loads)
-                if _is_table(o) and (o is ld or o.get("at") == at)]
+            # (the title or notes may name the rail the trolley runs on elsewhere: only the
+            # loads at this place speak for how it hangs)
+            texts = [(f"loads[{j}].label", o.get("label")) for j, o in enumerate(raw_loads)
+                     if _is_table(o) and (o is ld or o.get("at") == at)]
             for where, text in texts:
                 m = _FLANGE_TIP_WORDS.search(_as_words(text)) if isinstance(text, str) else None
                 if m:
@@ -1846,11 +1847,28 @@ def strength_slip(material, system: str = "us") -> str:
             + (f": a figure in MPa typed with ksi is likely ({mpa})" if mpa else ""))
 
 
+# Lowest yield strength of a structural steel or stainless (from memory): 316L annealed 25 ksi
+# (ASTM A240), A36 36 ksi, S235 235 MPa. Below it a figure in ksi typed with MPa ("50 MPa" for
+# 50 ksi) is likely; the figure posted is then far too low (on the safe side: a warning)
+KIND_FY_LOW = {"steel": 24.0, "stainless": 24.0}  # ksi
+
+
 def _kind_mismatch(r: _Reader, material, system: str) -> None:
     slip = strength_slip(material, system)
     if slip:
         r.warn(f"{slip}. Check fy and its unit; the job is NOT RATED until it reads as the "
                "mill certificate does", "beam.material.fy")
+    kind = getattr(material, "kind", "custom")
+    if getattr(material, "source", "") == "typed in" and kind in KIND_FY_LOW and \
+            material.fy / units.KSI < KIND_FY_LOW[kind]:
+        mpa = material.fy / 1e6
+        r.warn(f"fy = {units.fmt(material.fy, 'stress', system)} is below any structural "
+               f"{_KIND_WORDS[kind]} (about 25 ksi, 170 MPa, at the least; A36 is "
+               "36 ksi, S235 235 MPa): "
+               + (f"{mpa:.4g} ksi typed as MPa is likely ({mpa:.4g} ksi = "
+                  f"{mpa * units.KSI / 1e6:.0f} MPa). " if mpa < 120 else "")
+               + "The checks use the figure typed, which understates the member: check fy and "
+               "its unit", "beam.material.fy")
     why = kind_mismatch(material, system)
     if not why:
         return
@@ -3246,6 +3264,20 @@ def _hoist_weight(r: _Reader, criteria: Criteria, tags, loads, moving, supports,
     where = ("dead = [...] on [[moving]], the hoist and trolley weight per axle" if moving
              else "a point load at the hoist (within a foot of the hook load) with case = "
              "\"dead\" (the hoist and trolley weight)")
+    # a live load labelled as the hoist or trolley: entered, but as live (its case left out)
+    named = next((ld for ld in loads if ld.case == "live" and ld.label and re.search(
+        r"\b(hoists?|trolley|trolleys|block|carriage)\b", ld.label, re.IGNORECASE)
+        and not re.search(r"\b(rated|hook|load|capacity|lift)\b", ld.label, re.IGNORECASE)),
+        None) if not moving else None
+    if named is not None and any(ld is not named and ld.case == "live" and ld.total_force
+                                 for ld in loads):  # (and another live load: the hook's)
+        r.hold(f"{named.key} ({named.label}) reads as the hoist and trolley weight but is a "
+               "live load (case = \"live\", the default): the weight of the hoist is not "
+               "part of the load the rating scales, and a rating counts it as rated load. "
+               "Add case = \"dead\" to it", f"{named.key}.label",
+               f"{named.key} ({named.label}) is the hoist weight entered as live: add "
+               "case = \"dead\"")
+        return
     r.hold("no hoist or trolley weight is entered on this " + (
                "jib" if "jib" in name else "monorail") + ": the figure posted would be what "
            "the member carries in all, and the hoist hung on it takes its own weight out of "
@@ -3791,6 +3823,33 @@ def _hangs_stored(tags) -> bool:
     """Whether the job's tags say the member hangs stored goods or fixtures below (a load on
     its bottom flange is then no hint of a hoist)."""
     return bool(_HANGS_STORED & {normal_tag(t) for t in tags})
+
+
+# Words that say outright the member is a lifting device (not a part stored or a word in a
+# shelf's name): the tag not-lifting cannot stand against them
+_LIFTING_DEVICE_WORDS = re.compile(r"\b(lifting devices?|jib[- ]?cranes?|crane booms?|"
+                                   r"below[- ]the[- ]hook|monorail hoists?)\b", re.IGNORECASE)
+
+
+def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
+    """The tag not-lifting on a job whose title or notes say outright it is a lifting device
+    ("jib crane", "LIFTING DEVICE: design, marking and load test..."): the tag would post a
+    NOT FOR LIFTING label with no impact allowance, lateral force or lifting cautions on a
+    crane. Held until one of the two is changed."""
+    if NOT_LIFTING not in tags or is_lifting(tags, criteria.lifting):
+        return
+    for key, text in (("title", title), ("notes", notes)):
+        m = _search(_LIFTING_DEVICE_WORDS, _as_words(text)) if isinstance(text, str) else None
+        if m:
+            r.hold(f"the tag \"{NOT_LIFTING}\" says this is not a lifting device, but the "
+                   f"{key} says {m.group(0)!r}: a lifting device is checked with its impact "
+                   "allowance, sideways trolley force and lifting deflection limit and carries "
+                   "the stronger cautions, none of which a job tagged not-lifting gets, so no "
+                   f"rating is posted. Tag it \"lifting\" if it lifts; if it does not, take "
+                   f"the words out of the {key}", "tags",
+                   f"the tag {NOT_LIFTING} against the {key}'s {m.group(0)!r}: a lifting "
+                   "device checked as a shelf")
+            return
 
 
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
@@ -5062,7 +5121,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    "so it changes nothing. Give a hoist as a point load, or trolley "
                    "wheels as [[moving]]", f"loads[{i}].wheels")
     _twice(r, raw_loads)
-    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs, title, notes)
+    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
@@ -5164,6 +5223,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _lifting_mismatch(r, criteria, tags, supports, length)
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
+    _not_lifting_denied(r, title, notes, tags, criteria)
     bth_hint = _below_the_hook_hint(r, title, notes, tags, criteria)
     rolling_keys = _rolling_keys(r, data.get("moving"), moving, tags, criteria)
     vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
