@@ -349,6 +349,18 @@ _SMALL_PREFIX = re.compile(r"^(?:milli|micro|nano|pico)(?:metric_ton|ton|kip|for
                            r"pound|newton|gram|force_kilogram|kilogram)")
 
 
+# A metric prefix on a US customary unit: "dlbf" is a tenth of a pound-force to pint, "mft" a
+# thousandth of a foot. Only kilo on the pound (klb, klbf, kpsi: the kip) and mega on psi (Mpsi,
+# a modulus) are written in shops; any other reads as a slip (a stray letter before the unit)
+_US_PREFIXED = re.compile(
+    r"^(yocto|zepto|atto|femto|pico|nano|micro|milli|centi|deci|deca|deka|hecto|kilo|mega|"
+    r"giga|tera|peta|exa|zetta|yotta)(foot|inch|yard|mile|force_pound|pound|kip|"
+    r"pound_force_per_square_inch|kip_per_square_inch|force_ounce|ounce|short_ton|ton|"
+    r"force_ton|long_ton|mil)$")
+_US_PREFIX_OK = {"kiloforce_pound", "kilopound", "kilopound_force_per_square_inch",
+                 "megapound_force_per_square_inch"}
+
+
 def _odd_prefix(text: str, key: str, word: str, u) -> None:
     """A metric prefix no shop puts on a force or a mass reads as a slip, not a value: "mt"
     (shorthand for metric tons) is milli-tonnes to pint, "mkip" a thousandth of a kip. Refused,
@@ -364,6 +376,16 @@ def _odd_prefix(text: str, key: str, word: str, u) -> None:
             raise InputError(f"{text!r}: {word!r} is {name.replace('_', ' ')}, a unit no load on "
                              "a beam is written in, so it reads as a slip; write lbf, kip, N, "
                              "kN, kg or t", key)
+        m = _US_PREFIXED.match(name)
+        if m and name not in _US_PREFIX_OK:
+            us = {"force_pound": "pound-force", "pound_force_per_square_inch": "psi",
+                  "kip_per_square_inch": "ksi", "force_ounce": "ounce-force",
+                  "force_ton": "ton-force"}.get(m.group(2), m.group(2).replace("_", " "))
+            raise InputError(f"{text!r}: {word!r} reads as {m.group(1)}-{us} (the metric "
+                             f"prefix {m.group(1)!r} on a US unit, {us}), which no shop "
+                             "writes, so it reads as a slip of a letter; "
+                             "write the unit alone (lbf, kip, ft, in, psi, ksi; e.g. "
+                             "\"-4000 lbf/ft\", \"2 ft\")", key)
 
 
 _MIXED = re.compile(r"(?<![\d./])(\d+)[ -](\d+)/(\d+)(?![\d./])")

@@ -188,3 +188,88 @@ def test_a_hoist_weight_left_live_is_named_with_its_key_not_said_to_be_missing()
     assert any("loads[1] (hoist and trolley)" in m and 'case = "dead"' in m for m in got), got
     assert not any("no hoist or trolley weight is entered" in m for m in got)
     assert not capacity(job).rated
+
+
+# ------------------------------------------------------------------ a metric prefix on a US unit
+
+@pytest.mark.parametrize("typed, kind", [("-4000 dlbf/ft", "line_load"), ("2 mft", "length"),
+                                         ("-4 dakip", "force"), ("5 cpsi", "stress"),
+                                         ("3 uin", "length")])
+def test_a_metric_prefix_on_a_us_unit_is_refused_as_a_slipped_letter(typed, kind):
+    # pint reads "dlbf" as a tenth of a pound-force: -4000 dlbf/ft would be -400 lbf/ft
+    from shopbeam import units
+    from shopbeam.errors import InputError
+
+    with pytest.raises(InputError, match="metric prefix"):
+        units.parse(typed, kind, "loads[0].value")
+
+
+@pytest.mark.parametrize("typed, kind, want", [
+    ("-3 klbf", "force", -3000 * 4.4482216152605),      # a kip, as shops write it
+    ("-2 klb", "force", -2000 * 4.4482216152605),
+    ("50 kpsi", "stress", 50e3 * 6894.757293168361),     # ksi
+    ("1.6 Mpsi", "stress", 1.6e6 * 6894.757293168361),   # a modulus
+])
+def test_the_prefixes_shops_do_write_on_us_units_are_read(typed, kind, want):
+    from shopbeam import units
+
+    assert units.parse(typed, kind, "x") == pytest.approx(want, rel=1e-9)
+
+
+# ------------------------------------------------------------------ BTH-1 fatigue service class
+
+BTH = '''schema = 1
+title = "Lifting beam, W8x24, 10 ft"
+units = "us"
+tags = ["lifting", "no-axial"]
+[beam]
+length = "10 ft"
+section = "W8x24"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+brace = true
+[[supports]]
+at = "10 ft"
+type = "roller"
+brace = true
+[[loads]]
+type = "point"
+at = "5 ft"
+value = "-8000 lbf"
+label = "part"
+flange = "bottom"
+lug = true
+[criteria]
+lifting = "below-the-hook"
+category = "B"
+fatigue_category = "E"
+cycles = {cycles}
+'''
+
+
+@pytest.mark.parametrize("cycles, service_class, design_cycles", [
+    (1_000_000, 3, 2_000_000), (150_000, 2, 500_000), (50_000, 1, 100_000)])
+def test_a_below_the_hook_device_takes_its_service_class_range(cycles, service_class,
+                                                               design_cycles):
+    # ASME BTH-1 3-4.3 and Tables 3-2 / 3-4 (from memory): the class's allowable range is
+    # eq. A-3-1 at the class's upper bound of cycles (category E, C_f = 11 x 10^8, AISC
+    # 360-16 Table A-3.1, from memory): 22, 13 and 8 ksi for classes 1 to 3
+    from shopbeam.design.analysis import analyze
+
+    res = analyze(parse_job_text(BTH.format(cycles=cycles)))
+    fat = next(c for c in res.checks if c.name == "fatigue")
+    ksi = 6894757.293168361
+    assert fat.limit / ksi == pytest.approx((11e8 / design_cycles) ** 0.333, rel=1e-9)
+    assert f"service class {service_class}" in fat.clause
+    assert fat.limit / ksi < (11e8 / cycles) ** 0.333  # never A-3-1 at the count itself
+
+
+def test_a_below_the_hook_device_past_two_million_cycles_takes_the_threshold():
+    from shopbeam.design.analysis import analyze
+
+    res = analyze(parse_job_text(BTH.format(cycles=5_000_000)))
+    fat = next(c for c in res.checks if c.name == "fatigue")
+    assert fat.limit / 6894757.293168361 == pytest.approx(4.5, rel=1e-9)  # F_TH, category E
+    assert "service class 4" in fat.clause

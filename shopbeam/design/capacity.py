@@ -659,8 +659,7 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
         # (under 20,000 cycles no check is needed at all, AISC 360-16)
         return ("fatigue not checked: the stress range of a moving load over its travel is "
                 "not worked out here; have it checked, or remove fatigue_category and cycles",)
-    if fatigue.tip_loaded(job) and math.isfinite(
-            fatigue.allowable_range(job.criteria.fatigue_category, job.criteria.cycles)):
+    if fatigue.tip_loaded(job) and math.isfinite(fatigue.job_range(job)):
         return ("fatigue not checked: trolley wheels or a clamp bear on the bottom flange's "
                 "tips, and the local flange bending under them is a stress range of its own "
                 "at the flange, which is not worked out here (it can be larger than the "

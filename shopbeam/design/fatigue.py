@@ -31,12 +31,43 @@ KSI = 6.894757293168361e6  # Pa
 FEW_CYCLES = 20_000  # A-3.1: no fatigue check below this many cycles
 
 
+# ASME BTH-1 3-4.3 (from memory): a below-the-hook lifting device is designed for fatigue by
+# its service class, set by its load cycles in life (Table 3-2: class 0 up to 20,000, 1 to
+# 100,000, 2 to 500,000, 3 to 2,000,000, 4 over), and the allowable stress range of its class
+# (Table 3-4), which is eq. A-3-1 at the class's upper bound of cycles and the threshold F_TH
+# for class 4 (category E: 22, 13, 8 and 4.5 ksi): never more than A-3-1 at the count itself
+BTH_CLASSES = ((FEW_CYCLES, 0), (100_000, 1), (500_000, 2), (2_000_000, 3))
+
+
+def bth_class(job) -> tuple[int, float] | None:
+    """(service class, the cycles its allowable range is read at; inf for class 4) of a
+    below-the-hook device (`[criteria] lifting = "below-the-hook"`), or None for any other
+    job (AISC 360-16 Appendix 3 at the cycles given)."""
+    c = job.criteria
+    if getattr(c, "lifting", "") != "below-the-hook" or getattr(c, "cycles", None) is None:
+        return None
+    for top, n in BTH_CLASSES:
+        if c.cycles <= top:
+            return n, float(top)
+    return 4, math.inf
+
+
 def allowable_range(category: str, cycles: float) -> float:
-    """F_SR (Pa) of eq. A-3-1; inf below 20,000 cycles."""
+    """F_SR (Pa) of eq. A-3-1; inf below 20,000 cycles; the threshold F_TH at inf cycles."""
     if cycles < FEW_CYCLES:
         return math.inf
     cf, fth = CATEGORIES[category]
     return max((cf / cycles) ** 0.333, fth) * KSI
+
+
+def job_range(job) -> float:
+    """The allowable stress range (Pa) of the job's detail: ASME BTH-1's service class for a
+    below-the-hook device (`bth_class`), eq. A-3-1 at the cycles given otherwise."""
+    c = job.criteria
+    cls = bth_class(job)
+    if cls is None or cls[0] == 0:
+        return allowable_range(c.fatigue_category, c.cycles)
+    return allowable_range(c.fatigue_category, cls[1])
 
 
 def given(job) -> bool:
@@ -65,6 +96,15 @@ def checked(job) -> bool:
 def words(job, fsr: float) -> str:
     c = job.criteria
     n = f"{c.cycles:,.0f}"
+    cls = bth_class(job)
+    if cls is not None:
+        at = ("the threshold F_TH" if not math.isfinite(cls[1]) else
+              f"F_SR = (C_f / n)^0.333 at the class's {cls[1]:,.0f} cycles")
+        limit = ("no check in service class 0 (up to 20,000 cycles)" if not math.isfinite(fsr)
+                 else f"{at} = {units.fmt(fsr, 'stress', job.units)}")
+        return (f"ASME BTH-1 3-4.3, service class {cls[0]} for {n} cycles (Tables 3-2 and "
+                f"3-4, from memory; the ranges of AISC 360-16 eq. A-3-1, Table A-3.1): "
+                f"category {c.fatigue_category}: {limit}")
     limit = ("no check below 20,000 cycles" if not math.isfinite(fsr) else
              f"F_SR = (C_f / n)^0.333 >= F_TH = {units.fmt(fsr, 'stress', job.units)}")
     return (f"AISC 360-16 Appendix 3, eq. A-3-1 (Table A-3.1, from memory): category "
@@ -84,8 +124,7 @@ def fatigue_range(job, st, ss, k: float) -> tuple[float, float] | None:
         m = _largest_sum_of_abs([live] + [sp.moment for sp in ss.spans])
     sec = getattr(st, "section", None) or job.section
     s = min(sec.sx_top, sec.sx_bot)
-    c = job.criteria
-    return kk * m / s, allowable_range(c.fatigue_category, c.cycles)
+    return kk * m / s, job_range(job)
 
 
 def _largest_sum_of_abs(funcs) -> float:
@@ -142,8 +181,13 @@ def fatigue_check(job, st, ss, k: float) -> Check | None:
     fr, fsr = got
     if not math.isfinite(fsr):
         return None  # fewer than 20,000 cycles: no fatigue check is needed (A-3.1)
+    cls = bth_class(job)
     return Check("fatigue", fr, fsr, "Pa",
                  "live-load stress range (every live load on and off, with the impact "
                  "allowance; the largest along the member) against " + words(job, fsr),
-                 clause="AISC 360-16 Appendix 3, eq. A-3-1", source="AISC 360-16",
-                 params={"F_SR": fsr, "cycles": float(job.criteria.cycles)})
+                 clause=("AISC 360-16 Appendix 3, eq. A-3-1" if cls is None else
+                         f"ASME BTH-1 3-4.3, service class {cls[0]}"),
+                 source=("AISC 360-16" if cls is None else
+                         "ASME BTH-1 (from memory); AISC 360-16 Appendix 3"),
+                 params={"F_SR": fsr, "cycles": float(job.criteria.cycles),
+                         **({"service_class": float(cls[0])} if cls is not None else {})})

@@ -406,10 +406,12 @@ def _held_words(job) -> list[str]:
                           "a single hanger rod does not)."))
     if (job.lifting or getattr(job.criteria, "lifting", "")) and not fatigue.checked(job):
         # lifting.FATIGUE: not checked, and no bar to the rating only while the lifts are few
+        bth = getattr(job.criteria, "lifting", "") == "below-the-hook"
         out.append("RATED ONLY WHILE the member sees fewer than 20,000 lifts in its life (no "
-                   "fatigue check is needed below that, AISC 360-16 Appendix 3.1, from "
-                   "memory). A hoist in production use passes that within a few years: have "
-                   "its fatigue checked for its duty.")
+                   "fatigue check is needed below that, "
+                   + ("ASME BTH-1 service class 0, 3-4.3" if bth else "AISC 360-16 Appendix 3.1")
+                   + ", from memory). A hoist in production use passes that within a few "
+                   "years: have its fatigue checked for its duty.")
     tol = 1e-6 * job.length
     # a hoist given as a point load is rated travelling (capacity.travelling): its travel
     # and the flange ends it can reach are stated as a wheel set's are
@@ -648,9 +650,12 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         notes += _dead_couple_words(job)
         if fatigue.given(job):
             c = job.criteria
+            cls = fatigue.bth_class(job)
             notes.append(f"Fatigue checked at this rating: a category {c.fatigue_category} "
-                         f"detail, {c.cycles:,.0f} load cycles (AISC 360-16 Appendix 3; the "
-                         "largest live stress range along the member).")
+                         f"detail, {c.cycles:,.0f} load cycles ("
+                         + (f"ASME BTH-1 service class {cls[0]}; " if cls is not None else
+                            "AISC 360-16 Appendix 3; ")
+                         + "the largest live stress range along the member).")
         imp = impact_of(job)
         if imp:
             notes.insert(0, f"Includes a {imp * 100:.3g}% impact allowance on the live "
