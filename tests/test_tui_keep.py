@@ -1889,9 +1889,27 @@ async def test_ctrl_z_in_a_field_puts_back_the_text_a_key_replaced(tmp_path):
         assert s.doc.get("title") == "2" and f.input.value == "2"
         await burst(pilot, CTRL_Z)
         assert f.input.value == before and s.doc.get("title") == before
-        # nothing more to put back in the field: ctrl+z goes on to removed rows, as before
+        # a second ctrl+z brings back what was typed: nothing typed is lost to an undo
         await burst(pilot, CTRL_Z)
-        assert f.input.value == before
+        assert f.input.value == "2" and s.doc.get("title") == "2"
+        # and a third puts the field back again
+        await burst(pilot, CTRL_Z)
+        assert f.input.value == before and s.doc.get("title") == before
+
+
+@sync
+async def test_a_pasted_tab_is_a_space_and_the_end_of_the_paste_stays_in_sight(tmp_path):
+    from textual import events
+
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        s = app.job_screen.session
+        f = await focused(pilot, app, "job", "title")  # its text selected: the paste replaces it
+        f.input.post_message(events.Paste("Pasted\ttitle END"))
+        await settle(pilot)
+        assert f.input.value == "Pasted title END"
+        assert s.doc.get("title") == "Pasted title END"
 
 
 @sync

@@ -1169,8 +1169,11 @@ class JobScreen(Screen):
         comes back (a key typed after a Tab replaces the whole text); otherwise the last
         support or load removed comes back at its place (again: the one before it)."""
         focused = self.focused
-        if isinstance(focused, FieldInput) and focused.undo_typing():
-            self.notify(f"{focused.parent.label}: put back as it was", timeout=4)
+        done = focused.undo_typing() if isinstance(focused, FieldInput) else ""
+        if done:
+            self.notify(f"{focused.parent.label}: put back as it was when you came to it "
+                        "(ctrl+z again brings back what you typed)" if done == "undone" else
+                        f"{focused.parent.label}: what you typed is back", timeout=5)
             return
         self.flush_typing()
         kept = {t: self._kept_rows(t) for t in ("supports", "loads")}

@@ -35,8 +35,9 @@ KEYS = [
         ("ctrl+o", "library: open a job"),
         ("ctrl+n", "new job (asks first when there are unsaved changes)"),
         ("ctrl+t / ctrl+x", "supports and loads views: add one / remove the picked one"),
-        ("ctrl+z", "in a field: put back its text as it was when you came to it; "
-                   "elsewhere: put back the supports and loads removed, last first"),
+        ("ctrl+z", "in a field: put back its text as it was when you came to it (ctrl+z "
+                   "again brings back what you typed); elsewhere: put back the supports and "
+                   "loads removed, last first"),
         ("ctrl+l", "after a length change: move the supports and loads with it (asks how; "
                    "until then they stay where typed)"),
         ("ctrl+r / ctrl+p", "calc sheet and rating views: write it to a file / print it"),
@@ -57,7 +58,7 @@ KEYS = [
         ("ctrl+u / ctrl+k", "delete to the start / the end of the field"),
         ("copy, cut, paste", "with the terminal's own keys (often ctrl+shift+c / v) or the "
                              "mouse: here ctrl+x removes the picked support or load (ctrl+z "
-                             "puts it back) and ctrl+c quits; typing itself is not undone"),
+                             "puts it back) and ctrl+c quits"),
     ]),
     ("On a choice  [like] this", [
         ("left / right", "change it (space too)"),

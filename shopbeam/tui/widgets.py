@@ -137,6 +137,15 @@ class FieldInput(KeepFocusOnStaleHide, Input):
         event.prevent_default()
         if not event.text:
             return
+        text = event.text
+        if "\t" in text:
+            # a tab has no place in a field, and one is drawn as several cells while the
+            # field scrolls as if it were one (the last characters and the cursor then drawn
+            # off the edge): each pasted tab is a space, and a notice says so
+            text = text.replace("\t", " ")
+            self.app.notify("The pasted tab is a space here: a field holds no tabs.",
+                            timeout=6)
+        event = events.Paste(text)
         pasted = event.text.strip("\r\n")
         if getattr(self.parent, "key", "") in MULTI_LINE_KEYS:
             # the notes keep every line break of a paste, shown as its mark (saved as the
@@ -210,20 +219,29 @@ class FieldInput(KeepFocusOnStaleHide, Input):
 
     at_focus = None  # the text when the focus came: what ctrl+z puts back (`undo_typing`)
 
-    def undo_typing(self) -> bool:
+    undone = None  # the text ctrl+z took away, which a second ctrl+z brings back
+
+    def undo_typing(self) -> str:
         """ctrl+z in a field: its text as it was when the focus came (a Tab selects the
-        whole text, and a key typed next replaces it all). False where nothing changed."""
-        if self.at_focus is None or self.value == self.at_focus:
-            return False
-        self.value = self.at_focus
-        self.cursor_position = len(self.value)
-        return True
+        whole text, and a key typed next replaces it all): "undone"; a second ctrl+z with
+        nothing typed between brings back the text it took away: "redone" (nothing typed is
+        lost to an undo). "" where there is nothing to put back."""
+        if self.at_focus is not None and self.value != self.at_focus:
+            self.undone = self.value
+            self.value = self.at_focus
+            self.cursor_position = len(self.value)
+            return "undone"
+        if self.undone is not None and self.value == self.at_focus:
+            self.value, self.undone = self.undone, None
+            self.cursor_position = len(self.value)
+            return "redone"
+        return ""
 
     def focus_arrived(self) -> None:
         """The focus came here (called by the screen as it moves, not when the queued Focus
         event arrives): select the text now, so the next key of a fast burst replaces it
         exactly as it would if typed slowly."""
-        self.at_focus = self.value
+        self.at_focus, self.undone = self.value, None
         if self.select_all:
             self.selection = Selection(0, len(self.value))
             self._early_selects += 1
@@ -233,7 +251,7 @@ class FieldInput(KeepFocusOnStaleHide, Input):
         if self._early_selects > 0:  # selected already; keys may have been typed since
             self._early_selects -= 1
             return
-        self.at_focus = self.value
+        self.at_focus, self.undone = self.value, None
         if self.select_all and not event.from_app_focus:  # a click, or focus set in code
             self.selection = Selection(0, len(self.value))
 
