@@ -1601,7 +1601,9 @@ async def test_the_notes_keep_the_line_breaks_of_a_paste_and_take_one_from_ctrl_
         await burst(pilot, "\n" + "Last line.")  # ctrl+j, as a terminal sends it, then text
         await burst(pilot, TAB)
         # every line break of the paste is kept, its last one too, then the one ctrl+j typed
-        want = before + " Checked by RK.\nBolts 3/4 A325\tat each end.\nSee Q-114.\n\nLast line."
+        # (the pasted tab is a space, with a notice: a field draws a tab wide and scrolls as
+        # if it were one cell, hiding the end of the text and the cursor)
+        want = before + " Checked by RK.\nBolts 3/4 A325 at each end.\nSee Q-114.\n\nLast line."
         assert app.job_screen.session.doc.get("notes") == want
         await pilot.press("ctrl+s")
         await settle(pilot)
@@ -1986,3 +1988,65 @@ async def test_stacked_notices_never_cover_the_safety_caution(tmp_path, preset):
             on_row = {type(app.screen.get_widget_at(x, y)[0]).__name__
                       for x in range(SIZE[0])}
             assert "Toast" not in on_row, (y, on_row)
+
+
+@sync
+async def test_a_late_answer_is_said_late_not_shown_as_the_answer_to_the_edit(tmp_path,
+                                                                                monkeypatch):
+    # on a heavy job the answer to an edit comes seconds later: meanwhile the summary and
+    # the field typed in say they are being checked, instead of the old answer's words
+    import time as _time
+
+    from shopbeam.tui import app as tui_app
+    from shopbeam.tui.views import CHECKING_WORDS, STALE_WORDS
+
+    real = session_mod.evaluate_data
+
+    def slow(*args, **kw):
+        _time.sleep(2.5)
+        return real(*args, **kw)
+
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        monkeypatch.setattr(session_mod, "evaluate_data", slow)
+        f = await focused(pilot, app, "job", "title")
+        for event in events_of("Heavy"):  # typed, not waited out (`burst` settles)
+            pilot.app._driver.send_message(event)
+        await pilot.pause(tui_app.STALE_MARK + 0.6)
+        assert js.session.stale
+        assert js.stale_marked
+        assert STALE_WORDS in js.summary_text()
+        assert f._shown[0] == CHECKING_WORDS
+        await pilot.pause(2.5)
+        await settle(pilot)
+        assert not js.session.stale and not js.stale_marked
+        assert STALE_WORDS not in js.summary_text()
+        assert f._shown[0] != CHECKING_WORDS
+        assert f.input.value == "Heavy"
+
+
+@sync
+async def test_a_problem_elsewhere_leaves_the_hung_load_s_flange_as_the_checks_take_it(
+        tmp_path):
+    # a lifting job's point load with no flange written hangs from the bottom flange; while
+    # a typo elsewhere keeps the job from reading, the form must not flip to "top"
+    from shopbeam.tui.widgets import Choice
+
+    path = tmp_path / "jib-arm.toml"
+    shutil.copy(PRESETS / "jib-arm.toml", path)
+    assert "flange" not in path.read_text(encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        view = app.job_screen.query_one("#loads")
+        flange = next(c for c in view.query(Choice) if c.key == "load.flange")
+        wheels = next(c for c in view.query(Choice) if c.key == "load.wheels")
+        assert flange.value == "bottom" and wheels.display
+        f = await focused(pilot, app, "loads", "load.at")
+        await burst(pilot, "x")
+        assert app.job_screen.session.evaluation.job is None  # the job does not read
+        assert flange.value == "bottom" and wheels.display

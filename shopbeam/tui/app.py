@@ -33,7 +33,7 @@ from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
-                                WHEEL_WORDS, load_warnings, problems_text)
+                                STALE_WORDS, WHEEL_WORDS, load_warnings, problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
                                   from_one_line, one_line, shown_now, update_text)
 
@@ -56,6 +56,10 @@ INPUT_VIEWS = {v[0] for v in VIEWS[:6]}
 VIEW_KEYS = frozenset(v[1] for v in VIEWS)  # the keys that switch views with no field picked
 VIEW_FKEYS = [f"f{n}" for n in range(2, 13)]  # F2 .. F12: the views in bar order, from anywhere
 SOLVE_DEBOUNCE = 0.03  # seconds: keys typed closer together than this cost one solve
+# seconds: an answer still on its way this long after an edit (a heavy job) is said on screen:
+# the summary, the Results view and the fields typed in since then say they are being checked,
+# rather than show the answer for the job before the edit as if it were this one's
+STALE_MARK = 0.4
 
 SHAPE_DEFAULTS = {
     "rect-tube": {"depth": "4 in", "width": "2 in", "wall": "1/8 in"},
@@ -250,6 +254,8 @@ class JobScreen(Screen):
         if self.session.stale and ev.job is None and not ev.problems:
             return "Reading and solving the job ..."
         warn = load_warnings(self.session)[:1]
+        if self.stale_marked and self.session.stale:
+            warn = [STALE_WORDS] + warn
         note = self.length_note()
         if note:  # a length change not settled yet: first, it can move the answer a lot
             warn = [note] + warn
@@ -307,6 +313,17 @@ class JobScreen(Screen):
                 else 0.0
             self._asked_at = now
             self._solve(s, *s.snapshot(), wait=wait)
+            self.set_timer(STALE_MARK, self._mark_stale)
+
+    stale_marked = False  # the answer shown is for an earlier edit, and said so (STALE_MARK)
+
+    def _mark_stale(self) -> None:
+        """The answer to an edit has not come within STALE_MARK: say so on screen (the
+        answer shown is for the job before the edit)."""
+        if self.session.stale and not self.stale_marked \
+                and time.monotonic() - getattr(self, "_asked_at", 0.0) >= STALE_MARK * 0.9:
+            self.stale_marked = True
+            self.refresh_all()
 
     @work(thread=True, group="solve", exit_on_error=False)
     def _solve(self, session: Session, version: int, data: dict, text: str, name: str,
@@ -326,6 +343,7 @@ class JobScreen(Screen):
 
     def _solved(self, session: Session, version: int, ev) -> None:
         if session is self.session and session.install(version, ev):
+            self.stale_marked = self.stale_marked and session.stale
             self.refresh_all()
 
     # ------------------------------------------------------------------ navigation
@@ -423,6 +441,7 @@ class JobScreen(Screen):
         if self.edit_safely(f"the edit of {f.label}", self.apply_edit, f.key, event.value,
                             event.row):
             f.taken(event.value)
+            f.edited_version = self.session.version
 
     async def key_behind(self, event) -> None:
         """A key that reached a question before it could be read (see `AnswerScreen`): it

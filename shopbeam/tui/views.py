@@ -113,10 +113,18 @@ class View(VerticalScroll):
         pass
 
     def show_field_messages(self, ev, fields: dict[str, str], session=None) -> None:
-        """Put each field's problem (by job-file key) or how it was read beside it."""
+        """Put each field's problem (by job-file key) or how it was read beside it; a field
+        typed in since the answer shown was worked out, while that answer is said to be
+        late (`JobScreen.stale_marked`), says it is being checked instead."""
+        session = session or getattr(self.screen, "session", None)
+        late = bool(getattr(self.screen, "stale_marked", False) and session is not None
+                    and session.stale)
         for f in self.fields():
             key = fields.get(f.key)
             if key is None:
+                continue
+            if late and getattr(f, "edited_version", 0) > session.evaluated_version:
+                f.show(CHECKING_WORDS)
                 continue
             msg = in_words(ev.message_for(key, elements=True))
             if msg and not msg.startswith("warning: "):
@@ -701,8 +709,12 @@ class LoadsView(RowsView):
             elif c.key == "load.flange":
                 # no flange written: what the checks take (a lifting job's I-beam hangs its
                 # point loads from the bottom flange)
+                # (while the job does not read, a problem anywhere in it, the last answer's
+                # word stands: the form does not flip to top under a typo elsewhere)
                 job = session.evaluation.job
-                hung = f"loads[{i}]" in (getattr(job, "hung_default", ()) if job else ())
+                if job is not None:
+                    self._hung_default = tuple(getattr(job, "hung_default", ()))
+                hung = f"loads[{i}]" in getattr(self, "_hung_default", ())
                 bottom = row.get("flange") == "bottom" or ("flange" not in row and hung)
                 c.set("bottom" if bottom else "top")
                 c.display = kind == "point" or "flange" in row
@@ -1212,6 +1224,12 @@ def problems_text(ev) -> str:
     return "\n".join(lines)
 
 
+# said while the answer to an edit is late (a heavy job): the summary and the Results view,
+# and beside a field typed in since the answer shown was worked out
+STALE_WORDS = "Checking your last edit ... the figures shown are for the job before it."
+CHECKING_WORDS = "checking what was typed ..."
+
+
 class ResultsView(View):
     title = "Results"
 
@@ -1231,7 +1249,10 @@ class ResultsView(View):
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         q = lambda i: self.query_one(i, Static)  # noqa: E731
-        top = "\n".join(load_warnings(session) + ([problems_text(ev)] if ev.errors else []))
+        late = [STALE_WORDS] if getattr(self.screen, "stale_marked", False) \
+            and session.stale else []
+        top = "\n".join(late + load_warnings(session)
+                        + ([problems_text(ev)] if ev.errors else []))
         q("#res-problems").update(_text(top))
         q("#res-problems").display = bool(top)
         r = ev.result

@@ -382,6 +382,7 @@ class Field(Horizontal):
         self.set_value(value)
 
     _kept = None  # the text last typed here and written into the document
+    edited_version = 0  # the document's version this field's typing last made
     _moved = False  # the user asked to move what this field shows (ctrl+l): show it
 
     def will_move(self) -> None:
