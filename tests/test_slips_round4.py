@@ -273,3 +273,15 @@ def test_a_below_the_hook_device_past_two_million_cycles_takes_the_threshold():
     fat = next(c for c in res.checks if c.name == "fatigue")
     assert fat.limit / 6894757.293168361 == pytest.approx(4.5, rel=1e-9)  # F_TH, category E
     assert "service class 4" in fat.clause
+
+
+def test_a_lug_the_load_s_own_label_names_stands_on_a_monorail_profile():
+    # a fixed lifting point on a monorail: the label says the hoist hangs from a lug
+    text = preset("monorail-hoist-beam.toml")
+    slip = text.replace("wheels = 4", "lug = true", 1).replace(
+        'label = "rated load"', 'label = "rated load, hoist hung from a lug"', 1).replace(
+        'label = "hoist and trolley"', 'label = "chain hoist"', 1)
+    assert 'hung from a lug' in slip
+    job = parse_job_text(slip)
+    assert not warned(job, "loads[0].lug")
+    assert not any("lug = true" in r for r in capacity(job).not_rated)

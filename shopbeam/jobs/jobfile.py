@@ -1319,6 +1319,7 @@ LOAD_LIMITS = {"point": (1e9, "force"), "moment": (1e10, "moment"),
 
 # Words that say a load hangs from trolley wheels or a clamp on the flange tips (a monorail
 # hoist, a beam clamp), not from a lug plate under the web
+_LUG_WORDS = re.compile(r"\b(lugs?|pad[- ]?eyes?|lifting eyes?|eye plates?)\b", re.IGNORECASE)
 _FLANGE_TIP_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?|clamps?|"
                                r"push[- ]trolley|geared[- ]trolley)\b", re.IGNORECASE)
 
@@ -1337,21 +1338,23 @@ def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs) -> None:
         i = int(key[6:-1])
         ld = raw_loads[i]
         said = ""
-        if isinstance(profile, str) and "monorail" in profile:
+        at = ld.get("at")
+        # (the title or notes may name the rail the trolley runs on elsewhere: only the
+        # loads at this place speak for how it hangs)
+        texts = [(f"loads[{j}].label", o.get("label")) for j, o in enumerate(raw_loads)
+                 if _is_table(o) and (o is ld or o.get("at") == at)]
+        for where, text in texts:
+            m = _FLANGE_TIP_WORDS.search(_as_words(text)) if isinstance(text, str) else None
+            if m:
+                said = f"{where} says {m.group(0)!r}"
+                break
+        lug_said = any(isinstance(t, str) and _LUG_WORDS.search(_as_words(t)) for _, t in texts)
+        if said or lug_said:
+            pass  # the labels at this place say how it hangs: a clamp or trolley, or a lug
+        elif isinstance(profile, str) and "monorail" in profile:
             said = f"[criteria] lifting = {profile!r}"
         elif any(t in ("monorail", "trolley") for t in tags):
             said = "the tag " + next(t for t in tags if t in ("monorail", "trolley"))
-        else:
-            at = ld.get("at")
-            # (the title or notes may name the rail the trolley runs on elsewhere: only the
-            # loads at this place speak for how it hangs)
-            texts = [(f"loads[{j}].label", o.get("label")) for j, o in enumerate(raw_loads)
-                     if _is_table(o) and (o is ld or o.get("at") == at)]
-            for where, text in texts:
-                m = _FLANGE_TIP_WORDS.search(_as_words(text)) if isinstance(text, str) else None
-                if m:
-                    said = f"{where} says {m.group(0)!r}"
-                    break
         if said and rows:
             r.hold(f"lug = true says {key} hangs from a lug plate welded under the web, so "
                    f"the bottom flange is not checked under trolley wheels or clamp jaws, but "
