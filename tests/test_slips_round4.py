@@ -285,3 +285,95 @@ def test_a_lug_the_load_s_own_label_names_stands_on_a_monorail_profile():
     job = parse_job_text(slip)
     assert not warned(job, "loads[0].lug")
     assert not any("lug = true" in r for r in capacity(job).not_rated)
+
+
+# ------------------------------------------------------------------ own weight twice, mm places
+
+def test_the_members_own_weight_entered_again_is_warned():
+    text = preset("storage-platform-beam.toml")
+    extra = ('[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "14 ft"\n'
+             'value = "-18 lbf/ft"\nlabel = "beam self weight"\ncase = "dead"\n\n[criteria]')
+    job = parse_job_text(text.replace("[criteria]", extra, 1))
+    key = f"loads[{len(job.loads) - 1}].label"
+    assert any("already included" in m for m in warned(job, key))
+    import re
+
+    off = parse_job_text(re.sub(r"self_weight = true[^\n]*", "self_weight = false",
+                                text.replace("[criteria]", extra, 1), count=1))
+    assert not off.self_weight
+    assert not warned(off, key)
+
+
+SI_ARM = '''schema = 1
+title = "Parts bin arm"
+units = "si"
+tags = ["bracket"]
+[beam]
+length = "1 m"
+section = "HSS3x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 m"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "{at}"
+value = "-2 kN"
+label = "parts bin"
+'''
+
+
+@pytest.mark.parametrize("at, held", [("0.9 mm", True), (".5 mm", True), ("900 mm", False),
+                                      ("0.9 m", False)])
+def test_a_place_typed_as_a_fraction_of_a_millimetre_is_held(at, held):
+    # 0.9 mm from a fixed root would post a rating about 1000 x the arm's
+    job = parse_job_text(SI_ARM.format(at=at))
+    assert bool(warned(job, "loads[0].at")) == held
+    assert any("millimetre" in r for r in capacity(job).not_rated) == held
+
+
+# ------------------------------------------------------------------ twist at the supports
+
+def test_an_unbraced_w_beam_s_label_says_it_rests_on_its_supports_holding_it_against_twist():
+    from shopbeam.output.label import label_text, rating
+
+    text = preset("storage-platform-beam.toml")
+    job = parse_job_text(text)
+    assert not (job.braced or job.restrained)
+    words = " ".join(label_text(rating(capacity(job))).replace("|", " ").split())
+    assert "hold the member against twist" in words
+    braced = parse_job_text(text.replace("[beam]\n", "[beam]\nbraced = true\n", 1))
+    words = " ".join(label_text(rating(capacity(braced))).replace("|", " ").split())
+    assert "hold the member against twist" not in words
+
+
+# ------------------------------------------------------------------ fatigue of a wood trailer
+
+def test_a_wood_trailer_member_is_not_told_to_give_steel_stress_categories():
+    text = '''schema = 1
+title = "Utility trailer deck cross member, 4x6"
+units = "us"
+tags = ["trailer"]
+[beam]
+length = "6 ft"
+section = "4x6"
+material = "DF-L-2"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "pin"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "6 ft"
+value = "-200 lbf/ft"
+label = "cargo"
+[criteria]
+deflection = "L/240"
+impact = "50%"
+'''
+    got = [r for r in capacity(parse_job_text(text)).not_rated if "fatigue" in r]
+    assert got and "NDS" in got[0] and "fatigue_category = \"E\"" not in got[0]
+    assert "fatigue-checked" in got[0]

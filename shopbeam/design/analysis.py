@@ -475,7 +475,9 @@ def use_unchecked(job: Job) -> list[Unchecked]:
                 "ASME BTH-1 3-2.2 and 3-2.5; AISC 360-16 E3, H1-1"))
     road = getattr(job, "vehicle", "")
     parked = job.criteria.impact == 0 and not job.lifting  # loaded only while parked
-    if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job) and not parked:
+    kind = getattr(job.material, "kind", "")
+    if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job) and not parked \
+            and kind in ("steel", "stainless"):
         out.append(Unchecked(
             "fatigue under road loads",
             f"it reads like a member of a road vehicle or mobile machine ({road}): every bump "
@@ -486,6 +488,25 @@ def use_unchecked(job: Job) -> list[Unchecked]:
             "it checked; or add the tag \"fatigue-checked\" once it has been checked "
             "elsewhere, or \"not-vehicle\" if it is not on a vehicle",
             "AISC 360-16 Appendix 3"))
+    elif road and FATIGUE_CHECKED not in job.tags and not parked \
+            and kind not in ("steel", "stainless"):
+        # shopbeam's fatigue check is for steel (AISC 360-16 Appendix 3); a wood or aluminium
+        # member on a vehicle has its own rules, which are not applied here
+        rules = ("NDS 2018 has no fatigue rule: its bolted or nailed connections loosen and "
+                 "split under repeated loads (NDS 2018 chapters 11 and 12, from memory)"
+                 if kind == "lumber" else
+                 "aluminium has no endurance limit and its welds crack at low stress ranges "
+                 "(ADM 2015 Appendix 3, from memory)" if kind == "aluminum" else
+                 "shopbeam has no fatigue rule for this material")
+        out.append(Unchecked(
+            "fatigue under road loads",
+            f"it reads like a member of a road vehicle or mobile machine ({road}): every bump "
+            f"is a load cycle, and {rules}. Have its fatigue and connections checked for the "
+            "road duty and add the tag \"fatigue-checked\" once they have been, or "
+            "\"not-vehicle\" if it is not on a vehicle (the fatigue_category keys are for "
+            "steel details only)",
+            "ADM 2015 Appendix 3" if kind == "aluminum" else
+            "NDS 2018 chapters 11, 12" if kind == "lumber" else "fatigue"))
     return out
 
 

@@ -2153,6 +2153,53 @@ def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
                    "smaller than the largest load: most likely a unit slip. Fix its unit")
 
 
+# A load's label that names the member's own weight
+_OWN_WEIGHT_WORDS = re.compile(r"\b(self[ _-]?weight|own weight|beam(?:'s)? (?:self[ _-]?)?weight|"
+                               r"weight of (?:the )?(?:beam|member|joist|rail|arm))\b",
+                               re.IGNORECASE)
+
+
+_UNDER_MM = re.compile(r"^\s*(0?\.\d+|0)\s*mm\s*$", re.IGNORECASE)
+
+
+def _under_a_millimetre(r: _Reader, raw_loads, raw_supports) -> None:
+    """A place typed as a fraction of a millimetre ("0.9 mm"): no load or support is placed to
+    a tenth of a millimetre, and the number is most often the place in metres with mm typed
+    (0.9 m). Held: a load read 1000 x nearer its support posts a rating far too high."""
+    for table, rows in (("loads", raw_loads), ("supports", raw_supports)):
+        for i, row in enumerate(rows if isinstance(rows, list) else ()):
+            if not _is_table(row):
+                continue
+            for k in ("at", "start", "end"):
+                v = row.get(k)
+                m = _UNDER_MM.match(v) if isinstance(v, str) else None
+                if m and float(m.group(1)) > 0:
+                    key = f"{table}[{i}].{k}"
+                    r.hold(f"{k} = {v!r} is a fraction of a millimetre from the left end: no "
+                           f"{table[:-1]} is placed that finely, so the number is most likely "
+                           f"the place in metres with mm typed ({m.group(1)} m = "
+                           f"{float(m.group(1)) * 1000:g} mm). Write the place as meant "
+                           f"(\"{m.group(1)} m\" or \"{float(m.group(1)) * 1000:g} mm\")",
+                           key, f"{key} = {v!r}: a fraction of a millimetre, most likely "
+                           "metres typed as mm")
+
+
+def _own_weight_twice(r: _Reader, loads: list[Load], self_weight: bool) -> None:
+    """A dead load labelled as the member's own weight while self_weight = true (the default)
+    adds it in a second time: on the safe side, but it lowers the rating for nothing and
+    says the job was read otherwise than meant."""
+    if not self_weight:
+        return
+    for ld in loads:
+        if ld.case == "dead" and ld.kind in ("uniform", "linear") and ld.label \
+                and _OWN_WEIGHT_WORDS.search(_as_words(ld.label)):
+            r.warn(f"{ld.key} ({ld.label}) reads as the member's own weight, which is already "
+                   "included (beam.self_weight = true, the default): it is counted twice. "
+                   "Remove this load, or write self_weight = false under [beam] to give the "
+                   "weight yourself", f"{ld.key}.label")
+            return
+
+
 def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, material,
                       system: str, title="", notes="") -> None:
     """A floor's dead spread load (deck, joists, finishes) given as a total that spreads to less
@@ -5129,6 +5176,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
     _floor_dead_total(r, loads, raw_loads, tags, section, material, system, title, notes)
+    _own_weight_twice(r, loads, self_weight)
+    _under_a_millimetre(r, raw_loads, data.get("supports"))
     wood_service = _repetitive(r, raw_loads, wood_service, material, section, members, title,
                                notes)
     _family_mismatch(r, section, material, system)

@@ -388,6 +388,20 @@ def _held_words(job) -> list[str]:
                    + " from a lug plate welded under the web, not from a clamp or trolley on "
                    "the flange tips (lug = true; the lug, its welds and the rigging are not "
                    "checked here).")
+    if not job.lifting and not (job.restrained or job.braced) and job.section is not None \
+            and job.section.shape in ("i-beam", "channel") and job.section.axis == "strong" \
+            and getattr(job.material, "kind", "") in ("steel", "stainless", "aluminum"):
+        # the lateral-torsional buckling strength takes each support as holding the member
+        # against twist (design.basis.BRACE_BY_DEFAULT): a flange resting on a ledge or a
+        # seat with nothing on the web or the top flange does not
+        held = [pos(s.at) for s in job.supports
+                if s.brace is None and s.kind in ("pin", "roller")]
+        if held:
+            at = held[0] if len(held) == 1 else ", ".join(held[:-1]) + " and " + held[-1]
+            out.append(f"RATED ONLY WHILE the support{'s' if len(held) > 1 else ''} at {at} "
+                       f"hold{'s' if len(held) == 1 else ''} the member against twist (a web "
+                       "clip, stiffener or top-flange tie; a bottom flange resting on a ledge "
+                       "does not: write brace = false on such a support to check it so).")
     if job.lifting and not (job.restrained or job.braced):
         # a lifting job's supports are taken as holding it against twist unless brace says
         # otherwise (analysis.HANGER_BRACE): a single hanger rod does not
