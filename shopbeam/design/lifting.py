@@ -524,14 +524,22 @@ def _lifting_unchecked(job, sec) -> list:
                  and ld.case == "live"
                  and not (sec.shape == "rect-tube" and ld.key in hung)]  # K2.2 says it there
         if hooks:
-            part = "wall" if sec.shape in ("rect-tube", "round-tube", "pipe") else "flange"
+            wood = getattr(job.material, "kind", "") == "lumber"
+            part = ("wood (the bolt or lag hole's net section, crushing under the washer or "
+                    "plate, NDS 2018 3.1.2, 3.10, 12)" if wood else
+                    "wall" if sec.shape in ("rect-tube", "round-tube", "pipe") else "flange")
+            what = ("timber" if wood else {"rect-bar": "bar", "round-bar": "bar",
+                                           "rect-tube": "tube", "round-tube": "tube"}.get(
+                                               sec.shape, sec.shape))
             out.append(Unchecked(
                 "the member under the hook, clamp or trolley",
-                f"{', '.join(hooks)} hang from or bear on this {sec.shape} through a hook, lug, "
-                f"clamp or parked trolley; the {part} there is not checked under it (only an "
-                "I-beam's bottom flange is checked under a hung load), so no rating is posted: "
-                "hang the load from an I-beam, or have the attachment and the member at it "
-                "checked", "CMAA 74 local flange bending; AISC 360-16 J10, K2", blocks_rating=True))
+                f"{', '.join(hooks)} hang from or bear on this {what} through a hook, lug, "
+                f"eye bolt, clamp or parked trolley; the {part} there is not checked under it "
+                "(only a steel I-beam's bottom flange is checked under a hung load), so no "
+                "rating is posted: hang the load from an I-beam, or have the attachment and "
+                "the member at it checked",
+                "NDS 2018 3.1.2, 3.10, 12" if wood else
+                "CMAA 74 local flange bending; AISC 360-16 J10, K2", blocks_rating=True))
         if prof and prof.lateral and _static_hoist(job):
             return out + [Unchecked("lateral trolley force (weak-axis bending and torsion)",
                               f"{prof.lateral:.0%} of rated load + hoist + trolley at the hoist "
