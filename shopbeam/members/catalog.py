@@ -562,10 +562,12 @@ def _generated() -> list[tuple[str, str, object]]:
         des = f"UPN{n}"
         # the flange thickness of a UPN is given at half the flange width b/2 from the back
         # of the web; the calculator wants it at the middle of the projection (b + tw)/2
+        # (the toes are rounded with r2 = r1 / 2, EN 10365 / DIN 1026, from memory: left
+        # square, the section came out about 1 % stiffer and stronger than the tables)
         out.append(("UPN", des, lambda h=h, b=b, tw=tw, tf=tf, r=r, des=des: S.channel(
             h * MM, b * MM, (tf - UPN_SLOPE * tw / 2) * MM, tw * MM, r=r * MM,
-            slope=UPN_SLOPE, designation=des,
-            source=EN10365 + " (8 % flange slope; toe rounding left out)")))
+            slope=UPN_SLOPE, designation=des, r_toe=r / 2 * MM,
+            source=EN10365 + " (8 % flange slope; toes rounded r1 / 2)")))
     return out
 
 

@@ -567,9 +567,11 @@ def i_shape(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: 
     return turn(sec, "weak") if axis == "weak" else sec
 
 
-def channel_parts(d, bf, tf, tw, r, slope=0.0):
+def channel_parts(d, bf, tf, tw, r, slope=0.0, r_toe=0.0):
     """Channel with its web's back on z = 0 and toes toward +z, centred on y = 0; `slope`
-    is the inner flange slope (1/6 for American standard C), tf the mean thickness."""
+    is the inner flange slope (1/6 for American standard C), tf the mean thickness; `r_toe`
+    the radius that rounds each flange's inner toe corner (the material it takes away is
+    taken off, the corner taken as square)."""
     q = (bf - tw) / 2
     t_web, t_toe = tf + slope * q, tf - slope * q
     parts = []
@@ -577,6 +579,12 @@ def channel_parts(d, bf, tf, tw, r, slope=0.0):
         o = sy * d / 2
         parts.append(poly([(0, o), (0, o - sy * t_web), (tw, o - sy * t_web),
                            (bf, o - sy * t_toe), (bf, o)]))
+        r2 = min(r_toe, t_toe, bf - tw)
+        if r2 > 0:  # the toe's inner corner at (bf, o - sy t_toe), rounded
+            y0 = o - sy * t_toe
+            ya, yb = sorted((y0, y0 + sy * r2))
+            parts += [rect(bf - r2, bf, ya, yb, -1.0),
+                      Part("qdisk", bf - r2, y0 + sy * r2, r2, 0.0, 1.0, 1.0, -sy)]
     parts.append(rect(0, tw, -d / 2 + t_web, d / 2 - t_web))
     parts += fillet(tw, d / 2 - t_web, r, 1, -1) + fillet(tw, -d / 2 + t_web, r, 1, 1)
     return parts
@@ -584,13 +592,14 @@ def channel_parts(d, bf, tf, tw, r, slope=0.0):
 
 def channel(d: float, bf: float, tf: float, tw: float, *, r: float = 0.0, axis: str = "strong",
             toes: str = "down", slope: float = 0.0, designation: str = "", source: str = "",
-            mass: float | None = None) -> Section:
+            mass: float | None = None, r_toe: float = 0.0) -> Section:
     """Channel; `slope` is the inner flange slope of a tapered flange (1/6 for C shapes,
-    0.08 for UPN), tf then the mean flange thickness; r the root fillet radius."""
+    0.08 for UPN), tf then the mean flange thickness; r the root fillet radius, r_toe the
+    flange toes' rounding."""
     _check_pos(depth=d, flange_width=bf, flange_thickness=tf, web_thickness=tw)
     if 2 * tf >= d or tw >= bf:
         raise ValueError("flanges or web too thick for the depth / flange width")
-    parts = channel_parts(d, bf, tf, tw, r, slope)
+    parts = channel_parts(d, bf, tf, tw, r, slope, r_toe)
     ho = d - tf
     j = (2 * (bf - tw / 2) * tf**3 + ho * tw**3) / 3
     pz = axis_props(transpose(parts))
