@@ -377,3 +377,106 @@ impact = "50%"
     got = [r for r in capacity(parse_job_text(text)).not_rated if "fatigue" in r]
     assert got and "NDS" in got[0] and "fatigue_category = \"E\"" not in got[0]
     assert "fatigue-checked" in got[0]
+
+
+# ------------------------------------------------------------------ metric unit slips
+
+SI_SHELF = '''schema = 1
+title = "Parts shelf, RHS front rail, area load"
+units = "si"
+tags = ["shelf", "not-rack"]
+[beam]
+length = "2400 mm"
+section = "RHS100x50x4"
+material = "S355"
+[[supports]]
+at = "0 mm"
+type = "pin"
+[[supports]]
+at = "2400 mm"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-5 kPa"
+width = "{width}"
+label = "stock"
+'''
+
+
+@pytest.mark.parametrize("width, held", [("0.6 mm", True), ("600 mm", False), ("0.6 m", False)])
+def test_a_tributary_width_of_a_fraction_of_a_millimetre_is_held(width, held):
+    # 0.6 mm for 0.6 m posts an area load 1000 x too high (12,200 kPa on a parts shelf)
+    job = parse_job_text(SI_SHELF.format(width=width))
+    got = warned(job, "loads[0].width")
+    assert bool(got) == held
+    if held:
+        assert '"0.6 mm" for "0.6 m"' in got[0] and "lbf" not in got[0]
+    assert any("width" in r for r in capacity(job).not_rated) == held
+
+
+SI_HOIST = '''schema = 1
+title = "Monorail hoist beam, IPE"
+units = "si"
+tags = ["lifting"]
+[beam]
+length = "4 m"
+section = "IPE200"
+material = "S235"
+[[supports]]
+at = "0 m"
+type = "pin"
+[[supports]]
+at = "4 m"
+type = "roller"
+[[loads]]
+type = "point"
+at = "2 m"
+value = "-500 kg"
+label = "hook load"
+[[loads]]
+type = "point"
+at = "2 m"
+value = "{hoist}"
+case = "dead"
+label = "hoist and trolley"
+[criteria]
+lifting = "hand-geared-monorail"
+'''
+
+
+@pytest.mark.parametrize("hoist, held", [("-25 N", True), ("-25 kg", False)])
+def test_a_hoist_weight_in_n_beside_a_hook_load_in_kg_is_held(hoist, held):
+    job = parse_job_text(SI_HOIST.format(hoist=hoist))
+    assert bool(warned(job, "loads[1].value")) == held
+    assert any("in N" in r for r in capacity(job).not_rated) == held
+
+
+def test_a_dead_load_in_kg_per_m_beside_live_loads_in_kn_is_said():
+    text = '''schema = 1
+title = "Storage platform beam, HEB"
+units = "si"
+tags = ["not-floor", "not-rack"]
+[beam]
+length = "6 m"
+section = "HEB200"
+material = "S355"
+braced = true
+[[supports]]
+at = "0 m"
+type = "pin"
+[[supports]]
+at = "6 m"
+type = "roller"
+[[loads]]
+type = "uniform"
+total = "-60 kN"
+label = "stored machines"
+[[loads]]
+type = "uniform"
+value = "{dead}"
+case = "dead"
+label = "grating"
+'''
+    got = warned(parse_job_text(text.format(dead="-3 kg/m")), "loads[1].value")
+    assert got and "kN" in got[0] and "102" in got[0]
+    assert not warned(parse_job_text(text.format(dead="-3 kN/m")), "loads[1].value")

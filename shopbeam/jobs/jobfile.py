@@ -2733,10 +2733,11 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
     the other system's units is left alone: the label posts it in the job's units, and N
     typed for lbf only makes the entered load larger, on the safe side.)"""
     live_max = max((abs(x.total_force) for x in loads if x.case == "live"), default=0.0)
-    kn_live = any(_KILONEWTON.search(v) for x in raw_loads if _is_table(x)
-                  and x.get("case", "live") == "live"
+    live_texts = [v for x in raw_loads if _is_table(x) and x.get("case", "live") == "live"
                   for v in ([x.get("value")] if not isinstance(x.get("value"), list)
-                            else x.get("value")) + [x.get("total")] if isinstance(v, str))
+                            else x.get("value")) + [x.get("total")] if isinstance(v, str)]
+    kn_live = any(_KILONEWTON_OR_KG.search(v) for v in live_texts)
+    kn_only = any(_KILONEWTON.search(v) for v in live_texts)
     for ld in loads:
         i = _load_index(ld.key)
         raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
@@ -2771,6 +2772,18 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
                    "it. Write it in kg (kg/m) or kN, as meant", f"{ld.key}.value",
                    f"{name} is a dead load in N beside live loads in kN: write it in kg or "
                    "kN, as meant")
+            continue
+        if system == "si" and ld.case == "dead" and ld.kind != "moment" and kn_only and \
+                any(_PLAIN_KG.search(v) for v in texts) and \
+                0 < abs(ld.total_force) < live_max / 50:
+            # "-3 kg/m" for a grating of 3 kN/m beside live loads in kN: 102 times too light;
+            # a light fixture in kg beside a shelf's load in kN is real, so it is said only
+            said = ", ".join(f'"{v}"' for v in texts)
+            r.warn(f"{name} is a dead load typed in kg ({said}) beside live loads in kN, and "
+                   "under a fiftieth of the largest: if kN (kN/m) was meant, it is 102 times "
+                   "too light, and the rating holds the dead load fixed, so a light one posts "
+                   "a higher live load. Check its unit (a kilonewton is about 102 kg)",
+                   f"{ld.key}.value")
             continue
         us = [v for v in texts if _US_FORCE.search(v)]
         if system == "si" and us and ld.case == "dead" and ld.kind != "moment":
@@ -2812,6 +2825,9 @@ _US_FORCE = re.compile(r"\d\s*(?:lbf?s?|pounds?|kips?|k|#|plf|klf|pli|psf|ksf)\b
                        r"|\d\s*(?:lbf?|kips?)\s*/", re.IGNORECASE)
 _PLAIN_NEWTON = re.compile(r"\d\s*N(?:\s*/\s*m)?\s*$")  # "40 N", "80 N/m", not kN
 _KILONEWTON = re.compile(r"\d\s*kN\b")
+# a live load typed in kN or, on a lifting job, its hook load in kg or tonnes
+_KILONEWTON_OR_KG = re.compile(r"\d\s*(?:kN|kg|t|tonnes?)\b")
+_PLAIN_KG = re.compile(r"\d\s*kg(?:\s*/\s*m)?\s*$")  # "25 kg", "3 kg/m", not kN
 
 
 # A length or force unit of the other system than the job's (metric among feet and lbf, or
@@ -3579,6 +3595,9 @@ def _length_against_words(r: _Reader, raw, length, title, notes, system: str) ->
            "beam.length")
 
 
+TINY_WIDTH = 0.0127  # m: half an inch, under any tributary width (common practice, no source)
+
+
 def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title="",
                    notes="") -> None:
     """An area load's tributary width typed in inches (or mm) on a member whose length is in
@@ -3586,9 +3605,11 @@ def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title
     slipped ("6 in" for "6 ft" put a platform beam's posted area load 12 times too high).
     Held, unless the words give the same spacing (bar grating's bearing bars at 1-3/16 in
     centres); a load per length says the same without a width."""
-    if length is None or not isinstance(raw_length, str) or not isinstance(raw_loads, list) \
-            or not re.search(r"ft|feet|foot|'|\d\s*m\b", raw_length, re.IGNORECASE):
+    if length is None or not isinstance(raw_length, str) or not isinstance(raw_loads, list):
         return
+    # (a width under half an inch, 12.7 mm, is nobody's tributary width, whatever the unit of
+    # the member's length: "0.6 mm" for 0.6 m on a member typed in mm)
+    big_unit = re.search(r"ft|feet|foot|'|\d\s*m\b", raw_length, re.IGNORECASE)
     said = [x * 0.0254 for x in _spacings_said(title, notes)]
     for i, ld in enumerate(raw_loads):
         key = f"loads[{i}]"
@@ -3600,13 +3621,17 @@ def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title
         if any(abs(x - w) <= 1e-3 * w for x in said):
             continue  # the spacing the words give
         foot = "300 mm" if system == "si" else "a foot"
-        if w < min(0.305, length / 20):
+        if w < TINY_WIDTH or big_unit and w < min(0.305, length / 20):
             r.hold(f"width = {raw!r} is the tributary width of an area load on a member "
                    f"{units.fmt(length, 'length', system)} long, under {foot} and under 1/20 "
-                   "of it: most likely the unit slipped (\"6 in\" for \"6 ft\"), which "
-                   "multiplies the posted area load, so no rating is posted. Check the unit; "
-                   "if the width is right, say the spacing in the title (\"bars at 1-3/16 in "
-                   "centres\") or give the load per length instead (lbf/ft, kN/m)",
+                   "of it: most likely the unit slipped ("
+                   + ('"0.6 mm" for "0.6 m"' if system == "si" else '"6 in" for "6 ft"')
+                   + "), which multiplies the posted area load, so no rating is posted. Check "
+                   "the unit; if the width is right, say the spacing in the title ("
+                   + ('"bars at 30 mm centres"' if system == "si" else
+                      '"bars at 1-3/16 in centres"')
+                   + ") or give the load per length instead ("
+                   + ("kN/m" if system == "si" else "lbf/ft") + ")",
                    f"{key}.width",
                    f"{key}.width = {raw!r} is under {foot} on a member "
                    f"{units.fmt(length, 'length', system)} long: check the unit, say the "
