@@ -911,8 +911,8 @@ spacing = ["2 ft", "2 ft"]
 
 
 def test_a_typed_in_tube_s_member_line_says_its_units():
-    # "rect-tube 3.937 x 1.9685 x 3 mm": the sizes converted to inches with no unit beside
-    # a wall still in millimetres
+    # "rect-tube 3.937 x 1.9685 x 3 mm" had the sizes converted to inches with no unit
+    # beside a wall still in millimetres: a section typed in millimetres is named in them
     from shopbeam.jobs.jobfile import parse_job_text
 
     text = ('schema = 1\ntitle = "Storage shelf beam"\ntags = ["shelf"]\n[beam]\n'
@@ -921,7 +921,7 @@ def test_a_typed_in_tube_s_member_line_says_its_units():
             'at = "0 ft"\ntype = "pin"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n'
             '[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n')
     r = label.rating(capacity(parse_job_text(text)))
-    assert "rect-tube 3.937 x 1.9685 in x 3 mm" in r.member
+    assert "rect-tube 100 x 50 x 3 mm" in r.member
 
 
 def test_a_lifting_label_is_rated_only_while_the_lifts_are_few_where_fatigue_is_not_checked():

@@ -8,6 +8,7 @@ The shape calculators and the shapes' key lists are `sections.py`; the catalog i
 from __future__ import annotations
 
 import math
+import re
 from dataclasses import replace
 from typing import Mapping
 
@@ -100,6 +101,8 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
         raise InputError(f"{exc}", key) from None
     if name:
         sec = replace(sec, designation=name)
+    elif _metric_designation(shape, spec):
+        sec = replace(sec, designation=_metric_designation(shape, spec))
     return _orient(sec, ax, spec, key)
 
 
@@ -145,6 +148,21 @@ def _catalog_table(spec, key, axis, material) -> Section:
             raise InputError("name must be text", f"{key}.name")
         sec = replace(sec, designation=name)
     return sec
+
+
+_METRIC_DIM = re.compile(r"^\s*([\d.]+)\s*(mm|cm|m)\s*$")
+
+
+def _metric_designation(shape: str, spec) -> str:
+    """A section typed in by its sizes in millimetres (cm, m) is named in them, as typed
+    ("rect-tube 100 x 50 x 4 mm"), not in inches: "" where the sizes were not all typed in
+    one metric unit (the sections module names it in inches then)."""
+    keys = _REQUIRED.get(shape, ())
+    got = [_METRIC_DIM.match(spec.get(k)) if isinstance(spec.get(k), str) else None
+           for k in keys]
+    if not keys or not all(got) or len({m.group(2) for m in got}) != 1:
+        return ""
+    return f"{shape} " + " x ".join(m.group(1) for m in got) + f" {got[0].group(2)}"
 
 
 def _orient(sec: Section, ax: str, spec, key) -> Section:
