@@ -676,14 +676,16 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
             "largest along the member, with the impact allowance)",)
 
 
-def _fails_alone(e, why: str = "") -> str:
+def _fails_alone(e, why: str = "", system: str = "us") -> str:
     """Why nothing can be posted when the fixed loads alone fail: the check that fails, and
     the unit slips that usually cause it on a member a shop would not otherwise question."""
     worst = max(e.checks, key=lambda c: c.ratio)
+    slips = ("a length in m with the positions in mm, a deflection limit in m for mm, a dead "
+             "load in kN for N (kN/m for N/m)" if system == "si" else
+             "a length in feet with the positions in inches, a deflection limit in mm, a dead "
+             "load in kip for lbf")
     return (f"the member fails under its own weight and the dead loads alone{why} ({worst.name}, "
-            f"ratio {worst.ratio:.3g}); if that is not expected, check the units: a length in "
-            "feet with the positions in inches, a deflection limit in mm, a dead load in kip "
-            "for lbf")
+            f"ratio {worst.ratio:.3g}); if that is not expected, check the units: {slips}")
 
 
 def _at(k: float) -> str:
@@ -849,14 +851,15 @@ def _capacity(job, section, ss, st, fast: bool = True) -> CapacityResult:
         e = ev(1.0)
         if max(c.ratio for c in e.checks) > 1:  # nothing to scale, and it fails as it is
             return CapacityResult(job, 0.0, e, "fixed loads fail alone",
-                                  _fails_alone(e, " (the job has no live loads)"))
+                                  _fails_alone(e, " (the job has no live loads)", job.units))
         return CapacityResult(job, math.inf, e, "no live loads",
                               "the job has no live loads to scale: enter the load to rate "
                               "as a live load")
     g0 = g(0.0)
     if g0 > 1:
         e0 = ev(0.0)
-        return CapacityResult(job, 0.0, e0, "fixed loads fail alone", _fails_alone(e0))
+        return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
+                              _fails_alone(e0, "", job.units))
     if _fixed_is_zero(ss):
         g1 = g(1.0)
         if g1 <= NO_DEMAND:

@@ -194,7 +194,8 @@ def wheel_check(job, sol, sec, mat, global_allow=None, only_given: bool = False)
         contacts += [(ld, ws.wheels_per_axle, a_w,
                       f"wheel load P = axle / {ws.wheels_per_axle}; wheel "
                       + ("given" if ws.wheel_edge is not None else
-                         "default 1/4 in: give [[moving]] wheel_edge for the real trolley"))
+                         f"default {'6.35 mm' if job.units == 'si' else '1/4 in'}: give "
+                         "[[moving]] wheel_edge for the real trolley"))
                      for ld in sol.beam.loads
                      if (ld.key or "") == ws.key and ld.kind == "point"]
     hung = set(getattr(job, "hung", ()) or ())

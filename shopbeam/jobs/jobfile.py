@@ -2813,8 +2813,10 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
             limit = units.fmt(TINY_DEAD_LINE, "line_load", system)
         if tiny:
             r.hold(f"{name} is a dead load of under {limit}, too light to be the weight of a "
-                   "hoist, a deck or a fixture: a unit slip is likely (\"-0.08 lbf\" for "
-                   "\"-0.08 kip\"), and the rating holds the dead load fixed, so a light one "
+                   "hoist, a deck or a fixture: a unit slip is likely ("
+                   + ('"-0.08 N" for "-0.08 kN"' if system == "si" else
+                      '"-0.08 lbf" for "-0.08 kip"')
+                   + "), and the rating holds the dead load fixed, so a light one "
                    "posts a higher live load; no rating is posted on it. Check the unit, or "
                    "leave the load out if it really is this light", f"{ld.key}.value",
                    f"{name} is a dead load under {limit}: check its unit, or leave it out "
@@ -4105,9 +4107,14 @@ def _aluminium_fixed_end(r: _Reader, beam: dict, material, supports, system: str
            f"the weld's heat-affected zone (yield {weak} against {strong} unwelded, ADM 2015, "
            "from memory) at the largest moment. Write [beam] welded = true to check it at the "
            "welded strength, or welded = false if the end is bolted, clamped or socketed with "
-           "no weld within 1 in of it", "beam",
+           f"no weld within {_inch_words(system)} of it", "beam",
            f"an aluminium member with a fixed end ({keys}) gives no welded key, and a welded "
            "end is weaker where the moment is largest. Write welded = true or false")
+
+
+def _inch_words(system: str) -> str:
+    """The reach of a weld's heat-affected zone in the job's units (ADM 2015: 1 in)."""
+    return "25 mm" if system == "si" else "1 in"
 
 
 _WELD_WORDS = re.compile(
@@ -4141,7 +4148,7 @@ def _aluminium_weld_words(r: _Reader, beam: dict, material, title, notes, tags, 
                    "temper's yield (6061-T6 Fty 35 ksi, welded Ftyw 15 ksi: ADM 2015 Table "
                    "A.3.3/A.3.4, from memory), and the checks used the unwelded fy. Give "
                    "fy_welded under [beam.material] and welded = true, or write welded = false "
-                   "if no weld is within 1 in of the highly stressed parts",
+                   f"if no weld is within {_inch_words(system)} of the highly stressed parts",
                    "beam.material", f"the words say welded ({where}) on a typed-in aluminium "
                    "with no fy_welded: give fy_welded and welded = true, or welded = false")
         return
@@ -4152,11 +4159,13 @@ def _aluminium_weld_words(r: _Reader, beam: dict, material, title, notes, tags, 
                f"an aluminium member anneals it nearby (yield {weak} against {strong} "
                "unwelded, ADM 2015 Table A.3.3/A.3.4, from memory), and the checks used the "
                "unwelded strength. Write welded = true to check it at the welded strength, "
-               "or welded = false if no weld is within 1 in of the highly stressed parts",
+               f"or welded = false if no weld is within {_inch_words(system)} of the highly "
+               "stressed parts",
                "beam", f"the words say welded ({where}) on an aluminium member with no welded "
                "key: write welded = true or false")
     elif beam.get("welded") is False:
-        r.warn(f"welded = false, but the job's words say welded ({where}): a weld within 1 in "
+        r.warn(f"welded = false, but the job's words say welded ({where}): a weld within "
+               f"{_inch_words(system)} "
                f"of the highly stressed parts weakens aluminium to {weak} yield (ADM 2015, from "
                "memory); keep welded = false only if every weld is away from them", "beam.welded")
 
