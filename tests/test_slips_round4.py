@@ -480,3 +480,138 @@ label = "grating"
     got = warned(parse_job_text(text.format(dead="-3 kg/m")), "loads[1].value")
     assert got and "kN" in got[0] and "102" in got[0]
     assert not warned(parse_job_text(text.format(dead="-3 kN/m")), "loads[1].value")
+
+
+# ------------------------------------------------------------------ the rules' edges, again
+
+ARM = '''schema = 1
+title = "{title}"
+notes = "{notes}"
+units = "us"
+tags = ["bracket", "awning"]
+[beam]
+length = "6 ft"
+section = "HSS3x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "pin"
+label = "wall plate"
+[[supports]]
+at = "6 ft"
+type = "roller"
+label = "{label}"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "6 ft"
+value = "-180 lbf/ft"
+label = "snow"
+'''
+
+
+@pytest.mark.parametrize("title, notes, label, held", [
+    ("Awning beam", "", "outer end: wire rope to the wall above", True),
+    ("Awning beam", "", "stay cable with turnbuckle", True),
+    ("Awning beam", "", "30 deg brace down to the wall", True),
+    ("Awning beam", "", "wall plate, tie-back rod", True),
+    ("Tie-rod awning bracket", "", "outer end", True),
+    ("Awning arm w/ tie rod", "", "outer end", True),
+    ("Awning arm (tie rod)", "", "outer end", True),
+    ("Canopy bracket", "Outer end carried by a hanger rod sloped back up to the wall.",
+     "outer end", True),
+    ("Rack arm loaded with 20 ft tie rod bundles", "", "outer end", False),
+    ("Bar arm", "Arms are stocked with tie-bar and threaded rod from the supplier.",
+     "outer end", False),
+    ("Stair stringer", "", "bottom: kicker plate anchored to the slab", False),
+])
+def test_the_ways_a_shop_names_a_tie_or_brace_are_read_and_what_it_stores_is_not(
+        title, notes, label, held):
+    job = parse_job_text(ARM.format(title=title, notes=notes, label=label))
+    assert any("axial force" in r for r in capacity(job).not_rated) == held, title
+
+
+def test_a_lug_on_a_jib_boom_is_held_and_a_trolley_named_at_the_same_place_in_other_units():
+    text = preset("jib-arm.toml")
+    assert "lug" not in text and "flange" not in text
+    i = text.index('label = "rated load"')
+    slip = text[:i] + 'lug = true\n' + text[i:]
+    job = parse_job_text(slip)
+    assert warned(job, "loads[0].lug")
+    assert not capacity(job).rated
+
+
+def test_a_below_the_hook_beam_s_lug_stands_beside_a_plate_clamp_hung_below_it():
+    text = BTH.replace('label = "part"', 'label = "plate clamp"').format(cycles=10_000)
+    job = parse_job_text(text)
+    assert not warned(job, "loads[0].lug")
+
+
+@pytest.mark.parametrize("title, held", [
+    ("Spreader bar, 2 ton", True), ("Hoist beam over the lathe", True),
+    ("Davit arm for the chain fall", True), ("Monorail for the chain hoist", True),
+    ("Rack for lifting devices: slings, shackles, spreader bars", False),
+    ("Tool shelf on the jib crane column", False),
+    ("Crane boom rest (cradle beam) in the yard", False),
+])
+def test_not_lifting_against_a_title_that_names_a_lifting_device(title, held):
+    import re
+
+    text = re.sub(r'title = "[^"]*"', f'title = "{title}"', preset("workbench-top.toml"),
+                  count=1)
+    text = re.sub(r"tags = \[[^\]]*\]", 'tags = ["not-lifting"]', text, count=1)
+    job = parse_job_text(text)
+    assert any("not-lifting" in r for r in capacity(job).not_rated) == held, title
+
+
+@pytest.mark.parametrize("label, held", [("deck", True), ("subfloor and finishes", True),
+                                         ("handrail, 150 lb in all", False),
+                                         ("conduit and light strip", False)])
+def test_a_floor_s_small_dead_total_is_held_only_where_it_names_the_deck(label, held):
+    text = preset("storage-platform-beam.toml")
+    extra = ('[[loads]]\ntype = "uniform"\nstart = "0 ft"\nend = "14 ft"\n'
+             f'total = "-24 lbf"\nlabel = "{label}"\ncase = "dead"\n\n[criteria]')
+    job = parse_job_text(text.replace("[criteria]", extra, 1))
+    assert any("total" in r for r in capacity(job).not_rated) == held, label
+
+
+def test_a_cover_plated_section_on_the_first_yield_basis_is_not_rated():
+    text = '''schema = 1
+title = "Plated beam"
+units = "us"
+tags = ["not-floor"]
+[beam]
+length = "10 ft"
+braced = true
+[beam.material]
+kind = "custom"
+e = "29000 ksi"
+fy = "50 ksi"
+density = "490 lb/ft^3"
+[beam.section]
+shape = "cover-plated"
+base = "W8x18"
+plate_width = "12 in"
+plate_thickness = "1/8 in"
+plate = "top"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "10 ft"
+value = "-500 lbf/ft"
+'''
+    res = capacity(parse_job_text(text))
+    assert not res.rated and any("cover-plated" in r for r in res.not_rated)
+
+
+def test_exactly_twenty_thousand_cycles_on_a_below_the_hook_device_is_class_0_unchecked():
+    from shopbeam.design.analysis import analyze
+
+    res = analyze(parse_job_text(BTH.format(cycles=20_000)))
+    assert not [c for c in res.checks if c.name == "fatigue"]

@@ -655,7 +655,7 @@ def _fatigue(job, st, ss, k: float) -> tuple[str, ...]:
         return ("fatigue not checked: the stress categories of AISC 360-16 Appendix 3 are "
                 "for steel, and this member is not steel; have it checked by its own "
                 "material's fatigue rules, or remove fatigue_category and cycles",)
-    if ss.parts.moving and job.criteria.cycles >= fatigue.FEW_CYCLES:
+    if ss.parts.moving and math.isfinite(fatigue.job_range(job)):
         # (under 20,000 cycles no check is needed at all, AISC 360-16)
         return ("fatigue not checked: the stress range of a moving load over its travel is "
                 "not worked out here; have it checked, or remove fatigue_category and cycles",)

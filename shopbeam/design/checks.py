@@ -296,6 +296,15 @@ def flexure(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
                               "cannot be told; give the section by its shape and sizes "
                               "([beam.section] shape = \"rect-tube\", ...) or have it "
                               "checked", "AISC 360-16 B4, chapter F", blocks_rating=True),)
+        elif sec.shape in ("cover-plated", "double-channel"):
+            # no chapter F rule for the built-up section (as on the AISC basis): a thin cover
+            # plate in compression buckles before first yield, which is then no bound
+            unc += (Unchecked("local buckling", f"the first-yield basis does not check thin "
+                              f"plates or flanges for local buckling, and shopbeam has no "
+                              f"rule for a {sec.shape} section's (a thin cover plate in "
+                              "compression buckles before first yield), so no rating rests "
+                              "on first yield; have it checked", "AISC 360-16 B4, chapter F",
+                              blocks_rating=True),)
         elif sec.shape not in ("round-bar", "rect-bar"):
             slender = _slender_wall(sec, mat) or _flange_or_web_below_yield(sec, mat)
             unc += (Unchecked("local buckling", "the first-yield basis does not check thin "

@@ -65,8 +65,10 @@ def job_range(job) -> float:
     below-the-hook device (`bth_class`), eq. A-3-1 at the cycles given otherwise."""
     c = job.criteria
     cls = bth_class(job)
-    if cls is None or cls[0] == 0:
+    if cls is None:
         return allowable_range(c.fatigue_category, c.cycles)
+    if cls[0] == 0:
+        return math.inf  # service class 0 (up to 20,000 cycles): no fatigue check
     return allowable_range(c.fatigue_category, cls[1])
 
 
@@ -87,8 +89,8 @@ def checked(job) -> bool:
     """Whether the job's fatigue is settled here: `fatigue_check` works the range out (the
     keys given, a steel member, no moving load, nothing on the flange tips), or the keys
     give fewer than 20,000 cycles, which need no check (AISC 360-16 A-3.1)."""
-    if given(job) and job.criteria.cycles < FEW_CYCLES:
-        return True  # A-3.1: no fatigue check is needed below 20,000 cycles: settled
+    if given(job) and not math.isfinite(job_range(job)):
+        return True  # A-3.1 (BTH-1 service class 0): too few cycles to need a check: settled
     return (given(job) and getattr(job.material, "kind", "") in ("steel", "stainless")
             and not job.moving and not tip_loaded(job))
 

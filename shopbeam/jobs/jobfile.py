@@ -1091,6 +1091,7 @@ def _read_braces_flange(r: _Reader, beam: dict, braces) -> str | None:
     return got
 
 
+_NUMBER_WORDS = {8: "eight", 12: "twelve", 16: "sixteen"}
 # A trolley's wheels counted in all in the job's words ("four-wheel trolley", "4 wheels")
 _WHEELS_IN_ALL = re.compile(r"\b(?:four|4)[- ]?wheel(?:s|ed)?\b", re.IGNORECASE)
 
@@ -1108,6 +1109,12 @@ def _four_per_axle(r: _Reader, raw, moving, title="", notes="") -> None:
     if axles < 2:
         return
     t = raw[0]
+    texts = [x for x in (title, notes, t.get("label") if _is_table(t) else "")
+             if isinstance(x, str)]
+    in_all = re.compile(rf"\b(?:{axles * 4}|{_NUMBER_WORDS.get(axles * 4, '_')})[- ]?wheel",
+                        re.IGNORECASE)
+    if any(in_all.search(_as_words(x)) for x in texts):
+        return  # the words give the wheels in all as axles x 4: what was meant
     m = next((m for m in (_WHEELS_IN_ALL.search(_as_words(x)) for x in (
         title, notes, t.get("label") if _is_table(t) else "") if isinstance(x, str)) if m),
         None)
@@ -1319,42 +1326,54 @@ LOAD_LIMITS = {"point": (1e9, "force"), "moment": (1e10, "moment"),
 
 # Words that say a load hangs from trolley wheels or a clamp on the flange tips (a monorail
 # hoist, a beam clamp), not from a lug plate under the web
+_TROLLEY_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?|"
+                            r"push[- ]trolley|geared[- ]trolley)\b", re.IGNORECASE)
 _LUG_WORDS = re.compile(r"\b(lugs?|pad[- ]?eyes?|lifting eyes?|eye plates?)\b", re.IGNORECASE)
 _FLANGE_TIP_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?|clamps?|"
                                r"push[- ]trolley|geared[- ]trolley)\b", re.IGNORECASE)
 
 
-def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs) -> None:
+def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=()) -> None:
     """lug = true (the load hangs from a lug plate welded under the web: no flange bending
     under trolley wheels) on a job that says the load runs on a trolley or hangs from a clamp
-    on the flange tips: a monorail profile or tag, or the label of a load at the same
-    place. The flange check under the wheels (CMAA 74, AISC Design Guide 7) would be
-    left out on what the job's own words deny, so the rating is held."""
+    on the flange tips: a monorail or jib profile or tag (a hoist runs on both), or the label
+    of a load at the same place (placed by value: "42 in" and "3 ft 6 in" are one place). The
+    flange check under the wheels (CMAA 74, AISC Design Guide 7) would be left out on what
+    the job's own words deny, so the rating is held. A label at that place naming the lug
+    lets it stand; on a below-the-hook beam a clamp hangs below the lug (a plate or pipe
+    clamp), so only a beam clamp or trolley counts there."""
     if not lugs:
         return
     profile = crit_raw.get("lifting", "") if isinstance(crit_raw, dict) else ""
+    profile = profile if isinstance(profile, str) else ""
+    bth = profile == "below-the-hook"
     rows = [ld for ld in raw_loads if _is_table(ld)] if isinstance(raw_loads, list) else []
+    where_at = {ld.key: ld.at for ld in loads if ld.kind == "point"}
     for key in lugs:
         i = int(key[6:-1])
         ld = raw_loads[i]
         said = ""
-        at = ld.get("at")
+        at = where_at.get(key)
         # (the title or notes may name the rail the trolley runs on elsewhere: only the
         # loads at this place speak for how it hangs)
         texts = [(f"loads[{j}].label", o.get("label")) for j, o in enumerate(raw_loads)
-                 if _is_table(o) and (o is ld or o.get("at") == at)]
+                 if _is_table(o) and (o is ld or (
+                     at is not None and where_at.get(f"loads[{j}]") is not None
+                     and abs(where_at[f"loads[{j}]"] - at) <= 1e-6))]
+        tip_words = _TROLLEY_WORDS if bth else _FLANGE_TIP_WORDS
         for where, text in texts:
-            m = _FLANGE_TIP_WORDS.search(_as_words(text)) if isinstance(text, str) else None
+            m = tip_words.search(_as_words(text)) if isinstance(text, str) else None
             if m:
                 said = f"{where} says {m.group(0)!r}"
                 break
         lug_said = any(isinstance(t, str) and _LUG_WORDS.search(_as_words(t)) for _, t in texts)
+        runs = [t for t in tags if t in ("monorail", "trolley", "jib")]
         if said or lug_said:
             pass  # the labels at this place say how it hangs: a clamp or trolley, or a lug
-        elif isinstance(profile, str) and "monorail" in profile:
+        elif "monorail" in profile or "jib" in profile:
             said = f"[criteria] lifting = {profile!r}"
-        elif any(t in ("monorail", "trolley") for t in tags):
-            said = "the tag " + next(t for t in tags if t in ("monorail", "trolley"))
+        elif runs and not bth:
+            said = f"the tag {runs[0]!r}"
         if said and rows:
             r.hold(f"lug = true says {key} hangs from a lug plate welded under the web, so "
                    f"the bottom flange is not checked under trolley wheels or clamp jaws, but "
@@ -1362,7 +1381,7 @@ def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs) -> None:
                    "under it (often what governs a hoist beam). Remove lug = true (give "
                    "wheels = 2, 4 or 8 for the trolley's wheels or the clamp's jaws), or, if "
                    "the load really hangs from a welded lug (a fixed pick point, no trolley), "
-                   "take out the monorail, trolley or clamp words, tag or profile",
+                   "say so in its label (\"hook load, on a welded lug\")",
                    f"{key}.lug",
                    f"{key} has lug = true but {said}: the flange under a trolley or clamp is "
                    "not checked (CMAA 74, AISC Design Guide 7)")
@@ -1869,7 +1888,8 @@ def _kind_mismatch(r: _Reader, material, system: str) -> None:
                f"{_KIND_WORDS[kind]} (about 25 ksi, 170 MPa, at the least; A36 is "
                "36 ksi, S235 235 MPa): "
                + (f"{mpa:.4g} ksi typed as MPa is likely ({mpa:.4g} ksi = "
-                  f"{mpa * units.KSI / 1e6:.0f} MPa). " if mpa < 120 else "")
+                  f"{mpa * units.KSI / 1e6:.0f} MPa). "
+                  if mpa < 120 and abs(mpa * 2 - round(mpa * 2)) < 1e-6 else "")
                + "The checks use the figure typed, which understates the member: check fy and "
                "its unit", "beam.material.fy")
     why = kind_mismatch(material, system)
@@ -2200,6 +2220,12 @@ def _own_weight_twice(r: _Reader, loads: list[Load], self_weight: bool) -> None:
             return
 
 
+# A dead spread load's label that names the floor's own build-up (what weighs a floor down)
+_DECK_WORDS = re.compile(r"\b(decks?|decking|joists?|floor\w*|slabs?|grating|planks?|plywood|"
+                         r"osb|sheathing|topping|finish\w*|tiles?|concrete|framing|dead|"
+                         r"superimposed|partitions?)\b", re.IGNORECASE)
+
+
 def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, material,
                       system: str, title="", notes="") -> None:
     """A floor's dead spread load (deck, joists, finishes) given as a total that spreads to less
@@ -2224,6 +2250,8 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
         if ld.kind != "uniform" or ld.case != "dead" or not _is_table(raw) \
                 or "total" not in raw or ld.end <= ld.start:
             continue
+        if ld.label and not _DECK_WORDS.search(_as_words(ld.label)):
+            continue  # a handrail, a conduit run, sprinkler hangers: a small total is real
         per = abs(ld.total_force) / (ld.end - ld.start)
         if 0 < per < 0.5 * own:
             name = f" ({ld.label})" if ld.label else ""
@@ -3471,16 +3499,35 @@ def _hung_from_rods(r: _Reader, criteria: Criteria, tags, raw_supports, title=""
 # a shelf arm on a knee brace, a davit's kicker): what holds the member there also pushes or
 # pulls it endwise. Bare "strut" is a channel's trade name (strut channel) and "stay" an
 # everyday verb: only their sloped or diagonal forms are read.
+_DEG = r"\d+(?:\.\d+)?\s*(?:deg(?:rees?)?|\u00b0)"
 _TIE_WORDS = re.compile(
-    r"\b(tie[- ]?(?:rods?|bars?)|tension rods?|rod braces?|knee[- ]?brac\w*|kickers?|"
-    r"(?:diagonal|sloped|angled|inclined|raking) (?:braces?|ties?|rods?|struts?|stays?)|"
+    r"\b(tie[- ]?(?:rods?|bars?)|tie[- ]?backs?(?: rods?)?|tension rods?|rod braces?|"
+    r"knee[- ]?brac\w*|kickers?(?! ?(?:plates?|blocks?|boards?))|"
+    r"(?:diagonal|sloped|sloping|angled|inclined|raking) (?:braces?|ties?|rods?|struts?|stays?|"
+    r"cables?|ropes?|chains?)|(?:rods?|cables?|ropes?|chains?|stays?) (?:sloped|sloping|"
+    r"angled|raking)|"
+    r"(?:" + _DEG + r" (?:angle )?(?:braces?|struts?|rods?|ties?|stays?))|angle braces?|"
+    r"(?:braces?|struts?|rods?|cables?) [^,;]{0,25}?(?:at |@ ?)" + _DEG + r"|"
+    r"wire[- ]ropes?(?: stays?)?|stay(?:s|[- ](?:cables?|wires?|ropes?|rods?))?|"
+    r"turnbuckles?(?: (?:cables?|rods?))?|"
+    r"(?:cables?|ropes?|chains?|rods?|straps?) (?:up |down )?(?:to|from) (?:the )?"
+    r"(?:wall|column|post|mast|building)|"
     r"guy(?:ed|[- ]wires?|[- ]ropes?|[- ]rods?))(?![\w])", re.IGNORECASE)
 # ...said of the member in its title or notes ("arm with a tie rod to the wall", "knee-braced
-# arm"), not of what a rack stores ("tie rod rack")
+# arm", "tie-rod awning bracket", "awning arm w/ tie rod"), not of what a rack stores ("tie rod
+# rack", "loaded with tie rod bundles": `_TIE_STORED`)
 _TIE_SAID = re.compile(
-    r"\b(?:with|by|on|from|has)\b(?: [\w-]+){0,2}? " + _TIE_WORDS.pattern[2:]
-    + r"|" + _TIE_WORDS.pattern + r" (?:to|up|from|above|below|at)\b|\bknee[- ]?braced\b|"
-    r"\bguyed\b", re.IGNORECASE)
+    r"(?:\b(?:with|by|on|from|has)\b|\bw/|\(|\s-)(?: [\w-]+){0,2}? ?"
+    + _TIE_WORDS.pattern[2:]
+    + r"|" + _TIE_WORDS.pattern + r" (?:to|up|from|above|below|at|supported|held)\b|"
+    r"\b(?:tie[- ]?rod(?:ded)?|knee[- ]?brace[ds]?|guyed|stayed|cable[- ]stayed) "
+    r"(?:awning|sign|shelf|bracket|arm|boom|beam|davit|canopy|cantilever)s?\b|"
+    r"\bknee[- ]?braced\b|\bguyed\b|\bheld up by (?:an? )?(?:cable|rope|rod|chain|stay)s?\b",
+    re.IGNORECASE)
+# what a rack or arm stores, said beside the words: "loaded with", "stocked with", "bundles"
+_TIE_STORED = re.compile(r"\b(?:loaded|stocked|filled|stacked|carrying|holds?|stores?|storage|"
+                         r"for)\s+(?:with\s+)?(?:[\w-]+\s+){0,3}$|^\s*(?:bundles?|stock|lengths?|"
+                         r"bars? for|racks?)\b", re.IGNORECASE)
 
 
 def _tied_or_braced(r: _Reader, tags, raw_supports, title="", notes="") -> None:
@@ -3496,7 +3543,10 @@ def _tied_or_braced(r: _Reader, tags, raw_supports, title="", notes="") -> None:
               if _is_table(sp)] + [("title", title), ("notes", notes)]
     for key, text in places:
         rule = _TIE_WORDS if key.startswith("supports") else _TIE_SAID
-        m = rule.search(_as_words(text)) if isinstance(text, str) else None
+        words = _as_words(text) if isinstance(text, str) else ""
+        m = next((m for m in rule.finditer(words)
+                  if not _TIE_STORED.search(words[:m.start()])
+                  and not _TIE_STORED.search(words[m.end():])), None)
         if not m:
             continue
         said = _TIE_WORDS.search(m.group(0)).group(0) if _TIE_WORDS.search(m.group(0)) \
@@ -3904,8 +3954,14 @@ def _hangs_stored(tags) -> bool:
 
 # Words that say outright the member is a lifting device (not a part stored or a word in a
 # shelf's name): the tag not-lifting cannot stand against them
-_LIFTING_DEVICE_WORDS = re.compile(r"\b(lifting devices?|jib[- ]?cranes?|crane booms?|"
-                                   r"below[- ]the[- ]hook|monorail hoists?)\b", re.IGNORECASE)
+_LIFTING_DEVICE_WORDS = re.compile(
+    r"\b(lifting devices?|jib[- ]?cranes?|crane booms?|below[- ]the[- ]hook|monorail hoists?|"
+    r"spreader (?:bars?|beams?)|lifting beams?|hoist beams?|(?:gantry|underhung|bridge) cranes?|"
+    r"crane runways?|davit(?: arms?)?|monorails?|hoist booms?)\b", re.IGNORECASE)
+# ...but a shelf or rack that stores them, or stands on one's column, is no lifting device
+_STORES_WORDS = re.compile(r"\b(racks?|shel(?:f|ves|ving)|storage|store[sd]?|storing|bins?|"
+                           r"cabinets?|holders?|rests?|cradles?|for (?:the )?\w+ (?:attachments|parts|tools)|"
+                           r"on the \w+(?: \w+)? (?:column|mast|post))\b", re.IGNORECASE)
 
 
 def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
@@ -3915,6 +3971,8 @@ def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
     crane. Held until one of the two is changed."""
     if NOT_LIFTING not in tags or is_lifting(tags, criteria.lifting):
         return
+    if isinstance(title, str) and _STORES_WORDS.search(_as_words(title)):
+        return  # a shelf or rack for lifting gear, on a crane's column, a boom's rest
     for key, text in (("title", title), ("notes", notes)):
         m = _search(_LIFTING_DEVICE_WORDS, _as_words(text)) if isinstance(text, str) else None
         if m:
@@ -5205,7 +5263,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    "so it changes nothing. Give a hoist as a point load, or trolley "
                    "wheels as [[moving]]", f"loads[{i}].wheels")
     _twice(r, raw_loads)
-    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs)
+    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs, loads)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)

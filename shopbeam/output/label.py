@@ -662,7 +662,14 @@ def rating(cap, unchecked=(), date: _dt.date | None = None) -> Rating:
         notes += _weld_words(job, cap)
         notes += _tag_words(job)
         notes += _dead_couple_words(job)
-        if fatigue.given(job):
+        if fatigue.given(job) and not math.isfinite(fatigue.job_range(job)):
+            c = job.criteria
+            cls = fatigue.bth_class(job)
+            notes.append(f"No fatigue check: {c.cycles:,.0f} load cycles are too few to need "
+                         "one (" + ("ASME BTH-1 service class 0" if cls is not None else
+                                    "under 20,000, AISC 360-16 Appendix 3.1")
+                         + ", from memory).")
+        elif fatigue.given(job):
             c = job.criteria
             cls = fatigue.bth_class(job)
             notes.append(f"Fatigue checked at this rating: a category {c.fatigue_category} "
