@@ -615,3 +615,16 @@ def test_exactly_twenty_thousand_cycles_on_a_below_the_hook_device_is_class_0_un
 
     res = analyze(parse_job_text(BTH.format(cycles=20_000)))
     assert not [c for c in res.checks if c.name == "fatigue"]
+
+
+# ------------------------------------------------------------------ metric listings
+
+def test_the_catalog_and_material_lists_show_metric_units_when_asked(capsys):
+    from shopbeam.cli import main
+
+    assert main(["shapes", "--kind", "SHS", "--filter", "40x40", "--units", "si"]) == 0
+    out = capsys.readouterr().out
+    assert "mm^2" in out and "in^2" not in out
+    assert main(["materials", "--units", "si"]) == 0
+    out = capsys.readouterr().out
+    assert "MPa" in out and " ksi" not in out

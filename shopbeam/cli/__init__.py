@@ -285,20 +285,25 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     s = command(sub, "materials", "list the built-in materials with their sources",
                 "Every material key a job file may name, with E, Fy (or the wood stresses), "
                 "density and where the figures come from.",
-                ["shopbeam materials", "shopbeam materials --json"])
+                ["shopbeam materials", "shopbeam materials --units si",
+                 "shopbeam materials --json"])
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
+    s.add_argument("--units", choices=("us", "si"), default="us",
+                   help="display units (default us)")
     s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_materials"))
 
     s = command(sub, "shapes", "list catalog sections",
                 "The sections of the built-in catalog, by kind, optionally filtered by text.",
                 ["shopbeam shapes --kind HSS --filter 4x4", "shopbeam shapes --kind channel",
-                 "shopbeam shapes --kind lumber --json"])
+                 "shopbeam shapes --kind SHS --units si", "shopbeam shapes --kind lumber --json"])
     s.add_argument("--kind", default=None,
                    help="one catalog kind or shape kind (listed below; default: all)")
     s.add_argument("--filter", default=None, metavar="TEXT",
                    help="only designations containing TEXT as whole sizes, e.g. 4x4 (W8X10 is "
                         "found by 8x10, not by 8x1)")
     s.add_argument("--json", action="store_true", help="print the JSON (SI units)")
+    s.add_argument("--units", choices=("us", "si"), default="us",
+                   help="display units (default us)")
     _with_kinds(s)
     s.set_defaults(func=_lazy("shopbeam.cli.members", "cmd_shapes"))
 
