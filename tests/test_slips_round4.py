@@ -628,3 +628,10 @@ def test_the_catalog_and_material_lists_show_metric_units_when_asked(capsys):
     assert main(["materials", "--units", "si"]) == 0
     out = capsys.readouterr().out
     assert "MPa" in out and " ksi" not in out
+
+
+def test_a_tributary_width_ten_times_the_member_is_warned():
+    job = parse_job_text(SI_SHELF.format(width="600 m"))
+    got = warned(job, "loads[0].width")
+    assert got and "too low" in got[0]
+    assert not warned(parse_job_text(SI_SHELF.format(width="600 mm")), "loads[0].width")

@@ -3667,6 +3667,16 @@ def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title
         key = f"loads[{i}]"
         w = r.widths.get(key)
         raw = ld.get("width") if _is_table(ld) else None
+        if w is not None and isinstance(raw, str) and w > 10 * length:
+            # the other way round ("600 m" for 600 mm): the area load posted is that many
+            # times too low (on the safe side, said)
+            r.warn(f"width = {raw!r} is more than ten times the member's length "
+                   f"({units.fmt(length, 'length', system)}): a tributary width that wide is "
+                   "most likely a unit slip (" + ('"600 m" for "600 mm"' if system == "si"
+                                                  else '"16 ft" for "16 in"')
+                   + "), and the area load posted is that many times too low. Check its unit",
+                   f"{key}.width")
+            continue
         if w is None or not isinstance(raw, str) or \
                 not re.search(r"(?:in|inch|inches|\"|mm)\.?\s*$", raw.strip(), re.IGNORECASE):
             continue
