@@ -635,3 +635,9 @@ def test_a_tributary_width_ten_times_the_member_is_warned():
     got = warned(job, "loads[0].width")
     assert got and "too low" in got[0]
     assert not warned(parse_job_text(SI_SHELF.format(width="600 mm")), "loads[0].width")
+
+
+def test_braced_on_a_jib_boom_is_warned():
+    text = preset("jib-arm.toml").replace("[beam]\n", "[beam]\nbraced = true\n", 1)
+    assert any("jib's boom" in m for m in warned(parse_job_text(text), "beam.braced"))
+    assert not warned(parse_job_text(preset("jib-arm.toml")), "beam.braced")

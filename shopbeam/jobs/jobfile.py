@@ -3974,6 +3974,25 @@ _STORES_WORDS = re.compile(r"\b(racks?|shel(?:f|ves|ving)|storage|store[sd]?|sto
                            r"on the \w+(?: \w+)? (?:column|mast|post))\b", re.IGNORECASE)
 
 
+def _braced_boom(r: _Reader, beam: dict, tags, criteria, supports, length) -> None:
+    """braced = true or restrained = true on a jib's boom (a lifting member with a free end):
+    nothing braces a boom along its reach, and the trolley runs on it; the keys raise the
+    bending strength (no lateral-torsional buckling), which the label then rests on. Said."""
+    if length is None or not supports or not is_lifting(tags, criteria.lifting):
+        return
+    name = criteria.lifting or guessed_profile(supports, length)
+    if name not in ("jib-boom", "hand-geared-jib"):
+        return
+    for k in ("braced", "restrained"):
+        if beam.get(k) is True:
+            r.warn(f"{k} = true on a jib's boom: nothing holds a boom against buckling "
+                   "sideways along its reach (the trolley runs along it, and its free end "
+                   "swings), so the lateral-torsional buckling it leaves out is most often "
+                   "what governs. Remove it unless the boom really is held all along (then the "
+                   "label says the rating rests on it)", f"beam.{k}")
+            return
+
+
 def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
     """The tag not-lifting on a job whose title or notes say outright it is a lifting device
     ("jib crane", "LIFTING DEVICE: design, marking and load test..."): the tag would post a
@@ -5378,6 +5397,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _idle_load_keys(r, raw_loads, loads, supports, length, tags, levels)
     lifting_hint = _lifting_hint(r, title, notes, tags, raw_loads, moving, criteria)
     _not_lifting_denied(r, title, notes, tags, criteria)
+    _braced_boom(r, beam if isinstance(beam, dict) else {}, tags, criteria, supports, length)
     bth_hint = _below_the_hook_hint(r, title, notes, tags, criteria)
     rolling_keys = _rolling_keys(r, data.get("moving"), moving, tags, criteria)
     vehicle_hint = _vehicle_hint(r, title, notes, tags, raw_loads, criteria,
