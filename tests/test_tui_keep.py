@@ -2050,3 +2050,102 @@ async def test_a_problem_elsewhere_leaves_the_hung_load_s_flange_as_the_checks_t
         await burst(pilot, "x")
         assert app.job_screen.session.evaluation.job is None  # the job does not read
         assert flange.value == "bottom" and wheels.display
+
+
+@sync
+async def test_notices_keep_showing_after_many_came_and_went(tmp_path):
+    # round after round of notices, some taken away early to keep the banners in sight:
+    # a later notice is still drawn (a rack left scrolled past its notices drew none), and
+    # the notices of keys not used go first, so a "Saved" notice stays
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE, notifications=True) as pilot:
+        await settle(pilot)
+
+        def shown() -> set:
+            return {str(w.render()).split(":")[0] for w in (
+                app.screen.get_widget_at(x, y)[0] for y in range(SIZE[1])
+                for x in range(0, SIZE[0], 2)) if type(w).__name__ == "Toast"}
+
+        for rnd in range(3):
+            app.notify(f"Saved {rnd}: to a file", timeout=30)
+            for i in range(4):
+                app.notify(f"stray {rnd}.{i}: " + "keys that nothing took " * 6,
+                           title="keys not used", timeout=30)
+                await pilot.pause(0.05)
+            await settle(pilot)
+            await pilot.pause(0.1)
+            assert f"Saved {rnd}" in shown(), (rnd, shown())
+        app.clear_notifications()
+        await settle(pilot)
+        app.notify("last: a short one", timeout=30)
+        await settle(pilot)
+        await pilot.pause(0.1)
+        assert "last" in shown(), shown()
+        for y in range(3):
+            assert "Toast" not in {type(app.screen.get_widget_at(x, y)[0]).__name__
+                                   for x in range(SIZE[0])}
+
+
+@sync
+async def test_a_new_point_load_on_a_lifting_i_beam_shows_the_bottom_flange_at_once(tmp_path):
+    # a new load has no value yet, so the job does not read: the form shows what the checks
+    # will take, the bottom flange with its wheels, not "top" until the value is typed
+    from shopbeam.tui.widgets import Choice
+
+    path = tmp_path / "jib-arm.toml"
+    shutil.copy(PRESETS / "jib-arm.toml", path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        view = app.job_screen.query_one("#loads")
+        rows = len(app.job_screen.session.rows("loads"))
+        await burst(pilot, CTRL_T)
+        assert len(app.job_screen.session.rows("loads")) == rows + 1
+        flange = next(c for c in view.query(Choice) if c.key == "load.flange")
+        wheels = next(c for c in view.query(Choice) if c.key == "load.wheels")
+        assert app.job_screen.session.rows("loads")[-1].get("type", "point") == "point"
+        assert flange.display  # a point load's form
+        assert flange.value == "bottom" and wheels.display
+
+
+@sync
+async def test_the_rating_view_switched_to_before_the_answer_is_made_for_the_job_as_edited(
+        tmp_path, monkeypatch):
+    # an edit, then the Rating view before the answer came: the view had filed the old
+    # job's capacity under the new text and never made it again
+    import time as _time
+
+    real = session_mod.evaluate_data
+
+    def slow(*args, **kw):
+        _time.sleep(1.0)
+        return real(*args, **kw)
+
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        await pilot.press("f7")
+        await settle(pilot)
+        f = await focused(pilot, app, "criteria", "criteria.safety_factor")
+        monkeypatch.setattr(session_mod, "evaluate_data", slow)
+        for event in events_of("3"):  # the factor typed, not waited out
+            pilot.app._driver.send_message(event)
+        await pilot.pause(0.1)
+        await pilot.press("f11")  # the Rating view while the answer is on its way
+        await pilot.pause(0.2)
+        view = js.query_one("#rating")
+        assert js.session.stale
+        assert "Checking your last edit" in str(view.query_one("#rating-body").render())
+        await pilot.pause(1.5)
+        await settle(pilot)
+        for _ in range(40):  # the capacity worker
+            if getattr(view, "_out", None):
+                break
+            await pilot.pause(0.25)
+        assert not js.session.stale and f.input.value == "3"
+        assert view._made_from[1] is js.session.evaluation.result
+        assert view._for[0] == js.session.doc.text()
+        assert "/ 3" in view._out  # first yield over the factor typed

@@ -11,6 +11,7 @@ from __future__ import annotations
 
 import re
 import textwrap
+import threading
 import time
 from pathlib import Path
 
@@ -60,6 +61,7 @@ SOLVE_DEBOUNCE = 0.03  # seconds: keys typed closer together than this cost one 
 # the summary, the Results view and the fields typed in since then say they are being checked,
 # rather than show the answer for the job before the edit as if it were this one's
 STALE_MARK = 0.4
+SOLVE_LOCK = threading.Lock()  # one solve of the job at a time (`JobScreen._solve`)
 
 SHAPE_DEFAULTS = {
     "rect-tube": {"depth": "4 in", "width": "2 in", "wall": "1/8 in"},
@@ -312,16 +314,20 @@ class JobScreen(Screen):
             wait = SOLVE_DEBOUNCE if now - getattr(self, "_asked_at", -1e9) < SOLVE_DEBOUNCE \
                 else 0.0
             self._asked_at = now
+            if self._stale_since is None:
+                self._stale_since = now
             self._solve(s, *s.snapshot(), wait=wait)
             self.set_timer(STALE_MARK, self._mark_stale)
 
     stale_marked = False  # the answer shown is for an earlier edit, and said so (STALE_MARK)
+    _stale_since = None  # when the first edit the answer shown does not cover was made
 
     def _mark_stale(self) -> None:
-        """The answer to an edit has not come within STALE_MARK: say so on screen (the
-        answer shown is for the job before the edit)."""
-        if self.session.stale and not self.stale_marked \
-                and time.monotonic() - getattr(self, "_asked_at", 0.0) >= STALE_MARK * 0.9:
+        """The answer to an edit has not come within STALE_MARK of it (typing on does not
+        put this off): say so on screen (the answer shown is for the job before it)."""
+        since = self._stale_since
+        if self.session.stale and not self.stale_marked and since is not None \
+                and time.monotonic() - since >= STALE_MARK * 0.9:
             self.stale_marked = True
             self.refresh_all()
 
@@ -329,13 +335,19 @@ class JobScreen(Screen):
     def _solve(self, session: Session, version: int, data: dict, text: str, name: str,
                wait: float = SOLVE_DEBOUNCE) -> None:
         """Solve a snapshot of the job off the UI thread, after `wait` (a burst of keys
-        costs one solve); an answer for an older version of the job is dropped."""
+        costs one solve); an answer for an older version of the job is dropped. One solve
+        runs at a time (`SOLVE_LOCK`): keys typed while a heavy job is being solved wait
+        for it, and of them only the newest edit is solved next (the older ones' workers
+        find a newer version and return), so the answer to the last key is never queued
+        behind one solve per key."""
         if wait:
             time.sleep(wait)
         if session.version != version or get_current_worker().is_cancelled:
             return  # a newer edit came: its own worker solves it
-
-        ev = session_mod.evaluate_data(data, text, name)
+        with SOLVE_LOCK:
+            if session.version != version or get_current_worker().is_cancelled:
+                return  # overtaken while an older solve ran
+            ev = session_mod.evaluate_data(data, text, name)
         from shopbeam.tui import drawing  # noqa: F401,PLC0415 - startup: imported here, off the UI thread
 
         if session.version == version and not get_current_worker().is_cancelled:
@@ -343,7 +355,8 @@ class JobScreen(Screen):
 
     def _solved(self, session: Session, version: int, ev) -> None:
         if session is self.session and session.install(version, ev):
-            self.stale_marked = self.stale_marked and session.stale
+            if not session.stale:
+                self.stale_marked, self._stale_since = False, None
             self.refresh_all()
 
     # ------------------------------------------------------------------ navigation
@@ -1445,16 +1458,18 @@ class ShopbeamApp(App):
         self.call_after_refresh(self._fit_notices)
 
     def _fit_notices(self, tries: int = 8) -> None:
-        """Notices stack up from the foot of the screen. app.tcss caps the height of their
-        rack so that they never cover the banners (the safety caution, the lifting caution),
-        the title bar or the view bar; past the cap the rack would clip the newest notice,
-        so the oldest notice shown is taken away early until the newest fits. Textual
-        mounts a notice's toast a refresh or two after it is made: until every notice has
-        its toast laid out, this looks again after the next refresh (`tries` times)."""
+        """Notices stack up from the foot of the screen; they never stay over the banners
+        (the safety caution, the lifting caution), the title bar or the view bar: where the
+        stack would reach them, notices are taken away early, the notices of keys not used
+        first, then the oldest (a "Saved" or "ctrl+z puts it back" stays while it can).
+        Textual mounts a notice's toast a refresh or two after it is made: until every
+        notice has its toast laid out, this looks again after the next refresh (`tries`
+        times)."""
         from textual.widgets._toast import Toast, ToastRack  # Textual is pinned exactly
 
+        screen = self.screen
         try:
-            rack = self.screen.get_child_by_type(ToastRack)
+            rack = screen.get_child_by_type(ToastRack)
         except Exception:  # noqa: BLE001 - no screen or no rack (notices off): nothing
             return
         toasts = list(rack.query(Toast))
@@ -1464,12 +1479,13 @@ class ShopbeamApp(App):
             if tries > 0:
                 self.call_after_refresh(self._fit_notices, tries - 1)
             return
-        size = self.screen.size
-        room = rack.styles.max_height.resolve(size, size) if rack.styles.max_height else \
-            size.height
+        kept = [w.region.bottom for w in screen.query("Banner, ViewBar, #titlebar")
+                if w.region and w.display]
+        room = screen.size.height - 1 - max(kept, default=0)  # the rack's margin below
         if len(toasts) > 1 and sum(t.outer_size.height + t.styles.margin.top
                                    for t in toasts) > room:
-            self._unnotify(toasts[0]._notification)
+            stray = [t for t in toasts if t._notification.title == "keys not used"]
+            self._unnotify((stray or toasts)[0]._notification)
 
     recovered = None  # where the unsaved job was written when the app failed
 

@@ -57,6 +57,13 @@ class _SheetView(View):
         ev = session.evaluation
         body = self.query_one(f"#{self.body_id}", Static)
         width = self.text_width()
+        if session.stale:
+            # the answer in hand is for the job before the last edit: this view's figures
+            # are made from the answer to the job as it stands, once it comes (the screen
+            # shows this view again then), never filed under the new text
+            body.update(Text(fit_text("Checking your last edit ... " + self.busy, width)))
+            self._for = None
+            return
         if ev.result is None:
             body.update(Text(fit_text(problems_text(ev), width)))
             self._for = None

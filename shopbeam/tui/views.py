@@ -713,8 +713,14 @@ class LoadsView(RowsView):
                 # word stands: the form does not flip to top under a typo elsewhere)
                 job = session.evaluation.job
                 if job is not None:
-                    self._hung_default = tuple(getattr(job, "hung_default", ()))
-                hung = f"loads[{i}]" in getattr(self, "_hung_default", ())
+                    sec = job.section
+                    # (the reader's rule: a lifting job's strong-axis I-beam hangs them)
+                    self._hangs_by_default = bool(
+                        job.lifting and sec is not None and sec.shape == "i-beam"
+                        and sec.axis == "strong")
+                    hung = f"loads[{i}]" in getattr(job, "hung_default", ())
+                else:  # a new row, a typo anywhere: the last answer's rule for this job
+                    hung = getattr(self, "_hangs_by_default", False)
                 bottom = row.get("flange") == "bottom" or ("flange" not in row and hung)
                 c.set("bottom" if bottom else "top")
                 c.display = kind == "point" or "flange" in row
@@ -1265,7 +1271,9 @@ class ResultsView(View):
             note = f"\nNote: {r.shown_state}." if r.shown_state else ""
             q("#res-verdict").update(_text(drawing.verdict_line(r) + note))
             q("#res-verdict").set_class(not r.ok, "-fail")
-            q("#res-checks").update(_text("CHECKS\n" + drawing.checks_table(r)))
+            q("#res-checks").update(_text(
+                ("CHECKS (of the job before your last edit: checking it now)\n" if late else
+                 "CHECKS\n") + drawing.checks_table(r)))
             q("#res-reactions").update(_text(
                 "REACTIONS (what each support does to the beam)\n" + drawing.reactions_table(r)))
             q("#res-extremes").update(_text("EXTREMES (exact)\n" + drawing.extremes_table(r)))
@@ -1299,19 +1307,21 @@ class PlotsView(View):
         r = ev.result
         # drawn only while this view is shown (the screen shows the current view alone),
         # and not again for the answer and size it already shows (switching back is free)
+        late = bool(getattr(self.screen, "stale_marked", False) and session.stale)
         was = getattr(self, "_drawn_for", None)
-        if was is not None and was[0] is ev and was[1:] == (width, height):
+        if was is not None and was[0] is ev and was[1:] == (width, height, late):
             return
-        self._drawn_for = (ev, width, height)
+        self._drawn_for = (ev, width, height, late)
         head = self.query_one("#plot-problems", Static)
+        mark = STALE_WORDS + "\n" if late else ""
         if r is not None and r.state_solution is not None:
             # patterned loads: draw the pattern that governs, and say which it is
 
-            head.update(_text(f"Diagrams of {r.state_words}."))
+            head.update(_text(f"{mark}Diagrams of {r.state_words}."))
             r = replace(r, solution=r.state_solution)
         else:
-            head.update(_text(problems_text(ev)))
-        head.display = r is None or ev.result.state_solution is not None
+            head.update(_text(mark + problems_text(ev)))
+        head.display = late or r is None or ev.result.state_solution is not None
         for name in drawing.PLOT_KINDS:
             st = self.query_one(f"#plot-{name}", Static)
             st.display = r is not None
