@@ -257,7 +257,8 @@ class JobScreen(Screen):
             return "Reading and solving the job ..."
         warn = load_warnings(self.session)[:1]
         if self.stale_marked and self.session.stale:
-            warn = [STALE_WORDS] + warn
+            warn = [STALE_WORDS if ev.result is not None else
+                    "Checking your last edit ..."] + warn
         note = self.length_note()
         if note:  # a length change not settled yet: first, it can move the answer a lot
             warn = [note] + warn

@@ -1255,8 +1255,8 @@ class ResultsView(View):
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         q = lambda i: self.query_one(i, Static)  # noqa: E731
-        late = [STALE_WORDS] if getattr(self.screen, "stale_marked", False) \
-            and session.stale else []
+        late = [STALE_WORDS if ev.result is not None else "Checking your last edit ..."] \
+            if getattr(self.screen, "stale_marked", False) and session.stale else []
         top = "\n".join(late + load_warnings(session)
                         + ([problems_text(ev)] if ev.errors else []))
         q("#res-problems").update(_text(top))
