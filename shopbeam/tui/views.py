@@ -300,6 +300,11 @@ class RowsView(View):
     def selected_row(self, session) -> tuple[int, dict | None]:
         """The picked row of this view's table and its index (None when there are none)."""
         rows = session.rows(self.table)
+        if getattr(self, "_row_for_edits", None) != self.selected:
+            # another row in the same fields: the typing they remember was the other row's
+            self._row_for_edits = self.selected
+            for f in self.fields():
+                f.edited_version = 0
         return (self.selected, rows[self.selected]) if rows else (self.selected, None)
 
     class RowAdd(Message):
