@@ -2174,9 +2174,10 @@ def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
 
 
 # A load's label that names the member's own weight
-_OWN_WEIGHT_WORDS = re.compile(r"\b(self[ _-]?weight|own weight|beam(?:'s)? (?:self[ _-]?)?weight|"
-                               r"weight of (?:the )?(?:beam|member|joist|rail|arm))\b",
-                               re.IGNORECASE)
+_OWN_WEIGHT_WORDS = re.compile(
+    r"\b(?:(?:self[ _-]?weight|own weight)(?! of (?!(?:the )?(?:beam|member|joist|rail|arm)\b))|"
+    r"beam(?:'s)? (?:self[ _-]?)?weight|weight of (?:the )?(?:beam|member|joist|rail|arm))\b",
+    re.IGNORECASE)
 
 
 _UNDER_MM = re.compile(r"^\s*(0?\.\d+|0)\s*mm\s*$", re.IGNORECASE)
@@ -2244,6 +2245,10 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
         own = section.self_weight_mass(material.density) * units.G0  # N/m
     except (AttributeError, TypeError, ValueError):
         return
+    # the live load per length the floor carries (its largest spread one)
+    live_w = max((max(abs(ld.w1), abs(ld.w2 if ld.kind == "linear" else ld.w1))
+                  for ld in loads if ld.case == "live" and ld.kind in ("uniform", "linear")),
+                 default=0.0)
     for ld in loads:
         i = int(ld.key[6:-1]) if ld.key.startswith("loads[") else -1
         raw = raw_loads[i] if 0 <= i < len(raw_loads) else None
@@ -2253,21 +2258,29 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
         if ld.label and not _DECK_WORDS.search(_as_words(ld.label)):
             continue  # a handrail, a conduit run, sprinkler hangers: a small total is real
         per = abs(ld.total_force) / (ld.end - ld.start)
-        if 0 < per < 0.5 * own:
-            name = f" ({ld.label})" if ld.label else ""
-            per_words = units.fmt(per, "line_load", system)
-            r.hold(f"total = {raw['total']!r}{name} spreads to {per_words} along the "
-                   f"member, less than half the member's own weight "
-                   f"({units.fmt(own, 'line_load', system)}): a floor's deck and joists "
-                   "weigh more than that. Most often the per-length figure was typed as the "
-                   f"total: if {raw['total']!r} per length was meant, write value = "
-                   f"\"{raw['total']}/{'ft' if system == 'us' else 'm'}\" (a too light dead "
-                   "load posts a higher live load, so no rating is posted while it stands); "
-                   "if the total is right, write it as value = "
-                   f"\"{'-' if ld.total_force < 0 else ''}{per_words}\"",
-                   f"{ld.key}.total", f"{ld.key}{name}: total = {raw['total']!r} spreads "
-                   f"to {per_words}, under half the member's own weight per length: the "
-                   "per-length figure typed as a total?")
+        light = [why for why, yes in (
+            (f"less than half the member's own weight ({units.fmt(own, 'line_load', system)})",
+             per < 0.5 * own),
+            (f"under a fiftieth of the live load it carries "
+             f"({units.fmt(live_w, 'line_load', system)})", per < live_w / 50)) if yes]
+        if per <= 0 or not light:
+            continue
+        name = f" ({ld.label})" if ld.label else ""
+        per_words = units.fmt(per, "line_load", system)
+        said = (f"total = {raw['total']!r}{name} spreads to {per_words} along the member, "
+                f"{' and '.join(light)}: a floor's deck and joists weigh more than that. Most "
+                f"often the per-length figure was typed as the total: if {raw['total']!r} per "
+                f"length was meant, write value = \"{raw['total']}/"
+                f"{'ft' if system == 'us' else 'm'}\" (a too light dead load posts a higher "
+                "live load); if the total is right, write it as value = "
+                f"\"{'-' if ld.total_force < 0 else ''}{per_words}\"")
+        if len(light) == 2:  # both: held
+            r.hold(said + ". No rating is posted while it stands", f"{ld.key}.total",
+                   f"{ld.key}{name}: total = {raw['total']!r} spreads to {per_words}, under "
+                   "half the member's own weight and a fiftieth of its live load per length: "
+                   "the per-length figure typed as a total?")
+        else:
+            r.warn(said, f"{ld.key}.total")
 
 
 def _upward_loads(r: _Reader, raw_loads: list, loads: list[Load], system: str) -> list[str]:
@@ -2766,6 +2779,11 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
                             else x.get("value")) + [x.get("total")] if isinstance(v, str)]
     kn_live = any(_KILONEWTON_OR_KG.search(v) for v in live_texts)
     kn_only = any(_KILONEWTON.search(v) for v in live_texts)
+    # the dead point loads typed in N, all together (a hoist and a trolley given apart)
+    n_dead = sum(abs(x.total_force) for x in loads if x.case == "dead" and x.kind == "point"
+                 and (lambda i: i is not None and i < len(raw_loads) and _is_table(
+                     raw_loads[i]) and isinstance(raw_loads[i].get("value"), str)
+                     and _PLAIN_NEWTON.search(raw_loads[i]["value"]))(_load_index(x.key)))
     for ld in loads:
         i = _load_index(ld.key)
         raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
@@ -2788,16 +2806,18 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
             continue
         if system == "si" and ld.case == "dead" and ld.kind == "point" and kn_live and \
                 lifting and any(_PLAIN_NEWTON.search(v) for v in texts) and \
-                abs(ld.total_force) < live_max / 50:
+                n_dead < live_max / 50:
             # "-40 N" for a 40 kg hoist beside a hook load in kN: 9.81 times too light (a
             # hoist and trolley weigh some 5 to 10 % of what they lift; a light fixture in N
             # beside a shelf's load in kN is real, so only a lifting job's hoist is held)
             said = ", ".join(f'"{v}"' for v in texts)
-            r.hold(f"{name} is a dead load typed in N ({said}) beside live loads in kN, and "
-                   "under a fiftieth of the largest: if kg was meant (a hoist's or a deck's "
+            r.hold(f"{name} is a dead load typed in N ({said}) beside live loads in kN (or kg, "
+                   "t), and with the job's other dead point loads in N under a fiftieth of the "
+                   "largest: if kg was meant (a hoist's or a deck's "
                    "weight), it is 9.81 times too light, and the rating holds the dead load "
                    "fixed, so a light one posts a higher live load; no rating is posted on "
-                   "it. Write it in kg (kg/m) or kN, as meant", f"{ld.key}.value",
+                   "it. Write it in kg (kg/m) or kN, as meant (a weight that really is so "
+                   "many newtons: in kN, e.g. \"-0.11 kN\" for 110 N)", f"{ld.key}.value",
                    f"{name} is a dead load in N beside live loads in kN: write it in kg or "
                    "kN, as meant")
             continue
@@ -2854,10 +2874,12 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
 _US_FORCE = re.compile(r"\d\s*(?:lbf?s?|pounds?|kips?|k|#|plf|klf|pli|psf|ksf)\b"
                        r"|\d\s*(?:lbf?|kips?)\s*/", re.IGNORECASE)
 _PLAIN_NEWTON = re.compile(r"\d\s*N(?:\s*/\s*m)?\s*$")  # "40 N", "80 N/m", not kN
-_KILONEWTON = re.compile(r"\d\s*kN\b")
+_KILONEWTON = re.compile(r"\d\s*(?:kN|kPa)\b")
 # a live load typed in kN or, on a lifting job, its hook load in kg or tonnes
 _KILONEWTON_OR_KG = re.compile(r"\d\s*(?:kN|kg|t|tonnes?)\b")
-_PLAIN_KG = re.compile(r"\d\s*kg(?:\s*/\s*m)?\s*$")  # "25 kg", "3 kg/m", not kN
+# a spread load in kg per length or per area ("3 kg/m", "30 kg/m^2"): a point load in kg (a
+# shelf board, a hoist) is a weight as typed
+_PLAIN_KG = re.compile(r"\d\s*kg\s*/\s*(?:m|m\^?2|m\u00b2|sq\.? ?m)\s*$")
 
 
 # A length or force unit of the other system than the job's (metric among feet and lbf, or
@@ -3508,8 +3530,7 @@ _TIE_WORDS = re.compile(
     r"angled|raking)|"
     r"(?:" + _DEG + r" (?:angle )?(?:braces?|struts?|rods?|ties?|stays?))|angle braces?|"
     r"(?:braces?|struts?|rods?|cables?) [^,;]{0,25}?(?:at |@ ?)" + _DEG + r"|"
-    r"wire[- ]ropes?(?: stays?)?|stay(?:s|[- ](?:cables?|wires?|ropes?|rods?))?|"
-    r"turnbuckles?(?: (?:cables?|rods?))?|"
+    r"wire[- ]ropes?(?: stays?)?|stay[- ](?:cables?|wires?|ropes?|rods?)|"
     r"(?:cables?|ropes?|chains?|rods?|straps?) (?:up |down )?(?:to|from) (?:the )?"
     r"(?:wall|column|post|mast|building)|"
     r"guy(?:ed|[- ]wires?|[- ]ropes?|[- ]rods?))(?![\w])", re.IGNORECASE)
@@ -3648,6 +3669,7 @@ def _length_against_words(r: _Reader, raw, length, title, notes, system: str) ->
 
 
 TINY_WIDTH = 0.0127  # m: half an inch, under any tributary width (common practice, no source)
+WIDE_WIDTH = 15.0  # m (about 50 ft): wider than a shop member's tributary width (the same)
 
 
 def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title="",
@@ -3667,7 +3689,7 @@ def _narrow_widths(r: _Reader, raw_loads, length, raw_length, system: str, title
         key = f"loads[{i}]"
         w = r.widths.get(key)
         raw = ld.get("width") if _is_table(ld) else None
-        if w is not None and isinstance(raw, str) and w > 10 * length:
+        if w is not None and isinstance(raw, str) and w > max(10 * length, WIDE_WIDTH):
             # the other way round ("600 m" for 600 mm): the area load posted is that many
             # times too low (on the safe side, said)
             r.warn(f"width = {raw!r} is more than ten times the member's length "
@@ -3967,7 +3989,12 @@ def _hangs_stored(tags) -> bool:
 _LIFTING_DEVICE_WORDS = re.compile(
     r"\b(lifting devices?|jib[- ]?cranes?|crane booms?|below[- ]the[- ]hook|monorail hoists?|"
     r"spreader (?:bars?|beams?)|lifting beams?|hoist beams?|(?:gantry|underhung|bridge) cranes?|"
-    r"crane runways?|davit(?: arms?)?|monorails?|hoist booms?)\b", re.IGNORECASE)
+    r"crane runways?|davit(?: arms?)?|monorails?|hoist (?:booms?|arms?)|"
+    r"(?:wall |pillar |mast |swing )?jibs?(?: (?:arms?|booms?))?|"
+    r"(?:chain|electric|wire[- ]rope|air|lever) hoists?)\b", re.IGNORECASE)
+# ...said of where the member is, not what it is ("beside the monorail", "under the runway")
+_NEAR_WORDS = re.compile(r"\b(?:beside|under|over|near|next to|below|above|along|behind|by|"
+                         r"past|from)\s+(?:the\s+|a\s+)?(?:[\w-]+\s+){0,2}$", re.IGNORECASE)
 # ...but a shelf or rack that stores them, or stands on one's column, is no lifting device
 _STORES_WORDS = re.compile(r"\b(racks?|shel(?:f|ves|ving)|storage|store[sd]?|storing|bins?|"
                            r"cabinets?|holders?|rests?|cradles?|for (?:the )?\w+ (?:attachments|parts|tools)|"
@@ -3985,11 +4012,13 @@ def _braced_boom(r: _Reader, beam: dict, tags, criteria, supports, length) -> No
         return
     for k in ("braced", "restrained"):
         if beam.get(k) is True:
-            r.warn(f"{k} = true on a jib's boom: nothing holds a boom against buckling "
+            r.hold(f"{k} = true on a jib's boom: nothing holds a boom against buckling "
                    "sideways along its reach (the trolley runs along it, and its free end "
                    "swings), so the lateral-torsional buckling it leaves out is most often "
-                   "what governs. Remove it unless the boom really is held all along (then the "
-                   "label says the rating rests on it)", f"beam.{k}")
+                   "what governs, and no rating is posted on it. Remove it (the boom is then "
+                   "checked unbraced), or brace it at points and give them as braces = [...]",
+                   f"beam.{k}", f"{k} = true on a jib's boom: nothing braces a boom along its "
+                   "reach; remove it, or give the brace points as braces")
             return
 
 
@@ -4003,7 +4032,10 @@ def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
     if isinstance(title, str) and _STORES_WORDS.search(_as_words(title)):
         return  # a shelf or rack for lifting gear, on a crane's column, a boom's rest
     for key, text in (("title", title), ("notes", notes)):
-        m = _search(_LIFTING_DEVICE_WORDS, _as_words(text)) if isinstance(text, str) else None
+        words = _as_words(text) if isinstance(text, str) else ""
+        m = next((m for m in _LIFTING_DEVICE_WORDS.finditer(words)
+                  if not _NEAR_WORDS.search(words[:m.start()])
+                  and not _DENIED.search(words[:m.start()])), None)
         if m:
             r.hold(f"the tag \"{NOT_LIFTING}\" says this is not a lifting device, but the "
                    f"{key} says {m.group(0)!r}: a lifting device is checked with its impact "
