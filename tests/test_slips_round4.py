@@ -698,3 +698,15 @@ def test_hoist_and_trolley_weights_in_n_together_over_a_fiftieth_are_not_held():
         'label = "trolley"\n')
     job = parse_job_text(text)
     assert not warned(job, "loads[1].value") and not warned(job, "loads[2].value")
+
+
+def test_a_slipped_command_before_a_job_file_is_named_with_the_command_meant(capsys, tmp_path):
+    from shopbeam.cli import main
+
+    job = tmp_path / "job.toml"
+    job.write_text(preset("demo.toml"), encoding="utf-8")
+    with pytest.raises(SystemExit) as exc:
+        main(["solv", str(job)])
+    assert exc.value.code == 2
+    err = capsys.readouterr().err
+    assert "'solv' is not a command" in err and "'solve'" in err

@@ -364,6 +364,16 @@ def main(argv: list[str] | None = None) -> int:
                                        "section", "shapes", "materials", "report"}
     parser = build_parser(with_library=not light)
     commands = {a for a in parser._subparsers._group_actions[0].choices}  # noqa: SLF001
+    if argv and argv[0] not in commands and not argv[0].startswith("-") and len(argv) > 1 \
+            and not argv[1].startswith("-") and not os.path.exists(argv[0]) \
+            and not argv[0].lower().endswith(".toml"):
+        # "shopbeam solv job.toml": a slip of the command, not a job for the text UI
+        import difflib  # noqa: PLC0415 - only on this slip
+
+        near = difflib.get_close_matches(argv[0], sorted(commands - {"ui"}), n=1, cutoff=0.6)
+        parser.error(f"{argv[0]!r} is not a command" + (f" (did you mean {near[0]!r}?)"
+                                                        if near else "")
+                     + "; commands are " + ", ".join(sorted(commands)))
     if not argv or (argv[0] not in commands and not argv[0].startswith("-")):
         argv = ["ui"] + argv
     args, extra = parser.parse_known_args(argv)
