@@ -710,3 +710,12 @@ def test_a_slipped_command_before_a_job_file_is_named_with_the_command_meant(cap
     assert exc.value.code == 2
     err = capsys.readouterr().err
     assert "'solv' is not a command" in err and "'solve'" in err
+
+
+def test_a_jib_style_sign_arm_tagged_not_lifting_is_rated():
+    import re
+
+    text = re.sub(r'title = "[^"]*"', 'title = "Jib-style arm for a sign, 6 ft"',
+                  preset("workbench-top.toml"), count=1)
+    text = re.sub(r"tags = \[[^\]]*\]", 'tags = ["bracket", "not-lifting"]', text, count=1)
+    assert not any("not-lifting" in r for r in capacity(parse_job_text(text)).not_rated)

@@ -3990,8 +3990,10 @@ _LIFTING_DEVICE_WORDS = re.compile(
     r"\b(lifting devices?|jib[- ]?cranes?|crane booms?|below[- ]the[- ]hook|monorail hoists?|"
     r"spreader (?:bars?|beams?)|lifting beams?|hoist beams?|(?:gantry|underhung|bridge) cranes?|"
     r"crane runways?|davit(?: arms?)?|monorails?|hoist (?:booms?|arms?)|"
-    r"(?:wall |pillar |mast |swing )?jibs?(?: (?:arms?|booms?))?|"
+    r"(?:wall|pillar|mast|swing)[- ]jibs?|jibs? (?:arms?|booms?)|"
     r"(?:chain|electric|wire[- ]rope|air|lever) hoists?)\b", re.IGNORECASE)
+_LIFTING_DEVICE_NOTES = re.compile(r"\b(lifting devices?|below[- ]the[- ]hook|jib[- ]?cranes?)\b",
+                                   re.IGNORECASE)
 # ...said of where the member is, not what it is ("beside the monorail", "under the runway")
 _NEAR_WORDS = re.compile(r"\b(?:beside|under|over|near|next to|below|above|along|behind|by|"
                          r"past|from)\s+(?:the\s+|a\s+)?(?:[\w-]+\s+){0,2}$", re.IGNORECASE)
@@ -4033,7 +4035,9 @@ def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
         return  # a shelf or rack for lifting gear, on a crane's column, a boom's rest
     for key, text in (("title", title), ("notes", notes)):
         words = _as_words(text) if isinstance(text, str) else ""
-        m = next((m for m in _LIFTING_DEVICE_WORDS.finditer(words)
+        # (the notes may speak of a device nearby: only the outright names are read there)
+        rule = _LIFTING_DEVICE_WORDS if key == "title" else _LIFTING_DEVICE_NOTES
+        m = next((m for m in rule.finditer(words)
                   if not _NEAR_WORDS.search(words[:m.start()])
                   and not _DENIED.search(words[:m.start()])), None)
         if m:
