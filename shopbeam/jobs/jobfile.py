@@ -3999,7 +3999,8 @@ _NEAR_WORDS = re.compile(r"\b(?:beside|under|over|near|next to|below|above|along
                          r"past|from)\s+(?:the\s+|a\s+)?(?:[\w-]+\s+){0,2}$", re.IGNORECASE)
 # ...but a shelf or rack that stores them, or stands on one's column, is no lifting device
 _STORES_WORDS = re.compile(r"\b(racks?|shel(?:f|ves|ving)|storage|store[sd]?|storing|bins?|"
-                           r"cabinets?|holders?|rests?|cradles?|for (?:the )?\w+ (?:attachments|parts|tools)|"
+                           r"cabinets?|holders?|rests?|cradles?|"
+                           r"for (?:the )?\w+ (?:attachments|parts|tools)|"
                            r"on the \w+(?: \w+)? (?:column|mast|post))\b", re.IGNORECASE)
 
 

@@ -4,7 +4,8 @@ Values are specified minimums (yield, tensile) and nominal moduli and densities,
 the units the standard states them in and converted exactly to SI. Look-up is tolerant
 (``"A500 Gr C"``, ``"a500c"``, ``"ASTM A500 grade C"`` all find ``A500-C``). An inline
 material in a job file is a table with ``e``, ``fy`` and ``density`` (plus optional
-``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fu_welded``, ``fb``, ``fv``, ``fc_perp``). A lumber one
+``name``, ``fu``, ``g``, ``kind``, ``fy_welded``, ``fu_welded``, ``fb``, ``fv``,
+``fc_perp``). A lumber one
 must give ``fv`` (no shear value is guessed from Fb); without ``fc_perp`` its bearing is not
 checked and it is not rated.
 
