@@ -1994,37 +1994,55 @@ async def test_stacked_notices_never_cover_the_safety_caution(tmp_path, preset):
 async def test_a_late_answer_is_said_late_not_shown_as_the_answer_to_the_edit(tmp_path,
                                                                                 monkeypatch):
     # on a heavy job the answer to an edit comes seconds later: meanwhile the summary and
-    # the field typed in say they are being checked, instead of the old answer's words
-    import time as _time
-
-    from shopbeam.tui import app as tui_app
+    # the field typed in say they are being checked, instead of the old answer's words.
+    # The solve is held until the test lets it go (no race with the clock)
     from shopbeam.tui.views import CHECKING_WORDS, STALE_WORDS
 
-    real = session_mod.evaluate_data
-
-    def slow(*args, **kw):
-        _time.sleep(2.5)
-        return real(*args, **kw)
-
+    gate, real = _held_solves(monkeypatch)
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
         js = app.job_screen
-        monkeypatch.setattr(session_mod, "evaluate_data", slow)
+        gate.clear()
         f = await focused(pilot, app, "job", "title")
         for event in events_of("Heavy"):  # typed, not waited out (`burst` settles)
             pilot.app._driver.send_message(event)
-        await pilot.pause(tui_app.STALE_MARK + 0.6)
+        assert await _until(pilot, lambda: js.stale_marked)  # the mark's timer came
         assert js.session.stale
-        assert js.stale_marked
         assert STALE_WORDS in js.summary_text()
         assert f._shown[0] == CHECKING_WORDS
-        await pilot.pause(2.5)
+        gate.set()
+        assert await _until(pilot, lambda: not js.session.stale)
         await settle(pilot)
-        assert not js.session.stale and not js.stale_marked
+        assert not js.stale_marked
         assert STALE_WORDS not in js.summary_text()
         assert f._shown[0] != CHECKING_WORDS
         assert f.input.value == "Heavy"
+
+
+def _held_solves(monkeypatch):
+    """Every solve of the text UI waits for the returned event (set: they run at once)."""
+    import threading
+
+    gate = threading.Event()
+    gate.set()
+    real = session_mod.evaluate_data
+
+    def held(*args, **kw):
+        gate.wait(30)
+        return real(*args, **kw)
+
+    monkeypatch.setattr(session_mod, "evaluate_data", held)
+    return gate, real
+
+
+async def _until(pilot, ok, seconds: float = 20.0) -> bool:
+    """Wait (in steps, the app running) until ok() holds; whether it came."""
+    for _ in range(int(seconds / 0.05)):
+        if ok():
+            return True
+        await pilot.pause(0.05)
+    return ok()
 
 
 @sync
@@ -2114,15 +2132,9 @@ async def test_a_new_point_load_on_a_lifting_i_beam_shows_the_bottom_flange_at_o
 async def test_the_rating_view_switched_to_before_the_answer_is_made_for_the_job_as_edited(
         tmp_path, monkeypatch):
     # an edit, then the Rating view before the answer came: the view had filed the old
-    # job's capacity under the new text and never made it again
-    import time as _time
-
-    real = session_mod.evaluate_data
-
-    def slow(*args, **kw):
-        _time.sleep(1.0)
-        return real(*args, **kw)
-
+    # job's capacity under the new text and never made it again. The solve is held until
+    # the test lets it go (no race with the clock)
+    gate, _real = _held_solves(monkeypatch)
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
@@ -2130,22 +2142,19 @@ async def test_the_rating_view_switched_to_before_the_answer_is_made_for_the_job
         await pilot.press("f7")
         await settle(pilot)
         f = await focused(pilot, app, "criteria", "criteria.safety_factor")
-        monkeypatch.setattr(session_mod, "evaluate_data", slow)
+        gate.clear()
         for event in events_of("3"):  # the factor typed, not waited out
             pilot.app._driver.send_message(event)
-        await pilot.pause(0.1)
+        assert await _until(pilot, lambda: js.session.stale and f.input.value == "3")
         await pilot.press("f11")  # the Rating view while the answer is on its way
-        await pilot.pause(0.2)
         view = js.query_one("#rating")
+        assert await _until(pilot, lambda: "Checking your last edit" in str(
+            view.query_one("#rating-body").render()))
         assert js.session.stale
-        assert "Checking your last edit" in str(view.query_one("#rating-body").render())
-        await pilot.pause(1.5)
-        await settle(pilot)
-        for _ in range(40):  # the capacity worker
-            if getattr(view, "_out", None):
-                break
-            await pilot.pause(0.25)
-        assert not js.session.stale and f.input.value == "3"
+        gate.set()
+        assert await _until(pilot, lambda: not js.session.stale)
+        assert await _until(pilot, lambda: bool(getattr(view, "_out", None)), 60)
         assert view._made_from[1] is js.session.evaluation.result
         assert view._for[0] == js.session.doc.text()
         assert "/ 3" in view._out  # first yield over the factor typed
+
