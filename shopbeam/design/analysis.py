@@ -476,8 +476,9 @@ def use_unchecked(job: Job) -> list[Unchecked]:
     road = getattr(job, "vehicle", "")
     parked = job.criteria.impact == 0 and not job.lifting  # loaded only while parked
     kind = getattr(job.material, "kind", "")
-    if road and FATIGUE_CHECKED not in job.tags and not fatigue.given(job) and not parked \
-            and kind in ("steel", "stainless"):
+    steel = kind in ("steel", "stainless")
+    on_road = bool(road) and FATIGUE_CHECKED not in job.tags and not parked
+    if on_road and steel and not fatigue.given(job):
         out.append(Unchecked(
             "fatigue under road loads",
             f"it reads like a member of a road vehicle or mobile machine ({road}): every bump "
@@ -488,8 +489,7 @@ def use_unchecked(job: Job) -> list[Unchecked]:
             "it checked; or add the tag \"fatigue-checked\" once it has been checked "
             "elsewhere, or \"not-vehicle\" if it is not on a vehicle",
             "AISC 360-16 Appendix 3"))
-    elif road and FATIGUE_CHECKED not in job.tags and not parked \
-            and kind not in ("steel", "stainless"):
+    elif on_road and not steel:
         # shopbeam's fatigue check is for steel (AISC 360-16 Appendix 3); a wood or aluminium
         # member on a vehicle has its own rules, which are not applied here
         rules = ("NDS 2018 has no fatigue rule: its bolted or nailed connections loosen and "

@@ -39,6 +39,12 @@ CAPPED_AT_YIELD = "capped at first yield"
 DEFAULT_SF = 1.67
 
 
+def job_omega(own: float, sf) -> float:
+    """The factor a bending limit state takes under the job's safety factor on yield: the
+    job's where larger than the limit state's own Omega (and than 1.67), its own otherwise."""
+    return sf if sf and sf > max(own, DEFAULT_SF) * (1 + 1e-12) else own
+
+
 def yield_cap_provenance(text: str, clause: str, source: str) -> tuple[str, str]:
     """A bending check's clause and source, naming the first-yield cap where its strength
     `text` says the cap set it."""

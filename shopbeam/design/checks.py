@@ -38,7 +38,7 @@ from shopbeam.design import aluminum, lifting, local, lumber, open_shapes
 from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noqa: F401 (re-exported)
                                    OMEGA_ADM, OMEGA_B, OMEGA_V, OMEGA_V_ROLLED_I, PSI_PA, basis_of,
                                    brace_points, cb_factor, nominal_moment, support_braces,
-                                   unbraced_segments, CAPPED_AT_YIELD, DEFAULT_SF,
+                                   unbraced_segments, CAPPED_AT_YIELD, job_omega,
                                    yield_cap_provenance)
 from shopbeam.design.lifting import (flange_unchecked, lifting_notes, lifting_unchecked,
                                      profile_of)
@@ -1177,15 +1177,14 @@ def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
             or fl.special:  # tees and angles: open_shapes caps each axis's own strength
         return fl
     text = fl.cap_text
-    if sf > max(fl.omega, DEFAULT_SF) * (1 + 1e-12):
+    if job_omega(fl.omega, sf) != fl.omega:
         text += f"; Omega_b {fl.omega:g} raised to the job's safety factor {sf:g}"
         fl = replace(fl, omega=sf)
     if fl.ltb is not None and fl.ltb[0] == "ADM":
         # ADM lateral-torsional buckling has its own Omega, 1.65 (the flexure's is the cap's,
         # 1.95 where rupture sets it): the job's factor replaces it where larger than 1.67
         # too, and the strength carried is scaled to the flexure's Omega (`_adm_ltb`)
-        om = sf if sf > max(OMEGA_ADM, DEFAULT_SF) * (1 + 1e-12) else OMEGA_ADM
-        fl = replace(fl, ltb=("ADM", fl.ltb[1][:-1] + (fl.omega / om,)))
+        fl = replace(fl, ltb=("ADM", fl.ltb[1][:-1] + (fl.omega / job_omega(OMEGA_ADM, sf),)))
     # first yield of a welded aluminium member is in the weld's heat-affected zone (Ftyw)
     fy = mat.fy_welded if welded and getattr(mat, "kind", "") == "aluminum" and getattr(
         mat, "fy_welded", None) else mat.fy
@@ -1253,15 +1252,14 @@ def segment_strength(fl, l1: float, cb: float, free: bool, why: str) -> tuple[fl
         return l1, f"{why} (governs over {fl.cap_text})"
     if cb * l1 < fl.cap and not fl.uses_cb:
         return l1, f"{fl.cap_text}; {why}"
+    buckling = f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
     if cb * l1 < fl.cap:
-        return (float(nominal_moment(fl.cap, l1, cb)),
-                f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else ""))
+        return float(nominal_moment(fl.cap, l1, cb)), buckling
     if fl.code_cap is not None and cb * l1 < fl.code_cap:
         # the job's first-yield cap sets it, below the code's own strength, which is this
         # length's buckling (not the cap's text's limit state): name that one, then the cap
         cut = fl.cap_text.find("; " + CAPPED_AT_YIELD)
-        return fl.cap, (f"{why}, Cb {cb:.3f}" + (" (free end: Cb 1.0)" if free else "")
-                        + (fl.cap_text[cut:] if cut >= 0 else ""))
+        return fl.cap, buckling + (fl.cap_text[cut:] if cut >= 0 else "")
     return fl.cap, fl.cap_text
 
 

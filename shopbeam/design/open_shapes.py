@@ -54,8 +54,8 @@ import math
 from dataclasses import dataclass
 
 from shopbeam import units
-from shopbeam.design.basis import (BASIS_WORDS, CAPPED_AT_YIELD, DEFAULT_SF, OMEGA_B,
-                                   basis_of, brace_points, cb_factor, yield_cap_provenance)
+from shopbeam.design.basis import (BASIS_WORDS, CAPPED_AT_YIELD, OMEGA_B, basis_of,
+                                   brace_points, cb_factor, job_omega, yield_cap_provenance)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.members.sections import principal_factors
 
@@ -342,10 +342,8 @@ def bending_check(job, sol, st, sec, cb_one: bool = False):
     bth = om != OMEGA_B  # Mn capped at 1.10 Fy S too (ASME BTH-1 3-2.3.1, from memory)
     # the job's safety factor on yield, where larger than Omega_b (and than 1.67), is taken
     # on every limit state of F9 and F10 too, as `checks.on_yield` does for the other shapes
-    sf = job.criteria.safety_factor
-    raised = bool(sf and sf > max(om, DEFAULT_SF) * (1 + 1e-12))
-    if raised:
-        om = sf
+    raised = job_omega(om, job.criteria.safety_factor) != om
+    om = job_omega(om, job.criteria.safety_factor)
     m = sol.moment
     braced, segs = _segments(job, st)
     worst = None

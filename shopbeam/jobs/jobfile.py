@@ -2234,11 +2234,8 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
     `total` ("-90 lbf" for "-90 lbf/ft"), which leaves the dead load a span's length too light
     and posts a higher live load. Held, with the per-length figure it came to; writing that
     figure as `value` (per length) says it is meant."""
-    normal = {normal_tag(t) for t in tags}
-    text = " | ".join(_as_words(t) for t in (title, notes))
-    floor = FLOOR_TAGS.intersection(normal) or (_search(_FLOOR_WORDS, text)
-                                                and not _NOT_FLOOR_WORDS.search(text))
-    if not floor or NOT_FLOOR in normal or section is None or material is None \
+    if not _floor_said(tags, title, notes) or NOT_FLOOR in {normal_tag(t) for t in tags} \
+            or section is None or material is None \
             or not isinstance(raw_loads, list):
         return
     try:
@@ -2663,6 +2660,18 @@ _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shel
 NOT_FLOOR = "not-floor"  # the tag that says a member read as a floor is not one
 
 
+def _floor_said(tags, title="", notes="") -> str:
+    """What reads the job as a floor, in words ("tag 'platform'", "the words 'loft floor'"):
+    a floor tag, or the floor words of the title or notes with nothing there that is no
+    floor (a roof, a shelf...); "" where nothing does."""
+    normal = {normal_tag(t) for t in tags}
+    if FLOOR_TAGS.intersection(normal):
+        return f"tag {sorted(FLOOR_TAGS.intersection(normal))[0]!r}"
+    text = " | ".join(_as_words(t) for t in (title, notes))
+    m = _search(_FLOOR_WORDS, text)
+    return f"the words {m.group(0)!r}" if m and not _NOT_FLOOR_WORDS.search(text) else ""
+
+
 def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, title="",
                       notes="") -> Criteria:
     """A floor, mezzanine or platform job (by its tags, not a roof) whose total-load limit is
@@ -2671,18 +2680,13 @@ def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, ti
     L/240 total alone can pass a floor that bounces past L/360 under the people and stock on
     it. Under gravity loads a total limit of L/360 or stricter covers the live one."""
     normal = {normal_tag(t) for t in tags}
-    text = " | ".join(_as_words(t) for t in (title, notes))
-    words = [m.group(0) for m in [_search(_FLOOR_WORDS, text)] if m and not
-             _NOT_FLOOR_WORDS.search(text)]
+    what = _floor_said(tags, title, notes)
     # a rack's or a shelf's "deck" is its decking, and a lifting device is no floor
-    if (length is None or "roof" in normal or NOT_FLOOR in normal
-            or not (FLOOR_TAGS.intersection(normal) or words)
+    if (length is None or "roof" in normal or NOT_FLOOR in normal or not what
             or (RACK_TAGS | SHELF_TAGS).intersection(normal)
             or is_lifting(tags, criteria.lifting)):
         return criteria
     live = LIVE_DEFLECTION_PRESETS["floor"]
-    what = (f"tag {sorted(FLOOR_TAGS.intersection(normal))[0]!r}"
-            if FLOOR_TAGS.intersection(normal) else f"the words {words[0]!r}")
     if criteria.live_deflection_ratio is not None:
         if criteria.live_deflection_ratio < live * (1 - 1e-9):
             # looser than a floor's: the code minimum for people and stock on it

@@ -34,7 +34,8 @@ from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
-                                STALE_WORDS, WHEEL_WORDS, load_warnings, problems_text)
+                                WHEEL_WORDS, late, late_words, load_warnings,
+                                problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
                                   from_one_line, one_line, shown_now, update_text)
 
@@ -256,9 +257,8 @@ class JobScreen(Screen):
         if self.session.stale and ev.job is None and not ev.problems:
             return "Reading and solving the job ..."
         warn = load_warnings(self.session)[:1]
-        if self.stale_marked and self.session.stale:
-            warn = [STALE_WORDS if ev.result is not None else
-                    "Checking your last edit ..."] + warn
+        if late(self):
+            warn = [late_words(ev)] + warn
         note = self.length_note()
         if note:  # a length change not settled yet: first, it can move the answer a lot
             warn = [note] + warn

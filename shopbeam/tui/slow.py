@@ -22,7 +22,7 @@ from textual.widgets.option_list import Option
 
 from shopbeam import units
 from shopbeam.jobs import library, storage
-from shopbeam.tui.views import View, problems_text, rows_in_words
+from shopbeam.tui.views import CHECKING_EDIT, View, problems_text, rows_in_words
 from shopbeam.tui.widgets import Choice, fit_text
 
 
@@ -61,7 +61,7 @@ class _SheetView(View):
             # the answer in hand is for the job before the last edit: this view's figures
             # are made from the answer to the job as it stands, once it comes (the screen
             # shows this view again then), never filed under the new text
-            body.update(Text(fit_text("Checking your last edit ... " + self.busy, width)))
+            body.update(Text(fit_text(f"{CHECKING_EDIT} {self.busy}", width)))
             self._for = None
             return
         if ev.result is None:

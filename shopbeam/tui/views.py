@@ -117,13 +117,12 @@ class View(VerticalScroll):
         typed in since the answer shown was worked out, while that answer is said to be
         late (`JobScreen.stale_marked`), says it is being checked instead."""
         session = session or getattr(self.screen, "session", None)
-        late = bool(getattr(self.screen, "stale_marked", False) and session is not None
-                    and session.stale)
+        behind = late(self)
         for f in self.fields():
             key = fields.get(f.key)
             if key is None:
                 continue
-            if late and getattr(f, "edited_version", 0) > session.evaluated_version:
+            if behind and getattr(f, "edited_version", 0) > session.evaluated_version:
                 f.show(CHECKING_WORDS)
                 continue
             msg = in_words(ev.message_for(key, elements=True))
@@ -1237,8 +1236,23 @@ def problems_text(ev) -> str:
 
 # said while the answer to an edit is late (a heavy job): the summary and the Results view,
 # and beside a field typed in since the answer shown was worked out
-STALE_WORDS = "Checking your last edit ... the figures shown are for the job before it."
+CHECKING_EDIT = "Checking your last edit ..."
+STALE_WORDS = CHECKING_EDIT + " the figures shown are for the job before it."
 CHECKING_WORDS = "checking what was typed ..."
+
+
+def late(view) -> bool:
+    """Whether the answer the screen of `view` shows is for the job before an edit and said
+    to be so (`JobScreen.stale_marked`, STALE_MARK after the edit)."""
+    screen = view.screen
+    session = getattr(screen, "session", None)
+    return bool(getattr(screen, "stale_marked", False) and session is not None
+                and session.stale)
+
+
+def late_words(ev) -> str:
+    """The late answer's words: the figures shown are the old job's (none shown: checking)."""
+    return STALE_WORDS if ev.result is not None else CHECKING_EDIT
 
 
 class ResultsView(View):
@@ -1260,9 +1274,8 @@ class ResultsView(View):
         ev = session.evaluation
         width = max(40, self.app.size.width - 6)
         q = lambda i: self.query_one(i, Static)  # noqa: E731
-        late = [STALE_WORDS if ev.result is not None else "Checking your last edit ..."] \
-            if getattr(self.screen, "stale_marked", False) and session.stale else []
-        top = "\n".join(late + load_warnings(session)
+        behind = late(self)
+        top = "\n".join(([late_words(ev)] if behind else []) + load_warnings(session)
                         + ([problems_text(ev)] if ev.errors else []))
         q("#res-problems").update(_text(top))
         q("#res-problems").display = bool(top)
@@ -1277,7 +1290,7 @@ class ResultsView(View):
             q("#res-verdict").update(_text(drawing.verdict_line(r) + note))
             q("#res-verdict").set_class(not r.ok, "-fail")
             q("#res-checks").update(_text(
-                ("CHECKS (of the job before your last edit: checking it now)\n" if late else
+                ("CHECKS (of the job before your last edit: checking it now)\n" if behind else
                  "CHECKS\n") + drawing.checks_table(r)))
             q("#res-reactions").update(_text(
                 "REACTIONS (what each support does to the beam)\n" + drawing.reactions_table(r)))
@@ -1312,13 +1325,13 @@ class PlotsView(View):
         r = ev.result
         # drawn only while this view is shown (the screen shows the current view alone),
         # and not again for the answer and size it already shows (switching back is free)
-        late = bool(getattr(self.screen, "stale_marked", False) and session.stale)
+        behind = late(self)
         was = getattr(self, "_drawn_for", None)
-        if was is not None and was[0] is ev and was[1:] == (width, height, late):
+        if was is not None and was[0] is ev and was[1:] == (width, height, behind):
             return
-        self._drawn_for = (ev, width, height, late)
+        self._drawn_for = (ev, width, height, behind)
         head = self.query_one("#plot-problems", Static)
-        mark = STALE_WORDS + "\n" if late else ""
+        mark = STALE_WORDS + "\n" if behind else ""
         if r is not None and r.state_solution is not None:
             # patterned loads: draw the pattern that governs, and say which it is
 
@@ -1326,7 +1339,7 @@ class PlotsView(View):
             r = replace(r, solution=r.state_solution)
         else:
             head.update(_text(mark + problems_text(ev)))
-        head.display = late or r is None or ev.result.state_solution is not None
+        head.display = behind or r is None or ev.result.state_solution is not None
         for name in drawing.PLOT_KINDS:
             st = self.query_one(f"#plot-{name}", Static)
             st.display = r is not None
