@@ -67,8 +67,10 @@ class InputErrors(Exception):
         self.problems = problems
 
     def __str__(self) -> str:
-        n = len(self.problems)
-        head = f"{n} problem{'s' if n != 1 else ''} in the job:"
+        n = sum(not p.warning for p in self.problems)
+        w = len(self.problems) - n
+        head = (f"{n} problem{'s' if n != 1 else ''} in the job"
+                + (f" (and {w} warning{'s' if w != 1 else ''}):" if w else ":"))
         return "\n".join([head] + ["  " + p.located() for p in self.problems])
 
 

@@ -1580,3 +1580,97 @@ def test_a_closed_set_value_is_read_whatever_its_case_and_spacing(key, value, re
     job = parse_job_text(text)
     got = job.criteria.basis if key == "basis" else job.wood.duration
     assert str(got) == read
+
+
+# ------------------------------------------------------------------ the command line's wording
+def _simple(extra_beam="", supports=None, loads=None):
+    sup = supports if supports is not None else (
+        '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "10 ft"\ntype = "roller"\n')
+    lds = loads if loads is not None else (
+        '[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-500 lbf"\nlabel = "hook"\n')
+    return ('schema = 1\ntitle = "Wording check"\n[beam]\nlength = "10 ft"\n'
+            f'section = "HSS4x4x1/4"\nmaterial = "A500-C"\n{extra_beam}{sup}{lds}')
+
+
+def test_the_problem_count_counts_errors_and_names_the_warnings_apart(tmp_path):
+    # an error (a bare number) beside a warning (a misspelt key): one problem, one warning
+    p = tmp_path / "j.toml"
+    p.write_text(_simple(loads='[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-500"\n'
+                               'lable = "hook"\n'))
+    r = run("check", str(p))
+    assert r.returncode == 2
+    head = r.stderr.splitlines()[0]
+    assert "1 problem in the job (and 1 warning):" in head, head
+
+
+def test_a_refused_support_count_is_said_alone_without_a_single_span_warning():
+    sups = "".join(f'[[supports]]\nat = "{i * 0.04:.2f} ft"\ntype = "{"pin" if i == 0 else "roller"}"\n'
+                   for i in range(251))
+    text = _simple(supports=sups, loads='[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n'
+                                        'patterned = true\n')
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    probs = e.value.problems
+    assert any("more than shopbeam takes" in p.message for p in probs)
+    assert not any("single span" in p.message for p in probs), [p.message for p in probs]
+    assert all(p.line is not None for p in probs)  # the [[supports]] header's line
+
+
+@pytest.mark.parametrize("name", ["supports", "loads"])
+def test_a_list_table_written_twice_with_single_brackets_says_double_brackets(name):
+    if name == "supports":
+        text = _simple(supports='[supports]\nat = "0 ft"\ntype = "pin"\n'
+                                '[supports]\nat = "10 ft"\ntype = "roller"\n')
+    else:
+        text = _simple(loads='[loads]\ntype = "point"\nat = "3 ft"\nvalue = "-5 lbf"\n'
+                             '[loads]\ntype = "point"\nat = "6 ft"\nvalue = "-5 lbf"\n')
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    msg = " ".join(p.message for p in e.value.problems)
+    assert f"[[{name}]]" in msg and "double brackets" in msg, msg
+    assert "put all its keys under the first header" not in msg  # that would drop one
+
+
+def test_a_capitalised_list_table_is_refused_at_its_header_line():
+    text = _simple(loads='[[Loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-500 lbf"\n')
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    line = next(i + 1 for i, x in enumerate(text.splitlines()) if x == "[[Loads]]")
+    got = [p for p in e.value.problems if p.key == "Loads"]
+    assert got and got[0].line == line, [(p.key, p.line) for p in e.value.problems]
+
+
+def test_every_slip_inside_a_typed_in_material_is_named_at_once():
+    text = _simple(extra_beam="").replace(
+        'material = "A500-C"\n', "") + ""
+    text = text.replace("[[supports]]", '[beam.material]\ne = "29000"\nfy = "36 ksi/in"\n'
+                        '[[supports]]', 1)
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    keys = {p.key for p in e.value.problems if not p.warning}
+    assert {"beam.material.e", "beam.material.fy", "beam.material.density"} <= keys, keys
+
+
+def test_every_slip_inside_a_typed_in_section_is_named_at_once():
+    text = _simple().replace('section = "HSS4x4x1/4"\n', "").replace(
+        "[[supports]]", '[beam.section]\nshape = "rect-tube"\ndepth = "4 in"\nwall = "1/4"\n'
+        'colr = "red"\n[[supports]]', 1)
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    keys = {p.key for p in e.value.problems if not p.warning}
+    assert {"beam.section.width", "beam.section.wall", "beam.section.colr"} <= keys, keys
+
+
+def test_size_names_the_input_warnings_in_text_json_and_stderr(tmp_path):
+    import json
+
+    p = tmp_path / "j.toml"
+    p.write_text(_simple(loads='[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "-500 lbf"\n'
+                               'lable = "hook"\n'))
+    r = run("size", str(p), "--kind", "HSS")
+    assert r.returncode == 0, r.stderr
+    assert "INPUT WARNINGS" in r.stdout and "lable" in r.stdout
+    r = run("size", str(p), "--kind", "HSS", "--json")
+    assert r.returncode == 0, r.stderr
+    assert any("lable" in w for w in json.loads(r.stdout)["warnings"])
+    assert "lable" in r.stderr

@@ -46,6 +46,7 @@ def cmd_size(args) -> int:
     res = sizing.size(job, args.kind, md, stock, confirm=min(args.confirm, max(1, args.top)))
     if args.json:
         print(dumps_finite(sizing.to_json(res, args.top), args.job))
+        warnings_to_stderr(res.job)
     else:
         print(sizingreport.render(res, args.top), end="")
     return 0

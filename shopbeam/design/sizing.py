@@ -1421,4 +1421,5 @@ def to_json(res: SizeResult, top: int | None = None) -> dict:
             "basis": BASIS_WORDS[basis_of(res.job)], "cautions": cautions_for(res.job.tags, res.job.caution_lifting),
             "material": getattr(res.job.material, "key", ""),
             "material_note": res.material_note, "checked_in_full": res.full_checks,
-            "screened_not_checked": len(res.screened_only)}
+            "screened_not_checked": len(res.screened_only),
+            "warnings": [p.located() for p in res.job.warnings if p.warning]}

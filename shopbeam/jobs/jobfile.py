@@ -322,6 +322,8 @@ class _Reader:
         while k:
             if k in self.lines:
                 return self.lines[k]
+            if f"{k}[0]" in self.lines:  # a [[table]] named as a whole: its first header
+                return self.lines[f"{k}[0]"]
             if k.endswith("]"):
                 k = k[: k.rfind("[")]
             elif "." in k:
@@ -2395,7 +2397,7 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
     raw = raw_loads if isinstance(raw_loads, list) else []
     by_key = {ld.key: ld for ld in loads}
     pieces = None
-    if length is not None:
+    if length is not None and supports:  # none read (too many, or none given): not judged
         try:
             pieces = len(segments(Beam(length=length, ei=1.0, supports=tuple(supports))))
         except Exception:  # noqa: BLE001 - geometry problems are reported elsewhere
@@ -5564,6 +5566,10 @@ def _twice_words(msg: str, text: str, line: int | None) -> str:
                       if (h := _HEADER_LINE.match(x)) and h.group(1) == name
                       and not x.lstrip().startswith("[[")), None)
         where = f"lines {first} and {line}" if first else f"line {line}"
+        if name in ("supports", "loads", "moving"):  # a list of tables written with [ ]
+            return (f"[{name}] is written twice ({where}) with single brackets: every one of "
+                    f"the {name} is its own [[{name}]] table (double brackets); write "
+                    f"[[{name}]] on each header")
         return (f"the table [{name}] is written twice ({where}): a job has one [{name}]; put "
                 "all its keys under the first header and delete the second")
     if "Cannot overwrite" in msg and head and "." in head.group(1):

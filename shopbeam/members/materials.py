@@ -22,7 +22,7 @@ from dataclasses import dataclass, field
 from functools import lru_cache
 from typing import Mapping
 
-from shopbeam.errors import InputError
+from shopbeam.errors import InputError, InputErrorGroup
 from shopbeam.units import parse
 
 KSI = 6.894757293168361e6  # Pa (lbf/in^2 x 1000, exact from the international pound and inch)
@@ -433,29 +433,38 @@ def _plausible_wood(spec: Mapping, vals: dict, key: str) -> None:
 
 def _inline(spec: Mapping, key: str) -> Material:
     allowed = set(_INLINE_KEYS) | {"name", "kind", "key", "source"}
+    bad = []  # every slip of the table named at once, as the rest of the job's are
     for k in spec:
         if k not in allowed:
             import difflib
 
             close = difflib.get_close_matches(k, list(allowed), n=1)
             hint = f" (did you mean {close[0]!r}?)" if close else ""
-            raise InputError(f"unknown key {k!r} in the material table{hint}; keys are "
-                             f"{', '.join(sorted(allowed))}", f"{key}.{k}")
+            bad.append(InputError(f"unknown key {k!r} in the material table{hint}; keys are "
+                                  f"{', '.join(sorted(allowed))}", f"{key}.{k}"))
     kind = spec.get("kind", "custom")
     if kind not in KINDS:
-        raise InputError(f"kind must be one of {', '.join(KINDS)}, not {kind!r}", f"{key}.kind")
+        bad.append(InputError(f"kind must be one of {', '.join(KINDS)}, not {kind!r}",
+                              f"{key}.kind"))
     vals = {}
     for k, unit_kind in _INLINE_KEYS.items():
         if k in spec:
-            vals[k] = parse(spec[k], unit_kind, f"{key}.{k}", positive=True)
-    if "fy" not in vals and "fb" in vals:
+            try:
+                vals[k] = parse(spec[k], unit_kind, f"{key}.{k}", positive=True)
+            except InputError as exc:
+                bad.append(exc)
+    if "fy" not in spec and "fb" in vals:
         vals["fy"] = vals["fb"]
     for k in ("e", "fy", "density"):
-        if k not in vals:
+        if k not in vals and not (k in spec or k == "fy" and "fb" in spec):
             what = {"e": "the elastic modulus e (e.g. \"29000 ksi\")",
                     "fy": "the yield strength fy (e.g. \"36 ksi\"; for lumber fb)",
                     "density": "the density (e.g. \"490 lb/ft^3\")"}[k]
-            raise InputError(f"an inline material needs {what}", f"{key}.{k}")
+            bad.append(InputError(f"an inline material needs {what}", f"{key}.{k}"))
+    if len(bad) == 1:
+        raise bad[0]
+    if bad:
+        raise InputErrorGroup(bad)
     if vals["e"] < 1e9 or vals["e"] > 1e12:
         raise InputError(f"e = {spec['e']!r} is not a plausible elastic modulus (steel is "
                          "29000 ksi, aluminium 10100 ksi, lumber about 1600 ksi)", f"{key}.e")

@@ -67,14 +67,16 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
         raise InputError(f"unknown shape {raw_shape!r}{hint}; shapes are "
                          + ", ".join(SHAPES), f"{key}.shape")
     allowed = _KEYS[shape] | _COMMON
+    bad = []  # every slip of the table named at once, as the rest of the job's are
     for k in spec:
         if k not in allowed and k in BEAM_KEYS:
-            raise InputError(f"{k} is read as part of [beam.section] because it comes after "
-                             "that header (a TOML table runs until the next header): move the "
-                             f"{k} line above [beam.section], into [beam]", f"{key}.{k}")
-        if k not in allowed:
-            raise InputError(f"unknown key {k!r} for {_a(shape)}{_suggest(k, allowed)}; "
-                             f"keys are {', '.join(sorted(allowed))}", f"{key}.{k}")
+            bad.append(InputError(f"{k} is read as part of [beam.section] because it comes "
+                                  "after that header (a TOML table runs until the next "
+                                  f"header): move the {k} line above [beam.section], into "
+                                  "[beam]", f"{key}.{k}"))
+        elif k not in allowed:
+            bad.append(InputError(f"unknown key {k!r} for {_a(shape)}{_suggest(k, allowed)}; "
+                                  f"keys are {', '.join(sorted(allowed))}", f"{key}.{k}"))
     missing = [k for k in _REQUIRED[shape] if k not in spec]
     if missing:
         req, opt = shape_keys(shape)
@@ -82,9 +84,26 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
                           for k in req + opt)
         need = missing[0] if len(missing) == 1 else \
             ", ".join(missing[:-1]) + " and " + missing[-1]
-        raise InputError(f"shape = \"{shape}\" needs {need}: its keys are {meant}"
-                         + (f" (optional: {', '.join(opt)})" if opt else ""),
-                         f"{key}.{missing[0]}")
+        bad.append(InputError(f"shape = \"{shape}\" needs {need}: its keys are {meant}"
+                              + (f" (optional: {', '.join(opt)})" if opt else ""),
+                              f"{key}.{missing[0]}"))
+    if shape != "custom":  # (custom names all its own slips at once)
+        for k in spec:  # each size as _build reads it
+            try:
+                if k == "wall":
+                    _wall(spec, key, "tube")
+                elif k == "plate_thickness" or (
+                        k in ("depth", "width") and shape in ("rect-bar", "flat-bar")):
+                    _sheet(spec, k, key)
+                elif k in _KEYS[shape] and k not in _NOT_LENGTHS:
+                    _len(spec, k, key, positive=k not in ("corner_radius", "fillet_radius",
+                                                          "gap"))
+            except InputError as exc:
+                bad.append(exc)
+    if len(bad) == 1:
+        raise bad[0]
+    if bad:
+        raise InputErrorGroup(bad)
     if "axis" in spec:
         ax = _choice(spec, "axis", ("strong", "weak"), "strong", key)
     else:
@@ -107,6 +126,9 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
 
 
 _ORIENT_KEYS = {"designation", "axis", "leg", "toes", "flange", "name"}
+# a shape's keys that are not a plain length (choices, catalog names, a wall read its own way)
+_NOT_LENGTHS = frozenset({"leg", "toes", "flange", "channel", "arrangement", "base", "plate",
+                          "design_wall"})
 # [beam]'s own keys: written below a [beam.section] header, TOML puts them in the section
 BEAM_KEYS = frozenset({"length", "section", "material", "self_weight", "members", "levels",
                        "welded", "braces", "braced", "braces_flange", "bearing", "restrained",

@@ -91,6 +91,12 @@ def render(res: SizeResult, top: int = 15) -> str:
             lines.append(f"  {r.designation[:22]:<22} ratio{least} {r.ratio:.3f} ({r.governing})")
     for s in res.skipped[:5]:
         lines.append(f"  skipped {s}")
+    warns = [p for p in job.warnings if p.warning]
+    if warns:  # as solve and capacity print them: a slip held in every row is named here
+        lines.append("")
+        lines.append("INPUT WARNINGS")
+        for p in warns:
+            lines += wrap(p.located(), 78, initial_indent="  ", subsequent_indent="  ")
     lines.append("")
     for c in cautions_for(job.tags, job.caution_lifting):
         lines += wrap(c, 78, initial_indent="!! ", subsequent_indent="!! ")
