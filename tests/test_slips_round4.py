@@ -719,3 +719,46 @@ def test_a_jib_style_sign_arm_tagged_not_lifting_is_rated():
                   preset("workbench-top.toml"), count=1)
     text = re.sub(r"tags = \[[^\]]*\]", 'tags = ["bracket", "not-lifting"]', text, count=1)
     assert not any("not-lifting" in r for r in capacity(parse_job_text(text)).not_rated)
+
+
+# a light joist's slipped deck total: neither under half its own weight nor a fiftieth of its
+# live load, but over the live load's tributary width lighter than any deck
+JOIST = '''schema = 1
+title = "Loft floor joist, 2x10 DF-L No.2, 16 in on centre, 12 ft"
+units = "us"
+tags = ["loft", "joist"]
+[beam]
+length = "12 ft"
+section = "2x10"
+material = "DF-L-2"
+repetitive = true
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "12 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-40 psf"
+width = "16 in"
+label = "light storage"
+[[loads]]
+type = "uniform"
+{dead}
+label = "plywood deck"
+case = "dead"
+[criteria]
+deflection = "floor"
+'''
+
+
+def test_a_light_joist_s_deck_total_lighter_than_any_deck_over_its_width_is_warned():
+    job = parse_job_text(JOIST.format(dead='total = "-24 lbf"'))
+    said = [p.message for p in job.warnings if p.warning and p.key == "loads[1].total"]
+    assert said and "tributary width" in said[0] and "-24 lbf/ft" in said[0], said
+    # 24 lbf/ft as meant, and a real 1/2 in deck of 2 psf given as a total: no message
+    for dead in ('value = "-24 lbf/ft"', 'total = "-32 lbf"'):
+        job = parse_job_text(JOIST.format(dead=dead))
+        assert not [p for p in job.warnings if p.warning and p.key.startswith("loads[1]")], dead

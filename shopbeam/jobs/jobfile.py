@@ -2229,13 +2229,21 @@ _DECK_WORDS = re.compile(r"\b(decks?|decking|joists?|floor\w*|slabs?|grating|pla
                          r"superimposed|partitions?)\b", re.IGNORECASE)
 
 
+# The lightest floor deck on its own: 1/2 in plywood, about 1.6 psf (ASCE 7-16 Table C3.1-1a,
+# plywood 0.4 psf per 1/8 in of thickness, from memory); a floor's dead load spread over its
+# tributary width below it is a total typed for a per-length figure, or a deck left out
+LIGHTEST_DECK = 1.6 * 47.880259  # Pa
+
+
 def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, material,
                       system: str, title="", notes="") -> None:
     """A floor's dead spread load (deck, joists, finishes) given as a total that spreads to less
     than half the member's own weight per length: most often the per-length figure typed as
     `total` ("-90 lbf" for "-90 lbf/ft"), which leaves the dead load a span's length too light
-    and posts a higher live load. Held, with the per-length figure it came to; writing that
-    figure as `value` (per length) says it is meant."""
+    and posts a higher live load. Held where it is light by both the member's own weight and
+    its live load, warned where by one, or where it spreads over the live load's tributary
+    width to less than a plywood deck alone weighs; the message gives the per-length figure
+    it came to, and writing that as `value` (per length) says it is meant."""
     if not _floor_said(tags, title, notes) or NOT_FLOOR in {normal_tag(t) for t in tags} \
             or section is None or material is None \
             or not isinstance(raw_loads, list):
@@ -2248,6 +2256,9 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
     live_w = max((max(abs(ld.w1), abs(ld.w2 if ld.kind == "linear" else ld.w1))
                   for ld in loads if ld.case == "live" and ld.kind in ("uniform", "linear")),
                  default=0.0)
+    # the floor's tributary width, where its live load is given per area
+    width = max((w for k, w in r.widths.items() if any(
+        ld.key == k and ld.case == "live" for ld in loads)), default=0.0)
     for ld in loads:
         i = int(ld.key[6:-1]) if ld.key.startswith("loads[") else -1
         raw = raw_loads[i] if 0 <= i < len(raw_loads) else None
@@ -2261,7 +2272,11 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
             (f"less than half the member's own weight ({units.fmt(own, 'line_load', system)})",
              per < 0.5 * own),
             (f"under a fiftieth of the live load it carries "
-             f"({units.fmt(live_w, 'line_load', system)})", per < live_w / 50)) if yes]
+             f"({units.fmt(live_w, 'line_load', system)})", per < live_w / 50),
+            (f"{units.fmt(per / (width or 1.0), 'area_load', system)} over the live load's "
+             f"{units.fmt(width, 'length', system)} tributary width, lighter than a 1/2 in "
+             f"plywood deck alone ({units.fmt(LIGHTEST_DECK, 'area_load', system)})",
+             width > 0 and per / width < LIGHTEST_DECK)) if yes]
         if per <= 0 or not light:
             continue
         name = f" ({ld.label})" if ld.label else ""
@@ -2273,7 +2288,7 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
                 f"{'ft' if system == 'us' else 'm'}\" (a too light dead load posts a higher "
                 "live load); if the total is right, write it as value = "
                 f"\"{'-' if ld.total_force < 0 else ''}{per_words}\"")
-        if len(light) == 2:  # both: held
+        if per < 0.5 * own and per < live_w / 50:  # light by both the member's measures
             r.hold(said + ". No rating is posted while it stands", f"{ld.key}.total",
                    f"{ld.key}{name}: total = {raw['total']!r} spreads to {per_words}, under "
                    "half the member's own weight and a fiftieth of its live load per length: "
