@@ -361,11 +361,40 @@ _US_PREFIX_OK = {"kiloforce_pound", "kilopound", "kilopound_force_per_square_inc
                  "megapound_force_per_square_inch"}
 
 
+# Units no shop writes a beam's load, size or stress in, that the unit registry still reads:
+# typed, they are a slip of letters ("ftlb" is femto-troy-pounds, a force of nothing; "tlb"
+# a troy pound, 0.82 lb), or a unit of two sizes ("cwt": 100 lb in the US, 112 lb in the UK)
+_NO_SHOP_UNITS = {
+    "troy_pound": "a troy pound (0.82 lb, for precious metals)",
+    "troy_ounce": "a troy ounce", "apothecary_pound": "an apothecary pound (0.82 lb)",
+    "apothecary_ounce": "an apothecary ounce", "pennyweight": "a pennyweight",
+    "grain": "a grain (1/7000 lb)", "dram": "a dram", "scruple": "a scruple",
+    "carat": "a carat (0.2 g)", "dyne": "a dyne (10 micronewtons)",
+    "poundal": "a poundal (0.03 lbf)", "slug": "a slug (32.2 lb)",
+    "hundredweight": "a hundredweight (100 lb in the US, 112 lb in the UK)",
+    "long_hundredweight": "a hundredweight (112 lb in the UK, 100 lb in the US)",
+    "stone": "a stone (14 lb)",
+    "centinewton": "a centinewton", "decinewton": "a decinewton (decanewton is daN)",
+    "centigram": "a centigram", "decigram": "a decigram",
+}
+_TINY_PREFIX = re.compile(r"^(yocto|zepto|atto|femto)")
+
+
 def _odd_prefix(text: str, key: str, word: str, u) -> None:
     """A metric prefix no shop puts on a force or a mass reads as a slip, not a value: "mt"
-    (shorthand for metric tons) is milli-tonnes to pint, "mkip" a thousandth of a kip. Refused,
-    saying what it would have read as and what to write."""
+    (shorthand for metric tons) is milli-tonnes to pint, "mkip" a thousandth of a kip; so
+    does a unit no shop writes a beam in (`_NO_SHOP_UNITS`). Refused, saying what it would
+    have read as and what to write."""
     for name in (str(c) for c in getattr(u, "_units", {})):
+        if name in _NO_SHOP_UNITS or _TINY_PREFIX.match(name):
+            tiny = _TINY_PREFIX.match(name)
+            what = _NO_SHOP_UNITS.get(name) or (
+                f"{tiny.group(1)}-{name[tiny.end():].replace('_', ' ')} (a {tiny.group(1)}- "
+                "prefix: next to nothing)")
+            raise InputError(f"{text!r}: {word!r} reads as {what}, a unit no beam job is "
+                             "written in, so it reads as a slip; write lbf, kip, N, kN, kg or "
+                             "t for a force, lbf*ft or kN*m for a moment (ft-lb is written "
+                             "with a hyphen or a *, not \"ftlb\")", key)
         if name in ("millimetric_ton", "megametric_ton"):
             big = name.startswith("mega")
             raise InputError(f"{text!r}: {word!r} reads as {'mega' if big else 'milli'}-tonnes "

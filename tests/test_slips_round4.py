@@ -204,6 +204,20 @@ def test_a_metric_prefix_on_a_us_unit_is_refused_as_a_slipped_letter(typed, kind
         units.parse(typed, kind, "loads[0].value")
 
 
+@pytest.mark.parametrize("typed, kind", [
+    ("150 ftlb", "moment"), ("150 ftlb", "force"),  # femto-troy-pounds: a force of nothing
+    ("-300 tlb", "force"),                          # a troy pound, 0.82 lb
+    ("-3 cwt", "force"),                            # 100 lb in the US, 112 lb in the UK
+    ("-50 dyn", "force"), ("-20 slug", "force"), ("-40 dN", "force"),  # dN for daN
+    ("-100 gr/ft", "line_load")])
+def test_a_unit_no_beam_job_is_written_in_is_refused_as_a_slip(typed, kind):
+    from shopbeam import units
+    from shopbeam.errors import InputError
+
+    with pytest.raises(InputError, match="no beam job is written in"):
+        units.parse(typed, kind, "loads[0].value")
+
+
 @pytest.mark.parametrize("typed, kind, want", [
     ("-3 klbf", "force", -3000 * 4.4482216152605),      # a kip, as shops write it
     ("-2 klb", "force", -2000 * 4.4482216152605),
