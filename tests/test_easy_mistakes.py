@@ -1694,14 +1694,16 @@ def test_a_load_labelled_uplift_that_pushes_down_is_not_rated():
 
 
 @pytest.mark.parametrize("title", ["Rack level 2, bay A", "Skid beams, bay A",
-                                   "Level 2 beams between uprights"])
+                                   "Level 2 beams between uprights",
+                                   "Pallets on skids, bay 3 beam", "Dock rack beam, pallets"])
 def test_a_rack_named_in_plain_words_is_held_until_tagged(title):
     # read like a storage rack, the member is rated with no impact allowance (ANSI MH16.1,
     # from memory: 25 % of one unit load) unless tagged: held, as "pallet rack" already was
     job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{title}"'))
     assert any("reads like a storage rack" in p.message for p in warnings(job))
     for other in ("Pipe rack crossbeam", "Rack and pinion guard", "Hose rack rail",
-                  "Towel drying rack"):
+                  "Towel drying rack", "Plant beam under the chiller skid",
+                  "Skid-mounted pump support", "Loading dock bumper rail for pallets"):
         job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{other}"'))
         assert not any("reads like a storage rack" in p.message for p in warnings(job)), other
 

@@ -2558,8 +2558,15 @@ _RACK_SOFT = re.compile(
     r"(?<!roof )(?<!hose )(?<!towel )(?<!drying )(?<!coat )(?<!tool )(?<!gun )(?<!spice )"
     r"(?<!wine )(?<!shoe )(?<!hat )(?<!dish )(?<!plate )(?<!luggage )(?<!magazine )"
     r"(?<!server )(?<!clamp )(?<!ladder )(?<!hose-)(?<!tool-)(?<!bike-)(?<!pipe-)"
-    r"racks?(?! and pinion)(?!-and-pinion)|skids?|"
+    r"racks?(?! and pinion)(?!-and-pinion)|"
+    # a skid of goods, not a plant's equipment skid (a chiller or pump on its frame)
+    r"(?<!chiller )(?<!pump )(?<!equipment )(?<!compressor )(?<!process )(?<!tank )"
+    r"(?<!generator )(?<!boiler )(?<!fan )(?<!motor )(?<!heater )(?<!filter )(?<!unit )"
+    r"skids?(?![- ]mounted)|"
     r"beam levels?|levels? \d+ beams?|longspan)\b", re.IGNORECASE)
+
+
+_DOCK_WORDS = re.compile(r"\b(?:loading[- ])?docks?\b(?![- ]?(?:side )?rack)", re.IGNORECASE)
 
 
 def _judged_longest(supports, length) -> float | None:
@@ -4444,6 +4451,9 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
         # pallets, a bar-stock or lumber arm: a rack unless it is a floor that
         # carries pallets (a platform or mezzanine)
         said = _words_found(_RACK_SOFT, title, notes, tags, raw_loads)
+        if said and _DOCK_WORDS.search(" | ".join(_as_words(t) for t in (title, notes))):
+            # pallets at a loading dock (a bumper rail, a dock plate) are not stored on a rack
+            said = [w for w in said if not re.search(r"pallet", w, re.IGNORECASE)]
     if not said:
         return
     hint = "; ".join(said[:3])
