@@ -776,3 +776,27 @@ def test_a_light_joist_s_deck_total_lighter_than_any_deck_over_its_width_is_warn
     for dead in ('value = "-24 lbf/ft"', 'total = "-32 lbf"'):
         job = parse_job_text(JOIST.format(dead=dead))
         assert not [p for p in job.warnings if p.warning and p.key.startswith("loads[1]")], dead
+
+
+@pytest.mark.parametrize("notes, held", [
+    ("Hand chain hoist hung from a plate welded under the web at mid-span; it does not travel",
+     False),
+    ("Chain hoist on a pad eye at mid-span", False),
+    ("Chain hoist on a pad eye, moved along on a push trolley", True),  # a trolley named too
+    ("Hand chain hoist at mid-span", True),
+])
+def test_a_lug_on_a_monorail_profile_stands_where_the_notes_say_the_pick_point_is_fixed(
+        notes, held):
+    # a simple span has only monorail lifting profiles, so a fixed hoist on a welded lug must
+    # pick one: its notes saying so let lug = true stand, unless they name a trolley or clamp
+    import re
+
+    text = preset("monorail-hoist-beam.toml")
+    slip = text.replace("wheels = 4", "lug = true", 1).replace(
+        'label = "hoist and trolley"', 'label = "chain hoist"', 1)
+    slip = re.sub(r'^title = "[^"]*"', 'title = "Hoist beam over the lathe, S8x18.4"', slip,
+                  count=1, flags=re.M)
+    slip = re.sub(r'^notes = "[^"]*"', f'notes = "{notes}"', slip, count=1, flags=re.M)
+    assert notes in slip
+    job = parse_job_text(slip)
+    assert bool(warned(job, "loads[0].lug")) == held, notes

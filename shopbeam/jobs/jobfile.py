@@ -1335,7 +1335,15 @@ _FLANGE_TIP_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?
                                r"push[- ]trolley|geared[- ]trolley)\b", re.IGNORECASE)
 
 
-def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=()) -> None:
+# The title or notes saying the load hangs at a fixed point, welded under the web
+_FIXED_PICK_WORDS = re.compile(
+    r"\b(?:lugs?|pad[- ]?eyes?|lifting eyes?|eye plates?|(?:plate|tab) welded (?:under|to) "
+    r"the web|(?:does ?n[o']t|doesn't|never|will not|won't) (?:travel|move|run)|"
+    r"fixed (?:pick|lifting|hoist|hook)(?:ing)? points?)\b", re.IGNORECASE)
+
+
+def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=(), title="",
+                      notes="") -> None:
     """lug = true (the load hangs from a lug plate welded under the web: no flange bending
     under trolley wheels) on a job that says the load runs on a trolley or hangs from a clamp
     on the flange tips: a monorail or jib profile or tag (a hoist runs on both), or the label
@@ -1343,9 +1351,14 @@ def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=()) -> 
     flange check under the wheels (CMAA 74, AISC Design Guide 7) would be left out on what
     the job's own words deny, so the rating is held. A label at that place naming the lug
     lets it stand; on a below-the-hook beam a clamp hangs below the lug (a plate or pipe
-    clamp), so only a beam clamp or trolley counts there."""
+    clamp), so only a beam clamp or trolley counts there. A profile's word (a simple span has
+    only monorail profiles) gives way where the title or notes say the pick point is fixed
+    (a lug, a plate welded under the web, "it does not travel") and name no trolley or
+    clamp."""
     if not lugs:
         return
+    words = " | ".join(_as_words(t) for t in (title, notes) if isinstance(t, str))
+    fixed_said = bool(_FIXED_PICK_WORDS.search(words)) and not _FLANGE_TIP_WORDS.search(words)
     profile = crit_raw.get("lifting", "") if isinstance(crit_raw, dict) else ""
     profile = profile if isinstance(profile, str) else ""
     bth = profile == "below-the-hook"
@@ -1372,6 +1385,8 @@ def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=()) -> 
         runs = [t for t in tags if t in ("monorail", "trolley", "jib")]
         if said or lug_said:
             pass  # the labels at this place say how it hangs: a clamp or trolley, or a lug
+        elif fixed_said:
+            pass  # the title or notes say it hangs at a fixed point: the profile's word yields
         elif "monorail" in profile or "jib" in profile:
             said = f"[criteria] lifting = {profile!r}"
         elif runs and not bth:
@@ -5360,7 +5375,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                    "so it changes nothing. Give a hoist as a point load, or trolley "
                    "wheels as [[moving]]", f"loads[{i}].wheels")
     _twice(r, raw_loads)
-    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs, loads)
+    _lug_on_a_trolley(r, crit_raw, tags, raw_loads, lugs, loads, title, notes)
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
