@@ -800,3 +800,16 @@ def test_a_lug_on_a_monorail_profile_stands_where_the_notes_say_the_pick_point_i
     assert notes in slip
     job = parse_job_text(slip)
     assert bool(warned(job, "loads[0].lug")) == held, notes
+
+
+def test_tie_rods_of_a_braced_bay_hold_a_beam_in_words_of_the_bay_not_of_a_rod_holding_it():
+    notes = ("The mezzanine is a braced frame: the posts have X-bracing with tie rods in two "
+             "bays. This beam carries joists at 2 ft.")
+    job = parse_job_text(ARM.format(title="Mezzanine beam", notes=notes, label="outer end"))
+    why = [r for r in capacity(job).not_rated if "axial force" in r]
+    assert why and "bay's bracing" in why[0], why
+    said = warned(job, "notes")
+    assert said and "strut or collector force" in said[0] and "holds it up" not in said[0]
+    # a rod said of this member keeps its own words
+    job = parse_job_text(ARM.format(title="Awning arm w/ tie rod", notes="", label="outer end"))
+    assert any("holds it up" in m for m in warned(job, "title"))

@@ -3594,6 +3594,12 @@ _TIE_STORED = re.compile(r"\b(?:loaded|stocked|filled|stacked|carrying|holds?|st
                          r"bars? for|racks?)\b", re.IGNORECASE)
 
 
+# A frame's bracing (X-bracing in a bay, a braced frame) said beside the tie words
+_FRAME_BRACING = re.compile(r"\b(?:x[- ]?brac\w*|cross[- ]?brac\w*|braced (?:frames?|bays?)|"
+                            r"(?:posts?|columns?|bays?|frames?) (?:have|has|with) [\w -]{0,20}"
+                            r"brac\w*)", re.IGNORECASE)
+
+
 def _tied_or_braced(r: _Reader, tags, raw_supports, title="", notes="") -> None:
     """A job whose support label, title or notes say the member is held by a tie rod, knee
     brace or kicker (a sloped member meeting it): that holds it up by pushing it endwise (a
@@ -3624,6 +3630,17 @@ def _tied_or_braced(r: _Reader, tags, raw_supports, title="", notes="") -> None:
                        "the words do not describe this support, reword them", key,
                        f"axial force (the tag no-axial contradicted by {key}, {said!r}) "
                        "not checked (AISC 360-16 E3, H1-1)")
+            return
+        sentence = re.split(r"[.;!?]\s", words[:m.start()])[-1] + words[m.start():].split(". ")[0]
+        if _FRAME_BRACING.search(sentence):  # a bay's bracing, not a rod holding this member
+            r.hold(f"{key} says {said!r} of a braced bay: the bracing of a bay puts axial force "
+                   "into the beams of that bay (a strut or collector force under sway, wind or "
+                   "a bump), so a beam there is a beam-column, and bending with that axial "
+                   "force is not checked here, so no rating is posted. Have it checked as a "
+                   "beam-column with the frame's forces; or add the tag \"no-axial\" if this "
+                   "beam is not part of the braced bay and nothing pushes or pulls it endwise",
+                   key, f"axial force from the bay's bracing ({said!r}, {key}) not checked: a "
+                   "beam-column (AISC 360-16 E3, H1-1)")
             return
         r.hold(f"{key} says {said!r}: a tie rod or brace that meets the member at a slope "
                "holds it up by pushing it endwise (a knee brace below pulls it), so the "
