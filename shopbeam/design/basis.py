@@ -35,6 +35,13 @@ def basis_of(job) -> str:
 # the words `checks.on_yield` and the tee and angle rules (open_shapes) put in a bending
 # strength's text where the job's safety factor on yield caps it
 CAPPED_AT_YIELD = "capped at first yield"
+
+
+def yield_cap_words(sf: float) -> str:
+    """How a bending strength held to first yield over the job's safety factor is said (the
+    I-shapes, tubes and channels of `checks.on_yield`, and each axis of a tee or angle)."""
+    return (f"{CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the job's safety factor on the yield "
+            "strength in bending)")
 # the safety factor on yield in bending a job that gives none takes (the contract's example)
 DEFAULT_SF = 1.67
 

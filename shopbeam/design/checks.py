@@ -39,6 +39,7 @@ from shopbeam.design.basis import (BASIS_WORDS, BRACE_BY_DEFAULT, CB_MAX,  # noq
                                    OMEGA_ADM, OMEGA_B, OMEGA_V, OMEGA_V_ROLLED_I, PSI_PA, basis_of,
                                    brace_points, cb_factor, nominal_moment, support_braces,
                                    unbraced_segments, CAPPED_AT_YIELD, job_omega,
+                                   yield_cap_words,
                                    yield_cap_provenance)
 from shopbeam.design.lifting import (flange_unchecked, lifting_notes, lifting_unchecked,
                                      profile_of)
@@ -1191,8 +1192,7 @@ def on_yield(fl: Flexure, sec, mat, sf: float, welded: bool = False) -> Flexure:
     allow = fy * min(sec.sx_top, sec.sx_bot) / sf
     if fl.cap / fl.omega > allow * (1 + 1e-12):
         fl = replace(fl, cap=allow * fl.omega, code_cap=fl.cap)
-        text += (f"; {CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the job's safety factor on "
-                 "the yield strength in bending)")
+        text += f"; {yield_cap_words(sf)}"
     return replace(fl, cap_text=text) if text != fl.cap_text else fl
 
 

@@ -54,7 +54,7 @@ import math
 from dataclasses import dataclass
 
 from shopbeam import units
-from shopbeam.design.basis import (BASIS_WORDS, CAPPED_AT_YIELD, OMEGA_B, basis_of,
+from shopbeam.design.basis import (BASIS_WORDS, OMEGA_B, yield_cap_words, basis_of,
                                    brace_points, cb_factor, job_omega, yield_cap_provenance)
 from shopbeam.design.results import Check, Unchecked
 from shopbeam.members.sections import principal_factors
@@ -439,8 +439,7 @@ def _sf_cap(mn, why, my, omega, sf):
     """The job's safety factor on yield in bending (checks.on_yield): Mn / Omega_b no more
     than first yield over it, My / safety_factor."""
     if sf and sf > 0 and mn / omega > my / sf * (1 + 1e-12):
-        return my * omega / sf, why + (f" {CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the "
-                                       "job's safety factor on yield)")
+        return my * omega / sf, why + f" {yield_cap_words(sf)}"
     return mn, why
 
 
