@@ -339,3 +339,20 @@ def test_a_member_that_fails_under_its_own_weight_names_the_check_and_the_usual_
     assert res.factor == 0.0
     assert "fails under its own weight" in res.note and "check the units" in res.note
     assert "deflection, ratio" in res.note
+
+
+def test_a_not_rated_job_s_json_posts_no_load_and_a_rated_one_does():
+    # the JSON's max_load is "the load to post" (docs/json.md): the printed label withholds
+    # it on a NOT RATED job, and so must the JSON, or a script posts it
+    from shopbeam.design.capacity import to_json
+
+    text = ('schema = 1\ntitle = "{title}"\n[beam]\nlength = "8 ft"\nsection = "HSS4x4x1/4"\n'
+            'material = "A500-C"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "8 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+            'value = "-100 lbf/ft"\n')
+    held = capacity(parse_job_text(text.format(title="Pallet rack beam, bay 2")))
+    assert not held.rated and math.isfinite(held.factor)
+    out = to_json(held)
+    assert out["capacity"]["max_load"] == {} and out["factor"] == pytest.approx(held.factor)
+    plain = capacity(parse_job_text(text.format(title="Shop shelf rail")))
+    assert plain.rated and to_json(plain)["capacity"]["max_load"]

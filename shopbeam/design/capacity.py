@@ -1051,7 +1051,9 @@ def to_json(res: CapacityResult) -> dict:
     out["capacity"] = {"method": res.method, "note": res.note,
                        "not_rated": list(reasons),
                        "basis": BASIS_WORDS[basis_of(res.job)],
-                       "max_load": dict(max_load_lines(res)),
+                       # the load to post: none where no rating is posted (NOT RATED),
+                       # as the printed label withholds it
+                       "max_load": dict(max_load_lines(res)) if res.rated else {},
                        "worst_state": {n: w["words"] for n, w in res.evaluation.worst.items()}
                        if res.evaluation else {}}
     # what each support carries at the factor found, over every load state (the label's

@@ -1205,7 +1205,8 @@ class JobScreen(Screen):
         done = focused.undo_typing() if isinstance(focused, FieldInput) else ""
         if done:
             self.notify(f"{focused.parent.label}: put back as it was when you came to it "
-                        "(ctrl+z again brings back what you typed)" if done == "undone" else
+                        "(ctrl+z again, before you type, brings back what you typed)"
+                        if done == "undone" else
                         f"{focused.parent.label}: what you typed is back", timeout=5)
             return
         self.flush_typing()

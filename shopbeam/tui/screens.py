@@ -36,8 +36,8 @@ KEYS = [
         ("ctrl+n", "new job (asks first when there are unsaved changes)"),
         ("ctrl+t / ctrl+x", "supports and loads views: add one / remove the picked one"),
         ("ctrl+z", "in a field: put back its text as it was when you came to it (ctrl+z "
-                   "again brings back what you typed); elsewhere: put back the supports and "
-                   "loads removed, last first"),
+                   "again, before you type, brings back what you typed); elsewhere: put "
+                   "back the supports and loads removed, last first"),
         ("ctrl+l", "after a length change: move the supports and loads with it (asks how; "
                    "until then they stay where typed)"),
         ("ctrl+r / ctrl+p", "calc sheet and rating views: write it to a file / print it"),
