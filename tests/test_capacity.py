@@ -356,3 +356,16 @@ def test_a_not_rated_job_s_json_posts_no_load_and_a_rated_one_does():
     assert out["capacity"]["max_load"] == {} and out["factor"] == pytest.approx(held.factor)
     plain = capacity(parse_job_text(text.format(title="Shop shelf rail")))
     assert plain.rated and to_json(plain)["capacity"]["max_load"]
+
+
+def test_solve_s_reasons_name_an_unmarked_upward_load_as_capacity_does():
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.capacity import solve_reasons
+
+    job = parse_job_text(
+        'schema = 1\ntitle = "p18"\ntags = ["not-lifting"]\n[beam]\nlength = "12 ft"\n'
+        'section = "W8x18"\nmaterial = "A992"\nself_weight = false\nrestrained = true\n'
+        '[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\nat = "12 ft"\n'
+        'type = "roller"\n[[loads]]\ntype = "point"\nat = "4 ft"\nvalue = "1000 lbf"\n')
+    held = [r for r in capacity(job).not_rated if "push UP" in r]
+    assert held and held[0] in solve_reasons(analyze(job))

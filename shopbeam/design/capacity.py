@@ -189,7 +189,9 @@ def solve_reasons(result) -> list[str]:
     finds at the rated load."""
     out = [f"{u.name} not checked ({u.clause}): {u.reason}" if u.clause else
            f"{u.name} not checked: {u.reason}" for u in result.unchecked if u.blocks_rating]
-    return out + [g for g in held_besides(result) if g not in out]
+    # loads pointing up unmarked: the solve's verdict names them, and capacity holds on them
+    up = [g for g in job_gaps(result.job) if g.startswith(UPWARD_GAP)]
+    return out + [g for g in held_besides(result) + up if g not in out]
 
 
 def rating_gaps(job, st) -> tuple[str, ...]:
