@@ -531,6 +531,18 @@ class _Reader:
                           "end, AISC 360-16 B4.3 and J4 for holes), or remove the key if it is "
                           "not cut", path)
                 continue
+            if here == "supports" and _SETTLE_KEY.match(str(k)):
+                path = f"{prefix}.{k}" if prefix else k
+                self.hold(f"{k!r} in {label} reads as a settlement of the support (it drops "
+                          "by a set amount), which shopbeam does not model: in a member "
+                          "held at more than two points, or at a fixed end, a support that "
+                          "settles adds moment and shear the checks would leave out, so no "
+                          "rating is posted. Have the settlement checked, or remove the key "
+                          "if the support does not settle (a spring support, type = "
+                          "\"spring\" with its stiffness, models one that gives under load)",
+                          path, f"{path}: support settlement is not modelled, and in a member "
+                          "held at more than two points or at a fixed end it adds moment")
+                continue
             table_slip = _table_slip(str(k), table[k], here)
             if table_slip:
                 self.error(table_slip, f"{prefix}.{k}" if prefix else str(k))
@@ -670,6 +682,12 @@ def _table_slip(k: str, value, here: str) -> str:
 _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes?|cut_?outs?|"
                       r"openings?|slots?|slotted|penetrations?|bored|drilled|drilling)"
                       r"(?:$|[_\- ])", re.IGNORECASE)
+
+# An unknown key of a support that reads like a settlement (a drop of the support given)
+_SETTLE_KEY = re.compile(r"^(?:settle(?:ment|s|d)?|settling|sink(?:age)?|subsidence|"
+                         r"(?:support_?)?(?:drop|displacement|deflection|movement|sag)|"
+                         r"imposed_?(?:deflection|displacement)|prescribed_?\w*|delta|dy|"
+                         r"dz|offset_?(?:down|y))$", re.IGNORECASE)
 
 # An unknown key that reads like a safety factor: one the user meant to apply, ignored, so the
 # job is not rated on it (a misplaced safety_factor too)
