@@ -715,6 +715,31 @@ async def test_a_word_typed_slowly_as_a_question_opens_never_answers_it(tmp_path
         assert f.input.value == "Loft beam, revised" and app.job_screen.session.dirty
 
 
+@sync
+async def test_a_hunt_and_peck_typist_s_letters_after_the_question_never_answer_it(tmp_path):
+    # a letter a second or more after the one before is "alone" by its gap, but once keys
+    # have gone on to the field behind the question the typist is typing on: the "d" of
+    # " red" is text, not "discard"; the answer is then the letter and Enter
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
+        await burst(pilot, CTRL_U + "EDIT" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        for letter in " red":
+            await pilot.pause(app.screen.WORD_GAP + 0.05)  # past the word gap: a slow typist
+            await burst(pilot, letter)
+        await pilot.pause(app.screen.ALONE + 0.2)  # past the wait of a letter left alone
+        await pilot.pause()
+        assert app.is_running and type(app.screen).__name__ == "ConfirmScreen"
+        assert f.input.value == "EDIT red" and app.job_screen.session.dirty
+        await pilot.pause(app.screen.WORD_GAP + 0.05)
+        await burst(pilot, "d")
+        await pilot.press("enter")  # the letter, then Enter: the answer
+        await pilot.pause()
+    assert not app.is_running
+
+
 # ------------------------------------- a choice picks by a letter pressed on its own only
 
 LETTER = 1.1  # past Choice.WORD_GAP (1 s): a letter on its own has picked, and the next one is no word

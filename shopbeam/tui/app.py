@@ -1600,15 +1600,22 @@ class ShopbeamApp(App):
                 held = question.release()  # Esc right behind a letter: the letter is dropped
                 if held is not None and event.key != "escape":
                     # a key right behind a letter answer: both were text
+                    self._typed_behind(question, held)
                     await js.key_behind(held)
                     await js.key_behind(event)
                     return
                 if question.too_early(event, text_gap):
+                    self._typed_behind(question, event)
                     await js.key_behind(event)  # typed before it could be read, or text
                     return
                 action = question.answers().get(event.key) if event.is_printable else None
                 if action is not None:
-                    question.hold(event, lambda: self.call_later(question.run_action, action))
+                    # once keys went on to the field behind, a letter alone is text too
+                    # (a slow typist's next letter); the answer is that letter, then Enter
+                    alone = (lambda ev=event: self.call_later(js.key_behind, ev)) \
+                        if question.typed_behind else None
+                    question.hold(event, lambda: self.call_later(question.run_action, action),
+                                  alone)
                     return
             if isinstance(focused, Choice) and event.is_printable and not slow_text and (
                     event.key == "space" or focused.pick_for(event.character) is not None):
@@ -1663,6 +1670,20 @@ class ShopbeamApp(App):
     _text_before = False
     _key_count = 0  # keys so far (a view switch notes the key that made it)
     _text_after_switch = False  # the key before was text typed right behind a view switch
+
+    def _typed_behind(self, question, event) -> None:
+        """A key went on to the field behind a question once the question could be read
+        (typed on, not a burst that was on its way as it opened): from now on a letter
+        pressed alone is text as well (a slow typist's next letter must not discard or
+        overwrite), and the question is answered by its letter and Enter, or by Esc. Said
+        once."""
+        if getattr(event, "time", 0.0) < question.opened_at + question.READ_TIME:
+            return  # on its way before the question was up: the answer is still a letter
+        if not question.typed_behind:
+            question.typed_behind = True
+            self.notify("Your keys are going on to the field behind this question. To answer "
+                        "it, press its letter and then Enter at once; esc closes it and "
+                        "changes nothing.", timeout=8)
     _held_letter = None  # (key event, choice, timer): a letter on a choice, not yet a pick
     _picked = None  # (choice, value before, letter): the last pick by a letter, for a while
 

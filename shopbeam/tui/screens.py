@@ -154,6 +154,9 @@ class AnswerScreen(ModalScreen[str]):
         self.opened_at = _time.get_time()
         self.held = None  # a letter answer waiting ALONE to see that no key follows it
         self._held_timer = None
+        # keys went on to the field behind (text typed on): a letter alone is text too, and
+        # only its letter confirmed with Enter (or Esc) answers
+        self.typed_behind = False
 
     def too_early(self, event, gap: float | None = None) -> bool:
         """`event` (a key) was made before this question could have been read, or is text
@@ -162,6 +165,8 @@ class AnswerScreen(ModalScreen[str]):
         changes nothing."""
         if event.key == "escape":
             return False
+        if self.typed_behind and not (event.is_printable and event.key in self.answers()):
+            return True  # typing on behind the question: every key but a held answer's
         if getattr(event, "time", self.opened_at) < self.opened_at + self.READ_TIME:
             return True
         if gap is not None and gap < self.WORD_GAP:
@@ -175,11 +180,14 @@ class AnswerScreen(ModalScreen[str]):
         return {k.strip(): b.action for b in self.BINDINGS for k in b.key.split(",")
                 if k.strip() != "escape"}
 
-    def hold(self, event, run) -> None:
-        """Keep a letter answer for ALONE: `run` answers then, unless a key comes first."""
+    def hold(self, event, run, alone=None) -> None:
+        """Keep a letter answer for ALONE: `run` answers then, unless a key comes first
+        (Enter answers at once). With `alone`, the letter left alone runs that instead (it
+        goes on to the field as text): only the letter and Enter answer."""
         self.held = event
         self._held_run = run
-        self._held_timer = self.set_timer(self.ALONE, lambda: self._answer_held(run))
+        self._held_timer = self.set_timer(self.ALONE,
+                                          lambda: self._answer_held(alone or run))
 
     def confirm_held(self) -> bool:
         """Enter right behind a letter answer (read, pressed on its own, then confirmed):
