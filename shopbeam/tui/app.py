@@ -34,7 +34,8 @@ from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
-                                WHEEL_WORDS, late, late_words, load_warnings,
+                                WHEEL_WORDS, CHECKING_EDIT, CHECKING_WORDS, late, late_words,
+                                load_warnings,
                                 problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
                                   from_one_line, one_line, shown_now, update_text)
@@ -58,10 +59,6 @@ INPUT_VIEWS = {v[0] for v in VIEWS[:6]}
 VIEW_KEYS = frozenset(v[1] for v in VIEWS)  # the keys that switch views with no field picked
 VIEW_FKEYS = [f"f{n}" for n in range(2, 13)]  # F2 .. F12: the views in bar order, from anywhere
 SOLVE_DEBOUNCE = 0.03  # seconds: keys typed closer together than this cost one solve
-# seconds: an answer still on its way this long after an edit (a heavy job) is said on screen:
-# the summary, the Results view and the fields typed in since then say they are being checked,
-# rather than show the answer for the job before the edit as if it were this one's
-STALE_MARK = 0.4
 SOLVE_LOCK = threading.Lock()  # one solve of the job at a time (`JobScreen._solve`)
 
 SHAPE_DEFAULTS = {
@@ -257,7 +254,8 @@ class JobScreen(Screen):
         if self.session.stale and ev.job is None and not ev.problems:
             return "Reading and solving the job ..."
         warn = load_warnings(self.session)[:1]
-        if late(self):
+        behind = late(self)
+        if behind and ev.result is None:
             warn = [late_words(ev)] + warn
         note = self.length_note()
         if note:  # a length change not settled yet: first, it can move the answer a lot
@@ -270,6 +268,9 @@ class JobScreen(Screen):
         width = (self.size.width or 80) - 2
         warn = [w if len(w) <= width else textwrap.shorten(w, width, placeholder=" ...")
                 for w in warn]
+        if behind:  # the answer's line is the job's before the edit: said instead, in
+            # its place (the summary keeps its height, so the form does not jump per key)
+            return "\n".join(warn + [CHECKING_EDIT])
         return "\n".join(warn + [drawing.summary_line(ev.result, width,
                                                       "   (7 results, 8 plots)")])
 
@@ -302,7 +303,14 @@ class JobScreen(Screen):
                          + [f"  ... and {more} more: see 7 Results"])
 
     def changed(self) -> None:
-        """The document changed: show it now, solve it in a worker (latest edit wins)."""
+        """The document changed: show it now, solve it in a worker (latest edit wins). Until
+        the answer to it comes, the answer shown is said to be for the job before the edit
+        (`stale_marked`), from the edit's own frame on: no figure is shown for an older text
+        without that mark, however fast or slow the solve."""
+        if self.session.stale:
+            self.stale_marked = True
+            if self._stale_since is None:
+                self._stale_since = time.monotonic()
         self.refresh_all()
         self.solve_soon()
 
@@ -318,19 +326,9 @@ class JobScreen(Screen):
             if self._stale_since is None:
                 self._stale_since = now
             self._solve(s, *s.snapshot(), wait=wait)
-            self.set_timer(STALE_MARK, self._mark_stale)
 
-    stale_marked = False  # the answer shown is for an earlier edit, and said so (STALE_MARK)
+    stale_marked = False  # the answer shown is for an earlier edit, and said so (`changed`)
     _stale_since = None  # when the first edit the answer shown does not cover was made
-
-    def _mark_stale(self) -> None:
-        """The answer to an edit has not come within STALE_MARK of it (typing on does not
-        put this off): say so on screen (the answer shown is for the job before it)."""
-        since = self._stale_since
-        if self.session.stale and not self.stale_marked and since is not None \
-                and time.monotonic() - since >= STALE_MARK * 0.9:
-            self.stale_marked = True
-            self.refresh_all()
 
     @work(thread=True, group="solve", exit_on_error=False)
     def _solve(self, session: Session, version: int, data: dict, text: str, name: str,
@@ -456,6 +454,8 @@ class JobScreen(Screen):
                             event.row):
             f.taken(event.value)
             f.edited_version = self.session.version
+            if late(f):  # the screen was drawn before this field's edit was counted
+                f.show(CHECKING_WORDS)
 
     async def key_behind(self, event) -> None:
         """A key that reached a question before it could be read (see `AnswerScreen`): it

@@ -1243,7 +1243,7 @@ CHECKING_WORDS = "checking what was typed ..."
 
 def late(view) -> bool:
     """Whether the answer the screen of `view` shows is for the job before an edit and said
-    to be so (`JobScreen.stale_marked`, STALE_MARK after the edit)."""
+    to be so (`JobScreen.stale_marked`, from the edit on until its answer comes)."""
     screen = view.screen
     session = getattr(screen, "session", None)
     return bool(getattr(screen, "stale_marked", False) and session is not None
