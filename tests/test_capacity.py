@@ -369,3 +369,18 @@ def test_solve_s_reasons_name_an_unmarked_upward_load_as_capacity_does():
         'type = "roller"\n[[loads]]\ntype = "point"\nat = "4 ft"\nvalue = "1000 lbf"\n')
     held = [r for r in capacity(job).not_rated if "push UP" in r]
     assert held and held[0] in solve_reasons(analyze(job))
+
+
+def test_a_dead_couple_whose_sign_slipped_so_that_it_relieves_is_not_rated():
+    # the awning preset's fascia couple is clockwise (-20 lbf*ft), adding to the arm's
+    # hogging: typed +20 it relieves the root and the posted load rose 2 % with no message
+    from pathlib import Path
+
+    text = (Path(__file__).resolve().parents[1] / "presets" / "awning-bracket.toml").read_text()
+    assert 'value = "-20 lbf*ft"' in text
+    right = capacity(parse_job_text(text))
+    assert not any("dead couple" in r for r in right.not_rated)
+    slip = capacity(parse_job_text(text.replace('value = "-20 lbf*ft"', 'value = "20 lbf*ft"')))
+    why = [r for r in slip.not_rated if "dead couple" in r]
+    assert why and "check its sign" in why[0]
+    assert slip.factor > right.factor  # what the slip would have posted

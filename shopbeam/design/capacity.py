@@ -504,7 +504,8 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
     res = _cantilever_top_rate(job, section, ss, st, res)
     res = _with_live_off(job, section, ss, st, res)
     return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
-                   + _relieving_couples(job, section, res.factor))
+                   + _relieving_couples(job, section, res.factor)
+                   + _relieving_dead_couples(job, section, res.factor))
 
 
 def _with_live_off(job, section, ss, st, res: CapacityResult) -> CapacityResult:
@@ -594,6 +595,36 @@ def _relieving_couples(job, section, k: float) -> tuple[str, ...]:
                        f"factor is {k2:.4g}, not {k:.4g}, and a load that relieves is never "
                        "counted on at its full scaled value. Enter it as case = \"dead\" at "
                        "a value it is sure to have, or rate the job without it")
+    return tuple(out)
+
+
+def _relieving_dead_couples(job, section, k: float) -> tuple[str, ...]:
+    """A dead couple that relieves the member (without it the factor is lower): a couple's
+    sign (+ counterclockwise) is the easiest to slip, and a dead load is counted on as always
+    there, so a slipped one raises the figure posted with no other sign of it. As a dead
+    force that pushes up (`uplift = true` on a dead load), nothing is posted: the couple's
+    sign is to be checked, or the member rated without its help. Each dead couple is taken
+    off in turn (at most MAX_COUPLES_TRIED)."""
+    couples = [ld for ld in job.loads if ld.case == "dead" and ld.kind == "moment" and ld.value]
+    if not couples or not math.isfinite(k) or k <= 0:
+        return ()
+    out = []
+    below = k * (1 - 1e-6)
+    for c in couples[:MAX_COUPLES_TRIED]:
+        rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not c))
+        ss = state_set(rest, section)
+        st = strengths(rest, sec=section, beam=ss.beam)
+        if max(ch.ratio for ch in evaluate(rest, below, section, ss, st).checks) <= 1:
+            continue  # passes just below k without it: it does not relieve
+        k2 = _capacity(rest, section, ss, st).factor
+        if k2 < below:
+            name = c.key + (f" ({c.label})" if c.label else "")
+            turn = "counterclockwise" if c.value > 0 else "clockwise"
+            out.append(f"the dead couple {name} relieves the member: without it the factor is "
+                       f"{k2:.4g}, not {k:.4g}. A couple's sign is easy to slip (+ is "
+                       f"counterclockwise; this one is {turn}), and a dead load is counted on "
+                       "as always there: check its sign; if it is right, remove it to rate "
+                       "the member without its help")
     return tuple(out)
 
 
