@@ -1688,3 +1688,18 @@ def test_a_support_settlement_key_holds_the_rating_as_it_is_not_modelled(key, he
     job = parse_job_text(text)
     assert any(key in p.key for p in job.warnings if p.warning)
     assert any("settle" in r for r in capacity(job).not_rated) == held
+
+
+@pytest.mark.parametrize("value, case, held", [
+    ("-90 lbf/m", "dead", True), ("-90 lbf/yd", "dead", True), ("-1.3 kN/ft", "dead", True),
+    ("-600 lbf/m", "live", False), ("-90 lbf/ft", "dead", None)])
+def test_a_load_unit_that_mixes_us_and_metric_is_said_and_a_dead_one_held(value, case, held):
+    # "-90 lbf/m" for lbf/ft: the deck's weight 3.28 times too light, the posted load 7 % high
+    from shopbeam.design.capacity import capacity
+
+    text = _simple(loads='[[loads]]\ntype = "uniform"\nvalue = "-200 lbf/ft"\n'
+                         f'[[loads]]\ntype = "uniform"\nvalue = "{value}"\ncase = "{case}"\n')
+    job = parse_job_text(text)
+    said = [p for p in job.warnings if p.warning and "mixes US and metric" in p.message]
+    assert bool(said) == (held is not None), value
+    assert any("mixes US and metric" in r for r in capacity(job).not_rated) == bool(held)

@@ -2826,6 +2826,46 @@ TINY_DEAD_POINT = 4.4482216152605  # 1 lbf, N
 TINY_DEAD_LINE = 4.4482216152605 / 0.3048  # 1 lbf/ft, N/m
 
 
+# A unit that mixes the two systems in one value (lbf/m, kip/mm, kN/ft, N*ft): the force or
+# the length of the other system slipped in (a US force over metres is 3.28 times too light
+# per foot), and a yard under a force (lbf/yd, 3 times lighter than lbf/ft)
+_MIXED_UNIT = re.compile(
+    r"\d\s*(?:(?:lbf?|lbs|pounds?|kips?|kipf|klbf?|k|#)\s*(?:/|\*|·|-)\s*(?:m|mm|cm|metres?|"
+    r"meters?)|(?:(?:k|M|da)?N|kgf?|kilograms?|t|tonnes?)\s*(?:/|\*|·|-)\s*(?:ft|in|foot|"
+    r"feet|inch(?:es)?|yd|yards?)|(?:lbf?|lbs|pounds?|kips?|k)\s*/\s*(?:yd|yards?))(?![\w])",
+    re.IGNORECASE)
+
+
+def _mixed_units(r: _Reader, raw_loads, loads) -> None:
+    """A load value whose unit mixes the two systems (`_MIXED_UNIT`): read as typed, it is a
+    size no one means (a foot's load spread over a metre). A dead one is held (a light dead
+    load posts a higher live load), a live one warned."""
+    for ld in loads:
+        i = _load_index(ld.key)
+        raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
+        if not _is_table(raw):
+            continue
+        vals = raw.get("value", raw.get("total"))
+        key = f"{ld.key}.{'value' if 'value' in raw else 'total'}"
+        texts = [v for v in (vals if isinstance(vals, list) else [vals]) if isinstance(v, str)]
+        mixed = [v for v in texts if _MIXED_UNIT.search(v)]
+        if not mixed:
+            continue
+        said = ", ".join(f'"{v}"' for v in mixed)
+        name = ld.key + (f" ({ld.label})" if ld.label else "")
+        words = (f"{name} is typed in a unit that mixes US and metric units, or per yard "
+                 f"({said}): a force of one system over a length of the other is a slip "
+                 "(lbf/m for lbf/ft is 3.28 times too light). Write it all in the job's units "
+                 "(lbf/ft, lbf*ft; kN/m, kN*m)")
+        if ld.case == "dead":
+            r.hold(words + "; the rating holds a dead load fixed, so a light one posts a "
+                   "higher live load, and no rating is posted on it", key,
+                   f"{name} is typed in a unit that mixes US and metric units ({said}): write "
+                   "it in the job's units")
+        else:
+            r.warn(words, key)
+
+
 def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
                      lifting: bool = False) -> None:
     """A dead load typed in metric force units on a job in US units (N for lbf is 4.45 times
@@ -5484,6 +5524,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
     _dead_load_units(r, raw_loads, loads, system, is_lifting(tags, criteria.lifting))
+    _mixed_units(r, raw_loads, loads)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _step_beam(r, title, notes, tags, raw_loads, section)
     _rack_members(r, title, notes, tags, raw_loads,
