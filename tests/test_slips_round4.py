@@ -813,3 +813,13 @@ def test_tie_rods_of_a_braced_bay_hold_a_beam_in_words_of_the_bay_not_of_a_rod_h
     # a rod said of this member keeps its own words
     job = parse_job_text(ARM.format(title="Awning arm w/ tie rod", notes="", label="outer end"))
     assert any("holds it up" in m for m in warned(job, "title"))
+
+
+@pytest.mark.parametrize("cycles, held", [(2000, True), (2_000_000, False)])
+def test_a_road_member_s_cycles_short_by_three_zeros_is_not_rated(cycles, held):
+    # under 20,000 cycles no fatigue check is made (AISC 360-16 Appendix 3.1), so "2000" for
+    # 2000000 on a trailer had switched the check off and posted 2.7 times the load
+    text = preset("trailer-cross-member.toml").replace(
+        "[criteria]", f'[criteria]\nfatigue_category = "E"\ncycles = {cycles}', 1)
+    res = capacity(parse_job_text(text))
+    assert any("cycles" in r and "road" in r for r in res.not_rated) == held

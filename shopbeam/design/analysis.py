@@ -489,6 +489,20 @@ def use_unchecked(job: Job) -> list[Unchecked]:
             "it checked; or add the tag \"fatigue-checked\" once it has been checked "
             "elsewhere, or \"not-vehicle\" if it is not on a vehicle",
             "AISC 360-16 Appendix 3"))
+    elif on_road and steel and job.criteria.cycles < fatigue.FEW_CYCLES:
+        # the count given switches the check off, but a road member's bumps run to
+        # millions: "2000" for 2000000 is three zeros dropped, and the rating would rest on
+        # no fatigue check at all
+        out.append(Unchecked(
+            "fatigue under road loads",
+            f"it reads like a member of a road vehicle or mobile machine ({road}), where every "
+            f"bump is a load cycle and a trailer or truck member sees millions, but cycles = "
+            f"{job.criteria.cycles:,.0f} is under the {fatigue.FEW_CYCLES:,} below which no "
+            "fatigue check is made, so none is: check the count (cycles = 2000000 for a "
+            "road member's life, a digit or three zeros dropped?); or add the tag "
+            "\"fatigue-checked\" once it has been checked elsewhere, or \"not-vehicle\" if it "
+            "is not on a vehicle",
+            "AISC 360-16 Appendix 3.1"))
     elif on_road and not steel:
         # shopbeam's fatigue check is for steel (AISC 360-16 Appendix 3); a wood or aluminium
         # member on a vehicle has its own rules, which are not applied here
