@@ -823,3 +823,17 @@ def test_a_road_member_s_cycles_short_by_three_zeros_is_not_rated(cycles, held):
         "[criteria]", f'[criteria]\nfatigue_category = "E"\ncycles = {cycles}', 1)
     res = capacity(parse_job_text(text))
     assert any("cycles" in r and "road" in r for r in res.not_rated) == held
+
+
+def test_a_snow_load_cut_short_by_the_root_while_the_drift_reaches_out_is_warned():
+    # the awning preset's snow runs the whole 4 ft reach; "0.4 ft" for "4 ft" had put it by
+    # the root with no message (the total posted x2.3), as the drift still reaches out
+    import re
+
+    text = preset("awning-bracket.toml")
+    m = re.search(r'start = "0 ft"\nend = "4 ft"\nvalue = "-180 lbf/ft"', text)
+    assert m, "the preset's snow load"
+    slip = parse_job_text(text.replace(m.group(0), m.group(0).replace('"4 ft"', '"0.4 ft"')))
+    said = [p.message for p in slip.warnings if p.warning and "runs from the root only" in p.message]
+    assert said and "0.4 ft" in said[0]
+    assert not [p for p in parse_job_text(text).warnings if "runs from the root" in p.message]

@@ -3376,11 +3376,22 @@ def _unit_twin_slip(r: _Reader, raw_loads, supports, length, system: str) -> boo
     return found
 
 
-def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: str) -> None:
+# Words that place a cantilever's load by its root ("near the wall", "6 in from the post")
+_BY_THE_ROOT = re.compile(
+    r"\b(?:near|close to|next to|by|beside|against|at|from|off) (?:the )?(?:wall|root|post|"
+    r"column|mast|upright|base|fixed end|support|face)s?\b", re.IGNORECASE)
+
+
+def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: str,
+                                  title="", notes="") -> None:
     """A cantilever held only by a fixed end at its left end (0), every live load of which
     sits in the quarter of the reach next to that root: an arm's loads sit out along it, and
     a position typed in the wrong unit or short a digit ("3 in" for "34 in") lands there,
-    where the arm carries it easily. Warned (a load truly by the root is rated right)."""
+    where the arm carries it easily. Held: the figure posted would be for loads by the root,
+    many times what the arm carries out along it (a load truly by the root is rated right
+    by an arm no longer than its loads reach). A spread live load from the root over under a
+    quarter of the reach, where other live loads reach out past half of it, is warned (a
+    snow load's "0.4 ft" for "4 ft")."""
     held = [sp for sp in supports if sp.takes_force]
     if length is None or len(held) != 1 or held[0].kind != "fixed" or held[0].at > 1e-9 * length:
         return
@@ -3389,13 +3400,38 @@ def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: s
     if any(x <= 1e-9 * length for x in reach):
         return  # a load on the root itself: the at-support rule names it
     if live and max(reach) <= length / 4 * (1 + 1e-9):
-        r.warn(f"the only support is a fixed end at 0 and every live load sits within a "
-               f"quarter of the reach from it (the farthest at "
-               f"{units.fmt(max(reach), 'length', system)} of "
+        far = units.fmt(max(reach), 'length', system)
+        said = " | ".join(_as_words(t) for t in (title, notes, *(ld.label for ld in live))
+                          if isinstance(t, str))
+        if _BY_THE_ROOT.search(said):  # the job says its load sits by the root: so it is
+            r.warn(f"the only support is a fixed end at 0 and every live load sits within a "
+                   f"quarter of the reach from it (the farthest at {far}), as the job's words "
+                   "say; the figure posted is for loads there, not out along the arm",
+                   live[0].key + (".at" if live[0].kind == "point" else ".end"))
+            return
+        r.hold(f"the only support is a fixed end at 0 and every live load sits within a "
+               f"quarter of the reach from it (the farthest at {far} of "
                f"{units.fmt(length, 'length', system)}): an arm's loads sit out along it, and "
                "one typed in the wrong unit or short a digit (\"3 in\" for \"34 in\") lands "
-               "by the root, where the arm carries it easily. Check the positions",
-               live[0].key + (".at" if live[0].kind == "point" else ".end"))
+               "by the root, where the arm carries it easily, so the figure posted would be "
+               "many times what it carries out along it; no rating is posted. Check the "
+               "positions; if the loads really sit there, give the member's length as far as "
+               "they reach (the arm beyond carries only its own weight)",
+               live[0].key + (".at" if live[0].kind == "point" else ".end"),
+               f"every live load sits within a quarter of the cantilever's reach from its root "
+               f"(the farthest at {far}): a position typed in the wrong unit or short a digit?")
+        return
+    for ld in live:  # one spread load cut short by the root while the others reach out
+        if ld.kind in ("uniform", "linear") and ld.start <= 1e-9 * length \
+                and ld.end <= length / 4 * (1 + 1e-9) \
+                and any(x > length / 2 for o, x in zip(live, reach) if o is not ld):
+            r.warn(f"{ld.key}{f' ({ld.label})' if ld.label else ''} runs from the root only to "
+                   f"{units.fmt(ld.end, 'length', system)} of the "
+                   f"{units.fmt(length, 'length', system)} reach, while other live loads reach "
+                   "out past half of it: a spread load on an arm most often runs out along "
+                   "it, and an end typed short a digit or in the wrong unit (\"0.4 ft\" for "
+                   "\"4 ft\") puts it by the root, where the arm carries it easily. Check its "
+                   "end", f"{ld.key}.end")
 
 
 # Two supports closer than this clamp the member between them like a fixed end
@@ -5535,7 +5571,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _root_at_the_right(r, supports, loads, length, system)
     _unit_twin_support(r, data.get("supports"), length, system)
     if not _unit_twin_slip(r, raw_loads, supports, length, system):
-        _root_at_the_left_loads_by_it(r, supports, loads, length, system)
+        _root_at_the_left_loads_by_it(r, supports, loads, length, system, title, notes)
     _close_supports(r, supports, length, system)
     if length is not None and section is not None and isinstance(beam, dict) \
             and not stubby_words(length, section, system):
