@@ -837,3 +837,29 @@ def test_a_snow_load_cut_short_by_the_root_while_the_drift_reaches_out_is_warned
     said = [p.message for p in slip.warnings if p.warning and "runs from the root only" in p.message]
     assert said and "0.4 ft" in said[0]
     assert not [p for p in parse_job_text(text).warnings if "runs from the root" in p.message]
+
+
+def test_members_on_a_cantilever_rack_arm_is_said_unless_the_words_count_the_arms():
+    # the lumber-rack preset's load is already one arm's share of the bundle: members = 4
+    # quartered it again and posted 4 times the load with no message (a pallet shared by
+    # three arms is a real job, so it is said, not held)
+    text = preset("lumber-rack-arm.toml")
+    assert "members" not in text
+    slip = text.replace("[beam]", "[beam]\nmembers = 4", 1)
+    assert any("one arm's share" in m for m in warned(parse_job_text(slip), "beam.members"))
+    import re
+
+    counted = re.sub(r'^notes = "[^"]*"', 'notes = "Four arms share each bundle."', slip,
+                     count=1, flags=re.M)
+    assert not warned(parse_job_text(counted), "beam.members")
+
+
+def test_a_point_load_shared_among_members_off_a_shelf_is_warned():
+    # a bench vise bolted to the front rail bears on that rail, not on both
+    text = preset("workbench-top.toml")
+    slip = text.replace("[beam]", "[beam]\nmembers = 2", 1)
+    job = parse_job_text(slip)
+    assert any("point load" in m and "members = 1" in m for m in
+               [p.message for p in job.warnings if p.warning])
+    assert not any("shares every load evenly" in p.message
+                   for p in parse_job_text(text).warnings)

@@ -3195,6 +3195,55 @@ def _rack_members(r: _Reader, title, notes, tags, raw_loads, members, supports) 
                "low side). Write members = 2 if the loads are the pair's", "beam.members")
 
 
+# A point load's words that say something spreads it over the members (a pallet or a deck
+# across them, a spreader or cross-bar)
+_SHARED_WORDS = re.compile(r"\b(?:shared?|spread|across|both|each|all|spreaders?|cross[- ]?"
+                           r"bars?|pallets?|skids?|decks?|boards?|sheets?|plates?|per (?:rail|"
+                           r"beam|member|arm))\b", re.IGNORECASE)
+
+
+def _members_uneven(r: _Reader, tags, raw_loads, loads, members, supports, title="",
+                    notes="") -> None:
+    """`members` > 1 shares every load evenly among the members, and the label posts the
+    figure for them all. A cantilever rack's arms do not share a bundle evenly (it bears on
+    them as it lies, and a load already given as one arm's share is divided again): warned,
+    unless the title or notes count the arms that share it ("three arms under each pallet").
+    A point load bears on
+    one member unless something spreads it (a vise bolted to the front rail): warned, naming
+    it, unless its label says what spreads it."""
+    if not isinstance(members, int) or isinstance(members, bool) or members < 2:
+        return
+    held = {round(sp.at, 9) for sp in supports if sp.takes_force}
+    rack = RACK_TAGS.intersection(normal_tag(t) for t in tags if isinstance(t, str))
+    if len(held) == 1 and rack and not _plain_found(_OTHER_COUNT, title, notes, (), ()):
+        # (where the words count the arms, "three arms under each pallet", it is meant)
+        r.warn(f"members = {members} shares the load entered evenly among {members} arms of a "
+               "cantilever rack, and the label posts it for all of them: the load entered "
+               "must be the whole bundle or pallet the arms share (one arm's share already, "
+               "as a preset for one arm gives it, would be divided again, and the posted "
+               "figure would be that many times too high). If it is one arm's share, write "
+               "members = 1; say the count in the notes (\"three arms under each pallet\") "
+               "and this warning goes", "beam.members")
+        return
+    normal = {normal_tag(t) for t in tags if isinstance(t, str)}
+    if (SHELF_TAGS | FLOOR_TAGS | RACK_TAGS) & normal or re.search(
+            r"\bshel(?:f|ves)\b|\bdeck", f"{title} {notes}", re.IGNORECASE):
+        return  # a box on a shelf, a pallet on a deck: the deck spreads it to the members
+    for ld in loads:
+        if ld.kind != "point" or ld.case != "live" or not ld.value:
+            continue
+        if ld.label and _SHARED_WORDS.search(_as_words(ld.label)):
+            continue
+        name = ld.key + (f" ({ld.label})" if ld.label else "")
+        r.warn(f"members = {members} shares every load evenly among {members} members, the "
+               f"point load {name} too, and the label posts it for them all: a point load "
+               "bears on the one member under it unless something spreads it (a vise or a "
+               "hoist on the front rail bears on that rail). If it bears on one, rate that "
+               "member with members = 1; if a deck or cross-bar spreads it, say so in its "
+               "label", f"{ld.key}.value")
+        return
+
+
 def _said_key(said: str) -> str:
     """The job-file key a `_words_found` entry names ("title: ...", "loads[2] is ...")."""
     if said.startswith("loads["):
@@ -5565,6 +5614,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _step_beam(r, title, notes, tags, raw_loads, section)
     _rack_members(r, title, notes, tags, raw_loads,
                   beam.get("members", 1) if isinstance(beam, dict) else None, supports)
+    _members_uneven(r, tags, raw_loads, loads,
+                    beam.get("members", 1) if isinstance(beam, dict) else None, supports,
+                    title, notes)
     _shelf_members(r, tags, raw_loads,
                    beam.get("members", 1) if isinstance(beam, dict) else None, section, system)
     _rack_impact_slip(r, criteria, tags, loads)
