@@ -435,22 +435,34 @@ def test_trolley_axles_feet_apart_are_warned(spacing, warns):
     assert any("wheelbase" in g for g in capacity(job).not_rated) == warns
 
 
-@pytest.mark.parametrize("travel, held", [
-    ('["0 in", "16 in"]', True),     # 16 in of a 16 ft monorail, typed in inches: feet meant
-    ('["0 ft", "16 ft"]', False),
-    ('["2 ft", "14 ft"]', False),    # end stops 2 ft in
-    ('["0 in", "192 in"]', False),   # the whole beam in inches
-    ('["1 in", "29 in"]', True),     # 28 in of 16 ft: over 2 ft, under a quarter
-    ('["0 ft", "1 ft 4 in"]', False),  # feet and inches: written as meant
+@pytest.mark.parametrize("travel, inches, short", [
+    ('["0 in", "16 in"]', True, False),     # 16 in of a 16 ft monorail in inches: feet meant
+    ('["0 ft", "16 ft"]', False, False),
+    ('["2 ft", "14 ft"]', False, False),    # end stops 2 ft in
+    ('["0 in", "192 in"]', False, False),   # the whole beam in inches
+    ('["1 in", "29 in"]', True, False),     # 28 in of 16 ft: over 2 ft, under a quarter
+    ('["0 ft", "1 ft 4 in"]', False, True),  # feet and inches as meant, but 1/12 of the runway
+    ('["0 ft", "1.6 ft"]', False, True),     # a decimal point slipped: "1.6 ft" for "16 ft"
+    ('["0 ft", "6 ft"]', False, True),       # a digit dropped: the hoist kept off mid-span
 ])
-def test_a_trolley_travel_of_a_few_inches_typed_in_inches_is_not_rated(travel, held):
-    # a hoist travels its beam (common practice): a travel of inches on a 16 ft beam
-    # keeps the hoist by a support, and the label would post 33 % more
+def test_a_trolley_travel_cut_short_is_not_rated(travel, inches, short):
+    # a hoist travels its beam (common practice): a travel of inches on a 16 ft beam, or one
+    # over under half of it with no end stops said, keeps the hoist off mid-span, and the
+    # label would post up to 33 % more
     from pathlib import Path
     text = (Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml").read_text()
     job = parse_job_text(text.replace('travel = ["0 ft", "16 ft"]', f"travel = {travel}", 1))
-    assert bool([w for w in job.warnings if w.key == "moving[0].travel"]) == held
-    assert any("feet meant" in g for g in capacity(job).not_rated) == held
+    assert bool([w for w in job.warnings if w.key == "moving[0].travel"]) == (inches or short)
+    held = capacity(job).not_rated
+    assert any("feet meant" in g for g in held) == inches
+    assert any("end stops" in g for g in held) == short
+    if short:  # end stops named in the notes: the travel stands
+        import re
+        said = re.sub(r'^notes = "', 'notes = "End stops keep the hoist at the wall end. ',
+                      text, count=1, flags=re.M)
+        assert said != text
+        job = parse_job_text(said.replace('travel = ["0 ft", "16 ft"]', f"travel = {travel}", 1))
+        assert not any("end stops" in g for g in capacity(job).not_rated)
 
 
 AL_RUNWAY = """schema = 1

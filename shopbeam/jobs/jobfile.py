@@ -2779,13 +2779,21 @@ TROLLEY_SPACING = 4 * 0.3048  # m
 # A hoist travels its beam: a travel typed in inches that covers less than this part of the
 # member is most likely feet typed as inches ("16 in" for "16 ft", "29 in" on a 30 ft beam).
 SHORT_TRAVEL = 0.25
+# A lifting job's travel over less than this share of the member, in any unit, with no end
+# stops said, is a slip too (a digit or a decimal point)
+HALF_TRAVEL = 0.5
+_END_STOP_WORDS = re.compile(r"\b(?:end[- ]?stops?|stops?|bumpers?|limit(?:ed)? (?:to|by)|"
+                             r"only (?:runs?|travels?)|travels? only)\b", re.IGNORECASE)
 
 
-def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> None:
+def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
+                     words: str = "") -> None:
     """A lifting job's wheel set with its axles feet apart, or its travel typed in inches
-    over a few inches of a long member: a unit slip that lowers the moment (the axles act
-    apart; the hoist kept near a support), so NOT RATED."""
+    over a few inches of a long member, or over less than half of it with no end stops in
+    the `words` (title, notes) or its label: a unit or digit slip that lowers the moment
+    (the axles act apart; the hoist kept near a support), so NOT RATED."""
     for ws in moving:
+        said = " | ".join(x for x in (words, ws.label or "") if x)
         gaps = [b - a for a, b in zip(ws.offsets, ws.offsets[1:])]
         if gaps and max(gaps) > TROLLEY_SPACING:
             apart = units.fmt(max(gaps), 'length', system)
@@ -2814,6 +2822,21 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None) -> 
                    f"{ws.key}.travel",
                    f"travel [{got}] covers only {units.fmt(span, 'length', system)} of the "
                    "member, typed in inches: feet meant? Write it in feet")
+        elif isinstance(tr, list) and length and span < HALF_TRAVEL * length \
+                and not (said and _END_STOP_WORDS.search(said)):
+            # "1.6 ft" for "16 ft", "6 ft" for "16 ft": the hoist kept off mid-span, where a
+            # runway's moment and sag are largest; real end stops are said in words
+            got = ", ".join(f'"{v}"' for v in tr)
+            cover = units.fmt(span, 'length', system)
+            r.hold(f"travel = [{got}] lets {ws.label or 'the hoist'} run over only {cover} of "
+                   f"the {units.fmt(length, 'length', system)} member: a hoist travels its "
+                   "runway, and a travel cut short (\"1.6 ft\" for \"16 ft\", a digit "
+                   "dropped) keeps it off where the moment and sag are largest, so no rating "
+                   "is posted on it. Check the travel; if end stops really keep it there, say "
+                   "so in the wheel set's label or the notes (\"end stops at 2 ft and 8 ft\")",
+                   f"{ws.key}.travel",
+                   f"travel [{got}] covers only {cover} of the member: check it, or name the "
+                   "end stops that keep the hoist there")
 
 
 # A force unit of the metric system: N, kN, MN, N/m, kN/m, N/mm, Pa, kPa, N/m^2 ...
@@ -5578,7 +5601,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     moving = _read_moving(r, data.get("moving"), length)
     _four_per_axle(r, data.get("moving"), moving, title, notes)
     if is_lifting(tags) or criteria.lifting:
-        _trolley_spacing(r, moving, system, data.get("moving"), length)
+        _trolley_spacing(r, moving, system, data.get("moving"), length,
+                         " | ".join(x for x in (title, notes) if isinstance(x, str)))
     upward += _upward_wheels(r, moving, system)
     judged = _judged_longest(supports, length) or length
     if (judged is not None and criteria.deflection_abs is not None
