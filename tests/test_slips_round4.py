@@ -863,3 +863,19 @@ def test_a_point_load_shared_among_members_off_a_shelf_is_warned():
                [p.message for p in job.warnings if p.warning])
     assert not any("shares every load evenly" in p.message
                    for p in parse_job_text(text).warnings)
+
+
+@pytest.mark.parametrize("density, held", [("490 kg/m^3", True),    # 16 times too light
+                                           ("490 lb/ft^3", False),
+                                           ("1200 lb/ft^3", False)])  # too heavy: said only
+def test_a_typed_in_density_in_the_wrong_unit_holds_the_rating(density, held):
+    text = preset("storage-platform-beam.toml")
+    import re
+
+    text = re.sub(r'material = "A992"', '', text, count=1).replace(
+        "[[supports]]", '[beam.material]\nkind = "steel"\ne = "29000 ksi"\nfy = "50 ksi"\n'
+        f'density = "{density}"\n\n[[supports]]', 1)
+    job = parse_job_text(text)
+    said = warned(job, "beam.material")
+    assert bool(said) == (density != "490 lb/ft^3")
+    assert any("do not belong to one material" in r for r in capacity(job).not_rated) == held

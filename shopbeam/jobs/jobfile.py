@@ -1826,7 +1826,8 @@ def _said_laid_flat(r: _Reader, section, axis, title, notes, tags=()) -> None:
 # Steel, aluminium, titanium and wood along the grain all have a stiffness per weight
 # E / density of about 20 to 26 MN*m/kg (common practice: 200 GPa / 7850, 69 GPa / 2700,
 # 11 GPa / 560). A typed-in material far outside 12 to 40 has one figure from another
-# material or unit (aluminium's E with steel's density).
+# material or unit (aluminium's E with steel's density): held above (a weight too light or a
+# stiffness too great raises the figure), warned below.
 SPECIFIC_STIFFNESS = (12e6, 40e6)  # E / density, m^2/s^2
 
 
@@ -1837,11 +1838,18 @@ def _mixed_material(r: _Reader, material, system: str) -> None:
         return
     e = units.fmt(material.e, "stress", system)
     rho = units.fmt(material.density, "density", system)
-    r.warn(f"e = {e} and density = {rho} do not belong to one metal or wood: E / density is "
-           f"{ratio / 1e6:.3g} MN*m/kg, while steel, aluminium and wood all lie near 20 to 26 "
-           "(steel 29,000 ksi with 490 lb/ft^3, aluminium 10,100 ksi with 169 lb/ft^3); one of "
-           "them is another material's figure or unit. A plastic or composite differs: check "
-           "both against its data sheet", "beam.material")
+    said = (f"e = {e} and density = {rho} do not belong to one metal or wood: E / density is "
+            f"{ratio / 1e6:.3g} MN*m/kg, while steel, aluminium and wood all lie near 20 to 26 "
+            "(steel 29,000 ksi with 490 lb/ft^3, aluminium 10,100 ksi with 169 lb/ft^3); one of "
+            "them is another material's figure or unit. A plastic or composite differs: check "
+            "both against its data sheet")
+    if ratio > hi:  # too light for its stiffness: the own weight too small, or E too large,
+        # both raise the figure posted ("490 kg/m^3" for 490 lb/ft^3 is 16 times too light)
+        r.hold(said + "; no rating is posted while it stands", "beam.material",
+               f"e = {e} and density = {rho} do not belong to one material (the density too "
+               "light or E too large for the other): check both and their units")
+    else:  # too heavy or too soft for it: on the safe side for the checks
+        r.warn(said, "beam.material")
 
 
 # The elastic modulus of each kind a typed-in material can name (common practice, values
