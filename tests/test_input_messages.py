@@ -1707,3 +1707,18 @@ def test_a_load_unit_that_mixes_us_and_metric_is_said_and_a_dead_one_held(value,
     said = [p for p in job.warnings if p.warning and "mixes US and metric" in p.message]
     assert bool(said) == (held is not None), value
     assert any("mixes US and metric" in r for r in capacity(job).not_rated) == bool(held)
+
+
+@pytest.mark.parametrize("edit, key", [
+    (('value = "-500 lbf"\nlabel = "hook"', 'value = "-500 lbf"\nlabel = "hook"\ncase = "Dead"'),
+     "loads[0].case"),
+    (('material = "A500-C"\n', 'material = "A500-C"\naxis = "Weak"\n'), "beam.axis"),
+    (('value = "-500 lbf"\nlabel = "hook"', 'value = "-500 lbf"\nlabel = "hook"\nflange = "Top"'),
+     "loads[0].flange")])
+def test_a_choice_written_with_capitals_is_told_to_be_lower_case(edit, key):
+    text = _simple().replace(*edit)
+    assert text != _simple()
+    with pytest.raises(InputErrors) as e:
+        parse_job_text(text)
+    msg = [p.message for p in e.value.problems if p.key == key]
+    assert msg and "write it in lower case" in msg[0], [p.message for p in e.value.problems]

@@ -281,6 +281,14 @@ def key_lines(text: str) -> dict[str, int]:
 
 
 # ------------------------------------------------------------------ reading
+def _lower_case_hint(name: str, value, options) -> str:
+    """"; write it in lower case: name = "dead"" where `value` is one of `options` but for
+    its capitals ("Dead"), else "" (the job file's words are exact)."""
+    if isinstance(value, str) and value.strip().lower() in options and value not in options:
+        return f"; write it in lower case: {name} = \"{value.strip().lower()}\""
+    return ""
+
+
 def _ordinal(i: int) -> str:
     n = i + 1
     suffix = "th" if 10 <= n % 100 <= 20 else {1: "st", 2: "nd", 3: "rd"}.get(n % 10, "th")
@@ -1102,7 +1110,8 @@ def _read_braces_flange(r: _Reader, beam: dict, braces) -> str | None:
     if got not in ("top", "both"):
         r.error(f"braces_flange must be \"top\" (the braces hold the top flange only: joist "
                 f"seats, a deck) or \"both\" (they hold the section against twist: kickers "
-                f"to the bottom flange, full-depth connections), not {got!r}",
+                f"to the bottom flange, full-depth connections), not {got!r}"
+                + _lower_case_hint("braces_flange", got, ("top", "both")),
                 "beam.braces_flange")
         return None
     if not braces:
@@ -1574,7 +1583,8 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         return None
     case = ld.get("case", "live")
     if case not in ("live", "dead"):
-        r.error(f"case {case!r} must be \"live\" or \"dead\"", f"{key}.case")
+        r.error(f"case {case!r} must be \"live\" or \"dead\"" + _lower_case_hint(
+            "case", case, ("live", "dead")), f"{key}.case")
         case = "live"
     label = ld.get("label", "")
     if not isinstance(label, str):
@@ -1607,7 +1617,8 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         return None
     if ld.get("flange", "top") not in ("top", "bottom"):
         r.error("flange must be \"top\" (the load bears on the top flange) or \"bottom\" (it "
-                "hangs from the bottom flange)", f"{key}.flange")
+                "hangs from the bottom flange)" + _lower_case_hint(
+                    "flange", ld.get("flange"), ("top", "bottom")), f"{key}.flange")
     if kind in ("point", "moment"):
         at = _position(r, ld, "at", key, length)
         if kind == "point":
@@ -5371,7 +5382,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
             length = None
         axis = beam.get("axis")
         if axis is not None and axis not in ("strong", "weak"):
-            r.error(f"axis {axis!r} must be \"strong\" or \"weak\"", "beam.axis")
+            r.error(f"axis {axis!r} must be \"strong\" or \"weak\"" + _lower_case_hint(
+                "axis", axis, ("strong", "weak")), "beam.axis")
             axis = None
         # the material first: it decides the design wall of tube (0.93 x nominal for A500)
         if "material" not in beam:

@@ -444,8 +444,10 @@ def _inline(spec: Mapping, key: str) -> Material:
                                   f"{', '.join(sorted(allowed))}", f"{key}.{k}"))
     kind = spec.get("kind", "custom")
     if kind not in KINDS:
-        bad.append(InputError(f"kind must be one of {', '.join(KINDS)}, not {kind!r}",
-                              f"{key}.kind"))
+        low = kind.strip().lower() if isinstance(kind, str) else ""
+        bad.append(InputError(f"kind must be one of {', '.join(KINDS)}, not {kind!r}" + (
+            f"; write it in lower case: kind = \"{low}\"" if low in KINDS else ""),
+            f"{key}.kind"))
     vals = {}
     for k, unit_kind in _INLINE_KEYS.items():
         if k in spec:
