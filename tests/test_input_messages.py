@@ -1722,3 +1722,11 @@ def test_a_choice_written_with_capitals_is_told_to_be_lower_case(edit, key):
         parse_job_text(text)
     msg = [p.message for p in e.value.problems if p.key == key]
     assert msg and "write it in lower case" in msg[0], [p.message for p in e.value.problems]
+
+
+def test_a_spread_load_s_at_without_start_says_where_it_now_starts():
+    text = _simple(loads='[[loads]]\ntype = "uniform"\nat = "4 ft"\nend = "10 ft"\n'
+                         'value = "-50 lbf/ft"\n')
+    job = parse_job_text(text)
+    said = [p.message for p in job.warnings if p.key == "loads[0].at"]
+    assert said and "runs from 0" in said[0] and 'start = "4 ft"' in said[0]

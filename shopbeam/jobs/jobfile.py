@@ -1742,6 +1742,13 @@ def _placement_keys(r: _Reader, ld: dict, kind: str, key: str) -> bool:
             why = "a linear load is given by its two intensities, value = [start, end]"
         else:
             why = f"a {kind} load runs from start to end"
+            if k == "at" and "start" not in ld:  # start = at was most likely meant
+                why += (f"; with no start it runs from 0, the member's start; if it was "
+                        f"meant to start at {ld['at']}, write start = \"{ld['at']}\""
+                        if isinstance(ld["at"], str)
+                        else "; with no start it runs from 0, the member's start")
+            elif k == "at" and "end" not in ld:
+                why += "; with no end it runs to the member's end"
         r.warn(f"{k} is not read by a {kind} load ({why}); ignored", f"{key}.{k}")
     return True
 
