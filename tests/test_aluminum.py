@@ -137,7 +137,8 @@ def test_thin_tube_flange_local_buckling_is_checked():
     # Fsy 21 ksi, Bs 27.23, Ds 0.1414, lambda1 35.2 < h/t 44.2 < lambda2 63.2:
     # Fs = Bs - 1.25 Ds h/t = 19.42 ksi, below 0.6 Fty = 21 ksi
     v = check(res, "shear")
-    assert v.limit == pytest.approx(19.42 * KSI * res.job.section.shear_area / 1.65, rel=2e-3)
+    # on the two webs' flat (clear) height, 3.668 in, times the wall (ADM 2015 G.2)
+    assert v.limit == pytest.approx(19.42 * KSI * 2 * 3.668 * 0.083 * IN**2 / 1.65, rel=2e-3)
     assert "G.2" in v.formula
     # a stocky tube (flat b/t = (4 - 4 x 0.25) / 0.25 = 12 < 20.9) reaches yield first
     stocky = '{ shape = "rect-tube", depth = "4 in", width = "4 in", wall = "0.25 in" }'
@@ -360,3 +361,22 @@ def test_a_thin_round_aluminium_tube_in_bending_takes_the_curved_wall_buckling_s
     assert bend.limit / 4.4482216152605 / 0.3048 == pytest.approx(ma, rel=2e-3)
     assert "B.5.5.4" in bend.formula
     assert bend.clause == "ADM 2015 B.5.5.4, curved wall in flexure"  # the provision used
+
+
+def test_an_aluminium_i_beam_s_shear_area_is_the_web_s_clear_height_times_its_thickness():
+    # ADM 2015 G.2 (from memory): Vn = Fs Av of the flat web element supported on both edges,
+    # the clear height h = d - 2 tf (the h of its h/t) times t: 5.5 x 0.1 in here, not the
+    # steel code's d tw, 0.6 in^2 (which posted 9 % high where shear governs)
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    job = parse_job_text(
+        'schema = 1\ntitle = "A12"\ntags = ["not-lifting"]\n[beam]\nlength = "8 ft"\n'
+        'material = "6061-T6"\nself_weight = false\nwelded = true\nrestrained = true\n'
+        '[beam.section]\nshape = "i-beam"\ndepth = "6 in"\nflange_width = "4 in"\n'
+        'flange_thickness = "0.25 in"\nweb_thickness = "0.1 in"\n[[supports]]\nat = "0 ft"\n'
+        'type = "fixed"\n[[supports]]\nat = "8 ft"\ntype = "fixed"\n[[loads]]\n'
+        'type = "uniform"\nvalue = "-300 lbf/ft"\n')
+    v = next(c for c in analyze(job).checks if c.name == "shear")
+    inch2 = 0.0254 ** 2
+    assert v.params["Av"] / inch2 == pytest.approx(5.5 * 0.1, rel=1e-9)

@@ -185,6 +185,18 @@ def web_ratio(sec) -> float | None:
     return None
 
 
+def web_area(sec) -> float | None:
+    """The area of the web(s) that carry the shear, ADM 2015 G.2: the clear height (as in
+    `web_ratio`) times the thickness, two webs for a tube; None where `web_ratio` has none.
+    (The steel code's d tw takes the flanges' depth in too.)"""
+    ht = web_ratio(sec)
+    if ht is None:
+        return None
+    d = sec.dims
+    t = d["t_des"] if sec.shape == "rect-tube" else d["tw"]
+    return (2 if sec.shape == "rect-tube" else 1) * ht * t * t
+
+
 def shear_buckling(ht: float, fsy: float, e: float, aged: bool = True, system: str = "us"
                    ) -> tuple[float, float, float, str]:
     """(Fs Pa, lambda1, lambda2, words) of an unstiffened web in shear, ADM 2015 G.2 with the

@@ -40,8 +40,8 @@ CAPPED_AT_YIELD = "capped at first yield"
 def yield_cap_words(sf: float) -> str:
     """How a bending strength held to first yield over the job's safety factor is said (the
     I-shapes, tubes and channels of `checks.on_yield`, and each axis of a tee or angle)."""
-    return (f"{CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the job's safety factor on the yield "
-            "strength in bending)")
+    return (f"{CAPPED_AT_YIELD}, M <= Fy S / {sf:g} (the job's safety factor on the "
+            "bending yield strength)")
 # the safety factor on yield in bending a job that gives none takes (the contract's example)
 DEFAULT_SF = 1.67
 

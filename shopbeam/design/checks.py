@@ -911,6 +911,10 @@ def shear_strength(sec, mat, basis: str, sf: float = 1.67, welded: bool = False,
         w = "Ftyw (welded)" if (welded and mat.fy_welded) else "Fty"
         text = (f"ADM 2015 G: Vn = Fsy Av = 0.6 {w} Av, 0.6 {w.split()[0]} = "
                 f"{stress_words(0.6 * fy, system, True)}, Omega 1.65")
+        web = aluminum.web_area(sec)
+        if web is not None and web < av:  # the web's clear height, not the steel code's d tw
+            av = web
+            text += ", Av = the webs' clear height x thickness (ADM 2015 G.2)"
         ht = aluminum.web_ratio(sec)
         if ht is not None:
             fs, l1, _, words = aluminum.shear_buckling(ht, 0.6 * mat.fy, e, system=system)
