@@ -812,3 +812,24 @@ def test_a_wheel_contact_on_a_steel_member_is_warned_as_unused():
     j = parse_job_text(text, "deck.toml")
     assert any(p.key == "moving[0].bearing" and "changes nothing" in p.message
                for p in j.warnings)
+
+
+def test_a_span_of_a_continuous_wood_member_takes_the_general_row_of_table_3_3_3():
+    # NDS 2018 Table 3.3.3 (from memory): its rows are for single spans and cantilevers; a
+    # span of a two-span 2x6 rail (lu 144 in, d 5.5 in, lu/d 26 > 14.3) takes the footnote's
+    # general row, le = 1.84 lu, not the single span's 1.63 lu + 3d (Fb' was 3 % high)
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    text = ('schema = 1\ntitle = "two-span rail"\ntags = ["not-lifting"]\n[beam]\n'
+            'length = "{L}"\nsection = "2x6"\nmaterial = "DF-L-2"\nself_weight = false\n'
+            'bearing = "3.5 in"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "12 ft"\ntype = "roller"\n{more}[[loads]]\ntype = "uniform"\n'
+            'value = "-10 lbf/ft"\n')
+    two = analyze(parse_job_text(text.format(
+        L="24 ft", more='[[supports]]\nat = "24 ft"\ntype = "roller"\n')))
+    bend = next(c for c in two.checks if c.name == "bending")
+    assert "le = 1.84 lu" in bend.formula, bend.formula
+    one = analyze(parse_job_text(text.format(L="12 ft", more="")))
+    assert "single span, uniform load" in next(c for c in one.checks
+                                               if c.name == "bending").formula

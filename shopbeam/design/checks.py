@@ -1141,6 +1141,10 @@ def wood_load_case(job, a: float, b: float, free: bool, loads=None) -> str:
     ends_held = [any(abs(x - h) <= tol for h in held) for x in (a, b)]
     if not free and not all(ends_held):
         return "any"  # a length ending at a brace: Table 3.3.3 footnote (general rows)
+    if not free and (len({round(h / tol) for h in held}) > 2
+                     or any(sp.kind == "fixed" for sp in job.supports)):
+        return "any"  # a span of a continuous or fixed-ended member: the table's rows are
+        # for single spans and cantilevers, so its footnote's general rows apply
     return lumber.load_case(job.member_loads() if loads is None else loads, a, b, free,
                             free and b >= job.length * (1 - 1e-9))
 
