@@ -259,6 +259,36 @@ def _unit(text: str):
     return reg.parse_units(text.replace("^", "**"))
 
 
+_US_NAMES = re.compile(r"(?:foot|inch|yard|mile|pound|kip|ounce|short_ton|long_ton|"
+                       r"(?<!metric_)ton\b|psi|ksi|psf|ksf|plf|klf|pli|pcf|mil\b)")
+_SI_NAMES = re.compile(r"(?:meter|metre|newton|gram|pascal|metric_ton|tonne|liter|litre)")
+
+
+def unit_systems(text: str) -> frozenset[str]:
+    """Which systems the units of a value come from, as the reader reads them ("us",
+    "metric"; "yard" besides where a yard is among them): "-90 lbf per m" is both, however
+    it is spelt. Empty where the text does not read."""
+    scanned = _terms(text) if isinstance(text, str) else None
+    if scanned is None:
+        return frozenset()
+    out = set()
+    for _, unit in scanned[1]:
+        if not unit:
+            continue
+        try:
+            u = _unit(shop_unit(unit))
+        except Exception:  # noqa: BLE001 - the reader says what is wrong with it
+            continue
+        for name in (str(c) for c in getattr(u, "_units", {})):
+            if _SI_NAMES.search(name):
+                out.add("metric")
+            elif _US_NAMES.search(name):
+                out.add("us")
+            if "yard" in name:
+                out.add("yard")
+    return frozenset(out)
+
+
 def quantity(text: str, key: str = "", unit_hint: str = "ft", kind: str | None = None):
     """Parse shop notation to a pint Quantity (sum of compound terms). Raises InputError."""
     if not isinstance(text, str):

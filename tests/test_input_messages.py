@@ -1696,6 +1696,8 @@ def test_a_support_settlement_key_holds_the_rating_as_it_is_not_modelled(key, he
 
 @pytest.mark.parametrize("value, case, held", [
     ("-90 lbf/m", "dead", True), ("-90 lbf/yd", "dead", True), ("-1.3 kN/ft", "dead", True),
+    ("-90 lbf m^-1", "dead", True), ("-90 lbf per m", "dead", True),  # however it is spelt
+    ("-90 pound_force/m", "dead", True), ("-90 newton/foot", "dead", True),
     ("-600 lbf/m", "live", False), ("-90 lbf/ft", "dead", None)])
 def test_a_load_unit_that_mixes_us_and_metric_is_said_and_a_dead_one_held(value, case, held):
     # "-90 lbf/m" for lbf/ft: the deck's weight 3.28 times too light, the posted load 7 % high

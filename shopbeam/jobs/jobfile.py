@@ -2897,7 +2897,9 @@ def _mixed_units(r: _Reader, raw_loads, loads) -> None:
         vals = raw.get("value", raw.get("total"))
         key = f"{ld.key}.{'value' if 'value' in raw else 'total'}"
         texts = [v for v in (vals if isinstance(vals, list) else [vals]) if isinstance(v, str)]
-        mixed = [v for v in texts if _MIXED_UNIT.search(v)]
+        mixed = [v for v in texts if _MIXED_UNIT.search(v)
+                 or {"us", "metric"} <= units.unit_systems(v)
+                 or "yard" in units.unit_systems(v)]
         if not mixed:
             continue
         said = ", ".join(f'"{v}"' for v in mixed)
@@ -2942,7 +2944,7 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
         vals = raw.get("value", raw.get("total"))
         texts = [v for v in (vals if isinstance(vals, list) else [vals]) if isinstance(v, str)]
         name = ld.key + (f" ({ld.label})" if ld.label else "")
-        metric = [v for v in texts if _SI_FORCE.search(v)]
+        metric = [v for v in texts if _SI_FORCE.search(v) or units.unit_systems(v) == {"metric"}]
         if system == "us" and metric and ld.kind != "moment":
             said = ", ".join(f'"{v}"' for v in metric)
             if ld.case == "dead":
