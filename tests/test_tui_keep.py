@@ -2046,6 +2046,33 @@ async def test_a_late_answer_is_said_late_not_shown_as_the_answer_to_the_edit(tm
         assert f.input.value == "Heavy"
 
 
+@sync
+async def test_a_key_typed_is_marked_in_the_same_step_that_shows_it(tmp_path, monkeypatch):
+    # the summary and the field say the answer shown is the old job's in the very step the
+    # key changes the field's text, before the edit's message is handled (a frame drawn in
+    # between had shown "ALL CHECKS PASS" beside a typed value that fails); the summary
+    # keeps its height, and the mark goes once the answer comes
+    from shopbeam.tui.views import CHECKING_EDIT, CHECKING_WORDS
+
+    gate, real = _held_solves(monkeypatch)
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        f = await focused(pilot, app, "job", "title")
+        before = js._summary_shown
+        assert CHECKING_EDIT not in before
+        gate.clear()
+        f.input.insert_text_at_cursor("X")  # as a key puts it in; no message handled yet
+        assert CHECKING_EDIT in js._summary_shown
+        assert len(js._summary_shown.splitlines()) == len(before.splitlines())
+        assert f._shown[0].startswith(CHECKING_WORDS)
+        gate.set()
+        assert await _until(pilot, lambda: not js.session.stale)
+        await settle(pilot)
+        assert CHECKING_EDIT not in js._summary_shown and not js.stale_marked
+
+
 def _held_solves(monkeypatch):
     """Every solve of the text UI waits for the returned event (set: they run at once)."""
     import threading

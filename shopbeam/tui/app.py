@@ -269,8 +269,10 @@ class JobScreen(Screen):
         warn = [w if len(w) <= width else textwrap.shorten(w, width, placeholder=" ...")
                 for w in warn]
         if behind:  # the answer's line is the job's before the edit: said instead, in
-            # its place (the summary keeps its height, so the form does not jump per key)
-            return "\n".join(warn + [CHECKING_EDIT])
+            # its place, with as many lines (the form does not jump up and back per key)
+            line = drawing.summary_line(ev.result, width, "   (7 results, 8 plots)")
+            more = ["  its answer follows as soon as the job is solved"] + [" "] * 12
+            return "\n".join(warn + [CHECKING_EDIT] + more[:len(line.splitlines()) - 1])
         return "\n".join(warn + [drawing.summary_line(ev.result, width,
                                                       "   (7 results, 8 plots)")])
 
@@ -329,6 +331,32 @@ class JobScreen(Screen):
 
     stale_marked = False  # the answer shown is for an earlier edit, and said so (`changed`)
     _stale_since = None  # when the first edit the answer shown does not cover was made
+    typing_pending = False  # a key typed into a field whose edit has not reached the job yet
+
+    def typing_now(self, field) -> None:
+        """A key has just changed a field's text (`FieldInput.watch_value`): in the same step,
+        before any frame shows the key, the summary and the field say the answer shown is
+        for the job before it (the edit's own message comes a moment later)."""
+        self.typing_pending = True
+        if not self.stale_marked:
+            self.stale_marked = True
+            if self._stale_since is None:
+                self._stale_since = time.monotonic()
+        if self.current in INPUT_VIEWS and self.is_attached:
+            text = self.summary_text()
+            if text != getattr(self, "_summary_shown", None):
+                self._summary_shown = text
+                update_text(self.query_one("#summary", Static), Text(text))
+        field.show(CHECKING_WORDS)
+
+    def _typing_taken(self) -> None:
+        """The field's edit has reached the job (or was not one): the mark stands only while
+        the job is being solved."""
+        if self.typing_pending:
+            self.typing_pending = False
+            if not self.session.stale and self.stale_marked:
+                self.stale_marked, self._stale_since = False, None
+                self.refresh_all()
 
     @work(thread=True, group="solve", exit_on_error=False)
     def _solve(self, session: Session, version: int, data: dict, text: str, name: str,
@@ -456,6 +484,7 @@ class JobScreen(Screen):
             f.edited_version = self.session.version
             if late(f):  # the screen was drawn before this field's edit was counted
                 f.show(CHECKING_WORDS)
+        self._typing_taken()
 
     async def key_behind(self, event) -> None:
         """A key that reached a question before it could be read (see `AnswerScreen`): it
@@ -573,6 +602,7 @@ class JobScreen(Screen):
             if c._pending is not None:
                 value, c._pending = c._pending, None
                 self.edit_safely(f"the choice of {c.label}", self.apply_choice, c.key, value)
+        self._typing_taken()
 
     def edit_safely(self, what: str, do, *args) -> bool:
         """Apply one edit; a failure inside shopbeam (a bug) refuses that edit with a

@@ -24,7 +24,8 @@ from shopbeam.cautions import cautions_for
 from shopbeam.engine.model import LOAD_KINDS, SUPPORT_KINDS
 from shopbeam.jobs.rules import LIFTING_PROFILES
 from shopbeam.members.wood import DURATIONS, TEMPERATURES
-from shopbeam.tui.widgets import Choice, Field, KeepFocusOnStaleHide, fit_text, one_line
+from shopbeam.tui.widgets import (CHECKING_WORDS, Choice, Field,  # noqa: F401 (re-exported)
+                                  KeepFocusOnStaleHide, fit_text, one_line)
 
 # The design modules, the catalog, the materials and the drawings (numpy) are imported where
 # a view first needs them: the first screen (the job view) is drawn without them, and the
@@ -1238,7 +1239,6 @@ def problems_text(ev) -> str:
 # and beside a field typed in since the answer shown was worked out
 CHECKING_EDIT = "Checking your last edit ..."
 STALE_WORDS = CHECKING_EDIT + " the figures shown are for the job before it."
-CHECKING_WORDS = "checking what was typed ..."
 
 
 def late(view) -> bool:
@@ -1247,7 +1247,7 @@ def late(view) -> bool:
     screen = view.screen
     session = getattr(screen, "session", None)
     return bool(getattr(screen, "stale_marked", False) and session is not None
-                and session.stale)
+                and (session.stale or getattr(screen, "typing_pending", False)))
 
 
 def late_words(ev) -> str:

@@ -25,6 +25,9 @@ from textual.widgets.input import Selection
 
 from shopbeam.cautions import SHORT, SHORT_LIFTING, is_lifting
 
+# beside a field typed in since the answer shown was worked out, until its answer comes
+CHECKING_WORDS = "checking what was typed ..."
+
 
 # Esc typed quickly before a digit (or alt+digit) reaches the app as the character a Mac
 # keyboard's Option layer puts on that digit; over SSH and in tmux that is how "Esc 7" arrives.
@@ -267,6 +270,11 @@ class FieldInput(KeepFocusOnStaleHide, Input):
         field = self.parent
         if isinstance(field, Field) and value != getattr(field, "_quiet", None):
             field._typed = value
+            # the answer shown is the job's before this key from the frame that shows the
+            # key: marked now, not when the edit's message arrives (`JobScreen.typing_now`)
+            typing_now = getattr(self.screen, "typing_now", None) if self.is_attached else None
+            if typing_now is not None:
+                typing_now(field)
 
     async def action_submit(self) -> None:
         if getattr(self.screen, "ENTER_NEXT_FIELD", False):
@@ -406,7 +414,13 @@ class Field(Horizontal):
         shown = ("problem: " + message) if error else message
         if getattr(self, "_shown", None) == (shown, error):
             return
+        was = getattr(self, "_shown", None)
         self._shown = (shown, error)
+        if message == CHECKING_WORDS and was is not None:
+            # while the edit is checked the message keeps the height it had, so the form
+            # below does not jump up and back at every key (blank lines under the words)
+            lines = len(was[0].splitlines()) if not self.has_class("-wide") else 0
+            shown += "\n " * max(0, min(lines, 12) - 1)
         update_text(self.query_one(".field-msg", Static), Text(shown),
                     fixed_width=not self.has_class("-wide"))
         self.set_class(error, "-error")
