@@ -274,8 +274,7 @@ async def test_save_conflict_shows_the_diff_and_can_overwrite(tmp_path):
         assert isinstance(app.screen, ConflictScreen)
         assert "# theirs" in app.screen.conflict.diff
         await pilot.pause(READ)  # a key made sooner is not taken as the answer
-        await pilot.press("o")
-        await pilot.pause(ALONE)
+        await pilot.press("o", "enter")  # overwriting asks for Enter after its letter
         await pilot.pause()
         assert isinstance(app.screen, JobScreen)
         assert 'title = "Mine"' in path.read_text(encoding="utf-8")
@@ -309,8 +308,7 @@ async def test_quit_with_unsaved_changes_asks_first():
         assert isinstance(app.screen, JobScreen) and app.is_running
         await pilot.press("ctrl+q")
         await pilot.pause(READ)
-        await pilot.press("d")
-        await pilot.pause(ALONE)
+        await pilot.press("d", "enter")  # discarding asks for Enter after its letter
         await pilot.pause()
     assert app.return_code == 0 or app.return_code is None
 
@@ -380,8 +378,7 @@ async def test_library_search_and_the_guard_on_opening_another_job():
         await pilot.pause()
         assert isinstance(app.screen, ConfirmScreen)  # unsaved changes: asked first
         await pilot.pause(READ)
-        await pilot.press("d")
-        await pilot.pause(ALONE)
+        await pilot.press("d", "enter")
         await pilot.pause()
         s = app.job_screen.session
         assert s.name == "jib-arm" and not s.dirty

@@ -652,7 +652,11 @@ async def test_a_quit_question_read_and_answered_still_takes_its_key(tmp_path):
         assert f.input.value == "Changedd"
         await pilot.pause(app.screen.WORD_GAP + 0.05)  # read, and no word being typed
         await burst(pilot, "d")
-        await pilot.pause(app.screen.ALONE + 0.1)  # a letter answers once no key follows it
+        await pilot.pause(app.screen.ALONE + 0.1)  # "d" alone: text (discarding asks Enter)
+        await pilot.pause()
+        assert app.is_running and f.input.value == "Changeddd"
+        await burst(pilot, "d")
+        await pilot.press("enter")  # the letter and Enter right after it: the answer
         await pilot.pause()
     assert app.return_code in (0, None) and not app.is_running
 
@@ -738,6 +742,26 @@ async def test_a_hunt_and_peck_typist_s_letters_after_the_question_never_answer_
         await pilot.press("enter")  # the letter, then Enter: the answer
         await pilot.pause()
     assert not app.is_running
+
+
+@sync
+async def test_a_slow_word_that_starts_with_the_discard_letter_never_discards(tmp_path):
+    # "dog" typed a second and a half a key after ctrl+q: its "d" is the first key after the
+    # question and alone by any gap, but discarding asks for Enter after its letter, so the
+    # word goes on into the field and the question stays
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
+        await burst(pilot, CTRL_U + "EDIT " + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        for letter in "dog":
+            await pilot.pause(app.screen.WORD_GAP + 0.05)
+            await burst(pilot, letter)
+        await pilot.pause(app.screen.ALONE + 0.2)
+        await pilot.pause()
+        assert app.is_running and type(app.screen).__name__ == "ConfirmScreen"
+        assert f.input.value == "EDIT dog" and app.job_screen.session.dirty
 
 
 # ------------------------------------- a choice picks by a letter pressed on its own only

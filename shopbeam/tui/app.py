@@ -1643,7 +1643,11 @@ class ShopbeamApp(App):
                     # once keys went on to the field behind, a letter alone is text too
                     # (a slow typist's next letter); the answer is that letter, then Enter
                     alone = (lambda ev=event: self.call_later(js.key_behind, ev)) \
-                        if question.typed_behind else None
+                        if question.typed_behind or event.key in question.CONFIRM else None
+                    if alone is not None and not question.typed_behind:
+                        self.notify(f"\"{event.key}\" answers this question only with Enter "
+                                    "right after it; on its own it goes on into the field.",
+                                    timeout=6)
                     question.hold(event, lambda: self.call_later(question.run_action, action),
                                   alone)
                     return

@@ -148,6 +148,10 @@ class AnswerScreen(ModalScreen[str]):
     # discard every edit: a word typed at any ordinary pace never answers it.
     WORD_GAP = 1.0  # seconds, as a word typed slowly on a choice
     ALONE = 0.6  # seconds a letter answer waits for a key behind it
+    # letters whose answer throws work away or sends the typing elsewhere (discard,
+    # overwrite, a new name's box): answered only by the letter and Enter right after it, as
+    # a hunt-and-peck typist's next letter is alone by any gap; the letter alone is text
+    CONFIRM: frozenset[str] = frozenset()
 
     def __init__(self) -> None:
         super().__init__()
@@ -216,6 +220,8 @@ class AnswerScreen(ModalScreen[str]):
 class ConfirmScreen(AnswerScreen):
     """Unsaved changes: save, discard, or go back. Dismisses "save", "discard" or "cancel"."""
 
+    CONFIRM = frozenset({"d"})
+
     BINDINGS = [Binding("escape", "answer('cancel')", "keep editing"),
                 Binding("s", "answer('save')", "save"),
                 Binding("d", "answer('discard')", "discard")]
@@ -231,7 +237,7 @@ class ConfirmScreen(AnswerScreen):
             yield Static(f"Save them before you {self.doing}?", markup=False)
             with Horizontal(classes="buttons"):
                 yield Button("s  Save", id="save", compact=True)
-                yield Button(f"d  Discard and {self.doing}", id="discard", compact=True)
+                yield Button(f"d+enter  Discard and {self.doing}", id="discard", compact=True)
                 yield Button("esc  Keep editing", id="cancel", compact=True)
         yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
@@ -333,6 +339,8 @@ class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
 class ConflictScreen(AnswerScreen):
     """A save was refused: show what changed on disk; save as new name, overwrite, or cancel."""
 
+    CONFIRM = frozenset({"n", "o"})
+
     BINDINGS = [Binding("escape", "answer('cancel')", "cancel"),
                 Binding("n", "answer('new')", "save as new name"),
                 Binding("o", "answer('overwrite')", "overwrite")]
@@ -352,8 +360,8 @@ class ConflictScreen(AnswerScreen):
             with VerticalScroll(id="conflict-diff"):
                 yield Static(c.diff or "(no differences to show)", markup=False)
             with Horizontal(classes="buttons"):
-                yield Button("n  Save as a new name", id="new", compact=True)
-                yield Button("o  Overwrite with mine", id="overwrite", compact=True)
+                yield Button("n+enter  Save as a new name", id="new", compact=True)
+                yield Button("o+enter  Overwrite with mine", id="overwrite", compact=True)
                 yield Button("esc  Cancel", id="cancel", compact=True)
         yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
