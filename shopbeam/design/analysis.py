@@ -423,6 +423,11 @@ _THRUST_WORDS = re.compile(
 FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked elsewhere
 
 
+# Fewer load cycles than this on a road member is a count slipped (a trailer member sees
+# millions of bumps in its life: 2,000,000 is the usual design figure, common practice)
+ROAD_CYCLES = 100_000
+
+
 def use_unchecked(job: Job) -> list[Unchecked]:
     """Limit states the member's use calls for that shopbeam does not check, each blocking
     the rating until the job says it does not arise (a tag):
@@ -489,7 +494,7 @@ def use_unchecked(job: Job) -> list[Unchecked]:
             "it checked; or add the tag \"fatigue-checked\" once it has been checked "
             "elsewhere, or \"not-vehicle\" if it is not on a vehicle",
             "AISC 360-16 Appendix 3"))
-    elif on_road and steel and job.criteria.cycles < fatigue.FEW_CYCLES:
+    elif on_road and steel and job.criteria.cycles < ROAD_CYCLES:
         # the count given switches the check off (A-3.1), but a road member's bumps run to
         # millions: "2000" for 2000000 is three zeros dropped, and the rating would rest on
         # no fatigue check at all
@@ -497,9 +502,10 @@ def use_unchecked(job: Job) -> list[Unchecked]:
             "fatigue under road loads",
             f"it reads like a member of a road vehicle or mobile machine ({road}), where every "
             f"bump is a load cycle and a trailer or truck member sees millions, but cycles = "
-            f"{job.criteria.cycles:,.0f} is under the {fatigue.FEW_CYCLES:,} below which no "
-            "fatigue check is made, so none is: check the count (cycles = 2000000 for a "
-            "road member's life, a digit or three zeros dropped?); or add the tag "
+            f"{job.criteria.cycles:,.0f} is under {ROAD_CYCLES:,} (under "
+            f"{fatigue.FEW_CYCLES:,} no fatigue check is made at all): check the count "
+            "(cycles = 2000000 for a road member's life, a digit or zeros dropped?); or add "
+            "the tag "
             "\"fatigue-checked\" once it has been checked elsewhere, or \"not-vehicle\" if it "
             "is not on a vehicle",
             "AISC 360-16 Appendix 3.1"))

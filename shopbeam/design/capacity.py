@@ -608,9 +608,14 @@ def _relieving_dead_couples(job, section, k: float) -> tuple[str, ...]:
     couples = [ld for ld in job.loads if ld.case == "dead" and ld.kind == "moment" and ld.value]
     if not couples or not math.isfinite(k) or k <= 0:
         return ()
+    if len(couples) > MAX_COUPLES_TRIED:
+        return (f"{len(couples)} dead couples, more than the {MAX_COUPLES_TRIED} shopbeam takes "
+                "off one by one to see whether one relieves the member (a couple's slipped "
+                "sign raises the figure posted), so nothing is posted. Combine couples at one "
+                "place into one, or rate the member without those that relieve it",)
     out = []
     below = k * (1 - 1e-6)
-    for c in couples[:MAX_COUPLES_TRIED]:
+    for c in couples:
         rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not c))
         ss = state_set(rest, section)
         st = strengths(rest, sec=section, beam=ss.beam)

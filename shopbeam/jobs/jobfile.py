@@ -539,7 +539,7 @@ class _Reader:
                           "end, AISC 360-16 B4.3 and J4 for holes), or remove the key if it is "
                           "not cut", path)
                 continue
-            if here == "supports" and _SETTLE_KEY.match(str(k)):
+            if here == "supports" and _SETTLE_KEY.search(str(k)):
                 path = f"{prefix}.{k}" if prefix else k
                 self.hold(f"{k!r} in {label} reads as a settlement of the support (it drops "
                           "by a set amount), which shopbeam does not model: in a member "
@@ -692,10 +692,11 @@ _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes
                       r"(?:$|[_\- ])", re.IGNORECASE)
 
 # An unknown key of a support that reads like a settlement (a drop of the support given)
-_SETTLE_KEY = re.compile(r"^(?:settle(?:ment|s|d)?|settling|sink(?:age)?|subsidence|"
-                         r"(?:support_?)?(?:drop|displacement|deflection|movement|sag)|"
-                         r"imposed_?(?:deflection|displacement)|prescribed_?\w*|delta|dy|"
-                         r"dz|offset_?(?:down|y))$", re.IGNORECASE)
+_SETTLE_KEY = re.compile(r"(?:^|_)(?:settle(?:ment|s|d)?|settling|sinks?|sinking|sink(?:age)?|"
+                         r"subsidence|drops?|displacement|movement|sag)(?:_|$)|"
+                         r"^(?:support_?)?deflection$|^imposed_?(?:deflection|displacement)$|"
+                         r"^prescribed_?\w*|^(?:delta|dy|dz|offset_?(?:down|y))(?:_\w+)?$",
+                         re.IGNORECASE)
 
 # An unknown key that reads like a safety factor: one the user meant to apply, ignored, so the
 # job is not rated on it (a misplaced safety_factor too)
@@ -1365,8 +1366,13 @@ _FLANGE_TIP_WORDS = re.compile(r"\b(monorails?|trolley|trolleys|beam[- ]?clamps?
 # The title or notes saying the load hangs at a fixed point, welded under the web
 _FIXED_PICK_WORDS = re.compile(
     r"\b(?:lugs?|pad[- ]?eyes?|lifting eyes?|eye plates?|(?:plate|tab) welded (?:under|to) "
-    r"the web|(?:does ?n[o']t|doesn't|never|will not|won't) (?:travel|move|run)|"
-    r"fixed (?:pick|lifting|hoist|hook)(?:ing)? points?)\b", re.IGNORECASE)
+    r"the web|(?:does ?n[o']t|doesn't|never|will not|won't) (?:travel|move|run)s?"
+    r"(?! (?:past|beyond|over|off|further|farther|more))|no trolley|never moves|"
+    r"fixed (?:pick|lifting|hoist|hook)(?:ing)? points?|fixed hoist)\b", re.IGNORECASE)
+# ...and words that say the hoist does run along (a trolley by another name)
+_RUNS_ALONG = re.compile(r"\b(?:carriers?|carriages?|runs? along|travels? along|travell?ing|"
+                         r"rolls? along|rolling|moves? along|wheels?|(?:travel|move|run)s? "
+                         r"(?:past|beyond|between|up to|as far as|over))\b", re.IGNORECASE)
 
 
 def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=(), title="",
@@ -1385,7 +1391,9 @@ def _lug_on_a_trolley(r: _Reader, crit_raw, tags, raw_loads, lugs, loads=(), tit
     if not lugs:
         return
     words = " | ".join(_as_words(t) for t in (title, notes) if isinstance(t, str))
-    fixed_said = bool(_FIXED_PICK_WORDS.search(words)) and not _FLANGE_TIP_WORDS.search(words)
+    fixed_said = bool(_FIXED_PICK_WORDS.search(words)) and not _FLANGE_TIP_WORDS.search(
+        re.sub(r"\bno trolley\b", "", words, flags=re.IGNORECASE)) \
+        and not _RUNS_ALONG.search(words)
     profile = crit_raw.get("lifting", "") if isinstance(crit_raw, dict) else ""
     profile = profile if isinstance(profile, str) else ""
     bth = profile == "below-the-hook"
@@ -1849,7 +1857,21 @@ def _said_laid_flat(r: _Reader, section, axis, title, notes, tags=()) -> None:
 SPECIFIC_STIFFNESS = (12e6, 40e6)  # E / density, m^2/s^2
 
 
+# A carbon or stainless steel weighs 7,750 to 8,000 kg/m^3 (490 to 500 lb/ft^3, common
+# practice): a typed-in steel far lighter leaves out own weight (a digit slipped, "390")
+STEEL_DENSITY_LOW = 7000.0  # kg/m^3
+
+
 def _mixed_material(r: _Reader, material, system: str) -> None:
+    if getattr(material, "kind", "") in ("steel", "stainless") \
+            and material.density < STEEL_DENSITY_LOW:
+        rho = units.fmt(material.density, "density", system)
+        r.hold(f"density = {rho} is far lighter than any steel (490 to 500 lb/ft^3, 7,850 "
+               "kg/m^3): the member's own weight, a dead load, would be left partly out and "
+               "the figure posted too high, so no rating is posted. Check the figure and its "
+               "unit", "beam.material",
+               f"the typed-in steel's density {rho} is far under any steel's: check it")
+        return
     ratio = material.e / material.density
     lo, hi = SPECIFIC_STIFFNESS
     if lo <= ratio <= hi:
@@ -2284,7 +2306,7 @@ def _own_weight_twice(r: _Reader, loads: list[Load], self_weight: bool) -> None:
 
 # A dead spread load's label that names the floor's own build-up (what weighs a floor down)
 _DECK_WORDS = re.compile(r"\b(decks?|decking|joists?|floor\w*|slabs?|grating|planks?|plywood|"
-                         r"osb|sheathing|topping|finish\w*|tiles?|concrete|framing|dead|"
+                         r"osb|sheathing|topping|finish\w*|tiles?|concrete|framing|dead|dl|d\.l|"
                          r"superimposed|partitions?)\b", re.IGNORECASE)
 
 
@@ -2625,6 +2647,8 @@ _RACK_SOFT = re.compile(
     r"beam levels?|levels? \d+ beams?|longspan)\b", re.IGNORECASE)
 
 
+_RACK_LEVEL_WORDS = re.compile(r"\b(?:per level|levels?|bays?|uprights?|beam pairs?|"
+                               r"pallets? per)\b", re.IGNORECASE)
 _DOCK_WORDS = re.compile(r"\b(?:loading[- ])?docks?\b(?![- ]?(?:side )?rack)", re.IGNORECASE)
 
 
@@ -2808,8 +2832,9 @@ SHORT_TRAVEL = 0.25
 # A lifting job's travel over less than this share of the member, in any unit, with no end
 # stops said, is a slip too (a digit or a decimal point)
 HALF_TRAVEL = 0.5
-_END_STOP_WORDS = re.compile(r"\b(?:end[- ]?stops?|stops?|bumpers?|limit(?:ed)? (?:to|by)|"
-                             r"only (?:runs?|travels?)|travels? only)\b", re.IGNORECASE)
+_END_STOP_WORDS = re.compile(r"\b(?:end[- ]?stops?|(?:travel|rail) stops?|bumpers?|"
+                             r"buffers?|stoppers?|end[- ]?clamps?|end[- ]?plates?|"
+                             r"stop (?:blocks?|bolts?|plates?))\b", re.IGNORECASE)
 
 
 def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
@@ -3248,9 +3273,16 @@ def _rack_members(r: _Reader, title, notes, tags, raw_loads, members, supports) 
 
 # A point load's words that say something spreads it over the members (a pallet or a deck
 # across them, a spreader or cross-bar)
-_SHARED_WORDS = re.compile(r"\b(?:shared?|spread|across|both|each|all|spreaders?|cross[- ]?"
+_SHARED_WORDS = re.compile(r"\b(?:shared?|spread|across|both (?:rails|beams|members)|"
+                           r"spreaders?|cross[- ]?"
                            r"bars?|pallets?|skids?|decks?|boards?|sheets?|plates?|per (?:rail|"
                            r"beam|member|arm))\b", re.IGNORECASE)
+
+
+# Words that count the arms sharing a load ("three arms under each pallet", "both arms")
+_ARM_COUNT = re.compile(r"\b(?:two|both|three|four|five|six|seven|eight|[2-9]|1\d|a pair of|"
+                        r"pairs? of)\s+(?:(?!ft\b|feet\b|in\b|inch\w*|mm\b|m\b)\w+\s+)?arms\b",
+                        re.IGNORECASE)
 
 
 def _members_uneven(r: _Reader, tags, raw_loads, loads, members, supports, title="",
@@ -3266,7 +3298,7 @@ def _members_uneven(r: _Reader, tags, raw_loads, loads, members, supports, title
         return
     held = {round(sp.at, 9) for sp in supports if sp.takes_force}
     rack = RACK_TAGS.intersection(normal_tag(t) for t in tags if isinstance(t, str))
-    if len(held) == 1 and rack and not _plain_found(_OTHER_COUNT, title, notes, (), ()):
+    if len(held) == 1 and rack and not _plain_found(_ARM_COUNT, title, notes, (), ()):
         # (where the words count the arms, "three arms under each pallet", it is meant)
         r.warn(f"members = {members} shares the load entered evenly among {members} arms of a "
                "cantilever rack, and the label posts it for all of them: the load entered "
@@ -3278,7 +3310,8 @@ def _members_uneven(r: _Reader, tags, raw_loads, loads, members, supports, title
         return
     normal = {normal_tag(t) for t in tags if isinstance(t, str)}
     if (SHELF_TAGS | FLOOR_TAGS | RACK_TAGS) & normal or re.search(
-            r"\bshel(?:f|ves)\b|\bdeck", f"{title} {notes}", re.IGNORECASE):
+            r"\bshel(?:f|ves|ving)\b", f"{title} {notes}", re.IGNORECASE) or re.search(
+            r"\bdeck", title or "", re.IGNORECASE):
         return  # a box on a shelf, a pallet on a deck: the deck spreads it to the members
     for ld in loads:
         if ld.kind != "point" or ld.case != "live" or not ld.value:
@@ -3477,9 +3510,30 @@ def _unit_twin_slip(r: _Reader, raw_loads, supports, length, system: str) -> boo
 
 
 # Words that place a cantilever's load by its root ("near the wall", "6 in from the post")
+_ROOT_NOUNS = (r"(?:wall|root|post|column|mast|upright|base|fixed end|support|face|weld|"
+               r"heel|(?:mounting|base|wall|end|back) ?plate|bracket|clamp)s?")
 _BY_THE_ROOT = re.compile(
-    r"\b(?:near|close to|next to|by|beside|against|at|from|off) (?:the )?(?:wall|root|post|"
-    r"column|mast|upright|base|fixed end|support|face)s?\b", re.IGNORECASE)
+    r"\b(?:near|close to|next to|by|beside|against|right at|hard by|tight to) (?:the |its |"
+    r"their )?" + _ROOT_NOUNS + r"\b|\b(?:inboard|inner) (?:end|part)\b", re.IGNORECASE)
+# "6 in from the wall": a distance that places the load, read to compare with where it is
+_FROM_THE_ROOT = re.compile(
+    r"(\d+(?:\.\d+)?)\s*(in|inch(?:es)?|\"|ft|feet|foot|'|mm|cm|m)\s+(?:out )?(?:from|off|"
+    r"out from|away from) (?:the |its )?" + _ROOT_NOUNS + r"\b", re.IGNORECASE)
+
+
+def _placed_by_the_root(words: str, reach: float) -> bool:
+    """The job's words place its load by the root: "near the wall", "close to the weld",
+    or a distance from it ("6 in from the wall") within a tenth of the reach of where the
+    farthest live load is (`reach`, m)."""
+    if _BY_THE_ROOT.search(words):
+        return True
+    scale = {"in": 0.0254, "inch": 0.0254, "inches": 0.0254, '"': 0.0254, "ft": 0.3048,
+             "feet": 0.3048, "foot": 0.3048, "'": 0.3048, "mm": 0.001, "cm": 0.01, "m": 1.0}
+    for m in _FROM_THE_ROOT.finditer(words):
+        said = float(m.group(1)) * scale.get(m.group(2).lower(), 0.0)
+        if said and abs(said - reach) <= 0.1 * max(reach, said):
+            return True
+    return False
 
 
 def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: str,
@@ -3503,7 +3557,7 @@ def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: s
         far = units.fmt(max(reach), 'length', system)
         said = " | ".join(_as_words(t) for t in (title, notes, *(ld.label for ld in live))
                           if isinstance(t, str))
-        if _BY_THE_ROOT.search(said):  # the job says its load sits by the root: so it is
+        if _placed_by_the_root(said, max(reach)):  # the job says its load sits there
             r.warn(f"the only support is a fixed end at 0 and every live load sits within a "
                    f"quarter of the reach from it (the farthest at {far}), as the job's words "
                    "say; the figure posted is for loads there, not out along the arm",
@@ -3522,16 +3576,26 @@ def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: s
                f"(the farthest at {far}): a position typed in the wrong unit or short a digit?")
         return
     for ld in live:  # one spread load cut short by the root while the others reach out
-        if ld.kind in ("uniform", "linear") and ld.start <= 1e-9 * length \
+        if ld.kind in ("uniform", "linear") and ld.start <= length / 10 \
                 and ld.end <= length / 4 * (1 + 1e-9) \
                 and any(x > length / 2 for o, x in zip(live, reach) if o is not ld):
-            r.warn(f"{ld.key}{f' ({ld.label})' if ld.label else ''} runs from the root only to "
-                   f"{units.fmt(ld.end, 'length', system)} of the "
-                   f"{units.fmt(length, 'length', system)} reach, while other live loads reach "
-                   "out past half of it: a spread load on an arm most often runs out along "
-                   "it, and an end typed short a digit or in the wrong unit (\"0.4 ft\" for "
-                   "\"4 ft\") puts it by the root, where the arm carries it easily. Check its "
-                   "end", f"{ld.key}.end")
+            name = f"{ld.key}{f' ({ld.label})' if ld.label else ''}"
+            said = f"{name} runs by the root only, to {units.fmt(ld.end, 'length', system)} " \
+                   f"of the {units.fmt(length, 'length', system)} reach, while other live " \
+                   "loads reach out past half of it: a spread load on an arm most often runs " \
+                   "out along it, and an end typed short a digit or in the wrong unit " \
+                   "(\"0.4 ft\" for \"4 ft\") puts it by the root, where the arm carries it " \
+                   "many times over"
+            words = " | ".join(_as_words(t) for t in (title, notes, ld.label)
+                               if isinstance(t, str))
+            if _placed_by_the_root(words, ld.end):
+                r.warn(said + "; the job's words place it there", f"{ld.key}.end")
+            else:
+                r.hold(said + ", so no rating is posted. Check its end; if it really lies "
+                       "there, say so in its label (\"drift against the wall\")",
+                       f"{ld.key}.end", f"{name} runs by the root only, to "
+                       f"{units.fmt(ld.end, 'length', system)}, while other loads reach out: "
+                       "an end typed short? Check it, or say where it lies in its label")
 
 
 # Two supports closer than this clamp the member between them like a fixed end
@@ -4401,7 +4465,7 @@ _VEHICLE_WORDS = re.compile(
     r"vehicles?|chassis|car haulers?|cargo decks?|vans?(?! de[nr]?\b)|utes?|pickup (?:ladder )?(?:racks?|box(?:es)?)|"
     r"service bod(?:y|ies)|headache racks?|ladder racks? (?:on|for) (?:a|the) (?:truck|van)|"
     r"bus (?:luggage|racks?|shel(?:f|ves))|luggage racks?|rvs?|campers?|motor ?homes?|"
-    r"caravans?|tow dolly|tow dollies|fork ?lift (?:attachments?|forks?|extensions?|"
+    r"caravans?|tow dolly|tow dollies|tow[- ]?behind|towed|towable|fork ?lift (?:attachments?|forks?|extensions?|"
     r"booms?|jibs?|platforms?|carriages?)|fork extensions?|skid ?steers?|telehandlers?|"
     r"tractor (?:attachments?|loaders?|booms?|forks?|buckets?|frames?)|"
     r"boat (?:racks?|bunks?)|(?:work|box|dump|stake|utility|service|flatbed|tow|semi) trucks?|"
@@ -4677,7 +4741,11 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
         # pallets, a bar-stock or lumber arm: a rack unless it is a floor that
         # carries pallets (a platform or mezzanine)
         said = _words_found(_RACK_SOFT, title, notes, tags, raw_loads)
-        if said and _DOCK_WORDS.search(" | ".join(_as_words(t) for t in (title, notes))):
+        if said and _DOCK_WORDS.search(" | ".join(_as_words(t) for t in (title, notes))) \
+                and not _RACK_LEVEL_WORDS.search(" | ".join(
+                    _as_words(t) for t in (title, notes, *(
+                        x.get("label") for x in (raw_loads or []) if _is_table(x)))
+                    if isinstance(t, str))):
             # pallets at a loading dock (a bumper rail, a dock plate) are not stored on a rack
             said = [w for w in said if not re.search(r"pallet", w, re.IGNORECASE)]
     if not said:
