@@ -1717,7 +1717,9 @@ def test_a_rack_named_in_plain_words_is_held_until_tagged(title):
     assert any("reads like a storage rack" in p.message for p in warnings(job))
     for other in ("Pipe rack crossbeam", "Rack and pinion guard", "Hose rack rail",
                   "Towel drying rack", "Plant beam under the chiller skid",
-                  "Skid-mounted pump support", "Loading dock bumper rail for pallets"):
+                  "Skid-mounted pump support", "Loading dock bumper rail for pallets",
+                  "Air handler skid support beam", "Ramp beam for the skid steer",
+                  "Pallets staged at the shipping door, bumper rail"):
         job = parse_job_text(_uniform("").replace('title = "shelf"', f'title = "{other}"'))
         assert not any("reads like a storage rack" in p.message for p in warnings(job)), other
 

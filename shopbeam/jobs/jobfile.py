@@ -2643,13 +2643,16 @@ _RACK_SOFT = re.compile(
     # a skid of goods, not a plant's equipment skid (a chiller or pump on its frame)
     r"(?<!chiller )(?<!pump )(?<!equipment )(?<!compressor )(?<!process )(?<!tank )"
     r"(?<!generator )(?<!boiler )(?<!fan )(?<!motor )(?<!heater )(?<!filter )(?<!unit )"
-    r"skids?(?![- ]mounted)|"
+    r"(?<!handler )(?<!ahu )(?<!hvac )(?<!equipment )"
+    r"skids?(?![- ]mounted)(?![- ]?steers?)|"
     r"beam levels?|levels? \d+ beams?|longspan)\b", re.IGNORECASE)
 
 
 _RACK_LEVEL_WORDS = re.compile(r"\b(?:per level|levels?|bays?|uprights?|beam pairs?|"
                                r"pallets? per)\b", re.IGNORECASE)
-_DOCK_WORDS = re.compile(r"\b(?:loading[- ])?docks?\b(?![- ]?(?:side )?rack)", re.IGNORECASE)
+_DOCK_WORDS = re.compile(r"\b(?:(?:loading[- ])?docks?\b(?![- ]?(?:side )?rack)|"
+                         r"(?:shipping|loading|receiving|dock) doors?\b|staged|staging)",
+                         re.IGNORECASE)
 
 
 def _judged_longest(supports, length) -> float | None:
