@@ -380,3 +380,22 @@ def test_an_aluminium_i_beam_s_shear_area_is_the_web_s_clear_height_times_its_th
     v = next(c for c in analyze(job).checks if c.name == "shear")
     inch2 = 0.0254 ** 2
     assert v.params["Av"] / inch2 == pytest.approx(5.5 * 0.1, rel=1e-9)
+
+
+def test_the_json_mn_of_a_capped_aluminium_tube_is_adm_s_own_buckling_strength():
+    # 4 x 2 x 1/8 6061-T6 tube, 6 ft fixed-fixed: ADM 2015 F.3 (from memory), lambda 18.95,
+    # Mnmb = Mnp (1 - lambda/Cc) + pi^2 E lambda Sc / Cc^3 = 53.45 kip*in over Omega 1.65;
+    # the first-yield cap sets the allowable, and params keep the code's own Mn and Omega
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import parse_job_text
+
+    job = parse_job_text(
+        'schema = 1\ntitle = "A01"\ntags = ["not-lifting"]\n[beam]\nlength = "6 ft"\n'
+        'material = "6061-T6"\nself_weight = false\n[beam.section]\nshape = "rect-tube"\n'
+        'depth = "4 in"\nwidth = "2 in"\nwall = "0.125 in"\n[[supports]]\nat = "0 ft"\n'
+        'type = "fixed"\n[[supports]]\nat = "6 ft"\ntype = "fixed"\n[[loads]]\n'
+        'type = "uniform"\nvalue = "-200 lbf/ft"\n')
+    b = next(c for c in analyze(job).checks if c.name == "bending")
+    assert "M_yield_cap" in b.params
+    assert b.params["Mn"] / (1000 * 4.4482216152605 * 0.0254) == pytest.approx(53.45, rel=2e-3)
+    assert b.params["Omega"] == pytest.approx(1.65)

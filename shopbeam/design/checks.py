@@ -1302,6 +1302,11 @@ def bending_check(job, sol: Solution, st: Strengths, cb_one: bool = False) -> Ch
     if fl.code_cap is not None and mn >= fl.cap * (1 - 1e-12):
         # the first-yield cap sets it: Mn is the code's own figure, and the cap beside it
         bend_params["Mn"] = min(fl.code_cap, cb * l1)
+        if fl.ltb is not None and fl.ltb[0] == "ADM" and cb * l1 < fl.code_cap:
+            # the code's own figure is ADM's buckling Mnmb with its own Omega (the length's
+            # strength is carried scaled to the rupture cap's Omega)
+            bend_params["Mn"] = cb * l1 / fl.ltb[1][-1]
+            bend_params["Omega"] = fl.omega / fl.ltb[1][-1]
         bend_params["M_yield_cap"] = fl.cap / fl.omega
     pos = lambda x: fmt(x, "length", job.units)  # noqa: E731
     seg_words = "" if len(st.ltb_segments) == 1 else \
