@@ -224,7 +224,7 @@ class ConfirmScreen(AnswerScreen):
 
     BINDINGS = [Binding("escape", "answer('cancel')", "keep editing"),
                 Binding("s", "answer('save')", "save"),
-                Binding("d", "answer('discard')", "discard")]
+                Binding("d", "answer('discard')", "then enter: discard")]
 
     def __init__(self, what: str, doing: str) -> None:
         super().__init__()
@@ -342,8 +342,8 @@ class ConflictScreen(AnswerScreen):
     CONFIRM = frozenset({"n", "o"})
 
     BINDINGS = [Binding("escape", "answer('cancel')", "cancel"),
-                Binding("n", "answer('new')", "save as new name"),
-                Binding("o", "answer('overwrite')", "overwrite")]
+                Binding("n", "answer('new')", "then enter: save as new name"),
+                Binding("o", "answer('overwrite')", "then enter: overwrite")]
 
     def __init__(self, conflict) -> None:
         super().__init__()
