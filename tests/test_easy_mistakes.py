@@ -1685,7 +1685,8 @@ def test_an_arms_loads_all_by_its_left_root_are_held_unless_the_words_place_them
     assert any("quarter of the cantilever's reach" in r for r in capacity(slip).not_rated)
     out = parse_job_text(ARM.format(length="36 in", at="20 in"))
     assert not any("within a quarter" in p.message for p in warnings(out))
-    said = ARM.format(length="36 in", at="8 in").replace('title = "', 'title = "Line near the wall: ', 1)
+    said = ARM.format(length="36 in", at="8 in").replace('label = "bar stock"',
+                                                        'label = "line near the wall"', 1)
     assert said != ARM.format(length="36 in", at="8 in")
     meant = parse_job_text(said)
     assert any("as the job's words say" in p.message for p in warnings(meant))

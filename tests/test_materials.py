@@ -223,8 +223,9 @@ def test_typed_in_e_and_density_of_two_materials_are_warned(material, warned):
                                      point_load(3, "-200 lbf"), "typed-in metal"))
     w = [p for p in job.warnings if p.key == "beam.material" and p.warning]
     assert bool(w) == warned
-    if warned:
-        assert "do not belong to one metal or wood" in w[0].message
+    if warned:  # (a steel's E with a far lighter density is named as a steel's slip)
+        assert "do not belong to one metal or wood" in w[0].message \
+            or "far lighter than any steel" in w[0].message
 
 
 def test_every_built_in_material_lies_in_the_stiffness_per_weight_band():

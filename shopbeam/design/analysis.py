@@ -425,7 +425,7 @@ FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked els
 
 # Fewer load cycles than this on a road member is a count slipped (a trailer member sees
 # millions of bumps in its life: 2,000,000 is the usual design figure, common practice)
-ROAD_CYCLES = 100_000
+ROAD_CYCLES = 1_000_000
 
 
 def use_unchecked(job: Job) -> list[Unchecked]:

@@ -692,9 +692,10 @@ _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes
                       r"(?:$|[_\- ])", re.IGNORECASE)
 
 # An unknown key of a support that reads like a settlement (a drop of the support given)
-_SETTLE_KEY = re.compile(r"(?:^|_)(?:settle(?:ment|s|d)?|settling|sinks?|sinking|sink(?:age)?|"
-                         r"subsidence|drops?|displacement|movement|sag)(?:_|$)|"
-                         r"^(?:support_?)?deflection$|^imposed_?(?:deflection|displacement)$|"
+_SETTLE_KEY = re.compile(r"(?:^|[_-])(?:settle(?:ment|s|d)?|settling|sinks?|sinking|"
+                         r"sink(?:age)?|subsidence|drops?|displacement|movement|sag)(?:[_-]|$)|"
+                         r"^(?:support[_-]?)?deflection(?:[_-]\w+)?$|"
+                         r"^imposed[_-]?(?:deflection|displacement)$|"
                          r"^prescribed_?\w*|^(?:delta|dy|dz|offset_?(?:down|y))(?:_\w+)?$",
                          re.IGNORECASE)
 
@@ -1860,17 +1861,25 @@ SPECIFIC_STIFFNESS = (12e6, 40e6)  # E / density, m^2/s^2
 # A carbon or stainless steel weighs 7,750 to 8,000 kg/m^3 (490 to 500 lb/ft^3, common
 # practice): a typed-in steel far lighter leaves out own weight (a digit slipped, "390")
 STEEL_DENSITY_LOW = 7000.0  # kg/m^3
+ALUMINIUM_DENSITY_LOW = 2500.0  # kg/m^3 (aluminium alloys 2,640 to 2,840, common practice)
 
 
 def _mixed_material(r: _Reader, material, system: str) -> None:
-    if getattr(material, "kind", "") in ("steel", "stainless") \
-            and material.density < STEEL_DENSITY_LOW:
+    kind = getattr(material, "kind", "")
+    ksi = material.e / (units.PSI * 1000)
+    # a steel's E (26,000 to 31,500 ksi) or an aluminium's (9,000 to 11,500 ksi) with a
+    # density far under that metal's: the own weight left partly out ("390" for 490)
+    metal = ("steel", "490 to 500 lb/ft^3, 7,850 kg/m^3", STEEL_DENSITY_LOW) \
+        if kind in ("steel", "stainless") or (kind in ("", "custom") and 26e3 <= ksi <= 31.5e3) \
+        else ("aluminium", "169 lb/ft^3, 2,700 kg/m^3", ALUMINIUM_DENSITY_LOW) \
+        if kind == "aluminum" else None  # (a composite can have aluminium's E: named only)
+    if metal is not None and material.density < metal[2]:
         rho = units.fmt(material.density, "density", system)
-        r.hold(f"density = {rho} is far lighter than any steel (490 to 500 lb/ft^3, 7,850 "
-               "kg/m^3): the member's own weight, a dead load, would be left partly out and "
-               "the figure posted too high, so no rating is posted. Check the figure and its "
-               "unit", "beam.material",
-               f"the typed-in steel's density {rho} is far under any steel's: check it")
+        r.hold(f"density = {rho} is far lighter than any {metal[0]} ({metal[1]}): the "
+               "member's own weight, a dead load, would be left partly out and the figure "
+               "posted too high, so no rating is posted. Check the figure and its unit",
+               "beam.material",
+               f"the typed-in {metal[0]}'s density {rho} is far under any {metal[0]}'s: check it")
         return
     ratio = material.e / material.density
     lo, hi = SPECIFIC_STIFFNESS
@@ -2343,6 +2352,19 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
     for ld in loads:
         i = int(ld.key[6:-1]) if ld.key.startswith("loads[") else -1
         raw = raw_loads[i] if 0 <= i < len(raw_loads) else None
+        if ld.kind == "uniform" and ld.case == "dead" and _is_table(raw) \
+                and ld.key in r.widths and (not ld.label or _DECK_WORDS.search(
+                    _as_words(ld.label))) and 0 < abs(ld.w1) / r.widths[ld.key] < LIGHTEST_DECK:
+            # a deck's weight per area lighter than a plywood deck alone: "-1.2 psf" for
+            # "-12 psf", a digit or the decimal point slipped
+            area = units.fmt(abs(ld.w1) / r.widths[ld.key], "area_load", system)
+            r.warn(f"{ld.key}{f' ({ld.label})' if ld.label else ''} is a floor's dead load of "
+                   f"{area}, lighter than a 1/2 in plywood deck alone "
+                   f"({units.fmt(LIGHTEST_DECK, 'area_load', system)}): a deck, its joists and "
+                   "finishes weigh more (10 to 15 psf for a wood floor, 0.5 to 0.7 kPa), so a "
+                   "digit or the decimal point may have slipped; a light dead load posts a "
+                   "higher live load. Check the figure", f"{ld.key}.value")
+            continue
         if ld.kind != "uniform" or ld.case != "dead" or not _is_table(raw) \
                 or "total" not in raw or ld.end <= ld.start:
             continue
@@ -2835,9 +2857,20 @@ SHORT_TRAVEL = 0.25
 # A lifting job's travel over less than this share of the member, in any unit, with no end
 # stops said, is a slip too (a digit or a decimal point)
 HALF_TRAVEL = 0.5
-_END_STOP_WORDS = re.compile(r"\b(?:end[- ]?stops?|(?:travel|rail) stops?|bumpers?|"
-                             r"buffers?|stoppers?|end[- ]?clamps?|end[- ]?plates?|"
-                             r"stop (?:blocks?|bolts?|plates?))\b", re.IGNORECASE)
+_END_STOP_WORDS = re.compile(r"\b(?:end[- ]?stops?|(?:travel|rail|trolley|bolted|welded) "
+                             r"stops?\b(?! (?:over|above|under|below|beside|in front))|"
+                             r"stop (?:angles?|lugs?|blocks?|bolts?|plates?)|bumpers?|"
+                             r"buffers?|stoppers?|chocks?)\b", re.IGNORECASE)
+
+
+def _says_length(words: str, length: float) -> bool:
+    """The words give the member's whole length ("end stops at 0 and 16 ft" on a 16 ft
+    runway): stops that keep the hoist on the whole of it, not on a short travel."""
+    scale = {"in": 0.0254, "ft": 0.3048, "mm": 0.001, "cm": 0.01, "m": 1.0}
+    for m in re.finditer(r"(\d+(?:\.\d+)?)\s*(in|ft|mm|cm|m)\b", words):
+        if abs(float(m.group(1)) * scale[m.group(2)] - length) <= 0.02 * length:
+            return True
+    return False
 
 
 def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
@@ -2877,7 +2910,10 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
                    f"travel [{got}] covers only {units.fmt(span, 'length', system)} of the "
                    "member, typed in inches: feet meant? Write it in feet")
         elif isinstance(tr, list) and length and span < HALF_TRAVEL * length \
-                and not (said and _END_STOP_WORDS.search(said)):
+                and not (said and any(
+                    not _says_length(said[m.start():][:80].split(".")[0].split(";")[0]
+                                     .split("|")[0], length)
+                    for m in _END_STOP_WORDS.finditer(said))):
             # "1.6 ft" for "16 ft", "6 ft" for "16 ft": the hoist kept off mid-span, where a
             # runway's moment and sag are largest; real end stops are said in words
             got = ", ".join(f'"{v}"' for v in tr)
@@ -3517,10 +3553,11 @@ _ROOT_NOUNS = (r"(?:wall|root|post|column|mast|upright|base|fixed end|support|fa
                r"heel|(?:mounting|base|wall|end|back) ?plate|bracket|clamp)s?")
 _BY_THE_ROOT = re.compile(
     r"\b(?:near|close to|next to|by|beside|against|right at|hard by|tight to) (?:the |its |"
-    r"their )?" + _ROOT_NOUNS + r"\b|\b(?:inboard|inner) (?:end|part)\b", re.IGNORECASE)
+    r"their )?" + _ROOT_NOUNS + r"\b", re.IGNORECASE)
 # "6 in from the wall": a distance that places the load, read to compare with where it is
 _FROM_THE_ROOT = re.compile(
-    r"(\d+(?:\.\d+)?)\s*(in|inch(?:es)?|\"|ft|feet|foot|'|mm|cm|m)\s+(?:out )?(?:from|off|"
+    r"(\d+(?:\.\d+)?(?:[ -]\d+/\d+)?)\s*(in|inch(?:es)?|\"|ft|feet|foot|'|mm|cm|m)\.?\s+"
+    r"(?:out )?(?:from|off|"
     r"out from|away from) (?:the |its )?" + _ROOT_NOUNS + r"\b", re.IGNORECASE)
 
 
@@ -3533,7 +3570,9 @@ def _placed_by_the_root(words: str, reach: float) -> bool:
     scale = {"in": 0.0254, "inch": 0.0254, "inches": 0.0254, '"': 0.0254, "ft": 0.3048,
              "feet": 0.3048, "foot": 0.3048, "'": 0.3048, "mm": 0.001, "cm": 0.01, "m": 1.0}
     for m in _FROM_THE_ROOT.finditer(words):
-        said = float(m.group(1)) * scale.get(m.group(2).lower(), 0.0)
+        whole, _, frac = m.group(1).replace("-", " ").partition(" ")
+        num = float(whole) + (int(frac.split("/")[0]) / int(frac.split("/")[1]) if frac else 0)
+        said = num * scale.get(m.group(2).lower(), 0.0)
         if said and abs(said - reach) <= 0.1 * max(reach, said):
             return True
     return False
@@ -3558,9 +3597,10 @@ def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: s
         return  # a load on the root itself: the at-support rule names it
     if live and max(reach) <= length / 4 * (1 + 1e-9):
         far = units.fmt(max(reach), 'length', system)
-        said = " | ".join(_as_words(t) for t in (title, notes, *(ld.label for ld in live))
-                          if isinstance(t, str))
-        if _placed_by_the_root(said, max(reach)):  # the job says its load sits there
+        # each load's own label places it there (the title and notes most often speak of
+        # how the arm is fixed: "welded at its inboard end", "against the wall")
+        if all(isinstance(ld.label, str) and _placed_by_the_root(_as_words(ld.label), x)
+               for ld, x in zip(live, reach)):  # the job says its loads sit there
             r.warn(f"the only support is a fixed end at 0 and every live load sits within a "
                    f"quarter of the reach from it (the farthest at {far}), as the job's words "
                    "say; the figure posted is for loads there, not out along the arm",
@@ -3589,9 +3629,7 @@ def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: s
                    "out along it, and an end typed short a digit or in the wrong unit " \
                    "(\"0.4 ft\" for \"4 ft\") puts it by the root, where the arm carries it " \
                    "many times over"
-            words = " | ".join(_as_words(t) for t in (title, notes, ld.label)
-                               if isinstance(t, str))
-            if _placed_by_the_root(words, ld.end):
+            if isinstance(ld.label, str) and _placed_by_the_root(_as_words(ld.label), ld.end):
                 r.warn(said + "; the job's words place it there", f"{ld.key}.end")
             else:
                 r.hold(said + ", so no rating is posted. Check its end; if it really lies "
@@ -4468,7 +4506,7 @@ _VEHICLE_WORDS = re.compile(
     r"vehicles?|chassis|car haulers?|cargo decks?|vans?(?! de[nr]?\b)|utes?|pickup (?:ladder )?(?:racks?|box(?:es)?)|"
     r"service bod(?:y|ies)|headache racks?|ladder racks? (?:on|for) (?:a|the) (?:truck|van)|"
     r"bus (?:luggage|racks?|shel(?:f|ves))|luggage racks?|rvs?|campers?|motor ?homes?|"
-    r"caravans?|tow dolly|tow dollies|tow[- ]?behind|towed|towable|fork ?lift (?:attachments?|forks?|extensions?|"
+    r"caravans?|tow dolly|tow dollies|tow[- ]?behind|pull[- ]?behind|hitch[- ]?mounted|towed|towable|fork ?lift (?:attachments?|forks?|extensions?|"
     r"booms?|jibs?|platforms?|carriages?)|fork extensions?|skid ?steers?|telehandlers?|"
     r"tractor (?:attachments?|loaders?|booms?|forks?|buckets?|frames?)|"
     r"boat (?:racks?|bunks?)|(?:work|box|dump|stake|utility|service|flatbed|tow|semi) trucks?|"
