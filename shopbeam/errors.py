@@ -59,6 +59,15 @@ class InputErrorGroup(InputError):
         return "\n".join([self.problem.located()] + [p.located() for p in self.more])
 
 
+def raise_all(errors: list[InputError]) -> None:
+    """Raise every problem of one table at once: the one alone, several as a group; nothing
+    when there are none."""
+    if len(errors) == 1:
+        raise errors[0]
+    if errors:
+        raise InputErrorGroup(errors)
+
+
 class InputErrors(Exception):
     """Several problems found in one pass over a job file."""
 

@@ -561,6 +561,20 @@ def _fatigue_cap(job, section, ss, st, res: CapacityResult) -> CapacityResult:
 MAX_COUPLES_TRIED = 4  # live couples each taken off in turn (one capacity search each)
 
 
+def _factor_without(job, section, load, k: float) -> float | None:
+    """The factor of the job without `load` where it is lower than `k` (the load relieves
+    the member), else None: one evaluation just below k first (passing there, the factor
+    is no lower), the search only where the answer is said in words."""
+    below = k * (1 - 1e-6)
+    rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not load))
+    ss = state_set(rest, section)
+    st = strengths(rest, sec=section, beam=ss.beam)
+    if max(ch.ratio for ch in evaluate(rest, below, section, ss, st).checks) <= 1:
+        return None
+    k2 = _capacity(rest, section, ss, st).factor
+    return k2 if k2 < below else None
+
+
 def _relieving_couples(job, section, k: float) -> tuple[str, ...]:
     """Live couples scaled together with other live loads: k scales them all at once, so a
     couple that holds back the others' moment (an end couple against a gravity load) is
@@ -580,16 +594,9 @@ def _relieving_couples(job, section, k: float) -> tuple[str, ...]:
                 "as case = \"dead\" at values they are sure to have, or rate them in a job "
                 "of their own",)
     out = []
-    below = k * (1 - 1e-6)
     for c in couples:
-        rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not c))
-        ss = state_set(rest, section)
-        st = strengths(rest, sec=section, beam=ss.beam)
-        if max(ch.ratio for ch in evaluate(rest, below, section, ss, st).checks) <= 1:
-            continue  # passes just below k without it: its factor is no lower (one evaluation
-            # instead of the search; the search runs only where the answer is said in words)
-        k2 = _capacity(rest, section, ss, st).factor
-        if k2 < below:
+        k2 = _factor_without(job, section, c, k)
+        if k2 is not None:
             name = c.key + (f" ({c.label})" if c.label else "")
             out.append(f"the live couple {name} relieves the other live loads: without it the "
                        f"factor is {k2:.4g}, not {k:.4g}, and a load that relieves is never "
@@ -614,15 +621,9 @@ def _relieving_dead_couples(job, section, k: float) -> tuple[str, ...]:
                 "sign raises the figure posted), so nothing is posted. Combine couples at one "
                 "place into one, or rate the member without those that relieve it",)
     out = []
-    below = k * (1 - 1e-6)
     for c in couples:
-        rest = replace(job, loads=tuple(ld for ld in job.loads if ld is not c))
-        ss = state_set(rest, section)
-        st = strengths(rest, sec=section, beam=ss.beam)
-        if max(ch.ratio for ch in evaluate(rest, below, section, ss, st).checks) <= 1:
-            continue  # passes just below k without it: it does not relieve
-        k2 = _capacity(rest, section, ss, st).factor
-        if k2 < below:
+        k2 = _factor_without(job, section, c, k)
+        if k2 is not None:
             name = c.key + (f" ({c.label})" if c.label else "")
             turn = "counterclockwise" if c.value > 0 else "clockwise"
             out.append(f"the dead couple {name} relieves the member: without it the factor is "

@@ -22,7 +22,7 @@ from dataclasses import dataclass, field
 from functools import lru_cache
 from typing import Mapping
 
-from shopbeam.errors import InputError, InputErrorGroup
+from shopbeam.errors import InputError, raise_all
 from shopbeam.units import parse
 
 KSI = 6.894757293168361e6  # Pa (lbf/in^2 x 1000, exact from the international pound and inch)
@@ -463,10 +463,7 @@ def _inline(spec: Mapping, key: str) -> Material:
                     "fy": "the yield strength fy (e.g. \"36 ksi\"; for lumber fb)",
                     "density": "the density (e.g. \"490 lb/ft^3\")"}[k]
             bad.append(InputError(f"an inline material needs {what}", f"{key}.{k}"))
-    if len(bad) == 1:
-        raise bad[0]
-    if bad:
-        raise InputErrorGroup(bad)
+    raise_all(bad)
     if vals["e"] < 1e9 or vals["e"] > 1e12:
         raise InputError(f"e = {spec['e']!r} is not a plausible elastic modulus (steel is "
                          "29000 ksi, aluminium 10100 ksi, lumber about 1600 ksi)", f"{key}.e")

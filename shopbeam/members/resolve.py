@@ -12,7 +12,7 @@ import re
 from dataclasses import replace
 from typing import Mapping
 
-from shopbeam.errors import InputError, InputErrorGroup
+from shopbeam.errors import InputError, raise_all
 from shopbeam.members import catalog
 from shopbeam.members.sections import (_ALIASES, _COMMON, _KEYS, _REQUIRED, SHAPES, Section,
                                        shape_keys,
@@ -100,10 +100,7 @@ def resolve_section(spec, key: str = "beam.section", axis: str | None = None,
                                                           "gap"))
             except InputError as exc:
                 bad.append(exc)
-    if len(bad) == 1:
-        raise bad[0]
-    if bad:
-        raise InputErrorGroup(bad)
+    raise_all(bad)
     if "axis" in spec:
         ax = _choice(spec, "axis", ("strong", "weak"), "strong", key)
     else:
@@ -315,10 +312,7 @@ def _custom(spec, key, mass, parse) -> Section:
                 values[name] = parse(spec[name], kind, f"{key}.{name}", positive=True)
             except InputError as exc:
                 bad.append(exc)
-    if len(bad) == 1:
-        raise bad[0]
-    if bad:
-        raise InputErrorGroup(bad)
+    raise_all(bad)
 
     def q(name, kind):
         return values.get(name)
