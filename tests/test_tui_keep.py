@@ -764,6 +764,43 @@ async def test_a_slow_word_that_starts_with_the_discard_letter_never_discards(tm
         assert f.input.value == "EDIT dog" and app.job_screen.session.dirty
 
 
+@sync
+async def test_a_lone_discard_letter_makes_the_next_lone_letter_text_too(tmp_path):
+    # "d" alone goes on into the field (discarding asks for Enter): the typist is typing on,
+    # so an "s" alone two seconds later is text too, not "save and quit"
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
+        await burst(pilot, CTRL_U + "stairab" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        for letter in "ds":
+            await pilot.pause(app.screen.WORD_GAP + 0.05)
+            await burst(pilot, letter)
+            await pilot.pause(app.screen.ALONE + 0.2)
+            await pilot.pause()
+        assert app.is_running and type(app.screen).__name__ == "ConfirmScreen"
+        assert f.input.value == "stairabds"
+
+
+@sync
+async def test_enter_long_after_the_discard_letter_does_not_answer(tmp_path):
+    # "d", then Enter half a second later (a typist's steady pace): both are text
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        f = await focused(pilot, app, "job", "title")
+        await burst(pilot, CTRL_U + "EDIT" + "\x11")
+        assert type(app.screen).__name__ == "ConfirmScreen"
+        await pilot.pause(app.screen.WORD_GAP + 0.05)
+        await burst(pilot, "d")
+        await pilot.pause(app.screen.CONFIRM_ENTER + 0.1)
+        await pilot.press("enter")
+        await pilot.pause(app.screen.ALONE)
+        await pilot.pause()
+        assert app.is_running and f.input.value.startswith("EDITd")
+
+
 # ------------------------------------- a choice picks by a letter pressed on its own only
 
 LETTER = 1.1  # past Choice.WORD_GAP (1 s): a letter on its own has picked, and the next one is no word
@@ -2095,6 +2132,36 @@ async def test_a_key_typed_is_marked_in_the_same_step_that_shows_it(tmp_path, mo
         assert await _until(pilot, lambda: not js.session.stale)
         await settle(pilot)
         assert CHECKING_EDIT not in js._summary_shown and not js.stale_marked
+
+
+@sync
+async def test_the_results_and_plots_views_show_no_old_figure_while_the_answer_is_late(
+        tmp_path, monkeypatch):
+    # a figure scrolled below the view's top mark would not say whose it is: while the
+    # answer to an edit is late, Results and Plots show the mark and no figure at all
+    from shopbeam.tui.views import CHECKING_EDIT
+
+    gate, real = _held_solves(monkeypatch)
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        gate.clear()
+        f = await focused(pilot, app, "job", "title")
+        f.input.insert_text_at_cursor("X")
+        for vid in ("results", "plots"):
+            await js.action_view(vid)
+            await pilot.pause()
+            view = js.query_one(f"#{vid}")
+            shown = [w for w in view.query(".plot, #res-checks, #res-reactions, #res-extremes")
+                     if w.display]
+            assert not shown, vid
+            head = view.query_one("#res-problems" if vid == "results" else "#plot-problems")
+            assert CHECKING_EDIT in str(head.content)
+        gate.set()
+        assert await _until(pilot, lambda: not js.session.stale)
+        await settle(pilot)
+        assert js.query_one("#plot-moment").display
 
 
 def _held_solves(monkeypatch):

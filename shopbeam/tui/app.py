@@ -34,7 +34,7 @@ from shopbeam.tui.session import Session
 from shopbeam.tui.slow import CalcView, RatingView, SizingView
 from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, PlotsView,
                                 ResultsView, RowList, RowsView, SectionView, SpanView, View,
-                                WHEEL_WORDS, CHECKING_EDIT, CHECKING_WORDS, late, late_words,
+                                WHEEL_WORDS, CHECKING_EDIT, CHECKING_WORDS, late,
                                 load_warnings,
                                 problems_text)
 from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
@@ -256,7 +256,7 @@ class JobScreen(Screen):
         warn = load_warnings(self.session)[:1]
         behind = late(self)
         if behind and ev.result is None:
-            warn = [late_words(ev)] + warn
+            warn = [CHECKING_EDIT] + warn
         note = self.length_note()
         if note:  # a length change not settled yet: first, it can move the answer a lot
             warn = [note] + warn
@@ -1625,7 +1625,7 @@ class ShopbeamApp(App):
                     return
             if js is not None and isinstance(self.screen, AnswerScreen):
                 question = self.screen
-                if event.key == "enter" and question.confirm_held():
+                if event.key == "enter" and question.confirm_held(event):
                     return  # a letter pressed on its own, then Enter: that answer, at once
                 held = question.release()  # Esc right behind a letter: the letter is dropped
                 if held is not None and event.key != "escape":
@@ -1642,8 +1642,12 @@ class ShopbeamApp(App):
                 if action is not None:
                     # once keys went on to the field behind, a letter alone is text too
                     # (a slow typist's next letter); the answer is that letter, then Enter
-                    alone = (lambda ev=event: self.call_later(js.key_behind, ev)) \
-                        if question.typed_behind or event.key in question.CONFIRM else None
+                    def alone(ev=event):  # the letter left alone: text, typed on behind
+                        self._typed_behind(question, ev)
+                        self.call_later(js.key_behind, ev)
+
+                    alone = alone if question.typed_behind or event.key in question.CONFIRM \
+                        else None
                     if alone is not None and not question.typed_behind:
                         self.notify(f"\"{event.key}\" answers this question only with Enter "
                                     "right after it; on its own it goes on into the field.",
@@ -1712,7 +1716,13 @@ class ShopbeamApp(App):
         overwrite), and the question is answered by its letter and Enter, or by Esc. Said
         once."""
         if getattr(event, "time", 0.0) < question.opened_at + question.READ_TIME:
-            return  # on its way before the question was up: the answer is still a letter
+            # on its way before the question was up: the answer is still a letter, but the
+            # key went into a field the question covers, and that is said (once)
+            if not getattr(question, "early_said", False) and event.key != "escape":
+                question.early_said = True
+                self.notify("A key typed as this question came up went on into the field "
+                            "behind it (ctrl+z there takes it back after).", timeout=6)
+            return
         if not question.typed_behind:
             question.typed_behind = True
             self.notify("Your keys are going on to the field behind this question. To answer "

@@ -193,10 +193,18 @@ class AnswerScreen(ModalScreen[str]):
         self._held_timer = self.set_timer(self.ALONE,
                                           lambda: self._answer_held(alone or run))
 
-    def confirm_held(self) -> bool:
+    # Enter confirms a held letter only this soon after it: a deliberate "d, Enter" is one
+    # quick movement, while a typist's Enter after a letter at a steady pace comes later
+    CONFIRM_ENTER = 0.35  # seconds
+
+    def confirm_held(self, enter=None) -> bool:
         """Enter right behind a letter answer (read, pressed on its own, then confirmed):
-        it answers now. False when no letter is held."""
+        it answers now. False when no letter is held, or when the Enter came later than
+        CONFIRM_ENTER after it (both are then text, typed on)."""
         if self.held is None:
+            return False
+        if enter is not None and getattr(enter, "time", 0.0) - getattr(
+                self.held, "time", 0.0) > self.CONFIRM_ENTER:
             return False
         run = self._held_run
         self.release()

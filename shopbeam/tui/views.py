@@ -1238,7 +1238,6 @@ def problems_text(ev) -> str:
 # said while the answer to an edit is late (a heavy job): the summary and the Results view,
 # and beside a field typed in since the answer shown was worked out
 CHECKING_EDIT = "Checking your last edit ..."
-STALE_WORDS = CHECKING_EDIT + " the figures shown are for the job before it."
 
 
 def late(view) -> bool:
@@ -1248,11 +1247,6 @@ def late(view) -> bool:
     session = getattr(screen, "session", None)
     return bool(getattr(screen, "stale_marked", False) and session is not None
                 and (session.stale or getattr(screen, "typing_pending", False)))
-
-
-def late_words(ev) -> str:
-    """The late answer's words: the figures shown are the old job's (none shown: checking)."""
-    return STALE_WORDS if ev.result is not None else CHECKING_EDIT
 
 
 class ResultsView(View):
@@ -1275,14 +1269,17 @@ class ResultsView(View):
         width = max(40, self.app.size.width - 6)
         q = lambda i: self.query_one(i, Static)  # noqa: E731
         behind = late(self)
-        top = "\n".join(([late_words(ev)] if behind else []) + load_warnings(session)
+        top = "\n".join(([CHECKING_EDIT + " The results follow when its answer comes."]
+                         if behind else []) + load_warnings(session)
                         + ([problems_text(ev)] if ev.errors else []))
         q("#res-problems").update(_text(top))
         q("#res-problems").display = bool(top)
         r = ev.result
         for i in ("#res-elevation", "#res-verdict", "#res-checks", "#res-reactions",
                   "#res-extremes", "#res-self"):
-            q(i).display = r is not None
+            # while the answer is late no figure of the job before the edit is shown at all
+            # (the mark at the top scrolls away; a figure lower down would not say whose it is)
+            q(i).display = r is not None and not behind
         if r is not None:
             q("#res-elevation").update(Text(drawing.elevation(r.job, width), no_wrap=True,
                                             overflow="crop"))
@@ -1331,7 +1328,7 @@ class PlotsView(View):
             return
         self._drawn_for = (ev, width, height, behind)
         head = self.query_one("#plot-problems", Static)
-        mark = STALE_WORDS + "\n" if behind else ""
+        mark = CHECKING_EDIT + " the plots follow when its answer comes.\n" if behind else ""
         if r is not None and r.state_solution is not None:
             # patterned loads: draw the pattern that governs, and say which it is
 
@@ -1342,7 +1339,7 @@ class PlotsView(View):
         head.display = behind or r is None or ev.result.state_solution is not None
         for name in drawing.PLOT_KINDS:
             st = self.query_one(f"#plot-{name}", Static)
-            st.display = r is not None
-            if r is not None:
+            st.display = r is not None and not behind  # (the old job's curves: not shown)
+            if r is not None and not behind:
                 st.update(Text(drawing.plot(r, name, width, height), no_wrap=True,
                                overflow="crop"))

@@ -417,9 +417,10 @@ class Field(Horizontal):
         was = getattr(self, "_shown", None)
         self._shown = (shown, error)
         if message == CHECKING_WORDS and was is not None:
-            # while the edit is checked the message keeps the height it had, so the form
-            # below does not jump up and back at every key (blank lines under the words)
-            lines = len(was[0].splitlines()) if not self.has_class("-wide") else 0
+            # while the edit is checked the message keeps the height it had on screen (its
+            # wrapped rows), so the form below does not jump up and back at every key
+            msg = self.query_one(".field-msg", Static)
+            lines = max(len(was[0].splitlines()), msg.size.height if msg.is_attached else 0)
             shown += "\n " * max(0, min(lines, 12) - 1)
         update_text(self.query_one(".field-msg", Static), Text(shown),
                     fixed_width=not self.has_class("-wide"))
