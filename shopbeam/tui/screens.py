@@ -245,7 +245,7 @@ class ConfirmScreen(AnswerScreen):
             yield Static(f"Save them before you {self.doing}?", markup=False)
             with Horizontal(classes="buttons"):
                 yield Button("s  Save", id="save", compact=True)
-                yield Button(f"d+enter  Discard and {self.doing}", id="discard", compact=True)
+                yield Button("d+enter  Discard", id="discard", compact=True)
                 yield Button("esc  Keep editing", id="cancel", compact=True)
         yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
@@ -360,7 +360,7 @@ class ConflictScreen(AnswerScreen):
     def compose(self) -> ComposeResult:
         c = self.conflict
         with Vertical(classes="dialog", id="conflict"):
-            yield Static(f"Not saved: {c.message()}", markup=False)
+            yield Static(c.message(), markup=False)  # (it says "not saved" itself)
             yield Static("What overwriting would change: the file on disk now, against "
                          "yours:" if c.reason == "exists" else
                          "What is in the file on disk now, against what you opened:",
@@ -368,8 +368,8 @@ class ConflictScreen(AnswerScreen):
             with VerticalScroll(id="conflict-diff"):
                 yield Static(c.diff or "(no differences to show)", markup=False)
             with Horizontal(classes="buttons"):
-                yield Button("n+enter  Save as a new name", id="new", compact=True)
-                yield Button("o+enter  Overwrite with mine", id="overwrite", compact=True)
+                yield Button("n+enter  New name", id="new", compact=True)
+                yield Button("o+enter  Overwrite", id="overwrite", compact=True)
                 yield Button("esc  Cancel", id="cancel", compact=True)
         yield Banner(classes="dialog-banner")  # the caution stays in sight
         yield Footer()
