@@ -424,8 +424,9 @@ FATIGUE_CHECKED = "fatigue-checked"  # the tag that says fatigue was checked els
 
 
 # Fewer load cycles than this on a road member is a count slipped (a trailer member sees
-# millions of bumps in its life: 2,000,000 is the usual design figure, common practice)
-ROAD_CYCLES = 1_000_000
+# millions of bumps in its life: 2,000,000 is the usual design figure, 500,000 a light-duty
+# one, common practice; "200000" is a zero dropped)
+ROAD_CYCLES = 500_000
 
 
 def use_unchecked(job: Job) -> list[Unchecked]:

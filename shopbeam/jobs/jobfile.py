@@ -3553,7 +3553,8 @@ _ROOT_NOUNS = (r"(?:wall|root|post|column|mast|upright|base|fixed end|support|fa
                r"heel|(?:mounting|base|wall|end|back) ?plate|bracket|clamp)s?")
 _BY_THE_ROOT = re.compile(
     r"\b(?:near|close to|next to|by|beside|against|right at|hard by|tight to) (?:the |its |"
-    r"their )?" + _ROOT_NOUNS + r"\b", re.IGNORECASE)
+    r"their )?" + _ROOT_NOUNS + r"\b|\bat (?:the |its )?(?:wall|root|weld|heel|face|"
+    r"fixed end)s?\b", re.IGNORECASE)  # ("at the column": where the arm is bolted, often)
 # "6 in from the wall": a distance that places the load, read to compare with where it is
 _FROM_THE_ROOT = re.compile(
     r"(\d+(?:\.\d+)?(?:[ -]\d+/\d+)?)\s*(in|inch(?:es)?|\"|ft|feet|foot|'|mm|cm|m)\.?\s+"
