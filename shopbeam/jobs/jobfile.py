@@ -2866,9 +2866,9 @@ _END_STOP_WORDS = re.compile(r"\b(?:end[- ]?stops?|(?:travel|rail|trolley|bolted
 def _says_length(words: str, length: float) -> bool:
     """The words give the member's whole length ("end stops at 0 and 16 ft" on a 16 ft
     runway): stops that keep the hoist on the whole of it, not on a short travel."""
-    scale = {"in": 0.0254, "ft": 0.3048, "mm": 0.001, "cm": 0.01, "m": 1.0}
     for m in re.finditer(r"(\d+(?:\.\d+)?)\s*(in|ft|mm|cm|m)\b", words):
-        if abs(float(m.group(1)) * scale[m.group(2)] - length) <= 0.02 * length:
+        said = _said_length(m.group(0))
+        if said and abs(said - length) <= 0.02 * length:
             return True
     return False
 
@@ -2939,18 +2939,9 @@ TINY_DEAD_POINT = 4.4482216152605  # 1 lbf, N
 TINY_DEAD_LINE = 4.4482216152605 / 0.3048  # 1 lbf/ft, N/m
 
 
-# A unit that mixes the two systems in one value (lbf/m, kip/mm, kN/ft, N*ft): the force or
-# the length of the other system slipped in (a US force over metres is 3.28 times too light
-# per foot), and a yard under a force (lbf/yd, 3 times lighter than lbf/ft)
-_MIXED_UNIT = re.compile(
-    r"\d\s*(?:(?:lbf?|lbs|pounds?|kips?|kipf|klbf?|k|#)\s*(?:/|\*|·|-)\s*(?:m|mm|cm|metres?|"
-    r"meters?)|(?:(?:k|M|da)?N|kgf?|kilograms?|t|tonnes?)\s*(?:/|\*|·|-)\s*(?:ft|in|foot|"
-    r"feet|inch(?:es)?|yd|yards?)|(?:lbf?|lbs|pounds?|kips?|k)\s*/\s*(?:yd|yards?))(?![\w])",
-    re.IGNORECASE)
-
-
 def _mixed_units(r: _Reader, raw_loads, loads) -> None:
-    """A load value whose unit mixes the two systems (`_MIXED_UNIT`): read as typed, it is a
+    """A load value whose unit mixes the two systems, as the reader reads it (lbf/m, kN/ft,
+    N*ft, however spelt: `units.unit_systems`), or is per yard: read as typed, it is a
     size no one means (a foot's load spread over a metre). A dead one is held (a light dead
     load posts a higher live load), a live one warned."""
     for ld in loads:
@@ -2961,8 +2952,7 @@ def _mixed_units(r: _Reader, raw_loads, loads) -> None:
         vals = raw.get("value", raw.get("total"))
         key = f"{ld.key}.{'value' if 'value' in raw else 'total'}"
         texts = [v for v in (vals if isinstance(vals, list) else [vals]) if isinstance(v, str)]
-        mixed = [v for v in texts if _MIXED_UNIT.search(v)
-                 or {"us", "metric"} <= units.unit_systems(v)
+        mixed = [v for v in texts if {"us", "metric"} <= units.unit_systems(v)
                  or "yard" in units.unit_systems(v)]
         if not mixed:
             continue
@@ -3568,15 +3558,20 @@ def _placed_by_the_root(words: str, reach: float) -> bool:
     farthest live load is (`reach`, m)."""
     if _BY_THE_ROOT.search(words):
         return True
-    scale = {"in": 0.0254, "inch": 0.0254, "inches": 0.0254, '"': 0.0254, "ft": 0.3048,
-             "feet": 0.3048, "foot": 0.3048, "'": 0.3048, "mm": 0.001, "cm": 0.01, "m": 1.0}
     for m in _FROM_THE_ROOT.finditer(words):
-        whole, _, frac = m.group(1).replace("-", " ").partition(" ")
-        num = float(whole) + (int(frac.split("/")[0]) / int(frac.split("/")[1]) if frac else 0)
-        said = num * scale.get(m.group(2).lower(), 0.0)
+        said = _said_length(f"{m.group(1)} {m.group(2)}")
         if said and abs(said - reach) <= 0.1 * max(reach, said):
             return True
     return False
+
+
+def _said_length(text: str) -> float | None:
+    """A length written in words ("4-1/2 in", "16 ft"), read as a job's lengths are (m);
+    None where it does not read as one."""
+    try:
+        return units.parse(text.replace('"', "in").replace("'", "ft"), "length")
+    except InputError:
+        return None
 
 
 def _root_at_the_left_loads_by_it(r: _Reader, supports, loads, length, system: str,

@@ -219,10 +219,7 @@ class JobScreen(Screen):
         summary = self.query_one("#summary", Static)
         summary.display = self.current in INPUT_VIEWS
         if self.current in INPUT_VIEWS:
-            text = self.summary_text()
-            if text != getattr(self, "_summary_shown", None):  # unchanged: no redraw
-                self._summary_shown = text
-                update_text(summary, Text(text))
+            self._show_summary()
         # a line the answer adds above the form (a load's changed direction) must not push
         # the field being typed in out of sight: typing into a hidden field
         self.call_after_refresh(self._focus_in_view)
@@ -311,8 +308,6 @@ class JobScreen(Screen):
         without that mark, however fast or slow the solve."""
         if self.session.stale:
             self.stale_marked = True
-            if self._stale_since is None:
-                self._stale_since = time.monotonic()
         self.refresh_all()
         self.solve_soon()
 
@@ -325,29 +320,26 @@ class JobScreen(Screen):
             wait = SOLVE_DEBOUNCE if now - getattr(self, "_asked_at", -1e9) < SOLVE_DEBOUNCE \
                 else 0.0
             self._asked_at = now
-            if self._stale_since is None:
-                self._stale_since = now
             self._solve(s, *s.snapshot(), wait=wait)
 
     stale_marked = False  # the answer shown is for an earlier edit, and said so (`changed`)
-    _stale_since = None  # when the first edit the answer shown does not cover was made
     typing_pending = False  # a key typed into a field whose edit has not reached the job yet
 
     def typing_now(self, field) -> None:
         """A key has just changed a field's text (`FieldInput.watch_value`): in the same step,
         before any frame shows the key, the summary and the field say the answer shown is
         for the job before it (the edit's own message comes a moment later)."""
-        self.typing_pending = True
-        if not self.stale_marked:
-            self.stale_marked = True
-            if self._stale_since is None:
-                self._stale_since = time.monotonic()
+        self.typing_pending = self.stale_marked = True
         if self.current in INPUT_VIEWS and self.is_attached:
-            text = self.summary_text()
-            if text != getattr(self, "_summary_shown", None):
-                self._summary_shown = text
-                update_text(self.query_one("#summary", Static), Text(text))
+            self._show_summary()
         field.show(CHECKING_WORDS)
+
+    def _show_summary(self) -> None:
+        """The summary's text as it stands now; unchanged, no redraw."""
+        text = self.summary_text()
+        if text != getattr(self, "_summary_shown", None):
+            self._summary_shown = text
+            update_text(self.query_one("#summary", Static), Text(text))
 
     def _typing_taken(self) -> None:
         """The field's edit has reached the job (or was not one): the mark stands only while
@@ -355,7 +347,7 @@ class JobScreen(Screen):
         if self.typing_pending:
             self.typing_pending = False
             if not self.session.stale and self.stale_marked:
-                self.stale_marked, self._stale_since = False, None
+                self.stale_marked = False
                 self.refresh_all()
 
     @work(thread=True, group="solve", exit_on_error=False)
@@ -383,7 +375,7 @@ class JobScreen(Screen):
     def _solved(self, session: Session, version: int, ev) -> None:
         if session is self.session and session.install(version, ev):
             if not session.stale:
-                self.stale_marked, self._stale_since = False, None
+                self.stale_marked = False
             self.refresh_all()
 
     # ------------------------------------------------------------------ navigation

@@ -1286,9 +1286,7 @@ class ResultsView(View):
             note = f"\nNote: {r.shown_state}." if r.shown_state else ""
             q("#res-verdict").update(_text(drawing.verdict_line(r) + note))
             q("#res-verdict").set_class(not r.ok, "-fail")
-            q("#res-checks").update(_text(
-                ("CHECKS (of the job before your last edit: checking it now)\n" if behind else
-                 "CHECKS\n") + drawing.checks_table(r)))
+            q("#res-checks").update(_text("CHECKS\n" + drawing.checks_table(r)))
             q("#res-reactions").update(_text(
                 "REACTIONS (what each support does to the beam)\n" + drawing.reactions_table(r)))
             q("#res-extremes").update(_text("EXTREMES (exact)\n" + drawing.extremes_table(r)))
