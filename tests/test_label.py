@@ -1002,3 +1002,48 @@ def test_capacity_names_where_a_travelling_hoist_may_run_not_where_it_was_typed(
         'at = "6 ft"\ntype = "roller"\n[[loads]]\ntype = "point"\nat = "2 ft"\n'
         'value = "-500 lbf"\n'))))
     assert plain["at"] == "2 ft"
+
+
+CLAMP_BRACKET = """schema = 1
+title = "wall bracket, pipe on a beam clamp"
+units = "us"
+tags = ["not-lifting"]
+[beam]
+length = "4 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "3 ft 9 in"
+value = "-2500 lbf"
+label = "process pipe on beam clamp"
+flange = "bottom"
+"""
+
+
+@pytest.mark.parametrize("at, extra, held", [
+    ('"3 ft 9 in"', "", True),          # 3 in from the open tip, bf = 5.25 in
+    ('"3 ft 6 in"', "", False),         # 6 in in: the flange runs on both sides
+    ('"3 ft 9 in"', "lug = true\n", False),  # a lug under the web: no flange-tip load
+    ('"2 in"', "", False),              # by the root: the fixed connection closes that end
+])
+def test_a_clamp_hung_by_an_open_flange_end_is_rated_only_a_flange_width_in(at, extra, held):
+    # The flange-tip check (wheel flange bending) takes a flange that runs on both sides of
+    # the load; by an unstiffened open end the flange bends about twice as much (EN 1993-6
+    # 5.7.2, from memory), so a job that is not a lifting device gets the same condition as a
+    # hoist does: rated only while the clamp sits a flange width (AISC Shapes Database v15.0
+    # W8X18 bf = 5.25 in) from the open end, with a caution in the report
+    from shopbeam.output import label
+    job = parse_job_text(CLAMP_BRACKET.replace('"3 ft 9 in"', at).replace(
+        'flange = "bottom"\n', 'flange = "bottom"\n' + extra))
+    res = analyze(job)
+    r = label.rating(capacity(job), res.unchecked)
+    cond = [n for n in r.notes if "RATED ONLY WHILE the load hung from the flange tips" in n]
+    said = [c for c in res.cautions if "within a flange width (5.25 in)" in c]
+    assert bool(cond) == held and bool(said) == held
+    if held:
+        assert "near 3.75 ft" in cond[0] and "5.25 in" in cond[0]
+        assert "open end at 4 ft" in said[0]

@@ -312,3 +312,84 @@ def test_a_job_with_no_live_load_sizes_but_rates_nothing():
     assert got["passing"][0]["factor"] is None and got["passing"][0]["rated"] is False
     assert capacity(job).rated is False
     assert " inf" not in render(res)
+
+
+BRACED_HOG = {
+    # a roof purlin under net uplift, braced = true by the deck on its top flange: the bottom
+    # flange is in compression over the whole 20 ft (AISC 360-16 F2, Cb 1.0)
+    "uplift": """schema = 1
+title = "roof purlin"
+tags = ["not-floor"]
+[beam]
+length = "20 ft"
+section = "W8x18"
+material = "A992"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "20 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-50 lbf/ft"
+case = "dead"
+[[loads]]
+type = "uniform"
+value = "600 lbf/ft"
+uplift = true
+""",
+    # a two-span deck beam, patterned: the moment hogs over the middle support
+    "two spans, patterned": """schema = 1
+title = "two-span deck beam"
+tags = ["not-floor"]
+[beam]
+length = "36 ft"
+section = "W8x18"
+material = "A992"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "18 ft"
+type = "roller"
+[[supports]]
+at = "36 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-900 lbf/ft"
+patterned = true
+""",
+}
+
+
+@pytest.mark.parametrize("name", list(BRACED_HOG))
+def test_the_sweep_checks_the_bottom_flange_under_hogging_as_capacity_does(name, monkeypatch):
+    # braced on the top only: `bending, hogging` (the bottom flange's buckling between the
+    # supports) is in the batched sweep, so each row's ratio and factor are those of the
+    # section's own full check and capacity, and no row is held NOT RATED for a factor past
+    # that strength
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.capacity import capacity
+    job = parse_job_text(BRACED_HOG[name])
+    secs = _lightest_w(60)
+    monkeypatch.setattr(catalog, "list_sections", lambda kind=None: list(secs))
+    res = sizing.size(job, "W")
+    shown = sizing.shown_rows(res)
+    batched = [r for r in shown if r.checked == "batched"]
+    assert len(batched) > 10
+    hogged = 0
+    for r in batched:
+        j = replace(job, section=r.section)
+        cap = capacity(j)
+        full = max(c.ratio for c in analyze(j).checks)  # the report's checks, hogging too
+        assert r.ratio == pytest.approx(full, rel=1e-9), r.designation
+        assert r.factor == pytest.approx(cap.factor, rel=1e-9), r.designation
+        assert not r.not_rated, (r.designation, r.not_rated)
+        hogged += r.governing == "bending, hogging"
+        assert (cap.governing.name == "bending, hogging") == (r.governing == "bending, hogging") \
+            or abs(r.ratio - 1) < 1e-6
+    assert hogged > 3  # the rule decides many rows, or the test means little

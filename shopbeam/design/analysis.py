@@ -288,6 +288,8 @@ def analyze(job: Job) -> Result:
     # an unbraced cantilever loaded on its top flange: the strength that loading leaves it,
     # as capacity rates it (a plain job's state set is built only where one applies)
     checks = list(checks) + top_flange_checks(job, st, ss)
+    # braced on the top only: the bottom edge under hogging, where its strength is worked out
+    checks += hogging_checks(job, st, ss)
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment, ss) \
         + span_top_unchecked(job, st, sol.moment, ss)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
@@ -302,9 +304,39 @@ def analyze(job: Job) -> Result:
                   reaction_envelope=tuple(envelope))
 
 
+def hung_by_open_ends(job: Job) -> list[tuple[float, float]]:
+    """(where, the open end it is near) of each point load hung from the flange tips (a beam
+    clamp or trolley wheels, `basis.tip_hung`) within a flange width of an end of an I-shape
+    bent about its strong axis that no fixed support closes: the flange check under it (wheel
+    flange bending) is for a flange that runs on both sides of the load."""
+    from shopbeam.design.basis import tip_hung
+    sec = job.section
+    bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
+    if not bf:
+        return []
+    tol = 1e-6 * job.length
+    built = [sp.at for sp in job.supports if sp.kind == "fixed"]
+    ends = [x for x in (0.0, job.length) if not any(abs(x - f) <= tol for f in built)]
+    tips = set(tip_hung(job))
+    return sorted({(ld.at, x) for ld in job.loads for x in ends
+                   if ld.key in tips and ld.kind == "point" and ld.value
+                   and abs(ld.at - x) < bf})
+
+
 def member_notes(job: Job) -> list[str]:
     """Cautions about what the member type does that the checks do not cover in numbers."""
     out = []
+    near = hung_by_open_ends(job)
+    if near:
+        f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+        bf = job.section.dims["bf"]
+        out.append(f"A load hung from the flange tips at {', '.join(f(a) for a, _ in near)} is "
+                   f"within a flange width ({f(bf, 'small_length')}) of the open end at "
+                   f"{', '.join(dict.fromkeys(f(x) for _, x in near))}: the flange check under "
+                   "it is for a flange that runs on both sides of the load, and by an open end "
+                   "the flange bends about twice as much (EN 1993-6 5.7.2, from memory). The "
+                   "figure posted holds only with the load at least a flange width from that end "
+                   "(the label says so), or with the end closed by a plate")
     t = torsion_note(job, job.section)
     if t:
         out.append(t)
@@ -1134,27 +1166,45 @@ def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
     if not top_only(job):
         return []
     fl = st.flexure
-    held = set(support_braces(job, job.supports))
-    stops = sorted({0.0, job.length, *held})
-    lengths = [(a, b) for a, b in zip(stops, stops[1:]) if b - a > 1e-9 * job.length]
-    wood = fl.ltb is not None and fl.ltb[0] == "NDS"
-    if fl.ltb is not None and (fl.stress_s is None or wood):
-        out = []
-        tol = 1e-9 * job.length
-        for a, b in lengths:
-            case = "any"
-            if wood:
-                free = not (any(abs(a - h) <= tol for h in held)
-                            and any(abs(b - h) <= tol for h in held))
-                case = wood_load_case(job, a, b, free)
-            l1 = fl.ltb1(b - a, case)[0]
-            if l1 < fl.cap:
-                out.append((a, b, l1 / fl.omega))
-        return out
+    lengths = hogging_lengths(job)
+    got = hogging_allowables(job, fl, lengths)
+    if got is not None:
+        return [(a, b, allow) for (a, b, _c), allow in zip(lengths, got) if allow is not None]
     loose = replace(job, braced=False, braces=())
     if any(u.name == "lateral-torsional buckling" for u in unchecked_for(loose)):
-        return [(a, b, 0.0) for a, b in lengths]
+        return [(a, b, 0.0) for a, b, _c in lengths]
     return []
+
+
+def hogging_lengths(job: Job) -> list[tuple[float, float, str]]:
+    """(start, end, NDS Table 3.3.3 row) of each length between the points that hold the
+    bottom flange or edge of a member braced on its top only (its supports)."""
+    held = set(support_braces(job, job.supports))
+    stops = sorted({0.0, job.length, *held})
+    tol = 1e-9 * job.length
+    out = []
+    for a, b in zip(stops, stops[1:]):
+        if b - a > tol:
+            free = not (any(abs(a - h) <= tol for h in held)
+                        and any(abs(b - h) <= tol for h in held))
+            out.append((a, b, wood_load_case(job, a, b, free)))
+    return out
+
+
+def hogging_allowables(job: Job, fl, lengths) -> list[float | None] | None:
+    """The moment (Mn / Omega, Cb 1.0) the bottom flange's or edge's lateral-torsional
+    buckling leaves over each of `lengths` (`hogging_lengths`) for the flexure `fl`, None on
+    a length where it does not lower the strength; None for all where shopbeam does not
+    work that buckling out for the section (steel shapes by AISC F2 and its kin, lumber by
+    NDS 3.3.3 are worked out)."""
+    wood = fl.ltb is not None and fl.ltb[0] == "NDS"
+    if not (fl.ltb is not None and (fl.stress_s is None or wood)):
+        return None
+    out = []
+    for a, b, case in lengths:
+        l1 = fl.ltb1(b - a, case if wood else "any")[0]
+        out.append(l1 / fl.omega if l1 < fl.cap else None)
+    return out
 
 
 def top_only(job: Job) -> bool:
@@ -1271,6 +1321,54 @@ def hogging_demands(job: Job, st, ss, k: float, limits
     return [(a, b, allow) + got[a, b][:2] for a, b, allow in limits], big
 
 
+HOGGING_CHECK = "bending, hogging"  # the bottom flange or edge, held at the supports only
+
+
+def hogging_computed(limits) -> bool:
+    """Whether shopbeam works out the strength each length of `limits` (`hogging_limits`)
+    leaves the bottom flange or edge (steel shapes by F2, lumber by NDS 3.3.3): the hogging
+    moment is then a check the rating is taken from, not a limit state left unchecked."""
+    return bool(limits) and all(allow > 0 for _a, _b, allow in limits)
+
+
+def hogging_check(job: Job, st, dem, big: float, travel: str = "") -> Check | None:
+    """The check of the bottom flange or edge of a member braced on its top only, from
+    `hogging_demands`' answer `dem` (and its largest |moment| `big`): over each length between
+    the supports, the hogging moment against the strength that edge's lateral-torsional
+    buckling leaves it (Cb 1.0, conservative); the length whose ratio is largest governs.
+    None where the moment does not hog by 1 % of its largest (no compression worth a check)."""
+    if not dem or not any(-d[3] > 0.01 * big for d in dem):
+        return None
+    a, b, allow, least, at = max(dem, key=lambda d: -d[3] / d[2])
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    part = flange_word(job)
+    wood = st.flexure.ltb is not None and st.flexure.ltb[0] == "NDS"
+    rule = "NDS 2018 3.3.3 (CL over the length, Table 3.3.3)" if wood else \
+        "AISC 360-16 F2 (Lb = the length between supports, Cb 1.0)"
+    return Check(
+        HOGGING_CHECK, max(0.0, -least), allow, "N*m",
+        f"{rule}: the bottom {part} is in compression where the moment hogs and is held at "
+        f"the supports only ({top_words(job)} holds the top): M <= {f(allow, 'moment')} over "
+        f"{f(a)} to {f(b)}" + travel, at,
+        detail=f"the bottom {part} of a member braced on its top only. To rate it on the "
+        "bending check alone, " + hogging_remedy(job),
+        clause=hogging_source(job, st), source="NDS 2018 (from memory)" if wood else
+        "AISC 360-16", params={"Lb": b - a, "Cb": 1.0, "Mn_omega": allow})
+
+
+def hogging_checks(job: Job, st, ss, k: float = 1.0) -> list[Check]:
+    """`hogging_check` at the factor k (the loads as entered at k = 1) over every load state,
+    where shopbeam works out the strength (`hogging_computed`); none otherwise (the limit
+    state is then listed as not checked, `braced_hogging`)."""
+    limits = hogging_limits(job, st)
+    if not hogging_computed(limits):
+        return []
+    ss = ss or loading.state_set(job)
+    dem, big = hogging_demands(job, st, ss, k, limits)
+    c = hogging_check(job, st, dem, big, travel_words(job, ss) if job.moving else "")
+    return [c] if c is not None else []
+
+
 def braced_hogging(job: Job, st, moment, ss=None) -> list[Unchecked]:
     """`braced = true` holds the member all along, but what shops brace it with (a deck,
     boards, sheeting) sits on the top flange or edge. Where the moment hogs, the bottom one
@@ -1281,7 +1379,7 @@ def braced_hogging(job: Job, st, moment, ss=None) -> list[Unchecked]:
     bottom flange is held too. A job of load states (patterned spans, [[moving]] wheels) is
     judged over all of them (`hogging_demands`), not on `moment`, one state's."""
     limits = hogging_limits(job, st)
-    if not limits:
+    if not limits or hogging_computed(limits):  # computed: a check (`hogging_checks`)
         return []
     if loading.needs_states(job):
         dem, big = hogging_demands(job, st, ss or loading.state_set(job), 1.0, limits)

@@ -27,6 +27,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      moving_reactions_off, variant_words,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
+                                       flange_word, hogging_check, hogging_computed,
                                        tip_brace_words,
                                        travelling_hook, hogging_limits, hogging_remedy,
                                        all_on_moment, cantilever_top_demands, top_flange_check,
@@ -502,6 +503,7 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
     reasons = not_rated_reasons(job, st, ss)
     res = _fatigue_cap(job, section, ss, st, _capacity(job, section, ss, st))
     res = _cantilever_top_rate(job, section, ss, st, res)
+    res = _hogging_rate(job, section, ss, st, res)
     res = _with_live_off(job, section, ss, st, res)
     return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
                    + _relieving_couples(job, section, res.factor)
@@ -647,7 +649,8 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
     where = travel_words(job, ss) if ss.parts.moving else ""
     out = []
     for a, b, allow, least, at in dem:
-        if -least > max(allow, 0.01 * big if allow <= 0 else 0.0):
+        # (worked out: a hair over from the sweep's own root of the same ratio is not a gap)
+        if -least > (allow * (1 + 1e-9) if allow > 0 else 0.01 * big):
             f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
             wood = getattr(job.material, "kind", "") == "lumber"
             leaves = (f"which exceeds the {f(allow, 'moment')} the bottom "
@@ -659,8 +662,9 @@ def _hogging(job, st, limits, ss, k: float) -> tuple[str, ...]:
                       f"({hogging_source(job, st)})")
             todo = hogging_remedy(job)
             out.append(f"lateral-torsional buckling of the bottom {'edge' if wood else 'flange'} "
-                       f"under hogging moment "
-                       f"not checked: {top_words(job)}, but {_at(k)} "
+                       f"under hogging moment"
+                       + (" (the check bending, hogging)" if allow > 0 else " not checked")
+                       + f": {top_words(job)}, but {_at(k)} "
                        f"the moment hogs to {f(-least, 'moment')} at {f(at)}{where}, {leaves}. "
                        f"{todo[0].upper()}{todo[1:]}")
     return tuple(out)
@@ -863,6 +867,75 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
                    note="", stepped="", method=res.method + "; lowered to where the cantilever's moment reaches "
                    "the strength its top-flange loads leave it (a bracketed root: the moment "
                    "is linear in k)")
+
+
+def hogging_root(job, st, ss, limits, k: float, dem=None) -> float | None:
+    """The factor below k where the hogging moment reaches the strength the bottom flange's
+    or edge's buckling leaves (`limits`: `analysis.hogging_limits`, worked out), where at k
+    it passes it and the dead loads alone (k = 0) do not; else None. The largest hogging over
+    every load state is the largest of functions linear in k: convex, one bracketed root
+    (Brent's method), then its passing side, stepped down a float at a time if rounding
+    leaves it a hair over. `dem`: `hogging_demands` at k, where already worked out."""
+    def ratio(kk, got=None):
+        got = got or hogging_demands(job, st, ss, kk, limits)[0]
+        return max(-d[3] / d[2] for d in got)
+
+    rk = ratio(k, dem)
+    if rk <= 1.0:
+        return None
+    r0 = ratio(0.0)
+    if r0 >= 1.0:
+        return None
+
+    def h(kk):
+        return ratio(kk) - 1.0
+
+    a0, fa, b0, _fb = brent(h, 0.0, k, r0 - 1.0, rk - 1.0)
+    k2 = a0 if fa <= 0 else b0
+    while h(k2) > 0:
+        k2 = math.nextafter(k2, 0.0)
+    return k2
+
+
+def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
+    """A member braced on its top only (`braced = true`, or braces on the top flange) whose
+    moment hogs: the bottom flange or edge is in compression and held at the supports only.
+    Where shopbeam works out the strength its buckling leaves (`analysis.hogging_computed`),
+    that is a check the rating is taken from, like the others: where the hogging moment at
+    the factor found passes it, the factor is lowered to where it reaches it (the largest
+    hogging over every load state is the largest of functions linear in k: convex, one
+    bracketed root from k = 0, where the dead loads alone must pass it, else `_hogging` says
+    why nothing is posted); the check is listed at the answer either way."""
+    k = res.factor
+    if res.evaluation is None or not math.isfinite(k) or k <= 0:
+        return res
+    limits = hogging_limits(job, st)
+    if not hogging_computed(limits):
+        return res
+    words = travel_words(job, ss) if job.moving else ""
+
+    def check(kk):
+        dem, big = hogging_demands(job, st, ss, kk, limits)
+        return hogging_check(job, st, dem, big, words), dem
+
+    c, dem = check(k)
+    k2 = hogging_root(job, st, ss, limits, k, dem) if c is not None else None
+    if k2 is None:  # it does not come first, or the dead loads alone pass it (`_hogging`)
+        return res if c is None else replace(res, evaluation=replace(
+            res.evaluation, checks=tuple(res.evaluation.checks) + (c,)))
+    e = evaluate(job, k2, section, ss, st)
+    more = [x for x in (fatigue.fatigue_check(job, st, ss, k2) if fatigue.given(job) else None,
+                        ) if x is not None]
+    top = cantilever_top_limits(job, st)
+    if top:
+        got = cantilever_top_demands(job, st, top, ss, k2)
+        more.append(top_flange_check(job, ss, max(got, key=lambda g: g[5] / g[4]), words, st))
+    hc = check(k2)[0]
+    more += [hc] if hc is not None else []
+    return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + tuple(more)),
+                   note="", stepped="", method=res.method + "; lowered to where the hogging "
+                   "moment reaches the strength the bottom " + flange_word(job) + "'s buckling "
+                   "leaves (a bracketed root: the moment is linear in k)")
 
 
 def _capacity(job, section, ss, st, fast: bool = True) -> CapacityResult:

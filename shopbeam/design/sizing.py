@@ -41,7 +41,9 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
-from shopbeam.design.analysis import loaded_on_top, top_flange_checks, top_load_segments
+from shopbeam.design.analysis import (HOGGING_CHECK, hogging_allowables, hogging_checks,
+                                       hogging_lengths, loaded_on_top, top_flange_checks,
+                                       top_load_segments, top_only)
 from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
 from shopbeam.design.fatigue import given as fatigue_given
@@ -244,6 +246,33 @@ def _absmax_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
             j1 = int(np.searchsorted(right, b + tol, side="right"))
             if j1 > j0:
                 o[:, s] = np.maximum(best[:, s, j0:j1].max(axis=1), 0.0)
+    return out
+
+
+def _min_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
+                intervals) -> list[np.ndarray]:
+    """Exact least value of f (signed) over each interval, at most 0, for every section and
+    state, as `_absmax_states` takes its arrays. Returns (n, S) each."""
+    n, S, P, w = co.shape
+    h = np.diff(breaks, axis=1)
+    hh = np.broadcast_to(h[None], (n, S, P)).reshape(-1)
+    flat = co.reshape(-1, w)
+    best = np.minimum(flat[:, 0], _horner(flat, hh))
+    if w > 1:
+        d = flat[:, 1:] * np.arange(1, w) * (hh[:, None] ** np.arange(w - 1))  # in tau = t / h
+        rows, tau = _real_roots_01(d)
+        if rows.size:
+            np.minimum.at(best, rows, _horner(flat[rows], tau * hh[rows]))
+    best = best.reshape(n, S, P)
+    tol = 1e-9 * (breaks[0, -1] - breaks[0, 0])
+    out = [np.zeros((n, S)) for _ in intervals]
+    for s in range(S):
+        left, right = breaks[s, :nreal[s]], breaks[s, 1:nreal[s] + 1]
+        for o, (a, b) in zip(out, intervals):
+            j0 = int(np.searchsorted(left, a - tol, side="left"))
+            j1 = int(np.searchsorted(right, b + tol, side="right"))
+            if j1 > j0:
+                o[:, s] = np.minimum(best[:, s, j0:j1].min(axis=1), 0.0)
     return out
 
 
@@ -842,6 +871,10 @@ def _batched(job, base, parts, cands, with_capacity):
     ws = job.moving[0] if (moving and lifting) else None
     a_w = (ws.wheel_edge if ws is not None and ws.wheel_edge is not None else DEFAULT_WHEEL_EDGE)
     rs, skipped = [], []
+    # a member braced on its top only whose moment hogs: the lengths between supports over
+    # which the bottom flange's or edge's buckling may set `bending, hogging`
+    hog_len = hogging_lengths(job) if top_only(job) else []
+    hog_allow: list[list[float]] = []
     per_material: dict[int, tuple] = {}  # candidates mostly share one material: one job each
     for des, sec, mat, price, note in cands:
         try:
@@ -867,6 +900,10 @@ def _batched(job, base, parts, cands, with_capacity):
             skipped.append(f"{des}: {exc}")
             continue
         seg = [(fl.cap, fl.ltb1(0.0 if braced else bb - a)[0], free) for a, bb, free in ltb_segs]
+        if hog_len:  # braced on the top only: the bottom flange under hogging, as checked
+            got = hogging_allowables(jm, fl, hog_len)
+            hog_allow.append([math.inf if x is None else x for x in got] if got is not None
+                             else [math.inf] * len(hog_len))  # not worked out: a rating gap
         rs.append((des, sec, mat, price, note, sec.self_weight_mass(mat.density) * g0,
                    fl.omega, seg, sh.vn / sh.omega, mat.e * bending_ix(sec, job.restrained),
                    fl.cap, fl.uses_cb, wheel, bool(fl.special),
@@ -874,6 +911,7 @@ def _batched(job, base, parts, cands, with_capacity):
     if not rs:
         raise InputError("no section of this kind can be checked", "--kind")
     R = len(rs)
+    hog_al = np.array(hog_allow).reshape(R, len(hog_len))
     # the job's self_weight = false holds for every section (its dead loads carry it)
     wsw = np.array([r[5] if job.self_weight else 0.0 for r in rs])
     ei = np.array([r[9] for r in rs])
@@ -1088,7 +1126,15 @@ def _batched(job, base, parts, cands, with_capacity):
             for um, lim in zip(_absmax_states(lco, U.breaks, U.nreal,
                                               [(a, bb) for a, bb, _ in spans]), live_limits):
                 ldef = np.maximum(ldef, um.max(axis=1) / ei[sl] / lim)
-        rows = [bend, shear, defl, ldef, local_ratio(kk, sl)[0], sidesway_ratio(kk, sl, mco)]
+        hog = np.zeros(n)
+        if hog_len:  # analysis.hogging_checks: the most negative moment over each length
+            for li, lo in enumerate(_min_states(mco, M.breaks, M.nreal,
+                                                [(a, bb) for a, bb, _c in hog_len])):
+                with np.errstate(divide="ignore", invalid="ignore"):
+                    hog = np.maximum(hog, np.where(np.isinf(hog_al[sl, li]), 0.0,
+                                                   -lo.min(axis=1) / hog_al[sl, li]))
+        rows = [bend, shear, defl, ldef, local_ratio(kk, sl)[0], sidesway_ratio(kk, sl, mco),
+                hog]
         if wheels is not None:  # bottom-flange bending under each wheel (lifting.wheel_check)
             cw = mco[:, np.arange(S)[:, None], wj]  # (n, S, nw, w)
             mw = sum(cw[..., e] * wt[None] ** e for e in range(cw.shape[-1]))
@@ -1124,7 +1170,7 @@ def _batched(job, base, parts, cands, with_capacity):
     for sl in chunks(np.arange(R)):
         local_names += local_ratio(np.ones(len(sl)) * (1 + imp), sl, True)[1]
     names = ("bending", "shear", "deflection", "live deflection", None,
-             _local.SIDESWAY, "wheel flange bending")
+             _local.SIDESWAY, HOGGING_CHECK, "wheel flange bending")
     # tees and angles: bending by F9 / F10 needs the whole check (sign of the moment along
     # each unbraced length, principal axes); the batch leaves their bending out, so their
     # rows are a screen by the other checks (a lower bound) and are checked in full as any
@@ -1153,7 +1199,8 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
         ss = state_set(j)  # shared: the moving-load cells and parts cached on it are reused
         ev = evaluate(j, 1.0, ss=ss)
         st = strengths(j, beam=ss.beam)
-        g = max(list(ev.checks) + top_flange_checks(j, st, ss), key=lambda c: c.ratio)
+        g = max(list(ev.checks) + top_flange_checks(j, st, ss) + hogging_checks(j, st, ss),
+                key=lambda c: c.ratio)
         fat = fatigue_check(j, st, ss, 1.0)  # fatigue given: a check
         if fat is not None and fat.ratio > g.ratio:
             g = fat

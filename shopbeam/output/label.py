@@ -35,6 +35,7 @@ from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
 from shopbeam.design import fatigue
 from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
+                                      hung_by_open_ends,
                                       couple_notes, flange_word, is_outdoor)
 from shopbeam.design.basis import tip_hung
 from shopbeam.design.capacity import hoist_at, hoist_travels, travelling
@@ -450,20 +451,24 @@ def _held_words(job) -> list[str]:
                        f"{units.fmt(bf, 'small_length', sy)} (a flange width) from {where} "
                        "(the flange check under the wheels is for the flange away from its "
                        "ends).")
-    sec = job.section
-    bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
-    if job.lifting and bf and not sets:
-        # a hoist given as a point load hung on the flange tips within a flange width of an
-        # end (a jib's hoist at the end of its reach): the same flange-end condition
-        tips = set(tip_hung(job))
-        near = sorted({ld.at for ld in job.loads if ld.key in tips and ld.kind == "point"
-                       and ld.value and (ld.at < bf or ld.at > job.length - bf)})
-        if near:
-            out.append(f"RATED ONLY WHILE END STOPS keep the hoist's wheels at least "
-                       f"{units.fmt(bf, 'small_length', sy)} (a flange width) from the open "
-                       f"end near {', '.join(pos(x) for x in near)} (the figure, taken with "
+    near = hung_by_open_ends(job) if not sets else []
+    if near:
+        # a load given as a point load hung on the flange tips within a flange width of an
+        # open end (a jib's hoist at the end of its reach, a clamp by a bracket's tip): the
+        # same flange-end condition (analysis.hung_by_open_ends)
+        bf = units.fmt(job.section.dims["bf"], 'small_length', sy)
+        at = ", ".join(dict.fromkeys(pos(x) for x, _ in near))
+        if job.lifting:
+            out.append(f"RATED ONLY WHILE END STOPS keep the hoist's wheels at least {bf} (a "
+                       f"flange width) from the open end near {at} (the figure, taken with "
                        "the hoist there, then errs on the safe side), or that end is closed "
                        "with a plate (the flange check under the wheels is for the flange away "
+                       "from its ends).")
+        else:
+            out.append(f"RATED ONLY WHILE the load hung from the flange tips near {at} sits at "
+                       f"least {bf} (a flange width) from the open end of the flange (the "
+                       "figure, taken with it there, then errs on the safe side), or that end is "
+                       "closed with a plate (the flange check under it is for the flange away "
                        "from its ends).")
     return out
 
