@@ -946,3 +946,20 @@ def test_a_hoist_with_no_weight_entered_is_not_rated():
     job = parse_job_text(trolley.replace('dead = ["-60 lbf", "-60 lbf"]', ""))
     assert [p for p in job.warnings if "dead = [...] on [[moving]]" in p.message]
     assert not capacity(job).rated
+
+
+def test_a_hoist_given_as_point_loads_gets_the_longitudinal_force_caution():
+    # ASCE 7-16 4.9.5 (from memory): 10 % of the wheel loads along the runway or boom. The jib
+    # preset's hoist is two point loads hung from the flange (1000 lbf rated + 80 lbf hoist),
+    # with the 25 % impact of a powered hoist (4.9.3): 0.10 x 1080 x 1.25 = 135 lbf, as a
+    # [[moving]] set of the same loads is told; a fixed pick on a lug does not travel
+    from pathlib import Path
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import parse_job_text
+    text = (Path(__file__).resolve().parents[1] / "presets" / "jib-arm.toml").read_text()
+    said = [c for c in analyze(parse_job_text(text)).cautions if "Longitudinal force" in c]
+    assert said and "about 135 lbf" in said[0] and "mast" in said[0]
+    lug = text.replace('value = "-1000 lbf"', 'value = "-1000 lbf"\nlug = true').replace(
+        'value = "-80 lbf"', 'value = "-80 lbf"\nlug = true')
+    assert lug != text
+    assert not [c for c in analyze(parse_job_text(lug)).cautions if "Longitudinal force" in c]

@@ -390,10 +390,17 @@ def lifting_notes(job, prof: Profile | None) -> list[str]:
     if prof is None:
         return []
     out = [prof.words[0].upper() + prof.words[1:] + "."]
-    if prof.longitudinal and job.moving:
-        ws = job.moving[0]
-        per = max(abs(w + d) for w, d in zip(ws.live, ws.dead)) * (1 + prof.impact)
-        total = prof.longitudinal * per * len(ws.live)
+    # a hoist given as point loads hung from the flange tips (a trolley or clamp that can
+    # travel; not a fixed pick on a lug): the same force from its loads
+    tips = set(tip_hung(job)) if not job.moving else set()
+    hoist = [ld for ld in job.loads if ld.key in tips and ld.kind == "point" and ld.value]
+    if prof.longitudinal and (job.moving or hoist):
+        if job.moving:
+            ws = job.moving[0]
+            per = max(abs(w + d) for w, d in zip(ws.live, ws.dead)) * (1 + prof.impact)
+            total = prof.longitudinal * per * len(ws.live)
+        else:
+            total = prof.longitudinal * abs(sum(ld.value for ld in hoist)) * (1 + prof.impact)
         from shopbeam.jobs.rules import has_free_end  # noqa: PLC0415 - as _hand_geared
 
         boom = has_free_end(job.supports, job.length)
