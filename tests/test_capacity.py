@@ -384,3 +384,26 @@ def test_a_dead_couple_whose_sign_slipped_so_that_it_relieves_is_not_rated():
     why = [r for r in slip.not_rated if "dead couple" in r]
     assert why and "check its sign" in why[0]
     assert slip.factor > right.factor  # what the slip would have posted
+
+
+@pytest.mark.parametrize("value, upward", [('"1000 lbf"\nuplift = true', True),
+                                           ('"-1000 lbf"', False)])
+def test_the_json_load_to_post_says_upward_as_the_label_does(value, upward):
+    # a rating figure with no direction reads as a weight: the label says MAX UPWARD POINT
+    # LOAD, and the JSON's max_load carries the same word (its keys stay as they are)
+    from shopbeam.design.capacity import capacity, max_load_lines
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.output import label
+    job = parse_job_text(
+        'schema = 1\ntitle = "hold-down beam"\ntags = ["not-lifting"]\n[beam]\n'
+        'length = "12 ft"\nsection = "W8x18"\nmaterial = "A992"\nself_weight = false\n'
+        'restrained = true\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+        'at = "12 ft"\ntype = "roller"\n[[loads]]\ntype = "point"\nat = "4 ft"\n'
+        f'value = {value}\n')
+    res = capacity(job)
+    assert res.rated, res.not_rated
+    lines = dict(max_load_lines(res))
+    assert "max point load" in lines and lines["at"] == "4 ft"
+    assert ("upward" in lines.get("direction", "")) == upward
+    text = label.label_text(label.rating(res, ()))
+    assert ("MAX UPWARD POINT LOAD" in text) == upward

@@ -1106,6 +1106,11 @@ def max_load_lines(res: CapacityResult) -> list[tuple[str, str]]:
             parts = sum(_floor_si(abs(ld.total_force) * k, "force", sy) for ld in live
                         if ld.kind != "moment")
             out.append(("static live", _floor_fmt(min(parts, tot * k), "force", sy) + " total"))
+    if not mv and len(live) == 1 and live[0].kind in ("uniform", "point") \
+            and live[0].total_force > 0:
+        # the label says UPWARD: a figure with no direction reads as a weight (the keys stay
+        # the same for scripts that read them)
+        out.append(("direction", "upward (the load pushes up: uplift = true)"))
     if job.members > 1:
         out.append(("shared by", f"{job.members} identical members"))
     if impact_of(job):
