@@ -1702,17 +1702,25 @@ async def test_the_notes_keep_the_line_breaks_of_a_paste_and_take_one_from_ctrl_
 async def test_a_switch_away_and_back_in_one_burst_leaves_the_focus_where_tab_put_it(tmp_path):
     # F3 F2 Tab End in one burst: the Hide of the first switch reached the title field after
     # the second switch and the Tab had put the focus there, and Textual's own handler blurred
-    # it, so the keys typed next went nowhere
+    # it, so the keys typed next went nowhere. (Left with Esc, so that F2 brings the view back
+    # with no field picked and the Tab goes to its first field, the title.)
     app = make_app(demo_copy(tmp_path), cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:
         await settle(pilot)
         js = app.job_screen
         f = await at_end_of(pilot, app, "job", "title")
         before = f.input.value
+        await burst(pilot, "\x1b")
+        await settle(pilot)
         await burst(pilot, F3 + "\x1bOQ" + TAB + "\x1b[F")  # F3 F2 Tab End
         assert js.focused is f.input
         await burst(pilot, "k")
         assert js.session.doc.get("title") == before + "k"
+        # the same with the title left picked: F2 puts the cursor back in it (where it
+        # was), and the Hide that comes late must not take it away
+        await burst(pilot, F3 + "\x1bOQ" + "m")  # F3 F2 m
+        assert js.focused is f.input
+        assert js.session.doc.get("title") == before + "km"
         # a Hide while the field really is hidden still takes the focus away
         await pilot.press("f3")
         await settle(pilot)
@@ -2302,3 +2310,48 @@ async def test_the_rating_view_switched_to_before_the_answer_is_made_for_the_job
         assert view._for[0] == js.session.doc.text()
         assert "/ 3" in view._out  # first yield over the factor typed
 
+
+
+F5, F8, ESC = "\x1b[15~", "\x1b[19~", "\x1b"
+
+
+@sync
+async def test_an_f_key_back_to_a_view_puts_the_cursor_back_in_the_field_left(tmp_path):
+    # "W10x" typed, a look at the results (F8), back with F5 and "26" typed: the designation
+    # reads W10x26 (before, the view came back with no field picked: "2" switched views and
+    # "6" went nowhere). Nothing is selected, so the keys add to the text
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f5")
+        await settle(pilot)
+        des = field(app, "section", "section.designation")
+        assert des.value == "W8x18"  # the demo's
+        des.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_U + "W10x")
+        await burst(pilot, F8)
+        assert app.job_screen.current == "results"
+        await burst(pilot, F5 + "26")
+        assert app.job_screen.current == "section" and app.focused is des.input
+        assert des.value == "W10x26"
+        assert app.job_screen.session.doc.get("beam.section") == "W10x26"
+        # a burst works the same: keys right behind the F-key go on into the field
+        await burst(pilot, F8 + F5 + BS + BS + "30")
+        assert des.value == "W10x30" and app.job_screen.current == "section"
+        # ctrl+z still puts back the designation as it was before the typing began
+        await burst(pilot, CTRL_Z)
+        assert des.value == "W8x18"
+        # left with Esc: the view comes back with no field picked, digits switch views
+        await burst(pilot, ESC + F8 + F5)
+        assert app.job_screen.current == "section" and app.focused is not des.input
+        # a digit view key never puts the cursor in a field (a burst of digits keeps
+        # switching views)
+        from shopbeam.tui.widgets import Choice
+        des.input.focus()
+        await settle(pilot)
+        await burst(pilot, F8)
+        await pilot.pause(Choice.ALONE + 0.2)  # a digit on its own, not right behind F8
+        await burst(pilot, "4")  # 4: the section view's digit
+        assert app.job_screen.current == "section" and app.focused is not des.input
+        assert des.value == "W8x18"

@@ -132,16 +132,21 @@ class JobScreen(Screen):
         Binding("f1", "app.help", "keys", priority=True),
         Binding("question_mark", "app.help", "keys", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
-    ] + [Binding(",".join([key, f"alt+{key}", fkey] + ([OPTION_DIGITS[key]]
-                                                      if key in OPTION_DIGITS else [])),
+    ] + [Binding(",".join([key] + ([OPTION_DIGITS[key]] if key in OPTION_DIGITS else [])),
                  f"view('{vid}')", name, show=False, priority=False)
-         for (vid, key, name, _s, _c), fkey in zip(VIEWS, VIEW_FKEYS)]
+         for (vid, key, name, _s, _c) in VIEWS] + [
+        # an F-key (or alt+digit) back to a view puts the cursor back in the field left there
+        # (typing goes on where it stopped); a digit view key leaves the view itself picked,
+        # so the next digit of a burst switches views again and never lands in a field
+        Binding(f"{fkey},alt+{key}", f"view('{vid}', True)", name, show=False, priority=False)
+        for (vid, key, name, _s, _c), fkey in zip(VIEWS, VIEW_FKEYS)]
 
     def __init__(self, session: Session) -> None:
         super().__init__()
         session.deferred = True
         self.session = session
         self.current = "job"
+        self._left_fields: dict = {}  # view id -> the text field left picked in it
 
     def compose(self) -> ComposeResult:
         yield Banner(id="banner")
@@ -385,8 +390,17 @@ class JobScreen(Screen):
         if vid is not None:
             await self.action_view(vid)
 
-    async def action_view(self, vid: str) -> None:
+    async def action_view(self, vid: str, resume: bool = False) -> None:
+        """Show the view `vid`. `resume` (its F-key): the text field that had the cursor when
+        that view was left gets it back, the cursor where it was and nothing selected, so
+        keys typed next go on where the typing stopped (a view left with no field picked, or
+        with Esc, comes back with none)."""
         self.flush_typing()
+        left = self.focused
+        if isinstance(left, FieldInput) and self.current in {a.id for a in left.ancestors}:
+            self._left_fields[self.current] = left
+        elif self.current != vid:
+            self._left_fields.pop(self.current, None)
         self._switched = (vid, time.monotonic())
         self._switched_key = getattr(self.app, "_key_count", 0)
         switcher = self.query_one(ContentSwitcher)
@@ -397,6 +411,14 @@ class JobScreen(Screen):
         switcher.current = vid
         self.refresh_all()
         view = self.query_one(f"#{vid}")
+        back = self._left_fields.get(vid) if resume else None
+        if back is not None and back is not left and back.is_attached \
+                and view in back.ancestors and shown_now(back):
+            back.resume_next = True  # no selection: the keys typed next are added, not a
+            self.set_focus(back)     # replacement of the text
+            if self.focused is back:
+                return
+            back.resume_next = False
         self.set_focus(view)  # now, so the next key of a burst already goes to the new view
         if self.focused is not view:
             self.call_after_refresh(self._focus_first, view)

@@ -240,10 +240,18 @@ class FieldInput(KeepFocusOnStaleHide, Input):
             return "redone"
         return ""
 
+    resume_next = False  # the next focus comes back to go on typing (a view's F-key)
+
     def focus_arrived(self) -> None:
         """The focus came here (called by the screen as it moves, not when the queued Focus
         event arrives): select the text now, so the next key of a fast burst replaces it
-        exactly as it would if typed slowly."""
+        exactly as it would if typed slowly. Coming back to go on typing (`resume_next`):
+        nothing selected, the cursor where it was, and ctrl+z still puts back the text as it
+        was before this field's typing began."""
+        if self.resume_next:
+            self.resume_next = False
+            self._early_selects += 1  # its queued Focus event selects nothing either
+            return
         self.at_focus, self.undone = self.value, None
         if self.select_all:
             self.selection = Selection(0, len(self.value))
