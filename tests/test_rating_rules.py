@@ -666,6 +666,24 @@ def test_braced_true_on_aluminium_or_first_yield_does_not_hold_the_bottom_edge(b
     assert not [r for r in held.not_rated if "hogging" in r]
 
 
+def test_an_aluminium_i_beam_braced_on_top_is_rated_on_its_bottom_flange_by_its_own_rule():
+    # a 6061-T6 I 6 x 4 fixed at both ends, braced = true: the moment hogs at the ends, and
+    # the bottom flange's buckling over the 6 ft is worked out by ADM 2015 F.2 (the rule of
+    # the member's own bending check), not named by AISC's clause
+    text = ('schema = 1\ntitle = "tray beam"\ntags = ["not-rack", "not-lifting"]\n[beam]\n'
+            'length = "6 ft"\nmaterial = "6061-T6"\nwelded = false\nbraced = true\n[beam.section]\n'
+            'shape = "i-beam"\ndepth = "6 in"\nflange_width = "4 in"\n'
+            'flange_thickness = "0.35 in"\nweb_thickness = "0.25 in"\n[[supports]]\n'
+            'at = "0 ft"\ntype = "fixed"\n[[supports]]\nat = "6 ft"\ntype = "fixed"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-60 lbf/ft"\n')
+    cap = capacity(parse_job_text(text))
+    assert cap.rated, cap.not_rated
+    hog = {c.name: c for c in cap.evaluation.checks}["bending, hogging"]
+    assert hog.ratio == pytest.approx(1.0, abs=1e-9) and cap.governing is hog
+    assert hog.formula.startswith("ADM 2015 F.2") and "ADM 2015 F.2" in hog.clause
+    assert "AISC" not in hog.clause + hog.source + hog.formula
+
+
 def test_the_bottom_edge_of_a_wood_joist_takes_its_own_beam_stability_factor():
     # NDS 2018 3.3.3 and Table 3.3.3 (from memory): each 12 ft length between the supports
     # of the two-span joist, the footnote's general row (the table's rows are for single

@@ -1268,6 +1268,9 @@ def hogging_source(job: Job, st) -> str:
     if fl.ltb is not None and fl.ltb[0] == "NDS":
         return ("NDS 2018 3.3.3 (CL = 1.0 only where the compression edge is supported "
                 "throughout its length) and 4.4.1.2")
+    if fl.ltb is not None and fl.stress_s is None and fl.ltb[0] in ("ADM", "F4", "F7"):
+        # worked out by the section's own rule (the F2 wording below is the I-shapes')
+        return f"{_LTB_RULES[fl.ltb[0]][0]} (Lb between braces of the compression flange)"
     if getattr(job.material, "kind", "") == "aluminum":
         return "ADM 2015 chapter F (lateral-torsional buckling, not computed)"
     if getattr(getattr(job, "section", None), "shape", "") == "custom":
@@ -1342,9 +1345,10 @@ def hogging_check(job: Job, st, dem, big: float, travel: str = "") -> Check | No
     a, b, allow, least, at = max(dem, key=lambda d: -d[3] / d[2])
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     part = flange_word(job)
-    wood = st.flexure.ltb is not None and st.flexure.ltb[0] == "NDS"
+    ltb = st.flexure.ltb[0] if st.flexure.ltb is not None else "F2"
+    wood = ltb == "NDS"
     rule = "NDS 2018 3.3.3 (CL over the length, Table 3.3.3)" if wood else \
-        "AISC 360-16 F2 (Lb = the length between supports, Cb 1.0)"
+        f"{_LTB_RULES.get(ltb, _LTB_RULES['F2'])[0]} (Lb = the length between supports, Cb 1.0)"
     return Check(
         HOGGING_CHECK, max(0.0, -least), allow, "N*m",
         f"{rule}: the bottom {part} is in compression where the moment hogs and is held at "
@@ -1352,8 +1356,8 @@ def hogging_check(job: Job, st, dem, big: float, travel: str = "") -> Check | No
         f"{f(a)} to {f(b)}" + travel, at,
         detail=f"the bottom {part} of a member braced on its top only. To rate it on the "
         "bending check alone, " + hogging_remedy(job),
-        clause=hogging_source(job, st), source="NDS 2018 (from memory)" if wood else
-        "AISC 360-16", params={"Lb": b - a, "Cb": 1.0, "Mn_omega": allow})
+        clause=hogging_source(job, st), source=_LTB_RULES.get(ltb, _LTB_RULES["F2"])[1],
+        params={"Lb": b - a, "Cb": 1.0, "Mn_omega": allow})
 
 
 def hogging_checks(job: Job, st, ss, k: float = 1.0) -> list[Check]:
