@@ -336,6 +336,32 @@ async def test_calc_sheet_is_made_in_a_worker():
 
 
 @sync
+async def test_a_job_past_the_calc_sheet_size_is_told_at_once_in_its_own_words(tmp_path):
+    # 30 point loads on a 12-span rail: loads + 5 x supports past the sheet's limit
+    # (limits.CALC_TERMS); the view says so at once, with no "takes a few seconds" first and
+    # no class name or file prefix, and points to where the figures are
+    lines = ['schema = 1', 'title = "long rail"', 'tags = ["not-rack"]', '[beam]',
+             'length = "48 ft"', 'section = "HSS3x2x3/16"', 'material = "A500-C"']
+    for x in range(0, 49, 4):
+        lines += ['[[supports]]', f'at = "{x} ft"', f'type = "{"pin" if x == 0 else "roller"}"']
+    for i in range(30):
+        lines += ['[[loads]]', 'type = "point"', f'at = "{1 + 1.5 * i} ft"', 'value = "-20 lbf"']
+    path = tmp_path / "long.toml"
+    path.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=(100, 40)) as pilot:
+        await settle(pilot)
+        await app.workers.wait_for_complete()
+        await goto(pilot, "9")
+        await pilot.pause()
+        text = " ".join(text_of(app, "#calc-body").split())
+        assert "No exact calc sheet for this job" in text and "more than 60" in text
+        assert "few seconds (" in text  # the limit's own words, not the busy line
+        assert "Working out" not in text and "InputError" not in text
+        assert "long.toml" not in text
+
+
+@sync
 async def test_picking_a_catalog_section_from_type_ahead():
     app = make_app(PRESETS / "demo.toml", cursor_blink=False)
     async with app.run_test(size=SIZE) as pilot:

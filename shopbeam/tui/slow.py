@@ -21,6 +21,7 @@ from textual.widgets import Button, OptionList, Static
 from textual.widgets.option_list import Option
 
 from shopbeam import units
+from shopbeam.errors import InputError
 from shopbeam.jobs import library, storage
 from shopbeam.tui.views import CHECKING_EDIT, View, problems_text, rows_in_words
 from shopbeam.tui.widgets import Choice, fit_text
@@ -68,6 +69,11 @@ class _SheetView(View):
             body.update(Text(fit_text(problems_text(ev), width)))
             self._for = None
             return
+        refused = self.refused(ev.job)
+        if refused:  # known before any work: said at once, with no "working out" first
+            body.update(Text(fit_text(refused, width)))
+            self._for = self._out = None
+            return
         text = session.doc.text()
         was = getattr(self, "_for", None)
         if was == (text, width):
@@ -92,11 +98,18 @@ class _SheetView(View):
     def produce(self, job, result, width: int) -> str:  # pragma: no cover - each view's own
         raise NotImplementedError
 
+    def refused(self, job) -> str:
+        """Why this view's sheet is not made for the job, where that is known before any
+        work ("" to make it)."""
+        return ""
+
     @work(thread=True, exclusive=True, group="sheet", exit_on_error=False)
     def make(self, job, result, text: str, width: int) -> None:
         self._made_from = (job, result, text)
         try:
             out = self.produce(job, result, width)
+        except InputError as exc:  # the job's own limit: its words, not a class name
+            out = f"This could not be worked out: {exc.problem.message}"
         except Exception as exc:  # noqa: BLE001 - show it, do not crash the screen
             out = f"This could not be worked out: {type(exc).__name__}: {exc}"
         self.app.call_from_thread(self._done, text, width, fit_text(out, width))
@@ -212,6 +225,15 @@ class CalcView(_SheetView):
         from shopbeam.output.calcsheet import calc_sheet  # noqa: PLC0415 - startup
 
         return calc_sheet(job, result, width)
+
+    def refused(self, job) -> str:
+        """A job past the calc sheet's size (`limits.calc_problem`): said at once."""
+        from shopbeam.jobs.limits import calc_problem  # noqa: PLC0415 - startup
+
+        beam = job.beam()
+        why = calc_problem(beam.supports, beam.loads)
+        return (f"No exact calc sheet for this job: {why[0].upper()}{why[1:]}. The Results "
+                "and Plots views (and the report) have every figure." if why else "")
 
 
 class RatingView(_SheetView):
