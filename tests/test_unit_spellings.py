@@ -131,3 +131,32 @@ def test_an_unreadable_value_gets_an_example_of_its_own_kind(kind, example):
 ])
 def test_pint_unit_names_read_as_pint_reads_them(text, kind, expected):
     assert units.parse(text, kind) == pytest.approx(expected, rel=1e-12)
+
+
+@pytest.mark.parametrize("width, inches", [("16 in o.c.", 16.0), ('16" OC', 16.0),
+                                           ("24 in on center", 24.0), ("24 in o.c", 24.0),
+                                           ("400 mm c/c", 400 / 25.4),
+                                           ("600 mm centres", 600 / 25.4)])
+def test_a_tributary_width_written_as_a_joist_spacing_reads_as_that_spacing(width, inches):
+    # joists are spaced "16 in o.c." (on centre) in every shop's words: the width a load per
+    # area acts over is that spacing (it was refused as an unknown unit, exit 2)
+    from shopbeam.jobs.jobfile import parse_job_text
+    job = parse_job_text(  # a TOML literal string: the inch mark needs no escape
+        'schema = 1\ntitle = "joist"\ntags = ["not-floor"]\n[beam]\nlength = "10 ft"\n'
+        'section = "2x10"\nmaterial = "DF-L-2"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n'
+        '[[supports]]\nat = "10 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\n'
+        f"value = \"-40 psf\"\nwidth = '{width}'\n")
+    w = job.loads[0].w1  # N/m: 40 psf x the spacing
+    assert w == pytest.approx(-40 * 47.880259 * inches * 0.0254, rel=1e-6)
+
+
+def test_a_width_of_only_spacing_words_is_still_refused():
+    from shopbeam.errors import InputErrors
+    from shopbeam.jobs.jobfile import parse_job_text
+    with pytest.raises((InputError, InputErrors)) as exc:
+        parse_job_text(
+            'schema = 1\ntitle = "joist"\n[beam]\nlength = "10 ft"\nsection = "2x10"\n'
+            'material = "DF-L-2"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "10 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-40 psf"\n'
+            'width = "o.c."\n')
+    assert "width" in str(exc.value)

@@ -1691,7 +1691,7 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
             r.error("give both intensities per length or both per area", f"{key}.value")
             return None
     if area:
-        width = r.parse(ld, "width", "length", f"{key}.width", positive=True)
+        width = r.parse(_spaced(ld), "width", "length", f"{key}.width", positive=True)
         if "width" not in ld:
             r.problems[-1] = Problem(
                 "a load per area needs the tributary width it acts over (width = \"16 in\", "
@@ -1702,7 +1702,7 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
         r.widths[key] = width
         raw = ld["value"] if kind == "uniform" else " to ".join(ld["value"])
         conversions.append((key, f"{raw} x {ld['width']} tributary width", w1 if kind == "uniform" else None))
-    elif "width" in ld and r.parse(ld, "width", "length", f"{key}.width", positive=True) is None:
+    elif "width" in ld and r.parse(_spaced(ld), "width", "length", f"{key}.width", positive=True) is None:
         pass  # not a length at all: said as a problem (a stray word is not an ignored width)
     elif "width" in ld:
         # a width beside a load per length is most often a load per area typed per foot
@@ -1727,6 +1727,20 @@ def _read_load(r: _Reader, i: int, ld, length, conversions: list) -> Load | None
 
 # Where each load type is placed and sized: a key of another type's would be read and
 # silently dropped (a point load's `total`, a uniform load's `at`)
+# a tributary width written as joists are spaced: "16 in o.c.", "16\" OC", "24 in on center",
+# "400 mm c/c", "600 mm centres": the spacing is the width
+_ON_CENTRES = re.compile(r"\s*(?:o\.\s?c\.?|oc\.?|on\s+cent(?:er|re)s?|c\s?/\s?c|"
+                         r"cent(?:er|re)s|crs\.?)\s*$", re.IGNORECASE)
+
+
+def _spaced(ld: dict) -> dict:
+    """The load's table with its width read as a spacing ("16 in o.c." is 16 in)."""
+    w = ld.get("width")
+    if isinstance(w, str) and _ON_CENTRES.search(w) and _ON_CENTRES.sub("", w).strip():
+        return {**ld, "width": _ON_CENTRES.sub("", w)}
+    return ld
+
+
 _PLACEMENT = {"point": ("at",), "moment": ("at",), "uniform": ("start", "end", "total", "width"),
               "linear": ("start", "end", "width")}
 
