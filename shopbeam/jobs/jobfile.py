@@ -539,7 +539,17 @@ class _Reader:
                           "end, AISC 360-16 B4.3 and J4 for holes), or remove the key if it is "
                           "not cut", path)
                 continue
-            if here == "supports" and _SETTLE_KEY.search(str(k)):
+            if here == "supports" and _SETTLE_KEY.search(str(k)) \
+                    and not _NOT_SETTLE_KEY.search(str(k)) \
+                    and not getattr(self, "settles_matter", True):
+                path = f"{prefix}.{k}" if prefix else k
+                self.warn(f"{k!r} in {label} reads as a settlement of the support, which "
+                          "shopbeam does not model; on a member held at two points with no "
+                          "fixed end a settlement only tilts it (no moment or shear), so the "
+                          "checks stand. Remove the key if it is something else", path)
+                continue
+            if here == "supports" and _SETTLE_KEY.search(str(k)) \
+                    and not _NOT_SETTLE_KEY.search(str(k)):
                 path = f"{prefix}.{k}" if prefix else k
                 self.hold(f"{k!r} in {label} reads as a settlement of the support (it drops "
                           "by a set amount), which shopbeam does not model: in a member "
@@ -690,6 +700,11 @@ def _table_slip(k: str, value, here: str) -> str:
 _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes?|cut_?outs?|"
                       r"openings?|slots?|slotted|penetrations?|bored|drilled|drilling)"
                       r"(?:$|[_\- ])", re.IGNORECASE)
+
+# ... unless it names a hanger, rod or length ("hanger_drop", "drop_rod", "rod_length": how far
+# the member hangs below what holds it, not a settlement)
+_NOT_SETTLE_KEY = re.compile(r"hangers?|rods?|lengths?|heights?|elevations?|levels?",
+                             re.IGNORECASE)
 
 # An unknown key of a support that reads like a settlement (a drop of the support given)
 _SETTLE_KEY = re.compile(r"(?:^|[_-])(?:settle(?:ment|s|d)?|settling|sinks?|sinking|"
@@ -2985,6 +3000,23 @@ def _mixed_units(r: _Reader, raw_loads, loads) -> None:
             r.warn(words, key)
 
 
+# a point mass (kg, t) or a pressure in kPa: each reads heavier than the US unit it could be
+# typed for (lb, psf)
+_MASS_POINT = re.compile(r"\d\s*(?:kg|kgs|kilo(?:gram)?s?|t|tonnes?)\s*$", re.IGNORECASE)
+_KPA = re.compile(r"\d\s*kpa\s*$", re.IGNORECASE)
+_LABEL_KG = re.compile(r"(\d+(?:\.\d+)?)\s*(?:kg|kgs|kilo(?:gram)?s?)\b", re.IGNORECASE)
+
+
+def _label_mass_agrees(ld) -> bool:
+    """Whether the load's label gives a mass (kg) whose weight is the force typed, within 5 %
+    ("chain block, 9 kg" beside "-90 N"): the newtons are meant."""
+    m = _LABEL_KG.search(ld.label or "")
+    if not m:
+        return False
+    w = float(m.group(1)) * units.G0
+    return w > 0 and abs(abs(ld.total_force) - w) <= 0.05 * w
+
+
 def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
                      lifting: bool = False) -> None:
     """A dead load typed in metric force units on a job in US units (N for lbf is 4.45 times
@@ -3015,6 +3047,18 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
         metric = [v for v in texts if _SI_FORCE.search(v) or units.unit_systems(v) == {"metric"}]
         if system == "us" and metric and ld.kind != "moment":
             said = ", ".join(f'"{v}"' for v in metric)
+            heavier = ld.case == "dead" and all(
+                (_MASS_POINT if ld.kind == "point" else _KPA).search(v) for v in metric)
+            if heavier:
+                # a mass in kg (t) for lb, a kPa for psf: read heavier than the US unit it
+                # could be mistaken for, so the dead load held fixed errs on the safe side
+                r.warn(f"{name} is a dead load typed in metric units ({said}) on a job in US "
+                       f"units: read as {units.fmt(abs(ld.total_force), 'force', system)}. "
+                       "Typed for lb or psf, it would read heavier than meant (1 kg = 2.2 lb, "
+                       "1 kPa = 20.9 psf), which errs on the safe side; write it in lbf (psf) "
+                       "to keep the job in one system",
+                       f"{ld.key}.value")
+                continue
             if ld.case == "dead":
                 r.hold(f"{name} is a dead load typed in metric units ({said}) on a job in US "
                        "units: if lbf or lbf/ft was meant, it is 4.45 times too light, and the "
@@ -3026,7 +3070,7 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
             continue
         if system == "si" and ld.case == "dead" and ld.kind == "point" and kn_live and \
                 lifting and any(_PLAIN_NEWTON.search(v) for v in texts) and \
-                n_dead < live_max / 50:
+                n_dead < live_max / 50 and not _label_mass_agrees(ld):
             # "-40 N" for a 40 kg hoist beside a hook load in kN: 9.81 times too light (a
             # hoist and trolley weigh some 5 to 10 % of what they lift; a light fixture in N
             # beside a shelf's load in kN is real, so only a lifting job's hoist is held)
@@ -4756,7 +4800,11 @@ _CUT_WORDS = re.compile(
     r"(?<!\bno )(?<!\bnot )(?<!\bwithout )(?<!\bnever )(?<!\bteardrop )"
     r"\b(coped|copes?|coping|notch(?:ed|es)?|holes?|drilled(?![- ]in\b)|bored|cut-?outs?|"
     r"slotted|slots?|openings? in the (?:web|flange)|penetrations?)\b"
-    r"(?! (?:in|on) the (?:uprights?|posts?|columns?|walls?|slab|floor)\b)", re.IGNORECASE)
+    # ...nor the holes or slots of what the member is fixed to ("bolted through slotted holes
+    # in the column flange")
+    r"(?!(?: holes?| slots?)? (?:in|on|of|through) (?:the |a |an )?(?:uprights?|posts?|columns?|"
+    r"walls?|slab|floor|cap plates?|base plates?|clips?|brackets?|angles?|tabs?)\b)",
+    re.IGNORECASE)
 
 
 def _cut_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
@@ -4778,13 +4826,40 @@ def _cut_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
            f"weakens. Have the cut checked, or add the tag \"{NOT_CUT}\" if it is not cut")
 
 
-def _rack_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
+# where the racks are, not what the member is ("a lean-to over the lumber racks", "the hoist
+# runs above the die racks")
+_RACK_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|next to|near|"
+                         r"by|past|around|between|along|alongside|in front of|opposite) "
+                         r"(?:the |a |an |our |two |three |four )?(?:[\w-]+ ){0,2}?"
+                         r"(?:racks?|racking)\b", re.IGNORECASE)
+# a plant's equipment skid, named so once: the job's other "skid" words are that skid
+_EQUIPMENT_SKID = re.compile(r"\b(?:chiller|pump|equipment|compressor|process|tank|generator|"
+                             r"boiler|fan|motor|heater|filter|unit|handler|ahu|hvac|"
+                             r"machine|welder) skids?\b|\bskid[- ]mounted\b", re.IGNORECASE)
+
+
+def _rack_hint(r: _Reader, title, notes, tags, raw_loads, lifting: bool = False,
+               vehicle: str = "") -> None:
     """A job that reads like a storage rack ("pallet rack beam", "racking") but is not
     tagged one is warned: the rack cautions (the impact load is not added unless given) and
     the rating label's per-level wording are for rack-tagged jobs. The tag ``not-rack`` says
-    it is not one."""
-    if RACK_TAGS.intersection(tags) or NOT_RACK in tags:
+    it is not one. A lifting device (a hoist beam over the die racks) and a member of a
+    vehicle (a headache rack, a skid steer's pallet forks) are not storage racks, and words
+    that say where the racks are ("over the lumber racks") do not name the member."""
+    if RACK_TAGS.intersection(tags) or NOT_RACK in tags or lifting or vehicle:
         return
+    title = _RACK_PLACE.sub(" ", _as_words(title)) if isinstance(title, str) else title
+    notes = _RACK_PLACE.sub(" ", _as_words(notes)) if isinstance(notes, str) else notes
+    if _EQUIPMENT_SKID.search(" | ".join(_as_words(t) for t in (title, notes)
+                                         if isinstance(t, str))):
+        tags = [t for t in tags if not (isinstance(t, str) and re.fullmatch(
+            r"skids?", _as_words(t).strip(), re.IGNORECASE))]
+        title, notes = (re.sub(r"\bskids?\b", " ", t, flags=re.IGNORECASE)
+                        if isinstance(t, str) else t for t in (title, notes))
+        raw_loads = [{**ld, "label": re.sub(r"\bskids?\b", " ", ld["label"],
+                                            flags=re.IGNORECASE)}
+                     if _is_table(ld) and isinstance(ld.get("label"), str) else ld
+                     for ld in (raw_loads if isinstance(raw_loads, list) else ())]
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
     floor = _search(_FLOOR_WORDS, " | ".join(_as_words(t) for t in (title, notes)))
     if not said and not floor and \
@@ -5261,8 +5336,17 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> 
                "NDS 4.3.8, not applied). Add the tag \"not-incised\" if it is not")
 
 
+# the short-lived loads a duration over ten years is for (NDS 2018 Table 2.3.2), as a live
+# load's label names them: (pattern, in words)
+_DURATION_LOADS = {"two-months": (re.compile(r"\bsnow\b", re.IGNORECASE), "snow"),
+                   "seven-days": (re.compile(r"\bconstruction\b", re.IGNORECASE),
+                                  "construction load"),
+                   "ten-minutes": (re.compile(r"\b(?:wind|gusts?|earthquake|seismic)\b",
+                                              re.IGNORECASE), "wind or earthquake")}
+
+
 def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="",
-               notes="", more=()):
+               notes="", more=(), raw_loads=(), moving=False):
     """The wood member's service keys ([beam] wet_service, temperature, repetitive;
     [criteria] duration); a wood material comes back with
     the reference values of this member's size class and E' (see members.wood)."""
@@ -5310,7 +5394,21 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="
                 r.warn(f"{k} is not applied: the NDS factors need a rectangular wood section "
                        "(a lumber size, or shape = \"rect-bar\"), and this one is given by its "
                        "properties, so the job is NOT RATED", f"{where}.{k}")
-    if wood.DURATIONS.get(dur, (1.0,))[0] > 1.0:
+    live = [ld for ld in (raw_loads if isinstance(raw_loads, list) else ())
+            if _is_table(ld) and str(ld.get("case", "live")).strip().lower() != "dead"]
+    what = _DURATION_LOADS.get(dur)
+    named = what is not None and live and not moving and all(
+        isinstance(ld.get("label"), str) and re.search(what[0], _as_words(ld["label"]))
+        for ld in live)
+    if wood.DURATIONS.get(dur, (1.0,))[0] > 1.0 and named:
+        # every live load is the short-lived load that duration is for (a roof's snow): the
+        # figure posted is that load, which does come and go
+        cd, words = wood.DURATIONS[dur]
+        r.warn(f"duration = \"{dur}\" takes CD {cd:g} (NDS 2018 Table 2.3.2: {words}) for the "
+               f"live loads, each labelled as {what[1]}: the figure posted is the {what[1]} the "
+               "member may carry, not a load left on it (stock or equipment placed and left is "
+               "a ten-year load: rate it with duration = \"ten-years\")", "criteria.duration")
+    elif wood.DURATIONS.get(dur, (1.0,))[0] > 1.0:
         cd, words = wood.DURATIONS[dur]
         r.hold(f"duration = \"{dur}\" takes CD {cd:g} (NDS 2018 Table 2.3.2: {words}), so the "
                f"wood is credited {cd:g} times its ten-year strength. That holds for a load "
@@ -5551,7 +5649,8 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         more += [v for v in (data.get("project") or {}).values() if isinstance(v, str)] \
             if _is_table(data.get("project")) else []
         material, wood_service = _wood_keys(r, beam, data.get("criteria"), material, section,
-                                            tags, title, notes, more)
+                                            tags, title, notes, more, data.get("loads"),
+                                            bool(data.get("moving")))
         material = _thick_6063_t5(r, material, section)
         self_weight = beam.get("self_weight", True)
         if not isinstance(self_weight, bool):
@@ -5609,6 +5708,12 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     if len(sups) > MAX_SUPPORTS:
         r.error(f"{len(sups)} supports is more than shopbeam takes ({MAX_SUPPORTS})", "supports")
         sups = []
+    # a settlement matters only where the member is held at more than two points or at a
+    # fixed end (unknown_keys reads this for a key that reads as one)
+    held = [x for x in sups if _is_table(x) and str(x.get("type", "")).strip().lower()
+            not in ("hinge",)]
+    r.settles_matter = len(held) > 2 or any(
+        str(x.get("type", "")).strip().lower() == "fixed" for x in held)
     for i, s in enumerate(sups):
         sup = _read_support(r, i, s, length)
         if sup is not None:
@@ -5823,7 +5928,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
                                  is_lifting(tags, criteria.lifting))
     vehicle = "" if NOT_VEHICLE in tags else "; ".join(  # a truck crane's boom too
         _words_found(_VEHICLE_WORDS, title, notes, tags, raw_loads)[:3])
-    _rack_hint(r, title, notes, tags, raw_loads)
+    _rack_hint(r, title, notes, tags, raw_loads, is_lifting(tags, criteria.lifting), vehicle)
     _rack_fixed_ends(r, tags, supports, length)
     _glulam_words(r, title, notes, tags, material, data)
     _length_in_other_units(r, data)

@@ -1,0 +1,208 @@
+"""Correct shop jobs that the word and unit rules must not hold back (a false alarm costs the
+shop's trust in every other message), each beside the slip the same rule still catches."""
+
+from __future__ import annotations
+
+import pytest
+
+from shopbeam.design.capacity import capacity
+from shopbeam.jobs.jobfile import parse_job_text
+
+HOIST = """schema = 1
+title = "{title}"
+notes = "{notes}"
+units = "{system}"
+tags = ["lifting", "monorail"]
+[beam]
+length = "{length}"
+section = "{section}"
+material = "{material}"
+[[supports]]
+at = "0 {u}"
+type = "pin"
+brace = true
+{extra}
+[[supports]]
+at = "{length}"
+type = "roller"
+brace = true
+{extra}
+[[loads]]
+type = "point"
+at = "{mid}"
+value = "{live}"
+label = "rated load"
+flange = "bottom"
+[[loads]]
+type = "point"
+at = "{mid}"
+value = "{dead}"
+label = "{dead_label}"
+case = "dead"
+flange = "bottom"
+[criteria]
+lifting = "hand-geared-monorail"
+"""
+
+
+def hoist(**kw) -> str:
+    us = dict(title="Monorail, W8x18, 16 ft", notes="End stops at both ends.", system="us",
+              length="16 ft", section="W8x18", material="A992", u="ft", extra="", mid="8 ft",
+              live="-2000 lbf", dead="-50 lbf", dead_label="hoist and trolley")
+    return HOIST.format(**{**us, **kw})
+
+
+def held(text: str, words: str) -> list[str]:
+    return [r for r in capacity(parse_job_text(text)).not_rated if words in r]
+
+
+def test_a_hanger_rod_key_on_a_support_is_not_a_settlement():
+    # "hanger_drop": how far the beam hangs below the joists, not a drop of the support
+    text = hoist(extra='hanger_drop = "24 in"')
+    job = parse_job_text(text)
+    assert not held(text, "settlement")
+    assert [w for w in job.warnings if "unknown key 'hanger_drop'" in w.message]
+
+
+def test_a_settlement_key_holds_only_where_a_settlement_adds_moment():
+    # two pins, no fixed end: a settlement only tilts the member (statics), so it is warned;
+    # a third support (or a fixed end) makes it add moment, and it is held
+    two = hoist(extra='settlement = "1/4 in"')
+    assert not held(two, "settlement")
+    assert [w for w in parse_job_text(two).warnings if "only tilts it" in w.message]
+    three = two.replace('[[loads]]', '[[supports]]\nat = "12 ft"\ntype = "roller"\n'
+                        'brace = true\n[[loads]]', 1)
+    assert held(three, "settlement")
+
+
+def test_a_kg_hoist_weight_on_a_us_job_is_warned_not_held_and_n_for_lbf_still_is():
+    # 24 kg typed for 24 lb reads 2.2 times heavier: a dead load held fixed errs on the safe
+    # side (the label names the same 24 kg); N for lbf reads 4.45 times lighter: held
+    kg = hoist(dead="-24 kg", dead_label="hoist and trolley (24 kg)")
+    assert not held(kg, "metric units")
+    said = [w for w in parse_job_text(kg).warnings if "metric units" in w.message]
+    assert said and "safe side" in said[0].message and "52.91 lbf" in said[0].message
+    assert held(hoist(dead="-200 N"), "metric units")
+
+
+def test_a_chain_block_in_n_whose_label_gives_its_mass_is_not_held():
+    # 9 kg x 9.81 = 88.3 N: "-90 N" beside a 4.905 kN hook load is the block's weight as
+    # its label says; the same figure with no mass in the label is held (kg typed as N?)
+    si = dict(system="si", length="4 m", section="IPE200", material="S275", u="m",
+              mid="2 m", live="-4.905 kN")
+    named = hoist(**si, dead="-90 N", dead_label="chain block, 9 kg")
+    assert not held(named, "dead load in N")
+    assert held(hoist(**si, dead="-90 N", dead_label="chain block"), "dead load in N")
+    # a label whose mass does not match the newtons is no help
+    assert held(hoist(**si, dead="-90 N", dead_label="chain block, 90 kg"), "dead load in N")
+
+
+RACKISH = """schema = 1
+title = "{title}"
+notes = "{notes}"
+units = "us"
+tags = {tags}
+[beam]
+length = "7 ft"
+section = "C6x8.2"
+material = "A36"
+restrained = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "7 ft"
+type = "roller"
+[[loads]]
+type = "point"
+at = "2 ft"
+value = "-450 lbf"
+label = "{label}"
+case = "dead"
+[[loads]]
+type = "point"
+at = "3 ft 6 in"
+value = "-250 lbf"
+label = "mechanic standing on it"
+"""
+
+
+@pytest.mark.parametrize("title, notes, tags, label, rack", [
+    # an equipment skid named once: its other "skid" words are that skid
+    ("Compressor skid side rail", "mechanic standing on the skid", '["skid"]',
+     "compressor foot", False),
+    # where the racks are is not what the member is
+    ("Lean-to rafter", "Lean-to over the lumber racks", "[]", "roofing", False),
+    ("Walkway beam", "runs beside the pallet racks", "[]", "grating", False),
+    # a member of a vehicle
+    ("Flatbed headache rack crossbar", "", "[]", "rack tube", False),
+    # still a rack
+    ("Lumber rack arm", "", "[]", "lumber", True),
+    ("Storage beam", "pallets two high", "[]", "pallet", True),
+    ("Skid rail", "skids of castings stored here", "[]", "skid", True),
+])
+def test_rack_words_that_name_a_place_a_plant_skid_or_a_vehicle_do_not_hold(
+        title, notes, tags, label, rack):
+    text = RACKISH.format(title=title, notes=notes, tags=tags, label=label)
+    assert bool(held(text, "storage rack")) == rack
+
+
+def test_a_lifting_job_is_not_held_as_an_untagged_storage_rack():
+    text = hoist(title="Die rack monorail, W8x18, 16 ft")
+    assert not held(text, "storage rack")
+
+
+@pytest.mark.parametrize("notes, cut", [
+    ("Arm bolted to the column through slotted holes in the column flange.", False),
+    ("Bolted through slotted holes in the cap plate.", False),
+    ("Slotted holes in the arm for the stop pin.", True),
+    ("Coped end at the column.", True),
+])
+def test_holes_in_what_the_member_is_fixed_to_do_not_make_it_a_cut_member(notes, cut):
+    text = RACKISH.format(title="Machine base rail", notes=notes, tags='["not-rack"]',
+                          label="machine foot")
+    assert bool(held(text, "cut member")) == cut
+
+
+ROOF = """schema = 1
+title = "Rafter over the lean-to, 2x8 SYP"
+units = "us"
+tags = ["roof"]
+[beam]
+length = "10 ft"
+section = "2x8"
+material = "SYP-2"
+braced = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "10 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-20 psf"
+width = "24 in"
+label = "{label}"
+[[loads]]
+type = "uniform"
+value = "-5 psf"
+width = "24 in"
+label = "roofing"
+case = "dead"
+[criteria]
+duration = "{duration}"
+"""
+
+
+@pytest.mark.parametrize("label, duration, hold", [
+    ("snow", "two-months", False),          # NDS 2018 Table 2.3.2: CD 1.15 is for snow
+    ("ground snow drift", "two-months", False),
+    ("stored lumber", "two-months", True),  # a posted load left on the member: ten years
+    ("snow", "ten-minutes", True),          # CD 1.6 is for wind or earthquake, not snow
+    ("wind uplift", "ten-minutes", False),
+])
+def test_a_duration_over_ten_years_rates_where_every_live_load_is_that_short_load(
+        label, duration, hold):
+    text = ROOF.format(label=label, duration=duration)
+    assert bool(held(text, f'duration = "{duration}"')) == hold
