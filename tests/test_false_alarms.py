@@ -206,3 +206,130 @@ def test_a_duration_over_ten_years_rates_where_every_live_load_is_that_short_loa
         label, duration, hold):
     text = ROOF.format(label=label, duration=duration)
     assert bool(held(text, f'duration = "{duration}"')) == hold
+
+
+BRACKET = """schema = 1
+title = "{title}"
+notes = "{notes}"
+units = "us"
+tags = ["bracket", "cantilever"]
+[beam]
+length = "20 in"
+section = "{section}"
+material = "A36"
+restrained = true
+[[supports]]
+at = "0 in"
+type = "fixed"
+[[loads]]
+type = "point"
+at = "18 in"
+value = "-120 lbf"
+label = "{label}"
+"""
+
+
+@pytest.mark.parametrize("notes, lifting", [
+    ("Two ladders hung on the hook at the tip.", False),
+    ("Hoses stored on a hook at the tip.", False),
+    ("Chain hoist hangs here; the load on the hook is 120 lb.", True),
+])
+def test_a_storage_hook_is_not_a_lifting_device(notes, lifting):
+    text = BRACKET.format(title="Ladder storage bracket", notes=notes, section="HSS2x2x1/8",
+                          label="ladders").replace('"A36"', '"A500-C"')
+    assert bool(held(text, "lifting device")) == lifting
+
+
+def test_a_bar_said_to_stand_on_edge_but_read_flat_is_told_which_way_it_is_read():
+    # "3/8 x 3" is read 3/8 in deep, flat: several times weaker than on edge (S = b h^2 / 6:
+    # 0.0703 in^3 against 0.5625 in^3), on the safe side but far from what was meant
+    text = BRACKET.format(title="Hose reel bracket", notes="3/8 x 3 flat bar standing on edge.",
+                          section="rect-bar 3/8 x 3", label="hose reel")
+    said = [w for w in parse_job_text(text).warnings if "read FLAT" in w.message]
+    assert said and "3 in deep by 0.375 in wide" in said[0].message
+    # written depth first: on edge, nothing to say
+    edge = text.replace("rect-bar 3/8 x 3", "rect-bar 3 x 3/8")
+    assert not [w for w in parse_job_text(edge).warnings if "read FLAT" in w.message]
+
+
+TROLLEY = """schema = 1
+title = "Press die hoist beam, W8x18, 12 ft, short travel"
+notes = "{notes}"
+units = "us"
+tags = ["lifting", "hoist"]
+[beam]
+length = "12 ft"
+section = "W8x18"
+material = "A992"
+[[supports]]
+at = "0 ft"
+type = "pin"
+brace = true
+[[supports]]
+at = "12 ft"
+type = "roller"
+brace = true
+[[moving]]
+label = "push trolley"
+loads = ["-1000 lbf", "-1000 lbf"]
+dead = ["-50 lbf", "-50 lbf"]
+spacing = ["6 in"]
+travel = ["57 in", "87 in"]
+[criteria]
+lifting = "hand-geared-monorail"
+"""
+
+
+@pytest.mark.parametrize("notes, slip", [
+    ("Trolley stops bolted at 57 in and 87 in keep the hoist over the die area.", False),
+    ("Trolley stops keep the hoist over the die area.", True),  # inches for feet?
+])
+def test_a_short_travel_in_inches_that_the_words_give_in_inches_is_meant(notes, slip):
+    assert bool(held(TROLLEY.format(notes=notes), "feet meant")) == slip
+
+
+CUSTOM_WOOD = """schema = 1
+title = "Drying shed shelf joist, western red cedar 2x6"
+notes = "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors."
+units = "us"
+tags = ["shelf"]
+[beam]
+length = "6 ft"
+section = "2x6"
+repetitive = true
+braced = true
+{material}
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-40 psf"
+width = "16 in"
+label = "parts"
+[criteria]
+duration = "ten-years"
+"""
+
+
+def test_typed_in_wood_values_are_the_grade_the_notes_name():
+    typed = ('[beam.material]\nkind = "lumber"\ne = "1000000 psi"\nfb = "700 psi"\n'
+             'fv = "155 psi"\nfc_perp = "425 psi"\ndensity = "23 lb/ft^3"')
+    assert not held(CUSTOM_WOOD.format(material=typed), "grade")
+    # a catalogue grade that disagrees with the notes is still held
+    assert held(CUSTOM_WOOD.format(material='material = "DF-L-SS"'), "grade")
+
+
+@pytest.mark.parametrize("notes, hot", [
+    ("The heat-treat oven is on the far wall, 40 ft away.", False),
+    ("The heat-treat oven is 40 ft away.", False),
+    ("Loft over the heat-treat oven, near the door.", True),
+    ("Over the oven, 3 ft away.", True),
+])
+def test_a_distance_from_the_heat_after_a_comma_is_said_of_that_heat(notes, hot):
+    text = CUSTOM_WOOD.format(material='material = "DF-L-2"').replace(
+        "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.", notes)
+    assert bool(held(text, "temperature")) == hot

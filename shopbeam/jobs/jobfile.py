@@ -1862,6 +1862,18 @@ def _said_laid_flat(r: _Reader, section, axis, title, notes, tags=()) -> None:
         return
     d = getattr(section, "dims", {}) or {}
     h, b = d.get("h"), d.get("b")
+    if h and b and b > 1.5 * h and _words_found(_ON_EDGE, title, notes, (), ()) \
+            and not _words_found(_LAID_FLAT, title, notes, (), ()):
+        # the mirror: said to stand on edge, read flat (a "3/8 x 3" bar written thickness
+        # first): on the safe side, but its figure is a fraction of what was meant
+        f = lambda x: units.fmt(x, "small_length", r.system)  # noqa: E731
+        edge = _words_found(_ON_EDGE, title, notes, (), ())[0]
+        r.warn(f"the job says the member stands on edge ({edge}), but "
+               f"{section.designation!r} is read FLAT, {f(h)} deep and {f(b)} wide (a size is "
+               "written depth first), several times weaker than on edge. If it stands on edge, "
+               f"write its depth first ({f(b)} deep by {f(h)} wide); if it lies flat, reword "
+               "the notes", "beam.section")
+        return
     if not (h and b and h > 1.5 * b):  # on edge and flat differ little for a squarish bar
         return
     said = [f"tag {t!r}" for t in tags if isinstance(t, str) and _FLAT_TAG.match(t.strip())]
@@ -2630,7 +2642,10 @@ _LIFTING_WORDS = re.compile(
     r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
     r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
     r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?|"
-    r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:on|from|under) (?:the|a) hook|"
+    # ...not a storage hook: "ladders hung on the hook", "hoses stored on a hook"
+    r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:from|under) (?:the|a) hook|"
+    r"(?<!hung )(?<!hang )(?<!hangs )(?<!hanging )(?<!stored )(?<!stowed )(?<!kept )"
+    r"(?<!hung up )on (?:the|a) hook|"
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
     r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
     r"pallet|bar) lifters?|lifters?|magnet beams?|booms?(?! ?box(?:es)?\b)|tackle beams?|"
@@ -2902,6 +2917,15 @@ def _says_length(words: str, length: float) -> bool:
     return False
 
 
+def _inches_said(travel, words: str) -> bool:
+    """The words give each end of a travel typed in inches, in inches ("trolley stops bolted
+    at 57 in and 87 in" for travel = ["57 in", "87 in"]): the inches are meant."""
+    nums = [m.group(1) for v in travel if isinstance(v, str)
+            for m in [re.match(r"\s*(\d+(?:\.\d+)?)", v)] if m and float(m.group(1)) > 0]
+    return bool(nums) and all(
+        re.search(rf"(?<![\d.]){re.escape(n)}\s*(?:in\b|inch|\"|'')", words) for n in nums)
+
+
 def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
                      words: str = "") -> None:
     """A lifting job's wheel set with its axles feet apart, or its travel typed in inches
@@ -2927,7 +2951,8 @@ def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
                 and any(isinstance(v, str) and re.search(r"\d\s*(?:in\b|inch|\"|'')", v)
                         for v in tr) \
                 and not any(isinstance(v, str) and re.search(r"ft\b|feet|foot|\d\s*'(?!')", v)
-                            for v in tr):  # "1 ft 4 in" is feet and inches, not a slip
+                            for v in tr) \
+                and not _inches_said(tr, said):  # "1 ft 4 in" is feet and inches, not a slip
             got = ", ".join(f'"{v}"' for v in tr)
             r.hold(f"travel = [{got}] lets the hoist run over only "
                    f"{units.fmt(span, 'length', system)} of the "
@@ -4975,8 +5000,9 @@ def _grade_words(r: _Reader, material, title, notes) -> None:
     Structural's Fb is 1.7 times No.2's (NDS Supplement Table 4A, from memory). Warned, and
     no rating is posted while they disagree."""
     key = getattr(material, "key", "") or ""
-    if getattr(material, "kind", "") != "lumber" or key.startswith("LVL"):
-        return
+    if getattr(material, "kind", "") != "lumber" or key.startswith("LVL") \
+            or key in ("", "custom"):
+        return  # typed-in values are the grade the job names: nothing to disagree with
     mine = key.rsplit("-", 1)[-1].upper()
     text = " | ".join(str(x) for x in (title, notes) if isinstance(x, str))
     said = set()
@@ -5266,6 +5292,11 @@ _COOL_NEAR = re.compile(r"\b(well away from|far from|(?:under|below) 100|separat
                         re.IGNORECASE)
 
 
+# a phrase that is only a distance from what came before it ("..., 40 ft away")
+_AWAY = re.compile(r"\s*(?:about |some |over |more than )?(?:[1-9]\d*|ten|twenty|thirty|forty|"
+                   r"fifty)\s*(?:ft|feet|m|metres?|meters?) away\b", re.IGNORECASE)
+
+
 def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> None:
     """A wood member whose words say it is wet or hot in service while its keys say nothing:
     held until wet_service or temperature says so either way."""
@@ -5273,10 +5304,20 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> 
     phrases = [p for t in whole
                for p in re.split(r"[.,;:!?()\n]+|\s+-+\s+|\bbut\b", t) if p.strip()]
 
-    def said(words, cancel, near) -> str:
+    # each phrase with the one after it in its sentence: a distance from the heat said just
+    # after a comma ("the oven is on the far wall, 40 ft away") is of that phrase
+    paired = []
+    for t in whole:
+        for sent in re.split(r"[.;:!?()\n]+", t):
+            parts = [p for p in re.split(r",|\s+-+\s+|\bbut\b", sent) if p.strip()]
+            paired += [p + (", " + parts[i + 1] if i + 1 < len(parts)
+                            and _AWAY.match(parts[i + 1]) else "")
+                       for i, p in enumerate(parts)]
+
+    def said(words, cancel, near, pieces=phrases) -> str:
         if any(_search(cancel, t) for t in whole):
             return ""
-        return next((m.group(0) for m in (_search(words, t) for t in phrases
+        return next((m.group(0) for m in (_search(words, t) for t in pieces
                                           if not _search(near, t)) if m), "")
     wet = said(_WET_WORDS, _DRY_WORDS, _DRY_NEAR) or next(
         (m.group(0) for m in (_search(_WET_PLACES, t) for t in whole) if m), "")
@@ -5289,7 +5330,9 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> 
                "beam.wet_service",
                f"the job says {wet!r} but not whether the wood is in wet service. Write "
                "wet_service = true or false")
-    hot = said(_HOT_WORDS, _COOL_WORDS, _COOL_NEAR)
+    # a distance from the heat is said of the whole sentence ("the oven is on the far wall,
+    # 40 ft away")
+    hot = said(_HOT_WORDS, _COOL_WORDS, _COOL_NEAR, paired)
     if hot and "temperature" not in beam:
         r.hold(f"the job says {hot!r}, but [beam] says nothing of its temperature: wood kept "
                "over 100 F takes the temperature factor Ct (NDS 2018 Table 2.3.3, from "
