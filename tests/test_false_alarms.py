@@ -333,3 +333,73 @@ def test_a_distance_from_the_heat_after_a_comma_is_said_of_that_heat(notes, hot)
     text = CUSTOM_WOOD.format(material='material = "DF-L-2"').replace(
         "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.", notes)
     assert bool(held(text, "temperature")) == hot
+
+
+CATWALK = """schema = 1
+title = "{title}"
+notes = "{notes}"
+units = "us"
+tags = {tags}
+[beam]
+length = "6 ft"
+section = "C4x5.4"
+material = "A36"
+braced = true
+restrained = true
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+value = "-50 psf"
+width = "30 in"
+label = "people and tools"
+[[loads]]
+type = "uniform"
+value = "-1 psf"
+width = "30 in"
+label = "{deck}"
+case = "dead"
+"""
+
+
+@pytest.mark.parametrize("deck, warned", [("expanded metal deck", False),
+                                          ("bar grating deck", False),
+                                          ("plywood deck", True),  # 1 psf: a slip for 10?
+                                          ("deck", True)])
+def test_a_steel_catwalk_deck_lighter_than_plywood_is_real(deck, warned):
+    # flattened 3/4 #9 expanded metal weighs about 0.86 psf (maker's tables, from memory)
+    text = CATWALK.format(title="Catwalk joist over the paint booth", notes="",
+                          tags='["catwalk"]', deck=deck)
+    said = [w for w in parse_job_text(text).warnings if "lighter than a 1/2 in plywood" in
+            w.message]
+    assert bool(said) == warned
+
+
+def test_a_trailer_deck_is_not_a_building_floor():
+    # IBC Table 1604.3's floor limits are for buildings: no L/360 under live load added
+    text = CATWALK.format(title="Trailer cross member under the deck boards",
+                          notes="Utility trailer, 6 ft wide.", tags='["not-rack"]',
+                          deck="deck boards").replace('[[loads]]', '[criteria]\n'
+                                                      'impact = "100%"\n[[loads]]', 1)
+    job = parse_job_text(text)
+    assert not [w for w in job.warnings if "read as a floor" in w.message]
+    mezz = parse_job_text(text.replace("Trailer cross member under the deck boards",
+                                       "Mezzanine floor joist").replace(
+        "Utility trailer, 6 ft wide.", ""))
+    assert [w for w in mezz.warnings if "read as a floor" in w.message]
+
+
+@pytest.mark.parametrize("material, hold", [("SP-2", False), ("DF-L-2", True), ("HF-2", True)])
+def test_treated_southern_pine_is_warned_of_incising_and_the_firs_are_held(material, hold):
+    # Southern Pine takes preservative without incising as a rule; Hem-Fir and Douglas
+    # Fir-Larch are nearly always incised (NDS 4.3.8's Ci, from memory)
+    text = CUSTOM_WOOD.format(material=f'material = "{material}"').replace(
+        "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.",
+        "Pressure treated 2x6 shelf, indoors.")
+    assert bool(held(text, "incis")) == hold
+    if not hold:
+        assert [w for w in parse_job_text(text).warnings if "seldom incised" in w.message]

@@ -2395,7 +2395,8 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
         raw = raw_loads[i] if 0 <= i < len(raw_loads) else None
         if ld.kind == "uniform" and ld.case == "dead" and _is_table(raw) \
                 and ld.key in r.widths and (not ld.label or _DECK_WORDS.search(
-                    _as_words(ld.label))) and 0 < abs(ld.w1) / r.widths[ld.key] < LIGHTEST_DECK:
+                    _as_words(ld.label)) and not _LIGHT_DECK.search(_as_words(ld.label))) \
+                and 0 < abs(ld.w1) / r.widths[ld.key] < LIGHTEST_DECK:
             # a deck's weight per area lighter than a plywood deck alone: "-1.2 psf" for
             # "-12 psf", a digit or the decimal point slipped
             area = units.fmt(abs(ld.w1) / r.widths[ld.key], "area_load", system)
@@ -2834,6 +2835,10 @@ _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shel
                               r"headers?|benches?|tanks?|machines?|equipment|scales?)\b",
                               re.IGNORECASE)
 NOT_FLOOR = "not-floor"  # the tag that says a member read as a floor is not one
+# a deck lighter than plywood for real: steel grating, expanded metal, mesh, plate
+_LIGHT_DECK = re.compile(r"\b(?:expanded[- ]metal|gratings?|grates?|mesh|(?:checker|chequer|"
+                         r"diamond|tread|floor|deck) ?plates?|perforated|plank grating|"
+                         r"aluminium|aluminum|steel deck(?:ing)?)\b", re.IGNORECASE)
 
 
 def _floor_said(tags, title="", notes="") -> str:
@@ -2845,7 +2850,9 @@ def _floor_said(tags, title="", notes="") -> str:
         return f"tag {sorted(FLOOR_TAGS.intersection(normal))[0]!r}"
     text = " | ".join(_as_words(t) for t in (title, notes))
     m = _search(_FLOOR_WORDS, text)
-    return f"the words {m.group(0)!r}" if m and not _NOT_FLOOR_WORDS.search(text) else ""
+    # a vehicle's deck (a trailer's deck boards) is not a building floor
+    return f"the words {m.group(0)!r}" if m and not _NOT_FLOOR_WORDS.search(text) \
+        and not _VEHICLE_WORDS.search(text) else ""
 
 
 def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, title="",
@@ -5297,7 +5304,8 @@ _AWAY = re.compile(r"\s*(?:about |some |over |more than )?(?:[1-9]\d*|ten|twenty
                    r"fifty)\s*(?:ft|feet|m|metres?|meters?) away\b", re.IGNORECASE)
 
 
-def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> None:
+def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None,
+                   material=None) -> None:
     """A wood member whose words say it is wet or hot in service while its keys say nothing:
     held until wet_service or temperature says so either way."""
     whole = [_as_words(t) for t in (title, notes, *tags)]
@@ -5366,7 +5374,17 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None) -> 
         preserved = ""  # a timber (5 in and thicker): Ci is for dimension lumber (NDS 4.3.8)
     said_not = any(re.search(r"\b(?:not|no|non|un)[- ]?incis\w*", t, re.IGNORECASE)
                    for t in whole)  # "preservative treated (ACQ), not incised"
-    if preserved and not said_not and not kept & {"untreated", NOT_INCISED}:
+    southern = str(getattr(material, "key", "") or "").upper().startswith(("SP-", "SYP"))
+    if preserved and not said_not and not kept & {"untreated", NOT_INCISED} and southern:
+        # Southern Pine takes preservative without incising as a rule (from memory): said,
+        # with the tag that settles it, and not held
+        r.warn(f"the job says {preserved!r}: Southern Pine is seldom incised to take the "
+               "treatment, and it is checked at its untreated values; if this stock has "
+               "incisions (small slits along its faces), its values take the incising factor "
+               "Ci (NDS 2018 4.3.8: 0.80 on Fb and Fv, 0.95 on E, from memory), which "
+               "shopbeam does not apply. Add the tag \"not-incised\" to say it has none",
+               "title")
+    elif preserved and not said_not and not kept & {"untreated", NOT_INCISED}:
         r.hold(f"the job says {preserved!r}: preservative-treated dimension lumber is often "
                "incised to take the treatment (Hem-Fir and Douglas Fir-Larch nearly always), "
                "and incised lumber takes the incising factor Ci (NDS 2018 4.3.8: 0.80 on Fb, "
@@ -5428,7 +5446,7 @@ def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="
                        f"{where}.{k}")
         return material, None
     service = wood.Service(dur, wet, temp, rep)
-    _service_words(r, beam, title, notes, tuple(tags) + tuple(more), section)
+    _service_words(r, beam, title, notes, tuple(tags) + tuple(more), section, material)
     # a metal shape in wood is refused (_family_mismatch): said once, by that error
     if section is not None and section.shape != "rect-bar" \
             and not catalog.not_made_in(section, material):
