@@ -540,3 +540,30 @@ def test_a_section_of_the_same_weight_as_the_lightest_that_passes_is_listed_besi
     assert len(ties) >= 2, [r.designation for r in ties]
     for r in ties:  # each passes its own full check
         assert max(c.ratio for c in evaluate(replace(job, section=r.section), 1.0).checks) <= 1
+
+
+@pytest.mark.parametrize("live", ["", '[[loads]]\ntype = "uniform"\nvalue = "-10 lbf/ft"\n'
+                                      'label = "snow"\npatterned = true\n'])
+def test_the_lumber_sweep_takes_the_bottom_edge_under_hogging_as_the_report_does(live):
+    # a two-span joist braced on its top (braced = true): each row's ratio and governing
+    # check are the report's own (bending, hogging and its dead load alone at CD 0.9 among
+    # them), so the lightest section listed passes the report's checks
+    from shopbeam.design import sizing
+    from shopbeam.design.analysis import analyze
+    text = ('schema = 1\ntitle = "roof joist"\ntags = ["roof", "not-lifting"]\n[beam]\n'
+            'length = "24 ft"\nsection = "2x10"\nmaterial = "DF-L-2"\nbraced = true\n'
+            'self_weight = false\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "12 ft"\ntype = "roller"\n[[supports]]\nat = "24 ft"\ntype = "roller"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-58 lbf/ft"\nlabel = "roofing"\n'
+            'case = "dead"\n' + live + '[criteria]\nduration = "two-months"\n')
+    job = parse_job_text(text)
+    res = sizing.size(job, "lumber")
+    rows = sizing.shown_rows(res)
+    assert rows
+    for r in rows:
+        checks = analyze(replace(job, section=r.section, material=r.material)).checks
+        worst = max(checks, key=lambda c: c.ratio)
+        assert r.ratio == pytest.approx(worst.ratio, rel=1e-9), r.designation
+        assert r.governing == worst.name, r.designation
+    assert any(r.governing.startswith("bending, hogging") for r in rows)
+    assert res.lightest.designation != "2x10"  # fails its dead load alone at CD 0.9

@@ -1178,8 +1178,14 @@ def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:
 
 def hogging_lengths(job: Job) -> list[tuple[float, float, str]]:
     """(start, end, NDS Table 3.3.3 row) of each length between the points that hold the
-    bottom flange or edge of a member braced on its top only (its supports)."""
+    bottom flange or edge of a member braced on its top only: its supports, and brace points
+    that hold both flanges (`braces` beside `braced = true`, unless `braces_flange = "top"`).
+    The row: a cantilever's by its loads; a length between two held points takes the table's
+    general row (footnote 1), as its rows for single spans are for a span's sagging moment
+    under those loads, not the hogging over a support."""
     held = set(support_braces(job, job.supports))
+    if job.braces and getattr(job, "braces_flange", None) != "top":
+        held |= set(job.braces)
     stops = sorted({0.0, job.length, *held})
     tol = 1e-9 * job.length
     out = []
@@ -1187,7 +1193,7 @@ def hogging_lengths(job: Job) -> list[tuple[float, float, str]]:
         if b - a > tol:
             free = not (any(abs(a - h) <= tol for h in held)
                         and any(abs(b - h) <= tol for h in held))
-            out.append((a, b, wood_load_case(job, a, b, free)))
+            out.append((a, b, wood_load_case(job, a, b, free) if free else "any"))
     return out
 
 
@@ -1349,28 +1355,65 @@ def hogging_check(job: Job, st, dem, big: float, travel: str = "") -> Check | No
     wood = ltb == "NDS"
     rule = "NDS 2018 3.3.3 (CL over the length, Table 3.3.3)" if wood else \
         f"{_LTB_RULES.get(ltb, _LTB_RULES['F2'])[0]} (Lb = the length between supports, Cb 1.0)"
+    case = next((c for x, y, c in hogging_lengths(job) if (x, y) == (a, b)), "any")
+    how = st.flexure.ltb1(b - a, case if wood else "any", job.units)[1]
     return Check(
         HOGGING_CHECK, max(0.0, -least), allow, "N*m",
         f"{rule}: the bottom {part} is in compression where the moment hogs and is held at "
         f"the supports only ({top_words(job)} holds the top): M <= {f(allow, 'moment')} over "
-        f"{f(a)} to {f(b)}" + travel, at,
+        f"{f(a)} to {f(b)}" + (f" ({how})" if how else "") + travel, at,
         detail=f"the bottom {part} of a member braced on its top only. To rate it on the "
         "bending check alone, " + hogging_remedy(job),
         clause=hogging_source(job, st), source=_LTB_RULES.get(ltb, _LTB_RULES["F2"])[1],
-        params={"Lb": b - a, "Cb": 1.0, "Mn_omega": allow})
+        params={"Lb": b - a, "Mn_omega": allow} | ({} if wood else {"Cb": 1.0}))
 
 
 def hogging_checks(job: Job, st, ss, k: float = 1.0) -> list[Check]:
     """`hogging_check` at the factor k (the loads as entered at k = 1) over every load state,
-    where shopbeam works out the strength (`hogging_computed`); none otherwise (the limit
-    state is then listed as not checked, `braced_hogging`)."""
+    and a wood member's dead loads alone at CD 0.9 (`hogging_dead_check`), where shopbeam
+    works out the strength (`hogging_computed`); none otherwise (the limit state is then
+    listed as not checked, `braced_hogging`)."""
     limits = hogging_limits(job, st)
     if not hogging_computed(limits):
         return []
     ss = ss or loading.state_set(job)
     dem, big = hogging_demands(job, st, ss, k, limits)
     c = hogging_check(job, st, dem, big, travel_words(job, ss) if job.moving else "")
-    return [c] if c is not None else []
+    return [x for x in (c, hogging_dead_check(job, st, ss)) if x is not None]
+
+
+HOGGING_DEAD_CHECK = "bending, hogging, dead load"
+
+
+def hogging_dead_check(job: Job, st, ss) -> Check | None:
+    """NDS 2018 2.3.2 for the bottom edge under hogging, as `checks.dead_load_checks` does for
+    bending: the dead loads alone (the live loads off, k = 0) with CD 0.9 (permanent) where the
+    job's duration is shorter, against the edge's strength over each length with its CL
+    worked out again at that Fb*. None where it does not apply or the dead loads do not hog."""
+    fl = st.flexure
+    wf = getattr(fl, "wood", None)
+    if wf is None or fl.ltb is None or fl.ltb[0] != "NDS" or wf.factors["CD"] <= 0.9:
+        return None
+    r = 0.9 / wf.factors["CD"]
+    scaled = replace(fl, cap=fl.cap * r, ltb=("NDS", (wf.fb_star * r,) + fl.ltb[1][1:]))
+    lengths = hogging_lengths(job)
+    got = hogging_allowables(job, scaled, lengths) or []
+    limits = [(a, b, allow) for (a, b, _c), allow in zip(lengths, got) if allow is not None]
+    if not limits:
+        return None
+    dem, big = hogging_demands(job, st, ss, 0.0, limits)
+    if not dem or not any(-d[3] > 0.01 * big for d in dem):
+        return None
+    a, b, allow, least, at = max(dem, key=lambda d: -d[3] / d[2])
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    case = next((c for x, y, c in lengths if (x, y) == (a, b)), "any")
+    how = scaled.ltb1(b - a, case, job.units)[1]
+    return Check(HOGGING_DEAD_CHECK, max(0.0, -least), allow, "N*m",
+                 "dead load alone with CD 0.9 (permanent, NDS 2018 2.3.2, Table 2.3.2), the "
+                 f"bottom edge under hogging held at the supports only: M <= "
+                 f"{f(allow, 'moment')} over {f(a)} to {f(b)}" + (f" ({how})" if how else ""),
+                 at, clause="NDS 2018 2.3.2, 3.3.3", source="NDS 2018 (from memory)",
+                 params={"CD": 0.9, "Lb": b - a, "Mn_omega": allow})
 
 
 def braced_hogging(job: Job, st, moment, ss=None) -> list[Unchecked]:

@@ -28,6 +28,7 @@ from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
                                        flange_word, hogging_check, hogging_computed,
+                                       hogging_checks, hogging_dead_check,
                                        tip_brace_words,
                                        travelling_hook, hogging_limits, hogging_remedy,
                                        all_on_moment, cantilever_top_demands, top_flange_check,
@@ -907,12 +908,30 @@ def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     bracketed root from k = 0, where the dead loads alone must pass it, else `_hogging` says
     why nothing is posted); the check is listed at the answer either way."""
     k = res.factor
-    if res.evaluation is None or not math.isfinite(k) or k <= 0:
+    if res.evaluation is None or k <= 0 or math.isnan(k):
         return res
     limits = hogging_limits(job, st)
     if not hogging_computed(limits):
         return res
     words = travel_words(job, ss) if job.moving else ""
+    dead = hogging_dead_check(job, st, ss)  # a wood member's dead loads alone, CD 0.9
+
+    def fails_alone(c) -> CapacityResult:
+        """The dead loads alone pass the bottom edge's strength: nothing to post."""
+        e0 = res.evaluation if math.isinf(k) else evaluate(job, 0.0, section, ss, st)
+        e0 = replace(e0, checks=tuple(e0.checks) + (c,))
+        return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
+                              _fails_alone(e0, "", job.units))
+
+    if dead is not None and dead.ratio > 1.0:
+        return fails_alone(dead)
+    if math.isinf(k):  # no live loads: the loads as entered are all there is
+        c = hogging_checks(job, st, ss, 1.0)
+        worst = max(c, key=lambda x: x.ratio, default=None)
+        if worst is not None and worst.ratio > 1.0:
+            return fails_alone(worst)
+        return replace(res, evaluation=replace(res.evaluation,
+                                               checks=tuple(res.evaluation.checks) + tuple(c)))
 
     def check(kk):
         dem, big = hogging_demands(job, st, ss, kk, limits)
@@ -921,8 +940,9 @@ def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     c, dem = check(k)
     k2 = hogging_root(job, st, ss, limits, k, dem) if c is not None else None
     if k2 is None:  # it does not come first, or the dead loads alone pass it (`_hogging`)
-        return res if c is None else replace(res, evaluation=replace(
-            res.evaluation, checks=tuple(res.evaluation.checks) + (c,)))
+        more = tuple(x for x in (c, dead) if x is not None)
+        return replace(res, evaluation=replace(res.evaluation,
+                                               checks=tuple(res.evaluation.checks) + more))
     e = evaluate(job, k2, section, ss, st)
     more = [x for x in (fatigue.fatigue_check(job, st, ss, k2) if fatigue.given(job) else None,
                         ) if x is not None]
@@ -931,7 +951,7 @@ def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
         got = cantilever_top_demands(job, st, top, ss, k2)
         more.append(top_flange_check(job, ss, max(got, key=lambda g: g[5] / g[4]), words, st))
     hc = check(k2)[0]
-    more += [hc] if hc is not None else []
+    more += [x for x in (hc, dead) if x is not None]
     return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + tuple(more)),
                    note="", stepped="", method=res.method + "; lowered to where the hogging "
                    "moment reaches the strength the bottom " + flange_word(job) + "'s buckling "

@@ -1437,12 +1437,17 @@ def _slow(job, cands):
     for des, sec, mat, price, note in cands:
         j = replace(job, section=sec, material=mat)
         try:
-            ev = evaluate(j, 1.0)
-            cap = capacity(j)
+            ss = state_set(j)
+            ev = evaluate(j, 1.0, ss=ss)
+            st = strengths(j, beam=ss.beam)
+            # the report's own checks beside the evaluation's: a cantilever's top-flange
+            # loads, the bottom edge under hogging (and its dead loads alone at CD 0.9)
+            more = top_flange_checks(j, st, ss) + hogging_checks(j, st, ss)
+            cap = capacity(j, ss=ss)
         except Exception as exc:  # noqa: BLE001 - one odd section must not stop the sweep
             skipped.append(f"{des}: {exc}")
             continue
-        g = max(ev.checks, key=lambda c: c.ratio)
+        g = max(list(ev.checks) + more, key=lambda c: c.ratio)
         rows.append(SizeRow(des, sec, mat, sec.weight_per_length(mat.density), g.ratio, g.name,
                             cap.factor, price, note, checked="full",
                             not_rated=tuple(cap.not_rated)))
