@@ -367,7 +367,7 @@ case = "dead"
 
 
 @pytest.mark.parametrize("deck, warned", [("expanded metal deck", False),
-                                          ("bar grating deck", False),
+                                          ("bar grating deck", True),  # 3 to 10 psf
                                           ("plywood deck", True),  # 1 psf: a slip for 10?
                                           ("deck", True)])
 def test_a_steel_catwalk_deck_lighter_than_plywood_is_real(deck, warned):
@@ -399,7 +399,152 @@ def test_treated_southern_pine_is_warned_of_incising_and_the_firs_are_held(mater
     # Fir-Larch are nearly always incised (NDS 4.3.8's Ci, from memory)
     text = CUSTOM_WOOD.format(material=f'material = "{material}"').replace(
         "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.",
-        "Pressure treated 2x6 shelf, indoors.")
+        "Pressure treated 2x6 shelf, indoors.").replace(", western red cedar 2x6", "")
     assert bool(held(text, "incis")) == hold
     if not hold:
         assert [w for w in parse_job_text(text).warnings if "seldom incised" in w.message]
+
+
+# ---------------------------------------------------------------- the slips still caught
+# (each beside the false alarm above that the same rule now lets through)
+
+def simple(title, notes, beam, loads, tags='["not-lifting"]', criteria="", supports=None):
+    sup = supports or ('[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+                       'at = "{L}"\ntype = "roller"\n')
+    length = next(ln.split('"')[1] for ln in beam.splitlines() if ln.startswith("length"))
+    return (f'schema = 1\ntitle = "{title}"\nnotes = "{notes}"\nunits = "us"\ntags = {tags}\n'
+            f'[beam]\n{beam}\n' + sup.format(L=length) + loads
+            + (f"[criteria]\n{criteria}\n" if criteria else ""))
+
+
+WOOD_BEAM = 'length = "10 ft"\nsection = "2x10"\nmaterial = "DF-L-2"\nbraced = true'
+UNIFORM = '[[loads]]\ntype = "uniform"\nvalue = "-60 lbf/ft"\nlabel = "{label}"\n'
+
+
+@pytest.mark.parametrize("label, duration", [
+    ("stored snow blower", "two-months"), ("snow tires", "two-months"),
+    ("earthquake kit water jugs", "ten-minutes"),
+    ("construction adhesive pails", "seven-days")])
+def test_goods_named_like_a_short_load_do_not_get_its_duration(label, duration):
+    # a snow blower stored on a loft stays there: CD 1.15 would rate it 15 % high
+    text = simple("Garage loft beam", "Loft for stored goods.", WOOD_BEAM,
+                  UNIFORM.format(label=label), '["shelf"]', f'duration = "{duration}"')
+    assert held(text, f'duration = "{duration}"')
+
+
+@pytest.mark.parametrize("key", ["elevation_drop", "level_drop", "settlement_length",
+                                 "sag_height", "hanger_settlement"])
+def test_a_settlement_by_any_name_on_a_propped_cantilever_is_held(key):
+    # a fixed end and a roller whose footing settled 1/2 in: the drop adds moment at the
+    # fixed end (by hand about 48 % here), so a key that reads as a settlement is held
+    text = simple("Pipe rack beam welded to a column", "", 'length = "10 ft"\n'
+                  'section = "W8x18"\nmaterial = "A992"\nbraced = true',
+                  UNIFORM.format(label="pipes"),
+                  supports='[[supports]]\nat = "0 ft"\ntype = "fixed"\n[[supports]]\n'
+                           f'at = "{{L}}"\ntype = "roller"\n{key} = "0.5 in"\n')
+    assert held(text, "settlement")
+
+
+@pytest.mark.parametrize("title, notes, label", [
+    ("Level beam between the two storage racks", "Adds a level across the gap.", "parts"),
+    ("Storage beam over the compressor skid", "Holds two skids of filter media above the "
+     "compressor skid.", "skids of filter media")])
+def test_a_real_rack_beam_named_by_where_it_is_is_still_a_rack(title, notes, label):
+    text = simple(title, notes, 'length = "8 ft"\nsection = "HSS4x2x1/4"\n'
+                  'material = "A500-C"', UNIFORM.format(label=label), "[]")
+    assert held(text, "storage rack")
+
+
+@pytest.mark.parametrize("notes", ["Rails punched with holes in the angle for the bolts.",
+                                   "Slots in the angles for the shelf clips.",
+                                   "Holes in the column end of the arm for the bolts."])
+def test_holes_in_the_member_itself_still_make_it_cut(notes):
+    text = simple("Wall shelf rail", notes, 'length = "6 ft"\nsection = "L2x2x3/16"\n'
+                  'material = "A36"\nrestrained = true', UNIFORM.format(label="bins"),
+                  '["not-rack"]')
+    assert held(text, "cut member")
+
+
+def test_a_dead_load_in_kpa_holding_a_purlin_down_against_uplift_is_held():
+    # 3 kPa typed for 3 psf reads 21 times heavier, and against wind uplift a heavier dead
+    # load raises the rating (by hand 188 psf of uplift instead of 128): not the safe side
+    text = simple("Shed roof purlin, wind uplift", "", 'length = "12 ft"\n'
+                  'section = "HSS6x3x3/16"\nmaterial = "A500-C"\nbraced = true',
+                  '[[loads]]\ntype = "uniform"\nvalue = "-3 kPa"\nwidth = "5 ft"\n'
+                  'label = "roof panels"\ncase = "dead"\n[[loads]]\ntype = "uniform"\n'
+                  'value = "25 psf"\nwidth = "5 ft"\nlabel = "wind uplift"\nuplift = true\n',
+                  '["roof"]')
+    assert held(text, "metric units")
+
+
+def test_a_short_travel_whose_inches_the_words_measure_from_the_other_end_is_held():
+    # "stops 6 in from the left end and 30 in from the right end" on a 16 ft runway: the
+    # travel is 6 in to 14 ft 6 in, not ["6 in", "30 in"]
+    text = TROLLEY.format(notes="End stops bolted 6 in from the left end and 30 in from the "
+                                "right end.").replace('["57 in", "87 in"]', '["6 in", "30 in"]')
+    assert held(text, "feet meant")
+
+
+def test_typed_in_wood_values_above_the_grade_the_words_name_are_held():
+    # "DF-L No.2, stamped" with Select Structural's Fb 1500 psi typed: 39 % high (NDS
+    # Supplement Table 4A, from memory: No.2 Fb 900 psi, E 1,600,000 psi)
+    typed = ('[beam.material]\nkind = "lumber"\ne = "1900000 psi"\nfb = "1500 psi"\n'
+             'fv = "180 psi"\nfc_perp = "625 psi"\ndensity = "34 lb/ft^3"')
+    text = CUSTOM_WOOD.format(material=typed).replace(
+        "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.",
+        "Stock from the yard: DF-L No.2, stamped.")
+    why = held(text, "above those of DF-L-2")
+    assert why and "1,500 psi against 900 psi" in why[0]
+
+
+def test_a_distance_from_something_else_does_not_cancel_the_heat():
+    text = CUSTOM_WOOD.format(material='material = "DF-L-2"').replace(
+        "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.",
+        "Drying shelf above the curing oven, about 20 ft away from the spray booth.")
+    assert held(text, "temperature")
+
+
+@pytest.mark.parametrize("tags", ['[]', '["not-vehicle"]'])
+def test_a_floor_over_the_van_bays_is_still_a_floor(tags):
+    text = simple("Mezzanine floor joist over the van bays", "Parts mezzanine above where "
+                  "the service vans park.", 'length = "12 ft"\nsection = "C6x8.2"\n'
+                  'material = "A36"\nbraced = true\nrestrained = true',
+                  '[[loads]]\ntype = "uniform"\nvalue = "-125 psf"\nwidth = "24 in"\n'
+                  'label = "storage"\n', tags, 'deflection = "L/240"')
+    assert [w for w in parse_job_text(text).warnings if "read as a floor" in w.message]
+
+
+def test_pt_hem_fir_words_on_a_southern_pine_key_are_held_for_incising():
+    text = CUSTOM_WOOD.format(material='material = "SP-2"').replace(
+        "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.",
+        "PT Hem-Fir No.2 2x6, under the deck.")
+    assert held(text, "incis")
+
+
+def test_a_joist_spacing_given_as_a_girder_s_width_is_held():
+    # the joists at 24 in o.c. bear on this platform beam: its tributary width is half the
+    # joists' spans each side (6 ft here), not their spacing (it would post 460 psf for 143)
+    text = simple("Overhead storage platform beam, W8x18", "", 'length = "14 ft"\n'
+                  'section = "W8x18"\nmaterial = "A992"\nbraces = ["2 ft", "4 ft", "6 ft"]\n'
+                  'braces_flange = "top"', '[[loads]]\ntype = "uniform"\nvalue = "-125 psf"\n'
+                  'width = "24 in o.c."\nlabel = "storage"\n', '["platform"]')
+    assert held(text, "is a spacing")
+    joist = text.replace("Overhead storage platform beam", "Platform joist")
+    assert not held(joist, "is a spacing")
+
+
+def test_an_engine_hung_on_the_hook_is_a_lifting_device():
+    text = simple("Shop beam, W8x18", "Engine hung on the hook at mid-span while it is pulled "
+                  "from the car.", 'length = "12 ft"\nsection = "W8x18"\nmaterial = "A992"',
+                  '[[loads]]\ntype = "point"\nat = "6 ft"\nvalue = "-600 lbf"\nlabel = "engine"'
+                  '\n', "[]")
+    assert held(text, "lifting device")
+
+
+@pytest.mark.parametrize("dead, hold", [("-88 N", True), ("-196 N", False)])
+def test_a_label_with_two_masses_is_compared_with_their_sum(dead, hold):
+    # "chain block 9 kg, trolley 11 kg": 20 kg is 196 N; 88 N is the block alone
+    si = dict(system="si", length="4 m", section="IPE200", material="S275", u="m",
+              mid="2 m", live="-4.905 kN")
+    text = hoist(**si, dead=dead, dead_label="chain block 9 kg, trolley 11 kg")
+    assert bool(held(text, "dead load in N")) == hold

@@ -701,9 +701,9 @@ _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes
                       r"openings?|slots?|slotted|penetrations?|bored|drilled|drilling)"
                       r"(?:$|[_\- ])", re.IGNORECASE)
 
-# ... unless it names a hanger, rod or length ("hanger_drop", "drop_rod", "rod_length": how far
-# the member hangs below what holds it, not a settlement)
-_NOT_SETTLE_KEY = re.compile(r"hangers?|rods?|lengths?|heights?|elevations?|levels?",
+# ... unless it names a hanger or rod and no settling ("hanger_drop", "drop_rod", "rod_length":
+# how far the member hangs below what holds it, not a settlement)
+_NOT_SETTLE_KEY = re.compile(r"^(?!.*(?:settl|sink|subsid|sag)).*(?:hangers?|rods?)",
                              re.IGNORECASE)
 
 # An unknown key of a support that reads like a settlement (a drop of the support given)
@@ -1748,6 +1748,38 @@ _ON_CENTRES = re.compile(r"\s*(?:o\.\s?c\.?|oc\.?|on\s+cent(?:er|re)s?|c\s?/\s?c
                          r"cent(?:er|re)s|crs\.?)\s*$", re.IGNORECASE)
 
 
+# a member repeated at a spacing (whose tributary width is that spacing)
+_REPEATED_MEMBER = re.compile(r"\b(?:joists?|rafters?|purlins?|girts?|studs?|stringers?|"
+                              r"deck(?:ing| boards?)|planks?|slats?|battens?|trusses|sleepers?|"
+                              r"bearers?|cross ?members?|runners?|arms?|shelf (?:rails?|brackets?)|"
+                              r"brackets?)\b", re.IGNORECASE)
+
+
+def _spacing_widths(r: _Reader, raw_loads, beam, title, notes) -> None:
+    """A width written as a spacing ("24 in o.c.") is the tributary width of a member repeated
+    at that spacing (a joist). On a member that the words do not name as one (a girder or a
+    platform beam that the joists at that spacing bear on) it reads as the spacing of what it
+    carries, not its own tributary width (half the joists' spans each side), so NOT RATED:
+    write the width without o.c. if it is meant."""
+    if (isinstance(beam, dict) and beam.get("repetitive") is True) or any(
+            _search(_REPEATED_MEMBER, _as_words(t)) for t in (title, notes)
+            if isinstance(t, str)):
+        return
+    for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
+        w = ld.get("width") if _is_table(ld) else None
+        if isinstance(w, str) and _ON_CENTRES.search(w) and _ON_CENTRES.sub("", w).strip():
+            key = f"loads[{i}].width"
+            r.hold(f"width = {w!r} is written as a spacing (on centres): that is the tributary "
+                   "width of a member repeated at that spacing, a joist or rafter, but the words "
+                   "do not name this member as one. If joists or other members at that spacing "
+                   "bear on this one (a girder, a platform beam), its tributary width is half "
+                   "their spans on each side, not their spacing, so no rating is posted. Write "
+                   "the width without \"o.c.\" if it is this member's own tributary width, or "
+                   "say what it is in the title (\"joist\", \"rafter\")", key,
+                   f"width = {w!r} is a spacing, and this member is not named as one repeated at "
+                   "it (a joist): write its own tributary width without o.c.")
+
+
 def _spaced(ld: dict) -> dict:
     """The load's table with its width read as a spacing ("16 in o.c." is 16 in)."""
     w = ld.get("width")
@@ -2643,10 +2675,7 @@ _LIFTING_WORDS = re.compile(
     r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
     r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
     r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?|"
-    # ...not a storage hook: "ladders hung on the hook", "hoses stored on a hook"
-    r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:from|under) (?:the|a) hook|"
-    r"(?<!hung )(?<!hang )(?<!hangs )(?<!hanging )(?<!stored )(?<!stowed )(?<!kept )"
-    r"(?<!hung up )on (?:the|a) hook|"
+    r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:on|from|under) (?:the|a) hook|"
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
     r"(?:man|personnel|work) baskets?|(?:drum|coil|sheet|plate|pipe|vacuum|magnet|bundle|"
     r"pallet|bar) lifters?|lifters?|magnet beams?|booms?(?! ?box(?:es)?\b)|tackle beams?|"
@@ -2835,10 +2864,22 @@ _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shel
                               r"headers?|benches?|tanks?|machines?|equipment|scales?)\b",
                               re.IGNORECASE)
 NOT_FLOOR = "not-floor"  # the tag that says a member read as a floor is not one
+# a floor no vehicle has: a mezzanine, loft or platform is a building's, whatever vans or
+# trucks the words mention ("mezzanine above where the service vans park")
+_BUILDING_FLOOR = re.compile(r"\b(?:mezzanines?|mezz|lofts?|platforms?|catwalks?|walkways?|"
+                             r"offices?|attics?|stor(?:e)?ys?|buildings?)\b", re.IGNORECASE)
+# where vehicles are, not what the member is part of ("loft over the van bays")
+_VEHICLE_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|next to|near|"
+                            r"past|around|along|alongside|in front of|opposite|between) "
+                            r"(?:the |a |an |our |two |three |four )?(?:[\w-]+ ){0,2}?"
+                            r"(?:vans?|trucks?|trailers?|vehicles?|cars?|pickups?|forklifts?)"
+                            r"(?: (?:bays?|parking|doors?|docks?|lanes?|stalls?))?\b",
+                            re.IGNORECASE)
 # a deck lighter than plywood for real: steel grating, expanded metal, mesh, plate
-_LIGHT_DECK = re.compile(r"\b(?:expanded[- ]metal|gratings?|grates?|mesh|(?:checker|chequer|"
-                         r"diamond|tread|floor|deck) ?plates?|perforated|plank grating|"
-                         r"aluminium|aluminum|steel deck(?:ing)?)\b", re.IGNORECASE)
+# (flattened expanded metal about 0.9 psf, wire mesh less, maker's tables from memory; bar
+# grating, checker plate and perforated plank weigh 3 to 10 psf and more, heavier than the
+# plywood the rule compares with, so they are not excused)
+_LIGHT_DECK = re.compile(r"\b(?:expanded[- ]metal|(?:wire |welded )?mesh)\b", re.IGNORECASE)
 
 
 def _floor_said(tags, title="", notes="") -> str:
@@ -2850,9 +2891,12 @@ def _floor_said(tags, title="", notes="") -> str:
         return f"tag {sorted(FLOOR_TAGS.intersection(normal))[0]!r}"
     text = " | ".join(_as_words(t) for t in (title, notes))
     m = _search(_FLOOR_WORDS, text)
-    # a vehicle's deck (a trailer's deck boards) is not a building floor
+    # a vehicle's deck (a trailer's deck boards) is not a building floor; a floor over the van
+    # bays is (words placing it by vehicles), and so is one tagged not-vehicle
+    on_vehicle = NOT_VEHICLE not in normal and not _BUILDING_FLOOR.search(text) \
+        and _VEHICLE_WORDS.search(_VEHICLE_PLACE.sub(" ", text))
     return f"the words {m.group(0)!r}" if m and not _NOT_FLOOR_WORDS.search(text) \
-        and not _VEHICLE_WORDS.search(text) else ""
+        and not on_vehicle else ""
 
 
 def _floor_live_limit(r: _Reader, criteria: Criteria, tags, supports, length, title="",
@@ -2928,9 +2972,16 @@ def _inches_said(travel, words: str) -> bool:
     """The words give each end of a travel typed in inches, in inches ("trolley stops bolted
     at 57 in and 87 in" for travel = ["57 in", "87 in"]): the inches are meant."""
     nums = [m.group(1) for v in travel if isinstance(v, str)
-            for m in [re.match(r"\s*(\d+(?:\.\d+)?)", v)] if m and float(m.group(1)) > 0]
-    return bool(nums) and all(
-        re.search(rf"(?<![\d.]){re.escape(n)}\s*(?:in\b|inch|\"|'')", words) for n in nums)
+            for m in [re.match(r"\s*(\d+(?:\.\d+)?)", v)] if m]
+    if len(nums) != 2:
+        return False
+    inch = r"\s*(?:in\b\.?|inch(?:es)?\b|\"|'')"
+    # both ends in one phrase ("stops at 57 in and 87 in"), measured from where the travel is
+    # (not "30 in from the right end", which the travel would then have to say)
+    said = re.search(rf"(?<![\d.]){re.escape(nums[0])}{inch}\s*(?:and|to|-|–)\s*"
+                     rf"{re.escape(nums[1])}{inch}", words)
+    return bool(said) and not re.match(r"\s*(?:from|off) (?:the )?(?:right|far|other|east|west|"
+                                       r"north|south|back|rear|wall|stop)", words[said.end():])
 
 
 def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
@@ -3041,16 +3092,35 @@ _LABEL_KG = re.compile(r"(\d+(?:\.\d+)?)\s*(?:kg|kgs|kilo(?:gram)?s?)\b", re.IGN
 
 def _label_mass_agrees(ld) -> bool:
     """Whether the load's label gives a mass (kg) whose weight is the force typed, within 5 %
-    ("chain block, 9 kg" beside "-90 N"): the newtons are meant."""
-    m = _LABEL_KG.search(ld.label or "")
-    if not m:
+    ("chain block, 9 kg" beside "-90 N"; several masses, their sum): the newtons are meant."""
+    masses = [float(m.group(1)) for m in _LABEL_KG.finditer(ld.label or "")]
+    if not masses:
         return False
-    w = float(m.group(1)) * units.G0
+    w = sum(masses) * units.G0  # "block 9 kg, trolley 11 kg": the two together
     return w > 0 and abs(abs(ld.total_force) - w) <= 0.05 * w
 
 
+def _heavier_is_safe(supports, loads, length, moving: bool) -> bool:
+    """Whether a dead load read heavier than meant can only raise the demand: a simple span
+    held at its two ends, or a cantilever built in at one end, with every load pushing down
+    and no couple (a heavier load there adds to every moment and shear; past a support, on
+    another span or against an uplift it can relieve the check that governs)."""
+    if moving or length is None or any(ld.kind == "moment" and ld.value for ld in loads):
+        return False
+    if any(ld.total_force > 0 for ld in loads):
+        return False
+    tol = 1e-9 * length
+    held = [sp for sp in supports if sp.takes_force]
+    ends = lambda sp: sp.at <= tol or sp.at >= length - tol  # noqa: E731
+    if len(held) == 2 and all(ends(sp) for sp in held) and all(sp.kind in ("pin", "roller")
+                                                                for sp in held):
+        return True
+    return len(held) == 1 and held[0].kind == "fixed" and ends(held[0])
+
+
 def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
-                     lifting: bool = False) -> None:
+                     lifting: bool = False, supports=(), length=None,
+                     moving: bool = False) -> None:
     """A dead load typed in metric force units on a job in US units (N for lbf is 4.45 times
     too light, and the rating counts on the dead load it holds fixed), and a dead load too
     light to be real (under 1 lbf or 1 lbf/ft and under a thousandth of the largest live load):
@@ -3080,15 +3150,17 @@ def _dead_load_units(r: _Reader, raw_loads, loads, system: str,
         if system == "us" and metric and ld.kind != "moment":
             said = ", ".join(f'"{v}"' for v in metric)
             heavier = ld.case == "dead" and all(
-                (_MASS_POINT if ld.kind == "point" else _KPA).search(v) for v in metric)
+                (_MASS_POINT if ld.kind == "point" else _KPA).search(v) for v in metric) \
+                and _heavier_is_safe(supports, loads, length, moving)
             if heavier:
                 # a mass in kg (t) for lb, a kPa for psf: read heavier than the US unit it
                 # could be mistaken for, so the dead load held fixed errs on the safe side
                 r.warn(f"{name} is a dead load typed in metric units ({said}) on a job in US "
                        f"units: read as {units.fmt(abs(ld.total_force), 'force', system)}. "
                        "Typed for lb or psf, it would read heavier than meant (1 kg = 2.2 lb, "
-                       "1 kPa = 20.9 psf), which errs on the safe side; write it in lbf (psf) "
-                       "to keep the job in one system",
+                       "1 kPa = 20.9 psf), which on this simple span or cantilever with every "
+                       "load pushing down errs on the safe side; write it in lbf (psf) to keep "
+                       "the job in one system",
                        f"{ld.key}.value")
                 continue
             if ld.case == "dead":
@@ -4498,6 +4570,14 @@ def _not_lifting_denied(r: _Reader, title, notes, tags, criteria) -> None:
             return
 
 
+_STORAGE_HOOK = re.compile(
+    r"\b(?:ladders?|hoses?|(?:extension )?cords?|cables?|tools?|coats?|jackets?|bikes?|"
+    r"bicycles?|chairs?|buckets?|brooms?|rakes?|shovels?|reels?|brushes|bags?|helmets?|"
+    r"harness(?:es)?|aprons?)\b[^.;:!?]{0,40}?"
+    r"\b(?:hung|hang|hangs|hanging|stored|stowed|kept|sit|sits)\s+(?:up\s+)?on\s+(?:the|a|"
+    r"its|their)\s+hooks?\b", re.IGNORECASE)
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -4505,6 +4585,9 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     ``not-lifting`` says it is not one."""
     if is_lifting(tags, criteria.lifting) or NOT_LIFTING in tags:
         return ""
+    # goods stored on a hook ("two ladders hung on the hook") are not a load on a hoist's hook
+    title, notes = (_STORAGE_HOOK.sub(" ", _as_words(t)) if isinstance(t, str) else t
+                    for t in (title, notes))
     said = _words_found(_LIFTING_WORDS, title, notes, tags, raw_loads, _LIFTING_TAGS)
     # a tag written as one run-together word ("hoistbeam", "jibcrane", "liftingdevice")
     said += [f"tag {t!r}" for t in tags if _LIFTING_STEMS.search(re.sub(r"[\W_]", "", t))
@@ -4834,8 +4917,8 @@ _CUT_WORDS = re.compile(
     r"slotted|slots?|openings? in the (?:web|flange)|penetrations?)\b"
     # ...nor the holes or slots of what the member is fixed to ("bolted through slotted holes
     # in the column flange")
-    r"(?!(?: holes?| slots?)? (?:in|on|of|through) (?:the |a |an )?(?:uprights?|posts?|columns?|"
-    r"walls?|slab|floor|cap plates?|base plates?|clips?|brackets?|angles?|tabs?)\b)",
+    r"(?!(?: holes?| slots?)? (?:in|on|of|through) (?:the |a |an )?(?:uprights?|posts?|"
+    r"columns?(?! end)|walls?|slab|floor|cap plates?|base plates?)\b)",
     re.IGNORECASE)
 
 
@@ -4861,7 +4944,7 @@ def _cut_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
 # where the racks are, not what the member is ("a lean-to over the lumber racks", "the hoist
 # runs above the die racks")
 _RACK_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|next to|near|"
-                         r"by|past|around|between|along|alongside|in front of|opposite) "
+                         r"past|around|along|alongside|in front of|opposite) "
                          r"(?:the |a |an |our |two |three |four )?(?:[\w-]+ ){0,2}?"
                          r"(?:racks?|racking)\b", re.IGNORECASE)
 # a plant's equipment skid, named so once: the job's other "skid" words are that skid
@@ -4884,12 +4967,15 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads, lifting: bool = False,
     notes = _RACK_PLACE.sub(" ", _as_words(notes)) if isinstance(notes, str) else notes
     if _EQUIPMENT_SKID.search(" | ".join(_as_words(t) for t in (title, notes)
                                          if isinstance(t, str))):
+        # that skid, named again ("the skid", a tag "skid"); skids of goods ("skids of filter
+        # media stored above it") stay rack words
         tags = [t for t in tags if not (isinstance(t, str) and re.fullmatch(
-            r"skids?", _as_words(t).strip(), re.IGNORECASE))]
-        title, notes = (re.sub(r"\bskids?\b", " ", t, flags=re.IGNORECASE)
-                        if isinstance(t, str) else t for t in (title, notes))
-        raw_loads = [{**ld, "label": re.sub(r"\bskids?\b", " ", ld["label"],
-                                            flags=re.IGNORECASE)}
+            r"skid", _as_words(t).strip(), re.IGNORECASE))]
+        that = re.compile(r"\b(?:the|this|that|its|a|each) skid\b(?!s)|" + _EQUIPMENT_SKID.pattern,
+                          re.IGNORECASE)
+        title, notes = (that.sub(" ", _as_words(t)) if isinstance(t, str) else t
+                        for t in (title, notes))
+        raw_loads = [{**ld, "label": that.sub(" ", _as_words(ld["label"]))}
                      if _is_table(ld) and isinstance(ld.get("label"), str) else ld
                      for ld in (raw_loads if isinstance(raw_loads, list) else ())]
     said = _words_found(_RACK_WORDS, title, notes, tags, raw_loads)
@@ -5007,16 +5093,18 @@ def _grade_words(r: _Reader, material, title, notes) -> None:
     Structural's Fb is 1.7 times No.2's (NDS Supplement Table 4A, from memory). Warned, and
     no rating is posted while they disagree."""
     key = getattr(material, "key", "") or ""
-    if getattr(material, "kind", "") != "lumber" or key.startswith("LVL") \
-            or key in ("", "custom"):
-        return  # typed-in values are the grade the job names: nothing to disagree with
-    mine = key.rsplit("-", 1)[-1].upper()
+    if getattr(material, "kind", "") != "lumber" or key.startswith("LVL"):
+        return
     text = " | ".join(str(x) for x in (title, notes) if isinstance(x, str))
     said = set()
     for m in _GRADE_WORDS.finditer(text):
         said.add("SS" if m.group(4) else (m.group(1) or m.group(2) or m.group(3)))
     for m in _GRADE_BTR.finditer(text):  # "#2 and better": a lumber grade on its own
         said.add(m.group(1))
+    if key in ("", "custom"):
+        _typed_above_grade(r, material, text, said)
+        return
+    mine = key.rsplit("-", 1)[-1].upper()
     other = sorted(g for g in said if g != mine)
     if other and mine not in said:
         words = ", ".join("Select Structural" if g == "SS" else f"No.{g}" for g in other)
@@ -5028,6 +5116,43 @@ def _grade_words(r: _Reader, material, title, notes) -> None:
                "member", "beam.material",
                f"the notes name the grade {words} but material {key!r} is {grade}: give the "
                "grade on the stamp")
+
+
+_SPECIES_WORDS = (("DF-L", re.compile(r"\b(?:df(?:-l)?|douglas|doug[- ]?fir)\b", re.I)),
+                  ("HF", re.compile(r"\b(?:hf|hem[- ]?fir)\b", re.I)),
+                  ("SPF", re.compile(r"\b(?:spf|spruce[- ]pine[- ]fir)\b", re.I)),
+                  ("SP", re.compile(r"\b(?:sp|syp|southern (?:yellow )?pine)\b", re.I)))
+
+
+def _typed_above_grade(r: _Reader, material, text: str, grades: set) -> None:
+    """Typed-in lumber values (no key) beside words that name a species and grade shopbeam
+    lists ("DF-L No.2, stamped"): where the typed Fb or E is above that grade's, the values
+    are another grade's (Select Structural's typed for No.2), and the figure would be rated
+    on them: NOT RATED. Values at or below it, or a species not listed (cedar), say nothing."""
+    if len(grades) != 1:
+        return
+    grade = next(iter(grades))
+    for sp, words in _SPECIES_WORDS:
+        if not words.search(text):
+            continue
+        named = get_material(f"{sp}-{grade}")
+        if named is None or getattr(named, "kind", "") != "lumber":
+            return
+        over = [(what, typed, ref) for what, typed, ref in (
+            ("Fb", getattr(material, "fb", None), getattr(named, "fb", None)),
+            ("E", material.e, named.e)) if typed and ref and typed > 1.05 * ref]
+        if over:
+            q = (lambda x: f"{x / units.PSI:,.0f} psi") if r.system == "us" else (  # noqa: E731
+                lambda x: units.fmt(x, "stress", r.system))
+            said = ", ".join(f"{w} {q(t)} against {q(ref)}" for w, t, ref in over)
+            r.hold(f"the words name {named.name} ({named.key}), but the typed-in values are "
+                   f"above that grade's ({said}; NDS Supplement values, from memory): another "
+                   "grade's values typed for this one would rate the member too high, so no "
+                   f"rating is posted. Write material = \"{named.key}\", or type the stamped "
+                   "grade's values", "beam.material",
+                   f"the typed-in wood values are above those of {named.key}, the grade the "
+                   f"words name ({said})")
+        return
 
 
 ROUGH_SAWN = "rough-sawn"  # the tag that says a wood section's full sizes are its real ones
@@ -5301,7 +5426,12 @@ _COOL_NEAR = re.compile(r"\b(well away from|far from|(?:under|below) 100|separat
 
 # a phrase that is only a distance from what came before it ("..., 40 ft away")
 _AWAY = re.compile(r"\s*(?:about |some |over |more than )?(?:[1-9]\d*|ten|twenty|thirty|forty|"
-                   r"fifty)\s*(?:ft|feet|m|metres?|meters?) away\b", re.IGNORECASE)
+                   r"fifty)\s*(?:ft|feet|m|metres?|meters?) away(?: from (?:it|them))?\s*$",
+                   re.IGNORECASE)
+
+
+_OTHER_SPECIES = re.compile(r"\b(?:hem[- ]?fir|hf|douglas|doug[- ]?fir|df(?:-l)?|fir|larch|"
+                            r"spf|spruce|cedar|redwood|hemlock)\b", re.IGNORECASE)
 
 
 def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None,
@@ -5374,7 +5504,10 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None,
         preserved = ""  # a timber (5 in and thicker): Ci is for dimension lumber (NDS 4.3.8)
     said_not = any(re.search(r"\b(?:not|no|non|un)[- ]?incis\w*", t, re.IGNORECASE)
                    for t in whole)  # "preservative treated (ACQ), not incised"
-    southern = str(getattr(material, "key", "") or "").upper().startswith(("SP-", "SYP"))
+    # Southern Pine by its key, with no other species in the words ("PT Hem-Fir" with an SP
+    # key: which it is, the stamp says)
+    southern = str(getattr(material, "key", "") or "").upper().startswith(("SP-", "SYP")) \
+        and not any(_OTHER_SPECIES.search(t) for t in whole)
     if preserved and not said_not and not kept & {"untreated", NOT_INCISED} and southern:
         # Southern Pine takes preservative without incising as a rule (from memory): said,
         # with the tag that settles it, and not held
@@ -5399,11 +5532,23 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None,
 
 # the short-lived loads a duration over ten years is for (NDS 2018 Table 2.3.2), as a live
 # load's label names them: (pattern, in words)
-_DURATION_LOADS = {"two-months": (re.compile(r"\bsnow\b", re.IGNORECASE), "snow"),
-                   "seven-days": (re.compile(r"\bconstruction\b", re.IGNORECASE),
-                                  "construction load"),
-                   "ten-minutes": (re.compile(r"\b(?:wind|gusts?|earthquake|seismic)\b",
-                                              re.IGNORECASE), "wind or earthquake")}
+# The label must name the load itself ("snow", "roof snow", "snow load 25 psf", "wind
+# uplift"), not goods that carry the word ("snow blower", "earthquake kit", "construction
+# adhesive"): after the word, only the load's own words, a figure or the end of the label.
+_LOAD_TAIL = r"(?=\s*(?:$|[\d(\[,;:/-]|(?:loads?|forces?|pressures?|{more})\b))"
+_DURATION_LOADS = {
+    "two-months": (re.compile(r"^\s*(?:(?:roof|ground|design|balanced|unbalanced|drifting|"
+                              r"drift(?:ed)?|sliding|rain[- ]on)[- ]+)*snow"
+                              + _LOAD_TAIL.format(more="drifts?|accumulations?|piles?|"
+                                                  "build-?ups?|and ice|only"),
+                              re.IGNORECASE), "snow"),
+    "seven-days": (re.compile(r"^\s*construction"
+                              + _LOAD_TAIL.format(more="live|crews?|workers?|only"),
+                              re.IGNORECASE), "construction load"),
+    "ten-minutes": (re.compile(r"^\s*(?:(?:design|roof|wall)[- ]+)*(?:wind|gusts?|earthquake|"
+                               r"seismic)" + _LOAD_TAIL.format(
+                                   more="uplift|suction|down(?:ward)?|up(?:ward)?|gusts?|only"),
+                               re.IGNORECASE), "wind or earthquake")}
 
 
 def _wood_keys(r: _Reader, beam: dict, crit, material, section, tags=(), title="",
@@ -5946,7 +6091,9 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
         _looser_than_floor(r, criteria, tags, supports, length)
         criteria = _floor_live_limit(r, criteria, tags, supports, length, title, notes)
     _lifting_without_live(r, criteria, tags, loads, moving or data.get("moving"))
-    _dead_load_units(r, raw_loads, loads, system, is_lifting(tags, criteria.lifting))
+    _dead_load_units(r, raw_loads, loads, system, is_lifting(tags, criteria.lifting),
+                     supports, length, bool(moving or data.get("moving")))
+    _spacing_widths(r, raw_loads, beam, title, notes)
     _mixed_units(r, raw_loads, loads)
     _per_member_loads(r, raw_loads, beam.get("members") if isinstance(beam, dict) else None)
     _step_beam(r, title, notes, tags, raw_loads, section)
