@@ -224,17 +224,33 @@ def _absmax_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
     """Exact max |f| over each interval (a, b) for every section and state: co (n, S, P, w)
     on each state's own breaks (S, P + 1), of which the first nreal[s] pieces are real (the
     rest pad to a common count, zero length and zero coefficients). Returns (n, S) each."""
+    return _interval_extremes(co, breaks, nreal, intervals, np.abs, np.maximum)
+
+
+def _min_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
+                intervals) -> list[np.ndarray]:
+    """Exact least value of f (signed) over each interval, at most 0, for every section and
+    state, as `_absmax_states` takes its arrays. Returns (n, S) each."""
+    return _interval_extremes(co, breaks, nreal, intervals, lambda x: x, np.minimum)
+
+
+def _interval_extremes(co, breaks, nreal, intervals, value, pick) -> list[np.ndarray]:
+    """The extreme (`pick`: np.maximum or np.minimum) of `value`(f) over each interval, for
+    every section and state, and 0 where that is more extreme (its sign's bound): each piece
+    at its ends and the real roots of f' inside it, then each interval from its run of
+    pieces."""
     n, S, P, w = co.shape
     h = np.diff(breaks, axis=1)
     hh = np.broadcast_to(h[None], (n, S, P)).reshape(-1)
     flat = co.reshape(-1, w)
-    best = np.maximum(np.abs(flat[:, 0]), np.abs(_horner(flat, hh)))
+    best = pick(value(flat[:, 0]), value(_horner(flat, hh)))
     if w > 1:
         d = flat[:, 1:] * np.arange(1, w) * (hh[:, None] ** np.arange(w - 1))  # in tau = t / h
         rows, tau = _real_roots_01(d)
         if rows.size:
-            np.maximum.at(best, rows, np.abs(_horner(flat[rows], tau * hh[rows])))
+            pick.at(best, rows, value(_horner(flat[rows], tau * hh[rows])))
     best = best.reshape(n, S, P)
+    reduce = np.max if pick is np.maximum else np.min
     tol = 1e-9 * (breaks[0, -1] - breaks[0, 0])
     out = [np.zeros((n, S)) for _ in intervals]
     for s in range(S):
@@ -245,34 +261,7 @@ def _absmax_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
             j0 = int(np.searchsorted(left, a - tol, side="left"))
             j1 = int(np.searchsorted(right, b + tol, side="right"))
             if j1 > j0:
-                o[:, s] = np.maximum(best[:, s, j0:j1].max(axis=1), 0.0)
-    return out
-
-
-def _min_states(co: np.ndarray, breaks: np.ndarray, nreal: np.ndarray,
-                intervals) -> list[np.ndarray]:
-    """Exact least value of f (signed) over each interval, at most 0, for every section and
-    state, as `_absmax_states` takes its arrays. Returns (n, S) each."""
-    n, S, P, w = co.shape
-    h = np.diff(breaks, axis=1)
-    hh = np.broadcast_to(h[None], (n, S, P)).reshape(-1)
-    flat = co.reshape(-1, w)
-    best = np.minimum(flat[:, 0], _horner(flat, hh))
-    if w > 1:
-        d = flat[:, 1:] * np.arange(1, w) * (hh[:, None] ** np.arange(w - 1))  # in tau = t / h
-        rows, tau = _real_roots_01(d)
-        if rows.size:
-            np.minimum.at(best, rows, _horner(flat[rows], tau * hh[rows]))
-    best = best.reshape(n, S, P)
-    tol = 1e-9 * (breaks[0, -1] - breaks[0, 0])
-    out = [np.zeros((n, S)) for _ in intervals]
-    for s in range(S):
-        left, right = breaks[s, :nreal[s]], breaks[s, 1:nreal[s] + 1]
-        for o, (a, b) in zip(out, intervals):
-            j0 = int(np.searchsorted(left, a - tol, side="left"))
-            j1 = int(np.searchsorted(right, b + tol, side="right"))
-            if j1 > j0:
-                o[:, s] = np.minimum(best[:, s, j0:j1].min(axis=1), 0.0)
+                o[:, s] = pick(reduce(best[:, s, j0:j1], axis=1), 0.0)
     return out
 
 
