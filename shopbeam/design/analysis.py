@@ -14,7 +14,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for, normal_tag
 from shopbeam.design import fatigue, loading
-from shopbeam.design.basis import cb_factor, support_braces, unbraced_segments
+from shopbeam.design.basis import cb_factor, support_braces, tip_hung, unbraced_segments
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
                                     impact_of, not_checked_words, strengths, wood_load_case)
 from shopbeam.design.connections import connection_notes, fixed_end_moments, hinge_shears
@@ -309,7 +309,6 @@ def hung_by_open_ends(job: Job) -> list[tuple[float, float]]:
     clamp or trolley wheels, `basis.tip_hung`) within a flange width of an end of an I-shape
     bent about its strong axis that no fixed support closes: the flange check under it (wheel
     flange bending) is for a flange that runs on both sides of the load."""
-    from shopbeam.design.basis import tip_hung
     sec = job.section
     bf = sec.dims.get("bf", 0.0) if sec.shape == "i-beam" and sec.axis == "strong" else 0.0
     if not bf:

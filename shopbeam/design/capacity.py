@@ -873,7 +873,7 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
 def hogging_root(job, st, ss, limits, k: float, dem=None) -> float | None:
     """The factor below k where the hogging moment reaches the strength the bottom flange's
     or edge's buckling leaves (`limits`: `analysis.hogging_limits`, worked out), where at k
-    it passes it and the dead loads alone (k = 0) do not; else None. The largest hogging over
+    it exceeds it and the dead loads alone (k = 0) do not; else None. The largest hogging over
     every load state is the largest of functions linear in k: convex, one bracketed root
     (Brent's method), then its passing side, stepped down a float at a time if rounding
     leaves it a hair over. `dem`: `hogging_demands` at k, where already worked out."""
@@ -905,8 +905,11 @@ def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     that is a check the rating is taken from, like the others: where the hogging moment at
     the factor found passes it, the factor is lowered to where it reaches it (the largest
     hogging over every load state is the largest of functions linear in k: convex, one
-    bracketed root from k = 0, where the dead loads alone must pass it, else `_hogging` says
-    why nothing is posted); the check is listed at the answer either way."""
+    bracketed root from k = 0, where the dead loads alone must stay within it, else `_hogging`
+    says why nothing is posted); the check is listed at the answer either way. A wood
+    member's dead loads alone are checked at CD 0.9 too (`analysis.hogging_dead_check`), and
+    a job with no live loads is judged at the loads entered: past either, nothing is posted
+    (k = 0)."""
     k = res.factor
     if res.evaluation is None or k <= 0 or math.isnan(k):
         return res
@@ -917,7 +920,7 @@ def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     dead = hogging_dead_check(job, st, ss)  # a wood member's dead loads alone, CD 0.9
 
     def fails_alone(c) -> CapacityResult:
-        """The dead loads alone pass the bottom edge's strength: nothing to post."""
+        """The dead loads alone exceed the bottom edge's strength: nothing to post."""
         e0 = res.evaluation if math.isinf(k) else evaluate(job, 0.0, section, ss, st)
         e0 = replace(e0, checks=tuple(e0.checks) + (c,))
         return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
