@@ -358,7 +358,13 @@ async def test_a_job_past_the_calc_sheet_size_is_told_at_once_in_its_own_words(t
         assert "No exact calc sheet for this job" in text and "more than 60" in text
         assert "few seconds (" in text  # the limit's own words, not the busy line
         assert "Working out" not in text and "InputError" not in text
-        assert "long.toml" not in text
+        assert "long.toml" not in text and "The exact" not in text  # said once, in lower case
+        # ctrl+r (write to a file) says why there is no sheet, not "wait for the sheet"
+        await pilot.press("ctrl+r")
+        await pilot.pause()
+        said = [str(n.message) for n in app._notifications]
+        assert any("No exact calc sheet" in m for m in said)
+        assert not any("wait for the sheet" in m for m in said)
 
 
 @sync

@@ -2355,3 +2355,72 @@ async def test_an_f_key_back_to_a_view_puts_the_cursor_back_in_the_field_left(tm
         await burst(pilot, "4")  # 4: the section view's digit
         assert app.job_screen.current == "section" and app.focused is not des.input
         assert des.value == "W8x18"
+
+
+@sync
+async def test_an_f_key_back_never_gives_the_cursor_to_a_field_showing_another_row(tmp_path):
+    # load 1's value left picked, a look at the results, then load 2 picked in the list:
+    # F4 must not put the cursor in the value field (it shows load 2's now), and ctrl+z must
+    # never write load 1's text into load 2 (it did: -300 became -90 lbf/ft, checks passing)
+    from shopbeam.tui.widgets import Choice
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("f4")
+        await settle(pilot)
+        await burst(pilot, TAB * 5)
+        value = field(app, "loads", "load.value")
+        assert app.focused is value.input
+        s = app.job_screen.session
+        first, second = (r["value"] for r in s.rows("loads")[:2])
+        assert first != second
+        await burst(pilot, F8)
+        await pilot.pause(Choice.ALONE + 0.2)
+        await burst(pilot, "3")  # the loads view by its digit: no field picked
+        await burst(pilot, TAB + DOWN)  # the list, load 2 picked
+        view = app.job_screen.query_one("#loads")
+        assert view.selected == 1
+        await burst(pilot, F4)  # F4 in the loads view itself: the field left there
+        assert app.focused is not value.input
+        await burst(pilot, CTRL_Z)
+        assert [r["value"] for r in s.rows("loads")[:2]] == [first, second]
+
+
+@sync
+async def test_an_f_key_back_after_another_job_is_opened_gives_no_field_and_no_old_text(
+        tmp_path):
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        title = await at_end_of(pilot, app, "job", "title")
+        await burst(pilot, " bay 2")
+        await burst(pilot, F8)
+        js.set_session(Session.new(library_dir=js.session.library_dir))
+        await settle(pilot)
+        new_title = js.session.doc.get("title")
+        await burst(pilot, "\x1bOQ")  # F2
+        assert app.focused is not title.input
+        title.input.focus()
+        await settle(pilot)
+        await burst(pilot, CTRL_Z)  # nothing of the last job's title comes back
+        assert js.session.doc.get("title") == new_title
+
+
+@sync
+async def test_a_field_left_with_its_text_selected_comes_back_with_nothing_selected(tmp_path):
+    # Tab into the title (its text selected), F8, F2 and a key: the key is added where the
+    # cursor was, never a replacement of the whole title
+    app = make_app(demo_copy(tmp_path), cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        js = app.job_screen
+        title = field(app, "job", "title")
+        before = title.value
+        title.input.focus()
+        await settle(pilot)
+        assert not title.input.selection.is_empty  # selected as the focus came
+        await burst(pilot, F8 + "\x1bOQ" + "7")
+        assert app.focused is title.input
+        assert js.session.doc.get("title") != "7" and "7" in js.session.doc.get("title")
+        assert len(js.session.doc.get("title")) == len(before) + 1

@@ -21,6 +21,7 @@ from textual.app import App, ComposeResult
 from textual.binding import Binding
 from textual.screen import Screen
 from textual.widgets import ContentSwitcher, Footer, Input, Static
+from textual.widgets.input import Selection
 from textual.worker import get_current_worker
 
 from shopbeam import escapes, units
@@ -132,14 +133,16 @@ class JobScreen(Screen):
         Binding("f1", "app.help", "keys", priority=True),
         Binding("question_mark", "app.help", "keys", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
-    ] + [Binding(",".join([key] + ([OPTION_DIGITS[key]] if key in OPTION_DIGITS else [])),
+    ] + [Binding(",".join([key, f"alt+{key}"] + ([OPTION_DIGITS[key]]
+                                                if key in OPTION_DIGITS else [])),
                  f"view('{vid}')", name, show=False, priority=False)
          for (vid, key, name, _s, _c) in VIEWS] + [
-        # an F-key (or alt+digit) back to a view puts the cursor back in the field left there
-        # (typing goes on where it stopped); a digit view key leaves the view itself picked,
-        # so the next digit of a burst switches views again and never lands in a field
-        Binding(f"{fkey},alt+{key}", f"view('{vid}', True)", name, show=False, priority=False)
-        for (vid, key, name, _s, _c), fkey in zip(VIEWS, VIEW_FKEYS)]
+        # an F-key back to a view puts the cursor back in the field left there (typing goes
+        # on where it stopped); a digit view key (alt+digit too, which a terminal over SSH
+        # sends as Esc and the digit) leaves the view itself picked, so the next digit of a
+        # burst switches views again and never lands in a field
+        Binding(fkey, f"view('{vid}', True)", name, show=False, priority=False)
+        for (vid, _k, name, _s, _c), fkey in zip(VIEWS, VIEW_FKEYS)]
 
     def __init__(self, session: Session) -> None:
         super().__init__()
@@ -398,7 +401,9 @@ class JobScreen(Screen):
         self.flush_typing()
         left = self.focused
         if isinstance(left, FieldInput) and self.current in {a.id for a in left.ancestors}:
-            self._left_fields[self.current] = left
+            # the field, and what it showed: it is given the cursor back only while it still
+            # shows that (the same job, row and text), never another load's value in its place
+            self._left_fields[self.current] = (left, self._field_context(left))
         elif self.current != vid:
             self._left_fields.pop(self.current, None)
         self._switched = (vid, time.monotonic())
@@ -411,17 +416,28 @@ class JobScreen(Screen):
         switcher.current = vid
         self.refresh_all()
         view = self.query_one(f"#{vid}")
-        back = self._left_fields.get(vid) if resume else None
+        back, was = self._left_fields.get(vid, (None, None)) if resume else (None, None)
         if back is not None and back is not left and back.is_attached \
-                and view in back.ancestors and shown_now(back):
+                and view in back.ancestors and shown_now(back) \
+                and self._field_context(back)[:-1] == was[:-1]:
             back.resume_next = True  # no selection: the keys typed next are added, not a
             self.set_focus(back)     # replacement of the text
             if self.focused is back:
+                at = min(was[-1], len(back.value))  # the cursor where it was, nothing picked
+                back.selection = Selection.cursor(at)
+                self.call_after_refresh(back.show_cursor)
                 return
             back.resume_next = False
         self.set_focus(view)  # now, so the next key of a burst already goes to the new view
         if self.focused is not view:
             self.call_after_refresh(self._focus_first, view)
+
+    def _field_context(self, field) -> tuple:
+        """What a text field shows, to know it again: the job, the row of a supports or loads
+        view, the field's text, and (last) where its cursor is."""
+        rows = next((a for a in field.ancestors if isinstance(a, RowsView)), None)
+        return (id(self.session), getattr(rows, "selected", None), field.value,
+                field.cursor_position)
 
     def _focus_first(self, view) -> None:
         """The view itself takes the focus, not its first field: a view key pressed next
@@ -1456,9 +1472,12 @@ class JobScreen(Screen):
         self._settled_length = session.doc.get("beam.length")
         self._length_from = None  # another job: its positions are as typed for its length
         self.set_focus(None)
+        self._left_fields.clear()  # another job: no field of the last one is gone back to
         for f in self.query(Field):
             f.forget_typing()
             f._kept = None
+        for fi in self.query(FieldInput):
+            fi.at_focus = fi.undone = None  # ctrl+z never puts back the last job's text
         for c in self.query(Choice):
             c._pending = None
         for v in self.query(RowsView):

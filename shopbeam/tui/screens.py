@@ -27,10 +27,10 @@ KEYS = [
         ("F1", "these keys"),
         ("F2 to F12", "views in the order of the bar: F2 job, F3 span, F4 loads, F5 section, "
                       "F6 material, F7 criteria, F8 results, F9 plots, F10 calc sheet, "
-                      "F11 rating, F12 sizing (alt+digit works too, except alt+3 and "
-                      "alt+6 in the title, notes, tags and labels, which type the £ and § "
-                      "of a UK keyboard there); back to a view, the cursor goes back into "
-                      "the field you left there, where it was"),
+                      "F11 rating, F12 sizing; back to a view, the cursor goes back into "
+                      "the field you left there, where it was (alt+digit switches views too, "
+                      "with no field picked; in the title, notes, tags and labels it types "
+                      "the character a keyboard gives it there, such as £ and §)"),
         ("ctrl+s", "save (a bundled preset is saved as your own copy; says where)"),
         ("ctrl+d", "save as: this job, or in the library the picked job, under a new name"),
         ("ctrl+o", "library: open a job"),

@@ -69,7 +69,7 @@ class _SheetView(View):
             body.update(Text(fit_text(problems_text(ev), width)))
             self._for = None
             return
-        refused = self.refused(ev.job)
+        refused = self._refused = self.refused(ev.job)
         if refused:  # known before any work: said at once, with no "working out" first
             body.update(Text(fit_text(refused, width)))
             self._for = self._out = None
@@ -127,10 +127,12 @@ class _SheetView(View):
             return None
         return self._out
 
+    _refused = ""  # why this view's sheet is not made for the job shown, if it is not
+
     def _not_ready(self) -> bool:
         if self.printable() is None:
-            self.app.notify("Nothing to write yet: wait for the sheet (or fix the job's "
-                            "problems first).", severity="warning")
+            self.app.notify(self._refused or "Nothing to write yet: wait for the sheet (or fix "
+                            "the job's problems first).", severity="warning")
             return True
         return False
 
@@ -232,8 +234,9 @@ class CalcView(_SheetView):
 
         beam = job.beam()
         why = calc_problem(beam.supports, beam.loads)
-        return (f"No exact calc sheet for this job: {why[0].upper()}{why[1:]}. The Results "
-                "and Plots views (and the report) have every figure." if why else "")
+        return ("No exact calc sheet for this job: "
+                + why.replace("the exact calc sheet of ", "a sheet of ", 1)
+                + ". The Results and Plots views have every figure." if why else "")
 
 
 class RatingView(_SheetView):

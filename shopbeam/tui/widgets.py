@@ -242,6 +242,14 @@ class FieldInput(KeepFocusOnStaleHide, Input):
 
     resume_next = False  # the next focus comes back to go on typing (a view's F-key)
 
+    def show_cursor(self) -> None:
+        """Scroll a long text to its cursor (the focus coming back to it: the blur left it
+        shown from its start)."""
+        from textual.geometry import Region  # noqa: PLC0415
+        if self.has_focus:
+            self.scroll_to_region(Region(self._cursor_offset, 0, width=1, height=1),
+                                  force=True, animate=False)
+
     def focus_arrived(self) -> None:
         """The focus came here (called by the screen as it moves, not when the queued Focus
         event arrives): select the text now, so the next key of a fast burst replaces it
