@@ -131,6 +131,8 @@ label = "mechanic standing on it"
     # an equipment skid named once: its other "skid" words are that skid
     ("Compressor skid side rail", "mechanic standing on the skid", '["skid"]',
      "compressor foot", False),
+    ("Compressor skid side rail", "Each skid rail sits on two isolator pads", '["skid"]',
+     "compressor foot", False),
     # where the racks are is not what the member is
     ("Lean-to rafter", "Lean-to over the lumber racks", "[]", "roofing", False),
     ("Walkway beam", "runs beside the pallet racks", "[]", "grating", False),
@@ -548,3 +550,93 @@ def test_a_label_with_two_masses_is_compared_with_their_sum(dead, hold):
               mid="2 m", live="-4.905 kN")
     text = hoist(**si, dead=dead, dead_label="chain block 9 kg, trolley 11 kg")
     assert bool(held(text, "dead load in N")) == hold
+
+
+@pytest.mark.parametrize("label, duration", [("snow-melt salt", "two-months"),
+                                             ("construction: drywall mud pails",
+                                              "seven-days")])
+def test_goods_whose_label_starts_with_a_load_word_do_not_get_its_duration(label, duration):
+    text = simple("Garage shelf beam", "Stored goods.", WOOD_BEAM,
+                  UNIFORM.format(label=label), '["shelf"]', f'duration = "{duration}"')
+    assert held(text, f'duration = "{duration}"')
+
+
+def test_a_hanger_key_that_says_the_end_dropped_is_a_settlement():
+    text = simple("Pipe rack beam welded to a column", "", 'length = "10 ft"\n'
+                  'section = "W8x18"\nmaterial = "A992"\nbraced = true',
+                  UNIFORM.format(label="pipes"),
+                  supports='[[supports]]\nat = "0 ft"\ntype = "fixed"\n[[supports]]\n'
+                           'at = "{L}"\ntype = "roller"\nhanger_rod_drop = "0.5 in"\n')
+    assert held(text, "settlement")
+
+
+@pytest.mark.parametrize("notes, rack", [
+    ("Holds a skid of spare filter media above the pump skid.", True),
+    ("Walkway beam by the pallet racks.", False)])
+def test_a_skid_of_goods_stays_a_rack_word_and_by_the_racks_is_a_place(notes, rack):
+    text = simple("Beam over the pump skid" if rack else "Walkway beam", notes,
+                  'length = "8 ft"\nsection = "HSS4x2x1/4"\nmaterial = "A500-C"',
+                  UNIFORM.format(label="load"), "[]")
+    assert bool(held(text, "storage rack")) == rack
+
+
+@pytest.mark.parametrize("notes", ["Holes in the column side of the arm for the bolts.",
+                                   "Bolted through the post end of the arm.",
+                                   "Slots in the post end of the arm."])
+def test_a_part_of_the_arm_named_by_the_column_it_meets_is_still_cut(notes):
+    text = simple("Bar rack arm", notes.replace("Bolted through", "Holes drilled through"),
+                  'length = "30 in"\nsection = "HSS4x2x1/4"\nmaterial = "A500-C"',
+                  UNIFORM.format(label="bar stock"), '["not-rack"]',
+                  supports='[[supports]]\nat = "0 in"\ntype = "fixed"\n')
+    assert held(text, "cut member")
+
+
+@pytest.mark.parametrize("notes, slip", [
+    ("End stops at 6 in and 30 in from the ends of the beam.", True),
+    ("Trolley stops at 6 in and 30 in from each end.", True),
+    ("Short travel over the press only: stops at 6 in and 30 in from the left hanger.", False)])
+def test_an_inch_travel_measured_from_the_ends_is_not_the_travel_typed(notes, slip):
+    text = TROLLEY.format(notes=notes).replace('["57 in", "87 in"]', '["6 in", "30 in"]')
+    assert bool(held(text, "feet meant")) == slip
+
+
+def test_fir_larch_named_with_its_grade_is_compared_with_typed_values():
+    typed = ('[beam.material]\nkind = "lumber"\ne = "1900000 psi"\nfb = "1500 psi"\n'
+             'fv = "180 psi"\nfc_perp = "625 psi"\ndensity = "34 lb/ft^3"')
+    text = CUSTOM_WOOD.format(material=typed).replace(
+        "Cedar 2x6 No.2 (NDS values typed in). Shelf for finished parts, indoors.",
+        "Stock from the yard: Fir-Larch No.2, stamped.").replace(", western red cedar 2x6", "")
+    assert held(text, "above those of DF-L-2")
+
+
+def test_a_girder_whose_notes_name_the_joists_it_carries_is_held_for_an_o_c_width():
+    text = simple("Overhead storage platform beam, W8x18", "Carries the 2x10 floor joists.",
+                  'length = "14 ft"\nsection = "W8x18"\nmaterial = "A992"\nbraced = true',
+                  '[[loads]]\ntype = "uniform"\nvalue = "-125 psf"\nwidth = "24 in o.c."\n'
+                  'label = "storage"\n', '["platform"]')
+    assert held(text, "is a spacing")
+    carried = text.replace("Overhead storage platform beam, W8x18",
+                           "Platform beam carrying the joists")
+    assert held(carried, "is a spacing")
+
+
+def test_goods_named_in_a_sentence_about_a_lift_are_not_a_storage_hook():
+    text = simple("Shop beam, W8x18", "Engine, with its hoses still on, hung on the hook at "
+                  "mid-span while it is pulled.", 'length = "12 ft"\nsection = "W8x18"\n'
+                  'material = "A992"', '[[loads]]\ntype = "point"\nat = "6 ft"\n'
+                  'value = "-600 lbf"\nlabel = "engine"\n', "[]")
+    assert held(text, "lifting device")
+
+
+def test_a_mesh_deck_over_plywood_is_not_excused_as_light():
+    text = CATWALK.format(title="Catwalk joist", notes="", tags='["catwalk"]',
+                          deck="welded wire mesh deck over 3/4 in plywood")
+    assert [w for w in parse_job_text(text).warnings if "lighter than a 1/2 in plywood" in
+            w.message]
+
+
+def test_a_label_giving_masses_and_their_total_is_read_as_the_total():
+    si = dict(system="si", length="4 m", section="IPE200", material="S275", u="m",
+              mid="2 m", live="-4.905 kN")
+    text = hoist(**si, dead="-196 N", dead_label="block and trolley, 9 kg + 11 kg = 20 kg")
+    assert not held(text, "dead load in N")

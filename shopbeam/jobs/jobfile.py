@@ -703,8 +703,9 @@ _CUT_KEY = re.compile(r"(?:^|[_\- ])(?:notch(?:es|ed)?|copes?|coped|coping|holes
 
 # ... unless it names a hanger or rod and no settling ("hanger_drop", "drop_rod", "rod_length":
 # how far the member hangs below what holds it, not a settlement)
-_NOT_SETTLE_KEY = re.compile(r"^(?!.*(?:settl|sink|subsid|sag)).*(?:hangers?|rods?)",
-                             re.IGNORECASE)
+_NOT_SETTLE_KEY = re.compile(r"^(?:hanger|rod)[_-]?(?:drop|length)$|^drop[_-]?rod$|"
+                             r"^(?!.*(?:settl|sink|subsid|sag|drop|displace|move|delta|offset))"
+                             r".*(?:hangers?|rods?)", re.IGNORECASE)
 
 # An unknown key of a support that reads like a settlement (a drop of the support given)
 _SETTLE_KEY = re.compile(r"(?:^|[_-])(?:settle(?:ment|s|d)?|settling|sinks?|sinking|"
@@ -1757,13 +1758,16 @@ _REPEATED_MEMBER = re.compile(r"\b(?:joists?|rafters?|purlins?|girts?|studs?|str
 
 def _spacing_widths(r: _Reader, raw_loads, beam, title, notes) -> None:
     """A width written as a spacing ("24 in o.c.") is the tributary width of a member repeated
-    at that spacing (a joist). On a member that the words do not name as one (a girder or a
+    at that spacing (a joist). On a member that its title does not name as one (a girder or a
     platform beam that the joists at that spacing bear on) it reads as the spacing of what it
     carries, not its own tributary width (half the joists' spans each side), so NOT RATED:
     write the width without o.c. if it is meant."""
-    if (isinstance(beam, dict) and beam.get("repetitive") is True) or any(
-            _search(_REPEATED_MEMBER, _as_words(t)) for t in (title, notes)
-            if isinstance(t, str)):
+    words = _as_words(title) if isinstance(title, str) else ""
+    named = any(not re.search(r"\b(?:carr(?:y|ies|ying)|supports?|supporting|under|below|"
+                              r"beneath|for|holds?|holding|with|bears?|bearing)\b[^|]{0,25}$",
+                              words[:m.start()], re.IGNORECASE)
+                for m in _REPEATED_MEMBER.finditer(words))
+    if (isinstance(beam, dict) and beam.get("repetitive") is True) or named:
         return
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         w = ld.get("width") if _is_table(ld) else None
@@ -2427,7 +2431,8 @@ def _floor_dead_total(r: _Reader, loads: list[Load], raw_loads, tags, section, m
         raw = raw_loads[i] if 0 <= i < len(raw_loads) else None
         if ld.kind == "uniform" and ld.case == "dead" and _is_table(raw) \
                 and ld.key in r.widths and (not ld.label or _DECK_WORDS.search(
-                    _as_words(ld.label)) and not _LIGHT_DECK.search(_as_words(ld.label))) \
+                    _as_words(ld.label)) and not (_LIGHT_DECK.search(_as_words(ld.label))
+                                                  and not _WOOD_DECK.search(_as_words(ld.label)))) \
                 and 0 < abs(ld.w1) / r.widths[ld.key] < LIGHTEST_DECK:
             # a deck's weight per area lighter than a plywood deck alone: "-1.2 psf" for
             # "-12 psf", a digit or the decimal point slipped
@@ -2880,6 +2885,8 @@ _VEHICLE_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|
 # grating, checker plate and perforated plank weigh 3 to 10 psf and more, heavier than the
 # plywood the rule compares with, so they are not excused)
 _LIGHT_DECK = re.compile(r"\b(?:expanded[- ]metal|(?:wire |welded )?mesh)\b", re.IGNORECASE)
+_WOOD_DECK = re.compile(r"\b(?:plywood|ply|osb|boards?|planks?|decking|concrete|slab|grout|"
+                        r"tiles?|gypcrete|topping)\b", re.IGNORECASE)
 
 
 def _floor_said(tags, title="", notes="") -> str:
@@ -2980,8 +2987,11 @@ def _inches_said(travel, words: str) -> bool:
     # (not "30 in from the right end", which the travel would then have to say)
     said = re.search(rf"(?<![\d.]){re.escape(nums[0])}{inch}\s*(?:and|to|-|–)\s*"
                      rf"{re.escape(nums[1])}{inch}", words)
-    return bool(said) and not re.match(r"\s*(?:from|off) (?:the )?(?:right|far|other|east|west|"
-                                       r"north|south|back|rear|wall|stop)", words[said.end():])
+    # (from the left end or hanger, where the travel is measured from, is what it says)
+    return bool(said) and not re.match(r"\s*(?:from|off|in from|short of) (?:the |each |both |"
+                                       r"either |its )?(?!left\b)(?:[\w-]+ )?(?:ends?|sides?|"
+                                       r"walls?|stops?|supports?|hangers?|right)\b",
+                                       words[said.end():])
 
 
 def _trolley_spacing(r: _Reader, moving, system: str, raw=None, length=None,
@@ -3096,7 +3106,10 @@ def _label_mass_agrees(ld) -> bool:
     masses = [float(m.group(1)) for m in _LABEL_KG.finditer(ld.label or "")]
     if not masses:
         return False
-    w = sum(masses) * units.G0  # "block 9 kg, trolley 11 kg": the two together
+    top = max(masses)
+    # "block 9 kg, trolley 11 kg": the two together; "9 kg + 11 kg = 20 kg": the total given
+    w = (top if len(masses) > 2 and abs(2 * top - sum(masses)) <= 0.01 * top
+         else sum(masses)) * units.G0
     return w > 0 and abs(abs(ld.total_force) - w) <= 0.05 * w
 
 
@@ -4578,6 +4591,20 @@ _STORAGE_HOOK = re.compile(
     r"its|their)\s+hooks?\b", re.IGNORECASE)
 
 
+_MACHINE_WORDS = re.compile(r"\b(?:engines?|motors?|transmissions?|gearbox(?:es)?|pumps?|dies?|"
+                            r"mou?lds?|cars?|trucks?|vehicles?|pull(?:ed|ing|s)?|lift(?:ed|ing|s)?|"
+                            r"hoist\w*|raise[ds]?|lower(?:ed|ing|s)?|rigg\w*|loads?)\b",
+                            re.IGNORECASE)
+
+
+def _off_storage_hooks(text: str) -> str:
+    """The text with goods stored on a hook taken out, sentence by sentence, where the
+    sentence names no machine or lift ("an engine, its hoses still on, hung on the hook while
+    it is pulled" stays)."""
+    return "".join(part if _MACHINE_WORDS.search(part) else _STORAGE_HOOK.sub(" ", part)
+                   for part in re.split(r"(?<=[.;!?\n])", _as_words(text)))
+
+
 def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -> str:
     """A job that reads like a lifting device but is not tagged one gets a warning, and what
     gave it away is returned (a rating is not posted on it): the easy slip is a hoist beam
@@ -4586,8 +4613,7 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     if is_lifting(tags, criteria.lifting) or NOT_LIFTING in tags:
         return ""
     # goods stored on a hook ("two ladders hung on the hook") are not a load on a hoist's hook
-    title, notes = (_STORAGE_HOOK.sub(" ", _as_words(t)) if isinstance(t, str) else t
-                    for t in (title, notes))
+    title, notes = (_off_storage_hooks(t) if isinstance(t, str) else t for t in (title, notes))
     said = _words_found(_LIFTING_WORDS, title, notes, tags, raw_loads, _LIFTING_TAGS)
     # a tag written as one run-together word ("hoistbeam", "jibcrane", "liftingdevice")
     said += [f"tag {t!r}" for t in tags if _LIFTING_STEMS.search(re.sub(r"[\W_]", "", t))
@@ -4917,8 +4943,11 @@ _CUT_WORDS = re.compile(
     r"slotted|slots?|openings? in the (?:web|flange)|penetrations?)\b"
     # ...nor the holes or slots of what the member is fixed to ("bolted through slotted holes
     # in the column flange")
+    # (not "the column end of the arm", "the post side": a part of this member named by
+    # what it meets)
     r"(?!(?: holes?| slots?)? (?:in|on|of|through) (?:the |a |an )?(?:uprights?|posts?|"
-    r"columns?(?! end)|walls?|slab|floor|cap plates?|base plates?)\b)",
+    r"columns?|walls?|slab|floor|cap plates?|base plates?)\b(?!(?: [\w-]+)?? (?:ends?|sides?|"
+    r"faces?|edges?)\b))",
     re.IGNORECASE)
 
 
@@ -4944,7 +4973,7 @@ def _cut_hint(r: _Reader, title, notes, tags, raw_loads) -> None:
 # where the racks are, not what the member is ("a lean-to over the lumber racks", "the hoist
 # runs above the die racks")
 _RACK_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|next to|near|"
-                         r"past|around|along|alongside|in front of|opposite) "
+                         r"by|past|around|along|alongside|in front of|opposite) "
                          r"(?:the |a |an |our |two |three |four )?(?:[\w-]+ ){0,2}?"
                          r"(?:racks?|racking)\b", re.IGNORECASE)
 # a plant's equipment skid, named so once: the job's other "skid" words are that skid
@@ -4967,11 +4996,12 @@ def _rack_hint(r: _Reader, title, notes, tags, raw_loads, lifting: bool = False,
     notes = _RACK_PLACE.sub(" ", _as_words(notes)) if isinstance(notes, str) else notes
     if _EQUIPMENT_SKID.search(" | ".join(_as_words(t) for t in (title, notes)
                                          if isinstance(t, str))):
-        # that skid, named again ("the skid", a tag "skid"); skids of goods ("skids of filter
-        # media stored above it") stay rack words
+        # that skid, named again ("the skid", "each skid rail", a tag "skid"); skids of goods
+        # ("a skid of filter media", "skids of castings") stay rack words
         tags = [t for t in tags if not (isinstance(t, str) and re.fullmatch(
             r"skid", _as_words(t).strip(), re.IGNORECASE))]
-        that = re.compile(r"\b(?:the|this|that|its|a|each) skid\b(?!s)|" + _EQUIPMENT_SKID.pattern,
+        that = re.compile(r"\b(?:the|this|that|its|each|a|one) skid\b(?!s)(?! of\b)|"
+                          + _EQUIPMENT_SKID.pattern,
                           re.IGNORECASE)
         title, notes = (that.sub(" ", _as_words(t)) if isinstance(t, str) else t
                         for t in (title, notes))
@@ -5078,7 +5108,8 @@ def _family_mismatch(r: _Reader, section, material, system: str = "us") -> None:
 _GRADE_NO = r"(?:(?<![\w#])No\.?\s?|(?<![\w#])#)([123])\b"
 _GRADE_BTR = re.compile(_GRADE_NO + r"\s*(?:&|and)\s*(?:btr|better)\b", re.IGNORECASE)
 _GRADE_WORDS = re.compile(
-    r"(?:\b\d+x\d+\s+|\b(?:DF|DF-L|Doug(?:las)? fir|SPF|HF|Hem[- ]?fir|SP|SYP|pine)\s+)"
+    r"(?:\b\d+x\d+\s+|\b(?:DF|DF-L|Doug(?:las)? fir|SPF|HF|Hem[- ]?fir|SP|SYP|pine|"
+    r"larch)\s+)"
     + _GRADE_NO
     + r"|" + _GRADE_NO
     + r"(?:\s*(?:&|and)\s*(?:btr|better))?\s+(?:grade|DF|DF-L|Doug|SPF|HF|Hem|SP\b|SYP|"
@@ -5118,7 +5149,8 @@ def _grade_words(r: _Reader, material, title, notes) -> None:
                "grade on the stamp")
 
 
-_SPECIES_WORDS = (("DF-L", re.compile(r"\b(?:df(?:-l)?|douglas|doug[- ]?fir)\b", re.I)),
+_SPECIES_WORDS = (("DF-L", re.compile(r"\b(?:df(?:-l)?|douglas|doug[- ]?fir|fir[- ]larch)\b",
+                                       re.I)),
                   ("HF", re.compile(r"\b(?:hf|hem[- ]?fir)\b", re.I)),
                   ("SPF", re.compile(r"\b(?:spf|spruce[- ]pine[- ]fir)\b", re.I)),
                   ("SP", re.compile(r"\b(?:sp|syp|southern (?:yellow )?pine)\b", re.I)))
@@ -5535,7 +5567,7 @@ def _service_words(r: _Reader, beam: dict, title, notes, tags, section=None,
 # The label must name the load itself ("snow", "roof snow", "snow load 25 psf", "wind
 # uplift"), not goods that carry the word ("snow blower", "earthquake kit", "construction
 # adhesive"): after the word, only the load's own words, a figure or the end of the label.
-_LOAD_TAIL = r"(?=\s*(?:$|[\d(\[,;:/-]|(?:loads?|forces?|pressures?|{more})\b))"
+_LOAD_TAIL = r"(?=\s*(?:$|\d|\(|(?:loads?|forces?|pressures?|{more})\b))"
 _DURATION_LOADS = {
     "two-months": (re.compile(r"^\s*(?:(?:roof|ground|design|balanced|unbalanced|drifting|"
                               r"drift(?:ed)?|sliding|rain[- ]on)[- ]+)*snow"
