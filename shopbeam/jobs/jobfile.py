@@ -1771,7 +1771,7 @@ def _spacing_widths(r: _Reader, raw_loads, beam, title, notes) -> None:
         return
     for i, ld in enumerate(raw_loads if isinstance(raw_loads, list) else ()):
         w = ld.get("width") if _is_table(ld) else None
-        if isinstance(w, str) and _ON_CENTRES.search(w) and _ON_CENTRES.sub("", w).strip():
+        if _spacing_of(w) is not None:
             key = f"loads[{i}].width"
             r.hold(f"width = {w!r} is written as a spacing (on centres): that is the tributary "
                    "width of a member repeated at that spacing, a joist or rafter, but the words "
@@ -1784,12 +1784,18 @@ def _spacing_widths(r: _Reader, raw_loads, beam, title, notes) -> None:
                    "it (a joist): write its own tributary width without o.c.")
 
 
+def _spacing_of(w) -> str | None:
+    """A width written as a spacing ("16 in o.c.") without its on-centres words ("16 in"),
+    or None where it is not written so."""
+    if isinstance(w, str) and _ON_CENTRES.search(w) and _ON_CENTRES.sub("", w).strip():
+        return _ON_CENTRES.sub("", w)
+    return None
+
+
 def _spaced(ld: dict) -> dict:
     """The load's table with its width read as a spacing ("16 in o.c." is 16 in)."""
-    w = ld.get("width")
-    if isinstance(w, str) and _ON_CENTRES.search(w) and _ON_CENTRES.sub("", w).strip():
-        return {**ld, "width": _ON_CENTRES.sub("", w)}
-    return ld
+    w = _spacing_of(ld.get("width"))
+    return ld if w is None else {**ld, "width": w}
 
 
 _PLACEMENT = {"point": ("at",), "moment": ("at",), "uniform": ("start", "end", "total", "width"),
@@ -1898,13 +1904,13 @@ def _said_laid_flat(r: _Reader, section, axis, title, notes, tags=()) -> None:
         return
     d = getattr(section, "dims", {}) or {}
     h, b = d.get("h"), d.get("b")
-    if h and b and b > 1.5 * h and _words_found(_ON_EDGE, title, notes, (), ()) \
+    on_edge = _words_found(_ON_EDGE, title, notes, (), ())
+    if h and b and b > 1.5 * h and on_edge \
             and not _words_found(_LAID_FLAT, title, notes, (), ()):
         # the mirror: said to stand on edge, read flat (a "3/8 x 3" bar written thickness
         # first): on the safe side, but its figure is a fraction of what was meant
         f = lambda x: units.fmt(x, "small_length", r.system)  # noqa: E731
-        edge = _words_found(_ON_EDGE, title, notes, (), ())[0]
-        r.warn(f"the job says the member stands on edge ({edge}), but "
+        r.warn(f"the job says the member stands on edge ({on_edge[0]}), but "
                f"{section.designation!r} is read FLAT, {f(h)} deep and {f(b)} wide (a size is "
                "written depth first), several times weaker than on edge. If it stands on edge, "
                f"write its depth first ({f(b)} deep by {f(h)} wide); if it lies flat, reword "
@@ -1915,7 +1921,7 @@ def _said_laid_flat(r: _Reader, section, axis, title, notes, tags=()) -> None:
     said = [f"tag {t!r}" for t in tags if isinstance(t, str) and _FLAT_TAG.match(t.strip())]
     if not said and not _names_framing(title):
         said = _words_found(_LAID_FLAT, title, notes, (), ())
-    if not said or _words_found(_ON_EDGE, title, notes, (), ()) or any(
+    if not said or on_edge or any(
             p.key == "beam.section" and "wide first" in p.message for p in r.problems):
         return  # (a size written wide first is held for its axis already)
     r.hold(f"the job says the member lies flat ({'; '.join(said[:2])}), but "
