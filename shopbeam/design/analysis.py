@@ -13,7 +13,7 @@ import numpy as np
 
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, cautions_for, normal_tag
-from shopbeam.design import fatigue, loading
+from shopbeam.design import fatigue, loading, uplift
 from shopbeam.design.basis import cb_factor, support_braces, tip_hung, unbraced_segments
 from shopbeam.design.checks import (Check, Unchecked, aluminum_unchecked, basis_of, check_notes, governing,
                                     impact_of, not_checked_words, strengths, wood_load_case)
@@ -109,7 +109,7 @@ STAINLESS = ("Stainless steel is checked here by the AISC 360-16 carbon-steel ru
              "strength the member is NOT RATED.")
 
 
-def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
+def job_cautions(job: Job, sol: Solution | None = None, held: Solution | None = None) -> list[str]:
     out = cautions_for(job.tags, job.caution_lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
     if replaces_angle_warning(job):  # F10 checks the principal axes (or the job restrains it)
@@ -131,7 +131,7 @@ def job_cautions(job: Job, sol: Solution | None = None) -> list[str]:
                            for s in job.supports):
         out.append(HANGER_BRACE)
     if sol is not None:
-        out += uplift_notes(job, sol) + live_off_uplift(job, sol)
+        out += uplift_notes(job, sol, held) + live_off_uplift(job, sol)
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:
             out.append("A self-check did not pass (" + ", ".join(bad) + "): do not rely on "
@@ -149,13 +149,18 @@ HANGER_BRACE = ("Each support is taken as holding the beam against twist where i
                 "false on that support")
 
 
-def uplift_notes(job: Job, sol: Solution) -> list[str]:
-    """A support that pulls the member down (uplift): it must be anchored, not merely bear."""
-    top = max([abs(r.force) for r in sol.reactions] + [0.0])
+def uplift_notes(job: Job, sol: Solution, held: Solution | None = None) -> list[str]:
+    """A support that pulls the member down (uplift): it must be anchored, not merely bear.
+    `held`: the solution with the dead loads at 0.6 (`design.uplift`), where it pulls harder."""
+    rs = sol.reactions if held is None else held.reactions
+    top = max([abs(r.force) for r in sol.reactions + rs] + [0.0])
     out = []
-    for r in sol.reactions:
+    for r, r6 in zip(sol.reactions, rs):
+        at = units.fmt(r.at, 'length', job.units)
+        if held is not None and r6.force < min(r.force, 0.0) - 1e-9 * top:
+            r, at = r6, f"{at} with the dead loads at 0.6 ({uplift.CLAUSE})"
         if r.kind in ("pin", "roller", "fixed", "spring") and r.force < -1e-9 * top:
-            out.append(f"UPLIFT: the {r.kind} at {units.fmt(r.at, 'length', job.units)} pulls "
+            out.append(f"UPLIFT: the {r.kind} at {at} pulls "
                        f"the member DOWN with {units.fmt(-r.force, 'force', job.units)}: anchor "
                        "it for that force (a seat or bracket that only bears lets the member "
                        "lift off), and check the anchor")
@@ -298,8 +303,18 @@ def analyze(job: Job) -> Result:
     # (check_notes names the member's own strength ones)
     said = set(st.unchecked)
     notes += [not_checked_words(u) for u in unchecked if u not in said]
+    held = None
+    if uplift.applies(job):
+        # a live load pushes up: every check again with the dead loads at 0.6, the worse kept
+        held = analyze(uplift.held_down(job))
+        checks = uplift.merge(checks, held.checks)
+        notes.append(uplift.note(job, [c.name for c in checks if uplift.STATE in c.state]))
+        more = [u for u in held.unchecked if u not in unchecked]
+        unchecked += more
+        notes += [not_checked_words(u) for u in more if u not in said]
+        held = held.solution
     return Result(job, sol, tuple(checks),
-                  tuple(job_cautions(job, sol) + check_notes(job, st) + notes), shown,
+                  tuple(job_cautions(job, sol, held) + check_notes(job, st) + notes), shown,
                   state_sol, state_words, tuple(unchecked),
                   reaction_envelope=tuple(envelope))
 

@@ -47,7 +47,7 @@ from shopbeam.engine.model import Beam, segments
 from shopbeam.members.catalog import other_metal_on_steel_shape
 from shopbeam.engine.solver import sound_solve
 from shopbeam.design.lifting import profile_of
-from shopbeam.design import fatigue
+from shopbeam.design import fatigue, uplift
 from shopbeam.cautions import RACK_TAGS
 from shopbeam.jobs.rules import rack_arm
 from shopbeam.jobs.jobfile import (HOIST_NEAR, STUBBY_LIMIT, WheelSet, grade_gap, kind_mismatch, lifting_uniform_words,
@@ -506,9 +506,29 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
     res = _cantilever_top_rate(job, section, ss, st, res)
     res = _hogging_rate(job, section, ss, st, res)
     res = _with_live_off(job, section, ss, st, res)
-    return replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
-                   + _relieving_couples(job, section, res.factor)
-                   + _relieving_dead_couples(job, section, res.factor))
+    res = replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
+                  + _relieving_couples(job, section, res.factor)
+                  + _relieving_dead_couples(job, section, res.factor))
+    return _held_down(job, section, ss, st, res) if uplift.applies(job) else res
+
+
+def _held_down(job, section, ss, st, res: CapacityResult) -> CapacityResult:
+    """A live load that pushes up, held down by the dead loads: the job is rated again with
+    them at 0.6 (`design.uplift`, ASCE 7-16 2.4.1 combination 7), and the lower factor is
+    posted. Every reason to withhold a rating found either way is kept; the supports' ranges
+    also take the dead loads alone in full (the most a support is pushed down)."""
+    held = _rate(uplift.held_down(job), section)
+    k, k6 = res.factor, held.factor
+    reasons = tuple(dict.fromkeys(res.not_rated + held.not_rated))
+    if not k6 < k * (1 - 1e-12):
+        return replace(res, not_rated=reasons)
+    e = held.evaluation
+    if e is not None:
+        e = replace(e, checks=tuple(uplift.mark(c) for c in e.checks))
+    held = _with_live_off(job, section, ss, st, replace(held, job=job, evaluation=e))
+    said = (f"the dead loads at 0.6 against the uplift govern ({uplift.CLAUSE}); with them "
+            f"in full the factor would be {k:.4g}")
+    return replace(held, note="; ".join(x for x in (held.note, said) if x), not_rated=reasons)
 
 
 def _with_live_off(job, section, ss, st, res: CapacityResult) -> CapacityResult:

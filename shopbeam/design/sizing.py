@@ -41,6 +41,7 @@ import numpy as np
 from shopbeam import units
 from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
+from shopbeam.design import uplift
 from shopbeam.design.analysis import (HOGGING_CHECK, hogging_allowables, hogging_checks,
                                        hogging_lengths, loaded_on_top, top_flange_checks,
                                        top_load_segments, top_only)
@@ -494,6 +495,13 @@ def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note=
         method = ("section by section (wood members: NDS factors, bearing and creep per size)")
     else:
         rows, skipped, why = _batched(job, base, parts, cands, with_capacity)
+        if uplift.applies(job):
+            # a live load that pushes up: the dead loads at 0.6 too, each row the worse
+            held = uplift.held_down(job)
+            base6 = replace(held, self_weight=False)
+            rows6, _, why6 = _batched(held, base6, load_parts(base6), cands, with_capacity)
+            rows = _worse_rows(rows, rows6)
+            why = list(dict.fromkeys(list(why) + list(why6)))
         n_full = _confirm(job, rows, max(1, confirm), with_capacity, stock is not None)
         if not why:
             method = "one layout solve, all sections batched"
@@ -502,10 +510,33 @@ def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note=
             method = (f"all sections screened in one batched pass ({'; '.join(why)}), then "
                       f"checked in full lightest first until {until}")
         method += f"; {n_full} checked in full"
+    if uplift.applies(job):
+        method += (f"; the dead loads in full and at 0.6 against the uplift ({uplift.CLAUSE}), "
+                   "each section taking the worse")
     rows.sort(key=lambda r: (r.weight, r.designation))
     return SizeResult(job, label, tuple(rows), time.perf_counter() - t0, method,
                       getattr(stock, "currency", "") if stock is not None else "",
                       tuple(skipped_before) + tuple(skipped), material_note, n_full)
+
+
+def _worse_rows(rows: list, rows6: list) -> list:
+    """Each section's row at the worse of the dead loads in full (`rows`) and at 0.6 (`rows6`,
+    the same sections): the higher ratio and the lower factor. A row that is exact both ways
+    stays exact; otherwise it is a screen (a lower bound), checked in full where it counts."""
+    by = {r.designation: r for r in rows6}
+    out = []
+    for r in rows:
+        o = by.get(r.designation)
+        if o is None:
+            out.append(replace(r, checked="screen"))
+            continue
+        worse = o if o.ratio > r.ratio else r
+        fs = [f for f in (r.factor, o.factor) if not math.isnan(f)]
+        out.append(replace(worse, factor=min(fs) if fs else math.nan,
+                           checked="batched" if r.checked == o.checked == "batched"
+                           else "screen",
+                           not_rated=tuple(dict.fromkeys(r.not_rated + o.not_rated))))
+    return out
 
 
 def _size_all(job, max_depth, with_capacity, t0, confirm=1) -> SizeResult:
@@ -902,7 +933,8 @@ def _batched(job, base, parts, cands, with_capacity):
     R = len(rs)
     hog_al = np.array(hog_allow).reshape(R, len(hog_len))
     # the job's self_weight = false holds for every section (its dead loads carry it)
-    wsw = np.array([r[5] if job.self_weight else 0.0 for r in rs])
+    # (at the job's dead-load multiple: 0.6 where the dead loads hold down an uplift)
+    wsw = np.array([r[5] * job.dead_factor if job.self_weight else 0.0 for r in rs])
     ei = np.array([r[9] for r in rs])
     vallow = np.array([r[8] for r in rs])
     omega = np.array([r[6] for r in rs])
@@ -1186,10 +1218,8 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
     j = replace(job, section=row.section, material=row.material)
     try:
         ss = state_set(j)  # shared: the moving-load cells and parts cached on it are reused
-        ev = evaluate(j, 1.0, ss=ss)
         st = strengths(j, beam=ss.beam)
-        g = max(list(ev.checks) + top_flange_checks(j, st, ss) + hogging_checks(j, st, ss),
-                key=lambda c: c.ratio)
+        g = _worst_check(j, ss, st)
         fat = fatigue_check(j, st, ss, 1.0)  # fatigue given: a check
         if fat is not None and fat.ratio > g.ratio:
             g = fat
@@ -1203,6 +1233,22 @@ def _full_row(job, row: SizeRow, with_capacity: bool) -> SizeRow:
                        checked="full")
     return replace(row, ratio=g.ratio, governing=g.name, factor=kf, checked="full",
                    not_rated=why)
+
+
+def _worst_check(j, ss, st):
+    """The section's governing check at the entered loads, as the report finds it: the
+    evaluation's checks with a cantilever's top-flange loads and the bottom flange or edge
+    under hogging (a wood member's dead loads alone at CD 0.9 among them); with a live load
+    that pushes up, the worse of the dead loads in full and at 0.6 (`design.uplift`)."""
+    g = max(list(evaluate(j, 1.0, ss=ss).checks) + top_flange_checks(j, st, ss)
+            + hogging_checks(j, st, ss), key=lambda c: c.ratio)
+    if uplift.applies(j):
+        h = uplift.held_down(j)
+        hs = state_set(h)
+        g6 = _worst_check(h, hs, strengths(h, beam=hs.beam))
+        if g6.ratio > g.ratio:
+            g = uplift.mark(g6)
+    return g
 
 
 def shown_rows(res: "SizeResult", top: int | None = None) -> list["SizeRow"]:
@@ -1427,16 +1473,13 @@ def _slow(job, cands):
         j = replace(job, section=sec, material=mat)
         try:
             ss = state_set(j)
-            ev = evaluate(j, 1.0, ss=ss)
             st = strengths(j, beam=ss.beam)
-            # the report's own checks beside the evaluation's: a cantilever's top-flange
-            # loads, the bottom edge under hogging (and its dead loads alone at CD 0.9)
-            more = top_flange_checks(j, st, ss) + hogging_checks(j, st, ss)
+            # the report's own checks beside the evaluation's (`_worst_check`)
+            g = _worst_check(j, ss, st)
             cap = capacity(j, ss=ss)
         except Exception as exc:  # noqa: BLE001 - one odd section must not stop the sweep
             skipped.append(f"{des}: {exc}")
             continue
-        g = max(list(ev.checks) + more, key=lambda c: c.ratio)
         rows.append(SizeRow(des, sec, mat, sec.weight_per_length(mat.density), g.ratio, g.name,
                             cap.factor, price, note, checked="full",
                             not_rated=tuple(cap.not_rated)))

@@ -184,6 +184,10 @@ class Job:
     conversions: tuple[str, ...] = ()  # e.g. "loads[0]: -125 psf x 16 in = -166.7 lbf/ft"
     wood: object = None  # shopbeam.members.wood.Service: the wood keys (wood members only)
     project: dict = field(default_factory=dict)  # [project] title-block fields, as text
+    # every dead load (self-weight and the wheels' dead parts too) is taken at this multiple:
+    # 1 as entered; 0.6 for the combination in which the dead loads hold down an uplift
+    # (design.uplift: ASCE 7-16 2.4.1, combination 7). Never read from a job file.
+    dead_factor: float = 1.0
 
     @cached_property
     def lifting(self) -> bool:
@@ -216,6 +220,7 @@ class Job:
     def member_loads(self, live_factor: float = 1.0, dead_factor: float = 1.0) -> tuple[Load, ...]:
         """The loads one member carries: its share of the entered loads plus its own weight."""
         share = 1.0 / self.members
+        dead_factor *= self.dead_factor
         out = []
         for ld in self.loads:
             k = share * (live_factor if ld.case == "live" else dead_factor)
@@ -229,7 +234,8 @@ class Job:
         """The wheel sets as one member carries them: its share of each wheel load."""
         share = 1.0 / self.members
         return tuple(replace(w, live=tuple(x * share for x in w.live),
-                             dead=tuple(x * share for x in w.dead)) for w in self.moving)
+                             dead=tuple(x * share * self.dead_factor for x in w.dead))
+                     for w in self.moving)
 
     def beam(self, live_factor: float = 1.0, dead_factor: float = 1.0) -> Beam:
         return Beam(self.length, self.ei, self.supports,

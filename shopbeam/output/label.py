@@ -33,7 +33,7 @@ from html import escape
 
 from shopbeam import units
 from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
-from shopbeam.design import fatigue
+from shopbeam.design import fatigue, uplift
 from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
                                       hung_by_open_ends,
                                       couple_notes, flange_word, is_outdoor)
@@ -314,6 +314,9 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     on_top = _dead_words(job)
     if on_top:
         notes.append(f"These loads are IN ADDITION TO {on_top}, which stay on.")
+    if uplift.applies(job):
+        notes.append("Against the uplift only 0.6 of the dead load and own weight is counted "
+                     "on (ASCE 7-16 2.4.1); compare 0.6 W of an ASCE 7-16 wind uplift with this figure.")
     if not job.self_weight:
         notes.append("The member's own weight was LEFT OUT (self_weight = false): it must be "
                      "inside the loads entered.")

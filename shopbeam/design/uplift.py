@@ -1,0 +1,79 @@
+"""Dead loads that hold down an uplift: counted at 0.6 as well as in full.
+
+A live load marked `uplift = true` that pushes up (wind uplift, a jack) is resisted by the member's
+own weight and its dead loads. ASCE 7-16 2.4.1 (allowable stress design) takes them at 0.6 in
+that case, combination 7: 0.6D + 0.6W (and 0.6D + 0.7E, combination 8), so that a dead load a
+little lighter than assumed does not leave the member short. shopbeam checks such a job both
+ways, with the dead loads in full (D + W: a dead load that adds to the uplift's effect
+somewhere along the member, an overhang's weight, counts in full there) and at 0.6, and every
+check, capacity and sizing row takes the worse of the two. The uplift load itself is taken as
+entered, at the allowable-stress level: a wind load worked out to ASCE 7-16 (strength level)
+enters as 0.6 W.
+
+`applies` says when; `held_down` is the job at 0.6 D (`Job.dead_factor`); `merge` takes the
+larger ratio of each check (the anchor forces: `analysis.uplift_notes`).
+"""
+
+from __future__ import annotations
+
+from dataclasses import replace
+
+DEAD_FACTOR = 0.6
+CLAUSE = "ASCE 7-16 2.4.1, combination 7: 0.6D + 0.6W"
+STATE = f"dead loads at 0.6 against the uplift ({CLAUSE})"
+
+
+def pushes_up(job) -> list:
+    """The live loads marked `uplift = true` that push up somewhere (a force > 0). A load that
+    pushes up unmarked is taken as a forgotten minus sign (`Job.upward`: NOT RATED, and not
+    checked as an uplift here); a wheel cannot be marked, as a wheel only bears down."""
+    slips = {u.split(" ", 1)[0] for u in job.upward}
+    return [ld for ld in job.loads if ld.case == "live" and ld.kind != "moment"
+            and ld.key not in slips
+            and (ld.value > 0 if ld.kind == "point" else
+                 ld.w1 > 0 or (ld.kind == "linear" and ld.w2 > 0))]
+
+
+def has_dead(job) -> bool:
+    """Whether anything is dead: the member's own weight, a dead load, a wheel set's weight."""
+    return bool(job.self_weight or any(
+        ld.case != "live" and (ld.total_force or ld.kind == "moment" and ld.value)
+        for ld in job.loads) or any(any(w.dead) for w in job.moving))
+
+
+def applies(job) -> bool:
+    """A job whose dead loads may hold down a live load that pushes up (checked both ways);
+    never the held-down job itself."""
+    return job.dead_factor == 1.0 and has_dead(job) and bool(pushes_up(job))
+
+
+def held_down(job):
+    """The job with every dead load (self-weight and wheel weights too) at 0.6."""
+    return replace(job, dead_factor=DEAD_FACTOR)
+
+
+def merge(checks, other) -> list:
+    """Each check at the larger ratio of the job as entered (`checks`) and at 0.6 D (`other`,
+    the same checks by name): the 0.6 D one is taken, its state saying so, where its ratio is
+    higher; a check the 0.6 D state alone calls for (the moment hogs only there) is added."""
+    theirs = {c.name: c for c in other}
+    out = []
+    for c in checks:
+        o = theirs.pop(c.name, None)
+        out.append(c if o is None or not o.ratio > c.ratio * (1 + 1e-12) else mark(o))
+    return out + [mark(o) for o in theirs.values()]
+
+
+def mark(check):
+    """A check made at 0.6 D, its state saying so."""
+    return replace(check, state="; ".join(x for x in (check.state, STATE) if x))
+
+
+def note(job, taken: list[str]) -> str:
+    """What the report says of the two ways the job was checked."""
+    gov = (f"; at 0.6 D: {', '.join(taken)}" if taken else
+           "; the dead loads in full govern every check")
+    return (f"A live load pushes up, and the dead loads and self-weight hold it down: every "
+            f"check is made with the dead loads in full and at 0.6 ({CLAUSE}), and takes the "
+            f"worse{gov}. The uplift is taken as entered, as an allowable-stress load: a wind "
+            "load worked out to ASCE 7-16 (strength level) is entered as 0.6 W.")
