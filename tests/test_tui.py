@@ -510,3 +510,40 @@ async def test_a_sizing_sweep_that_ends_while_typing_elsewhere_leaves_the_focus_
         await settle(pilot)
         assert job_screen(app).session.doc.get("beam.section") == before
 
+
+
+@sync
+async def test_key_line_keeps_its_order_as_the_focus_moves(tmp_path):
+    # a text field's own ctrl+d (delete right) and ctrl+x (cut) put those keys first in the
+    # key line while it had the focus: the same keys swapped places from frame to frame
+    from textual.widgets._footer import FooterKey
+
+    path = tmp_path / "demo.toml"
+    shutil.copy(PRESETS / "demo.toml", path)
+    app = make_app(path, cursor_blink=False)
+
+    def line():
+        return [k.key for k in app.screen.query(FooterKey)]
+
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        for view, want in (("1", ["ctrl+s", "ctrl+d", "ctrl+o", "f1", "ctrl+q"]),
+                           ("3", ["ctrl+t", "ctrl+x", "ctrl+s", "ctrl+d", "ctrl+o", "f1",
+                                  "ctrl+q"])):
+            await pilot.press("escape", view)
+            await settle(pilot)
+            assert line() == want
+            seen = set()
+            for _ in range(6):  # through the list, the choices and the text fields
+                await pilot.press("tab")
+                await settle(pilot)
+                seen.add(type(app.focused).__name__)
+                assert line() == want, (type(app.focused).__name__, line())
+            assert "FieldInput" in seen
+        # the library keeps its order too, as it did
+        await pilot.press("ctrl+o")
+        await settle(pilot)
+        first = line()
+        await pilot.press("tab")
+        await settle(pilot)
+        assert line() == first and first

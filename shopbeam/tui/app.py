@@ -38,8 +38,8 @@ from shopbeam.tui.views import (CriteriaView, JobView, LoadsView, MaterialView, 
                                 WHEEL_WORDS, CHECKING_EDIT, CHECKING_WORDS, late,
                                 load_warnings,
                                 problems_text)
-from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, ViewBar,
-                                  from_one_line, one_line, shown_now, update_text)
+from shopbeam.tui.widgets import (OPTION_DIGITS, Banner, Choice, Field, FieldInput, SteadyKeys,
+                                  ViewBar, from_one_line, one_line, shown_now, update_text)
 
 
 # (id, key, name, short name, class); the first six are the input steps in order
@@ -116,7 +116,7 @@ def title_bar(title: str, label: str, flags: str, width: int) -> str:
     return f"{title}{' | ' + label if label else ''}{tail}"[:width]
 
 
-class JobScreen(Screen):
+class JobScreen(SteadyKeys, Screen):
     """The open job: input views, result views, the live answer and the safety banner."""
 
     # One key map for every screen (screens.KEYS says it in words; F1 shows it). Keys a

@@ -19,7 +19,7 @@ from textual.widgets.option_list import Option
 
 from shopbeam.errors import InputError
 from shopbeam.jobs import library, storage
-from shopbeam.tui.widgets import Banner, Choice, Field
+from shopbeam.tui.widgets import Banner, Choice, Field, SteadyKeys
 
 
 KEYS = [
@@ -102,7 +102,7 @@ def help_text(width: int = 74) -> str:
 READ_TIME = 0.5
 
 
-class HelpScreen(ModalScreen):
+class HelpScreen(SteadyKeys, ModalScreen):
     """The key list. Keys typed before it could be read go on to the field behind it, and
     later printable keys it does not use are named in the notice of keys not typed
     (`ShopbeamApp.on_event`), as for a question."""
@@ -126,7 +126,7 @@ class HelpScreen(ModalScreen):
         self.dismiss(None)
 
 
-class AnswerScreen(ModalScreen[str]):
+class AnswerScreen(SteadyKeys, ModalScreen[str]):
     """A question answered with one key (s, d, k, e, n, o ...). Keys typed before it could
     be read are not answers: a dialog that comes up in the middle of a burst (a save that
     meets a conflict) would take the burst's letters as its answer. Keys made less than
@@ -290,7 +290,7 @@ class LengthScreen(AnswerScreen):
         self.dismiss(answer)
 
 
-class SaveAsScreen(ModalScreen[tuple[str, str] | None]):
+class SaveAsScreen(SteadyKeys, ModalScreen[tuple[str, str] | None]):
     """Name and library place for a save as. Dismisses (name, place) or None."""
 
     BINDINGS = [Binding("escape", "cancel", "cancel")]
@@ -382,7 +382,7 @@ class ConflictScreen(AnswerScreen):
         self.dismiss(answer)
 
 
-class LibraryScreen(Screen[object]):
+class LibraryScreen(SteadyKeys, Screen[object]):
     """The three library places with the origin of every job; search, open, duplicate, new.
 
     Dismisses ("open", path) or ("new", None) or None (back)."""

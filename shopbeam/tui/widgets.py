@@ -112,6 +112,28 @@ def shown_now(widget) -> bool:
     return True
 
 
+
+class SteadyKeys:
+    """A screen whose key line keeps one order. Textual lists a screen's keys in the order it
+    meets them along the focus chain, so the same keys swap places as the focus moves (a
+    text field's own ctrl+d or ctrl+x puts that key first). Here they are always listed by
+    who owns them, the view's own keys first, then the screen's, then the app's, each in the
+    order its BINDINGS give."""
+
+    @property
+    def active_bindings(self):
+        got = super().active_bindings  # type: ignore[misc]
+
+        def rank(item):
+            key, active = item
+            node = active.node
+            tier = 2 if node is self.app else 1 if node is self else 0  # type: ignore[attr-defined]
+            # (the node's own map of keys, in BINDINGS order; none known: by key alone)
+            order = list(getattr(getattr(node, "_bindings", None), "key_to_bindings", ()))
+            return (tier, type(node).__name__, order.index(key) if key in order else len(order))
+
+        return dict(sorted(got.items(), key=rank))
+
 class KeepFocusOnStaleHide:
     """A Hide that arrives after the widget is shown again (a quick switch away and back:
     the Hide of the first switch is handled after the second switch and a Tab had put the
