@@ -1634,3 +1634,24 @@ def test_braces_on_both_flanges_beside_braced_true_hold_the_bottom_edge_too():
     held = [c for c in both.evaluation.checks if c.name == "bending, hogging"]
     assert not held or held[0].params["Lb"] == pytest.approx(2 * 0.3048)
     assert both.factor > top.factor
+
+
+def test_fatigue_stays_listed_where_the_top_flange_rule_lowers_the_factor():
+    # a fillet-welded bracket (category E, 100,000 cycles, AISC 360-16 Appendix 3) whose
+    # rating the cantilever's top-flange rule lowers: the fatigue check, listed at the factor
+    # the strength search found, is listed at the lower factor too, at its own ratio there
+    # (the live stress range is proportional to k)
+    text = BRACED_ARM.format(flange='braces_flange = "top"').replace(
+        'value = "-1000 lbf/ft"', 'value = "-1000 lbf/ft"\n[[loads]]\ntype = "uniform"\n'
+        'value = "-200 lbf/ft"\ncase = "dead"') \
+        + '[criteria]\nfatigue_category = "E"\ncycles = 100000\n'
+    cap = capacity(parse_job_text(text))
+    assert cap.rated and cap.governing.name == "bending, top-flange loads"
+    checks = {c.name: c for c in cap.evaluation.checks}
+    assert "fatigue" in checks
+    from shopbeam.design import fatigue
+    from shopbeam.design.checks import strengths
+    from shopbeam.design.loading import state_set
+    ss = state_set(cap.job)
+    at_k = fatigue.fatigue_check(cap.job, strengths(cap.job, beam=ss.beam), ss, cap.factor)
+    assert checks["fatigue"].ratio == pytest.approx(at_k.ratio, rel=1e-12)

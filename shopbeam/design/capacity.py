@@ -883,8 +883,10 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
         k2 = math.nextafter(k2, 0.0)
     g = worst(k2)
     e = evaluate(job, k2, section, ss, st)
-    c = top_flange_check(job, ss, g, words, st)
-    return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + (c,)),
+    # fatigue, listed at the factor found (`_fatigue_cap`), is listed at the lower one too
+    fat = fatigue.fatigue_check(job, st, ss, k2) if fatigue.given(job) else None
+    c = (top_flange_check(job, ss, g, words, st),) + ((fat,) if fat is not None else ())
+    return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + c),
                    note="", stepped="", method=res.method + "; lowered to where the cantilever's moment reaches "
                    "the strength its top-flange loads leave it (a bracketed root: the moment "
                    "is linear in k)")
