@@ -401,3 +401,26 @@ def test_the_save_notice_names_a_file_opened_by_a_relative_path_once(tmp_path, m
     assert _same_file("jobs/rack.toml", where)  # "Saved jobs/rack.toml to /.../rack.toml"
     assert not _same_file("jobs/other.toml", where)
     assert not _same_file("shop:rack", where)  # a library name is worth saying
+
+
+@sync
+async def test_lifting_caution_stays_on_while_lifting_is_typed_into_the_tags():
+    # typed a key at a time, ", lift" reads like a lifting device (the caution comes on), and
+    # "lifting" is one: "lifti" and "liftin" between them must not put it out for two keys
+    # (every row of the screen moved up and back down under the user's eyes)
+    app = make_app(PRESETS / "demo.toml", cursor_blink=False)
+    async with app.run_test(size=SIZE) as pilot:
+        await settle(pilot)
+        await pilot.press("escape", "1")
+        await settle(pilot)
+        f = field(app, "job", "tags")
+        f.input.focus()
+        await settle(pilot)
+        f.input.cursor_position = len(f.input.value)
+        banner = app.job_screen.query_one("#banner")
+        shown = []
+        for ch in ", lifting":
+            await send(pilot, ch, fast=False)
+            shown.append("LIFTING" in str(banner.content))
+        assert shown == [False, False, False, False, False, True, True, True, True], shown
+        assert app.job_screen.session.evaluation.job.lifting

@@ -4630,6 +4630,10 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     # a tag written as one run-together word ("hoistbeam", "jibcrane", "liftingdevice")
     said += [f"tag {t!r}" for t in tags if _LIFTING_STEMS.search(re.sub(r"[\W_]", "", t))
              and f"tag {t!r}" not in said]
+    # "lifti", "liftin": the tag lifting cut short (or being typed: the text UI's lifting
+    # caution then stays on from "lift" to "lifting" instead of going out for two keys)
+    said += [f"tag {t!r}" for t in tags if len(t.strip()) > 4
+             and "lifting".startswith(t.strip().lower()) and f"tag {t!r}" not in said]
     if not any(x.startswith("title") for x in said):  # and a run-together word of the title
         joined = [w for w in re.findall(r"[^\W\d_]+", str(title or ""))
                   if _LIFTING_STEMS.search(w)]
