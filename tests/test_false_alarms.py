@@ -552,6 +552,17 @@ def test_a_label_with_two_masses_is_compared_with_their_sum(dead, hold):
     assert bool(held(text, "dead load in N")) == hold
 
 
+@pytest.mark.parametrize("dead, label, hold", [
+    ("-88 N", "two chain blocks, 9 kg each", True),  # one block's weight for two
+    ("-177 N", "two chain blocks, 9 kg each", False),  # 2 x 9 kg x 9.81 = 176.5 N
+    ("-177 N", "2 blocks, 9 kg apiece", False),
+    ("-88 N", "chain blocks, 9 kg each", True)])  # how many is not said: the total unknown
+def test_a_mass_given_each_is_taken_times_the_count(dead, label, hold):
+    si = dict(system="si", length="4 m", section="IPE200", material="S275", u="m",
+              mid="2 m", live="-4.905 kN")
+    assert bool(held(hoist(**si, dead=dead, dead_label=label), "dead load in N")) == hold
+
+
 @pytest.mark.parametrize("label, duration", [("snow-melt salt", "two-months"),
                                              ("construction: drywall mud pails",
                                               "seven-days")])

@@ -3112,12 +3112,29 @@ _KPA = re.compile(r"\d\s*kpa\s*$", re.IGNORECASE)
 _LABEL_KG = re.compile(r"(\d+(?:\.\d+)?)\s*(?:kg|kgs|kilo(?:gram)?s?)\b", re.IGNORECASE)
 
 
+# a mass given per piece ("two chain blocks, 9 kg each"), and how many pieces the label says
+_EACH = re.compile(r"\b(?:each|apiece|a piece|per (?:piece|unit|block|item))\b", re.IGNORECASE)
+_COUNT = re.compile(r"\b(?:(\d+)(?!\s*(?:\.\d|kg|kgs|kilo|t\b|ton|tonne|mm|cm|m\b|%))"
+                    r"|(two|three|four|five|six|seven|eight|nine|ten|a pair of|both))\b",
+                    re.IGNORECASE)
+_COUNT_WORDS = {"two": 2, "three": 3, "four": 4, "five": 5, "six": 6, "seven": 7, "eight": 8,
+                "nine": 9, "ten": 10, "a pair of": 2, "both": 2}
+
+
 def _label_mass_agrees(ld) -> bool:
     """Whether the load's label gives a mass (kg) whose weight is the force typed, within 5 %
-    ("chain block, 9 kg" beside "-90 N"; several masses, their sum): the newtons are meant."""
-    masses = [float(m.group(1)) for m in _LABEL_KG.finditer(ld.label or "")]
+    ("chain block, 9 kg" beside "-90 N"; several masses, their sum): the newtons are meant.
+    A mass given each ("two chain blocks, 9 kg each") is taken times the count the label
+    gives; with no count read, it does not agree (the total is not known)."""
+    label = ld.label or ""
+    masses = [float(m.group(1)) for m in _LABEL_KG.finditer(label)]
     if not masses:
         return False
+    if _EACH.search(label) and len(masses) == 1:
+        m = _COUNT.search(_LABEL_KG.sub(" ", label))
+        n = (int(m.group(1)) if m.group(1) else _COUNT_WORDS[m.group(2).lower()]) if m else 0
+        w = n * masses[0] * units.G0
+        return n >= 2 and abs(abs(ld.total_force) - w) <= 0.05 * w
     top = max(masses)
     # "block 9 kg, trolley 11 kg": the two together; "9 kg + 11 kg = 20 kg": the total given
     w = (top if len(masses) > 2 and abs(2 * top - sum(masses)) <= 0.01 * top
