@@ -395,6 +395,21 @@ def test_a_trailer_deck_is_not_a_building_floor():
     assert [w for w in mezz.warnings if "read as a floor" in w.message]
 
 
+@pytest.mark.parametrize("title, floor", [
+    ("Platform trailer cross member under the deck boards", False),  # a flatbed
+    ("Platform truck bed cross member under the deck boards", False),
+    ("Platform beam over the truck bays, deck boards", True)])  # a building's platform
+def test_a_platform_trailer_is_a_vehicle_not_a_building_floor(title, floor):
+    from shopbeam.design.analysis import analyze
+    text = CATWALK.format(title=title, notes="16 ft deck, cross members 24 in o.c.",
+                          tags='["not-rack"]', deck="deck boards").replace(
+        '[[loads]]', '[criteria]\nimpact = "100%"\n[[loads]]', 1)
+    job = parse_job_text(text)
+    assert bool([w for w in job.warnings if "read as a floor" in w.message]) == floor
+    # nor is the walking vibration of a floor named as not checked on the vehicle
+    assert bool([u for u in analyze(job).unchecked if "vibration" in u.name]) == floor
+
+
 @pytest.mark.parametrize("material, hold", [("SP-2", False), ("DF-L-2", True), ("HF-2", True)])
 def test_treated_southern_pine_is_warned_of_incising_and_the_firs_are_held(material, hold):
     # Southern Pine takes preservative without incising as a rule; Hem-Fir and Douglas

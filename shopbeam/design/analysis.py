@@ -1489,8 +1489,9 @@ def braced_hogging(job: Job, st, moment, ss=None) -> list[Unchecked]:
 # not keep it from bouncing underfoot; walking vibration is its own serviceability limit
 # state (AISC Design Guide 11 for steel framing, from memory). A caution: it does not decide
 # strength, so it does not hold back a rating.
-_FLOOR = re.compile(r"\b(floors?|mezzanines?|mezz|platforms?|walkways?|catwalks?|joists?|"
-                    r"lofts?)\b", re.IGNORECASE)
+_FLOOR = re.compile(r"\b(floors?|mezzanines?|mezz|walkways?|catwalks?|joists?|lofts?|"
+                    r"platforms?(?![- ](?:trailers?|trucks?|beds?|bodies|body)\b))\b",
+                    re.IGNORECASE)  # (a platform trailer or truck is the vehicle: a flatbed)
 
 
 def floor_unchecked(job: Job) -> list[Unchecked]:

@@ -2882,8 +2882,10 @@ _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shel
                               re.IGNORECASE)
 NOT_FLOOR = "not-floor"  # the tag that says a member read as a floor is not one
 # a floor no vehicle has: a mezzanine, loft or platform is a building's, whatever vans or
-# trucks the words mention ("mezzanine above where the service vans park")
-_BUILDING_FLOOR = re.compile(r"\b(?:mezzanines?|mezz|lofts?|platforms?|catwalks?|walkways?|"
+# trucks the words mention ("mezzanine above where the service vans park"); a platform
+# trailer, truck or bed is the vehicle itself (a flatbed)
+_BUILDING_FLOOR = re.compile(r"\b(?:mezzanines?|mezz|lofts?|catwalks?|walkways?|"
+                             r"platforms?(?![- ](?:trailers?|trucks?|beds?|bodies|body)\b)|"
                              r"offices?|attics?|stor(?:e)?ys?|buildings?)\b", re.IGNORECASE)
 # where vehicles are, not what the member is part of ("loft over the van bays")
 _VEHICLE_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|next to|near|"
