@@ -20,7 +20,7 @@ from dataclasses import replace
 
 DEAD_FACTOR = 0.6
 CLAUSE = "ASCE 7-16 2.4.1, combination 7: 0.6D + 0.6W"
-STATE = f"dead loads at 0.6 against the uplift ({CLAUSE})"
+STATE = "dead loads at 0.6 against the uplift (ASCE 7-16 2.4.1: 0.6D + 0.6W)"
 
 
 def pushes_up(job) -> list:
