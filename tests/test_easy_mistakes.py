@@ -592,7 +592,8 @@ value = "-100 lbf/ft"
 @pytest.mark.parametrize("text, key, words", [
     (_uniform('patterned = true\ncase = "dead"'), "loads[0].patterned", "on a dead load"),
     (_uniform("patterned = true"), "loads[0].patterned", "single span"),
-    (_uniform("uplift = true"), "loads[0].uplift", "pushes down"),
+    # a weight marked uplift: a dead load is counted as it is typed
+    (_uniform('uplift = true\ncase = "dead"'), "loads[0].uplift", "pushes down"),
     (_uniform("", beam_extra="levels = 3"), "beam.levels", "not tagged rack"),
     # a shelf's label speaks per shelf and never counts levels
     (_uniform("", beam_extra="levels = 3", tags='tags = ["shelf"]'), "beam.levels",
@@ -602,6 +603,26 @@ def test_a_key_that_changes_nothing_is_warned(text, key, words):
     job = parse_job_text(text)
     got = [p for p in warnings(job) if p.key == key]
     assert len(got) == 1 and words in got[0].message and "changes nothing" in got[0].message
+
+
+def test_a_live_load_marked_uplift_that_pushes_down_is_not_rated():
+    # "uplift = true" beside a minus sign: one of the two is wrong. Checked as a weight, the
+    # member is never checked pushed up, and the label would post the uplift as a load down
+    # (marking the key must not lift the hold the uplift label alone gets)
+    from shopbeam.design.capacity import capacity
+
+    for extra in ("uplift = true", 'uplift = true\nlabel = "wind uplift"'):
+        job = parse_job_text(_uniform(extra))
+        got = [p for p in warnings(job) if p.key == "loads[0].uplift"]
+        assert len(got) == 1 and "pushes DOWN" in got[0].message, got
+        assert "no rating is posted" in got[0].message
+        cap = capacity(job)
+        assert not cap.rated and any("marked uplift = true but pushes down" in r
+                                     for r in cap.not_rated)
+    # written positive, it is the uplift it says: rated, no such word
+    up = capacity(parse_job_text(_uniform("uplift = true").replace("-100 lbf/ft",
+                                                                   "100 lbf/ft")))
+    assert up.rated and not any("pushes down" in r for r in up.not_rated)
 
 
 @pytest.mark.parametrize("text", [

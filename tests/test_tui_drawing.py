@@ -82,6 +82,12 @@ def test_a_key_to_write_is_named_as_the_control_that_writes_it():
     said = in_words(msg)
     assert "remove uplift = true" in msg and "remove uplift = true" not in said
     assert "set Uplift to no" in said and "(uplift = true)" not in said
+    # a live load marked uplift that pushes down: held, its message in the form's words
+    data["loads"] = [{"type": "uniform", "value": "-50 lbf/ft", "uplift": True}]
+    msg = next(str(w) for w in parse_job_data(data).warnings if "pushes DOWN" in str(w))
+    said = in_words(msg)
+    assert "uplift = true" in msg and "uplift = true" not in said
+    assert "Uplift yes says" in said and "set Uplift to no if it is a weight" in said
     said = in_words('this reads like a lifting device (hoist) but is not tagged lifting. '
                     'Add tags = ["lifting"] if it carries a hoist')
     assert "Tags (1 Job)" in said and "tags = [" not in said

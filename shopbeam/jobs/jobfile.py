@@ -2655,7 +2655,20 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                    f"the load labelled {got.label!r} pushes down: an uplift is written "
                    "positive with uplift = true")
         if ld.get("uplift") is True and got is not None and got.kind != "moment":
-            if _pushes_down(got):
+            if _pushes_down(got) and got.case == "live":
+                # an uplift typed with the gravity loads' minus sign (or a weight marked up):
+                # checked as a weight, the member is never checked pushed up
+                name = f" ({got.label})" if got.label else ""
+                r.hold(f"uplift = true says this load{name} pushes up, but its value pushes "
+                       "DOWN (negative): forces are + up, so an uplift is written positive. As "
+                       "written it is checked as a weight, the member is never checked pushed "
+                       "up (its bottom flange buckling under the uplift), and the label would "
+                       "post it as a load downward, so no rating is posted. Write it positive "
+                       "if it is an uplift, or remove uplift = true if it is a weight",
+                       f"{key}.uplift",
+                       f"the load{name} is marked uplift = true but pushes down: check its "
+                       "sign")
+            elif _pushes_down(got):
                 r.warn("uplift = true says this load pushes up, but its value pushes down "
                        "(negative): it changes nothing; remove it, or check the sign",
                        f"{key}.uplift")

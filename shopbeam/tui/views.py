@@ -52,6 +52,9 @@ _UI_WAYS = (
     ("an uplift is written positive with uplift = true",
      "an uplift is typed positive, with Uplift yes"),
     ("pushes UP (uplift = true)", "pushes UP (Uplift yes)"),
+    ("uplift = true says this load", "Uplift yes says this load"),
+    ("or remove uplift = true if it is a weight", "or set Uplift to no if it is a weight"),
+    ("is marked uplift = true but pushes down", "is marked Uplift yes but pushes down"),
     ('Add tags = ["lifting"]', 'Add lifting to the Tags (1 Job)'),
     ('Add tags = ["rack"]', 'Add rack to the Tags (1 Job)'),
 )
