@@ -312,6 +312,10 @@ def analyze(job: Job) -> Result:
         more = [u for u in held.unchecked if u not in unchecked]
         unchecked += more
         notes += [not_checked_words(u) for u in more if u not in said]
+        # each support's range both ways (a plain job's two states, or the two envelopes)
+        envelope = uplift.widen(envelope or uplift.rows(sol, "the loads as entered"),
+                                held.reaction_envelope
+                                or uplift.rows(held.solution, "the loads as entered"))
         held = held.solution
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol, held) + check_notes(job, st) + notes), shown,

@@ -515,20 +515,39 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
 def _held_down(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     """A live load that pushes up, held down by the dead loads: the job is rated again with
     them at 0.6 (`design.uplift`, ASCE 7-16 2.4.1 combination 7), and the lower factor is
-    posted. Every reason to withhold a rating found either way is kept; the supports' ranges
-    also take the dead loads alone in full (the most a support is pushed down)."""
-    held = _rate(uplift.held_down(job), section)
+    posted. Every reason to withhold a rating found either way is kept; each support's range
+    at the factor posted takes both (and the dead loads alone in full: the most a support is
+    pushed down)."""
+    job6 = uplift.held_down(job)
+    held = _rate(job6, section)
     k, k6 = res.factor, held.factor
     reasons = tuple(dict.fromkeys(res.not_rated + held.not_rated))
     if not k6 < k * (1 - 1e-12):
-        return replace(res, not_rated=reasons)
+        # (`res` has its live-off rows already; the rows at 0.6 D are named so)
+        return replace(_supports_both_ways(res, job6, section, k), not_rated=reasons)
     e = held.evaluation
     if e is not None:
         e = replace(e, checks=tuple(uplift.mark(c) for c in e.checks))
-    held = _with_live_off(job, section, ss, st, replace(held, job=job, evaluation=e))
+    full = evaluate(job, k6, section, ss, st) if e is not None and e.reactions \
+        and math.isfinite(k6) and k6 > 0 else None
+    held = replace(held, job=job, evaluation=e)
+    if full is not None:  # the rows of the dead loads in full, widened by those at 0.6 D
+        held = replace(held, evaluation=replace(e, reactions=tuple(
+            uplift.widen(full.reactions, e.reactions))))
+    held = _with_live_off(job, section, ss, st, held)
     said = (f"the dead loads at 0.6 against the uplift govern ({uplift.CLAUSE}); with them "
             f"in full the factor would be {k:.4g}")
     return replace(held, note="; ".join(x for x in (held.note, said) if x), not_rated=reasons)
+
+
+def _supports_both_ways(res: CapacityResult, job6, section, k: float) -> CapacityResult:
+    """`res` with each support's range at the factor k (the dead loads in full) widened by
+    the job's at 0.6 D (`job6`) at k."""
+    e = res.evaluation
+    if e is None or not e.reactions or not math.isfinite(k) or k <= 0:
+        return res
+    got = evaluate(job6, k, section).reactions
+    return replace(res, evaluation=replace(e, reactions=tuple(uplift.widen(e.reactions, got))))
 
 
 def _with_live_off(job, section, ss, st, res: CapacityResult) -> CapacityResult:

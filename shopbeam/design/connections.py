@@ -8,12 +8,25 @@ Above `loading` (it reads the load states), beside `local` (the member's own loc
 from __future__ import annotations
 
 from shopbeam import units
-from shopbeam.design import loading
+from shopbeam.design import loading, uplift
+from shopbeam.engine.solver import solve
 
 
 def _states(job, sol):
     """The solved states whose hinge shears and end moments count: every wheel position of a
-    moving-load job, every pattern of a patterned one, else the solution given."""
+    moving-load job, every pattern of a patterned one, else the solution given; with a live
+    load marked uplift, those of the dead loads at 0.6 as well (`design.uplift`)."""
+    states, words = _states_of(job, sol)
+    if uplift.applies(job):
+        held = uplift.held_down(job)
+        more, _ = _states_of(held, solve(held.beam(), candidates=False))
+        states = list(states) + list(more)
+        words = ", ".join(x for x in (words, "with the dead loads in full and at 0.6") if x)
+    return states, words
+
+
+def _states_of(job, sol):
+    """`_states` of the job as it is."""
     try:
         parts = loading.load_parts(job)
         if parts.moving:  # every wheel position (and pattern), every variant of the set

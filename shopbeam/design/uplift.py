@@ -69,11 +69,35 @@ def mark(check):
     return replace(check, state="; ".join(x for x in (check.state, STATE) if x))
 
 
+def rows(sol, words: str) -> list[dict]:
+    """A solution's reactions as rows of a reaction envelope (each support's range)."""
+    return [{"at": r.at, "type": r.kind, "max_up": r.force, "max_up_state": words,
+             "max_down": r.force, "max_down_state": words} for r in sol.reactions]
+
+
+def widen(env, other) -> list[dict]:
+    """Each support's range (`env`, rows of a reaction envelope) widened by the same rows at
+    0.6 D (`other`), the state named where they are wider."""
+    out = []
+    for r, o in zip(env, other):
+        r = dict(r)
+        for key, wider in (("max_up", o["max_up"] > r["max_up"] + 1e-9 * abs(r["max_up"])),
+                           ("max_down", o["max_down"] < r["max_down"] - 1e-9 * abs(r["max_down"]))):
+            if wider:
+                r[key] = o[key]
+                r[key + "_state"] = "; ".join(x for x in (o.get(key + "_state", ""),
+                                                          "dead loads at 0.6") if x)
+        out.append(r)
+    return out
+
+
 def note(job, taken: list[str]) -> str:
     """What the report says of the two ways the job was checked."""
     gov = (f"; at 0.6 D: {', '.join(taken)}" if taken else
            "; the dead loads in full govern every check")
     return (f"A live load pushes up, and the dead loads and self-weight hold it down: every "
             f"check is made with the dead loads in full and at 0.6 ({CLAUSE}), and takes the "
-            f"worse{gov}. The uplift is taken as entered, as an allowable-stress load: a wind "
+            f"worse{gov}. The reactions, extremes and diagrams shown are for the loads as "
+            "entered (the dead loads in full); the reaction envelope gives each support's range "
+            "both ways. The uplift is taken as entered, as an allowable-stress load: a wind "
             "load worked out to ASCE 7-16 (strength level) is entered as 0.6 W.")

@@ -116,8 +116,9 @@ def posted(label: str, si_value: float, kind: str, system: str, note: str = "",
     factor = units.to_display(1.0, kind, system)
     unit = units.unit_label(kind, system)
     text = f"{units.num(down, 6)} {unit}"
-    if system == "si" and kind in ("force", "line_load"):
-        # metric shops post loads in kilograms: the weight that makes this force (g0),
+    if system == "si" and kind in ("force", "line_load") and "UPWARD" not in label.upper():
+        # metric shops post loads in kilograms (not an upward one: no weight pushes up): the
+        # weight that makes this force (g0),
         # rounded down on its own
         # from the posted force, so the two agree (never more kilograms than the kN posted)
         kg = floor_sig(down / factor / units.G0)
@@ -312,11 +313,14 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
     notes += _held_words(job)
     notes += _sideways_words(job)
     on_top = _dead_words(job)
-    if on_top:
+    if on_top and uplift.applies(job):
+        # an uplift the dead loads hold down: the rating leans on them being there
+        notes.append(f"RATED ONLY WHILE {on_top} stay in place: they hold the uplift down, "
+                     "counted at the worse of in full and 0.6 of it (ASCE 7-16 2.4.1); a "
+                     "lighter roof or deck lowers the figure. Compare 0.6 W of an ASCE 7-16 "
+                     "wind uplift with it.")
+    elif on_top:
         notes.append(f"These loads are IN ADDITION TO {on_top}, which stay on.")
-    if uplift.applies(job):
-        notes.append("Against the uplift only 0.6 of the dead load and own weight is counted "
-                     "on (ASCE 7-16 2.4.1); compare 0.6 W of an ASCE 7-16 wind uplift with this figure.")
     if not job.self_weight:
         notes.append("The member's own weight was LEFT OUT (self_weight = false): it must be "
                      "inside the loads entered.")
@@ -495,7 +499,11 @@ def _tag_words(job) -> list[str]:
         out.append("RATED ONLY WHILE nothing pushes or pulls the member endwise (tag "
                    "no-axial: " + ("slings hang plumb, " if job.lifting else "")
                    + "no sloped tie rod or knee brace; axial force is not checked here).")
-    if is_outdoor(job):
+    if is_outdoor(job) and uplift.pushes_up(job):
+        # the figure posted is the wind uplift, or beside one: what it leaves out
+        out.append("WIND sideways is not in this figure, nor wind and gravity loads together "
+                   "beyond the loads entered (ASCE 7 and the local code).")
+    elif is_outdoor(job):
         out.append("WIND is not in this figure: out of doors the member also takes wind, "
                    "sideways and as uplift that reverses the bending (ASCE 7 and the local "
                    "code); only the loads entered are checked here.")
