@@ -1153,6 +1153,28 @@ def test_a_misspelt_or_misplaced_key_that_lowers_the_figure_holds_the_rating(whe
     assert not capacity(job).rated
 
 
+@pytest.mark.parametrize("key, meant, value", [
+    ("safety_factr", "safety_factor", "2.0"), ("deflecton", "deflection", '"L/360"'),
+    ("saftey_factor", "safety_factor", "2.0"), ("Deflection", "deflection", '"L/360"')])
+def test_a_misspelt_limit_or_factor_in_criteria_is_refused(tmp_path, key, meant, value):
+    # read as written, the checks ran at the default (L/240, 1.67) and the verdict said
+    # "all checks PASS" on a member that fails at the factor written: a slip of a letter or
+    # two of a key of [criteria] is refused like a misspelt table, exit 2, naming key and line
+    import subprocess
+    import sys
+
+    p = tmp_path / "typo.toml"
+    p.write_text(_with_key("[criteria]", key, value))
+    out = subprocess.run([sys.executable, "-m", "shopbeam", "solve", str(p)],
+                         capture_output=True, text=True)
+    assert out.returncode == 2 and "Traceback" not in out.stderr
+    assert f"criteria.{key}" in out.stderr and f"did you mean '{meant}'" in out.stderr
+    assert f"typo.toml:{_with_key('[criteria]', key, value).splitlines().index(f'{key} = {value}') + 1}" \
+        in out.stderr
+    # written right it is read: the same job with the key as meant
+    parse_job_text(_with_key("[criteria]", meant, value))
+
+
 def test_an_unknown_key_that_could_only_raise_the_figure_is_warned_not_held():
     # braced = true under [[supports]] is no key there, but ignored it errs on the safe side
     from shopbeam.design.capacity import capacity

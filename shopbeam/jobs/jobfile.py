@@ -600,6 +600,15 @@ class _Reader:
                           f"{path} belongs under [criteria]: written here it is not read, so "
                           "the figure would leave it out. Move it")
                 continue
+            if here == "criteria" and near and not homes and len(str(k)) >= 5 \
+                    and _edits(str(k).lower(), near[0]) <= 2:
+                # a misspelt limit or factor ("safety_factr", "deflecton"): read as written,
+                # the checks would run at the default, and a verdict printed on it would be
+                # wrong; the key meant is plain, so it is refused like a misspelt table
+                self.error(f"unknown key {k!r} in {label}{hint} Every key there sets a limit "
+                           "or a factor: misspelt, it is not read and the checks would use the "
+                           f"default. Write it as {near[0]}", path)
+                continue
             meant = _lowering_meant(str(k), here, near, homes, table[k], table)
             if meant and here == "loads" and str(k).lower() in ("dead", "dead_load",
                                                                 "permanent"):
@@ -782,6 +791,17 @@ _DEAD_WORDS = re.compile(r"(?<![\w-])(?:dead(?:[ _-]?load)?|self[ _-]?weight|per
                          r"(?![\w-])(?! ?end)", re.IGNORECASE)
 _DEAD_VALUE = re.compile(r"^\s*(?:dead|d|dl|permanent|dead[ _-]?load|permanent[ _-]?load|"
                          r"self[ _-]?weight|fixed|static)\s*$", re.IGNORECASE)
+
+
+def _edits(a: str, b: str) -> int:
+    """The fewest letters added, dropped or changed that turn `a` into `b` (a typing slip is
+    one or two: "safety_factr", "deflecton"; "min_safety_factor" is another key)."""
+    row = list(range(len(b) + 1))
+    for i, ca in enumerate(a, 1):
+        prev, row[0] = row[0], i
+        for j, cb in enumerate(b, 1):
+            prev, row[j] = row[j], min(row[j] + 1, row[j - 1] + 1, prev + (ca != cb))
+    return row[-1]
 
 
 def _lowering_meant(key: str, here: str, near: list[str], homes: list[str], value=None,
