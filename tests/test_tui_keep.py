@@ -209,6 +209,7 @@ def test_the_command_opens_a_job_saved_with_problems(tmp_path, monkeypatch):
             ran.append(True)
 
     monkeypatch.setattr(tui_app, "make_app", lambda **kw: Fake())
+    monkeypatch.setattr(cli, "has_terminal", lambda: True)  # as in a terminal
     assert cli.main(["ui", str(job)]) == 0 and ran
     broken = tmp_path / "broken.toml"
     broken.write_text("length = = 3\n", encoding="utf-8")
@@ -2424,3 +2425,24 @@ async def test_a_field_left_with_its_text_selected_comes_back_with_nothing_selec
         assert app.focused is title.input
         assert js.session.doc.get("title") != "7" and "7" in js.session.doc.get("title")
         assert len(js.session.doc.get("title")) == len(before) + 1
+
+
+def test_with_no_terminal_the_text_ui_answers_and_exits(tmp_path, capsys):
+    """Run from a script or piped (no terminal), `shopbeam JOB` never starts the full-screen
+    UI, which would wait for keys that never come: a job with problems gets them, exit 2, as
+    any command; a sound one, what to run instead (exit 2: the UI was not opened)."""
+    from shopbeam import cli
+
+    assert not cli.has_terminal()  # pytest captures both streams
+    job = tmp_path / "demo.toml"
+    job.write_text((PRESETS / "demo.toml").read_text(encoding="utf-8"), encoding="utf-8")
+    assert cli.main([str(job)]) == 2
+    err = capsys.readouterr().err
+    assert "needs a terminal" in err and "shopbeam solve" in err
+    bad = tmp_path / "bad.toml"
+    bad.write_text((PRESETS / "demo.toml").read_text(encoding="utf-8")
+                   .replace('length = "15 ft"', 'length = "15"'), encoding="utf-8")
+    assert cli.main([str(bad)]) == 2
+    err = capsys.readouterr().err
+    assert "bad.toml" in err and "beam.length" in err and "Traceback" not in err
+    assert cli.main([]) == 2 and "needs a terminal" in capsys.readouterr().err

@@ -325,8 +325,30 @@ def build_parser(with_library: bool = True) -> argparse.ArgumentParser:
     return p
 
 
+def has_terminal() -> bool:
+    """Whether the keys come from a terminal and the screen goes to one (the text UI needs
+    both; a script or a pipe gets the command-line answer instead)."""
+    try:
+        return sys.stdin.isatty() and sys.stdout.isatty()
+    except (AttributeError, ValueError):  # closed or replaced streams
+        return False
+
+
 @guarded
 def cmd_ui(args) -> int:
+    if not has_terminal():
+        # run from a script or with its output piped: the full-screen UI would wait for keys
+        # that never come. A job named is read in full (its problems: exit 2, as any
+        # command); either way the user is told what to run instead
+        if args.job:
+            from shopbeam.jobs.jobfile import load_job  # noqa: PLC0415 - startup
+
+            load_job(args.job)
+        print("shopbeam: the text UI needs a terminal (its keys and screen are not one "
+              "here). From a script, use `shopbeam solve JOB` (or check, capacity, rating); "
+              "run `shopbeam" + (f" {args.job}" if args.job else "") + "` in a terminal to "
+              "edit the job.", file=sys.stderr)
+        return EXIT_INPUT
     if args.job:
         # a file that is not TOML is refused with a clear message before the screen opens;
         # a job with problems opens, each problem shown beside its field, to be finished
