@@ -89,6 +89,7 @@ def run(self, *a, **k):  # headless at 80x24, until the job is solved
     asyncio.run(go())
 tui_app.ShopbeamApp.on_mount, tui_app.JobScreen._solved = on_mount, answer
 tui_app.ShopbeamApp.run = run
+cli.has_terminal = lambda: True  # headless here: as in a terminal
 cli.main(sys.argv[1:])
 print(*marks["drawn"], marks["answer"])
 """
