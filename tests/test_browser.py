@@ -103,6 +103,25 @@ def test_package_prints_to_pdf_with_sheets_and_diagrams(browser, poppler, tmp_pa
     assert "SCREENING CHECK ONLY" in text and pkg.input_sha256 in text.replace("\n", "")
 
 
+@pytest.mark.parametrize("preset, caution", [
+    ("demo", "Screening check only - licensed engineer review required"),
+    ("jib-arm", "LIFTING DEVICE - not for service without engineer design")])
+def test_every_sheet_of_the_package_carries_the_caution(browser, poppler, tmp_path, preset,
+                                                        caution):
+    # a sheet taken out of the package (the diagrams, the checks) still says what it is
+    path = PRESETS / f"{preset}.toml"
+    pkg = cp.build(analyze(load_job(path)), input_bytes=path.read_bytes(),
+                   input_name=str(path))
+    out = tmp_path / "pkg.pdf"
+    assert cp.write(pkg, out) == "pdf"
+    pages, _ = _pdf_text(out)
+    assert pages >= 3
+    for n in range(1, pages + 1):
+        sheet = subprocess.run(["pdftotext", "-f", str(n), "-l", str(n), str(out), "-"],
+                               capture_output=True, text=True, timeout=60).stdout
+        assert caution in " ".join(sheet.split()), n
+
+
 def test_preset_pdf_carries_the_json_extremes(browser, poppler, tmp_path):
     path = PRESETS / "demo.toml"
     job = load_job(path)

@@ -246,3 +246,28 @@ def test_a_title_cannot_end_the_style_element_and_run_markup():
 
     Tags().feed(html)
     assert "script" not in tags and tags.count("style") == 1
+
+
+def test_the_package_carries_the_rating_or_not_rated_and_why():
+    # the proof filed with a job says what may be posted: the label `shopbeam rating` prints,
+    # and, where no load may be posted, NOT RATED in the verdict with the reasons
+    from shopbeam.design.capacity import capacity
+    from shopbeam.output.label import label_text, rating
+
+    job = load_job(PRESETS / "demo.toml")
+    res = analyze(job)
+    pkg = cp.build(res)
+    cap = capacity(job)
+    assert cap.rated and pkg.rated
+    assert pkg.rating == label_text(rating(cap, res.unchecked))
+    assert pkg.rating in unescape(cp.to_html(pkg)) and pkg.rating.rstrip("\n") in cp.to_markdown(pkg)
+    # an upward load with no uplift = true (a forgotten minus sign): NOT RATED, said and why
+    text = (PRESETS / "demo.toml").read_text().replace('value = "-1200 lbf"', 'value = "1200 lbf"')
+    assert text != (PRESETS / "demo.toml").read_text()
+    slip = parse_job_text(text, "slip.toml")
+    pkg = cp.build(analyze(slip))
+    assert not pkg.rated and "NOT RATED" in pkg.rating and "NOT RATED" in pkg.verdict
+    html = " ".join(unescape(cp.to_html(pkg)).split())
+    assert "NOT RATED, and why" in html
+    flat = " ".join(html.replace("|", " ").split())
+    assert "forgotten minus sign" in flat and "loads[3] (stair)" in flat  # the reason in full

@@ -22,6 +22,7 @@ from dataclasses import dataclass, field
 from html import escape
 
 from shopbeam import __version__, units
+from shopbeam.cautions import SHORT, SHORT_LIFTING
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.errors import InputError
 from shopbeam.jobs.storage import atomic_write
@@ -88,6 +89,10 @@ class Package:
     warnings: tuple[str, ...] = field(default_factory=tuple)
     envelope: tuple[EnvelopeRow, ...] = ()  # each support over every load state
     uplift: tuple[str, ...] = ()  # supports some load state pulls down, in words
+    # the rating label as `shopbeam rating` prints it (the figures posted, or NOT RATED and
+    # why), and whether a load may be posted
+    rating: str = ""
+    rated: bool = False
 
 
 def sha256_of(data: bytes) -> str:
@@ -193,6 +198,16 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
 
     p = present(result)
     verdict = (p.verdict if result.ok else "the member FAILS: " + ", ".join(p.failing))
+    # the rating the shop would post, from the same job (`shopbeam rating`): a package filed
+    # with the job says what may be posted, or NOT RATED and why
+    from shopbeam.design.capacity import capacity  # noqa: PLC0415 - only the package rates
+    from shopbeam.output.label import label_text, rating  # noqa: PLC0415
+
+    cap = capacity(job)
+    rating_text = label_text(rating(cap, getattr(result, "unchecked", ()),
+                                    date=today or None))
+    if not cap.rated and "NOT RATED" not in verdict:
+        verdict += "; NOT RATED (the rating below says why)"
     note = upward_note(job)
     if note:
         verdict += ". " + note.rstrip(".")  # the page adds the full stop
@@ -223,7 +238,7 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
         input_name=input_name or (job.path or ""), input_sha256=sha256_of(input_bytes),
         input_text=text, paper=(paper or ("a4" if sy == "si" else "letter")).lower(),
         warnings=tuple(w.located() for w in job.warnings if getattr(w, "warning", False)),
-        envelope=p.envelope, uplift=p.uplift)
+        envelope=p.envelope, uplift=p.uplift, rating=rating_text, rated=cap.rated)
 
 
 def _check_more(c: CheckRow) -> str:
@@ -279,12 +294,15 @@ def _page_css(pkg: Package) -> str:
     tb = dict(pkg.title_block)
     head = " - ".join(x for x in (tb.get("Shop", ""), tb.get("Job", ""), pkg.title) if x)
     foot = f"{pkg.program}; input SHA-256 {pkg.input_sha256[:16]}"
+    # the caution on every printed sheet, at its foot (the stronger one on a lifting device)
+    warn = (SHORT_LIFTING + " " if pkg.lifting else "") + SHORT
     rev = tb.get("Revision", "")
     return ("@page{size:" + size + ";margin:16mm 14mm 16mm 14mm;"
             "@top-left{content:" + _css_string(head[:110]) + ";font-size:8pt}"
             "@top-right{content:" + _css_string(("rev " + rev) if rev else tb.get("Date", ""))
             + ";font-size:8pt}"
-            "@bottom-left{content:" + _css_string(foot) + ";font-size:7.5pt}"
+            "@bottom-left{content:" + _css_string(warn) + ' "\\A " ' + _css_string(foot)
+            + ";font-size:7.5pt;white-space:pre-wrap;font-weight:bold}"
             '@bottom-right{content:"Sheet " counter(page) " of " counter(pages);font-size:9pt}}')
 
 
@@ -388,6 +406,11 @@ def to_html(pkg: Package) -> str:
         h.append(f'<tr><td></td><td colspan="6" class="formula">{e(more)}</td></tr>')
     h.append("</table>")
     h.append(f"<p><b>Governing:</b> {e(pkg.governing)}: {e(pkg.verdict)}.</p>")
+    if pkg.rating:
+        h.append("<p><b>Rating</b> (the label <code>shopbeam rating</code> prints for this job: "
+                 + ("the loads that may be posted" if pkg.rated else
+                    "NOT RATED, and why") + "):</p>")
+        h.append(f'<pre class="rating">{e(pkg.rating)}</pre>')
 
     h.append("<h2>6. Not checked</h2>")
     if pkg.not_checked:
@@ -484,7 +507,12 @@ def to_markdown(pkg: Package) -> str:
     m.append("")
     for c in pkg.checks:
         m.append(f"- {c.name}: {_check_more(c)}")
-    m += ["", f"**Governing:** {pkg.governing}: {pkg.verdict}.", "", "## 6. Not checked", ""]
+    m += ["", f"**Governing:** {pkg.governing}: {pkg.verdict}.", ""]
+    if pkg.rating:
+        m += ["**Rating** (the label `shopbeam rating` prints for this job: "
+              + ("the loads that may be posted" if pkg.rated else "NOT RATED, and why") + "):",
+              "", "```", pkg.rating.rstrip("\n"), "```", ""]
+    m += ["## 6. Not checked", ""]
     if pkg.not_checked:
         m += _md_table(["limit state", "clause", "why / what to do"], pkg.not_checked)
     else:
