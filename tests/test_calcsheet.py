@@ -71,3 +71,24 @@ def test_a_calc_sheet_too_large_to_work_out_quickly_is_refused_with_what_to_use(
                          capture_output=True, text=True, timeout=120)
     assert run.returncode == 2 and "calc sheet" in run.stderr and str(p) in run.stderr
     assert "shopbeam report" in run.stderr and run.stdout == ""
+
+
+def test_a_moving_load_sheet_solves_the_state_the_report_shows():
+    # the wheel set at the place that governs: the sheet's exact reactions are the report's
+    # (it solved the member's own weight alone, and said it agreed with the numeric engine)
+    import re
+    from pathlib import Path
+
+    from shopbeam.design.analysis import analyze
+    from shopbeam.jobs.jobfile import load_job
+    from shopbeam.output.calcsheet import calc_sheet
+
+    job = load_job(Path(__file__).resolve().parents[1] / "presets" / "monorail-trolley.toml")
+    sheet = calc_sheet(job)
+    got = [float(x) for x in re.findall(r"^  R\d+ = \S+ = (-?[\d.]+) lbf$", sheet, re.M)]
+    shown = [r.force / 4.4482216152605 for r in analyze(job).solution.reactions]
+    assert got == [round(x, 2) for x in shown] or \
+        all(abs(a - b) <= 0.005 * abs(b) for a, b in zip(got, shown))
+    assert len(got) == 2 and sum(got) > 3000  # two 1000 lbf wheels with impact, not 400 lbf
+    assert "Numeric engine agrees with this sheet: yes" in sheet
+    assert "the state that governs" in sheet

@@ -211,8 +211,9 @@ def brackets(expr, x) -> str:
 
 
 def calc_sheet(job, result=None, width: int = 78) -> str:
-    """The calc sheet for a job, in its display units (`result` is accepted for callers that
-    have one; the sheet checks itself against a numeric solve of the same loads). Its text
+    """The calc sheet for a job, in its display units (`result`, the job's analysis, where the
+    caller has one: a moving-load job's sheet solves the state it shows, and works it out
+    when not given; the sheet checks itself against a numeric solve of the same loads). Its text
     is wrapped at `width` columns (the text UI passes the width of its view)."""
     import sympy as sp  # noqa: PLC0415 - startup
 
@@ -220,6 +221,14 @@ def calc_sheet(job, result=None, width: int = 78) -> str:
 
     lu, fu, lab = SCALES[job.units]
     beam = job.beam()
+    state = ""
+    if job.moving:
+        # the wheel set at the position the report shows (the state that governs): the
+        # sheet solves what the report's reactions and diagrams are for
+        from shopbeam.design.analysis import analyze  # noqa: PLC0415 - only moving jobs
+
+        res = result if result is not None else analyze(job)
+        beam, state = res.solution.beam, res.shown_state
     too_big = calc_problem(beam.supports, beam.loads)  # the member's own weight is one
     if too_big:
         raise InputError(too_big, "loads", file=getattr(job, "path", "") or "")
@@ -237,10 +246,17 @@ def calc_sheet(job, result=None, width: int = 78) -> str:
                  "power up).",
                  "Signs: forces + up, couples + counterclockwise, M + sagging, V = dM/dx."):
         out += textwrap.wrap(para, width, break_on_hyphens=False)
-    if job.moving or any(ld.patterned for ld in job.loads):
-        out += textwrap.wrap("This sheet solves the loads as entered (all patterned loads on, "
-                             "no moving wheel set); the load states the checks cover are solved "
-                             "numerically by the same method.", width)
+    if job.moving:
+        said = state.split("; ")[-1] if state else "the state that governs"
+        out += textwrap.wrap("This sheet solves the wheel set at one place: the report's "
+                             f"{said} (the wheel loads are point loads here, with "
+                             "their share of impact where the job has one); every other "
+                             "position the checks cover is solved numerically by the same "
+                             "method.", width)
+    elif any(ld.patterned for ld in job.loads):
+        out += textwrap.wrap("This sheet solves the loads as entered (all patterned loads on); "
+                             "the load states the checks cover are solved numerically by the "
+                             "same method.", width)
     e_text = units.fmt(job.material.e, 'stress', job.units)
     if getattr(job.material, "kind", "") == "lumber" and job.units == "us":
         e_text = f"{units.num(job.material.e / units.PSI / 1e6, 3)}e6 psi"  # wood's own figure
