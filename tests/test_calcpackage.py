@@ -271,3 +271,17 @@ def test_the_package_carries_the_rating_or_not_rated_and_why():
     assert "NOT RATED, and why" in html
     flat = " ".join(html.replace("|", " ").split())
     assert "forgotten minus sign" in flat and "loads[3] (stair)" in flat  # the reason in full
+
+
+def test_the_numbers_a_check_used_are_in_the_jobs_units():
+    # "Rn 161137" (newtons) beside a limit in lbf, "fy 3.447e+08" (pascals): every number a
+    # check used is shown in the job's units, as its demand and limit are
+    job = load_job(PRESETS / "demo.toml")
+    pkg = cp.build(analyze(job))
+    used = {c.name: dict(c.params) for c in pkg.checks}
+    web = used["web local yielding"]
+    assert web["Rn"].endswith(" lbf") and web["fy"] == "50 ksi" and web["tw"].endswith(" in")
+    assert used["bending"]["M_yield_cap"].endswith(" lbf*ft")
+    for c in pkg.checks:
+        for name, text in c.params:
+            assert "e+" not in text and not re.fullmatch(r"-?\d{5,}(\.\d+)?", text), (c.name, name)

@@ -23,7 +23,18 @@ from shopbeam.design.analysis import Result
 PARAM_KINDS = {"Lb": "small_length", "Lp": "small_length", "Lr": "small_length",
                "Cb": None, "Omega": None, "Mn": "moment", "Vn": "force", "Av": "area",
                "S": "modulus", "n": None, "limit": "small_length", "span_start": "length",
-               "span_end": "length", "lb": "small_length"}
+               "span_end": "length", "lb": "small_length",
+               # the local, lifting, fatigue and open-shape checks' numbers (SI floats in
+               # the check): in the job's units on every page, never as raw SI
+               **dict.fromkeys(("Lb_bottom", "Lb_top", "a", "bf", "d", "end_distance", "h",
+                                "k", "t", "tf", "tw"), "small_length"),
+               **dict.fromkeys(("M_yield_cap", "Ma", "Mcx", "Mcy", "Mn_omega",
+                                "Mn_omega_shear_centre", "Mn_stem_compression",
+                                "Mn_stem_tension", "Mnw", "Mnz", "Mp", "Mw", "Mw_yield_cap",
+                                "Mx", "My", "Mz", "Mz_yield_cap"), "moment"),
+               **dict.fromkeys(("P", "Rn"), "force"),
+               **dict.fromkeys(("Cr", "F_SR", "fy", "sigma_global", "sigma_x", "sigma_y"),
+                               "stress")}
 
 
 def wrap(text: str, width: int, **kw) -> list[str]:
