@@ -77,6 +77,28 @@ def test_report_writes_html_and_markdown_and_refuses_to_overwrite(env, tmp_path)
     assert r.returncode == 2 and ".html, .md or .pdf" in r.stderr
 
 
+@pytest.mark.parametrize("command", [("report", "bundled:demo"),
+                                     ("rating", "bundled:demo", "--plaque")])
+def test_a_bad_output_path_is_one_message_about_that_path(env, tmp_path, command):
+    # a folder of that name, a place nothing may be written, an empty -o: each said about
+    # the -o file (never the hidden temporary file the write goes through), exit 2
+    suffix = ".html" if command[0] == "report" else ".txt"
+    folder = tmp_path / f"out{suffix}"
+    folder.mkdir()
+    r = run(env, *command, "-o", str(folder), "--overwrite")
+    assert r.returncode == 2 and "is a folder, not a file" in r.stderr
+    assert ".saving" not in r.stderr and "Traceback" not in r.stderr
+    missing = tmp_path / "nowhere" / f"x{suffix}"
+    r = run(env, *command, "-o", str(missing))
+    assert r.returncode == 2 and "does not exist" in r.stderr
+    if os.path.isdir("/proc"):  # a folder the system keeps: nothing can be made there
+        r = run(env, *command, "-o", f"/proc/x{suffix}")
+        assert r.returncode == 2 and f"cannot write /proc/x{suffix}" in r.stderr
+        assert ".saving" not in r.stderr
+    r = run(env, *command, "-o", "")
+    assert r.returncode == 2 and "names no file" in r.stderr and not r.stdout
+
+
 def test_pdf_without_a_browser_says_what_to_do(env, tmp_path):
     env["SHOPBEAM_BROWSER"] = str(tmp_path / "no-such-browser")
     out = tmp_path / "pkg.pdf"

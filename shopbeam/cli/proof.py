@@ -16,7 +16,6 @@ from shopbeam.design.capacity import capacity
 from shopbeam.cli.common import TITLE_OPTIONS, add_title_options  # noqa: F401
 from shopbeam.errors import InputError
 from shopbeam.jobs.jobfile import load_job
-from shopbeam.jobs.storage import atomic_write
 from shopbeam.output import calcpackage as cp
 from shopbeam.output import label
 from shopbeam.output.pdf import NoBrowser, PrintFailed, find_browser, print_pdf
@@ -53,6 +52,9 @@ def cmd_report(args) -> int:
     pkg = cp.build(analyze(job), input_bytes=raw, input_name=str(path), fields=fields,
                    paper=getattr(args, "paper", None))
     out = getattr(args, "output", None)
+    if out is not None and not out.strip():
+        raise InputError("it names no file (it is empty): give the file to write, or leave "
+                         "-o out to print the package", key="-o")
     if not out:
         print(cp.to_markdown(pkg), end="")
         return 0
@@ -77,6 +79,9 @@ def cmd_rating(args) -> int:
     unchecked = analyze(job).unchecked  # first: a job it refuses is refused as solve does
     r = label.rating(capacity(job), unchecked)
     out = getattr(args, "output", None)
+    if out is not None and not out.strip():
+        raise InputError("it names no file (it is empty): give the file to write, or leave "
+                         "-o out to print the plaque", key="-o")
     if out and not getattr(args, "plaque", False):
         raise InputError("-o writes the full-page plaque: add --plaque (the 40-column label "
                          "prints to the screen; redirect it: > label.txt)", key="-o")
@@ -109,7 +114,7 @@ def _write_plaque(r, out: Path, paper: str, overwrite: bool) -> int:
             data = print_pdf(html) if suffix == ".pdf" else html.encode("utf-8")
         except (NoBrowser, PrintFailed) as exc:
             raise _pdf_error(exc) from None
-    atomic_write(out, data)
+    cp.write_out(out, data)
     print(f"Wrote {out}: full-page rating plaque ({'NOT RATED' if r.status != 'rated' else 'rated'})")
     return 0
 

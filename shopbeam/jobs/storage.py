@@ -433,8 +433,8 @@ def atomic_write(path: str | os.PathLike, text: str | bytes) -> Fingerprint:
         except PermissionError as e:
             shown = f" (the name is a link to {p})" if p != Path(path) else ""
             raise InputError(f"cannot save: the folder {folder} is not writable for you"
-                             f"{shown} ({e.strerror}). Nothing was changed; save the job in "
-                             "a folder you may write, or ask the folder's owner",
+                             f"{shown} ({e.strerror}). Nothing was changed; save it in a "
+                             "folder you may write, or ask the folder's owner",
                              file=str(path)) from None
         try:
             if fcntl is not None:

@@ -572,5 +572,19 @@ def write(pkg: Package, path, *, overwrite: bool = False) -> str:
     if p.parent and not p.parent.is_dir():
         raise InputError(f"the folder {p.parent} does not exist", key="-o")
     data = render_bytes(pkg, kind)
-    atomic_write(p, data)
+    write_out(p, data)
     return kind
+
+
+def write_out(p, data: bytes) -> None:
+    """`data` written to the file `p` atomically, every failure one message about `p` (a
+    folder of that name, a place nothing may be written: never the hidden temporary file
+    the write goes through)."""
+    if p.is_dir():
+        raise InputError(f"{p} is a folder, not a file; nothing was written. Give a file name "
+                         "(with its suffix)", key="-o")
+    try:
+        atomic_write(p, data)
+    except OSError as e:
+        raise InputError(f"cannot write {p} ({e.strerror or e}); nothing was written. Write it "
+                         "in a folder you may write", key="-o") from None
