@@ -122,6 +122,33 @@ def test_every_sheet_of_the_package_carries_the_caution(browser, poppler, tmp_pa
         assert caution in " ".join(sheet.split()), n
 
 
+def test_a_plaque_over_several_sheets_names_numbers_and_cautions_each(browser, poppler,
+                                                                      tmp_path):
+    # fifteen bins with long labels on a continuous shelf: the plaque runs past one sheet,
+    # and a sheet taken off the wall on its own must still say what it is
+    sup = "\n".join(f'[[supports]]\nat = "{5 * i} ft"\ntype = "{"pin" if i == 0 else "roller"}"'
+                    for i in range(7))
+    bins = "\n".join(f'[[loads]]\ntype = "point"\nat = "{1.5 + 2 * i} ft"\nvalue = "-150 lbf"\n'
+                     f'label = "the bin of fasteners number {i + 1} that sits here on the '
+                     f'shelf, with a long description of what is in it"\npatterned = true'
+                     for i in range(15))
+    text = ('schema = 1\ntitle = "Long shelf with many bins"\ntags = ["shelf", "not-rack"]\n'
+            '[beam]\nlength = "30 ft"\nsection = "HSS4x2x1/4"\nmaterial = "A500-C"\n'
+            f'restrained = true\n{sup}\n{bins}\n')
+    job = parse_job_text(text, "long.toml")
+    r = label.rating(capacity(job), analyze(job).unchecked)
+    pdf = tmp_path / "plaque.pdf"
+    pdf.write_bytes(print_pdf(label.plaque_html(r), browser))
+    pages, _ = _pdf_text(pdf)
+    assert pages >= 2
+    for n in range(1, pages + 1):
+        sheet = " ".join(subprocess.run(["pdftotext", "-f", str(n), "-l", str(n), str(pdf),
+                                         "-"], capture_output=True, text=True,
+                                        timeout=60).stdout.split())
+        assert "Screening check only" in sheet and f"Sheet {n} of {pages}" in sheet, n
+        assert "Load rating: Long shelf with many bins" in sheet, n
+
+
 def test_preset_pdf_carries_the_json_extremes(browser, poppler, tmp_path):
     path = PRESETS / "demo.toml"
     job = load_job(path)

@@ -249,7 +249,7 @@ def _check_more(c: CheckRow) -> str:
 
 
 # ------------------------------------------------------------------ HTML
-def _css_string(text: str) -> str:
+def css_string(text: str) -> str:
     """Text as a CSS string literal (for @page margin boxes)."""
     out = text.replace("\\", "\\\\").replace('"', '\\"').replace("\n", " ")
     # < and > as CSS escapes: the string sits inside a <style> element, where a "</style>"
@@ -298,10 +298,10 @@ def _page_css(pkg: Package) -> str:
     warn = (SHORT_LIFTING + " " if pkg.lifting else "") + SHORT
     rev = tb.get("Revision", "")
     return ("@page{size:" + size + ";margin:16mm 14mm 16mm 14mm;"
-            "@top-left{content:" + _css_string(head[:110]) + ";font-size:8pt}"
-            "@top-right{content:" + _css_string(("rev " + rev) if rev else tb.get("Date", ""))
+            "@top-left{content:" + css_string(head[:110]) + ";font-size:8pt}"
+            "@top-right{content:" + css_string(("rev " + rev) if rev else tb.get("Date", ""))
             + ";font-size:8pt}"
-            "@bottom-left{content:" + _css_string(warn) + ' "\\A " ' + _css_string(foot)
+            "@bottom-left{content:" + css_string(warn) + ' "\\A " ' + css_string(foot)
             + ";font-size:7.5pt;white-space:pre-wrap;font-weight:bold}"
             '@bottom-right{content:"Sheet " counter(page) " of " counter(pages);font-size:9pt}}')
 

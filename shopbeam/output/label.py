@@ -32,7 +32,7 @@ from dataclasses import dataclass
 from html import escape
 
 from shopbeam import units
-from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, cautions_for
+from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, SHORT, SHORT_LIFTING, cautions_for
 from shopbeam.design import fatigue, uplift
 from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
                                       hung_by_open_ends,
@@ -876,11 +876,21 @@ def _long(r: Rating) -> bool:
 
 def plaque_html(r: Rating, paper: str = "letter") -> str:
     """The full-page plaque as a self-contained printable HTML page (big type, one page)."""
+    from shopbeam.output.calcpackage import css_string  # noqa: PLC0415 - one quoting rule
+
     e = escape
     size = "A4" if paper.lower() == "a4" else "letter"
+    # a plaque long enough for a second sheet: every sheet names the member, is numbered and
+    # carries the caution at its foot (the lifting one too on a lifting device)
+    warn = (SHORT_LIFTING + " " if r.lifting else "") + SHORT
+    margins = ("@top-left{content:" + css_string(f"Load rating: {r.title}"[:110])
+               + ";font-size:8pt}@bottom-left{content:" + css_string(warn)
+               + ";font-size:7.5pt;font-weight:bold}"
+               '@bottom-right{content:"Sheet " counter(page) " of " counter(pages);'
+               "font-size:8pt}")
     h = ["<!DOCTYPE html>", '<html lang="en"><head><meta charset="utf-8">',
          f"<title>Load rating: {e(r.title)}</title><style>",
-         "@page{size:" + size + ";margin:14mm}"
+         "@page{size:" + size + ";margin:14mm;" + margins + "}"
          "body{font-family:'DejaVu Sans','Liberation Sans',Arial,sans-serif;margin:0 auto;"
          "max-width:182mm;color:#000}"
          ".plaque{border:4pt solid #000;padding:8mm}"
