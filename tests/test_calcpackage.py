@@ -285,3 +285,14 @@ def test_the_numbers_a_check_used_are_in_the_jobs_units():
     for c in pkg.checks:
         for name, text in c.params:
             assert "e+" not in text and not re.fullmatch(r"-?\d{5,}(\.\d+)?", text), (c.name, name)
+
+
+def test_a_printed_check_stays_with_its_working_and_tables_repeat_their_head():
+    # a page break had split a check's row from the line of its working, and a table run
+    # onto the next sheet had lost its header row
+    html = cp.to_html(cp.build(analyze(load_job(PRESETS / "monorail-hoist-beam.toml"))))
+    checks = html[html.index("5. Checks"):html.index("6. Not checked")]
+    bodies = re.findall(r"<tbody class=keep>(.*?)</tbody>", checks, re.S)
+    assert len(bodies) >= 5 and all(b.count("<tr>") == 2 for b in bodies)
+    assert "<thead><tr><th>check</th>" in checks
+    assert "thead{display:table-header-group}" in html and "tbody.keep" in html

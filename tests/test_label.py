@@ -1047,3 +1047,24 @@ def test_a_clamp_hung_by_an_open_flange_end_is_rated_only_a_flange_width_in(at, 
     if held:
         assert "near 3.75 ft" in cond[0] and "5.25 in" in cond[0]
         assert "open end at 4 ft" in said[0]
+
+
+def test_a_not_rated_lifting_label_speaks_of_no_figure():
+    # "the LEAST of this figure and ..." under NOT RATED pointed at a figure the label does
+    # not show
+    from shopbeam.design.analysis import analyze
+    from shopbeam.design.capacity import capacity
+    from shopbeam.jobs.jobfile import parse_job_text
+    from shopbeam.output.label import label_text, rating
+
+    text = (PRESETS / "jib-arm.toml").read_text()
+    ok = parse_job_text(text)
+    flat = " ".join(label_text(rating(capacity(ok), analyze(ok).unchecked)).replace("|", " ")
+                    .split())
+    assert "LEAST of this figure" in flat
+    slip = parse_job_text(text + '\n[[loads]]\ntype = "point"\nat = "5 ft"\nvalue = "50 lbf"\n')
+    cap = capacity(slip)
+    assert not cap.rated
+    flat = " ".join(label_text(rating(cap, analyze(slip).unchecked)).replace("|", " ").split())
+    assert "LIFTING DEVICE" in flat and "this figure" not in flat
+    assert "No figure is posted for the beam here" in flat

@@ -269,7 +269,8 @@ table{border-collapse:collapse;width:100%;margin:3pt 0}
 th,td{border:0.6pt solid #777;padding:2pt 4pt;text-align:left;vertical-align:top}
 th{background:#eee}
 td.num{text-align:right;white-space:nowrap}
-tr,figure,.titleblock,.caution{break-inside:avoid}
+tr,figure,.titleblock,.caution,tbody.keep,pre.rating{break-inside:avoid}
+thead{display:table-header-group}
 .titleblock td{width:25%}
 .titleblock .lab{font-size:8pt;color:#444;display:block}
 .titleblock .val{font-size:10.5pt;min-height:12pt;display:block}
@@ -309,9 +310,11 @@ def _page_css(pkg: Package) -> str:
 def _tr(cells, header=False, classes=None) -> str:
     tag = "th" if header else "td"
     classes = classes or [""] * len(cells)
-    return "<tr>" + "".join(
+    row = "<tr>" + "".join(
         f"<{tag}{' class=' + chr(34) + c + chr(34) if c else ''}>{escape(str(x))}</{tag}>"
         for x, c in zip(cells, classes)) + "</tr>"
+    # a header row is the table's head: printed again at the top of a sheet it runs onto
+    return f"<thead>{row}</thead>" if header else row
 
 
 def to_html(pkg: Package) -> str:
@@ -398,12 +401,13 @@ def to_html(pkg: Package) -> str:
     h.append(_tr(["check", "demand", "limit", "ratio", "result", "clause", "source"], header=True))
     for c in pkg.checks:
         verdict = "PASS" if c.ok else "FAIL"
-        h.append(f"<tr><td>{e(c.name)}</td><td class=num>{e(c.demand)}</td>"
+        # a check and its working on one sheet (a body of their own that does not break)
+        h.append(f"<tbody class=keep><tr><td>{e(c.name)}</td><td class=num>{e(c.demand)}</td>"
                  f"<td class=num>{e(c.limit)}</td><td class=num>{c.ratio:.3f}</td>"
                  f'<td class="{verdict.lower()}">{verdict}</td><td>{e(c.clause or "-")}</td>'
                  f"<td>{e(c.source or '-')}</td></tr>")
         more = _check_more(c)
-        h.append(f'<tr><td></td><td colspan="6" class="formula">{e(more)}</td></tr>')
+        h.append(f'<tr><td></td><td colspan="6" class="formula">{e(more)}</td></tr></tbody>')
     h.append("</table>")
     h.append(f"<p><b>Governing:</b> {e(pkg.governing)}: {e(pkg.verdict)}.</p>")
     if pkg.rating:

@@ -770,8 +770,12 @@ def _lifting_words(r: Rating) -> str:
     """The lifting line of a label: the profile the numbers used, and what must follow."""
     return ("LIFTING DEVICE" + (f" ({r.lifting_profile} profile)" if r.lifting_profile else "")
             + ": proof load test and marking by a qualified engineer required before use. "
-            "BEAM ONLY: the device's rated load is the LEAST of this figure and the rated "
-            "loads of the hoist, trolley, hangers, connections and rigging; mark the least.")
+            + ("BEAM ONLY: the device's rated load is the LEAST of this figure and the rated "
+               "loads of the hoist, trolley, hangers, connections and rigging; mark the least."
+               if r.status == "rated" else
+               "No figure is posted for the beam here; once it is rated, the device's rated "
+               "load is the LEAST of the beam's figure and the rated loads of the hoist, "
+               "trolley, hangers, connections and rigging."))
 
 
 # ------------------------------------------------------------------ 40-column label
