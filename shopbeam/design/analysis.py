@@ -308,7 +308,7 @@ def analyze(job: Job) -> Result:
         # a live load pushes up: every check again with the dead loads at 0.6, the worse kept
         held = analyze(uplift.held_down(job))
         checks = uplift.merge(checks, held.checks)
-        notes.append(uplift.note(job, [c.name for c in checks if uplift.STATE in c.state]))
+        notes.append(uplift.note([c.name for c in checks if uplift.STATE in c.state]))
         more = [u for u in held.unchecked if u not in unchecked]
         unchecked += more
         notes += [not_checked_words(u) for u in more if u not in said]

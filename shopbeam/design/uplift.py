@@ -91,7 +91,7 @@ def widen(env, other) -> list[dict]:
     return out
 
 
-def note(job, taken: list[str]) -> str:
+def note(taken: list[str]) -> str:
     """What the report says of the two ways the job was checked."""
     gov = (f"; at 0.6 D: {', '.join(taken)}" if taken else
            "; the dead loads in full govern every check")
