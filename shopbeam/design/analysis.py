@@ -109,7 +109,7 @@ STAINLESS = ("Stainless steel is checked here by the AISC 360-16 carbon-steel ru
              "strength the member is NOT RATED.")
 
 
-def job_cautions(job: Job, sol: Solution | None = None, held: Solution | None = None) -> list[str]:
+def job_cautions(job: Job, sol: Solution | None = None, anchors=None) -> list[str]:
     out = cautions_for(job.tags, job.caution_lifting)
     warns = list(getattr(job.section, "warnings", ()) or ())
     if replaces_angle_warning(job):  # F10 checks the principal axes (or the job restrains it)
@@ -123,7 +123,11 @@ def job_cautions(job: Job, sol: Solution | None = None, held: Solution | None = 
         arm = rack_arm(job.tags, job.supports, job.length)
         out.append(("" if job.criteria.impact is not None else ARM_IMPACT if arm else
                     RACK_IMPACT) + (ARM_REST if arm else RACK_REST))
-    if is_outdoor(job):
+    if is_outdoor(job) and uplift.pushes_up(job):  # the uplift is this job: the rest
+        out.append("Out of doors the member also takes wind sideways, and an awning or canopy "
+                   "snow and drift (ASCE 7 and the local code): only the loads entered are "
+                   "checked here; check each other case that applies as its own job.")
+    elif is_outdoor(job):
         out.append(OUTDOOR)
     if getattr(job.material, "kind", "") == "stainless":
         out.append(STAINLESS)
@@ -131,7 +135,7 @@ def job_cautions(job: Job, sol: Solution | None = None, held: Solution | None = 
                            for s in job.supports):
         out.append(HANGER_BRACE)
     if sol is not None:
-        out += uplift_notes(job, sol, held) + live_off_uplift(job, sol)
+        out += uplift_notes(job, sol, anchors) + live_off_uplift(job, sol)
         bad = [d.name for d in sol.diagnostics if not d.ok]
         if bad:
             out.append("A self-check did not pass (" + ", ".join(bad) + "): do not rely on "
@@ -149,18 +153,22 @@ HANGER_BRACE = ("Each support is taken as holding the beam against twist where i
                 "false on that support")
 
 
-def uplift_notes(job: Job, sol: Solution, held: Solution | None = None) -> list[str]:
+def uplift_notes(job: Job, sol: Solution, anchors=None) -> list[str]:
     """A support that pulls the member down (uplift): it must be anchored, not merely bear.
-    `held`: the solution with the dead loads at 0.6 (`design.uplift`), where it pulls harder."""
-    rs = sol.reactions if held is None else held.reactions
-    top = max([abs(r.force) for r in sol.reactions + rs] + [0.0])
+    `anchors`: (row, pull, state) of each support a reaction envelope says is pulled down
+    (`uplift.anchors`: a live load marked uplift, over the loads as entered, the dead loads
+    at 0.6 and the uplift off), named with the largest pull in place of the loads entered."""
+    if anchors is not None:
+        return [f"UPLIFT: the {r['type']} at {units.fmt(r['at'], 'length', job.units)} pulls "
+                f"the member DOWN with up to {units.fmt(pull, 'force', job.units)}"
+                + (f" ({state})" if state else "") + ": anchor it for that force (a seat or "
+                "bracket that only bears lets the member lift off), and check the anchor"
+                for r, pull, state in anchors if r["type"] in ("pin", "roller", "fixed", "spring")]
+    top = max([abs(r.force) for r in sol.reactions] + [0.0])
     out = []
-    for r, r6 in zip(sol.reactions, rs):
-        at = units.fmt(r.at, 'length', job.units)
-        if held is not None and r6.force < min(r.force, 0.0) - 1e-9 * top:
-            r, at = r6, f"{at} with the dead loads at 0.6 ({uplift.CLAUSE})"
+    for r in sol.reactions:
         if r.kind in ("pin", "roller", "fixed", "spring") and r.force < -1e-9 * top:
-            out.append(f"UPLIFT: the {r.kind} at {at} pulls "
+            out.append(f"UPLIFT: the {r.kind} at {units.fmt(r.at, 'length', job.units)} pulls "
                        f"the member DOWN with {units.fmt(-r.force, 'force', job.units)}: anchor "
                        "it for that force (a seat or bracket that only bears lets the member "
                        "lift off), and check the anchor")
@@ -303,22 +311,25 @@ def analyze(job: Job) -> Result:
     # (check_notes names the member's own strength ones)
     said = set(st.unchecked)
     notes += [not_checked_words(u) for u in unchecked if u not in said]
-    held = None
+    anchors = None
     if uplift.applies(job):
-        # a live load pushes up: every check again with the dead loads at 0.6, the worse kept
-        held = analyze(uplift.held_down(job))
-        checks = uplift.merge(checks, held.checks)
-        notes.append(uplift.note([c.name for c in checks if uplift.STATE in c.state]))
-        more = [u for u in held.unchecked if u not in unchecked]
-        unchecked += more
-        notes += [not_checked_words(u) for u in more if u not in said]
-        # each support's range both ways (a plain job's two states, or the two envelopes)
-        envelope = uplift.widen(envelope or uplift.rows(sol, "the loads as entered"),
-                                held.reaction_envelope
-                                or uplift.rows(held.solution, "the loads as entered"))
-        held = held.solution
+        # a live load pushes up: every check again with the dead loads at 0.6 and with the
+        # uplift off, the worst kept, and each support's range over the three
+        envelope = envelope or uplift.rows(sol, "the loads as entered")
+        for other, state in uplift.variants(job):
+            got = analyze(other)
+            checks = uplift.merge(checks, got.checks, state)
+            more = [u for u in got.unchecked if u not in unchecked]
+            unchecked += more
+            notes += [not_checked_words(u) for u in more if u not in said]
+            tag = "dead loads at 0.6" if state == uplift.STATE else "the uplift off"
+            envelope = uplift.widen(envelope, got.reaction_envelope
+                                    or uplift.rows(got.solution, ""), tag)
+        notes.append(uplift.note([c.name for c in checks if uplift.STATE in c.state],
+                                 [c.name for c in checks if uplift.CALM in c.state]))
+        anchors = uplift.anchors(envelope)  # the UPLIFT cautions name the largest pull
     return Result(job, sol, tuple(checks),
-                  tuple(job_cautions(job, sol, held) + check_notes(job, st) + notes), shown,
+                  tuple(job_cautions(job, sol, anchors) + check_notes(job, st) + notes), shown,
                   state_sol, state_words, tuple(unchecked),
                   reaction_envelope=tuple(envelope))
 

@@ -526,14 +526,17 @@ def _held_down(job, section, ss, st, res: CapacityResult) -> CapacityResult:
         # (`res` has its live-off rows already; the rows at 0.6 D are named so)
         return replace(_supports_both_ways(res, job6, section, k), not_rated=reasons)
     e = held.evaluation
-    if e is not None:
-        e = replace(e, checks=tuple(uplift.mark(c) for c in e.checks))
-    full = evaluate(job, k6, section, ss, st) if e is not None and e.reactions \
+    full = evaluate(job, k6, section, ss, st) if e is not None \
         and math.isfinite(k6) and k6 > 0 else None
+    if full is not None:
+        # each check at the factor found, the worse of the dead loads in full and at 0.6
+        # (named where 0.6 D is worse), and the supports' rows over both
+        e = replace(e, checks=tuple(uplift.merge(full.checks, e.checks)),
+                    reactions=tuple(uplift.widen(full.reactions, e.reactions))
+                    if e.reactions else e.reactions)
+    elif e is not None:
+        e = replace(e, checks=tuple(uplift.mark(c) for c in e.checks))
     held = replace(held, job=job, evaluation=e)
-    if full is not None:  # the rows of the dead loads in full, widened by those at 0.6 D
-        held = replace(held, evaluation=replace(e, reactions=tuple(
-            uplift.widen(full.reactions, e.reactions))))
     held = _with_live_off(job, section, ss, st, held)
     said = (f"the dead loads at 0.6 against the uplift govern ({uplift.CLAUSE}); with them "
             f"in full the factor would be {k:.4g}")

@@ -15,13 +15,15 @@ from shopbeam.engine.solver import solve
 def _states(job, sol):
     """The solved states whose hinge shears and end moments count: every wheel position of a
     moving-load job, every pattern of a patterned one, else the solution given; with a live
-    load marked uplift, those of the dead loads at 0.6 as well (`design.uplift`)."""
+    load marked uplift, those of the dead loads at 0.6 and of the uplift off as well
+    (`design.uplift`)."""
     states, words = _states_of(job, sol)
     if uplift.applies(job):
-        held = uplift.held_down(job)
-        more, _ = _states_of(held, solve(held.beam(), candidates=False))
-        states = list(states) + list(more)
-        words = ", ".join(x for x in (words, "with the dead loads in full and at 0.6") if x)
+        for other, _ in uplift.variants(job):  # the dead loads at 0.6; the uplift off
+            more, _ = _states_of(other, solve(other.beam(), candidates=False))
+            states = list(states) + list(more)
+        words = ", ".join(x for x in (words, "with the dead loads in full and at 0.6, and "
+                                      "with the uplift off") if x)
     return states, words
 
 

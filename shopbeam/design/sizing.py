@@ -496,12 +496,14 @@ def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note=
     else:
         rows, skipped, why = _batched(job, base, parts, cands, with_capacity)
         if uplift.applies(job):
-            # a live load that pushes up: the dead loads at 0.6 too, each row the worse
-            held = uplift.held_down(job)
-            base6 = replace(held, self_weight=False)
-            rows6, _, why6 = _batched(held, base6, load_parts(base6), cands, with_capacity)
-            rows = _worse_rows(rows, rows6)
-            why = list(dict.fromkeys(list(why) + list(why6)))
+            # a live load that pushes up: the dead loads at 0.6 and the uplift off too, each
+            # row the worst
+            for other, _ in uplift.variants(job):
+                base6 = replace(other, self_weight=False)
+                rows6, _, why6 = _batched(other, base6, load_parts(base6), cands,
+                                          with_capacity)
+                rows = _worse_rows(rows, rows6)
+                why = list(dict.fromkeys(list(why) + list(why6)))
         n_full = _confirm(job, rows, max(1, confirm), with_capacity, stock is not None)
         if not why:
             method = "one layout solve, all sections batched"
@@ -512,7 +514,7 @@ def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note=
         method += f"; {n_full} checked in full"
     if uplift.applies(job):
         method += (f"; the dead loads in full and at 0.6 against the uplift ({uplift.CLAUSE}), "
-                   "each section taking the worse")
+                   "and the uplift off, each section taking the worst")
     rows.sort(key=lambda r: (r.weight, r.designation))
     return SizeResult(job, label, tuple(rows), time.perf_counter() - t0, method,
                       getattr(stock, "currency", "") if stock is not None else "",
@@ -1239,15 +1241,16 @@ def _worst_check(j, ss, st):
     """The section's governing check at the entered loads, as the report finds it: the
     evaluation's checks with a cantilever's top-flange loads and the bottom flange or edge
     under hogging (a wood member's dead loads alone at CD 0.9 among them); with a live load
-    that pushes up, the worse of the dead loads in full and at 0.6 (`design.uplift`)."""
+    that pushes up, the worst of the dead loads in full, at 0.6, and the uplift off
+    (`design.uplift`)."""
     g = max(list(evaluate(j, 1.0, ss=ss).checks) + top_flange_checks(j, st, ss)
             + hogging_checks(j, st, ss), key=lambda c: c.ratio)
     if uplift.applies(j):
-        h = uplift.held_down(j)
-        hs = state_set(h)
-        g6 = _worst_check(h, hs, strengths(h, beam=hs.beam))
-        if g6.ratio > g.ratio:
-            g = uplift.mark(g6)
+        for h, state in uplift.variants(j):  # the dead loads at 0.6; the uplift off
+            hs = state_set(h)
+            g6 = _worst_check(h, hs, strengths(h, beam=hs.beam))
+            if g6.ratio > g.ratio:
+                g = uplift.mark(g6, state)
     return g
 
 

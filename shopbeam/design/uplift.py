@@ -21,6 +21,7 @@ from dataclasses import replace
 DEAD_FACTOR = 0.6
 CLAUSE = "ASCE 7-16 2.4.1, combination 7: 0.6D + 0.6W"
 STATE = "dead loads at 0.6 against the uplift (ASCE 7-16 2.4.1: 0.6D + 0.6W)"
+CALM = "the uplift off (the dead loads alone, with any other load)"
 
 
 def pushes_up(job) -> list:
@@ -52,21 +53,36 @@ def held_down(job):
     return replace(job, dead_factor=DEAD_FACTOR)
 
 
-def merge(checks, other) -> list:
-    """Each check at the larger ratio of the job as entered (`checks`) and at 0.6 D (`other`,
-    the same checks by name): the 0.6 D one is taken, its state saying so, where its ratio is
-    higher; a check the 0.6 D state alone calls for (the moment hogs only there) is added."""
+def calm(job):
+    """The job with the uplift off (a calm day): every load but the uplifts, the dead loads
+    in full. The uplift comes and goes, and without it the dead loads (and any other load)
+    act alone: the seats carry the weight, a cantilever sags, the wheels roll unrelieved."""
+    up = {id(ld) for ld in pushes_up(job)}
+    return replace(job, loads=tuple(ld for ld in job.loads if id(ld) not in up))
+
+
+def variants(job):
+    """(the job as another state, the words its checks and rows are marked with): the
+    dead loads at 0.6 against the uplift, and the uplift off."""
+    return ((held_down(job), STATE), (calm(job), CALM))
+
+
+def merge(checks, other, state: str = STATE) -> list:
+    """Each check at the larger ratio of the job as entered (`checks`) and of another state
+    (`other`, the same checks by name; `state`: its words, 0.6 D by default): the other one
+    is taken, its state saying so, where its ratio is higher; a check the other state alone
+    calls for (the moment hogs only there) is added."""
     theirs = {c.name: c for c in other}
     out = []
     for c in checks:
         o = theirs.pop(c.name, None)
-        out.append(c if o is None or not o.ratio > c.ratio * (1 + 1e-12) else mark(o))
-    return out + [mark(o) for o in theirs.values()]
+        out.append(c if o is None or not o.ratio > c.ratio * (1 + 1e-12) else mark(o, state))
+    return out + [mark(o, state) for o in theirs.values()]
 
 
-def mark(check):
-    """A check made at 0.6 D, its state saying so."""
-    return replace(check, state="; ".join(x for x in (check.state, STATE) if x))
+def mark(check, state: str = STATE):
+    """A check made in another state (0.6 D by default), its state saying so."""
+    return replace(check, state="; ".join(x for x in (check.state, state) if x))
 
 
 def rows(sol, words: str) -> list[dict]:
@@ -75,9 +91,9 @@ def rows(sol, words: str) -> list[dict]:
              "max_down": r.force, "max_down_state": words} for r in sol.reactions]
 
 
-def widen(env, other) -> list[dict]:
-    """Each support's range (`env`, rows of a reaction envelope) widened by the same rows at
-    0.6 D (`other`), the state named where they are wider."""
+def widen(env, other, tag: str = "dead loads at 0.6") -> list[dict]:
+    """Each support's range (`env`, rows of a reaction envelope) widened by the same rows of
+    another state (`other`; `tag` its words, 0.6 D by default), named where they are wider."""
     out = []
     for r, o in zip(env, other):
         r = dict(r)
@@ -85,19 +101,26 @@ def widen(env, other) -> list[dict]:
                            ("max_down", o["max_down"] < r["max_down"] - 1e-9 * abs(r["max_down"]))):
             if wider:
                 r[key] = o[key]
-                r[key + "_state"] = "; ".join(x for x in (o.get(key + "_state", ""),
-                                                          "dead loads at 0.6") if x)
+                r[key + "_state"] = "; ".join(x for x in (o.get(key + "_state", ""), tag) if x)
         out.append(r)
     return out
 
 
-def note(taken: list[str]) -> str:
-    """What the report says of the two ways the job was checked."""
-    gov = (f"; at 0.6 D: {', '.join(taken)}" if taken else
-           "; the dead loads in full govern every check")
+def anchors(env) -> list[tuple[dict, float, str]]:
+    """(row, pull, state words) of each support an envelope row says is pulled down."""
+    return [(r, -r["max_down"], r.get("max_down_state", "")) for r in env if r["max_down"] < 0]
+
+
+def note(taken: list[str], calm_taken: list[str] = ()) -> str:
+    """What the report says of the three ways the job was checked."""
+    gov = "; ".join(x for x in (f"at 0.6 D: {', '.join(taken)}" if taken else "",
+                                f"with the uplift off: {', '.join(calm_taken)}"
+                                if calm_taken else "") if x) \
+        or "the loads as entered govern every check"
     return (f"A live load pushes up, and the dead loads and self-weight hold it down: every "
-            f"check is made with the dead loads in full and at 0.6 ({CLAUSE}), and takes the "
-            f"worse{gov}. The reactions, extremes and diagrams shown are for the loads as "
-            "entered (the dead loads in full); the reaction envelope gives each support's range "
-            "both ways. The uplift is taken as entered, as an allowable-stress load: a wind "
-            "load worked out to ASCE 7-16 (strength level) is entered as 0.6 W.")
+            f"check is made with the loads as entered, with the dead loads at 0.6 ({CLAUSE}), "
+            f"and with the uplift off (it comes and goes), and takes the worst; {gov}. The "
+            "reactions, extremes and diagrams shown are for the loads as entered; the reaction "
+            "envelope gives each support's range over all three. The uplift is taken as "
+            "entered, as an allowable-stress load: a wind load worked out to ASCE 7-16 "
+            "(strength level) is entered as 0.6 W.")

@@ -252,7 +252,8 @@ def _figures(job, k: float) -> tuple[list[Figure], list[str]]:
         tot_all += sum(abs(w) for w in mv[0].live) * n
     if n > 1 and tot_all:
         each = "PER BEAM" if rack else "PER MEMBER"
-        figs.append(posted("TOTAL", tot_all * k / n, "force", sy,
+        up = all(ld.total_force > 0 for ld in live) and not mv  # an uplift: no kg beside it
+        figs.append(posted("UPWARD TOTAL" if up else "TOTAL", tot_all * k / n, "force", sy,
                            f"each of {n} identical members carries 1/{n}", each))
     levels = getattr(job, "levels", None)
     arm = rack and rack_arm(job.tags, job.supports, job.length)
