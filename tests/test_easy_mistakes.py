@@ -1944,3 +1944,35 @@ def test_a_point_load_in_inches_whose_twin_would_sit_on_a_support_is_not_held():
     # on an arm (a free end at 36 in) the tip is the twin: held, as before
     slip = parse_job_text(ARM.format(length="36 in", at="3 in"))
     assert any("member's length" in p.message for p in warnings(slip))
+
+
+@pytest.mark.parametrize("where, key", [("top", "safety_factr"), ("[beam]", "deflecton")])
+def test_a_misspelt_limit_written_outside_criteria_holds_the_rating(where, key):
+    # a [criteria] header left out puts a misspelt key in the table above it, or at the top:
+    # the key spelt right there is held, and so is its slip (it posted 58 % high)
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_with_key(where, key, '"L/360"' if "defl" in key else "2.0"))
+    said = [w.message for w in warnings(job) if key in w.message]
+    assert said and "of [criteria], misspelt" in said[0]
+    assert not capacity(job).rated
+
+
+@pytest.mark.parametrize("tag, hint", [("liftng", True), ("lfting", True), ("lifitng", True),
+                                       ("lift-ing", True), ("lighting", False),
+                                       ("lifting", False)])
+def test_the_lifting_tag_mistyped_reads_like_a_lifting_device(tag, hint):
+    # "liftng" posted a shelf's figure 4.2 times the lifting one with no word
+    job = parse_job_text(job_text().replace('title = "shelf"',
+                                            f'title = "shelf"\ntags = ["{tag}"]'))
+    assert bool(job.lifting_hint) == hint or job.lifting
+
+
+@pytest.mark.parametrize("key", ["date", "checked", "ref", "reviewer", "approved_by", "rev",
+                                 "engineer", "prepared_by"])
+def test_a_record_of_who_and_when_in_criteria_is_warned_not_held(key):
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_with_key("[criteria]", key, '"RK"'))
+    assert any(key in w.message for w in warnings(job))
+    assert capacity(job).rated

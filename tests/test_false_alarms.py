@@ -666,3 +666,16 @@ def test_a_label_giving_masses_and_their_total_is_read_as_the_total():
               mid="2 m", live="-4.905 kN")
     text = hoist(**si, dead="-196 N", dead_label="block and trolley, 9 kg + 11 kg = 20 kg")
     assert not held(text, "dead load in N")
+
+
+def test_a_platform_tagged_beside_a_trailer_is_the_trailers_deck():
+    from shopbeam.design.analysis import analyze
+    text = CATWALK.format(title="Cross member", notes="", tags='["platform", "trailer"]',
+                          deck="deck boards").replace(
+        '[[loads]]', '[criteria]\nimpact = "100%"\n[[loads]]', 1)
+    job = parse_job_text(text)
+    assert not [w for w in job.warnings if "read as a floor" in w.message]
+    assert not [u for u in analyze(job).unchecked if "vibration" in u.name]
+    # a platform tag alone is still a building's
+    bare = parse_job_text(text.replace('["platform", "trailer"]', '["platform"]'))
+    assert [w for w in bare.warnings if "read as a floor" in w.message]

@@ -22,7 +22,7 @@ from shopbeam.design.lifting import profile_of
 from shopbeam.design.loading import run_checks
 from shopbeam.design.local import local_unchecked
 from shopbeam.design.open_shapes import open_unchecked, replaces_angle_warning, torsion_note
-from shopbeam.jobs.jobfile import NOT_FLOOR, Job
+from shopbeam.jobs.jobfile import NOT_FLOOR, VEHICLE_DECK_TAGS, VEHICLE_TAGS, Job
 from shopbeam.jobs.rules import guessed_profile, rack_arm
 from shopbeam.errors import InputError, UnstableBeam
 from shopbeam.engine.piecewise import Piecewise
@@ -1505,7 +1505,9 @@ def braced_hogging(job: Job, st, moment, ss=None) -> list[Unchecked]:
 # state (AISC Design Guide 11 for steel framing, from memory). A caution: it does not decide
 # strength, so it does not hold back a rating.
 _FLOOR = re.compile(r"\b(floors?|mezzanines?|mezz|walkways?|catwalks?|joists?|lofts?|"
-                    r"platforms?(?![- ](?:trailers?|trucks?|beds?|bodies|body)\b))\b",
+                    r"(?<!trailer )(?<!flatbed )(?<!truck )"
+                    r"platforms?(?![- ](?:trailers?|trucks?|beds?|bodies|body)\b"
+                    r"(?![- ](?:bays?|docks?|doors?|lanes?|parking|stalls?)\b)))\b",
                     re.IGNORECASE)  # (a platform trailer or truck is the vehicle: a flatbed)
 
 
@@ -1513,8 +1515,12 @@ def floor_unchecked(job: Job) -> list[Unchecked]:
     """Walking vibration of a floor member (named by its tags or title), as not checked. A
     lifting device's title naming where it hangs ("hoist beam in the loft") is not a floor."""
     lifting = job.lifting or getattr(job.criteria, "lifting", "")
-    if NOT_FLOOR in {normal_tag(t) for t in job.tags} or \
-            not any(_FLOOR.search(t) for t in tuple(job.tags) + (() if lifting else (job.title,))):
+    normal = {normal_tag(t) for t in job.tags}
+    # a platform or deck tagged beside a vehicle's tag is the vehicle's (a flatbed's deck)
+    tags = tuple(t for t in job.tags if not (normal_tag(t) in VEHICLE_DECK_TAGS
+                                               and VEHICLE_TAGS.intersection(normal)))
+    if NOT_FLOOR in normal or \
+            not any(_FLOOR.search(t) for t in tags + (() if lifting else (job.title,))):
         return []
     wood = getattr(job.material, "kind", "") == "lumber"
     return [Unchecked(

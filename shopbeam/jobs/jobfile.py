@@ -578,6 +578,14 @@ class _Reader:
             near = difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.6)
             hint = f"; did you mean {near[0]!r}?" if near else f"; known keys: {', '.join(sorted(known))}"
             homes = _homes(k, here)
+            slip = []
+            if not homes and here != "criteria" and len(str(k)) >= 5 and not (
+                    near and _edits(str(k).lower(), near[0]) <= 2):
+                # a limit or factor misspelt AND written outside [criteria] (its header left
+                # out, or at the top): held as the key spelt right there is
+                slip = [c for c in sorted(KNOWN_KEYS["criteria"])
+                        if _edits(str(k).lower(), c) <= 2]
+                homes = ["criteria"] if slip else homes
             if homes and not difflib.get_close_matches(k, sorted(known), n=1, cutoff=0.85):
                 if homes == [""]:  # a top-level key written below a [table] header
                     hint = (f": {k} belongs at the top of the file, before the first [table] "
@@ -585,6 +593,9 @@ class _Reader:
                             "table); move it up")
                 else:
                     hint = f": {k} belongs under " + " or ".join(_TABLES[t] for t in homes)
+                if slip:
+                    hint = (f": it reads like {slip[0]} of [criteria], misspelt and written "
+                            "outside it (a [criteria] header left out?)")
             if here == "loads" and str(k).lower() in ("dead", "live", "dead_load", "permanent"):
                 # a load's case said as a key of its own: `case` says it
                 word = "live" if str(k).lower() == "live" else "dead"
@@ -779,7 +790,12 @@ _LOWERING_WORDS = (  # whole keys of a table that name one of those, whatever th
     (re.compile(r"^(?:crit|limits?$|checks?$|design|settings?$)", re.I), "", "criteria"))
 # [criteria] keys that are only words (a note, a name): warned, not held
 _CRITERIA_WORDS_ONLY = re.compile(r"^(?:notes?|comments?|remarks?|description|by|checked_?by|"
-                                  r"references?|sources?|standard|code)$", re.I)
+                                  r"references?|sources?|standard|code|"
+                                  # a record of who and when ([project] keys and their kin):
+                                  # no limit or factor
+                                  r"refs?|date|checked|reviewed(?:_?by)?|reviewer|approved"
+                                  r"(?:_?by)?|prepared(?:_?by)?|designed_?by|drawn_?by|"
+                                  r"revision|rev|engineer|shop|job|client|location)$", re.I)
 
 
 _BOOL_KEYS = frozenset({"welded", "patterned", "brace", "wet_service"})
@@ -791,6 +807,16 @@ _DEAD_WORDS = re.compile(r"(?<![\w-])(?:dead(?:[ _-]?load)?|self[ _-]?weight|per
                          r"(?![\w-])(?! ?end)", re.IGNORECASE)
 _DEAD_VALUE = re.compile(r"^\s*(?:dead|d|dl|permanent|dead[ _-]?load|permanent[ _-]?load|"
                          r"self[ _-]?weight|fixed|static)\s*$", re.IGNORECASE)
+
+
+def _lifting_typo(tag) -> bool:
+    """Whether a tag is 'lifting' mistyped: a letter off, two neighbours swapped, or split by
+    a dash or space (never 'lifting' itself, nor another word two letters off)."""
+    t = re.sub(r"[\W_]", "", str(tag)).lower()
+    if t == "lifting":
+        return str(tag).strip().lower() != "lifting"
+    d = _edits(t, "lifting")
+    return d == 1 or (d == 2 and sorted(t) == sorted("lifting"))
 
 
 def _edits(a: str, b: str) -> int:
@@ -2914,11 +2940,16 @@ _NOT_FLOOR_WORDS = re.compile(r"\b(roofs?|ceilings?|rafters?|purlins?|shelf|shel
                               r"headers?|benches?|tanks?|machines?|equipment|scales?)\b",
                               re.IGNORECASE)
 NOT_FLOOR = "not-floor"  # the tag that says a member read as a floor is not one
+# a platform or deck tagged beside a vehicle's tag is the vehicle's own (a flatbed's deck)
+VEHICLE_DECK_TAGS = frozenset({"platform", "deck"})
+VEHICLE_TAGS = frozenset({"trailer", "truck", "flatbed", "vehicle", "truck-body"})
 # a floor no vehicle has: a mezzanine, loft or platform is a building's, whatever vans or
 # trucks the words mention ("mezzanine above where the service vans park"); a platform
 # trailer, truck or bed is the vehicle itself (a flatbed)
 _BUILDING_FLOOR = re.compile(r"\b(?:mezzanines?|mezz|lofts?|catwalks?|walkways?|"
-                             r"platforms?(?![- ](?:trailers?|trucks?|beds?|bodies|body)\b)|"
+                             r"(?<!trailer )(?<!flatbed )(?<!truck )"
+                             r"platforms?(?![- ](?:trailers?|trucks?|beds?|bodies|body)\b"
+                             r"(?![- ](?:bays?|docks?|doors?|lanes?|parking|stalls?)\b))|"
                              r"offices?|attics?|stor(?:e)?ys?|buildings?)\b", re.IGNORECASE)
 # where vehicles are, not what the member is part of ("loft over the van bays")
 _VEHICLE_PLACE = re.compile(r"\b(?:over|above|under|beneath|below|beside|behind|next to|near|"
@@ -2941,8 +2972,9 @@ def _floor_said(tags, title="", notes="") -> str:
     a floor tag, or the floor words of the title or notes with nothing there that is no
     floor (a roof, a shelf...); "" where nothing does."""
     normal = {normal_tag(t) for t in tags}
-    if FLOOR_TAGS.intersection(normal):
-        return f"tag {sorted(FLOOR_TAGS.intersection(normal))[0]!r}"
+    floor = FLOOR_TAGS.intersection(normal)
+    if floor and not (floor <= VEHICLE_DECK_TAGS and VEHICLE_TAGS.intersection(normal)):
+        return f"tag {sorted(floor)[0]!r}"
     text = " | ".join(_as_words(t) for t in (title, notes))
     m = _search(_FLOOR_WORDS, text)
     # a vehicle's deck (a trailer's deck boards) is not a building floor; a floor over the van
@@ -4686,6 +4718,9 @@ def _lifting_hint(r: _Reader, title, notes, tags, raw_loads, moving, criteria) -
     # caution then stays on from "lift" to "lifting" instead of going out for two keys)
     said += [f"tag {t!r}" for t in tags if len(t.strip()) > 4
              and "lifting".startswith(t.strip().lower()) and f"tag {t!r}" not in said]
+    # "liftng", "lfting", "lifitng", "lift-ing": the tag lifting mistyped by a letter (or two
+    # letters swapped); "lighting" is another word
+    said += [f"tag {t!r}" for t in tags if _lifting_typo(t) and f"tag {t!r}" not in said]
     if not any(x.startswith("title") for x in said):  # and a run-together word of the title
         joined = [w for w in re.findall(r"[^\W\d_]+", str(title or ""))
                   if _LIFTING_STEMS.search(w)]
