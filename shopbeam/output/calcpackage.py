@@ -27,6 +27,7 @@ from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.errors import InputError
 from shopbeam.jobs.storage import atomic_write
 from shopbeam.output import svg
+from shopbeam.output.label import css_string, label_text, rating
 from shopbeam.output.present import CheckRow, EnvelopeRow, present, upward_note  # noqa: F401 (CheckRow re-exported)
 from shopbeam.output.report import describe_load, describe_support
 
@@ -201,7 +202,6 @@ def build(result, *, input_bytes: bytes = b"", input_name: str = "", fields: dic
     # the rating the shop would post, from the same job (`shopbeam rating`): a package filed
     # with the job says what may be posted, or NOT RATED and why
     from shopbeam.design.capacity import capacity  # noqa: PLC0415 - only the package rates
-    from shopbeam.output.label import label_text, rating  # noqa: PLC0415
 
     cap = capacity(job)
     rating_text = label_text(rating(cap, getattr(result, "unchecked", ()),
@@ -249,15 +249,6 @@ def _check_more(c: CheckRow) -> str:
 
 
 # ------------------------------------------------------------------ HTML
-def css_string(text: str) -> str:
-    """Text as a CSS string literal (for @page margin boxes)."""
-    out = text.replace("\\", "\\\\").replace('"', '\\"').replace("\n", " ")
-    # < and > as CSS escapes: the string sits inside a <style> element, where a "</style>"
-    # in a title would end it and let markup (a script) run in the package
-    out = out.replace("<", "\\3c ").replace(">", "\\3e ")
-    return '"' + "".join(ch if ch.isprintable() else " " for ch in out) + '"'
-
-
 CSS = """
 *{box-sizing:border-box}
 body{font-family:"DejaVu Sans","Liberation Sans",Arial,Helvetica,sans-serif;font-size:10pt;

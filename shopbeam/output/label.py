@@ -879,10 +879,18 @@ def _long(r: Rating) -> bool:
     return len(r.figures) + len(r.notes) >= 6 or words > 700
 
 
+def css_string(text: str) -> str:
+    """Text as a CSS string literal (for @page margin boxes)."""
+    out = text.replace("\\", "\\\\").replace('"', '\\"').replace("\n", " ")
+    # < and > as CSS escapes: the string sits inside a <style> element, where a "</style>"
+    # in a title would end it and let markup (a script) run in the package
+    out = out.replace("<", "\\3c ").replace(">", "\\3e ")
+    return '"' + "".join(ch if ch.isprintable() else " " for ch in out) + '"'
+
+
+
 def plaque_html(r: Rating, paper: str = "letter") -> str:
     """The full-page plaque as a self-contained printable HTML page (big type, one page)."""
-    from shopbeam.output.calcpackage import css_string  # noqa: PLC0415 - one quoting rule
-
     e = escape
     size = "A4" if paper.lower() == "a4" else "letter"
     # a plaque long enough for a second sheet: every sheet names the member, is numbered and
