@@ -85,8 +85,9 @@ def test_a_bad_output_path_is_one_message_about_that_path(env, tmp_path, command
     suffix = ".html" if command[0] == "report" else ".txt"
     folder = tmp_path / f"out{suffix}"
     folder.mkdir()
-    r = run(env, *command, "-o", str(folder), "--overwrite")
-    assert r.returncode == 2 and "is a folder, not a file" in r.stderr
+    for more in ((), ("--overwrite",)):  # not "add --overwrite to replace it" first
+        r = run(env, *command, "-o", str(folder), *more)
+        assert r.returncode == 2 and "is a folder, not a file" in r.stderr
     assert ".saving" not in r.stderr and "Traceback" not in r.stderr
     missing = tmp_path / "nowhere" / f"x{suffix}"
     r = run(env, *command, "-o", str(missing))

@@ -101,6 +101,9 @@ def _write_plaque(r, out: Path, paper: str, overwrite: bool) -> int:
     if suffix not in (".html", ".htm", ".pdf", ".txt"):
         raise InputError(f"{str(out)!r}: the plaque is written as .html, .pdf or .txt (by the "
                          "file's suffix)", key="-o")
+    if out.is_dir():
+        raise InputError(f"{out} is a folder, not a file; nothing was written. Give a file "
+                         "name (with its suffix)", key="-o")
     if out.exists() and not overwrite:
         raise InputError(f"{out} already exists; nothing was written. Give another file name, "
                          "or add --overwrite to replace it", key="-o")

@@ -611,14 +611,16 @@ class _Reader:
                           f"{path} belongs under [criteria]: written here it is not read, so "
                           "the figure would leave it out. Move it")
                 continue
-            if here == "criteria" and near and not homes and len(str(k)) >= 5 \
-                    and _edits(str(k).lower(), near[0]) <= 2:
-                # a misspelt limit or factor ("safety_factr", "deflecton"): read as written,
-                # the checks would run at the default, and a verdict printed on it would be
-                # wrong; the key meant is plain, so it is refused like a misspelt table
-                self.error(f"unknown key {k!r} in {label}{hint} Every key there sets a limit "
-                           "or a factor: misspelt, it is not read and the checks would use the "
-                           f"default. Write it as {near[0]}", path)
+            typo = [c for c in sorted(known) if _edits(str(k).lower(), c) <= 2
+                    and c[:1] == str(k)[:1].lower()] if here == "criteria" else []
+            if typo and not homes and (len(str(k)) >= 5 or str(k).lower() in known):
+                # a misspelt limit or factor ("safety_factr", "deflecton", "IMPACT"): read as
+                # written, the checks would run at the default, and a verdict printed on it
+                # would be wrong; the key meant is plain (a letter or two off, the same first
+                # letter), so it is refused like a misspelt table
+                self.error(f"unknown key {k!r} in {label}; did you mean {typo[0]!r}? Every key "
+                           "there sets a limit or a factor: misspelt, it is not read and the "
+                           f"checks would use the default. Write it as {typo[0]}", path)
                 continue
             meant = _lowering_meant(str(k), here, near, homes, table[k], table)
             if meant and here == "loads" and str(k).lower() in ("dead", "dead_load",

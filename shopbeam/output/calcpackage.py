@@ -561,6 +561,9 @@ def write(pkg: Package, path, *, overwrite: bool = False) -> str:
 
     p = Path(path)
     kind = format_of(p)
+    if p.is_dir():
+        raise InputError(f"{p} is a folder, not a file; nothing was written. Give a file name "
+                         "(with its suffix)", key="-o")
     if p.exists() and not overwrite:
         raise InputError(f"{p} already exists; nothing was written. Give another file name, or "
                          "add --overwrite to replace it", key="-o")
