@@ -1988,3 +1988,17 @@ def test_a_key_two_letters_off_another_word_is_held_not_refused_as_that_key(key)
     job = parse_job_text(_with_key("[criteria]", key, '"L/360"'))
     assert any(key in w.message for w in warnings(job))
     assert not capacity(job).rated
+
+
+def test_a_wind_uplift_typed_as_a_dead_load_pushing_down_is_held_with_the_key_marked():
+    # label "wind uplift", case dead, uplift = true and a minus sign: without the key it is
+    # held; with it, it had only been told the key "changes nothing", and was rated
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_uniform('uplift = true\ncase = "dead"\nlabel = "wind uplift"'))
+    cap = capacity(job)
+    assert not cap.rated and any("dead load pushing down" in r for r in cap.not_rated)
+    plain = parse_job_text(_uniform('uplift = true\ncase = "dead"\nlabel = "shelf"'))
+    # a weight marked up by a slip of the key: warned only ("changes nothing"), no hold
+    assert not capacity(plain).not_rated
+    assert any("changes nothing" in w.message for w in warnings(plain))

@@ -2716,6 +2716,17 @@ def _idle_load_keys(r: _Reader, raw_loads, loads, supports, length, tags, levels
                        f"{key}.uplift",
                        f"the load{name} is marked uplift = true but pushes down: check its "
                        "sign")
+            elif _pushes_down(got) and isinstance(got.label, str) \
+                    and _UPLIFT_WORDS.search(got.label):
+                # a wind uplift typed as a dead load, with the minus sign: counted on as a
+                # weight that is always there, the member is never checked pushed up
+                r.hold(f"this load is labelled {got.label!r} and marked uplift = true, but it "
+                       "is a dead load whose value pushes DOWN (negative): counted as a weight "
+                       "always there, the member is never checked pushed up, so no rating is "
+                       "posted. An uplift is a live load written positive with uplift = true "
+                       "(remove case = \"dead\")", f"{key}.uplift",
+                       f"the load labelled {got.label!r} is a dead load pushing down: an "
+                       "uplift is written positive with uplift = true, as a live load")
             elif _pushes_down(got):
                 r.warn("uplift = true says this load pushes up, but its value pushes down "
                        "(negative): it changes nothing; remove it, or check the sign",
