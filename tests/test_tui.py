@@ -547,3 +547,32 @@ async def test_key_line_keeps_its_order_as_the_focus_moves(tmp_path):
         await pilot.press("tab")
         await settle(pilot)
         assert line() == first and first
+
+
+@sync
+async def test_after_esc_the_row_keys_work_and_tab_picks_the_first_field(tmp_path):
+    # esc leaves the field: ctrl+t then did nothing (the view's own keys need something in
+    # it focused), and the first Tab picked the view itself, where typing goes nowhere
+    from shopbeam.tui.widgets import FieldInput
+
+    path = tmp_path / "demo.toml"
+    shutil.copy(PRESETS / "demo.toml", path)
+    app = make_app(path, cursor_blink=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("escape", "3")
+        await settle(pilot)
+        s = app.job_screen.session
+        n = len(s.doc.get("loads"))
+        await pilot.press("escape")
+        await settle(pilot)
+        assert app.focused is None
+        await pilot.press("ctrl+t")
+        await settle(pilot)
+        assert len(s.doc.get("loads")) == n + 1
+        await pilot.press("escape", "1")
+        await settle(pilot)
+        await pilot.press("escape", "tab")
+        await settle(pilot)
+        assert app.focused is not None and not isinstance(app.focused, type(
+            app.job_screen.query_one("#job"))), type(app.focused).__name__

@@ -133,6 +133,10 @@ class JobScreen(SteadyKeys, Screen):
         Binding("f1", "app.help", "keys", priority=True),
         Binding("question_mark", "app.help", "keys", show=False),
         Binding("escape", "leave_field", "leave field", show=False),
+        # with no field picked (after esc), the rows' keys still work in their views; the
+        # view's own bindings take them whenever something in it has the focus
+        Binding("ctrl+t", "rows('add')", "add", show=False),
+        Binding("ctrl+x", "rows('remove')", "remove", show=False),
     ] + [Binding(",".join([key, f"alt+{key}"] + ([OPTION_DIGITS[key]]
                                                 if key in OPTION_DIGITS else [])),
                  f"view('{vid}')", name, show=False, priority=False)
@@ -478,6 +482,17 @@ class JobScreen(SteadyKeys, Screen):
     def action_leave_field(self) -> None:
         self.set_focus(None)
 
+    def action_rows(self, what: str) -> None:
+        """ctrl+t / ctrl+x with nothing in the view focused: the view's add or remove, where
+        it has rows; elsewhere it is said where they work (never silently nothing)."""
+        view = self.query_one(f"#{self.current}")
+        act = getattr(view, f"action_{what}_row", None)
+        if act is not None:
+            act()
+        else:
+            self.app.notify(f"ctrl+{'t' if what == 'add' else 'x'} {what}s a row in the "
+                            "supports (2 Span) and loads (3 Loads) views.", timeout=5)
+
     def focus_next(self, selector="*"):
         """Tab: as Textual moves it, but from the view's last field it wraps to the first
         field, not to the view itself (which takes the focus when it is switched to, so that
@@ -492,9 +507,11 @@ class JobScreen(SteadyKeys, Screen):
     def _tab(self, move, selector):
         before = self.focused
         got = move(selector)
-        if got is not None and isinstance(got, View) and before is not None \
-                and before is not got and got in before.ancestors:
-            got = move(selector)  # past the view, onto the field at the other end
+        if got is not None and isinstance(got, View) and (
+                before is None or before is not got and got in before.ancestors):
+            # past the view, onto the field at the other end (or, from no field picked,
+            # after esc, onto the first one: the view itself takes no typing)
+            got = move(selector)
         return got
 
     # ------------------------------------------------------------------ edits
