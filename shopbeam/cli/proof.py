@@ -101,14 +101,7 @@ def _write_plaque(r, out: Path, paper: str, overwrite: bool) -> int:
     if suffix not in (".html", ".htm", ".pdf", ".txt"):
         raise InputError(f"{str(out)!r}: the plaque is written as .html, .pdf or .txt (by the "
                          "file's suffix)", key="-o")
-    if out.is_dir():
-        raise InputError(f"{out} is a folder, not a file; nothing was written. Give a file "
-                         "name (with its suffix)", key="-o")
-    if out.exists() and not overwrite:
-        raise InputError(f"{out} already exists; nothing was written. Give another file name, "
-                         "or add --overwrite to replace it", key="-o")
-    if not out.parent.is_dir():
-        raise InputError(f"the folder {out.parent} does not exist", key="-o")
+    cp.check_out(out, overwrite)
     if suffix == ".txt":
         data = label.plaque_text(r).encode("utf-8")
     else:

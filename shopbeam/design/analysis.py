@@ -316,13 +316,12 @@ def analyze(job: Job) -> Result:
         # a live load pushes up: every check again with the dead loads at 0.6 and with the
         # uplift off, the worst kept, and each support's range over the three
         envelope = envelope or uplift.rows(sol, "the loads as entered")
-        for other, state in uplift.variants(job):
+        for other, state, tag in uplift.variants(job):
             got = analyze(other)
             checks = uplift.merge(checks, got.checks, state)
             more = [u for u in got.unchecked if u not in unchecked]
             unchecked += more
             notes += [not_checked_words(u) for u in more if u not in said]
-            tag = "dead loads at 0.6" if state == uplift.STATE else "the uplift off"
             envelope = uplift.widen(envelope, got.reaction_envelope
                                     or uplift.rows(got.solution, ""), tag)
         notes.append(uplift.note([c.name for c in checks if uplift.STATE in c.state],

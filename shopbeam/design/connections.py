@@ -19,7 +19,7 @@ def _states(job, sol):
     (`design.uplift`)."""
     states, words = _states_of(job, sol)
     if uplift.applies(job):
-        for other, _ in uplift.variants(job):  # the dead loads at 0.6; the uplift off
+        for other, _, _ in uplift.variants(job):  # the dead loads at 0.6; the uplift off
             more, _ = _states_of(other, solve(other.beam(), candidates=False))
             states = list(states) + list(more)
         words = ", ".join(x for x in (words, "with the dead loads in full and at 0.6, and "

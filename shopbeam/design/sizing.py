@@ -498,7 +498,7 @@ def _sweep(job, cands, label, with_capacity, confirm, stock=None, material_note=
         if uplift.applies(job):
             # a live load that pushes up: the dead loads at 0.6 and the uplift off too, each
             # row the worst
-            for other, _ in uplift.variants(job):
+            for other, _, _ in uplift.variants(job):
                 base6 = replace(other, self_weight=False)
                 rows6, _, why6 = _batched(other, base6, load_parts(base6), cands,
                                           with_capacity)
@@ -1246,7 +1246,7 @@ def _worst_check(j, ss, st):
     g = max(list(evaluate(j, 1.0, ss=ss).checks) + top_flange_checks(j, st, ss)
             + hogging_checks(j, st, ss), key=lambda c: c.ratio)
     if uplift.applies(j):
-        for h, state in uplift.variants(j):  # the dead loads at 0.6; the uplift off
+        for h, state, _ in uplift.variants(j):  # the dead loads at 0.6; the uplift off
             hs = state_set(h)
             g6 = _worst_check(h, hs, strengths(h, beam=hs.beam))
             if g6.ratio > g.ratio:

@@ -62,9 +62,10 @@ def calm(job):
 
 
 def variants(job):
-    """(the job as another state, the words its checks and rows are marked with): the
-    dead loads at 0.6 against the uplift, and the uplift off."""
-    return ((held_down(job), STATE), (calm(job), CALM))
+    """(the job as another state, the words its checks are marked with, the words its rows
+    of a reaction envelope are): the dead loads at 0.6 against the uplift, and the uplift
+    off."""
+    return ((held_down(job), STATE, "dead loads at 0.6"), (calm(job), CALM, "the uplift off"))
 
 
 def merge(checks, other, state: str = STATE) -> list:

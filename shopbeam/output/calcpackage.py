@@ -22,7 +22,7 @@ from dataclasses import dataclass, field
 from html import escape
 
 from shopbeam import __version__, units
-from shopbeam.cautions import SHORT, SHORT_LIFTING
+from shopbeam.cautions import banner
 from shopbeam.design.checks import BASIS_WORDS, basis_of
 from shopbeam.errors import InputError
 from shopbeam.jobs.storage import atomic_write
@@ -287,7 +287,7 @@ def _page_css(pkg: Package) -> str:
     head = " - ".join(x for x in (tb.get("Shop", ""), tb.get("Job", ""), pkg.title) if x)
     foot = f"{pkg.program}; input SHA-256 {pkg.input_sha256[:16]}"
     # the caution on every printed sheet, at its foot (the stronger one on a lifting device)
-    warn = (SHORT_LIFTING + " " if pkg.lifting else "") + SHORT
+    warn = banner((), pkg.lifting)
     rev = tb.get("Revision", "")
     return ("@page{size:" + size + ";margin:16mm 14mm 16mm 14mm;"
             "@top-left{content:" + css_string(head[:110]) + ";font-size:8pt}"
@@ -561,17 +561,23 @@ def write(pkg: Package, path, *, overwrite: bool = False) -> str:
 
     p = Path(path)
     kind = format_of(p)
+    check_out(p, overwrite)
+    data = render_bytes(pkg, kind)
+    write_out(p, data)
+    return kind
+
+
+def check_out(p, overwrite: bool) -> None:
+    """An -o file that may be written: not a folder, not an existing file unless
+    `overwrite`, in a folder that exists (the package and the plaque alike)."""
     if p.is_dir():
         raise InputError(f"{p} is a folder, not a file; nothing was written. Give a file name "
                          "(with its suffix)", key="-o")
     if p.exists() and not overwrite:
         raise InputError(f"{p} already exists; nothing was written. Give another file name, or "
                          "add --overwrite to replace it", key="-o")
-    if p.parent and not p.parent.is_dir():
+    if not p.parent.is_dir():
         raise InputError(f"the folder {p.parent} does not exist", key="-o")
-    data = render_bytes(pkg, kind)
-    write_out(p, data)
-    return kind
 
 
 def write_out(p, data: bytes) -> None:

@@ -32,7 +32,7 @@ from dataclasses import dataclass
 from html import escape
 
 from shopbeam import units
-from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, SHORT, SHORT_LIFTING, cautions_for
+from shopbeam.cautions import RACK_TAGS, SHELF_TAGS, banner, cautions_for
 from shopbeam.design import fatigue, uplift
 from shopbeam.design.analysis import (FATIGUE_CHECKED, JUDGED_AT_RATED_LOAD, NO_AXIAL,
                                       hung_by_open_ends,
@@ -895,7 +895,7 @@ def plaque_html(r: Rating, paper: str = "letter") -> str:
     size = "A4" if paper.lower() == "a4" else "letter"
     # a plaque long enough for a second sheet: every sheet names the member, is numbered and
     # carries the caution at its foot (the lifting one too on a lifting device)
-    warn = (SHORT_LIFTING + " " if r.lifting else "") + SHORT
+    warn = banner((), r.lifting)
     margins = ("@top-left{content:" + css_string(f"Load rating: {r.title}"[:110])
                + ";font-size:8pt}@bottom-left{content:" + css_string(warn)
                + ";font-size:7.5pt;font-weight:bold}"
