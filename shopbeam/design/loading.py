@@ -455,11 +455,23 @@ def _extreme_rows_many(items) -> list[tuple[np.ndarray, np.ndarray, np.ndarray]]
     return out
 
 
-@dataclass(frozen=True)
 class EnvelopeExtreme:
-    value: float  # signed: the largest upward (upper) or downward (lower) value
-    at: float
-    pattern: tuple[int, ...]
+    """The largest (upper) or smallest (lower) value of an envelope in a region, where it
+    falls, and the pattern that gives it (worked out when first read: most searches read
+    only the value)."""
+
+    __slots__ = ("value", "at", "_env", "_row", "_upper", "_pattern")
+
+    def __init__(self, value: float, at: float, env: "PatternEnvelope", row: int, upper: bool):
+        self.value = value  # signed: the largest upward (upper) or downward (lower) value
+        self.at = at
+        self._env, self._row, self._upper, self._pattern = env, row, upper, None
+
+    @property
+    def pattern(self) -> tuple[int, ...]:
+        if self._pattern is None:
+            self._pattern = self._env.pattern(self._row, self._upper)
+        return self._pattern
 
 
 class Envelopes:
@@ -519,7 +531,7 @@ class Envelopes:
                 i = int(run[np.flatnonzero(vr == best)].min())
         else:
             i = int(np.argmax(v) if upper else np.argmin(v))
-        out = EnvelopeExtreme(float(v[i]), float(x[i]), e.pattern(int(r[i]), upper))
+        out = EnvelopeExtreme(float(v[i]), float(x[i]), e, int(r[i]), upper)
         self._memo[key] = out
         return out
 
