@@ -45,6 +45,9 @@ class Result:
     # patterned or moving loads: per support the largest upward and downward reaction over
     # every load state and the state that gives each (see loading.Evaluation.reactions)
     reaction_envelope: tuple = ()
+    # patterned or moving loads: the words of the load state that governs the governing
+    # check ("" where it is the loads as entered)
+    governing_words: str = ""
 
     @property
     def governing(self) -> Check:
@@ -259,6 +262,7 @@ def analyze(job: Job) -> Result:
     sol = entered = sound_solution(job)
 
     shown, state_sol, state_words, envelope = "", None, "", ()
+    extra, moving_at, words = [], None, ""
     # one state set for every rule that reads the load states: its unit solutions, wheel
     # variants and influence data are worked out once
     ss = loading.state_set(job) if loading.needs_states(job) or fatigue.given(job) else None
@@ -281,9 +285,8 @@ def analyze(job: Job) -> Result:
             extra.append(f"checks include the {impact_of(job):.0%} impact allowance on live loads")
         if loading.read_moving(job) and ev.solution is not None:
             sol = ev.solution
-            extra.append(f"reactions, extremes and diagrams are for the state that governs "
-                         f"{gov.name}" + (f" ({words})" if words else "")
-                         + (", impact included" if impact_of(job) else ""))
+            moving_at = len(extra)  # this line is written again if an uplift state governs
+            extra.append(_moving_shown(job, gov.name, words))
         else:
             patterned = any(ld.patterned for ld in job.loads)
             extra.append("reactions and extremes are for the loads as entered"
@@ -316,8 +319,10 @@ def analyze(job: Job) -> Result:
         # a live load pushes up: every check again with the dead loads at 0.6 and with the
         # uplift off, the worst kept, and each support's range over the three
         envelope = envelope or uplift.rows(sol, "the loads as entered")
+        states = []  # (the words its checks are marked with, its result)
         for other, state, tag in uplift.variants(job):
             got = analyze(other)
+            states.append((state, got))
             checks = uplift.merge(checks, got.checks, state)
             more = [u for u in got.unchecked if u not in unchecked]
             unchecked += more
@@ -327,10 +332,31 @@ def analyze(job: Job) -> Result:
         notes.append(uplift.note([c.name for c in checks if uplift.STATE in c.state],
                                  [c.name for c in checks if uplift.CALM in c.state]))
         anchors = uplift.anchors(envelope)  # the UPLIFT cautions name the largest pull
+        if extra:  # patterned or moving loads: the state shown as governing is the one that
+            # governs after the uplift states are taken in (the governing check's own)
+            top = max(checks, key=lambda c: c.ratio)
+            got = next((g for state, g in reversed(states) if top.state.endswith(state)), None)
+            if got is not None:
+                st_words = next(state for state, g in states if g is got)
+                if got.governing_words:
+                    st_words += "; " + got.governing_words
+                if moving_at is not None:
+                    sol = got.solution
+                    extra[moving_at] = _moving_shown(job, top.name, st_words)
+                    shown = "; ".join(extra)
+                else:
+                    state_sol = got.state_solution or got.solution
+                    state_words = f"the load state that governs {top.name}: {st_words}"
     return Result(job, sol, tuple(checks),
                   tuple(job_cautions(job, sol, anchors) + check_notes(job, st) + notes), shown,
                   state_sol, state_words, tuple(unchecked),
-                  reaction_envelope=tuple(envelope))
+                  reaction_envelope=tuple(envelope), governing_words=words)
+
+
+def _moving_shown(job: Job, name: str, words: str) -> str:
+    """The report's line on which state a moving-load job's numbers are for."""
+    return (f"reactions, extremes and diagrams are for the state that governs {name}"
+            + (f" ({words})" if words else "") + (", impact included" if impact_of(job) else ""))
 
 
 def hung_by_open_ends(job: Job) -> list[tuple[float, float]]:
