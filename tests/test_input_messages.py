@@ -237,6 +237,12 @@ def test_a_dead_only_shelf_is_not_told_about_lifting():
     ("Arm 2", '["lift"]', "tag 'lift'"),
     ("Block & tackle beam", "[]", "title: 'Block & tackle'"),
     ("Engine pulling beam over bay 2", "[]", "title: 'pulling beam'"),
+    # lift tables and vehicle lifts are lifting devices (industrial scissor lifts and lift
+    # tables: ANSI MH29.1; vehicle lifts: ANSI/ALI ALCTV, both from memory)
+    ("Lift table top beam", "[]", "title: 'Lift table'"),
+    ("Scissor lift deck beam", "[]", "title: 'Scissor lift'"),
+    ("Two-post car lift arm", "[]", "title: 'car lift'"),
+    ("4-post lift runway", "[]", "title: '4-post lift'"),
 ])
 def test_more_lifting_words_make_an_untagged_job_not_rated(title, tags, found):
     job = parse_job_text(cantilever("36 in", tags=tags, title=title))
@@ -247,7 +253,9 @@ def test_more_lifting_words_make_an_untagged_job_not_rated(title, tags, found):
 
 
 @pytest.mark.parametrize("title", ["Tackle box shelf", "Runway lights bracket",
-                                   "Shelf for lugs", "Lug nut shelf", "Shackle storage shelf"])
+                                   "Shelf for lugs", "Lug nut shelf", "Shackle storage shelf",
+                                   "Shelf over the scissor lift bay",
+                                   "Parts shelf by the car lift parking"])
 def test_words_with_an_everyday_shop_meaning_are_no_lifting_hint_alone(title):
     # tackle, runway, lug and shackle name lifting parts only in a phrase (block and tackle,
     # runway beam, lifting lug, shackle point): a plain shelf keeps its rating

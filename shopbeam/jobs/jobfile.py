@@ -2763,6 +2763,10 @@ _LIFTING_WORDS = re.compile(
     r"stands?|houses?)\b)|pad[- ]?eyes?|"
     r"shackle points?|sling points?|beam clamps?|runway (?:beams?|rails?)|pulleys?|"
     r"engine (?:pullers?|lifts?)|strongbacks?|strong-backs?|cherry ?pickers?|"
+    # lift tables and vehicle lifts raise a load too (not a shelf beside one's bay)
+    r"(?:(?:lift|scissor[- ]lift) tables?|scissor[- ]?lifts?|(?:car|vehicle|auto|automotive|"
+    r"truck|two[- ]post|four[- ]post|[24][- ]post) lifts?)(?! (?:bays?|aisles?|parking|"
+    r"stor(?:e|age)|charg\w*|pits?)\b)|"
     r"(?:lifting|lift|pick|picking|hoist|rigging) lugs?|"
     r"hook (?:loads?|points?|blocks?|beams?|heights?)|(?:on|from|under) (?:the|a) hook|"
     r"pick(?:ing)? (?:points?|beams?|bars?)|load blocks?|tuggers?|chain motors?|"
