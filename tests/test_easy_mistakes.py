@@ -1238,7 +1238,9 @@ def test_a_lumber_size_written_wide_first_says_how_it_is_read():
 
 @pytest.mark.parametrize("title", ["Shelf for the van der Berg order",
                                    "Shelf in the trailer park office",
-                                   "Shelf for lift truck batteries"])
+                                   "Shelf for lift truck batteries",
+                                   "Storage platform beam over the trailer bays",
+                                   "Mezzanine over the trailer docks"])
 def test_names_and_places_that_only_look_like_a_vehicle_or_a_hoist_are_not_held(title):
     job = parse_job_text(job_text().replace('title = "shelf"', f'title = "{title}"'))
     assert not any("road vehicle" in w.message or "lifting device" in w.message

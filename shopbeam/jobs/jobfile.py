@@ -4817,7 +4817,7 @@ def _as_words(text) -> str:
 
 
 _VEHICLE_WORDS = re.compile(
-    r"\b(trailers?(?! parks?\b)|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
+    r"\b(trailers?(?! (?:parks?|bays?|docks?|yards?|lots?|parking|storage)\b)|truck (?:bed|body|deck|frame)s?|flat ?beds?|pickup (?:bed|truck)s?|"
     r"vehicles?|chassis|car haulers?|cargo decks?|vans?(?! de[nr]?\b)|utes?|pickup (?:ladder )?(?:racks?|box(?:es)?)|"
     r"service bod(?:y|ies)|headache racks?|ladder racks? (?:on|for) (?:a|the) (?:truck|van)|"
     r"bus (?:luggage|racks?|shel(?:f|ves))|luggage racks?|rvs?|campers?|motor ?homes?|"
