@@ -92,6 +92,7 @@ def test_a_bad_output_path_is_one_message_about_that_path(env, tmp_path, command
     missing = tmp_path / "nowhere" / f"x{suffix}"
     r = run(env, *command, "-o", str(missing))
     assert r.returncode == 2 and "does not exist" in r.stderr
+    assert "nothing was written" in r.stderr and "Make the folder first" in r.stderr
     if os.path.isdir("/proc"):  # a folder the system keeps: nothing can be made there
         r = run(env, *command, "-o", f"/proc/x{suffix}")
         assert r.returncode == 2 and f"cannot write /proc/x{suffix}" in r.stderr

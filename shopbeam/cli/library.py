@@ -113,7 +113,8 @@ def cmd_new(args) -> int:
         target = storage.path_in(dest.folder, stem)
         dest.folder.mkdir(parents=True, exist_ok=True)
     if not target.parent.is_dir():
-        raise InputError(f"the folder {target.parent} does not exist", key="--to")
+        raise InputError(f"the folder {target.parent} does not exist; nothing was written. "
+                         "Make the folder first, or copy to a folder that exists", key="--to")
     if re.search(r"[\x00-\x1f\x7f-\x9f\u202a-\u202e\u2066-\u2069]", target.name):
         raise InputError(f"the file name {shown(target.name)} holds control characters (a "
                          "line break, an escape or a direction mark), which would hide or "

@@ -577,7 +577,8 @@ def check_out(p, overwrite: bool) -> None:
         raise InputError(f"{p} already exists; nothing was written. Give another file name, or "
                          "add --overwrite to replace it", key="-o")
     if not p.parent.is_dir():
-        raise InputError(f"the folder {p.parent} does not exist", key="-o")
+        raise InputError(f"the folder {p.parent} does not exist; nothing was written. Make the "
+                         "folder first, or give a file in a folder that exists", key="-o")
 
 
 def write_out(p, data: bytes) -> None:
