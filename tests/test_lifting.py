@@ -126,15 +126,18 @@ def test_hand_geared_profile_has_no_impact_and_no_lateral_check():
     ('lifting = "powered-monorail"\nimpact = "25%"', False),
     ('lifting = "hand-geared-monorail"\nimpact = "0%"', False),
     ('impact = "0%"', True),  # tags = ["lifting"] alone picks the powered profile
-    ('impact = "10%"', False),  # a pendant bridge crane's 10 % (ASCE 7-16 4.9.3): warned only
+    # a pendant bridge crane's 10 % (ASCE 7-16 4.9.3, from memory) is below the 25 % of the
+    # profile the tag picks: the label would post the hook load 9 % over that figure
+    ('impact = "10%"', True),
+    ('impact = "24%"', True),
+    ('impact = "25%"', False),
 ])
 def test_impact_below_the_profile_is_warned_and_not_rated(criteria, held):
     # the label posts the hook load; the hook load typed with its 25 % already in it under
     # impact = "0%" had been posted 15 % over a powered device's figure (ASCE 7-16 4.9.3,
     # from memory: 25 % for a powered monorail, 0 % for hand-geared trolley and hoist)
     job = parse_job_text(monorail(criteria=criteria))
-    assert any(p.key == "criteria.impact" and p.warning for p in job.warnings) == (
-        held or criteria == 'impact = "10%"')
+    assert any(p.key == "criteria.impact" and p.warning for p in job.warnings) == held
     res = capacity(job)
     assert any("impact" in w and "below" in w for w in res.not_rated) == held
 
