@@ -352,14 +352,17 @@ def test_web_sidesway_governs_the_rating_of_a_beam_braced_at_the_load_only():
 
 
 def test_web_sidesway_cr_halves_past_my_and_the_factor_stops_there():
-    # the same beam with a dead uniform 0.6 kip/ft (M = 0.6 x 12^2 / 8 = 10.8 kip-ft at mid):
+    # the same beam with a dead 3.6 kip hung from a lug under the bottom flange at 3 ft and at
+    # 9 ft (M = 3.6 x 3 = 10.8 kip-ft at mid; hung below, they neither destabilise the top
+    # flange, as a spread load on it between braces would, nor bear on it for J10.4):
     # Cr halves once 1.5 Ma reaches My = 62.083 kip-ft, i.e. Ma = 41.389 kip-ft, at
     # P = (41.389 - 10.8) / 3 = 10.196 kips; there J10-7 with Cr 480,000 allows only
     # 19.66 / 2 / 1.76 = 5.59 kips, so the rated load stops at 10.196 kips
     # (safety_factor = 1: at the default 1.67 on yield, bending stops at My / 1.67, below the
     # step's My / 1.5, which a job reaches only with a factor under 1.5; checks.on_yield)
-    job = _sidesway_job(load='[[loads]]\ntype = "uniform"\nvalue = "-0.6 kip/ft"\n'
-                             'case = "dead"\n[criteria]\nsafety_factor = 1.0')
+    hung = "".join(f'[[loads]]\ntype = "point"\nat = "{x} ft"\nvalue = "-3.6 kip"\ncase = "dead"\n'
+                   'flange = "bottom"\nlug = true\n' for x in (3, 9))
+    job = _sidesway_job(load=hung + '[criteria]\nsafety_factor = 1.0')
     res = capacity(job)
     p = 1000 * LBF * res.factor / KIP
     assert p == pytest.approx((50 * 14.9 / 12 / 1.5 - 10.8) / 3, rel=1e-6)
@@ -370,14 +373,15 @@ def test_web_sidesway_cr_halves_past_my_and_the_factor_stops_there():
     assert past["web sidesway buckling"].params["Cr"] == pytest.approx(480_000 * KSI)
     assert past["web sidesway buckling"].ratio > 1
     # live loads alone (no dead load): the closed form's k lands past the step and the
-    # bracket finds it: a uniform live 0.3 kip/ft with a 2 kip point load at mid
+    # bracket finds it: 1.8 kip hung below at 3 ft and at 9 ft with a 2 kip point load at mid
+    hung = "".join(f'[[loads]]\ntype = "point"\nat = "{x} ft"\nvalue = "-1.8 kip"\n'
+                   'flange = "bottom"\nlug = true\n' for x in (3, 9))
     job = parse_job_text(SIDESWAY_JOB.format(length="12 ft", at="6 ft", beam='braces = '
-                                             '["6 ft"]', load='[[loads]]\ntype = "uniform"\n'
-                                             'value = "-300 lbf/ft"\n[criteria]\n'
+                                             '["6 ft"]', load=hung + '[criteria]\n'
                                              'safety_factor = 1.0').replace(
         '"-1000 lbf"', '"-2000 lbf"'))
     res = capacity(job)
-    # M = k (2 x 3 + 0.3 x 18) = 11.4 k kip-ft reaches 41.389 at k = 3.6306
+    # M = k (2 x 3 + 1.8 x 3) = 11.4 k kip-ft reaches 41.389 at k = 3.6306
     assert res.factor == pytest.approx(50 * 14.9 / 12 / 1.5 / 11.4, rel=1e-6)
     assert all(c.ratio <= 1 for c in res.checks)
 

@@ -306,6 +306,9 @@ def analyze(job: Job) -> Result:
     checks = list(checks) + top_flange_checks(job, st, ss)
     # braced on the top only: the bottom edge under hogging, where its strength is worked out
     checks += hogging_checks(job, st, ss)
+    # loads on the top flange of an unbraced length between braces: the strength that
+    # loading leaves it, where it is worked out
+    checks += span_top_checks(job, st, ss, 1.0, entered.moment)
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment, ss) \
         + span_top_unchecked(job, st, sol.moment, ss)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
@@ -1148,63 +1151,100 @@ def pattern_span_top(fl, l1: float, ss, env, a: float, b: float
 
 
 def span_top_unchecked(job: Job, st, moment, ss=None) -> list[Unchecked]:
-    """Loads on the top flange of an unbraced length between braces, where that loading would
-    lower the bending strength below the figure checked: listed; `capacity` posts no rating
-    where the moment at the rated load would exceed the lower strength. Wheels rolling on
-    the top flange (`rolling_on_top`) are judged over their positions at the loads as
-    entered (`moving_top_worst`)."""
-    out = []
-    fl = st.flexure
+    """Loads on the top flange of an unbraced length between braces whose strength under that
+    loading is not worked out (wheels rolling on the top flange beside patterned loads):
+    listed, and no rating is posted. Where it is worked out it is a check
+    (`span_top_checks`)."""
     limits = span_top_limits(job, st)
-    # with a wheel set, every length (wheels rolling in it, or static loads on its top that
-    # the wheels' moment adds to) is judged over the wheel positions
     rolling = list(limits) if job.moving else []
-    if rolling or any(ld.patterned for ld in job.loads):
-        ss = ss or loading.state_set(job)  # the caller's, when it has one
-    worst = moving_top_worst(job, st, ss, 1.0, rolling) if rolling else {}
+    if not rolling:
+        return []
+    ss = ss or loading.state_set(job)  # the caller's, when it has one
+    if moving_top_worst(job, st, ss, 1.0, rolling) != NOT_JUDGED:
+        return []
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    return [Unchecked(
+        TOP_FLANGE_LTB,
+        wheels_with_top_words(job) + " of the unbraced length"
+        + ("s " if len(rolling) > 1 else " ")
+        + ", ".join(f"{f(a)} to {f(b)}" for a, b, _ in rolling) + ", which destabilises "
+        "it; with patterned loads as well, the strength that leaves (eq. F1-1's Cb x 1/1.4 "
+        "at every wheel position and pattern) is not worked out, so no rating is posted. "
+        "Brace the member (beam.braces, braced = true), or drop patterned = true where "
+        "the loads stay on",
+        "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
+        blocks_rating=True)]
+
+
+SPAN_TOP_CHECK = "bending, top-flange loads between braces"
+
+
+def span_top_demands(job: Job, st, ss, k: float, moment=None):
+    """(start, end, moment, strength with the top-flange Cb, that Cb, where in words, where
+    the moment is largest or None) of each
+    unbraced length between braces that carries loads on its top flange (`span_top_limits`)
+    at the live-load factor k: every pattern (eq. F1-1's moments each the largest over the
+    patterns), every wheel position; `moment`: the diagram of a job with neither (else every
+    load on at k from `ss`). NOT_JUDGED where wheels roll on top beside patterned loads."""
+    limits = span_top_limits(job, st)
+    if not limits:
+        return []
+    moving = bool(job.moving)
+    if ss is None and (moving or moment is None or any(ld.patterned for ld in job.loads)):
+        ss = loading.state_set(job)
+    worst = moving_top_worst(job, st, ss, k, limits) if moving else {}
     if worst == NOT_JUDGED:
-        out.append(Unchecked(
-            TOP_FLANGE_LTB,
-            wheels_with_top_words(job) + " of the unbraced length"
-            + ("s " if len(rolling) > 1 else " ")
-            + ", ".join(f"{f(a)} to {f(b)}" for a, b, _ in rolling) + ", which destabilises "
-            "it; with patterned loads as well, the strength that leaves (eq. F1-1's Cb x 1/1.4 "
-            "at every wheel position and pattern) is not worked out, so no rating is posted. "
-            "Brace the member (beam.braces, braced = true), or drop patterned = true where "
-            "the loads stay on",
-            "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
-            blocks_rating=True))
-        worst, limits = {}, [x for x in limits if x not in rolling]
-    env = None
+        return NOT_JUDGED
+    patterned = ss is not None and bool(ss.spans) and not moving
+    env = loading.Envelopes(ss, k) if patterned else None
+    m = moment if moment is not None and ss is None else (
+        all_on_moment(ss, k) if ss is not None and not patterned else moment)
+    out = []
     for a, b, l1 in limits:
         where = ""
-        if (a, b, l1) in rolling:
+        if moving:  # every wheel position, each with its own Cb
             got = worst.get((a, b))
             if got is None:
                 continue
-            mmax, top, cb, p, jb = got
-            where = ", worst" + rolling_where(jb, p)
-        elif any(ld.patterned for ld in job.loads):  # every pattern, not one state's
-            if env is None:
-                env = (ss, loading.Envelopes(ss, 1.0))
-            top, cb, mmax = pattern_span_top(fl, l1, env[0], env[1], a, b)
+            demand, top, cb, p, jb = got
+            where, at = rolling_where(jb, p), None
+        elif patterned:  # an upper bound over the patterns, Cb included
+            top, cb, demand = pattern_span_top(st.flexure, l1, ss, env, a, b)
+            where = (" (the moments of eq. F1-1 each the largest over every pattern of the "
+                     "patterned loads)")
+            at = env.abs_extreme("moment", a, b).at
         else:
-            top, cb, mmax = span_top_strength(fl, l1, moment, a, b)
-        if top >= fl.cap / fl.omega * (1 - 1e-9) or mmax <= 0:
+            top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
+            at = m.extremes(a, b).abs_max_at
+        out.append((a, b, demand, top, cb, where, at))
+    return out
+
+
+def span_top_checks(job: Job, st, ss, k: float = 1.0, moment=None) -> list[Check]:
+    """The check of each unbraced length between braces whose loads bear on its top flange,
+    where that loading lowers its strength below the bending check's cap: its largest moment
+    against Mn / Omega with Cb x 1/1.4 (AISC 360-16 Commentary F1, from memory; the bending
+    check takes the loads at the shear centre)."""
+    got = span_top_demands(job, st, ss, k, moment)
+    if got == NOT_JUDGED:
+        return []
+    fl = st.flexure
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    out = []
+    for a, b, demand, top, cb, where, at in got:
+        if top >= fl.cap / fl.omega * (1 - 1e-9) or demand <= 0:
             continue
-        out.append(Unchecked(
-            TOP_FLANGE_LTB,
-            f"the unbraced length {f(a)} to {f(b)} carries loads on its top flange at points "
-            "not braced, which destabilise it; the bending check takes Cb by eq. F1-1"
-            + (" (1.0 under moving loads)" if where else "") + ", for loads at the shear "
-            f"centre. With Cb x 1/1.4 (= {cb:.3f}) the strength is {f(top, 'moment')} "
-            f"against {f(mmax, 'moment')} here{where}; no rating is posted where the rated "
-            "load would exceed it. Brace the member at the loads (beam.braces), or hang them "
-            "below the flange (flange = \"bottom\"" + ("; a [[moving]] set hangs from the "
-            "bottom flange on a job tagged lifting" if where else "") + ")",
-            "AISC 360-16 Commentary F1 (top-flange loading, Cb x 1.4^(2y/ho), from memory)",
-            blocks_rating=mmax > top * (1 + 1e-9)))  # already past it as entered
+        out.append(Check(
+            SPAN_TOP_CHECK, demand, top, "N*m",
+            f"AISC 360-16 F2 (Cb {cb:.3f} = eq. F1-1 x 1/1.4 for loads bearing on the top "
+            f"flange, Commentary F1, from memory) over the unbraced length {f(a)} to {f(b)}: "
+            f"M <= {f(top, 'moment')}{where}", at,
+            detail="the loads bear on the top flange at points not braced, which destabilises "
+            "it; brace the member at the loads (beam.braces), or hang them below the flange "
+            "(flange = \"bottom\")",
+            clause="AISC 360-16 F2 with Commentary F1 (top-flange loading, Cb x 1/1.4)",
+            source="AISC 360-16 Commentary F1 (from memory)",
+            params={"Cb": cb, "Mn_omega": top, "Lb": b - a}))
     return out
 
 

@@ -23,7 +23,7 @@ from dataclasses import dataclass, replace
 
 from shopbeam import units
 from shopbeam.design.checks import BASIS_WORDS, Check, basis_of, governing, strengths
-from shopbeam.design.loading import (Envelopes, Evaluation, envelope_ratio,
+from shopbeam.design.loading import (Evaluation, envelope_ratio,
                                      moving_reactions_off, variant_words,
                                      envelope_ratio_applies, evaluate, state_set)
 from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_demands,
@@ -31,12 +31,12 @@ from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_de
                                        hogging_checks, hogging_dead_check,
                                        tip_brace_words,
                                        travelling_hook, hogging_limits, hogging_remedy,
-                                       all_on_moment, cantilever_top_demands, top_flange_check,
+                                       cantilever_top_demands, top_flange_check,
                                        travel_words,
                                        hogging_source,
                                        moment_ranges, wheels_count_on_top,
-                                       span_top_limits, NOT_JUDGED, moving_top_worst,
-                                       pattern_span_top, rolling_where, span_top_strength,
+                                       span_top_limits, NOT_JUDGED, SPAN_TOP_CHECK,
+                                       span_top_checks, span_top_demands,
                                        top_words, unchecked_for, wheels_with_top_words)
 from shopbeam.design.analysis import bending_s
 from shopbeam.design.analysis import to_json as base_json
@@ -504,6 +504,7 @@ def _rate(job, section=None, ss=None) -> CapacityResult:
     reasons = not_rated_reasons(job, st, ss)
     res = _fatigue_cap(job, section, ss, st, _capacity(job, section, ss, st))
     res = _cantilever_top_rate(job, section, ss, st, res)
+    res = _span_top_rate(job, section, ss, st, res)
     res = _hogging_rate(job, section, ss, st, res)
     res = _with_live_off(job, section, ss, st, res)
     res = replace(res, not_rated=reasons + solved_gaps(job, st, ss, res.factor)
@@ -782,46 +783,29 @@ def _at(k: float) -> str:
 def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
     """No rating where the rated load, bearing on the top flange of an unbraced length between
     braces, would exceed the strength that loading leaves it (`limits`:
-    `analysis.span_top_limits`): the moment over every pattern at k against Mn with Cb (from
-    every load on at k) x 1/1.4."""
+    `analysis.span_top_limits`; the check `analysis.span_top_checks`): the moment over every
+    pattern at k against Mn with Cb (from every load on at k) x 1/1.4."""
     if not limits:
         return ()
-    # a wheel set: every wheel position, rolling on the top flange (a cart) or adding its
-    # moment to static loads on top (a hung trolley)
-    moving = bool(ss.parts.moving)
-    m = all_on_moment(ss, k)
-    out = []
-    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
-    worst = moving_top_worst(job, st, ss, k, limits) if moving else {}
-    if worst == NOT_JUDGED:
+    got = span_top_demands(job, st, ss, k)
+    if got == NOT_JUDGED:
         return (f"lateral-torsional buckling with the loads on the top flange not checked: "
                 f"{wheels_with_top_words(job)} "
                 "of an unbraced length, and with patterned loads as well the strength that "
                 "leaves (eq. F1-1's Cb x 1/1.4 at every wheel position and pattern) is not "
                 "worked out. Brace the member (beam.braces, braced = true), or drop patterned "
                 "= true where the loads stay on",)
-    env = Envelopes(ss, k) if ss.spans and not moving else None
-    for a, b, l1 in limits:
-        where = ""
-        if moving:  # every wheel position, each with its own Cb
-            got = worst.get((a, b))
-            if got is None:
-                continue
-            demand, top, cb, p, jb = got
-            where = rolling_where(jb, p)
-        elif ss.spans:  # patterned: an upper bound over the patterns, Cb included
-            top, cb, demand = pattern_span_top(st.flexure, l1, ss, env, a, b)
-            where = (" (the moments of eq. F1-1 each the largest over every pattern of the "
-                     "patterned loads)")
-        else:
-            top, cb, demand = span_top_strength(st.flexure, l1, m, a, b)
+    out = []
+    f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
+    for a, b, demand, top, cb, where, _at_x in got:
         if demand > top * (1 + 1e-9):
-            out.append(f"lateral-torsional buckling with the loads on the top flange not "
-                       f"checked: {_at(k)} the moment over the unbraced length {f(a)} to "
-                       f"{f(b)} reaches {f(demand, 'moment')}{where}, above "
+            out.append(f"lateral-torsional buckling with the loads on the top flange (the check "
+                       f"{SPAN_TOP_CHECK}): {_at(k)} the moment over the unbraced length "
+                       f"{f(a)} to {f(b)} reaches {f(demand, 'moment')}{where}, above "
                        f"the {f(top, 'moment')} its strength is with the loads bearing on the "
                        f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
-                       "F1, from memory; the check takes them at the shear centre). Brace the "
+                       "F1, from memory; the bending check takes them at the shear centre), "
+                       "and the factor is not lowered to it here. Brace the "
                        "member at the loads (beam.braces), or hang them below the flange "
                        "(flange = \"bottom\" on a point load; a spread load hung below goes "
                        "in as point loads at its hangers)")
@@ -914,6 +898,62 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
                    "is linear in k)")
 
 
+def _span_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
+    """An unbraced length between braces whose loads bear on its top flange: where the moment
+    at the factor found passes the lower strength that loading leaves it (`analysis.
+    span_top_checks`: Cb x 1/1.4), the factor is lowered to where it reaches it, and the
+    check is among the checks at the answer (a rating on the lower strength, not NOT RATED),
+    as for a cantilever (`_cantilever_top_rate`). The largest moment is convex in k and Cb
+    moves little with it: one bracketed root (Brent's method) from k = 0, where the dead
+    loads alone must pass it (else `_span_top` says why nothing is posted), then its passing
+    side."""
+    k = res.factor
+    if res.evaluation is None or not math.isfinite(k) or k <= 0 \
+            or not span_top_limits(job, st):
+        return res
+
+    def ratio(kk):
+        got = span_top_demands(job, st, ss, kk)
+        if got == NOT_JUDGED:
+            return None
+        # (no entry: no moment on a length loaded on top, as wheels with the live loads off)
+        return max(((d / t if t > 0 else math.inf) for _, _, d, t, *_ in got), default=0.0)
+
+    def listed(r: CapacityResult, kk: float) -> CapacityResult:
+        c = span_top_checks(job, st, ss, kk)
+        return replace(r, evaluation=replace(r.evaluation,
+                                             checks=tuple(r.evaluation.checks) + tuple(c)))
+
+    rk = ratio(k)
+    if rk is None or rk <= 1.0:
+        return listed(res, k)  # it does not come first: listed at the factor found
+    r0 = ratio(0.0)
+    if r0 is None or r0 >= 1.0:
+        return listed(res, k)  # the dead loads alone pass it: nothing to post (a reason)
+
+    def h(kk):
+        return ratio(kk) - 1.0
+
+    a0, fa, b0, _fb = brent(h, 0.0, k, r0 - 1.0, rk - 1.0)
+    k2 = a0 if fa <= 0 else b0
+    while h(k2) > 0:
+        k2 = math.nextafter(k2, 0.0)
+    e = evaluate(job, k2, section, ss, st)
+    more = list(span_top_checks(job, st, ss, k2))
+    if fatigue.given(job):
+        fat = fatigue.fatigue_check(job, st, ss, k2)
+        more += [fat] if fat is not None else []
+    top = cantilever_top_limits(job, st)
+    if top:
+        got = cantilever_top_demands(job, st, top, ss, k2)
+        more.append(top_flange_check(job, ss, max(got, key=lambda g: g[5] / g[4]),
+                                     travel_words(job, ss) if job.moving else "", st))
+    return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + tuple(more)),
+                   note="", stepped="", method=res.method + "; lowered to where the moment "
+                   "reaches the strength its loads on the top flange leave the unbraced "
+                   "length (Cb x 1/1.4; a bracketed root)")
+
+
 def hogging_root(job, st, ss, limits, k: float, dem=None) -> float | None:
     """The factor below k where the hogging moment reaches the strength the bottom flange's
     or edge's buckling leaves (`limits`: `analysis.hogging_limits`, worked out), where at k
@@ -998,7 +1038,7 @@ def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
         got = cantilever_top_demands(job, st, top, ss, k2)
         more.append(top_flange_check(job, ss, max(got, key=lambda g: g[5] / g[4]), words, st))
     hc = check(k2)[0]
-    more += [x for x in (hc, dead) if x is not None]
+    more += [x for x in (hc, dead) if x is not None] + span_top_checks(job, st, ss, k2)
     return replace(res, factor=k2, evaluation=replace(e, checks=tuple(e.checks) + tuple(more)),
                    note="", stepped="", method=res.method + "; lowered to where the hogging "
                    "moment reaches the strength the bottom " + flange_word(job) + "'s buckling "

@@ -43,7 +43,8 @@ from shopbeam.cautions import cautions_for
 from shopbeam.design import local as _local
 from shopbeam.design import uplift
 from shopbeam.design.analysis import (HOGGING_CHECK, hogging_allowables, hogging_checks,
-                                       hogging_lengths, loaded_on_top, top_flange_checks,
+                                       hogging_lengths, loaded_on_top, span_top_checks,
+                                       top_flange_checks,
                                        top_load_segments, top_only)
 from shopbeam.design.capacity import capacity, job_gaps, rating_gaps, solved_gaps
 from shopbeam.design.fatigue import fatigue_check
@@ -882,8 +883,9 @@ def _batched(job, base, parts, cands, with_capacity):
     ltb_segs = unbraced_segments(job, empty)
     # an unbraced cantilever with loads on its top flange: the strength that loading leaves
     # it (analysis.top_flange_checks, about 2.5 L) is in the full check, not the batch
+    # (and a length between braces loaded on its top: Cb x 1/1.4, analysis.span_top_checks)
     on_top = not (job.braced or job.restrained) and any(
-        free and loaded_on_top(job, a, b) for a, b, free in top_load_segments(job, empty))
+        loaded_on_top(job, a, b) for a, b, free in top_load_segments(job, empty))
     exact = not springs and not moving and not hung and not on_top
     spans = segments(empty)
     n_ratio, d_abs, _ = deflection_rule(job)
@@ -1208,8 +1210,9 @@ def _batched(job, base, parts, cands, with_capacity):
     why = [x for x, on in (("springs: exact per-section spring forces", springs),
                            ("moving loads", moving),
                            ("a load hung from a flange", hung),
-                           ("an unbraced cantilever loaded on its top flange: its strength at "
-                            "about 2.5 L in the full check", on_top),
+                           ("loads on the top flange of an unbraced length: the strength that "
+                            "leaves it (a cantilever's at about 2.5 L, a span's with Cb x 1/1.4) "
+                            "in the full check", on_top),
                            ("tees and angles: F9 / F10 bending in the full check",
                             special.any())) if on]
     return rows, skipped, why
@@ -1244,7 +1247,7 @@ def _worst_check(j, ss, st):
     that pushes up, the worst of the dead loads in full, at 0.6, and the uplift off
     (`design.uplift`)."""
     g = max(list(evaluate(j, 1.0, ss=ss).checks) + top_flange_checks(j, st, ss)
-            + hogging_checks(j, st, ss), key=lambda c: c.ratio)
+            + hogging_checks(j, st, ss) + span_top_checks(j, st, ss), key=lambda c: c.ratio)
     if uplift.applies(j):
         for h, state, _ in uplift.variants(j):  # the dead loads at 0.6; the uplift off
             hs = state_set(h)
