@@ -2004,3 +2004,72 @@ def test_a_wind_uplift_typed_as_a_dead_load_pushing_down_is_held_with_the_key_ma
     # a weight marked up by a slip of the key: warned only ("changes nothing"), no hold
     assert not capacity(plain).not_rated
     assert any("changes nothing" in w.message for w in warnings(plain))
+
+
+# ------------------------------------------------- a load typed in a unit far too large
+BENCH = """schema = 1
+title = "bench top rail"
+tags = ["not-rack"]
+[beam]
+length = "6 ft"
+section = "HSS3x2x3/16"
+material = "A500-C"
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "6 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "3 ft"
+value = "WORK"
+label = "work"
+[[loads]]
+type = "FIRST_KIND"
+FIRST_AT
+value = "VISE"
+label = "vise"
+[criteria]
+deflection = "L/240"
+"""
+
+
+def _bench(work: str, vise: str, spread: bool = False) -> str:
+    where = 'start = "3 ft"\nend = "6 ft"' if spread else 'at = "5 ft"'
+    return (BENCH.replace("WORK", work).replace("VISE", vise)
+            .replace("FIRST_KIND", "uniform" if spread else "point").replace("FIRST_AT", where))
+
+
+@pytest.mark.parametrize("work, vise, spread, held", [
+    # kip typed for lbf: 450,000 lbf beside 120 lbf of work (3,750 times)
+    ("-40 lbf/ft", "-450 kip", False, True),
+    # kip/ft typed for lbf/ft: 120,000 lbf beside the 450 lbf vise
+    ("-40 kip/ft", "-450 lbf", False, True),
+    # per inch typed for per foot beside a spread load per foot: 12 times as heavy
+    ("-600 lbf/ft", "-600 lbf/in", True, True),
+    # kN/mm typed for kN/m: 500 kN/m on a bench
+    ("-0.5 kN/mm", "-1 kN", False, True),
+    # controls, what they say: a kip beside lbf of the same size, per inch beside per foot
+    # within a few times, a heavy point load in kip beside a light one in lbf
+    ("-40 lbf/ft", "-0.45 kip", False, False),
+    ("-30 lbf/ft", "-20 lbf/in", True, False),
+    ("-5 lbf/ft", "-1 kip", False, False),
+    ("-5 lbf/ft", "-1000 lbf", False, False),
+    ("-0.5 kN/m", "-1 kN", False, False),
+    ("-0.5 N/mm", "-1 kN", False, False),
+])
+def test_a_live_load_typed_in_a_unit_far_too_large_holds_the_rating(work, vise, spread, held):
+    # the label shares the rated load out in the proportions typed (capacity scales every live
+    # load by one factor): a vise typed in kip beside work in lbf/ft posted the work at a
+    # thousandth of what the bench carries, and two like pallets, one per inch, at 5790 and
+    # 483 lbf where each carries 3610 (common practice: loads of one job are typed alike)
+    from shopbeam.design.capacity import capacity
+
+    job = parse_job_text(_bench(work, vise, spread))
+    said = [w for w in warnings(job) if "unit" in w.message and w.key.endswith(".value")
+            and ("times" in w.message or "no shop member" in w.message)]
+    assert bool(said) == held, [w.message for w in warnings(job)]
+    slip = [r for r in capacity(job).not_rated if "unit slip" in r or "unit" in r and "m was" in r]
+    assert bool(slip) == held

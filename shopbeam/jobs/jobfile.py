@@ -2400,6 +2400,87 @@ def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
                    "smaller than the largest load: most likely a unit slip. Fix its unit")
 
 
+# A live load this many times the others of the job, typed in a unit a thousand times larger
+# than theirs (kip beside lbf, kN beside N): most likely the larger unit typed for the
+# smaller. A spread load per inch (mm) this many times one per foot (m): per inch typed for
+# per foot. Either way the label shares the rated load out in the proportions typed.
+HUGE_RATIO = 100.0  # a 1000 x slip of loads whose numbers differ up to 10 x
+HUGE_SPREAD_RATIO = 10.0
+# (the larger and the smaller force unit of each system: a slip is within one system; a
+# metric load on a US job is said on its own, `_dead_load_units`)
+_BIG_FORCE_UNIT = {"us": re.compile(r"^(?:kips?|k|klf)$"),
+                   "metric": re.compile(r"^(?:kn|kilonewtons?|mn|tonnes?|t)$")}
+_SMALL_FORCE_UNIT = {"us": re.compile(r"^(?:lbf?s?|pounds?|#|plf)$"),
+                     "metric": re.compile(r"^(?:n|newtons?|kgf?|kgs?)$")}
+_SHORT_LENGTH = re.compile(r"^(?:in|inch|inches|\"|mm|cm)$")
+_LONG_LENGTH = re.compile(r"^(?:ft|foot|feet|'|m|metres?|meters?)$")
+
+
+def _unit_parts(unit: str) -> tuple[str, str]:
+    """(force part, per-length part) of a typed load unit: "lbf/in" -> ("lbf", "in"),
+    "klf" -> ("klf", "ft"), "kip" -> ("kip", "")."""
+    if unit in ("plf", "klf"):
+        return unit, "ft"
+    force, _, per = unit.partition("/")
+    return force.replace("*", ""), per
+
+
+def _huge_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
+    """Hold the rating on a live load typed in a unit a thousand times larger than the job's
+    other live loads (kip beside lbf, kN beside N) and more than `HUGE_RATIO` times the
+    largest of them, and on a spread live load per inch (mm) more than `HUGE_SPREAD_RATIO`
+    times every spread load per foot (m): the larger unit typed for the smaller. A rating
+    shares the rated load out in the proportions typed, so the others would be posted at a
+    thousandth (a twelfth) of what they carry and it at what it cannot."""
+    raw_loads = raw_loads if isinstance(raw_loads, list) else []
+    live = [ld for ld in loads if ld.case == "live" and ld.kind != "moment" and ld.total_force]
+    typed = [(ld, *_unit_parts(_unit_typed(raw_loads, ld))) for ld in live]
+    small = {sy: [abs(ld.total_force) for ld, force, _ in typed if pat.match(force)]
+             for sy, pat in _SMALL_FORCE_UNIT.items()}
+    spread_long = [max(abs(ld.w1), abs(ld.w2)) for ld, _, per in typed
+                   if ld.kind in ("uniform", "linear") and _LONG_LENGTH.match(per)]
+    for ld, force, per in typed:
+        name = f" ({ld.label})" if ld.label else ""
+        f = abs(ld.total_force)
+        sy = next((k for k, pat in _BIG_FORCE_UNIT.items() if pat.match(force)), None)
+        if sy is not None and small[sy] and f > HUGE_RATIO * max(small[sy]):
+            top = max(small[sy])
+            r.hold(f"this live load{name} comes to {units.fmt(f, 'force', system)} in all, "
+                   f"{f / top:,.0f} times the largest live load typed in "
+                   f"{'lbf' if sy == 'us' else 'N'} ({units.fmt(top, 'force', system)}), "
+                   f"and is typed in {force}: most likely a unit slip (kip typed for lbf, kN "
+                   "for N). "
+                   "A rating shares the rated load out in the proportions typed, so the other "
+                   "loads would be posted at a thousandth of what they carry. Fix its unit (a "
+                   "load meant as typed: write it in the others' unit); no rating is posted "
+                   "while it stands", f"{ld.key}.value",
+                   f"{ld.key}{name} is typed in {force} and is {f / top:,.0f} times the "
+                   "job's other live loads: most likely a unit slip. Fix its unit")
+        elif ld.kind in ("uniform", "linear") and force in ("kn", "mn") and per in ("mm",
+                                                                                   "cm"):
+            # 1 kN/mm is 1,000 kN/m (68.5 kip/ft): no shop member's spread load
+            force = {"kn": "kN", "mn": "MN"}[force]
+            r.hold(f"this spread live load{name} is typed in {force}/{per}, "
+                   f"{units.fmt(max(abs(ld.w1), abs(ld.w2)), 'line_load', system)}: no shop "
+                   f"member carries that; most likely {force}/{per} typed for {force}/m (or "
+                   f"N/{per}). Fix its unit; no rating is posted while it stands",
+                   f"{ld.key}.value", f"{ld.key}{name} is typed in {force}/{per}: most likely "
+                   f"{force}/m was meant. Fix its unit")
+        elif ld.kind in ("uniform", "linear") and spread_long and _SHORT_LENGTH.match(per):
+            w = max(abs(ld.w1), abs(ld.w2))
+            if w > HUGE_SPREAD_RATIO * max(spread_long):
+                r.hold(f"this spread live load{name} is typed per {per} and is "
+                       f"{w / max(spread_long):.3g} times every spread live load typed per "
+                       "foot or metre: most likely per inch (mm) typed for per foot (m), 12 "
+                       "(1000) times too heavy. A rating shares the rated load out in the "
+                       "proportions typed, so the other loads would be posted far over what "
+                       "they carry. Fix its unit; no rating is posted while it stands",
+                       f"{ld.key}.value",
+                       f"{ld.key}{name} is typed per {per} and is {w / max(spread_long):.3g} "
+                       "times the spread loads per foot or metre: most likely a unit slip. "
+                       "Fix its unit")
+
+
 # A load's label that names the member's own weight
 _OWN_WEIGHT_WORDS = re.compile(
     r"\b(?:(?:self[ _-]?weight|own weight)(?! of (?!(?:the )?(?:beam|member|joist|rail|arm)\b))|"
@@ -6171,6 +6252,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
+    _huge_loads(r, loads, raw_loads, system)
     _floor_dead_total(r, loads, raw_loads, tags, section, material, system, title, notes)
     _own_weight_twice(r, loads, self_weight)
     _under_a_millimetre(r, raw_loads, data.get("supports"))
