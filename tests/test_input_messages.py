@@ -1740,3 +1740,17 @@ def test_a_spread_load_s_at_without_start_says_where_it_now_starts():
     job = parse_job_text(text)
     said = [p.message for p in job.warnings if p.key == "loads[0].at"]
     assert said and "runs from 0" in said[0] and 'start = "4 ft"' in said[0]
+
+
+def test_a_support_type_not_read_gives_one_message_and_no_python_words():
+    # type = "Spring" is refused (did you mean 'spring'?): its stiffness is not warned again
+    # as ignored by a "None" support
+    text = ('schema = 1\ntitle = "spring post"\n[beam]\nlength = "10 ft"\nsection = "W8x18"\n'
+            'material = "A992"\n[[supports]]\nat = "0 ft"\ntype = "pin"\n[[supports]]\n'
+            'at = "5 ft"\ntype = "Spring"\nstiffness = "2000 lbf/in"\n[[supports]]\n'
+            'at = "10 ft"\ntype = "roller"\n[[loads]]\ntype = "uniform"\nvalue = "-100 lbf/ft"\n')
+    with pytest.raises(InputErrors) as exc:
+        parse_job_text(text)
+    said = str(exc.value)
+    assert "did you mean 'spring'" in said and "None" not in said
+    assert "supports[1].stiffness" not in said

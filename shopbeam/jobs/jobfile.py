@@ -1385,7 +1385,7 @@ def _read_support(r: _Reader, i: int, s, length) -> Support | None:
     stiffness = 0.0
     if kind == "spring":
         stiffness = r.parse(s, "stiffness", "stiffness", f"{key}.stiffness", positive=True)
-    elif "stiffness" in s:
+    elif "stiffness" in s and kind is not None:  # (a type not read has its own error)
         r.warn(f"stiffness is only used by a spring; this {kind} support ignores it", f"{key}.stiffness")
     if "brace" in s and not isinstance(s["brace"], bool):
         r.error("brace must be true or false (true: this support holds the member against "
