@@ -1685,3 +1685,100 @@ def test_fatigue_stays_listed_where_the_top_flange_rule_lowers_the_factor():
     ss = state_set(cap.job)
     at_k = fatigue.fatigue_check(cap.job, strengths(cap.job, beam=ss.beam), ss, cap.factor)
     assert checks["fatigue"].ratio == pytest.approx(at_k.ratio, rel=1e-12)
+
+
+UPLIFT_QUARTERS = """schema = 1
+title = "W12x26 28 ft beam, braces at quarter points, wind uplift, heavy bay 7-14 ft"
+tags = ["not-floor"]
+[beam]
+length = "28 ft"
+section = "W12X26"
+material = "A992"
+self_weight = false
+braces = ["7 ft", "14 ft", "21 ft"]
+[[supports]]
+at = "0 ft"
+type = "pin"
+[[supports]]
+at = "28 ft"
+type = "roller"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "28 ft"
+value = "-200 lbf/ft"
+case = "dead"
+[[loads]]
+type = "uniform"
+start = "0 ft"
+end = "28 ft"
+value = "400 lbf/ft"
+uplift = true
+label = "wind uplift"
+[[loads]]
+type = "uniform"
+start = "7 ft"
+end = "14 ft"
+value = "-1050 lbf/ft"
+[[loads]]
+type = "uniform"
+start = "14 ft"
+end = "28 ft"
+value = "-200 lbf/ft"
+[criteria]
+deflection = "L/180"
+"""
+
+
+def test_the_top_flange_check_of_an_uplift_job_keeps_the_worst_length_of_every_state():
+    # With the uplift off the 7-14 ft length carries 69.68 kip*ft (statics of the loads
+    # entered without the uplift); eq. F1-1 Cb 1.039 x 1/1.4 = 0.742 and F2-2 with the AISC
+    # Shapes Database v15.0 W12X26 row (Lb 84 in between Lp 64.0 and Lr 178.6 in) give Mn /
+    # 1.67 = 0.742 x 144.95 / 1.67 = 64.44 kip*ft: ratio 1.081, a FAIL. One row per job (the
+    # length that governs): the states' rows had been paired by name, one length for another
+    from shopbeam.design import uplift
+    from shopbeam.design.analysis import SPAN_TOP_CHECK
+
+    res = analyze(parse_job_text(UPLIFT_QUARTERS))
+    rows = [c for c in res.checks if c.name == SPAN_TOP_CHECK]
+    assert len(rows) == 1
+    assert rows[0].ratio == pytest.approx(1.081, abs=2e-3) and not res.ok
+    assert rows[0].state.endswith(uplift.CALM) and "7 ft to 14 ft" in rows[0].formula
+    # the same member without the uplift load reads the same
+    calm = analyze(parse_job_text(UPLIFT_QUARTERS.replace('value = "400 lbf/ft"\nuplift = true',
+                                                          'value = "0 lbf/ft"')))
+    row = next(c for c in calm.checks if c.name == SPAN_TOP_CHECK)
+    assert row.ratio == pytest.approx(rows[0].ratio, rel=1e-9)
+
+
+def test_dead_loads_on_the_top_flange_past_its_strength_leave_no_factor():
+    # W12X26, 20 ft, 700 lbf/ft dead on top: w L^2 / 8 = 35.0 kip*ft against the 29.95 kip*ft
+    # its strength is with the load on the top flange (F2-4, eq. F1-1 Cb 1.136 x 1/1.4, AISC
+    # Shapes Database v15.0 row): no live load can be posted, k = 0, not a factor beside a
+    # check that fails at it
+    from shopbeam.design.analysis import SPAN_TOP_CHECK
+
+    text = TOP_LOADED.format(extra="", flange="").replace(
+        'type = "point"\nat = "10 ft"\nvalue = "-8 kip"',
+        'type = "uniform"\nvalue = "-700 lbf/ft"\ncase = "dead"\n[[loads]]\ntype = "point"\n'
+        'at = "6 ft"\nvalue = "-200 lbf"')
+    cap = capacity(parse_job_text(text))
+    assert cap.factor == 0.0 and not cap.rated
+    assert "fails under its own weight" in cap.note
+    row = next(c for c in cap.checks if c.name == SPAN_TOP_CHECK)
+    assert row.demand / (4.4482216152605 * 0.3048) == pytest.approx(35000, rel=1e-9)
+    assert row.limit / (4.4482216152605 * 0.3048) == pytest.approx(29950, rel=2e-3)
+
+
+def test_a_deep_bar_s_top_edge_rule_names_its_own_clause():
+    # FB6x1/2 on edge is bent by AISC 360-16 F11 (F11-3 past 1.9 E / Fy): the top-edge rule
+    # names F11.2 and the top edge, not F2 and a flange
+    from shopbeam.design.analysis import SPAN_TOP_CHECK
+
+    text = ('schema = 1\ntitle = "flat bar shelf rail"\n[beam]\nlength = "8 ft"\n'
+            'section = "FB6x1/2"\nmaterial = "A36"\nself_weight = false\n[[supports]]\n'
+            'at = "0 ft"\ntype = "pin"\n[[supports]]\nat = "8 ft"\ntype = "roller"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-50 lbf/ft"\n[criteria]\n'
+            'deflection = "L/100"\n')
+    row = next(c for c in analyze(parse_job_text(text)).checks if c.name == SPAN_TOP_CHECK)
+    assert "F11" in row.clause and "F2" not in row.clause and "top edge" in row.formula

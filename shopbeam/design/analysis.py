@@ -1221,31 +1221,37 @@ def span_top_demands(job: Job, st, ss, k: float, moment=None):
 
 
 def span_top_checks(job: Job, st, ss, k: float = 1.0, moment=None) -> list[Check]:
-    """The check of each unbraced length between braces whose loads bear on its top flange,
-    where that loading lowers its strength below the bending check's cap: its largest moment
-    against Mn / Omega with Cb x 1/1.4 (AISC 360-16 Commentary F1, from memory; the bending
-    check takes the loads at the shear centre)."""
+    """The check of the unbraced lengths between braces whose loads bear on the top flange
+    (edge), where that loading lowers the strength below the bending check's cap: the length
+    whose ratio is largest (one row, as the bending check names the length that governs): its
+    largest moment against Mn / Omega with Cb x 1/1.4 (AISC 360-16 Commentary F1, from memory;
+    the bending check takes the loads at the shear centre)."""
     got = span_top_demands(job, st, ss, k, moment)
     if got == NOT_JUDGED:
         return []
     fl = st.flexure
+    rows = [g for g in got if g[3] < fl.cap / fl.omega * (1 - 1e-9) and g[2] > 0]
+    if not rows:
+        return []
+    a, b, demand, top, cb, where, at = max(rows, key=lambda g: g[2] / g[3] if g[3] > 0
+                                           else math.inf)
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
-    out = []
-    for a, b, demand, top, cb, where, at in got:
-        if top >= fl.cap / fl.omega * (1 - 1e-9) or demand <= 0:
-            continue
-        out.append(Check(
-            SPAN_TOP_CHECK, demand, top, "N*m",
-            f"AISC 360-16 F2 (Cb {cb:.3f} = eq. F1-1 x 1/1.4 for loads bearing on the top "
-            f"flange, Commentary F1, from memory) over the unbraced length {f(a)} to {f(b)}: "
-            f"M <= {f(top, 'moment')}{where}", at,
-            detail="the loads bear on the top flange at points not braced, which destabilises "
-            "it; brace the member at the loads (beam.braces), or hang them below the flange "
-            "(flange = \"bottom\")",
-            clause="AISC 360-16 F2 with Commentary F1 (top-flange loading, Cb x 1/1.4)",
-            source="AISC 360-16 Commentary F1 (from memory)",
-            params={"Cb": cb, "Mn_omega": top, "Lb": b - a}))
-    return out
+    bar = fl.ltb[0] == "F11"
+    part = "top edge" if bar else "top flange"
+    rule = {"F4": "AISC 360-16 F4", "F11": "AISC 360-16 F11.2"}.get(fl.ltb[0], "AISC 360-16 F2")
+    more = f" ({len(rows)} lengths so loaded: this one governs)" if len(rows) > 1 else ""
+    return [Check(
+        SPAN_TOP_CHECK, demand, top, "N*m",
+        f"{rule} (Cb {cb:.3f} = eq. F1-1 x 1/1.4 for loads bearing on the {part}, "
+        f"Commentary F1, from memory) over the unbraced length {f(a)} to {f(b)}{more}: "
+        f"M <= {f(top, 'moment')}{where}", at,
+        detail=f"the loads bear on the {part} at points not braced, which destabilises it; "
+        "brace the member at the loads (beam.braces), or hang them below (flange = "
+        "\"bottom\" on a point load; a spread load hung below goes in as point loads at its "
+        "hangers)",
+        clause=f"{rule} with Commentary F1 (loads on the {part}, Cb x 1/1.4)",
+        source="AISC 360-16 Commentary F1 (from memory)",
+        params={"Cb": cb, "Mn_omega": top, "Lb": b - a})]
 
 
 def hogging_limits(job: Job, st) -> list[tuple[float, float, float]]:

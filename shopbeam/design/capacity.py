@@ -877,16 +877,13 @@ def _cantilever_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityR
     if g0[5] >= g0[4]:
         return listed(res, g)  # the dead loads alone pass it: nothing to post (a reason)
 
-    def h(kk):
+    def ratio(kk):
         gk = worst(kk)
-        return gk[5] / gk[4] - 1.0
+        return gk[5] / gk[4]
 
     # Brent's method on the ratio (one crossing: convex, below 1 at k = 0), then its
     # passing side, stepped down a float at a time if rounding leaves it a hair over
-    a0, fa, b0, fb = brent(h, 0.0, k, g0[5] / g0[4] - 1.0, g[5] / g[4] - 1.0)
-    k2 = a0 if fa <= 0 else b0
-    while h(k2) > 0:
-        k2 = math.nextafter(k2, 0.0)
+    k2 = passing_root(ratio, k, g[5] / g[4], g0[5] / g0[4])
     g = worst(k2)
     e = evaluate(job, k2, section, ss, st)
     # fatigue, listed at the factor found (`_fatigue_cap`), is listed at the lower one too
@@ -928,16 +925,14 @@ def _span_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     if rk is None or rk <= 1.0:
         return listed(res, k)  # it does not come first: listed at the factor found
     r0 = ratio(0.0)
-    if r0 is None or r0 >= 1.0:
-        return listed(res, k)  # the dead loads alone pass it: nothing to post (a reason)
-
-    def h(kk):
-        return ratio(kk) - 1.0
-
-    a0, fa, b0, _fb = brent(h, 0.0, k, r0 - 1.0, rk - 1.0)
-    k2 = a0 if fa <= 0 else b0
-    while h(k2) > 0:
-        k2 = math.nextafter(k2, 0.0)
+    if r0 is None:
+        return listed(res, k)
+    if r0 >= 1.0:  # the dead loads alone pass it (`_span_top` says so): no factor passes
+        e0 = evaluate(job, 0.0, section, ss, st)
+        e0 = replace(e0, checks=tuple(e0.checks) + tuple(span_top_checks(job, st, ss, 0.0)))
+        return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
+                              _fails_alone(e0, "", job.units))
+    k2 = passing_root(ratio, k, rk, r0)
     e = evaluate(job, k2, section, ss, st)
     more = list(span_top_checks(job, st, ss, k2))
     if fatigue.given(job):
@@ -952,6 +947,21 @@ def _span_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
                    note="", stepped="", method=res.method + "; lowered to where the moment "
                    "reaches the strength its loads on the top flange leave the unbraced "
                    "length (Cb x 1/1.4; a bracketed root)")
+
+
+def passing_root(ratio, k: float, rk: float, r0: float) -> float:
+    """The factor in (0, k) where `ratio` (of the factor; rk at k above 1, r0 at 0 below it)
+    reaches 1, by Brent's method, on its passing side: stepped down a float at a time while
+    rounding leaves it a hair over (the rules lowered to a strength of their own: a
+    cantilever's or a span's top-flange loads, the bottom flange under hogging)."""
+    def h(kk):
+        return ratio(kk) - 1.0
+
+    a0, fa, b0, _fb = brent(h, 0.0, k, r0 - 1.0, rk - 1.0)
+    k2 = a0 if fa <= 0 else b0
+    while h(k2) > 0:
+        k2 = math.nextafter(k2, 0.0)
+    return k2
 
 
 def hogging_root(job, st, ss, limits, k: float, dem=None) -> float | None:
@@ -971,15 +981,7 @@ def hogging_root(job, st, ss, limits, k: float, dem=None) -> float | None:
     r0 = ratio(0.0)
     if r0 >= 1.0:
         return None
-
-    def h(kk):
-        return ratio(kk) - 1.0
-
-    a0, fa, b0, _fb = brent(h, 0.0, k, r0 - 1.0, rk - 1.0)
-    k2 = a0 if fa <= 0 else b0
-    while h(k2) > 0:
-        k2 = math.nextafter(k2, 0.0)
-    return k2
+    return passing_root(ratio, k, rk, r0)
 
 
 def _hogging_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:

@@ -73,12 +73,16 @@ def merge(checks, other, state: str = STATE) -> list:
     (`other`, the same checks by name; `state`: its words, 0.6 D by default): the other one
     is taken, its state saying so, where its ratio is higher; a check the other state alone
     calls for (the moment hogs only there) is added."""
-    theirs = {c.name: c for c in other}
+    # checks of one name (a cantilever's top-flange loads at each end) pair in their order
+    theirs: dict[str, list] = {}
+    for o in other:
+        theirs.setdefault(o.name, []).append(o)
     out = []
     for c in checks:
-        o = theirs.pop(c.name, None)
+        same = theirs.get(c.name)
+        o = same.pop(0) if same else None
         out.append(c if o is None or not o.ratio > c.ratio * (1 + 1e-12) else mark(o, state))
-    return out + [mark(o, state) for o in theirs.values()]
+    return out + [mark(o, state) for rest in theirs.values() for o in rest]
 
 
 def mark(check, state: str = STATE):
