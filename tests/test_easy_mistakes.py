@@ -2059,8 +2059,23 @@ def _bench(work: str, vise: str, spread: bool = False) -> str:
     ("-5 lbf/ft", "-1000 lbf", False, False),
     ("-0.5 kN/m", "-1 kN", False, False),
     ("-0.5 N/mm", "-1 kN", False, False),
+    # spellings of the same slips: kilopounds, a "k" in another word, "per", pli, exponents
+    ("-40 lbf/ft", "-450 klbf", False, True),
+    ("-40 lbf/ft", "-4.5e2 kip", False, True),
+    ("-40 kip per ft", "-450 lbf", False, True),
+    ("-50 lbf/ft", "-50 pli", True, True),
+    ("-600 lbf/ft", "-600 lbf per in", True, True),
+    ("-0.5 kN/m", "-0.5 kN per mm", True, True),
+    # a number slipped, not the unit: a 1500 kN vise on a bench is past any shop member
+    ("-1 kN/m", "-1500 kN", False, True),
+    # 10 N/mm is 10 kN/m: the same size as kN/m, no slip; a 1.25 klf floor beside a 200 lbf
+    # post load is what it says (a number typed small in the larger unit)
+    ("-0.5 kN/m", "-10 N/mm", True, False),
+    ("-1.25 klf", "-200 lbf", False, False),
 ])
 def test_a_live_load_typed_in_a_unit_far_too_large_holds_the_rating(work, vise, spread, held):
+    # (two loads of one kind, units and values at least 10 times apart, numbers typed alike;
+    # a point beside a spread load 100 times apart and past 100 kip or 10 klf)
     # the label shares the rated load out in the proportions typed (capacity scales every live
     # load by one factor): a vise typed in kip beside work in lbf/ft posted the work at a
     # thousandth of what the bench carries, and two like pallets, one per inch, at 5790 and
@@ -2071,5 +2086,20 @@ def test_a_live_load_typed_in_a_unit_far_too_large_holds_the_rating(work, vise, 
     said = [w for w in warnings(job) if "unit" in w.message and w.key.endswith(".value")
             and ("times" in w.message or "no shop member" in w.message)]
     assert bool(said) == held, [w.message for w in warnings(job)]
-    slip = [r for r in capacity(job).not_rated if "unit slip" in r or "unit" in r and "m was" in r]
+    slip = [r for r in capacity(job).not_rated if "unit slip" in r or "Fix its unit" in r]
     assert bool(slip) == held
+
+
+def test_wheels_typed_in_kip_beside_a_load_in_lbf_hold_the_rating():
+    # the wheels of [[moving]] are live loads the rating shares out too: "-300 kip" wheels
+    # beside a "-200 lbf" bin posted the bin at 4.83 lbf
+    from shopbeam.design.capacity import capacity
+
+    text = _bench("-40 lbf/ft", "-200 lbf").replace("[criteria]", '[[moving]]\nlabel = "cart"\n'
+                                                    'loads = ["-300 kip", "-300 kip"]\n'
+                                                    'spacing = ["12 in"]\n[criteria]')
+    job = parse_job_text(text)
+    assert any(w.key == "moving[0].loads" and "unit slip" in w.message for w in warnings(job))
+    assert not capacity(job).rated
+    fine = parse_job_text(text.replace('"-300 kip"', '"-300 lbf"'))
+    assert not any("unit slip" in w.message for w in warnings(fine))

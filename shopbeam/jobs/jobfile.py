@@ -2400,85 +2400,112 @@ def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
                    "smaller than the largest load: most likely a unit slip. Fix its unit")
 
 
-# A live load this many times the others of the job, typed in a unit a thousand times larger
-# than theirs (kip beside lbf, kN beside N): most likely the larger unit typed for the
-# smaller. A spread load per inch (mm) this many times one per foot (m): per inch typed for
-# per foot. Either way the label shares the rated load out in the proportions typed.
-HUGE_RATIO = 100.0  # a 1000 x slip of loads whose numbers differ up to 10 x
-HUGE_SPREAD_RATIO = 10.0
-# (the larger and the smaller force unit of each system: a slip is within one system; a
-# metric load on a US job is said on its own, `_dead_load_units`)
-_BIG_FORCE_UNIT = {"us": re.compile(r"^(?:kips?|k|klf)$"),
-                   "metric": re.compile(r"^(?:kn|kilonewtons?|mn|tonnes?|t)$")}
-_SMALL_FORCE_UNIT = {"us": re.compile(r"^(?:lbf?s?|pounds?|#|plf)$"),
-                     "metric": re.compile(r"^(?:n|newtons?|kgf?|kgs?)$")}
-_SHORT_LENGTH = re.compile(r"^(?:in|inch|inches|\"|mm|cm)$")
-_LONG_LENGTH = re.compile(r"^(?:ft|foot|feet|'|m|metres?|meters?)$")
+# Two live loads of one kind whose units are this many times apart (kip and lbf, kN/mm and
+# kN/m, lbf/in and lbf/ft) and whose values are too, the numbers typed alike: the larger unit
+# typed for the smaller. Between a point and a spread load (no number to compare), the larger
+# also past what any shop member carries. A spread load in a unit of 500 kN/m or more (kN/mm,
+# MN/m) is no shop load at all.
+SLIP_UNIT_RATIO = 10.0
+SLIP_VALUE_RATIO = 10.0
+SLIP_CROSS_RATIO = 100.0
+PAST_SHOP_POINT = 444822.16152605  # N: 100 kip
+PAST_SHOP_SPREAD = 145939.02937206  # N/m: 10 kip/ft (klf)
+ABSURD_SPREAD_UNIT = 5e5  # N/m per unit typed (kN/mm is 1e6)
 
 
-def _unit_parts(unit: str) -> tuple[str, str]:
-    """(force part, per-length part) of a typed load unit: "lbf/in" -> ("lbf", "in"),
-    "klf" -> ("klf", "ft"), "kip" -> ("kip", "")."""
-    if unit in ("plf", "klf"):
-        return unit, "ft"
-    force, _, per = unit.partition("/")
-    return force.replace("*", ""), per
+def _typed_sizes(r: _Reader, raw_loads, loads, raw_moving) -> list[tuple]:
+    """(key, name, "point" or "spread", SI size (N or N/m), number typed, SI per unit typed,
+    the unit as typed, the force in all, N) of each live [[loads]] entry (not couples) and each live wheel of
+    [[moving]], where it reads as one number and a unit."""
+    out = []
+
+    def one(text, kind):
+        scanned = units._terms(text) if isinstance(text, str) else None
+        if scanned is None or len(scanned[1]) != 1 or not scanned[1][0][1]:
+            return None
+        n = abs(float(scanned[1][0][0]))
+        try:
+            v = abs(units.parse(text, kind))
+        except InputError:
+            return None
+        return (v, n, v / n, scanned[1][0][1]) if n > 0 and v > 0 else None
+
+    for ld in loads:
+        i = _load_index(ld.key)
+        raw = raw_loads[i] if i is not None and i < len(raw_loads) else None
+        if ld.case != "live" or ld.kind == "moment" or not _is_table(raw):
+            continue
+        spread = ld.kind in ("uniform", "linear")
+        texts = raw.get("value") if "value" in raw else None
+        texts = texts if isinstance(texts, list) else [texts]
+        got = [g for g in (one(t, "line_load" if spread else "force") for t in texts) if g]
+        if got:
+            v, n, per, unit = max(got)
+            out.append((ld.key, f" ({ld.label})" if ld.label else "",
+                        "spread" if spread else "point", v, n, per, unit, abs(ld.total_force)))
+    for j, mv in enumerate(raw_moving if isinstance(raw_moving, list) else ()):
+        wheels = mv.get("loads") if _is_table(mv) else None
+        got = [g for g in (one(t, "force") for t in (wheels if isinstance(wheels, list)
+                                                       else [])) if g]
+        if got:
+            v, n, per, unit = max(got)
+            label = mv.get("label") if isinstance(mv.get("label"), str) else ""
+            out.append((f"moving[{j}].loads", f" ({label})" if label else "", "point", v, n,
+                        per, unit, v))
+    return out
 
 
-def _huge_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
-    """Hold the rating on a live load typed in a unit a thousand times larger than the job's
-    other live loads (kip beside lbf, kN beside N) and more than `HUGE_RATIO` times the
-    largest of them, and on a spread live load per inch (mm) more than `HUGE_SPREAD_RATIO`
-    times every spread load per foot (m): the larger unit typed for the smaller. A rating
-    shares the rated load out in the proportions typed, so the others would be posted at a
-    thousandth (a twelfth) of what they carry and it at what it cannot."""
+def _huge_loads(r: _Reader, loads: list[Load], raw_loads, system: str, raw_moving=None) -> None:
+    """Hold the rating where two live loads (wheels of [[moving]] among them) read as one
+    typed in a unit far larger than the other's, as a unit slip does: of one kind, their
+    units and their values each at least ten times apart with the numbers typed alike (kip
+    beside lbf, lbf/in beside lbf/ft, kN/mm beside kN/m; not N/mm beside kN/m, the same
+    size); a point beside a spread load, a hundred times apart and the larger past what a
+    shop member carries (100 kip, 10 klf). A rating shares the rated load out in the
+    proportions typed, so with a slip one is posted far over what it carries and the other
+    far under. A spread load in a unit of 500 kN/m or more (kN/mm) is held on its own."""
     raw_loads = raw_loads if isinstance(raw_loads, list) else []
-    live = [ld for ld in loads if ld.case == "live" and ld.kind != "moment" and ld.total_force]
-    typed = [(ld, *_unit_parts(_unit_typed(raw_loads, ld))) for ld in live]
-    small = {sy: [abs(ld.total_force) for ld, force, _ in typed if pat.match(force)]
-             for sy, pat in _SMALL_FORCE_UNIT.items()}
-    spread_long = [max(abs(ld.w1), abs(ld.w2)) for ld, _, per in typed
-                   if ld.kind in ("uniform", "linear") and _LONG_LENGTH.match(per)]
-    for ld, force, per in typed:
-        name = f" ({ld.label})" if ld.label else ""
-        f = abs(ld.total_force)
-        sy = next((k for k, pat in _BIG_FORCE_UNIT.items() if pat.match(force)), None)
-        if sy is not None and small[sy] and f > HUGE_RATIO * max(small[sy]):
-            top = max(small[sy])
-            r.hold(f"this live load{name} comes to {units.fmt(f, 'force', system)} in all, "
-                   f"{f / top:,.0f} times the largest live load typed in "
-                   f"{'lbf' if sy == 'us' else 'N'} ({units.fmt(top, 'force', system)}), "
-                   f"and is typed in {force}: most likely a unit slip (kip typed for lbf, kN "
-                   "for N). "
-                   "A rating shares the rated load out in the proportions typed, so the other "
-                   "loads would be posted at a thousandth of what they carry. Fix its unit (a "
-                   "load meant as typed: write it in the others' unit); no rating is posted "
-                   "while it stands", f"{ld.key}.value",
-                   f"{ld.key}{name} is typed in {force} and is {f / top:,.0f} times the "
-                   "job's other live loads: most likely a unit slip. Fix its unit")
-        elif ld.kind in ("uniform", "linear") and force in ("kn", "mn") and per in ("mm",
-                                                                                   "cm"):
-            # 1 kN/mm is 1,000 kN/m (68.5 kip/ft): no shop member's spread load
-            force = {"kn": "kN", "mn": "MN"}[force]
-            r.hold(f"this spread live load{name} is typed in {force}/{per}, "
-                   f"{units.fmt(max(abs(ld.w1), abs(ld.w2)), 'line_load', system)}: no shop "
-                   f"member carries that; most likely {force}/{per} typed for {force}/m (or "
-                   f"N/{per}). Fix its unit; no rating is posted while it stands",
-                   f"{ld.key}.value", f"{ld.key}{name} is typed in {force}/{per}: most likely "
-                   f"{force}/m was meant. Fix its unit")
-        elif ld.kind in ("uniform", "linear") and spread_long and _SHORT_LENGTH.match(per):
-            w = max(abs(ld.w1), abs(ld.w2))
-            if w > HUGE_SPREAD_RATIO * max(spread_long):
-                r.hold(f"this spread live load{name} is typed per {per} and is "
-                       f"{w / max(spread_long):.3g} times every spread live load typed per "
-                       "foot or metre: most likely per inch (mm) typed for per foot (m), 12 "
-                       "(1000) times too heavy. A rating shares the rated load out in the "
-                       "proportions typed, so the other loads would be posted far over what "
-                       "they carry. Fix its unit; no rating is posted while it stands",
-                       f"{ld.key}.value",
-                       f"{ld.key}{name} is typed per {per} and is {w / max(spread_long):.3g} "
-                       "times the spread loads per foot or metre: most likely a unit slip. "
-                       "Fix its unit")
+    sizes = _typed_sizes(r, raw_loads, loads, raw_moving)
+    held = set()
+    for key, name, kind, v, n, per, unit, _total in sizes:
+        if kind == "spread" and per >= ABSURD_SPREAD_UNIT:
+            held.add(key)
+            r.hold(f"this spread live load{name} is typed in {unit}, "
+                   f"{units.fmt(v, 'line_load', system)}: no shop member carries that; most "
+                   f"likely the unit is slipped ({unit} for N/mm or kN/m). Fix its unit; no "
+                   "rating is posted while it stands", f"{key}.value" if key.startswith(
+                       "loads") else key,
+                   f"{key}{name} is typed in {unit}: no shop load is that heavy. Fix its unit")
+    for a in sizes:
+        for b in sizes:
+            ka, name_a, kind_a, va, na, per_a, unit_a, total_a = a
+            kb, name_b, kind_b, vb, nb, per_b, unit_b, total_b = b
+            if ka == kb or ka in held:
+                continue
+            if kind_a == kind_b:
+                slip = (per_a >= SLIP_UNIT_RATIO * per_b and va >= SLIP_VALUE_RATIO * vb
+                        and na >= nb / SLIP_VALUE_RATIO)
+            else:
+                # (typed in a unit of a kN or more, or a kN/m or more: kip, kN, klf)
+                past = va >= (PAST_SHOP_SPREAD if kind_a == "spread" else PAST_SHOP_POINT)
+                slip = past and per_a >= 1000.0 and total_a >= SLIP_CROSS_RATIO * total_b
+            if not slip:
+                continue
+            held.add(ka)
+            what = "spread" if kind_a == kind_b == "spread" else "live"
+            ratio = va / vb if kind_a == kind_b else total_a / total_b
+            size_a = units.fmt(va, "force" if kind_a == "point" else "line_load", system)
+            size_b = units.fmt(vb, "force" if kind_b == "point" else "line_load", system)
+            r.hold(f"this {what} load{name_a} ({size_a}, typed in {unit_a}) is "
+                   f"{ratio:,.3g} times {kb}{name_b} ({size_b}, typed in {unit_b}"
+                   f"{'' if kind_a == kind_b else '; the forces in all'}): one of the two is most likely a unit slip (kip for "
+                   "lbf, kN for N, per inch for per foot, kN/mm for kN/m). A rating shares the "
+                   "rated load out in the proportions typed, so one would be posted far over "
+                   "what it carries and the other far under. Check both units; no rating is "
+                   "posted while they stand", f"{ka}.value" if ka.startswith("loads") else ka,
+                   f"{ka}{name_a} (typed in {unit_a}) is {ratio:,.3g} times {kb}{name_b} "
+                   f"(typed in {unit_b}): one of the two is most likely a unit slip. Check both")
+            break
 
 
 # A load's label that names the member's own weight
@@ -6252,7 +6279,7 @@ def parse_job_data(data: dict, filename: str = "", text: str | None = None) -> J
     _knife_edge_on_wood(r, material, bearing, bearings)
     upward = _upward_loads(r, raw_loads, loads, system)
     _tiny_loads(r, loads, raw_loads, system)
-    _huge_loads(r, loads, raw_loads, system)
+    _huge_loads(r, loads, raw_loads, system, data.get("moving"))
     _floor_dead_total(r, loads, raw_loads, tags, section, material, system, title, notes)
     _own_weight_twice(r, loads, self_weight)
     _under_a_millimetre(r, raw_loads, data.get("supports"))
