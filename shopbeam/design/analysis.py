@@ -1179,12 +1179,18 @@ def span_top_unchecked(job: Job, st, moment, ss=None) -> list[Unchecked]:
 SPAN_TOP_CHECK = "bending, top-flange loads between braces"
 
 
+# patterns (of the spans a patterned load is on) up to which the top-flange rule between
+# braces is worked out pattern by pattern; past it, from the envelopes (an upper bound)
+EXACT_TOP_PATTERNS = 16
+
+
 def span_top_demands(job: Job, st, ss, k: float, moment=None):
     """(start, end, moment, strength with the top-flange Cb, that Cb, where in words, where
     the moment is largest or None) of each
     unbraced length between braces that carries loads on its top flange (`span_top_limits`)
-    at the live-load factor k: every pattern (eq. F1-1's moments each the largest over the
-    patterns), every wheel position; `moment`: the diagram of a job with neither (else every
+    at the live-load factor k: every pattern (each worked out where there are up to
+    `EXACT_TOP_PATTERNS`, else eq. F1-1's moments each the largest over the patterns, an upper
+    bound), every wheel position; `moment`: the diagram of a job with neither (else every
     load on at k from `ss`). NOT_JUDGED where wheels roll on top beside patterned loads."""
     limits = span_top_limits(job, st)
     if not limits:
@@ -1196,7 +1202,10 @@ def span_top_demands(job: Job, st, ss, k: float, moment=None):
     if worst == NOT_JUDGED:
         return NOT_JUDGED
     patterned = ss is not None and bool(ss.spans) and not moving
-    env = loading.Envelopes(ss, k) if patterned else None
+    # few patterns: each worked out, the worst taken (exact); many: the envelope's bound
+    pats = ss.patterns if patterned and len(ss.patterns) <= EXACT_TOP_PATTERNS else None
+    moms = {p: ss.state(k, p).moment for p in pats} if pats else None
+    env = loading.Envelopes(ss, k) if patterned and pats is None else None
     m = moment if moment is not None and ss is None else (
         all_on_moment(ss, k) if ss is not None and not patterned else moment)
     out = []
@@ -1208,6 +1217,17 @@ def span_top_demands(job: Job, st, ss, k: float, moment=None):
                 continue
             demand, top, cb, p, jb = got
             where, at = rolling_where(jb, p), None
+        elif pats:  # each pattern with its own moment diagram and Cb: the worst
+            best = None
+            for p in pats:
+                t_, c_, d_ = span_top_strength(st.flexure, l1, moms[p], a, b)
+                r_ = d_ / t_ if t_ > 0 else math.inf
+                if best is None or r_ > best[0]:
+                    best = (r_, t_, c_, d_, p)
+            _, top, cb, demand, p = best
+            where = (" (the worst pattern of the patterned loads: "
+                     f"{loading.describe_pattern(ss, p, loading._fmt_for(job))})")
+            at = moms[p].extremes(a, b).abs_max_at
         elif patterned:  # an upper bound over the patterns, Cb included
             top, cb, demand = pattern_span_top(st.flexure, l1, ss, env, a, b)
             where = (" (the moments of eq. F1-1 each the largest over every pattern of the "
