@@ -2072,6 +2072,12 @@ def _bench(work: str, vise: str, spread: bool = False) -> str:
     # post load is what it says (a number typed small in the larger unit)
     ("-0.5 kN/m", "-10 N/mm", True, False),
     ("-1.25 klf", "-200 lbf", False, False),
+    # heavy loads typed small in the larger unit beside light ones (review 97): what they
+    # say; kN beside kg is no slip of a unit (they are 102 times apart, not 1000)
+    ("-20 plf", "-4 kip", False, False),
+    ("-15 kN/m", "-100 kg", False, False),
+    ("-20 kg/m", "-20 kN", False, False),
+    ("-1 kN/m", "-5 t", False, False),
 ])
 def test_a_live_load_typed_in_a_unit_far_too_large_holds_the_rating(work, vise, spread, held):
     # (two loads of one kind, units and values at least 10 times apart, numbers typed alike;
@@ -2103,3 +2109,25 @@ def test_wheels_typed_in_kip_beside_a_load_in_lbf_hold_the_rating():
     assert not capacity(job).rated
     fine = parse_job_text(text.replace('"-300 kip"', '"-300 lbf"'))
     assert not any("unit slip" in w.message for w in warnings(fine))
+
+
+@pytest.mark.parametrize("first, second, held", [
+    # a 300 kip pallet beside a 5000 lbf one: the numbers are not alike, but 300 kip is past
+    # any shop load (review 97: its posted figure rested on the slip)
+    ("-300 kip", "-5000 lbf", True),
+    ("-450 kip", "-200 lbf", True),
+    # a 4 kip hoist beside a 40 lbf box, a 20 kip column load beside a 200 lbf guard load
+    ("-4 kip", "-40 lbf", False),
+    ("-20 kip", "-200 lbf", False),
+    ("-20 kN", "-100 kg", False),
+    ("-5 t", "-50 kgf", False),
+])
+def test_two_point_loads_in_units_a_slip_apart(first, second, held):
+    from shopbeam.design.capacity import capacity
+
+    text = _bench("-1 lbf/ft", first).replace('[criteria]', '[[loads]]\ntype = "point"\n'
+                                                 f'at = "2 ft"\nvalue = "{second}"\n[criteria]')
+    job = parse_job_text(text)
+    said = [w for w in warnings(job) if "unit slip" in w.message]
+    assert bool(said) == held, [w.message for w in warnings(job)]
+    assert any("unit slip" in r for r in capacity(job).not_rated) == held

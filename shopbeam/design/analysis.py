@@ -1181,7 +1181,7 @@ SPAN_TOP_CHECK = "bending, top-flange loads between braces"
 
 # patterns (of the spans a patterned load is on) up to which the top-flange rule between
 # braces is worked out pattern by pattern; past it, from the envelopes (an upper bound)
-EXACT_TOP_PATTERNS = 16
+EXACT_TOP_PATTERNS = 64
 
 
 def span_top_demands(job: Job, st, ss, k: float, moment=None):

@@ -2400,13 +2400,14 @@ def _tiny_loads(r: _Reader, loads: list[Load], raw_loads, system: str) -> None:
                    "smaller than the largest load: most likely a unit slip. Fix its unit")
 
 
-# Two live loads of one kind whose units are this many times apart (kip and lbf, kN/mm and
-# kN/m, lbf/in and lbf/ft) and whose values are too, the numbers typed alike: the larger unit
+# Two live loads of one kind whose units are a slip apart (12: lbf/in and lbf/ft; 1000 or
+# more: kip and lbf, kN and N, kN/mm and kN/m) and whose values are ten times apart, the
+# numbers typed alike (within 3 times) or the larger past any shop load: the larger unit
 # typed for the smaller. Between a point and a spread load (no number to compare), the larger
 # also past what any shop member carries. A spread load in a unit of 500 kN/m or more (kN/mm,
 # MN/m) is no shop load at all.
-SLIP_UNIT_RATIO = 10.0
 SLIP_VALUE_RATIO = 10.0
+SLIP_NUMBER_RATIO = 3.0
 SLIP_CROSS_RATIO = 100.0
 PAST_SHOP_POINT = 444822.16152605  # N: 100 kip
 PAST_SHOP_SPREAD = 145939.02937206  # N/m: 10 kip/ft (klf)
@@ -2458,9 +2459,9 @@ def _typed_sizes(r: _Reader, raw_loads, loads, raw_moving) -> list[tuple]:
 def _huge_loads(r: _Reader, loads: list[Load], raw_loads, system: str, raw_moving=None) -> None:
     """Hold the rating where two live loads (wheels of [[moving]] among them) read as one
     typed in a unit far larger than the other's, as a unit slip does: of one kind, their
-    units and their values each at least ten times apart with the numbers typed alike (kip
-    beside lbf, lbf/in beside lbf/ft, kN/mm beside kN/m; not N/mm beside kN/m, the same
-    size); a point beside a spread load, a hundred times apart and the larger past what a
+    units a slip apart (kip beside lbf, lbf/in beside lbf/ft, kN/mm beside kN/m; not N/mm
+    beside kN/m, the same size, nor kN beside kg), their values at least ten times apart
+    and the numbers typed alike or the larger past any shop load; a point beside a spread load, a hundred times apart and the larger past what a
     shop member carries (100 kip, 10 klf). A rating shares the rated load out in the
     proportions typed, so with a slip one is posted far over what it carries and the other
     far under. A spread load in a unit of 500 kN/m or more (kN/mm) is held on its own."""
@@ -2483,8 +2484,15 @@ def _huge_loads(r: _Reader, loads: list[Load], raw_loads, system: str, raw_movin
             if ka == kb or ka in held:
                 continue
             if kind_a == kind_b:
-                slip = (per_a >= SLIP_UNIT_RATIO * per_b and va >= SLIP_VALUE_RATIO * vb
-                        and na >= nb / SLIP_VALUE_RATIO)
+                # units a slip's apart: an inch for a foot (12), a prefix or mm for m (1000)
+                units_ratio = per_a / per_b
+                slipped = 10.0 <= units_ratio <= 14.0 or units_ratio >= 300.0
+                past = va >= (PAST_SHOP_SPREAD if kind_a == "spread" else PAST_SHOP_POINT)
+                # the numbers typed alike (a heavy load is most often typed small in the
+                # larger unit: 4 kip beside 40 lbf is what it says), or the larger past any
+                # shop member's load
+                slip = (slipped and va >= SLIP_VALUE_RATIO * vb
+                        and (na >= nb / SLIP_NUMBER_RATIO or past))
             else:
                 # (typed in a unit of a kN or more, or a kN/m or more: kip, kN, klf)
                 past = va >= (PAST_SHOP_SPREAD if kind_a == "spread" else PAST_SHOP_POINT)
