@@ -1828,3 +1828,35 @@ deflection = "L/240"
     assert row.ratio == pytest.approx(0.921, abs=1e-3) and row.ok
     assert row.demand / lbf_ft == pytest.approx(42020, rel=1e-3)
     assert row.params["Cb"] == pytest.approx(0.879, abs=1e-3)
+
+
+def test_the_top_flange_rule_of_five_patterned_spans_is_the_worst_of_its_32_patterns():
+    # five 16 ft spans of a W12X26, 300 lbf/ft dead and 1500 lbf/ft live patterned, unbraced:
+    # the row is the worst of the 32 patterns, each with its own moment diagram and eq. F1-1
+    # Cb x 1/1.4 (the oracle below works each out from its own state), not the envelope's
+    # bound (1.043 there, a FAIL no pattern reaches)
+    from shopbeam.design.analysis import (SPAN_TOP_CHECK, pattern_span_top, span_top_limits,
+                                          span_top_strength)
+    from shopbeam.design.checks import strengths
+    from shopbeam.design.loading import Envelopes, state_set
+
+    sup = "".join(f'[[supports]]\nat = "{16 * i} ft"\ntype = "{"pin" if i == 0 else "roller"}"\n'
+                  for i in range(6))
+    text = ('schema = 1\ntitle = "five-span rail"\ntags = ["not-floor"]\n[beam]\nlength = "80 ft"\n'
+            'section = "W12X26"\nmaterial = "A992"\nself_weight = false\n' + sup
+            + '[[loads]]\ntype = "uniform"\nvalue = "-300 lbf/ft"\ncase = "dead"\n'
+            '[[loads]]\ntype = "uniform"\nvalue = "-1500 lbf/ft"\npatterned = true\n')
+    job = parse_job_text(text)
+    row = next(c for c in analyze(job).checks if c.name == SPAN_TOP_CHECK)
+    st, ss = strengths(job), state_set(job)
+    assert len(ss.patterns) == 32
+    env = Envelopes(ss, 1.0)
+    worst, bound = 0.0, 0.0
+    for a, b, l1 in span_top_limits(job, st):
+        for p in ss.patterns:
+            t, _c, m = span_top_strength(st.flexure, l1, ss.state(1.0, p).moment, a, b)
+            worst = max(worst, m / t)
+        t, _c, m = pattern_span_top(st.flexure, l1, ss, env, a, b)
+        bound = max(bound, m / t)
+    assert row.ratio == pytest.approx(worst, rel=1e-12)
+    assert row.ok and bound > 1 > worst
