@@ -804,8 +804,9 @@ def _span_top(job, st, limits, ss, k: float) -> tuple[str, ...]:
                        f"{f(a)} to {f(b)} reaches {f(demand, 'moment')}{where}, above "
                        f"the {f(top, 'moment')} its strength is with the loads bearing on the "
                        f"top flange (Cb {cb:.3f} = eq. F1-1 x 1/1.4, AISC 360-16 Commentary "
-                       "F1, from memory; the bending check takes them at the shear centre), "
-                       "and the factor is not lowered to it here. Brace the "
+                       "F1, from memory; the bending check takes them at the shear centre)"
+                       + (", and the factor is not lowered to it here" if k > 0 else "")
+                       + ". Brace the "
                        "member at the loads (beam.braces), or hang them below the flange "
                        "(flange = \"bottom\" on a point load; a spread load hung below goes "
                        "in as point loads at its hangers)")
@@ -902,8 +903,8 @@ def _span_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
     check is among the checks at the answer (a rating on the lower strength, not NOT RATED),
     as for a cantilever (`_cantilever_top_rate`). The largest moment is convex in k and Cb
     moves little with it: one bracketed root (Brent's method) from k = 0, where the dead
-    loads alone must pass it (else `_span_top` says why nothing is posted), then its passing
-    side."""
+    loads alone must pass it (else nothing can be posted: k = 0, the fixed loads fail alone),
+    then its passing side."""
     k = res.factor
     if res.evaluation is None or not math.isfinite(k) or k <= 0 \
             or not span_top_limits(job, st):
