@@ -308,9 +308,10 @@ def analyze(job: Job) -> Result:
     checks += hogging_checks(job, st, ss)
     # loads on the top flange of an unbraced length between braces: the strength that
     # loading leaves it, where it is worked out
-    checks += span_top_checks(job, st, ss, 1.0, entered.moment)
+    top_got = span_top_demands(job, st, ss, 1.0, entered.moment)
+    checks += span_top_rows(job, st, top_got)
     unchecked = unchecked_for(job, st) + braced_hogging(job, st, sol.moment, ss) \
-        + span_top_unchecked(job, st, sol.moment, ss)
+        + span_top_unchecked(job, st, top_got)
     notes = connection_notes(job, sol) + member_notes(job) + cantilever_notes(job, sol, checks) \
         + braces_note(job, st, sol.moment) + couple_notes(job, entered)
     # every limit state not checked is named in the report, as on the label and in the JSON
@@ -338,9 +339,9 @@ def analyze(job: Job) -> Result:
         if extra:  # patterned or moving loads: the state shown as governing is the one that
             # governs after the uplift states are taken in (the governing check's own)
             top = max(checks, key=lambda c: c.ratio)
-            got = next((g for state, g in reversed(states) if top.state.endswith(state)), None)
+            st_words, got = next(((state, g) for state, g in reversed(states)
+                                  if top.state.endswith(state)), ("", None))
             if got is not None:
-                st_words = next(state for state, g in states if g is got)
                 if got.governing_words:
                     st_words += "; " + got.governing_words
                 if moving_at is not None:
@@ -1150,18 +1151,14 @@ def pattern_span_top(fl, l1: float, ss, env, a: float, b: float
     return min(fl.cap, cb * l1) / fl.omega, cb, mmax
 
 
-def span_top_unchecked(job: Job, st, moment, ss=None) -> list[Unchecked]:
+def span_top_unchecked(job: Job, st, got) -> list[Unchecked]:
     """Loads on the top flange of an unbraced length between braces whose strength under that
-    loading is not worked out (wheels rolling on the top flange beside patterned loads):
-    listed, and no rating is posted. Where it is worked out it is a check
-    (`span_top_checks`)."""
-    limits = span_top_limits(job, st)
-    rolling = list(limits) if job.moving else []
-    if not rolling:
+    loading is not worked out (wheels rolling on the top flange beside patterned loads: `got`,
+    the job's `span_top_demands`, is NOT_JUDGED): listed, and no rating is posted. Where it
+    is worked out it is a check (`span_top_rows`)."""
+    if got != NOT_JUDGED:
         return []
-    ss = ss or loading.state_set(job)  # the caller's, when it has one
-    if moving_top_worst(job, st, ss, 1.0, rolling) != NOT_JUDGED:
-        return []
+    rolling = span_top_limits(job, st)
     f = lambda x, q="length": units.fmt(x, q, job.units)  # noqa: E731
     return [Unchecked(
         TOP_FLANGE_LTB,
@@ -1206,8 +1203,8 @@ def span_top_demands(job: Job, st, ss, k: float, moment=None):
     pats = ss.patterns if patterned and len(ss.patterns) <= EXACT_TOP_PATTERNS else None
     moms = {p: ss.state(k, p).moment for p in pats} if pats else None
     env = loading.Envelopes(ss, k) if patterned and pats is None else None
-    m = moment if moment is not None and ss is None else (
-        all_on_moment(ss, k) if ss is not None and not patterned else moment)
+    # (a job with neither patterns nor wheels: every load on at k, or the diagram given)
+    m = all_on_moment(ss, k) if ss is not None and not patterned and not moving else moment
     out = []
     for a, b, l1 in limits:
         where = ""
@@ -1241,12 +1238,17 @@ def span_top_demands(job: Job, st, ss, k: float, moment=None):
 
 
 def span_top_checks(job: Job, st, ss, k: float = 1.0, moment=None) -> list[Check]:
+    """`span_top_rows` of the job's `span_top_demands` at the factor k."""
+    return span_top_rows(job, st, span_top_demands(job, st, ss, k, moment))
+
+
+def span_top_rows(job: Job, st, got) -> list[Check]:
     """The check of the unbraced lengths between braces whose loads bear on the top flange
-    (edge), where that loading lowers the strength below the bending check's cap: the length
-    whose ratio is largest (one row, as the bending check names the length that governs): its
-    largest moment against Mn / Omega with Cb x 1/1.4 (AISC 360-16 Commentary F1, from memory;
-    the bending check takes the loads at the shear centre)."""
-    got = span_top_demands(job, st, ss, k, moment)
+    (edge), where that loading lowers the strength below the bending check's cap (`got`: their
+    `span_top_demands`): the length whose ratio is largest (one row, as the bending check
+    names the length that governs): its largest moment against Mn / Omega with Cb x 1/1.4
+    (AISC 360-16 Commentary F1, from memory; the bending check takes the loads at the shear
+    centre)."""
     if got == NOT_JUDGED:
         return []
     fl = st.flexure

@@ -36,7 +36,7 @@ from shopbeam.design.analysis import (analyze, cantilever_top_limits, hogging_de
                                        hogging_source,
                                        moment_ranges, wheels_count_on_top,
                                        span_top_limits, NOT_JUDGED, SPAN_TOP_CHECK,
-                                       span_top_checks, span_top_demands,
+                                       span_top_checks, span_top_demands, span_top_rows,
                                        top_words, unchecked_for, wheels_with_top_words)
 from shopbeam.design.analysis import bending_s
 from shopbeam.design.analysis import to_json as base_json
@@ -910,27 +910,29 @@ def _span_top_rate(job, section, ss, st, res: CapacityResult) -> CapacityResult:
             or not span_top_limits(job, st):
         return res
 
-    def ratio(kk):
-        got = span_top_demands(job, st, ss, kk)
+    def ratio_of(got):
         if got == NOT_JUDGED:
             return None
         # (no entry: no moment on a length loaded on top, as wheels with the live loads off)
         return max(((d / t if t > 0 else math.inf) for _, _, d, t, *_ in got), default=0.0)
 
-    def listed(r: CapacityResult, kk: float) -> CapacityResult:
-        c = span_top_checks(job, st, ss, kk)
-        return replace(r, evaluation=replace(r.evaluation,
-                                             checks=tuple(r.evaluation.checks) + tuple(c)))
+    def ratio(kk):
+        return ratio_of(span_top_demands(job, st, ss, kk))
 
-    rk = ratio(k)
+    got_k = span_top_demands(job, st, ss, k)
+    # listed at the factor found where it does not come first
+    listed = replace(res, evaluation=replace(res.evaluation, checks=tuple(
+        res.evaluation.checks) + tuple(span_top_rows(job, st, got_k))))
+    rk = ratio_of(got_k)
     if rk is None or rk <= 1.0:
-        return listed(res, k)  # it does not come first: listed at the factor found
-    r0 = ratio(0.0)
+        return listed
+    got_0 = span_top_demands(job, st, ss, 0.0)
+    r0 = ratio_of(got_0)
     if r0 is None:
-        return listed(res, k)
+        return listed
     if r0 >= 1.0:  # the dead loads alone pass it (`_span_top` says so): no factor passes
         e0 = evaluate(job, 0.0, section, ss, st)
-        e0 = replace(e0, checks=tuple(e0.checks) + tuple(span_top_checks(job, st, ss, 0.0)))
+        e0 = replace(e0, checks=tuple(e0.checks) + tuple(span_top_rows(job, st, got_0)))
         return CapacityResult(job, 0.0, e0, "fixed loads fail alone",
                               _fails_alone(e0, "", job.units))
     k2 = passing_root(ratio, k, rk, r0)

@@ -885,7 +885,7 @@ def _batched(job, base, parts, cands, with_capacity):
     # it (analysis.top_flange_checks, about 2.5 L) is in the full check, not the batch
     # (and a length between braces loaded on its top: Cb x 1/1.4, analysis.span_top_checks)
     on_top = not (job.braced or job.restrained) and any(
-        loaded_on_top(job, a, b) for a, b, free in top_load_segments(job, empty))
+        loaded_on_top(job, a, b) for a, b, _free in top_load_segments(job, empty))
     exact = not springs and not moving and not hung and not on_top
     spans = segments(empty)
     n_ratio, d_abs, _ = deflection_rule(job)
